@@ -1,0 +1,27 @@
+import { z } from 'zod';
+
+// Server configuration from the environment, with the defaults documented in .env.example.
+const schema = z.object({
+  DB_HOST: z.string().default('127.0.0.1'),
+  DB_PORT: z.coerce.number().int().positive().default(3407),
+  DB_NAME: z
+    .string()
+    .regex(/^[a-z0-9_]+$/)
+    .default('baskwell'),
+  DB_USER: z.string().default('baskwell'),
+  DB_PASSWORD: z.string().default('baskwell-dev'),
+  SMTP_HOST: z.string().default('127.0.0.1'),
+  SMTP_PORT: z.coerce.number().int().positive().default(2526),
+  MAIL_FROM: z.string().default('Baskwell <no-reply@baskwell.example>'),
+  FAKE_SMTP_HTTP: z.string().default('http://127.0.0.1:2580'),
+  APP_URL: z.string().url().default('http://localhost:3000'),
+});
+
+export type ServerConfig = z.infer<typeof schema>;
+
+let cached: ServerConfig | undefined;
+
+export function config(): ServerConfig {
+  cached ??= schema.parse(process.env);
+  return cached;
+}

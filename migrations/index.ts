@@ -1,0 +1,14 @@
+import type { QueryInterface } from 'sequelize';
+import * as m0001 from './0001-foundation';
+
+export type Migration = {
+  name: string;
+  up: (p: { context: QueryInterface }) => Promise<void>;
+  down: (p: { context: QueryInterface }) => Promise<void>;
+};
+
+/**
+ * Every migration, in order. An explicit list (not a glob) so umzug finds them the same way
+ * under tsx, vitest and the Next bundler. Add new ones at the end; never edit one that has shipped.
+ */
+export const migrations: Migration[] = [{ name: '0001-foundation', ...m0001 }];

@@ -1,0 +1,31 @@
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
+
+/** A shop, zoo, rescue or household: the unit that owns people, enclosures and catalogues. */
+export class Organisation extends Model<
+  InferAttributes<Organisation>,
+  InferCreationAttributes<Organisation>
+> {
+  declare id: CreationOptional<number>;
+  declare name: string;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static register(sequelize: Sequelize) {
+    Organisation.init(
+      {
+        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+        name: { type: DataTypes.STRING(120), allowNull: false },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'organisations' },
+    );
+  }
+}
