@@ -1,5 +1,6 @@
 import type { QueryInterface } from 'sequelize';
 import * as m0001 from './0001-foundation';
+import * as m0002 from './0002-sign-in-attempts';
 
 export type Migration = {
   name: string;
@@ -11,4 +12,7 @@ export type Migration = {
  * Every migration, in order. An explicit list (not a glob) so umzug finds them the same way
  * under tsx, vitest and the Next bundler. Add new ones at the end; never edit one that has shipped.
  */
-export const migrations: Migration[] = [{ name: '0001-foundation', ...m0001 }];
+export const migrations: Migration[] = [
+  { name: '0001-foundation', ...m0001 },
+  { name: '0002-sign-in-attempts', ...m0002 },
+];

@@ -3,9 +3,11 @@ import { Enclosure } from './enclosure';
 import { Invitation } from './invitation';
 import { Membership } from './membership';
 import { Organisation } from './organisation';
+import { SignInAttempt } from './sign-in-attempt';
 import { User } from './user';
 
 export { Enclosure, Invitation, Membership, Organisation, User };
+export { SignInAttempt };
 export { ROLES, type Role } from './membership';
 
 const initialised = new WeakSet<Sequelize>();
@@ -19,6 +21,7 @@ export function initModels(sequelize: Sequelize): void {
   Membership.register(sequelize);
   Invitation.register(sequelize);
   Enclosure.register(sequelize);
+  SignInAttempt.register(sequelize);
 
   Organisation.hasMany(Membership, { foreignKey: 'organisationId', as: 'memberships' });
   Membership.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });
