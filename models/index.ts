@@ -5,8 +5,12 @@ import { Membership } from './membership';
 import { Organisation } from './organisation';
 import { SignInAttempt } from './sign-in-attempt';
 import { User } from './user';
+import { Design } from './design';
+import { ShareLink } from './share-link';
+import { Variant } from './variant';
 
 export { Enclosure, Invitation, Membership, Organisation, User };
+export { Design, ShareLink, Variant };
 export { SignInAttempt };
 export { ROLES, type Role } from './membership';
 
@@ -21,6 +25,9 @@ export function initModels(sequelize: Sequelize): void {
   Membership.register(sequelize);
   Invitation.register(sequelize);
   Enclosure.register(sequelize);
+  Design.register(sequelize);
+  Variant.register(sequelize);
+  ShareLink.register(sequelize);
   SignInAttempt.register(sequelize);
 
   Organisation.hasMany(Membership, { foreignKey: 'organisationId', as: 'memberships' });
@@ -30,4 +37,11 @@ export function initModels(sequelize: Sequelize): void {
   Invitation.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });
   Enclosure.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });
   Enclosure.belongsTo(User, { foreignKey: 'keeperId', as: 'keeper' });
+  Enclosure.hasMany(Design, { foreignKey: 'enclosureId', as: 'designs' });
+  Design.belongsTo(Enclosure, { foreignKey: 'enclosureId', as: 'enclosure' });
+  Design.hasMany(Variant, { foreignKey: 'designId', as: 'variants' });
+  Variant.belongsTo(Design, { foreignKey: 'designId', as: 'design' });
+  Variant.belongsTo(User, { foreignKey: 'updatedById', as: 'updatedBy' });
+  Variant.hasMany(ShareLink, { foreignKey: 'variantId', as: 'shareLinks' });
+  ShareLink.belongsTo(Variant, { foreignKey: 'variantId', as: 'variant' });
 }
