@@ -2,6 +2,7 @@ import type { QueryInterface } from 'sequelize';
 import * as m0001 from './0001-foundation';
 import * as m0002 from './0002-sign-in-attempts';
 import * as m0003 from './0003-designs-variants-shares';
+import * as m0004 from './0004-species-lamp-types';
 
 export type Migration = {
   name: string;
@@ -17,4 +18,5 @@ export const migrations: Migration[] = [
   { name: '0001-foundation', ...m0001 },
   { name: '0002-sign-in-attempts', ...m0002 },
   { name: '0003-designs-variants-shares', ...m0003 },
+  { name: '0004-species-lamp-types', ...m0004 },
 ];

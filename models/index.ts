@@ -8,10 +8,14 @@ import { User } from './user';
 import { Design } from './design';
 import { ShareLink } from './share-link';
 import { Variant } from './variant';
+import { CatalogueSeeding } from './catalogue-seeding';
+import { LampType } from './lamp-type';
+import { SpeciesSheet } from './species';
 
 export { Enclosure, Invitation, Membership, Organisation, User };
 export { Design, ShareLink, Variant };
 export { SignInAttempt };
+export { CatalogueSeeding, LampType, SpeciesSheet };
 export { ROLES, type Role } from './membership';
 
 const initialised = new WeakSet<Sequelize>();
@@ -29,6 +33,9 @@ export function initModels(sequelize: Sequelize): void {
   Variant.register(sequelize);
   ShareLink.register(sequelize);
   SignInAttempt.register(sequelize);
+  SpeciesSheet.register(sequelize);
+  LampType.register(sequelize);
+  CatalogueSeeding.register(sequelize);
 
   Organisation.hasMany(Membership, { foreignKey: 'organisationId', as: 'memberships' });
   Membership.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });
@@ -44,4 +51,8 @@ export function initModels(sequelize: Sequelize): void {
   Variant.belongsTo(User, { foreignKey: 'updatedById', as: 'updatedBy' });
   Variant.hasMany(ShareLink, { foreignKey: 'variantId', as: 'shareLinks' });
   ShareLink.belongsTo(Variant, { foreignKey: 'variantId', as: 'variant' });
+  Organisation.hasMany(SpeciesSheet, { foreignKey: 'organisationId', as: 'speciesSheets' });
+  SpeciesSheet.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });
+  Organisation.hasMany(LampType, { foreignKey: 'organisationId', as: 'lampTypes' });
+  LampType.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });
 }

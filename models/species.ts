@@ -1,0 +1,76 @@
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
+
+/**
+ * A species sheet of one organisation: the light and heat a species needs, with where each figure comes
+ * from. Ranges are stored as min/max pairs (°C, µW/cm², hours). `sourcesJson` is a JSON array of
+ * `{ citation, confidence, covers }` (see lib/species/schema.ts). Owners and staff edit; keepers read.
+ */
+export class SpeciesSheet extends Model<
+  InferAttributes<SpeciesSheet>,
+  InferCreationAttributes<SpeciesSheet>
+> {
+  declare id: CreationOptional<number>;
+  declare organisationId: number;
+  declare commonName: string;
+  declare scientificName: string;
+  /** Ferguson et al. 2010 UV zone, 1..4. */
+  declare uvZone: number;
+  /** Optional basking-spot target for keepers with a broadband UVB meter, µW/cm². */
+  declare uvbTargetMinUw: number | null;
+  declare uvbTargetMaxUw: number | null;
+  declare baskingSurfaceMinC: number;
+  declare baskingSurfaceMaxC: number;
+  declare warmAirMinC: number;
+  declare warmAirMaxC: number;
+  declare coolAirMinC: number;
+  declare coolAirMaxC: number;
+  declare nightMinC: number | null;
+  declare photoperiodMinH: number | null;
+  declare photoperiodMaxH: number | null;
+  declare notes: string | null;
+  declare sourcesJson: string;
+  /** The starting sheet this row was copied from (null: written by the organisation). */
+  declare seedKey: string | null;
+  declare createdById: number | null;
+  declare updatedById: number | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static register(sequelize: Sequelize) {
+    SpeciesSheet.init(
+      {
+        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+        organisationId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+        commonName: { type: DataTypes.STRING(120), allowNull: false },
+        scientificName: { type: DataTypes.STRING(160), allowNull: false },
+        uvZone: { type: DataTypes.TINYINT.UNSIGNED, allowNull: false },
+        uvbTargetMinUw: { type: DataTypes.FLOAT, allowNull: true },
+        uvbTargetMaxUw: { type: DataTypes.FLOAT, allowNull: true },
+        baskingSurfaceMinC: { type: DataTypes.FLOAT, allowNull: false },
+        baskingSurfaceMaxC: { type: DataTypes.FLOAT, allowNull: false },
+        warmAirMinC: { type: DataTypes.FLOAT, allowNull: false },
+        warmAirMaxC: { type: DataTypes.FLOAT, allowNull: false },
+        coolAirMinC: { type: DataTypes.FLOAT, allowNull: false },
+        coolAirMaxC: { type: DataTypes.FLOAT, allowNull: false },
+        nightMinC: { type: DataTypes.FLOAT, allowNull: true },
+        photoperiodMinH: { type: DataTypes.FLOAT, allowNull: true },
+        photoperiodMaxH: { type: DataTypes.FLOAT, allowNull: true },
+        notes: { type: DataTypes.TEXT, allowNull: true },
+        sourcesJson: { type: DataTypes.TEXT, allowNull: false },
+        seedKey: { type: DataTypes.STRING(60), allowNull: true },
+        createdById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        updatedById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'species_sheets' },
+    );
+  }
+}
