@@ -1,0 +1,2 @@
+/** Public API of the light-and-heat engine (pure TypeScript; see simulation/README.md). */
+export * from './model';

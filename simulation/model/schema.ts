@@ -1,0 +1,158 @@
+/**
+ * The design file, version 1 (BRIEF §3), as a zod schema: the single source of truth for the types.
+ * Objects are strict: an unknown field is an error naming its path. Optional fields stay optional in
+ * the stored document; the engine applies the documented defaults (see resolve.ts), so a saved file
+ * keeps exactly what the user wrote.
+ */
+import { z } from 'zod';
+import { LAMP_TECH_IDS } from './techs';
+
+export const DESIGN_FORMAT = 'baskwell.design';
+export const DESIGN_VERSION = 1;
+
+/** Coordinates may lie outside the enclosure (a lamp on the lid) but within a sane range, cm. */
+const coord = z.number().finite().min(-5000).max(5000);
+const size = (max: number) => z.number().finite().gt(0).max(max);
+const transmission = z.number().min(0).max(1);
+const id = z.string().trim().min(1, 'must not be empty').max(100);
+const name = z.string().max(200).optional();
+
+export const decayCurveSchema = z.union([
+  z.strictObject({ halfLifeMonths: z.number().finite().gt(0).max(1e9) }),
+  z.strictObject({
+    points: z
+      .array(z.tuple([z.number().finite().min(0).max(600), z.number().finite().min(0).max(2)]))
+      .min(1)
+      .max(200)
+      .refine((p) => p.every((pt, k) => k === 0 || pt[0] > p[k - 1]![0]), 'months must increase'),
+  }),
+]);
+
+export const lampSchema = z
+  .strictObject({
+    type: z.literal('lamp'),
+    id,
+    name,
+    tech: z.enum(LAMP_TECH_IDS),
+    form: z.enum(['tube', 'bulb']),
+    /** Bulb: the emitting point. Tube: the centre of the tube (it runs along x). */
+    x: coord,
+    y: coord,
+    /** Tube length, cm (required for tubes). */
+    length: size(1000).optional(),
+    uvbAt30: z.number().finite().min(0).max(100000).optional(),
+    uviPerUvb: z.number().finite().min(0).max(1).optional(),
+    reflectorGain: z.number().finite().min(1).max(10).optional(),
+    beamDeg: z.number().finite().min(1).max(360).optional(),
+    watts: z.number().finite().min(0).max(5000).optional(),
+    ageMonths: z.number().finite().min(0).max(600).optional(),
+    radiantFraction: z.number().min(0).max(1).optional(),
+    decay: decayCurveSchema.optional(),
+  })
+  .superRefine((lamp, ctx) => {
+    if (lamp.form === 'tube' && lamp.length === undefined) {
+      ctx.addIssue({ code: 'custom', path: ['length'], message: 'a tube needs a length' });
+    }
+  });
+
+/** A thin barrier given as a segment: mesh screen or glass pane. */
+const segmentFields = { id, name, x1: coord, y1: coord, x2: coord, y2: coord };
+
+export const screenSchema = z.strictObject({
+  type: z.literal('screen'),
+  ...segmentFields,
+  /** Default: open area of a 1.0 mm / 0.25 mm woven mesh, 0.64 (ISO 9044). */
+  uvbTransmission: transmission.optional(),
+  /** Default: the same as uvbTransmission (a mesh passes its open area at every wavelength). */
+  irTransmission: transmission.optional(),
+});
+
+export const glassSchema = z.strictObject({
+  type: z.literal('glass'),
+  ...segmentFields,
+  /** Default 0: window glass passes no UVB (Duarte et al. 2009). */
+  uvbTransmission: transmission.optional(),
+  /** Default: per lamp technology (glass passes near-infrared only), see LAMP_TECHS.glassIrTransmission. */
+  irTransmission: transmission.optional(),
+});
+
+export const perchSchema = z.strictObject({
+  type: z.literal('perch'),
+  ...segmentFields,
+  thickness: size(100),
+});
+
+const boxFields = { id, name, x: coord, y: coord, width: size(1000), height: size(1000) };
+
+export const ledgeSchema = z.strictObject({ type: z.literal('ledge'), ...boxFields });
+export const hideSchema = z.strictObject({ type: z.literal('hide'), ...boxFields });
+export const foliageSchema = z.strictObject({
+  type: z.literal('foliage'),
+  ...boxFields,
+  /** Default 0.3 (common practice, no published source). */
+  uvbTransmission: transmission.optional(),
+  /** Default: the same as uvbTransmission. */
+  irTransmission: transmission.optional(),
+});
+
+export const designObjectSchema = z.discriminatedUnion('type', [
+  lampSchema,
+  screenSchema,
+  glassSchema,
+  perchSchema,
+  ledgeSchema,
+  hideSchema,
+  foliageSchema,
+]);
+
+export const enclosureSchema = z.strictObject({
+  width: size(1000),
+  height: size(1000),
+  depth: size(1000),
+  /** Default 24 °C. */
+  roomTempC: z.number().finite().min(-20).max(50).optional(),
+});
+
+export const probePointSchema = z.strictObject({
+  id,
+  x: coord,
+  y: coord,
+  label: z.string().max(200).optional(),
+});
+
+function checkUniqueIds(items: { id: string }[], key: string, ctx: z.RefinementCtx) {
+  const seen = new Set<string>();
+  items.forEach((item, i) => {
+    if (seen.has(item.id)) {
+      ctx.addIssue({ code: 'custom', path: [key, i, 'id'], message: `duplicate id "${item.id}"` });
+    }
+    seen.add(item.id);
+  });
+}
+
+export const designSchema = z
+  .strictObject({
+    format: z.literal(DESIGN_FORMAT),
+    version: z.literal(DESIGN_VERSION),
+    enclosure: enclosureSchema,
+    objects: z.array(designObjectSchema).max(500),
+    probes: z.array(probePointSchema).max(100).optional(),
+    notes: z.string().max(20000).optional(),
+  })
+  .superRefine((d, ctx) => {
+    checkUniqueIds(d.objects, 'objects', ctx);
+    if (d.probes) checkUniqueIds(d.probes, 'probes', ctx);
+  });
+
+export type Design = z.infer<typeof designSchema>;
+export type DesignObject = z.infer<typeof designObjectSchema>;
+export type LampObject = z.infer<typeof lampSchema>;
+export type ScreenObject = z.infer<typeof screenSchema>;
+export type GlassObject = z.infer<typeof glassSchema>;
+export type PerchObject = z.infer<typeof perchSchema>;
+export type LedgeObject = z.infer<typeof ledgeSchema>;
+export type HideObject = z.infer<typeof hideSchema>;
+export type FoliageObject = z.infer<typeof foliageSchema>;
+export type ProbePoint = z.infer<typeof probePointSchema>;
+export type Enclosure = z.infer<typeof enclosureSchema>;
+export type DecayCurveInput = z.infer<typeof decayCurveSchema>;

@@ -1,0 +1,19 @@
+import { z } from 'zod';
+
+const range = (lo: number, hi: number) =>
+  z
+    .tuple([z.number().finite().min(lo).max(hi), z.number().finite().min(lo).max(hi)])
+    .refine(([a, b]) => a <= b, 'the lower bound must not exceed the upper bound');
+
+/** A species sheet: what an animal needs (temperatures in °C, UV zone of Ferguson et al. 2010). */
+export const speciesSheetSchema = z.strictObject({
+  name: z.string().trim().min(1).max(200),
+  uvZone: z.union([z.literal(1), z.literal(2), z.literal(3), z.literal(4)]),
+  baskingSurfaceC: range(-10, 80),
+  coolEndC: range(-10, 80),
+  nightMinC: z.number().finite().min(-10).max(60).optional(),
+  /** Optional broadband UVB target at the basking spot, µW/cm². */
+  uvbTargetUw: range(0, 100000).optional(),
+});
+
+export type SpeciesSheet = z.infer<typeof speciesSheetSchema>;
