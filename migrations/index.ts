@@ -3,6 +3,7 @@ import * as m0001 from './0001-foundation';
 import * as m0002 from './0002-sign-in-attempts';
 import * as m0003 from './0003-designs-variants-shares';
 import * as m0004 from './0004-species-lamp-types';
+import * as m0005 from './0005-lamp-log';
 
 export type Migration = {
   name: string;
@@ -19,4 +20,5 @@ export const migrations: Migration[] = [
   { name: '0002-sign-in-attempts', ...m0002 },
   { name: '0003-designs-variants-shares', ...m0003 },
   { name: '0004-species-lamp-types', ...m0004 },
+  { name: '0005-lamp-log', ...m0005 },
 ];

@@ -11,11 +11,17 @@ import { Variant } from './variant';
 import { CatalogueSeeding } from './catalogue-seeding';
 import { LampType } from './lamp-type';
 import { SpeciesSheet } from './species';
+import { Lamp } from './lamp';
+import { LampReminder } from './lamp-reminder';
+import { MailMessage } from './mail-message';
+import { Reading } from './reading';
+import { Upload } from './upload';
 
 export { Enclosure, Invitation, Membership, Organisation, User };
 export { Design, ShareLink, Variant };
 export { SignInAttempt };
 export { CatalogueSeeding, LampType, SpeciesSheet };
+export { Lamp, LampReminder, MailMessage, Reading, Upload };
 export { ROLES, type Role } from './membership';
 
 const initialised = new WeakSet<Sequelize>();
@@ -36,6 +42,11 @@ export function initModels(sequelize: Sequelize): void {
   SpeciesSheet.register(sequelize);
   LampType.register(sequelize);
   CatalogueSeeding.register(sequelize);
+  Lamp.register(sequelize);
+  Reading.register(sequelize);
+  Upload.register(sequelize);
+  MailMessage.register(sequelize);
+  LampReminder.register(sequelize);
 
   Organisation.hasMany(Membership, { foreignKey: 'organisationId', as: 'memberships' });
   Membership.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });
@@ -55,4 +66,11 @@ export function initModels(sequelize: Sequelize): void {
   SpeciesSheet.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });
   Organisation.hasMany(LampType, { foreignKey: 'organisationId', as: 'lampTypes' });
   LampType.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });
+  // Lamp log.
+  Enclosure.hasMany(Lamp, { foreignKey: 'enclosureId', as: 'lamps' });
+  Lamp.belongsTo(Enclosure, { foreignKey: 'enclosureId', as: 'enclosure' });
+  Lamp.belongsTo(LampType, { foreignKey: 'lampTypeId', as: 'lampType' });
+  Lamp.hasMany(Reading, { foreignKey: 'lampId', as: 'readings' });
+  Reading.belongsTo(Lamp, { foreignKey: 'lampId', as: 'lamp' });
+  Upload.belongsTo(Enclosure, { foreignKey: 'enclosureId', as: 'enclosure' });
 }
