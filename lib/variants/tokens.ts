@@ -1,4 +1,4 @@
-import { createHash, randomBytes, timingSafeEqual } from 'node:crypto';
+import { createHash, randomBytes } from 'node:crypto';
 
 /** 32 random bytes = 256 bits, well above the 128 bits that make a link unguessable. */
 export const SHARE_TOKEN_BYTES = 32;
@@ -22,13 +22,6 @@ export function hashShareToken(token: string): string {
 /** Cheap shape check so malformed paths never reach the database. */
 export function isWellFormedShareToken(token: string): boolean {
   return TOKEN_PATTERN.test(token);
-}
-
-/** Constant-time comparison of two hex hashes (the lookup is by hash, this guards the final match). */
-export function sameHash(a: string, b: string): boolean {
-  const ab = Buffer.from(a, 'hex');
-  const bb = Buffer.from(b, 'hex');
-  return ab.length === bb.length && ab.length > 0 && timingSafeEqual(ab, bb);
 }
 
 export type ShareLinkState = 'active' | 'revoked' | 'expired';
