@@ -1,0 +1,319 @@
+// Every studio command in one place: the toolbar, the palette, the menus, the help panel and the
+// keyboard all read this list, so a command has exactly one label, one shortcut set and one action.
+import * as A from '../state/actions';
+import type { Tool } from '../state/session';
+import type { StudioStore } from '../state/store';
+import { canonicalShortcut, normaliseKey, type KeyLike } from './shortcuts';
+
+export interface CommandContext {
+  store: StudioStore;
+  /** Saves at once instead of waiting for autosave. */
+  saveNow?: () => void;
+}
+
+export type CommandGroup = 'Tools' | 'Edit' | 'Arrange' | 'View' | 'Fields' | 'Units' | 'Help';
+
+export interface Command {
+  id: string;
+  label: string;
+  group: CommandGroup;
+  /** Canonical shortcuts (see shortcuts.ts); the first is the one shown. */
+  shortcuts: string[];
+  run(ctx: CommandContext): void;
+  enabled?(ctx: CommandContext): boolean;
+  /** For tools and toggles: whether it is currently on. */
+  checked?(ctx: CommandContext): boolean;
+  /** Let the key through while typing in a field (only for Mod shortcuts that make sense there). */
+  allowInInputs?: boolean;
+}
+
+const hasSelection = ({ store }: CommandContext) => store.session.selection.length > 0;
+
+function tool(id: Tool, label: string, key: string): Command {
+  return {
+    id: `tool.${id}`,
+    label,
+    group: 'Tools',
+    shortcuts: [key],
+    run: ({ store }) => A.setTool(store, id),
+    checked: ({ store }) => store.session.tool === id,
+  };
+}
+
+function nudge(dir: 'Left' | 'Right' | 'Up' | 'Down', big: boolean): Command {
+  const dx = dir === 'Left' ? -1 : dir === 'Right' ? 1 : 0;
+  const dy = dir === 'Down' ? -1 : dir === 'Up' ? 1 : 0;
+  const k = big ? 10 : 1;
+  return {
+    id: `edit.nudge${dir}${big ? '10' : ''}`,
+    label: `Nudge ${dir.toLowerCase()}${big ? ' ×10' : ''}`,
+    group: 'Arrange',
+    shortcuts: [`${big ? 'Shift+' : ''}Arrow${dir}`],
+    run: ({ store }) => A.nudgeSelection(store, dx * k, dy * k),
+    enabled: hasSelection,
+  };
+}
+
+export const COMMANDS: readonly Command[] = [
+  tool('select', 'Select', 'V'),
+  tool('pan', 'Pan', 'H'),
+  tool('lamp', 'Lamp', 'L'),
+  tool('screen', 'Screen (mesh)', 'S'),
+  tool('glass', 'Glass', 'G'),
+  tool('perch', 'Perch', 'P'),
+  tool('ledge', 'Ledge', 'E'),
+  tool('hide', 'Hide', 'D'),
+  tool('foliage', 'Foliage', 'F'),
+  tool('probe', 'Probe', 'I'),
+  tool('ruler', 'Ruler', 'R'),
+  {
+    id: 'edit.undo',
+    label: 'Undo',
+    group: 'Edit',
+    shortcuts: ['Mod+Z'],
+    run: ({ store }) => store.undo(),
+    enabled: ({ store }) => store.canUndo(),
+  },
+  {
+    id: 'edit.redo',
+    label: 'Redo',
+    group: 'Edit',
+    shortcuts: ['Mod+Shift+Z', 'Mod+Y'],
+    run: ({ store }) => store.redo(),
+    enabled: ({ store }) => store.canRedo(),
+  },
+  {
+    id: 'edit.duplicate',
+    label: 'Duplicate',
+    group: 'Edit',
+    shortcuts: ['Mod+D'],
+    run: ({ store }) => A.duplicateSelection(store),
+    enabled: ({ store }) => A.selectedObjects(store).length > 0,
+  },
+  {
+    id: 'edit.delete',
+    label: 'Delete',
+    group: 'Edit',
+    shortcuts: ['Delete', 'Backspace'],
+    run: ({ store }) => A.deleteSelection(store),
+    enabled: hasSelection,
+  },
+  {
+    id: 'edit.selectAll',
+    label: 'Select all',
+    group: 'Edit',
+    shortcuts: ['Mod+A'],
+    run: ({ store }) => A.selectAll(store),
+    enabled: ({ store }) => store.design.objects.length > 0,
+  },
+  {
+    id: 'edit.deselect',
+    label: 'Deselect / cancel',
+    group: 'Edit',
+    shortcuts: ['Escape'],
+    run: ({ store }) => {
+      if (store.inGesture) store.cancelGesture();
+      store.setSession({ selection: [], ruler: null, marquee: null, highlight: null, helpOpen: false });
+      if (store.session.tool !== 'select') A.setTool(store, 'select');
+    },
+  },
+  {
+    id: 'edit.placeHere',
+    label: 'Place with the current tool in the middle',
+    group: 'Edit',
+    shortcuts: ['Enter'],
+    run: ({ store }) => {
+      const t = store.session.tool;
+      if (
+        t === 'lamp' ||
+        t === 'screen' ||
+        t === 'glass' ||
+        t === 'perch' ||
+        t === 'ledge' ||
+        t === 'hide' ||
+        t === 'foliage'
+      ) {
+        A.placeAtCentre(store, t);
+      }
+    },
+    enabled: ({ store }) => !['select', 'pan', 'probe', 'ruler'].includes(store.session.tool),
+  },
+  {
+    id: 'file.save',
+    label: 'Save now',
+    group: 'Edit',
+    shortcuts: ['Mod+S'],
+    run: ({ saveNow }) => saveNow?.(),
+    allowInInputs: true,
+  },
+  { ...nudge('Left', false) },
+  { ...nudge('Right', false) },
+  { ...nudge('Up', false) },
+  { ...nudge('Down', false) },
+  { ...nudge('Left', true) },
+  { ...nudge('Right', true) },
+  { ...nudge('Up', true) },
+  { ...nudge('Down', true) },
+  {
+    id: 'arrange.forward',
+    label: 'Bring forward',
+    group: 'Arrange',
+    shortcuts: [']'],
+    run: ({ store }) => A.arrangeSelection(store, 'forward'),
+    enabled: hasSelection,
+  },
+  {
+    id: 'arrange.backward',
+    label: 'Send backward',
+    group: 'Arrange',
+    shortcuts: ['['],
+    run: ({ store }) => A.arrangeSelection(store, 'backward'),
+    enabled: hasSelection,
+  },
+  {
+    id: 'arrange.front',
+    label: 'Bring to front',
+    group: 'Arrange',
+    shortcuts: ['}'],
+    run: ({ store }) => A.arrangeSelection(store, 'front'),
+    enabled: hasSelection,
+  },
+  {
+    id: 'arrange.back',
+    label: 'Send to back',
+    group: 'Arrange',
+    shortcuts: ['{'],
+    run: ({ store }) => A.arrangeSelection(store, 'back'),
+    enabled: hasSelection,
+  },
+  {
+    id: 'view.zoomIn',
+    label: 'Zoom in',
+    group: 'View',
+    shortcuts: ['=', '+'],
+    run: ({ store }) => A.zoomBy(store, 1.25),
+  },
+  {
+    id: 'view.zoomOut',
+    label: 'Zoom out',
+    group: 'View',
+    shortcuts: ['-'],
+    run: ({ store }) => A.zoomBy(store, 0.8),
+  },
+  {
+    id: 'view.fit',
+    label: 'Fit to screen',
+    group: 'View',
+    shortcuts: ['0'],
+    run: ({ store }) => A.fitView(store),
+  },
+  {
+    id: 'view.snapGrid',
+    label: 'Snap to grid',
+    group: 'View',
+    shortcuts: ['Shift+G'],
+    run: ({ store }) => store.setSession((s) => ({ snapGrid: !s.snapGrid })),
+    checked: ({ store }) => store.session.snapGrid,
+  },
+  {
+    id: 'view.snapSurfaces',
+    label: 'Snap to surfaces',
+    group: 'View',
+    shortcuts: ['Shift+S'],
+    run: ({ store }) => store.setSession((s) => ({ snapSurfaces: !s.snapSurfaces })),
+    checked: ({ store }) => store.session.snapSurfaces,
+  },
+  {
+    id: 'fields.toggle',
+    label: 'Show fields',
+    group: 'Fields',
+    shortcuts: ['Shift+F'],
+    run: ({ store }) => store.setSession((s) => ({ fieldsVisible: !s.fieldsVisible })),
+    checked: ({ store }) => store.session.fieldsVisible,
+  },
+  {
+    id: 'fields.uvb',
+    label: 'UVB field (µW/cm²)',
+    group: 'Fields',
+    shortcuts: ['1'],
+    run: ({ store }) => store.setSession({ field: 'uvb', fieldsVisible: true }),
+    checked: ({ store }) => store.session.field === 'uvb',
+  },
+  {
+    id: 'fields.uvi',
+    label: 'UV Index field',
+    group: 'Fields',
+    shortcuts: ['2'],
+    run: ({ store }) => store.setSession({ field: 'uvi', fieldsVisible: true }),
+    checked: ({ store }) => store.session.field === 'uvi',
+  },
+  {
+    id: 'fields.temp',
+    label: 'Surface temperature field',
+    group: 'Fields',
+    shortcuts: ['3'],
+    run: ({ store }) => store.setSession({ field: 'tempC', fieldsVisible: true }),
+    checked: ({ store }) => store.session.field === 'tempC',
+  },
+  {
+    id: 'units.length',
+    label: 'Switch cm / in',
+    group: 'Units',
+    shortcuts: ['U'],
+    run: ({ store }) => store.setSession((s) => ({ lengthUnit: s.lengthUnit === 'cm' ? 'in' : 'cm' })),
+  },
+  {
+    id: 'units.temp',
+    label: 'Switch °C / °F',
+    group: 'Units',
+    shortcuts: ['Shift+U'],
+    run: ({ store }) => store.setSession((s) => ({ tempUnit: s.tempUnit === 'C' ? 'F' : 'C' })),
+  },
+  {
+    id: 'help.shortcuts',
+    label: 'Keyboard shortcuts',
+    group: 'Help',
+    shortcuts: ['?'],
+    run: ({ store }) => store.setSession((s) => ({ helpOpen: !s.helpOpen })),
+  },
+];
+
+const BY_ID = new Map(COMMANDS.map((c) => [c.id, c]));
+
+export function command(id: string): Command {
+  const c = BY_ID.get(id);
+  if (!c) throw new Error(`Unknown command "${id}"`);
+  return c;
+}
+
+/** Canonical shortcut → command. Built once; duplicates are a programming error caught by tests. */
+export function buildShortcutMap(commands: readonly Command[]): Map<string, Command> {
+  const map = new Map<string, Command>();
+  for (const c of commands) {
+    for (const s of c.shortcuts) {
+      const key = canonicalShortcut(s);
+      const other = map.get(key);
+      if (other) throw new Error(`Shortcut ${key} is used by both "${other.id}" and "${c.id}"`);
+      map.set(key, c);
+    }
+  }
+  return map;
+}
+
+const SHORTCUTS = buildShortcutMap(COMMANDS);
+
+export function commandForKey(e: KeyLike): Command | undefined {
+  const key = normaliseKey(e);
+  return key ? SHORTCUTS.get(key) : undefined;
+}
+
+export function isEnabled(c: Command, ctx: CommandContext): boolean {
+  return c.enabled ? c.enabled(ctx) : true;
+}
+
+/** Runs a command if it is enabled; returns whether it ran. */
+export function runCommand(c: Command, ctx: CommandContext): boolean {
+  if (!isEnabled(c, ctx)) return false;
+  c.run(ctx);
+  return true;
+}

@@ -1,0 +1,62 @@
+// Unit conversion for display and input. The design is always stored in cm and °C (BRIEF §3);
+// only what the user sees and types is converted.
+
+export type LengthUnit = 'cm' | 'in';
+export type TempUnit = 'C' | 'F';
+
+export const CM_PER_IN = 2.54; // exact, by definition of the international inch
+
+export function cmToDisplay(cm: number, unit: LengthUnit): number {
+  return unit === 'cm' ? cm : cm / CM_PER_IN;
+}
+
+export function displayToCm(value: number, unit: LengthUnit): number {
+  return unit === 'cm' ? value : value * CM_PER_IN;
+}
+
+export function cToDisplay(c: number, unit: TempUnit): number {
+  return unit === 'C' ? c : (c * 9) / 5 + 32;
+}
+
+export function displayToC(value: number, unit: TempUnit): number {
+  return unit === 'C' ? value : ((value - 32) * 5) / 9;
+}
+
+/** A temperature difference (a range width, not a reading): no offset. */
+export function cDeltaToDisplay(dc: number, unit: TempUnit): number {
+  return unit === 'C' ? dc : (dc * 9) / 5;
+}
+
+/** Rounds for display without trailing zeros ("12.5", "12", "0.04"). */
+export function roundTo(value: number, decimals: number): number {
+  const f = 10 ** decimals;
+  return Math.round(value * f) / f;
+}
+
+export function formatNumber(value: number, decimals = 1): string {
+  if (!Number.isFinite(value)) return '–';
+  const r = roundTo(value, decimals);
+  // Avoid "-0".
+  return (Object.is(r, -0) ? 0 : r).toString();
+}
+
+export function lengthLabel(unit: LengthUnit): string {
+  return unit === 'cm' ? 'cm' : 'in';
+}
+
+export function tempLabel(unit: TempUnit): string {
+  return unit === 'C' ? '°C' : '°F';
+}
+
+export function formatLength(cm: number, unit: LengthUnit, decimals = 1): string {
+  return `${formatNumber(cmToDisplay(cm, unit), decimals)} ${lengthLabel(unit)}`;
+}
+
+export function formatTemp(c: number, unit: TempUnit, decimals = 1): string {
+  return `${formatNumber(cToDisplay(c, unit), decimals)} ${tempLabel(unit)}`;
+}
+
+/** Decimals that keep the input precise enough in the display unit (inches need one more). */
+export function lengthDecimals(unit: LengthUnit): number {
+  return unit === 'cm' ? 1 : 2;
+}

@@ -1,0 +1,140 @@
+// Higher-level studio operations on the store, shared by commands, the canvas and the panels.
+import { fitCamera, unionRect, zoomAt, type Point, type Rect } from '../geometry/camera';
+import { objectBounds } from '../geometry/objects';
+import { snapPoint, type PointRole, type SnapOptions } from '../geometry/snap';
+import { defaultLampPoint, objectForClick } from './defaults';
+import * as doc from './document';
+import { gridStepCm, type PlaceTool, type Tool } from './session';
+import type { StudioStore } from './store';
+import type { Design, DesignObject, ObjectType } from './types';
+
+/** Pointer pull distance for surface snapping, in screen pixels. */
+export const SNAP_PX = 10;
+
+export function snapOptions(store: StudioStore): SnapOptions {
+  const s = store.session;
+  return {
+    grid: s.snapGrid ? gridStepCm(s.lengthUnit) : null,
+    surfaces: s.snapSurfaces,
+    threshold: SNAP_PX / s.camera.zoom,
+  };
+}
+
+export function designBounds(design: Design): Rect {
+  let r: Rect = { x: 0, y: 0, width: design.enclosure.width, height: design.enclosure.height };
+  for (const o of design.objects) r = unionRect(r, objectBounds(o));
+  return r;
+}
+
+/** Extra room around the design for the ruler (pixels). */
+export const FIT_PADDING_PX = 56;
+
+export function fitView(store: StudioStore) {
+  const { viewport } = store.session;
+  store.setSession({ camera: fitCamera(designBounds(store.design), viewport, FIT_PADDING_PX), fitted: true });
+}
+
+export function zoomBy(store: StudioStore, factor: number, anchor?: Point) {
+  const { viewport, camera } = store.session;
+  const at = anchor ?? { x: viewport.width / 2, y: viewport.height / 2 };
+  store.setSession({ camera: zoomAt(camera, at, factor) });
+}
+
+export function setTool(store: StudioStore, tool: Tool) {
+  store.setSession({ tool, ruler: tool === 'ruler' ? store.session.ruler : null, marquee: null });
+}
+
+export type SelectMode = 'replace' | 'toggle' | 'add';
+
+export function select(store: StudioStore, ids: readonly string[], mode: SelectMode = 'replace') {
+  const cur = store.session.selection;
+  let next: string[];
+  if (mode === 'replace') next = [...ids];
+  else if (mode === 'add') next = [...cur, ...ids.filter((id) => !cur.includes(id))];
+  else {
+    next = cur.filter((id) => !ids.includes(id));
+    for (const id of ids) if (!cur.includes(id)) next.push(id);
+  }
+  store.setSession({ selection: next, highlight: null });
+}
+
+export function selectAll(store: StudioStore) {
+  select(
+    store,
+    store.design.objects.map((o) => o.id),
+  );
+}
+
+export function selectedObjects(store: StudioStore): DesignObject[] {
+  const set = new Set(store.session.selection);
+  return store.design.objects.filter((o) => set.has(o.id));
+}
+
+export function deleteSelection(store: StudioStore) {
+  const ids = store.session.selection;
+  if (ids.length === 0) return;
+  store.edit((d) => doc.removeObjects(d, ids));
+}
+
+export function duplicateSelection(store: StudioStore) {
+  const ids = selectedObjects(store).map((o) => o.id);
+  if (ids.length === 0) return;
+  let added: string[] = [];
+  store.edit((d) => {
+    const r = doc.duplicateObjects(d, ids);
+    added = r.ids;
+    return r.design;
+  });
+  select(store, added);
+}
+
+export function arrangeSelection(store: StudioStore, move: doc.ArrangeMove) {
+  const ids = store.session.selection;
+  if (ids.length === 0) return;
+  store.edit((d) => doc.arrange(d, ids, move));
+}
+
+/** Moves the selection by a number of grid steps (1 cm, or ½ in when working in inches). */
+export function nudgeSelection(store: StudioStore, stepsX: number, stepsY: number) {
+  const ids = store.session.selection;
+  if (ids.length === 0) return;
+  const step = gridStepCm(store.session.lengthUnit);
+  store.edit((d) => doc.moveObjects(d, ids, stepsX * step, stepsY * step));
+}
+
+export function roleForPlacement(type: ObjectType): PointRole {
+  if (type === 'lamp') return 'lamp';
+  if (type === 'perch') return 'box-corner';
+  if (type === 'screen' || type === 'glass') return 'barrier-end';
+  return 'box-corner';
+}
+
+/** Places a new object of `type` at a design point (snapped for its kind), selects it, back to Select. */
+export function placeObject(store: StudioStore, type: PlaceTool, at: Point): string {
+  const { point } = snapPoint(store.design, at, roleForPlacement(type), snapOptions(store));
+  const id = doc.nextId(store.design, type);
+  const object = objectForClick(store.design, type, id, point);
+  store.edit((d) => doc.addObject(d, object));
+  store.setSession({ selection: [id], tool: 'select', tab: 'inspect' });
+  return id;
+}
+
+/** Keyboard placement: in the middle of what is visible, or on the lid for a lamp. */
+export function placeAtCentre(store: StudioStore, type: PlaceTool): string {
+  const d = store.design;
+  if (type === 'lamp') return placeObject(store, type, defaultLampPoint(d));
+  const { width: W, height: H } = d.enclosure;
+  const at =
+    type === 'screen' ? { x: W / 2, y: H } : type === 'perch' ? { x: W / 2, y: H / 2 } : { x: W / 2, y: 0 };
+  return placeObject(store, type, at);
+}
+
+export function addProbeAt(store: StudioStore, at: Point): string {
+  let id = '';
+  store.edit((d) => {
+    const r = doc.addProbe(d, Math.round(at.x * 10) / 10, Math.round(at.y * 10) / 10);
+    id = r.id;
+    return r.design;
+  });
+  return id;
+}

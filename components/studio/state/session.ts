@@ -1,0 +1,102 @@
+// Session state: everything about how the user is looking at and working on the design that is
+// NOT part of the saved document (and therefore not undoable): tool, selection, camera, view options.
+import type { Camera, Point, Rect, Viewport } from '../geometry/camera';
+import type { Guide } from '../geometry/snap';
+import type { LengthUnit, TempUnit } from '../geometry/units';
+import { CM_PER_IN } from '../geometry/units';
+import type { ObjectType } from './types';
+
+export type PlaceTool = ObjectType;
+export type Tool = 'select' | 'pan' | PlaceTool | 'probe' | 'ruler';
+export type FieldView = 'uvb' | 'uvi' | 'tempC';
+export type SideTab = 'inspect' | 'fields' | 'assess';
+
+export interface Session {
+  tool: Tool;
+  /** Ids of selected objects and pinned probes. */
+  selection: string[];
+  camera: Camera;
+  viewport: Viewport;
+  /** Whether the camera has been fitted to the design once the viewport size was known. */
+  fitted: boolean;
+  fieldsVisible: boolean;
+  field: FieldView;
+  fieldOpacity: number;
+  lengthUnit: LengthUnit;
+  tempUnit: TempUnit;
+  snapGrid: boolean;
+  snapSurfaces: boolean;
+  /** Ageing preview: months added to every lamp's age. */
+  addMonths: number;
+  speciesId: string | null;
+  /** Finding whose location is highlighted on the canvas. */
+  highlight: string | null;
+  helpOpen: boolean;
+  tab: SideTab;
+  /** Snap guides shown while dragging. */
+  guides: Guide[];
+  ruler: { a: Point; b: Point } | null;
+  marquee: Rect | null;
+}
+
+export function initialSession(): Session {
+  return {
+    tool: 'select',
+    selection: [],
+    camera: { zoom: 5, originX: 60, originY: 400 },
+    viewport: { width: 800, height: 500 },
+    fitted: false,
+    fieldsVisible: true,
+    field: 'uvi',
+    fieldOpacity: 0.75,
+    lengthUnit: 'cm',
+    tempUnit: 'C',
+    snapGrid: true,
+    snapSurfaces: true,
+    addMonths: 0,
+    speciesId: null,
+    highlight: null,
+    helpOpen: false,
+    tab: 'inspect',
+    guides: [],
+    ruler: null,
+    marquee: null,
+  };
+}
+
+/** Grid/snap step in cm: 1 cm, or half an inch when working in inches. */
+export function gridStepCm(unit: LengthUnit): number {
+  return unit === 'cm' ? 1 : CM_PER_IN / 2;
+}
+
+export const PLACE_TOOLS: readonly PlaceTool[] = [
+  'lamp',
+  'screen',
+  'glass',
+  'perch',
+  'ledge',
+  'hide',
+  'foliage',
+];
+
+export function isPlaceTool(t: Tool): t is PlaceTool {
+  return (PLACE_TOOLS as readonly string[]).includes(t);
+}
+
+/** Preferences worth keeping between visits (units, field view); the rest starts fresh. */
+export type StoredPrefs = Pick<
+  Session,
+  'lengthUnit' | 'tempUnit' | 'field' | 'fieldOpacity' | 'fieldsVisible' | 'snapGrid' | 'snapSurfaces'
+>;
+
+export function pickPrefs(s: Session): StoredPrefs {
+  return {
+    lengthUnit: s.lengthUnit,
+    tempUnit: s.tempUnit,
+    field: s.field,
+    fieldOpacity: s.fieldOpacity,
+    fieldsVisible: s.fieldsVisible,
+    snapGrid: s.snapGrid,
+    snapSurfaces: s.snapSurfaces,
+  };
+}

@@ -1,0 +1,103 @@
+// The studio's state container: the undoable document (a History of Designs) and the session,
+// framework-free so that commands and tests drive it without React.
+import * as H from './history';
+import { initialSession, type Session } from './session';
+import type { Design } from './types';
+
+export interface StudioState {
+  history: H.History<Design>;
+  session: Session;
+}
+
+export class StudioStore {
+  private state: StudioState;
+  private readonly listeners = new Set<() => void>();
+
+  constructor(design: Design, session: Partial<Session> = {}) {
+    this.state = { history: H.createHistory(design), session: { ...initialSession(), ...session } };
+  }
+
+  getState = (): StudioState => this.state;
+
+  subscribe = (listener: () => void): (() => void) => {
+    this.listeners.add(listener);
+    return () => this.listeners.delete(listener);
+  };
+
+  get design(): Design {
+    return this.state.history.present;
+  }
+
+  get session(): Session {
+    return this.state.session;
+  }
+
+  private set(next: StudioState) {
+    if (next === this.state) return;
+    this.state = next;
+    for (const l of [...this.listeners]) l();
+  }
+
+  setSession(patch: Partial<Session> | ((s: Session) => Partial<Session>)) {
+    const p = typeof patch === 'function' ? patch(this.state.session) : patch;
+    const keys = Object.keys(p) as (keyof Session)[];
+    if (keys.every((k) => Object.is(p[k], this.state.session[k]))) return;
+    this.set({ ...this.state, session: { ...this.state.session, ...p } });
+  }
+
+  /** Applies a document change: one undo step, or part of the running gesture. */
+  edit(fn: (d: Design) => Design) {
+    const history = H.commit(this.state.history, fn(this.state.history.present));
+    this.applyHistory(history);
+  }
+
+  beginGesture() {
+    this.applyHistory(H.beginGesture(this.state.history));
+  }
+
+  endGesture() {
+    this.applyHistory(H.endGesture(this.state.history));
+    this.setSession({ guides: [] });
+  }
+
+  cancelGesture() {
+    this.applyHistory(H.cancelGesture(this.state.history));
+    this.setSession({ guides: [] });
+  }
+
+  get inGesture(): boolean {
+    return this.state.history.gestureBase !== null;
+  }
+
+  canUndo(): boolean {
+    return H.canUndo(this.state.history);
+  }
+
+  canRedo(): boolean {
+    return H.canRedo(this.state.history);
+  }
+
+  undo() {
+    this.applyHistory(H.undo(this.state.history));
+  }
+
+  redo() {
+    this.applyHistory(H.redo(this.state.history));
+  }
+
+  /** Replaces the document and forgets undo history (a load, a restored copy, a conflict resolution). */
+  load(design: Design) {
+    this.applyHistory(H.reset(design));
+  }
+
+  private applyHistory(history: H.History<Design>) {
+    if (history === this.state.history) return;
+    // Keep the selection to things that still exist (after undo, delete, load).
+    const d = history.present;
+    const alive = new Set([...d.objects.map((o) => o.id), ...(d.probes ?? []).map((p) => p.id)]);
+    const sel = this.state.session.selection;
+    const selection = sel.every((id) => alive.has(id)) ? sel : sel.filter((id) => alive.has(id));
+    const session = selection === sel ? this.state.session : { ...this.state.session, selection };
+    this.set({ history, session });
+  }
+}

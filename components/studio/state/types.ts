@@ -1,0 +1,44 @@
+// Studio-side names for the engine's design types, imported in one place so the studio follows
+// the engine's schema (the single source of truth) without repeating it.
+export type {
+  Design,
+  DesignObject,
+  Enclosure,
+  FoliageObject,
+  GlassObject,
+  HideObject,
+  LampObject,
+  LedgeObject,
+  PerchObject,
+  ProbePoint,
+  ScreenObject,
+} from '@/simulation/model/schema';
+export type { SpeciesSheet } from '@/simulation/model/species';
+
+import type { DesignObject } from '@/simulation/model/schema';
+import type { SpeciesSheet } from '@/simulation/model/species';
+
+export type ObjectType = DesignObject['type'];
+export type SegmentObject = Extract<DesignObject, { type: 'screen' | 'glass' | 'perch' }>;
+export type BoxObject = Extract<DesignObject, { type: 'ledge' | 'hide' | 'foliage' }>;
+
+/** A species sheet as the studio receives it: the engine's sheet plus the organisation's id for it. */
+export type StudioSpecies = SpeciesSheet & { id: string };
+
+export const OBJECT_TYPES: readonly ObjectType[] = [
+  'lamp',
+  'screen',
+  'glass',
+  'perch',
+  'ledge',
+  'hide',
+  'foliage',
+];
+
+export function isSegment(o: DesignObject): o is SegmentObject {
+  return o.type === 'screen' || o.type === 'glass' || o.type === 'perch';
+}
+
+export function isBox(o: DesignObject): o is BoxObject {
+  return o.type === 'ledge' || o.type === 'hide' || o.type === 'foliage';
+}
