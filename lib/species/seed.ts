@@ -1,0 +1,54 @@
+import { getSequelize } from '@/lib/db';
+import { createLampType } from '@/lib/lamp-types/store';
+import { STARTING_LAMP_TYPES } from '@/lib/lamp-types/starting-lamp-types';
+import { CatalogueSeeding, LampType, SpeciesSheet } from '@/models';
+import { STARTING_SHEETS } from './starting-sheets';
+import { toColumns } from './store';
+
+/**
+ * Gives an organisation its starting species sheets and lamp catalogue, once. Call it when an
+ * organisation is created (sign-up, demo data); the species and lamp-type routes also call it lazily
+ * so an organisation made any other way still gets them. Idempotent and safe to race: the marker row
+ * and the unique (organisation, seed key) indexes stop duplicates, and once the marker exists nothing is
+ * re-added — sheets an organisation deleted on purpose stay deleted.
+ * Returns true when this call did the seeding.
+ */
+export async function seedStartingCatalogue(organisationId: number): Promise<boolean> {
+  const sequelize = getSequelize();
+  if (await CatalogueSeeding.findByPk(organisationId)) return false;
+  return sequelize.transaction(async (transaction) => {
+    // Claim the organisation first; a concurrent caller blocks on the row lock, then sees it and stops.
+    const [, createdNow] = await CatalogueSeeding.findOrCreate({
+      where: { organisationId },
+      defaults: { organisationId, seededAt: new Date() },
+      transaction,
+    });
+    if (!createdNow) return false;
+    await SpeciesSheet.bulkCreate(
+      STARTING_SHEETS.map(({ seedKey, ...sheet }) => ({
+        organisationId,
+        ...toColumns(sheet),
+        seedKey,
+        createdById: null,
+        updatedById: null,
+      })),
+      { transaction, ignoreDuplicates: true },
+    );
+    const existingNames = new Set(
+      (await LampType.findAll({ where: { organisationId }, attributes: ['name'], transaction })).map(
+        (l) => l.name,
+      ),
+    );
+    for (const { presetKey, ...lampType } of STARTING_LAMP_TYPES) {
+      // Names are unique per organisation: keep an entry the organisation already made by that name.
+      if (existingNames.has(lampType.name)) continue;
+      await createLampType(organisationId, lampType, null, { presetKey, transaction });
+    }
+    return true;
+  });
+}
+
+/** For list routes: seed on first sight, cheaply (one primary-key lookup once seeded). */
+export async function ensureStartingCatalogue(organisationId: number): Promise<void> {
+  await seedStartingCatalogue(organisationId);
+}

@@ -1,0 +1,227 @@
+import type { SpeciesInput, SpeciesSource } from './schema';
+
+/**
+ * The species sheets every organisation starts with: a dozen commonly kept reptiles and one amphibian.
+ *
+ * Provenance, stated honestly on every sheet:
+ * - UV zone: the zones themselves are defined by Ferguson et al. 2010 (Zoo Biology 29:317–334). Which
+ *   zone each species belongs to is the sheet author's reading of its basking habit, from memory — not
+ *   copied from, nor checked against, any published species list.
+ * - Temperatures and photoperiod: from memory of general husbandry literature; no source was checked.
+ * - Broadband UVB targets (µW/cm²): common practice, no published source (roughly 25–50 for desert
+ *   baskers, 12–25 for tropical forest species); what a meter reads depends on the meter.
+ * Organisations are expected to review and correct their copies; the UI says so on every sheet.
+ */
+
+export type StartingSheet = SpeciesInput & { seedKey: string };
+
+const zoneFromMemory = (habit: string): SpeciesSource => ({
+  citation:
+    'From memory: zone chosen from the species’ basking habit (' +
+    habit +
+    ') using the zone definitions of Ferguson et al. 2010, Zoo Biology 29:317–334',
+  confidence: 'from memory; the zone definitions are published, this species’ zone was not checked — verify',
+  covers: ['uvZone'],
+});
+
+const TEMPERATURES_FROM_MEMORY: SpeciesSource = {
+  citation: 'From memory: general husbandry literature for the species',
+  confidence:
+    'from memory; no source was checked and published care guides differ — verify with a reptile vet or current husbandry literature',
+  covers: ['baskingSurfaceC', 'warmAirC', 'coolAirC', 'nightMinC', 'photoperiodH'],
+};
+
+const METER_TARGET: SpeciesSource = {
+  citation: 'Common practice, no published source: keepers’ rule of thumb for broadband UVB meters',
+  confidence:
+    'rough guide only; what a broadband meter reads depends on the meter and the lamp’s spectrum — the UV zone is the primary target',
+  covers: ['uvbTargetUw'],
+};
+
+const DESERT_TARGET = { min: 25, max: 50 };
+const FOREST_TARGET = { min: 12, max: 25 };
+
+const r = (min: number, max: number) => ({ min, max });
+
+export const STARTING_SHEETS: readonly StartingSheet[] = [
+  {
+    seedKey: 'pogona-vitticeps',
+    commonName: 'Bearded dragon',
+    scientificName: 'Pogona vitticeps',
+    uvZone: 4,
+    uvbTargetUw: DESERT_TARGET,
+    baskingSurfaceC: r(40, 45),
+    warmAirC: r(30, 35),
+    coolAirC: r(22, 28),
+    nightMinC: 18,
+    photoperiodH: r(12, 14),
+    notes:
+      'Diurnal desert and dry-woodland lizard that basks in full sun for long periods. Give a wide, bright basking area with a gradient to shade.',
+    sources: [zoneFromMemory('open-country, mid-day sun basker'), TEMPERATURES_FROM_MEMORY, METER_TARGET],
+  },
+  {
+    seedKey: 'eublepharis-macularius',
+    commonName: 'Leopard gecko',
+    scientificName: 'Eublepharis macularius',
+    uvZone: 1,
+    uvbTargetUw: null,
+    baskingSurfaceC: r(30, 35),
+    warmAirC: r(27, 31),
+    coolAirC: r(21, 26),
+    nightMinC: 18,
+    photoperiodH: r(12, 14),
+    notes:
+      'Crepuscular ground dweller of rocky scrub; rests in hides by day and takes warmth from warm surfaces. Low-level UVB with plenty of shade and hides.',
+    sources: [zoneFromMemory('crepuscular, shade dweller'), TEMPERATURES_FROM_MEMORY],
+  },
+  {
+    seedKey: 'correlophus-ciliatus',
+    commonName: 'Crested gecko',
+    scientificName: 'Correlophus ciliatus',
+    uvZone: 1,
+    uvbTargetUw: FOREST_TARGET,
+    baskingSurfaceC: r(26, 29),
+    warmAirC: r(24, 27),
+    coolAirC: r(20, 24),
+    nightMinC: 18,
+    photoperiodH: r(12, 12),
+    notes:
+      'Arboreal, crepuscular gecko of humid forest. Sensitive to heat: keep air below about 28 °C. Dense planting for shade.',
+    sources: [zoneFromMemory('crepuscular forest dweller'), TEMPERATURES_FROM_MEMORY, METER_TARGET],
+  },
+  {
+    seedKey: 'chamaeleo-calyptratus',
+    commonName: 'Veiled chameleon',
+    scientificName: 'Chamaeleo calyptratus',
+    uvZone: 3,
+    uvbTargetUw: null,
+    baskingSurfaceC: r(32, 35),
+    warmAirC: r(28, 32),
+    coolAirC: r(22, 26),
+    nightMinC: 15,
+    photoperiodH: r(12, 12),
+    notes:
+      'Arboreal; basks on branches in partial sun and moves into foliage to cool. Usually kept in mesh enclosures; a lamp above mesh loses part of its UVB.',
+    sources: [zoneFromMemory('partial-sun basker in foliage'), TEMPERATURES_FROM_MEMORY],
+  },
+  {
+    seedKey: 'pantherophis-guttatus',
+    commonName: 'Corn snake',
+    scientificName: 'Pantherophis guttatus',
+    uvZone: 1,
+    uvbTargetUw: null,
+    baskingSurfaceC: r(30, 33),
+    warmAirC: r(27, 30),
+    coolAirC: r(21, 25),
+    nightMinC: 18,
+    photoperiodH: r(12, 14),
+    notes:
+      'Crepuscular colubrid; basks occasionally at the edge of cover. Low-level UVB with hides at both ends. Escape-prone: secure lids.',
+    sources: [zoneFromMemory('crepuscular, occasional basker'), TEMPERATURES_FROM_MEMORY],
+  },
+  {
+    seedKey: 'python-regius',
+    commonName: 'Ball python',
+    scientificName: 'Python regius',
+    uvZone: 1,
+    uvbTargetUw: null,
+    baskingSurfaceC: r(32, 35),
+    warmAirC: r(29, 32),
+    coolAirC: r(24, 27),
+    nightMinC: 22,
+    photoperiodH: r(12, 12),
+    notes:
+      'Nocturnal and crepuscular; spends the day in burrows. Low-level UVB with secure hides on both sides. Guard heat sources: snakes burn easily on lamps and emitters.',
+    sources: [zoneFromMemory('nocturnal, shade dweller'), TEMPERATURES_FROM_MEMORY],
+  },
+  {
+    seedKey: 'iguana-iguana',
+    commonName: 'Green iguana',
+    scientificName: 'Iguana iguana',
+    uvZone: 3,
+    uvbTargetUw: null,
+    baskingSurfaceC: r(35, 40),
+    warmAirC: r(30, 33),
+    coolAirC: r(24, 28),
+    nightMinC: 22,
+    photoperiodH: r(12, 12),
+    notes:
+      'Large arboreal lizard that basks high in the canopy. Needs a very tall enclosure; the basking branch should be within the UV lamp’s reach.',
+    sources: [zoneFromMemory('open or partial-sun basker in the canopy'), TEMPERATURES_FROM_MEMORY],
+  },
+  {
+    seedKey: 'tiliqua-scincoides',
+    commonName: 'Blue-tongued skink',
+    scientificName: 'Tiliqua scincoides',
+    uvZone: 3,
+    uvbTargetUw: null,
+    baskingSurfaceC: r(35, 40),
+    warmAirC: r(29, 32),
+    coolAirC: r(22, 26),
+    nightMinC: 18,
+    photoperiodH: r(12, 14),
+    notes:
+      'Diurnal ground dweller of open woodland and grassland; basks in the morning and forages in the open. Some keepers treat it as a zone 2 species.',
+    sources: [zoneFromMemory('morning basker in open country'), TEMPERATURES_FROM_MEMORY],
+  },
+  {
+    seedKey: 'uromastyx-ornata',
+    commonName: 'Ornate spiny-tailed lizard',
+    scientificName: 'Uromastyx ornata',
+    uvZone: 4,
+    uvbTargetUw: DESERT_TARGET,
+    baskingSurfaceC: r(45, 55),
+    warmAirC: r(32, 38),
+    coolAirC: r(24, 29),
+    nightMinC: 18,
+    photoperiodH: r(12, 14),
+    notes:
+      'Desert lizard that basks on hot rock in full sun and retreats to burrows. Needs an intense, hot basking spot and a dry enclosure.',
+    sources: [zoneFromMemory('desert, mid-day sun basker'), TEMPERATURES_FROM_MEMORY, METER_TARGET],
+  },
+  {
+    seedKey: 'trachemys-scripta-elegans',
+    commonName: 'Red-eared slider',
+    scientificName: 'Trachemys scripta elegans',
+    uvZone: 3,
+    uvbTargetUw: null,
+    baskingSurfaceC: r(32, 35),
+    warmAirC: r(28, 32),
+    coolAirC: r(23, 27),
+    nightMinC: 20,
+    photoperiodH: r(12, 14),
+    notes:
+      'Aquatic turtle that hauls out to bask. The basking platform is the basking zone; water temperature (about 24–26 °C, from memory) is not modelled here.',
+    sources: [zoneFromMemory('aquatic, open basker'), TEMPERATURES_FROM_MEMORY],
+  },
+  {
+    seedKey: 'testudo-hermanni',
+    commonName: 'Hermann’s tortoise',
+    scientificName: 'Testudo hermanni',
+    uvZone: 3,
+    uvbTargetUw: null,
+    baskingSurfaceC: r(35, 40),
+    warmAirC: r(28, 32),
+    coolAirC: r(20, 24),
+    nightMinC: 12,
+    photoperiodH: r(12, 14),
+    notes:
+      'Mediterranean tortoise of scrub and open woodland; basks in the morning sun. Outdoor time in warm weather is best; brumation is not covered by this sheet.',
+    sources: [zoneFromMemory('open or partial-sun basker'), TEMPERATURES_FROM_MEMORY],
+  },
+  {
+    seedKey: 'litoria-caerulea',
+    commonName: 'White’s tree frog',
+    scientificName: 'Litoria caerulea',
+    uvZone: 2,
+    uvbTargetUw: null,
+    baskingSurfaceC: r(28, 31),
+    warmAirC: r(26, 29),
+    coolAirC: r(22, 25),
+    nightMinC: 18,
+    photoperiodH: r(12, 12),
+    notes:
+      'Arboreal frog that rests exposed on branches by day. Amphibian skin dries and burns easily: keep heat gentle, keep lamps out of reach, and give shaded, humid refuges.',
+    sources: [zoneFromMemory('partial-sun, occasional basker'), TEMPERATURES_FROM_MEMORY],
+  },
+];
