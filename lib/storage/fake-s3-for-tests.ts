@@ -1,0 +1,47 @@
+import net from 'node:net';
+import path from 'node:path';
+import { FAKE_S3_DEFAULTS, startFakeS3 } from '@/scripts/fake-s3.mjs';
+import { resetStorageClient } from './s3';
+
+/**
+ * For tests: makes sure a fake S3 server answers at the test endpoint. `npm test` starts one (like the
+ * fake SMTP server); when a test file runs on its own, one is started in this process instead.
+ * Tests never share the development bucket: without S3_ENDPOINT the test endpoint is used.
+ */
+export async function useFakeS3(): Promise<{ close: () => Promise<void> }> {
+  if (!process.env.S3_ENDPOINT) {
+    process.env.S3_ENDPOINT = process.env.TEST_S3_ENDPOINT || FAKE_S3_DEFAULTS.TEST_S3_ENDPOINT;
+    process.env.S3_BUCKET ||= 'baskwell-test';
+  }
+  resetStorageClient();
+  const url = new URL(process.env.S3_ENDPOINT);
+  const port = Number(url.port || 80);
+  if (await listening(port, url.hostname)) return { close: async () => {} };
+  const server = await startFakeS3({
+    endpoint: process.env.S3_ENDPOINT,
+    bucket: process.env.S3_BUCKET || FAKE_S3_DEFAULTS.S3_BUCKET,
+    directory: path.join(process.cwd(), '.data', 's3-test'),
+  });
+  return {
+    close: async () => {
+      resetStorageClient();
+      await server.close();
+    },
+  };
+}
+
+function listening(port: number, host: string): Promise<boolean> {
+  return new Promise((resolve) => {
+    const socket = net.connect({ port, host });
+    socket.setTimeout(500);
+    socket.once('connect', () => {
+      socket.destroy();
+      resolve(true);
+    });
+    socket.once('timeout', () => {
+      socket.destroy();
+      resolve(false);
+    });
+    socket.once('error', () => resolve(false));
+  });
+}

@@ -1,0 +1,29 @@
+import { InvalidImageError } from './errors';
+import { concat } from './strip-jpeg';
+
+/**
+ * Removes metadata chunks from a PNG (ISO/IEC 15948 / W3C PNG, §11): tEXt, zTXt and iTXt (free text:
+ * authors, software, comments) and eXIf (camera data, possibly a position). All other chunks are kept
+ * as they are, so the picture and its colour information are unchanged and every kept chunk's CRC stays
+ * valid. The structure is checked on the way: IHDR first, IEND last, every chunk inside the file.
+ */
+const DROP = new Set(['tEXt', 'zTXt', 'iTXt', 'eXIf']);
+
+export function stripPng(input: Uint8Array): Uint8Array {
+  const view = new DataView(input.buffer, input.byteOffset, input.byteLength);
+  const parts: Uint8Array[] = [input.subarray(0, 8)];
+  let i = 8;
+  let first = true;
+  while (i + 12 <= input.length) {
+    const length = view.getUint32(i);
+    const type = String.fromCharCode(...input.subarray(i + 4, i + 8));
+    const end = i + 12 + length;
+    if (end > input.length || !/^[A-Za-z]{4}$/.test(type)) throw new InvalidImageError('PNG');
+    if (first && type !== 'IHDR') throw new InvalidImageError('PNG');
+    first = false;
+    if (!DROP.has(type)) parts.push(input.subarray(i, end));
+    if (type === 'IEND') return concat(parts);
+    i = end;
+  }
+  throw new InvalidImageError('PNG');
+}
