@@ -1,0 +1,93 @@
+import { col, fn } from 'sequelize';
+import { z } from 'zod';
+import { getSequelize } from '@/lib/db';
+import { Enclosure, Membership, User } from '@/models';
+import { badRequest } from './errors';
+import { idSchema } from './schemas';
+
+/** Enclosure fields as the API accepts them. Sizes are inside dimensions in centimetres. */
+const size = (what: string) =>
+  z
+    .number({ error: `Enter the ${what} in centimetres.` })
+    .positive(`The ${what} must be more than 0 cm.`)
+    .max(2000, `The ${what} can be at most 2000 cm (20 m).`);
+
+const optionalText = (max: number) =>
+  z
+    .string()
+    .trim()
+    .max(max, `Use at most ${max} characters.`)
+    .nullish()
+    .transform((v) => (v ? v : null));
+
+export const enclosureFields = {
+  name: z
+    .string({ error: 'Enter a name for the enclosure.' })
+    .trim()
+    .min(1, 'Enter a name for the enclosure.')
+    .max(120, 'Use at most 120 characters.'),
+  keeperId: idSchema('The keeper'),
+  widthCm: size('width'),
+  heightCm: size('height'),
+  depthCm: size('depth'),
+  speciesName: optionalText(160),
+  animalName: optionalText(120),
+  notes: optionalText(5000),
+};
+
+/** `keeperId` may be left out: the enclosure is then the caller's own. */
+export const createEnclosureBody = z.object({
+  organisationId: idSchema('The organisation id'),
+  ...enclosureFields,
+  keeperId: enclosureFields.keeperId.optional(),
+});
+
+export const updateEnclosureBody = z
+  .object(enclosureFields)
+  .partial()
+  .refine((v) => Object.keys(v).length > 0, { message: 'Send at least one field to change.' });
+
+export function enclosureJson(e: Enclosure & { keeper?: User | null }) {
+  return {
+    id: e.id,
+    organisationId: e.organisationId,
+    keeperId: e.keeperId,
+    keeperName: e.keeper?.name ?? null,
+    name: e.name,
+    widthCm: e.widthCm,
+    heightCm: e.heightCm,
+    depthCm: e.depthCm,
+    speciesName: e.speciesName ?? null,
+    animalName: e.animalName ?? null,
+    notes: e.notes ?? null,
+    createdAt: e.createdAt.toISOString(),
+    updatedAt: e.updatedAt.toISOString(),
+  };
+}
+
+export type EnclosureJson = ReturnType<typeof enclosureJson>;
+
+export async function enclosureCounts(
+  organisationId: number,
+  keeperIds: number[],
+): Promise<Map<number, number>> {
+  if (keeperIds.length === 0) return new Map();
+  getSequelize();
+  const rows = (await Enclosure.findAll({
+    attributes: ['keeperId', [fn('COUNT', col('id')), 'n']],
+    where: { organisationId, keeperId: keeperIds },
+    group: ['keeperId'],
+    raw: true,
+  })) as unknown as { keeperId: number; n: number | string }[];
+  return new Map(rows.map((r) => [r.keeperId, Number(r.n)]));
+}
+
+/** An enclosure's keeper must belong to the organisation (any role: staff may keep the shop's own animals). */
+export async function assertKeeperInOrganisation(organisationId: number, keeperId: number): Promise<void> {
+  getSequelize();
+  const member = await Membership.findOne({
+    where: { organisationId, userId: keeperId },
+    attributes: ['id'],
+  });
+  if (!member) throw badRequest('keeperId', 'That keeper is not a member of this organisation.');
+}

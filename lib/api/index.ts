@@ -1,0 +1,13 @@
+export { allow, created, json, route } from './route';
+export {
+  ApiError,
+  badRequest,
+  conflict,
+  errorResponse,
+  forbidden,
+  isDatabaseUnavailable,
+  notFound,
+  unauthenticated,
+} from './errors';
+export { afterCursor, page, pageQuery } from './pagination';
+export { sessionUser, sessionUserFromHeaders } from './session';

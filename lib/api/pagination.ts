@@ -1,0 +1,24 @@
+import { Op, type WhereOptions } from 'sequelize';
+import { z } from 'zod';
+
+/** `?cursor=&limit=`: the cursor is the id of the last item of the previous page (lists are in id order). */
+export const pageQuery = {
+  cursor: z.coerce.number({ error: 'The cursor must be a number.' }).int().positive().optional(),
+  limit: z.coerce
+    .number({ error: 'The limit must be a number.' })
+    .int()
+    .min(1, 'The limit must be at least 1.')
+    .max(100, 'The limit can be at most 100.')
+    .default(50),
+};
+
+export function afterCursor(cursor: number | undefined): WhereOptions {
+  return cursor ? { id: { [Op.gt]: cursor } } : {};
+}
+
+/** Fetch `limit + 1` rows and pass them here: the extra row only tells whether another page exists. */
+export function page<T extends { id: number }, R>(rows: T[], limit: number, map: (row: T) => R) {
+  const items = rows.slice(0, limit);
+  const last = items[items.length - 1];
+  return { items: items.map(map), nextCursor: rows.length > limit && last ? String(last.id) : null };
+}

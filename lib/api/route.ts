@@ -1,0 +1,84 @@
+import type { ZodType, z } from 'zod';
+import type { CurrentUser } from '@/lib/auth/session-user';
+import { can, type Action, type Resource } from '@/lib/permissions';
+import { ApiError, errorResponse, forbidden, fromZod, notFound, unauthenticated } from './errors';
+import { assertSameOrigin, isStateChanging, readJsonBody } from './request';
+import { sessionUser } from './session';
+
+/**
+ * The one pipeline of every route handler, in a fixed order:
+ *   transport checks (same origin, JSON only, size cap) → parse (zod) → who (session, re-checked in
+ *   the database) → may they (`allow`, called by the handler once it knows the thing) → act.
+ * Anything thrown becomes a typed JSON error without internals.
+ */
+
+type Schema = ZodType | undefined;
+type Out<S extends Schema> = S extends ZodType ? z.output<S> : undefined;
+type RouteContext = { params: Promise<Record<string, string | string[] | undefined>> };
+
+type Spec<P extends Schema, Q extends Schema, B extends Schema, A extends boolean> = {
+  params?: P;
+  query?: Q;
+  body?: B;
+  /** Defaults to true: no session → 401. */
+  auth?: A;
+  handler: (input: {
+    req: Request;
+    params: Out<P>;
+    query: Out<Q>;
+    body: Out<B>;
+    user: A extends false ? CurrentUser | null : CurrentUser;
+  }) => Promise<Response | unknown>;
+};
+
+export function route<
+  P extends Schema = undefined,
+  Q extends Schema = undefined,
+  B extends Schema = undefined,
+  A extends boolean = true,
+>(spec: Spec<P, Q, B, A>) {
+  return async (req: Request, ctx?: RouteContext): Promise<Response> => {
+    try {
+      if (isStateChanging(req.method)) assertSameOrigin(req);
+      const rawBody = spec.body ? await readJsonBody(req) : undefined;
+      const params = parse(spec.params, ctx ? await ctx.params : {}, undefined);
+      const query = parse(spec.query, Object.fromEntries(new URL(req.url).searchParams), undefined);
+      const body = parse(spec.body, rawBody ?? {}, undefined);
+      const user = await sessionUser(req);
+      if (!user && spec.auth !== false) throw unauthenticated();
+      const result = await spec.handler({ req, params, query, body, user } as Parameters<
+        Spec<P, Q, B, A>['handler']
+      >[0]);
+      if (result instanceof Response) return result;
+      return json(result ?? { ok: true });
+    } catch (error) {
+      return errorResponse(error, `${req.method} ${new URL(req.url).pathname}`);
+    }
+  };
+}
+
+function parse<S extends Schema>(schema: S, value: unknown, prefix: string | undefined): Out<S> {
+  if (!schema) return undefined as Out<S>;
+  const r = schema.safeParse(value);
+  if (!r.success) throw fromZod(r.error, prefix);
+  return r.data as Out<S>;
+}
+
+export function json(data: unknown, status = 200): Response {
+  return Response.json(data, { status, headers: { 'Cache-Control': 'no-store' } });
+}
+
+export const created = (data: unknown) => json(data, 201);
+
+/**
+ * "May they": throws unless `can` allows. Someone with no right to even see the thing gets 404, so
+ * the existence of another organisation's (or another keeper's) things is never revealed; someone who
+ * may see it but not change it gets 403.
+ */
+export function allow(user: CurrentUser, action: Action, resource: Resource, what = 'That'): void {
+  if (can(user, action, resource)) return;
+  if (action !== 'read' && can(user, 'read', resource)) throw forbidden();
+  throw notFound(what);
+}
+
+export { ApiError };

@@ -1,0 +1,115 @@
+import { createHash, randomBytes } from 'node:crypto';
+import { Op } from 'sequelize';
+import { config } from '@/lib/config';
+import { getSequelize } from '@/lib/db';
+import { sendMail } from '@/lib/mail';
+import { ApiError, conflict } from '@/lib/api/errors';
+import { Invitation, Membership, Organisation, User, type Role } from '@/models';
+
+export const INVITATION_TTL_MS = 7 * 24 * 3600_000;
+
+export const hashToken = (token: string) => createHash('sha256').update(token).digest('hex');
+
+export const newToken = () => randomBytes(32).toString('base64url');
+
+export const inviteUrl = (token: string) => new URL(`/invite/${token}`, config().APP_URL).toString();
+
+const ROLE_WORDS: Record<Role, string> = {
+  owner: 'an owner (members, catalogues and settings, as well as all enclosures)',
+  staff: 'staff (all enclosures, designs, lamps and readings of the organisation)',
+  keeper: 'a keeper (your own enclosures, designs and meter readings)',
+};
+
+export type InvitationState = 'pending' | 'accepted' | 'revoked' | 'expired';
+
+export function invitationState(inv: Invitation, now = new Date()): InvitationState {
+  if (inv.acceptedAt) return 'accepted';
+  if (inv.revokedAt) return 'revoked';
+  if (inv.expiresAt.getTime() <= now.getTime()) return 'expired';
+  return 'pending';
+}
+
+/**
+ * Creates an invitation and e-mails its link. Only the token's SHA-256 is stored, so a database leak
+ * does not hand out working links. A newer invitation to the same address replaces older pending ones.
+ */
+export async function inviteByEmail(input: {
+  organisationId: number;
+  email: string;
+  role: Role;
+  invitedBy: { id: number; name: string };
+}): Promise<Invitation> {
+  getSequelize();
+  const organisation = await Organisation.findByPk(input.organisationId);
+  if (!organisation) throw new ApiError(404, 'not_found', 'That organisation was not found.');
+  const existing = await User.findOne({ where: { email: input.email }, attributes: ['id'] });
+  if (existing) {
+    const member = await Membership.findOne({
+      where: { organisationId: input.organisationId, userId: existing.id },
+    });
+    if (member) throw conflict(`${input.email} is already a member (${member.role}).`, 'already_member');
+  }
+  const now = new Date();
+  await Invitation.update(
+    { revokedAt: now },
+    {
+      where: {
+        organisationId: input.organisationId,
+        email: input.email,
+        acceptedAt: null,
+        revokedAt: null,
+        expiresAt: { [Op.gt]: now },
+      },
+    },
+  );
+  const token = newToken();
+  const invitation = await Invitation.create({
+    organisationId: input.organisationId,
+    email: input.email,
+    role: input.role,
+    tokenHash: hashToken(token),
+    invitedById: input.invitedBy.id,
+    expiresAt: new Date(now.getTime() + INVITATION_TTL_MS),
+  });
+  const link = inviteUrl(token);
+  try {
+    await sendMail({
+      to: input.email,
+      subject: `${input.invitedBy.name} invited you to ${organisation.name} on Baskwell`,
+      text: [
+        `${input.invitedBy.name} invited you to join ${organisation.name} on Baskwell as ${ROLE_WORDS[input.role]}.`,
+        '',
+        'Baskwell plans the light and heat of reptile and amphibian enclosures and keeps lamp meter readings.',
+        '',
+        `Accept the invitation: ${link}`,
+        '',
+        'The link works for 7 days and only once. If you were not expecting this, ignore this e-mail.',
+      ].join('\n'),
+    });
+  } catch (error) {
+    // Without the e-mail the invitation is useless (only the recipient can learn the token): undo it.
+    await invitation.destroy();
+    console.error('invitation e-mail could not be sent', error instanceof Error ? error.message : error);
+    throw new ApiError(
+      503,
+      'mail_unavailable',
+      'The invitation e-mail could not be sent, so no invitation was made. Try again in a minute.',
+      undefined,
+      undefined,
+      { 'Retry-After': '30' },
+    );
+  }
+  return invitation;
+}
+
+export function invitationJson(inv: Invitation) {
+  return {
+    id: inv.id,
+    organisationId: inv.organisationId,
+    email: inv.email,
+    role: inv.role,
+    state: invitationState(inv),
+    expiresAt: inv.expiresAt.toISOString(),
+    createdAt: inv.createdAt.toISOString(),
+  };
+}

@@ -1,0 +1,80 @@
+import type { NextAuthOptions } from 'next-auth';
+import CredentialsProvider from 'next-auth/providers/credentials';
+import { authorizeCredentials } from './credentials';
+import { authSecret } from './secret';
+import { loadSessionUser, loadUserById } from './session-user';
+
+/** Sessions last a working day; a changed session version ends them within a minute. */
+export const SESSION_MAX_AGE_S = 8 * 3600;
+export const SESSION_RECHECK_MS = 60_000;
+
+export const authOptions: NextAuthOptions = {
+  session: { strategy: 'jwt', maxAge: SESSION_MAX_AGE_S, updateAge: 15 * 60 },
+  jwt: { maxAge: SESSION_MAX_AGE_S },
+  // A getter: the secret is checked when next-auth first needs it (a request), not when the build imports this file.
+  get secret() {
+    return authSecret();
+  },
+  pages: { signIn: '/sign-in', error: '/sign-in' },
+  providers: [
+    CredentialsProvider({
+      name: 'Email and password',
+      credentials: {
+        email: { label: 'Email', type: 'email' },
+        password: { label: 'Password', type: 'password' },
+      },
+      authorize: (credentials, req) => authorizeCredentials(credentials, req?.headers),
+    }),
+  ],
+  callbacks: {
+    async jwt({ token, user }) {
+      const now = Date.now();
+      if (user) {
+        const fresh = await loadUserById(Number(user.id));
+        if (!fresh) throw new Error('The account could not be loaded.');
+        return {
+          ...token,
+          uid: fresh.id,
+          sv: fresh.sessionVersion,
+          memberships: fresh.memberships,
+          checkedAt: now,
+        };
+      }
+      if (typeof token.uid !== 'number' || typeof token.sv !== 'number')
+        throw new Error('Malformed session.');
+      if (typeof token.checkedAt === 'number' && now - token.checkedAt < SESSION_RECHECK_MS) return token;
+      // Throwing makes next-auth clear the cookie: the session has ended (signed out everywhere or removed).
+      const fresh = await loadSessionUser(token.uid, token.sv);
+      if (!fresh) throw new Error('Session ended.');
+      return {
+        ...token,
+        name: fresh.name,
+        email: fresh.email,
+        memberships: fresh.memberships,
+        checkedAt: now,
+      };
+    },
+    async session({ session, token }) {
+      session.user = {
+        id: token.uid,
+        name: token.name ?? '',
+        email: token.email ?? '',
+        sessionVersion: token.sv,
+        memberships: token.memberships ?? [],
+      };
+      return session;
+    },
+  },
+  logger: {
+    // next-auth's default logger prints request details; keep only the code and message (no bodies, no passwords).
+    error: (code, metadata) => console.error(`auth error ${code}`, errorMessage(metadata)),
+    warn: (code) => console.warn(`auth warning ${code}`),
+    debug: () => {},
+  },
+};
+
+function errorMessage(metadata: unknown): string {
+  if (metadata instanceof Error) return metadata.message;
+  const inner = (metadata as { error?: unknown } | null)?.error;
+  return inner instanceof Error ? inner.message : '';
+}

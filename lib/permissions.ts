@@ -1,0 +1,82 @@
+import type { Role } from '@/models/membership';
+
+/**
+ * Who may do what. A pure function over the session user and a description of the thing, so the rules
+ * can be read in one place and unit-tested without a database. Route handlers load the thing first
+ * (to learn its organisation and keeper) and then ask `can`.
+ */
+
+export type MembershipClaim = { organisationId: number; organisationName: string; role: Role };
+export type SessionUser = { id: number; memberships: MembershipClaim[] };
+
+export type Action = 'read' | 'create' | 'update' | 'delete';
+
+/** Things that belong to one keeper's enclosure share its ownership rules. */
+export const ENCLOSURE_OWNED_KINDS = ['enclosure', 'design', 'variant', 'share', 'lamp', 'reading'] as const;
+export type EnclosureOwnedKind = (typeof ENCLOSURE_OWNED_KINDS)[number];
+
+export type Resource =
+  | { kind: 'organisation'; id: number }
+  | { kind: EnclosureOwnedKind; organisationId: number; keeperId: number }
+  /** A membership (or the list of them when `userId` is left out). */
+  | { kind: 'member'; organisationId: number; userId?: number }
+  /** `role` is the role the invitation grants. */
+  | { kind: 'invitation'; organisationId: number; role?: Role }
+  | { kind: 'species'; organisationId: number }
+  | { kind: 'lamp-type'; organisationId: number }
+  /** The development mail viewer, which shows captured invitation links. */
+  | { kind: 'mail'; organisationId: number };
+
+export function roleIn(user: SessionUser | null | undefined, organisationId: number): Role | null {
+  if (!user) return null;
+  return user.memberships.find((m) => m.organisationId === organisationId)?.role ?? null;
+}
+
+const isStaffOrOwner = (role: Role | null) => role === 'owner' || role === 'staff';
+
+export function can(user: SessionUser | null | undefined, action: Action, resource: Resource): boolean {
+  if (!user) return false;
+  switch (resource.kind) {
+    case 'organisation': {
+      const role = roleIn(user, resource.id);
+      if (action === 'read') return role !== null;
+      // Creating an organisation is open to anyone signed in (sign-up); settings and deletion are the owner's.
+      if (action === 'create') return true;
+      return role === 'owner';
+    }
+    case 'enclosure':
+    case 'design':
+    case 'variant':
+    case 'share':
+    case 'lamp':
+    case 'reading': {
+      const role = roleIn(user, resource.organisationId);
+      if (isStaffOrOwner(role)) return true;
+      // A keeper works on their own enclosures (and everything in them) and sees nothing of other keepers.
+      return role === 'keeper' && resource.keeperId === user.id;
+    }
+    case 'member': {
+      const role = roleIn(user, resource.organisationId);
+      // Staff need the member list to assign enclosures to keepers; keepers do not see other customers.
+      if (action === 'read') return isStaffOrOwner(role);
+      // Adding members happens through invitations; changing roles and removing people is the owner's.
+      return role === 'owner';
+    }
+    case 'invitation': {
+      const role = roleIn(user, resource.organisationId);
+      if (role === 'owner') return true;
+      if (role !== 'staff') return false;
+      if (action === 'read') return true;
+      // Staff bring in customers (keepers); only an owner brings in staff or other owners.
+      return resource.role === 'keeper';
+    }
+    case 'species':
+    case 'lamp-type': {
+      const role = roleIn(user, resource.organisationId);
+      if (action === 'read') return role !== null;
+      return isStaffOrOwner(role);
+    }
+    case 'mail':
+      return action === 'read' && isStaffOrOwner(roleIn(user, resource.organisationId));
+  }
+}

@@ -1,0 +1,26 @@
+import { cookies, headers } from 'next/headers';
+import { redirect } from 'next/navigation';
+import { cache } from 'react';
+import { sessionUserFromHeaders } from '@/lib/api/session';
+import type { CurrentUser } from '@/lib/auth/session-user';
+import type { MembershipClaim } from '@/lib/permissions';
+
+/** The cookie that remembers which of the user's organisations they are working in. */
+export const CURRENT_ORG_COOKIE = 'bw_org';
+
+/** The signed-in user for server components, re-checked in the database; once per request. */
+export const currentUser = cache(async (): Promise<CurrentUser | null> =>
+  sessionUserFromHeaders(await headers()),
+);
+
+export async function requireUser(returnTo?: string): Promise<CurrentUser> {
+  const user = await currentUser();
+  if (!user) redirect(returnTo ? `/sign-in?callbackUrl=${encodeURIComponent(returnTo)}` : '/sign-in');
+  return user;
+}
+
+/** The organisation chosen in the switcher, if it is still one of the user's; else their first. */
+export async function currentMembership(user: CurrentUser): Promise<MembershipClaim | null> {
+  const chosen = Number((await cookies()).get(CURRENT_ORG_COOKIE)?.value);
+  return user.memberships.find((m) => m.organisationId === chosen) ?? user.memberships[0] ?? null;
+}

@@ -1,0 +1,238 @@
+import { afterAll, beforeEach, describe, expect, it } from 'vitest';
+import * as collection from '@/app/api/enclosures/route';
+import * as item from '@/app/api/enclosures/[id]/route';
+import { Enclosure, type Organisation, type User } from '@/models';
+import {
+  addMember,
+  closeDatabase,
+  createEnclosure,
+  createMember,
+  createUser,
+  resetDatabase,
+} from '../helpers/db';
+import { call, expectNoInternals } from './http';
+
+afterAll(closeDatabase);
+
+let shop: Organisation;
+let owner: User;
+let staff: User;
+let keeperA: User;
+let keeperB: User;
+let otherOrg: Organisation;
+let outsider: User;
+let enclosureA: Enclosure;
+let enclosureB: Enclosure;
+let foreign: Enclosure;
+
+beforeEach(async () => {
+  await resetDatabase();
+  ({ organisation: shop, user: owner } = await createMember('owner'));
+  staff = (await createUser()).user;
+  keeperA = (await createUser()).user;
+  keeperB = (await createUser()).user;
+  await addMember(shop, staff, 'staff');
+  await addMember(shop, keeperA, 'keeper');
+  await addMember(shop, keeperB, 'keeper');
+  ({ organisation: otherOrg, user: outsider } = await createMember('owner'));
+  enclosureA = await createEnclosure(shop, keeperA, { name: 'A desert vivarium' });
+  enclosureB = await createEnclosure(shop, keeperB, { name: 'B rainforest tank' });
+  foreign = await createEnclosure(otherOrg, outsider, { name: 'Elsewhere' });
+});
+
+const list = (as: User | null, organisationId: number, extra = '') =>
+  call(collection.GET, { path: `/api/enclosures?organisationId=${organisationId}${extra}`, as });
+
+describe('GET /api/enclosures', () => {
+  it('shows staff every enclosure of the organisation and a keeper only their own', async () => {
+    const all = await list(staff, shop.id);
+    expect(all.status).toBe(200);
+    expect(all.body.items.map((e: { name: string }) => e.name).sort()).toEqual([
+      'A desert vivarium',
+      'B rainforest tank',
+    ]);
+    expect(all.body.items[0].keeperName).toBeTruthy();
+
+    const mine = await list(keeperA, shop.id);
+    expect(mine.status).toBe(200);
+    expect(mine.body.items.map((e: { id: number }) => e.id)).toEqual([enclosureA.id]);
+  });
+
+  it('hides another keeper and another organisation behind 404', async () => {
+    expect((await list(keeperA, shop.id, `&keeperId=${keeperB.id}`)).status).toBe(404);
+    const other = await list(keeperA, otherOrg.id);
+    expect(other.status).toBe(404);
+    expect(other.body.error.code).toBe('not_found');
+    expect(JSON.stringify(other.body)).not.toContain('Elsewhere');
+  });
+
+  it('pages with cursor and limit', async () => {
+    for (let i = 0; i < 3; i++) await createEnclosure(shop, keeperA);
+    const first = await list(owner, shop.id, '&limit=2');
+    expect(first.body.items).toHaveLength(2);
+    expect(first.body.nextCursor).toBeTruthy();
+    const second = await list(owner, shop.id, `&limit=2&cursor=${first.body.nextCursor}`);
+    expect(second.body.items).toHaveLength(2);
+    const third = await list(owner, shop.id, `&limit=2&cursor=${second.body.nextCursor}`);
+    expect(third.body.items).toHaveLength(1);
+    expect(third.body.nextCursor).toBeNull();
+    const ids = [...first.body.items, ...second.body.items, ...third.body.items].map(
+      (e: { id: number }) => e.id,
+    );
+    expect(new Set(ids).size).toBe(5);
+  });
+
+  it('answers 401 without a session and 400 naming the field for a bad query', async () => {
+    const anon = await list(null, shop.id);
+    expect(anon.status).toBe(401);
+    expect(anon.body.error.code).toBe('unauthenticated');
+    const bad = await call(collection.GET, { path: '/api/enclosures?organisationId=abc', as: staff });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.field).toBe('organisationId');
+    const tooMany = await list(staff, shop.id, '&limit=1000');
+    expect(tooMany.status).toBe(400);
+    expect(tooMany.body.error.field).toBe('limit');
+  });
+});
+
+describe('POST /api/enclosures', () => {
+  const valid = () => ({
+    organisationId: shop.id,
+    keeperId: keeperA.id,
+    name: 'New vivarium',
+    widthCm: 150,
+    heightCm: 60,
+    depthCm: 60,
+    speciesName: 'Bearded dragon',
+  });
+
+  it('lets staff create an enclosure for a keeper', async () => {
+    const r = await call(collection.POST, {
+      method: 'POST',
+      path: '/api/enclosures',
+      as: staff,
+      body: valid(),
+    });
+    expect(r.status).toBe(201);
+    expect(r.body).toMatchObject({
+      name: 'New vivarium',
+      keeperId: keeperA.id,
+      widthCm: 150,
+      animalName: null,
+    });
+    expect(await Enclosure.count({ where: { organisationId: shop.id } })).toBe(3);
+  });
+
+  it('lets a keeper create their own enclosure but not one for another keeper', async () => {
+    const { keeperId: _k, ...withoutKeeper } = valid();
+    const own = await call(collection.POST, {
+      method: 'POST',
+      path: '/api/enclosures',
+      as: keeperB,
+      body: withoutKeeper,
+    });
+    expect(own.status).toBe(201);
+    expect(own.body.keeperId).toBe(keeperB.id);
+    const forOther = await call(collection.POST, {
+      method: 'POST',
+      path: '/api/enclosures',
+      as: keeperB,
+      body: valid(),
+    });
+    expect(forOther.status).toBe(404);
+  });
+
+  it.each([
+    ['name', { name: '' }, 'Enter a name'],
+    ['widthCm', { widthCm: -5 }, 'more than 0'],
+    ['heightCm', { heightCm: 'tall' }, 'centimetres'],
+    ['depthCm', { depthCm: 5000 }, 'at most 2000'],
+    ['keeperId', { keeperId: 'x' }, 'number'],
+    ['notes', { notes: 'x'.repeat(6000) }, 'at most 5000'],
+  ])('answers 400 naming %s', async (field, patch, words) => {
+    const r = await call(collection.POST, {
+      method: 'POST',
+      path: '/api/enclosures',
+      as: staff,
+      body: { ...valid(), ...patch },
+    });
+    expect(r.status).toBe(400);
+    expect(r.body.error.code).toBe('invalid');
+    expect(r.body.error.field).toBe(field);
+    expect(r.body.error.message).toContain(words);
+    expectNoInternals(r);
+  });
+
+  it('refuses a keeper who is not a member of the organisation', async () => {
+    const r = await call(collection.POST, {
+      method: 'POST',
+      path: '/api/enclosures',
+      as: owner,
+      body: { ...valid(), keeperId: outsider.id },
+    });
+    expect(r.status).toBe(400);
+    expect(r.body.error.field).toBe('keeperId');
+  });
+});
+
+describe('/api/enclosures/[id]', () => {
+  const get = (as: User, id: number) => call(item.GET, { path: `/api/enclosures/${id}`, params: { id }, as });
+  const patch = (as: User, id: number, body: unknown) =>
+    call(item.PATCH, { method: 'PATCH', path: `/api/enclosures/${id}`, params: { id }, as, body });
+  const del = (as: User, id: number) =>
+    call(item.DELETE, { method: 'DELETE', path: `/api/enclosures/${id}`, params: { id }, as });
+
+  it('a keeper reads and edits their own enclosure', async () => {
+    expect((await get(keeperA, enclosureA.id)).body.name).toBe('A desert vivarium');
+    const r = await patch(keeperA, enclosureA.id, { animalName: 'Sable', widthCm: 122 });
+    expect(r.status).toBe(200);
+    expect(r.body).toMatchObject({ animalName: 'Sable', widthCm: 122, name: 'A desert vivarium' });
+  });
+
+  it("a keeper cannot read, change or delete another keeper's enclosure", async () => {
+    for (const r of [
+      await get(keeperA, enclosureB.id),
+      await patch(keeperA, enclosureB.id, { name: 'Mine now' }),
+      await del(keeperA, enclosureB.id),
+    ]) {
+      expect(r.status).toBe(404);
+      expect(r.text).not.toContain('rainforest');
+    }
+    const unchanged = await Enclosure.findByPk(enclosureB.id);
+    expect(unchanged?.name).toBe('B rainforest tank');
+  });
+
+  it("nobody reaches another organisation's enclosure", async () => {
+    for (const as of [owner, staff, keeperA]) {
+      expect((await get(as, foreign.id)).status).toBe(404);
+      expect((await patch(as, foreign.id, { name: 'x' })).status).toBe(404);
+      expect((await del(as, foreign.id)).status).toBe(404);
+    }
+    expect(await Enclosure.findByPk(foreign.id)).not.toBeNull();
+  });
+
+  it('a keeper cannot hand their enclosure to another keeper; staff can', async () => {
+    const refused = await patch(keeperA, enclosureA.id, { keeperId: keeperB.id });
+    expect(refused.status).toBe(403);
+    const moved = await patch(staff, enclosureA.id, { keeperId: keeperB.id });
+    expect(moved.status).toBe(200);
+    expect(moved.body.keeperId).toBe(keeperB.id);
+  });
+
+  it('answers 400 naming the field, and for an empty change', async () => {
+    const bad = await patch(staff, enclosureA.id, { heightCm: 0 });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.field).toBe('heightCm');
+    const empty = await patch(staff, enclosureA.id, {});
+    expect(empty.status).toBe(400);
+    const badId = await call(item.GET, { path: '/api/enclosures/abc', params: { id: 'abc' }, as: staff });
+    expect(badId.status).toBe(400);
+    expect(badId.body.error.field).toBe('id');
+  });
+
+  it('staff delete an enclosure', async () => {
+    expect((await del(staff, enclosureA.id)).status).toBe(200);
+    expect(await Enclosure.findByPk(enclosureA.id)).toBeNull();
+    expect((await get(staff, enclosureA.id)).status).toBe(404);
+  });
+});
