@@ -1,0 +1,80 @@
+import bcrypt from 'bcryptjs';
+import type { Sequelize, Transaction } from 'sequelize';
+import { Enclosure, Membership, Organisation, User, initModels } from '@/models';
+import { DEMO_ORGANISATIONS, DEMO_PASSWORDS, type DemoOrganisation } from './scenario';
+
+export type SeedResult = {
+  created: { organisations: number; users: number; memberships: number; enclosures: number };
+};
+
+/** bcrypt cost for demo accounts: quick to seed, still a real hash. */
+const DEMO_HASH_COST = 10;
+
+/**
+ * Finds the organisation of a demo scenario: by name, or, when someone renamed it, through its demo
+ * owner's owner membership, so a renamed organisation is not created a second time.
+ */
+async function findOrganisation(org: DemoOrganisation, transaction: Transaction) {
+  const byName = await Organisation.findOne({
+    where: { name: org.name },
+    order: [['id', 'ASC']],
+    transaction,
+  });
+  if (byName) return byName;
+  const owner = org.people.find((p) => p.role === 'owner');
+  if (!owner) return null;
+  const user = await User.findOne({ where: { email: owner.email }, transaction });
+  if (!user) return null;
+  const membership = await Membership.findOne({
+    where: { userId: user.id, role: 'owner' },
+    order: [['id', 'ASC']],
+    transaction,
+  });
+  return membership ? Organisation.findByPk(membership.organisationId, { transaction }) : null;
+}
+
+/**
+ * Adds the demo scenario where it is missing, in one transaction. Idempotent: rows are found again by
+ * organisation name, e-mail and enclosure name; nothing that exists is changed or deleted, so demo
+ * accounts keep any password or data their users gave them.
+ */
+export async function seedDemo(sequelize: Sequelize): Promise<SeedResult> {
+  initModels(sequelize);
+  const created = { organisations: 0, users: 0, memberships: 0, enclosures: 0 };
+  await sequelize.transaction(async (transaction) => {
+    for (const org of DEMO_ORGANISATIONS) {
+      let organisation = await findOrganisation(org, transaction);
+      if (!organisation) {
+        organisation = await Organisation.create({ name: org.name }, { transaction });
+        created.organisations++;
+      }
+      for (const person of org.people) {
+        const email = person.email.toLowerCase();
+        let user = await User.findOne({ where: { email }, transaction });
+        if (!user) {
+          const passwordHash = await bcrypt.hash(DEMO_PASSWORDS[person.role], DEMO_HASH_COST);
+          user = await User.create({ email, name: person.name, passwordHash }, { transaction });
+          created.users++;
+        }
+        const membership = await Membership.findOne({
+          where: { organisationId: organisation.id, userId: user.id },
+          transaction,
+        });
+        if (!membership) {
+          await Membership.create(
+            { organisationId: organisation.id, userId: user.id, role: person.role },
+            { transaction },
+          );
+          created.memberships++;
+        }
+        for (const enclosure of person.enclosures ?? []) {
+          const where = { organisationId: organisation.id, keeperId: user.id, name: enclosure.name };
+          if (await Enclosure.findOne({ where, transaction })) continue;
+          await Enclosure.create({ ...where, ...enclosure }, { transaction });
+          created.enclosures++;
+        }
+      }
+    }
+  });
+  return { created };
+}
