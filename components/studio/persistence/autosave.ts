@@ -109,7 +109,9 @@ export class Autosave {
     if (this.disposed || this._state.kind === 'conflict') return;
     if (this.inFlight) {
       await this.inFlight;
-      if (this.hasUnsaved && this._state.kind !== 'conflict' && this._state.kind !== 'offline') {
+      // Read the state afresh: the save that just finished may have changed it.
+      const kind = this.state.kind as SaveState['kind'];
+      if (this.hasUnsaved && kind !== 'conflict' && kind !== 'offline') {
         return this.flush();
       }
       return;
@@ -122,7 +124,7 @@ export class Autosave {
       this.inFlight = null;
     });
     await this.inFlight;
-    if (this.hasUnsaved && this._state.kind === 'saved') {
+    if (this.hasUnsaved && (this.state.kind as SaveState['kind']) === 'saved') {
       // Changes made while the request was running.
       this.setState({ kind: 'pending' });
       this.schedule(this.debounceMs);
