@@ -1,3 +1,4 @@
+import { UniqueConstraintError } from 'sequelize';
 import { getSequelize } from '@/lib/db';
 import { createLampType } from '@/lib/lamp-types/store';
 import { STARTING_LAMP_TYPES } from '@/lib/lamp-types/starting-lamp-types';
@@ -17,13 +18,13 @@ export async function seedStartingCatalogue(organisationId: number): Promise<boo
   const sequelize = getSequelize();
   if (await CatalogueSeeding.findByPk(organisationId)) return false;
   return sequelize.transaction(async (transaction) => {
-    // Claim the organisation first; a concurrent caller blocks on the row lock, then sees it and stops.
-    const [, createdNow] = await CatalogueSeeding.findOrCreate({
-      where: { organisationId },
-      defaults: { organisationId, seededAt: new Date() },
-      transaction,
-    });
-    if (!createdNow) return false;
+    // Claim the organisation first: a concurrent caller blocks on the key, then fails on it and stops.
+    try {
+      await CatalogueSeeding.create({ organisationId, seededAt: new Date() }, { transaction });
+    } catch (e) {
+      if (e instanceof UniqueConstraintError) return false;
+      throw e;
+    }
     await SpeciesSheet.bulkCreate(
       STARTING_SHEETS.map(({ seedKey, ...sheet }) => ({
         organisationId,

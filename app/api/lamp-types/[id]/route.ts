@@ -1,0 +1,49 @@
+import { ForeignKeyConstraintError, UniqueConstraintError } from 'sequelize';
+import { allow, conflict, json, notFound, route } from '@/lib/api';
+import { idParams } from '@/lib/api/schemas';
+import type { CurrentUser } from '@/lib/auth/session-user';
+import { lampTypePatchSchema } from '@/lib/lamp-types/schema';
+import { findLampType, toDto, updateLampType } from '@/lib/lamp-types/store';
+
+async function load(id: number, user: CurrentUser, action: 'read' | 'update' | 'delete') {
+  const row = await findLampType(id);
+  if (!row) throw notFound('That lamp type');
+  allow(user, action, { kind: 'lamp-type', organisationId: row.organisationId }, 'That lamp type');
+  return row;
+}
+
+export const GET = route({
+  params: idParams,
+  handler: async ({ params, user }) => toDto(await load(params.id, user, 'read')),
+});
+
+export const PATCH = route({
+  params: idParams,
+  body: lampTypePatchSchema,
+  handler: async ({ params, body, user }) => {
+    const row = await load(params.id, user, 'update');
+    try {
+      return toDto(await updateLampType(row, body, user.id));
+    } catch (e) {
+      if (e instanceof UniqueConstraintError) throw conflict('Another lamp type already has that name.');
+      throw e;
+    }
+  },
+});
+
+/** Refused (409) while lamps in the lamp log use this type: their history depends on it. */
+export const DELETE = route({
+  params: idParams,
+  handler: async ({ params, user }) => {
+    const row = await load(params.id, user, 'delete');
+    try {
+      await row.destroy();
+    } catch (e) {
+      if (e instanceof ForeignKeyConstraintError) {
+        throw conflict('Lamps in the lamp log use this lamp type, so it cannot be removed.', 'in_use');
+      }
+      throw e;
+    }
+    return json({ ok: true });
+  },
+});

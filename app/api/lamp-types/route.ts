@@ -1,0 +1,40 @@
+import { UniqueConstraintError } from 'sequelize';
+import { z } from 'zod';
+import { allow, conflict, created, page, pageQuery, route } from '@/lib/api';
+import { idSchema } from '@/lib/api/schemas';
+import { lampTypeInputSchema } from '@/lib/lamp-types/schema';
+import { createLampType, listLampTypes, toDto } from '@/lib/lamp-types/store';
+import { ensureStartingCatalogue } from '@/lib/species/seed';
+import { LAMP_TECH_IDS } from '@/models/lamp-type';
+
+/** The organisation's lamp catalogue (`?organisationId=`, optional `tech`). Any member reads. */
+export const GET = route({
+  query: z.object({
+    organisationId: idSchema('The organisation id'),
+    tech: z
+      .enum(LAMP_TECH_IDS, { error: `The technology must be one of: ${LAMP_TECH_IDS.join(', ')}.` })
+      .optional(),
+    ...pageQuery,
+  }),
+  handler: async ({ query, user }) => {
+    allow(user, 'read', { kind: 'lamp-type', organisationId: query.organisationId }, 'That organisation');
+    await ensureStartingCatalogue(query.organisationId);
+    const rows = await listLampTypes(query.organisationId, query);
+    return page(rows, query.limit, toDto);
+  },
+});
+
+/** A custom catalogue entry (owner and staff). Names are unique within the organisation (409). */
+export const POST = route({
+  body: z.intersection(z.object({ organisationId: idSchema('The organisation id') }), lampTypeInputSchema),
+  handler: async ({ body, user }) => {
+    const { organisationId, ...input } = body;
+    allow(user, 'create', { kind: 'lamp-type', organisationId }, 'That organisation');
+    try {
+      return created(toDto(await createLampType(organisationId, input, user.id)));
+    } catch (e) {
+      if (e instanceof UniqueConstraintError) throw conflict('Another lamp type already has that name.');
+      throw e;
+    }
+  },
+});
