@@ -1,0 +1,75 @@
+import { z } from 'zod';
+import { parseDesign, type Design } from '@/simulation/model';
+import { pageQuery } from '@/lib/api';
+import { MAX_SHARE_DAYS } from './shares';
+
+/** Request shapes of the design, variant and share routes. */
+
+export const idParams = z.object({
+  id: z.coerce
+    .number({ error: 'The id must be a number.' })
+    .int()
+    .positive('The id must be a positive number.'),
+});
+
+export const nameField = z
+  .string({ error: 'Give it a name.' })
+  .trim()
+  .min(1, 'Give it a name.')
+  .max(120, 'Keep the name to 120 characters.');
+
+/**
+ * A design file, checked (and migrated from older versions) by the engine's own parser. The issue path
+ * is the file's own path, so the API's `field` reads e.g. `design.objects[2].uvbAt30`.
+ */
+export const designFile = z.unknown().transform((value, ctx): Design => {
+  const r = parseDesign(value);
+  if (r.ok) return r.design;
+  const where = r.error.path || 'design';
+  ctx.addIssue({
+    code: 'custom',
+    path: r.error.path ? [r.error.path] : [],
+    message: `${where}: ${r.error.message}`,
+  });
+  return z.NEVER;
+});
+
+export const listQuery = z.object(pageQuery);
+export const designListQuery = z.object({
+  ...pageQuery,
+  q: z.string().trim().max(120, 'Keep the search to 120 characters.').optional(),
+});
+
+export const createDesignBody = z.strictObject({
+  name: nameField,
+  variantName: nameField.optional(),
+  design: designFile.optional(),
+});
+
+export const renameBody = z.strictObject({ name: nameField });
+
+export const createVariantBody = z
+  .strictObject({
+    name: nameField,
+    design: designFile.optional(),
+    fromVariantId: idParams.shape.id.optional(),
+  })
+  .refine((b) => !(b.design !== undefined && b.fromVariantId !== undefined), {
+    message: 'Send either a design or fromVariantId, not both.',
+    path: ['fromVariantId'],
+  });
+
+export const saveVariantBody = z.strictObject({
+  design: designFile,
+  baseVersion: z.number({ error: 'baseVersion must be the version you started from.' }).int().positive(),
+  name: nameField.optional(),
+});
+
+export const createShareBody = z.strictObject({
+  expiresInDays: z
+    .number({ error: 'expiresInDays must be a number of days.' })
+    .int('expiresInDays must be a whole number of days.')
+    .min(1, 'A link lasts at least 1 day.')
+    .max(MAX_SHARE_DAYS, `A link lasts at most ${MAX_SHARE_DAYS} days.`)
+    .optional(),
+});

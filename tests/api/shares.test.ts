@@ -1,0 +1,123 @@
+import { describe, expect, it } from 'vitest';
+import * as enclosureDesignsRoute from '@/app/api/enclosures/[id]/designs/route';
+import * as shareRoute from '@/app/api/shares/[id]/route';
+import * as sharesRoute from '@/app/api/variants/[id]/shares/route';
+import { resolveShareToken } from '@/lib/variants/shares';
+import { hashShareToken } from '@/lib/variants/tokens';
+import { ShareLink } from '@/models';
+import {
+  createEnclosure,
+  createMember,
+  createOrganisation,
+  useTestDatabase as withTestDatabase,
+} from '../helpers/db';
+import { call } from './variants.helpers';
+
+withTestDatabase();
+
+async function world() {
+  const org = await createOrganisation('Shop A');
+  const { user: staff } = await createMember('staff', org);
+  const { user: keeper } = await createMember('keeper', org);
+  const enclosure = await createEnclosure(org, keeper, { name: 'Desert tank', speciesName: null });
+  const r = await call(enclosureDesignsRoute.POST, {
+    method: 'POST',
+    path: `/api/enclosures/${enclosure.id}/designs`,
+    params: { id: enclosure.id },
+    user: staff,
+    body: { name: 'Plan', variantName: 'Low lamp' },
+  });
+  return { org, staff, keeper, enclosure, variantId: r.body.variant.id as number };
+}
+
+const share = (w: Awaited<ReturnType<typeof world>>, user = w.keeper, body: unknown = {}) =>
+  call(sharesRoute.POST, {
+    method: 'POST',
+    path: `/api/variants/${w.variantId}/shares`,
+    params: { id: w.variantId },
+    user,
+    body,
+  });
+
+describe('share links', () => {
+  it('creates a link whose token is shown once and stored only as its SHA-256', async () => {
+    const w = await world();
+    const r = await share(w);
+    expect(r.status).toBe(201);
+    const { token, url, id, state, expiresAt } = r.body.share;
+    expect(token).toMatch(/^[A-Za-z0-9_-]{43}$/);
+    expect(url).toMatch(new RegExp(`/s/${token}$`));
+    expect(state).toBe('active');
+    expect(expiresAt).toBeNull();
+    const row = await ShareLink.findByPk(id);
+    expect(row!.tokenHash).toBe(hashShareToken(token));
+    expect(JSON.stringify(row!.toJSON())).not.toContain(token);
+
+    const list = await call(sharesRoute.GET, {
+      path: `/api/variants/${w.variantId}/shares`,
+      params: { id: w.variantId },
+      user: w.staff,
+    });
+    expect(list.status).toBe(200);
+    expect(list.body.items).toHaveLength(1);
+    expect(JSON.stringify(list.body)).not.toContain(token);
+  });
+
+  it('opens exactly the shared variant while active', async () => {
+    const w = await world();
+    const { token } = (await share(w)).body.share;
+    const s = await resolveShareToken(token);
+    expect(s).not.toBeNull();
+    expect(s!.variant).toMatchObject({ id: w.variantId, name: 'Low lamp' });
+    expect(s!.enclosureName).toBe('Desert tank');
+    expect(s!.organisationName).toBe('Shop A');
+    expect(s!.design.enclosure.width).toBe(120);
+  });
+
+  it('stops working once revoked (404), and revoking twice keeps the first time', async () => {
+    const w = await world();
+    const { token, id } = (await share(w)).body.share;
+    const revoke = () =>
+      call(shareRoute.DELETE, { method: 'DELETE', path: `/api/shares/${id}`, params: { id }, user: w.staff });
+    const first = await revoke();
+    expect(first.status).toBe(200);
+    expect(first.body.share.state).toBe('revoked');
+    expect(await resolveShareToken(token)).toBeNull();
+    const second = await revoke();
+    expect(second.body.share.revokedAt).toBe(first.body.share.revokedAt);
+  });
+
+  it('stops working once expired', async () => {
+    const w = await world();
+    const r = await share(w, w.keeper, { expiresInDays: 7 });
+    const { token, id, expiresAt } = r.body.share;
+    const days = (new Date(expiresAt).getTime() - Date.now()) / 86_400_000;
+    expect(days).toBeGreaterThan(6.99);
+    expect(days).toBeLessThanOrEqual(7);
+    expect(await resolveShareToken(token)).not.toBeNull();
+    // Eight days later, as the page sees it …
+    expect(await resolveShareToken(token, new Date(Date.now() + 8 * 86_400_000))).toBeNull();
+    // … and as stored: an expiry already in the past.
+    await ShareLink.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { id } });
+    expect(await resolveShareToken(token)).toBeNull();
+  });
+
+  it('answers nothing for unknown or malformed tokens', async () => {
+    const w = await world();
+    const { token } = (await share(w)).body.share;
+    const flipped = (token[0] === 'A' ? 'B' : 'A') + token.slice(1);
+    expect(await resolveShareToken(flipped)).toBeNull();
+    expect(await resolveShareToken(token.slice(1))).toBeNull();
+    expect(await resolveShareToken(hashShareToken(token))).toBeNull();
+  });
+
+  it('validates the expiry', async () => {
+    const w = await world();
+    for (const expiresInDays of [0, 366, 1.5, '7']) {
+      const r = await share(w, w.keeper, { expiresInDays });
+      expect(r.status).toBe(400);
+      expect(r.body.error.field).toBe('expiresInDays');
+    }
+    expect(await ShareLink.count()).toBe(0);
+  });
+});
