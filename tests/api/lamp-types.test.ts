@@ -4,10 +4,16 @@ import * as item from '@/app/api/lamp-types/[id]/route';
 import { STARTING_LAMP_TYPES } from '@/lib/lamp-types/starting-lamp-types';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { Lamp, LampType, type Organisation, type User } from '@/models';
-import { addMember, createEnclosure, createMember, createUser, useTestDatabase } from '../helpers/db';
+import {
+  addMember,
+  createEnclosure,
+  createMember,
+  createUser,
+  useTestDatabase as withTestDatabase,
+} from '../helpers/db';
 import { call, expectNoInternals } from './http';
 
-useTestDatabase();
+withTestDatabase();
 
 let shop: Organisation;
 let owner: User;

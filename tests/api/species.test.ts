@@ -4,10 +4,10 @@ import * as item from '@/app/api/species/[id]/route';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { STARTING_SHEETS } from '@/lib/species/starting-sheets';
 import { CatalogueSeeding, LampType, SpeciesSheet, type Organisation, type User } from '@/models';
-import { addMember, createMember, createUser, useTestDatabase } from '../helpers/db';
+import { addMember, createMember, createUser, useTestDatabase as withTestDatabase } from '../helpers/db';
 import { call, expectNoInternals } from './http';
 
-useTestDatabase();
+withTestDatabase();
 
 let shop: Organisation;
 let owner: User;
