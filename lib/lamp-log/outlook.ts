@@ -1,0 +1,266 @@
+import type { ReadingUnit } from '@/models/reading';
+import { addDays, dayNumber, DAYS_PER_MONTH, isoDay } from './dates';
+import { defaultDecayFor, type DecaySource } from './decay';
+import { band, firstDayBelow, fitDecay, predict, type DecayFit } from './fit';
+import { distanceFactor, REFERENCE_CM, toReference, type LampShape } from './geometry';
+import { baskingNeed, type SpeciesNeed } from './need';
+
+/**
+ * Everything the lamp log says about one installed lamp: its age, its readings brought to 30 cm, the
+ * fitted decay, when the basking zone will fall below the species' need, when it is next due for a test
+ * or a replacement, and a status. Pure: the caller loads the rows and passes "today".
+ */
+
+/** How often to test a UV lamp with a meter: every 3 months (common practice, no published source). */
+export const TEST_INTERVAL_DAYS = 91;
+/** Say "test soon" / "replace" this many days ahead of the date. */
+export const SOON_DAYS = 14;
+/** Look this far ahead for the day the basking zone falls below the need. */
+export const HORIZON_DAYS = 5 * 365;
+
+export type LampFacts = {
+  id: number;
+  label: string;
+  firstUsedOn: string;
+  hoursPerDay: number;
+  retiredOn: string | null;
+  baskingDistanceCm: number | null;
+  baskingTransmission: number | null;
+  type: DecaySource &
+    LampShape & { name: string; uvbAt30: number; uviPerUvb: number; replaceAfterMonths: number | null };
+};
+
+export type ReadingFacts = {
+  id?: number;
+  takenAt: Date | string;
+  distanceCm: number;
+  value: number;
+  unit: ReadingUnit;
+};
+
+export type Status = 'fine' | 'test-soon' | 'replace' | 'retired' | 'heat-only';
+
+export const STATUS_LABEL: Record<Status, string> = {
+  fine: 'Fine',
+  'test-soon': 'Test soon',
+  replace: 'Replace',
+  retired: 'Retired',
+  'heat-only': 'No UV (heat)',
+};
+
+export type NormalisedPoint = {
+  id?: number;
+  days: number;
+  takenAt: string;
+  value: number;
+  raw: number;
+  distanceCm: number;
+};
+
+export type Outlook = {
+  ageDays: number;
+  ageMonths: number;
+  unit: ReadingUnit | null;
+  points: NormalisedPoint[];
+  fit: DecayFit;
+  lastReading: { takenAt: string; value: number; unit: ReadingUnit; distanceCm: number } | null;
+  /** Share of the new lamp's output left today (fitted, else the catalogue curve). */
+  remainingFraction: number;
+  /** Fitted output today at 30 cm, in `unit`; null without readings. */
+  nowAt30: number | null;
+  basking: {
+    distanceCm: number;
+    distanceFrom: 'lamp' | 'latest reading';
+    transmission: number;
+    valueNow: number;
+    threshold: number;
+    needLabel: string;
+  } | null;
+  /** What is missing to say when the basking zone falls below the need. */
+  missing: string[];
+  fallsBelowOn: string | null;
+  /** The same date for the lower edge of the 95 % band: "could be as early as". */
+  fallsBelowEarliestOn: string | null;
+  testDueOn: string | null;
+  replaceDueOn: string | null;
+  replaceBasis: 'readings' | 'typical interval' | null;
+  status: Status;
+  reasons: string[];
+};
+
+/** Which unit to fit: the one with more readings; broadband µW/cm² on a tie. */
+export function mainUnit(readings: readonly ReadingFacts[]): ReadingUnit | null {
+  const uvb = readings.filter((r) => r.unit === 'uvb').length;
+  const uvi = readings.length - uvb;
+  if (readings.length === 0) return null;
+  return uvb >= uvi ? 'uvb' : 'uvi';
+}
+
+export function normalise(
+  lamp: LampFacts,
+  readings: readonly ReadingFacts[],
+  unit: ReadingUnit,
+): NormalisedPoint[] {
+  const start = dayNumber(lamp.firstUsedOn);
+  return readings
+    .filter((r) => r.unit === unit && r.distanceCm > 0)
+    .map((r) => {
+      const takenAt = typeof r.takenAt === 'string' ? r.takenAt : r.takenAt.toISOString();
+      return {
+        ...(r.id !== undefined ? { id: r.id } : {}),
+        days: dayNumber(r.takenAt) - start,
+        takenAt,
+        value: toReference(lamp.type, r.value, r.distanceCm),
+        raw: r.value,
+        distanceCm: r.distanceCm,
+      };
+    })
+    .sort((a, b) => a.days - b.days);
+}
+
+export function lampOutlook(
+  lamp: LampFacts,
+  readings: readonly ReadingFacts[],
+  species: SpeciesNeed | null,
+  today: string,
+): Outlook {
+  const start = dayNumber(lamp.firstUsedOn);
+  const endDay = lamp.retiredOn ? Math.min(dayNumber(lamp.retiredOn), dayNumber(today)) : dayNumber(today);
+  const ageDays = Math.max(0, Math.floor(endDay - start));
+  const ageMonths = ageDays / DAYS_PER_MONTH;
+  const decay = defaultDecayFor(lamp.type, lamp.hoursPerDay);
+  const unit = mainUnit(readings);
+  const points = unit ? normalise(lamp, readings, unit) : [];
+  const fit = fitDecay(
+    points.map((p) => ({ days: p.days, value: p.value })),
+    decay,
+  );
+  const latest = [...readings].sort((a, b) => dayNumber(b.takenAt) - dayNumber(a.takenAt))[0];
+  const lastReading = latest
+    ? {
+        takenAt: typeof latest.takenAt === 'string' ? latest.takenAt : latest.takenAt.toISOString(),
+        value: latest.value,
+        unit: latest.unit,
+        distanceCm: latest.distanceCm,
+      }
+    : null;
+  const curve = (d: number) => predict(fit, d, decay);
+  const nowAt30 = curve(ageDays);
+  const atStart = curve(0);
+  const remainingFraction = nowAt30 !== null && atStart ? nowAt30 / atStart : decay(ageDays);
+
+  const base = { ageDays, ageMonths, unit, points, fit, lastReading, remainingFraction, nowAt30 };
+  const reasons: string[] = [];
+  const missing: string[] = [];
+
+  if (lamp.retiredOn) {
+    return {
+      ...base,
+      basking: null,
+      missing,
+      fallsBelowOn: null,
+      fallsBelowEarliestOn: null,
+      testDueOn: null,
+      replaceDueOn: null,
+      replaceBasis: null,
+      status: 'retired',
+      reasons: [`Retired on ${lamp.retiredOn}.`],
+    };
+  }
+  if (!(lamp.type.uvbAt30 > 0) && readings.length === 0) {
+    return {
+      ...base,
+      basking: null,
+      missing,
+      fallsBelowOn: null,
+      fallsBelowEarliestOn: null,
+      testDueOn: null,
+      replaceDueOn: null,
+      replaceBasis: null,
+      status: 'heat-only',
+      reasons: [
+        'A heat lamp with no UV output: replace it when it fails. Check temperatures with a thermometer.',
+      ],
+    };
+  }
+
+  // Test schedule: a first reading when new, then every few months.
+  const testDueOn = lastReading
+    ? addDays(isoDay(dayNumber(lastReading.takenAt)), TEST_INTERVAL_DAYS)
+    : lamp.firstUsedOn;
+
+  // Basking zone: the fitted 30 cm output brought to the basking distance, through whatever lies between.
+  let basking: Outlook['basking'] = null;
+  let fallsBelowOn: string | null = null;
+  let fallsBelowEarliestOn: string | null = null;
+  const distance = lamp.baskingDistanceCm ?? lastReading?.distanceCm ?? null;
+  const distanceFrom = lamp.baskingDistanceCm ? 'lamp' : 'latest reading';
+  const need = unit ? baskingNeed(species, unit, lamp.type.uviPerUvb) : null;
+  if (!unit) missing.push('a meter reading');
+  if (need && !need.ok) missing.push(need.missing);
+  if (!distance) missing.push('the distance from the lamp to the basking spot');
+  if (unit && need?.ok && distance && nowAt30 !== null) {
+    const transmission = lamp.baskingTransmission ?? 1;
+    const k = distanceFactor(lamp.type, REFERENCE_CM, distance) * transmission;
+    basking = {
+      distanceCm: distance,
+      distanceFrom,
+      transmission,
+      valueNow: nowAt30 * k,
+      threshold: need.threshold,
+      needLabel: need.label,
+    };
+    const threshold30 = need.threshold / k;
+    const cross = firstDayBelow(curve, threshold30, 0, HORIZON_DAYS);
+    if (cross !== null) fallsBelowOn = isoDay(start + cross);
+    const lower = (d: number) => band(fit, d)?.[0] ?? curve(d);
+    const early = firstDayBelow(lower, threshold30, 0, HORIZON_DAYS);
+    if (early !== null) fallsBelowEarliestOn = isoDay(start + early);
+  }
+
+  // Replacement: from the readings when we can, else the lamp type's typical interval.
+  let replaceDueOn: string | null = fallsBelowOn;
+  let replaceBasis: Outlook['replaceBasis'] = fallsBelowOn ? 'readings' : null;
+  if (!basking && lamp.type.replaceAfterMonths) {
+    const days = (lamp.type.replaceAfterMonths * DAYS_PER_MONTH * 12) / lamp.hoursPerDay;
+    replaceDueOn = isoDay(start + Math.round(days));
+    replaceBasis = 'typical interval';
+  }
+
+  const soon = isoDay(dayNumber(today) + SOON_DAYS);
+  let status: Status = 'fine';
+  if (replaceDueOn && replaceDueOn <= soon) {
+    status = 'replace';
+    reasons.push(
+      replaceBasis === 'readings'
+        ? replaceDueOn <= today
+          ? 'The basking zone is now below the species’ need (fitted from the readings).'
+          : `The basking zone falls below the species’ need on about ${replaceDueOn}.`
+        : `The usual replacement age of this lamp type is reached on ${replaceDueOn} (no readings-based date).`,
+    );
+  }
+  if (status === 'fine') {
+    if (testDueOn <= soon) {
+      status = 'test-soon';
+      reasons.push(lastReading ? `A new reading is due on ${testDueOn}.` : 'No reading yet: measure it.');
+    } else if (fallsBelowEarliestOn && fallsBelowEarliestOn <= isoDay(dayNumber(today) + 60)) {
+      status = 'test-soon';
+      reasons.push(`The fit is uncertain: it could fall below the need as early as ${fallsBelowEarliestOn}.`);
+    } else if (fit.certainty === 'uncertain') {
+      reasons.push('Few readings: the curve is uncertain. More readings make the dates firmer.');
+    }
+  }
+  if (status === 'fine' && reasons.length === 0) reasons.push('Above the need, and tested recently.');
+  return {
+    ...base,
+    basking,
+    missing,
+    fallsBelowOn,
+    fallsBelowEarliestOn,
+    testDueOn,
+    replaceDueOn,
+    replaceBasis,
+    status,
+    reasons,
+  };
+}
