@@ -34,6 +34,8 @@ export const authOptions: NextAuthOptions = {
         if (!fresh) throw new Error('The account could not be loaded.');
         return {
           ...token,
+          name: fresh.name,
+          email: fresh.email,
           uid: fresh.id,
           sv: fresh.sessionVersion,
           memberships: fresh.memberships,

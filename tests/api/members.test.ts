@@ -1,0 +1,143 @@
+import { afterAll, beforeEach, describe, expect, it } from 'vitest';
+import * as enclosures from '@/app/api/enclosures/route';
+import * as keepers from '@/app/api/keepers/route';
+import * as members from '@/app/api/organisations/[id]/members/route';
+import { Membership, User, type Organisation } from '@/models';
+import {
+  addMember,
+  closeDatabase,
+  createEnclosure,
+  createMember,
+  createUser,
+  resetDatabase,
+} from '../helpers/db';
+import { call, sessionCookie } from './http';
+
+afterAll(closeDatabase);
+
+let shop: Organisation;
+let owner: User;
+let staff: User;
+let keeper: User;
+let outsider: User;
+
+beforeEach(async () => {
+  await resetDatabase();
+  ({ organisation: shop, user: owner } = await createMember('owner'));
+  staff = (await createUser({ name: 'Staff Person' })).user;
+  keeper = (await createUser({ name: 'Keeper Person' })).user;
+  await addMember(shop, staff, 'staff');
+  await addMember(shop, keeper, 'keeper');
+  ({ user: outsider } = await createMember('owner'));
+});
+
+const path = () => `/api/organisations/${shop.id}/members`;
+const list = (as: User) => call(members.GET, { path: path(), params: { id: shop.id }, as });
+const setRole = (as: User, userId: number, role: string) =>
+  call(members.PATCH, { method: 'PATCH', path: path(), params: { id: shop.id }, as, body: { userId, role } });
+const remove = (as: User, userId: number) =>
+  call(members.DELETE, { method: 'DELETE', path: `${path()}?userId=${userId}`, params: { id: shop.id }, as });
+const roleOf = async (userId: number) =>
+  (await Membership.findOne({ where: { organisationId: shop.id, userId } }))?.role ?? null;
+
+describe('GET members', () => {
+  it('lists members for owner and staff, not for keepers or outsiders', async () => {
+    const r = await list(staff);
+    expect(r.status).toBe(200);
+    expect(r.body.items.map((m: { role: string }) => m.role).sort()).toEqual(['keeper', 'owner', 'staff']);
+    expect(r.body.items[0]).not.toHaveProperty('passwordHash');
+    expect((await list(keeper)).status).toBe(404);
+    expect((await list(outsider)).status).toBe(404);
+  });
+});
+
+describe('PATCH members (change a role)', () => {
+  it('is owner-only', async () => {
+    const byStaff = await setRole(staff, keeper.id, 'staff');
+    expect(byStaff.status).toBe(403);
+    expect((await setRole(keeper, keeper.id, 'owner')).status).toBe(404);
+    expect((await setRole(outsider, keeper.id, 'owner')).status).toBe(404);
+    expect(await roleOf(keeper.id)).toBe('keeper');
+
+    const byOwner = await setRole(owner, keeper.id, 'staff');
+    expect(byOwner.status).toBe(200);
+    expect(byOwner.body).toMatchObject({ userId: keeper.id, role: 'staff' });
+    expect(await roleOf(keeper.id)).toBe('staff');
+  });
+
+  it('takes effect on the very next request (memberships are re-read from the database)', async () => {
+    const cookie = await sessionCookie(staff);
+    const before = await call(keepers.GET, { path: `/api/keepers?organisationId=${shop.id}`, cookie });
+    expect(before.status).toBe(200);
+    await setRole(owner, staff.id, 'keeper');
+    const after = await call(keepers.GET, { path: `/api/keepers?organisationId=${shop.id}`, cookie });
+    expect(after.status).toBe(404);
+  });
+
+  it('keeps at least one owner', async () => {
+    const r = await setRole(owner, owner.id, 'staff');
+    expect(r.status).toBe(409);
+    expect(r.body.error.code).toBe('last_owner');
+    await setRole(owner, staff.id, 'owner');
+    expect((await setRole(owner, owner.id, 'staff')).status).toBe(200);
+  });
+
+  it('answers 400 naming the field for a bad role or user id, 404 for a non-member', async () => {
+    const badRole = await setRole(owner, keeper.id, 'admin');
+    expect(badRole.status).toBe(400);
+    expect(badRole.body.error.field).toBe('role');
+    const badUser = await call(members.PATCH, {
+      method: 'PATCH',
+      path: path(),
+      params: { id: shop.id },
+      as: owner,
+      body: { role: 'staff' },
+    });
+    expect(badUser.status).toBe(400);
+    expect(badUser.body.error.field).toBe('userId');
+    expect((await setRole(owner, outsider.id, 'staff')).status).toBe(404);
+  });
+});
+
+describe('DELETE members (remove)', () => {
+  it('is owner-only and ends the removed member’s sessions at once', async () => {
+    await createEnclosure(shop, keeper, { name: 'Kept after removal' });
+    const keeperCookie = await sessionCookie(keeper);
+    expect((await remove(staff, keeper.id)).status).toBe(403);
+    expect(await roleOf(keeper.id)).toBe('keeper');
+
+    const r = await remove(owner, keeper.id);
+    expect(r.status).toBe(200);
+    expect(await roleOf(keeper.id)).toBeNull();
+    expect((await User.findByPk(keeper.id))?.sessionVersion).toBe(2);
+    const after = await call(enclosures.GET, {
+      path: `/api/enclosures?organisationId=${shop.id}`,
+      cookie: keeperCookie,
+    });
+    expect(after.status).toBe(401);
+    // Nothing the keeper saved is lost: staff still see the enclosure.
+    const list = await call(enclosures.GET, { path: `/api/enclosures?organisationId=${shop.id}`, as: staff });
+    expect(list.body.items.map((e: { name: string }) => e.name)).toContain('Kept after removal');
+  });
+
+  it('refuses to remove the last owner', async () => {
+    const r = await remove(owner, owner.id);
+    expect(r.status).toBe(409);
+    expect(await roleOf(owner.id)).toBe('owner');
+  });
+});
+
+describe('GET /api/keepers', () => {
+  it('lists keepers with their enclosure counts for staff; not for keepers', async () => {
+    await createEnclosure(shop, keeper);
+    await createEnclosure(shop, keeper);
+    const r = await call(keepers.GET, { path: `/api/keepers?organisationId=${shop.id}`, as: staff });
+    expect(r.status).toBe(200);
+    expect(r.body.items).toEqual([
+      expect.objectContaining({ userId: keeper.id, name: 'Keeper Person', enclosureCount: 2 }),
+    ]);
+    expect(
+      (await call(keepers.GET, { path: `/api/keepers?organisationId=${shop.id}`, as: keeper })).status,
+    ).toBe(404);
+  });
+});
