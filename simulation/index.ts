@@ -1,2 +1,15 @@
 /** Public API of the light-and-heat engine (pure TypeScript; see simulation/README.md). */
 export * from './model';
+export * from './fields/types';
+export { computeFields, probe } from './fields/grid';
+export { FieldSolver, type SolverStats } from './fields/solver';
+export { HEAT_DEFAULTS, AIR_MODEL, surfaceTempC, airTempC } from './fields/heat';
+export { meshOpenArea } from './model/materials';
+export {
+  erythemaWeight,
+  uviFromErythemal,
+  uviPerUvbFromSpectrum,
+  UVI_PER_ERYTHEMAL_W_M2,
+} from './sources/uv';
+export { tubeBelowCentre, tubePiece } from './sources/tube';
+export { pointIrradiance } from './sources/point';

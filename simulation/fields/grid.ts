@@ -1,0 +1,13 @@
+import type { Design } from '../model/schema';
+import { FieldSolver } from './solver';
+import type { FieldGrid, ProbeResult, SimOptions } from './types';
+
+/** UVB, UV Index and surface temperature over the grid (a fresh computation, no cache). */
+export function computeFields(design: Design, opts?: SimOptions): FieldGrid {
+  return new FieldSolver().compute(design, opts);
+}
+
+/** The three values at exact points (evaluated there, not interpolated from a grid). */
+export function probe(design: Design, points: { x: number; y: number }[], opts?: SimOptions): ProbeResult[] {
+  return new FieldSolver().probe(design, points, opts);
+}

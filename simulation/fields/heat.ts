@@ -1,0 +1,71 @@
+/**
+ * Surface temperature of a small dark matte surface in radiant heat, and the air around it.
+ *
+ * Steady state, no conduction into the substrate (a conservative, i.e. warm, estimate):
+ *   q = h_c (Ts − Ta) + εσ (Ts⁴ − Ta⁴)     (kelvin)
+ * with q = α·E_IR the absorbed radiant flux (Incropera, Fundamentals of Heat and Mass Transfer: surface
+ * energy balance; natural convection h_c ≈ 5–10 W/m²K). The surroundings are taken to be at the local air
+ * temperature. Solved by Newton's method, which converges monotonically from above because the
+ * left-hand side is convex in Ts.
+ */
+
+export const STEFAN_BOLTZMANN = 5.670374419e-8; // W/m²K⁴ (CODATA 2018)
+export const KELVIN = 273.15;
+
+/** Defaults: a dark matte surface (α = ε = 0.95) in still air (h_c = 7 W/m²K, Incropera's natural-convection range 5–10). */
+export const HEAT_DEFAULTS = { absorptance: 0.95, emissivity: 0.95, convection: 7 } as const;
+
+export interface HeatParams {
+  absorptance: number;
+  emissivity: number;
+  /** Convection coefficient h_c, W/m²K. */
+  convection: number;
+}
+
+/** Surface temperature (°C) for absorbed flux q (W/m²) in air at airC (°C). */
+export function surfaceTempC(q: number, airC: number, emissivity: number, hc: number): number {
+  if (!(q > 0)) return airC;
+  const ta = airC + KELVIN;
+  const es = emissivity * STEFAN_BOLTZMANN;
+  const ta4 = ta * ta * ta * ta;
+  // Linearised first guess lies above the root (convex balance), so Newton decreases monotonically.
+  let t = ta + q / (hc + 4 * es * ta * ta * ta);
+  for (let k = 0; k < 30; k++) {
+    const t3 = t * t * t;
+    const f = hc * (t - ta) + es * (t3 * t - ta4) - q;
+    const step = f / (hc + 4 * es * t3);
+    t -= step;
+    if (Math.abs(step) < 1e-7) break;
+  }
+  return t - KELVIN;
+}
+
+/**
+ * Air temperature model (this engine's own simple assumption, to be checked with a thermometer):
+ * lamp heat that enters the enclosure leaves through its walls, so the warmest air, under the lid, is
+ * ΔT_top = P_in / (U · A) above the room, with A the area of all six faces and U = 5 W/m²K (an overall
+ * coefficient typical of single glazing, from memory). The air is at room temperature in the lower half
+ * and warms linearly through the upper half to ΔT_top at the top. Lamps inside the enclosure count in full;
+ * lamps outside (on the lid) count at half their power, since much of their heat escapes above the lid
+ * (from memory). With no lamps every cell reads the room temperature exactly.
+ */
+export const AIR_MODEL = { wallU: 5, outsideShare: 0.5, maxRiseK: 30 } as const;
+
+export function topAirRiseK(
+  lamps: { watts: number; y: number }[],
+  enclosure: { width: number; height: number; depth: number },
+): number {
+  let p = 0;
+  for (const l of lamps) p += l.watts * (l.y <= enclosure.height ? 1 : AIR_MODEL.outsideShare);
+  if (!(p > 0)) return 0;
+  const { width: w, height: h, depth: d } = enclosure;
+  const areaM2 = (2 * (w * h + w * d + h * d)) / 1e4;
+  return Math.min(AIR_MODEL.maxRiseK, p / (AIR_MODEL.wallU * areaM2));
+}
+
+/** Air temperature (°C) at height y in an enclosure of height H. */
+export function airTempC(y: number, height: number, roomC: number, riseK: number): number {
+  if (riseK === 0) return roomC;
+  const s = (y - height / 2) / (height / 2);
+  return roomC + riseK * Math.min(1, Math.max(0, s));
+}

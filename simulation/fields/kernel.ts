@@ -1,0 +1,249 @@
+/**
+ * The inner loop: one lamp's UVB and radiant irradiance at a receiver, with exact shadows.
+ *
+ * Seen from a receiver Q below the lamp line (y = y_L), a convex occluder hides one interval of that line:
+ * its central projection from Q. A point P of the occluder projects to x = Q.x + (P.x − Q.x)·k with
+ * k = h / (P.y − Q.y), h = y_L − Q.y. Only the part of the occluder inside the strip Q.y < y ≤ y_L can
+ * block, so each occluder is clipped to that strip once per grid row; then, along the row, every
+ * projected vertex is a linear function of Q.x: x = A + B·Q.x with A = P.x·k and B = 1 − k ≤ 0. The hidden
+ * interval is [min, max] over the clipped vertices. For each occluder we also know, per row, the range
+ * (qa, qb) of Q.x where its interval meets the lamp at all, so most cells skip most occluders.
+ *
+ * A tube is then integrated in closed form over its visible pieces (sources/tube.ts), each piece weighted
+ * by the product of the transmissions of the barriers hiding it; a bulb is visible or not (times the
+ * transmissions of the barriers in front of it) and inside its beam or not.
+ */
+import type { Occluder } from '../geometry/occluders';
+import { clipToStrip } from '../geometry/clip';
+import type { LampGeom } from './scene';
+
+/** Occluder parts closer than this above the receiver are ignored (a receiver lying on a surface). */
+const EPS_Y = 1e-6;
+const MAX_CLIPPED = 12;
+
+/** Per-row precomputation for one lamp; reused across rows (no allocation once sized). */
+export class RowData {
+  h = 0;
+  count = 0;
+  occ: Int32Array;
+  qa: Float64Array;
+  qb: Float64Array;
+  vStart: Int32Array;
+  vCount: Int32Array;
+  A: Float64Array;
+  B: Float64Array;
+  constructor(capacity: number) {
+    const c = Math.max(1, capacity);
+    this.occ = new Int32Array(c);
+    this.qa = new Float64Array(c);
+    this.qb = new Float64Array(c);
+    this.vStart = new Int32Array(c);
+    this.vCount = new Int32Array(c);
+    this.A = new Float64Array(c * MAX_CLIPPED);
+    this.B = new Float64Array(c * MAX_CLIPPED);
+  }
+}
+
+/** Scratch space for evaluation (no allocation in the inner loop). */
+export class Scratch {
+  cx = new Float64Array(MAX_CLIPPED);
+  cy = new Float64Array(MAX_CLIPPED);
+  tx = new Float64Array(MAX_CLIPPED);
+  ty = new Float64Array(MAX_CLIPPED);
+  lo: Float64Array;
+  hi: Float64Array;
+  tu: Float64Array;
+  ti: Float64Array;
+  bp: Float64Array;
+  g: Float64Array;
+  /** Output of evalCell. */
+  uv = 0;
+  ir = 0;
+  constructor(capacity: number) {
+    const c = Math.max(1, capacity);
+    this.lo = new Float64Array(c);
+    this.hi = new Float64Array(c);
+    this.tu = new Float64Array(c);
+    this.ti = new Float64Array(c);
+    this.bp = new Float64Array(2 * c + 2);
+    this.g = new Float64Array(2 * c + 2);
+  }
+}
+
+/** Prepare row data for receivers at height qy; returns false when the lamp cannot light this row. */
+export function prepareRow(
+  lamp: LampGeom,
+  occluders: readonly Occluder[],
+  qy: number,
+  row: RowData,
+  s: Scratch,
+  only?: ReadonlySet<number>,
+): boolean {
+  const h = lamp.y - qy;
+  row.h = h;
+  row.count = 0;
+  if (!(h > 0)) return false;
+  const ylo = qy + EPS_Y;
+  const yhi = lamp.y;
+  const s1 = lamp.s1;
+  const s2 = lamp.s2;
+  let vOff = 0;
+  for (let k = 0; k < occluders.length; k++) {
+    if (only && !only.has(k)) continue;
+    const o = occluders[k]!;
+    if (o.ymax < ylo || o.ymin > yhi) continue;
+    if (lamp.tUv[k] === 1 && lamp.tIr[k] === 1) continue;
+    const n = clipToStrip(o.xs, o.ys, ylo, yhi, s.cx, s.cy, s.tx, s.ty);
+    if (n === 0) continue;
+    let qa = Infinity;
+    let qb = -Infinity;
+    const c = row.count;
+    for (let v = 0; v < n; v++) {
+      const kk = h / (s.cy[v]! - qy);
+      const a = s.cx[v]! * kk;
+      const b = 1 - kk;
+      row.A[vOff + v] = a;
+      row.B[vOff + v] = b;
+      // The interval reaches past s1 for Q.x < (s1 − a)/b and starts before s2 for Q.x > (s2 − a)/b (b < 0).
+      if (b < -1e-15) {
+        const ub = (s1 - a) / b;
+        const la = (s2 - a) / b;
+        if (ub > qb) qb = ub;
+        if (la < qa) qa = la;
+      } else {
+        // Vertex on the lamp line: it projects onto itself wherever Q is.
+        if (a >= s1) qb = Infinity;
+        if (a <= s2) qa = -Infinity;
+      }
+    }
+    if (!(qb >= qa)) continue;
+    // A small margin keeps the skip test conservative against rounding.
+    const margin = 1e-9 * (1 + Math.abs(qa) + Math.abs(qb));
+    row.occ[c] = k;
+    row.qa[c] = qa - margin;
+    row.qb[c] = qb + margin;
+    row.vStart[c] = vOff;
+    row.vCount[c] = n;
+    row.count = c + 1;
+    vOff += n;
+  }
+  return true;
+}
+
+function G(u: number, h: number): number {
+  return Math.atan(u / h) + (u * h) / (h * h + u * u);
+}
+
+/**
+ * Evaluate a lamp at receiver x = qx on a prepared row. Writes s.uv (same unit as uvbAt30, new lamp)
+ * and s.ir (W/m²).
+ */
+export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): void {
+  s.uv = 0;
+  s.ir = 0;
+  const h = row.h;
+  if (!(h > 0)) return;
+  const tube = lamp.tube;
+  if (!tube) {
+    const dx = qx - lamp.x;
+    if (Math.abs(dx) > h * lamp.beamTan) return;
+  }
+  const s1 = lamp.s1;
+  const s2 = lamp.s2;
+  let gu = 1;
+  let gi = 1;
+  let n = 0;
+  const A = row.A;
+  const B = row.B;
+  for (let c = 0; c < row.count; c++) {
+    if (qx <= row.qa[c]! || qx >= row.qb[c]!) continue;
+    const v0 = row.vStart[c]!;
+    const v1 = v0 + row.vCount[c]!;
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (let v = v0; v < v1; v++) {
+      const x = A[v]! + B[v]! * qx;
+      if (x < lo) lo = x;
+      if (x > hi) hi = x;
+    }
+    const k = row.occ[c]!;
+    if (!tube) {
+      if (lo < s1 && s1 < hi) {
+        gu *= lamp.tUv[k]!;
+        gi *= lamp.tIr[k]!;
+      }
+    } else {
+      if (lo < s1) lo = s1;
+      if (hi > s2) hi = s2;
+      if (!(hi > lo)) continue;
+      if (lo <= s1 && hi >= s2) {
+        gu *= lamp.tUv[k]!;
+        gi *= lamp.tIr[k]!;
+      } else {
+        s.lo[n] = lo;
+        s.hi[n] = hi;
+        s.tu[n] = lamp.tUv[k]!;
+        s.ti[n] = lamp.tIr[k]!;
+        n++;
+      }
+    }
+    if (gu === 0 && gi === 0) return;
+  }
+  if (!tube) {
+    const dx = qx - lamp.x;
+    const r2 = h * h + dx * dx;
+    const f = h / (r2 * Math.sqrt(r2));
+    s.uv = lamp.uvI * f * gu;
+    s.ir = lamp.irI * f * gi;
+    return;
+  }
+  const scale = 1 / (2 * h);
+  if (n === 0) {
+    const f = (G(s2 - qx, h) - G(s1 - qx, h)) * scale;
+    s.uv = lamp.uvI * f * gu;
+    s.ir = lamp.irI * f * gi;
+    return;
+  }
+  // Sweep the visible pieces: breakpoints are the tube ends and every interval end.
+  const bp = s.bp;
+  let m = 0;
+  bp[m++] = s1;
+  bp[m++] = s2;
+  for (let c = 0; c < n; c++) {
+    bp[m++] = s.lo[c]!;
+    bp[m++] = s.hi[c]!;
+  }
+  for (let a = 1; a < m; a++) {
+    const v = bp[a]!;
+    let b = a - 1;
+    while (b >= 0 && bp[b]! > v) {
+      bp[b + 1] = bp[b]!;
+      b--;
+    }
+    bp[b + 1] = v;
+  }
+  let sumU = 0;
+  let sumI = 0;
+  let gPrev = G(bp[0]! - qx, h);
+  for (let a = 1; a < m; a++) {
+    const x0 = bp[a - 1]!;
+    const x1 = bp[a]!;
+    if (!(x1 > x0)) continue;
+    const gNext = G(x1 - qx, h);
+    const mid = 0.5 * (x0 + x1);
+    let pu = 1;
+    let pi = 1;
+    for (let c = 0; c < n; c++) {
+      if (s.lo[c]! <= mid && mid <= s.hi[c]!) {
+        pu *= s.tu[c]!;
+        pi *= s.ti[c]!;
+      }
+    }
+    const dg = gNext - gPrev;
+    sumU += pu * dg;
+    sumI += pi * dg;
+    gPrev = gNext;
+  }
+  s.uv = lamp.uvI * sumU * scale * gu;
+  s.ir = lamp.irI * sumI * scale * gi;
+}

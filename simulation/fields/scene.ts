@@ -1,0 +1,99 @@
+/**
+ * A design compiled for computation: lamps with their per-technology defaults resolved and their
+ * intensities worked out once, barriers as convex shapes with per-lamp transmissions.
+ */
+import type { Design, LampObject } from '../model/schema';
+import { resolveLamp, roomTempC, type ResolvedLamp } from '../model/resolve';
+import { compileOccluders, type Occluder } from '../geometry/occluders';
+import { beamTan, coneSolidAngle, intensityFromE30 } from '../sources/point';
+import { tubeIntensityFromE30, tubeIntensityFromPower } from '../sources/tube';
+import { topAirRiseK } from './heat';
+
+/** W/cm² -> W/m² (lengths are in cm). */
+const CM2_TO_M2 = 1e4;
+
+export interface LampGeom {
+  lamp: ResolvedLamp;
+  tube: boolean;
+  x: number;
+  y: number;
+  /** Extent along x (a bulb: s1 = s2 = x). */
+  s1: number;
+  s2: number;
+  /** UVB intensity, new, with reflector gain: bulb µW/sr (×cm² → µW/cm² via h/r³); tube per cm of tube. */
+  uvI: number;
+  /** Radiant (heat) intensity in the same geometry, giving W/m². */
+  irI: number;
+  /** Bulb beam half-width factor (|dx| ≤ h·beamTan); Infinity for tubes. */
+  beamTan: number;
+  /** Per occluder: UVB and IR transmission along a path from this lamp. */
+  tUv: Float64Array;
+  tIr: Float64Array;
+}
+
+export interface Scene {
+  width: number;
+  height: number;
+  depth: number;
+  roomC: number;
+  airRiseK: number;
+  lamps: LampGeom[];
+  occluders: Occluder[];
+}
+
+export function compileLamp(obj: LampObject, occluders: Occluder[]): LampGeom {
+  const lamp = resolveLamp(obj);
+  const tube = lamp.form === 'tube';
+  const gain = lamp.reflectorGain;
+  const radiantW = lamp.watts * lamp.radiantFraction;
+  let uvI: number;
+  let irI: number;
+  if (tube) {
+    uvI = tubeIntensityFromE30(lamp.uvbAt30, lamp.length) * gain;
+    irI = tubeIntensityFromPower(radiantW, lamp.length) * CM2_TO_M2 * gain;
+  } else {
+    uvI = intensityFromE30(lamp.uvbAt30) * gain;
+    // A point source putting radiant power P into a cone of solid angle Ω has intensity P/Ω.
+    irI = (radiantW / coneSolidAngle(lamp.beamDeg)) * CM2_TO_M2 * gain;
+  }
+  const n = occluders.length;
+  const tUv = new Float64Array(n);
+  const tIr = new Float64Array(n);
+  for (let k = 0; k < n; k++) {
+    const o = occluders[k]!;
+    tUv[k] = o.uvbT;
+    tIr[k] = o.irT ?? lamp.glassIrTransmission;
+  }
+  return {
+    lamp,
+    tube,
+    x: lamp.x,
+    y: lamp.y,
+    s1: tube ? lamp.x - lamp.length / 2 : lamp.x,
+    s2: tube ? lamp.x + lamp.length / 2 : lamp.x,
+    uvI,
+    irI,
+    beamTan: tube ? Infinity : beamTan(lamp.beamDeg),
+    tUv,
+    tIr,
+  };
+}
+
+export function compileScene(design: Design): Scene {
+  const occluders = compileOccluders(design);
+  const lamps: LampGeom[] = [];
+  for (const o of design.objects) if (o.type === 'lamp') lamps.push(compileLamp(o, occluders));
+  const e = design.enclosure;
+  return {
+    width: e.width,
+    height: e.height,
+    depth: e.depth,
+    roomC: roomTempC(design),
+    airRiseK: topAirRiseK(
+      lamps.map((l) => l.lamp),
+      e,
+    ),
+    lamps,
+    occluders,
+  };
+}

@@ -1,0 +1,279 @@
+/**
+ * Field solver with a per-lamp cache. Each lamp's unaged UVB and radiant fields are kept; when the next
+ * design differs only in some barriers, a lamp's cells are recomputed only where an old or new version of
+ * a changed barrier could shade that lamp (its shadow interval meets the lamp on that row). Results are
+ * identical to a full computation; `computeFields` uses a fresh solver each call.
+ */
+import type { Design } from '../model/schema';
+import { lampUvbFactor } from '../model/resolve';
+import type { Occluder } from '../geometry/occluders';
+import { compileScene, type LampGeom, type Scene } from './scene';
+import { evalCell, prepareRow, RowData, Scratch } from './kernel';
+import { airTempC, HEAT_DEFAULTS, surfaceTempC } from './heat';
+import { DEFAULT_CELL_CM, gridSize, type FieldGrid, type ProbeResult, type SimOptions } from './types';
+
+interface LampEntry {
+  key: string;
+  occKeys: string[];
+  occluders: Occluder[];
+  uv: Float64Array;
+  ir: Float64Array;
+}
+
+function occluderKey(o: Occluder): string {
+  return JSON.stringify([o.id, o.xs, o.ys, o.uvbT, o.irT]);
+}
+
+function lampKey(l: LampGeom, nx: number, ny: number, cell: number): string {
+  const { ageMonths: _a, decay: _d, ...rest } = l.lamp;
+  return JSON.stringify([nx, ny, cell, rest]);
+}
+
+export interface SolverStats {
+  /** Lamps computed from scratch, partly, or taken from the cache in the last call. */
+  full: number;
+  partial: number;
+  cached: number;
+  /** Lamp-cells evaluated in the last call. */
+  cellsEvaluated: number;
+}
+
+/** Most barriers that may change for a partial recompute to be tried. */
+const MAX_CHANGED_FOR_PARTIAL = 4;
+
+export class FieldSolver {
+  private entries = new Map<string, LampEntry>();
+  private row = new RowData(1);
+  private row2 = new RowData(1);
+  private scratch = new Scratch(1);
+  private capacity = 0;
+  readonly stats: SolverStats = { full: 0, partial: 0, cached: 0, cellsEvaluated: 0 };
+
+  private ensure(n: number) {
+    if (n <= this.capacity) return;
+    this.capacity = Math.max(n, this.capacity * 2, 8);
+    this.row = new RowData(this.capacity);
+    this.row2 = new RowData(this.capacity);
+    this.scratch = new Scratch(this.capacity);
+  }
+
+  compute(design: Design, opts: SimOptions = {}): FieldGrid {
+    const cell = opts.cellCm ?? DEFAULT_CELL_CM;
+    const { width, height } = design.enclosure;
+    const { nx, ny } = gridSize(width, height, cell);
+    const scene = compileScene(design);
+    this.ensure(scene.occluders.length);
+    this.stats.full = this.stats.partial = this.stats.cached = this.stats.cellsEvaluated = 0;
+
+    const occKeys = scene.occluders.map(occluderKey);
+    const next = new Map<string, LampEntry>();
+    const cells = nx * ny;
+    const uvb = new Float64Array(cells);
+    const uvi = new Float64Array(cells);
+    const ir = new Float64Array(cells);
+    for (const lamp of scene.lamps) {
+      const key = lampKey(lamp, nx, ny, cell);
+      const entry = this.lampEntry(lamp, key, scene, occKeys, nx, ny, cell);
+      next.set(key, entry);
+      const f = lampUvbFactor(lamp.lamp, opts.addMonths ?? 0);
+      const fu = f;
+      const fi = f * lamp.lamp.uviPerUvb;
+      const eu = entry.uv;
+      const ei = entry.ir;
+      if (lamp.uvI > 0 && f > 0) {
+        for (let c = 0; c < cells; c++) {
+          const v = eu[c]!;
+          uvb[c] = uvb[c]! + v * fu;
+          uvi[c] = uvi[c]! + v * fi;
+        }
+      }
+      if (lamp.irI > 0) for (let c = 0; c < cells; c++) ir[c] = ir[c]! + ei[c]!;
+    }
+    this.entries = next;
+    return {
+      nx,
+      ny,
+      cellCm: cell,
+      width,
+      height,
+      uvb: new Float32Array(uvb),
+      uvi: new Float32Array(uvi),
+      tempC: temperatures(ir, scene, nx, ny, cell, opts.convection ?? HEAT_DEFAULTS.convection),
+    };
+  }
+
+  private lampEntry(
+    lamp: LampGeom,
+    key: string,
+    scene: Scene,
+    occKeys: string[],
+    nx: number,
+    ny: number,
+    cell: number,
+  ): LampEntry {
+    const old = this.entries.get(key);
+    if (old) {
+      const changed = diffOccluders(old, scene.occluders, occKeys);
+      if (changed && changed.length === 0) {
+        this.stats.cached++;
+        return { ...old, occKeys, occluders: scene.occluders };
+      }
+      if (changed && changed.length <= MAX_CHANGED_FOR_PARTIAL) {
+        this.stats.partial++;
+        this.partial(lamp, scene.occluders, changed, old, nx, ny, cell);
+        return { key, occKeys, occluders: scene.occluders, uv: old.uv, ir: old.ir };
+      }
+    }
+    this.stats.full++;
+    const uv = new Float64Array(nx * ny);
+    const ir = new Float64Array(nx * ny);
+    this.full(lamp, scene.occluders, uv, ir, nx, ny, cell);
+    return { key, occKeys, occluders: scene.occluders, uv, ir };
+  }
+
+  private full(
+    lamp: LampGeom,
+    occluders: Occluder[],
+    uv: Float64Array,
+    ir: Float64Array,
+    nx: number,
+    ny: number,
+    cell: number,
+  ) {
+    const row = this.row;
+    const s = this.scratch;
+    for (let j = 0; j < ny; j++) {
+      const qy = (j + 0.5) * cell;
+      if (!prepareRow(lamp, occluders, qy, row, s)) continue;
+      let i0 = 0;
+      let i1 = nx - 1;
+      if (!lamp.tube && Number.isFinite(lamp.beamTan)) {
+        // Only cells inside the bulb's beam can be lit.
+        const half = row.h * lamp.beamTan;
+        i0 = Math.max(0, Math.floor((lamp.x - half) / cell - 0.5));
+        i1 = Math.min(nx - 1, Math.ceil((lamp.x + half) / cell - 0.5));
+      }
+      const base = j * nx;
+      for (let i = i0; i <= i1; i++) {
+        evalCell(lamp, row, (i + 0.5) * cell, s);
+        uv[base + i] = s.uv;
+        ir[base + i] = s.ir;
+      }
+      this.stats.cellsEvaluated += Math.max(0, i1 - i0 + 1);
+    }
+  }
+
+  /** Recompute only the cells where a changed barrier (old or new version) can shade this lamp. */
+  private partial(
+    lamp: LampGeom,
+    occluders: Occluder[],
+    changed: Occluder[],
+    old: LampEntry,
+    nx: number,
+    ny: number,
+    cell: number,
+  ) {
+    const row = this.row;
+    const probeRow = this.row2;
+    const s = this.scratch;
+    // The changed barriers with this lamp's transmissions, in a lamp of their own for the range test.
+    const changedLamp = withTransmissions(lamp, changed);
+    const uv = old.uv;
+    const ir = old.ir;
+    for (let j = 0; j < ny; j++) {
+      const qy = (j + 0.5) * cell;
+      if (!prepareRow(changedLamp, changed, qy, probeRow, s)) continue;
+      if (probeRow.count === 0) continue;
+      prepareRow(lamp, occluders, qy, row, s);
+      const base = j * nx;
+      for (let c = 0; c < probeRow.count; c++) {
+        const i0 = Math.max(0, Math.floor(probeRow.qa[c]! / cell - 0.5));
+        const i1 = Math.min(nx - 1, Math.ceil(probeRow.qb[c]! / cell - 0.5));
+        for (let i = i0; i <= i1; i++) {
+          evalCell(lamp, row, (i + 0.5) * cell, s);
+          uv[base + i] = s.uv;
+          ir[base + i] = s.ir;
+        }
+        this.stats.cellsEvaluated += Math.max(0, i1 - i0 + 1);
+      }
+    }
+  }
+
+  /** Values at exact points (no interpolation). */
+  probe(design: Design, points: { x: number; y: number }[], opts: SimOptions = {}): ProbeResult[] {
+    const scene = compileScene(design);
+    this.ensure(scene.occluders.length);
+    const factors = scene.lamps.map((l) => lampUvbFactor(l.lamp, opts.addMonths ?? 0));
+    const hc = opts.convection ?? HEAT_DEFAULTS.convection;
+    return points.map(({ x, y }) => {
+      let uvb = 0;
+      let uvi = 0;
+      let ir = 0;
+      scene.lamps.forEach((lamp, k) => {
+        if (!prepareRow(lamp, scene.occluders, y, this.row, this.scratch)) return;
+        evalCell(lamp, this.row, x, this.scratch);
+        const f = factors[k]!;
+        uvb += this.scratch.uv * f;
+        uvi += this.scratch.uv * f * lamp.lamp.uviPerUvb;
+        ir += this.scratch.ir;
+      });
+      const air = airTempC(y, scene.height, scene.roomC, scene.airRiseK);
+      return {
+        x,
+        y,
+        uvb,
+        uvi,
+        tempC: surfaceTempC(HEAT_DEFAULTS.absorptance * ir, air, HEAT_DEFAULTS.emissivity, hc),
+      };
+    });
+  }
+}
+
+/** Barriers in `old` but not `now`, and in `now` but not `old` (by content); null if they cannot be matched. */
+function diffOccluders(old: LampEntry, now: Occluder[], nowKeys: string[]): Occluder[] | null {
+  const oldCount = new Map<string, number>();
+  old.occKeys.forEach((k) => oldCount.set(k, (oldCount.get(k) ?? 0) + 1));
+  const changed: Occluder[] = [];
+  const nowCount = new Map<string, number>();
+  nowKeys.forEach((k, idx) => {
+    nowCount.set(k, (nowCount.get(k) ?? 0) + 1);
+    if ((nowCount.get(k) ?? 0) > (oldCount.get(k) ?? 0)) changed.push(now[idx]!);
+  });
+  const seen = new Map<string, number>();
+  old.occKeys.forEach((k, idx) => {
+    seen.set(k, (seen.get(k) ?? 0) + 1);
+    if ((seen.get(k) ?? 0) > (nowCount.get(k) ?? 0)) changed.push(old.occluders[idx]!);
+  });
+  return changed;
+}
+
+function withTransmissions(lamp: LampGeom, occluders: Occluder[]): LampGeom {
+  const tUv = new Float64Array(occluders.length);
+  const tIr = new Float64Array(occluders.length);
+  occluders.forEach((o, k) => {
+    tUv[k] = o.uvbT;
+    tIr[k] = o.irT ?? lamp.lamp.glassIrTransmission;
+  });
+  return { ...lamp, tUv, tIr };
+}
+
+function temperatures(
+  ir: Float64Array,
+  scene: Scene,
+  nx: number,
+  ny: number,
+  cell: number,
+  hc: number,
+): Float32Array {
+  const out = new Float32Array(nx * ny);
+  const { absorptance, emissivity } = HEAT_DEFAULTS;
+  for (let j = 0; j < ny; j++) {
+    const air = airTempC((j + 0.5) * cell, scene.height, scene.roomC, scene.airRiseK);
+    const base = j * nx;
+    for (let i = 0; i < nx; i++) {
+      const q = ir[base + i]!;
+      out[base + i] = q > 0 ? surfaceTempC(absorptance * q, air, emissivity, hc) : air;
+    }
+  }
+  return out;
+}
