@@ -2,6 +2,7 @@ import bcrypt from 'bcryptjs';
 import type { Sequelize, Transaction } from 'sequelize';
 import { Enclosure, Membership, Organisation, User, initModels } from '@/models';
 import { DEMO_ORGANISATIONS, DEMO_PASSWORDS, type DemoOrganisation } from './scenario';
+import { seedStartingCatalogue } from '@/lib/species/seed';
 
 export type SeedResult = {
   created: { organisations: number; users: number; memberships: number; enclosures: number };
@@ -48,6 +49,8 @@ export async function seedDemo(sequelize: Sequelize): Promise<SeedResult> {
         organisation = await Organisation.create({ name: org.name }, { transaction });
         created.organisations++;
       }
+      // The starting species sheets and lamp catalogue (once per organisation; see lib/species/seed.ts).
+      await seedStartingCatalogue(organisation.id, { transaction });
       for (const person of org.people) {
         const email = person.email.toLowerCase();
         let user = await User.findOne({ where: { email }, transaction });

@@ -3,8 +3,14 @@ import * as collection from '@/app/api/species/route';
 import * as item from '@/app/api/species/[id]/route';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { STARTING_SHEETS } from '@/lib/species/starting-sheets';
-import { CatalogueSeeding, LampType, SpeciesSheet, type Organisation, type User } from '@/models';
-import { addMember, createMember, createUser, useTestDatabase as withTestDatabase } from '../helpers/db';
+import { CatalogueSeeding, LampType, Organisation, SpeciesSheet, type User } from '@/models';
+import {
+  addMember,
+  createMember,
+  createUser,
+  testDb,
+  useTestDatabase as withTestDatabase,
+} from '../helpers/db';
 import { call, expectNoInternals } from './http';
 
 withTestDatabase();
@@ -65,6 +71,16 @@ describe('seedStartingCatalogue', () => {
     const results = await Promise.all([1, 2, 3].map(() => seedStartingCatalogue(shop.id)));
     expect(results.filter(Boolean).length).toBe(1);
     expect(await SpeciesSheet.count({ where: { organisationId: shop.id } })).toBe(STARTING_SHEETS.length);
+  });
+
+  it('seeds inside the transaction that creates the organisation (sign-up, demo data)', async () => {
+    const sequelize = testDb();
+    const orgId = await sequelize.transaction(async (transaction) => {
+      const org = await Organisation.create({ name: 'Fresh sign-up' }, { transaction });
+      expect(await seedStartingCatalogue(org.id, { transaction })).toBe(true);
+      return org.id;
+    });
+    expect(await SpeciesSheet.count({ where: { organisationId: orgId } })).toBe(STARTING_SHEETS.length);
   });
 
   it('does not bring back a sheet the organisation deleted', async () => {
