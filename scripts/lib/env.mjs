@@ -24,6 +24,10 @@ export const DEFAULTS = {
   TEST_FAKE_SMTP_HTTP: 'http://127.0.0.1:2581',
   PORT: '3000',
   TEST_PORT: '3100',
+  S3_ENDPOINT: 'http://127.0.0.1:4569',
+  S3_BUCKET: 'baskwell-uploads',
+  TEST_S3_ENDPOINT: 'http://127.0.0.1:4570',
+  TEST_S3_BUCKET: 'baskwell-test',
 };
 
 /** Parses KEY=VALUE lines (optional `export`, quotes, # comments). */

@@ -23,21 +23,29 @@ export function bin(name) {
   return existsSync(p) ? p : name;
 }
 
+/** Commands started by run() that have not finished: stopped by stopForeground() on Ctrl-C. */
+const foreground = new Set();
+
 /**
- * Runs a command to completion. `capture` collects stdout/stderr instead of showing them.
- * Resolves { code, stdout, stderr }; rejects only if it cannot start, unless `check` is set.
+ * Runs a command to completion, in its own process group (so a stop reaches what it spawns).
+ * `capture` collects stdout/stderr instead of showing them.
+ * Resolves { code, stdout, stderr }; with `check` (the default) a non-zero exit rejects.
  */
 export function run(cmd, args = [], { env, cwd = ROOT, capture = false, check = true, input } = {}) {
   return new Promise((resolve, reject) => {
     const child = spawn(cmd, args, {
       cwd,
       env: env ?? process.env,
+      detached: true,
       stdio: [
         input === undefined ? 'ignore' : 'pipe',
         capture ? 'pipe' : 'inherit',
         capture ? 'pipe' : 'inherit',
       ],
     });
+    foreground.add(child);
+    child.exited = new Promise((r) => child.on('close', () => r()));
+    child.on('close', () => foreground.delete(child));
     let stdout = '';
     let stderr = '';
     child.stdout?.on('data', (d) => (stdout += d));
@@ -94,6 +102,11 @@ function alive(pid) {
   } catch {
     return false;
   }
+}
+
+/** Stops every command run() is waiting for. */
+export async function stopForeground() {
+  await Promise.all([...foreground].map((c) => stopProcess(c, 3000)));
 }
 
 /** Stops a process (and its group): SIGTERM, then SIGKILL after `graceMs`. */

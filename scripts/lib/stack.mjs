@@ -1,0 +1,142 @@
+// The pieces `npm start` and `npm test` both bring up: packages, the private database, migrations,
+// the demo seed, the fake SMTP server and Next. Each started piece is registered with a Lifecycle
+// so that Ctrl-C, a failure or the end of the run stops exactly what this run started.
+import { mkdirSync } from 'node:fs';
+import path from 'node:path';
+import { DATA_DIR, ROOT, urlPort, usesPrivateDb } from './env.mjs';
+import { ensureDatabases, ensureMariaDB, recreateDatabase } from './mariadb.mjs';
+import { ensureApt } from './packages.mjs';
+import {
+  bin,
+  canConnect,
+  httpAnswers,
+  log,
+  red,
+  run,
+  service,
+  stopForeground,
+  stopProcess,
+  waitFor,
+  yellow,
+} from './proc.mjs';
+
+export class Lifecycle {
+  services = [];
+  db = null;
+  stopping = null;
+  signals = 0;
+
+  /** Stops everything this run started: foreground commands, services (newest first), the database. */
+  stop() {
+    this.stopping ??= (async () => {
+      await stopForeground();
+      for (const s of [...this.services].reverse()) {
+        await stopProcess(s).catch((e) => log(red(`could not stop ${s.serviceName}: ${e.message}`)));
+      }
+      if (this.db) await this.db.release().catch((e) => log(red(`could not stop MariaDB: ${e.message}`)));
+    })();
+    return this.stopping;
+  }
+
+  /** On Ctrl-C / SIGTERM: stop everything and exit; a second signal exits at once. */
+  handleSignals(exitCode = 130) {
+    for (const sig of ['SIGINT', 'SIGTERM', 'SIGHUP']) {
+      process.on(sig, () => {
+        this.signals++;
+        if (this.signals > 1) {
+          log(yellow('Second signal: exiting without waiting.'));
+          process.exit(exitCode);
+        }
+        log(`${sig}: stopping ...`);
+        void this.stop().then(() => process.exit(exitCode));
+      });
+    }
+  }
+}
+
+/** Starts or reuses the private MariaDB and creates the databases and the application user. */
+export async function prepareDatabase(life, env, { recreate = [] } = {}) {
+  if (!usesPrivateDb(env)) {
+    log(`Using the external database server ${env.DB_HOST}:${env.DB_PORT} (DB_HOST is not local).`);
+    return;
+  }
+  await ensureApt({ mariadbd: 'mariadb-server' });
+  life.db = await ensureMariaDB({ port: Number(env.DB_PORT) });
+  for (const name of recreate) await recreateDatabase(name);
+  await ensureDatabases({
+    names: [...new Set([env.DB_NAME, env.TEST_DB_NAME])],
+    user: env.DB_USER,
+    password: env.DB_PASSWORD,
+  });
+}
+
+const tsx = (script, args, env, opts = {}) => run(bin('tsx'), [script, ...args], { env, ...opts });
+
+export async function migrate(env) {
+  await tsx('scripts/migrate.ts', [], env);
+}
+
+/** Seeds the demo scenario; returns { created, signIns }. */
+export async function seed(env) {
+  const { stdout } = await tsx('scripts/seed.ts', ['--json'], env, { capture: true });
+  const line = stdout.trim().split('\n').pop() ?? '{}';
+  return JSON.parse(line);
+}
+
+async function ensureFree(port, what, variable) {
+  if (await canConnect(port)) {
+    throw new Error(`${what}: port ${port} is already in use; set ${variable} to a free port`);
+  }
+}
+
+/** Starts the fake SMTP server on env.SMTP_PORT with its API on env.FAKE_SMTP_HTTP. */
+export async function startMail(life, env, { clear = false, logFile } = {}) {
+  const httpPort = urlPort(env.FAKE_SMTP_HTTP);
+  await ensureFree(Number(env.SMTP_PORT), 'fake SMTP', 'SMTP_PORT');
+  await ensureFree(httpPort, 'fake SMTP web API', 'FAKE_SMTP_HTTP');
+  mkdirSync(path.join(DATA_DIR, env.DB_NAME), { recursive: true });
+  const child = service('mail', bin('tsx'), ['scripts/fake-smtp.ts', ...(clear ? ['--clear'] : [])], {
+    env,
+    logFile,
+  });
+  life.services.push(child);
+  await waitFor(
+    'fake SMTP',
+    async () => (await fetch(`${env.FAKE_SMTP_HTTP}/health`, { signal: AbortSignal.timeout(2000) })).ok,
+    { child, timeoutMs: 30_000 },
+  );
+  return child;
+}
+
+/** Starts the fake S3 server (scripts/fake-s3.mjs) at env.S3_ENDPOINT with env.S3_BUCKET in env.S3_DIR. */
+export async function startS3(life, env, { logFile } = {}) {
+  const port = urlPort(env.S3_ENDPOINT);
+  await ensureFree(port, 'fake S3', 'S3_ENDPOINT');
+  const child = service('s3', process.execPath, ['scripts/fake-s3.mjs'], { env, logFile });
+  life.services.push(child);
+  await waitFor('fake S3', () => canConnect(port), { child, timeoutMs: 30_000 });
+  return child;
+}
+
+/** `next build` (unless dev), then `next start`/`next dev` on `port`; resolves once it answers. */
+export async function startNext(life, env, { port, dev = false, build = true, logFile } = {}) {
+  const nextEnv = { ...env, NEXT_TELEMETRY_DISABLED: '1' };
+  await ensureFree(port, 'the web app', 'PORT');
+  if (!dev && build) {
+    log('Building the app (next build) ...');
+    await run(bin('next'), ['build'], { env: nextEnv });
+  }
+  const child = service('next', bin('next'), [dev ? 'dev' : 'start', '-p', String(port)], {
+    env: nextEnv,
+    logFile,
+  });
+  life.services.push(child);
+  await waitFor('the web app', () => httpAnswers(`http://127.0.0.1:${port}/`), {
+    child,
+    timeoutMs: dev ? 180_000 : 60_000,
+    intervalMs: 300,
+  });
+  return child;
+}
+
+export { ROOT };

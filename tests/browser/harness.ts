@@ -1,0 +1,130 @@
+// Browser test harness: Debian's Chromium driven by playwright-core against the app that scripts/test.mjs
+// builds and serves (BASE_URL) on the test database with the demo scenario.
+import { mkdirSync } from 'node:fs';
+import path from 'node:path';
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { afterAll, afterEach, beforeAll, beforeEach, expect } from 'vitest';
+
+export const BASE_URL = process.env.BASE_URL ?? 'http://localhost:3100';
+export const CHROMIUM_PATH = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
+export const SCREENSHOT_DIR = path.resolve(import.meta.dirname, '..', '..', 'test-results', 'screenshots');
+
+// This machine has no outside network: Chromium's background connections would only fail, slowly.
+const CHROMIUM_FLAGS = [
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-dev-shm-usage',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+  '--disable-quic',
+  '--no-first-run',
+];
+
+/** Launches headless Chromium; playwright gives it a fresh, temporary profile. */
+export function launchBrowser(): Promise<Browser> {
+  return chromium.launch({ executablePath: CHROMIUM_PATH, headless: true, args: CHROMIUM_FLAGS });
+}
+
+/** A new isolated context (own cookies and storage) with the app as base URL. */
+export function newContext(browser: Browser): Promise<BrowserContext> {
+  return browser.newContext({ baseURL: BASE_URL, viewport: { width: 1280, height: 800 }, locale: 'en-GB' });
+}
+
+const fileSafe = (name: string) =>
+  name
+    .replace(/[^a-zA-Z0-9._-]+/g, '-')
+    .replace(/^-+|-+$/g, '')
+    .slice(0, 120);
+
+/** Saves a full-page PNG to test-results/screenshots/<name>.png and returns its path. */
+export async function screenshot(page: Page, name: string): Promise<string> {
+  mkdirSync(SCREENSHOT_DIR, { recursive: true });
+  const file = path.join(SCREENSHOT_DIR, `${fileSafe(name)}.png`);
+  await page.screenshot({ path: file, fullPage: true });
+  return file;
+}
+
+/**
+ * Signs in through the sign-in page as a person would, and waits until the app has left it.
+ * Fails with the page's own error text when the sign-in is refused.
+ */
+export async function signIn(page: Page, email: string, password: string): Promise<void> {
+  await page.goto('/sign-in');
+  await page.getByLabel('Email').fill(email);
+  await page.getByLabel('Password', { exact: true }).fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  try {
+    await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'), { timeout: 15_000 });
+  } catch (e) {
+    const alert = await page
+      .getByRole('alert')
+      .first()
+      .textContent({ timeout: 500 })
+      .catch(() => null);
+    throw new Error(`sign-in as ${email} did not leave /sign-in${alert ? `: ${alert.trim()}` : ''}`, {
+      cause: e,
+    });
+  }
+}
+
+export type BrowserSession = {
+  browser: () => Browser;
+  context: () => BrowserContext;
+  page: () => Page;
+  /** Uncaught exceptions in the page during this test. */
+  pageErrors: () => string[];
+  /** What the page logged with console.error (includes failed resource loads). */
+  consoleErrors: () => string[];
+};
+
+/**
+ * Registers the hooks of a browser test file: one Chromium for the file, a fresh context and page for
+ * each test, and a screenshot named after any test that fails.
+ */
+export function withBrowser(): BrowserSession {
+  let browser: Browser | undefined;
+  let context: BrowserContext | undefined;
+  let page: Page | undefined;
+  let errors: string[] = [];
+  let logged: string[] = [];
+  const need = <T>(v: T | undefined, what: string): T => {
+    if (v === undefined) throw new Error(`${what} is only available inside a test`);
+    return v;
+  };
+
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  beforeEach(async () => {
+    context = await newContext(need(browser, 'the browser'));
+    page = await context.newPage();
+    errors = [];
+    logged = [];
+    page.on('pageerror', (e) => errors.push(e.message));
+    page.on('console', (m) => {
+      if (m.type() === 'error') logged.push(m.text());
+    });
+  });
+  afterEach(async (ctx) => {
+    if (ctx.task.result?.state === 'fail' && page) {
+      await screenshot(page, `FAILED-${ctx.task.name}`).catch(() => undefined);
+    }
+    await context?.close();
+    context = undefined;
+    page = undefined;
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  return {
+    browser: () => need(browser, 'the browser'),
+    context: () => need(context, 'the context'),
+    page: () => need(page, 'the page'),
+    pageErrors: () => [...errors],
+    consoleErrors: () => [...logged],
+  };
+}
+
+export { expect };

@@ -1,0 +1,14 @@
+import { defineConfig } from 'vitest/config';
+
+// Browser journeys (tests/browser/*.browser.ts) against the app served by scripts/test.mjs.
+export default defineConfig({
+  resolve: { tsconfigPaths: true },
+  test: {
+    include: ['tests/browser/**/*.browser.ts'],
+    environment: 'node',
+    // One app and one test database for every file: run them one after another.
+    fileParallelism: false,
+    testTimeout: 60_000,
+    hookTimeout: 60_000,
+  },
+});
