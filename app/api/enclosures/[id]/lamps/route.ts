@@ -1,0 +1,32 @@
+import { z } from 'zod';
+import { created, pageQuery, route } from '@/lib/api';
+import { idParams } from '@/lib/api/schemas';
+import { enclosureForLamps } from '@/lib/lamp-log/access';
+import { todayIso } from '@/lib/lamp-log/dates';
+import { createLamp } from '@/lib/lamp-log/mutations';
+import { createLampBody } from '@/lib/lamp-log/schemas';
+import { lampsOfEnclosure, summarise } from '@/lib/lamp-log/store';
+
+/** The lamps installed in one enclosure, each with its age, last reading, fit and status. */
+export const GET = route({
+  params: idParams,
+  query: z.object(pageQuery),
+  handler: async ({ params, query, user }) => {
+    const enclosure = await enclosureForLamps(user, params.id, 'read');
+    const rows = await lampsOfEnclosure(enclosure.id, query);
+    const items = await summarise(rows.slice(0, query.limit), todayIso());
+    const last = rows[query.limit - 1];
+    return { items, nextCursor: rows.length > query.limit && last ? String(last.id) : null };
+  },
+});
+
+export const POST = route({
+  params: idParams,
+  body: createLampBody,
+  handler: async ({ params, body, user }) => {
+    const enclosure = await enclosureForLamps(user, params.id, 'create');
+    const lamp = await createLamp(enclosure, body, user.id);
+    const [summary] = await summarise([lamp], todayIso());
+    return created({ lamp: summary });
+  },
+});

@@ -1,0 +1,114 @@
+import type { z } from 'zod';
+import { badRequest } from '@/lib/api';
+import { getSequelize } from '@/lib/db';
+import { Lamp, LampType, Reading, type Enclosure } from '@/models';
+import {
+  toCm,
+  type createLampBody,
+  type createReadingBody,
+  type updateLampBody,
+  type updateReadingBody,
+} from './schemas';
+
+/** Writes of the lamp log. Callers have checked permissions on the enclosure or lamp. */
+
+const round1 = (v: number) => Math.round(v * 10) / 10;
+
+async function assertLampTypeIn(organisationId: number, lampTypeId: number): Promise<void> {
+  const t = await LampType.findByPk(lampTypeId, { attributes: ['id', 'organisationId'] });
+  if (!t || t.organisationId !== organisationId) {
+    throw badRequest('lampTypeId', 'That lamp type is not in this organisation’s lamp catalogue.');
+  }
+}
+
+export async function createLamp(
+  enclosure: Enclosure,
+  body: z.output<typeof createLampBody>,
+  userId: number,
+): Promise<Lamp> {
+  getSequelize();
+  await assertLampTypeIn(enclosure.organisationId, body.lampTypeId);
+  return Lamp.create({
+    enclosureId: enclosure.id,
+    lampTypeId: body.lampTypeId,
+    label: body.label,
+    designObjectId: body.designObjectId ?? null,
+    firstUsedOn: body.firstUsedOn,
+    hoursPerDay: body.hoursPerDay,
+    baskingDistanceCm: body.baskingDistance ? round1(toCm(body.baskingDistance, body.lengthUnit)) : null,
+    baskingTransmission: body.baskingTransmission ?? null,
+    retiredOn: body.retiredOn ?? null,
+    notes: body.notes ?? null,
+    createdById: userId,
+  });
+}
+
+export async function updateLamp(
+  lamp: Lamp & { enclosure: Enclosure },
+  body: z.output<typeof updateLampBody>,
+): Promise<void> {
+  if (body.lampTypeId !== undefined) await assertLampTypeIn(lamp.enclosure.organisationId, body.lampTypeId);
+  const unit = body.lengthUnit ?? 'cm';
+  const next = {
+    ...(body.lampTypeId !== undefined ? { lampTypeId: body.lampTypeId } : {}),
+    ...(body.label !== undefined ? { label: body.label } : {}),
+    ...(body.designObjectId !== undefined ? { designObjectId: body.designObjectId ?? null } : {}),
+    ...(body.firstUsedOn !== undefined ? { firstUsedOn: body.firstUsedOn } : {}),
+    ...(body.hoursPerDay !== undefined ? { hoursPerDay: body.hoursPerDay } : {}),
+    ...(body.baskingDistance !== undefined
+      ? { baskingDistanceCm: body.baskingDistance ? round1(toCm(body.baskingDistance, unit)) : null }
+      : {}),
+    ...(body.baskingTransmission !== undefined
+      ? { baskingTransmission: body.baskingTransmission ?? null }
+      : {}),
+    ...(body.retiredOn !== undefined ? { retiredOn: body.retiredOn ?? null } : {}),
+    ...(body.notes !== undefined ? { notes: body.notes ?? null } : {}),
+  };
+  const first = next.firstUsedOn ?? lamp.firstUsedOn;
+  const retired = 'retiredOn' in next ? next.retiredOn : lamp.retiredOn;
+  if (retired && retired < first)
+    throw badRequest('retiredOn', 'A lamp cannot be retired before its first use.');
+  await lamp.update(next);
+}
+
+export type ReadingInput = z.output<typeof createReadingBody>;
+
+export function readingColumns(lamp: Lamp, r: ReadingInput) {
+  if (r.takenAt.toISOString().slice(0, 10) < lamp.firstUsedOn) {
+    throw badRequest(
+      'takenAt',
+      `This lamp was first used on ${lamp.firstUsedOn}; a reading cannot be earlier.`,
+    );
+  }
+  return {
+    lampId: lamp.id,
+    takenAt: r.takenAt,
+    distanceCm: round1(toCm(r.distance, r.distanceUnit)),
+    value: r.value,
+    unit: r.unit,
+    meter: r.meter ?? null,
+    note: r.note ?? null,
+  };
+}
+
+export async function createReading(lamp: Lamp, r: ReadingInput, userId: number): Promise<Reading> {
+  getSequelize();
+  return Reading.create({ ...readingColumns(lamp, r), takenById: userId });
+}
+
+export async function updateReading(
+  reading: Reading & { lamp: Lamp },
+  body: z.output<typeof updateReadingBody>,
+): Promise<void> {
+  const merged: ReadingInput = {
+    takenAt: body.takenAt ?? reading.takenAt,
+    distance: body.distance ?? reading.distanceCm,
+    distanceUnit: body.distance !== undefined ? (body.distanceUnit ?? 'cm') : 'cm',
+    value: body.value ?? reading.value,
+    unit: body.unit ?? reading.unit,
+    meter: body.meter !== undefined ? body.meter : (reading.meter ?? null),
+    note: body.note !== undefined ? body.note : (reading.note ?? null),
+  };
+  const { lampId: _lampId, ...cols } = readingColumns(reading.lamp, merged);
+  await reading.update(cols);
+}

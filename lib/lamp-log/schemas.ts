@@ -1,0 +1,109 @@
+import { z } from 'zod';
+import { idSchema } from '@/lib/api/schemas';
+import { READING_UNITS } from '@/models/reading';
+
+/** Request shapes of the lamp log routes and forms, with messages a person can act on. */
+
+export const CM_PER_INCH = 2.54;
+export const LENGTH_UNITS = ['cm', 'in'] as const;
+export type LengthUnit = (typeof LENGTH_UNITS)[number];
+
+export const toCm = (value: number, unit: LengthUnit) => (unit === 'in' ? value * CM_PER_INCH : value);
+export const fromCm = (cm: number, unit: LengthUnit) => (unit === 'in' ? cm / CM_PER_INCH : cm);
+
+const isoDate = (what: string) =>
+  z
+    .string({ error: `Enter ${what} as a date (YYYY-MM-DD).` })
+    .regex(/^\d{4}-\d{2}-\d{2}$/, `Enter ${what} as a date (YYYY-MM-DD).`)
+    .refine(
+      (s) =>
+        !Number.isNaN(Date.parse(`${s}T00:00:00Z`)) && new Date(`${s}T00:00:00Z`).toISOString().startsWith(s),
+      {
+        message: `${what[0]!.toUpperCase()}${what.slice(1)} is not a real date.`,
+      },
+    );
+
+const text = (max: number) =>
+  z
+    .string()
+    .trim()
+    .max(max, `Use at most ${max} characters.`)
+    .nullish()
+    .transform((v) => (v ? v : null));
+
+const lengthUnit = z.enum(LENGTH_UNITS, { error: 'The length unit must be cm or in.' }).default('cm');
+
+const distance = (what: string, max: number) =>
+  z
+    .number({ error: `Enter the ${what}.` })
+    .positive(`The ${what} must be more than 0.`)
+    .max(max, `The ${what} is too large.`);
+
+export const lampFields = {
+  lampTypeId: idSchema('The lamp type'),
+  label: z
+    .string({ error: 'Give the lamp a name, e.g. "Basking tube".' })
+    .trim()
+    .min(1, 'Give the lamp a name, e.g. "Basking tube".')
+    .max(120, 'Use at most 120 characters.'),
+  designObjectId: text(100),
+  firstUsedOn: isoDate('the date of first use'),
+  hoursPerDay: z
+    .number({ error: 'Enter the hours a day it is on.' })
+    .min(0.5, 'A lamp in use is on at least half an hour a day.')
+    .max(24, 'A day has 24 hours.'),
+  /** In `lengthUnit` (cm unless given). */
+  baskingDistance: distance('basking distance', 2000).nullish(),
+  baskingTransmission: z
+    .number({ error: 'The share passing through must be a number.' })
+    .gt(0, 'The share passing through must be more than 0 (0 would block all UV).')
+    .max(1, 'The share passing through is at most 1 (nothing in between).')
+    .nullish(),
+  retiredOn: isoDate('the retirement date').nullish(),
+  notes: text(5000),
+  lengthUnit,
+};
+
+export const createLampBody = z
+  .strictObject(lampFields)
+  .refine((b) => !b.retiredOn || b.retiredOn >= b.firstUsedOn, {
+    message: 'A lamp cannot be retired before its first use.',
+    path: ['retiredOn'],
+  });
+
+export const updateLampBody = z
+  .strictObject(lampFields)
+  .partial()
+  .refine((b) => Object.keys(b).filter((k) => k !== 'lengthUnit').length > 0, {
+    message: 'Send at least one field to change.',
+  });
+
+export const readingFields = {
+  takenAt: z.coerce
+    .date({ error: 'Enter when the reading was taken (a date and time).' })
+    .refine((d) => d.getTime() <= Date.now() + 24 * 3600 * 1000, 'A reading cannot be in the future.')
+    .refine((d) => d.getUTCFullYear() >= 1990, 'That date is too long ago.'),
+  distance: distance('distance from the lamp', 2000),
+  distanceUnit: lengthUnit,
+  value: z
+    .number({ error: 'Enter the meter value.' })
+    .min(0, 'A meter value cannot be negative.')
+    .max(100000, 'That meter value is too large.'),
+  unit: z.enum(READING_UNITS, { error: 'The unit must be uvb (µW/cm²) or uvi (UV Index).' }),
+  meter: text(160),
+  note: text(2000),
+};
+
+export const createReadingBody = z.strictObject(readingFields);
+export const updateReadingBody = z
+  .strictObject(readingFields)
+  .partial()
+  .refine((b) => Object.keys(b).filter((k) => k !== 'distanceUnit').length > 0, {
+    message: 'Send at least one field to change.',
+  });
+
+export const calibrationBody = z.strictObject({
+  variantId: idSchema('The variant'),
+  /** The variant version the proposal was shown for; a newer save makes this 409. */
+  baseVersion: z.number().int().positive().optional(),
+});

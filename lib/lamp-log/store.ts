@@ -1,0 +1,309 @@
+import { Op, fn, col, where as sqlWhere } from 'sequelize';
+import { getSequelize } from '@/lib/db';
+import { toDto as lampTypeDto } from '@/lib/lamp-types/store';
+import type { LampTypeDto } from '@/lib/lamp-types/schema';
+import { Enclosure, Lamp, LampType, Reading, SpeciesSheet, User } from '@/models';
+import { defaultDecayFor } from './decay';
+import { sampleCurve } from './fit';
+import { distanceFactor, REFERENCE_CM } from './geometry';
+import { lampOutlook, STATUS_LABEL, type LampFacts, type Outlook, type ReadingFacts } from './outlook';
+import type { SpeciesNeed } from './need';
+
+/** Database access and JSON views of the lamp log. Callers check permissions first (access.ts). */
+
+export function lampFacts(lamp: Lamp, type: LampTypeDto): LampFacts {
+  return {
+    id: lamp.id,
+    label: lamp.label,
+    firstUsedOn: lamp.firstUsedOn,
+    hoursPerDay: lamp.hoursPerDay,
+    retiredOn: lamp.retiredOn ?? null,
+    baskingDistanceCm: lamp.baskingDistanceCm ?? null,
+    baskingTransmission: lamp.baskingTransmission ?? null,
+    type: {
+      name: type.name,
+      tech: type.tech,
+      form: type.form,
+      lengthCm: type.lengthCm,
+      uvbAt30: type.uvbAt30,
+      uviPerUvb: type.uviPerUvb,
+      halfLifeMonths: type.halfLifeMonths,
+      decayPoints: type.decayPoints,
+      replaceAfterMonths: type.replaceAfterMonths,
+    },
+  };
+}
+
+export const readingFacts = (r: Reading): ReadingFacts => ({
+  id: r.id,
+  takenAt: r.takenAt,
+  distanceCm: r.distanceCm,
+  value: r.value,
+  unit: r.unit,
+});
+
+export type SpeciesMatch =
+  { ok: true; need: SpeciesNeed; sheetId: number } | { ok: false; missing: string; need: null };
+
+/** The enclosure's species sheet: its species name matched to a sheet's common or scientific name. */
+export async function speciesForEnclosures(enclosures: Enclosure[]): Promise<Map<number, SpeciesMatch>> {
+  getSequelize();
+  const out = new Map<number, SpeciesMatch>();
+  const byOrg = new Map<number, Set<string>>();
+  for (const e of enclosures) {
+    const name = e.speciesName?.trim().toLowerCase();
+    if (name)
+      (byOrg.get(e.organisationId) ?? byOrg.set(e.organisationId, new Set()).get(e.organisationId)!).add(
+        name,
+      );
+  }
+  const sheets: SpeciesSheet[] = [];
+  for (const [organisationId, names] of byOrg) {
+    const list = [...names];
+    sheets.push(
+      ...(await SpeciesSheet.findAll({
+        where: {
+          organisationId,
+          [Op.or]: [
+            sqlWhere(fn('LOWER', col('common_name')), { [Op.in]: list }),
+            sqlWhere(fn('LOWER', col('scientific_name')), { [Op.in]: list }),
+          ],
+        },
+        order: [['id', 'ASC']],
+      })),
+    );
+  }
+  for (const e of enclosures) {
+    const name = e.speciesName?.trim();
+    if (!name) {
+      out.set(e.id, {
+        ok: false,
+        missing: 'the species of this enclosure (set it on the enclosure)',
+        need: null,
+      });
+      continue;
+    }
+    const lower = name.toLowerCase();
+    const sheet = sheets.find(
+      (s) =>
+        s.organisationId === e.organisationId &&
+        (s.commonName.toLowerCase() === lower || s.scientificName.toLowerCase() === lower),
+    );
+    out.set(
+      e.id,
+      sheet
+        ? {
+            ok: true,
+            sheetId: sheet.id,
+            need: {
+              name: sheet.commonName,
+              uvZone: sheet.uvZone,
+              uvbTargetUw:
+                sheet.uvbTargetMinUw !== null && sheet.uvbTargetMaxUw !== null
+                  ? { min: sheet.uvbTargetMinUw, max: sheet.uvbTargetMaxUw }
+                  : null,
+            },
+          }
+        : {
+            ok: false,
+            missing: `a species sheet named “${name}” (add one, or fix the enclosure’s species)`,
+            need: null,
+          },
+    );
+  }
+  return out;
+}
+
+export type LampSummary = ReturnType<typeof summaryJson>;
+
+function fitJson(o: Outlook) {
+  const f = o.fit;
+  return {
+    kind: f.kind,
+    certainty: f.certainty,
+    note: f.note,
+    n: f.n,
+    e0:
+      f.kind === 'exponential' || f.kind === 'two-phase'
+        ? f.e0
+        : f.kind === 'default-scaled'
+          ? f.scale
+          : null,
+    tauDays: f.kind === 'exponential' ? f.tauDays : null,
+    e0Se: f.kind === 'exponential' ? f.e0Se : null,
+    tauSe: f.kind === 'exponential' ? f.tauSe : null,
+    rmsLog: f.kind === 'exponential' || f.kind === 'two-phase' ? f.rmsLog : null,
+  };
+}
+
+function summaryJson(lamp: Lamp, type: LampTypeDto, enclosure: Enclosure, species: SpeciesMatch, o: Outlook) {
+  const missing = [...o.missing];
+  if (!species.ok) {
+    const i = missing.indexOf('a species sheet for this enclosure');
+    if (i >= 0) missing[i] = species.missing;
+  }
+  return {
+    id: lamp.id,
+    label: lamp.label,
+    enclosure: {
+      id: enclosure.id,
+      name: enclosure.name,
+      keeperId: enclosure.keeperId,
+      speciesName: enclosure.speciesName,
+    },
+    lampType: { id: type.id, name: type.name, tech: type.tech, form: type.form, lengthCm: type.lengthCm },
+    designObjectId: lamp.designObjectId ?? null,
+    firstUsedOn: lamp.firstUsedOn,
+    hoursPerDay: lamp.hoursPerDay,
+    baskingDistanceCm: lamp.baskingDistanceCm ?? null,
+    baskingTransmission: lamp.baskingTransmission ?? null,
+    retiredOn: lamp.retiredOn ?? null,
+    notes: lamp.notes ?? null,
+    species: species.ok
+      ? { sheetId: species.sheetId, name: species.need.name, uvZone: species.need.uvZone }
+      : null,
+    ageDays: o.ageDays,
+    ageMonths: Math.round(o.ageMonths * 10) / 10,
+    unit: o.unit,
+    lastReading: o.lastReading,
+    remainingFraction: o.remainingFraction,
+    nowAt30: o.nowAt30,
+    basking: o.basking,
+    missing,
+    fallsBelowOn: o.fallsBelowOn,
+    fallsBelowEarliestOn: o.fallsBelowEarliestOn,
+    testDueOn: o.testDueOn,
+    replaceDueOn: o.replaceDueOn,
+    replaceBasis: o.replaceBasis,
+    status: o.status,
+    statusLabel: STATUS_LABEL[o.status],
+    reasons: o.reasons,
+    fit: fitJson(o),
+  };
+}
+
+type Loaded = { lamp: Lamp; type: LampTypeDto; enclosure: Enclosure; readings: Reading[] };
+
+async function loadFor(lamps: (Lamp & { enclosure?: Enclosure })[]): Promise<Loaded[]> {
+  if (lamps.length === 0) return [];
+  const ids = lamps.map((l) => l.id);
+  const [types, readings, enclosures] = await Promise.all([
+    LampType.findAll({ where: { id: [...new Set(lamps.map((l) => l.lampTypeId))] } }),
+    Reading.findAll({
+      where: { lampId: ids },
+      order: [
+        ['takenAt', 'ASC'],
+        ['id', 'ASC'],
+      ],
+    }),
+    Enclosure.findAll({ where: { id: [...new Set(lamps.map((l) => l.enclosureId))] } }),
+  ]);
+  const typeById = new Map(types.map((t) => [t.id, lampTypeDto(t)]));
+  const encById = new Map(enclosures.map((e) => [e.id, e]));
+  return lamps.map((lamp) => ({
+    lamp,
+    type: typeById.get(lamp.lampTypeId)!,
+    enclosure: encById.get(lamp.enclosureId)!,
+    readings: readings.filter((r) => r.lampId === lamp.id),
+  }));
+}
+
+export async function summarise(lamps: Lamp[], today: string): Promise<LampSummary[]> {
+  const loaded = await loadFor(lamps);
+  const species = await speciesForEnclosures([
+    ...new Map(loaded.map((l) => [l.enclosure.id, l.enclosure])).values(),
+  ]);
+  return loaded.map(({ lamp, type, enclosure, readings }) => {
+    const match = species.get(enclosure.id)!;
+    const o = lampOutlook(lampFacts(lamp, type), readings.map(readingFacts), match.need, today);
+    return summaryJson(lamp, type, enclosure, match, o);
+  });
+}
+
+export async function lampsOfEnclosure(enclosureId: number, opts: { cursor?: number; limit: number }) {
+  getSequelize();
+  return Lamp.findAll({
+    where: { enclosureId, ...(opts.cursor ? { id: { [Op.gt]: opts.cursor } } : {}) },
+    order: [['id', 'ASC']],
+    limit: opts.limit + 1,
+  });
+}
+
+/**
+ * Lamps across an organisation; a keeper sees only lamps of their own enclosures. Newest enclosure
+ * first is not needed: the page sorts by status.
+ */
+export async function lampsOfOrganisation(
+  organisationId: number,
+  keeperId: number | null,
+  opts: { cursor?: number; limit: number; includeRetired?: boolean },
+) {
+  getSequelize();
+  return Lamp.findAll({
+    where: {
+      ...(opts.cursor ? { id: { [Op.gt]: opts.cursor } } : {}),
+      ...(opts.includeRetired ? {} : { retiredOn: null }),
+    },
+    include: [
+      {
+        model: Enclosure,
+        as: 'enclosure',
+        required: true,
+        attributes: ['id'],
+        where: { organisationId, ...(keeperId ? { keeperId } : {}) },
+      },
+    ],
+    order: [['id', 'ASC']],
+    limit: opts.limit + 1,
+  });
+}
+
+export function readingJson(r: Reading & { takenBy?: User | null }) {
+  return {
+    id: r.id,
+    lampId: r.lampId,
+    takenAt: r.takenAt.toISOString(),
+    distanceCm: r.distanceCm,
+    value: r.value,
+    unit: r.unit,
+    meter: r.meter ?? null,
+    note: r.note ?? null,
+    takenById: r.takenById,
+    uploadId: r.uploadId ?? null,
+  };
+}
+
+/** One lamp with its readings and what the chart draws: points at 30 cm, the fitted curve and its band. */
+export async function lampDetail(lamp: Lamp, today: string) {
+  const [loaded] = await loadFor([lamp]);
+  const { type, enclosure, readings } = loaded!;
+  const species = (await speciesForEnclosures([enclosure])).get(enclosure.id)!;
+  const facts = lampFacts(lamp, type);
+  const o = lampOutlook(facts, readings.map(readingFacts), species.need, today);
+  const decay = defaultDecayFor(type, lamp.hoursPerDay);
+  const lastDay = Math.max(o.ageDays, ...o.points.map((p) => p.days), 30);
+  const horizon = Math.max(lastDay * 1.5, lastDay + 120);
+  const curve = sampleCurve(o.fit, decay, 0, horizon, 80);
+  // The need line, expressed at 30 cm like the points, so everything on the chart compares directly.
+  const needAt30 =
+    o.basking && o.basking.distanceCm > 0
+      ? o.basking.threshold /
+        (distanceFactor(facts.type, REFERENCE_CM, o.basking.distanceCm) * o.basking.transmission)
+      : null;
+  return {
+    lamp: summaryJson(lamp, type, enclosure, species, o),
+    readings: readings.map(readingJson),
+    chart: {
+      unit: o.unit,
+      firstUsedOn: lamp.firstUsedOn,
+      todayDays: o.ageDays,
+      points: o.points.map((p) => ({ ...p })),
+      curve,
+      needAt30,
+      needLabel: o.basking?.needLabel ?? null,
+      certainty: o.fit.certainty,
+    },
+  };
+}
+
+export type LampDetail = Awaited<ReturnType<typeof lampDetail>>;

@@ -1,0 +1,357 @@
+import { describe, expect, it } from 'vitest';
+import * as enclosureLampsRoute from '@/app/api/enclosures/[id]/lamps/route';
+import * as lampsRoute from '@/app/api/lamps/route';
+import * as lampRoute from '@/app/api/lamps/[id]/route';
+import * as lampReadingsRoute from '@/app/api/lamps/[id]/readings/route';
+import * as calibrationRoute from '@/app/api/lamps/[id]/calibration/route';
+import * as readingRoute from '@/app/api/readings/[id]/route';
+import { addDays, todayIso } from '@/lib/lamp-log/dates';
+import { seedStartingCatalogue } from '@/lib/species/seed';
+import { Design, LampType, Reading, Variant } from '@/models';
+import { createEnclosure, createMember, createOrganisation, withTestDatabase } from '../helpers/db';
+import { call, expectNoInternals } from './http';
+
+withTestDatabase();
+
+async function world() {
+  const org = await createOrganisation('Shop A');
+  await seedStartingCatalogue(org.id);
+  const { user: staff } = await createMember('staff', org);
+  const { user: keeper } = await createMember('keeper', org);
+  const { user: otherKeeper } = await createMember('keeper', org);
+  const { organisation: otherOrg, user: outsider } = await createMember('owner');
+  await seedStartingCatalogue(otherOrg.id);
+  const enclosure = await createEnclosure(org, keeper, { speciesName: 'Bearded dragon', heightCm: 60 });
+  const otherEnclosure = await createEnclosure(org, otherKeeper);
+  const t5 = (await LampType.findOne({ where: { organisationId: org.id, tech: 't5', uvbAt30: 42.5 } }))!;
+  const foreignType = (await LampType.findOne({ where: { organisationId: otherOrg.id, tech: 't5' } }))!;
+  return { org, staff, keeper, otherKeeper, outsider, enclosure, otherEnclosure, t5, foreignType };
+}
+type World = Awaited<ReturnType<typeof world>>;
+
+const lampBody = (w: World, over: Record<string, unknown> = {}) => ({
+  lampTypeId: w.t5.id,
+  label: 'Basking tube',
+  firstUsedOn: '2025-01-10',
+  hoursPerDay: 12,
+  baskingDistance: 10,
+  lengthUnit: 'in',
+  designObjectId: 'uv1',
+  ...over,
+});
+
+async function addLamp(w: World, over: Record<string, unknown> = {}) {
+  const r = await call(enclosureLampsRoute.POST, {
+    method: 'POST',
+    path: `/api/enclosures/${w.enclosure.id}/lamps`,
+    params: { id: w.enclosure.id },
+    as: w.keeper,
+    body: lampBody(w, over),
+  });
+  expect(r.status, r.text).toBe(201);
+  return r.body.lamp;
+}
+
+async function addReading(w: World, lampId: number, body: Record<string, unknown>) {
+  return call(lampReadingsRoute.POST, {
+    method: 'POST',
+    path: `/api/lamps/${lampId}/readings`,
+    params: { id: lampId },
+    as: w.keeper,
+    body,
+  });
+}
+
+describe('lamps of an enclosure', () => {
+  it('adds a lamp (basking distance in inches, stored in cm) and asks for a first reading', async () => {
+    const w = await world();
+    // A lamp switched on three weeks ago: well inside its typical life, but never measured.
+    const lamp = await addLamp(w, { firstUsedOn: addDays(todayIso(), -21) });
+    expect(lamp).toMatchObject({
+      label: 'Basking tube',
+      baskingDistanceCm: 25.4,
+      status: 'test-soon',
+      species: { name: 'Bearded dragon', uvZone: 4 },
+      lampType: { id: w.t5.id, tech: 't5', form: 'tube', lengthCm: 55 },
+    });
+    expect(lamp.missing).toContain('a meter reading');
+    const list = await call(enclosureLampsRoute.GET, {
+      path: `/api/enclosures/${w.enclosure.id}/lamps`,
+      params: { id: w.enclosure.id },
+      as: w.staff,
+    });
+    expect(list.status).toBe(200);
+    expect(list.body.items.map((l: { id: number }) => l.id)).toEqual([lamp.id]);
+  });
+
+  it('answers 400 naming the field for bad input, and for a lamp type of another organisation', async () => {
+    const w = await world();
+    const bad = await call(enclosureLampsRoute.POST, {
+      method: 'POST',
+      path: `/api/enclosures/${w.enclosure.id}/lamps`,
+      params: { id: w.enclosure.id },
+      as: w.keeper,
+      body: lampBody(w, { hoursPerDay: 30, firstUsedOn: '2025-02-30' }),
+    });
+    expect(bad.status).toBe(400);
+    const fields = bad.body.error.issues.map((i: { field: string }) => i.field);
+    expect(fields).toEqual(expect.arrayContaining(['hoursPerDay', 'firstUsedOn']));
+    const foreign = await call(enclosureLampsRoute.POST, {
+      method: 'POST',
+      path: `/api/enclosures/${w.enclosure.id}/lamps`,
+      params: { id: w.enclosure.id },
+      as: w.keeper,
+      body: lampBody(w, { lampTypeId: w.foreignType.id }),
+    });
+    expect(foreign.status).toBe(400);
+    expect(foreign.body.error.field).toBe('lampTypeId');
+  });
+
+  it('hides one keeper’s lamps from another keeper and from other organisations (404), 401 without a session', async () => {
+    const w = await world();
+    const lamp = await addLamp(w);
+    for (const as of [w.otherKeeper, w.outsider]) {
+      const r = await call(lampRoute.GET, { path: `/api/lamps/${lamp.id}`, params: { id: lamp.id }, as });
+      expect(r.status).toBe(404);
+      expectNoInternals(r);
+      const add = await call(enclosureLampsRoute.POST, {
+        method: 'POST',
+        path: `/api/enclosures/${w.enclosure.id}/lamps`,
+        params: { id: w.enclosure.id },
+        as,
+        body: lampBody(w),
+      });
+      expect(add.status).toBe(404);
+    }
+    const anon = await call(lampRoute.GET, { path: `/api/lamps/${lamp.id}`, params: { id: lamp.id } });
+    expect(anon.status).toBe(401);
+  });
+
+  it('lists an organisation’s lamps: everything for staff, only their own for a keeper', async () => {
+    const w = await world();
+    const mine = await addLamp(w);
+    const theirs = await call(enclosureLampsRoute.POST, {
+      method: 'POST',
+      path: `/api/enclosures/${w.otherEnclosure.id}/lamps`,
+      params: { id: w.otherEnclosure.id },
+      as: w.staff,
+      body: lampBody(w, { label: 'Other tube' }),
+    });
+    expect(theirs.status).toBe(201);
+    const path = `/api/lamps?organisationId=${w.org.id}`;
+    const staff = await call(lampsRoute.GET, { path, as: w.staff });
+    expect(staff.body.items).toHaveLength(2);
+    const keeper = await call(lampsRoute.GET, { path, as: w.keeper });
+    expect(keeper.body.items.map((l: { id: number }) => l.id)).toEqual([mine.id]);
+    const outsider = await call(lampsRoute.GET, { path, as: w.outsider });
+    expect(outsider.status).toBe(404);
+  });
+});
+
+describe('readings', () => {
+  it('stores readings in cm, fits them, and shows the chart data', async () => {
+    const w = await world();
+    const lamp = await addLamp(w);
+    const days = [0, 60, 120, 180];
+    for (const d of days) {
+      const takenAt = new Date(Date.UTC(2025, 0, 10 + d, 12)).toISOString();
+      const r = await addReading(w, lamp.id, {
+        takenAt,
+        distance: 10,
+        distanceUnit: 'in',
+        value: 80 * Math.exp(-d / 400),
+        unit: 'uvb',
+        meter: 'broadband meter',
+      });
+      expect(r.status, r.text).toBe(201);
+      expect(r.body.reading.distanceCm).toBe(25.4);
+    }
+    const detail = await call(lampRoute.GET, {
+      path: `/api/lamps/${lamp.id}`,
+      params: { id: lamp.id },
+      as: w.keeper,
+    });
+    expect(detail.status).toBe(200);
+    expect(detail.body.readings).toHaveLength(4);
+    expect(detail.body.lamp.fit).toMatchObject({ kind: 'exponential', certainty: 'fitted', n: 4 });
+    expect(detail.body.lamp.fit.tauDays).toBeCloseTo(400, 0);
+    expect(detail.body.chart.points).toHaveLength(4);
+    expect(detail.body.chart.curve.length).toBeGreaterThan(10);
+    // Bearded dragon sheet: 25 µW/cm² target at the basking spot.
+    expect(detail.body.lamp.basking.threshold).toBe(25);
+    expect(detail.body.lamp.fallsBelowOn).toMatch(/^\d{4}-\d{2}-\d{2}$/);
+  });
+
+  it('refuses readings in the future, before first use, or with a negative value', async () => {
+    const w = await world();
+    const lamp = await addLamp(w);
+    const base = { distance: 30, value: 40, unit: 'uvb' };
+    const future = await addReading(w, lamp.id, { ...base, takenAt: '2999-01-01T00:00:00Z' });
+    expect(future.status).toBe(400);
+    expect(future.body.error.field).toBe('takenAt');
+    const early = await addReading(w, lamp.id, { ...base, takenAt: '2024-12-01T00:00:00Z' });
+    expect(early.status).toBe(400);
+    expect(early.body.error.message).toMatch(/first used on 2025-01-10/);
+    const negative = await addReading(w, lamp.id, { ...base, value: -1, takenAt: '2025-02-01T00:00:00Z' });
+    expect(negative.status).toBe(400);
+    expect(negative.body.error.field).toBe('value');
+    expect(await Reading.count()).toBe(0);
+  });
+
+  it('corrects and deletes a reading; another keeper cannot', async () => {
+    const w = await world();
+    const lamp = await addLamp(w);
+    const r = await addReading(w, lamp.id, {
+      takenAt: '2025-02-01T10:00:00Z',
+      distance: 30,
+      value: 40,
+      unit: 'uvb',
+    });
+    const id = r.body.reading.id;
+    const fix = await call(readingRoute.PATCH, {
+      method: 'PATCH',
+      path: `/api/readings/${id}`,
+      params: { id },
+      as: w.keeper,
+      body: { value: 42 },
+    });
+    expect(fix.status).toBe(200);
+    expect(fix.body.reading.value).toBe(42);
+    const other = await call(readingRoute.DELETE, {
+      method: 'DELETE',
+      path: `/api/readings/${id}`,
+      params: { id },
+      as: w.otherKeeper,
+    });
+    expect(other.status).toBe(404);
+    const del = await call(readingRoute.DELETE, {
+      method: 'DELETE',
+      path: `/api/readings/${id}`,
+      params: { id },
+      as: w.keeper,
+    });
+    expect(del.status).toBe(200);
+    expect(await Reading.count()).toBe(0);
+  });
+
+  it('retires a lamp, keeping its readings', async () => {
+    const w = await world();
+    const lamp = await addLamp(w);
+    await addReading(w, lamp.id, { takenAt: '2025-02-01T10:00:00Z', distance: 30, value: 40, unit: 'uvb' });
+    const r = await call(lampRoute.PATCH, {
+      method: 'PATCH',
+      path: `/api/lamps/${lamp.id}`,
+      params: { id: lamp.id },
+      as: w.keeper,
+      body: { retiredOn: '2025-06-01' },
+    });
+    expect(r.status).toBe(200);
+    expect(r.body.lamp.status).toBe('retired');
+    expect(r.body.readings).toHaveLength(1);
+    const before = await call(lampRoute.PATCH, {
+      method: 'PATCH',
+      path: `/api/lamps/${lamp.id}`,
+      params: { id: lamp.id },
+      as: w.keeper,
+      body: { retiredOn: '2024-06-01' },
+    });
+    expect(before.status).toBe(400);
+    expect(before.body.error.field).toBe('retiredOn');
+  });
+});
+
+describe('calibration', () => {
+  async function withDesign(w: World) {
+    const design = await Design.create({
+      enclosureId: w.enclosure.id,
+      name: 'Plan',
+      createdById: w.staff.id,
+    });
+    const file = {
+      format: 'baskwell.design',
+      version: 1,
+      enclosure: { width: 120, height: 60, depth: 60 },
+      objects: [
+        {
+          type: 'lamp',
+          id: 'uv1',
+          tech: 't5',
+          form: 'tube',
+          x: 60,
+          y: 62,
+          length: 55,
+          uvbAt30: 42.5,
+          uviPerUvb: 0.04,
+        },
+      ],
+    };
+    return Variant.create({
+      designId: design.id,
+      name: 'Variant A',
+      designJson: JSON.stringify(file),
+      createdById: w.staff.id,
+      updatedById: w.staff.id,
+    });
+  }
+
+  it('proposes the measured uvbAt30 and applies it to the variant, bumping its version', async () => {
+    const w = await world();
+    const variant = await withDesign(w);
+    const lamp = await addLamp(w);
+    for (const [d, uvb, uvi] of [
+      [0, 60, 2.4],
+      [90, 51, 2.04],
+      [180, 43.4, 1.74],
+    ] as const) {
+      const takenAt = new Date(Date.UTC(2025, 0, 10 + d, 12)).toISOString();
+      expect((await addReading(w, lamp.id, { takenAt, distance: 30, value: uvb, unit: 'uvb' })).status).toBe(
+        201,
+      );
+      expect((await addReading(w, lamp.id, { takenAt, distance: 30, value: uvi, unit: 'uvi' })).status).toBe(
+        201,
+      );
+    }
+    const path = `/api/lamps/${lamp.id}/calibration`;
+    const proposal = await call(calibrationRoute.GET, { path, params: { id: lamp.id }, as: w.keeper });
+    expect(proposal.status).toBe(200);
+    const target = proposal.body.targets[0];
+    expect(target.variant.id).toBe(variant.id);
+    expect(target.calibration.ok).toBe(true);
+    expect(target.calibration.fields.uvbAt30).toBeCloseTo(60, -1);
+    expect(target.calibration.fields.uviPerUvb).toBeCloseTo(0.04, 3);
+    expect(target.calibration.calibrated.from).toBe(6);
+
+    const stale = await call(calibrationRoute.POST, {
+      method: 'POST',
+      path,
+      params: { id: lamp.id },
+      as: w.keeper,
+      body: { variantId: variant.id, baseVersion: 7 },
+    });
+    expect(stale.status).toBe(409);
+    const applied = await call(calibrationRoute.POST, {
+      method: 'POST',
+      path,
+      params: { id: lamp.id },
+      as: w.keeper,
+      body: { variantId: variant.id, baseVersion: 1 },
+    });
+    expect(applied.status, applied.text).toBe(200);
+    expect(applied.body.variant.version).toBe(2);
+    const stored = JSON.parse((await Variant.findByPk(variant.id))!.designJson);
+    expect(stored.objects[0].uvbAt30).toBe(target.calibration.fields.uvbAt30);
+    expect(stored.objects[0].decay.points[0]).toEqual([0, 1]);
+  });
+
+  it('says what is missing when the lamp is not linked to a design lamp', async () => {
+    const w = await world();
+    const lamp = await addLamp(w, { designObjectId: null });
+    const r = await call(calibrationRoute.GET, {
+      path: `/api/lamps/${lamp.id}/calibration`,
+      params: { id: lamp.id },
+      as: w.keeper,
+    });
+    expect(r.body.targets).toEqual([]);
+    expect(r.body.hint).toMatch(/Link this lamp/);
+  });
+});
