@@ -13,3 +13,12 @@ export {
 } from './sources/uv';
 export { tubeBelowCentre, tubePiece } from './sources/tube';
 export { pointIrradiance } from './sources/point';
+export { contourBands, defaultThresholds, UVI_THRESHOLDS, type ContourBand } from './contours';
+export {
+  UV_ZONES,
+  UV_REFUGE_UVI,
+  zonesForMaxUvi,
+  zonesForMeanUvi,
+  type UvZone,
+  type ZoneRange,
+} from './assess/zones';
