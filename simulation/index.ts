@@ -22,3 +22,4 @@ export {
   type UvZone,
   type ZoneRange,
 } from './assess/zones';
+export type { Assessment, Finding, FindingStatus, FindingWhere, Segment } from './assess/types';

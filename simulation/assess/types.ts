@@ -1,0 +1,31 @@
+import type { SpeciesSheet } from '../model/species';
+
+export type { SpeciesSheet };
+
+export type FindingStatus = 'pass' | 'attention' | 'fail';
+
+export interface Segment {
+  x1: number;
+  y1: number;
+  x2: number;
+  y2: number;
+}
+
+export type FindingWhere =
+  { kind: 'segments'; segments: Segment[] } | { kind: 'object'; objectIds: string[] };
+
+export interface Finding {
+  /** 'basking-uvi', 'uv-refuge', 'uv-gradient', 'hot-spot', 'cool-end', 'lamp-in-reach', 'eye-safety', ... */
+  id: string;
+  status: FindingStatus;
+  title: string;
+  /** Plain language; always reads as an estimate to verify with a meter and thermometer. */
+  message: string;
+  numbers: Record<string, number>;
+  where?: FindingWhere;
+}
+
+export interface Assessment {
+  findings: Finding[];
+  overall: FindingStatus;
+}
