@@ -1,0 +1,11 @@
+/**
+ * Next.js calls register() once when a server starts. The Node.js server runs the lamp reminder job on
+ * an interval (lib/reminders/schedule.ts); `npm run reminders` runs one pass by hand. Set
+ * REMINDERS_INTERVAL_MINUTES=0 to turn the schedule off (e.g. when a separate worker runs it).
+ */
+export async function register() {
+  if (process.env.NEXT_RUNTIME !== 'nodejs') return;
+  if (process.env.NEXT_PHASE === 'phase-production-build') return;
+  const { startReminderSchedule } = await import('./lib/reminders/schedule');
+  startReminderSchedule();
+}
