@@ -20,6 +20,8 @@ import { Lifecycle, migrate, prepareDatabase, seed, startMail, startNext, startS
 
 const CHECKS = ['prettier', 'eslint', 'tsc', 'vitest', 'browser'];
 const RESULTS_DIR = path.join(ROOT, 'test-results');
+// The address unit and integration tests see (APP_URL, NEXTAUTH_URL): the documented default.
+const UNIT_APP_URL = 'http://localhost:3000';
 
 function parseArgs(argv) {
   const opts = { only: null, skip: new Set(), bail: false, filters: [] };
@@ -190,6 +192,8 @@ async function main() {
   }
 
   if (wanted('vitest')) {
+    // Integration tests call route handlers as if the app ran at the default address.
+    const unitEnv = { ...testEnv, APP_URL: UNIT_APP_URL, NEXTAUTH_URL: UNIT_APP_URL, PORT: '3000' };
     await step('vitest', () =>
       run(
         bin('vitest'),
@@ -200,7 +204,7 @@ async function main() {
           `--outputFile.json=${path.join(RESULTS_DIR, 'vitest.json')}`,
           ...(opts.only?.has('browser') ? [] : opts.filters),
         ],
-        { env: testEnv },
+        { env: unitEnv },
       ),
     );
   }
