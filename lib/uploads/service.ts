@@ -1,0 +1,208 @@
+import { createHash, randomUUID } from 'node:crypto';
+import { ApiError, allow, notFound } from '@/lib/api';
+import type { CurrentUser } from '@/lib/auth/session-user';
+import { getSequelize } from '@/lib/db';
+import { roleIn } from '@/lib/permissions';
+import { deleteObject, getObject, putObject, StorageUnavailableError } from '@/lib/storage/s3';
+import { Enclosure, Upload } from '@/models';
+import type { Transaction } from 'sequelize';
+import { InvalidImageError } from './errors';
+import { describeType, sniffImage } from './sniff';
+import { stripMetadata } from './strip';
+
+/** Uploaded files: checked by content, stripped of metadata, kept in the object store, served by id. */
+
+const EXT: Record<string, string> = {
+  'image/jpeg': 'jpg',
+  'image/png': 'png',
+  'image/webp': 'webp',
+  'text/csv': 'csv',
+};
+
+export const sha256 = (b: Uint8Array) => createHash('sha256').update(b).digest('hex');
+
+export function storageUnavailable(): ApiError {
+  return new ApiError(
+    503,
+    'unavailable',
+    'The file store cannot be reached right now. Nothing was saved; try again shortly.',
+    undefined,
+    undefined,
+    {
+      'Retry-After': '5',
+    },
+  );
+}
+
+export function uploadJson(u: Upload) {
+  return {
+    id: u.id,
+    kind: u.kind,
+    enclosureId: u.enclosureId,
+    contentType: u.contentType,
+    sizeBytes: u.sizeBytes,
+    sha256: u.sha256,
+    originalName: u.originalName,
+    url: `/api/uploads/${u.id}`,
+    createdAt: u.createdAt.toISOString(),
+  };
+}
+
+/** A photo of the real enclosure for the studio's traced backdrop. */
+export async function storeBackdrop(
+  user: CurrentUser,
+  enclosure: Enclosure,
+  bytes: Uint8Array,
+  claimedType: string | null,
+  originalName: string | null,
+): Promise<Upload> {
+  const type = sniffImage(bytes);
+  if (!type) {
+    const claim =
+      claimedType && claimedType !== 'application/octet-stream'
+        ? ` It says it is ${claimedType}, but`
+        : ' It';
+    throw new ApiError(
+      415,
+      'unsupported_media_type',
+      `Only JPEG, PNG or WebP photos can be used.${claim} does not start like any of them.`,
+      'file',
+    );
+  }
+  let clean: Uint8Array;
+  try {
+    clean = stripMetadata(type, bytes);
+  } catch (e) {
+    if (e instanceof InvalidImageError) throw new ApiError(415, 'unsupported_media_type', e.message, 'file');
+    throw e;
+  }
+  const key = `org-${enclosure.organisationId}/enclosure-${enclosure.id}/backdrop/${randomUUID()}.${EXT[type]}`;
+  return storeAndRecord(key, clean, type, {
+    kind: 'backdrop',
+    ownerId: user.id,
+    organisationId: enclosure.organisationId,
+    enclosureId: enclosure.id,
+    originalName: cleanName(originalName, describeType(type)),
+  });
+}
+
+/** Keeps an imported readings CSV with the readings made from it (for tracing where they came from). */
+export async function storeCsv(
+  user: CurrentUser,
+  enclosure: Enclosure,
+  text: string,
+  originalName: string | null,
+  transaction: Transaction,
+): Promise<Upload> {
+  const bytes = new TextEncoder().encode(text);
+  const key = `org-${enclosure.organisationId}/enclosure-${enclosure.id}/readings/${randomUUID()}.csv`;
+  return storeAndRecord(
+    key,
+    bytes,
+    'text/csv',
+    {
+      kind: 'readings-csv',
+      ownerId: user.id,
+      organisationId: enclosure.organisationId,
+      enclosureId: enclosure.id,
+      originalName: cleanName(originalName, 'readings.csv'),
+    },
+    transaction,
+  );
+}
+
+function cleanName(name: string | null, fallback: string): string {
+  // Only for display: strip paths and control characters, keep it short.
+  const base = (name ?? '').split(/[\\/]/).pop() ?? '';
+  const clean = base
+    .replace(/[\u0000-\u001f\u007f"]/g, '')
+    .trim()
+    .slice(0, 200);
+  return clean || fallback;
+}
+
+async function storeAndRecord(
+  key: string,
+  bytes: Uint8Array,
+  contentType: string,
+  row: Pick<Upload, 'kind' | 'ownerId' | 'organisationId' | 'enclosureId' | 'originalName'>,
+  transaction?: Transaction,
+): Promise<Upload> {
+  getSequelize();
+  try {
+    await putObject(key, bytes, contentType);
+  } catch (e) {
+    if (e instanceof StorageUnavailableError) throw storageUnavailable();
+    throw e;
+  }
+  try {
+    return await Upload.create(
+      { ...row, storageKey: key, contentType, sizeBytes: bytes.byteLength, sha256: sha256(bytes) },
+      { transaction },
+    );
+  } catch (e) {
+    // No row, no file: do not leave an orphan object behind.
+    await deleteObject(key).catch(() => undefined);
+    throw e;
+  }
+}
+
+type UploadWithEnclosure = Upload & { enclosure: Enclosure | null };
+
+/**
+ * The upload if this user may see it: a backdrop (or CSV) of an enclosure goes with that enclosure's
+ * read rights; anything without an enclosure is its uploader's and the organisation's owners' and staff's.
+ */
+export async function uploadFor(
+  user: CurrentUser,
+  id: number,
+  action: 'read' | 'delete',
+): Promise<UploadWithEnclosure> {
+  getSequelize();
+  const upload = (await Upload.findByPk(id, {
+    include: [{ model: Enclosure, as: 'enclosure', required: false }],
+  })) as UploadWithEnclosure | null;
+  if (!upload) throw notFound('The file');
+  if (upload.enclosure) {
+    const e = upload.enclosure;
+    allow(
+      user,
+      action === 'read' ? 'read' : 'update',
+      { kind: 'enclosure', organisationId: e.organisationId, keeperId: e.keeperId },
+      'The file',
+    );
+    return upload;
+  }
+  const role = roleIn(user, upload.organisationId);
+  const mayRead = upload.ownerId === user.id || role === 'owner' || role === 'staff';
+  if (!mayRead) throw notFound('The file');
+  if (action === 'delete' && upload.ownerId !== user.id && role !== 'owner') {
+    throw new ApiError(
+      403,
+      'forbidden',
+      'Only the person who uploaded it, or an owner, can delete this file.',
+    );
+  }
+  return upload;
+}
+
+export async function uploadBytes(upload: Upload): Promise<Uint8Array> {
+  try {
+    const bytes = await getObject(upload.storageKey);
+    if (!bytes) throw notFound('The file');
+    return bytes;
+  } catch (e) {
+    if (e instanceof StorageUnavailableError) throw storageUnavailable();
+    throw e;
+  }
+}
+
+export async function deleteUpload(upload: Upload): Promise<void> {
+  try {
+    await deleteObject(upload.storageKey);
+  } catch (e) {
+    if (e instanceof StorageUnavailableError) throw storageUnavailable();
+    throw e;
+  }
+  await upload.destroy();
+}

@@ -1,0 +1,130 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import * as uploadsRoute from '@/app/api/uploads/route';
+import * as uploadRoute from '@/app/api/uploads/[id]/route';
+import { useFakeS3 } from '@/lib/storage/fake-s3-for-tests';
+import { getObject } from '@/lib/storage/s3';
+import { jpegWithMetadata, pngWithMetadata } from '@/lib/uploads/fixtures.test-helpers';
+import { Upload } from '@/models';
+import { createEnclosure, createMember, createOrganisation, withTestDatabase } from '../helpers/db';
+import { call, ORIGIN, sessionCookie } from './http';
+
+// Backdrop photos against the real test database and the fake S3 server.
+let s3: { close: () => Promise<void> };
+beforeAll(async () => {
+  s3 = await useFakeS3();
+});
+afterAll(async () => {
+  await s3.close();
+});
+withTestDatabase();
+
+async function world() {
+  const org = await createOrganisation();
+  const { user: staff } = await createMember('staff', org);
+  const { user: keeper } = await createMember('keeper', org);
+  const { user: otherKeeper } = await createMember('keeper', org);
+  const { user: outsider } = await createMember('owner');
+  const enclosure = await createEnclosure(org, keeper);
+  return { staff, keeper, otherKeeper, outsider, enclosure };
+}
+type W = Awaited<ReturnType<typeof world>>;
+
+async function upload(w: W, bytes: Uint8Array, contentType: string, as = w.keeper, name = 'photo.jpg') {
+  const path = `/api/uploads?kind=backdrop&enclosureId=${w.enclosure.id}&name=${encodeURIComponent(name)}`;
+  const req = new Request(`${ORIGIN}${path}`, {
+    method: 'POST',
+    headers: { origin: ORIGIN, cookie: await sessionCookie(as), 'content-type': contentType },
+    body: Buffer.from(bytes),
+  });
+  const res = await uploadsRoute.POST(req, { params: Promise.resolve({}) });
+  return { status: res.status, body: await res.json() };
+}
+
+const getFile = (w: W, id: number, as: W['keeper'] | null) =>
+  call(uploadRoute.GET, { path: `/api/uploads/${id}`, params: { id }, as });
+
+describe('backdrop uploads', () => {
+  it('stores an accepted photo, without its metadata, in the fake S3 bucket', async () => {
+    const w = await world();
+    const r = await upload(w, jpegWithMetadata(), 'image/jpeg');
+    expect(r.status).toBe(201);
+    expect(r.body.upload).toMatchObject({
+      kind: 'backdrop',
+      contentType: 'image/jpeg',
+      enclosureId: w.enclosure.id,
+    });
+    const row = (await Upload.findByPk(r.body.upload.id))!;
+    expect(row.storageKey).toMatch(new RegExp(`^org-\\d+/enclosure-${w.enclosure.id}/backdrop/.+\\.jpg$`));
+    const stored = Buffer.from((await getObject(row.storageKey))!);
+    expect(stored.length).toBe(row.sizeBytes);
+    expect(stored.toString('latin1')).not.toContain('Exif');
+    expect(stored.toString('latin1')).not.toContain('GPS');
+  });
+
+  it('detects the type from the content: a PNG sent as JPEG is stored as PNG', async () => {
+    const w = await world();
+    const r = await upload(w, pngWithMetadata().bytes, 'image/jpeg', w.keeper, 'photo.jpg');
+    expect(r.status).toBe(201);
+    expect(r.body.upload.contentType).toBe('image/png');
+  });
+
+  it('refuses a file that claims to be a JPEG but is not, and stores nothing', async () => {
+    const w = await world();
+    const fake = new TextEncoder().encode('<html><script>alert(1)</script></html>');
+    const r = await upload(w, fake, 'image/jpeg');
+    expect(r.status).toBe(415);
+    expect(r.body.error.message).toMatch(/says it is image\/jpeg, but does not start like any of them/);
+    const broken = await upload(w, jpegWithMetadata().subarray(0, 60), 'image/jpeg');
+    expect(broken.status).toBe(415);
+    expect(await Upload.count()).toBe(0);
+  });
+
+  it('answers 413 beyond 10 MB', async () => {
+    const w = await world();
+    const big = new Uint8Array(10 * 1024 * 1024 + 1);
+    big.set(jpegWithMetadata());
+    const r = await upload(w, big, 'image/jpeg');
+    expect(r.status).toBe(413);
+    expect(await Upload.count()).toBe(0);
+  });
+
+  it('serves the photo only to people who may see the enclosure', async () => {
+    const w = await world();
+    const r = await upload(w, jpegWithMetadata(), 'image/jpeg');
+    const id = r.body.upload.id;
+    for (const as of [w.keeper, w.staff]) {
+      const got = await getFile(w, id, as);
+      expect(got.status).toBe(200);
+      expect(got.res.headers.get('content-type')).toBe('image/jpeg');
+      expect(got.res.headers.get('x-content-type-options')).toBe('nosniff');
+    }
+    expect((await getFile(w, id, w.otherKeeper)).status).toBe(404);
+    expect((await getFile(w, id, w.outsider)).status).toBe(404);
+    expect((await getFile(w, id, null)).status).toBe(401);
+    // Another keeper cannot add a photo to this enclosure either.
+    expect((await upload(w, jpegWithMetadata(), 'image/jpeg', w.otherKeeper)).status).toBe(404);
+  });
+
+  it('deletes the photo and its stored object', async () => {
+    const w = await world();
+    const r = await upload(w, jpegWithMetadata(), 'image/jpeg');
+    const id = r.body.upload.id;
+    const key = (await Upload.findByPk(id))!.storageKey;
+    const denied = await call(uploadRoute.DELETE, {
+      method: 'DELETE',
+      path: `/api/uploads/${id}`,
+      params: { id },
+      as: w.otherKeeper,
+    });
+    expect(denied.status).toBe(404);
+    const ok = await call(uploadRoute.DELETE, {
+      method: 'DELETE',
+      path: `/api/uploads/${id}`,
+      params: { id },
+      as: w.keeper,
+    });
+    expect(ok.status).toBe(200);
+    expect(await getObject(key)).toBeNull();
+    expect(await Upload.count()).toBe(0);
+  });
+});
