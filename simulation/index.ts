@@ -23,3 +23,7 @@ export {
   type ZoneRange,
 } from './assess/zones';
 export type { Assessment, Finding, FindingStatus, FindingWhere, Segment } from './assess/types';
+export { assess, monthsUntilUnmet } from './assess/assess';
+export { reachableSurfaces, type SurfaceSample } from './assess/surfaces';
+export * as ASSESSMENT_THRESHOLDS from './assess/thresholds';
+export { speciesSheetSchema } from './model/species';

@@ -29,6 +29,16 @@ function lampKey(l: LampGeom, nx: number, ny: number, cell: number): string {
   return JSON.stringify([nx, ny, cell, rest]);
 }
 
+export interface LampSamples {
+  scene: Scene;
+  /** Per lamp (scene order), UVB of the new lamp at each point. */
+  uv: Float64Array[];
+  /** Absorbed-flux input: total radiant irradiance at each point, W/m². */
+  ir: Float64Array;
+  /** Local air temperature at each point, °C. */
+  air: Float64Array;
+}
+
 export interface SolverStats {
   /** Lamps computed from scratch, partly, or taken from the cache in the last call. */
   full: number;
@@ -197,6 +207,29 @@ export class FieldSolver {
         this.stats.cellsEvaluated += Math.max(0, i1 - i0 + 1);
       }
     }
+  }
+
+  /**
+   * Per-lamp UVB (new lamp, before ageing) and total radiant flux at exact points, with the local air
+   * temperature: everything needed to recombine the fields for any age without recomputing geometry.
+   */
+  probeByLamp(design: Design, points: { x: number; y: number }[]): LampSamples {
+    const scene = compileScene(design);
+    this.ensure(scene.occluders.length);
+    const n = points.length;
+    const uv = scene.lamps.map(() => new Float64Array(n));
+    const ir = new Float64Array(n);
+    const air = new Float64Array(n);
+    points.forEach(({ x, y }, p) => {
+      scene.lamps.forEach((lamp, k) => {
+        if (!prepareRow(lamp, scene.occluders, y, this.row, this.scratch)) return;
+        evalCell(lamp, this.row, x, this.scratch);
+        uv[k]![p] = this.scratch.uv;
+        ir[p] = ir[p]! + this.scratch.ir;
+      });
+      air[p] = airTempC(y, scene.height, scene.roomC, scene.airRiseK);
+    });
+    return { scene, uv, ir, air };
   }
 
   /** Values at exact points (no interpolation). */

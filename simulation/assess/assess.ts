@@ -1,0 +1,84 @@
+/**
+ * The species check: reachable surfaces are sampled (surfaces.ts), the fields are evaluated exactly at
+ * the samples, and each finding compares the numbers with the species sheet. Every message is an
+ * estimate to verify with a meter and thermometer.
+ */
+import type { Design } from '../model/schema';
+import type { SpeciesSheet } from '../model/species';
+import { lampUvbFactor } from '../model/resolve';
+import { FieldSolver, type LampSamples } from '../fields/solver';
+import { HEAT_DEFAULTS, surfaceTempC } from '../fields/heat';
+import type { FieldGrid, SimOptions } from '../fields/types';
+import type { Assessment, Finding, FindingStatus } from './types';
+import { reachableSurfaces, type SurfaceSample } from './surfaces';
+import { baskingStatus, maxReachableUvi, uvFindings } from './uvFindings';
+import { heatFindings } from './heatFindings';
+import { safetyFindings } from './safetyFindings';
+
+const RANK: Record<FindingStatus, number> = { pass: 0, attention: 1, fail: 2 };
+
+export function worst(statuses: FindingStatus[]): FindingStatus {
+  return statuses.reduce<FindingStatus>((w, s) => (RANK[s] > RANK[w] ? s : w), 'pass');
+}
+
+interface Sampled {
+  samples: SurfaceSample[];
+  lamps: LampSamples;
+}
+
+function sample(design: Design): Sampled {
+  const samples = reachableSurfaces(design);
+  return { samples, lamps: new FieldSolver().probeByLamp(design, samples) };
+}
+
+function combineUv(s: Sampled, addMonths: number): { uvb: Float64Array; uvi: Float64Array } {
+  const n = s.samples.length;
+  const uvb = new Float64Array(n);
+  const uvi = new Float64Array(n);
+  s.lamps.scene.lamps.forEach((lamp, k) => {
+    const f = lampUvbFactor(lamp.lamp, addMonths);
+    const r = lamp.lamp.uviPerUvb;
+    const u = s.lamps.uv[k]!;
+    for (let p = 0; p < n; p++) {
+      uvb[p] = uvb[p]! + u[p]! * f;
+      uvi[p] = uvi[p]! + u[p]! * f * r;
+    }
+  });
+  return { uvb, uvi };
+}
+
+/**
+ * Assess a design for a species. `opts.grid` is accepted so callers can pass fields they already have,
+ * but surface values are always evaluated exactly at the surface samples.
+ */
+export function assess(
+  design: Design,
+  species: SpeciesSheet,
+  opts: SimOptions & { grid?: FieldGrid } = {},
+): Assessment {
+  const s = sample(design);
+  const { uvb, uvi } = combineUv(s, opts.addMonths ?? 0);
+  const hc = opts.convection ?? HEAT_DEFAULTS.convection;
+  const tempC = Array.from(s.lamps.ir, (q, p) =>
+    surfaceTempC(HEAT_DEFAULTS.absorptance * q, s.lamps.air[p]!, HEAT_DEFAULTS.emissivity, hc),
+  );
+  const findings: Finding[] = [
+    ...uvFindings(s.samples, uvi, uvb, species),
+    ...heatFindings(s.samples, tempC, species, s.lamps.scene.roomC),
+    ...safetyFindings(design, s.samples),
+  ];
+  return { findings, overall: worst(findings.map((f) => f.status)) };
+}
+
+/**
+ * First whole month (0..maxMonths, counted from the lamps' present ages) at which the basking UV check is
+ * no longer a pass; null if it still passes at maxMonths.
+ */
+export function monthsUntilUnmet(design: Design, species: SpeciesSheet, maxMonths = 24): number | null {
+  const s = sample(design);
+  for (let m = 0; m <= maxMonths; m++) {
+    const { uvi } = combineUv(s, m);
+    if (baskingStatus(maxReachableUvi(uvi), species.uvZone) !== 'pass') return m;
+  }
+  return null;
+}
