@@ -1,7 +1,7 @@
 // Every studio command in one place: the toolbar, the palette, the menus, the help panel and the
 // keyboard all read this list, so a command has exactly one label, one shortcut set and one action.
 import * as A from '../state/actions';
-import type { Tool } from '../state/session';
+import { isPlaceTool, type Tool } from '../state/session';
 import type { StudioStore } from '../state/store';
 import { canonicalShortcut, normaliseKey, type KeyLike } from './shortcuts';
 
@@ -27,7 +27,8 @@ export interface Command {
   allowInInputs?: boolean;
 }
 
-const hasSelection = ({ store }: CommandContext) => store.session.selection.length > 0;
+const editable = ({ store }: CommandContext) => !store.readOnly;
+const hasSelection = (ctx: CommandContext) => editable(ctx) && ctx.store.session.selection.length > 0;
 
 function tool(id: Tool, label: string, key: string): Command {
   return {
@@ -37,6 +38,8 @@ function tool(id: Tool, label: string, key: string): Command {
     shortcuts: [key],
     run: ({ store }) => A.setTool(store, id),
     checked: ({ store }) => store.session.tool === id,
+    // Tools that add objects are not offered in a view-only studio.
+    enabled: isPlaceTool(id) ? editable : undefined,
   };
 }
 
@@ -88,7 +91,7 @@ export const COMMANDS: readonly Command[] = [
     group: 'Edit',
     shortcuts: ['Mod+D'],
     run: ({ store }) => A.duplicateSelection(store),
-    enabled: ({ store }) => A.selectedObjects(store).length > 0,
+    enabled: ({ store }) => !store.readOnly && A.selectedObjects(store).length > 0,
   },
   {
     id: 'edit.delete',
@@ -136,7 +139,7 @@ export const COMMANDS: readonly Command[] = [
         A.placeAtCentre(store, t);
       }
     },
-    enabled: ({ store }) => !['select', 'pan', 'probe', 'ruler'].includes(store.session.tool),
+    enabled: ({ store }) => !store.readOnly && isPlaceTool(store.session.tool),
   },
   {
     id: 'file.save',

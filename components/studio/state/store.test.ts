@@ -53,4 +53,15 @@ describe('StudioStore', () => {
     s.load(exampleDesign());
     expect(s.canUndo()).toBe(false);
   });
+
+  it('ignores document edits when read-only, but not session changes', () => {
+    const s = new StudioStore(exampleDesign(), {}, { readOnly: true });
+    const before = s.design;
+    s.beginGesture();
+    s.edit((d) => moveObjects(d, ['b1'], 1, 0));
+    s.endGesture();
+    expect(s.design).toBe(before);
+    select(s, ['b1']);
+    expect(s.session.selection).toEqual(['b1']);
+  });
 });

@@ -13,8 +13,12 @@ export class StudioStore {
   private state: StudioState;
   private readonly listeners = new Set<() => void>();
 
-  constructor(design: Design, session: Partial<Session> = {}) {
+  /** View-only studio (someone who may read but not change the design): document edits are ignored. */
+  readonly readOnly: boolean;
+
+  constructor(design: Design, session: Partial<Session> = {}, options: { readOnly?: boolean } = {}) {
     this.state = { history: H.createHistory(design), session: { ...initialSession(), ...session } };
+    this.readOnly = options.readOnly ?? false;
   }
 
   getState = (): StudioState => this.state;
@@ -47,11 +51,13 @@ export class StudioStore {
 
   /** Applies a document change: one undo step, or part of the running gesture. */
   edit(fn: (d: Design) => Design) {
+    if (this.readOnly) return;
     const history = H.commit(this.state.history, fn(this.state.history.present));
     this.applyHistory(history);
   }
 
   beginGesture() {
+    if (this.readOnly) return;
     this.applyHistory(H.beginGesture(this.state.history));
   }
 

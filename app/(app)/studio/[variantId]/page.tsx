@@ -1,0 +1,36 @@
+import type { Metadata } from 'next';
+import { notFound } from 'next/navigation';
+import { StudioLoader } from '@/components/studio/StudioLoader';
+import { requireUser } from '@/lib/session';
+import { getVariantForUser } from '@/lib/variants/variants';
+import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
+import { Enclosure } from '@/models';
+import { getSequelize } from '@/lib/db';
+
+export const metadata: Metadata = { title: 'Studio' };
+
+/** The signed-in studio for one stored variant: loaded and access-checked here, edited on the client. */
+export default async function VariantStudioPage({ params }: { params: Promise<{ variantId: string }> }) {
+  const { variantId } = await params;
+  const user = await requireUser(`/studio/${encodeURIComponent(variantId)}`);
+  const id = /^\d+$/.test(variantId) ? Number(variantId) : NaN;
+  const variant = await getVariantForUser(user, id);
+  // Someone else's variant and a missing one look the same.
+  if (!variant) notFound();
+  const options = await speciesOptions(variant.enclosure.organisationId);
+  getSequelize();
+  const enclosure = await Enclosure.findByPk(variant.enclosure.id, { attributes: ['speciesName'] });
+  const attached = attachedSpecies(options, enclosure?.speciesName);
+  return (
+    <StudioLoader
+      source={{ kind: 'variant', variantId: String(variant.id) }}
+      title={`${variant.enclosure.name} · ${variant.designName} · ${variant.name}`}
+      backHref={`/enclosures/${variant.enclosure.id}`}
+      backLabel="Enclosure"
+      initial={{ design: variant.design, version: variant.version }}
+      species={options.map((o) => ({ id: String(o.id), ...o.sheet }))}
+      initialSpeciesId={attached ? String(attached.id) : null}
+      readOnly={!variant.canEdit}
+    />
+  );
+}

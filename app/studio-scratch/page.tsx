@@ -1,0 +1,28 @@
+import type { Metadata } from 'next';
+import { StudioLoader } from '@/components/studio/StudioLoader';
+import { STARTING_SHEETS } from '@/lib/species/starting-sheets';
+import { toEngineSheet } from '@/lib/species/to-engine';
+
+export const metadata: Metadata = {
+  title: 'Try the studio',
+  description:
+    'Design the light and heat of an enclosure in your browser — no account needed; kept on this device.',
+};
+
+/**
+ * "Try the studio": the full studio without an account. The design lives in this browser only
+ * (local storage) and starts from the example set-up; the species check uses the starting sheets
+ * every organisation begins with.
+ */
+export default function ScratchStudioPage() {
+  const species = STARTING_SHEETS.map((s) => ({ id: s.seedKey, ...toEngineSheet(s) }));
+  return (
+    <StudioLoader
+      source={{ kind: 'scratch' }}
+      title="Try the studio — saved on this device only"
+      backHref="/"
+      backLabel="Home"
+      species={species}
+    />
+  );
+}

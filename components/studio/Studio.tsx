@@ -1,0 +1,206 @@
+'use client';
+// The design studio: toolbar, palette, canvas, side panels and status bar around one store.
+// Client-only (Konva); load it through StudioLoader, which imports it with ssr: false.
+import dynamic from 'next/dynamic';
+import { useEffect, useId, useMemo, useState } from 'react';
+import type { CommandContext } from './commands/registry';
+import type { HighlightShape } from './canvas/Overlay';
+import type { PointerInfo } from './canvas/StudioCanvas';
+import { useBands } from './fields/useBands';
+import { useSimulation } from './fields/useSimulation';
+import { StudioContext, useStudio } from './hooks/useStudio';
+import { useShortcuts } from './hooks/useShortcuts';
+import { ConflictBanner, RestoreBanner } from './panels/Banners';
+import { HelpDialog } from './panels/HelpDialog';
+import { ObjectSummary } from './panels/ObjectSummary';
+import { Palette } from './panels/Palette';
+import { SidePanel } from './panels/SidePanel';
+import { StatusBar } from './panels/StatusBar';
+import { Toolbar } from './panels/Toolbar';
+import type { KeyValueStorage, Loaded, StudioPersistence } from './persistence/types';
+import { useAutosave } from './persistence/useAutosave';
+import { createAtom } from './state/atom';
+import { pickPrefs, type StoredPrefs } from './state/session';
+import { StudioStore } from './state/store';
+import type { StudioSpecies } from './state/types';
+
+const StudioCanvas = dynamic(() => import('./canvas/StudioCanvas'), {
+  ssr: false,
+  loading: () => <div className="h-full w-full animate-pulse bg-basalt-100" />,
+});
+
+const PREFS_KEY = 'baskwell.studio.prefs';
+
+function readPrefs(storage: KeyValueStorage): Partial<StoredPrefs> {
+  try {
+    const raw = storage.getItem(PREFS_KEY);
+    const p = raw ? (JSON.parse(raw) as Partial<StoredPrefs>) : {};
+    const out: Partial<StoredPrefs> = {};
+    if (p.lengthUnit === 'cm' || p.lengthUnit === 'in') out.lengthUnit = p.lengthUnit;
+    if (p.tempUnit === 'C' || p.tempUnit === 'F') out.tempUnit = p.tempUnit;
+    if (p.field === 'uvb' || p.field === 'uvi' || p.field === 'tempC') out.field = p.field;
+    if (typeof p.fieldOpacity === 'number' && p.fieldOpacity >= 0.1 && p.fieldOpacity <= 1)
+      out.fieldOpacity = p.fieldOpacity;
+    for (const k of ['fieldsVisible', 'snapGrid', 'snapSurfaces'] as const)
+      if (typeof p[k] === 'boolean') out[k] = p[k];
+    return out;
+  } catch {
+    return {};
+  }
+}
+
+export interface StudioProps {
+  persistence: StudioPersistence;
+  species: StudioSpecies[];
+  title: string;
+  backHref?: string;
+  backLabel?: string;
+  /** Design and version loaded on the server; without it the studio loads through `persistence`. */
+  initial?: Loaded;
+  initialSpeciesId?: string | null;
+  /** View only: the design can be inspected, probed and checked but not changed. */
+  readOnly?: boolean;
+  storage?: KeyValueStorage;
+}
+
+export default function Studio(props: StudioProps) {
+  const [loaded, setLoaded] = useState<Loaded | null>(props.initial ?? null);
+  const [error, setError] = useState<string | null>(null);
+  const [attempt, setAttempt] = useState(0);
+  const { persistence, initial } = props;
+  useEffect(() => {
+    if (initial) return;
+    let live = true;
+    persistence.load().then(
+      (l) => live && setLoaded(l),
+      (e: unknown) => live && setError(e instanceof Error ? e.message : 'The design could not be loaded.'),
+    );
+    return () => {
+      live = false;
+    };
+  }, [persistence, initial, attempt]);
+  if (loaded) return <StudioEditor {...props} loaded={loaded} />;
+  return (
+    <div className="flex h-full items-center justify-center bg-basalt-50" role="status">
+      {error ? (
+        <div className="max-w-md rounded-lg border border-ember-200 bg-white p-5 text-sm">
+          <p className="font-semibold text-ember-800">The design could not be loaded.</p>
+          <p className="mt-1 text-basalt-700">{error}</p>
+          <button
+            type="button"
+            className="mt-3 rounded-md bg-basalt-800 px-3 py-1.5 text-white focus-visible:outline focus-visible:outline-2 focus-visible:outline-sky-600"
+            onClick={() => {
+              setError(null);
+              setAttempt((n) => n + 1);
+            }}
+          >
+            Try again
+          </button>
+        </div>
+      ) : (
+        <p className="text-basalt-600">Loading the design…</p>
+      )}
+    </div>
+  );
+}
+
+function StudioEditor({
+  persistence,
+  species,
+  title,
+  backHref,
+  backLabel,
+  loaded,
+  initialSpeciesId,
+  readOnly = false,
+  storage: storageProp,
+}: StudioProps & { loaded: Loaded }) {
+  const storage = useMemo(() => storageProp ?? window.localStorage, [storageProp]);
+  const [store] = useState(
+    () =>
+      new StudioStore(
+        loaded.design,
+        {
+          ...readPrefs(storage),
+          speciesId: initialSpeciesId ?? (species.length === 1 ? species[0]!.id : null),
+        },
+        { readOnly },
+      ),
+  );
+  const pointer = useMemo(() => createAtom<PointerInfo | null>(null), []);
+  const save = useAutosave(store, persistence, loaded, storage);
+  const ctx = useMemo<CommandContext>(() => ({ store, saveNow: save.saveNow }), [store, save.saveNow]);
+  useShortcuts(ctx);
+
+  const session = useStudio(store, (s) => s.session);
+  useEffect(() => {
+    try {
+      storage.setItem(PREFS_KEY, JSON.stringify(pickPrefs(session)));
+    } catch {
+      // Preferences are a convenience; ignore a full or disabled storage.
+    }
+  }, [session, storage]);
+
+  const sim = useSimulation(store, species);
+  const { bands, legend } = useBands(sim.grid, session.field, session.tempUnit, session.fieldsVisible);
+  const highlight = useMemo<HighlightShape | null>(() => {
+    const f = sim.assessment?.findings.find((x) => x.id === session.highlight);
+    if (!f?.where) return null;
+    return f.where.kind === 'segments'
+      ? { segments: f.where.segments, objectIds: [] }
+      : { segments: [], objectIds: f.where.objectIds };
+  }, [sim.assessment, session.highlight]);
+  const summaryId = useId();
+
+  return (
+    <StudioContext.Provider value={ctx}>
+      <div className="flex h-full min-h-0 flex-col bg-basalt-50 text-basalt-900" data-testid="studio">
+        <Toolbar title={title} backHref={backHref} backLabel={backLabel} />
+        {readOnly && (
+          <p
+            role="note"
+            className="border-b border-sky-200 bg-sky-50 px-4 py-2 text-sm text-sky-900"
+            data-testid="view-only"
+          >
+            View only: you can look, probe and check this design, but not change it.
+          </p>
+        )}
+        {save.offer && !readOnly && (
+          <RestoreBanner savedAt={save.offer.savedAt} onRestore={save.restore} onDiscard={save.discard} />
+        )}
+        {save.state.kind === 'conflict' && (
+          <ConflictBanner onKeepMine={save.keepMine} onTakeTheirs={save.takeTheirs} />
+        )}
+        <div className="flex min-h-0 flex-1">
+          <Palette />
+          <main className="relative min-w-0 flex-1" aria-label="Canvas">
+            <StudioCanvas
+              store={store}
+              pointer={pointer}
+              grid={sim.grid}
+              bands={bands}
+              probeReadings={sim.probeReadings}
+              highlight={highlight}
+              summaryId={summaryId}
+            />
+            <ObjectSummary id={summaryId} />
+            {session.fieldsVisible && legend.length > 0 && (
+              <p className="pointer-events-none absolute right-3 bottom-3 rounded bg-white/85 px-2 py-1 text-caption text-basalt-700 shadow-sm">
+                Shown:{' '}
+                {session.field === 'uvb'
+                  ? 'UVB'
+                  : session.field === 'uvi'
+                    ? 'UV Index'
+                    : 'surface temperature'}{' '}
+                — estimates
+              </p>
+            )}
+          </main>
+          <SidePanel sim={sim} legend={legend} species={species} />
+        </div>
+        <StatusBar save={save.state} onSaveNow={save.saveNow} pointer={pointer} sim={sim} />
+        <HelpDialog />
+      </div>
+    </StudioContext.Provider>
+  );
+}

@@ -1,0 +1,61 @@
+'use client';
+// Entry point for pages: builds the persistence from plain props (functions cannot cross from a
+// server component) and loads the Konva studio on the client only.
+import dynamic from 'next/dynamic';
+import { useMemo } from 'react';
+import { exampleDesign } from './examples/exampleDesign';
+import { httpPersistence } from './persistence/http';
+import { localPersistence } from './persistence/local';
+import type { Loaded } from './persistence/types';
+import type { StudioSpecies } from './state/types';
+
+const Studio = dynamic(() => import('./Studio'), {
+  ssr: false,
+  loading: () => (
+    <div className="flex h-full items-center justify-center bg-basalt-50 text-basalt-600" role="status">
+      Opening the studio…
+    </div>
+  ),
+});
+
+export type StudioSource = { kind: 'variant'; variantId: string } | { kind: 'scratch' };
+
+export function StudioLoader({
+  source,
+  species,
+  title,
+  backHref,
+  backLabel,
+  initial,
+  initialSpeciesId,
+  readOnly,
+}: {
+  source: StudioSource;
+  species: StudioSpecies[];
+  title: string;
+  backHref?: string;
+  backLabel?: string;
+  initial?: Loaded;
+  initialSpeciesId?: string | null;
+  readOnly?: boolean;
+}) {
+  const key = source.kind === 'variant' ? source.variantId : 'scratch';
+  const persistence = useMemo(
+    () => (source.kind === 'variant' ? httpPersistence(key) : localPersistence('scratch', exampleDesign)),
+    [source.kind, key],
+  );
+  return (
+    <div className="fixed inset-0 z-40 flex flex-col bg-basalt-50">
+      <Studio
+        persistence={persistence}
+        species={species}
+        title={title}
+        backHref={backHref}
+        backLabel={backLabel}
+        initial={initial}
+        initialSpeciesId={initialSpeciesId}
+        readOnly={readOnly}
+      />
+    </div>
+  );
+}

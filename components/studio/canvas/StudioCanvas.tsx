@@ -1,0 +1,288 @@
+'use client';
+// The Konva stage: layers for the backdrop and fields, the objects, and the overlay. Pointer input
+// is taken from the wrapping element (pointer events, wheel, pinch, drop from the palette) and
+// handed to the framework-free CanvasInteraction.
+import {
+  useEffect,
+  useMemo,
+  useRef,
+  useState,
+  type DragEvent,
+  type PointerEvent as ReactPointerEvent,
+} from 'react';
+import { Layer, Stage } from 'react-konva';
+import { stageToDesign, zoomAt, type Point } from '../geometry/camera';
+import * as A from '../state/actions';
+import { isPlaceTool, type PlaceTool } from '../state/session';
+import type { StudioStore } from '../state/store';
+import type { Atom } from '../state/atom';
+import { useAtom, useStudio } from '../hooks/useStudio';
+import { sampleAll, type Reading } from '../fields/sample';
+import type { FieldGrid } from '@/simulation/fields/types';
+import { CanvasInteraction, type Modifiers } from './interaction';
+import { EnclosureBack, EnclosureWalls, GridShape } from './Backdrop';
+import { FieldBands, type ColouredBand } from './FieldBands';
+import { ObjectShape } from './ObjectShape';
+import {
+  GuidesLayer,
+  HighlightLayer,
+  MarqueeLayer,
+  PointerReadout,
+  ProbePins,
+  RulerLayer,
+  SelectionLayer,
+  type HighlightShape,
+} from './Overlay';
+import { Rulers } from './Rulers';
+
+export const PALETTE_DRAG_TYPE = 'application/x-baskwell-tool';
+
+export interface PointerInfo {
+  stage: Point;
+  design: Point;
+}
+
+export interface CanvasProps {
+  store: StudioStore;
+  pointer: Atom<PointerInfo | null>;
+  grid: FieldGrid | null;
+  bands: ColouredBand[];
+  probeReadings: Map<string, Reading>;
+  highlight: HighlightShape | null;
+  summaryId: string;
+}
+
+function mods(
+  e: { shiftKey: boolean; ctrlKey: boolean; metaKey: boolean; altKey: boolean },
+  pan = false,
+): Modifiers {
+  return { shift: e.shiftKey, mod: e.ctrlKey || e.metaKey, alt: e.altKey, pan };
+}
+
+function PointerProbe({
+  pointer,
+  grid,
+  store,
+}: {
+  pointer: Atom<PointerInfo | null>;
+  grid: FieldGrid | null;
+  store: StudioStore;
+}) {
+  const p = useAtom(pointer);
+  const tool = useStudio(store, (s) => s.session.tool);
+  const temp = useStudio(store, (s) => s.session.tempUnit);
+  const viewport = useStudio(store, (s) => s.session.viewport);
+  if (tool !== 'probe' || !p || !grid) return null;
+  const reading = sampleAll(grid, p.design.x, p.design.y);
+  return <PointerReadout at={p.stage} reading={reading} temp={temp} viewport={viewport} />;
+}
+
+export default function StudioCanvas({
+  store,
+  pointer,
+  grid,
+  bands,
+  probeReadings,
+  highlight,
+  summaryId,
+}: CanvasProps) {
+  const wrap = useRef<HTMLDivElement>(null);
+  const ui = useMemo(() => new CanvasInteraction(store), [store]);
+  const state = useStudio(store, (s) => s);
+  const { session } = state;
+  const design = state.history.present;
+  const cam = session.camera;
+  const [cursor, setCursor] = useState('default');
+  const spaceDown = useRef(false);
+  const touches = useRef(new Map<number, Point>());
+  const pinch = useRef<{ dist: number; mid: Point } | null>(null);
+
+  // Size the stage to its box; fit the design the first time the size is known.
+  useEffect(() => {
+    const el = wrap.current;
+    if (!el) return;
+    const ro = new ResizeObserver(() => {
+      const r = el.getBoundingClientRect();
+      store.setSession({
+        viewport: { width: Math.max(1, Math.floor(r.width)), height: Math.max(1, Math.floor(r.height)) },
+      });
+      if (!store.session.fitted) A.fitView(store);
+    });
+    ro.observe(el);
+    return () => ro.disconnect();
+  }, [store]);
+
+  // Wheel zoom needs a non-passive listener to keep the page from scrolling.
+  useEffect(() => {
+    const el = wrap.current;
+    if (!el) return;
+    const onWheel = (e: WheelEvent) => {
+      e.preventDefault();
+      const r = el.getBoundingClientRect();
+      const anchor = { x: e.clientX - r.left, y: e.clientY - r.top };
+      const unit = e.deltaMode === 1 ? 16 : 1;
+      // ctrlKey is set for trackpad pinch gestures, which send small deltas.
+      const factor = Math.exp(-e.deltaY * unit * (e.ctrlKey ? 0.01 : 0.0015));
+      A.zoomBy(store, factor, anchor);
+    };
+    el.addEventListener('wheel', onWheel, { passive: false });
+    return () => el.removeEventListener('wheel', onWheel);
+  }, [store]);
+
+  // Space held: temporary pan, as in most drawing programs.
+  useEffect(() => {
+    const down = (e: KeyboardEvent) => {
+      if (e.code === 'Space' && e.target === wrap.current) {
+        spaceDown.current = true;
+        e.preventDefault();
+      }
+    };
+    const up = (e: KeyboardEvent) => {
+      if (e.code === 'Space') spaceDown.current = false;
+    };
+    window.addEventListener('keydown', down);
+    window.addEventListener('keyup', up);
+    return () => {
+      window.removeEventListener('keydown', down);
+      window.removeEventListener('keyup', up);
+    };
+  }, []);
+
+  const local = (e: { clientX: number; clientY: number }): Point => {
+    const r = wrap.current!.getBoundingClientRect();
+    return { x: e.clientX - r.left, y: e.clientY - r.top };
+  };
+
+  const onPointerDown = (e: ReactPointerEvent<HTMLDivElement>) => {
+    if (e.button !== 0 && e.button !== 1) return;
+    wrap.current?.focus({ preventScroll: true });
+    wrap.current?.setPointerCapture(e.pointerId);
+    const p = local(e);
+    if (e.pointerType === 'touch') {
+      touches.current.set(e.pointerId, p);
+      if (touches.current.size === 2) {
+        ui.cancel();
+        const [a, b] = [...touches.current.values()] as [Point, Point];
+        pinch.current = {
+          dist: Math.hypot(a.x - b.x, a.y - b.y),
+          mid: { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 },
+        };
+        return;
+      }
+    }
+    ui.down(p, mods(e, e.button === 1 || spaceDown.current));
+    setCursor(ui.cursor(p, mods(e, spaceDown.current)));
+  };
+
+  const onPointerMove = (e: ReactPointerEvent<HTMLDivElement>) => {
+    const p = local(e);
+    if (e.pointerType === 'touch' && touches.current.has(e.pointerId)) {
+      touches.current.set(e.pointerId, p);
+      if (pinch.current && touches.current.size === 2) {
+        const [a, b] = [...touches.current.values()] as [Point, Point];
+        const dist = Math.hypot(a.x - b.x, a.y - b.y);
+        const mid = { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 };
+        const prev = pinch.current;
+        let camera = zoomAt(store.session.camera, prev.mid, dist / Math.max(prev.dist, 1));
+        camera = {
+          ...camera,
+          originX: camera.originX + mid.x - prev.mid.x,
+          originY: camera.originY + mid.y - prev.mid.y,
+        };
+        store.setSession({ camera });
+        pinch.current = { dist, mid };
+        return;
+      }
+    }
+    pointer.set({ stage: p, design: stageToDesign(store.session.camera, p) });
+    ui.move(p, mods(e, spaceDown.current));
+    if (!ui.active) setCursor(ui.cursor(p, mods(e, spaceDown.current)));
+  };
+
+  const onPointerUp = (e: ReactPointerEvent<HTMLDivElement>) => {
+    touches.current.delete(e.pointerId);
+    if (pinch.current) {
+      if (touches.current.size < 2) pinch.current = null;
+      return;
+    }
+    const p = local(e);
+    ui.up(p, mods(e, spaceDown.current));
+    setCursor(ui.cursor(p, mods(e, spaceDown.current)));
+  };
+
+  const onDragOver = (e: DragEvent<HTMLDivElement>) => {
+    if (e.dataTransfer.types.includes(PALETTE_DRAG_TYPE)) {
+      e.preventDefault();
+      e.dataTransfer.dropEffect = 'copy';
+    }
+  };
+
+  const onDrop = (e: DragEvent<HTMLDivElement>) => {
+    const type = e.dataTransfer.getData(PALETTE_DRAG_TYPE);
+    if (!isPlaceTool(type as PlaceTool)) return;
+    e.preventDefault();
+    A.placeObject(store, type as PlaceTool, stageToDesign(store.session.camera, local(e)));
+    wrap.current?.focus({ preventScroll: true });
+  };
+
+  const selected = design.objects.filter((o) => session.selection.includes(o.id));
+
+  return (
+    <div
+      ref={wrap}
+      data-testid="studio-canvas"
+      role="application"
+      aria-roledescription="design canvas"
+      aria-label="Enclosure side view. Use the tool shortcuts, arrow keys to nudge the selection, Enter to place with the current tool."
+      aria-describedby={summaryId}
+      tabIndex={0}
+      className="relative h-full w-full touch-none overflow-hidden bg-basalt-100 outline-none focus-visible:ring-2 focus-visible:ring-sky-600 focus-visible:ring-inset"
+      style={{ cursor }}
+      onPointerDown={onPointerDown}
+      onPointerMove={onPointerMove}
+      onPointerUp={onPointerUp}
+      onPointerCancel={(e) => {
+        touches.current.delete(e.pointerId);
+        pinch.current = null;
+        ui.cancel();
+      }}
+      onPointerLeave={() => {
+        if (!ui.active) pointer.set(null);
+      }}
+      onDragOver={onDragOver}
+      onDrop={onDrop}
+    >
+      <Stage width={session.viewport.width} height={session.viewport.height} listening={false}>
+        <Layer listening={false}>
+          <GridShape cam={cam} viewport={session.viewport} unit={session.lengthUnit} />
+          <EnclosureBack cam={cam} enclosure={design.enclosure} />
+          {session.fieldsVisible && bands.length > 0 && (
+            <FieldBands cam={cam} enclosure={design.enclosure} bands={bands} opacity={session.fieldOpacity} />
+          )}
+          <EnclosureWalls cam={cam} enclosure={design.enclosure} unit={session.lengthUnit} />
+        </Layer>
+        <Layer listening={false}>
+          {design.objects.map((o) => (
+            <ObjectShape key={o.id} o={o} cam={cam} />
+          ))}
+        </Layer>
+        <Layer listening={false}>
+          <HighlightLayer cam={cam} design={design} shape={highlight} />
+          <SelectionLayer cam={cam} objects={selected} showHandles={session.tool === 'select'} />
+          <ProbePins
+            cam={cam}
+            probes={design.probes ?? []}
+            readings={probeReadings}
+            selection={session.selection}
+            temp={session.tempUnit}
+          />
+          <GuidesLayer cam={cam} guides={session.guides} viewport={session.viewport} />
+          <MarqueeLayer cam={cam} rect={session.marquee} />
+          <RulerLayer cam={cam} ruler={session.ruler} unit={session.lengthUnit} />
+          <Rulers cam={cam} viewport={session.viewport} unit={session.lengthUnit} />
+          <PointerProbe pointer={pointer} grid={grid} store={store} />
+        </Layer>
+      </Stage>
+    </div>
+  );
+}

@@ -1,0 +1,141 @@
+'use client';
+// Runs the engine in a Web Worker and keeps the latest answer. Every change of the design, the
+// ageing preview or the species posts a request; the worker answers "superseded" for requests a
+// newer one replaced before they started, so only the latest is ever computed and shown.
+import { useEffect, useRef, useState } from 'react';
+import type { SimRequest, SimResponse } from './protocol';
+import type { StudioStore } from '../state/store';
+import type { Design, StudioSpecies } from '../state/types';
+import { cellSizeFor } from './cellSize';
+import type { Reading } from './sample';
+import { EMPTY_SIM, type SimView } from './simTypes';
+
+/** Round-trip samples for the browser benchmark (read by tests/browser/studio.browser.ts). */
+export interface StudioMetrics {
+  roundTrips: number[];
+}
+
+declare global {
+  interface Window {
+    __baskwellStudio?: StudioMetrics;
+  }
+}
+
+interface Sent {
+  at: number;
+  probeIds: string[];
+}
+
+function speciesSheet(s: StudioSpecies | undefined): SimRequest['species'] {
+  if (!s) return undefined;
+  // The engine's sheet is strict: send only its own fields.
+  const { id: _id, ...sheet } = s;
+  return sheet;
+}
+
+export function useSimulation(store: StudioStore, species: StudioSpecies[]): SimView {
+  const [view, setView] = useState<SimView>(EMPTY_SIM);
+  const speciesRef = useRef(species);
+  useEffect(() => {
+    speciesRef.current = species;
+  }, [species]);
+
+  useEffect(() => {
+    let worker: Worker;
+    try {
+      worker = new Worker(new URL('./devWorker.ts', import.meta.url), { type: 'module' });
+    } catch (e) {
+      setView((v) => ({ ...v, status: 'error', error: `The field engine could not start (${String(e)}).` }));
+      return;
+    }
+    const metrics: StudioMetrics = (window.__baskwellStudio ??= { roundTrips: [] });
+    let seq = 0;
+    let applied = 0;
+    const sent = new Map<number, Sent>();
+    let last: { design: Design; addMonths: number; speciesId: string | null; dragging: boolean } | null =
+      null;
+
+    const post = () => {
+      const { history, session } = store.getState();
+      const design = history.present;
+      const dragging = history.gestureBase !== null;
+      if (
+        last &&
+        last.design === design &&
+        last.addMonths === session.addMonths &&
+        last.speciesId === session.speciesId &&
+        last.dragging === dragging
+      ) {
+        return;
+      }
+      last = { design, addMonths: session.addMonths, speciesId: session.speciesId, dragging };
+      const id = ++seq;
+      const probes = design.probes ?? [];
+      const req: SimRequest = {
+        id,
+        kind: 'simulate',
+        design,
+        cellCm: cellSizeFor(design.enclosure.width, design.enclosure.height, dragging),
+        addMonths: session.addMonths,
+        species: speciesSheet(speciesRef.current.find((s) => s.id === session.speciesId)),
+        probes: probes.map((p) => ({ x: p.x, y: p.y })),
+      };
+      sent.set(id, { at: performance.now(), probeIds: probes.map((p) => p.id) });
+      worker.postMessage(req);
+      setView((v) => (v.status === 'computing' ? v : { ...v, status: 'computing' }));
+    };
+
+    worker.onmessage = (e: MessageEvent<SimResponse>) => {
+      const msg = e.data;
+      const info = sent.get(msg.id);
+      sent.delete(msg.id);
+      if (msg.kind === 'superseded' || msg.id < applied) return;
+      applied = msg.id;
+      const busy = msg.id < seq;
+      if (msg.kind === 'error') {
+        setView((v) => ({ ...v, status: 'error', error: msg.message }));
+        return;
+      }
+      const roundTripMs = info ? performance.now() - info.at : null;
+      if (roundTripMs !== null) {
+        metrics.roundTrips.push(roundTripMs);
+        if (metrics.roundTrips.length > 2000) metrics.roundTrips.splice(0, 1000);
+      }
+      const probeReadings = new Map<string, Reading>();
+      msg.probes?.forEach((r, i) => {
+        const pid = info?.probeIds[i];
+        if (pid) probeReadings.set(pid, { uvb: r.uvb, uvi: r.uvi, tempC: r.tempC });
+      });
+      setView({
+        grid: {
+          nx: msg.nx,
+          ny: msg.ny,
+          cellCm: msg.cellCm,
+          width: msg.width,
+          height: msg.height,
+          uvb: msg.uvb,
+          uvi: msg.uvi,
+          tempC: msg.tempC,
+        },
+        assessment: msg.assessment ?? null,
+        monthsUntilUnmet: msg.assessment ? msg.monthsUntilUnmet : undefined,
+        probeReadings,
+        roundTripMs,
+        status: busy ? 'computing' : 'ready',
+        error: null,
+      });
+    };
+    worker.onerror = (e) => {
+      setView((v) => ({ ...v, status: 'error', error: e.message || 'The field engine stopped.' }));
+    };
+
+    post();
+    const unsubscribe = store.subscribe(post);
+    return () => {
+      unsubscribe();
+      worker.terminate();
+    };
+  }, [store]);
+
+  return view;
+}

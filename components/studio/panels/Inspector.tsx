@@ -1,0 +1,79 @@
+'use client';
+// The inspector: the selected object's properties, a probe's, several objects' summary, or the
+// enclosure's when nothing is selected.
+import { useCommandContext, useStudio } from '../hooks/useStudio';
+import { TYPE_NAMES, updateObject } from '../state/document';
+import { isBox, isSegment, type DesignObject } from '../state/types';
+import { CommandButton } from './CommandButton';
+import { Section, TextField } from './FormFields';
+import { LampForm } from './LampForm';
+import { BoxForm, EnclosureForm, ProbeForm, SegmentForm } from './ShapeForms';
+
+function ObjectActions() {
+  return (
+    <div className="flex flex-wrap gap-1 px-3 py-2">
+      <CommandButton id="edit.duplicate" icon="duplicate" showLabel />
+      <CommandButton id="edit.delete" icon="delete" showLabel />
+      <CommandButton id="arrange.forward" icon="forward" showLabel />
+      <CommandButton id="arrange.backward" icon="backward" showLabel />
+    </div>
+  );
+}
+
+function ObjectInspector({ o }: { o: DesignObject }) {
+  const { store } = useCommandContext();
+  return (
+    <div data-testid="inspector-object" data-object-id={o.id}>
+      <Section title={`${TYPE_NAMES[o.type]} · ${o.id}`}>
+        <TextField
+          label="Name"
+          value={o.name}
+          placeholder={TYPE_NAMES[o.type]}
+          onCommit={(name) => store.edit((d) => updateObject(d, o.id, { name }))}
+        />
+      </Section>
+      {o.type === 'lamp' && <LampForm key={o.id} lamp={o} />}
+      {isSegment(o) && <SegmentForm key={o.id} o={o} />}
+      {isBox(o) && <BoxForm key={o.id} o={o} />}
+      <ObjectActions />
+    </div>
+  );
+}
+
+export function Inspector() {
+  const { store } = useCommandContext();
+  const selection = useStudio(store, (s) => s.session.selection);
+  const design = useStudio(store, (s) => s.history.present);
+  const objects = design.objects.filter((o) => selection.includes(o.id));
+  const probes = (design.probes ?? []).filter((p) => selection.includes(p.id));
+  if (selection.length === 0) return <EnclosureForm />;
+  if (objects.length === 1 && probes.length === 0) return <ObjectInspector o={objects[0]!} />;
+  if (probes.length === 1 && objects.length === 0) {
+    return (
+      <>
+        <ProbeForm key={probes[0]!.id} probe={probes[0]!} />
+        <div className="px-3 py-2">
+          <CommandButton id="edit.delete" icon="delete" showLabel />
+        </div>
+      </>
+    );
+  }
+  return (
+    <div data-testid="inspector-multi">
+      <Section title={`${selection.length} selected`}>
+        <ul className="text-sm text-basalt-700">
+          {objects.map((o) => (
+            <li key={o.id}>
+              {TYPE_NAMES[o.type]} {o.name ? `“${o.name}”` : o.id}
+            </li>
+          ))}
+          {probes.map((p) => (
+            <li key={p.id}>Probe {p.label ?? p.id}</li>
+          ))}
+        </ul>
+        <p className="text-caption text-basalt-500">Move them together by dragging or with the arrow keys.</p>
+      </Section>
+      <ObjectActions />
+    </div>
+  );
+}

@@ -1,0 +1,124 @@
+'use client';
+import { LAMP_TECHS } from '@/simulation/model/techs';
+import type { LampPresetId } from '@/simulation/model/presets';
+import {
+  applyForm,
+  applyPreset,
+  applyTech,
+  matchingPreset,
+  PRESET_OPTIONS,
+  TECH_OPTIONS,
+} from '../state/lampPresets';
+import type { LampObject } from '../state/types';
+import { Grid2, NumberField, Section, SelectField } from './FormFields';
+import { useObjectEdit } from './useObjectEdit';
+
+export function LampForm({ lamp }: { lamp: LampObject }) {
+  const { field, replace } = useObjectEdit(lamp);
+  const d = LAMP_TECHS[lamp.tech];
+  const preset = matchingPreset(lamp);
+  return (
+    <>
+      <Section title="Lamp type">
+        <SelectField<LampPresetId>
+          label="Preset (generic lamp class)"
+          testId="lamp-preset"
+          value={preset ?? ''}
+          options={[{ value: '', label: 'Custom values', disabled: true }, ...PRESET_OPTIONS]}
+          onChange={(id) => replace(applyPreset(lamp, id))}
+        />
+        <Grid2>
+          <SelectField
+            label="Technology"
+            testId="lamp-tech"
+            value={lamp.tech}
+            options={TECH_OPTIONS}
+            onChange={(t) => replace(applyTech(lamp, t))}
+          />
+          <SelectField
+            label="Shape"
+            testId="lamp-form"
+            value={lamp.form}
+            options={[
+              { value: 'tube', label: 'Tube' },
+              { value: 'bulb', label: 'Bulb' },
+            ]}
+            onChange={(f) => replace(applyForm(lamp, f))}
+          />
+        </Grid2>
+        <p className="text-caption text-basalt-500">
+          Presets are generic classes with typical figures. Override any value below with your lamp’s own,
+          ideally from a meter reading.
+        </p>
+      </Section>
+      <Section title="Position">
+        <Grid2>
+          <NumberField
+            label={lamp.form === 'tube' ? 'Centre x' : 'x'}
+            testId="field-x"
+            {...field('x', 'length')}
+          />
+          <NumberField label="Height y" testId="field-y" {...field('y', 'length')} />
+          {lamp.form === 'tube' && (
+            <NumberField label="Tube length" testId="field-length" {...field('length', 'length')} />
+          )}
+        </Grid2>
+      </Section>
+      <Section title="Output">
+        <Grid2>
+          <NumberField
+            label="UVB at 30 cm"
+            plainUnit="µW/cm²"
+            optional
+            fallback={d.uvbAt30}
+            testId="field-uvbAt30"
+            hint="New, bare, straight below"
+            {...field('uvbAt30', 'plain')}
+          />
+          <NumberField
+            label="UVI per µW/cm²"
+            optional
+            fallback={d.uviPerUvb}
+            testId="field-uviPerUvb"
+            hint="Depends on the spectrum"
+            {...field('uviPerUvb', 'plain')}
+          />
+          <NumberField
+            label="Reflector gain"
+            plainUnit="×"
+            optional
+            fallback={1}
+            testId="field-reflectorGain"
+            hint="1 = no reflector"
+            {...field('reflectorGain', 'plain')}
+          />
+          <NumberField
+            label="Beam angle"
+            plainUnit="°"
+            optional
+            fallback={d.beamDeg}
+            testId="field-beamDeg"
+            {...field('beamDeg', 'plain')}
+          />
+          <NumberField
+            label="Power"
+            plainUnit="W"
+            optional
+            fallback={d.watts}
+            testId="field-watts"
+            {...field('watts', 'plain')}
+          />
+          <NumberField
+            label="Age"
+            plainUnit="months"
+            optional
+            fallback={0}
+            testId="field-ageMonths"
+            hint="Time in use so far"
+            {...field('ageMonths', 'plain')}
+          />
+        </Grid2>
+      </Section>
+    </>
+  );
+}

@@ -1,0 +1,55 @@
+'use client';
+// A text version of the canvas for screen readers: every object with its place and size.
+import { formatLength, formatNumber } from '../geometry/units';
+import { segmentAngleDeg, segmentLength } from '../geometry/objects';
+import { useCommandContext, useStudio } from '../hooks/useStudio';
+import { TYPE_NAMES } from '../state/document';
+import { isBox, isSegment, type DesignObject } from '../state/types';
+import type { LengthUnit } from '../geometry/units';
+import { LAMP_TECHS } from '@/simulation/model/techs';
+
+export function describeObject(o: DesignObject, u: LengthUnit): string {
+  const name = `${TYPE_NAMES[o.type]}${o.name ? ` “${o.name}”` : ''}`;
+  const L = (v: number) => formatLength(v, u);
+  if (o.type === 'lamp') {
+    const size = o.form === 'tube' ? `, ${L(o.length ?? 0)} long` : '';
+    return `${name}: ${LAMP_TECHS[o.tech].label}${size}, at ${L(o.x)} from the left, ${L(o.y)} up`;
+  }
+  if (isSegment(o)) {
+    const extra = o.type === 'perch' ? `, ${L(o.thickness)} thick` : '';
+    return `${name}: from (${L(o.x1)}, ${L(o.y1)}) to (${L(o.x2)}, ${L(o.y2)}), ${L(segmentLength(o))} long at ${formatNumber(segmentAngleDeg(o), 0)}°${extra}`;
+  }
+  if (isBox(o))
+    return `${name}: ${L(o.width)} wide, ${L(o.height)} high, left edge at ${L(o.x)}, bottom at ${L(o.y)}`;
+  return name;
+}
+
+export function ObjectSummary({ id }: { id: string }) {
+  const { store } = useCommandContext();
+  const design = useStudio(store, (s) => s.history.present);
+  const selection = useStudio(store, (s) => s.session.selection);
+  const unit = useStudio(store, (s) => s.session.lengthUnit);
+  const e = design.enclosure;
+  return (
+    <div id={id} className="sr-only" data-testid="object-summary">
+      <p>
+        Enclosure {formatLength(e.width, unit)} wide, {formatLength(e.height, unit)} high,{' '}
+        {formatLength(e.depth, unit)} deep; {design.objects.length} objects
+        {selection.length ? `, ${selection.length} selected` : ''}.
+      </p>
+      <ul>
+        {design.objects.map((o) => (
+          <li key={o.id}>
+            {describeObject(o, unit)}
+            {selection.includes(o.id) ? ' (selected)' : ''}
+          </li>
+        ))}
+        {(design.probes ?? []).map((p, i) => (
+          <li key={p.id}>
+            Probe {p.label ?? i + 1} at {formatLength(p.x, unit)}, {formatLength(p.y, unit)} up
+          </li>
+        ))}
+      </ul>
+    </div>
+  );
+}

@@ -1,0 +1,96 @@
+'use client';
+// Tool palette: pick a tool (click or its key), or drag an object kind onto the canvas.
+import { command, isEnabled, runCommand } from '../commands/registry';
+import { PALETTE_DRAG_TYPE } from '../canvas/StudioCanvas';
+import { isPlaceTool, type Tool } from '../state/session';
+import { displayShortcut } from '../commands/shortcuts';
+import { useCommandContext, useStudio } from '../hooks/useStudio';
+import { focusRing } from './CommandButton';
+import { Icon, type IconName } from './icons';
+
+const GROUPS: { label: string; tools: { tool: Tool; icon: IconName; hint: string }[] }[] = [
+  {
+    label: 'Work',
+    tools: [
+      {
+        tool: 'select',
+        icon: 'select',
+        hint: 'Select, move and resize; drag on empty space to select several',
+      },
+      { tool: 'pan', icon: 'pan', hint: 'Drag to move the view (or hold Space)' },
+    ],
+  },
+  {
+    label: 'Objects',
+    tools: [
+      { tool: 'lamp', icon: 'lamp', hint: 'A lamp: UVB tube or bulb, or a heat lamp' },
+      { tool: 'screen', icon: 'screen', hint: 'A mesh screen (passes part of the UVB)' },
+      { tool: 'glass', icon: 'glass', hint: 'A glass or acrylic pane (blocks UVB)' },
+      { tool: 'perch', icon: 'perch', hint: 'A branch: drag from one end to the other' },
+      { tool: 'ledge', icon: 'ledge', hint: 'A solid platform or rock' },
+      { tool: 'hide', icon: 'hide', hint: 'A closed box that shades its inside' },
+      { tool: 'foliage', icon: 'foliage', hint: 'Planting that lets part of the light through' },
+    ],
+  },
+  {
+    label: 'Measure',
+    tools: [
+      { tool: 'probe', icon: 'probe', hint: 'Read UVB, UV Index and temperature; click to pin a probe' },
+      { tool: 'ruler', icon: 'ruler', hint: 'Drag to measure a distance' },
+    ],
+  },
+];
+
+export function Palette() {
+  const ctx = useCommandContext();
+  const tool = useStudio(ctx.store, (s) => s.session.tool);
+  return (
+    <nav
+      aria-label="Tools"
+      className="flex w-[8.5rem] shrink-0 flex-col gap-3 overflow-y-auto border-r border-basalt-200 bg-white p-2"
+    >
+      {GROUPS.map((g) => (
+        <div key={g.label} role="group" aria-label={g.label}>
+          <p className="px-1 pb-1 text-caption font-medium uppercase tracking-wide text-basalt-500">
+            {g.label}
+          </p>
+          <ul className="flex flex-col gap-0.5">
+            {g.tools.map((t) => {
+              const c = command(`tool.${t.tool}`);
+              const key = c.shortcuts[0] ? displayShortcut(c.shortcuts[0]) : '';
+              const active = tool === t.tool;
+              const enabled = isEnabled(c, ctx);
+              const draggable = enabled && isPlaceTool(t.tool);
+              return (
+                <li key={t.tool}>
+                  <button
+                    type="button"
+                    aria-pressed={active}
+                    title={`${t.hint}${draggable ? '. Drag onto the canvas, or pick and click there; Enter places it in the middle.' : ''}`}
+                    data-testid={`tool-${t.tool}`}
+                    draggable={draggable}
+                    disabled={!enabled}
+                    onDragStart={(e) => {
+                      e.dataTransfer.setData(PALETTE_DRAG_TYPE, t.tool);
+                      e.dataTransfer.effectAllowed = 'copy';
+                    }}
+                    onClick={() => runCommand(c, ctx)}
+                    className={`flex w-full items-center gap-2 rounded-md px-2 py-1.5 text-left text-sm ${
+                      active ? 'bg-moss-100 text-moss-900' : 'text-basalt-800 hover:bg-basalt-100'
+                    } disabled:cursor-not-allowed disabled:opacity-40 ${focusRing}`}
+                  >
+                    <Icon name={t.icon} className="h-5 w-5 shrink-0" />
+                    <span className="flex-1 truncate">{c.label.replace(' (mesh)', '')}</span>
+                    <kbd className="rounded border border-basalt-200 px-1 font-mono text-[0.7rem] text-basalt-500">
+                      {key}
+                    </kbd>
+                  </button>
+                </li>
+              );
+            })}
+          </ul>
+        </div>
+      ))}
+    </nav>
+  );
+}

@@ -1,0 +1,148 @@
+'use client';
+import {
+  DEFAULT_FOLIAGE_UVB_TRANSMISSION,
+  DEFAULT_GLASS_UVB_TRANSMISSION,
+  DEFAULT_SCREEN_UVB_TRANSMISSION,
+} from '@/simulation/model/materials';
+import { DEFAULT_ROOM_TEMP_C } from '@/simulation/model/resolve';
+import { segmentAngleDeg, segmentLength } from '../geometry/objects';
+import { formatLength, formatNumber } from '../geometry/units';
+import { useCommandContext, useStudio } from '../hooks/useStudio';
+import { setEnclosure, updateProbe } from '../state/document';
+import type { BoxObject, Enclosure, ProbePoint, SegmentObject } from '../state/types';
+import { Grid2, NumberField, Section, TextField } from './FormFields';
+import { useObjectEdit, useUnits } from './useObjectEdit';
+import { checkEnclosureEdit, type FieldKind } from './validate';
+
+export function SegmentForm({ o }: { o: SegmentObject }) {
+  const { field, units } = useObjectEdit(o);
+  const fallback =
+    o.type === 'screen'
+      ? DEFAULT_SCREEN_UVB_TRANSMISSION
+      : o.type === 'glass'
+        ? DEFAULT_GLASS_UVB_TRANSMISSION
+        : undefined;
+  return (
+    <>
+      <Section title="Ends">
+        <Grid2>
+          <NumberField label="First end x" testId="field-x1" {...field('x1', 'length')} />
+          <NumberField label="First end y" testId="field-y1" {...field('y1', 'length')} />
+          <NumberField label="Second end x" testId="field-x2" {...field('x2', 'length')} />
+          <NumberField label="Second end y" testId="field-y2" {...field('y2', 'length')} />
+        </Grid2>
+        <p className="text-caption text-basalt-500">
+          Length {formatLength(segmentLength(o), units.length)}, angle {formatNumber(segmentAngleDeg(o), 0)}°
+        </p>
+      </Section>
+      {o.type === 'perch' ? (
+        <Section title="Branch">
+          <NumberField label="Thickness" testId="field-thickness" {...field('thickness', 'length')} />
+        </Section>
+      ) : (
+        <Section title="Material">
+          <NumberField
+            label="UVB passed"
+            optional
+            fallback={fallback}
+            testId="field-uvbTransmission"
+            hint={
+              o.type === 'screen' ? 'About the open area of the mesh' : 'Ordinary glass and acrylic pass none'
+            }
+            {...field('uvbTransmission', 'percent')}
+          />
+        </Section>
+      )}
+    </>
+  );
+}
+
+export function BoxForm({ o }: { o: BoxObject }) {
+  const { field } = useObjectEdit(o);
+  return (
+    <>
+      <Section title="Place and size">
+        <Grid2>
+          <NumberField label="Left x" testId="field-x" {...field('x', 'length')} />
+          <NumberField label="Bottom y" testId="field-y" {...field('y', 'length')} />
+          <NumberField label="Width" testId="field-width" {...field('width', 'length')} />
+          <NumberField label="Height" testId="field-height" {...field('height', 'length')} />
+        </Grid2>
+      </Section>
+      {o.type === 'foliage' && (
+        <Section title="Planting">
+          <NumberField
+            label="Light passed"
+            optional
+            fallback={DEFAULT_FOLIAGE_UVB_TRANSMISSION}
+            testId="field-uvbTransmission"
+            {...field('uvbTransmission', 'percent')}
+          />
+        </Section>
+      )}
+    </>
+  );
+}
+
+export function ProbeForm({ probe }: { probe: ProbePoint }) {
+  const { store } = useCommandContext();
+  const units = useUnits();
+  const edit = (patch: Partial<ProbePoint>) => store.edit((d) => updateProbe(d, probe.id, patch));
+  const num = (key: 'x' | 'y') => ({
+    kind: 'length' as FieldKind,
+    units,
+    value: probe[key],
+    check: (v: number | undefined) =>
+      v === undefined || !Number.isFinite(v) || Math.abs(v) > 5000
+        ? { ok: false as const, message: 'Enter a position within 5000 cm.' }
+        : { ok: true as const, value: v },
+    onCommit: (v: number | undefined) => v !== undefined && edit({ [key]: v }),
+  });
+  return (
+    <Section title="Pinned probe">
+      <TextField
+        label="Label"
+        value={probe.label}
+        placeholder="e.g. basking spot"
+        onCommit={(label) => edit({ label })}
+      />
+      <Grid2>
+        <NumberField label="x" testId="field-x" {...num('x')} />
+        <NumberField label="y" testId="field-y" {...num('y')} />
+      </Grid2>
+      <p className="text-caption text-basalt-500">Pinned probes are saved with the design.</p>
+    </Section>
+  );
+}
+
+export function EnclosureForm() {
+  const { store } = useCommandContext();
+  const enclosure = useStudio(store, (s) => s.history.present.enclosure);
+  const units = useUnits();
+  const f = (key: keyof Enclosure, kind: FieldKind) => ({
+    kind,
+    units,
+    value: enclosure[key],
+    check: (v: number | undefined) => checkEnclosureEdit(enclosure, key, v, kind, units),
+    onCommit: (v: number | undefined) => store.edit((d) => setEnclosure(d, { [key]: v })),
+  });
+  return (
+    <Section title="Enclosure">
+      <p className="text-caption text-basalt-500">
+        Nothing selected: these are the enclosure’s inside measurements.
+      </p>
+      <Grid2>
+        <NumberField label="Width" testId="enclosure-width" {...f('width', 'length')} />
+        <NumberField label="Height" testId="enclosure-height" {...f('height', 'length')} />
+        <NumberField label="Depth" testId="enclosure-depth" {...f('depth', 'length')} />
+        <NumberField
+          label="Room temperature"
+          optional
+          fallback={DEFAULT_ROOM_TEMP_C}
+          testId="enclosure-roomTemp"
+          {...f('roomTempC', 'temp')}
+        />
+      </Grid2>
+    </Section>
+  );
+}

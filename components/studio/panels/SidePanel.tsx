@@ -1,0 +1,137 @@
+'use client';
+// The right column: ageing preview on top, then tabs for the inspector, the fields and the species check.
+import { useId, type KeyboardEvent } from 'react';
+import { useCommandContext, useStudio } from '../hooks/useStudio';
+import type { LegendEntry } from '../fields/legend';
+import type { SimView } from '../fields/simTypes';
+import type { SideTab } from '../state/session';
+import type { StudioSpecies } from '../state/types';
+import { AGEING_HORIZON_MONTHS, AssessmentPanel, StatusBadge } from './AssessmentPanel';
+import { focusRing } from './CommandButton';
+import { FieldsPanel } from './FieldsPanel';
+import { Inspector } from './Inspector';
+
+const TABS: { id: SideTab; label: string }[] = [
+  { id: 'inspect', label: 'Inspect' },
+  { id: 'fields', label: 'Fields' },
+  { id: 'assess', label: 'Check' },
+];
+
+function Ageing() {
+  const { store } = useCommandContext();
+  const months = useStudio(store, (s) => s.session.addMonths);
+  const id = useId();
+  return (
+    <div className="border-b border-basalt-200 bg-basalt-50 px-3 py-2">
+      <label
+        htmlFor={id}
+        className="flex items-center justify-between text-caption font-medium text-basalt-800"
+      >
+        <span>
+          Ageing preview: lamps {months === 0 ? 'as set' : `+${months} month${months === 1 ? '' : 's'}`}
+        </span>
+        {months > 0 && (
+          <button
+            type="button"
+            className={`rounded px-1 text-sky-700 underline ${focusRing}`}
+            onClick={() => store.setSession({ addMonths: 0 })}
+          >
+            Reset
+          </button>
+        )}
+      </label>
+      <input
+        id={id}
+        data-testid="ageing-slider"
+        type="range"
+        min={0}
+        max={AGEING_HORIZON_MONTHS}
+        step={1}
+        value={months}
+        aria-valuetext={`${months} months in use`}
+        onChange={(e) => store.setSession({ addMonths: Number(e.target.value) })}
+        className={`w-full accent-sand-600 ${focusRing}`}
+      />
+      <div className="flex justify-between text-[0.7rem] text-basalt-500" aria-hidden="true">
+        <span>0</span>
+        <span>6</span>
+        <span>12</span>
+        <span>18</span>
+        <span>24 months</span>
+      </div>
+    </div>
+  );
+}
+
+export function SidePanel({
+  sim,
+  legend,
+  species,
+}: {
+  sim: SimView;
+  legend: LegendEntry[];
+  species: StudioSpecies[];
+}) {
+  const { store } = useCommandContext();
+  const tab = useStudio(store, (s) => s.session.tab);
+  const base = useId();
+  const onKey = (e: KeyboardEvent<HTMLDivElement>) => {
+    // Arrow keys move between tabs (WAI-ARIA tabs pattern).
+    const i = TABS.findIndex((t) => t.id === tab);
+    let next = -1;
+    if (e.key === 'ArrowRight') next = (i + 1) % TABS.length;
+    if (e.key === 'ArrowLeft') next = (i + TABS.length - 1) % TABS.length;
+    if (next < 0) return;
+    e.preventDefault();
+    e.stopPropagation();
+    store.setSession({ tab: TABS[next]!.id });
+    document.getElementById(`${base}-tab-${TABS[next]!.id}`)?.focus();
+  };
+  return (
+    <aside
+      aria-label="Properties, fields and species check"
+      className="flex w-[22rem] shrink-0 flex-col border-l border-basalt-200 bg-white"
+    >
+      <Ageing />
+      <div role="tablist" aria-label="Panels" className="flex border-b border-basalt-200" onKeyDown={onKey}>
+        {TABS.map((t) => (
+          <button
+            key={t.id}
+            id={`${base}-tab-${t.id}`}
+            role="tab"
+            type="button"
+            aria-selected={tab === t.id}
+            aria-controls={`${base}-panel-${t.id}`}
+            tabIndex={tab === t.id ? 0 : -1}
+            data-testid={`tab-${t.id}`}
+            onClick={() => store.setSession({ tab: t.id })}
+            className={`flex flex-1 items-center justify-center gap-1.5 border-b-2 px-2 py-2 text-sm font-medium ${
+              tab === t.id
+                ? 'border-moss-600 text-basalt-900'
+                : 'border-transparent text-basalt-600 hover:text-basalt-900'
+            } ${focusRing}`}
+          >
+            {t.label}
+            {t.id === 'assess' && sim.assessment && <StatusBadge status={sim.assessment.overall} />}
+          </button>
+        ))}
+      </div>
+      <div
+        role="tabpanel"
+        id={`${base}-panel-${tab}`}
+        aria-labelledby={`${base}-tab-${tab}`}
+        className="min-h-0 flex-1 overflow-y-auto"
+        tabIndex={-1}
+      >
+        {tab === 'inspect' && (
+          <fieldset disabled={store.readOnly} className="min-w-0">
+            <legend className="sr-only">Properties{store.readOnly ? ' (view only)' : ''}</legend>
+            <Inspector />
+          </fieldset>
+        )}
+        {tab === 'fields' && <FieldsPanel sim={sim} legend={legend} />}
+        {tab === 'assess' && <AssessmentPanel sim={sim} species={species} />}
+      </div>
+    </aside>
+  );
+}

@@ -1,0 +1,92 @@
+// Small line icons drawn for Baskwell's studio (24-unit grid, stroke = currentColor).
+import type { ReactNode } from 'react';
+
+const P: Record<string, ReactNode> = {
+  select: <path d="M5 3l13 8-6 1.5L9 19z" />,
+  pan: (
+    <path d="M12 3v18M3 12h18M12 3l-3 3M12 3l3 3M12 21l-3-3M12 21l3-3M3 12l3-3M3 12l3 3M21 12l-3-3M21 12l-3 3" />
+  ),
+  lamp: (
+    <>
+      <rect x="3" y="5" width="18" height="5" rx="2.5" />
+      <path d="M7 14l-2 5M12 14v5M17 14l2 5" />
+    </>
+  ),
+  screen: <path d="M3 8h18M3 12h18M6 6v8M10 6v8M14 6v8M18 6v8" />,
+  glass: (
+    <>
+      <rect x="9" y="3" width="6" height="18" rx="1" />
+      <path d="M11 6l2-2M11 10l2-2" />
+    </>
+  ),
+  perch: <path d="M3 18L21 7" strokeWidth="4" strokeLinecap="round" />,
+  ledge: <path d="M3 20h18v-6l-4-3H7l-4 3z" />,
+  hide: (
+    <>
+      <path d="M3 20V9a3 3 0 013-3h12a3 3 0 013 3v11z" />
+      <path d="M9 20v-4a3 3 0 016 0v4" />
+    </>
+  ),
+  foliage: <path d="M12 21V9M12 13c-4 0-6-3-6-6 3 0 6 2 6 6zM12 11c0-4 3-6 6-6 0 3-2 6-6 6zM8 21h8" />,
+  probe: (
+    <>
+      <path d="M12 3l3 6-3 12-3-12z" />
+      <circle cx="12" cy="9" r="1.5" />
+    </>
+  ),
+  ruler: <path d="M3 17L17 3l4 4L7 21zM7 13l2 2M10 10l2 2M13 7l2 2" />,
+  undo: <path d="M9 7L4 12l5 5M4 12h11a5 5 0 010 10h-2" />,
+  redo: <path d="M15 7l5 5-5 5M20 12H9a5 5 0 000 10h2" />,
+  duplicate: (
+    <>
+      <rect x="8" y="8" width="12" height="12" rx="2" />
+      <path d="M16 8V6a2 2 0 00-2-2H6a2 2 0 00-2 2v8a2 2 0 002 2h2" />
+    </>
+  ),
+  delete: <path d="M4 7h16M9 7V4h6v3M6 7l1 13h10l1-13M10 11v6M14 11v6" />,
+  forward: (
+    <>
+      <rect x="8" y="4" width="12" height="12" rx="1" />
+      <path d="M4 8v12h12" />
+    </>
+  ),
+  backward: (
+    <>
+      <rect x="4" y="8" width="12" height="12" rx="1" />
+      <path d="M8 4h12v12" />
+    </>
+  ),
+  zoomIn: <path d="M11 4a7 7 0 100 14 7 7 0 000-14zM21 21l-5-5M11 8v6M8 11h6" />,
+  zoomOut: <path d="M11 4a7 7 0 100 14 7 7 0 000-14zM21 21l-5-5M8 11h6" />,
+  fit: <path d="M4 9V4h5M20 9V4h-5M4 15v5h5M20 15v5h-5" />,
+  grid: <path d="M4 4h16v16H4zM4 10h16M4 15h16M10 4v16M15 4v16" />,
+  magnet: <path d="M6 4v8a6 6 0 0012 0V4h-4v8a2 2 0 01-4 0V4zM6 8h4M14 8h4" />,
+  help: (
+    <>
+      <circle cx="12" cy="12" r="9" />
+      <path d="M9.5 9.5a2.5 2.5 0 114 2c-1 .7-1.5 1.2-1.5 2.5M12 17h.01" />
+    </>
+  ),
+  save: <path d="M5 4h11l3 3v13H5zM8 4v5h7V4M8 20v-6h8v6" />,
+  back: <path d="M15 5l-7 7 7 7" />,
+};
+
+export type IconName = keyof typeof P;
+
+export function Icon({ name, className = 'h-5 w-5' }: { name: IconName; className?: string }) {
+  return (
+    <svg
+      viewBox="0 0 24 24"
+      className={className}
+      fill="none"
+      stroke="currentColor"
+      strokeWidth={1.7}
+      strokeLinecap="round"
+      strokeLinejoin="round"
+      aria-hidden="true"
+      focusable="false"
+    >
+      {P[name]}
+    </svg>
+  );
+}

@@ -1,0 +1,90 @@
+// Validation of inspector edits against the engine's zod schema (the single source of truth),
+// with messages written for people and limits shown in the unit they are typing in.
+import type { z } from 'zod';
+import { designObjectSchema, enclosureSchema } from '@/simulation/model/schema';
+import {
+  cmToDisplay,
+  cToDisplay,
+  formatNumber,
+  lengthLabel,
+  tempLabel,
+  type LengthUnit,
+  type TempUnit,
+} from '../geometry/units';
+import type { DesignObject, Enclosure } from '../state/types';
+
+export type FieldKind = 'length' | 'temp' | 'percent' | 'plain';
+
+export interface DisplayUnits {
+  length: LengthUnit;
+  temp: TempUnit;
+}
+
+function limit(v: number, kind: FieldKind, u: DisplayUnits): string {
+  if (kind === 'length') return `${formatNumber(cmToDisplay(v, u.length), 2)} ${lengthLabel(u.length)}`;
+  if (kind === 'temp') return `${formatNumber(cToDisplay(v, u.temp), 1)} ${tempLabel(u.temp)}`;
+  if (kind === 'percent') return `${formatNumber(v * 100, 0)} %`;
+  return formatNumber(v, 4);
+}
+
+export function issueMessage(issue: z.core.$ZodIssue, kind: FieldKind, u: DisplayUnits): string {
+  if (issue.code === 'too_small') {
+    const min = Number(issue.minimum);
+    return issue.inclusive
+      ? `Must be at least ${limit(min, kind, u)}.`
+      : `Must be more than ${limit(min, kind, u)}.`;
+  }
+  if (issue.code === 'too_big') {
+    const max = Number(issue.maximum);
+    return issue.inclusive
+      ? `Must be at most ${limit(max, kind, u)}.`
+      : `Must be less than ${limit(max, kind, u)}.`;
+  }
+  if (issue.code === 'invalid_type') return 'Enter a number.';
+  const m = issue.message.replace(/^Invalid input: /, '');
+  return m.charAt(0).toUpperCase() + m.slice(1) + (m.endsWith('.') ? '' : '.');
+}
+
+export type Check<T> = { ok: true; value: T } | { ok: false; message: string };
+
+/** Validates an object after setting `key`; returns the first problem with that field, or with the object. */
+export function checkObjectEdit(
+  object: DesignObject,
+  key: string,
+  value: unknown,
+  kind: FieldKind,
+  u: DisplayUnits,
+): Check<DesignObject> {
+  const candidate: Record<string, unknown> = { ...object, [key]: value };
+  if (value === undefined) delete candidate[key];
+  const r = designObjectSchema.safeParse(candidate);
+  if (r.success) return { ok: true, value: r.data };
+  const issue = r.error.issues.find((i) => i.path[0] === key) ?? r.error.issues[0];
+  return {
+    ok: false,
+    message: issue ? issueMessage(issue, issue.path[0] === key ? kind : 'plain', u) : 'Not valid.',
+  };
+}
+
+export function checkEnclosureEdit(
+  enclosure: Enclosure,
+  key: keyof Enclosure,
+  value: number | undefined,
+  kind: FieldKind,
+  u: DisplayUnits,
+): Check<Enclosure> {
+  const candidate: Record<string, unknown> = { ...enclosure, [key]: value };
+  if (value === undefined) delete candidate[key];
+  const r = enclosureSchema.safeParse(candidate);
+  if (r.success) return { ok: true, value: r.data };
+  const issue = r.error.issues[0];
+  return { ok: false, message: issue ? issueMessage(issue, kind, u) : 'Not valid.' };
+}
+
+/** Parses what the user typed (accepting a decimal comma); null for empty, NaN for nonsense. */
+export function parseTyped(text: string): number | null {
+  const t = text.trim().replace(',', '.');
+  if (t === '') return null;
+  if (!/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(t)) return Number.NaN;
+  return Number(t);
+}
