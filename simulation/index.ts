@@ -27,3 +27,6 @@ export { assess, monthsUntilUnmet } from './assess/assess';
 export { reachableSurfaces, type SurfaceSample } from './assess/surfaces';
 export * as ASSESSMENT_THRESHOLDS from './assess/thresholds';
 export { speciesSheetSchema } from './model/species';
+export { handleRequest } from './worker/handle';
+export { LatestRequestQueue } from './worker/queue';
+export { transferables, type SimRequest, type SimResponse, type SimResult } from './worker/protocol';
