@@ -1,0 +1,55 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { DeleteSheetButton } from '@/components/species/DeleteSheetButton';
+import { ProvenanceNote } from '@/components/species/ProvenanceNote';
+import { SpeciesSheetView } from '@/components/species/SpeciesSheetView';
+import { PageHeader } from '@/components/ui/PageHeader';
+import { button, link } from '@/components/ui/styles';
+import { requireUser } from '@/lib/session';
+import { loadSheet } from '../load';
+
+type Props = { params: Promise<{ id: string }> };
+
+export async function generateMetadata({ params }: Props): Promise<Metadata> {
+  const user = await requireUser();
+  const { sheet } = await loadSheet(user, (await params).id);
+  return { title: sheet.commonName };
+}
+
+export default async function SpeciesSheetPage({ params }: Props) {
+  const { id } = await params;
+  const user = await requireUser(`/species/${id}`);
+  const { sheet, mayEdit } = await loadSheet(user, id);
+
+  return (
+    <>
+      <p className="mb-2 text-body">
+        <Link href="/species" className={link}>
+          ← All species
+        </Link>
+      </p>
+      <PageHeader
+        title={sheet.commonName}
+        lead={<span className="italic">{sheet.scientificName}</span>}
+        actions={
+          mayEdit && (
+            <>
+              <Link href={`/species/${sheet.id}/edit`} className={button.primary}>
+                Edit sheet
+              </Link>
+              <DeleteSheetButton id={sheet.id} name={sheet.commonName} />
+            </>
+          )
+        }
+      />
+      <div className="mb-6">
+        <ProvenanceNote sources={sheet.sources} startingSheet={sheet.seedKey !== null} />
+      </div>
+      <SpeciesSheetView sheet={sheet} />
+      <p className="mt-6 text-caption text-basalt-500">
+        Last changed {new Date(sheet.updatedAt).toLocaleDateString('en-GB', { dateStyle: 'medium' })}.{' '}
+        {!mayEdit && 'Only the organisation’s owner and staff can change this sheet.'}
+      </p>
+    </>
+  );
+}

@@ -1,0 +1,255 @@
+'use client';
+
+import { useRouter } from 'next/navigation';
+import { useEffect, useState, type FormEvent } from 'react';
+import { ApiClientError, sendJson } from '@/components/ui/api-client';
+import { Field } from '@/components/ui/Field';
+import { Notice } from '@/components/ui/Notice';
+import { button, card, input } from '@/components/ui/styles';
+import { targetWarning } from '@/lib/species/consistency';
+import { speciesInputSchema, type SpeciesSheetDto } from '@/lib/species/schema';
+import { UV_ZONES, type UvZone } from '@/simulation/assess/zones';
+import { initialState, toPayload, withUnit, type SpeciesFormState, type TempRangeField } from './form-state';
+import { zoneHabit } from './format';
+import { SourcesEditor } from './SourcesEditor';
+import { TempToggle } from './TempToggle';
+import { useTempUnit } from './temp-unit';
+
+type Errors = Record<string, string>;
+
+const TEMP_LABELS: Record<TempRangeField, string> = {
+  baskingSurfaceC: 'Basking surface',
+  warmAirC: 'Warm side air',
+  coolAirC: 'Cool side air',
+};
+
+/** Create (no `sheet`) or edit a species sheet. Validates with the API's own schema before sending. */
+export function SpeciesForm({
+  organisationId,
+  sheet,
+}: {
+  organisationId: number;
+  sheet: SpeciesSheetDto | null;
+}) {
+  const router = useRouter();
+  const [unit] = useTempUnit();
+  const [state, setState] = useState<SpeciesFormState>(() => initialState(sheet, unit));
+  const [errors, setErrors] = useState<Errors>({});
+  const [general, setGeneral] = useState<string | null>(null);
+  const [saving, setSaving] = useState(false);
+  const [dirty, setDirty] = useState(false);
+
+  // Temperatures follow the page's °C/°F choice (state derived during render, as React recommends).
+  if (state.unit !== unit) setState(withUnit(state, unit));
+
+  useEffect(() => {
+    if (!dirty) return;
+    const warn = (e: BeforeUnloadEvent) => e.preventDefault();
+    window.addEventListener('beforeunload', warn);
+    return () => window.removeEventListener('beforeunload', warn);
+  }, [dirty]);
+
+  const update = (patch: Partial<SpeciesFormState>) => {
+    setState((s) => ({ ...s, ...patch }));
+    setDirty(true);
+  };
+  const setPair = (key: 'uvbTargetUw' | 'photoperiodH', end: 'min' | 'max', v: string) =>
+    update({ [key]: { ...state[key], [end]: v } });
+  const setTemp = (key: TempRangeField, end: 'min' | 'max', v: string) =>
+    update({ temps: { ...state.temps, [key]: { ...state.temps[key], [end]: v } } });
+
+  async function submit(e: FormEvent) {
+    e.preventDefault();
+    setGeneral(null);
+    const payload = toPayload(state);
+    const parsed = speciesInputSchema.safeParse(payload);
+    if (!parsed.success) {
+      const next: Errors = {};
+      for (const i of parsed.error.issues) next[i.path.join('.')] ??= i.message;
+      setErrors(next);
+      setGeneral('Some fields need attention: see the messages beside them.');
+      return;
+    }
+    setErrors({});
+    setSaving(true);
+    try {
+      const saved = sheet
+        ? await sendJson<SpeciesSheetDto>('PATCH', `/api/species/${sheet.id}`, parsed.data)
+        : await sendJson<SpeciesSheetDto>('POST', '/api/species', { organisationId, ...parsed.data });
+      setDirty(false);
+      router.push(`/species/${saved.id}`);
+      router.refresh();
+    } catch (err) {
+      if (err instanceof ApiClientError && err.field) setErrors({ [err.field]: err.message });
+      setGeneral(err instanceof Error ? err.message : 'The sheet could not be saved. Try again.');
+      setSaving(false);
+    }
+  }
+
+  const err = (path: string) => errors[path] ?? null;
+  const pairError = (key: string) => err(`${key}.min`) ?? err(`${key}.max`) ?? err(key);
+  const zoneWarning = (() => {
+    const zone = Number(state.uvZone);
+    const min = Number(state.uvbTargetUw.min);
+    const max = Number(state.uvbTargetUw.max);
+    if (!zone || !state.uvbTargetUw.min || !state.uvbTargetUw.max || !(min <= max)) return null;
+    return targetWarning(zone, { min, max });
+  })();
+
+  return (
+    <form onSubmit={submit} noValidate className="space-y-6">
+      {general && <Notice tone="error">{general}</Notice>}
+
+      <fieldset className={`${card} grid gap-4 p-5 sm:grid-cols-2`}>
+        <legend className="px-1 text-lead font-semibold text-basalt-900">Species</legend>
+        <Field
+          label="Common name"
+          value={state.commonName}
+          onChange={(e) => update({ commonName: e.target.value })}
+          error={err('commonName')}
+          required
+        />
+        <Field
+          label="Scientific name"
+          value={state.scientificName}
+          onChange={(e) => update({ scientificName: e.target.value })}
+          error={err('scientificName')}
+          required
+        />
+        <div>
+          <label htmlFor="uv-zone" className="mb-1 block text-body font-medium text-basalt-800">
+            UV zone
+          </label>
+          <select
+            id="uv-zone"
+            className={input}
+            value={state.uvZone}
+            onChange={(e) => update({ uvZone: e.target.value })}
+            aria-invalid={err('uvZone') ? true : undefined}
+          >
+            <option value="">Choose a zone…</option>
+            {([1, 2, 3, 4] as UvZone[]).map((z) => (
+              <option key={z} value={z}>
+                {`Zone ${z}: ${zoneHabit(UV_ZONES[z].label)} — basking UVI ${UV_ZONES[z].max[0]}–${UV_ZONES[z].max[1]}`}
+              </option>
+            ))}
+          </select>
+          <p className="mt-1 text-caption text-basalt-500">
+            Zones of Ferguson et al. 2010 (Zoo Biology 29:317–334).
+          </p>
+          {err('uvZone') && <p className="mt-1 text-caption font-medium text-ember-700">{err('uvZone')}</p>}
+        </div>
+        <RangeInputs
+          legend="Basking UVB target (optional, µW/cm²)"
+          hint="For keepers with a broadband UVB meter. Readings depend on the meter; the UV zone is the primary target."
+          value={state.uvbTargetUw}
+          onChange={(end, v) => setPair('uvbTargetUw', end, v)}
+          error={pairError('uvbTargetUw')}
+        />
+        {zoneWarning && (
+          <div className="sm:col-span-2">
+            <Notice tone="warning">{zoneWarning}</Notice>
+          </div>
+        )}
+      </fieldset>
+
+      <fieldset className={`${card} grid gap-4 p-5 sm:grid-cols-2`}>
+        <legend className="px-1 text-lead font-semibold text-basalt-900">Temperatures</legend>
+        <div className="flex items-center justify-end sm:col-span-2">
+          <TempToggle />
+        </div>
+        {(Object.keys(TEMP_LABELS) as TempRangeField[]).map((k) => (
+          <RangeInputs
+            key={k}
+            legend={`${TEMP_LABELS[k]} (°${state.unit})`}
+            value={state.temps[k]}
+            onChange={(end, v) => setTemp(k, end, v)}
+            error={pairError(k)}
+          />
+        ))}
+        <Field
+          label={`Night minimum (°${state.unit}, optional)`}
+          inputMode="decimal"
+          value={state.nightMin}
+          onChange={(e) => update({ nightMin: e.target.value })}
+          error={err('nightMinC')}
+        />
+        <RangeInputs
+          legend="Photoperiod (hours of light a day, optional)"
+          value={state.photoperiodH}
+          onChange={(end, v) => setPair('photoperiodH', end, v)}
+          error={pairError('photoperiodH')}
+        />
+      </fieldset>
+
+      <fieldset className={`${card} p-5`}>
+        <legend className="px-1 text-lead font-semibold text-basalt-900">Notes</legend>
+        <label htmlFor="notes" className="sr-only">
+          Notes
+        </label>
+        <textarea
+          id="notes"
+          rows={4}
+          className={input}
+          value={state.notes}
+          onChange={(e) => update({ notes: e.target.value })}
+        />
+        {err('notes') && <p className="mt-1 text-caption font-medium text-ember-700">{err('notes')}</p>}
+      </fieldset>
+
+      <SourcesEditor sources={state.sources} onChange={(sources) => update({ sources })} errors={errors} />
+
+      <div className="flex flex-wrap gap-2">
+        <button type="submit" className={button.primary} disabled={saving}>
+          {saving ? 'Saving…' : sheet ? 'Save changes' : 'Add species sheet'}
+        </button>
+        <button type="button" className={button.secondary} onClick={() => router.back()} disabled={saving}>
+          Cancel
+        </button>
+      </div>
+    </form>
+  );
+}
+
+function RangeInputs({
+  legend,
+  hint,
+  value,
+  onChange,
+  error,
+}: {
+  legend: string;
+  hint?: string;
+  value: { min: string; max: string };
+  onChange: (end: 'min' | 'max', v: string) => void;
+  error: string | null;
+}) {
+  return (
+    <fieldset>
+      <legend className="mb-1 block text-body font-medium text-basalt-800">{legend}</legend>
+      <div className="flex items-center gap-2">
+        <input
+          aria-label={`${legend}: from`}
+          inputMode="decimal"
+          className={input}
+          value={value.min}
+          onChange={(e) => onChange('min', e.target.value)}
+          aria-invalid={error ? true : undefined}
+        />
+        <span aria-hidden className="text-basalt-500">
+          –
+        </span>
+        <input
+          aria-label={`${legend}: to`}
+          inputMode="decimal"
+          className={input}
+          value={value.max}
+          onChange={(e) => onChange('max', e.target.value)}
+          aria-invalid={error ? true : undefined}
+        />
+      </div>
+      {hint && <p className="mt-1 text-caption text-basalt-500">{hint}</p>}
+      {error && <p className="mt-1 text-caption font-medium text-ember-700">{error}</p>}
+    </fieldset>
+  );
+}
