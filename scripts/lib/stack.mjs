@@ -38,19 +38,26 @@ export class Lifecycle {
     return this.stopping;
   }
 
-  /** On Ctrl-C / SIGTERM: stop everything and exit; a second signal exits at once. */
+  /**
+   * On Ctrl-C / SIGTERM / SIGHUP, or when the parent process goes away: stop everything and exit.
+   * A second signal exits at once.
+   */
   handleSignals(exitCode = 130) {
-    for (const sig of ['SIGINT', 'SIGTERM', 'SIGHUP']) {
-      process.on(sig, () => {
-        this.signals++;
-        if (this.signals > 1) {
-          log(yellow('Second signal: exiting without waiting.'));
-          process.exit(exitCode);
-        }
-        log(`${sig}: stopping ...`);
-        void this.stop().then(() => process.exit(exitCode));
-      });
-    }
+    const onSignal = (why) => {
+      this.signals++;
+      if (this.signals > 1) {
+        log(yellow('Second signal: exiting without waiting.'));
+        process.exit(exitCode);
+      }
+      log(`${why}: stopping ...`);
+      void this.stop().then(() => process.exit(exitCode));
+    };
+    for (const sig of ['SIGINT', 'SIGTERM', 'SIGHUP']) process.on(sig, () => onSignal(sig));
+    // `kill <npm pid>` ends npm without passing the signal on; we would be left running alone.
+    const parent = process.ppid;
+    setInterval(() => {
+      if (process.ppid !== parent && this.signals === 0) onSignal('parent process exited');
+    }, 1000).unref();
   }
 }
 
