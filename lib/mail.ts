@@ -53,3 +53,11 @@ export async function capturedMessages(): Promise<CapturedMessage[] | null> {
     return null;
   }
 }
+
+/**
+ * The captured-mail page exists for development and tests only: on when not in production, or when a
+ * fake SMTP server is explicitly configured (the browser tests run a production build against one).
+ */
+export function mailViewerEnabled(): boolean {
+  return process.env.NODE_ENV !== 'production' || Boolean(process.env.FAKE_SMTP_HTTP);
+}

@@ -1,0 +1,135 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { AddLampForm } from '@/components/lamp-log/AddLampForm';
+import { BackdropPanel } from '@/components/lamp-log/BackdropPanel';
+import { CsvImport } from '@/components/lamp-log/CsvImport';
+import { LampTable } from '@/components/lamp-log/LampTable';
+import { EmptyState } from '@/components/ui/EmptyState';
+import { PageHeader } from '@/components/ui/PageHeader';
+import { UnitToggle } from '@/components/ui/UnitToggle';
+import { card, link } from '@/components/ui/styles';
+import { getSequelize } from '@/lib/db';
+import { allLampTypes } from '@/lib/lamp-types/store';
+import { todayIso } from '@/lib/lamp-log/dates';
+import { designLampsOf } from '@/lib/lamp-log/design-lamps';
+import { lampsOfEnclosure, summarise } from '@/lib/lamp-log/store';
+import { uploadJson } from '@/lib/uploads/service';
+import { can } from '@/lib/permissions';
+import { requireUser } from '@/lib/session';
+import { ensureStartingCatalogue } from '@/lib/species/seed';
+import { Enclosure, Upload } from '@/models';
+
+export const metadata: Metadata = { title: 'Lamps of an enclosure' };
+
+export default async function EnclosureLampsPage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  const user = await requireUser(`/enclosures/${id}/lamps`);
+  const enclosureId = Number(id);
+  if (!Number.isSafeInteger(enclosureId) || enclosureId <= 0) notFound();
+  getSequelize();
+  const enclosure = await Enclosure.findByPk(enclosureId);
+  const resource =
+    enclosure &&
+    ({ kind: 'lamp', organisationId: enclosure.organisationId, keeperId: enclosure.keeperId } as const);
+  if (!enclosure || !resource || !can(user, 'read', resource)) notFound();
+  const canEdit = can(user, 'update', resource);
+  await ensureStartingCatalogue(enclosure.organisationId);
+  const [rows, lampTypes, designLamps, backdrops] = await Promise.all([
+    lampsOfEnclosure(enclosure.id, { limit: 200 }),
+    allLampTypes(enclosure.organisationId),
+    designLampsOf(enclosure.id),
+    Upload.findAll({
+      where: { enclosureId: enclosure.id, kind: 'backdrop' },
+      order: [['id', 'DESC']],
+      limit: 12,
+    }),
+  ]);
+  const lamps = await summarise(rows, todayIso());
+  const active = lamps.filter((l) => l.status !== 'retired');
+  const retired = lamps.filter((l) => l.status === 'retired');
+
+  return (
+    <>
+      <nav aria-label="Breadcrumb" className="mb-2 text-body">
+        <Link href="/enclosures" className={link}>
+          Enclosures
+        </Link>
+        <span className="text-basalt-400"> / </span>
+        <Link href={`/enclosures/${enclosure.id}`} className={link}>
+          {enclosure.name}
+        </Link>
+        <span className="text-basalt-400"> / </span>
+        <span aria-current="page">Lamps</span>
+      </nav>
+      <PageHeader
+        title={`Lamps of ${enclosure.name}`}
+        lead={
+          enclosure.speciesName
+            ? `Species: ${enclosure.speciesName}`
+            : 'No species set on this enclosure: set it to date the basking zone.'
+        }
+        actions={<UnitToggle />}
+      />
+      <div className="space-y-8">
+        {active.length > 0 ? (
+          <LampTable lamps={active} showEnclosure={false} />
+        ) : (
+          <EmptyState title="No lamps in use">
+            <p>
+              Add the lamps of this enclosure below: the type from the catalogue, when it was first switched
+              on and its hours a day.
+            </p>
+          </EmptyState>
+        )}
+        {retired.length > 0 && (
+          <details>
+            <summary className="cursor-pointer text-body text-basalt-700">
+              Retired lamps ({retired.length})
+            </summary>
+            <div className="mt-2">
+              <LampTable lamps={retired} showEnclosure={false} />
+            </div>
+          </details>
+        )}
+        {canEdit && (
+          <div className="grid gap-6 lg:grid-cols-2">
+            <section aria-labelledby="add-lamp" className={`${card} p-4`}>
+              <h2 id="add-lamp" className="mb-3 text-lead font-semibold">
+                Add a lamp
+              </h2>
+              <AddLampForm
+                enclosureId={enclosure.id}
+                lampTypes={lampTypes.map((t) => ({
+                  id: t.id,
+                  name: t.name,
+                  tech: t.tech,
+                  uvbAt30: t.uvbAt30,
+                }))}
+                designLamps={designLamps}
+              />
+            </section>
+            <section aria-labelledby="import" className={`${card} p-4`}>
+              <h2 id="import" className="mb-3 text-lead font-semibold">
+                Import readings (CSV)
+              </h2>
+              {lamps.length > 0 ? (
+                <CsvImport enclosureId={enclosure.id} />
+              ) : (
+                <p className="text-body text-basalt-500">
+                  Add a lamp first; the file names lamps by their name.
+                </p>
+              )}
+            </section>
+          </div>
+        )}
+        <section aria-labelledby="photo" className={`${card} p-4`}>
+          <h2 id="photo" className="mb-3 text-lead font-semibold">
+            Photo for tracing in the studio
+          </h2>
+          <BackdropPanel enclosureId={enclosure.id} initial={backdrops.map(uploadJson)} canEdit={canEdit} />
+        </section>
+      </div>
+    </>
+  );
+}

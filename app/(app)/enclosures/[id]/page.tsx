@@ -1,0 +1,53 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { DesignsSection } from '@/components/designs/DesignsSection';
+import { EnclosureDetails } from '@/components/enclosures/EnclosureDetails';
+import { PageHeader } from '@/components/ui/PageHeader';
+import { UnitToggle } from '@/components/ui/UnitToggle';
+import { link } from '@/components/ui/styles';
+import { enclosureView, memberViews } from '@/lib/api/views';
+import { can } from '@/lib/permissions';
+import { requireUser } from '@/lib/session';
+
+export const metadata: Metadata = { title: 'Enclosure' };
+
+export default async function EnclosurePage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  const user = await requireUser(`/enclosures/${id}`);
+  const enclosureId = Number(id);
+  const enclosure =
+    Number.isInteger(enclosureId) && enclosureId > 0 ? await enclosureView(enclosureId) : null;
+  const resource =
+    enclosure &&
+    ({ kind: 'enclosure', organisationId: enclosure.organisationId, keeperId: enclosure.keeperId } as const);
+  // Someone else's enclosure looks exactly like a missing one.
+  if (!enclosure || !resource || !can(user, 'read', resource)) notFound();
+  const seesPeople = can(user, 'read', { kind: 'member', organisationId: enclosure.organisationId });
+  const people = seesPeople
+    ? (await memberViews(enclosure.organisationId)).map((p) => ({ id: p.userId, name: p.name, role: p.role }))
+    : undefined;
+  const subtitle = [enclosure.animalName, enclosure.speciesName].filter(Boolean).join(' · ');
+
+  return (
+    <>
+      <nav aria-label="Breadcrumb" className="mb-2 text-body">
+        <Link href="/enclosures" className={link}>
+          Enclosures
+        </Link>
+        <span className="text-basalt-400"> / </span>
+        <span aria-current="page">{enclosure.name}</span>
+      </nav>
+      <PageHeader title={enclosure.name} lead={subtitle || undefined} actions={<UnitToggle />} />
+      <div className="space-y-8">
+        <EnclosureDetails
+          enclosure={enclosure}
+          people={people}
+          canEdit={can(user, 'update', resource)}
+          canDelete={can(user, 'delete', resource)}
+        />
+        <DesignsSection enclosureId={enclosure.id} canEdit={can(user, 'update', resource)} />
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,85 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { EnclosureTable } from '@/components/enclosures/EnclosureTable';
+import { NewEnclosure } from '@/components/enclosures/NewEnclosure';
+import { EmptyState } from '@/components/ui/EmptyState';
+import { Notice } from '@/components/ui/Notice';
+import { PageHeader } from '@/components/ui/PageHeader';
+import { UnitToggle } from '@/components/ui/UnitToggle';
+import { link } from '@/components/ui/styles';
+import { enclosureViews, memberViews } from '@/lib/api/views';
+import { can, roleIn } from '@/lib/permissions';
+import { currentMembership, requireUser } from '@/lib/session';
+
+export const metadata: Metadata = { title: 'Enclosures' };
+
+export default async function EnclosuresPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[]>>;
+}) {
+  const user = await requireUser('/enclosures');
+  const membership = await currentMembership(user);
+  if (!membership) return null;
+  const orgId = membership.organisationId;
+  const isKeeper = roleIn(user, orgId) === 'keeper';
+  const seesAll = can(user, 'read', { kind: 'member', organisationId: orgId });
+  const params = await searchParams;
+  const keeperFilter =
+    seesAll && typeof params.keeper === 'string' ? Number(params.keeper) || undefined : undefined;
+  const [{ items, more }, people] = await Promise.all([
+    enclosureViews(orgId, isKeeper ? user.id : keeperFilter),
+    seesAll ? memberViews(orgId) : Promise.resolve(null),
+  ]);
+  const peopleOptions = people
+    ?.map((p) => ({ id: p.userId, name: p.name, role: p.role }))
+    .sort(
+      (a, b) => (a.role === 'keeper' ? 0 : 1) - (b.role === 'keeper' ? 0 : 1) || a.name.localeCompare(b.name),
+    );
+  const filteredName = keeperFilter ? people?.find((p) => p.userId === keeperFilter)?.name : undefined;
+
+  return (
+    <>
+      <PageHeader
+        title="Enclosures"
+        lead={
+          isKeeper
+            ? 'Your enclosures. Each one holds its lighting and heating designs, lamps and meter readings.'
+            : `Every enclosure of ${membership.organisationName}: your customers' and your own. Each holds its designs, lamps and readings.`
+        }
+        actions={<UnitToggle />}
+      />
+      {filteredName && (
+        <div className="mb-4">
+          <Notice tone="info">
+            Showing the enclosures of {filteredName}.{' '}
+            <Link href="/enclosures" className={link}>
+              Show all
+            </Link>
+          </Notice>
+        </div>
+      )}
+      <div className="mb-6 flex justify-end">
+        <NewEnclosure organisationId={orgId} people={peopleOptions} />
+      </div>
+      {items.length === 0 ? (
+        <EmptyState title={filteredName ? `${filteredName} has no enclosures yet` : 'No enclosures yet'}>
+          <p>
+            An enclosure is the real tank or vivarium an animal lives in: its inside size, the species and the
+            animal. Add one, then plan its lamps in a design and keep its meter readings here.
+          </p>
+          {!isKeeper && (
+            <p>Add customers as keepers first (Keepers page) to file enclosures under their names.</p>
+          )}
+        </EmptyState>
+      ) : (
+        <>
+          <EnclosureTable enclosures={items} showKeeper={!isKeeper} />
+          {more && (
+            <p className="mt-3 text-caption text-basalt-500">Showing the first {items.length} enclosures.</p>
+          )}
+        </>
+      )}
+    </>
+  );
+}

@@ -1,0 +1,130 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { CalibrationPanel } from '@/components/lamp-log/CalibrationPanel';
+import { DecayChart } from '@/components/lamp-log/DecayChart';
+import { LampFacts } from '@/components/lamp-log/LampFacts';
+import { LampSettings } from '@/components/lamp-log/LampSettings';
+import { ReadingForm } from '@/components/lamp-log/ReadingForm';
+import { ReadingsTable } from '@/components/lamp-log/ReadingsTable';
+import { StatusBadge } from '@/components/lamp-log/StatusBadge';
+import { PageHeader } from '@/components/ui/PageHeader';
+import { UnitToggle } from '@/components/ui/UnitToggle';
+import { card, link } from '@/components/ui/styles';
+import { todayIso } from '@/lib/lamp-log/dates';
+import { designLampsOf } from '@/lib/lamp-log/design-lamps';
+import { lampDetail } from '@/lib/lamp-log/store';
+import { can } from '@/lib/permissions';
+import { requireUser } from '@/lib/session';
+import { Enclosure, Lamp } from '@/models';
+import { getSequelize } from '@/lib/db';
+
+export const metadata: Metadata = { title: 'Lamp' };
+
+export default async function LampPage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  const user = await requireUser(`/lamp-log/${id}`);
+  const lampId = Number(id);
+  if (!Number.isSafeInteger(lampId) || lampId <= 0) notFound();
+  getSequelize();
+  const lamp = (await Lamp.findByPk(lampId, {
+    include: [{ model: Enclosure, as: 'enclosure', required: true }],
+  })) as (Lamp & { enclosure: Enclosure }) | null;
+  const resource =
+    lamp &&
+    ({
+      kind: 'lamp',
+      organisationId: lamp.enclosure.organisationId,
+      keeperId: lamp.enclosure.keeperId,
+    } as const);
+  // Someone else's lamp looks exactly like a missing one.
+  if (!lamp || !resource || !can(user, 'read', resource)) notFound();
+  const canEdit = can(user, 'update', resource);
+  const detail = await lampDetail(lamp, todayIso());
+  const designLamps = await designLampsOf(lamp.enclosureId);
+  const s = detail.lamp;
+  const lastMeter = [...detail.readings].reverse().find((r) => r.meter)?.meter ?? null;
+
+  return (
+    <>
+      <nav aria-label="Breadcrumb" className="mb-2 text-body">
+        <Link href="/lamp-log" className={link}>
+          Lamp log
+        </Link>
+        <span className="text-basalt-400"> / </span>
+        <Link href={`/enclosures/${s.enclosure.id}/lamps`} className={link}>
+          {s.enclosure.name}
+        </Link>
+        <span className="text-basalt-400"> / </span>
+        <span aria-current="page">{s.label}</span>
+      </nav>
+      <PageHeader
+        title={s.label}
+        lead={
+          <>
+            {s.lampType.name} · <StatusBadge status={s.status} label={s.statusLabel} />
+          </>
+        }
+        actions={<UnitToggle />}
+      />
+      <div className="grid gap-6 lg:grid-cols-3">
+        <section aria-labelledby="chart" className="space-y-3 lg:col-span-2">
+          <h2 id="chart" className="text-lead font-semibold">
+            Readings and fitted decline
+          </h2>
+          {detail.chart.unit ? (
+            <DecayChart
+              chart={detail.chart}
+              fallsBelowOn={s.fallsBelowOn}
+              title={`Output of ${s.label} over time`}
+            />
+          ) : (
+            <p className="rounded-lg border border-dashed border-basalt-300 bg-basalt-50 p-6 text-body text-basalt-600">
+              No readings yet. Measure the lamp straight below it with a UVB or UV Index meter and add the
+              value here; a first reading when the lamp is new is the most useful one.
+            </p>
+          )}
+        </section>
+        <LampFacts lamp={s} />
+      </div>
+
+      <div className="mt-8 grid gap-6 lg:grid-cols-2">
+        <section aria-labelledby="readings" className="space-y-3">
+          <h2 id="readings" className="text-lead font-semibold">
+            Readings
+          </h2>
+          <ReadingsTable readings={detail.readings} canEdit={canEdit} />
+          {canEdit && s.status !== 'retired' && (
+            <div className={`${card} p-4`}>
+              <h3 className="mb-3 font-semibold">Add a reading</h3>
+              <ReadingForm lampId={s.id} lastMeter={lastMeter} />
+            </div>
+          )}
+        </section>
+        <div className="space-y-6">
+          <section aria-labelledby="calibration" className={`${card} p-4`}>
+            <h2 id="calibration" className="mb-2 text-lead font-semibold">
+              Calibrate the design
+            </h2>
+            <p className="mb-3 text-caption text-basalt-600">
+              Use this lamp&apos;s readings instead of the catalogue figures, so the studio shows this lamp
+              rather than an average one.
+            </p>
+            <CalibrationPanel
+              lampId={s.id}
+              canApply={can(user, 'update', { ...resource, kind: 'variant' })}
+            />
+          </section>
+          {canEdit && (
+            <section aria-labelledby="settings" className={`${card} p-4`}>
+              <h2 id="settings" className="mb-3 text-lead font-semibold">
+                Lamp settings
+              </h2>
+              <LampSettings lamp={s} designLamps={designLamps} canDelete={can(user, 'delete', resource)} />
+            </section>
+          )}
+        </div>
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,56 @@
+import type { ReactNode } from 'react';
+import { AppNav, type NavItem } from '@/components/shell/AppNav';
+import { BrandMark } from '@/components/shell/BrandMark';
+import { NoOrganisation } from '@/components/shell/NoOrganisation';
+import { OrganisationSwitcher } from '@/components/shell/OrganisationSwitcher';
+import { SignOutButton } from '@/components/shell/SignOutButton';
+import { mailViewerEnabled } from '@/lib/mail';
+import { can } from '@/lib/permissions';
+import { currentMembership, requireUser } from '@/lib/session';
+
+/** Everything behind sign-in: header with the organisation, navigation, and the page. */
+export default async function AppLayout({ children }: { children: ReactNode }) {
+  const user = await requireUser();
+  const membership = await currentMembership(user);
+  const orgId = membership?.organisationId ?? 0;
+  const items: NavItem[] = [
+    { href: '/enclosures', label: 'Enclosures' },
+    ...(can(user, 'read', { kind: 'member', organisationId: orgId })
+      ? [{ href: '/keepers', label: 'Keepers' }]
+      : []),
+    { href: '/lamp-log', label: 'Lamp log' },
+    { href: '/species', label: 'Species' },
+    { href: '/lamp-catalogue', label: 'Lamp catalogue' },
+    ...(can(user, 'read', { kind: 'member', organisationId: orgId })
+      ? [{ href: '/members', label: 'Members' }]
+      : []),
+    ...(mailViewerEnabled() && can(user, 'read', { kind: 'mail', organisationId: orgId })
+      ? [{ href: '/mail', label: 'Mail (dev)' }]
+      : []),
+  ];
+  return (
+    <>
+      <header className="bg-basalt-900">
+        <div className="mx-auto max-w-6xl px-4 sm:px-6">
+          <div className="flex flex-wrap items-center justify-between gap-3 py-3">
+            <div className="flex items-center gap-4">
+              <BrandMark href="/enclosures" inverted />
+              {membership && <OrganisationSwitcher memberships={user.memberships} currentId={orgId} />}
+            </div>
+            <div className="flex items-center gap-3 text-body text-basalt-300">
+              <span className="hidden sm:inline" title={user.email}>
+                {user.name}
+                {membership && <span className="text-basalt-400"> · {membership.role}</span>}
+              </span>
+              <SignOutButton className="rounded px-2 py-1 text-body text-basalt-200 hover:bg-basalt-800 hover:text-white focus-visible:outline focus-visible:outline-2 focus-visible:outline-sky-400" />
+            </div>
+          </div>
+          {membership && <AppNav items={items} />}
+        </div>
+      </header>
+      <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-8 sm:px-6">
+        {membership ? children : <NoOrganisation />}
+      </main>
+    </>
+  );
+}

@@ -1,0 +1,17 @@
+import Link from 'next/link';
+import { button } from '@/components/ui/styles';
+
+export default function AppNotFound() {
+  return (
+    <div className="rounded-lg border border-basalt-200 bg-white p-8 text-center">
+      <h1 className="text-title">Not found</h1>
+      <p className="mx-auto mt-2 max-w-md text-body text-basalt-600">
+        It may have been deleted, or it belongs to another organisation or another keeper. Check the
+        organisation chosen at the top of the page.
+      </p>
+      <Link href="/enclosures" className={`${button.primary} mt-6`}>
+        Go to enclosures
+      </Link>
+    </div>
+  );
+}

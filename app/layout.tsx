@@ -1,0 +1,35 @@
+import type { Metadata } from 'next';
+import localFont from 'next/font/local';
+import type { ReactNode } from 'react';
+import { SafetyNote } from '@/components/shell/SafetyNote';
+import './globals.css';
+
+const inter = localFont({
+  src: '../node_modules/@fontsource-variable/inter/files/inter-latin-wght-normal.woff2',
+  variable: '--font-sans',
+  weight: '100 900',
+  display: 'swap',
+});
+
+export const metadata: Metadata = {
+  title: { default: 'Baskwell', template: '%s · Baskwell' },
+  description:
+    'Plan the light and heat of reptile and amphibian enclosures, check them against the species, and plan lamp replacements from meter readings.',
+};
+
+export default function RootLayout({ children }: { children: ReactNode }) {
+  return (
+    <html lang="en" className={inter.variable}>
+      <body className="flex min-h-screen flex-col">
+        <a
+          href="#main"
+          className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-white focus:px-3 focus:py-2 focus:text-basalt-900 focus:shadow"
+        >
+          Skip to content
+        </a>
+        <div className="flex flex-1 flex-col">{children}</div>
+        <SafetyNote />
+      </body>
+    </html>
+  );
+}

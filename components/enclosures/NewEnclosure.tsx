@@ -1,0 +1,55 @@
+'use client';
+
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import { sendJson } from '@/components/ui/api-client';
+import { button, card } from '@/components/ui/styles';
+import { EnclosureForm } from './EnclosureForm';
+import type { PersonOption } from './types';
+
+/** The "New enclosure" button and the form it opens. */
+export function NewEnclosure({
+  organisationId,
+  people,
+  startOpen = false,
+}: {
+  organisationId: number;
+  people?: PersonOption[];
+  startOpen?: boolean;
+}) {
+  const router = useRouter();
+  const [open, setOpen] = useState(startOpen);
+  const [created, setCreated] = useState('');
+  if (!open) {
+    return (
+      <div className="flex items-center gap-3">
+        {created && (
+          <span role="status" className="text-body text-moss-700">
+            Added “{created}”.
+          </span>
+        )}
+        <button type="button" className={button.primary} onClick={() => setOpen(true)}>
+          New enclosure
+        </button>
+      </div>
+    );
+  }
+  return (
+    <section aria-labelledby="new-enclosure" className={`${card} w-full p-5`}>
+      <h2 id="new-enclosure" className="mb-4 text-lead font-semibold">
+        New enclosure
+      </h2>
+      <EnclosureForm
+        people={people}
+        submitLabel="Add enclosure"
+        onCancel={() => setOpen(false)}
+        onSubmit={async (input) => {
+          await sendJson('POST', '/api/enclosures', { organisationId, ...input });
+          setCreated(input.name);
+          setOpen(false);
+          router.refresh();
+        }}
+      />
+    </section>
+  );
+}

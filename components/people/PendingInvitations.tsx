@@ -1,0 +1,65 @@
+'use client';
+
+import { useRouter } from 'next/navigation';
+import { useState } from 'react';
+import { fieldError, sendJson } from '@/components/ui/api-client';
+import { button } from '@/components/ui/styles';
+
+export type PendingInvitation = {
+  id: number;
+  email: string;
+  role: string;
+  expiresAt: string;
+  canRevoke: boolean;
+};
+
+/** Invitations not yet accepted, each with a way to withdraw it. */
+export function PendingInvitations({ invitations }: { invitations: PendingInvitation[] }) {
+  const router = useRouter();
+  const [error, setError] = useState('');
+  const [busyId, setBusyId] = useState<number | null>(null);
+  if (invitations.length === 0) return <p className="text-body text-basalt-500">No invitations waiting.</p>;
+  return (
+    <>
+      {error && (
+        <p role="alert" className="mb-2 text-body text-ember-700">
+          {error}
+        </p>
+      )}
+      <ul className="divide-y divide-basalt-100 rounded-lg border border-basalt-200 bg-white">
+        {invitations.map((inv) => (
+          <li key={inv.id} className="flex flex-wrap items-center justify-between gap-2 px-4 py-2">
+            <span>
+              <span className="font-medium">{inv.email}</span>{' '}
+              <span className="text-basalt-500">
+                · {inv.role} · until {inv.expiresAt.slice(0, 10)}
+              </span>
+            </span>
+            {inv.canRevoke && (
+              <button
+                type="button"
+                className={button.quietDanger}
+                disabled={busyId === inv.id}
+                aria-label={`Withdraw the invitation to ${inv.email}`}
+                onClick={async () => {
+                  setBusyId(inv.id);
+                  setError('');
+                  try {
+                    await sendJson('DELETE', `/api/invitations/${inv.id}`);
+                    router.refresh();
+                  } catch (e) {
+                    setError(fieldError(e).message);
+                  } finally {
+                    setBusyId(null);
+                  }
+                }}
+              >
+                Withdraw
+              </button>
+            )}
+          </li>
+        ))}
+      </ul>
+    </>
+  );
+}

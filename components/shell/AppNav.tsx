@@ -1,0 +1,33 @@
+'use client';
+
+import Link from 'next/link';
+import { usePathname } from 'next/navigation';
+import { focusRing } from '@/components/ui/styles';
+
+export type NavItem = { href: string; label: string };
+
+/** The areas of the app; the current one is marked for sight and for screen readers. */
+export function AppNav({ items }: { items: NavItem[] }) {
+  const pathname = usePathname();
+  return (
+    <nav aria-label="Main" className="-mb-px flex gap-1 overflow-x-auto">
+      {items.map((item) => {
+        const active = pathname === item.href || pathname.startsWith(`${item.href}/`);
+        return (
+          <Link
+            key={item.href}
+            href={item.href}
+            aria-current={active ? 'page' : undefined}
+            className={`whitespace-nowrap rounded-t-md border-b-2 px-3 py-2 text-body font-medium ${focusRing} ${
+              active
+                ? 'border-sand-400 text-white'
+                : 'border-transparent text-basalt-300 hover:border-basalt-500 hover:text-white'
+            }`}
+          >
+            {item.label}
+          </Link>
+        );
+      })}
+    </nav>
+  );
+}

@@ -1,0 +1,81 @@
+import { Op } from 'sequelize';
+import { getSequelize } from '@/lib/db';
+import { Enclosure, Invitation, Membership, User, type Role } from '@/models';
+import { enclosureCounts, enclosureJson } from './enclosures';
+import { invitationJson } from '@/lib/auth/invitations';
+
+/**
+ * Read models for the server-rendered pages. Callers check `can` first; these only fetch.
+ * Pages show at most PAGE_LIMIT rows and say so when there are more.
+ */
+export const PAGE_LIMIT = 500;
+
+export async function enclosureViews(organisationId: number, keeperId?: number) {
+  getSequelize();
+  const rows = await Enclosure.findAll({
+    where: { organisationId, ...(keeperId ? { keeperId } : {}) },
+    include: [{ model: User, as: 'keeper', attributes: ['id', 'name'] }],
+    order: [
+      ['name', 'ASC'],
+      ['id', 'ASC'],
+    ],
+    limit: PAGE_LIMIT + 1,
+  });
+  return { items: rows.slice(0, PAGE_LIMIT).map(enclosureJson), more: rows.length > PAGE_LIMIT };
+}
+
+export type MemberView = { userId: number; name: string; email: string; role: Role; joinedAt: string };
+
+export async function memberViews(organisationId: number, role?: Role): Promise<MemberView[]> {
+  getSequelize();
+  const rows = await Membership.findAll({
+    where: { organisationId, ...(role ? { role } : {}) },
+    include: [{ model: User, as: 'user', attributes: ['id', 'name', 'email'] }],
+    limit: PAGE_LIMIT,
+  });
+  return rows
+    .map((m) => {
+      const u = (m as Membership & { user?: User }).user;
+      return {
+        userId: m.userId,
+        name: u?.name ?? '',
+        email: u?.email ?? '',
+        role: m.role,
+        joinedAt: m.createdAt.toISOString(),
+      };
+    })
+    .sort((a, b) => a.name.localeCompare(b.name));
+}
+
+export async function keeperViews(organisationId: number) {
+  const keepers = await memberViews(organisationId, 'keeper');
+  const counts = await enclosureCounts(
+    organisationId,
+    keepers.map((k) => k.userId),
+  );
+  return keepers.map((k) => ({ ...k, enclosureCount: counts.get(k.userId) ?? 0 }));
+}
+
+export async function pendingInvitationViews(organisationId: number, role?: Role) {
+  getSequelize();
+  const rows = await Invitation.findAll({
+    where: {
+      organisationId,
+      acceptedAt: null,
+      revokedAt: null,
+      expiresAt: { [Op.gt]: new Date() },
+      ...(role ? { role } : {}),
+    },
+    order: [['createdAt', 'DESC']],
+    limit: PAGE_LIMIT,
+  });
+  return rows.map(invitationJson);
+}
+
+export async function enclosureView(id: number) {
+  getSequelize();
+  const e = await Enclosure.findByPk(id, {
+    include: [{ model: User, as: 'keeper', attributes: ['id', 'name'] }],
+  });
+  return e ? enclosureJson(e) : null;
+}
