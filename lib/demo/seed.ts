@@ -3,6 +3,7 @@ import type { Sequelize, Transaction } from 'sequelize';
 import { Enclosure, Membership, Organisation, User, initModels } from '@/models';
 import { DEMO_ORGANISATIONS, DEMO_PASSWORDS, type DemoOrganisation } from './scenario';
 import { seedStartingCatalogue } from '@/lib/species/seed';
+import { seedDemoLampLog } from './lamp-log';
 
 export type SeedResult = {
   created: { organisations: number; users: number; memberships: number; enclosures: number };
@@ -78,6 +79,8 @@ export async function seedDemo(sequelize: Sequelize): Promise<SeedResult> {
         }
       }
     }
+    // Invented lamps and meter readings for the lamp log (lib/demo/lamp-log.ts).
+    await seedDemoLampLog(transaction);
   });
   return { created };
 }

@@ -245,7 +245,11 @@ export function lampOutlook(
       reasons.push(lastReading ? `A new reading is due on ${testDueOn}.` : 'No reading yet: measure it.');
     } else if (fallsBelowEarliestOn && fallsBelowEarliestOn <= isoDay(dayNumber(today) + 60)) {
       status = 'test-soon';
-      reasons.push(`The fit is uncertain: it could fall below the need as early as ${fallsBelowEarliestOn}.`);
+      reasons.push(
+        fallsBelowEarliestOn <= today
+          ? 'It may already be below the need (within the fit’s uncertainty): measure it now.'
+          : `Within the fit’s uncertainty it could fall below the need as early as ${fallsBelowEarliestOn}: measure it before then.`,
+      );
     } else if (fit.certainty === 'uncertain') {
       reasons.push('Few readings: the curve is uncertain. More readings make the dates firmer.');
     }

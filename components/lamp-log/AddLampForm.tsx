@@ -1,0 +1,155 @@
+'use client';
+
+import { useRouter } from 'next/navigation';
+import { useState, type FormEvent } from 'react';
+import { fieldError, sendJson } from '@/components/ui/api-client';
+import { Field } from '@/components/ui/Field';
+import { Notice } from '@/components/ui/Notice';
+import { Select } from '@/components/ui/Select';
+import { button } from '@/components/ui/styles';
+import { useLengthUnit } from '@/components/ui/units';
+
+export type LampTypeOption = { id: number; name: string; tech: string; uvbAt30: number };
+export type DesignLampOption = { objectId: string; label: string };
+
+const today = () => new Date().toISOString().slice(0, 10);
+
+/** Logs a lamp installed in this enclosure. */
+export function AddLampForm({
+  enclosureId,
+  lampTypes,
+  designLamps,
+}: {
+  enclosureId: number;
+  lampTypes: LampTypeOption[];
+  designLamps: DesignLampOption[];
+}) {
+  const router = useRouter();
+  const [unit] = useLengthUnit();
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<{ field?: string; message: string } | null>(null);
+  const [between, setBetween] = useState('none');
+
+  async function submit(e: FormEvent<HTMLFormElement>) {
+    e.preventDefault();
+    const form = new FormData(e.currentTarget);
+    const text = (k: string) => String(form.get(k) ?? '').trim();
+    const num = (k: string) => (text(k) === '' ? undefined : Number(text(k)));
+    setBusy(true);
+    setError(null);
+    try {
+      await sendJson('POST', `/api/enclosures/${enclosureId}/lamps`, {
+        lampTypeId: num('lampTypeId'),
+        label: text('label'),
+        firstUsedOn: text('firstUsedOn'),
+        hoursPerDay: num('hoursPerDay'),
+        baskingDistance: num('baskingDistance') ?? null,
+        baskingTransmission:
+          between === 'none' ? null : between === 'custom' ? num('customTransmission') : Number(between),
+        designObjectId: text('designObjectId') || null,
+        lengthUnit: unit,
+      });
+      (e.target as HTMLFormElement).reset();
+      setBetween('none');
+      router.refresh();
+    } catch (err) {
+      setError(fieldError(err));
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  const err = (f: string) => (error?.field === f ? error.message : null);
+  return (
+    <form onSubmit={submit} className="space-y-3" aria-label="Add a lamp" noValidate>
+      <div className="grid gap-3 sm:grid-cols-2">
+        <Field label="Name" name="label" placeholder="e.g. Basking tube" required error={err('label')} />
+        <Select label="Lamp type" name="lampTypeId" required error={err('lampTypeId')} defaultValue="">
+          <option value="" disabled>
+            Choose from the lamp catalogue…
+          </option>
+          {lampTypes.map((t) => (
+            <option key={t.id} value={t.id}>
+              {t.name}
+              {t.uvbAt30 > 0 ? '' : ' (no UV)'}
+            </option>
+          ))}
+        </Select>
+        <Field
+          label="First switched on"
+          name="firstUsedOn"
+          type="date"
+          defaultValue={today()}
+          max={today()}
+          required
+          error={err('firstUsedOn')}
+        />
+        <Field
+          label="Hours a day"
+          name="hoursPerDay"
+          type="number"
+          step="0.5"
+          min="0.5"
+          max="24"
+          defaultValue="12"
+          required
+          error={err('hoursPerDay')}
+        />
+        <Field
+          label={`Lamp to basking spot (${unit})`}
+          name="baskingDistance"
+          type="number"
+          step="any"
+          min="0"
+          hint="Leave empty to use the distance of the latest reading."
+          error={err('baskingDistance')}
+        />
+        <Select
+          label="Between lamp and basking spot"
+          name="between"
+          value={between}
+          onChange={(e) => setBetween(e.target.value)}
+          error={err('baskingTransmission')}
+        >
+          <option value="none">Nothing (lamp inside, no mesh)</option>
+          <option value="0.6">Fine mesh lid (passes about 60 %)</option>
+          <option value="0.5">Dense mesh lid (passes about 50 %)</option>
+          <option value="custom">Other — I know the share…</option>
+        </Select>
+        {between === 'custom' && (
+          <Field
+            label="Share of UVB passing (0–1)"
+            name="customTransmission"
+            type="number"
+            step="0.01"
+            min="0.01"
+            max="1"
+            required
+            error={err('baskingTransmission')}
+          />
+        )}
+        <Select
+          label="Lamp in the design (for calibration)"
+          name="designObjectId"
+          defaultValue=""
+          error={err('designObjectId')}
+        >
+          <option value="">Not linked</option>
+          {designLamps.map((d) => (
+            <option key={d.objectId} value={d.objectId}>
+              {d.label}
+            </option>
+          ))}
+        </Select>
+      </div>
+      <p className="text-caption text-basalt-500">
+        Mesh shares are typical open areas of woven mesh (ISO 9044); screens can cut UVB by as much as half.
+        Measure through your own lid to be sure.
+      </p>
+      {error && <Notice tone="error">{error.message}</Notice>}
+      <button type="submit" className={button.primary} disabled={busy || lampTypes.length === 0}>
+        {busy ? 'Adding…' : 'Add lamp'}
+      </button>
+    </form>
+  );
+}

@@ -1,0 +1,158 @@
+'use client';
+
+import { useRouter } from 'next/navigation';
+import { useState, type FormEvent } from 'react';
+import { fieldError, sendJson } from '@/components/ui/api-client';
+import { Field } from '@/components/ui/Field';
+import { Notice } from '@/components/ui/Notice';
+import { Select } from '@/components/ui/Select';
+import { button } from '@/components/ui/styles';
+import { fromCm, useLengthUnit } from '@/components/ui/units';
+import type { LampSummary } from '@/lib/lamp-log/store';
+import type { DesignLampOption } from './AddLampForm';
+
+/** Edit a lamp, retire it (its readings stay), or delete one logged by mistake. */
+export function LampSettings({
+  lamp,
+  designLamps,
+  canDelete,
+}: {
+  lamp: LampSummary;
+  designLamps: DesignLampOption[];
+  canDelete: boolean;
+}) {
+  const router = useRouter();
+  const [unit] = useLengthUnit();
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<{ field?: string; message: string } | null>(null);
+  const [saved, setSaved] = useState(false);
+
+  async function submit(e: FormEvent<HTMLFormElement>) {
+    e.preventDefault();
+    const form = new FormData(e.currentTarget);
+    const text = (k: string) => String(form.get(k) ?? '').trim();
+    setBusy(true);
+    setError(null);
+    setSaved(false);
+    try {
+      await sendJson('PATCH', `/api/lamps/${lamp.id}`, {
+        label: text('label'),
+        hoursPerDay: Number(text('hoursPerDay')),
+        firstUsedOn: text('firstUsedOn'),
+        baskingDistance: text('baskingDistance') === '' ? null : Number(text('baskingDistance')),
+        baskingTransmission: text('baskingTransmission') === '' ? null : Number(text('baskingTransmission')),
+        designObjectId: text('designObjectId') || null,
+        retiredOn: text('retiredOn') || null,
+        lengthUnit: unit,
+      });
+      setSaved(true);
+      router.refresh();
+    } catch (err) {
+      setError(fieldError(err));
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  async function remove() {
+    if (
+      !window.confirm(`Delete “${lamp.label}” and all its readings? To keep its history, retire it instead.`)
+    )
+      return;
+    try {
+      await sendJson('DELETE', `/api/lamps/${lamp.id}`);
+      router.push(`/enclosures/${lamp.enclosure.id}/lamps`);
+      router.refresh();
+    } catch (err) {
+      setError(fieldError(err));
+    }
+  }
+
+  const err = (f: string) => (error?.field === f ? error.message : null);
+  const links =
+    designLamps.some((d) => d.objectId === lamp.designObjectId) || !lamp.designObjectId
+      ? designLamps
+      : [
+          { objectId: lamp.designObjectId, label: `${lamp.designObjectId} (not in any design now)` },
+          ...designLamps,
+        ];
+  return (
+    <form onSubmit={submit} className="space-y-3" aria-label="Lamp settings" noValidate>
+      <div className="grid gap-3 sm:grid-cols-2">
+        <Field label="Name" name="label" defaultValue={lamp.label} required error={err('label')} />
+        <Field
+          label="First switched on"
+          name="firstUsedOn"
+          type="date"
+          defaultValue={lamp.firstUsedOn}
+          error={err('firstUsedOn')}
+        />
+        <Field
+          label="Hours a day"
+          name="hoursPerDay"
+          type="number"
+          step="0.5"
+          min="0.5"
+          max="24"
+          defaultValue={lamp.hoursPerDay}
+          error={err('hoursPerDay')}
+        />
+        <Field
+          key={unit}
+          label={`Lamp to basking spot (${unit})`}
+          name="baskingDistance"
+          type="number"
+          step="any"
+          defaultValue={
+            lamp.baskingDistanceCm === null ? '' : Number(fromCm(lamp.baskingDistanceCm, unit).toFixed(1))
+          }
+          error={err('baskingDistance')}
+        />
+        <Field
+          label="Share of UVB passing between (0–1)"
+          name="baskingTransmission"
+          type="number"
+          step="0.01"
+          min="0.01"
+          max="1"
+          defaultValue={lamp.baskingTransmission ?? ''}
+          hint="Empty: nothing in between. A mesh lid passes about 0.5–0.7."
+          error={err('baskingTransmission')}
+        />
+        <Select
+          label="Lamp in the design"
+          name="designObjectId"
+          defaultValue={lamp.designObjectId ?? ''}
+          error={err('designObjectId')}
+        >
+          <option value="">Not linked</option>
+          {links.map((d) => (
+            <option key={d.objectId} value={d.objectId}>
+              {d.label}
+            </option>
+          ))}
+        </Select>
+        <Field
+          label="Retired on"
+          name="retiredOn"
+          type="date"
+          defaultValue={lamp.retiredOn ?? ''}
+          hint="Set when the lamp comes out; its readings stay."
+          error={err('retiredOn')}
+        />
+      </div>
+      {error && <Notice tone="error">{error.message}</Notice>}
+      {saved && <Notice tone="success">Saved.</Notice>}
+      <div className="flex flex-wrap gap-2">
+        <button type="submit" className={button.primary} disabled={busy}>
+          {busy ? 'Saving…' : 'Save'}
+        </button>
+        {canDelete && (
+          <button type="button" className={button.quietDanger} onClick={remove}>
+            Delete lamp
+          </button>
+        )}
+      </div>
+    </form>
+  );
+}

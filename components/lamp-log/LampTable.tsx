@@ -1,0 +1,128 @@
+'use client';
+
+import Link from 'next/link';
+import { link } from '@/components/ui/styles';
+import { formatLength, useLengthUnit } from '@/components/ui/units';
+import type { LampSummary } from '@/lib/lamp-log/store';
+import { formatAge, formatDay, formatValue, STATUS_ORDER } from './format';
+import { StatusBadge } from './StatusBadge';
+
+/**
+ * The lamp log table: one row per lamp with its age, last reading, fitted remaining output, the date the
+ * basking zone falls below the species' need (or what is missing to say), and its status.
+ */
+export function LampTable({ lamps, showEnclosure }: { lamps: LampSummary[]; showEnclosure: boolean }) {
+  const [unit] = useLengthUnit();
+  const rows = [...lamps].sort(
+    (a, b) => STATUS_ORDER[a.status] - STATUS_ORDER[b.status] || a.label.localeCompare(b.label),
+  );
+  return (
+    <div className="overflow-x-auto rounded-lg border border-basalt-200 bg-white">
+      <table className="min-w-full divide-y divide-basalt-200 text-left text-body" data-testid="lamp-table">
+        <caption className="sr-only">Lamps, most urgent first</caption>
+        <thead className="bg-basalt-50 text-caption uppercase tracking-wide text-basalt-600">
+          <tr>
+            <th scope="col" className="px-4 py-2 font-semibold">
+              Lamp
+            </th>
+            {showEnclosure && (
+              <th scope="col" className="px-4 py-2 font-semibold">
+                Enclosure
+              </th>
+            )}
+            <th scope="col" className="px-4 py-2 font-semibold">
+              Age
+            </th>
+            <th scope="col" className="px-4 py-2 font-semibold">
+              Last reading
+            </th>
+            <th
+              scope="col"
+              className="px-4 py-2 font-semibold"
+              title="Fitted output today as a share of the output when new"
+            >
+              Output left
+            </th>
+            <th scope="col" className="px-4 py-2 font-semibold">
+              Basking zone below need
+            </th>
+            <th scope="col" className="px-4 py-2 font-semibold">
+              Status
+            </th>
+          </tr>
+        </thead>
+        <tbody className="divide-y divide-basalt-100">
+          {rows.map((l) => (
+            <tr key={l.id} className="align-top hover:bg-basalt-50">
+              <td className="px-4 py-3">
+                <Link href={`/lamp-log/${l.id}`} className={link}>
+                  {l.label}
+                </Link>
+                <div className="text-caption text-basalt-500">{l.lampType.name}</div>
+              </td>
+              {showEnclosure && (
+                <td className="px-4 py-3">
+                  <Link href={`/enclosures/${l.enclosure.id}/lamps`} className={link}>
+                    {l.enclosure.name}
+                  </Link>
+                  {l.enclosure.speciesName && (
+                    <div className="text-caption text-basalt-500">{l.enclosure.speciesName}</div>
+                  )}
+                </td>
+              )}
+              <td className="whitespace-nowrap px-4 py-3 tabular-nums text-basalt-700">
+                {formatAge(l.ageDays)}
+                <div className="text-caption text-basalt-500">{l.hoursPerDay} h a day</div>
+              </td>
+              <td className="whitespace-nowrap px-4 py-3 tabular-nums text-basalt-700">
+                {l.lastReading ? (
+                  <>
+                    {formatValue(l.lastReading.value, l.lastReading.unit)}
+                    <div className="text-caption text-basalt-500">
+                      at {formatLength(l.lastReading.distanceCm, unit)} {unit},{' '}
+                      {formatDay(l.lastReading.takenAt)}
+                    </div>
+                  </>
+                ) : (
+                  <span className="text-basalt-400">None yet</span>
+                )}
+              </td>
+              <td className="whitespace-nowrap px-4 py-3 tabular-nums text-basalt-700">
+                {l.status === 'heat-only' ? '—' : `${Math.round(l.remainingFraction * 100)} %`}
+                <div className="text-caption text-basalt-500">
+                  {l.fit.kind === 'none'
+                    ? 'usual curve'
+                    : l.fit.certainty === 'fitted'
+                      ? 'fitted'
+                      : 'uncertain'}
+                </div>
+              </td>
+              <td className="px-4 py-3 text-basalt-700">
+                {l.fallsBelowOn ? (
+                  <>
+                    <span className="tabular-nums">{formatDay(l.fallsBelowOn)}</span>
+                    {l.fallsBelowEarliestOn && l.fallsBelowEarliestOn < l.fallsBelowOn && (
+                      <div className="text-caption text-basalt-500">
+                        as early as {formatDay(l.fallsBelowEarliestOn)}
+                      </div>
+                    )}
+                  </>
+                ) : l.basking ? (
+                  <span className="text-basalt-500">Not within 5 years</span>
+                ) : l.missing.length > 0 && l.status !== 'retired' && l.status !== 'heat-only' ? (
+                  <span className="text-caption text-basalt-500">Needs {l.missing.join('; ')}</span>
+                ) : (
+                  <span className="text-basalt-400">—</span>
+                )}
+              </td>
+              <td className="px-4 py-3">
+                <StatusBadge status={l.status} label={l.statusLabel} />
+                <div className="mt-1 max-w-56 text-caption text-basalt-500">{l.reasons[0]}</div>
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}

@@ -1,0 +1,50 @@
+/** Display helpers of the lamp log (no React, usable on server and client). */
+import type { Status } from '@/lib/lamp-log/outlook';
+
+export type ReadingUnit = 'uvb' | 'uvi';
+
+export const UNIT_LABEL: Record<ReadingUnit, string> = { uvb: 'µW/cm²', uvi: 'UVI' };
+export const UNIT_NAME: Record<ReadingUnit, string> = { uvb: 'UVB (µW/cm²)', uvi: 'UV Index' };
+
+export function formatValue(v: number | null | undefined, unit: ReadingUnit | null): string {
+  if (v === null || v === undefined || !Number.isFinite(v)) return '—';
+  const digits = unit === 'uvi' ? (v < 10 ? 2 : 1) : v < 10 ? 1 : 0;
+  return `${v.toFixed(digits)}${unit ? ` ${UNIT_LABEL[unit]}` : ''}`;
+}
+
+export function formatAge(days: number): string {
+  if (days < 60) return `${days} day${days === 1 ? '' : 's'}`;
+  const months = days / (365.25 / 12);
+  if (months < 24) return `${months.toFixed(1)} months`;
+  return `${(months / 12).toFixed(1)} years`;
+}
+
+const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
+
+/** 2025-03-01 → "1 Mar 2025" (UTC, so the date never moves with the viewer's time zone). */
+export function formatDay(iso: string | null | undefined): string {
+  if (!iso) return '—';
+  const d = new Date(iso.length === 10 ? `${iso}T00:00:00Z` : iso);
+  if (Number.isNaN(d.getTime())) return iso;
+  return `${d.getUTCDate()} ${MONTHS[d.getUTCMonth()]} ${d.getUTCFullYear()}`;
+}
+
+export function formatMonthYear(d: Date): string {
+  return `${MONTHS[d.getUTCMonth()]} ${d.getUTCFullYear()}`;
+}
+
+export const STATUS_ORDER: Record<Status, number> = {
+  replace: 0,
+  'test-soon': 1,
+  fine: 2,
+  'heat-only': 3,
+  retired: 4,
+};
+
+export const STATUS_STYLE: Record<Status, string> = {
+  replace: 'bg-ember-100 text-ember-800 ring-ember-300',
+  'test-soon': 'bg-sand-100 text-sand-900 ring-sand-300',
+  fine: 'bg-moss-100 text-moss-800 ring-moss-300',
+  'heat-only': 'bg-basalt-100 text-basalt-700 ring-basalt-300',
+  retired: 'bg-basalt-100 text-basalt-500 ring-basalt-200',
+};

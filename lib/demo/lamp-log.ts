@@ -1,0 +1,158 @@
+import type { Transaction } from 'sequelize';
+import { addDays, todayIso } from '@/lib/lamp-log/dates';
+import { Enclosure, Lamp, LampType, Organisation, Reading } from '@/models';
+import { DEMO_HOUSEHOLD, DEMO_SHOP } from './scenario';
+
+/**
+ * Invented lamps and meter readings for the demo enclosures, so the lamp log has something to show: a
+ * worn basking tube heading for replacement, a healthy one, a lamp with a single reading (uncertain),
+ * a heat lamp with no UV. Dates are relative to the day of seeding; all values are invented demo data.
+ * Only enclosures with no lamps at all get them, so nothing a user logged is touched.
+ */
+
+type DemoReading = { daysAgo: number; distanceCm: number; value: number; unit: 'uvb' | 'uvi'; note?: string };
+type DemoLamp = {
+  organisation: string;
+  enclosure: string;
+  label: string;
+  /** The catalogue entry's preset (see lib/lamp-types/starting-lamp-types.ts). */
+  presetKey: string;
+  startedDaysAgo: number;
+  hoursPerDay: number;
+  baskingDistanceCm: number | null;
+  baskingTransmission: number | null;
+  designObjectId?: string;
+  readings: DemoReading[];
+};
+
+const METER_UVB = 'Broadband UVB meter (shop)';
+const METER_UVI = 'UV Index meter (shop)';
+
+export const DEMO_LAMPS: readonly DemoLamp[] = [
+  {
+    organisation: DEMO_SHOP.name,
+    enclosure: 'Desert vivarium',
+    label: 'Basking tube',
+    presetKey: 't5-high',
+    startedDaysAgo: 330,
+    hoursPerDay: 12,
+    baskingDistanceCm: 30,
+    baskingTransmission: null,
+    designObjectId: 'uv1',
+    readings: [
+      { daysAgo: 330, distanceCm: 30, value: 46.2, unit: 'uvb', note: 'new, first evening' },
+      { daysAgo: 330, distanceCm: 30, value: 1.85, unit: 'uvi' },
+      { daysAgo: 270, distanceCm: 30, value: 40.9, unit: 'uvb' },
+      { daysAgo: 200, distanceCm: 25, value: 43.0, unit: 'uvb', note: 'meter on the basking rock' },
+      { daysAgo: 140, distanceCm: 30, value: 33.6, unit: 'uvb' },
+      { daysAgo: 140, distanceCm: 30, value: 1.33, unit: 'uvi' },
+      { daysAgo: 75, distanceCm: 30, value: 30.1, unit: 'uvb' },
+      { daysAgo: 20, distanceCm: 30, value: 27.4, unit: 'uvb' },
+    ],
+  },
+  {
+    organisation: DEMO_SHOP.name,
+    enclosure: 'Desert vivarium',
+    label: 'Heat spot',
+    presetKey: 'halogen-75',
+    startedDaysAgo: 120,
+    hoursPerDay: 10,
+    baskingDistanceCm: null,
+    baskingTransmission: null,
+    readings: [],
+  },
+  {
+    organisation: DEMO_SHOP.name,
+    enclosure: 'Gecko tank',
+    label: 'UV tube',
+    presetKey: 't5-medium',
+    startedDaysAgo: 100,
+    hoursPerDay: 12,
+    baskingDistanceCm: 20,
+    baskingTransmission: 0.6,
+    readings: [
+      { daysAgo: 95, distanceCm: 20, value: 41.8, unit: 'uvb', note: 'straight below the tube, lid off' },
+    ],
+  },
+  {
+    organisation: DEMO_SHOP.name,
+    enclosure: 'Tall mesh cage',
+    label: 'Top tube',
+    presetKey: 't5-very-high',
+    startedDaysAgo: 45,
+    hoursPerDay: 12,
+    baskingDistanceCm: 12,
+    baskingTransmission: 0.6,
+    readings: [
+      { daysAgo: 45, distanceCm: 15, value: 149, unit: 'uvb', note: 'new' },
+      { daysAgo: 45, distanceCm: 15, value: 6.1, unit: 'uvi' },
+      { daysAgo: 21, distanceCm: 15, value: 146, unit: 'uvb' },
+      { daysAgo: 3, distanceCm: 20, value: 104, unit: 'uvb' },
+    ],
+  },
+  {
+    organisation: DEMO_HOUSEHOLD.name,
+    enclosure: 'Python vivarium',
+    label: 'Low UV tube',
+    presetKey: 't5-low',
+    startedDaysAgo: 400,
+    hoursPerDay: 10,
+    baskingDistanceCm: 35,
+    baskingTransmission: null,
+    readings: [{ daysAgo: 380, distanceCm: 30, value: 5.1, unit: 'uvb' }],
+  },
+];
+
+export async function seedDemoLampLog(transaction: Transaction): Promise<number> {
+  const today = todayIso();
+  let created = 0;
+  const done = new Set<number>();
+  for (const demo of DEMO_LAMPS) {
+    const organisation = await Organisation.findOne({ where: { name: demo.organisation }, transaction });
+    if (!organisation) continue;
+    const enclosure = await Enclosure.findOne({
+      where: { organisationId: organisation.id, name: demo.enclosure },
+      order: [['id', 'ASC']],
+      transaction,
+    });
+    if (!enclosure) continue;
+    if (!done.has(enclosure.id)) {
+      if ((await Lamp.count({ where: { enclosureId: enclosure.id }, transaction })) > 0) continue;
+      done.add(enclosure.id);
+    }
+    const type = await LampType.findOne({
+      where: { organisationId: organisation.id, presetKey: demo.presetKey },
+      transaction,
+    });
+    if (!type) continue;
+    const lamp = await Lamp.create(
+      {
+        enclosureId: enclosure.id,
+        lampTypeId: type.id,
+        label: demo.label,
+        designObjectId: demo.designObjectId ?? null,
+        firstUsedOn: addDays(today, -demo.startedDaysAgo),
+        hoursPerDay: demo.hoursPerDay,
+        baskingDistanceCm: demo.baskingDistanceCm,
+        baskingTransmission: demo.baskingTransmission,
+        createdById: null,
+      },
+      { transaction },
+    );
+    created++;
+    await Reading.bulkCreate(
+      demo.readings.map((r) => ({
+        lampId: lamp.id,
+        takenAt: new Date(`${addDays(today, -r.daysAgo)}T${r.unit === 'uvi' ? '18:05' : '18:00'}:00Z`),
+        distanceCm: r.distanceCm,
+        value: r.value,
+        unit: r.unit,
+        meter: r.unit === 'uvi' ? METER_UVI : METER_UVB,
+        note: r.note ?? null,
+        takenById: null,
+      })),
+      { transaction },
+    );
+  }
+  return created;
+}
