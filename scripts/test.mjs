@@ -139,7 +139,7 @@ async function main() {
     PORT: String(appPort),
     APP_URL: appUrl,
     NEXTAUTH_URL: appUrl,
-    BASE_URL: appUrl,
+    E2E_BASE_URL: appUrl,
     NEXTAUTH_SECRET: env.TEST_NEXTAUTH_SECRET || 'baskwell-test-only-secret-0123456789abcdefghijklmnop',
     NEXT_TELEMETRY_DISABLED: '1',
     S3_ENDPOINT: `http://127.0.0.1:${s3Port}`,

@@ -1,11 +1,12 @@
 // Browser test harness: Debian's Chromium driven by playwright-core against the app that scripts/test.mjs
-// builds and serves (BASE_URL) on the test database with the demo scenario.
+// builds and serves (E2E_BASE_URL) on the test database with the demo scenario.
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { afterAll, afterEach, beforeAll, beforeEach, expect } from 'vitest';
 
-export const BASE_URL = process.env.BASE_URL ?? 'http://localhost:3100';
+// Not BASE_URL: vitest sets that one to Vite's base path ('/').
+export const BASE_URL = process.env.E2E_BASE_URL ?? 'http://localhost:3100';
 export const CHROMIUM_PATH = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 export const SCREENSHOT_DIR = path.resolve(import.meta.dirname, '..', '..', 'test-results', 'screenshots');
 
