@@ -1,0 +1,91 @@
+import type { Finding } from '@/simulation';
+import { UV_ZONES } from '@/simulation';
+import { targetWarning } from '@/lib/species/consistency';
+import { baskingZone, hideBox, lampY, type EnclosureInput, type Lid } from './layout';
+import type { Proposal } from './propose';
+
+/**
+ * Why the guided start proposes what it proposes, in plain language with the numbers behind it: which
+ * lamp, where it hangs, what the basking spot gets, how hot it is, where the UV-free refuge is, and what
+ * could not be met and why. Every figure is an estimate to verify with a meter and a thermometer.
+ */
+
+export type Explanation = { heading: string; text: string }[];
+
+const f1 = (v: number) => (Math.round(v * 10) / 10).toString();
+const f0 = (v: number) => Math.round(v).toString();
+const num = (f: Finding | undefined, k: string) => f?.numbers[k];
+
+export function explain(
+  p: Proposal,
+  species: { name: string; uvZone: 1 | 2 | 3 | 4; uvbTargetUw?: [number, number] },
+  enc: EnclosureInput,
+  lid: Lid,
+): Explanation {
+  const c = p.candidate;
+  const find = (id: string) => p.assessment.findings.find((f) => f.id === id);
+  const basking = find('basking-uvi');
+  const hot = find('hot-spot');
+  const cool = find('cool-end');
+  const refuge = find('uv-refuge');
+  const zone = UV_ZONES[species.uvZone];
+  const uvY = lampY(enc, lid, c.mount, c.uv.form);
+  const where =
+    c.mount === 'inside'
+      ? 'hung inside, just under the lid'
+      : lid === 'open'
+        ? 'on a stand above the open top'
+        : `resting on the ${lid} lid`;
+  const out: Explanation = [];
+
+  out.push({
+    heading: 'UV lamp',
+    text:
+      `${c.uv.name}${c.reflector ? ' with a reflector' : ''}, ${where}, over the warm side. ` +
+      `The basking perch top is ${f1(c.perchTopCm)} cm above the floor, about ${f0(uvY - c.perchTopCm)} cm below the lamp` +
+      (lid === 'mesh' && c.mount === 'above' ? '; the mesh between them takes part of the UVB.' : '.'),
+  });
+  const maxUvi = num(basking, 'maxUvi');
+  if (maxUvi !== undefined) {
+    out.push({
+      heading: 'Basking UV',
+      text:
+        `About UV Index ${f1(maxUvi)} at the basking spot; ${species.name} is a ${zone.label} species, ` +
+        `whose basking range is UV Index ${zone.max[0]}–${zone.max[1]} (Ferguson et al. 2010).` +
+        (basking?.status === 'pass' ? '' : ' This is outside that range — see below.'),
+    });
+  }
+  const hotC = num(hot, 'hotC');
+  if (hotC !== undefined) {
+    out.push({
+      heading: 'Heat',
+      text:
+        (c.heat
+          ? `${c.heat.name} beside the UV lamp over the same perch. `
+          : `No separate heat lamp: the ${c.uv.name.toLowerCase()} gives the basking heat itself. `) +
+        `The hottest surface the animal can reach is about ${f1(hotC)} °C (the sheet asks ${f1(num(hot, 'targetLo')!)}–${f1(num(hot, 'targetHi')!)} °C). Run every heat source on a thermostat.`,
+    });
+  }
+  const hide = hideBox(enc);
+  const zoneX = baskingZone(enc).x;
+  out.push({
+    heading: 'Refuge',
+    text:
+      `A hide on the cool side (${f0(hide.x)}–${f0(hide.x + hide.width)} cm from the left, the lamps are at about ${f0(zoneX)} cm) gives shade without UV` +
+      (refuge
+        ? `; about ${f0(num(refuge, 'refugeCm') ?? 0)} cm of reachable surface is below UV Index 0.1`
+        : '') +
+      (cool
+        ? `. The coolest reachable surface is about ${f1(num(cool, 'coolC')!)} °C at a room temperature of ${f1(enc.roomTempC)} °C.`
+        : '.'),
+  });
+  for (const f of p.unmet) {
+    let text = f.message;
+    if (f.id === 'basking-uvb' && species.uvbTargetUw) {
+      const w = targetWarning(species.uvZone, { min: species.uvbTargetUw[0], max: species.uvbTargetUw[1] });
+      if (w) text = `${f.message} ${w}`;
+    }
+    out.push({ heading: `Not met: ${f.title}`, text });
+  }
+  return out;
+}
