@@ -222,7 +222,12 @@ async function main() {
       await seed(testEnv);
     });
     // A build folder of its own, so a running `npm start` keeps serving its build.
-    const browserEnv = { ...testEnv, NEXT_DIST_DIR: '.next/test-build' };
+    const browserEnv = {
+      ...testEnv,
+      NEXT_DIST_DIR: '.next/test-build',
+      // The tsc step above already checked the types (and failed the run if they are wrong).
+      NEXT_SKIP_TYPECHECK: wanted('tsc') ? '1' : '0',
+    };
     let appStarted = false;
     const nextLog = path.join(RESULTS_DIR, 'next.log');
     await step('browser: next build', () => run(bin('next'), ['build'], { env: browserEnv }));

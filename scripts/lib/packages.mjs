@@ -101,7 +101,8 @@ export async function ensureApt(wanted, { quiet = false } = {}) {
     await exec(['update', '-q']);
     aptUpdated = true;
   }
-  await exec(['install', '-y', '-q', '--no-install-recommends', ...missing]);
+  // Waits for a dpkg lock held by another apt run instead of failing at once.
+  await exec(['install', '-y', '-q', '-o', 'DPkg::Lock::Timeout=300', '--no-install-recommends', ...missing]);
   const still = Object.entries(wanted).filter(([prog]) => !findProgram(prog));
   if (still.length)
     throw new Error(`installed ${missing.join(', ')} but ${still.map(([p]) => p).join(', ')} still missing`);
