@@ -1,0 +1,107 @@
+import type { Assessment, Design } from '@/simulation';
+
+/**
+ * The standing cautions of the product, in plain language, and which of them apply to a design. Shared by
+ * the species pages, the lamp catalogue, the guided start, the studio and reports.
+ */
+
+export type CautionId = 'uv-eyes-skin' | 'burns' | 'fire' | 'thermostat' | 'estimate';
+
+export type Caution = {
+  id: CautionId;
+  title: string;
+  text: string;
+  /** Where the caution comes from: a published source, or common practice. */
+  source: string;
+};
+
+export const CAUTIONS: Record<CautionId, Caution> = {
+  'uv-eyes-skin': {
+    id: 'uv-eyes-skin',
+    title: 'UV can injure eyes and skin',
+    text:
+      'Unsuitable or badly placed UV lamps have caused inflamed, closed eyes (photokeratoconjunctivitis) and burnt skin ' +
+      '(photodermatitis) in captive reptiles. Mount UV lamps overhead, not at eye level, keep the basking spot at the ' +
+      'distance the lamp needs, and never look into a UV lamp yourself. If an animal keeps its eyes shut or its skin ' +
+      'reddens or peels, switch the lamp off and see a reptile-experienced vet.',
+    source: 'Gardiner, Baines & Pandher 2009, J. Zoo Wildl. Med. 40:757',
+  },
+  burns: {
+    id: 'burns',
+    title: 'Lamps within reach burn',
+    text:
+      'Animals do not always move away from a hot surface. Keep heat and UV lamps out of reach — behind a mesh guard or ' +
+      'above the lid — and check that climbing animals cannot get to them from a branch, a décor item or the mesh.',
+    source: 'common practice, no published source',
+  },
+  fire: {
+    id: 'fire',
+    title: 'Heat sources can start fires',
+    text:
+      'Use lamp holders rated for the lamp’s heat (ceramic for heat lamps and emitters), keep bulbs clear of wood, ' +
+      'plants, paper and plastic, and follow the lamp maker’s instructions and local electrical and fire codes. Have ' +
+      'fixed wiring done by a licensed electrician.',
+    source: 'common practice, no published source',
+  },
+  thermostat: {
+    id: 'thermostat',
+    title: 'Run every heat source on a thermostat',
+    text:
+      'A dimming thermostat for lamps (an on/off one for emitters and mats), its probe at the basking spot, protects ' +
+      'against overheating on a warm day and against a wrong estimate. Check its setting with a thermometer.',
+    source: 'common practice, no published source',
+  },
+  estimate: {
+    id: 'estimate',
+    title: 'Every figure is an estimate',
+    text:
+      'The UV and temperature figures are computed from a model and catalogue values, not measured. Verify them in the ' +
+      'enclosure with a UV meter and a thermometer (an infrared one for surfaces) before an animal lives with them, and ' +
+      'defer to a reptile-experienced vet and to local codes.',
+    source: 'common practice, no published source',
+  },
+};
+
+const UV_TECHS = new Set(['t5', 't8', 'compact', 'mercury-vapour', 'metal-halide', 'led-uvb']);
+
+export type CautionInput = {
+  design?: Pick<Design, 'objects'> | null;
+  assessment?: Pick<Assessment, 'findings'> | null;
+  /** Technologies involved when there is no design (a lamp type page, a lamp in the log). */
+  techs?: string[];
+};
+
+/** Which cautions apply, and whether the assessment found the matching problem (`urgent`). */
+export function applicableCautions(input: CautionInput): { caution: Caution; urgent: boolean }[] {
+  const techs = new Set(input.techs ?? []);
+  let uv = false;
+  let heat = false;
+  for (const o of input.design?.objects ?? []) {
+    if (o.type !== 'lamp') continue;
+    techs.add(o.tech);
+    if ((o.uvbAt30 ?? 1) > 0 && UV_TECHS.has(o.tech)) uv = true;
+    if ((o.watts ?? 1) > 0) heat = true;
+  }
+  for (const t of techs) {
+    if (UV_TECHS.has(t)) uv = true;
+    heat = true; // every lamp technology gives off heat
+  }
+  const status = (id: string) => input.assessment?.findings.find((f) => f.id === id)?.status;
+  const bad = (id: string) => {
+    const s = status(id);
+    return s === 'attention' || s === 'fail';
+  };
+  const hotSpotTooHot = input.assessment?.findings.some(
+    (f) =>
+      f.id === 'hot-spot' && f.status !== 'pass' && (f.numbers.hotC ?? 0) > (f.numbers.targetHi ?? Infinity),
+  );
+  const out: { caution: Caution; urgent: boolean }[] = [];
+  if (uv) out.push({ caution: CAUTIONS['uv-eyes-skin'], urgent: bad('eye-safety') });
+  if (heat) {
+    out.push({ caution: CAUTIONS.burns, urgent: bad('lamp-in-reach') });
+    out.push({ caution: CAUTIONS.thermostat, urgent: Boolean(hotSpotTooHot) });
+    out.push({ caution: CAUTIONS.fire, urgent: false });
+  }
+  out.push({ caution: CAUTIONS.estimate, urgent: false });
+  return out;
+}
