@@ -3,7 +3,8 @@ import { afterCursor, page } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { getSequelize } from '@/lib/db';
 import type { Design as DesignFile } from '@/simulation/model';
-import { Design, Variant, type Enclosure } from '@/models';
+import { can } from '@/lib/permissions';
+import { Design, Enclosure, Variant } from '@/models';
 import { defaultDesignFor } from './default-design';
 import { serializeDesign } from './stored-design';
 import { designSummary, variantSummary, type DesignSummary, type VariantSummary } from './views';
@@ -93,4 +94,28 @@ export async function renameDesign(design: Design, name: string): Promise<Design
 /** Deleting a design removes its variants and their share links (foreign keys cascade). */
 export async function deleteDesign(design: Design): Promise<void> {
   await design.destroy();
+}
+
+export type DesignForPage = {
+  design: DesignSummary;
+  enclosure: { id: number; name: string; organisationId: number };
+  canEdit: boolean;
+};
+
+/** For the design page: the design if this user may read it, else null (the page answers 404 alike). */
+export async function getDesignForUser(user: CurrentUser, designId: number): Promise<DesignForPage | null> {
+  if (!Number.isSafeInteger(designId) || designId <= 0) return null;
+  getSequelize();
+  const design = (await Design.findByPk(designId, {
+    include: [{ model: Enclosure, as: 'enclosure', required: true }],
+  })) as (Design & { enclosure: Enclosure }) | null;
+  if (!design) return null;
+  const e = design.enclosure;
+  const resource = { kind: 'design' as const, organisationId: e.organisationId, keeperId: e.keeperId };
+  if (!can(user, 'read', resource)) return null;
+  return {
+    design: await designDetail(design),
+    enclosure: { id: e.id, name: e.name, organisationId: e.organisationId },
+    canEdit: can(user, 'update', resource),
+  };
 }

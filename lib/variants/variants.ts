@@ -117,7 +117,13 @@ export async function variantDetailOf(variant: Variant): Promise<VariantDetail> 
 
 export type VariantForPage = VariantDetail & {
   designName: string;
-  enclosure: { id: number; name: string; organisationId: number; keeperId: number };
+  enclosure: {
+    id: number;
+    name: string;
+    organisationId: number;
+    keeperId: number;
+    speciesName: string | null;
+  };
   /** Whether this user may save changes (the page shows a read-only view otherwise). */
   canEdit: boolean;
 };
@@ -139,7 +145,13 @@ export async function getVariantForUser(
   return {
     ...(await variantDetailOf(variant)),
     designName: variant.design.name,
-    enclosure: { id: e.id, name: e.name, organisationId: e.organisationId, keeperId: e.keeperId },
+    enclosure: {
+      id: e.id,
+      name: e.name,
+      organisationId: e.organisationId,
+      keeperId: e.keeperId,
+      speciesName: e.speciesName ?? null,
+    },
     canEdit: can(user, 'update', resource),
   };
 }

@@ -1,5 +1,6 @@
 // Calls the real route handler functions with real Requests carrying a real (next-auth-encoded) session
 // cookie, as a browser would after signing in.
+import { inflateSync } from 'node:zlib';
 import { encode } from 'next-auth/jwt';
 import { authSecret } from '@/lib/auth/secret';
 import type { User } from '@/models';
@@ -52,4 +53,52 @@ export async function call(
   const type = res.headers.get('content-type') ?? '';
   const body = type.includes('application/json') ? await res.json() : null;
   return { status: res.status, body, res };
+}
+
+/**
+ * The text drawn in a PDF made by pdf-lib with the standard fonts: each content stream is inflated and
+ * its `<hex> Tj` operators decoded from WinAnsi.
+ */
+export function pdfDrawnText(pdf: Uint8Array): string {
+  const bytes = Buffer.from(pdf);
+  const out: string[] = [];
+  let at = 0;
+  for (;;) {
+    const start = bytes.indexOf('stream', at, 'latin1');
+    if (start < 0) break;
+    let from = start + 'stream'.length;
+    if (bytes[from] === 0x0d) from++;
+    if (bytes[from] === 0x0a) from++;
+    const end = bytes.indexOf('endstream', from, 'latin1');
+    if (end < 0) break;
+    at = end + 'endstream'.length;
+    let content: string;
+    try {
+      content = inflateSync(bytes.subarray(from, end)).toString('latin1');
+    } catch {
+      content = bytes.subarray(from, end).toString('latin1');
+    }
+    for (const m of content.matchAll(/<([0-9a-fA-F]*)>\s*Tj/g))
+      out.push(winAnsiDecode(Buffer.from(m[1]!, 'hex')));
+  }
+  return out.join('\n');
+}
+
+// WinAnsi is Latin-1 except for 0x80–0x9F, where it keeps typographic marks (PDF 32000, annex D).
+const WIN_ANSI_HIGH: Record<number, string> = {
+  0x80: '€',
+  0x85: '…',
+  0x91: '‘',
+  0x92: '’',
+  0x93: '“',
+  0x94: '”',
+  0x95: '•',
+  0x96: '–',
+  0x97: '—',
+  0x99: '™',
+};
+function winAnsiDecode(bytes: Buffer): string {
+  let s = '';
+  for (const b of bytes) s += WIN_ANSI_HIGH[b] ?? String.fromCharCode(b);
+  return s;
 }

@@ -1,0 +1,82 @@
+/**
+ * Server side of the exports: one variant's design turned into a PNG of a field or a PDF report.
+ * Used by the signed-in export route and by the public share page's download, so both give the same
+ * document for the same variant.
+ */
+import type { Design, FieldName } from '@/simulation';
+import { assessFor } from '@/lib/variants/assessment';
+import { scaleFor, simulate } from '@/lib/variants/simulate';
+import type { SpeciesOption } from '@/lib/variants/species';
+import { lampRows } from './lamps';
+import { renderReportPdf } from './pdf';
+import { encodePng } from './png';
+import { renderFieldRaster } from './raster';
+
+export type ReportSubject = {
+  variantName: string;
+  version: number;
+  designName: string;
+  enclosureName: string;
+  organisationName: string;
+  design: Design;
+};
+
+export type ReportOptions = { field: FieldName; months: number; species: SpeciesOption | null };
+
+export function fieldPng(subject: ReportSubject, opts: Pick<ReportOptions, 'field' | 'months'>): Buffer {
+  const sim = simulate(subject.design, opts.months);
+  const scale = scaleFor(opts.field, [sim]);
+  return encodePng(renderFieldRaster(subject.design, sim.grid, scale));
+}
+
+export async function reportPdf(
+  subject: ReportSubject,
+  opts: ReportOptions,
+  now = new Date(),
+): Promise<Uint8Array> {
+  const sim = simulate(subject.design, opts.months);
+  const scale = scaleFor(opts.field, [sim]);
+  const png = encodePng(renderFieldRaster(subject.design, sim.grid, scale));
+  const assessment = opts.species ? assessFor(subject.design, opts.species.sheet, opts.months) : null;
+  return renderReportPdf({
+    variantName: subject.variantName,
+    designName: subject.designName,
+    enclosureName: subject.enclosureName,
+    enclosureSize: subject.design.enclosure,
+    organisationName: subject.organisationName,
+    version: subject.version,
+    generatedAt: now,
+    months: opts.months,
+    scale,
+    png,
+    figures: sim.figures,
+    species:
+      opts.species && assessment
+        ? { name: opts.species.name, findings: assessment.findings, overall: assessment.overall }
+        : null,
+    lamps: lampRows(subject.design),
+  });
+}
+
+/** A file name from a variant's name: letters, digits and dashes only. */
+export function fileBase(name: string): string {
+  const base = name
+    .normalize('NFKD')
+    .replace(/[^\w\s-]/g, '')
+    .trim()
+    .replace(/[\s_]+/g, '-')
+    .toLowerCase()
+    .slice(0, 60);
+  return base || 'variant';
+}
+
+export function download(body: BodyInit, type: string, filename: string): Response {
+  return new Response(body, {
+    headers: {
+      'Content-Type': type,
+      'Content-Disposition': `attachment; filename="${filename}"`,
+      'Cache-Control': 'no-store',
+      'X-Content-Type-Options': 'nosniff',
+    },
+  });
+}

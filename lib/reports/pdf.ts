@@ -1,0 +1,232 @@
+/**
+ * The PDF report of one variant (pdf-lib, standard fonts, A4): what was designed, for which enclosure,
+ * the chosen field with its legend, key figures, the species assessment when there is one, the lamp
+ * list and the cautions. The variant's name is both drawn and set as the document title.
+ */
+import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from 'pdf-lib';
+import type { KeyFigures } from '@/lib/variants/figures';
+import { bandLabel, type FieldScale } from '@/lib/variants/scale';
+import { CAUTIONS, ESTIMATE_NOTE } from './cautions';
+import type { LampRow } from './lamps';
+import { winAnsi, wrap } from './pdf-text';
+
+export type ReportFinding = { status: 'pass' | 'attention' | 'fail'; title: string; message: string };
+
+export type ReportInput = {
+  variantName: string;
+  designName: string;
+  enclosureName: string;
+  enclosureSize: { width: number; height: number; depth: number };
+  organisationName: string;
+  version: number;
+  generatedAt: Date;
+  months: number;
+  scale: FieldScale;
+  png: Uint8Array;
+  figures: KeyFigures;
+  species: { name: string; findings: ReportFinding[]; overall: ReportFinding['status'] } | null;
+  lamps: LampRow[];
+};
+
+const A4: [number, number] = [595.28, 841.89];
+const M = 48;
+const INK = rgb(0.11, 0.12, 0.1);
+const MUTED = rgb(0.37, 0.4, 0.34);
+const STATUS_COLOR = {
+  pass: rgb(0.18, 0.42, 0.21),
+  attention: rgb(0.71, 0.45, 0.13),
+  fail: rgb(0.65, 0.19, 0.12),
+};
+const STATUS_WORD = { pass: 'PASS', attention: 'CHECK', fail: 'FAIL' };
+
+class Writer {
+  page: PDFPage;
+  y: number;
+  constructor(
+    readonly doc: PDFDocument,
+    readonly font: PDFFont,
+    readonly bold: PDFFont,
+  ) {
+    this.page = doc.addPage(A4);
+    this.y = A4[1] - M;
+  }
+  get width() {
+    return A4[0] - 2 * M;
+  }
+  need(h: number) {
+    if (this.y - h < M + 20) {
+      this.page = this.doc.addPage(A4);
+      this.y = A4[1] - M;
+    }
+  }
+  text(
+    t: string,
+    o: { size?: number; bold?: boolean; color?: ReturnType<typeof rgb>; indent?: number; gap?: number } = {},
+  ) {
+    const size = o.size ?? 10;
+    const font = o.bold ? this.bold : this.font;
+    const indent = o.indent ?? 0;
+    for (const line of wrap(font, t, size, this.width - indent)) {
+      this.need(size * 1.35);
+      this.page.drawText(line, { x: M + indent, y: this.y - size, size, font, color: o.color ?? INK });
+      this.y -= size * 1.35;
+    }
+    this.y -= o.gap ?? 2;
+  }
+  heading(t: string) {
+    this.y -= 8;
+    this.need(40);
+    this.text(t, { size: 13, bold: true, gap: 4 });
+  }
+  /** Label/value rows in two columns. */
+  rows(rows: [string, string][], labelWidth = 190) {
+    for (const [label, value] of rows) {
+      this.need(14);
+      this.page.drawText(winAnsi(this.font, label), {
+        x: M,
+        y: this.y - 10,
+        size: 10,
+        font: this.font,
+        color: MUTED,
+      });
+      const lines = wrap(this.font, value, 10, this.width - labelWidth);
+      for (const line of lines) {
+        this.need(14);
+        this.page.drawText(line, {
+          x: M + labelWidth,
+          y: this.y - 10,
+          size: 10,
+          font: this.font,
+          color: INK,
+        });
+        this.y -= 13.5;
+      }
+    }
+    this.y -= 2;
+  }
+}
+
+const fmt = (v: number, digits = 1) => Number(v.toFixed(digits)).toString();
+const hexRgb = (h: string) => {
+  const n = Number.parseInt(h.slice(1), 16);
+  return rgb(((n >> 16) & 255) / 255, ((n >> 8) & 255) / 255, (n & 255) / 255);
+};
+
+export async function renderReportPdf(r: ReportInput): Promise<Uint8Array> {
+  const doc = await PDFDocument.create();
+  doc.setTitle(r.variantName);
+  doc.setSubject(`Light and heat report: ${r.designName} — ${r.enclosureName}`);
+  doc.setCreator('Baskwell');
+  doc.setProducer('Baskwell');
+  doc.setCreationDate(r.generatedAt);
+  const w = new Writer(
+    doc,
+    await doc.embedFont(StandardFonts.Helvetica),
+    await doc.embedFont(StandardFonts.HelveticaBold),
+  );
+
+  w.text('Baskwell — light and heat report', { size: 9, color: MUTED, gap: 6 });
+  w.text(r.variantName, { size: 20, bold: true, gap: 4 });
+  w.text(ESTIMATE_NOTE, { size: 9, color: STATUS_COLOR.attention, gap: 8 });
+  const { width, height, depth } = r.enclosureSize;
+  w.rows([
+    ['Design', r.designName],
+    ['Variant', `${r.variantName} (version ${r.version})`],
+    ['Enclosure', `${r.enclosureName} — ${fmt(width)} × ${fmt(height)} × ${fmt(depth)} cm (w × h × d)`],
+    ['Organisation', r.organisationName || '—'],
+    ['Date', r.generatedAt.toISOString().slice(0, 10)],
+    ['Lamp age shown', r.months === 0 ? 'as installed' : `${r.months} months on`],
+  ]);
+
+  // Field picture with its legend.
+  const unit = r.scale.unit ? ` (${r.scale.unit})` : '';
+  w.heading(`${r.scale.label}${unit}, side view`);
+  const img = await doc.embedPng(r.png);
+  const drawW = w.width;
+  const drawH = (img.height / img.width) * drawW;
+  w.need(drawH + 40);
+  w.page.drawImage(img, { x: M, y: w.y - drawH, width: drawW, height: drawH });
+  w.y -= drawH + 8;
+  const swatch = Math.min(70, w.width / r.scale.colors.length);
+  w.need(26);
+  r.scale.colors.forEach((c, k) => {
+    const x = M + k * swatch;
+    w.page.drawRectangle({ x, y: w.y - 10, width: swatch - 2, height: 10, color: hexRgb(c) });
+    w.page.drawText(winAnsi(w.font, bandLabel(r.scale, k)), {
+      x,
+      y: w.y - 20,
+      size: 7,
+      font: w.font,
+      color: MUTED,
+    });
+  });
+  w.y -= 28;
+
+  w.heading('Key figures');
+  const f = r.figures;
+  w.rows(
+    [
+      ['Basking UV Index (highest on a surface)', fmt(f.baskingUviMax, 2)],
+      ['Basking UVB (highest on a surface)', `${fmt(f.baskingUvbMax)} µW/cm²`],
+      ['Hot spot (warmest surface)', `${fmt(f.hotSpotC)} °C`],
+      ['Cool end (coolest floor)', `${fmt(f.coolEndC)} °C`],
+      ['UV-free area of the cross-section', `${fmt(f.uvFreeAreaCm2, 0)} cm² (${fmt(f.uvFreeShare, 0)} %)`],
+    ],
+    230,
+  );
+
+  w.heading('Assessment');
+  if (!r.species) {
+    w.text(
+      'No species is attached to this enclosure, so there is no assessment. Attach a species sheet to check basking UV, shade, hot spot and cool end against its needs.',
+      { color: MUTED },
+    );
+  } else {
+    w.text(`Species: ${r.species.name} — overall ${STATUS_WORD[r.species.overall]}`, { bold: true, gap: 4 });
+    for (const finding of r.species.findings) {
+      w.text(`${STATUS_WORD[finding.status]}  ${finding.title}`, {
+        bold: true,
+        color: STATUS_COLOR[finding.status],
+        gap: 0,
+      });
+      w.text(finding.message, { indent: 12, gap: 4 });
+    }
+  }
+
+  w.heading('Lamps');
+  if (r.lamps.length === 0) w.text('No lamps in this design.', { color: MUTED });
+  for (const l of r.lamps) {
+    w.text(`${l.name} — ${l.technology} (${l.form})`, { bold: true, gap: 0 });
+    w.text(
+      `${l.position}; UVB at 30 cm ${l.uvbAt30}; ${l.power}; beam ${l.beam}; reflector ${l.reflector}; age ${l.age}`,
+      { indent: 12, gap: 4 },
+    );
+  }
+
+  w.heading('Cautions');
+  for (const c of CAUTIONS) {
+    w.text(c.title, { bold: true, gap: 0 });
+    w.text(c.text, { indent: 12, gap: 4 });
+  }
+  w.text(ESTIMATE_NOTE, { bold: true, gap: 0 });
+
+  // Page numbers and the standing note in every footer.
+  const pages = doc.getPages();
+  pages.forEach((p, i) => {
+    p.drawText(
+      winAnsi(
+        w.font,
+        `${r.variantName} — estimates: verify with a meter and thermometer — page ${i + 1} of ${pages.length}`,
+      ),
+      {
+        x: M,
+        y: M - 20,
+        size: 7,
+        font: w.font,
+        color: MUTED,
+      },
+    );
+  });
+  // No object streams: the document opens in the simplest readers and its metadata is plain to inspect.
+  return doc.save({ useObjectStreams: false });
+}

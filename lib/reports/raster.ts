@@ -1,0 +1,115 @@
+/**
+ * A field drawn as a raster: each pixel takes the colour of its band on the shared scale, with the
+ * enclosure outline and its objects drawn over it in dark lines. Pure RGBA pixels; png.ts encodes them.
+ */
+import type { Design, FieldGrid } from '@/simulation';
+import { bandOf, type FieldScale } from '@/lib/variants/scale';
+
+export type Raster = { width: number; height: number; data: Uint8Array };
+
+type Rgb = [number, number, number];
+const hex = (h: string): Rgb => {
+  const n = Number.parseInt(h.slice(1), 16);
+  return [(n >> 16) & 255, (n >> 8) & 255, n & 255];
+};
+const INK: Rgb = [28, 31, 26];
+const PAPER: Rgb = [255, 255, 255];
+const LAMP: Rgb = [209, 143, 43];
+
+/** Longest side of the picture, px: readable in a report and on a phone. */
+export const RASTER_LONG_SIDE = 960;
+const MARGIN = 16;
+
+export function renderFieldRaster(
+  design: Design,
+  grid: FieldGrid,
+  scale: FieldScale,
+  field = scale.field,
+): Raster {
+  const { width: w, height: h } = design.enclosure;
+  // Room above the enclosure for lamps on the lid.
+  const lampTop = Math.max(h, ...design.objects.map((o) => (o.type === 'lamp' ? o.y + 4 : 0)));
+  const pxPerCm = (RASTER_LONG_SIDE - 2 * MARGIN) / Math.max(w, lampTop);
+  const width = Math.round(w * pxPerCm) + 2 * MARGIN;
+  const height = Math.round(lampTop * pxPerCm) + 2 * MARGIN;
+  const data = new Uint8Array(width * height * 4);
+  const put = (x: number, y: number, c: Rgb) => {
+    if (x < 0 || y < 0 || x >= width || y >= height) return;
+    const k = (y * width + x) * 4;
+    data[k] = c[0];
+    data[k + 1] = c[1];
+    data[k + 2] = c[2];
+    data[k + 3] = 255;
+  };
+  // Design cm → pixel (y up in the design, down in the picture).
+  const px = (x: number) => Math.round(MARGIN + x * pxPerCm);
+  const py = (y: number) => Math.round(height - MARGIN - y * pxPerCm);
+
+  for (let y = 0; y < height; y++) for (let x = 0; x < width; x++) put(x, y, PAPER);
+
+  const colors = scale.colors.map(hex);
+  const values = grid[field];
+  for (let y = py(h); y < py(0); y++) {
+    const j = Math.min(
+      grid.ny - 1,
+      Math.max(0, Math.floor((height - MARGIN - y - 0.5) / pxPerCm / grid.cellCm)),
+    );
+    for (let x = px(0); x < px(w); x++) {
+      const i = Math.min(grid.nx - 1, Math.max(0, Math.floor((x + 0.5 - MARGIN) / pxPerCm / grid.cellCm)));
+      put(x, y, colors[bandOf(scale, values[j * grid.nx + i]!)]!);
+    }
+  }
+
+  const line = (x1: number, y1: number, x2: number, y2: number, c: Rgb, thick = 2, dash = 0) => {
+    const [ax, ay, bx, by] = [px(x1), py(y1), px(x2), py(y2)];
+    const n = Math.max(1, Math.abs(bx - ax), Math.abs(by - ay));
+    for (let s = 0; s <= n; s++) {
+      if (dash && Math.floor(s / dash) % 2 === 1) continue;
+      const x = Math.round(ax + ((bx - ax) * s) / n);
+      const y = Math.round(ay + ((by - ay) * s) / n);
+      const r = Math.floor(thick / 2);
+      for (let dy = -r; dy < thick - r; dy++) for (let dx = -r; dx < thick - r; dx++) put(x + dx, y + dy, c);
+    }
+  };
+  const box = (x: number, y: number, bw: number, bh: number, c: Rgb, fill?: Rgb) => {
+    if (fill) {
+      for (let yy = py(y + bh); yy <= py(y); yy++)
+        for (let xx = px(x); xx <= px(x + bw); xx++) put(xx, yy, fill);
+    }
+    line(x, y, x + bw, y, c);
+    line(x + bw, y, x + bw, y + bh, c);
+    line(x + bw, y + bh, x, y + bh, c);
+    line(x, y + bh, x, y, c);
+  };
+
+  for (const o of design.objects) {
+    switch (o.type) {
+      case 'ledge':
+        box(o.x, o.y, o.width, o.height, INK, [120, 110, 100]);
+        break;
+      case 'hide':
+      case 'foliage':
+        box(o.x, o.y, o.width, o.height, INK);
+        break;
+      case 'perch':
+        line(o.x1, o.y1, o.x2, o.y2, INK, Math.max(2, Math.round(o.thickness * pxPerCm)));
+        break;
+      case 'screen':
+        line(o.x1, o.y1, o.x2, o.y2, INK, 2, 6);
+        break;
+      case 'glass':
+        line(o.x1, o.y1, o.x2, o.y2, [90, 150, 200], 3);
+        break;
+      case 'lamp':
+        if (o.form === 'tube') {
+          const half = (o.length ?? 0) / 2;
+          line(o.x - half, o.y, o.x + half, o.y, LAMP, 6);
+        } else {
+          box(o.x - 2, o.y - 2, 4, 4, INK, LAMP);
+        }
+        break;
+    }
+  }
+  box(0, 0, w, h, INK);
+  return { width, height, data };
+}

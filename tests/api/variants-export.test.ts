@@ -1,0 +1,137 @@
+import { PDFDocument } from 'pdf-lib';
+import { PNG } from 'pngjs';
+import { describe, expect, it } from 'vitest';
+import * as enclosureDesignsRoute from '@/app/api/enclosures/[id]/designs/route';
+import * as exportRoute from '@/app/api/variants/[id]/export/route';
+import * as variantRoute from '@/app/api/variants/[id]/route';
+import { ensureStartingCatalogue } from '@/lib/species/seed';
+import {
+  createEnclosure,
+  createMember,
+  createOrganisation,
+  useTestDatabase as withTestDatabase,
+} from '../helpers/db';
+import { call, pdfDrawnText } from './variants.helpers';
+
+withTestDatabase();
+
+const design = {
+  format: 'baskwell.design',
+  version: 1,
+  enclosure: { width: 120, height: 60, depth: 60 },
+  objects: [
+    {
+      type: 'lamp',
+      id: 'uv1',
+      name: 'Basking tube',
+      tech: 't5',
+      form: 'tube',
+      x: 90,
+      y: 62,
+      length: 55,
+      uvbAt30: 42.5,
+    },
+    { type: 'lamp', id: 'heat1', tech: 'halogen', form: 'bulb', x: 95, y: 62, watts: 75, beamDeg: 30 },
+    { type: 'screen', id: 'lid', x1: 0, y1: 60, x2: 120, y2: 60 },
+    { type: 'ledge', id: 'rock', x: 80, y: 0, width: 30, height: 25 },
+  ],
+};
+
+async function world(speciesName: string | null) {
+  const org = await createOrganisation('Fernhollow Test Rooms');
+  const { user: keeper } = await createMember('keeper', org);
+  const enclosure = await createEnclosure(org, keeper, { name: 'Desert tank', speciesName });
+  await ensureStartingCatalogue(org.id);
+  const made = await call(enclosureDesignsRoute.POST, {
+    method: 'POST',
+    path: `/api/enclosures/${enclosure.id}/designs`,
+    params: { id: enclosure.id },
+    user: keeper,
+    body: { name: 'Summer plan', variantName: 'Rock under the tube', design },
+  });
+  expect(made.status).toBe(201);
+  return { keeper, variantId: made.body.variant.id as number };
+}
+
+const exportAs = (w: Awaited<ReturnType<typeof world>>, query: string) =>
+  call(exportRoute.GET, {
+    path: `/api/variants/${w.variantId}/export?${query}`,
+    params: { id: w.variantId },
+    user: w.keeper,
+  });
+
+describe('export', () => {
+  it('downloads the design file as JSON, the same document the API stores', async () => {
+    const w = await world(null);
+    const r = await exportAs(w, 'format=json');
+    expect(r.status).toBe(200);
+    expect(r.res.headers.get('content-disposition')).toBe(
+      'attachment; filename="rock-under-the-tube.baskwell.json"',
+    );
+    expect(r.body).toEqual(design);
+    const stored = await call(variantRoute.GET, {
+      path: `/api/variants/${w.variantId}`,
+      params: { id: w.variantId },
+      user: w.keeper,
+    });
+    expect(r.body).toEqual(stored.body.variant.design);
+  });
+
+  it('renders a field as a PNG picture', async () => {
+    const w = await world(null);
+    const r = await exportAs(w, 'format=png&field=tempC');
+    expect(r.status).toBe(200);
+    expect(r.res.headers.get('content-type')).toBe('image/png');
+    const png = PNG.sync.read(Buffer.from(await r.res.arrayBuffer()));
+    // 120 × 62 cm (the lamps sit on the lid) drawn 960 px wide at most.
+    expect(png.width).toBeGreaterThan(500);
+    expect(png.width).toBeLessThanOrEqual(960);
+    expect(png.height).toBeGreaterThan(200);
+    // More than a blank picture: several distinct band colours.
+    const colours = new Set<number>();
+    for (let k = 0; k < png.data.length; k += 4 * 97) colours.add(png.data.readUInt32BE(k));
+    expect(colours.size).toBeGreaterThan(4);
+  });
+
+  it('writes a PDF report titled and headed with the variant’s name, with lamps and cautions', async () => {
+    const w = await world(null);
+    const r = await exportAs(w, 'format=pdf');
+    expect(r.status).toBe(200);
+    const bytes = new Uint8Array(await r.res.arrayBuffer());
+    expect(Buffer.from(bytes.subarray(0, 5)).toString('latin1')).toBe('%PDF-');
+    const doc = await PDFDocument.load(bytes);
+    expect(doc.getTitle()).toBe('Rock under the tube');
+    const text = pdfDrawnText(bytes);
+    for (const expected of [
+      'Rock under the tube',
+      'Summer plan',
+      'Desert tank',
+      'Fernhollow Test Rooms',
+      'Basking tube',
+      'No species is attached',
+      'UV can injure eyes and skin',
+      'Burns',
+      'Fire',
+      'Thermostats',
+      'verify with a meter and thermometer',
+    ]) {
+      expect(text).toContain(expected);
+    }
+  });
+
+  it('includes the assessment when the enclosure’s species has a sheet', async () => {
+    const w = await world('Bearded dragon');
+    const r = await exportAs(w, 'format=pdf');
+    const text = pdfDrawnText(new Uint8Array(await r.res.arrayBuffer()));
+    expect(text).toMatch(/Species: Bearded dragon — overall (PASS|CHECK|FAIL)/);
+    expect(text).not.toContain('No species is attached');
+  });
+
+  it('refuses an unknown format or field with 400', async () => {
+    const w = await world(null);
+    const r = await exportAs(w, 'format=docx');
+    expect(r.status).toBe(400);
+    expect(r.body.error.field).toBe('format');
+    expect((await exportAs(w, 'format=png&field=light')).body.error.field).toBe('field');
+  });
+});

@@ -1,0 +1,255 @@
+// Every design, variant and share route, tried by people who must not reach the thing: a keeper of the
+// same organisation who does not own the enclosure, the owner of another organisation, and a signed-in
+// user of no organisation. Each must get 404 (existence not revealed) and nothing may change.
+import { QueryTypes } from 'sequelize';
+import { describe, expect, it } from 'vitest';
+import * as designRoute from '@/app/api/designs/[id]/route';
+import * as designVariantsRoute from '@/app/api/designs/[id]/variants/route';
+import * as enclosureDesignsRoute from '@/app/api/enclosures/[id]/designs/route';
+import * as shareRoute from '@/app/api/shares/[id]/route';
+import * as exportRoute from '@/app/api/variants/[id]/export/route';
+import * as variantRoute from '@/app/api/variants/[id]/route';
+import * as sharesRoute from '@/app/api/variants/[id]/shares/route';
+import { resolveShareToken } from '@/lib/variants/shares';
+import type { User } from '@/models';
+import {
+  createEnclosure,
+  createMember,
+  createOrganisation,
+  createUser,
+  testDb,
+  useTestDatabase as withTestDatabase,
+} from '../helpers/db';
+import { call } from './variants.helpers';
+
+withTestDatabase();
+
+async function world() {
+  const org = await createOrganisation('Shop A');
+  const { user: staff } = await createMember('staff', org);
+  const { user: keeper } = await createMember('keeper', org);
+  const { user: otherKeeper } = await createMember('keeper', org);
+  const { user: outsider, organisation: otherOrg } = await createMember('owner');
+  const { user: nobody } = await createUser();
+  const enclosure = await createEnclosure(org, keeper);
+  const theirEnclosure = await createEnclosure(otherOrg, outsider);
+  const made = await call(enclosureDesignsRoute.POST, {
+    method: 'POST',
+    path: `/api/enclosures/${enclosure.id}/designs`,
+    params: { id: enclosure.id },
+    user: staff,
+    body: { name: 'Plan' },
+  });
+  const designId = made.body.design.id as number;
+  const variantId = made.body.variant.id as number;
+  const shared = await call(sharesRoute.POST, {
+    method: 'POST',
+    path: `/api/variants/${variantId}/shares`,
+    params: { id: variantId },
+    user: keeper,
+    body: {},
+  });
+  // The outsider's own design, to try pulling the victim's variant into it.
+  const theirs = await call(enclosureDesignsRoute.POST, {
+    method: 'POST',
+    path: `/api/enclosures/${theirEnclosure.id}/designs`,
+    params: { id: theirEnclosure.id },
+    user: outsider,
+    body: { name: 'Mine' },
+  });
+  return {
+    staff,
+    keeper,
+    attackers: { otherKeeper, outsider, nobody },
+    enclosureId: enclosure.id,
+    designId,
+    variantId,
+    shareId: shared.body.share.id as number,
+    token: shared.body.share.token as string,
+    outsiderDesignId: theirs.body.design.id as number,
+  };
+}
+
+type World = Awaited<ReturnType<typeof world>>;
+type Attempt = {
+  name: string;
+  handler: (req: Request, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>;
+  method: string;
+  path: (w: World) => string;
+  id: (w: World) => number;
+  body?: (w: World) => unknown;
+};
+
+const design = {
+  format: 'baskwell.design',
+  version: 1,
+  enclosure: { width: 120, height: 60, depth: 60 },
+  objects: [],
+};
+
+const attempts: Attempt[] = [
+  {
+    name: 'list designs',
+    handler: enclosureDesignsRoute.GET,
+    method: 'GET',
+    path: (w) => `/api/enclosures/${w.enclosureId}/designs`,
+    id: (w) => w.enclosureId,
+  },
+  {
+    name: 'create design',
+    handler: enclosureDesignsRoute.POST,
+    method: 'POST',
+    path: (w) => `/api/enclosures/${w.enclosureId}/designs`,
+    id: (w) => w.enclosureId,
+    body: () => ({ name: 'x' }),
+  },
+  {
+    name: 'read design',
+    handler: designRoute.GET,
+    method: 'GET',
+    path: (w) => `/api/designs/${w.designId}`,
+    id: (w) => w.designId,
+  },
+  {
+    name: 'rename design',
+    handler: designRoute.PATCH,
+    method: 'PATCH',
+    path: (w) => `/api/designs/${w.designId}`,
+    id: (w) => w.designId,
+    body: () => ({ name: 'x' }),
+  },
+  {
+    name: 'delete design',
+    handler: designRoute.DELETE,
+    method: 'DELETE',
+    path: (w) => `/api/designs/${w.designId}`,
+    id: (w) => w.designId,
+  },
+  {
+    name: 'list variants',
+    handler: designVariantsRoute.GET,
+    method: 'GET',
+    path: (w) => `/api/designs/${w.designId}/variants`,
+    id: (w) => w.designId,
+  },
+  {
+    name: 'create variant',
+    handler: designVariantsRoute.POST,
+    method: 'POST',
+    path: (w) => `/api/designs/${w.designId}/variants`,
+    id: (w) => w.designId,
+    body: () => ({ name: 'x', design }),
+  },
+  {
+    name: 'copy the variant into their own design',
+    handler: designVariantsRoute.POST,
+    method: 'POST',
+    path: (w) => `/api/designs/${w.outsiderDesignId}/variants`,
+    id: (w) => w.outsiderDesignId,
+    body: (w) => ({ name: 'stolen', fromVariantId: w.variantId }),
+  },
+  {
+    name: 'read variant',
+    handler: variantRoute.GET,
+    method: 'GET',
+    path: (w) => `/api/variants/${w.variantId}`,
+    id: (w) => w.variantId,
+  },
+  {
+    name: 'save variant',
+    handler: variantRoute.PUT,
+    method: 'PUT',
+    path: (w) => `/api/variants/${w.variantId}`,
+    id: (w) => w.variantId,
+    body: () => ({ design, baseVersion: 1 }),
+  },
+  {
+    name: 'rename variant',
+    handler: variantRoute.PATCH,
+    method: 'PATCH',
+    path: (w) => `/api/variants/${w.variantId}`,
+    id: (w) => w.variantId,
+    body: () => ({ name: 'x' }),
+  },
+  {
+    name: 'delete variant',
+    handler: variantRoute.DELETE,
+    method: 'DELETE',
+    path: (w) => `/api/variants/${w.variantId}`,
+    id: (w) => w.variantId,
+  },
+  {
+    name: 'list shares',
+    handler: sharesRoute.GET,
+    method: 'GET',
+    path: (w) => `/api/variants/${w.variantId}/shares`,
+    id: (w) => w.variantId,
+  },
+  {
+    name: 'create share',
+    handler: sharesRoute.POST,
+    method: 'POST',
+    path: (w) => `/api/variants/${w.variantId}/shares`,
+    id: (w) => w.variantId,
+    body: () => ({}),
+  },
+  {
+    name: 'revoke share',
+    handler: shareRoute.DELETE,
+    method: 'DELETE',
+    path: (w) => `/api/shares/${w.shareId}`,
+    id: (w) => w.shareId,
+  },
+  ...(['json', 'png', 'pdf'] as const).map((format): Attempt => ({
+    name: `export ${format}`,
+    handler: exportRoute.GET,
+    method: 'GET',
+    path: (w) => `/api/variants/${w.variantId}/export?format=${format}`,
+    id: (w) => w.variantId,
+  })),
+];
+
+async function snapshot() {
+  const db = testDb();
+  const q = (sql: string) => db.query(sql, { type: QueryTypes.SELECT });
+  return {
+    designs: await q('SELECT * FROM designs ORDER BY id'),
+    variants: await q('SELECT * FROM variants ORDER BY id'),
+    shares: await q('SELECT * FROM share_links ORDER BY id'),
+  };
+}
+
+describe('no one reaches another keeper’s or organisation’s designs', () => {
+  it('answers 404 to every route and changes nothing', async () => {
+    const w = await world();
+    const before = await snapshot();
+    const failures: string[] = [];
+    for (const [who, user] of Object.entries(w.attackers) as [string, User][]) {
+      for (const a of attempts) {
+        const r = await call(a.handler, {
+          method: a.method,
+          path: a.path(w),
+          params: { id: a.id(w) },
+          user,
+          body: a.body?.(w),
+        });
+        // The outsider owns the target design of the copy attempt: 404 then names the source variant.
+        if (r.status !== 404) failures.push(`${who} ${a.name}: ${r.status}`);
+        else expect(r.body.error.code).toBe('not_found');
+      }
+    }
+    expect(failures).toEqual([]);
+    expect(await snapshot()).toEqual(before);
+    expect(await resolveShareToken(w.token)).not.toBeNull();
+  });
+
+  it('lets the owning keeper and staff through the same routes (the attempts above are real)', async () => {
+    const w = await world();
+    for (const user of [w.keeper, w.staff]) {
+      for (const a of attempts.filter((x) => x.method === 'GET')) {
+        const r = await call(a.handler, { method: a.method, path: a.path(w), params: { id: a.id(w) }, user });
+        expect(r.status, `${a.name}`).toBe(200);
+      }
+    }
+  });
+});
