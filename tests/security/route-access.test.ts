@@ -1,0 +1,204 @@
+// Every route handler under app/api (next-auth's own excepted) is made by the lib/api pipeline and its
+// handler reaches the one permission check, `can` in lib/permissions.ts — directly, through `allow`, or
+// through a loader such as `variantFor` that calls it. The same for server actions. A new route that
+// skips the check fails here, naming the file and method. See access-graph.ts for how calls are followed.
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { AccessGraph, ROOT, filesUnder, type HandlerReport } from './access-graph';
+
+/** next-auth serves sign-in, sign-out and its CSRF token itself: it has no organisation data. */
+const EXCLUDED_FILES = ['app/api/auth/[...nextauth]/route.ts'];
+
+/**
+ * Handlers open to people without a session (`auth: false`), each with the reason no `can` applies.
+ * Anything public that is not listed here fails, and so does a listed entry that is no longer public.
+ */
+const PUBLIC_HANDLERS: Record<string, string> = {
+  'app/api/sign-up/route.ts POST':
+    'creates a new account with a new organisation of its own; touches nothing that exists (rate-limited)',
+  'app/api/invitations/accept/route.ts POST':
+    'the unguessable, single-use, expiring invitation token is the permission; the e-mail must match',
+};
+
+const key = (r: HandlerReport) => `${r.file} ${r.method}`;
+
+function routeFiles(): string[] {
+  return filesUnder('app/api', (name) => /^route\.(ts|tsx|js|mjs)$/.test(name));
+}
+
+function serverActionFiles(): string[] {
+  const candidates = ['app', 'components', 'lib'].flatMap((dir) =>
+    filesUnder(dir, (name) => /\.(ts|tsx)$/.test(name) && !/\.test\.tsx?$/.test(name)),
+  );
+  return candidates.filter((f) => /['"]use server['"]/.test(readFileSync(path.join(ROOT, f), 'utf8')));
+}
+
+describe('route handlers under app/api', () => {
+  const graph = new AccessGraph();
+  const files = routeFiles();
+  const checked = files.filter((f) => !EXCLUDED_FILES.includes(f));
+  const reports = checked.flatMap((f) => graph.routeHandlers(f));
+
+  it('finds the route files and their handlers', () => {
+    // What the check covered; ROUTE_ACCESS_VERBOSE=1 prints each handler's chain of calls to can().
+    const verbose = process.env.ROUTE_ACCESS_VERBOSE === '1';
+    console.info(
+      `route-access: ${checked.length} route files, ${reports.length} handlers\n` +
+        reports
+          .map((r) => `  ${key(r).padEnd(52)} ${verbose ? (r.accessPath?.join(' → ') ?? '(public)') : ''}`)
+          .join('\n'),
+    );
+    expect(files).toEqual(expect.arrayContaining(EXCLUDED_FILES));
+    expect(checked.length).toBeGreaterThan(20);
+    expect(reports.length).toBeGreaterThan(40);
+    // Spot checks that the scan sees what it should (a broken walk would find nothing to fail on).
+    expect(reports.map(key)).toEqual(
+      expect.arrayContaining([
+        'app/api/variants/[id]/route.ts PUT',
+        'app/api/enclosures/route.ts POST',
+        'app/api/species/[id]/route.ts DELETE',
+        'app/api/lamps/[id]/readings/route.ts POST',
+      ]),
+    );
+    // Every route file exports at least one handler.
+    for (const f of checked)
+      expect(
+        reports.some((r) => r.file === f),
+        f,
+      ).toBe(true);
+  });
+
+  it('every handler is created by route() from lib/api', () => {
+    const outside = reports.filter((r) => !r.viaPipeline).map((r) => `${key(r)}: ${r.problem}`);
+    expect(outside).toEqual([]);
+  });
+
+  it('every handler with a session reaches can() from lib/permissions', () => {
+    const unchecked = reports.filter((r) => !r.public && !r.accessPath).map((r) => `${key(r)}: ${r.problem}`);
+    expect(unchecked).toEqual([]);
+  });
+
+  it('only the listed handlers are public, and each listed one still is', () => {
+    const publicOnes = reports.filter((r) => r.public).map(key);
+    expect(publicOnes.sort()).toEqual(Object.keys(PUBLIC_HANDLERS).sort());
+  });
+});
+
+describe('server actions', () => {
+  it('every server action reaches can() from lib/permissions', () => {
+    const graph = new AccessGraph();
+    const files = serverActionFiles();
+    const reports = files.flatMap((f) => graph.serverActions(f));
+    console.info(`route-access: ${files.length} files with server actions, ${reports.length} actions`);
+    // A file that mentions 'use server' but declares no action is a mistake worth seeing too.
+    for (const f of files)
+      expect(
+        reports.some((r) => r.file === f),
+        `${f} has no server action`,
+      ).toBe(true);
+    expect(reports.filter((r) => !r.accessPath).map((r) => `${key(r)}: ${r.problem}`)).toEqual([]);
+  });
+});
+
+// The checker itself, on made-up files beside the real ones: it must fail where a route skips the check.
+describe('the checker', () => {
+  const fake = (overlay: Record<string, string>) => new AccessGraph(overlay);
+  const one = (graph: AccessGraph, file: string, method: string) => {
+    const r = graph.routeHandlers(file).find((x) => x.method === method);
+    if (!r) throw new Error(`no ${method} in ${file}`);
+    return r;
+  };
+
+  it('flags a handler that never calls can()', () => {
+    const g = fake({
+      'app/api/zz-fake/route.ts': `
+        import { route } from '@/lib/api';
+        import { Enclosure } from '@/models';
+        export const GET = route({ handler: async () => Enclosure.findAll() });`,
+    });
+    const r = one(g, 'app/api/zz-fake/route.ts', 'GET');
+    expect(r.viaPipeline).toBe(true);
+    expect(r.accessPath).toBeNull();
+    expect(r.problem).toMatch(/never reaches can/);
+  });
+
+  it('flags a handler written by hand, or by another factory', () => {
+    const g = fake({
+      'app/api/zz-fake/route.ts': `
+        import { can } from '@/lib/permissions';
+        const wrap = (f: unknown) => f;
+        export async function GET() { can(null, 'read', { kind: 'organisation', id: 1 }); return Response.json({}); }
+        export const POST = wrap(async () => Response.json({}));`,
+    });
+    expect(one(g, 'app/api/zz-fake/route.ts', 'GET').problem).toMatch(/not created by route/);
+    expect(one(g, 'app/api/zz-fake/route.ts', 'POST').problem).toMatch(/created by wrap\(\)/);
+  });
+
+  it('does not accept a look-alike can() or allow() defined elsewhere', () => {
+    const g = fake({
+      'app/api/zz-fake/route.ts': `
+        import { route } from '@/lib/api';
+        const can = (..._a: unknown[]) => true;
+        function allow() { return can(); }
+        export const GET = route({ handler: async ({ user }) => { allow(); return { user }; } });`,
+    });
+    expect(one(g, 'app/api/zz-fake/route.ts', 'GET').accessPath).toBeNull();
+  });
+
+  it('follows loaders in lib, local helpers, aliases and re-exports to can()', () => {
+    const g = fake({
+      'lib/zz-fake/access.ts': `
+        import { allow } from '@/lib/api';
+        export async function thingFor(user: unknown, id: number) { allow(user as never, 'read', { kind: 'species', organisationId: id }); return id; }`,
+      'lib/zz-fake/index.ts': `export { thingFor as loadThing } from './access';`,
+      'app/api/zz-fake/route.ts': `
+        import { route } from '@/lib/api';
+        import { loadThing } from '@/lib/zz-fake';
+        async function load(user: unknown) { return loadThing(user, 1); }
+        export const PATCH = route({ handler: async ({ user }) => load(user) });
+        export const PUT = PATCH;`,
+    });
+    const put = one(g, 'app/api/zz-fake/route.ts', 'PUT');
+    expect(put.problem).toBeUndefined();
+    expect(put.accessPath).toEqual([
+      'app/api/zz-fake/route.ts#load',
+      'lib/zz-fake/access.ts#thingFor',
+      'lib/api/route.ts#allow',
+      'lib/permissions.ts#can',
+    ]);
+  });
+
+  it('marks auth: false handlers public (the allow-list above then decides)', () => {
+    const g = fake({
+      'app/api/zz-fake/route.ts': `
+        import { route } from '@/lib/api';
+        export const POST = route({ auth: false, handler: async () => ({ ok: true }) });`,
+    });
+    const r = one(g, 'app/api/zz-fake/route.ts', 'POST');
+    expect(r.public).toBe(true);
+    expect(r.accessPath).toBeNull();
+  });
+
+  it('checks the exported functions of a use-server file and inline actions', () => {
+    const g = fake({
+      'app/zz-fake/actions.ts': `'use server';
+        import { designFor } from '@/lib/variants/access';
+        export async function rename(user: never, id: number) { await designFor(user, id, 'update'); }
+        export async function wipe() { return 1; }`,
+      'app/zz-fake/form.tsx': `
+        export default function Form() {
+          async function save() { 'use server'; return 2; }
+          return save;
+        }`,
+    });
+    const actions = g.serverActions('app/zz-fake/actions.ts');
+    expect(actions.map((a) => [a.method, Boolean(a.accessPath)])).toEqual([
+      ['action rename', true],
+      ['action wipe', false],
+    ]);
+    const inline = g.serverActions('app/zz-fake/form.tsx');
+    expect(inline).toHaveLength(1);
+    expect(inline[0]?.problem).toMatch(/never reaches can/);
+  });
+});
