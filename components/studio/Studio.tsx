@@ -132,24 +132,29 @@ function StudioEditor({
   const ctx = useMemo<CommandContext>(() => ({ store, saveNow: save.saveNow }), [store, save.saveNow]);
   useShortcuts(ctx);
 
-  const session = useStudio(store, (s) => s.session);
+  // Units and view preferences are remembered on this device.
+  const prefs = useStudio(store, (s) => JSON.stringify(pickPrefs(s.session)));
   useEffect(() => {
     try {
-      storage.setItem(PREFS_KEY, JSON.stringify(pickPrefs(session)));
+      storage.setItem(PREFS_KEY, prefs);
     } catch {
       // Preferences are a convenience; ignore a full or disabled storage.
     }
-  }, [session, storage]);
+  }, [prefs, storage]);
+  const field = useStudio(store, (s) => s.session.field);
+  const tempUnit = useStudio(store, (s) => s.session.tempUnit);
+  const fieldsVisible = useStudio(store, (s) => s.session.fieldsVisible);
+  const highlightId = useStudio(store, (s) => s.session.highlight);
 
   const sim = useSimulation(store, species);
-  const { bands, legend } = useBands(sim.grid, session.field, session.tempUnit, session.fieldsVisible);
+  const { bands, legend } = useBands(sim.grid, field, tempUnit, fieldsVisible);
   const highlight = useMemo<HighlightShape | null>(() => {
-    const f = sim.assessment?.findings.find((x) => x.id === session.highlight);
+    const f = sim.assessment?.findings.find((x) => x.id === highlightId);
     if (!f?.where) return null;
     return f.where.kind === 'segments'
       ? { segments: f.where.segments, objectIds: [] }
       : { segments: [], objectIds: f.where.objectIds };
-  }, [sim.assessment, session.highlight]);
+  }, [sim.assessment, highlightId]);
   const summaryId = useId();
 
   return (
@@ -184,15 +189,10 @@ function StudioEditor({
               summaryId={summaryId}
             />
             <ObjectSummary id={summaryId} />
-            {session.fieldsVisible && legend.length > 0 && (
+            {fieldsVisible && legend.length > 0 && (
               <p className="pointer-events-none absolute right-3 bottom-3 rounded bg-white/85 px-2 py-1 text-caption text-basalt-700 shadow-sm">
-                Shown:{' '}
-                {session.field === 'uvb'
-                  ? 'UVB'
-                  : session.field === 'uvi'
-                    ? 'UV Index'
-                    : 'surface temperature'}{' '}
-                — estimates
+                Shown: {field === 'uvb' ? 'UVB' : field === 'uvi' ? 'UV Index' : 'surface temperature'} —
+                estimates
               </p>
             )}
           </main>

@@ -170,18 +170,25 @@ export function readingText(r: Reading, temp: TempUnit): string {
   return `UVI ${formatNumber(r.uvi, 2)} · UVB ${formatNumber(r.uvb, 0)} µW/cm² · ${formatTemp(r.tempC, temp)}`;
 }
 
+/** Rough width of a tip's text (11 px sans: about 6 px a character) to keep it inside the view. */
+function tipWidth(text: string): number {
+  return Math.max(...text.split('\n').map((l) => l.length)) * 6 + 12;
+}
+
 export function ProbePins({
   cam,
   probes,
   readings,
   selection,
   temp,
+  viewport,
 }: {
   cam: Camera;
   probes: ProbePoint[];
   readings: Map<string, Reading>;
   selection: string[];
   temp: TempUnit;
+  viewport: Viewport;
 }) {
   return (
     <Group listening={false}>
@@ -189,6 +196,10 @@ export function ProbePins({
         const s = designToStage(cam, p);
         const r = readings.get(p.id);
         const selected = selection.includes(p.id);
+        const text = `${p.label ?? `Probe ${i + 1}`}${r ? `\n${readingText(r, temp)}` : '\ncomputing…'}`;
+        const w = tipWidth(text);
+        // Flip the label to the left of the pin near the right edge.
+        const tx = s.x + 10 + w > viewport.width ? s.x - 10 - w : s.x + 10;
         return (
           <Group key={p.id}>
             <Rect
@@ -201,12 +212,7 @@ export function ProbePins({
               stroke={C.ink}
               strokeWidth={1.5}
             />
-            <Tip
-              x={s.x + 10}
-              y={s.y - 24}
-              tone="light"
-              text={`${p.label ?? `Probe ${i + 1}`}${r ? `\n${readingText(r, temp)}` : '\ncomputing…'}`}
-            />
+            <Tip x={tx} y={s.y - 24} tone="light" text={text} />
           </Group>
         );
       })}
@@ -226,9 +232,11 @@ export function PointerReadout({
   viewport: Viewport;
 }) {
   if (!reading) return null;
-  const x = Math.min(at.x + 14, viewport.width - 330);
+  const text = `Estimate at pointer\n${readingText(reading, temp)}`;
+  const w = tipWidth(text);
+  const x = at.x + 14 + w > viewport.width ? at.x - 14 - w : at.x + 14;
   const y = Math.max(at.y - 44, 26);
-  return <Tip x={x} y={y} text={`Estimate at pointer\n${readingText(reading, temp)}`} />;
+  return <Tip x={x} y={y} text={text} />;
 }
 
 export function HighlightLayer({

@@ -275,6 +275,7 @@ export default function StudioCanvas({
             readings={probeReadings}
             selection={session.selection}
             temp={session.tempUnit}
+            viewport={session.viewport}
           />
           <GuidesLayer cam={cam} guides={session.guides} viewport={session.viewport} />
           <MarqueeLayer cam={cam} rect={session.marquee} />

@@ -9,7 +9,7 @@ import {
   anchorPoint,
   type HandleId,
 } from '../geometry/objects';
-import { snapMove, snapPoint, type PointRole } from '../geometry/snap';
+import { snapMove, snapPoint, type Guide, type PointRole } from '../geometry/snap';
 import * as A from '../state/actions';
 import { objectForDrag } from '../state/defaults';
 import { addObject, moveObjects, nextId, replaceObjects } from '../state/document';
@@ -49,6 +49,10 @@ export function handleRole(o: DesignObject, handle: HandleId): PointRole {
   return 'box-corner';
 }
 
+function sameGuides(a: readonly Guide[], b: readonly Guide[]): boolean {
+  return a.length === b.length && a.every((g, i) => g.axis === b[i]!.axis && g.at === b[i]!.at);
+}
+
 export class CanvasInteraction {
   private drag: Drag | null = null;
   private downAt: Point | null = null;
@@ -58,6 +62,11 @@ export class CanvasInteraction {
 
   private toDesign(p: Point): Point {
     return stageToDesign(this.store.session.camera, p);
+  }
+
+  /** Shows snap guides, without a state change when they are the same as before. */
+  private guides(g: Guide[]) {
+    if (!sameGuides(g, this.store.session.guides)) this.store.setSession({ guides: g });
   }
 
   private tolCm(px: number): number {
@@ -189,7 +198,7 @@ export class CanvasInteraction {
         const lead = drag.lead ? [drag.lead, ...movingObjs.filter((o) => o !== drag.lead)] : movingObjs;
         const r = snapMove(drag.startDoc, lead, rawDx, rawDy, drag.anchor, snapOpts);
         s.edit(() => moveObjects(drag.startDoc, drag.ids, r.dx, r.dy));
-        s.setSession({ guides: r.guides });
+        this.guides(r.guides);
         return;
       }
       case 'handle': {
@@ -207,7 +216,7 @@ export class CanvasInteraction {
           drag.handle === 'rotate' && (mods.shift || opts.grid !== null),
         );
         s.edit((doc) => replaceObjects(doc, new Map([[drag.id, next]])));
-        s.setSession({ guides });
+        this.guides(guides);
         return;
       }
       case 'marquee': {
@@ -234,7 +243,7 @@ export class CanvasInteraction {
         );
         const base = s.getState().history.gestureBase ?? s.design;
         s.edit(() => (obj ? addObject(base, obj) : base));
-        s.setSession({ guides });
+        this.guides(guides);
         return;
       }
       case 'ruler': {

@@ -3,16 +3,21 @@
 // ageing preview or the species posts a request; the worker answers "superseded" for requests a
 // newer one replaced before they started, so only the latest is ever computed and shown.
 import { useEffect, useRef, useState } from 'react';
-import type { SimRequest, SimResponse } from './protocol';
+import type { SimRequest, SimResponse } from '@/simulation/worker/protocol';
+import type { Camera } from '../geometry/camera';
 import type { StudioStore } from '../state/store';
 import type { Design, StudioSpecies } from '../state/types';
 import { cellSizeFor } from './cellSize';
 import type { Reading } from './sample';
 import { EMPTY_SIM, type SimView } from './simTypes';
 
-/** Round-trip samples for the browser benchmark (read by tests/browser/studio.browser.ts). */
+/**
+ * Testing hooks read by tests/browser/studio.browser.ts: round-trip samples for the benchmark, and the
+ * camera so a test can point at a design position. Nothing in the app reads them.
+ */
 export interface StudioMetrics {
   roundTrips: number[];
+  camera?: () => Camera;
 }
 
 declare global {
@@ -43,12 +48,15 @@ export function useSimulation(store: StudioStore, species: StudioSpecies[]): Sim
   useEffect(() => {
     let worker: Worker;
     try {
-      worker = new Worker(new URL('./devWorker.ts', import.meta.url), { type: 'module' });
+      worker = new Worker(new URL('../../../simulation/worker/entry.ts', import.meta.url), {
+        type: 'module',
+      });
     } catch (e) {
       setView((v) => ({ ...v, status: 'error', error: `The field engine could not start (${String(e)}).` }));
       return;
     }
     const metrics: StudioMetrics = (window.__baskwellStudio ??= { roundTrips: [] });
+    metrics.camera = () => store.session.camera;
     let seq = 0;
     let applied = 0;
     const sent = new Map<number, Sent>();

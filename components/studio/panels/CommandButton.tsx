@@ -9,8 +9,8 @@ import { Icon, type IconName } from './icons';
 export function useCommand(id: string) {
   const ctx = useCommandContext();
   const c = command(id);
-  // Re-render when the store changes so enabled/checked stay current.
-  useStudio(ctx.store, (s) => s);
+  // Re-render only when this command's enabled/checked state changes (not on every drag step).
+  useStudio(ctx.store, () => `${isEnabled(c, ctx)}|${c.checked ? c.checked(ctx) : ''}`);
   const shortcut = c.shortcuts[0] ? displayShortcut(c.shortcuts[0]) : '';
   return {
     c,

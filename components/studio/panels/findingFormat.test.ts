@@ -7,6 +7,7 @@ describe('finding numbers', () => {
   it('humanises keys', () => {
     expect(humanKey('baskingMeanUvi')).toBe('Basking mean UVI');
     expect(humanKey('shadeFraction')).toBe('Shade fraction');
+    expect(humanKey('zoneMaxLo')).toBe('Zone max, lower bound');
   });
 
   it('converts temperatures and lengths by key', () => {

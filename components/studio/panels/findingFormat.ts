@@ -11,7 +11,9 @@ import {
 
 /** "baskingMeanUvi" → "Basking mean UVI". */
 export function humanKey(key: string): string {
+  const bound = /Lo$/.test(key) ? ', lower bound' : /Hi$/.test(key) ? ', upper bound' : '';
   const words = key
+    .replace(/(Lo|Hi)$/, '')
     .replace(/Uvi/g, ' UVI')
     .replace(/Uvb/g, ' UVB')
     .replace(/([a-z])([A-Z])/g, '$1 $2')
@@ -19,7 +21,7 @@ export function humanKey(key: string): string {
     .trim()
     .split(' ');
   const out = words.map((w, i) => (w === 'UVI' || w === 'UVB' ? w : i === 0 ? w : w.toLowerCase()));
-  const s = out.join(' ');
+  const s = out.join(' ') + bound;
   return s.charAt(0).toUpperCase() + s.slice(1);
 }
 

@@ -63,12 +63,12 @@ export class StudioStore {
 
   endGesture() {
     this.applyHistory(H.endGesture(this.state.history));
-    this.setSession({ guides: [] });
+    if (this.state.session.guides.length) this.setSession({ guides: [] });
   }
 
   cancelGesture() {
     this.applyHistory(H.cancelGesture(this.state.history));
-    this.setSession({ guides: [] });
+    if (this.state.session.guides.length) this.setSession({ guides: [] });
   }
 
   get inGesture(): boolean {
