@@ -57,6 +57,10 @@ export class FieldSolver {
   private row2 = new RowData(1);
   private scratch = new Scratch(1);
   private capacity = 0;
+  /** Cells recomputed by a partial update in this call. */
+  private dirty: Uint8Array | null = null;
+  /** Totals of the last call, reused for cells no lamp changed. */
+  private totals: Totals | null = null;
   readonly stats: SolverStats = { full: 0, partial: 0, cached: 0, cellsEvaluated: 0 };
 
   private ensure(n: number) {
@@ -74,41 +78,76 @@ export class FieldSolver {
     const scene = compileScene(design);
     this.ensure(scene.occluders.length);
     this.stats.full = this.stats.partial = this.stats.cached = this.stats.cellsEvaluated = 0;
+    const cells = nx * ny;
+    if (!this.dirty || this.dirty.length !== cells) this.dirty = new Uint8Array(cells);
+    else this.dirty.fill(0);
 
     const occKeys = scene.occluders.map(occluderKey);
     const next = new Map<string, LampEntry>();
-    const cells = nx * ny;
-    const uvb = new Float64Array(cells);
-    const uvi = new Float64Array(cells);
-    const ir = new Float64Array(cells);
+    const hc = opts.convection ?? HEAT_DEFAULTS.convection;
+    const used: LampEntry[] = [];
+    const fu: number[] = [];
+    const fi: number[] = [];
     for (const lamp of scene.lamps) {
       const key = lampKey(lamp, nx, ny, cell);
       const entry = this.lampEntry(lamp, key, scene, occKeys, nx, ny, cell);
       next.set(key, entry);
+      used.push(entry);
       const f = lampUvbFactor(lamp.lamp, opts.addMonths ?? 0);
-      const fu = f;
-      const fi = f * lamp.lamp.uviPerUvb;
-      const eu = entry.uv;
-      const ei = entry.ir;
-      if (lamp.uvI > 0 && f > 0) {
-        for (let c = 0; c < cells; c++) {
-          const v = eu[c]!;
-          uvb[c] = uvb[c]! + v * fu;
-          uvi[c] = uvi[c]! + v * fi;
-        }
-      }
-      if (lamp.irI > 0) for (let c = 0; c < cells; c++) ir[c] = ir[c]! + ei[c]!;
+      fu.push(lamp.uvI > 0 ? f : 0);
+      fi.push(lamp.uvI > 0 ? f * lamp.lamp.uviPerUvb : 0);
     }
     this.entries = next;
+    // Everything the totals depend on besides the per-lamp fields.
+    const sumKey = JSON.stringify([
+      used.map((e) => e.key),
+      fu,
+      fi,
+      scene.roomC,
+      scene.airRiseK,
+      height,
+      hc,
+      nx,
+      ny,
+      cell,
+    ]);
+    const last = this.totals;
+    const incremental = last !== null && last.key === sumKey && this.stats.full === 0;
+    const t = incremental ? last : newTotals(sumKey, cells);
+    const air = new Float64Array(ny);
+    for (let j = 0; j < ny; j++)
+      air[j] = airTempC((j + 0.5) * cell, scene.height, scene.roomC, scene.airRiseK);
+    const dirty = this.dirty;
+    const n = used.length;
+    // Totals are always summed lamp by lamp in scene order, so an incremental update is bit-identical
+    // to a full one.
+    for (let c = 0; c < cells; c++) {
+      if (incremental && dirty[c] === 0) continue;
+      let u = 0;
+      let v = 0;
+      let q = 0;
+      for (let k = 0; k < n; k++) {
+        const e = used[k]!;
+        const val = e.uv[c]!;
+        u += val * fu[k]!;
+        v += val * fi[k]!;
+        q += e.ir[c]!;
+      }
+      t.uvb[c] = u;
+      t.uvi[c] = v;
+      const a = air[(c / nx) | 0]!;
+      t.tempC[c] = q > 0 ? surfaceTempC(HEAT_DEFAULTS.absorptance * q, a, HEAT_DEFAULTS.emissivity, hc) : a;
+    }
+    this.totals = t;
     return {
       nx,
       ny,
       cellCm: cell,
       width,
       height,
-      uvb: new Float32Array(uvb),
-      uvi: new Float32Array(uvi),
-      tempC: temperatures(ir, scene, nx, ny, cell, opts.convection ?? HEAT_DEFAULTS.convection),
+      uvb: new Float32Array(t.uvb),
+      uvi: new Float32Array(t.uvi),
+      tempC: new Float32Array(t.tempC),
     };
   }
 
@@ -190,21 +229,31 @@ export class FieldSolver {
     const changedLamp = withTransmissions(lamp, changed);
     const uv = old.uv;
     const ir = old.ir;
+    const dirty = this.dirty!;
     for (let j = 0; j < ny; j++) {
       const qy = (j + 0.5) * cell;
       if (!prepareRow(changedLamp, changed, qy, probeRow, s)) continue;
       if (probeRow.count === 0) continue;
       prepareRow(lamp, occluders, qy, row, s);
       const base = j * nx;
+      // Union of the affected ranges (old and new positions of a dragged barrier overlap).
+      const ranges: [number, number][] = [];
       for (let c = 0; c < probeRow.count; c++) {
         const i0 = Math.max(0, Math.floor(probeRow.qa[c]! / cell - 0.5));
         const i1 = Math.min(nx - 1, Math.ceil(probeRow.qb[c]! / cell - 0.5));
-        for (let i = i0; i <= i1; i++) {
+        if (i1 >= i0) ranges.push([i0, i1]);
+      }
+      ranges.sort((a, b) => a[0] - b[0]);
+      let next = 0;
+      for (const [a, b] of ranges) {
+        for (let i = Math.max(a, next); i <= b; i++) {
           evalCell(lamp, row, (i + 0.5) * cell, s);
           uv[base + i] = s.uv;
           ir[base + i] = s.ir;
+          dirty[base + i] = 1;
+          this.stats.cellsEvaluated++;
         }
-        this.stats.cellsEvaluated += Math.max(0, i1 - i0 + 1);
+        if (b + 1 > next) next = b + 1;
       }
     }
   }
@@ -290,23 +339,13 @@ function withTransmissions(lamp: LampGeom, occluders: Occluder[]): LampGeom {
   return { ...lamp, tUv, tIr };
 }
 
-function temperatures(
-  ir: Float64Array,
-  scene: Scene,
-  nx: number,
-  ny: number,
-  cell: number,
-  hc: number,
-): Float32Array {
-  const out = new Float32Array(nx * ny);
-  const { absorptance, emissivity } = HEAT_DEFAULTS;
-  for (let j = 0; j < ny; j++) {
-    const air = airTempC((j + 0.5) * cell, scene.height, scene.roomC, scene.airRiseK);
-    const base = j * nx;
-    for (let i = 0; i < nx; i++) {
-      const q = ir[base + i]!;
-      out[base + i] = q > 0 ? surfaceTempC(absorptance * q, air, emissivity, hc) : air;
-    }
-  }
-  return out;
+interface Totals {
+  key: string;
+  uvb: Float64Array;
+  uvi: Float64Array;
+  tempC: Float64Array;
+}
+
+function newTotals(key: string, cells: number): Totals {
+  return { key, uvb: new Float64Array(cells), uvi: new Float64Array(cells), tempC: new Float64Array(cells) };
 }
