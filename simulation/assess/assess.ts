@@ -56,7 +56,10 @@ export function assess(
   species: SpeciesSheet,
   opts: SimOptions & { grid?: FieldGrid } = {},
 ): Assessment {
-  const s = sample(design);
+  return assessSampled(design, sample(design), species, opts);
+}
+
+function assessSampled(design: Design, s: Sampled, species: SpeciesSheet, opts: SimOptions): Assessment {
   const { uvb, uvi } = combineUv(s, opts.addMonths ?? 0);
   const hc = opts.convection ?? HEAT_DEFAULTS.convection;
   const tempC = Array.from(s.lamps.ir, (q, p) =>
@@ -75,10 +78,27 @@ export function assess(
  * no longer a pass; null if it still passes at maxMonths.
  */
 export function monthsUntilUnmet(design: Design, species: SpeciesSheet, maxMonths = 24): number | null {
-  const s = sample(design);
+  return monthsSampled(sample(design), species, maxMonths);
+}
+
+function monthsSampled(s: Sampled, species: SpeciesSheet, maxMonths: number): number | null {
   for (let m = 0; m <= maxMonths; m++) {
     const { uvi } = combineUv(s, m);
     if (baskingStatus(maxReachableUvi(uvi), species.uvZone) !== 'pass') return m;
   }
   return null;
+}
+
+/** Both the assessment and monthsUntilUnmet, sampling the surfaces once (used by the worker). */
+export function assessWithAgeing(
+  design: Design,
+  species: SpeciesSheet,
+  opts: SimOptions = {},
+  maxMonths = 24,
+): { assessment: Assessment; monthsUntilUnmet: number | null } {
+  const s = sample(design);
+  return {
+    assessment: assessSampled(design, s, species, opts),
+    monthsUntilUnmet: monthsSampled(s, species, maxMonths),
+  };
 }

@@ -6,7 +6,7 @@ import { parseDesign } from '../model/parse';
 import { speciesSheetSchema } from '../model/species';
 import { firstIssue } from '../model/parse';
 import { FieldSolver } from '../fields/solver';
-import { assess, monthsUntilUnmet } from '../assess/assess';
+import { assessWithAgeing } from '../assess/assess';
 import type { SimRequest, SimResponse } from './protocol';
 
 const now = () => (typeof performance !== 'undefined' ? performance.now() : Date.now());
@@ -35,8 +35,9 @@ export function handleRequest(req: SimRequest, solver: FieldSolver = new FieldSo
     const opts = { cellCm: req.cellCm, addMonths };
     const grid = solver.compute(design, opts);
     const probes = req.probes?.length ? solver.probe(design, req.probes, opts) : undefined;
-    const assessment = species ? assess(design, species, { ...opts, grid }) : undefined;
-    const until = species ? monthsUntilUnmet(design, species) : undefined;
+    const checked = species ? assessWithAgeing(design, species, opts) : undefined;
+    const assessment = checked?.assessment;
+    const until = checked?.monthsUntilUnmet;
     return {
       id,
       kind: 'result',
