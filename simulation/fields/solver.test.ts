@@ -11,7 +11,7 @@ describe('FieldSolver cache', () => {
     fc.assert(
       fc.property(arbDesign({ maxObjects: 10 }), barrier, fc.nat(20), (design, replacement, pick) => {
         const solver = new FieldSolver();
-        const opts = { cellCm: 3 };
+        const opts = { cellCm: 4 };
         solver.compute(design, opts);
         const barriers = design.objects.filter((o) => o.type !== 'lamp');
         // Replace one barrier with another shape (a move, resize or change), or add one if there is none.
@@ -29,7 +29,7 @@ describe('FieldSolver cache', () => {
         const back = solver.compute(design, opts);
         expect(back.uvb).toEqual(computeFields(design, opts).uvb);
       }),
-      { numRuns: 80 },
+      { numRuns: 40 },
     );
   });
 
