@@ -23,7 +23,6 @@ export function ReadingForm({ lampId, lastMeter }: { lampId: number; lastMeter: 
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<{ field?: string; message: string } | null>(null);
   const [saved, setSaved] = useState<string | null>(null);
-  const [takenAt, setTakenAt] = useState(nowLocal);
 
   async function submit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
@@ -56,15 +55,15 @@ export function ReadingForm({ lampId, lastMeter }: { lampId: number; lastMeter: 
   return (
     <form onSubmit={submit} className="space-y-3" aria-label="Add a reading" noValidate>
       <div className="grid gap-3 sm:grid-cols-2">
-        <Field
-          label="Taken at"
-          name="takenAt"
-          type="datetime-local"
-          value={takenAt}
-          onChange={(e) => setTakenAt(e.target.value)}
-          required
-          error={err('takenAt')}
-        />
+        {/* Filled in the browser: the server's clock and time zone are not the reader's. */}
+        <div
+          ref={(div) => {
+            const el = div?.querySelector('input');
+            if (el && !el.value) el.value = nowLocal();
+          }}
+        >
+          <Field label="Taken at" name="takenAt" type="datetime-local" required error={err('takenAt')} />
+        </div>
         <Field
           label={`Distance below the lamp (${unit})`}
           name="distance"

@@ -90,7 +90,11 @@ export async function applyCalibrationTo(
     throw conflict('Someone saved this variant after the proposal was made. Look at it again.', 'stale');
   }
   const design = readStoredDesign(variant.designJson);
-  const calibrated = lampSchema.parse(applyCalibration(target.object, target.calibration.fields));
+  const fields = applyCalibration(target.object, target.calibration.fields);
+  // The note "calibrated from n readings on <date>" goes on the lamp object once the design schema has a
+  // place for it (an optional `calibration` field); until then the fields alone are written.
+  const withNote = lampSchema.safeParse({ ...fields, calibration: target.calibration.calibrated });
+  const calibrated = withNote.success ? withNote.data : lampSchema.parse(fields);
   const next = {
     ...design,
     objects: design.objects.map((o) => (o.type === 'lamp' && o.id === lamp.designObjectId ? calibrated : o)),
