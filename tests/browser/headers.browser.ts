@@ -1,0 +1,28 @@
+// The security headers of next.config.ts on the running production server: a page, the sign-in page,
+// an API route of ours (answering 401 and 200), next-auth's own route and a static file.
+import { describe, expect, it } from 'vitest';
+import { EXPECTED_HEADERS } from '../security/expected-headers';
+import { BASE_URL } from './harness';
+
+const PATHS: [path: string, status: number][] = [
+  ['/', 200],
+  ['/sign-in', 200],
+  ['/api/enclosures?organisationId=1', 401],
+  ['/api/health', 200],
+  ['/api/auth/csrf', 200],
+  ['/icon.svg', 200],
+];
+
+describe('security headers on the running app', () => {
+  for (const [path, status] of PATHS) {
+    it(`${path} carries every security header`, async () => {
+      const res = await fetch(`${BASE_URL}${path}`, { redirect: 'manual' });
+      await res.body?.cancel();
+      expect(res.status).toBe(status);
+      for (const [name, pattern] of Object.entries(EXPECTED_HEADERS)) {
+        expect(res.headers.get(name), `${path}: ${name}`).toMatch(pattern);
+      }
+      expect(res.headers.get('x-powered-by')).toBeNull();
+    });
+  }
+});
