@@ -54,3 +54,27 @@ describe('FieldSolver cache', () => {
     expect(solver.stats.cellsEvaluated).toBeLessThan(240 * 120 * 0.5);
   });
 });
+
+describe('FieldSolver grid sizes', () => {
+  it('keeps the cache of the previous cell size (coarse while dragging, fine at rest)', () => {
+    const solver = new FieldSolver();
+    const d: Design = {
+      format: 'baskwell.design',
+      version: 1,
+      enclosure: { width: 60, height: 40, depth: 40 },
+      objects: [
+        { type: 'lamp', id: 't', tech: 't5', form: 'tube', x: 30, y: 42, length: 40 },
+        { type: 'perch', id: 'p', x1: 10, y1: 20, x2: 30, y2: 25, thickness: 3 },
+      ],
+    };
+    solver.compute(d, { cellCm: 0.5 });
+    const moved = { ...d, objects: [d.objects[0]!, { ...d.objects[1]!, x1: 12 } as DesignObject] };
+    solver.compute(moved, { cellCm: 2 });
+    expect(solver.stats.full).toBe(1);
+    const back = solver.compute(moved, { cellCm: 0.5 });
+    expect(solver.stats.partial).toBe(1);
+    expect(back.uvb).toEqual(computeFields(moved, { cellCm: 0.5 }).uvb);
+    solver.compute(d, { cellCm: 2 });
+    expect(solver.stats.partial).toBe(1);
+  });
+});

@@ -48,11 +48,20 @@ export interface SolverStats {
   cellsEvaluated: number;
 }
 
+/** Grid sizes kept besides the current one. */
+const MAX_OTHER_GRIDS = 1;
+
 /** Most barriers that may change for a partial recompute to be tried. */
 const MAX_CHANGED_FOR_PARTIAL = 4;
 
 export class FieldSolver {
   private entries = new Map<string, LampEntry>();
+  /**
+   * Caches of other grid sizes, most recent last: the studio switches to a coarser cell while dragging
+   * and back when the drag ends, and each size keeps its own lamp fields and totals.
+   */
+  private otherGrids = new Map<string, { entries: Map<string, LampEntry>; totals: Totals | null }>();
+  private gridKey = '';
   private row = new RowData(1);
   private row2 = new RowData(1);
   private scratch = new Scratch(1);
@@ -79,6 +88,7 @@ export class FieldSolver {
     this.ensure(scene.occluders.length);
     this.stats.full = this.stats.partial = this.stats.cached = this.stats.cellsEvaluated = 0;
     const cells = nx * ny;
+    this.switchGrid(JSON.stringify([nx, ny, cell]));
     if (!this.dirty || this.dirty.length !== cells) this.dirty = new Uint8Array(cells);
     else this.dirty.fill(0);
 
@@ -149,6 +159,20 @@ export class FieldSolver {
       uvi: new Float32Array(t.uvi),
       tempC: new Float32Array(t.tempC),
     };
+  }
+
+  private switchGrid(key: string) {
+    if (key === this.gridKey) return;
+    const saved = this.otherGrids.get(key);
+    this.otherGrids.delete(key);
+    if (this.gridKey) {
+      this.otherGrids.set(this.gridKey, { entries: this.entries, totals: this.totals });
+      while (this.otherGrids.size > MAX_OTHER_GRIDS)
+        this.otherGrids.delete(this.otherGrids.keys().next().value!);
+    }
+    this.entries = saved?.entries ?? new Map();
+    this.totals = saved?.totals ?? null;
+    this.gridKey = key;
   }
 
   private lampEntry(
