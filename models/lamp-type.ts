@@ -6,19 +6,10 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from 'sequelize';
+import { LAMP_TECH_IDS as ENGINE_LAMP_TECH_IDS } from '../simulation/model/techs';
 
-/** The generic lamp technologies of the design file (BRIEF §3 `tech`). */
-export const LAMP_TECH_IDS = [
-  't5',
-  't8',
-  'compact',
-  'mercury-vapour',
-  'metal-halide',
-  'led-uvb',
-  'halogen',
-  'incandescent',
-  'ceramic',
-] as const;
+/** The generic lamp technologies of the design file (BRIEF §3 `tech`), as the engine defines them. */
+export const LAMP_TECH_IDS = ENGINE_LAMP_TECH_IDS;
 export type LampTechId = (typeof LAMP_TECH_IDS)[number];
 
 export const LAMP_FORMS = ['tube', 'bulb'] as const;

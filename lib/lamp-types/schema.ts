@@ -1,5 +1,8 @@
 import { z } from 'zod';
-import { LAMP_FORMS, LAMP_TECH_IDS } from '@/models/lamp-type';
+import { LAMP_TECH_IDS } from '@/simulation';
+
+/** Pure (no database imports): the forms use this schema in the browser. */
+const LAMP_FORMS = ['tube', 'bulb'] as const;
 
 /** A lamp catalogue entry as the API and the forms exchange it. */
 

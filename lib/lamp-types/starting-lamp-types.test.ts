@@ -60,3 +60,16 @@ describe('starting lamp catalogue', () => {
     }
   });
 });
+
+describe('source notes of the starting catalogue', () => {
+  it('keep only the clauses about the field, in words people read', async () => {
+    const { clauses } = await import('./starting-lamp-types');
+    expect(clauses('a: x; radiantFraction 0.5 (from memory); decay: y', ['radiantFraction'])).toBe(
+      'radiantFraction 0.5 (from memory)',
+    );
+    expect(clauses('nothing relevant', ['beam'])).toBe('nothing relevant');
+    for (const l of STARTING_LAMP_TYPES) {
+      for (const note of Object.values(l.sources)) expect(note).not.toMatch(/LAMP_TECHS|presets\.ts/);
+    }
+  });
+});

@@ -27,15 +27,16 @@ export function startingLampType(presetKey: LampPresetId): StartingLampType {
   const decays = uvbAt30 > 0 && halfLife !== null && halfLife < NO_DECAY_MONTHS;
   const replace = TYPICAL_REPLACEMENT_MONTHS[lamp.tech];
 
-  const techNote = `${tech.label} defaults: ${tech.source}`;
+  const presetNote = readable(preset.source);
+  const techNote = (...keys: string[]) => `${tech.label} defaults: ${readable(clauses(tech.source, keys))}`;
   const sources: Partial<Record<LampTypeField, string>> = {
-    uvbAt30: preset.source,
-    watts: preset.source,
-    beamDeg: lamp.beamDeg !== undefined ? preset.source : techNote,
-    uviPerUvb: techNote,
-    radiantFraction: techNote,
+    uvbAt30: presetNote,
+    watts: presetNote,
+    beamDeg: lamp.beamDeg !== undefined ? presetNote : techNote('beamDeg', 'beam'),
+    uviPerUvb: techNote('uviPerUvb'),
+    radiantFraction: techNote('radiantFraction'),
     reflectorGain: 'bare lamp, no reflector (gain 1)',
-    halfLifeMonths: decays ? techNote : 'no UVB output to decay',
+    halfLifeMonths: decays ? techNote('decay', 'half-life') : 'no UVB output to decay',
     replaceAfterMonths:
       replace !== null
         ? REPLACEMENT_SOURCE
@@ -43,7 +44,7 @@ export function startingLampType(presetKey: LampPresetId): StartingLampType {
           ? LED_REPLACEMENT_SOURCE
           : HEAT_REPLACEMENT_SOURCE,
   };
-  if (lamp.form === 'tube') sources.lengthCm = preset.source;
+  if (lamp.form === 'tube') sources.lengthCm = presetNote;
 
   return {
     presetKey,
@@ -63,6 +64,20 @@ export function startingLampType(presetKey: LampPresetId): StartingLampType {
     notes: preset.usefulReachCm !== null ? usefulReachNote(preset.usefulReachCm) : null,
     sources,
   };
+}
+
+/** The parts of an engine source note (clauses separated by ";") that speak of one of `keys`. */
+export function clauses(source: string, keys: string[]): string {
+  const parts = source.split(/;\s*/);
+  const hit = parts.filter((p) => keys.some((k) => p.toLowerCase().includes(k.toLowerCase())));
+  return hit.length > 0 ? hit.join('; ') : source;
+}
+
+/** Engine notes name code constants; people read "the technology's defaults". */
+function readable(note: string): string {
+  return note
+    .replace(/\bsee LAMP_TECHS\b/g, 'see the technology’s defaults')
+    .replace(/\(see presets\.ts\)/g, '(the preset)');
 }
 
 function usefulReachNote(cm: number): string {

@@ -32,7 +32,7 @@ beforeEach(async () => {
 
 const list = (as: User | null, extra = '') =>
   call(collection.GET, { path: `/api/lamp-types?organisationId=${shop.id}${extra}`, as });
-const post = (as: User, body: unknown) =>
+const post = (as: User, body: Record<string, unknown>) =>
   call(collection.POST, {
     method: 'POST',
     path: '/api/lamp-types',

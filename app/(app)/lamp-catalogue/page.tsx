@@ -1,36 +1,53 @@
 import type { Metadata } from 'next';
+import Link from 'next/link';
+import { LampTypeTable } from '@/components/catalogue/LampTypeTable';
 import { EmptyState } from '@/components/ui/EmptyState';
+import { Notice } from '@/components/ui/Notice';
 import { PageHeader } from '@/components/ui/PageHeader';
+import { button } from '@/components/ui/styles';
+import { allLampTypes } from '@/lib/lamp-types/store';
 import { can } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
+import { ensureStartingCatalogue } from '@/lib/species/seed';
 
 export const metadata: Metadata = { title: 'Lamp catalogue' };
 
 export default async function LampCataloguePage() {
   const user = await requireUser('/lamp-catalogue');
   const membership = await currentMembership(user);
-  const mayEdit = membership
-    ? can(user, 'create', { kind: 'lamp-type', organisationId: membership.organisationId })
-    : false;
+  if (!membership) return null;
+  const organisationId = membership.organisationId;
+  await ensureStartingCatalogue(organisationId);
+  const lampTypes = await allLampTypes(organisationId);
+  const mayEdit = can(user, 'create', { kind: 'lamp-type', organisationId });
+  const add = mayEdit && (
+    <Link href="/lamp-catalogue/new" className={button.primary}>
+      Add a lamp type
+    </Link>
+  );
+
   return (
     <>
       <PageHeader
         title="Lamp catalogue"
-        lead="The lamp types your organisation uses: technology, wattage, UVB output at 30 cm and beam."
+        lead="Generic lamp technologies and the defaults a new lamp of each kind gets in a design: UVB at 30 cm, UV Index ratio, heat, beam, power and ageing."
+        actions={add}
       />
-      <EmptyState title="No lamp types yet">
-        <p>
-          Each entry describes a kind of lamp by its technology (T5 or T8 tube, compact, mercury vapour, metal
-          halide, LED UVB, halogen, incandescent, ceramic), its UVB at 30 cm when new, its UV Index ratio,
-          wattage and beam. Designs and the lamp log pick lamps from here.
-        </p>
-        <p>
-          {mayEdit
-            ? 'Owners and staff add and edit entries here.'
-            : 'Owners and staff of your organisation add entries here.'}{' '}
-          Catalogue values are averages: a meter reading of the real lamp is what counts.
-        </p>
-      </EmptyState>
+      <div className="mb-6">
+        <Notice tone="warning" title="Catalogue values are typical, not your lamp">
+          Real lamps of one technology differ widely. Each entry says where its figures come from; most are
+          common practice or from memory. A meter reading of the real lamp, logged in the lamp log, is what
+          counts.
+        </Notice>
+      </div>
+      {lampTypes.length === 0 ? (
+        <EmptyState title="No lamp types yet" action={add}>
+          <p>Each entry describes a kind of lamp by its technology, output, beam, power and ageing.</p>
+          {!mayEdit && <p>Owners and staff of your organisation add entries here.</p>}
+        </EmptyState>
+      ) : (
+        <LampTypeTable lampTypes={lampTypes} />
+      )}
     </>
   );
 }

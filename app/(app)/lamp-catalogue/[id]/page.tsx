@@ -1,0 +1,62 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { CautionList } from '@/components/cautions/CautionList';
+import { DeleteLampTypeButton } from '@/components/catalogue/DeleteLampTypeButton';
+import { LampTypeView } from '@/components/catalogue/LampTypeView';
+import { PageHeader } from '@/components/ui/PageHeader';
+import { button, card, link } from '@/components/ui/styles';
+import { requireUser } from '@/lib/session';
+import { loadLampType } from '../load';
+
+type Props = { params: Promise<{ id: string }> };
+
+export async function generateMetadata({ params }: Props): Promise<Metadata> {
+  const user = await requireUser();
+  const { lampType } = await loadLampType(user, (await params).id);
+  return { title: lampType.name };
+}
+
+export default async function LampTypePage({ params }: Props) {
+  const { id } = await params;
+  const user = await requireUser(`/lamp-catalogue/${id}`);
+  const { lampType, mayEdit } = await loadLampType(user, id);
+  return (
+    <>
+      <p className="mb-2 text-body">
+        <Link href="/lamp-catalogue" className={link}>
+          ← Lamp catalogue
+        </Link>
+      </p>
+      <PageHeader
+        title={lampType.name}
+        lead={
+          lampType.presetKey
+            ? 'A starting entry, taken from the engine’s generic presets. Edit it to match the lamps you use.'
+            : 'Added by your organisation.'
+        }
+        actions={
+          mayEdit && (
+            <>
+              <Link href={`/lamp-catalogue/${lampType.id}/edit`} className={button.primary}>
+                Edit
+              </Link>
+              <DeleteLampTypeButton id={lampType.id} name={lampType.name} />
+            </>
+          )
+        }
+      />
+      <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
+        <div className="space-y-6">
+          <LampTypeView lampType={lampType} />
+          {lampType.notes && (
+            <section className={`${card} p-5`}>
+              <h2 className="mb-2 text-lead font-semibold text-basalt-900">Notes</h2>
+              <p className="whitespace-pre-line text-body text-basalt-800">{lampType.notes}</p>
+            </section>
+          )}
+        </div>
+        <CautionList techs={[lampType.tech]} title="Safety with this lamp" />
+      </div>
+    </>
+  );
+}

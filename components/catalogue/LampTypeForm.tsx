@@ -1,0 +1,233 @@
+'use client';
+
+import { useRouter } from 'next/navigation';
+import { useEffect, useState, type FormEvent } from 'react';
+import { ApiClientError, sendJson } from '@/components/ui/api-client';
+import { Field } from '@/components/ui/Field';
+import { Notice } from '@/components/ui/Notice';
+import { button, card, input } from '@/components/ui/styles';
+import { UnitToggle } from '@/components/ui/UnitToggle';
+import { useLengthUnit } from '@/components/ui/units';
+import {
+  LAMP_FIELD_LABELS,
+  lampTypeInputSchema,
+  type LampTypeDto,
+  type LampTypeField,
+} from '@/lib/lamp-types/schema';
+import { LAMP_TECH_IDS, type LampTech as LampTechId } from '@/simulation';
+import {
+  initialLampState,
+  lampPayload,
+  techDefaults,
+  withLengthUnit,
+  type LampFormState,
+} from './lamp-form-state';
+import { techLabel } from './labels';
+
+type NumericField = Exclude<LampTypeField, 'lengthCm'>;
+const NUMERIC: { key: NumericField; hint: string }[] = [
+  { key: 'uvbAt30', hint: 'µW/cm² directly below, 30 cm away, new and bare. 0 for heat-only lamps.' },
+  { key: 'uviPerUvb', hint: 'UV Index per µW/cm² of broadband UVB; depends on the spectrum.' },
+  { key: 'radiantFraction', hint: 'Share of the power leaving as radiant heat, 0 to 1.' },
+  { key: 'beamDeg', hint: 'Full beam angle, 1–360° (360: a bare lamp lighting all around).' },
+  {
+    key: 'reflectorGain',
+    hint: '1 for a bare lamp; a built-in reflector multiplies the output inside its beam.',
+  },
+  { key: 'watts', hint: 'Electrical power.' },
+  { key: 'halfLifeMonths', hint: 'Months until UVB output halves. Empty: the technology’s default.' },
+  { key: 'replaceAfterMonths', hint: 'Typical replacement interval. Empty: replace when it fails.' },
+];
+
+/** Create or edit a catalogue entry; checked with the API's own schema before sending. */
+export function LampTypeForm({
+  organisationId,
+  lampType,
+}: {
+  organisationId: number;
+  lampType: LampTypeDto | null;
+}) {
+  const router = useRouter();
+  const [unit] = useLengthUnit();
+  const [st, setSt] = useState<LampFormState>(() => initialLampState(lampType, unit));
+  const [errors, setErrors] = useState<Record<string, string>>({});
+  const [general, setGeneral] = useState<string | null>(null);
+  const [saving, setSaving] = useState(false);
+  const [dirty, setDirty] = useState(false);
+
+  if (st.lengthUnit !== unit) setSt(withLengthUnit(st, unit));
+
+  useEffect(() => {
+    if (!dirty) return;
+    const warn = (e: BeforeUnloadEvent) => e.preventDefault();
+    window.addEventListener('beforeunload', warn);
+    return () => window.removeEventListener('beforeunload', warn);
+  }, [dirty]);
+
+  const update = (patch: Partial<LampFormState>) => {
+    setSt((s) => ({ ...s, ...patch }));
+    setDirty(true);
+  };
+
+  async function submit(e: FormEvent) {
+    e.preventDefault();
+    const parsed = lampTypeInputSchema.safeParse({
+      ...lampPayload(st),
+      decayPoints: lampType?.decayPoints ?? null,
+    });
+    if (!parsed.success) {
+      const next: Record<string, string> = {};
+      for (const i of parsed.error.issues) next[i.path.join('.')] ??= i.message;
+      setErrors(next);
+      setGeneral('Some fields need attention: see the messages beside them.');
+      return;
+    }
+    setErrors({});
+    setGeneral(null);
+    setSaving(true);
+    try {
+      const saved = lampType
+        ? await sendJson<LampTypeDto>('PATCH', `/api/lamp-types/${lampType.id}`, parsed.data)
+        : await sendJson<LampTypeDto>('POST', '/api/lamp-types', { organisationId, ...parsed.data });
+      setDirty(false);
+      router.push(`/lamp-catalogue/${saved.id}`);
+      router.refresh();
+    } catch (err) {
+      if (err instanceof ApiClientError && err.field) setErrors({ [err.field]: err.message });
+      setGeneral(err instanceof Error ? err.message : 'The lamp type could not be saved. Try again.');
+      setSaving(false);
+    }
+  }
+
+  return (
+    <form onSubmit={submit} noValidate className="space-y-6">
+      {general && <Notice tone="error">{general}</Notice>}
+      <fieldset className={`${card} grid gap-4 p-5 sm:grid-cols-2`}>
+        <legend className="px-1 text-lead font-semibold text-basalt-900">Lamp type</legend>
+        <Field
+          label="Name"
+          value={st.name}
+          onChange={(e) => update({ name: e.target.value })}
+          error={errors.name}
+          hint="A generic description, e.g. “T5 tube, high output, 115 cm”."
+        />
+        <div>
+          <label htmlFor="tech" className="mb-1 block text-body font-medium text-basalt-800">
+            Technology
+          </label>
+          <select
+            id="tech"
+            className={input}
+            value={st.tech}
+            onChange={(e) => update({ tech: e.target.value as LampTechId })}
+          >
+            {LAMP_TECH_IDS.map((t) => (
+              <option key={t} value={t}>
+                {techLabel(t)}
+              </option>
+            ))}
+          </select>
+          <button
+            type="button"
+            className={`${button.quiet} mt-1`}
+            onClick={() => update(techDefaults(st.tech, st.lengthUnit))}
+          >
+            Fill in this technology’s defaults
+          </button>
+        </div>
+        <div>
+          <label htmlFor="form" className="mb-1 block text-body font-medium text-basalt-800">
+            Form
+          </label>
+          <select
+            id="form"
+            className={input}
+            value={st.form}
+            onChange={(e) => update({ form: e.target.value as 'tube' | 'bulb' })}
+          >
+            <option value="tube">Tube</option>
+            <option value="bulb">Bulb, spot or panel</option>
+          </select>
+        </div>
+        {st.form === 'tube' && (
+          <div>
+            <div className="flex items-end gap-2">
+              <Field
+                className="flex-1"
+                label={`Tube length (${st.lengthUnit})`}
+                inputMode="decimal"
+                value={st.length}
+                onChange={(e) => update({ length: e.target.value })}
+                error={errors.lengthCm}
+              />
+              <UnitToggle />
+            </div>
+          </div>
+        )}
+      </fieldset>
+
+      <fieldset className={`${card} grid gap-4 p-5 sm:grid-cols-2`}>
+        <legend className="px-1 text-lead font-semibold text-basalt-900">Output and ageing</legend>
+        {NUMERIC.map(({ key, hint }) => (
+          <Field
+            key={key}
+            label={LAMP_FIELD_LABELS[key]}
+            inputMode="decimal"
+            value={st[key]}
+            onChange={(e) => update({ [key]: e.target.value })}
+            error={errors[key]}
+            hint={hint}
+          />
+        ))}
+      </fieldset>
+
+      <fieldset className={`${card} grid gap-3 p-5`}>
+        <legend className="px-1 text-lead font-semibold text-basalt-900">Where the figures come from</legend>
+        <p className="text-body text-basalt-600">
+          For each figure, a published source, your own meter readings, or “common practice, no published
+          source”.
+        </p>
+        {(
+          [
+            'uvbAt30',
+            'uviPerUvb',
+            'radiantFraction',
+            'beamDeg',
+            'watts',
+            'halfLifeMonths',
+            'replaceAfterMonths',
+          ] as const
+        ).map((f) => (
+          <Field
+            key={f}
+            label={`Source: ${LAMP_FIELD_LABELS[f]}`}
+            value={st.sources[f] ?? ''}
+            onChange={(e) => update({ sources: { ...st.sources, [f]: e.target.value } })}
+            error={errors[`sources.${f}`]}
+          />
+        ))}
+        <div>
+          <label htmlFor="lamp-notes" className="mb-1 block text-body font-medium text-basalt-800">
+            Notes
+          </label>
+          <textarea
+            id="lamp-notes"
+            rows={3}
+            className={input}
+            value={st.notes}
+            onChange={(e) => update({ notes: e.target.value })}
+          />
+        </div>
+      </fieldset>
+
+      <div className="flex flex-wrap gap-2">
+        <button type="submit" className={button.primary} disabled={saving}>
+          {saving ? 'Saving…' : lampType ? 'Save changes' : 'Add lamp type'}
+        </button>
+        <button type="button" className={button.secondary} onClick={() => router.back()} disabled={saving}>
+          Cancel
+        </button>
+      </div>
+    </form>
+  );
+}
