@@ -1,0 +1,322 @@
+#!/usr/bin/env node
+// `npm run load -- [URL] [--rate N] [--duration S] [--connections N]`: a fixed-rate load run with
+// autocannon against a running production server (`npm start`, or `next start` on a build). It signs in
+// as a demo staff member (next-auth's CSRF token, then the credentials callback), makes a throw-away
+// design of its own, and measures, one after another at the same request rate:
+//   the cheapest routes (/api/health: one `SELECT 1`; /api/auth/csrf: no database),
+//   the design read GET /api/variants/[id], the design save PUT /api/variants/[id] (carrying the version
+//   forward; 409s from saves that crossed are counted apart), and the public share page /s/<token>.
+// Prints a table (requests/s, p50, p99, and p50/p99 as a multiple of the cheapest route's) and one final
+// JSON line; removes its design at the end. Figures, not a pass/fail test: the machine decides them.
+//
+// URL: the first argument, else LOAD_BASE_URL, else APP_URL, else http://localhost:3000.
+// Account: LOAD_EMAIL / LOAD_PASSWORD, else the demo scenario's first staff member.
+import autocannon from 'autocannon';
+import { pathToFileURL } from 'node:url';
+import path from 'node:path';
+import { loadEnv } from './lib/env.mjs';
+
+const DEMO_STAFF = { email: 'idris.penhallow@example.com', password: 'demo-staff-pass' };
+
+// A design like the one in the product brief: what a save really carries.
+const DESIGN = {
+  format: 'baskwell.design',
+  version: 1,
+  enclosure: { width: 120, height: 60, depth: 60, roomTempC: 24 },
+  objects: [
+    { type: 'lamp', id: 'uv1', tech: 't5', form: 'tube', x: 40, y: 62, length: 55, uvbAt30: 60 },
+    { type: 'lamp', id: 'heat1', tech: 'halogen', form: 'bulb', x: 90, y: 62, uvbAt30: 0, watts: 75 },
+    { type: 'screen', id: 'lid', x1: 0, y1: 60, x2: 120, y2: 60, uvbTransmission: 0.6 },
+    { type: 'perch', id: 'b1', x1: 20, y1: 20, x2: 70, y2: 38, thickness: 4 },
+    { type: 'ledge', id: 'r1', x: 75, y: 0, width: 30, height: 18 },
+    { type: 'hide', id: 'h1', x: 5, y: 0, width: 25, height: 14 },
+  ],
+};
+
+function parseArgs(argv, env) {
+  const opts = {
+    url: env.LOAD_BASE_URL || env.APP_URL || 'http://localhost:3000',
+    rate: 100,
+    duration: 10,
+    connections: 10,
+  };
+  for (let i = 0; i < argv.length; i++) {
+    const a = argv[i];
+    const num = () => {
+      const v = Number(a.includes('=') ? a.slice(a.indexOf('=') + 1) : argv[++i]);
+      if (!Number.isFinite(v) || v <= 0) throw new Error(`${a} needs a positive number`);
+      return v;
+    };
+    if (a.startsWith('--rate')) opts.rate = num();
+    else if (a.startsWith('--duration')) opts.duration = num();
+    else if (a.startsWith('--connections')) opts.connections = Math.round(num());
+    else if (a === '--help' || a === '-h') opts.help = true;
+    else if (!a.startsWith('-')) opts.url = a;
+    else throw new Error(`unknown option ${a} (--rate N, --duration S, --connections N)`);
+  }
+  opts.url = opts.url.replace(/\/+$/, '');
+  return opts;
+}
+
+/** A tiny cookie jar: enough for next-auth's CSRF and session cookies. */
+class Jar {
+  cookies = new Map();
+  take(res) {
+    for (const c of res.headers.getSetCookie()) {
+      const [pair] = c.split(';');
+      const i = pair.indexOf('=');
+      this.cookies.set(pair.slice(0, i).trim(), pair.slice(i + 1).trim());
+    }
+  }
+  header() {
+    return [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ');
+  }
+}
+
+async function api(base, jar, method, p, body) {
+  const res = await fetch(`${base}${p}`, {
+    method,
+    redirect: 'manual',
+    headers: {
+      cookie: jar.header(),
+      origin: base,
+      ...(body === undefined ? {} : { 'content-type': 'application/json' }),
+    },
+    body: body === undefined ? undefined : JSON.stringify(body),
+    signal: AbortSignal.timeout(15_000),
+  });
+  jar.take(res);
+  const text = await res.text();
+  let json = null;
+  try {
+    json = JSON.parse(text);
+  } catch {
+    /* not JSON */
+  }
+  if (!res.ok) throw new Error(`${method} ${p} answered ${res.status}: ${text.slice(0, 200)}`);
+  return json;
+}
+
+/** Signs in the way a script can (STACK-NOTES: CSRF token, then the credentials callback with json=true). */
+async function signIn(base, email, password) {
+  const jar = new Jar();
+  const { csrfToken } = await api(base, jar, 'GET', '/api/auth/csrf');
+  const res = await fetch(`${base}/api/auth/callback/credentials`, {
+    method: 'POST',
+    redirect: 'manual',
+    headers: { cookie: jar.header(), 'content-type': 'application/x-www-form-urlencoded' },
+    body: new URLSearchParams({ csrfToken, email, password, json: 'true' }),
+  });
+  jar.take(res);
+  await res.body?.cancel();
+  if (![...jar.cookies.keys()].some((k) => k.endsWith('next-auth.session-token'))) {
+    throw new Error(`signing in as ${email} failed (${res.status}): is the demo scenario seeded?`);
+  }
+  const session = await api(base, jar, 'GET', '/api/auth/session');
+  return { jar, user: session?.user };
+}
+
+/** Runs autocannon at a fixed rate; resolves its results. */
+function cannon(opts, spec) {
+  return autocannon({
+    url: opts.url,
+    connections: opts.connections,
+    overallRate: opts.rate,
+    duration: opts.duration,
+    timeout: 10,
+    ...spec,
+  });
+}
+
+/** A few sequential requests first, so the run does not measure cold code paths. */
+async function warmUp(base, jar, p, method = 'GET', body) {
+  for (let i = 0; i < 10; i++) {
+    await fetch(`${base}${p}`, {
+      method,
+      headers: { cookie: jar.header(), ...(body ? { 'content-type': 'application/json' } : {}) },
+      body,
+    }).then((r) => r.arrayBuffer());
+  }
+}
+
+function row(name, r, extra = {}) {
+  const codes = Object.fromEntries(
+    Object.entries(r.statusCodeStats ?? {}).map(([code, s]) => [code, Number(s.count)]),
+  );
+  return {
+    name,
+    requests: r.requests.total,
+    rps: Math.round((r.requests.total / r.duration) * 10) / 10,
+    p50: r.latency.p50,
+    p99: r.latency.p99,
+    max: r.latency.max,
+    errors: r.errors,
+    timeouts: r.timeouts,
+    codes,
+    ...extra,
+  };
+}
+
+function printTable(rows, baseline) {
+  const header = ['scenario', 'req/s', 'p50 ms', 'p99 ms', 'p50 ×', 'p99 ×', 'status codes'];
+  const lines = rows.map((r) => [
+    r.name,
+    r.skipped ? '-' : r.rps.toFixed(1),
+    r.skipped ? '-' : String(r.p50),
+    r.skipped ? '-' : String(r.p99),
+    r.skipped || !baseline ? '-' : (r.p50 / Math.max(baseline.p50, 1)).toFixed(2),
+    r.skipped || !baseline ? '-' : (r.p99 / Math.max(baseline.p99, 1)).toFixed(2),
+    r.skipped
+      ? r.skipped
+      : Object.entries(r.codes)
+          .map(([c, n]) => `${c}×${n}`)
+          .join(' '),
+  ]);
+  const widths = header.map((h, i) => Math.max(h.length, ...lines.map((l) => l[i].length)));
+  const fmt = (cells) =>
+    cells.map((c, i) => (i === 0 || i === 6 ? c.padEnd(widths[i]) : c.padStart(widths[i]))).join('  ');
+  console.log(fmt(header));
+  console.log(widths.map((w) => '-'.repeat(w)).join('  '));
+  for (const l of lines) console.log(fmt(l));
+}
+
+async function main() {
+  const env = loadEnv();
+  const opts = parseArgs(process.argv.slice(2), env);
+  if (opts.help) {
+    console.log('npm run load -- [URL] [--rate N] [--duration S] [--connections N]');
+    return;
+  }
+  const base = opts.url;
+  const email = env.LOAD_EMAIL || DEMO_STAFF.email;
+  const password = env.LOAD_PASSWORD || DEMO_STAFF.password;
+  console.error(
+    `Load run against ${base}: ${opts.rate} requests/s, ${opts.duration} s each, ${opts.connections} connections.`,
+  );
+
+  const { jar, user } = await signIn(base, email, password);
+  const organisationId = user?.memberships?.find(
+    (m) => m.role === 'staff' || m.role === 'owner',
+  )?.organisationId;
+  if (!organisationId) throw new Error(`${email} is not staff or owner of any organisation`);
+  const enclosures = await api(base, jar, 'GET', `/api/enclosures?organisationId=${organisationId}&limit=1`);
+  const enclosureId = enclosures?.items?.[0]?.id;
+  if (!enclosureId) throw new Error('the organisation has no enclosure to put a design in');
+  const made = await api(base, jar, 'POST', `/api/enclosures/${enclosureId}/designs`, {
+    name: `Load run ${new Date().toISOString()}`,
+    design: DESIGN,
+  });
+  const designId = made.design.id;
+  const variantId = made.variant.id;
+  const cookie = jar.header();
+  const authed = { cookie };
+  const rows = [];
+  try {
+    const share = await api(base, jar, 'POST', `/api/variants/${variantId}/shares`, { expiresInDays: 1 });
+    const sharePath = `/s/${share.share.token}`;
+
+    for (const [name, p] of [
+      ['GET /api/health (baseline)', '/api/health'],
+      ['GET /api/auth/csrf', '/api/auth/csrf'],
+    ]) {
+      await warmUp(base, jar, p);
+      rows.push(row(name, await cannon(opts, { url: `${base}${p}` })));
+    }
+
+    const variantPath = `/api/variants/${variantId}`;
+    await warmUp(base, jar, variantPath);
+    rows.push(
+      row('GET /api/variants/[id]', await cannon(opts, { url: `${base}${variantPath}`, headers: authed })),
+    );
+
+    // Each connection edits a variant of its own (as each user edits their own design) and carries its
+    // version forward; a 409 means two saves of one variant crossed, counted apart.
+    const variants = [variantId];
+    while (variants.length < opts.connections) {
+      const v = await api(base, jar, 'POST', `/api/designs/${designId}/variants`, {
+        name: `Load ${variants.length + 1}`,
+        design: DESIGN,
+      });
+      variants.push(v.variant.id);
+    }
+    const versions = new Map();
+    for (const id of variants)
+      versions.set(id, (await api(base, jar, 'GET', `/api/variants/${id}`)).variant.version);
+    let assigned = 0;
+    let saved = 0;
+    let stale = 0;
+    // autocannon clears a request's context on every loop, so the variant is bound per client instead.
+    const saveRequest = (id) => ({
+      method: 'PUT',
+      path: `/api/variants/${id}`,
+      headers: { ...authed, 'content-type': 'application/json' },
+      setupRequest: (req) => ({
+        ...req,
+        body: JSON.stringify({ design: DESIGN, baseVersion: versions.get(id) }),
+      }),
+      onResponse: (status, body) => {
+        try {
+          const json = JSON.parse(body);
+          if (status === 200) {
+            saved++;
+            versions.set(id, Math.max(versions.get(id), json.variant.version));
+          } else if (status === 409) {
+            stale++;
+            versions.set(id, Math.max(versions.get(id), json.current?.version ?? 0));
+          }
+        } catch {
+          /* counted by status code */
+        }
+      },
+    });
+    const save = await cannon(opts, {
+      url: `${base}${variantPath}`,
+      requests: [saveRequest(variantId)],
+      setupClient: (client) => client.setRequests([saveRequest(variants[assigned++ % variants.length])]),
+    });
+    rows.push(row('PUT /api/variants/[id]', save, { saved, stale409: stale }));
+
+    const probe = await fetch(`${base}${sharePath}`);
+    await probe.body?.cancel();
+    if (probe.status === 200) {
+      await warmUp(base, jar, sharePath);
+      rows.push(row('GET /s/<token> (share page)', await cannon(opts, { url: `${base}${sharePath}` })));
+    } else {
+      rows.push({ name: 'GET /s/<token> (share page)', skipped: `not served (${probe.status})` });
+    }
+  } finally {
+    await api(base, jar, 'DELETE', `/api/designs/${designId}`).catch((e) =>
+      console.error(`could not remove the load run's design ${designId}: ${e.message}`),
+    );
+  }
+
+  const baseline = rows[0];
+  console.log('');
+  printTable(rows, baseline);
+  const save = rows.find((r) => r.name.startsWith('PUT'));
+  if (save) console.log(`\nsaves: ${save.saved} stored, ${save.stale409} answered 409 (crossed in flight)`);
+  console.log(
+    JSON.stringify({
+      url: base,
+      rate: opts.rate,
+      durationS: opts.duration,
+      connections: opts.connections,
+      results: rows.map((r) =>
+        r.skipped
+          ? r
+          : {
+              ...r,
+              p50Ratio: Math.round((r.p50 / Math.max(baseline.p50, 1)) * 100) / 100,
+              p99Ratio: Math.round((r.p99 / Math.max(baseline.p99, 1)) * 100) / 100,
+            },
+      ),
+    }),
+  );
+}
+
+if (process.argv[1] && pathToFileURL(path.resolve(process.argv[1])).href === import.meta.url) {
+  main().catch((e) => {
+    console.error(`load run failed: ${e instanceof Error ? e.message : String(e)}`);
+    process.exit(1);
+  });
+}
