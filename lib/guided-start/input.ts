@@ -1,0 +1,46 @@
+import { z } from 'zod';
+
+/** What the guided start asks, as the server checks it. Sizes are inside dimensions in cm, °C. */
+
+const id = (what: string) =>
+  z.coerce
+    .number({ error: `${what} must be a number.` })
+    .int(`${what} must be a whole number.`)
+    .positive(`Choose ${what.toLowerCase()}.`);
+
+const size = (what: string) =>
+  z
+    .number({ error: `Enter the ${what}.` })
+    .finite(`Enter the ${what}.`)
+    .min(20, `The ${what} must be at least 20 cm (8 in).`)
+    .max(400, `The guided start plans enclosures up to 400 cm (13 ft); use the studio for larger ones.`);
+
+export const LIDS = ['mesh', 'glass', 'open'] as const;
+
+export const guidedStartSchema = z.strictObject({
+  organisationId: id('The organisation'),
+  speciesId: id('A species'),
+  widthCm: size('width'),
+  heightCm: size('height'),
+  depthCm: size('depth'),
+  lid: z.enum(LIDS, { error: 'Choose the lid: mesh, glass or open.' }),
+  roomTempC: z
+    .number({ error: 'Enter the room temperature.' })
+    .finite('Enter the room temperature.')
+    .min(5, 'The room temperature must be at least 5 °C (41 °F).')
+    .max(40, 'The room temperature must be at most 40 °C (104 °F).'),
+  keeperId: id('The keeper').optional(),
+  name: z
+    .string({ error: 'Enter a name for the enclosure.' })
+    .trim()
+    .min(1, 'Enter a name for the enclosure.')
+    .max(120, 'Use at most 120 characters.'),
+  animalName: z
+    .string()
+    .trim()
+    .max(120, 'Use at most 120 characters.')
+    .nullish()
+    .transform((v) => (v ? v : null)),
+});
+
+export type GuidedStartInput = z.output<typeof guidedStartSchema>;

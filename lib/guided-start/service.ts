@@ -1,0 +1,114 @@
+import type { Assessment, Design } from '@/simulation';
+import { assertKeeperInOrganisation } from '@/lib/api/enclosures';
+import { badRequest, forbidden, notFound } from '@/lib/api/errors';
+import type { CurrentUser } from '@/lib/auth/session-user';
+import { allLampTypes } from '@/lib/lamp-types/store';
+import { can } from '@/lib/permissions';
+import type { SpeciesSheetDto } from '@/lib/species/schema';
+import { ensureStartingCatalogue } from '@/lib/species/seed';
+import { findSheet, toDto } from '@/lib/species/store';
+import { toEngineSheet } from '@/lib/species/to-engine';
+import { createDesign } from '@/lib/variants/designs';
+import { Enclosure } from '@/models';
+import { explain, type Explanation } from './explain';
+import type { GuidedStartInput } from './input';
+import { propose } from './propose';
+
+/**
+ * The guided start on the server: checks who asks and for what, runs the search on the organisation's
+ * own catalogue and species sheet, and creates the enclosure with its first design and variant.
+ */
+
+export type ProposalView = {
+  sheet: SpeciesSheetDto;
+  design: Design;
+  assessment: Assessment;
+  explanation: Explanation;
+  summary: { uvLamp: string; reflector: boolean; heatLamp: string | null; mount: string; perchTopCm: number };
+};
+
+async function authorised(user: CurrentUser, input: GuidedStartInput) {
+  const organisationId = input.organisationId;
+  if (!can(user, 'read', { kind: 'species', organisationId })) throw notFound('That organisation');
+  const keeperId = input.keeperId ?? user.id;
+  if (!can(user, 'create', { kind: 'enclosure', organisationId, keeperId })) {
+    throw forbidden('You can only start enclosures of your own.');
+  }
+  const row = await findSheet(input.speciesId);
+  if (!row || row.organisationId !== organisationId) throw notFound('That species sheet');
+  return { keeperId, sheet: toDto(row) };
+}
+
+export async function proposeFor(user: CurrentUser, input: GuidedStartInput): Promise<ProposalView> {
+  const { sheet } = await authorised(user, input);
+  await ensureStartingCatalogue(input.organisationId);
+  const lampTypes = await allLampTypes(input.organisationId);
+  const species = toEngineSheet(sheet);
+  const enclosure = {
+    width: input.widthCm,
+    height: input.heightCm,
+    depth: input.depthCm,
+    roomTempC: input.roomTempC,
+  };
+  const p = propose({ species, enclosure, lid: input.lid }, lampTypes);
+  if (!p) {
+    throw badRequest(
+      undefined,
+      'No UV lamp in your catalogue fits this enclosure. Add a suitable lamp type to the lamp catalogue, or check the size.',
+    );
+  }
+  return {
+    sheet,
+    design: p.design,
+    assessment: p.assessment,
+    explanation: explain(p, species, enclosure, input.lid),
+    summary: {
+      uvLamp: p.candidate.uv.name,
+      reflector: p.candidate.reflector,
+      heatLamp: p.candidate.heat?.name ?? null,
+      mount: p.candidate.mount,
+      perchTopCm: p.candidate.perchTopCm,
+    },
+  };
+}
+
+/** Runs the search again (the server trusts no design from the browser) and saves the result. */
+export async function createFromGuidedStart(
+  user: CurrentUser,
+  input: GuidedStartInput,
+): Promise<{ enclosureId: number; variantId: number }> {
+  const { keeperId } = await authorised(user, input);
+  await assertKeeperInOrganisation(input.organisationId, keeperId);
+  const view = await proposeFor(user, input);
+  const enclosure = await Enclosure.create({
+    organisationId: input.organisationId,
+    keeperId,
+    name: input.name,
+    widthCm: input.widthCm,
+    heightCm: input.heightCm,
+    depthCm: input.depthCm,
+    speciesName: view.sheet.commonName,
+    animalName: input.animalName,
+    notes: null,
+  });
+  try {
+    const { variant } = await createDesign(user, enclosure, {
+      name: 'Guided start',
+      variantName: 'Proposed set-up',
+      design: { ...view.design, notes: notesFor(view) },
+    });
+    return { enclosureId: enclosure.id, variantId: variant.id };
+  } catch (e) {
+    // Never leave an enclosure without the design the person asked for.
+    await enclosure.destroy();
+    throw e;
+  }
+}
+
+function notesFor(view: ProposalView): string {
+  return [
+    `Proposed by the guided start for ${view.sheet.commonName} (${view.sheet.scientificName}).`,
+    ...view.explanation.map((l) => `${l.heading}: ${l.text}`),
+    'Every figure is an estimate: verify with a UV meter and a thermometer before an animal lives with it.',
+  ].join('\n\n');
+}
