@@ -4,7 +4,7 @@ import type { FieldGrid, ProbeResult, SimOptions } from './types';
 
 /** UVB, UV Index and surface temperature over the grid (a fresh computation, no cache). */
 export function computeFields(design: Design, opts?: SimOptions): FieldGrid {
-  return new FieldSolver().compute(design, opts);
+  return new FieldSolver(false).compute(design, opts);
 }
 
 /** The three values at exact points (evaluated there, not interpolated from a grid). */

@@ -80,7 +80,11 @@ export class FieldSolver {
     this.scratch = new Scratch(this.capacity);
   }
 
+  /** @param cache keep per-lamp fields between calls (false: a one-off computation that allocates less). */
+  constructor(private readonly cache = true) {}
+
   compute(design: Design, opts: SimOptions = {}): FieldGrid {
+    if (!this.cache) return this.computeOnce(design, opts);
     const cell = opts.cellCm ?? DEFAULT_CELL_CM;
     const { width, height } = design.enclosure;
     const { nx, ny } = gridSize(width, height, cell);
@@ -158,6 +162,61 @@ export class FieldSolver {
       uvb: new Float32Array(t.uvb),
       uvi: new Float32Array(t.uvi),
       tempC: new Float32Array(t.tempC),
+    };
+  }
+
+  /**
+   * One-off computation: lamps are computed one after another into two reused buffers and added to the
+   * totals in scene order — the same operations per cell as the cached path, so the same bits.
+   */
+  private computeOnce(design: Design, opts: SimOptions): FieldGrid {
+    const cell = opts.cellCm ?? DEFAULT_CELL_CM;
+    const { width, height } = design.enclosure;
+    const { nx, ny } = gridSize(width, height, cell);
+    const scene = compileScene(design);
+    this.ensure(scene.occluders.length);
+    this.stats.full = this.stats.partial = this.stats.cached = this.stats.cellsEvaluated = 0;
+    const cells = nx * ny;
+    const hc = opts.convection ?? HEAT_DEFAULTS.convection;
+    const uvb = new Float64Array(cells);
+    const uvi = new Float64Array(cells);
+    const ir = new Float64Array(cells);
+    const lu = new Float64Array(cells);
+    const li = new Float64Array(cells);
+    for (const lamp of scene.lamps) {
+      if (this.stats.full > 0) {
+        lu.fill(0);
+        li.fill(0);
+      }
+      this.stats.full++;
+      this.full(lamp, scene.occluders, lu, li, nx, ny, cell);
+      const f = lampUvbFactor(lamp.lamp, opts.addMonths ?? 0);
+      const fu = lamp.uvI > 0 ? f : 0;
+      const fi = lamp.uvI > 0 ? f * lamp.lamp.uviPerUvb : 0;
+      for (let c = 0; c < cells; c++) {
+        const v = lu[c]!;
+        uvb[c] = uvb[c]! + v * fu;
+        uvi[c] = uvi[c]! + v * fi;
+        ir[c] = ir[c]! + li[c]!;
+      }
+    }
+    const tempC = new Float32Array(cells);
+    for (let j = 0; j < ny; j++) {
+      const a = airTempC((j + 0.5) * cell, scene.height, scene.roomC, scene.airRiseK);
+      for (let c = j * nx, end = c + nx; c < end; c++) {
+        const q = ir[c]!;
+        tempC[c] = q > 0 ? surfaceTempC(HEAT_DEFAULTS.absorptance * q, a, HEAT_DEFAULTS.emissivity, hc) : a;
+      }
+    }
+    return {
+      nx,
+      ny,
+      cellCm: cell,
+      width,
+      height,
+      uvb: new Float32Array(uvb),
+      uvi: new Float32Array(uvi),
+      tempC,
     };
   }
 
