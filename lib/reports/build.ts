@@ -55,6 +55,7 @@ export async function reportPdf(
         ? { name: opts.species.name, findings: assessment.findings, overall: assessment.overall }
         : null,
     lamps: lampRows(subject.design),
+    design: subject.design,
   });
 }
 

@@ -6,11 +6,19 @@
 import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from 'pdf-lib';
 import type { KeyFigures } from '@/lib/variants/figures';
 import { bandLabel, type FieldScale } from '@/lib/variants/scale';
-import { CAUTIONS, ESTIMATE_NOTE } from './cautions';
+import { applicableCautions } from '@/components/cautions/cautions';
+import type { Design } from '@/simulation';
+import { DEFER_NOTE, ESTIMATE_NOTE } from './cautions';
 import type { LampRow } from './lamps';
 import { winAnsi, wrap } from './pdf-text';
 
-export type ReportFinding = { status: 'pass' | 'attention' | 'fail'; title: string; message: string };
+export type ReportFinding = {
+  id?: string;
+  status: 'pass' | 'attention' | 'fail';
+  title: string;
+  message: string;
+  numbers?: Record<string, number>;
+};
 
 export type ReportInput = {
   variantName: string;
@@ -26,6 +34,8 @@ export type ReportInput = {
   figures: KeyFigures;
   species: { name: string; findings: ReportFinding[]; overall: ReportFinding['status'] } | null;
   lamps: LampRow[];
+  /** The design, for choosing which cautions apply. */
+  design: Pick<Design, 'objects'>;
 };
 
 const A4: [number, number] = [595.28, 841.89];
@@ -204,10 +214,22 @@ export async function renderReportPdf(r: ReportInput): Promise<Uint8Array> {
   }
 
   w.heading('Cautions');
-  for (const c of CAUTIONS) {
-    w.text(c.title, { bold: true, gap: 0 });
-    w.text(c.text, { indent: 12, gap: 4 });
+  const cautions = applicableCautions({
+    design: r.design,
+    assessment: r.species
+      ? { findings: r.species.findings.map((f) => ({ ...f, id: f.id ?? '', numbers: f.numbers ?? {} })) }
+      : null,
+  }).sort((a, b) => Number(b.urgent) - Number(a.urgent));
+  for (const { caution, urgent } of cautions) {
+    w.text(`${urgent ? 'Check this: ' : ''}${caution.title}`, {
+      bold: true,
+      color: urgent ? STATUS_COLOR.fail : INK,
+      gap: 0,
+    });
+    w.text(caution.text, { indent: 12, gap: 0 });
+    w.text(`Source: ${caution.source}`, { indent: 12, size: 8, color: MUTED, gap: 4 });
   }
+  w.text(DEFER_NOTE, { size: 9, color: MUTED, gap: 4 });
   w.text(ESTIMATE_NOTE, { bold: true, gap: 0 });
 
   // Page numbers and the standing note in every footer.

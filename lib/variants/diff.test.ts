@@ -46,6 +46,11 @@ describe('diffDesigns', () => {
     expect(d.counts.moved).toBe(1);
   });
 
+  it('names a moved or changed object by its name in B', () => {
+    const b = { ...base, objects: [lamp({ y: 52, name: 'UVB tube' }), lid, perch] };
+    expect(diffDesigns(base, b).objects[0]).toMatchObject({ kind: 'changed', name: 'UVB tube' });
+  });
+
   it('measures a segment move by its midpoint', () => {
     const moved = { ...perch, x1: 30, x2: 80 };
     const d = diffDesigns(base, { ...base, objects: [lamp(), lid, moved] });

@@ -1,8 +1,8 @@
 /**
  * What differs between two design files: enclosure settings and objects added, removed, moved or
  * changed. Pure and structural (objects are matched by their `id`), so it runs on the server, in the
- * browser and in tests alike. Works on parsed designs, where defaults are filled in, so a field left
- * out in one file and written with its default in the other is not reported as a change.
+ * browser and in tests alike. It compares what the files say: a field left out on one side (the
+ * engine's default applies) and written on the other is listed, with `undefined` for the left-out side.
  */
 
 export type DiffableObject = { id: string; type: string } & Record<string, unknown>;
@@ -14,9 +14,17 @@ export type ObjectChange =
   | { kind: 'added'; id: string; type: string; object: DiffableObject }
   | { kind: 'removed'; id: string; type: string; object: DiffableObject }
   /** Only the position changed; `dx`/`dy` is how far (cm) its reference point moved. */
-  | { kind: 'moved'; id: string; type: string; dx: number; dy: number; changes: FieldChange[] }
+  | { kind: 'moved'; id: string; type: string; name?: string; dx: number; dy: number; changes: FieldChange[] }
   /** Some other property changed (it may also have moved: then dx/dy are non-zero). */
-  | { kind: 'changed'; id: string; type: string; dx: number; dy: number; changes: FieldChange[] };
+  | {
+      kind: 'changed';
+      id: string;
+      type: string;
+      name?: string;
+      dx: number;
+      dy: number;
+      changes: FieldChange[];
+    };
 
 export type DesignDiff = {
   enclosure: FieldChange[];
@@ -92,7 +100,17 @@ export function diffDesigns(a: DiffableDesign, b: DiffableDesign): DesignDiff {
     }
     const { dx, dy } = offset(oa, ob);
     const onlyPosition = changes.every((c) => POSITION_FIELDS.has(c.field));
-    objects.push({ kind: onlyPosition ? 'moved' : 'changed', id: oa.id, type: oa.type, dx, dy, changes });
+    // The name shown is B's (a rename is listed among the changes).
+    const name = typeof ob.name === 'string' ? ob.name : undefined;
+    objects.push({
+      kind: onlyPosition ? 'moved' : 'changed',
+      id: oa.id,
+      type: oa.type,
+      name,
+      dx,
+      dy,
+      changes,
+    });
   }
   for (const ob of b.objects) {
     const oa = a.objects.find((o) => o.id === ob.id);

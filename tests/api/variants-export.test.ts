@@ -110,10 +110,12 @@ describe('export', () => {
       'Basking tube',
       'No species is attached',
       'UV can injure eyes and skin',
-      'Burns',
-      'Fire',
-      'Thermostats',
+      'Lamps within reach burn',
+      'Heat sources can start fires',
+      'Run every heat source on a thermostat',
+      'Every figure is an estimate',
       'verify with a meter and thermometer',
+      'reptile-experienced vet',
     ]) {
       expect(text).toContain(expected);
     }

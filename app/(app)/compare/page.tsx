@@ -1,0 +1,57 @@
+import type { Metadata } from 'next';
+import { CompareView } from '@/components/designs/compare/CompareView';
+import { PageHeader } from '@/components/ui/PageHeader';
+import { ensureStartingCatalogue } from '@/lib/species/seed';
+import { currentMembership, requireUser } from '@/lib/session';
+import { parseCompareParams, compareQuery } from '@/lib/variants/compare-params';
+import { speciesOptions, attachedSpecies, type SpeciesOption } from '@/lib/variants/species';
+import { getVariantForUser } from '@/lib/variants/variants';
+import { visibleVariants } from '@/lib/variants/visible';
+
+export const metadata: Metadata = { title: 'Compare variants' };
+
+/**
+ * Two variants side by side on one colour scale: `?a=&b=&field=&months=&species=`. The variants are
+ * loaded and access-checked here; the fields are computed in the browser.
+ */
+export default async function ComparePage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
+  const params = parseCompareParams(await searchParams);
+  const user = await requireUser(`/compare?${compareQuery(params)}`);
+  const [a, b, options] = await Promise.all([
+    params.a ? getVariantForUser(user, params.a) : null,
+    params.b ? getVariantForUser(user, params.b) : null,
+    visibleVariants(user),
+  ]);
+  // Species come from the organisation of the variants shown (or the one the user is working in).
+  const orgId =
+    a?.enclosure.organisationId ??
+    b?.enclosure.organisationId ??
+    (await currentMembership(user))?.organisationId;
+  let species: SpeciesOption[] = [];
+  if (orgId) {
+    await ensureStartingCatalogue(orgId);
+    species = await speciesOptions(orgId);
+  }
+  const suggested = attachedSpecies(species, a?.enclosure.speciesName ?? b?.enclosure.speciesName);
+  return (
+    <>
+      <PageHeader
+        title="Compare variants"
+        lead="Two variants side by side on the same colour scale, with what differs between them. Every figure is an estimate to verify with a meter and thermometer."
+      />
+      <CompareView
+        params={params}
+        a={a}
+        b={b}
+        missing={{ a: Boolean(params.a && !a), b: Boolean(params.b && !b) }}
+        options={options}
+        species={species}
+        suggestedSpeciesId={suggested?.id ?? null}
+      />
+    </>
+  );
+}

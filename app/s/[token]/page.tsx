@@ -1,0 +1,147 @@
+import type { Metadata } from 'next';
+import { notFound } from 'next/navigation';
+import { CautionList } from '@/components/cautions/CautionList';
+import { FindingList } from '@/components/cautions/FindingList';
+import { FieldLegend, FieldSvg } from '@/components/designs/FieldSvg';
+import { SharedLampList } from '@/components/designs/SharedLampList';
+import { BrandMark } from '@/components/shell/BrandMark';
+import { lampRows } from '@/lib/reports/lamps';
+import { assessFor } from '@/lib/variants/assessment';
+import { resolveShareToken } from '@/lib/variants/shares';
+import { bandsFor, scaleFor, simulate } from '@/lib/variants/simulate';
+import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
+import type { FieldName } from '@/simulation';
+
+export const dynamic = 'force-dynamic';
+
+// The token is the key: keep the page out of search engines and out of other sites' referrer logs.
+export const metadata: Metadata = {
+  title: 'Shared design',
+  robots: { index: false, follow: false },
+  referrer: 'no-referrer',
+};
+
+const FIELDS: { id: FieldName; label: string }[] = [
+  { id: 'uvi', label: 'UV Index' },
+  { id: 'uvb', label: 'UVB' },
+  { id: 'tempC', label: 'Temperature' },
+];
+
+/**
+ * The public, read-only view of one shared variant: its fields, the assessment for the enclosure's
+ * species, the lamps and the cautions. No sign-in, no edit controls, nothing else of the organisation.
+ * A revoked, expired or unknown link is a plain 404.
+ */
+export default async function SharedVariantPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ token: string }>;
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
+  const { token } = await params;
+  const shared = await resolveShareToken(token);
+  if (!shared) notFound();
+  const requested = (await searchParams).field;
+  const field = FIELDS.find((f) => f.id === requested)?.id ?? 'uvi';
+
+  const sim = simulate(shared.design);
+  const scale = scaleFor(field, [sim]);
+  const species = attachedSpecies(await speciesOptions(shared.organisationId), shared.speciesName);
+  const assessment = species ? assessFor(shared.design, species.sheet) : null;
+  const f = sim.figures;
+  const figure = (v: number, digits: number) => Number(v.toFixed(digits)).toString();
+
+  return (
+    <main id="main" className="mx-auto w-full max-w-5xl flex-1 space-y-6 px-4 py-8 sm:px-6">
+      <header className="flex flex-wrap items-center justify-between gap-3">
+        <BrandMark />
+        <span className="rounded-full bg-basalt-100 px-3 py-1 text-caption font-medium text-basalt-700">
+          Shared read-only
+        </span>
+      </header>
+      <div>
+        <h1 className="text-title text-basalt-900">{shared.variant.name}</h1>
+        <p className="mt-1 text-body text-basalt-600">
+          {shared.designName} · {shared.enclosureName}
+          {shared.organisationName ? ` · shared by ${shared.organisationName}` : ''}
+        </p>
+        <p className="mt-1 text-caption text-basalt-500">
+          Enclosure {shared.design.enclosure.width} × {shared.design.enclosure.height} ×{' '}
+          {shared.design.enclosure.depth} cm (w × h × d), side view, lamps as installed.
+          {shared.expiresAt ? ` This link works until ${new Date(shared.expiresAt).toUTCString()}.` : ''}
+        </p>
+      </div>
+
+      <p className="rounded-md border border-sand-300 bg-sand-50 px-4 py-3 text-body text-sand-900">
+        Every figure on this page is an estimate from a model. Verify it with a UV meter and a thermometer in
+        the enclosure before an animal lives with it, and defer to a reptile-experienced vet and local codes.
+      </p>
+
+      <section
+        aria-labelledby="field-heading"
+        className="space-y-3 rounded-lg border border-basalt-200 bg-white p-4"
+      >
+        <div className="flex flex-wrap items-center justify-between gap-2">
+          <h2 id="field-heading" className="text-lead font-semibold text-basalt-900">
+            {scale.label}
+          </h2>
+          <nav aria-label="Field" className="inline-flex overflow-hidden rounded-md border border-basalt-300">
+            {FIELDS.map((x) => (
+              <a
+                key={x.id}
+                href={`?field=${x.id}`}
+                aria-current={x.id === field ? 'true' : undefined}
+                className={`px-3 py-1.5 text-body ${x.id === field ? 'bg-basalt-800 text-white' : 'bg-white text-basalt-700 hover:bg-basalt-50'}`}
+              >
+                {x.label}
+              </a>
+            ))}
+          </nav>
+        </div>
+        <FieldSvg
+          design={shared.design}
+          bands={bandsFor(sim, scale)}
+          scale={scale}
+          title={`${scale.label} of ${shared.variant.name}`}
+          markers={f.hotSpotAt ? [{ ...f.hotSpotAt, label: 'Hot spot' }] : []}
+        />
+        <FieldLegend scale={scale} />
+        <dl className="grid gap-x-6 gap-y-1 text-body sm:grid-cols-2">
+          {[
+            ['Basking UV Index (highest on a surface)', figure(f.baskingUviMax, 2)],
+            ['Basking UVB (highest on a surface)', `${figure(f.baskingUvbMax, 1)} µW/cm²`],
+            ['Hot spot (warmest surface)', `${figure(f.hotSpotC, 1)} °C`],
+            ['Cool end (coolest floor)', `${figure(f.coolEndC, 1)} °C`],
+            ['UV-free share of the cross-section', `${figure(f.uvFreeShare, 0)} %`],
+          ].map(([k, v]) => (
+            <div key={k} className="flex justify-between gap-3 border-b border-basalt-100 py-1">
+              <dt className="text-basalt-600">{k}</dt>
+              <dd className="tabular-nums text-basalt-900">{v} (estimate)</dd>
+            </div>
+          ))}
+        </dl>
+        <a
+          className="inline-block text-body font-medium text-moss-700 underline"
+          href={`/s/${token}/report?format=pdf&field=${field}`}
+          download
+        >
+          Download the report (PDF)
+        </a>
+      </section>
+
+      {assessment && species ? (
+        <div className="rounded-lg border border-basalt-200 bg-white p-4">
+          <FindingList assessment={assessment} speciesName={species.name} />
+        </div>
+      ) : (
+        <p className="text-body text-basalt-600">
+          No species is attached to this enclosure, so there is no species check.
+        </p>
+      )}
+
+      <SharedLampList lamps={lampRows(shared.design)} />
+      <CautionList design={shared.design} assessment={assessment} />
+    </main>
+  );
+}

@@ -1,0 +1,53 @@
+import { z } from 'zod';
+import { download, fieldPng, fileBase, reportPdf } from '@/lib/reports/build';
+import { resolveShareToken } from '@/lib/variants/shares';
+import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
+
+const query = z.object({
+  format: z.enum(['pdf', 'png']).catch('pdf'),
+  field: z.enum(['uvi', 'uvb', 'tempC']).catch('uvi'),
+});
+
+const gone = () =>
+  Response.json(
+    { error: { code: 'not_found', message: 'This link does not exist or no longer works.' } },
+    { status: 404, headers: { 'Cache-Control': 'no-store' } },
+  );
+
+/**
+ * The report (or field picture) of a shared variant, for anyone holding a working link. Read-only:
+ * no session is used and nothing is written; a revoked or expired link answers 404 like an unknown one.
+ */
+export async function GET(req: Request, ctx: { params: Promise<{ token: string }> }): Promise<Response> {
+  try {
+    const { token } = await ctx.params;
+    const shared = await resolveShareToken(token);
+    if (!shared) return gone();
+    const q = query.parse(Object.fromEntries(new URL(req.url).searchParams));
+    const subject = {
+      variantName: shared.variant.name,
+      version: shared.variant.version,
+      designName: shared.designName,
+      enclosureName: shared.enclosureName,
+      organisationName: shared.organisationName,
+      design: shared.design,
+    };
+    const base = fileBase(shared.variant.name);
+    if (q.format === 'png') {
+      return download(
+        new Uint8Array(fieldPng(subject, { field: q.field, months: 0 })),
+        'image/png',
+        `${base}-${q.field}.png`,
+      );
+    }
+    const species = attachedSpecies(await speciesOptions(shared.organisationId), shared.speciesName);
+    const pdf = await reportPdf(subject, { field: q.field, months: 0, species });
+    return download(new Uint8Array(pdf), 'application/pdf', `${base}.pdf`);
+  } catch (error) {
+    console.error('shared report failed', error);
+    return Response.json(
+      { error: { code: 'internal', message: 'The report could not be made. Try again.' } },
+      { status: 500, headers: { 'Cache-Control': 'no-store' } },
+    );
+  }
+}

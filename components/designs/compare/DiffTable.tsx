@@ -1,0 +1,111 @@
+import type { DesignDiff, FieldChange, ObjectChange } from '@/lib/variants/diff';
+
+const KIND: Record<ObjectChange['kind'], { label: string; className: string }> = {
+  added: { label: 'Added', className: 'bg-moss-100 text-moss-800' },
+  removed: { label: 'Removed', className: 'bg-ember-100 text-ember-800' },
+  moved: { label: 'Moved', className: 'bg-sky-100 text-sky-800' },
+  changed: { label: 'Changed', className: 'bg-sand-100 text-sand-900' },
+};
+
+const TYPE_LABEL: Record<string, string> = {
+  lamp: 'Lamp',
+  screen: 'Mesh screen',
+  glass: 'Glass',
+  perch: 'Perch',
+  ledge: 'Ledge',
+  hide: 'Hide',
+  foliage: 'Foliage',
+};
+
+const show = (v: unknown): string => {
+  if (v === undefined) return 'default';
+  if (typeof v === 'number') return Number(v.toFixed(2)).toString();
+  if (typeof v === 'string') return v;
+  return JSON.stringify(v);
+};
+
+function offsetText(dx: number, dy: number): string {
+  const parts: string[] = [];
+  const cm = (v: number) => `${Number(Math.abs(v).toFixed(1))} cm`;
+  if (dx) parts.push(`${cm(dx)} ${dx > 0 ? 'right' : 'left'}`);
+  if (dy) parts.push(`${cm(dy)} ${dy > 0 ? 'up' : 'down'}`);
+  return parts.join(', ');
+}
+
+const changeText = (c: FieldChange) => `${c.field}: ${show(c.a)} → ${show(c.b)}`;
+
+function nameOf(o: ObjectChange): string {
+  const name = 'object' in o ? (typeof o.object.name === 'string' ? o.object.name : undefined) : o.name;
+  return `${TYPE_LABEL[o.type] ?? o.type} “${name ?? o.id}”`;
+}
+
+/** What differs from A to B, one object a row. */
+export function DiffTable({ diff }: { diff: DesignDiff }) {
+  const empty = diff.enclosure.length === 0 && diff.objects.length === 0;
+  return (
+    <section aria-labelledby="diff-heading" className="space-y-2">
+      <h2 id="diff-heading" className="text-lead font-semibold text-basalt-900">
+        What differs (A → B)
+      </h2>
+      {empty ? (
+        <p className="text-body text-basalt-600">The two variants are the same design.</p>
+      ) : (
+        <table className="w-full text-left text-body">
+          <thead className="text-caption uppercase tracking-wide text-basalt-500">
+            <tr>
+              <th className="py-1 pr-3 font-medium">Change</th>
+              <th className="py-1 pr-3 font-medium">Object</th>
+              <th className="py-1 font-medium">Details</th>
+            </tr>
+          </thead>
+          <tbody className="divide-y divide-basalt-100">
+            {diff.enclosure.length > 0 && (
+              <tr>
+                <td className="py-1.5 pr-3">
+                  <span
+                    className={`rounded px-1.5 py-0.5 text-caption font-medium ${KIND.changed.className}`}
+                  >
+                    Changed
+                  </span>
+                </td>
+                <td className="py-1.5 pr-3">Enclosure</td>
+                <td className="py-1.5">{diff.enclosure.map(changeText).join('; ')}</td>
+              </tr>
+            )}
+            {diff.objects.map((o) => (
+              <tr key={`${o.kind}-${o.type}-${o.id}`} data-testid="diff-row">
+                <td className="py-1.5 pr-3">
+                  <span
+                    className={`rounded px-1.5 py-0.5 text-caption font-medium ${KIND[o.kind].className}`}
+                  >
+                    {KIND[o.kind].label}
+                  </span>
+                </td>
+                <td className="py-1.5 pr-3">{nameOf(o)}</td>
+                <td className="py-1.5 text-basalt-700">
+                  {o.kind === 'moved'
+                    ? offsetText(o.dx, o.dy) || o.changes.map(changeText).join('; ')
+                    : o.kind === 'changed'
+                      ? [
+                          offsetText(o.dx, o.dy) && `moved ${offsetText(o.dx, o.dy)}`,
+                          ...o.changes
+                            .filter((c) => !['x', 'y', 'x1', 'y1', 'x2', 'y2'].includes(c.field))
+                            .map(changeText),
+                        ]
+                          .filter(Boolean)
+                          .join('; ')
+                      : o.kind === 'added'
+                        ? 'only in B'
+                        : 'only in A'}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      )}
+      <p className="text-caption text-basalt-500">
+        {diff.counts.unchanged} object{diff.counts.unchanged === 1 ? '' : 's'} unchanged.
+      </p>
+    </section>
+  );
+}
