@@ -8,8 +8,10 @@ export const UNIT_NAME: Record<ReadingUnit, string> = { uvb: 'UVB (µW/cm²)', u
 
 export function formatValue(v: number | null | undefined, unit: ReadingUnit | null): string {
   if (v === null || v === undefined || !Number.isFinite(v)) return '—';
-  const digits = unit === 'uvi' ? (v < 10 ? 2 : 1) : v < 10 ? 1 : 0;
-  return `${v.toFixed(digits)}${unit ? ` ${UNIT_LABEL[unit]}` : ''}`;
+  // As precise as a meter shows: a typed 24.5 reads back as 24.5, not 25.
+  const digits = unit === 'uvi' ? (v < 10 ? 2 : 1) : v < 100 ? 1 : 0;
+  const text = String(Number(v.toFixed(digits)));
+  return `${text}${unit ? ` ${UNIT_LABEL[unit]}` : ''}`;
 }
 
 export function formatAge(days: number): string {
