@@ -2,9 +2,8 @@
  * One simulation request in, one response out. Pure apart from timing: the optional solver only caches
  * per-lamp fields between calls and never changes a result.
  */
-import { parseDesign } from '../model/parse';
 import { speciesSheetSchema } from '../model/species';
-import { firstIssue } from '../model/parse';
+import { firstIssue, parseDesign } from '../model/parse';
 import { FieldSolver } from '../fields/solver';
 import { assessWithAgeing } from '../assess/assess';
 import type { SimRequest, SimResponse } from './protocol';
