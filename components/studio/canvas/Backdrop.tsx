@@ -1,4 +1,5 @@
 'use client';
+import { memo } from 'react';
 // The enclosure drawn to scale on a faint grid, and its size label.
 import { Group, Rect, Shape, Text } from 'react-konva';
 import { designToStage, niceStepCm, visibleDesignRect, type Camera, type Viewport } from '../geometry/camera';
@@ -6,7 +7,15 @@ import { CM_PER_IN, formatLength, type LengthUnit } from '../geometry/units';
 import type { Enclosure } from '../state/types';
 import { C } from './colors';
 
-export function GridShape({ cam, viewport, unit }: { cam: Camera; viewport: Viewport; unit: LengthUnit }) {
+export const GridShape = memo(function GridShape({
+  cam,
+  viewport,
+  unit,
+}: {
+  cam: Camera;
+  viewport: Viewport;
+  unit: LengthUnit;
+}) {
   const cmPerUnit = unit === 'cm' ? 1 : CM_PER_IN;
   const step = niceStepCm(cam.zoom, 14, cmPerUnit);
   const vis = visibleDesignRect(cam, viewport);
@@ -34,9 +43,15 @@ export function GridShape({ cam, viewport, unit }: { cam: Camera; viewport: View
       opacity={0.35}
     />
   );
-}
+});
 
-export function EnclosureBack({ cam, enclosure }: { cam: Camera; enclosure: Enclosure }) {
+export const EnclosureBack = memo(function EnclosureBack({
+  cam,
+  enclosure,
+}: {
+  cam: Camera;
+  enclosure: Enclosure;
+}) {
   const tl = designToStage(cam, { x: 0, y: enclosure.height });
   return (
     <Rect
@@ -49,9 +64,9 @@ export function EnclosureBack({ cam, enclosure }: { cam: Camera; enclosure: Encl
       opacity={0.9}
     />
   );
-}
+});
 
-export function EnclosureWalls({
+export const EnclosureWalls = memo(function EnclosureWalls({
   cam,
   enclosure,
   unit,
@@ -79,4 +94,4 @@ export function EnclosureWalls({
       />
     </Group>
   );
-}
+});

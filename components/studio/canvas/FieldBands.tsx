@@ -1,4 +1,5 @@
 'use client';
+import { memo } from 'react';
 // Filled contour bands of the shown field, in design coordinates mapped to the stage, clipped to
 // the inside of the enclosure and drawn under the objects.
 import { Group, Shape } from 'react-konva';
@@ -11,7 +12,7 @@ export interface ColouredBand {
   polygons: [number, number][][][];
 }
 
-export function FieldBands({
+export const FieldBands = memo(function FieldBands({
   cam,
   enclosure,
   bands,
@@ -61,4 +62,4 @@ export function FieldBands({
       ))}
     </Group>
   );
-}
+});

@@ -1,4 +1,5 @@
 'use client';
+import { memo } from 'react';
 // How each design object is drawn: our own visual language. Shapes are drawn in stage pixels
 // from the camera; nothing here listens to events (hit testing is in interaction.ts).
 import { Circle, Group, Line, Rect, Shape, Text } from 'react-konva';
@@ -161,7 +162,7 @@ function leavesScene(ctx: Context, x: number, y: number, w: number, h: number) {
   ctx.closePath();
 }
 
-export function ObjectShape({ o, cam }: { o: DesignObject; cam: Camera }) {
+export const ObjectShape = memo(function ObjectShape({ o, cam }: { o: DesignObject; cam: Camera }) {
   switch (o.type) {
     case 'lamp':
       return <Lamp o={o} cam={cam} />;
@@ -297,4 +298,4 @@ export function ObjectShape({ o, cam }: { o: DesignObject; cam: Camera }) {
       );
     }
   }
-}
+});

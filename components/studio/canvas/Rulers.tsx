@@ -1,4 +1,5 @@
 'use client';
+import { memo } from 'react';
 // Rulers along the top and left edges of the view, in the chosen unit, measured from the
 // enclosure's inside bottom-left corner (the design origin).
 import { Group, Rect, Shape, Text } from 'react-konva';
@@ -8,7 +9,15 @@ import { C } from './colors';
 
 export const RULER_PX = 22;
 
-export function Rulers({ cam, viewport, unit }: { cam: Camera; viewport: Viewport; unit: LengthUnit }) {
+export const Rulers = memo(function Rulers({
+  cam,
+  viewport,
+  unit,
+}: {
+  cam: Camera;
+  viewport: Viewport;
+  unit: LengthUnit;
+}) {
   const cmPerUnit = unit === 'cm' ? 1 : CM_PER_IN;
   const major = niceStepCm(cam.zoom, 60, cmPerUnit);
   const minor = major / (Math.round(major / cmPerUnit) % 2 === 0 || major / cmPerUnit < 1 ? 4 : 5);
@@ -69,4 +78,4 @@ export function Rulers({ cam, viewport, unit }: { cam: Camera; viewport: Viewpor
       <Text x={2} y={6} width={RULER_PX - 4} align="center" text={unit} fontSize={9} fill={C.basalt600} />
     </Group>
   );
-}
+});

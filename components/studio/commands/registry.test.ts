@@ -61,6 +61,16 @@ describe('commands on a store', () => {
     expect((c.store.design.objects.find((o) => o.id === 'h1') as { x: number }).x).toBeCloseTo(6 - 1.27, 10);
   });
 
+  it('selects objects from the keyboard in drawing order, wrapping', () => {
+    const c = ctx();
+    runCommand(command('edit.selectNext'), c);
+    expect(c.store.session.selection).toEqual(['uv1']);
+    runCommand(command('edit.selectPrevious'), c);
+    expect(c.store.session.selection).toEqual(['side']);
+    runCommand(command('edit.selectNext'), c);
+    expect(c.store.session.selection).toEqual(['uv1']);
+  });
+
   it('is disabled when it would do nothing', () => {
     const c = ctx();
     expect(runCommand(command('edit.undo'), c)).toBe(false);

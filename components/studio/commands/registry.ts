@@ -110,6 +110,22 @@ export const COMMANDS: readonly Command[] = [
     enabled: ({ store }) => store.design.objects.length > 0,
   },
   {
+    id: 'edit.selectNext',
+    label: 'Select next object',
+    group: 'Edit',
+    shortcuts: ['N'],
+    run: ({ store }) => A.selectStep(store, 1),
+    enabled: ({ store }) => store.design.objects.length > 0,
+  },
+  {
+    id: 'edit.selectPrevious',
+    label: 'Select previous object',
+    group: 'Edit',
+    shortcuts: ['Shift+N'],
+    run: ({ store }) => A.selectStep(store, -1),
+    enabled: ({ store }) => store.design.objects.length > 0,
+  },
+  {
     id: 'edit.deselect',
     label: 'Deselect / cancel',
     group: 'Edit',

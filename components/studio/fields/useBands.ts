@@ -1,32 +1,81 @@
 'use client';
-// Contour bands of the shown field for the canvas, and the matching legend.
-import { useMemo } from 'react';
-import { contourBands, defaultThresholds } from '@/simulation';
-import type { FieldGrid } from '@/simulation/fields/types';
+// Contour bands of the shown field for the canvas, and the matching legend. The bands are traced in
+// a worker of their own (contourWorker.ts) so the main thread stays free while the user drags.
+import { useEffect, useMemo, useRef, useState } from 'react';
+import type { ContourBand, FieldGrid } from '@/simulation';
 import type { ColouredBand } from '../canvas/FieldBands';
 import type { TempUnit } from '../geometry/units';
 import type { FieldView } from '../state/session';
+import type { ContourRequest, ContourResponse } from './contourProtocol';
 import { legendFor, type LegendEntry } from './legend';
+
+interface Traced {
+  field: FieldView;
+  thresholds: number[];
+  bands: ContourBand[];
+}
 
 export function useBands(
   grid: FieldGrid | null,
   field: FieldView,
   temp: TempUnit,
   visible: boolean,
-): { bands: ColouredBand[]; legend: LegendEntry[] } {
-  const thresholds = useMemo(() => (grid ? defaultThresholds(field, grid) : []), [grid, field]);
-  const legend = useMemo(() => legendFor(field, thresholds, temp), [field, thresholds, temp]);
+): { bands: ColouredBand[]; legend: LegendEntry[]; error: string | null } {
+  const [traced, setTraced] = useState<Traced | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const worker = useRef<Worker | null>(null);
+  const seq = useRef(0);
+
+  useEffect(() => {
+    const w = new Worker(new URL('./contourWorker.ts', import.meta.url), { type: 'module' });
+    let applied = 0;
+    w.onmessage = (e: MessageEvent<ContourResponse>) => {
+      const m = e.data;
+      if (m.kind === 'superseded' || m.id < applied) return;
+      applied = m.id;
+      if (m.kind === 'error') setError(m.message);
+      else {
+        setError(null);
+        setTraced({ field: m.field, thresholds: m.thresholds, bands: m.bands });
+      }
+    };
+    w.onerror = (e) => setError(e.message || 'Contour tracing stopped.');
+    worker.current = w;
+    return () => {
+      w.terminate();
+      worker.current = null;
+    };
+  }, []);
+
+  useEffect(() => {
+    const w = worker.current;
+    if (!grid || !w) return;
+    const values = grid[field].slice();
+    const req: ContourRequest = {
+      id: ++seq.current,
+      field,
+      nx: grid.nx,
+      ny: grid.ny,
+      cellCm: grid.cellCm,
+      width: grid.width,
+      height: grid.height,
+      values,
+    };
+    w.postMessage(req, [values.buffer]);
+  }, [grid, field]);
+
+  const current = traced && traced.field === field ? traced : null;
+  const legend = useMemo(
+    () => (current ? legendFor(field, current.thresholds, temp) : []),
+    [current, field, temp],
+  );
   const bands = useMemo(() => {
-    if (!grid || !visible || thresholds.length === 0) return [];
-    const raw = contourBands(grid, field, thresholds);
-    return raw.map((b) => {
-      // Match each band to its legend entry by its lower edge.
-      const k = thresholds.findIndex((t) => Math.abs(t - b.lo) < 1e-9);
-      return {
-        color: legend[Math.max(0, Math.min(legend.length - 1, k))]?.color ?? '#000',
-        polygons: b.polygons,
-      };
+    if (!current || !visible) return [];
+    return current.bands.map((b) => {
+      // Each band starts at one of the thresholds; its legend entry has the same lower edge.
+      const k = current.thresholds.findIndex((t) => Math.abs(t - b.lo) < 1e-9);
+      return { color: legend[Math.max(0, k)]?.color ?? '#000', polygons: b.polygons };
     });
-  }, [grid, field, thresholds, legend, visible]);
-  return { bands, legend };
+  }, [current, legend, visible]);
+  return { bands, legend, error };
 }

@@ -17,6 +17,8 @@ import { EMPTY_SIM, type SimView } from './simTypes';
  */
 export interface StudioMetrics {
   roundTrips: number[];
+  /** The engine's own compute time for the same answers (the rest is messaging and the main thread). */
+  computeMs: number[];
   camera?: () => Camera;
 }
 
@@ -55,7 +57,7 @@ export function useSimulation(store: StudioStore, species: StudioSpecies[]): Sim
       setView((v) => ({ ...v, status: 'error', error: `The field engine could not start (${String(e)}).` }));
       return;
     }
-    const metrics: StudioMetrics = (window.__baskwellStudio ??= { roundTrips: [] });
+    const metrics: StudioMetrics = (window.__baskwellStudio ??= { roundTrips: [], computeMs: [] });
     metrics.camera = () => store.session.camera;
     let seq = 0;
     let applied = 0;
@@ -107,7 +109,11 @@ export function useSimulation(store: StudioStore, species: StudioSpecies[]): Sim
       const roundTripMs = info ? performance.now() - info.at : null;
       if (roundTripMs !== null) {
         metrics.roundTrips.push(roundTripMs);
-        if (metrics.roundTrips.length > 2000) metrics.roundTrips.splice(0, 1000);
+        metrics.computeMs.push(msg.ms);
+        if (metrics.roundTrips.length > 2000) {
+          metrics.roundTrips.splice(0, 1000);
+          metrics.computeMs.splice(0, 1000);
+        }
       }
       const probeReadings = new Map<string, Reading>();
       msg.probes?.forEach((r, i) => {

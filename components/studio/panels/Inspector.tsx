@@ -7,7 +7,7 @@ import { isBox, isSegment, type DesignObject } from '../state/types';
 import { CommandButton } from './CommandButton';
 import { Section, TextField } from './FormFields';
 import { LampForm } from './LampForm';
-import { BoxForm, EnclosureForm, ProbeForm, SegmentForm } from './ShapeForms';
+import { BoxForm, EnclosureForm, ObjectList, ProbeForm, SegmentForm } from './ShapeForms';
 
 function ObjectActions() {
   return (
@@ -46,7 +46,14 @@ export function Inspector() {
   const design = useStudio(store, (s) => s.history.present);
   const objects = design.objects.filter((o) => selection.includes(o.id));
   const probes = (design.probes ?? []).filter((p) => selection.includes(p.id));
-  if (selection.length === 0) return <EnclosureForm />;
+  if (selection.length === 0) {
+    return (
+      <>
+        <EnclosureForm />
+        <ObjectList />
+      </>
+    );
+  }
   if (objects.length === 1 && probes.length === 0) return <ObjectInspector o={objects[0]!} />;
   if (probes.length === 1 && objects.length === 0) {
     return (

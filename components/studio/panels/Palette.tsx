@@ -1,5 +1,6 @@
 'use client';
 // Tool palette: pick a tool (click or its key), or drag an object kind onto the canvas.
+import { memo } from 'react';
 import { command, isEnabled, runCommand } from '../commands/registry';
 import { PALETTE_DRAG_TYPE } from '../canvas/StudioCanvas';
 import { isPlaceTool, type Tool } from '../state/session';
@@ -41,7 +42,7 @@ const GROUPS: { label: string; tools: { tool: Tool; icon: IconName; hint: string
   },
 ];
 
-export function Palette() {
+export const Palette = memo(function Palette() {
   const ctx = useCommandContext();
   const tool = useStudio(ctx.store, (s) => s.session.tool);
   return (
@@ -93,4 +94,4 @@ export function Palette() {
       ))}
     </nav>
   );
-}
+});

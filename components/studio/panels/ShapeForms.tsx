@@ -8,7 +8,8 @@ import { DEFAULT_ROOM_TEMP_C } from '@/simulation/model/resolve';
 import { segmentAngleDeg, segmentLength } from '../geometry/objects';
 import { formatLength, formatNumber } from '../geometry/units';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
-import { setEnclosure, updateProbe } from '../state/document';
+import { setEnclosure, TYPE_NAMES, updateProbe } from '../state/document';
+import { focusRing } from './CommandButton';
 import type { BoxObject, Enclosure, ProbePoint, SegmentObject } from '../state/types';
 import { Grid2, NumberField, Section, TextField } from './FormFields';
 import { useObjectEdit, useUnits } from './useObjectEdit';
@@ -111,6 +112,42 @@ export function ProbeForm({ probe }: { probe: ProbePoint }) {
         <NumberField label="y" testId="field-y" {...num('y')} />
       </Grid2>
       <p className="text-caption text-basalt-500">Pinned probes are saved with the design.</p>
+    </Section>
+  );
+}
+
+/** Every object as a button: a visible, keyboard-friendly way to pick what is hard to click. */
+export function ObjectList() {
+  const { store } = useCommandContext();
+  const objects = useStudio(store, (s) => s.history.present.objects);
+  if (objects.length === 0) {
+    return (
+      <Section title="Objects">
+        <p className="text-sm text-basalt-600">
+          The enclosure is empty. Pick an object in the palette and click on the canvas, drag it in, or press
+          its key and Enter.
+        </p>
+      </Section>
+    );
+  }
+  return (
+    <Section title={`Objects (${objects.length})`}>
+      <ul className="flex flex-col gap-0.5" data-testid="object-list">
+        {[...objects].reverse().map((o) => (
+          <li key={o.id}>
+            <button
+              type="button"
+              onClick={() => store.setSession({ selection: [o.id] })}
+              className={`w-full rounded px-2 py-1 text-left text-sm text-basalt-800 hover:bg-basalt-100 ${focusRing}`}
+            >
+              {TYPE_NAMES[o.type]} <span className="text-basalt-500">{o.name ?? o.id}</span>
+            </button>
+          </li>
+        ))}
+      </ul>
+      <p className="text-caption text-basalt-500">
+        Top of the list is drawn in front. N / Shift+N step through them.
+      </p>
     </Section>
   );
 }

@@ -1,5 +1,6 @@
 'use client';
 // The top bar: where you are, edit and arrange commands, zoom, snapping, units and help.
+import { memo } from 'react';
 import Link from 'next/link';
 import { command, runCommand } from '../commands/registry';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
@@ -10,7 +11,7 @@ function Divider() {
   return <span className="mx-1 h-5 w-px bg-basalt-200" aria-hidden="true" />;
 }
 
-export function Toolbar({
+export const Toolbar = memo(function Toolbar({
   title,
   backHref,
   backLabel,
@@ -86,7 +87,7 @@ export function Toolbar({
       <CommandButton id="help.shortcuts" icon="help" />
     </div>
   );
-}
+});
 
 /** A two-way unit switch; either half switches to its unit. */
 function UnitSwitch({

@@ -138,3 +138,13 @@ export function addProbeAt(store: StudioStore, at: Point): string {
   });
   return id;
 }
+
+/** Keyboard selection: the next (or previous) object in drawing order, wrapping around. */
+export function selectStep(store: StudioStore, step: 1 | -1) {
+  const objs = store.design.objects;
+  if (objs.length === 0) return;
+  const cur =
+    store.session.selection.length === 1 ? objs.findIndex((o) => o.id === store.session.selection[0]) : -1;
+  const next = cur < 0 ? (step === 1 ? 0 : objs.length - 1) : (cur + step + objs.length) % objs.length;
+  select(store, [objs[next]!.id]);
+}
