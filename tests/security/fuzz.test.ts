@@ -29,7 +29,7 @@ import { call, expectNoInternals, sessionCookie, type Reply } from '../api/http'
 import { bodyCaseArb, mutate, mutationArb, stringsIn, type BodyCase, type Json } from './fuzz-arbitraries';
 
 /** Strings a database or a JSON layer may choke on: a lone surrogate, NUL, 4-byte characters, a huge one. */
-const NASTIES: Json[] = ['\uD800', 'a\u0000b', '🦎🦎', 'x'.repeat(70_000), 1e308, -0, ' ', ''];
+const NASTIES: Json[] = ['\uD800', 'a\u0000b', '🦎🦎', 'x'.repeat(70_000), 1e308, -0];
 
 const SEED = Number(process.env.FUZZ_SEED ?? 20_251_202);
 const RUNS = Number(process.env.FUZZ_RUNS ?? 100);
