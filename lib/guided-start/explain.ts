@@ -62,7 +62,7 @@ export function explain(
       text:
         (c.heat
           ? `${c.heat.name} beside the UV lamp over the same perch. `
-          : `No separate heat lamp: the ${c.uv.name.toLowerCase()} gives the basking heat itself. `) +
+          : `No separate heat lamp: the UV lamp (${c.uv.name}) gives the basking heat itself. `) +
         `The hottest surface the animal can reach is about ${f1(hotC)} °C (the sheet asks ${f1(num(hot, 'targetLo')!)}–${f1(num(hot, 'targetHi')!)} °C). Run every heat source on a thermostat.`,
     });
   }

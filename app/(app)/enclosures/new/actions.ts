@@ -1,0 +1,50 @@
+'use server';
+
+import { ApiError, fromZod, isDatabaseUnavailable } from '@/lib/api/errors';
+import type { CurrentUser } from '@/lib/auth/session-user';
+import { guidedStartSchema, type GuidedStartInput } from '@/lib/guided-start/input';
+import { createFromGuidedStart, proposeFor, type ProposalView } from '@/lib/guided-start/service';
+import { currentUser } from '@/lib/session';
+
+/**
+ * The guided start's two steps as server actions, in the same order as every route handler:
+ * parse (zod) → who (session, re-checked in the database) → may they (in the service) → act.
+ * Errors come back as a message (and the field, when one is to blame), never internals.
+ */
+
+export type ActionResult<T> =
+  { ok: true; data: T } | { ok: false; error: { message: string; field?: string } };
+
+const fail = (message: string, field?: string) => ({ ok: false as const, error: { message, field } });
+
+async function run<T>(
+  raw: unknown,
+  act: (user: CurrentUser, input: GuidedStartInput) => Promise<T>,
+): Promise<ActionResult<T>> {
+  try {
+    const parsed = guidedStartSchema.safeParse(raw);
+    if (!parsed.success) {
+      const e = fromZod(parsed.error);
+      return fail(e.message, e.field);
+    }
+    const user = await currentUser();
+    if (!user) return fail('Your session has ended. Sign in again; your answers stay on this page.');
+    return { ok: true, data: await act(user, parsed.data) };
+  } catch (e) {
+    if (e instanceof ApiError) return fail(e.message, e.field);
+    if (isDatabaseUnavailable(e))
+      return fail('The database cannot be reached right now. Nothing was changed; try again.');
+    console.error('guided start', e);
+    return fail('Something went wrong on our side. Nothing was created; try again.');
+  }
+}
+
+export async function proposeAction(raw: unknown): Promise<ActionResult<ProposalView>> {
+  return run(raw, proposeFor);
+}
+
+export async function createAction(
+  raw: unknown,
+): Promise<ActionResult<{ enclosureId: number; variantId: number }>> {
+  return run(raw, createFromGuidedStart);
+}

@@ -1,0 +1,86 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { GuidedStart } from '@/components/guided-start/GuidedStart';
+import { EmptyState } from '@/components/ui/EmptyState';
+import { PageHeader } from '@/components/ui/PageHeader';
+import { button, link } from '@/components/ui/styles';
+import { memberViews } from '@/lib/api/views';
+import { TYPICAL_ENCLOSURES } from '@/lib/guided-start/typical-enclosures';
+import { can } from '@/lib/permissions';
+import { currentMembership, requireUser } from '@/lib/session';
+import { ensureStartingCatalogue } from '@/lib/species/seed';
+import { allSheets } from '@/lib/species/store';
+import { createAction, proposeAction } from './actions';
+
+export const metadata: Metadata = { title: 'Guided start' };
+
+export default async function GuidedStartPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[]>>;
+}) {
+  const user = await requireUser('/enclosures/new');
+  const membership = await currentMembership(user);
+  if (!membership) return null;
+  const organisationId = membership.organisationId;
+  await ensureStartingCatalogue(organisationId);
+  const sheets = await allSheets(organisationId);
+  const staff = can(user, 'read', { kind: 'member', organisationId });
+  const people = staff
+    ? (await memberViews(organisationId))
+        .filter((p) => p.userId !== user.id)
+        .map((p) => ({ id: p.userId, name: p.name, role: p.role }))
+        .sort(
+          (a, b) =>
+            (a.role === 'keeper' ? 0 : 1) - (b.role === 'keeper' ? 0 : 1) || a.name.localeCompare(b.name),
+        )
+    : null;
+  const wanted = Number((await searchParams).species);
+  const initialSpeciesId = sheets.some((s) => s.id === wanted) ? wanted : null;
+  const sizeHints = Object.fromEntries(
+    Object.entries(TYPICAL_ENCLOSURES).map(([k, v]) => [k, { ...v.enclosure, lid: v.lid }]),
+  );
+
+  return (
+    <>
+      <p className="mb-2 text-body">
+        <Link href="/enclosures" className={link}>
+          ← Enclosures
+        </Link>
+      </p>
+      <PageHeader
+        title="Guided start"
+        lead="Tell us the species, the enclosure and its lid. Baskwell searches your lamp catalogue for a starting set-up — UV lamp, heat, basking perch and a cool-side hide — checks it against the species sheet and explains why."
+      />
+      {sheets.length === 0 ? (
+        <EmptyState
+          title="No species sheets yet"
+          action={
+            can(user, 'create', { kind: 'species', organisationId }) && (
+              <Link href="/species/new" className={button.primary}>
+                Add a species sheet
+              </Link>
+            )
+          }
+        >
+          <p>The guided start plans for one species: add its sheet first.</p>
+        </EmptyState>
+      ) : (
+        <GuidedStart
+          organisationId={organisationId}
+          species={sheets.map((s) => ({
+            id: s.id,
+            commonName: s.commonName,
+            scientificName: s.scientificName,
+            uvZone: s.uvZone,
+            seedKey: s.seedKey,
+          }))}
+          people={people}
+          sizeHints={sizeHints}
+          initialSpeciesId={initialSpeciesId}
+          actions={{ propose: proposeAction, create: createAction }}
+        />
+      )}
+    </>
+  );
+}
