@@ -118,7 +118,7 @@ export function CsvImport({ enclosureId }: { enclosureId: number }) {
         <div className="space-y-2" data-testid="csv-preview">
           <Notice tone={preview.ok ? 'success' : 'error'}>
             {preview.ok
-              ? `${preview.rows.length} readings are ready to import. Nothing is saved until you import them.`
+              ? `${preview.rows.length} reading${preview.rows.length === 1 ? ' is' : 's are'} ready to import. Nothing is saved until you import them.`
               : `${preview.errors.length} problem${preview.errors.length > 1 ? 's' : ''} found. Fix the file and choose it again — nothing is imported while any row has a problem.`}
           </Notice>
           <div className="max-h-72 overflow-auto rounded border border-basalt-200">
@@ -155,7 +155,7 @@ export function CsvImport({ enclosureId }: { enclosureId: number }) {
             </table>
           </div>
           <button type="button" className={button.primary} onClick={commit} disabled={!preview.ok || busy}>
-            Import {preview.rows.length} readings
+            Import {preview.rows.length} reading{preview.rows.length === 1 ? '' : 's'}
           </button>
         </div>
       )}

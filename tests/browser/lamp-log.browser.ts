@@ -1,0 +1,119 @@
+import { describe, expect, it } from 'vitest';
+import { demoSignIn } from '@/lib/demo/scenario';
+import { screenshot, signIn, withBrowser } from './harness';
+
+// The lamp log in Chromium on the demo scenario: the table, a lamp's chart with its fitted curve,
+// typing in a reading, a CSV with a bad row, and a backdrop photo served back through its own route.
+const session = withBrowser();
+
+async function asStaff() {
+  const page = session.page();
+  // Generous waits: the machine running the tests may be busy; nothing here is a speed check.
+  page.setDefaultTimeout(90_000);
+  const staff = demoSignIn('staff');
+  await signIn(page, staff.email, staff.password);
+  return page;
+}
+
+describe('lamp log', () => {
+  it('lists the demo lamps, most urgent first, and draws a lamp’s readings with the fitted curve', async () => {
+    const page = await asStaff();
+    await page.goto('/lamp-log');
+    const table = page.getByTestId('lamp-table');
+    await table.waitFor();
+    await expect.poll(() => table.locator('tbody tr').count(), { timeout: 10_000 }).toBeGreaterThanOrEqual(3);
+    await expect.poll(() => table.innerText()).toContain('Basking tube');
+    await screenshot(page, 'lamp-log-table');
+
+    await page.getByRole('link', { name: 'Basking tube' }).click();
+    const chart = page.getByTestId('decay-chart');
+    await chart.waitFor();
+    const points = page.getByTestId('reading-point');
+    expect(await points.count()).toBeGreaterThanOrEqual(5);
+    expect(await page.getByTestId('fit-curve').getAttribute('d')).toMatch(
+      /^M[\d.]+,[\d.]+(L[\d.]+,[\d.]+){10,}$/,
+    );
+    expect(await page.getByTestId('fit-band').count()).toBe(1);
+    await expect.poll(() => chart.innerText()).toContain('Fitted decay');
+    await screenshot(page, 'lamp-log-chart');
+
+    // A reading typed in (in inches) joins the chart.
+    const before = await points.count();
+    await page.getByRole('button', { name: 'in', exact: true }).click();
+    await page.getByLabel('Distance below the lamp (in)').fill('12');
+    await page.getByLabel('Meter value').fill('24.5');
+    await page.getByRole('button', { name: 'Add reading' }).click();
+    await expect.poll(() => points.count(), { timeout: 60_000 }).toBe(before + 1);
+    const newest = page.getByTestId('readings-table').locator('tbody tr').first();
+    await expect.poll(() => newest.innerText(), { timeout: 10_000 }).toMatch(/24\.5 µW\/cm².*12 in/s);
+    expect(session.pageErrors()).toEqual([]);
+  });
+
+  it('previews a CSV with a bad row, names the row, and imports nothing', async () => {
+    const page = await asStaff();
+    await page.goto('/lamp-log');
+    await page.getByRole('link', { name: 'Desert vivarium' }).first().click();
+    await page.getByRole('heading', { name: 'Import readings (CSV)' }).waitFor();
+    const csv = [
+      'lamp,taken_at,distance,distance_unit,value,unit,meter',
+      'Basking tube,2026-01-10,30,cm,40,uvb,test meter',
+      'Basking tube,2026-01-11,thirty,cm,39,uvb,test meter',
+    ].join('\n');
+    await page.getByLabel('CSV file of readings').setInputFiles({
+      name: 'readings.csv',
+      mimeType: 'text/csv',
+      buffer: Buffer.from(csv),
+    });
+    const preview = page.getByTestId('csv-preview');
+    await preview.waitFor();
+    await expect.poll(() => preview.innerText(), { timeout: 10_000 }).toContain('1 problem found');
+    expect(await preview.innerText()).toContain('“thirty” is not a number.');
+    expect(await page.getByRole('button', { name: /^Import \d+ readings?$/ }).isDisabled()).toBe(true);
+    await screenshot(page, 'lamp-log-csv-preview');
+  });
+
+  it('uploads a photo of the enclosure and shows it back from its own route', async () => {
+    const page = await asStaff();
+    await page.goto('/lamp-log');
+    await page.getByRole('link', { name: 'Desert vivarium' }).first().click();
+    const input = page.getByLabel(/Photo of the enclosure from the front/);
+    await input.waitFor();
+    // A real JPEG, encoded by Chromium itself.
+    const bytes = await page.evaluate(async () => {
+      const c = document.createElement('canvas');
+      c.width = 320;
+      c.height = 160;
+      const g = c.getContext('2d')!;
+      g.fillStyle = '#94561f';
+      g.fillRect(0, 0, 320, 160);
+      g.fillStyle = '#f9efd6';
+      g.fillRect(20, 100, 120, 40);
+      const blob = await new Promise<Blob>((r) => c.toBlob((b) => r(b!), 'image/jpeg', 0.9));
+      return Array.from(new Uint8Array(await blob.arrayBuffer()));
+    });
+    const photos = page.getByRole('img', { name: /Enclosure photo/ });
+    const before = await photos.count();
+    await input.setInputFiles({ name: 'front.jpg', mimeType: 'image/jpeg', buffer: Buffer.from(bytes) });
+    await expect.poll(() => photos.count(), { timeout: 60_000 }).toBe(before + 1);
+    // Newest first.
+    const img = photos.first();
+    expect(await img.getAttribute('alt')).toBe('Enclosure photo front.jpg');
+    await expect
+      .poll(
+        () =>
+          img.evaluate((el) => (el as HTMLImageElement).complete && (el as HTMLImageElement).naturalWidth),
+        {
+          timeout: 60_000,
+        },
+      )
+      .toBe(320);
+    const src = await img.getAttribute('src');
+    expect(src).toMatch(/^\/api\/uploads\/\d+$/);
+    // Nobody signed in gets nothing.
+    const anonymous = await page.context().browser()!.newContext();
+    const res = await anonymous.request.get(new URL(src!, page.url()).toString());
+    expect(res.status()).toBe(401);
+    await anonymous.close();
+    await screenshot(page, 'lamp-log-photo');
+  });
+});
