@@ -184,9 +184,35 @@ describe('heat', () => {
     expect(at(d, 45, 0).tempC).toBeLessThan(37);
   });
 
+  it('a 75 W halogen flood gives a basking surface of about 50 °C at 30 cm and about 35 °C from the lid', () => {
+    // common practice, no published source (keepers' figures, from memory): 45–60 °C 30 cm below in the
+    // open; on the mesh lid of a 40 cm tall enclosure, a floor hot spot like the 160 W mercury vapour lamp's.
+    const open: Design = {
+      ...emptyDesign(90, 60, 45, 24),
+      objects: [
+        { type: 'lamp', id: 'h', tech: 'halogen', form: 'bulb', x: 45, y: 50, watts: 75, beamDeg: 30 },
+      ],
+    };
+    const t = at(open, 45, 20).tempC;
+    expect(t).toBeGreaterThan(45);
+    expect(t).toBeLessThan(60);
+    const lidded: Design = {
+      ...emptyDesign(90, 40, 45, 24),
+      objects: [
+        { type: 'lamp', id: 'h', tech: 'halogen', form: 'bulb', x: 45, y: 45, watts: 75, beamDeg: 30 },
+        { type: 'screen', id: 'lid', x1: 0, y1: 40, x2: 90, y2: 40 },
+      ],
+    };
+    expect(at(lidded, 45, 0).tempC).toBeGreaterThan(31);
+    expect(at(lidded, 45, 0).tempC).toBeLessThan(39);
+    // Outside the beam only the spread part of the heat arrives, and no UV.
+    expect(at(open, 80, 20).tempC).toBeGreaterThan(24);
+    expect(at(open, 80, 20).tempC).toBeLessThan(t);
+  });
+
   it('warms the air under the lid only when lamps are present', () => {
     const g = computeFields(
-      withObjects([bulb({ tech: 'halogen', uvbAt30: 0, watts: 75, x: 112, y: 90, beamDeg: 10 })]),
+      withObjects([bulb({ tech: 'ceramic', uvbAt30: 0, watts: 100, x: 112, y: 90, beamDeg: 10 })]),
       {
         cellCm: 2,
       },

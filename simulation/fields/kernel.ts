@@ -144,9 +144,11 @@ export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): 
   const h = row.h;
   if (!(h > 0)) return;
   const tube = lamp.tube;
+  let inBeam = true;
   if (!tube) {
-    const dx = qx - lamp.x;
-    if (Math.abs(dx) > h * lamp.beamTan) return;
+    inBeam = Math.abs(qx - lamp.x) <= h * lamp.beamTan;
+    // Outside a bulb's beam only the spread part of its heat arrives.
+    if (!inBeam && lamp.irOut === 0) return;
   }
   const s1 = lamp.s1;
   const s2 = lamp.s2;
@@ -193,8 +195,8 @@ export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): 
     const dx = qx - lamp.x;
     const r2 = h * h + dx * dx;
     const f = h / (r2 * Math.sqrt(r2));
-    s.uv = lamp.uvI * f * gu;
-    s.ir = lamp.irI * f * gi;
+    s.uv = inBeam ? lamp.uvI * f * gu : 0;
+    s.ir = (inBeam ? lamp.irI : lamp.irOut) * f * gi;
     return;
   }
   const scale = 1 / (2 * h);

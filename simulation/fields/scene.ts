@@ -22,8 +22,10 @@ export interface LampGeom {
   s2: number;
   /** UVB intensity, new, with reflector gain: bulb µW/sr (×cm² → µW/cm² via h/r³); tube per cm of tube. */
   uvI: number;
-  /** Radiant (heat) intensity in the same geometry, giving W/m². */
+  /** Radiant (heat) intensity in the same geometry, giving W/m² (for a bulb: inside its beam). */
   irI: number;
+  /** Bulb: radiant intensity below the lamp outside its beam (the share not kept in the beam); 0 for tubes. */
+  irOut: number;
   /** Bulb beam half-width factor (|dx| ≤ h·beamTan); Infinity for tubes. */
   beamTan: number;
   /** Per occluder: UVB and IR transmission along a path from this lamp. */
@@ -48,13 +50,17 @@ export function compileLamp(obj: LampObject, occluders: Occluder[]): LampGeom {
   const radiantW = lamp.watts * lamp.radiantFraction;
   let uvI: number;
   let irI: number;
+  let irOut = 0;
   if (tube) {
     uvI = tubeIntensityFromE30(lamp.uvbAt30, lamp.length) * gain;
     irI = tubeIntensityFromPower(radiantW, lamp.length) * CM2_TO_M2 * gain;
   } else {
     uvI = intensityFromE30(lamp.uvbAt30) * gain;
-    // A point source putting radiant power P into a cone of solid angle Ω has intensity P/Ω.
-    irI = (radiantW / coneSolidAngle(lamp.beamDeg)) * CM2_TO_M2 * gain;
+    // A point source putting radiant power P into a cone of solid angle Ω has intensity P/Ω; the share
+    // not kept in the beam is spread evenly over the lower hemisphere (2π sr).
+    const share = lamp.beamHeatShare;
+    irOut = ((radiantW * (1 - share)) / (2 * Math.PI)) * CM2_TO_M2;
+    irI = ((radiantW * share) / coneSolidAngle(lamp.beamDeg)) * CM2_TO_M2 * gain + irOut * gain;
   }
   const n = occluders.length;
   const tUv = new Float64Array(n);
@@ -73,6 +79,7 @@ export function compileLamp(obj: LampObject, occluders: Occluder[]): LampGeom {
     s2: tube ? lamp.x + lamp.length / 2 : lamp.x,
     uvI,
     irI,
+    irOut,
     beamTan: tube ? Infinity : beamTan(lamp.beamDeg),
     tUv,
     tIr,

@@ -279,7 +279,7 @@ export class FieldSolver {
       if (!prepareRow(lamp, occluders, qy, row, s)) continue;
       let i0 = 0;
       let i1 = nx - 1;
-      if (!lamp.tube && Number.isFinite(lamp.beamTan)) {
+      if (!lamp.tube && Number.isFinite(lamp.beamTan) && lamp.irOut === 0) {
         // Only cells inside the bulb's beam can be lit.
         const half = row.h * lamp.beamTan;
         i0 = Math.max(0, Math.floor((lamp.x - half) / cell - 0.5));

@@ -27,6 +27,7 @@ export interface ResolvedLamp {
   ageMonths: number;
   radiantFraction: number;
   glassIrTransmission: number;
+  beamHeatShare: number;
   decay: DecayCurve;
 }
 
@@ -47,6 +48,7 @@ export function resolveLamp(lamp: LampObject): ResolvedLamp {
     ageMonths: lamp.ageMonths ?? 0,
     radiantFraction: lamp.radiantFraction ?? d.radiantFraction,
     glassIrTransmission: d.glassIrTransmission,
+    beamHeatShare: d.beamHeatShare,
     decay: lamp.decay ?? d.decay,
   };
 }

@@ -42,6 +42,14 @@ export interface LampTechDefaults {
    * 2.7 µm) and absorbs longer waves, so hot filaments get through and warm ceramics do not.
    */
   glassIrTransmission: number;
+  /**
+   * Share of the radiant heat kept inside the nominal beam; the rest is spread evenly over the lower
+   * hemisphere. Besides the lamp's real infrared pattern (wider than its visible beam), this calibration
+   * absorbs what the surface balance leaves out (conduction into the substrate, stronger convection over
+   * a hot spot), so that narrow-beam lamps give the surface temperatures keepers measure. 1 for lamps
+   * whose radiation is not concentrated by a reflector.
+   */
+  beamHeatShare: number;
   decay: DecayCurve;
   /** Where the numbers come from. */
   source: string;
@@ -66,6 +74,7 @@ export const LAMP_TECHS: Record<LampTech, LampTechDefaults> = {
     watts: 24,
     radiantFraction: 0.5,
     glassIrTransmission: 0.05,
+    beamHeatShare: 1,
     decay: { halfLifeMonths: 12 },
     source:
       'uvbAt30: the t5-high preset (see presets.ts); watts: a 55 cm T5 (from memory); uviPerUvb 0.04: typical ratio of UVI-meter ' +
@@ -82,6 +91,7 @@ export const LAMP_TECHS: Record<LampTech, LampTechDefaults> = {
     watts: 18,
     radiantFraction: 0.5,
     glassIrTransmission: 0.05,
+    beamHeatShare: 1,
     decay: { halfLifeMonths: 12 },
     source:
       'uvbAt30: the t8-medium preset (see presets.ts); watts: a 60 cm T8 (from memory); uviPerUvb as T5 (from memory); ' +
@@ -96,6 +106,7 @@ export const LAMP_TECHS: Record<LampTech, LampTechDefaults> = {
     watts: 26,
     radiantFraction: 0.5,
     glassIrTransmission: 0.05,
+    beamHeatShare: 1,
     decay: { halfLifeMonths: 7 },
     source:
       'uvbAt30, watts (from memory); half-life 7 months: compact lamps fail at 6–8 months ' + UV_DECAY_NOTE,
@@ -109,6 +120,7 @@ export const LAMP_TECHS: Record<LampTech, LampTechDefaults> = {
     watts: 160,
     radiantFraction: 0.6,
     glassIrTransmission: 0.6,
+    beamHeatShare: 1,
     decay: { halfLifeMonths: 13 },
     source:
       'uvbAt30 chosen so that UVI 1 is reached about 90 cm below (common practice, no published source); ' +
@@ -125,10 +137,11 @@ export const LAMP_TECHS: Record<LampTech, LampTechDefaults> = {
     watts: 70,
     radiantFraction: 0.6,
     glassIrTransmission: 0.6,
+    beamHeatShare: 0.3,
     decay: { halfLifeMonths: 24 },
     source:
       'uvbAt30 chosen so that UVI 1 is reached about 180 cm below (common practice, no published source); ' +
-      'beamDeg, radiantFraction (from memory); half-life 24 months: ' +
+      'beamDeg, radiantFraction, beamHeatShare (from memory); half-life 24 months: ' +
       UV_DECAY_NOTE,
   },
   'led-uvb': {
@@ -140,6 +153,7 @@ export const LAMP_TECHS: Record<LampTech, LampTechDefaults> = {
     watts: 15,
     radiantFraction: 0.3,
     glassIrTransmission: 0.05,
+    beamHeatShare: 1,
     decay: { halfLifeMonths: 24 },
     source: 'all values from memory; LED UVB sources are new and vary widely — calibrate with a meter',
   },
@@ -152,10 +166,14 @@ export const LAMP_TECHS: Record<LampTech, LampTechDefaults> = {
     watts: 75,
     radiantFraction: 0.85,
     glassIrTransmission: 0.77,
+    beamHeatShare: 0.1,
     decay: { halfLifeMonths: 1e9 },
     source:
       'radiantFraction 0.85 (from memory: most of a filament lamp input leaves as visible and infrared radiation); ' +
-      'glass share: filament about 3000 K, 86 % of black-body emission below 2.7 µm (Incropera Table 12.2), × 0.9',
+      'glass share: filament about 3000 K, 86 % of black-body emission below 2.7 µm (Incropera Table 12.2), × 0.9; ' +
+      'beamHeatShare 0.1 calibrated so that a 75 W flood 30 cm above a dark surface gives about 50 °C, and on the ' +
+      'mesh lid of a 40 cm tall enclosure about 35 °C on the floor, like a 160 W mercury vapour lamp (common ' +
+      'practice, no published source)',
   },
   incandescent: {
     label: 'Incandescent reflector lamp',
@@ -166,10 +184,12 @@ export const LAMP_TECHS: Record<LampTech, LampTechDefaults> = {
     watts: 60,
     radiantFraction: 0.85,
     glassIrTransmission: 0.75,
+    beamHeatShare: 0.25,
     decay: { halfLifeMonths: 1e9 },
     source:
       'radiantFraction (from memory); glass share: filament about 2700 K, 83 % below 2.7 µm (Incropera ' +
-      'Table 12.2), × 0.9',
+      'Table 12.2), × 0.9; beamHeatShare 0.25 so that a 60 W reflector lamp 30 cm above gives about 40 °C ' +
+      '(from memory)',
   },
   ceramic: {
     label: 'Ceramic heat emitter (no light)',
@@ -180,6 +200,7 @@ export const LAMP_TECHS: Record<LampTech, LampTechDefaults> = {
     watts: 100,
     radiantFraction: 0.6,
     glassIrTransmission: 0.05,
+    beamHeatShare: 1,
     decay: { halfLifeMonths: 1e9 },
     source:
       'radiantFraction 0.6 (from memory); glass share: surface about 700 K, 6 % below 2.7 µm (Incropera ' +

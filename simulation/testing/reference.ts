@@ -85,11 +85,12 @@ export function referenceLampAt(
   if (!(h > 0)) return [0, 0];
   if (!lamp.tube) {
     const dx = qx - lamp.x;
-    if (Math.abs(dx) > h * lamp.beamTan) return [0, 0];
+    const inBeam = Math.abs(dx) <= h * lamp.beamTan;
+    if (!inBeam && lamp.irOut === 0) return [0, 0];
     const r2 = h * h + dx * dx;
     const f = h / (r2 * Math.sqrt(r2));
     const [tu, ti] = transmissions(lamp, occ, lamp.x, lamp.y, qx, qy);
-    return [lamp.uvI * f * tu, lamp.irI * f * ti];
+    return inBeam ? [lamp.uvI * f * tu, lamp.irI * f * ti] : [0, lamp.irOut * f * ti];
   }
   const len = lamp.s2 - lamp.s1;
   const ds = len / samples;
