@@ -54,10 +54,12 @@ describe('lamp log', () => {
     await page.goto('/lamp-log');
     await page.getByRole('link', { name: 'Desert vivarium' }).first().click();
     await page.getByRole('heading', { name: 'Import readings (CSV)' }).waitFor();
+    // Dates relative to today, so both rows are after the demo lamp's first use whenever this runs.
+    const day = (ago: number) => new Date(Date.now() - ago * 86_400_000).toISOString().slice(0, 10);
     const csv = [
       'lamp,taken_at,distance,distance_unit,value,unit,meter',
-      'Basking tube,2026-01-10,30,cm,40,uvb,test meter',
-      'Basking tube,2026-01-11,thirty,cm,39,uvb,test meter',
+      `Basking tube,${day(2)},30,cm,40,uvb,test meter`,
+      `Basking tube,${day(1)},thirty,cm,39,uvb,test meter`,
     ].join('\n');
     await page.getByLabel('CSV file of readings').setInputFiles({
       name: 'readings.csv',
