@@ -8,7 +8,8 @@ export default defineConfig({
     environment: 'node',
     // One app and one test database for every file: run them one after another.
     fileParallelism: false,
-    testTimeout: 60_000,
-    hookTimeout: 60_000,
+    // Whole journeys (sign in, build a set-up, reload) on a 2-core CI machine: generous, never a speed check.
+    testTimeout: 180_000,
+    hookTimeout: 120_000,
   },
 });
