@@ -32,14 +32,22 @@ export default async function SpeciesSheetPage({ params }: Props) {
         title={sheet.commonName}
         lead={<span className="italic">{sheet.scientificName}</span>}
         actions={
-          mayEdit && (
-            <>
-              <Link href={`/species/${sheet.id}/edit`} className={button.primary}>
-                Edit sheet
-              </Link>
-              <DeleteSheetButton id={sheet.id} name={sheet.commonName} />
-            </>
-          )
+          <>
+            <Link
+              href={`/enclosures/new?species=${sheet.id}`}
+              className={mayEdit ? button.secondary : button.primary}
+            >
+              Plan an enclosure
+            </Link>
+            {mayEdit && (
+              <>
+                <Link href={`/species/${sheet.id}/edit`} className={button.primary}>
+                  Edit sheet
+                </Link>
+                <DeleteSheetButton id={sheet.id} name={sheet.commonName} />
+              </>
+            )}
+          </>
         }
       />
       <div className="mb-6">
