@@ -77,6 +77,9 @@ const DISPLAY: Record<string, string> = {
   Delete: 'Del',
   Backspace: '⌫',
   Escape: 'Esc',
+  // Shifted brackets, written as the keys pressed (US layout).
+  '}': 'Shift+]',
+  '{': 'Shift+[',
 };
 
 /** Human form for menus and the help panel ("Ctrl+Z" / "⌘Z"). */
