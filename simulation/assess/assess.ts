@@ -6,7 +6,8 @@
 import type { Design } from '../model/schema';
 import type { SpeciesSheet } from '../model/species';
 import { lampUvbFactor } from '../model/resolve';
-import { FieldSolver, type LampSamples } from '../fields/solver';
+import { FieldSolver } from '../fields/solver';
+import type { LampSamples } from '../fields/probe';
 import { HEAT_DEFAULTS, surfaceTempC } from '../fields/heat';
 import type { FieldGrid, SimOptions } from '../fields/types';
 import type { Assessment, Finding, FindingStatus } from './types';

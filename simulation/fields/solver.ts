@@ -8,7 +8,8 @@ import type { Design } from '../model/schema';
 import { lampUvbFactor } from '../model/resolve';
 import type { Occluder } from '../geometry/occluders';
 import { compileScene, type LampGeom, type Scene } from './scene';
-import { evalCell, prepareRow, RowData, Scratch } from './kernel';
+import { fillLamp, refillChanged, Workspace } from './workspace';
+import { probeScene, probeSceneByLamp, type LampSamples } from './probe';
 import { airTempC, HEAT_DEFAULTS, surfaceTempC } from './heat';
 import { DEFAULT_CELL_CM, gridSize, type FieldGrid, type ProbeResult, type SimOptions } from './types';
 
@@ -27,16 +28,6 @@ function occluderKey(o: Occluder): string {
 function lampKey(l: LampGeom, nx: number, ny: number, cell: number): string {
   const { ageMonths: _a, decay: _d, ...rest } = l.lamp;
   return JSON.stringify([nx, ny, cell, rest]);
-}
-
-export interface LampSamples {
-  scene: Scene;
-  /** Per lamp (scene order), UVB of the new lamp at each point. */
-  uv: Float64Array[];
-  /** Absorbed-flux input: total radiant irradiance at each point, W/m². */
-  ir: Float64Array;
-  /** Local air temperature at each point, °C. */
-  air: Float64Array;
 }
 
 export interface SolverStats {
@@ -62,23 +53,12 @@ export class FieldSolver {
    */
   private otherGrids = new Map<string, { entries: Map<string, LampEntry>; totals: Totals | null }>();
   private gridKey = '';
-  private row = new RowData(1);
-  private row2 = new RowData(1);
-  private scratch = new Scratch(1);
-  private capacity = 0;
+  private ws = new Workspace();
   /** Cells recomputed by a partial update in this call. */
   private dirty: Uint8Array | null = null;
   /** Totals of the last call, reused for cells no lamp changed. */
   private totals: Totals | null = null;
   readonly stats: SolverStats = { full: 0, partial: 0, cached: 0, cellsEvaluated: 0 };
-
-  private ensure(n: number) {
-    if (n <= this.capacity) return;
-    this.capacity = Math.max(n, this.capacity * 2, 8);
-    this.row = new RowData(this.capacity);
-    this.row2 = new RowData(this.capacity);
-    this.scratch = new Scratch(this.capacity);
-  }
 
   /** @param cache keep per-lamp fields between calls (false: a one-off computation that allocates less). */
   constructor(private readonly cache = true) {}
@@ -89,7 +69,7 @@ export class FieldSolver {
     const { width, height } = design.enclosure;
     const { nx, ny } = gridSize(width, height, cell);
     const scene = compileScene(design);
-    this.ensure(scene.occluders.length);
+    this.ws.ensure(scene.occluders.length);
     this.stats.full = this.stats.partial = this.stats.cached = this.stats.cellsEvaluated = 0;
     const cells = nx * ny;
     this.switchGrid(JSON.stringify([nx, ny, cell]));
@@ -174,7 +154,7 @@ export class FieldSolver {
     const { width, height } = design.enclosure;
     const { nx, ny } = gridSize(width, height, cell);
     const scene = compileScene(design);
-    this.ensure(scene.occluders.length);
+    this.ws.ensure(scene.occluders.length);
     this.stats.full = this.stats.partial = this.stats.cached = this.stats.cellsEvaluated = 0;
     const cells = nx * ny;
     const hc = opts.convection ?? HEAT_DEFAULTS.convection;
@@ -189,7 +169,7 @@ export class FieldSolver {
         li.fill(0);
       }
       this.stats.full++;
-      this.full(lamp, scene.occluders, lu, li, nx, ny, cell);
+      this.stats.cellsEvaluated += fillLamp(this.ws, lamp, scene.occluders, lu, li, nx, ny, cell);
       const f = lampUvbFactor(lamp.lamp, opts.addMonths ?? 0);
       const fu = lamp.uvI > 0 ? f : 0;
       const fi = lamp.uvI > 0 ? f * lamp.lamp.uviPerUvb : 0;
@@ -252,145 +232,36 @@ export class FieldSolver {
       }
       if (changed && changed.length <= MAX_CHANGED_FOR_PARTIAL) {
         this.stats.partial++;
-        this.partial(lamp, scene.occluders, changed, old, nx, ny, cell);
+        this.stats.cellsEvaluated += refillChanged(
+          this.ws,
+          lamp,
+          scene.occluders,
+          changed,
+          old.uv,
+          old.ir,
+          this.dirty!,
+          nx,
+          ny,
+          cell,
+        );
         return { key, occKeys, occluders: scene.occluders, uv: old.uv, ir: old.ir };
       }
     }
     this.stats.full++;
     const uv = new Float64Array(nx * ny);
     const ir = new Float64Array(nx * ny);
-    this.full(lamp, scene.occluders, uv, ir, nx, ny, cell);
+    this.stats.cellsEvaluated += fillLamp(this.ws, lamp, scene.occluders, uv, ir, nx, ny, cell);
     return { key, occKeys, occluders: scene.occluders, uv, ir };
   }
 
-  private full(
-    lamp: LampGeom,
-    occluders: Occluder[],
-    uv: Float64Array,
-    ir: Float64Array,
-    nx: number,
-    ny: number,
-    cell: number,
-  ) {
-    const row = this.row;
-    const s = this.scratch;
-    for (let j = 0; j < ny; j++) {
-      const qy = (j + 0.5) * cell;
-      if (!prepareRow(lamp, occluders, qy, row, s)) continue;
-      let i0 = 0;
-      let i1 = nx - 1;
-      if (!lamp.tube && Number.isFinite(lamp.beamTan) && lamp.irOut === 0) {
-        // Only cells inside the bulb's beam can be lit.
-        const half = row.h * lamp.beamTan;
-        i0 = Math.max(0, Math.floor((lamp.x - half) / cell - 0.5));
-        i1 = Math.min(nx - 1, Math.ceil((lamp.x + half) / cell - 0.5));
-      }
-      const base = j * nx;
-      for (let i = i0; i <= i1; i++) {
-        evalCell(lamp, row, (i + 0.5) * cell, s);
-        uv[base + i] = s.uv;
-        ir[base + i] = s.ir;
-      }
-      this.stats.cellsEvaluated += Math.max(0, i1 - i0 + 1);
-    }
-  }
-
-  /** Recompute only the cells where a changed barrier (old or new version) can shade this lamp. */
-  private partial(
-    lamp: LampGeom,
-    occluders: Occluder[],
-    changed: Occluder[],
-    old: LampEntry,
-    nx: number,
-    ny: number,
-    cell: number,
-  ) {
-    const row = this.row;
-    const probeRow = this.row2;
-    const s = this.scratch;
-    // The changed barriers with this lamp's transmissions, in a lamp of their own for the range test.
-    const changedLamp = withTransmissions(lamp, changed);
-    const uv = old.uv;
-    const ir = old.ir;
-    const dirty = this.dirty!;
-    for (let j = 0; j < ny; j++) {
-      const qy = (j + 0.5) * cell;
-      if (!prepareRow(changedLamp, changed, qy, probeRow, s)) continue;
-      if (probeRow.count === 0) continue;
-      prepareRow(lamp, occluders, qy, row, s);
-      const base = j * nx;
-      // Union of the affected ranges (old and new positions of a dragged barrier overlap).
-      const ranges: [number, number][] = [];
-      for (let c = 0; c < probeRow.count; c++) {
-        const i0 = Math.max(0, Math.floor(probeRow.qa[c]! / cell - 0.5));
-        const i1 = Math.min(nx - 1, Math.ceil(probeRow.qb[c]! / cell - 0.5));
-        if (i1 >= i0) ranges.push([i0, i1]);
-      }
-      ranges.sort((a, b) => a[0] - b[0]);
-      let next = 0;
-      for (const [a, b] of ranges) {
-        for (let i = Math.max(a, next); i <= b; i++) {
-          evalCell(lamp, row, (i + 0.5) * cell, s);
-          uv[base + i] = s.uv;
-          ir[base + i] = s.ir;
-          dirty[base + i] = 1;
-          this.stats.cellsEvaluated++;
-        }
-        if (b + 1 > next) next = b + 1;
-      }
-    }
-  }
-
-  /**
-   * Per-lamp UVB (new lamp, before ageing) and total radiant flux at exact points, with the local air
-   * temperature: everything needed to recombine the fields for any age without recomputing geometry.
-   */
+  /** See probe.ts. */
   probeByLamp(design: Design, points: { x: number; y: number }[]): LampSamples {
-    const scene = compileScene(design);
-    this.ensure(scene.occluders.length);
-    const n = points.length;
-    const uv = scene.lamps.map(() => new Float64Array(n));
-    const ir = new Float64Array(n);
-    const air = new Float64Array(n);
-    points.forEach(({ x, y }, p) => {
-      scene.lamps.forEach((lamp, k) => {
-        if (!prepareRow(lamp, scene.occluders, y, this.row, this.scratch)) return;
-        evalCell(lamp, this.row, x, this.scratch);
-        uv[k]![p] = this.scratch.uv;
-        ir[p] = ir[p]! + this.scratch.ir;
-      });
-      air[p] = airTempC(y, scene.height, scene.roomC, scene.airRiseK);
-    });
-    return { scene, uv, ir, air };
+    return probeSceneByLamp(this.ws, compileScene(design), points);
   }
 
   /** Values at exact points (no interpolation). */
   probe(design: Design, points: { x: number; y: number }[], opts: SimOptions = {}): ProbeResult[] {
-    const scene = compileScene(design);
-    this.ensure(scene.occluders.length);
-    const factors = scene.lamps.map((l) => lampUvbFactor(l.lamp, opts.addMonths ?? 0));
-    const hc = opts.convection ?? HEAT_DEFAULTS.convection;
-    return points.map(({ x, y }) => {
-      let uvb = 0;
-      let uvi = 0;
-      let ir = 0;
-      scene.lamps.forEach((lamp, k) => {
-        if (!prepareRow(lamp, scene.occluders, y, this.row, this.scratch)) return;
-        evalCell(lamp, this.row, x, this.scratch);
-        const f = factors[k]!;
-        uvb += this.scratch.uv * f;
-        uvi += this.scratch.uv * f * lamp.lamp.uviPerUvb;
-        ir += this.scratch.ir;
-      });
-      const air = airTempC(y, scene.height, scene.roomC, scene.airRiseK);
-      return {
-        x,
-        y,
-        uvb,
-        uvi,
-        tempC: surfaceTempC(HEAT_DEFAULTS.absorptance * ir, air, HEAT_DEFAULTS.emissivity, hc),
-      };
-    });
+    return probeScene(this.ws, compileScene(design), points, opts);
   }
 }
 
@@ -410,16 +281,6 @@ function diffOccluders(old: LampEntry, now: Occluder[], nowKeys: string[]): Occl
     if ((seen.get(k) ?? 0) > (nowCount.get(k) ?? 0)) changed.push(old.occluders[idx]!);
   });
   return changed;
-}
-
-function withTransmissions(lamp: LampGeom, occluders: Occluder[]): LampGeom {
-  const tUv = new Float64Array(occluders.length);
-  const tIr = new Float64Array(occluders.length);
-  occluders.forEach((o, k) => {
-    tUv[k] = o.uvbT;
-    tIr[k] = o.irT ?? lamp.lamp.glassIrTransmission;
-  });
-  return { ...lamp, tUv, tIr };
 }
 
 interface Totals {
