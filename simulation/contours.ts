@@ -26,12 +26,19 @@ type Ring = [number, number][];
 /** UV Index thresholds: the UV-free limit and the boundaries of the Ferguson zones (Ferguson et al. 2010). */
 export const UVI_THRESHOLDS = [0, UV_REFUGE_UVI, 0.7, 1.0, 2.6, 3.5, 7.4, 9.5];
 
-/** A high quantile of the field, so a few cells right under a lamp do not flatten the scale. */
-function robustMax(values: Float32Array, q = 0.995): number {
-  const step = Math.max(1, Math.floor(values.length / 20000));
-  const sample: number[] = [];
-  for (let k = 0; k < values.length; k += step) sample.push(values[k]!);
-  sample.sort((a, b) => a - b);
+/**
+ * A high quantile of the field, so the cells right under a lamp (where the fields rise steeply) do not
+ * flatten the scale: the 90th percentile for UVB and the 95th for temperature. Higher values fall in the
+ * last band.
+ */
+const SCALE_QUANTILE = { uvb: 0.9, tempC: 0.95 } as const;
+
+function robustMax(values: Float32Array, q: number): number {
+  // A strided sample of at most ~4096 cells is plenty for a scale; typed-array sort is numeric and fast.
+  const step = Math.max(1, Math.floor(values.length / 4096));
+  const sample = new Float32Array(Math.ceil(values.length / step));
+  for (let k = 0, m = 0; k < values.length; k += step) sample[m++] = values[k]!;
+  sample.sort();
   return sample[Math.min(sample.length - 1, Math.floor(q * sample.length))] ?? 0;
 }
 
@@ -54,7 +61,7 @@ export function defaultThresholds(field: FieldName, grid: FieldGrid): number[] {
     const t = UVI_THRESHOLDS.filter((v) => v <= max);
     return t.length ? t : [0];
   }
-  const top = robustMax(values);
+  const top = robustMax(values, SCALE_QUANTILE[field]);
   const lo = field === 'uvb' ? 0 : Math.floor(min);
   if (!(top > lo)) return [lo];
   return scaleLinear().domain([lo, top]).nice().ticks(8);
@@ -70,68 +77,73 @@ function signedArea(r: Ring): number {
   return a / 2;
 }
 
-function onSegment(px: number, py: number, a: [number, number], b: [number, number]): boolean {
-  const cross = (b[0] - a[0]) * (py - a[1]) - (b[1] - a[1]) * (px - a[0]);
-  if (Math.abs(cross) > 1e-9) return false;
-  return (
-    px >= Math.min(a[0], b[0]) - 1e-9 &&
-    px <= Math.max(a[0], b[0]) + 1e-9 &&
-    py >= Math.min(a[1], b[1]) - 1e-9 &&
-    py <= Math.max(a[1], b[1]) + 1e-9
-  );
-}
-
-/** 1 inside, 0 outside, -1 on the boundary. */
-function pointInRing(px: number, py: number, r: Ring): number {
+function pointInRing(px: number, py: number, r: Ring): boolean {
   let inside = false;
   for (let k = 0, n = r.length, m = n - 1; k < n; m = k++) {
     const a = r[k]!;
     const b = r[m]!;
-    if (onSegment(px, py, a, b)) return -1;
     if (a[1] > py !== b[1] > py && px < ((b[0] - a[0]) * (py - a[1])) / (b[1] - a[1]) + a[0])
       inside = !inside;
   }
-  return inside ? 1 : 0;
+  return inside;
 }
 
-/** Is ring a inside ring b? Uses the first vertex of a not on b's boundary; rings never cross. */
-function ringInside(a: Ring, aArea: number, b: Ring, bArea: number): boolean {
-  for (const p of a) {
-    const s = pointInRing(p[0], p[1], b);
-    if (s >= 0) return s === 1;
-  }
-  // Every vertex of a lies on b: the same outline (handled by the caller) or a ring running along b.
-  return Math.abs(aArea) < Math.abs(bArea);
+interface RingInfo {
+  ring: Ring;
+  area: number;
+  /** A vertex off the grid border, or null for a ring that runs all round the border. */
+  probe: [number, number] | null;
+  box: [number, number, number, number];
 }
 
-/** Turn rings from nested regions into disjoint polygons by nesting parity. */
-function ringsToPolygons(input: Ring[]): [number, number][][][] {
-  // Identical outlines cancel in parity (e.g. both regions cover the whole grid).
-  const keyed = new Map<string, Ring[]>();
-  for (const r of input) {
-    const key = JSON.stringify([...r.slice(0, -1)].sort((p, q) => p[0] - q[0] || p[1] - q[1]));
-    const list = keyed.get(key) ?? [];
-    list.push(r);
-    keyed.set(key, list);
-  }
-  const rings: Ring[] = [];
-  for (const list of keyed.values()) if (list.length % 2 === 1) rings.push(list[0]!);
-  const areas = rings.map(signedArea);
+/**
+ * Turn rings from nested regions into disjoint polygons by nesting parity. Rings of different thresholds
+ * never cross and meet only along the grid border, and a vertex off the border lies on exactly one ring,
+ * so one such vertex decides containment.
+ */
+function ringsToPolygons(input: Ring[], maxX: number, maxY: number): [number, number][][][] {
+  const eps = 1e-9 * Math.max(1, maxX, maxY);
+  const onBorder = (p: [number, number]) =>
+    p[0] <= eps || p[1] <= eps || p[0] >= maxX - eps || p[1] >= maxY - eps;
+  const all: RingInfo[] = input.map((ring) => {
+    let x0 = Infinity;
+    let y0 = Infinity;
+    let x1 = -Infinity;
+    let y1 = -Infinity;
+    let probe: [number, number] | null = null;
+    for (const p of ring) {
+      if (p[0] < x0) x0 = p[0];
+      if (p[0] > x1) x1 = p[0];
+      if (p[1] < y0) y0 = p[1];
+      if (p[1] > y1) y1 = p[1];
+      if (!probe && !onBorder(p)) probe = p;
+    }
+    return { ring, area: signedArea(ring), probe, box: [x0, y0, x1, y1] };
+  });
+  // Rings running all round the border are the same outline: pairs cancel in parity.
+  const border = all.filter((r) => r.probe === null);
+  const rings = all.filter((r) => r.probe !== null);
+  if (border.length % 2 === 1) rings.unshift(border[0]!);
   const n = rings.length;
   const parents: number[][] = rings.map(() => []);
   for (let a = 0; a < n; a++) {
+    const ra = rings[a]!;
     for (let b = 0; b < n; b++) {
-      if (
-        a !== b &&
-        Math.abs(areas[a]!) <= Math.abs(areas[b]!) &&
-        ringInside(rings[a]!, areas[a]!, rings[b]!, areas[b]!)
-      ) {
+      if (a === b) continue;
+      const rb = rings[b]!;
+      if (rb.probe === null) {
         parents[a]!.push(b);
+        continue;
       }
+      if (ra.probe === null || Math.abs(ra.area) > Math.abs(rb.area)) continue;
+      const [ax0, ay0, ax1, ay1] = ra.box;
+      const [bx0, by0, bx1, by1] = rb.box;
+      if (ax0 < bx0 - eps || ay0 < by0 - eps || ax1 > bx1 + eps || ay1 > by1 + eps) continue;
+      if (pointInRing(ra.probe[0], ra.probe[1], rb.ring)) parents[a]!.push(b);
     }
   }
   const polys = new Map<number, [number, number][][]>();
-  const orient = (r: Ring, ccw: boolean): Ring => (signedArea(r) > 0 === ccw ? r : [...r].reverse());
+  const orient = (r: RingInfo, ccw: boolean): Ring => (r.area > 0 === ccw ? r.ring : [...r.ring].reverse());
   for (let a = 0; a < n; a++) {
     if (parents[a]!.length % 2 === 0) polys.set(a, [orient(rings[a]!, true)]);
   }
@@ -156,7 +168,8 @@ export function contourBands(grid: FieldGrid, field: FieldName, thresholds?: num
   const [, max] = range(values);
   const { nx, ny, cellCm, width, height } = grid;
   const gen = contours().size([nx, ny]).thresholds(t);
-  const regions = gen(Array.from(values));
+  // d3-contour only indexes the values, so the typed array is passed as it is.
+  const regions = gen(values as unknown as number[]);
   const scale = (r: [number, number][]): Ring =>
     r.map(([x, y]) => [Math.min(width, x * cellCm), Math.min(height, y * cellCm)] as [number, number]);
   const ringsOf = (k: number): Ring[] =>
@@ -167,7 +180,7 @@ export function contourBands(grid: FieldGrid, field: FieldName, thresholds?: num
     const hi = k + 1 < t.length ? t[k + 1]! : Math.max(max, lo);
     const rings = k + 1 < t.length ? [...ringsOf(k), ...ringsOf(k + 1)] : ringsOf(k);
     if (rings.length === 0) continue;
-    const polygons = ringsToPolygons(rings);
+    const polygons = ringsToPolygons(rings, Math.min(width, nx * cellCm), Math.min(height, ny * cellCm));
     if (polygons.length) bands.push({ lo, hi, polygons });
   }
   return bands;
