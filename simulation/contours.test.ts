@@ -70,6 +70,23 @@ describe('contour bands', () => {
     expect(wrong).toBe(0);
   });
 
+  it('places every cell centre of real fields in exactly one band', () => {
+    const g = computeFields(EXAMPLE_DESIGN, { cellCm: 2 });
+    for (const field of ['uvb', 'uvi', 'tempC'] as const) {
+      const bands = contourBands(g, field);
+      let wrong = 0;
+      for (let j = 0; j < g.ny; j++) {
+        for (let i = 0; i < g.nx; i++) {
+          const v = g[field][j * g.nx + i]!;
+          const hits = bands.filter((b) => inBand((i + 0.5) * 2, (j + 0.5) * 2, b.polygons));
+          const last = hits[0] === bands[bands.length - 1];
+          if (hits.length !== 1 || v < hits[0]!.lo || (v >= hits[0]!.hi && !last)) wrong++;
+        }
+      }
+      expect(wrong).toBe(0);
+    }
+  });
+
   it('keeps y up: a field rising with height puts the top band at the top', () => {
     const g = gridFrom(10, 20, 1, (_x, y) => y);
     const bands = contourBands(g, 'tempC', [0, 10]);
