@@ -118,3 +118,8 @@ export function keyFigures(design: Design, grid: FieldGrid, opts: { addMonths?: 
     baskingUviAt: uviAt,
   };
 }
+
+/** The hot spot as a marker, only when there is one to speak of (a flat field has no hot spot). */
+export function hotSpotMarker(f: KeyFigures): { x: number; y: number; label: string }[] {
+  return f.hotSpotAt && f.hotSpotC - f.coolEndC > 0.5 ? [{ ...f.hotSpotAt, label: 'Hot spot' }] : [];
+}

@@ -45,9 +45,11 @@ describe('sharedScale', () => {
     expect(s.thresholds.length).toBeGreaterThanOrEqual(4);
   });
 
-  it('handles a flat field', () => {
+  it('spreads a flat field over a readable range', () => {
     const s = sharedScale('tempC', [grid([24, 24, 24])]);
-    expect(s.thresholds.length).toBeGreaterThanOrEqual(2);
+    expect(s.thresholds[0]).toBe(24);
+    expect(s.thresholds.at(-1)!).toBeGreaterThanOrEqual(32);
+    expect(s.thresholds[1]! - s.thresholds[0]!).toBeGreaterThanOrEqual(1);
     expect(bandOf(s, 24)).toBeGreaterThanOrEqual(0);
   });
 });

@@ -34,6 +34,9 @@ export const UVI_EDGES = UVI_THRESHOLDS;
  */
 const TOP_QUANTILE = 0.98;
 
+/** Smallest range a temperature or UVB scale spans (°C, µW/cm²): a presentation choice, not physics. */
+const MIN_SPAN: Record<Exclude<FieldName, 'uvi'>, number> = { tempC: 10, uvb: 10 };
+
 function quantile(values: Float32Array[], q: number): { lo: number; hi: number } {
   let n = 0;
   for (const v of values) n += v.length;
@@ -59,13 +62,15 @@ export function sharedScale(field: FieldName, grids: FieldGrid[], opts: { top?: 
   if (field === 'uvi') {
     thresholds = UVI_EDGES;
   } else {
+    const f = field;
     const { lo, hi } = quantile(
       grids.map((g) => g[field]),
       TOP_QUANTILE,
     );
     const end = opts.top !== undefined && Number.isFinite(opts.top) ? Math.min(hi, opts.top) : hi;
-    const top = end > lo ? end : lo + 1;
     const from = field === 'uvb' ? 0 : Math.floor(lo);
+    // A nearly flat field (no heat lamp yet) would otherwise get bands a tenth of a degree apart.
+    const top = Math.max(end, from + MIN_SPAN[f]);
     thresholds = scaleLinear().domain([from, top]).ticks(8);
     const step = (thresholds[1] ?? top) - (thresholds[0] ?? from) || 1;
     // The lowest band starts at the lowest value; a sliver of a band below the first tick is merged into it.

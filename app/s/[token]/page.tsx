@@ -7,6 +7,7 @@ import { SharedLampList } from '@/components/designs/SharedLampList';
 import { BrandMark } from '@/components/shell/BrandMark';
 import { lampRows } from '@/lib/reports/lamps';
 import { assessFor } from '@/lib/variants/assessment';
+import { hotSpotMarker } from '@/lib/variants/figures';
 import { resolveShareToken } from '@/lib/variants/shares';
 import { bandsFor, scaleFor, simulate } from '@/lib/variants/simulate';
 import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
@@ -104,7 +105,7 @@ export default async function SharedVariantPage({
           bands={bandsFor(sim, scale)}
           scale={scale}
           title={`${scale.label} of ${shared.variant.name}`}
-          markers={f.hotSpotAt ? [{ ...f.hotSpotAt, label: 'Hot spot' }] : []}
+          markers={hotSpotMarker(f)}
         />
         <FieldLegend scale={scale} />
         <dl className="grid gap-x-6 gap-y-1 text-body sm:grid-cols-2">

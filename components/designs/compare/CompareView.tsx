@@ -9,6 +9,7 @@ import type { Assessment } from '@/simulation';
 import { assessFor } from '@/lib/variants/assessment';
 import { compareQuery, type CompareParams } from '@/lib/variants/compare-params';
 import { diffDesigns } from '@/lib/variants/diff';
+import { hotSpotMarker } from '@/lib/variants/figures';
 import { bandsFor, scaleFor, simulate, type Simulated } from '@/lib/variants/simulate';
 import type { SpeciesOption } from '@/lib/variants/species';
 import type { VariantForPage } from '@/lib/variants/variants';
@@ -143,11 +144,7 @@ export function CompareView({
                       bands={bandsFor(side.sim, scale)}
                       scale={scale}
                       title={`${scale.label} of ${v.name}`}
-                      markers={
-                        side.sim.figures.hotSpotAt
-                          ? [{ ...side.sim.figures.hotSpotAt, label: 'Hot spot' }]
-                          : []
-                      }
+                      markers={hotSpotMarker(side.sim.figures)}
                     />
                   ) : (
                     <div

@@ -1,0 +1,142 @@
+// Designs, variants, comparison and sharing in Chromium: a staff member creates a design on a customer's
+// enclosure, adds a second variant, compares the two, shares one, opens the link in a fresh browser with
+// no session, downloads its PDF report, and revokes the link again.
+import { readFileSync } from 'node:fs';
+import { PDFDocument } from 'pdf-lib';
+import { describe, expect, it } from 'vitest';
+import { demoSignIn } from '@/lib/demo/scenario';
+import { pdfDrawnText } from '../api/variants.helpers';
+import { BASE_URL, newContext, screenshot, signIn, withBrowser } from './harness';
+
+const session = withBrowser();
+
+// Long journey against one app: generous, so a cold first compile of a page does not fail it.
+const JOURNEY_MS = 420_000;
+/** How long a poll waits for the page to catch up (a save, a refetch, a navigation). */
+const eventually = { timeout: 60_000, interval: 200 };
+
+describe('variants, comparison and share links', () => {
+  it(
+    'creates two variants, compares them, shares one and downloads its report without a session',
+    async () => {
+      const page = session.page();
+      page.setDefaultTimeout(60_000);
+      const staff = demoSignIn('staff');
+      await signIn(page, staff.email, staff.password);
+
+      // A customer's enclosure from the demo scenario.
+      await page.goto('/enclosures');
+      await page.getByRole('link', { name: 'Gecko tank' }).click();
+      await page.getByRole('heading', { name: 'Designs', exact: true }).waitFor();
+      const enclosurePath = new URL(page.url()).pathname;
+
+      const suffix = Date.now().toString(36);
+      const designName = `Night set-up ${suffix}`;
+      const variantName = `Warm rock ${suffix}`;
+      await page.getByLabel('New design name').fill(designName);
+      await page.getByRole('button', { name: 'New design' }).click();
+      const card = page.getByTestId('design-card').filter({ hasText: designName });
+      // The first variant appears at once (optimistic) and settles with its real id.
+      await expect
+        .poll(() => card.locator('[data-testid=variant-row][aria-busy=false]').count(), eventually)
+        .toBe(1);
+
+      // Rename it, then duplicate it: two variants.
+      await card.getByRole('button', { name: 'Rename variant Variant A' }).click();
+      await card.getByLabel('New name for variant Variant A').fill(variantName);
+      await card.getByLabel('New name for variant Variant A').press('Enter');
+      await expect.poll(() => card.getByText(variantName, { exact: true }).count(), eventually).toBe(1);
+      await card.getByRole('button', { name: 'Duplicate' }).first().click();
+      await expect
+        .poll(() => card.locator('[data-testid=variant-row][aria-busy=false]').count(), eventually)
+        .toBe(2);
+      await expect
+        .poll(() => card.getByText(`Copy of ${variantName}`, { exact: true }).count(), eventually)
+        .toBe(1);
+      await screenshot(page, 'variants-enclosure-designs');
+
+      // Compare the two side by side.
+      await card.getByLabel(`Compare ${variantName}`, { exact: true }).check();
+      await card.getByLabel(`Compare Copy of ${variantName}`).check();
+      await page.getByRole('link', { name: 'Compare side by side' }).click();
+      await page.waitForURL(/\/compare\?a=\d+&b=\d+/);
+      for (const side of ['compare-a', 'compare-b']) {
+        await page.getByTestId(side).getByRole('img').waitFor();
+      }
+      await expect
+        .poll(() => page.getByText('The two variants are the same design.').count(), eventually)
+        .toBe(1);
+      await page.getByRole('radio', { name: 'Temperature' }).click();
+      await page.waitForURL(/field=tempC/);
+      await page
+        .getByTestId('compare-a')
+        .getByRole('img', { name: /Surface temperature/ })
+        .waitFor();
+      await screenshot(page, 'variants-compare');
+
+      // Share the first variant from its design's page.
+      await page.goto(enclosurePath);
+      await page
+        .getByTestId('design-card')
+        .filter({ hasText: designName })
+        .getByRole('link', { name: 'Sharing & export' })
+        .click();
+      const panel = page.getByTestId('variant-panel').filter({ hasText: variantName }).first();
+      await panel.getByRole('button', { name: 'Create share link' }).click();
+      const url = await panel.getByLabel('New share link').inputValue();
+      expect(url).toMatch(/\/s\/[A-Za-z0-9_-]{43}$/);
+      await screenshot(page, 'variants-share-created');
+
+      // A fresh browser context: no cookies, no session.
+      const anonymous = await newContext(session.browser());
+      try {
+        const visitor = await anonymous.newPage();
+        visitor.setDefaultTimeout(60_000);
+        const sharePath = new URL(url).pathname;
+        const res = await visitor.goto(sharePath);
+        expect(res?.status()).toBe(200);
+        await visitor.getByRole('heading', { name: variantName, level: 1 }).waitFor();
+        await visitor.getByRole('img', { name: `UV Index of ${variantName}` }).waitFor();
+        expect(await visitor.getByText('estimate', { exact: false }).count()).toBeGreaterThan(0);
+        // Read-only: no form control of any kind, and nothing else of the organisation.
+        expect(await visitor.locator('main').locator('button, input, select, textarea, form').count()).toBe(
+          0,
+        );
+        expect(await visitor.getByText(`Copy of ${variantName}`).count()).toBe(0);
+        await screenshot(visitor, 'variants-shared-page');
+
+        const [download] = await Promise.all([
+          visitor.waitForEvent('download'),
+          visitor.getByRole('link', { name: 'Download the report (PDF)' }).click(),
+        ]);
+        const file = await download.path();
+        const bytes = new Uint8Array(readFileSync(file));
+        expect(bytes.byteLength).toBeGreaterThan(10_000);
+        expect(Buffer.from(bytes.subarray(0, 5)).toString('latin1')).toBe('%PDF-');
+        expect((await PDFDocument.load(bytes)).getTitle()).toBe(variantName);
+        const text = pdfDrawnText(bytes);
+        expect(text).toContain(variantName);
+        expect(text).toContain('verify with a meter and thermometer');
+
+        // Revoked: the same link answers 404, page and report alike.
+        await panel.getByRole('button', { name: 'Revoke' }).click();
+        // The list shows "Revoked" at once (optimistic); wait for the server's answer itself.
+        const [revoked] = await Promise.all([
+          page.waitForResponse(
+            (r) => r.request().method() === 'DELETE' && /\/api\/shares\/\d+$/.test(r.url()),
+          ),
+          panel.getByRole('button', { name: 'Yes, revoke' }).click(),
+        ]);
+        expect(revoked.status()).toBe(200);
+        await expect.poll(() => panel.getByText('Revoked', { exact: true }).count(), eventually).toBe(1);
+        expect((await visitor.goto(sharePath))?.status()).toBe(404);
+        const report = await visitor.request.get(`${BASE_URL}${sharePath}/report?format=pdf`);
+        expect(report.status()).toBe(404);
+      } finally {
+        await anonymous.close();
+      }
+      expect(session.pageErrors()).toEqual([]);
+    },
+    JOURNEY_MS,
+  );
+});
