@@ -256,9 +256,27 @@ describe('design studio (stored variant, signed in)', () => {
     expect(stored.variant.version).toBeGreaterThan(variant.version);
     expect(stored.variant.design.objects.some((o) => o.type === 'lamp')).toBe(true);
 
+    // Offline: the change is kept and shown as such, then saved when the network is back.
+    await session.context().setOffline(true);
+    await canvas.focus();
+    await page.keyboard.press('d');
+    await page.keyboard.press('Enter');
+    await expect
+      .poll(() => page.getByTestId('save-state').getAttribute('data-state'), { timeout: 30_000 })
+      .toBe('offline');
+    await screenshot(page, 'studio-variant-offline');
+    await session.context().setOffline(false);
+    await waitSaved(page);
+    const after = await page.evaluate(async (id) => {
+      const res = await fetch(`/api/variants/${id}`);
+      return (await res.json()) as { variant: { design: { objects: { type: string }[] } } };
+    }, variant.id);
+    expect(after.variant.design.objects.some((o) => o.type === 'hide')).toBe(true);
+
     await page.reload();
     await openStudio(page, `/studio/${variant.id}`);
     expect(await summary(page)).toMatch(/Lamp: T5 fluorescent tube/);
+    expect(await summary(page)).toMatch(/Hide: 25 cm wide/);
     await screenshot(page, 'studio-variant');
     expect(session.pageErrors()).toEqual([]);
   });

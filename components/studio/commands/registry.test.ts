@@ -104,7 +104,15 @@ describe('commands on a store', () => {
     const parsed = designSchema.safeParse(c.store.design);
     expect(parsed.success, JSON.stringify(parsed.error?.issues)).toBe(true);
     const lamp = c.store.design.objects.find((o) => o.id === 'lamp-1');
-    expect(lamp).toMatchObject({ y: 62, form: 'tube' }); // on the lid
+    expect(lamp).toMatchObject({ y: 62, form: 'tube', length: 55 }); // on the lid
+  });
+
+  it('fits a new tube to a narrow enclosure', () => {
+    const c = ctx();
+    c.store.load({ ...c.store.design, enclosure: { width: 45, height: 60, depth: 45 } });
+    runCommand(command('tool.lamp'), c);
+    runCommand(command('edit.placeHere'), c);
+    expect(c.store.design.objects.find((o) => o.id === 'lamp-1')).toMatchObject({ length: 34, x: 22.5 });
   });
 
   it('toggles units and fields and zooms about the centre', () => {

@@ -75,7 +75,13 @@ export const Palette = memo(function Palette() {
                       e.dataTransfer.setData(PALETTE_DRAG_TYPE, t.tool);
                       e.dataTransfer.effectAllowed = 'copy';
                     }}
-                    onClick={() => runCommand(c, ctx)}
+                    onClick={() => {
+                      runCommand(c, ctx);
+                      // Continue on the canvas: click there, or press Enter to place in the middle.
+                      document
+                        .querySelector<HTMLElement>('[data-testid=studio-canvas]')
+                        ?.focus({ preventScroll: true });
+                    }}
                     className={`flex w-full items-center gap-2 rounded-md px-2 py-1.5 text-left text-sm ${
                       active ? 'bg-moss-100 text-moss-900' : 'text-basalt-800 hover:bg-basalt-100'
                     } disabled:cursor-not-allowed disabled:opacity-40 ${focusRing}`}

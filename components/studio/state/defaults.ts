@@ -15,9 +15,13 @@ export const DEFAULT_SIZES = {
   foliage: { width: 18, height: 40 },
 } as const;
 
-/** A new T5 tube resting on the lid: the most common UVB set-up, a neutral starting point. */
-export function defaultLamp(id: string, x: number, y: number): LampObject {
-  return { type: 'lamp', id, tech: 't5', form: 'tube', x, y, length: DEFAULT_SIZES.tubeLength, ageMonths: 0 };
+/**
+ * A new T5 tube resting on the lid: the most common UVB set-up, a neutral starting point. In a
+ * narrow enclosure the tube is shortened to fit (about three quarters of the width).
+ */
+export function defaultLamp(id: string, x: number, y: number, enclosureWidth = Infinity): LampObject {
+  const length = Math.min(DEFAULT_SIZES.tubeLength, Math.max(10, Math.round(enclosureWidth * 0.75)));
+  return { type: 'lamp', id, tech: 't5', form: 'tube', x, y, length, ageMonths: 0 };
 }
 
 /**
@@ -29,7 +33,7 @@ export function objectForClick(design: Design, type: PlaceToolType, id: string, 
   const { width: W, height: H } = design.enclosure;
   switch (type) {
     case 'lamp':
-      return defaultLamp(id, p.x, p.y);
+      return defaultLamp(id, p.x, p.y, W);
     case 'screen': {
       // A click near the top makes the lid across the whole width, the usual mesh top.
       if (Math.abs(p.y - H) < 3) return { type: 'screen', id, x1: 0, y1: H, x2: W, y2: H };
