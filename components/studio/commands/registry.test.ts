@@ -112,7 +112,7 @@ describe('commands on a store', () => {
     c.store.load({ ...c.store.design, enclosure: { width: 45, height: 60, depth: 45 } });
     runCommand(command('tool.lamp'), c);
     runCommand(command('edit.placeHere'), c);
-    expect(c.store.design.objects.find((o) => o.id === 'lamp-1')).toMatchObject({ length: 34, x: 22.5 });
+    expect(c.store.design.objects.find((o) => o.id === 'lamp-1')).toMatchObject({ length: 34, x: 23 }); // centre snapped to the 1 cm grid;
   });
 
   it('toggles units and fields and zooms about the centre', () => {
