@@ -1,5 +1,4 @@
-import { assess } from '@/simulation/assess/assess';
-import type { Assessment, Design, SpeciesSheet } from '@/simulation';
+import { assess, type Assessment, type Design, type SpeciesSheet } from '@/simulation';
 
 /** The engine's species check of a design at a lamp age `months` from now. */
 export function assessFor(design: Design, species: SpeciesSheet, months = 0): Assessment {

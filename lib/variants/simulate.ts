@@ -49,5 +49,3 @@ export function scaleFor(field: FieldName, sims: Simulated[]): FieldScale {
 export function bandsFor(sim: Simulated, scale: FieldScale): ContourBand[] {
   return contourBands(sim.grid, scale.field, scale.thresholds);
 }
-
-export const FIELD_NAMES: FieldName[] = ['uvi', 'uvb', 'tempC'];
