@@ -20,6 +20,7 @@ import {
   testDb,
   useTestDatabase as withTestDatabase,
 } from '../helpers/db';
+import { expectNoInternals, type Reply } from './http';
 import { call } from './variants.helpers';
 
 withTestDatabase();
@@ -236,6 +237,7 @@ describe('no one reaches another keeper’s or organisation’s designs', () => 
         // The outsider owns the target design of the copy attempt: 404 then names the source variant.
         if (r.status !== 404) failures.push(`${who} ${a.name}: ${r.status}`);
         else expect(r.body.error.code).toBe('not_found');
+        expectNoInternals({ ...r, text: JSON.stringify(r.body) } as Reply);
       }
     }
     expect(failures).toEqual([]);

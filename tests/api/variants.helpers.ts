@@ -1,25 +1,11 @@
-// Calls the real route handler functions with real Requests carrying a real (next-auth-encoded) session
-// cookie, as a browser would after signing in.
+// Calls the real route handler functions with real Requests carrying a real session cookie (the shared
+// helper's), as a browser would after signing in. Unlike tests/api/http.ts it leaves non-JSON bodies
+// unread, so export tests can read the PNG or PDF bytes themselves.
 import { inflateSync } from 'node:zlib';
-import { encode } from 'next-auth/jwt';
-import { authSecret } from '@/lib/auth/secret';
 import type { User } from '@/models';
+import { ORIGIN, sessionCookie } from './http';
 
-export const ORIGIN = 'http://localhost:3000';
-
-export async function sessionCookie(user: User): Promise<string> {
-  const token = await encode({
-    token: {
-      uid: user.id,
-      sv: user.sessionVersion ?? 1,
-      name: user.name,
-      email: user.email,
-      sub: String(user.id),
-    },
-    secret: authSecret(),
-  });
-  return `next-auth.session-token=${token}`;
-}
+export { ORIGIN, sessionCookie };
 
 type Handler = (req: Request, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>;
 
