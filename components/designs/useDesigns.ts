@@ -32,7 +32,7 @@ const nextTempId = () => tempId--;
  * Optimistic edits: every cached list of this enclosure (any search) is edited at once; on failure the
  * snapshot is put back, and after either outcome the lists are fetched again from the server.
  */
-function optimistic<V>(
+export function optimistic<V>(
   qc: QueryClient,
   enclosureId: number,
   edit: (designs: DesignSummary[], v: V) => DesignSummary[],
