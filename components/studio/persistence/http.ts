@@ -14,7 +14,7 @@ import {
 } from './types';
 
 const getBody = z.object({
-  variant: z.object({ id: z.string(), version: z.number().int().min(0), design: z.unknown() }),
+  variant: z.object({ id: z.coerce.string(), version: z.number().int().min(0), design: z.unknown() }),
 });
 const putOk = z.object({ variant: z.object({ version: z.number().int().min(0) }) });
 const putStale = z.object({ current: z.object({ version: z.number().int().min(0), design: z.unknown() }) });
