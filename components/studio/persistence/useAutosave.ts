@@ -2,6 +2,7 @@
 // Connects the store to Autosave: changes are saved after a pause, the local copy is offered back
 // on load, the browser's online event retries at once, and leaving the page flushes.
 import { useCallback, useEffect, useRef, useState } from 'react';
+import { fitView } from '../state/actions';
 import type { StudioStore } from '../state/store';
 import type { Design } from '../state/types';
 import { Autosave, type SaveState } from './autosave';
@@ -62,6 +63,7 @@ export function useAutosave(
   const restore = useCallback(() => {
     if (!offer || !ref.current) return;
     store.load(offer.design);
+    fitView(store);
     ref.current.restore(offer.design, offer.baseVersion);
     setOffer(null);
   }, [offer, store]);
@@ -74,7 +76,10 @@ export function useAutosave(
   const keepMine = useCallback(() => void ref.current?.keepMine(), []);
   const takeTheirs = useCallback(() => {
     const d = ref.current?.takeTheirs();
-    if (d) store.load(d);
+    if (d) {
+      store.load(d);
+      fitView(store);
+    }
   }, [store]);
   const saveNow = useCallback(() => {
     const a = ref.current;

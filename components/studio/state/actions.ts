@@ -26,12 +26,15 @@ export function designBounds(design: Design): Rect {
   return r;
 }
 
-/** Extra room around the design for the ruler (pixels). */
-export const FIT_PADDING_PX = 56;
+/** Room around the design for the rulers, the lamp labels above and the size label below (pixels). */
+export const FIT_PADDING_PX = 72;
+/** The rulers sit on top, so the fitted view is nudged down a little (pixels). */
+export const FIT_SHIFT_DOWN_PX = 10;
 
 export function fitView(store: StudioStore) {
   const { viewport } = store.session;
-  store.setSession({ camera: fitCamera(designBounds(store.design), viewport, FIT_PADDING_PX), fitted: true });
+  const cam = fitCamera(designBounds(store.design), viewport, FIT_PADDING_PX);
+  store.setSession({ camera: { ...cam, originY: cam.originY + FIT_SHIFT_DOWN_PX }, fitted: true });
 }
 
 export function zoomBy(store: StudioStore, factor: number, anchor?: Point) {
