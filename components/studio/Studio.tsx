@@ -11,6 +11,7 @@ import { useSimulation } from './fields/useSimulation';
 import { StudioContext, useStudio } from './hooks/useStudio';
 import { useShortcuts } from './hooks/useShortcuts';
 import { ConflictBanner, RestoreBanner } from './panels/Banners';
+import { CanvasLegend } from './panels/CanvasLegend';
 import { HelpDialog } from './panels/HelpDialog';
 import { ObjectSummary } from './panels/ObjectSummary';
 import { Palette } from './panels/Palette';
@@ -189,12 +190,7 @@ function StudioEditor({
               summaryId={summaryId}
             />
             <ObjectSummary id={summaryId} />
-            {fieldsVisible && legend.length > 0 && (
-              <p className="pointer-events-none absolute right-3 bottom-3 rounded bg-white/85 px-2 py-1 text-caption text-basalt-700 shadow-sm">
-                Shown: {field === 'uvb' ? 'UVB' : field === 'uvi' ? 'UV Index' : 'surface temperature'} —
-                estimates
-              </p>
-            )}
+            {fieldsVisible && <CanvasLegend field={field} temp={tempUnit} legend={legend} />}
           </main>
           <SidePanel sim={sim} legend={legend} species={species} />
         </div>
