@@ -91,6 +91,19 @@ describe('canvas interaction', () => {
     expect(designSchema.safeParse(store.design).success).toBe(true);
   });
 
+  it('centres a clicked perch on the click, and lands a dragged perch end on the floor', () => {
+    const { store, ui, at, drag, obj } = setup();
+    store.setSession({ tool: 'perch' });
+    ui.down(at(60, 1), none);
+    ui.up(at(60, 1), none);
+    const p = obj('perch-1') as PerchObject;
+    expect((p.x1 + p.x2) / 2).toBeCloseTo(60, 1);
+    expect((p.y1 + p.y2) / 2).toBeCloseTo(1, 1); // not pulled onto the floor
+    store.setSession({ tool: 'perch' });
+    drag(at(50, 2.5), at(70, 30));
+    expect(obj('perch-2')).toMatchObject({ x1: 50, y1: 2 }); // underside on the floor (4 cm thick)
+  });
+
   it('pans with the pan tool without touching the document', () => {
     const { store, at, drag } = setup();
     store.setSession({ tool: 'pan' });

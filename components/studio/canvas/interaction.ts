@@ -11,7 +11,7 @@ import {
 } from '../geometry/objects';
 import { snapMove, snapPoint, type Guide, type PointRole } from '../geometry/snap';
 import * as A from '../state/actions';
-import { objectForDrag } from '../state/defaults';
+import { DEFAULT_SIZES, objectForDrag } from '../state/defaults';
 import { addObject, moveObjects, nextId, replaceObjects } from '../state/document';
 import { isPlaceTool, type PlaceTool } from '../state/session';
 import type { StudioStore } from '../state/store';
@@ -45,7 +45,15 @@ type Drag =
 export function handleRole(o: DesignObject, handle: HandleId): PointRole {
   if (o.type === 'perch') return handle === 'rotate' ? 'free' : 'perch-end';
   if (o.type === 'screen' || o.type === 'glass') return handle === 'rotate' ? 'free' : 'barrier-end';
-  if (o.type === 'lamp') return 'box-corner';
+  // Tube ends and box corners land on walls, floor, tops and the lid.
+  return 'box-corner';
+}
+
+/** How the points of a drag that draws a new object snap. */
+function dragRole(type: PlaceTool): PointRole {
+  if (type === 'perch') return 'perch-end';
+  if (type === 'screen' || type === 'glass') return 'barrier-end';
+  if (type === 'lamp') return 'free';
   return 'box-corner';
 }
 
@@ -117,7 +125,10 @@ export class CanvasInteraction {
       return;
     }
     if (isPlaceTool(tool)) {
-      const { point } = snapPoint(s.design, d, A.roleForPlacement(tool), A.snapOptions(s));
+      // The start of a drag (a lamp starts on the lid); a plain click is placed on release instead.
+      const role = tool === 'lamp' ? 'lamp' : dragRole(tool);
+      const thickness = tool === 'perch' ? DEFAULT_SIZES.perchThickness : 0;
+      const { point } = snapPoint(s.design, d, role, A.snapOptions(s), new Set(), thickness);
       this.drag = { kind: 'place', type: tool, from: point, id: nextId(s.design, tool) };
       return;
     }
@@ -233,8 +244,8 @@ export class CanvasInteraction {
         return;
       }
       case 'place': {
-        const role = A.roleForPlacement(drag.type);
-        const { point, guides } = snapPoint(s.design, d, role === 'lamp' ? 'free' : role, opts);
+        const thickness = drag.type === 'perch' ? DEFAULT_SIZES.perchThickness : 0;
+        const { point, guides } = snapPoint(s.design, d, dragRole(drag.type), opts, new Set(), thickness);
         const obj = objectForDrag(
           drag.type,
           drag.id,

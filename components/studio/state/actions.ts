@@ -105,9 +105,10 @@ export function nudgeSelection(store: StudioStore, stepsX: number, stepsY: numbe
   store.edit((d) => doc.moveObjects(d, ids, stepsX * step, stepsY * step));
 }
 
+/** How a click that places an object snaps: a lamp to the lid, a box onto a surface; a perch's centre freely. */
 export function roleForPlacement(type: ObjectType): PointRole {
   if (type === 'lamp') return 'lamp';
-  if (type === 'perch') return 'box-corner';
+  if (type === 'perch') return 'free';
   if (type === 'screen' || type === 'glass') return 'barrier-end';
   return 'box-corner';
 }
