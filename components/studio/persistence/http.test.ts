@@ -28,6 +28,13 @@ describe('httpPersistence', () => {
     expect(calls[0]?.url).toBe('/api/variants/a%20b');
   });
 
+  it('accepts the numeric ids the variants API answers with', async () => {
+    const { f } = fakeFetch(() =>
+      json(200, { variant: { id: 12, name: 'A', version: 2, design: exampleDesign() } }),
+    );
+    expect((await httpPersistence('12', f).load()).version).toBe(2);
+  });
+
   it('puts the design with its base version', async () => {
     const { f, calls } = fakeFetch(() => json(200, { variant: { id: 'v', version: 5, updatedAt: 'now' } }));
     const r = await httpPersistence('v', f).save(exampleDesign(), 4);
