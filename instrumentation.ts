@@ -8,4 +8,16 @@ export async function register() {
   if (process.env.NEXT_PHASE === 'phase-production-build') return;
   const { startReminderSchedule } = await import('./lib/reminders/schedule');
   startReminderSchedule();
+  // npm start refuses a database that can lose acknowledged saves (scripts/migrate.ts); a server started
+  // some other way says so loudly. Not fatal here: the database may simply be down, and the app recovers.
+  const [{ durabilityProblems }, { getSequelize }] = await Promise.all([
+    import('./lib/db-durability'),
+    import('./lib/db'),
+  ]);
+  durabilityProblems(getSequelize()).then(
+    (problems) => {
+      for (const p of problems) console.error(`WARNING: database not crash-safe: ${p}`);
+    },
+    () => undefined,
+  );
 }

@@ -1,4 +1,7 @@
 // Applies pending migrations to the database named by DB_NAME; `--down` reverts the last one.
+// Then refuses (exit 1) when the database could lose acknowledged saves in a crash (lib/db-durability.ts):
+// `npm start` and `npm test` run this before anything else touches the database.
+import { assertDurable } from '@/lib/db-durability';
 import { closeSequelize, getSequelize } from '@/lib/db';
 import { migrateUp, migrator } from '@/lib/migrate';
 
@@ -13,6 +16,8 @@ async function main() {
   }
   const applied = await migrateUp(sequelize);
   console.log(applied.length ? `Applied ${applied.join(', ')}.` : 'Database schema is up to date.');
+  const problems = await assertDurable(sequelize);
+  if (problems.length === 0) console.log('Database is crash-safe (InnoDB, redo log synced at each commit).');
 }
 
 main()

@@ -8,6 +8,7 @@ import path from 'node:path';
 import { promisify } from 'node:util';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { expectNoInternals, type Reply } from '../api/http';
+import { freePort } from '../helpers/ports';
 
 const run = promisify(execFile);
 const ROOT = path.resolve(import.meta.dirname, '..', '..');
@@ -23,15 +24,6 @@ type Outcome = {
   text?: string;
   threw?: string;
 };
-
-/** A port nothing listens on (bound by the OS, then released). */
-async function closedPort(): Promise<number> {
-  const srv = net.createServer();
-  await new Promise<void>((r) => srv.listen(0, '127.0.0.1', r));
-  const { port } = srv.address() as net.AddressInfo;
-  await new Promise<void>((r) => srv.close(() => r()));
-  return port;
-}
 
 async function handlersWithDatabaseAt(port: number): Promise<Outcome[]> {
   const { stdout } = await run(TSX, [CHILD], {
@@ -61,7 +53,7 @@ function expectUnavailable(o: Outcome, port: number, withinMs: number) {
 
 describe('database outage', () => {
   it('a closed database port: 503 with Retry-After within 3 s', { timeout: 120_000 }, async () => {
-    const port = await closedPort();
+    const port = await freePort();
     const outcomes = await handlersWithDatabaseAt(port);
     expect(outcomes.map((o) => o.name)).toEqual([
       'GET /api/health',

@@ -1,0 +1,56 @@
+// Runs a tsx child that reports one JSON event a line on stdout and takes commands on stdin, and lets a
+// test wait for what it has reported so far.
+import { spawn, type ChildProcess } from 'node:child_process';
+import path from 'node:path';
+import { createInterface } from 'node:readline';
+
+const ROOT = path.resolve(import.meta.dirname, '..', '..');
+const TSX = path.join(ROOT, 'node_modules', '.bin', 'tsx');
+
+export type ChildEvent = { ev: string; [key: string]: unknown };
+
+export type EventChild = {
+  events: ChildEvent[];
+  send(command: string): void;
+  /** Resolves when `check` passes on the events so far; rejects (with the stderr tail) after `ms`. */
+  until(what: string, check: (events: ChildEvent[]) => boolean, ms: number): Promise<void>;
+  exited: Promise<number | null>;
+  kill(): void;
+};
+
+export function eventChild(file: string, env: NodeJS.ProcessEnv): EventChild {
+  const child: ChildProcess = spawn(TSX, [file], { cwd: ROOT, env, stdio: ['pipe', 'pipe', 'pipe'] });
+  const events: ChildEvent[] = [];
+  let stderr = '';
+  let exitCode: number | null | undefined;
+  child.stderr!.on('data', (d: Buffer) => (stderr = (stderr + d.toString()).slice(-4000)));
+  createInterface({ input: child.stdout! }).on('line', (line) => {
+    try {
+      events.push(JSON.parse(line) as ChildEvent);
+    } catch {
+      stderr = `${stderr}\n(stdout) ${line}`.slice(-4000);
+    }
+  });
+  const exited = new Promise<number | null>((resolve) =>
+    child.on('exit', (code) => {
+      exitCode = code;
+      resolve(code);
+    }),
+  );
+  return {
+    events,
+    send: (command) => child.stdin!.write(`${command}\n`),
+    async until(what, check, ms) {
+      const end = Date.now() + ms;
+      while (!check(events)) {
+        if (exitCode !== undefined) throw new Error(`child exited (${exitCode}) before ${what}:\n${stderr}`);
+        if (Date.now() > end) throw new Error(`no ${what} within ${ms} ms; child stderr:\n${stderr}`);
+        await new Promise((r) => setTimeout(r, 50));
+      }
+    },
+    exited,
+    kill: () => {
+      if (exitCode === undefined) child.kill('SIGKILL');
+    },
+  };
+}
