@@ -3,6 +3,7 @@ import { ApiError, conflict } from '@/lib/api/errors';
 import { emailSchema, organisationNameSchema, personNameSchema } from '@/lib/api/schemas';
 import { getSequelize } from '@/lib/db';
 import { checkLimits, countAttempt, limitKey } from '@/lib/rate-limit';
+import { seedStartingCatalogue } from '@/lib/species/seed';
 import { Membership, Organisation, User } from '@/models';
 import { hashPassword, newPasswordSchema } from './password';
 
@@ -16,7 +17,10 @@ export const signUpBody = z.object({
 /** Account creation is limited per client address, so a script cannot mass-create accounts. */
 export const SIGN_UP_LIMIT = { perAddress: 10, windowMs: 60 * 60_000 } as const;
 
-/** Creates the account and its organisation, with the new user as owner. */
+/**
+ * Creates the account and its organisation, with the new user as owner, and gives the organisation its
+ * starting species sheets and lamp types in the same transaction: the first page it sees is usable.
+ */
 export async function signUp(input: z.output<typeof signUpBody>, address: string) {
   const sequelize = getSequelize();
   const key = limitKey('sign-up', address);
@@ -46,6 +50,7 @@ export async function signUp(input: z.output<typeof signUpBody>, address: string
       { organisationId: organisation.id, userId: user.id, role: 'owner' },
       { transaction },
     );
+    await seedStartingCatalogue(organisation.id, { transaction });
     return { userId: user.id, organisationId: organisation.id };
   });
 }

@@ -3,7 +3,9 @@ import * as enclosures from '@/app/api/enclosures/route';
 import * as signUpRoute from '@/app/api/sign-up/route';
 import { authOptions, authorizeCredentials, SIGN_IN_LIMITS } from '@/lib/auth';
 import { signInErrorMessage } from '@/lib/auth/messages';
-import { SignInAttempt, User, type Organisation } from '@/models';
+import { STARTING_LAMP_TYPES } from '@/lib/lamp-types/starting-lamp-types';
+import { STARTING_SHEETS } from '@/lib/species/starting-sheets';
+import { CatalogueSeeding, LampType, SignInAttempt, SpeciesSheet, User, type Organisation } from '@/models';
 import { closeDatabase, createMember, resetDatabase } from '../helpers/db';
 import { call, sessionCookie } from './http';
 
@@ -188,6 +190,19 @@ describe('POST /api/sign-up', () => {
     const stored = await User.scope('withPassword').findOne({ where: { email: body.email } });
     expect(stored?.passwordHash).toMatch(/^\$2[aby]\$/);
     expect(stored?.passwordHash).not.toContain(body.password);
+  });
+
+  it('gives the new organisation its starting species sheets and lamp types at once', async () => {
+    const r = await call(signUpRoute.POST, { method: 'POST', path: '/api/sign-up', body });
+    expect(r.status).toBe(201);
+    const organisationId = r.body.organisationId as number;
+    const sheets = await SpeciesSheet.findAll({ where: { organisationId }, attributes: ['seedKey'] });
+    expect(sheets.map((s) => s.seedKey).sort()).toEqual(STARTING_SHEETS.map((s) => s.seedKey).sort());
+    const lampTypes = await LampType.findAll({ where: { organisationId }, attributes: ['presetKey'] });
+    expect(lampTypes.map((l) => l.presetKey).sort()).toEqual(
+      STARTING_LAMP_TYPES.map((l) => l.presetKey).sort(),
+    );
+    expect(await CatalogueSeeding.findByPk(organisationId)).not.toBeNull();
   });
 
   it.each([
