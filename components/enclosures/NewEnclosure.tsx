@@ -12,10 +12,13 @@ export function NewEnclosure({
   organisationId,
   people,
   startOpen = false,
+  variant = 'primary',
 }: {
   organisationId: number;
   people?: PersonOption[];
   startOpen?: boolean;
+  /** Secondary where a stronger call to action (the guided start) stands beside it. */
+  variant?: 'primary' | 'secondary';
 }) {
   const router = useRouter();
   const [open, setOpen] = useState(startOpen);
@@ -28,7 +31,7 @@ export function NewEnclosure({
             Added “{created}”.
           </span>
         )}
-        <button type="button" className={button.primary} onClick={() => setOpen(true)}>
+        <button type="button" className={button[variant]} onClick={() => setOpen(true)}>
           New enclosure
         </button>
       </div>

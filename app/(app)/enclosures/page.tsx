@@ -6,7 +6,7 @@ import { EmptyState } from '@/components/ui/EmptyState';
 import { Notice } from '@/components/ui/Notice';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { UnitToggle } from '@/components/ui/UnitToggle';
-import { link } from '@/components/ui/styles';
+import { button, link } from '@/components/ui/styles';
 import { enclosureViews, memberViews } from '@/lib/api/views';
 import { can, roleIn } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
@@ -59,14 +59,26 @@ export default async function EnclosuresPage({
           </Notice>
         </div>
       )}
-      <div className="mb-6 flex justify-end">
-        <NewEnclosure organisationId={orgId} people={peopleOptions} />
+      <div className="mb-6 flex flex-wrap items-start justify-end gap-3">
+        {/* The guided start is the quickest way to a checked set-up; the blank form is for a known design. */}
+        <Link href="/enclosures/new" className={button.primary}>
+          Guided start
+        </Link>
+        <NewEnclosure organisationId={orgId} people={peopleOptions} variant="secondary" />
       </div>
       {items.length === 0 ? (
-        <EmptyState title={filteredName ? `${filteredName} has no enclosures yet` : 'No enclosures yet'}>
+        <EmptyState
+          title={filteredName ? `${filteredName} has no enclosures yet` : 'No enclosures yet'}
+          action={
+            <Link href="/enclosures/new" className={button.primary}>
+              Plan a first enclosure with the guided start
+            </Link>
+          }
+        >
           <p>
             An enclosure is the real tank or vivarium an animal lives in: its inside size, the species and the
-            animal. Add one, then plan its lamps in a design and keep its meter readings here.
+            animal. The guided start asks for the species and the enclosure and proposes a first lighting and
+            heating set-up, checked against the species sheet; or add a blank one with “New enclosure”.
           </p>
           {!isKeeper && (
             <p>Add customers as keepers first (Keepers page) to file enclosures under their names.</p>

@@ -5,7 +5,7 @@ import { DesignsSection } from '@/components/designs/DesignsSection';
 import { EnclosureDetails } from '@/components/enclosures/EnclosureDetails';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { UnitToggle } from '@/components/ui/UnitToggle';
-import { link } from '@/components/ui/styles';
+import { button, link } from '@/components/ui/styles';
 import { enclosureView, memberViews } from '@/lib/api/views';
 import { can } from '@/lib/permissions';
 import { requireUser } from '@/lib/session';
@@ -38,7 +38,19 @@ export default async function EnclosurePage({ params }: { params: Promise<{ id: 
         <span className="text-basalt-400"> / </span>
         <span aria-current="page">{enclosure.name}</span>
       </nav>
-      <PageHeader title={enclosure.name} lead={subtitle || undefined} actions={<UnitToggle />} />
+      <PageHeader
+        title={enclosure.name}
+        lead={subtitle || undefined}
+        actions={
+          <>
+            {/* The lamps actually installed, their meter readings and replacement dates live on their own page. */}
+            <Link href={`/enclosures/${enclosure.id}/lamps`} className={button.secondary}>
+              Lamps and readings
+            </Link>
+            <UnitToggle />
+          </>
+        }
+      />
       <div className="space-y-8">
         <EnclosureDetails
           enclosure={enclosure}
