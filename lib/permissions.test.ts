@@ -97,6 +97,34 @@ const rows: Record<string, Row> = {
     resource: { kind: 'lamp-type', organisationId: ORG },
     expect: { owner: ALL, staff: ALL, keeper: READ_ONLY, outsider: NONE, nobody: NONE, anonymous: NONE },
   },
+  // Files left behind by a deleted enclosure (files filed under one follow the enclosure rows above).
+  'a file the keeper uploaded': {
+    resource: { kind: 'upload', organisationId: ORG, uploaderId: 30 },
+    expect: {
+      owner: ALL,
+      staff: { read: true, create: true, update: false, delete: false },
+      keeper: ALL,
+      outsider: NONE,
+      nobody: NONE,
+      anonymous: NONE,
+    },
+  },
+  'a file staff uploaded': {
+    resource: { kind: 'upload', organisationId: ORG, uploaderId: 20 },
+    expect: {
+      owner: ALL,
+      staff: ALL,
+      keeper: { read: false, create: true, update: false, delete: false },
+      outsider: NONE,
+      nobody: NONE,
+      anonymous: NONE,
+    },
+  },
+  'a file its uploader left behind in an organisation they have left': {
+    resource: { kind: 'upload', organisationId: OTHER_ORG, uploaderId: 30 },
+    // Keeper 30 is no longer a member of organisation 2: uploading it gives no lasting access.
+    expect: { owner: NONE, staff: NONE, keeper: NONE, outsider: ALL, nobody: NONE, anonymous: NONE },
+  },
   'captured mail': {
     resource: { kind: 'mail', organisationId: ORG },
     expect: {

@@ -24,6 +24,11 @@ export type Resource =
   | { kind: 'invitation'; organisationId: number; role?: Role }
   | { kind: 'species'; organisationId: number }
   | { kind: 'lamp-type'; organisationId: number }
+  /**
+   * An uploaded file no longer filed under an enclosure (its enclosure was deleted); one that still is
+   * follows its enclosure's rules. `uploaderId` is the member who uploaded it.
+   */
+  | { kind: 'upload'; organisationId: number; uploaderId: number }
   /** The development mail viewer, which shows captured invitation links. */
   | { kind: 'mail'; organisationId: number };
 
@@ -75,6 +80,16 @@ export function can(user: SessionUser | null | undefined, action: Action, resour
       const role = roleIn(user, resource.organisationId);
       if (action === 'read') return role !== null;
       return isStaffOrOwner(role);
+    }
+    case 'upload': {
+      const role = roleIn(user, resource.organisationId);
+      if (role === null) return false;
+      const isUploader = resource.uploaderId === user.id;
+      // Staff look after the organisation's files; a keeper sees only what they uploaded themselves.
+      if (action === 'read') return isUploader || isStaffOrOwner(role);
+      if (action === 'create') return true;
+      // Changing or removing someone else's file is the owner's call.
+      return isUploader || role === 'owner';
     }
     case 'mail':
       return action === 'read' && isStaffOrOwner(roleIn(user, resource.organisationId));

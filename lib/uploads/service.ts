@@ -2,7 +2,7 @@ import { createHash, randomUUID } from 'node:crypto';
 import { ApiError, allow, notFound } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { getSequelize } from '@/lib/db';
-import { roleIn } from '@/lib/permissions';
+import { can } from '@/lib/permissions';
 import { deleteObject, getObject, putObject, StorageUnavailableError } from '@/lib/storage/s3';
 import { Enclosure, Upload } from '@/models';
 import type { Transaction } from 'sequelize';
@@ -173,10 +173,13 @@ export async function uploadFor(
     );
     return upload;
   }
-  const role = roleIn(user, upload.organisationId);
-  const mayRead = upload.ownerId === user.id || role === 'owner' || role === 'staff';
-  if (!mayRead) throw notFound('The file');
-  if (action === 'delete' && upload.ownerId !== user.id && role !== 'owner') {
+  const loose = {
+    kind: 'upload',
+    organisationId: upload.organisationId,
+    uploaderId: upload.ownerId,
+  } as const;
+  if (!can(user, 'read', loose)) throw notFound('The file');
+  if (action === 'delete' && !can(user, 'delete', loose)) {
     throw new ApiError(
       403,
       'forbidden',

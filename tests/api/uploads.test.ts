@@ -2,9 +2,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import * as uploadsRoute from '@/app/api/uploads/route';
 import * as uploadRoute from '@/app/api/uploads/[id]/route';
 import { useFakeS3 } from '@/lib/storage/fake-s3-for-tests';
-import { getObject } from '@/lib/storage/s3';
+import { getObject, putObject } from '@/lib/storage/s3';
 import { jpegWithMetadata, pngWithMetadata } from '@/lib/uploads/fixtures.test-helpers';
-import { Upload } from '@/models';
+import { Organisation, Upload } from '@/models';
 import { createEnclosure, createMember, createOrganisation, withTestDatabase } from '../helpers/db';
 import { call, ORIGIN, sessionCookie } from './http';
 
@@ -126,5 +126,41 @@ describe('backdrop uploads', () => {
     expect(ok.status).toBe(200);
     expect(await getObject(key)).toBeNull();
     expect(await Upload.count()).toBe(0);
+  });
+
+  it('keeps a file filed under no enclosure to its uploader, staff (read) and owners', async () => {
+    const w = await world();
+    const org = (await w.enclosure.reload()).organisationId;
+    const { user: owner } = await createMember('owner', (await Organisation.findByPk(org))!);
+    const bytes = jpegWithMetadata();
+    const storageKey = `org-${org}/loose/${Date.now()}.jpg`;
+    await putObject(storageKey, bytes, 'image/jpeg');
+    const loose = await Upload.create({
+      kind: 'backdrop',
+      ownerId: w.keeper.id,
+      organisationId: org,
+      enclosureId: null,
+      storageKey,
+      contentType: 'image/jpeg',
+      sizeBytes: bytes.length,
+      sha256: 'a'.repeat(64),
+      originalName: 'loose.jpg',
+    });
+    for (const as of [w.keeper, w.staff, owner]) expect((await getFile(w, loose.id, as)).status).toBe(200);
+    for (const as of [w.otherKeeper, w.outsider]) expect((await getFile(w, loose.id, as)).status).toBe(404);
+    const del = (as: W['keeper']) =>
+      call(uploadRoute.DELETE, {
+        method: 'DELETE',
+        path: `/api/uploads/${loose.id}`,
+        params: { id: loose.id },
+        as,
+      });
+    for (const as of [w.otherKeeper, w.outsider]) expect((await del(as)).status).toBe(404);
+    const staffDelete = await del(w.staff);
+    expect(staffDelete.status).toBe(403);
+    expect(staffDelete.body.error.message).toMatch(/Only the person who uploaded it, or an owner/);
+    expect(await Upload.count({ where: { id: loose.id } })).toBe(1);
+    expect((await del(owner)).status).toBe(200);
+    expect(await Upload.count({ where: { id: loose.id } })).toBe(0);
   });
 });
