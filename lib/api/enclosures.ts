@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { getSequelize } from '@/lib/db';
 import { Enclosure, Membership, User } from '@/models';
 import { badRequest } from './errors';
-import { idSchema } from './schemas';
+import { idSchema, textSchema } from './schemas';
 
 /** Enclosure fields as the API accepts them. Sizes are inside dimensions in centimetres. */
 const size = (what: string) =>
@@ -13,16 +13,14 @@ const size = (what: string) =>
     .max(2000, `The ${what} can be at most 2000 cm (20 m).`);
 
 const optionalText = (max: number) =>
-  z
-    .string()
+  textSchema()
     .trim()
     .max(max, `Use at most ${max} characters.`)
     .nullish()
     .transform((v) => (v ? v : null));
 
 export const enclosureFields = {
-  name: z
-    .string({ error: 'Enter a name for the enclosure.' })
+  name: textSchema('Enter a name for the enclosure.')
     .trim()
     .min(1, 'Enter a name for the enclosure.')
     .max(120, 'Use at most 120 characters.'),

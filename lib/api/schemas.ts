@@ -1,7 +1,11 @@
 import { z } from 'zod';
 import { ROLES } from '@/models/membership';
+import { textSchema } from './text';
 
 /** Field schemas shared by route handlers and forms, with messages a person can act on. */
+
+// Free text refuses unpaired surrogates; defined apart (zod only) so browser forms can use it too.
+export { BROKEN_CHARACTER_MESSAGE, isWellFormedText, textSchema } from './text';
 
 export const idSchema = (what: string) =>
   z.coerce
@@ -19,14 +23,12 @@ export const emailSchema = z
   .max(254, 'That e-mail address is too long.')
   .pipe(z.email('Enter a valid e-mail address, like name@example.com.'));
 
-export const personNameSchema = z
-  .string({ error: 'Enter a name.' })
+export const personNameSchema = textSchema('Enter a name.')
   .trim()
   .min(1, 'Enter a name.')
   .max(120, 'Use at most 120 characters.');
 
-export const organisationNameSchema = z
-  .string({ error: 'Enter the name of the organisation.' })
+export const organisationNameSchema = textSchema('Enter the name of the organisation.')
   .trim()
   .min(2, 'Enter the name of the organisation (at least 2 characters).')
   .max(120, 'Use at most 120 characters.');

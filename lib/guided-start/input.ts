@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textSchema } from '@/lib/api/text';
 
 /** What the guided start asks, as the server checks it. Sizes are inside dimensions in cm, °C. */
 
@@ -30,13 +31,11 @@ export const guidedStartSchema = z.strictObject({
     .min(5, 'The room temperature must be at least 5 °C (41 °F).')
     .max(40, 'The room temperature must be at most 40 °C (104 °F).'),
   keeperId: id('The keeper').optional(),
-  name: z
-    .string({ error: 'Enter a name for the enclosure.' })
+  name: textSchema('Enter a name for the enclosure.')
     .trim()
     .min(1, 'Enter a name for the enclosure.')
     .max(120, 'Use at most 120 characters.'),
-  animalName: z
-    .string()
+  animalName: textSchema()
     .trim()
     .max(120, 'Use at most 120 characters.')
     .nullish()

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { idSchema } from '@/lib/api/schemas';
+import { idSchema, textSchema } from '@/lib/api/schemas';
 import { READING_UNITS } from '@/models/reading';
 
 /** Request shapes of the lamp log routes and forms, with messages a person can act on. */
@@ -24,8 +24,7 @@ const isoDate = (what: string) =>
     );
 
 const text = (max: number) =>
-  z
-    .string()
+  textSchema()
     .trim()
     .max(max, `Use at most ${max} characters.`)
     .nullish()
@@ -41,8 +40,7 @@ const distance = (what: string, max: number) =>
 
 export const lampFields = {
   lampTypeId: idSchema('The lamp type'),
-  label: z
-    .string({ error: 'Give the lamp a name, e.g. "Basking tube".' })
+  label: textSchema('Give the lamp a name, e.g. "Basking tube".')
     .trim()
     .min(1, 'Give the lamp a name, e.g. "Basking tube".')
     .max(120, 'Use at most 120 characters.'),

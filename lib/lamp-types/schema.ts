@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textSchema } from '@/lib/api/text';
 import { LAMP_TECH_IDS } from '@/simulation';
 
 /** Pure (no database imports): the forms use this schema in the browser. */
@@ -48,8 +49,7 @@ const decayPoints = z
   );
 
 const fields = {
-  name: z
-    .string({ error: 'The name must be text.' })
+  name: textSchema('The name must be text.')
     .trim()
     .min(1, 'Give the lamp type a name.')
     .max(120, 'The name can be at most 120 characters.'),
@@ -65,11 +65,11 @@ const fields = {
   halfLifeMonths: num('The UVB half-life', 0.1, 1000, ' months').nullable().default(null),
   decayPoints: decayPoints.nullable().default(null),
   replaceAfterMonths: num('The replacement interval', 0.1, 600, ' months').nullable().default(null),
-  notes: z.string().trim().max(5000, 'Notes can be at most 5000 characters.').nullable().default(null),
+  notes: textSchema().trim().max(5000, 'Notes can be at most 5000 characters.').nullable().default(null),
   sources: z
     .partialRecord(
       z.enum(LAMP_TYPE_FIELDS),
-      z.string().trim().max(1000, 'A source note can be at most 1000 characters.'),
+      textSchema().trim().max(1000, 'A source note can be at most 1000 characters.'),
     )
     .default({}),
 };
@@ -114,8 +114,8 @@ export const lampTypePatchSchema = z
     halfLifeMonths: num('The UVB half-life', 0.1, 1000, ' months').nullable(),
     decayPoints: decayPoints.nullable(),
     replaceAfterMonths: num('The replacement interval', 0.1, 600, ' months').nullable(),
-    notes: z.string().trim().max(5000).nullable(),
-    sources: z.partialRecord(z.enum(LAMP_TYPE_FIELDS), z.string().trim().max(1000)),
+    notes: textSchema().trim().max(5000).nullable(),
+    sources: z.partialRecord(z.enum(LAMP_TYPE_FIELDS), textSchema().trim().max(1000)),
   })
   .partial()
   .refine((p) => Object.keys(p).length > 0, 'Send at least one field to change.');

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textSchema } from '@/lib/api/text';
 
 /**
  * What a species sheet holds, as the API and the forms exchange it. Ranges are `{ min, max }` objects
@@ -40,13 +41,11 @@ export const FIELD_LABELS: Record<SheetField, string> = {
 };
 
 export const sourceSchema = z.strictObject({
-  citation: z
-    .string()
+  citation: textSchema()
     .trim()
     .min(1, 'Give the citation, or write "from memory".')
     .max(500, 'A citation can be at most 500 characters.'),
-  confidence: z
-    .string()
+  confidence: textSchema()
     .trim()
     .min(1, 'Say how sure the figure is (for example "published table" or "from memory; verify").')
     .max(500, 'The confidence note can be at most 500 characters.'),
@@ -55,8 +54,7 @@ export const sourceSchema = z.strictObject({
 export type SpeciesSource = z.output<typeof sourceSchema>;
 
 const text = (what: string, max: number) =>
-  z
-    .string({ error: `${what} must be text.` })
+  textSchema(`${what} must be text.`)
     .trim()
     .min(1, `${what} is required.`)
     .max(max, `${what} can be at most ${max} characters.`);
@@ -79,7 +77,7 @@ const fields = {
     .nullable()
     .default(null),
   photoperiodH: range('The photoperiod', 'hours', 0, 24).nullable().default(null),
-  notes: z.string().trim().max(5000, 'Notes can be at most 5000 characters.').nullable().default(null),
+  notes: textSchema().trim().max(5000, 'Notes can be at most 5000 characters.').nullable().default(null),
   sources: z.array(sourceSchema).max(20, 'At most 20 sources.').default([]),
 };
 
@@ -123,7 +121,7 @@ export const speciesPatchSchema = z
     coolAirC: fields.coolAirC,
     nightMinC: finite('The night minimum').min(0).max(40).nullable(),
     photoperiodH: range('The photoperiod', 'hours', 0, 24).nullable(),
-    notes: z.string().trim().max(5000, 'Notes can be at most 5000 characters.').nullable(),
+    notes: textSchema().trim().max(5000, 'Notes can be at most 5000 characters.').nullable(),
     sources: z.array(sourceSchema).max(20, 'At most 20 sources.'),
   })
   .partial()

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { textSchema } from '@/lib/api/text';
 import { parseDesign, type Design } from '@/simulation/model';
 import { pageQuery } from '@/lib/api';
 import { MAX_SHARE_DAYS } from './shares';
@@ -12,8 +13,7 @@ export const idParams = z.object({
     .positive('The id must be a positive number.'),
 });
 
-export const nameField = z
-  .string({ error: 'Give it a name.' })
+export const nameField = textSchema('Give it a name.')
   .trim()
   .min(1, 'Give it a name.')
   .max(120, 'Keep the name to 120 characters.');

@@ -149,6 +149,9 @@ describe('POST /api/enclosures', () => {
     ['depthCm', { depthCm: 5000 }, 'at most 2000'],
     ['keeperId', { keeperId: 'x' }, 'number'],
     ['notes', { notes: 'x'.repeat(6000) }, 'at most 5000'],
+    // A lone high surrogate (half an emoji) would be stored as U+FFFD without a word.
+    ['name', { name: 'Vivarium \uD83E' }, 'unpaired UTF-16 surrogate'],
+    ['speciesName', { speciesName: '\uDD8E bearded dragon' }, 'broken character'],
   ])('answers 400 naming %s', async (field, patch, words) => {
     const r = await call(collection.POST, {
       method: 'POST',
