@@ -8,10 +8,15 @@
 //   forward; 409s from saves that crossed are counted apart), and the public share page /s/<token>.
 // Prints a table (requests/s, p50, p99, and p50/p99 as a multiple of the cheapest route's) and one final
 // JSON line; removes its design at the end. Figures, not a pass/fail test: the machine decides them.
+// Bounded: each scenario sends at most rate × duration requests and stops after `duration` seconds; the
+// whole run gives up after a watchdog (scenarios × (duration + 30 s) + 2 min). The date, the machine's
+// load average before and after, and its CPU count are printed with the figures: they are what the
+// figures depend on.
 //
 // URL: the first argument, else LOAD_BASE_URL, else APP_URL, else http://localhost:3000.
 // Account: LOAD_EMAIL / LOAD_PASSWORD, else the demo scenario's first staff member.
 import autocannon from 'autocannon';
+import os from 'node:os';
 import { pathToFileURL } from 'node:url';
 import path from 'node:path';
 import { loadEnv } from './lib/env.mjs';
@@ -116,8 +121,11 @@ async function signIn(base, email, password) {
   return { jar, user: session?.user };
 }
 
-/** Runs autocannon at a fixed rate; resolves its results. */
+const SCENARIOS = 5;
+
+/** Runs autocannon at a fixed rate for a fixed time; resolves its results. */
 function cannon(opts, spec) {
+  // overallRate paces the requests (rate × duration at most); duration ends the scenario.
   return autocannon({
     url: opts.url,
     connections: opts.connections,
@@ -127,6 +135,12 @@ function cannon(opts, spec) {
     ...spec,
   });
 }
+
+const loadAverage = () =>
+  os
+    .loadavg()
+    .map((l) => l.toFixed(2))
+    .join(' ');
 
 /** A few sequential requests first, so the run does not measure cold code paths. */
 async function warmUp(base, jar, p, method = 'GET', body) {
@@ -190,8 +204,16 @@ async function main() {
   const base = opts.url;
   const email = env.LOAD_EMAIL || DEMO_STAFF.email;
   const password = env.LOAD_PASSWORD || DEMO_STAFF.password;
+  const watchdogMs = (SCENARIOS * (opts.duration + 30) + 120) * 1000;
+  setTimeout(() => {
+    console.error(`load run gave up after ${Math.round(watchdogMs / 1000)} s (watchdog)`);
+    process.exit(2);
+  }, watchdogMs).unref();
+  const started = new Date();
+  const loadBefore = loadAverage();
   console.error(
-    `Load run against ${base}: ${opts.rate} requests/s, ${opts.duration} s each, ${opts.connections} connections.`,
+    `Load run against ${base}: ${opts.rate} requests/s for ${opts.duration} s per scenario ` +
+      `(at most ${opts.rate * opts.duration} requests each), ${opts.connections} connections.`,
   );
 
   const { jar, user } = await signIn(base, email, password);
@@ -291,6 +313,15 @@ async function main() {
   }
 
   const baseline = rows[0];
+  const loadAfter = loadAverage();
+  console.log('');
+  console.log(
+    `${started.toISOString()} · ${os.cpus().length} CPUs · load average (1/5/15 min) ${loadBefore} before, ` +
+      `${loadAfter} after · ${opts.rate} req/s × ${opts.duration} s, ${opts.connections} connections`,
+  );
+  console.log(
+    'ratios: p50 and p99 as multiples of the baseline (GET /api/health: the pipeline and SELECT 1)',
+  );
   console.log('');
   printTable(rows, baseline);
   const save = rows.find((r) => r.name.startsWith('PUT'));
@@ -298,6 +329,10 @@ async function main() {
   console.log(
     JSON.stringify({
       url: base,
+      at: started.toISOString(),
+      cpus: os.cpus().length,
+      loadAverageBefore: loadBefore,
+      loadAverageAfter: loadAfter,
       rate: opts.rate,
       durationS: opts.duration,
       connections: opts.connections,

@@ -1,0 +1,98 @@
+// The studio while the server is down: saves answer 503 (as the app does when its database is away),
+// the edit is kept on this device across a reload and offered back, and once the server answers again it
+// is saved — the server holding exactly that design. The network itself stays up (unlike the offline
+// step of studio.browser.ts): only the save requests fail, the way a server outage looks to a browser.
+import type { Page, Route } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import { DEMO_PASSWORDS, demoSignIn } from '@/lib/demo/scenario';
+import { screenshot, signIn, withBrowser } from './harness';
+
+const session = withBrowser();
+
+type Stored = { version: number; design: { objects: { type: string; id: string }[] } };
+
+async function openStudio(page: Page, path: string) {
+  await page.goto(path);
+  await page.waitForSelector('[data-testid=studio-canvas] canvas', { timeout: 60_000 });
+}
+
+const saveState = (page: Page) => page.getByTestId('save-state').getAttribute('data-state');
+
+async function stored(page: Page, id: number): Promise<Stored> {
+  return page.evaluate(async (variantId) => {
+    const res = await fetch(`/api/variants/${variantId}`, { cache: 'no-store' });
+    return ((await res.json()) as { variant: Stored }).variant;
+  }, id);
+}
+
+/** What the app answers while its database is down (lib/api: 503, Retry-After, JSON without internals). */
+function serverDown(route: Route) {
+  if (route.request().method() !== 'PUT') return route.continue();
+  return route.fulfill({
+    status: 503,
+    headers: { 'content-type': 'application/json', 'retry-after': '2' },
+    body: JSON.stringify({
+      error: { code: 'unavailable', message: 'Saving is unavailable. Try again shortly.' },
+    }),
+  });
+}
+
+describe('design studio while the server is down', () => {
+  it('keeps the unsaved edit across a reload and saves it when the server is back', async () => {
+    const page = session.page();
+    const who = demoSignIn('staff');
+    await signIn(page, who.email, DEMO_PASSWORDS.staff);
+    await page.goto('/enclosures');
+    const href = await page.locator('a[href^="/enclosures/"]').first().getAttribute('href');
+    const enclosureId = Number(/\/enclosures\/(\d+)/.exec(href ?? '')?.[1]);
+    expect(enclosureId).toBeGreaterThan(0);
+    const variantId = await page.evaluate(async (id) => {
+      const res = await fetch(`/api/enclosures/${id}/designs`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ name: 'Outage browser test' }),
+      });
+      return ((await res.json()) as { variant: { id: number } }).variant.id;
+    }, enclosureId);
+    const before = await stored(page, variantId);
+    expect(before.design.objects.some((o) => o.type === 'lamp')).toBe(false);
+
+    const saves = `**/api/variants/${variantId}`;
+    await page.route(saves, serverDown);
+    await openStudio(page, `/studio/${variantId}`);
+    await page.getByTestId('studio-canvas').focus();
+    await page.keyboard.press('l');
+    await page.keyboard.press('Enter');
+    await expect.poll(() => page.getByTestId('object-summary').textContent()).toMatch(/Lamp:/);
+    await expect.poll(() => saveState(page), { timeout: 30_000 }).toBe('offline');
+    await screenshot(page, 'studio-server-down');
+    expect((await stored(page, variantId)).version).toBe(before.version);
+
+    // A reload while the server is still down: the edit is found on this device and offered back.
+    await page.reload();
+    await openStudio(page, `/studio/${variantId}`);
+    const banner = page.getByTestId('restore-banner');
+    await banner.waitFor({ state: 'visible', timeout: 30_000 });
+    expect(await banner.textContent()).toContain('Unsaved changes');
+    await screenshot(page, 'studio-server-down-restore');
+    await banner.getByRole('button', { name: 'Restore them' }).click();
+    await expect.poll(() => page.getByTestId('object-summary').textContent()).toMatch(/Lamp:/);
+    await expect.poll(() => saveState(page), { timeout: 30_000 }).toBe('offline');
+
+    // The server is back: the kept edit is saved (the studio retries; "Save now" does it at once).
+    await page.unroute(saves, serverDown);
+    const saveNow = page.getByRole('button', { name: 'Save now' });
+    if (await saveNow.isVisible()) await saveNow.click();
+    await expect.poll(() => saveState(page), { timeout: 60_000 }).toBe('saved');
+    const after = await stored(page, variantId);
+    expect(after.version).toBeGreaterThan(before.version);
+    expect(after.design.objects.filter((o) => o.type === 'lamp')).toHaveLength(1);
+
+    // Saved: nothing is offered back any more.
+    await page.reload();
+    await openStudio(page, `/studio/${variantId}`);
+    await expect.poll(() => page.getByTestId('object-summary').textContent()).toMatch(/Lamp:/);
+    expect(await page.getByTestId('restore-banner').count()).toBe(0);
+    expect(session.pageErrors()).toEqual([]);
+  });
+});
