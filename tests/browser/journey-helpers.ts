@@ -1,0 +1,125 @@
+// Shared steps of the end-to-end journeys (journey-*.browser.ts): waits that fit a busy machine, the
+// studio's readiness, a variant read back through the API, and share links made by a staff member.
+import type { Browser, Page } from 'playwright-core';
+import { expect } from 'vitest';
+import { demoSignIn } from '@/lib/demo/scenario';
+import { newContext, signIn } from './harness';
+
+/** A whole journey against one app on a 2-core machine: generous, never a speed check. */
+export const JOURNEY_MS = 480_000;
+/** How long a poll waits for the page to catch up (a save, a refetch, a navigation). */
+export const eventually = { timeout: 60_000, interval: 250 };
+
+export type DesignObjectJson = { type: string; id: string; name?: string; [key: string]: unknown };
+export type VariantJson = {
+  id: number;
+  designId: number;
+  name: string;
+  version: number;
+  design: { enclosure: { width: number; height: number }; objects: DesignObjectJson[] };
+};
+
+/** Waits until the studio has drawn its canvas and the engine has answered once. */
+export async function studioReady(page: Page): Promise<void> {
+  await page.waitForSelector('[data-testid=studio-canvas] canvas', { timeout: 90_000 });
+  await page.waitForFunction(() => (window.__baskwellStudio?.roundTrips.length ?? 0) > 0, null, {
+    timeout: 90_000,
+  });
+}
+
+/** The stored variant as the signed-in person of this page may read it. */
+export async function readVariant(
+  page: Page,
+  id: number,
+): Promise<{ status: number; variant?: VariantJson }> {
+  return page.evaluate(async (variantId) => {
+    const res = await fetch(`/api/variants/${variantId}`);
+    const body = (await res.json().catch(() => ({}))) as { variant?: VariantJson };
+    return { status: res.status, variant: body.variant };
+  }, id);
+}
+
+/** The UV Index read at a pinned probe, once the engine has answered for the current design. */
+export async function probeUvi(page: Page, probeId: string): Promise<number> {
+  const reading = page.getByTestId(`probe-reading-${probeId}`);
+  await expect.poll(() => reading.textContent(), eventually).toMatch(/^UVI /);
+  await expect.poll(() => page.getByTestId('worker-ms').textContent(), eventually).not.toMatch(/…$/);
+  const m = /UVI (-?\d+(?:\.\d+)?)/.exec((await reading.textContent()) ?? '');
+  if (!m) throw new Error('no UV Index in the probe reading');
+  return Number(m[1]);
+}
+
+/** Page coordinates of a design point (cm, y up) from the studio's camera. */
+export async function pagePoint(page: Page, x: number, y: number): Promise<{ x: number; y: number }> {
+  const cam = await page.evaluate(() => window.__baskwellStudio!.camera!());
+  const box = await page.getByTestId('studio-canvas').boundingBox();
+  if (!box) throw new Error('the studio canvas is not on screen');
+  return { x: box.x + cam.originX + x * cam.zoom, y: box.y + cam.originY - y * cam.zoom };
+}
+
+/** Local "YYYY-MM-DDTHH:mm" of a day some days ago, for a datetime-local field. */
+export function localDateTime(daysAgo: number): string {
+  const d = new Date(Date.now() - daysAgo * 86_400_000);
+  d.setMinutes(d.getMinutes() - d.getTimezoneOffset());
+  return d.toISOString().slice(0, 16);
+}
+
+/** Signs in as the demo staff member in a context of its own; the caller closes it. */
+export async function staffPage(browser: Browser): Promise<Page> {
+  const context = await newContext(browser);
+  const page = await context.newPage();
+  page.setDefaultTimeout(60_000);
+  const staff = demoSignIn('staff');
+  await signIn(page, staff.email, staff.password);
+  return page;
+}
+
+/** The id of a demo enclosure, as the staff member's enclosure list links it. */
+export async function enclosureIdByName(page: Page, name: string): Promise<number> {
+  await page.goto('/enclosures');
+  const href = await page
+    .getByRole('table', { name: 'Enclosures' })
+    .getByRole('link', { name, exact: true })
+    .getAttribute('href');
+  const id = Number(/\/enclosures\/(\d+)$/.exec(href ?? '')?.[1]);
+  if (!(id > 0)) throw new Error(`no link to the enclosure "${name}"`);
+  return id;
+}
+
+/** A new design (with its first variant) on an enclosure, made through the API as the page's person. */
+export async function createDesign(
+  page: Page,
+  enclosureId: number,
+  name: string,
+): Promise<{ designId: number; variantId: number }> {
+  const r = await page.evaluate(
+    async ({ id, designName }) => {
+      const res = await fetch(`/api/enclosures/${id}/designs`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ name: designName }),
+      });
+      return {
+        status: res.status,
+        body: (await res.json()) as { design?: { id: number }; variant?: { id: number } },
+      };
+    },
+    { id: enclosureId, designName: name },
+  );
+  expect(r.status).toBe(201);
+  return { designId: r.body.design!.id, variantId: r.body.variant!.id };
+}
+
+/** A share link of a variant, made through the API; its path (/s/<token>). */
+export async function createShare(page: Page, variantId: number): Promise<string> {
+  const r = await page.evaluate(async (id) => {
+    const res = await fetch(`/api/variants/${id}/shares`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({}),
+    });
+    return { status: res.status, body: (await res.json()) as { share?: { url: string } } };
+  }, variantId);
+  expect(r.status).toBe(201);
+  return new URL(r.body.share!.url).pathname;
+}
