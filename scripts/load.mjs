@@ -171,11 +171,12 @@ function row(name, r, extra = {}) {
   };
 }
 
-function printTable(rows, baseline) {
+function printTable(rows, baseline, rate) {
   const header = ['scenario', 'req/s', 'p50 ms', 'p99 ms', 'p50 ×', 'p99 ×', 'status codes'];
+  // Below 90 % of the asked rate the server (or the machine) was saturated: latencies then include queueing.
   const lines = rows.map((r) => [
     r.name,
-    r.skipped ? '-' : r.rps.toFixed(1),
+    r.skipped ? '-' : `${r.rps < rate * 0.9 ? '*' : ''}${r.rps.toFixed(1)}`,
     r.skipped ? '-' : String(r.p50),
     r.skipped ? '-' : String(r.p99),
     r.skipped || !baseline ? '-' : (r.p50 / Math.max(baseline.p50, 1)).toFixed(2),
@@ -323,7 +324,10 @@ async function main() {
     'ratios: p50 and p99 as multiples of the baseline (GET /api/health: the pipeline and SELECT 1)',
   );
   console.log('');
-  printTable(rows, baseline);
+  printTable(rows, baseline, opts.rate);
+  if (rows.some((r) => !r.skipped && r.rps < opts.rate * 0.9)) {
+    console.log(`* below 90 % of the ${opts.rate} req/s asked: saturated, latencies include queueing`);
+  }
   const save = rows.find((r) => r.name.startsWith('PUT'));
   if (save) console.log(`\nsaves: ${save.saved} stored, ${save.stale409} answered 409 (crossed in flight)`);
   console.log(
