@@ -5,9 +5,11 @@ import { execFile } from 'node:child_process';
 import path from 'node:path';
 import { promisify } from 'node:util';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { durabilityProblems } from '@/lib/db-durability';
+import mariadb from 'mariadb';
+import { Sequelize } from 'sequelize';
+import { ALLOW_NON_DURABLE, assertDurable, durabilityProblems } from '@/lib/db-durability';
 import { closeDatabase, testDb } from '../helpers/db';
-import { throwawayMariaDB, type Throwaway } from './throwaway-mariadb';
+import { throwawayMariaDB, THROWAWAY_PASSWORD, THROWAWAY_USER, type Throwaway } from './throwaway-mariadb';
 
 const ROOT = path.resolve(import.meta.dirname, '..', '..');
 const TSX = path.join(ROOT, 'node_modules', '.bin', 'tsx');
@@ -21,6 +23,17 @@ afterAll(async () => {
   await closeDatabase();
   await db?.destroy();
 }, 60_000);
+
+/** A connection of this test's own to the throwaway database (the shared one stays on the test database). */
+function connect(): Sequelize {
+  return new Sequelize(db.database, THROWAWAY_USER, THROWAWAY_PASSWORD, {
+    host: '127.0.0.1',
+    port: db.port,
+    dialect: 'mariadb',
+    dialectModule: mariadb,
+    logging: false,
+  });
+}
 
 /** `npx tsx scripts/migrate.ts` as npm start runs it, against the throwaway database. */
 async function migrate(extraEnv: Record<string, string> = {}) {
@@ -42,41 +55,48 @@ describe('crash-safety check at start', () => {
     expect(await durabilityProblems(testDb())).toEqual([]);
   });
 
-  it('migrates and reports a crash-safe database', { timeout: 120_000 }, async () => {
-    const r = await migrate();
-    expect(r.out).toContain('Database is crash-safe');
-    expect(r.code).toBe(0);
+  it('finds unsynced commits and a table that is not InnoDB, naming it', { timeout: 60_000 }, async () => {
+    const sequelize = connect();
+    try {
+      expect(await durabilityProblems(sequelize)).toEqual([]);
+      await db.sql('SET GLOBAL innodb_flush_log_at_trx_commit = 2');
+      await db.sql(`CREATE TABLE \`${db.database}\`.scratch_notes (id INT PRIMARY KEY) ENGINE=MyISAM`);
+      const problems = await durabilityProblems(sequelize);
+      expect(problems).toHaveLength(2);
+      expect(problems[0]).toMatch(/^innodb_flush_log_at_trx_commit is 2, not 1: /);
+      expect(problems[1]).toMatch(/^table scratch_notes uses MyISAM engine, not InnoDB/);
+
+      await expect(assertDurable(sequelize)).rejects.toThrow(/not crash-safe, refusing to start/);
+      const warnings: string[] = [];
+      process.env[ALLOW_NON_DURABLE] = '1';
+      try {
+        expect(await assertDurable(sequelize, (m: string) => warnings.push(m))).toEqual(problems);
+      } finally {
+        delete process.env[ALLOW_NON_DURABLE];
+      }
+      expect(warnings).toHaveLength(1);
+      expect(warnings[0]).toContain('WARNING: the database is not crash-safe');
+      expect(warnings[0]).toContain('scratch_notes');
+    } finally {
+      await db.sql('SET GLOBAL innodb_flush_log_at_trx_commit = 1');
+      await db.sql(`DROP TABLE IF EXISTS \`${db.database}\`.scratch_notes`);
+      await sequelize.close();
+    }
   });
 
   it(
-    'refuses to start when commits are not synced, unless told to accept it (then warns)',
+    'makes the start-up migration step (npm start, npm test) refuse such a database',
     { timeout: 180_000 },
     async () => {
-      await db.sql('SET GLOBAL innodb_flush_log_at_trx_commit = 2');
+      await db.sql('SET GLOBAL innodb_flush_log_at_trx_commit = 0');
       try {
         const refused = await migrate();
         expect(refused.code).toBe(1);
         expect(refused.out).toContain('not crash-safe, refusing to start');
-        expect(refused.out).toContain('innodb_flush_log_at_trx_commit is 2, not 1');
-
-        const warned = await migrate({ BASKWELL_ALLOW_NON_DURABLE_DB: '1' });
-        expect(warned.code).toBe(0);
-        expect(warned.out).toMatch(/WARNING: the database is not crash-safe[^\n]*\n\s+- innodb_flush_log/);
+        expect(refused.out).toContain('innodb_flush_log_at_trx_commit is 0, not 1');
       } finally {
         await db.sql('SET GLOBAL innodb_flush_log_at_trx_commit = 1');
       }
     },
   );
-
-  it('refuses a table that is not InnoDB, naming it', { timeout: 120_000 }, async () => {
-    await db.sql(`CREATE TABLE \`${db.database}\`.scratch_notes (id INT PRIMARY KEY) ENGINE=MyISAM`);
-    try {
-      const r = await migrate();
-      expect(r.code).toBe(1);
-      expect(r.out).toContain('table scratch_notes uses MyISAM engine, not InnoDB');
-      expect(r.out).not.toContain('innodb_flush_log_at_trx_commit');
-    } finally {
-      await db.sql(`DROP TABLE \`${db.database}\`.scratch_notes`);
-    }
-  });
 });
