@@ -111,6 +111,7 @@ async function signIn(base, email, password) {
     redirect: 'manual',
     headers: { cookie: jar.header(), 'content-type': 'application/x-www-form-urlencoded' },
     body: new URLSearchParams({ csrfToken, email, password, json: 'true' }),
+    signal: AbortSignal.timeout(15_000),
   });
   jar.take(res);
   await res.body?.cancel();
@@ -149,6 +150,7 @@ async function warmUp(base, jar, p, method = 'GET', body) {
       method,
       headers: { cookie: jar.header(), ...(body ? { 'content-type': 'application/json' } : {}) },
       body,
+      signal: AbortSignal.timeout(15_000),
     }).then((r) => r.arrayBuffer());
   }
 }
@@ -299,7 +301,7 @@ async function main() {
     });
     rows.push(row('PUT /api/variants/[id]', save, { saved, stale409: stale }));
 
-    const probe = await fetch(`${base}${sharePath}`);
+    const probe = await fetch(`${base}${sharePath}`, { signal: AbortSignal.timeout(15_000) });
     await probe.body?.cancel();
     if (probe.status === 200) {
       await warmUp(base, jar, sharePath);

@@ -49,7 +49,9 @@ export const unavailable = (retryAfterS = 5) =>
   new ApiError(
     503,
     'unavailable',
-    'The database cannot be reached right now. Nothing was changed; try again in a few seconds.',
+    // Not "nothing was changed": a save whose commit reached the disk just before the connection broke
+    // is stored though its answer was lost (tests/reliability/crash-saves.test.ts); the next save says so.
+    'The database cannot be reached right now; try again in a few seconds.',
     undefined,
     undefined,
     { 'Retry-After': String(retryAfterS) },
