@@ -136,6 +136,18 @@ const rows: Record<string, Row> = {
       anonymous: NONE,
     },
   },
+  "the keeper's own account": {
+    resource: { kind: 'account', userId: 30 },
+    // Only the person themself: an owner can remove someone from the organisation, never use their account.
+    expect: {
+      owner: NONE,
+      staff: NONE,
+      keeper: { ...ALL, create: false },
+      outsider: NONE,
+      nobody: NONE,
+      anonymous: NONE,
+    },
+  },
 };
 
 describe('can(user, action, resource)', () => {

@@ -30,7 +30,9 @@ export type Resource =
    */
   | { kind: 'upload'; organisationId: number; uploaderId: number }
   /** The development mail viewer, which shows captured invitation links. */
-  | { kind: 'mail'; organisationId: number };
+  | { kind: 'mail'; organisationId: number }
+  /** A person's own account: password and sessions. No role, not even an owner's, reaches another's. */
+  | { kind: 'account'; userId: number };
 
 export function roleIn(user: SessionUser | null | undefined, organisationId: number): Role | null {
   if (!user) return null;
@@ -93,5 +95,7 @@ export function can(user: SessionUser | null | undefined, action: Action, resour
     }
     case 'mail':
       return action === 'read' && isStaffOrOwner(roleIn(user, resource.organisationId));
+    case 'account':
+      return action !== 'create' && resource.userId === user.id;
   }
 }

@@ -1,3 +1,4 @@
+import Link from 'next/link';
 import type { ReactNode } from 'react';
 import { AppNav, type NavItem } from '@/components/shell/AppNav';
 import { BrandMark } from '@/components/shell/BrandMark';
@@ -38,10 +39,14 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
               {membership && <OrganisationSwitcher memberships={user.memberships} currentId={orgId} />}
             </div>
             <div className="flex items-center gap-3 text-body text-basalt-300">
-              <span className="hidden sm:inline" title={user.email}>
+              <Link
+                href="/account"
+                className="rounded px-1 hover:text-white focus-visible:outline focus-visible:outline-2 focus-visible:outline-sky-400"
+                title={`${user.email}: your account, password and sessions`}
+              >
                 {user.name}
                 {membership && <span className="text-basalt-400"> · {membership.role}</span>}
-              </span>
+              </Link>
               <SignOutButton className="rounded px-2 py-1 text-body text-basalt-200 hover:bg-basalt-800 hover:text-white focus-visible:outline focus-visible:outline-2 focus-visible:outline-sky-400" />
             </div>
           </div>

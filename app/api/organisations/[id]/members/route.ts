@@ -1,6 +1,7 @@
 import type { Transaction } from 'sequelize';
 import { z } from 'zod';
 import { afterCursor, allow, conflict, notFound, page, pageQuery, route } from '@/lib/api';
+import { endAllSessions } from '@/lib/account/service';
 import { idParams, idSchema, roleSchema } from '@/lib/api/schemas';
 import { getSequelize } from '@/lib/db';
 import { Membership, User } from '@/models';
@@ -84,7 +85,7 @@ export const DELETE = route({
       if (!member) throw notFound('That member');
       if (member.role === 'owner') assertAnotherOwner(owners);
       await member.destroy({ transaction });
-      await User.increment('sessionVersion', { where: { id: query.userId }, transaction });
+      await endAllSessions(query.userId, transaction);
     });
     return { ok: true };
   },
