@@ -1,11 +1,22 @@
 /**
- * Next.js calls register() once when a server starts. The Node.js server runs the lamp reminder job on
- * an interval (lib/reminders/schedule.ts); `npm run reminders` runs one pass by hand. Set
- * REMINDERS_INTERVAL_MINUTES=0 to turn the schedule off (e.g. when a separate worker runs it).
+ * Next.js calls register() once when a server starts.
+ * - A production server refuses to start without a strong NEXTAUTH_SECRET (it would otherwise start and
+ *   then fail every sign-in, or worse, run with a guessable key): the check runs here, before the first
+ *   request, and ends the process with the reason.
+ * - The Node.js server runs the lamp reminder job on an interval (lib/reminders/schedule.ts); `npm run
+ *   reminders` runs one pass by hand. Set REMINDERS_INTERVAL_MINUTES=0 to turn the schedule off (e.g.
+ *   when a separate worker runs it).
  */
 export async function register() {
   if (process.env.NEXT_RUNTIME !== 'nodejs') return;
   if (process.env.NEXT_PHASE === 'phase-production-build') return;
+  const { authSecret } = await import('./lib/auth/secret');
+  try {
+    authSecret();
+  } catch (e) {
+    console.error(`Baskwell cannot start: ${e instanceof Error ? e.message : String(e)}`);
+    process.exit(1);
+  }
   const { startReminderSchedule } = await import('./lib/reminders/schedule');
   startReminderSchedule();
   // npm start refuses a database that can lose acknowledged saves (scripts/migrate.ts); a server started

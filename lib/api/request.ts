@@ -16,27 +16,71 @@ function originOf(url: string | undefined | null): string | null {
   }
 }
 
+/** next-auth's session cookie (plain, `__Secure-` on https, and the chunked `.0`, `.1` … forms). */
+const SESSION_COOKIE = /(?:^|;\s*)(?:__Secure-)?next-auth\.session-token(?:\.\d+)?=/;
+
+export const carriesSessionCookie = (headers: Headers) => SESSION_COOKIE.test(headers.get('cookie') ?? '');
+
 /**
- * Cross-site request forgery guard for state-changing requests: a browser always sends Origin on
- * cross-origin requests, so when it is present it must be our own. (JSON-only bodies add a second wall:
- * a plain HTML form cannot send application/json.)
+ * Cross-site request forgery guard for state-changing requests. Browsers send Origin with every POST,
+ * PUT, PATCH and DELETE, same-origin ones included, so:
+ * - an Origin that is not ours is refused;
+ * - no Origin at all on a request that carries a session cookie is refused too (our pages always send
+ *   one; a request without it did not come from them);
+ * - no Origin and no cookie (a script calling a public route such as sign-up) passes: it has no session
+ *   to abuse.
+ * Sec-Fetch-Site: cross-site is refused whatever Origin says.
  */
 export function assertSameOrigin(req: Request): void {
-  if (req.headers.get('sec-fetch-site') === 'cross-site') throw crossSite();
-  const origin = req.headers.get('origin');
-  if (!origin) return;
+  assertSameOriginHeaders(req.headers, req.url);
+}
+
+/** The same check on bare headers (server actions read them through next/headers). */
+export function assertSameOriginHeaders(headers: Headers, url?: string): void {
+  if (headers.get('sec-fetch-site') === 'cross-site') throw crossSite();
+  const origin = headers.get('origin');
+  if (!origin) {
+    if (carriesSessionCookie(headers)) throw originRequired();
+    return;
+  }
+  if (!allowedOrigins(headers, url).has(origin)) throw crossSite();
+}
+
+function allowedOrigins(headers: Headers, url: string | undefined): Set<string> {
   const allowed = new Set<string>();
   const app = originOf(config().APP_URL);
   if (app) allowed.add(app);
   const nextAuthUrl = originOf(process.env.NEXTAUTH_URL);
   if (nextAuthUrl) allowed.add(nextAuthUrl);
-  const host = req.headers.get('x-forwarded-host') ?? req.headers.get('host');
+  const host = headers.get('x-forwarded-host') ?? headers.get('host');
   if (host) {
-    const proto = req.headers.get('x-forwarded-proto') ?? new URL(req.url).protocol.replace(':', '');
+    const fromUrl = url ? new URL(url).protocol.replace(':', '') : 'http';
+    const proto = headers.get('x-forwarded-proto') ?? fromUrl;
     allowed.add(`${proto}://${host}`);
   }
-  if (!allowed.has(origin)) throw crossSite();
+  return allowed;
 }
+
+/**
+ * The bodies an HTML form (or a "simple" cross-origin fetch, which needs no CORS preflight) can send.
+ * No route takes them: JSON routes need application/json, the photo upload takes image bytes.
+ */
+const FORM_MEDIA_TYPES = new Set(['application/x-www-form-urlencoded', 'multipart/form-data', 'text/plain']);
+
+export function assertNotFormBody(req: Request): void {
+  const mediaType = (req.headers.get('content-type') ?? '').split(';')[0]!.trim().toLowerCase();
+  if (FORM_MEDIA_TYPES.has(mediaType)) throw unsupportedMediaType();
+}
+
+const originRequired = () =>
+  new ApiError(
+    403,
+    'cross_site',
+    'This request did not say which site it came from (no Origin header), so it was not accepted.',
+  );
+
+const unsupportedMediaType = () =>
+  new ApiError(415, 'unsupported_media_type', 'Send the request body as application/json.');
 
 const crossSite = () =>
   new ApiError(403, 'cross_site', 'Requests from other sites are not accepted. Use Baskwell itself.');
@@ -50,9 +94,7 @@ export async function readJsonBody(req: Request, limit = MAX_JSON_BODY_BYTES): P
     if (contentType) throw invalidJson('The request body is empty.');
     return undefined;
   }
-  if (!/^application\/json\s*(;|$)/i.test(contentType)) {
-    throw new ApiError(415, 'unsupported_media_type', 'Send the request body as application/json.');
-  }
+  if (!/^application\/json\s*(;|$)/i.test(contentType)) throw unsupportedMediaType();
   const reader = req.body.getReader();
   const chunks: Uint8Array[] = [];
   let size = 0;

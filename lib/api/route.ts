@@ -2,12 +2,12 @@ import type { ZodType, z } from 'zod';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { can, type Action, type Resource } from '@/lib/permissions';
 import { ApiError, errorResponse, forbidden, fromZod, notFound, unauthenticated } from './errors';
-import { assertSameOrigin, isStateChanging, readJsonBody } from './request';
+import { assertNotFormBody, assertSameOrigin, isStateChanging, readJsonBody } from './request';
 import { sessionUser } from './session';
 
 /**
  * The one pipeline of every route handler, in a fixed order:
- *   transport checks (same origin, JSON only, size cap) → parse (zod) → who (session, re-checked in
+ *   transport checks (same origin, no form bodies, JSON only, size cap) → parse (zod) → who (session, re-checked in
  *   the database) → may they (`allow`, called by the handler once it knows the thing) → act.
  * Anything thrown becomes a typed JSON error without internals.
  */
@@ -39,7 +39,10 @@ export function route<
 >(spec: Spec<P, Q, B, A>) {
   return async (req: Request, ctx?: RouteContext): Promise<Response> => {
     try {
-      if (isStateChanging(req.method)) assertSameOrigin(req);
+      if (isStateChanging(req.method)) {
+        assertSameOrigin(req);
+        assertNotFormBody(req);
+      }
       const rawBody = spec.body ? await readJsonBody(req) : undefined;
       const params = parse(spec.params, ctx ? await ctx.params : {}, undefined);
       const query = parse(spec.query, Object.fromEntries(new URL(req.url).searchParams), undefined);

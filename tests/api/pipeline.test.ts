@@ -37,14 +37,20 @@ describe('transport checks on state-changing requests', () => {
     expect(fetchMeta.status).toBe(403);
   });
 
-  it('accepts a same-origin request and one without Origin (non-browser client)', async () => {
+  it('accepts a same-origin request; refuses one without Origin that carries a session cookie', async () => {
     expect((await post({ body: body() })).status).toBe(201);
-    const req = new Request(`${ORIGIN}/api/enclosures`, {
-      method: 'POST',
-      headers: { 'content-type': 'application/json', cookie: await sessionCookie(staff) },
-      body: JSON.stringify(body()),
-    });
-    expect((await enclosures.POST(req)).status).toBe(201);
+    const noOrigin = (cookie?: string) =>
+      new Request(`${ORIGIN}/api/enclosures`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json', ...(cookie ? { cookie } : {}) },
+        body: JSON.stringify(body()),
+      });
+    // Browsers send Origin with every POST: a cookie without one did not come from our pages.
+    const withCookie = await enclosures.POST(noOrigin(await sessionCookie(staff)));
+    expect(withCookie.status).toBe(403);
+    expect(((await withCookie.json()) as { error: { code: string } }).error.code).toBe('cross_site');
+    // A script without a session passes this check and meets the session check instead.
+    expect((await enclosures.POST(noOrigin())).status).toBe(401);
   });
 
   it('accepts only application/json bodies', async () => {

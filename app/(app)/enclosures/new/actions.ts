@@ -1,6 +1,8 @@
 'use server';
 
+import { headers } from 'next/headers';
 import { ApiError, fromZod, isDatabaseUnavailable } from '@/lib/api/errors';
+import { assertSameOriginHeaders } from '@/lib/api/request';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { guidedStartSchema, type GuidedStartInput } from '@/lib/guided-start/input';
 import { createFromGuidedStart, proposeFor, type ProposalView } from '@/lib/guided-start/service';
@@ -8,7 +10,7 @@ import { currentUser } from '@/lib/session';
 
 /**
  * The guided start's two steps as server actions, in the same order as every route handler:
- * parse (zod) → who (session, re-checked in the database) → may they (in the service) → act.
+ * same origin → parse (zod) → who (session, re-checked in the database) → may they (in the service) → act.
  * Errors come back as a message (and the field, when one is to blame), never internals.
  */
 
@@ -22,6 +24,9 @@ async function run<T>(
   act: (user: CurrentUser, input: GuidedStartInput) => Promise<T>,
 ): Promise<ActionResult<T>> {
   try {
+    // Next checks Origin against Host for actions but lets a request without Origin through; ours
+    // refuses that too when a session cookie rides along (the route handlers' rule, lib/api/request.ts).
+    assertSameOriginHeaders(await headers());
     const parsed = guidedStartSchema.safeParse(raw);
     if (!parsed.success) {
       const e = fromZod(parsed.error);
