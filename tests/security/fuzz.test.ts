@@ -2,7 +2,7 @@
 // engine's design parser. Whatever arrives: never a 5xx, never an uncaught error, JSON replies with an
 // `error` object on 4xx, and no stack traces, SQL or driver names in any reply.
 //
-// Reproducible: FUZZ_SEED (default below) fixes the cases; FUZZ_RUNS sets the cases per route. A failure
+// Reproducible: FUZZ_SEED (default in fuzz-contract.ts) fixes the cases; FUZZ_RUNS sets the cases per route. A failure
 // prints the seed and fast-check's counterexample path; rerun with FUZZ_SEED=<seed> to get it back.
 import fc from 'fast-check';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -25,13 +25,14 @@ import { parseDesign } from '@/simulation';
 import { arbDesign } from '@/simulation/testing/arbitraries';
 import { EXAMPLE_DESIGN } from '@/simulation/testing/fixtures';
 import { closeDatabase, resetDatabase, seedDemo } from '../helpers/db';
-import { call, expectNoInternals, sessionCookie, type Reply } from '../api/http';
-import { bodyCaseArb, mutate, mutationArb, stringsIn, type BodyCase, type Json } from './fuzz-arbitraries';
+import { call, sessionCookie } from '../api/http';
+import { bodyCaseArb, mutate, mutationArb, type BodyCase, type Json } from './fuzz-arbitraries';
+import { checkProperty, expectSafeReply } from './fuzz-contract';
+import { LAMP_TYPE_BODY, READING_BODY, SPECIES_BODY } from './valid-bodies';
 
 /** Strings a database or a JSON layer may choke on: a lone surrogate, NUL, 4-byte characters, a huge one. */
 const NASTIES: Json[] = ['\uD800', 'a\u0000b', '🦎🦎', 'x'.repeat(70_000), 1e308, -0];
 
-const SEED = Number(process.env.FUZZ_SEED ?? 20_251_202);
 const RUNS = Number(process.env.FUZZ_RUNS ?? 100);
 
 type Handler = Parameters<typeof call>[0];
@@ -59,43 +60,8 @@ const ids = {
 };
 
 /** Runs a property with the fixed seed; on failure names the seed so the run can be repeated. */
-async function check<T>(label: string, arb: fc.Arbitrary<T>, predicate: (v: T) => Promise<void> | void) {
-  const property = fc.asyncProperty(arb, async (v) => {
-    await predicate(v);
-  });
-  try {
-    await fc.assert(property, { seed: SEED, numRuns: RUNS, endOnFailure: true });
-  } catch (e) {
-    throw new Error(
-      `${label}: fuzz failure (FUZZ_SEED=${SEED}, FUZZ_RUNS=${RUNS})\n${e instanceof Error ? e.message : e}`,
-      { cause: e },
-    );
-  }
-}
-
-// Beyond tests/api/http.ts's list: driver error codes and fields, file paths, "Error:" prefixes.
-const MORE_LEAKS = [/\bER_[A-Z_]{3,}/, /sqlMessage|sqlState|errno/, /\/work\/|\/home\/|\/root\//, /\n\s+at /];
-
-/** The contract every reply keeps, whatever was sent. */
-function expectSafeReply(r: Reply, sent: unknown, what: string) {
-  const context = `${what} → ${r.status} ${r.text.slice(0, 400)}`;
-  expect(r.status, context).toBeLessThan(500);
-  expect(r.res.headers.get('content-type') ?? '', context).toMatch(/^application\/json/);
-  expect(r.body, context).not.toBeNull();
-  if (r.status >= 400) {
-    expect(typeof r.body.error?.code, context).toBe('string');
-    expect(typeof r.body.error?.message, context).toBe('string');
-    expect(r.body.error.message.length, context).toBeGreaterThan(0);
-  }
-  // A reply may quote what was sent (a saved name); only what it adds on its own is checked.
-  let own = r.text;
-  for (const s of stringsIn(sent).sort((a, b) => b.length - a.length)) {
-    if (s.length < 3) continue;
-    own = own.split(JSON.stringify(s).slice(1, -1)).join('…');
-  }
-  expectNoInternals({ ...r, text: own });
-  for (const leak of MORE_LEAKS) expect(own, `${context} leaks ${leak}`).not.toMatch(leak);
-}
+const check = <T>(label: string, arb: fc.Arbitrary<T>, predicate: (v: T) => Promise<void> | void) =>
+  checkProperty(label, arb, predicate, RUNS);
 
 async function send(t: Target, c: BodyCase) {
   let body: Json | undefined;
@@ -178,20 +144,7 @@ const targets: Target[] = [
     handler: species.POST,
     method: 'POST',
     path: () => '/api/species',
-    valid: () => ({
-      organisationId: ids.org,
-      commonName: 'Fuzz skink',
-      scientificName: 'Fuzzia testa',
-      uvZone: 2,
-      uvbTargetUw: { min: 20, max: 60 },
-      baskingSurfaceC: { min: 35, max: 40 },
-      warmAirC: { min: 28, max: 32 },
-      coolAirC: { min: 22, max: 26 },
-      nightMinC: 18,
-      photoperiodH: { min: 10, max: 14 },
-      notes: 'Invented for a test.',
-      sources: [{ citation: 'Invented test data', confidence: 'none', covers: ['uvZone'] }],
-    }),
+    valid: () => SPECIES_BODY(ids.org, 'Fuzz skink'),
   },
   {
     name: 'PATCH /api/species/[id]',
@@ -206,24 +159,7 @@ const targets: Target[] = [
     handler: lampTypes.POST,
     method: 'POST',
     path: () => '/api/lamp-types',
-    valid: () => ({
-      organisationId: ids.org,
-      name: 'Fuzz tube',
-      tech: 't5',
-      form: 'tube',
-      lengthCm: 55,
-      uvbAt30: 50,
-      uviPerUvb: 0.04,
-      radiantFraction: 0.5,
-      beamDeg: 120,
-      reflectorGain: 2,
-      watts: 24,
-      decayPoints: [
-        [0, 1],
-        [6, 0.8],
-      ],
-      sources: { uvbAt30: 'invented test value' },
-    }),
+    valid: () => LAMP_TYPE_BODY(ids.org, 'Fuzz tube'),
   },
   {
     name: 'PATCH /api/lamp-types/[id]',
@@ -240,15 +176,7 @@ const targets: Target[] = [
     path: () => `/api/lamps/${ids.lamp}/readings`,
     params: id('lamp'),
     // Yesterday: after the demo lamp's first use, not in the future.
-    valid: () => ({
-      takenAt: new Date(Date.now() - 86_400_000).toISOString(),
-      distance: 30,
-      distanceUnit: 'cm',
-      value: 55,
-      unit: 'uvb',
-      meter: 'Test meter',
-      note: 'fuzz',
-    }),
+    valid: () => READING_BODY('fuzz'),
   },
   {
     name: 'PATCH /api/readings/[id]',

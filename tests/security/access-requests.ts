@@ -1,0 +1,139 @@
+// One well-formed request per route handler, aimed at organisation A's things (see access-world.ts).
+// Well-formed matters: the pipeline parses before it checks access, so a malformed request would be
+// refused with a 400 and prove nothing. Each is checked to get past parsing by A's owner (the control).
+import { EXAMPLE_DESIGN } from '@/simulation/testing/fixtures';
+import { FIXTURE_PASSWORD } from '../helpers/db';
+import { currentVersion, tinyPng, type World } from './access-world';
+import { LAMP_TYPE_BODY, READING_BODY, SPECIES_BODY } from './valid-bodies';
+
+export type RequestSpec = {
+  query?: (w: World) => string;
+  body?: (w: World) => unknown | Promise<unknown>;
+  /** A non-JSON body (the photo upload). */
+  raw?: { contentType: string; bytes: () => Uint8Array<ArrayBuffer> };
+};
+
+/** Which thing of the world a path's [id] names, by the route's pattern. */
+export function idFor(pattern: string, w: World): Record<string, string> {
+  const byPrefix: [RegExp, keyof World][] = [
+    [/^\/api\/enclosures\/\[id\]/, 'enclosure'],
+    [/^\/api\/designs\/\[id\]/, 'design'],
+    [/^\/api\/variants\/\[id\]/, 'variant'],
+    [/^\/api\/shares\/\[id\]/, 'share'],
+    [/^\/api\/lamps\/\[id\]/, 'lamp'],
+    [/^\/api\/readings\/\[id\]/, 'reading'],
+    [/^\/api\/species\/\[id\]/, 'species'],
+    [/^\/api\/lamp-types\/\[id\]/, 'lampType'],
+    [/^\/api\/organisations\/\[id\]/, 'orgA'],
+    [/^\/api\/invitations\/\[id\]/, 'invitation'],
+    [/^\/api\/uploads\/\[id\]/, 'upload'],
+  ];
+  if (pattern.startsWith('/s/[token]')) return { token: 'A'.repeat(43) };
+  for (const [re, key] of byPrefix) if (re.test(pattern)) return { id: String(w[key]) };
+  return {};
+}
+
+const enclosureBody = (w: World) => ({
+  organisationId: w.orgA,
+  keeperId: w.keeper1,
+  name: 'Second enclosure',
+  widthCm: 90,
+  heightCm: 45,
+  depthCm: 45,
+});
+
+export const REQUESTS: Record<string, RequestSpec> = {
+  'PUT /api/account/password': {
+    body: () => ({ currentPassword: FIXTURE_PASSWORD, newPassword: 'a-long-new-password' }),
+  },
+  'DELETE /api/account/sessions': {},
+  'PUT /api/current-organisation': { body: (w) => ({ organisationId: w.orgA }) },
+  'GET /api/designs/[id]': {},
+  'PATCH /api/designs/[id]': { body: () => ({ name: 'Renamed plan' }) },
+  'PUT /api/designs/[id]': { body: () => ({ name: 'Renamed plan' }) },
+  'DELETE /api/designs/[id]': {},
+  'GET /api/designs/[id]/variants': {},
+  'POST /api/designs/[id]/variants': { body: () => ({ name: 'Second variant' }) },
+  'GET /api/enclosures/[id]/designs': {},
+  'POST /api/enclosures/[id]/designs': { body: () => ({ name: 'Another plan' }) },
+  'GET /api/enclosures/[id]/lamps': {},
+  'POST /api/enclosures/[id]/lamps': {
+    body: (w) => ({
+      lampTypeId: w.lampType,
+      label: 'Second lamp',
+      firstUsedOn: '2025-02-01',
+      hoursPerDay: 10,
+    }),
+  },
+  'GET /api/enclosures/[id]': {},
+  'PATCH /api/enclosures/[id]': { body: () => ({ name: 'Renamed enclosure' }) },
+  'DELETE /api/enclosures/[id]': {},
+  'GET /api/enclosures': { query: (w) => `organisationId=${w.orgA}&keeperId=${w.keeper1}` },
+  'POST /api/enclosures': { body: enclosureBody },
+  'GET /api/health': {},
+  'DELETE /api/invitations/[id]': {},
+  'POST /api/invitations/accept': { body: () => ({ token: 'B'.repeat(43) }) },
+  'GET /api/invitations': { query: (w) => `organisationId=${w.orgA}` },
+  'POST /api/invitations': {
+    body: (w) => ({ organisationId: w.orgA, email: 'another.keeper@example.com', role: 'keeper' }),
+  },
+  'GET /api/keepers': { query: (w) => `organisationId=${w.orgA}` },
+  'POST /api/keepers': { body: (w) => ({ organisationId: w.orgA, email: 'walk.in@example.com' }) },
+  'GET /api/lamp-types/[id]': {},
+  'PATCH /api/lamp-types/[id]': { body: () => ({ notes: 'Edited.', watts: 30 }) },
+  'DELETE /api/lamp-types/[id]': {},
+  'GET /api/lamp-types': { query: (w) => `organisationId=${w.orgA}` },
+  'POST /api/lamp-types': { body: (w) => LAMP_TYPE_BODY(w.orgA, 'Second tube') },
+  'GET /api/lamps/[id]/calibration': { query: (w) => `variantId=${w.variant}` },
+  'POST /api/lamps/[id]/calibration': { body: (w) => ({ variantId: w.variant }) },
+  'GET /api/lamps/[id]/readings': {},
+  'POST /api/lamps/[id]/readings': { body: () => READING_BODY('Second reading') },
+  'GET /api/lamps/[id]': {},
+  'PATCH /api/lamps/[id]': { body: () => ({ label: 'Renamed lamp' }) },
+  'DELETE /api/lamps/[id]': {},
+  'GET /api/lamps': { query: (w) => `organisationId=${w.orgA}` },
+  'GET /api/organisations/[id]/members': {},
+  'PATCH /api/organisations/[id]/members': { body: (w) => ({ userId: w.keeper1, role: 'staff' }) },
+  'DELETE /api/organisations/[id]/members': { query: (w) => `userId=${w.keeper1}` },
+  'POST /api/organisations': { body: () => ({ name: 'A new organisation' }) },
+  'GET /api/readings/[id]': {},
+  'PATCH /api/readings/[id]': { body: () => ({ value: 42 }) },
+  'DELETE /api/readings/[id]': {},
+  'POST /api/readings/import': {
+    body: (w) => ({
+      enclosureId: w.enclosure,
+      csv: 'taken_at,value,unit,distance_cm\n2025-03-01T10:00:00Z,40,uvb,30\n',
+    }),
+  },
+  'DELETE /api/shares/[id]': {},
+  'POST /api/sign-up': {
+    body: () => ({
+      name: 'New Person',
+      email: `new.person.${Date.now()}.${Math.random().toString(36).slice(2)}@example.com`,
+      password: 'a-long-new-password',
+      organisationName: 'New household',
+    }),
+  },
+  'GET /api/species/[id]': {},
+  'PATCH /api/species/[id]': { body: () => ({ notes: 'Edited.' }) },
+  'DELETE /api/species/[id]': {},
+  'GET /api/species': { query: (w) => `organisationId=${w.orgA}` },
+  'POST /api/species': { body: (w) => SPECIES_BODY(w.orgA, 'Second skink') },
+  'GET /api/uploads/[id]': {},
+  'DELETE /api/uploads/[id]': {},
+  'GET /api/uploads': { query: (w) => `enclosureId=${w.enclosure}` },
+  'POST /api/uploads': {
+    query: (w) => `kind=backdrop&enclosureId=${w.enclosure}&name=second.png`,
+    raw: { contentType: 'image/png', bytes: () => new Uint8Array(tinyPng()) },
+  },
+  'GET /api/variants/[id]/export': { query: () => 'format=json' },
+  'GET /api/variants/[id]': {},
+  'PUT /api/variants/[id]': {
+    body: async (w) => ({ design: EXAMPLE_DESIGN, baseVersion: await currentVersion(w.variant) }),
+  },
+  'PATCH /api/variants/[id]': { body: () => ({ name: 'Renamed variant' }) },
+  'DELETE /api/variants/[id]': {},
+  'GET /api/variants/[id]/shares': {},
+  'POST /api/variants/[id]/shares': { body: () => ({ expiresInDays: 7 }) },
+  'GET /s/[token]/report': { query: () => 'format=pdf' },
+};

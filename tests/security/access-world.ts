@@ -1,0 +1,193 @@
+// The world the access suite attacks: organisation A (an owner, staff, keeper 1 who owns an enclosure
+// with everything in it, keeper 2 who owns nothing of it) and organisation B (its owner, the outsider).
+// Everything of A is made through the real route handlers, as A's owner. Names carry markers so a reply
+// that leaks them can be caught.
+import { PNG } from 'pngjs';
+import { QueryTypes } from 'sequelize';
+import * as enclosureDesigns from '@/app/api/enclosures/[id]/designs/route';
+import * as enclosureLamps from '@/app/api/enclosures/[id]/lamps/route';
+import * as invitations from '@/app/api/invitations/route';
+import * as lampTypes from '@/app/api/lamp-types/route';
+import * as lampReadings from '@/app/api/lamps/[id]/readings/route';
+import * as species from '@/app/api/species/route';
+import * as uploads from '@/app/api/uploads/route';
+import * as variantShares from '@/app/api/variants/[id]/shares/route';
+import { User, Variant } from '@/models';
+import { EXAMPLE_DESIGN } from '@/simulation/testing/fixtures';
+import { call, sessionCookie } from '../api/http';
+import { LAMP_TYPE_BODY, READING_BODY, SPECIES_BODY } from './valid-bodies';
+import {
+  addMember,
+  createEnclosure,
+  createMember,
+  createUser,
+  tablesInDeleteOrder,
+  testDb,
+} from '../helpers/db';
+
+export const MARK = {
+  enclosure: 'Zz-enclosure-of-keeper-one',
+  design: 'Zz-design-of-keeper-one',
+  variant: 'Zz-variant-of-keeper-one',
+  lamp: 'Zz-lamp-of-keeper-one',
+  reading: 'Zz-reading-of-keeper-one',
+  keeperName: 'Zz Keeper One',
+  invitee: 'zz.invitee@example.com',
+  species: 'Zz shop skink',
+  lampType: 'Zz shop tube',
+  upload: 'zz-backdrop.png',
+} as const;
+
+export type World = {
+  orgA: number;
+  orgB: number;
+  ownerA: number;
+  staffA: number;
+  keeper1: number;
+  keeper2: number;
+  ownerB: number;
+  enclosure: number;
+  design: number;
+  variant: number;
+  share: number;
+  species: number;
+  lampType: number;
+  lamp: number;
+  reading: number;
+  invitation: number;
+  upload: number;
+};
+
+/** A cookie for the user's current session version (a bumped version would refuse an older one). */
+export async function cookieOf(userId: number): Promise<string> {
+  return sessionCookie((await User.findByPk(userId))!);
+}
+
+/** A small real PNG (the upload route checks the content, not the header). */
+export function tinyPng(): Buffer {
+  const png = new PNG({ width: 4, height: 4 });
+  png.data.fill(120);
+  return PNG.sync.write(png);
+}
+
+function must(r: { status: number; text: string }, what: string) {
+  if (r.status >= 300) throw new Error(`world: ${what} → ${r.status} ${r.text.slice(0, 300)}`);
+}
+
+export async function buildWorld(): Promise<World> {
+  const { organisation: a, user: ownerA } = await createMember('owner');
+  const { organisation: b, user: ownerB } = await createMember('owner');
+  const staffA = (await createUser()).user;
+  const keeper1 = (await createUser({ name: MARK.keeperName })).user;
+  const keeper2 = (await createUser()).user;
+  await addMember(a, staffA, 'staff');
+  await addMember(a, keeper1, 'keeper');
+  await addMember(a, keeper2, 'keeper');
+  const enclosure = await createEnclosure(a, keeper1, { name: MARK.enclosure });
+  const as = await cookieOf(ownerA.id);
+
+  const design = await call(enclosureDesigns.POST, {
+    method: 'POST',
+    path: `/api/enclosures/${enclosure.id}/designs`,
+    params: { id: enclosure.id },
+    cookie: as,
+    body: { name: MARK.design, variantName: MARK.variant, design: EXAMPLE_DESIGN },
+  });
+  must(design, 'design');
+  const variantId: number = design.body.variant.id;
+  const share = await call(variantShares.POST, {
+    method: 'POST',
+    path: `/api/variants/${variantId}/shares`,
+    params: { id: variantId },
+    cookie: as,
+    body: { expiresInDays: 30 },
+  });
+  must(share, 'share');
+  const sheet = await call(species.POST, {
+    method: 'POST',
+    path: '/api/species',
+    cookie: as,
+    body: SPECIES_BODY(a.id, MARK.species),
+  });
+  must(sheet, 'species');
+  const type = await call(lampTypes.POST, {
+    method: 'POST',
+    path: '/api/lamp-types',
+    cookie: as,
+    body: LAMP_TYPE_BODY(a.id, MARK.lampType),
+  });
+  must(type, 'lamp type');
+  const lampTypeId = type.body.lampType?.id ?? type.body.id;
+  const lamp = await call(enclosureLamps.POST, {
+    method: 'POST',
+    path: `/api/enclosures/${enclosure.id}/lamps`,
+    params: { id: enclosure.id },
+    cookie: as,
+    body: { lampTypeId, label: MARK.lamp, firstUsedOn: '2025-01-01', hoursPerDay: 12 },
+  });
+  must(lamp, 'lamp');
+  const lampId = lamp.body.lamp?.id ?? lamp.body.id;
+  const reading = await call(lampReadings.POST, {
+    method: 'POST',
+    path: `/api/lamps/${lampId}/readings`,
+    params: { id: lampId },
+    cookie: as,
+    body: READING_BODY(MARK.reading),
+  });
+  must(reading, 'reading');
+  const invitation = await call(invitations.POST, {
+    method: 'POST',
+    path: '/api/invitations',
+    cookie: as,
+    body: { organisationId: a.id, email: MARK.invitee, role: 'keeper' },
+  });
+  must(invitation, 'invitation');
+  const upload = await uploadPng(as, enclosure.id);
+  must(upload, 'upload');
+
+  return {
+    orgA: a.id,
+    orgB: b.id,
+    ownerA: ownerA.id,
+    staffA: staffA.id,
+    keeper1: keeper1.id,
+    keeper2: keeper2.id,
+    ownerB: ownerB.id,
+    enclosure: enclosure.id,
+    design: design.body.design.id,
+    variant: variantId,
+    share: share.body.share.id,
+    species: sheet.body.species?.id ?? sheet.body.id,
+    lampType: lampTypeId,
+    lamp: lampId,
+    reading: reading.body.reading?.id ?? reading.body.id,
+    invitation: invitation.body.invitation?.id ?? invitation.body.id,
+    upload: upload.body.upload.id,
+  };
+}
+
+export async function uploadPng(cookie: string, enclosureId: number) {
+  const path = `/api/uploads?kind=backdrop&enclosureId=${enclosureId}&name=${MARK.upload}`;
+  const headers = new Headers({ origin: 'http://localhost:3000', cookie, 'content-type': 'image/png' });
+  const res = await uploads.POST(
+    new Request(`http://localhost:3000${path}`, { method: 'POST', headers, body: new Uint8Array(tinyPng()) }),
+    {
+      params: Promise.resolve({}),
+    },
+  );
+  const text = await res.text();
+  return { status: res.status, text, body: JSON.parse(text) };
+}
+
+/** A fingerprint of every table's content: equal before and after means nothing was written. */
+export async function fingerprint(): Promise<string> {
+  const sequelize = testDb();
+  const tables = await tablesInDeleteOrder(sequelize);
+  const rows = await sequelize.query<{ Table: string; Checksum: number | null }>(
+    `CHECKSUM TABLE ${tables.map((t) => `\`${t}\``).join(', ')}`,
+    { type: QueryTypes.SELECT },
+  );
+  return rows.map((r) => `${r.Table}:${r.Checksum}`).join(' ');
+}
+
+export const currentVersion = async (variantId: number) => (await Variant.findByPk(variantId))!.version;
