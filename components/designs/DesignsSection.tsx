@@ -120,6 +120,12 @@ function DesignsSectionInner({ enclosureId, canEdit = true }: { enclosureId: num
         </p>
       )}
 
+      {selected.length === 0 && designs.reduce((n, d) => n + d.variants.length, 0) > 1 && (
+        <p className="text-caption text-basalt-600">
+          Tick the boxes beside two variants (of any design) to compare them side by side.
+        </p>
+      )}
+
       {selected.length > 0 && (
         <div className="flex items-center gap-3 rounded-md bg-sky-50 px-3 py-2 text-body text-sky-900">
           <span>

@@ -4,6 +4,7 @@
  * list and the cautions. The variant's name is both drawn and set as the document title.
  */
 import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from 'pdf-lib';
+import { sizeBoth, tempBoth } from '@/lib/variants/dual-units';
 import type { KeyFigures } from '@/lib/variants/figures';
 import { bandLabel, type FieldScale } from '@/lib/variants/scale';
 import { applicableCautions } from '@/components/cautions/cautions';
@@ -138,11 +139,10 @@ export async function renderReportPdf(r: ReportInput): Promise<Uint8Array> {
   w.text('Baskwell — light and heat report', { size: 9, color: MUTED, gap: 6 });
   w.text(r.variantName, { size: 20, bold: true, gap: 4 });
   w.text(ESTIMATE_NOTE, { size: 9, color: STATUS_COLOR.attention, gap: 8 });
-  const { width, height, depth } = r.enclosureSize;
   w.rows([
     ['Design', r.designName],
     ['Variant', `${r.variantName} (version ${r.version})`],
-    ['Enclosure', `${r.enclosureName} — ${fmt(width)} × ${fmt(height)} × ${fmt(depth)} cm (w × h × d)`],
+    ['Enclosure', `${r.enclosureName} — ${sizeBoth(r.enclosureSize)} (width × height × depth)`],
     ['Organisation', r.organisationName || '—'],
     ['Date', r.generatedAt.toISOString().slice(0, 10)],
     ['Lamp age shown', r.months === 0 ? 'as installed' : `${r.months} months on`],
@@ -178,8 +178,8 @@ export async function renderReportPdf(r: ReportInput): Promise<Uint8Array> {
     [
       ['Basking UV Index (highest on a surface)', fmt(f.baskingUviMax, 2)],
       ['Basking UVB (highest on a surface)', `${fmt(f.baskingUvbMax)} µW/cm²`],
-      ['Hot spot (warmest surface)', `${fmt(f.hotSpotC)} °C`],
-      ['Cool end (coolest floor)', `${fmt(f.coolEndC)} °C`],
+      ['Hot spot (warmest surface)', tempBoth(f.hotSpotC)],
+      ['Cool end (coolest floor)', tempBoth(f.coolEndC)],
       ['UV-free area of the cross-section', `${fmt(f.uvFreeAreaCm2, 0)} cm² (${fmt(f.uvFreeShare, 0)} %)`],
     ],
     230,
@@ -204,7 +204,10 @@ export async function renderReportPdf(r: ReportInput): Promise<Uint8Array> {
   }
 
   w.heading('Lamps');
-  if (r.lamps.length === 0) w.text('No lamps in this design.', { color: MUTED });
+  if (r.lamps.length === 0)
+    w.text('No lamps in this design yet: there is no UV and every surface sits at the room temperature.', {
+      color: MUTED,
+    });
   for (const l of r.lamps) {
     w.text(`${l.name} — ${l.technology} (${l.form})`, { bold: true, gap: 0 });
     w.text(

@@ -116,9 +116,12 @@ describe('export', () => {
       'Every figure is an estimate',
       'verify with a meter and thermometer',
       'reptile-experienced vet',
+      // Both unit systems, for readers we know nothing about (1 in = 2.54 cm exactly).
+      '120 × 60 × 60 cm (47.2 × 23.6 × 23.6 in)',
     ]) {
       expect(text).toContain(expected);
     }
+    expect(text).toMatch(/Hot spot \(warmest surface\)\s+[\d.]+ °C \([\d.]+ °F\)/);
   });
 
   it('includes the assessment when the enclosure’s species has a sheet', async () => {

@@ -138,6 +138,12 @@ export function CompareView({
                   <p className="text-caption text-basalt-500">
                     {v.enclosure.name} · {v.designName} · version {v.version}
                   </p>
+                  {!v.design.objects.some((o) => o.type === 'lamp') && (
+                    <p className="rounded-md border border-dashed border-basalt-300 px-3 py-2 text-caption text-basalt-700">
+                      No lamps yet: no UV anywhere and every surface at room temperature. Add lamps in the
+                      studio.
+                    </p>
+                  )}
                   {side && scale ? (
                     <FieldSvg
                       design={v.design}
