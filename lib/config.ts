@@ -15,6 +15,9 @@ const schema = z.object({
   MAIL_FROM: z.string().default('Baskwell <no-reply@baskwell.example>'),
   FAKE_SMTP_HTTP: z.string().default('http://127.0.0.1:2580'),
   APP_URL: z.string().url().default('http://localhost:3000'),
+  // Designs whose engine results the share page and reports keep in memory (lib/variants/computed);
+  // 0 turns the memo off (every request simulates), e.g. to measure what it saves.
+  COMPUTED_CACHE_ENTRIES: z.coerce.number().int().min(0).max(1000).default(24),
 });
 
 export type ServerConfig = z.infer<typeof schema>;

@@ -4,8 +4,7 @@
  * document for the same variant.
  */
 import type { Design, FieldName } from '@/simulation';
-import { assessFor } from '@/lib/variants/assessment';
-import { scaleFor, simulate } from '@/lib/variants/simulate';
+import { computedFor } from '@/lib/variants/computed';
 import type { SpeciesOption } from '@/lib/variants/species';
 import { lampRows } from './lamps';
 import { renderReportPdf } from './pdf';
@@ -24,9 +23,9 @@ export type ReportSubject = {
 export type ReportOptions = { field: FieldName; months: number; species: SpeciesOption | null };
 
 export function fieldPng(subject: ReportSubject, opts: Pick<ReportOptions, 'field' | 'months'>): Buffer {
-  const sim = simulate(subject.design, opts.months);
-  const scale = scaleFor(opts.field, [sim]);
-  return encodePng(renderFieldRaster(subject.design, sim.grid, scale));
+  const computed = computedFor(subject.design, opts.months);
+  const { scale } = computed.view(opts.field);
+  return encodePng(renderFieldRaster(subject.design, computed.sim.grid, scale));
 }
 
 export async function reportPdf(
@@ -34,10 +33,12 @@ export async function reportPdf(
   opts: ReportOptions,
   now = new Date(),
 ): Promise<Uint8Array> {
-  const sim = simulate(subject.design, opts.months);
-  const scale = scaleFor(opts.field, [sim]);
+  // The share page and the exports of one design share a single engine run (lib/variants/computed).
+  const computed = computedFor(subject.design, opts.months);
+  const { sim } = computed;
+  const { scale } = computed.view(opts.field);
   const png = encodePng(renderFieldRaster(subject.design, sim.grid, scale));
-  const assessment = opts.species ? assessFor(subject.design, opts.species.sheet, opts.months) : null;
+  const assessment = opts.species ? computed.assessment(opts.species.sheet) : null;
   return renderReportPdf({
     variantName: subject.variantName,
     designName: subject.designName,

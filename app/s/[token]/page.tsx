@@ -6,10 +6,10 @@ import { FieldLegend, FieldSvg } from '@/components/designs/FieldSvg';
 import { SharedLampList } from '@/components/designs/SharedLampList';
 import { BrandMark } from '@/components/shell/BrandMark';
 import { lampRows } from '@/lib/reports/lamps';
-import { assessFor } from '@/lib/variants/assessment';
+import { computedFor } from '@/lib/variants/computed';
+import { sizeBoth, tempBoth } from '@/lib/variants/dual-units';
 import { hotSpotMarker } from '@/lib/variants/figures';
 import { resolveShareToken } from '@/lib/variants/shares';
-import { bandsFor, scaleFor, simulate } from '@/lib/variants/simulate';
 import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
 import type { FieldName } from '@/simulation';
 
@@ -46,11 +46,13 @@ export default async function SharedVariantPage({
   const requested = (await searchParams).field;
   const field = FIELDS.find((f) => f.id === requested)?.id ?? 'uvi';
 
-  const sim = simulate(shared.design);
-  const scale = scaleFor(field, [sim]);
+  // Simulated once per design and then served from memory: a link is opened by many people.
+  const computed = computedFor(shared.design);
+  const { scale, bands } = computed.view(field);
   const species = attachedSpecies(await speciesOptions(shared.organisationId), shared.speciesName);
-  const assessment = species ? assessFor(shared.design, species.sheet) : null;
-  const f = sim.figures;
+  const assessment = species ? computed.assessment(species.sheet) : null;
+  const f = computed.sim.figures;
+  const lamps = lampRows(shared.design);
   const figure = (v: number, digits: number) => Number(v.toFixed(digits)).toString();
 
   return (
@@ -68,8 +70,8 @@ export default async function SharedVariantPage({
           {shared.organisationName ? ` · shared by ${shared.organisationName}` : ''}
         </p>
         <p className="mt-1 text-caption text-basalt-500">
-          Enclosure {shared.design.enclosure.width} × {shared.design.enclosure.height} ×{' '}
-          {shared.design.enclosure.depth} cm (w × h × d), side view, lamps as installed.
+          Enclosure {sizeBoth(shared.design.enclosure)} (width × height × depth), seen from the front, lamps
+          as installed.
           {shared.expiresAt ? ` This link works until ${new Date(shared.expiresAt).toUTCString()}.` : ''}
         </p>
       </div>
@@ -100,9 +102,15 @@ export default async function SharedVariantPage({
             ))}
           </nav>
         </div>
+        {lamps.length === 0 && (
+          <p className="rounded-md border border-dashed border-basalt-300 px-3 py-2 text-body text-basalt-700">
+            This variant has no lamps yet, so there is no UV anywhere and every surface sits at the room
+            temperature. Ask whoever shared it to add the lamps in the studio.
+          </p>
+        )}
         <FieldSvg
           design={shared.design}
-          bands={bandsFor(sim, scale)}
+          bands={bands}
           scale={scale}
           title={`${scale.label} of ${shared.variant.name}`}
           markers={hotSpotMarker(f)}
@@ -112,8 +120,8 @@ export default async function SharedVariantPage({
           {[
             ['Basking UV Index (highest on a surface)', figure(f.baskingUviMax, 2)],
             ['Basking UVB (highest on a surface)', `${figure(f.baskingUvbMax, 1)} µW/cm²`],
-            ['Hot spot (warmest surface)', `${figure(f.hotSpotC, 1)} °C`],
-            ['Cool end (coolest floor)', `${figure(f.coolEndC, 1)} °C`],
+            ['Hot spot (warmest surface)', tempBoth(f.hotSpotC)],
+            ['Cool end (coolest floor)', tempBoth(f.coolEndC)],
             ['UV-free share of the cross-section', `${figure(f.uvFreeShare, 0)} %`],
           ].map(([k, v]) => (
             <div key={k} className="flex justify-between gap-3 border-b border-basalt-100 py-1">
@@ -141,7 +149,7 @@ export default async function SharedVariantPage({
         </p>
       )}
 
-      <SharedLampList lamps={lampRows(shared.design)} />
+      <SharedLampList lamps={lamps} />
       <CautionList design={shared.design} assessment={assessment} />
     </main>
   );
