@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import * as enclosureDesignsRoute from '@/app/api/enclosures/[id]/designs/route';
 import * as shareRoute from '@/app/api/shares/[id]/route';
 import * as sharesRoute from '@/app/api/variants/[id]/shares/route';
+import * as sharedReportRoute from '@/app/s/[token]/report/route';
 import { resolveShareToken } from '@/lib/variants/shares';
 import { hashShareToken } from '@/lib/variants/tokens';
 import { ShareLink } from '@/models';
@@ -29,6 +30,13 @@ async function world() {
   });
   return { org, staff, keeper, enclosure, variantId: r.body.variant.id as number };
 }
+
+/** The public report download of a link, as an anonymous visitor (no session) asks for it. */
+const report = (token: string, format = 'pdf') =>
+  call((req, ctx) => sharedReportRoute.GET(req, ctx as { params: Promise<{ token: string }> }), {
+    path: `/s/${token}/report?format=${format}`,
+    params: { token },
+  });
 
 const share = (w: Awaited<ReturnType<typeof world>>, user = w.keeper, body: unknown = {}) =>
   call(sharesRoute.POST, {
@@ -72,6 +80,10 @@ describe('share links', () => {
     expect(s!.enclosureName).toBe('Desert tank');
     expect(s!.organisationName).toBe('Shop A');
     expect(s!.design.enclosure.width).toBe(120);
+    const pdf = await report(token);
+    expect(pdf.status).toBe(200);
+    expect(pdf.res.headers.get('content-type')).toBe('application/pdf');
+    expect((await pdf.res.arrayBuffer()).byteLength).toBeGreaterThan(1000);
   });
 
   it('stops working once revoked (404), and revoking twice keeps the first time', async () => {
@@ -83,6 +95,11 @@ describe('share links', () => {
     expect(first.status).toBe(200);
     expect(first.body.share.state).toBe('revoked');
     expect(await resolveShareToken(token)).toBeNull();
+    for (const format of ['pdf', 'png']) {
+      const r = await report(token, format);
+      expect(r.status).toBe(404);
+      expect(r.body.error.code).toBe('not_found');
+    }
     const second = await revoke();
     expect(second.body.share.revokedAt).toBe(first.body.share.revokedAt);
   });
@@ -98,8 +115,10 @@ describe('share links', () => {
     // Eight days later, as the page sees it …
     expect(await resolveShareToken(token, new Date(Date.now() + 8 * 86_400_000))).toBeNull();
     // … and as stored: an expiry already in the past.
+    expect((await report(token, 'png')).status).toBe(200);
     await ShareLink.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { id } });
     expect(await resolveShareToken(token)).toBeNull();
+    expect((await report(token)).status).toBe(404);
   });
 
   it('answers nothing for unknown or malformed tokens', async () => {
@@ -109,6 +128,8 @@ describe('share links', () => {
     expect(await resolveShareToken(flipped)).toBeNull();
     expect(await resolveShareToken(token.slice(1))).toBeNull();
     expect(await resolveShareToken(hashShareToken(token))).toBeNull();
+    expect((await report(flipped)).status).toBe(404);
+    expect((await report('not-a-token')).status).toBe(404);
   });
 
   it('validates the expiry', async () => {

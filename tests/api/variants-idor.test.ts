@@ -1,6 +1,7 @@
 // Every design, variant and share route, tried by people who must not reach the thing: a keeper of the
-// same organisation who does not own the enclosure, the owner of another organisation, and a signed-in
-// user of no organisation. Each must get 404 (existence not revealed) and nothing may change.
+// same organisation who does not own the enclosure, the owner and staff of another organisation, and a signed-in
+// user of no organisation. Each must get 404 (existence not revealed) and nothing may change; the
+// compare and studio pages' loaders must show them nothing either.
 import { QueryTypes } from 'sequelize';
 import { describe, expect, it } from 'vitest';
 import * as designRoute from '@/app/api/designs/[id]/route';
@@ -10,7 +11,10 @@ import * as shareRoute from '@/app/api/shares/[id]/route';
 import * as exportRoute from '@/app/api/variants/[id]/export/route';
 import * as variantRoute from '@/app/api/variants/[id]/route';
 import * as sharesRoute from '@/app/api/variants/[id]/shares/route';
+import { loadUserById } from '@/lib/auth/session-user';
 import { resolveShareToken } from '@/lib/variants/shares';
+import { getVariantForUser } from '@/lib/variants/variants';
+import { visibleVariants } from '@/lib/variants/visible';
 import type { User } from '@/models';
 import {
   createEnclosure,
@@ -31,6 +35,7 @@ async function world() {
   const { user: keeper } = await createMember('keeper', org);
   const { user: otherKeeper } = await createMember('keeper', org);
   const { user: outsider, organisation: otherOrg } = await createMember('owner');
+  const { user: otherStaff } = await createMember('staff', otherOrg);
   const { user: nobody } = await createUser();
   const enclosure = await createEnclosure(org, keeper);
   const theirEnclosure = await createEnclosure(otherOrg, outsider);
@@ -61,7 +66,7 @@ async function world() {
   return {
     staff,
     keeper,
-    attackers: { otherKeeper, outsider, nobody },
+    attackers: { otherKeeper, outsider, otherStaff, nobody },
     enclosureId: enclosure.id,
     designId,
     variantId,
@@ -252,6 +257,25 @@ describe('no one reaches another keeper’s or organisation’s designs', () => 
         const r = await call(a.handler, { method: a.method, path: a.path(w), params: { id: a.id(w) }, user });
         expect(r.status, `${a.name}`).toBe(200);
       }
+    }
+  });
+});
+
+describe('the pages show nothing of another keeper’s or organisation’s variants', () => {
+  it('loads no variant for the compare and studio pages and lists none in the pickers', async () => {
+    const w = await world();
+    for (const [who, attacker] of Object.entries(w.attackers) as [string, User][]) {
+      const user = await loadUserById(attacker.id);
+      expect(user, who).not.toBeNull();
+      expect(await getVariantForUser(user, w.variantId), who).toBeNull();
+      const ids = (await visibleVariants(user!)).map((v) => v.id);
+      expect(ids, who).not.toContain(w.variantId);
+    }
+    // The same loaders do show it to the keeper who owns the enclosure and to staff.
+    for (const owner of [w.keeper, w.staff]) {
+      const user = await loadUserById(owner.id);
+      expect((await getVariantForUser(user, w.variantId))?.id).toBe(w.variantId);
+      expect((await visibleVariants(user!)).map((v) => v.id)).toContain(w.variantId);
     }
   });
 });

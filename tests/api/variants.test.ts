@@ -226,6 +226,8 @@ describe('variants', () => {
     });
     expect(put.status).toBe(400);
     expect(put.body.error.field).toBe('design.objects[1].uvbAt30');
+    // The message itself names the field, so whoever shows it to the user shows where the fault is.
+    expect(put.body.error.message).toMatch(/^objects\[1\]\.uvbAt30: /);
     const upload = await call(designVariantsRoute.POST, {
       method: 'POST',
       path: `/api/designs/${designId}/variants`,
@@ -235,6 +237,7 @@ describe('variants', () => {
     });
     expect(upload.status).toBe(400);
     expect(upload.body.error.field).toBe('design.objects[0].colour');
+    expect(upload.body.error.message).toBe('objects[0].colour: unknown field');
     const missing = await call(variantRoute.PUT, {
       method: 'PUT',
       path: `/api/variants/${variantId}`,
@@ -245,6 +248,48 @@ describe('variants', () => {
     expect(missing.status).toBe(400);
     expect(missing.body.error.field).toBe('design');
     expect((await Variant.findByPk(variantId))!.version).toBe(1);
+  });
+
+  it('imports a design file: names the field at fault in the message, refuses an unknown version', async () => {
+    const w = await world();
+    const { designId } = await designWithVariant(w);
+    const upload = (design: unknown) =>
+      call(designVariantsRoute.POST, {
+        method: 'POST',
+        path: `/api/designs/${designId}/variants`,
+        params: { id: designId },
+        user: w.keeper,
+        body: { name: 'Imported', design },
+      });
+    const file = {
+      format: 'baskwell.design',
+      version: 1,
+      enclosure: { width: 90, height: 45, depth: 45 },
+      objects: [
+        { type: 'screen', id: 'lid', x1: 0, y1: 45, x2: 90, y2: 45 },
+        { type: 'ledge', id: 'rock', x: 50, y: 0, width: 20, height: 10 },
+        lamp,
+      ],
+    };
+    const wrongType = await upload({
+      ...file,
+      objects: [file.objects[0], file.objects[1], { ...lamp, uvbAt30: 'sixty' }],
+    });
+    expect(wrongType.status).toBe(400);
+    expect(wrongType.body.error.field).toBe('design.objects[2].uvbAt30');
+    expect(wrongType.body.error.message).toBe('objects[2].uvbAt30: expected number, received string');
+    const newer = await upload({ ...file, version: 99 });
+    expect(newer.status).toBe(400);
+    expect(newer.body.error.field).toBe('design.version');
+    expect(newer.body.error.message).toBe('version: version 99 is newer than this app reads (1)');
+    const older = await upload({ ...file, version: 0 });
+    expect(older.body.error.message).toBe('version: cannot upgrade from version 0');
+    expect(await Variant.count({ where: { designId } })).toBe(1);
+
+    // A valid file is stored as sent (optional fields left out take the engine's defaults when run).
+    const ok = await upload(file);
+    expect(ok.status).toBe(201);
+    expect((await getVariant(w.keeper, ok.body.variant.id)).body.variant.design).toEqual(file);
   });
 
   it('creates variants by upload, by duplicating and from the default; lists them in pages', async () => {
