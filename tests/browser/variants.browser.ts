@@ -1,6 +1,7 @@
 // Designs, variants, comparison and sharing in Chromium: a staff member creates a design on a customer's
-// enclosure, adds a second variant, compares the two, shares one, opens the link in a fresh browser with
-// no session, downloads its PDF report, and revokes the link again.
+// enclosure, duplicates its variant, uploads a design file with lamps as another variant (a broken file
+// first, whose error must name the field), compares the empty and the lit variant, shares the lit one,
+// opens the link in a fresh browser with no session, downloads its PDF report, and revokes the link.
 import { readFileSync } from 'node:fs';
 import { PDFDocument } from 'pdf-lib';
 import { describe, expect, it } from 'vitest';
@@ -14,6 +15,26 @@ const session = withBrowser();
 const JOURNEY_MS = 420_000;
 /** How long a poll waits for the page to catch up (a save, a refetch, a navigation). */
 const eventually = { timeout: 60_000, interval: 200 };
+
+/** A design file with lamps for the demo's 90 × 45 × 45 cm gecko tank, as a user would upload it. */
+function lampsFile(uvbAt30: unknown = 35) {
+  return {
+    format: 'baskwell.design',
+    version: 1,
+    enclosure: { width: 90, height: 45, depth: 45, roomTempC: 22 },
+    objects: [
+      { type: 'screen', id: 'lid', x1: 0, y1: 45, x2: 90, y2: 45, uvbTransmission: 0.6 },
+      { type: 'ledge', id: 'rock', x: 55, y: 0, width: 25, height: 12 },
+      { type: 'lamp', id: 'uv', tech: 't5', form: 'tube', x: 60, y: 47, length: 40, uvbAt30 },
+      { type: 'lamp', id: 'heat', tech: 'halogen', form: 'bulb', x: 68, y: 47, uvbAt30: 0, watts: 50 },
+    ],
+  };
+}
+const asFile = (name: string, json: unknown) => ({
+  name,
+  mimeType: 'application/json',
+  buffer: Buffer.from(JSON.stringify(json, null, 2)),
+});
 
 describe('variants, comparison and share links', () => {
   it(
@@ -55,33 +76,56 @@ describe('variants, comparison and share links', () => {
         .toBe(1);
       await screenshot(page, 'variants-enclosure-designs');
 
-      // Compare the two side by side.
-      await card.getByLabel(`Compare ${variantName}`, { exact: true }).check();
-      await card.getByLabel(`Compare Copy of ${variantName}`).check();
+      // Upload design files on the design's own page: a broken one first, refused with the field named.
+      await card.getByRole('link', { name: 'Sharing & export' }).click();
+      await page.getByRole('heading', { name: designName, level: 1 }).waitFor();
+      const litName = `Lamps fitted ${suffix}`;
+      await page
+        .getByLabel('Design file', { exact: true })
+        .setInputFiles(asFile('broken.json', lampsFile('sixty')));
+      await page.getByRole('button', { name: 'Upload as new variant' }).click();
+      const refusal = page.getByRole('alert').filter({ hasText: 'objects[2].uvbAt30' });
+      await refusal.waitFor();
+      expect(await refusal.textContent()).toContain('objects[2].uvbAt30: expected number, received string');
+      await screenshot(page, 'variants-upload-refused');
+      await page.getByLabel('Design file', { exact: true }).setInputFiles(asFile('lit.json', lampsFile()));
+      await page.getByLabel('Name of the uploaded variant').fill(litName);
+      await page.getByRole('button', { name: 'Upload as new variant' }).click();
+      await page.getByTestId('variant-panel').filter({ hasText: litName }).waitFor();
+      expect(await page.getByRole('alert').filter({ hasText: 'objects[2]' }).count()).toBe(0);
+      const designPath = new URL(page.url()).pathname;
+
+      // Compare the empty variant with the lit one side by side.
+      await page.goto(enclosurePath);
+      const card2 = page.getByTestId('design-card').filter({ hasText: designName });
+      await expect
+        .poll(() => card2.locator('[data-testid=variant-row][aria-busy=false]').count(), eventually)
+        .toBe(3);
+      await card2.getByLabel(`Compare ${variantName}`, { exact: true }).check();
+      await card2.getByLabel(`Compare ${litName}`, { exact: true }).check();
       await page.getByRole('link', { name: 'Compare side by side' }).click();
       await page.waitForURL(/\/compare\?a=\d+&b=\d+/);
       for (const side of ['compare-a', 'compare-b']) {
         await page.getByTestId(side).getByRole('img').waitFor();
       }
+      // The empty side says why its field is flat; the table lists the lamps and the rock as added.
+      await page.getByTestId('compare-a').getByText('No lamps yet', { exact: false }).waitFor();
+      expect(await page.getByTestId('compare-b').getByText('No lamps yet', { exact: false }).count()).toBe(0);
+      expect(await page.getByText('The two variants are the same design.').count()).toBe(0);
       await expect
-        .poll(() => page.getByText('The two variants are the same design.').count(), eventually)
-        .toBe(1);
+        .poll(() => page.getByRole('table').getByText('Added', { exact: true }).count(), eventually)
+        .toBeGreaterThanOrEqual(3);
       await page.getByRole('radio', { name: 'Temperature' }).click();
       await page.waitForURL(/field=tempC/);
       await page
-        .getByTestId('compare-a')
+        .getByTestId('compare-b')
         .getByRole('img', { name: /Surface temperature/ })
         .waitFor();
       await screenshot(page, 'variants-compare');
 
-      // Share the first variant from its design's page.
-      await page.goto(enclosurePath);
-      await page
-        .getByTestId('design-card')
-        .filter({ hasText: designName })
-        .getByRole('link', { name: 'Sharing & export' })
-        .click();
-      const panel = page.getByTestId('variant-panel').filter({ hasText: variantName }).first();
+      // Share the lit variant from its design's page.
+      await page.goto(designPath);
+      const panel = page.getByTestId('variant-panel').filter({ hasText: litName }).first();
       await panel.getByRole('button', { name: 'Create share link' }).click();
       const url = await panel.getByLabel('New share link').inputValue();
       expect(url).toMatch(/\/s\/[A-Za-z0-9_-]{43}$/);
@@ -95,14 +139,26 @@ describe('variants, comparison and share links', () => {
         const sharePath = new URL(url).pathname;
         const res = await visitor.goto(sharePath);
         expect(res?.status()).toBe(200);
-        await visitor.getByRole('heading', { name: variantName, level: 1 }).waitFor();
-        await visitor.getByRole('img', { name: `UV Index of ${variantName}` }).waitFor();
+        await visitor.getByRole('heading', { name: litName, level: 1 }).waitFor();
+        await visitor.getByRole('img', { name: `UV Index of ${litName}` }).waitFor();
         expect(await visitor.getByText('estimate', { exact: false }).count()).toBeGreaterThan(0);
+        // The cautions of a design with a UV tube and a heat lamp, and figures in both unit systems.
+        for (const caution of [
+          'UV can injure eyes and skin',
+          'Lamps within reach burn',
+          'Heat sources can start fires',
+          'Run every heat source on a thermostat',
+        ]) {
+          await visitor.getByRole('region', { name: 'Safety' }).getByText(caution).first().waitFor();
+        }
+        await visitor.getByText('90 × 45 × 45 cm (35.4 × 17.7 × 17.7 in)', { exact: false }).waitFor();
+        expect(await visitor.getByText(/°C \([\d.]+ °F\)/).count()).toBeGreaterThan(0);
         // Read-only: no form control of any kind, and nothing else of the organisation.
         expect(await visitor.locator('main').locator('button, input, select, textarea, form').count()).toBe(
           0,
         );
         expect(await visitor.getByText(`Copy of ${variantName}`).count()).toBe(0);
+        expect(await visitor.getByText(variantName, { exact: true }).count()).toBe(0);
         await screenshot(visitor, 'variants-shared-page');
 
         const [download] = await Promise.all([
@@ -113,10 +169,11 @@ describe('variants, comparison and share links', () => {
         const bytes = new Uint8Array(readFileSync(file));
         expect(bytes.byteLength).toBeGreaterThan(10_000);
         expect(Buffer.from(bytes.subarray(0, 5)).toString('latin1')).toBe('%PDF-');
-        expect((await PDFDocument.load(bytes)).getTitle()).toBe(variantName);
+        expect((await PDFDocument.load(bytes)).getTitle()).toBe(litName);
         const text = pdfDrawnText(bytes);
-        expect(text).toContain(variantName);
+        expect(text).toContain(litName);
         expect(text).toContain('verify with a meter and thermometer');
+        expect(text).toContain('Run every heat source on a thermostat');
 
         // Revoked: the same link answers 404, page and report alike.
         await panel.getByRole('button', { name: 'Revoke' }).click();
