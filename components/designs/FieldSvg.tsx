@@ -1,5 +1,6 @@
 import type { ContourBand, Design } from '@/simulation';
 import { bandLabel, type FieldScale } from '@/lib/variants/scale';
+import { DesignShapes, drawingTop, fieldLook } from './DesignShapes';
 
 /**
  * A field as filled contour bands in SVG, with the enclosure and its objects drawn over it. Design
@@ -20,7 +21,7 @@ export function FieldSvg({
   markers?: { x: number; y: number; label: string }[];
 }) {
   const { width: w, height: h } = design.enclosure;
-  const top = Math.max(h, ...design.objects.map((o) => (o.type === 'lamp' ? o.y + 4 : 0)));
+  const top = drawingTop(design);
   const pad = 3;
   const colorOf = (lo: number) => {
     const k = scale.thresholds.indexOf(lo);
@@ -50,112 +51,7 @@ export function FieldSvg({
             strokeWidth={stroke * 0.3}
           />
         ))}
-        {design.objects.map((o) => {
-          switch (o.type) {
-            case 'ledge':
-              return (
-                <rect
-                  key={o.id}
-                  x={o.x}
-                  y={o.y}
-                  width={o.width}
-                  height={o.height}
-                  fill="#7a6e64"
-                  stroke="#1c1f1a"
-                  strokeWidth={stroke}
-                />
-              );
-            case 'hide':
-              return (
-                <rect
-                  key={o.id}
-                  x={o.x}
-                  y={o.y}
-                  width={o.width}
-                  height={o.height}
-                  fill="none"
-                  stroke="#1c1f1a"
-                  strokeWidth={stroke * 1.5}
-                />
-              );
-            case 'foliage':
-              return (
-                <rect
-                  key={o.id}
-                  x={o.x}
-                  y={o.y}
-                  width={o.width}
-                  height={o.height}
-                  fill="#3e8546"
-                  fillOpacity={0.25}
-                  stroke="#27552e"
-                  strokeWidth={stroke}
-                  strokeDasharray={`${stroke * 4} ${stroke * 2}`}
-                />
-              );
-            case 'perch':
-              return (
-                <line
-                  key={o.id}
-                  x1={o.x1}
-                  y1={o.y1}
-                  x2={o.x2}
-                  y2={o.y2}
-                  stroke="#4a3b2a"
-                  strokeWidth={o.thickness}
-                  strokeLinecap="round"
-                />
-              );
-            case 'screen':
-              return (
-                <line
-                  key={o.id}
-                  x1={o.x1}
-                  y1={o.y1}
-                  x2={o.x2}
-                  y2={o.y2}
-                  stroke="#1c1f1a"
-                  strokeWidth={stroke * 1.5}
-                  strokeDasharray={`${stroke * 4} ${stroke * 3}`}
-                />
-              );
-            case 'glass':
-              return (
-                <line
-                  key={o.id}
-                  x1={o.x1}
-                  y1={o.y1}
-                  x2={o.x2}
-                  y2={o.y2}
-                  stroke="#3377c5"
-                  strokeWidth={stroke * 2}
-                />
-              );
-            case 'lamp':
-              return o.form === 'tube' ? (
-                <line
-                  key={o.id}
-                  x1={o.x - (o.length ?? 0) / 2}
-                  y1={o.y}
-                  x2={o.x + (o.length ?? 0) / 2}
-                  y2={o.y}
-                  stroke="#d18f2b"
-                  strokeWidth={stroke * 5}
-                  strokeLinecap="round"
-                />
-              ) : (
-                <circle
-                  key={o.id}
-                  cx={o.x}
-                  cy={o.y}
-                  r={2}
-                  fill="#d18f2b"
-                  stroke="#1c1f1a"
-                  strokeWidth={stroke}
-                />
-              );
-          }
-        })}
+        <DesignShapes objects={design.objects} look={fieldLook(stroke)} />
         <rect x={0} y={0} width={w} height={h} fill="none" stroke="#1c1f1a" strokeWidth={stroke * 2} />
         {markers.map((m) => (
           <g key={m.label}>

@@ -1,3 +1,4 @@
+import { DesignShapes, drawingTop, SKETCH_LOOK } from '@/components/designs/DesignShapes';
 import type { Design } from '@/simulation';
 
 /**
@@ -6,99 +7,23 @@ import type { Design } from '@/simulation';
  */
 export function ProposalSketch({ design, label }: { design: Design; label: string }) {
   const { width: W, height: H } = design.enclosure;
-  const top = Math.max(H, ...design.objects.map((o) => (o.type === 'lamp' ? o.y + 4 : 0)));
+  const top = drawingTop(design);
   const pad = 6;
-  const vbW = W + 2 * pad;
-  const vbH = top + 2 * pad;
-  const y = (v: number) => top + pad - v; // design y is up; SVG y is down
-  const x = (v: number) => v + pad;
 
   return (
     <figure className="rounded-lg border border-basalt-200 bg-white p-3">
       <svg
-        viewBox={`0 0 ${vbW} ${vbH}`}
+        viewBox={`${-pad} ${-top - pad} ${W + 2 * pad} ${top + 2 * pad}`}
         role="img"
         aria-label={label}
         className="h-auto w-full"
         style={{ maxHeight: 360 }}
       >
-        <rect x={x(0)} y={y(H)} width={W} height={H} fill="#f5f6f4" stroke="#5f6756" strokeWidth={0.8} />
-        {design.objects.map((o) => {
-          switch (o.type) {
-            case 'screen':
-              return (
-                <line
-                  key={o.id}
-                  x1={x(o.x1)}
-                  y1={y(o.y1)}
-                  x2={x(o.x2)}
-                  y2={y(o.y2)}
-                  stroke="#7e8673"
-                  strokeWidth={1.2}
-                  strokeDasharray="2 1.5"
-                />
-              );
-            case 'glass':
-              return (
-                <line
-                  key={o.id}
-                  x1={x(o.x1)}
-                  y1={y(o.y1)}
-                  x2={x(o.x2)}
-                  y2={y(o.y2)}
-                  stroke="#4592d2"
-                  strokeWidth={1.4}
-                />
-              );
-            case 'perch':
-              return (
-                <line
-                  key={o.id}
-                  x1={x(o.x1)}
-                  y1={y(o.y1)}
-                  x2={x(o.x2)}
-                  y2={y(o.y2)}
-                  stroke="#94561f"
-                  strokeWidth={o.thickness}
-                  strokeLinecap="round"
-                />
-              );
-            case 'hide':
-            case 'ledge':
-              return (
-                <rect
-                  key={o.id}
-                  x={x(o.x)}
-                  y={y(o.y + o.height)}
-                  width={o.width}
-                  height={o.height}
-                  fill="#cdd1c8"
-                  stroke="#4a5143"
-                  strokeWidth={0.6}
-                />
-              );
-            case 'lamp': {
-              const heat = (o.uvbAt30 ?? 1) === 0;
-              const fill = heat ? '#da5540' : '#8b5cf6';
-              if (o.form === 'tube' && o.length) {
-                return (
-                  <rect
-                    key={o.id}
-                    x={x(o.x - o.length / 2)}
-                    y={y(o.y) - 1.2}
-                    width={o.length}
-                    height={2.4}
-                    rx={1.2}
-                    fill={fill}
-                  />
-                );
-              }
-              return <circle key={o.id} cx={x(o.x)} cy={y(o.y)} r={2.4} fill={fill} />;
-            }
-            default:
-              return null;
-          }
-        })}
+        {/* Design coordinates (cm, y up); the group flips y. */}
+        <g transform="scale(1,-1)">
+          <rect x={0} y={0} width={W} height={H} fill="#f5f6f4" stroke="#5f6756" strokeWidth={0.8} />
+          <DesignShapes objects={design.objects} look={SKETCH_LOOK} />
+        </g>
       </svg>
       <figcaption className="mt-2 flex flex-wrap gap-x-4 gap-y-1 text-caption text-basalt-600">
         <span>
