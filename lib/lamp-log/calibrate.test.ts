@@ -36,6 +36,17 @@ describe('calibrate', () => {
     const c = calibrate(lamp, uvb, object, '2025-10-01');
     if (!c.ok) throw new Error(c.reason);
     expect(lampSchema.safeParse(applyCalibration(object, c.fields)).success).toBe(true);
+    // With the note, the lamp says when and from what it was calibrated, in the design file's shape.
+    const noted = lampSchema.parse(applyCalibration(object, c.fields, c.calibrated));
+    expect(noted.calibration).toEqual({
+      at: c.calibrated.at,
+      from: `${c.calibrated.from} meter readings`,
+    });
+    expect(noted.calibration!.at).toMatch(/^\d{4}-\d{2}-\d{2}$/);
+    expect(applyCalibration(object, c.fields, { at: '2025-09-30', from: 1 }).calibration).toEqual({
+      at: '2025-09-30',
+      from: '1 meter reading',
+    });
   });
 
   it('divides by the reflector gain: readings under a reflector include it', () => {

@@ -1,4 +1,4 @@
-import type { LampObject } from '@/simulation';
+import type { LampCalibration, LampObject } from '@/simulation';
 import { LAMP_TECHS } from '@/simulation';
 import { dayNumber, DAYS_PER_MONTH, isoDay } from './dates';
 import { defaultDecayFor, REFERENCE_HOURS_PER_DAY } from './decay';
@@ -136,7 +136,16 @@ export function calibrate(
   return { ok: true, fields, calibrated: { at: isoDay(latest), from: usable.length }, changes, notes };
 }
 
-/** The design lamp object with the calibrated fields written onto it. */
-export function applyCalibration(object: LampObject, fields: CalibratedFields): LampObject {
-  return { ...object, ...fields };
+/** The design file's note of a calibration (the lamp object's `calibration` field). */
+export function designCalibrationNote(note: CalibrationNote): LampCalibration {
+  return { at: note.at, from: `${note.from} meter reading${note.from === 1 ? '' : 's'}` };
+}
+
+/** The design lamp object with the calibrated fields, and the note of where they came from, written onto it. */
+export function applyCalibration(
+  object: LampObject,
+  fields: CalibratedFields,
+  note?: CalibrationNote,
+): LampObject {
+  return { ...object, ...fields, ...(note ? { calibration: designCalibrationNote(note) } : {}) };
 }

@@ -90,11 +90,10 @@ export async function applyCalibrationTo(
     throw conflict('Someone saved this variant after the proposal was made. Look at it again.', 'stale');
   }
   const design = readStoredDesign(variant.designJson);
-  const fields = applyCalibration(target.object, target.calibration.fields);
-  // The note "calibrated from n readings on <date>" goes on the lamp object once the design schema has a
-  // place for it (an optional `calibration` field); until then the fields alone are written.
-  const withNote = lampSchema.safeParse({ ...fields, calibration: target.calibration.calibrated });
-  const calibrated = withNote.success ? withNote.data : lampSchema.parse(fields);
+  // The calibrated figures and the note "calibrated on <date> from n meter readings" that the studio shows.
+  const calibrated = lampSchema.parse(
+    applyCalibration(target.object, target.calibration.fields, target.calibration.calibrated),
+  );
   const next = {
     ...design,
     objects: design.objects.map((o) => (o.type === 'lamp' && o.id === lamp.designObjectId ? calibrated : o)),

@@ -98,6 +98,45 @@ describe('parseDesign', () => {
     expect(r2).toEqual({ ok: false, error: { path: 'version', message: expect.stringMatching(/newer/) } });
   });
 
+  it('keeps a lamp’s calibration note, absent by default', () => {
+    expect(EXAMPLE_DESIGN.objects.some((o) => 'calibration' in o)).toBe(false);
+    const plain = parseDesign(clone(EXAMPLE_DESIGN));
+    expect(plain.ok && plain.design.objects[0]).not.toHaveProperty('calibration');
+
+    const d = clone(EXAMPLE_DESIGN) as unknown as { objects: Record<string, unknown>[] };
+    d.objects[0]!.calibration = { at: '2026-11-30', from: '6 readings' };
+    const r = parseDesign(clone(d));
+    expect(r.ok && r.design.objects[0]).toMatchObject({
+      calibration: { at: '2026-11-30', from: '6 readings' },
+    });
+    // Through JSON and parse again, as a download and upload would.
+    const again = r.ok ? parseDesign(JSON.parse(JSON.stringify(r.design))) : r;
+    expect(again).toEqual(r);
+    // Date and time are accepted too.
+    d.objects[0]!.calibration = { at: '2026-11-30T09:15:00Z', from: 'readings' };
+    expect(parseDesign(clone(d)).ok).toBe(true);
+  });
+
+  it('rejects a malformed calibration note, naming the field', () => {
+    const d = clone(EXAMPLE_DESIGN) as unknown as { objects: Record<string, unknown>[] };
+    d.objects[0]!.calibration = { at: '30/11/2026', from: '6 readings' };
+    expect(parseDesign(clone(d))).toEqual({
+      ok: false,
+      error: { path: 'objects[0].calibration.at', message: 'expected an ISO date (YYYY-MM-DD)' },
+    });
+    d.objects[0]!.calibration = { at: '2026-11-30', from: '' };
+    const empty = parseDesign(clone(d));
+    expect(!empty.ok && empty.error.path).toBe('objects[0].calibration.from');
+    d.objects[0]!.calibration = { at: '2026-11-30', from: 'readings', by: 'me' };
+    expect(parseDesign(clone(d))).toEqual({
+      ok: false,
+      error: { path: 'objects[0].calibration.by', message: 'unknown field' },
+    });
+    d.objects[0]!.calibration = { at: '2026-11-30', from: 6 };
+    const numeric = parseDesign(clone(d));
+    expect(!numeric.ok && numeric.error.path).toBe('objects[0].calibration.from');
+  });
+
   it('runs migrations from older versions before validating', () => {
     // A pretend version 0 that called the room temperature "ambientC".
     const v0 = {

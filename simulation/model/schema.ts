@@ -28,6 +28,19 @@ export const decayCurveSchema = z.union([
   }),
 ]);
 
+/**
+ * Where a lamp's output figures came from when they were fitted to meter readings of the real lamp
+ * (lamp log, BRIEF §2.7): the day of the newest reading used (ISO date, or date and time) and a short
+ * note of what they were fitted from ("6 readings"). Default: absent — the catalogue's figures.
+ * Descriptive only: the engine reads the lamp's own fields, never this note.
+ */
+export const lampCalibrationSchema = z.strictObject({
+  at: z.union([z.iso.date(), z.iso.datetime({ offset: true })], {
+    error: 'expected an ISO date (YYYY-MM-DD)',
+  }),
+  from: z.string().trim().min(1, 'must not be empty').max(200),
+});
+
 export const lampSchema = z
   .strictObject({
     type: z.literal('lamp'),
@@ -48,6 +61,7 @@ export const lampSchema = z
     ageMonths: z.number().finite().min(0).max(600).optional(),
     radiantFraction: z.number().min(0).max(1).optional(),
     decay: decayCurveSchema.optional(),
+    calibration: lampCalibrationSchema.optional(),
   })
   .superRefine((lamp, ctx) => {
     if (lamp.form === 'tube' && lamp.length === undefined) {
@@ -147,6 +161,7 @@ export const designSchema = z
 export type Design = z.infer<typeof designSchema>;
 export type DesignObject = z.infer<typeof designObjectSchema>;
 export type LampObject = z.infer<typeof lampSchema>;
+export type LampCalibration = z.infer<typeof lampCalibrationSchema>;
 export type ScreenObject = z.infer<typeof screenSchema>;
 export type GlassObject = z.infer<typeof glassSchema>;
 export type PerchObject = z.infer<typeof perchSchema>;

@@ -29,6 +29,12 @@ export function arbLamp(width = 120, height = 60): fc.Arbitrary<Omit<LampObject,
         beamDeg: num(1, 360),
         watts: num(0, 150),
         ageMonths: num(0, 24),
+        calibration: fc.record({
+          at: fc
+            .date({ min: new Date('2020-01-01'), max: new Date('2030-12-31'), noInvalidDate: true })
+            .map((d) => d.toISOString().slice(0, 10)),
+          from: fc.integer({ min: 1, max: 50 }).map((n) => `${n} readings`),
+        }),
       },
       { requiredKeys: ['type', 'tech', 'form', 'x', 'y', 'length'] },
     )

@@ -341,6 +341,10 @@ describe('calibration', () => {
     const stored = JSON.parse((await Variant.findByPk(variant.id))!.designJson);
     expect(stored.objects[0].uvbAt30).toBe(target.calibration.fields.uvbAt30);
     expect(stored.objects[0].decay.points[0]).toEqual([0, 1]);
+    // The lamp carries the note the studio shows: the day of the newest reading and what it was fitted from.
+    expect(target.calibration.calibrated.at).toBe('2025-07-09');
+    expect(stored.objects[0].calibration).toEqual({ at: '2025-07-09', from: '6 meter readings' });
+    expect(applied.body.object.calibration).toEqual({ at: '2025-07-09', from: '6 meter readings' });
   });
 
   it('says what is missing when the lamp is not linked to a design lamp', async () => {
