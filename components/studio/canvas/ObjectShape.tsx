@@ -7,6 +7,7 @@ import type { Context } from 'konva/lib/Context';
 import { designToStage, type Camera } from '../geometry/camera';
 import { BULB_RADIUS_CM, lampExtent, TUBE_THICKNESS_CM } from '../geometry/objects';
 import { LAMP_TECHS } from '@/simulation/model/techs';
+import { calibrationLabel } from '../state/calibration';
 import type { DesignObject, LampObject } from '../state/types';
 import { C } from './colors';
 
@@ -32,7 +33,10 @@ const TECH_SHORT: Record<LampObject['tech'], string> = {
 function Lamp({ o, cam }: { o: LampObject; cam: Camera }) {
   const col = lampColors(o);
   const watts = o.watts ?? LAMP_TECHS[o.tech].watts;
-  const label = `${o.name ?? TECH_SHORT[o.tech]} · ${watts} W`;
+  const calibrated = calibrationLabel(o);
+  // A calibrated lamp says so on a second line: its figures are the real lamp's, not the catalogue's.
+  const label = `${o.name ?? TECH_SHORT[o.tech]} · ${watts} W${calibrated ? `\n✓ ${calibrated}` : ''}`;
+  const labelLift = calibrated ? 28 : 15;
   const c = designToStage(cam, o);
   if (o.form === 'tube') {
     const { x1, x2 } = lampExtent(o);
@@ -76,12 +80,13 @@ function Lamp({ o, cam }: { o: LampObject; cam: Camera }) {
         />
         <Text
           x={a.x}
-          y={c.y - h / 2 - 15}
+          y={c.y - h / 2 - labelLift}
           width={w}
           align="center"
           text={label}
           fontSize={11}
-          fill={C.basalt700}
+          lineHeight={1.15}
+          fill={calibrated ? C.moss700 : C.basalt700}
         />
       </Group>
     );
@@ -120,12 +125,13 @@ function Lamp({ o, cam }: { o: LampObject; cam: Camera }) {
       <Circle x={c.x} y={c.y} radius={r * 0.45} fill={col.core} />
       <Text
         x={c.x - 70}
-        y={c.y - r * 1.55 - 15}
+        y={c.y - r * 1.55 - labelLift}
         width={140}
         align="center"
         text={label}
         fontSize={11}
-        fill={C.basalt700}
+        lineHeight={1.15}
+        fill={calibrated ? C.moss700 : C.basalt700}
       />
     </Group>
   );

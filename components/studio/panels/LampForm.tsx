@@ -9,6 +9,7 @@ import {
   PRESET_OPTIONS,
   TECH_OPTIONS,
 } from '../state/lampPresets';
+import { calibrationDate } from '../state/calibration';
 import type { LampObject } from '../state/types';
 import { Grid2, NumberField, Section, SelectField } from './FormFields';
 import { useObjectEdit } from './useObjectEdit';
@@ -20,6 +21,22 @@ export function LampForm({ lamp }: { lamp: LampObject }) {
   return (
     <>
       <Section title="Lamp type">
+        {lamp.calibration ? (
+          <p
+            className="rounded-md border border-moss-300 bg-moss-50 px-2 py-1.5 text-sm text-moss-900"
+            data-testid="lamp-calibrated"
+          >
+            <span className="font-semibold">
+              <span aria-hidden="true">✓ </span>Calibrated {calibrationDate(lamp.calibration.at)}
+            </span>{' '}
+            from {lamp.calibration.from}: the output figures below are this lamp’s, from the lamp log.
+            Changing them by hand removes the mark.
+          </p>
+        ) : (
+          <p className="text-caption text-basalt-500" data-testid="lamp-uncalibrated">
+            Not calibrated: catalogue figures. Log meter readings of the real lamp to calibrate it.
+          </p>
+        )}
         <SelectField<LampPresetId>
           label="Preset (generic lamp class)"
           testId="lamp-preset"

@@ -3,6 +3,7 @@
 import { formatLength, formatNumber } from '../geometry/units';
 import { segmentAngleDeg, segmentLength } from '../geometry/objects';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
+import { calibrationLabel } from '../state/calibration';
 import { TYPE_NAMES } from '../state/document';
 import { isBox, isSegment, type DesignObject } from '../state/types';
 import type { LengthUnit } from '../geometry/units';
@@ -13,7 +14,8 @@ export function describeObject(o: DesignObject, u: LengthUnit): string {
   const L = (v: number) => formatLength(v, u);
   if (o.type === 'lamp') {
     const size = o.form === 'tube' ? `, ${L(o.length ?? 0)} long` : '';
-    return `${name}: ${LAMP_TECHS[o.tech].label}${size}, at ${L(o.x)} from the left, ${L(o.y)} up`;
+    const calibrated = calibrationLabel(o);
+    return `${name}: ${LAMP_TECHS[o.tech].label}${size}, at ${L(o.x)} from the left, ${L(o.y)} up${calibrated ? `, ${calibrated}` : ''}`;
   }
   if (isSegment(o)) {
     const extra = o.type === 'perch' ? `, ${L(o.thickness)} thick` : '';

@@ -1,6 +1,7 @@
 'use client';
 // Binds inspector fields of one object to validated, undoable edits.
 import { useCommandContext, useStudio } from '../hooks/useStudio';
+import { keepCalibrationTrue } from '../state/calibration';
 import { replaceObjects } from '../state/document';
 import type { DesignObject } from '../state/types';
 import { checkObjectEdit, type DisplayUnits, type FieldKind } from './validate';
@@ -15,7 +16,11 @@ export function useUnits(): DisplayUnits {
 export function useObjectEdit(object: DesignObject) {
   const { store } = useCommandContext();
   const units = useUnits();
-  const replace = (next: DesignObject) => store.edit((d) => replaceObjects(d, new Map([[object.id, next]])));
+  const replace = (edited: DesignObject) => {
+    const next =
+      object.type === 'lamp' && edited.type === 'lamp' ? keepCalibrationTrue(object, edited) : edited;
+    store.edit((d) => replaceObjects(d, new Map([[object.id, next]])));
+  };
   const field = (key: string, kind: FieldKind) => ({
     kind,
     units,
