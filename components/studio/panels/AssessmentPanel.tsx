@@ -7,7 +7,7 @@ import type { SimView } from '../fields/simTypes';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
 import type { StudioSpecies } from '../state/types';
 import { focusRing } from './CommandButton';
-import { formatFindingNumber, unmetText } from './findingFormat';
+import { formatFindingNumber, localiseFindingText, unmetText } from './findingFormat';
 import { Section, SelectField } from './FormFields';
 import { useUnits } from './useObjectEdit';
 
@@ -36,14 +36,16 @@ function FindingItem({ f }: { f: Finding }) {
   const highlight = useStudio(store, (s) => s.session.highlight);
   const units = useUnits();
   const on = highlight === f.id;
-  const numbers = Object.entries(f.numbers).map(([k, v]) => formatFindingNumber(k, v, units));
+  const numbers = Object.entries(f.numbers).map(([k, v]) => formatFindingNumber(k, v, units, f.id));
   const body = (
     <>
       <span className="flex items-start justify-between gap-2">
         <span className="font-medium text-basalt-900">{f.title}</span>
         <StatusBadge status={f.status} />
       </span>
-      <span className="mt-0.5 block text-sm text-basalt-700">{f.message}</span>
+      <span className="mt-0.5 block text-sm text-basalt-700" data-testid="finding-message">
+        {localiseFindingText(f.message, units)}
+      </span>
       {numbers.length > 0 && (
         <span className="mt-1 grid grid-cols-[auto_auto] justify-start gap-x-3 text-caption tabular-nums text-basalt-600">
           {numbers.map((n) => (

@@ -1,4 +1,5 @@
-// Plain-language formatting of the engine's findings' numbers, in the user's units.
+// Plain-language formatting of the engine's findings in the user's units. The engine writes its
+// messages and numbers in cm and °C (BRIEF §3); everything the studio shows goes through here.
 import {
   cToDisplay,
   cmToDisplay,
@@ -8,6 +9,8 @@ import {
   type LengthUnit,
   type TempUnit,
 } from '../geometry/units';
+
+export type FindingUnits = { length: LengthUnit; temp: TempUnit };
 
 /** "baskingMeanUvi" → "Basking mean UVI". */
 export function humanKey(key: string): string {
@@ -25,31 +28,76 @@ export function humanKey(key: string): string {
   return s.charAt(0).toUpperCase() + s.slice(1);
 }
 
-/** Formats a finding number by the unit its key names (…C temperature, …Cm length, …Uvi, …Uw). */
+const temp = (c: number, u: FindingUnits) => `${formatNumber(cToDisplay(c, u.temp), 1)} ${tempLabel(u.temp)}`;
+const length = (cm: number, u: FindingUnits) =>
+  `${formatNumber(cmToDisplay(cm, u.length), u.length === 'cm' ? 1 : 2)} ${lengthLabel(u.length)}`;
+
+/** What the engine's unit-less keys `targetLo`/`targetHi` measure, by finding. */
+function targetKind(findingId: string | undefined): 'temp' | 'uvb' | 'plain' {
+  if (findingId === 'hot-spot' || findingId === 'cool-end') return 'temp';
+  if (findingId === 'basking-uvb') return 'uvb';
+  return 'plain';
+}
+
+/**
+ * Formats a finding number by the unit its key names (…C temperature, …Cm length, …Uvi, …Uw), or, for
+ * the sheet's target bounds, by the finding it belongs to.
+ */
 export function formatFindingNumber(
   key: string,
   v: number,
-  u: { length: LengthUnit; temp: TempUnit },
+  u: FindingUnits,
+  findingId?: string,
 ): { label: string; value: string } {
+  if (key === 'targetLo' || key === 'targetHi') {
+    const label = `Target on the species sheet, ${key === 'targetLo' ? 'from' : 'to'}`;
+    const kind = targetKind(findingId);
+    if (kind === 'temp') return { label, value: temp(v, u) };
+    if (kind === 'uvb') return { label, value: `${formatNumber(v, 0)} µW/cm²` };
+    return { label, value: formatNumber(v, 2) };
+  }
   if (/(TempC|C)$/.test(key) && !/Cm$/.test(key)) {
-    return {
-      label: humanKey(key.replace(/(Temp)?C$/, '') || 'temperature'),
-      value: `${formatNumber(cToDisplay(v, u.temp), 1)} ${tempLabel(u.temp)}`,
-    };
+    return { label: humanKey(key.replace(/(Temp)?C$/, '') || 'temperature'), value: temp(v, u) };
   }
-  if (/Cm$/.test(key)) {
-    return {
-      label: humanKey(key.replace(/Cm$/, '')),
-      value: `${formatNumber(cmToDisplay(v, u.length), 1)} ${lengthLabel(u.length)}`,
-    };
-  }
+  if (/Cm$/.test(key)) return { label: humanKey(key.replace(/Cm$/, '')), value: length(v, u) };
   if (/Uw$/.test(key))
     return { label: humanKey(key.replace(/Uw$/, '')), value: `${formatNumber(v, 0)} µW/cm²` };
+  if (/Uvb$/.test(key)) return { label: humanKey(key), value: `${formatNumber(v, 0)} µW/cm²` };
   if (/Uvi$/i.test(key)) return { label: humanKey(key), value: formatNumber(v, 2) };
   if (/Months$/.test(key))
     return { label: humanKey(key.replace(/Months$/, '')), value: `${formatNumber(v, 0)} months` };
   if (/Fraction$|Share$/.test(key)) return { label: humanKey(key), value: `${formatNumber(v * 100, 0)} %` };
   return { label: humanKey(key), value: formatNumber(v, 2) };
+}
+
+const NUM = String.raw`(-?\d+(?:\.\d+)?)`;
+// "43.8 °C", "40.0–45.0 °C" (a range shares one unit).
+const TEMP_IN_TEXT = new RegExp(`${NUM}(?:\\s*[–-]\\s*${NUM})?\\s*°C`, 'g');
+// "30 cm", "10–20 cm"; never the "cm" of µW/cm².
+const LENGTH_IN_TEXT = new RegExp(`${NUM}(?:\\s*[–-]\\s*${NUM})?\\s*cm(?![²\\w])`, 'g');
+
+/**
+ * Rewrites the temperatures and lengths inside an engine message into the user's units
+ * ("about 43.8 °C" → "about 110.8 °F"; "within 15 cm" → "within 5.91 in"). Other numbers (UVI, µW/cm²,
+ * percentages) have no unit to convert and are left alone.
+ */
+export function localiseFindingText(message: string, u: FindingUnits): string {
+  let out = message;
+  if (u.temp !== 'C') {
+    out = out.replace(TEMP_IN_TEXT, (_m, a: string, b: string | undefined) => {
+      const f = (s: string) => formatNumber(cToDisplay(Number(s), u.temp), 1);
+      return b === undefined ? `${f(a)} ${tempLabel(u.temp)}` : `${f(a)}–${f(b)} ${tempLabel(u.temp)}`;
+    });
+  }
+  if (u.length !== 'cm') {
+    out = out.replace(LENGTH_IN_TEXT, (_m, a: string, b: string | undefined) => {
+      const f = (s: string) => formatNumber(cmToDisplay(Number(s), u.length), 1);
+      return b === undefined
+        ? `${f(a)} ${lengthLabel(u.length)}`
+        : `${f(a)}–${f(b)} ${lengthLabel(u.length)}`;
+    });
+  }
+  return out;
 }
 
 export function unmetText(m: number | null | undefined, horizon: number): string {
