@@ -65,10 +65,14 @@ export default async function LandingPage() {
               <Link href="/sign-up" className={button.primary}>
                 Start an organisation
               </Link>
-              <Link href="/sign-in" className={button.secondary}>
-                Sign in
+              <Link href="/studio-scratch" className={button.secondary} data-testid="try-studio">
+                Try the studio — no account
               </Link>
             </div>
+            <p className="mt-3 text-caption text-basalt-500">
+              Trying it keeps your design in this browser only; sign in or create an account to save and share
+              designs.
+            </p>
             <p className="mt-4 text-caption text-basalt-500">
               Invited by a shop or a keeper? Open the link in your invitation e-mail.
             </p>

@@ -31,13 +31,17 @@ const StudioCanvas = dynamic(() => import('./canvas/StudioCanvas'), {
 });
 
 const PREFS_KEY = 'baskwell.studio.prefs';
+// The cm/in choice of the rest of the app (components/ui/units.ts): one choice everywhere.
+const APP_LENGTH_KEY = 'baskwell.lengthUnit';
 
 function readPrefs(storage: KeyValueStorage): Partial<StoredPrefs> {
   try {
     const raw = storage.getItem(PREFS_KEY);
     const p = raw ? (JSON.parse(raw) as Partial<StoredPrefs>) : {};
     const out: Partial<StoredPrefs> = {};
-    if (p.lengthUnit === 'cm' || p.lengthUnit === 'in') out.lengthUnit = p.lengthUnit;
+    const appLength = storage.getItem(APP_LENGTH_KEY);
+    if (appLength === 'cm' || appLength === 'in') out.lengthUnit = appLength;
+    else if (p.lengthUnit === 'cm' || p.lengthUnit === 'in') out.lengthUnit = p.lengthUnit;
     if (p.tempUnit === 'C' || p.tempUnit === 'F') out.tempUnit = p.tempUnit;
     if (p.field === 'uvb' || p.field === 'uvi' || p.field === 'tempC') out.field = p.field;
     if (typeof p.fieldOpacity === 'number' && p.fieldOpacity >= 0.1 && p.fieldOpacity <= 1)
@@ -138,6 +142,7 @@ function StudioEditor({
   useEffect(() => {
     try {
       storage.setItem(PREFS_KEY, prefs);
+      storage.setItem(APP_LENGTH_KEY, (JSON.parse(prefs) as StoredPrefs).lengthUnit);
     } catch {
       // Preferences are a convenience; ignore a full or disabled storage.
     }
@@ -194,7 +199,13 @@ function StudioEditor({
           </main>
           <SidePanel sim={sim} legend={legend} species={species} />
         </div>
-        <StatusBar save={save.state} onSaveNow={save.saveNow} pointer={pointer} sim={sim} />
+        <StatusBar
+          save={save.state}
+          onSaveNow={save.saveNow}
+          pointer={pointer}
+          sim={sim}
+          savedWhere={persistence.where}
+        />
         <HelpDialog />
       </div>
     </StudioContext.Provider>

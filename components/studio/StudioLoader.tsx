@@ -2,6 +2,7 @@
 // Entry point for pages: builds the persistence from plain props (functions cannot cross from a
 // server component) and loads the Konva studio on the client only.
 import dynamic from 'next/dynamic';
+import Link from 'next/link';
 import { useMemo } from 'react';
 import { exampleDesign } from './examples/exampleDesign';
 import { httpPersistence } from './persistence/http';
@@ -46,6 +47,20 @@ export function StudioLoader({
   );
   return (
     <div className="fixed inset-0 z-40 flex flex-col bg-basalt-50">
+      {source.kind === 'scratch' && (
+        <p
+          role="note"
+          data-testid="scratch-note"
+          className="shrink-0 border-b border-sand-300 bg-sand-50 px-4 py-1.5 text-sm text-sand-900"
+        >
+          <strong>Kept only in this browser.</strong> Nothing is sent to a server; clearing this browser’s
+          data or using another device loses it.{' '}
+          <Link href="/sign-up" className="font-medium text-sky-800 underline">
+            Create an account
+          </Link>{' '}
+          to keep designs, share them and log your lamps.
+        </p>
+      )}
       <Studio
         persistence={persistence}
         species={species}

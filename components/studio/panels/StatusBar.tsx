@@ -8,9 +8,13 @@ import { formatLength } from '../geometry/units';
 import { useAtom, useCommandContext, useStudio } from '../hooks/useStudio';
 import { focusRing } from './CommandButton';
 
-export function saveLabel(s: SaveState): { text: string; tone: 'ok' | 'busy' | 'warn' | 'bad' } {
+export function saveLabel(
+  s: SaveState,
+  where: 'server' | 'browser' = 'server',
+): { text: string; tone: 'ok' | 'busy' | 'warn' | 'bad' } {
   switch (s.kind) {
     case 'saved':
+      if (where === 'browser') return { text: 'Saved in this browser only', tone: 'ok' };
       return { text: s.at ? 'All changes saved' : 'Saved', tone: 'ok' };
     case 'pending':
       return { text: 'Unsaved changes…', tone: 'busy' };
@@ -48,15 +52,17 @@ export function StatusBar({
   onSaveNow,
   pointer,
   sim,
+  savedWhere = 'server',
 }: {
   save: SaveState;
+  savedWhere?: 'server' | 'browser';
   onSaveNow: () => void;
   pointer: Atom<PointerInfo | null>;
   sim: SimView;
 }) {
   const { store } = useCommandContext();
   const zoom = useStudio(store, (s) => s.session.camera.zoom);
-  const l = saveLabel(save);
+  const l = saveLabel(save, savedWhere);
   return (
     <footer className="flex h-8 shrink-0 items-center gap-4 border-t border-basalt-200 bg-white px-3 text-caption text-basalt-700">
       <span

@@ -26,6 +26,7 @@ export function localPersistence(
   }
   return {
     key: `local:${key}`,
+    where: 'browser',
     async load() {
       return read() ?? { design: initial(), version: 0 };
     },

@@ -11,6 +11,8 @@ export type SaveResult = { version: number } | { conflict: { version: number; de
 export interface StudioPersistence {
   /** Names the local safety copy (a variant id, or "scratch"). */
   readonly key: string;
+  /** Where a save goes: the server (default) or this browser only (the scratch studio). */
+  readonly where?: 'server' | 'browser';
   load(): Promise<Loaded>;
   save(design: Design, baseVersion: number): Promise<SaveResult>;
 }
