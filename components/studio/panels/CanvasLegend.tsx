@@ -1,5 +1,7 @@
 'use client';
-// A compact legend over the canvas, so the colours can be read whichever panel is open.
+// A compact legend over the canvas, so the colours can be read whichever panel is open. A single
+// colour bar in the bottom-right corner, short enough to sit in the room the fitted view leaves under
+// the enclosure instead of over the design.
 import { FIELD_TITLE, fieldUnit, type LegendEntry } from '../fields/legend';
 import type { TempUnit } from '../geometry/units';
 import type { FieldView } from '../state/session';
@@ -17,21 +19,20 @@ export function CanvasLegend({
   const unit = fieldUnit(field, temp);
   return (
     <div
-      className="pointer-events-none absolute right-3 bottom-3 rounded-md border border-basalt-200 bg-white/90 px-2.5 py-2 text-caption text-basalt-800 shadow-sm"
+      className="pointer-events-none absolute right-3 bottom-3 max-w-[calc(100%-1.5rem)] rounded-md border border-basalt-200 bg-white/90 px-2 py-1.5 text-caption text-basalt-800 shadow-sm"
       data-testid="canvas-legend"
+      aria-hidden="true"
     >
-      <p className="mb-1 font-semibold">
+      <p className="mb-0.5 font-semibold leading-tight">
         {FIELD_TITLE[field]} ({unit}) — estimates
       </p>
-      <ol className="flex flex-col-reverse gap-px">
+      <ol className="flex">
         {legend.map((e) => (
-          <li key={e.label} className="flex items-center gap-1.5 tabular-nums">
-            <span
-              className="inline-block h-3 w-5 rounded-sm"
-              style={{ background: e.color }}
-              aria-hidden="true"
-            />
-            {e.label}
+          <li key={e.label} className="flex min-w-11 flex-1 flex-col items-stretch tabular-nums">
+            <span className="block h-2.5" style={{ background: e.color }} />
+            <span className="px-0.5 text-center text-[0.65rem] leading-tight whitespace-nowrap">
+              {e.label.replace(/ – /g, '–')}
+            </span>
           </li>
         ))}
       </ol>

@@ -39,7 +39,10 @@ export const Toolbar = memo(function Toolbar({
           {backLabel ?? 'Back'}
         </Link>
       )}
-      <h1 className="mr-2 truncate px-1 text-base font-semibold text-basalt-900" title={title}>
+      <h1
+        className="mr-2 max-w-xs truncate px-1 text-base font-semibold text-basalt-900 2xl:max-w-lg"
+        title={title}
+      >
         {title}
       </h1>
       <Divider />
