@@ -45,7 +45,7 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
                 title={`${user.email}: your account, password and sessions`}
               >
                 {user.name}
-                {membership && <span className="text-basalt-400"> · {membership.role}</span>}
+                {membership && <span className="text-basalt-300"> · {membership.role}</span>}
               </Link>
               <SignOutButton className="rounded px-2 py-1 text-body text-basalt-200 hover:bg-basalt-800 hover:text-white focus-visible:outline focus-visible:outline-2 focus-visible:outline-sky-400" />
             </div>

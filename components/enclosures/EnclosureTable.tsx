@@ -54,7 +54,7 @@ export function EnclosureTable({
                     {e.speciesName}
                   </>
                 ) : (
-                  <span className="text-basalt-400">Not set</span>
+                  <span className="text-basalt-500">Not set</span>
                 )}
               </td>
               {showKeeper && <td className="px-4 py-3 text-basalt-700">{e.keeperName ?? 'Former member'}</td>}

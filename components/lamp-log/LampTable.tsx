@@ -84,7 +84,7 @@ export function LampTable({ lamps, showEnclosure }: { lamps: LampSummary[]; show
                     </div>
                   </>
                 ) : (
-                  <span className="text-basalt-400">None yet</span>
+                  <span className="text-basalt-500">None yet</span>
                 )}
               </td>
               <td className="whitespace-nowrap px-4 py-3 tabular-nums text-basalt-700">
@@ -112,7 +112,7 @@ export function LampTable({ lamps, showEnclosure }: { lamps: LampSummary[]; show
                 ) : l.missing.length > 0 && l.status !== 'retired' && l.status !== 'heat-only' ? (
                   <span className="text-caption text-basalt-500">Needs {l.missing.join('; ')}</span>
                 ) : (
-                  <span className="text-basalt-400">—</span>
+                  <span className="text-basalt-500">—</span>
                 )}
               </td>
               <td className="px-4 py-3">

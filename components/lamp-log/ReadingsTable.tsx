@@ -115,7 +115,7 @@ export function ReadingsTable({ readings, canEdit }: { readings: Reading[]; canE
                 <td className="px-3 py-2 text-basalt-600">{r.meter ?? '—'}</td>
                 <td className="px-3 py-2 text-basalt-600">
                   {r.note ?? ''}
-                  {r.uploadId && <span className="ml-1 text-caption text-basalt-400">(imported)</span>}
+                  {r.uploadId && <span className="ml-1 text-caption text-basalt-500">(imported)</span>}
                 </td>
                 {canEdit && (
                   <td className="px-3 py-2 text-right">

@@ -23,11 +23,17 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
         <Link href="/enclosures" className={link}>
           Enclosures
         </Link>
-        <span className="text-basalt-400"> / </span>
+        <span className="text-basalt-500" aria-hidden="true">
+          {' '}
+          /{' '}
+        </span>
         <Link href={`/enclosures/${enclosure.id}`} className={link}>
           {enclosure.name}
         </Link>
-        <span className="text-basalt-400"> / </span>
+        <span className="text-basalt-500" aria-hidden="true">
+          {' '}
+          /{' '}
+        </span>
         <span aria-current="page">{design.name}</span>
       </nav>
       <PageHeader

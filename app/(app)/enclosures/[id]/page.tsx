@@ -35,7 +35,10 @@ export default async function EnclosurePage({ params }: { params: Promise<{ id: 
         <Link href="/enclosures" className={link}>
           Enclosures
         </Link>
-        <span className="text-basalt-400"> / </span>
+        <span className="text-basalt-500" aria-hidden="true">
+          {' '}
+          /{' '}
+        </span>
         <span aria-current="page">{enclosure.name}</span>
       </nav>
       <PageHeader

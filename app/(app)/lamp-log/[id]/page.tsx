@@ -51,11 +51,17 @@ export default async function LampPage({ params }: { params: Promise<{ id: strin
         <Link href="/lamp-log" className={link}>
           Lamp log
         </Link>
-        <span className="text-basalt-400"> / </span>
+        <span className="text-basalt-500" aria-hidden="true">
+          {' '}
+          /{' '}
+        </span>
         <Link href={`/enclosures/${s.enclosure.id}/lamps`} className={link}>
           {s.enclosure.name}
         </Link>
-        <span className="text-basalt-400"> / </span>
+        <span className="text-basalt-500" aria-hidden="true">
+          {' '}
+          /{' '}
+        </span>
         <span aria-current="page">{s.label}</span>
       </nav>
       <PageHeader

@@ -55,11 +55,17 @@ export default async function EnclosureLampsPage({ params }: { params: Promise<{
         <Link href="/enclosures" className={link}>
           Enclosures
         </Link>
-        <span className="text-basalt-400"> / </span>
+        <span className="text-basalt-500" aria-hidden="true">
+          {' '}
+          /{' '}
+        </span>
         <Link href={`/enclosures/${enclosure.id}`} className={link}>
           {enclosure.name}
         </Link>
-        <span className="text-basalt-400"> / </span>
+        <span className="text-basalt-500" aria-hidden="true">
+          {' '}
+          /{' '}
+        </span>
         <span aria-current="page">Lamps</span>
       </nav>
       <PageHeader

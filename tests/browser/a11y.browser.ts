@@ -1,0 +1,197 @@
+// Accessibility of every page in Chromium: an axe scan (WCAG 2 A and AA rules) of each page signed out
+// and of every page of the app signed in as staff, with a screenshot of each. A table of what axe found
+// per page is printed at the end; each page is its own test and fails on any serious or critical
+// violation, naming the rule and the first elements concerned.
+import { readdirSync } from 'node:fs';
+import path from 'node:path';
+import AxeBuilder from '@axe-core/playwright';
+import type { Browser, BrowserContext, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO_SHOP, demoSignIn } from '@/lib/demo/scenario';
+import { launchBrowser, newContext, screenshot, signIn } from './harness';
+import { JOURNEY_MS, createDesign, createShare, enclosureIdByName, studioReady } from './journey-helpers';
+
+const ROOT = path.resolve(import.meta.dirname, '..', '..');
+const IMPACTS = ['critical', 'serious', 'moderate', 'minor'] as const;
+type Impact = (typeof IMPACTS)[number];
+type PageResult = { name: string; path: string; counts: Record<Impact, number>; blocking: string[] };
+
+/** Waits for a page to settle: its heading drawn, the network quiet (bounded: a worker may keep it busy). */
+async function settle(page: Page, path: string): Promise<void> {
+  await page.goto(path);
+  await page.locator('h1').first().waitFor({ timeout: 60_000 });
+  await page.waitForLoadState('networkidle', { timeout: 5_000 }).catch(() => undefined);
+}
+
+async function scan(page: Page, name: string, path: string): Promise<PageResult> {
+  const results = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa']).analyze();
+  const counts = { critical: 0, serious: 0, moderate: 0, minor: 0 };
+  const blocking: string[] = [];
+  for (const v of results.violations) {
+    const impact = (v.impact ?? 'minor') as Impact;
+    counts[impact] += v.nodes.length;
+    if (impact === 'critical' || impact === 'serious') {
+      const where = v.nodes
+        .slice(0, 3)
+        .map((n) => n.target.join(' '))
+        .join(' | ');
+      blocking.push(`${name} (${path}): ${impact} ${v.id} — ${v.help} [${v.nodes.length}×: ${where}]`);
+    }
+  }
+  await screenshot(page, `a11y-${name}`);
+  return { name, path, counts, blocking };
+}
+
+function report(title: string, rows: PageResult[]): void {
+  const w = Math.max(...rows.map((r) => r.name.length));
+  console.log(
+    [
+      `axe (wcag2a, wcag2aa) — ${title}: violations (affected elements) by impact`,
+      `  ${'page'.padEnd(w)}  critical serious moderate minor`,
+      ...rows.map(
+        (r) =>
+          `  ${r.name.padEnd(w)}  ${IMPACTS.map((i) => String(r.counts[i]).padStart(i.length)).join(' ')}`,
+      ),
+    ].join('\n'),
+  );
+}
+
+/** The ids the signed-in pages need, found the way a staff member would: through the app's own lists. */
+async function demoIds(page: Page) {
+  const keeper = DEMO_SHOP.people.find((p) => p.role === 'keeper')!;
+  const enclosureId = await enclosureIdByName(page, keeper.enclosures![0]!.name);
+  const suffix = Date.now().toString(36);
+  const one = await createDesign(page, enclosureId, `Accessibility check ${suffix}`);
+  const two = await createDesign(page, enclosureId, `Accessibility check B ${suffix}`);
+  const firstId = async (listPath: string, pattern: RegExp) => {
+    await page.goto(listPath);
+    const hrefs = await page
+      .locator('main a[href]')
+      .evaluateAll((as) => as.map((a) => a.getAttribute('href') ?? ''));
+    const id = hrefs.map((h) => pattern.exec(h)?.[1]).find(Boolean);
+    if (!id) throw new Error(`no link matching ${pattern} on ${listPath}`);
+    return Number(id);
+  };
+  return {
+    enclosureId,
+    designId: one.designId,
+    variantA: one.variantId,
+    variantB: two.variantId,
+    lampId: await firstId('/lamp-log', /^\/lamp-log\/(\d+)$/),
+    speciesId: await firstId('/species', /^\/species\/(\d+)$/),
+    lampTypeId: await firstId('/lamp-catalogue', /^\/lamp-catalogue\/(\d+)$/),
+  };
+}
+
+/** One page to scan: its route pattern (as the app folder names it), the address, who looks at it. */
+type Target = { name: string; route: string; path: () => string; signedIn: boolean; studio?: boolean };
+
+let ids: Awaited<ReturnType<typeof demoIds>> & { sharePath: string };
+const out = (name: string, route: string, path: () => string): Target => ({
+  name: `out-${name}`,
+  route,
+  path,
+  signedIn: false,
+});
+const staffSees = (name: string, route: string, path: () => string, studio = false): Target => ({
+  name,
+  route,
+  path,
+  signedIn: true,
+  studio,
+});
+const targets: Target[] = [
+  out('landing', '/', () => '/'),
+  out('sign-in', '/sign-in', () => '/sign-in'),
+  out('sign-up', '/sign-up', () => '/sign-up'),
+  out('share', '/s/[token]', () => ids.sharePath),
+  out('invite-unknown', '/invite/[token]', () => `/invite/${'x'.repeat(43)}`),
+  staffSees('enclosures', '/enclosures', () => '/enclosures'),
+  staffSees('guided-start', '/enclosures/new', () => '/enclosures/new'),
+  staffSees('enclosure', '/enclosures/[id]', () => `/enclosures/${ids.enclosureId}`),
+  staffSees('enclosure-lamps', '/enclosures/[id]/lamps', () => `/enclosures/${ids.enclosureId}/lamps`),
+  staffSees('design', '/designs/[id]', () => `/designs/${ids.designId}`),
+  staffSees('compare', '/compare', () => `/compare?a=${ids.variantA}&b=${ids.variantB}`),
+  staffSees('keepers', '/keepers', () => '/keepers'),
+  staffSees('members', '/members', () => '/members'),
+  staffSees('mail', '/mail', () => '/mail'),
+  staffSees('lamp-log', '/lamp-log', () => '/lamp-log'),
+  staffSees('lamp', '/lamp-log/[id]', () => `/lamp-log/${ids.lampId}`),
+  staffSees('lamp-catalogue', '/lamp-catalogue', () => '/lamp-catalogue'),
+  staffSees('lamp-type', '/lamp-catalogue/[id]', () => `/lamp-catalogue/${ids.lampTypeId}`),
+  staffSees('lamp-type-edit', '/lamp-catalogue/[id]/edit', () => `/lamp-catalogue/${ids.lampTypeId}/edit`),
+  staffSees('lamp-type-new', '/lamp-catalogue/new', () => '/lamp-catalogue/new'),
+  staffSees('species', '/species', () => '/species'),
+  staffSees('species-sheet', '/species/[id]', () => `/species/${ids.speciesId}`),
+  staffSees('species-edit', '/species/[id]/edit', () => `/species/${ids.speciesId}/edit`),
+  staffSees('species-new', '/species/new', () => '/species/new'),
+  staffSees('account', '/account', () => '/account'),
+  staffSees('not-found', '/enclosures/[id]', () => '/enclosures/999999999'),
+  staffSees('studio', '/studio/[variantId]', () => `/studio/${ids.variantA}`, true),
+  staffSees('studio-scratch', '/studio-scratch', () => '/studio-scratch', true),
+];
+
+describe('accessibility (axe): no serious or critical violation', () => {
+  let browser: Browser;
+  let staffContext: BrowserContext;
+  let visitorContext: BrowserContext;
+  let staffPage: Page;
+  let visitorPage: Page;
+  const results: PageResult[] = [];
+
+  beforeAll(async () => {
+    browser = await launchBrowser();
+    staffContext = await newContext(browser);
+    visitorContext = await newContext(browser);
+    staffPage = await staffContext.newPage();
+    visitorPage = await visitorContext.newPage();
+    for (const p of [staffPage, visitorPage]) p.setDefaultTimeout(60_000);
+    const staff = demoSignIn('staff');
+    await signIn(staffPage, staff.email, staff.password);
+    const found = await demoIds(staffPage);
+    ids = { ...found, sharePath: await createShare(staffPage, found.variantA) };
+  }, JOURNEY_MS);
+
+  afterAll(async () => {
+    report(
+      'signed out',
+      results.filter((r) => r.name.startsWith('out-')),
+    );
+    report(
+      'signed in as staff',
+      results.filter((r) => !r.name.startsWith('out-')),
+    );
+    await browser?.close();
+  });
+
+  it('scans a page of every route of the app', () => {
+    // A route's pattern from its page file: route groups dropped, dynamic segments kept as [name].
+    const routes = readdirSync(path.join(ROOT, 'app'), { recursive: true, encoding: 'utf8' })
+      .filter((f) => f.endsWith('page.tsx'))
+      .map(
+        (f) =>
+          `/${f
+            .split(path.sep)
+            .slice(0, -1)
+            .filter((seg) => !/^\(.*\)$/.test(seg))
+            .join('/')}`.replace(/\/$/, '') || '/',
+      )
+      .sort();
+    const scanned = new Set(targets.map((t) => t.route));
+    expect(routes.filter((r) => !scanned.has(r))).toEqual([]);
+  });
+
+  it.each(targets)('$name', async (t) => {
+    const page = t.signedIn ? staffPage : visitorPage;
+    const path = t.path();
+    if (t.studio) {
+      await page.goto(path);
+      await studioReady(page);
+    } else {
+      await settle(page, path);
+    }
+    const r = await scan(page, t.name, path);
+    results.push(r);
+    expect(r.blocking, r.blocking.join('\n')).toEqual([]);
+  });
+});
