@@ -1,9 +1,11 @@
 import type { NextConfig } from 'next';
 
 /**
- * Sent with every response (pages, API routes, static files). Only what cannot break the app: a full
- * nonce-based Content-Security-Policy (script-src, style-src) is a later step; for now the CSP carries
- * frame-ancestors alone, the modern twin of X-Frame-Options.
+ * Sent with every response (pages, API routes, static files). Pages get their full, nonce-based
+ * Content-Security-Policy from proxy.ts (a fresh nonce per request cannot live in a static config), which
+ * replaces the baseline below; API replies and static files keep the baseline's frame-ancestors, the
+ * modern twin of X-Frame-Options (a worker script's own policy comes from its response, so static files
+ * must not carry a stricter one).
  */
 const SECURITY_HEADERS = [
   { key: 'X-Content-Type-Options', value: 'nosniff' },

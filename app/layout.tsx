@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import localFont from 'next/font/local';
+import { connection } from 'next/server';
 import type { ReactNode } from 'react';
 import { SafetyNote } from '@/components/shell/SafetyNote';
 import './globals.css';
@@ -17,7 +18,10 @@ export const metadata: Metadata = {
     'Plan the light and heat of reptile and amphibian enclosures, check them against the species, and plan lamp replacements from meter readings.',
 };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  // Every page renders per request: its scripts must carry this request's CSP nonce (proxy.ts), which a
+  // page prerendered at build time cannot know.
+  await connection();
   return (
     <html lang="en" className={inter.variable}>
       <body className="flex min-h-screen flex-col">

@@ -1,7 +1,8 @@
-// The security headers of next.config.ts on the running production server: a page, the sign-in page,
-// an API route of ours (answering 401 and 200), next-auth's own route and a static file.
+// The security headers on the running production server: a page, the sign-in page, an API route of ours
+// (answering 401 and 200), next-auth's own route and a static file carry next.config.ts's set; pages
+// carry proxy.ts's full nonce-based policy as their one Content-Security-Policy.
 import { describe, expect, it } from 'vitest';
-import { EXPECTED_HEADERS } from '../security/expected-headers';
+import { EXPECTED_HEADERS, PAGE_CSP_DIRECTIVES, parsePolicy } from '../security/expected-headers';
 import { BASE_URL } from './harness';
 
 const PATHS: [path: string, status: number][] = [
@@ -13,6 +14,8 @@ const PATHS: [path: string, status: number][] = [
   ['/icon.svg', 200],
 ];
 
+const PAGES = ['/', '/sign-in'];
+
 describe('security headers on the running app', () => {
   for (const [path, status] of PATHS) {
     it(`${path} carries every security header`, async () => {
@@ -23,6 +26,11 @@ describe('security headers on the running app', () => {
         expect(res.headers.get(name), `${path}: ${name}`).toMatch(pattern);
       }
       expect(res.headers.get('x-powered-by')).toBeNull();
+      if (PAGES.includes(path)) {
+        const { directives, nonce } = parsePolicy(res.headers.get('content-security-policy') ?? '');
+        expect(directives).toEqual(PAGE_CSP_DIRECTIVES);
+        expect(nonce).toBeTruthy();
+      }
     });
   }
 });

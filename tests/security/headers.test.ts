@@ -1,8 +1,12 @@
-// The security headers every response carries come from next.config.ts headers(): checked here without
-// building anything; tests/browser/headers.browser.ts checks them on the running server.
+// The security headers, checked without building anything: next.config.ts headers() for every response,
+// and proxy.ts's nonce-based Content-Security-Policy for pages. tests/browser/headers.browser.ts and
+// csp.browser.ts check them on the running production server.
+import { NextRequest } from 'next/server';
 import { describe, expect, it } from 'vitest';
+import { contentSecurityPolicy, makeNonce } from '@/lib/security/csp';
 import config from '@/next.config';
-import { EXPECTED_HEADERS } from './expected-headers';
+import { config as proxyConfig, proxy } from '@/proxy';
+import { EXPECTED_HEADERS, PAGE_CSP_DIRECTIVES, parsePolicy } from './expected-headers';
 
 describe('next.config.ts headers()', () => {
   it('sends every security header on every path', async () => {
@@ -25,5 +29,50 @@ describe('next.config.ts headers()', () => {
         if (pattern) expect(h.value, `${rule.source}: ${h.key}`).toMatch(pattern);
       }
     }
+  });
+});
+
+describe('the page Content-Security-Policy (proxy.ts)', () => {
+  it('has exactly the intended directives, nonce-based, with no unsafe script source', () => {
+    const { directives, nonce } = parsePolicy(contentSecurityPolicy({ nonce: 'abc123==' }));
+    expect(nonce).toBe('abc123==');
+    expect(directives).toEqual(PAGE_CSP_DIRECTIVES);
+  });
+
+  it('adds eval to scripts only in development (React rebuilds error stacks with it)', () => {
+    const dev = parsePolicy(contentSecurityPolicy({ nonce: 'n', dev: true })).directives;
+    expect(dev['script-src']).toContain("'unsafe-eval'");
+    expect(parsePolicy(contentSecurityPolicy({ nonce: 'n' })).directives['script-src']).not.toContain(
+      'unsafe',
+    );
+  });
+
+  it('makes a fresh, unguessable nonce every time', () => {
+    const nonces = new Set(Array.from({ length: 200 }, makeNonce));
+    expect(nonces.size).toBe(200);
+    for (const n of nonces) expect(Buffer.from(n, 'base64')).toHaveLength(16);
+  });
+
+  it('sends the policy on the response and hands it to Next on the request (which reads the nonce)', () => {
+    const res = proxy(new NextRequest('http://localhost:3000/enclosures'));
+    const sent = res.headers.get('content-security-policy');
+    const { directives, nonce } = parsePolicy(sent ?? '');
+    expect(directives).toEqual(PAGE_CSP_DIRECTIVES);
+    expect(nonce).toBeTruthy();
+    // NextResponse.next({ request: { headers } }) passes overridden request headers this way.
+    expect(res.headers.get('x-middleware-request-content-security-policy')).toBe(sent);
+    const again = proxy(new NextRequest('http://localhost:3000/enclosures')).headers.get(
+      'content-security-policy',
+    );
+    expect(parsePolicy(again ?? '').nonce).not.toBe(nonce);
+  });
+
+  it('runs on pages, not on API routes or static files', () => {
+    const source = proxyConfig.matcher[0]!.source;
+    const matches = (path: string) => new RegExp(`^${source}$`).test(path);
+    for (const page of ['/', '/sign-in', '/studio/12', '/s/abc', '/enclosures/3/lamps'])
+      expect(matches(page), page).toBe(true);
+    for (const other of ['/api/health', '/_next/static/chunks/a.js', '/favicon.ico', '/icon.svg'])
+      expect(matches(other), other).toBe(false);
   });
 });
