@@ -25,10 +25,38 @@ export interface LegendEntry {
   label: string;
 }
 
-function fmt(field: FieldView, v: number, temp: TempUnit): string {
-  if (field === 'tempC') return formatNumber(cToDisplay(v, temp), 0);
-  if (field === 'uvi') return formatNumber(v, 1);
-  return formatNumber(v, v < 10 ? 1 : 0);
+function display(field: FieldView, v: number, temp: TempUnit): number {
+  return field === 'tempC' ? cToDisplay(v, temp) : v;
+}
+
+/** The field's usual decimals for a value (whole degrees, UVI to 0.1, small UVB to 0.1). */
+function baseDecimals(field: FieldView, v: number): number {
+  if (field === 'tempC') return 0;
+  if (field === 'uvi') return 1;
+  return v < 10 ? 1 : 0;
+}
+
+/**
+ * Enough decimals that neighbouring thresholds never print alike: a weak heat lamp spreads only a
+ * degree or two over many bands, and "25 – 25" would read as a broken legend.
+ */
+export function legendDecimals(field: FieldView, thresholds: readonly number[], temp: TempUnit): number {
+  let decimals = 0;
+  for (let i = 0; i < thresholds.length; i++) {
+    const v = display(field, thresholds[i]!, temp);
+    let d = baseDecimals(field, Math.abs(v));
+    if (i > 0) {
+      const prev = display(field, thresholds[i - 1]!, temp);
+      while (d < 3 && formatNumber(prev, d) === formatNumber(v, d)) d++;
+    }
+    decimals = Math.max(decimals, d);
+  }
+  return decimals;
+}
+
+function fmt(field: FieldView, v: number, temp: TempUnit, decimals: number): string {
+  const x = display(field, v, temp);
+  return formatNumber(x, Math.max(decimals, baseDecimals(field, Math.abs(x))));
 }
 
 /**
@@ -38,12 +66,15 @@ function fmt(field: FieldView, v: number, temp: TempUnit): string {
 export function legendFor(field: FieldView, thresholds: readonly number[], temp: TempUnit): LegendEntry[] {
   const n = thresholds.length;
   const colors = bandColors(FIELD_RAMP[field], n);
+  const decimals = legendDecimals(field, thresholds, temp);
   const out: LegendEntry[] = [];
   for (let i = 0; i < n; i++) {
     const lo = thresholds[i] as number;
     const hi = i + 1 < n ? (thresholds[i + 1] as number) : Infinity;
     const label =
-      hi === Infinity ? `≥ ${fmt(field, lo, temp)}` : `${fmt(field, lo, temp)} – ${fmt(field, hi, temp)}`;
+      hi === Infinity
+        ? `≥ ${fmt(field, lo, temp, decimals)}`
+        : `${fmt(field, lo, temp, decimals)} – ${fmt(field, hi, temp, decimals)}`;
     out.push({ lo, hi, color: colors[i] as string, label });
   }
   return out;

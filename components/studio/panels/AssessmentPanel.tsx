@@ -7,7 +7,7 @@ import type { SimView } from '../fields/simTypes';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
 import type { StudioSpecies } from '../state/types';
 import { focusRing } from './CommandButton';
-import { formatFindingNumber, localiseFindingText, unmetText } from './findingFormat';
+import { findingNumberLines, localiseFindingText, unmetText } from './findingFormat';
 import { Section, SelectField } from './FormFields';
 import { useUnits } from './useObjectEdit';
 
@@ -36,7 +36,7 @@ function FindingItem({ f }: { f: Finding }) {
   const highlight = useStudio(store, (s) => s.session.highlight);
   const units = useUnits();
   const on = highlight === f.id;
-  const numbers = Object.entries(f.numbers).map(([k, v]) => formatFindingNumber(k, v, units, f.id));
+  const numbers = findingNumberLines(f.id, f.numbers, units);
   const body = (
     <>
       <span className="flex items-start justify-between gap-2">

@@ -1,7 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { assess } from '@/simulation';
 import { exampleDesign } from '../examples/exampleDesign';
-import { formatFindingNumber, humanKey, localiseFindingText, unmetText } from './findingFormat';
+import {
+  findingNumberLines,
+  formatFindingNumber,
+  humanKey,
+  localiseFindingText,
+  unmetText,
+} from './findingFormat';
 
 const metric = { length: 'cm' as const, temp: 'C' as const };
 const imperial = { length: 'in' as const, temp: 'F' as const };
@@ -24,7 +30,11 @@ describe('finding numbers', () => {
       value: '10 in',
     });
     expect(formatFindingNumber('closestCm', 15, imperial).value).toBe('5.91 in');
-    expect(formatFindingNumber('maxUvi', 3.456, metric)).toEqual({ label: 'Max UVI', value: '3.46' });
+    expect(formatFindingNumber('maxUvi', 3.456, metric)).toEqual({
+      label: 'Highest UVI reached',
+      value: '3.46',
+    });
+    expect(formatFindingNumber('peakUvi', 3.456, metric)).toEqual({ label: 'Peak UVI', value: '3.46' });
     expect(formatFindingNumber('baskingUw', 80.2, metric).value).toBe('80 µW/cm²');
     expect(formatFindingNumber('maxUvb', 80.2, imperial).value).toBe('80 µW/cm²');
   });
@@ -36,6 +46,20 @@ describe('finding numbers', () => {
     });
     expect(formatFindingNumber('targetHi', 28, metric, 'cool-end').value).toBe('28 °C');
     expect(formatFindingNumber('targetHi', 120, imperial, 'basking-uvb').value).toBe('120 µW/cm²');
+  });
+
+  it('joins lower and upper bounds into one range line', () => {
+    expect(findingNumberLines('hot-spot', { hotC: 43.8, targetLo: 40, targetHi: 45 }, imperial)).toEqual([
+      { label: 'Hottest reachable surface', value: '110.8 °F' },
+      { label: 'Target on the species sheet', value: '104–113 °F' },
+    ]);
+    expect(
+      findingNumberLines('basking-uvi', { maxUvi: 1.45, zone: 4, zoneMaxLo: 4.5, zoneMaxHi: 9.5 }, metric),
+    ).toEqual([
+      { label: 'Highest UVI reached', value: '1.45' },
+      { label: 'UV zone of the species', value: '4' },
+      { label: 'Zone range of the basking UVI', value: '4.5–9.5' },
+    ]);
   });
 
   it('states when the need stops being met', () => {

@@ -28,6 +28,26 @@ export function humanKey(key: string): string {
   return s.charAt(0).toUpperCase() + s.slice(1);
 }
 
+/** Plain names for the engine's keys (simulation/assess); other keys are named from the key itself. */
+const KEY_LABELS: Record<string, string> = {
+  hotC: 'Hottest reachable surface',
+  coolC: 'Coolest reachable surface',
+  roomC: 'Room temperature',
+  nightMinC: 'Night minimum on the sheet',
+  maxUvi: 'Highest UVI reached',
+  meanUvi: 'Mean UVI on the basking surface',
+  reachableMeanUvi: 'Mean UVI over reachable surfaces',
+  maxUvb: 'UVB at the basking spot',
+  zone: 'UV zone of the species',
+  refugeCm: 'Reachable surface in UV-free shade',
+  refugeShare: 'Share of reachable surface in UV-free shade',
+  thresholdUvi: 'UV-free below UVI',
+  reachCm: 'Out-of-reach distance',
+  eyeCm: 'Eye-safety distance',
+  closestCm: 'Closest unguarded distance',
+  lamps: 'Lamps concerned',
+};
+
 const temp = (c: number, u: FindingUnits) => `${formatNumber(cToDisplay(c, u.temp), 1)} ${tempLabel(u.temp)}`;
 const length = (cm: number, u: FindingUnits) =>
   `${formatNumber(cmToDisplay(cm, u.length), u.length === 'cm' ? 1 : 2)} ${lengthLabel(u.length)}`;
@@ -44,6 +64,16 @@ function targetKind(findingId: string | undefined): 'temp' | 'uvb' | 'plain' {
  * the sheet's target bounds, by the finding it belongs to.
  */
 export function formatFindingNumber(
+  key: string,
+  v: number,
+  u: FindingUnits,
+  findingId?: string,
+): { label: string; value: string } {
+  const f = formatByKey(key, v, u, findingId);
+  return { label: KEY_LABELS[key] ?? f.label, value: f.value };
+}
+
+function formatByKey(
   key: string,
   v: number,
   u: FindingUnits,
@@ -68,6 +98,40 @@ export function formatFindingNumber(
     return { label: humanKey(key.replace(/Months$/, '')), value: `${formatNumber(v, 0)} months` };
   if (/Fraction$|Share$/.test(key)) return { label: humanKey(key), value: `${formatNumber(v * 100, 0)} %` };
   return { label: humanKey(key), value: formatNumber(v, 2) };
+}
+
+/** Range pairs the engine sends as `…Lo` / `…Hi`, shown as one line ("40–45 °F"). */
+const PAIR_LABELS: Record<string, string> = {
+  target: 'Target on the species sheet',
+  zoneMax: 'Zone range of the basking UVI',
+  zoneMean: 'Zone range of the mean UVI',
+};
+
+/** The numbers behind a finding as labelled lines in the user's units, `…Lo`/`…Hi` pairs joined. */
+export function findingNumberLines(
+  findingId: string,
+  numbers: Record<string, number>,
+  u: FindingUnits,
+): { label: string; value: string }[] {
+  const out: { label: string; value: string }[] = [];
+  const used = new Set<string>();
+  for (const [key, v] of Object.entries(numbers)) {
+    if (used.has(key)) continue;
+    const prefix = /^(.*)Lo$/.exec(key)?.[1];
+    const hi = prefix !== undefined ? numbers[`${prefix}Hi`] : undefined;
+    if (prefix !== undefined && hi !== undefined) {
+      used.add(`${prefix}Hi`);
+      const a = formatFindingNumber(key, v, u, findingId).value;
+      const b = formatFindingNumber(`${prefix}Hi`, hi, u, findingId).value;
+      // "40 °F" and "45 °F" → "40–45 °F": the unit once, after the range.
+      const unit = / (.+)$/.exec(b)?.[1];
+      const from = unit && a.endsWith(` ${unit}`) ? a.slice(0, -unit.length - 1) : a;
+      out.push({ label: PAIR_LABELS[prefix] ?? `${humanKey(prefix)} range`, value: `${from}–${b}` });
+      continue;
+    }
+    out.push(formatFindingNumber(key, v, u, findingId));
+  }
+  return out;
 }
 
 const NUM = String.raw`(-?\d+(?:\.\d+)?)`;
