@@ -65,7 +65,12 @@ export default async function LandingPage() {
               <Link href="/sign-up" className={button.primary}>
                 Start an organisation
               </Link>
-              <Link href="/studio-scratch" className={button.secondary} data-testid="try-studio">
+              <Link
+                href="/studio-scratch"
+                prefetch={false}
+                className={button.secondary}
+                data-testid="try-studio"
+              >
                 Try the studio — no account
               </Link>
             </div>

@@ -3,19 +3,12 @@
 // the save. Every wait is for a state of the page, never a fixed sleep.
 import type { Page } from 'playwright-core';
 import { expect } from 'vitest';
+import { pagePoint, probeUvi, studioReady } from './journey-helpers';
 
-type Camera = { zoom: number; originX: number; originY: number };
+export { probeUvi, studioReady };
 
 /** How long a poll waits for the page to catch up (the engine, a save, a navigation) on a busy machine. */
 export const eventually = { timeout: 60_000, interval: 100 };
-
-/** Waits for the canvas and the first computed fields of the studio already navigated to. */
-export async function studioReady(page: Page) {
-  await page.waitForSelector('[data-testid=studio-canvas] canvas', { timeout: 90_000 });
-  await page.waitForFunction(() => (window.__baskwellStudio?.roundTrips.length ?? 0) > 0, null, {
-    timeout: 90_000,
-  });
-}
 
 /** Opens the studio at `path` and waits until it has drawn and computed. */
 export async function openStudio(page: Page, path: string) {
@@ -24,11 +17,7 @@ export async function openStudio(page: Page, path: string) {
 }
 
 /** Page coordinates of a design point (cm, y up), from the studio's camera. */
-export async function at(page: Page, x: number, y: number): Promise<{ x: number; y: number }> {
-  const cam = await page.evaluate(() => window.__baskwellStudio!.camera!() as Camera);
-  const box = (await page.getByTestId('studio-canvas').boundingBox())!;
-  return { x: box.x + cam.originX + x * cam.zoom, y: box.y + cam.originY - y * cam.zoom };
-}
+export const at = pagePoint;
 
 export async function click(page: Page, x: number, y: number, modifiers: 'Shift'[] = []) {
   const p = await at(page, x, y);
@@ -71,16 +60,6 @@ export async function setField(page: Page, testId: string, value: number) {
 /** The engine has answered for the current design (no request in flight). */
 export async function fieldsSettled(page: Page) {
   await expect.poll(() => page.getByTestId('worker-ms').textContent(), eventually).toMatch(/^Fields \d+ ms$/);
-}
-
-/** The engine's UV Index at a pinned probe, once the answer for the current design is in. */
-export async function probeUvi(page: Page, probeId: string): Promise<number> {
-  const reading = page.getByTestId(`probe-reading-${probeId}`);
-  await expect.poll(() => reading.textContent(), eventually).toMatch(/^UVI /);
-  await fieldsSettled(page);
-  const m = /UVI (-?\d+(?:\.\d+)?)/.exec((await reading.textContent()) ?? '');
-  if (!m) throw new Error('no UVI in the probe reading');
-  return Number(m[1]);
 }
 
 export async function waitSaved(page: Page) {

@@ -9,6 +9,7 @@ import { exampleDesign } from '@/components/studio/examples/exampleDesign';
 import { displayShortcut } from '@/components/studio/commands/shortcuts';
 import { demoSignIn } from '@/lib/demo/scenario';
 import { screenshot, signIn, withBrowser } from './harness';
+import { enclosureIdByName, readVariant } from './journey-helpers';
 import {
   click,
   eventually,
@@ -160,10 +161,7 @@ describe('studio on a stored variant (signed in)', () => {
     page.setDefaultTimeout(60_000);
     const staff = demoSignIn('staff');
     await signIn(page, staff.email, staff.password);
-    await page.goto('/enclosures');
-    const href = await page.getByRole('link', { name: 'Desert vivarium' }).getAttribute('href');
-    const enclosureId = Number(/\/enclosures\/(\d+)/.exec(href ?? '')?.[1]);
-    expect(enclosureId).toBeGreaterThan(0);
+    const enclosureId = await enclosureIdByName(page, 'Desert vivarium');
 
     // A design whose tube was calibrated in the lamp log (the note the lamp log writes).
     const example = exampleDesign();
@@ -209,6 +207,19 @@ describe('studio on a stored variant (signed in)', () => {
     await keys(page, 'Control+Z');
     await mark.waitFor({ state: 'visible' });
     await waitSaved(page);
+
+    // Offline: the change is kept and shown as such, then saved when the network is back.
+    await session.context().setOffline(true);
+    await keys(page, 'ArrowRight');
+    await expect
+      .poll(() => page.getByTestId('save-state').getAttribute('data-state'), eventually)
+      .toBe('offline');
+    expect(await page.getByTestId('save-state').textContent()).toMatch(/kept on this device/);
+    await screenshot(page, 'studio-variant-offline');
+    await session.context().setOffline(false);
+    await waitSaved(page);
+    const afterOffline = await readVariant(page, variantId);
+    expect(afterOffline.variant!.design.objects.find((o) => o.id === 'uv1')).toMatchObject({ x: 62 });
 
     // Someone else saves this variant (another tab, another person): the next save gets 409.
     const theirs = await page.evaluate(async (id) => {
