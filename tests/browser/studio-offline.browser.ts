@@ -6,6 +6,7 @@ import type { Page, Route } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { DEMO_PASSWORDS, demoSignIn } from '@/lib/demo/scenario';
 import { screenshot, signIn, withBrowser } from './harness';
+import { enclosureIdByName } from './journey-helpers';
 
 const session = withBrowser();
 
@@ -42,10 +43,8 @@ describe('design studio while the server is down', () => {
     const page = session.page();
     const who = demoSignIn('staff');
     await signIn(page, who.email, DEMO_PASSWORDS.staff);
-    await page.goto('/enclosures');
-    const href = await page.locator('a[href^="/enclosures/"]').first().getAttribute('href');
-    const enclosureId = Number(/\/enclosures\/(\d+)/.exec(href ?? '')?.[1]);
-    expect(enclosureId).toBeGreaterThan(0);
+    // By name: the first link under /enclosures/ may be "/enclosures/new".
+    const enclosureId = await enclosureIdByName(page, 'Desert vivarium');
     const variantId = await page.evaluate(async (id) => {
       const res = await fetch(`/api/enclosures/${id}/designs`, {
         method: 'POST',
