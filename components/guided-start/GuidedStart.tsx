@@ -4,14 +4,12 @@ import { useRouter } from 'next/navigation';
 import { useState, useTransition, type FormEvent } from 'react';
 import { CautionList } from '@/components/cautions/CautionList';
 import { FindingList } from '@/components/cautions/FindingList';
-import { TempToggle } from '@/components/species/TempToggle';
-import { useTempUnit } from '@/components/species/temp-unit';
 import { cToDisplay, displayToC, formatNumber } from '@/components/studio/geometry/units';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
 import { button, card, input } from '@/components/ui/styles';
 import { UnitToggle } from '@/components/ui/UnitToggle';
-import { fromCm, toCm, useLengthUnit, type LengthUnit } from '@/components/ui/units';
+import { fromCm, toCm, useLengthUnit, useTempUnit, type LengthUnit } from '@/components/ui/units';
 import type { ProposalView } from '@/lib/guided-start/service';
 import type { ActionResult } from '@/app/(app)/enclosures/new/actions';
 import { ProposalSketch } from './ProposalSketch';
@@ -231,7 +229,7 @@ export function GuidedStart(props: {
               error={fieldError('roomTempC')}
               hint="The room the enclosure stands in, by day."
             />
-            <TempToggle />
+            <UnitToggle quantity="temperature" />
           </div>
         </div>
         {props.people && (

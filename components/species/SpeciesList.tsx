@@ -6,8 +6,8 @@ import { input, link } from '@/components/ui/styles';
 import type { SpeciesSheetDto } from '@/lib/species/schema';
 import { formatRange, formatTempRange } from './format';
 import { ProvenanceBadge } from './ProvenanceNote';
-import { TempToggle } from './TempToggle';
-import { useTempUnit } from './temp-unit';
+import { UnitToggle } from '@/components/ui/UnitToggle';
+import { useTempUnit } from '@/components/ui/units';
 
 /** The organisation's species sheets: search by either name, temperatures in the chosen unit. */
 export function SpeciesList({ sheets }: { sheets: SpeciesSheetDto[] }) {
@@ -35,7 +35,7 @@ export function SpeciesList({ sheets }: { sheets: SpeciesSheetDto[] }) {
             onChange={(e) => setQ(e.target.value)}
           />
         </div>
-        <TempToggle />
+        <UnitToggle quantity="temperature" />
       </div>
       {shown.length === 0 ? (
         <p className="rounded-md border border-dashed border-basalt-300 px-4 py-6 text-center text-body text-basalt-600">

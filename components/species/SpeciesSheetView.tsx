@@ -6,8 +6,8 @@ import { targetWarning } from '@/lib/species/consistency';
 import { FIELD_LABELS, SHEET_FIELDS, type SheetField, type SpeciesSheetDto } from '@/lib/species/schema';
 import { UV_ZONES, type UvZone } from '@/simulation/assess/zones';
 import { formatRange, formatTempRange, formatTempValue, zoneHabit } from './format';
-import { TempToggle } from './TempToggle';
-import { useTempUnit } from './temp-unit';
+import { UnitToggle } from '@/components/ui/UnitToggle';
+import { useTempUnit } from '@/components/ui/units';
 
 /** One species sheet, every figure with the number of the source it comes from. */
 export function SpeciesSheetView({ sheet }: { sheet: SpeciesSheetDto }) {
@@ -35,7 +35,7 @@ export function SpeciesSheetView({ sheet }: { sheet: SpeciesSheetDto }) {
           <h2 id="needs-heading" className="text-lead font-semibold text-basalt-900">
             Light and heat
           </h2>
-          <TempToggle />
+          <UnitToggle quantity="temperature" />
         </div>
         <dl className="divide-y divide-basalt-100">
           {SHEET_FIELDS.map((f) => {

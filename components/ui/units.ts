@@ -1,10 +1,11 @@
 'use client';
 
 import { useCallback, useSyncExternalStore } from 'react';
+import type { TempUnit } from '@/components/studio/geometry/units';
 
 /** Lengths are stored in centimetres; people may read them in inches. The choice is kept per browser. */
 export type LengthUnit = 'cm' | 'in';
-const KEY = 'baskwell.lengthUnit';
+export type { TempUnit };
 const CM_PER_IN = 2.54;
 
 export function formatLength(cm: number, unit: LengthUnit): string {
@@ -19,22 +20,36 @@ export function formatSize(w: number, h: number, d: number, unit: LengthUnit): s
 export const toCm = (value: number, unit: LengthUnit) => (unit === 'cm' ? value : value * CM_PER_IN);
 export const fromCm = (cm: number, unit: LengthUnit) => (unit === 'cm' ? cm : cm / CM_PER_IN);
 
-const listeners = new Set<() => void>();
-function subscribe(fn: () => void) {
-  listeners.add(fn);
-  window.addEventListener('storage', fn);
-  return () => {
-    listeners.delete(fn);
-    window.removeEventListener('storage', fn);
+/**
+ * A unit choice kept per browser (localStorage) and shared live by every component on the page and by
+ * other tabs (the storage event). One store a key, so a toggle in the header updates every table.
+ */
+function storedChoice<T extends string>(key: string, values: readonly [T, T]) {
+  const [fallback, other] = values;
+  const listeners = new Set<() => void>();
+  const subscribe = (fn: () => void) => {
+    listeners.add(fn);
+    window.addEventListener('storage', fn);
+    return () => {
+      listeners.delete(fn);
+      window.removeEventListener('storage', fn);
+    };
+  };
+  const read = (): T => (window.localStorage.getItem(key) === other ? other : fallback);
+  return function useChoice(): [T, (value: T) => void] {
+    const value = useSyncExternalStore(subscribe, read, () => fallback);
+    const set = useCallback((v: T) => {
+      window.localStorage.setItem(key, v);
+      listeners.forEach((l) => l());
+    }, []);
+    return [value, set];
   };
 }
-const read = (): LengthUnit => (window.localStorage.getItem(KEY) === 'in' ? 'in' : 'cm');
 
-export function useLengthUnit(): [LengthUnit, (u: LengthUnit) => void] {
-  const unit = useSyncExternalStore(subscribe, read, () => 'cm' as LengthUnit);
-  const set = useCallback((u: LengthUnit) => {
-    window.localStorage.setItem(KEY, u);
-    listeners.forEach((l) => l());
-  }, []);
-  return [unit, set];
-}
+export const LENGTH_UNITS = ['cm', 'in'] as const satisfies readonly [LengthUnit, LengthUnit];
+export const TEMP_UNITS = ['C', 'F'] as const satisfies readonly [TempUnit, TempUnit];
+
+/** Centimetres (default) or inches for every size on the page. */
+export const useLengthUnit = storedChoice<LengthUnit>('baskwell.lengthUnit', LENGTH_UNITS);
+/** °C (default) or °F for every temperature on the species, catalogue and guided-start pages. */
+export const useTempUnit = storedChoice<TempUnit>('baskwell.tempUnit', TEMP_UNITS);
