@@ -1,13 +1,13 @@
 'use client';
 
-import { useRouter } from 'next/navigation';
-import { useEffect, useState, type FormEvent } from 'react';
-import { ApiClientError, sendJson } from '@/components/ui/api-client';
+import { useState, type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
+import { FormActions } from '@/components/ui/FormActions';
 import { Notice } from '@/components/ui/Notice';
 import { button, card, input } from '@/components/ui/styles';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { useLengthUnit } from '@/components/ui/units';
+import { useEntryForm } from '@/components/ui/useEntryForm';
 import {
   LAMP_FIELD_LABELS,
   lampTypeInputSchema,
@@ -47,56 +47,28 @@ export function LampTypeForm({
   organisationId: number;
   lampType: LampTypeDto | null;
 }) {
-  const router = useRouter();
   const [unit] = useLengthUnit();
   const [st, setSt] = useState<LampFormState>(() => initialLampState(lampType, unit));
-  const [errors, setErrors] = useState<Record<string, string>>({});
-  const [general, setGeneral] = useState<string | null>(null);
-  const [saving, setSaving] = useState(false);
-  const [dirty, setDirty] = useState(false);
+  const form = useEntryForm<unknown, LampTypeDto>({
+    schema: lampTypeInputSchema,
+    createPath: '/api/lamp-types',
+    createExtra: { organisationId },
+    updatePath: lampType ? `/api/lamp-types/${lampType.id}` : null,
+    savedHref: (saved) => `/lamp-catalogue/${saved.id}`,
+    failure: 'The lamp type could not be saved. Try again.',
+  });
+  const { errors, general, saving } = form;
 
   if (st.lengthUnit !== unit) setSt(withLengthUnit(st, unit));
 
-  useEffect(() => {
-    if (!dirty) return;
-    const warn = (e: BeforeUnloadEvent) => e.preventDefault();
-    window.addEventListener('beforeunload', warn);
-    return () => window.removeEventListener('beforeunload', warn);
-  }, [dirty]);
-
   const update = (patch: Partial<LampFormState>) => {
     setSt((s) => ({ ...s, ...patch }));
-    setDirty(true);
+    form.markDirty();
   };
 
-  async function submit(e: FormEvent) {
+  function submit(e: FormEvent) {
     e.preventDefault();
-    const parsed = lampTypeInputSchema.safeParse({
-      ...lampPayload(st),
-      decayPoints: lampType?.decayPoints ?? null,
-    });
-    if (!parsed.success) {
-      const next: Record<string, string> = {};
-      for (const i of parsed.error.issues) next[i.path.join('.')] ??= i.message;
-      setErrors(next);
-      setGeneral('Some fields need attention: see the messages beside them.');
-      return;
-    }
-    setErrors({});
-    setGeneral(null);
-    setSaving(true);
-    try {
-      const saved = lampType
-        ? await sendJson<LampTypeDto>('PATCH', `/api/lamp-types/${lampType.id}`, parsed.data)
-        : await sendJson<LampTypeDto>('POST', '/api/lamp-types', { organisationId, ...parsed.data });
-      setDirty(false);
-      router.push(`/lamp-catalogue/${saved.id}`);
-      router.refresh();
-    } catch (err) {
-      if (err instanceof ApiClientError && err.field) setErrors({ [err.field]: err.message });
-      setGeneral(err instanceof Error ? err.message : 'The lamp type could not be saved. Try again.');
-      setSaving(false);
-    }
+    void form.save({ ...lampPayload(st), decayPoints: lampType?.decayPoints ?? null });
   }
 
   return (
@@ -220,14 +192,11 @@ export function LampTypeForm({
         </div>
       </fieldset>
 
-      <div className="flex flex-wrap gap-2">
-        <button type="submit" className={button.primary} disabled={saving}>
-          {saving ? 'Saving…' : lampType ? 'Save changes' : 'Add lamp type'}
-        </button>
-        <button type="button" className={button.secondary} onClick={() => router.back()} disabled={saving}>
-          Cancel
-        </button>
-      </div>
+      <FormActions
+        saving={saving}
+        submitLabel={lampType ? 'Save changes' : 'Add lamp type'}
+        onCancel={form.cancel}
+      />
     </form>
   );
 }

@@ -1,21 +1,19 @@
 'use client';
 
-import { useRouter } from 'next/navigation';
-import { useEffect, useState, type FormEvent } from 'react';
-import { ApiClientError, sendJson } from '@/components/ui/api-client';
+import { useState, type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
+import { FormActions } from '@/components/ui/FormActions';
 import { Notice } from '@/components/ui/Notice';
-import { button, card, input } from '@/components/ui/styles';
+import { card, input } from '@/components/ui/styles';
 import { targetWarning } from '@/lib/species/consistency';
 import { speciesInputSchema, type SpeciesSheetDto } from '@/lib/species/schema';
 import { UV_ZONES, type UvZone } from '@/simulation/assess/zones';
 import { initialState, toPayload, withUnit, type SpeciesFormState, type TempRangeField } from './form-state';
 import { zoneHabit } from './format';
 import { SourcesEditor } from './SourcesEditor';
-import { TempToggle } from './TempToggle';
-import { useTempUnit } from './temp-unit';
-
-type Errors = Record<string, string>;
+import { UnitToggle } from '@/components/ui/UnitToggle';
+import { useTempUnit } from '@/components/ui/units';
+import { useEntryForm } from '@/components/ui/useEntryForm';
 
 const TEMP_LABELS: Record<TempRangeField, string> = {
   baskingSurfaceC: 'Basking surface',
@@ -31,59 +29,33 @@ export function SpeciesForm({
   organisationId: number;
   sheet: SpeciesSheetDto | null;
 }) {
-  const router = useRouter();
   const [unit] = useTempUnit();
   const [state, setState] = useState<SpeciesFormState>(() => initialState(sheet, unit));
-  const [errors, setErrors] = useState<Errors>({});
-  const [general, setGeneral] = useState<string | null>(null);
-  const [saving, setSaving] = useState(false);
-  const [dirty, setDirty] = useState(false);
+  const form = useEntryForm<unknown, SpeciesSheetDto>({
+    schema: speciesInputSchema,
+    createPath: '/api/species',
+    createExtra: { organisationId },
+    updatePath: sheet ? `/api/species/${sheet.id}` : null,
+    savedHref: (saved) => `/species/${saved.id}`,
+    failure: 'The sheet could not be saved. Try again.',
+  });
+  const { errors, general, saving } = form;
 
   // Temperatures follow the page's °C/°F choice (state derived during render, as React recommends).
   if (state.unit !== unit) setState(withUnit(state, unit));
 
-  useEffect(() => {
-    if (!dirty) return;
-    const warn = (e: BeforeUnloadEvent) => e.preventDefault();
-    window.addEventListener('beforeunload', warn);
-    return () => window.removeEventListener('beforeunload', warn);
-  }, [dirty]);
-
   const update = (patch: Partial<SpeciesFormState>) => {
     setState((s) => ({ ...s, ...patch }));
-    setDirty(true);
+    form.markDirty();
   };
   const setPair = (key: 'uvbTargetUw' | 'photoperiodH', end: 'min' | 'max', v: string) =>
     update({ [key]: { ...state[key], [end]: v } });
   const setTemp = (key: TempRangeField, end: 'min' | 'max', v: string) =>
     update({ temps: { ...state.temps, [key]: { ...state.temps[key], [end]: v } } });
 
-  async function submit(e: FormEvent) {
+  function submit(e: FormEvent) {
     e.preventDefault();
-    setGeneral(null);
-    const payload = toPayload(state);
-    const parsed = speciesInputSchema.safeParse(payload);
-    if (!parsed.success) {
-      const next: Errors = {};
-      for (const i of parsed.error.issues) next[i.path.join('.')] ??= i.message;
-      setErrors(next);
-      setGeneral('Some fields need attention: see the messages beside them.');
-      return;
-    }
-    setErrors({});
-    setSaving(true);
-    try {
-      const saved = sheet
-        ? await sendJson<SpeciesSheetDto>('PATCH', `/api/species/${sheet.id}`, parsed.data)
-        : await sendJson<SpeciesSheetDto>('POST', '/api/species', { organisationId, ...parsed.data });
-      setDirty(false);
-      router.push(`/species/${saved.id}`);
-      router.refresh();
-    } catch (err) {
-      if (err instanceof ApiClientError && err.field) setErrors({ [err.field]: err.message });
-      setGeneral(err instanceof Error ? err.message : 'The sheet could not be saved. Try again.');
-      setSaving(false);
-    }
+    void form.save(toPayload(state));
   }
 
   const err = (path: string) => errors[path] ?? null;
@@ -156,7 +128,7 @@ export function SpeciesForm({
       <fieldset className={`${card} grid gap-4 p-5 sm:grid-cols-2`}>
         <legend className="px-1 text-lead font-semibold text-basalt-900">Temperatures</legend>
         <div className="flex items-center justify-end sm:col-span-2">
-          <TempToggle />
+          <UnitToggle quantity="temperature" />
         </div>
         {(Object.keys(TEMP_LABELS) as TempRangeField[]).map((k) => (
           <RangeInputs
@@ -199,14 +171,11 @@ export function SpeciesForm({
 
       <SourcesEditor sources={state.sources} onChange={(sources) => update({ sources })} errors={errors} />
 
-      <div className="flex flex-wrap gap-2">
-        <button type="submit" className={button.primary} disabled={saving}>
-          {saving ? 'Saving…' : sheet ? 'Save changes' : 'Add species sheet'}
-        </button>
-        <button type="button" className={button.secondary} onClick={() => router.back()} disabled={saving}>
-          Cancel
-        </button>
-      </div>
+      <FormActions
+        saving={saving}
+        submitLabel={sheet ? 'Save changes' : 'Add species sheet'}
+        onCancel={form.cancel}
+      />
     </form>
   );
 }
