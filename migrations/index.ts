@@ -4,6 +4,7 @@ import * as m0002 from './0002-sign-in-attempts';
 import * as m0003 from './0003-designs-variants-shares';
 import * as m0004 from './0004-species-lamp-types';
 import * as m0005 from './0005-lamp-log';
+import * as m0006 from './0006-zone-derived-uvb-targets';
 
 export type Migration = {
   name: string;
@@ -21,4 +22,5 @@ export const migrations: Migration[] = [
   { name: '0003-designs-variants-shares', ...m0003 },
   { name: '0004-species-lamp-types', ...m0004 },
   { name: '0005-lamp-log', ...m0005 },
+  { name: '0006-zone-derived-uvb-targets', ...m0006 },
 ];

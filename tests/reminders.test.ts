@@ -51,7 +51,7 @@ async function world() {
   const calmEnclosure = await createEnclosure(org, calmKeeper, { speciesName: 'Bearded dragon' });
   const t5 = (await LampType.findOne({ where: { organisationId: org.id, tech: 't5', uvbAt30: 42.5 } }))!;
   const today = todayIso();
-  // Worn out: measured far below the bearded dragon's 25 µW/cm² at the basking spot.
+  // Worn out: measured far below the bearded dragon's 115 µW/cm² at the basking spot.
   const worn = await Lamp.create({
     enclosureId: enclosure.id,
     lampTypeId: t5.id,
@@ -62,9 +62,9 @@ async function world() {
     createdById: null,
   });
   for (const [d, v] of [
-    [-400, 40],
-    [-250, 25],
-    [-100, 15],
+    [-400, 160],
+    [-250, 100],
+    [-100, 60],
   ] as const) {
     await Reading.create({
       lampId: worn.id,
@@ -98,7 +98,7 @@ async function world() {
     lampId: fine.id,
     takenAt: new Date(`${addDays(today, -7)}T12:00:00Z`),
     distanceCm: 20,
-    value: 70,
+    value: 220,
     unit: 'uvb',
     takenById: null,
   });
@@ -161,7 +161,7 @@ describe('reminder job', () => {
       lampId: w.fresh.id,
       takenAt: new Date(),
       distanceCm: 30,
-      value: 42,
+      value: 160,
       unit: 'uvb',
       takenById: null,
     });

@@ -43,7 +43,15 @@ describe('guided start proposal, for every starting species in its usual enclosu
         expect(status(id), `${id}: ${p.assessment.findings.find((f) => f.id === id)?.message}`).toBe('pass');
       }
 
-      // Anything else that is not a pass is only the broadband target that contradicts the UV zone, and
+      // The sheets' broadband hints are derived from their UV zone, so the two never contradict each
+      // other and the hint passes too (zones: Ferguson et al. 2010, Zoo Biology 29:317–334).
+      if (sheet.uvbTargetUw) {
+        expect(targetWarning(sheet.uvZone, sheet.uvbTargetUw)).toBeNull();
+        const uvb = p.assessment.findings.find((f) => f.id === 'basking-uvb');
+        expect(uvb?.status, uvb?.message).toBe('pass');
+      }
+
+      // Anything else that is not a pass is only a broadband target that contradicts the UV zone, and
       // the explanation says so.
       const unexplained = p.unmet.filter(
         (f) =>

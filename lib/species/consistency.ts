@@ -19,6 +19,21 @@ export function targetAgainstZone(
   return { uvi, zoneMax, overlaps: uvi.max >= zoneMax.min && uvi.min <= zoneMax.max, ratio: uviPerUvb };
 }
 
+/**
+ * The broadband reading (µW/cm²) that stands for a UV zone's basking range (Ferguson et al. 2010, Zoo
+ * Biology 29:317–334: the maximum UV Index at the basking spot) under a lamp with the given UV Index per
+ * µW/cm² — by default the engine's fluorescent ratio. Rounded inwards to 5 µW/cm², so the range stays
+ * inside the zone. Only a hint for keepers with a broadband meter: the ratio depends on the lamp's
+ * spectrum (and what a meter reads, on the meter), so the zone stays the target.
+ */
+export function broadbandForZone(uvZone: UvZone, uviPerUvb: number = LAMP_TECHS.t5.uviPerUvb): Range {
+  const zone = UV_ZONES[uvZone];
+  return {
+    min: Math.ceil(zone.max[0] / uviPerUvb / 5) * 5,
+    max: Math.floor(zone.max[1] / uviPerUvb / 5) * 5,
+  };
+}
+
 export function targetWarning(uvZone: number, target: Range | null): string | null {
   if (!target) return null;
   const c = targetAgainstZone(uvZone, target);

@@ -1,3 +1,4 @@
+import { broadbandForZone } from './consistency';
 import type { SpeciesInput, SpeciesSource } from './schema';
 
 /**
@@ -8,8 +9,12 @@ import type { SpeciesInput, SpeciesSource } from './schema';
  *   zone each species belongs to is the sheet author's reading of its basking habit, from memory — not
  *   copied from, nor checked against, any published species list.
  * - Temperatures and photoperiod: from memory of general husbandry literature; no source was checked.
- * - Broadband UVB targets (µW/cm²): common practice, no published source (roughly 25–50 for desert
- *   baskers, 12–25 for tropical forest species); what a meter reads depends on the meter.
+ * - Broadband UVB hints (µW/cm²): derived from the species' UV zone (the published source) at the
+ *   engine's fluorescent ratio of 0.04 UV Index per µW/cm², so the two never contradict each other.
+ *   Reading a broadband meter at all is common practice, no published source; the µW/cm² that stand
+ *   for a UV Index depend on the lamp's spectrum (and the meter), so the zone is the target. Keepers'
+ *   older rule of thumb for desert baskers (25–50 µW/cm²) is about UV Index 1–2 at that ratio — below
+ *   zone 4's basking range of 4.5–9.5 — and is not used.
  * Organisations are expected to review and correct their copies; the UI says so on every sheet.
  */
 
@@ -32,14 +37,16 @@ const TEMPERATURES_FROM_MEMORY: SpeciesSource = {
 };
 
 const METER_TARGET: SpeciesSource = {
-  citation: 'Common practice, no published source: keepers’ rule of thumb for broadband UVB meters',
+  citation:
+    'Derived from the UV zone (Ferguson et al. 2010, Zoo Biology 29:317–334) at 0.04 UV Index per µW/cm², a typical fluorescent ratio (from memory); using a broadband meter is common practice, no published source',
   confidence:
-    'rough guide only; what a broadband meter reads depends on the meter and the lamp’s spectrum — the UV zone is the primary target',
+    'rough guide only; the µW/cm² that stand for a UV Index depend on the lamp’s spectrum and on the meter — the UV zone is the primary target',
   covers: ['uvbTargetUw'],
 };
 
-const DESERT_TARGET = { min: 25, max: 50 };
-const FOREST_TARGET = { min: 12, max: 25 };
+// Zone 4 basking UVI 4.5–9.5 → 115–235 µW/cm²; zone 1 basking UVI 0.6–1.4 → 15–35 µW/cm² (at 0.04).
+const DESERT_TARGET = broadbandForZone(4);
+const FOREST_TARGET = broadbandForZone(1);
 
 const r = (min: number, max: number) => ({ min, max });
 

@@ -159,7 +159,7 @@ describe('readings', () => {
         takenAt,
         distance: 10,
         distanceUnit: 'in',
-        value: 80 * Math.exp(-d / 400),
+        value: 300 * Math.exp(-d / 400),
         unit: 'uvb',
         meter: 'broadband meter',
       });
@@ -177,8 +177,9 @@ describe('readings', () => {
     expect(detail.body.lamp.fit.tauDays).toBeCloseTo(400, 0);
     expect(detail.body.chart.points).toHaveLength(4);
     expect(detail.body.chart.curve.length).toBeGreaterThan(10);
-    // Bearded dragon sheet: 25 µW/cm² target at the basking spot.
-    expect(detail.body.lamp.basking.threshold).toBe(25);
+    // Bearded dragon sheet: 115 µW/cm² at the basking spot, its UV zone 4's basking UV Index 4.5
+    // (Ferguson et al. 2010, Zoo Biology 29:317–334) at 0.04 UV Index per µW/cm² (from memory).
+    expect(detail.body.lamp.basking.threshold).toBe(115);
     expect(detail.body.lamp.fallsBelowOn).toMatch(/^\d{4}-\d{2}-\d{2}$/);
   });
 
