@@ -1,5 +1,6 @@
 import type { ContourBand, Design } from '@/simulation';
 import { bandLabel, type FieldScale } from '@/lib/variants/scale';
+import { bandPath } from '@/lib/variants/svg-path';
 import { DesignShapes, drawingTop, fieldLook } from './DesignShapes';
 
 /**
@@ -42,9 +43,7 @@ export function FieldSvg({
         {bands.map((b) => (
           <path
             key={b.lo}
-            d={b.polygons
-              .map((poly) => poly.map((ring) => `M${ring.map((p) => p.join(',')).join('L')}Z`).join(''))
-              .join('')}
+            d={bandPath(b.polygons)}
             fill={colorOf(b.lo)}
             fillRule="evenodd"
             stroke={colorOf(b.lo)}
