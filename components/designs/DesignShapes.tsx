@@ -26,7 +26,7 @@ export function fieldLook(stroke: number): ShapeLook {
     hide: { fill: 'none', stroke: '#1c1f1a', width: stroke * 1.5 },
     foliage: { fill: '#3e8546', opacity: 0.25, stroke: '#27552e', dash: [stroke * 4, stroke * 2] },
     perch: '#4a3b2a',
-    lamp: { uv: '#d18f2b', heat: '#d18f2b', outline: '#1c1f1a', tubeWidth: stroke * 5, bulbRadius: 2 },
+    lamp: { uv: '#d18f2b', heat: '#d9482f', outline: '#1c1f1a', tubeWidth: stroke * 5, bulbRadius: 2 },
   };
 }
 

@@ -115,6 +115,14 @@ describe('variants, comparison and share links', () => {
       await expect
         .poll(() => page.getByRole('table').getByText('Added', { exact: true }).count(), eventually)
         .toBeGreaterThanOrEqual(3);
+      // Changes read in words with their units; temperatures follow the °C/°F choice.
+      await page.getByText('room temperature: not set (default) → 22 °C', { exact: true }).waitFor();
+      await page.getByRole('group', { name: 'Temperature unit' }).getByRole('button', { name: '°F' }).click();
+      await page
+        .getByRole('row', { name: /Cool end/ })
+        .getByText('71.6 °F', { exact: true })
+        .waitFor();
+      await page.getByRole('group', { name: 'Temperature unit' }).getByRole('button', { name: '°C' }).click();
       await page.getByRole('radio', { name: 'Temperature' }).click();
       await page.waitForURL(/field=tempC/);
       await page

@@ -116,6 +116,10 @@ export default async function SharedVariantPage({
           markers={hotSpotMarker(f)}
         />
         <FieldLegend scale={scale} />
+        <p className="text-caption text-basalt-500">
+          Lamps are drawn where they hang (orange: UV lamp, red: heat lamp); the white ring marks the hot
+          spot, the warmest surface an animal can reach.
+        </p>
         <dl className="grid gap-x-6 gap-y-1 text-body sm:grid-cols-2">
           {[
             ['Basking UV Index (highest on a surface)', figure(f.baskingUviMax, 2)],

@@ -138,12 +138,6 @@ export function CompareView({
                   <p className="text-caption text-basalt-500">
                     {v.enclosure.name} · {v.designName} · version {v.version}
                   </p>
-                  {!v.design.objects.some((o) => o.type === 'lamp') && (
-                    <p className="rounded-md border border-dashed border-basalt-300 px-3 py-2 text-caption text-basalt-700">
-                      No lamps yet: no UV anywhere and every surface at room temperature. Add lamps in the
-                      studio.
-                    </p>
-                  )}
                   {side && scale ? (
                     <FieldSvg
                       design={v.design}
@@ -158,6 +152,12 @@ export function CompareView({
                       aria-label="Computing the fields"
                     />
                   )}
+                  {!v.design.objects.some((o) => o.type === 'lamp') && (
+                    <p className="rounded-md border border-dashed border-basalt-300 px-3 py-2 text-caption text-basalt-700">
+                      No lamps yet: no UV anywhere and every surface at room temperature. Add lamps in the
+                      studio.
+                    </p>
+                  )}
                 </>
               )}
             </section>
@@ -166,8 +166,8 @@ export function CompareView({
       </div>
       {scale && <FieldLegend scale={scale} />}
       <p className="text-caption text-basalt-500">
-        Both sides use the same colour scale. The ring marks the hot spot. Every figure is an estimate —
-        verify with a UV meter and a thermometer.
+        Both sides use the same colour scale. Lamps: orange for UV, red for heat; the white ring marks the hot
+        spot. Every figure is an estimate — verify with a UV meter and a thermometer.
       </p>
 
       {(ready?.a || ready?.b) && (

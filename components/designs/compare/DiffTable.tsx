@@ -17,9 +17,36 @@ const TYPE_LABEL: Record<string, string> = {
   foliage: 'Foliage',
 };
 
-const show = (v: unknown): string => {
-  if (v === undefined) return 'default';
-  if (typeof v === 'number') return Number(v.toFixed(2)).toString();
+/** Design-file fields in words, with their units (BRIEF §3: cm, °C, months). */
+const FIELD: Record<string, { label: string; unit?: string; percent?: boolean }> = {
+  width: { label: 'width', unit: 'cm' },
+  height: { label: 'height', unit: 'cm' },
+  depth: { label: 'depth', unit: 'cm' },
+  roomTempC: { label: 'room temperature', unit: '°C' },
+  x: { label: 'x', unit: 'cm' },
+  y: { label: 'y', unit: 'cm' },
+  length: { label: 'length', unit: 'cm' },
+  thickness: { label: 'thickness', unit: 'cm' },
+  uvbAt30: { label: 'UVB at 30 cm', unit: 'µW/cm²' },
+  uviPerUvb: { label: 'UV Index per µW/cm²' },
+  reflectorGain: { label: 'reflector gain', unit: '×' },
+  beamDeg: { label: 'beam', unit: '°' },
+  watts: { label: 'power', unit: 'W' },
+  ageMonths: { label: 'age', unit: 'months' },
+  uvbTransmission: { label: 'UVB let through', percent: true },
+  tech: { label: 'technology' },
+  form: { label: 'form' },
+  name: { label: 'name' },
+};
+
+const show = (v: unknown, field?: string): string => {
+  if (v === undefined) return 'not set (default)';
+  const f = field ? FIELD[field] : undefined;
+  if (typeof v === 'number') {
+    if (f?.percent) return `${Number((v * 100).toFixed(1))} %`;
+    const n = Number(v.toFixed(2)).toString();
+    return f?.unit ? `${n} ${f.unit}` : n;
+  }
   if (typeof v === 'string') return v;
   return JSON.stringify(v);
 };
@@ -32,7 +59,8 @@ function offsetText(dx: number, dy: number): string {
   return parts.join(', ');
 }
 
-const changeText = (c: FieldChange) => `${c.field}: ${show(c.a)} → ${show(c.b)}`;
+const changeText = (c: FieldChange) =>
+  `${FIELD[c.field]?.label ?? c.field}: ${show(c.a, c.field)} → ${show(c.b, c.field)}`;
 
 function nameOf(o: ObjectChange): string {
   const name = 'object' in o ? (typeof o.object.name === 'string' ? o.object.name : undefined) : o.name;

@@ -1,25 +1,49 @@
+'use client';
+
+import { TempToggle } from '@/components/species/TempToggle';
+import { useTempUnit } from '@/components/species/temp-unit';
+import { cDeltaToDisplay, cToDisplay, type TempUnit } from '@/components/studio/geometry/units';
 import type { KeyFigures } from '@/lib/variants/figures';
 
-type Row = { label: string; unit: string; get: (f: KeyFigures) => number; digits: number };
+type Row = {
+  label: string;
+  unit: string;
+  get: (f: KeyFigures) => number;
+  digits: number;
+  temperature?: boolean;
+};
 
 const ROWS: Row[] = [
   { label: 'Basking UV Index (highest on a surface)', unit: '', get: (f) => f.baskingUviMax, digits: 2 },
   { label: 'Basking UVB (highest on a surface)', unit: 'µW/cm²', get: (f) => f.baskingUvbMax, digits: 1 },
-  { label: 'Hot spot (warmest surface)', unit: '°C', get: (f) => f.hotSpotC, digits: 1 },
-  { label: 'Cool end (coolest floor)', unit: '°C', get: (f) => f.coolEndC, digits: 1 },
+  { label: 'Hot spot (warmest surface)', unit: '°C', get: (f) => f.hotSpotC, digits: 1, temperature: true },
+  { label: 'Cool end (coolest floor)', unit: '°C', get: (f) => f.coolEndC, digits: 1, temperature: true },
   { label: 'UV-free area of the cross-section', unit: 'cm²', get: (f) => f.uvFreeAreaCm2, digits: 0 },
   { label: 'UV-free share of the cross-section', unit: '%', get: (f) => f.uvFreeShare, digits: 0 },
 ];
 
 const fmt = (v: number, digits: number) => Number(v.toFixed(digits)).toLocaleString('en-GB');
 
+/** A row in the temperature unit the person chose (the design itself stays in °C). */
+function inUnit(
+  r: Row,
+  t: TempUnit,
+): { unit: string; value: (c: number) => number; delta: (c: number) => number } {
+  if (!r.temperature) return { unit: r.unit, value: (v) => v, delta: (v) => v };
+  return { unit: `°${t}`, value: (c) => cToDisplay(c, t), delta: (c) => cDeltaToDisplay(c, t) };
+}
+
 /** Key figures of both variants and B − A, all estimates. */
 export function FiguresTable({ a, b }: { a: KeyFigures | null; b: KeyFigures | null }) {
+  const [tempUnit] = useTempUnit();
   return (
     <section aria-labelledby="figures-heading" className="space-y-2">
-      <h2 id="figures-heading" className="text-lead font-semibold text-basalt-900">
-        Key figures (estimates)
-      </h2>
+      <div className="flex flex-wrap items-center justify-between gap-2">
+        <h2 id="figures-heading" className="text-lead font-semibold text-basalt-900">
+          Key figures (estimates)
+        </h2>
+        <TempToggle />
+      </div>
       <table className="w-full text-left text-body">
         <thead className="text-caption uppercase tracking-wide text-basalt-500">
           <tr>
@@ -31,10 +55,11 @@ export function FiguresTable({ a, b }: { a: KeyFigures | null; b: KeyFigures | n
         </thead>
         <tbody className="divide-y divide-basalt-100">
           {ROWS.map((r) => {
-            const va = a ? r.get(a) : null;
-            const vb = b ? r.get(b) : null;
-            const d = va !== null && vb !== null ? vb - va : null;
-            const unit = r.unit ? ` ${r.unit}` : '';
+            const u = inUnit(r, tempUnit);
+            const va = a ? u.value(r.get(a)) : null;
+            const vb = b ? u.value(r.get(b)) : null;
+            const d = a && b ? u.delta(r.get(b) - r.get(a)) : null;
+            const unit = u.unit ? ` ${u.unit}` : '';
             return (
               <tr key={r.label}>
                 <td className="py-1.5 pr-3">{r.label}</td>
