@@ -1,18 +1,20 @@
 #!/usr/bin/env node
 // `npm run weight [-- --dir=.next/test-build]`: first-load JavaScript of the landing, sign-in, share and
 // studio pages from the production build (kB raw and gzip), and whether Konva or the simulation engine is
-// in it. Builds first (`next build`) when there is no build. Figures only; the assertion that pages which
-// do not draw stay free of Konva and the engine is tests/browser/weight.browser.ts, run by `npm test`.
+// in it. Reads the newer of .next and .next/test-build unless told; builds first (`next build`) when there
+// is no build. Figures only; the assertion that pages which do not draw stay free of Konva and the
+// engine is tests/browser/weight.browser.ts, run by `npm test`.
 import { ROOT } from './lib/env.mjs';
 import { bin, run } from './lib/proc.mjs';
 import { findDistDir, measurePages } from './lib/weight.mjs';
 
-const arg = process.argv.find((a) => a.startsWith('--dir='))?.slice(6);
-let dist = findDistDir(ROOT, arg ?? process.env.NEXT_DIST_DIR);
+const wanted = process.argv.find((a) => a.startsWith('--dir='))?.slice(6) ?? process.env.NEXT_DIST_DIR;
+let dist = findDistDir(ROOT, wanted);
 if (!dist) {
-  console.log('No production build found: running next build ...');
-  await run(bin('next'), ['build'], { env: { ...process.env, NEXT_TELEMETRY_DISABLED: '1' } });
-  dist = findDistDir(ROOT, arg ?? process.env.NEXT_DIST_DIR);
+  console.log(`No production build in ${wanted ?? '.next'}: running next build ...`);
+  const env = { ...process.env, NEXT_TELEMETRY_DISABLED: '1', ...(wanted ? { NEXT_DIST_DIR: wanted } : {}) };
+  await run(bin('next'), ['build'], { env });
+  dist = findDistDir(ROOT, wanted);
   if (!dist) throw new Error('next build left no BUILD_ID');
 }
 

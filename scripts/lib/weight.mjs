@@ -3,7 +3,7 @@
 // not-found boundaries, the page), as listed in the route's client reference manifest — the script tags
 // the server puts in the page's HTML. Chunks loaded later (next/dynamic, the Web Worker) are found apart
 // by what they contain. Plain Node: used by scripts/weight.mjs and tests/browser/weight.browser.ts.
-import { existsSync, readFileSync, readdirSync } from 'node:fs';
+import { existsSync, readFileSync, readdirSync, statSync } from 'node:fs';
 import path from 'node:path';
 import vm from 'node:vm';
 import { gzipSync } from 'node:zlib';
@@ -25,14 +25,17 @@ export const MARKERS = {
   engine: 'cellCm must be a positive number',
 };
 
-/** The build folders a production build may be in, most likely first; the first with a BUILD_ID wins. */
+/**
+ * The production build to read: the folder asked for, else the newer of `.next` (npm start, npm run build)
+ * and `.next/test-build` (npm test). A folder counts once it has a BUILD_ID.
+ */
 export function findDistDir(root, preferred) {
-  const candidates = [preferred, '.next', path.join('.next', 'test-build')].filter(Boolean);
-  for (const c of candidates) {
-    const dir = path.resolve(root, c);
-    if (existsSync(path.join(dir, 'BUILD_ID'))) return dir;
-  }
-  return null;
+  const built = (c) => existsSync(path.join(path.resolve(root, c), 'BUILD_ID'));
+  if (preferred) return built(preferred) ? path.resolve(root, preferred) : null;
+  const found = ['.next', path.join('.next', 'test-build')].filter(built);
+  const age = (c) => statSync(path.join(path.resolve(root, c), 'BUILD_ID')).mtimeMs;
+  found.sort((a, b) => age(b) - age(a));
+  return found.length ? path.resolve(root, found[0]) : null;
 }
 
 function clientManifest(dist, route) {
