@@ -1,7 +1,7 @@
 'use client';
 
-import { TempToggle } from '@/components/species/TempToggle';
-import { useTempUnit } from '@/components/species/temp-unit';
+import { UnitToggle } from '@/components/ui/UnitToggle';
+import { useTempUnit } from '@/components/ui/units';
 import { cDeltaToDisplay, cToDisplay, type TempUnit } from '@/components/studio/geometry/units';
 import type { KeyFigures } from '@/lib/variants/figures';
 
@@ -42,7 +42,7 @@ export function FiguresTable({ a, b }: { a: KeyFigures | null; b: KeyFigures | n
         <h2 id="figures-heading" className="text-lead font-semibold text-basalt-900">
           Key figures (estimates)
         </h2>
-        <TempToggle />
+        <UnitToggle quantity="temperature" />
       </div>
       <table className="w-full text-left text-body">
         <thead className="text-caption uppercase tracking-wide text-basalt-500">
