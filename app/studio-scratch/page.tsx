@@ -19,7 +19,7 @@ export default function ScratchStudioPage() {
   return (
     <StudioLoader
       source={{ kind: 'scratch' }}
-      title="Try the studio — saved on this device only"
+      title="Try the studio"
       backHref="/"
       backLabel="Home"
       species={species}

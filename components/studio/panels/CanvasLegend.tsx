@@ -30,8 +30,9 @@ export function CanvasLegend({
         {legend.map((e) => (
           <li key={e.label} className="flex min-w-11 flex-1 flex-col items-stretch tabular-nums">
             <span className="block h-2.5" style={{ background: e.color }} />
-            <span className="px-0.5 text-center text-[0.65rem] leading-tight whitespace-nowrap">
-              {e.label.replace(/ – /g, '–')}
+            {/* Each band is named by where it starts (a colour bar's ticks), so labels never run together. */}
+            <span className="overflow-hidden px-0.5 text-left text-[0.65rem] leading-tight whitespace-nowrap">
+              {e.label.split(' – ')[0]}
             </span>
           </li>
         ))}
