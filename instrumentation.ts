@@ -10,13 +10,8 @@
 export async function register() {
   if (process.env.NEXT_RUNTIME !== 'nodejs') return;
   if (process.env.NEXT_PHASE === 'phase-production-build') return;
-  const { authSecret } = await import('./lib/auth/secret');
-  try {
-    authSecret();
-  } catch (e) {
-    console.error(`Baskwell cannot start: ${e instanceof Error ? e.message : String(e)}`);
-    process.exit(1);
-  }
+  const { requireStrongSecretOrExit } = await import('./lib/auth/require-secret');
+  requireStrongSecretOrExit();
   const { startReminderSchedule } = await import('./lib/reminders/schedule');
   startReminderSchedule();
   // npm start refuses a database that can lose acknowledged saves (scripts/migrate.ts); a server started
