@@ -19,7 +19,13 @@ export type EventChild = {
 };
 
 export function eventChild(file: string, env: NodeJS.ProcessEnv): EventChild {
-  const child: ChildProcess = spawn(TSX, [file], { cwd: ROOT, env, stdio: ['pipe', 'pipe', 'pipe'] });
+  // A process group of its own: tsx runs the script in a node child, and kill() must reach both.
+  const child: ChildProcess = spawn(TSX, [file], {
+    cwd: ROOT,
+    env,
+    stdio: ['pipe', 'pipe', 'pipe'],
+    detached: true,
+  });
   const events: ChildEvent[] = [];
   let stderr = '';
   let exitCode: number | null | undefined;
@@ -50,7 +56,12 @@ export function eventChild(file: string, env: NodeJS.ProcessEnv): EventChild {
     },
     exited,
     kill: () => {
-      if (exitCode === undefined) child.kill('SIGKILL');
+      if (exitCode !== undefined || !child.pid) return;
+      try {
+        process.kill(-child.pid, 'SIGKILL');
+      } catch {
+        /* already gone */
+      }
     },
   };
 }

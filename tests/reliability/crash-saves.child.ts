@@ -130,7 +130,10 @@ async function main() {
   const counts = { acks: 0, fails: 0, stale: 0 };
   const inFlight = new Set<Promise<void>>();
 
-  createInterface({ input: process.stdin }).on('line', (line) => {
+  const commands = createInterface({ input: process.stdin });
+  // The test gone (its end of stdin closed): stop too rather than save on forever.
+  commands.on('close', () => (stopping = true));
+  commands.on('line', (line) => {
     const cmd = line.trim();
     if (cmd === 'pause') {
       // Workers check the flag before each save; the ones already sent are waited for.
