@@ -46,7 +46,8 @@ export function UploadVariant({
       return qc.invalidateQueries({ queryKey: ['design', designId] });
     },
   });
-  const error = localError ?? (upload.error ? upload.error.message : null);
+  // Say plainly that nothing was added, then the server's reason, which names the field at fault.
+  const error = localError ?? (upload.error ? `The file was not added. ${upload.error.message}` : null);
   return (
     <form
       className="flex flex-wrap items-center gap-2"
