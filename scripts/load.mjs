@@ -234,7 +234,8 @@ async function main() {
   const designId = made.design.id;
   const variantId = made.variant.id;
   const cookie = jar.header();
-  const authed = { cookie };
+  // The app refuses a cookie-carrying write without its own Origin (CSRF guard), as a browser sends it.
+  const authed = { cookie, origin: base };
   const rows = [];
   try {
     const share = await api(base, jar, 'POST', `/api/variants/${variantId}/shares`, { expiresInDays: 1 });
@@ -332,6 +333,11 @@ async function main() {
   }
   const save = rows.find((r) => r.name.startsWith('PUT'));
   if (save) console.log(`\nsaves: ${save.saved} stored, ${save.stale409} answered 409 (crossed in flight)`);
+  if (save && !save.skipped && save.saved === 0) {
+    // A save route that refuses everything (say a 403 from the Origin guard) would otherwise pass as "fast".
+    console.log('no save was stored: the PUT figures measure refusals, not saves (see the status codes)');
+    process.exitCode = 1;
+  }
   console.log(
     JSON.stringify({
       url: base,

@@ -38,7 +38,9 @@ async function run<T>(
   } catch (e) {
     if (e instanceof ApiError) return fail(e.message, e.field);
     if (isDatabaseUnavailable(e))
-      return fail('The database cannot be reached right now. Nothing was changed; try again.');
+      return fail(
+        'The database cannot be reached right now; your answers stay on this page. Try again in a few seconds.',
+      );
     console.error('guided start', e);
     return fail('Something went wrong on our side. Nothing was created; try again.');
   }
