@@ -31,8 +31,9 @@ const StudioCanvas = dynamic(() => import('./canvas/StudioCanvas'), {
 });
 
 const PREFS_KEY = 'baskwell.studio.prefs';
-// The cm/in choice of the rest of the app (components/ui/units.ts): one choice everywhere.
+// The cm/in and °C/°F choices of the rest of the app (components/ui/units.ts): one choice everywhere.
 const APP_LENGTH_KEY = 'baskwell.lengthUnit';
+const APP_TEMP_KEY = 'baskwell.tempUnit';
 
 function readPrefs(storage: KeyValueStorage): Partial<StoredPrefs> {
   try {
@@ -42,7 +43,9 @@ function readPrefs(storage: KeyValueStorage): Partial<StoredPrefs> {
     const appLength = storage.getItem(APP_LENGTH_KEY);
     if (appLength === 'cm' || appLength === 'in') out.lengthUnit = appLength;
     else if (p.lengthUnit === 'cm' || p.lengthUnit === 'in') out.lengthUnit = p.lengthUnit;
-    if (p.tempUnit === 'C' || p.tempUnit === 'F') out.tempUnit = p.tempUnit;
+    const appTemp = storage.getItem(APP_TEMP_KEY);
+    if (appTemp === 'C' || appTemp === 'F') out.tempUnit = appTemp;
+    else if (p.tempUnit === 'C' || p.tempUnit === 'F') out.tempUnit = p.tempUnit;
     if (p.field === 'uvb' || p.field === 'uvi' || p.field === 'tempC') out.field = p.field;
     if (typeof p.fieldOpacity === 'number' && p.fieldOpacity >= 0.1 && p.fieldOpacity <= 1)
       out.fieldOpacity = p.fieldOpacity;
@@ -142,7 +145,9 @@ function StudioEditor({
   useEffect(() => {
     try {
       storage.setItem(PREFS_KEY, prefs);
-      storage.setItem(APP_LENGTH_KEY, (JSON.parse(prefs) as StoredPrefs).lengthUnit);
+      const chosen = JSON.parse(prefs) as StoredPrefs;
+      storage.setItem(APP_LENGTH_KEY, chosen.lengthUnit);
+      storage.setItem(APP_TEMP_KEY, chosen.tempUnit);
     } catch {
       // Preferences are a convenience; ignore a full or disabled storage.
     }

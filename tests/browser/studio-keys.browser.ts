@@ -120,6 +120,17 @@ describe('studio keyboard and help (no account)', () => {
 
     // Shift+U: °F. The species check speaks °F and inches, in its numbers and in its sentences.
     await keys(page, 'Shift+U');
+    // The same choices as the rest of the app's pages (their unit toggles read these).
+    await expect
+      .poll(
+        () =>
+          page.evaluate(() => [
+            localStorage.getItem('baskwell.lengthUnit'),
+            localStorage.getItem('baskwell.tempUnit'),
+          ]),
+        eventually,
+      )
+      .toEqual(['in', 'F']);
     await page.getByTestId('tab-assess').click();
     await page.getByTestId('species-select').selectOption({ label: 'Bearded dragon' });
     await page.getByTestId('finding-hot-spot').waitFor({ state: 'visible', timeout: 60_000 });
