@@ -8,6 +8,7 @@ import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { DEMO_PASSWORDS, demoSignIn } from '@/lib/demo/scenario';
 import { BASE_URL } from './harness';
+import { signInCookie } from './sign-in-cookie';
 
 const ROOT = path.resolve(import.meta.dirname, '..', '..');
 const MANIFEST = path.join(
@@ -26,26 +27,6 @@ function actionId(exportedName: string): string {
   );
   if (!found) throw new Error(`no server action ${exportedName} in ${MANIFEST}`);
   return found[0];
-}
-
-/** Signs in through next-auth's own endpoints, as a script would; returns the session cookie. */
-async function signInCookie(email: string, password: string): Promise<string> {
-  const csrf = await fetch(`${BASE_URL}/api/auth/csrf`);
-  const jar = csrf.headers.getSetCookie().map((c) => c.split(';')[0]!);
-  const { csrfToken } = (await csrf.json()) as { csrfToken: string };
-  const res = await fetch(`${BASE_URL}/api/auth/callback/credentials`, {
-    method: 'POST',
-    redirect: 'manual',
-    headers: {
-      'content-type': 'application/x-www-form-urlencoded',
-      cookie: jar.join('; '),
-      origin: BASE_URL,
-    },
-    body: new URLSearchParams({ csrfToken, email, password, json: 'true' }),
-  });
-  const session = res.headers.getSetCookie().find((c) => c.startsWith('next-auth.session-token='));
-  if (!session) throw new Error(`sign-in as ${email} gave no session cookie (${res.status})`);
-  return session.split(';')[0]!;
 }
 
 async function callAction(
