@@ -88,7 +88,13 @@ export default async function EnclosuresPage({
         <>
           <EnclosureTable enclosures={items} showKeeper={!isKeeper} />
           {more && (
-            <p className="mt-3 text-caption text-basalt-500">Showing the first {items.length} enclosures.</p>
+            // The server returns one page, A–Z by name; search and sort only see that page, so say so.
+            <div className="mt-3">
+              <Notice tone="info">
+                Only the first {items.length} enclosures (A–Z by name) are listed; search and sort cover those
+                only.{seesAll && ' Pick a keeper from the Keepers page to see all of theirs.'}
+              </Notice>
+            </div>
           )}
         </>
       )}
