@@ -95,13 +95,17 @@ export function EnclosureTable({
   const [sort, setSort] = useState<EnclosureSort>(DEFAULT_ENCLOSURE_SORT);
   const searchId = useId();
   const columns = useMemo(() => columnsFor(showKeeper, unit), [showKeeper, unit]);
+  // A stable sorting array: a fresh one each render makes the library re-sort and reset its page
+  // index on every render, which re-renders again without end (the page froze on the unit toggle).
+  const sorting = useMemo(() => [{ id: sort.column, desc: sort.descending }], [sort]);
   // The React Compiler skips this component because the table instance cannot be memoised; nothing
   // memoised receives the instance, so the known warning is silenced here and nowhere else.
   // eslint-disable-next-line react-hooks/incompatible-library
   const table = useReactTable({
     data: enclosures,
     columns,
-    state: { globalFilter: query, sorting: [{ id: sort.column, desc: sort.descending }] },
+    state: { globalFilter: query, sorting },
+    autoResetPageIndex: false,
     globalFilterFn: (row, _columnId, value: string) => matchesEnclosureSearch(row.original, value),
     getColumnCanGlobalFilter: () => true,
     getCoreRowModel: getCoreRowModel(),
@@ -134,7 +138,7 @@ export function EnclosureTable({
       </div>
       <div className="overflow-x-auto rounded-lg border border-basalt-200 bg-white">
         <table className="min-w-full divide-y divide-basalt-200 text-left text-body">
-          <caption className="sr-only">Enclosures, sorted by column buttons in the header</caption>
+          <caption className="sr-only">Enclosures</caption>
           <thead className="bg-basalt-50 text-caption uppercase tracking-wide text-basalt-600">
             {table.getHeaderGroups().map((group) => (
               <tr key={group.id}>
