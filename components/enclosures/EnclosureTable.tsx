@@ -26,8 +26,10 @@ import type { EnclosureView } from './types';
 const cell = 'px-4 py-3 text-basalt-700';
 
 function columnsFor(showKeeper: boolean, unit: LengthUnit): ColumnDef<EnclosureView>[] {
+  // The library only sorts and searches columns that have an accessor, so each column names one.
   const sortBy = (column: EnclosureSortColumn) => ({
     id: column,
+    accessorFn: (e: EnclosureView) => e.id,
     sortingFn: (a: { original: EnclosureView }, b: { original: EnclosureView }) =>
       compareEnclosures(a.original, b.original, column),
   });
