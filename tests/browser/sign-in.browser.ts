@@ -48,6 +48,36 @@ describe('signing in', () => {
     const inches = `${Number((first.widthCm / 2.54).toFixed(1))} ×`;
     await expect.poll(() => table.getByText(inches).count(), { timeout: 10_000 }).toBeGreaterThan(0);
     await page.getByRole('button', { name: 'cm', exact: true }).click();
+
+    // Newest first by default; the Enclosure header sorts A–Z and says so to assistive technology.
+    const updatedHeader = table.getByRole('columnheader', { name: 'Updated' });
+    expect(await updatedHeader.getAttribute('aria-sort')).toBe('descending');
+    await table.getByRole('button', { name: 'Enclosure' }).click();
+    const nameHeader = table.getByRole('columnheader', { name: 'Enclosure' });
+    await expect.poll(() => nameHeader.getAttribute('aria-sort'), { timeout: 10_000 }).toBe('ascending');
+    expect(await updatedHeader.getAttribute('aria-sort')).toBe('none');
+    const collator = new Intl.Collator(undefined, { sensitivity: 'base', numeric: true });
+    const shown = (await table.locator('tbody a').allTextContents()).filter((n) =>
+      enclosureNames.includes(n),
+    );
+    expect(shown).toEqual([...enclosureNames].sort(collator.compare));
+
+    // Searching by a keeper's name keeps only their enclosures; a search with no match says so.
+    const searched = keepers[1];
+    if (!searched) throw new Error('the demo shop has a second keeper');
+    const search = page.getByLabel('Search enclosures');
+    await search.fill(searched.name);
+    const theirs = (searched.enclosures ?? []).map((e) => e.name);
+    await expect
+      .poll(() => table.locator('tbody a').allTextContents(), { timeout: 10_000 })
+      .toEqual([...theirs].sort(collator.compare));
+    await screenshot(page, 'sign-in-staff-enclosures-search');
+    await search.fill('no such enclosure anywhere');
+    await expect.poll(() => page.getByText('No enclosure matches').count(), { timeout: 10_000 }).toBe(1);
+    await page.getByRole('button', { name: 'Clear the search' }).click();
+    await expect
+      .poll(() => table.locator('tbody a').count(), { timeout: 10_000 })
+      .toBeGreaterThanOrEqual(enclosureNames.length);
     await screenshot(page, 'sign-in-staff-enclosures');
 
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Keepers' }).click();
