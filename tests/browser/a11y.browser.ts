@@ -65,12 +65,25 @@ async function demoIds(page: Page) {
   const two = await createDesign(page, enclosureId, `Accessibility check B ${suffix}`);
   const firstId = async (listPath: string, pattern: RegExp) => {
     await page.goto(listPath);
-    const hrefs = await page
-      .locator('main a[href]')
-      .evaluateAll((as) => as.map((a) => a.getAttribute('href') ?? ''));
-    const id = hrefs.map((h) => pattern.exec(h)?.[1]).find(Boolean);
-    if (!id) throw new Error(`no link matching ${pattern} on ${listPath}`);
-    return Number(id);
+    // The list may still be streaming when `load` fires (React reveals a suspended page a little after its
+    // HTML arrives, and the hidden part is outside <main> until then): wait for a matching link to appear.
+    const found = await page
+      .waitForFunction(
+        ({ source, flags }) => {
+          const re = new RegExp(source, flags);
+          for (const a of document.querySelectorAll('main a[href]')) {
+            const m = re.exec(a.getAttribute('href') ?? '');
+            if (m?.[1]) return m[1];
+          }
+          return null;
+        },
+        { source: pattern.source, flags: pattern.flags },
+        { timeout: 30_000 },
+      )
+      .then((h) => h.jsonValue())
+      .catch(() => null);
+    if (!found) throw new Error(`no link matching ${pattern} on ${listPath} (now at ${page.url()})`);
+    return Number(found);
   };
   return {
     enclosureId,
