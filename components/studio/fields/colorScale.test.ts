@@ -31,6 +31,11 @@ describe('colour ramps', () => {
     expect(bandColors('inferno', 0)).toEqual([]);
   });
 
+  it('draws a field of one band in the low end of the ramp, as the first band of any field is', () => {
+    expect(bandColors('viridis', 1)).toEqual([bandColors('viridis', 6)[0]]);
+    expect(bandColors('inferno', 1)).toEqual([rampColor('inferno', 0)]);
+  });
+
   it('chooses a readable label colour (WCAG relative luminance)', () => {
     expect(labelColorOn('#fde725')).toBe('#1c1f1a');
     expect(labelColorOn('#440154')).toBe('#f5f6f4');

@@ -64,7 +64,9 @@ export function rampColor(ramp: RampName, t: number): string {
  */
 export function bandColors(ramp: RampName, bandCount: number): string[] {
   if (bandCount <= 0) return [];
-  if (bandCount === 1) return [rampColor(ramp, 0.5)];
+  // A field with a single band never rises above its first threshold (no UV lamp, or a room-warm
+  // enclosure): it takes the ramp's lowest colour, so "nothing here" looks like the low end everywhere.
+  if (bandCount === 1) return [rampColor(ramp, 0)];
   return Array.from({ length: bandCount }, (_, i) => rampColor(ramp, i / (bandCount - 1)));
 }
 
