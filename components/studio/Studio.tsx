@@ -159,13 +159,16 @@ function StudioEditor({
 
   const sim = useSimulation(store, species);
   const { bands, legend } = useBands(sim.grid, field, tempUnit, fieldsVisible);
-  const highlight = useMemo<HighlightShape | null>(() => {
+  const highlighted = useMemo(() => {
     const f = sim.assessment?.findings.find((x) => x.id === highlightId);
     if (!f?.where) return null;
-    return f.where.kind === 'segments'
-      ? { segments: f.where.segments, objectIds: [] }
-      : { segments: [], objectIds: f.where.objectIds };
+    const shape: HighlightShape =
+      f.where.kind === 'segments'
+        ? { segments: f.where.segments, objectIds: [] }
+        : { segments: [], objectIds: f.where.objectIds };
+    return { findingId: f.id, title: f.title, shape };
   }, [sim.assessment, highlightId]);
+  const highlight = highlighted?.shape ?? null;
   const summaryId = useId();
 
   return (
@@ -199,7 +202,7 @@ function StudioEditor({
               highlight={highlight}
               summaryId={summaryId}
             />
-            <ObjectSummary id={summaryId} />
+            <ObjectSummary id={summaryId} highlight={highlighted} />
             {fieldsVisible && <CanvasLegend field={field} temp={tempUnit} legend={legend} />}
           </main>
           <SidePanel sim={sim} legend={legend} species={species} />

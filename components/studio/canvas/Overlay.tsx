@@ -11,7 +11,7 @@ import {
 } from '../geometry/camera';
 import { objectBounds, objectHandles } from '../geometry/objects';
 import type { Guide } from '../geometry/snap';
-import { formatLength, formatNumber, formatTemp, type LengthUnit, type TempUnit } from '../geometry/units';
+import { formatNumber, formatTemp, rulerText, type LengthUnit, type TempUnit } from '../geometry/units';
 import type { Reading } from '../fields/sample';
 import type { Design, DesignObject, ProbePoint } from '../state/types';
 import { C, HIGHLIGHT, SELECT } from './colors';
@@ -148,20 +148,12 @@ export function RulerLayer({
   if (!ruler) return null;
   const a = designToStage(cam, ruler.a);
   const b = designToStage(cam, ruler.b);
-  const dx = ruler.b.x - ruler.a.x;
-  const dy = ruler.b.y - ruler.a.y;
-  const len = Math.hypot(dx, dy);
-  const angle = (Math.atan2(dy, dx) * 180) / Math.PI;
   return (
     <Group listening={false}>
       <Line points={[a.x, a.y, b.x, b.y]} stroke={C.ink} strokeWidth={1.5} />
       <Circle x={a.x} y={a.y} radius={3} fill={C.ink} />
       <Circle x={b.x} y={b.y} radius={3} fill={C.ink} />
-      <Tip
-        x={(a.x + b.x) / 2 + 8}
-        y={(a.y + b.y) / 2 + 8}
-        text={`${formatLength(len, unit)}  (${formatLength(Math.abs(dx), unit)} across, ${formatLength(Math.abs(dy), unit)} up)  ${formatNumber(angle, 0)}°`}
-      />
+      <Tip x={(a.x + b.x) / 2 + 8} y={(a.y + b.y) / 2 + 8} text={rulerText(ruler, unit)} />
     </Group>
   );
 }

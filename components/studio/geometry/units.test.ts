@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
+  rulerText,
   cDeltaToDisplay,
   cToDisplay,
   cmToDisplay,
@@ -53,5 +54,14 @@ describe('formatNumber', () => {
   it('never prints negative zero or NaN', () => {
     expect(formatNumber(-0.01, 1)).toBe('0');
     expect(formatNumber(Number.NaN)).toBe('–');
+  });
+});
+
+describe('rulerText', () => {
+  it('reads a 3-4-5 measurement in cm and in inches', () => {
+    const ruler = { a: { x: 10, y: 10 }, b: { x: 40, y: 50 } };
+    expect(rulerText(ruler, 'cm')).toBe('50 cm  (30 cm across, 40 cm up)  53°');
+    // 50 cm = 19.69 in, 30 cm = 11.81 in, 40 cm = 15.75 in (1 in = 2.54 cm exactly).
+    expect(rulerText(ruler, 'in')).toBe('19.7 in  (11.8 in across, 15.7 in up)  53°');
   });
 });

@@ -60,3 +60,23 @@ export function formatTemp(c: number, unit: TempUnit, decimals = 1): string {
 export function lengthDecimals(unit: LengthUnit): number {
   return unit === 'cm' ? 1 : 2;
 }
+
+type RulerEnds = { a: { x: number; y: number }; b: { x: number; y: number } };
+
+/** The ruler's reading: its length, horizontal and vertical parts, and angle, each formatted. */
+export function rulerParts(ruler: RulerEnds, unit: LengthUnit) {
+  const dx = ruler.b.x - ruler.a.x;
+  const dy = ruler.b.y - ruler.a.y;
+  return {
+    length: formatLength(Math.hypot(dx, dy), unit),
+    across: formatLength(Math.abs(dx), unit),
+    up: formatLength(Math.abs(dy), unit),
+    angle: `${formatNumber((Math.atan2(dy, dx) * 180) / Math.PI, 0)}°`,
+  };
+}
+
+/** The ruler's label on the canvas. */
+export function rulerText(ruler: RulerEnds, unit: LengthUnit): string {
+  const r = rulerParts(ruler, unit);
+  return `${r.length}  (${r.across} across, ${r.up} up)  ${r.angle}`;
+}

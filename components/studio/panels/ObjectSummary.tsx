@@ -1,12 +1,13 @@
 'use client';
 // A text version of the canvas for screen readers: every object with its place and size.
-import { formatLength, formatNumber } from '../geometry/units';
+import { formatLength, formatNumber, rulerParts } from '../geometry/units';
 import { segmentAngleDeg, segmentLength } from '../geometry/objects';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
 import { calibrationLabel } from '../state/calibration';
 import { TYPE_NAMES } from '../state/document';
 import { isBox, isSegment, type DesignObject } from '../state/types';
 import type { LengthUnit } from '../geometry/units';
+import type { HighlightShape } from '../canvas/Overlay';
 import { LAMP_TECHS } from '@/simulation/model/techs';
 
 export function describeObject(o: DesignObject, u: LengthUnit): string {
@@ -26,14 +27,46 @@ export function describeObject(o: DesignObject, u: LengthUnit): string {
   return name;
 }
 
-export function ObjectSummary({ id }: { id: string }) {
+/** The ruler's reading, for screen readers (the canvas shows the same as a label). */
+export function rulerSentence(ruler: Parameters<typeof rulerParts>[0], u: LengthUnit): string {
+  const r = rulerParts(ruler, u);
+  return `Ruler: ${r.length} (${r.across} across, ${r.up} up), at ${r.angle}.`;
+}
+
+/** What a highlighted finding marks on the canvas, in words: its surfaces or its objects. */
+export function describeHighlight(
+  title: string,
+  shape: HighlightShape,
+  objects: readonly DesignObject[],
+  u: LengthUnit,
+): string {
+  const L = (v: number) => formatLength(v, u);
+  const parts = [
+    ...shape.segments.map((s) => `the surface from (${L(s.x1)}, ${L(s.y1)}) to (${L(s.x2)}, ${L(s.y2)})`),
+    ...shape.objectIds.map((id) => {
+      const o = objects.find((x) => x.id === id);
+      return o ? `${TYPE_NAMES[o.type]} ${o.name ? `“${o.name}”` : o.id}` : id;
+    }),
+  ];
+  return `Shown on the canvas: ${title} — ${parts.join('; ')}.`;
+}
+
+export function ObjectSummary({
+  id,
+  highlight,
+}: {
+  id: string;
+  /** The finding whose place is marked on the canvas, if any. */
+  highlight?: { findingId: string; title: string; shape: HighlightShape } | null;
+}) {
   const { store } = useCommandContext();
   const design = useStudio(store, (s) => s.history.present);
   const selection = useStudio(store, (s) => s.session.selection);
   const unit = useStudio(store, (s) => s.session.lengthUnit);
+  const ruler = useStudio(store, (s) => s.session.ruler);
   const e = design.enclosure;
   return (
-    <div id={id} className="sr-only" data-testid="object-summary">
+    <div id={id} className="sr-only" data-testid="object-summary" data-highlight={highlight?.findingId ?? ''}>
       <p>
         Enclosure {formatLength(e.width, unit)} wide, {formatLength(e.height, unit)} high,{' '}
         {formatLength(e.depth, unit)} deep; {design.objects.length} objects
@@ -52,6 +85,8 @@ export function ObjectSummary({ id }: { id: string }) {
           </li>
         ))}
       </ul>
+      {ruler && <p data-testid="ruler-reading">{rulerSentence(ruler, unit)}</p>}
+      {highlight && <p>{describeHighlight(highlight.title, highlight.shape, design.objects, unit)}</p>}
     </div>
   );
 }
