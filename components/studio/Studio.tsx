@@ -10,7 +10,7 @@ import { useBands } from './fields/useBands';
 import { useSimulation } from './fields/useSimulation';
 import { StudioContext, useStudio } from './hooks/useStudio';
 import { useShortcuts } from './hooks/useShortcuts';
-import { ConflictBanner, RestoreBanner } from './panels/Banners';
+import { ConflictBanner, RestoreBanner, ViewOnlyBanner } from './panels/Banners';
 import { CanvasLegend } from './panels/CanvasLegend';
 import { HelpDialog } from './panels/HelpDialog';
 import { ObjectSummary } from './panels/ObjectSummary';
@@ -19,6 +19,7 @@ import { SidePanel } from './panels/SidePanel';
 import { StatusBar } from './panels/StatusBar';
 import { Toolbar } from './panels/Toolbar';
 import type { KeyValueStorage, Loaded, StudioPersistence } from './persistence/types';
+import { designFileName, downloadDesign } from './persistence/download';
 import { useAutosave } from './persistence/useAutosave';
 import { createAtom } from './state/atom';
 import { pickPrefs, type StoredPrefs } from './state/session';
@@ -139,6 +140,10 @@ function StudioEditor({
   const save = useAutosave(store, persistence, loaded, storage);
   const ctx = useMemo<CommandContext>(() => ({ store, saveNow: save.saveNow }), [store, save.saveNow]);
   useShortcuts(ctx);
+  // A refused save (signed out, access withdrawn) turns the studio view-only until a save succeeds again.
+  const refused = save.state.kind === 'refused' ? save.state.reason : null;
+  const viewOnly = readOnly || refused !== null;
+  useEffect(() => store.setReadOnly(viewOnly), [store, viewOnly]);
 
   // Units and view preferences are remembered on this device.
   const prefs = useStudio(store, (s) => JSON.stringify(pickPrefs(s.session)));
@@ -175,16 +180,15 @@ function StudioEditor({
     <StudioContext.Provider value={ctx}>
       <div className="flex h-full min-h-0 flex-col bg-basalt-50 text-basalt-900" data-testid="studio">
         <Toolbar title={title} backHref={backHref} backLabel={backLabel} />
-        {readOnly && (
-          <p
-            role="note"
-            className="border-b border-sky-200 bg-sky-50 px-4 py-2 text-sm text-sky-900"
-            data-testid="view-only"
-          >
-            View only: you can look, probe and check this design, but not change it.
-          </p>
+        {viewOnly && (
+          <ViewOnlyBanner
+            refused={refused}
+            signInHref={`/sign-in?callbackUrl=${encodeURIComponent(window.location.pathname)}`}
+            onDownload={() => downloadDesign(store.design, designFileName(title, 'unsaved-changes'))}
+            onRetry={save.saveNow}
+          />
         )}
-        {save.offer && !readOnly && (
+        {save.offer && !viewOnly && (
           <RestoreBanner savedAt={save.offer.savedAt} onRestore={save.restore} onDiscard={save.discard} />
         )}
         {save.state.kind === 'conflict' && (

@@ -1,6 +1,8 @@
 'use client';
-// Notices above the canvas: a local copy to restore, or a save conflict to resolve.
+// Notices above the canvas: view only (and why), a local copy to restore, or a save conflict to resolve.
+import Link from 'next/link';
 import type { ReactNode } from 'react';
+import type { RefusedReason } from '../persistence/autosave';
 import { focusRing } from './CommandButton';
 
 function Banner({ tone, children, testId }: { tone: 'info' | 'warn'; children: ReactNode; testId: string }) {
@@ -69,5 +71,76 @@ export function ConflictBanner({
         Load theirs
       </button>
     </Banner>
+  );
+}
+
+/**
+ * Why the studio is view only: the person may only read this design, or the server refused their save
+ * (signed out, or no longer allowed to change it). In the second case the unsaved work is still on this
+ * device: it is offered back on the next visit, and can be downloaded as a design file now.
+ */
+export function ViewOnlyBanner({
+  refused,
+  signInHref,
+  onDownload,
+  onRetry,
+}: {
+  refused: RefusedReason | null;
+  signInHref: string;
+  onDownload: () => void;
+  onRetry: () => void;
+}) {
+  if (!refused) {
+    return (
+      <p
+        role="note"
+        className="border-b border-sky-200 bg-sky-50 px-4 py-2 text-sm text-sky-900"
+        data-testid="view-only"
+        data-reason="viewer"
+      >
+        View only: you can look, probe and check this design, but not change it.
+      </p>
+    );
+  }
+  return (
+    <div
+      role="alert"
+      data-testid="view-only"
+      data-reason={refused}
+      className="flex flex-wrap items-center gap-3 border-b border-ember-200 bg-ember-50 px-4 py-2 text-sm text-ember-900"
+    >
+      <span className="min-w-[16rem] flex-1">
+        {refused === 'signed-out' ? (
+          <>
+            <strong>You are signed out, so your changes were not saved.</strong> The studio is view only until
+            you sign in again. Nothing is lost: your changes are kept on this device and offered back when you
+            reopen this design signed in. You can also download them as a design file.
+          </>
+        ) : (
+          <>
+            <strong>You can no longer change this design</strong> — the server refused the save (you may have
+            lost access to its enclosure, for example when it moved to another keeper). The studio is view
+            only. Nothing is lost: your changes are kept on this device. Download them as a design file and
+            send it to whoever looks after the enclosure now (it can be uploaded as a new variant), or ask
+            them for access and try again.
+          </>
+        )}
+      </span>
+      <button
+        type="button"
+        onClick={onDownload}
+        className={`${btn} border-ember-700 bg-ember-700 text-white`}
+      >
+        Download my changes (.json)
+      </button>
+      {refused === 'signed-out' && (
+        <Link href={signInHref} className={`${btn} border-ember-300 bg-white text-ember-900`}>
+          Sign in again
+        </Link>
+      )}
+      <button type="button" onClick={onRetry} className={`${btn} border-ember-300 bg-white`}>
+        Try saving again
+      </button>
+    </div>
   );
 }

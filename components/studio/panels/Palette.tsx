@@ -45,6 +45,8 @@ const GROUPS: { label: string; tools: { tool: Tool; icon: IconName; hint: string
 export const Palette = memo(function Palette() {
   const ctx = useCommandContext();
   const tool = useStudio(ctx.store, (s) => s.session.tool);
+  // Placing tools are switched off when the studio turns view-only (a refused save).
+  useStudio(ctx.store, (s) => s.readOnly);
   return (
     <nav
       aria-label="Tools"

@@ -74,6 +74,7 @@ export function SidePanel({
 }) {
   const { store } = useCommandContext();
   const tab = useStudio(store, (s) => s.session.tab);
+  const readOnly = useStudio(store, (s) => s.readOnly);
   const base = useId();
   const onKey = (e: KeyboardEvent<HTMLDivElement>) => {
     // Arrow keys move between tabs (WAI-ARIA tabs pattern).
@@ -124,8 +125,8 @@ export function SidePanel({
         tabIndex={-1}
       >
         {tab === 'inspect' && (
-          <fieldset disabled={store.readOnly} className="min-w-0">
-            <legend className="sr-only">Properties{store.readOnly ? ' (view only)' : ''}</legend>
+          <fieldset disabled={readOnly} className="min-w-0">
+            <legend className="sr-only">Properties{readOnly ? ' (view only)' : ''}</legend>
             <Inspector />
           </fieldset>
         )}

@@ -26,6 +26,14 @@ export function saveLabel(
       return { text: 'Conflict — someone else saved this design', tone: 'bad' };
     case 'error':
       return { text: `Not saved: ${s.message}`, tone: 'bad' };
+    case 'refused':
+      return {
+        text:
+          s.reason === 'signed-out'
+            ? 'Signed out — not saved; changes kept on this device'
+            : 'Not saved: you can no longer change this design; changes kept on this device',
+        tone: 'bad',
+      };
   }
 }
 

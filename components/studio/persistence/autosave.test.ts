@@ -17,7 +17,7 @@ function fakeServer() {
   const server = {
     version: 3,
     design: exampleDesign(),
-    mode: 'ok' as 'ok' | 'offline' | 'reject',
+    mode: 'ok' as 'ok' | 'offline' | 'reject' | 401 | 403 | 404,
     saves: [] as { design: Design; baseVersion: number }[],
   };
   const persistence: StudioPersistence = {
@@ -27,6 +27,7 @@ function fakeServer() {
       server.saves.push({ design, baseVersion });
       if (server.mode === 'offline') throw new OfflineError();
       if (server.mode === 'reject') throw new SaveRejectedError('invalid design', 400);
+      if (typeof server.mode === 'number') throw new SaveRejectedError('not yours', server.mode);
       if (baseVersion !== server.version)
         return { conflict: { version: server.version, design: server.design } };
       server.version++;
@@ -145,6 +146,37 @@ describe('Autosave', () => {
     expect(server.saves).toHaveLength(1);
     expect(storage.data.size).toBe(1); // the work is still kept locally
   });
+
+  it.each([
+    [401, 'signed-out'],
+    [403, 'no-access'],
+    [404, 'no-access'],
+  ] as const)(
+    'a save refused with %i is "refused" (%s): no retry, the work kept locally, a retry on request',
+    async (status, reason) => {
+      const { a, server, storage } = setup();
+      server.mode = status;
+      const d = moved(server.design, 3);
+      a.change(d);
+      await vi.advanceTimersByTimeAsync(DEBOUNCE_MS + 60_000);
+      expect(a.state).toEqual({ kind: 'refused', reason, message: 'not yours' });
+      expect(server.saves).toHaveLength(1);
+      expect(sameDesign(readBackup(storage, 'v1')!.design, d)).toBe(true);
+      // Later edits are kept locally too, and not sent.
+      const d2 = moved(d, 1);
+      a.change(d2);
+      await vi.advanceTimersByTimeAsync(DEBOUNCE_MS * 2);
+      expect(server.saves).toHaveLength(1);
+      expect(sameDesign(readBackup(storage, 'v1')!.design, d2)).toBe(true);
+      // Signed in again elsewhere: "try again" saves the newest copy.
+      server.mode = 'ok';
+      a.online();
+      await vi.advanceTimersByTimeAsync(0);
+      expect(a.state.kind).toBe('saved');
+      expect(sameDesign(server.design, d2)).toBe(true);
+      expect(storage.data.size).toBe(0);
+    },
+  );
 
   it('saves changes made while a save was running', async () => {
     const { a, server } = setup();

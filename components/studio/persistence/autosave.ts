@@ -11,7 +11,22 @@ export type SaveState =
   | { kind: 'saving' }
   | { kind: 'offline'; retryAt: number }
   | { kind: 'conflict'; theirs: { version: number; design: Design } }
-  | { kind: 'error'; message: string };
+  | { kind: 'error'; message: string }
+  /**
+   * The server refuses this person's saves: signed out (401), or no longer allowed to change the design
+   * (403; 404 once they may not even see it, e.g. the enclosure went to another keeper). Retrying alone
+   * cannot fix it: the studio turns view-only and the unsaved work stays in the local copy.
+   */
+  | { kind: 'refused'; reason: RefusedReason; message: string };
+
+export type RefusedReason = 'signed-out' | 'no-access';
+
+/** The answers that mean "you may not save this", as opposed to "this design is not valid". */
+export function refusedReason(status: number): RefusedReason | null {
+  if (status === 401) return 'signed-out';
+  if (status === 403 || status === 404) return 'no-access';
+  return null;
+}
 
 export interface AutosaveOptions {
   persistence: StudioPersistence;
@@ -96,6 +111,7 @@ export class Autosave {
     writeBackup(this.storage, this.p.key, { design, baseVersion: this.baseVersion, savedAt: this.now() });
     if (this._state.kind === 'conflict') return; // wait for the user's decision
     if (this._state.kind === 'offline') return; // the retry timer saves the newest copy
+    if (this._state.kind === 'refused') return; // kept locally; sent only when asked to try again
     if (this._state.kind !== 'saving' && this._state.kind !== 'pending') this.setState({ kind: 'pending' });
     this.schedule(this.debounceMs);
   }
@@ -153,7 +169,12 @@ export class Autosave {
       this.setState({ kind: 'saved', at: this.now() });
     } catch (err) {
       if (err instanceof SaveRejectedError) {
-        this.setState({ kind: 'error', message: err.message });
+        const reason = refusedReason(err.status);
+        this.setState(
+          reason
+            ? { kind: 'refused', reason, message: err.message }
+            : { kind: 'error', message: err.message },
+        );
         return;
       }
       const wait = BACKOFF_MS[Math.min(this.attempt, BACKOFF_MS.length - 1)] as number;
@@ -164,9 +185,9 @@ export class Autosave {
     }
   }
 
-  /** The browser is back online: retry at once instead of waiting for the backoff. */
+  /** The browser is back online (or the person asks to try again): retry at once. */
   online() {
-    if (this._state.kind === 'offline' || this._state.kind === 'error') {
+    if (this._state.kind === 'offline' || this._state.kind === 'error' || this._state.kind === 'refused') {
       this.attempt = 0;
       void this.flush();
     }

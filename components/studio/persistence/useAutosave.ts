@@ -84,7 +84,7 @@ export function useAutosave(
   const saveNow = useCallback(() => {
     const a = ref.current;
     if (!a) return;
-    if (a.state.kind === 'offline' || a.state.kind === 'error') a.online();
+    if (a.state.kind === 'offline' || a.state.kind === 'error' || a.state.kind === 'refused') a.online();
     else void a.flush();
   }, []);
 

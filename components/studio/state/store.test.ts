@@ -64,4 +64,24 @@ describe('StudioStore', () => {
     select(s, ['b1']);
     expect(s.session.selection).toEqual(['b1']);
   });
+
+  it('switches to read-only mid-drag: the drag is abandoned, a placing tool put down, edits ignored', () => {
+    const s = new StudioStore(exampleDesign(), { tool: 'hide' });
+    const fn = vi.fn();
+    s.subscribe(fn);
+    s.beginGesture();
+    s.edit((d) => moveObjects(d, ['b1'], 5, 0));
+    s.setReadOnly(true);
+    expect(fn).toHaveBeenCalled();
+    expect(s.readOnly).toBe(true);
+    expect(s.getState().readOnly).toBe(true);
+    expect(s.inGesture).toBe(false);
+    expect(s.design.objects.find((o) => o.id === 'b1')).toMatchObject({ x1: 20 });
+    expect(s.session.tool).toBe('select');
+    s.edit((d) => moveObjects(d, ['b1'], 1, 0));
+    expect(s.design.objects.find((o) => o.id === 'b1')).toMatchObject({ x1: 20 });
+    s.setReadOnly(false);
+    s.edit((d) => moveObjects(d, ['b1'], 1, 0));
+    expect(s.design.objects.find((o) => o.id === 'b1')).toMatchObject({ x1: 21 });
+  });
 });

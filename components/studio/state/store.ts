@@ -7,18 +7,40 @@ import type { Design } from './types';
 export interface StudioState {
   history: H.History<Design>;
   session: Session;
+  /**
+   * View only: document edits are ignored. Set from the start for someone who may read but not change
+   * the design, or later when the server refuses a save (signed out, access withdrawn).
+   */
+  readOnly: boolean;
 }
 
 export class StudioStore {
   private state: StudioState;
   private readonly listeners = new Set<() => void>();
 
-  /** View-only studio (someone who may read but not change the design): document edits are ignored. */
-  readonly readOnly: boolean;
-
   constructor(design: Design, session: Partial<Session> = {}, options: { readOnly?: boolean } = {}) {
-    this.state = { history: H.createHistory(design), session: { ...initialSession(), ...session } };
-    this.readOnly = options.readOnly ?? false;
+    this.state = {
+      history: H.createHistory(design),
+      session: { ...initialSession(), ...session },
+      readOnly: options.readOnly ?? false,
+    };
+  }
+
+  /** View-only studio: document edits are ignored (see StudioState.readOnly). */
+  get readOnly(): boolean {
+    return this.state.readOnly;
+  }
+
+  /** Switches editing off (a running drag is abandoned, a placing tool put down) or back on. */
+  setReadOnly(readOnly: boolean) {
+    if (readOnly === this.state.readOnly) return;
+    if (readOnly && this.inGesture) this.applyHistory(H.cancelGesture(this.state.history));
+    const s = this.state.session;
+    const session: Session =
+      readOnly && s.tool !== 'select' && s.tool !== 'pan' && s.tool !== 'probe' && s.tool !== 'ruler'
+        ? { ...s, tool: 'select', guides: [] }
+        : s;
+    this.set({ ...this.state, session, readOnly });
   }
 
   getState = (): StudioState => this.state;
@@ -104,6 +126,6 @@ export class StudioStore {
     const sel = this.state.session.selection;
     const selection = sel.every((id) => alive.has(id)) ? sel : sel.filter((id) => alive.has(id));
     const session = selection === sel ? this.state.session : { ...this.state.session, selection };
-    this.set({ history, session });
+    this.set({ ...this.state, history, session });
   }
 }
