@@ -106,3 +106,75 @@ export async function dragRoundTrips(
     return { roundTrips: m.roundTrips.slice(n), computeMs: m.computeMs.slice(n) };
   }, before);
 }
+
+export type Camera = { zoom: number; originX: number; originY: number };
+
+/** The studio's camera (pixels per cm and the stage position of the design origin). */
+export function camera(page: Page): Promise<Camera> {
+  return page.evaluate(() => window.__baskwellStudio!.camera!());
+}
+
+/** The design point (cm, y up) under a page point, through the studio's camera. */
+export async function designAt(page: Page, p: { x: number; y: number }): Promise<{ x: number; y: number }> {
+  const cam = await camera(page);
+  const box = await page.getByTestId('studio-canvas').boundingBox();
+  if (!box) throw new Error('the studio canvas is not on screen');
+  return { x: (p.x - box.x - cam.originX) / cam.zoom, y: (cam.originY - (p.y - box.y)) / cam.zoom };
+}
+
+/** The canvas layers, bottom up: backdrop and fields, objects, overlay (selection, highlight, ruler). */
+export const LAYER = { backdrop: 0, objects: 1, overlay: 2 } as const;
+
+/** RGBA of one layer's canvas at a design point (cm, y up). */
+export function layerPixel(page: Page, layer: number, x: number, y: number): Promise<number[]> {
+  return page.evaluate(
+    ({ layer, x, y }) => {
+      const cam = window.__baskwellStudio!.camera!();
+      const canvas = document.querySelectorAll<HTMLCanvasElement>('[data-testid=studio-canvas] canvas')[
+        layer
+      ];
+      if (!canvas) throw new Error(`no canvas for layer ${layer}`);
+      const ratio = canvas.width / canvas.clientWidth;
+      const sx = Math.round((cam.originX + x * cam.zoom) * ratio);
+      const sy = Math.round((cam.originY - y * cam.zoom) * ratio);
+      return [...canvas.getContext('2d')!.getImageData(sx, sy, 1, 1).data];
+    },
+    { layer, x, y },
+  );
+}
+
+/** How many pixels of one layer are drawn in a colour (within a tolerance per channel). */
+export function layerColourCount(page: Page, layer: number, rgb: [number, number, number], tol = 24) {
+  return page.evaluate(
+    ({ layer, rgb, tol }) => {
+      const canvas = document.querySelectorAll<HTMLCanvasElement>('[data-testid=studio-canvas] canvas')[
+        layer
+      ];
+      if (!canvas) throw new Error(`no canvas for layer ${layer}`);
+      const { data } = canvas.getContext('2d')!.getImageData(0, 0, canvas.width, canvas.height);
+      let n = 0;
+      for (let i = 0; i < data.length; i += 4) {
+        if (
+          data[i + 3]! > 40 &&
+          Math.abs(data[i]! - rgb[0]) <= tol &&
+          Math.abs(data[i + 1]! - rgb[1]) <= tol &&
+          Math.abs(data[i + 2]! - rgb[2]) <= tol
+        )
+          n++;
+      }
+      return n;
+    },
+    { layer, rgb, tol },
+  );
+}
+
+/** The id of the object the inspector shows ('' when none or several are selected). */
+export async function inspected(page: Page): Promise<string> {
+  const el = page.getByTestId('inspector-object');
+  return (await el.count()) ? ((await el.getAttribute('data-object-id')) ?? '') : '';
+}
+
+/** Whether the toolbar's Undo is offered (false once the history is back at its start). */
+export async function canUndo(page: Page): Promise<boolean> {
+  return page.locator('[role=toolbar] [data-command="edit.undo"]').isEnabled();
+}
