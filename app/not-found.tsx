@@ -1,4 +1,4 @@
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { BrandMark } from '@/components/shell/BrandMark';
 import { button } from '@/components/ui/styles';
 

@@ -1,4 +1,4 @@
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { redirect } from 'next/navigation';
 import { BrandMark } from '@/components/shell/BrandMark';
 import { EnclosureSketch } from '@/components/shell/EnclosureSketch';

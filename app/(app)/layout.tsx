@@ -1,4 +1,4 @@
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import type { ReactNode } from 'react';
 import { AppNav, type NavItem } from '@/components/shell/AppNav';
 import { BrandMark } from '@/components/shell/BrandMark';

@@ -1,4 +1,4 @@
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { button } from '@/components/ui/styles';
 
 export default function AppNotFound() {

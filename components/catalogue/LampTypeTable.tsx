@@ -1,6 +1,6 @@
 'use client';
 
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { useMemo, useState } from 'react';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { formatLength, useLengthUnit } from '@/components/ui/units';

@@ -1,6 +1,6 @@
 'use client';
 
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import type { DesignSummary, VariantSummary } from '@/lib/variants/views';
 import { ConfirmButton } from './ConfirmButton';
 import { InlineName } from './InlineName';

@@ -1,7 +1,7 @@
 'use client';
 
 import { useQuery } from '@tanstack/react-query';
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { useState } from 'react';
 import type { DesignSummary, VariantSummary } from '@/lib/variants/views';
 import { designsApi } from './api';

@@ -1,6 +1,6 @@
 'use client';
 
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { useDeferredValue, useMemo, useState } from 'react';
 import { DesignCard } from './DesignCard';

@@ -8,7 +8,7 @@ import {
   getSortedRowModel,
   useReactTable,
 } from '@tanstack/react-table';
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { useId, useMemo, useState } from 'react';
 import { button, focusRing, input, link } from '@/components/ui/styles';
 import { formatSize, type LengthUnit, useLengthUnit } from '@/components/ui/units';

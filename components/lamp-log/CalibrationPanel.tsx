@@ -1,6 +1,6 @@
 'use client';
 
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { useEffect, useState } from 'react';
 import { ApiClientError, sendJson } from '@/components/ui/api-client';
 import { Notice } from '@/components/ui/Notice';

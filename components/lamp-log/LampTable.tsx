@@ -1,6 +1,6 @@
 'use client';
 
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { link } from '@/components/ui/styles';
 import { formatLength, useLengthUnit } from '@/components/ui/units';
 import type { LampSummary } from '@/lib/lamp-log/store';

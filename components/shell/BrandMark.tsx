@@ -1,4 +1,4 @@
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { focusRing } from '@/components/ui/styles';
 
 /** The word mark: a small sun over a ledge, and the name. */

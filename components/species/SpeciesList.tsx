@@ -1,6 +1,6 @@
 'use client';
 
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { useMemo, useState } from 'react';
 import { input, link } from '@/components/ui/styles';
 import type { SpeciesSheetDto } from '@/lib/species/schema';

@@ -2,7 +2,7 @@
 // Entry point for pages: builds the persistence from plain props (functions cannot cross from a
 // server component) and loads the Konva studio on the client only.
 import dynamic from 'next/dynamic';
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { useMemo } from 'react';
 import { exampleDesign } from './examples/exampleDesign';
 import { httpPersistence } from './persistence/http';

@@ -70,9 +70,9 @@ describe('keeper journey', () => {
         ['missing-enclosure', '/enclosures/999999999'],
       ] as const;
       for (const [what, path] of foreign) {
-        // The status stays 200: the (app) layout streams (loading.tsx) before the page decides it is
-        // missing, so the not-found page is what tells — the API below answers a real 404.
-        await page.goto(path);
+        // A real 404, as the API below answers: no loading boundary starts these pages' responses early.
+        const res = await page.goto(path);
+        expect(res?.status(), path).toBe(404);
         await page.getByRole('heading', { name: 'Not found' }).waitFor();
         expect(await page.getByText(`Not for them ${suffix}`).count()).toBe(0);
         for (const name of theirs) expect(await page.getByText(name, { exact: true }).count()).toBe(0);

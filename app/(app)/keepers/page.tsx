@@ -1,5 +1,5 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { notFound } from 'next/navigation';
 import { InviteForm } from '@/components/people/InviteForm';
 import { PendingInvitations } from '@/components/people/PendingInvitations';

@@ -2,7 +2,7 @@
 
 import { usePathname, useRouter } from 'next/navigation';
 import { useEffect, useMemo, useState, useTransition } from 'react';
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { CautionList } from '@/components/cautions/CautionList';
 import { FindingList } from '@/components/cautions/FindingList';
 import type { Assessment } from '@/simulation';

@@ -1,7 +1,7 @@
 'use client';
 // The top bar: where you are, edit and arrange commands, zoom, snapping, units and help.
 import { memo } from 'react';
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { command, runCommand } from '../commands/registry';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
 import { CommandButton, focusRing } from './CommandButton';

@@ -1,5 +1,5 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { CautionList } from '@/components/cautions/CautionList';
 import { DeleteLampTypeButton } from '@/components/catalogue/DeleteLampTypeButton';
 import { LampTypeView } from '@/components/catalogue/LampTypeView';

@@ -1,5 +1,5 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { notFound } from 'next/navigation';
 import { CalibrationPanel } from '@/components/lamp-log/CalibrationPanel';
 import { DecayChart } from '@/components/lamp-log/DecayChart';

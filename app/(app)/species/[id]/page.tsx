@@ -1,5 +1,5 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { DeleteSheetButton } from '@/components/species/DeleteSheetButton';
 import { ProvenanceNote } from '@/components/species/ProvenanceNote';
 import { SpeciesSheetView } from '@/components/species/SpeciesSheetView';

@@ -1,5 +1,5 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { AcceptInvitation } from '@/components/auth/AcceptInvitation';
 import { SignOutButton } from '@/components/shell/SignOutButton';
 import { Notice } from '@/components/ui/Notice';

@@ -1,5 +1,5 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { notFound } from 'next/navigation';
 import { AddLampForm } from '@/components/lamp-log/AddLampForm';
 import { BackdropPanel } from '@/components/lamp-log/BackdropPanel';

@@ -1,5 +1,9 @@
-/** Shown while a signed-in page loads its data: the shape of a page, announced to screen readers. */
-export default function Loading() {
+/**
+ * The shape of a list page while its data loads, announced to screen readers. Used only by the
+ * loading.tsx of pages that never answer "not found": a loading boundary starts the response (status
+ * 200) before the page runs, so a page that may call notFound() must not sit below one.
+ */
+export function PageSkeleton() {
   return (
     <div role="status" aria-live="polite" className="animate-pulse">
       <span className="sr-only">Loading…</span>

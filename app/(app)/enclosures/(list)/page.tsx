@@ -1,5 +1,5 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
+import Link from '@/components/ui/Link';
 import { EnclosureTable } from '@/components/enclosures/EnclosureTable';
 import { NewEnclosure } from '@/components/enclosures/NewEnclosure';
 import { EmptyState } from '@/components/ui/EmptyState';

@@ -1,0 +1,47 @@
+// Signed-in pages that may answer 404 have no loading skeleton (it would start their response with a
+// 200), so a click on a link to one shows a bar across the top of the window until the page is there.
+// The test holds the page's request back until it has seen the bar, then lets it through: nothing
+// depends on how fast the server answers.
+import { describe, expect, it } from 'vitest';
+import { demoSignIn } from '@/lib/demo/scenario';
+import { signIn, withBrowser } from './harness';
+
+const session = withBrowser();
+const SHEET = /^\/species\/\d+$/;
+
+describe('navigation pending', () => {
+  it('shows a bar while the page a link opens is loading, and removes it when the page is there', async () => {
+    const page = session.page();
+    const staff = demoSignIn('staff');
+    await signIn(page, staff.email, staff.password);
+    await page.goto('/species');
+    const hrefs = await page
+      .locator('main a[href]')
+      .evaluateAll((as) => as.map((a) => a.getAttribute('href') ?? ''));
+    const href = hrefs.find((h) => SHEET.test(h));
+    expect(href, 'a species sheet link on /species').toBeDefined();
+
+    let release!: () => void;
+    const held = new Promise<void>((resolve) => (release = resolve));
+    await page.route(
+      (url) => SHEET.test(url.pathname),
+      async (route) => {
+        await held;
+        await route.continue();
+      },
+    );
+    const bar = page.getByTestId('navigation-pending');
+    expect(await bar.count()).toBe(0);
+    await page.locator(`main a[href="${href}"]`).first().click();
+    await bar.waitFor({ state: 'visible' });
+    // Still on the list: the bar is the only sign the click was taken.
+    expect(new URL(page.url()).pathname).toBe('/species');
+
+    release();
+    await page.waitForURL((url) => url.pathname === href);
+    await page.getByRole('link', { name: '← All species' }).waitFor();
+    await bar.waitFor({ state: 'detached' });
+    await page.unrouteAll({ behavior: 'ignoreErrors' });
+    expect(session.pageErrors()).toEqual([]);
+  });
+});
