@@ -22,6 +22,8 @@ type Spec<P extends Schema, Q extends Schema, B extends Schema, A extends boolea
   body?: B;
   /** Defaults to true: no session → 401. */
   auth?: A;
+  /** The JSON body's size cap in bytes (413 beyond it); defaults to MAX_JSON_BODY_BYTES. */
+  maxBodyBytes?: number;
   handler: (input: {
     req: Request;
     params: Out<P>;
@@ -43,7 +45,7 @@ export function route<
         assertSameOrigin(req);
         assertNotFormBody(req);
       }
-      const rawBody = spec.body ? await readJsonBody(req) : undefined;
+      const rawBody = spec.body ? await readJsonBody(req, spec.maxBodyBytes) : undefined;
       const params = parse(spec.params, ctx ? await ctx.params : {}, undefined);
       const query = parse(spec.query, Object.fromEntries(new URL(req.url).searchParams), undefined);
       const body = parse(spec.body, rawBody ?? {}, undefined);

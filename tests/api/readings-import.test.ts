@@ -2,6 +2,8 @@ import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import * as importRoute from '@/app/api/readings/import/route';
 import { useFakeS3 } from '@/lib/storage/fake-s3-for-tests';
 import { getObject } from '@/lib/storage/s3';
+import { MAX_JSON_BODY_BYTES } from '@/lib/api/request';
+import { MAX_CSV_BYTES, MAX_CSV_IMPORT_BODY_BYTES } from '@/lib/uploads/limits';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { Lamp, LampType, Reading, Upload } from '@/models';
 import { createEnclosure, createMember, createOrganisation, withTestDatabase } from '../helpers/db';
@@ -122,5 +124,48 @@ describe('CSV import of readings', () => {
     expect(empty.status).toBe(400);
     expect(empty.body.error.field).toBe('csv');
     expect(await Reading.count()).toBe(0);
+  });
+
+  it('answers 413 for a file over its cap, counted in bytes as the file is, and saves nothing', async () => {
+    const w = await world();
+    const byOne = `${GOOD}\n${'x'.repeat(MAX_CSV_BYTES - GOOD.length)}`;
+    // 'é' is two bytes in UTF-8: under the cap counted in characters, over it in bytes.
+    const wide = `${GOOD}\n${'é'.repeat(MAX_CSV_BYTES / 2)}`;
+    expect(new TextEncoder().encode(byOne).byteLength).toBe(MAX_CSV_BYTES + 1);
+    expect(wide.length).toBeLessThan(MAX_CSV_BYTES);
+    for (const [csv, commit] of [
+      [byOne, false],
+      [byOne, true],
+      [wide, true],
+    ] as const) {
+      const r = await post(w, { csv, commit });
+      expect(r.status, r.text.slice(0, 200)).toBe(413);
+      expect(r.body.error).toMatchObject({
+        code: 'payload_too_large',
+        field: 'csv',
+        message: 'The file is larger than 1024 KB; split it into smaller files.',
+      });
+    }
+    // A body beyond the route's own cap is refused before it is read whole: 413 as well.
+    const huge = await post(w, { csv: 'x'.repeat(MAX_CSV_IMPORT_BODY_BYTES) });
+    expect(huge.status).toBe(413);
+    expect(huge.body.error.code).toBe('payload_too_large');
+    expect(await Reading.count()).toBe(0);
+    expect(await Upload.count()).toBe(0);
+  });
+
+  it('takes a file just under its cap even when its JSON is larger than other routes allow', async () => {
+    const w = await world();
+    // Quotes and line ends take two bytes each in JSON: this file is under 1 MB, its request over.
+    const row = `Basking tube,2025-02-01,30,cm,40.2,uvb,broadband meter,"${'""'.repeat(70)}"`;
+    const csv = ['lamp,taken_at,distance,distance_unit,value,unit,meter,note', ...Array(4900).fill(row)].join(
+      '\n',
+    );
+    expect(new TextEncoder().encode(csv).byteLength).toBeLessThanOrEqual(MAX_CSV_BYTES);
+    expect(JSON.stringify({ csv }).length).toBeGreaterThan(MAX_JSON_BODY_BYTES);
+    const r = await post(w, { csv });
+    expect(r.status, r.text.slice(0, 200)).toBe(200);
+    expect(r.body).toMatchObject({ ok: true, total: 4900 });
+    expect(r.body.rows[0].note).toBe('"'.repeat(70));
   });
 });
