@@ -4,6 +4,7 @@ import { AppNav, type NavItem } from '@/components/shell/AppNav';
 import { BrandMark } from '@/components/shell/BrandMark';
 import { NoOrganisation } from '@/components/shell/NoOrganisation';
 import { OrganisationSwitcher } from '@/components/shell/OrganisationSwitcher';
+import { SessionKeepAlive } from '@/components/shell/SessionKeepAlive';
 import { SignOutButton } from '@/components/shell/SignOutButton';
 import { mailViewerEnabled } from '@/lib/mail';
 import { can } from '@/lib/permissions';
@@ -31,6 +32,7 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
   ];
   return (
     <>
+      <SessionKeepAlive />
       <header className="bg-basalt-900">
         <div className="mx-auto max-w-6xl px-4 sm:px-6">
           <div className="flex flex-wrap items-center justify-between gap-3 py-3">

@@ -1,15 +1,17 @@
 import type { NextAuthOptions } from 'next-auth';
 import CredentialsProvider from 'next-auth/providers/credentials';
 import { authorizeCredentials } from './credentials';
+import { SESSION_MAX_AGE_S, SESSION_REFRESH_MS } from './lifetime';
 import { authSecret } from './secret';
 import { loadSessionUser, loadUserById } from './session-user';
 
-/** Sessions last a working day; a changed session version ends them within a minute. */
-export const SESSION_MAX_AGE_S = 8 * 3600;
+export { SESSION_MAX_AGE_S, SESSION_REFRESH_MS };
+/** A changed session version ends a session at the next request, and in next-auth's own answer within a minute. */
 export const SESSION_RECHECK_MS = 60_000;
 
 export const authOptions: NextAuthOptions = {
-  session: { strategy: 'jwt', maxAge: SESSION_MAX_AGE_S, updateAge: 15 * 60 },
+  // JWT sessions are re-issued on every /api/auth/session answer (updateAge applies to database sessions only).
+  session: { strategy: 'jwt', maxAge: SESSION_MAX_AGE_S },
   jwt: { maxAge: SESSION_MAX_AGE_S },
   // A getter: the secret is checked when next-auth first needs it (a request), not when the build imports this file.
   get secret() {

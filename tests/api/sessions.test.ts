@@ -10,7 +10,7 @@ import * as enclosures from '@/app/api/enclosures/route';
 import * as members from '@/app/api/organisations/[id]/members/route';
 import { sessionUserFromHeaders } from '@/lib/api/session';
 import { authorizeCredentials } from '@/lib/auth/credentials';
-import { SESSION_MAX_AGE_S, SESSION_RECHECK_MS, authOptions } from '@/lib/auth/options';
+import { SESSION_MAX_AGE_S, SESSION_RECHECK_MS, SESSION_REFRESH_MS, authOptions } from '@/lib/auth/options';
 import { authSecret } from '@/lib/auth/secret';
 import { User, type Organisation } from '@/models';
 import {
@@ -167,8 +167,16 @@ describe('next-auth JWT callback (what /api/auth/session answers)', () => {
     await expect(jwt(tokenOf(before, minuteAgo))).rejects.toThrow(/Session ended/);
   });
 
-  it('keeps sessions short-lived: a cookie past its lifetime is refused', async () => {
-    expect(SESSION_MAX_AGE_S).toBeLessThanOrEqual(8 * 3600);
+  it('keeps sessions short-lived: an hour, renewed by open tabs well inside it', () => {
+    expect(SESSION_MAX_AGE_S).toBe(3600);
+    expect(authOptions.session).toEqual({ strategy: 'jwt', maxAge: SESSION_MAX_AGE_S });
+    expect(authOptions.jwt?.maxAge).toBe(SESSION_MAX_AGE_S);
+    // A visible tab renews every 10 minutes: a late or throttled timer still renews in time.
+    expect(SESSION_REFRESH_MS).toBe(10 * 60_000);
+    expect(SESSION_REFRESH_MS * 4).toBeLessThanOrEqual(SESSION_MAX_AGE_S * 1000);
+  });
+
+  it('refuses a cookie past its lifetime', async () => {
     const user = (await User.findByPk(staff.id))!;
     const expired = await encode({
       token: { sub: String(user.id), uid: user.id, sv: user.sessionVersion, checkedAt: Date.now() },

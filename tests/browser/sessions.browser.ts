@@ -1,8 +1,11 @@
 // "Sign out everywhere" as a person does it: signed in on two devices (two browser contexts), they use the
 // account page on one; the other, on its next page, is back at sign-in. Uses the household's owner, whom
 // no other browser test signs in as.
+// The session's short lifetime: the cookie lasts an hour, and an open tab renews it (the page's clock is
+// Playwright's, moved on by hand, so nothing waits ten real minutes).
 import { describe, expect, it } from 'vitest';
-import { DEMO_HOUSEHOLD, DEMO_PASSWORDS, demoSignIn } from '@/lib/demo/scenario';
+import { SESSION_MAX_AGE_S, SESSION_REFRESH_MS } from '@/lib/auth/lifetime';
+import { DEMO_HOUSEHOLD, DEMO_PASSWORDS, DEMO_SHOP, demoSignIn } from '@/lib/demo/scenario';
 import { newContext, screenshot, signIn, withBrowser } from './harness';
 
 const session = withBrowser();
@@ -36,5 +39,40 @@ describe('sign out everywhere', () => {
     } finally {
       await laptopContext.close();
     }
+  });
+});
+
+/** Seconds from now until an Expires attribute of a Set-Cookie header. */
+const secondsLeft = (setCookie: string) => {
+  const expires = /next-auth\.session-token=[^;]*;[^\n]*?Expires=([^;\n]+)/i.exec(setCookie)?.[1];
+  if (!expires) throw new Error(`no session cookie with an expiry in: ${setCookie.slice(0, 200)}`);
+  return (Date.parse(expires) - Date.now()) / 1000;
+};
+
+describe('session lifetime', () => {
+  it('lasts an hour from sign-in, and an open tab renews it for another hour', async () => {
+    const page = session.page();
+    await page.clock.install();
+    const who = DEMO_SHOP.people.find((p) => p.role === 'staff')!;
+    await signIn(page, who.email, DEMO_PASSWORDS.staff);
+    const cookie = (await page.context().cookies()).find((c) => c.name === 'next-auth.session-token');
+    expect(cookie, 'a session cookie after sign-in').toBeDefined();
+    const left = cookie!.expires - Date.now() / 1000;
+    expect(left).toBeGreaterThan(SESSION_MAX_AGE_S - 300);
+    expect(left).toBeLessThanOrEqual(SESSION_MAX_AGE_S + 5);
+
+    await page.goto('/lamp-log');
+    await page.getByRole('heading', { level: 1 }).first().waitFor();
+    const renewal = page.waitForResponse((r) => new URL(r.url()).pathname === '/api/auth/session', {
+      timeout: 60_000,
+    });
+    // Jumps the page's clock: the renewal timer, due by then, fires once.
+    await page.clock.fastForward(SESSION_REFRESH_MS);
+    const res = await renewal;
+    expect(res.status()).toBe(200);
+    // (Its body is not read here: the page never reads it, and Playwright would wait for it.)
+    const renewed = secondsLeft((await res.headerValue('set-cookie')) ?? '');
+    expect(renewed).toBeGreaterThan(SESSION_MAX_AGE_S - 300);
+    expect(renewed).toBeLessThanOrEqual(SESSION_MAX_AGE_S + 5);
   });
 });
