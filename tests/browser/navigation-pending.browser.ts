@@ -15,11 +15,17 @@ describe('navigation pending', () => {
     const staff = demoSignIn('staff');
     await signIn(page, staff.email, staff.password);
     await page.goto('/species');
-    const hrefs = await page
-      .locator('main a[href]')
-      .evaluateAll((as) => as.map((a) => a.getAttribute('href') ?? ''));
-    const href = hrefs.find((h) => SHEET.test(h));
-    expect(href, 'a species sheet link on /species').toBeDefined();
+    // The list streams in after its skeleton: wait for a sheet's link rather than read the page at `load`.
+    const href = await page
+      .waitForFunction(
+        (source) =>
+          [...document.querySelectorAll('main a[href]')]
+            .map((a) => a.getAttribute('href') ?? '')
+            .find((h) => new RegExp(source).test(h)) ?? null,
+        SHEET.source,
+        { timeout: 30_000 },
+      )
+      .then((h) => h.jsonValue() as Promise<string>);
 
     let release!: () => void;
     const held = new Promise<void>((resolve) => (release = resolve));
