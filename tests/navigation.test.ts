@@ -70,6 +70,6 @@ describe('navigation', () => {
   it('links the enclosure page to its lamps and the enclosure list to the guided start', () => {
     const read = (rel: string) => linkedPaths(readFileSync(path.join(APP_GROUP, rel), 'utf8'));
     expect(read('enclosures/[id]/page.tsx')).toContain('/enclosures/:param/lamps');
-    expect(read('enclosures/page.tsx')).toContain('/enclosures/new');
+    expect(read('enclosures/(list)/page.tsx')).toContain('/enclosures/new');
   });
 });
