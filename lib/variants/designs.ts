@@ -1,5 +1,6 @@
 import { Op } from 'sequelize';
 import { afterCursor, page } from '@/lib/api';
+import { likeContains } from '@/lib/api/like';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { getSequelize } from '@/lib/db';
 import type { Design as DesignFile } from '@/simulation/model';
@@ -13,9 +14,6 @@ import { designSummary, variantSummary, type DesignSummary, type VariantSummary 
 export const VARIANTS_PER_DESIGN = 100;
 
 export const FIRST_VARIANT_NAME = 'Variant A';
-
-/** Escape LIKE wildcards so a search for "50%" means the text "50%". */
-const likeContains = (q: string) => `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 
 export async function listDesigns(
   enclosure: Enclosure,

@@ -68,7 +68,11 @@ export const REQUESTS: Record<string, RequestSpec> = {
   'GET /api/enclosures/[id]': {},
   'PATCH /api/enclosures/[id]': { body: () => ({ name: 'Renamed enclosure' }) },
   'DELETE /api/enclosures/[id]': {},
-  'GET /api/enclosures': { query: (w) => `organisationId=${w.orgA}&keeperId=${w.keeper1}` },
+  // Every list parameter, with a search that finds keeper 1's enclosure, so a leak would show its marker.
+  'GET /api/enclosures': {
+    query: (w) =>
+      `organisationId=${w.orgA}&keeperId=${w.keeper1}&q=enclosure&sort=keeper&dir=asc&offset=0&limit=10`,
+  },
   'POST /api/enclosures': { body: enclosureBody },
   'GET /api/health': {},
   'DELETE /api/invitations/[id]': {},

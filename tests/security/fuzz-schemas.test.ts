@@ -6,6 +6,7 @@ import fc from 'fast-check';
 import { ZodType } from 'zod';
 import { describe, expect, it } from 'vitest';
 import * as account from '@/lib/account/service';
+import * as enclosureList from '@/lib/api/enclosure-list';
 import * as enclosures from '@/lib/api/enclosures';
 import * as pagination from '@/lib/api/pagination';
 import * as apiSchemas from '@/lib/api/schemas';
@@ -22,6 +23,7 @@ import { checkProperty } from './fuzz-contract';
 
 const MODULES: Record<string, Record<string, unknown>> = {
   'lib/account/service': account,
+  'lib/api/enclosure-list': enclosureList,
   'lib/api/enclosures': enclosures,
   'lib/api/pagination': pagination,
   'lib/api/schemas': apiSchemas,
@@ -53,6 +55,10 @@ const inputArb: fc.Arbitrary<unknown> = fc.oneof(
       'role',
       'cursor',
       'limit',
+      'offset',
+      'q',
+      'sort',
+      'dir',
       '__proto__',
     ),
     fc.oneof(fc.constantFrom(...EDGE_VALUES), fc.jsonValue({ maxDepth: 2 }) as fc.Arbitrary<Json>),

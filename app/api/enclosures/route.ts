@@ -1,20 +1,16 @@
-import { z } from 'zod';
-import { afterCursor, allow, created, page, pageQuery, route } from '@/lib/api';
+import { allow, created, route } from '@/lib/api';
+import { enclosureListQuery, listEnclosures } from '@/lib/api/enclosure-list';
 import { assertKeeperInOrganisation, createEnclosureBody, enclosureJson } from '@/lib/api/enclosures';
-import { idSchema } from '@/lib/api/schemas';
 import { roleIn } from '@/lib/permissions';
 import { Enclosure, User } from '@/models';
 
 /**
- * Enclosures of an organisation (`?organisationId=`, optional `keeperId`). Owner and staff see all of
- * them; a keeper only their own.
+ * Enclosures of an organisation (`?organisationId=`, optional `keeperId`), searched, sorted and paged
+ * (`q`, `sort`, `dir`, `offset`, `limit`; see enclosure-list.ts). Owner and staff see all of them; a
+ * keeper only their own, whatever they search for.
  */
 export const GET = route({
-  query: z.object({
-    organisationId: idSchema('The organisation id'),
-    keeperId: idSchema('The keeper').optional(),
-    ...pageQuery,
-  }),
+  query: enclosureListQuery,
   handler: async ({ query, user }) => {
     const { organisationId } = query;
     const role = roleIn(user, organisationId);
@@ -25,13 +21,7 @@ export const GET = route({
       keeperId ? { kind: 'enclosure', organisationId, keeperId } : { kind: 'member', organisationId },
       'That organisation',
     );
-    const rows = await Enclosure.findAll({
-      where: { organisationId, ...(keeperId ? { keeperId } : {}), ...afterCursor(query.cursor) },
-      include: [{ model: User, as: 'keeper', attributes: ['id', 'name'] }],
-      order: [['id', 'ASC']],
-      limit: query.limit + 1,
-    });
-    return page(rows, query.limit, enclosureJson);
+    return listEnclosures({ ...query, keeperId });
   },
 });
 

@@ -1,0 +1,130 @@
+import { literal, Op, type OrderItem, type WhereOptions } from 'sequelize';
+import { z } from 'zod';
+import { getSequelize } from '@/lib/db';
+import {
+  defaultDescending,
+  ENCLOSURE_SORT_COLUMNS,
+  MAX_ENCLOSURE_SEARCH,
+  SORT_DIRECTIONS,
+  type EnclosureSortColumn,
+} from '@/lib/enclosures/list-view';
+import { Enclosure, User } from '@/models';
+import { enclosureJson } from './enclosures';
+import { likeContains } from './like';
+import { pageQuery } from './pagination';
+import { idSchema, textSchema } from './schemas';
+
+/**
+ * `GET /api/enclosures` query: search, sort and page of one organisation's enclosures.
+ *
+ * Paging is offset/limit with a total count rather than the id cursor other lists use: this list
+ * sorts by any of five columns (text, sizes, dates, the keeper's name on a joined table), and the
+ * table shows "page 3 of 8" with a link that reproduces that page. A keyset cursor would have to
+ * encode every sort key (with NULL handling and the join) and cannot jump to a page number; an
+ * organisation holds hundreds to a few thousand enclosures, where OFFSET over the
+ * (organisation_id, keeper_id) index costs little. The order always ends in name then id, so pages
+ * never overlap or skip while nothing changes.
+ */
+export const enclosureListQuery = z
+  .object({
+    organisationId: idSchema('The organisation id'),
+    keeperId: idSchema('The keeper').optional(),
+    q: textSchema('The search must be text.')
+      .trim()
+      .max(MAX_ENCLOSURE_SEARCH, `Keep the search to ${MAX_ENCLOSURE_SEARCH} characters.`)
+      .optional(),
+    sort: z
+      .enum(ENCLOSURE_SORT_COLUMNS, {
+        error: `Sort by one of: ${ENCLOSURE_SORT_COLUMNS.join(', ')}.`,
+      })
+      .default('updated'),
+    dir: z.enum(SORT_DIRECTIONS, { error: 'The direction must be asc or desc.' }).optional(),
+    offset: z.coerce
+      .number({ error: 'The offset must be a number.' })
+      .int('The offset must be a whole number.')
+      .min(0, 'The offset cannot be negative.')
+      .max(1_000_000, 'The offset can be at most 1000000.')
+      .default(0),
+    limit: pageQuery.limit,
+  })
+  .transform(({ dir, ...rest }) => ({
+    ...rest,
+    descending: dir ? dir === 'desc' : defaultDescending(rest.sort),
+  }));
+
+export type EnclosureListQuery = z.output<typeof enclosureListQuery>;
+
+// Raw SQL only from these constants, never from input. `Enclosure` and `keeper` are the aliases
+// Sequelize gives the table and the joined keeper.
+const E = (column: string) => `\`Enclosure\`.\`${column}\``;
+const KEEPER_NAME = '`keeper`.`name`';
+/** What the Animal column shows: the animal's name, then the species. */
+const ANIMAL_LABEL = `CONCAT_WS(' ', NULLIF(${E('animal_name')}, ''), NULLIF(${E('species_name')}, ''))`;
+
+/**
+ * ORDER BY for a column. Empty text (no animal, a keeper who left) sorts last in both directions:
+ * a list of blanks first is of no use to anyone. Ties fall to name, then id, so the order is total.
+ */
+export function enclosureOrder(column: EnclosureSortColumn, descending: boolean): OrderItem[] {
+  const d = descending ? 'DESC' : 'ASC';
+  const byColumn: Record<EnclosureSortColumn, OrderItem[]> = {
+    name: [[literal(E('name')), d]],
+    animal: [
+      [literal(`${ANIMAL_LABEL} = ''`), 'ASC'],
+      [literal(ANIMAL_LABEL), d],
+    ],
+    keeper: [
+      [literal(`COALESCE(${KEEPER_NAME}, '') = ''`), 'ASC'],
+      [literal(KEEPER_NAME), d],
+    ],
+    // Floor area decides which enclosure is bigger; height breaks ties.
+    size: [
+      [literal(`${E('width_cm')} * ${E('depth_cm')}`), d],
+      [literal(E('height_cm')), d],
+    ],
+    updated: [[literal(E('updated_at')), d]],
+  };
+  return [...byColumn[column], [literal(E('name')), 'ASC'], [literal(E('id')), 'ASC']];
+}
+
+/**
+ * Every word of the search must appear (anywhere, any order) in the enclosure's name, the animal's
+ * name, the species, or the keeper's name or e-mail. The database collation ignores case and accents.
+ */
+export function enclosureSearch(q: string | undefined): WhereOptions {
+  const words = (q ?? '').split(/\s+/).filter(Boolean);
+  if (words.length === 0) return {};
+  return {
+    [Op.and]: words.map((word) => {
+      const like = { [Op.like]: likeContains(word) };
+      return {
+        [Op.or]: [
+          { name: like },
+          { animalName: like },
+          { speciesName: like },
+          { '$keeper.name$': like },
+          { '$keeper.email$': like },
+        ],
+      };
+    }),
+  };
+}
+
+/**
+ * One page of an organisation's enclosures. The caller has already decided, with `can()`, whose
+ * enclosures this user may see and passes `keeperId` for a keeper: this only fetches.
+ */
+export async function listEnclosures(query: Omit<EnclosureListQuery, 'keeperId'> & { keeperId?: number }) {
+  getSequelize();
+  const { organisationId, keeperId, q, sort, descending, offset, limit } = query;
+  const { rows, count } = await Enclosure.findAndCountAll({
+    where: { organisationId, ...(keeperId ? { keeperId } : {}), ...enclosureSearch(q) },
+    include: [{ model: User, as: 'keeper', attributes: ['id', 'name'], required: false }],
+    order: enclosureOrder(sort, descending),
+    offset,
+    limit,
+  });
+  return { items: rows.map(enclosureJson), total: count, offset, limit };
+}
+
+export type EnclosureListPage = Awaited<ReturnType<typeof listEnclosures>>;
