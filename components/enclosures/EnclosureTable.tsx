@@ -1,41 +1,30 @@
 'use client';
 
-import {
-  type ColumnDef,
-  flexRender,
-  getCoreRowModel,
-  getFilteredRowModel,
-  getSortedRowModel,
-  useReactTable,
-} from '@tanstack/react-table';
+import { type ColumnDef, flexRender, getCoreRowModel, useReactTable } from '@tanstack/react-table';
 import Link from '@/components/ui/Link';
-import { useId, useMemo, useState } from 'react';
+import { useId, useMemo } from 'react';
+import { Notice } from '@/components/ui/Notice';
 import { button, focusRing, input, link } from '@/components/ui/styles';
 import { formatSize, type LengthUnit, useLengthUnit } from '@/components/ui/units';
 import {
   ariaSortFor,
-  compareEnclosures,
-  DEFAULT_ENCLOSURE_SORT,
-  type EnclosureSort,
+  ENCLOSURE_PAGE_SIZE,
+  type EnclosureListView,
   type EnclosureSortColumn,
-  matchesEnclosureSearch,
   nextSort,
-} from './enclosure-table-model';
+  pageCount,
+} from '@/lib/enclosures/list-view';
 import type { EnclosureView } from './types';
+import { type EnclosurePage, useEnclosureList } from './useEnclosureList';
 
 const cell = 'px-4 py-3 text-basalt-700';
 
-function columnsFor(showKeeper: boolean, unit: LengthUnit): ColumnDef<EnclosureView>[] {
-  // The library only sorts and searches columns that have an accessor, so each column names one.
-  const sortBy = (column: EnclosureSortColumn) => ({
-    id: column,
-    accessorFn: (e: EnclosureView) => e.id,
-    sortingFn: (a: { original: EnclosureView }, b: { original: EnclosureView }) =>
-      compareEnclosures(a.original, b.original, column),
-  });
-  const columns: (ColumnDef<EnclosureView> | false)[] = [
+type Column = ColumnDef<EnclosureView> & { id: EnclosureSortColumn };
+
+function columnsFor(showKeeper: boolean, unit: LengthUnit): Column[] {
+  const columns: (Column | false)[] = [
     {
-      ...sortBy('name'),
+      id: 'name',
       header: 'Enclosure',
       cell: ({ row: { original: e } }) => (
         <Link href={`/enclosures/${e.id}`} className={link}>
@@ -44,7 +33,7 @@ function columnsFor(showKeeper: boolean, unit: LengthUnit): ColumnDef<EnclosureV
       ),
     },
     {
-      ...sortBy('animal'),
+      id: 'animal',
       header: 'Animal',
       cell: ({ row: { original: e } }) =>
         e.animalName || e.speciesName ? (
@@ -58,12 +47,12 @@ function columnsFor(showKeeper: boolean, unit: LengthUnit): ColumnDef<EnclosureV
         ),
     },
     showKeeper && {
-      ...sortBy('keeper'),
+      id: 'keeper',
       header: 'Keeper',
       cell: ({ row: { original: e } }) => e.keeperName ?? 'Former member',
     },
     {
-      ...sortBy('size'),
+      id: 'size',
       header: 'Size (W × H × D)',
       cell: ({ row: { original: e } }) => (
         <span className="whitespace-nowrap tabular-nums">
@@ -72,7 +61,7 @@ function columnsFor(showKeeper: boolean, unit: LengthUnit): ColumnDef<EnclosureV
       ),
     },
     {
-      ...sortBy('updated'),
+      id: 'updated',
       header: 'Updated',
       cell: ({ row: { original: e } }) => (
         <time dateTime={e.updatedAt} className="whitespace-nowrap text-basalt-500">
@@ -81,40 +70,56 @@ function columnsFor(showKeeper: boolean, unit: LengthUnit): ColumnDef<EnclosureV
       ),
     },
   ];
-  return columns.filter((c): c is ColumnDef<EnclosureView> => Boolean(c));
+  return columns.filter((c): c is Column => Boolean(c));
 }
 
-/** The organisation's enclosures: searchable by name, animal, species and keeper; every column sorts. */
+/**
+ * The organisation's enclosures, searched, sorted and paged by the server (the table library only
+ * lays out the page it is given). Search, sort and page are in the address bar.
+ */
 export function EnclosureTable({
-  enclosures,
+  organisationId,
+  keeperId,
   showKeeper,
+  initial,
 }: {
-  enclosures: EnclosureView[];
+  organisationId: number;
+  /** Staff looking at one keeper's enclosures; a keeper's own list is narrowed by the server. */
+  keeperId?: number;
   showKeeper: boolean;
+  initial: { view: EnclosureListView; page: EnclosurePage };
 }) {
   const [unit] = useLengthUnit();
-  const [query, setQuery] = useState('');
-  const [sort, setSort] = useState<EnclosureSort>(DEFAULT_ENCLOSURE_SORT);
+  const { view, draft, setDraft, clearSearch, show, result } = useEnclosureList({
+    organisationId,
+    keeperId,
+    initial,
+  });
   const searchId = useId();
   const columns = useMemo(() => columnsFor(showKeeper, unit), [showKeeper, unit]);
-  // A stable sorting array: a fresh one each render makes the library re-sort and reset its page
-  // index on every render, which re-renders again without end (the page froze on the unit toggle).
-  const sorting = useMemo(() => [{ id: sort.column, desc: sort.descending }], [sort]);
+  const sorting = useMemo(() => [{ id: view.sort.column, desc: view.sort.descending }], [view.sort]);
+  const data = result.data;
+  const items = useMemo(() => data?.items ?? [], [data]);
+  const total = data?.total ?? 0;
+  const pages = pageCount(total);
+  // Rows of the previous view stay up while the next loads (or failed to): dimmed, and not counted.
+  const stale = result.isPlaceholderData || !data;
+  const busy = result.isFetching && stale;
   // The React Compiler skips this component because the table instance cannot be memoised; nothing
   // memoised receives the instance, so the known warning is silenced here and nowhere else.
   // eslint-disable-next-line react-hooks/incompatible-library
   const table = useReactTable({
-    data: enclosures,
+    data: items,
     columns,
-    state: { globalFilter: query, sorting },
-    autoResetPageIndex: false,
-    globalFilterFn: (row, _columnId, value: string) => matchesEnclosureSearch(row.original, value),
-    getColumnCanGlobalFilter: () => true,
+    state: { sorting, pagination: { pageIndex: view.page - 1, pageSize: ENCLOSURE_PAGE_SIZE } },
+    manualSorting: true,
+    manualFiltering: true,
+    manualPagination: true,
+    rowCount: total,
     getCoreRowModel: getCoreRowModel(),
-    getFilteredRowModel: getFilteredRowModel(),
-    getSortedRowModel: getSortedRowModel(),
   });
   const rows = table.getRowModel().rows;
+  const first = (view.page - 1) * ENCLOSURE_PAGE_SIZE + 1;
 
   return (
     <div>
@@ -126,32 +131,55 @@ export function EnclosureTable({
           <input
             id={searchId}
             type="search"
-            value={query}
-            onChange={(ev) => setQuery(ev.target.value)}
+            value={draft}
+            onChange={(ev) => setDraft(ev.target.value)}
+            maxLength={120}
             placeholder={showKeeper ? 'Name, animal, species or keeper' : 'Name, animal or species'}
             className={input}
           />
         </div>
         <p className="pb-2 text-caption text-basalt-500" aria-live="polite">
-          {query.trim()
-            ? `${rows.length} of ${enclosures.length} enclosures match`
-            : `${enclosures.length} enclosures`}
+          {/* The count of the rows shown; while another view loads, the old count would mislead. */}
+          {busy
+            ? 'Loading enclosures…'
+            : stale
+              ? ''
+              : view.q
+                ? `${total} ${total === 1 ? 'enclosure matches' : 'enclosures match'}`
+                : `${total} ${total === 1 ? 'enclosure' : 'enclosures'}`}
         </p>
       </div>
+      {result.isError && (
+        <div className="mb-3">
+          <Notice tone="error" title="The enclosures could not be loaded.">
+            <p>{result.error.message}</p>
+            <button
+              type="button"
+              className={`${button.secondary} mt-2`}
+              onClick={() => void result.refetch()}
+            >
+              Try again
+            </button>
+          </Notice>
+        </div>
+      )}
       <div className="overflow-x-auto rounded-lg border border-basalt-200 bg-white">
-        <table className="min-w-full divide-y divide-basalt-200 text-left text-body">
+        <table
+          className={`min-w-full divide-y divide-basalt-200 text-left text-body ${stale ? 'opacity-60' : ''}`}
+          aria-busy={busy}
+        >
           <caption className="sr-only">Enclosures</caption>
           <thead className="bg-basalt-50 text-caption uppercase tracking-wide text-basalt-600">
             {table.getHeaderGroups().map((group) => (
               <tr key={group.id}>
                 {group.headers.map((header) => {
                   const column = header.column.id as EnclosureSortColumn;
-                  const state = ariaSortFor(column, sort);
+                  const state = ariaSortFor(column, view.sort);
                   return (
                     <th key={header.id} scope="col" aria-sort={state} className="px-2 py-1 font-semibold">
                       <button
                         type="button"
-                        onClick={() => setSort((s) => nextSort(s, column))}
+                        onClick={() => show({ sort: nextSort(view.sort, column), page: 1 })}
                         className={`inline-flex items-center gap-1 rounded px-2 py-1 uppercase tracking-wide hover:bg-basalt-100 ${focusRing}`}
                       >
                         {flexRender(header.column.columnDef.header, header.getContext())}
@@ -177,15 +205,45 @@ export function EnclosureTable({
             ))}
           </tbody>
         </table>
-        {rows.length === 0 && (
+        {!stale && total === 0 && (
           <div className="px-4 py-6 text-center text-body text-basalt-600" role="status">
-            <p>No enclosure matches “{query.trim()}”.</p>
-            <button type="button" className={`${button.quiet} mt-2`} onClick={() => setQuery('')}>
-              Clear the search
-            </button>
+            {view.q ? (
+              <>
+                <p>No enclosure matches “{view.q}”.</p>
+                <button type="button" className={`${button.quiet} mt-2`} onClick={clearSearch}>
+                  Clear the search
+                </button>
+              </>
+            ) : (
+              <p>No enclosures here yet.</p>
+            )}
           </div>
         )}
       </div>
+      {total > ENCLOSURE_PAGE_SIZE && (
+        <nav aria-label="Pages of enclosures" className="mt-3 flex flex-wrap items-center justify-end gap-3">
+          <p className="text-caption text-basalt-600">
+            {first}–{Math.min(first + ENCLOSURE_PAGE_SIZE - 1, total)} of {total} · page {view.page} of{' '}
+            {pages}
+          </p>
+          <button
+            type="button"
+            className={button.secondary}
+            disabled={view.page <= 1}
+            onClick={() => show({ page: view.page - 1 })}
+          >
+            Previous page
+          </button>
+          <button
+            type="button"
+            className={button.secondary}
+            disabled={view.page >= pages}
+            onClick={() => show({ page: view.page + 1 })}
+          >
+            Next page
+          </button>
+        </nav>
+      )}
     </div>
   );
 }

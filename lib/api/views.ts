@@ -10,20 +10,6 @@ import { invitationJson } from '@/lib/auth/invitations';
  */
 export const PAGE_LIMIT = 500;
 
-export async function enclosureViews(organisationId: number, keeperId?: number) {
-  getSequelize();
-  const rows = await Enclosure.findAll({
-    where: { organisationId, ...(keeperId ? { keeperId } : {}) },
-    include: [{ model: User, as: 'keeper', attributes: ['id', 'name'] }],
-    order: [
-      ['name', 'ASC'],
-      ['id', 'ASC'],
-    ],
-    limit: PAGE_LIMIT + 1,
-  });
-  return { items: rows.slice(0, PAGE_LIMIT).map(enclosureJson), more: rows.length > PAGE_LIMIT };
-}
-
 export type MemberView = { userId: number; name: string; email: string; role: Role; joinedAt: string };
 
 export async function memberViews(organisationId: number, role?: Role): Promise<MemberView[]> {

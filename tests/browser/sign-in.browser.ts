@@ -56,11 +56,17 @@ describe('signing in', () => {
     const nameHeader = table.getByRole('columnheader', { name: 'Enclosure' });
     await expect.poll(() => nameHeader.getAttribute('aria-sort'), { timeout: 10_000 }).toBe('ascending');
     expect(await updatedHeader.getAttribute('aria-sort')).toBe('none');
+    // The server sorts: the rows follow once the page arrives, and the address carries the order.
     const collator = new Intl.Collator(undefined, { sensitivity: 'base', numeric: true });
-    const shown = (await table.locator('tbody a').allTextContents()).filter((n) =>
-      enclosureNames.includes(n),
-    );
-    expect(shown).toEqual([...enclosureNames].sort(collator.compare));
+    const demoShown = async () =>
+      (await table.locator('tbody a').allTextContents()).filter((n) => enclosureNames.includes(n));
+    await expect.poll(demoShown, { timeout: 10_000 }).toEqual([...enclosureNames].sort(collator.compare));
+    expect(new URL(page.url()).searchParams.get('sort')).toBe('name');
+    // Back returns to newest first; Forward to A–Z again.
+    await page.goBack();
+    await expect.poll(() => updatedHeader.getAttribute('aria-sort'), { timeout: 10_000 }).toBe('descending');
+    await page.goForward();
+    await expect.poll(() => nameHeader.getAttribute('aria-sort'), { timeout: 10_000 }).toBe('ascending');
 
     // Searching by a keeper's name keeps only their enclosures; a search with no match says so.
     const searched = keepers[1];
@@ -71,6 +77,13 @@ describe('signing in', () => {
     await expect
       .poll(() => table.locator('tbody a').allTextContents(), { timeout: 10_000 })
       .toEqual([...theirs].sort(collator.compare));
+    // The search is in the address too, so a reload (or a shared link) shows the same list.
+    await expect
+      .poll(() => new URL(page.url()).searchParams.get('q'), { timeout: 10_000 })
+      .toBe(searched.name);
+    await page.reload();
+    expect(await page.getByLabel('Search enclosures').inputValue()).toBe(searched.name);
+    expect(await table.locator('tbody a').allTextContents()).toEqual([...theirs].sort(collator.compare));
     await screenshot(page, 'sign-in-staff-enclosures-search');
     await search.fill('no such enclosure anywhere');
     await expect.poll(() => page.getByText('No enclosure matches').count(), { timeout: 10_000 }).toBe(1);

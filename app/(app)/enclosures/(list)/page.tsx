@@ -7,7 +7,10 @@ import { Notice } from '@/components/ui/Notice';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { button, link } from '@/components/ui/styles';
-import { enclosureViews, memberViews } from '@/lib/api/views';
+import { QueryProvider } from '@/components/designs/QueryProvider';
+import { listEnclosures } from '@/lib/api/enclosure-list';
+import { memberViews } from '@/lib/api/views';
+import { listQueryForView, viewFromSearchParams } from '@/lib/enclosures/list-view';
 import { can, roleIn } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
 
@@ -27,8 +30,11 @@ export default async function EnclosuresPage({
   const params = await searchParams;
   const keeperFilter =
     seesAll && typeof params.keeper === 'string' ? Number(params.keeper) || undefined : undefined;
-  const [{ items, more }, people] = await Promise.all([
-    enclosureViews(orgId, isKeeper ? user.id : keeperFilter),
+  // The first page is rendered here, for the view the address names; the table then fetches others.
+  const view = viewFromSearchParams(toSearchParams(params));
+  const keeperId = isKeeper ? user.id : keeperFilter;
+  const [firstPage, people] = await Promise.all([
+    listEnclosures({ organisationId: orgId, keeperId, ...listQueryForView(view) }),
     seesAll ? memberViews(orgId) : Promise.resolve(null),
   ]);
   const peopleOptions = people
@@ -66,7 +72,7 @@ export default async function EnclosuresPage({
         </Link>
         <NewEnclosure organisationId={orgId} people={peopleOptions} variant="secondary" />
       </div>
-      {items.length === 0 ? (
+      {firstPage.total === 0 && !view.q ? (
         <EmptyState
           title={filteredName ? `${filteredName} has no enclosures yet` : 'No enclosures yet'}
           action={
@@ -85,19 +91,23 @@ export default async function EnclosuresPage({
           )}
         </EmptyState>
       ) : (
-        <>
-          <EnclosureTable enclosures={items} showKeeper={!isKeeper} />
-          {more && (
-            // The server returns one page, A–Z by name; search and sort only see that page, so say so.
-            <div className="mt-3">
-              <Notice tone="info">
-                Only the first {items.length} enclosures (A–Z by name) are listed; search and sort cover those
-                only.{seesAll && ' Pick a keeper from the Keepers page to see all of theirs.'}
-              </Notice>
-            </div>
-          )}
-        </>
+        <QueryProvider>
+          <EnclosureTable
+            organisationId={orgId}
+            keeperId={isKeeper ? undefined : keeperFilter}
+            showKeeper={!isKeeper}
+            initial={{ view, page: firstPage }}
+          />
+        </QueryProvider>
       )}
     </>
   );
+}
+
+function toSearchParams(params: Record<string, string | string[]>): URLSearchParams {
+  const out = new URLSearchParams();
+  for (const [key, value] of Object.entries(params)) {
+    for (const v of Array.isArray(value) ? value : [value]) out.append(key, v);
+  }
+  return out;
 }
