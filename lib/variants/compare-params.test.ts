@@ -26,4 +26,12 @@ describe('compare page parameters', () => {
     expect(compareQuery(p)).toBe('a=1&b=2&field=uvb&months=12');
     expect(parseCompareParams(Object.fromEntries(new URLSearchParams(compareQuery(p))))).toEqual(p);
   });
+  it('tells "no species" (species=none) from "the enclosure’s species" (no species at all)', () => {
+    expect(parseCompareParams({ a: '1', species: 'none' }).species).toBe('none');
+    expect(parseCompareParams({ a: '1' }).species).toBeUndefined();
+    expect(parseCompareParams({ a: '1', species: 'all' }).species).toBeUndefined();
+    const none = { a: 1, b: 2, field: 'uvi' as const, months: 0, species: 'none' as const };
+    expect(compareQuery(none)).toBe('a=1&b=2&field=uvi&months=0&species=none');
+    expect(parseCompareParams(Object.fromEntries(new URLSearchParams(compareQuery(none))))).toEqual(none);
+  });
 });

@@ -1,7 +1,10 @@
 import { z } from 'zod';
 import type { FieldName } from '@/simulation';
 
-/** The compare page's choices, all in its URL: `?a=&b=&field=uvi&months=0&species=`. */
+/**
+ * The compare page's choices, all in its URL: `?a=&b=&field=uvi&months=0&species=`. Without `species`
+ * the page assesses against the species of variant A's enclosure; `species=none` asks for no species.
+ */
 export const MONTH_CHOICES = [0, 3, 6, 12, 18, 24] as const;
 
 const id = z.coerce.number().int().positive().optional().catch(undefined);
@@ -11,10 +14,20 @@ export const compareParamsSchema = z.object({
   b: id,
   field: z.enum(['uvi', 'uvb', 'tempC']).catch('uvi'),
   months: z.coerce.number().int().min(0).max(120).catch(0),
-  species: id,
+  species: z
+    .union([z.literal('none'), z.coerce.number().int().positive()])
+    .optional()
+    .catch(undefined),
 });
 
-export type CompareParams = { a?: number; b?: number; field: FieldName; months: number; species?: number };
+export type CompareParams = {
+  a?: number;
+  b?: number;
+  field: FieldName;
+  months: number;
+  /** A species sheet id; 'none' for no species; undefined for "the enclosure's species". */
+  species?: number | 'none';
+};
 
 /** Reads the URL's search parameters; anything malformed falls back to its default. */
 export function parseCompareParams(search: Record<string, string | string[] | undefined>): CompareParams {

@@ -170,6 +170,16 @@ describe('staff journey', () => {
       const diff = page.getByTestId('diff-row');
       await expect.poll(() => diff.count(), eventually).toBe(1);
       expect(await diff.first().innerText()).toContain(uv.name ?? uv.id);
+      // With no species in the address, both sides are checked against the enclosure's bearded dragon.
+      const speciesPicker = page.getByRole('combobox', { name: /^Species/ });
+      expect(await speciesPicker.inputValue()).toBe(speciesValue);
+      await page.getByRole('heading', { name: 'Species check: Bearded dragon' }).first().waitFor();
+      // "None" is a choice of its own, kept in the address.
+      await speciesPicker.selectOption('');
+      await page.waitForURL(/species=none/);
+      await expect
+        .poll(() => page.getByRole('heading', { name: /^Species check/ }).count(), eventually)
+        .toBe(0);
       await shot(page, '07-compare');
 
       // 6. Share the first variant, then download its PDF report.

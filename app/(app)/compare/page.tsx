@@ -19,11 +19,11 @@ export default async function ComparePage({
 }: {
   searchParams: Promise<Record<string, string | string[] | undefined>>;
 }) {
-  const params = parseCompareParams(await searchParams);
-  const user = await requireUser(`/compare?${compareQuery(params)}`);
+  const asked = parseCompareParams(await searchParams);
+  const user = await requireUser(`/compare?${compareQuery(asked)}`);
   const [a, b, options] = await Promise.all([
-    params.a ? getVariantForUser(user, params.a) : null,
-    params.b ? getVariantForUser(user, params.b) : null,
+    asked.a ? getVariantForUser(user, asked.a) : null,
+    asked.b ? getVariantForUser(user, asked.b) : null,
     visibleVariants(user),
   ]);
   // Species come from the organisation of the variants shown (or the one the user is working in).
@@ -37,6 +37,10 @@ export default async function ComparePage({
     species = await speciesOptions(orgId);
   }
   const suggested = attachedSpecies(species, a?.enclosure.speciesName ?? b?.enclosure.speciesName);
+  // Unless the URL names a species (or `none`), assess against the species of variant A's enclosure:
+  // that is the animal the comparison is for. It stays out of the URL, so picking another variant A
+  // brings that enclosure's species; a species picked on the page (or None) is written into the URL.
+  const ofA = attachedSpecies(species, a?.enclosure.speciesName);
   return (
     <>
       <PageHeader
@@ -44,13 +48,14 @@ export default async function ComparePage({
         lead="Two variants side by side on the same colour scale, with what differs between them. Every figure is an estimate to verify with a meter and thermometer."
       />
       <CompareView
-        params={params}
+        params={asked}
         a={a}
         b={b}
-        missing={{ a: Boolean(params.a && !a), b: Boolean(params.b && !b) }}
+        missing={{ a: Boolean(asked.a && !a), b: Boolean(asked.b && !b) }}
         options={options}
         species={species}
         suggestedSpeciesId={suggested?.id ?? null}
+        defaultSpeciesId={ofA?.id ?? null}
       />
     </>
   );

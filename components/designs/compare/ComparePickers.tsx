@@ -58,12 +58,15 @@ export function ComparePickers({
   options,
   species,
   suggestedSpeciesId,
+  shownSpeciesId,
   onChange,
 }: {
   params: CompareParams;
   options: VariantOption[];
   species: SpeciesOption[];
   suggestedSpeciesId: number | null;
+  /** The species assessed against: the URL's choice, else variant A's enclosure's. */
+  shownSpeciesId: number | null;
   onChange: (next: CompareParams) => void;
 }) {
   const set = (patch: Partial<CompareParams>) => onChange({ ...params, ...patch });
@@ -126,8 +129,9 @@ export function ComparePickers({
           Species
           <select
             className={input}
-            value={params.species ?? ''}
-            onChange={(e) => set({ species: e.target.value ? Number(e.target.value) : undefined })}
+            value={shownSpeciesId ?? ''}
+            // "None" is written as species=none: an absent species means the enclosure's own.
+            onChange={(e) => set({ species: e.target.value ? Number(e.target.value) : 'none' })}
           >
             <option value="">None (fields and differences only)</option>
             {species.map((s) => (
@@ -137,7 +141,10 @@ export function ComparePickers({
             ))}
           </select>
         </label>
-        {suggested && params.species !== suggested.id && (
+        {params.species === undefined && shownSpeciesId !== null && (
+          <span className="text-caption text-basalt-500">from variant A’s enclosure</span>
+        )}
+        {suggested && shownSpeciesId !== suggested.id && (
           <button type="button" className={btn.small} onClick={() => set({ species: suggested.id })}>
             Use {suggested.name} (the enclosure’s species)
           </button>

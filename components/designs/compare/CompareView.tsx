@@ -35,6 +35,7 @@ export function CompareView({
   options,
   species,
   suggestedSpeciesId,
+  defaultSpeciesId,
 }: {
   params: CompareParams;
   a: VariantForPage | null;
@@ -43,6 +44,8 @@ export function CompareView({
   options: VariantOption[];
   species: SpeciesOption[];
   suggestedSpeciesId: number | null;
+  /** Used when the URL names no species: the species of variant A's enclosure. */
+  defaultSpeciesId: number | null;
 }) {
   const router = useRouter();
   const pathname = usePathname();
@@ -50,7 +53,8 @@ export function CompareView({
   const go = (next: CompareParams) =>
     startNavigation(() => router.replace(`${pathname}?${compareQuery(next)}`, { scroll: false }));
 
-  const sheet = species.find((s) => s.id === params.species) ?? null;
+  const speciesId = params.species === undefined ? defaultSpeciesId : params.species;
+  const sheet = species.find((s) => s.id === speciesId) ?? null;
   const [sides, setSides] = useState<{ key: string; a: Side | null; b: Side | null; error?: string } | null>(
     null,
   );
@@ -93,6 +97,7 @@ export function CompareView({
         options={options}
         species={species}
         suggestedSpeciesId={suggestedSpeciesId}
+        shownSpeciesId={sheet?.id ?? null}
         onChange={go}
       />
       {options.length === 0 && (
