@@ -11,9 +11,18 @@ import { formatValue } from './format';
 
 type Reading = LampDetail['readings'][number];
 
-function when(iso: string) {
-  const d = new Date(iso);
-  return `${d.toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' })} ${d.toLocaleTimeString(undefined, { hour: '2-digit', minute: '2-digit' })}`;
+const day = (iso: string) =>
+  new Date(iso).toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
+const time = (iso: string) =>
+  new Date(iso).toLocaleTimeString(undefined, { hour: '2-digit', minute: '2-digit' });
+const when = (iso: string) => `${day(iso)} ${time(iso)}`;
+
+function TrashIcon() {
+  return (
+    <svg viewBox="0 0 20 20" width="18" height="18" aria-hidden="true" focusable="false" fill="currentColor">
+      <path d="M8 2h4a1 1 0 0 1 1 1v1h4a1 1 0 1 1 0 2h-.1l-.8 10.2A2 2 0 0 1 14.1 18H5.9a2 2 0 0 1-2-1.8L3.1 6H3a1 1 0 0 1 0-2h4V3a1 1 0 0 1 1-1Zm-2.9 4 .8 10h8.2l.8-10H5.1ZM8 8a1 1 0 0 1 1 1v5a1 1 0 1 1-2 0V9a1 1 0 0 1 1-1Zm4 0a1 1 0 0 1 1 1v5a1 1 0 1 1-2 0V9a1 1 0 0 1 1-1Z" />
+    </svg>
+  );
 }
 
 /** The lamp's readings, newest first, with delete and an undo for the last delete. */
@@ -74,11 +83,11 @@ export function ReadingsTable({ readings, canEdit }: { readings: Reading[]; canE
         </Notice>
       )}
       {error && <Notice tone="error">{error}</Notice>}
-      <div className="max-h-96 overflow-auto rounded-lg border border-basalt-200 bg-white">
-        <table
-          className="min-w-full divide-y divide-basalt-200 text-left text-body"
-          data-testid="readings-table"
-        >
+      {/* Four compact columns, so the table fits its half of the page at laptop width (1280 px)
+          without a sideways scroll: date over time, value over distance, meter over note, and
+          the delete action as a small labelled icon button. */}
+      <div className="max-h-96 overflow-y-auto rounded-lg border border-basalt-200 bg-white">
+        <table className="w-full divide-y divide-basalt-200 text-left text-body" data-testid="readings-table">
           <caption className="sr-only">Readings, newest first</caption>
           <thead className="sticky top-0 bg-basalt-50 text-caption uppercase tracking-wide text-basalt-600">
             <tr>
@@ -86,19 +95,13 @@ export function ReadingsTable({ readings, canEdit }: { readings: Reading[]; canE
                 Taken
               </th>
               <th scope="col" className="px-3 py-2">
-                Value
+                Reading
               </th>
               <th scope="col" className="px-3 py-2">
-                Distance
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Meter
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Note
+                Meter and note
               </th>
               {canEdit && (
-                <th scope="col" className="px-3 py-2">
+                <th scope="col" className="w-10 px-1 py-2">
                   <span className="sr-only">Actions</span>
                 </th>
               )}
@@ -106,21 +109,42 @@ export function ReadingsTable({ readings, canEdit }: { readings: Reading[]; canE
           </thead>
           <tbody className="divide-y divide-basalt-100">
             {rows.map((r) => (
-              <tr key={r.id}>
-                <td className="whitespace-nowrap px-3 py-2 text-basalt-700">{when(r.takenAt)}</td>
-                <td className="whitespace-nowrap px-3 py-2 tabular-nums">{formatValue(r.value, r.unit)}</td>
-                <td className="whitespace-nowrap px-3 py-2 tabular-nums">
-                  {formatLength(r.distanceCm, unit)} {unit}
+              <tr key={r.id} className="align-top">
+                <td className="px-3 py-2 text-basalt-700">
+                  <time dateTime={r.takenAt}>
+                    <span className="block whitespace-nowrap">{day(r.takenAt)}</span>
+                    <span className="block whitespace-nowrap text-caption text-basalt-500">
+                      {time(r.takenAt)}
+                    </span>
+                  </time>
                 </td>
-                <td className="px-3 py-2 text-basalt-600">{r.meter ?? '—'}</td>
+                <td className="px-3 py-2">
+                  <span className="block whitespace-nowrap font-medium tabular-nums">
+                    {formatValue(r.value, r.unit)}
+                  </span>
+                  <span className="block whitespace-nowrap text-caption tabular-nums text-basalt-500">
+                    at {formatLength(r.distanceCm, unit)} {unit}
+                  </span>
+                </td>
                 <td className="px-3 py-2 text-basalt-600">
-                  {r.note ?? ''}
-                  {r.uploadId && <span className="ml-1 text-caption text-basalt-500">(imported)</span>}
+                  <span className="block">{r.meter ?? '—'}</span>
+                  {(r.note || r.uploadId) && (
+                    <span className="block text-caption text-basalt-500">
+                      {r.note ?? ''}
+                      {r.uploadId && <span className={r.note ? 'ml-1' : undefined}>(imported)</span>}
+                    </span>
+                  )}
                 </td>
                 {canEdit && (
-                  <td className="px-3 py-2 text-right">
-                    <button type="button" className={button.quietDanger} onClick={() => remove(r)}>
-                      Delete
+                  <td className="px-1 py-1.5 text-right">
+                    <button
+                      type="button"
+                      className={`${button.quietDanger} p-1.5`}
+                      onClick={() => remove(r)}
+                      aria-label={`Delete the reading of ${when(r.takenAt)}`}
+                      title="Delete this reading"
+                    >
+                      <TrashIcon />
                     </button>
                   </td>
                 )}

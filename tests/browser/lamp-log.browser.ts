@@ -37,6 +37,22 @@ describe('lamp log', () => {
     await expect.poll(() => chart.innerText()).toContain('Fitted decay');
     await screenshot(page, 'lamp-log-chart');
 
+    // At laptop width (the harness opens 1280 × 800) the readings fit their column, the delete
+    // action included: no sideways scroll. Each delete button says which reading it deletes.
+    const readings = page.getByTestId('readings-table');
+    const overflow = await readings.evaluate(
+      (t) => t.parentElement!.scrollWidth - t.parentElement!.clientWidth,
+    );
+    expect(overflow).toBe(0);
+    const deletes = readings.getByRole('button', { name: /^Delete the reading of \d{1,2} \w+ \d{4} / });
+    expect(await deletes.count()).toBe(await readings.locator('tbody tr').count());
+    await deletes.first().focus();
+    expect(
+      await deletes
+        .first()
+        .evaluate((b) => b === document.activeElement && b.getBoundingClientRect().width > 0),
+    ).toBe(true);
+
     // A reading typed in (in inches) joins the chart.
     const before = await points.count();
     await page.getByRole('button', { name: 'in', exact: true }).click();
