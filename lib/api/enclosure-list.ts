@@ -54,12 +54,13 @@ export const enclosureListQuery = z
 
 export type EnclosureListQuery = z.output<typeof enclosureListQuery>;
 
-// Raw SQL only from these constants, never from input. `Enclosure` and `keeper` are the aliases
-// Sequelize gives the table and the joined keeper.
-const E = (column: string) => `\`Enclosure\`.\`${column}\``;
+// Raw SQL only from these constants, never from input. Sequelize aliases the table by the model
+// class's name, which a production build minifies, so the alias is read at run time; `keeper` is the
+// association's own alias.
+const E = (column: string) => `\`${Enclosure.name}\`.\`${column}\``;
 const KEEPER_NAME = '`keeper`.`name`';
 /** What the Animal column shows: the animal's name, then the species. */
-const ANIMAL_LABEL = `CONCAT_WS(' ', NULLIF(${E('animal_name')}, ''), NULLIF(${E('species_name')}, ''))`;
+const animalLabel = () => `CONCAT_WS(' ', NULLIF(${E('animal_name')}, ''), NULLIF(${E('species_name')}, ''))`;
 
 /**
  * ORDER BY for a column. Empty text (no animal, a keeper who left) sorts last in both directions:
@@ -68,23 +69,23 @@ const ANIMAL_LABEL = `CONCAT_WS(' ', NULLIF(${E('animal_name')}, ''), NULLIF(${E
 export function enclosureOrder(column: EnclosureSortColumn, descending: boolean): OrderItem[] {
   const d = descending ? 'DESC' : 'ASC';
   const byColumn: Record<EnclosureSortColumn, OrderItem[]> = {
-    name: [[literal(E('name')), d]],
+    name: [['name', d]],
     animal: [
-      [literal(`${ANIMAL_LABEL} = ''`), 'ASC'],
-      [literal(ANIMAL_LABEL), d],
+      [literal(`${animalLabel()} = ''`), 'ASC'],
+      [literal(animalLabel()), d],
     ],
     keeper: [
       [literal(`COALESCE(${KEEPER_NAME}, '') = ''`), 'ASC'],
-      [literal(KEEPER_NAME), d],
+      [{ model: User, as: 'keeper' }, 'name', d],
     ],
     // Floor area decides which enclosure is bigger; height breaks ties.
     size: [
       [literal(`${E('width_cm')} * ${E('depth_cm')}`), d],
-      [literal(E('height_cm')), d],
+      ['heightCm', d],
     ],
-    updated: [[literal(E('updated_at')), d]],
+    updated: [['updatedAt', d]],
   };
-  return [...byColumn[column], [literal(E('name')), 'ASC'], [literal(E('id')), 'ASC']];
+  return [...byColumn[column], ['name', 'ASC'], ['id', 'ASC']];
 }
 
 /**

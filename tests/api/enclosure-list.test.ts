@@ -4,7 +4,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import * as collection from '@/app/api/enclosures/route';
 import { ENCLOSURE_SORT_COLUMNS, type EnclosureSortColumn } from '@/lib/enclosures/list-view';
-import type { Organisation, User } from '@/models';
+import { Enclosure, type Organisation, type User } from '@/models';
 import {
   addMember,
   closeDatabase,
@@ -170,6 +170,23 @@ describe('GET /api/enclosures: every sort, both ways', () => {
       });
     }
   }
+
+  it('still sorts when a production build renames the model class (the table alias follows it)', async () => {
+    // Sequelize aliases the table by the class name, which the bundler minifies: a hard-coded
+    // `Enclosure` in raw SQL broke every sort of the built app.
+    const original = Object.getOwnPropertyDescriptor(Enclosure, 'name')!;
+    Object.defineProperty(Enclosure, 'name', { ...original, value: 'q1' });
+    try {
+      for (const column of ENCLOSURE_SORT_COLUMNS) {
+        const r = await get(owner, `sort=${column}&dir=asc&limit=100&q=vivarium`);
+        expect(r.status).toBe(200);
+        expect(ids(r.body.items)).toEqual(expectedOrder(made, column, false));
+      }
+    } finally {
+      Object.defineProperty(Enclosure, 'name', original);
+    }
+    expect(Enclosure.name).toBe('Enclosure');
+  });
 
   it('puts enclosures without an animal or species after the rest, in both directions', async () => {
     for (const dir of ['asc', 'desc']) {
