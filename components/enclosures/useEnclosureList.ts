@@ -67,7 +67,10 @@ export function useEnclosureList({
   const [sentQ, setSentQ] = useState(view.q);
   if (view.q !== seenQ) {
     setSeenQ(view.q);
-    if (view.q !== sentQ) setDraft(view.q);
+    if (view.q !== sentQ) {
+      setDraft(view.q);
+      setSentQ(view.q);
+    }
   }
 
   useEffect(() => {

@@ -81,6 +81,15 @@ describe('signing in', () => {
     await expect
       .poll(() => new URL(page.url()).searchParams.get('q'), { timeout: 10_000 })
       .toBe(searched.name);
+    // Back clears the search box with the search; Forward brings both back.
+    await page.goBack();
+    await expect.poll(() => search.inputValue(), { timeout: 10_000 }).toBe('');
+    await expect.poll(demoShown, { timeout: 10_000 }).toEqual([...enclosureNames].sort(collator.compare));
+    await page.goForward();
+    await expect.poll(() => search.inputValue(), { timeout: 10_000 }).toBe(searched.name);
+    await expect
+      .poll(() => table.locator('tbody a').allTextContents(), { timeout: 10_000 })
+      .toEqual([...theirs].sort(collator.compare));
     await page.reload();
     expect(await page.getByLabel('Search enclosures').inputValue()).toBe(searched.name);
     expect(await table.locator('tbody a').allTextContents()).toEqual([...theirs].sort(collator.compare));
