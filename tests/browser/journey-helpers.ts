@@ -74,9 +74,12 @@ export async function staffPage(browser: Browser): Promise<Page> {
   return page;
 }
 
-/** The id of a demo enclosure, as the staff member's enclosure list links it. */
+/**
+ * The id of a demo enclosure, as the staff member's enclosure list links it. The list is paged and
+ * other tests add enclosures, so it is searched for by name (the search lives in the address).
+ */
 export async function enclosureIdByName(page: Page, name: string): Promise<number> {
-  await page.goto('/enclosures');
+  await page.goto(`/enclosures?q=${encodeURIComponent(name)}`);
   const href = await page
     .getByRole('table', { name: 'Enclosures' })
     .getByRole('link', { name, exact: true })

@@ -46,7 +46,8 @@ describe('variants, comparison and share links', () => {
       await signIn(page, staff.email, staff.password);
 
       // A customer's enclosure from the demo scenario.
-      await page.goto('/enclosures');
+      // Searched for: the list is paged, and other tests add enclosures.
+      await page.goto('/enclosures?q=Gecko%20tank');
       await page.getByRole('link', { name: 'Gecko tank' }).click();
       await page.getByRole('heading', { name: 'Designs', exact: true }).waitFor();
       const enclosurePath = new URL(page.url()).pathname;
