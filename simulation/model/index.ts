@@ -6,3 +6,4 @@ export * from './materials';
 export * from './species';
 export * from './resolve';
 export * from './presets';
+export * from './backdrop';

@@ -134,6 +134,23 @@ export const probePointSchema = z.strictObject({
   label: z.string().max(200).optional(),
 });
 
+/**
+ * A photo of the real enclosure drawn under the design in the studio, to trace over (BRIEF §2.10):
+ * which uploaded photo (its id; the studio draws it only for someone who may read that upload) and
+ * where it lies, in design cm (x, y its bottom-left corner, y up), with its opacity and whether it is
+ * shown. Default: absent — no photo. The engine never reads it: it is the user's tracing aid, not
+ * part of the physics.
+ */
+export const backdropSchema = z.strictObject({
+  uploadId: z.number().int('must be a whole number').positive('must be a photo id (a positive number)'),
+  x: coord,
+  y: coord,
+  width: size(10000),
+  height: size(10000),
+  opacity: z.number().finite().min(0.05).max(1),
+  visible: z.boolean(),
+});
+
 function checkUniqueIds(items: { id: string }[], key: string, ctx: z.RefinementCtx) {
   const seen = new Set<string>();
   items.forEach((item, i) => {
@@ -152,6 +169,7 @@ export const designSchema = z
     objects: z.array(designObjectSchema).max(500),
     probes: z.array(probePointSchema).max(100).optional(),
     notes: z.string().max(20000).optional(),
+    backdrop: backdropSchema.optional(),
   })
   .superRefine((d, ctx) => {
     checkUniqueIds(d.objects, 'objects', ctx);
@@ -168,6 +186,7 @@ export type PerchObject = z.infer<typeof perchSchema>;
 export type LedgeObject = z.infer<typeof ledgeSchema>;
 export type HideObject = z.infer<typeof hideSchema>;
 export type FoliageObject = z.infer<typeof foliageSchema>;
+export type Backdrop = z.infer<typeof backdropSchema>;
 export type ProbePoint = z.infer<typeof probePointSchema>;
 export type Enclosure = z.infer<typeof enclosureSchema>;
 export type DecayCurveInput = z.infer<typeof decayCurveSchema>;
