@@ -10,6 +10,7 @@ import { useBands } from './fields/useBands';
 import { useSimulation } from './fields/useSimulation';
 import { StudioContext, useStudio } from './hooks/useStudio';
 import { useShortcuts } from './hooks/useShortcuts';
+import { useBackdropImage } from './hooks/useBackdropImage';
 import { ConflictBanner, RestoreBanner, ViewOnlyBanner } from './panels/Banners';
 import { CanvasLegend } from './panels/CanvasLegend';
 import { HelpDialog } from './panels/HelpDialog';
@@ -22,7 +23,7 @@ import type { KeyValueStorage, Loaded, StudioPersistence } from './persistence/t
 import { designFileName, downloadDesign } from './persistence/download';
 import { useAutosave } from './persistence/useAutosave';
 import { createAtom } from './state/atom';
-import { pickPrefs, type StoredPrefs } from './state/session';
+import { pickPrefs, type EnclosurePhotos, type StoredPrefs } from './state/session';
 import { StudioStore } from './state/store';
 import type { StudioSpecies } from './state/types';
 
@@ -70,6 +71,8 @@ export interface StudioProps {
   /** View only: the design can be inspected, probed and checked but not changed. */
   readOnly?: boolean;
   storage?: KeyValueStorage;
+  /** The enclosure's photos this user may see, for the backdrop; absent without an enclosure. */
+  photos?: EnclosurePhotos;
 }
 
 export default function Studio(props: StudioProps) {
@@ -123,6 +126,7 @@ function StudioEditor({
   initialSpeciesId,
   readOnly = false,
   storage: storageProp,
+  photos,
 }: StudioProps & { loaded: Loaded }) {
   const storage = useMemo(() => storageProp ?? window.localStorage, [storageProp]);
   const [store] = useState(
@@ -132,6 +136,7 @@ function StudioEditor({
         {
           ...readPrefs(storage),
           speciesId: initialSpeciesId ?? (species.length === 1 ? species[0]!.id : null),
+          photos: photos ?? null,
         },
         { readOnly },
       ),
@@ -175,6 +180,7 @@ function StudioEditor({
   }, [sim.assessment, highlightId]);
   const highlight = highlighted?.shape ?? null;
   const summaryId = useId();
+  const photo = useBackdropImage(store);
 
   return (
     <StudioContext.Provider value={ctx}>
@@ -205,6 +211,7 @@ function StudioEditor({
               probeReadings={sim.probeReadings}
               highlight={highlight}
               summaryId={summaryId}
+              photo={photo}
             />
             <ObjectSummary id={summaryId} highlight={highlighted} />
             {fieldsVisible && <CanvasLegend field={field} temp={tempUnit} legend={legend} />}

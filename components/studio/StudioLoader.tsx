@@ -8,6 +8,7 @@ import { exampleDesign } from './examples/exampleDesign';
 import { httpPersistence } from './persistence/http';
 import { localPersistence } from './persistence/local';
 import type { Loaded } from './persistence/types';
+import type { EnclosurePhotos } from './state/session';
 import type { StudioSpecies } from './state/types';
 
 const Studio = dynamic(() => import('./Studio'), {
@@ -30,6 +31,7 @@ export function StudioLoader({
   initial,
   initialSpeciesId,
   readOnly,
+  photos,
 }: {
   source: StudioSource;
   species: StudioSpecies[];
@@ -39,6 +41,8 @@ export function StudioLoader({
   initial?: Loaded;
   initialSpeciesId?: string | null;
   readOnly?: boolean;
+  /** The enclosure's backdrop photos this user may see (variant studios only). */
+  photos?: EnclosurePhotos;
 }) {
   const key = source.kind === 'variant' ? source.variantId : 'scratch';
   const persistence = useMemo(
@@ -70,6 +74,7 @@ export function StudioLoader({
         initial={initial}
         initialSpeciesId={initialSpeciesId}
         readOnly={readOnly}
+        photos={source.kind === 'variant' ? photos : undefined}
       />
     </div>
   );

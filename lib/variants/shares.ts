@@ -4,6 +4,7 @@ import type { CurrentUser } from '@/lib/auth/session-user';
 import { config } from '@/lib/config';
 import { getSequelize } from '@/lib/db';
 import { Design, Enclosure, Organisation, ShareLink, Variant } from '@/models';
+import { physicsOf } from '@/simulation/model/backdrop';
 import { readStoredDesign } from './stored-design';
 import { hashShareToken, isWellFormedShareToken, newShareToken, shareLinkState, shareUrl } from './tokens';
 import { wholeSecond } from './time';
@@ -100,7 +101,8 @@ export async function resolveShareToken(token: string, now = new Date()): Promis
     organisationName: enclosure.organisation?.name ?? '',
     organisationId: enclosure.organisationId,
     speciesName: enclosure.speciesName ?? null,
-    design: readStoredDesign(variant.designJson),
+    // Without its photo backdrop: a visitor with the link may not read the enclosure's uploads.
+    design: physicsOf(readStoredDesign(variant.designJson)),
     expiresAt: share.expiresAt ? share.expiresAt.toISOString() : null,
   };
 }

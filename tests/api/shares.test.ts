@@ -5,7 +5,7 @@ import * as sharesRoute from '@/app/api/variants/[id]/shares/route';
 import * as sharedReportRoute from '@/app/s/[token]/report/route';
 import { resolveShareToken } from '@/lib/variants/shares';
 import { hashShareToken } from '@/lib/variants/tokens';
-import { ShareLink } from '@/models';
+import { ShareLink, Variant } from '@/models';
 import {
   createEnclosure,
   createMember,
@@ -84,6 +84,18 @@ describe('share links', () => {
     expect(pdf.status).toBe(200);
     expect(pdf.res.headers.get('content-type')).toBe('application/pdf');
     expect((await pdf.res.arrayBuffer()).byteLength).toBeGreaterThan(1000);
+  });
+
+  it('shows the design without its photo backdrop (the visitor may not read the enclosure’s photos)', async () => {
+    const w = await world();
+    const variant = (await Variant.findByPk(w.variantId))!;
+    const design = JSON.parse(variant.designJson) as Record<string, unknown>;
+    const backdrop = { uploadId: 41, x: 0, y: 0, width: 120, height: 60, opacity: 0.6, visible: true };
+    await variant.update({ designJson: JSON.stringify({ ...design, backdrop }) });
+    const { token } = (await share(w)).body.share;
+    const s = await resolveShareToken(token);
+    expect(s!.design).toEqual(design);
+    expect('backdrop' in s!.design).toBe(false);
   });
 
   it('stops working once revoked (404), and revoking twice keeps the first time', async () => {

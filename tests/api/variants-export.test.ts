@@ -37,7 +37,7 @@ const design = {
   ],
 };
 
-async function world(speciesName: string | null) {
+async function world(speciesName: string | null, body: Record<string, unknown> = design) {
   const org = await createOrganisation('Fernhollow Test Rooms');
   const { user: keeper } = await createMember('keeper', org);
   const enclosure = await createEnclosure(org, keeper, { name: 'Desert tank', speciesName });
@@ -47,10 +47,10 @@ async function world(speciesName: string | null) {
     path: `/api/enclosures/${enclosure.id}/designs`,
     params: { id: enclosure.id },
     user: keeper,
-    body: { name: 'Summer plan', variantName: 'Rock under the tube', design },
+    body: { name: 'Summer plan', variantName: 'Rock under the tube', design: body },
   });
   expect(made.status).toBe(201);
-  return { keeper, variantId: made.body.variant.id as number };
+  return { keeper, enclosure, variantId: made.body.variant.id as number };
 }
 
 const exportAs = (w: Awaited<ReturnType<typeof world>>, query: string) =>
@@ -75,6 +75,24 @@ describe('export', () => {
       user: w.keeper,
     });
     expect(r.body).toEqual(stored.body.variant.design);
+  });
+
+  it('keeps a photo backdrop through upload, save and download; a bad one is refused naming the field', async () => {
+    const backdrop = { uploadId: 5, x: -2, y: 0, width: 124, height: 61.5, opacity: 0.45, visible: false };
+    const withPhoto = { ...design, backdrop };
+    const w = await world(null, withPhoto);
+    const r = await exportAs(w, 'format=json');
+    expect(r.body).toEqual(withPhoto);
+    const bad = await call(enclosureDesignsRoute.POST, {
+      method: 'POST',
+      path: `/api/enclosures/${w.enclosure.id}/designs`,
+      params: { id: w.enclosure.id },
+      user: w.keeper,
+      body: { name: 'Bad photo', design: { ...design, backdrop: { ...backdrop, opacity: 3 } } },
+    });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.field).toBe('design.backdrop.opacity');
+    expect(bad.body.error.message).toMatch(/backdrop\.opacity: .*<=1/);
   });
 
   it('renders a field as a PNG picture', async () => {

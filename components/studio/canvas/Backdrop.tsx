@@ -1,10 +1,11 @@
 'use client';
 import { memo } from 'react';
-// The enclosure drawn to scale on a faint grid, and its size label.
-import { Group, Rect, Shape, Text } from 'react-konva';
+// The enclosure drawn to scale on a faint grid, its size label, and the photo traced over.
+import { Group, Image as KonvaImage, Rect, Shape, Text } from 'react-konva';
+import { backdropStageRect } from '../geometry/backdrop';
 import { designToStage, niceStepCm, visibleDesignRect, type Camera, type Viewport } from '../geometry/camera';
 import { CM_PER_IN, formatLength, type LengthUnit } from '../geometry/units';
-import type { Enclosure } from '../state/types';
+import type { Backdrop, Enclosure } from '../state/types';
 import { C } from './colors';
 
 export const GridShape = memo(function GridShape({
@@ -93,5 +94,29 @@ export const EnclosureWalls = memo(function EnclosureWalls({
         fill={C.basalt600}
       />
     </Group>
+  );
+});
+
+/** The photo of the real enclosure, under the fields and the objects, where the user placed it. */
+export const BackdropPhoto = memo(function BackdropPhoto({
+  cam,
+  backdrop,
+  image,
+}: {
+  cam: Camera;
+  backdrop: Backdrop;
+  image: HTMLImageElement;
+}) {
+  const r = backdropStageRect(cam, backdrop);
+  return (
+    <KonvaImage
+      listening={false}
+      image={image}
+      x={r.x}
+      y={r.y}
+      width={r.width}
+      height={r.height}
+      opacity={backdrop.opacity}
+    />
   );
 });

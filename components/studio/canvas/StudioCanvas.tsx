@@ -20,7 +20,8 @@ import { useAtom, useStudio } from '../hooks/useStudio';
 import { sampleAll, type Reading } from '../fields/sample';
 import type { FieldGrid } from '@/simulation/fields/types';
 import { CanvasInteraction, type Modifiers } from './interaction';
-import { EnclosureBack, EnclosureWalls, GridShape } from './Backdrop';
+import { BackdropPhoto, EnclosureBack, EnclosureWalls, GridShape } from './Backdrop';
+import { BackdropFrame } from './BackdropFrame';
 import { FieldBands, type ColouredBand } from './FieldBands';
 import { ObjectShape } from './ObjectShape';
 import {
@@ -50,6 +51,8 @@ export interface CanvasProps {
   probeReadings: Map<string, Reading>;
   highlight: HighlightShape | null;
   summaryId: string;
+  /** The backdrop's photo once loaded (and only if this user may see it). */
+  photo: HTMLImageElement | null;
 }
 
 function mods(
@@ -85,6 +88,7 @@ export default function StudioCanvas({
   probeReadings,
   highlight,
   summaryId,
+  photo,
 }: CanvasProps) {
   const wrap = useRef<HTMLDivElement>(null);
   const ui = useMemo(() => new CanvasInteraction(store), [store]);
@@ -226,6 +230,8 @@ export default function StudioCanvas({
   };
 
   const selected = design.objects.filter((o) => session.selection.includes(o.id));
+  const backdrop = design.backdrop;
+  const photoShown = backdrop && backdrop.visible && photo ? backdrop : null;
 
   return (
     <div
@@ -256,6 +262,7 @@ export default function StudioCanvas({
         <Layer listening={false}>
           <GridShape cam={cam} viewport={session.viewport} unit={session.lengthUnit} />
           <EnclosureBack cam={cam} enclosure={design.enclosure} />
+          {photoShown && <BackdropPhoto cam={cam} backdrop={photoShown} image={photo!} />}
           {session.fieldsVisible && bands.length > 0 && (
             <FieldBands cam={cam} enclosure={design.enclosure} bands={bands} opacity={session.fieldOpacity} />
           )}
@@ -268,6 +275,7 @@ export default function StudioCanvas({
         </Layer>
         <Layer listening={false}>
           <HighlightLayer cam={cam} design={design} shape={highlight} />
+          {photoShown && session.backdropAdjust && <BackdropFrame cam={cam} backdrop={photoShown} />}
           <SelectionLayer cam={cam} objects={selected} showHandles={session.tool === 'select'} />
           <ProbePins
             cam={cam}

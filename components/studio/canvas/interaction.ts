@@ -10,12 +10,20 @@ import {
   type HandleId,
 } from '../geometry/objects';
 import { snapMove, snapPoint, type Guide, type PointRole } from '../geometry/snap';
+import {
+  backdropCornerAt,
+  dragBackdropCorner,
+  insideBackdrop,
+  moveBackdrop,
+  type BackdropCorner,
+} from '../geometry/backdrop';
 import * as A from '../state/actions';
+import { backdropShown } from '../state/backdropActions';
 import { DEFAULT_SIZES, objectForDrag } from '../state/defaults';
-import { addObject, moveObjects, nextId, replaceObjects } from '../state/document';
+import { addObject, moveObjects, nextId, replaceObjects, setBackdrop } from '../state/document';
 import { isPlaceTool, type PlaceTool } from '../state/session';
 import type { StudioStore } from '../state/store';
-import type { Design, DesignObject } from '../state/types';
+import type { Backdrop, Design, DesignObject } from '../state/types';
 
 export interface Modifiers {
   shift: boolean;
@@ -40,7 +48,9 @@ type Drag =
   | { kind: 'marquee'; from: Point; base: string[] }
   | { kind: 'place'; type: PlaceTool; from: Point; id: string }
   | { kind: 'ruler'; from: Point }
-  | { kind: 'probe'; from: Point };
+  | { kind: 'probe'; from: Point }
+  | { kind: 'backdrop-move'; start: Backdrop; from: Point }
+  | { kind: 'backdrop-corner'; start: Backdrop; corner: BackdropCorner };
 
 export function handleRole(o: DesignObject, handle: HandleId): PointRole {
   if (o.type === 'perch') return handle === 'rotate' ? 'free' : 'perch-end';
@@ -110,6 +120,16 @@ export class CanvasInteraction {
     return topmostAt(this.store.design.objects, this.toDesign(p), this.tolCm(OBJECT_HIT_PX));
   }
 
+  /** While adjusting the photo: the photo's corner or the photo itself under the pointer. */
+  backdropAt(p: Point): { backdrop: Backdrop; corner: BackdropCorner | null } | null {
+    const s = this.store;
+    const b = s.design.backdrop;
+    if (!s.session.backdropAdjust || s.session.tool !== 'select' || !b || !backdropShown(s)) return null;
+    const corner = backdropCornerAt(s.session.camera, b, p, HANDLE_HIT_PX);
+    if (corner) return { backdrop: b, corner };
+    return insideBackdrop(b, this.toDesign(p)) ? { backdrop: b, corner: null } : null;
+  }
+
   get active(): boolean {
     return this.drag !== null;
   }
@@ -142,7 +162,16 @@ export class CanvasInteraction {
       this.drag = { kind: 'probe', from: d };
       return;
     }
-    // Select tool.
+    // Select tool. Adjusting the photo: drags move it or stretch it; elsewhere they pan.
+    if (s.session.backdropAdjust) {
+      const hitPhoto = this.backdropAt(p);
+      this.drag = !hitPhoto
+        ? { kind: 'pan', last: p }
+        : hitPhoto.corner
+          ? { kind: 'backdrop-corner', start: hitPhoto.backdrop, corner: hitPhoto.corner }
+          : { kind: 'backdrop-move', start: hitPhoto.backdrop, from: d };
+      return;
+    }
     const h = this.handleAt(p);
     if (h) {
       this.drag = { kind: 'handle', id: h.object.id, handle: h.handle, start: h.object };
@@ -183,7 +212,14 @@ export class CanvasInteraction {
     if (!this.dragging) {
       if (Math.hypot(p.x - this.downAt.x, p.y - this.downAt.y) < DRAG_THRESHOLD_PX) return;
       this.dragging = true;
-      if (drag.kind === 'move' || drag.kind === 'handle' || drag.kind === 'place') this.store.beginGesture();
+      if (
+        drag.kind === 'move' ||
+        drag.kind === 'handle' ||
+        drag.kind === 'place' ||
+        drag.kind === 'backdrop-move' ||
+        drag.kind === 'backdrop-corner'
+      )
+        this.store.beginGesture();
     }
     const s = this.store;
     const d = this.toDesign(p);
@@ -264,6 +300,16 @@ export class CanvasInteraction {
       }
       case 'probe':
         return;
+      case 'backdrop-move': {
+        const moved = moveBackdrop(drag.start, d.x - drag.from.x, d.y - drag.from.y);
+        s.edit((doc) => setBackdrop(doc, moved));
+        return;
+      }
+      case 'backdrop-corner': {
+        const next = dragBackdropCorner(drag.start, drag.corner, d);
+        s.edit((doc) => setBackdrop(doc, next));
+        return;
+      }
     }
   }
 
@@ -277,6 +323,8 @@ export class CanvasInteraction {
     switch (drag.kind) {
       case 'move':
       case 'handle':
+      case 'backdrop-move':
+      case 'backdrop-corner':
         if (wasDrag) s.endGesture();
         return;
       case 'marquee':
@@ -322,6 +370,10 @@ export class CanvasInteraction {
     if (this.drag?.kind === 'pan') return 'grabbing';
     if (mods.pan || tool === 'pan') return 'grab';
     if (isPlaceTool(tool) || tool === 'ruler' || tool === 'probe') return 'crosshair';
+    if (this.store.session.backdropAdjust) {
+      const hit = this.backdropAt(p);
+      return hit ? (hit.corner ? HANDLE_CURSORS[hit.corner] : 'move') : 'grab';
+    }
     const h = this.handleAt(p);
     if (h) return h.handle === 'rotate' ? 'alias' : HANDLE_CURSORS[h.handle];
     if (this.probeAt(p) || this.objectAt(p)) return 'move';

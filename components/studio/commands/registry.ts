@@ -1,6 +1,7 @@
 // Every studio command in one place: the toolbar, the palette, the menus, the help panel and the
 // keyboard all read this list, so a command has exactly one label, one shortcut set and one action.
 import * as A from '../state/actions';
+import * as B from '../state/backdropActions';
 import { isPlaceTool, type Tool } from '../state/session';
 import type { StudioStore } from '../state/store';
 import { canonicalShortcut, normaliseKey, type KeyLike } from './shortcuts';
@@ -11,7 +12,7 @@ export interface CommandContext {
   saveNow?: () => void;
 }
 
-export type CommandGroup = 'Tools' | 'Edit' | 'Arrange' | 'View' | 'Fields' | 'Units' | 'Help';
+export type CommandGroup = 'Tools' | 'Edit' | 'Arrange' | 'View' | 'Fields' | 'Photo' | 'Units' | 'Help';
 
 export interface Command {
   id: string;
@@ -25,9 +26,13 @@ export interface Command {
   checked?(ctx: CommandContext): boolean;
   /** Let the key through while typing in a field (only for Mod shortcuts that make sense there). */
   allowInInputs?: boolean;
+  /** Whether the command exists in this studio at all (help lists only these); default: always. */
+  available?(ctx: CommandContext): boolean;
 }
 
 const editable = ({ store }: CommandContext) => !store.readOnly;
+const photoStudio = ({ store }: CommandContext) => B.hasEnclosurePhotos(store);
+const hasBackdrop = (ctx: CommandContext) => editable(ctx) && ctx.store.design.backdrop !== undefined;
 const hasSelection = (ctx: CommandContext) => editable(ctx) && ctx.store.session.selection.length > 0;
 
 function tool(id: Tool, label: string, key: string): Command {
@@ -132,7 +137,14 @@ export const COMMANDS: readonly Command[] = [
     shortcuts: ['Escape'],
     run: ({ store }) => {
       if (store.inGesture) store.cancelGesture();
-      store.setSession({ selection: [], ruler: null, marquee: null, highlight: null, helpOpen: false });
+      store.setSession({
+        selection: [],
+        ruler: null,
+        marquee: null,
+        highlight: null,
+        helpOpen: false,
+        backdropAdjust: false,
+      });
       if (store.session.tool !== 'select') A.setTool(store, 'select');
     },
   },
@@ -275,6 +287,35 @@ export const COMMANDS: readonly Command[] = [
     checked: ({ store }) => store.session.field === 'tempC',
   },
   {
+    id: 'backdrop.toggle',
+    label: 'Show the photo backdrop',
+    group: 'Photo',
+    shortcuts: ['B'],
+    run: ({ store }) => B.toggleBackdrop(store),
+    enabled: hasBackdrop,
+    checked: ({ store }) => store.design.backdrop?.visible === true,
+    available: photoStudio,
+  },
+  {
+    id: 'backdrop.adjust',
+    label: 'Adjust the photo (drag it, or its corners)',
+    group: 'Photo',
+    shortcuts: ['Shift+B'],
+    run: ({ store }) => B.toggleBackdropAdjust(store),
+    enabled: (ctx) => hasBackdrop(ctx) && (ctx.store.session.backdropAdjust || B.backdropShown(ctx.store)),
+    checked: ({ store }) => store.session.backdropAdjust,
+    available: photoStudio,
+  },
+  {
+    id: 'backdrop.fit',
+    label: 'Fit the photo to the enclosure',
+    group: 'Photo',
+    shortcuts: [],
+    run: ({ store }) => B.fitBackdrop(store),
+    enabled: hasBackdrop,
+    available: photoStudio,
+  },
+  {
     id: 'units.length',
     label: 'Switch cm / in',
     group: 'Units',
@@ -326,8 +367,12 @@ export function commandForKey(e: KeyLike): Command | undefined {
   return key ? SHORTCUTS.get(key) : undefined;
 }
 
+export function isAvailable(c: Command, ctx: CommandContext): boolean {
+  return c.available ? c.available(ctx) : true;
+}
+
 export function isEnabled(c: Command, ctx: CommandContext): boolean {
-  return c.enabled ? c.enabled(ctx) : true;
+  return isAvailable(c, ctx) && (c.enabled ? c.enabled(ctx) : true);
 }
 
 /** Runs a command if it is enabled; returns whether it ran. */

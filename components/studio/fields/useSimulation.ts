@@ -3,6 +3,7 @@
 // ageing preview or the species posts a request; the worker answers "superseded" for requests a
 // newer one replaced before they started, so only the latest is ever computed and shown.
 import { useEffect, useRef, useState } from 'react';
+import { physicsOf, samePhysics } from '@/simulation/model/backdrop';
 import type { SimRequest, SimResponse } from '@/simulation/worker/protocol';
 import type { Camera } from '../geometry/camera';
 import type { StudioStore } from '../state/store';
@@ -69,12 +70,14 @@ export function useSimulation(store: StudioStore, species: StudioSpecies[]): Sim
       const { history, session } = store.getState();
       const design = history.present;
       const dragging = history.gestureBase !== null;
+      // The photo backdrop and the notes are not physics: changing only them (a drag of the photo
+      // included) asks the engine nothing new.
       if (
         last &&
-        last.design === design &&
+        samePhysics(last.design, design) &&
         last.addMonths === session.addMonths &&
         last.speciesId === session.speciesId &&
-        last.dragging === dragging
+        (last.dragging === dragging || dragging)
       ) {
         return;
       }
@@ -84,7 +87,7 @@ export function useSimulation(store: StudioStore, species: StudioSpecies[]): Sim
       const req: SimRequest = {
         id,
         kind: 'simulate',
-        design,
+        design: physicsOf(design),
         cellCm: cellSizeFor(design.enclosure.width, design.enclosure.height, dragging),
         addMonths: session.addMonths,
         species: speciesSheet(speciesRef.current.find((s) => s.id === session.speciesId)),

@@ -10,6 +10,7 @@ import { removeObjects } from '../state/document';
 import type { FieldView } from '../state/session';
 import { focusRing } from './CommandButton';
 import { Section } from './FormFields';
+import { PhotoPanel } from './PhotoPanel';
 
 const FIELDS: { id: FieldView; cmd: string; short: string }[] = [
   { id: 'uvb', cmd: 'fields.uvb', short: 'UVB' },
@@ -104,6 +105,7 @@ export function FieldsPanel({ sim, legend }: { sim: SimView; legend: LegendEntry
           thermometer.
         </p>
       </Section>
+      <PhotoPanel />
       <Section title="Pinned probes">
         {!probes || probes.length === 0 ? (
           <p className="text-sm text-basalt-600">

@@ -1,16 +1,23 @@
 'use client';
 // Keyboard shortcuts, listed from the command registry (so the list is always complete and right).
 import { useEffect, useRef } from 'react';
-import { COMMANDS, type CommandGroup } from '../commands/registry';
+import { COMMANDS, isAvailable, type CommandGroup } from '../commands/registry';
 import { displayShortcut } from '../commands/shortcuts';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
 import { focusRing } from './CommandButton';
 
-const ORDER: CommandGroup[] = ['Tools', 'Edit', 'Arrange', 'View', 'Fields', 'Units', 'Help'];
+const ORDER: CommandGroup[] = ['Tools', 'Edit', 'Arrange', 'View', 'Fields', 'Photo', 'Units', 'Help'];
 
 export function HelpDialog() {
-  const { store } = useCommandContext();
+  const ctx = useCommandContext();
+  const { store } = ctx;
   const open = useStudio(store, (s) => s.session.helpOpen);
+  // Re-read when the studio learns its enclosure's photos (the Photo commands exist only then).
+  useStudio(store, (s) => s.session.photos);
+  const groups = ORDER.map((g) => ({
+    g,
+    commands: COMMANDS.filter((c) => c.group === g && isAvailable(c, ctx)),
+  })).filter((x) => x.commands.length > 0);
   const ref = useRef<HTMLDialogElement>(null);
   useEffect(() => {
     const d = ref.current;
@@ -39,11 +46,11 @@ export function HelpDialog() {
         </button>
       </div>
       <div className="grid gap-5 px-5 py-4 sm:grid-cols-2">
-        {ORDER.map((g) => (
+        {groups.map(({ g, commands }) => (
           <section key={g}>
             <h3 className="mb-1 text-sm font-semibold text-basalt-800">{g}</h3>
             <dl className="grid grid-cols-[1fr_auto] gap-x-4 gap-y-1 text-sm">
-              {COMMANDS.filter((c) => c.group === g).map((c) => (
+              {commands.map((c) => (
                 <div key={c.id} className="contents">
                   <dt className="text-basalt-700">{c.label}</dt>
                   <dd className="text-right">
@@ -69,6 +76,12 @@ export function HelpDialog() {
             <li>Drag ends and corner handles to resize; the round handle rotates a perch, screen or pane.</li>
             <li>Hold Alt while dragging to place freely without snapping.</li>
             <li>Drag an object from the palette onto the canvas, or pick it and click where it goes.</li>
+            {store.session.photos && (
+              <li>
+                While adjusting the photo, drag it to move it and drag its corners to line its enclosure up
+                with the drawn one.
+              </li>
+            )}
           </ul>
         </section>
       </div>

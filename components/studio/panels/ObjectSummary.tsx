@@ -7,6 +7,8 @@ import { calibrationLabel } from '../state/calibration';
 import { TYPE_NAMES } from '../state/document';
 import { isBox, isSegment, type DesignObject } from '../state/types';
 import type { LengthUnit } from '../geometry/units';
+import type { BackdropImageState, EnclosurePhotos } from '../state/session';
+import type { Backdrop } from '../state/types';
 import type { HighlightShape } from '../canvas/Overlay';
 import { LAMP_TECHS } from '@/simulation/model/techs';
 
@@ -25,6 +27,23 @@ export function describeObject(o: DesignObject, u: LengthUnit): string {
   if (isBox(o))
     return `${name}: ${L(o.width)} wide, ${L(o.height)} high, left edge at ${L(o.x)}, bottom at ${L(o.y)}`;
   return name;
+}
+
+/** The photo backdrop in words: which photo, whether it is drawn, and where it lies. */
+export function describeBackdrop(
+  b: Backdrop,
+  photos: EnclosurePhotos | null,
+  image: BackdropImageState | null,
+  u: LengthUnit,
+): string {
+  const photo = photos?.items.find((p) => p.id === b.uploadId);
+  if (!photo || image === 'unavailable') return 'Photo backdrop: photo not available.';
+  const name = `Photo backdrop “${photo.name}”`;
+  if (!b.visible) return `${name}: hidden.`;
+  const L = (v: number) => formatLength(v, u);
+  const place = `${L(b.width)} wide, ${L(b.height)} high, left edge at ${L(b.x)}, bottom at ${L(b.y)}`;
+  const loading = image === 'ready' ? '' : ' (loading)';
+  return `${name} under the design at ${Math.round(b.opacity * 100)} % opacity${loading}: ${place}.`;
 }
 
 /** The ruler's reading, for screen readers (the canvas shows the same as a label). */
@@ -64,6 +83,9 @@ export function ObjectSummary({
   const selection = useStudio(store, (s) => s.session.selection);
   const unit = useStudio(store, (s) => s.session.lengthUnit);
   const ruler = useStudio(store, (s) => s.session.ruler);
+  const photos = useStudio(store, (s) => s.session.photos);
+  const image = useStudio(store, (s) => s.session.backdropImage);
+  const adjusting = useStudio(store, (s) => s.session.backdropAdjust);
   const e = design.enclosure;
   return (
     <div id={id} className="sr-only" data-testid="object-summary" data-highlight={highlight?.findingId ?? ''}>
@@ -85,6 +107,17 @@ export function ObjectSummary({
           </li>
         ))}
       </ul>
+      {design.backdrop && (
+        <p data-testid="backdrop-reading">
+          {describeBackdrop(
+            design.backdrop,
+            photos,
+            image?.uploadId === design.backdrop.uploadId ? image.state : null,
+            unit,
+          )}
+          {adjusting ? ' Adjusting the photo: drags move it or stretch it by its corners.' : ''}
+        </p>
+      )}
       {ruler && <p data-testid="ruler-reading">{rulerSentence(ruler, unit)}</p>}
       {highlight && <p>{describeHighlight(highlight.title, highlight.shape, design.objects, unit)}</p>}
     </div>

@@ -1,7 +1,7 @@
 // Validation of inspector edits against the engine's zod schema (the single source of truth),
 // with messages written for people and limits shown in the unit they are typing in.
 import type { z } from 'zod';
-import { designObjectSchema, enclosureSchema } from '@/simulation/model/schema';
+import { backdropSchema, designObjectSchema, enclosureSchema } from '@/simulation/model/schema';
 import {
   cmToDisplay,
   cToDisplay,
@@ -11,7 +11,7 @@ import {
   type LengthUnit,
   type TempUnit,
 } from '../geometry/units';
-import type { DesignObject, Enclosure } from '../state/types';
+import type { Backdrop, DesignObject, Enclosure } from '../state/types';
 
 export type FieldKind = 'length' | 'temp' | 'percent' | 'plain';
 
@@ -79,6 +79,19 @@ export function checkEnclosureEdit(
   if (r.success) return { ok: true, value: r.data };
   const issue = r.error.issues[0];
   return { ok: false, message: issue ? issueMessage(issue, kind, u) : 'Not valid.' };
+}
+
+export function checkBackdropEdit(
+  backdrop: Backdrop,
+  key: 'x' | 'y' | 'width' | 'height',
+  value: number | undefined,
+  u: DisplayUnits,
+): Check<Backdrop> {
+  if (value === undefined) return { ok: false, message: 'Enter a number.' };
+  const r = backdropSchema.safeParse({ ...backdrop, [key]: value });
+  if (r.success) return { ok: true, value: r.data };
+  const issue = r.error.issues[0];
+  return { ok: false, message: issue ? issueMessage(issue, 'length', u) : 'Not valid.' };
 }
 
 /** Parses what the user typed (accepting a decimal comma); null for empty, NaN for nonsense. */

@@ -44,7 +44,13 @@ export function zoomBy(store: StudioStore, factor: number, anchor?: Point) {
 }
 
 export function setTool(store: StudioStore, tool: Tool) {
-  store.setSession({ tool, ruler: tool === 'ruler' ? store.session.ruler : null, marquee: null });
+  store.setSession({
+    tool,
+    ruler: tool === 'ruler' ? store.session.ruler : null,
+    marquee: null,
+    // Adjusting the photo is a way of selecting; another tool ends it.
+    backdropAdjust: tool === 'select' && store.session.backdropAdjust,
+  });
 }
 
 export type SelectMode = 'replace' | 'toggle' | 'add';

@@ -1,7 +1,7 @@
 // Pure edits of the design document. Every function returns a new document (or the same
 // reference when nothing changed, so the history records no empty steps).
 import { translateObject } from '../geometry/objects';
-import type { Design, DesignObject, Enclosure, ObjectType, ProbePoint } from './types';
+import type { Backdrop, Design, DesignObject, Enclosure, ObjectType, ProbePoint } from './types';
 
 /** The next free id for a type: "perch-3". Ids are unique within the design (schema rule). */
 export function nextId(design: Design, prefix: string, taken: ReadonlySet<string> = new Set()): string {
@@ -167,6 +167,19 @@ export function updateProbe(design: Design, id: string, patch: Partial<Omit<Prob
     design,
     design.probes.map((p) => (p.id === id ? { ...p, ...patch } : p)),
   );
+}
+
+/** Sets or changes the photo backdrop (undefined removes it); the same placement returns the same design. */
+export function setBackdrop(design: Design, backdrop: Backdrop | undefined): Design {
+  if (backdrop === undefined) {
+    if (design.backdrop === undefined) return design;
+    const { backdrop: _drop, ...rest } = design;
+    return rest;
+  }
+  const cur = design.backdrop;
+  if (cur && (Object.keys(backdrop) as (keyof Backdrop)[]).every((k) => cur[k] === backdrop[k]))
+    return design;
+  return { ...design, backdrop };
 }
 
 export function isProbeId(design: Design, id: string): boolean {

@@ -11,6 +11,24 @@ export type Tool = 'select' | 'pan' | PlaceTool | 'probe' | 'ruler';
 export type FieldView = 'uvb' | 'uvi' | 'tempC';
 export type SideTab = 'inspect' | 'fields' | 'assess';
 
+/** One photo of the enclosure the user may read (uploaded on the enclosure's lamps page). */
+export interface EnclosurePhoto {
+  id: number;
+  name: string;
+  /** Served by the upload's own route, which checks access again. */
+  url: string;
+}
+
+/** The enclosure's photos for the backdrop; null in a studio without an enclosure (the scratch studio). */
+export interface EnclosurePhotos {
+  items: EnclosurePhoto[];
+  /** Where photos of this enclosure are uploaded. */
+  uploadHref: string;
+}
+
+/** Whether the backdrop's photo could be drawn: `unavailable` = deleted, or not this user's to see. */
+export type BackdropImageState = 'loading' | 'ready' | 'unavailable';
+
 export interface Session {
   tool: Tool;
   /** Ids of selected objects and pinned probes. */
@@ -37,6 +55,10 @@ export interface Session {
   guides: Guide[];
   ruler: { a: Point; b: Point } | null;
   marquee: Rect | null;
+  photos: EnclosurePhotos | null;
+  /** Adjusting the photo: pointer drags on the canvas move it and stretch it by its corners. */
+  backdropAdjust: boolean;
+  backdropImage: { uploadId: number; state: BackdropImageState } | null;
 }
 
 export function initialSession(): Session {
@@ -61,6 +83,9 @@ export function initialSession(): Session {
     guides: [],
     ruler: null,
     marquee: null,
+    photos: null,
+    backdropAdjust: false,
+    backdropImage: null,
   };
 }
 

@@ -1,6 +1,7 @@
 // Studio-side names for the engine's design types, imported in one place so the studio follows
 // the engine's schema (the single source of truth) without repeating it.
 export type {
+  Backdrop,
   Design,
   DesignObject,
   Enclosure,

@@ -6,6 +6,7 @@ import { getVariantForUser } from '@/lib/variants/variants';
 import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
 import { Enclosure } from '@/models';
 import { getSequelize } from '@/lib/db';
+import { studioPhotos } from '@/lib/uploads/studio-photos';
 
 export const metadata: Metadata = { title: 'Studio' };
 
@@ -21,6 +22,7 @@ export default async function VariantStudioPage({ params }: { params: Promise<{ 
   getSequelize();
   const enclosure = await Enclosure.findByPk(variant.enclosure.id, { attributes: ['speciesName'] });
   const attached = attachedSpecies(options, enclosure?.speciesName);
+  const photos = await studioPhotos(user, variant.enclosure, variant.design.backdrop?.uploadId);
   return (
     <StudioLoader
       source={{ kind: 'variant', variantId: String(variant.id) }}
@@ -31,6 +33,7 @@ export default async function VariantStudioPage({ params }: { params: Promise<{ 
       species={options.map((o) => ({ id: String(o.id), ...o.sheet }))}
       initialSpeciesId={attached ? String(attached.id) : null}
       readOnly={!variant.canEdit}
+      photos={photos}
     />
   );
 }
