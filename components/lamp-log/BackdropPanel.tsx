@@ -67,7 +67,7 @@ export function BackdropPanel({
   }
 
   async function remove(id: number) {
-    if (!window.confirm('Delete this photo?')) return;
+    if (!window.confirm('Delete this photo? Designs that trace it will show “photo not available”.')) return;
     try {
       await sendJson('DELETE', `/api/uploads/${id}`);
       setItems(items.filter((i) => i.id !== id));
@@ -94,31 +94,38 @@ export function BackdropPanel({
       {error && <Notice tone="error">{error}</Notice>}
       {items.length === 0 ? (
         <p className="text-body text-basalt-500">
-          No photo yet. The studio can trace the real enclosure from one.
+          No photo yet. Once one is here, choose it in a design’s studio (Fields tab, Photo backdrop) to trace
+          the real enclosure.
         </p>
       ) : (
-        <ul className="grid gap-3 sm:grid-cols-3">
-          {items.map((i) => (
-            <li key={i.id} className="rounded-md border border-basalt-200 bg-white p-2">
-              {/* eslint-disable-next-line @next/next/no-img-element -- served by our own authorised route, not optimisable */}
-              <img
-                src={i.url}
-                alt={`Enclosure photo ${i.originalName ?? ''}`}
-                className="h-32 w-full rounded object-cover"
-              />
-              <div className="mt-1 flex items-center justify-between text-caption text-basalt-600">
-                <span className="truncate" title={i.originalName ?? undefined}>
-                  {i.originalName} · {Math.round(i.sizeBytes / 1024)} KB
-                </span>
-                {canEdit && (
-                  <button type="button" className={button.quietDanger} onClick={() => remove(i.id)}>
-                    Delete
-                  </button>
-                )}
-              </div>
-            </li>
-          ))}
-        </ul>
+        <>
+          <p className="text-caption text-basalt-600">
+            To trace one, open a design of this enclosure in the studio and choose it under Fields → Photo
+            backdrop.
+          </p>
+          <ul className="grid gap-3 sm:grid-cols-3">
+            {items.map((i) => (
+              <li key={i.id} className="rounded-md border border-basalt-200 bg-white p-2">
+                {/* eslint-disable-next-line @next/next/no-img-element -- served by our own authorised route, not optimisable */}
+                <img
+                  src={i.url}
+                  alt={`Enclosure photo ${i.originalName ?? ''}`}
+                  className="h-32 w-full rounded object-cover"
+                />
+                <div className="mt-1 flex items-center justify-between text-caption text-basalt-600">
+                  <span className="truncate" title={i.originalName ?? undefined}>
+                    {i.originalName} · {Math.round(i.sizeBytes / 1024)} KB
+                  </span>
+                  {canEdit && (
+                    <button type="button" className={button.quietDanger} onClick={() => remove(i.id)}>
+                      Delete
+                    </button>
+                  )}
+                </div>
+              </li>
+            ))}
+          </ul>
+        </>
       )}
     </div>
   );

@@ -89,6 +89,47 @@ export async function enclosureIdByName(page: Page, name: string): Promise<numbe
   return id;
 }
 
+/** A JSON request as the page's signed-in person; the status and the body. */
+export async function api(page: Page, method: string, url: string, body?: unknown) {
+  return page.evaluate(
+    async ({ method, url, body }) => {
+      const res = await fetch(url, {
+        method,
+        headers: body === undefined ? {} : { 'content-type': 'application/json' },
+        body: body === undefined ? undefined : JSON.stringify(body),
+      });
+      return { status: res.status, body: (await res.json().catch(() => ({}))) as Record<string, unknown> };
+    },
+    { method, url, body },
+  );
+}
+
+/**
+ * A new 120 × 60 × 60 cm enclosure for the demo keeper of "Desert vivarium", made by the page's staff
+ * member (so a test leaves the demo's own enclosures alone), with a design; the ids a test needs.
+ */
+export async function demoKeeperEnclosure(
+  page: Page,
+  name: string,
+): Promise<{ organisationId: number; keeperId: number; enclosureId: number; variantId: number }> {
+  const known = await api(page, 'GET', `/api/enclosures/${await enclosureIdByName(page, 'Desert vivarium')}`);
+  expect(known.status).toBe(200);
+  const organisationId = known.body.organisationId as number;
+  const keeperId = known.body.keeperId as number;
+  const made = await api(page, 'POST', '/api/enclosures', {
+    organisationId,
+    keeperId,
+    name: `${name} ${Date.now().toString(36)}`,
+    widthCm: 120,
+    heightCm: 60,
+    depthCm: 60,
+  });
+  expect(made.status).toBe(201);
+  const enclosureId = made.body.id as number;
+  const { variantId } = await createDesign(page, enclosureId, `${name} plan`);
+  return { organisationId, keeperId, enclosureId, variantId };
+}
+
 /** A new design (with its first variant) on an enclosure, made through the API as the page's person. */
 export async function createDesign(
   page: Page,

@@ -8,27 +8,12 @@ import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { DEMO_PASSWORDS, demoSignIn } from '@/lib/demo/scenario';
 import { screenshot, signIn, withBrowser } from './harness';
-import { createDesign, enclosureIdByName, readVariant, staffPage } from './journey-helpers';
+import { api, demoKeeperEnclosure, readVariant, staffPage } from './journey-helpers';
 import { eventually, keys, openStudio, summary, waitSaved } from './studio-helpers';
 
 const session = withBrowser();
 
 type Json = Record<string, unknown>;
-
-/** A JSON request as the page's signed-in person; the status and the body. */
-async function api(page: Page, method: string, url: string, body?: unknown) {
-  return page.evaluate(
-    async ({ method, url, body }) => {
-      const res = await fetch(url, {
-        method,
-        headers: body === undefined ? {} : { 'content-type': 'application/json' },
-        body: body === undefined ? undefined : JSON.stringify(body),
-      });
-      return { status: res.status, body: (await res.json().catch(() => ({}))) as Record<string, unknown> };
-    },
-    { method, url, body },
-  );
-}
 
 const saveState = (page: Page) => page.getByTestId('save-state').getAttribute('data-state');
 const lamps = (v: Awaited<ReturnType<typeof readVariant>>) =>
@@ -42,27 +27,9 @@ describe('studio when the server refuses saves', () => {
 
     // Staff give the demo keeper a new enclosure (so the demo's own are left alone) with a design.
     const staff = await staffPage(session.browser());
-    const known = await api(
-      staff,
-      'GET',
-      `/api/enclosures/${await enclosureIdByName(staff, 'Desert vivarium')}`,
-    );
-    expect(known.status).toBe(200);
-    const organisationId = known.body.organisationId as number;
-    const keeperId = known.body.keeperId as number;
+    const { organisationId, keeperId, enclosureId, variantId } = await demoKeeperEnclosure(staff, 'Handover');
     const keepers = await api(staff, 'GET', `/api/keepers?organisationId=${organisationId}`);
     const other = (keepers.body.items as Json[]).find((k) => k.userId !== keeperId)!.userId as number;
-    const made = await api(staff, 'POST', '/api/enclosures', {
-      organisationId,
-      keeperId,
-      name: `Handover ${Date.now().toString(36)}`,
-      widthCm: 120,
-      heightCm: 60,
-      depthCm: 60,
-    });
-    expect(made.status).toBe(201);
-    const enclosureId = made.body.id as number;
-    const { variantId } = await createDesign(staff, enclosureId, 'Handover plan');
 
     // The keeper opens it in the studio and places a lamp: saved.
     await signIn(keeperPage, keeper.email, DEMO_PASSWORDS.keeper);
