@@ -96,6 +96,15 @@ describe('studio photo backdrop', () => {
     // Adjust: drag the top-right corner from (120, 60) to (130, 66). The engine is asked nothing new.
     await fieldsSettled(page);
     const trips = await page.evaluate(() => window.__baskwellStudio!.roundTrips.length);
+    // The help lists the photo's commands here (the scratch studio's does not: studio-keys.browser.ts).
+    await keys(page, '?');
+    const help = page.getByTestId('help-dialog');
+    await help.waitFor({ state: 'visible' });
+    expect(await help.textContent()).toMatch(
+      /Show the photo backdropB.*Adjust the photo \(drag it, or its corners\)Shift\+B/s,
+    );
+    await page.keyboard.press('Escape');
+    await help.waitFor({ state: 'hidden' });
     await page.getByRole('button', { name: 'Adjust the photo (drag it, or its corners)' }).click();
     await drag(page, { x: 120, y: 60 }, { x: 130, y: 66 });
     await expect
