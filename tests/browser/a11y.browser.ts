@@ -2,13 +2,13 @@
 // and of every page of the app signed in as staff, with a screenshot of each. A table of what axe found
 // per page is printed at the end; each page is its own test and fails on any serious or critical
 // violation, naming the rule and the first elements concerned.
-import { readdirSync } from 'node:fs';
 import path from 'node:path';
 import AxeBuilder from '@axe-core/playwright';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_SHOP, demoSignIn } from '@/lib/demo/scenario';
 import { launchBrowser, newContext, screenshot, signIn } from './harness';
+import { pageRoutes } from './page-routes';
 import { JOURNEY_MS, createDesign, createShare, enclosureIdByName, studioReady } from './journey-helpers';
 
 const ROOT = path.resolve(import.meta.dirname, '..', '..');
@@ -179,17 +179,7 @@ describe('accessibility (axe): no serious or critical violation', () => {
 
   it('scans a page of every route of the app', () => {
     // A route's pattern from its page file: route groups dropped, dynamic segments kept as [name].
-    const routes = readdirSync(path.join(ROOT, 'app'), { recursive: true, encoding: 'utf8' })
-      .filter((f) => f.endsWith('page.tsx'))
-      .map(
-        (f) =>
-          `/${f
-            .split(path.sep)
-            .slice(0, -1)
-            .filter((seg) => !/^\(.*\)$/.test(seg))
-            .join('/')}`.replace(/\/$/, '') || '/',
-      )
-      .sort();
+    const routes = pageRoutes(path.join(ROOT, 'app'));
     const scanned = new Set(targets.map((t) => t.route));
     expect(routes.filter((r) => !scanned.has(r))).toEqual([]);
   });

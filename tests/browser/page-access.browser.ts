@@ -6,13 +6,13 @@
 // Every dynamic signed-in page (found from the app folder) answers HTTP 404 — not a 200 page that says
 // "Not found" — for a missing id and for another organisation's id, with the same content for both; a
 // page that may answer 404 must not sit below a loading boundary, which would start the response first.
-import { readdirSync } from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { getSequelize } from '@/lib/db';
 import { DEMO_HOUSEHOLD, DEMO_PASSWORDS, DEMO_SHOP, demoSignIn } from '@/lib/demo/scenario';
 import { Design, Enclosure, Lamp, LampType, Organisation, SpeciesSheet, User, Variant } from '@/models';
 import { BASE_URL } from './harness';
+import { pageRoutes } from './page-routes';
 import { signInCookie } from './sign-in-cookie';
 
 const ENCLOSURE = 'Desert vivarium';
@@ -68,19 +68,9 @@ async function shopThings() {
 
 /** The signed-in app's dynamic page routes, from the page files: `/enclosures/[id]/lamps` and so on. */
 function dynamicSignedInRoutes(): string[] {
-  const dir = path.resolve(import.meta.dirname, '..', '..', 'app', '(app)');
-  return readdirSync(dir, { recursive: true, encoding: 'utf8' })
-    .filter((f) => f.endsWith('page.tsx'))
-    .map(
-      (f) =>
-        `/${f
-          .split(path.sep)
-          .slice(0, -1)
-          .filter((seg) => !/^\(.*\)$/.test(seg))
-          .join('/')}`,
-    )
-    .filter((route) => /\[[^\]]+\]/.test(route))
-    .sort();
+  return pageRoutes(path.resolve(import.meta.dirname, '..', '..', 'app', '(app)')).filter((route) =>
+    /\[[^\]]+\]/.test(route),
+  );
 }
 
 const fill = (route: string, id: number | string) => route.replace(/\[[^\]]+\]/g, String(id));
