@@ -1,6 +1,6 @@
 import { scaleLinear, scaleUtc } from 'd3-scale';
 import type { LampDetail } from '@/lib/lamp-log/store';
-import { formatDay, formatMonthYear, formatValue, UNIT_NAME } from './format';
+import { formatDay, formatMonthYear, formatValue, tickLabelAnchor, UNIT_NAME } from './format';
 
 /**
  * Readings over time with the fitted decay curve and its 95 % band, drawn as plain SVG. Every value is
@@ -96,7 +96,14 @@ export function DecayChart({
         {xTicks.map((t) => (
           <g key={`x${t.getTime()}`}>
             <line x1={x(t)} x2={x(t)} y1={M.top} y2={H - M.bottom} stroke="#f5f6f4" />
-            <text x={x(t)} y={H - M.bottom + 18} textAnchor="middle" fontSize="12" fill="#4a5143">
+            <text
+              x={x(t)}
+              y={H - M.bottom + 18}
+              // "Sept 2027" at 12 px is about 56 px wide: keep it inside the drawing at either edge.
+              textAnchor={tickLabelAnchor(x(t), 0, W, 30)}
+              fontSize="12"
+              fill="#4a5143"
+            >
               {formatMonthYear(t)}
             </text>
           </g>

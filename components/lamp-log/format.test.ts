@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatAge, formatDay, formatValue } from './format';
+import { formatAge, formatDay, formatValue, tickLabelAnchor } from './format';
 
 describe('lamp log formatting', () => {
   it('shows meter values as precisely as a meter does', () => {
@@ -16,5 +16,13 @@ describe('lamp log formatting', () => {
     expect(formatAge(1000)).toBe('2.7 years');
     expect(formatDay('2026-01-06')).toBe('6 Jan 2026');
     expect(formatDay(null)).toBe('—');
+  });
+
+  it('keeps an axis label inside the drawing at its edges', () => {
+    // The decay chart: 760 px wide, a month label about 30 px each side of its tick.
+    expect(tickLabelAnchor(750, 0, 760, 30)).toBe('end');
+    expect(tickLabelAnchor(380, 0, 760, 30)).toBe('middle');
+    expect(tickLabelAnchor(64, 0, 760, 30)).toBe('middle');
+    expect(tickLabelAnchor(20, 0, 760, 30)).toBe('start');
   });
 });

@@ -50,3 +50,14 @@ export const STATUS_STYLE: Record<Status, string> = {
   'heat-only': 'bg-basalt-100 text-basalt-700 ring-basalt-300',
   retired: 'bg-basalt-100 text-basalt-500 ring-basalt-200',
 };
+
+/**
+ * How to anchor an axis label centred at `x` so it stays inside [min, max]: a label about
+ * `halfWidth` wide each side of its tick would be cut off at an edge of the drawing, so there it is
+ * aligned to the tick's inner side instead of centred on it.
+ */
+export function tickLabelAnchor(x: number, min: number, max: number, halfWidth: number) {
+  if (x + halfWidth > max) return 'end';
+  if (x - halfWidth < min) return 'start';
+  return 'middle';
+}
