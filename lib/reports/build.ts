@@ -4,6 +4,7 @@
  * document for the same variant.
  */
 import type { Design, FieldName } from '@/simulation';
+import { fileStem } from '@/lib/files/file-name';
 import { computedFor } from '@/lib/variants/computed';
 import type { SpeciesOption } from '@/lib/variants/species';
 import { lampRows } from './lamps';
@@ -62,14 +63,7 @@ export async function reportPdf(
 
 /** A file name from a variant's name: letters, digits and dashes only. */
 export function fileBase(name: string): string {
-  const base = name
-    .normalize('NFKD')
-    .replace(/[^\w\s-]/g, '')
-    .trim()
-    .replace(/[\s_]+/g, '-')
-    .toLowerCase()
-    .slice(0, 60);
-  return base || 'variant';
+  return fileStem(name, 'variant');
 }
 
 export function download(body: BodyInit, type: string, filename: string): Response {

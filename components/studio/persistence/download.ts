@@ -1,18 +1,11 @@
 // Hands the person their design as a design file (the same JSON as the variant download), e.g. the
 // unsaved work of a studio whose saves the server refuses. Browser only.
+import { fileStem } from '@/lib/files/file-name';
 import type { Design } from '../state/types';
 
 /** A file name from a title: letters, digits and dashes only. */
 export function designFileName(title: string, suffix: string): string {
-  const base = title
-    .normalize('NFKD')
-    .replace(/[^\w\s-]/g, '')
-    .trim()
-    .replace(/[\s_]+/g, '-')
-    .replace(/-+/g, '-')
-    .toLowerCase()
-    .slice(0, 80);
-  return `${base || 'design'}-${suffix}.baskwell.json`;
+  return `${fileStem(title, 'design', 80)}-${suffix}.baskwell.json`;
 }
 
 export function downloadDesign(design: Design, fileName: string) {
