@@ -86,6 +86,12 @@ export async function storeBackdrop(
   });
 }
 
+/** An enclosure's photos, newest first. The caller has checked that the person may read the enclosure. */
+export async function backdropsOf(enclosureId: number, limit: number): Promise<Upload[]> {
+  getSequelize();
+  return Upload.findAll({ where: { enclosureId, kind: 'backdrop' }, order: [['id', 'DESC']], limit });
+}
+
 /** Keeps an imported readings CSV with the readings made from it (for tracing where they came from). */
 export async function storeCsv(
   user: CurrentUser,

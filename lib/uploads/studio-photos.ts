@@ -1,9 +1,8 @@
 import { ApiError } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';
-import { getSequelize } from '@/lib/db';
 import { can } from '@/lib/permissions';
-import { Upload } from '@/models';
-import { uploadFor } from './service';
+import type { Upload } from '@/models';
+import { backdropsOf, uploadFor } from './service';
 
 /** How many of an enclosure's photos the studio offers (newest first); the lamps page shows 12. */
 export const STUDIO_PHOTO_LIMIT = 24;
@@ -31,12 +30,7 @@ export async function studioPhotos(
     keeperId: enclosure.keeperId,
   } as const;
   if (!can(user, 'read', resource)) return { items: [], uploadHref };
-  getSequelize();
-  const rows = await Upload.findAll({
-    where: { enclosureId: enclosure.id, kind: 'backdrop' },
-    order: [['id', 'DESC']],
-    limit: STUDIO_PHOTO_LIMIT,
-  });
+  const rows = await backdropsOf(enclosure.id, STUDIO_PHOTO_LIMIT);
   const items = rows.map((u) => photoItem(u));
   if (chosenUploadId !== undefined && !items.some((i) => i.id === chosenUploadId)) {
     const other = await readableBackdrop(user, chosenUploadId);

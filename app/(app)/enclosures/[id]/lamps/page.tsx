@@ -14,11 +14,11 @@ import { allLampTypes } from '@/lib/lamp-types/store';
 import { todayIso } from '@/lib/lamp-log/dates';
 import { designLampsOf } from '@/lib/lamp-log/design-lamps';
 import { lampsOfEnclosure, summarise } from '@/lib/lamp-log/store';
-import { uploadJson } from '@/lib/uploads/service';
+import { backdropsOf, uploadJson } from '@/lib/uploads/service';
 import { can } from '@/lib/permissions';
 import { requireUser } from '@/lib/session';
 import { ensureStartingCatalogue } from '@/lib/species/seed';
-import { Enclosure, Upload } from '@/models';
+import { Enclosure } from '@/models';
 
 export const metadata: Metadata = { title: 'Lamps of an enclosure' };
 
@@ -39,11 +39,7 @@ export default async function EnclosureLampsPage({ params }: { params: Promise<{
     lampsOfEnclosure(enclosure.id, { limit: 200 }),
     allLampTypes(enclosure.organisationId),
     designLampsOf(enclosure.id),
-    Upload.findAll({
-      where: { enclosureId: enclosure.id, kind: 'backdrop' },
-      order: [['id', 'DESC']],
-      limit: 12,
-    }),
+    backdropsOf(enclosure.id, 12),
   ]);
   const lamps = await summarise(rows, todayIso());
   const active = lamps.filter((l) => l.status !== 'retired');
