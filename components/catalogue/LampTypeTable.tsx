@@ -3,7 +3,8 @@
 import Link from '@/components/ui/Link';
 import { useMemo, useState } from 'react';
 import { UnitToggle } from '@/components/ui/UnitToggle';
-import { formatLength, useLengthUnit } from '@/components/ui/units';
+import { formatLengthRounded } from '@/shared/units';
+import { useLengthUnit } from '@/components/ui/units';
 import { input, link } from '@/components/ui/styles';
 import type { LampTypeDto } from '@/lib/lamp-types/schema';
 import { LAMP_TECH_IDS, type LampTech as LampTechId } from '@/simulation';
@@ -83,7 +84,7 @@ export function LampTypeTable({ lampTypes }: { lampTypes: LampTypeDto[] }) {
                 </td>
                 <td className="px-4 py-2">
                   {t.form === 'tube' && t.lengthCm !== null
-                    ? `tube, ${formatLength(t.lengthCm, unit)} ${unit}`
+                    ? `tube, ${formatLengthRounded(t.lengthCm, unit)}`
                     : 'bulb'}
                 </td>
                 <td className="px-4 py-2 text-right tabular-nums">

@@ -1,7 +1,8 @@
 'use client';
 
 import { card } from '@/components/ui/styles';
-import { formatLength, useLengthUnit } from '@/components/ui/units';
+import { formatLengthRounded } from '@/shared/units';
+import { useLengthUnit } from '@/components/ui/units';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import {
   LAMP_FIELD_LABELS,
@@ -22,7 +23,7 @@ export function LampTypeView({ lampType: t }: { lampType: LampTypeDto }) {
     reflectorGain: t.reflectorGain > 1 ? `× ${fmt(t.reflectorGain, 2)} inside the beam` : 'none (bare)',
     watts: `${fmt(t.watts, 0)} W`,
     lengthCm:
-      t.form === 'tube' && t.lengthCm !== null ? `${formatLength(t.lengthCm, unit)} ${unit}` : '— (a bulb)',
+      t.form === 'tube' && t.lengthCm !== null ? `${formatLengthRounded(t.lengthCm, unit)}` : '— (a bulb)',
     halfLifeMonths: t.decayPoints
       ? `a table of ${t.decayPoints.length} points`
       : months(t.halfLifeMonths, t.uvbAt30 > 0 ? 'the technology’s default' : '— (no UVB)'),

@@ -1,6 +1,5 @@
 import { LAMP_TECHS } from '@/simulation';
-import type { LengthUnit } from '@/components/ui/units';
-import { fromCm, toCm } from '@/components/ui/units';
+import { cmToDisplay, displayToCm, type LengthUnit } from '@/shared/units';
 import type { LampTypeDto, LampTypeField, LampTypeInput } from '@/lib/lamp-types/schema';
 import type { LampTechId } from '@/models/lamp-type';
 
@@ -32,7 +31,7 @@ export function initialLampState(t: LampTypeDto | null, lengthUnit: LengthUnit):
       name: t.name,
       tech: t.tech,
       form: t.form,
-      length: t.lengthCm === null ? '' : round(fromCm(t.lengthCm, lengthUnit)),
+      length: t.lengthCm === null ? '' : round(cmToDisplay(t.lengthCm, lengthUnit)),
       lengthUnit,
       uvbAt30: s(t.uvbAt30),
       uviPerUvb: s(t.uviPerUvb),
@@ -73,7 +72,9 @@ export function withLengthUnit(st: LampFormState, unit: LengthUnit): LampFormSta
   if (st.lengthUnit === unit) return st;
   const v = Number(st.length);
   const length =
-    st.length.trim() === '' || !Number.isFinite(v) ? st.length : round(fromCm(toCm(v, st.lengthUnit), unit));
+    st.length.trim() === '' || !Number.isFinite(v)
+      ? st.length
+      : round(cmToDisplay(displayToCm(v, st.lengthUnit), unit));
   return { ...st, length, lengthUnit: unit };
 }
 
@@ -90,7 +91,7 @@ export function lampPayload(st: LampFormState): Record<keyof Omit<LampTypeInput,
         ? null
         : len === null || Number.isNaN(len)
           ? len
-          : Math.round(toCm(len, st.lengthUnit) * 100) / 100,
+          : Math.round(displayToCm(len, st.lengthUnit) * 100) / 100,
     uvbAt30: num(st.uvbAt30),
     uviPerUvb: num(st.uviPerUvb),
     radiantFraction: num(st.radiantFraction),

@@ -1,4 +1,4 @@
-import { applicableCautions, type CautionInput } from './cautions';
+import { applicableCautions, type CautionInput } from '@/shared/cautions';
 
 /**
  * The cautions that apply to a design, a lamp type or a lamp, each with its source. Those the assessment

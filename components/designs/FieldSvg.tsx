@@ -1,6 +1,6 @@
 import type { ContourBand, Design } from '@/simulation';
-import { bandLabel, type FieldScale } from '@/lib/variants/scale';
-import { bandPath } from '@/lib/variants/svg-path';
+import { bandLabel, type FieldScale } from '@/shared/field-scale';
+import { bandPath } from '@/shared/designs/svg-path';
 import { DesignShapes, drawingTop, fieldLook } from './DesignShapes';
 
 /**
@@ -71,10 +71,7 @@ export function FieldLegend({ scale }: { scale: FieldScale }) {
       className="flex flex-wrap items-center gap-x-3 gap-y-1 text-caption text-basalt-700"
       aria-label={`${scale.label} colour key`}
     >
-      <span className="font-medium">
-        {scale.label}
-        {scale.unit ? ` (${scale.unit})` : ''}
-      </span>
+      <span className="font-medium">{scale.heading}</span>
       {scale.colors.map((c, k) => (
         <span key={k} className="inline-flex items-center gap-1">
           <span

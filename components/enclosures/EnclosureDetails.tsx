@@ -5,7 +5,8 @@ import { useState } from 'react';
 import { Notice } from '@/components/ui/Notice';
 import { fieldError, sendJson } from '@/components/ui/api-client';
 import { button, card } from '@/components/ui/styles';
-import { formatLength, useLengthUnit } from '@/components/ui/units';
+import { formatLengthRounded } from '@/shared/units';
+import { useLengthUnit } from '@/components/ui/units';
 import { EnclosureForm } from './EnclosureForm';
 import type { EnclosureView, PersonOption } from './types';
 
@@ -47,9 +48,9 @@ export function EnclosureDetails({ enclosure, people, canEdit, canDelete }: Prop
     ['Animal', enclosure.animalName ?? '—'],
     ['Species', enclosure.speciesName ?? '—'],
     ...(people ? [['Keeper', enclosure.keeperName ?? 'Former member'] as [string, string]] : []),
-    ['Width', `${formatLength(enclosure.widthCm, unit)} ${unit}`],
-    ['Height', `${formatLength(enclosure.heightCm, unit)} ${unit}`],
-    ['Depth', `${formatLength(enclosure.depthCm, unit)} ${unit}`],
+    ['Width', `${formatLengthRounded(enclosure.widthCm, unit)}`],
+    ['Height', `${formatLengthRounded(enclosure.heightCm, unit)}`],
+    ['Depth', `${formatLengthRounded(enclosure.depthCm, unit)}`],
   ];
 
   return (

@@ -7,7 +7,8 @@ import { Select } from '@/components/ui/Select';
 import { TextArea } from '@/components/ui/TextArea';
 import { fieldError } from '@/components/ui/api-client';
 import { button } from '@/components/ui/styles';
-import { fromCm, toCm, useLengthUnit } from '@/components/ui/units';
+import { cmToDisplay, displayToCm } from '@/shared/units';
+import { useLengthUnit } from '@/components/ui/units';
 import type { EnclosureView, PersonOption } from './types';
 
 export type EnclosureInput = {
@@ -45,7 +46,7 @@ export function EnclosureForm({ initial, people, submitLabel, onSubmit, onCancel
     const text = (k: string) => String(form.get(k) ?? '').trim();
     const size = (k: string) => {
       const raw = text(k).replace(',', '.');
-      return raw === '' ? Number.NaN : toCm(Number(raw), unit);
+      return raw === '' ? Number.NaN : displayToCm(Number(raw), unit);
     };
     const local: Record<string, string> = {};
     for (const [k, label] of [
@@ -131,7 +132,7 @@ export function EnclosureForm({ initial, people, submitLabel, onSubmit, onCancel
               label={`${label} (${unit})`}
               name={k}
               inputMode="decimal"
-              defaultValue={initial ? round(fromCm(initial[k], unit)) : ''}
+              defaultValue={initial ? round(cmToDisplay(initial[k], unit)) : ''}
               required
               error={errors[k]}
             />

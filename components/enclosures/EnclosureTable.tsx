@@ -5,7 +5,8 @@ import Link from '@/components/ui/Link';
 import { useId, useMemo } from 'react';
 import { Notice } from '@/components/ui/Notice';
 import { button, focusRing, input, link } from '@/components/ui/styles';
-import { formatSize, type LengthUnit, useLengthUnit } from '@/components/ui/units';
+import { formatSize, type LengthUnit } from '@/shared/units';
+import { useLengthUnit } from '@/components/ui/units';
 import {
   ariaSortFor,
   ENCLOSURE_PAGE_SIZE,

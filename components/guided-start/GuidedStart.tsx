@@ -4,12 +4,19 @@ import { useRouter } from 'next/navigation';
 import { useState, useTransition, type FormEvent } from 'react';
 import { CautionList } from '@/components/cautions/CautionList';
 import { FindingList } from '@/components/cautions/FindingList';
-import { cToDisplay, displayToC, formatNumber } from '@/components/studio/geometry/units';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
 import { button, card, input } from '@/components/ui/styles';
 import { UnitToggle } from '@/components/ui/UnitToggle';
-import { fromCm, toCm, useLengthUnit, useTempUnit, type LengthUnit } from '@/components/ui/units';
+import {
+  cmToDisplay,
+  cToDisplay,
+  displayToC,
+  displayToCm,
+  formatNumber,
+  type LengthUnit,
+} from '@/shared/units';
+import { useLengthUnit, useTempUnit } from '@/components/ui/units';
 import type { ProposalView } from '@/lib/guided-start/service';
 import type { ActionResult } from '@/app/(app)/enclosures/new/actions';
 import { ProposalSketch } from './ProposalSketch';
@@ -29,7 +36,7 @@ type Actions = {
 };
 
 const LID_LABELS = { mesh: 'Mesh lid', glass: 'Glass lid', open: 'Open top' } as const;
-const show = (cm: number, unit: LengthUnit) => formatNumber(fromCm(cm, unit), unit === 'cm' ? 0 : 1);
+const show = (cm: number, unit: LengthUnit) => formatNumber(cmToDisplay(cm, unit), unit === 'cm' ? 0 : 1);
 
 /** Species, size, lid and keeper → a proposed design explained → the enclosure, created and opened in the studio. */
 export function GuidedStart(props: {
@@ -72,7 +79,7 @@ export function GuidedStart(props: {
   // Typed sizes and temperature follow the page's unit choices.
   if (size.unit !== lengthUnit) {
     const conv = (t: string) =>
-      t.trim() && Number.isFinite(Number(t)) ? show(toCm(Number(t), size.unit), lengthUnit) : t;
+      t.trim() && Number.isFinite(Number(t)) ? show(displayToCm(Number(t), size.unit), lengthUnit) : t;
     setSize({ unit: lengthUnit, w: conv(size.w), h: conv(size.h), d: conv(size.d) });
   }
   if (room.unit !== tempUnit) {
@@ -89,9 +96,9 @@ export function GuidedStart(props: {
   const payload = () => ({
     organisationId: props.organisationId,
     speciesId: speciesId ?? 0,
-    widthCm: Math.round(toCm(num(size.w), size.unit) * 10) / 10,
-    heightCm: Math.round(toCm(num(size.h), size.unit) * 10) / 10,
-    depthCm: Math.round(toCm(num(size.d), size.unit) * 10) / 10,
+    widthCm: Math.round(displayToCm(num(size.w), size.unit) * 10) / 10,
+    heightCm: Math.round(displayToCm(num(size.h), size.unit) * 10) / 10,
+    depthCm: Math.round(displayToCm(num(size.d), size.unit) * 10) / 10,
     lid,
     roomTempC: Math.round(displayToC(num(room.text), room.unit) * 10) / 10,
     ...(keeperId ? { keeperId: Number(keeperId) } : {}),

@@ -1,7 +1,8 @@
 'use client';
 
 import { card } from '@/components/ui/styles';
-import { formatLength, useLengthUnit } from '@/components/ui/units';
+import { formatLengthRounded } from '@/shared/units';
+import { useLengthUnit } from '@/components/ui/units';
 import type { LampSummary } from '@/lib/lamp-log/store';
 import { formatAge, formatDay, formatValue } from './format';
 
@@ -51,7 +52,7 @@ export function LampFacts({ lamp: l }: { lamp: LampSummary }) {
         )}
         {l.basking && (
           <>
-            <Row term={`Basking spot (${formatLength(l.basking.distanceCm, unit)} ${unit})`}>
+            <Row term={`Basking spot (${formatLengthRounded(l.basking.distanceCm, unit)})`}>
               {formatValue(l.basking.valueNow, l.unit)}
             </Row>
             <Row term="Species' need">{formatValue(l.basking.threshold, l.unit)}</Row>

@@ -7,7 +7,8 @@ import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
 import { Select } from '@/components/ui/Select';
 import { button } from '@/components/ui/styles';
-import { fromCm, useLengthUnit } from '@/components/ui/units';
+import { cmToDisplay } from '@/shared/units';
+import { useLengthUnit } from '@/components/ui/units';
 import type { LampSummary } from '@/lib/lamp-log/store';
 import type { DesignLampOption } from './AddLampForm';
 
@@ -104,7 +105,9 @@ export function LampSettings({
           type="number"
           step="any"
           defaultValue={
-            lamp.baskingDistanceCm === null ? '' : Number(fromCm(lamp.baskingDistanceCm, unit).toFixed(1))
+            lamp.baskingDistanceCm === null
+              ? ''
+              : Number(cmToDisplay(lamp.baskingDistanceCm, unit).toFixed(1))
           }
           error={err('baskingDistance')}
         />

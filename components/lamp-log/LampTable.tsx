@@ -2,7 +2,8 @@
 
 import Link from '@/components/ui/Link';
 import { link } from '@/components/ui/styles';
-import { formatLength, useLengthUnit } from '@/components/ui/units';
+import { formatLengthRounded } from '@/shared/units';
+import { useLengthUnit } from '@/components/ui/units';
 import type { LampSummary } from '@/lib/lamp-log/store';
 import { formatAge, formatDay, formatValue, STATUS_ORDER } from './format';
 import { StatusBadge } from './StatusBadge';
@@ -79,7 +80,7 @@ export function LampTable({ lamps, showEnclosure }: { lamps: LampSummary[]; show
                   <>
                     {formatValue(l.lastReading.value, l.lastReading.unit)}
                     <div className="text-caption text-basalt-500">
-                      at {formatLength(l.lastReading.distanceCm, unit)} {unit},{' '}
+                      at {formatLengthRounded(l.lastReading.distanceCm, unit)},{' '}
                       {formatDay(l.lastReading.takenAt)}
                     </div>
                   </>

@@ -5,7 +5,8 @@ import { useState } from 'react';
 import { ApiClientError, sendJson } from '@/components/ui/api-client';
 import { Notice } from '@/components/ui/Notice';
 import { button } from '@/components/ui/styles';
-import { formatLength, useLengthUnit } from '@/components/ui/units';
+import { formatLengthRounded } from '@/shared/units';
+import { useLengthUnit } from '@/components/ui/units';
 import type { LampDetail } from '@/lib/lamp-log/store';
 import { formatValue } from './format';
 
@@ -123,7 +124,7 @@ export function ReadingsTable({ readings, canEdit }: { readings: Reading[]; canE
                     {formatValue(r.value, r.unit)}
                   </span>
                   <span className="block whitespace-nowrap text-caption tabular-nums text-basalt-500">
-                    at {formatLength(r.distanceCm, unit)} {unit}
+                    at {formatLengthRounded(r.distanceCm, unit)}
                   </span>
                 </td>
                 <td className="px-3 py-2 text-basalt-600">

@@ -1,4 +1,4 @@
-import { cToDisplay, displayToC, formatNumber, type TempUnit } from '@/components/studio/geometry/units';
+import { cToDisplay, displayToC, formatNumber, type TempUnit } from '@/shared/units';
 import type { SpeciesInput, SpeciesSheetDto, SpeciesSource } from '@/lib/species/schema';
 
 /**

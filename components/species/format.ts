@@ -1,4 +1,4 @@
-import { cToDisplay, formatNumber, type TempUnit } from '@/components/studio/geometry/units';
+import { cToDisplay, formatNumber, type TempUnit } from '@/shared/units';
 import type { Range } from '@/lib/species/schema';
 
 /** "40–45 °C" / "104–113 °F"; a single value when both ends agree. */

@@ -1,6 +1,7 @@
 'use client';
 
-import { LENGTH_UNITS, TEMP_UNITS, useLengthUnit, useTempUnit } from './units';
+import { LENGTH_UNITS, TEMP_UNITS } from '@/shared/units';
+import { useLengthUnit, useTempUnit } from './units';
 import { focusRing } from './styles';
 
 /**

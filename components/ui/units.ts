@@ -1,7 +1,7 @@
 'use client';
 
 import { useCallback, useSyncExternalStore } from 'react';
-import type { TempUnit } from '@/components/studio/geometry/units';
+import type { TempUnit } from '@/shared/units';
 
 /** Lengths are stored in centimetres; people may read them in inches. The choice is kept per browser. */
 export type LengthUnit = 'cm' | 'in';

@@ -1,7 +1,8 @@
 import Papa from 'papaparse';
 import { z } from 'zod';
 import { MAX_CSV_ROWS } from '@/lib/uploads/limits';
-import { readingFields, toCm } from './schemas';
+import { displayToCm } from '@/shared/units';
+import { readingFields } from './schemas';
 
 /**
  * Readings from a CSV file: parsed with papaparse, every row checked the way a typed-in reading is, and
@@ -190,7 +191,7 @@ export function parseReadingsCsv(text: string, lamps: readonly CsvLamp[], tzOffs
       lampId: lamp.id,
       lampLabel: lamp.label,
       takenAt: r.data.takenAt.toISOString(),
-      distanceCm: Math.round(toCm(r.data.distance, r.data.distanceUnit) * 10) / 10,
+      distanceCm: Math.round(displayToCm(r.data.distance, r.data.distanceUnit) * 10) / 10,
       value: r.data.value,
       unit: r.data.unit,
       meter: r.data.meter,

@@ -2,8 +2,8 @@ import type { z } from 'zod';
 import { badRequest } from '@/lib/api';
 import { getSequelize } from '@/lib/db';
 import { Lamp, LampType, Reading, type Enclosure } from '@/models';
+import { displayToCm } from '@/shared/units';
 import {
-  toCm,
   type createLampBody,
   type createReadingBody,
   type updateLampBody,
@@ -35,7 +35,9 @@ export async function createLamp(
     designObjectId: body.designObjectId ?? null,
     firstUsedOn: body.firstUsedOn,
     hoursPerDay: body.hoursPerDay,
-    baskingDistanceCm: body.baskingDistance ? round1(toCm(body.baskingDistance, body.lengthUnit)) : null,
+    baskingDistanceCm: body.baskingDistance
+      ? round1(displayToCm(body.baskingDistance, body.lengthUnit))
+      : null,
     baskingTransmission: body.baskingTransmission ?? null,
     retiredOn: body.retiredOn ?? null,
     notes: body.notes ?? null,
@@ -56,7 +58,7 @@ export async function updateLamp(
     ...(body.firstUsedOn !== undefined ? { firstUsedOn: body.firstUsedOn } : {}),
     ...(body.hoursPerDay !== undefined ? { hoursPerDay: body.hoursPerDay } : {}),
     ...(body.baskingDistance !== undefined
-      ? { baskingDistanceCm: body.baskingDistance ? round1(toCm(body.baskingDistance, unit)) : null }
+      ? { baskingDistanceCm: body.baskingDistance ? round1(displayToCm(body.baskingDistance, unit)) : null }
       : {}),
     ...(body.baskingTransmission !== undefined
       ? { baskingTransmission: body.baskingTransmission ?? null }
@@ -83,7 +85,7 @@ export function readingColumns(lamp: Lamp, r: ReadingInput) {
   return {
     lampId: lamp.id,
     takenAt: r.takenAt,
-    distanceCm: round1(toCm(r.distance, r.distanceUnit)),
+    distanceCm: round1(displayToCm(r.distance, r.distanceUnit)),
     value: r.value,
     unit: r.unit,
     meter: r.meter ?? null,

@@ -1,15 +1,9 @@
 import { z } from 'zod';
 import { idSchema, textSchema } from '@/lib/api/schemas';
 import { READING_UNITS } from '@/models/reading';
+import { LENGTH_UNITS } from '@/shared/units';
 
 /** Request shapes of the lamp log routes and forms, with messages a person can act on. */
-
-export const CM_PER_INCH = 2.54;
-export const LENGTH_UNITS = ['cm', 'in'] as const;
-export type LengthUnit = (typeof LENGTH_UNITS)[number];
-
-export const toCm = (value: number, unit: LengthUnit) => (unit === 'in' ? value * CM_PER_INCH : value);
-export const fromCm = (cm: number, unit: LengthUnit) => (unit === 'in' ? cm / CM_PER_INCH : cm);
 
 const isoDate = (what: string) =>
   z

@@ -4,10 +4,10 @@
  * list and the cautions. The variant's name is both drawn and set as the document title.
  */
 import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from 'pdf-lib';
-import { sizeBoth, tempBoth } from '@/lib/variants/dual-units';
-import type { KeyFigures } from '@/lib/variants/figures';
-import { bandLabel, type FieldScale } from '@/lib/variants/scale';
-import { applicableCautions } from '@/components/cautions/cautions';
+import { sizeBoth, tempBoth } from '@/shared/units';
+import type { KeyFigures } from '@/shared/designs/figures';
+import { bandLabel, type FieldScale } from '@/shared/field-scale';
+import { applicableCautions } from '@/shared/cautions';
 import type { Design } from '@/simulation';
 import { DEFER_NOTE, ESTIMATE_NOTE } from './cautions';
 import type { LampRow } from './lamps';
@@ -149,8 +149,7 @@ export async function renderReportPdf(r: ReportInput): Promise<Uint8Array> {
   ]);
 
   // Field picture with its legend.
-  const unit = r.scale.unit ? ` (${r.scale.unit})` : '';
-  w.heading(`${r.scale.label}${unit}, side view`);
+  w.heading(`${r.scale.heading}, side view`);
   const img = await doc.embedPng(r.png);
   const drawW = w.width;
   const drawH = (img.height / img.width) * drawW;

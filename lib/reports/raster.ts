@@ -3,7 +3,7 @@
  * enclosure outline and its objects drawn over it in dark lines. Pure RGBA pixels; png.ts encodes them.
  */
 import type { Design, FieldGrid } from '@/simulation';
-import { bandOf, type FieldScale } from '@/lib/variants/scale';
+import { bandOf, type FieldScale } from '@/shared/field-scale';
 
 export type Raster = { width: number; height: number; data: Uint8Array };
 

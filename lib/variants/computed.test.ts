@@ -1,8 +1,8 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import { parseDesign, type Design, type SpeciesSheet } from '@/simulation';
-import { assessFor } from './assessment';
+import { assessFor } from '@/shared/designs/assessment';
 import { computedCache, computedFor } from './computed';
-import { bandsFor, scaleFor, simulate } from './simulate';
+import { bandsFor, scaleFor, simulate } from '@/shared/designs/simulate';
 
 const design = (uvbAt30: number): Design => {
   const r = parseDesign({

@@ -11,10 +11,10 @@
 import { createHash } from 'node:crypto';
 import { config } from '@/lib/config';
 import type { Assessment, ContourBand, Design, FieldName, SpeciesSheet } from '@/simulation';
-import { assessFor } from './assessment';
+import { assessFor } from '@/shared/designs/assessment';
 import { Lru } from './lru';
-import type { FieldScale } from './scale';
-import { bandsFor, scaleFor, simulate, type Simulated } from './simulate';
+import type { FieldScale } from '@/shared/field-scale';
+import { bandsFor, scaleFor, simulate, type Simulated } from '@/shared/designs/simulate';
 
 export type FieldView = { scale: FieldScale; bands: ContourBand[] };
 

@@ -17,7 +17,7 @@ import * as lampLog from '@/lib/lamp-log/schemas';
 import * as lampTypes from '@/lib/lamp-types/schema';
 import * as species from '@/lib/species/schema';
 import * as variants from '@/lib/variants/schemas';
-import * as compare from '@/lib/variants/compare-params';
+import * as compare from '@/shared/designs/compare-params';
 import { EDGE_VALUES, type Json } from './fuzz-arbitraries';
 import { checkProperty } from './fuzz-contract';
 

@@ -3,7 +3,7 @@ import { CompareView } from '@/components/designs/compare/CompareView';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { ensureStartingCatalogue } from '@/lib/species/seed';
 import { currentMembership, requireUser } from '@/lib/session';
-import { parseCompareParams, compareQuery } from '@/lib/variants/compare-params';
+import { parseCompareParams, compareQuery } from '@/shared/designs/compare-params';
 import { speciesOptions, attachedSpecies, type SpeciesOption } from '@/lib/variants/species';
 import { getVariantForUser } from '@/lib/variants/variants';
 import { visibleVariants } from '@/lib/variants/visible';

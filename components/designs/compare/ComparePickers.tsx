@@ -1,7 +1,7 @@
 'use client';
 
 import type { FieldName } from '@/simulation';
-import { MONTH_CHOICES, type CompareParams } from '@/lib/variants/compare-params';
+import { MONTH_CHOICES, type CompareParams } from '@/shared/designs/compare-params';
 import type { SpeciesOption } from '@/lib/variants/species';
 import type { VariantOption } from '@/lib/variants/visible';
 import { btn, input } from '../styles';

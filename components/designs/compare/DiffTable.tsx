@@ -1,4 +1,4 @@
-import type { DesignDiff, FieldChange, ObjectChange } from '@/lib/variants/diff';
+import type { DesignDiff, FieldChange, ObjectChange } from '@/shared/designs/diff';
 
 const KIND: Record<ObjectChange['kind'], { label: string; className: string }> = {
   added: { label: 'Added', className: 'bg-moss-100 text-moss-800' },

@@ -2,8 +2,8 @@
 
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { useTempUnit } from '@/components/ui/units';
-import { cDeltaToDisplay, cToDisplay, type TempUnit } from '@/components/studio/geometry/units';
-import type { KeyFigures } from '@/lib/variants/figures';
+import { cDeltaToDisplay, cToDisplay, type TempUnit } from '@/shared/units';
+import type { KeyFigures } from '@/shared/designs/figures';
 
 type Row = {
   label: string;

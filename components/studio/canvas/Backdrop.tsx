@@ -4,7 +4,7 @@ import { memo } from 'react';
 import { Group, Image as KonvaImage, Rect, Shape, Text } from 'react-konva';
 import { backdropStageRect } from '../geometry/backdrop';
 import { designToStage, niceStepCm, visibleDesignRect, type Camera, type Viewport } from '../geometry/camera';
-import { CM_PER_IN, formatLength, type LengthUnit } from '../geometry/units';
+import { CM_PER_IN, formatLength, type LengthUnit } from '@/shared/units';
 import type { Backdrop, Enclosure } from '../state/types';
 import { C } from './colors';
 

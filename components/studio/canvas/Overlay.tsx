@@ -11,7 +11,7 @@ import {
 } from '../geometry/camera';
 import { objectBounds, objectHandles } from '../geometry/objects';
 import type { Guide } from '../geometry/snap';
-import { formatNumber, formatTemp, rulerText, type LengthUnit, type TempUnit } from '../geometry/units';
+import { formatNumber, formatTemp, rulerText, type LengthUnit, type TempUnit } from '@/shared/units';
 import type { Reading } from '../fields/sample';
 import type { Design, DesignObject, ProbePoint } from '../state/types';
 import { C, HIGHLIGHT, SELECT } from './colors';

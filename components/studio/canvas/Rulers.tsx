@@ -4,7 +4,7 @@ import { memo } from 'react';
 // enclosure's inside bottom-left corner (the design origin).
 import { Group, Rect, Shape, Text } from 'react-konva';
 import { designToStage, niceStepCm, visibleDesignRect, type Camera, type Viewport } from '../geometry/camera';
-import { CM_PER_IN, formatNumber, type LengthUnit } from '../geometry/units';
+import { CM_PER_IN, formatNumber, type LengthUnit } from '@/shared/units';
 import { C } from './colors';
 
 export const RULER_PX = 22;

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { colorFor, fieldUnit, legendFor } from './legend';
+import { fieldUnit } from '@/shared/field-scale';
+import { colorFor, legendFor } from './legend';
 
 describe('legend', () => {
   it('has one entry per band, in the display unit', () => {

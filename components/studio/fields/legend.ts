@@ -1,22 +1,9 @@
 // Legend entries and band colours for a field: thresholds from the engine, colours from our ramps,
 // labels in the user's units.
-import { cToDisplay, formatNumber, type TempUnit } from '../geometry/units';
+import { cToDisplay, formatNumber, type TempUnit } from '@/shared/units';
 import type { FieldView } from '../state/session';
-import { bandColors, type RampName } from './colorScale';
-
-export const FIELD_RAMP: Record<FieldView, RampName> = { uvb: 'viridis', uvi: 'viridis', tempC: 'inferno' };
-
-export const FIELD_TITLE: Record<FieldView, string> = {
-  uvb: 'UVB irradiance',
-  uvi: 'UV Index',
-  tempC: 'Surface temperature',
-};
-
-export function fieldUnit(field: FieldView, temp: TempUnit): string {
-  if (field === 'uvb') return 'µW/cm²';
-  if (field === 'uvi') return 'UVI';
-  return temp === 'C' ? '°C' : '°F';
-}
+import { bandColors } from '@/shared/colour-ramps';
+import { FIELD_RAMP } from '@/shared/field-scale';
 
 export interface LegendEntry {
   lo: number;

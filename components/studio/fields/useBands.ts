@@ -4,7 +4,7 @@
 import { useEffect, useMemo, useRef, useState } from 'react';
 import type { ContourBand, FieldGrid } from '@/simulation';
 import type { ColouredBand } from '../canvas/FieldBands';
-import type { TempUnit } from '../geometry/units';
+import type { TempUnit } from '@/shared/units';
 import type { FieldView } from '../state/session';
 import type { ContourRequest, ContourResponse } from './contourProtocol';
 import { legendFor, type LegendEntry } from './legend';

@@ -2,8 +2,9 @@
 // A compact legend over the canvas, so the colours can be read whichever panel is open. A single
 // colour bar in the bottom-right corner, short enough to sit in the room the fitted view leaves under
 // the enclosure instead of over the design.
-import { FIELD_TITLE, fieldUnit, type LegendEntry } from '../fields/legend';
-import type { TempUnit } from '../geometry/units';
+import { fieldHeading } from '@/shared/field-scale';
+import type { LegendEntry } from '../fields/legend';
+import type { TempUnit } from '@/shared/units';
 import type { FieldView } from '../state/session';
 
 export function CanvasLegend({
@@ -16,16 +17,13 @@ export function CanvasLegend({
   legend: LegendEntry[];
 }) {
   if (legend.length === 0) return null;
-  const unit = fieldUnit(field, temp);
   return (
     <div
       className="pointer-events-none absolute right-3 bottom-3 max-w-[calc(100%-1.5rem)] rounded-md border border-basalt-200 bg-white/90 px-2 py-1.5 text-caption text-basalt-800 shadow-sm"
       data-testid="canvas-legend"
       aria-hidden="true"
     >
-      <p className="mb-0.5 font-semibold leading-tight">
-        {FIELD_TITLE[field]} ({unit}) — estimates
-      </p>
+      <p className="mb-0.5 font-semibold leading-tight">{fieldHeading(field, temp)} — estimates</p>
       <ol className="flex">
         {legend.map((e) => (
           <li key={e.label} className="flex min-w-11 flex-1 flex-col items-stretch tabular-nums">

@@ -2,9 +2,10 @@
 // Field view controls: which field, opacity, the legend, and the pinned probes with their readings.
 import { useId } from 'react';
 import { command, runCommand } from '../commands/registry';
-import { FIELD_TITLE, fieldUnit, type LegendEntry } from '../fields/legend';
+import { FIELD_TITLE, fieldHeading, fieldUnit } from '@/shared/field-scale';
+import type { LegendEntry } from '../fields/legend';
 import type { SimView } from '../fields/simTypes';
-import { formatLength, formatNumber, formatTemp } from '../geometry/units';
+import { formatLength, formatNumber, formatTemp } from '@/shared/units';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
 import { removeObjects } from '../state/document';
 import type { FieldView } from '../state/session';
@@ -72,7 +73,7 @@ export function FieldsPanel({ sim, legend }: { sim: SimView; legend: LegendEntry
           />
         </div>
       </Section>
-      <Section title={`${FIELD_TITLE[session.field]} (${unit})`}>
+      <Section title={fieldHeading(session.field, session.tempUnit)}>
         {legend.length === 0 ? (
           <p className="text-sm text-basalt-600">
             {sim.status === 'error' ? 'No field: the calculation failed.' : 'Computing…'}

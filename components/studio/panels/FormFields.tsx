@@ -10,7 +10,7 @@ import {
   formatNumber,
   lengthLabel,
   tempLabel,
-} from '../geometry/units';
+} from '@/shared/units';
 import { parseTyped, type Check, type DisplayUnits, type FieldKind } from './validate';
 import { focusRing } from './CommandButton';
 

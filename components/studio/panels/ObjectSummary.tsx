@@ -1,12 +1,12 @@
 'use client';
 // A text version of the canvas for screen readers: every object with its place and size.
-import { formatLength, formatNumber, rulerParts } from '../geometry/units';
+import { formatLength, formatNumber, rulerParts } from '@/shared/units';
 import { segmentAngleDeg, segmentLength } from '../geometry/objects';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
 import { calibrationLabel } from '../state/calibration';
 import { TYPE_NAMES } from '../state/document';
 import { isBox, isSegment, type DesignObject } from '../state/types';
-import type { LengthUnit } from '../geometry/units';
+import type { LengthUnit } from '@/shared/units';
 import type { BackdropImageState, EnclosurePhotos } from '../state/session';
 import type { Backdrop } from '../state/types';
 import type { HighlightShape } from '../canvas/Overlay';

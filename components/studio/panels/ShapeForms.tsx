@@ -6,7 +6,7 @@ import {
 } from '@/simulation/model/materials';
 import { DEFAULT_ROOM_TEMP_C } from '@/simulation/model/resolve';
 import { segmentAngleDeg, segmentLength } from '../geometry/objects';
-import { formatLength, formatNumber } from '../geometry/units';
+import { formatLength, formatNumber } from '@/shared/units';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
 import { setEnclosure, TYPE_NAMES, updateProbe } from '../state/document';
 import { focusRing } from './CommandButton';

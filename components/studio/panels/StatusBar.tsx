@@ -4,7 +4,7 @@ import type { PointerInfo } from '../canvas/StudioCanvas';
 import type { SaveState } from '../persistence/autosave';
 import type { SimView } from '../fields/simTypes';
 import type { Atom } from '../state/atom';
-import { formatLength } from '../geometry/units';
+import { formatLength } from '@/shared/units';
 import { useAtom, useCommandContext, useStudio } from '../hooks/useStudio';
 import { focusRing } from './CommandButton';
 

@@ -8,7 +8,7 @@ import {
   tempLabel,
   type LengthUnit,
   type TempUnit,
-} from '../geometry/units';
+} from '@/shared/units';
 
 export type FindingUnits = { length: LengthUnit; temp: TempUnit };
 

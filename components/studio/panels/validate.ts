@@ -10,7 +10,7 @@ import {
   tempLabel,
   type LengthUnit,
   type TempUnit,
-} from '../geometry/units';
+} from '@/shared/units';
 import type { Backdrop, DesignObject, Enclosure } from '../state/types';
 
 export type FieldKind = 'length' | 'temp' | 'percent' | 'plain';

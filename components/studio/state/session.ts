@@ -2,8 +2,8 @@
 // NOT part of the saved document (and therefore not undoable): tool, selection, camera, view options.
 import type { Camera, Point, Rect, Viewport } from '../geometry/camera';
 import type { Guide } from '../geometry/snap';
-import type { LengthUnit, TempUnit } from '../geometry/units';
-import { CM_PER_IN } from '../geometry/units';
+import type { LengthUnit, TempUnit } from '@/shared/units';
+import { CM_PER_IN } from '@/shared/units';
 import type { ObjectType } from './types';
 
 export type PlaceTool = ObjectType;

@@ -1,8 +1,11 @@
-// Unit conversion for display and input. The design is always stored in cm and °C (BRIEF §3);
-// only what the user sees and types is converted.
+// Units, the one module for both sides (pages, the studio, the server's reports and exports). Everything
+// is stored in centimetres and °C so that a stored design never depends on who drew it; only what a
+// person sees and types is converted.
 
-export type LengthUnit = 'cm' | 'in';
-export type TempUnit = 'C' | 'F';
+export const LENGTH_UNITS = ['cm', 'in'] as const;
+export const TEMP_UNITS = ['C', 'F'] as const;
+export type LengthUnit = (typeof LENGTH_UNITS)[number];
+export type TempUnit = (typeof TEMP_UNITS)[number];
 
 export const CM_PER_IN = 2.54; // exact, by definition of the international inch
 
@@ -52,6 +55,18 @@ export function formatLength(cm: number, unit: LengthUnit, decimals = 1): string
   return `${formatNumber(cmToDisplay(cm, unit), decimals)} ${lengthLabel(unit)}`;
 }
 
+/** A length in a table or a summary, where a whole centimetre (a tenth of an inch) is precise enough. */
+export function formatLengthRounded(cm: number, unit: LengthUnit): string {
+  return formatLength(cm, unit, unit === 'cm' ? 0 : 1);
+}
+
+/** "120 × 60 × 45 cm": an enclosure's size in one unit. */
+export function formatSize(w: number, h: number, d: number, unit: LengthUnit): string {
+  const decimals = unit === 'cm' ? 0 : 1;
+  const dims = [w, h, d].map((v) => formatNumber(cmToDisplay(v, unit), decimals));
+  return `${dims.join(' × ')} ${lengthLabel(unit)}`;
+}
+
 export function formatTemp(c: number, unit: TempUnit, decimals = 1): string {
   return `${formatNumber(cToDisplay(c, unit), decimals)} ${tempLabel(unit)}`;
 }
@@ -59,6 +74,22 @@ export function formatTemp(c: number, unit: TempUnit, decimals = 1): string {
 /** Decimals that keep the input precise enough in the display unit (inches need one more). */
 export function lengthDecimals(unit: LengthUnit): number {
   return unit === 'cm' ? 1 : 2;
+}
+
+// For readers whose units we do not know (a share link's visitor, a printed report): metric first, as the
+// design stores it, then the imperial equivalent in brackets.
+
+/** "35.2 °C (95.4 °F)". */
+export function tempBoth(c: number): string {
+  return `${formatTemp(c, 'C')} (${formatTemp(c, 'F')})`;
+}
+
+/** "120 × 60 × 60 cm (47.2 × 23.6 × 23.6 in)". */
+export function sizeBoth(size: { width: number; height: number; depth: number }): string {
+  const dims = [size.width, size.height, size.depth];
+  const cm = dims.map((v) => formatNumber(v, 1)).join(' × ');
+  const inches = dims.map((v) => formatNumber(cmToDisplay(v, 'in'), 1)).join(' × ');
+  return `${cm} cm (${inches} in)`;
 }
 
 type RulerEnds = { a: { x: number; y: number }; b: { x: number; y: number } };

@@ -12,7 +12,7 @@ import {
   type FieldName,
 } from '@/simulation';
 import { keyFigures, type KeyFigures } from './figures';
-import { sharedScale, type FieldScale } from './scale';
+import { sharedScale, type FieldScale } from '@/shared/field-scale';
 
 export type Simulated = { design: Design; grid: FieldGrid; figures: KeyFigures; months: number };
 

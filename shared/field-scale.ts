@@ -1,24 +1,44 @@
 /**
- * One colour scale for a field, shared by everything drawn side by side (the compare page, the share
- * page, the PNG and PDF reports), so equal colours always mean equal values. Pure; runs anywhere.
+ * The one colour scale system for the fields: each field's title, unit and colour ramp, and a scale shared
+ * by everything drawn side by side (the compare page, the share page, the PNG and PDF reports), so equal
+ * colours always mean equal values. The studio's legend (components/studio/fields/legend.ts) draws its
+ * bands with the same titles and ramps. Pure; runs anywhere.
  */
 import { scaleLinear } from 'd3-scale';
-import { bandColors } from '@/components/studio/fields/colorScale';
+import { bandColors, type RampName } from '@/shared/colour-ramps';
+import type { TempUnit } from '@/shared/units';
 import { UVI_THRESHOLDS, type FieldGrid, type FieldName } from '@/simulation';
+
+/** Perceptually uniform ramps: one for the UV fields, a warm one for temperature. */
+export const FIELD_RAMP: Record<FieldName, RampName> = { uvb: 'viridis', uvi: 'viridis', tempC: 'inferno' };
+
+export const FIELD_TITLE: Record<FieldName, string> = {
+  uvb: 'UVB irradiance',
+  uvi: 'UV Index',
+  tempC: 'Surface temperature',
+};
+
+/** The unit printed after a field's values ("2.6 UVI", "31 °C"). */
+export function fieldUnit(field: FieldName, temp: TempUnit = 'C'): string {
+  if (field === 'uvb') return 'µW/cm²';
+  if (field === 'uvi') return 'UVI';
+  return temp === 'C' ? '°C' : '°F';
+}
+
+/** "UVB irradiance (µW/cm²)", "Surface temperature (°F)", "UV Index" (its title already names it). */
+export function fieldHeading(field: FieldName, temp: TempUnit = 'C'): string {
+  return field === 'uvi' ? FIELD_TITLE[field] : `${FIELD_TITLE[field]} (${fieldUnit(field, temp)})`;
+}
 
 export type FieldScale = {
   field: FieldName;
   /** Lower edge of each band; the last band is open-ended (value ≥ its edge). */
   thresholds: number[];
   colors: string[];
+  /** The field's title ("UV Index"). */
   label: string;
-  unit: string;
-};
-
-export const FIELD_LABELS: Record<FieldName, { label: string; unit: string }> = {
-  uvi: { label: 'UV Index', unit: '' },
-  uvb: { label: 'UVB', unit: 'µW/cm²' },
-  tempC: { label: 'Surface temperature', unit: '°C' },
+  /** Its title with the unit of its values, for a key or a heading ("UVB irradiance (µW/cm²)"). */
+  heading: string;
 };
 
 /**
@@ -57,7 +77,6 @@ function quantile(values: Float32Array[], q: number): { lo: number; hi: number }
  * plainly as "hotter than anywhere an animal can sit".
  */
 export function sharedScale(field: FieldName, grids: FieldGrid[], opts: { top?: number } = {}): FieldScale {
-  const { label, unit } = FIELD_LABELS[field];
   let thresholds: number[];
   if (field === 'uvi') {
     thresholds = UVI_EDGES;
@@ -80,8 +99,13 @@ export function sharedScale(field: FieldName, grids: FieldGrid[], opts: { top?: 
       else thresholds.unshift(from);
     }
   }
-  const ramp = field === 'tempC' ? 'inferno' : 'viridis';
-  return { field, thresholds, colors: bandColors(ramp, thresholds.length), label, unit };
+  return {
+    field,
+    thresholds,
+    colors: bandColors(FIELD_RAMP[field], thresholds.length),
+    label: FIELD_TITLE[field],
+    heading: fieldHeading(field),
+  };
 }
 
 /** Index of the band a value falls in. */

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { FieldGrid } from '@/simulation';
-import { bandLabel, bandOf, sharedScale, UVI_EDGES } from './scale';
+import { bandLabel, bandOf, sharedScale, UVI_EDGES } from './field-scale';
 
 const grid = (values: number[]): FieldGrid => {
   const a = Float32Array.from(values);

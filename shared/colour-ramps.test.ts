@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { bandColors, hexToRgb, labelColorOn, rampColor, relativeLuminance, rgbToHex } from './colorScale';
+import { bandColors, hexToRgb, labelColorOn, rampColor, relativeLuminance, rgbToHex } from './colour-ramps';
 
 describe('colour ramps', () => {
   it('round-trips hex', () => {
