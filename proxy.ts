@@ -1,12 +1,27 @@
 import { NextResponse, type NextRequest } from 'next/server';
+import { hasControlCharacter } from '@/lib/auth/return-to';
 import { contentSecurityPolicy, makeNonce } from '@/lib/security/csp';
 
+/** Query parameters that name a page to return to: a control character in one is an attack, not a typo. */
+const RETURN_PARAMS = ['callbackUrl', 'returnTo'];
+
 /**
- * A fresh nonce and Content-Security-Policy for every page request. Next reads the nonce from the
- * request's CSP header while it renders and puts it on its own scripts; the same policy goes out on the
- * response. Only a header: authorization is never done here (every route and page checks access itself).
+ * A fresh nonce and Content-Security-Policy for every page request — prefetches too, since the browser
+ * may keep a prefetched answer and show it as the page. Next reads the nonce from the request's CSP
+ * header while it renders and puts it on its own scripts; the same policy goes out on the response.
+ * A return address with a control character answers 400 here, before next-auth would fail to put it in
+ * a cookie (a 500) or a browser would strip it into another site's address. Only headers and that
+ * check: authorization is never done here (every route and page checks access itself).
  */
 export function proxy(request: NextRequest) {
+  const params = request.nextUrl.searchParams;
+  if (RETURN_PARAMS.some((name) => params.getAll(name).some(hasControlCharacter))) {
+    const message = 'The return address (callbackUrl) is not valid.';
+    return request.nextUrl.pathname.startsWith('/api/')
+      ? NextResponse.json({ error: { code: 'invalid', message, field: 'callbackUrl' } }, { status: 400 })
+      : new NextResponse(message, { status: 400, headers: { 'content-type': 'text/plain; charset=utf-8' } });
+  }
+  if (request.nextUrl.pathname.startsWith('/api/')) return NextResponse.next();
   const csp = contentSecurityPolicy({ nonce: makeNonce(), dev: process.env.NODE_ENV === 'development' });
   const headers = new Headers(request.headers);
   headers.set('content-security-policy', csp);
@@ -17,14 +32,9 @@ export function proxy(request: NextRequest) {
 
 export const config = {
   matcher: [
-    {
-      // Pages only: API replies and static files keep next.config.ts's baseline policy (frame-ancestors).
-      source: '/((?!api/|_next/static|_next/image|favicon.ico|icon.svg).*)',
-      // Router prefetches carry no HTML to protect; skipping them saves work.
-      missing: [
-        { type: 'header', key: 'next-router-prefetch' },
-        { type: 'header', key: 'purpose', value: 'prefetch' },
-      ],
-    },
+    // Pages: API replies and static files keep next.config.ts's baseline policy (frame-ancestors).
+    { source: '/((?!api/|_next/static|_next/image|favicon.ico|icon.svg).*)' },
+    // next-auth's own routes: only the return-address check.
+    { source: '/api/auth/:path*' },
   ],
 };

@@ -1,6 +1,7 @@
 import type { NextAuthOptions } from 'next-auth';
 import CredentialsProvider from 'next-auth/providers/credentials';
 import { authorizeCredentials } from './credentials';
+import { safeReturnTo } from './return-to';
 import { SESSION_MAX_AGE_S, SESSION_REFRESH_MS } from './lifetime';
 import { authSecret } from './secret';
 import { loadSessionUser, loadUserById } from './session-user';
@@ -29,6 +30,18 @@ export const authOptions: NextAuthOptions = {
     }),
   ],
   callbacks: {
+    // Where next-auth sends the browser after signing in or out: a path of this app, never another site.
+    redirect({ url, baseUrl }) {
+      const base = new URL(baseUrl);
+      let target: URL;
+      try {
+        target = new URL(url, base);
+      } catch {
+        return baseUrl;
+      }
+      if (target.origin !== base.origin) return baseUrl;
+      return new URL(safeReturnTo(`${target.pathname}${target.search}${target.hash}`, '/'), base).toString();
+    },
     async jwt({ token, user }) {
       const now = Date.now();
       if (user) {

@@ -75,4 +75,43 @@ describe('the page Content-Security-Policy (proxy.ts)', () => {
     for (const other of ['/api/health', '/_next/static/chunks/a.js', '/favicon.ico', '/icon.svg'])
       expect(matches(other), other).toBe(false);
   });
+
+  it('runs on prefetches too: a prefetched page the browser keeps carries the same policy', () => {
+    // A matcher entry with `missing` (or `has`) conditions would let prefetches past without the policy.
+    for (const entry of proxyConfig.matcher) expect(entry, entry.source).not.toHaveProperty('missing');
+    for (const entry of proxyConfig.matcher) expect(entry, entry.source).not.toHaveProperty('has');
+    const prefetch = new NextRequest('http://localhost:3000/enclosures', {
+      headers: { purpose: 'prefetch', 'next-router-prefetch': '1' },
+    });
+    const { directives } = parsePolicy(proxy(prefetch).headers.get('content-security-policy') ?? '');
+    expect(directives).toEqual(PAGE_CSP_DIRECTIVES);
+  });
+});
+
+describe('return addresses with control characters (proxy.ts)', () => {
+  const matched = (path: string) =>
+    proxyConfig.matcher.some((m) => new RegExp(`^${m.source.replace(':path*', '.*')}$`).test(path));
+
+  it.each([
+    ['/sign-in?callbackUrl=%2F%0A%2Fevil.example'],
+    ['/sign-in?callbackUrl=%2F%09%2Fevil.example'],
+    ['/sign-in?callbackUrl=%2Fok&callbackUrl=%2F%0D%0ASet-Cookie:x=1'],
+    ['/api/auth/signin?callbackUrl=%2F%0A%2Fevil.example'],
+    ['/api/auth/signout?callbackUrl=%2F%00'],
+  ])('answers %s with 400, never a redirect or a server error', async (path) => {
+    expect(matched(new URL(path, 'http://x').pathname), path).toBe(true);
+    const res = proxy(new NextRequest(`http://localhost:3000${path}`));
+    expect(res.status).toBe(400);
+    expect(res.headers.get('location')).toBeNull();
+    expect(await res.text()).toMatch(/return address/);
+  });
+
+  it('lets an ordinary return address through, and API routes keep the baseline policy', () => {
+    const page = proxy(new NextRequest('http://localhost:3000/sign-in?callbackUrl=%2Fenclosures%2F3'));
+    expect(page.status).toBe(200);
+    expect(page.headers.get('content-security-policy')).toMatch(/nonce-/);
+    const api = proxy(new NextRequest('http://localhost:3000/api/auth/csrf'));
+    expect(api.status).toBe(200);
+    expect(api.headers.get('content-security-policy')).toBeNull();
+  });
 });
