@@ -5,6 +5,7 @@ import * as m0003 from './0003-designs-variants-shares';
 import * as m0004 from './0004-species-lamp-types';
 import * as m0005 from './0005-lamp-log';
 import * as m0006 from './0006-zone-derived-uvb-targets';
+import * as m0007 from './0007-ended-sessions';
 
 export type Migration = {
   name: string;
@@ -23,4 +24,5 @@ export const migrations: Migration[] = [
   { name: '0004-species-lamp-types', ...m0004 },
   { name: '0005-lamp-log', ...m0005 },
   { name: '0006-zone-derived-uvb-targets', ...m0006 },
+  { name: '0007-ended-sessions', ...m0007 },
 ];

@@ -3,6 +3,7 @@ import { Enclosure } from './enclosure';
 import { Invitation } from './invitation';
 import { Membership } from './membership';
 import { Organisation } from './organisation';
+import { EndedSession } from './ended-session';
 import { SignInAttempt } from './sign-in-attempt';
 import { User } from './user';
 import { Design } from './design';
@@ -19,7 +20,7 @@ import { Upload } from './upload';
 
 export { Enclosure, Invitation, Membership, Organisation, User };
 export { Design, ShareLink, Variant };
-export { SignInAttempt };
+export { EndedSession, SignInAttempt };
 export { CatalogueSeeding, LampType, SpeciesSheet };
 export { Lamp, LampReminder, MailMessage, Reading, Upload };
 export { ROLES, type Role } from './membership';
@@ -39,6 +40,7 @@ export function initModels(sequelize: Sequelize): void {
   Variant.register(sequelize);
   ShareLink.register(sequelize);
   SignInAttempt.register(sequelize);
+  EndedSession.register(sequelize);
   SpeciesSheet.register(sequelize);
   LampType.register(sequelize);
   CatalogueSeeding.register(sequelize);

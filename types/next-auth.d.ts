@@ -17,6 +17,8 @@ declare module 'next-auth/jwt' {
   interface JWT {
     uid: number;
     sv: number;
+    /** This session's id: signing out records it as ended (lib/auth/ended-sessions.ts). */
+    sid?: string;
     memberships?: MembershipClaim[];
     /** When the session version and memberships were last checked against the database (ms). */
     checkedAt?: number;

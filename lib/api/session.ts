@@ -1,6 +1,7 @@
 import { getToken } from 'next-auth/jwt';
 import { authSecret } from '@/lib/auth/secret';
-import { loadSessionUser, type CurrentUser } from '@/lib/auth/session-user';
+import { loadActiveSession } from '@/lib/auth/ended-sessions';
+import type { CurrentUser } from '@/lib/auth/session-user';
 
 export function parseCookies(header: string | null | undefined): Record<string, string> {
   const out: Record<string, string> = {};
@@ -22,14 +23,13 @@ type GetTokenReq = Parameters<typeof getToken>[0]['req'];
 
 /**
  * Who is asking: the session cookie's JWT, then the account re-checked in the database so a bumped
- * session version or a removed membership takes effect on the very next request.
+ * session version, a removed membership or a sign-out takes effect on the very next request.
  */
 export async function sessionUserFromHeaders(headers: Headers): Promise<CurrentUser | null> {
   // next-auth reads cookies from `req.cookies`; a plain Request only has the Cookie header.
   const req = { headers: Object.fromEntries(headers), cookies: parseCookies(headers.get('cookie')) };
   const token = await getToken({ req: req as unknown as GetTokenReq, secret: authSecret() });
-  if (!token || typeof token.uid !== 'number' || typeof token.sv !== 'number') return null;
-  return loadSessionUser(token.uid, token.sv);
+  return token ? loadActiveSession(token) : null;
 }
 
 export const sessionUser = (req: Request) => sessionUserFromHeaders(req.headers);

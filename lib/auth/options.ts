@@ -4,7 +4,8 @@ import { authorizeCredentials } from './credentials';
 import { safeReturnTo } from './return-to';
 import { SESSION_MAX_AGE_S, SESSION_REFRESH_MS } from './lifetime';
 import { authSecret } from './secret';
-import { loadSessionUser, loadUserById } from './session-user';
+import { endSession, loadActiveSession, newSessionId } from './ended-sessions';
+import { loadUserById } from './session-user';
 
 export { SESSION_MAX_AGE_S, SESSION_REFRESH_MS };
 /** A changed session version ends a session at the next request, and in next-auth's own answer within a minute. */
@@ -53,15 +54,16 @@ export const authOptions: NextAuthOptions = {
           email: fresh.email,
           uid: fresh.id,
           sv: fresh.sessionVersion,
+          sid: newSessionId(),
           memberships: fresh.memberships,
           checkedAt: now,
         };
       }
-      if (typeof token.uid !== 'number' || typeof token.sv !== 'number')
+      if (typeof token.uid !== 'number' || typeof token.sv !== 'number' || typeof token.sid !== 'string')
         throw new Error('Malformed session.');
       if (typeof token.checkedAt === 'number' && now - token.checkedAt < SESSION_RECHECK_MS) return token;
-      // Throwing makes next-auth clear the cookie: the session has ended (signed out everywhere or removed).
-      const fresh = await loadSessionUser(token.uid, token.sv);
+      // Throwing makes next-auth clear the cookie: the session has ended (signed out, everywhere or here, or removed).
+      const fresh = await loadActiveSession(token);
       if (!fresh) throw new Error('Session ended.');
       return {
         ...token,
@@ -80,6 +82,14 @@ export const authOptions: NextAuthOptions = {
         memberships: token.memberships ?? [],
       };
       return session;
+    },
+  },
+  events: {
+    // Plain sign-out ends this session on the server too: a copy of the cookie is refused from now on.
+    async signOut({ token }) {
+      if (typeof token?.sid !== 'string' || typeof token.uid !== 'number') return;
+      const exp = typeof token.exp === 'number' ? new Date(token.exp * 1000) : undefined;
+      await endSession(token.sid, token.uid, exp);
     },
   },
   logger: {

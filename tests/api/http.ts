@@ -1,6 +1,7 @@
 // Calls the real route handlers with real Requests carrying a real next-auth session cookie,
 // the way a browser does after signing in.
 import { encode } from 'next-auth/jwt';
+import { newSessionId } from '@/lib/auth/ended-sessions';
 import { authSecret } from '@/lib/auth/secret';
 import { memberships } from '@/lib/auth/session-user';
 import type { User } from '@/models';
@@ -16,6 +17,7 @@ export async function sessionCookie(user: User, sessionVersion = user.sessionVer
       email: user.email,
       uid: user.id,
       sv: sessionVersion,
+      sid: newSessionId(),
       memberships: await memberships(user.id),
       checkedAt: Date.now(),
     },

@@ -3,6 +3,7 @@
 // session version is re-read from the database on each), and within SESSION_RECHECK_MS (one minute) for
 // next-auth's own /api/auth/session answer, whose JWT callback re-checks at most that often.
 import { encode } from 'next-auth/jwt';
+import { newSessionId } from '@/lib/auth/ended-sessions';
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import * as password from '@/app/api/account/password/route';
 import * as sessions from '@/app/api/account/sessions/route';
@@ -59,6 +60,59 @@ async function expectEnded(...cookies: string[]) {
     expect(await sessionUserFromHeaders(new Headers({ cookie }))).toBeNull();
   }
 }
+
+/** The session id inside a cookie made by sessionCookie (or by next-auth itself). */
+async function sidOf(cookie: string): Promise<string> {
+  const { decode } = await import('next-auth/jwt');
+  const token = await decode({ token: cookie.split('=')[1]!, secret: authSecret() });
+  return String(token?.sid);
+}
+
+describe('plain sign-out', () => {
+  const signOut = async (cookie: string) => {
+    const { decode } = await import('next-auth/jwt');
+    const token = await decode({ token: cookie.split('=')[1]!, secret: authSecret() });
+    // What next-auth's sign-out route calls with the decoded cookie before it clears it in the browser.
+    await authOptions.events!.signOut!({ token: token!, session: undefined as never });
+  };
+
+  it('ends that session on the server: a copy of its cookie is refused, other devices keep theirs', async () => {
+    const { phone, laptop } = await twoDevices(staff);
+    const copied = phone;
+    await signOut(phone);
+    await expectEnded(copied);
+    expect((await listAs(laptop)).status).toBe(200);
+    // next-auth's own session answer refuses it too (it re-checks at most once a minute, so force that).
+    const { decode } = await import('next-auth/jwt');
+    const token = await decode({ token: copied.split('=')[1]!, secret: authSecret() });
+    await expect(
+      authOptions.callbacks!.jwt!({ token: { ...token!, checkedAt: 0 }, account: null } as never),
+    ).rejects.toThrow(/Session ended/);
+  });
+
+  it('refuses a cookie without a session id (one made before sessions had ids, or forged without one)', async () => {
+    const user = (await User.findByPk(staff.id))!;
+    const bare = await encode({
+      token: { sub: String(user.id), uid: user.id, sv: user.sessionVersion, checkedAt: Date.now() },
+      secret: authSecret(),
+    });
+    expect((await listAs(`next-auth.session-token=${bare}`)).status).toBe(401);
+  });
+
+  it('keeps the record only until the cookie would have lapsed', async () => {
+    const { EndedSession } = await import('@/models');
+    const cookie = await sessionCookie(staff);
+    await signOut(cookie);
+    const row = await EndedSession.findByPk(await sidOf(cookie));
+    expect(row?.userId).toBe(staff.id);
+    const left = row!.expiresAt.getTime() - Date.now();
+    expect(left).toBeGreaterThan(0);
+    expect(left).toBeLessThanOrEqual(SESSION_MAX_AGE_S * 1000);
+    // Signing out twice is harmless.
+    await signOut(cookie);
+    expect(await EndedSession.count({ where: { userId: staff.id } })).toBe(1);
+  });
+});
 
 describe('sign out everywhere', () => {
   it('ends every session of the person, the one that asked included, and no one else', async () => {
@@ -153,6 +207,7 @@ describe('next-auth JWT callback (what /api/auth/session answers)', () => {
   const tokenOf = (user: User, checkedAt: number) => ({
     uid: user.id,
     sv: (user.sessionVersion ?? 1) as number,
+    sid: newSessionId(),
     checkedAt,
   });
 
@@ -179,7 +234,13 @@ describe('next-auth JWT callback (what /api/auth/session answers)', () => {
   it('refuses a cookie past its lifetime', async () => {
     const user = (await User.findByPk(staff.id))!;
     const expired = await encode({
-      token: { sub: String(user.id), uid: user.id, sv: user.sessionVersion, checkedAt: Date.now() },
+      token: {
+        sub: String(user.id),
+        uid: user.id,
+        sv: user.sessionVersion,
+        sid: newSessionId(),
+        checkedAt: Date.now(),
+      },
       secret: authSecret(),
       maxAge: -60,
     });

@@ -1,4 +1,5 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
+import { newSessionId } from '@/lib/auth/ended-sessions';
 import * as enclosures from '@/app/api/enclosures/route';
 import * as signUpRoute from '@/app/api/sign-up/route';
 import { authOptions, authorizeCredentials, SIGN_IN_LIMITS } from '@/lib/auth';
@@ -139,7 +140,7 @@ describe('sessions', () => {
 
   it('ends a session within a minute of a bumped session version', async () => {
     const jwt = authOptions.callbacks!.jwt!;
-    const base = { sub: String(alice.id), uid: alice.id, sv: 1, memberships: [] };
+    const base = { sub: String(alice.id), uid: alice.id, sv: 1, sid: newSessionId(), memberships: [] };
     await User.increment('sessionVersion', { where: { id: alice.id } });
     // Checked 10 s ago: still trusted until the minute is up.
     const recent = await jwt({ token: { ...base, checkedAt: Date.now() - 10_000 }, account: null } as never);
@@ -161,7 +162,14 @@ describe('sessions', () => {
     const { Membership } = await import('@/models');
     await Membership.create({ organisationId: second.id, userId: alice.id, role: 'keeper' });
     const token = await jwt({
-      token: { sub: String(alice.id), uid: alice.id, sv: 1, memberships: [], checkedAt: 0 },
+      token: {
+        sub: String(alice.id),
+        uid: alice.id,
+        sv: 1,
+        sid: newSessionId(),
+        memberships: [],
+        checkedAt: 0,
+      },
       account: null,
     } as never);
     expect(token.memberships?.map((m) => m.organisationId).sort()).toEqual([org.id, second.id].sort());

@@ -1,6 +1,7 @@
 // Run by db-outage.test.ts in a process of its own (tsx), with DB_PORT pointing where no database
 // answers. Calls real route handlers as Next would and prints one JSON line with what came back.
 import { encode } from 'next-auth/jwt';
+import { newSessionId } from '@/lib/auth/ended-sessions';
 import * as enclosures from '@/app/api/enclosures/route';
 import * as health from '@/app/api/health/route';
 import * as variantItem from '@/app/api/variants/[id]/route';
@@ -31,7 +32,15 @@ async function measure(name: string, handler: Handler, req: Request, params: Rec
 async function main() {
   // A session cookie as next-auth would set it: the pipeline must reach the database to check it.
   const token = await encode({
-    token: { sub: '1', uid: 1, sv: 1, name: 'Outage test', email: 'outage@example.com', memberships: [] },
+    token: {
+      sub: '1',
+      uid: 1,
+      sv: 1,
+      sid: newSessionId(),
+      name: 'Outage test',
+      email: 'outage@example.com',
+      memberships: [],
+    },
     secret: authSecret(),
   });
   const headers = { cookie: `next-auth.session-token=${token}`, origin: ORIGIN };
