@@ -6,6 +6,7 @@ import * as m0004 from './0004-species-lamp-types';
 import * as m0005 from './0005-lamp-log';
 import * as m0006 from './0006-zone-derived-uvb-targets';
 import * as m0007 from './0007-ended-sessions';
+import * as m0008 from './0008-background-jobs';
 
 export type Migration = {
   name: string;
@@ -25,4 +26,5 @@ export const migrations: Migration[] = [
   { name: '0005-lamp-log', ...m0005 },
   { name: '0006-zone-derived-uvb-targets', ...m0006 },
   { name: '0007-ended-sessions', ...m0007 },
+  { name: '0008-background-jobs', ...m0008 },
 ];

@@ -17,12 +17,15 @@ import { LampReminder } from './lamp-reminder';
 import { MailMessage } from './mail-message';
 import { Reading } from './reading';
 import { Upload } from './upload';
+import { JobRun, JobRunCount, JobUnit } from './job-run';
 
 export { Enclosure, Invitation, Membership, Organisation, User };
 export { Design, ShareLink, Variant };
 export { EndedSession, SignInAttempt };
 export { CatalogueSeeding, LampType, SpeciesSheet };
 export { Lamp, LampReminder, MailMessage, Reading, Upload };
+export { JobRun, JobRunCount, JobUnit };
+export { parseCounts, type JobCounts, type JobOutcome } from './job-run';
 export { ROLES, type Role } from './membership';
 
 const initialised = new WeakSet<Sequelize>();
@@ -49,6 +52,9 @@ export function initModels(sequelize: Sequelize): void {
   Upload.register(sequelize);
   MailMessage.register(sequelize);
   LampReminder.register(sequelize);
+  JobRun.register(sequelize);
+  JobRunCount.register(sequelize);
+  JobUnit.register(sequelize);
 
   Organisation.hasMany(Membership, { foreignKey: 'organisationId', as: 'memberships' });
   Membership.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });

@@ -20,6 +20,8 @@ export class MailMessage extends Model<InferAttributes<MailMessage>, InferCreati
   declare kind: string;
   declare toEmail: string;
   declare toUserId: number | null;
+  /** The organisation the message concerns (its owner sees undelivered ones); null for sign-up mail. */
+  declare organisationId: CreationOptional<number | null>;
   declare subject: string;
   declare body: string;
   declare dedupeKey: string;
@@ -27,6 +29,8 @@ export class MailMessage extends Model<InferAttributes<MailMessage>, InferCreati
   declare attempts: CreationOptional<number>;
   declare lastError: CreationOptional<string | null>;
   declare sentAt: CreationOptional<Date | null>;
+  /** A failed delivery is not retried before this (back-off); null: as soon as possible. */
+  declare nextAttemptAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -37,13 +41,16 @@ export class MailMessage extends Model<InferAttributes<MailMessage>, InferCreati
         kind: { type: DataTypes.STRING(40), allowNull: false },
         toEmail: { type: DataTypes.STRING(254), allowNull: false },
         toUserId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        organisationId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         subject: { type: DataTypes.STRING(250), allowNull: false },
-        body: { type: DataTypes.TEXT, allowNull: false },
+        // MEDIUMTEXT: room for any message the composers write (theirs are bounded far below it).
+        body: { type: DataTypes.TEXT('medium'), allowNull: false },
         dedupeKey: { type: DataTypes.STRING(191), allowNull: false, unique: true },
         status: { type: DataTypes.ENUM(...MAIL_STATUSES), allowNull: false, defaultValue: 'queued' },
         attempts: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
         lastError: { type: DataTypes.TEXT, allowNull: true },
         sentAt: { type: DataTypes.DATE, allowNull: true },
+        nextAttemptAt: { type: DataTypes.DATE(3), allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

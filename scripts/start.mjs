@@ -2,13 +2,23 @@
 // `npm start`: everything Baskwell needs, from a fresh clone, then the app on http://localhost:$PORT.
 //   installs npm packages (missing or stale) and Debian's mariadb-server (when missing),
 //   starts or reuses the private MariaDB (.data/mariadb, 127.0.0.1:$DB_PORT), creates the database,
-//   migrates, seeds the demo scenario, starts the fake SMTP server, builds and serves the app.
+//   migrates, seeds the demo scenario, starts the fake SMTP server, builds and serves the app, and
+//   starts the background job process (scripts/jobs.ts).
 // `npm run dev` (--dev) serves with `next dev` instead. Ctrl-C stops everything this started.
 // Plain Node with no third-party imports: it runs before node_modules exists.
 import { ensureSecret, loadEnv } from './lib/env.mjs';
 import { ensureNodeModules } from './lib/packages.mjs';
 import { bold, duration, green, log, red } from './lib/proc.mjs';
-import { Lifecycle, migrate, prepareDatabase, seed, startMail, startNext, startS3 } from './lib/stack.mjs';
+import {
+  Lifecycle,
+  migrate,
+  prepareDatabase,
+  seed,
+  startJobs,
+  startMail,
+  startNext,
+  startS3,
+} from './lib/stack.mjs';
 
 const dev = process.argv.includes('--dev');
 const env = loadEnv();
@@ -47,10 +57,13 @@ async function main() {
   await startMail(life, env);
   await startS3(life, env);
   const next = await startNext(life, env, { port: Number(env.PORT), dev });
+  startJobs(life, env);
   log(`Ready in ${duration(Date.now() - t0)}.`);
   banner(signIns);
   // Whatever stops on its own takes the rest down with it.
-  const first = await Promise.race(life.services.map((s) => s.exited.then((r) => ({ s, r }))));
+  const first = await Promise.race(
+    life.services.filter((s) => !s.restarts).map((s) => s.exited.then((r) => ({ s, r }))),
+  );
   if (life.stopping) return;
   log(red(`${first.s.serviceName} stopped (${first.r.signal ?? first.r.code}); stopping the rest.`));
   await life.stop();

@@ -126,6 +126,8 @@ describe('reminder job', () => {
     const w = await world();
     const [a, b] = await Promise.all([runReminders(), runReminders()]);
     expect(a.queued + b.queued).toBe(1);
+    // The job's lock lets one of the two run; the other does nothing.
+    expect([a.skipped, b.skipped].sort()).toEqual([false, true]);
     const again = await runReminders();
     expect(again).toMatchObject({ queued: 0, sent: 0, failed: 0 });
     await waitForMail(w.keeper.email);
@@ -146,7 +148,10 @@ describe('reminder job', () => {
     expect(row).toMatchObject({ status: 'failed', attempts: 1, lastError: 'SMTP connection refused (test)' });
     expect(await listMail(w.keeper.email)).toHaveLength(0);
 
-    const retry = await runReminders();
+    // Not again at once: the failed message waits out its back-off (five minutes after one attempt).
+    expect(row.nextAttemptAt!.getTime()).toBeGreaterThan(Date.now() + 4 * 60_000);
+    expect(await runReminders()).toMatchObject({ queued: 0, sent: 0, failed: 0 });
+    const retry = await runReminders({ now: new Date(Date.now() + 6 * 60_000) });
     expect(retry).toMatchObject({ queued: 0, sent: 1, failed: 0 });
     await row.reload();
     expect(row).toMatchObject({ status: 'sent', attempts: 2, lastError: null });

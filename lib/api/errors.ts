@@ -1,5 +1,7 @@
 import { ConnectionError, TimeoutError, UniqueConstraintError } from 'sequelize';
+import type { Logger } from 'pino';
 import { ZodError } from 'zod';
+import { logger } from '@/lib/log';
 
 /**
  * Every failure a route handler answers with. The body is always
@@ -98,17 +100,17 @@ export function isDatabaseUnavailable(error: unknown): boolean {
 }
 
 /** Turns anything thrown into a safe JSON response, logging what the client must not see. */
-export function errorResponse(error: unknown, context = 'request'): Response {
+export function errorResponse(error: unknown, context = 'request', log: Logger = logger()): Response {
   let apiError: ApiError;
   if (error instanceof ApiError) apiError = error;
   else if (error instanceof ZodError) apiError = fromZod(error);
   else if (isDatabaseUnavailable(error)) {
-    console.error(`${context}: database unavailable`, (error as Error).message);
+    log.error({ context, err: error }, 'database unavailable');
     apiError = unavailable();
   } else if (error instanceof UniqueConstraintError) {
     apiError = conflict('That already exists.');
   } else {
-    console.error(`${context}: unexpected error`, error);
+    log.error({ context, err: error }, 'unexpected error');
     apiError = new ApiError(
       500,
       'internal',

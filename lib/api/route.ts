@@ -1,5 +1,7 @@
+import type { Logger } from 'pino';
 import type { ZodType, z } from 'zod';
 import type { CurrentUser } from '@/lib/auth/session-user';
+import { requestIdOf, requestLogger } from '@/lib/log';
 import { can, type Action, type Resource } from '@/lib/permissions';
 import { ApiError, errorResponse, forbidden, fromZod, notFound, unauthenticated } from './errors';
 import { assertNotFormBody, assertSameOrigin, isStateChanging, readJsonBody } from './request';
@@ -30,6 +32,8 @@ type Spec<P extends Schema, Q extends Schema, B extends Schema, A extends boolea
     query: Out<Q>;
     body: Out<B>;
     user: A extends false ? CurrentUser | null : CurrentUser;
+    /** Logs with this request's id. */
+    log: Logger;
   }) => Promise<Response | unknown>;
 };
 
@@ -40,26 +44,45 @@ export function route<
   A extends boolean = true,
 >(spec: Spec<P, Q, B, A>) {
   return async (req: Request, ctx?: RouteContext): Promise<Response> => {
+    // Every response names its request id, and every log line about the request carries it, so a
+    // person reporting a failure can quote one id that finds the server's side of the story.
+    const requestId = requestIdOf(req.headers);
+    const response = await handle(spec, req, ctx, requestId);
     try {
-      if (isStateChanging(req.method)) {
-        assertSameOrigin(req);
-        assertNotFormBody(req);
-      }
-      const rawBody = spec.body ? await readJsonBody(req, spec.maxBodyBytes) : undefined;
-      const params = parse(spec.params, ctx ? await ctx.params : {}, undefined);
-      const query = parse(spec.query, Object.fromEntries(new URL(req.url).searchParams), undefined);
-      const body = parse(spec.body, rawBody ?? {}, undefined);
-      const user = await sessionUser(req);
-      if (!user && spec.auth !== false) throw unauthenticated();
-      const result = await spec.handler({ req, params, query, body, user } as Parameters<
-        Spec<P, Q, B, A>['handler']
-      >[0]);
-      if (result instanceof Response) return result;
-      return json(result ?? { ok: true });
-    } catch (error) {
-      return errorResponse(error, `${req.method} ${new URL(req.url).pathname}`);
+      response.headers.set('X-Request-Id', requestId);
+    } catch {
+      // A response with immutable headers (e.g. a redirect made by Response.redirect) goes out without it.
     }
+    return response;
   };
+}
+
+async function handle<P extends Schema, Q extends Schema, B extends Schema, A extends boolean>(
+  spec: Spec<P, Q, B, A>,
+  req: Request,
+  ctx: RouteContext | undefined,
+  requestId: string,
+): Promise<Response> {
+  try {
+    if (isStateChanging(req.method)) {
+      assertSameOrigin(req);
+      assertNotFormBody(req);
+    }
+    const rawBody = spec.body ? await readJsonBody(req, spec.maxBodyBytes) : undefined;
+    const params = parse(spec.params, ctx ? await ctx.params : {}, undefined);
+    const query = parse(spec.query, Object.fromEntries(new URL(req.url).searchParams), undefined);
+    const body = parse(spec.body, rawBody ?? {}, undefined);
+    const user = await sessionUser(req);
+    if (!user && spec.auth !== false) throw unauthenticated();
+    const log = requestLogger(requestId);
+    const result = await spec.handler({ req, params, query, body, user, log } as Parameters<
+      Spec<P, Q, B, A>['handler']
+    >[0]);
+    if (result instanceof Response) return result;
+    return json(result ?? { ok: true });
+  } catch (error) {
+    return errorResponse(error, `${req.method} ${new URL(req.url).pathname}`, requestLogger(requestId));
+  }
 }
 
 function parse<S extends Schema>(schema: S, value: unknown, prefix: string | undefined): Out<S> {

@@ -2,6 +2,8 @@ import { createHash } from 'node:crypto';
 import { Op, UniqueConstraintError } from 'sequelize';
 import { getSequelize } from '@/lib/db';
 import { sendMail, type Mail } from '@/lib/mail';
+import { backoffMs } from '@/lib/jobs/backoff';
+import { errorText } from '@/lib/log';
 import { LampReminder, MailMessage, type User } from '@/models';
 import { composeReminder } from './compose';
 import type { DueItem } from './due';
@@ -19,6 +21,7 @@ export async function enqueueReminder(
   keeper: Pick<User, 'id' | 'name' | 'email'>,
   items: readonly DueItem[],
   appUrl: string,
+  organisation?: { id: number; name: string },
 ): Promise<MailMessage | null> {
   const sequelize = getSequelize();
   const announced = new Set(
@@ -31,16 +34,24 @@ export async function enqueueReminder(
   );
   const fresh = items.filter((i) => !announced.has(i.dedupeKey));
   if (fresh.length === 0) return null;
-  const { subject, text } = composeReminder(keeper, fresh, appUrl);
+  const { subject, text } = composeReminder(keeper, fresh, appUrl, organisation?.name);
   const keys = fresh.map((i) => i.dedupeKey);
   const dedupeKey =
     keys.length === 1
       ? keys[0]!
-      : `keeper:${keeper.id}:lamps:${createHash('sha256').update(keys.join('|')).digest('hex').slice(0, 40)}`;
+      : `keeper:${keeper.id}:org:${organisation?.id ?? 0}:lamps:${createHash('sha256').update(keys.join('|')).digest('hex').slice(0, 40)}`;
   try {
     return await sequelize.transaction(async (transaction) => {
       const message = await MailMessage.create(
-        { kind: 'lamp-reminder', toEmail: keeper.email, toUserId: keeper.id, subject, body: text, dedupeKey },
+        {
+          kind: 'lamp-reminder',
+          toEmail: keeper.email,
+          toUserId: keeper.id,
+          organisationId: organisation?.id ?? null,
+          subject,
+          body: text,
+          dedupeKey,
+        },
         { transaction },
       );
       await LampReminder.bulkCreate(
@@ -68,31 +79,61 @@ export type Delivery = { sent: number; failed: number };
 export const LEASE_MS = 10 * 60_000;
 
 /**
- * Sends queued (and earlier failed) messages. Claiming an attempt is a compare-and-set on the attempt
+ * Sends queued (and earlier failed) messages, each one on its own: a message that fails is marked
+ * failed with its error and a time before which it is not tried again (back-off, up to MAX_ATTEMPTS
+ * attempts), and the next message goes out. Claiming an attempt is a compare-and-set on the attempt
  * counter that leaves the row "queued with attempts > 0" while it is being sent — a state other runners
  * skip until the lease runs out — so two runners never send the same message.
  */
 export async function deliverQueued(
-  opts: { send?: (mail: Mail) => Promise<void>; limit?: number } = {},
+  opts: {
+    send?: (mail: Mail) => Promise<void>;
+    /** Messages read per query; the loop goes on until none is left to send. */
+    batch?: number;
+    now?: Date;
+    onFailure?: (m: MailMessage, error: unknown) => void;
+  } = {},
 ): Promise<Delivery> {
   getSequelize();
   const send = opts.send ?? sendMail;
-  const rows = await MailMessage.findAll({
-    where: {
-      [Op.or]: [
-        { status: 'queued', attempts: 0 },
-        { status: 'failed', attempts: { [Op.lt]: MAX_ATTEMPTS } },
-        {
-          status: 'queued',
-          attempts: { [Op.between]: [1, MAX_ATTEMPTS - 1] },
-          updatedAt: { [Op.lt]: new Date(Date.now() - LEASE_MS) },
-        },
-      ],
-    },
-    order: [['id', 'ASC']],
-    limit: opts.limit ?? 200,
-  });
+  const now = opts.now ?? new Date();
   const result: Delivery = { sent: 0, failed: 0 };
+  // Ids only grow: a message that fails in this pass is behind the cursor and waits for a later run.
+  for (let cursor = 0; ;) {
+    const rows = await MailMessage.findAll({
+      where: {
+        id: { [Op.gt]: cursor },
+        [Op.or]: [
+          { status: 'queued', attempts: 0 },
+          {
+            status: 'failed',
+            attempts: { [Op.lt]: MAX_ATTEMPTS },
+            [Op.or]: [{ nextAttemptAt: null }, { nextAttemptAt: { [Op.lte]: now } }],
+          },
+          {
+            status: 'queued',
+            attempts: { [Op.between]: [1, MAX_ATTEMPTS - 1] },
+            updatedAt: { [Op.lt]: new Date(now.getTime() - LEASE_MS) },
+          },
+        ],
+      },
+      order: [['id', 'ASC']],
+      limit: opts.batch ?? 200,
+    });
+    if (rows.length === 0) break;
+    cursor = rows[rows.length - 1]!.id;
+    await deliverRows(rows, send, now, result, opts.onFailure);
+  }
+  return result;
+}
+
+async function deliverRows(
+  rows: MailMessage[],
+  send: (mail: Mail) => Promise<void>,
+  now: Date,
+  result: Delivery,
+  onFailure?: (m: MailMessage, error: unknown) => void,
+) {
   for (const m of rows) {
     const [claimed] = await MailMessage.update(
       { attempts: m.attempts + 1, status: 'queued' },
@@ -102,18 +143,21 @@ export async function deliverQueued(
     try {
       await send({ to: m.toEmail, subject: m.subject, text: m.body });
       await MailMessage.update(
-        { status: 'sent', sentAt: new Date(), lastError: null },
+        { status: 'sent', sentAt: new Date(), lastError: null, nextAttemptAt: null },
         { where: { id: m.id } },
       );
       result.sent++;
     } catch (e) {
-      const message = e instanceof Error ? e.message : String(e);
       await MailMessage.update(
-        { status: 'failed', lastError: message.slice(0, 2000) },
+        {
+          status: 'failed',
+          lastError: errorText(e).slice(0, 2000),
+          nextAttemptAt: new Date(now.getTime() + backoffMs(m.attempts + 1)),
+        },
         { where: { id: m.id } },
       );
       result.failed++;
+      onFailure?.(m, e);
     }
   }
-  return result;
 }

@@ -125,6 +125,27 @@ export async function startS3(life, env, { logFile } = {}) {
   return child;
 }
 
+/**
+ * The background job process (scripts/jobs.ts): reminders and other jobs on their intervals, off the
+ * web server's event loop. Nothing to wait for: it logs a line when it has started. If it ends on its
+ * own (a crash), it is started again after a pause and the web app goes on serving: a failing job
+ * must not take the site down. Its children are marked `restarts` so the caller does not stop on them.
+ */
+export function startJobs(life, env, { logFile, pauseMs = 10_000 } = {}) {
+  const child = service('jobs', bin('tsx'), ['scripts/jobs.ts'], { env, logFile });
+  child.restarts = true;
+  life.services.push(child);
+  void child.exited.then((r) => {
+    if (life.stopping) return;
+    life.services = life.services.filter((s) => s !== child);
+    log(red(`jobs stopped (${r.signal ?? r.code}); starting it again in ${pauseMs / 1000} s.`));
+    setTimeout(() => {
+      if (!life.stopping) startJobs(life, env, { logFile, pauseMs });
+    }, pauseMs).unref();
+  });
+  return child;
+}
+
 /** `next build` (unless dev), then `next start`/`next dev` on `port`; resolves once it answers. */
 export async function startNext(life, env, { port, dev = false, build = true, logFile } = {}) {
   const nextEnv = { ...env, NEXT_TELEMETRY_DISABLED: '1' };

@@ -60,10 +60,12 @@ describe('e-mail server down', () => {
       const port = await freePort();
       const send = senderTo(port);
 
-      // Down: twice, as the hourly job would try. The message is queued once and kept for later.
+      // Down: twice, as the hourly job would try (the second time after the first back-off). The message
+      // is queued once and kept for later.
+      const minutes = (m: number) => new Date(Date.now() + m * 60_000);
       const first = await runReminders({ send });
       expect(first).toMatchObject({ due: 1, queued: 1, sent: 0, failed: 1 });
-      const second = await runReminders({ send });
+      const second = await runReminders({ send, now: minutes(6) });
       expect(second).toMatchObject({ queued: 0, sent: 0, failed: 1 });
       const row = (await MailMessage.findOne({ where: { toEmail: keeper.email } }))!;
       expect(row).toMatchObject({ status: 'failed', attempts: 2 });
@@ -72,9 +74,9 @@ describe('e-mail server down', () => {
 
       // Back, on the same port.
       smtp = await startFakeSmtp({ smtpPort: port, httpPort: 0, dir: null, quiet: true });
-      const back = await runReminders({ send });
+      const back = await runReminders({ send, now: minutes(60) });
       expect(back).toMatchObject({ queued: 0, sent: 1, failed: 0 });
-      const again = await runReminders({ send });
+      const again = await runReminders({ send, now: minutes(120) });
       expect(again).toMatchObject({ queued: 0, sent: 0, failed: 0 });
 
       const received = smtp.store.list({ to: keeper.email });

@@ -16,18 +16,25 @@ export const metadata: Metadata = { title: 'Lamp log' };
 const LIMIT = 500;
 
 /** Every lamp of the organisation (a keeper: their own), most urgent first. */
-export default async function LampLogPage({ searchParams }: { searchParams: Promise<{ retired?: string }> }) {
+export default async function LampLogPage({
+  searchParams,
+}: {
+  searchParams: Promise<{ retired?: string; due?: string }>;
+}) {
   const user = await requireUser('/lamp-log');
   const membership = await currentMembership(user);
   if (!membership) return null;
-  const { retired } = await searchParams;
-  const includeRetired = retired === '1';
+  const { retired, due } = await searchParams;
+  // `?due=1` is the reminder e-mail's link: only the lamps to replace or test soon.
+  const dueOnly = due === '1';
+  const includeRetired = retired === '1' && !dueOnly;
   const keeperOnly = roleIn(user, membership.organisationId) === 'keeper' ? user.id : null;
   const rows = await lampsOfOrganisation(membership.organisationId, keeperOnly, {
     limit: LIMIT,
     includeRetired,
   });
-  const lamps = await summarise(rows.slice(0, LIMIT), todayIso());
+  const all = await summarise(rows.slice(0, LIMIT), todayIso());
+  const lamps = dueOnly ? all.filter((l) => l.status === 'replace' || l.status === 'test-soon') : all;
   const counts = {
     replace: lamps.filter((l) => l.status === 'replace').length,
     test: lamps.filter((l) => l.status === 'test-soon').length,
@@ -42,11 +49,23 @@ export default async function LampLogPage({ searchParams }: { searchParams: Prom
       />
       {lamps.length === 0 ? (
         <EmptyState
-          title={includeRetired ? 'No lamps logged yet' : 'No lamps in use'}
+          title={
+            dueOnly
+              ? 'No lamp needs attention now'
+              : includeRetired
+                ? 'No lamps logged yet'
+                : 'No lamps in use'
+          }
           action={
-            <Link href="/enclosures" className={button.primary}>
-              Go to enclosures
-            </Link>
+            dueOnly ? (
+              <Link href="/lamp-log" className={button.primary}>
+                Show every lamp
+              </Link>
+            ) : (
+              <Link href="/enclosures" className={button.primary}>
+                Go to enclosures
+              </Link>
+            )
           }
         >
           <p>
@@ -75,9 +94,15 @@ export default async function LampLogPage({ searchParams }: { searchParams: Prom
           <LampTable lamps={lamps} showEnclosure />
           <p className="text-caption text-basalt-500">
             {rows.length > LIMIT && `Showing the first ${LIMIT} lamps. `}
-            <Link href={includeRetired ? '/lamp-log' : '/lamp-log?retired=1'} className={link}>
-              {includeRetired ? 'Hide retired lamps' : 'Show retired lamps too'}
-            </Link>
+            {dueOnly ? (
+              <Link href="/lamp-log" className={link}>
+                Showing the lamps to replace or test soon; show every lamp
+              </Link>
+            ) : (
+              <Link href={includeRetired ? '/lamp-log' : '/lamp-log?retired=1'} className={link}>
+                {includeRetired ? 'Hide retired lamps' : 'Show retired lamps too'}
+              </Link>
+            )}
           </p>
         </div>
       )}
