@@ -6,7 +6,7 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from 'sequelize';
-import { LAMP_TECH_IDS as ENGINE_LAMP_TECH_IDS } from '../simulation/model/techs';
+import { LAMP_TECH_IDS as ENGINE_LAMP_TECH_IDS } from '@/simulation';
 
 /** The generic lamp technologies of the design file (BRIEF §3 `tech`), as the engine defines them. */
 export const LAMP_TECH_IDS = ENGINE_LAMP_TECH_IDS;

@@ -12,11 +12,9 @@
  * maxRelError is measured on those cells.
  */
 import { loadavg } from 'node:os';
-import { computeFields } from '../simulation/fields/grid';
-import { FieldSolver } from '../simulation/fields/solver';
+import { computeFields, FieldSolver, type Design } from '@/simulation';
 import { maxRelativeError, referenceFields } from '../simulation/testing/reference';
 import { benchDesign } from '../simulation/testing/fixtures';
-import type { Design } from '../simulation/model/schema';
 
 interface Timing {
   cpu: number;

@@ -1,5 +1,6 @@
 /** Public API of the light-and-heat engine (pure TypeScript; see simulation/README.md). */
 export * from './model';
+export { EXAMPLE_DESIGN, exampleDesign } from './model/example';
 export * from './fields/types';
 export { computeFields, probe } from './fields/grid';
 export { FieldSolver, type SolverStats } from './fields/solver';

@@ -1,5 +1,4 @@
-import { LAMP_TECHS } from '@/simulation';
-import type { LampTechId } from '@/models/lamp-type';
+import { LAMP_TECHS, type LampTech as LampTechId } from '@/simulation';
 import type { LampTypeDto } from '@/lib/lamp-types/schema';
 
 /** The engine's own name of each technology, so the catalogue and the studio say the same thing. */

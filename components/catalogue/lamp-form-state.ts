@@ -1,7 +1,6 @@
-import { LAMP_TECHS } from '@/simulation';
+import { LAMP_TECHS, type LampTech as LampTechId } from '@/simulation';
 import { cmToDisplay, displayToCm, type LengthUnit } from '@/shared/units';
 import type { LampTypeDto, LampTypeField, LampTypeInput } from '@/lib/lamp-types/schema';
-import type { LampTechId } from '@/models/lamp-type';
 
 /** The lamp-type form as typed text; converted to the API's numbers once, on submit. */
 export type LampFormState = {

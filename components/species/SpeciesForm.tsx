@@ -7,7 +7,7 @@ import { Notice } from '@/components/ui/Notice';
 import { card, input } from '@/components/ui/styles';
 import { targetWarning } from '@/lib/species/consistency';
 import { speciesInputSchema, type SpeciesSheetDto } from '@/lib/species/schema';
-import { UV_ZONES, type UvZone } from '@/simulation/assess/zones';
+import { UV_ZONES, type UvZone } from '@/simulation';
 import { initialState, toPayload, withUnit, type SpeciesFormState, type TempRangeField } from './form-state';
 import { zoneHabit } from './format';
 import { SourcesEditor } from './SourcesEditor';

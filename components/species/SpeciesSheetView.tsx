@@ -4,7 +4,7 @@ import { Notice } from '@/components/ui/Notice';
 import { card } from '@/components/ui/styles';
 import { targetWarning } from '@/lib/species/consistency';
 import { FIELD_LABELS, SHEET_FIELDS, type SheetField, type SpeciesSheetDto } from '@/lib/species/schema';
-import { UV_ZONES, type UvZone } from '@/simulation/assess/zones';
+import { UV_ZONES, type UvZone } from '@/simulation';
 import { formatRange, formatTempRange, formatTempValue, zoneHabit } from './format';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { useTempUnit } from '@/components/ui/units';

@@ -1,5 +1,4 @@
-import { pointIrradiance } from '@/simulation/sources/point';
-import { tubeBelowCentre } from '@/simulation/sources/tube';
+import { pointIrradiance, tubeBelowCentre } from '@/simulation';
 
 /**
  * Readings are taken straight below a lamp at whatever distance the meter fitted; to compare them over

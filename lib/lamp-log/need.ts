@@ -1,5 +1,5 @@
 import type { ReadingUnit } from '@/models/reading';
-import { UV_ZONES } from '@/simulation/assess/zones';
+import { UV_ZONES } from '@/simulation';
 
 /**
  * What the basking zone must reach for a species, in the unit of a lamp's readings.

@@ -1,5 +1,4 @@
-import { LAMP_TECHS } from '@/simulation';
-import { UV_ZONES, type UvZone } from '@/simulation/assess/zones';
+import { LAMP_TECHS, UV_ZONES, type UvZone } from '@/simulation';
 import type { Range } from './schema';
 
 /**

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { parseDesign } from '@/simulation/model';
+import { parseDesign } from '@/simulation';
 import { defaultDesignFor } from './default-design';
 
 describe('defaultDesignFor', () => {

@@ -1,4 +1,4 @@
-import { DESIGN_FORMAT, DESIGN_VERSION, type Design } from '@/simulation/model';
+import { DESIGN_FORMAT, DESIGN_VERSION, type Design } from '@/simulation';
 
 export type EnclosureSize = { widthCm: number; heightCm: number; depthCm: number };
 

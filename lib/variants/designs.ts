@@ -3,7 +3,7 @@ import { afterCursor, page } from '@/lib/api';
 import { likeContains } from '@/lib/api/like';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { getSequelize } from '@/lib/db';
-import type { Design as DesignFile } from '@/simulation/model';
+import type { Design as DesignFile } from '@/simulation';
 import { can } from '@/lib/permissions';
 import { Design, Enclosure, Variant } from '@/models';
 import { defaultDesignFor } from './default-design';

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { textSchema } from '@/lib/api/text';
-import { parseDesign, type Design } from '@/simulation/model';
+import { parseDesign, type Design } from '@/simulation';
 import { pageQuery } from '@/lib/api';
 import { MAX_SHARE_DAYS } from './shares';
 

@@ -4,7 +4,7 @@ import type { CurrentUser } from '@/lib/auth/session-user';
 import { config } from '@/lib/config';
 import { getSequelize } from '@/lib/db';
 import { Design, Enclosure, Organisation, ShareLink, Variant } from '@/models';
-import { physicsOf } from '@/simulation/model/backdrop';
+import { physicsOf } from '@/simulation';
 import { readStoredDesign } from './stored-design';
 import { hashShareToken, isWellFormedShareToken, newShareToken, shareLinkState, shareUrl } from './tokens';
 import { wholeSecond } from './time';

@@ -1,4 +1,4 @@
-import { parseDesign, type Design } from '@/simulation/model';
+import { parseDesign, type Design } from '@/simulation';
 import { ApiError } from '@/lib/api';
 
 /**

@@ -3,7 +3,7 @@ import { afterCursor, conflict, page } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { getSequelize } from '@/lib/db';
 import { can } from '@/lib/permissions';
-import type { Design as DesignFile } from '@/simulation/model';
+import type { Design as DesignFile } from '@/simulation';
 import { User, Variant } from '@/models';
 import type { DesignWithEnclosure } from './access';
 import { loadVariantWithOwner } from './access';

@@ -1,4 +1,4 @@
-import type { Design as DesignFile } from '@/simulation/model';
+import type { Design as DesignFile } from '@/simulation';
 import type { Design, ShareLink, User, Variant } from '@/models';
 import { readStoredDesign } from './stored-design';
 import { shareLinkState, type ShareLinkState } from './tokens';

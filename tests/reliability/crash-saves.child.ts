@@ -21,7 +21,7 @@ import { getSequelize } from '@/lib/db';
 import { migrateUp } from '@/lib/migrate';
 import { serializeDesign } from '@/lib/variants/stored-design';
 import { Enclosure, Membership, Organisation, User } from '@/models';
-import { parseDesign, type Design } from '@/simulation/model';
+import { parseDesign, type Design } from '@/simulation';
 import { EXAMPLE_DESIGN } from '@/simulation/testing/fixtures';
 import { ORIGIN, sessionCookie } from '../api/http';
 

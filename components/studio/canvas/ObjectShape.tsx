@@ -6,7 +6,7 @@ import { Circle, Group, Line, Rect, Shape, Text } from 'react-konva';
 import type { Context } from 'konva/lib/Context';
 import { designToStage, type Camera } from '../geometry/camera';
 import { BULB_RADIUS_CM, lampExtent, TUBE_THICKNESS_CM } from '../geometry/objects';
-import { LAMP_TECHS } from '@/simulation/model/techs';
+import { LAMP_TECHS } from '@/simulation';
 import { calibrationLabel } from '../state/calibration';
 import type { DesignObject, LampObject } from '../state/types';
 import { C } from './colors';

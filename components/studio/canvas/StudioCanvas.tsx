@@ -18,7 +18,7 @@ import type { StudioStore } from '../state/store';
 import type { Atom } from '../state/atom';
 import { useAtom, useStudio } from '../hooks/useStudio';
 import { sampleAll, type Reading } from '../fields/sample';
-import type { FieldGrid } from '@/simulation/fields/types';
+import type { FieldGrid } from '@/simulation';
 import { CanvasInteraction, type Modifiers } from './interaction';
 import { BackdropPhoto, EnclosureBack, EnclosureWalls, GridShape } from './Backdrop';
 import { BackdropFrame } from './BackdropFrame';

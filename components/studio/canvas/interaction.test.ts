@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { designSchema } from '@/simulation/model/schema';
+import { designSchema } from '@/simulation';
 import { CanvasInteraction, type Modifiers } from './interaction';
 import { StudioStore } from '../state/store';
 import { exampleDesign } from '../examples/exampleDesign';

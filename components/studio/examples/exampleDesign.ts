@@ -1,7 +1,7 @@
 import type { Design } from '../state/types';
 
 // The example set-up lives with the engine (one source for the studio, the engine's tests and the CLI).
-export { exampleDesign } from '@/simulation/model/example';
+export { exampleDesign } from '@/simulation';
 
 /** An empty enclosure with only a mesh lid, for "start from scratch". */
 export function emptyDesign(width = 120, height = 60, depth = 60): Design {

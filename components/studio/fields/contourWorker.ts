@@ -1,6 +1,6 @@
 /// <reference lib="webworker" />
 // Contour bands off the main thread, latest request wins (as in the engine's worker).
-import { contourBands, defaultThresholds } from '@/simulation/contours';
+import { contourBands, defaultThresholds } from '@/simulation';
 import { contourAnswer, type ContourRequest, type ContourResponse } from './contourProtocol';
 
 const scope = self as unknown as {

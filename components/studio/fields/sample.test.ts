@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { fieldRange, sampleAll, sampleField } from './sample';
-import type { FieldGrid } from '@/simulation/fields/types';
+import type { FieldGrid } from '@/simulation';
 
 /** 4 × 2 cells of 10 cm; uvb = x (cm) of the cell centre, so interpolation must return x itself. */
 function linearGrid(): FieldGrid {

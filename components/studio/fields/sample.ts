@@ -1,6 +1,6 @@
 // Reading a computed field grid at any design point (the probe under the pointer), by bilinear
 // interpolation between cell centres. Exact values for pinned probes come from the engine itself.
-import type { FieldGrid, FieldName } from '@/simulation/fields/types';
+import type { FieldGrid, FieldName } from '@/simulation';
 
 export interface Reading {
   uvb: number;

@@ -1,5 +1,5 @@
 // What the studio shows from the engine's latest answer.
-import type { FieldGrid } from '@/simulation/fields/types';
+import type { FieldGrid } from '@/simulation';
 import type { Reading } from './sample';
 import type { Assessment } from './engineTypes';
 

@@ -3,8 +3,7 @@
 // ageing preview or the species posts a request; the worker answers "superseded" for requests a
 // newer one replaced before they started, so only the latest is ever computed and shown.
 import { useEffect, useRef, useState } from 'react';
-import { physicsOf, samePhysics } from '@/simulation/model/backdrop';
-import type { SimRequest, SimResponse } from '@/simulation/worker/protocol';
+import { physicsOf, samePhysics, type SimRequest, type SimResponse } from '@/simulation';
 import type { Camera } from '../geometry/camera';
 import type { StudioStore } from '../state/store';
 import type { Design, StudioSpecies } from '../state/types';

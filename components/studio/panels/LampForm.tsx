@@ -1,6 +1,5 @@
 'use client';
-import { LAMP_TECHS } from '@/simulation/model/techs';
-import type { LampPresetId } from '@/simulation/model/presets';
+import { LAMP_TECHS, type LampPresetId } from '@/simulation';
 import {
   applyForm,
   applyPreset,

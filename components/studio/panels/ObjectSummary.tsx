@@ -10,7 +10,7 @@ import type { LengthUnit } from '@/shared/units';
 import type { BackdropImageState, EnclosurePhotos } from '../state/session';
 import type { Backdrop } from '../state/types';
 import type { HighlightShape } from '../canvas/Overlay';
-import { LAMP_TECHS } from '@/simulation/model/techs';
+import { LAMP_TECHS } from '@/simulation';
 
 export function describeObject(o: DesignObject, u: LengthUnit): string {
   const name = `${TYPE_NAMES[o.type]}${o.name ? ` “${o.name}”` : ''}`;

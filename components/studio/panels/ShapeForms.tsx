@@ -3,8 +3,8 @@ import {
   DEFAULT_FOLIAGE_UVB_TRANSMISSION,
   DEFAULT_GLASS_UVB_TRANSMISSION,
   DEFAULT_SCREEN_UVB_TRANSMISSION,
-} from '@/simulation/model/materials';
-import { DEFAULT_ROOM_TEMP_C } from '@/simulation/model/resolve';
+  DEFAULT_ROOM_TEMP_C,
+} from '@/simulation';
 import { segmentAngleDeg, segmentLength } from '../geometry/objects';
 import { formatLength, formatNumber } from '@/shared/units';
 import { useCommandContext, useStudio } from '../hooks/useStudio';

@@ -1,7 +1,7 @@
 // Validation of inspector edits against the engine's zod schema (the single source of truth),
 // with messages written for people and limits shown in the unit they are typing in.
 import type { z } from 'zod';
-import { backdropSchema, designObjectSchema, enclosureSchema } from '@/simulation/model/schema';
+import { backdropSchema, designObjectSchema, enclosureSchema } from '@/simulation';
 import {
   cmToDisplay,
   cToDisplay,

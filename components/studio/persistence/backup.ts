@@ -1,7 +1,7 @@
 // The local safety copy of unsaved work: written on every change, removed once the server has the
 // same design, offered back on the next load. Validated on read so a damaged copy is ignored, not fatal.
 import { z } from 'zod';
-import { parseDesign } from '@/simulation/model/parse';
+import { parseDesign } from '@/simulation';
 import type { Design } from '../state/types';
 import type { KeyValueStorage } from './types';
 

@@ -4,7 +4,7 @@
 //                                                  | 409 { error: { code: 'stale' }, current: { version, design } }
 // 503 and network failures mean "offline": the autosave keeps the local copy and retries.
 import { z } from 'zod';
-import { parseDesign } from '@/simulation/model/parse';
+import { parseDesign } from '@/simulation';
 import {
   OfflineError,
   SaveRejectedError,

@@ -1,6 +1,6 @@
 // Persistence in this browser only, for the scratch studio ("Try the studio" without an account).
 import { z } from 'zod';
-import { parseDesign } from '@/simulation/model/parse';
+import { parseDesign } from '@/simulation';
 import type { Design } from '../state/types';
 import type { KeyValueStorage, Loaded, SaveResult, StudioPersistence } from './types';
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { designSchema } from '@/simulation/model/schema';
+import { designSchema } from '@/simulation';
 import { CanvasInteraction, type Modifiers } from '../canvas/interaction';
 import { COMMANDS, command, isAvailable, isEnabled, runCommand } from '../commands/registry';
 import { exampleDesign } from '../examples/exampleDesign';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { designSchema } from '@/simulation/model/schema';
+import { designSchema } from '@/simulation';
 import {
   addObject,
   addProbe,

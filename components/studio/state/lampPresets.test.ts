@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { lampSchema } from '@/simulation/model/schema';
+import { lampSchema } from '@/simulation';
 import { applyForm, applyPreset, applyTech, matchingPreset } from './lampPresets';
 import type { LampObject } from './types';
 

@@ -1,6 +1,5 @@
 // Lamp presets and technologies from the engine's generic catalogue, applied to a lamp object.
-import { LAMP_PRESETS, type LampPresetId } from '@/simulation/model/presets';
-import { LAMP_TECHS, type LampTech } from '@/simulation/model/techs';
+import { LAMP_PRESETS, type LampPresetId, LAMP_TECHS, type LampTech } from '@/simulation';
 import { DEFAULT_SIZES } from './defaults';
 import type { LampObject } from './types';
 

@@ -13,11 +13,10 @@ export type {
   PerchObject,
   ProbePoint,
   ScreenObject,
-} from '@/simulation/model/schema';
-export type { SpeciesSheet } from '@/simulation/model/species';
+} from '@/simulation';
+export type { SpeciesSheet } from '@/simulation';
 
-import type { DesignObject } from '@/simulation/model/schema';
-import type { SpeciesSheet } from '@/simulation/model/species';
+import type { DesignObject, SpeciesSheet } from '@/simulation';
 
 export type ObjectType = DesignObject['type'];
 export type SegmentObject = Extract<DesignObject, { type: 'screen' | 'glass' | 'perch' }>;
