@@ -26,7 +26,7 @@ const DEMO_STAFF = { email: 'idris.penhallow@example.com', password: 'demo-staff
 // A design like the one in the product brief: what a save really carries.
 const DESIGN = {
   format: 'baskwell.design',
-  version: 1,
+  version: 2,
   enclosure: { width: 120, height: 60, depth: 60, roomTempC: 24 },
   objects: [
     { type: 'lamp', id: 'uv1', tech: 't5', form: 'tube', x: 40, y: 62, length: 55, uvbAt30: 60 },

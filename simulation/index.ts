@@ -12,7 +12,7 @@ export {
   uviPerUvbFromSpectrum,
   UVI_PER_ERYTHEMAL_W_M2,
 } from './sources/uv';
-export { tubeBelowCentre, tubePiece } from './sources/tube';
+export { tubeBelowCentre, tubePiece, tubePieceOffset } from './sources/tube';
 export { pointIrradiance } from './sources/point';
 export { contourBands, defaultThresholds, UVI_THRESHOLDS, type ContourBand } from './contours';
 export {

@@ -1,4 +1,4 @@
-import { LAMP_TECHS, resolveLamp, type Design, type LampObject } from '@/simulation';
+import { LAMP_TECHS, lampZ, resolveLamp, type Design, type LampObject } from '@/simulation';
 
 /** One line of a report's lamp list: what the lamp is and the values the model used for it. */
 export type LampRow = {
@@ -28,9 +28,10 @@ export function lampRows(design: Design): LampRow[] {
         technology: tech.label,
         form: lamp.form,
         position:
-          lamp.form === 'tube'
+          (lamp.form === 'tube'
             ? `centre x ${num(lamp.x)} cm, y ${num(lamp.y)} cm, ${num(r.length)} cm long`
-            : `x ${num(lamp.x)} cm, y ${num(lamp.y)} cm`,
+            : `x ${num(lamp.x)} cm, y ${num(lamp.y)} cm`) +
+          `, ${num(lampZ(lamp, design.enclosure))} cm from the front`,
         uvbAt30: r.uvbAt30 > 0 ? `${num(r.uvbAt30)} µW/cm²` : 'none',
         power: `${num(r.watts, 0)} W`,
         beam: `${num(r.beamDeg, 0)}°`,

@@ -7,7 +7,7 @@ import { bandsFor, scaleFor, simulate } from '@/shared/designs/simulate';
 const design = (uvbAt30: number): Design => {
   const r = parseDesign({
     format: 'baskwell.design',
-    version: 1,
+    version: 2,
     enclosure: { width: 60, height: 40, depth: 40, roomTempC: 24 },
     objects: [
       { type: 'lamp', id: 'uv', tech: 't5', form: 'tube', x: 30, y: 42, length: 30, uvbAt30 },

@@ -5,7 +5,7 @@ import { keyFigures, surfacePoints, UV_FREE_UVI } from './figures';
 const design = (objects: unknown[]): Design => {
   const r = parseDesign({
     format: 'baskwell.design',
-    version: 1,
+    version: 2,
     enclosure: { width: 120, height: 60, depth: 60, roomTempC: 24 },
     objects,
   });

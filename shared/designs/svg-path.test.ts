@@ -59,7 +59,7 @@ describe('ringPath', () => {
   it('keeps only the engine’s own points of real contours, far fewer of them', () => {
     const r = parseDesign({
       format: 'baskwell.design',
-      version: 1,
+      version: 2,
       enclosure: { width: 120, height: 60, depth: 60, roomTempC: 24 },
       objects: [
         { type: 'lamp', id: 'uv', tech: 't5', form: 'tube', x: 40, y: 62, length: 55, uvbAt30: 60 },

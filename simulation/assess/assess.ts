@@ -15,6 +15,7 @@ import { reachableSurfaces, type SurfaceSample } from './surfaces';
 import { baskingStatus, maxReachableUvi, uvFindings } from './uvFindings';
 import { heatFindings } from './heatFindings';
 import { safetyFindings } from './safetyFindings';
+import { depthFindings } from './depthFindings';
 
 const RANK: Record<FindingStatus, number> = { pass: 0, attention: 1, fail: 2 };
 
@@ -70,6 +71,7 @@ function assessSampled(design: Design, s: Sampled, species: SpeciesSheet, opts: 
     ...uvFindings(s.samples, uvi, uvb, species),
     ...heatFindings(s.samples, tempC, species, s.lamps.scene.roomC),
     ...safetyFindings(design, s.samples),
+    ...depthFindings(design),
   ];
   return { findings, overall: worst(findings.map((f) => f.status)) };
 }

@@ -12,6 +12,12 @@
  * A tube is then integrated in closed form over its visible pieces (sources/tube.ts), each piece weighted
  * by the product of the transmissions of the barriers hiding it; a bulb is visible or not (times the
  * transmissions of the barriers in front of it) and inside its beam or not.
+ *
+ * Depth: a lamp may hang dz in front of or behind the section plane. Barriers span the whole depth, so a
+ * ray is blocked exactly when its projection onto the section is, and the shadow intervals above hold
+ * unchanged. Only the distances change: a bulb is r² = h² + dx² + dz² away, and a tube (parallel to the
+ * plane) is a line at perpendicular distance d = √(h² + dz²), seen by the upward-facing receiver at the
+ * cosine h/d (sources/tube.ts, tubePieceOffset).
  */
 import type { Occluder } from '../geometry/occluders';
 import { clipToStrip } from '../geometry/clip';
@@ -24,6 +30,14 @@ const MAX_CLIPPED = 12;
 /** Per-row precomputation for one lamp; reused across rows (no allocation once sized). */
 export class RowData {
   h = 0;
+  /** h² + dz²: the squared distance to the lamp line (a bulb: to the lamp, without dx). */
+  d2 = 0;
+  /** √d2, the perpendicular distance from the receiver to a tube's axis. */
+  d = 0;
+  /** A tube's closed-form factor: cosine h/d over 2d (1/(2h) in the plane). */
+  scale = 0;
+  /** A bulb's beam reaches |dx| ≤ half on this row; negative when it misses the section plane here. */
+  half = 0;
   count = 0;
   occ: Int32Array;
   qa: Float64Array;
@@ -83,6 +97,13 @@ export function prepareRow(
   row.h = h;
   row.count = 0;
   if (!(h > 0)) return false;
+  // In the plane (dz = 0) these are exactly the two-dimensional values, so such designs keep their bits.
+  const dz2 = lamp.dz2;
+  row.d2 = h * h + dz2;
+  row.d = dz2 === 0 ? h : Math.sqrt(row.d2);
+  row.scale = dz2 === 0 ? 1 / (2 * h) : h / (2 * row.d2);
+  const reach = h * lamp.beamTan;
+  row.half = dz2 === 0 ? reach : reach >= Math.abs(lamp.dz) ? Math.sqrt(reach * reach - dz2) : -1;
   const ylo = qy + EPS_Y;
   const yhi = lamp.y;
   const s1 = lamp.s1;
@@ -146,7 +167,7 @@ export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): 
   const tube = lamp.tube;
   let inBeam = true;
   if (!tube) {
-    inBeam = Math.abs(qx - lamp.x) <= h * lamp.beamTan;
+    inBeam = Math.abs(qx - lamp.x) <= row.half;
     // Outside a bulb's beam only the spread part of its heat arrives.
     if (!inBeam && lamp.irOut === 0) return;
   }
@@ -193,15 +214,17 @@ export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): 
   }
   if (!tube) {
     const dx = qx - lamp.x;
-    const r2 = h * h + dx * dx;
+    const r2 = row.d2 + dx * dx;
     const f = h / (r2 * Math.sqrt(r2));
     s.uv = inBeam ? lamp.uvI * f * gu : 0;
     s.ir = (inBeam ? lamp.irI : lamp.irOut) * f * gi;
     return;
   }
-  const scale = 1 / (2 * h);
+  // The line's own distance d replaces h in the antiderivative; the cosine h/d is in the scale.
+  const d = row.d;
+  const scale = row.scale;
   if (n === 0) {
-    const f = (G(s2 - qx, h) - G(s1 - qx, h)) * scale;
+    const f = (G(s2 - qx, d) - G(s1 - qx, d)) * scale;
     s.uv = lamp.uvI * f * gu;
     s.ir = lamp.irI * f * gi;
     return;
@@ -226,12 +249,12 @@ export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): 
   }
   let sumU = 0;
   let sumI = 0;
-  let gPrev = G(bp[0]! - qx, h);
+  let gPrev = G(bp[0]! - qx, d);
   for (let a = 1; a < m; a++) {
     const x0 = bp[a - 1]!;
     const x1 = bp[a]!;
     if (!(x1 > x0)) continue;
-    const gNext = G(x1 - qx, h);
+    const gNext = G(x1 - qx, d);
     const mid = 0.5 * (x0 + x1);
     let pu = 1;
     let pi = 1;

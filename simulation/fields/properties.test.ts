@@ -49,6 +49,9 @@ describe('field invariants (property tests)', () => {
           form: 'bulb',
           x: lx,
           y: ly,
+          // In the section plane, so the probe moves straight away from it (off the plane, a narrow beam
+          // can reach farther points of the plane and miss nearer ones).
+          z: design.enclosure.sectionZ ?? design.enclosure.depth / 2,
           uvbAt30: 50,
           beamDeg,
         };

@@ -3,7 +3,7 @@
  * intensities worked out once, barriers as convex shapes with per-lamp transmissions.
  */
 import type { Design, LampObject } from '../model/schema';
-import { resolveLamp, roomTempC, type ResolvedLamp } from '../model/resolve';
+import { lampZ, resolveLamp, roomTempC, sectionZ, type ResolvedLamp } from '../model/resolve';
 import { compileOccluders, type Occluder } from '../geometry/occluders';
 import { beamTan, coneSolidAngle, intensityFromE30 } from '../sources/point';
 import { tubeIntensityFromE30, tubeIntensityFromPower } from '../sources/tube';
@@ -17,6 +17,12 @@ export interface LampGeom {
   tube: boolean;
   x: number;
   y: number;
+  /**
+   * Distance of the lamp in front of (−) or behind (+) the section plane, cm, and its square. Barriers span
+   * the whole depth, so shadows are found in the section's projection; only the distances use dz.
+   */
+  dz: number;
+  dz2: number;
   /** Extent along x (a bulb: s1 = s2 = x). */
   s1: number;
   s2: number;
@@ -37,13 +43,16 @@ export interface Scene {
   width: number;
   height: number;
   depth: number;
+  /** The plane the fields are computed in, cm from the front. */
+  sectionZ: number;
   roomC: number;
   airRiseK: number;
   lamps: LampGeom[];
   occluders: Occluder[];
 }
 
-export function compileLamp(obj: LampObject, occluders: Occluder[]): LampGeom {
+/** @param dz the lamp's distance from the section plane (lamp z − section z), cm. */
+export function compileLamp(obj: LampObject, occluders: Occluder[], dz = 0): LampGeom {
   const lamp = resolveLamp(obj);
   const tube = lamp.form === 'tube';
   const gain = lamp.reflectorGain;
@@ -75,6 +84,8 @@ export function compileLamp(obj: LampObject, occluders: Occluder[]): LampGeom {
     tube,
     x: lamp.x,
     y: lamp.y,
+    dz,
+    dz2: dz * dz,
     s1: tube ? lamp.x - lamp.length / 2 : lamp.x,
     s2: tube ? lamp.x + lamp.length / 2 : lamp.x,
     uvI,
@@ -88,13 +99,17 @@ export function compileLamp(obj: LampObject, occluders: Occluder[]): LampGeom {
 
 export function compileScene(design: Design): Scene {
   const occluders = compileOccluders(design);
-  const lamps: LampGeom[] = [];
-  for (const o of design.objects) if (o.type === 'lamp') lamps.push(compileLamp(o, occluders));
   const e = design.enclosure;
+  const section = sectionZ(e);
+  const lamps: LampGeom[] = [];
+  for (const o of design.objects) {
+    if (o.type === 'lamp') lamps.push(compileLamp(o, occluders, lampZ(o, e) - section));
+  }
   return {
     width: e.width,
     height: e.height,
     depth: e.depth,
+    sectionZ: section,
     roomC: roomTempC(design),
     airRiseK: topAirRiseK(
       lamps.map((l) => l.lamp),

@@ -37,7 +37,7 @@ describe('FieldSolver cache', () => {
     const solver = new FieldSolver();
     const d: Design = {
       format: 'baskwell.design',
-      version: 1,
+      version: 2,
       enclosure: { width: 120, height: 60, depth: 60 },
       objects: [
         { type: 'lamp', id: 't', tech: 't5', form: 'tube', x: 40, y: 62, length: 55 },
@@ -60,7 +60,7 @@ describe('FieldSolver grid sizes', () => {
     const solver = new FieldSolver();
     const d: Design = {
       format: 'baskwell.design',
-      version: 1,
+      version: 2,
       enclosure: { width: 60, height: 40, depth: 40 },
       objects: [
         { type: 'lamp', id: 't', tech: 't5', form: 'tube', x: 30, y: 42, length: 40 },

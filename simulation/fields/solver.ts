@@ -27,7 +27,8 @@ function occluderKey(o: Occluder): string {
 
 function lampKey(l: LampGeom, nx: number, ny: number, cell: number): string {
   const { ageMonths: _a, decay: _d, ...rest } = l.lamp;
-  return JSON.stringify([nx, ny, cell, rest]);
+  // dz too: moving the lamp or the section plane in depth changes its fields.
+  return JSON.stringify([nx, ny, cell, l.dz, rest]);
 }
 
 export interface SolverStats {

@@ -42,8 +42,9 @@ export function fillLamp(
     let i0 = 0;
     let i1 = nx - 1;
     if (!lamp.tube && Number.isFinite(lamp.beamTan) && lamp.irOut === 0) {
-      // Only cells inside the bulb's beam can be lit.
-      const half = row.h * lamp.beamTan;
+      // Only cells inside the bulb's beam can be lit (none on a row the beam passes in front of or behind).
+      const half = row.half;
+      if (half < 0) continue;
       i0 = Math.max(0, Math.floor((lamp.x - half) / cell - 0.5));
       i1 = Math.min(nx - 1, Math.ceil((lamp.x + half) / cell - 0.5));
     }

@@ -8,7 +8,7 @@ import type { Design } from './schema';
  */
 export const EXAMPLE_DESIGN: Design = {
   format: 'baskwell.design',
-  version: 1,
+  version: 2,
   enclosure: { width: 120, height: 60, depth: 60, roomTempC: 24 },
   objects: [
     {

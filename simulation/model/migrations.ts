@@ -1,9 +1,17 @@
 /**
  * Migrations of older design files. Each entry upgrades a document from version `n` to `n + 1`;
- * parseDesign runs them in order before validating against the current schema. Version 1 is the
- * first published version, so the registry is empty today; a later version adds its step here,
- * e.g. `1: (d) => ({ ...d, version: 2, ... })`.
+ * parseDesign runs them in order before validating against the current schema.
  */
 export type Migration = (doc: Record<string, unknown>) => Record<string, unknown>;
 
-export const DESIGN_MIGRATIONS: Readonly<Record<number, Migration>> = {};
+/**
+ * Version 1 -> 2 (depth). Version 1 had no depth positions: every lamp and the side view sat at half the
+ * enclosure's depth. Version 2's `enclosure.sectionZ` and lamp `z` default to exactly that when absent,
+ * so the step writes no new field: an upgraded design computes the same fields as before, keeps every
+ * field the user wrote, and its lamps follow the middle if the depth is changed later.
+ */
+function depthStep(doc: Record<string, unknown>): Record<string, unknown> {
+  return { ...doc, version: 2 };
+}
+
+export const DESIGN_MIGRATIONS: Readonly<Record<number, Migration>> = { 1: depthStep };

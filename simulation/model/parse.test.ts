@@ -1,7 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { parseDesign, migrateDesign } from './parse';
-import { designSchema } from './schema';
+import { designSchema, type Design } from './schema';
+import { lampZ, sectionZ } from './resolve';
+import { DESIGN_MIGRATIONS } from './migrations';
 import { EXAMPLE_DESIGN } from '../testing/fixtures';
 import { arbDesign } from '../testing/arbitraries';
 
@@ -145,6 +147,7 @@ describe('parseDesign', () => {
       enclosure: { width: 50, height: 40, depth: 30, ambientC: 22 },
     };
     const migrations = {
+      ...DESIGN_MIGRATIONS,
       0: (doc: Record<string, unknown>) => {
         const { ambientC, ...enc } = doc.enclosure as Record<string, unknown>;
         return { ...doc, version: 1, enclosure: { ...enc, roomTempC: ambientC } };
@@ -165,5 +168,81 @@ describe('parseDesign', () => {
       }),
       { numRuns: 200 },
     );
+  });
+});
+
+describe('version 2: depth', () => {
+  const v1 = (): Record<string, unknown> => ({ ...clone(EXAMPLE_DESIGN), version: 1 });
+
+  it('loads a version-1 file as version 2, keeping every field and adding none', () => {
+    const input = v1();
+    const r = parseDesign(input);
+    expect(r).toEqual({ ok: true, design: { ...clone(EXAMPLE_DESIGN), version: 2 } });
+    expect(input.version).toBe(1); // the caller's object is not changed
+    if (!r.ok) return;
+    expect(r.design.enclosure).not.toHaveProperty('sectionZ');
+    expect(r.design.objects.some((o) => 'z' in o)).toBe(false);
+  });
+
+  it('defaults the section plane and every lamp to half the depth', () => {
+    const r = parseDesign(v1());
+    if (!r.ok) throw new Error(r.error.message);
+    expect(sectionZ(r.design.enclosure)).toBe(30);
+    for (const o of r.design.objects) if (o.type === 'lamp') expect(lampZ(o, r.design.enclosure)).toBe(30);
+    const set = { ...r.design.enclosure, sectionZ: 12 };
+    expect(sectionZ(set)).toBe(12);
+    expect(lampZ({ z: 55 }, set)).toBe(55);
+    expect(lampZ({}, { ...set, depth: 45 })).toBe(22.5);
+  });
+
+  it('round-trips the section plane and a lamp’s depth through JSON', () => {
+    const d = clone(EXAMPLE_DESIGN);
+    d.enclosure.sectionZ = 15;
+    (d.objects[0] as { z?: number }).z = 50;
+    (d.objects[1] as { z?: number }).z = 0;
+    const r = parseDesign(clone(d));
+    expect(r).toEqual({ ok: true, design: d });
+    const again = r.ok ? parseDesign(JSON.parse(JSON.stringify(r.design))) : r;
+    expect(again).toEqual(r);
+    // A version-1 file's upgrade round-trips as well.
+    const up = parseDesign(v1());
+    expect(up.ok && parseDesign(JSON.parse(JSON.stringify(up.design)))).toEqual(up);
+  });
+
+  it('names the field of a bad depth', () => {
+    const cases: [string, (d: Design) => void, RegExp][] = [
+      ['enclosure.sectionZ', (d) => (d.enclosure.sectionZ = -1), />=0/],
+      [
+        'enclosure.sectionZ',
+        (d) => (d.enclosure.sectionZ = 61),
+        /within the enclosure's depth \(0 to 60 cm\)/,
+      ],
+      ['objects[1].z', (d) => ((d.objects[1] as { z?: number }).z = 60.5), /within the enclosure's depth/],
+      ['objects[0].z', (d) => ((d.objects[0] as { z?: unknown }).z = 'back'), /expected number/],
+      ['objects[2].z', (d) => ((d.objects[2] as { z?: number }).z = 10), /unknown field/],
+    ];
+    for (const [path, mutate, message] of cases) {
+      const d = clone(EXAMPLE_DESIGN);
+      mutate(d);
+      const r = parseDesign(d);
+      expect(r.ok ? '' : r.error.path).toBe(path);
+      expect(r.ok ? '' : r.error.message).toMatch(message);
+    }
+    // A lamp at the very back, and the plane at the very front, are fine.
+    const edge = clone(EXAMPLE_DESIGN);
+    edge.enclosure.sectionZ = 0;
+    (edge.objects[0] as { z?: number }).z = 60;
+    expect(parseDesign(edge).ok).toBe(true);
+  });
+
+  it('refuses a version it does not know with the version field named', () => {
+    expect(parseDesign({ ...v1(), version: 3 })).toEqual({
+      ok: false,
+      error: { path: 'version', message: 'version 3 is newer than this app reads (2)' },
+    });
+    expect(parseDesign({ ...v1(), version: 0 })).toEqual({
+      ok: false,
+      error: { path: 'version', message: 'cannot upgrade from version 0' },
+    });
   });
 });

@@ -13,7 +13,7 @@ function usefulReach(
   const top = 400;
   const design: Design = {
     format: 'baskwell.design',
-    version: 1,
+    version: 2,
     enclosure: { width: 400, height: top, depth: 60 },
     objects: [{ type: 'lamp', id: 'l', x: 200, y: top, ...lamp, ...extra } as LampObject],
   };

@@ -1,7 +1,7 @@
 /**
  * Effective values of a design's optional fields: the object's own value, else the documented default.
  */
-import type { Design, FoliageObject, GlassObject, LampObject, ScreenObject } from './schema';
+import type { Design, Enclosure, FoliageObject, GlassObject, LampObject, ScreenObject } from './schema';
 import { decayFactor, LAMP_TECHS, type DecayCurve } from './techs';
 import {
   DEFAULT_FOLIAGE_UVB_TRANSMISSION,
@@ -56,6 +56,16 @@ export function resolveLamp(lamp: LampObject): ResolvedLamp {
 /** UVB output factor of a lamp after its own age plus `addMonths`. Heat output is taken not to age. */
 export function lampUvbFactor(lamp: ResolvedLamp, addMonths = 0): number {
   return decayFactor(lamp.decay, lamp.ageMonths + addMonths);
+}
+
+/** The plane the side view shows, cm from the front (default: half the depth). */
+export function sectionZ(enclosure: Enclosure): number {
+  return enclosure.sectionZ ?? enclosure.depth / 2;
+}
+
+/** How far from the front a lamp hangs, cm (default: half the depth). */
+export function lampZ(lamp: Pick<LampObject, 'z'>, enclosure: Enclosure): number {
+  return lamp.z ?? enclosure.depth / 2;
 }
 
 export function roomTempC(design: Design): number {

@@ -1,5 +1,5 @@
 /**
- * The design file, version 1 (BRIEF §3), as a zod schema: the single source of truth for the types.
+ * The design file, version 2, as a zod schema: the single source of truth for the types.
  * Objects are strict: an unknown field is an error naming its path. Optional fields stay optional in
  * the stored document; the engine applies the documented defaults (see resolve.ts), so a saved file
  * keeps exactly what the user wrote.
@@ -8,10 +8,16 @@ import { z } from 'zod';
 import { LAMP_TECH_IDS } from './techs';
 
 export const DESIGN_FORMAT = 'baskwell.design';
-export const DESIGN_VERSION = 1;
+/** Version 2 added depth: `enclosure.sectionZ` and a lamp's `z` (see migrations.ts for version 1). */
+export const DESIGN_VERSION = 2;
 
 /** Coordinates may lie outside the enclosure (a lamp on the lid) but within a sane range, cm. */
 const coord = z.number().finite().min(-5000).max(5000);
+/**
+ * A distance from the front glass towards the back, cm. Within the enclosure's depth (checked against the
+ * depth by the design's own refinement, since a field cannot see its enclosure).
+ */
+const depthCoord = z.number().finite().min(0).max(1000);
 const size = (max: number) => z.number().finite().gt(0).max(max);
 const transmission = z.number().min(0).max(1);
 const id = z.string().trim().min(1, 'must not be empty').max(100);
@@ -51,6 +57,11 @@ export const lampSchema = z
     /** Bulb: the emitting point. Tube: the centre of the tube (it runs along x). */
     x: coord,
     y: coord,
+    /**
+     * How far from the front the lamp hangs, cm (a tube runs parallel to the front). Default: half the
+     * enclosure's depth, where version 1 put every lamp.
+     */
+    z: depthCoord.optional(),
     /** Tube length, cm (required for tubes). */
     length: size(1000).optional(),
     uvbAt30: z.number().finite().min(0).max(100000).optional(),
@@ -123,6 +134,11 @@ export const enclosureSchema = z.strictObject({
   width: size(1000),
   height: size(1000),
   depth: size(1000),
+  /**
+   * Where the side view cuts the enclosure: cm from the front. The fields are computed in this plane.
+   * Default: half the depth.
+   */
+  sectionZ: depthCoord.optional(),
   /** Default 24 °C. */
   roomTempC: z.number().finite().min(-20).max(50).optional(),
 });
@@ -161,6 +177,24 @@ function checkUniqueIds(items: { id: string }[], key: string, ctx: z.RefinementC
   });
 }
 
+const withinDepth = (depth: number) => `must be within the enclosure's depth (0 to ${depth} cm)`;
+
+/** The section plane and every lamp lie inside the enclosure's depth. */
+function checkDepths(
+  d: { enclosure: { depth: number; sectionZ?: number }; objects: { type: string; z?: number }[] },
+  ctx: z.RefinementCtx,
+) {
+  const { depth, sectionZ } = d.enclosure;
+  if (sectionZ !== undefined && sectionZ > depth) {
+    ctx.addIssue({ code: 'custom', path: ['enclosure', 'sectionZ'], message: withinDepth(depth) });
+  }
+  d.objects.forEach((o, i) => {
+    if (o.type === 'lamp' && o.z !== undefined && o.z > depth) {
+      ctx.addIssue({ code: 'custom', path: ['objects', i, 'z'], message: withinDepth(depth) });
+    }
+  });
+}
+
 export const designSchema = z
   .strictObject({
     format: z.literal(DESIGN_FORMAT),
@@ -174,6 +208,7 @@ export const designSchema = z
   .superRefine((d, ctx) => {
     checkUniqueIds(d.objects, 'objects', ctx);
     if (d.probes) checkUniqueIds(d.probes, 'probes', ctx);
+    checkDepths(d, ctx);
   });
 
 export type Design = z.infer<typeof designSchema>;

@@ -1,13 +1,16 @@
 /**
  * Point source (a bulb) seen by a small upward-facing horizontal receiver.
- * E = I·cosθ / r² with cosθ = h/r: E = I·h / (h² + x²)^{3/2}
+ * E = I·cosθ / r² with cosθ = h/r: E = I·h / (h² + x² + z²)^{3/2}
  * (inverse-square and cosine laws; any radiometry text, e.g. IES Lighting Handbook).
  */
 
-/** Irradiance from intensity `intensity` at vertical distance h (> 0, receiver below) and lateral offset dx. */
-export function pointIrradiance(intensity: number, h: number, dx: number): number {
+/**
+ * Irradiance from intensity `intensity` at vertical distance h (> 0, receiver below), offset dx across the
+ * section and dz in depth (in front of or behind the section plane): r² = h² + dx² + dz², cosθ = h/r.
+ */
+export function pointIrradiance(intensity: number, h: number, dx: number, dz = 0): number {
   if (!(h > 0)) return 0;
-  const r2 = h * h + dx * dx;
+  const r2 = h * h + dx * dx + dz * dz;
   return (intensity * h) / (r2 * Math.sqrt(r2));
 }
 

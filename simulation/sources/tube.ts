@@ -25,6 +25,25 @@ export function tubePiece(u1: number, u2: number, h: number): number {
   return (tubeG(u2, h) - tubeG(u1, h)) / (2 * h);
 }
 
+/**
+ * The same piece seen from a receiver that is not in the vertical plane of the tube: the tube runs parallel
+ * to the section, a height h above the receiver and dz in front of or behind it. Each element is then
+ * r² = d² + u² away with d = √(h² + dz²) the perpendicular distance to the axis; the element's cosine is
+ * d/r and the upward-facing receiver's h/r, so dE = i·h·d/(d² + u²)² du and
+ *
+ *   E = (h/d) · (i / 2d) · [G(u₂; d) − G(u₁; d)]
+ *
+ * the line-source form at the perpendicular distance times the cosine h/d between the receiver's normal
+ * and the perpendicular to the tube (the aspect-factor form, IES Lighting Handbook). dz = 0 is tubePiece.
+ */
+export function tubePieceOffset(u1: number, u2: number, h: number, dz: number): number {
+  if (!(h > 0) || !(u2 > u1)) return 0;
+  if (dz === 0) return tubePiece(u1, u2, h);
+  const d2 = h * h + dz * dz;
+  const d = Math.sqrt(d2);
+  return (h * (tubeG(u2, d) - tubeG(u1, d))) / (2 * d2);
+}
+
 /** Irradiance factor (per unit i) straight below the centre of a tube of length L at distance d. */
 export function tubeBelowCentre(length: number, d: number): number {
   const a = Math.atan(length / (2 * d));

@@ -12,9 +12,11 @@ export interface ArbOptions {
   /** Which object kinds to draw from. */
   kinds?: DesignObject['type'][];
   maxObjects?: number;
+  /** Enclosure depth, cm (default 45); lamps and the section plane are drawn within it. */
+  depth?: number;
 }
 
-export function arbLamp(width = 120, height = 60): fc.Arbitrary<Omit<LampObject, 'id'>> {
+export function arbLamp(width = 120, height = 60, depth = 45): fc.Arbitrary<Omit<LampObject, 'id'>> {
   return fc
     .record(
       {
@@ -23,6 +25,7 @@ export function arbLamp(width = 120, height = 60): fc.Arbitrary<Omit<LampObject,
         form: fc.constantFrom('tube' as const, 'bulb' as const),
         x: num(0, width),
         y: num(height * 0.3, height + 10),
+        z: num(0, depth),
         length: num(5, 100),
         uvbAt30: num(0, 300),
         reflectorGain: num(1, 3),
@@ -41,7 +44,7 @@ export function arbLamp(width = 120, height = 60): fc.Arbitrary<Omit<LampObject,
     .map((l) => l as Omit<LampObject, 'id'>);
 }
 
-export function arbObject(width = 120, height = 60): fc.Arbitrary<Omit<DesignObject, 'id'>> {
+export function arbObject(width = 120, height = 60, depth = 45): fc.Arbitrary<Omit<DesignObject, 'id'>> {
   const seg = {
     x1: num(-5, width + 5),
     y1: num(-5, height + 5),
@@ -50,7 +53,7 @@ export function arbObject(width = 120, height = 60): fc.Arbitrary<Omit<DesignObj
   };
   const box = { x: num(0, width), y: num(0, height), width: num(1, 40), height: num(1, 30) };
   return fc.oneof(
-    arbLamp(width, height),
+    arbLamp(width, height, depth),
     fc.record(
       { type: fc.constant('screen' as const), ...seg, uvbTransmission: num(0, 1) },
       { requiredKeys: ['type', 'x1', 'y1', 'x2', 'y2'] },
@@ -76,24 +79,32 @@ export function withIds(objects: Omit<DesignObject, 'id'>[]): DesignObject[] {
 export function arbDesign(opts: ArbOptions = {}): fc.Arbitrary<Design> {
   const width = opts.width ?? 120;
   const height = opts.height ?? 60;
+  const depth = opts.depth ?? 45;
   const kinds = opts.kinds;
   const obj = kinds
-    ? arbObject(width, height).filter((o) => kinds.includes(o.type))
-    : arbObject(width, height);
+    ? arbObject(width, height, depth).filter((o) => kinds.includes(o.type))
+    : arbObject(width, height, depth);
   return fc
     .record(
       {
         objects: fc.array(obj, { maxLength: opts.maxObjects ?? 8 }),
         roomTempC: num(10, 35),
+        sectionZ: num(0, depth),
         notes: fc.string({ maxLength: 40 }),
       },
       { requiredKeys: ['objects'] },
     )
-    .map(({ objects, roomTempC, notes }) => {
+    .map(({ objects, roomTempC, sectionZ, notes }) => {
       const d: Design = {
         format: 'baskwell.design',
-        version: 1,
-        enclosure: { width, height, depth: 45, ...(roomTempC === undefined ? {} : { roomTempC }) },
+        version: 2,
+        enclosure: {
+          width,
+          height,
+          depth,
+          ...(sectionZ === undefined ? {} : { sectionZ }),
+          ...(roomTempC === undefined ? {} : { roomTempC }),
+        },
         objects: withIds(objects),
       };
       if (notes !== undefined) d.notes = notes;

@@ -8,7 +8,7 @@ export { EXAMPLE_DESIGN } from '../model/example';
 export function emptyDesign(width = 120, height = 60, depth = 60, roomTempC = 24): Design {
   return {
     format: 'baskwell.design',
-    version: 1,
+    version: 2,
     enclosure: { width, height, depth, roomTempC },
     objects: [],
   };
@@ -78,7 +78,7 @@ export function benchDesign(lampScale = 1, occluderScale = 1): Design {
   }
   return {
     format: 'baskwell.design',
-    version: 1,
+    version: 2,
     enclosure: { width: 120, height: 60, depth: 60, roomTempC: 24 },
     objects,
   };

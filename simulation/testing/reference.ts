@@ -83,11 +83,14 @@ export function referenceLampAt(
 ): [number, number] {
   const h = lamp.y - qy;
   if (!(h > 0)) return [0, 0];
+  // The lamp hangs dz in front of or behind the receiver's plane; barriers span the whole depth, so a ray
+  // is blocked when its projection onto the section is.
+  const dz = lamp.dz;
   if (!lamp.tube) {
     const dx = qx - lamp.x;
-    const inBeam = Math.abs(dx) <= h * lamp.beamTan;
+    const inBeam = Math.hypot(dx, dz) <= h * lamp.beamTan;
     if (!inBeam && lamp.irOut === 0) return [0, 0];
-    const r2 = h * h + dx * dx;
+    const r2 = h * h + dx * dx + dz * dz;
     const f = h / (r2 * Math.sqrt(r2));
     const [tu, ti] = transmissions(lamp, occ, lamp.x, lamp.y, qx, qy);
     return inBeam ? [lamp.uvI * f * tu, lamp.irI * f * ti] : [0, lamp.irOut * f * ti];
@@ -103,8 +106,9 @@ export function referenceLampAt(
     const uc = s - (lamp.s1 + lamp.s2) / 2;
     norm += (900 / ((900 + uc * uc) * (900 + uc * uc))) * ds;
     const u = s - qx;
-    const r2 = h * h + u * u;
-    const f = ((h * h) / (r2 * r2)) * ds;
+    const r2 = h * h + dz * dz + u * u;
+    // Element cosine √(h² + dz²)/r (a diffuse line source), receiver cosine h/r, inverse square.
+    const f = ((h * Math.sqrt(h * h + dz * dz)) / (r2 * r2)) * ds;
     const [tu, ti] = transmissions(lamp, occ, s, lamp.y, qx, qy);
     sumU += f * tu;
     sumI += f * ti;

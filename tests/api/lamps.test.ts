@@ -270,7 +270,7 @@ describe('calibration', () => {
     });
     const file = {
       format: 'baskwell.design',
-      version: 1,
+      version: 2,
       enclosure: { width: 120, height: 60, depth: 60 },
       objects: [
         {

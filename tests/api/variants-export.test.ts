@@ -17,7 +17,7 @@ withTestDatabase();
 
 const design = {
   format: 'baskwell.design',
-  version: 1,
+  version: 2,
   enclosure: { width: 120, height: 60, depth: 60 },
   objects: [
     {

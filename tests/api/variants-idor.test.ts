@@ -88,7 +88,7 @@ type Attempt = {
 
 const design = {
   format: 'baskwell.design',
-  version: 1,
+  version: 2,
   enclosure: { width: 120, height: 60, depth: 60 },
   objects: [],
 };

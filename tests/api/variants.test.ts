@@ -263,7 +263,7 @@ describe('variants', () => {
       });
     const file = {
       format: 'baskwell.design',
-      version: 1,
+      version: 2,
       enclosure: { width: 90, height: 45, depth: 45 },
       objects: [
         { type: 'screen', id: 'lid', x1: 0, y1: 45, x2: 90, y2: 45 },
@@ -281,7 +281,7 @@ describe('variants', () => {
     const newer = await upload({ ...file, version: 99 });
     expect(newer.status).toBe(400);
     expect(newer.body.error.field).toBe('design.version');
-    expect(newer.body.error.message).toBe('version: version 99 is newer than this app reads (1)');
+    expect(newer.body.error.message).toBe('version: version 99 is newer than this app reads (2)');
     const older = await upload({ ...file, version: 0 });
     expect(older.body.error.message).toBe('version: cannot upgrade from version 0');
     expect(await Variant.count({ where: { designId } })).toBe(1);

@@ -20,7 +20,7 @@ const eventually = { timeout: 60_000, interval: 200 };
 function lampsFile(uvbAt30: unknown = 35) {
   return {
     format: 'baskwell.design',
-    version: 1,
+    version: 2,
     enclosure: { width: 90, height: 45, depth: 45, roomTempC: 22 },
     objects: [
       { type: 'screen', id: 'lid', x1: 0, y1: 45, x2: 90, y2: 45, uvbTransmission: 0.6 },

@@ -1,3 +1,4 @@
+import { DESIGN_VERSION } from '@/simulation';
 import type { Design } from '../state/types';
 
 // The example set-up lives with the engine (one source for the studio, the engine's tests and the CLI).
@@ -7,7 +8,7 @@ export { exampleDesign } from '@/simulation';
 export function emptyDesign(width = 120, height = 60, depth = 60): Design {
   return {
     format: 'baskwell.design',
-    version: 1,
+    version: DESIGN_VERSION,
     enclosure: { width, height, depth, roomTempC: 24 },
     objects: [{ type: 'screen', id: 'lid', x1: 0, y1: height, x2: width, y2: height }],
   };
