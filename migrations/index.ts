@@ -7,6 +7,7 @@ import * as m0005 from './0005-lamp-log';
 import * as m0006 from './0006-zone-derived-uvb-targets';
 import * as m0007 from './0007-ended-sessions';
 import * as m0008 from './0008-background-jobs';
+import * as m0009 from './0009-lamp-outlooks';
 
 export type Migration = {
   name: string;
@@ -27,4 +28,5 @@ export const migrations: Migration[] = [
   { name: '0006-zone-derived-uvb-targets', ...m0006 },
   { name: '0007-ended-sessions', ...m0007 },
   { name: '0008-background-jobs', ...m0008 },
+  { name: '0009-lamp-outlooks', ...m0009 },
 ];

@@ -13,7 +13,9 @@ import { CatalogueSeeding } from './catalogue-seeding';
 import { LampType } from './lamp-type';
 import { SpeciesSheet } from './species';
 import { Lamp } from './lamp';
+import { LampOutlook } from './lamp-outlook';
 import { LampReminder } from './lamp-reminder';
+import { registerOutlookInvalidation } from './outlook-invalidation';
 import { MailMessage } from './mail-message';
 import { Reading } from './reading';
 import { Upload } from './upload';
@@ -23,7 +25,7 @@ export { Enclosure, Invitation, Membership, Organisation, User };
 export { Design, ShareLink, Variant };
 export { EndedSession, SignInAttempt };
 export { CatalogueSeeding, LampType, SpeciesSheet };
-export { Lamp, LampReminder, MailMessage, Reading, Upload };
+export { Lamp, LampOutlook, LampReminder, MailMessage, Reading, Upload };
 export { JobRun, JobRunCount, JobUnit };
 export { parseCounts, type JobCounts, type JobOutcome } from './job-run';
 export { ROLES, type Role } from './membership';
@@ -55,6 +57,7 @@ export function initModels(sequelize: Sequelize): void {
   JobRun.register(sequelize);
   JobRunCount.register(sequelize);
   JobUnit.register(sequelize);
+  LampOutlook.register(sequelize);
 
   Organisation.hasMany(Membership, { foreignKey: 'organisationId', as: 'memberships' });
   Membership.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });
@@ -81,4 +84,7 @@ export function initModels(sequelize: Sequelize): void {
   Lamp.hasMany(Reading, { foreignKey: 'lampId', as: 'readings' });
   Reading.belongsTo(Lamp, { foreignKey: 'lampId', as: 'lamp' });
   Upload.belongsTo(Enclosure, { foreignKey: 'enclosureId', as: 'enclosure' });
+  Lamp.hasOne(LampOutlook, { foreignKey: 'lampId', as: 'outlook' });
+  LampOutlook.belongsTo(Lamp, { foreignKey: 'lampId', as: 'lamp' });
+  registerOutlookInvalidation();
 }

@@ -29,6 +29,8 @@ export class Lamp extends Model<InferAttributes<Lamp>, InferCreationAttributes<L
   declare retiredOn: CreationOptional<string | null>;
   declare notes: CreationOptional<string | null>;
   declare createdById: number | null;
+  /** Counts changes to what the lamp's outlook is computed from (models/outlook-invalidation.ts). */
+  declare outlookVersion: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -47,6 +49,7 @@ export class Lamp extends Model<InferAttributes<Lamp>, InferCreationAttributes<L
         retiredOn: { type: DataTypes.DATEONLY, allowNull: true },
         notes: { type: DataTypes.TEXT, allowNull: true },
         createdById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        outlookVersion: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -4,9 +4,12 @@
 import { closeSequelize, getSequelize } from '@/lib/db';
 import { DEMO_SIGN_INS } from '@/lib/demo/scenario';
 import { seedDemo } from '@/lib/demo/seed';
+import { refreshStaleOutlooks } from '@/lib/lamp-log/outlook-store';
 
 async function main() {
   const { created } = await seedDemo(getSequelize());
+  // The lamp log reads stored outlooks: compute the seeded lamps' now rather than on first view.
+  await refreshStaleOutlooks();
   if (process.argv.includes('--json')) {
     console.log(JSON.stringify({ created, signIns: DEMO_SIGN_INS }));
     return;

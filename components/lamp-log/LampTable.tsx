@@ -5,7 +5,8 @@ import { link } from '@/components/ui/styles';
 import { formatLengthRounded } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
 import type { LampSummary } from '@/lib/lamp-log/store';
-import { formatAge, formatDay, formatValue, STATUS_ORDER } from './format';
+import { STATUS_RANK } from '@/lib/lamp-log/status';
+import { formatAge, formatDay, formatValue } from './format';
 import { StatusBadge } from './StatusBadge';
 
 /**
@@ -15,7 +16,7 @@ import { StatusBadge } from './StatusBadge';
 export function LampTable({ lamps, showEnclosure }: { lamps: LampSummary[]; showEnclosure: boolean }) {
   const [unit] = useLengthUnit();
   const rows = [...lamps].sort(
-    (a, b) => STATUS_ORDER[a.status] - STATUS_ORDER[b.status] || a.label.localeCompare(b.label),
+    (a, b) => STATUS_RANK[a.status] - STATUS_RANK[b.status] || a.label.localeCompare(b.label),
   );
   return (
     <div className="overflow-x-auto rounded-lg border border-basalt-200 bg-white">

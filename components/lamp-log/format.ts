@@ -1,5 +1,5 @@
 /** Display helpers of the lamp log (no React, usable on server and client). */
-import type { Status } from '@/lib/lamp-log/outlook';
+import type { Status } from '@/lib/lamp-log/status';
 
 export type ReadingUnit = 'uvb' | 'uvi';
 
@@ -34,14 +34,6 @@ export function formatDay(iso: string | null | undefined): string {
 export function formatMonthYear(d: Date): string {
   return `${MONTHS[d.getUTCMonth()]} ${d.getUTCFullYear()}`;
 }
-
-export const STATUS_ORDER: Record<Status, number> = {
-  replace: 0,
-  'test-soon': 1,
-  fine: 2,
-  'heat-only': 3,
-  retired: 4,
-};
 
 export const STATUS_STYLE: Record<Status, string> = {
   replace: 'bg-ember-100 text-ember-800 ring-ember-300',

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { todayIso } from '@/lib/lamp-log/dates';
-import { summarise } from '@/lib/lamp-log/store';
+import { summarise } from '@/lib/lamp-log/outlook-store';
 import { Lamp, Reading } from '@/models';
 import { seedDemo, withTestDatabase } from '@/tests/helpers/db';
 import { DEMO_LAMPS } from './lamp-log';

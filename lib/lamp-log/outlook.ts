@@ -4,6 +4,7 @@ import { defaultDecayFor, type DecaySource } from './decay';
 import { band, firstDayBelow, fitDecay, predict, type DecayFit } from './fit';
 import { distanceFactor, REFERENCE_CM, toReference, type LampShape } from './geometry';
 import { baskingNeed, type SpeciesNeed } from './need';
+import type { Status } from './status';
 
 /**
  * Everything the lamp log says about one installed lamp: its age, its readings brought to 30 cm, the
@@ -38,15 +39,7 @@ export type ReadingFacts = {
   unit: ReadingUnit;
 };
 
-export type Status = 'fine' | 'test-soon' | 'replace' | 'retired' | 'heat-only';
-
-export const STATUS_LABEL: Record<Status, string> = {
-  fine: 'Fine',
-  'test-soon': 'Test soon',
-  replace: 'Replace',
-  retired: 'Retired',
-  'heat-only': 'No UV (heat)',
-};
+export { STATUS_LABEL, type Status } from './status';
 
 export type NormalisedPoint = {
   id?: number;
@@ -118,6 +111,13 @@ export function normalise(
     .sort((a, b) => a.days - b.days);
 }
 
+/** Whole days a lamp has been in use by `today` (up to its retirement). */
+export function lampAgeDays(lamp: Pick<LampFacts, 'firstUsedOn' | 'retiredOn'>, today: string): number {
+  const start = dayNumber(lamp.firstUsedOn);
+  const endDay = lamp.retiredOn ? Math.min(dayNumber(lamp.retiredOn), dayNumber(today)) : dayNumber(today);
+  return Math.max(0, Math.floor(endDay - start));
+}
+
 export function lampOutlook(
   lamp: LampFacts,
   readings: readonly ReadingFacts[],
@@ -125,8 +125,7 @@ export function lampOutlook(
   today: string,
 ): Outlook {
   const start = dayNumber(lamp.firstUsedOn);
-  const endDay = lamp.retiredOn ? Math.min(dayNumber(lamp.retiredOn), dayNumber(today)) : dayNumber(today);
-  const ageDays = Math.max(0, Math.floor(endDay - start));
+  const ageDays = lampAgeDays(lamp, today);
   const ageMonths = ageDays / DAYS_PER_MONTH;
   const decay = defaultDecayFor(lamp.type, lamp.hoursPerDay);
   const unit = mainUnit(readings);

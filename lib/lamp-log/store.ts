@@ -6,7 +6,15 @@ import { Enclosure, Lamp, LampType, Reading, SpeciesSheet, User } from '@/models
 import { defaultDecayFor } from './decay';
 import { sampleCurve } from './fit';
 import { distanceFactor, REFERENCE_CM } from './geometry';
-import { lampOutlook, STATUS_LABEL, type LampFacts, type Outlook, type ReadingFacts } from './outlook';
+import { DAYS_PER_MONTH } from './dates';
+import {
+  lampAgeDays,
+  lampOutlook,
+  STATUS_LABEL,
+  type LampFacts,
+  type Outlook,
+  type ReadingFacts,
+} from './outlook';
 import type { SpeciesNeed } from './need';
 
 /** Database access and JSON views of the lamp log. Callers check permissions first (access.ts). */
@@ -115,6 +123,8 @@ export async function speciesForEnclosures(enclosures: Enclosure[]): Promise<Map
 }
 
 export type LampSummary = ReturnType<typeof summaryJson>;
+/** The part of a lamp's summary that comes from its outlook: what `lamp_outlooks` stores. */
+export type StoredOutlook = ReturnType<typeof outlookJson>;
 
 function fitJson(o: Outlook) {
   const f = o.fit;
@@ -136,34 +146,16 @@ function fitJson(o: Outlook) {
   };
 }
 
-function summaryJson(lamp: Lamp, type: LampTypeDto, enclosure: Enclosure, species: SpeciesMatch, o: Outlook) {
+export function outlookJson(species: SpeciesMatch, o: Outlook) {
   const missing = [...o.missing];
   if (!species.ok) {
     const i = missing.indexOf('a species sheet for this enclosure');
     if (i >= 0) missing[i] = species.missing;
   }
   return {
-    id: lamp.id,
-    label: lamp.label,
-    enclosure: {
-      id: enclosure.id,
-      name: enclosure.name,
-      keeperId: enclosure.keeperId,
-      speciesName: enclosure.speciesName,
-    },
-    lampType: { id: type.id, name: type.name, tech: type.tech, form: type.form, lengthCm: type.lengthCm },
-    designObjectId: lamp.designObjectId ?? null,
-    firstUsedOn: lamp.firstUsedOn,
-    hoursPerDay: lamp.hoursPerDay,
-    baskingDistanceCm: lamp.baskingDistanceCm ?? null,
-    baskingTransmission: lamp.baskingTransmission ?? null,
-    retiredOn: lamp.retiredOn ?? null,
-    notes: lamp.notes ?? null,
     species: species.ok
       ? { sheetId: species.sheetId, name: species.need.name, uvZone: species.need.uvZone }
       : null,
-    ageDays: o.ageDays,
-    ageMonths: Math.round(o.ageMonths * 10) / 10,
     unit: o.unit,
     lastReading: o.lastReading,
     remainingFraction: o.remainingFraction,
@@ -182,9 +174,46 @@ function summaryJson(lamp: Lamp, type: LampTypeDto, enclosure: Enclosure, specie
   };
 }
 
-type Loaded = { lamp: Lamp; type: LampTypeDto; enclosure: Enclosure; readings: Reading[] };
+/** The lamp's own fields, its enclosure and type, and its age today: read live on every view. */
+export function lampJson(lamp: Lamp, type: LampTypeDto, enclosure: Enclosure, today: string) {
+  const ageDays = lampAgeDays({ firstUsedOn: lamp.firstUsedOn, retiredOn: lamp.retiredOn ?? null }, today);
+  return {
+    id: lamp.id,
+    label: lamp.label,
+    enclosure: {
+      id: enclosure.id,
+      name: enclosure.name,
+      keeperId: enclosure.keeperId,
+      speciesName: enclosure.speciesName,
+    },
+    lampType: { id: type.id, name: type.name, tech: type.tech, form: type.form, lengthCm: type.lengthCm },
+    designObjectId: lamp.designObjectId ?? null,
+    firstUsedOn: lamp.firstUsedOn,
+    hoursPerDay: lamp.hoursPerDay,
+    baskingDistanceCm: lamp.baskingDistanceCm ?? null,
+    baskingTransmission: lamp.baskingTransmission ?? null,
+    retiredOn: lamp.retiredOn ?? null,
+    notes: lamp.notes ?? null,
+    ageDays,
+    ageMonths: Math.round((ageDays / DAYS_PER_MONTH) * 10) / 10,
+  };
+}
 
-async function loadFor(lamps: (Lamp & { enclosure?: Enclosure })[]): Promise<Loaded[]> {
+/** A lamp's summary: its live fields and its stored (or just computed) outlook. */
+export function summaryJson(
+  lamp: Lamp,
+  type: LampTypeDto,
+  enclosure: Enclosure,
+  stored: StoredOutlook,
+  today: string,
+) {
+  return { ...lampJson(lamp, type, enclosure, today), ...stored };
+}
+
+export type Loaded = { lamp: Lamp; type: LampTypeDto; enclosure: Enclosure; readings: Reading[] };
+
+/** Loads what outlooks are computed from, for many lamps in a fixed number of queries. */
+export async function loadFor(lamps: Lamp[]): Promise<Loaded[]> {
   if (lamps.length === 0) return [];
   const ids = lamps.map((l) => l.id);
   const [types, readings, enclosures] = await Promise.all([
@@ -200,24 +229,47 @@ async function loadFor(lamps: (Lamp & { enclosure?: Enclosure })[]): Promise<Loa
   ]);
   const typeById = new Map(types.map((t) => [t.id, lampTypeDto(t)]));
   const encById = new Map(enclosures.map((e) => [e.id, e]));
+  const readingsByLamp = new Map<number, Reading[]>();
+  for (const r of readings)
+    (readingsByLamp.get(r.lampId) ?? readingsByLamp.set(r.lampId, []).get(r.lampId)!).push(r);
   return lamps.map((lamp) => ({
     lamp,
     type: typeById.get(lamp.lampTypeId)!,
     enclosure: encById.get(lamp.enclosureId)!,
-    readings: readings.filter((r) => r.lampId === lamp.id),
+    readings: readingsByLamp.get(lamp.id) ?? [],
   }));
 }
 
-export async function summarise(lamps: Lamp[], today: string): Promise<LampSummary[]> {
+export type Computed = Loaded & { species: SpeciesMatch; outlook: Outlook };
+
+/**
+ * Computes outlooks from the database's current rows. `onEach` runs after each lamp, so a long run can
+ * give the event loop a turn (outlook-store.ts does).
+ */
+export async function computeOutlooks(
+  lamps: Lamp[],
+  today: string,
+  onEach?: () => Promise<void> | void,
+): Promise<Computed[]> {
   const loaded = await loadFor(lamps);
   const species = await speciesForEnclosures([
     ...new Map(loaded.map((l) => [l.enclosure.id, l.enclosure])).values(),
   ]);
-  return loaded.map(({ lamp, type, enclosure, readings }) => {
-    const match = species.get(enclosure.id)!;
-    const o = lampOutlook(lampFacts(lamp, type), readings.map(readingFacts), match.need, today);
-    return summaryJson(lamp, type, enclosure, match, o);
-  });
+  const out: Computed[] = [];
+  for (const l of loaded) {
+    const match = species.get(l.enclosure.id)!;
+    const o = lampOutlook(lampFacts(l.lamp, l.type), l.readings.map(readingFacts), match.need, today);
+    out.push({ ...l, species: match, outlook: o });
+    await onEach?.();
+  }
+  return out;
+}
+
+/** Summaries computed from scratch, as every page did before outlooks were stored: the reference. */
+export async function summariseLive(lamps: Lamp[], today: string): Promise<LampSummary[]> {
+  return (await computeOutlooks(lamps, today)).map((c) =>
+    summaryJson(c.lamp, c.type, c.enclosure, outlookJson(c.species, c.outlook), today),
+  );
 }
 
 export async function lampsOfEnclosure(enclosureId: number, opts: { cursor?: number; limit: number }) {
@@ -275,11 +327,9 @@ export function readingJson(r: Reading & { takenBy?: User | null }) {
 
 /** One lamp with its readings and what the chart draws: points at 30 cm, the fitted curve and its band. */
 export async function lampDetail(lamp: Lamp, today: string) {
-  const [loaded] = await loadFor([lamp]);
-  const { type, enclosure, readings } = loaded!;
-  const species = (await speciesForEnclosures([enclosure])).get(enclosure.id)!;
+  const [computed] = await computeOutlooks([lamp], today);
+  const { type, enclosure, readings, species, outlook: o } = computed!;
   const facts = lampFacts(lamp, type);
-  const o = lampOutlook(facts, readings.map(readingFacts), species.need, today);
   const decay = defaultDecayFor(type, lamp.hoursPerDay);
   const lastDay = Math.max(o.ageDays, ...o.points.map((p) => p.days), 30);
   const horizon = Math.max(lastDay * 1.5, lastDay + 120);
@@ -291,7 +341,7 @@ export async function lampDetail(lamp: Lamp, today: string) {
         (distanceFactor(facts.type, REFERENCE_CM, o.basking.distanceCm) * o.basking.transmission)
       : null;
   return {
-    lamp: summaryJson(lamp, type, enclosure, species, o),
+    lamp: summaryJson(lamp, type, enclosure, outlookJson(species, o), today),
     readings: readings.map(readingJson),
     chart: {
       unit: o.unit,

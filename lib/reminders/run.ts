@@ -3,7 +3,7 @@ import { config } from '@/lib/config';
 import { getSequelize } from '@/lib/db';
 import { runJob, type Job, type JobContext } from '@/lib/jobs/runner';
 import { todayIso } from '@/lib/lamp-log/dates';
-import { summarise } from '@/lib/lamp-log/store';
+import { summarise } from '@/lib/lamp-log/outlook-store';
 import type { Mail } from '@/lib/mail';
 import { Enclosure, Lamp, Organisation, User } from '@/models';
 import { dueItems, type DueItem } from './due';

@@ -2,7 +2,8 @@ import { z } from 'zod';
 import { allow, pageQuery, route } from '@/lib/api';
 import { idSchema } from '@/lib/api/schemas';
 import { todayIso } from '@/lib/lamp-log/dates';
-import { lampsOfOrganisation, summarise } from '@/lib/lamp-log/store';
+import { summarise } from '@/lib/lamp-log/outlook-store';
+import { lampsOfOrganisation } from '@/lib/lamp-log/store';
 import { roleIn } from '@/lib/permissions';
 
 /**

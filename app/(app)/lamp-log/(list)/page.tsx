@@ -7,7 +7,8 @@ import { PageHeader } from '@/components/ui/PageHeader';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { button, link } from '@/components/ui/styles';
 import { todayIso } from '@/lib/lamp-log/dates';
-import { lampsOfOrganisation, summarise } from '@/lib/lamp-log/store';
+import { summarise } from '@/lib/lamp-log/outlook-store';
+import { lampsOfOrganisation } from '@/lib/lamp-log/store';
 import { roleIn } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
 

@@ -5,7 +5,8 @@ import { enclosureForLamps } from '@/lib/lamp-log/access';
 import { todayIso } from '@/lib/lamp-log/dates';
 import { createLamp } from '@/lib/lamp-log/mutations';
 import { createLampBody } from '@/lib/lamp-log/schemas';
-import { lampsOfEnclosure, summarise } from '@/lib/lamp-log/store';
+import { summarise } from '@/lib/lamp-log/outlook-store';
+import { lampsOfEnclosure } from '@/lib/lamp-log/store';
 
 /** The lamps installed in one enclosure, each with its age, last reading, fit and status. */
 export const GET = route({
