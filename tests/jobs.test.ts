@@ -3,7 +3,7 @@ import { config } from '@/lib/config';
 import { getSequelize } from '@/lib/db';
 import { backoffMs } from '@/lib/jobs/backoff';
 import { lockName, withNamedLock } from '@/lib/jobs/lock';
-import { lastRuns, runJob, type Job } from '@/lib/jobs/runner';
+import { KEEP_RUNS_DAYS, lastRuns, runJob, type Job } from '@/lib/jobs/runner';
 import { dueJobs } from '@/lib/jobs/schedule';
 import { JobRun, JobRunCount, JobUnit, parseCounts } from '@/models';
 import { createOrganisation, withTestDatabase } from './helpers/db';
@@ -147,7 +147,7 @@ describe('job runner', () => {
   it('marks a run left "running" by a dead process as abandoned', async () => {
     const dead = await JobRun.create({
       job: 'test-letters',
-      startedAt: at(0),
+      startedAt: new Date(Date.now() - 60_000),
       outcome: 'running',
       countsJson: '{}',
       host: 'gone:1',
@@ -164,6 +164,22 @@ describe('job runner', () => {
     expect(lockName('a_very_long_database_name_indeed', 'an-equally-long-job-name-for-a-test')).toHaveLength(
       53,
     );
+  });
+
+  it('deletes runs older than it keeps, and only of the job that ran', async () => {
+    const old = new Date(Date.now() - (KEEP_RUNS_DAYS + 1) * 86_400_000);
+    const recent = new Date(Date.now() - (KEEP_RUNS_DAYS - 1) * 86_400_000);
+    const row = (job: string, startedAt: Date) =>
+      JobRun.create({ job, startedAt, outcome: 'succeeded', countsJson: '{}', host: 'x' });
+    const [gone, kept, other] = [
+      await row('test-letters', old),
+      await row('test-letters', recent),
+      await row('other', old),
+    ];
+    await runJob(lettersJob(new Set(), []));
+    expect(await JobRun.findByPk(gone.id)).toBeNull();
+    expect(await JobRun.findByPk(kept.id)).not.toBeNull();
+    expect(await JobRun.findByPk(other.id)).not.toBeNull();
   });
 });
 
@@ -190,7 +206,11 @@ describe('schedule', () => {
     });
     const runs = await lastRuns(['test-letters', 'never-ran']);
     const partial = (await JobRun.findOne({ where: { outcome: 'partial' } }))!;
-    expect(runs.get('test-letters')).toEqual({ lastStartedAt: partial.startedAt, lastSucceededAt: null });
-    expect(runs.get('never-ran')).toEqual({ lastStartedAt: null, lastSucceededAt: null });
+    expect(runs.get('test-letters')).toEqual({
+      lastStartedAt: partial.startedAt,
+      lastOutcome: 'partial',
+      lastSucceededAt: null,
+    });
+    expect(runs.get('never-ran')).toEqual({ lastStartedAt: null, lastOutcome: null, lastSucceededAt: null });
   });
 });

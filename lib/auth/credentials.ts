@@ -5,6 +5,7 @@ import { checkLimits, clearFailures, limitKey, countAttempt } from '@/lib/rate-l
 import { User } from '@/models';
 import { clientAddress } from './client-address';
 import { burnPasswordCheck, verifyPassword } from './password';
+import { logger } from '@/lib/log';
 
 /** Failures allowed per window before sign-in is refused for the account or the client address. */
 export const SIGN_IN_LIMITS = { perAccount: 5, perAddress: 20, windowMs: 15 * 60_000 } as const;
@@ -75,7 +76,7 @@ export async function authorizeCredentials(
   } catch (error) {
     if (error instanceof SignInRefused) throw error;
     if (isDatabaseUnavailable(error)) throw new SignInRefused(SIGN_IN_ERRORS.unavailable);
-    console.error('sign-in failed unexpectedly', error);
+    logger().error({ err: error }, 'sign-in failed unexpectedly');
     throw new SignInRefused(SIGN_IN_ERRORS.unavailable);
   }
 }

@@ -5,6 +5,7 @@ import { getSequelize } from '@/lib/db';
 import { sendMail } from '@/lib/mail';
 import { ApiError, conflict } from '@/lib/api/errors';
 import { Invitation, Membership, Organisation, User, type Role } from '@/models';
+import { logger } from '@/lib/log';
 
 export const INVITATION_TTL_MS = 7 * 24 * 3600_000;
 
@@ -89,7 +90,7 @@ export async function inviteByEmail(input: {
   } catch (error) {
     // Without the e-mail the invitation is useless (only the recipient can learn the token): undo it.
     await invitation.destroy();
-    console.error('invitation e-mail could not be sent', error instanceof Error ? error.message : error);
+    logger().error({ err: error, invitationId: invitation.id }, 'invitation e-mail could not be sent');
     throw new ApiError(
       503,
       'mail_unavailable',

@@ -6,6 +6,7 @@ import { SESSION_MAX_AGE_S, SESSION_REFRESH_MS } from './lifetime';
 import { authSecret } from './secret';
 import { endSession, loadActiveSession, newSessionId } from './ended-sessions';
 import { loadUserById } from './session-user';
+import { logger } from '@/lib/log';
 
 export { SESSION_MAX_AGE_S, SESSION_REFRESH_MS };
 /** A changed session version ends a session at the next request, and in next-auth's own answer within a minute. */
@@ -94,8 +95,8 @@ export const authOptions: NextAuthOptions = {
   },
   logger: {
     // next-auth's default logger prints request details; keep only the code and message (no bodies, no passwords).
-    error: (code, metadata) => console.error(`auth error ${code}`, errorMessage(metadata)),
-    warn: (code) => console.warn(`auth warning ${code}`),
+    error: (code, metadata) => logger().error({ code, error: errorMessage(metadata) }, 'auth error'),
+    warn: (code) => logger().warn({ code }, 'auth warning'),
     debug: () => {},
   },
 };

@@ -187,23 +187,43 @@ async function runLocked(job: Job, now: Date, baseLog: Logger): Promise<RunRepor
     // Left "running"; the next run marks it abandoned. The log still has the outcome.
     log.error({ err: e }, 'could not record the end of a job run');
   }
+  await JobRun.destroy({
+    where: { job: job.name, startedAt: { [Op.lt]: new Date(Date.now() - KEEP_RUNS_DAYS * 86_400_000) } },
+  }).catch((e: unknown) => log.warn({ err: e }, 'could not delete old runs'));
   log.info({ outcome, counts, ms }, 'job run finished');
   return { runId: run.id, job: job.name, outcome, counts, error, ms };
 }
 
-/** When each job last started, and last succeeded (for the scheduler and the health check). */
-export async function lastRuns(jobs: readonly string[]) {
+export type LastRuns = Map<
+  string,
+  { lastStartedAt: Date | null; lastOutcome: JobOutcome | null; lastSucceededAt: Date | null }
+>;
+
+/** When each job last started (and how that run ended), and last succeeded: for the scheduler and health. */
+export async function lastRuns(jobs: readonly string[]): Promise<LastRuns> {
   getSequelize();
-  const out = new Map<string, { lastStartedAt: Date | null; lastSucceededAt: Date | null }>();
+  const out: LastRuns = new Map();
   for (const job of jobs) {
     const [started, succeeded] = await Promise.all([
-      JobRun.findOne({ where: { job, outcome: { [Op.ne]: 'abandoned' } }, order: [['startedAt', 'DESC']] }),
-      JobRun.findOne({ where: { job, outcome: 'succeeded' }, order: [['finishedAt', 'DESC']] }),
+      JobRun.findOne({
+        where: { job, outcome: { [Op.ne]: 'abandoned' } },
+        order: [['startedAt', 'DESC']],
+        attributes: ['startedAt', 'outcome'],
+      }),
+      JobRun.findOne({
+        where: { job, outcome: 'succeeded' },
+        order: [['finishedAt', 'DESC']],
+        attributes: ['finishedAt'],
+      }),
     ]);
     out.set(job, {
       lastStartedAt: started?.startedAt ?? null,
+      lastOutcome: started?.outcome ?? null,
       lastSucceededAt: succeeded?.finishedAt ?? null,
     });
   }
   return out;
 }
+
+/** Runs older than this are deleted after each run of their job: the page shows recent ones. */
+export const KEEP_RUNS_DAYS = 90;

@@ -28,7 +28,10 @@ const REFUSED = [401, 403, 404];
  * things the answer must still not contain.
  */
 const LEGITIMATE: Record<string, { who: Actor[]; why: string; markers?: (keyof typeof MARK)[] }> = {
-  'GET /api/health': { who: ACTORS, why: 'a probe: answers { ok } and reads no data' },
+  'GET /api/health': {
+    who: ACTORS,
+    why: 'a probe: answers { ok } and when each background job last ran; no organisation’s data',
+  },
   'POST /api/sign-up': { who: ACTORS, why: 'creates a new account with its own new organisation' },
   'POST /api/organisations': { who: ['outsider', 'otherKeeper'], why: 'a new organisation of their own' },
   'PUT /api/account/password': { who: ['outsider', 'otherKeeper'], why: 'their own account only' },

@@ -18,7 +18,7 @@ const PUBLIC_HANDLERS: Record<string, string> = {
   'app/api/sign-up/route.ts POST':
     'creates a new account with a new organisation of its own; touches nothing that exists (rate-limited)',
   'app/api/health/route.ts GET':
-    'a load balancer probe: answers only { ok } (or 503 when the database is down), reads no data',
+    'a load balancer probe: answers { ok }, the database state and when each background job last ran (or 503 when the database is down); no organisation’s data',
   'app/api/invitations/accept/route.ts POST':
     'the unguessable, single-use, expiring invitation token is the permission; the e-mail must match',
 };

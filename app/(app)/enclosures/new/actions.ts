@@ -7,6 +7,7 @@ import type { CurrentUser } from '@/lib/auth/session-user';
 import { guidedStartSchema, type GuidedStartInput } from '@/lib/guided-start/input';
 import { createFromGuidedStart, proposeFor, type ProposalView } from '@/lib/guided-start/service';
 import { currentUser } from '@/lib/session';
+import { logger } from '@/lib/log';
 
 /**
  * The guided start's two steps as server actions, in the same order as every route handler:
@@ -41,7 +42,7 @@ async function run<T>(
       return fail(
         'The database cannot be reached right now; your answers stay on this page. Try again in a few seconds.',
       );
-    console.error('guided start', e);
+    logger().error({ err: e }, 'guided start failed');
     return fail('Something went wrong on our side. Nothing was created; try again.');
   }
 }

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { download, fieldPng, fileBase, reportPdf } from '@/lib/reports/build';
 import { resolveShareToken } from '@/lib/variants/shares';
 import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
+import { logger } from '@/lib/log';
 
 const query = z.object({
   format: z.enum(['pdf', 'png']).catch('pdf'),
@@ -44,7 +45,7 @@ export async function GET(req: Request, ctx: { params: Promise<{ token: string }
     const pdf = await reportPdf(subject, { field: q.field, months: 0, species });
     return download(new Uint8Array(pdf), 'application/pdf', `${base}.pdf`);
   } catch (error) {
-    console.error('shared report failed', error);
+    logger().error({ err: error }, 'shared report failed');
     return Response.json(
       { error: { code: 'internal', message: 'The report could not be made. Try again.' } },
       { status: 500, headers: { 'Cache-Control': 'no-store' } },
