@@ -31,6 +31,8 @@ export type Resource =
   | { kind: 'upload'; organisationId: number; uploaderId: number }
   /** The development mail viewer, which shows captured invitation links. */
   | { kind: 'mail'; organisationId: number }
+  /** The background jobs page: recent runs, and this organisation's failed units and undelivered e-mail. */
+  | { kind: 'jobs'; organisationId: number }
   /** A person's own account: password and sessions. No role, not even an owner's, reaches another's. */
   | { kind: 'account'; userId: number };
 
@@ -95,6 +97,9 @@ export function can(user: SessionUser | null | undefined, action: Action, resour
     }
     case 'mail':
       return action === 'read' && isStaffOrOwner(roleIn(user, resource.organisationId));
+    case 'jobs':
+      // Failures name members and their e-mail addresses and show delivery errors: the owner's to follow up.
+      return action === 'read' && roleIn(user, resource.organisationId) === 'owner';
     case 'account':
       return action !== 'create' && resource.userId === user.id;
   }

@@ -26,6 +26,7 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
     ...(can(user, 'read', { kind: 'member', organisationId: orgId })
       ? [{ href: '/members', label: 'Members' }]
       : []),
+    ...(can(user, 'read', { kind: 'jobs', organisationId: orgId }) ? [{ href: '/jobs', label: 'Jobs' }] : []),
     ...(mailViewerEnabled() && can(user, 'read', { kind: 'mail', organisationId: orgId })
       ? [{ href: '/mail', label: 'Mail (dev)' }]
       : []),

@@ -9,3 +9,5 @@ import type { Job } from './runner';
 export const JOBS: readonly Job[] = [outlookJob, reminderJob];
 
 export const jobNamed = (name: string) => JOBS.find((j) => j.name === name);
+
+export const jobTitle = (name: string) => jobNamed(name)?.title ?? name;

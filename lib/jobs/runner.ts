@@ -48,6 +48,8 @@ export type JobContext = {
 
 export type Job = {
   name: string;
+  /** What the owner's page calls it ("Lamp reminders"); the name when left out. */
+  title?: string;
   /** How often it should run; the scheduler starts it when its last run started longer ago than this. */
   everyMs: number;
   run: (ctx: JobContext) => Promise<void>;

@@ -153,6 +153,7 @@ export async function reminderWork(ctx: JobContext, opts: ReminderOptions = {}):
 /** Every hour by default; REMINDERS_INTERVAL_MINUTES changes it (0 turns the schedule off). */
 export const reminderJob: Job = {
   name: REMINDER_JOB,
+  title: 'Lamp reminders',
   everyMs: Number(process.env.REMINDERS_INTERVAL_MINUTES ?? 60) * 60_000,
   run: (ctx) => reminderWork(ctx),
 };
