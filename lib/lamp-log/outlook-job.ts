@@ -12,6 +12,7 @@ export const OUTLOOK_JOB = 'lamp-outlooks';
  */
 export const outlookJob: Job = {
   name: OUTLOOK_JOB,
+  title: 'Lamp outlooks',
   everyMs: Number(process.env.OUTLOOK_REFRESH_MINUTES ?? 15) * 60_000,
   run: async (ctx) => {
     ctx.count('lamps brought up to date', await refreshStaleOutlooks());

@@ -66,7 +66,7 @@ export default async function JobsPage() {
     <>
       <PageHeader
         title="Background jobs"
-        lead={`The work Baskwell does on its own for ${membership.organisationName}: lamp reminder e-mails, checked every hour. Each run is listed with what it did for your organisation; anything that failed is retried on its own, later and less often each time.`}
+        lead={`The work Baskwell does on its own for ${membership.organisationName}: lamp outlooks brought up to date as the days pass, and lamp reminder e-mails, checked every hour. Each run is listed with what it did for your organisation; anything that failed is retried on its own, later and less often each time.`}
       />
       {lastRun && lastRun.outcome === 'failed' && (
         <Notice tone="warning" title="The last run stopped with an error">
