@@ -89,10 +89,12 @@ describe('simulate CLI (separate processes)', () => {
 });
 
 describe('simulate CLI (in process)', () => {
-  it('reads pinned probes when no --at is given and leaves out the assessment without --species', () => {
+  it('reads pinned probes when no --at is given and runs the safety checks alone without --species', () => {
     const o = run([file('design.json'), '--cell', '4']);
     expect(o.probes).toHaveLength(1);
-    expect(o.assessment).toBeUndefined();
+    const ids = (o.assessment as { id: string }[]).map((f) => f.id).sort();
+    expect(ids).toEqual(['eye-safety', 'hot-surface', 'lamp-in-reach']);
+    expect(o.monthsUntilUnmet).toBeUndefined();
   });
 
   it('accepts several points after one --at', () => {

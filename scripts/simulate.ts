@@ -4,7 +4,8 @@
  *   npm run --silent simulate -- <design.json> [--at X,Y ...] [--cell CM] [--species FILE] [--months N]
  *
  * Prints ONE JSON object: probe readings (at --at points, else at the design's pinned probes), a summary
- * of each field, and — with --species — the assessment findings. Bad input exits with code 2 and a
+ * of each field, and the assessment findings — the species check with --species, and without it the
+ * safety checks (reach, eyes, hot surfaces) against general limits. Bad input exits with code 2 and a
  * one-line message naming the field. Every figure is an estimate to verify with a meter and thermometer.
  */
 import { readFileSync } from 'node:fs';
@@ -149,12 +150,10 @@ export function run(argv: string[]): Record<string, unknown> {
   const ms = performance.now() - t0;
   const points = args.at.length ? args.at : (design.probes ?? []).map((p) => ({ x: p.x, y: p.y }));
   const out: Record<string, unknown> = { probes: probe(design, points, opts), summary: summary(grid, ms) };
-  if (species) {
-    const a = assess(design, species, { ...opts, grid });
-    out.assessment = a.findings;
-    out.overall = a.overall;
-    out.monthsUntilUnmet = monthsUntilUnmet(design, species);
-  }
+  const a = assess(design, species, { ...opts, grid });
+  out.assessment = a.findings;
+  out.overall = a.overall;
+  if (species) out.monthsUntilUnmet = monthsUntilUnmet(design, species);
   return out;
 }
 

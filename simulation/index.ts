@@ -25,6 +25,8 @@ export {
 } from './assess/zones';
 export type { Assessment, Finding, FindingStatus, FindingWhere, Segment } from './assess/types';
 export { assess, monthsUntilUnmet } from './assess/assess';
+export { baskingUviRange, isShadeZone } from './assess/basking-range';
+export { neededBaskingCm } from './assess/sharedBasking';
 export { reachableSurfaces, type SurfaceSample } from './assess/surfaces';
 export * as ASSESSMENT_THRESHOLDS from './assess/thresholds';
 export { speciesSheetSchema } from './model/species';

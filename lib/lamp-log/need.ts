@@ -1,20 +1,21 @@
 import type { ReadingUnit } from '@/models/reading';
-import { UV_ZONES } from '@/simulation';
+import { baskingUviRange } from '@/simulation';
 
 /**
  * What the basking zone must reach for a species, in the unit of a lamp's readings.
  *
- * UV zones of Ferguson et al. 2010 (Zoo Biology 29:317–334): the basking zone should reach the zone's
- * "maximum" UVI range, whose lower ends are 0.6, 1.1, 2.9 and 4.5 for zones 1–4 (the engine's table, so
- * the lamp log and the studio's basking check agree). Below that lower end, the spot no longer gives the
- * species its need. A sheet's own broadband target (µW/cm²) wins for
+ * UV zones of Ferguson et al. 2010 (Zoo Biology 29:317–334): the engine's basking rule, so the lamp log
+ * and the studio's basking check agree. Zones 3 and 4 must reach the lower end of the zone's "maximum"
+ * UVI range (2.9 and 4.5); zones 1 and 2, kept by the shade method, pass from the middle of the zone's
+ * mean range (0.35 and 0.85), so a zone-1 lamp giving UVI 0.5 at the basking spot is not yet due.
+ * Below that, the spot no longer gives the species its need. A sheet's own broadband target (µW/cm²) wins for
  * broadband readings; otherwise a UVI need is turned into µW/cm² with the lamp's UVI-per-µW/cm² ratio.
  */
 export const ZONE_BASKING_MIN_UVI: Record<1 | 2 | 3 | 4, number> = {
-  1: UV_ZONES[1].max[0],
-  2: UV_ZONES[2].max[0],
-  3: UV_ZONES[3].max[0],
-  4: UV_ZONES[4].max[0],
+  1: baskingUviRange(1)[0],
+  2: baskingUviRange(2)[0],
+  3: baskingUviRange(3)[0],
+  4: baskingUviRange(4)[0],
 };
 
 export type SpeciesNeed = {

@@ -11,7 +11,7 @@ import { probe, reachableSurfaces, UV_REFUGE_UVI, type Design, type FieldGrid } 
 /** UV Index below which a place counts as UV-free shade: the engine's own refuge limit. */
 export const UV_FREE_UVI = UV_REFUGE_UVI;
 
-export type SurfacePoint = { x: number; y: number; surface: 'floor' | 'perch' | 'ledge' | 'hide' };
+export type SurfacePoint = { x: number; y: number; surface: 'floor' | 'perch' | 'ledge' | 'hide' | 'screen' };
 
 /** Sample points along every surface an animal can reach. */
 export function surfacePoints(design: Design): SurfacePoint[] {

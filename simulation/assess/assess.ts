@@ -13,8 +13,9 @@ import type { FieldGrid, SimOptions } from '../fields/types';
 import type { Assessment, Finding, FindingStatus } from './types';
 import { reachableSurfaces, type SurfaceSample } from './surfaces';
 import { baskingStatus, maxReachableUvi, uvFindings } from './uvFindings';
-import { heatFindings } from './heatFindings';
-import { safetyFindings } from './safetyFindings';
+import { heatFindings, heatLamps } from './heatFindings';
+import { hotSurfaceFinding, safetyFindings } from './safetyFindings';
+import { sharedBaskingFinding } from './sharedBasking';
 import { depthFindings } from './depthFindings';
 
 const RANK: Record<FindingStatus, number> = { pass: 0, attention: 1, fail: 2 };
@@ -28,8 +29,8 @@ interface Sampled {
   lamps: LampSamples;
 }
 
-function sample(design: Design): Sampled {
-  const samples = reachableSurfaces(design);
+function sample(design: Design, species?: SpeciesSheet): Sampled {
+  const samples = reachableSurfaces(design, undefined, { climbs: species?.climbs === true });
   return { samples, lamps: new FieldSolver().probeByLamp(design, samples) };
 }
 
@@ -51,28 +52,44 @@ function combineUv(s: Sampled, addMonths: number): { uvb: Float64Array; uvi: Flo
 
 /**
  * Assess a design for a species. `opts.grid` is accepted so callers can pass fields they already have,
- * but surface values are always evaluated exactly at the surface samples.
+ * but surface values are always evaluated exactly at the surface samples. Without a species sheet only
+ * the safety checks run (reach, eyes, and hot surfaces against a general limit), so a scratch design, a
+ * share or a report without a species still warns of a lamp within reach.
  */
 export function assess(
   design: Design,
-  species: SpeciesSheet,
+  species: SpeciesSheet | undefined,
   opts: SimOptions & { grid?: FieldGrid } = {},
 ): Assessment {
-  return assessSampled(design, sample(design), species, opts);
+  return assessSampled(design, sample(design, species), species, opts);
 }
 
-function assessSampled(design: Design, s: Sampled, species: SpeciesSheet, opts: SimOptions): Assessment {
+function assessSampled(
+  design: Design,
+  s: Sampled,
+  species: SpeciesSheet | undefined,
+  opts: SimOptions,
+): Assessment {
   const { uvb, uvi } = combineUv(s, opts.addMonths ?? 0);
   const hc = opts.convection ?? HEAT_DEFAULTS.convection;
   const tempC = Array.from(s.lamps.ir, (q, p) =>
     surfaceTempC(HEAT_DEFAULTS.absorptance * q, s.lamps.air[p]!, HEAT_DEFAULTS.emissivity, hc),
   );
-  const findings: Finding[] = [
-    ...uvFindings(s.samples, uvi, uvb, species),
-    ...heatFindings(s.samples, tempC, species, s.lamps.scene.roomC),
-    ...safetyFindings(design, s.samples),
-    ...depthFindings(design),
-  ];
+  const lamps = heatLamps(design);
+  const roomC = s.lamps.scene.roomC;
+  const findings: Finding[] = species
+    ? [
+        ...uvFindings(s.samples, uvi, uvb, species),
+        ...heatFindings(s.samples, tempC, species, roomC, lamps),
+        sharedBaskingFinding(s.samples, uvi, tempC, species),
+        ...safetyFindings(design, s.samples, { climbs: species.climbs === true }),
+        ...depthFindings(design),
+      ]
+    : [
+        ...safetyFindings(design, s.samples),
+        hotSurfaceFinding(s.samples, tempC, roomC, lamps),
+        ...depthFindings(design),
+      ];
   return { findings, overall: worst(findings.map((f) => f.status)) };
 }
 
@@ -81,7 +98,7 @@ function assessSampled(design: Design, s: Sampled, species: SpeciesSheet, opts: 
  * no longer a pass; null if it still passes at maxMonths.
  */
 export function monthsUntilUnmet(design: Design, species: SpeciesSheet, maxMonths = 24): number | null {
-  return monthsSampled(sample(design), species, maxMonths);
+  return monthsSampled(sample(design, species), species, maxMonths);
 }
 
 function monthsSampled(s: Sampled, species: SpeciesSheet, maxMonths: number): number | null {
@@ -99,7 +116,7 @@ export function assessWithAgeing(
   opts: SimOptions = {},
   maxMonths = 24,
 ): { assessment: Assessment; monthsUntilUnmet: number | null } {
-  const s = sample(design);
+  const s = sample(design, species);
   return {
     assessment: assessSampled(design, s, species, opts),
     monthsUntilUnmet: monthsSampled(s, species, maxMonths),

@@ -4,6 +4,10 @@
  * radiant heat of the lamps (see fields/heat.ts), so the cool end reads the local air temperature.
  */
 import type { SpeciesSheet } from '../model/species';
+import type { Design } from '../model/schema';
+import { LAMP_TECHS, type LampTech } from '../model/techs';
+import { resolveLamp } from '../model/resolve';
+import { controlAdvice, controlSentence, lowerLabel, thermostatAllowed } from '../model/control';
 import type { Finding, FindingStatus } from './types';
 import { runsOf, type SurfaceSample } from './surfaces';
 import { ESTIMATE_TEMP, TEMP_MARGIN_C } from './thresholds';
@@ -15,11 +19,39 @@ function rangeStatus(v: number, [lo, hi]: [number, number]): FindingStatus {
   return 'fail';
 }
 
+/** A lamp as the texts name it: its own name, else its id, with its technology. */
+export function lampForText(l: { id: string; name?: string; tech: LampTech }): { tech: LampTech; name: string } {
+  return { tech: l.tech, name: `“${l.name || l.id}” (${lowerLabel(LAMP_TECHS[l.tech].label)})` };
+}
+
+/** The lamps that put heat into the design, named for the texts. */
+export function heatLamps(design: Design): { tech: LampTech; name: string }[] {
+  const out: { tech: LampTech; name: string }[] = [];
+  for (const o of design.objects) {
+    if (o.type !== 'lamp') continue;
+    const l = resolveLamp(o);
+    if (l.watts * l.radiantFraction > 0) out.push(lampForText(o));
+  }
+  return out;
+}
+
+/** "Too hot" advice that never tells a timer-only lamp to be dimmed (LAMP_CONTROL). */
+export function tooHotAdvice(lamps: { tech: LampTech; name: string }[]): string {
+  const dimmable = lamps.filter((l) => thermostatAllowed(l.tech));
+  const fixed = lamps.filter((l) => !thermostatAllowed(l.tech));
+  const parts = ['raise the lamp or use a lower wattage'];
+  if (dimmable.length) parts.push(`turn down the thermostat of ${dimmable.map((l) => l.name).join(', ')}`);
+  if (fixed.length && !dimmable.length)
+    parts.push('or replace part of the heat with a separate, thermostat-controlled heat source');
+  return parts.join(', ');
+}
+
 export function heatFindings(
   samples: SurfaceSample[],
   tempC: ArrayLike<number>,
   species: SpeciesSheet,
   roomC: number,
+  lamps: { tech: LampTech; name: string }[] = [],
 ): Finding[] {
   let hot = -Infinity;
   let cool = Infinity;
@@ -45,8 +77,9 @@ export function heatFindings(
         ? '.'
         : hot < blo
           ? ' — too cool: a stronger or closer heat lamp, or a basking surface nearer the lamp.'
-          : ` — too hot: raise the lamp, use a lower wattage or a dimming thermostat${hot > bhi + 10 ? '; risk of burns' : ''}.`) +
-      ` Always run heat lamps on a thermostat. ${ESTIMATE_TEMP}`,
+          : ` — too hot: ${tooHotAdvice(lamps)}${hot > bhi + 10 ? '; risk of burns' : ''}.`) +
+      (lamps.length ? ` ${controlAdvice(lamps, species.photoperiodH)}` : '') +
+      ` ${ESTIMATE_TEMP}`,
     numbers: { hotC: hot, targetLo: blo, targetHi: bhi },
     where: hotSegs.length ? { kind: 'segments', segments: hotSegs } : undefined,
   });
@@ -75,7 +108,7 @@ export function heatFindings(
       title: 'Night temperature',
       message: ok
         ? `With the lamps off the enclosure falls to the room temperature; at ${f1(roomC)} °C that stays above the ${f1(species.nightMinC)} °C night minimum, if the room stays this warm at night. ${ESTIMATE_TEMP}`
-        : `With the lamps off the enclosure falls to the room temperature, ${f1(roomC)} °C, below the ${f1(species.nightMinC)} °C night minimum: a night heat source without light (on a thermostat) may be needed. ${ESTIMATE_TEMP}`,
+        : `With the lamps off the enclosure falls to the room temperature, ${f1(roomC)} °C, below the ${f1(species.nightMinC)} °C night minimum: a night heat source without light may be needed. ${controlSentence('ceramic', 'a night heat source without light, such as a ceramic emitter,')} ${ESTIMATE_TEMP}`,
       numbers: { roomC, nightMinC: species.nightMinC },
     });
   }

@@ -5,10 +5,13 @@
  */
 import type { Design } from '../model/schema';
 import { resolveLamp } from '../model/resolve';
+import type { LampTech } from '../model/techs';
+import { controlAdvice } from '../model/control';
+import { tooHotAdvice } from './heatFindings';
 import type { Finding } from './types';
-import type { SurfaceSample } from './surfaces';
-import { LAMP_REACH_CM, UV_EYE_CM } from './thresholds';
-import { f0 } from './format';
+import { runsOf, type SurfaceSample } from './surfaces';
+import { ESTIMATE_TEMP, GENERAL_HOT_SURFACE_C, LAMP_REACH_CM, UV_EYE_CM } from './thresholds';
+import { f0, f1 } from './format';
 
 type Pt = { x: number; y: number };
 
@@ -39,9 +42,20 @@ interface Near {
   uv: boolean;
 }
 
-/** Nearest unguarded distance from each lamp to the reachable surfaces. */
-export function unguardedDistances(design: Design, samples: SurfaceSample[]): Near[] {
-  const barriers = design.objects.filter((o) => o.type === 'screen' || o.type === 'glass');
+/**
+ * Nearest unguarded distance from each lamp to the reachable surfaces. Glass always guards; mesh guards
+ * only an animal that does not climb — a climber holds on to the mesh, and a lamp resting on it or
+ * inside a wire guard is as close as the mesh is (common practice, no published source).
+ */
+export function unguardedDistances(
+  design: Design,
+  samples: SurfaceSample[],
+  opts: { climbs?: boolean } = {},
+): Near[] {
+  const barriers = design.objects.filter(
+    (o): o is Extract<Design['objects'][number], { type: 'glass' | 'screen' }> =>
+      o.type === 'glass' || (o.type === 'screen' && !opts.climbs),
+  );
   const out: Near[] = [];
   for (const o of design.objects) {
     if (o.type !== 'lamp') continue;
@@ -64,8 +78,13 @@ export function unguardedDistances(design: Design, samples: SurfaceSample[]): Ne
 const HEAT_TECHS_NOTE = 'Heat and UV lamps can burn an animal that touches them or sits right under them.';
 const DISTANCE_NOTE = 'Distances are estimates from the drawing: check them in the real enclosure.';
 
-export function safetyFindings(design: Design, samples: SurfaceSample[]): Finding[] {
-  const near = unguardedDistances(design, samples);
+export function safetyFindings(
+  design: Design,
+  samples: SurfaceSample[],
+  opts: { climbs?: boolean } = {},
+): Finding[] {
+  const near = unguardedDistances(design, samples, opts);
+  const guard = opts.climbs ? 'glass guard (mesh is no guard for a climber: it holds on to the mesh)' : 'mesh or glass guard';
   const reach = near.filter((n) => n.distance < LAMP_REACH_CM);
   const hotLamps = reach.filter(
     (n) => n.heat && design.objects.some((o) => o.id === n.id && o.type === 'lamp' && o.form === 'bulb'),
@@ -78,8 +97,8 @@ export function safetyFindings(design: Design, samples: SurfaceSample[]): Findin
       title: 'Lamps out of reach',
       message:
         reach.length === 0
-          ? `No lamp is within ${LAMP_REACH_CM} cm of a surface the animal can reach without a mesh or glass guard between (common practice, no published source). Climbing animals reach further than you think. ${DISTANCE_NOTE}`
-          : `${reach.map((n) => n.id).join(', ')} ${reach.length === 1 ? 'is' : 'are'} within ${LAMP_REACH_CM} cm (closest about ${f0(closest)} cm) of a reachable surface with no guard between. ${HEAT_TECHS_NOTE} Fit a lamp guard or move the lamp out of reach (common practice, no published source). ${DISTANCE_NOTE}`,
+          ? `No lamp is within ${LAMP_REACH_CM} cm of a surface the animal can reach without a ${guard} between (common practice, no published source). Climbing animals reach further than you think. ${DISTANCE_NOTE}`
+          : `${reach.map((n) => n.id).join(', ')} ${reach.length === 1 ? 'is' : 'are'} within ${LAMP_REACH_CM} cm (closest about ${f0(closest)} cm) of a reachable surface with no ${guard} between. ${HEAT_TECHS_NOTE} ${opts.climbs ? `Raise the lamp at least ${LAMP_REACH_CM} cm above any mesh the animal can climb, or give the guard room so the lamp stays ${LAMP_REACH_CM} cm from its outside` : 'Fit a lamp guard or move the lamp out of reach'} (common practice, no published source). ${DISTANCE_NOTE}`,
       numbers: {
         reachCm: LAMP_REACH_CM,
         ...(Number.isFinite(closest) ? { closestCm: closest } : {}),
@@ -105,4 +124,32 @@ export function safetyFindings(design: Design, samples: SurfaceSample[]): Findin
     where: eye.length ? { kind: 'object', objectIds: eye.map((n) => n.id) } : undefined,
   });
   return out;
+}
+
+/**
+ * Without a species sheet there is no basking range to judge the hottest surface by, so it is held to a
+ * general limit for burns instead (GENERAL_HOT_SURFACE_C).
+ */
+export function hotSurfaceFinding(
+  samples: SurfaceSample[],
+  tempC: ArrayLike<number>,
+  roomC: number,
+  lamps: { tech: LampTech; name: string }[],
+): Finding {
+  let hot = samples.length ? -Infinity : roomC;
+  samples.forEach((_, k) => {
+    hot = Math.max(hot, tempC[k]!);
+  });
+  const bad = hot > GENERAL_HOT_SURFACE_C;
+  const segs = runsOf(samples, (k) => tempC[k]! > GENERAL_HOT_SURFACE_C);
+  return {
+    id: 'hot-surface',
+    status: bad ? 'fail' : 'pass',
+    title: 'Surfaces too hot to touch',
+    message: bad
+      ? `A surface the animal can reach gets about ${f1(hot)} °C, above the ${f0(GENERAL_HOT_SURFACE_C)} °C general limit for burns (from memory): ${tooHotAdvice(lamps)}.${lamps.length ? ` ${controlAdvice(lamps)}` : ''} Choose a species sheet for its own basking range. ${ESTIMATE_TEMP}`
+      : `The hottest surface the animal can reach is about ${f1(hot)} °C, under the ${f0(GENERAL_HOT_SURFACE_C)} °C general limit for burns (from memory). Choose a species sheet to check it against the species’ basking range. ${ESTIMATE_TEMP}`,
+    numbers: { hotC: hot, limitC: GENERAL_HOT_SURFACE_C },
+    where: segs.length ? { kind: 'segments', segments: segs } : undefined,
+  };
 }

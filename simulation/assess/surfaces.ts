@@ -1,6 +1,7 @@
 /**
  * Reachable surfaces: where an animal can stand or lie — the floor, the tops of perches, ledges and hide
- * roofs. The floor inside a hide counts (it is shaded, and that is the refuge); floor under a ledge or a
+ * roofs; for a species that climbs, also one face of every mesh screen (a lid's underside, the outside of
+ * a wire guard around a bulb), since climbers hang from mesh right under the lamps. The floor inside a hide counts (it is shaded, and that is the refuge); floor under a ledge or a
  * perch does not (it is solid). Foliage is not treated as a surface. Each surface is cut into short pieces
  * and sampled at the middle of each piece, lifted 0.01 cm off the surface.
  */
@@ -13,7 +14,7 @@ export interface SurfaceSample {
   y: number;
   /** 'floor' or the id of the perch, ledge or hide. */
   surfaceId: string;
-  kind: 'floor' | 'perch' | 'ledge' | 'hide';
+  kind: 'floor' | 'perch' | 'ledge' | 'hide' | 'screen';
   /** The piece of surface this sample stands for. */
   piece: Segment;
   /** Length of the piece, cm. */
@@ -48,7 +49,39 @@ function strictlyInsidePolygon(x: number, y: number, xs: number[], ys: number[])
   return true;
 }
 
-export function reachableSurfaces(design: Design, spacing = DEFAULT_SAMPLE_CM): SurfaceSample[] {
+/**
+ * The face of a screen a climber holds on to: the one facing away from the nearest lamp (a lid's
+ * underside under a lamp on top, the outside of a guard around a bulb); with no lamp, the lower face.
+ */
+function climbFace(design: Design, seg: Segment): { nx: number; ny: number } {
+  const len = Math.hypot(seg.x2 - seg.x1, seg.y2 - seg.y1) || 1;
+  let nx = -(seg.y2 - seg.y1) / len;
+  let ny = (seg.x2 - seg.x1) / len;
+  const mx = (seg.x1 + seg.x2) / 2;
+  const my = (seg.y1 + seg.y2) / 2;
+  let best = Infinity;
+  let towards = 0;
+  for (const o of design.objects) {
+    if (o.type !== 'lamp') continue;
+    const d = Math.hypot(o.x - mx, o.y - my);
+    if (d < best) {
+      best = d;
+      towards = (o.x - mx) * nx + (o.y - my) * ny;
+    }
+  }
+  const flip = Number.isFinite(best) ? towards > 0 : ny > 0 || (ny === 0 && nx > 0);
+  if (flip) {
+    nx = -nx;
+    ny = -ny;
+  }
+  return { nx, ny };
+}
+
+export function reachableSurfaces(
+  design: Design,
+  spacing = DEFAULT_SAMPLE_CM,
+  opts: { climbs?: boolean } = {},
+): SurfaceSample[] {
   const { width: W, height: H } = design.enclosure;
   const solids: { id: string; test: (x: number, y: number) => boolean }[] = [];
   const hides: Box[] = [];
@@ -84,6 +117,9 @@ export function reachableSurfaces(design: Design, spacing = DEFAULT_SAMPLE_CM): 
         ny = -ny;
       }
       surfaces.push({ id: o.id, kind: 'perch', seg, nx, ny });
+    } else if (o.type === 'screen' && opts.climbs) {
+      const seg = { x1: o.x1, y1: o.y1, x2: o.x2, y2: o.y2 };
+      surfaces.push({ id: o.id, kind: 'screen', seg, ...climbFace(design, seg) });
     }
   }
   const out: SurfaceSample[] = [];

@@ -32,3 +32,21 @@ export const NO_UV_UVI = 0.05;
 export const ESTIMATE_UV = 'This is an estimate: check it with a UV Index meter at the spot.';
 export const ESTIMATE_TEMP =
   'This is an estimate: check it with a thermometer (an infrared thermometer for surfaces).';
+
+/**
+ * The shared basking spot must be at least this share of the adult total length: about the head and
+ * body, so the whole trunk lies in the heat and the UV at once (a lizard's snout–vent length is roughly
+ * 40–50 % of its total length, from memory; "a basking area at least the animal's body length" is
+ * common practice, no published source).
+ */
+export const BASKING_BODY_SHARE = 0.4;
+
+/** Without an adult length on the sheet, the shared basking spot must still be at least this long, cm (engine's choice). */
+export const BASKING_MIN_CM = 5;
+
+/**
+ * Surfaces hotter than this fail the hot-surface check when no species sheet is chosen: contact burns
+ * are reported in reptiles on surfaces above about 50 °C, and the hottest basking targets of desert
+ * species reach 55 °C (from memory).
+ */
+export const GENERAL_HOT_SURFACE_C = 55;

@@ -23,6 +23,11 @@ export interface Finding {
   message: string;
   numbers: Record<string, number>;
   where?: FindingWhere;
+  /**
+   * The shared-basking finding only: where the species' basking UV range is met, where its basking
+   * surface temperature is met, and where both are (the studio draws the three).
+   */
+  basking?: { uv: Segment[]; heat: Segment[]; both: Segment[] };
 }
 
 export interface Assessment {

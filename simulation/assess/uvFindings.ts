@@ -15,6 +15,7 @@ import type { Finding, FindingStatus } from './types';
 import type { SurfaceSample } from './surfaces';
 import { runsOf } from './surfaces';
 import { UV_REFUGE_UVI, UV_ZONES } from './zones';
+import { baskingUviRange, isShadeZone } from './basking-range';
 import { BASKING_BAND, ESTIMATE_UV, NO_UV_UVI, OVER_MAX_FAIL_FACTOR, REFUGE_MIN_SHARE } from './thresholds';
 import { f0, f1, range1 } from './format';
 
@@ -58,11 +59,11 @@ function stats(samples: SurfaceSample[], uvi: ArrayLike<number>): Stats {
 
 /** Status of the basking UV check alone (also used month by month for ageing). */
 export function baskingStatus(maxUvi: number, zone: SpeciesSheet['uvZone']): FindingStatus {
-  const z = UV_ZONES[zone];
+  const [lo, hi] = baskingUviRange(zone);
   if (maxUvi < NO_UV_UVI) return 'fail';
-  if (maxUvi >= z.max[0] && maxUvi <= z.max[1]) return 'pass';
-  if (maxUvi > z.max[1] * OVER_MAX_FAIL_FACTOR) return 'fail';
-  if (maxUvi < z.max[0] && (maxUvi < z.mean[0] || maxUvi < 0.5 * z.max[0])) return 'fail';
+  if (maxUvi >= lo && maxUvi <= hi) return 'pass';
+  if (maxUvi > hi * OVER_MAX_FAIL_FACTOR) return 'fail';
+  if (maxUvi < lo && (maxUvi < UV_ZONES[zone].mean[0] || maxUvi < 0.5 * lo)) return 'fail';
   return 'attention';
 }
 
@@ -82,18 +83,23 @@ export function uvFindings(
   const st = stats(samples, uvi);
   const out: Finding[] = [];
   const status = baskingStatus(st.max, species.uvZone);
+  const range = baskingUviRange(species.uvZone);
+  const shade = isShadeZone(species.uvZone);
   const baskingSegs = runsOf(samples, (k) => st.max > 0 && uvi[k]! >= BASKING_BAND * st.max);
   let message: string;
   if (st.max < NO_UV_UVI) {
-    message = `No useful UVB reaches any surface the animal can get to (highest UVI ${f1(st.max)}). ${species.name} is a ${z.label} species and needs a basking UVI of ${range1(z.max)}.`;
+    message = `No useful UVB reaches any surface the animal can get to (highest UVI ${f1(st.max)}). ${species.name} is a ${z.label} species and needs a basking UVI of ${range1(range)}.`;
   } else {
     const verdict =
       status === 'pass'
-        ? `within the ${range1(z.max)} range for ${z.label}`
-        : st.max > z.max[1]
-          ? `above the ${range1(z.max)} range for ${z.label} — raise the lamp, add mesh or choose a lower-output lamp`
-          : `below the ${range1(z.max)} range for ${z.label} — lower the lamp, add a reflector, remove mesh in the way or choose a stronger lamp`;
-    message = `The basking spot reaches about UVI ${f1(st.max)} (mean ${f1(st.baskingMean)} across the basking surface), ${verdict}.`;
+        ? `within the ${range1(range)} range for ${z.label}`
+        : st.max > range[1]
+          ? `above the ${range1(range)} range for ${z.label} — raise the lamp, add mesh or choose a lower-output lamp`
+          : `below the ${range1(range)} range for ${z.label} — lower the lamp, add a reflector, remove mesh in the way or choose a stronger lamp`;
+    const method = shade
+      ? ` ${z.label} animals spend most of the day in shade and meet only a low maximum where they bask (the shade method of Ferguson et al. 2010), so the basking spot passes from UVI ${f1(range[0])}, the middle of the zone's mean range.`
+      : '';
+    message = `The basking spot reaches about UVI ${f1(st.max)} (mean ${f1(st.baskingMean)} across the basking surface), ${verdict}.${method}`;
   }
   out.push({
     id: 'basking-uvi',
@@ -104,8 +110,8 @@ export function uvFindings(
       maxUvi: st.max,
       meanUvi: st.baskingMean,
       zone: species.uvZone,
-      zoneMaxLo: z.max[0],
-      zoneMaxHi: z.max[1],
+      zoneMaxLo: range[0],
+      zoneMaxHi: range[1],
       zoneMeanLo: z.mean[0],
       zoneMeanHi: z.mean[1],
     },

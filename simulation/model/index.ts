@@ -7,3 +7,4 @@ export * from './species';
 export * from './resolve';
 export * from './presets';
 export * from './backdrop';
+export * from './control';

@@ -14,6 +14,15 @@ export const speciesSheetSchema = z.strictObject({
   nightMinC: z.number().finite().min(-10).max(60).optional(),
   /** Optional broadband UVB target at the basking spot, µW/cm². */
   uvbTargetUw: range(0, 100000).optional(),
+  /**
+   * Adult total length, nose to tail tip, cm (shelled animals and frogs: their body length). Sizes the
+   * shared basking spot; absent, the shortest one (BASKING_MIN_CM) is asked for.
+   */
+  adultLengthCm: z.number().finite().gt(0).max(1000).optional(),
+  /** Climbs walls and mesh: the underside of every screen becomes a reachable surface. Default false. */
+  climbs: z.boolean().optional(),
+  /** Day length, hours: named in the timer advice for UV lamps. */
+  photoperiodH: range(0, 24).optional(),
 });
 
 export type SpeciesSheet = z.infer<typeof speciesSheetSchema>;
