@@ -47,6 +47,7 @@ const WATT_COST = 0.15;
 const WEIGHT: Record<string, number> = {
   'basking-uvi': 4,
   'hot-spot': 4,
+  'shared-basking': 4,
   'lamp-in-reach': 4,
   'uv-refuge': 2,
 };

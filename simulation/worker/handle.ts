@@ -5,7 +5,7 @@
 import { speciesSheetSchema } from '../model/species';
 import { firstIssue, parseDesign } from '../model/parse';
 import { FieldSolver } from '../fields/solver';
-import { assessWithAgeing } from '../assess/assess';
+import { assess, assessWithAgeing } from '../assess/assess';
 import type { SimRequest, SimResponse } from './protocol';
 
 const now = () => (typeof performance !== 'undefined' ? performance.now() : Date.now());
@@ -34,8 +34,9 @@ export function handleRequest(req: SimRequest, solver: FieldSolver = new FieldSo
     const opts = { cellCm: req.cellCm, addMonths };
     const grid = solver.compute(design, opts);
     const probes = req.probes?.length ? solver.probe(design, req.probes, opts) : undefined;
+    // Without a sheet the safety checks still run (reach, eyes, hot surfaces), so the studio can warn.
     const checked = species ? assessWithAgeing(design, species, opts) : undefined;
-    const assessment = checked?.assessment;
+    const assessment = checked?.assessment ?? assess(design, undefined, opts);
     const until = checked?.monthsUntilUnmet;
     return {
       id,
