@@ -8,6 +8,7 @@ import * as m0006 from './0006-zone-derived-uvb-targets';
 import * as m0007 from './0007-ended-sessions';
 import * as m0008 from './0008-background-jobs';
 import * as m0009 from './0009-lamp-outlooks';
+import * as m0010 from './0010-species-length-climbs-morph';
 
 export type Migration = {
   name: string;
@@ -29,4 +30,5 @@ export const migrations: Migration[] = [
   { name: '0007-ended-sessions', ...m0007 },
   { name: '0008-background-jobs', ...m0008 },
   { name: '0009-lamp-outlooks', ...m0009 },
+  { name: '0010-species-length-climbs-morph', ...m0010 },
 ];

@@ -34,6 +34,12 @@ export class SpeciesSheet extends Model<
   declare nightMinC: number | null;
   declare photoperiodMinH: number | null;
   declare photoperiodMaxH: number | null;
+  /** Adult total length, cm (sizes the shared basking spot). */
+  declare adultLengthCm: number | null;
+  /** Climbs walls and mesh: mesh undersides are reachable surfaces. */
+  declare climbs: CreationOptional<boolean>;
+  /** Albino or hypomelanistic: a lower UV target and a caution. */
+  declare lowMelanin: CreationOptional<boolean>;
   declare notes: string | null;
   declare sourcesJson: string;
   /** The starting sheet this row was copied from (null: written by the organisation). */
@@ -62,6 +68,9 @@ export class SpeciesSheet extends Model<
         nightMinC: { type: DataTypes.FLOAT, allowNull: true },
         photoperiodMinH: { type: DataTypes.FLOAT, allowNull: true },
         photoperiodMaxH: { type: DataTypes.FLOAT, allowNull: true },
+        adultLengthCm: { type: DataTypes.FLOAT, allowNull: true },
+        climbs: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+        lowMelanin: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         notes: { type: DataTypes.TEXT, allowNull: true },
         sourcesJson: { type: DataTypes.TEXT, allowNull: false },
         seedKey: { type: DataTypes.STRING(60), allowNull: true },

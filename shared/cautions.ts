@@ -1,4 +1,5 @@
-import type { Assessment, Design } from '@/simulation';
+import type { Assessment, Design, LampTech } from '@/simulation';
+import { controlSentence, controlSummary, LAMP_TECH_IDS } from '@/simulation';
 
 /**
  * The standing cautions of the product, in plain language, and which of them apply to a design. Shared by
@@ -45,10 +46,8 @@ export const CAUTIONS: Record<CautionId, Caution> = {
   },
   thermostat: {
     id: 'thermostat',
-    title: 'Run every heat source on a thermostat',
-    text:
-      'A dimming thermostat for lamps (an on/off one for emitters and mats), its probe at the basking spot, protects ' +
-      'against overheating on a warm day and against a wrong estimate. Check its setting with a thermometer.',
+    title: 'Control each lamp the way its type allows',
+    text: controlAdviceForAll(),
     source: 'common practice, no published source',
   },
   estimate: {
@@ -62,6 +61,26 @@ export const CAUTIONS: Record<CautionId, Caution> = {
   },
 };
 
+/** The general control advice: every technology grouped by how it may be controlled (LAMP_CONTROL). */
+function controlAdviceForAll(): string {
+  return (
+    controlSummary() +
+    ' Heat from a lamp that is on a timer only is set by its wattage and distance; where the heat needs control, add a ' +
+    'separate thermostat-controlled heat source. A thermostat’s probe belongs at the basking spot; check its setting ' +
+    'with a thermometer.'
+  );
+}
+
+/** The control caution for the technologies in use, with the sheet's day length for the timers. */
+function controlCaution(techs: Set<string>, photoperiodH?: [number, number]): Caution {
+  const known = LAMP_TECH_IDS.filter((t) => techs.has(t));
+  if (known.length === 0) return CAUTIONS.thermostat;
+  const text =
+    known.map((t: LampTech) => controlSentence(t, undefined, photoperiodH)).join(' ') +
+    ' Check every thermostat setting with a thermometer.';
+  return { ...CAUTIONS.thermostat, text };
+}
+
 const UV_TECHS = new Set(['t5', 't8', 'compact', 'mercury-vapour', 'metal-halide', 'led-uvb']);
 
 export type CautionInput = {
@@ -69,6 +88,8 @@ export type CautionInput = {
   assessment?: Pick<Assessment, 'findings'> | null;
   /** Technologies involved when there is no design (a lamp type page, a lamp in the log). */
   techs?: string[];
+  /** The species sheet's day length, hours: the timer advice names it. */
+  photoperiodH?: [number, number] | null;
 };
 
 /** Which cautions apply, and whether the assessment found the matching problem (`urgent`). */
@@ -99,7 +120,10 @@ export function applicableCautions(input: CautionInput): { caution: Caution; urg
   if (uv) out.push({ caution: CAUTIONS['uv-eyes-skin'], urgent: bad('eye-safety') });
   if (heat) {
     out.push({ caution: CAUTIONS.burns, urgent: bad('lamp-in-reach') });
-    out.push({ caution: CAUTIONS.thermostat, urgent: Boolean(hotSpotTooHot) });
+    out.push({
+      caution: controlCaution(techs, input.photoperiodH ?? undefined),
+      urgent: Boolean(hotSpotTooHot),
+    });
     out.push({ caution: CAUTIONS.fire, urgent: false });
   }
   out.push({ caution: CAUTIONS.estimate, urgent: false });

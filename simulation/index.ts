@@ -25,7 +25,7 @@ export {
 } from './assess/zones';
 export type { Assessment, Finding, FindingStatus, FindingWhere, Segment } from './assess/types';
 export { assess, monthsUntilUnmet } from './assess/assess';
-export { baskingUviRange, isShadeZone } from './assess/basking-range';
+export { baskingUviRange, isShadeZone, targetZone, LOW_MELANIN_CAUTION } from './assess/basking-range';
 export { neededBaskingCm } from './assess/sharedBasking';
 export { reachableSurfaces, type SurfaceSample } from './assess/surfaces';
 export * as ASSESSMENT_THRESHOLDS from './assess/thresholds';

@@ -1,3 +1,5 @@
+import { controlSummary } from '@/simulation/model/control';
+
 /** The standing caution on every page: what the numbers are, and who has the last word. */
 export function SafetyNote() {
   return (
@@ -7,8 +9,8 @@ export function SafetyNote() {
           <strong className="font-semibold text-basalt-800">Safety.</strong> Every figure Baskwell shows is an
           estimate: verify it in the enclosure with a UV meter and a thermometer before an animal lives with
           it. UV lamps can injure eyes and skin; lamps within reach can burn, and heat sources can start fires
-          — guard them and run heat through a thermostat. Defer to a reptile-experienced vet, the lamp
-          maker&apos;s instructions and local electrical and fire codes.
+          — guard them, and control each lamp the way its type allows. {controlSummary()} Defer to a
+          reptile-experienced vet, the lamp maker&apos;s instructions and local electrical and fire codes.
         </p>
       </div>
     </footer>

@@ -2,6 +2,7 @@
 
 import { useState, type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
+import { formatLength } from '@/shared/units';
 import { FormActions } from '@/components/ui/FormActions';
 import { Notice } from '@/components/ui/Notice';
 import { card, input } from '@/components/ui/styles';
@@ -154,6 +155,36 @@ export function SpeciesForm({
         />
       </fieldset>
 
+      <fieldset className={`${card} grid gap-4 p-5 sm:grid-cols-2`}>
+        <legend className="px-1 text-lead font-semibold text-basalt-900">The animal</legend>
+        <Field
+          label="Adult total length (cm, nose to tail tip; optional)"
+          inputMode="decimal"
+          value={state.adultLength}
+          onChange={(e) => update({ adultLength: e.target.value })}
+          error={err('adultLengthCm')}
+          hint={
+            Number(state.adultLength) > 0
+              ? `${formatLength(Number(state.adultLength), 'in')}. The basking spot must fit about its head and body.`
+              : 'Sizes the basking spot: UV and heat must meet over about its head and body.'
+          }
+        />
+        <div className="flex flex-col gap-3">
+          <Check
+            label="Climbs walls and mesh"
+            hint="The check then counts the underside of every mesh, lid included, as a place it can reach."
+            checked={state.climbs}
+            onChange={(climbs) => update({ climbs })}
+          />
+          <Check
+            label="Albino or hypomelanistic morph"
+            hint="Less skin pigment: the check aims one UV zone lower and shows a caution."
+            checked={state.lowMelanin}
+            onChange={(lowMelanin) => update({ lowMelanin })}
+          />
+        </div>
+      </fieldset>
+
       <fieldset className={`${card} p-5`}>
         <legend className="px-1 text-lead font-semibold text-basalt-900">Notes</legend>
         <label htmlFor="notes" className="sr-only">
@@ -220,5 +251,32 @@ function RangeInputs({
       {hint && <p className="mt-1 text-caption text-basalt-500">{hint}</p>}
       {error && <p className="mt-1 text-caption font-medium text-ember-700">{error}</p>}
     </fieldset>
+  );
+}
+
+function Check({
+  label,
+  hint,
+  checked,
+  onChange,
+}: {
+  label: string;
+  hint: string;
+  checked: boolean;
+  onChange: (v: boolean) => void;
+}) {
+  return (
+    <label className="flex items-start gap-2 text-body text-basalt-800">
+      <input
+        type="checkbox"
+        className="mt-1"
+        checked={checked}
+        onChange={(e) => onChange(e.target.checked)}
+      />
+      <span>
+        {label}
+        <span className="block text-caption text-basalt-500">{hint}</span>
+      </span>
+    </label>
   );
 }

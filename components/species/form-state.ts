@@ -20,6 +20,10 @@ export type SpeciesFormState = {
   temps: Record<TempRangeField, Pair>;
   nightMin: string;
   photoperiodH: Pair;
+  /** Adult total length, cm, as typed. */
+  adultLength: string;
+  climbs: boolean;
+  lowMelanin: boolean;
   notes: string;
   sources: SpeciesSource[];
 };
@@ -43,6 +47,9 @@ export function initialState(sheet: SpeciesSheetDto | null, unit: TempUnit): Spe
     },
     nightMin: sheet?.nightMinC != null ? show(sheet.nightMinC, unit) : '',
     photoperiodH: pairOf(sheet?.photoperiodH ?? null),
+    adultLength: sheet?.adultLengthCm != null ? String(sheet.adultLengthCm) : '',
+    climbs: sheet?.climbs ?? false,
+    lowMelanin: sheet?.lowMelanin ?? false,
     notes: sheet?.notes ?? '',
     sources: sheet?.sources ?? [{ citation: '', confidence: '', covers: [] }],
   };
@@ -98,6 +105,9 @@ export function toPayload(s: SpeciesFormState): Record<keyof SpeciesInput, unkno
     coolAirC: temp(s.temps.coolAirC),
     nightMinC: toC(s.nightMin, s.unit),
     photoperiodH: optionalPair(s.photoperiodH, num),
+    adultLengthCm: num(s.adultLength),
+    climbs: s.climbs,
+    lowMelanin: s.lowMelanin,
     notes: s.notes.trim() === '' ? null : s.notes,
     sources: s.sources.filter((x) => x.citation.trim() !== '' || x.confidence.trim() !== ''),
   };

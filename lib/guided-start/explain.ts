@@ -1,5 +1,5 @@
 import type { Finding } from '@/simulation';
-import { UV_ZONES } from '@/simulation';
+import { controlAdvice, neededBaskingCm, UV_ZONES, type SpeciesSheet } from '@/simulation';
 import { targetWarning } from '@/lib/species/consistency';
 import { baskingZone, hideBox, lampY, type EnclosureInput, type Lid } from './layout';
 import type { Proposal } from './propose';
@@ -18,7 +18,10 @@ const num = (f: Finding | undefined, k: string) => f?.numbers[k];
 
 export function explain(
   p: Proposal,
-  species: { name: string; uvZone: 1 | 2 | 3 | 4; uvbTargetUw?: [number, number] },
+  species: Pick<
+    SpeciesSheet,
+    'name' | 'uvZone' | 'uvbTargetUw' | 'adultLengthCm' | 'climbs' | 'photoperiodH'
+  >,
   enc: EnclosureInput,
   lid: Lid,
 ): Explanation {
@@ -29,13 +32,15 @@ export function explain(
   const cool = find('cool-end');
   const refuge = find('uv-refuge');
   const zone = UV_ZONES[species.uvZone];
-  const uvY = lampY(enc, lid, c.mount, c.uv.form);
+  const uvY = lampY(enc, lid, c.mount, c.uv.form, c.raiseCm);
   const where =
     c.mount === 'inside'
       ? 'hung inside, just under the lid'
-      : lid === 'open'
-        ? 'on a stand above the open top'
-        : `resting on the ${lid} lid`;
+      : c.mount === 'raised'
+        ? `on a frame about ${f0(uvY - enc.height)} cm above the ${lid} lid`
+        : lid === 'open'
+          ? 'on a stand above the open top'
+          : `resting on the ${lid} lid`;
   const out: Explanation = [];
 
   out.push({
@@ -43,7 +48,7 @@ export function explain(
     text:
       `${c.uv.name}${c.reflector ? ' with a reflector' : ''}, ${where}, over the warm side. ` +
       `The basking perch top is ${f1(c.perchTopCm)} cm above the floor, about ${f0(uvY - c.perchTopCm)} cm below the lamp` +
-      (lid === 'mesh' && c.mount === 'above' ? '; the mesh between them takes part of the UVB.' : '.'),
+      (lid === 'mesh' && c.mount !== 'inside' ? '; the mesh between them takes part of the UVB.' : '.'),
   });
   const maxUvi = num(basking, 'maxUvi');
   if (maxUvi !== undefined) {
@@ -63,11 +68,38 @@ export function explain(
         (c.heat
           ? `${c.heat.name} beside the UV lamp over the same perch. `
           : `No separate heat lamp: the UV lamp (${c.uv.name}) gives the basking heat itself. `) +
-        `The hottest surface the animal can reach is about ${f1(hotC)} °C (the sheet asks ${f1(num(hot, 'targetLo')!)}–${f1(num(hot, 'targetHi')!)} °C). Run every heat source on a thermostat.`,
+        `The hottest surface the animal can reach is about ${f1(hotC)} °C (the sheet asks ${f1(num(hot, 'targetLo')!)}–${f1(num(hot, 'targetHi')!)} °C).`,
     });
   }
+  const shared = find('shared-basking');
+  if (shared) {
+    out.push({
+      heading: 'One basking spot',
+      text:
+        `The UV lamp and the heat ${c.heat ? 'lamp hang' : 'come from one lamp hung'} over the same perch, because an animal that basks for heat takes its UV where it is warm (Baines et al. 2016). ` +
+        `About ${f0(num(shared, 'overlapCm') ?? 0)} cm of the perch gets both the basking UV and the basking temperature; ` +
+        `${species.name} needs about ${f0(num(shared, 'neededCm') ?? 0)} cm${species.adultLengthCm ? `, roughly its body at ${f0(species.adultLengthCm)} cm long` : ''}.`,
+    });
+  }
+  if (species.climbs && lid === 'mesh') {
+    out.push({
+      heading: 'Climbing',
+      text:
+        `${species.name} climbs, so it can hang from the mesh lid right under the lamps: the check counts the underside of the mesh as a surface it can reach, ` +
+        (c.mount === 'raised'
+          ? `and the lamps stand on a frame about ${f0(lampY(enc, lid, c.mount, 'bulb', c.raiseCm) - enc.height)} cm above the lid so the mesh stays out of their reach and below the basking UV limit.`
+          : 'and the lamps hang where the mesh stays out of their reach.'),
+    });
+  }
+  out.push({
+    heading: 'Lamp control',
+    text: controlAdvice(
+      [{ tech: c.uv.tech, name: c.uv.name }, ...(c.heat ? [{ tech: c.heat.tech, name: c.heat.name }] : [])],
+      species.photoperiodH,
+    ),
+  });
   const hide = hideBox(enc);
-  const zoneX = baskingZone(enc).x;
+  const zoneX = baskingZone(enc, neededBaskingCm(species)).x;
   out.push({
     heading: 'Refuge',
     text:

@@ -1,5 +1,5 @@
 import type { Design, DesignObject } from '@/simulation';
-import { DESIGN_FORMAT, DESIGN_VERSION, GOOD_REFLECTOR_GAIN } from '@/simulation';
+import { ASSESSMENT_THRESHOLDS, DESIGN_FORMAT, DESIGN_VERSION, GOOD_REFLECTOR_GAIN } from '@/simulation';
 import type { LampTypeDto } from '@/lib/lamp-types/schema';
 import { lampObjectFromType } from '@/lib/lamp-types/to-engine';
 
@@ -10,8 +10,11 @@ import { lampObjectFromType } from '@/lib/lamp-types/to-engine';
  */
 
 export type Lid = 'mesh' | 'glass' | 'open';
-/** 'above': resting on the lid (or on a stand over an open top); 'inside': hung under the lid. */
-export type Mount = 'above' | 'inside';
+/**
+ * 'above': resting on the lid (or on a stand over an open top); 'inside': hung under the lid;
+ * 'raised': on a frame well above a mesh lid, for animals that climb the mesh.
+ */
+export type Mount = 'above' | 'inside' | 'raised';
 
 export type EnclosureInput = { width: number; height: number; depth: number; roomTempC: number };
 
@@ -21,6 +24,8 @@ export type Candidate = {
   reflector: boolean;
   heat: LampTypeDto | null;
   mount: Mount;
+  /** 'raised' only: how far above the lid the lamps stand, cm. */
+  raiseCm?: number;
   /** Height of the perch's top surface above the floor, cm. */
   perchTopCm: number;
 };
@@ -42,14 +47,30 @@ export const HIDE_ID = 'cool-hide';
 const clamp = (v: number, lo: number, hi: number) => Math.min(hi, Math.max(lo, v));
 const round1 = (v: number) => Math.round(v * 10) / 10;
 
-export function lampY(enc: EnclosureInput, lid: Lid, mount: Mount, form: 'tube' | 'bulb'): number {
+/**
+ * On a frame over a mesh lid that a climber can hang from: the lamp stays beyond the reach (15 cm) and
+ * eye (20 cm) distances of the engine's safety checks from the mesh (common practice, no published source).
+ */
+export const RAISED_ABOVE_LID_CM = [ASSESSMENT_THRESHOLDS.UV_EYE_CM + 2, 30, 40, 55] as const;
+
+export function lampY(
+  enc: EnclosureInput,
+  lid: Lid,
+  mount: Mount,
+  form: 'tube' | 'bulb',
+  raiseCm: number = RAISED_ABOVE_LID_CM[0],
+): number {
   if (mount === 'inside') return enc.height - BELOW_LID_CM[form];
+  if (mount === 'raised') return enc.height + raiseCm;
   return enc.height + (lid === 'open' ? ABOVE_OPEN_CM : ABOVE_LID_CM[form]);
 }
 
-/** The basking zone on the warm side: perch centre and width. */
-export function baskingZone(enc: EnclosureInput): { x: number; width: number } {
-  const width = clamp(enc.width * 0.25, 15, 35);
+/**
+ * The basking zone on the warm side: perch centre and width. The perch is at least as long as the
+ * shared basking spot the species needs (`neededCm`), with a little to spare.
+ */
+export function baskingZone(enc: EnclosureInput, neededCm = 0): { x: number; width: number } {
+  const width = Math.min(Math.max(clamp(enc.width * 0.25, 15, 35), neededCm + 6), enc.width * 0.6);
   return {
     x: round1(clamp(enc.width * 0.7, width / 2 + 2, enc.width - width / 2 - 2)),
     width: round1(width),
@@ -66,8 +87,8 @@ export function hideBox(enc: EnclosureInput): { x: number; y: number; width: num
 }
 
 /** Where the UV lamp's centre goes (a tube is kept inside the enclosure); null when it does not fit. */
-export function uvLampX(enc: EnclosureInput, uv: LampTypeDto, heat: boolean): number | null {
-  const zone = baskingZone(enc);
+export function uvLampX(enc: EnclosureInput, uv: LampTypeDto, heat: boolean, neededCm = 0): number | null {
+  const zone = baskingZone(enc, neededCm);
   if (uv.form === 'tube') {
     const half = (uv.lengthCm ?? 0) / 2;
     if (2 * half > enc.width - 2) return null;
@@ -76,8 +97,8 @@ export function uvLampX(enc: EnclosureInput, uv: LampTypeDto, heat: boolean): nu
   return round1(heat ? zone.x - BULB_SPACING_CM / 2 : zone.x);
 }
 
-export function heatLampX(enc: EnclosureInput, uv: LampTypeDto): number {
-  const zone = baskingZone(enc);
+export function heatLampX(enc: EnclosureInput, uv: LampTypeDto, neededCm = 0): number {
+  const zone = baskingZone(enc, neededCm);
   return round1(uv.form === 'tube' ? zone.x : zone.x + BULB_SPACING_CM / 2);
 }
 
@@ -95,14 +116,19 @@ function lidObject(enc: EnclosureInput, lid: Lid): DesignObject[] {
 }
 
 /** The lamps and lid only (no perch): what the coarse search probes. */
-export function lampsOnly(enc: EnclosureInput, lid: Lid, c: Omit<Candidate, 'perchTopCm'>): Design | null {
-  const x = uvLampX(enc, c.uv, c.heat !== null);
+export function lampsOnly(
+  enc: EnclosureInput,
+  lid: Lid,
+  c: Omit<Candidate, 'perchTopCm'>,
+  neededCm = 0,
+): Design | null {
+  const x = uvLampX(enc, c.uv, c.heat !== null, neededCm);
   if (x === null) return null;
   const objects: DesignObject[] = [
     lampObjectFromType(c.uv, {
       id: UV_LAMP_ID,
       x,
-      y: lampY(enc, lid, c.mount, c.uv.form),
+      y: lampY(enc, lid, c.mount, c.uv.form, c.raiseCm),
       reflectorGain: c.reflector ? GOOD_REFLECTOR_GAIN : undefined,
     }),
   ];
@@ -110,8 +136,8 @@ export function lampsOnly(enc: EnclosureInput, lid: Lid, c: Omit<Candidate, 'per
     objects.push(
       lampObjectFromType(c.heat, {
         id: HEAT_LAMP_ID,
-        x: heatLampX(enc, c.uv),
-        y: lampY(enc, lid, c.mount, 'bulb'),
+        x: heatLampX(enc, c.uv, neededCm),
+        y: lampY(enc, lid, c.mount, 'bulb', c.raiseCm),
       }),
     );
   }
@@ -125,10 +151,10 @@ export function lampsOnly(enc: EnclosureInput, lid: Lid, c: Omit<Candidate, 'per
 }
 
 /** The whole proposed design: lamps, lid, the basking perch and a hide on the cool side. */
-export function buildDesign(enc: EnclosureInput, lid: Lid, c: Candidate): Design | null {
-  const base = lampsOnly(enc, lid, c);
+export function buildDesign(enc: EnclosureInput, lid: Lid, c: Candidate, neededCm = 0): Design | null {
+  const base = lampsOnly(enc, lid, c, neededCm);
   if (!base) return null;
-  const zone = baskingZone(enc);
+  const zone = baskingZone(enc, neededCm);
   const y = round1(c.perchTopCm - PERCH_THICKNESS_CM / 2);
   const hide = hideBox(enc);
   base.objects.push(

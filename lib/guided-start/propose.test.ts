@@ -39,7 +39,16 @@ describe('guided start proposal, for every starting species in its usual enclosu
 
       // The things a keeper most needs are met for every starting species.
       const status = (id: string) => p.assessment.findings.find((f) => f.id === id)?.status;
-      for (const id of ['basking-uvi', 'uv-refuge', 'uv-gradient', 'hot-spot', 'cool-end', 'shared-basking', 'lamp-in-reach', 'eye-safety']) {
+      for (const id of [
+        'basking-uvi',
+        'uv-refuge',
+        'uv-gradient',
+        'hot-spot',
+        'cool-end',
+        'shared-basking',
+        'lamp-in-reach',
+        'eye-safety',
+      ]) {
         expect(status(id), `${id}: ${p.assessment.findings.find((f) => f.id === id)?.message}`).toBe('pass');
       }
 

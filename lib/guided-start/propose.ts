@@ -1,4 +1,13 @@
-import { ASSESSMENT_THRESHOLDS, assess, probe, UV_ZONES, type Assessment, type Design } from '@/simulation';
+import {
+  ASSESSMENT_THRESHOLDS,
+  assess,
+  baskingUviRange,
+  neededBaskingCm,
+  probe,
+  targetZone,
+  type Assessment,
+  type Design,
+} from '@/simulation';
 import type { SpeciesSheet as EngineSpeciesSheet } from '@/simulation';
 import type { LampTypeDto } from '@/lib/lamp-types/schema';
 import {
@@ -6,6 +15,7 @@ import {
   buildDesign,
   lampsOnly,
   lampY,
+  RAISED_ABOVE_LID_CM,
   uvLampX,
   type Candidate,
   type EnclosureInput,
@@ -38,7 +48,7 @@ export type Proposal = {
 export const PERCH_STEP_CM = 2.5;
 const LOWEST_PERCH_TOP_CM = 5;
 /** How many of the cheaply scored candidates get a full assessment. */
-const FULL_CHECKS = 10;
+const FULL_CHECKS = 40;
 
 const LAMP_COST = 0.05;
 const WATT_COST = 0.15;
@@ -70,11 +80,11 @@ function linearOutside(v: number, lo: number, hi: number): number {
 
 /** Cheap score of one perch height from the probed values (lower is better). */
 export function quickScore(species: EngineSpeciesSheet, uvi: number, uvb: number, tempC: number): number {
-  const z = UV_ZONES[species.uvZone];
+  const [ulo, uhi] = baskingUviRange(targetZone(species));
   const [tlo, thi] = species.baskingSurfaceC;
-  let s = 3 * logOutside(uvi, z.max[0], z.max[1]) + linearOutside(tempC, tlo, thi) / 3;
+  let s = 3 * logOutside(uvi, ulo, uhi) + linearOutside(tempC, tlo, thi) / 3;
   // Prefer the middle of each range (geometric for UV), as a tie-breaker.
-  s += 0.1 * Math.abs(Math.log(Math.max(uvi, 1e-3) / Math.sqrt(z.max[0] * z.max[1])));
+  s += 0.1 * Math.abs(Math.log(Math.max(uvi, 1e-3) / Math.sqrt(ulo * uhi)));
   s += (0.1 * Math.abs(tempC - (tlo + thi) / 2)) / Math.max(1, thi - tlo);
   if (species.uvbTargetUw) s += 0.5 * logOutside(uvb, species.uvbTargetUw[0], species.uvbTargetUw[1]);
   return s;
@@ -84,16 +94,20 @@ export function assessmentCost(a: Assessment): number {
   return a.findings.reduce((sum, f) => sum + (WEIGHT[f.id] ?? 1) * STATUS_COST[f.status], 0);
 }
 
-function mountsFor(lid: Lid): Mount[] {
+function mountsFor(lid: Lid, climbs: boolean): { mount: Mount; raiseCm?: number }[] {
   // Glass passes no UVB (Duarte et al. 2009), so UV lamps over a glass lid are pointless.
-  return lid === 'glass' ? ['inside'] : ['above', 'inside'];
+  if (lid === 'glass') return [{ mount: 'inside' }];
+  // A climber hangs from a mesh lid: lamps on it or under it are within its reach, so they stand on a
+  // frame above it, high enough that the mesh underside stays within the species' ranges.
+  if (lid === 'mesh' && climbs) return RAISED_ABOVE_LID_CM.map((raiseCm) => ({ mount: 'raised', raiseCm }));
+  return [{ mount: 'above' }, { mount: 'inside' }];
 }
 
 /** Highest allowed perch top under the lamps: out of reach of hot lamps, and of UV lamps for the eyes. */
 function highestPerchTop(enc: EnclosureInput, lid: Lid, c: Omit<Candidate, 'perchTopCm'>): number {
   const { LAMP_REACH_CM, UV_EYE_CM } = ASSESSMENT_THRESHOLDS;
-  const ys = [lampY(enc, lid, c.mount, c.uv.form) - UV_EYE_CM];
-  if (c.heat) ys.push(lampY(enc, lid, c.mount, 'bulb') - LAMP_REACH_CM);
+  const ys = [lampY(enc, lid, c.mount, c.uv.form, c.raiseCm) - UV_EYE_CM];
+  if (c.heat) ys.push(lampY(enc, lid, c.mount, 'bulb', c.raiseCm) - LAMP_REACH_CM);
   // Over a lid the animal can still climb to the mesh: keep the basking spot well below it.
   return Math.min(enc.height - LAMP_REACH_CM, ...ys);
 }
@@ -104,28 +118,48 @@ function coarseSearch(input: ProposalInput, lampTypes: LampTypeDto[]): Scored[] 
   const { enclosure: enc, lid, species } = input;
   const uvTypes = lampTypes.filter((t) => UV_TECHS.has(t.tech) && t.uvbAt30 > 0);
   const heatTypes: (LampTypeDto | null)[] = [null, ...lampTypes.filter((t) => HEAT_ONLY.has(t.tech))];
-  const zone = baskingZone(enc);
+  const needed = neededBaskingCm(species);
+  const zone = baskingZone(enc, needed);
+  // The shared basking spot must hold across its whole length: score its middle and both ends.
+  const half = Math.max(0, Math.min(needed, zone.width) / 2 - 1);
+  const xs = [zone.x - half, zone.x, zone.x + half];
+  const climbsMesh = species.climbs === true && lid === 'mesh';
+  const [, uhi] = baskingUviRange(targetZone(species));
   const out: Scored[] = [];
   for (const uv of uvTypes) {
     for (const reflector of uv.form === 'tube' ? [false, true] : [false]) {
-      for (const mount of mountsFor(lid)) {
+      for (const { mount, raiseCm } of mountsFor(lid, species.climbs === true)) {
         for (const heat of heatTypes) {
-          const base = { uv, reflector, heat, mount };
-          const design = lampsOnly(enc, lid, base);
-          if (!design || uvLampX(enc, uv, heat !== null) === null) continue;
+          const base = { uv, reflector, heat, mount, raiseCm };
+          const design = lampsOnly(enc, lid, base, needed);
+          if (!design || uvLampX(enc, uv, heat !== null, needed) === null) continue;
           const top = highestPerchTop(enc, lid, base);
           const heights: number[] = [];
           for (let h = LOWEST_PERCH_TOP_CM; h <= top + 1e-9; h += PERCH_STEP_CM) heights.push(h);
           if (heights.length === 0) continue;
-          const points = heights.map((h) => ({ x: zone.x, y: h + 0.01 }));
+          const points = heights.flatMap((h) => xs.map((x) => ({ x, y: h + 0.01 })));
+          // A climber reaches the underside of the mesh lid: it must not be over the top there.
+          if (climbsMesh) points.push({ x: zone.x, y: enc.height - 0.01 });
           const values = probe(design, points, { cellCm: 2 });
-          values.forEach((v, k) => {
-            const perchTopCm = heights[k]!;
+          const lidPenalty = climbsMesh
+            ? (() => {
+                const v = values[values.length - 1]!;
+                return (
+                  3 * Math.log(Math.max(1, v.uvi / uhi)) +
+                  Math.max(0, v.tempC - species.baskingSurfaceC[1]) / 3
+                );
+              })()
+            : 0;
+          heights.forEach((perchTopCm, k) => {
+            const spread = xs.map((_, i) => {
+              const p = values[k * xs.length + i]!;
+              return quickScore(species, p.uvi, p.uvb, p.tempC);
+            });
             // Fewer lamps and fewer watts are kinder to the animal, the air and the bill.
             const extra = (heat ? LAMP_COST : 0) + (WATT_COST * (uv.watts + (heat?.watts ?? 0))) / 100;
             out.push({
               candidate: { ...base, perchTopCm },
-              quick: quickScore(species, v.uvi, v.uvb, v.tempC) + extra,
+              quick: Math.max(...spread) + lidPenalty + extra,
             });
           });
         }
@@ -143,7 +177,7 @@ export function propose(input: ProposalInput, lampTypes: LampTypeDto[]): Proposa
   const ranked = coarseSearch(input, lampTypes);
   let best: (Proposal & { cost: number; quick: number }) | null = null;
   for (const { candidate, quick } of ranked.slice(0, FULL_CHECKS)) {
-    const design = buildDesign(input.enclosure, input.lid, candidate);
+    const design = buildDesign(input.enclosure, input.lid, candidate, neededBaskingCm(input.species));
     if (!design) continue;
     const assessment = assess(design, input.species, { cellCm: 2 });
     const cost = assessmentCost(assessment);

@@ -59,6 +59,10 @@ const text = (what: string, max: number) =>
     .min(1, `${what} is required.`)
     .max(max, `${what} can be at most ${max} characters.`);
 
+const adultLength = finite('The adult length')
+  .min(1, 'The adult length must be at least 1 cm.')
+  .max(1000, 'The adult length must be at most 1000 cm.');
+
 const fields = {
   commonName: text('The common name', 120),
   scientificName: text('The scientific name', 160),
@@ -77,6 +81,9 @@ const fields = {
     .nullable()
     .default(null),
   photoperiodH: range('The photoperiod', 'hours', 0, 24).nullable().default(null),
+  adultLengthCm: adultLength.nullable().default(null),
+  climbs: z.boolean({ error: 'Climbs must be yes or no.' }).default(false),
+  lowMelanin: z.boolean({ error: 'Albino or hypomelanistic must be yes or no.' }).default(false),
   notes: textSchema().trim().max(5000, 'Notes can be at most 5000 characters.').nullable().default(null),
   sources: z.array(sourceSchema).max(20, 'At most 20 sources.').default([]),
 };
@@ -121,6 +128,9 @@ export const speciesPatchSchema = z
     coolAirC: fields.coolAirC,
     nightMinC: finite('The night minimum').min(0).max(40).nullable(),
     photoperiodH: range('The photoperiod', 'hours', 0, 24).nullable(),
+    adultLengthCm: adultLength.nullable(),
+    climbs: z.boolean({ error: 'Climbs must be yes or no.' }),
+    lowMelanin: z.boolean({ error: 'Albino or hypomelanistic must be yes or no.' }),
     notes: textSchema().trim().max(5000, 'Notes can be at most 5000 characters.').nullable(),
     sources: z.array(sourceSchema).max(20, 'At most 20 sources.'),
   })

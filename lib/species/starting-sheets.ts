@@ -62,6 +62,9 @@ export const STARTING_SHEETS: readonly StartingSheet[] = [
     coolAirC: r(22, 28),
     nightMinC: 18,
     photoperiodH: r(12, 14),
+    adultLengthCm: null,
+    climbs: false,
+    lowMelanin: false,
     notes:
       'Diurnal desert and dry-woodland lizard that basks in full sun for long periods. Give a wide, bright basking area with a gradient to shade.',
     sources: [zoneFromMemory('open-country, mid-day sun basker'), TEMPERATURES_FROM_MEMORY, METER_TARGET],
@@ -77,6 +80,9 @@ export const STARTING_SHEETS: readonly StartingSheet[] = [
     coolAirC: r(21, 26),
     nightMinC: 18,
     photoperiodH: r(12, 14),
+    adultLengthCm: null,
+    climbs: false,
+    lowMelanin: false,
     notes:
       'Crepuscular ground dweller of rocky scrub; rests in hides by day and takes warmth from warm surfaces. Low-level UVB with plenty of shade and hides.',
     sources: [zoneFromMemory('crepuscular, shade dweller'), TEMPERATURES_FROM_MEMORY],
@@ -92,6 +98,9 @@ export const STARTING_SHEETS: readonly StartingSheet[] = [
     coolAirC: r(20, 24),
     nightMinC: 18,
     photoperiodH: r(12, 12),
+    adultLengthCm: null,
+    climbs: false,
+    lowMelanin: false,
     notes:
       'Arboreal, crepuscular gecko of humid forest. Sensitive to heat: keep air below about 28 °C. Dense planting for shade.',
     sources: [zoneFromMemory('crepuscular forest dweller'), TEMPERATURES_FROM_MEMORY, METER_TARGET],
@@ -107,6 +116,9 @@ export const STARTING_SHEETS: readonly StartingSheet[] = [
     coolAirC: r(22, 26),
     nightMinC: 15,
     photoperiodH: r(12, 12),
+    adultLengthCm: null,
+    climbs: false,
+    lowMelanin: false,
     notes:
       'Arboreal; basks on branches in partial sun and moves into foliage to cool. Usually kept in mesh enclosures; a lamp above mesh loses part of its UVB.',
     sources: [zoneFromMemory('partial-sun basker in foliage'), TEMPERATURES_FROM_MEMORY],
@@ -122,6 +134,9 @@ export const STARTING_SHEETS: readonly StartingSheet[] = [
     coolAirC: r(21, 25),
     nightMinC: 18,
     photoperiodH: r(12, 14),
+    adultLengthCm: null,
+    climbs: false,
+    lowMelanin: false,
     notes:
       'Crepuscular colubrid; basks occasionally at the edge of cover. Low-level UVB with hides at both ends. Escape-prone: secure lids.',
     sources: [zoneFromMemory('crepuscular, occasional basker'), TEMPERATURES_FROM_MEMORY],
@@ -137,6 +152,9 @@ export const STARTING_SHEETS: readonly StartingSheet[] = [
     coolAirC: r(24, 27),
     nightMinC: 22,
     photoperiodH: r(12, 12),
+    adultLengthCm: null,
+    climbs: false,
+    lowMelanin: false,
     notes:
       'Nocturnal and crepuscular; spends the day in burrows. Low-level UVB with secure hides on both sides. Guard heat sources: snakes burn easily on lamps and emitters.',
     sources: [zoneFromMemory('nocturnal, shade dweller'), TEMPERATURES_FROM_MEMORY],
@@ -152,6 +170,9 @@ export const STARTING_SHEETS: readonly StartingSheet[] = [
     coolAirC: r(24, 28),
     nightMinC: 22,
     photoperiodH: r(12, 12),
+    adultLengthCm: null,
+    climbs: false,
+    lowMelanin: false,
     notes:
       'Large arboreal lizard that basks high in the canopy. Needs a very tall enclosure; the basking branch should be within the UV lamp’s reach.',
     sources: [zoneFromMemory('open or partial-sun basker in the canopy'), TEMPERATURES_FROM_MEMORY],
@@ -167,6 +188,9 @@ export const STARTING_SHEETS: readonly StartingSheet[] = [
     coolAirC: r(22, 26),
     nightMinC: 18,
     photoperiodH: r(12, 14),
+    adultLengthCm: null,
+    climbs: false,
+    lowMelanin: false,
     notes:
       'Diurnal ground dweller of open woodland and grassland; basks in the morning and forages in the open. Some keepers treat it as a zone 2 species.',
     sources: [zoneFromMemory('morning basker in open country'), TEMPERATURES_FROM_MEMORY],
@@ -182,6 +206,9 @@ export const STARTING_SHEETS: readonly StartingSheet[] = [
     coolAirC: r(24, 29),
     nightMinC: 18,
     photoperiodH: r(12, 14),
+    adultLengthCm: null,
+    climbs: false,
+    lowMelanin: false,
     notes:
       'Desert lizard that basks on hot rock in full sun and retreats to burrows. Needs an intense, hot basking spot and a dry enclosure.',
     sources: [zoneFromMemory('desert, mid-day sun basker'), TEMPERATURES_FROM_MEMORY, METER_TARGET],
@@ -197,6 +224,9 @@ export const STARTING_SHEETS: readonly StartingSheet[] = [
     coolAirC: r(23, 27),
     nightMinC: 20,
     photoperiodH: r(12, 14),
+    adultLengthCm: null,
+    climbs: false,
+    lowMelanin: false,
     notes:
       'Aquatic turtle that hauls out to bask. The basking platform is the basking zone; water temperature (about 24–26 °C, from memory) is not modelled here.',
     sources: [zoneFromMemory('aquatic, open basker'), TEMPERATURES_FROM_MEMORY],
@@ -212,6 +242,9 @@ export const STARTING_SHEETS: readonly StartingSheet[] = [
     coolAirC: r(20, 24),
     nightMinC: 12,
     photoperiodH: r(12, 14),
+    adultLengthCm: null,
+    climbs: false,
+    lowMelanin: false,
     notes:
       'Mediterranean tortoise of scrub and open woodland; basks in the morning sun. Outdoor time in warm weather is best; brumation is not covered by this sheet.',
     sources: [zoneFromMemory('open or partial-sun basker'), TEMPERATURES_FROM_MEMORY],
@@ -227,6 +260,9 @@ export const STARTING_SHEETS: readonly StartingSheet[] = [
     coolAirC: r(22, 25),
     nightMinC: 18,
     photoperiodH: r(12, 12),
+    adultLengthCm: null,
+    climbs: false,
+    lowMelanin: false,
     notes:
       'Arboreal frog that rests exposed on branches by day. Amphibian skin dries and burns easily: keep heat gentle, keep lamps out of reach, and give shaded, humid refuges.',
     sources: [zoneFromMemory('partial-sun, occasional basker'), TEMPERATURES_FROM_MEMORY],

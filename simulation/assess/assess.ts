@@ -17,6 +17,7 @@ import { heatFindings, heatLamps } from './heatFindings';
 import { hotSurfaceFinding, safetyFindings } from './safetyFindings';
 import { sharedBaskingFinding } from './sharedBasking';
 import { depthFindings } from './depthFindings';
+import { targetZone } from './basking-range';
 
 const RANK: Record<FindingStatus, number> = { pass: 0, attention: 1, fail: 2 };
 
@@ -104,7 +105,7 @@ export function monthsUntilUnmet(design: Design, species: SpeciesSheet, maxMonth
 function monthsSampled(s: Sampled, species: SpeciesSheet, maxMonths: number): number | null {
   for (let m = 0; m <= maxMonths; m++) {
     const { uvi } = combineUv(s, m);
-    if (baskingStatus(maxReachableUvi(uvi), species.uvZone) !== 'pass') return m;
+    if (baskingStatus(maxReachableUvi(uvi), targetZone(species)) !== 'pass') return m;
   }
   return null;
 }

@@ -18,3 +18,16 @@ export function baskingUviRange(zone: UvZone): [number, number] {
   if (!isShadeZone(zone)) return z.max;
   return [Math.round(((z.mean[0] + z.mean[1]) / 2) * 100) / 100, z.max[1]];
 }
+
+/**
+ * The zone a sheet is judged by: an albino or hypomelanistic animal has little melanin to shield its
+ * skin and eyes, so it is aimed one zone lower (zone 1 stays zone 1) — common practice, no published
+ * source.
+ */
+export function targetZone(species: { uvZone: UvZone; lowMelanin?: boolean }): UvZone {
+  return species.lowMelanin ? (Math.max(1, species.uvZone - 1) as UvZone) : species.uvZone;
+}
+
+export const LOW_MELANIN_CAUTION =
+  'This sheet is for an albino or hypomelanistic morph: with little skin pigment it is aimed one UV zone lower. ' +
+  'Watch for closed eyes or reddened skin, give plenty of shade, and ask a reptile-experienced vet (common practice, no published source).';

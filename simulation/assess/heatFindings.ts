@@ -20,7 +20,10 @@ function rangeStatus(v: number, [lo, hi]: [number, number]): FindingStatus {
 }
 
 /** A lamp as the texts name it: its own name, else its id, with its technology. */
-export function lampForText(l: { id: string; name?: string; tech: LampTech }): { tech: LampTech; name: string } {
+export function lampForText(l: { id: string; name?: string; tech: LampTech }): {
+  tech: LampTech;
+  name: string;
+} {
   return { tech: l.tech, name: `“${l.name || l.id}” (${lowerLabel(LAMP_TECHS[l.tech].label)})` };
 }
 

@@ -84,7 +84,9 @@ export function safetyFindings(
   opts: { climbs?: boolean } = {},
 ): Finding[] {
   const near = unguardedDistances(design, samples, opts);
-  const guard = opts.climbs ? 'glass guard (mesh is no guard for a climber: it holds on to the mesh)' : 'mesh or glass guard';
+  const guard = opts.climbs
+    ? 'glass guard (mesh is no guard for a climber: it holds on to the mesh)'
+    : 'mesh or glass guard';
   const reach = near.filter((n) => n.distance < LAMP_REACH_CM);
   const hotLamps = reach.filter(
     (n) => n.heat && design.objects.some((o) => o.id === n.id && o.type === 'lamp' && o.form === 'bulb'),

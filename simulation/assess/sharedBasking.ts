@@ -9,7 +9,7 @@
 import type { SpeciesSheet } from '../model/species';
 import type { Finding, FindingStatus, Segment } from './types';
 import { runsOf, type SurfaceSample } from './surfaces';
-import { baskingUviRange } from './basking-range';
+import { baskingUviRange, targetZone } from './basking-range';
 import { UV_ZONES } from './zones';
 import {
   BASKING_BODY_SHARE,
@@ -68,14 +68,15 @@ export function sharedBaskingFinding(
   tempC: ArrayLike<number>,
   species: SpeciesSheet,
 ): Finding {
-  const [ulo, uhi] = baskingUviRange(species.uvZone);
+  const [ulo, uhi] = baskingUviRange(targetZone(species));
   const [tlo, thi] = species.baskingSurfaceC;
-  const z = UV_ZONES[species.uvZone];
+  const z = UV_ZONES[targetZone(species)];
   const uvOk = (k: number) => uvi[k]! >= ulo && uvi[k]! <= uhi;
   const heatOk = (k: number) => tempC[k]! >= tlo && tempC[k]! <= thi;
   const both = (k: number) => uvOk(k) && heatOk(k);
   // Near misses: within the zone's mean-to-over-the-top band and a few degrees of the range.
-  const uvNear = (k: number) => uvi[k]! >= Math.min(ulo, z.mean[1]) * 0.75 && uvi[k]! <= uhi * OVER_MAX_FAIL_FACTOR;
+  const uvNear = (k: number) =>
+    uvi[k]! >= Math.min(ulo, z.mean[1]) * 0.75 && uvi[k]! <= uhi * OVER_MAX_FAIL_FACTOR;
   // Warm enough, possibly too hot: the engine's beams have sharp edges, so a pool that is too hot can
   // jump past the range; that is the hot-spot finding's problem, not a split between UV and heat.
   const warm = (k: number) => tempC[k]! >= tlo - TEMP_MARGIN_C;

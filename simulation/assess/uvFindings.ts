@@ -15,7 +15,7 @@ import type { Finding, FindingStatus } from './types';
 import type { SurfaceSample } from './surfaces';
 import { runsOf } from './surfaces';
 import { UV_REFUGE_UVI, UV_ZONES } from './zones';
-import { baskingUviRange, isShadeZone } from './basking-range';
+import { baskingUviRange, isShadeZone, LOW_MELANIN_CAUTION, targetZone } from './basking-range';
 import { BASKING_BAND, ESTIMATE_UV, NO_UV_UVI, OVER_MAX_FAIL_FACTOR, REFUGE_MIN_SHARE } from './thresholds';
 import { f0, f1, range1 } from './format';
 
@@ -79,12 +79,14 @@ export function uvFindings(
   uvb: ArrayLike<number>,
   species: SpeciesSheet,
 ): Finding[] {
-  const z = UV_ZONES[species.uvZone];
+  const zone = targetZone(species);
+  const z = UV_ZONES[zone];
   const st = stats(samples, uvi);
   const out: Finding[] = [];
-  const status = baskingStatus(st.max, species.uvZone);
-  const range = baskingUviRange(species.uvZone);
-  const shade = isShadeZone(species.uvZone);
+  const status = baskingStatus(st.max, zone);
+  const range = baskingUviRange(zone);
+  const shade = isShadeZone(zone);
+  const morph = species.lowMelanin ? ` ${LOW_MELANIN_CAUTION}` : '';
   const baskingSegs = runsOf(samples, (k) => st.max > 0 && uvi[k]! >= BASKING_BAND * st.max);
   let message: string;
   if (st.max < NO_UV_UVI) {
@@ -105,11 +107,11 @@ export function uvFindings(
     id: 'basking-uvi',
     status,
     title: 'UV at the basking spot',
-    message: `${message} ${ESTIMATE_UV}`,
+    message: `${message}${morph} ${ESTIMATE_UV}`,
     numbers: {
       maxUvi: st.max,
       meanUvi: st.baskingMean,
-      zone: species.uvZone,
+      zone,
       zoneMaxLo: range[0],
       zoneMaxHi: range[1],
       zoneMeanLo: z.mean[0],

@@ -36,11 +36,16 @@ export const LAMP_CONTROL: Record<LampTech, LampControlRule> = {
   t5: { control: 'timer-only', reason: FLUORESCENT, mark: 'common practice, no published source' },
   t8: { control: 'timer-only', reason: FLUORESCENT, mark: 'common practice, no published source' },
   compact: { control: 'timer-only', reason: FLUORESCENT, mark: 'common practice, no published source' },
-  'mercury-vapour': { control: 'timer-only', reason: DISCHARGE, mark: 'common practice, no published source' },
+  'mercury-vapour': {
+    control: 'timer-only',
+    reason: DISCHARGE,
+    mark: 'common practice, no published source',
+  },
   'metal-halide': { control: 'timer-only', reason: DISCHARGE, mark: 'common practice, no published source' },
   'led-uvb': {
     control: 'timer-only',
-    reason: 'UV LEDs and their drivers change their UV output when dimmed, and cycling them changes the UV dose',
+    reason:
+      'UV LEDs and their drivers change their UV output when dimmed, and cycling them changes the UV dose',
     mark: 'from memory',
   },
   halogen: {
@@ -55,7 +60,8 @@ export const LAMP_CONTROL: Record<LampTech, LampControlRule> = {
   },
   ceramic: {
     control: 'on-off-thermostat',
-    reason: 'it gives no light, so switching it on and off does not disturb the day (a pulse-proportional thermostat also works)',
+    reason:
+      'it gives no light, so switching it on and off does not disturb the day (a pulse-proportional thermostat also works)',
     mark: 'common practice, no published source',
   },
 };
@@ -86,11 +92,11 @@ export function controlSentence(tech: LampTech, name?: string, photoperiodH?: [n
   const rule = LAMP_CONTROL[tech];
   const who = name ?? `the ${lowerLabel(LAMP_TECHS[tech].label)}`;
   const day = photoperiodH
-    ? ` for the sheet’s ${photoperiodH[0] === photoperiodH[1] ? photoperiodH[0] : `${photoperiodH[0]}–${photoperiodH[1]}`} hour day`
+    ? ` (on for the sheet’s ${photoperiodH[0] === photoperiodH[1] ? photoperiodH[0] : `${photoperiodH[0]}–${photoperiodH[1]}`} hour day)`
     : '';
   switch (rule.control) {
     case 'timer-only':
-      return `Switch ${who} with a timer${day} only — never dim it or put it on a thermostat (${rule.reason}); set its heat by wattage and distance, and use a separate thermostat-controlled heat source where control is needed (${rule.mark}).`;
+      return `Switch ${who} by a timer only${day}; never dim it or put it on a thermostat (${rule.reason}); set its heat by wattage and distance, and use a separate thermostat-controlled heat source where control is needed (${rule.mark}).`;
     case 'dimming-thermostat':
       return `Run ${who} on a dimming thermostat with its probe at the basking spot, and a timer${day} (${rule.reason}; ${rule.mark}).`;
     case 'on-off-thermostat':
@@ -104,4 +110,20 @@ export function controlAdvice(
   photoperiodH?: [number, number],
 ): string {
   return lamps.map((l) => controlSentence(l.tech, l.name, photoperiodH)).join(' ');
+}
+
+const CONTROL_CLASS: Record<LampControl, string> = {
+  'dimming-thermostat': 'a dimming thermostat',
+  'on-off-thermostat': 'an on/off thermostat',
+  'timer-only': 'a timer only, never dimmed or put on a thermostat',
+};
+
+/** Every technology grouped by how it may be controlled, in one line (for general notes). */
+export function controlSummary(): string {
+  const groups = new Map<LampControl, string[]>();
+  for (const t of Object.keys(LAMP_CONTROL) as LampTech[]) {
+    const c = LAMP_CONTROL[t].control;
+    groups.set(c, [...(groups.get(c) ?? []), LAMP_TECHS[t].label]);
+  }
+  return [...groups].map(([c, labels]) => `${labels.join(', ')}: ${CONTROL_CLASS[c]}.`).join(' ');
 }

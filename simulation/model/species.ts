@@ -21,6 +21,11 @@ export const speciesSheetSchema = z.strictObject({
   adultLengthCm: z.number().finite().gt(0).max(1000).optional(),
   /** Climbs walls and mesh: the underside of every screen becomes a reachable surface. Default false. */
   climbs: z.boolean().optional(),
+  /**
+   * An albino or hypomelanistic morph: with little skin pigment it is aimed one UV zone lower (zone 1
+   * stays zone 1) and the basking finding carries a caution. Default false.
+   */
+  lowMelanin: z.boolean().optional(),
   /** Day length, hours: named in the timer advice for UV lamps. */
   photoperiodH: range(0, 24).optional(),
 });

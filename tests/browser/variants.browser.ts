@@ -156,7 +156,7 @@ describe('variants, comparison and share links', () => {
           'UV can injure eyes and skin',
           'Lamps within reach burn',
           'Heat sources can start fires',
-          'Run every heat source on a thermostat',
+          'Control each lamp the way its type allows',
         ]) {
           await visitor.getByRole('region', { name: 'Safety' }).getByText(caution).first().waitFor();
         }
@@ -182,7 +182,7 @@ describe('variants, comparison and share links', () => {
         const text = pdfDrawnText(bytes);
         expect(text).toContain(litName);
         expect(text).toContain('verify with a meter and thermometer');
-        expect(text).toContain('Run every heat source on a thermostat');
+        expect(text).toContain('Control each lamp the way its type allows');
 
         // Revoked: the same link answers 404, page and report alike.
         await panel.getByRole('button', { name: 'Revoke' }).click();

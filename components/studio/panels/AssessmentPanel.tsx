@@ -2,6 +2,7 @@
 // The species check: choose a sheet, read the findings (pass / attention / fail with the numbers),
 // click one to see where it applies, and the cautions that always go with the figures.
 import Link from '@/components/ui/Link';
+import { controlSummary } from '@/simulation/model/control';
 import type { Finding, FindingStatus } from '../fields/engineTypes';
 import type { SimView } from '../fields/simTypes';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
@@ -97,7 +98,10 @@ export function Cautions() {
           Heat lamps can start fires: keep them clear of wood, plants and fabric, use fittings rated for the
           lamp, and follow local electrical and fire codes.
         </li>
-        <li>Run every heat source through a thermostat and check it daily.</li>
+        <li>
+          Control each lamp the way its type allows — {controlSummary()} Check thermostats daily with a
+          thermometer.
+        </li>
         <li>
           All figures are estimates from a model: verify with a UV meter and a thermometer in the enclosure,
           and defer to a reptile-experienced vet.
