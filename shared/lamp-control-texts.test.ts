@@ -9,6 +9,7 @@ import { describe, expect, it } from 'vitest';
 import {
   assess,
   controlSummary,
+  DESIGN_VERSION,
   LAMP_CONTROL,
   LAMP_TECH_IDS,
   LAMP_TECHS,
@@ -34,7 +35,7 @@ const sheet = {
 function hotDesign(tech: LampTech): Design {
   return {
     format: 'baskwell.design',
-    version: 1,
+    version: DESIGN_VERSION,
     enclosure: { width: 90, height: 45, depth: 45, roomTempC: 24 },
     objects: [
       {

@@ -1,4 +1,4 @@
-import { controlSummary } from '@/simulation/model/control';
+import { controlSummary } from '@/simulation';
 
 /** The standing caution on every page: what the numbers are, and who has the last word. */
 export function SafetyNote() {

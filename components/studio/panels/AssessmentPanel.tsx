@@ -2,7 +2,7 @@
 // The species check: choose a sheet, read the findings (pass / attention / fail with the numbers),
 // click one to see where it applies, and the cautions that always go with the figures.
 import Link from '@/components/ui/Link';
-import { controlSummary } from '@/simulation/model/control';
+import { controlSummary } from '@/simulation';
 import type { Finding, FindingStatus } from '../fields/engineTypes';
 import type { SimView } from '../fields/simTypes';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
