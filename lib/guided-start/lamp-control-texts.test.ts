@@ -17,11 +17,11 @@ import {
   type Design,
   type LampTech,
 } from '@/simulation';
-import { explain } from '@/lib/guided-start/explain';
-import type { Proposal } from '@/lib/guided-start/propose';
+import { explain } from './explain';
+import type { Proposal } from './propose';
 import { STARTING_LAMP_TYPES } from '@/lib/lamp-types/starting-lamp-types';
 import type { LampTypeDto } from '@/lib/lamp-types/schema';
-import { applicableCautions } from './cautions';
+import { applicableCautions } from '@/shared/cautions';
 
 const sheet = {
   name: 'Test lizard',
