@@ -13,7 +13,7 @@ const ROOT = import.meta.dirname;
 const SKIP_DIRS = new Set(['node_modules', '.next', '.data', '.git', 'test-results']);
 const TEST_FILE = /\.test\.tsx?$/;
 const SHARED_RESOURCE_IMPORT =
-  /from\s+['"][^'"]*(?:tests\/helpers\/db|helpers\/db|@\/lib\/db|lib\/db|fake-s3-for-tests|helpers\/mail)['"]/;
+  /from\s+['"][^'"]*(?:tests\/helpers\/db|helpers\/db|@\/lib\/db|lib\/db|helpers\/fake-s3|helpers\/mail)['"]/;
 
 function testFiles(dir: string): string[] {
   return readdirSync(dir, { withFileTypes: true }).flatMap((entry) => {
@@ -33,7 +33,13 @@ const dbFiles = testFiles(ROOT)
 const excluded = ['node_modules/**', '.next/**', '.data/**', 'tests/browser/**'];
 
 export default defineConfig({
-  resolve: { tsconfigPaths: true },
+  resolve: {
+    tsconfigPaths: true,
+    // Server modules start with `import 'server-only'`, which Next checks at build time; outside Next the
+    // package throws, so tests load an empty module in its place (scripts/lib/server-only.mjs does the
+    // same for tsx).
+    alias: { 'server-only': path.join(ROOT, 'scripts', 'lib', 'server-only-empty.mjs') },
+  },
   test: {
     environment: 'node',
     testTimeout: 30_000,

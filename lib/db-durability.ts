@@ -1,3 +1,4 @@
+import 'server-only';
 import { QueryTypes, type Sequelize } from 'sequelize';
 
 /**

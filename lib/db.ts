@@ -1,3 +1,4 @@
+import 'server-only';
 import mariadb from 'mariadb';
 import { Sequelize } from 'sequelize';
 import { config } from './config';

@@ -1,3 +1,4 @@
+import 'server-only';
 import nodemailer, { type Transporter } from 'nodemailer';
 import { config } from '@/lib/config';
 

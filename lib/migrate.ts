@@ -1,3 +1,4 @@
+import 'server-only';
 import { SequelizeStorage, Umzug } from 'umzug';
 import type { Sequelize } from 'sequelize';
 import { migrations } from '@/migrations';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { createHash } from 'node:crypto';
 import { Op, QueryTypes } from 'sequelize';
 import { getSequelize } from '@/lib/db';

@@ -8,7 +8,7 @@ import {
 } from 'sequelize';
 import { LAMP_TECH_IDS as ENGINE_LAMP_TECH_IDS } from '@/simulation';
 
-/** The generic lamp technologies of the design file (BRIEF §3 `tech`), as the engine defines them. */
+/** The generic lamp technologies of the design file (the design file's `tech`), as the engine defines them. */
 export const LAMP_TECH_IDS = ENGINE_LAMP_TECH_IDS;
 export type LampTechId = (typeof LAMP_TECH_IDS)[number];
 

@@ -1,6 +1,6 @@
 // Adds the demo scenario to the database named by DB_NAME (idempotent; never deletes anything).
-//   tsx scripts/seed.ts          prints what it created and the demo sign-ins
-//   tsx scripts/seed.ts --json   prints { created, signIns } as JSON (read by scripts/start.mjs)
+//   npm run seed                 prints what it created and the demo sign-ins
+//   npm run seed -- --json       prints { created, signIns } as JSON (read by scripts/start.mjs)
 import { closeSequelize, getSequelize } from '@/lib/db';
 import { DEMO_SIGN_INS } from '@/lib/demo/scenario';
 import { seedDemo } from '@/lib/demo/seed';

@@ -83,7 +83,7 @@ function shapeOf(o: DesignObject, look: ShapeLook) {
       return <rect key={o.id} x={o.x} y={o.y} width={o.width} height={o.height} {...s} />;
     }
     case 'lamp': {
-      // A lamp with no UVB is a heat lamp (BRIEF §3: `uvbAt30` 0).
+      // A lamp with no UVB (`uvbAt30` 0) is a heat lamp: it is drawn in the heat colour.
       const color = (o.uvbAt30 ?? 1) === 0 ? look.lamp.heat : look.lamp.uv;
       const half = (o.length ?? 0) / 2;
       return o.form === 'tube' && half > 0 ? (

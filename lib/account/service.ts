@@ -1,3 +1,4 @@
+import 'server-only';
 import type { Transaction } from 'sequelize';
 import { z } from 'zod';
 import { ApiError, badRequest } from '@/lib/api/errors';

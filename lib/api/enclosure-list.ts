@@ -1,3 +1,4 @@
+import 'server-only';
 import { literal, Op, type OrderItem, type WhereOptions } from 'sequelize';
 import { z } from 'zod';
 import { getSequelize } from '@/lib/db';

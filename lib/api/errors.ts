@@ -1,3 +1,4 @@
+import 'server-only';
 import { ConnectionError, TimeoutError, UniqueConstraintError } from 'sequelize';
 import type { Logger } from 'pino';
 import { ZodError } from 'zod';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { Op, type WhereOptions } from 'sequelize';
 import { z } from 'zod';
 

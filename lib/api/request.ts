@@ -1,3 +1,4 @@
+import 'server-only';
 import { config } from '@/lib/config';
 import { ApiError, payloadTooLarge } from './errors';
 

@@ -1,3 +1,4 @@
+import 'server-only';
 import { getToken } from 'next-auth/jwt';
 import { authSecret } from '@/lib/auth/secret';
 import { loadActiveSession } from '@/lib/auth/ended-sessions';

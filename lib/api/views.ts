@@ -1,3 +1,4 @@
+import 'server-only';
 import { Op } from 'sequelize';
 import { getSequelize } from '@/lib/db';
 import { Enclosure, Invitation, Membership, User, type Role } from '@/models';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { z } from 'zod';
 import { getSequelize } from '@/lib/db';
 import { isDatabaseUnavailable } from '@/lib/api/errors';

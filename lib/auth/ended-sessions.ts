@@ -1,3 +1,4 @@
+import 'server-only';
 import { randomBytes } from 'node:crypto';
 import { Op } from 'sequelize';
 import { getSequelize } from '@/lib/db';

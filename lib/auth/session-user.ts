@@ -1,3 +1,4 @@
+import 'server-only';
 import { getSequelize } from '@/lib/db';
 import type { MembershipClaim, SessionUser } from '@/lib/permissions';
 import { Membership, Organisation, User } from '@/models';

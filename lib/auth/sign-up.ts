@@ -1,3 +1,4 @@
+import 'server-only';
 import { z } from 'zod';
 import { ApiError, conflict } from '@/lib/api/errors';
 import { emailSchema, organisationNameSchema, personNameSchema } from '@/lib/api/schemas';

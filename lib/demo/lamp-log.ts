@@ -1,3 +1,4 @@
+import 'server-only';
 import type { Transaction } from 'sequelize';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
 import { Enclosure, Lamp, LampType, Organisation, Reading } from '@/models';

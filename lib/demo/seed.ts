@@ -1,3 +1,4 @@
+import 'server-only';
 import bcrypt from 'bcryptjs';
 import type { Sequelize, Transaction } from 'sequelize';
 import { Enclosure, Membership, Organisation, User, initModels } from '@/models';

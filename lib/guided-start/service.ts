@@ -1,3 +1,4 @@
+import 'server-only';
 import type { Assessment, Design } from '@/simulation';
 import { assertKeeperInOrganisation } from '@/lib/api/enclosures';
 import { badRequest, forbidden, notFound } from '@/lib/api/errors';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { hostname } from 'node:os';
 import type { Logger } from 'pino';
 import { Op } from 'sequelize';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { allow, notFound } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { getSequelize } from '@/lib/db';

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { lampSchema, type LampObject } from '@/simulation';
 import { applyCalibration, calibrate, pairedRatio } from './calibrate';
-import { readingsOf, t5Lamp } from './test-fixtures';
+import { readingsOf, t5Lamp } from '@/tests/fixtures/lamp-log';
 
 const object: LampObject = {
   type: 'lamp',

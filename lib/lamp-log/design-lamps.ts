@@ -1,3 +1,4 @@
+import 'server-only';
 import { getSequelize } from '@/lib/db';
 import { readStoredDesign } from '@/lib/variants/stored-design';
 import { Design, Variant } from '@/models';

@@ -8,7 +8,7 @@ describe('distance normalisation', () => {
     expect(distanceFactor(bulb, 30, 60)).toBeCloseTo(0.25, 9);
   });
 
-  it('falls about as 1/d close to a long tube and as 1/d² far from it (BRIEF §4, IES aspect-factor method)', () => {
+  it('falls about as 1/d close to a long tube and as 1/d² far from it (IES aspect-factor method)', () => {
     const tube = { form: 'tube' as const, lengthCm: 120 };
     // Close: d ≪ L, α → π/2, E → (π/2)/d: halving the distance about doubles the reading.
     expect(distanceFactor(tube, 5, 2.5)).toBeGreaterThan(1.9);

@@ -1,3 +1,4 @@
+import 'server-only';
 import type { z } from 'zod';
 import { badRequest } from '@/lib/api';
 import { getSequelize } from '@/lib/db';

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { dayNumber, isoDay } from './dates';
 import { distanceFactor } from './geometry';
 import { lampOutlook } from './outlook';
-import { readingsOf, t5Lamp } from './test-fixtures';
+import { readingsOf, t5Lamp } from '@/tests/fixtures/lamp-log';
 
 const zone3 = { name: 'Test lizard', uvZone: 3, uvbTargetUw: null };
 

@@ -1,3 +1,4 @@
+import 'server-only';
 import { z } from 'zod';
 import { idSchema, textSchema } from '@/lib/api/schemas';
 import { READING_UNITS } from '@/models/reading';

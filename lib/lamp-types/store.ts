@@ -1,3 +1,4 @@
+import 'server-only';
 import { Op, type Transaction } from 'sequelize';
 import { z } from 'zod';
 import { getSequelize } from '@/lib/db';

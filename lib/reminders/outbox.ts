@@ -1,3 +1,4 @@
+import 'server-only';
 import { createHash } from 'node:crypto';
 import { Op, UniqueConstraintError } from 'sequelize';
 import { getSequelize } from '@/lib/db';

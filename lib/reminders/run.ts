@@ -1,3 +1,4 @@
+import 'server-only';
 import { Op } from 'sequelize';
 import { config } from '@/lib/config';
 import { getSequelize } from '@/lib/db';

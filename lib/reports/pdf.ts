@@ -3,6 +3,7 @@
  * the chosen field with its legend, key figures, the species assessment when there is one, the lamp
  * list and the cautions. The variant's name is both drawn and set as the document title.
  */
+import 'server-only';
 import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from 'pdf-lib';
 import { sizeBoth, tempBoth } from '@/shared/units';
 import type { KeyFigures } from '@/shared/designs/figures';

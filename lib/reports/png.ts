@@ -1,3 +1,4 @@
+import 'server-only';
 import { PNG } from 'pngjs';
 import type { Raster } from './raster';
 

@@ -1,3 +1,4 @@
+import 'server-only';
 import { UniqueConstraintError, type Transaction } from 'sequelize';
 import { getSequelize } from '@/lib/db';
 import { toColumns as lampTypeColumns } from '@/lib/lamp-types/store';

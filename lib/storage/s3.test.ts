@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { randomBytes } from 'node:crypto';
-import { useFakeS3 } from './fake-s3-for-tests';
+import { useFakeS3 } from '@/tests/helpers/fake-s3';
 import { deleteObject, getObject, putObject } from './s3';
 import { storageConfig } from './config';
 

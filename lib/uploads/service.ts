@@ -1,3 +1,4 @@
+import 'server-only';
 import { createHash, randomUUID } from 'node:crypto';
 import { ApiError, allow, notFound } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';

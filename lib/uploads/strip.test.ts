@@ -3,7 +3,7 @@ import { PNG } from 'pngjs';
 import { InvalidImageError } from './errors';
 import { sniffImage } from './sniff';
 import { stripMetadata } from './strip';
-import { jpegWithMetadata, pngWithMetadata, webpWithMetadata } from './fixtures.test-helpers';
+import { jpegWithMetadata, pngWithMetadata, webpWithMetadata } from '@/tests/fixtures/images';
 
 const text = (b: Uint8Array) => Buffer.from(b).toString('latin1');
 

@@ -1,3 +1,4 @@
+import 'server-only';
 import { allow } from '@/lib/api';
 import { notFound } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';

@@ -8,6 +8,7 @@
  * version: the same content always gives the same figures, so an entry can never go stale, whoever
  * saved what. Bounded: the least recently used design is dropped first.
  */
+import 'server-only';
 import { createHash } from 'node:crypto';
 import { config } from '@/lib/config';
 import type { Assessment, ContourBand, Design, FieldName, SpeciesSheet } from '@/simulation';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { Op } from 'sequelize';
 import { afterCursor, page } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';

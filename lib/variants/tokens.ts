@@ -1,3 +1,4 @@
+import 'server-only';
 import { createHash, randomBytes } from 'node:crypto';
 
 /** 32 random bytes = 256 bits, well above the 128 bits that make a link unguessable. */

@@ -1,3 +1,4 @@
+import 'server-only';
 import { literal } from 'sequelize';
 import { afterCursor, conflict, page } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';

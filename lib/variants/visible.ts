@@ -1,3 +1,4 @@
+import 'server-only';
 import { Op, type WhereOptions } from 'sequelize';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { getSequelize } from '@/lib/db';

@@ -77,7 +77,10 @@ export async function prepareDatabase(life, env, { recreate = [] } = {}) {
   });
 }
 
-const tsx = (script, args, env, opts = {}) => run(bin('tsx'), [script, ...args], { env, ...opts });
+// The server modules' `import 'server-only'` resolves to nothing in these scripts (see server-only.mjs).
+const SERVER_ONLY = path.join(ROOT, 'scripts', 'lib', 'server-only.mjs');
+const tsx = (script, args, env, opts = {}) =>
+  run(bin('tsx'), ['--import', SERVER_ONLY, script, ...args], { env, ...opts });
 
 export async function migrate(env) {
   await tsx('scripts/migrate.ts', [], env);
@@ -132,7 +135,7 @@ export async function startS3(life, env, { logFile } = {}) {
  * must not take the site down. Its children are marked `restarts` so the caller does not stop on them.
  */
 export function startJobs(life, env, { logFile, pauseMs = 10_000 } = {}) {
-  const child = service('jobs', bin('tsx'), ['scripts/jobs.ts'], { env, logFile });
+  const child = service('jobs', bin('tsx'), ['--import', SERVER_ONLY, 'scripts/jobs.ts'], { env, logFile });
   child.restarts = true;
   life.services.push(child);
   void child.exited.then((r) => {

@@ -1,7 +1,7 @@
 import type { Design } from './schema';
 
 /**
- * The example set-up of the design file description (BRIEF §3): a 120 × 60 × 60 cm enclosure with a
+ * The example set-up of the design file: a 120 × 60 × 60 cm enclosure with a
  * T5 tube and a halogen flood on a mesh lid, a perch, a ledge, a hide and planting. The one source for
  * the studio's scratch start, the engine's tests and the CLI's; its numbers are an illustration, not a
  * recommendation. Shared by all of them: take a copy (`exampleDesign()`) to change anything.

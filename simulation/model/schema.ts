@@ -36,7 +36,7 @@ export const decayCurveSchema = z.union([
 
 /**
  * Where a lamp's output figures came from when they were fitted to meter readings of the real lamp
- * (lamp log, BRIEF §2.7): the day of the newest reading used (ISO date, or date and time) and a short
+ * (from the lamp log): the day of the newest reading used (ISO date, or date and time) and a short
  * note of what they were fitted from ("6 readings"). Default: absent — the catalogue's figures.
  * Descriptive only: the engine reads the lamp's own fields, never this note.
  */
@@ -151,7 +151,7 @@ export const probePointSchema = z.strictObject({
 });
 
 /**
- * A photo of the real enclosure drawn under the design in the studio, to trace over (BRIEF §2.10):
+ * A photo of the real enclosure drawn under the design in the studio, to trace over:
  * which uploaded photo (its id; the studio draws it only for someone who may read that upload) and
  * where it lies, in design cm (x, y its bottom-left corner, y up), with its opacity and whether it is
  * shown. Default: absent — no photo. The engine never reads it: it is the user's tracing aid, not

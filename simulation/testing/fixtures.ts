@@ -1,7 +1,7 @@
 /** Designs used by tests and the benchmark (invented scenarios). */
 import type { Design } from '../model/schema';
 
-/** The example of BRIEF §3 (one source: simulation/model/example.ts). */
+/** The example design (one source: simulation/model/example.ts). */
 export { EXAMPLE_DESIGN } from '../model/example';
 
 /** An empty enclosure of the given size. */

@@ -1,6 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import * as importRoute from '@/app/api/readings/import/route';
-import { useFakeS3 } from '@/lib/storage/fake-s3-for-tests';
+import { useFakeS3 } from '@/tests/helpers/fake-s3';
 import { getObject } from '@/lib/storage/s3';
 import { MAX_JSON_BODY_BYTES } from '@/lib/api/request';
 import { MAX_CSV_BYTES, MAX_CSV_IMPORT_BODY_BYTES } from '@/lib/uploads/limits';

@@ -1,9 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import * as uploadsRoute from '@/app/api/uploads/route';
 import * as uploadRoute from '@/app/api/uploads/[id]/route';
-import { useFakeS3 } from '@/lib/storage/fake-s3-for-tests';
+import { useFakeS3 } from '@/tests/helpers/fake-s3';
 import { getObject, putObject } from '@/lib/storage/s3';
-import { jpegWithMetadata, pngWithMetadata } from '@/lib/uploads/fixtures.test-helpers';
+import { jpegWithMetadata, pngWithMetadata } from '@/tests/fixtures/images';
 import { Organisation, Upload } from '@/models';
 import { createEnclosure, createMember, createOrganisation, withTestDatabase } from '../helpers/db';
 import { call, ORIGIN, sessionCookie } from './http';

@@ -1,3 +1,5 @@
+import { readdirSync, readFileSync } from 'node:fs';
+import path from 'node:path';
 import { ESLint } from 'eslint';
 import { beforeAll, describe, expect, it } from 'vitest';
 
@@ -54,5 +56,30 @@ describe('layer boundaries', () => {
     ['tests/planted.test.ts', "import { planted } from '@/simulation/testing/fixtures';"],
   ])('%s: %s passes', async (file, code) => {
     expect(await restrictedImports(file, code)).toEqual([]);
+  });
+});
+
+/** lib/ files that reach the database, the mail server, the file store or the server's secrets directly. */
+const SERVER_IMPORT =
+  /from\s+['"](?:@\/lib\/db|@\/models[^'"]*|@\/lib\/config|sequelize|mariadb|umzug|nodemailer|next-auth[^'"]*|next\/headers|@aws-sdk\/[^'"]+|bcryptjs)['"]/;
+
+function libFiles(dir: string): string[] {
+  return readdirSync(dir, { withFileTypes: true }).flatMap((e) => {
+    const p = path.join(dir, e.name);
+    if (e.isDirectory()) return libFiles(p);
+    return /\.tsx?$/.test(e.name) && !/\.test\.tsx?$|for-tests|test-helpers/.test(e.name) ? [p] : [];
+  });
+}
+
+describe('server modules', () => {
+  it("start with import 'server-only', so a browser bundle that reaches one fails the build", () => {
+    const unmarked = libFiles('lib').filter((f) => {
+      const src = readFileSync(f, 'utf8');
+      return (
+        SERVER_IMPORT.test(src.replace(/import\s+type\s[^;]+;/g, '')) && !/^import 'server-only';$/m.test(src)
+      );
+    });
+    expect(unmarked).toEqual([]);
+    expect(readFileSync('lib/db.ts', 'utf8')).toMatch(/^import 'server-only';$/m);
   });
 });

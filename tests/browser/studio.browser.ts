@@ -1,4 +1,4 @@
-// The design studio in Chromium — the journey of issue 4's "Done when": a staff member signs in, creates
+// The design studio in Chromium — the whole signed-in journey: a staff member signs in, creates
 // a design on an enclosure, places a tube lamp, a screen lid, a perch and a hide, moves the perch under
 // the lamp with a real mouse drag, sees the UV Index at the perch top rise and fall back with undo, reloads
 // and finds the design as it was; one screenshot per field. Then the studio without an account on the
@@ -24,7 +24,7 @@ import {
 
 const session = withBrowser();
 
-describe('design studio, signed in (issue 4: done when)', () => {
+describe('design studio, signed in (the whole journey)', () => {
   it('builds a set-up, moves the perch under the lamp, undoes, and finds it all after a reload', async () => {
     const page = session.page();
     page.setDefaultTimeout(60_000);

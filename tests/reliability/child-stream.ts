@@ -1,11 +1,8 @@
 // Runs a tsx child that reports one JSON event a line on stdout and takes commands on stdin, and lets a
 // test wait for what it has reported so far.
 import { spawn, type ChildProcess } from 'node:child_process';
-import path from 'node:path';
 import { createInterface } from 'node:readline';
-
-const ROOT = path.resolve(import.meta.dirname, '..', '..');
-const TSX = path.join(ROOT, 'node_modules', '.bin', 'tsx');
+import { ROOT, TSX, tsxArgs } from '../helpers/tsx';
 
 export type ChildEvent = { ev: string; [key: string]: unknown };
 
@@ -20,7 +17,7 @@ export type EventChild = {
 
 export function eventChild(file: string, env: NodeJS.ProcessEnv): EventChild {
   // A process group of its own: tsx runs the script in a node child, and kill() must reach both.
-  const child: ChildProcess = spawn(TSX, [file], {
+  const child: ChildProcess = spawn(TSX, tsxArgs(file), {
     cwd: ROOT,
     env,
     stdio: ['pipe', 'pipe', 'pipe'],

@@ -9,10 +9,9 @@ import { promisify } from 'node:util';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { expectNoInternals, type Reply } from '../api/http';
 import { freePort } from '../helpers/ports';
+import { ROOT, TSX, tsxArgs } from '../helpers/tsx';
 
 const run = promisify(execFile);
-const ROOT = path.resolve(import.meta.dirname, '..', '..');
-const TSX = path.join(ROOT, 'node_modules', '.bin', 'tsx');
 const CHILD = path.join(import.meta.dirname, 'db-outage.child.ts');
 
 type Outcome = {
@@ -26,7 +25,7 @@ type Outcome = {
 };
 
 async function handlersWithDatabaseAt(port: number): Promise<Outcome[]> {
-  const { stdout } = await run(TSX, [CHILD], {
+  const { stdout } = await run(TSX, tsxArgs(CHILD), {
     cwd: ROOT,
     env: { ...process.env, DB_HOST: '127.0.0.1', DB_PORT: String(port) },
     // Each handler gives up within seconds; a child still busy after this is itself the failure.

@@ -2,17 +2,14 @@
 // run by scripts/migrate.ts, which `npm start` and `npm test` run first). The unsafe settings are made on
 // a MariaDB of this test's own: SET GLOBAL on the shared test instance would change it for every test.
 import { execFile } from 'node:child_process';
-import path from 'node:path';
 import { promisify } from 'node:util';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import mariadb from 'mariadb';
 import { Sequelize } from 'sequelize';
 import { ALLOW_NON_DURABLE, assertDurable, durabilityProblems } from '@/lib/db-durability';
 import { closeDatabase, testDb } from '../helpers/db';
+import { ROOT, TSX, tsxArgs } from '../helpers/tsx';
 import { throwawayMariaDB, THROWAWAY_PASSWORD, THROWAWAY_USER, type Throwaway } from './throwaway-mariadb';
-
-const ROOT = path.resolve(import.meta.dirname, '..', '..');
-const TSX = path.join(ROOT, 'node_modules', '.bin', 'tsx');
 
 let db: Throwaway;
 beforeAll(async () => {
@@ -38,7 +35,7 @@ function connect(): Sequelize {
 /** `npx tsx scripts/migrate.ts` as npm start runs it, against the throwaway database. */
 async function migrate(extraEnv: Record<string, string> = {}) {
   try {
-    const { stdout, stderr } = await promisify(execFile)(TSX, ['scripts/migrate.ts'], {
+    const { stdout, stderr } = await promisify(execFile)(TSX, tsxArgs('scripts/migrate.ts'), {
       cwd: ROOT,
       env: { ...db.env(), ...extraEnv },
       timeout: 90_000,

@@ -17,7 +17,7 @@ const TYPE_LABEL: Record<string, string> = {
   foliage: 'Foliage',
 };
 
-/** Design-file fields in words, with their units (BRIEF §3: cm, °C, months). */
+/** Design-file fields in words, with their units (as a design stores them: cm, °C, months). */
 const FIELD: Record<string, { label: string; unit?: string; percent?: boolean }> = {
   width: { label: 'width', unit: 'cm' },
   height: { label: 'height', unit: 'cm' },

@@ -1,5 +1,5 @@
 // Plain-language formatting of the engine's findings in the user's units. The engine writes its
-// messages and numbers in cm and °C (BRIEF §3); everything the studio shows goes through here.
+// messages and numbers in cm and °C, the units a design is stored in; everything the studio shows goes through here.
 import {
   cToDisplay,
   cmToDisplay,

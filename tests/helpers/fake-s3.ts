@@ -1,7 +1,7 @@
 import net from 'node:net';
 import path from 'node:path';
 import { FAKE_S3_DEFAULTS, startFakeS3 } from '@/scripts/fake-s3.mjs';
-import { resetStorageClient } from './s3';
+import { resetStorageClient } from '@/lib/storage/s3';
 
 /**
  * For tests: makes sure a fake S3 server answers at the test endpoint. `npm test` starts one (like the
