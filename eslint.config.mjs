@@ -116,7 +116,11 @@ const config = [
     rules: { 'no-restricted-imports': restrict(layer.engineIndex, layer.models, layer.database) },
   },
   {
-    files: ['app/**/*.{ts,tsx}', 'models/**/*.ts', 'scripts/**/*.ts', 'tests/**/*.ts', '*.ts'],
+    files: ['app/**/*.{ts,tsx}'],
+    rules: { 'no-restricted-imports': restrict(layer.engineIndex, layer.models) },
+  },
+  {
+    files: ['models/**/*.ts', 'scripts/**/*.ts', 'tests/**/*.ts', '*.ts'],
     rules: { 'no-restricted-imports': restrict(layer.engineIndex) },
   },
 ];

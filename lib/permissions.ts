@@ -1,5 +1,7 @@
 import type { Role } from '@/models/membership';
 
+export type { Role };
+
 /**
  * Who may do what. A pure function over the session user and a description of the thing, so the rules
  * can be read in one place and unit-tested without a database. Route handlers load the thing first

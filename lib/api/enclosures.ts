@@ -3,7 +3,7 @@ import { col, fn } from 'sequelize';
 import { z } from 'zod';
 import { getSequelize } from '@/lib/db';
 import { Enclosure, Membership, User } from '@/models';
-import { badRequest } from './errors';
+import { badRequest, notFound } from './errors';
 import { idSchema, textSchema } from './schemas';
 
 /** Enclosure fields as the API accepts them. Sizes are inside dimensions in centimetres. */
@@ -89,4 +89,38 @@ export async function assertKeeperInOrganisation(organisationId: number, keeperI
     attributes: ['id'],
   });
   if (!member) throw badRequest('keeperId', 'That keeper is not a member of this organisation.');
+}
+
+export type EnclosureWithKeeper = Enclosure & { keeper?: User | null };
+
+/** An enclosure with its keeper's name; 404 when there is none (access is the caller's check). */
+export async function enclosureWithKeeper(id: number): Promise<EnclosureWithKeeper> {
+  getSequelize();
+  const enclosure = await Enclosure.findByPk(id, {
+    include: [{ model: User, as: 'keeper', attributes: ['id', 'name'] }],
+  });
+  if (!enclosure) throw notFound('That enclosure');
+  return enclosure;
+}
+
+/** A new enclosure kept by `keeperId`, who must belong to the organisation. */
+export async function createEnclosure(
+  fields: Omit<z.output<typeof createEnclosureBody>, 'keeperId'> & { keeperId: number },
+): Promise<EnclosureWithKeeper> {
+  await assertKeeperInOrganisation(fields.organisationId, fields.keeperId);
+  const enclosure = await Enclosure.create(fields);
+  const keeper = await User.findByPk(fields.keeperId, { attributes: ['id', 'name'] });
+  return Object.assign(enclosure, { keeper });
+}
+
+/** Changes an enclosure; a new keeper must belong to its organisation. */
+export async function updateEnclosure(
+  enclosure: Enclosure,
+  body: z.output<typeof updateEnclosureBody>,
+): Promise<EnclosureWithKeeper> {
+  if (body.keeperId !== undefined && body.keeperId !== enclosure.keeperId) {
+    await assertKeeperInOrganisation(enclosure.organisationId, body.keeperId);
+  }
+  await enclosure.update(body);
+  return enclosureWithKeeper(enclosure.id);
 }

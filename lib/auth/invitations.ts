@@ -4,7 +4,10 @@ import { Op } from 'sequelize';
 import { config } from '@/lib/config';
 import { getSequelize } from '@/lib/db';
 import { sendMail } from '@/lib/mail';
-import { ApiError, conflict } from '@/lib/api/errors';
+import { ApiError, conflict, notFound } from '@/lib/api/errors';
+import { afterCursor } from '@/lib/api/pagination';
+import { allow } from '@/lib/api/route';
+import type { CurrentUser } from './session-user';
 import { Invitation, Membership, Organisation, User, type Role } from '@/models';
 import { logger } from '@/lib/log';
 
@@ -114,4 +117,57 @@ export function invitationJson(inv: Invitation) {
     expiresAt: inv.expiresAt.toISOString(),
     createdAt: inv.createdAt.toISOString(),
   };
+}
+
+/** An organisation's invitations still waiting for an answer, by id, from after `cursor`. */
+export async function pendingInvitations(organisationId: number, opts: { cursor?: number; limit: number }) {
+  getSequelize();
+  return Invitation.findAll({
+    where: {
+      organisationId,
+      acceptedAt: null,
+      revokedAt: null,
+      expiresAt: { [Op.gt]: new Date() },
+      ...afterCursor(opts.cursor),
+    },
+    order: [['id', 'ASC']],
+    limit: opts.limit + 1,
+  });
+}
+
+/** Withdraws a pending invitation, if `user` may: its link stops working. */
+export async function revokeInvitation(user: CurrentUser, id: number) {
+  getSequelize();
+  const invitation = await Invitation.findByPk(id);
+  if (!invitation) throw notFound('That invitation');
+  allow(
+    user,
+    'delete',
+    { kind: 'invitation', organisationId: invitation.organisationId, role: invitation.role },
+    'That invitation',
+  );
+  const state = invitationState(invitation);
+  if (state !== 'pending') throw conflict(`That invitation is already ${state}.`, `invitation_${state}`);
+  invitation.revokedAt = new Date();
+  await invitation.save();
+  return invitation;
+}
+
+/** The invitation behind a link's token, with its organisation's name; null for a token that is not one. */
+export async function invitationForToken(token: string) {
+  if (!/^[A-Za-z0-9_-]{43}$/.test(token)) return null;
+  getSequelize();
+  const invitation = await Invitation.findOne({
+    where: { tokenHash: hashToken(token) },
+    include: [{ model: Organisation, as: 'organisation', attributes: ['name'] }],
+  });
+  if (!invitation) return null;
+  const organisation = (invitation as Invitation & { organisation?: Organisation }).organisation;
+  return { invitation, organisationName: organisation?.name ?? null };
+}
+
+/** Whether an address already has an account (the invitation page then asks to sign in). */
+export async function hasAccount(email: string): Promise<boolean> {
+  getSequelize();
+  return Boolean(await User.findOne({ where: { email }, attributes: ['id'] }));
 }

@@ -1,8 +1,8 @@
 import 'server-only';
-import { allow, notFound } from '@/lib/api';
+import { allow, ApiError, notFound } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { getSequelize } from '@/lib/db';
-import type { Action } from '@/lib/permissions';
+import { can, type Action } from '@/lib/permissions';
 import { Enclosure, Lamp, Reading } from '@/models';
 
 /**
@@ -51,4 +51,28 @@ export async function readingFor(user: CurrentUser, id: number, action: Action):
   if (!reading) throw notFound('The reading');
   allow(user, action, resource(reading.lamp.enclosure, 'reading'), 'The reading');
   return reading;
+}
+
+/** A page's 404 for what this user may not read, whichever the reason (missing or someone else's). */
+async function orNull<T>(load: () => Promise<T>): Promise<T | null> {
+  try {
+    return await load();
+  } catch (e) {
+    if (e instanceof ApiError && e.status === 404) return null;
+    throw e;
+  }
+}
+
+/** For pages: the lamp if `user` may read it (else null), its access resource, and whether they may change it. */
+export async function lampForPage(user: CurrentUser, id: number) {
+  const lamp = await orNull(() => lampFor(user, id, 'read'));
+  if (!lamp) return null;
+  const owner = resource(lamp.enclosure, 'lamp');
+  return { lamp, resource: owner, canEdit: can(user, 'update', owner) };
+}
+
+/** For pages: the enclosure if `user` may read its lamps (else null), and whether they may change them. */
+export async function enclosureForLampsPage(user: CurrentUser, id: number) {
+  const enclosure = await orNull(() => enclosureForLamps(user, id, 'read'));
+  return enclosure && { enclosure, canEdit: can(user, 'update', resource(enclosure, 'lamp')) };
 }

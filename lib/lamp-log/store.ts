@@ -1,5 +1,6 @@
 import 'server-only';
 import { Op, fn, col, where as sqlWhere } from 'sequelize';
+import { afterCursor } from '@/lib/api/pagination';
 import { getSequelize } from '@/lib/db';
 import { toDto as lampTypeDto } from '@/lib/lamp-types/store';
 import type { LampTypeDto } from '@/lib/lamp-types/schema';
@@ -306,6 +307,19 @@ export async function lampsOfOrganisation(
         where: { organisationId, ...(keeperId ? { keeperId } : {}) },
       },
     ],
+    order: [['id', 'ASC']],
+    limit: opts.limit + 1,
+  });
+}
+
+/** A lamp's readings, oldest first, from after `cursor` (one more than `limit`, for page()). */
+export async function readingsOf(
+  lampId: number,
+  opts: { cursor?: number; limit: number },
+): Promise<Reading[]> {
+  getSequelize();
+  return Reading.findAll({
+    where: { lampId, ...afterCursor(opts.cursor) },
     order: [['id', 'ASC']],
     limit: opts.limit + 1,
   });

@@ -87,11 +87,22 @@ export async function storeBackdrop(
   });
 }
 
-/** An enclosure's photos, newest first. The caller has checked that the person may read the enclosure. */
-export async function backdropsOf(enclosureId: number, limit: number): Promise<Upload[]> {
+/** An enclosure's uploads (of one kind, or all), newest first. The caller has checked that the person may read the enclosure. */
+export async function uploadsOf(
+  enclosureId: number,
+  kind: Upload['kind'] | undefined,
+  limit: number,
+): Promise<Upload[]> {
   getSequelize();
-  return Upload.findAll({ where: { enclosureId, kind: 'backdrop' }, order: [['id', 'DESC']], limit });
+  return Upload.findAll({
+    where: { enclosureId, ...(kind ? { kind } : {}) },
+    order: [['id', 'DESC']],
+    limit,
+  });
 }
+
+/** An enclosure's photos, newest first. */
+export const backdropsOf = (enclosureId: number, limit: number) => uploadsOf(enclosureId, 'backdrop', limit);
 
 /** Keeps an imported readings CSV with the readings made from it (for tracing where they came from). */
 export async function storeCsv(

@@ -37,6 +37,12 @@ describe('layer boundaries', () => {
     ],
     ['components/planted.tsx', "import { planted } from '@/lib/db';", /no database/],
     ['components/planted.tsx', "import { planted } from 'sequelize';", /no database/],
+    ['app/planted/page.tsx', "import { planted } from '@/models';", /through a lib\/ domain module/],
+    [
+      'app/api/planted/route.ts',
+      "import type { planted } from '@/models/membership';",
+      /lib\/ domain module/,
+    ],
     ['components/planted.tsx', "import { planted } from '@/simulation/model/schema';", /through its index/],
     ['lib/planted.ts', "import { planted } from '../simulation/fields/grid';", /through its index/],
     ['scripts/planted.ts', "import { planted } from '@/simulation/contours';", /through its index/],

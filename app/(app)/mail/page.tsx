@@ -1,30 +1,16 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
-import { Op } from 'sequelize';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { Notice } from '@/components/ui/Notice';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { config } from '@/lib/config';
-import { getSequelize } from '@/lib/db';
 import { capturedMessages, mailViewerEnabled } from '@/lib/mail';
+import { organisationAddresses } from '@/lib/organisations/queries';
 import { can } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
-import { Invitation, Membership, User } from '@/models';
 
 export const metadata: Metadata = { title: 'Mail (development)' };
 export const dynamic = 'force-dynamic';
-
-/** Addresses that belong to this organisation: its members and the people it invited. */
-async function organisationAddresses(organisationId: number): Promise<Set<string>> {
-  getSequelize();
-  const members = await Membership.findAll({ where: { organisationId }, attributes: ['userId'] });
-  const users = await User.findAll({
-    where: { id: { [Op.in]: members.map((m) => m.userId) } },
-    attributes: ['email'],
-  });
-  const invited = await Invitation.findAll({ where: { organisationId }, attributes: ['email'] });
-  return new Set([...users, ...invited].map((r) => r.email.toLowerCase()));
-}
 
 export default async function MailPage() {
   const user = await requireUser('/mail');

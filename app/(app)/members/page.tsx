@@ -8,7 +8,7 @@ import { card } from '@/components/ui/styles';
 import { memberViews, pendingInvitationViews } from '@/lib/api/views';
 import { can } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
-import type { Role } from '@/models/membership';
+import type { Role } from '@/lib/permissions';
 
 export const metadata: Metadata = { title: 'Members' };
 

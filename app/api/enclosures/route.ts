@@ -1,8 +1,7 @@
 import { allow, created, route } from '@/lib/api';
 import { enclosureListQuery, listEnclosures } from '@/lib/api/enclosure-list';
-import { assertKeeperInOrganisation, createEnclosureBody, enclosureJson } from '@/lib/api/enclosures';
+import { createEnclosure, createEnclosureBody, enclosureJson } from '@/lib/api/enclosures';
 import { roleIn } from '@/lib/permissions';
-import { Enclosure, User } from '@/models';
 
 /**
  * Enclosures of an organisation (`?organisationId=`, optional `keeperId`), searched, sorted and paged
@@ -30,9 +29,6 @@ export const POST = route({
   handler: async ({ body, user }) => {
     const { organisationId, keeperId = user.id, ...fields } = body;
     allow(user, 'create', { kind: 'enclosure', organisationId, keeperId }, 'That organisation');
-    await assertKeeperInOrganisation(organisationId, keeperId);
-    const enclosure = await Enclosure.create({ organisationId, keeperId, ...fields });
-    const keeper = await User.findByPk(keeperId, { attributes: ['id', 'name'] });
-    return created(enclosureJson(Object.assign(enclosure, { keeper })));
+    return created(enclosureJson(await createEnclosure({ organisationId, keeperId, ...fields })));
   },
 });

@@ -1,26 +1,14 @@
-import { Op } from 'sequelize';
 import { z } from 'zod';
-import { afterCursor, allow, created, page, pageQuery, route } from '@/lib/api';
+import { allow, created, page, pageQuery, route } from '@/lib/api';
 import { emailSchema, idSchema, roleSchema } from '@/lib/api/schemas';
-import { invitationJson, inviteByEmail } from '@/lib/auth/invitations';
-import { Invitation } from '@/models';
+import { invitationJson, inviteByEmail, pendingInvitations } from '@/lib/auth/invitations';
 
 /** Pending invitations of an organisation (`?organisationId=`), for owner and staff. */
 export const GET = route({
   query: z.object({ organisationId: idSchema('The organisation id'), ...pageQuery }),
   handler: async ({ query, user }) => {
     allow(user, 'read', { kind: 'invitation', organisationId: query.organisationId }, 'That organisation');
-    const rows = await Invitation.findAll({
-      where: {
-        organisationId: query.organisationId,
-        acceptedAt: null,
-        revokedAt: null,
-        expiresAt: { [Op.gt]: new Date() },
-        ...afterCursor(query.cursor),
-      },
-      order: [['id', 'ASC']],
-      limit: query.limit + 1,
-    });
+    const rows = await pendingInvitations(query.organisationId, query);
     return page(rows, query.limit, invitationJson);
   },
 });

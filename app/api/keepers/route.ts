@@ -1,9 +1,8 @@
 import { z } from 'zod';
-import { afterCursor, allow, created, page, pageQuery, route } from '@/lib/api';
+import { allow, created, page, pageQuery, route } from '@/lib/api';
 import { emailSchema, idSchema } from '@/lib/api/schemas';
 import { invitationJson, inviteByEmail } from '@/lib/auth/invitations';
-import { enclosureCounts } from '@/lib/api/enclosures';
-import { Membership, User } from '@/models';
+import { keepersOf } from '@/lib/organisations/queries';
 
 /** The organisation's keepers (`?organisationId=`) with how many enclosures each has. Owner and staff. */
 export const GET = route({
@@ -11,26 +10,8 @@ export const GET = route({
   handler: async ({ query, user }) => {
     const organisationId = query.organisationId;
     allow(user, 'read', { kind: 'member', organisationId }, 'That organisation');
-    const rows = await Membership.findAll({
-      where: { organisationId, role: 'keeper', ...afterCursor(query.cursor) },
-      include: [{ model: User, as: 'user', attributes: ['id', 'name', 'email'] }],
-      order: [['id', 'ASC']],
-      limit: query.limit + 1,
-    });
-    const counts = await enclosureCounts(
-      organisationId,
-      rows.map((r) => r.userId),
-    );
-    return page(rows, query.limit, (m) => {
-      const u = (m as Membership & { user?: User }).user;
-      return {
-        userId: m.userId,
-        name: u?.name ?? '',
-        email: u?.email ?? '',
-        enclosureCount: counts.get(m.userId) ?? 0,
-        joinedAt: m.createdAt.toISOString(),
-      };
-    });
+    const { rows, json } = await keepersOf(organisationId, query);
+    return page(rows, query.limit, json);
   },
 });
 

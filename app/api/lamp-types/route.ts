@@ -1,11 +1,11 @@
 import { UniqueConstraintError } from 'sequelize';
 import { z } from 'zod';
 import { allow, conflict, created, page, pageQuery, route } from '@/lib/api';
+import { LAMP_TECH_IDS } from '@/simulation';
 import { idSchema } from '@/lib/api/schemas';
 import { lampTypeInputSchema } from '@/lib/lamp-types/schema';
 import { createLampType, listLampTypes, toDto } from '@/lib/lamp-types/store';
 import { ensureStartingCatalogue } from '@/lib/species/seed';
-import { LAMP_TECH_IDS } from '@/models/lamp-type';
 
 /** The organisation's lamp catalogue (`?organisationId=`, optional `tech`). Any member reads. */
 export const GET = route({

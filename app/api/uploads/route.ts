@@ -4,8 +4,7 @@ import { idSchema } from '@/lib/api/schemas';
 import { enclosureForLamps } from '@/lib/lamp-log/access';
 import { MAX_IMAGE_BYTES } from '@/lib/uploads/limits';
 import { readRawBody } from '@/lib/uploads/read-body';
-import { storeBackdrop, uploadJson } from '@/lib/uploads/service';
-import { Upload } from '@/models';
+import { storeBackdrop, uploadJson, uploadsOf } from '@/lib/uploads/service';
 
 /** The uploads of an enclosure (`?enclosureId=&kind=`), newest first. */
 export const GET = route({
@@ -17,11 +16,7 @@ export const GET = route({
   }),
   handler: async ({ query, user }) => {
     const enclosure = await enclosureForLamps(user, query.enclosureId, 'read');
-    const rows = await Upload.findAll({
-      where: { enclosureId: enclosure.id, ...(query.kind ? { kind: query.kind } : {}) },
-      order: [['id', 'DESC']],
-      limit: 100,
-    });
+    const rows = await uploadsOf(enclosure.id, query.kind, 100);
     return { items: rows.map(uploadJson) };
   },
 });

@@ -12,12 +12,11 @@ import { PageHeader } from '@/components/ui/PageHeader';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { card, link } from '@/components/ui/styles';
 import { todayIso } from '@/lib/lamp-log/dates';
+import { lampForPage } from '@/lib/lamp-log/access';
 import { designLampsOf } from '@/lib/lamp-log/design-lamps';
 import { lampDetail } from '@/lib/lamp-log/store';
 import { can } from '@/lib/permissions';
 import { requireUser } from '@/lib/session';
-import { Enclosure, Lamp } from '@/models';
-import { getSequelize } from '@/lib/db';
 
 export const metadata: Metadata = { title: 'Lamp' };
 
@@ -26,20 +25,10 @@ export default async function LampPage({ params }: { params: Promise<{ id: strin
   const user = await requireUser(`/lamp-log/${id}`);
   const lampId = Number(id);
   if (!Number.isSafeInteger(lampId) || lampId <= 0) notFound();
-  getSequelize();
-  const lamp = (await Lamp.findByPk(lampId, {
-    include: [{ model: Enclosure, as: 'enclosure', required: true }],
-  })) as (Lamp & { enclosure: Enclosure }) | null;
-  const resource =
-    lamp &&
-    ({
-      kind: 'lamp',
-      organisationId: lamp.enclosure.organisationId,
-      keeperId: lamp.enclosure.keeperId,
-    } as const);
+  const found = await lampForPage(user, lampId);
   // Someone else's lamp looks exactly like a missing one.
-  if (!lamp || !resource || !can(user, 'read', resource)) notFound();
-  const canEdit = can(user, 'update', resource);
+  if (!found) notFound();
+  const { lamp, canEdit, resource } = found;
   const detail = await lampDetail(lamp, todayIso());
   const designLamps = await designLampsOf(lamp.enclosureId);
   const s = detail.lamp;

@@ -4,8 +4,6 @@ import { StudioLoader } from '@/components/studio/StudioLoader';
 import { requireUser } from '@/lib/session';
 import { getVariantForUser } from '@/lib/variants/variants';
 import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
-import { Enclosure } from '@/models';
-import { getSequelize } from '@/lib/db';
 import { studioPhotos } from '@/lib/uploads/studio-photos';
 
 export const metadata: Metadata = { title: 'Studio' };
@@ -19,9 +17,7 @@ export default async function VariantStudioPage({ params }: { params: Promise<{ 
   // Someone else's variant and a missing one look the same.
   if (!variant) notFound();
   const options = await speciesOptions(variant.enclosure.organisationId);
-  getSequelize();
-  const enclosure = await Enclosure.findByPk(variant.enclosure.id, { attributes: ['speciesName'] });
-  const attached = attachedSpecies(options, enclosure?.speciesName);
+  const attached = attachedSpecies(options, variant.enclosure.speciesName);
   const photos = await studioPhotos(user, variant.enclosure, variant.design.backdrop?.uploadId);
   return (
     <StudioLoader

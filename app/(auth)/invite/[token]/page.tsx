@@ -4,10 +4,8 @@ import { AcceptInvitation } from '@/components/auth/AcceptInvitation';
 import { SignOutButton } from '@/components/shell/SignOutButton';
 import { Notice } from '@/components/ui/Notice';
 import { button } from '@/components/ui/styles';
-import { hashToken, invitationState } from '@/lib/auth/invitations';
-import { getSequelize } from '@/lib/db';
+import { hasAccount, invitationForToken, invitationState } from '@/lib/auth/invitations';
 import { currentUser } from '@/lib/session';
-import { Invitation, Organisation, User } from '@/models';
 
 // The token is in the address: keep it out of Referer headers sent to other sites.
 export const metadata: Metadata = { title: 'Invitation', referrer: 'no-referrer' };
@@ -20,22 +18,16 @@ const ROLE_TEXT = {
 
 export default async function InvitePage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;
-  getSequelize();
-  const invitation = /^[A-Za-z0-9_-]{43}$/.test(token)
-    ? await Invitation.findOne({
-        where: { tokenHash: hashToken(token) },
-        include: [{ model: Organisation, as: 'organisation', attributes: ['name'] }],
-      })
-    : null;
-  if (!invitation) {
+  const found = await invitationForToken(token);
+  if (!found) {
     return (
       <Problem title="This invitation link is not valid">
         Check that the whole link from the e-mail was opened, or ask for a new invitation.
       </Problem>
     );
   }
-  const orgName =
-    (invitation as Invitation & { organisation?: Organisation }).organisation?.name ?? 'the organisation';
+  const { invitation } = found;
+  const orgName = found.organisationName ?? 'the organisation';
   const state = invitationState(invitation);
   if (state !== 'pending') {
     const why = { accepted: 'has already been used', revoked: 'was withdrawn', expired: 'has expired' }[
@@ -87,8 +79,7 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
       </>
     );
   }
-  const hasAccount = Boolean(await User.findOne({ where: { email: invitation.email }, attributes: ['id'] }));
-  if (hasAccount) {
+  if (await hasAccount(invitation.email)) {
     return (
       <>
         {intro}

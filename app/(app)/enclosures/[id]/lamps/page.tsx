@@ -9,17 +9,15 @@ import { EmptyState } from '@/components/ui/EmptyState';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { card, link } from '@/components/ui/styles';
-import { getSequelize } from '@/lib/db';
 import { allLampTypes } from '@/lib/lamp-types/store';
 import { todayIso } from '@/lib/lamp-log/dates';
+import { enclosureForLampsPage } from '@/lib/lamp-log/access';
 import { designLampsOf } from '@/lib/lamp-log/design-lamps';
 import { summarise } from '@/lib/lamp-log/outlook-store';
 import { lampsOfEnclosure } from '@/lib/lamp-log/store';
 import { backdropsOf, uploadJson } from '@/lib/uploads/service';
-import { can } from '@/lib/permissions';
 import { requireUser } from '@/lib/session';
 import { ensureStartingCatalogue } from '@/lib/species/seed';
-import { Enclosure } from '@/models';
 
 export const metadata: Metadata = { title: 'Lamps of an enclosure' };
 
@@ -28,13 +26,9 @@ export default async function EnclosureLampsPage({ params }: { params: Promise<{
   const user = await requireUser(`/enclosures/${id}/lamps`);
   const enclosureId = Number(id);
   if (!Number.isSafeInteger(enclosureId) || enclosureId <= 0) notFound();
-  getSequelize();
-  const enclosure = await Enclosure.findByPk(enclosureId);
-  const resource =
-    enclosure &&
-    ({ kind: 'lamp', organisationId: enclosure.organisationId, keeperId: enclosure.keeperId } as const);
-  if (!enclosure || !resource || !can(user, 'read', resource)) notFound();
-  const canEdit = can(user, 'update', resource);
+  const found = await enclosureForLampsPage(user, enclosureId);
+  if (!found) notFound();
+  const { enclosure, canEdit } = found;
   await ensureStartingCatalogue(enclosure.organisationId);
   const [rows, lampTypes, designLamps, backdrops] = await Promise.all([
     lampsOfEnclosure(enclosure.id, { limit: 200 }),

@@ -1,18 +1,8 @@
-import type { Transaction } from 'sequelize';
 import { z } from 'zod';
-import { afterCursor, allow, conflict, notFound, page, pageQuery, route } from '@/lib/api';
-import { endAllSessions } from '@/lib/account/service';
+import { allow, page, pageQuery, route } from '@/lib/api';
 import { idParams, idSchema, roleSchema } from '@/lib/api/schemas';
-import { getSequelize } from '@/lib/db';
-import { Membership, User } from '@/models';
-
-const memberJson = (m: Membership & { user?: User }) => ({
-  userId: m.userId,
-  name: m.user?.name ?? '',
-  email: m.user?.email ?? '',
-  role: m.role,
-  joinedAt: m.createdAt.toISOString(),
-});
+import { changeMemberRole, removeMember } from '@/lib/organisations/mutations';
+import { memberJson, membersOf } from '@/lib/organisations/queries';
 
 /** The organisation's members (owner and staff). */
 export const GET = route({
@@ -20,17 +10,7 @@ export const GET = route({
   query: z.object({ ...pageQuery, role: roleSchema.optional() }),
   handler: async ({ params, query, user }) => {
     allow(user, 'read', { kind: 'member', organisationId: params.id }, 'That organisation');
-    const rows = await Membership.findAll({
-      where: {
-        organisationId: params.id,
-        ...(query.role ? { role: query.role } : {}),
-        ...afterCursor(query.cursor),
-      },
-      include: [{ model: User, as: 'user', attributes: ['id', 'name', 'email'] }],
-      order: [['id', 'ASC']],
-      limit: query.limit + 1,
-    });
-    return page(rows, query.limit, memberJson);
+    return page(await membersOf(params.id, query), query.limit, memberJson);
   },
 });
 
@@ -45,21 +25,7 @@ export const PATCH = route({
       { kind: 'member', organisationId: params.id, userId: body.userId },
       'That organisation',
     );
-    const sequelize = getSequelize();
-    return sequelize.transaction(async (transaction) => {
-      const owners = await lockOwners(params.id, transaction);
-      const member = await Membership.findOne({
-        where: { organisationId: params.id, userId: body.userId },
-        include: [{ model: User, as: 'user', attributes: ['id', 'name', 'email'] }],
-        lock: transaction.LOCK.UPDATE,
-        transaction,
-      });
-      if (!member) throw notFound('That member');
-      if (member.role === 'owner' && body.role !== 'owner') assertAnotherOwner(owners);
-      member.role = body.role;
-      await member.save({ transaction });
-      return memberJson(member);
-    });
+    return changeMemberRole(params.id, body.userId, body.role);
   },
 });
 
@@ -74,37 +40,7 @@ export const DELETE = route({
       { kind: 'member', organisationId: params.id, userId: query.userId },
       'That organisation',
     );
-    const sequelize = getSequelize();
-    await sequelize.transaction(async (transaction) => {
-      const owners = await lockOwners(params.id, transaction);
-      const member = await Membership.findOne({
-        where: { organisationId: params.id, userId: query.userId },
-        lock: transaction.LOCK.UPDATE,
-        transaction,
-      });
-      if (!member) throw notFound('That member');
-      if (member.role === 'owner') assertAnotherOwner(owners);
-      await member.destroy({ transaction });
-      await endAllSessions(query.userId, transaction);
-    });
+    await removeMember(params.id, query.userId);
     return { ok: true };
   },
 });
-
-/** Locks the owner rows first (always in this order), so two owners cannot demote each other at once. */
-function lockOwners(organisationId: number, transaction: Transaction) {
-  return Membership.findAll({
-    where: { organisationId, role: 'owner' },
-    lock: transaction.LOCK.UPDATE,
-    transaction,
-  });
-}
-
-function assertAnotherOwner(owners: Membership[]) {
-  if (owners.length < 2) {
-    throw conflict(
-      'An organisation needs at least one owner. Make someone else an owner first.',
-      'last_owner',
-    );
-  }
-}

@@ -1,13 +1,12 @@
 import { z } from 'zod';
 import { notFound, route } from '@/lib/api';
 import { download, fileBase, reportPdf, fieldPng } from '@/lib/reports/build';
+import { organisationName } from '@/lib/organisations/queries';
 import { findSheet } from '@/lib/species/store';
-import { getSequelize } from '@/lib/db';
 import { variantFor } from '@/lib/variants/access';
 import { idParams } from '@/lib/variants/schemas';
 import { attachedSpecies, speciesOptions, type SpeciesOption } from '@/lib/variants/species';
 import { readStoredDesign } from '@/lib/variants/stored-design';
-import { Organisation } from '@/models';
 
 const exportQuery = z.object({
   format: z.enum(['json', 'png', 'pdf'], { error: 'format must be json, png or pdf.' }).default('json'),
@@ -47,8 +46,7 @@ export const GET = route({
     if (query.format === 'png') {
       return download(new Uint8Array(fieldPng(subject, query)), 'image/png', `${base}-${query.field}.png`);
     }
-    getSequelize();
-    const organisation = await Organisation.findByPk(enclosure.organisationId, { attributes: ['name'] });
+    const organisation = await organisationName(enclosure.organisationId);
     const options = await speciesOptions(enclosure.organisationId);
     let species: SpeciesOption | null;
     if (query.species) {
@@ -60,7 +58,7 @@ export const GET = route({
       species = attachedSpecies(options, enclosure.speciesName);
     }
     const pdf = await reportPdf(
-      { ...subject, organisationName: organisation?.name ?? '' },
+      { ...subject, organisationName: organisation ?? '' },
       { field: query.field, months: query.months, species },
     );
     return download(new Uint8Array(pdf), 'application/pdf', `${base}.pdf`);
