@@ -1,3 +1,4 @@
+import 'server-only';
 import { Op } from 'sequelize';
 import { getSequelize } from '@/lib/db';
 import { MAX_ATTEMPTS } from '@/lib/reminders/outbox';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { Op, QueryTypes } from 'sequelize';
 import { getSequelize } from '@/lib/db';
 import { toDto as lampTypeDto } from '@/lib/lamp-types/store';
