@@ -2,7 +2,7 @@
 
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
-import { ApiClientError } from './api';
+import { ApiClientError } from '@/components/ui/api-client';
 
 /**
  * Data fetching for the designs sections only (the rest of the app does not need it). One client per

@@ -2,7 +2,8 @@
 
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { useRef, useState } from 'react';
-import { variantsApi, ApiClientError } from './api';
+import { ApiClientError } from '@/components/ui/api-client';
+import { variantsApi } from './api';
 import { btn, input } from './styles';
 
 /** Largest design file accepted from disk; the API refuses bodies over 1 MB anyway. */

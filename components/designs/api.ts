@@ -1,50 +1,7 @@
 'use client';
 
+import { apiFetch } from '@/components/ui/api-client';
 import type { DesignSummary, ShareView, VariantDetail, VariantSummary } from '@/lib/variants/views';
-
-/** A failed API call, with the server's typed error (code, message, field) for the UI to show. */
-export class ApiClientError extends Error {
-  constructor(
-    readonly status: number,
-    readonly code: string,
-    message: string,
-    readonly field?: string,
-    readonly body?: unknown,
-  ) {
-    super(message);
-    this.name = 'ApiClientError';
-  }
-}
-
-type ErrorBody = { error?: { code?: string; message?: string; field?: string } };
-
-export async function apiFetch<T>(url: string, init: RequestInit & { json?: unknown } = {}): Promise<T> {
-  const { json, ...rest } = init;
-  let res: Response;
-  try {
-    res = await fetch(url, {
-      credentials: 'same-origin',
-      cache: 'no-store',
-      ...rest,
-      headers: { ...(json !== undefined ? { 'content-type': 'application/json' } : {}), ...rest.headers },
-      body: json !== undefined ? JSON.stringify(json) : rest.body,
-    });
-  } catch {
-    throw new ApiClientError(0, 'offline', 'Baskwell cannot be reached. Check the connection and try again.');
-  }
-  const body = (await res.json().catch(() => null)) as (T & ErrorBody) | null;
-  if (!res.ok) {
-    const e = body?.error;
-    throw new ApiClientError(
-      res.status,
-      e?.code ?? 'error',
-      e?.message ?? `The request failed (${res.status}).`,
-      e?.field,
-      body,
-    );
-  }
-  return body as T;
-}
 
 export type Page<T> = { items: T[]; nextCursor: string | null };
 

@@ -1,16 +1,19 @@
-/** What the enclosure screens get from the server (plain data, safe to pass to client components). */
-export type EnclosureView = {
-  id: number;
-  name: string;
-  keeperId: number;
-  keeperName: string | null;
-  widthCm: number;
-  heightCm: number;
-  depthCm: number;
-  speciesName: string | null;
-  animalName: string | null;
-  notes: string | null;
-  updatedAt: string;
-};
+import type { EnclosureJson } from '@/lib/api/enclosures';
+
+/** What the enclosure screens read of the API's enclosure (plain data, safe to pass to client components). */
+export type EnclosureView = Pick<
+  EnclosureJson,
+  | 'id'
+  | 'name'
+  | 'keeperId'
+  | 'keeperName'
+  | 'widthCm'
+  | 'heightCm'
+  | 'depthCm'
+  | 'speciesName'
+  | 'animalName'
+  | 'notes'
+  | 'updatedAt'
+>;
 
 export type PersonOption = { id: number; name: string; role: string };

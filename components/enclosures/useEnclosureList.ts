@@ -3,7 +3,7 @@
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
 import { useSearchParams } from 'next/navigation';
 import { useCallback, useEffect, useMemo, useState } from 'react';
-import { apiFetch } from '@/components/designs/api';
+import { apiFetch } from '@/components/ui/api-client';
 import {
   apiQueryForView,
   type EnclosureListView,

@@ -1,7 +1,7 @@
 'use client';
 
 import { useState, type ChangeEvent } from 'react';
-import { ApiClientError, sendJson } from '@/components/ui/api-client';
+import { ApiClientError, apiFetch, sendJson } from '@/components/ui/api-client';
 import { Notice } from '@/components/ui/Notice';
 import { button, input } from '@/components/ui/styles';
 
@@ -44,20 +44,10 @@ export function BackdropPanel({
       );
     setBusy(true);
     try {
-      const res = await fetch(
+      const data = await apiFetch<{ upload: BackdropView }>(
         `/api/uploads?kind=backdrop&enclosureId=${enclosureId}&name=${encodeURIComponent(f.name)}`,
-        {
-          method: 'POST',
-          headers: { 'content-type': f.type || 'application/octet-stream' },
-          body: f,
-        },
+        { method: 'POST', headers: { 'content-type': f.type || 'application/octet-stream' }, body: f },
       );
-      const data = (await res.json().catch(() => null)) as {
-        upload?: BackdropView;
-        error?: { message?: string };
-      } | null;
-      if (!res.ok || !data?.upload)
-        throw new Error(data?.error?.message ?? `The upload failed (${res.status}).`);
       setItems([data.upload, ...items]);
     } catch (err) {
       setError(err instanceof Error ? err.message : 'The upload failed.');

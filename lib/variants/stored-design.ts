@@ -1,18 +1,4 @@
 import { parseDesign, type Design } from '@/simulation';
-import { ApiError } from '@/lib/api';
-
-/**
- * The design file as the API receives it: validated (and migrated from older versions) by the engine's
- * own parser, so the database only ever holds documents the studio and the engine can read. A failure
- * answers 400 naming the field, e.g. `design.objects[2].uvbAt30`.
- */
-export function validateDesign(input: unknown, fieldPrefix = 'design'): Design {
-  const r = parseDesign(input);
-  if (r.ok) return r.design;
-  const field = r.error.path ? `${fieldPrefix}.${r.error.path}` : fieldPrefix;
-  const message = `${field}: ${r.error.message}`;
-  throw new ApiError(400, 'invalid', message, field, [{ field, message: r.error.message }]);
-}
 
 export const serializeDesign = (design: Design): string => JSON.stringify(design);
 
