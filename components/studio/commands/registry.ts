@@ -2,6 +2,7 @@
 // keyboard all read this list, so a command has exactly one label, one shortcut set and one action.
 import * as A from '../state/actions';
 import * as B from '../state/backdropActions';
+import * as Z from '../state/depthActions';
 import { isPlaceTool, type Tool } from '../state/session';
 import type { StudioStore } from '../state/store';
 import { canonicalShortcut, normaliseKey, type KeyLike } from './shortcuts';
@@ -12,7 +13,8 @@ export interface CommandContext {
   saveNow?: () => void;
 }
 
-export type CommandGroup = 'Tools' | 'Edit' | 'Arrange' | 'View' | 'Fields' | 'Photo' | 'Units' | 'Help';
+export type CommandGroup =
+  'Tools' | 'Edit' | 'Arrange' | 'Depth' | 'View' | 'Fields' | 'Photo' | 'Units' | 'Help';
 
 export interface Command {
   id: string;
@@ -34,6 +36,7 @@ const editable = ({ store }: CommandContext) => !store.readOnly;
 const photoStudio = ({ store }: CommandContext) => B.hasEnclosurePhotos(store);
 const hasBackdrop = (ctx: CommandContext) => editable(ctx) && ctx.store.design.backdrop !== undefined;
 const hasSelection = (ctx: CommandContext) => editable(ctx) && ctx.store.session.selection.length > 0;
+const hasSelectedLamp = (ctx: CommandContext) => editable(ctx) && Z.selectedLamps(ctx.store).length > 0;
 
 function tool(id: Tool, label: string, key: string): Command {
   return {
@@ -216,6 +219,49 @@ export const COMMANDS: readonly Command[] = [
     shortcuts: ['{'],
     run: ({ store }) => A.arrangeSelection(store, 'back'),
     enabled: hasSelection,
+  },
+  {
+    id: 'depth.sectionBack',
+    label: 'Move the side view towards the back',
+    group: 'Depth',
+    shortcuts: ['Alt+ArrowUp'],
+    run: ({ store }) => Z.moveSection(store, 1),
+    enabled: editable,
+  },
+  {
+    id: 'depth.sectionFront',
+    label: 'Move the side view towards the front',
+    group: 'Depth',
+    shortcuts: ['Alt+ArrowDown'],
+    run: ({ store }) => Z.moveSection(store, -1),
+    enabled: editable,
+  },
+  {
+    id: 'depth.lampBack',
+    label: 'Move the selected lamp towards the back',
+    group: 'Depth',
+    shortcuts: ['PageUp'],
+    run: ({ store }) => Z.moveSelectedLampsDepth(store, 1),
+    enabled: hasSelectedLamp,
+  },
+  {
+    id: 'depth.lampFront',
+    label: 'Move the selected lamp towards the front',
+    group: 'Depth',
+    shortcuts: ['PageDown'],
+    run: ({ store }) => Z.moveSelectedLampsDepth(store, -1),
+    enabled: hasSelectedLamp,
+  },
+  {
+    id: 'depth.sectionToLamp',
+    label: 'Show the side view through the selected lamp',
+    group: 'Depth',
+    shortcuts: ['Shift+L'],
+    run: ({ store }) => {
+      const lamp = Z.selectedLamps(store)[0];
+      if (lamp) Z.sectionThroughLamp(store, lamp.id);
+    },
+    enabled: hasSelectedLamp,
   },
   {
     id: 'view.zoomIn',

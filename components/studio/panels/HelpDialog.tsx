@@ -6,7 +6,17 @@ import { displayShortcut } from '../commands/shortcuts';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
 import { focusRing } from './CommandButton';
 
-const ORDER: CommandGroup[] = ['Tools', 'Edit', 'Arrange', 'View', 'Fields', 'Photo', 'Units', 'Help'];
+const ORDER: CommandGroup[] = [
+  'Tools',
+  'Edit',
+  'Arrange',
+  'Depth',
+  'View',
+  'Fields',
+  'Photo',
+  'Units',
+  'Help',
+];
 
 export function HelpDialog() {
   const ctx = useCommandContext();

@@ -12,9 +12,14 @@ import { calibrationDate } from '../state/calibration';
 import type { LampObject } from '../state/types';
 import { Grid2, NumberField, Section, SelectField } from './FormFields';
 import { useObjectEdit } from './useObjectEdit';
+import { useCommandContext, useStudio } from '../hooks/useStudio';
+import { checkWithinDepth } from './validate';
 
 export function LampForm({ lamp }: { lamp: LampObject }) {
-  const { field, replace } = useObjectEdit(lamp);
+  const { field, replace, units } = useObjectEdit(lamp);
+  const { store } = useCommandContext();
+  const depth = useStudio(store, (s) => s.history.present.enclosure.depth);
+  const z = field('z', 'length');
   const d = LAMP_TECHS[lamp.tech];
   const preset = matchingPreset(lamp);
   return (
@@ -78,6 +83,15 @@ export function LampForm({ lamp }: { lamp: LampObject }) {
           {lamp.form === 'tube' && (
             <NumberField label="Tube length" testId="field-length" {...field('length', 'length')} />
           )}
+          <NumberField
+            label="From the front"
+            optional
+            fallback={depth / 2}
+            testId="field-z"
+            hint="Depth: 0 is the front glass"
+            {...z}
+            check={(v) => checkWithinDepth(v, depth, units) ?? z.check(v)}
+          />
         </Grid2>
       </Section>
       <Section title="Output">

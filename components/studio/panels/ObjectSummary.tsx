@@ -8,17 +8,21 @@ import { TYPE_NAMES } from '../state/document';
 import { isBox, isSegment, type DesignObject } from '../state/types';
 import type { LengthUnit } from '@/shared/units';
 import type { BackdropImageState, EnclosurePhotos } from '../state/session';
-import type { Backdrop } from '../state/types';
+import type { Backdrop, Design } from '../state/types';
+import { depthRelation, lampDepth, sectionDepth } from '../state/depth';
 import type { HighlightShape } from '../canvas/Overlay';
 import { LAMP_TECHS } from '@/simulation';
 
-export function describeObject(o: DesignObject, u: LengthUnit): string {
+export function describeObject(o: DesignObject, u: LengthUnit, design?: Design): string {
   const name = `${TYPE_NAMES[o.type]}${o.name ? ` “${o.name}”` : ''}`;
   const L = (v: number) => formatLength(v, u);
   if (o.type === 'lamp') {
     const size = o.form === 'tube' ? `, ${L(o.length ?? 0)} long` : '';
     const calibrated = calibrationLabel(o);
-    return `${name}: ${LAMP_TECHS[o.tech].label}${size}, at ${L(o.x)} from the left, ${L(o.y)} up${calibrated ? `, ${calibrated}` : ''}`;
+    const depth = design
+      ? `, ${L(lampDepth(design, o))} from the front (${depthRelation(design, o, u)})`
+      : '';
+    return `${name}: ${LAMP_TECHS[o.tech].label}${size}, at ${L(o.x)} from the left, ${L(o.y)} up${depth}${calibrated ? `, ${calibrated}` : ''}`;
   }
   if (isSegment(o)) {
     const extra = o.type === 'perch' ? `, ${L(o.thickness)} thick` : '';
@@ -91,13 +95,14 @@ export function ObjectSummary({
     <div id={id} className="sr-only" data-testid="object-summary" data-highlight={highlight?.findingId ?? ''}>
       <p>
         Enclosure {formatLength(e.width, unit)} wide, {formatLength(e.height, unit)} high,{' '}
-        {formatLength(e.depth, unit)} deep; {design.objects.length} objects
+        {formatLength(e.depth, unit)} deep, side view {formatLength(sectionDepth(design), unit)} from the
+        front; {design.objects.length} objects
         {selection.length ? `, ${selection.length} selected` : ''}.
       </p>
       <ul>
         {design.objects.map((o) => (
           <li key={o.id}>
-            {describeObject(o, unit)}
+            {describeObject(o, unit, design)}
             {selection.includes(o.id) ? ' (selected)' : ''}
           </li>
         ))}

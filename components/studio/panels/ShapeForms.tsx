@@ -13,7 +13,7 @@ import { focusRing } from './CommandButton';
 import type { BoxObject, Enclosure, ProbePoint, SegmentObject } from '../state/types';
 import { Grid2, NumberField, Section, TextField } from './FormFields';
 import { useObjectEdit, useUnits } from './useObjectEdit';
-import { checkEnclosureEdit, type FieldKind } from './validate';
+import { checkEnclosureEdit, checkWithinDepth, type FieldKind } from './validate';
 
 export function SegmentForm({ o }: { o: SegmentObject }) {
   const { field, units } = useObjectEdit(o);
@@ -172,6 +172,18 @@ export function EnclosureForm() {
         <NumberField label="Width" testId="enclosure-width" {...f('width', 'length')} />
         <NumberField label="Height" testId="enclosure-height" {...f('height', 'length')} />
         <NumberField label="Depth" testId="enclosure-depth" {...f('depth', 'length')} />
+        <NumberField
+          label="Side view at"
+          optional
+          fallback={enclosure.depth / 2}
+          testId="enclosure-sectionZ"
+          hint="From the front: the fields’ plane"
+          {...f('sectionZ', 'length')}
+          check={(v) =>
+            checkWithinDepth(v, enclosure.depth, units) ??
+            checkEnclosureEdit(enclosure, 'sectionZ', v, 'length', units)
+          }
+        />
         <NumberField
           label="Room temperature"
           optional

@@ -7,6 +7,7 @@ import type { SimView } from '../fields/simTypes';
 import type { SideTab } from '../state/session';
 import type { StudioSpecies } from '../state/types';
 import { AGEING_HORIZON_MONTHS, AssessmentPanel, StatusBadge } from './AssessmentPanel';
+import { DepthStrip } from './DepthStrip';
 import { focusRing } from './CommandButton';
 import { FieldsPanel } from './FieldsPanel';
 import { Inspector } from './Inspector';
@@ -94,6 +95,7 @@ export function SidePanel({
       className="flex w-[22rem] shrink-0 flex-col border-l border-basalt-200 bg-white"
     >
       <Ageing />
+      <DepthStrip />
       <div role="tablist" aria-label="Panels" className="flex border-b border-basalt-200" onKeyDown={onKey}>
         {TABS.map((t) => (
           <button

@@ -94,6 +94,19 @@ export function checkBackdropEdit(
   return { ok: false, message: issue ? issueMessage(issue, 'length', u) : 'Not valid.' };
 }
 
+/**
+ * A depth (cm from the front) must lie inside the enclosure's depth: a rule of the whole design that the
+ * per-object schema cannot see. Null when it does (or is left to the default, half the depth).
+ */
+export function checkWithinDepth(
+  value: number | undefined,
+  depth: number,
+  u: DisplayUnits,
+): { ok: false; message: string } | null {
+  if (value === undefined || !(value > depth)) return null;
+  return { ok: false, message: `Must be at most ${limit(depth, 'length', u)}, the enclosure's depth.` };
+}
+
 /** Parses what the user typed (accepting a decimal comma); null for empty, NaN for nonsense. */
 export function parseTyped(text: string): number | null {
   const t = text.trim().replace(',', '.');

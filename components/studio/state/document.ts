@@ -1,6 +1,7 @@
 // Pure edits of the design document. Every function returns a new document (or the same
 // reference when nothing changed, so the history records no empty steps).
 import { translateObject } from '../geometry/objects';
+import { keepWithinDepth } from './depth';
 import type { Backdrop, Design, DesignObject, Enclosure, ObjectType, ProbePoint } from './types';
 
 /** The next free id for a type: "perch-3". Ids are unique within the design (schema rule). */
@@ -139,7 +140,8 @@ export function setEnclosure(design: Design, patch: Partial<Enclosure>): Design 
   for (const [k, v] of Object.entries(patch)) {
     if (v === undefined) delete (enclosure as Record<string, unknown>)[k];
   }
-  return { ...design, enclosure };
+  // A shallower enclosure brings the side view and lamps beyond its back to the back, in the same step.
+  return keepWithinDepth({ ...design, enclosure });
 }
 
 function withProbes(design: Design, probes: ProbePoint[] | undefined): Design {
