@@ -40,15 +40,21 @@ export async function reminderWork(ctx: JobContext, opts: ReminderOptions = {}):
   const items: DueWithOrganisation[] = [];
 
   for (let cursor = 0; ;) {
-    const lamps = (await Lamp.findAll({
+    // The lamps alone, by primary key: joined to their enclosures and sorted by id, MariaDB would build
+    // and sort the whole join for every batch (seconds at 8,000 lamps).
+    const lamps = await Lamp.findAll({
       where: { retiredOn: null, id: { [Op.gt]: cursor } },
-      include: [{ model: Enclosure, as: 'enclosure', attributes: ['id', 'organisationId'], required: true }],
       order: [['id', 'ASC']],
       limit: BATCH,
-    })) as (Lamp & { enclosure: Enclosure })[];
+    });
     if (lamps.length === 0) break;
     cursor = lamps[lamps.length - 1]!.id;
-    const organisationOf = new Map(lamps.map((l) => [l.id, l.enclosure.organisationId]));
+    const enclosures = await Enclosure.findAll({
+      where: { id: [...new Set(lamps.map((l) => l.enclosureId))] },
+      attributes: ['id', 'organisationId'],
+    });
+    const organisationOfEnclosure = new Map(enclosures.map((e) => [e.id, e.organisationId]));
+    const organisationOf = new Map(lamps.map((l) => [l.id, organisationOfEnclosure.get(l.enclosureId)!]));
     const due = (summaries: Awaited<ReturnType<typeof summarise>>) =>
       dueItems(
         summaries.map((s) => ({

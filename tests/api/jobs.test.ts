@@ -44,7 +44,7 @@ async function plantedRun() {
             organisationId: org.id,
           },
           async () => {
-            throw new Error(`planted failure in ${org.name}`);
+            throw new Error(`planted failure in ${org.name}\nsql: INSERT INTO mail_messages VALUES ('x')`);
           },
         );
       }
@@ -136,6 +136,7 @@ describe('GET /api/organisations/:id/jobs', () => {
       }),
     ]);
     expect(r.text).not.toContain(otherShop.name);
+    expect(r.text).not.toContain('INSERT INTO');
     expect(r.text).not.toContain('bob@example.com');
 
     // The other organisation's owner sees their own share and failure.
