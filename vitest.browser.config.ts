@@ -1,8 +1,14 @@
+import path from 'node:path';
 import { defineConfig } from 'vitest/config';
 
 // Browser journeys (tests/browser/*.browser.ts) against the app served by scripts/test.mjs.
 export default defineConfig({
-  resolve: { tsconfigPaths: true },
+  resolve: {
+    tsconfigPaths: true,
+    // The journeys read the test database through the server modules: `server-only` is an empty module
+    // outside Next, as in vitest.config.ts.
+    alias: { 'server-only': path.join(import.meta.dirname, 'scripts', 'lib', 'server-only-empty.mjs') },
+  },
   test: {
     include: ['tests/browser/**/*.browser.ts'],
     environment: 'node',
