@@ -2,7 +2,7 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import * as jobs from '@/app/api/organisations/[id]/jobs/route';
 import { runJob } from '@/lib/jobs/runner';
 import { JobRun, MailMessage, type Organisation, type User } from '@/models';
-import { addMember, createMember, createUser, withTestDatabase } from '../helpers/db';
+import { createWorld, withTestDatabase } from '../helpers/db';
 import { call } from './http';
 
 // The owner's view of the background jobs: who may read it, and that it shows the runs with only this
@@ -17,12 +17,7 @@ let outsider: User;
 let otherShop: Organisation;
 
 beforeEach(async () => {
-  ({ organisation: shop, user: owner } = await createMember('owner'));
-  staff = (await createUser()).user;
-  keeper = (await createUser()).user;
-  await addMember(shop, staff, 'staff');
-  await addMember(shop, keeper, 'keeper');
-  ({ organisation: otherShop, user: outsider } = await createMember('owner'));
+  ({ shop, owner, staff, keeper, otherOrg: otherShop, outsider } = await createWorld());
 });
 
 const list = (as: User | null, organisationId = shop.id) =>

@@ -4,13 +4,7 @@ import * as item from '@/app/api/lamp-types/[id]/route';
 import { STARTING_LAMP_TYPES } from '@/lib/lamp-types/starting-lamp-types';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { Lamp, LampType, type Organisation, type User } from '@/models';
-import {
-  addMember,
-  createEnclosure,
-  createMember,
-  createUser,
-  useTestDatabase as withTestDatabase,
-} from '../helpers/db';
+import { createWorld, createEnclosure, useTestDatabase as withTestDatabase } from '../helpers/db';
 import { call, expectNoInternals } from './http';
 
 withTestDatabase();
@@ -22,12 +16,7 @@ let keeper: User;
 let outsider: User;
 
 beforeEach(async () => {
-  ({ organisation: shop, user: owner } = await createMember('owner'));
-  staff = (await createUser()).user;
-  keeper = (await createUser()).user;
-  await addMember(shop, staff, 'staff');
-  await addMember(shop, keeper, 'keeper');
-  ({ user: outsider } = await createMember('owner'));
+  ({ shop, owner, staff, keeper, outsider } = await createWorld());
 });
 
 const list = (as: User | null, extra = '') =>

@@ -3,14 +3,7 @@ import * as enclosures from '@/app/api/enclosures/route';
 import * as keepers from '@/app/api/keepers/route';
 import * as members from '@/app/api/organisations/[id]/members/route';
 import { Membership, User, type Organisation } from '@/models';
-import {
-  addMember,
-  closeDatabase,
-  createEnclosure,
-  createMember,
-  createUser,
-  resetDatabase,
-} from '../helpers/db';
+import { createWorld, closeDatabase, createEnclosure, resetDatabase } from '../helpers/db';
 import { call, sessionCookie } from './http';
 
 afterAll(closeDatabase);
@@ -23,12 +16,10 @@ let outsider: User;
 
 beforeEach(async () => {
   await resetDatabase();
-  ({ organisation: shop, user: owner } = await createMember('owner'));
-  staff = (await createUser({ name: 'Staff Person' })).user;
-  keeper = (await createUser({ name: 'Keeper Person' })).user;
-  await addMember(shop, staff, 'staff');
-  await addMember(shop, keeper, 'keeper');
-  ({ user: outsider } = await createMember('owner'));
+  ({ shop, owner, staff, keeper, outsider } = await createWorld({
+    staff: 'Staff Person',
+    keeper: 'Keeper Person',
+  }));
 });
 
 const path = () => `/api/organisations/${shop.id}/members`;

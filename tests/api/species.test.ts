@@ -4,13 +4,7 @@ import * as item from '@/app/api/species/[id]/route';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { STARTING_SHEETS } from '@/lib/species/starting-sheets';
 import { CatalogueSeeding, LampType, Organisation, SpeciesSheet, type User } from '@/models';
-import {
-  addMember,
-  createMember,
-  createUser,
-  testDb,
-  useTestDatabase as withTestDatabase,
-} from '../helpers/db';
+import { createWorld, testDb, useTestDatabase as withTestDatabase } from '../helpers/db';
 import { call, expectNoInternals } from './http';
 
 withTestDatabase();
@@ -23,12 +17,7 @@ let otherOrg: Organisation;
 let outsider: User;
 
 beforeEach(async () => {
-  ({ organisation: shop, user: owner } = await createMember('owner'));
-  staff = (await createUser()).user;
-  keeper = (await createUser()).user;
-  await addMember(shop, staff, 'staff');
-  await addMember(shop, keeper, 'keeper');
-  ({ organisation: otherOrg, user: outsider } = await createMember('owner'));
+  ({ shop, owner, staff, keeper, otherOrg, outsider } = await createWorld());
 });
 
 const list = (as: User | null, organisationId: number, extra = '') =>

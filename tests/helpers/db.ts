@@ -196,3 +196,17 @@ export async function createEnclosure(
     ...overrides,
   });
 }
+
+/**
+ * The people most access tests need: a shop with an owner, a member of staff and a keeper, and an owner
+ * of another organisation (the outsider, who must learn nothing about the shop).
+ */
+export async function createWorld(names: { staff?: string; keeper?: string } = {}) {
+  const { organisation: shop, user: owner } = await createMember('owner');
+  const staff = (await createUser({ name: names.staff })).user;
+  const keeper = (await createUser({ name: names.keeper })).user;
+  await addMember(shop, staff, 'staff');
+  await addMember(shop, keeper, 'keeper');
+  const { organisation: otherOrg, user: outsider } = await createMember('owner');
+  return { shop, owner, staff, keeper, otherOrg, outsider };
+}
