@@ -11,7 +11,13 @@ import { useSimulation } from './fields/useSimulation';
 import { StudioContext, useStudio } from './hooks/useStudio';
 import { useShortcuts } from './hooks/useShortcuts';
 import { useBackdropImage } from './hooks/useBackdropImage';
-import { ConflictBanner, RestoreBanner, ViewOnlyBanner } from './panels/Banners';
+import {
+  ConflictBanner,
+  RestoreBanner,
+  SafetyBanner,
+  SAFETY_FINDINGS,
+  ViewOnlyBanner,
+} from './panels/Banners';
 import { CanvasLegend } from './panels/CanvasLegend';
 import { HelpDialog } from './panels/HelpDialog';
 import { ObjectSummary } from './panels/ObjectSummary';
@@ -168,6 +174,10 @@ function StudioEditor({
   const highlightId = useStudio(store, (s) => s.session.highlight);
 
   const sim = useSimulation(store, species);
+  const speciesId = useStudio(store, (s) => s.session.speciesId);
+  const safety = (sim.assessment?.findings ?? []).filter(
+    (f) => SAFETY_FINDINGS.has(f.id) && f.status !== 'pass',
+  );
   const { bands, legend } = useBands(sim.grid, field, tempUnit, fieldsVisible);
   const highlighted = useMemo(() => {
     const f = sim.assessment?.findings.find((x) => x.id === highlightId);
@@ -200,6 +210,9 @@ function StudioEditor({
         {save.state.kind === 'conflict' && (
           <ConflictBanner onKeepMine={save.keepMine} onTakeTheirs={save.takeTheirs} />
         )}
+        {safety.length > 0 && (
+          <SafetyBanner findings={safety} onShow={(id) => store.setSession({ highlight: id })} />
+        )}
         <div className="flex min-h-0 flex-1">
           <Palette />
           <main className="relative min-w-0 flex-1" aria-label="Canvas">
@@ -212,6 +225,8 @@ function StudioEditor({
               highlight={highlight}
               summaryId={summaryId}
               photo={photo}
+              basking={sim.assessment?.findings.find((f) => f.id === 'shared-basking')}
+              climbs={species.find((s) => s.id === speciesId)?.climbs === true}
             />
             <ObjectSummary id={summaryId} highlight={highlighted} />
             {fieldsVisible && <CanvasLegend field={field} temp={tempUnit} legend={legend} />}

@@ -22,6 +22,8 @@ import type { FieldGrid } from '@/simulation';
 import { CanvasInteraction, type Modifiers } from './interaction';
 import { BackdropPhoto, EnclosureBack, EnclosureWalls, GridShape } from './Backdrop';
 import { BackdropFrame } from './BackdropFrame';
+import { HusbandryLayer } from './HusbandryLayer';
+import type { Finding } from '../fields/engineTypes';
 import { FieldBands, type ColouredBand } from './FieldBands';
 import { ObjectShape } from './ObjectShape';
 import {
@@ -53,6 +55,10 @@ export interface CanvasProps {
   summaryId: string;
   /** The backdrop's photo once loaded (and only if this user may see it). */
   photo: HTMLImageElement | null;
+  /** The shared-basking finding of the current check, if a species is chosen. */
+  basking?: Finding;
+  /** The chosen species climbs: its mesh is marked. */
+  climbs?: boolean;
 }
 
 function mods(
@@ -89,6 +95,8 @@ export default function StudioCanvas({
   highlight,
   summaryId,
   photo,
+  basking,
+  climbs = false,
 }: CanvasProps) {
   const wrap = useRef<HTMLDivElement>(null);
   const ui = useMemo(() => new CanvasInteraction(store), [store]);
@@ -274,6 +282,7 @@ export default function StudioCanvas({
           ))}
         </Layer>
         <Layer listening={false}>
+          <HusbandryLayer cam={cam} design={design} basking={basking} climbs={climbs} />
           <HighlightLayer cam={cam} design={design} shape={highlight} />
           {photoShown && session.backdropAdjust && <BackdropFrame cam={cam} backdrop={photoShown} />}
           <SelectionLayer cam={cam} objects={selected} showHandles={session.tool === 'select'} />

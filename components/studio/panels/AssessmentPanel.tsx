@@ -169,6 +169,19 @@ export function AssessmentPanel({ sim, species }: { sim: SimView; species: Studi
           </p>
         </Section>
       )}
+      {!sheet && a && (
+        <Section title="Safety checks" actions={<StatusBadge status={a.overall} />}>
+          <p className="text-caption text-basalt-600">
+            No species chosen: lamps within reach, UV near the eyes and surfaces too hot to touch are checked
+            against general limits. Choose a sheet for the full check.
+          </p>
+          <ul className="flex flex-col gap-1.5" aria-label="Safety findings">
+            {a.findings.map((f) => (
+              <FindingItem key={f.id} f={f} />
+            ))}
+          </ul>
+        </Section>
+      )}
       <Cautions />
     </div>
   );

@@ -144,3 +144,33 @@ export function ViewOnlyBanner({
     </div>
   );
 }
+
+/** Findings about harm to the animal or the keeper: shown above every tab, with or without a species. */
+export const SAFETY_FINDINGS = new Set(['lamp-in-reach', 'eye-safety', 'hot-surface']);
+
+export function SafetyBanner({
+  findings,
+  onShow,
+}: {
+  findings: { id: string; title: string; status: string; message: string }[];
+  onShow: (id: string) => void;
+}) {
+  return (
+    <Banner tone="warn" testId="safety-banner">
+      <span className="font-semibold">Safety:</span>
+      <ul className="flex flex-1 flex-col gap-1">
+        {findings.map((f) => (
+          <li key={f.id} data-status={f.status} className="flex flex-wrap items-baseline gap-2">
+            <span>
+              <strong>{f.title}</strong> ({f.status === 'fail' ? 'fail' : 'attention'}) —{' '}
+              {f.message.split('. ')[0]}.
+            </span>
+            <button type="button" onClick={() => onShow(f.id)} className={`${btn} border-ember-300 bg-white`}>
+              Show where
+            </button>
+          </li>
+        ))}
+      </ul>
+    </Banner>
+  );
+}

@@ -46,6 +46,11 @@ const KEY_LABELS: Record<string, string> = {
   eyeCm: 'Eye-safety distance',
   closestCm: 'Closest unguarded distance',
   lamps: 'Lamps concerned',
+  overlapCm: 'Basking spot with UV and heat together',
+  neededCm: 'Basking spot the animal needs',
+  uvSpotCm: 'Longest stretch in the UV range',
+  heatSpotCm: 'Longest stretch at basking heat',
+  limitC: 'General limit for burns',
 };
 
 const temp = (c: number, u: FindingUnits) => `${formatNumber(cToDisplay(c, u.temp), 1)} ${tempLabel(u.temp)}`;
@@ -54,7 +59,7 @@ const length = (cm: number, u: FindingUnits) =>
 
 /** What the engine's unit-less keys `targetLo`/`targetHi` measure, by finding. */
 function targetKind(findingId: string | undefined): 'temp' | 'uvb' | 'plain' {
-  if (findingId === 'hot-spot' || findingId === 'cool-end') return 'temp';
+  if (findingId === 'hot-spot' || findingId === 'cool-end' || findingId === 'shared-basking') return 'temp';
   if (findingId === 'basking-uvb') return 'uvb';
   return 'plain';
 }
@@ -105,6 +110,7 @@ const PAIR_LABELS: Record<string, string> = {
   target: 'Target on the species sheet',
   zoneMax: 'Zone range of the basking UVI',
   zoneMean: 'Zone range of the mean UVI',
+  uvi: 'Basking UVI range',
 };
 
 /** The numbers behind a finding as labelled lines in the user's units, `…Lo`/`…Hi` pairs joined. */
