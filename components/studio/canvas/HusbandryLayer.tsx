@@ -2,7 +2,7 @@
 // Husbandry marks on the canvas: where the species' basking UV range is met, where its basking
 // temperature is met, and where both are (the shared basking spot); and, for a climbing species, every
 // mesh it can hang from. The split between a UV spot and a hot spot is then visible at a glance.
-import { Group, Line, Text } from 'react-konva';
+import { Group, Label, Line, Tag, Text } from 'react-konva';
 import { designToStage, type Camera } from '../geometry/camera';
 import type { Design } from '../state/types';
 import type { Finding, Segment } from '../fields/engineTypes';
@@ -51,6 +51,24 @@ function Run({
   );
 }
 
+/** A dashed link between the UV spot and the hot spot when they do not meet, in stage coordinates. */
+function splitLink(cam: Camera, uv: Segment[], heat: Segment[]) {
+  const centre = (segs: Segment[]) => {
+    const s = segs.reduce((best, x) =>
+      Math.hypot(x.x2 - x.x1, x.y2 - x.y1) > Math.hypot(best.x2 - best.x1, best.y2 - best.y1) ? x : best,
+    );
+    return designToStage(cam, { x: (s.x1 + s.x2) / 2, y: (s.y1 + s.y2) / 2 });
+  };
+  if (uv.length === 0 || heat.length === 0) return null;
+  const a = centre(uv);
+  const b = centre(heat);
+  const lift = MARKS.heat.lift + 18;
+  return {
+    points: [a.x, a.y - lift, b.x, b.y - lift],
+    mid: { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 - lift },
+  };
+}
+
 export function HusbandryLayer({
   cam,
   design,
@@ -64,6 +82,7 @@ export function HusbandryLayer({
 }) {
   const zones = basking?.basking;
   const screens = climbs ? design.objects.filter((o) => o.type === 'screen') : [];
+  const apart = zones && zones.both.length === 0 ? splitLink(cam, zones.uv, zones.heat) : null;
   return (
     <Group listening={false}>
       {zones &&
@@ -72,6 +91,28 @@ export function HusbandryLayer({
             <Run key={`${kind}${i}`} cam={cam} seg={seg} kind={kind} labelled={i === 0} />
           )),
         )}
+      {apart && (
+        <Group>
+          <Line points={apart.points} stroke={C.ember700} strokeWidth={2} dash={[8, 6]} />
+          <Label x={apart.mid.x} y={apart.mid.y - 12}>
+            <Tag
+              fill={C.white}
+              opacity={0.9}
+              cornerRadius={3}
+              pointerDirection="down"
+              pointerWidth={8}
+              pointerHeight={5}
+            />
+            <Text
+              text="UV and heat apart: no spot gets both"
+              fontSize={12}
+              fontStyle="bold"
+              fill={C.ember700}
+              padding={4}
+            />
+          </Label>
+        </Group>
+      )}
       {screens.map((o) => {
         if (o.type !== 'screen') return null;
         const a = designToStage(cam, { x: o.x1, y: o.y1 });
