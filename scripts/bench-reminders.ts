@@ -103,7 +103,8 @@ async function seed() {
 
 function reminders(): { seconds: number; line: string; status: number | null } {
   const t0 = performance.now();
-  const r = spawnSync(process.execPath, ['--import', 'tsx', 'scripts/reminders.ts'], {
+  // As `npm run reminders` runs it (server modules' `import 'server-only'` resolves to nothing here).
+  const r = spawnSync('npx', ['tsx', '--import', './scripts/lib/server-only.mjs', 'scripts/reminders.ts'], {
     encoding: 'utf8',
     env: { ...process.env, LOG_LEVEL: 'warn' },
   });
