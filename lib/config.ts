@@ -18,6 +18,11 @@ const schema = z.object({
   // Designs whose engine results the share page and reports keep in memory (lib/variants/computed);
   // 0 turns the memo off (every request simulates), e.g. to measure what it saves.
   COMPUTED_CACHE_ENTRIES: z.coerce.number().int().min(0).max(1000).default(24),
+  // The engine's worker threads (lib/engine-pool): how many (default: cores − 1, 1 to 4), how many tasks
+  // may wait for one, and how long one task may run before its thread is ended.
+  ENGINE_THREADS: z.coerce.number().int().min(1).max(32).optional(),
+  ENGINE_QUEUE: z.coerce.number().int().min(0).max(1000).default(16),
+  ENGINE_TIMEOUT_MS: z.coerce.number().int().min(100).max(600_000).default(20_000),
 });
 
 export type ServerConfig = z.infer<typeof schema>;

@@ -2,6 +2,7 @@ import 'server-only';
 import type { Assessment, Design } from '@/simulation';
 import { assertKeeperInOrganisation } from '@/lib/api/enclosures';
 import { badRequest, forbidden, notFound } from '@/lib/api/errors';
+import { runEngineTask } from '@/lib/engine-pool';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { allLampTypes } from '@/lib/lamp-types/store';
 import { can } from '@/lib/permissions';
@@ -13,7 +14,6 @@ import { createDesign } from '@/lib/variants/designs';
 import { Enclosure } from '@/models';
 import { explain, type Explanation } from './explain';
 import type { GuidedStartInput } from './input';
-import { propose } from './propose';
 
 /**
  * The guided start on the server: checks who asks and for what, runs the search on the organisation's
@@ -51,7 +51,8 @@ export async function proposeFor(user: CurrentUser, input: GuidedStartInput): Pr
     depth: input.depthCm,
     roomTempC: input.roomTempC,
   };
-  const p = propose({ species, enclosure, lid: input.lid }, lampTypes);
+  // Dozens of engine runs: on an engine thread, not the server's event loop.
+  const p = await runEngineTask('propose', { input: { species, enclosure, lid: input.lid }, lampTypes });
   if (!p) {
     throw badRequest(
       undefined,

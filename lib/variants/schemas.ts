@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { textSchema } from '@/lib/api/text';
-import { parseDesign, type Design } from '@/simulation';
+import { DESIGN_MIGRATIONS, parseDesign, TOO_COMPLEX, type Design } from '@/simulation';
+import { tooComplex } from './stored-design';
 import { pageQuery } from '@/lib/api';
 import { MAX_SHARE_DAYS } from './shares';
 
@@ -23,9 +24,12 @@ export const nameField = textSchema('Give it a name.')
  * is the file's own path, so the API's `field` reads e.g. `design.objects[2].uvbAt30`.
  */
 export const designFile = z.unknown().transform((value, ctx): Design => {
-  const r = parseDesign(value);
+  const r = parseDesign(value, DESIGN_MIGRATIONS, { computable: true });
   if (r.ok) return r.design;
   const where = r.error.path || 'design';
+  // Not a malformed request but one the server will not compute: thrown past zod so the route pipeline
+  // answers 422 naming the limit instead of the 400 of a validation issue.
+  if (r.error.code === TOO_COMPLEX) throw tooComplex(`design.${where}`, r.error.message);
   ctx.addIssue({
     code: 'custom',
     path: r.error.path ? [r.error.path] : [],

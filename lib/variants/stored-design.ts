@@ -1,4 +1,18 @@
-import { parseDesign, type Design } from '@/simulation';
+import { designWorkProblem, TOO_COMPLEX, parseDesign, type Design } from '@/simulation';
+import { ApiError } from '@/lib/api';
+
+/** 422: a well-formed design beyond the engine work bound; the message names the limit. */
+export const tooComplex = (field: string, message: string) =>
+  new ApiError(422, TOO_COMPLEX, `${field}: ${message}`, field, [{ field, message }]);
+
+/**
+ * Before the server computes a stored design: one saved before the work bound existed may be beyond it,
+ * and is refused (422 naming the limit) rather than computed. It still opens in the studio.
+ */
+export function assertComputable(design: Design): void {
+  const problem = designWorkProblem(design);
+  if (problem) throw tooComplex('design.objects', problem);
+}
 
 export const serializeDesign = (design: Design): string => JSON.stringify(design);
 

@@ -5,6 +5,7 @@
  */
 import {
   computeFields,
+  reportCellCm,
   contourBands,
   type ContourBand,
   type Design,
@@ -16,10 +17,9 @@ import { sharedScale, type FieldScale } from '@/shared/field-scale';
 
 export type Simulated = { design: Design; grid: FieldGrid; figures: KeyFigures; months: number };
 
-/** Cells of about half a centimetre, coarser for big enclosures so one run stays well under a second. */
+/** Cells of about half a centimetre, coarser for big enclosures: the grid the design work bound counts. */
 export function cellFor(design: Design): number {
-  const { width, height } = design.enclosure;
-  return Math.max(0.5, Math.round((Math.max(width, height) / 240) * 10) / 10);
+  return reportCellCm(design.enclosure);
 }
 
 export function simulate(design: Design, months = 0): Simulated {

@@ -8,3 +8,4 @@ export * from './resolve';
 export * from './presets';
 export * from './backdrop';
 export * from './control';
+export * from './work';

@@ -1,10 +1,12 @@
 import type { z } from 'zod';
-import { DESIGN_FORMAT, DESIGN_VERSION, designSchema, type Design } from './schema';
+import { computableDesignSchema, DESIGN_FORMAT, DESIGN_VERSION, designSchema, type Design } from './schema';
 import { DESIGN_MIGRATIONS, type Migration } from './migrations';
 
 export interface ParseError {
   path: string;
   message: string;
+  /** Set for a rule with its own meaning, e.g. TOO_COMPLEX for a design beyond the work bound. */
+  code?: string;
 }
 export type ParseResult<T> = { ok: true; design: T } | { ok: false; error: ParseError };
 
@@ -27,7 +29,8 @@ export function firstIssue(error: z.ZodError): ParseError {
     return { path: formatPath([...issue.path, key]), message: 'unknown field' };
   }
   const message = issue.message.replace(/^Invalid input: /, '');
-  return { path: formatPath(issue.path), message };
+  const code = issue.code === 'custom' ? (issue.params as { code?: unknown } | undefined)?.code : undefined;
+  return { path: formatPath(issue.path), message, ...(typeof code === 'string' ? { code } : {}) };
 }
 
 function isRecord(v: unknown): v is Record<string, unknown> {
@@ -66,14 +69,18 @@ export function migrateDesign(
   return { ok: true, doc };
 }
 
-/** Validate a design file (any version this app knows), migrating older versions first. */
+/**
+ * Validate a design file (any version this app knows), migrating older versions first. `computable`
+ * also applies the work bound (computableDesignSchema): the server's rule for what it saves and computes.
+ */
 export function parseDesign(
   input: unknown,
   migrations: Readonly<Record<number, Migration>> = DESIGN_MIGRATIONS,
+  opts: { computable?: boolean } = {},
 ): ParseResult<Design> {
   const migrated = migrateDesign(input, migrations);
   if (!migrated.ok) return migrated;
-  const r = designSchema.safeParse(migrated.doc);
+  const r = (opts.computable ? computableDesignSchema : designSchema).safeParse(migrated.doc);
   if (!r.success) return { ok: false, error: firstIssue(r.error) };
   return { ok: true, design: r.data };
 }

@@ -6,6 +6,7 @@
  */
 import { z } from 'zod';
 import { LAMP_TECH_IDS } from './techs';
+import { designWorkProblem } from './work';
 
 export const DESIGN_FORMAT = 'baskwell.design';
 /** Version 2 added depth: `enclosure.sectionZ` and a lamp's `z` (see migrations.ts for version 1). */
@@ -210,6 +211,20 @@ export const designSchema = z
     if (d.probes) checkUniqueIds(d.probes, 'probes', ctx);
     checkDepths(d, ctx);
   });
+
+/** The code of the issue a design beyond MAX_DESIGN_WORK gets (the API answers it with 422). */
+export const TOO_COMPLEX = 'design_too_complex';
+
+/**
+ * The design file as the server takes it for saving and computing: also bounded in engine work
+ * (grid cells × lamps × barrier edges, see work.ts). Reading stays on `designSchema`, so a stored or
+ * backed-up design over the bound still opens in the studio to be simplified.
+ */
+export const computableDesignSchema = designSchema.superRefine((d, ctx) => {
+  const problem = designWorkProblem(d);
+  if (problem)
+    ctx.addIssue({ code: 'custom', path: ['objects'], message: problem, params: { code: TOO_COMPLEX } });
+});
 
 export type Design = z.infer<typeof designSchema>;
 export type DesignObject = z.infer<typeof designObjectSchema>;

@@ -83,3 +83,12 @@ export function benchDesign(lampScale = 1, occluderScale = 1): Design {
     objects,
   };
 }
+
+/**
+ * The heaviest design of the benchmark's family the server accepts: 27 lamps and 108 barriers in
+ * 120 × 60 cm, about 91 % of MAX_DESIGN_WORK (simulation/model/work.ts). One more copy of either the
+ * lamps or the barriers is over the bound.
+ */
+export function heaviestAllowedDesign(): Design {
+  return benchDesign(9, 9);
+}

@@ -6,12 +6,12 @@ import { FieldLegend, FieldSvg } from '@/components/designs/FieldSvg';
 import { SharedLampList } from '@/components/designs/SharedLampList';
 import { BrandMark } from '@/components/shell/BrandMark';
 import { lampRows } from '@/lib/reports/lamps';
-import { computedFor } from '@/lib/variants/computed';
+import { runEngineTask } from '@/lib/engine-pool';
 import { sizeBoth, tempBoth } from '@/shared/units';
 import { hotSpotMarker } from '@/shared/designs/figures';
 import { resolveShareToken } from '@/lib/variants/shares';
 import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
-import type { FieldName } from '@/simulation';
+import { designWorkProblem, type FieldName } from '@/simulation';
 
 export const dynamic = 'force-dynamic';
 
@@ -46,12 +46,29 @@ export default async function SharedVariantPage({
   const requested = (await searchParams).field;
   const field = FIELDS.find((f) => f.id === requested)?.id ?? 'uvi';
 
-  // Simulated once per design and then served from memory: a link is opened by many people.
-  const computed = computedFor(shared.design);
-  const { scale, bands } = computed.view(field);
+  // Saved before designs were bounded: say so rather than spend the server on it.
+  const problem = designWorkProblem(shared.design);
+  if (problem) {
+    return (
+      <main id="main" className="mx-auto w-full max-w-5xl flex-1 space-y-4 px-4 py-8 sm:px-6">
+        <BrandMark />
+        <h1 className="text-title text-basalt-900">{shared.variant.name}</h1>
+        <p className="text-body text-basalt-700">
+          The server does not draw this shared design: {problem} Ask whoever shared it to simplify it in the
+          studio.
+        </p>
+      </main>
+    );
+  }
   const species = attachedSpecies(await speciesOptions(shared.organisationId), shared.speciesName);
-  const assessment = species ? computed.assessment(species.sheet) : null;
-  const f = computed.sim.figures;
+  // On an engine thread, never on the server's event loop; each thread keeps the designs it simulated in
+  // memory (lib/variants/computed), since a link is opened by many people.
+  const {
+    scale,
+    bands,
+    assessment,
+    figures: f,
+  } = await runEngineTask('sharedView', { design: shared.design, field, sheet: species?.sheet ?? null });
   const lamps = lampRows(shared.design);
   const figure = (v: number, digits: number) => Number(v.toFixed(digits)).toString();
 

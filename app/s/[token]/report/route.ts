@@ -1,8 +1,12 @@
 import { z } from 'zod';
-import { download, fieldPng, fileBase, reportPdf } from '@/lib/reports/build';
+import { ApiError, errorResponse } from '@/lib/api/errors';
+import { runEngineTask } from '@/lib/engine-pool';
+import { download, fileBase } from '@/lib/reports/build';
+import { countExport } from '@/lib/reports/limits';
 import { resolveShareToken } from '@/lib/variants/shares';
 import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
 import { logger } from '@/lib/log';
+import { assertComputable } from '@/lib/variants/stored-design';
 
 const query = z.object({
   format: z.enum(['pdf', 'png']).catch('pdf'),
@@ -34,17 +38,27 @@ export async function GET(req: Request, ctx: { params: Promise<{ token: string }
       design: shared.design,
     };
     const base = fileBase(shared.variant.name);
+    assertComputable(shared.design);
+    // Per link: the page is public, so the holder of a link is the only "who" there is.
+    await countExport('share', shared.variant.id);
     if (q.format === 'png') {
-      return download(
-        new Uint8Array(fieldPng(subject, { field: q.field, months: 0 })),
-        'image/png',
-        `${base}-${q.field}.png`,
+      const png = await runEngineTask(
+        'fieldPng',
+        { subject, field: q.field, months: 0 },
+        { signal: req.signal },
       );
+      return download(new Uint8Array(png), 'image/png', `${base}-${q.field}.png`);
     }
     const species = attachedSpecies(await speciesOptions(shared.organisationId), shared.speciesName);
-    const pdf = await reportPdf(subject, { field: q.field, months: 0, species });
+    const pdf = await runEngineTask(
+      'reportPdf',
+      { subject, options: { field: q.field, months: 0, species }, now: new Date() },
+      { signal: req.signal },
+    );
     return download(new Uint8Array(pdf), 'application/pdf', `${base}.pdf`);
   } catch (error) {
+    // Busy, too slow, too many downloads: the client is told why and when to come back.
+    if (error instanceof ApiError && error.status !== 500) return errorResponse(error);
     logger().error({ err: error }, 'shared report failed');
     return Response.json(
       { error: { code: 'internal', message: 'The report could not be made. Try again.' } },

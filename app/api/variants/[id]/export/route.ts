@@ -1,17 +1,25 @@
 import { z } from 'zod';
 import { notFound, route } from '@/lib/api';
-import { download, fileBase, reportPdf, fieldPng } from '@/lib/reports/build';
+import { runEngineTask } from '@/lib/engine-pool';
 import { organisationName } from '@/lib/organisations/queries';
+import { download, fileBase } from '@/lib/reports/build';
+import { countExport, EXPORT_MONTHS } from '@/lib/reports/limits';
 import { findSheet } from '@/lib/species/store';
 import { variantFor } from '@/lib/variants/access';
 import { idParams } from '@/lib/variants/schemas';
 import { attachedSpecies, speciesOptions, type SpeciesOption } from '@/lib/variants/species';
-import { readStoredDesign } from '@/lib/variants/stored-design';
+import { assertComputable, readStoredDesign } from '@/lib/variants/stored-design';
 
 const exportQuery = z.object({
   format: z.enum(['json', 'png', 'pdf'], { error: 'format must be json, png or pdf.' }).default('json'),
   field: z.enum(['uvi', 'uvb', 'tempC'], { error: 'field must be uvi, uvb or tempC.' }).default('uvi'),
-  months: z.coerce.number({ error: 'months must be a number.' }).int().min(0).max(120).default(0),
+  // Only the lamp ages the app offers: every value is its own engine run and memo entry.
+  months: z.coerce
+    .number({ error: 'months must be a number.' })
+    .refine((m) => (EXPORT_MONTHS as readonly number[]).includes(m), {
+      error: `months must be one of ${EXPORT_MONTHS.join(', ')}.`,
+    })
+    .default(0),
   species: z.coerce.number({ error: 'species must be a species sheet id.' }).int().positive().optional(),
 });
 
@@ -23,7 +31,7 @@ const exportQuery = z.object({
 export const GET = route({
   params: idParams,
   query: exportQuery,
-  handler: async ({ params, query, user }) => {
+  handler: async ({ req, params, query, user }) => {
     const variant = await variantFor(user, params.id, 'read');
     const design = readStoredDesign(variant.designJson);
     const base = fileBase(variant.name);
@@ -34,6 +42,8 @@ export const GET = route({
         `${base}.baskwell.json`,
       );
     }
+    assertComputable(design);
+    await countExport('user', user.id);
     const enclosure = variant.design.enclosure;
     const subject = {
       variantName: variant.name,
@@ -44,7 +54,12 @@ export const GET = route({
       design,
     };
     if (query.format === 'png') {
-      return download(new Uint8Array(fieldPng(subject, query)), 'image/png', `${base}-${query.field}.png`);
+      const png = await runEngineTask(
+        'fieldPng',
+        { subject, field: query.field, months: query.months },
+        { signal: req.signal },
+      );
+      return download(new Uint8Array(png), 'image/png', `${base}-${query.field}.png`);
     }
     const organisation = await organisationName(enclosure.organisationId);
     const options = await speciesOptions(enclosure.organisationId);
@@ -57,9 +72,14 @@ export const GET = route({
     } else {
       species = attachedSpecies(options, enclosure.speciesName);
     }
-    const pdf = await reportPdf(
-      { ...subject, organisationName: organisation ?? '' },
-      { field: query.field, months: query.months, species },
+    const pdf = await runEngineTask(
+      'reportPdf',
+      {
+        subject: { ...subject, organisationName: organisation ?? '' },
+        options: { field: query.field, months: query.months, species },
+        now: new Date(),
+      },
+      { signal: req.signal },
     );
     return download(new Uint8Array(pdf), 'application/pdf', `${base}.pdf`);
   },

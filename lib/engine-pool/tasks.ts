@@ -1,0 +1,46 @@
+/**
+ * What the engine's worker threads can be asked to do: one pure function a name, taking and returning
+ * plain data (structured-clone copies cross the thread boundary: no functions or class instances; a
+ * Buffer arrives as a Uint8Array). Imported only by `worker.ts`; the server calls these through
+ * `runEngineTask(name, input)` from `lib/engine-pool`, so its event loop never runs the engine itself.
+ *
+ * To add a task: write it here (or import it) with one input object, then call `runEngineTask('name', …)`.
+ * Nothing here may touch the database, the mail or the session: a worker has only its input.
+ */
+import { propose, type Proposal, type ProposalInput } from '@/lib/guided-start/propose';
+import type { LampTypeDto } from '@/lib/lamp-types/schema';
+import { fieldPng, reportPdf, type ReportOptions, type ReportSubject } from '@/lib/reports/build';
+import { computedFor, type FieldView } from '@/lib/variants/computed';
+import type { KeyFigures } from '@/shared/designs/figures';
+import type { Assessment, Design, FieldName, SpeciesSheet } from '@/simulation';
+
+export type SharedView = FieldView & { figures: KeyFigures; assessment: Assessment | null };
+
+export const engineTasks = {
+  /** One field of a design as a PNG picture (the export and the share page's download). */
+  fieldPng(input: { subject: ReportSubject; field: FieldName; months: number }): Uint8Array {
+    return fieldPng(input.subject, input);
+  },
+
+  /** The PDF report of a design: field picture, key figures, species check, lamps, cautions. */
+  reportPdf(input: { subject: ReportSubject; options: ReportOptions; now: Date }): Promise<Uint8Array> {
+    return reportPdf(input.subject, input.options, input.now);
+  },
+
+  /** What the public share page draws: one field's scale and bands, the key figures, the species check. */
+  sharedView(input: { design: Design; field: FieldName; sheet: SpeciesSheet | null }): SharedView {
+    const computed = computedFor(input.design);
+    return {
+      ...computed.view(input.field),
+      figures: computed.sim.figures,
+      assessment: input.sheet ? computed.assessment(input.sheet) : null,
+    };
+  },
+
+  /** The guided start's search for a first layout (many engine runs). */
+  propose(input: { input: ProposalInput; lampTypes: LampTypeDto[] }): Proposal | null {
+    return propose(input.input, input.lampTypes);
+  },
+};
+
+export type EngineTasks = typeof engineTasks;
