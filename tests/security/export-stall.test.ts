@@ -4,7 +4,7 @@ import * as healthRoute from '@/app/api/health/route';
 import * as exportRoute from '@/app/api/variants/[id]/export/route';
 import { closeEnginePool } from '@/lib/engine-pool';
 import { computedCache } from '@/lib/variants/computed';
-import { designWork, MAX_DESIGN_WORK } from '@/simulation/model/work';
+import { designWork, MAX_DESIGN_WORK } from '@/simulation';
 import { heaviestAllowedDesign } from '@/simulation/testing/fixtures';
 import {
   createEnclosure,
