@@ -2,7 +2,19 @@ import 'server-only';
 import nodemailer, { type Transporter } from 'nodemailer';
 import { config } from '@/lib/config';
 
-export type Mail = { to: string; subject: string; text: string; html?: string };
+/**
+ * What a message is and which organisation sent it. Sent as headers, so a captured copy can be shown to
+ * that organisation (lib/mail-viewer.ts) and to no one else.
+ */
+export type MailTag = {
+  kind: 'invitation' | 'lamp-reminder' | (string & {});
+  /** Null for mail about a person's own account, which no organisation's viewer shows. */
+  organisationId: number | null;
+};
+
+export type Mail = { to: string; subject: string; text: string; html?: string; tag?: MailTag };
+
+export const TAG_HEADERS = { kind: 'X-Baskwell-Kind', organisation: 'X-Baskwell-Organisation' } as const;
 
 const holder = globalThis as unknown as { __baskwellMail?: Transporter };
 
@@ -27,38 +39,9 @@ function transport(): Transporter {
   return holder.__baskwellMail;
 }
 
-export async function sendMail(mail: Mail): Promise<void> {
-  await transport().sendMail({ from: config().MAIL_FROM, ...mail });
-}
-
-/** Captured messages from the development fake SMTP server (newest first), or null when it cannot be reached. */
-export type CapturedMessage = {
-  id: string;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-  receivedAt: string;
-};
-
-export async function capturedMessages(): Promise<CapturedMessage[] | null> {
-  try {
-    const res = await fetch(new URL('/messages', config().FAKE_SMTP_HTTP), {
-      cache: 'no-store',
-      signal: AbortSignal.timeout(2_000),
-    });
-    if (!res.ok) return null;
-    const data: unknown = await res.json();
-    return Array.isArray(data) ? (data as CapturedMessage[]) : null;
-  } catch {
-    return null;
-  }
-}
-
-/**
- * The captured-mail page exists for development and tests only: on when not in production, or when a
- * fake SMTP server is explicitly configured (the browser tests run a production build against one).
- */
-export function mailViewerEnabled(): boolean {
-  return process.env.NODE_ENV !== 'production' || Boolean(process.env.FAKE_SMTP_HTTP);
+export async function sendMail({ tag, ...mail }: Mail): Promise<void> {
+  const headers: Record<string, string> = {};
+  if (tag) headers[TAG_HEADERS.kind] = tag.kind;
+  if (tag?.organisationId) headers[TAG_HEADERS.organisation] = String(tag.organisationId);
+  await transport().sendMail({ from: config().MAIL_FROM, ...mail, headers });
 }

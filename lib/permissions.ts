@@ -31,7 +31,7 @@ export type Resource =
    * follows its enclosure's rules. `uploaderId` is the member who uploaded it.
    */
   | { kind: 'upload'; organisationId: number; uploaderId: number }
-  /** The development mail viewer, which shows captured invitation links. */
+  /** The development mail viewer, which shows captured invitation links (owners only). */
   | { kind: 'mail'; organisationId: number }
   /** The background jobs page: recent runs, and this organisation's failed units and undelivered e-mail. */
   | { kind: 'jobs'; organisationId: number }
@@ -98,7 +98,8 @@ export function can(user: SessionUser | null | undefined, action: Action, resour
       return isUploader || role === 'owner';
     }
     case 'mail':
-      return action === 'read' && isStaffOrOwner(roleIn(user, resource.organisationId));
+      // Invitation links are as good as passwords: only the organisation's owners see its captured mail.
+      return action === 'read' && roleIn(user, resource.organisationId) === 'owner';
     case 'jobs':
       // Failures name members and their e-mail addresses and show delivery errors: the owner's to follow up.
       return action === 'read' && roleIn(user, resource.organisationId) === 'owner';

@@ -39,7 +39,8 @@ function banner(signIns) {
       (r) => `  ${r[0].padEnd(widths[0])}  ${r[1].padEnd(widths[1])}  ${r[2].padEnd(widths[2])}  ${r[3]}`,
     ),
     '',
-    `Captured e-mail: ${env.FAKE_SMTP_HTTP}/messages (nothing is delivered; SMTP on ${env.SMTP_HOST}:${env.SMTP_PORT})`,
+    `Captured e-mail: ${env.FAKE_SMTP_HTTP}/messages (nothing is delivered; SMTP on ${env.SMTP_HOST}:${env.SMTP_PORT})` +
+      (env.MAIL_VIEWER === '1' ? '; each organisation’s owner sees its own at /mail' : ''),
     `Uploads: fake S3 at ${env.S3_ENDPOINT}, bucket ${env.S3_BUCKET}`,
     `Database: MariaDB ${env.DB_HOST}:${env.DB_PORT}/${env.DB_NAME}`,
     'Press Ctrl-C to stop.',
@@ -55,6 +56,9 @@ async function main() {
   await migrate(env);
   const { signIns } = await seed(env);
   await startMail(life, env);
+  // The demo shows each organisation's owner the mail it sent at /mail, beside the fake SMTP server
+  // started just above; MAIL_VIEWER=0 in .env (or the environment) keeps the page off.
+  env.MAIL_VIEWER ??= '1';
   await startS3(life, env);
   const next = await startNext(life, env, { port: Number(env.PORT), dev });
   startJobs(life, env);

@@ -136,6 +136,8 @@ async function main() {
     DB_NAME: testDb,
     SMTP_PORT: String(smtpPort),
     FAKE_SMTP_HTTP: `http://127.0.0.1:${mailHttpPort}`,
+    // The browser tests read the development mail viewer (off unless asked for).
+    MAIL_VIEWER: '1',
     PORT: String(appPort),
     APP_URL: appUrl,
     NEXTAUTH_URL: appUrl,

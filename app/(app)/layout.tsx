@@ -6,7 +6,7 @@ import { NoOrganisation } from '@/components/shell/NoOrganisation';
 import { OrganisationSwitcher } from '@/components/shell/OrganisationSwitcher';
 import { SessionKeepAlive } from '@/components/shell/SessionKeepAlive';
 import { SignOutButton } from '@/components/shell/SignOutButton';
-import { mailViewerEnabled } from '@/lib/mail';
+import { mailViewerEnabled } from '@/lib/mail-viewer';
 import { can } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
 

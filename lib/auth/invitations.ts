@@ -79,6 +79,7 @@ export async function inviteByEmail(input: {
   const link = inviteUrl(token);
   try {
     await sendMail({
+      tag: { kind: 'invitation', organisationId: input.organisationId },
       to: input.email,
       subject: `${input.invitedBy.name} invited you to ${organisation.name} on Baskwell`,
       text: [

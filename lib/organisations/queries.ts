@@ -46,18 +46,6 @@ function keeperJson(m: MemberRow) {
   return { userId, name, email, joinedAt };
 }
 
-/** Addresses that belong to an organisation: its members and the people it invited. */
-export async function organisationAddresses(organisationId: number): Promise<Set<string>> {
-  getSequelize();
-  const members = await Membership.findAll({ where: { organisationId }, attributes: ['userId'] });
-  const users = await User.findAll({
-    where: { id: { [Op.in]: members.map((m) => m.userId) } },
-    attributes: ['email'],
-  });
-  const invited = await Invitation.findAll({ where: { organisationId }, attributes: ['email'] });
-  return new Set([...users, ...invited].map((r) => r.email.toLowerCase()));
-}
-
 export async function organisationName(id: number): Promise<string | null> {
   getSequelize();
   return (await Organisation.findByPk(id, { attributes: ['name'] }))?.name ?? null;

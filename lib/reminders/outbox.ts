@@ -142,7 +142,12 @@ async function deliverRows(
     );
     if (claimed !== 1) continue;
     try {
-      await send({ to: m.toEmail, subject: m.subject, text: m.body });
+      await send({
+        to: m.toEmail,
+        subject: m.subject,
+        text: m.body,
+        tag: { kind: m.kind, organisationId: m.organisationId ?? null },
+      });
       await MailMessage.update(
         { status: 'sent', sentAt: new Date(), lastError: null, nextAttemptAt: null },
         { where: { id: m.id } },

@@ -12,7 +12,19 @@ export type StoredMail = {
   text: string;
   html: string | null;
   receivedAt: string;
+  /** From the app's X-Baskwell-Kind and X-Baskwell-Organisation headers (lib/mail.ts); null without them. */
+  kind: string | null;
+  organisationId: number | null;
 };
+
+/** The organisation and kind a message was sent with, from its headers. */
+function tagOf(headers: Record<string, string>): Pick<StoredMail, 'kind' | 'organisationId'> {
+  const org = Number(headers['x-baskwell-organisation']);
+  return {
+    kind: headers['x-baskwell-kind'] || null,
+    organisationId: Number.isSafeInteger(org) && org > 0 ? org : null,
+  };
+}
 
 export class MailStore {
   private messages: StoredMail[] = [];
@@ -40,6 +52,7 @@ export class MailStore {
       text: mail.text,
       html: mail.html,
       receivedAt: new Date().toISOString(),
+      ...tagOf(mail.headers),
     };
     this.messages.unshift(stored);
     if (this.dir) {

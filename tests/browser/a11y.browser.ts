@@ -97,7 +97,15 @@ async function demoIds(page: Page) {
 }
 
 /** One page to scan: its route pattern (as the app folder names it), the address, who looks at it. */
-type Target = { name: string; route: string; path: () => string; signedIn: boolean; studio?: boolean };
+type Target = {
+  name: string;
+  route: string;
+  path: () => string;
+  signedIn: boolean;
+  studio?: boolean;
+  /** Seen by the organisation's owner instead of staff (a page only owners may open). */
+  owner?: boolean;
+};
 
 let ids: Awaited<ReturnType<typeof demoIds>> & { sharePath: string };
 const out = (name: string, route: string, path: () => string): Target => ({
@@ -113,6 +121,10 @@ const staffSees = (name: string, route: string, path: () => string, studio = fal
   signedIn: true,
   studio,
 });
+const ownerSees = (name: string, route: string, path: () => string): Target => ({
+  ...staffSees(name, route, path),
+  owner: true,
+});
 const targets: Target[] = [
   out('landing', '/', () => '/'),
   out('sign-in', '/sign-in', () => '/sign-in'),
@@ -127,7 +139,7 @@ const targets: Target[] = [
   staffSees('compare', '/compare', () => `/compare?a=${ids.variantA}&b=${ids.variantB}`),
   staffSees('keepers', '/keepers', () => '/keepers'),
   staffSees('members', '/members', () => '/members'),
-  staffSees('mail', '/mail', () => '/mail'),
+  ownerSees('mail', '/mail', () => '/mail'),
   staffSees('lamp-log', '/lamp-log', () => '/lamp-log'),
   staffSees('lamp', '/lamp-log/[id]', () => `/lamp-log/${ids.lampId}`),
   staffSees('lamp-catalogue', '/lamp-catalogue', () => '/lamp-catalogue'),
@@ -150,6 +162,7 @@ describe('accessibility (axe): no serious or critical violation', () => {
   let visitorContext: BrowserContext;
   let staffPage: Page;
   let visitorPage: Page;
+  let ownerPage: Page | null = null;
   const results: PageResult[] = [];
 
   beforeAll(async () => {
@@ -185,7 +198,13 @@ describe('accessibility (axe): no serious or critical violation', () => {
   });
 
   it.each(targets)('$name', async (t) => {
-    const page = t.signedIn ? staffPage : visitorPage;
+    if (t.owner && !ownerPage) {
+      ownerPage = await (await newContext(browser)).newPage();
+      ownerPage.setDefaultTimeout(60_000);
+      const owner = demoSignIn('owner');
+      await signIn(ownerPage, owner.email, owner.password);
+    }
+    const page = t.owner ? ownerPage! : t.signedIn ? staffPage : visitorPage;
     const path = t.path();
     if (t.studio) {
       await page.goto(path);

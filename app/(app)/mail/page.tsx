@@ -4,8 +4,7 @@ import { EmptyState } from '@/components/ui/EmptyState';
 import { Notice } from '@/components/ui/Notice';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { config } from '@/lib/config';
-import { capturedMessages, mailViewerEnabled } from '@/lib/mail';
-import { organisationAddresses } from '@/lib/organisations/queries';
+import { mailViewerEnabled, organisationMail } from '@/lib/mail-viewer';
 import { can } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
 
@@ -22,22 +21,16 @@ export default async function MailPage() {
   ) {
     notFound();
   }
-  const [messages, addresses] = await Promise.all([
-    capturedMessages(),
-    organisationAddresses(membership.organisationId),
-  ]);
-  // Only mail to this organisation's people: invitation links are as good as passwords.
-  const ours = messages?.filter((m) =>
-    m.to.some((t) => addresses.has(t.toLowerCase().replace(/^.*<|>.*$/g, ''))),
-  );
+  // Only what this organisation sent, with links of used or withdrawn invitations removed.
+  const ours = await organisationMail(membership.organisationId);
 
   return (
     <>
       <PageHeader
         title="Mail (development)"
-        lead="E-mail captured by the development mail server instead of being delivered: invitations and lamp reminders to your organisation's people. Not part of a production deployment."
+        lead="E-mail this organisation sent while the development mail server captured it instead of delivering it: invitations and lamp reminders. Only the organisation's owners see this page, and only when the server was started with MAIL_VIEWER=1; it is not part of a production deployment."
       />
-      {ours === undefined ? (
+      {ours === null ? (
         <Notice tone="warning" title="The development mail server cannot be reached">
           Nothing is listening at {config().FAKE_SMTP_HTTP}. Start the app with <code>npm run dev</code> (it
           starts the mail server too), then reload this page.
@@ -52,7 +45,8 @@ export default async function MailPage() {
             <li key={m.id} className="rounded-lg border border-basalt-200 bg-white p-4">
               <div className="flex flex-wrap justify-between gap-2 text-caption text-basalt-500">
                 <span>
-                  To <span className="font-medium text-basalt-800">{m.to.join(', ')}</span> · from {m.from}
+                  To <span className="font-medium text-basalt-800">{m.to.join(', ')}</span> · from {m.from} ·{' '}
+                  {m.kind === 'invitation' ? 'invitation' : 'lamp reminder'}
                 </span>
                 <time dateTime={m.receivedAt}>{new Date(m.receivedAt).toUTCString()}</time>
               </div>
