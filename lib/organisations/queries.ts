@@ -1,9 +1,8 @@
 import 'server-only';
-import { Op } from 'sequelize';
 import { afterCursor } from '@/lib/api/pagination';
 import { enclosureCounts } from '@/lib/api/enclosures';
 import { getSequelize } from '@/lib/db';
-import { Invitation, Membership, Organisation, User, type Role } from '@/models';
+import { Membership, Organisation, User, type Role } from '@/models';
 
 /** Reads of an organisation and its people. Access is checked by the caller (a route's allow()). */
 
