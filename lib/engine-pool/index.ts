@@ -56,9 +56,14 @@ export function spawnEngineWorker(): Worker {
   const tsxPackage = createRequire(path.join(root, 'package.json')).resolve(TSX_PACKAGE);
   const exportsMap = (JSON.parse(readFileSync(tsxPackage, 'utf8')) as TsxPackage).exports['./esm/api'];
   const tsx = path.join(path.dirname(tsxPackage), exportsMap.import.default);
+  // Server modules start with `import 'server-only'`; outside Next it resolves to nothing (the same hook
+  // as the server scripts', scripts/lib/server-only.mjs).
+  const serverOnly = pathToFileURL(path.join(root, 'scripts', 'lib', 'server-only.mjs')).href;
   const boot = [
     `import(${JSON.stringify(pathToFileURL(tsx).href)})`,
-    `.then(({ register }) => { register({ tsconfig: ${JSON.stringify(path.join(root, 'tsconfig.json'))} }); return import(${JSON.stringify(entry)}); })`,
+    `.then(({ register }) => register({ tsconfig: ${JSON.stringify(path.join(root, 'tsconfig.json'))} }))`,
+    `.then(() => import(${JSON.stringify(serverOnly)}))`,
+    `.then(() => import(${JSON.stringify(entry)}))`,
   ].join('');
   return new Worker(boot, { eval: true, name: WORKER_NAME });
 }
