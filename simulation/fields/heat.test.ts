@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { airTempC, KELVIN, STEFAN_BOLTZMANN, surfaceTempC, topAirRiseK } from './heat';
+import { assess } from '../assess/assess';
+import { parseDesign } from '../model/parse';
+import { DESIGN_FORMAT, DESIGN_VERSION } from '../model/schema';
 
 describe('surface energy balance', () => {
   // Steady-state energy balance q = h(Ts − Ta) + εσ(Ts⁴ − Ta⁴), ε 0.95, air 25 °C, no conduction
@@ -33,3 +36,50 @@ describe('air model', () => {
     expect(airTempC(60, 60, 24, rise)).toBeCloseTo(24 + rise, 9);
   });
 });
+
+describe('walls of the enclosure', () => {
+  const enc = { width: 120, height: 60, depth: 60 };
+  it('sets the wall loss: wood and PVC hold about twice the rise of glass, mesh far less', () => {
+    // U: glass 5, wood 2.5, PVC 2.5, mesh 15 W/m²K (model/walls.ts, from memory); area 3.6 m².
+    const glass = topAirRiseK([{ watts: 100, y: 55 }], enc);
+    expect(topAirRiseK([{ watts: 100, y: 55 }], { ...enc, walls: 'glass' })).toBe(glass);
+    expect(topAirRiseK([{ watts: 100, y: 55 }], { ...enc, walls: 'wood' })).toBeCloseTo(100 / 9, 6);
+    expect(topAirRiseK([{ watts: 100, y: 55 }], { ...enc, walls: 'pvc' })).toBeCloseTo(2 * glass, 6);
+    expect(topAirRiseK([{ watts: 100, y: 55 }], { ...enc, walls: 'mesh' })).toBeCloseTo(100 / 54, 6);
+  });
+  it('warms the air, and so the surfaces, of a wooden enclosure more than a glass one', () => {
+    const design = (walls?: 'wood') => ({
+      format: DESIGN_FORMAT,
+      version: DESIGN_VERSION,
+      enclosure: { width: 120, height: 60, depth: 60, roomTempC: 22, ...(walls ? { walls } : {}) },
+      objects: [
+        {
+          type: 'lamp' as const,
+          id: 'h',
+          tech: 'ceramic' as const,
+          form: 'bulb' as const,
+          x: 100,
+          y: 55,
+          watts: 150,
+        },
+        { type: 'ledge' as const, id: 'shelf', x: 0, y: 40, width: 20, height: 5 },
+      ],
+    });
+    const sheet = {
+      name: 'Test',
+      uvZone: 1 as const,
+      baskingSurfaceC: [30, 35] as [number, number],
+      coolEndC: [20, 25] as [number, number],
+    };
+    const hottest = (d: ReturnType<typeof design>) =>
+      assess(parseOrThrow(d), sheet).findings.find((f) => f.id === 'hot-spot')!.numbers.hotC!;
+    expect(hottest(design('wood'))).toBeGreaterThan(hottest(design()) + 1);
+    expect(parseDesign({ ...design(), enclosure: { ...design().enclosure, walls: 'stone' } }).ok).toBe(false);
+  });
+});
+
+function parseOrThrow(d: unknown) {
+  const r = parseDesign(d);
+  if (!r.ok) throw new Error(r.error.message);
+  return r.design;
+}

@@ -9,6 +9,8 @@
  * left-hand side is convex in Ts.
  */
 
+import { DEFAULT_WALLS, WALLS, type WallMaterial } from '../model/walls';
+
 export const STEFAN_BOLTZMANN = 5.670374419e-8; // W/m²K⁴ (CODATA 2018)
 export const KELVIN = 273.15;
 
@@ -43,24 +45,25 @@ export function surfaceTempC(q: number, airC: number, emissivity: number, hc: nu
 /**
  * Air temperature model (this engine's own simple assumption, to be checked with a thermometer):
  * lamp heat that enters the enclosure leaves through its walls, so the warmest air, under the lid, is
- * ΔT_top = P_in / (U · A) above the room, with A the area of all six faces and U = 5 W/m²K (an overall
- * coefficient typical of single glazing, from memory). The air is at room temperature in the lower half
+ * ΔT_top = P_in / (U · A) above the room, with A the area of all six faces and U the walls' overall
+ * coefficient (model/walls.ts: glass 5 W/m²K, wood and PVC 2.5, mesh 15 — from memory). The air is at room temperature in the lower half
  * and warms linearly through the upper half to ΔT_top at the top. Lamps inside the enclosure count in full;
  * lamps outside (on the lid) count at half their power, since much of their heat escapes above the lid
  * (from memory). With no lamps every cell reads the room temperature exactly.
  */
-export const AIR_MODEL = { wallU: 5, outsideShare: 0.5, maxRiseK: 30 } as const;
+export const AIR_MODEL = { wallU: WALLS[DEFAULT_WALLS].uWm2K, outsideShare: 0.5, maxRiseK: 30 } as const;
 
 export function topAirRiseK(
   lamps: { watts: number; y: number }[],
-  enclosure: { width: number; height: number; depth: number },
+  enclosure: { width: number; height: number; depth: number; walls?: WallMaterial },
 ): number {
   let p = 0;
   for (const l of lamps) p += l.watts * (l.y <= enclosure.height ? 1 : AIR_MODEL.outsideShare);
   if (!(p > 0)) return 0;
   const { width: w, height: h, depth: d } = enclosure;
   const areaM2 = (2 * (w * h + w * d + h * d)) / 1e4;
-  return Math.min(AIR_MODEL.maxRiseK, p / (AIR_MODEL.wallU * areaM2));
+  const u = WALLS[enclosure.walls ?? DEFAULT_WALLS].uWm2K;
+  return Math.min(AIR_MODEL.maxRiseK, p / (u * areaM2));
 }
 
 /** Air temperature (°C) at height y in an enclosure of height H. */

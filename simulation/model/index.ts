@@ -9,3 +9,4 @@ export * from './presets';
 export * from './backdrop';
 export * from './control';
 export * from './work';
+export * from './walls';

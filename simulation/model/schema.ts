@@ -7,6 +7,7 @@
 import { z } from 'zod';
 import { LAMP_TECH_IDS } from './techs';
 import { designWorkProblem } from './work';
+import { WALL_MATERIALS } from './walls';
 
 export const DESIGN_FORMAT = 'baskwell.design';
 /** Version 2 added depth: `enclosure.sectionZ` and a lamp's `z` (see migrations.ts for version 1). */
@@ -142,6 +143,8 @@ export const enclosureSchema = z.strictObject({
   sectionZ: depthCoord.optional(),
   /** Default 24 °C. */
   roomTempC: z.number().finite().min(-20).max(50).optional(),
+  /** What the walls are made of; sets the air model's wall loss (see fields/heat.ts). Default 'glass'. */
+  walls: z.enum(WALL_MATERIALS).optional(),
 });
 
 export const probePointSchema = z.strictObject({

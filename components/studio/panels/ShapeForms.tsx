@@ -11,7 +11,8 @@ import { useCommandContext, useStudio } from '../hooks/useStudio';
 import { setEnclosure, TYPE_NAMES, updateProbe } from '../state/document';
 import { focusRing } from './CommandButton';
 import type { BoxObject, Enclosure, ProbePoint, SegmentObject } from '../state/types';
-import { Grid2, NumberField, Section, TextField } from './FormFields';
+import { Grid2, NumberField, Section, SelectField, TextField } from './FormFields';
+import { DEFAULT_WALLS, WALL_MATERIALS, WALLS } from '@/simulation';
 import { useObjectEdit, useUnits } from './useObjectEdit';
 import { checkEnclosureEdit, checkWithinDepth, type FieldKind } from './validate';
 
@@ -156,7 +157,7 @@ export function EnclosureForm() {
   const { store } = useCommandContext();
   const enclosure = useStudio(store, (s) => s.history.present.enclosure);
   const units = useUnits();
-  const f = (key: keyof Enclosure, kind: FieldKind) => ({
+  const f = (key: Exclude<keyof Enclosure, 'walls'>, kind: FieldKind) => ({
     kind,
     units,
     value: enclosure[key],
@@ -192,6 +193,15 @@ export function EnclosureForm() {
           {...f('roomTempC', 'temp')}
         />
       </Grid2>
+      <SelectField
+        label="Walls (how much heat they hold in)"
+        testId="enclosure-walls"
+        value={enclosure.walls ?? DEFAULT_WALLS}
+        options={WALL_MATERIALS.map((w) => ({ value: w, label: WALLS[w].label }))}
+        onChange={(walls) =>
+          store.edit((d) => setEnclosure(d, { walls: walls === DEFAULT_WALLS ? undefined : walls }))
+        }
+      />
     </Section>
   );
 }
