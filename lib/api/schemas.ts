@@ -17,6 +17,13 @@ export const idSchema = (what: string) =>
 
 export const idParams = z.object({ id: idSchema('The id') });
 
+/** An id from a page's address ("12"), or null for anything else: the page then answers 404. */
+export function parseId(text: string): number | null {
+  if (!/^\d+$/.test(text)) return null;
+  const r = idSchema('The id').safeParse(text);
+  return r.success ? r.data : null;
+}
+
 export const emailSchema = z
   .string({ error: 'Enter an e-mail address.' })
   .trim()

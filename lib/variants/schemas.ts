@@ -3,16 +3,13 @@ import { textSchema } from '@/lib/api/text';
 import { DESIGN_MIGRATIONS, parseDesign, TOO_COMPLEX, type Design } from '@/simulation';
 import { tooComplex } from './stored-design';
 import { pageQuery } from '@/lib/api';
+import { idParams } from '@/lib/api/schemas';
 import { MAX_SHARE_DAYS } from './shares';
 
 /** Request shapes of the design, variant and share routes. */
 
-export const idParams = z.object({
-  id: z.coerce
-    .number({ error: 'The id must be a number.' })
-    .int()
-    .positive('The id must be a positive number.'),
-});
+// One id parser for every route (lib/api/schemas); re-exported for the routes that import it from here.
+export { idParams };
 
 export const nameField = textSchema('Give it a name.')
   .trim()

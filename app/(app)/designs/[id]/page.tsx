@@ -4,6 +4,7 @@ import { notFound } from 'next/navigation';
 import { DesignDetail } from '@/components/designs/DesignDetail';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { link } from '@/components/ui/styles';
+import { parseId } from '@/lib/api/schemas';
 import { requireUser } from '@/lib/session';
 import { getDesignForUser } from '@/lib/variants/designs';
 
@@ -13,7 +14,8 @@ export const metadata: Metadata = { title: 'Design' };
 export default async function DesignPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const user = await requireUser(`/designs/${encodeURIComponent(id)}`);
-  const found = /^\d+$/.test(id) ? await getDesignForUser(user, Number(id)) : null;
+  const designId = parseId(id);
+  const found = designId === null ? null : await getDesignForUser(user, designId);
   // Someone else's design and a missing one look the same.
   if (!found) notFound();
   const { design, enclosure, canEdit } = found;

@@ -8,6 +8,7 @@ import { UnitToggle } from '@/components/ui/UnitToggle';
 import { button, link } from '@/components/ui/styles';
 import { enclosureView, memberViews } from '@/lib/api/views';
 import { can } from '@/lib/permissions';
+import { parseId } from '@/lib/api/schemas';
 import { requireUser } from '@/lib/session';
 
 export const metadata: Metadata = { title: 'Enclosure' };
@@ -15,9 +16,8 @@ export const metadata: Metadata = { title: 'Enclosure' };
 export default async function EnclosurePage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const user = await requireUser(`/enclosures/${id}`);
-  const enclosureId = Number(id);
-  const enclosure =
-    Number.isInteger(enclosureId) && enclosureId > 0 ? await enclosureView(enclosureId) : null;
+  const enclosureId = parseId(id);
+  const enclosure = enclosureId === null ? null : await enclosureView(enclosureId);
   const resource =
     enclosure &&
     ({ kind: 'enclosure', organisationId: enclosure.organisationId, keeperId: enclosure.keeperId } as const);

@@ -16,6 +16,7 @@ import { lampForPage } from '@/lib/lamp-log/access';
 import { designLampsOf } from '@/lib/lamp-log/design-lamps';
 import { lampDetail } from '@/lib/lamp-log/store';
 import { can } from '@/lib/permissions';
+import { parseId } from '@/lib/api/schemas';
 import { requireUser } from '@/lib/session';
 
 export const metadata: Metadata = { title: 'Lamp' };
@@ -23,8 +24,8 @@ export const metadata: Metadata = { title: 'Lamp' };
 export default async function LampPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const user = await requireUser(`/lamp-log/${id}`);
-  const lampId = Number(id);
-  if (!Number.isSafeInteger(lampId) || lampId <= 0) notFound();
+  const lampId = parseId(id);
+  if (lampId === null) notFound();
   const found = await lampForPage(user, lampId);
   // Someone else's lamp looks exactly like a missing one.
   if (!found) notFound();

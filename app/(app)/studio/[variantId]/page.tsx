@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { StudioLoader } from '@/components/studio/StudioLoader';
+import { parseId } from '@/lib/api/schemas';
 import { requireUser } from '@/lib/session';
 import { getVariantForUser } from '@/lib/variants/variants';
 import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
@@ -12,7 +13,7 @@ export const metadata: Metadata = { title: 'Studio' };
 export default async function VariantStudioPage({ params }: { params: Promise<{ variantId: string }> }) {
   const { variantId } = await params;
   const user = await requireUser(`/studio/${encodeURIComponent(variantId)}`);
-  const id = /^\d+$/.test(variantId) ? Number(variantId) : NaN;
+  const id = parseId(variantId) ?? NaN;
   const variant = await getVariantForUser(user, id);
   // Someone else's variant and a missing one look the same.
   if (!variant) notFound();

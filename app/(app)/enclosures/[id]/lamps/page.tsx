@@ -16,6 +16,7 @@ import { designLampsOf } from '@/lib/lamp-log/design-lamps';
 import { summarise } from '@/lib/lamp-log/outlook-store';
 import { lampsOfEnclosure } from '@/lib/lamp-log/store';
 import { backdropsOf, uploadJson } from '@/lib/uploads/service';
+import { parseId } from '@/lib/api/schemas';
 import { requireUser } from '@/lib/session';
 import { ensureStartingCatalogue } from '@/lib/species/seed';
 
@@ -24,8 +25,8 @@ export const metadata: Metadata = { title: 'Lamps of an enclosure' };
 export default async function EnclosureLampsPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const user = await requireUser(`/enclosures/${id}/lamps`);
-  const enclosureId = Number(id);
-  if (!Number.isSafeInteger(enclosureId) || enclosureId <= 0) notFound();
+  const enclosureId = parseId(id);
+  if (enclosureId === null) notFound();
   const found = await enclosureForLampsPage(user, enclosureId);
   if (!found) notFound();
   const { enclosure, canEdit } = found;
