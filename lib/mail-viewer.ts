@@ -8,6 +8,7 @@
  *  - only to that organisation's owners (lib/permissions.ts), and only invitations and lamp reminders;
  *  - a link of an invitation that was used, withdrawn or has expired is replaced by a note.
  */
+import 'server-only';
 import { config } from '@/lib/config';
 import { getSequelize } from '@/lib/db';
 import { hashToken, invitationState } from '@/lib/auth/invitations';

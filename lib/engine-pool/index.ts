@@ -13,6 +13,7 @@
  * it imports. Anywhere else (vitest, tsx scripts) there is no bundler: the worker registers tsx's loader
  * first and imports the same file as source.
  */
+import 'server-only';
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { availableParallelism } from 'node:os';
