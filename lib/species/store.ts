@@ -149,6 +149,9 @@ export async function updateSheet(
     coolAirC: patch.coolAirC ?? current.coolAirC,
     nightMinC: patch.nightMinC !== undefined ? patch.nightMinC : current.nightMinC,
     photoperiodH: patch.photoperiodH !== undefined ? patch.photoperiodH : current.photoperiodH,
+    adultLengthCm: patch.adultLengthCm !== undefined ? patch.adultLengthCm : current.adultLengthCm,
+    climbs: patch.climbs ?? current.climbs,
+    lowMelanin: patch.lowMelanin ?? current.lowMelanin,
     notes: patch.notes !== undefined ? patch.notes : current.notes,
     sources: patch.sources ?? current.sources,
   });

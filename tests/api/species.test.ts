@@ -160,6 +160,20 @@ describe('PATCH /api/species/[id]', () => {
     expect(bad.body.error.field).toBe('coolAirC.min');
   });
 
+  it('stores the adult length, climbing and pale-morph flags, and names a bad length', async () => {
+    const id = await firstSheetId(shop);
+    const before = await call(item.GET, { path: `/api/species/${id}`, params: { id }, as: staff });
+    expect(before.body).toMatchObject({ adultLengthCm: null, climbs: false, lowMelanin: false });
+    const r = await patch(staff, id, { adultLengthCm: 45, climbs: true, lowMelanin: true });
+    expect(r.status).toBe(200);
+    expect(r.body).toMatchObject({ adultLengthCm: 45, climbs: true, lowMelanin: true });
+    const row = (await SpeciesSheet.findByPk(id))!;
+    expect([row.adultLengthCm, row.climbs, row.lowMelanin]).toEqual([45, true, true]);
+    const bad = await patch(owner, id, { adultLengthCm: 0 });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.field).toBe('adultLengthCm');
+  });
+
   it('refuses a keeper: 403, and the sheet is unchanged', async () => {
     const id = await firstSheetId(shop);
     const before = (await SpeciesSheet.findByPk(id))!.toJSON();
