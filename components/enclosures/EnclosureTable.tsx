@@ -2,14 +2,14 @@
 
 import { type ColumnDef, flexRender, getCoreRowModel, useReactTable } from '@tanstack/react-table';
 import Link from '@/components/ui/Link';
-import { useId, useMemo } from 'react';
-import { Notice } from '@/components/ui/Notice';
-import { button, focusRing, input, link } from '@/components/ui/styles';
+import { useMemo } from 'react';
+import { ListLoadError, ListPager, ListSearchBox, SortableHeader } from '@/components/ui/ServerListParts';
+import { button, link } from '@/components/ui/styles';
 import { formatSize, type LengthUnit } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
 import {
-  ariaSortFor,
   ENCLOSURE_PAGE_SIZE,
+  MAX_ENCLOSURE_SEARCH,
   type EnclosureListView,
   type EnclosureSortColumn,
   nextSort,
@@ -96,7 +96,6 @@ export function EnclosureTable({
     keeperId,
     initial,
   });
-  const searchId = useId();
   const columns = useMemo(() => columnsFor(showKeeper, unit), [showKeeper, unit]);
   const sorting = useMemo(() => [{ id: view.sort.column, desc: view.sort.descending }], [view.sort]);
   const data = result.data;
@@ -120,49 +119,30 @@ export function EnclosureTable({
     getCoreRowModel: getCoreRowModel(),
   });
   const rows = table.getRowModel().rows;
-  const first = (view.page - 1) * ENCLOSURE_PAGE_SIZE + 1;
 
   return (
     <div>
-      <div className="mb-3 flex flex-wrap items-end gap-3">
-        <div className="w-full max-w-sm">
-          <label htmlFor={searchId} className="mb-1 block text-caption font-medium text-basalt-700">
-            Search enclosures
-          </label>
-          <input
-            id={searchId}
-            type="search"
-            value={draft}
-            onChange={(ev) => setDraft(ev.target.value)}
-            maxLength={120}
-            placeholder={showKeeper ? 'Name, animal, species or keeper' : 'Name, animal or species'}
-            className={input}
-          />
-        </div>
-        <p className="pb-2 text-caption text-basalt-500" aria-live="polite">
-          {/* The count of the rows shown; while another view loads, the old count would mislead. */}
-          {busy
-            ? 'Loading enclosures…'
-            : stale
-              ? ''
-              : view.q
-                ? `${total} ${total === 1 ? 'enclosure matches' : 'enclosures match'}`
-                : `${total} ${total === 1 ? 'enclosure' : 'enclosures'}`}
-        </p>
+      <div className="mb-3">
+        <ListSearchBox
+          label="Search enclosures"
+          value={draft}
+          onChange={setDraft}
+          maxLength={MAX_ENCLOSURE_SEARCH}
+          placeholder={showKeeper ? 'Name, animal, species or keeper' : 'Name, animal or species'}
+          // The count of the rows shown; while another view loads, the old count would mislead.
+          status={
+            busy
+              ? 'Loading enclosures…'
+              : stale
+                ? ''
+                : view.q
+                  ? `${total} ${total === 1 ? 'enclosure matches' : 'enclosures match'}`
+                  : `${total} ${total === 1 ? 'enclosure' : 'enclosures'}`
+          }
+        />
       </div>
       {result.isError && (
-        <div className="mb-3">
-          <Notice tone="error" title="The enclosures could not be loaded.">
-            <p>{result.error.message}</p>
-            <button
-              type="button"
-              className={`${button.secondary} mt-2`}
-              onClick={() => void result.refetch()}
-            >
-              Try again
-            </button>
-          </Notice>
-        </div>
+        <ListLoadError what="enclosures" message={result.error.message} retry={() => void result.refetch()} />
       )}
       <div className="overflow-x-auto rounded-lg border border-basalt-200 bg-white">
         <table
@@ -173,24 +153,16 @@ export function EnclosureTable({
           <thead className="bg-basalt-50 text-caption uppercase tracking-wide text-basalt-600">
             {table.getHeaderGroups().map((group) => (
               <tr key={group.id}>
-                {group.headers.map((header) => {
-                  const column = header.column.id as EnclosureSortColumn;
-                  const state = ariaSortFor(column, view.sort);
-                  return (
-                    <th key={header.id} scope="col" aria-sort={state} className="px-2 py-1 font-semibold">
-                      <button
-                        type="button"
-                        onClick={() => show({ sort: nextSort(view.sort, column), page: 1 })}
-                        className={`inline-flex items-center gap-1 rounded px-2 py-1 uppercase tracking-wide hover:bg-basalt-100 ${focusRing}`}
-                      >
-                        {flexRender(header.column.columnDef.header, header.getContext())}
-                        <span aria-hidden="true" className={state === 'none' ? 'text-basalt-300' : ''}>
-                          {state === 'ascending' ? '▲' : state === 'descending' ? '▼' : '↕'}
-                        </span>
-                      </button>
-                    </th>
-                  );
-                })}
+                {group.headers.map((header) => (
+                  <SortableHeader
+                    key={header.id}
+                    column={header.column.id as EnclosureSortColumn}
+                    sort={view.sort}
+                    onSort={(column) => show({ sort: nextSort(view.sort, column), page: 1 })}
+                  >
+                    {flexRender(header.column.columnDef.header, header.getContext())}
+                  </SortableHeader>
+                ))}
               </tr>
             ))}
           </thead>
@@ -221,30 +193,14 @@ export function EnclosureTable({
           </div>
         )}
       </div>
-      {total > ENCLOSURE_PAGE_SIZE && (
-        <nav aria-label="Pages of enclosures" className="mt-3 flex flex-wrap items-center justify-end gap-3">
-          <p className="text-caption text-basalt-600">
-            {first}–{Math.min(first + ENCLOSURE_PAGE_SIZE - 1, total)} of {total} · page {view.page} of{' '}
-            {pages}
-          </p>
-          <button
-            type="button"
-            className={button.secondary}
-            disabled={view.page <= 1}
-            onClick={() => show({ page: view.page - 1 })}
-          >
-            Previous page
-          </button>
-          <button
-            type="button"
-            className={button.secondary}
-            disabled={view.page >= pages}
-            onClick={() => show({ page: view.page + 1 })}
-          >
-            Next page
-          </button>
-        </nav>
-      )}
+      <ListPager
+        page={view.page}
+        pageSize={ENCLOSURE_PAGE_SIZE}
+        total={total}
+        pages={pages}
+        noun="enclosures"
+        onPage={(page) => show({ page })}
+      />
     </div>
   );
 }

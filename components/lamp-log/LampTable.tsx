@@ -2,12 +2,102 @@
 
 import Link from '@/components/ui/Link';
 import { link } from '@/components/ui/styles';
-import { formatLengthRounded } from '@/shared/units';
+import { formatLengthRounded, type LengthUnit } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
 import type { LampSummary } from '@/lib/lamp-log/store';
 import { STATUS_RANK } from '@/lib/lamp-log/status';
 import { formatAge, formatDay, formatValue } from './format';
 import { StatusBadge } from './StatusBadge';
+
+type Row = LampSummary;
+
+export function LampCell({ l }: { l: Row }) {
+  return (
+    <>
+      <Link href={`/lamp-log/${l.id}`} className={link}>
+        {l.label}
+      </Link>
+      <div className="text-caption text-basalt-500">{l.lampType.name}</div>
+    </>
+  );
+}
+
+export function EnclosureCell({ l }: { l: Row }) {
+  return (
+    <>
+      <Link href={`/enclosures/${l.enclosure.id}/lamps`} className={link}>
+        {l.enclosure.name}
+      </Link>
+      {l.enclosure.speciesName && (
+        <div className="text-caption text-basalt-500">{l.enclosure.speciesName}</div>
+      )}
+    </>
+  );
+}
+
+export function AgeCell({ l }: { l: Row }) {
+  return (
+    <>
+      {formatAge(l.ageDays)}
+      <div className="text-caption text-basalt-500">{l.hoursPerDay} h a day</div>
+    </>
+  );
+}
+
+export function LastReadingCell({ l, unit }: { l: Row; unit: LengthUnit }) {
+  return l.lastReading ? (
+    <>
+      {formatValue(l.lastReading.value, l.lastReading.unit)}
+      <div className="text-caption text-basalt-500">
+        at {formatLengthRounded(l.lastReading.distanceCm, unit)}, {formatDay(l.lastReading.takenAt)}
+      </div>
+    </>
+  ) : (
+    <span className="text-basalt-500">None yet</span>
+  );
+}
+
+export function RemainingCell({ l }: { l: Row }) {
+  return (
+    <>
+      {l.status === 'heat-only' ? '—' : `${Math.round(l.remainingFraction * 100)} %`}
+      <div className="text-caption text-basalt-500">
+        {l.fit.kind === 'none' ? 'usual curve' : l.fit.certainty === 'fitted' ? 'fitted' : 'uncertain'}
+      </div>
+    </>
+  );
+}
+
+export function FallsBelowCell({ l }: { l: Row }) {
+  return l.fallsBelowOn ? (
+    <>
+      <span className="tabular-nums">{formatDay(l.fallsBelowOn)}</span>
+      {l.fallsBelowEarliestOn && l.fallsBelowEarliestOn < l.fallsBelowOn && (
+        <div className="text-caption text-basalt-500">as early as {formatDay(l.fallsBelowEarliestOn)}</div>
+      )}
+    </>
+  ) : l.basking ? (
+    <span className="text-basalt-500">Not within 5 years</span>
+  ) : l.missing.length > 0 && l.status !== 'retired' && l.status !== 'heat-only' ? (
+    <span className="text-caption text-basalt-500">Needs {l.missing.join('; ')}</span>
+  ) : (
+    <span className="text-basalt-500">—</span>
+  );
+}
+
+export function StatusCell({ l }: { l: Row }) {
+  return (
+    <>
+      <StatusBadge status={l.status} label={l.statusLabel} />
+      <div className="mt-1 max-w-56 text-caption text-basalt-500">{l.reasons[0]}</div>
+    </>
+  );
+}
+
+export const LAMP_CELL = {
+  text: 'px-4 py-3 text-basalt-700',
+  figure: 'whitespace-nowrap px-4 py-3 tabular-nums text-basalt-700',
+};
 
 /**
  * The lamp log table: one row per lamp with its age, last reading, fitted remaining output, the date the
@@ -57,69 +147,27 @@ export function LampTable({ lamps, showEnclosure }: { lamps: LampSummary[]; show
           {rows.map((l) => (
             <tr key={l.id} className="align-top hover:bg-basalt-50">
               <td className="px-4 py-3">
-                <Link href={`/lamp-log/${l.id}`} className={link}>
-                  {l.label}
-                </Link>
-                <div className="text-caption text-basalt-500">{l.lampType.name}</div>
+                <LampCell l={l} />
               </td>
               {showEnclosure && (
                 <td className="px-4 py-3">
-                  <Link href={`/enclosures/${l.enclosure.id}/lamps`} className={link}>
-                    {l.enclosure.name}
-                  </Link>
-                  {l.enclosure.speciesName && (
-                    <div className="text-caption text-basalt-500">{l.enclosure.speciesName}</div>
-                  )}
+                  <EnclosureCell l={l} />
                 </td>
               )}
-              <td className="whitespace-nowrap px-4 py-3 tabular-nums text-basalt-700">
-                {formatAge(l.ageDays)}
-                <div className="text-caption text-basalt-500">{l.hoursPerDay} h a day</div>
+              <td className={LAMP_CELL.figure}>
+                <AgeCell l={l} />
               </td>
-              <td className="whitespace-nowrap px-4 py-3 tabular-nums text-basalt-700">
-                {l.lastReading ? (
-                  <>
-                    {formatValue(l.lastReading.value, l.lastReading.unit)}
-                    <div className="text-caption text-basalt-500">
-                      at {formatLengthRounded(l.lastReading.distanceCm, unit)},{' '}
-                      {formatDay(l.lastReading.takenAt)}
-                    </div>
-                  </>
-                ) : (
-                  <span className="text-basalt-500">None yet</span>
-                )}
+              <td className={LAMP_CELL.figure}>
+                <LastReadingCell l={l} unit={unit} />
               </td>
-              <td className="whitespace-nowrap px-4 py-3 tabular-nums text-basalt-700">
-                {l.status === 'heat-only' ? '—' : `${Math.round(l.remainingFraction * 100)} %`}
-                <div className="text-caption text-basalt-500">
-                  {l.fit.kind === 'none'
-                    ? 'usual curve'
-                    : l.fit.certainty === 'fitted'
-                      ? 'fitted'
-                      : 'uncertain'}
-                </div>
+              <td className={LAMP_CELL.figure}>
+                <RemainingCell l={l} />
               </td>
-              <td className="px-4 py-3 text-basalt-700">
-                {l.fallsBelowOn ? (
-                  <>
-                    <span className="tabular-nums">{formatDay(l.fallsBelowOn)}</span>
-                    {l.fallsBelowEarliestOn && l.fallsBelowEarliestOn < l.fallsBelowOn && (
-                      <div className="text-caption text-basalt-500">
-                        as early as {formatDay(l.fallsBelowEarliestOn)}
-                      </div>
-                    )}
-                  </>
-                ) : l.basking ? (
-                  <span className="text-basalt-500">Not within 5 years</span>
-                ) : l.missing.length > 0 && l.status !== 'retired' && l.status !== 'heat-only' ? (
-                  <span className="text-caption text-basalt-500">Needs {l.missing.join('; ')}</span>
-                ) : (
-                  <span className="text-basalt-500">—</span>
-                )}
+              <td className={LAMP_CELL.text}>
+                <FallsBelowCell l={l} />
               </td>
               <td className="px-4 py-3">
-                <StatusBadge status={l.status} label={l.statusLabel} />
-                <div className="mt-1 max-w-56 text-caption text-basalt-500">{l.reasons[0]}</div>
+                <StatusCell l={l} />
               </td>
             </tr>
           ))}

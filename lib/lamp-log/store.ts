@@ -283,35 +283,6 @@ export async function lampsOfEnclosure(enclosureId: number, opts: { cursor?: num
   });
 }
 
-/**
- * Lamps across an organisation; a keeper sees only lamps of their own enclosures. Newest enclosure
- * first is not needed: the page sorts by status.
- */
-export async function lampsOfOrganisation(
-  organisationId: number,
-  keeperId: number | null,
-  opts: { cursor?: number; limit: number; includeRetired?: boolean },
-) {
-  getSequelize();
-  return Lamp.findAll({
-    where: {
-      ...(opts.cursor ? { id: { [Op.gt]: opts.cursor } } : {}),
-      ...(opts.includeRetired ? {} : { retiredOn: null }),
-    },
-    include: [
-      {
-        model: Enclosure,
-        as: 'enclosure',
-        required: true,
-        attributes: ['id'],
-        where: { organisationId, ...(keeperId ? { keeperId } : {}) },
-      },
-    ],
-    order: [['id', 'ASC']],
-    limit: opts.limit + 1,
-  });
-}
-
 /** A lamp's readings, oldest first, from after `cursor` (one more than `limit`, for page()). */
 export async function readingsOf(
   lampId: number,

@@ -1,21 +1,15 @@
-import { z } from 'zod';
-import { allow, pageQuery, route } from '@/lib/api';
-import { idSchema } from '@/lib/api/schemas';
-import { todayIso } from '@/lib/lamp-log/dates';
-import { summarise } from '@/lib/lamp-log/outlook-store';
-import { lampsOfOrganisation } from '@/lib/lamp-log/store';
+import { allow, route } from '@/lib/api';
+import { lampListQuery, listLamps } from '@/lib/api/lamp-list';
 import { roleIn } from '@/lib/permissions';
 
 /**
- * Lamps across an organisation (`?organisationId=`): owners and staff see every enclosure's lamps,
- * a keeper only those of their own enclosures.
+ * Lamps across an organisation (`?organisationId=`), searched, filtered (`status`, `enclosure`,
+ * `keeper`, `tech`, `due` within days, `retired=1`), sorted and paged (`q`, `sort`, `dir`, `offset`,
+ * `limit`; see lamp-list.ts), with the organisation's status counts. Owners and staff see every
+ * enclosure's lamps, a keeper only those of their own enclosures, whatever they filter by.
  */
 export const GET = route({
-  query: z.object({
-    organisationId: idSchema('The organisation id'),
-    includeRetired: z.enum(['true', 'false']).default('false'),
-    ...pageQuery,
-  }),
+  query: lampListQuery,
   handler: async ({ query, user }) => {
     // Reading "a lamp" of the organisation: any member may, keepers are narrowed to their own below.
     allow(
@@ -24,13 +18,8 @@ export const GET = route({
       { kind: 'lamp', organisationId: query.organisationId, keeperId: user.id },
       'That organisation',
     );
-    const keeperOnly = roleIn(user, query.organisationId) === 'keeper' ? user.id : null;
-    const rows = await lampsOfOrganisation(query.organisationId, keeperOnly, {
-      ...query,
-      includeRetired: query.includeRetired === 'true',
-    });
-    const items = await summarise(rows.slice(0, query.limit), todayIso());
-    const last = rows[query.limit - 1];
-    return { items, nextCursor: rows.length > query.limit && last ? String(last.id) : null };
+    const { keeper, ...rest } = query;
+    const keeperId = roleIn(user, query.organisationId) === 'keeper' ? user.id : keeper;
+    return listLamps({ ...rest, keeperId });
   },
 });

@@ -11,6 +11,7 @@ import { QueryProvider } from '@/components/designs/QueryProvider';
 import { listEnclosures } from '@/lib/api/enclosure-list';
 import { memberViews } from '@/lib/api/views';
 import { listQueryForView, viewFromSearchParams } from '@/lib/enclosures/list-view';
+import { toSearchParams } from '@/lib/list-view';
 import { can, roleIn } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
 
@@ -102,12 +103,4 @@ export default async function EnclosuresPage({
       )}
     </>
   );
-}
-
-function toSearchParams(params: Record<string, string | string[]>): URLSearchParams {
-  const out = new URLSearchParams();
-  for (const [key, value] of Object.entries(params)) {
-    for (const v of Array.isArray(value) ? value : [value]) out.append(key, v);
-  }
-  return out;
 }

@@ -1,45 +1,53 @@
 import type { Metadata } from 'next';
 import Link from '@/components/ui/Link';
-import { LampTable } from '@/components/lamp-log/LampTable';
+import { QueryProvider } from '@/components/designs/QueryProvider';
+import { LampLogTable } from '@/components/lamp-log/LampLogTable';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { Notice } from '@/components/ui/Notice';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { button, link } from '@/components/ui/styles';
-import { todayIso } from '@/lib/lamp-log/dates';
-import { summarise } from '@/lib/lamp-log/outlook-store';
-import { lampsOfOrganisation } from '@/lib/lamp-log/store';
-import { roleIn } from '@/lib/permissions';
+import { filteredEnclosure, lampListQuery, listLamps } from '@/lib/api/lamp-list';
+import { memberViews } from '@/lib/api/views';
+import { lampListView } from '@/lib/lamp-log/list-view';
+import { toSearchParams } from '@/lib/list-view';
+import { can, roleIn } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
+import { LAMP_TECH_IDS, LAMP_TECHS } from '@/simulation';
 
 export const metadata: Metadata = { title: 'Lamp log' };
 
-const LIMIT = 500;
-
-/** Every lamp of the organisation (a keeper: their own), most urgent first. */
+/**
+ * The organisation's lamps (a keeper: their own), most urgent first, from the stored outlooks: the first
+ * page is rendered here for the view the address names; the table fetches the others.
+ */
 export default async function LampLogPage({
   searchParams,
 }: {
-  searchParams: Promise<{ retired?: string; due?: string }>;
+  searchParams: Promise<Record<string, string | string[]>>;
 }) {
   const user = await requireUser('/lamp-log');
   const membership = await currentMembership(user);
   if (!membership) return null;
-  const { retired, due } = await searchParams;
-  // `?due=1` is the reminder e-mail's link: only the lamps to replace or test soon.
-  const dueOnly = due === '1';
-  const includeRetired = retired === '1' && !dueOnly;
-  const keeperOnly = roleIn(user, membership.organisationId) === 'keeper' ? user.id : null;
-  const rows = await lampsOfOrganisation(membership.organisationId, keeperOnly, {
-    limit: LIMIT,
-    includeRetired,
-  });
-  const all = await summarise(rows.slice(0, LIMIT), todayIso());
-  const lamps = dueOnly ? all.filter((l) => l.status === 'replace' || l.status === 'test-soon') : all;
-  const counts = {
-    replace: lamps.filter((l) => l.status === 'replace').length,
-    test: lamps.filter((l) => l.status === 'test-soon').length,
-  };
+  const orgId = membership.organisationId;
+  const isKeeper = roleIn(user, orgId) === 'keeper';
+  const seesAll = can(user, 'read', { kind: 'member', organisationId: orgId });
+  const view = lampListView.viewFromSearchParams(toSearchParams(await searchParams));
+  // The same parse as the API's: one set of rules for what a view may ask.
+  const parsed = lampListQuery.safeParse(
+    Object.fromEntries(lampListView.apiQueryForView(view, { organisationId: orgId })),
+  );
+  const query = parsed.success ? parsed.data : lampListQuery.parse({ organisationId: orgId });
+  const { keeper, ...rest } = query;
+  const keeperId = isKeeper ? user.id : keeper;
+  const [firstPage, keepers, enclosure] = await Promise.all([
+    listLamps({ ...rest, keeperId }),
+    seesAll ? memberViews(orgId, 'keeper') : Promise.resolve(null),
+    query.enclosure ? filteredEnclosure(orgId, query.enclosure, isKeeper ? user.id : undefined) : null,
+  ]);
+  const { counts } = firstPage;
+  const techs = LAMP_TECH_IDS.map((id) => ({ id, label: LAMP_TECHS[id].label }));
+  const unfiltered = !view.q && Object.keys(view.filters ?? {}).length === 0;
 
   return (
     <>
@@ -48,25 +56,13 @@ export default async function LampLogPage({
         lead="The lamps in use in each enclosure, their age, the latest meter reading, the fitted decline, and when the basking zone will fall below the species' need."
         actions={<UnitToggle />}
       />
-      {lamps.length === 0 ? (
+      {firstPage.total === 0 && unfiltered && counts.pending === 0 ? (
         <EmptyState
-          title={
-            dueOnly
-              ? 'No lamp needs attention now'
-              : includeRetired
-                ? 'No lamps logged yet'
-                : 'No lamps in use'
-          }
+          title="No lamps in use"
           action={
-            dueOnly ? (
-              <Link href="/lamp-log" className={button.primary}>
-                Show every lamp
-              </Link>
-            ) : (
-              <Link href="/enclosures" className={button.primary}>
-                Go to enclosures
-              </Link>
-            )
+            <Link href="/enclosures" className={button.primary}>
+              Go to enclosures
+            </Link>
           }
         >
           <p>
@@ -81,30 +77,40 @@ export default async function LampLogPage({
         </EmptyState>
       ) : (
         <div className="space-y-4">
-          {(counts.replace > 0 || counts.test > 0) && (
+          {(counts.replace > 0 || counts.testSoon > 0) && (
             <Notice tone={counts.replace > 0 ? 'warning' : 'info'}>
               {[
                 counts.replace ? `${counts.replace} lamp${counts.replace > 1 ? 's' : ''} to replace` : '',
-                counts.test ? `${counts.test} to test with a meter soon` : '',
+                counts.testSoon ? `${counts.testSoon} to test with a meter soon` : '',
               ]
                 .filter(Boolean)
-                .join(', ')}
-              . Reminders go out by e-mail to each enclosure&apos;s keeper.
+                .join(', ')}{' '}
+              of {counts.inUse} in use. Reminders go out by e-mail to each enclosure&apos;s keeper.
             </Notice>
           )}
-          <LampTable lamps={lamps} showEnclosure />
-          <p className="text-caption text-basalt-500">
-            {rows.length > LIMIT && `Showing the first ${LIMIT} lamps. `}
-            {dueOnly ? (
+          {counts.pending > 0 && (
+            <Notice tone="info" title="Some figures are being brought up to date.">
+              {counts.pending} lamp{counts.pending > 1 ? 's' : ''} changed (or a new day began) and{' '}
+              {counts.pending > 1 ? 'are' : 'is'} being recomputed: the lamps shown are current, but the
+              order, the counts and the filters may still move. Reload in a minute.
+            </Notice>
+          )}
+          {enclosure && (
+            <Notice tone="info">
+              Showing the lamps of {enclosure.name}.{' '}
               <Link href="/lamp-log" className={link}>
-                Showing the lamps to replace or test soon; show every lamp
+                Show all
               </Link>
-            ) : (
-              <Link href={includeRetired ? '/lamp-log' : '/lamp-log?retired=1'} className={link}>
-                {includeRetired ? 'Hide retired lamps' : 'Show retired lamps too'}
-              </Link>
-            )}
-          </p>
+            </Notice>
+          )}
+          <QueryProvider>
+            <LampLogTable
+              organisationId={orgId}
+              keepers={keepers?.map((k) => ({ id: k.userId, name: k.name })) ?? null}
+              techs={techs}
+              initial={{ view, page: firstPage }}
+            />
+          </QueryProvider>
         </div>
       )}
       <p className="mt-6 max-w-prose text-caption text-basalt-500">

@@ -1,0 +1,219 @@
+import { QueryTypes } from 'sequelize';
+import { describe, expect, it } from 'vitest';
+import * as lampsRoute from '@/app/api/lamps/route';
+import { lampListQuery, lampListSql } from '@/lib/api/lamp-list';
+import { addDays, todayIso } from '@/lib/lamp-log/dates';
+import { refreshStaleOutlooks } from '@/lib/lamp-log/outlook-store';
+import { summariseLive } from '@/lib/lamp-log/store';
+import { seedStartingCatalogue } from '@/lib/species/seed';
+import { Enclosure, Lamp, LampType, Membership, User } from '@/models';
+import {
+  createEnclosure,
+  createMember,
+  createOrganisation,
+  seedDemo,
+  testDb,
+  withTestDatabase,
+} from '../helpers/db';
+import { call } from './http';
+
+// The lamp log's list API: server-side search, filters, sort and pages from the stored outlooks; the
+// same statuses as computing every lamp from scratch; indexes and a fixed number of queries.
+withTestDatabase();
+
+type Item = {
+  id: number;
+  label: string;
+  status: string;
+  enclosure: { keeperId: number };
+  lampType: { tech: string };
+};
+
+async function world(lampsPerKeeper = 3) {
+  const org = await createOrganisation();
+  await seedStartingCatalogue(org.id);
+  const { user: staff } = await createMember('staff', org);
+  const { user: ann } = await createMember('keeper', org);
+  const { user: bob } = await createMember('keeper', org);
+  const types = await LampType.findAll({ where: { organisationId: org.id } });
+  const t5 = types.find((t) => t.tech === 't5')!;
+  const heat = types.find((t) => !(t.uvbAt30 > 0))!;
+  const lamps: Lamp[] = [];
+  for (const keeper of [ann, bob]) {
+    const enclosure = await createEnclosure(org, keeper, { speciesName: 'Bearded dragon' });
+    for (let i = 0; i < lampsPerKeeper; i++) {
+      lamps.push(
+        await Lamp.create({
+          enclosureId: enclosure.id,
+          lampTypeId: i === 0 ? heat.id : t5.id,
+          label: `${keeper === ann ? 'Ann' : 'Bob'} lamp ${String(i).padStart(2, '0')}`,
+          // From new to two years old: a mix of "test soon", "fine" and "replace".
+          firstUsedOn: addDays(todayIso(), -((i * 97) % 730)),
+          hoursPerDay: 12,
+          baskingDistanceCm: 25,
+          createdById: keeper.id,
+        }),
+      );
+    }
+  }
+  return { org, staff, ann, bob, lamps };
+}
+
+const list = async (as: User, orgId: number, qs = '') => {
+  const r = await call(lampsRoute.GET, { path: `/api/lamps?organisationId=${orgId}${qs}`, as });
+  expect(r.status, r.text).toBe(200);
+  return r.body as { items: Item[]; total: number; counts: Record<string, number> };
+};
+
+describe('GET /api/lamps', () => {
+  it('gives the demo lamps the statuses computing each one from scratch gives', async () => {
+    await seedDemo();
+    for (const staffMember of await Membership.findAll({ where: { role: 'owner' } })) {
+      const user = (await User.findByPk(staffMember.userId))!;
+      const page = await list(user, staffMember.organisationId, '&retired=1&limit=100');
+      const lamps = await Lamp.findAll({
+        include: [
+          { model: Enclosure, as: 'enclosure', where: { organisationId: staffMember.organisationId } },
+        ],
+      });
+      expect(page.total).toBe(lamps.length);
+      const live = await summariseLive(lamps, todayIso());
+      const byId = (xs: { id: number; status: string }[]) =>
+        Object.fromEntries(xs.map((x) => [x.id, x.status]));
+      expect(byId(page.items)).toEqual(byId(live));
+      expect(page.counts.replace).toBe(live.filter((l) => l.status === 'replace').length);
+      expect(page.counts.testSoon).toBe(live.filter((l) => l.status === 'test-soon').length);
+      expect(page.counts.pending).toBe(0);
+    }
+  });
+
+  it('filters by status, technology, keeper and due date, and a keeper never sees another’s lamps', async () => {
+    const w = await world();
+    const all = await list(w.staff, w.org.id, '&limit=100');
+    expect(all.total).toBe(6);
+    const statuses = new Set(all.items.map((l) => l.status));
+    for (const status of statuses) {
+      const page = await list(w.staff, w.org.id, `&status=${status}`);
+      expect(page.items.length).toBeGreaterThan(0);
+      expect(page.items.every((l) => l.status === status)).toBe(true);
+      // The counts are of everything in view, not of the filtered list.
+      expect(page.counts).toEqual(all.counts);
+    }
+    const t5 = await list(w.staff, w.org.id, '&tech=t5');
+    expect(t5.total).toBe(4);
+    expect(t5.items.every((l) => l.lampType.tech === 't5')).toBe(true);
+    expect((await list(w.staff, w.org.id, `&keeper=${w.bob.id}`)).items.map((l) => l.label)).toEqual(
+      expect.arrayContaining(['Bob lamp 00', 'Bob lamp 01', 'Bob lamp 02']),
+    );
+    const asAnn = await list(w.ann, w.org.id, `&keeper=${w.bob.id}&limit=100`);
+    expect(asAnn.items.map((l) => l.enclosure.keeperId)).toEqual([w.ann.id, w.ann.id, w.ann.id]);
+    expect(asAnn.counts.inUse).toBe(3);
+    const due = await list(w.staff, w.org.id, '&due=14&limit=100');
+    expect(due.total).toBe(
+      all.items.filter((l) => l.status === 'replace' || l.status === 'test-soon').length,
+    );
+    const bad = await call(lampsRoute.GET, {
+      path: `/api/lamps?organisationId=${w.org.id}&due=5`,
+      as: w.staff,
+    });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.field).toBe('due');
+  });
+
+  it('searches, sorts and pages on the server', async () => {
+    const w = await world(12);
+    const byLabel = await list(w.staff, w.org.id, '&sort=lamp&dir=asc&limit=5&offset=5');
+    expect(byLabel.total).toBe(24);
+    expect(byLabel.items.map((l) => l.label)).toEqual([
+      'Ann lamp 05',
+      'Ann lamp 06',
+      'Ann lamp 07',
+      'Ann lamp 08',
+      'Ann lamp 09',
+    ]);
+    const desc = await list(w.staff, w.org.id, '&sort=lamp&dir=desc&limit=1');
+    expect(desc.items[0]!.label).toBe('Bob lamp 11');
+    const search = await list(w.staff, w.org.id, '&q=bob%2010');
+    expect(search.items.map((l) => l.label)).toEqual(['Bob lamp 10']);
+    // Most urgent first by default.
+    const urgency = (await list(w.staff, w.org.id, '&limit=100')).items.map((l) => l.status);
+    const rank = { replace: 0, 'test-soon': 1, fine: 2, 'heat-only': 3, retired: 4 } as Record<
+      string,
+      number
+    >;
+    expect(urgency.map((s) => rank[s])).toEqual([...urgency.map((s) => rank[s]!)].sort((a, b) => a - b));
+  });
+
+  it('asks the database the same number of queries for a page of 3 lamps as for a page of 24', async () => {
+    const w = await world(12);
+    await refreshStaleOutlooks();
+    const sequelize = testDb() as unknown as { options: { logging: unknown } };
+    const count = async (qs: string) => {
+      let n = 0;
+      const before = sequelize.options.logging;
+      sequelize.options.logging = () => void n++;
+      try {
+        const page = await list(w.staff, w.org.id, qs);
+        return { n, items: page.items.length };
+      } finally {
+        sequelize.options.logging = before;
+      }
+    };
+    const small = await count('&limit=3');
+    const large = await count('&limit=24');
+    expect(small.items).toBe(3);
+    expect(large.items).toBe(24);
+    expect(large.n).toBe(small.n);
+    expect(small.n).toBeLessThanOrEqual(8);
+  });
+
+  it('uses an index of the stored outlooks for its filter and order (EXPLAIN)', async () => {
+    await world(2);
+    const sequelize = testDb();
+    // Thousands of lamps in one organisation: where a full scan would be a real choice for the optimiser.
+    const other = await createOrganisation();
+    await seedStartingCatalogue(other.id);
+    const { user: keeper } = await createMember('keeper', other);
+    const enclosure = await createEnclosure(other, keeper);
+    const type = (await LampType.findOne({ where: { organisationId: other.id, tech: 't5' } }))!;
+    await sequelize.query(
+      `INSERT INTO lamps (enclosure_id, lamp_type_id, label, first_used_on, hours_per_day, created_at, updated_at)
+       SELECT :enclosure, :type, CONCAT('Filler ', seq), '2025-01-01', 12, NOW(), NOW() FROM seq_1_to_3000`,
+      { replacements: { enclosure: enclosure.id, type: type.id } },
+    );
+    await sequelize.query(
+      `INSERT INTO lamp_outlooks (lamp_id, organisation_id, label, enclosure_name, first_used_on, status,
+         status_rank, next_due_on, outlook_json, as_of, source_version, computed_at)
+       SELECT l.id, :org, l.label, 'Filler', l.first_used_on, 'fine', 2, '2026-01-01', '{}', :today, 1, NOW()
+         FROM lamps l WHERE l.enclosure_id = :enclosure`,
+      { replacements: { org: other.id, enclosure: enclosure.id, today: todayIso() } },
+    );
+    await sequelize.query('ANALYZE TABLE lamp_outlooks, lamps, enclosures');
+    const plan = async (qs: Record<string, string>) => {
+      // The organisation with thousands of lamps: where a plan matters.
+      const query = lampListQuery.parse({ organisationId: String(other.id), ...qs });
+      const { keeper: _k, ...rest } = query;
+      const { pageSql, replacements } = lampListSql(rest, todayIso());
+      return sequelize.query<{ table: string; type: string; key: string | null; Extra: string | null }>(
+        `EXPLAIN ${pageSql}`,
+        { replacements, type: QueryTypes.SELECT },
+      );
+    };
+    const views: Record<string, string>[] = [
+      {},
+      { status: 'replace' },
+      { due: '14', sort: 'due' },
+      { sort: 'lamp' },
+    ];
+    for (const qs of views) {
+      const rows = await plan(qs);
+      const outlook = rows.find((r) => r.table === 'o')!;
+      expect(outlook, JSON.stringify(rows)).toBeDefined();
+      expect(outlook.type, JSON.stringify(qs)).not.toBe('ALL');
+      expect(outlook.key, JSON.stringify([qs, rows])).toMatch(/^lamp_outlooks_org_/);
+      expect(outlook.Extra ?? '', JSON.stringify(qs)).not.toMatch(/filesort/);
+      // Every join goes through a primary key.
+      for (const r of rows.filter((x) => x.table !== 'o')) expect(r.type, JSON.stringify(r)).toBe('eq_ref');
+    }
+  });
+});
