@@ -54,13 +54,58 @@ export async function countAttempt(keys: string[], windowMs: number, now = new D
       { replacements: { key, now, expired }, type: QueryTypes.INSERT },
     );
   }
-  // Old windows are useless; drop them so the table stays small.
+  // Old windows are useless; drop them so the table stays small (remembered addresses live longer).
   await SignInAttempt.destroy({
-    where: { windowStart: { [Op.lt]: new Date(now.getTime() - 24 * 3600_000) } },
+    where: {
+      [Op.or]: [
+        {
+          key: { [Op.notLike]: 'known:%' },
+          windowStart: { [Op.lt]: new Date(now.getTime() - 24 * 3600_000) },
+        },
+        { key: { [Op.like]: 'known:%' }, windowStart: { [Op.lt]: new Date(now.getTime() - KNOWN_MS) } },
+      ],
+    },
   });
 }
 
 export async function clearFailures(key: string): Promise<void> {
   getSequelize();
   await SignInAttempt.destroy({ where: { key } });
+}
+
+export type Counter = { count: number; lastAt: Date };
+
+/** The live counters of these keys (window not yet over): how many, and when the last was counted. */
+export async function readCounters(
+  keys: string[],
+  windowMs: number,
+  now = new Date(),
+): Promise<Map<string, Counter>> {
+  getSequelize();
+  const rows = await SignInAttempt.findAll({
+    where: { key: keys, windowStart: { [Op.gt]: new Date(now.getTime() - windowMs) } },
+  });
+  return new Map(rows.map((r) => [r.key, { count: r.count, lastAt: r.updatedAt }]));
+}
+
+/** How long an address that signed in to an account is remembered as its owner's. */
+export const KNOWN_MS = 30 * 24 * 3600_000;
+
+/** Remembers a key (an account and address that signed in together) for KNOWN_MS from now. */
+export async function markKnown(key: string, now = new Date()): Promise<void> {
+  await getSequelize().query(
+    `INSERT INTO sign_in_attempts (\`key\`, window_start, count, created_at, updated_at)
+     VALUES (:key, :now, 0, :now, :now)
+     ON DUPLICATE KEY UPDATE window_start = :now, updated_at = :now`,
+    { replacements: { key, now }, type: QueryTypes.INSERT },
+  );
+}
+
+export async function isKnown(key: string, now = new Date()): Promise<boolean> {
+  getSequelize();
+  const row = await SignInAttempt.findOne({
+    where: { key, windowStart: { [Op.gt]: new Date(now.getTime() - KNOWN_MS) } },
+    attributes: ['id'],
+  });
+  return row !== null;
 }

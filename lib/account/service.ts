@@ -2,10 +2,10 @@ import 'server-only';
 import type { Transaction } from 'sequelize';
 import { z } from 'zod';
 import { ApiError, badRequest } from '@/lib/api/errors';
-import { SIGN_IN_LIMITS } from '@/lib/auth/credentials';
+import { SIGN_IN_LIMITS, accountWait } from '@/lib/auth/credentials';
 import { hashPassword, newPasswordSchema, verifyPassword } from '@/lib/auth/password';
 import { getSequelize } from '@/lib/db';
-import { checkLimits, clearFailures, countAttempt, limitKey } from '@/lib/rate-limit';
+import { clearFailures, countAttempt, limitKey } from '@/lib/rate-limit';
 import { User } from '@/models';
 
 /**
@@ -35,24 +35,23 @@ export async function changePassword(userId: number, input: ChangePasswordInput)
   const sequelize = getSequelize();
   const user = await User.scope('withPassword').findByPk(userId);
   if (!user) throw new ApiError(404, 'not_found', 'That account was not found.');
-  // The same per-account limit as sign-in: a stolen session cannot guess the password to lock its owner out.
+  // The same growing per-account delay as sign-in: a stolen session cannot guess the password quickly,
+  // and cannot lock its owner out either (the waits are capped).
   const key = limitKey('account', user.email);
-  const verdict = await checkLimits([{ key, limit: SIGN_IN_LIMITS.perAccount }], SIGN_IN_LIMITS.windowMs);
-  if (!verdict.allowed) {
-    const minutes = Math.max(1, Math.ceil(verdict.retryAfterMs / 60_000));
+  const wait = await accountWait({ account: key });
+  if (wait > 0) {
+    const seconds = Math.max(1, Math.ceil(wait / 1000));
     throw new ApiError(
       429,
       'rate_limited',
-      `Too many wrong passwords. Try again in ${minutes} minutes.`,
+      `Too many wrong passwords. Wait ${seconds} ${seconds === 1 ? 'second' : 'seconds'}, then try again.`,
       undefined,
       undefined,
-      {
-        'Retry-After': String(Math.ceil(verdict.retryAfterMs / 1000)),
-      },
+      { 'Retry-After': String(seconds) },
     );
   }
   if (!(await verifyPassword(input.currentPassword, user.passwordHash))) {
-    await countAttempt([key], SIGN_IN_LIMITS.windowMs);
+    await countAttempt([key], SIGN_IN_LIMITS.counterMs);
     throw badRequest('currentPassword', 'That is not your current password.');
   }
   if (input.newPassword === input.currentPassword) {

@@ -12,6 +12,10 @@ export function signInErrorMessage(code: string | null | undefined): string {
       const n = Math.max(1, Number(minutes) || 15);
       return `Too many sign-in attempts. Try again in ${n} ${n === 1 ? 'minute' : 'minutes'}.`;
     }
+    case 'SlowDown': {
+      const n = Math.max(1, Number(minutes) || 1);
+      return `Too many wrong passwords for this account. Wait ${n} ${n === 1 ? 'second' : 'seconds'}, then try again.`;
+    }
     case 'ServiceUnavailable':
       return 'Sign-in is unavailable right now (the database cannot be reached). Try again in a minute.';
     case 'SessionRequired':

@@ -1,8 +1,9 @@
-import { afterAll, beforeEach, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
 import { newSessionId } from '@/lib/auth/ended-sessions';
 import * as enclosures from '@/app/api/enclosures/route';
 import * as signUpRoute from '@/app/api/sign-up/route';
 import { authOptions, authorizeCredentials, SIGN_IN_LIMITS } from '@/lib/auth';
+import { delayAfter } from '@/lib/auth/credentials';
 import { signInErrorMessage } from '@/lib/auth/messages';
 import { STARTING_LAMP_TYPES } from '@/lib/lamp-types/starting-lamp-types';
 import { STARTING_SHEETS } from '@/lib/species/starting-sheets';
@@ -23,7 +24,17 @@ beforeEach(async () => {
   ({ user: bob } = await createMember('keeper', org));
 });
 
-const from = (ip: string) => ({ 'x-forwarded-for': `${ip}, 10.0.0.1` });
+// One trusted proxy in front (TRUST_PROXY=1): it appends the address it was reached from; anything before
+// that entry is whatever the client wrote.
+const from = (ip: string) => ({ 'x-forwarded-for': `10.0.0.1, ${ip}` });
+const trustBefore = process.env.TRUST_PROXY;
+beforeAll(() => {
+  process.env.TRUST_PROXY = '1';
+});
+afterAll(() => {
+  if (trustBefore === undefined) delete process.env.TRUST_PROXY;
+  else process.env.TRUST_PROXY = trustBefore;
+});
 
 /** What the sign-in page shows for a refusal (next-auth forwards the thrown message as the error code). */
 async function refusal(p: Promise<unknown>): Promise<string> {
@@ -59,25 +70,93 @@ describe('credentials sign-in', () => {
     expect(r.status).toBe(401);
   });
 
-  it('refuses the 6th attempt on an account, even with the right password, while others still sign in', async () => {
-    for (let i = 0; i < SIGN_IN_LIMITS.perAccount; i++) {
-      await refusal(
-        authorizeCredentials({ email: alice.email, password: `wrong-${i}-password` }, from('198.51.100.7')),
-      );
-    }
-    const sixth = await refusal(authorizeCredentials({ email: alice.email, password }, from('198.51.100.7')));
-    expect(sixth).toMatch(/^Too many sign-in attempts\. Try again in (1[0-5]|[1-9]) minutes?\.$/);
-    // The same account from a fresh address is still locked: the limit is per account too.
-    expect(await refusal(authorizeCredentials({ email: alice.email, password }, from('192.0.2.99')))).toMatch(
-      /^Too many sign-in attempts/,
+  it('slows one address on one account down with growing waits, without counting tries made during a wait', async () => {
+    const wrong = (i: number) =>
+      refusal(authorizeCredentials({ email: alice.email, password: `wrong-${i}-pw` }, from('198.51.100.7')));
+    for (let i = 0; i < SIGN_IN_LIMITS.pairFreeFailures; i++)
+      expect(await wrong(i)).toBe('That email and password do not match.');
+    // The next try, even with the right password, has to wait; it is not checked, and not counted.
+    const waiting = await refusal(
+      authorizeCredentials({ email: alice.email, password }, from('198.51.100.7')),
     );
-    // Another account from another address signs in.
-    const other = await authorizeCredentials({ email: bob.email, password }, from('192.0.2.44'));
-    expect(other.id).toBe(String(bob.id));
+    expect(waiting).toMatch(/^Too many wrong passwords for this account\. Wait 1 second, then try again\.$/);
+    for (let i = 0; i < 5; i++) await wrong(99);
+    const counters = await SignInAttempt.findAll();
+    expect(Math.max(...counters.map((c) => c.count))).toBe(SIGN_IN_LIMITS.pairFreeFailures);
+    // Once the wait has passed, the right password signs in (nothing is locked).
+    vi.useFakeTimers({ now: Date.now() + 1500, toFake: ['Date'] });
+    try {
+      const user = await authorizeCredentials({ email: alice.email, password }, from('198.51.100.7'));
+      expect(user.id).toBe(String(alice.id));
+    } finally {
+      vi.useRealTimers();
+    }
     // The table holds hashes, never the e-mail or address in the clear.
     const keys = (await SignInAttempt.findAll()).map((r) => r.key).join(' ');
     expect(keys).not.toContain(alice.email);
     expect(keys).not.toContain('198.51.100.7');
+  });
+
+  it('keeps brute force slow: the wait doubles to 15 minutes for one address, one minute account-wide', () => {
+    const { pairFreeFailures: free, pairMaxDelayMs, accountFreeFailures, accountMaxDelayMs } = SIGN_IN_LIMITS;
+    expect(delayAfter(free - 1, free, pairMaxDelayMs)).toBe(0);
+    expect([0, 1, 2, 3].map((k) => delayAfter(free + k, free, pairMaxDelayMs))).toEqual([
+      1000, 2000, 4000, 8000,
+    ]);
+    expect(delayAfter(free + 40, free, pairMaxDelayMs)).toBe(15 * 60_000);
+    expect(delayAfter(accountFreeFailures + 40, accountFreeFailures, accountMaxDelayMs)).toBe(60_000);
+    // Guesses one address can make at one account in a day once at the cap, and across accounts.
+    expect((24 * 3600_000) / pairMaxDelayMs).toBe(96);
+    expect(SIGN_IN_LIMITS.perAddress * ((24 * 3600_000) / SIGN_IN_LIMITS.windowMs)).toBe(1920);
+  });
+
+  it('an attacker elsewhere cannot keep the owner out', async () => {
+    // The owner signed in from home before.
+    await authorizeCredentials({ email: alice.email, password }, from('192.0.2.10'));
+    // Then many addresses guess wrong, far past every free try.
+    for (let i = 0; i < 12; i++) {
+      await refusal(
+        authorizeCredentials({ email: alice.email, password: `guess-${i}-pw` }, from(`203.0.113.${i + 1}`)),
+      );
+    }
+    // From home: in at once.
+    expect((await authorizeCredentials({ email: alice.email, password }, from('192.0.2.10'))).id).toBe(
+      String(alice.id),
+    );
+    // From a new address: at most the account-wide cap to wait (a minute), never a lock.
+    for (let i = 0; i < 12; i++) {
+      await refusal(
+        authorizeCredentials({ email: alice.email, password: `guess-${i}-pw` }, from(`203.0.113.${i + 1}`)),
+      );
+    }
+    const elsewhere = await refusal(
+      authorizeCredentials({ email: alice.email, password }, from('192.0.2.77')),
+    );
+    const seconds = Number(/Wait (\d+) seconds?/.exec(elsewhere)?.[1]);
+    expect(seconds).toBeGreaterThan(0);
+    expect(seconds).toBeLessThanOrEqual(SIGN_IN_LIMITS.accountMaxDelayMs / 1000);
+    vi.useFakeTimers({ now: Date.now() + SIGN_IN_LIMITS.accountMaxDelayMs + 1000, toFake: ['Date'] });
+    try {
+      expect((await authorizeCredentials({ email: alice.email, password }, from('192.0.2.77'))).id).toBe(
+        String(alice.id),
+      );
+    } finally {
+      vi.useRealTimers();
+    }
+    // Another account is untouched throughout.
+    expect((await authorizeCredentials({ email: bob.email, password }, from('203.0.113.1'))).id).toBe(
+      String(bob.id),
+    );
+  });
+
+  it('a forged X-Forwarded-For entry does not give a fresh address', async () => {
+    // The proxy appends the real address; what the client wrote in front of it changes nothing.
+    const forged = (i: number) => ({ 'x-forwarded-for': `10.9.9.${i}, 198.51.100.20` });
+    for (let i = 0; i < SIGN_IN_LIMITS.pairFreeFailures; i++)
+      await refusal(authorizeCredentials({ email: alice.email, password: `wrong-${i}-pw` }, forged(i)));
+    expect(await refusal(authorizeCredentials({ email: alice.email, password }, forged(50)))).toMatch(
+      /^Too many/,
+    );
   });
 
   it('limits one address trying many accounts', async () => {
@@ -98,16 +177,18 @@ describe('credentials sign-in', () => {
     );
   });
 
-  it('a successful sign-in clears the account counter', async () => {
-    for (let i = 0; i < SIGN_IN_LIMITS.perAccount - 1; i++) {
+  it('a successful sign-in clears the counters of the account', async () => {
+    for (let i = 0; i < SIGN_IN_LIMITS.pairFreeFailures - 1; i++) {
       await refusal(
         authorizeCredentials({ email: alice.email, password: 'not-her-password' }, from('198.51.100.9')),
       );
     }
     await authorizeCredentials({ email: alice.email, password }, from('198.51.100.9'));
-    await refusal(
-      authorizeCredentials({ email: alice.email, password: 'not-her-password' }, from('198.51.100.9')),
-    );
+    for (let i = 0; i < SIGN_IN_LIMITS.pairFreeFailures - 1; i++) {
+      await refusal(
+        authorizeCredentials({ email: alice.email, password: 'not-her-password' }, from('198.51.100.9')),
+      );
+    }
     expect((await authorizeCredentials({ email: alice.email, password }, from('198.51.100.9'))).id).toBe(
       String(alice.id),
     );
