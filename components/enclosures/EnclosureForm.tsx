@@ -7,6 +7,7 @@ import { Select } from '@/components/ui/Select';
 import { TextArea } from '@/components/ui/TextArea';
 import { fieldError } from '@/components/ui/api-client';
 import { button } from '@/components/ui/styles';
+import { ENCLOSURE_MAX_CM, ENCLOSURE_MIN_CM } from '@/shared/enclosure-size';
 import { cmToDisplay, displayToCm } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
 import type { EnclosureView, PersonOption } from './types';
@@ -55,7 +56,9 @@ export function EnclosureForm({ initial, people, submitLabel, onSubmit, onCancel
       ['depthCm', 'depth'],
     ] as const) {
       const v = size(k);
-      if (!Number.isFinite(v) || v <= 0) local[k] = `Enter the ${label} as a number above 0.`;
+      if (!Number.isFinite(v)) local[k] = `Enter the ${label} as a number.`;
+      else if (v < ENCLOSURE_MIN_CM) local[k] = `The ${label} must be at least 1 cm (0.4 in).`;
+      else if (v > ENCLOSURE_MAX_CM) local[k] = `The ${label} can be at most ${ENCLOSURE_MAX_CM} cm.`;
     }
     if (!text('name')) local.name = 'Enter a name for the enclosure.';
     setErrors(local);

@@ -2,6 +2,7 @@ import 'server-only';
 import { col, fn } from 'sequelize';
 import { z } from 'zod';
 import { getSequelize } from '@/lib/db';
+import { ENCLOSURE_MAX_CM, ENCLOSURE_MIN_CM } from '@/shared/enclosure-size';
 import { Enclosure, Membership, User } from '@/models';
 import { badRequest, notFound } from './errors';
 import { idSchema, textSchema } from './schemas';
@@ -10,8 +11,12 @@ import { idSchema, textSchema } from './schemas';
 const size = (what: string) =>
   z
     .number({ error: `Enter the ${what} in centimetres.` })
-    .positive(`The ${what} must be more than 0 cm.`)
-    .max(2000, `The ${what} can be at most 2000 cm (20 m).`);
+    .finite(`Enter the ${what} in centimetres.`)
+    .min(ENCLOSURE_MIN_CM, `The ${what} must be at least ${ENCLOSURE_MIN_CM} cm (0.4 in).`)
+    .max(
+      ENCLOSURE_MAX_CM,
+      `The ${what} can be at most ${ENCLOSURE_MAX_CM} cm (${ENCLOSURE_MAX_CM / 100} m).`,
+    );
 
 const optionalText = (max: number) =>
   textSchema()

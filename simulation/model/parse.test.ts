@@ -15,6 +15,22 @@ describe('parseDesign', () => {
     expect(r).toEqual({ ok: true, design: EXAMPLE_DESIGN });
   });
 
+  it('refuses an enclosure under a centimetre (1e-320 would be drawn as nothing)', () => {
+    for (const width of [1e-320, 0.5]) {
+      const d = clone(EXAMPLE_DESIGN);
+      d.enclosure.width = width;
+      const r = parseDesign(d);
+      expect(r.ok).toBe(false);
+      if (!r.ok) {
+        expect(r.error.path).toBe('enclosure.width');
+        expect(r.error.message).toMatch(/at least 1 cm/);
+      }
+    }
+    const d = clone(EXAMPLE_DESIGN);
+    d.enclosure.depth = 1;
+    expect(parseDesign(d).ok).toBe(true);
+  });
+
   it('names the path of a wrong type', () => {
     const d = clone(EXAMPLE_DESIGN) as unknown as { objects: Record<string, unknown>[] };
     d.objects[0]!.uvbAt30 = 'lots';

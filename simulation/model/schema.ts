@@ -5,6 +5,7 @@
  * keeps exactly what the user wrote.
  */
 import { z } from 'zod';
+import { DESIGN_ENCLOSURE_MAX_CM, ENCLOSURE_MIN_CM } from '@/shared/enclosure-size';
 import { LAMP_TECH_IDS } from './techs';
 import { designWorkProblem } from './work';
 import { WALL_MATERIALS } from './walls';
@@ -132,10 +133,17 @@ export const designObjectSchema = z.discriminatedUnion('type', [
   foliageSchema,
 ]);
 
+/** An inside dimension: at least ENCLOSURE_MIN_CM, so a near-zero number never reaches the grid. */
+const enclosureSize = z
+  .number()
+  .finite()
+  .min(ENCLOSURE_MIN_CM, `must be at least ${ENCLOSURE_MIN_CM} cm`)
+  .max(DESIGN_ENCLOSURE_MAX_CM, `must be at most ${DESIGN_ENCLOSURE_MAX_CM} cm`);
+
 export const enclosureSchema = z.strictObject({
-  width: size(1000),
-  height: size(1000),
-  depth: size(1000),
+  width: enclosureSize,
+  height: enclosureSize,
+  depth: enclosureSize,
   /**
    * Where the side view cuts the enclosure: cm from the front. The fields are computed in this plane.
    * Default: half the depth.

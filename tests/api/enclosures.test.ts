@@ -141,7 +141,10 @@ describe('POST /api/enclosures', () => {
 
   it.each([
     ['name', { name: '' }, 'Enter a name'],
-    ['widthCm', { widthCm: -5 }, 'more than 0'],
+    ['widthCm', { widthCm: -5 }, 'at least 1 cm'],
+    // Once stored as 0 by a FLOAT column: a size must be a real centimetre or more.
+    ['widthCm', { widthCm: 1e-320 }, 'at least 1 cm'],
+    ['heightCm', { heightCm: 0.5 }, 'at least 1 cm'],
     ['heightCm', { heightCm: 'tall' }, 'centimetres'],
     ['depthCm', { depthCm: 5000 }, 'at most 2000'],
     ['keeperId', { keeperId: 'x' }, 'number'],
