@@ -9,6 +9,7 @@ import * as m0007 from './0007-ended-sessions';
 import * as m0008 from './0008-background-jobs';
 import * as m0009 from './0009-lamp-outlooks';
 import * as m0010 from './0010-species-length-climbs-morph';
+import * as m0011 from './0011-password-resets';
 
 export type Migration = {
   name: string;
@@ -31,4 +32,5 @@ export const migrations: Migration[] = [
   { name: '0008-background-jobs', ...m0008 },
   { name: '0009-lamp-outlooks', ...m0009 },
   { name: '0010-species-length-climbs-morph', ...m0010 },
+  { name: '0011-password-resets', ...m0011 },
 ];

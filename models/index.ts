@@ -4,6 +4,7 @@ import { Invitation } from './invitation';
 import { Membership } from './membership';
 import { Organisation } from './organisation';
 import { EndedSession } from './ended-session';
+import { PasswordReset } from './password-reset';
 import { SignInAttempt } from './sign-in-attempt';
 import { User } from './user';
 import { Design } from './design';
@@ -23,7 +24,7 @@ import { JobRun, JobRunCount, JobUnit } from './job-run';
 
 export { Enclosure, Invitation, Membership, Organisation, User };
 export { Design, ShareLink, Variant };
-export { EndedSession, SignInAttempt };
+export { EndedSession, PasswordReset, SignInAttempt };
 export { CatalogueSeeding, LampType, SpeciesSheet };
 export { Lamp, LampOutlook, LampReminder, MailMessage, Reading, Upload };
 export { JobRun, JobRunCount, JobUnit };
@@ -46,6 +47,7 @@ export function initModels(sequelize: Sequelize): void {
   ShareLink.register(sequelize);
   SignInAttempt.register(sequelize);
   EndedSession.register(sequelize);
+  PasswordReset.register(sequelize);
   SpeciesSheet.register(sequelize);
   LampType.register(sequelize);
   CatalogueSeeding.register(sequelize);

@@ -43,6 +43,11 @@ export function SignInForm({ returnTo, initialError }: { returnTo: string; initi
       {error && <Notice tone="error">{error}</Notice>}
       <Field label="Email" name="email" type="email" autoComplete="username" required autoFocus />
       <Field label="Password" name="password" type="password" autoComplete="current-password" required />
+      <p className="-mt-2 text-right text-body">
+        <Link href="/forgot-password" className={link}>
+          Forgot your password?
+        </Link>
+      </p>
       <button type="submit" className={`${button.primary} w-full`} disabled={busy}>
         {busy ? 'Signing in…' : 'Sign in'}
       </button>

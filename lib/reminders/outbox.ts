@@ -93,6 +93,8 @@ export async function deliverQueued(
     batch?: number;
     now?: Date;
     onFailure?: (m: MailMessage, error: unknown) => void;
+    /** Only these messages (one a request has just queued), by the same claiming rules. */
+    ids?: number[];
   } = {},
 ): Promise<Delivery> {
   getSequelize();
@@ -103,7 +105,7 @@ export async function deliverQueued(
   for (let cursor = 0; ;) {
     const rows = await MailMessage.findAll({
       where: {
-        id: { [Op.gt]: cursor },
+        id: opts.ids ? { [Op.gt]: cursor, [Op.in]: opts.ids } : { [Op.gt]: cursor },
         [Op.or]: [
           { status: 'queued', attempts: 0 },
           {

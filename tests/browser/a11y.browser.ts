@@ -129,6 +129,8 @@ const targets: Target[] = [
   out('landing', '/', () => '/'),
   out('sign-in', '/sign-in', () => '/sign-in'),
   out('sign-up', '/sign-up', () => '/sign-up'),
+  out('forgot-password', '/forgot-password', () => '/forgot-password'),
+  out('reset-password', '/reset-password', () => `/reset-password#token=${'x'.repeat(43)}`),
   out('share', '/s/[token]', () => ids.sharePath),
   out('invite-unknown', '/invite/[token]', () => `/invite/${'x'.repeat(43)}`),
   staffSees('enclosures', '/enclosures', () => '/enclosures'),

@@ -111,6 +111,10 @@ export const REQUESTS: Record<string, RequestSpec> = {
     }),
   },
   'DELETE /api/shares/[id]': {},
+  'POST /api/password-reset': { body: () => ({ email: 'nobody.here@example.com' }) },
+  'POST /api/password-reset/complete': {
+    body: () => ({ token: 'C'.repeat(43), password: 'a-long-new-password' }),
+  },
   'POST /api/sign-up': {
     body: () => ({
       name: 'New Person',

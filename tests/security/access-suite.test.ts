@@ -33,6 +33,10 @@ const LEGITIMATE: Record<string, { who: Actor[]; why: string; markers?: (keyof t
     why: 'a probe: answers { ok } and when each background job last ran; no organisation’s data',
   },
   'POST /api/sign-up': { who: ACTORS, why: 'creates a new account with its own new organisation' },
+  'POST /api/password-reset': {
+    who: ACTORS,
+    why: 'answers everyone the same; the link goes only to the address, never in the answer',
+  },
   'POST /api/organisations': { who: ['outsider', 'otherKeeper'], why: 'a new organisation of their own' },
   'PUT /api/account/password': { who: ['outsider', 'otherKeeper'], why: 'their own account only' },
   'DELETE /api/account/sessions': { who: ['outsider', 'otherKeeper'], why: 'their own sessions only' },
@@ -143,7 +147,8 @@ describe('every route handler refuses people who may not', () => {
             actor === 'nobody' &&
             reply.status !== 401 &&
             !r.pattern.startsWith('/s/') &&
-            r.pattern !== '/api/invitations/accept'
+            r.pattern !== '/api/invitations/accept' &&
+            r.pattern !== '/api/password-reset/complete'
           )
             wrong.push(`${keyOf(r)} → ${reply.status} for nobody (expected 401)`);
           const leaked = hiddenFrom(actor).filter((m) => reply.text.includes(MARK[m]));
@@ -278,7 +283,12 @@ describe('every route handler refuses people who may not', () => {
     const sorted = [...routes].sort((a, b) => order(a) - order(b) || (order(a) ? rank(a) - rank(b) : 0));
     for (const r of sorted) {
       // Public routes with a made-up token answer 404 to everyone; that is their refusal, not the owner's.
-      if (r.pattern === '/api/invitations/accept' || r.pattern.startsWith('/s/')) continue;
+      if (
+        r.pattern === '/api/invitations/accept' ||
+        r.pattern === '/api/password-reset/complete' ||
+        r.pattern.startsWith('/s/')
+      )
+        continue;
       const reply = await send(r, 'owner');
       if (REFUSED.includes(reply.status) || reply.status >= 500)
         refused.push(`${keyOf(r)} → ${reply.status} ${reply.text.slice(0, 160)}`);

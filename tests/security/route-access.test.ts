@@ -19,6 +19,10 @@ const PUBLIC_HANDLERS: Record<string, string> = {
     'creates a new account with a new organisation of its own; touches nothing that exists (rate-limited)',
   'app/api/health/route.ts GET':
     'a load balancer probe: answers { ok }, the database state and when each background job last ran (or 503 when the database is down); no organisation’s data',
+  'app/api/password-reset/route.ts POST':
+    'e-mails a link to the address if an account has it; answers the same either way, reads nothing back (rate-limited)',
+  'app/api/password-reset/complete/route.ts POST':
+    'the unguessable, single-use, 30-minute token from the e-mailed link is the permission',
   'app/api/invitations/accept/route.ts POST':
     'the unguessable, single-use, expiring invitation token is the permission; the e-mail must match',
 };

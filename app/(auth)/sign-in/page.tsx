@@ -11,6 +11,7 @@ export const metadata: Metadata = { title: 'Sign in' };
 const DONE: Record<string, string> = {
   'password-changed': 'Your password was changed and every session ended. Sign in with the new password.',
   'signed-out-everywhere': 'You were signed out on every device.',
+  'password-reset': 'Your new password is set and every session ended. Sign in with the new password.',
 };
 
 export default async function SignInPage({

@@ -1,0 +1,71 @@
+'use client';
+
+import { useState, type FormEvent } from 'react';
+import Link from '@/components/ui/Link';
+import { Field } from '@/components/ui/Field';
+import { Notice } from '@/components/ui/Notice';
+import { fieldError, sendJson } from '@/components/ui/api-client';
+import { button, link } from '@/components/ui/styles';
+
+/** Asks for a "choose a new password" link. The answer never says whether the address has an account. */
+export function ForgotPasswordForm() {
+  const [error, setError] = useState<{ field?: string; message: string } | null>(null);
+  const [sent, setSent] = useState<{ email: string; message: string } | null>(null);
+  const [busy, setBusy] = useState(false);
+
+  async function onSubmit(e: FormEvent<HTMLFormElement>) {
+    e.preventDefault();
+    const email = String(new FormData(e.currentTarget).get('email') ?? '');
+    setBusy(true);
+    setError(null);
+    try {
+      const answer = await sendJson<{ message: string }>('POST', '/api/password-reset', { email });
+      setSent({ email, message: answer.message });
+    } catch (err) {
+      setError(fieldError(err));
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  if (sent) {
+    return (
+      <div className="space-y-4">
+        <Notice tone="success">{sent.message}</Notice>
+        <p className="text-body text-basalt-600">
+          Sent to <strong>{sent.email}</strong>. Nothing after a few minutes? Check the spam folder, or ask
+          again in a while.
+        </p>
+        <p className="text-center text-body">
+          <Link href="/sign-in" className={link}>
+            Back to sign in
+          </Link>
+        </p>
+      </div>
+    );
+  }
+
+  return (
+    <form onSubmit={onSubmit} className="space-y-4" noValidate>
+      {error && !error.field && <Notice tone="error">{error.message}</Notice>}
+      <Field
+        label="Email"
+        name="email"
+        type="email"
+        autoComplete="username"
+        required
+        autoFocus
+        error={error?.field === 'email' ? error.message : undefined}
+      />
+      <button type="submit" className={`${button.primary} w-full`} disabled={busy}>
+        {busy ? 'Sending…' : 'Send me a link'}
+      </button>
+      <p className="text-center text-body text-basalt-600">
+        Remembered it?{' '}
+        <Link href="/sign-in" className={link}>
+          Sign in
+        </Link>
+      </p>
+    </form>
+  );
+}
