@@ -14,6 +14,7 @@ export function SignUpForm() {
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [general, setGeneral] = useState('');
   const [busy, setBusy] = useState(false);
+  const [sentTo, setSentTo] = useState('');
 
   async function onSubmit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
@@ -45,9 +46,27 @@ export function SignUpForm() {
       router.replace('/enclosures');
       router.refresh();
     } else {
-      // The account exists; only the automatic sign-in failed.
-      router.replace('/sign-in');
+      // Sign-up answers the same whether or not the address had an account; if it had, its owner was
+      // e-mailed, and this password is not theirs.
+      setSentTo(body.email);
+      setBusy(false);
     }
+  }
+
+  if (sentTo) {
+    return (
+      <div className="space-y-4">
+        <Notice tone="info">
+          Check the inbox of {sentTo}. If that address already has an account, we have e-mailed it what to do
+          next: sign in, or choose a new password if it is forgotten.
+        </Notice>
+        <p className="text-center text-body">
+          <Link href="/sign-in" className={link}>
+            Go to sign in
+          </Link>
+        </p>
+      </div>
+    );
   }
 
   return (
