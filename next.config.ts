@@ -1,4 +1,5 @@
 import type { NextConfig } from 'next';
+import { UPLOAD_CSP } from './lib/uploads/serve';
 
 /**
  * Sent with every response (pages, API routes, static files). Pages get their full, nonce-based
@@ -17,7 +18,12 @@ const SECURITY_HEADERS = [
 
 const config: NextConfig = {
   async headers() {
-    return [{ source: '/:path*', headers: SECURITY_HEADERS }];
+    return [
+      { source: '/:path*', headers: SECURITY_HEADERS },
+      // An uploaded file keeps its own stricter policy: a later rule wins for the same header, and without
+      // this one the baseline above would replace the route's (nothing loads, scripts never run).
+      { source: '/api/uploads/:id', headers: [{ key: 'Content-Security-Policy', value: UPLOAD_CSP }] },
+    ];
   },
   // Sequelize loads dialect modules dynamically; bundling it breaks the build (pg-hstore).
   serverExternalPackages: ['sequelize', 'mariadb', 'nodemailer', 'smtp-server'],

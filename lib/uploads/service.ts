@@ -7,6 +7,7 @@ import { can } from '@/lib/permissions';
 import { deleteObject, getObject, putObject, StorageUnavailableError } from '@/lib/storage/s3';
 import { Enclosure, Upload } from '@/models';
 import type { Transaction } from 'sequelize';
+import { dimensionProblem, imageDimensions } from './dimensions';
 import { InvalidImageError } from './errors';
 import { describeType, sniffImage } from './sniff';
 import { stripMetadata } from './strip';
@@ -72,6 +73,8 @@ export async function storeBackdrop(
   }
   let clean: Uint8Array;
   try {
+    const problem = dimensionProblem(imageDimensions(type, bytes));
+    if (problem) throw new ApiError(413, 'payload_too_large', problem, 'file');
     clean = stripMetadata(type, bytes);
   } catch (e) {
     if (e instanceof InvalidImageError) throw new ApiError(415, 'unsupported_media_type', e.message, 'file');

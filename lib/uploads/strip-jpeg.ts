@@ -2,12 +2,16 @@ import { InvalidImageError } from './errors';
 
 /**
  * Removes metadata from a JPEG by walking its marker segments (ISO/IEC 10918-1, Annex B):
- * APP1 (Exif, XMP — camera, time, often GPS position), APP13 (IPTC: names, places) and COM (comments)
- * are dropped; everything needed to draw the picture (tables, frame, scan, APP0 JFIF, APP2 ICC colour
+ * every application segment but APP0, APP2 and APP14 — among them APP1 (Exif, XMP: camera, time, often
+ * GPS position) and APP13 (IPTC: names, places) — and COM (comments) are dropped, as is anything after
+ * the end-of-image marker; everything needed to draw the picture (tables, frame, scan, APP0 JFIF, APP2 ICC colour
  * profile, APP14 Adobe colour transform) is kept byte for byte. After the first start-of-scan the
  * rest of the file is entropy-coded data and is copied as it is.
  */
-const DROP = new Set([0xe1, 0xed, 0xfe]);
+const KEEP_APP = new Set([0xe0, 0xe2, 0xee]);
+/** Application segments (APP0–APP15) and comments are kept only if they help draw the picture. */
+const dropped = (marker: number) =>
+  marker === 0xfe || (marker >= 0xe0 && marker <= 0xef && !KEEP_APP.has(marker));
 // Markers that stand alone, with no length field.
 const STANDALONE = new Set([0x01, 0xd0, 0xd1, 0xd2, 0xd3, 0xd4, 0xd5, 0xd6, 0xd7]);
 
@@ -40,11 +44,15 @@ export function stripJpeg(input: Uint8Array): Uint8Array {
     if (marker >= 0xc0 && marker <= 0xcf && marker !== 0xc4 && marker !== 0xc8 && marker !== 0xcc)
       sawFrame = true;
     if (marker === 0xda) {
-      // Start of scan: the compressed picture follows; keep everything from here on.
-      parts.push(input.subarray(i));
+      // Start of scan: the compressed picture follows; keep it up to the last end-of-image marker, and
+      // nothing after it (bytes there are not part of the picture).
+      let eoi = input.length - 2;
+      while (eoi > j && !(input[eoi] === 0xff && input[eoi + 1] === 0xd9)) eoi--;
+      if (eoi <= j) throw new InvalidImageError('JPEG');
+      parts.push(input.subarray(i, eoi + 2));
       return finish(parts, sawFrame);
     }
-    if (!DROP.has(marker)) parts.push(input.subarray(i, end));
+    if (!dropped(marker)) parts.push(input.subarray(i, end));
     i = end;
   }
   throw new InvalidImageError('JPEG');

@@ -2,12 +2,27 @@ import { InvalidImageError } from './errors';
 import { concat } from './strip-jpeg';
 
 /**
- * Removes metadata chunks from a PNG (ISO/IEC 15948 / W3C PNG, §11): tEXt, zTXt and iTXt (free text:
- * authors, software, comments) and eXIf (camera data, possibly a position). All other chunks are kept
- * as they are, so the picture and its colour information are unchanged and every kept chunk's CRC stays
- * valid. The structure is checked on the way: IHDR first, IEND last, every chunk inside the file.
+ * Keeps only the chunks of a PNG needed to draw it (ISO/IEC 15948 / W3C PNG, §11): the critical ones and
+ * the colour, transparency and density chunks. Everything else goes — tEXt, zTXt and iTXt (authors,
+ * comments), eXIf (camera data, possibly a position), private and unknown chunks (an `htMl` chunk
+ * carrying a script was once accepted) and anything after IEND. Kept chunks are copied as they are, so
+ * the picture is unchanged and every kept chunk's CRC stays valid. The structure is checked on the way:
+ * IHDR first, IEND last, every chunk inside the file.
  */
-const DROP = new Set(['tEXt', 'zTXt', 'iTXt', 'eXIf']);
+const KEEP = new Set([
+  'IHDR',
+  'PLTE',
+  'IDAT',
+  'IEND',
+  'tRNS',
+  'gAMA',
+  'cHRM',
+  'sRGB',
+  'iCCP',
+  'sBIT',
+  'bKGD',
+  'pHYs',
+]);
 
 export function stripPng(input: Uint8Array): Uint8Array {
   const view = new DataView(input.buffer, input.byteOffset, input.byteLength);
@@ -21,7 +36,7 @@ export function stripPng(input: Uint8Array): Uint8Array {
     if (end > input.length || !/^[A-Za-z]{4}$/.test(type)) throw new InvalidImageError('PNG');
     if (first && type !== 'IHDR') throw new InvalidImageError('PNG');
     first = false;
-    if (!DROP.has(type)) parts.push(input.subarray(i, end));
+    if (KEEP.has(type)) parts.push(input.subarray(i, end));
     if (type === 'IEND') return concat(parts);
     i = end;
   }

@@ -2,11 +2,13 @@ import { InvalidImageError } from './errors';
 import { concat } from './strip-jpeg';
 
 /**
- * Removes metadata from a WebP (RFC 9649): the "EXIF" and "XMP " chunks are dropped, the matching flags
+ * Removes metadata from a WebP (RFC 9649): only the chunks that draw the picture are kept ("EXIF", "XMP "
+ * and unknown chunks are dropped), the matching flags
  * in the VP8X header are cleared (so decoders do not look for them), and the RIFF size is rewritten.
  * Chunks are little-endian FourCC + size + data, padded to an even length.
  */
-const DROP = new Set(['EXIF', 'XMP ']);
+/** The chunks that draw the picture (RFC 9649 §2.7); EXIF, XMP and anything unknown are dropped. */
+const KEEP = new Set(['VP8X', 'VP8 ', 'VP8L', 'ALPH', 'ANIM', 'ANMF', 'ICCP']);
 const VP8X_EXIF = 0x08;
 const VP8X_XMP = 0x04;
 
@@ -23,7 +25,7 @@ export function stripWebp(input: Uint8Array): Uint8Array {
     const end = i + 8 + size + (size & 1);
     if (i + 8 + size > riffEnd) throw new InvalidImageError('WebP');
     if (fourcc === 'VP8 ' || fourcc === 'VP8L' || fourcc === 'ANIM') sawImage = true;
-    if (!DROP.has(fourcc)) {
+    if (KEEP.has(fourcc)) {
       const chunk = input.slice(i, Math.min(end, riffEnd));
       if (fourcc === 'VP8X' && size >= 1) chunk[8] = (chunk[8] as number) & ~(VP8X_EXIF | VP8X_XMP);
       parts.push(chunk);

@@ -3,7 +3,7 @@ import { PNG } from 'pngjs';
 import { InvalidImageError } from './errors';
 import { sniffImage } from './sniff';
 import { stripMetadata } from './strip';
-import { jpegWithMetadata, pngWithMetadata, webpWithMetadata } from '@/tests/fixtures/images';
+import { jpegWithMetadata, pngChunk, pngWithMetadata, webpWithMetadata } from '@/tests/fixtures/images';
 
 const text = (b: Uint8Array) => Buffer.from(b).toString('latin1');
 
@@ -107,5 +107,54 @@ describe('stripMetadata — WebP', () => {
     expect(() => stripMetadata('image/webp', Buffer.concat([empty, Buffer.alloc(8)]))).toThrow(
       InvalidImageError,
     );
+  });
+});
+
+describe('stripMetadata — anything not needed to draw the picture', () => {
+  const script = new TextEncoder().encode('<html><script>alert(document.cookie)</script></html>');
+
+  it('drops an unknown PNG chunk (an htMl chunk carrying a script) and whatever follows IEND', () => {
+    const { bytes, pixels } = pngWithMetadata();
+    const ihdrEnd = 8 + 12 + bytes.readUInt32BE(8);
+    const hostile = Buffer.concat([
+      bytes.subarray(0, ihdrEnd),
+      pngChunk('htMl', script),
+      pngChunk('prVt', script),
+      bytes.subarray(ihdrEnd),
+      Buffer.from(script),
+    ]);
+    const out = stripMetadata('image/png', hostile);
+    expect(text(out)).not.toContain('script');
+    expect(text(out)).not.toContain('htMl');
+    const decoded = PNG.sync.read(Buffer.from(out), { checkCRC: true } as never);
+    expect(Buffer.from(decoded.data).equals(pixels)).toBe(true);
+  });
+
+  it('drops JPEG application segments other than JFIF, ICC and Adobe, and bytes after the end marker', () => {
+    const input = jpegWithMetadata();
+    const seg = (marker: number) => new Uint8Array([0xff, marker, 0, script.length + 2, ...script]);
+    const hostile = new Uint8Array([
+      ...input.subarray(0, 2),
+      ...seg(0xe5),
+      ...seg(0xef),
+      ...input.subarray(2),
+      ...script,
+    ]);
+    const out = stripMetadata('image/jpeg', hostile);
+    expect(text(out)).not.toContain('script');
+    expect([...out.subarray(-2)]).toEqual([0xff, 0xd9]);
+  });
+
+  it('drops unknown WebP chunks', () => {
+    const input = webpWithMetadata();
+    const extra = Buffer.alloc(8 + script.length);
+    extra.write('HTML', 0, 'latin1');
+    extra.writeUInt32LE(script.length, 4);
+    Buffer.from(script).copy(extra, 8);
+    const hostile = Buffer.concat([input, extra]);
+    hostile.writeUInt32LE(hostile.length - 8, 4);
+    const out = stripMetadata('image/webp', hostile);
+    expect(text(out)).not.toContain('script');
+    expect(text(out)).toContain('VP8L');
   });
 });

@@ -164,3 +164,52 @@ describe('backdrop uploads', () => {
     expect(await Upload.count({ where: { id: loose.id } })).toBe(0);
   });
 });
+
+describe('serving uploads safely', () => {
+  it('sends its own policy, no caching, and a name with the extension of what the file is', async () => {
+    const w = await world();
+    const r = await upload(w, pngWithMetadata().bytes, 'text/html', w.keeper, 'page.html');
+    expect(r.status).toBe(201);
+    const got = await getFile(w, r.body.upload.id, w.keeper);
+    expect(got.status).toBe(200);
+    const h = got.res.headers;
+    expect(h.get('content-type')).toBe('image/png');
+    expect(h.get('content-disposition')).toBe('inline; filename="page.png"');
+    expect(h.get('cache-control')).toBe('private, no-store');
+    expect(h.get('content-security-policy')).toBe("default-src 'none'; sandbox; frame-ancestors 'none'");
+  });
+
+  it('refuses a picture claiming 50000 × 50000 pixels with 413 naming the cap', async () => {
+    const w = await world();
+    const huge = Buffer.from(pngWithMetadata().bytes);
+    huge.writeUInt32BE(50_000, 16);
+    huge.writeUInt32BE(50_000, 20);
+    const r = await upload(w, huge, 'image/png');
+    expect(r.status).toBe(413);
+    expect(r.body.error.field).toBe('file');
+    expect(r.body.error.message).toMatch(/12000 pixels/);
+  });
+
+  it('serves a stored readings CSV with its formula cells neutralised', async () => {
+    const w = await world();
+    const csv = 'taken_at,value,note\n2025-03-01T10:00:00Z,40,=HYPERLINK("http://evil.example")\n';
+    const key = `org-test/enclosure-${w.enclosure.id}/readings/formula.csv`;
+    await putObject(key, new TextEncoder().encode(csv), 'text/csv');
+    const row = await Upload.create({
+      kind: 'readings-csv',
+      ownerId: w.keeper.id,
+      organisationId: w.enclosure.organisationId,
+      enclosureId: w.enclosure.id,
+      originalName: 'meter.csv',
+      storageKey: key,
+      contentType: 'text/csv',
+      sizeBytes: csv.length,
+      sha256: 'x'.repeat(64),
+    });
+    const got = await getFile(w, row.id, w.keeper);
+    expect(got.status).toBe(200);
+    expect(got.res.headers.get('content-disposition')).toBe('attachment; filename="meter.csv"');
+    expect(got.text).toContain(`"'=HYPERLINK(""http://evil.example"")"`);
+    expect(got.text).toContain('2025-03-01T10:00:00Z,40,');
+  });
+});

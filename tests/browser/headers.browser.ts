@@ -34,3 +34,21 @@ describe('security headers on the running app', () => {
     });
   }
 });
+
+describe('prefetches', () => {
+  it('a prefetched page carries the full page policy, like the page itself', async () => {
+    const variants: Record<string, string>[] = [
+      { purpose: 'prefetch' },
+      { 'next-router-prefetch': '1', rsc: '1' },
+    ];
+    for (const headers of variants) {
+      const res = await fetch(`${BASE_URL}/sign-in`, { headers, redirect: 'manual' });
+      await res.body?.cancel();
+      const { directives, nonce } = parsePolicy(res.headers.get('content-security-policy') ?? '');
+      expect(directives, JSON.stringify(headers)).toEqual(PAGE_CSP_DIRECTIVES);
+      expect(nonce).toBeTruthy();
+      for (const [name, pattern] of Object.entries(EXPECTED_HEADERS))
+        expect(res.headers.get(name), name).toMatch(pattern);
+    }
+  });
+});

@@ -32,6 +32,23 @@ describe('next.config.ts headers()', () => {
   });
 });
 
+describe('an uploaded file keeps its own policy', () => {
+  it('the last rule matching /api/uploads/<id> sends the merged, stricter policy', async () => {
+    const rules = await config.headers!();
+    const matching = rules.filter((r) =>
+      new RegExp(`^${r.source.replace(':path*', '.*').replace(':id', '[^/]+')}$`).test('/api/uploads/12'),
+    );
+    const csp = matching.flatMap((r) =>
+      r.headers.filter((h) => h.key.toLowerCase() === 'content-security-policy'),
+    );
+    // Next applies matching rules in order; a later one wins for the same header.
+    const sent = csp.at(-1)?.value ?? '';
+    expect(sent).toMatch(/default-src 'none'/);
+    expect(sent).toMatch(/(^|; )sandbox(;|$)/);
+    expect(sent).toMatch(EXPECTED_HEADERS['content-security-policy']!);
+  });
+});
+
 describe('the page Content-Security-Policy (proxy.ts)', () => {
   it('has exactly the intended directives, nonce-based, with no unsafe script source', () => {
     const { directives, nonce } = parsePolicy(contentSecurityPolicy({ nonce: 'abc123==' }));

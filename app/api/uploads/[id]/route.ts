@@ -1,27 +1,37 @@
 import { route } from '@/lib/api';
 import { idParams } from '@/lib/api/schemas';
+import { neutraliseCsv } from '@/lib/files/csv-safe';
+import { servedName, servedType, UPLOAD_CSP } from '@/lib/uploads/serve';
 import { deleteUpload, uploadBytes, uploadFor } from '@/lib/uploads/service';
 
 /**
  * The file itself, only to people who may see its enclosure. Served with the type found in its content
- * and `nosniff`, never from public/, never cached by shared caches.
+ * and `nosniff`, under a name whose extension is that type's (never the uploaded name's), never from
+ * public/, and never kept by any cache (`private, no-store`): once access is withdrawn — the enclosure
+ * moved to another keeper, a member removed — a cached copy must not outlive it. Its own policy
+ * (`default-src 'none'; sandbox`) also comes from next.config.ts, so the global header cannot replace it.
+ * A stored CSV is served with its formula cells neutralised, so opening it in a spreadsheet runs nothing.
  */
 export const GET = route({
   params: idParams,
   handler: async ({ params, user }) => {
     const upload = await uploadFor(user, params.id, 'read');
-    const bytes = await uploadBytes(upload);
-    const inline = upload.contentType.startsWith('image/');
-    const name = (upload.originalName ?? `upload-${upload.id}`).replace(/[^\w.\- ]/g, '_');
+    const stored = await uploadBytes(upload);
+    const type = servedType(upload, stored);
+    const bytes =
+      type === 'text/csv'
+        ? new TextEncoder().encode(neutraliseCsv(new TextDecoder().decode(stored)))
+        : stored;
+    const inline = type.startsWith('image/');
     return new Response(Buffer.from(bytes), {
       status: 200,
       headers: {
-        'Content-Type': upload.contentType,
+        'Content-Type': type === 'text/csv' ? 'text/csv; charset=utf-8' : type,
         'Content-Length': String(bytes.byteLength),
-        'Content-Disposition': `${inline ? 'inline' : 'attachment'}; filename="${name}"`,
-        'Cache-Control': 'private, max-age=3600',
+        'Content-Disposition': `${inline ? 'inline' : 'attachment'}; filename="${servedName(upload, type)}"`,
+        'Cache-Control': 'private, no-store',
         'X-Content-Type-Options': 'nosniff',
-        'Content-Security-Policy': "default-src 'none'; sandbox",
+        'Content-Security-Policy': UPLOAD_CSP,
         ETag: `"${upload.sha256}"`,
       },
     });
