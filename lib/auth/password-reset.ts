@@ -1,3 +1,4 @@
+import 'server-only';
 import { createHash, randomBytes } from 'node:crypto';
 import { Op } from 'sequelize';
 import { z } from 'zod';
