@@ -1,8 +1,11 @@
 import type { Metadata } from 'next';
 import localFont from 'next/font/local';
+import { cookies } from 'next/headers';
 import { connection } from 'next/server';
 import type { ReactNode } from 'react';
 import { SafetyNote } from '@/components/shell/SafetyNote';
+import { ViewerZoneProvider } from '@/components/ui/LocalTime';
+import { FALLBACK_ZONE, knownZone, ZONE_COOKIE } from '@/lib/time/format';
 import './globals.css';
 
 const inter = localFont({
@@ -22,6 +25,8 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
   // Every page renders per request: its scripts must carry this request's CSP nonce (proxy.ts), which a
   // page prerendered at build time cannot know.
   await connection();
+  // Moments are shown in the viewer's zone; the browser reports it in a cookie after its first page.
+  const zone = knownZone((await cookies()).get(ZONE_COOKIE)?.value) ?? FALLBACK_ZONE;
   return (
     <html lang="en" className={inter.variable}>
       <body className="flex min-h-screen flex-col">
@@ -31,7 +36,9 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
         >
           Skip to content
         </a>
-        <div className="flex flex-1 flex-col">{children}</div>
+        <ViewerZoneProvider zone={zone}>
+          <div className="flex flex-1 flex-col">{children}</div>
+        </ViewerZoneProvider>
         <SafetyNote />
       </body>
     </html>

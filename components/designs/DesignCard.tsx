@@ -4,7 +4,8 @@ import Link from '@/components/ui/Link';
 import type { DesignSummary, VariantSummary } from '@/lib/variants/views';
 import { ConfirmButton } from './ConfirmButton';
 import { InlineName } from './InlineName';
-import { changedAgo, copyName, designHref, studioHref } from './list-helpers';
+import { ChangedAgo } from './ChangedAgo';
+import { copyName, designHref, studioHref } from './list-helpers';
 import { btn } from './styles';
 import type { useDesignMutations } from './useDesigns';
 
@@ -42,7 +43,9 @@ export function DesignCard({
           />
         </h3>
         <div className="flex items-center gap-2 text-caption text-basalt-500">
-          <span>changed {changedAgo(design.updatedAt)}</span>
+          <span>
+            changed <ChangedAgo iso={design.updatedAt} />
+          </span>
           {!pending && (
             <Link className={btn.small} href={designHref(design.id)}>
               Sharing &amp; export
@@ -125,7 +128,7 @@ function VariantRow({
         className="min-w-40 text-body text-basalt-900"
       />
       <span className="text-caption text-basalt-500">
-        version {v.version} · {changedAgo(v.updatedAt)}
+        version {v.version} · <ChangedAgo iso={v.updatedAt} />
       </span>
       <span className="ml-auto flex items-center gap-1">
         {!pending && (

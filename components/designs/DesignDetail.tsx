@@ -5,7 +5,8 @@ import Link from '@/components/ui/Link';
 import { useState } from 'react';
 import type { DesignSummary, VariantSummary } from '@/lib/variants/views';
 import { designsApi } from './api';
-import { changedAgo, compareHref, studioHref } from './list-helpers';
+import { ChangedAgo } from './ChangedAgo';
+import { compareHref, studioHref } from './list-helpers';
 import { QueryProvider } from './QueryProvider';
 import { ShareLinks } from './ShareLinks';
 import { btn, input } from './styles';
@@ -88,7 +89,7 @@ function VariantPanel({
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <h2 className="text-lead font-semibold text-basalt-900">{v.name}</h2>
         <span className="text-caption text-basalt-500">
-          version {v.version} · changed {changedAgo(v.updatedAt)}
+          version {v.version} · changed <ChangedAgo iso={v.updatedAt} />
         </span>
       </div>
       <div className="mt-3 flex flex-wrap items-center gap-2">

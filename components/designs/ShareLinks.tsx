@@ -1,5 +1,6 @@
 'use client';
 
+import { LocalTime } from '@/components/ui/LocalTime';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import type { ShareView } from '@/lib/variants/views';
@@ -20,14 +21,6 @@ const STATE_TEXT: Record<ShareView['state'], string> = {
   revoked: 'Revoked',
   expired: 'Expired',
 };
-const date = (iso: string) =>
-  new Date(iso).toLocaleString('en-GB', {
-    day: 'numeric',
-    month: 'short',
-    year: 'numeric',
-    hour: '2-digit',
-    minute: '2-digit',
-  });
 
 /**
  * Read-only links to one variant: create (with an optional expiry), copy the address (shown once —
@@ -158,11 +151,21 @@ export function ShareLinks({ variantId, variantName }: { variantId: number; vari
                 {STATE_TEXT[s.state]}
               </span>
               <span className="text-caption text-basalt-600">
-                created {date(s.createdAt)}
-                {s.expiresAt
-                  ? ` · ${s.state === 'expired' ? 'expired' : 'expires'} ${date(s.expiresAt)}`
-                  : ' · no expiry'}
-                {s.revokedAt ? ` · revoked ${date(s.revokedAt)}` : ''}
+                created <LocalTime value={s.createdAt} />
+                {s.expiresAt ? (
+                  <>
+                    {` · ${s.state === 'expired' ? 'expired' : 'expires'} `}
+                    <LocalTime value={s.expiresAt} />
+                  </>
+                ) : (
+                  ' · no expiry'
+                )}
+                {s.revokedAt && (
+                  <>
+                    {' · revoked '}
+                    <LocalTime value={s.revokedAt} />
+                  </>
+                )}
               </span>
               {s.state === 'active' && (
                 <ConfirmButton

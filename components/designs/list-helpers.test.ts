@@ -44,11 +44,15 @@ describe('sortDesigns', () => {
 describe('changedAgo', () => {
   const now = new Date('2026-06-10T12:00:00Z');
   it('reads naturally', () => {
-    expect(changedAgo('2026-06-10T11:59:50Z', now)).toBe('just now');
-    expect(changedAgo('2026-06-10T11:50:00Z', now)).toBe('10 min ago');
-    expect(changedAgo('2026-06-10T09:00:00Z', now)).toBe('3 h ago');
-    expect(changedAgo('2026-06-09T12:00:00Z', now)).toBe('yesterday');
-    expect(changedAgo('2026-06-06T12:00:00Z', now)).toBe('4 days ago');
-    expect(changedAgo('2026-01-02T12:00:00Z', now)).toBe('2 Jan 2026');
+    expect(changedAgo('2026-06-10T11:59:50Z', now, 'UTC')).toBe('just now');
+    expect(changedAgo('2026-06-10T11:50:00Z', now, 'UTC')).toBe('10 min ago');
+    expect(changedAgo('2026-06-10T09:00:00Z', now, 'UTC')).toBe('3 h ago');
+    expect(changedAgo('2026-06-09T12:00:00Z', now, 'UTC')).toBe('yesterday');
+    expect(changedAgo('2026-06-06T12:00:00Z', now, 'UTC')).toBe('4 days ago');
+    expect(changedAgo('2026-01-02T12:00:00Z', now, 'UTC')).toBe('2 Jan 2026');
+  });
+  it("gives an older date in the viewer's zone: 03:00 UTC on 2 January is still 1 January in New York", () => {
+    expect(changedAgo('2026-01-02T03:00:00Z', now, 'UTC')).toBe('2 Jan 2026');
+    expect(changedAgo('2026-01-02T03:00:00Z', now, 'America/New_York')).toBe('1 Jan 2026');
   });
 });

@@ -1,3 +1,4 @@
+import { formatMoment } from '@/lib/time/format';
 import type { DesignSummary } from '@/lib/variants/views';
 
 /** "Copy of X", or "Copy of X (2)" when that name is taken in the design. */
@@ -25,8 +26,8 @@ export const studioHref = (variantId: number) => `/studio/${variantId}`;
 export const compareHref = (a: number, b?: number) => `/compare?a=${a}${b ? `&b=${b}` : ''}`;
 export const designHref = (designId: number) => `/designs/${designId}`;
 
-/** "3 min ago", "yesterday", or a date: enough to tell recent work apart. */
-export function changedAgo(iso: string, now: Date = new Date()): string {
+/** "3 min ago", "yesterday", or a date in the viewer's zone: enough to tell recent work apart. */
+export function changedAgo(iso: string, now: Date, zone: string): string {
   const s = Math.round((now.getTime() - new Date(iso).getTime()) / 1000);
   if (s < 45) return 'just now';
   const m = Math.round(s / 60);
@@ -36,5 +37,5 @@ export function changedAgo(iso: string, now: Date = new Date()): string {
   const d = Math.round(h / 24);
   if (d === 1) return 'yesterday';
   if (d < 7) return `${d} days ago`;
-  return new Date(iso).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
+  return formatMoment(iso, zone, 'day');
 }

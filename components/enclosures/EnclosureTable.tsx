@@ -1,5 +1,6 @@
 'use client';
 
+import { LocalTime } from '@/components/ui/LocalTime';
 import { type ColumnDef, flexRender, getCoreRowModel, useReactTable } from '@tanstack/react-table';
 import Link from '@/components/ui/Link';
 import { useMemo } from 'react';
@@ -65,9 +66,7 @@ function columnsFor(showKeeper: boolean, unit: LengthUnit): Column[] {
       id: 'updated',
       header: 'Updated',
       cell: ({ row: { original: e } }) => (
-        <time dateTime={e.updatedAt} className="whitespace-nowrap text-basalt-500">
-          {e.updatedAt.slice(0, 10)}
-        </time>
+        <LocalTime value={e.updatedAt} shown="day" className="whitespace-nowrap text-basalt-500" />
       ),
     },
   ];

@@ -4,15 +4,15 @@ import { useRouter } from 'next/navigation';
 import { useState, type FormEvent } from 'react';
 import { fieldError, sendJson } from '@/components/ui/api-client';
 import { Field } from '@/components/ui/Field';
+import { useViewerZone } from '@/components/ui/LocalTime';
 import { Notice } from '@/components/ui/Notice';
 import { Select } from '@/components/ui/Select';
 import { button } from '@/components/ui/styles';
 import { useLengthUnit } from '@/components/ui/units';
+import { dayInZone } from '@/lib/time/format';
 
 export type LampTypeOption = { id: number; name: string; tech: string; uvbAt30: number };
 export type DesignLampOption = { objectId: string; label: string };
-
-const today = () => new Date().toISOString().slice(0, 10);
 
 /** Logs a lamp installed in this enclosure. */
 export function AddLampForm({
@@ -27,6 +27,8 @@ export function AddLampForm({
   const router = useRouter();
   const [unit] = useLengthUnit();
   const [busy, setBusy] = useState(false);
+  // The viewer's today, not the server's: a lamp switched on this evening in New York is not tomorrow's.
+  const today = dayInZone(new Date(), useViewerZone());
   const [error, setError] = useState<{ field?: string; message: string } | null>(null);
   const [between, setBetween] = useState('none');
 
@@ -79,8 +81,8 @@ export function AddLampForm({
           label="First switched on"
           name="firstUsedOn"
           type="date"
-          defaultValue={today()}
-          max={today()}
+          defaultValue={today}
+          max={today}
           required
           error={err('firstUsedOn')}
         />

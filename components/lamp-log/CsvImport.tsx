@@ -3,10 +3,11 @@
 import { useRouter } from 'next/navigation';
 import { useState, type ChangeEvent } from 'react';
 import { ApiClientError, sendJson } from '@/components/ui/api-client';
+import { LocalTime } from '@/components/ui/LocalTime';
 import { Notice } from '@/components/ui/Notice';
 import { button, input } from '@/components/ui/styles';
 import type { CsvIssue, CsvRow } from '@/lib/lamp-log/csv';
-import { formatDay, formatValue } from './format';
+import { formatValue } from './format';
 
 type Preview = { ok: boolean; rows: CsvRow[]; errors: CsvIssue[]; total: number };
 
@@ -143,7 +144,7 @@ export function CsvImport({ enclosureId }: { enclosureId: number }) {
                     <tr key={row} className={r ? '' : 'bg-ember-50 text-ember-900'}>
                       <td className="px-2 py-1 tabular-nums">{row}</td>
                       <td className="px-2 py-1">{r?.lampLabel ?? ''}</td>
-                      <td className="px-2 py-1">{r ? formatDay(r.takenAt) : ''}</td>
+                      <td className="px-2 py-1">{r ? <LocalTime value={r.takenAt} shown="day" /> : ''}</td>
                       <td className="px-2 py-1 tabular-nums">{r ? `${r.distanceCm} cm` : ''}</td>
                       <td className="px-2 py-1 tabular-nums">{r ? formatValue(r.value, r.unit) : ''}</td>
                       <td className="px-2 py-1">

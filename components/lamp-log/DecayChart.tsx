@@ -1,4 +1,5 @@
 import { scaleLinear, scaleUtc } from 'd3-scale';
+import { MomentText } from '@/components/ui/LocalTime';
 import type { LampDetail } from '@/lib/lamp-log/store';
 import { formatDay, formatMonthYear, formatValue, tickLabelAnchor, UNIT_NAME } from './format';
 
@@ -189,7 +190,7 @@ export function DecayChart({
               strokeWidth="1.5"
             />
             <title>
-              {formatDay(p.takenAt)}: {formatValue(p.raw, unit)} at {p.distanceCm} cm →{' '}
+              <MomentText value={p.takenAt} shown="day" />: {formatValue(p.raw, unit)} at {p.distanceCm} cm →{' '}
               {formatValue(p.value, unit)} at 30 cm
             </title>
           </g>

@@ -1,6 +1,7 @@
 'use client';
 
 import Link from '@/components/ui/Link';
+import { LocalTime } from '@/components/ui/LocalTime';
 import { link } from '@/components/ui/styles';
 import { formatLengthRounded, type LengthUnit } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
@@ -49,7 +50,8 @@ export function LastReadingCell({ l, unit }: { l: Row; unit: LengthUnit }) {
     <>
       {formatValue(l.lastReading.value, l.lastReading.unit)}
       <div className="text-caption text-basalt-500">
-        at {formatLengthRounded(l.lastReading.distanceCm, unit)}, {formatDay(l.lastReading.takenAt)}
+        at {formatLengthRounded(l.lastReading.distanceCm, unit)},{' '}
+        <LocalTime value={l.lastReading.takenAt} shown="day" />
       </div>
     </>
   ) : (

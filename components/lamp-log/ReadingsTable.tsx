@@ -3,7 +3,9 @@
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { ApiClientError, sendJson } from '@/components/ui/api-client';
+import { useViewerZone } from '@/components/ui/LocalTime';
 import { Notice } from '@/components/ui/Notice';
+import { formatMoment } from '@/lib/time/format';
 import { button } from '@/components/ui/styles';
 import { formatLengthRounded } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
@@ -11,12 +13,6 @@ import type { LampDetail } from '@/lib/lamp-log/store';
 import { formatValue } from './format';
 
 type Reading = LampDetail['readings'][number];
-
-const day = (iso: string) =>
-  new Date(iso).toLocaleDateString(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
-const time = (iso: string) =>
-  new Date(iso).toLocaleTimeString(undefined, { hour: '2-digit', minute: '2-digit' });
-const when = (iso: string) => `${day(iso)} ${time(iso)}`;
 
 function TrashIcon() {
   return (
@@ -30,6 +26,10 @@ function TrashIcon() {
 export function ReadingsTable({ readings, canEdit }: { readings: Reading[]; canEdit: boolean }) {
   const router = useRouter();
   const [unit] = useLengthUnit();
+  const zone = useViewerZone();
+  const day = (iso: string) => formatMoment(iso, zone, 'day');
+  const time = (iso: string) => formatMoment(iso, zone, 'time');
+  const when = (iso: string) => formatMoment(iso, zone, 'datetime');
   const [deleted, setDeleted] = useState<Reading | null>(null);
   const [error, setError] = useState<string | null>(null);
   const rows = [...readings].sort((a, b) => b.takenAt.localeCompare(a.takenAt));

@@ -1,5 +1,6 @@
 'use client';
 
+import { LocalTime } from '@/components/ui/LocalTime';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { fieldError, sendJson } from '@/components/ui/api-client';
@@ -32,7 +33,7 @@ export function PendingInvitations({ invitations }: { invitations: PendingInvita
             <span>
               <span className="font-medium">{inv.email}</span>{' '}
               <span className="text-basalt-500">
-                · {inv.role} · until {inv.expiresAt.slice(0, 10)}
+                · {inv.role} · until <LocalTime value={inv.expiresAt} shown="day" />
               </span>
             </span>
             {inv.canRevoke && (

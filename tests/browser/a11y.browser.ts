@@ -2,16 +2,21 @@
 // and of every page of the app signed in as staff, with a screenshot of each. A table of what axe found
 // per page is printed at the end; each page is its own test and fails on any serious or critical
 // violation, naming the rule and the first elements concerned.
+// The browser runs in New York's time zone, not the server's UTC, and each page also fails on any page
+// error — an uncaught exception or React's report of a hydration mismatch (dates formatted in one zone on
+// the server and another in the browser were the usual cause).
 import path from 'node:path';
 import AxeBuilder from '@axe-core/playwright';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_SHOP, demoSignIn } from '@/lib/demo/scenario';
-import { launchBrowser, newContext, screenshot, signIn } from './harness';
+import { launchBrowser, newContext, screenshot, signIn, watchPageErrors } from './harness';
 import { pageRoutes } from './page-routes';
 import { JOURNEY_MS, createDesign, createShare, enclosureIdByName, studioReady } from './journey-helpers';
 
 const ROOT = path.resolve(import.meta.dirname, '..', '..');
+/** Not UTC (the server's zone), and behind it: an evening here is already tomorrow on the server. */
+const VIEWER_ZONE = 'America/New_York';
 const IMPACTS = ['critical', 'serious', 'moderate', 'minor'] as const;
 type Impact = (typeof IMPACTS)[number];
 type PageResult = { name: string; path: string; counts: Record<Impact, number>; blocking: string[] };
@@ -158,21 +163,26 @@ const targets: Target[] = [
   staffSees('studio-scratch', '/studio-scratch', () => '/studio-scratch', true),
 ];
 
-describe('accessibility (axe): no serious or critical violation', () => {
+describe(`accessibility (axe) and page errors in ${VIEWER_ZONE}: no serious or critical violation, no page error`, () => {
   let browser: Browser;
   let staffContext: BrowserContext;
   let visitorContext: BrowserContext;
   let staffPage: Page;
   let visitorPage: Page;
   let ownerPage: Page | null = null;
+  let ownerErrors: () => string[] = () => [];
+  let staffErrors: () => string[];
+  let visitorErrors: () => string[];
   const results: PageResult[] = [];
 
   beforeAll(async () => {
     browser = await launchBrowser();
-    staffContext = await newContext(browser);
-    visitorContext = await newContext(browser);
+    staffContext = await newContext(browser, { timezoneId: VIEWER_ZONE });
+    visitorContext = await newContext(browser, { timezoneId: VIEWER_ZONE });
     staffPage = await staffContext.newPage();
     visitorPage = await visitorContext.newPage();
+    staffErrors = watchPageErrors(staffPage);
+    visitorErrors = watchPageErrors(visitorPage);
     for (const p of [staffPage, visitorPage]) p.setDefaultTimeout(60_000);
     const staff = demoSignIn('staff');
     await signIn(staffPage, staff.email, staff.password);
@@ -201,13 +211,16 @@ describe('accessibility (axe): no serious or critical violation', () => {
 
   it.each(targets)('$name', async (t) => {
     if (t.owner && !ownerPage) {
-      ownerPage = await (await newContext(browser)).newPage();
+      ownerPage = await (await newContext(browser, { timezoneId: VIEWER_ZONE })).newPage();
       ownerPage.setDefaultTimeout(60_000);
+      ownerErrors = watchPageErrors(ownerPage);
       const owner = demoSignIn('owner');
       await signIn(ownerPage, owner.email, owner.password);
     }
+    const errorsOf = t.owner ? ownerErrors : t.signedIn ? staffErrors : visitorErrors;
     const page = t.owner ? ownerPage! : t.signedIn ? staffPage : visitorPage;
     const path = t.path();
+    errorsOf(); // the set-up's are not this page's
     if (t.studio) {
       await page.goto(path);
       await studioReady(page);
@@ -216,6 +229,8 @@ describe('accessibility (axe): no serious or critical violation', () => {
     }
     const r = await scan(page, t.name, path);
     results.push(r);
+    const errors = errorsOf();
     expect(r.blocking, r.blocking.join('\n')).toEqual([]);
+    expect(errors, `page errors on ${path} in ${VIEWER_ZONE}`).toEqual([]);
   });
 });

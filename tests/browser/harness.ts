@@ -27,9 +27,39 @@ export function launchBrowser(): Promise<Browser> {
   return chromium.launch({ executablePath: CHROMIUM_PATH, headless: true, args: CHROMIUM_FLAGS });
 }
 
-/** A new isolated context (own cookies and storage) with the app as base URL. */
-export function newContext(browser: Browser): Promise<BrowserContext> {
-  return browser.newContext({ baseURL: BASE_URL, viewport: { width: 1280, height: 800 }, locale: 'en-GB' });
+/**
+ * A new isolated context (own cookies and storage) with the app as base URL. The browser's time zone is
+ * the machine's unless `timezoneId` names another (the app must read the same in any zone).
+ */
+export function newContext(
+  browser: Browser,
+  options: { timezoneId?: string; viewport?: { width: number; height: number }; hasTouch?: boolean } = {},
+): Promise<BrowserContext> {
+  return browser.newContext({
+    baseURL: BASE_URL,
+    viewport: options.viewport ?? { width: 1280, height: 800 },
+    locale: 'en-GB',
+    ...(options.timezoneId ? { timezoneId: options.timezoneId } : {}),
+    ...(options.hasTouch ? { hasTouch: true, isMobile: true } : {}),
+  });
+}
+
+/**
+ * What a page reports as broken: uncaught exceptions, and React's own console reports of a hydration
+ * mismatch or a recoverable error (production builds log them as "Minified React error #418" and the
+ * like). Failed resource loads are left out: a not-found page logs its 404 on purpose.
+ */
+export function watchPageErrors(page: Page): () => string[] {
+  const seen: string[] = [];
+  page.on('pageerror', (e) => seen.push(`uncaught: ${e.message}`));
+  page.on('console', (m) => {
+    if (m.type() !== 'error') return;
+    const text = m.text();
+    if (/Failed to load resource/i.test(text)) return;
+    if (/React error|hydrat|did not match|Minified React/i.test(text))
+      seen.push(`console: ${text.slice(0, 300)}`);
+  });
+  return () => seen.splice(0);
 }
 
 const fileSafe = (name: string) =>

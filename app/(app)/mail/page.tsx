@@ -1,3 +1,4 @@
+import { LocalTime } from '@/components/ui/LocalTime';
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { EmptyState } from '@/components/ui/EmptyState';
@@ -48,7 +49,7 @@ export default async function MailPage() {
                   To <span className="font-medium text-basalt-800">{m.to.join(', ')}</span> · from {m.from} ·{' '}
                   {m.kind === 'invitation' ? 'invitation' : 'lamp reminder'}
                 </span>
-                <time dateTime={m.receivedAt}>{new Date(m.receivedAt).toUTCString()}</time>
+                <LocalTime value={m.receivedAt} />
               </div>
               <h2 className="mt-1 font-semibold text-basalt-900">{m.subject}</h2>
               <pre className="mt-2 whitespace-pre-wrap break-words font-sans text-body text-basalt-800">

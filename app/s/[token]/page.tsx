@@ -1,3 +1,4 @@
+import { LocalTime } from '@/components/ui/LocalTime';
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { CautionList } from '@/components/cautions/CautionList';
@@ -89,7 +90,14 @@ export default async function SharedVariantPage({
         <p className="mt-1 text-caption text-basalt-500">
           Enclosure {sizeBoth(shared.design.enclosure)} (width × height × depth), seen from the front, lamps
           as installed.
-          {shared.expiresAt ? ` This link works until ${new Date(shared.expiresAt).toUTCString()}.` : ''}
+          {shared.expiresAt ? (
+            <>
+              {' '}
+              This link works until <LocalTime value={shared.expiresAt} />.
+            </>
+          ) : (
+            ''
+          )}
         </p>
       </div>
 

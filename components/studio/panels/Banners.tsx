@@ -1,5 +1,6 @@
 'use client';
 // Notices above the canvas: view only (and why), a local copy to restore, or a save conflict to resolve.
+import { LocalTime } from '@/components/ui/LocalTime';
 import Link from 'next/link';
 import type { ReactNode } from 'react';
 import type { RefusedReason } from '../persistence/autosave';
@@ -35,7 +36,7 @@ export function RestoreBanner({
   return (
     <Banner tone="info" testId="restore-banner">
       <span className="flex-1">
-        Unsaved changes from {new Date(savedAt).toLocaleString()} were found on this device.
+        Unsaved changes from <LocalTime value={new Date(savedAt)} /> were found on this device.
       </span>
       <button type="button" onClick={onRestore} className={`${btn} border-sky-700 bg-sky-700 text-white`}>
         Restore them

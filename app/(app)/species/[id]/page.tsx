@@ -1,3 +1,4 @@
+import { LocalTime } from '@/components/ui/LocalTime';
 import type { Metadata } from 'next';
 import Link from '@/components/ui/Link';
 import { DeleteSheetButton } from '@/components/species/DeleteSheetButton';
@@ -55,7 +56,7 @@ export default async function SpeciesSheetPage({ params }: Props) {
       </div>
       <SpeciesSheetView sheet={sheet} />
       <p className="mt-6 text-caption text-basalt-500">
-        Last changed {new Date(sheet.updatedAt).toLocaleDateString('en-GB', { dateStyle: 'medium' })}.{' '}
+        Last changed <LocalTime value={sheet.updatedAt} shown="day" />.{' '}
         {!mayEdit && 'Only the organisation’s owner and staff can change this sheet.'}
       </p>
     </>

@@ -1,3 +1,4 @@
+import { LocalTime } from '@/components/ui/LocalTime';
 import type { Metadata } from 'next';
 import Link from '@/components/ui/Link';
 import { AcceptInvitation } from '@/components/auth/AcceptInvitation';
@@ -54,7 +55,8 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
       <h1 className="mb-1 text-title">Join {orgName}</h1>
       <p className="mb-6 text-body text-basalt-600">
         You were invited to {orgName} on Baskwell as {ROLE_TEXT[invitation.role]}. The invitation is for{' '}
-        <strong>{invitation.email}</strong> and works until {invitation.expiresAt.toUTCString().slice(0, 16)}.
+        <strong>{invitation.email}</strong> and works until{' '}
+        <LocalTime value={invitation.expiresAt.toISOString()} />.
       </p>
     </>
   );
