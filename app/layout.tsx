@@ -1,11 +1,10 @@
 import type { Metadata } from 'next';
 import localFont from 'next/font/local';
-import { cookies } from 'next/headers';
 import { connection } from 'next/server';
 import type { ReactNode } from 'react';
 import { SafetyNote } from '@/components/shell/SafetyNote';
 import { ViewerZoneProvider } from '@/components/ui/LocalTime';
-import { FALLBACK_ZONE, knownZone, ZONE_COOKIE } from '@/lib/time/format';
+import { viewerZone } from '@/lib/time/viewer-zone';
 import './globals.css';
 
 const inter = localFont({
@@ -26,7 +25,7 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
   // page prerendered at build time cannot know.
   await connection();
   // Moments are shown in the viewer's zone; the browser reports it in a cookie after its first page.
-  const zone = knownZone((await cookies()).get(ZONE_COOKIE)?.value) ?? FALLBACK_ZONE;
+  const zone = await viewerZone();
   return (
     <html lang="en" className={inter.variable}>
       <body className="flex min-h-screen flex-col">

@@ -1,18 +1,28 @@
-// Adds the demo scenario to the database named by DB_NAME (idempotent; never deletes anything).
+// Adds the demo scenario to the database named by DB_NAME (idempotent; never deletes anything), then runs
+// the lamp reminder job once, so the demo's worn tube has its reminder waiting in the mail viewer (the
+// fake SMTP server must be up for it to be delivered now; otherwise the app's own run delivers it).
 //   npm run seed                 prints what it created and the demo sign-ins
-//   npm run seed -- --json       prints { created, signIns } as JSON (read by scripts/start.mjs)
+//   npm run seed -- --json       prints { created, reminders, signIns } as JSON (read by scripts/start.mjs)
 import { closeSequelize, getSequelize } from '@/lib/db';
 import { DEMO_SIGN_INS } from '@/lib/demo/scenario';
 import { seedDemo } from '@/lib/demo/seed';
 import { refreshStaleOutlooks } from '@/lib/lamp-log/outlook-store';
+import { runReminders } from '@/lib/reminders/run';
 
 async function main() {
   const { created } = await seedDemo(getSequelize());
   // The lamp log reads stored outlooks: compute the seeded lamps' now rather than on first view.
   await refreshStaleOutlooks();
+  const reminders = await runReminders().catch((e: unknown) => {
+    console.error(`Lamp reminders not run: ${e instanceof Error ? e.message : String(e)}`);
+    return null;
+  });
   if (process.argv.includes('--json')) {
-    console.log(JSON.stringify({ created, signIns: DEMO_SIGN_INS }));
+    console.log(JSON.stringify({ created, reminders, signIns: DEMO_SIGN_INS }));
     return;
+  }
+  if (reminders?.queued || reminders?.sent) {
+    console.log(`Lamp reminders: ${reminders.queued} queued, ${reminders.sent} sent.`);
   }
   const total = Object.values(created).reduce((a, b) => a + b, 0);
   console.log(

@@ -54,12 +54,13 @@ async function main() {
   await ensureNodeModules();
   await prepareDatabase(life, env);
   await migrate(env);
-  const { signIns } = await seed(env);
+  // Mail and file store first: the demo seed stores its example photo and sends its lamp reminder.
   await startMail(life, env);
   // The demo shows each organisation's owner the mail it sent at /mail, beside the fake SMTP server
   // started just above; MAIL_VIEWER=0 in .env (or the environment) keeps the page off.
   env.MAIL_VIEWER ??= '1';
   await startS3(life, env);
+  const { signIns } = await seed(env);
   const next = await startNext(life, env, { port: Number(env.PORT), dev });
   startJobs(life, env);
   log(`Ready in ${duration(Date.now() - t0)}.`);

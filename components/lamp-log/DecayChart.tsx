@@ -1,5 +1,5 @@
 import { scaleLinear, scaleUtc } from 'd3-scale';
-import { MomentText } from '@/components/ui/LocalTime';
+import { formatMoment } from '@/lib/time/format';
 import type { LampDetail } from '@/lib/lamp-log/store';
 import { formatDay, formatMonthYear, formatValue, tickLabelAnchor, UNIT_NAME } from './format';
 
@@ -19,10 +19,13 @@ export function DecayChart({
   chart,
   fallsBelowOn,
   title,
+  zone,
 }: {
   chart: Chart;
   fallsBelowOn: string | null;
   title: string;
+  /** The viewer's time zone (a server component: the moments are formatted here, not in the browser). */
+  zone: string;
 }) {
   const unit = chart.unit ?? 'uvb';
   const start = Date.parse(`${chart.firstUsedOn}T00:00:00Z`);
@@ -190,7 +193,7 @@ export function DecayChart({
               strokeWidth="1.5"
             />
             <title>
-              <MomentText value={p.takenAt} shown="day" />: {formatValue(p.raw, unit)} at {p.distanceCm} cm →{' '}
+              {formatMoment(p.takenAt, zone, 'day')}: {formatValue(p.raw, unit)} at {p.distanceCm} cm →{' '}
               {formatValue(p.value, unit)} at 30 cm
             </title>
           </g>

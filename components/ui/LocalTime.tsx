@@ -51,11 +51,6 @@ export function LocalTime({
   );
 }
 
-/** The same text without an element, for places that take text only (an SVG `<title>`, an option). */
-export function MomentText({ value, shown = 'datetime' }: { value: string | Date; shown?: TimeShown }) {
-  return formatMoment(value, useViewerZone(), shown);
-}
-
 /**
  * False while the server renders and the browser hydrates, true after: text that depends on the
  * present moment ("3 min ago") is shown only once it can no longer differ from the server's HTML.

@@ -41,7 +41,7 @@ export const DEMO_LAMPS: readonly DemoLamp[] = [
     // (about 115 µW/cm² and up at this tube's ratio), and the worn tube is now just above that.
     baskingDistanceCm: 15,
     baskingTransmission: null,
-    designObjectId: 'uv1',
+    designObjectId: 'uv-lamp',
     readings: [
       { daysAgo: 330, distanceCm: 15, value: 188, unit: 'uvb', note: 'new, first evening' },
       { daysAgo: 330, distanceCm: 15, value: 7.5, unit: 'uvi' },
@@ -57,17 +57,21 @@ export const DEMO_LAMPS: readonly DemoLamp[] = [
     organisation: DEMO_SHOP.name,
     enclosure: 'Desert vivarium',
     label: 'Heat spot',
-    presetKey: 'halogen-75',
+    // A guarded emitter over the basking spot: with the tube beside it, the pair the guided start's search
+    // finds best for this vivarium.
+    presetKey: 'ceramic-100',
     startedDaysAgo: 120,
     hoursPerDay: 10,
     baskingDistanceCm: null,
     baskingTransmission: null,
+    designObjectId: 'heat-lamp',
     readings: [],
   },
   {
     organisation: DEMO_SHOP.name,
     enclosure: 'Gecko tank',
     label: 'UV tube',
+    designObjectId: 'uv-lamp',
     presetKey: 't5-medium',
     startedDaysAgo: 100,
     hoursPerDay: 12,
@@ -81,6 +85,7 @@ export const DEMO_LAMPS: readonly DemoLamp[] = [
     organisation: DEMO_SHOP.name,
     enclosure: 'Tall mesh cage',
     label: 'Top tube',
+    designObjectId: 'uv-lamp',
     presetKey: 't5-very-high',
     startedDaysAgo: 45,
     hoursPerDay: 12,
@@ -97,6 +102,7 @@ export const DEMO_LAMPS: readonly DemoLamp[] = [
     organisation: DEMO_HOUSEHOLD.name,
     enclosure: 'Python vivarium',
     label: 'Low UV tube',
+    designObjectId: 'uv-lamp',
     presetKey: 't5-low',
     startedDaysAgo: 400,
     hoursPerDay: 10,

@@ -4,10 +4,20 @@ import type { Sequelize, Transaction } from 'sequelize';
 import { Enclosure, Membership, Organisation, User, initModels } from '@/models';
 import { DEMO_ORGANISATIONS, DEMO_PASSWORDS, type DemoOrganisation } from './scenario';
 import { seedStartingCatalogue } from '@/lib/species/seed';
+import { seedDemoDesigns } from './designs';
 import { seedDemoLampLog } from './lamp-log';
 
 export type SeedResult = {
-  created: { organisations: number; users: number; memberships: number; enclosures: number };
+  created: {
+    organisations: number;
+    users: number;
+    memberships: number;
+    enclosures: number;
+    designs: number;
+    variants: number;
+    shares: number;
+    photos: number;
+  };
 };
 
 /** bcrypt cost for demo accounts: quick to seed, still a real hash. */
@@ -43,7 +53,16 @@ async function findOrganisation(org: DemoOrganisation, transaction: Transaction)
  */
 export async function seedDemo(sequelize: Sequelize): Promise<SeedResult> {
   initModels(sequelize);
-  const created = { organisations: 0, users: 0, memberships: 0, enclosures: 0 };
+  const created = {
+    organisations: 0,
+    users: 0,
+    memberships: 0,
+    enclosures: 0,
+    designs: 0,
+    variants: 0,
+    shares: 0,
+    photos: 0,
+  };
   await sequelize.transaction(async (transaction) => {
     for (const org of DEMO_ORGANISATIONS) {
       let organisation = await findOrganisation(org, transaction);
@@ -82,6 +101,8 @@ export async function seedDemo(sequelize: Sequelize): Promise<SeedResult> {
     }
     // Invented lamps and meter readings for the lamp log (lib/demo/lamp-log.ts).
     await seedDemoLampLog(transaction);
+    // Example designs of those enclosures, made over the logged lamps (lib/demo/designs.ts).
+    Object.assign(created, await seedDemoDesigns(transaction));
   });
   return { created };
 }

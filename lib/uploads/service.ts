@@ -52,11 +52,12 @@ export function uploadJson(u: Upload) {
 
 /** A photo of the real enclosure for the studio's traced backdrop. */
 export async function storeBackdrop(
-  user: CurrentUser,
+  user: Pick<CurrentUser, 'id'>,
   enclosure: Enclosure,
   bytes: Uint8Array,
   claimedType: string | null,
   originalName: string | null,
+  transaction?: Transaction,
 ): Promise<Upload> {
   const type = sniffImage(bytes);
   if (!type) {
@@ -81,13 +82,19 @@ export async function storeBackdrop(
     throw e;
   }
   const key = `org-${enclosure.organisationId}/enclosure-${enclosure.id}/backdrop/${randomUUID()}.${EXT[type]}`;
-  return storeAndRecord(key, clean, type, {
-    kind: 'backdrop',
-    ownerId: user.id,
-    organisationId: enclosure.organisationId,
-    enclosureId: enclosure.id,
-    originalName: cleanName(originalName, describeType(type)),
-  });
+  return storeAndRecord(
+    key,
+    clean,
+    type,
+    {
+      kind: 'backdrop',
+      ownerId: user.id,
+      organisationId: enclosure.organisationId,
+      enclosureId: enclosure.id,
+      originalName: cleanName(originalName, describeType(type)),
+    },
+    transaction,
+  );
 }
 
 /** An enclosure's uploads (of one kind, or all), newest first. The caller has checked that the person may read the enclosure. */

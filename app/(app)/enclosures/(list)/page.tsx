@@ -1,6 +1,8 @@
 import type { Metadata } from 'next';
+import { cookies } from 'next/headers';
 import Link from '@/components/ui/Link';
 import { EnclosureTable } from '@/components/enclosures/EnclosureTable';
+import { FirstDesignHint } from '@/components/enclosures/FirstDesignHint';
 import { NewEnclosure } from '@/components/enclosures/NewEnclosure';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { Notice } from '@/components/ui/Notice';
@@ -9,6 +11,7 @@ import { UnitToggle } from '@/components/ui/UnitToggle';
 import { button, link } from '@/components/ui/styles';
 import { QueryProvider } from '@/components/designs/QueryProvider';
 import { listEnclosures } from '@/lib/api/enclosure-list';
+import { FIRST_HINT_COOKIE, firstDesignHint } from '@/lib/demo/first-hint';
 import { memberViews } from '@/lib/api/views';
 import { listQueryForView, viewFromSearchParams } from '@/lib/enclosures/list-view';
 import { toSearchParams } from '@/lib/list-view';
@@ -34,9 +37,11 @@ export default async function EnclosuresPage({
   // The first page is rendered here, for the view the address names; the table then fetches others.
   const view = viewFromSearchParams(toSearchParams(params));
   const keeperId = isKeeper ? user.id : keeperFilter;
-  const [firstPage, people] = await Promise.all([
+  const hintDone = (await cookies()).has(FIRST_HINT_COOKIE);
+  const [firstPage, people, hint] = await Promise.all([
     listEnclosures({ organisationId: orgId, keeperId, ...listQueryForView(view) }),
     seesAll ? memberViews(orgId) : Promise.resolve(null),
+    hintDone ? Promise.resolve(null) : firstDesignHint(user, orgId),
   ]);
   const peopleOptions = people
     ?.map((p) => ({ id: p.userId, name: p.name, role: p.role }))
@@ -56,6 +61,13 @@ export default async function EnclosuresPage({
         }
         actions={<UnitToggle />}
       />
+      {hint && (
+        <FirstDesignHint
+          cookie={FIRST_HINT_COOKIE}
+          designHref={`/designs/${hint.designId}`}
+          compareHref={hint.compare ? `/compare?a=${hint.compare.a}&b=${hint.compare.b}` : null}
+        />
+      )}
       {filteredName && (
         <div className="mb-4">
           <Notice tone="info">

@@ -18,6 +18,7 @@ import { lampDetail } from '@/lib/lamp-log/store';
 import { can } from '@/lib/permissions';
 import { parseId } from '@/lib/api/schemas';
 import { requireUser } from '@/lib/session';
+import { viewerZone } from '@/lib/time/viewer-zone';
 
 export const metadata: Metadata = { title: 'Lamp' };
 
@@ -73,6 +74,7 @@ export default async function LampPage({ params }: { params: Promise<{ id: strin
               chart={detail.chart}
               fallsBelowOn={s.fallsBelowOn}
               title={`Output of ${s.label} over time`}
+              zone={await viewerZone()}
             />
           ) : (
             <p className="rounded-lg border border-dashed border-basalt-300 bg-basalt-50 p-6 text-body text-basalt-600">
