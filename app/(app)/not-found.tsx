@@ -1,5 +1,10 @@
+import type { Metadata } from 'next';
 import Link from '@/components/ui/Link';
 import { button } from '@/components/ui/styles';
+
+// The page that called notFound() would otherwise lend it its own title ("Lamp", "Design"): a tab or a
+// bookmark would name a thing that is not there.
+export const metadata: Metadata = { title: 'Not found' };
 
 export default function AppNotFound() {
   return (

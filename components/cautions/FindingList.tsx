@@ -1,11 +1,12 @@
 import type { Assessment, FindingStatus } from '@/simulation';
 import type { SpeciesSource } from '@/lib/species/schema';
+import { FINDING_STATUS } from '@/shared/finding-status';
 import { numberLines, sourcesFor } from './finding-numbers';
 
-const BADGE: Record<FindingStatus, { label: string; className: string }> = {
-  pass: { label: 'Pass', className: 'bg-moss-100 text-moss-800' },
-  attention: { label: 'Attention', className: 'bg-sand-100 text-sand-900' },
-  fail: { label: 'Fail', className: 'bg-ember-100 text-ember-800' },
+const BADGE: Record<FindingStatus, string> = {
+  pass: 'bg-moss-100 text-moss-800 border-moss-300',
+  attention: 'bg-sand-100 text-sand-900 border-sand-300',
+  fail: 'bg-ember-100 text-ember-800 border-ember-300',
 };
 
 /**
@@ -68,12 +69,13 @@ export function FindingList({
 }
 
 export function StatusBadge({ status }: { status: FindingStatus }) {
-  const b = BADGE[status];
+  const s = FINDING_STATUS[status];
   return (
     <span
-      className={`inline-flex items-center rounded-full px-2 py-0.5 text-caption font-semibold ${b.className}`}
+      className={`inline-flex items-center gap-1 rounded border px-1.5 text-caption font-semibold ${BADGE[status]}`}
     >
-      {b.label}
+      <span aria-hidden="true">{s.mark}</span>
+      {s.word}
     </span>
   );
 }

@@ -1,4 +1,5 @@
 import type { DesignObject } from '@/simulation';
+import { lampLook } from '@/shared/lamp-look';
 
 /**
  * How the objects of a design are drawn: one look over a computed field (dark ink on coloured bands)
@@ -13,7 +14,8 @@ export type ShapeLook = {
   hide: { fill: string; stroke: string; width: number };
   foliage: { fill: string; opacity: number; stroke: string; dash: [number, number] };
   perch: string;
-  lamp: { uv: string; heat: string; outline?: string; tubeWidth: number; bulbRadius: number };
+  /** Sizes only: a lamp's colours are its kind's, the same in every picture (shared/lamp-look.ts). */
+  lamp: { tubeWidth: number; bulbRadius: number };
 };
 
 /** Over a computed field: objects stand out from every band colour. */
@@ -26,11 +28,11 @@ export function fieldLook(stroke: number): ShapeLook {
     hide: { fill: 'none', stroke: '#1c1f1a', width: stroke * 1.5 },
     foliage: { fill: '#3e8546', opacity: 0.25, stroke: '#27552e', dash: [stroke * 4, stroke * 2] },
     perch: '#4a3b2a',
-    lamp: { uv: '#d18f2b', heat: '#d9482f', outline: '#1c1f1a', tubeWidth: stroke * 5, bulbRadius: 2 },
+    lamp: { tubeWidth: stroke * 5, bulbRadius: 2 },
   };
 }
 
-/** A plain sketch: UV lamps and heat lamps in their own colours, solid furniture in grey. */
+/** A plain sketch: lamps in their kind's colours, solid furniture in grey. */
 export const SKETCH_LOOK: ShapeLook = {
   stroke: 0.8,
   screen: { color: '#7e8673', width: 1.2, dash: [2, 1.5] },
@@ -39,7 +41,7 @@ export const SKETCH_LOOK: ShapeLook = {
   hide: { fill: '#cdd1c8', stroke: '#4a5143', width: 0.6 },
   foliage: { fill: '#3e8546', opacity: 0.25, stroke: '#27552e', dash: [2, 1] },
   perch: '#94561f',
-  lamp: { uv: '#8b5cf6', heat: '#da5540', tubeWidth: 2.4, bulbRadius: 2.4 },
+  lamp: { tubeWidth: 2.4, bulbRadius: 2.4 },
 };
 
 /**
@@ -83,30 +85,46 @@ function shapeOf(o: DesignObject, look: ShapeLook) {
       return <rect key={o.id} x={o.x} y={o.y} width={o.width} height={o.height} {...s} />;
     }
     case 'lamp': {
-      // A lamp with no UVB (`uvbAt30` 0) is a heat lamp: it is drawn in the heat colour.
-      const color = (o.uvbAt30 ?? 1) === 0 ? look.lamp.heat : look.lamp.uv;
+      // The studio's marks: a tube is a rounded bar with a core line, a bulb a disc with a core dot.
+      const c = lampLook(o);
       const half = (o.length ?? 0) / 2;
+      const t = look.lamp.tubeWidth;
+      const r = look.lamp.bulbRadius;
+      const edge = Math.max(look.stroke, t / 6);
       return o.form === 'tube' && half > 0 ? (
-        <line
-          key={o.id}
-          x1={o.x - half}
-          y1={o.y}
-          x2={o.x + half}
-          y2={o.y}
-          stroke={color}
-          strokeWidth={look.lamp.tubeWidth}
-          strokeLinecap="round"
-        />
+        <g key={o.id} data-lamp-kind={c.word}>
+          <rect
+            x={o.x - half}
+            y={o.y - t / 2}
+            width={2 * half}
+            height={t}
+            rx={t / 2}
+            fill={c.fill}
+            stroke={c.stroke}
+            strokeWidth={edge}
+          />
+          <line
+            x1={o.x - half + t / 2}
+            y1={o.y}
+            x2={o.x + half - t / 2}
+            y2={o.y}
+            stroke={c.core}
+            strokeWidth={t / 3}
+            strokeLinecap="round"
+          />
+        </g>
       ) : (
-        <circle
-          key={o.id}
-          cx={o.x}
-          cy={o.y}
-          r={look.lamp.bulbRadius}
-          fill={color}
-          stroke={look.lamp.outline}
-          strokeWidth={look.lamp.outline ? look.stroke : undefined}
-        />
+        <g key={o.id} data-lamp-kind={c.word}>
+          <circle
+            cx={o.x}
+            cy={o.y}
+            r={r}
+            fill={c.fill}
+            stroke={c.stroke}
+            strokeWidth={Math.max(look.stroke, r / 4)}
+          />
+          <circle cx={o.x} cy={o.y} r={r * 0.45} fill={c.core} />
+        </g>
       );
     }
     default:

@@ -1,4 +1,5 @@
 import { DesignShapes, drawingTop, SKETCH_LOOK } from '@/components/designs/DesignShapes';
+import { LAMP_LOOK } from '@/shared/lamp-look';
 import type { Design } from '@/simulation';
 
 /**
@@ -26,14 +27,23 @@ export function ProposalSketch({ design, label }: { design: Design; label: strin
         </g>
       </svg>
       <figcaption className="mt-2 flex flex-wrap gap-x-4 gap-y-1 text-caption text-basalt-600">
-        <span>
-          <span aria-hidden className="mr-1 inline-block h-2 w-3 rounded-sm bg-[#8b5cf6]" />
-          UV lamp
-        </span>
-        <span>
-          <span aria-hidden className="mr-1 inline-block h-2 w-3 rounded-sm bg-ember-500" />
-          heat lamp
-        </span>
+        {(['uv', 'heat'] as const).map((kind) => (
+          <span key={kind}>
+            <svg aria-hidden="true" width="14" height="8" className="mr-1 inline-block align-baseline">
+              <rect
+                x="0.75"
+                y="0.75"
+                width="12.5"
+                height="6.5"
+                rx="3.25"
+                fill={LAMP_LOOK[kind].fill}
+                stroke={LAMP_LOOK[kind].stroke}
+                strokeWidth="1.5"
+              />
+            </svg>
+            {kind === 'uv' ? 'UV lamp' : 'heat lamp'}
+          </span>
+        ))}
         <span>
           <span aria-hidden className="mr-1 inline-block h-2 w-3 rounded-sm bg-sand-700" />
           basking perch

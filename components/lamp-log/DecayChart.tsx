@@ -177,7 +177,7 @@ export function DecayChart({
               stroke="#c53c27"
               strokeWidth="2"
             />
-            <title>Falls below the need about {formatDay(fallsBelowOn)}</title>
+            <title>{`Falls below the need about ${formatDay(fallsBelowOn)}`}</title>
           </g>
         )}
 
@@ -192,9 +192,9 @@ export function DecayChart({
               stroke="#633a1d"
               strokeWidth="1.5"
             />
+            {/* One string: React renders a <title> with several children empty on the server. */}
             <title>
-              {formatMoment(p.takenAt, zone, 'day')}: {formatValue(p.raw, unit)} at {p.distanceCm} cm →{' '}
-              {formatValue(p.value, unit)} at 30 cm
+              {`${formatMoment(p.takenAt, zone, 'day')}: ${formatValue(p.raw, unit)} at ${p.distanceCm} cm → ${formatValue(p.value, unit)} at 30 cm`}
             </title>
           </g>
         ))}

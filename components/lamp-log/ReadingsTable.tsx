@@ -29,7 +29,7 @@ export function ReadingsTable({ readings, canEdit }: { readings: Reading[]; canE
   const zone = useViewerZone();
   const day = (iso: string) => formatMoment(iso, zone, 'day');
   const time = (iso: string) => formatMoment(iso, zone, 'time');
-  const when = (iso: string) => formatMoment(iso, zone, 'datetime');
+  const when = (iso: string) => `${day(iso)} ${time(iso)}`;
   const [deleted, setDeleted] = useState<Reading | null>(null);
   const [error, setError] = useState<string | null>(null);
   const rows = [...readings].sort((a, b) => b.takenAt.localeCompare(a.takenAt));

@@ -69,8 +69,10 @@ const animalLabel = () => `CONCAT_WS(' ', NULLIF(${E('animal_name')}, ''), NULLI
  */
 export function enclosureOrder(column: EnclosureSortColumn, descending: boolean): OrderItem[] {
   const d = descending ? 'DESC' : 'ASC';
+  // Names with numbers read as people number things: "Tub 5" before "Tub 10".
+  const naturalName = literal(`NATURAL_SORT_KEY(${E('name')})`);
   const byColumn: Record<EnclosureSortColumn, OrderItem[]> = {
-    name: [['name', d]],
+    name: [[naturalName, d]],
     animal: [
       [literal(`${animalLabel()} = ''`), 'ASC'],
       [literal(animalLabel()), d],
@@ -86,7 +88,7 @@ export function enclosureOrder(column: EnclosureSortColumn, descending: boolean)
     ],
     updated: [['updatedAt', d]],
   };
-  return [...byColumn[column], ['name', 'ASC'], ['id', 'ASC']];
+  return [...byColumn[column], [naturalName, 'ASC'], ['id', 'ASC']];
 }
 
 /**

@@ -4,6 +4,7 @@
  * list and the cautions. The variant's name is both drawn and set as the document title.
  */
 import 'server-only';
+import { FINDING_STATUS } from '@/shared/finding-status';
 import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from 'pdf-lib';
 import { sizeBoth, tempBoth } from '@/shared/units';
 import type { KeyFigures } from '@/shared/designs/figures';
@@ -44,12 +45,18 @@ const A4: [number, number] = [595.28, 841.89];
 const M = 48;
 const INK = rgb(0.11, 0.12, 0.1);
 const MUTED = rgb(0.37, 0.4, 0.34);
+// A finding's state reads as in the app (Pass / Attention / Fail). The standard PDF font has no ✓ or ✕,
+// so the report gives the word alone.
 const STATUS_COLOR = {
-  pass: rgb(0.18, 0.42, 0.21),
-  attention: rgb(0.71, 0.45, 0.13),
-  fail: rgb(0.65, 0.19, 0.12),
+  pass: rgb(...FINDING_STATUS.pass.rgb),
+  attention: rgb(...FINDING_STATUS.attention.rgb),
+  fail: rgb(...FINDING_STATUS.fail.rgb),
 };
-const STATUS_WORD = { pass: 'PASS', attention: 'CHECK', fail: 'FAIL' };
+const STATUS_WORD = {
+  pass: FINDING_STATUS.pass.word,
+  attention: FINDING_STATUS.attention.word,
+  fail: FINDING_STATUS.fail.word,
+};
 
 class Writer {
   page: PDFPage;

@@ -4,6 +4,7 @@
  */
 import type { Design, FieldGrid } from '@/simulation';
 import { bandOf, type FieldScale } from '@/shared/field-scale';
+import { lampLook } from '@/shared/lamp-look';
 
 export type Raster = { width: number; height: number; data: Uint8Array };
 
@@ -14,7 +15,6 @@ const hex = (h: string): Rgb => {
 };
 const INK: Rgb = [28, 31, 26];
 const PAPER: Rgb = [255, 255, 255];
-const LAMP: Rgb = [209, 143, 43];
 
 /** Longest side of the picture, px: readable in a report and on a phone. */
 export const RASTER_LONG_SIDE = 960;
@@ -100,14 +100,20 @@ export function renderFieldRaster(
       case 'glass':
         line(o.x1, o.y1, o.x2, o.y2, [90, 150, 200], 3);
         break;
-      case 'lamp':
+      case 'lamp': {
+        // The same look as in the studio: outline, body and core line in the lamp kind's colours.
+        const look = lampLook(o);
         if (o.form === 'tube') {
           const half = (o.length ?? 0) / 2;
-          line(o.x - half, o.y, o.x + half, o.y, LAMP, 6);
+          line(o.x - half, o.y, o.x + half, o.y, hex(look.stroke), 9);
+          line(o.x - half, o.y, o.x + half, o.y, hex(look.fill), 6);
+          line(o.x - half, o.y, o.x + half, o.y, hex(look.core), 2);
         } else {
-          box(o.x - 2, o.y - 2, 4, 4, INK, LAMP);
+          box(o.x - 2, o.y - 2, 4, 4, hex(look.stroke), hex(look.fill));
+          box(o.x - 0.8, o.y - 0.8, 1.6, 1.6, hex(look.core), hex(look.core));
         }
         break;
+      }
     }
   }
   box(0, 0, w, h, INK);

@@ -159,6 +159,25 @@ describe('GET /api/enclosures: paging', () => {
   });
 });
 
+describe('GET /api/enclosures: names with numbers', () => {
+  it('sorts them as people count ("Tub 5" before "Tub 10"), case aside, both ways', async () => {
+    const { organisation, user } = await createMember('owner');
+    for (const name of ['Tub 10', 'tub 9', 'Tub 5', 'Rack 2 tub 11', 'Rack 2 tub 3', 'Tub 100'])
+      await createEnclosure(organisation, user, { name });
+    const names = async (dir: string) => {
+      const r = await call(collection.GET, {
+        path: `/api/enclosures?organisationId=${organisation.id}&sort=name&dir=${dir}&limit=100`,
+        as: user,
+      });
+      expect(r.status).toBe(200);
+      return (r.body.items as Row[]).map((e) => e.name);
+    };
+    const ascending = ['Rack 2 tub 3', 'Rack 2 tub 11', 'Tub 5', 'tub 9', 'Tub 10', 'Tub 100'];
+    expect(await names('asc')).toEqual(ascending);
+    expect(await names('desc')).toEqual([...ascending].reverse());
+  });
+});
+
 describe('GET /api/enclosures: every sort, both ways', () => {
   for (const column of ENCLOSURE_SORT_COLUMNS) {
     for (const dir of ['asc', 'desc'] as const) {

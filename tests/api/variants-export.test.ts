@@ -146,7 +146,7 @@ describe('export', () => {
     const w = await world('Bearded dragon');
     const r = await exportAs(w, 'format=pdf');
     const text = pdfDrawnText(new Uint8Array(await r.res.arrayBuffer()));
-    expect(text).toMatch(/Species: Bearded dragon — overall (PASS|CHECK|FAIL)/);
+    expect(text).toMatch(/Species: Bearded dragon — overall (Pass|Attention|Fail)/);
     expect(text).not.toContain('No species is attached');
   });
 

@@ -147,6 +147,8 @@ describe('pages check access themselves', () => {
       ] as const) {
         if (r.status !== 404) wrong.push(`${route} (${what} id) → ${r.status}`);
         if (!r.html.includes('Not found')) wrong.push(`${route} (${what} id) does not say "Not found"`);
+        const title = /<title>([^<]*)<\/title>/.exec(r.html)?.[1];
+        if (title !== 'Not found · Baskwell') wrong.push(`${route} (${what} id) is titled "${title}"`);
       }
       if (readable(missing.html) !== readable(foreign.html))
         wrong.push(

@@ -9,14 +9,8 @@ import { BULB_RADIUS_CM, lampExtent, TUBE_THICKNESS_CM } from '../geometry/objec
 import { LAMP_TECHS } from '@/simulation';
 import { calibrationLabel } from '../state/calibration';
 import type { DesignObject, LampObject } from '../state/types';
+import { lampLook } from '@/shared/lamp-look';
 import { C } from './colors';
-
-function lampColors(l: LampObject): { fill: string; stroke: string; core: string } {
-  const uvb = l.uvbAt30 ?? LAMP_TECHS[l.tech].uvbAt30;
-  if (l.tech === 'ceramic') return { fill: C.basalt600, stroke: C.ink, core: C.ember500 };
-  if (uvb > 0) return { fill: C.sky100, stroke: C.sky800, core: C.sky400 };
-  return { fill: C.sand200, stroke: C.ember700, core: C.sand400 };
-}
 
 const TECH_SHORT: Record<LampObject['tech'], string> = {
   t5: 'T5',
@@ -31,7 +25,7 @@ const TECH_SHORT: Record<LampObject['tech'], string> = {
 };
 
 function Lamp({ o, cam }: { o: LampObject; cam: Camera }) {
-  const col = lampColors(o);
+  const col = lampLook(o);
   const watts = o.watts ?? LAMP_TECHS[o.tech].watts;
   const calibrated = calibrationLabel(o);
   // A calibrated lamp says so on a second line: its figures are the real lamp's, not the catalogue's.

@@ -1,6 +1,7 @@
 'use client';
 // The species check: choose a sheet, read the findings (pass / attention / fail with the numbers),
 // click one to see where it applies, and the cautions that always go with the figures.
+import { FINDING_STATUS } from '@/shared/finding-status';
 import Link from '@/components/ui/Link';
 import { controlSummary } from '@/simulation';
 import type { Finding, FindingStatus } from '../fields/engineTypes';
@@ -14,11 +15,15 @@ import { useUnits } from './useObjectEdit';
 
 export const AGEING_HORIZON_MONTHS = 24;
 
+// The words and marks are the same everywhere (shared/finding-status.ts); the colours are the app's.
 const STATUS: Record<FindingStatus, { mark: string; text: string; cls: string }> = {
-  pass: { mark: '✓', text: 'Pass', cls: 'bg-moss-100 text-moss-800 border-moss-300' },
-  attention: { mark: '!', text: 'Attention', cls: 'bg-sand-100 text-sand-900 border-sand-300' },
-  fail: { mark: '✕', text: 'Fail', cls: 'bg-ember-100 text-ember-800 border-ember-300' },
+  pass: { ...words('pass'), cls: 'bg-moss-100 text-moss-800 border-moss-300' },
+  attention: { ...words('attention'), cls: 'bg-sand-100 text-sand-900 border-sand-300' },
+  fail: { ...words('fail'), cls: 'bg-ember-100 text-ember-800 border-ember-300' },
 };
+function words(status: FindingStatus) {
+  return { mark: FINDING_STATUS[status].mark, text: FINDING_STATUS[status].word };
+}
 
 export function StatusBadge({ status }: { status: FindingStatus }) {
   const s = STATUS[status];
