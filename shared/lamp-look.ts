@@ -2,8 +2,8 @@
 // pictures, the guided start's sketch and the reports. A UV lamp is pale blue with a dark blue outline
 // and a blue core line; a heat lamp that glows is sand with a dark red outline; a ceramic emitter (heat,
 // no light) is dark grey with a red core. The outline keeps each one visible over any field band.
-import { LAMP_TECHS } from '@/simulation/model/techs';
-import type { LampObject } from '@/simulation/model/schema';
+// Types only: the pictures of pages that do not compute (share, sketch) must not pull in the engine.
+import type { LampObject } from '@/simulation';
 
 export type LampKind = 'uv' | 'heat' | 'ceramic';
 export type LampLook = { fill: string; stroke: string; core: string; word: string };
@@ -15,9 +15,18 @@ export const LAMP_LOOK: Record<LampKind, LampLook> = {
 };
 
 /** Which look a lamp takes: any UV output makes it a UV lamp (a mercury vapour lamp heats too). */
+const UV_TECHS: ReadonlySet<LampObject['tech']> = new Set([
+  't5',
+  't8',
+  'compact',
+  'mercury-vapour',
+  'metal-halide',
+  'led-uvb',
+]);
+
 export function lampKind(l: Pick<LampObject, 'tech' | 'uvbAt30'>): LampKind {
-  const uvb = l.uvbAt30 ?? LAMP_TECHS[l.tech].uvbAt30;
-  if (uvb > 0) return 'uv';
+  // Without its own figure a lamp has its technology's output: the UV technologies all give some.
+  if (l.uvbAt30 !== undefined ? l.uvbAt30 > 0 : UV_TECHS.has(l.tech)) return 'uv';
   return l.tech === 'ceramic' ? 'ceramic' : 'heat';
 }
 
