@@ -6,7 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { CURRENT_VARIANT_NAME, DESERT_DESIGN_NAME, IMPROVED_VARIANT_NAME } from '@/lib/demo/designs';
 import { demoSignIn } from '@/lib/demo/scenario';
-import { screenshot, signIn, withBrowser } from './harness';
+import { newContext, screenshot, signIn, withBrowser } from './harness';
 import { JOURNEY_MS, eventually, studioReady } from './journey-helpers';
 
 const session = withBrowser();
@@ -14,7 +14,7 @@ const shot = (name: string) => screenshot(session.page(), `demo-walk-${name}`);
 
 describe('the demo tells its story on first sight', () => {
   it(
-    'staff sign-in → hint → designs, a comparison, share links, a calibrated lamp, a sent reminder',
+    'staff sign-in → hint → designs, a comparison, share links, a calibrated lamp; the owner’s sent reminder',
     async () => {
       const page = session.page();
       page.setDefaultTimeout(60_000);
@@ -91,11 +91,18 @@ describe('the demo tells its story on first sight', () => {
         .toMatch(/calibrated/i);
       await shot('05-studio-current-set-up');
 
-      // 6. The reminder the seed sent about the worn tube waits in the mail viewer.
-      await page.goto('/mail');
-      await expect.poll(() => main.innerText(), eventually).toMatch(/Baskwell lamp log:/);
-      expect(await main.innerText()).toContain('Basking tube');
-      await shot('06-mail-reminder');
+      // 6. The reminder the seed sent about the worn tube waits in the mail viewer, which only the
+      // organisation's owner may open.
+      const ownerPage = await (await newContext(session.browser())).newPage();
+      ownerPage.setDefaultTimeout(60_000);
+      const owner = demoSignIn('owner');
+      await signIn(ownerPage, owner.email, owner.password);
+      await ownerPage.goto('/mail');
+      const mail = ownerPage.locator('main');
+      await expect.poll(() => mail.innerText(), eventually).toMatch(/Baskwell lamp log:/);
+      expect(await mail.innerText()).toContain('Basking tube');
+      await screenshot(ownerPage, 'demo-walk-06-mail-reminder');
+      await ownerPage.context().close();
 
       expect(writes, 'the walk changed something').toEqual([]);
       expect(session.pageErrors()).toEqual([]);
