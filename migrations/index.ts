@@ -10,6 +10,7 @@ import * as m0008 from './0008-background-jobs';
 import * as m0009 from './0009-lamp-outlooks';
 import * as m0010 from './0010-species-length-climbs-morph';
 import * as m0011 from './0011-password-resets';
+import * as m0012 from './0012-exact-numbers';
 
 export type Migration = {
   name: string;
@@ -33,4 +34,5 @@ export const migrations: Migration[] = [
   { name: '0009-lamp-outlooks', ...m0009 },
   { name: '0010-species-length-climbs-morph', ...m0010 },
   { name: '0011-password-resets', ...m0011 },
+  { name: '0012-exact-numbers', ...m0012 },
 ];

@@ -50,7 +50,7 @@ export class LampOutlook extends Model<InferAttributes<LampOutlook>, InferCreati
         replaceDueOn: { type: DataTypes.DATEONLY, allowNull: true },
         fallsBelowOn: { type: DataTypes.DATEONLY, allowNull: true },
         lastReadingAt: { type: DataTypes.DATE, allowNull: true },
-        remainingFraction: { type: DataTypes.FLOAT, allowNull: true },
+        remainingFraction: { type: DataTypes.DOUBLE, allowNull: true },
         outlookJson: { type: DataTypes.TEXT('medium'), allowNull: false },
         asOf: { type: DataTypes.DATEONLY, allowNull: false },
         sourceVersion: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },

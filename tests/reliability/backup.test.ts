@@ -9,7 +9,7 @@ import { pathToFileURL } from 'node:url';
 import { promisify } from 'node:util';
 import mariadb from 'mariadb';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Enclosure } from '@/models';
+import { Enclosure, Reading } from '@/models';
 import { closeDatabase, resetDatabase, seedDemo, testDb } from '../helpers/db';
 
 const run = promisify(execFile);
@@ -96,6 +96,9 @@ beforeAll(async () => {
   await seedDemo();
   const enclosure = await Enclosure.findOne({ order: [['id', 'ASC']] });
   await enclosure!.update({ notes: AWKWARD });
+  // A measured value with more digits than FLOAT keeps: the restore must give it back to the last digit.
+  const reading = await Reading.findOne({ order: [['id', 'ASC']] });
+  await reading!.update({ value: 0.1234567890123 });
 });
 
 afterAll(async () => {
