@@ -33,6 +33,13 @@ export async function loadActiveSession(token: SessionClaims): Promise<CurrentUs
   return ended ? null : user;
 }
 
+/** Whether a session id was signed out (a malformed id counts as ended). */
+export async function isSessionEnded(sid: string): Promise<boolean> {
+  if (!SID.test(sid)) return true;
+  getSequelize();
+  return (await EndedSession.findByPk(sid, { attributes: ['sid'] })) !== null;
+}
+
 /**
  * Records a session as ended until `expiresAt` (when its cookie would lapse anyway; at most the session
  * lifetime from now). Ending it twice is harmless.

@@ -5,7 +5,7 @@ import { authorizeCredentials } from './credentials';
 import { safeReturnTo } from './return-to';
 import { SESSION_MAX_AGE_S, SESSION_REFRESH_MS } from './lifetime';
 import { authSecret } from './secret';
-import { endSession, loadActiveSession, newSessionId } from './ended-sessions';
+import { endSession, isSessionEnded, loadActiveSession, newSessionId } from './ended-sessions';
 import { loadUserById } from './session-user';
 import { logger } from '@/lib/log';
 
@@ -63,7 +63,12 @@ export const authOptions: NextAuthOptions = {
       }
       if (typeof token.uid !== 'number' || typeof token.sv !== 'number' || typeof token.sid !== 'string')
         throw new Error('Malformed session.');
-      if (typeof token.checkedAt === 'number' && now - token.checkedAt < SESSION_RECHECK_MS) return token;
+      if (typeof token.checkedAt === 'number' && now - token.checkedAt < SESSION_RECHECK_MS) {
+        // A signed-out cookie is refused at once even between full checks: one primary-key lookup, so a copy
+        // of the cookie taken before sign-out gets nothing from next-auth's own session answer either.
+        if (await isSessionEnded(token.sid)) throw new Error('Session ended.');
+        return token;
+      }
       // Throwing makes next-auth clear the cookie: the session has ended (signed out, everywhere or here, or removed).
       const fresh = await loadActiveSession(token);
       if (!fresh) throw new Error('Session ended.');

@@ -1,7 +1,8 @@
 // Ending sessions: "sign out everywhere", a password change and removal from the organisation each end
 // every existing session of the person — on the very next request for route handlers and pages (the
 // session version is re-read from the database on each), and within SESSION_RECHECK_MS (one minute) for
-// next-auth's own /api/auth/session answer, whose JWT callback re-checks at most that often.
+// next-auth's own /api/auth/session answer, whose JWT callback re-checks the version at most that often.
+// Plain sign-out of one session is refused at once everywhere.
 import { encode } from 'next-auth/jwt';
 import { newSessionId } from '@/lib/auth/ended-sessions';
 import { afterAll, beforeEach, describe, expect, it, vi } from 'vitest';
@@ -82,12 +83,19 @@ describe('plain sign-out', () => {
     await signOut(phone);
     await expectEnded(copied);
     expect((await listAs(laptop)).status).toBe(200);
-    // next-auth's own session answer refuses it too (it re-checks at most once a minute, so force that).
+    // next-auth's own session answer refuses it at once too, even inside the minute between full checks.
     const { decode } = await import('next-auth/jwt');
     const token = await decode({ token: copied.split('=')[1]!, secret: authSecret() });
     await expect(
-      authOptions.callbacks!.jwt!({ token: { ...token!, checkedAt: 0 }, account: null } as never),
+      authOptions.callbacks!.jwt!({ token: { ...token!, checkedAt: Date.now() }, account: null } as never),
     ).rejects.toThrow(/Session ended/);
+    const laptopToken = await decode({ token: laptop.split('=')[1]!, secret: authSecret() });
+    await expect(
+      authOptions.callbacks!.jwt!({
+        token: { ...laptopToken!, checkedAt: Date.now() },
+        account: null,
+      } as never),
+    ).resolves.toMatchObject({ uid: staff.id });
   });
 
   it('refuses a cookie without a session id (one made before sessions had ids, or forged without one)', async () => {
