@@ -130,7 +130,7 @@ describe('export', () => {
       'UV can injure eyes and skin',
       'Lamps within reach burn',
       'Heat sources can start fires',
-      'Run every heat source on a thermostat',
+      'Control each lamp the way its type allows',
       'Every figure is an estimate',
       'verify with a meter and thermometer',
       'reptile-experienced vet',
@@ -139,6 +139,10 @@ describe('export', () => {
     ]) {
       expect(text).toContain(expected);
     }
+    // The basking tube is a fluorescent UV lamp: switched by a timer, never dimmed (common practice, no
+    // published source).
+    expect(text).toMatch(/by a timer\s+only/);
+    expect(text).not.toMatch(/Run every heat source on a thermostat/);
     expect(text).toMatch(/Hot spot \(warmest surface\)\s+[\d.]+ °C \([\d.]+ °F\)/);
   });
 
