@@ -11,6 +11,7 @@ import * as m0009 from './0009-lamp-outlooks';
 import * as m0010 from './0010-species-length-climbs-morph';
 import * as m0011 from './0011-password-resets';
 import * as m0012 from './0012-exact-numbers';
+import * as m0013 from './0013-list-sort-indexes';
 
 export type Migration = {
   name: string;
@@ -35,4 +36,5 @@ export const migrations: Migration[] = [
   { name: '0010-species-length-climbs-morph', ...m0010 },
   { name: '0011-password-resets', ...m0011 },
   { name: '0012-exact-numbers', ...m0012 },
+  { name: '0013-list-sort-indexes', ...m0013 },
 ];

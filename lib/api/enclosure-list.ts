@@ -69,8 +69,9 @@ const animalLabel = () => `CONCAT_WS(' ', NULLIF(${E('animal_name')}, ''), NULLI
  */
 export function enclosureOrder(column: EnclosureSortColumn, descending: boolean): OrderItem[] {
   const d = descending ? 'DESC' : 'ASC';
-  // Names with numbers read as people number things: "Tub 5" before "Tub 10".
-  const naturalName = literal(`NATURAL_SORT_KEY(${E('name')})`);
+  // Names with numbers read as people number things: "Tub 5" before "Tub 10". `name_key` is the name with
+  // its numbers zero-padded (a virtual column of the table), so the name and update orders read an index.
+  const naturalName = literal(E('name_key'));
   const byColumn: Record<EnclosureSortColumn, OrderItem[]> = {
     name: [[naturalName, d]],
     animal: [
@@ -88,7 +89,12 @@ export function enclosureOrder(column: EnclosureSortColumn, descending: boolean)
     ],
     updated: [['updatedAt', d]],
   };
-  return [...byColumn[column], [naturalName, 'ASC'], ['id', 'ASC']];
+  // Written once, not again as a tie-break: a repeated key would keep the name order off its index.
+  return [
+    ...byColumn[column],
+    ...(column === 'name' ? [] : [[naturalName, 'ASC'] as OrderItem]),
+    ['id', 'ASC'],
+  ];
 }
 
 /**

@@ -18,6 +18,7 @@ export async function memberViews(organisationId: number, role?: Role): Promise<
   const rows = await Membership.findAll({
     where: { organisationId, ...(role ? { role } : {}) },
     include: [{ model: User, as: 'user', attributes: ['id', 'name', 'email'] }],
+    order: [['id', 'ASC']],
     limit: PAGE_LIMIT,
   });
   return rows
