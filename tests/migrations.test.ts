@@ -41,7 +41,8 @@ describe('migrations', () => {
     const applied = await migrateUp(sequelize);
     expect(applied).toEqual(migrations.map((m) => m.name));
     expect(await tables()).toEqual(full);
-  });
+    // Every migration up, down and up again: well past the default limit on a busy shared machine.
+  }, 180_000);
 
   it('leave no FLOAT column, so a backup and restore gives back every number exactly', async () => {
     await migrateUp(testDb());
