@@ -147,6 +147,7 @@ const targets: Target[] = [
   staffSees('keepers', '/keepers', () => '/keepers'),
   staffSees('members', '/members', () => '/members'),
   ownerSees('mail', '/mail', () => '/mail'),
+  ownerSees('jobs', '/jobs', () => '/jobs'),
   staffSees('lamp-log', '/lamp-log', () => '/lamp-log'),
   staffSees('lamp', '/lamp-log/[id]', () => `/lamp-log/${ids.lampId}`),
   staffSees('lamp-catalogue', '/lamp-catalogue', () => '/lamp-catalogue'),

@@ -88,7 +88,7 @@ describe('studio canvas with the mouse (no account)', () => {
     });
     await expect.poll(() => objectCount(page), eventually).toBe(9);
     expect(await summary(page)).toMatch(
-      /Lamp: T5 fluorescent tube, [\d.]+ cm long, at 60 cm from the left, 62 cm up \(selected\)/,
+      /Lamp: T5 fluorescent tube, [\d.]+ cm long, at 60 cm from the left, 62 cm up, 30 cm from the front \(on the side view\) \(selected\)/,
     );
     expect(await inspected(page)).toMatch(/^lamp/);
 
