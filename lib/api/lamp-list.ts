@@ -1,3 +1,4 @@
+import 'server-only';
 import { QueryTypes } from 'sequelize';
 import { z } from 'zod';
 import { getSequelize } from '@/lib/db';

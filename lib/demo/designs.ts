@@ -1,3 +1,4 @@
+import 'server-only';
 import type { Transaction } from 'sequelize';
 import { assessmentCost, PERCH_STEP_CM, propose } from '@/lib/guided-start/propose';
 import { PERCH_ID, UV_LAMP_ID, type Lid } from '@/lib/guided-start/layout';

@@ -1,3 +1,4 @@
+import 'server-only';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { getSequelize } from '@/lib/db';
 import { can } from '@/lib/permissions';

@@ -1,3 +1,4 @@
+import 'server-only';
 import { cookies } from 'next/headers';
 import { FALLBACK_ZONE, knownZone, ZONE_COOKIE } from './format';
 
