@@ -1,4 +1,5 @@
-import { lusolve, inv } from 'mathjs';
+import { inv } from 'mathjs';
+import { levenbergMarquardt } from 'ml-levenberg-marquardt';
 import { aicc, mean, tQuantile975 } from './stats';
 
 /**
@@ -13,7 +14,7 @@ import { aicc, mean, tQuantile975 } from './stats';
  *  - `exponential`  E(t) = E0·exp(−t/τ), by linear least squares on ln E. Standard errors come from the
  *    covariance s²(XᵀX)⁻¹; the band is the 95 % confidence band of the fitted curve (Student t).
  *  - `two-phase`    E(t) = E0·(f·exp(−t/τ1) + (1−f)·exp(−t/τ2)) (a fast burn-in drop, then slow wear),
- *    by Levenberg–Marquardt; kept only with enough points and when the corrected AIC prefers it.
+ *    by Levenberg–Marquardt (the `ml-levenberg-marquardt` package); kept only with enough points and when the corrected AIC prefers it.
  *  - `default-scaled` E(t) = s·D(t): the technology's default curve D scaled to the readings — used with
  *    one reading, or when the readings show no decline yet. Always marked uncertain, no band.
  */
@@ -153,7 +154,9 @@ export function fitExponential(pts: readonly DecayPoint[]): ExponentialFit | nul
   };
 }
 
-// ---- two-phase model, Levenberg–Marquardt in an unconstrained parametrisation --------------------------
+// ---- two-phase model, fitted by Levenberg–Marquardt (ml-levenberg-marquardt) --------------------------
+// Unconstrained parameters p = [ln E0, logit f, ln τ1, ln τ2], so every step of the optimiser is a valid
+// curve; the model is fitted in log space like the exponential (equal weights on ln E).
 
 const sigmoid = (x: number) => 1 / (1 + Math.exp(-x));
 
@@ -164,65 +167,34 @@ function twoPhaseLog(p: readonly number[], t: number): number {
   return lnE0 + Math.log(Math.max(v, 1e-300));
 }
 
-function gradient(fn: (p: number[]) => number, p: readonly number[]): number[] {
-  return p.map((_, j) => {
-    const h = 1e-6 * Math.max(1, Math.abs(p[j] as number));
-    const up = [...p];
-    const dn = [...p];
-    up[j] = (up[j] as number) + h;
-    dn[j] = (dn[j] as number) - h;
-    return (fn(up) - fn(dn)) / (2 * h);
-  });
+/** ∂ ln E(t) / ∂p, analytically: used by the optimiser, the covariance and the band. */
+function twoPhaseGradient(p: readonly number[], t: number): number[] {
+  const [, lf = 0, lt1 = 0, lt2 = 0] = p;
+  const f = sigmoid(lf);
+  const tau1 = Math.exp(lt1);
+  const tau2 = Math.exp(lt2);
+  const a = Math.exp(-t / tau1);
+  const b = Math.exp(-t / tau2);
+  const v = Math.max(f * a + (1 - f) * b, 1e-300);
+  return [1, (f * (1 - f) * (a - b)) / v, (f * a * (t / tau1)) / v, ((1 - f) * b * (t / tau2)) / v];
 }
 
-function residuals(p: readonly number[], pts: readonly DecayPoint[]): number[] {
-  return pts.map((q) => Math.log(q.value) - twoPhaseLog(p, q.days));
-}
-
-const sumSq = (r: readonly number[]) => r.reduce((s, x) => s + x * x, 0);
-
-function levenbergMarquardt(p0: number[], pts: readonly DecayPoint[]): { p: number[]; rss: number } {
-  let p = [...p0];
-  let r = residuals(p, pts);
-  let rss = sumSq(r);
-  let lambda = 1e-3;
-  for (let iter = 0; iter < 300; iter++) {
-    const J = pts.map((q) => gradient((pp) => twoPhaseLog(pp, q.days), p));
-    const k = p.length;
-    const A: number[][] = Array.from({ length: k }, () => new Array<number>(k).fill(0));
-    const g = new Array<number>(k).fill(0);
-    J.forEach((row, i) => {
-      for (let a = 0; a < k; a++) {
-        g[a] = (g[a] as number) + (row[a] as number) * (r[i] as number);
-        for (let b = 0; b < k; b++)
-          (A[a] as number[])[b] = (A[a]![b] as number) + (row[a] as number) * (row[b] as number);
-      }
-    });
-    let improved = false;
-    for (let tries = 0; tries < 20 && !improved; tries++) {
-      const M = A.map((row, a) => row.map((v, b) => (a === b ? v * (1 + lambda) + 1e-12 : v)));
-      let step: number[];
-      try {
-        step = (lusolve(M, g) as number[][]).map((x) => x[0] as number);
-      } catch {
-        lambda *= 10;
-        continue;
-      }
-      const cand = p.map((v, j) => v + (step[j] as number));
-      const rc = residuals(cand, pts);
-      const rssC = sumSq(rc);
-      if (Number.isFinite(rssC) && rssC < rss) {
-        const done = (rss - rssC) / Math.max(rss, 1e-300) < 1e-12;
-        p = cand;
-        r = rc;
-        rss = rssC;
-        lambda = Math.max(lambda / 10, 1e-12);
-        improved = true;
-        if (done) return { p, rss };
-      } else lambda *= 10;
-    }
-    if (!improved) break;
-  }
+function runLm(p0: number[], pts: readonly DecayPoint[]): { p: number[]; rss: number } {
+  const { parameterValues } = levenbergMarquardt(
+    { x: pts.map((q) => q.days), y: pts.map((q) => Math.log(q.value)) },
+    (p) => (t) => twoPhaseLog(p, t),
+    {
+      initialValues: p0,
+      jacobianFunction: (p) => (t) => twoPhaseGradient(p, t),
+      // The package stops once the sum of squares is below `errorTolerance` (0.01 by default): a few
+      // readings with a percent of meter scatter are already below that, so ask for a true minimum.
+      errorTolerance: 1e-14,
+      maxIterations: 300,
+      damping: 1e-3,
+    },
+  );
+  const p = [...parameterValues];
+  const rss = pts.reduce((s, q) => s + (Math.log(q.value) - twoPhaseLog(p, q.days)) ** 2, 0);
   return { p, rss };
 }
 
@@ -239,8 +211,8 @@ function fitTwoPhase(pts: readonly DecayPoint[], exp: ExponentialFit): TwoPhaseF
         Math.log(Math.max(1, fast * tMax)),
         Math.log(Math.max(exp.tauDays * 1.5, tMax)),
       ];
-      const res = levenbergMarquardt(start, pts);
-      if (!best || res.rss < best.rss) best = res;
+      const res = runLm(start, pts);
+      if (Number.isFinite(res.rss) && (!best || res.rss < best.rss)) best = res;
     }
   }
   if (!best) return null;
@@ -248,7 +220,7 @@ function fitTwoPhase(pts: readonly DecayPoint[], exp: ExponentialFit): TwoPhaseF
   // Keep phase 1 the fast one (the model is symmetric under swapping the phases).
   if ((p[2] as number) > (p[3] as number))
     p = [p[0] as number, -(p[1] as number), p[3] as number, p[2] as number];
-  const J = pts.map((q) => gradient((pp) => twoPhaseLog(pp, q.days), p));
+  const J = pts.map((q) => twoPhaseGradient(p, q.days));
   const JtJ = p.map((_, a) =>
     p.map((__, b) => J.reduce((s, row) => s + (row[a] as number) * (row[b] as number), 0)),
   );
@@ -311,7 +283,7 @@ export function band(fit: DecayFit, days: number): [number, number] | null {
     return [Math.exp(ln - q * sd), Math.exp(ln + q * sd)];
   }
   if (fit.kind === 'two-phase') {
-    const g = gradient((pp) => twoPhaseLog(pp, days), fit.p);
+    const g = twoPhaseGradient(fit.p, days);
     let v = 0;
     for (let a = 0; a < g.length; a++)
       for (let b = 0; b < g.length; b++)
