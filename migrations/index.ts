@@ -12,6 +12,7 @@ import * as m0010 from './0010-species-length-climbs-morph';
 import * as m0011 from './0011-password-resets';
 import * as m0012 from './0012-exact-numbers';
 import * as m0013 from './0013-list-sort-indexes';
+import * as m0014 from './0014-reading-setup';
 
 export type Migration = {
   name: string;
@@ -37,4 +38,5 @@ export const migrations: Migration[] = [
   { name: '0011-password-resets', ...m0011 },
   { name: '0012-exact-numbers', ...m0012 },
   { name: '0013-list-sort-indexes', ...m0013 },
+  { name: '0014-reading-setup', ...m0014 },
 ];

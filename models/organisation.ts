@@ -14,6 +14,8 @@ export class Organisation extends Model<
 > {
   declare id: CreationOptional<number>;
   declare name: string;
+  /** Invented example data (the demo): every page and report showing its lamps and readings says so. */
+  declare exampleData: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -22,6 +24,7 @@ export class Organisation extends Model<
       {
         id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
         name: { type: DataTypes.STRING(120), allowNull: false },
+        exampleData: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -6,6 +6,12 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from 'sequelize';
+import {
+  READING_THROUGH,
+  READING_WARMED_UP,
+  type ReadingThrough,
+  type ReadingWarmedUp,
+} from '@/shared/reading-setup';
 
 export const READING_UNITS = ['uvb', 'uvi'] as const;
 /** `uvb`: broadband UVB irradiance, µW/cm². `uvi`: UV Index (a UV Index meter). */
@@ -18,8 +24,13 @@ export class Reading extends Model<InferAttributes<Reading>, InferCreationAttrib
   declare takenAt: Date;
   declare distanceCm: number;
   declare value: number;
+  /** The meter kind: a UV Index meter gives `uvi`, a broadband UVB meter `uvb`. */
   declare unit: ReadingUnit;
-  /** Which meter (a description, e.g. "broadband UVB meter, shop's"). */
+  declare through: CreationOptional<ReadingThrough>;
+  /** Share of UVB passing what lay between (0–1]; null when nothing, not recorded, or not known (glass). */
+  declare throughTransmission: CreationOptional<number | null>;
+  declare warmedUp: CreationOptional<ReadingWarmedUp>;
+  /** Which meter, in the keeper's own words (free text: its model, whose it is). */
   declare meter: CreationOptional<string | null>;
   declare takenById: number | null;
   declare note: CreationOptional<string | null>;
@@ -37,6 +48,17 @@ export class Reading extends Model<InferAttributes<Reading>, InferCreationAttrib
         distanceCm: { type: DataTypes.DOUBLE, allowNull: false },
         value: { type: DataTypes.DOUBLE, allowNull: false },
         unit: { type: DataTypes.ENUM(...READING_UNITS), allowNull: false },
+        through: {
+          type: DataTypes.ENUM(...READING_THROUGH),
+          allowNull: false,
+          defaultValue: 'not-recorded',
+        },
+        throughTransmission: { type: DataTypes.DOUBLE, allowNull: true },
+        warmedUp: {
+          type: DataTypes.ENUM(...READING_WARMED_UP),
+          allowNull: false,
+          defaultValue: 'not-recorded',
+        },
         meter: { type: DataTypes.STRING(160), allowNull: true },
         takenById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         note: { type: DataTypes.TEXT, allowNull: true },

@@ -146,7 +146,9 @@ export function AddLampForm({
       </div>
       <p className="text-caption text-basalt-500">
         Mesh shares are typical open areas of woven mesh (ISO 9044); screens can cut UVB by as much as half.
-        Measure through your own lid to be sure.
+        To know your own lid&apos;s share, take two readings at the same distance, one through the lid and one
+        without, and divide; each reading then says what was between lamp and meter, so the lid is counted
+        once.
       </p>
       {error && <Notice tone="error">{error.message}</Notice>}
       <button type="submit" className={button.primary} disabled={busy || lampTypes.length === 0}>

@@ -12,9 +12,10 @@ import { formatValue } from './format';
 type Preview = { ok: boolean; rows: CsvRow[]; errors: CsvIssue[]; total: number };
 
 const MAX_BYTES = 1024 * 1024;
-const EXAMPLE = `lamp,taken_at,distance,distance_unit,value,unit,meter,note
-Basking tube,2025-03-01 10:30,30,cm,41.5,uvb,broadband meter,
-Basking tube,2025-03-01 10:32,30,cm,1.7,uvi,UV index meter,same spot`;
+const EXAMPLE = `lamp,taken_at,distance,distance_unit,value,unit,through,through_transmission,warmed_up,meter,note
+Basking tube,2025-03-01 10:30,30,cm,41.5,uvb,nothing,,yes,broadband meter,
+Basking tube,2025-03-01 10:32,30,cm,1.7,uvi,nothing,,yes,UV index meter,same spot
+Basking tube,2025-03-01 10:35,30,cm,25.1,uvb,lid,0.6,yes,broadband meter,through the lid`;
 
 /**
  * Readings from a CSV file: first a preview with every problem named by row, nothing saved; then one
@@ -111,6 +112,14 @@ export function CsvImport({ enclosureId }: { enclosureId: number }) {
           2025-03-01 10:30, your local time), <code>distance</code> with <code>distance_unit</code> cm or in,{' '}
           <code>value</code>, <code>unit</code> uvb (µW/cm²) or uvi, and optional <code>meter</code> and{' '}
           <code>note</code>.
+        </p>
+        <p className="mt-1">
+          How each reading was taken (optional columns): <code>through</code> — what was between lamp and
+          meter: nothing, lid, screen or glass; <code>through_transmission</code> — the share of UVB it
+          passes, 0–1 (for the lid, the lamp&apos;s own setting when empty; a screen must give it);{' '}
+          <code>warmed_up</code> — yes or no. Left out or empty, they read &ldquo;not recorded&rdquo;, and the
+          lamp log takes such a reading as the bare lamp and says so. Readings through glass of unknown share
+          or of a lamp not yet warmed up are kept but not used for the decay.
         </p>
         <pre className="mt-1 overflow-x-auto rounded bg-basalt-50 p-2">{EXAMPLE}</pre>
       </details>

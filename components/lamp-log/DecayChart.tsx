@@ -15,6 +15,13 @@ const DAY_MS = 86_400_000;
 
 type Chart = LampDetail['chart'];
 
+/** Working-life readings filled; burn-in readings hollow; readings that cannot be used grey. */
+const POINT_LOOK = {
+  fit: { fill: '#d18f2b', stroke: '#633a1d' },
+  'burn-in': { fill: '#ffffff', stroke: '#8a5a1f' },
+  excluded: { fill: '#d4d4d4', stroke: '#737373' },
+} as const;
+
 export function DecayChart({
   chart,
   fallsBelowOn,
@@ -84,7 +91,7 @@ export function DecayChart({
       >
         <title id={titleId}>{title}</title>
         <desc id={descId}>
-          {chart.points.length} readings brought to 30 cm, the fitted curve
+          {chart.points.length} readings brought to the bare lamp at 30 cm, the fitted curve
           {bandPath ? ' with its 95 % band' : ''}
           {chart.needAt30 !== null ? ', and the species’ need at the basking spot' : ''}.
         </desc>
@@ -188,13 +195,12 @@ export function DecayChart({
               cx={xd(p.days)}
               cy={clampY(p.value)}
               r="5"
-              fill="#d18f2b"
-              stroke="#633a1d"
+              {...POINT_LOOK[p.use ?? 'fit']}
               strokeWidth="1.5"
             />
             {/* One string: React renders a <title> with several children empty on the server. */}
             <title>
-              {`${formatMoment(p.takenAt, zone, 'day')}: ${formatValue(p.raw, unit)} at ${p.distanceCm} cm → ${formatValue(p.value, unit)} at 30 cm`}
+              {`${formatMoment(p.takenAt, zone, 'day')}: ${formatValue(p.raw, unit)} at ${p.distanceCm} cm → ${formatValue(p.value, unit)} bare at 30 cm${p.why ? ` (${p.why})` : ''}`}
             </title>
           </g>
         ))}
@@ -204,8 +210,24 @@ export function DecayChart({
           <svg width="12" height="12" aria-hidden="true">
             <circle cx="6" cy="6" r="4.5" fill="#d18f2b" stroke="#633a1d" />
           </svg>
-          Readings, at 30 cm
+          Readings, bare lamp at 30 cm
         </span>
+        {chart.points.some((p) => p.use === 'burn-in') && (
+          <span className="inline-flex items-center gap-1.5">
+            <svg width="12" height="12" aria-hidden="true">
+              <circle cx="6" cy="6" r="4.5" {...POINT_LOOK['burn-in']} />
+            </svg>
+            During burn-in (fitted apart)
+          </span>
+        )}
+        {chart.points.some((p) => p.use === 'excluded') && (
+          <span className="inline-flex items-center gap-1.5">
+            <svg width="12" height="12" aria-hidden="true">
+              <circle cx="6" cy="6" r="4.5" {...POINT_LOOK.excluded} />
+            </svg>
+            Not used (see the outlook)
+          </span>
+        )}
         <span className="inline-flex items-center gap-1.5">
           <svg width="22" height="12" aria-hidden="true">
             <line

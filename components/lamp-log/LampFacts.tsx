@@ -3,6 +3,7 @@
 import { card } from '@/components/ui/styles';
 import { formatLengthRounded } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
+import { BURN_IN_HOURS } from '@/lib/lamp-log/burn-in';
 import type { LampSummary } from '@/lib/lamp-log/store';
 import { formatAge, formatDay, formatValue } from './format';
 
@@ -65,6 +66,21 @@ export function LampFacts({ lamp: l }: { lamp: LampSummary }) {
               ? 'not within 5 years'
               : '—'}
         </Row>
+        {l.status !== 'heat-only' && l.status !== 'retired' && l.burnIn && (
+          <Row term="Baseline reading">
+            {l.burnIn.baselineTaken ? (
+              'taken'
+            ) : (
+              <>
+                {l.burnIn.inBurnIn ? 'due ' : 'due since '}
+                {formatDay(l.burnIn.baselineOn)}
+                <span className="block text-caption text-basalt-500">
+                  after {BURN_IN_HOURS} hours of burn-in
+                </span>
+              </>
+            )}
+          </Row>
+        )}
         <Row term="Next test">{formatDay(l.testDueOn)}</Row>
         <Row term="Replace by">
           {formatDay(l.replaceDueOn)}
@@ -83,6 +99,11 @@ export function LampFacts({ lamp: l }: { lamp: LampSummary }) {
         {l.reasons.map((r) => (
           <p key={r}>{r}</p>
         ))}
+        {(l.readingNotes ?? []).map((r) => (
+          <p key={r} data-testid="reading-note">
+            {r}
+          </p>
+        ))}
         {l.missing.length > 0 && l.status !== 'retired' && l.status !== 'heat-only' && (
           <p>
             <strong className="font-semibold text-basalt-800">To date the basking zone, add:</strong>{' '}
@@ -91,9 +112,10 @@ export function LampFacts({ lamp: l }: { lamp: LampSummary }) {
         )}
         {l.basking && (
           <p>
-            Basking value from the fitted output at 30 cm, brought to the basking distance
+            Basking value: every reading is first brought to the bare lamp at 30 cm (taking out what was
+            between lamp and meter), then the fitted output is brought to the basking distance
             {l.basking.transmission < 1
-              ? ` and through what lets ${Math.round(l.basking.transmission * 100)} % pass`
+              ? ` and through what lets ${Math.round(l.basking.transmission * 100)} % pass, once`
               : ''}
             . Need: {l.basking.needLabel}.
           </p>

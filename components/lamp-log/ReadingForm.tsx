@@ -8,6 +8,20 @@ import { Notice } from '@/components/ui/Notice';
 import { Select } from '@/components/ui/Select';
 import { button } from '@/components/ui/styles';
 import { useLengthUnit } from '@/components/ui/units';
+import {
+  THROUGH_LABEL,
+  WARM_UP_MINUTES,
+  WARMED_UP_LABEL,
+  type ReadingThrough,
+  type ReadingWarmedUp,
+} from '@/shared/reading-setup';
+
+/** What the form offers and remembers from the last reading: never "not recorded". */
+export type ReadingSetupDefaults = {
+  through: Exclude<ReadingThrough, 'not-recorded'> | null;
+  throughTransmission: number | null;
+  warmedUp: Exclude<ReadingWarmedUp, 'not-recorded'> | null;
+};
 
 /** datetime-local value of "now" in the browser's time zone. */
 function nowLocal(): string {
@@ -17,9 +31,28 @@ function nowLocal(): string {
 }
 
 /** One meter reading, typed in. Distances in the page's unit (cm or in); the server stores cm. */
-export function ReadingForm({ lampId, lastMeter }: { lampId: number; lastMeter: string | null }) {
+export function ReadingForm({
+  lampId,
+  lastMeter,
+  lidShare,
+  last,
+}: {
+  lampId: number;
+  lastMeter: string | null;
+  /** The share of UVB the lamp's lid passes (the lamp's setting), or null without a lid. */
+  lidShare: number | null;
+  /** The set-up of the last reading that recorded one, offered again. */
+  last: ReadingSetupDefaults;
+}) {
   const router = useRouter();
   const [unit] = useLengthUnit();
+  const [through, setThrough] = useState<string>(last.through ?? '');
+  const shareDefault =
+    through === 'lid'
+      ? (lidShare ?? '')
+      : through === last.through && last.throughTransmission !== null
+        ? last.throughTransmission
+        : '';
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<{ field?: string; message: string } | null>(null);
   const [saved, setSaved] = useState<string | null>(null);
@@ -28,6 +61,10 @@ export function ReadingForm({ lampId, lastMeter }: { lampId: number; lastMeter: 
     e.preventDefault();
     const form = new FormData(e.currentTarget);
     const num = (k: string) => (form.get(k) === '' ? undefined : Number(form.get(k)));
+    // Asked here rather than defaulted: a reading is only comparable when its set-up is known.
+    if (!through) return setError({ field: 'through', message: 'Say what was between lamp and meter.' });
+    if (!form.get('warmedUp'))
+      return setError({ field: 'warmedUp', message: 'Say whether the lamp had warmed up.' });
     setBusy(true);
     setError(null);
     setSaved(null);
@@ -38,6 +75,11 @@ export function ReadingForm({ lampId, lastMeter }: { lampId: number; lastMeter: 
         distanceUnit: unit,
         value: num('value'),
         unit: form.get('unit'),
+        through,
+        throughTransmission: ['lid', 'screen', 'glass'].includes(through)
+          ? (num('throughTransmission') ?? null)
+          : null,
+        warmedUp: form.get('warmedUp'),
         meter: String(form.get('meter') ?? '') || null,
         note: String(form.get('note') ?? '') || null,
       });
@@ -85,19 +127,77 @@ export function ReadingForm({ lampId, lastMeter }: { lampId: number; lastMeter: 
           required
           error={err('value')}
         />
-        <Select label="Unit" name="unit" defaultValue="uvb" error={err('unit')}>
-          <option value="uvb">UVB µW/cm² (broadband meter)</option>
-          <option value="uvi">UV Index (UVI meter)</option>
+        <Select label="Meter kind" name="unit" defaultValue="uvb" error={err('unit')}>
+          <option value="uvb">Broadband UVB meter (µW/cm²)</option>
+          <option value="uvi">UV Index meter (UVI)</option>
+        </Select>
+        <Select
+          label="Between lamp and meter"
+          name="through"
+          value={through}
+          onChange={(e) => setThrough(e.target.value)}
+          required
+          error={err('through')}
+        >
+          <option value="" disabled>
+            Choose…
+          </option>
+          {(['nothing', 'lid', 'screen', 'glass'] as const).map((t) => (
+            <option key={t} value={t}>
+              {THROUGH_LABEL[t]}
+            </option>
+          ))}
+        </Select>
+        {['lid', 'screen', 'glass'].includes(through) && (
+          <Field
+            // A fresh field for each choice, so the lid's own share is filled in when it is chosen.
+            key={through}
+            label="Share of UVB it passes (0–1)"
+            name="throughTransmission"
+            type="number"
+            step="0.01"
+            min="0.01"
+            max="1"
+            inputMode="decimal"
+            defaultValue={shareDefault}
+            required={through === 'screen' || (through === 'lid' && lidShare === null)}
+            hint={
+              through === 'lid'
+                ? 'The lamp’s setting for its lid; change it if you measured through another.'
+                : through === 'glass'
+                  ? 'Ordinary glass passes almost no UVB. Leave empty unless the maker gives a share: the reading is then kept but not used.'
+                  : 'Measure it: one reading with the screen and one without, at the same distance, divided.'
+            }
+            error={err('throughTransmission')}
+          />
+        )}
+        <Select
+          label="Lamp warmed up"
+          name="warmedUp"
+          defaultValue={last.warmedUp ?? ''}
+          required
+          error={err('warmedUp')}
+        >
+          <option value="" disabled>
+            Choose…
+          </option>
+          <option value="yes">{WARMED_UP_LABEL.yes}</option>
+          <option value="no">{WARMED_UP_LABEL.no}</option>
         </Select>
         <Field
-          label="Meter"
+          label="Meter (optional)"
           name="meter"
           defaultValue={lastMeter ?? ''}
-          placeholder="e.g. shop's broadband meter"
+          placeholder="Its model or whose it is, in your words"
           error={err('meter')}
         />
         <Field label="Note" name="note" placeholder="Optional" error={err('note')} />
       </div>
+      <p className="text-caption text-basalt-500">
+        Switch the lamp on at least {WARM_UP_MINUTES} minutes before measuring. The lamp log takes out what
+        was between lamp and meter once, so any set-up works if it is recorded; the bare lamp (lid off, or the
+        meter between lamp and lid) is the most direct.
+      </p>
       {error && !error.field && <Notice tone="error">{error.message}</Notice>}
       {error?.field && (
         <p className="sr-only" role="alert">

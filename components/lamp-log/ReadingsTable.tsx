@@ -10,6 +10,7 @@ import { button } from '@/components/ui/styles';
 import { formatLengthRounded } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
 import type { LampDetail } from '@/lib/lamp-log/store';
+import { THROUGH_SHORT } from '@/shared/reading-setup';
 import { formatValue } from './format';
 
 type Reading = LampDetail['readings'][number];
@@ -20,6 +21,16 @@ function TrashIcon() {
       <path d="M8 2h4a1 1 0 0 1 1 1v1h4a1 1 0 1 1 0 2h-.1l-.8 10.2A2 2 0 0 1 14.1 18H5.9a2 2 0 0 1-2-1.8L3.1 6H3a1 1 0 0 1 0-2h4V3a1 1 0 0 1 1-1Zm-2.9 4 .8 10h8.2l.8-10H5.1ZM8 8a1 1 0 0 1 1 1v5a1 1 0 1 1-2 0V9a1 1 0 0 1 1-1Zm4 0a1 1 0 0 1 1 1v5a1 1 0 1 1-2 0V9a1 1 0 0 1 1-1Z" />
     </svg>
   );
+}
+
+/** How the reading was taken, in a few words: "through the lid (60 %), warmed up". */
+function setupText(r: Reading): string {
+  const share =
+    r.throughTransmission !== null && r.through !== 'nothing'
+      ? ` (${Math.round(r.throughTransmission * 100)} %)`
+      : '';
+  const warm = r.warmedUp === 'yes' ? ', warmed up' : r.warmedUp === 'no' ? ', not warmed up' : '';
+  return `${THROUGH_SHORT[r.through]}${share}${warm}`;
 }
 
 /** The lamp's readings, newest first, with delete and an undo for the last delete. */
@@ -56,6 +67,9 @@ export function ReadingsTable({ readings, canEdit }: { readings: Reading[]; canE
         distanceUnit: 'cm',
         value: deleted.value,
         unit: deleted.unit,
+        through: deleted.through,
+        throughTransmission: deleted.throughTransmission,
+        warmedUp: deleted.warmedUp,
         meter: deleted.meter,
         note: deleted.note,
       });
@@ -125,6 +139,9 @@ export function ReadingsTable({ readings, canEdit }: { readings: Reading[]; canE
                   </span>
                   <span className="block whitespace-nowrap text-caption tabular-nums text-basalt-500">
                     at {formatLengthRounded(r.distanceCm, unit)}
+                  </span>
+                  <span className="block text-caption text-basalt-500" data-testid="reading-setup">
+                    {setupText(r)}
                   </span>
                 </td>
                 <td className="px-3 py-2 text-basalt-600">

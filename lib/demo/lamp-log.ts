@@ -2,6 +2,7 @@ import 'server-only';
 import type { Transaction } from 'sequelize';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
 import { Enclosure, Lamp, LampType, Organisation, Reading } from '@/models';
+import type { ReadingThrough, ReadingWarmedUp } from '@/shared/reading-setup';
 import { DEMO_HOUSEHOLD, DEMO_SHOP } from './scenario';
 
 /**
@@ -11,7 +12,17 @@ import { DEMO_HOUSEHOLD, DEMO_SHOP } from './scenario';
  * Only enclosures with no lamps at all get them, so nothing a user logged is touched.
  */
 
-type DemoReading = { daysAgo: number; distanceCm: number; value: number; unit: 'uvb' | 'uvi'; note?: string };
+type DemoReading = {
+  daysAgo: number;
+  distanceCm: number;
+  value: number;
+  unit: 'uvb' | 'uvi';
+  note?: string;
+  /** How it was taken; left out: the bare lamp, warmed up. */
+  setUp?: { through: ReadingThrough; throughTransmission: number | null; warmedUp: ReadingWarmedUp };
+};
+
+const BARE_WARM = { through: 'nothing', throughTransmission: null, warmedUp: 'yes' } as const;
 type DemoLamp = {
   organisation: string;
   enclosure: string;
@@ -108,7 +119,16 @@ export const DEMO_LAMPS: readonly DemoLamp[] = [
     hoursPerDay: 10,
     baskingDistanceCm: 35,
     baskingTransmission: null,
-    readings: [{ daysAgo: 380, distanceCm: 30, value: 5.1, unit: 'uvb' }],
+    // Logged before readings said how they were taken: the lamp page says it read them as bare.
+    readings: [
+      {
+        daysAgo: 380,
+        distanceCm: 30,
+        value: 5.1,
+        unit: 'uvb',
+        setUp: { through: 'not-recorded', throughTransmission: null, warmedUp: 'not-recorded' },
+      },
+    ],
   },
 ];
 
@@ -156,6 +176,7 @@ export async function seedDemoLampLog(transaction: Transaction): Promise<number>
         distanceCm: r.distanceCm,
         value: r.value,
         unit: r.unit,
+        ...(r.setUp ?? BARE_WARM),
         meter: r.unit === 'uvi' ? METER_UVI : METER_UVB,
         note: r.note ?? null,
         takenById: null,

@@ -59,6 +59,8 @@ describe('seedDemo', () => {
       const org = await Organisation.findOne({ where: { name: s.organisation } });
       const membership = await Membership.findOne({ where: { userId: user?.id, organisationId: org?.id } });
       expect(membership?.role).toBe(s.role);
+      // Invented data, marked so wherever its lamps, readings and reports appear.
+      expect(org?.exampleData).toBe(true);
     }
     const sable = await Enclosure.findOne({ where: { animalName: 'Sable' } });
     expect(sable?.speciesName).toBe('Bearded dragon');

@@ -67,8 +67,11 @@ export async function seedDemo(sequelize: Sequelize): Promise<SeedResult> {
     for (const org of DEMO_ORGANISATIONS) {
       let organisation = await findOrganisation(org, transaction);
       if (!organisation) {
-        organisation = await Organisation.create({ name: org.name }, { transaction });
+        organisation = await Organisation.create({ name: org.name, exampleData: true }, { transaction });
         created.organisations++;
+      } else if (!organisation.exampleData) {
+        // A demo organisation seeded before organisations carried the mark: its data is still invented.
+        await organisation.update({ exampleData: true }, { transaction });
       }
       // The starting species sheets and lamp catalogue (once per organisation; see lib/species/seed.ts).
       await seedStartingCatalogue(organisation.id, { transaction });

@@ -49,6 +49,22 @@ describe('calibrate', () => {
     });
   });
 
+  it('writes the bare lamp into the design when the readings were taken through the lid (the design’s mesh adds it back)', () => {
+    const lidded = t5Lamp({ baskingTransmission: 0.6 });
+    const bare = uvb.map((r) => ({ ...r, through: 'nothing' as const }));
+    const throughLid = uvb.map((r) => ({
+      ...r,
+      value: r.value * 0.6,
+      through: 'lid' as const,
+      throughTransmission: 0.6,
+    }));
+    const a = calibrate(lidded, bare, object, '2025-10-01');
+    const b = calibrate(lidded, throughLid, object, '2025-10-01');
+    if (!a.ok || !b.ok) throw new Error('no calibration');
+    expect(b.fields.uvbAt30).toBe(a.fields.uvbAt30);
+    expect(Math.abs((b.fields.uvbAt30 as number) / 50 - 1)).toBeLessThan(0.05);
+  });
+
   it('divides by the reflector gain: readings under a reflector include it', () => {
     const plain = calibrate(lamp, uvb, object, '2025-10-01');
     const withReflector = calibrate(lamp, uvb, { ...object, reflectorGain: 2 }, '2025-10-01');
@@ -58,8 +74,8 @@ describe('calibrate', () => {
 
   it('measures UVI per µW/cm² from readings taken together, and uses it for UVI-only lamps', () => {
     const uvi = readingsOf(lamp, (d) => at30(d) * 0.03, [0, 60, 120, 180, 240], 25, 'uvi');
-    expect(pairedRatio([...uvb, ...uvi])?.ratio).toBeCloseTo(0.03, 6);
-    expect(pairedRatio([...uvb, ...uvi])?.pairs).toBe(5);
+    expect(pairedRatio([...uvb, ...uvi], lamp.type)?.ratio).toBeCloseTo(0.03, 6);
+    expect(pairedRatio([...uvb, ...uvi], lamp.type)?.pairs).toBe(5);
     const both = calibrate(lamp, [...uvb, ...uvi], object, '2025-10-01');
     if (!both.ok) throw new Error(both.reason);
     expect(both.fields.uviPerUvb).toBeCloseTo(0.03, 4);

@@ -3,14 +3,17 @@ import { LAMP_TECHS } from '@/simulation';
 import { dayNumber, DAYS_PER_MONTH, isoDay } from './dates';
 import { defaultDecayFor, REFERENCE_HOURS_PER_DAY } from './decay';
 import { predict } from './fit';
+import { toBareReference, type LampShape } from './geometry';
 import { lampOutlook, type LampFacts, type ReadingFacts } from './outlook';
 
 /**
  * Calibration: a lamp's meter readings replace the catalogue figures of its design lamp object, so the
  * studio's fields show this lamp rather than an average one. Pure: readings + lamp → proposed fields.
  *
- *  - `uvbAt30` (new, bare, 30 cm): the fitted output at first use, brought to 30 cm with the engine's
- *    geometry; readings taken under the installed reflector are divided by the object's reflector gain.
+ *  - `uvbAt30` (new, bare, 30 cm): the fitted output at first use. The outlook has brought every reading
+ *    to the bare lamp at 30 cm (geometry.ts, `toBareReference`): a lid or screen it was read through is
+ *    taken out there, once, because the design's own mesh objects put it back in the engine. Readings
+ *    taken under the installed reflector are divided by the object's reflector gain.
  *    With only UV Index readings it is the UVI at 30 cm divided by the lamp's UVI-per-µW/cm² ratio.
  *  - `uviPerUvb`: the median ratio of UVI to µW/cm² readings taken at the same distance within an hour.
  *  - `decay`: the fitted curve as a table of (month, output factor), when the readings show the shape.
@@ -35,9 +38,17 @@ export type Calibration =
 const PAIR_CM = 0.5;
 const PAIR_MS = 60 * 60 * 1000;
 
-export function pairedRatio(readings: readonly ReadingFacts[]): { ratio: number; pairs: number } | null {
-  const uvb = readings.filter((r) => r.unit === 'uvb' && r.value > 0);
-  const uvi = readings.filter((r) => r.unit === 'uvi' && r.value >= 0);
+export function pairedRatio(
+  readings: readonly ReadingFacts[],
+  shape: LampShape,
+): { ratio: number; pairs: number } | null {
+  // Each reading as the bare lamp at 30 cm, so a pair taken through different screens still compares.
+  const bare = (r: ReadingFacts) => {
+    const ref = toBareReference(shape, r);
+    return ref.ok ? ref.value : null;
+  };
+  const uvb = readings.filter((r) => r.unit === 'uvb' && r.value > 0 && bare(r) !== null);
+  const uvi = readings.filter((r) => r.unit === 'uvi' && r.value >= 0 && bare(r) !== null);
   const ratios: number[] = [];
   for (const a of uvi) {
     const ta = new Date(a.takenAt).getTime();
@@ -46,7 +57,7 @@ export function pairedRatio(readings: readonly ReadingFacts[]): { ratio: number;
       .map((b) => ({ b, dt: Math.abs(new Date(b.takenAt).getTime() - ta) }))
       .filter((m) => m.dt <= PAIR_MS)
       .sort((x, y) => x.dt - y.dt)[0];
-    if (match) ratios.push(a.value / match.b.value);
+    if (match) ratios.push((bare(a) as number) / (bare(match.b) as number));
   }
   if (ratios.length === 0) return null;
   ratios.sort((x, y) => x - y);
@@ -81,7 +92,7 @@ export function calibrate(
   const gain = object.reflectorGain ?? 1;
   const decay = (d: number) => (predict(fit, d, () => 1) ?? 0) / (predict(fit, 0, () => 1) || 1);
   const e0 = predict(fit, 0, () => 1);
-  const pair = pairedRatio(usable);
+  const pair = pairedRatio(usable, lamp.type);
   const currentRatio = object.uviPerUvb ?? LAMP_TECHS[object.tech].uviPerUvb;
   if (pair) {
     fields.uviPerUvb = round(pair.ratio, 4);

@@ -15,7 +15,12 @@ import { parseReadingsCsv, type CsvResult } from './csv';
 export async function csvLampsOf(enclosure: Enclosure) {
   getSequelize();
   const lamps = await Lamp.findAll({ where: { enclosureId: enclosure.id }, order: [['id', 'ASC']] });
-  return lamps.map((l) => ({ id: l.id, label: l.label, firstUsedOn: l.firstUsedOn }));
+  return lamps.map((l) => ({
+    id: l.id,
+    label: l.label,
+    firstUsedOn: l.firstUsedOn,
+    baskingTransmission: l.baskingTransmission ?? null,
+  }));
 }
 
 export async function previewCsv(
@@ -62,6 +67,9 @@ export async function importCsv(
           distanceCm: r.distanceCm,
           value: r.value,
           unit: r.unit,
+          through: r.through,
+          throughTransmission: r.throughTransmission,
+          warmedUp: r.warmedUp,
           meter: r.meter,
           note: r.note,
           takenById: user.id,

@@ -2,8 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { parseReadingsCsv, parseTakenAt } from './csv';
 
 const lamps = [
-  { id: 7, label: 'Basking tube', firstUsedOn: '2025-01-01' },
-  { id: 8, label: 'Spot lamp', firstUsedOn: '2025-02-01' },
+  { id: 7, label: 'Basking tube', firstUsedOn: '2025-01-01', baskingTransmission: 0.6 },
+  { id: 8, label: 'Spot lamp', firstUsedOn: '2025-02-01', baskingTransmission: null },
 ];
 
 describe('parseReadingsCsv', () => {
@@ -71,6 +71,54 @@ describe('parseReadingsCsv', () => {
     const one = parseReadingsCsv('taken_at,distance_in,value,unit\n2025-03-01,10,40,uvb', lamps.slice(0, 1));
     expect(one.errors).toEqual([]);
     expect(one.rows[0]).toMatchObject({ lampId: 7, distanceCm: 25.4 });
+  });
+
+  it('reads how each reading was taken, and leaves it "not recorded" when the columns are missing or empty', () => {
+    const csv = [
+      'lamp,taken_at,distance,value,unit,through,through_transmission,warmed_up',
+      'Basking tube,2025-03-01,30,25,uvb,lid,,yes',
+      'Basking tube,2025-03-02,30,25,uvb,screen,"0,5",no',
+      'Basking tube,2025-03-03,30,25,uvb,,,',
+      'Basking tube,2025-03-04,30,25,uvb,glass,,',
+      'Basking tube,2025-03-05,30,25,uvb,bare,,Yes',
+    ].join('\n');
+    const r = parseReadingsCsv(csv, lamps);
+    expect(r.errors).toEqual([]);
+    expect(r.rows.map((x) => [x.through, x.throughTransmission, x.warmedUp])).toEqual([
+      // The lid's share is the lamp's own setting when the row leaves it empty.
+      ['lid', 0.6, 'yes'],
+      ['screen', 0.5, 'no'],
+      ['not-recorded', null, 'not-recorded'],
+      ['glass', null, 'not-recorded'],
+      ['nothing', null, 'yes'],
+    ]);
+    const old = parseReadingsCsv('lamp,taken_at,distance,value,unit\nSpot lamp,2025-03-01,30,25,uvb', lamps);
+    expect(old.rows[0]).toMatchObject({
+      through: 'not-recorded',
+      throughTransmission: null,
+      warmedUp: 'not-recorded',
+    });
+  });
+
+  it('names the set-up column of a bad row', () => {
+    const csv = [
+      'lamp,taken_at,distance,value,unit,through,through_transmission,warmed_up',
+      'Basking tube,2025-03-01,30,25,uvb,window,,',
+      'Basking tube,2025-03-01,30,25,uvb,screen,,',
+      'Spot lamp,2025-03-01,30,25,uvb,lid,,',
+      'Basking tube,2025-03-01,30,25,uvb,lid,1.4,',
+      'Basking tube,2025-03-01,30,25,uvb,lid,,maybe',
+    ].join('\n');
+    const r = parseReadingsCsv(csv, lamps);
+    expect(r.rows).toEqual([]);
+    expect(r.errors.map((e) => [e.row, e.field])).toEqual([
+      [2, 'through'],
+      [3, 'through_transmission'],
+      [4, 'through_transmission'],
+      [5, 'through_transmission'],
+      [6, 'warmed_up'],
+    ]);
+    expect(r.errors[2]!.message).toMatch(/no lid set/);
   });
 
   it('reports a file with a header only', () => {

@@ -2,6 +2,7 @@ import Papa from 'papaparse';
 import { z } from 'zod';
 import { MAX_CSV_ROWS } from '@/lib/uploads/limits';
 import { displayToCm } from '@/shared/units';
+import { throughShare, type ReadingThrough, type ReadingWarmedUp } from '@/shared/reading-setup';
 import { readingFields } from './schemas';
 
 /**
@@ -14,10 +15,20 @@ import { readingFields } from './schemas';
  *   distance      number; with distance_unit cm (default) or in — or use a distance_cm / distance_in column
  *   value         the meter value
  *   unit          uvb (µW/cm²) or uvi (UV Index); "µW/cm²", "uW/cm2" and "UV Index" are understood
- *   meter, note   optional text
+ *   meter, note   optional text (meter: the meter's own model or owner, in your words)
+ *   through       optional: what was between lamp and meter — nothing, lid, screen or glass; left out or
+ *                 empty: not recorded (read as the bare lamp)
+ *   through_transmission  optional: share of UVB passing it, 0–1 (the lid: the lamp's own setting when
+ *                 empty; a screen must give it)
+ *   warmed_up     optional: yes or no (the lamp on for several minutes first); empty: not recorded
  */
 
-export type CsvLamp = { id: number; label: string; firstUsedOn: string };
+export type CsvLamp = {
+  id: number;
+  label: string;
+  firstUsedOn: string;
+  baskingTransmission: number | null;
+};
 
 export type CsvRow = {
   row: number;
@@ -27,6 +38,9 @@ export type CsvRow = {
   distanceCm: number;
   value: number;
   unit: 'uvb' | 'uvi';
+  through: ReadingThrough;
+  throughTransmission: number | null;
+  warmedUp: ReadingWarmedUp;
   meter: string | null;
   note: string | null;
 };
@@ -54,6 +68,34 @@ const UNIT_WORDS: Record<string, 'uvb' | 'uvi'> = {
   uv_index: 'uvi',
   'uv index': 'uvi',
   index: 'uvi',
+};
+
+const THROUGH_WORDS: Record<string, ReadingThrough> = {
+  '': 'not-recorded',
+  not_recorded: 'not-recorded',
+  'not recorded': 'not-recorded',
+  'not-recorded': 'not-recorded',
+  nothing: 'nothing',
+  none: 'nothing',
+  bare: 'nothing',
+  lid: 'lid',
+  mesh: 'lid',
+  screen: 'screen',
+  glass: 'glass',
+  acrylic: 'glass',
+};
+
+const WARM_WORDS: Record<string, ReadingWarmedUp> = {
+  '': 'not-recorded',
+  not_recorded: 'not-recorded',
+  'not recorded': 'not-recorded',
+  'not-recorded': 'not-recorded',
+  yes: 'yes',
+  y: 'yes',
+  true: 'yes',
+  no: 'no',
+  n: 'no',
+  false: 'no',
 };
 
 /** A local date-time without an offset, read in the uploader's time zone (minutes as Date#getTimezoneOffset). */
@@ -105,7 +147,7 @@ export function parseReadingsCsv(text: string, lamps: readonly CsvLamp[], tzOffs
     errors.push({
       row: 1,
       field: missing[0]!,
-      message: `The header row lacks the column${missing.length > 1 ? 's' : ''} ${missing.join(', ')}. Expected: lamp, taken_at, distance, distance_unit, value, unit, meter, note.`,
+      message: `The header row lacks the column${missing.length > 1 ? 's' : ''} ${missing.join(', ')}. Expected: lamp, taken_at, distance, distance_unit, value, unit, and optionally through, through_transmission, warmed_up, meter, note.`,
     });
     return { rows, errors, columns };
   }
@@ -167,14 +209,23 @@ export function parseReadingsCsv(text: string, lamps: readonly CsvLamp[], tzOffs
       distanceUnit: ['inch', 'inches', '"'].includes(distanceUnit) ? 'in' : distanceUnit,
       value: number(rec.value),
       unit,
+      through: THROUGH_WORDS[at('through').toLowerCase()] ?? at('through'),
+      throughTransmission: number(rec.through_transmission) ?? null,
+      warmedUp: WARM_WORDS[at('warmed_up').toLowerCase()] ?? at('warmed_up'),
       meter: at('meter') || null,
       note: at('note') || null,
     });
     if (!r.success) {
       for (const issue of r.error.issues) {
         const field = String(issue.path[0] ?? 'row');
-        const column = { takenAt: 'taken_at', distanceUnit: 'distance_unit' }[field] ?? field;
-        const got = column === 'value' || column === 'distance' ? rec[column] : undefined;
+        const column =
+          {
+            takenAt: 'taken_at',
+            distanceUnit: 'distance_unit',
+            throughTransmission: 'through_transmission',
+            warmedUp: 'warmed_up',
+          }[field] ?? field;
+        const got = ['value', 'distance', 'through_transmission'].includes(column) ? rec[column] : undefined;
         fail(
           column,
           got !== undefined && Number.isNaN(number(got)) ? `“${got}” is not a number.` : issue.message,
@@ -186,6 +237,11 @@ export function parseReadingsCsv(text: string, lamps: readonly CsvLamp[], tzOffs
       fail('taken_at', `“${lamp.label}” was first used on ${lamp.firstUsedOn}; this reading is earlier.`);
       return;
     }
+    const share = throughShare(lamp.baskingTransmission, r.data.through, r.data.throughTransmission);
+    if (!share.ok) {
+      fail('through_transmission', share.message);
+      return;
+    }
     rows.push({
       row,
       lampId: lamp.id,
@@ -194,6 +250,9 @@ export function parseReadingsCsv(text: string, lamps: readonly CsvLamp[], tzOffs
       distanceCm: Math.round(displayToCm(r.data.distance, r.data.distanceUnit) * 10) / 10,
       value: r.data.value,
       unit: r.data.unit,
+      through: r.data.through,
+      throughTransmission: share.share,
+      warmedUp: r.data.warmedUp,
       meter: r.data.meter,
       note: r.data.note,
     });

@@ -1,4 +1,5 @@
 import { pointIrradiance, tubeBelowCentre } from '@/simulation';
+import { bareShare, type ReadingSetup } from '@/shared/reading-setup';
 
 /**
  * Readings are taken straight below a lamp at whatever distance the meter fitted; to compare them over
@@ -25,4 +26,30 @@ export function distanceFactor(shape: LampShape, fromCm: number, toCm: number): 
 /** A reading at `distanceCm`, expressed at the reference distance of 30 cm. */
 export function toReference(shape: LampShape, value: number, distanceCm: number): number {
   return value * distanceFactor(shape, distanceCm, REFERENCE_CM);
+}
+
+export type ReadingForReference = { value: number; distanceCm: number } & Partial<ReadingSetup>;
+
+export type Referenced =
+  { ok: true; value: number; transmission: number; assumedBare: boolean } | { ok: false; reason: string };
+
+/**
+ * A reading as the bare lamp would read at 30 cm: divided by the share of UVB passing whatever lay
+ * between lamp and meter, then brought to 30 cm. The one place readings are referenced: the outlook,
+ * the fit, the chart and calibration all go through it, so a lid is taken out exactly once (and the
+ * basking estimate puts it back exactly once). A reading without its set-up is read as a bare lamp.
+ */
+export function toBareReference(shape: LampShape, r: ReadingForReference): Referenced {
+  const share = bareShare({
+    through: r.through ?? 'not-recorded',
+    throughTransmission: r.throughTransmission ?? null,
+    warmedUp: r.warmedUp ?? 'not-recorded',
+  });
+  if (!share.ok) return share;
+  return {
+    ok: true,
+    value: toReference(shape, r.value / share.transmission, r.distanceCm),
+    transmission: share.transmission,
+    assumedBare: share.assumedBare,
+  };
 }

@@ -3,6 +3,7 @@ import type { z } from 'zod';
 import { badRequest } from '@/lib/api';
 import { getSequelize } from '@/lib/db';
 import { Lamp, LampType, Reading, type Enclosure } from '@/models';
+import { throughShare } from '@/shared/reading-setup';
 import { displayToCm } from '@/shared/units';
 import {
   type createLampBody,
@@ -76,6 +77,12 @@ export async function updateLamp(
 
 export type ReadingInput = z.output<typeof createReadingBody>;
 
+function storedShare(lamp: Lamp, r: ReadingInput): number | null {
+  const share = throughShare(lamp.baskingTransmission ?? null, r.through, r.throughTransmission);
+  if (!share.ok) throw badRequest('throughTransmission', share.message);
+  return share.share;
+}
+
 export function readingColumns(lamp: Lamp, r: ReadingInput) {
   if (r.takenAt.toISOString().slice(0, 10) < lamp.firstUsedOn) {
     throw badRequest(
@@ -84,6 +91,9 @@ export function readingColumns(lamp: Lamp, r: ReadingInput) {
     );
   }
   return {
+    through: r.through,
+    throughTransmission: storedShare(lamp, r),
+    warmedUp: r.warmedUp,
     lampId: lamp.id,
     takenAt: r.takenAt,
     distanceCm: round1(displayToCm(r.distance, r.distanceUnit)),
@@ -109,6 +119,14 @@ export async function updateReading(
     distanceUnit: body.distance !== undefined ? (body.distanceUnit ?? 'cm') : 'cm',
     value: body.value ?? reading.value,
     unit: body.unit ?? reading.unit,
+    through: body.through ?? reading.through,
+    throughTransmission:
+      body.throughTransmission !== undefined
+        ? body.throughTransmission
+        : body.through !== undefined && body.through !== reading.through
+          ? null
+          : (reading.throughTransmission ?? null),
+    warmedUp: body.warmedUp ?? reading.warmedUp,
     meter: body.meter !== undefined ? body.meter : (reading.meter ?? null),
     note: body.note !== undefined ? body.note : (reading.note ?? null),
   };

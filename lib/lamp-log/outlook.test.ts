@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { dayNumber, isoDay } from './dates';
 import { distanceFactor } from './geometry';
+import { fitDecay } from './fit';
 import { lampOutlook } from './outlook';
 import { readingsOf, t5Lamp } from '@/tests/fixtures/lamp-log';
 
@@ -76,5 +77,103 @@ describe('lampOutlook', () => {
     const mesh = lampOutlook(t5Lamp({ baskingTransmission: 0.5 }), readings, zone3, '2025-03-01');
     expect((mesh.basking?.valueNow as number) / (bare.basking?.valueNow as number)).toBeCloseTo(0.5, 9);
     expect(dayNumber(mesh.fallsBelowOn as string)).toBeLessThan(dayNumber(bare.fallsBelowOn as string));
+  });
+
+  describe('how a reading was taken', () => {
+    // A lamp behind a fine mesh lid that passes 60 % of its UVB; the basking spot is under the lid too.
+    // The share is our own test value (a 1.0 mm / 0.25 mm wire cloth has an ISO 9044 open area of 0.64).
+    const lidded = t5Lamp({ baskingTransmission: 0.6 });
+    const days = [10, 40, 80, 120, 160, 200];
+    const bare = readingsOf(lidded, at30, days, 20).map((r) => ({ ...r, through: 'nothing' as const }));
+    const throughLid = bare.map((r) => ({
+      ...r,
+      value: r.value * 0.6,
+      through: 'lid' as const,
+      throughTransmission: 0.6,
+    }));
+
+    it('gives the same basking estimate through a lid passing 60 % as for the bare lamp', () => {
+      const a = lampOutlook(lidded, bare, zone3, '2025-07-01');
+      const b = lampOutlook(lidded, throughLid, zone3, '2025-07-01');
+      expect(b.basking?.valueNow).toBeCloseTo(a.basking?.valueNow as number, 9);
+      expect(b.fallsBelowOn).toBe(a.fallsBelowOn);
+      // The lid is applied once, at the basking spot: 60 % of the bare lamp there.
+      const age = dayNumber('2025-07-01') - dayNumber('2025-01-01');
+      const expected = at30(age) * distanceFactor(lidded.type, 30, 15) * 0.6;
+      expect(Math.abs((b.basking?.valueNow as number) / expected - 1)).toBeLessThan(0.03);
+      expect(b.readingNotes).toEqual([]);
+    });
+
+    it('reads a reading without its set-up as the bare lamp, and says so', () => {
+      const old = bare.map(({ through: _t, ...r }) => r);
+      const o = lampOutlook(lidded, old, zone3, '2025-07-01');
+      expect(o.basking?.valueNow).toBeCloseTo(
+        lampOutlook(lidded, bare, zone3, '2025-07-01').basking?.valueNow as number,
+        9,
+      );
+      expect(o.points.every((p) => p.assumedBare)).toBe(true);
+      expect(o.readingNotes[0]).toMatch(
+        /6 readings do not say what was between lamp and meter: taken as the bare lamp/,
+      );
+    });
+
+    it('keeps but does not fit readings through glass of unknown share or of a cold lamp', () => {
+      const extra = [
+        { ...bare[2]!, value: 0.5, through: 'glass' as const, throughTransmission: null },
+        { ...bare[3]!, value: bare[3]!.value * 0.4, warmedUp: 'no' as const },
+      ];
+      const o = lampOutlook(lidded, [...bare, ...extra], zone3, '2025-07-01');
+      expect(o.points.filter((p) => p.use === 'excluded')).toHaveLength(2);
+      expect(o.fit.n).toBe(bare.length);
+      expect(o.basking?.valueNow).toBeCloseTo(
+        lampOutlook(lidded, bare, zone3, '2025-07-01').basking?.valueNow as number,
+        9,
+      );
+      expect(o.readingNotes.join(' ')).toMatch(/through glass of unknown UVB share/);
+      expect(o.readingNotes.join(' ')).toMatch(/before the lamp warmed up/);
+    });
+  });
+
+  describe('burn-in', () => {
+    // 12 hours a day: the first 100 hours (common practice, no published source) end after 8⅓ days.
+    const working = readingsOf(lamp, at30, [20, 60, 100, 140, 180, 220], 20).map((r, i) => ({
+      ...r,
+      // ±3 % meter scatter, so the fit has an uncertainty of its own.
+      value: r.value * (1 + 0.03 * Math.sin(i * 2.1)),
+    }));
+    // A new lamp reads well above its working-life curve (here 30 % above) on its first evening.
+    const firstEvening = readingsOf(lamp, (d) => at30(d) * 1.3, [0.3], 20)[0]!;
+
+    it('leaves the fitted start unchanged within the fit’s own uncertainty', () => {
+      const without = lampOutlook(lamp, working, zone3, '2025-09-01');
+      const withBurnIn = lampOutlook(lamp, [firstEvening, ...working], zone3, '2025-09-01');
+      if (without.fit.kind !== 'exponential' || withBurnIn.fit.kind !== 'exponential')
+        throw new Error('expected exponential fits');
+      expect(Math.abs(withBurnIn.fit.e0 - without.fit.e0)).toBeLessThanOrEqual(without.fit.e0Se as number);
+      expect(withBurnIn.points[0]).toMatchObject({ use: 'burn-in' });
+      expect(withBurnIn.readingNotes).toContain(
+        '1 reading taken during burn-in: shown, not used for the decay.',
+      );
+      // Fitted with the others, the burn-in reading would drag the start upward by more than that.
+      const naive = fitDecay(
+        withBurnIn.points.map((p) => ({ days: p.days, value: p.value })),
+        () => 1,
+      );
+      if (naive.kind !== 'exponential') throw new Error('expected an exponential fit');
+      expect(naive.e0 - without.fit.e0).toBeGreaterThan(without.fit.e0Se as number);
+    });
+
+    it('says when the baseline reading is due, and asks for it after the burn-in', () => {
+      const fresh = lampOutlook(lamp, [firstEvening], zone3, '2025-01-03');
+      expect(fresh.burnIn).toEqual({ baselineOn: '2025-01-10', baselineTaken: false, inBurnIn: true });
+      expect(fresh.testDueOn).toBe('2025-01-10');
+      expect(fresh.reasons).toContain('Burning in: take the baseline reading on or after 2025-01-10.');
+      expect(fresh.fit.note).toMatch(/Only burn-in readings so far/);
+      const later = lampOutlook(lamp, [firstEvening], zone3, '2025-01-12');
+      expect(later.reasons).toContain('The burn-in is over: take the baseline reading now.');
+      // Fewer hours a day make a longer burn-in: 100 hours at 6 hours a day is 17 days.
+      const slow = lampOutlook(t5Lamp({ hoursPerDay: 6 }), [], zone3, '2025-01-03');
+      expect(slow.burnIn.baselineOn).toBe('2025-01-18');
+    });
   });
 });

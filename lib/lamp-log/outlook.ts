@@ -1,8 +1,10 @@
 import type { ReadingUnit } from '@/models/reading';
+import type { ReadingSetup, ReadingThrough } from '@/shared/reading-setup';
+import { baselineDueOn, inBurnIn } from './burn-in';
 import { addDays, dayNumber, DAYS_PER_MONTH, isoDay } from './dates';
 import { defaultDecayFor, type DecaySource } from './decay';
 import { band, firstDayBelow, fitDecay, predict, type DecayFit } from './fit';
-import { distanceFactor, REFERENCE_CM, toReference, type LampShape } from './geometry';
+import { distanceFactor, REFERENCE_CM, toBareReference, toReference, type LampShape } from './geometry';
 import { baskingNeed, type SpeciesNeed } from './need';
 import type { Status } from './status';
 
@@ -31,23 +33,36 @@ export type LampFacts = {
     LampShape & { name: string; uvbAt30: number; uviPerUvb: number; replaceAfterMonths: number | null };
 };
 
+/** One reading; a reading without its set-up (`through`, `warmedUp`) is one that did not record it. */
 export type ReadingFacts = {
   id?: number;
   takenAt: Date | string;
   distanceCm: number;
   value: number;
   unit: ReadingUnit;
-};
+} & Partial<ReadingSetup>;
 
 export { STATUS_LABEL, type Status } from './status';
+
+/**
+ * How a reading enters the fit: `fit` (a working-life reading), `burn-in` (shown, fitted apart: it
+ * would drag the start upward), `excluded` (cannot be brought to the bare lamp; `why` says so).
+ */
+export type PointUse = 'fit' | 'burn-in' | 'excluded';
 
 export type NormalisedPoint = {
   id?: number;
   days: number;
   takenAt: string;
+  /** The bare lamp at 30 cm (an excluded reading: brought to 30 cm only, for the chart). */
   value: number;
   raw: number;
   distanceCm: number;
+  through: ReadingThrough;
+  /** The set-up was not recorded, so the reading was read as a bare lamp. */
+  assumedBare: boolean;
+  use: PointUse;
+  why: string | null;
 };
 
 export type Outlook = {
@@ -57,6 +72,10 @@ export type Outlook = {
   points: NormalisedPoint[];
   fit: DecayFit;
   lastReading: { takenAt: string; value: number; unit: ReadingUnit; distanceCm: number } | null;
+  /** The day the burn-in ends and the baseline reading is due, and whether one has been taken since. */
+  burnIn: { baselineOn: string; baselineTaken: boolean; inBurnIn: boolean };
+  /** What the page should say about how the readings were used (assumed bare, burn-in, excluded). */
+  readingNotes: string[];
   /** Share of the new lamp's output left today (fitted, else the catalogue curve). */
   remainingFraction: number;
   /** Fitted output today at 30 cm, in `unit`; null without readings. */
@@ -97,18 +116,77 @@ export function normalise(
   const start = dayNumber(lamp.firstUsedOn);
   return readings
     .filter((r) => r.unit === unit && r.distanceCm > 0)
-    .map((r) => {
+    .map((r): NormalisedPoint => {
       const takenAt = typeof r.takenAt === 'string' ? r.takenAt : r.takenAt.toISOString();
-      return {
+      const days = dayNumber(r.takenAt) - start;
+      const ref = toBareReference(lamp.type, r);
+      const common = {
         ...(r.id !== undefined ? { id: r.id } : {}),
-        days: dayNumber(r.takenAt) - start,
+        days,
         takenAt,
-        value: toReference(lamp.type, r.value, r.distanceCm),
         raw: r.value,
         distanceCm: r.distanceCm,
+        through: r.through ?? 'not-recorded',
+      };
+      if (!ref.ok) {
+        return {
+          ...common,
+          value: toReference(lamp.type, r.value, r.distanceCm),
+          assumedBare: false,
+          use: 'excluded',
+          why: ref.reason,
+        };
+      }
+      const burnIn = inBurnIn(days, lamp.hoursPerDay);
+      return {
+        ...common,
+        value: ref.value,
+        assumedBare: ref.assumedBare,
+        use: burnIn ? 'burn-in' : 'fit',
+        why: burnIn ? 'taken during burn-in: shown, fitted apart' : null,
       };
     })
     .sort((a, b) => a.days - b.days);
+}
+
+/**
+ * The decay fit of the working-life readings. Burn-in readings are left out (a new lamp reads high and
+ * would lift the fitted start); only while there are no others is the usual curve scaled to them, and
+ * said to be so.
+ */
+function fitPoints(points: readonly NormalisedPoint[], decay: (d: number) => number): DecayFit {
+  const of = (use: PointUse) =>
+    points.filter((p) => p.use === use).map((p) => ({ days: p.days, value: p.value }));
+  const working = of('fit');
+  if (working.length > 0) return fitDecay(working, decay);
+  const burnIn = of('burn-in');
+  if (burnIn.length === 0) return fitDecay([], decay);
+  const fit = fitDecay(burnIn, decay);
+  if (fit.kind === 'none') return fit;
+  return {
+    ...fit,
+    certainty: 'uncertain',
+    note: 'Only burn-in readings so far: the curve is scaled to them and reads high until the baseline reading.',
+  };
+}
+
+function readingNotesOf(points: readonly NormalisedPoint[], unit: ReadingUnit | null): string[] {
+  const notes: string[] = [];
+  const count = (n: number) => `${n} reading${n === 1 ? '' : 's'}`;
+  const assumed = points.filter((p) => p.use !== 'excluded' && p.assumedBare).length;
+  if (assumed > 0) {
+    notes.push(
+      `${count(assumed)} ${assumed === 1 ? 'does' : 'do'} not say what was between lamp and meter: taken as the bare lamp. If ${assumed === 1 ? 'it was' : 'they were'} measured through the lid, the lamp is stronger than shown — record the set-up before moving the lamp closer.`,
+    );
+  }
+  const burnIn = points.filter((p) => p.use === 'burn-in').length;
+  if (burnIn > 0) notes.push(`${count(burnIn)} taken during burn-in: shown, not used for the decay.`);
+  for (const p of points.filter((q) => q.use === 'excluded')) {
+    notes.push(`The reading of ${p.takenAt.slice(0, 10)} was ${p.why}.`);
+  }
+  if (unit && points.length > 0 && points.every((p) => p.use === 'excluded'))
+    notes.push('No reading can be used for the decay yet.');
+  return notes;
 }
 
 /** Whole days a lamp has been in use by `today` (up to its retirement). */
@@ -130,10 +208,14 @@ export function lampOutlook(
   const decay = defaultDecayFor(lamp.type, lamp.hoursPerDay);
   const unit = mainUnit(readings);
   const points = unit ? normalise(lamp, readings, unit) : [];
-  const fit = fitDecay(
-    points.map((p) => ({ days: p.days, value: p.value })),
-    decay,
-  );
+  const fit = fitPoints(points, decay);
+  const baselineOn = baselineDueOn(lamp.firstUsedOn, lamp.hoursPerDay);
+  const burnIn = {
+    baselineOn,
+    baselineTaken: points.some((p) => p.use === 'fit'),
+    inBurnIn: lampAgeDays(lamp, today) < dayNumber(baselineOn) - start,
+  };
+  const readingNotes = readingNotesOf(points, unit);
   const latest = [...readings].sort((a, b) => dayNumber(b.takenAt) - dayNumber(a.takenAt))[0];
   const lastReading = latest
     ? {
@@ -148,7 +230,18 @@ export function lampOutlook(
   const atStart = curve(0);
   const remainingFraction = nowAt30 !== null && atStart ? nowAt30 / atStart : decay(ageDays);
 
-  const base = { ageDays, ageMonths, unit, points, fit, lastReading, remainingFraction, nowAt30 };
+  const base = {
+    ageDays,
+    ageMonths,
+    unit,
+    points,
+    fit,
+    lastReading,
+    remainingFraction,
+    nowAt30,
+    burnIn,
+    readingNotes,
+  };
   const reasons: string[] = [];
   const missing: string[] = [];
 
@@ -183,10 +276,11 @@ export function lampOutlook(
     };
   }
 
-  // Test schedule: a first reading when new, then every few months.
-  const testDueOn = lastReading
-    ? addDays(isoDay(dayNumber(lastReading.takenAt)), TEST_INTERVAL_DAYS)
-    : lamp.firstUsedOn;
+  // Test schedule: the baseline once the burn-in is over, then every few months.
+  const testDueOn =
+    lastReading && burnIn.baselineTaken
+      ? addDays(isoDay(dayNumber(lastReading.takenAt)), TEST_INTERVAL_DAYS)
+      : baselineOn;
 
   // Basking zone: the fitted 30 cm output brought to the basking distance, through whatever lies between.
   let basking: Outlook['basking'] = null;
@@ -241,7 +335,13 @@ export function lampOutlook(
   if (status === 'fine') {
     if (testDueOn <= soon) {
       status = 'test-soon';
-      reasons.push(lastReading ? `A new reading is due on ${testDueOn}.` : 'No reading yet: measure it.');
+      reasons.push(
+        burnIn.baselineTaken
+          ? `A new reading is due on ${testDueOn}.`
+          : testDueOn > today
+            ? `Burning in: take the baseline reading on or after ${testDueOn}.`
+            : 'The burn-in is over: take the baseline reading now.',
+      );
     } else if (fallsBelowEarliestOn && fallsBelowEarliestOn <= isoDay(dayNumber(today) + 60)) {
       status = 'test-soon';
       reasons.push(

@@ -2,6 +2,7 @@ import 'server-only';
 import { z } from 'zod';
 import { idSchema, textSchema } from '@/lib/api/schemas';
 import { READING_UNITS } from '@/models/reading';
+import { READING_THROUGH, READING_WARMED_UP } from '@/shared/reading-setup';
 import { LENGTH_UNITS } from '@/shared/units';
 
 /** Request shapes of the lamp log routes and forms, with messages a person can act on. */
@@ -82,14 +83,40 @@ export const readingFields = {
     .number({ error: 'Enter the meter value.' })
     .min(0, 'A meter value cannot be negative.')
     .max(100000, 'That meter value is too large.'),
+  /** The meter kind: a broadband UVB meter reads µW/cm² (`uvb`), a UV Index meter UVI (`uvi`). */
   unit: z.enum(READING_UNITS, { error: 'The unit must be uvb (µW/cm²) or uvi (UV Index).' }),
+  /** What lay between lamp and meter; left out: not recorded (read as the bare lamp). */
+  through: z
+    .enum(READING_THROUGH, {
+      error: 'What was between lamp and meter must be nothing, lid, screen, glass or not-recorded.',
+    })
+    .default('not-recorded'),
+  /** Share of UVB passing it (0–1]; for the lid, the lamp's own setting when left out. */
+  throughTransmission: z
+    .number({ error: 'The share of UVB passing must be a number.' })
+    .gt(0, 'The share of UVB passing must be more than 0.')
+    .max(1, 'The share of UVB passing is at most 1.')
+    .nullish()
+    .transform((v) => v ?? null),
+  warmedUp: z
+    .enum(READING_WARMED_UP, { error: 'Warmed up must be yes, no or not-recorded.' })
+    .default('not-recorded'),
   meter: text(160),
   note: text(2000),
 };
 
 export const createReadingBody = z.strictObject(readingFields);
 export const updateReadingBody = z
-  .strictObject(readingFields)
+  .strictObject({
+    ...readingFields,
+    // A correction changes only what it names: no defaults here.
+    through: z
+      .enum(READING_THROUGH, {
+        error: 'What was between lamp and meter must be nothing, lid, screen, glass or not-recorded.',
+      })
+      .optional(),
+    warmedUp: z.enum(READING_WARMED_UP, { error: 'Warmed up must be yes, no or not-recorded.' }).optional(),
+  })
   .partial()
   .refine((b) => Object.keys(b).filter((k) => k !== 'distanceUnit').length > 0, {
     message: 'Send at least one field to change.',

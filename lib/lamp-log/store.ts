@@ -18,6 +18,7 @@ import {
   type ReadingFacts,
 } from './outlook';
 import type { SpeciesNeed } from './need';
+import type { ReadingThrough, ReadingWarmedUp } from '@/shared/reading-setup';
 
 /** Database access and JSON views of the lamp log. Callers check permissions first (access.ts). */
 
@@ -50,6 +51,9 @@ export const readingFacts = (r: Reading): ReadingFacts => ({
   distanceCm: r.distanceCm,
   value: r.value,
   unit: r.unit,
+  through: r.through,
+  throughTransmission: r.throughTransmission ?? null,
+  warmedUp: r.warmedUp,
 });
 
 export type SpeciesMatch =
@@ -160,6 +164,8 @@ export function outlookJson(species: SpeciesMatch, o: Outlook) {
       : null,
     unit: o.unit,
     lastReading: o.lastReading,
+    burnIn: o.burnIn,
+    readingNotes: o.readingNotes,
     remainingFraction: o.remainingFraction,
     nowAt30: o.nowAt30,
     basking: o.basking,
@@ -304,6 +310,9 @@ export function readingJson(r: Reading & { takenBy?: User | null }) {
     distanceCm: r.distanceCm,
     value: r.value,
     unit: r.unit,
+    through: r.through as ReadingThrough,
+    throughTransmission: r.throughTransmission ?? null,
+    warmedUp: r.warmedUp as ReadingWarmedUp,
     meter: r.meter ?? null,
     note: r.note ?? null,
     takenById: r.takenById,

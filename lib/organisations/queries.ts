@@ -49,3 +49,9 @@ export async function organisationName(id: number): Promise<string | null> {
   getSequelize();
   return (await Organisation.findByPk(id, { attributes: ['name'] }))?.name ?? null;
 }
+
+/** Whether the organisation holds invented example data (the demo), which every view of it must say. */
+export async function isExampleData(id: number): Promise<boolean> {
+  getSequelize();
+  return (await Organisation.findByPk(id, { attributes: ['exampleData'] }))?.exampleData ?? false;
+}

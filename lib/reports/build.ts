@@ -18,6 +18,8 @@ export type ReportSubject = {
   designName: string;
   enclosureName: string;
   organisationName: string;
+  /** The organisation's data is invented (the demo): the report says so at the top. */
+  exampleData?: boolean;
   design: Design;
 };
 
@@ -46,6 +48,7 @@ export async function reportPdf(
     enclosureName: subject.enclosureName,
     enclosureSize: subject.design.enclosure,
     organisationName: subject.organisationName,
+    exampleData: subject.exampleData ?? false,
     version: subject.version,
     generatedAt: now,
     months: opts.months,

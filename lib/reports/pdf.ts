@@ -11,6 +11,7 @@ import type { KeyFigures } from '@/shared/designs/figures';
 import { bandLabel, type FieldScale } from '@/shared/field-scale';
 import { applicableCautions } from '@/shared/cautions';
 import type { Design } from '@/simulation';
+import { EXAMPLE_DATA_NOTE } from '@/shared/example-data';
 import { DEFER_NOTE, ESTIMATE_NOTE } from './cautions';
 import type { LampRow } from './lamps';
 import { winAnsi, wrap } from './pdf-text';
@@ -29,6 +30,7 @@ export type ReportInput = {
   enclosureName: string;
   enclosureSize: { width: number; height: number; depth: number };
   organisationName: string;
+  exampleData?: boolean;
   version: number;
   generatedAt: Date;
   months: number;
@@ -146,7 +148,9 @@ export async function renderReportPdf(r: ReportInput): Promise<Uint8Array> {
 
   w.text('Baskwell — light and heat report', { size: 9, color: MUTED, gap: 6 });
   w.text(r.variantName, { size: 20, bold: true, gap: 4 });
-  w.text(ESTIMATE_NOTE, { size: 9, color: STATUS_COLOR.attention, gap: 8 });
+  w.text(ESTIMATE_NOTE, { size: 9, color: STATUS_COLOR.attention, gap: r.exampleData ? 4 : 8 });
+  if (r.exampleData)
+    w.text(EXAMPLE_DATA_NOTE, { size: 10, bold: true, color: STATUS_COLOR.attention, gap: 8 });
   w.rows([
     ['Design', r.designName],
     ['Variant', `${r.variantName} (version ${r.version})`],

@@ -54,6 +54,8 @@ export type PublicShare = {
   designName: string;
   enclosureName: string;
   organisationName: string;
+  /** The organisation's data is invented example data (the demo). */
+  exampleData: boolean;
   speciesName: string | null;
   organisationId: number;
   design: ReturnType<typeof readStoredDesign>;
@@ -82,7 +84,7 @@ export async function resolveShareToken(token: string, now = new Date()): Promis
             model: Enclosure,
             as: 'enclosure',
             required: true,
-            include: [{ model: Organisation, as: 'organisation', attributes: ['id', 'name'] }],
+            include: [{ model: Organisation, as: 'organisation', attributes: ['id', 'name', 'exampleData'] }],
           },
         ],
       },
@@ -100,6 +102,7 @@ export async function resolveShareToken(token: string, now = new Date()): Promis
     designName: variant.design.name,
     enclosureName: enclosure.name,
     organisationName: enclosure.organisation?.name ?? '',
+    exampleData: enclosure.organisation?.exampleData ?? false,
     organisationId: enclosure.organisationId,
     speciesName: enclosure.speciesName ?? null,
     // Without its photo backdrop: a visitor with the link may not read the enclosure's uploads.

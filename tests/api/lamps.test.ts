@@ -173,9 +173,17 @@ describe('readings', () => {
     });
     expect(detail.status).toBe(200);
     expect(detail.body.readings).toHaveLength(4);
-    expect(detail.body.lamp.fit).toMatchObject({ kind: 'exponential', certainty: 'fitted', n: 4 });
+    // The first reading falls in the lamp's first 100 hours (burn-in): shown, fitted apart.
+    expect(detail.body.lamp.fit).toMatchObject({ kind: 'exponential', certainty: 'fitted', n: 3 });
     expect(detail.body.lamp.fit.tauDays).toBeCloseTo(400, 0);
     expect(detail.body.chart.points).toHaveLength(4);
+    expect(detail.body.chart.points.map((p: { use: string }) => p.use)).toEqual([
+      'burn-in',
+      'fit',
+      'fit',
+      'fit',
+    ]);
+    expect(detail.body.lamp.burnIn.baselineTaken).toBe(true);
     expect(detail.body.chart.curve.length).toBeGreaterThan(10);
     // Bearded dragon sheet: 115 µW/cm² at the basking spot, its UV zone 4's basking UV Index 4.5
     // (Ferguson et al. 2010, Zoo Biology 29:317–334) at 0.04 UV Index per µW/cm² (from memory).
@@ -197,6 +205,45 @@ describe('readings', () => {
     expect(negative.status).toBe(400);
     expect(negative.body.error.field).toBe('value');
     expect(await Reading.count()).toBe(0);
+  });
+
+  it('records how a reading was taken, takes the lid’s share from the lamp, and names the field it refuses', async () => {
+    const w = await world();
+    const lamp = await addLamp(w, { baskingTransmission: 0.6 });
+    const base = { takenAt: '2025-02-01T10:00:00Z', distance: 30, value: 24, unit: 'uvb' };
+    const lid = await addReading(w, lamp.id, { ...base, through: 'lid', warmedUp: 'yes' });
+    expect(lid.status, lid.text).toBe(201);
+    expect(lid.body.reading).toMatchObject({ through: 'lid', throughTransmission: 0.6, warmedUp: 'yes' });
+    const old = await addReading(w, lamp.id, base);
+    expect(old.body.reading).toMatchObject({
+      through: 'not-recorded',
+      throughTransmission: null,
+      warmedUp: 'not-recorded',
+    });
+    const screen = await addReading(w, lamp.id, { ...base, through: 'screen' });
+    expect(screen.status).toBe(400);
+    expect(screen.body.error.field).toBe('throughTransmission');
+    const odd = await addReading(w, lamp.id, { ...base, through: 'window' });
+    expect(odd.status).toBe(400);
+    expect(odd.body.error.field).toBe('through');
+    const warm = await addReading(w, lamp.id, { ...base, warmedUp: 'maybe' });
+    expect(warm.body.error.field).toBe('warmedUp');
+    // A correction of the set-up alone: the share goes with what it belonged to.
+    const id = lid.body.reading.id;
+    const fix = await call(readingRoute.PATCH, {
+      method: 'PATCH',
+      path: `/api/readings/${id}`,
+      params: { id },
+      as: w.keeper,
+      body: { through: 'nothing' },
+    });
+    expect(fix.status, fix.text).toBe(200);
+    const stored = await Reading.findByPk(id);
+    expect([stored?.through, stored?.throughTransmission, stored?.warmedUp]).toEqual([
+      'nothing',
+      null,
+      'yes',
+    ]);
   });
 
   it('corrects and deletes a reading; another keeper cannot', async () => {

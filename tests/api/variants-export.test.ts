@@ -5,6 +5,8 @@ import * as enclosureDesignsRoute from '@/app/api/enclosures/[id]/designs/route'
 import * as exportRoute from '@/app/api/variants/[id]/export/route';
 import * as variantRoute from '@/app/api/variants/[id]/route';
 import { ensureStartingCatalogue } from '@/lib/species/seed';
+import { Organisation } from '@/models';
+import { EXAMPLE_DATA_NOTE } from '@/shared/example-data';
 import {
   createEnclosure,
   createMember,
@@ -144,6 +146,17 @@ describe('export', () => {
     expect(text).toMatch(/by a timer\s+only/);
     expect(text).not.toMatch(/Run every heat source on a thermostat/);
     expect(text).toMatch(/Hot spot \(warmest surface\)\s+[\d.]+ °C \([\d.]+ °F\)/);
+  });
+
+  it('marks the report of an example-data organisation (the demo) as invented, and no other', async () => {
+    const real = await world(null);
+    expect(
+      pdfDrawnText(new Uint8Array(await (await exportAs(real, 'format=pdf')).res.arrayBuffer())),
+    ).not.toContain('Example data');
+    await Organisation.update({ exampleData: true }, { where: { id: real.enclosure.organisationId } });
+    const text = pdfDrawnText(new Uint8Array(await (await exportAs(real, 'format=pdf')).res.arrayBuffer()));
+    // The note's first words, on its first line (a long note wraps).
+    expect(text).toContain(EXAMPLE_DATA_NOTE.slice(0, 44));
   });
 
   it('includes the assessment when the enclosure’s species has a sheet', async () => {

@@ -233,6 +233,8 @@ describe('staff journey', () => {
         await readingForm.getByLabel('Taken at').fill(localDateTime(daysAgo));
         await readingForm.getByLabel(/Distance below the lamp/).fill('30');
         await readingForm.getByLabel('Meter value').fill(String(value));
+        await readingForm.getByLabel('Between lamp and meter').selectOption('nothing');
+        await readingForm.getByLabel('Lamp warmed up').selectOption('yes');
         await readingForm.getByRole('button', { name: 'Add reading' }).click();
         await expect.poll(() => points.count(), eventually).toBe(before + 1);
       }

@@ -23,6 +23,8 @@ describe('lamp log', () => {
     await table.waitFor();
     await expect.poll(() => table.locator('tbody tr').count(), { timeout: 10_000 }).toBeGreaterThanOrEqual(3);
     await expect.poll(() => table.innerText()).toContain('Basking tube');
+    // The demo's lamps and readings are invented, and the pages say so.
+    expect(await page.getByTestId('example-data').innerText()).toMatch(/^Example data: invented/);
     await screenshot(page, 'lamp-log-table');
 
     await page.getByRole('link', { name: 'Basking tube' }).click();
@@ -35,6 +37,10 @@ describe('lamp log', () => {
     );
     expect(await page.getByTestId('fit-band').count()).toBe(1);
     await expect.poll(() => chart.innerText()).toContain('Fitted decay');
+    expect(await page.getByTestId('example-data').count()).toBe(2);
+    // The tube's first-evening readings are its burn-in: drawn apart, and the outlook says so.
+    expect(await chart.innerText()).toContain('During burn-in (fitted apart)');
+    expect(await page.getByText(/taken during burn-in: shown, not used for the decay/).count()).toBe(1);
     await screenshot(page, 'lamp-log-chart');
 
     // At laptop width (the harness opens 1280 × 800) the readings fit their column, the delete
@@ -58,10 +64,16 @@ describe('lamp log', () => {
     await page.getByRole('button', { name: 'in', exact: true }).click();
     await page.getByLabel('Distance below the lamp (in)').fill('12');
     await page.getByLabel('Meter value').fill('24.5');
+    // The set-up of the last reading is offered again; this one was through the lid.
+    expect(await page.getByLabel('Between lamp and meter').inputValue()).toBe('nothing');
+    expect(await page.getByLabel('Lamp warmed up').inputValue()).toBe('yes');
+    await page.getByLabel('Between lamp and meter').selectOption('lid');
+    await page.getByLabel('Share of UVB it passes (0–1)').fill('0.6');
     await page.getByRole('button', { name: 'Add reading' }).click();
     await expect.poll(() => points.count(), { timeout: 60_000 }).toBe(before + 1);
     const newest = page.getByTestId('readings-table').locator('tbody tr').first();
     await expect.poll(() => newest.innerText(), { timeout: 10_000 }).toMatch(/24\.5 µW\/cm².*12 in/s);
+    expect(await newest.getByTestId('reading-setup').innerText()).toBe('through the lid (60 %), warmed up');
     expect(session.pageErrors()).toEqual([]);
   });
 

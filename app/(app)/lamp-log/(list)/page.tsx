@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import Link from '@/components/ui/Link';
 import { QueryProvider } from '@/components/designs/QueryProvider';
+import { ExampleDataMark } from '@/components/lamp-log/ExampleDataMark';
 import { LampLogTable } from '@/components/lamp-log/LampLogTable';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { Notice } from '@/components/ui/Notice';
@@ -10,6 +11,7 @@ import { button, link } from '@/components/ui/styles';
 import { filteredEnclosure, lampListQuery, listLamps } from '@/lib/api/lamp-list';
 import { memberViews } from '@/lib/api/views';
 import { lampListView } from '@/lib/lamp-log/list-view';
+import { isExampleData } from '@/lib/organisations/queries';
 import { toSearchParams } from '@/lib/list-view';
 import { can, roleIn } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
@@ -46,6 +48,7 @@ export default async function LampLogPage({
     query.enclosure ? filteredEnclosure(orgId, query.enclosure, isKeeper ? user.id : undefined) : null,
   ]);
   const { counts } = firstPage;
+  const example = await isExampleData(orgId);
   const techs = LAMP_TECH_IDS.map((id) => ({ id, label: LAMP_TECHS[id].label }));
   const unfiltered = !view.q && Object.keys(view.filters ?? {}).length === 0;
 
@@ -56,6 +59,7 @@ export default async function LampLogPage({
         lead="The lamps in use in each enclosure, their age, the latest meter reading, the fitted decline, and when the basking zone will fall below the species' need."
         actions={<UnitToggle />}
       />
+      {example && <ExampleDataMark />}
       {firstPage.total === 0 && unfiltered && counts.pending === 0 ? (
         <EmptyState
           title="No lamps in use"

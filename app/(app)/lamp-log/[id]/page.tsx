@@ -2,6 +2,7 @@ import type { Metadata } from 'next';
 import Link from '@/components/ui/Link';
 import { notFound } from 'next/navigation';
 import { CalibrationPanel } from '@/components/lamp-log/CalibrationPanel';
+import { ExampleDataMark } from '@/components/lamp-log/ExampleDataMark';
 import { DecayChart } from '@/components/lamp-log/DecayChart';
 import { LampFacts } from '@/components/lamp-log/LampFacts';
 import { LampSettings } from '@/components/lamp-log/LampSettings';
@@ -11,9 +12,13 @@ import { StatusBadge } from '@/components/lamp-log/StatusBadge';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { card, link } from '@/components/ui/styles';
+import { formatDay } from '@/components/lamp-log/format';
+import { BURN_IN_HOURS } from '@/lib/lamp-log/burn-in';
 import { todayIso } from '@/lib/lamp-log/dates';
+import { WARM_UP_MINUTES } from '@/shared/reading-setup';
 import { lampForPage } from '@/lib/lamp-log/access';
 import { designLampsOf } from '@/lib/lamp-log/design-lamps';
+import { isExampleData } from '@/lib/organisations/queries';
 import { lampDetail } from '@/lib/lamp-log/store';
 import { can } from '@/lib/permissions';
 import { parseId } from '@/lib/api/schemas';
@@ -33,8 +38,11 @@ export default async function LampPage({ params }: { params: Promise<{ id: strin
   const { lamp, canEdit, resource } = found;
   const detail = await lampDetail(lamp, todayIso());
   const designLamps = await designLampsOf(lamp.enclosureId);
+  const example = await isExampleData(resource.organisationId);
   const s = detail.lamp;
   const lastMeter = [...detail.readings].reverse().find((r) => r.meter)?.meter ?? null;
+  const lastSetUp = [...detail.readings].reverse().find((r) => r.through !== 'not-recorded');
+  const lastWarm = [...detail.readings].reverse().find((r) => r.warmedUp !== 'not-recorded');
 
   return (
     <>
@@ -60,6 +68,7 @@ export default async function LampPage({ params }: { params: Promise<{ id: strin
         lead={
           <>
             {s.lampType.name} · <StatusBadge status={s.status} label={s.statusLabel} />
+            {example && <ExampleDataMark compact />}
           </>
         }
         actions={<UnitToggle />}
@@ -78,8 +87,12 @@ export default async function LampPage({ params }: { params: Promise<{ id: strin
             />
           ) : (
             <p className="rounded-lg border border-dashed border-basalt-300 bg-basalt-50 p-6 text-body text-basalt-600">
-              No readings yet. Measure the lamp straight below it with a UVB or UV Index meter and add the
-              value here; a first reading when the lamp is new is the most useful one.
+              No readings yet. Measure the lamp straight below it with a UVB or UV Index meter, after it has
+              been on for at least {WARM_UP_MINUTES} minutes, and say what was between lamp and meter. A new
+              lamp is burning in until {formatDay(s.burnIn.baselineOn)} (its first {BURN_IN_HOURS} hours at{' '}
+              {s.hoursPerDay} h a day): the baseline reading is due then. A reading before that shows the lamp
+              at its strongest, so it is worth checking the basking spot is not too strong, but it is fitted
+              apart.
             </p>
           )}
         </section>
@@ -91,11 +104,21 @@ export default async function LampPage({ params }: { params: Promise<{ id: strin
           <h2 id="readings" className="text-lead font-semibold">
             Readings
           </h2>
+          {example && <ExampleDataMark />}
           <ReadingsTable readings={detail.readings} canEdit={canEdit} />
           {canEdit && s.status !== 'retired' && (
             <div className={`${card} p-4`}>
               <h3 className="mb-3 font-semibold">Add a reading</h3>
-              <ReadingForm lampId={s.id} lastMeter={lastMeter} />
+              <ReadingForm
+                lampId={s.id}
+                lastMeter={lastMeter}
+                lidShare={s.baskingTransmission}
+                last={{
+                  through: lastSetUp && lastSetUp.through !== 'not-recorded' ? lastSetUp.through : null,
+                  throughTransmission: lastSetUp?.throughTransmission ?? null,
+                  warmedUp: lastWarm && lastWarm.warmedUp !== 'not-recorded' ? lastWarm.warmedUp : null,
+                }}
+              />
             </div>
           )}
         </section>

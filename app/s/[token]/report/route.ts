@@ -35,6 +35,7 @@ export async function GET(req: Request, ctx: { params: Promise<{ token: string }
       designName: shared.designName,
       enclosureName: shared.enclosureName,
       organisationName: shared.organisationName,
+      exampleData: shared.exampleData,
       design: shared.design,
     };
     const base = fileBase(shared.variant.name);

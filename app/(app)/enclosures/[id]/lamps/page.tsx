@@ -4,6 +4,7 @@ import { notFound } from 'next/navigation';
 import { AddLampForm } from '@/components/lamp-log/AddLampForm';
 import { BackdropPanel } from '@/components/lamp-log/BackdropPanel';
 import { CsvImport } from '@/components/lamp-log/CsvImport';
+import { ExampleDataMark } from '@/components/lamp-log/ExampleDataMark';
 import { LampTable } from '@/components/lamp-log/LampTable';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { PageHeader } from '@/components/ui/PageHeader';
@@ -13,6 +14,7 @@ import { allLampTypes } from '@/lib/lamp-types/store';
 import { todayIso } from '@/lib/lamp-log/dates';
 import { enclosureForLampsPage } from '@/lib/lamp-log/access';
 import { designLampsOf } from '@/lib/lamp-log/design-lamps';
+import { isExampleData } from '@/lib/organisations/queries';
 import { summarise } from '@/lib/lamp-log/outlook-store';
 import { lampsOfEnclosure } from '@/lib/lamp-log/store';
 import { backdropsOf, uploadJson } from '@/lib/uploads/service';
@@ -31,11 +33,12 @@ export default async function EnclosureLampsPage({ params }: { params: Promise<{
   if (!found) notFound();
   const { enclosure, canEdit } = found;
   await ensureStartingCatalogue(enclosure.organisationId);
-  const [rows, lampTypes, designLamps, backdrops] = await Promise.all([
+  const [rows, lampTypes, designLamps, backdrops, example] = await Promise.all([
     lampsOfEnclosure(enclosure.id, { limit: 200 }),
     allLampTypes(enclosure.organisationId),
     designLampsOf(enclosure.id),
     backdropsOf(enclosure.id, 12),
+    isExampleData(enclosure.organisationId),
   ]);
   const lamps = await summarise(rows, todayIso());
   const active = lamps.filter((l) => l.status !== 'retired');
@@ -69,6 +72,7 @@ export default async function EnclosureLampsPage({ params }: { params: Promise<{
         }
         actions={<UnitToggle />}
       />
+      {example && <ExampleDataMark />}
       <div className="space-y-8">
         {active.length > 0 ? (
           <LampTable lamps={active} showEnclosure={false} />

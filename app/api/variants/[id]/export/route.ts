@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { notFound, route } from '@/lib/api';
 import { runEngineTask } from '@/lib/engine-pool';
-import { organisationName } from '@/lib/organisations/queries';
+import { isExampleData, organisationName } from '@/lib/organisations/queries';
 import { download, fileBase } from '@/lib/reports/build';
 import { countExport, EXPORT_MONTHS } from '@/lib/reports/limits';
 import { findSheet } from '@/lib/species/store';
@@ -75,7 +75,11 @@ export const GET = route({
     const pdf = await runEngineTask(
       'reportPdf',
       {
-        subject: { ...subject, organisationName: organisation ?? '' },
+        subject: {
+          ...subject,
+          organisationName: organisation ?? '',
+          exampleData: await isExampleData(enclosure.organisationId),
+        },
         options: { field: query.field, months: query.months, species },
         now: new Date(),
       },
