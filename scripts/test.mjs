@@ -1,21 +1,25 @@
 #!/usr/bin/env node
-// `npm test`: from a fresh clone, every check the project has, in order:
-//   prettier --check, eslint, tsc (run side by side), vitest (unit + integration, on the test database),
-//   then browser journeys (tests/browser/*.browser.ts) in Chromium against a production build of the app.
-// It brings up what they need (npm and Debian packages, the private MariaDB with a freshly recreated
-// test database, a fake SMTP server on its own ports) and stops what it started at the end.
+// `npm test`: from a fresh clone, every check the project has, in two lanes side by side:
+//   checks:  prettier --check, eslint, tsc, and vitest's unit files (all in parallel, at low priority),
+//            with vitest's database files one at a time on the test database;
+//   browser: `next build` at once, the demo seed in a database of its own, then the browser journeys
+//            (tests/browser/*.browser.ts) in Chromium against that production build.
+// It brings up what they need (npm and Debian packages, the private MariaDB with freshly recreated
+// test databases, fake SMTP and S3 servers on their own ports for each lane) and stops what it started
+// at the end. The summary prints each stage's time and the whole run's wall clock.
 // It can run while `npm start` serves in the same folder: other ports, another database, another build
 // folder (.next/test-build), the same MariaDB.
 //
 //   npm test                         everything
 //   npm test -- lib/demo tests/api   only vitest, only files matching these filters
 //   npm test -- --only=vitest,browser   --skip=eslint   --bail (stop at the first failing step)
-import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import os from 'node:os';
 import path from 'node:path';
 import { ROOT, loadEnv, urlPort, usesPrivateDb } from './lib/env.mjs';
 import { ensureApt, ensureNodeModules } from './lib/packages.mjs';
-import { bin, bold, duration, freePort, green, log, red, run, yellow } from './lib/proc.mjs';
-import { recreateDatabase } from './lib/mariadb.mjs';
+import { bin, bold, dim, duration, freePort, green, log, red, run, yellow } from './lib/proc.mjs';
+import { ensureDatabases, recreateDatabase } from './lib/mariadb.mjs';
 import { Lifecycle, migrate, prepareDatabase, seed, startMail, startNext, startS3 } from './lib/stack.mjs';
 
 const CHECKS = ['prettier', 'eslint', 'tsc', 'vitest', 'browser'];
@@ -47,6 +51,7 @@ const life = new Lifecycle();
 life.handleSignals(130);
 const steps = [];
 let failed = false;
+const startedAt = Date.now();
 
 /** Runs one named step, timing it. Infrastructure steps (critical) end the run when they fail. */
 async function step(name, fn, { critical = false } = {}) {
@@ -85,7 +90,18 @@ function summary() {
   }
   for (const name of CHECKS.filter((c) => !wanted(c)))
     console.log(`  ${yellow('-')} ${name.padEnd(28)}   skipped`);
-  const counts = ['vitest.json', 'browser.json']
+  // Stages overlap (two lanes), so the wall clock is less than their sum; the machine's load says how
+  // much of it was ours.
+  console.log(`  ${' '} ${'total (wall clock)'.padEnd(28)} ${duration(Date.now() - startedAt).padStart(9)}`);
+  console.log(
+    dim(
+      `  ${os.cpus().length} CPUs, load average ${os
+        .loadavg()
+        .map((l) => l.toFixed(2))
+        .join(' ')} (1/5/15 min)`,
+    ),
+  );
+  const counts = ['vitest-unit.json', 'vitest-db.json', 'browser.json']
     .map((f) => readCounts(path.join(RESULTS_DIR, f)))
     .filter(Boolean);
   if (counts.length) {
@@ -102,17 +118,24 @@ function summary() {
 }
 
 /** Runs a command with its output held back, then shown whole (so parallel checks do not interleave). */
-async function quietCheck(name, cmd, args, runEnv) {
+async function quietCheck(name, cmd, args, runEnv, tail = 5) {
   const t0 = Date.now();
   const r = await run(cmd, args, { env: runEnv, capture: true, check: false });
   const out = `${r.stdout}${r.stderr}`.trim();
   const ok = r.code === 0;
   console.log(`\n${bold(`▶ ${name}`)} ${ok ? green('passed') : red('FAILED')} ${duration(Date.now() - t0)}`);
-  if (out) console.log(ok ? out.split('\n').slice(-5).join('\n') : out);
+  if (out) console.log(ok ? out.split('\n').slice(-tail).join('\n') : out);
   steps.push({ name, ok, ms: Date.now() - t0 });
   if (!ok) failed = true;
   return ok;
 }
+
+/** The test database of the browser journeys: beside the vitest one, so the two stages can overlap. */
+const browserDbName = (testDb) => testDb.replace(/_test$/, '_browser_test');
+
+// The browser stage's own fake mail and S3 servers (vitest's tests empty theirs whenever they like):
+// this far above the vitest ones, or the next free port.
+const BROWSER_PORT_OFFSET = 1000;
 
 async function main() {
   const testDb = env.TEST_DB_NAME;
@@ -121,15 +144,26 @@ async function main() {
   }
   rmSync(RESULTS_DIR, { recursive: true, force: true });
   mkdirSync(RESULTS_DIR, { recursive: true });
-  const needDb = wanted('vitest') || wanted('browser');
+  const runVitest = wanted('vitest');
+  const runBrowser = wanted('browser');
+  const needDb = runVitest || runBrowser;
+  // With our own MariaDB the browser journeys get a database of their own and run beside vitest; an
+  // external server's databases cannot be created from here, so they then share the test database and
+  // wait for vitest, as one stage after the other.
+  const overlap = usesPrivateDb(env);
+  const browserDb = overlap ? browserDbName(testDb) : testDb;
 
   await step('npm packages', () => ensureNodeModules(), { critical: true });
 
   // Test ports: the documented defaults, or the next free ones (a second run or npm start may hold them).
+  // Each is chosen above the one before, so that no two servers of this run are given the same port.
   const smtpPort = await freePort(Number(env.TEST_SMTP_PORT));
   const mailHttpPort = await freePort(urlPort(env.TEST_FAKE_SMTP_HTTP), '127.0.0.1');
   const appPort = await freePort(Number(env.TEST_PORT));
   const s3Port = await freePort(urlPort(env.TEST_S3_ENDPOINT));
+  const browserSmtpPort = await freePort(smtpPort + BROWSER_PORT_OFFSET);
+  const browserMailHttpPort = await freePort(mailHttpPort + BROWSER_PORT_OFFSET, '127.0.0.1');
+  const browserS3Port = await freePort(s3Port + BROWSER_PORT_OFFSET);
   const appUrl = `http://localhost:${appPort}`;
   const testEnv = {
     ...env,
@@ -148,28 +182,62 @@ async function main() {
     S3_BUCKET: env.TEST_S3_BUCKET,
     S3_DIR: path.join(ROOT, '.data', 's3-test'),
   };
+  // A build folder of its own, so a running `npm start` keeps serving its build.
+  const browserEnv = {
+    ...testEnv,
+    NEXT_DIST_DIR: '.next/test-build',
+    // The tsc step checks the types beside the build (and fails the run if they are wrong).
+    NEXT_SKIP_TYPECHECK: wanted('tsc') ? '1' : '0',
+    ...(overlap
+      ? {
+          DB_NAME: browserDb,
+          SMTP_PORT: String(browserSmtpPort),
+          FAKE_SMTP_HTTP: `http://127.0.0.1:${browserMailHttpPort}`,
+          S3_ENDPOINT: `http://127.0.0.1:${browserS3Port}`,
+          S3_DIR: path.join(ROOT, '.data', 's3-browser-test'),
+        }
+      : {}),
+  };
 
-  let chromium = null;
   if (needDb) {
-    await step('database (private MariaDB)', () => prepareDatabase(life, env, { recreate: [testDb] }), {
-      critical: true,
-    });
-  }
-  if (wanted('browser')) {
-    // Installed in the background while the other checks run; awaited before the browser step.
-    chromium = ensureApt({ chromium: ['chromium', 'fonts-liberation'] }, { quiet: true }).then(
-      () => null,
-      (e) => e,
+    await step(
+      'database (private MariaDB)',
+      async () => {
+        await prepareDatabase(life, env, { recreate: runVitest ? [testDb] : [] });
+        if (overlap && runBrowser && browserDb !== testDb) {
+          await ensureDatabases({ names: [browserDb], user: env.DB_USER, password: env.DB_PASSWORD });
+        }
+      },
+      { critical: true },
     );
   }
-  if (needDb) {
+
+  // Two lanes side by side: the checks (static checks, then vitest) and the browser journeys (build,
+  // seed, serve, test). Each stage is timed on its own; the wall clock of the whole run is printed last.
+  const lanes = [];
+  if (runVitest || ['prettier', 'eslint', 'tsc'].some(wanted)) lanes.push(checksLane(testEnv));
+  if (runBrowser) {
+    // Without a database of its own the browser lane seeds and tests only after vitest is done with it.
+    const vitestDone = overlap ? Promise.resolve() : Promise.allSettled([lanes[0]]);
+    // Its own mail and S3 servers unless it shares vitest's (an external database, one after the other).
+    const ownServers = overlap || !runVitest;
+    lanes.push(browserLane(browserEnv, { appUrl, appPort, browserDb, vitestDone, ownServers }));
+  }
+  const results = await Promise.allSettled(lanes);
+  const stop = results.find((r) => r.status === 'rejected');
+  if (stop) throw stop.reason;
+}
+
+/** prettier, eslint and tsc side by side, then vitest on the test database with its mail and S3. */
+async function checksLane(testEnv) {
+  // vitest's database, mail and S3 come up while the static checks run (they need none of them).
+  const infra = (async () => {
+    if (!wanted('vitest')) return;
     await step('migrations (test database)', () => migrate(testEnv), { critical: true });
     await step(
       'fake SMTP',
       () => startMail(life, testEnv, { clear: true, logFile: path.join(RESULTS_DIR, 'fake-smtp.log') }),
-      {
-        critical: true,
-      },
+      { critical: true },
     );
     await step(
       'fake S3',
@@ -180,86 +248,124 @@ async function main() {
       },
       { critical: true },
     );
-  }
+  })();
 
-  const statics = [];
+  // The static checks and vitest's parallel unit files yield the cores to the two long chains (the
+  // database files one at a time, the browser journeys): they fill the gaps instead of delaying them.
+  const low = (cmd, args) => ['nice', ['-n', '10', cmd, ...args]];
+  const jobs = [];
   if (wanted('prettier'))
-    statics.push(['prettier --check', bin('prettier'), ['--check', '.', '--log-level=warn']]);
-  if (wanted('eslint')) statics.push(['eslint', bin('eslint'), ['.', '--max-warnings=0']]);
-  if (wanted('tsc')) statics.push(['tsc --noEmit', bin('tsc'), ['--noEmit']]);
-  if (statics.length) {
-    log(`Running ${statics.map((s) => s[0]).join(', ')} side by side ...`);
-    const oks = await Promise.all(statics.map(([name, cmd, args]) => quietCheck(name, cmd, args, testEnv)));
-    if (opts.bail && oks.includes(false)) throw new StopRun();
-  }
+    jobs.push(['prettier --check', bin('prettier'), ['--check', '.', '--log-level=warn']]);
+  if (wanted('eslint')) jobs.push(['eslint', bin('eslint'), ['.', '--max-warnings=0']]);
+  if (wanted('tsc')) jobs.push(['tsc --noEmit', bin('tsc'), ['--noEmit']]);
+  if (jobs.length) log(`Running ${jobs.map((s) => s[0]).join(', ')} side by side ...`);
+  const running = jobs.map(([name, cmd, args]) => quietCheck(name, ...low(cmd, args), testEnv));
 
   if (wanted('vitest')) {
     // Integration tests call route handlers as if the app ran at the default address.
     const unitEnv = { ...testEnv, APP_URL: UNIT_APP_URL, NEXTAUTH_URL: UNIT_APP_URL, PORT: '3000' };
-    await step('vitest', () =>
-      run(
-        bin('vitest'),
-        [
-          'run',
-          '--reporter=default',
-          '--reporter=json',
-          `--outputFile.json=${path.join(RESULTS_DIR, 'vitest.json')}`,
-          ...(opts.only?.has('browser') ? [] : opts.filters),
-        ],
-        { env: unitEnv },
+    // vitest.config.ts's two projects as two runs side by side (one run would finish the unit files
+    // before it starts the database ones): the unit files in parallel, shown whole when they end; the
+    // database files one at a time on the test database, shown as they go.
+    const vitestArgs = (project) => [
+      'run',
+      '--project',
+      project,
+      // A file filter may match files of one project only.
+      '--passWithNoTests',
+      '--reporter=default',
+      '--reporter=json',
+      `--outputFile.json=${path.join(RESULTS_DIR, `vitest-${project}.json`)}`,
+      ...(opts.only?.has('browser') ? [] : opts.filters),
+    ];
+    running.push(quietCheck('vitest: unit files', ...low(bin('vitest'), vitestArgs('unit')), unitEnv, 8));
+    running.push(
+      infra.then(() =>
+        step('vitest: database files', () => run(bin('vitest'), vitestArgs('db'), { env: unitEnv })),
       ),
     );
   }
+  const oks = await Promise.all(running);
+  if (opts.bail && oks.includes(false)) throw new StopRun();
+}
 
-  if (wanted('browser')) {
-    await step('chromium (Debian package)', async () => {
-      const err = await chromium;
-      if (err) throw err;
-    });
-    if (steps.at(-1)?.ok === false) return;
-    await step('browser: fresh test database + demo seed', async () => {
+/**
+ * The browser journeys: `next build` from the start (beside the static checks and vitest: both are
+ * needed and neither waits for the other), the demo seed in the browser's own database meanwhile, then
+ * the app on its port and tests/browser/*.browser.ts in Chromium. Their output is kept in
+ * test-results/browser.log and shown whole when they end, so it does not interleave with vitest's.
+ */
+async function browserLane(browserEnv, { appUrl, appPort, browserDb, vitestDone, ownServers }) {
+  const chromium = ensureApt({ chromium: ['chromium', 'fonts-liberation'] }, { quiet: true }).then(
+    () => null,
+    (e) => e,
+  );
+  const buildLog = path.join(RESULTS_DIR, 'next-build.log');
+  const built = step('browser: next build', async () => {
+    const r = await run(bin('next'), ['build'], { env: browserEnv, capture: true, check: false });
+    writeFileSync(buildLog, `${r.stdout}${r.stderr}`);
+    if (r.code !== 0) {
+      console.log(`${r.stdout}${r.stderr}`.trimEnd().split('\n').slice(-40).join('\n'));
+      throw new Error(`next build exited with ${r.signal ?? r.code} (log: ${path.relative(ROOT, buildLog)})`);
+    }
+  });
+  const seeded = (async () => {
+    await vitestDone;
+    return step(`browser: database ${browserDb} + demo seed`, async () => {
       // An external server's test database cannot be recreated from here: the seed then adds to it.
-      if (usesPrivateDb(env)) await recreateDatabase(testDb);
-      await migrate(testEnv);
-      await seed(testEnv);
-    });
-    // A build folder of its own, so a running `npm start` keeps serving its build.
-    const browserEnv = {
-      ...testEnv,
-      NEXT_DIST_DIR: '.next/test-build',
-      // The tsc step above already checked the types (and failed the run if they are wrong).
-      NEXT_SKIP_TYPECHECK: wanted('tsc') ? '1' : '0',
-    };
-    let appStarted = false;
-    const nextLog = path.join(RESULTS_DIR, 'next.log');
-    await step('browser: next build', () => run(bin('next'), ['build'], { env: browserEnv }));
-    if (steps.at(-1)?.ok) {
-      appStarted = await step(`browser: next start (${appUrl})`, () =>
-        startNext(life, browserEnv, { port: appPort, build: false, logFile: nextLog }),
-      );
-    }
-    if (appStarted) {
-      const ok = await step('browser tests', () =>
-        run(
-          bin('vitest'),
-          [
-            'run',
-            '--config',
-            'vitest.browser.config.ts',
-            '--reporter=default',
-            '--reporter=json',
-            `--outputFile.json=${path.join(RESULTS_DIR, 'browser.json')}`,
-            ...(opts.only?.has('browser') ? opts.filters : []),
-          ],
-          { env: browserEnv },
-        ),
-      );
-      if (!ok) {
-        console.log(yellow(`Last lines of the app's log (${path.relative(ROOT, nextLog)}):`));
-        console.log(readFileSync(nextLog, 'utf8').trimEnd().split('\n').slice(-40).join('\n'));
-        console.log(yellow(`Screenshots: ${path.relative(ROOT, path.join(RESULTS_DIR, 'screenshots'))}/`));
+      if (usesPrivateDb(env)) await recreateDatabase(browserDb);
+      await migrate(browserEnv);
+      await seed(browserEnv);
+      if (ownServers) {
+        await startMail(life, browserEnv, {
+          clear: true,
+          logFile: path.join(RESULTS_DIR, 'fake-smtp-browser.log'),
+        });
+        rmSync(browserEnv.S3_DIR, { recursive: true, force: true });
+        await startS3(life, browserEnv, { logFile: path.join(RESULTS_DIR, 'fake-s3-browser.log') });
       }
-    }
+    });
+  })();
+  const ready = await Promise.all([built, seeded]);
+  if (ready.includes(false)) return;
+  const chromiumOk = await step('chromium (Debian package)', async () => {
+    const err = await chromium;
+    if (err) throw err;
+  });
+  if (!chromiumOk) return;
+  const nextLog = path.join(RESULTS_DIR, 'next.log');
+  const appStarted = await step(`browser: next start (${appUrl})`, () =>
+    startNext(life, browserEnv, { port: appPort, build: false, logFile: nextLog }),
+  );
+  if (!appStarted) return;
+  const browserLog = path.join(RESULTS_DIR, 'browser.log');
+  log(
+    `Browser tests running; their output goes to ${path.relative(ROOT, browserLog)} and is shown when they end.`,
+  );
+  let output = '';
+  const ok = await step('browser tests', async () => {
+    const r = await run(
+      bin('vitest'),
+      [
+        'run',
+        '--config',
+        'vitest.browser.config.ts',
+        '--reporter=default',
+        '--reporter=json',
+        `--outputFile.json=${path.join(RESULTS_DIR, 'browser.json')}`,
+        ...(opts.only?.has('browser') ? opts.filters : []),
+      ],
+      { env: browserEnv, capture: true, check: false },
+    );
+    output = `${r.stdout}${r.stderr}`;
+    writeFileSync(browserLog, output);
+    if (r.code !== 0) throw new Error(`browser tests exited with ${r.signal ?? r.code}`);
+  });
+  console.log(`\n${bold('▶ browser tests: output')}\n${output.trimEnd()}`);
+  if (!ok) {
+    console.log(yellow(`Last lines of the app's log (${path.relative(ROOT, nextLog)}):`));
+    console.log(readFileSync(nextLog, 'utf8').trimEnd().split('\n').slice(-40).join('\n'));
+    console.log(yellow(`Screenshots: ${path.relative(ROOT, path.join(RESULTS_DIR, 'screenshots'))}/`));
   }
 }
 
