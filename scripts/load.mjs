@@ -5,7 +5,9 @@
 // design of its own, and measures, one after another at the same request rate:
 //   the cheapest routes (/api/health: one `SELECT 1`; /api/auth/csrf: no database),
 //   the design read GET /api/variants/[id], the design save PUT /api/variants/[id] (carrying the version
-//   forward; 409s from saves that crossed are counted apart), and the public share page /s/<token>.
+//   forward; 409s from saves that crossed are counted apart), the public share page /s/<token>, and
+//   its field picture (an SVG at its own cacheable address), fetched whole and revalidated (304).
+// Then, one at a time once warm, the PNG and PDF reports of that design (made on the engine threads).
 // Prints a table (requests/s, p50, p99, and p50/p99 as a multiple of the cheapest route's) and one final
 // JSON line; removes its design at the end. Figures, not a pass/fail test: the machine decides them.
 // Bounded: each scenario sends at most rate × duration requests and stops after `duration` seconds; the
@@ -122,7 +124,32 @@ async function signIn(base, email, password) {
   return { jar, user: session?.user };
 }
 
-const SCENARIOS = 5;
+const SCENARIOS = 7;
+// Reports timed one after another: a few warm-ups, then these (inside the per-link download limit).
+const REPORT_WARM_UPS = 2;
+const REPORT_RUNS = 8;
+
+/** Times `runs` downloads of `url` one after another, after warm-ups; median, p90 and max in ms. */
+async function timeSequential(url, runs) {
+  const once = async () => {
+    const t0 = performance.now();
+    const res = await fetch(url, { signal: AbortSignal.timeout(60_000) });
+    const bytes = (await res.arrayBuffer()).byteLength;
+    if (!res.ok) throw new Error(`${url.replace(/\/s\/[^/]+/, '/s/<token>')} answered ${res.status}`);
+    return { ms: performance.now() - t0, bytes };
+  };
+  for (let i = 0; i < REPORT_WARM_UPS; i++) await once();
+  const times = [];
+  let bytes = 0;
+  for (let i = 0; i < runs; i++) {
+    const r = await once();
+    times.push(r.ms);
+    bytes = r.bytes;
+  }
+  times.sort((a, b) => a - b);
+  const at = (q) => Math.round(times[Math.min(times.length - 1, Math.ceil(q * times.length) - 1)]);
+  return { runs, medianMs: at(0.5), p90Ms: at(0.9), maxMs: Math.round(times.at(-1)), bytes };
+}
 
 /** Runs autocannon at a fixed rate for a fixed time; resolves its results. */
 function cannon(opts, spec) {
@@ -237,6 +264,9 @@ async function main() {
   // The app refuses a cookie-carrying write without its own Origin (CSRF guard), as a browser sends it.
   const authed = { cookie, origin: base };
   const rows = [];
+  const reports = {};
+  let pageBytes = null;
+  let pictureBytes = null;
   try {
     const share = await api(base, jar, 'POST', `/api/variants/${variantId}/shares`, { expiresInDays: 1 });
     const sharePath = `/s/${share.share.token}`;
@@ -303,12 +333,46 @@ async function main() {
     rows.push(row('PUT /api/variants/[id]', save, { saved, stale409: stale }));
 
     const probe = await fetch(`${base}${sharePath}`, { signal: AbortSignal.timeout(15_000) });
-    await probe.body?.cancel();
+    const html = await probe.text();
     if (probe.status === 200) {
+      pageBytes = Buffer.byteLength(html);
       await warmUp(base, jar, sharePath);
       rows.push(row('GET /s/<token> (share page)', await cannon(opts, { url: `${base}${sharePath}` })));
     } else {
       rows.push({ name: 'GET /s/<token> (share page)', skipped: `not served (${probe.status})` });
+    }
+
+    // The field picture the page points at (its own cacheable address): drawn once, then served from
+    // memory to every visitor; and the answer to a browser that already holds it (If-None-Match → 304).
+    const pictureSrc = /<img[^>]+src="([^"]*\/picture\/[^"]+)"/.exec(html)?.[1]?.replace(/&amp;/g, '&');
+    if (pictureSrc) {
+      const first = await fetch(`${base}${pictureSrc}`, { signal: AbortSignal.timeout(15_000) });
+      pictureBytes = (await first.arrayBuffer()).byteLength;
+      const etag = first.headers.get('etag');
+      await warmUp(base, jar, pictureSrc);
+      rows.push(row('GET share picture (SVG)', await cannon(opts, { url: `${base}${pictureSrc}` })));
+      if (etag) {
+        rows.push(
+          row(
+            'GET share picture (304)',
+            await cannon(opts, { url: `${base}${pictureSrc}`, headers: { 'if-none-match': etag } }),
+          ),
+        );
+      }
+    } else {
+      rows.push({ name: 'GET share picture (SVG)', skipped: 'the share page links no picture' });
+    }
+
+    // Reports on the engine threads, one at a time once warm: what one person waits for a download.
+    // A link of their own, so that the per-link download limit of the page's link is left alone.
+    const reportShare = await api(base, jar, 'POST', `/api/variants/${variantId}/shares`, {
+      expiresInDays: 1,
+    });
+    for (const format of ['png', 'pdf']) {
+      reports[format] = await timeSequential(
+        `${base}/s/${reportShare.share.token}/report?format=${format}`,
+        REPORT_RUNS,
+      );
     }
   } finally {
     await api(base, jar, 'DELETE', `/api/designs/${designId}`).catch((e) =>
@@ -333,6 +397,20 @@ async function main() {
   }
   const save = rows.find((r) => r.name.startsWith('PUT'));
   if (save) console.log(`\nsaves: ${save.saved} stored, ${save.stale409} answered 409 (crossed in flight)`);
+  if (pageBytes !== null) {
+    console.log(
+      `share page HTML ${(pageBytes / 1024).toFixed(1)} kB` +
+        (pictureBytes !== null
+          ? `; its field picture ${(pictureBytes / 1024).toFixed(1)} kB (cached apart)`
+          : ''),
+    );
+  }
+  for (const [format, r] of Object.entries(reports)) {
+    console.log(
+      `report ${format.toUpperCase()} (engine thread, warm, one at a time): median ${r.medianMs} ms, ` +
+        `p90 ${r.p90Ms} ms, max ${r.maxMs} ms over ${r.runs} (${(r.bytes / 1024).toFixed(0)} kB)`,
+    );
+  }
   if (save && !save.skipped && save.saved === 0) {
     // A save route that refuses everything (say a 403 from the Origin guard) would otherwise pass as "fast".
     console.log('no save was stored: the PUT figures measure refusals, not saves (see the status codes)');
@@ -348,6 +426,9 @@ async function main() {
       rate: opts.rate,
       durationS: opts.duration,
       connections: opts.connections,
+      sharePageBytes: pageBytes,
+      sharePictureBytes: pictureBytes,
+      reports,
       results: rows.map((r) =>
         r.skipped
           ? r

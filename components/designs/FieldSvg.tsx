@@ -22,8 +22,7 @@ export function FieldSvg({
   markers?: { x: number; y: number; label: string }[];
 }) {
   const { width: w, height: h } = design.enclosure;
-  const top = drawingTop(design);
-  const pad = 3;
+  const { top, viewBox } = fieldBox(design);
   const colorOf = (lo: number) => {
     const k = scale.thresholds.indexOf(lo);
     return scale.colors[k >= 0 ? k : 0] ?? '#ccc';
@@ -31,7 +30,8 @@ export function FieldSvg({
   const stroke = Math.max(w, top) / 400;
   return (
     <svg
-      viewBox={`${-pad} ${-top - pad} ${w + 2 * pad} ${top + 2 * pad}`}
+      xmlns="http://www.w3.org/2000/svg"
+      viewBox={viewBox}
       role="img"
       aria-label={title}
       className="h-auto w-full"
@@ -61,6 +61,36 @@ export function FieldSvg({
         ))}
       </g>
     </svg>
+  );
+}
+
+const PAD = 3;
+
+/** The drawing's extent in design centimetres: the enclosure and the lamps above it, with a margin. */
+function fieldBox(design: Design) {
+  const top = drawingTop(design);
+  const width = design.enclosure.width + 2 * PAD;
+  const height = top + 2 * PAD;
+  return { top, width, height, viewBox: `${-PAD} ${-top - PAD} ${width} ${height}` };
+}
+
+/**
+ * A field picture served as its own file (FieldSvg's drawing, cacheable): an image with its text
+ * alternative and its intrinsic size, so the page keeps its layout while the picture loads.
+ */
+export function FieldImage({ design, src, alt }: { design: Design; src: string; alt: string }) {
+  const { width, height } = fieldBox(design);
+  return (
+    // A drawn SVG of our own at its own cacheable address: next/image would only pass it through.
+    // eslint-disable-next-line @next/next/no-img-element
+    <img
+      src={src}
+      alt={alt}
+      width={Math.round(width * 8)}
+      height={Math.round(height * 8)}
+      decoding="async"
+      className="h-auto w-full"
+    />
   );
 }
 

@@ -20,8 +20,13 @@ describe('engine tasks on worker threads', () => {
       const there = await runEngineTask('sharedView', { design, field: 'tempC', sheet: null }, ROOMY);
       expect(there.figures).toEqual(here.sim.figures);
       expect(there.scale).toEqual(here.view('tempC').scale);
-      expect(there.bands).toEqual(here.view('tempC').bands);
       expect(there.assessment).toBeNull();
+      // The page's text carries no bands: they travel only with the picture.
+      expect(Object.keys(there).sort()).toEqual(['assessment', 'figures', 'scale']);
+      const picture = await runEngineTask('fieldPicture', { design, field: 'tempC' }, ROOMY);
+      expect(picture.bands).toEqual(here.view('tempC').bands);
+      expect(picture.scale).toEqual(here.view('tempC').scale);
+      expect(picture.figures).toEqual(here.sim.figures);
     },
   );
 

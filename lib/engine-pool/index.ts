@@ -32,7 +32,7 @@ export {
   type PoolOptions,
   type RunOptions,
 } from './pool';
-export type { EngineTasks, SharedView } from './tasks';
+export type { EngineTasks, FieldPicture, SharedView } from './tasks';
 
 export type EngineTaskName = keyof EngineTasks;
 export type EngineTaskInput<K extends EngineTaskName> = Parameters<EngineTasks[K]>[0];

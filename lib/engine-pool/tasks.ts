@@ -14,7 +14,10 @@ import { computedFor, type FieldView } from '@/lib/variants/computed';
 import type { KeyFigures } from '@/shared/designs/figures';
 import type { Assessment, Design, FieldName, SpeciesSheet } from '@/simulation';
 
-export type SharedView = FieldView & { figures: KeyFigures; assessment: Assessment | null };
+/** What the share page prints around its picture: the field's scale (for the key), figures, species check. */
+export type SharedView = { scale: FieldView['scale']; figures: KeyFigures; assessment: Assessment | null };
+/** What a field picture draws: the scale, the contour bands and the figures its markers come from. */
+export type FieldPicture = FieldView & { figures: KeyFigures };
 
 export const engineTasks = {
   /** One field of a design as a PNG picture (the export and the share page's download). */
@@ -27,14 +30,23 @@ export const engineTasks = {
     return reportPdf(input.subject, input.options, input.now);
   },
 
-  /** What the public share page draws: one field's scale and bands, the key figures, the species check. */
+  /**
+   * The public share page's text: one field's scale, the key figures, the species check. The bands stay
+   * on the thread: the page shows the picture from its own cacheable address (`fieldPicture`).
+   */
   sharedView(input: { design: Design; field: FieldName; sheet: SpeciesSheet | null }): SharedView {
     const computed = computedFor(input.design);
     return {
-      ...computed.view(input.field),
+      scale: computed.view(input.field).scale,
       figures: computed.sim.figures,
       assessment: input.sheet ? computed.assessment(input.sheet) : null,
     };
+  },
+
+  /** One field's scale and contour bands, with the figures its markers need: a share page's picture. */
+  fieldPicture(input: { design: Design; field: FieldName }): FieldPicture {
+    const computed = computedFor(input.design);
+    return { ...computed.view(input.field), figures: computed.sim.figures };
   },
 
   /** The guided start's search for a first layout (many engine runs). */

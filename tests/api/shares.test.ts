@@ -2,17 +2,20 @@ import { describe, expect, it } from 'vitest';
 import * as enclosureDesignsRoute from '@/app/api/enclosures/[id]/designs/route';
 import * as shareRoute from '@/app/api/shares/[id]/route';
 import * as sharesRoute from '@/app/api/variants/[id]/shares/route';
+import * as sharedPictureRoute from '@/app/s/[token]/picture/[version]/[file]/route';
 import * as sharedReportRoute from '@/app/s/[token]/report/route';
+import { parsePictureParams, pictureCache, sharePicturePath } from '@/lib/variants/share-picture';
 import { resolveShareToken } from '@/lib/variants/shares';
 import { hashShareToken } from '@/lib/variants/tokens';
 import { ShareLink, Variant } from '@/models';
+import { benchDesign } from '@/simulation/testing/fixtures';
 import {
   createEnclosure,
   createMember,
   createOrganisation,
   useTestDatabase as withTestDatabase,
 } from '../helpers/db';
-import { call } from './variants.helpers';
+import { call, ORIGIN } from './variants.helpers';
 
 withTestDatabase();
 
@@ -152,5 +155,126 @@ describe('share links', () => {
       expect(r.body.error.field).toBe('expiresInDays');
     }
     expect(await ShareLink.count()).toBe(0);
+  });
+});
+
+/** A shared variant with lamps (every field has bands to draw), its version and its link. */
+async function sharedVariant() {
+  const w = await world();
+  await Variant.update({ designJson: JSON.stringify(benchDesign(1, 1)) }, { where: { id: w.variantId } });
+  const { token, id } = (await share(w)).body.share;
+  const { version } = (await Variant.findByPk(w.variantId))!;
+  return { staff: w.staff, variantId: w.variantId, version, token: token as string, id };
+}
+
+/** A visitor's request for a picture address, as the browser sends it (optionally revalidating). */
+async function picture(address: string, ifNoneMatch?: string) {
+  const [, , token, , version, file] = address.split('/');
+  const req = new Request(`${ORIGIN}${address}`, {
+    headers: ifNoneMatch ? { 'if-none-match': ifNoneMatch } : {},
+  });
+  return sharedPictureRoute.GET(req, {
+    params: Promise.resolve({ token: token!, version: version!, file: file! }),
+  });
+}
+
+describe('share page pictures', () => {
+  it('serves each field as an SVG cacheable for ever, revalidated by its ETag', async () => {
+    const s = await sharedVariant();
+    pictureCache().clear();
+    const address = sharePicturePath(s.token, s.version, 'uvi');
+    expect(address).toBe(`/s/${s.token}/picture/${s.version}/uvi.svg`);
+    const first = await picture(address);
+    expect(first.status).toBe(200);
+    expect(first.headers.get('content-type')).toBe('image/svg+xml; charset=utf-8');
+    expect(first.headers.get('cache-control')).toBe('public, max-age=31536000, immutable');
+    const etag = first.headers.get('etag')!;
+    expect(etag).toMatch(/^"[A-Za-z0-9_-]{20,}"$/);
+    const svg = await first.text();
+    expect(svg).toMatch(/^<svg xmlns="http:\/\/www\.w3\.org\/2000\/svg"/);
+    expect(svg).toContain('<title>UV Index</title>');
+    expect(svg).toContain('<path');
+    // The variant's name is the page's alt text, never baked into a picture a rename would not refresh.
+    expect(svg).not.toContain('Low lamp');
+
+    // The same answer again (from memory), and a 304 without a body for the tag the browser holds.
+    const again = await picture(address);
+    expect(again.headers.get('etag')).toBe(etag);
+    expect(await again.text()).toBe(svg);
+    for (const header of [etag, `W/${etag}`, `"other", ${etag}`, '*']) {
+      const r = await picture(address, header);
+      expect(r.status, header).toBe(304);
+      expect(await r.text()).toBe('');
+      expect(r.headers.get('etag')).toBe(etag);
+      expect(r.headers.get('cache-control')).toContain('immutable');
+    }
+    expect((await picture(address, '"other"')).status).toBe(200);
+
+    // Each field is its own picture.
+    const temp = await picture(sharePicturePath(s.token, s.version, 'tempC'));
+    expect(temp.status).toBe(200);
+    expect(temp.headers.get('etag')).not.toBe(etag);
+    expect(await temp.text()).toContain('<title>Surface temperature</title>');
+  });
+
+  it('stops serving the pictures of a revoked link at once, revalidations included', async () => {
+    const s = await sharedVariant();
+    const address = sharePicturePath(s.token, s.version, 'uvb');
+    const before = await picture(address);
+    expect(before.status).toBe(200);
+    const etag = before.headers.get('etag')!;
+    const revoked = await call(shareRoute.DELETE, {
+      method: 'DELETE',
+      path: `/api/shares/${s.id}`,
+      params: { id: s.id },
+      user: s.staff,
+    });
+    expect(revoked.status).toBe(200);
+    for (const r of [await picture(address), await picture(address, etag)]) {
+      expect(r.status).toBe(404);
+      expect(r.headers.get('cache-control')).toBe('no-store');
+      expect(r.headers.get('etag')).toBeNull();
+    }
+  });
+
+  it('stops serving the pictures of an expired link', async () => {
+    const s = await sharedVariant();
+    const address = sharePicturePath(s.token, s.version, 'uvi');
+    expect((await picture(address)).status).toBe(200);
+    await ShareLink.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { id: s.id } });
+    expect((await picture(address)).status).toBe(404);
+  });
+
+  it('serves only the current version, and nothing for a wrong field, version or token', async () => {
+    const s = await sharedVariant();
+    const old = sharePicturePath(s.token, s.version, 'uvi');
+    expect((await picture(old)).status).toBe(200);
+    await Variant.increment('version', { where: { id: s.variantId } });
+    expect((await picture(old)).status).toBe(404);
+    expect((await picture(sharePicturePath(s.token, s.version + 1, 'uvi'))).status).toBe(200);
+    const flipped = (s.token[0] === 'A' ? 'B' : 'A') + s.token.slice(1);
+    for (const address of [
+      sharePicturePath(flipped, s.version + 1, 'uvi'),
+      `/s/${s.token}/picture/${s.version + 1}/heat.svg`,
+      `/s/${s.token}/picture/${s.version + 1}/uvi.png`,
+      `/s/${s.token}/picture/0/uvi.svg`,
+      `/s/${s.token}/picture/01/uvi.svg`,
+      `/s/not-a-token/picture/1/uvi.svg`,
+    ]) {
+      expect((await picture(address)).status, address).toBe(404);
+    }
+  });
+
+  it('reads only well-formed picture addresses', () => {
+    expect(parsePictureParams('12', 'tempC.svg')).toEqual({ version: 12, field: 'tempC' });
+    for (const [v, f] of [
+      ['12', 'tempc.svg'],
+      ['-1', 'uvi.svg'],
+      ['1.5', 'uvi.svg'],
+      ['99999999999', 'uvi.svg'],
+      ['3', 'uvi.svg.svg'],
+    ]) {
+      expect(parsePictureParams(v!, f!), `${v}/${f}`).toBeNull();
+    }
   });
 });

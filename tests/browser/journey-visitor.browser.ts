@@ -32,6 +32,22 @@ describe('visitor journey', () => {
         expect(await page.getByText('Shared read-only').count()).toBe(1);
         // The field picture, the estimate note and the cautions.
         expect(await main.getByRole('img').count()).toBeGreaterThan(0);
+        // The field is a picture at its own address, cacheable for ever and revalidated by its ETag, so the
+        // page's own HTML stays small: it loads, and it carries its text alternative.
+        const picture = main.locator('img[src*="/picture/"]');
+        expect(await picture.getAttribute('alt')).toMatch(/^UV Index of /);
+        await expect
+          .poll(() => picture.evaluate((img: HTMLImageElement) => (img.complete ? img.naturalWidth : 0)))
+          .toBeGreaterThan(0);
+        const src = (await picture.getAttribute('src'))!;
+        expect(src).toMatch(new RegExp(`^${sharePath}/picture/\\d+/uvi\\.svg$`));
+        const drawn = await page.request.get(src);
+        expect(drawn.status()).toBe(200);
+        expect(drawn.headers()['content-type']).toBe('image/svg+xml; charset=utf-8');
+        expect(drawn.headers()['cache-control']).toBe('public, max-age=31536000, immutable');
+        const etag = drawn.headers()['etag']!;
+        expect((await page.request.get(src, { headers: { 'if-none-match': etag } })).status()).toBe(304);
+        expect(await res!.text()).not.toContain('<path');
         expect(await main.innerText()).toMatch(/estimate/i);
         expect(await main.innerText()).toMatch(/verify it with a UV meter and a thermometer/);
         const cautions = page.getByRole('region', { name: 'Safety' });

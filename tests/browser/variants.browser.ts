@@ -150,6 +150,10 @@ describe('variants, comparison and share links', () => {
         expect(res?.status()).toBe(200);
         await visitor.getByRole('heading', { name: litName, level: 1 }).waitFor();
         await visitor.getByRole('img', { name: `UV Index of ${litName}` }).waitFor();
+        const picture = await visitor
+          .getByRole('img', { name: `UV Index of ${litName}` })
+          .getAttribute('src');
+        expect(picture).toMatch(/\/picture\/\d+\/uvi\.svg$/);
         expect(await visitor.getByText('estimate', { exact: false }).count()).toBeGreaterThan(0);
         // The cautions of a design with a UV tube and a heat lamp, and figures in both unit systems.
         for (const caution of [
@@ -198,6 +202,8 @@ describe('variants, comparison and share links', () => {
         expect((await visitor.goto(sharePath))?.status()).toBe(404);
         const report = await visitor.request.get(`${BASE_URL}${sharePath}/report?format=pdf`);
         expect(report.status()).toBe(404);
+        // Its field pictures stop at once too, although a browser may keep the ones it has.
+        expect((await visitor.request.get(`${BASE_URL}${picture}`)).status()).toBe(404);
       } finally {
         await anonymous.close();
       }

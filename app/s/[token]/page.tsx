@@ -3,13 +3,13 @@ import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { CautionList } from '@/components/cautions/CautionList';
 import { FindingList } from '@/components/cautions/FindingList';
-import { FieldLegend, FieldSvg } from '@/components/designs/FieldSvg';
+import { FieldImage, FieldLegend } from '@/components/designs/FieldSvg';
 import { SharedLampList } from '@/components/designs/SharedLampList';
 import { BrandMark } from '@/components/shell/BrandMark';
 import { lampRows } from '@/lib/reports/lamps';
 import { runEngineTask } from '@/lib/engine-pool';
 import { sizeBoth, tempBoth } from '@/shared/units';
-import { hotSpotMarker } from '@/shared/designs/figures';
+import { sharePicturePath } from '@/lib/variants/share-picture';
 import { resolveShareToken } from '@/lib/variants/shares';
 import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
 import { designWorkProblem, type FieldName } from '@/simulation';
@@ -63,10 +63,10 @@ export default async function SharedVariantPage({
   }
   const species = attachedSpecies(await speciesOptions(shared.organisationId), shared.speciesName);
   // On an engine thread, never on the server's event loop; each thread keeps the designs it simulated in
-  // memory (lib/variants/computed), since a link is opened by many people.
+  // memory (lib/variants/computed), since a link is opened by many people. The field picture itself is
+  // its own cacheable file (./picture/…): the page carries only its address.
   const {
     scale,
-    bands,
     assessment,
     figures: f,
   } = await runEngineTask('sharedView', { design: shared.design, field, sheet: species?.sheet ?? null });
@@ -133,12 +133,10 @@ export default async function SharedVariantPage({
             temperature. Ask whoever shared it to add the lamps in the studio.
           </p>
         )}
-        <FieldSvg
+        <FieldImage
           design={shared.design}
-          bands={bands}
-          scale={scale}
-          title={`${scale.label} of ${shared.variant.name}`}
-          markers={hotSpotMarker(f)}
+          src={sharePicturePath(token, shared.variant.version, field)}
+          alt={`${scale.label} of ${shared.variant.name}`}
         />
         <FieldLegend scale={scale} />
         <p className="text-caption text-basalt-500">

@@ -1,0 +1,59 @@
+import { createElement } from 'react';
+import { renderToStaticMarkup } from 'react-dom/server';
+import { describe, expect, it } from 'vitest';
+import { bandsFor, scaleFor, simulate } from '@/shared/designs/simulate';
+import { hotSpotMarker } from '@/shared/designs/figures';
+import { benchDesign } from '@/simulation/testing/fixtures';
+import type { Design } from '@/simulation';
+import { FieldSvg } from './FieldSvg';
+import { DesignShapes, SKETCH_LOOK } from './DesignShapes';
+import { staticSvg } from './static-svg';
+
+describe('staticSvg', () => {
+  it('writes the share pictures exactly as React renders them inline', () => {
+    const design: Design = {
+      ...benchDesign(2, 2),
+      objects: [
+        ...benchDesign(2, 2).objects,
+        { type: 'foliage', id: 'f1', x: 10, y: 0, width: 20, height: 30 },
+        { type: 'glass', id: 'g1', x1: 0, y1: 0, x2: 0, y2: 40 },
+      ],
+    };
+    const sim = simulate(design);
+    for (const field of ['uvi', 'uvb', 'tempC'] as const) {
+      const scale = scaleFor(field, [sim]);
+      const element = createElement(FieldSvg, {
+        design,
+        bands: bandsFor(sim, scale),
+        scale,
+        title: `${scale.label} of "Tank <1>" & co's`,
+        markers: hotSpotMarker(sim.figures),
+      });
+      const ours = staticSvg(element);
+      expect(ours, field).toBe(renderToStaticMarkup(element));
+      expect(ours).toContain('stroke-width=');
+      expect(ours).toContain('&quot;Tank &lt;1&gt;&quot; &amp; co&#x27;s');
+    }
+  });
+
+  it('writes fragments, styles and data attributes as React does', () => {
+    const element = (
+      <svg viewBox="0 0 10 10">
+        <DesignShapes objects={benchDesign(1, 1).objects} look={SKETCH_LOOK} />
+        <g style={{ fillOpacity: 0.5, strokeWidth: 2 }} aria-hidden="true">
+          <text textAnchor="middle">
+            {'a'}
+            {2}
+          </text>
+          {null}
+          {false}
+        </g>
+      </svg>
+    );
+    expect(staticSvg(element)).toBe(renderToStaticMarkup(element).replace('<!-- -->', ''));
+  });
+
+  it('refuses what a static picture cannot hold', () => {
+    expect(() => staticSvg(<rect onClick={() => undefined} />)).toThrow(/event handler/);
+  });
+});
