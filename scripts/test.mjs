@@ -1,6 +1,6 @@
 #!/usr/bin/env node
 // `npm test`: from a fresh clone, every check the project has, in two lanes side by side:
-//   checks:  prettier --check, eslint, tsc, and vitest's unit files (all in parallel, at low priority),
+//   checks:  prettier --check, eslint, tsc (at low priority) and vitest's unit files, all in parallel,
 //            with vitest's database files one at a time on the test database;
 //   browser: `next build` at once, the demo seed in a database of its own, then the browser journeys
 //            (tests/browser/*.browser.ts) in Chromium against that production build.
@@ -13,7 +13,7 @@
 //   npm test                         everything
 //   npm test -- lib/demo tests/api   only vitest, only files matching these filters
 //   npm test -- --only=vitest,browser   --skip=eslint   --bail (stop at the first failing step)
-import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { ROOT, loadEnv, urlPort, usesPrivateDb } from './lib/env.mjs';
@@ -23,6 +23,10 @@ import { ensureDatabases, recreateDatabase } from './lib/mariadb.mjs';
 import { Lifecycle, migrate, prepareDatabase, seed, startMail, startNext, startS3 } from './lib/stack.mjs';
 
 const CHECKS = ['prettier', 'eslint', 'tsc', 'vitest', 'browser'];
+// Database files that bound response times (the health check while an export runs, a 503 soon after
+// the database goes away): they run alone after both lanes, when nothing else of this run competes for
+// the cores, so that the bound measures the app and not this run's other work.
+const TIMED_FILES = ['tests/security/export-stall.test.ts', 'tests/reliability/db-outage.test.ts'];
 const RESULTS_DIR = path.join(ROOT, 'test-results');
 // The address unit and integration tests see (APP_URL, NEXTAUTH_URL): the documented default.
 const UNIT_APP_URL = 'http://localhost:3000';
@@ -101,7 +105,7 @@ function summary() {
         .join(' ')} (1/5/15 min)`,
     ),
   );
-  const counts = ['vitest-unit.json', 'vitest-db.json', 'browser.json']
+  const counts = ['vitest-unit.json', 'vitest-db.json', 'vitest-timed.json', 'browser.json']
     .map((f) => readCounts(path.join(RESULTS_DIR, f)))
     .filter(Boolean);
   if (counts.length) {
@@ -226,7 +230,28 @@ async function main() {
   const results = await Promise.allSettled(lanes);
   const stop = results.find((r) => r.status === 'rejected');
   if (stop) throw stop.reason;
+
+  // Filters pick files the way vitest does: a filter is a part of the file's path.
+  const timed = TIMED_FILES.filter((f) => !opts.filters.length || opts.filters.some((x) => f.includes(x)));
+  if (runVitest && !opts.only?.has('browser') && timed.length) {
+    const unitEnv = { ...testEnv, APP_URL: UNIT_APP_URL, NEXTAUTH_URL: UNIT_APP_URL, PORT: '3000' };
+    await step('vitest: timed database files, alone', () =>
+      run(bin('vitest'), [...vitestArgs('db', 'timed'), ...timed], { env: unitEnv }),
+    );
+  }
 }
+
+/** A vitest run of one project of vitest.config.ts, its JSON report in test-results/vitest-<name>.json. */
+const vitestArgs = (project, name = project) => [
+  'run',
+  '--project',
+  project,
+  // A file filter may match files of one project only.
+  '--passWithNoTests',
+  '--reporter=default',
+  '--reporter=json',
+  `--outputFile.json=${path.join(RESULTS_DIR, `vitest-${name}.json`)}`,
+];
 
 /** prettier, eslint and tsc side by side, then vitest on the test database with its mail and S3. */
 async function checksLane(testEnv) {
@@ -250,8 +275,8 @@ async function checksLane(testEnv) {
     );
   })();
 
-  // The static checks and vitest's parallel unit files yield the cores to the two long chains (the
-  // database files one at a time, the browser journeys): they fill the gaps instead of delaying them.
+  // The static checks (no time limits) yield the cores to the long chains — the database files one at a
+  // time, the browser journeys — filling the gaps instead of delaying them.
   const low = (cmd, args) => ['nice', ['-n', '10', cmd, ...args]];
   const jobs = [];
   if (wanted('prettier'))
@@ -267,21 +292,18 @@ async function checksLane(testEnv) {
     // vitest.config.ts's two projects as two runs side by side (one run would finish the unit files
     // before it starts the database ones): the unit files in parallel, shown whole when they end; the
     // database files one at a time on the test database, shown as they go.
-    const vitestArgs = (project) => [
-      'run',
-      '--project',
-      project,
-      // A file filter may match files of one project only.
-      '--passWithNoTests',
-      '--reporter=default',
-      '--reporter=json',
-      `--outputFile.json=${path.join(RESULTS_DIR, `vitest-${project}.json`)}`,
-      ...(opts.only?.has('browser') ? [] : opts.filters),
-    ];
-    running.push(quietCheck('vitest: unit files', ...low(bin('vitest'), vitestArgs('unit')), unitEnv, 8));
+    const filters = opts.only?.has('browser') ? [] : opts.filters;
+    // At normal priority: unit files have time limits (the engine pool's, the tests' own), and a starved
+    // worker on a busy machine would fail them.
+    running.push(
+      quietCheck('vitest: unit files', bin('vitest'), [...vitestArgs('unit'), ...filters], unitEnv, 8),
+    );
+    const notTimed = { ...unitEnv, VITEST_DB_EXCLUDE: TIMED_FILES.join(',') };
     running.push(
       infra.then(() =>
-        step('vitest: database files', () => run(bin('vitest'), vitestArgs('db'), { env: unitEnv })),
+        step('vitest: database files', () =>
+          run(bin('vitest'), [...vitestArgs('db'), ...filters], { env: notTimed }),
+        ),
       ),
     );
   }
@@ -302,8 +324,12 @@ async function browserLane(browserEnv, { appUrl, appPort, browserDb, vitestDone,
   );
   const buildLog = path.join(RESULTS_DIR, 'next-build.log');
   const built = step('browser: next build', async () => {
-    const r = await run(bin('next'), ['build'], { env: browserEnv, capture: true, check: false });
-    writeFileSync(buildLog, `${r.stdout}${r.stderr}`);
+    const r = await run(bin('next'), ['build'], {
+      env: browserEnv,
+      capture: true,
+      check: false,
+      logFile: buildLog,
+    });
     if (r.code !== 0) {
       console.log(`${r.stdout}${r.stderr}`.trimEnd().split('\n').slice(-40).join('\n'));
       throw new Error(`next build exited with ${r.signal ?? r.code} (log: ${path.relative(ROOT, buildLog)})`);
@@ -339,9 +365,7 @@ async function browserLane(browserEnv, { appUrl, appPort, browserDb, vitestDone,
   );
   if (!appStarted) return;
   const browserLog = path.join(RESULTS_DIR, 'browser.log');
-  log(
-    `Browser tests running; their output goes to ${path.relative(ROOT, browserLog)} and is shown when they end.`,
-  );
+  log(`Browser tests running: follow ${path.relative(ROOT, browserLog)}; shown here when they end.`);
   let output = '';
   const ok = await step('browser tests', async () => {
     const r = await run(
@@ -355,10 +379,9 @@ async function browserLane(browserEnv, { appUrl, appPort, browserDb, vitestDone,
         `--outputFile.json=${path.join(RESULTS_DIR, 'browser.json')}`,
         ...(opts.only?.has('browser') ? opts.filters : []),
       ],
-      { env: browserEnv, capture: true, check: false },
+      { env: browserEnv, capture: true, check: false, logFile: browserLog },
     );
     output = `${r.stdout}${r.stderr}`;
-    writeFileSync(browserLog, output);
     if (r.code !== 0) throw new Error(`browser tests exited with ${r.signal ?? r.code}`);
   });
   console.log(`\n${bold('▶ browser tests: output')}\n${output.trimEnd()}`);

@@ -31,7 +31,11 @@ const foreground = new Set();
  * `capture` collects stdout/stderr instead of showing them.
  * Resolves { code, stdout, stderr }; with `check` (the default) a non-zero exit rejects.
  */
-export function run(cmd, args = [], { env, cwd = ROOT, capture = false, check = true, input } = {}) {
+/**
+ * Runs a command to its end. `capture` keeps its output (and shows none); `logFile` with `capture` also
+ * writes the output to that file as it comes, so a long run can be followed while it is held back here.
+ */
+export function run(cmd, args = [], { env, cwd = ROOT, capture = false, check = true, input, logFile } = {}) {
   return new Promise((resolve, reject) => {
     const child = spawn(cmd, args, {
       cwd,
@@ -50,6 +54,12 @@ export function run(cmd, args = [], { env, cwd = ROOT, capture = false, check = 
     let stderr = '';
     child.stdout?.on('data', (d) => (stdout += d));
     child.stderr?.on('data', (d) => (stderr += d));
+    if (capture && logFile) {
+      const out = createWriteStream(logFile);
+      child.stdout.pipe(out, { end: false });
+      child.stderr.pipe(out, { end: false });
+      child.on('close', () => out.end());
+    }
     if (input !== undefined) child.stdin.end(input);
     child.on('error', reject);
     child.on('close', (code, signal) => {

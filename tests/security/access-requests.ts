@@ -28,7 +28,7 @@ export function idFor(pattern: string, w: World): Record<string, string> {
     [/^\/api\/invitations\/\[id\]/, 'invitation'],
     [/^\/api\/uploads\/\[id\]/, 'upload'],
   ];
-  if (pattern.startsWith('/s/[token]')) return { token: 'A'.repeat(43) };
+  if (pattern.startsWith('/s/[token]')) return { token: 'A'.repeat(43), version: '1', file: 'uvi.svg' };
   for (const [re, key] of byPrefix) if (re.test(pattern)) return { id: String(w[key]) };
   return {};
 }
@@ -145,4 +145,5 @@ export const REQUESTS: Record<string, RequestSpec> = {
   'GET /api/variants/[id]/shares': {},
   'POST /api/variants/[id]/shares': { body: () => ({ expiresInDays: 7 }) },
   'GET /s/[token]/report': { query: () => 'format=pdf' },
+  'GET /s/[token]/picture/[version]/[file]': {},
 };

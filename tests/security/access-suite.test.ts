@@ -243,21 +243,23 @@ describe('every route handler refuses people who may not', () => {
       },
     );
 
-    it('share report links: random tokens all get the same 404', async () => {
-      const report = routes.find((r) => r.pattern === '/s/[token]/report')!;
-      const bodies = new Set<string>();
-      await fc.assert(
-        fc.asyncProperty(
-          fc.oneof(fc.string({ maxLength: 60 }), fc.base64String({ minLength: 40, maxLength: 48 })),
-          async (token) => {
-            const reply = await send(report, 'nobody', { token });
-            expect(reply.status).toBe(404);
-            bodies.add(reply.text);
-          },
-        ),
-        { seed: SEED, numRuns: RUNS * 4 },
-      );
-      expect(bodies.size).toBe(1);
+    it('share report and picture links: random tokens all get the same 404', async () => {
+      for (const pattern of ['/s/[token]/report', '/s/[token]/picture/[version]/[file]']) {
+        const route = routes.find((r) => r.pattern === pattern)!;
+        const bodies = new Set<string>();
+        await fc.assert(
+          fc.asyncProperty(
+            fc.oneof(fc.string({ maxLength: 60 }), fc.base64String({ minLength: 40, maxLength: 48 })),
+            async (token) => {
+              const reply = await send(route, 'nobody', { token, version: '1', file: 'uvi.svg' });
+              expect(reply.status).toBe(404);
+              bodies.add(reply.text);
+            },
+          ),
+          { seed: SEED, numRuns: RUNS * 4 },
+        );
+        expect(bodies.size, pattern).toBe(1);
+      }
     });
   });
 
