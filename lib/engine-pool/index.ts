@@ -85,6 +85,8 @@ export function enginePool(): WorkerPool {
       size: defaultThreads(),
       maxQueue: c.ENGINE_QUEUE,
       timeoutMs: c.ENGINE_TIMEOUT_MS,
+      // A fresh worker loads the engine first (seconds under tsx, or on a machine that is very busy).
+      startupMs: 60_000,
       spawn: spawnEngineWorker,
     });
   }

@@ -20,6 +20,11 @@ export type PoolOptions = {
   maxQueue: number;
   /** Default time limit of one task in milliseconds, counted from when a worker starts it. */
   timeoutMs: number;
+  /**
+   * Extra time for a new worker's first task (ms): the worker loads its code before it can start, and on a
+   * busy machine that alone can take longer than a task may. Later tasks get the plain limit.
+   */
+  startupMs?: number;
   /** Starts one worker speaking the protocol of `worker-protocol.ts`. */
   spawn: () => Worker;
 };
@@ -93,7 +98,7 @@ type Job = {
   settled?: boolean;
 };
 
-type Slot = { worker: Worker; job: Job | null; id: number; timer: NodeJS.Timeout | null };
+type Slot = { worker: Worker; job: Job | null; id: number; timer: NodeJS.Timeout | null; fresh: boolean };
 
 /** Rebuilds an error thrown inside a task: an ApiError stays one (its status and field reach the client). */
 export function reviveError(e: SerialisedError): Error {
@@ -110,8 +115,8 @@ export class WorkerPool {
   private readonly queue: Job[] = [];
   private nextId = 1;
   private closed = false;
-  /** Tasks stopped for running out of time, and workers started in all (for tests and the health of the pool). */
-  readonly counts = { timedOut: 0, cancelled: 0, started: 0, crashed: 0 };
+  /** Tasks handed to a worker, tasks stopped for running out of time, workers started in all (for tests and the health of the pool). */
+  readonly counts = { tasks: 0, timedOut: 0, cancelled: 0, started: 0, crashed: 0 };
 
   constructor(private readonly opts: PoolOptions) {
     if (!(opts.size >= 1)) throw new RangeError('a worker pool needs at least one thread');
@@ -168,10 +173,12 @@ export class WorkerPool {
       slot.job = job;
       slot.id = this.nextId++;
       slot.worker.ref();
+      this.counts.tasks++;
+      const startup = slot.fresh ? (this.opts.startupMs ?? 0) : 0;
       slot.timer = setTimeout(() => {
         this.counts.timedOut++;
         this.abandon(slot, new EngineTimeoutError(job.timeoutMs));
-      }, job.timeoutMs);
+      }, job.timeoutMs + startup);
       const request: TaskRequest = { id: slot.id, name: job.name, input: job.input };
       try {
         slot.worker.postMessage(request);
@@ -186,13 +193,14 @@ export class WorkerPool {
   private startWorker(): Slot {
     const worker = this.opts.spawn();
     this.counts.started++;
-    const slot: Slot = { worker, job: null, id: 0, timer: null };
+    const slot: Slot = { worker, job: null, id: 0, timer: null, fresh: true };
     this.slots.add(slot);
     // An idle worker must not keep a script or a test run alive; `dispatch` refs it while it works.
     worker.unref();
     worker.on('message', (reply: TaskReply) => {
       if (!slot.job || reply.id !== slot.id) return;
       const job = slot.job;
+      slot.fresh = false;
       this.finish(slot);
       if (reply.ok) this.settle(job, null, reply.value);
       else this.settle(job, reviveError(reply.error));

@@ -8,11 +8,14 @@
  * Nothing here may touch the database, the mail or the session: a worker has only its input.
  */
 import { propose, type Proposal, type ProposalInput } from '@/lib/guided-start/propose';
+import { calibrate, type Calibration } from '@/lib/lamp-log/calibrate';
+import { lampChart, type LampChartInput, type LampChartResult } from '@/lib/lamp-log/chart';
+import type { LampFacts, ReadingFacts } from '@/lib/lamp-log/outlook';
 import type { LampTypeDto } from '@/lib/lamp-types/schema';
 import { fieldPng, reportPdf, type ReportOptions, type ReportSubject } from '@/lib/reports/build';
 import { computedFor, type FieldView } from '@/lib/variants/computed';
 import type { KeyFigures } from '@/shared/designs/figures';
-import type { Assessment, Design, FieldName, SpeciesSheet } from '@/simulation';
+import type { Assessment, Design, FieldName, LampObject, SpeciesSheet } from '@/simulation';
 
 /** What the share page prints around its picture: the field's scale (for the key), figures, species check. */
 export type SharedView = { scale: FieldView['scale']; figures: KeyFigures; assessment: Assessment | null };
@@ -52,6 +55,21 @@ export const engineTasks = {
   /** The guided start's search for a first layout (many engine runs). */
   propose(input: { input: ProposalInput; lampTypes: LampTypeDto[] }): Proposal | null {
     return propose(input.input, input.lampTypes);
+  },
+
+  /** A logged lamp's outlook and its page's chart: the decay fit over all its readings. */
+  lampChart(input: LampChartInput): LampChartResult {
+    return lampChart(input);
+  },
+
+  /** A logged lamp's readings as the figures of each design lamp it is (one fit per design lamp). */
+  calibrations(input: {
+    lamp: LampFacts;
+    readings: ReadingFacts[];
+    objects: LampObject[];
+    today: string;
+  }): Calibration[] {
+    return input.objects.map((object) => calibrate(input.lamp, input.readings, object, input.today));
   },
 };
 

@@ -2,13 +2,14 @@ import 'server-only';
 import { badRequest, conflict, notFound } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { getSequelize } from '@/lib/db';
+import { runEngineTask } from '@/lib/engine-pool';
 import { toDto as lampTypeDto } from '@/lib/lamp-types/store';
 import { readStoredDesign } from '@/lib/variants/stored-design';
 import { saveVariantDesign } from '@/lib/variants/variants';
 import { Design, LampType, Reading, Variant } from '@/models';
 import { lampSchema, type LampObject } from '@/simulation';
 import type { LampWithEnclosure } from './access';
-import { applyCalibration, calibrate, type Calibration } from './calibrate';
+import { applyCalibration, type Calibration } from './calibrate';
 import { todayIso } from './dates';
 import { lampFacts, readingFacts } from './store';
 
@@ -38,12 +39,12 @@ async function targets(lamp: LampWithEnclosure): Promise<CalibrationTarget[]> {
     order: [['id', 'ASC']],
   });
   const names = new Map(designs.map((d) => [d.id, d.name]));
-  const out: CalibrationTarget[] = [];
+  const found: Omit<CalibrationTarget, 'calibration'>[] = [];
   for (const v of variants) {
     const design = readStoredDesign(v.designJson);
     const object = design.objects.find((o) => o.type === 'lamp' && o.id === lamp.designObjectId);
     if (!object || object.type !== 'lamp') continue;
-    out.push({
+    found.push({
       variant: {
         id: v.id,
         name: v.name,
@@ -52,10 +53,17 @@ async function targets(lamp: LampWithEnclosure): Promise<CalibrationTarget[]> {
         designName: names.get(v.designId) ?? '',
       },
       object,
-      calibration: calibrate(facts, readings.map(readingFacts), object, todayIso()),
     });
   }
-  return out;
+  if (found.length === 0) return [];
+  // The fits run on an engine worker thread: their cost grows with the lamp's readings.
+  const calibrations = await runEngineTask('calibrations', {
+    lamp: facts,
+    readings: readings.map(readingFacts),
+    objects: found.map((t) => t.object),
+    today: todayIso(),
+  });
+  return found.map((t, i) => ({ ...t, calibration: calibrations[i]! }));
 }
 
 export async function calibrationProposal(lamp: LampWithEnclosure) {

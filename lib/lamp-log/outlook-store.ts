@@ -223,7 +223,8 @@ export async function summariesOf(
   const stale = lamps.filter((l) => !isCurrent(l, today));
   const fresh = new Map<number, Computed>();
   if (stale.length > 0) {
-    const computed = await computeOutlooks(stale, today);
+    // In slices, as the background passes do: a page of stale lamps never holds the event loop long.
+    const computed = await computeOutlooks(stale, today, yielder());
     await writeRows(computed, today);
     for (const c of computed) fresh.set(c.lamp.id, c);
   }

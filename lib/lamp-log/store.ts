@@ -2,12 +2,10 @@ import 'server-only';
 import { Op, fn, col, where as sqlWhere } from 'sequelize';
 import { afterCursor } from '@/lib/api/pagination';
 import { getSequelize } from '@/lib/db';
+import { runEngineTask, type RunOptions } from '@/lib/engine-pool';
 import { toDto as lampTypeDto } from '@/lib/lamp-types/store';
 import type { LampTypeDto } from '@/lib/lamp-types/schema';
 import { Enclosure, Lamp, LampType, Reading, SpeciesSheet, User } from '@/models';
-import { defaultDecayFor } from './decay';
-import { sampleCurve } from './fit';
-import { distanceFactor, REFERENCE_CM } from './geometry';
 import { DAYS_PER_MONTH } from './dates';
 import {
   lampAgeDays,
@@ -320,21 +318,24 @@ export function readingJson(r: Reading & { takenBy?: User | null }) {
   };
 }
 
-/** One lamp with its readings and what the chart draws: points at 30 cm, the fitted curve and its band. */
-export async function lampDetail(lamp: Lamp, today: string) {
-  const [computed] = await computeOutlooks([lamp], today);
-  const { type, enclosure, readings, species, outlook: o } = computed!;
-  const facts = lampFacts(lamp, type);
-  const decay = defaultDecayFor(type, lamp.hoursPerDay);
-  const lastDay = Math.max(o.ageDays, ...o.points.map((p) => p.days), 30);
-  const horizon = Math.max(lastDay * 1.5, lastDay + 120);
-  const curve = sampleCurve(o.fit, decay, 0, horizon, 80);
-  // The need line, expressed at 30 cm like the points, so everything on the chart compares directly.
-  const needAt30 =
-    o.basking && o.basking.distanceCm > 0
-      ? o.basking.threshold /
-        (distanceFactor(facts.type, REFERENCE_CM, o.basking.distanceCm) * o.basking.transmission)
-      : null;
+/**
+ * One lamp with its readings and what the chart draws: points at 30 cm, the fitted curve and its band.
+ * The fit runs on an engine worker thread: its cost grows with the lamp's readings, and a page view must
+ * not hold up anyone else's request.
+ */
+export async function lampDetail(lamp: Lamp, today: string, options?: RunOptions) {
+  const [loaded] = await loadFor([lamp]);
+  const { type, enclosure, readings } = loaded!;
+  const species = (await speciesForEnclosures([enclosure])).get(enclosure.id)!;
+  const {
+    outlook: o,
+    curve,
+    needAt30,
+  } = await runEngineTask(
+    'lampChart',
+    { facts: lampFacts(lamp, type), readings: readings.map(readingFacts), need: species.need, today },
+    options,
+  );
   return {
     lamp: summaryJson(lamp, type, enclosure, outlookJson(species, o), today),
     readings: readings.map(readingJson),

@@ -1,17 +1,33 @@
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import * as enclosureLampsRoute from '@/app/api/enclosures/[id]/lamps/route';
 import * as lampsRoute from '@/app/api/lamps/route';
 import * as lampRoute from '@/app/api/lamps/[id]/route';
 import * as lampReadingsRoute from '@/app/api/lamps/[id]/readings/route';
 import * as calibrationRoute from '@/app/api/lamps/[id]/calibration/route';
 import * as readingRoute from '@/app/api/readings/[id]/route';
+import { enginePool, runEngineTask } from '@/lib/engine-pool';
+import { calibrate } from '@/lib/lamp-log/calibrate';
+import { lampChart } from '@/lib/lamp-log/chart';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
+import { lampFacts, readingFacts } from '@/lib/lamp-log/store';
+import { toDto as lampTypeDto } from '@/lib/lamp-types/store';
 import { seedStartingCatalogue } from '@/lib/species/seed';
-import { Design, LampType, Reading, Variant } from '@/models';
+import { Design, Lamp, LampType, Reading, Variant } from '@/models';
 import { createEnclosure, createMember, createOrganisation, withTestDatabase } from '../helpers/db';
 import { call, expectNoInternals } from './http';
 
 withTestDatabase();
+
+// The lamp page and the calibration fit on an engine worker thread. Outside Next its first start loads
+// the TypeScript sources through tsx, which on a busy machine takes longer than a test may: start it here.
+beforeAll(async () => {
+  await runEngineTask('calibrations', {
+    lamp: null as never,
+    readings: [],
+    objects: [],
+    today: todayIso(),
+  });
+}, 180_000);
 
 async function world() {
   const org = await createOrganisation('Shop A');
@@ -405,5 +421,53 @@ describe('calibration', () => {
     });
     expect(r.body.targets).toEqual([]);
     expect(r.body.hint).toMatch(/Link this lamp/);
+  });
+
+  it('fits on an engine worker thread, with the same figures as fitting on this one', async () => {
+    const w = await world();
+    await withDesign(w);
+    const lamp = await addLamp(w);
+    for (const [d, uvb] of [
+      [0, 60],
+      [60, 55],
+      [120, 50.5],
+      [200, 45],
+    ] as const) {
+      const takenAt = new Date(Date.UTC(2025, 0, 10 + d, 12)).toISOString();
+      expect((await addReading(w, lamp.id, { takenAt, distance: 30, value: uvb, unit: 'uvb' })).status).toBe(
+        201,
+      );
+    }
+    const tasks = () => enginePool().stats.tasks;
+    const before = tasks();
+    const detail = await call(lampRoute.GET, {
+      path: `/api/lamps/${lamp.id}`,
+      params: { id: lamp.id },
+      as: w.keeper,
+    });
+    expect(detail.status, detail.text).toBe(200);
+    expect(tasks()).toBe(before + 1);
+    const proposal = await call(calibrationRoute.GET, {
+      path: `/api/lamps/${lamp.id}/calibration`,
+      params: { id: lamp.id },
+      as: w.keeper,
+    });
+    expect(proposal.status, proposal.text).toBe(200);
+    expect(tasks()).toBe(before + 2);
+
+    // The same pure functions on this thread give the same answers.
+    const row = (await Lamp.findByPk(lamp.id))!;
+    const type = lampTypeDto((await LampType.findByPk(row.lampTypeId))!);
+    const readings = (await Reading.findAll({ where: { lampId: lamp.id }, order: [['takenAt', 'ASC']] })).map(
+      readingFacts,
+    );
+    const facts = lampFacts(row, type);
+    const here = lampChart({ facts, readings, need: null, today: todayIso() });
+    expect(detail.body.chart.curve).toEqual(JSON.parse(JSON.stringify(here.curve)));
+    expect(detail.body.chart.points).toEqual(JSON.parse(JSON.stringify(here.outlook.points)));
+    const target = proposal.body.targets[0];
+    expect(target.calibration).toEqual(
+      JSON.parse(JSON.stringify(calibrate(facts, readings, target.object, todayIso()))),
+    );
   });
 });
