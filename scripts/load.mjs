@@ -80,7 +80,7 @@ class Jar {
   }
 }
 
-async function api(base, jar, method, p, body) {
+export async function api(base, jar, method, p, body) {
   const res = await fetch(`${base}${p}`, {
     method,
     redirect: 'manual',
@@ -105,7 +105,7 @@ async function api(base, jar, method, p, body) {
 }
 
 /** Signs in the way a script can (STACK-NOTES: CSRF token, then the credentials callback with json=true). */
-async function signIn(base, email, password) {
+export async function signIn(base, email, password) {
   const jar = new Jar();
   const { csrfToken } = await api(base, jar, 'GET', '/api/auth/csrf');
   const res = await fetch(`${base}/api/auth/callback/credentials`, {
@@ -164,14 +164,14 @@ function cannon(opts, spec) {
   });
 }
 
-const loadAverage = () =>
+export const loadAverage = () =>
   os
     .loadavg()
     .map((l) => l.toFixed(2))
     .join(' ');
 
 /** A few sequential requests first, so the run does not measure cold code paths. */
-async function warmUp(base, jar, p, method = 'GET', body) {
+export async function warmUp(base, jar, p, method = 'GET', body) {
   for (let i = 0; i < 10; i++) {
     await fetch(`${base}${p}`, {
       method,

@@ -1,0 +1,77 @@
+import { QueryTypes } from 'sequelize';
+import { describe, expect, it } from 'vitest';
+import { lampListQuery, listLamps } from '@/lib/api/lamp-list';
+import { readStoredDesign } from '@/lib/variants/stored-design';
+import { Variant } from '@/models';
+import {
+  addToOrganisation,
+  createScaleOrganisation,
+  findScaleOrganisation,
+  scaledSize,
+} from '../scripts/lib/scale-org';
+import { testDb, withTestDatabase } from './helpers/db';
+
+// The scale benchmark's generated organisation (`npm run bench:scale`), at a tiny size: it makes the
+// rows it is asked for, in this organisation only, with stored outlooks the lamp log reads, and grows
+// the same organisation when asked again. Counts only: speed is the benchmark's to print.
+withTestDatabase();
+
+async function counts(organisationId: number) {
+  const [row] = await testDb().query<Record<string, number | string>>(
+    `SELECT (SELECT COUNT(*) FROM enclosures WHERE organisation_id = :org) AS enclosures,
+            (SELECT COUNT(*) FROM lamps l JOIN enclosures e ON e.id = l.enclosure_id
+              WHERE e.organisation_id = :org) AS lamps,
+            (SELECT COUNT(*) FROM readings r JOIN lamps l ON l.id = r.lamp_id
+               JOIN enclosures e ON e.id = l.enclosure_id WHERE e.organisation_id = :org) AS readings,
+            (SELECT COUNT(*) FROM designs d JOIN enclosures e ON e.id = d.enclosure_id
+              WHERE e.organisation_id = :org) AS designs,
+            (SELECT COUNT(*) FROM variants v JOIN designs d ON d.id = v.design_id
+               JOIN enclosures e ON e.id = d.enclosure_id WHERE e.organisation_id = :org) AS variants,
+            (SELECT COUNT(*) FROM memberships WHERE organisation_id = :org AND role = 'keeper') AS keepers,
+            (SELECT COUNT(*) FROM lamp_outlooks WHERE organisation_id = :org) AS outlooks`,
+    { replacements: { org: organisationId }, type: QueryTypes.SELECT },
+  );
+  return Object.fromEntries(Object.entries(row!).map(([k, v]) => [k, Number(v)]));
+}
+
+describe('the scale benchmark’s organisation', () => {
+  it('has the rows asked for, outlooks the lamp log reads, and grows when asked again', async () => {
+    const size = { enclosures: 12, lamps: 40, readings: 300, designs: 3 };
+    expect(scaledSize(size, 2)).toEqual({ enclosures: 24, lamps: 80, readings: 600, designs: 6 });
+
+    const org = await createScaleOrganisation('scale test');
+    const added = await addToOrganisation(testDb(), org, size);
+    expect(added).toMatchObject({ ...size, variants: 6, keepers: 2, outlooks: 40 });
+    expect(await counts(org.organisationId)).toEqual({ ...size, variants: 6, keepers: 2, outlooks: 40 });
+
+    // Every variant is a design the app can read, and the lamp log lists the lamps from stored outlooks.
+    const variants = await Variant.findAll();
+    expect(variants).toHaveLength(6);
+    for (const v of variants) expect(readStoredDesign(v.designJson).objects.length).toBeGreaterThan(1);
+    const { keeper: _keeper, ...query } = lampListQuery.parse({
+      organisationId: String(org.organisationId),
+      limit: '50',
+    });
+    const page = await listLamps(query);
+    expect(page.total).toBe(40);
+    expect(page.counts.pending).toBe(0);
+
+    // Growing the same organisation: the earlier rows stay, the new ones add up.
+    await addToOrganisation(testDb(), org, scaledSize(size, 1), { offset: size.enclosures });
+    expect(await counts(org.organisationId)).toEqual({
+      enclosures: 24,
+      lamps: 80,
+      readings: 600,
+      designs: 6,
+      variants: 12,
+      keepers: 4,
+      outlooks: 80,
+    });
+    const found = await findScaleOrganisation(testDb());
+    expect(found).toMatchObject({
+      organisationId: org.organisationId,
+      ownerEmail: org.ownerEmail,
+      size: { enclosures: 24, lamps: 80, readings: 600, designs: 6 },
+    });
+  }, 180_000);
+});
