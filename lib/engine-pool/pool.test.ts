@@ -59,6 +59,15 @@ describe('worker pool', () => {
     expect(p.stats).toMatchObject({ timedOut: 1, started: 2 });
   });
 
+  it('gives a fresh thread’s first task its start-up time on top of the limit, and later tasks none', async () => {
+    const p = pool({ startupMs: 2_000 });
+    // 400 ms of work under a 150 ms limit passes on a fresh thread (it may be loading its code) ...
+    await expect(p.run('spin', { ms: 400 }, { timeoutMs: 150 })).resolves.toBe(400);
+    // ... but not on the same thread once it has answered.
+    await expect(p.run('spin', { ms: 2_000 }, { timeoutMs: 150 })).rejects.toBeInstanceOf(EngineTimeoutError);
+    expect(p.stats).toMatchObject({ tasks: 2, timedOut: 1, started: 1 });
+  });
+
   it('cancels a running task (ending its thread) and a queued one (never started)', async () => {
     const p = pool();
     const running = new AbortController();
