@@ -13,6 +13,7 @@ import * as m0011 from './0011-password-resets';
 import * as m0012 from './0012-exact-numbers';
 import * as m0013 from './0013-list-sort-indexes';
 import * as m0014 from './0014-reading-setup';
+import * as m0015 from './0015-lamp-lifetime-table';
 
 export type Migration = {
   name: string;
@@ -39,4 +40,5 @@ export const migrations: Migration[] = [
   { name: '0012-exact-numbers', ...m0012 },
   { name: '0013-list-sort-indexes', ...m0013 },
   { name: '0014-reading-setup', ...m0014 },
+  { name: '0015-lamp-lifetime-table', ...m0015 },
 ];

@@ -1,4 +1,4 @@
-import { LAMP_TECHS, type LampTech as LampTechId } from '@/simulation';
+import { LAMP_LIFETIME, LAMP_TECHS, techHalfLifeMonths, type LampTech as LampTechId } from '@/simulation';
 import { cmToDisplay, displayToCm, type LengthUnit } from '@/shared/units';
 import type { LampTypeDto, LampTypeField, LampTypeInput } from '@/lib/lamp-types/schema';
 
@@ -50,8 +50,7 @@ export function initialLampState(t: LampTypeDto | null, lengthUnit: LengthUnit):
 /** The engine's defaults for a technology, as form text (a starting point, each to be checked). */
 export function techDefaults(tech: LampTechId, lengthUnit: LengthUnit) {
   const d = LAMP_TECHS[tech];
-  const halfLife =
-    'halfLifeMonths' in d.decay && d.decay.halfLifeMonths < 1e6 ? d.decay.halfLifeMonths : null;
+  const life = LAMP_LIFETIME[tech];
   return {
     tech,
     form: d.form,
@@ -62,8 +61,8 @@ export function techDefaults(tech: LampTechId, lengthUnit: LengthUnit) {
     beamDeg: s(d.beamDeg),
     reflectorGain: '1',
     watts: s(d.watts),
-    halfLifeMonths: d.uvbAt30 > 0 ? s(halfLife) : '',
-    replaceAfterMonths: '',
+    halfLifeMonths: s(techHalfLifeMonths(tech)),
+    replaceAfterMonths: s(life.replaceMonths),
   };
 }
 

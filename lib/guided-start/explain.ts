@@ -1,5 +1,5 @@
 import type { Finding } from '@/simulation';
-import { controlAdvice, neededBaskingCm, UV_ZONES, type SpeciesSheet } from '@/simulation';
+import { controlAdvice, lifetimeSentence, neededBaskingCm, UV_ZONES, type SpeciesSheet } from '@/simulation';
 import { targetWarning } from '@/lib/species/consistency';
 import { baskingZone, hideBox, lampY, type EnclosureInput, type Lid } from './layout';
 import type { Proposal } from './propose';
@@ -97,6 +97,13 @@ export function explain(
       [{ tech: c.uv.tech, name: c.uv.name }, ...(c.heat ? [{ tech: c.heat.tech, name: c.heat.name }] : [])],
       species.photoperiodH,
     ),
+  });
+  out.push({
+    heading: 'Lamp life',
+    text: lifetimeSentence(c.uv.tech, c.uv.name, {
+      replaceMonths: c.uv.replaceAfterMonths,
+      halfLifeMonths: c.uv.decayPoints ? null : c.uv.halfLifeMonths,
+    }),
   });
   const hide = hideBox(enc);
   const zoneX = baskingZone(enc, neededBaskingCm(species)).x;

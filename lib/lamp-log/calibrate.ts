@@ -1,7 +1,7 @@
 import type { LampCalibration, LampObject } from '@/simulation';
-import { LAMP_TECHS } from '@/simulation';
+import { LAMP_TECHS, ORDINARY_HOURS_PER_DAY } from '@/simulation';
 import { dayNumber, DAYS_PER_MONTH, isoDay } from './dates';
-import { defaultDecayFor, REFERENCE_HOURS_PER_DAY } from './decay';
+import { defaultDecayFor } from './decay';
 import { predict } from './fit';
 import { toBareReference, type LampShape } from './geometry';
 import { lampOutlook, type LampFacts, type ReadingFacts } from './outlook';
@@ -112,11 +112,7 @@ export function calibrate(
   }
   if (gain !== 1) notes.push(`Readings taken under the reflector were divided by its gain (${gain}).`);
 
-  if (
-    fit.kind === 'exponential' ||
-    fit.kind === 'two-phase' ||
-    lamp.hoursPerDay !== REFERENCE_HOURS_PER_DAY
-  ) {
+  if (fit.kind === 'exponential' || fit.kind === 'two-phase' || lamp.hoursPerDay !== ORDINARY_HOURS_PER_DAY) {
     // A fitted shape (or the usual shape at this lamp's pace) as a month-by-month table for the engine.
     const maxMonths = Math.min(600, Math.max(24, Math.ceil(outlook.ageMonths) + 12));
     const step = Math.max(1, Math.ceil(maxMonths / 199));

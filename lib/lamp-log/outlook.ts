@@ -2,6 +2,7 @@ import type { ReadingUnit } from '@/models/reading';
 import type { ReadingSetup, ReadingThrough } from '@/shared/reading-setup';
 import { baselineDueOn, inBurnIn } from './burn-in';
 import { addDays, dayNumber, DAYS_PER_MONTH, isoDay } from './dates';
+import { LAMP_LIFETIME, ORDINARY_HOURS_PER_DAY, type LampTech } from '@/simulation';
 import { defaultDecayFor, type DecaySource } from './decay';
 import { band, firstDayBelow, fitDecay, predict, type DecayFit } from './fit';
 import { distanceFactor, REFERENCE_CM, toBareReference, toReference, type LampShape } from './geometry';
@@ -14,8 +15,12 @@ import type { Status } from './status';
  * or a replacement, and a status. Pure: the caller loads the rows and passes "today".
  */
 
-/** How often to test a UV lamp with a meter: every 3 months (common practice, no published source). */
-export const TEST_INTERVAL_DAYS = 91;
+/** How often to test a lamp with a meter, days: the technology's test interval (the engine's lifetime table). */
+export function testIntervalDays(tech: LampTech): number {
+  return Math.round((LAMP_LIFETIME[tech].testMonths ?? DEFAULT_TEST_MONTHS) * DAYS_PER_MONTH);
+}
+/** A lamp of a heat-only technology that shows UV readings is tested like a UV lamp (common practice). */
+const DEFAULT_TEST_MONTHS = 3;
 /** Say "test soon" / "replace" this many days ahead of the date. */
 export const SOON_DAYS = 14;
 /** Look this far ahead for the day the basking zone falls below the need. */
@@ -279,7 +284,7 @@ export function lampOutlook(
   // Test schedule: the baseline once the burn-in is over, then every few months.
   const testDueOn =
     lastReading && burnIn.baselineTaken
-      ? addDays(isoDay(dayNumber(lastReading.takenAt)), TEST_INTERVAL_DAYS)
+      ? addDays(isoDay(dayNumber(lastReading.takenAt)), testIntervalDays(lamp.type.tech))
       : baselineOn;
 
   // Basking zone: the fitted 30 cm output brought to the basking distance, through whatever lies between.
@@ -311,11 +316,12 @@ export function lampOutlook(
     if (early !== null) fallsBelowEarliestOn = isoDay(start + early);
   }
 
-  // Replacement: from the readings when we can, else the lamp type's typical interval.
+  // Replacement: from the readings when we can, else the lamp type's typical interval (months of
+  // ordinary days, stretched or shortened by the lamp's own hours a day).
   let replaceDueOn: string | null = fallsBelowOn;
   let replaceBasis: Outlook['replaceBasis'] = fallsBelowOn ? 'readings' : null;
   if (!basking && lamp.type.replaceAfterMonths) {
-    const days = (lamp.type.replaceAfterMonths * DAYS_PER_MONTH * 12) / lamp.hoursPerDay;
+    const days = (lamp.type.replaceAfterMonths * DAYS_PER_MONTH * ORDINARY_HOURS_PER_DAY) / lamp.hoursPerDay;
     replaceDueOn = isoDay(start + Math.round(days));
     replaceBasis = 'typical interval';
   }

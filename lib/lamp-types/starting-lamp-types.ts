@@ -1,31 +1,29 @@
-import { LAMP_PRESETS, LAMP_TECHS, type LampPresetId } from '@/simulation';
-import type { LampTypeField, LampTypeInput } from './schema';
 import {
-  HEAT_REPLACEMENT_SOURCE,
-  LED_REPLACEMENT_SOURCE,
-  REPLACEMENT_SOURCE,
-  TYPICAL_REPLACEMENT_MONTHS,
-} from './replacement';
+  LAMP_LIFETIME,
+  LAMP_PRESETS,
+  LAMP_TECHS,
+  lifetimeSources,
+  techHalfLifeMonths,
+  type LampPresetId,
+} from '@/simulation';
+import type { LampTypeField, LampTypeInput } from './schema';
 
 /**
  * The lamp catalogue every organisation starts with, derived from the engine's presets and technology
- * defaults (simulation/model/presets.ts and techs.ts) so the figures live in one place. Each field says
+ * defaults (simulation/model/presets.ts, techs.ts and lifetime.ts) so the figures live in one place. Each field says
  * where it comes from: the preset's own note for its output figures, the technology's note for the rest.
  */
 
 export type StartingLampType = LampTypeInput & { presetKey: LampPresetId };
-
-/** Decay half-lives this long mean "no UV to decay" in the engine (heat-only lamps). */
-const NO_DECAY_MONTHS = 1e6;
 
 export function startingLampType(presetKey: LampPresetId): StartingLampType {
   const preset = LAMP_PRESETS[presetKey];
   const lamp = preset.lamp;
   const tech = LAMP_TECHS[lamp.tech];
   const uvbAt30 = lamp.uvbAt30 ?? tech.uvbAt30;
-  const halfLife = 'halfLifeMonths' in tech.decay ? tech.decay.halfLifeMonths : null;
-  const decays = uvbAt30 > 0 && halfLife !== null && halfLife < NO_DECAY_MONTHS;
-  const replace = TYPICAL_REPLACEMENT_MONTHS[lamp.tech];
+  const life = LAMP_LIFETIME[lamp.tech];
+  const lifeNote = lifetimeSources(lamp.tech);
+  const halfLife = uvbAt30 > 0 ? techHalfLifeMonths(lamp.tech) : null;
 
   const presetNote = readable(preset.source);
   const techNote = (...keys: string[]) => `${tech.label} defaults: ${readable(clauses(tech.source, keys))}`;
@@ -36,13 +34,8 @@ export function startingLampType(presetKey: LampPresetId): StartingLampType {
     uviPerUvb: techNote('uviPerUvb'),
     radiantFraction: techNote('radiantFraction'),
     reflectorGain: 'bare lamp, no reflector (gain 1)',
-    halfLifeMonths: decays ? techNote('decay', 'half-life') : 'no UVB output to decay',
-    replaceAfterMonths:
-      replace !== null
-        ? REPLACEMENT_SOURCE
-        : lamp.tech === 'led-uvb'
-          ? LED_REPLACEMENT_SOURCE
-          : HEAT_REPLACEMENT_SOURCE,
+    halfLifeMonths: halfLife !== null ? `${tech.label}: ${lifeNote.decay}` : 'no UVB output to decay',
+    replaceAfterMonths: `${tech.label}: ${lifeNote.replace}`,
   };
   if (lamp.form === 'tube') sources.lengthCm = presetNote;
 
@@ -58,9 +51,9 @@ export function startingLampType(presetKey: LampPresetId): StartingLampType {
     beamDeg: lamp.beamDeg ?? tech.beamDeg,
     reflectorGain: lamp.reflectorGain ?? 1,
     watts: lamp.watts ?? tech.watts,
-    halfLifeMonths: decays ? halfLife : null,
+    halfLifeMonths: halfLife,
     decayPoints: null,
-    replaceAfterMonths: replace,
+    replaceAfterMonths: life.replaceMonths,
     notes: preset.usefulReachCm !== null ? usefulReachNote(preset.usefulReachCm) : null,
     sources,
   };

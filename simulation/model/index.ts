@@ -8,5 +8,6 @@ export * from './resolve';
 export * from './presets';
 export * from './backdrop';
 export * from './control';
+export * from './lifetime';
 export * from './work';
 export * from './walls';

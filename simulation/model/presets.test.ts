@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { probe } from '../fields/grid';
 import type { Design, LampObject } from './schema';
 import { GOOD_REFLECTOR_GAIN, LAMP_PRESETS, USEFUL_REACH_UVI, type LampPresetId } from './presets';
-import { decayFactor, LAMP_TECHS } from './techs';
+import { LAMP_TECHS } from './techs';
 import { DEFAULT_SCREEN_UVB_TRANSMISSION, meshOpenArea } from './materials';
 
 /** Useful reach (see presets.ts): distance straight below a new, bare lamp where the UVI falls to 1.0. */
@@ -75,37 +75,5 @@ describe('barriers', () => {
     const cut = 1 - DEFAULT_SCREEN_UVB_TRANSMISSION;
     expect(cut).toBeGreaterThanOrEqual(0.25);
     expect(cut).toBeLessThanOrEqual(0.5);
-  });
-});
-
-describe('ageing curves', () => {
-  // common practice, no published source: UVB output falls to about half in roughly 6 months for the
-  // shortest-lived lamps; compact lamps fail at 6–8 months, linear tubes about 12, mercury vapour 12–14,
-  // metal halide 24 or more. "Fail" is read as output down to half of new.
-  const halfAt = (tech: keyof typeof LAMP_TECHS) => {
-    let m = 0;
-    while (decayFactor(LAMP_TECHS[tech].decay, m) > 0.5 && m < 1000) m += 0.25;
-    return m;
-  };
-  it('halves at the trade’s replacement age per technology', () => {
-    expect(halfAt('compact')).toBeGreaterThanOrEqual(6);
-    expect(halfAt('compact')).toBeLessThanOrEqual(8);
-    expect(halfAt('t5')).toBeCloseTo(12, 0);
-    expect(halfAt('t8')).toBeCloseTo(12, 0);
-    expect(halfAt('mercury-vapour')).toBeGreaterThanOrEqual(12);
-    expect(halfAt('mercury-vapour')).toBeLessThanOrEqual(14);
-    expect(halfAt('metal-halide')).toBeGreaterThanOrEqual(24);
-  });
-  it('starts at 1 and falls; tables interpolate', () => {
-    for (const t of Object.values(LAMP_TECHS)) expect(decayFactor(t.decay, 0)).toBe(1);
-    const table = {
-      points: [
-        [0, 1],
-        [6, 0.7],
-        [12, 0.6],
-      ] as [number, number][],
-    };
-    expect(decayFactor(table, 3)).toBeCloseTo(0.85, 12);
-    expect(decayFactor(table, 24)).toBeCloseTo(0.6, 12);
   });
 });

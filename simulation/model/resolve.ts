@@ -3,6 +3,7 @@
  */
 import type { Design, Enclosure, FoliageObject, GlassObject, LampObject, ScreenObject } from './schema';
 import { decayFactor, LAMP_TECHS, type DecayCurve } from './techs';
+import { techDecay } from './lifetime';
 import {
   DEFAULT_FOLIAGE_UVB_TRANSMISSION,
   DEFAULT_GLASS_UVB_TRANSMISSION,
@@ -49,7 +50,7 @@ export function resolveLamp(lamp: LampObject): ResolvedLamp {
     radiantFraction: lamp.radiantFraction ?? d.radiantFraction,
     glassIrTransmission: d.glassIrTransmission,
     beamHeatShare: d.beamHeatShare,
-    decay: lamp.decay ?? d.decay,
+    decay: lamp.decay ?? techDecay(lamp.tech),
   };
 }
 

@@ -50,14 +50,9 @@ export interface LampTechDefaults {
    * whose radiation is not concentrated by a reflector.
    */
   beamHeatShare: number;
-  decay: DecayCurve;
-  /** Where the numbers come from. */
+  /** Where the numbers come from (the lamp's ageing is in lifetime.ts). */
   source: string;
 }
-
-const UV_DECAY_NOTE =
-  'decay: UVB output falls to about half within months — compact lamps at 6–8 months, linear tubes about 12, ' +
-  'mercury vapour 12–14, metal halide 24 or more (common practice, no published source)';
 
 /**
  * glassIrTransmission values: 0.9 × the black-body share below 2.7 µm at an assumed radiator temperature
@@ -75,12 +70,10 @@ export const LAMP_TECHS: Record<LampTech, LampTechDefaults> = {
     radiantFraction: 0.5,
     glassIrTransmission: 0.05,
     beamHeatShare: 1,
-    decay: { halfLifeMonths: 12 },
     source:
       'uvbAt30: the t5-high preset (see presets.ts); watts: a 55 cm T5 (from memory); uviPerUvb 0.04: typical ratio of UVI-meter ' +
       'to broadband-meter readings under fluorescent UVB lamps (from memory); radiantFraction 0.5 (from memory); ' +
-      'glass share: tube wall near 40 °C radiates long-wave only (Planck); ' +
-      UV_DECAY_NOTE,
+      'glass share: tube wall near 40 °C radiates long-wave only (Planck)',
   },
   t8: {
     label: 'T8 fluorescent tube',
@@ -92,10 +85,8 @@ export const LAMP_TECHS: Record<LampTech, LampTechDefaults> = {
     radiantFraction: 0.5,
     glassIrTransmission: 0.05,
     beamHeatShare: 1,
-    decay: { halfLifeMonths: 12 },
     source:
-      'uvbAt30: the t8-medium preset (see presets.ts); watts: a 60 cm T8 (from memory); uviPerUvb as T5 (from memory); ' +
-      UV_DECAY_NOTE,
+      'uvbAt30: the t8-medium preset (see presets.ts); watts: a 60 cm T8 (from memory); uviPerUvb as T5 (from memory)',
   },
   compact: {
     label: 'Compact fluorescent UVB lamp',
@@ -107,9 +98,7 @@ export const LAMP_TECHS: Record<LampTech, LampTechDefaults> = {
     radiantFraction: 0.5,
     glassIrTransmission: 0.05,
     beamHeatShare: 1,
-    decay: { halfLifeMonths: 7 },
-    source:
-      'uvbAt30, watts (from memory); half-life 7 months: compact lamps fail at 6–8 months ' + UV_DECAY_NOTE,
+    source: 'uvbAt30, watts (from memory)',
   },
   'mercury-vapour': {
     label: 'Self-ballasted mercury vapour lamp',
@@ -121,12 +110,10 @@ export const LAMP_TECHS: Record<LampTech, LampTechDefaults> = {
     radiantFraction: 0.6,
     glassIrTransmission: 0.6,
     beamHeatShare: 1,
-    decay: { halfLifeMonths: 13 },
     source:
       'uvbAt30 chosen so that UVI 1 is reached about 90 cm below (common practice, no published source); ' +
       'beamDeg, radiantFraction, glass share (from memory), checked against a 35 °C floor hot spot 40 cm below ' +
-      '(common practice, no published source); half-life 13 months: ' +
-      UV_DECAY_NOTE,
+      '(common practice, no published source)',
   },
   'metal-halide': {
     label: 'Metal halide UVB lamp',
@@ -138,11 +125,9 @@ export const LAMP_TECHS: Record<LampTech, LampTechDefaults> = {
     radiantFraction: 0.6,
     glassIrTransmission: 0.6,
     beamHeatShare: 0.3,
-    decay: { halfLifeMonths: 24 },
     source:
       'uvbAt30 chosen so that UVI 1 is reached about 180 cm below (common practice, no published source); ' +
-      'beamDeg, radiantFraction, beamHeatShare (from memory); half-life 24 months: ' +
-      UV_DECAY_NOTE,
+      'beamDeg, radiantFraction, beamHeatShare (from memory)',
   },
   'led-uvb': {
     label: 'UVB LED panel',
@@ -154,7 +139,6 @@ export const LAMP_TECHS: Record<LampTech, LampTechDefaults> = {
     radiantFraction: 0.3,
     glassIrTransmission: 0.05,
     beamHeatShare: 1,
-    decay: { halfLifeMonths: 24 },
     source: 'all values from memory; LED UVB sources are new and vary widely — calibrate with a meter',
   },
   halogen: {
@@ -167,7 +151,6 @@ export const LAMP_TECHS: Record<LampTech, LampTechDefaults> = {
     radiantFraction: 0.85,
     glassIrTransmission: 0.77,
     beamHeatShare: 0.1,
-    decay: { halfLifeMonths: 1e9 },
     source:
       'radiantFraction 0.85 (from memory: most of a filament lamp input leaves as visible and infrared radiation); ' +
       'glass share: filament about 3000 K, 86 % of black-body emission below 2.7 µm (Incropera Table 12.2), × 0.9; ' +
@@ -185,7 +168,6 @@ export const LAMP_TECHS: Record<LampTech, LampTechDefaults> = {
     radiantFraction: 0.85,
     glassIrTransmission: 0.75,
     beamHeatShare: 0.25,
-    decay: { halfLifeMonths: 1e9 },
     source:
       'radiantFraction (from memory); glass share: filament about 2700 K, 83 % below 2.7 µm (Incropera ' +
       'Table 12.2), × 0.9; beamHeatShare 0.25 so that a 60 W reflector lamp 30 cm above gives about 40 °C ' +
@@ -201,7 +183,6 @@ export const LAMP_TECHS: Record<LampTech, LampTechDefaults> = {
     radiantFraction: 0.6,
     glassIrTransmission: 0.05,
     beamHeatShare: 1,
-    decay: { halfLifeMonths: 1e9 },
     source:
       'radiantFraction 0.6 (from memory); glass share: surface about 700 K, 6 % below 2.7 µm (Incropera ' +
       'Table 12.2), × 0.9',
