@@ -11,6 +11,7 @@ import { useSimulation } from './fields/useSimulation';
 import { StudioContext, useStudio } from './hooks/useStudio';
 import { useShortcuts } from './hooks/useShortcuts';
 import { useBackdropImage } from './hooks/useBackdropImage';
+import { TABLET_QUERY, WIDE_QUERY, useMediaQuery } from './hooks/useMediaQuery';
 import {
   ConflictBanner,
   RestoreBanner,
@@ -18,6 +19,7 @@ import {
   SAFETY_FINDINGS,
   ViewOnlyBanner,
 } from './panels/Banners';
+import { ActionsMenu } from './panels/ActionsMenu';
 import { CanvasLegend } from './panels/CanvasLegend';
 import { HelpDialog } from './panels/HelpDialog';
 import { ObjectSummary } from './panels/ObjectSummary';
@@ -154,7 +156,14 @@ function StudioEditor({
   // A refused save (signed out, access withdrawn) turns the studio view-only until a save succeeds again.
   const refused = save.state.kind === 'refused' ? save.state.reason : null;
   const viewOnly = readOnly || refused !== null;
-  useEffect(() => store.setReadOnly(viewOnly), [store, viewOnly]);
+  // A phone opens a design for looking at: a thumb resting on the screen must not move a lamp. The Edit
+  // switch turns editing on (and off again); tablets and wider screens start with it on.
+  const tablet = useMediaQuery(TABLET_QUERY);
+  const wide = useMediaQuery(WIDE_QUERY);
+  const panelOpen = useStudio(store, (s) => s.session.panelOpen);
+  const [viewing, setViewing] = useState(() => !window.matchMedia(TABLET_QUERY).matches);
+  const switchable = !viewOnly && (viewing || !tablet);
+  useEffect(() => store.setReadOnly(viewOnly || viewing), [store, viewOnly, viewing]);
 
   // Units and view preferences are remembered on this device.
   const prefs = useStudio(store, (s) => JSON.stringify(pickPrefs(s.session)));
@@ -195,7 +204,12 @@ function StudioEditor({
   return (
     <StudioContext.Provider value={ctx}>
       <div className="flex h-full min-h-0 flex-col bg-basalt-50 text-basalt-900" data-testid="studio">
-        <Toolbar title={title} backHref={backHref} backLabel={backLabel} />
+        <Toolbar
+          title={title}
+          backHref={backHref}
+          backLabel={backLabel}
+          editSwitch={switchable ? { on: !viewing, onChange: (on) => setViewing(!on) } : undefined}
+        />
         {viewOnly && (
           <ViewOnlyBanner
             refused={refused}
@@ -213,9 +227,11 @@ function StudioEditor({
         {safety.length > 0 && (
           <SafetyBanner findings={safety} onShow={(id) => store.setSession({ highlight: id })} />
         )}
-        <div className="flex min-h-0 flex-1">
+        {/* Canvas first: wide screens put the palette and the panels beside it, narrower ones a bar of
+            tools above it and the panels in a sheet below it. */}
+        <div className="flex min-h-0 flex-1 flex-col lg:flex-row">
           <Palette />
-          <main className="relative min-w-0 flex-1" aria-label="Canvas">
+          <main className="relative min-h-0 min-w-0 flex-1" aria-label="Canvas">
             <StudioCanvas
               store={store}
               pointer={pointer}
@@ -229,7 +245,13 @@ function StudioEditor({
               climbs={species.find((s) => s.id === speciesId)?.climbs === true}
             />
             <ObjectSummary id={summaryId} highlight={highlighted} />
-            {fieldsVisible && <CanvasLegend field={field} temp={tempUnit} legend={legend} />}
+            {/* Under an open sheet the canvas is short: the Fields tab has the legend then. */}
+            {fieldsVisible && !(panelOpen && !wide) && (
+              <CanvasLegend field={field} temp={tempUnit} legend={legend} />
+            )}
+            <ActionsMenu
+              viewOnlyNote={viewing && !viewOnly ? 'View only: turn on Edit to change it.' : 'View only.'}
+            />
           </main>
           <SidePanel sim={sim} legend={legend} species={species} />
         </div>

@@ -55,10 +55,13 @@ export function StudioLoader({
         <p
           role="note"
           data-testid="scratch-note"
-          className="shrink-0 border-b border-sand-300 bg-sand-50 px-4 py-1.5 text-sm text-sand-900"
+          className="shrink-0 border-b border-sand-300 bg-sand-50 px-4 py-1.5 text-caption text-sand-900 sm:text-sm"
         >
-          <strong>Kept only in this browser.</strong> Nothing is sent to a server; clearing this browser’s
-          data or using another device loses it.{' '}
+          <strong>Kept only in this browser.</strong>{' '}
+          {/* A phone keeps the canvas's room: the short form of the note. */}
+          <span className="hidden sm:inline">
+            Nothing is sent to a server; clearing this browser’s data or using another device loses it.{' '}
+          </span>
           <Link href="/sign-up" className="font-medium text-sky-800 underline">
             Create an account
           </Link>{' '}

@@ -131,8 +131,10 @@ describe('studio depth strip (no account)', () => {
     await expect.poll(() => valueOf(page.getByTestId('depth-lamp-uv1')), eventually).toBeCloseTo(13.77, 6);
     expect(await valueOf(page.getByTestId('depth-section'))).toBe(40);
 
-    // Phone size: the strip is still there and usable.
+    // Phone size: the panels fold into a sheet under the canvas; opened, the strip is there and usable.
     await page.setViewportSize({ width: 390, height: 844 });
+    await expect.poll(() => page.getByTestId('depth-strip').isVisible(), eventually).toBe(false);
+    await page.getByTestId('sheet-toggle').click();
     await expect.poll(() => page.getByTestId('depth-strip').isVisible(), eventually).toBe(true);
     await screenshot(page, 'studio-depth-phone');
     expect(session.pageErrors()).toEqual([]);

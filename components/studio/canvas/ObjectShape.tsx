@@ -2,9 +2,9 @@
 import { memo } from 'react';
 // How each design object is drawn: our own visual language. Shapes are drawn in stage pixels
 // from the camera; nothing here listens to events (hit testing is in interaction.ts).
-import { Circle, Group, Line, Rect, Shape, Text } from 'react-konva';
+import { Circle, Group, Line, Rect, Shape } from 'react-konva';
 import type { Context } from 'konva/lib/Context';
-import { designToStage, type Camera } from '../geometry/camera';
+import { designToStage, type Camera, type Rect as Rect2 } from '../geometry/camera';
 import { BULB_RADIUS_CM, lampExtent, TUBE_THICKNESS_CM } from '../geometry/objects';
 import { LAMP_TECHS } from '@/simulation';
 import { calibrationLabel } from '../state/calibration';
@@ -24,13 +24,35 @@ const TECH_SHORT: Record<LampObject['tech'], string> = {
   ceramic: 'Ceramic',
 };
 
-function Lamp({ o, cam }: { o: LampObject; cam: Camera }) {
-  const col = lampLook(o);
+/** A lamp's label on the canvas; a calibrated lamp says so on a second line (its figures are the real lamp's). */
+export function lampLabel(o: LampObject): { text: string; calibrated: boolean } {
   const watts = o.watts ?? LAMP_TECHS[o.tech].watts;
   const calibrated = calibrationLabel(o);
-  // A calibrated lamp says so on a second line: its figures are the real lamp's, not the catalogue's.
-  const label = `${o.name ?? TECH_SHORT[o.tech]} · ${watts} W${calibrated ? `\n✓ ${calibrated}` : ''}`;
-  const labelLift = calibrated ? 28 : 15;
+  return {
+    text: `${o.name ?? TECH_SHORT[o.tech]} · ${watts} W${calibrated ? `\n✓ ${calibrated}` : ''}`,
+    calibrated: calibrated !== null,
+  };
+}
+
+/** The lamp as drawn (stage px), bulb cap included: its label goes around this (LampLabels). */
+export function lampBody(o: LampObject, cam: Camera): Rect2 {
+  const c = designToStage(cam, o);
+  if (o.form === 'tube') {
+    const { x1, x2 } = lampExtent(o);
+    const h = Math.max(6, TUBE_THICKNESS_CM * cam.zoom);
+    return {
+      x: designToStage(cam, { x: x1, y: o.y }).x,
+      y: c.y - h / 2,
+      width: (x2 - x1) * cam.zoom,
+      height: h,
+    };
+  }
+  const r = Math.max(6, BULB_RADIUS_CM * cam.zoom);
+  return { x: c.x - r, y: c.y - r * 1.55, width: 2 * r, height: r * 2.55 };
+}
+
+function Lamp({ o, cam }: { o: LampObject; cam: Camera }) {
+  const col = lampLook(o);
   const c = designToStage(cam, o);
   if (o.form === 'tube') {
     const { x1, x2 } = lampExtent(o);
@@ -72,16 +94,6 @@ function Lamp({ o, cam }: { o: LampObject; cam: Camera }) {
           fill={C.basalt500}
           cornerRadius={[0, h / 2, h / 2, 0]}
         />
-        <Text
-          x={a.x}
-          y={c.y - h / 2 - labelLift}
-          width={w}
-          align="center"
-          text={label}
-          fontSize={11}
-          lineHeight={1.15}
-          fill={calibrated ? C.moss700 : C.basalt700}
-        />
       </Group>
     );
   }
@@ -117,16 +129,6 @@ function Lamp({ o, cam }: { o: LampObject; cam: Camera }) {
       />
       <Circle x={c.x} y={c.y} radius={r} fill={col.fill} stroke={col.stroke} strokeWidth={1.5} />
       <Circle x={c.x} y={c.y} radius={r * 0.45} fill={col.core} />
-      <Text
-        x={c.x - 70}
-        y={c.y - r * 1.55 - labelLift}
-        width={140}
-        align="center"
-        text={label}
-        fontSize={11}
-        lineHeight={1.15}
-        fill={calibrated ? C.moss700 : C.basalt700}
-      />
     </Group>
   );
 }

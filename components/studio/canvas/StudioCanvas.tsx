@@ -8,10 +8,13 @@ import {
   useRef,
   useState,
   type DragEvent,
+  type KeyboardEvent as ReactKeyboardEvent,
+  type MouseEvent as ReactMouseEvent,
   type PointerEvent as ReactPointerEvent,
 } from 'react';
 import { Layer, Stage } from 'react-konva';
-import { stageToDesign, zoomAt, type Point } from '../geometry/camera';
+import { designToStage, stageToDesign, zoomAt, type Point } from '../geometry/camera';
+import { objectBounds } from '../geometry/objects';
 import * as A from '../state/actions';
 import { isPlaceTool, type PlaceTool } from '../state/session';
 import type { StudioStore } from '../state/store';
@@ -25,6 +28,7 @@ import { BackdropFrame } from './BackdropFrame';
 import { HusbandryLayer } from './HusbandryLayer';
 import type { Finding } from '../fields/engineTypes';
 import { FieldBands, type ColouredBand } from './FieldBands';
+import { LampLabels } from './LampLabels';
 import { ObjectShape } from './ObjectShape';
 import {
   GuidesLayer,
@@ -39,6 +43,10 @@ import {
 import { Rulers } from './Rulers';
 
 export const PALETTE_DRAG_TYPE = 'application/x-baskwell-tool';
+/** How long a finger rests (ms) before its press opens the actions menu. */
+export const LONG_PRESS_MS = 500;
+/** How far (px) a resting finger may wander and still count as a long press. */
+export const LONG_PRESS_SLOP_PX = 10;
 
 export interface PointerInfo {
   stage: Point;
@@ -62,10 +70,16 @@ export interface CanvasProps {
 }
 
 function mods(
-  e: { shiftKey: boolean; ctrlKey: boolean; metaKey: boolean; altKey: boolean },
+  e: { shiftKey: boolean; ctrlKey: boolean; metaKey: boolean; altKey: boolean; pointerType?: string },
   pan = false,
 ): Modifiers {
-  return { shift: e.shiftKey, mod: e.ctrlKey || e.metaKey, alt: e.altKey, pan };
+  return {
+    shift: e.shiftKey,
+    mod: e.ctrlKey || e.metaKey,
+    alt: e.altKey,
+    pan,
+    touch: e.pointerType === 'touch',
+  };
 }
 
 function PointerProbe({
@@ -108,6 +122,22 @@ export default function StudioCanvas({
   const spaceDown = useRef(false);
   const touches = useRef(new Map<number, Point>());
   const pinch = useRef<{ dist: number; mid: Point } | null>(null);
+  const longPress = useRef<{ timer: number; at: Point } | null>(null);
+  const lastPointerType = useRef('mouse');
+
+  const endLongPress = () => {
+    if (longPress.current) window.clearTimeout(longPress.current.timer);
+    longPress.current = null;
+  };
+  useEffect(() => endLongPress, []);
+
+  /** Opens the actions menu at a stage point, for the object or probe there (selecting it) or for none. */
+  const openActions = (p: Point) => {
+    ui.cancel();
+    const id = ui.probeAt(p) ?? ui.objectAt(p)?.id ?? null;
+    if (id && !store.session.selection.includes(id)) A.select(store, [id]);
+    store.setSession({ actionsMenu: { at: p, objectId: id } });
+  };
 
   // Size the stage to its box; fit the design the first time the size is known.
   useEffect(() => {
@@ -115,9 +145,22 @@ export default function StudioCanvas({
     if (!el) return;
     const ro = new ResizeObserver(() => {
       const r = el.getBoundingClientRect();
-      store.setSession({
-        viewport: { width: Math.max(1, Math.floor(r.width)), height: Math.max(1, Math.floor(r.height)) },
-      });
+      const viewport = { width: Math.max(1, Math.floor(r.width)), height: Math.max(1, Math.floor(r.height)) };
+      const { fitted, viewport: before, camera } = store.session;
+      // Once fitted, a resize (a sheet opening under the canvas, a phone turned) keeps the design point
+      // in the middle of the canvas where it was, instead of pinning the top left.
+      store.setSession(
+        fitted
+          ? {
+              viewport,
+              camera: {
+                ...camera,
+                originX: camera.originX + (viewport.width - before.width) / 2,
+                originY: camera.originY + (viewport.height - before.height) / 2,
+              },
+            }
+          : { viewport },
+      );
       if (!store.session.fitted) A.fitView(store);
     });
     ro.observe(el);
@@ -166,12 +209,22 @@ export default function StudioCanvas({
   };
 
   const onPointerDown = (e: ReactPointerEvent<HTMLDivElement>) => {
+    lastPointerType.current = e.pointerType;
     if (e.button !== 0 && e.button !== 1) return;
     wrap.current?.focus({ preventScroll: true });
     wrap.current?.setPointerCapture(e.pointerId);
     const p = local(e);
     if (e.pointerType === 'touch') {
       touches.current.set(e.pointerId, p);
+      endLongPress();
+      if (touches.current.size === 1) {
+        // A finger that rests without moving asks for the actions of what it rests on.
+        const timer = window.setTimeout(() => {
+          longPress.current = null;
+          if (touches.current.size === 1) openActions(p);
+        }, LONG_PRESS_MS);
+        longPress.current = { timer, at: p };
+      }
       if (touches.current.size === 2) {
         ui.cancel();
         const [a, b] = [...touches.current.values()] as [Point, Point];
@@ -188,6 +241,8 @@ export default function StudioCanvas({
 
   const onPointerMove = (e: ReactPointerEvent<HTMLDivElement>) => {
     const p = local(e);
+    const lp = longPress.current;
+    if (lp && Math.hypot(p.x - lp.at.x, p.y - lp.at.y) > LONG_PRESS_SLOP_PX) endLongPress();
     if (e.pointerType === 'touch' && touches.current.has(e.pointerId)) {
       touches.current.set(e.pointerId, p);
       if (pinch.current && touches.current.size === 2) {
@@ -208,11 +263,14 @@ export default function StudioCanvas({
     }
     pointer.set({ stage: p, design: stageToDesign(store.session.camera, p) });
     ui.move(p, mods(e, spaceDown.current));
+    // A finger that has started to drag (the view, an object) is not resting: no actions menu.
+    if (ui.moved) endLongPress();
     if (!ui.active) setCursor(ui.cursor(p, mods(e, spaceDown.current)));
   };
 
   const onPointerUp = (e: ReactPointerEvent<HTMLDivElement>) => {
     touches.current.delete(e.pointerId);
+    endLongPress();
     if (pinch.current) {
       if (touches.current.size < 2) pinch.current = null;
       return;
@@ -220,6 +278,28 @@ export default function StudioCanvas({
     const p = local(e);
     ui.up(p, mods(e, spaceDown.current));
     setCursor(ui.cursor(p, mods(e, spaceDown.current)));
+  };
+
+  // A right click opens the actions menu; a touch's long press does so through its own timer (the
+  // browser's contextmenu after a long touch is swallowed so the two never both open it).
+  const onContextMenu = (e: ReactMouseEvent<HTMLDivElement>) => {
+    e.preventDefault();
+    if (lastPointerType.current === 'touch') return;
+    openActions(local(e));
+  };
+
+  // The context-menu key or Shift+F10 opens the same menu for the selection, from the keyboard.
+  const onKeyDown = (e: ReactKeyboardEvent<HTMLDivElement>) => {
+    if (e.key !== 'ContextMenu' && !(e.shiftKey && e.key === 'F10')) return;
+    e.preventDefault();
+    e.stopPropagation();
+    const vp = store.session.viewport;
+    const first = store.design.objects.find((o) => store.session.selection.includes(o.id));
+    const b = first ? objectBounds(first) : null;
+    const at = b
+      ? designToStage(store.session.camera, { x: b.x + b.width / 2, y: b.y + b.height / 2 })
+      : { x: vp.width / 2, y: vp.height / 2 };
+    store.setSession({ actionsMenu: { at, objectId: first?.id ?? null } });
   };
 
   const onDragOver = (e: DragEvent<HTMLDivElement>) => {
@@ -255,8 +335,11 @@ export default function StudioCanvas({
       onPointerDown={onPointerDown}
       onPointerMove={onPointerMove}
       onPointerUp={onPointerUp}
+      onContextMenu={onContextMenu}
+      onKeyDown={onKeyDown}
       onPointerCancel={(e) => {
         touches.current.delete(e.pointerId);
+        endLongPress();
         pinch.current = null;
         ui.cancel();
       }}
@@ -280,6 +363,7 @@ export default function StudioCanvas({
           {design.objects.map((o) => (
             <ObjectShape key={o.id} o={o} cam={cam} />
           ))}
+          <LampLabels objects={design.objects} cam={cam} viewport={session.viewport} />
         </Layer>
         <Layer listening={false}>
           <HusbandryLayer cam={cam} design={design} basking={basking} climbs={climbs} />

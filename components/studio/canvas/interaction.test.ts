@@ -38,6 +38,32 @@ describe('canvas interaction', () => {
     expect(store.session.selection).toEqual([]);
   });
 
+  it('in a view-only studio a finger selects what it taps and its drag moves the view, not the object', () => {
+    const { store, ui, at, drag } = setup();
+    store.setReadOnly(true);
+    const touch = { ...none, touch: true };
+    const before = store.design;
+    // The first finger of a pinch selects nothing: the selection waits for a lift without a drag.
+    ui.down(at(45, 29), touch);
+    expect(store.session.selection).toEqual([]);
+    ui.cancel();
+    expect(store.session.selection).toEqual([]);
+    ui.down(at(45, 29), touch);
+    ui.up(at(45, 29), touch);
+    expect(store.session.selection).toEqual(['b1']);
+    const cam = store.session.camera;
+    drag(at(45, 29), { x: at(45, 29).x + 40, y: at(45, 29).y - 10 }, touch);
+    expect(store.session.camera.originX).toBeCloseTo(cam.originX + 40);
+    expect(store.session.camera.originY).toBeCloseTo(cam.originY - 10);
+    expect(store.design).toBe(before);
+    // A tap on empty space clears the selection; a mouse there still draws a selection box.
+    ui.down(at(60, 50), touch);
+    ui.up(at(60, 50), touch);
+    expect(store.session.selection).toEqual([]);
+    drag(at(40, 35), at(50, 25));
+    expect(store.session.selection).toEqual(['b1']);
+  });
+
   it('drags a perch with grid snapping as one undo step', () => {
     const { store, at, drag, obj } = setup();
     drag(at(45, 29), at(55.3, 30.2));

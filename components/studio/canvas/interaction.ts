@@ -32,6 +32,8 @@ export interface Modifiers {
   alt: boolean;
   /** Pan regardless of tool (middle button, Space held). */
   pan?: boolean;
+  /** A finger, not a mouse or pen: in a view-only studio its drags move the view. */
+  touch?: boolean;
 }
 
 /** Movement (px) before a press becomes a drag. */
@@ -42,7 +44,7 @@ export const HANDLE_HIT_PX = 9;
 export const OBJECT_HIT_PX = 5;
 
 type Drag =
-  | { kind: 'pan'; last: Point }
+  | { kind: 'pan'; last: Point; tap?: string[] }
   | { kind: 'move'; ids: string[]; startDoc: Design; lead: DesignObject | null; anchor: Point; from: Point }
   | { kind: 'handle'; id: string; handle: HandleId; start: DesignObject }
   | { kind: 'marquee'; from: Point; base: string[] }
@@ -134,6 +136,11 @@ export class CanvasInteraction {
     return this.drag !== null;
   }
 
+  /** The press has moved past the drag threshold: it is a drag now, no longer a press or a tap. */
+  get moved(): boolean {
+    return this.dragging;
+  }
+
   down(p: Point, mods: Modifiers) {
     const s = this.store;
     const tool = s.session.tool;
@@ -170,6 +177,13 @@ export class CanvasInteraction {
         : hitPhoto.corner
           ? { kind: 'backdrop-corner', start: hitPhoto.backdrop, corner: hitPhoto.corner }
           : { kind: 'backdrop-move', start: hitPhoto.backdrop, from: d };
+      return;
+    }
+    if (mods.touch && s.readOnly) {
+      // Nothing can be changed: a tap selects what it lands on (to read it), a drag moves the view. The
+      // selection waits for the finger to lift, so the first finger of a pinch selects nothing.
+      const id = this.probeAt(p) ?? this.objectAt(p)?.id;
+      this.drag = { kind: 'pan', last: p, tap: id ? [id] : [] };
       return;
     }
     const h = this.handleAt(p);
@@ -353,6 +367,7 @@ export class CanvasInteraction {
         if (!wasDrag && !mods.shift) s.setSession({ ruler: null });
         return;
       case 'pan':
+        if (!wasDrag && drag.tap) A.select(s, drag.tap);
         return;
     }
   }

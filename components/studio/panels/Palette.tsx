@@ -1,5 +1,7 @@
 'use client';
-// Tool palette: pick a tool (click or its key), or drag an object kind onto the canvas.
+// Tool palette: pick a tool (click or its key), or drag an object kind onto the canvas. A column of
+// named tools on wide screens; a compact bar of icons above the canvas on tablets and phones, where a
+// view-only studio leaves out the tools that add objects.
 import { memo } from 'react';
 import { command, isEnabled, runCommand } from '../commands/registry';
 import { PALETTE_DRAG_TYPE } from '../canvas/StudioCanvas';
@@ -26,7 +28,11 @@ const GROUPS: { label: string; tools: { tool: Tool; icon: IconName; hint: string
     tools: [
       { tool: 'lamp', icon: 'lamp', hint: 'A lamp: UVB tube or bulb, or a heat lamp' },
       { tool: 'screen', icon: 'screen', hint: 'A mesh screen (passes part of the UVB)' },
-      { tool: 'glass', icon: 'glass', hint: 'A glass or acrylic pane (blocks UVB)' },
+      {
+        tool: 'glass',
+        icon: 'glass',
+        hint: 'A glass or acrylic pane (glass blocks UVB; acrylic varies, so set its measured share)',
+      },
       { tool: 'perch', icon: 'perch', hint: 'A branch: drag from one end to the other' },
       { tool: 'ledge', icon: 'ledge', hint: 'A solid platform or rock' },
       { tool: 'hide', icon: 'hide', hint: 'A closed box that shades its inside' },
@@ -46,18 +52,24 @@ export const Palette = memo(function Palette() {
   const ctx = useCommandContext();
   const tool = useStudio(ctx.store, (s) => s.session.tool);
   // Placing tools are switched off when the studio turns view-only (a refused save).
-  useStudio(ctx.store, (s) => s.readOnly);
+  const readOnly = useStudio(ctx.store, (s) => s.readOnly);
   return (
     <nav
       aria-label="Tools"
-      className="flex w-[8.5rem] shrink-0 flex-col gap-3 overflow-y-auto border-r border-basalt-200 bg-white p-2"
+      data-testid="palette"
+      className="flex w-full shrink-0 items-center gap-1 overflow-x-auto border-b border-basalt-200 bg-white px-1 py-0.5 lg:w-[8.5rem] lg:flex-col lg:items-stretch lg:gap-3 lg:overflow-x-hidden lg:overflow-y-auto lg:border-r lg:border-b-0 lg:p-2"
     >
       {GROUPS.map((g) => (
-        <div key={g.label} role="group" aria-label={g.label}>
-          <p className="px-1 pb-1 text-caption font-medium uppercase tracking-wide text-basalt-500">
+        <div
+          key={g.label}
+          role="group"
+          aria-label={g.label}
+          className={`shrink-0 ${readOnly && g.label === 'Objects' ? 'hidden lg:block' : ''} border-l border-basalt-200 pl-1 first:border-l-0 first:pl-0 lg:border-l-0 lg:pl-0`}
+        >
+          <p className="sr-only px-1 pb-1 text-caption font-medium uppercase tracking-wide text-basalt-500 lg:not-sr-only">
             {g.label}
           </p>
-          <ul className="flex flex-col gap-0.5">
+          <ul className="flex gap-0.5 lg:flex-col">
             {g.tools.map((t) => {
               const c = command(`tool.${t.tool}`);
               const key = c.shortcuts[0] ? displayShortcut(c.shortcuts[0]) : '';
@@ -84,13 +96,15 @@ export const Palette = memo(function Palette() {
                         .querySelector<HTMLElement>('[data-testid=studio-canvas]')
                         ?.focus({ preventScroll: true });
                     }}
-                    className={`flex w-full items-center gap-2 rounded-md px-2 py-1.5 text-left text-sm ${
+                    className={`flex h-11 w-11 items-center justify-center gap-2 rounded-md text-left text-sm lg:h-auto lg:w-full lg:justify-start lg:px-2 lg:py-1.5 ${
                       active ? 'bg-moss-100 text-moss-900' : 'text-basalt-800 hover:bg-basalt-100'
                     } disabled:cursor-not-allowed disabled:opacity-40 ${focusRing}`}
                   >
                     <Icon name={t.icon} className="h-5 w-5 shrink-0" />
-                    <span className="flex-1 truncate">{c.label.replace(' (mesh)', '')}</span>
-                    <kbd className="rounded border border-basalt-200 px-1 font-mono text-[0.7rem] text-basalt-500">
+                    <span className="sr-only flex-1 truncate lg:not-sr-only">
+                      {c.label.replace(' (mesh)', '')}
+                    </span>
+                    <kbd className="hidden rounded border border-basalt-200 px-1 font-mono text-[0.7rem] text-basalt-500 lg:inline">
                       {key}
                     </kbd>
                   </button>

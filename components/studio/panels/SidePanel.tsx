@@ -1,5 +1,6 @@
 'use client';
-// The right column: ageing preview on top, then tabs for the inspector, the fields and the species check.
+// The side panels: ageing preview, depth strip, then tabs for the inspector, the fields and the species
+// check. A right-hand column on wide screens; a sheet under the canvas on tablets and phones.
 import { useId, type KeyboardEvent } from 'react';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
 import type { LegendEntry } from '../fields/legend';
@@ -11,6 +12,7 @@ import { DepthStrip } from './DepthStrip';
 import { focusRing } from './CommandButton';
 import { FieldsPanel } from './FieldsPanel';
 import { Inspector } from './Inspector';
+import { useMediaQuery, WIDE_QUERY } from '../hooks/useMediaQuery';
 
 const TABS: { id: SideTab; label: string }[] = [
   { id: 'inspect', label: 'Inspect' },
@@ -89,51 +91,86 @@ export function SidePanel({
     store.setSession({ tab: TABS[next]!.id });
     document.getElementById(`${base}-tab-${TABS[next]!.id}`)?.focus();
   };
+  const open = useStudio(store, (s) => s.session.panelOpen);
+  const wide = useMediaQuery(WIDE_QUERY);
+  const contentId = `${base}-sheet`;
   return (
     <aside
       aria-label="Properties, fields and species check"
-      className="flex w-[22rem] shrink-0 flex-col border-l border-basalt-200 bg-white"
+      data-testid="side-panel"
+      data-open={open}
+      className={`flex w-full shrink-0 flex-col border-t border-basalt-200 bg-white lg:h-auto lg:w-[22rem] lg:border-t-0 lg:border-l ${
+        open ? 'h-[min(45dvh,26rem)]' : ''
+      }`}
     >
-      <Ageing />
-      <DepthStrip />
-      <div role="tablist" aria-label="Panels" className="flex border-b border-basalt-200" onKeyDown={onKey}>
-        {TABS.map((t) => (
-          <button
-            key={t.id}
-            id={`${base}-tab-${t.id}`}
-            role="tab"
-            type="button"
-            aria-selected={tab === t.id}
-            aria-controls={`${base}-panel-${t.id}`}
-            tabIndex={tab === t.id ? 0 : -1}
-            data-testid={`tab-${t.id}`}
-            onClick={() => store.setSession({ tab: t.id })}
-            className={`flex flex-1 items-center justify-center gap-1.5 border-b-2 px-2 py-2 text-sm font-medium ${
-              tab === t.id
-                ? 'border-moss-600 text-basalt-900'
-                : 'border-transparent text-basalt-600 hover:text-basalt-900'
-            } ${focusRing}`}
+      {/* Wide screens: a column beside the canvas. Narrow ones: a sheet under the canvas whose tab row
+          stays visible and opens it, so the canvas keeps the screen until a panel is asked for; there the
+          open tab comes first and the ageing preview and top view follow it. */}
+      <div className="flex border-b border-basalt-200 lg:order-1">
+        <div role="tablist" aria-label="Panels" className="flex flex-1" onKeyDown={onKey}>
+          {TABS.map((t) => (
+            <button
+              key={t.id}
+              id={`${base}-tab-${t.id}`}
+              role="tab"
+              type="button"
+              aria-selected={tab === t.id}
+              aria-controls={`${base}-panel-${t.id}`}
+              tabIndex={tab === t.id ? 0 : -1}
+              data-testid={`tab-${t.id}`}
+              onClick={() =>
+                store.setSession({ tab: t.id, panelOpen: tab === t.id ? !store.session.panelOpen : true })
+              }
+              className={`flex min-h-11 flex-1 items-center justify-center gap-1.5 border-b-2 px-2 py-2 text-sm font-medium lg:min-h-0 ${
+                tab === t.id && (open || wide)
+                  ? 'border-moss-600 text-basalt-900'
+                  : 'border-transparent text-basalt-600 hover:text-basalt-900'
+              } ${focusRing}`}
+            >
+              {t.label}
+              {t.id === 'assess' && sim.assessment && <StatusBadge status={sim.assessment.overall} />}
+            </button>
+          ))}
+        </div>
+        <button
+          type="button"
+          aria-expanded={open}
+          aria-controls={contentId}
+          data-testid="sheet-toggle"
+          onClick={() => store.setSession({ panelOpen: !open })}
+          className={`flex min-h-11 w-11 items-center justify-center text-basalt-700 hover:bg-basalt-100 lg:hidden ${focusRing}`}
+        >
+          <span className="sr-only">{open ? 'Hide the panel' : 'Show the panel'}</span>
+          <span
+            aria-hidden="true"
+            className={`inline-block transition-transform ${open ? '' : 'rotate-180'}`}
           >
-            {t.label}
-            {t.id === 'assess' && sim.assessment && <StatusBadge status={sim.assessment.overall} />}
-          </button>
-        ))}
+            ▾
+          </span>
+        </button>
       </div>
       <div
-        role="tabpanel"
-        id={`${base}-panel-${tab}`}
-        aria-labelledby={`${base}-tab-${tab}`}
-        className="min-h-0 flex-1 overflow-y-auto"
-        tabIndex={-1}
+        id={contentId}
+        className={`min-h-0 flex-1 flex-col overflow-y-auto lg:contents ${open ? 'flex' : 'hidden'}`}
       >
-        {tab === 'inspect' && (
-          <fieldset disabled={readOnly} className="min-w-0">
-            <legend className="sr-only">Properties{readOnly ? ' (view only)' : ''}</legend>
-            <Inspector />
-          </fieldset>
-        )}
-        {tab === 'fields' && <FieldsPanel sim={sim} legend={legend} />}
-        {tab === 'assess' && <AssessmentPanel sim={sim} species={species} />}
+        <Ageing />
+        <DepthStrip />
+        <div
+          role="tabpanel"
+          id={`${base}-panel-${tab}`}
+          aria-labelledby={`${base}-tab-${tab}`}
+          className="order-first lg:order-2 lg:min-h-0 lg:flex-1 lg:overflow-y-auto"
+          tabIndex={-1}
+        >
+          {tab === 'inspect' && (
+            <fieldset disabled={readOnly} className="min-w-0">
+              <legend className="sr-only">Properties{readOnly ? ' (view only)' : ''}</legend>
+              <Inspector />
+            </fieldset>
+          )}
+          {tab === 'fields' && <FieldsPanel sim={sim} legend={legend} />}
+          {tab === 'assess' && <AssessmentPanel sim={sim} species={species} />}
+        </div>
       </div>
     </aside>
   );

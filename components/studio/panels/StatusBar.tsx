@@ -49,7 +49,7 @@ function Cursor({ pointer }: { pointer: Atom<PointerInfo | null> }) {
   const unit = useStudio(store, (s) => s.session.lengthUnit);
   const p = useAtom(pointer);
   return (
-    <span className="w-56 tabular-nums" data-testid="cursor-position">
+    <span className="hidden w-56 tabular-nums md:inline" data-testid="cursor-position">
       {p ? `x ${formatLength(p.design.x, unit)} · y ${formatLength(p.design.y, unit)}` : 'x – · y –'}
     </span>
   );
@@ -72,7 +72,7 @@ export function StatusBar({
   const zoom = useStudio(store, (s) => s.session.camera.zoom);
   const l = saveLabel(save, savedWhere);
   return (
-    <footer className="flex h-8 shrink-0 items-center gap-4 border-t border-basalt-200 bg-white px-3 text-caption text-basalt-700">
+    <footer className="flex h-8 shrink-0 items-center gap-2 overflow-hidden border-t whitespace-nowrap sm:gap-4 border-basalt-200 bg-white px-3 text-caption text-basalt-700">
       <span
         role="status"
         aria-live="polite"
@@ -94,7 +94,7 @@ export function StatusBar({
       )}
       <span className="flex-1" />
       <Cursor pointer={pointer} />
-      <span className="tabular-nums">Zoom {Math.round(zoom * 20)}%</span>
+      <span className="hidden tabular-nums md:inline">Zoom {Math.round(zoom * 20)}%</span>
       <span
         className="tabular-nums"
         data-testid="worker-ms"

@@ -31,9 +31,14 @@ export const FIT_PADDING_PX = 72;
 /** The rulers sit on top, so the fitted view is nudged down a little (pixels). */
 export const FIT_SHIFT_DOWN_PX = 10;
 
+/** The fit's room around the design: all of it from tablet width up, less on a phone, whose few hundred pixels go to the design. */
+export function fitPadding(viewportWidth: number): number {
+  return Math.min(FIT_PADDING_PX, Math.max(28, Math.round(viewportWidth * 0.09)));
+}
+
 export function fitView(store: StudioStore) {
   const { viewport } = store.session;
-  const cam = fitCamera(designBounds(store.design), viewport, FIT_PADDING_PX);
+  const cam = fitCamera(designBounds(store.design), viewport, fitPadding(viewport.width));
   store.setSession({ camera: { ...cam, originY: cam.originY + FIT_SHIFT_DOWN_PX }, fitted: true });
 }
 

@@ -51,6 +51,10 @@ export interface Session {
   highlight: string | null;
   helpOpen: boolean;
   tab: SideTab;
+  /** Narrow screens: the side panels' sheet is open (wide screens always show them). */
+  panelOpen: boolean;
+  /** The actions menu opened by a long press or a right click, at a stage point, for an object or none. */
+  actionsMenu: { at: Point; objectId: string | null } | null;
   /** Snap guides shown while dragging. */
   guides: Guide[];
   ruler: { a: Point; b: Point } | null;
@@ -80,6 +84,8 @@ export function initialSession(): Session {
     highlight: null,
     helpOpen: false,
     tab: 'inspect',
+    panelOpen: false,
+    actionsMenu: null,
     guides: [],
     ruler: null,
     marquee: null,

@@ -11,7 +11,7 @@ import { ReadingsTable } from '@/components/lamp-log/ReadingsTable';
 import { StatusBadge } from '@/components/lamp-log/StatusBadge';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { UnitToggle } from '@/components/ui/UnitToggle';
-import { card, link } from '@/components/ui/styles';
+import { button, card, link } from '@/components/ui/styles';
 import { formatDay } from '@/components/lamp-log/format';
 import { BURN_IN_HOURS } from '@/lib/lamp-log/burn-in';
 import { todayIso } from '@/lib/lamp-log/dates';
@@ -73,6 +73,12 @@ export default async function LampPage({ params }: { params: Promise<{ id: strin
         }
         actions={<UnitToggle />}
       />
+      {canEdit && s.status !== 'retired' && (
+        // At the counter, phone in one hand: the form is one tap away, not below the chart and the table.
+        <a href="#add-reading" className={`${button.primary} mb-4 w-full lg:hidden`}>
+          Add a reading
+        </a>
+      )}
       <div className="grid gap-6 lg:grid-cols-3">
         <section aria-labelledby="chart" className="space-y-3 lg:col-span-2">
           <h2 id="chart" className="text-lead font-semibold">
@@ -107,7 +113,7 @@ export default async function LampPage({ params }: { params: Promise<{ id: strin
           {example && <ExampleDataMark />}
           <ReadingsTable readings={detail.readings} canEdit={canEdit} />
           {canEdit && s.status !== 'retired' && (
-            <div className={`${card} p-4`}>
+            <div id="add-reading" className={`${card} scroll-mt-4 p-4`}>
               <h3 className="mb-3 font-semibold">Add a reading</h3>
               <ReadingForm
                 lampId={s.id}

@@ -1,0 +1,79 @@
+'use client';
+// Every lamp's label, placed together so that no two collide (geometry/labels.ts). A label pushed away
+// from its usual spot above the lamp gets a thin leader line back to its lamp.
+import Konva from 'konva';
+import { memo, useMemo } from 'react';
+import { Group, Line, Text } from 'react-konva';
+import type { Camera, Point, Rect, Viewport } from '../geometry/camera';
+import { placeLabels } from '../geometry/labels';
+import type { DesignObject, LampObject } from '../state/types';
+import { C } from './colors';
+import { lampBody, lampLabel } from './ObjectShape';
+
+const FONT_SIZE = 11;
+const LINE_HEIGHT = 1.15;
+
+const sizes = new Map<string, { width: number; height: number }>();
+/** A label's size as Konva will draw it (measured once per text). */
+function measure(text: string): { width: number; height: number } {
+  let s = sizes.get(text);
+  if (!s) {
+    const t = new Konva.Text({ text, fontSize: FONT_SIZE, lineHeight: LINE_HEIGHT });
+    s = { width: Math.ceil(t.width()), height: Math.ceil(t.height()) };
+    t.destroy();
+    sizes.set(text, s);
+  }
+  return s;
+}
+
+const nearest = (r: Rect, p: Point): Point => ({
+  x: Math.max(r.x, Math.min(p.x, r.x + r.width)),
+  y: Math.max(r.y, Math.min(p.y, r.y + r.height)),
+});
+const centre = (r: Rect): Point => ({ x: r.x + r.width / 2, y: r.y + r.height / 2 });
+
+export const LampLabels = memo(function LampLabels({
+  objects,
+  cam,
+  viewport,
+}: {
+  objects: readonly DesignObject[];
+  cam: Camera;
+  viewport: Viewport;
+}) {
+  const labels = useMemo(() => {
+    const lamps = objects.filter((o): o is LampObject => o.type === 'lamp');
+    const texts = lamps.map(lampLabel);
+    const bodies = lamps.map((l) => lampBody(l, cam));
+    const places = placeLabels(
+      lamps.map((l, i) => ({ id: l.id, body: bodies[i]!, ...measure(texts[i]!.text) })),
+      viewport,
+    );
+    return places.map((p, i) => ({ ...p, ...texts[i]!, body: bodies[i]! }));
+  }, [objects, cam, viewport]);
+  return (
+    <Group listening={false}>
+      {labels.map((l) => {
+        const from = nearest(l.rect, centre(l.body));
+        const to = nearest(l.body, centre(l.rect));
+        return (
+          <Group key={l.id}>
+            {l.moved && Math.hypot(from.x - to.x, from.y - to.y) > 4 && (
+              <Line points={[from.x, from.y, to.x, to.y]} stroke={C.basalt500} strokeWidth={1} />
+            )}
+            <Text
+              x={l.rect.x}
+              y={l.rect.y}
+              width={l.rect.width}
+              align="center"
+              text={l.text}
+              fontSize={FONT_SIZE}
+              lineHeight={LINE_HEIGHT}
+              fill={l.calibrated ? C.moss700 : C.basalt700}
+            />
+          </Group>
+        );
+      })}
+    </Group>
+  );
+});
