@@ -14,6 +14,17 @@ export {
 } from './sources/uv';
 export { tubeBelowCentre, tubePiece, tubePieceOffset } from './sources/tube';
 export { pointIrradiance } from './sources/point';
+export {
+  allZoneDistances,
+  zoneDistances,
+  ZONE_SETUP_ASSUMPTIONS,
+  NEAREST_CM as ZONE_NEAREST_CM,
+  FARTHEST_CM as ZONE_FARTHEST_CM,
+  type ZoneDistance,
+  type ZoneDistances,
+  type ZoneLamp,
+  type ZoneSetup,
+} from './zoneDistances';
 export { contourBands, defaultThresholds, UVI_THRESHOLDS, type ContourBand } from './contours';
 export {
   UV_ZONES,

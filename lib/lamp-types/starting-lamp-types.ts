@@ -54,7 +54,8 @@ export function startingLampType(presetKey: LampPresetId): StartingLampType {
     halfLifeMonths: halfLife,
     decayPoints: null,
     replaceAfterMonths: life.replaceMonths,
-    notes: preset.usefulReachCm !== null ? usefulReachNote(preset.usefulReachCm) : null,
+    // How far below the lamp each UV zone lies is computed on the catalogue page from these figures.
+    notes: null,
     sources,
   };
 }
@@ -71,13 +72,6 @@ function readable(note: string): string {
   return note
     .replace(/\bsee LAMP_TECHS\b/g, 'see the technology’s defaults')
     .replace(/\(see presets\.ts\)/g, '(the preset)');
-}
-
-function usefulReachNote(cm: number): string {
-  return (
-    `Useful reach about ${cm} cm: the distance below a new, bare lamp at which the UV Index falls to 1 ` +
-    '(the lower bound of the zone 3 mean of Ferguson et al. 2010). An estimate — verify with a meter.'
-  );
 }
 
 export const STARTING_LAMP_TYPES: readonly StartingLampType[] = (

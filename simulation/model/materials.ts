@@ -16,7 +16,11 @@ export function meshOpenArea(apertureMm: number, wireMm: number): number {
 /** Default UVB transmission of a mesh screen: a 1.0 mm aperture, 0.25 mm wire cloth (ISO 9044 open area, 0.64). */
 export const DEFAULT_SCREEN_UVB_TRANSMISSION = meshOpenArea(1.0, 0.25);
 
-/** Window glass and ordinary acrylic pass no UVB (Duarte et al. 2009, Photodermatol Photoimmunol Photomed 25:181). */
+/**
+ * Window glass passes no UVB (Duarte et al. 2009, Photodermatol Photoimmunol Photomed 25:181, a study of
+ * glass panes). That study says nothing of acrylic, and acrylic varies: some UV-transmitting acrylics pass
+ * much of the UVB, so an acrylic pane needs its own measured figure.
+ */
 export const DEFAULT_GLASS_UVB_TRANSMISSION = 0;
 
 /** Dense planting passes roughly a third of the light (common practice, no published source). */

@@ -49,7 +49,9 @@ export function SegmentForm({ o }: { o: SegmentObject }) {
             fallback={fallback}
             testId="field-uvbTransmission"
             hint={
-              o.type === 'screen' ? 'About the open area of the mesh' : 'Ordinary glass and acrylic pass none'
+              o.type === 'screen'
+                ? 'About the open area of the mesh'
+                : 'Glass passes none; acrylic varies (some pass UVB): enter its measured share'
             }
             {...field('uvbTransmission', 'percent')}
           />

@@ -3,6 +3,7 @@ import Link from '@/components/ui/Link';
 import { CautionList } from '@/components/cautions/CautionList';
 import { DeleteLampTypeButton } from '@/components/catalogue/DeleteLampTypeButton';
 import { LampTypeView } from '@/components/catalogue/LampTypeView';
+import { ZoneDistancesTable } from '@/components/catalogue/ZoneDistancesTable';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { button, card, link } from '@/components/ui/styles';
 import { requireUser } from '@/lib/session';
@@ -48,6 +49,7 @@ export default async function LampTypePage({ params }: Props) {
       <div className="grid gap-6 lg:grid-cols-[2fr_1fr]">
         <div className="space-y-6">
           <LampTypeView lampType={lampType} />
+          <ZoneDistancesTable lampType={lampType} />
           {lampType.notes && (
             <section className={`${card} p-5`}>
               <h2 className="mb-2 text-lead font-semibold text-basalt-900">Notes</h2>
