@@ -121,6 +121,16 @@ async function pinchAndPan(page: Page, cdp: CDPSession) {
   await expect.poll(async () => (await camera(page)).zoom, eventually).toBeCloseTo(z0, 6);
 }
 
+/** Opens the check in the panels, for a bearded dragon, and reads the hot-spot finding with its figures. */
+async function readFinding(page: Page) {
+  await page.getByTestId('tab-assess').click();
+  await page.getByTestId('species-select').selectOption({ label: 'Bearded dragon' });
+  const finding = page.getByTestId('finding-hot-spot');
+  await finding.waitFor({ state: 'visible' });
+  expect(await finding.innerText()).toMatch(/\d/);
+  return finding;
+}
+
 describe('the studio on a phone (390 × 844, touch)', () => {
   it(
     'shows the canvas first, pinches, pans, taps, long-presses, reads a finding, and edits once switched on',
@@ -169,11 +179,7 @@ describe('the studio on a phone (390 × 844, touch)', () => {
       await expect.poll(() => menu.count(), eventually).toBe(0);
 
       // The check in the sheet: a finding with its figures, readable on the phone.
-      await page.getByTestId('tab-assess').click();
-      await page.getByTestId('species-select').selectOption({ label: 'Bearded dragon' });
-      const finding = page.getByTestId('finding-hot-spot');
-      await finding.waitFor({ state: 'visible' });
-      expect(await finding.innerText()).toMatch(/\d/);
+      const finding = await readFinding(page);
       const fb = await finding.boundingBox();
       expect(fb!.x).toBeGreaterThanOrEqual(0);
       expect(fb!.x + fb!.width).toBeLessThanOrEqual(PHONE.width);
@@ -220,11 +226,7 @@ describe('the studio on a tablet (820 × 1180, touch)', () => {
       await pinchAndPan(page, cdp);
       await tap(cdp, await at(page, 45, 29));
       await expect.poll(() => summary(page), eventually).toMatch(PERCH_SELECTED);
-      await page.getByTestId('tab-assess').click();
-      await page.getByTestId('species-select').selectOption({ label: 'Bearded dragon' });
-      const finding = page.getByTestId('finding-hot-spot');
-      await finding.waitFor({ state: 'visible' });
-      expect(await finding.innerText()).toMatch(/\d/);
+      await readFinding(page);
       await screenshot(page, 'studio-tablet-820-check');
       expect(errors()).toEqual([]);
     },
