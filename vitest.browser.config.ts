@@ -11,6 +11,9 @@ export default defineConfig({
   },
   test: {
     include: ['tests/browser/**/*.browser.ts'],
+    // Files a caller runs in a run of their own (comma-separated paths): `npm test` runs the journeys that
+    // bound response times alone, after everything else (scripts/test.mjs).
+    exclude: ['node_modules/**', ...(process.env.VITEST_BROWSER_EXCLUDE ?? '').split(',').filter(Boolean)],
     environment: 'node',
     // One app and one test database for every file: run them one after another.
     fileParallelism: false,

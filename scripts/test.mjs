@@ -27,6 +27,7 @@ const CHECKS = ['prettier', 'eslint', 'tsc', 'vitest', 'browser'];
 // the database goes away): they run alone after both lanes, when nothing else of this run competes for
 // the cores, so that the bound measures the app and not this run's other work.
 const TIMED_FILES = ['tests/security/export-stall.test.ts', 'tests/reliability/db-outage.test.ts'];
+const TIMED_BROWSER_FILES = ['tests/browser/engine-threads.browser.ts'];
 const RESULTS_DIR = path.join(ROOT, 'test-results');
 // The address unit and integration tests see (APP_URL, NEXTAUTH_URL): the documented default.
 const UNIT_APP_URL = 'http://localhost:3000';
@@ -56,6 +57,8 @@ life.handleSignals(130);
 const steps = [];
 let failed = false;
 const startedAt = Date.now();
+// Whether the browser lane's app came up (the timed journeys run against it after both lanes).
+let browserAppUp = false;
 
 /** Runs one named step, timing it. Infrastructure steps (critical) end the run when they fail. */
 async function step(name, fn, { critical = false } = {}) {
@@ -105,7 +108,13 @@ function summary() {
         .join(' ')} (1/5/15 min)`,
     ),
   );
-  const counts = ['vitest-unit.json', 'vitest-db.json', 'vitest-timed.json', 'browser.json']
+  const counts = [
+    'vitest-unit.json',
+    'vitest-db.json',
+    'vitest-timed.json',
+    'browser.json',
+    'browser-timed.json',
+  ]
     .map((f) => readCounts(path.join(RESULTS_DIR, f)))
     .filter(Boolean);
   if (counts.length) {
@@ -232,14 +241,33 @@ async function main() {
   if (stop) throw stop.reason;
 
   // Filters pick files the way vitest does: a filter is a part of the file's path.
-  const timed = TIMED_FILES.filter((f) => !opts.filters.length || opts.filters.some((x) => f.includes(x)));
-  if (runVitest && !opts.only?.has('browser') && timed.length) {
+  const picked = (files) =>
+    files.filter((f) => !opts.filters.length || opts.filters.some((x) => f.includes(x)));
+  const timed = opts.only?.has('browser') ? [] : picked(TIMED_FILES);
+  if (runVitest && timed.length) {
     const unitEnv = { ...testEnv, APP_URL: UNIT_APP_URL, NEXTAUTH_URL: UNIT_APP_URL, PORT: '3000' };
     await step('vitest: timed database files, alone', () =>
       run(bin('vitest'), [...vitestArgs('db', 'timed'), ...timed], { env: unitEnv }),
     );
   }
+  const timedBrowser = opts.only?.has('browser') || !opts.filters.length ? picked(TIMED_BROWSER_FILES) : [];
+  if (runBrowser && browserAppUp && timedBrowser.length) {
+    await step('browser: timed journeys, alone', () =>
+      run(bin('vitest'), [...browserArgs('browser-timed'), ...timedBrowser], { env: browserEnv }),
+    );
+  }
 }
+
+/** A vitest run of the browser journeys, its JSON report in test-results/<name>.json. */
+const browserArgs = (name) => [
+  'run',
+  '--config',
+  'vitest.browser.config.ts',
+  '--passWithNoTests',
+  '--reporter=default',
+  '--reporter=json',
+  `--outputFile.json=${path.join(RESULTS_DIR, `${name}.json`)}`,
+];
 
 /** A vitest run of one project of vitest.config.ts, its JSON report in test-results/vitest-<name>.json. */
 const vitestArgs = (project, name = project) => [
@@ -364,22 +392,20 @@ async function browserLane(browserEnv, { appUrl, appPort, browserDb, vitestDone,
     startNext(life, browserEnv, { port: appPort, build: false, logFile: nextLog }),
   );
   if (!appStarted) return;
+  browserAppUp = true;
   const browserLog = path.join(RESULTS_DIR, 'browser.log');
   log(`Browser tests running: follow ${path.relative(ROOT, browserLog)}; shown here when they end.`);
   let output = '';
   const ok = await step('browser tests', async () => {
     const r = await run(
       bin('vitest'),
-      [
-        'run',
-        '--config',
-        'vitest.browser.config.ts',
-        '--reporter=default',
-        '--reporter=json',
-        `--outputFile.json=${path.join(RESULTS_DIR, 'browser.json')}`,
-        ...(opts.only?.has('browser') ? opts.filters : []),
-      ],
-      { env: browserEnv, capture: true, check: false, logFile: browserLog },
+      [...browserArgs('browser'), ...(opts.only?.has('browser') ? opts.filters : [])],
+      {
+        env: { ...browserEnv, VITEST_BROWSER_EXCLUDE: TIMED_BROWSER_FILES.join(',') },
+        capture: true,
+        check: false,
+        logFile: browserLog,
+      },
     );
     output = `${r.stdout}${r.stderr}`;
     if (r.code !== 0) throw new Error(`browser tests exited with ${r.signal ?? r.code}`);

@@ -47,7 +47,8 @@ describe('visitor journey', () => {
         expect(drawn.headers()['cache-control']).toBe('public, max-age=31536000, immutable');
         const etag = drawn.headers()['etag']!;
         expect((await page.request.get(src, { headers: { 'if-none-match': etag } })).status()).toBe(304);
-        expect(await res!.text()).not.toContain('<path');
+        // No drawing inline: the page's only SVG is the decorative brand mark.
+        expect(await res!.text()).not.toMatch(/<svg[^>]*role="img"/);
         expect(await main.innerText()).toMatch(/estimate/i);
         expect(await main.innerText()).toMatch(/verify it with a UV meter and a thermometer/);
         const cautions = page.getByRole('region', { name: 'Safety' });
