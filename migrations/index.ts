@@ -14,6 +14,7 @@ import * as m0012 from './0012-exact-numbers';
 import * as m0013 from './0013-list-sort-indexes';
 import * as m0014 from './0014-reading-setup';
 import * as m0015 from './0015-lamp-lifetime-table';
+import * as m0016 from './0016-lamp-reach-wording';
 
 export type Migration = {
   name: string;
@@ -41,4 +42,5 @@ export const migrations: Migration[] = [
   { name: '0013-list-sort-indexes', ...m0013 },
   { name: '0014-reading-setup', ...m0014 },
   { name: '0015-lamp-lifetime-table', ...m0015 },
+  { name: '0016-lamp-reach-wording', ...m0016 },
 ];
