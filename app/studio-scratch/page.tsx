@@ -2,6 +2,8 @@ import type { Metadata } from 'next';
 import { StudioLoader } from '@/components/studio/StudioLoader';
 import { STARTING_SHEETS } from '@/lib/species/starting-sheets';
 import { toEngineSheet } from '@/lib/species/to-engine';
+import { pageNonce, studioPictureFor } from '@/lib/variants/studio-picture';
+import { exampleDesign } from '@/simulation';
 
 export const metadata: Metadata = {
   title: 'Try the studio',
@@ -14,7 +16,9 @@ export const metadata: Metadata = {
  * (local storage) and starts from the example set-up; the species check uses the starting sheets
  * every organisation begins with.
  */
-export default function ScratchStudioPage() {
+export default async function ScratchStudioPage() {
+  // The example's field, drawn on the server (and kept there): the page opens with it on screen.
+  const [picture, nonce] = await Promise.all([studioPictureFor(exampleDesign()), pageNonce()]);
   const species = STARTING_SHEETS.map((s) => ({ id: s.seedKey, ...toEngineSheet(s) }));
   return (
     <StudioLoader
@@ -23,6 +27,8 @@ export default function ScratchStudioPage() {
       backHref="/"
       backLabel="Home"
       species={species}
+      picture={picture}
+      nonce={nonce}
     />
   );
 }

@@ -33,12 +33,15 @@ import { useAutosave } from './persistence/useAutosave';
 import { createAtom } from './state/atom';
 import { pickPrefs, type EnclosurePhotos, type StoredPrefs } from './state/session';
 import { StudioStore } from './state/store';
-import type { StudioSpecies } from './state/types';
+import type { Design, StudioSpecies } from './state/types';
+import { samePhysics } from '@/simulation';
+import { formatStudioView, STUDIO_VIEW_COOKIE } from '@/shared/designs/studio-view-cookie';
+import type { StudioPicture } from '@/shared/designs/studio-field';
+import { FirstFieldPicture } from './FirstField';
+import type { Traced } from './fields/useBands';
 
-const StudioCanvas = dynamic(() => import('./canvas/StudioCanvas'), {
-  ssr: false,
-  loading: () => <div className="h-full w-full animate-pulse bg-basalt-100" />,
-});
+// While Konva loads, the page's picture of the field (drawn under the canvas's place) stays visible.
+const StudioCanvas = dynamic(() => import('./canvas/StudioCanvas'), { ssr: false, loading: () => null });
 
 const PREFS_KEY = 'baskwell.studio.prefs';
 // The cm/in and °C/°F choices of the rest of the app (components/ui/units.ts): one choice everywhere.
@@ -81,6 +84,8 @@ export interface StudioProps {
   storage?: KeyValueStorage;
   /** The enclosure's photos this user may see, for the backdrop; absent without an enclosure. */
   photos?: EnclosurePhotos;
+  /** The field the server drew for `design`, shown until the engine's first answer (same bands). */
+  picture?: (StudioPicture & { design: Design }) | null;
 }
 
 export default function Studio(props: StudioProps) {
@@ -101,7 +106,8 @@ export default function Studio(props: StudioProps) {
   }, [persistence, initial, attempt]);
   if (loaded) return <StudioEditor {...props} loaded={loaded} />;
   return (
-    <div className="flex h-full items-center justify-center bg-basalt-50" role="status">
+    // No background of its own while loading: the page's picture of the field shows through.
+    <div className={`flex h-full items-center justify-center ${error ? 'bg-basalt-50' : ''}`} role="status">
       {error ? (
         <div className="max-w-md rounded-lg border border-ember-200 bg-white p-5 text-sm">
           <p className="font-semibold text-ember-800">The design could not be loaded.</p>
@@ -118,7 +124,7 @@ export default function Studio(props: StudioProps) {
           </button>
         </div>
       ) : (
-        <p className="text-basalt-600">Loading the design…</p>
+        <p className="rounded-md bg-white/90 px-3 py-1 text-basalt-600">Loading the design…</p>
       )}
     </div>
   );
@@ -135,6 +141,7 @@ function StudioEditor({
   readOnly = false,
   storage: storageProp,
   photos,
+  picture,
 }: StudioProps & { loaded: Loaded }) {
   const storage = useMemo(() => storageProp ?? window.localStorage, [storageProp]);
   const [store] = useState(
@@ -165,12 +172,28 @@ function StudioEditor({
   const switchable = !viewOnly && (viewing || !tablet);
   useEffect(() => store.setReadOnly(viewOnly || viewing), [store, viewOnly, viewing]);
 
+  // The server's picture stands in for the first answer only if it shows what the studio will: the same
+  // physics (a scratch design of this browser's own differs from the example) and the chosen field.
+  const [firstBands] = useState<Traced | null>(() =>
+    picture &&
+    store.session.fieldsVisible &&
+    store.session.field === picture.field &&
+    samePhysics(picture.design, loaded.design)
+      ? { field: picture.field, thresholds: picture.thresholds, bands: picture.bands }
+      : null,
+  );
+
   // Units and view preferences are remembered on this device.
   const prefs = useStudio(store, (s) => JSON.stringify(pickPrefs(s.session)));
   useEffect(() => {
     try {
       storage.setItem(PREFS_KEY, prefs);
       const chosen = JSON.parse(prefs) as StoredPrefs;
+      // The field choice also goes to the server, which draws that field into the next studio page.
+      const view = chosen.fieldsVisible
+        ? formatStudioView({ field: chosen.field, opacity: chosen.fieldOpacity })
+        : formatStudioView({ field: null });
+      document.cookie = `${STUDIO_VIEW_COOKIE}=${view}; path=/; max-age=31536000; samesite=lax`;
       storage.setItem(APP_LENGTH_KEY, chosen.lengthUnit);
       storage.setItem(APP_TEMP_KEY, chosen.tempUnit);
     } catch {
@@ -187,7 +210,7 @@ function StudioEditor({
   const safety = (sim.assessment?.findings ?? []).filter(
     (f) => SAFETY_FINDINGS.has(f.id) && f.status !== 'pass',
   );
-  const { bands, legend } = useBands(sim.grid, field, tempUnit, fieldsVisible);
+  const { bands, legend } = useBands(sim.grid, field, tempUnit, fieldsVisible, firstBands);
   const highlighted = useMemo(() => {
     const f = sim.assessment?.findings.find((x) => x.id === highlightId);
     if (!f?.where) return null;
@@ -232,6 +255,12 @@ function StudioEditor({
         <div className="flex min-h-0 flex-1 flex-col lg:flex-row">
           <Palette />
           <main className="relative min-h-0 min-w-0 flex-1" aria-label="Canvas">
+            {firstBands && picture && !sim.grid && (
+              <FirstFieldPicture
+                design={picture.design}
+                picture={{ ...picture, opacity: store.session.fieldOpacity }}
+              />
+            )}
             <StudioCanvas
               store={store}
               pointer={pointer}

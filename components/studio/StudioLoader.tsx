@@ -3,8 +3,11 @@
 // server component) and loads the Konva studio on the client only.
 import dynamic from 'next/dynamic';
 import Link from '@/components/ui/Link';
-import { useMemo } from 'react';
+import { useEffect, useMemo } from 'react';
 import { exampleDesign } from './examples/exampleDesign';
+import { startStudioWorkers, stopUnusedStudioWorkers } from './fields/early';
+import type { StudioPicture } from '@/shared/designs/studio-field';
+import { FirstFieldPicture } from './FirstField';
 import { httpPersistence } from './persistence/http';
 import { localPersistence } from './persistence/local';
 import type { Loaded } from './persistence/types';
@@ -13,9 +16,12 @@ import type { StudioSpecies } from './state/types';
 
 const Studio = dynamic(() => import('./Studio'), {
   ssr: false,
+  // Over the design's picture (or the plain background): the field is already on screen meanwhile.
   loading: () => (
-    <div className="flex h-full items-center justify-center bg-basalt-50 text-basalt-600" role="status">
-      Opening the studio…
+    <div className="absolute inset-x-0 top-3 flex justify-center" role="status">
+      <span className="rounded-md bg-white/90 px-3 py-1 text-sm text-basalt-600 shadow-sm">
+        Opening the studio…
+      </span>
     </div>
   ),
 });
@@ -32,6 +38,8 @@ export function StudioLoader({
   initialSpeciesId,
   readOnly,
   photos,
+  picture,
+  nonce,
 }: {
   source: StudioSource;
   species: StudioSpecies[];
@@ -43,11 +51,27 @@ export function StudioLoader({
   readOnly?: boolean;
   /** The enclosure's backdrop photos this user may see (variant studios only). */
   photos?: EnclosurePhotos;
+  /** The field drawn on the server (the saved design's, or the example's for the scratch studio). */
+  picture?: StudioPicture | null;
+  /** This response's CSP nonce, for the picture's inline scripts. */
+  nonce?: string;
 }) {
+  // The engine and contour workers load their code while the studio's own code and Konva download.
+  // During render rather than in an effect, so they start as this component hydrates (idempotent).
+  startStudioWorkers();
+  useEffect(() => stopUnusedStudioWorkers, []);
   const key = source.kind === 'variant' ? source.variantId : 'scratch';
   const persistence = useMemo(
     () => (source.kind === 'variant' ? httpPersistence(key) : localPersistence('scratch', exampleDesign)),
     [source.kind, key],
+  );
+  const pictureDesign = useMemo(
+    () => (source.kind === 'variant' ? initial?.design : exampleDesign()),
+    [source.kind, initial?.design],
+  );
+  const studioPicture = useMemo(
+    () => (picture && pictureDesign ? { ...picture, design: pictureDesign } : null),
+    [picture, pictureDesign],
   );
   return (
     <div className="fixed inset-0 z-40 flex flex-col bg-basalt-50">
@@ -68,17 +92,29 @@ export function StudioLoader({
           to keep designs, share them and log your lamps.
         </p>
       )}
-      <Studio
-        persistence={persistence}
-        species={species}
-        title={title}
-        backHref={backHref}
-        backLabel={backLabel}
-        initial={initial}
-        initialSpeciesId={initialSpeciesId}
-        readOnly={readOnly}
-        photos={source.kind === 'variant' ? photos : undefined}
-      />
+      <div className="relative min-h-0 flex-1">
+        {picture && pictureDesign && (
+          <FirstFieldPicture
+            design={pictureDesign}
+            picture={picture}
+            inline={{ nonce, scratch: source.kind === 'scratch' }}
+          />
+        )}
+        <div className="absolute inset-0">
+          <Studio
+            persistence={persistence}
+            species={species}
+            title={title}
+            backHref={backHref}
+            backLabel={backLabel}
+            initial={initial}
+            initialSpeciesId={initialSpeciesId}
+            readOnly={readOnly}
+            photos={source.kind === 'variant' ? photos : undefined}
+            picture={studioPicture}
+          />
+        </div>
+      </div>
     </div>
   );
 }

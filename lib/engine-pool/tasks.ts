@@ -14,6 +14,8 @@ import type { LampFacts, ReadingFacts } from '@/lib/lamp-log/outlook';
 import type { LampTypeDto } from '@/lib/lamp-types/schema';
 import { fieldPng, reportPdf, type ReportOptions, type ReportSubject } from '@/lib/reports/build';
 import { computedFor, type FieldView } from '@/lib/variants/computed';
+import { cachedStudioFirstField } from '@/lib/variants/studio-first-field';
+import type { StudioFirstField } from '@/shared/designs/studio-field';
 import type { KeyFigures } from '@/shared/designs/figures';
 import type { Assessment, Design, FieldName, LampObject, SpeciesSheet } from '@/simulation';
 
@@ -50,6 +52,11 @@ export const engineTasks = {
   fieldPicture(input: { design: Design; field: FieldName }): FieldPicture {
     const computed = computedFor(input.design);
     return { ...computed.view(input.field), figures: computed.sim.figures };
+  },
+
+  /** The field a studio draws when it opens, sent with the page (lib/variants/studio-first-field). */
+  studioFirstField(input: { design: Design; field: FieldName }): StudioFirstField | null {
+    return cachedStudioFirstField(input.design, input.field);
   },
 
   /** The guided start's search for a first layout (many engine runs). */

@@ -44,9 +44,9 @@ export function simplifyLine(points: readonly Point[], tolerance = PATH_TOLERANC
 
 const num = (v: number) => String(Math.round(v * 100) / 100);
 
-/** One closed ring as `M…L…Z`, simplified. A ring is split at its farthest point from the start. */
-export function ringPath(ring: readonly Point[], tolerance = PATH_TOLERANCE_CM): string {
-  if (ring.length === 0) return '';
+/** The points of a closed ring that Douglas–Peucker keeps (without the repeated closing point). */
+export function simplifyRing(ring: readonly Point[], tolerance = PATH_TOLERANCE_CM): Point[] {
+  if (ring.length === 0) return [];
   // Closed rings repeat their first point at the end; split at the point farthest from the start so
   // both halves are open polylines that Douglas–Peucker handles well.
   let split = 0;
@@ -57,7 +57,13 @@ export function ringPath(ring: readonly Point[], tolerance = PATH_TOLERANCE_CM):
   }
   const first = simplifyLine(ring.slice(0, split + 1), tolerance);
   const second = simplifyLine([...ring.slice(split), ring[0]!], tolerance);
-  const points = [...first, ...second.slice(1, -1)];
+  return [...first, ...second.slice(1, -1)];
+}
+
+/** One closed ring as `M…L…Z`, simplified. */
+export function ringPath(ring: readonly Point[], tolerance = PATH_TOLERANCE_CM): string {
+  if (ring.length === 0) return '';
+  const points = simplifyRing(ring, tolerance);
   return `M${points.map((p) => `${num(p[0])},${num(p[1])}`).join('L')}Z`;
 }
 

@@ -41,6 +41,7 @@ import {
   type HighlightShape,
 } from './Overlay';
 import { Rulers } from './Rulers';
+import { markFieldVisible } from '../fields/early';
 
 export const PALETTE_DRAG_TYPE = 'application/x-baskwell-tool';
 /** How long a finger rests (ms) before its press opens the actions menu. */
@@ -316,6 +317,12 @@ export default function StudioCanvas({
     A.placeObject(store, type as PlaceTool, stageToDesign(store.session.camera, local(e)));
     wrap.current?.focus({ preventScroll: true });
   };
+
+  // Drawn in this commit's frame: the first field on screen when the page brought no picture of it.
+  const fieldShown = session.fieldsVisible && bands.length > 0;
+  useEffect(() => {
+    if (fieldShown) markFieldVisible();
+  }, [fieldShown]);
 
   const selected = design.objects.filter((o) => session.selection.includes(o.id));
   const backdrop = design.backdrop;

@@ -7,9 +7,10 @@ import type { ColouredBand } from '../canvas/FieldBands';
 import type { TempUnit } from '@/shared/units';
 import type { FieldView } from '../state/session';
 import type { ContourRequest, ContourResponse } from './contourProtocol';
+import { takeContourWorker } from './early';
 import { legendFor, type LegendEntry } from './legend';
 
-interface Traced {
+export interface Traced {
   field: FieldView;
   thresholds: number[];
   bands: ContourBand[];
@@ -20,14 +21,16 @@ export function useBands(
   field: FieldView,
   temp: TempUnit,
   visible: boolean,
+  /** Bands to show until the first tracing arrives (the page's picture of the same field). */
+  initial: Traced | null = null,
 ): { bands: ColouredBand[]; legend: LegendEntry[]; error: string | null } {
-  const [traced, setTraced] = useState<Traced | null>(null);
+  const [traced, setTraced] = useState<Traced | null>(initial);
   const [error, setError] = useState<string | null>(null);
   const worker = useRef<Worker | null>(null);
   const seq = useRef(0);
 
   useEffect(() => {
-    const w = new Worker(new URL('./contourWorker.ts', import.meta.url), { type: 'module' });
+    const w = takeContourWorker();
     let applied = 0;
     w.onmessage = (e: MessageEvent<ContourResponse>) => {
       const m = e.data;

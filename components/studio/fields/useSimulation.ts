@@ -7,7 +7,8 @@ import { physicsOf, samePhysics, type SimRequest, type SimResponse } from '@/sim
 import type { Camera } from '../geometry/camera';
 import type { StudioStore } from '../state/store';
 import type { Design, StudioSpecies } from '../state/types';
-import { cellSizeFor } from './cellSize';
+import { cellSizeFor } from '@/shared/designs/studio-cell-size';
+import { markFieldComputed, takeEngineWorker } from './early';
 import type { Reading } from './sample';
 import { EMPTY_SIM, type SimView } from './simTypes';
 
@@ -50,9 +51,7 @@ export function useSimulation(store: StudioStore, species: StudioSpecies[]): Sim
   useEffect(() => {
     let worker: Worker;
     try {
-      worker = new Worker(new URL('../../../simulation/worker/entry.ts', import.meta.url), {
-        type: 'module',
-      });
+      worker = takeEngineWorker();
     } catch (e) {
       setView((v) => ({ ...v, status: 'error', error: `The field engine could not start (${String(e)}).` }));
       return;
@@ -108,6 +107,7 @@ export function useSimulation(store: StudioStore, species: StudioSpecies[]): Sim
         setView((v) => ({ ...v, status: 'error', error: msg.message }));
         return;
       }
+      markFieldComputed();
       const roundTripMs = info ? performance.now() - info.at : null;
       if (roundTripMs !== null) {
         metrics.roundTrips.push(roundTripMs);

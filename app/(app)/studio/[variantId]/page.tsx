@@ -6,6 +6,7 @@ import { requireUser } from '@/lib/session';
 import { getVariantForUser } from '@/lib/variants/variants';
 import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
 import { studioPhotos } from '@/lib/uploads/studio-photos';
+import { pageNonce, studioPictureFor } from '@/lib/variants/studio-picture';
 
 export const metadata: Metadata = { title: 'Studio' };
 
@@ -19,7 +20,12 @@ export default async function VariantStudioPage({ params }: { params: Promise<{ 
   if (!variant) notFound();
   const options = await speciesOptions(variant.enclosure.organisationId);
   const attached = attachedSpecies(options, variant.enclosure.speciesName);
-  const photos = await studioPhotos(user, variant.enclosure, variant.design.backdrop?.uploadId);
+  // The field is drawn on an engine thread while the rest of the page is looked up.
+  const [photos, picture, nonce] = await Promise.all([
+    studioPhotos(user, variant.enclosure, variant.design.backdrop?.uploadId),
+    studioPictureFor(variant.design),
+    pageNonce(),
+  ]);
   return (
     <StudioLoader
       source={{ kind: 'variant', variantId: String(variant.id) }}
@@ -31,6 +37,8 @@ export default async function VariantStudioPage({ params }: { params: Promise<{ 
       initialSpeciesId={attached ? String(attached.id) : null}
       readOnly={!variant.canEdit}
       photos={photos}
+      picture={picture}
+      nonce={nonce}
     />
   );
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { cellSizeFor, CELLS_AT_REST, CELLS_WHILE_DRAGGING } from './cellSize';
+import { cellSizeFor, CELLS_AT_REST, CELLS_WHILE_DRAGGING } from './studio-cell-size';
 
 describe('cellSizeFor', () => {
   it('keeps the cell count within budget, finer at rest than while dragging', () => {

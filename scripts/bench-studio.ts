@@ -1,0 +1,198 @@
+/**
+ * How soon a studio shows its field, in Chromium against a production build, as a user opens it:
+ *
+ *   npm run --silent bench:studio [-- --runs 10] [--no-build]
+ *
+ * Brings up what `npm test`'s browser stage does (the private MariaDB with a database of its own,
+ * migrations, the demo seed, `next build` into .next/bench-build, `next start` on a free port) and stops
+ * it at the end. Then opens, each in a fresh browser context (nothing cached), `--runs` times:
+ * the saved demo design of the "Desert vivarium" (signed in) and the scratch studio (no account), after
+ * one opening of each that is not counted (the server's first computation of a design's picture).
+ *
+ * Two times per opening, from the navigation's start: `field-visible` (the field is first on screen,
+ * picture or computed) and `field-computed` (the studio's engine worker answered). Prints median and p90
+ * of both with the load average (the machine is shared), and as its LAST line one JSON object.
+ * `--no-build` reuses .next/bench-build when it exists.
+ */
+import { existsSync } from 'node:fs';
+import { loadavg } from 'node:os';
+import path from 'node:path';
+import type { Browser, BrowserContext } from 'playwright-core';
+import { loadEnv } from './lib/env.mjs';
+import { bin, freePort, log, run } from './lib/proc.mjs';
+import { Lifecycle, migrate, prepareDatabase, ROOT, seed, startNext } from './lib/stack.mjs';
+
+const DIST = '.next/bench-build';
+
+function parseArgs(argv: string[]) {
+  const opts = { runs: 10, build: true };
+  for (let k = 0; k < argv.length; k++) {
+    const a = argv[k]!;
+    if (a === '--runs') opts.runs = Number(argv[++k]);
+    else if (a.startsWith('--runs=')) opts.runs = Number(a.slice(7));
+    else if (a === '--no-build') opts.build = false;
+    else throw new Error(`unknown option ${a} (--runs N, --no-build)`);
+  }
+  if (!(Number.isInteger(opts.runs) && opts.runs >= 1))
+    throw new Error('--runs: expected a whole number ≥ 1');
+  return opts;
+}
+
+type Opening = { visible: number; computed: number };
+
+function quantile(xs: number[], q: number): number {
+  const s = [...xs].sort((a, b) => a - b);
+  // Nearest rank: the p90 of 10 openings is the 9th fastest.
+  return s[Math.min(s.length - 1, Math.max(0, Math.ceil(q * s.length) - 1))]!;
+}
+
+/** One opening in a fresh context: the two marks, in ms after the navigation started. */
+async function openOnce(browser: Browser, url: string, cookies: Parameters<BrowserContext['addCookies']>[0]) {
+  const { newContext } = await import('../tests/browser/harness');
+  const context = await newContext(browser);
+  try {
+    if (cookies.length) await context.addCookies(cookies);
+    const page = await context.newPage();
+    await page.goto(url, { waitUntil: 'commit' });
+    const marks = await page.waitForFunction(
+      () => {
+        const at = (name: string) => performance.getEntriesByName(name, 'mark')[0]?.startTime;
+        const visible = at('field-visible');
+        const computed = at('field-computed');
+        return visible !== undefined && computed !== undefined ? { visible, computed } : null;
+      },
+      null,
+      { timeout: 120_000, polling: 50 },
+    );
+    return (await marks.jsonValue()) as Opening;
+  } finally {
+    await context.close();
+  }
+}
+
+async function main() {
+  const opts = parseArgs(process.argv.slice(2));
+  const env = loadEnv();
+  const life = new Lifecycle();
+  life.handleSignals(130);
+  const port = await freePort(Number(env.TEST_PORT) + 50);
+  const appUrl = `http://localhost:${port}`;
+  const benchEnv = {
+    ...env,
+    DB_NAME: `${env.DB_NAME}_bench`,
+    PORT: String(port),
+    APP_URL: appUrl,
+    NEXTAUTH_URL: appUrl,
+    NEXTAUTH_SECRET: env.NEXTAUTH_SECRET || 'baskwell-bench-only-secret-0123456789abcdefghijklmnop',
+    NEXT_DIST_DIR: DIST,
+    NEXT_TELEMETRY_DISABLED: '1',
+  };
+  let browser: Browser | null = null;
+  try {
+    log('Database, migrations and the demo seed ...');
+    await prepareDatabase(life, benchEnv, { recreate: [benchEnv.DB_NAME] });
+    await migrate(benchEnv);
+    await seed(benchEnv);
+    if (opts.build || !existsSync(path.join(ROOT, DIST, 'BUILD_ID'))) {
+      log(`Building the app into ${DIST} (next build) ...`);
+      await run(bin('next'), ['build'], { env: benchEnv });
+    }
+    await startNext(life, benchEnv, {
+      port,
+      build: false,
+      logFile: path.join(ROOT, 'test-results', 'bench-studio-next.log'),
+    });
+
+    // The harness reads the app's address when it is first imported.
+    process.env.E2E_BASE_URL = appUrl;
+    const { launchBrowser } = await import('../tests/browser/harness');
+    const { enclosureIdByName, staffPage } = await import('../tests/browser/journey-helpers');
+    browser = await launchBrowser();
+    const staff = await staffPage(browser);
+    const enclosureId = await enclosureIdByName(staff, 'Desert vivarium');
+    const variantId = await staff.evaluate(async (id) => {
+      const res = await fetch(`/api/enclosures/${id}/designs`);
+      const body = (await res.json()) as { items?: { variants?: { id: number }[] }[] };
+      return body.items?.[0]?.variants?.[0]?.id ?? null;
+    }, enclosureId);
+    if (!variantId) throw new Error('the demo "Desert vivarium" has no design to open');
+    const cookies = await staff.context().cookies();
+    await staff.context().close();
+
+    const targets = [
+      { name: 'saved design', url: `${appUrl}/studio/${variantId}`, cookies },
+      { name: 'scratch studio', url: `${appUrl}/studio-scratch`, cookies: [] },
+    ];
+    const load0 = loadavg()[0]!;
+    const results: Record<string, Opening[]> = {};
+    for (const t of targets) {
+      await openOnce(browser, t.url, t.cookies); // not counted: the server's first picture of the design
+      results[t.name] = [];
+      for (let k = 0; k < opts.runs; k++) results[t.name]!.push(await openOnce(browser, t.url, t.cookies));
+    }
+    const load1 = loadavg()[0]!;
+
+    const r0 = (v: number) => Math.round(v);
+    const summary = (xs: Opening[]) => ({
+      visibleMedianMs: r0(
+        quantile(
+          xs.map((x) => x.visible),
+          0.5,
+        ),
+      ),
+      visibleP90Ms: r0(
+        quantile(
+          xs.map((x) => x.visible),
+          0.9,
+        ),
+      ),
+      computedMedianMs: r0(
+        quantile(
+          xs.map((x) => x.computed),
+          0.5,
+        ),
+      ),
+      computedP90Ms: r0(
+        quantile(
+          xs.map((x) => x.computed),
+          0.9,
+        ),
+      ),
+    });
+    const saved = summary(results['saved design']!);
+    const scratch = summary(results['scratch studio']!);
+    console.log(
+      `Navigation → field on screen (field-visible) and → the engine worker's first answer (field-computed), ` +
+        `${opts.runs} openings each in a fresh Chromium context, production build:`,
+    );
+    for (const [name, s] of [
+      ['saved design', saved],
+      ['scratch studio', scratch],
+    ] as const) {
+      console.log(
+        `  ${name.padEnd(15)} field visible: median ${s.visibleMedianMs} ms, p90 ${s.visibleP90Ms} ms; ` +
+          `computed: median ${s.computedMedianMs} ms, p90 ${s.computedP90Ms} ms`,
+      );
+    }
+    console.log(`Load average ${load0.toFixed(1)} before, ${load1.toFixed(1)} after (a shared machine).`);
+    console.log(
+      JSON.stringify({
+        runs: opts.runs,
+        saved,
+        scratch,
+        loadAvg: Math.round(((load0 + load1) / 2) * 100) / 100,
+      }),
+    );
+  } finally {
+    await browser?.close();
+    await life.stop();
+  }
+}
+
+main().then(
+  () => process.exit(0),
+  (e: unknown) => {
+    console.error(`bench:studio failed: ${e instanceof Error ? e.message : String(e)}`);
+    process.exit(1);
+  },
+);

@@ -1,0 +1,9 @@
+// Types of scripts/lib/proc.mjs for TypeScript callers (scripts run with tsx).
+export declare function log(msg: string): void;
+export declare function bin(name: string): string;
+export declare function run(
+  cmd: string,
+  args?: string[],
+  opts?: { env?: NodeJS.ProcessEnv; cwd?: string; capture?: boolean; check?: boolean; input?: string },
+): Promise<{ code: number; stdout: string; stderr: string }>;
+export declare function freePort(start: number, host?: string): Promise<number>;

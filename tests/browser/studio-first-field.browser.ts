@@ -1,0 +1,179 @@
+// The studio opens with the field already on screen: the page's HTML carries the design's field as a
+// picture (no script needed to see it), the `field-visible` mark is set while the engine worker has not
+// answered yet, the canvas draws the same bands (the legend is there before the first answer and does
+// not change with it), and a scratch design of this browser's own is never shown the example's field.
+// The workers' answers are held back by wrapping the page's Worker, so "before the worker answers" is a
+// state of the page, not a race. No timing is asserted (npm run bench:studio prints the times).
+import type { BrowserContext, Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import { exampleDesign } from '@/simulation';
+import { BASE_URL, newContext, screenshot, withBrowser, watchPageErrors } from './harness';
+import { signInCookie } from './sign-in-cookie';
+import { demoSignIn } from '@/lib/demo/scenario';
+import { demoKeeperEnclosure } from './journey-helpers';
+import { eventually, studioReady } from './studio-helpers';
+
+const session = withBrowser();
+
+declare global {
+  interface Window {
+    __releaseWorkers?: () => void;
+    __heldWorkerAnswers?: number;
+  }
+}
+
+/** Every Worker of the page keeps its answers until `window.__releaseWorkers()` is called. */
+async function holdWorkerAnswers(context: BrowserContext) {
+  await context.addInitScript(() => {
+    const Native = window.Worker;
+    const held: (() => void)[] = [];
+    let holding = true;
+    window.__heldWorkerAnswers = 0;
+    window.__releaseWorkers = () => {
+      holding = false;
+      held.splice(0).forEach((deliver) => deliver());
+    };
+    class HeldWorker extends Native {
+      override set onmessage(handler: ((e: MessageEvent) => void) | null) {
+        super.onmessage = handler
+          ? (e: MessageEvent) => {
+              if (!holding) return handler.call(this, e);
+              window.__heldWorkerAnswers = (window.__heldWorkerAnswers ?? 0) + 1;
+              held.push(() => handler.call(this, e));
+            }
+          : null;
+      }
+      override get onmessage() {
+        return super.onmessage;
+      }
+    }
+    window.Worker = HeldWorker;
+  });
+}
+
+const fieldVisibleMarks = (page: Page) =>
+  page.evaluate(() => performance.getEntriesByName('field-visible', 'mark').length);
+const roundTrips = (page: Page) => page.evaluate(() => window.__baskwellStudio?.roundTrips.length ?? 0);
+
+/** Opens `path` with the workers held; checks the HTML carries the picture; returns the page. */
+async function openHeld(context: BrowserContext, path: string): Promise<{ page: Page; html: string }> {
+  await holdWorkerAnswers(context);
+  const page = await context.newPage();
+  page.setDefaultTimeout(60_000);
+  const res = await page.goto(path);
+  expect(res?.status()).toBe(200);
+  return { page, html: (await res?.text()) ?? '' };
+}
+
+/** The picture is on screen, the mark is set, and no engine answer has been applied yet. */
+async function expectPictureBeforeWorker(page: Page, html: string, field = 'uvi') {
+  // In the HTML itself: seen in the first paint, before any script runs.
+  expect(html).toContain('data-testid="studio-first-field"');
+  expect(html).toMatch(/data-testid="studio-first-field"[^>]*>[\s\S]*?<path[^>]+d="M/);
+  const picture = page.getByTestId('studio-first-field').first();
+  await expect.poll(() => picture.isVisible(), eventually).toBe(true);
+  expect(await picture.getAttribute('data-field')).toBe(field);
+  expect(await picture.locator('path').count()).toBeGreaterThan(1);
+  await expect.poll(() => fieldVisibleMarks(page), eventually).toBe(1);
+  expect(await roundTrips(page)).toBe(0);
+}
+
+describe('studio: the field in the first paint', () => {
+  it('a saved design: picture and mark before the worker answers, the same legend after', async () => {
+    // Signed in by a cookie (the form is not what this test is about, and is slow on a busy machine).
+    const staffSignIn = demoSignIn('staff');
+    const context = await newContext(session.browser());
+    const cookie = await signInCookie(staffSignIn.email, staffSignIn.password);
+    const [name, value] = cookie.split(/=(.*)/s) as [string, string];
+    await context.addCookies([{ name, value, url: BASE_URL }]);
+    const staff = await context.newPage();
+    staff.setDefaultTimeout(60_000);
+    await staff.goto('/enclosures');
+    const { enclosureId } = await demoKeeperEnclosure(staff, 'First field');
+    const r = await staff.evaluate(
+      async ({ id, design }) => {
+        const res = await fetch(`/api/enclosures/${id}/designs`, {
+          method: 'POST',
+          headers: { 'content-type': 'application/json' },
+          body: JSON.stringify({ name: 'First field example', design }),
+        });
+        return { status: res.status, body: (await res.json()) as { variant?: { id: number } } };
+      },
+      { id: enclosureId, design: exampleDesign() },
+    );
+    expect(r.status).toBe(201);
+    const variantId = r.body.variant!.id;
+    await staff.close();
+    const { page, html } = await openHeld(context, `/studio/${variantId}`);
+    const errors = watchPageErrors(page);
+    await expectPictureBeforeWorker(page, html);
+
+    // The canvas draws the page's bands before the worker answers: the legend is already there.
+    await page.waitForSelector('[data-testid=studio-canvas] canvas');
+    const legend = page.getByTestId('canvas-legend');
+    await expect.poll(() => legend.isVisible(), eventually).toBe(true);
+    const before = await legend.textContent();
+    expect(before).toMatch(/\d/);
+    expect(await roundTrips(page)).toBe(0);
+    await screenshot(page, 'studio-first-field-before-worker');
+
+    await page.evaluate(() => window.__releaseWorkers?.());
+    await studioReady(page);
+    // The engine's answer has the same thresholds: nothing on the legend changes.
+    await expect.poll(() => legend.textContent(), eventually).toBe(before);
+    expect(await fieldVisibleMarks(page)).toBe(1);
+    expect(errors()).toEqual([]);
+    await context.close();
+  });
+
+  it('the scratch studio: the example field before the worker answers', async () => {
+    const context = await newContext(session.browser());
+    const { page, html } = await openHeld(context, '/studio-scratch');
+    const errors = watchPageErrors(page);
+    await expectPictureBeforeWorker(page, html);
+    await page.evaluate(() => window.__releaseWorkers?.());
+    await studioReady(page);
+    expect(errors()).toEqual([]);
+    await context.close();
+  });
+
+  it("the scratch studio with this browser's own design: no example field; the mark once computed", async () => {
+    const context = await newContext(session.browser());
+    // The example without its first lamp: another field than the example's.
+    const example = exampleDesign();
+    const firstLamp = example.objects.find((o) => o.type === 'lamp')!;
+    const own = { ...example, objects: example.objects.filter((o) => o !== firstLamp) };
+    await context.addInitScript((design) => {
+      if (!localStorage.getItem('baskwell.studio.local.scratch'))
+        localStorage.setItem('baskwell.studio.local.scratch', JSON.stringify({ version: 3, design }));
+    }, own);
+    const { page } = await openHeld(context, '/studio-scratch');
+    await page.waitForSelector('[data-testid=studio-canvas] canvas');
+    // Hidden from the first paint on (the page's own inline check), and never marked as the field.
+    expect(await page.getByTestId('studio-first-field').first().isVisible()).toBe(false);
+    expect(await fieldVisibleMarks(page)).toBe(0);
+    expect(await page.getByTestId('canvas-legend').isVisible()).toBe(false);
+    await page.evaluate(() => window.__releaseWorkers?.());
+    await studioReady(page);
+    await expect.poll(() => fieldVisibleMarks(page), eventually).toBe(1);
+    await context.close();
+  });
+
+  it('a field chosen in this browser is drawn by the server on the next visit', async () => {
+    const context = await newContext(session.browser());
+    const { page } = await openHeld(context, '/studio-scratch');
+    await page.evaluate(() => window.__releaseWorkers?.());
+    await studioReady(page);
+    // The studio copies its field choice to a cookie the server reads.
+    expect(await page.evaluate(() => document.cookie)).toContain('baskwell.studio.view=uvi.75');
+    await context.addCookies([{ name: 'baskwell.studio.view', value: 'tempC.60', url: page.url() }]);
+    await page.evaluate(() =>
+      localStorage.setItem('baskwell.studio.prefs', JSON.stringify({ field: 'tempC', fieldOpacity: 0.6 })),
+    );
+    const again = await context.newPage();
+    const res = await again.goto('/studio-scratch');
+    const html = (await res?.text()) ?? '';
+    await expectPictureBeforeWorker(again, html, 'tempC');
+    await context.close();
+  });
+});
