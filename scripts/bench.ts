@@ -10,11 +10,18 @@
  * measured; fullMs/moveMs/referenceMs are CPU milliseconds, the *WallMs fields wall-clock.
  * The reference is run on every 4th row and column (1 cell in 16) and its time scaled up to the whole grid;
  * maxRelError is measured on those cells.
+ *
+ * The arithmetic floor is timed in the same run: every lamp's closed form (the engine's own tube and
+ * bulb formulas) at every cell, with no barriers, no heat and no allocation — what no engine computing
+ * these fields cell by cell can go below. `fullOverFloor` is the full computation over that floor and
+ * `moveOverFull` one lamp moved (0.5 cm steps on a warm solver, the others from the cache) over a full
+ * computation, at the demo scale and at a 4× larger one (4× the cells, twice the lamps).
  */
 import { loadavg } from 'node:os';
 import { computeFields, FieldSolver, type Design } from '@/simulation';
 import { maxRelativeError, referenceFields } from '../simulation/testing/reference';
 import { benchDesign } from '../simulation/testing/fixtures';
+import { floorFill, floorSetup } from '../simulation/testing/floor';
 
 interface Timing {
   cpu: number;
@@ -40,6 +47,57 @@ function medians(ts: Timing[]): Timing {
   return { cpu: median(ts.map((t) => t.cpu)), wall: median(ts.map((t) => t.wall)) };
 }
 
+function benchFloor(design: Design, cellCm: number, runs: number): Timing {
+  const { lamps, nx, ny, out } = floorSetup(design, cellCm);
+  for (let k = 0; k < 5; k++) floorFill(lamps, nx, ny, cellCm, out);
+  const ts: Timing[] = [];
+  for (let k = 0; k < runs; k++) ts.push(time(() => floorFill(lamps, nx, ny, cellCm, out)));
+  return medians(ts);
+}
+
+type LampObject = Extract<Design['objects'][number], { type: 'lamp' }>;
+
+/** Sideways by d cm, or in depth by d cm. */
+const sideways = (o: LampObject, d: number): LampObject => ({ ...o, x: o.x + d });
+const inDepthBy = (o: LampObject, d: number): LampObject => ({ ...o, z: (o.z ?? 30) + d });
+
+/**
+ * One lamp moved in 0.5 cm steps (back and forth) on a warm solver: only that lamp is recomputed (the
+ * others come from the cache), checked against a fresh computation at the end.
+ */
+function benchLampMove(
+  design: Design,
+  cellCm: number,
+  runs: number,
+  step: (o: LampObject, d: number) => LampObject = sideways,
+  lampId = 't5-0',
+): Timing {
+  const opts = { cellCm };
+  const solver = new FieldSolver();
+  let current = design;
+  solver.compute(current, opts);
+  const times: Timing[] = [];
+  // The first steps warm up the JIT (the full computations before compiled the one-off path only).
+  for (let k = -10; k < runs; k++) {
+    const dx = (k + 10) % 20 < 10 ? 0.5 : -0.5;
+    current = {
+      ...current,
+      objects: current.objects.map((o) => (o.type === 'lamp' && o.id === lampId ? step(o, dx) : o)),
+    };
+    const next = current;
+    const t = time(() => solver.compute(next, opts));
+    if (k >= 0) times.push(t);
+    if (solver.stats.full !== 1) throw new Error('moving one lamp recomputed more than that lamp');
+  }
+  const a = solver.compute(current, opts);
+  const b = computeFields(current, opts);
+  for (let c = 0; c < a.uvb.length; c++) {
+    if (a.uvb[c] !== b.uvb[c] || a.tempC[c] !== b.tempC[c])
+      throw new Error('cached recompute after a lamp move differs from a full one');
+  }
+  return medians(times);
+}
+
 /** The design with one perch shifted by dx (a drag step). */
 function movePerch(d: Design, id: string, dx: number): Design {
   return {
@@ -61,43 +119,16 @@ function inDepth(d: Design): Design {
   };
 }
 
-/**
- * One lamp moved in depth, step by step, on a warm solver: only that lamp is recomputed (the others come
- * from the cache), checked against a fresh computation at the end.
- */
-function benchLampDepthMove(design: Design, cellCm: number, runs: number): Timing {
-  const opts = { cellCm };
-  const solver = new FieldSolver();
-  let current = design;
-  solver.compute(current, opts);
-  const times: Timing[] = [];
-  for (let k = 0; k < runs; k++) {
-    const dz = k % 20 < 10 ? 0.5 : -0.5;
-    current = {
-      ...current,
-      objects: current.objects.map((o) =>
-        o.type === 'lamp' && o.id === 't5-0' ? { ...o, z: (o.z ?? 30) + dz } : o,
-      ),
-    };
-    const next = current;
-    times.push(time(() => solver.compute(next, opts)));
-    if (solver.stats.full !== 1) throw new Error('moving one lamp recomputed more than that lamp');
-  }
-  const a = solver.compute(current, opts);
-  const b = computeFields(current, opts);
-  for (let c = 0; c < a.uvb.length; c++) {
-    if (a.uvb[c] !== b.uvb[c] || a.tempC[c] !== b.tempC[c])
-      throw new Error('cached recompute after a lamp move differs from a full one');
-  }
-  return medians(times);
-}
-
 interface Row {
   name: string;
   cells: number;
   lamps: number;
   occluders: number;
+  /** Edges of the barriers' outlines (a segment counts one). */
+  edges: number;
   full: Timing;
+  floor: Timing;
+  lampMove: Timing;
   move: Timing;
   reference: Timing;
   speedup: number;
@@ -138,12 +169,16 @@ function benchOne(name: string, design: Design, cellCm: number, runs: number, st
   const scaleUp = (grid.nx * grid.ny) / evaluated;
   const reference = { cpu: refTime.cpu * scaleUp, wall: refTime.wall * scaleUp };
   const fullM = medians(full);
+  const { edges } = floorSetup(design, cellCm);
   return {
     name,
     cells: grid.nx * grid.ny,
     lamps: design.objects.filter((o) => o.type === 'lamp').length,
     occluders: design.objects.filter((o) => o.type !== 'lamp').length,
+    edges,
     full: fullM,
+    floor: benchFloor(design, cellCm, runs),
+    lampMove: benchLampMove(design, cellCm, runs),
     move: medians(move),
     reference,
     speedup: reference.cpu / fullM.cpu,
@@ -162,8 +197,9 @@ function main() {
     benchOne('4× lamps', benchDesign(4, 1), 0.5, 21, 8),
     benchOne('4× occluders', benchDesign(1, 4), 0.5, 21, 8),
     benchOne('demo, lamps in depth', inDepth(benchDesign()), 0.5, 21, 8),
+    benchOne('4× larger (2× lamps @0.25)', benchDesign(2, 1), 0.25, 21, 8),
   ];
-  const lampMove = benchLampDepthMove(inDepth(benchDesign()), 0.5, 41);
+  const lampMove = benchLampMove(inDepth(benchDesign()), 0.5, 41, inDepthBy);
   const head = [
     'variant',
     'cells',
@@ -171,13 +207,17 @@ function main() {
     'occl',
     'full ms',
     'move ms',
+    'floor ms',
+    'full/floor',
+    'lamp mv ms',
+    'mv/full',
     'ref ms',
     'full wall',
     'move wall',
     'speedup',
     'max rel err',
   ];
-  const widths = [22, 7, 6, 5, 8, 8, 9, 10, 10, 8, 12];
+  const widths = [26, 7, 6, 5, 8, 8, 9, 10, 10, 8, 9, 10, 10, 8, 12];
   console.log(head.map((h, k) => (k === 0 ? h.padEnd(widths[k]!) : pad(h, widths[k]!))).join(' '));
   for (const r of rows) {
     const cols = [
@@ -187,6 +227,10 @@ function main() {
       String(r.occluders),
       r.full.cpu.toFixed(2),
       r.move.cpu.toFixed(2),
+      r.floor.cpu.toFixed(2),
+      (r.full.cpu / r.floor.cpu).toFixed(2),
+      r.lampMove.cpu.toFixed(2),
+      (r.lampMove.cpu / r.full.cpu).toFixed(2),
       r.reference.cpu.toFixed(0),
       r.full.wall.toFixed(2),
       r.move.wall.toFixed(2),
@@ -204,7 +248,12 @@ function main() {
     `CPU ms of this process (medians); wall-clock alongside. Load average ${load.toFixed(1)} on this machine. ` +
       'Reference time scaled up from a 1-in-16 (demo) or 1-in-64 (scaled variants) cell sample.',
   );
+  console.log(
+    'floor: every lamp\'s closed form at every cell, no barriers, no heat, no allocation; "move" drags a ' +
+      'perch, "lamp mv" drags one lamp (the others from the cache).',
+  );
   const d = rows[0]!;
+  const large = rows.at(-1)!;
   const r2 = (v: number) => Math.round(v * 100) / 100;
   console.log(
     JSON.stringify({
@@ -218,6 +267,21 @@ function main() {
       maxRelError: Number(d.maxRelError.toPrecision(3)),
       fullWallMs: r2(d.full.wall),
       moveWallMs: r2(d.move.wall),
+      floorMs: r2(d.floor.cpu),
+      fullOverFloor: r2(d.full.cpu / d.floor.cpu),
+      lampMoveMs: r2(d.lampMove.cpu),
+      moveOverFull: r2(d.lampMove.cpu / d.full.cpu),
+      large: {
+        cells: large.cells,
+        lamps: large.lamps,
+        edges: large.edges,
+        fullMs: r2(large.full.cpu),
+        floorMs: r2(large.floor.cpu),
+        fullOverFloor: r2(large.full.cpu / large.floor.cpu),
+        lampMoveMs: r2(large.lampMove.cpu),
+        moveOverFull: r2(large.lampMove.cpu / large.full.cpu),
+        maxRelError: Number(large.maxRelError.toPrecision(3)),
+      },
       loadAvg: r2(load),
     }),
   );

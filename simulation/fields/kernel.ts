@@ -21,6 +21,7 @@
  */
 import type { Occluder } from '../geometry/occluders';
 import { clipToStrip } from '../geometry/clip';
+import { tubeG as G } from '../sources/tube';
 import type { LampGeom } from './scene';
 
 /** Occluder parts closer than this above the receiver are ignored (a receiver lying on a surface). */
@@ -39,6 +40,12 @@ export class RowData {
   /** A bulb's beam reaches |dx| ≤ half on this row; negative when it misses the section plane here. */
   half = 0;
   count = 0;
+  /**
+   * The barriers evalCell looks at (indices into the row's lists): all of them after prepareRow; a caller
+   * sweeping a row in order narrows it to those whose range can contain the next cells.
+   */
+  act: Int32Array;
+  nAct = 0;
   occ: Int32Array;
   qa: Float64Array;
   qb: Float64Array;
@@ -48,6 +55,7 @@ export class RowData {
   B: Float64Array;
   constructor(capacity: number) {
     const c = Math.max(1, capacity);
+    this.act = new Int32Array(c);
     this.occ = new Int32Array(c);
     this.qa = new Float64Array(c);
     this.qb = new Float64Array(c);
@@ -84,6 +92,19 @@ export class Scratch {
   }
 }
 
+/** Sorts the first m entries in place, ascending (insertion sort: a few dozen at most, no allocation). */
+export function sortPrefix(xs: Float64Array | Int32Array, m: number): void {
+  for (let a = 1; a < m; a++) {
+    const v = xs[a]!;
+    let b = a - 1;
+    while (b >= 0 && xs[b]! > v) {
+      xs[b + 1] = xs[b]!;
+      b--;
+    }
+    xs[b + 1] = v;
+  }
+}
+
 /** Prepare row data for receivers at height qy; returns false when the lamp cannot light this row. */
 export function prepareRow(
   lamp: LampGeom,
@@ -96,6 +117,7 @@ export function prepareRow(
   const h = lamp.y - qy;
   row.h = h;
   row.count = 0;
+  row.nAct = 0;
   if (!(h > 0)) return false;
   // In the plane (dz = 0) these are exactly the two-dimensional values, so such designs keep their bits.
   const dz2 = lamp.dz2;
@@ -145,14 +167,12 @@ export function prepareRow(
     row.qb[c] = qb + margin;
     row.vStart[c] = vOff;
     row.vCount[c] = n;
+    row.act[c] = c;
     row.count = c + 1;
     vOff += n;
   }
+  row.nAct = row.count;
   return true;
-}
-
-function G(u: number, h: number): number {
-  return Math.atan(u / h) + (u * h) / (h * h + u * u);
 }
 
 /**
@@ -178,7 +198,9 @@ export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): 
   let n = 0;
   const A = row.A;
   const B = row.B;
-  for (let c = 0; c < row.count; c++) {
+  const act = row.act;
+  for (let t = 0, nAct = row.nAct; t < nAct; t++) {
+    const c = act[t]!;
     if (qx <= row.qa[c]! || qx >= row.qb[c]!) continue;
     const v0 = row.vStart[c]!;
     const v1 = v0 + row.vCount[c]!;
@@ -238,15 +260,7 @@ export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): 
     bp[m++] = s.lo[c]!;
     bp[m++] = s.hi[c]!;
   }
-  for (let a = 1; a < m; a++) {
-    const v = bp[a]!;
-    let b = a - 1;
-    while (b >= 0 && bp[b]! > v) {
-      bp[b + 1] = bp[b]!;
-      b--;
-    }
-    bp[b + 1] = v;
-  }
+  sortPrefix(bp, m);
   let sumU = 0;
   let sumI = 0;
   let gPrev = G(bp[0]! - qx, d);

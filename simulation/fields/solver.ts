@@ -83,9 +83,15 @@ export class FieldSolver {
     const used: LampEntry[] = [];
     const fu: number[] = [];
     const fi: number[] = [];
-    for (const lamp of scene.lamps) {
-      const key = lampKey(lamp, nx, ny, cell);
-      const entry = this.lampEntry(lamp, key, scene, occKeys, nx, ny, cell);
+    const keys = scene.lamps.map((lamp) => lampKey(lamp, nx, ny, cell));
+    // Fields of lamps that are gone (a moved lamp's old place): their buffers take a new lamp's fields,
+    // so a drag allocates nothing per step.
+    const spare: LampEntry[] = [];
+    for (const [key, e] of this.entries) if (!keys.includes(key)) spare.push(e);
+    for (let l = 0; l < scene.lamps.length; l++) {
+      const lamp = scene.lamps[l]!;
+      const key = keys[l]!;
+      const entry = this.lampEntry(lamp, key, scene, occKeys, nx, ny, cell, spare);
       next.set(key, entry);
       used.push(entry);
       const f = lampUvbFactor(lamp.lamp, opts.addMonths ?? 0);
@@ -108,30 +114,64 @@ export class FieldSolver {
     ]);
     const last = this.totals;
     const incremental = last !== null && last.key === sumKey && this.stats.full === 0;
-    const t = incremental ? last : newTotals(sumKey, cells);
+    // Every cell is written below when not incremental, so the last totals' buffers can be reused.
+    const t = incremental
+      ? last
+      : last && last.uvb.length === cells
+        ? { ...last, key: sumKey }
+        : newTotals(sumKey, cells);
     const air = new Float64Array(ny);
     for (let j = 0; j < ny; j++)
       air[j] = airTempC((j + 0.5) * cell, scene.height, scene.roomC, scene.airRiseK);
-    const dirty = this.dirty;
     const n = used.length;
     // Totals are always summed lamp by lamp in scene order, so an incremental update is bit-identical
     // to a full one.
-    for (let c = 0; c < cells; c++) {
-      if (incremental && dirty[c] === 0) continue;
-      let u = 0;
-      let v = 0;
-      let q = 0;
+    if (incremental) {
+      const dirty = this.dirty;
+      for (let c = 0; c < cells; c++) {
+        if (dirty[c] === 0) continue;
+        let u = 0;
+        let v = 0;
+        let q = 0;
+        for (let k = 0; k < n; k++) {
+          const e = used[k]!;
+          const val = e.uv[c]!;
+          u += val * fu[k]!;
+          v += val * fi[k]!;
+          q += e.ir[c]!;
+        }
+        t.uvb[c] = u;
+        t.uvi[c] = v;
+        const a = air[(c / nx) | 0]!;
+        t.tempC[c] = q > 0 ? surfaceTempC(HEAT_DEFAULTS.absorptance * q, a, HEAT_DEFAULTS.emissivity, hc) : a;
+      }
+    } else {
+      // The same sums in the same order, a lamp at a time over all cells (tight loops), the radiant sum
+      // kept in tempC until the surface temperatures replace it.
+      const { uvb, uvi, tempC: q } = t;
+      uvb.fill(0);
+      uvi.fill(0);
+      q.fill(0);
       for (let k = 0; k < n; k++) {
         const e = used[k]!;
-        const val = e.uv[c]!;
-        u += val * fu[k]!;
-        v += val * fi[k]!;
-        q += e.ir[c]!;
+        const lu = e.uv;
+        const li = e.ir;
+        const a = fu[k]!;
+        const b = fi[k]!;
+        for (let c = 0; c < cells; c++) {
+          const val = lu[c]!;
+          uvb[c] = uvb[c]! + val * a;
+          uvi[c] = uvi[c]! + val * b;
+          q[c] = q[c]! + li[c]!;
+        }
       }
-      t.uvb[c] = u;
-      t.uvi[c] = v;
-      const a = air[(c / nx) | 0]!;
-      t.tempC[c] = q > 0 ? surfaceTempC(HEAT_DEFAULTS.absorptance * q, a, HEAT_DEFAULTS.emissivity, hc) : a;
+      for (let j = 0; j < ny; j++) {
+        const a = air[j]!;
+        for (let c = j * nx, end = c + nx; c < end; c++) {
+          const qc = q[c]!;
+          q[c] = qc > 0 ? surfaceTempC(HEAT_DEFAULTS.absorptance * qc, a, HEAT_DEFAULTS.emissivity, hc) : a;
+        }
+      }
     }
     this.totals = t;
     return {
@@ -223,6 +263,7 @@ export class FieldSolver {
     nx: number,
     ny: number,
     cell: number,
+    spare: LampEntry[],
   ): LampEntry {
     const old = this.entries.get(key);
     if (old) {
@@ -249,8 +290,11 @@ export class FieldSolver {
       }
     }
     this.stats.full++;
-    const uv = new Float64Array(nx * ny);
-    const ir = new Float64Array(nx * ny);
+    const reused = spare.pop();
+    const fits = reused !== undefined && reused.uv.length === nx * ny;
+    // fillLamp leaves the cells a lamp cannot reach untouched: a reused buffer starts from zero.
+    const uv = fits ? reused.uv.fill(0) : new Float64Array(nx * ny);
+    const ir = fits ? reused.ir.fill(0) : new Float64Array(nx * ny);
     this.stats.cellsEvaluated += fillLamp(this.ws, lamp, scene.occluders, uv, ir, nx, ny, cell);
     return { key, occKeys, occluders: scene.occluders, uv, ir };
   }

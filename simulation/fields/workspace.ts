@@ -4,12 +4,16 @@
  */
 import type { Occluder } from '../geometry/occluders';
 import type { LampGeom } from './scene';
-import { evalCell, prepareRow, RowData, Scratch } from './kernel';
+import { evalCell, prepareRow, RowData, Scratch, sortPrefix } from './kernel';
 
 export class Workspace {
   row = new RowData(1);
   row2 = new RowData(1);
   scratch = new Scratch(1);
+  /** A row sweep's cell range per barrier, and where the row is cut (sweepRow). */
+  first = new Int32Array(1);
+  last = new Int32Array(1);
+  cuts = new Int32Array(4);
   private capacity = 0;
 
   /** Make room for rows with up to n barriers. */
@@ -19,6 +23,9 @@ export class Workspace {
     this.row = new RowData(this.capacity);
     this.row2 = new RowData(this.capacity);
     this.scratch = new Scratch(this.capacity);
+    this.first = new Int32Array(this.capacity);
+    this.last = new Int32Array(this.capacity);
+    this.cuts = new Int32Array(2 * this.capacity + 2);
   }
 }
 
@@ -49,14 +56,64 @@ export function fillLamp(
       i1 = Math.min(nx - 1, Math.ceil((lamp.x + half) / cell - 0.5));
     }
     const base = j * nx;
-    for (let i = i0; i <= i1; i++) {
-      evalCell(lamp, row, (i + 0.5) * cell, s);
+    sweepRow(ws, lamp, row, i0, i1, cell, (i) => {
       uv[base + i] = s.uv;
       ir[base + i] = s.ir;
-    }
+    });
     evaluated += Math.max(0, i1 - i0 + 1);
   }
   return evaluated;
+}
+
+/**
+ * Evaluates cells i0..i1 of a prepared row in order, calling `store(i)` after each. Each barrier's range
+ * of Q.x is turned into a range of cells (one cell wider on each side, so rounding never drops a cell the
+ * exact test in evalCell would keep); the row is cut where a range starts or ends, and each piece looks
+ * only at the barriers whose ranges cover it. Same cells, same arithmetic per cell: the same bits.
+ */
+function sweepRow(
+  ws: Workspace,
+  lamp: LampGeom,
+  row: RowData,
+  i0: number,
+  i1: number,
+  cell: number,
+  store: (i: number) => void,
+) {
+  const s = ws.scratch;
+  const n = row.count;
+  const first = ws.first;
+  const last = ws.last;
+  const cuts = ws.cuts;
+  let m = 0;
+  cuts[m++] = i0;
+  cuts[m++] = i1 + 1;
+  for (let c = 0; c < n; c++) {
+    const a = Math.floor(row.qa[c]! / cell - 0.5);
+    const b = Math.ceil(row.qb[c]! / cell - 0.5);
+    first[c] = a < i0 ? i0 : a > i1 + 1 ? i1 + 1 : a;
+    last[c] = b > i1 ? i1 : b < i0 - 1 ? i0 - 1 : b;
+    if (first[c]! <= last[c]!) {
+      cuts[m++] = first[c]!;
+      cuts[m++] = last[c]! + 1;
+    }
+  }
+  sortPrefix(cuts, m);
+  const act = row.act;
+  for (let k = 0; k + 1 < m; k++) {
+    const from = cuts[k]!;
+    const to = cuts[k + 1]!;
+    if (to <= from) continue;
+    let na = 0;
+    for (let c = 0; c < n; c++) if (first[c]! <= from && last[c]! >= to - 1) act[na++] = c;
+    row.nAct = na;
+    for (let i = from; i < to; i++) {
+      evalCell(lamp, row, (i + 0.5) * cell, s);
+      store(i);
+    }
+  }
+  row.nAct = n;
+  for (let c = 0; c < n; c++) act[c] = c;
 }
 
 /** The lamp with transmissions for another list of barriers. */
@@ -108,12 +165,14 @@ export function refillChanged(
     ranges.sort((a, b) => a[0] - b[0]);
     let next = 0;
     for (const [a, b] of ranges) {
-      for (let i = Math.max(a, next); i <= b; i++) {
-        evalCell(lamp, row, (i + 0.5) * cell, s);
-        uv[base + i] = s.uv;
-        ir[base + i] = s.ir;
-        dirty[base + i] = 1;
-        evaluated++;
+      const from = Math.max(a, next);
+      if (from <= b) {
+        sweepRow(ws, lamp, row, from, b, cell, (i) => {
+          uv[base + i] = s.uv;
+          ir[base + i] = s.ir;
+          dirty[base + i] = 1;
+        });
+        evaluated += b - from + 1;
       }
       if (b + 1 > next) next = b + 1;
     }
