@@ -15,6 +15,7 @@ import * as m0013 from './0013-list-sort-indexes';
 import * as m0014 from './0014-reading-setup';
 import * as m0015 from './0015-lamp-lifetime-table';
 import * as m0016 from './0016-lamp-reach-wording';
+import * as m0017 from './0017-starting-sheets-size-climbing';
 
 export type Migration = {
   name: string;
@@ -43,4 +44,5 @@ export const migrations: Migration[] = [
   { name: '0014-reading-setup', ...m0014 },
   { name: '0015-lamp-lifetime-table', ...m0015 },
   { name: '0016-lamp-reach-wording', ...m0016 },
+  { name: '0017-starting-sheets-size-climbing', ...m0017 },
 ];

@@ -162,7 +162,7 @@ describe.each(LAMP_TECH_IDS.map((t) => [t] as const))('the lifetime of %s', (tec
     expect(studioHalfLife(placed)).toBe(half === null ? null : Math.round(half * 4) / 4);
     if (!uv) return;
     const text = explain(
-      { candidate, design, assessment: { findings: [], overall: 'pass' }, unmet: [] },
+      { candidate, design, assessment: { findings: [], overall: 'pass' }, unmet: [], harmful: [] },
       sheet,
       enc,
       'mesh',

@@ -17,6 +17,7 @@ import {
   type LengthUnit,
 } from '@/shared/units';
 import { useLengthUnit, useTempUnit } from '@/components/ui/units';
+import { GUIDED_WALLS } from '@/lib/guided-start/input';
 import type { ProposalView } from '@/lib/guided-start/service';
 import type { ActionResult } from '@/app/(app)/enclosures/new/actions';
 import { ProposalSketch } from './ProposalSketch';
@@ -29,13 +30,27 @@ export type SpeciesChoice = {
   seedKey: string | null;
 };
 export type PersonChoice = { id: number; name: string; role: string };
-export type SizeHint = { width: number; height: number; depth: number; lid: 'mesh' | 'glass' | 'open' };
+export type SizeHint = {
+  width: number;
+  height: number;
+  depth: number;
+  lid: 'mesh' | 'glass' | 'open';
+  walls?: Walls;
+};
+type Walls = (typeof GUIDED_WALLS)[number];
 type Actions = {
   propose: (raw: unknown) => Promise<ActionResult<ProposalView>>;
   create: (raw: unknown) => Promise<ActionResult<{ enclosureId: number; variantId: number }>>;
 };
 
 const LID_LABELS = { mesh: 'Mesh lid', glass: 'Glass lid', open: 'Open top' } as const;
+/** The guided start's own words for the engine's wall materials (the values are the engine's). */
+const WALL_LABELS: Record<Walls, string> = {
+  glass: 'Glass tank or terrarium',
+  wood: 'Wooden vivarium',
+  pvc: 'PVC or melamine board',
+  mesh: 'Mesh cage',
+};
 const show = (cm: number, unit: LengthUnit) => formatNumber(cmToDisplay(cm, unit), unit === 'cm' ? 0 : 1);
 
 /** Species, size, lid and keeper → a proposed design explained → the enclosure, created and opened in the studio. */
@@ -69,6 +84,7 @@ export function GuidedStart(props: {
   });
   const [room, setRoom] = useState({ unit: tempUnit, text: formatNumber(cToDisplay(22, tempUnit), 0) });
   const [lid, setLid] = useState<'mesh' | 'glass' | 'open'>(initialHint.lid);
+  const [walls, setWalls] = useState<Walls>(initialHint.walls ?? 'glass');
   const [keeperId, setKeeperId] = useState<string>('');
   const [name, setName] = useState('');
   const [animalName, setAnimalName] = useState('');
@@ -100,6 +116,7 @@ export function GuidedStart(props: {
     heightCm: Math.round(displayToCm(num(size.h), size.unit) * 10) / 10,
     depthCm: Math.round(displayToCm(num(size.d), size.unit) * 10) / 10,
     lid,
+    walls,
     roomTempC: Math.round(displayToC(num(room.text), room.unit) * 10) / 10,
     ...(keeperId ? { keeperId: Number(keeperId) } : {}),
     name: name.trim() || (chosen ? `${chosen.commonName} enclosure` : ''),
@@ -118,6 +135,7 @@ export function GuidedStart(props: {
         d: show(hint.depth, lengthUnit),
       });
       setLid(hint.lid);
+      setWalls(hint.walls ?? 'glass');
     }
   }
 
@@ -225,6 +243,33 @@ export function GuidedStart(props: {
             </p>
           )}
         </fieldset>
+        <fieldset>
+          <legend className="mb-1 text-body font-medium text-basalt-800">Walls</legend>
+          <div className="flex flex-wrap gap-x-3 gap-y-1">
+            {GUIDED_WALLS.map((w) => (
+              <label key={w} className="inline-flex items-center gap-1.5 text-body text-basalt-800">
+                <input
+                  type="radio"
+                  name="walls"
+                  value={w}
+                  checked={walls === w}
+                  onChange={() => setWalls(w)}
+                />
+                {WALL_LABELS[w]}
+              </label>
+            ))}
+          </div>
+          <p className="mt-1 text-caption text-basalt-500">
+            {walls === 'wood' || walls === 'pvc'
+              ? 'Wood and board hold the lamps’ heat: the air warms about twice as much as in glass.'
+              : walls === 'mesh'
+                ? 'Mesh lets warm air out: the air stays close to the room’s.'
+                : 'Glass lets some heat through; the air warms less than in wood or board.'}
+          </p>
+          {fieldError('walls') && (
+            <p className="mt-1 text-caption font-medium text-ember-700">{fieldError('walls')}</p>
+          )}
+        </fieldset>
         <div>
           <div className="flex items-end gap-2">
             <Field
@@ -293,6 +338,11 @@ export function GuidedStart(props: {
                 design={proposal.design}
                 label={`Proposed set-up for ${proposal.sheet.commonName}`}
               />
+              {proposal.blocked && (
+                <Notice tone="error" title="Not safe to build">
+                  {proposal.blocked}
+                </Notice>
+              )}
               <dl className="space-y-3">
                 {proposal.explanation.map((l, i) => (
                   <div
@@ -309,9 +359,11 @@ export function GuidedStart(props: {
                 ))}
               </dl>
               <div className="flex flex-wrap gap-2">
-                <button type="button" className={button.primary} onClick={create} disabled={pending}>
-                  {pending ? 'Creating…' : 'Create the enclosure and open it in the studio'}
-                </button>
+                {!proposal.blocked && (
+                  <button type="button" className={button.primary} onClick={create} disabled={pending}>
+                    {pending ? 'Creating…' : 'Create the enclosure and open it in the studio'}
+                  </button>
+                )}
                 <button type="button" className={button.secondary} onClick={edit} disabled={pending}>
                   Change the answers
                 </button>

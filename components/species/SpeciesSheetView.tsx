@@ -4,14 +4,16 @@ import { Notice } from '@/components/ui/Notice';
 import { card } from '@/components/ui/styles';
 import { targetWarning } from '@/lib/species/consistency';
 import { FIELD_LABELS, SHEET_FIELDS, type SheetField, type SpeciesSheetDto } from '@/lib/species/schema';
-import { UV_ZONES, type UvZone } from '@/simulation';
+import { LOW_MELANIN_CAUTION, neededBaskingCm, UV_ZONES, type UvZone } from '@/simulation';
+import { formatLengthRounded } from '@/shared/units';
 import { formatRange, formatTempRange, formatTempValue, zoneHabit } from './format';
 import { UnitToggle } from '@/components/ui/UnitToggle';
-import { useTempUnit } from '@/components/ui/units';
+import { useLengthUnit, useTempUnit } from '@/components/ui/units';
 
 /** One species sheet, every figure with the number of the source it comes from. */
 export function SpeciesSheetView({ sheet }: { sheet: SpeciesSheetDto }) {
   const [unit] = useTempUnit();
+  const [lengthUnit] = useLengthUnit();
   const zone = UV_ZONES[sheet.uvZone as UvZone];
   const values: Record<SheetField, string> = {
     uvZone: `Zone ${sheet.uvZone} — ${zoneHabit(zone.label)}; basking UV Index ${zone.max[0]}–${zone.max[1]}, mean ${zone.mean[0]}–${zone.mean[1]}`,
@@ -23,6 +25,11 @@ export function SpeciesSheetView({ sheet }: { sheet: SpeciesSheetDto }) {
     coolAirC: formatTempRange(sheet.coolAirC, unit),
     nightMinC: sheet.nightMinC === null ? 'none given' : formatTempValue(sheet.nightMinC, unit),
     photoperiodH: formatRange(sheet.photoperiodH, 'hours of light a day', 0),
+    adultLengthCm:
+      sheet.adultLengthCm === null
+        ? 'none given (the basking spot is then only asked to be a few cm long)'
+        : `${formatLengthRounded(sheet.adultLengthCm, lengthUnit)}; the basking spot must fit about ${formatLengthRounded(neededBaskingCm({ adultLengthCm: sheet.adultLengthCm }), lengthUnit)} of it`,
+    climbs: sheet.climbs ? 'Yes: the underside of a mesh lid or guard counts as a surface it reaches' : 'No',
   };
   const sourceNumbers = (f: SheetField) =>
     sheet.sources.flatMap((s, i) => (s.covers.includes(f) ? [i + 1] : []));
@@ -51,6 +58,13 @@ export function SpeciesSheetView({ sheet }: { sheet: SpeciesSheetDto }) {
             );
           })}
         </dl>
+        {sheet.lowMelanin && (
+          <div className="mt-4">
+            <Notice tone="warning" title="Albino or hypomelanistic morph">
+              {LOW_MELANIN_CAUTION}
+            </Notice>
+          </div>
+        )}
         {warning && (
           <div className="mt-4">
             <Notice tone="warning" title="The UVB meter target and the UV zone disagree">

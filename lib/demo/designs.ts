@@ -1,7 +1,7 @@
 import 'server-only';
 import type { Transaction } from 'sequelize';
 import { assessmentCost, PERCH_STEP_CM, propose } from '@/lib/guided-start/propose';
-import { PERCH_ID, UV_LAMP_ID, type Lid } from '@/lib/guided-start/layout';
+import { HEAT_LAMP_ID, PERCH_ID, UV_LAMP_ID, type Lid } from '@/lib/guided-start/layout';
 import { applyCalibration, calibrate } from '@/lib/lamp-log/calibrate';
 import { todayIso } from '@/lib/lamp-log/dates';
 import { lampFacts, readingFacts } from '@/lib/lamp-log/store';
@@ -175,6 +175,8 @@ function plannedDesign(
         roomTempC: 22,
       },
       lid: plan.lid,
+      // The enclosure's log lists one UV lamp: the design has that one.
+      maxUvLamps: 1,
     },
     types,
   );
@@ -183,9 +185,14 @@ function plannedDesign(
   if (plan.solidTop) design.objects = design.objects.filter((o) => o.id !== 'lid');
   design.objects = design.objects.map((o): DesignObject => {
     if (o.type !== 'lamp') return o;
-    const log = logged.find(
-      (l) => l.type.id === (o.id === UV_LAMP_ID ? proposal.candidate.uv.id : proposal.candidate.heat?.id),
-    );
+    // The log lists one lamp of each kind: it is the first UV and the first heat lamp of the design.
+    const typeId =
+      o.id === UV_LAMP_ID
+        ? proposal.candidate.uv.id
+        : o.id === HEAT_LAMP_ID
+          ? proposal.candidate.heat?.id
+          : undefined;
+    const log = typeId === undefined ? undefined : logged.find((l) => l.type.id === typeId);
     if (!log) return o;
     const ageDays =
       opts.newUvLamp && o.id === UV_LAMP_ID

@@ -1,7 +1,7 @@
 import type { Finding } from '@/simulation';
 import { controlAdvice, lifetimeSentence, neededBaskingCm, UV_ZONES, type SpeciesSheet } from '@/simulation';
 import { targetWarning } from '@/lib/species/consistency';
-import { baskingZone, hideBox, lampY, type EnclosureInput, type Lid } from './layout';
+import { baskingZone, hideBox, lampCounts, lampY, type EnclosureInput, type Lid } from './layout';
 import type { Proposal } from './propose';
 
 /**
@@ -32,7 +32,11 @@ export function explain(
   const cool = find('cool-end');
   const refuge = find('uv-refuge');
   const zone = UV_ZONES[species.uvZone];
+  const n = lampCounts(c);
   const uvY = lampY(enc, lid, c.mount, c.uv.form, c.raiseCm);
+  const heatY = lampY(enc, lid, c.mount, 'bulb', c.heatRaiseCm ?? c.raiseCm);
+  const uvName = n.uv > 1 ? `${n.uv} × ${c.uv.name}` : c.uv.name;
+  const heatName = c.heat ? (n.heat > 1 ? `${n.heat} × ${c.heat.name}` : c.heat.name) : null;
   const where =
     c.mount === 'inside'
       ? 'hung inside, just under the lid'
@@ -46,7 +50,9 @@ export function explain(
   out.push({
     heading: 'UV lamp',
     text:
-      `${c.uv.name}${c.reflector ? ' with a reflector' : ''}, ${where}, over the warm side. ` +
+      `${uvName}${c.reflector ? (n.uv > 1 ? ', each with a reflector' : ' with a reflector') : ''}, ${where}, over the warm side` +
+      (n.uv > 1 ? (c.uv.form === 'tube' ? ', end to end' : ', side by side') : '') +
+      '. ' +
       `The basking perch top is ${f1(c.perchTopCm)} cm above the floor, about ${f0(uvY - c.perchTopCm)} cm below the lamp` +
       (lid === 'mesh' && c.mount !== 'inside' ? '; the mesh between them takes part of the UVB.' : '.'),
   });
@@ -65,9 +71,14 @@ export function explain(
     out.push({
       heading: 'Heat',
       text:
-        (c.heat
-          ? `${c.heat.name} beside the UV lamp over the same perch. `
-          : `No separate heat lamp: the UV lamp (${c.uv.name}) gives the basking heat itself. `) +
+        (heatName
+          ? `${heatName} beside the UV ${n.uv > 1 ? 'lamps' : 'lamp'} over the same perch` +
+            (n.heat > 1 ? ', spread along it so their pools join' : '') +
+            (c.mount === 'raised' && heatY !== uvY
+              ? `, on a frame about ${f0(heatY - enc.height)} cm above the lid`
+              : '') +
+            '. '
+          : `No separate heat lamp: the UV ${n.uv > 1 ? 'lamps give' : `lamp (${c.uv.name}) gives`} the basking heat itself. `) +
         `The hottest surface the animal can reach is about ${f1(hotC)} °C (the sheet asks ${f1(num(hot, 'targetLo')!)}–${f1(num(hot, 'targetHi')!)} °C).`,
     });
   }
@@ -76,7 +87,10 @@ export function explain(
     out.push({
       heading: 'One basking spot',
       text:
-        `The UV lamp and the heat ${c.heat ? 'lamp hang' : 'come from one lamp hung'} over the same perch, because an animal that basks for heat takes its UV where it is warm (Baines et al. 2016). ` +
+        `The UV and the heat ${c.heat ? 'lamps hang' : 'come from the same lamps, hung'} over the same perch, because an animal that basks for heat takes its UV where it is warm (Baines et al. 2016). ` +
+        (n.uv + n.heat > 2
+          ? 'The lamps are spread along the perch so the spot is long enough for the whole body. '
+          : '') +
         `About ${f0(num(shared, 'overlapCm') ?? 0)} cm of the perch gets both the basking UV and the basking temperature; ` +
         `${species.name} needs about ${f0(num(shared, 'neededCm') ?? 0)} cm${species.adultLengthCm ? `, roughly its body at ${f0(species.adultLengthCm)} cm long` : ''}.`,
     });
@@ -87,14 +101,16 @@ export function explain(
       text:
         `${species.name} climbs, so it can hang from the mesh lid right under the lamps: the check counts the underside of the mesh as a surface it can reach, ` +
         (c.mount === 'raised'
-          ? `and the lamps stand on a frame about ${f0(lampY(enc, lid, c.mount, 'bulb', c.raiseCm) - enc.height)} cm above the lid so the mesh stays out of their reach and below the basking UV limit.`
+          ? `and the lamps stand on a frame about ${f0(uvY - enc.height)} cm (UV)` +
+            (c.heat ? ` and ${f0(heatY - enc.height)} cm (heat)` : '') +
+            ` above the lid, so the mesh stays out of their reach and below the basking UV limit and the basking temperature.`
           : 'and the lamps hang where the mesh stays out of their reach.'),
     });
   }
   out.push({
     heading: 'Lamp control',
     text: controlAdvice(
-      [{ tech: c.uv.tech, name: c.uv.name }, ...(c.heat ? [{ tech: c.heat.tech, name: c.heat.name }] : [])],
+      [{ tech: c.uv.tech, name: uvName }, ...(c.heat ? [{ tech: c.heat.tech, name: heatName! }] : [])],
       species.photoperiodH,
     ),
   });

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { WALL_MATERIALS } from '@/simulation';
 import { textSchema } from '@/lib/api/text';
 
 /** What the guided start asks, as the server checks it. Sizes are inside dimensions in cm, °C. */
@@ -17,6 +18,8 @@ const size = (what: string) =>
     .max(400, `The guided start plans enclosures up to 400 cm (13 ft); use the studio for larger ones.`);
 
 export const LIDS = ['mesh', 'glass', 'open'] as const;
+/** The walls the guided start asks about: exactly the engine's wall table (simulation/model/walls.ts). */
+export const GUIDED_WALLS = WALL_MATERIALS;
 
 export const guidedStartSchema = z.strictObject({
   organisationId: id('The organisation'),
@@ -25,6 +28,9 @@ export const guidedStartSchema = z.strictObject({
   heightCm: size('height'),
   depthCm: size('depth'),
   lid: z.enum(LIDS, { error: 'Choose the lid: mesh, glass or open.' }),
+  walls: z.enum(GUIDED_WALLS, {
+    error: 'Choose what the walls are made of: glass, wood, PVC or melamine board, or mesh.',
+  }),
   roomTempC: z
     .number({ error: 'Enter the room temperature.' })
     .finite('Enter the room temperature.')

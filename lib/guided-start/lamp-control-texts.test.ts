@@ -139,6 +139,7 @@ describe.each(LAMP_TECH_IDS.map((t) => [t] as const))('control advice for %s', (
       design: hotDesign(tech),
       assessment: assess(hotDesign(tech), sheet),
       unmet: [],
+      harmful: [],
     };
     const text = explain(p, sheet, { width: 90, height: 45, depth: 45, roomTempC: 24 }, 'mesh');
     const control = text.find((l) => l.heading === 'Lamp control')!.text;

@@ -1,5 +1,12 @@
 import type { Design, DesignObject } from '@/simulation';
-import { ASSESSMENT_THRESHOLDS, DESIGN_FORMAT, DESIGN_VERSION, GOOD_REFLECTOR_GAIN } from '@/simulation';
+import {
+  ASSESSMENT_THRESHOLDS,
+  DEFAULT_WALLS,
+  DESIGN_FORMAT,
+  DESIGN_VERSION,
+  GOOD_REFLECTOR_GAIN,
+  type WallMaterial,
+} from '@/simulation';
 import type { LampTypeDto } from '@/lib/lamp-types/schema';
 import { lampObjectFromType } from '@/lib/lamp-types/to-engine';
 
@@ -16,16 +23,31 @@ export type Lid = 'mesh' | 'glass' | 'open';
  */
 export type Mount = 'above' | 'inside' | 'raised';
 
-export type EnclosureInput = { width: number; height: number; depth: number; roomTempC: number };
+export type EnclosureInput = {
+  width: number;
+  height: number;
+  depth: number;
+  roomTempC: number;
+  /** What the walls are made of (the engine's wall table); glass when not given. */
+  walls?: WallMaterial;
+};
 
 export type Candidate = {
   uv: LampTypeDto;
   /** A reflector on the UV lamp (tubes only): gain GOOD_REFLECTOR_GAIN from the engine's presets. */
   reflector: boolean;
   heat: LampTypeDto | null;
+  /** How many UV lamps side by side over the perch (default 1): a long animal needs a long basking spot. */
+  uvCount?: number;
+  /** How many heat lamps side by side (default 1 when there is a heat lamp). */
+  heatCount?: number;
   mount: Mount;
   /** 'raised' only: how far above the lid the lamps stand, cm. */
   raiseCm?: number;
+  /** 'raised' only: how far above the lid the heat lamps stand, when not at the UV lamps' height. */
+  heatRaiseCm?: number;
+  /** Bulbs side by side: centre-to-centre distance, cm (default: the needed length shared among them). */
+  spreadCm?: number;
   /** Height of the perch's top surface above the floor, cm. */
   perchTopCm: number;
 };
@@ -36,8 +58,10 @@ const ABOVE_LID_CM = { tube: 2, bulb: 3 };
 const ABOVE_OPEN_CM = 10;
 /** Hung under the lid: the lamp centre this far below it (a fitting and a guard). */
 const BELOW_LID_CM = { tube: 3, bulb: 6 };
-/** Two bulbs side by side over the perch, this far apart (centre to centre). */
-const BULB_SPACING_CM = 10;
+/** Bulbs side by side over the perch at least this far apart (centre to centre). */
+export const BULB_SPACING_CM = 10;
+/** Tubes end to end: the gap between their fittings. */
+const TUBE_GAP_CM = 2;
 
 export const UV_LAMP_ID = 'uv-lamp';
 export const HEAT_LAMP_ID = 'heat-lamp';
@@ -52,6 +76,11 @@ const round1 = (v: number) => Math.round(v * 10) / 10;
  * eye (20 cm) distances of the engine's safety checks from the mesh (common practice, no published source).
  */
 export const RAISED_ABOVE_LID_CM = [ASSESSMENT_THRESHOLDS.UV_EYE_CM + 2, 30, 40, 55] as const;
+/**
+ * Heat lamps over a climber's mesh lid may stand higher still: for animals that want only gentle warmth
+ * (a tree frog), a common heat lamp must be far from the mesh it hangs from.
+ */
+export const HEAT_RAISED_ABOVE_LID_CM = [...RAISED_ABOVE_LID_CM, 70] as const;
 
 export function lampY(
   enc: EnclosureInput,
@@ -86,21 +115,69 @@ export function hideBox(enc: EnclosureInput): { x: number; y: number; width: num
   };
 }
 
-/** Where the UV lamp's centre goes (a tube is kept inside the enclosure); null when it does not fit. */
-export function uvLampX(enc: EnclosureInput, uv: LampTypeDto, heat: boolean, neededCm = 0): number | null {
-  const zone = baskingZone(enc, neededCm);
-  if (uv.form === 'tube') {
-    const half = (uv.lengthCm ?? 0) / 2;
-    if (2 * half > enc.width - 2) return null;
-    return round1(clamp(zone.x, half + 1, enc.width - half - 1));
-  }
-  return round1(heat ? zone.x - BULB_SPACING_CM / 2 : zone.x);
+/** Lamps of a candidate: how many of each kind (the counts default to one). */
+export function lampCounts(c: Pick<Candidate, 'heat' | 'uvCount' | 'heatCount'>): {
+  uv: number;
+  heat: number;
+} {
+  return { uv: c.uvCount ?? 1, heat: c.heat ? (c.heatCount ?? 1) : 0 };
 }
 
-export function heatLampX(enc: EnclosureInput, uv: LampTypeDto, neededCm = 0): number {
+/**
+ * Where the lamps' centres go over the basking zone; null when they do not fit. Tubes lie end to end
+ * (kept inside the enclosure) with the heat bulbs spread along them; bulbs hang in one row, UV and heat
+ * alternating, spread over the length the animal needs so their pools join into one basking spot.
+ */
+export function lampPositions(
+  enc: EnclosureInput,
+  c: Pick<Candidate, 'uv' | 'heat' | 'uvCount' | 'heatCount' | 'spreadCm'>,
+  neededCm = 0,
+): { uv: number[]; heat: number[] } | null {
   const zone = baskingZone(enc, neededCm);
-  return round1(uv.form === 'tube' ? zone.x : zone.x + BULB_SPACING_CM / 2);
+  const n = lampCounts(c);
+  const row = (count: number, spacing: number): number[] | null => {
+    if (count === 0) return [];
+    const span = spacing * (count - 1);
+    if (span > enc.width - 6) return null;
+    const centre = clamp(zone.x, span / 2 + 3, enc.width - span / 2 - 3);
+    return Array.from({ length: count }, (_, i) => round1(centre - span / 2 + i * spacing));
+  };
+  const spacingFor = (count: number) =>
+    c.spreadCm ?? Math.max(BULB_SPACING_CM, neededCm / Math.max(1, count));
+  if (c.uv.form === 'tube') {
+    const length = c.uv.lengthCm ?? 0;
+    const total = n.uv * length + (n.uv - 1) * TUBE_GAP_CM;
+    if (total > enc.width - 2) return null;
+    const left = clamp(zone.x, total / 2 + 1, enc.width - total / 2 - 1) - total / 2;
+    const uv = Array.from({ length: n.uv }, (_, i) => round1(left + length / 2 + i * (length + TUBE_GAP_CM)));
+    const heat = row(n.heat, spacingFor(n.heat));
+    return heat ? { uv, heat } : null;
+  }
+  // One row of bulbs: alternate the kinds, starting with the more numerous, so UV and heat overlap.
+  const kinds: ('uv' | 'heat')[] = [];
+  let u = n.uv;
+  let h = n.heat;
+  let next: 'uv' | 'heat' = u >= h ? 'uv' : 'heat';
+  while (u + h > 0) {
+    if ((next === 'uv' && u > 0) || h === 0) {
+      kinds.push('uv');
+      u -= 1;
+    } else {
+      kinds.push('heat');
+      h -= 1;
+    }
+    next = next === 'uv' ? 'heat' : 'uv';
+  }
+  const xs = row(kinds.length, spacingFor(kinds.length));
+  if (!xs) return null;
+  return {
+    uv: xs.filter((_, i) => kinds[i] === 'uv'),
+    heat: xs.filter((_, i) => kinds[i] === 'heat'),
+  };
 }
+
+/** The design ids of the k-th UV or heat lamp (the first keeps the plain id). */
+export const lampId = (base: string, k: number) => (k === 0 ? base : `${base}-${k + 1}`);
 
 /** The lid as a barrier across the top (none for an open top). */
 function lidObject(enc: EnclosureInput, lid: Lid): DesignObject[] {
@@ -122,30 +199,39 @@ export function lampsOnly(
   c: Omit<Candidate, 'perchTopCm'>,
   neededCm = 0,
 ): Design | null {
-  const x = uvLampX(enc, c.uv, c.heat !== null, neededCm);
-  if (x === null) return null;
-  const objects: DesignObject[] = [
+  const at = lampPositions(enc, c, neededCm);
+  if (at === null) return null;
+  const objects: DesignObject[] = at.uv.map((x, k) =>
     lampObjectFromType(c.uv, {
-      id: UV_LAMP_ID,
+      id: lampId(UV_LAMP_ID, k),
       x,
       y: lampY(enc, lid, c.mount, c.uv.form, c.raiseCm),
       reflectorGain: c.reflector ? GOOD_REFLECTOR_GAIN : undefined,
     }),
-  ];
+  );
   if (c.heat) {
+    const heat = c.heat;
     objects.push(
-      lampObjectFromType(c.heat, {
-        id: HEAT_LAMP_ID,
-        x: heatLampX(enc, c.uv, neededCm),
-        y: lampY(enc, lid, c.mount, 'bulb', c.raiseCm),
-      }),
+      ...at.heat.map((x, k) =>
+        lampObjectFromType(heat, {
+          id: lampId(HEAT_LAMP_ID, k),
+          x,
+          y: lampY(enc, lid, c.mount, 'bulb', c.heatRaiseCm ?? c.raiseCm),
+        }),
+      ),
     );
   }
   objects.push(...lidObject(enc, lid));
   return {
     format: DESIGN_FORMAT,
     version: DESIGN_VERSION,
-    enclosure: { width: enc.width, height: enc.height, depth: enc.depth, roomTempC: enc.roomTempC },
+    enclosure: {
+      width: enc.width,
+      height: enc.height,
+      depth: enc.depth,
+      roomTempC: enc.roomTempC,
+      ...(enc.walls && enc.walls !== DEFAULT_WALLS ? { walls: enc.walls } : {}),
+    },
     objects,
   };
 }

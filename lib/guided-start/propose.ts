@@ -13,10 +13,12 @@ import type { LampTypeDto } from '@/lib/lamp-types/schema';
 import {
   baskingZone,
   buildDesign,
+  lampPositions,
   lampsOnly,
   lampY,
+  BULB_SPACING_CM,
+  HEAT_RAISED_ABOVE_LID_CM,
   RAISED_ABOVE_LID_CM,
-  uvLampX,
   type Candidate,
   type EnclosureInput,
   type Lid,
@@ -34,6 +36,8 @@ export type ProposalInput = {
   species: EngineSpeciesSheet;
   enclosure: EnclosureInput;
   lid: Lid;
+  /** At most this many UV lamps (default 2): a set-up with lamps already bought may have only one. */
+  maxUvLamps?: number;
 };
 
 export type Proposal = {
@@ -42,7 +46,22 @@ export type Proposal = {
   assessment: Assessment;
   /** Findings that are not a pass, most important first. */
   unmet: Assessment['findings'];
+  /**
+   * Unmet findings that could hurt the animal: a lamp within its reach, a UV lamp close to its eyes, a
+   * surface hotter than its basking range, UV above its zone. A proposal with any of these is not a
+   * design to build; the guided start says so instead of offering it.
+   */
+  harmful: Assessment['findings'];
 };
+
+/** Is this unmet finding one that could hurt the animal (rather than a shortfall to improve)? */
+export function isHarmful(f: Assessment['findings'][number]): boolean {
+  if (f.status === 'pass') return false;
+  if (f.id === 'lamp-in-reach' || f.id === 'eye-safety' || f.id === 'hot-surface') return true;
+  if (f.id === 'hot-spot') return (f.numbers.hotC ?? 0) > (f.numbers.targetHi ?? Infinity);
+  if (f.id === 'basking-uvi') return (f.numbers.maxUvi ?? 0) > (f.numbers.zoneMaxHi ?? Infinity);
+  return false;
+}
 
 /** Perch heights are tried every this many cm. */
 export const PERCH_STEP_CM = 2.5;
@@ -90,8 +109,14 @@ export function quickScore(species: EngineSpeciesSheet, uvi: number, uvb: number
   return s;
 }
 
+/** A finding that could hurt the animal outweighs any shortfall: the search never trades safety away. */
+const HARM_COST = 100;
+
 export function assessmentCost(a: Assessment): number {
-  return a.findings.reduce((sum, f) => sum + (WEIGHT[f.id] ?? 1) * STATUS_COST[f.status], 0);
+  return a.findings.reduce(
+    (sum, f) => sum + (WEIGHT[f.id] ?? 1) * STATUS_COST[f.status] + (isHarmful(f) ? HARM_COST : 0),
+    0,
+  );
 }
 
 function mountsFor(lid: Lid, climbs: boolean): { mount: Mount; raiseCm?: number }[] {
@@ -107,66 +132,181 @@ function mountsFor(lid: Lid, climbs: boolean): { mount: Mount; raiseCm?: number 
 function highestPerchTop(enc: EnclosureInput, lid: Lid, c: Omit<Candidate, 'perchTopCm'>): number {
   const { LAMP_REACH_CM, UV_EYE_CM } = ASSESSMENT_THRESHOLDS;
   const ys = [lampY(enc, lid, c.mount, c.uv.form, c.raiseCm) - UV_EYE_CM];
-  if (c.heat) ys.push(lampY(enc, lid, c.mount, 'bulb', c.raiseCm) - LAMP_REACH_CM);
+  if (c.heat) ys.push(lampY(enc, lid, c.mount, 'bulb', c.heatRaiseCm ?? c.raiseCm) - LAMP_REACH_CM);
   // Over a lid the animal can still climb to the mesh: keep the basking spot well below it.
   return Math.min(enc.height - LAMP_REACH_CM, ...ys);
 }
 
 type Scored = { candidate: Candidate; quick: number };
 
-function coarseSearch(input: ProposalInput, lampTypes: LampTypeDto[]): Scored[] {
-  const { enclosure: enc, lid, species } = input;
-  const uvTypes = lampTypes.filter((t) => UV_TECHS.has(t.tech) && t.uvbAt30 > 0);
-  const heatTypes: (LampTypeDto | null)[] = [null, ...lampTypes.filter((t) => HEAT_ONLY.has(t.tech))];
-  const needed = neededBaskingCm(species);
-  const zone = baskingZone(enc, needed);
-  // The shared basking spot must hold across its whole length: score its middle and both ends.
-  const half = Math.max(0, Math.min(needed, zone.width) / 2 - 1);
-  const xs = [zone.x - half, zone.x, zone.x + half];
-  const climbsMesh = species.climbs === true && lid === 'mesh';
-  const [, uhi] = baskingUviRange(targetZone(species));
-  const out: Scored[] = [];
+/** At most this many perch heights are probed per lamp set; tall enclosures are probed in coarser steps. */
+const MAX_HEIGHTS = 24;
+
+function perchHeights(top: number): number[] {
+  const step =
+    PERCH_STEP_CM * Math.max(1, Math.ceil((top - LOWEST_PERCH_TOP_CM) / (MAX_HEIGHTS * PERCH_STEP_CM)));
+  const out: number[] = [];
+  for (let h = LOWEST_PERCH_TOP_CM; h <= top + 1e-9; h += step) out.push(h);
+  return out;
+}
+
+/** At most this many UV lamps, and this many heat lamps, side by side over the perch. */
+const MAX_UV_LAMPS = 2;
+const MAX_HEAT_LAMPS = 3;
+
+/**
+ * The lamp sets tried over the perch: each UV lamp alone or doubled, with none or up to three heat
+ * lamps. A second lamp of a kind is only tried where the animal needs a basking spot long enough for it
+ * (a lamp's pool covers roughly this much on its own — engine's choice, to keep the search small).
+ */
+const ONE_LAMP_COVERS_CM = 15;
+
+/**
+ * How far apart bulbs side by side are tried: the needed length shared among them, or wider, so pools
+ * that would overlap into one too-hot spot join into a longer, gentler one.
+ */
+function spreads(
+  uv: LampTypeDto,
+  uvCount: number,
+  heatCount: number,
+  neededCm: number,
+): (number | undefined)[] {
+  const bulbs = heatCount + (uv.form === 'bulb' ? uvCount : 0);
+  if (bulbs < 2) return [undefined];
+  const base = Math.max(BULB_SPACING_CM, neededCm / bulbs);
+  return [undefined, base + 10, base + 20];
+}
+
+type LampSet = Omit<Candidate, 'perchTopCm'>;
+
+/**
+ * First stage: which lamps and where — each UV lamp (with and without a reflector) at each mount, alone
+ * or with one heat lamp of each type (over a climber's mesh lid, the heat lamp at each height of its own).
+ */
+function singleSets(lid: Lid, climbs: boolean, uvTypes: LampTypeDto[], heatTypes: LampTypeDto[]): LampSet[] {
+  const out: LampSet[] = [];
   for (const uv of uvTypes) {
     for (const reflector of uv.form === 'tube' ? [false, true] : [false]) {
-      for (const { mount, raiseCm } of mountsFor(lid, species.climbs === true)) {
+      for (const { mount, raiseCm } of mountsFor(lid, climbs)) {
+        out.push({ uv, reflector, heat: null, uvCount: 1, heatCount: 0, mount, raiseCm });
         for (const heat of heatTypes) {
-          const base = { uv, reflector, heat, mount, raiseCm };
-          const design = lampsOnly(enc, lid, base, needed);
-          if (!design || uvLampX(enc, uv, heat !== null, needed) === null) continue;
-          const top = highestPerchTop(enc, lid, base);
-          const heights: number[] = [];
-          for (let h = LOWEST_PERCH_TOP_CM; h <= top + 1e-9; h += PERCH_STEP_CM) heights.push(h);
-          if (heights.length === 0) continue;
-          const points = heights.flatMap((h) => xs.map((x) => ({ x, y: h + 0.01 })));
-          // A climber reaches the underside of the mesh lid: it must not be over the top there.
-          if (climbsMesh) points.push({ x: zone.x, y: enc.height - 0.01 });
-          const values = probe(design, points, { cellCm: 2 });
-          const lidPenalty = climbsMesh
-            ? (() => {
-                const v = values[values.length - 1]!;
-                return (
-                  3 * Math.log(Math.max(1, v.uvi / uhi)) +
-                  Math.max(0, v.tempC - species.baskingSurfaceC[1]) / 3
-                );
-              })()
-            : 0;
-          heights.forEach((perchTopCm, k) => {
-            const spread = xs.map((_, i) => {
-              const p = values[k * xs.length + i]!;
-              return quickScore(species, p.uvi, p.uvb, p.tempC);
-            });
-            // Fewer lamps and fewer watts are kinder to the animal, the air and the bill.
-            const extra = (heat ? LAMP_COST : 0) + (WATT_COST * (uv.watts + (heat?.watts ?? 0))) / 100;
-            out.push({
-              candidate: { ...base, perchTopCm },
-              quick: Math.max(...spread) + lidPenalty + extra,
-            });
-          });
+          // Over a climber's mesh lid the heat lamps may stand higher or lower than the UV lamps.
+          const heatRaises = mount === 'raised' ? HEAT_RAISED_ABOVE_LID_CM : [raiseCm];
+          for (const heatRaiseCm of heatRaises) {
+            out.push({ uv, reflector, heat, uvCount: 1, heatCount: 1, mount, raiseCm, heatRaiseCm });
+          }
         }
       }
     }
   }
+  return out;
+}
+
+/**
+ * Second stage, for the most promising lamp sets of the first: how many of each side by side and how
+ * far apart, so a long animal gets a long enough basking spot.
+ */
+function multipliedSets(set: LampSet, neededCm: number, maxUvLamps: number): LampSet[] {
+  const maxUv = Math.min(MAX_UV_LAMPS, maxUvLamps);
+  const maxHeat = set.heat ? Math.min(MAX_HEAT_LAMPS, 1 + Math.floor(neededCm / ONE_LAMP_COVERS_CM)) : 0;
+  const out: LampSet[] = [];
+  for (let uvCount = 1; uvCount <= maxUv; uvCount++) {
+    for (let heatCount = set.heat ? 1 : 0; heatCount <= maxHeat; heatCount++) {
+      for (const spreadCm of spreads(set.uv, uvCount, heatCount, neededCm)) {
+        if (uvCount === 1 && heatCount === (set.heat ? 1 : 0) && spreadCm === undefined) continue;
+        out.push({ ...set, uvCount, heatCount, spreadCm });
+      }
+    }
+  }
+  return out;
+}
+
+/** How many of the first stage's lamp sets are multiplied out in the second. */
+const MULTIPLIED_SETS = 16;
+
+function coarseSearch(input: ProposalInput, lampTypes: LampTypeDto[]): Scored[] {
+  const { enclosure: enc, lid, species } = input;
+  const uvTypes = lampTypes.filter((t) => UV_TECHS.has(t.tech) && t.uvbAt30 > 0);
+  const heatTypes = lampTypes.filter((t) => HEAT_ONLY.has(t.tech));
+  const needed = neededBaskingCm(species);
+  const zone = baskingZone(enc, needed);
+  // The shared basking spot must hold across its whole length: score its middle and both ends.
+  const half = Math.max(0, Math.min(needed, zone.width) / 2 - 1);
+  const xs = [zone.x - half, zone.x - half / 2, zone.x, zone.x + half / 2, zone.x + half];
+  const climbsMesh = species.climbs === true && lid === 'mesh';
+  const [, uhi] = baskingUviRange(targetZone(species));
+  const score = (base: LampSet, out: Scored[]): number => {
+    let best = Infinity;
+    const design = lampsOnly(enc, lid, base, needed);
+    const at = lampPositions(enc, base, needed);
+    if (!design || !at) return best;
+    const top = highestPerchTop(enc, lid, base);
+    const heights = perchHeights(top);
+    if (heights.length === 0) return best;
+    const points = heights.flatMap((h) => xs.map((x) => ({ x, y: h + 0.01 })));
+    // A climber reaches the underside of the mesh lid: it must not be over the top under any lamp.
+    const lidXs = climbsMesh ? [...at.uv, ...at.heat] : [];
+    points.push(...lidXs.map((x) => ({ x, y: enc.height - 0.01 })));
+    const values = probe(design, points, { cellCm: 2 });
+    let lidPenalty = 0;
+    for (let i = 0; i < lidXs.length; i++) {
+      const v = values[values.length - lidXs.length + i]!;
+      lidPenalty = Math.max(
+        lidPenalty,
+        3 * Math.log(Math.max(1, v.uvi / uhi)) + Math.max(0, v.tempC - species.baskingSurfaceC[1]) / 3,
+      );
+    }
+    const n = { uv: base.uvCount ?? 1, heat: base.heat ? (base.heatCount ?? 1) : 0 };
+    // Fewer lamps and fewer watts are kinder to the animal, the air and the bill.
+    const extra =
+      LAMP_COST * (n.uv - 1 + n.heat) +
+      (WATT_COST * (n.uv * base.uv.watts + n.heat * (base.heat?.watts ?? 0))) / 100;
+    heights.forEach((perchTopCm, k) => {
+      const spread = xs.map((_, i) => {
+        const p = values[k * xs.length + i]!;
+        return quickScore(species, p.uvi, p.uvb, p.tempC);
+      });
+      const quick = Math.max(...spread) + lidPenalty + extra;
+      best = Math.min(best, quick);
+      out.push({ candidate: { ...base, perchTopCm }, quick });
+    });
+    return best;
+  };
+  const out: Scored[] = [];
+  const first = singleSets(lid, species.climbs === true, uvTypes, heatTypes)
+    .map((set) => ({ set, best: score(set, out) }))
+    .filter((r) => Number.isFinite(r.best))
+    .sort((a, b) => a.best - b.best);
+  for (const { set } of first.slice(0, MULTIPLIED_SETS)) {
+    for (const more of multipliedSets(set, needed, input.maxUvLamps ?? MAX_UV_LAMPS)) score(more, out);
+  }
   return out.sort((a, b) => a.quick - b.quick);
+}
+
+/** The best cheaply scored candidates, at most a few of each lamp set, so the full checks see variety. */
+function diverse(ranked: Scored[]): Scored[] {
+  const PER_SET = 4;
+  const seen = new Map<string, number>();
+  const out: Scored[] = [];
+  for (const r of ranked) {
+    const c = r.candidate;
+    const key = [
+      c.uv.id,
+      c.reflector,
+      c.uvCount,
+      c.heat?.id,
+      c.heatCount,
+      c.mount,
+      c.raiseCm,
+      c.heatRaiseCm,
+    ].join();
+    const n = seen.get(key) ?? 0;
+    if (n >= PER_SET) continue;
+    seen.set(key, n + 1);
+    out.push(r);
+    if (out.length >= FULL_CHECKS) break;
+  }
+  return out;
 }
 
 /**
@@ -176,13 +316,13 @@ function coarseSearch(input: ProposalInput, lampTypes: LampTypeDto[]): Scored[] 
 export function propose(input: ProposalInput, lampTypes: LampTypeDto[]): Proposal | null {
   const ranked = coarseSearch(input, lampTypes);
   let best: (Proposal & { cost: number; quick: number }) | null = null;
-  for (const { candidate, quick } of ranked.slice(0, FULL_CHECKS)) {
+  for (const { candidate, quick } of diverse(ranked)) {
     const design = buildDesign(input.enclosure, input.lid, candidate, neededBaskingCm(input.species));
     if (!design) continue;
     const assessment = assess(design, input.species, { cellCm: 2 });
     const cost = assessmentCost(assessment);
     if (!best || cost < best.cost || (cost === best.cost && quick < best.quick)) {
-      best = { candidate, design, assessment, unmet: [], cost, quick };
+      best = { candidate, design, assessment, unmet: [], harmful: [], cost, quick };
     }
     if (cost === 0) break;
   }
@@ -192,5 +332,11 @@ export function propose(input: ProposalInput, lampTypes: LampTypeDto[]): Proposa
     .sort(
       (a, b) => (WEIGHT[b.id] ?? 1) * STATUS_COST[b.status] - (WEIGHT[a.id] ?? 1) * STATUS_COST[a.status],
     );
-  return { candidate: best.candidate, design: best.design, assessment: best.assessment, unmet };
+  return {
+    candidate: best.candidate,
+    design: best.design,
+    assessment: best.assessment,
+    unmet,
+    harmful: unmet.filter(isHarmful),
+  };
 }

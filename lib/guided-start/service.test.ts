@@ -44,6 +44,7 @@ const input = (over: Record<string, unknown> = {}) => ({
   heightCm: 60,
   depthCm: 60,
   lid: 'mesh' as const,
+  walls: 'glass' as const,
   roomTempC: 22,
   name: 'Desert vivarium',
   animalName: null,
@@ -98,5 +99,25 @@ describe('guided start on the server', () => {
     const { LampType } = await import('@/models');
     await LampType.destroy({ where: { organisationId: shop.id } });
     await expect(proposeFor(await who(staffUser), input())).rejects.toMatchObject({ status: 400 });
+  });
+
+  it('refuses to build a design that could hurt the animal, and says why', async () => {
+    // A White's tree frog (basking surface 28–31 °C on its sheet, from memory) in a room at 35 °C: every
+    // surface is too hot whatever the lamps do.
+    const frog = (await SpeciesSheet.findOne({
+      where: { organisationId: shop.id, seedKey: 'litoria-caerulea' },
+    }))!;
+    const hot = input({ speciesId: frog.id, widthCm: 45, heightCm: 60, depthCm: 45, roomTempC: 35 });
+    const view = await proposeFor(await who(staffUser), hot);
+    expect(view.blocked).toMatch(/will not propose a design that could hurt the animal/);
+    const before = await Enclosure.count();
+    await expect(createFromGuidedStart(await who(staffUser), hot)).rejects.toMatchObject({ status: 400 });
+    expect(await Enclosure.count()).toBe(before);
+  });
+
+  it('builds the design with the walls it was told', async () => {
+    const view = await proposeFor(await who(staffUser), input({ walls: 'wood' }));
+    expect(view.design.enclosure.walls).toBe('wood');
+    expect(view.blocked).toBeNull();
   });
 });

@@ -14,6 +14,8 @@ import { createDesign } from '@/lib/variants/designs';
 import { Enclosure } from '@/models';
 import { explain, type Explanation } from './explain';
 import type { GuidedStartInput } from './input';
+import { blockedMessage } from './blocked';
+import { lampCounts } from './layout';
 
 /**
  * The guided start on the server: checks who asks and for what, runs the search on the organisation's
@@ -25,7 +27,20 @@ export type ProposalView = {
   design: Design;
   assessment: Assessment;
   explanation: Explanation;
-  summary: { uvLamp: string; reflector: boolean; heatLamp: string | null; mount: string; perchTopCm: number };
+  summary: {
+    uvLamp: string;
+    uvCount: number;
+    reflector: boolean;
+    heatLamp: string | null;
+    heatCount: number;
+    mount: string;
+    perchTopCm: number;
+  };
+  /**
+   * Null when the design may be built; otherwise why not, in plain words: no design from the catalogue
+   * keeps the animal safe in this enclosure, and the guided start will not offer one that could hurt it.
+   */
+  blocked: string | null;
 };
 
 async function authorised(user: CurrentUser, input: GuidedStartInput) {
@@ -50,6 +65,7 @@ export async function proposeFor(user: CurrentUser, input: GuidedStartInput): Pr
     height: input.heightCm,
     depth: input.depthCm,
     roomTempC: input.roomTempC,
+    walls: input.walls,
   };
   // Dozens of engine runs: on an engine thread, not the server's event loop.
   const p = await runEngineTask('propose', { input: { species, enclosure, lid: input.lid }, lampTypes });
@@ -59,6 +75,7 @@ export async function proposeFor(user: CurrentUser, input: GuidedStartInput): Pr
       'No UV lamp in your catalogue fits this enclosure. Add a suitable lamp type to the lamp catalogue, or check the size.',
     );
   }
+  const counts = lampCounts(p.candidate);
   return {
     sheet,
     design: p.design,
@@ -66,11 +83,14 @@ export async function proposeFor(user: CurrentUser, input: GuidedStartInput): Pr
     explanation: explain(p, species, enclosure, input.lid),
     summary: {
       uvLamp: p.candidate.uv.name,
+      uvCount: counts.uv,
       reflector: p.candidate.reflector,
       heatLamp: p.candidate.heat?.name ?? null,
+      heatCount: counts.heat,
       mount: p.candidate.mount,
       perchTopCm: p.candidate.perchTopCm,
     },
+    blocked: p.harmful.length ? blockedMessage(sheet.commonName, p.harmful) : null,
   };
 }
 
@@ -82,6 +102,7 @@ export async function createFromGuidedStart(
   const { keeperId } = await authorised(user, input);
   await assertKeeperInOrganisation(input.organisationId, keeperId);
   const view = await proposeFor(user, input);
+  if (view.blocked) throw badRequest(undefined, view.blocked);
   const enclosure = await Enclosure.create({
     organisationId: input.organisationId,
     keeperId,

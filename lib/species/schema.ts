@@ -27,6 +27,8 @@ export const SHEET_FIELDS = [
   'coolAirC',
   'nightMinC',
   'photoperiodH',
+  'adultLengthCm',
+  'climbs',
 ] as const;
 export type SheetField = (typeof SHEET_FIELDS)[number];
 
@@ -38,6 +40,8 @@ export const FIELD_LABELS: Record<SheetField, string> = {
   coolAirC: 'Cool side air',
   nightMinC: 'Night minimum',
   photoperiodH: 'Photoperiod',
+  adultLengthCm: 'Adult length',
+  climbs: 'Climbs glass and mesh',
 };
 
 export const sourceSchema = z.strictObject({
