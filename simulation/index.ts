@@ -11,7 +11,11 @@ export {
   uviFromErythemal,
   uviPerUvbFromSpectrum,
   UVI_PER_ERYTHEMAL_W_M2,
+  SUNLIGHT_UVI_PER_UVB,
+  SHORT_WAVE_RATIO_FACTOR,
+  isShortWaveRatio,
 } from './sources/uv';
+export { METER_CAVEAT, RULE_OF_THUMB_LABEL, shortWaveCaution } from './assess/uvTargets';
 export { tubeBelowCentre, tubePiece, tubePieceOffset } from './sources/tube';
 export { pointIrradiance } from './sources/point';
 export {

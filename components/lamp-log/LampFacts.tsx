@@ -120,6 +120,20 @@ export function LampFacts({ lamp: l }: { lamp: LampSummary }) {
             . Need: {l.basking.needLabel}.
           </p>
         )}
+        {l.basking?.judgedBy && (
+          <p data-testid="judged-by">
+            <strong className="font-semibold text-basalt-800">Judged by:</strong> {l.basking.judgedBy}.
+          </p>
+        )}
+        {l.basking?.ruleOfThumb && <p>{l.basking.ruleOfThumb}</p>}
+        {l.basking?.cautions?.map((c) => (
+          <p key={c}>{c}</p>
+        ))}
+        {l.photoperiod && (
+          <p data-testid="photoperiod">
+            <strong className="font-semibold text-basalt-800">Hours a day:</strong> {l.photoperiod}
+          </p>
+        )}
         <p>
           Estimates: verify with a meter at the basking spot. Switch lamps off and let them cool before
           handling.

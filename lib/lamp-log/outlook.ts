@@ -6,7 +6,8 @@ import { LAMP_LIFETIME, ORDINARY_HOURS_PER_DAY, type LampTech } from '@/simulati
 import { defaultDecayFor, type DecaySource } from './decay';
 import { band, firstDayBelow, fitDecay, predict, type DecayFit } from './fit';
 import { distanceFactor, REFERENCE_CM, toBareReference, toReference, type LampShape } from './geometry';
-import { baskingNeed, type SpeciesNeed } from './need';
+import { baskingNeed, pairedRatio, type SpeciesNeed } from './need';
+import { photoperiodAdvice } from './photoperiod';
 import type { Status } from './status';
 
 /**
@@ -92,7 +93,14 @@ export type Outlook = {
     valueNow: number;
     threshold: number;
     needLabel: string;
+    /** What the verdict is judged by (always the zone's UV Index). */
+    judgedBy: string;
+    /** The sheet's µW/cm² range as a shop's rule of thumb, for reference only. */
+    ruleOfThumb: string | null;
+    cautions: string[];
   } | null;
+  /** The lamp's hours a day against the sheet's day length; null when either is unknown or it fits. */
+  photoperiod: string | null;
   /** What is missing to say when the basking zone falls below the need. */
   missing: string[];
   fallsBelowOn: string | null;
@@ -257,6 +265,7 @@ export function lampOutlook(
       missing,
       fallsBelowOn: null,
       fallsBelowEarliestOn: null,
+      photoperiod: null,
       testDueOn: null,
       replaceDueOn: null,
       replaceBasis: null,
@@ -271,6 +280,7 @@ export function lampOutlook(
       missing,
       fallsBelowOn: null,
       fallsBelowEarliestOn: null,
+      photoperiod: null,
       testDueOn: null,
       replaceDueOn: null,
       replaceBasis: null,
@@ -293,7 +303,8 @@ export function lampOutlook(
   let fallsBelowEarliestOn: string | null = null;
   const distance = lamp.baskingDistanceCm ?? lastReading?.distanceCm ?? null;
   const distanceFrom = lamp.baskingDistanceCm ? 'lamp' : 'latest reading';
-  const need = unit ? baskingNeed(species, unit, lamp.type.uviPerUvb) : null;
+  const ratio = pairedRatio(readings) ?? { value: lamp.type.uviPerUvb, from: 'lamp type' as const };
+  const need = unit ? baskingNeed(species, unit, ratio) : null;
   if (!unit) missing.push('a meter reading');
   if (need && !need.ok) missing.push(need.missing);
   if (!distance) missing.push('the distance from the lamp to the basking spot');
@@ -307,6 +318,9 @@ export function lampOutlook(
       valueNow: nowAt30 * k,
       threshold: need.threshold,
       needLabel: need.label,
+      judgedBy: need.judgedBy,
+      ruleOfThumb: need.ruleOfThumb,
+      cautions: need.cautions,
     };
     const threshold30 = need.threshold / k;
     const cross = firstDayBelow(curve, threshold30, 0, HORIZON_DAYS);
@@ -366,6 +380,7 @@ export function lampOutlook(
     missing,
     fallsBelowOn,
     fallsBelowEarliestOn,
+    photoperiod: photoperiodAdvice(lamp, species),
     testDueOn,
     replaceDueOn,
     replaceBasis,

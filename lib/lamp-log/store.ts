@@ -114,6 +114,10 @@ export async function speciesForEnclosures(enclosures: Enclosure[]): Promise<Map
                 sheet.uvbTargetMinUw !== null && sheet.uvbTargetMaxUw !== null
                   ? { min: sheet.uvbTargetMinUw, max: sheet.uvbTargetMaxUw }
                   : null,
+              photoperiodH:
+                sheet.photoperiodMinH !== null && sheet.photoperiodMaxH !== null
+                  ? { min: sheet.photoperiodMinH, max: sheet.photoperiodMaxH }
+                  : null,
             },
           }
         : {
@@ -170,6 +174,7 @@ export function outlookJson(species: SpeciesMatch, o: Outlook) {
     missing,
     fallsBelowOn: o.fallsBelowOn,
     fallsBelowEarliestOn: o.fallsBelowEarliestOn,
+    photoperiod: o.photoperiod,
     testDueOn: o.testDueOn,
     replaceDueOn: o.replaceDueOn,
     replaceBasis: o.replaceBasis,

@@ -12,6 +12,7 @@ import type { Finding } from './types';
 import { runsOf, type SurfaceSample } from './surfaces';
 import { ESTIMATE_TEMP, GENERAL_HOT_SURFACE_C, LAMP_REACH_CM, UV_EYE_CM } from './thresholds';
 import { f0, f1 } from './format';
+import { shortWaveCaution } from './uvTargets';
 
 type Pt = { x: number; y: number };
 
@@ -125,7 +126,35 @@ export function safetyFindings(
     },
     where: eye.length ? { kind: 'object', objectIds: eye.map((n) => n.id) } : undefined,
   });
+  out.push(...shortWaveFindings(design));
   return out;
+}
+
+/** A caution when a UV lamp's UV Index per µW/cm² is far from sunlight's (no finding when none is). */
+function shortWaveFindings(design: Design): Finding[] {
+  const texts: string[] = [];
+  const ids: string[] = [];
+  let ratio = 0;
+  for (const o of design.objects) {
+    if (o.type !== 'lamp') continue;
+    const l = resolveLamp(o);
+    const text = l.uvbAt30 > 0 ? shortWaveCaution(l.uviPerUvb, o.name ?? o.id) : null;
+    if (!text) continue;
+    texts.push(text);
+    ids.push(o.id);
+    ratio = Math.max(ratio, l.uviPerUvb);
+  }
+  if (ids.length === 0) return [];
+  return [
+    {
+      id: 'short-wave-uvb',
+      status: 'attention',
+      title: 'Short-wave UVB',
+      message: texts.join(' '),
+      numbers: { uviPerUvb: ratio },
+      where: { kind: 'object', objectIds: ids },
+    },
+  ];
 }
 
 /**

@@ -18,6 +18,7 @@ import { UV_REFUGE_UVI, UV_ZONES } from './zones';
 import { baskingUviRange, isShadeZone, LOW_MELANIN_CAUTION, targetZone } from './basking-range';
 import { BASKING_BAND, ESTIMATE_UV, NO_UV_UVI, OVER_MAX_FAIL_FACTOR, REFUGE_MIN_SHARE } from './thresholds';
 import { f0, f1, range1 } from './format';
+import { METER_CAVEAT, RULE_OF_THUMB_LABEL } from './uvTargets';
 
 interface Stats {
   max: number;
@@ -84,6 +85,7 @@ export function uvFindings(
   const st = stats(samples, uvi);
   const out: Finding[] = [];
   const status = baskingStatus(st.max, zone);
+  const uvStatus = status;
   const range = baskingUviRange(zone);
   const shade = isShadeZone(zone);
   const morph = species.lowMelanin ? ` ${LOW_MELANIN_CAUTION}` : '';
@@ -103,11 +105,15 @@ export function uvFindings(
       : '';
     message = `The basking spot reaches about UVI ${f1(st.max)} (mean ${f1(st.baskingMean)} across the basking surface), ${verdict}.${method}`;
   }
+  // The sheet's µW/cm² range, when it has one, is reported beside this finding but never decides it.
+  const judged = species.uvbTargetUw
+    ? ` Judged by UV Index (the zone's range), not by the sheet's µW/cm² ${RULE_OF_THUMB_LABEL}.`
+    : '';
   out.push({
     id: 'basking-uvi',
     status,
     title: 'UV at the basking spot',
-    message: `${message}${morph} ${ESTIMATE_UV}`,
+    message: `${message}${judged}${morph} ${ESTIMATE_UV}`,
     numbers: {
       maxUvi: st.max,
       meanUvi: st.baskingMean,
@@ -124,12 +130,20 @@ export function uvFindings(
     let maxUvb = 0;
     for (const k of st.basking) maxUvb = Math.max(maxUvb, uvb[k]!);
     const [lo, hi] = species.uvbTargetUw;
-    const ok = maxUvb >= lo && maxUvb <= hi;
+    const inside = maxUvb >= lo && maxUvb <= hi;
+    // A rule of thumb never overrides the UV Index verdict: outside its range it only asks for attention
+    // when the UV Index check does not pass either; with a passing UV Index it says so and passes.
+    const status: FindingStatus = inside || uvStatus === 'pass' ? 'pass' : 'attention';
+    const where = inside
+      ? 'within it'
+      : uvStatus === 'pass'
+        ? `outside it, but the UV Index at the basking spot is within the zone's range, and the UV Index decides: lamps differ several-fold in UV Index per µW/cm²`
+        : 'outside it; the UV Index finding above says what to change';
     out.push({
       id: 'basking-uvb',
-      status: ok ? 'pass' : 'attention',
-      title: 'UVB at the basking spot',
-      message: `The basking spot gets about ${f0(maxUvb)} µW/cm² of UVB; the sheet asks for ${f0(lo)}–${f0(hi)} µW/cm². ${ESTIMATE_UV.replace('UV Index meter', 'UVB meter')}`,
+      status,
+      title: `UVB at the basking spot (${RULE_OF_THUMB_LABEL})`,
+      message: `The basking spot gets about ${f0(maxUvb)} µW/cm² of broadband UVB; the sheet's ${RULE_OF_THUMB_LABEL} is ${f0(lo)}–${f0(hi)} µW/cm², and the estimate is ${where}. ${METER_CAVEAT} ${ESTIMATE_UV.replace('UV Index meter', 'UVB meter')}`,
       numbers: { maxUvb, targetLo: lo, targetHi: hi },
       where: baskingSegs.length ? { kind: 'segments', segments: baskingSegs } : undefined,
     });

@@ -49,3 +49,21 @@ export function uviPerUvbFromSpectrum(
   // UVI = 40 · E_er[W/m²]; 1 µW/cm² = 0.01 W/m².
   return (UVI_PER_ERYTHEMAL_W_M2 * erythemal) / (uvb * 100);
 }
+
+/**
+ * UV Index per µW/cm² of broadband UVB (280–315 nm) in high midday sunlight: about 0.04 (from memory:
+ * about UVI 10 with 2.5 W/m², 250 µW/cm², of UVB). The erythema weighting rises steeply below 300 nm,
+ * so a lamp whose ratio is well above this gives much of its UVB at short wavelengths sunlight lacks.
+ */
+export const SUNLIGHT_UVI_PER_UVB = 0.04;
+
+/**
+ * A lamp whose ratio is this many times sunlight's or more is treated as giving short-wave, non-solar
+ * UVB (from memory: lamps known for eye and skin injuries in reptiles had ratios several times a
+ * fluorescent tube's; twice is taken as the point to warn).
+ */
+export const SHORT_WAVE_RATIO_FACTOR = 2;
+
+export function isShortWaveRatio(uviPerUvb: number): boolean {
+  return uviPerUvb >= SUNLIGHT_UVI_PER_UVB * SHORT_WAVE_RATIO_FACTOR;
+}

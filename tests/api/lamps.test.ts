@@ -201,9 +201,12 @@ describe('readings', () => {
     ]);
     expect(detail.body.lamp.burnIn.baselineTaken).toBe(true);
     expect(detail.body.chart.curve.length).toBeGreaterThan(10);
-    // Bearded dragon sheet: 115 µW/cm² at the basking spot, its UV zone 4's basking UV Index 4.5
-    // (Ferguson et al. 2010, Zoo Biology 29:317–334) at 0.04 UV Index per µW/cm² (from memory).
-    expect(detail.body.lamp.basking.threshold).toBe(115);
+    // Bearded dragon sheet: UV zone 4's basking UV Index 4.5 (Ferguson et al. 2010, Zoo Biology
+    // 29:317–334) through the lamp type's 0.04 UV Index per µW/cm² (from memory) is 112.5 µW/cm²; the
+    // sheet's own 115–235 µW/cm² is a shop rule of thumb shown beside it, never the threshold.
+    expect(detail.body.lamp.basking.threshold).toBeCloseTo(4.5 / 0.04, 9);
+    expect(detail.body.lamp.basking.judgedBy).toMatch(/UV Index 4\.5/);
+    expect(detail.body.lamp.basking.ruleOfThumb).toMatch(/shop rule of thumb, 115–235/);
     expect(detail.body.lamp.fallsBelowOn).toMatch(/^\d{4}-\d{2}-\d{2}$/);
   });
 
