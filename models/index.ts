@@ -4,7 +4,7 @@ import { Invitation } from './invitation';
 import { Membership } from './membership';
 import { Organisation } from './organisation';
 import { EndedSession } from './ended-session';
-import { PasswordReset } from './password-reset';
+import { AccountLink, LINK_PURPOSES, type LinkPurpose } from './account-link';
 import { SignInAttempt } from './sign-in-attempt';
 import { User } from './user';
 import { Design } from './design';
@@ -24,7 +24,8 @@ import { JobRun, JobRunCount, JobUnit } from './job-run';
 
 export { Enclosure, Invitation, Membership, Organisation, User };
 export { Design, ShareLink, Variant };
-export { EndedSession, PasswordReset, SignInAttempt };
+export { AccountLink, EndedSession, SignInAttempt };
+export { LINK_PURPOSES, type LinkPurpose };
 export { CatalogueSeeding, LampType, SpeciesSheet };
 export { Lamp, LampOutlook, LampReminder, MailMessage, Reading, Upload };
 export { JobRun, JobRunCount, JobUnit };
@@ -47,7 +48,7 @@ export function initModels(sequelize: Sequelize): void {
   ShareLink.register(sequelize);
   SignInAttempt.register(sequelize);
   EndedSession.register(sequelize);
-  PasswordReset.register(sequelize);
+  AccountLink.register(sequelize);
   SpeciesSheet.register(sequelize);
   LampType.register(sequelize);
   CatalogueSeeding.register(sequelize);

@@ -1,28 +1,18 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
-import { useState, useSyncExternalStore, type FormEvent } from 'react';
+import { useState, type FormEvent } from 'react';
 import Link from '@/components/ui/Link';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
 import { fieldError, sendJson } from '@/components/ui/api-client';
 import { button, link } from '@/components/ui/styles';
+import { useLinkToken } from './link-token';
 
-/**
- * Chooses a new password with the e-mailed link. The token travels in the address's fragment
- * (`#token=…`), which browsers never send to a server, so it stays out of logs and Referer headers; it is
- * read here and posted once.
- */
-// The fragment exists only in the browser (undefined while the server renders the page).
-const readToken = () => new URLSearchParams(window.location.hash.slice(1)).get('token');
-function subscribeToHash(onChange: () => void) {
-  window.addEventListener('hashchange', onChange);
-  return () => window.removeEventListener('hashchange', onChange);
-}
-
+/** Chooses a new password with the e-mailed link (its token is read from the address's fragment). */
 export function ResetPasswordForm() {
   const router = useRouter();
-  const token = useSyncExternalStore(subscribeToHash, readToken, () => undefined);
+  const token = useLinkToken();
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [expired, setExpired] = useState('');
   const [busy, setBusy] = useState(false);

@@ -6,27 +6,48 @@ import { useRouter } from 'next/navigation';
 import { useState, type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
+import { fieldError, sendJson } from '@/components/ui/api-client';
 import { button, link } from '@/components/ui/styles';
 import { signInErrorMessage } from '@/lib/auth/messages';
+
+/** The refusal that also covers an account still waiting for its confirmation link (see messages.ts). */
+const MISMATCH = 'CredentialsSignin';
 
 export function SignInForm({ returnTo, initialError }: { returnTo: string; initialError?: string }) {
   const router = useRouter();
   const [error, setError] = useState(initialError ? signInErrorMessage(initialError) : '');
   const [busy, setBusy] = useState(false);
+  // After a refusal that may mean "not confirmed yet": the address to offer a new confirmation link for.
+  const [resendTo, setResendTo] = useState('');
+  const [resent, setResent] = useState<{ tone: 'success' | 'error'; message: string } | null>(null);
+
+  async function resend() {
+    setResent(null);
+    try {
+      const answer = await sendJson<{ message: string }>('POST', '/api/sign-up/resend', { email: resendTo });
+      setResent({ tone: 'success', message: answer.message });
+    } catch (err) {
+      setResent({ tone: 'error', message: fieldError(err).message });
+    }
+  }
 
   async function onSubmit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
+    const email = String(form.get('email') ?? '');
     setBusy(true);
     setError('');
+    setResendTo('');
+    setResent(null);
     try {
       const result = await signIn('credentials', {
-        email: String(form.get('email') ?? ''),
+        email,
         password: String(form.get('password') ?? ''),
         redirect: false,
       });
       if (!result || result.error || !result.ok) {
         setError(signInErrorMessage(result?.error ?? 'ServiceUnavailable'));
+        if (result?.error === MISMATCH && email.trim()) setResendTo(email.trim());
         setBusy(false);
         return;
       }
@@ -41,6 +62,14 @@ export function SignInForm({ returnTo, initialError }: { returnTo: string; initi
   return (
     <form onSubmit={onSubmit} className="space-y-4" noValidate>
       {error && <Notice tone="error">{error}</Notice>}
+      {resendTo && !resent && (
+        <p className="text-body">
+          <button type="button" className={link} onClick={resend}>
+            Send the confirmation link to {resendTo} again
+          </button>
+        </p>
+      )}
+      {resent && <Notice tone={resent.tone}>{resent.message}</Notice>}
       <Field label="Email" name="email" type="email" autoComplete="username" required autoFocus />
       <Field label="Password" name="password" type="password" autoComplete="current-password" required />
       <p className="-mt-2 text-right text-body">

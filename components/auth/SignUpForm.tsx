@@ -1,16 +1,18 @@
 'use client';
 
-import { signIn } from 'next-auth/react';
 import Link from '@/components/ui/Link';
-import { useRouter } from 'next/navigation';
 import { useState, type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
 import { fieldError, sendJson } from '@/components/ui/api-client';
 import { button, link } from '@/components/ui/styles';
 
+/**
+ * Creating an account ends on the same "check your inbox" page whether or not the address already had
+ * one, so the page never tells a stranger which addresses have accounts: a new account is confirmed by
+ * the e-mailed link, the owner of an existing one is e-mailed about the try.
+ */
 export function SignUpForm() {
-  const router = useRouter();
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [general, setGeneral] = useState('');
   const [busy, setBusy] = useState(false);
@@ -37,29 +39,22 @@ export function SignUpForm() {
       setBusy(false);
       return;
     }
-    const result = await signIn('credentials', {
-      email: body.email,
-      password: body.password,
-      redirect: false,
-    });
-    if (result?.ok && !result.error) {
-      router.replace('/enclosures');
-      router.refresh();
-    } else {
-      // Sign-up answers the same whether or not the address had an account; if it had, its owner was
-      // e-mailed, and this password is not theirs.
-      setSentTo(body.email);
-      setBusy(false);
-    }
+    setSentTo(body.email);
+    setBusy(false);
   }
 
   if (sentTo) {
     return (
       <div className="space-y-4">
         <Notice tone="info">
-          Check the inbox of {sentTo}. If that address already has an account, we have e-mailed it what to do
-          next: sign in, or choose a new password if it is forgotten.
+          Check the inbox of <strong>{sentTo}</strong>. We have e-mailed it what to do next: a link that
+          confirms a new account (it works once, for 2 hours), or, if the address already has an account, how
+          to sign in or choose a new password.
         </Notice>
+        <p className="text-body text-basalt-600">
+          Nothing after a few minutes? Check the spam folder. You can ask for a new link from the sign-in
+          page.
+        </p>
         <p className="text-center text-body">
           <Link href="/sign-in" className={link}>
             Go to sign in

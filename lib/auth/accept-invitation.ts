@@ -53,7 +53,7 @@ export async function acceptInvitation(
       userId = user.id;
     } else {
       const existing = await User.findOne({ where: { email: invitation.email }, transaction });
-      if (existing) {
+      if (existing?.emailConfirmedAt) {
         throw new ApiError(
           409,
           'account_exists',
@@ -64,10 +64,17 @@ export async function acceptInvitation(
       const password = newPasswordSchema.safeParse(body.password ?? '');
       if (!password.success)
         throw badRequest('password', password.error.issues[0]?.message ?? 'Invalid password.');
-      const created = await User.create(
-        { email: invitation.email, name: body.name, passwordHash: await hashPassword(password.data) },
-        { transaction },
-      );
+      // The invitation came by e-mail to this address: accepting it proves the address. An account
+      // waiting for its sign-up confirmation was never usable and proved nothing, so the invited person's
+      // name and password replace the ones it was created with.
+      const account = {
+        name: body.name,
+        passwordHash: await hashPassword(password.data),
+        emailConfirmedAt: new Date(),
+      };
+      if (existing) await existing.update(account, { transaction });
+      const created =
+        existing ?? (await User.create({ email: invitation.email, ...account }, { transaction }));
       userId = created.id;
       accountCreated = true;
     }

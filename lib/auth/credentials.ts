@@ -45,7 +45,8 @@ export function delayAfter(failures: number, free: number, maxMs: number): numbe
 
 /**
  * Error codes handed to the sign-in page through next-auth (it forwards the thrown message).
- * The page turns them into sentences; nothing here reveals whether an account exists.
+ * The page turns them into sentences; nothing here reveals whether an account exists. `mismatch` also
+ * covers an account waiting for its confirmation link, so its sentence mentions the link.
  */
 export const SIGN_IN_ERRORS = {
   mismatch: 'CredentialsSignin',
@@ -133,7 +134,10 @@ export async function authorizeCredentials(
     const ok = user
       ? await verifyPassword(password, user.passwordHash)
       : (await burnPasswordCheck(password), false);
-    if (!user || !ok) {
+    // An account not yet confirmed by its e-mailed link is refused exactly like a wrong password (same
+    // answer, same counting): otherwise signing up with an address and then signing in with the same
+    // password would tell a stranger whether the address already had an account.
+    if (!user || !ok || !user.emailConfirmedAt) {
       await countAttempt([keys.address], SIGN_IN_LIMITS.windowMs);
       await countAttempt([keys.account, keys.pair], SIGN_IN_LIMITS.counterMs);
       throw new SignInRefused(SIGN_IN_ERRORS.mismatch);

@@ -7,7 +7,7 @@ export function signInErrorMessage(code: string | null | undefined): string {
   const [kind, minutes] = code.split(':');
   switch (kind) {
     case 'CredentialsSignin':
-      return 'That email and password do not match.';
+      return 'That email and password do not match an account that can sign in. Just created the account? Open the confirmation link we e-mailed you first.';
     case 'TooManyAttempts': {
       const n = Math.max(1, Number(minutes) || 15);
       return `Too many sign-in attempts. Try again in ${n} ${n === 1 ? 'minute' : 'minutes'}.`;

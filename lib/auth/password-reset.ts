@@ -1,20 +1,25 @@
 import 'server-only';
-import { createHash, randomBytes } from 'node:crypto';
-import { Op } from 'sequelize';
 import { z } from 'zod';
 import { endAllSessions } from '@/lib/account/service';
-import { ApiError } from '@/lib/api/errors';
 import { emailSchema } from '@/lib/api/schemas';
-import { config } from '@/lib/config';
 import { getSequelize } from '@/lib/db';
-import { checkLimits, clearFailures, countAttempt, limitKey } from '@/lib/rate-limit';
-import { MailMessage, PasswordReset, User } from '@/models';
+import { clearFailures, limitKey } from '@/lib/rate-limit';
+import { MailMessage, User } from '@/models';
+import {
+  expiredLink,
+  findLiveLink,
+  issueLink,
+  limitedLinkRequest,
+  linkTokenSchema,
+  linkUrl,
+  useLink,
+} from './account-links';
 import { deliverSoon } from './mail-soon';
 import { hashPassword, newPasswordSchema } from './password';
 
 /**
- * "Forgot your password?": a link to choose a new one, e-mailed through the outbox. The link's token is
- * 256 random bits of which only the SHA-256 is stored; it works once and for RESET_TTL_MS. Asking gives the
+ * "Forgot your password?": a link to choose a new one, e-mailed through the outbox (see account-links.ts:
+ * only the token's hash is stored; it works once and for RESET_TTL_MS). Asking gives the
  * same answer whether or not an account has the address (the e-mail is queued and sent after the answer,
  * so the answer's timing does not tell either). Setting the new password ends every session of the person.
  */
@@ -27,9 +32,7 @@ export const RESET_LIMITS = { perAddress: 10, perAccount: 3, windowMs: 60 * 60_0
 export const resetRequestBody = z.strictObject({ email: emailSchema });
 
 export const resetCompleteBody = z.strictObject({
-  token: z
-    .string({ error: 'The link is incomplete. Ask for a new one.' })
-    .regex(/^[A-Za-z0-9_-]{43}$/, 'The link is incomplete. Ask for a new one.'),
+  token: linkTokenSchema,
   password: newPasswordSchema,
 });
 
@@ -40,38 +43,11 @@ export const RESET_ANSWER = {
     'If an account uses that address, we have e-mailed it a link to choose a new password. The link works once, for 30 minutes.',
 } as const;
 
-const hashToken = (token: string) => createHash('sha256').update(token).digest('hex');
-
-export const resetUrl = (token: string) =>
-  new URL(`/reset-password#token=${token}`, config().APP_URL).toString();
+export const resetUrl = (token: string) => linkUrl('/reset-password', token);
 
 export async function requestPasswordReset(input: z.output<typeof resetRequestBody>, address: string) {
   getSequelize();
-  const addressKey = limitKey('reset-address', address);
-  const verdict = await checkLimits(
-    [{ key: addressKey, limit: RESET_LIMITS.perAddress }],
-    RESET_LIMITS.windowMs,
-  );
-  if (!verdict.allowed) {
-    const minutes = Math.max(1, Math.ceil(verdict.retryAfterMs / 60_000));
-    throw new ApiError(
-      429,
-      'rate_limited',
-      `Too many requests from this address. Try again in ${minutes} ${minutes === 1 ? 'minute' : 'minutes'}.`,
-      undefined,
-      undefined,
-      { 'Retry-After': String(minutes * 60) },
-    );
-  }
-  const accountKey = limitKey('reset-account', input.email);
-  const perAccount = await checkLimits(
-    [{ key: accountKey, limit: RESET_LIMITS.perAccount }],
-    RESET_LIMITS.windowMs,
-  );
-  await countAttempt(perAccount.allowed ? [addressKey, accountKey] : [addressKey], RESET_LIMITS.windowMs);
-  const user = perAccount.allowed
-    ? await User.findOne({ where: { email: input.email }, attributes: ['id', 'name', 'email'] })
-    : null;
+  const user = await limitedLinkRequest('reset', input.email, address, RESET_LIMITS);
   if (user) {
     deliverSoon((await queueResetMail(user)).id);
   }
@@ -79,15 +55,8 @@ export async function requestPasswordReset(input: z.output<typeof resetRequestBo
 }
 
 async function queueResetMail(user: Pick<User, 'id' | 'name' | 'email'>): Promise<MailMessage> {
-  const token = randomBytes(32).toString('base64url');
-  const now = new Date();
   return getSequelize().transaction(async (transaction) => {
-    // A new link replaces any earlier one still waiting: only the newest works.
-    await PasswordReset.destroy({ where: { userId: user.id, usedAt: null }, transaction });
-    const reset = await PasswordReset.create(
-      { userId: user.id, tokenHash: hashToken(token), expiresAt: new Date(now.getTime() + RESET_TTL_MS) },
-      { transaction },
-    );
+    const { token, link: reset } = await issueLink(user.id, 'password-reset', RESET_TTL_MS, transaction);
     return MailMessage.create(
       {
         kind: 'password-reset',
@@ -111,30 +80,25 @@ async function queueResetMail(user: Pick<User, 'id' | 'name' | 'email'>): Promis
   });
 }
 
-export const invalidResetLink = () =>
-  new ApiError(404, 'not_found', 'This link has expired or was already used. Ask for a new one.', 'token');
-
 /** Sets the new password if the token is live, uses the token up, and ends every session of the person. */
 export async function completePasswordReset(input: z.output<typeof resetCompleteBody>): Promise<void> {
   const sequelize = getSequelize();
   const now = new Date();
-  const reset = await PasswordReset.findOne({
-    where: { tokenHash: hashToken(input.token), usedAt: null, expiresAt: { [Op.gt]: now } },
-  });
-  if (!reset) throw invalidResetLink();
+  const reset = await findLiveLink(input.token, 'password-reset', now);
+  if (!reset) throw expiredLink();
   const passwordHash = await hashPassword(input.password);
   const email = await sequelize.transaction(async (transaction) => {
-    // Using the token is a compare-and-set: of two requests with one link, only one sets a password.
-    const [used] = await PasswordReset.update(
-      { usedAt: now },
-      { where: { id: reset.id, usedAt: null }, transaction },
-    );
-    if (used !== 1) throw invalidResetLink();
+    // Of two requests with one link, only one sets a password.
+    if (!(await useLink(reset, now, transaction))) throw expiredLink();
     const user = await User.findByPk(reset.userId, { attributes: ['id', 'email'], transaction });
-    if (!user) throw invalidResetLink();
+    if (!user) throw expiredLink();
+    // Choosing a new password through the e-mailed link also proves the address.
     await User.update({ passwordHash }, { where: { id: user.id }, transaction });
+    await User.update(
+      { emailConfirmedAt: now },
+      { where: { id: user.id, emailConfirmedAt: null }, transaction },
+    );
     await endAllSessions(user.id, transaction);
-    await PasswordReset.destroy({ where: { userId: user.id, usedAt: null }, transaction });
     return user.email;
   });
   // The owner has proved they hold the address: earlier wrong guesses no longer slow their sign-in.

@@ -1,13 +1,22 @@
 import 'server-only';
-import { UniqueConstraintError } from 'sequelize';
+import { UniqueConstraintError, type Transaction } from 'sequelize';
 import { z } from 'zod';
 import { ApiError } from '@/lib/api/errors';
 import { emailSchema, organisationNameSchema, personNameSchema } from '@/lib/api/schemas';
 import { config } from '@/lib/config';
 import { getSequelize } from '@/lib/db';
-import { checkLimits, countAttempt, limitKey } from '@/lib/rate-limit';
+import { checkLimits, clearFailures, countAttempt, limitKey } from '@/lib/rate-limit';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { MailMessage, Membership, Organisation, User } from '@/models';
+import {
+  expiredLink,
+  findLiveLink,
+  issueLink,
+  limitedLinkRequest,
+  linkTokenSchema,
+  linkUrl,
+  useLink,
+} from './account-links';
 import { deliverSoon } from './mail-soon';
 import { hashPassword, newPasswordSchema } from './password';
 
@@ -23,17 +32,43 @@ export const SIGN_UP_LIMIT = { perAddress: 10, windowMs: 60 * 60_000 } as const;
 
 /**
  * What sign-up answers, whether the address was new or already had an account: the answer never tells
- * a stranger which addresses have accounts. The owner of an existing one is told by e-mail instead.
+ * a stranger which addresses have accounts. Either way the rest happens by e-mail: a new account gets
+ * a link that confirms it (it cannot sign in before), the owner of an existing one is told of the try.
  */
 export const SIGN_UP_ANSWER = { ok: true } as const;
+
+/** How long a confirmation link works. Another can be asked for from the sign-in page. */
+export const CONFIRM_TTL_MS = 2 * 3600_000;
+
+/**
+ * Confirmation links are e-mailed at most `perAccount` times per window to one address (silently: the
+ * answer stays the same), and "send it again" is limited per client address (429).
+ */
+export const CONFIRM_LIMITS = { perAddress: 10, perAccount: 5, windowMs: 60 * 60_000 } as const;
+
+export const confirmBody = z.strictObject({ token: linkTokenSchema });
+export const resendBody = z.strictObject({ email: emailSchema });
+
+/** What "send the link again" answers, whatever the address. */
+export const RESEND_ANSWER = {
+  ok: true,
+  message:
+    'If that address has an account waiting for confirmation, we have e-mailed it a new link. The link works once, for 2 hours. An account that is already confirmed gets no e-mail: check the password, or choose a new one.',
+} as const;
+
+export const confirmUrl = (token: string) => linkUrl('/confirm-account', token);
 
 /** At most one "someone tried to sign up with your address" e-mail per account in this time. */
 export const EXISTING_NOTICE_EVERY_MS = 60 * 60_000;
 
 /**
- * Creates the account and its organisation, with the new user as owner, and gives the organisation its
- * starting species sheets and lamp types in the same transaction: the first page it sees is usable.
- * For an address that already has an account nothing is created or changed: its owner gets an e-mail.
+ * Creates the account (not yet confirmed) and its organisation, with the new user as owner, and gives
+ * the organisation its starting species sheets and lamp types in the same transaction: the first page it
+ * sees is usable. Then e-mails the link that confirms the account.
+ * For an address that already has a confirmed account nothing is created or changed: its owner gets an
+ * e-mail. An account still waiting for confirmation has never been usable and nobody has proved they
+ * hold its address, so the newest sign-up replaces its name, password and organisation name, and a new
+ * link (the only one that works) is sent: whoever holds the address confirms what they last submitted.
  */
 export async function signUp(input: z.output<typeof signUpBody>, address: string) {
   const sequelize = getSequelize();
@@ -55,26 +90,116 @@ export async function signUp(input: z.output<typeof signUpBody>, address: string
   await countAttempt([key], SIGN_UP_LIMIT.windowMs);
   // Hashed either way, so both paths spend the same password work.
   const passwordHash = await hashPassword(input.password);
-  const existing = await User.findOne({ where: { email: input.email }, attributes: ['id', 'name', 'email'] });
-  if (existing) {
+  const existing = await User.findOne({
+    where: { email: input.email },
+    attributes: ['id', 'name', 'email', 'emailConfirmedAt'],
+  });
+  if (existing?.emailConfirmedAt) {
     await tellExistingOwner(existing);
     return SIGN_UP_ANSWER;
   }
+  const accountKey = limitKey('confirm-account', input.email);
+  const mayMail = (
+    await checkLimits([{ key: accountKey, limit: CONFIRM_LIMITS.perAccount }], CONFIRM_LIMITS.windowMs)
+  ).allowed;
+  if (mayMail) await countAttempt([accountKey], CONFIRM_LIMITS.windowMs);
+  let mail: MailMessage | undefined;
   try {
-    await sequelize.transaction(async (transaction) => {
-      const user = await User.create({ email: input.email, name: input.name, passwordHash }, { transaction });
-      const organisation = await Organisation.create({ name: input.organisationName }, { transaction });
-      await Membership.create(
-        { organisationId: organisation.id, userId: user.id, role: 'owner' },
-        { transaction },
-      );
-      await seedStartingCatalogue(organisation.id, { transaction });
+    mail = await sequelize.transaction(async (transaction) => {
+      let user: Pick<User, 'id' | 'name' | 'email'>;
+      if (existing) {
+        const [replaced] = await User.update(
+          { name: input.name, passwordHash },
+          { where: { id: existing.id, emailConfirmedAt: null }, transaction },
+        );
+        // Confirmed a moment ago: it is no longer a pending sign-up to replace.
+        if (replaced !== 1) return undefined;
+        const owned = await Membership.findAll({
+          where: { userId: existing.id, role: 'owner' },
+          attributes: ['organisationId'],
+          transaction,
+        });
+        await Organisation.update(
+          { name: input.organisationName },
+          { where: { id: owned.map((m) => m.organisationId) }, transaction },
+        );
+        user = { id: existing.id, email: existing.email, name: input.name };
+      } else {
+        user = await User.create({ email: input.email, name: input.name, passwordHash }, { transaction });
+        const organisation = await Organisation.create({ name: input.organisationName }, { transaction });
+        await Membership.create(
+          { organisationId: organisation.id, userId: user.id, role: 'owner' },
+          { transaction },
+        );
+        await seedStartingCatalogue(organisation.id, { transaction });
+      }
+      return mayMail ? queueConfirmMail(user, transaction) : undefined;
     });
   } catch (e) {
-    // Two sign-ups with one address at the same moment: the other one made the account.
+    // Two sign-ups with one address at the same moment: the other one made the account and sent its link.
     if (!(e instanceof UniqueConstraintError)) throw e;
   }
+  if (mail) deliverSoon(mail.id);
   return SIGN_UP_ANSWER;
+}
+
+async function queueConfirmMail(
+  user: Pick<User, 'id' | 'name' | 'email'>,
+  transaction: Transaction,
+): Promise<MailMessage> {
+  const { token, link } = await issueLink(user.id, 'confirm-account', CONFIRM_TTL_MS, transaction);
+  return MailMessage.create(
+    {
+      kind: 'confirm-account',
+      toEmail: user.email,
+      toUserId: user.id,
+      subject: 'Confirm your new Baskwell account',
+      body: [
+        `Hello ${user.name},`,
+        '',
+        'Someone (we hope you) created a Baskwell account with this e-mail address.',
+        '',
+        `Confirm the account: ${confirmUrl(token)}`,
+        '',
+        'The link works once, for 2 hours; then sign in with the password you chose.',
+        'If you did not create this account, ignore this e-mail: without the link it cannot be used.',
+      ].join('\n'),
+      dedupeKey: `confirm-account:${link.id}`,
+    },
+    { transaction },
+  );
+}
+
+/** "Send the link again", from the sign-in page: the same answer whether or not the address has an account. */
+export async function resendConfirmation(input: z.output<typeof resendBody>, address: string) {
+  getSequelize();
+  const user = await limitedLinkRequest('confirm', input.email, address, CONFIRM_LIMITS);
+  if (user && !user.emailConfirmedAt) {
+    const mail = await getSequelize().transaction((transaction) => queueConfirmMail(user, transaction));
+    deliverSoon(mail.id);
+  }
+  return RESEND_ANSWER;
+}
+
+/** Confirms the account of a live link (once); its owner then signs in with the password they chose. */
+export async function confirmAccount(input: z.output<typeof confirmBody>): Promise<{ email: string }> {
+  const sequelize = getSequelize();
+  const now = new Date();
+  const link = await findLiveLink(input.token, 'confirm-account', now);
+  if (!link) throw expiredLink();
+  const email = await sequelize.transaction(async (transaction) => {
+    if (!(await useLink(link, now, transaction))) throw expiredLink();
+    const user = await User.findByPk(link.userId, { attributes: ['id', 'email'], transaction });
+    if (!user) throw expiredLink();
+    await User.update(
+      { emailConfirmedAt: now },
+      { where: { id: user.id, emailConfirmedAt: null }, transaction },
+    );
+    return user.email;
+  });
+  // Tries before confirming were refused like wrong passwords; they should not slow the first sign-in.
+  await clearFailures(limitKey('account', email));
+  return { email };
 }
 
 async function tellExistingOwner(user: Pick<User, 'id' | 'name' | 'email'>): Promise<void> {

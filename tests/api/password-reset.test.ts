@@ -8,7 +8,7 @@ import * as enclosures from '@/app/api/enclosures/route';
 import { authorizeCredentials } from '@/lib/auth/credentials';
 import { settleMail } from '@/lib/auth/mail-soon';
 import { RESET_LIMITS, RESET_TTL_MS } from '@/lib/auth/password-reset';
-import { MailMessage, PasswordReset, User, type Organisation } from '@/models';
+import { AccountLink, MailMessage, User, type Organisation } from '@/models';
 import { FIXTURE_PASSWORD, closeDatabase, createMember, resetDatabase } from '../helpers/db';
 import { clearMail, listMail, waitForMail } from '../helpers/mail';
 import { call, sessionCookie } from './http';
@@ -79,7 +79,7 @@ describe('asking for a link', () => {
 
   it('stores only the hash of the token', async () => {
     const token = await linkFor(user.email);
-    const rows = await PasswordReset.findAll({ where: { userId: user.id } });
+    const rows = await AccountLink.findAll({ where: { userId: user.id, purpose: 'password-reset' } });
     expect(rows).toHaveLength(1);
     expect(rows[0]!.tokenHash).toMatch(/^[0-9a-f]{64}$/);
     expect(rows[0]!.tokenHash).not.toContain(token);

@@ -2,6 +2,7 @@ import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from 'vites
 import { newSessionId } from '@/lib/auth/ended-sessions';
 import * as enclosures from '@/app/api/enclosures/route';
 import * as signUpRoute from '@/app/api/sign-up/route';
+import * as confirmRoute from '@/app/api/sign-up/confirm/route';
 import { authOptions, authorizeCredentials, SIGN_IN_LIMITS } from '@/lib/auth';
 import { delayAfter } from '@/lib/auth/credentials';
 import { signInErrorMessage } from '@/lib/auth/messages';
@@ -9,7 +10,7 @@ import { STARTING_LAMP_TYPES } from '@/lib/lamp-types/starting-lamp-types';
 import { STARTING_SHEETS } from '@/lib/species/starting-sheets';
 import { CatalogueSeeding, LampType, Organisation, SignInAttempt, SpeciesSheet, User } from '@/models';
 import { settleMail } from '@/lib/auth/mail-soon';
-import { clearMail, listMail, waitForMail } from '../helpers/mail';
+import { clearMail, firstLink, listMail, waitForMail } from '../helpers/mail';
 import { closeDatabase, createMember, resetDatabase } from '../helpers/db';
 import { call, sessionCookie } from './http';
 
@@ -61,7 +62,7 @@ describe('credentials sign-in', () => {
     const message = await refusal(
       authorizeCredentials({ email: alice.email, password: 'wrong-password-1' }, from('203.0.113.5')),
     );
-    expect(message).toBe('That email and password do not match.');
+    expect(message).toMatch(/^That email and password do not match/);
     // An unknown e-mail gets exactly the same answer (no account discovery).
     const unknown = await refusal(
       authorizeCredentials({ email: 'nobody@example.com', password }, from('203.0.113.5')),
@@ -82,7 +83,7 @@ describe('credentials sign-in', () => {
           authorizeCredentials({ email: alice.email, password: `wrong-${i}-pw` }, from('198.51.100.7')),
         );
       for (let i = 0; i < SIGN_IN_LIMITS.pairFreeFailures; i++)
-        expect(await wrong(i)).toBe('That email and password do not match.');
+        expect(await wrong(i)).toMatch(/^That email and password do not match/);
       // The next try, even with the right password, has to wait; it is not checked, and not counted.
       const waiting = await refusal(
         authorizeCredentials({ email: alice.email, password }, from('198.51.100.7')),
@@ -283,9 +284,25 @@ describe('POST /api/sign-up', () => {
     organisationName: 'Quarry Household',
   };
 
-  it('creates the account and an organisation it owns, then the password signs in', async () => {
+  it('creates the account and an organisation it owns; the password signs in once the e-mailed link confirms it', async () => {
+    await clearMail();
     const r = await call(signUpRoute.POST, { method: 'POST', path: '/api/sign-up', body });
     expect(r.status).toBe(201);
+    await expect(
+      authorizeCredentials({ email: body.email, password: body.password }, from('192.0.2.1')),
+    ).rejects.toThrow();
+    await settleMail();
+    const link = new URL(
+      firstLink(await waitForMail(body.email, { subject: 'Confirm your new Baskwell account' })),
+    );
+    expect(link.pathname).toBe('/confirm-account');
+    const token = new URLSearchParams(link.hash.slice(1)).get('token');
+    const confirmed = await call(confirmRoute.POST, {
+      method: 'POST',
+      path: '/api/sign-up/confirm',
+      body: { token },
+    });
+    expect(confirmed.status).toBe(200);
     const user = await authorizeCredentials(
       { email: body.email, password: body.password },
       from('192.0.2.1'),

@@ -136,6 +136,7 @@ const targets: Target[] = [
   out('sign-up', '/sign-up', () => '/sign-up'),
   out('forgot-password', '/forgot-password', () => '/forgot-password'),
   out('reset-password', '/reset-password', () => `/reset-password#token=${'x'.repeat(43)}`),
+  out('confirm-account', '/confirm-account', () => `/confirm-account#token=${'x'.repeat(43)}`),
   out('share', '/s/[token]', () => ids.sharePath),
   out('invite-unknown', '/invite/[token]', () => `/invite/${'x'.repeat(43)}`),
   staffSees('enclosures', '/enclosures', () => '/enclosures'),

@@ -1,14 +1,19 @@
-// Account security as a person meets it in Chromium against the production build: "Forgot your password?"
+// Account security as a person meets it in Chromium against the production build: creating an account
+// (the same page for a new address and a taken one; the e-mailed link confirms a new one), "Forgot your password?"
 // end to end through the fake SMTP server (the e-mailed link, a new password, every session ended, the
 // link used up), plain sign-out ending the session on the server (a copied cookie is refused afterwards),
 // and a crafted return address after sign-in that must not leave the app.
 import { describe, expect, it } from 'vitest';
-import { firstLink, waitForMail } from '../helpers/mail';
+import { firstLink, listMail, waitForMail } from '../helpers/mail';
+import type { Page } from 'playwright-core';
 import { BASE_URL, newContext, screenshot, signIn, withBrowser } from './harness';
 
 const session = withBrowser();
 
-/** A fresh account of its own, so changing its password disturbs no other test. */
+/**
+ * A fresh account of its own, so changing its password disturbs no other test: signed up through the
+ * API, then confirmed as its owner would, by opening the e-mailed link in a browser.
+ */
 async function newAccount(tag: string) {
   const email = `reset.${tag}.${Date.now()}@example.com`;
   const password = 'first-long-password-1';
@@ -18,7 +23,51 @@ async function newAccount(tag: string) {
     body: JSON.stringify({ name: 'Rena Setter', email, password, organisationName: 'Reset test household' }),
   });
   expect(res.status).toBe(201);
+  await followConfirmation(email);
   return { email, password };
+}
+
+/** Opens the newest confirmation link e-mailed to `email` in a context of its own; lands on sign-in. */
+async function followConfirmation(email: string, page?: Page): Promise<void> {
+  const mail = await waitForMail(email, { subject: 'Confirm your new Baskwell account', timeoutMs: 20_000 });
+  const link = firstLink(mail);
+  expect(new URL(link).pathname).toBe('/confirm-account');
+  const context = page ? undefined : await newContext(session.browser());
+  try {
+    const p = page ?? (await context!.newPage());
+    await p.goto(link);
+    await p.waitForURL((u) => u.pathname === '/sign-in', { timeout: 20_000 });
+    await p.getByText('Your account is confirmed.').waitFor();
+  } finally {
+    await context?.close();
+  }
+}
+
+/** Fills and sends the sign-up form; returns once the page has settled on its answer. */
+async function submitSignUp(page: Page, email: string, password: string) {
+  await page.goto('/sign-up');
+  await page.getByLabel('Your name').fill('Ivo Brack');
+  await page.getByLabel('Email').fill(email);
+  await page.getByLabel('Password', { exact: true }).fill(password);
+  await page.getByLabel('Organisation name').fill('Brack household');
+  await page.getByRole('button', { name: 'Create account' }).click();
+  // Either answer ends the wait: a page that stays, or one that goes somewhere else.
+  await page.waitForFunction(
+    () => location.pathname !== '/sign-up' || document.body.innerText.includes('Check the inbox'),
+    undefined,
+    { timeout: 20_000 },
+  );
+  await page.waitForLoadState('networkidle');
+}
+
+/** What a person sees after sending the form, with the address they typed taken out. */
+async function outcome(page: Page, email: string) {
+  const cookies = await page.context().cookies();
+  return {
+    path: new URL(page.url()).pathname,
+    text: (await page.locator('main').innerText()).replaceAll(email, '<address>'),
+    signedIn: cookies.some((c) => c.name === 'next-auth.session-token'),
+  };
 }
 
 /** Whether a session cookie value still gets the signed-in person's data from the API. */
@@ -29,6 +78,81 @@ async function cookieWorks(value: string): Promise<boolean> {
   const body = (await res.json()) as { user?: { email?: string } };
   return Boolean(body.user?.email);
 }
+
+describe('creating an account', () => {
+  it('ends on the same page for a new address and one that already has an account', async () => {
+    const existing = await newAccount('existing');
+    const fresh = `new.person.${Date.now()}@example.com`;
+    const seen = [];
+    for (const email of [fresh, existing.email]) {
+      const context = await newContext(session.browser());
+      try {
+        const page = await context.newPage();
+        await submitSignUp(page, email, 'a-stranger-long-password');
+        seen.push(await outcome(page, email));
+      } finally {
+        await context.close();
+      }
+    }
+    expect(seen[0]!.path).toBe('/sign-up');
+    expect(seen[0]!.text).toContain('Check the inbox of <address>');
+    expect(seen[0]!.signedIn).toBe(false);
+    expect(seen[1]).toEqual(seen[0]);
+    // Signing in with the password just chosen cannot tell them apart either.
+    const refusals = [];
+    for (const email of [fresh, existing.email]) {
+      const context = await newContext(session.browser());
+      try {
+        const page = await context.newPage();
+        await page.goto('/sign-in');
+        await page.getByLabel('Email').fill(email);
+        await page.getByLabel('Password', { exact: true }).fill('a-stranger-long-password');
+        await page.getByRole('button', { name: 'Sign in' }).click();
+        await page.getByRole('alert').waitFor({ timeout: 20_000 });
+        refusals.push((await page.locator('main').innerText()).replaceAll(email, '<address>'));
+      } finally {
+        await context.close();
+      }
+    }
+    expect(refusals[1]).toBe(refusals[0]);
+  });
+
+  it('confirms a new account with the e-mailed link; until then sign-in offers to send it again', async () => {
+    const email = `confirm.me.${Date.now()}@example.com`;
+    const password = 'my-own-long-password';
+    for (const [name, viewport] of [
+      ['desktop', { width: 1280, height: 800 }],
+      ['phone', { width: 390, height: 844 }],
+    ] as const) {
+      const context = await newContext(session.browser(), { viewport });
+      try {
+        const page = await context.newPage();
+        await submitSignUp(page, name === 'desktop' ? email : `phone.${email}`, password);
+        await screenshot(page, `sign-up-check-inbox-${name}`);
+      } finally {
+        await context.close();
+      }
+    }
+    const page = session.page();
+    await page.goto('/sign-in');
+    await page.getByLabel('Email').fill(email);
+    await page.getByLabel('Password', { exact: true }).fill(password);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.getByText('Open the confirmation link we e-mailed you first').waitFor({ timeout: 20_000 });
+    await page.getByRole('button', { name: `Send the confirmation link to ${email} again` }).click();
+    await page.getByText('If that address has an account waiting for confirmation').waitFor();
+    await screenshot(page, 'sign-in-unconfirmed-resent');
+    // Two links went out; only the newest works, and it confirms the account.
+    await expect
+      .poll(async () => (await listMail(email)).length, { timeout: 20_000 })
+      .toBeGreaterThanOrEqual(2);
+    await followConfirmation(email, page);
+    await screenshot(page, 'sign-in-account-confirmed');
+    await signIn(page, email, password);
+    expect(new URL(page.url()).pathname).toBe('/enclosures');
+    expect(session.pageErrors()).toEqual([]);
+  });
+});
 
 describe('forgot your password', () => {
   it('e-mails a single-use link; the new password ends every session and the old one stops working', async () => {
@@ -68,7 +192,7 @@ describe('forgot your password', () => {
       await page.getByLabel('Email').fill(email);
       await page.getByLabel('Password', { exact: true }).fill(password);
       await page.getByRole('button', { name: 'Sign in' }).click();
-      await page.getByText('That email and password do not match.').waitFor({ timeout: 20_000 });
+      await page.getByText('That email and password do not match').waitFor({ timeout: 20_000 });
       await signIn(page, email, 'second-long-password-2');
 
       // The link works once.

@@ -16,7 +16,7 @@ describe('signing in', () => {
     await page.getByLabel('Password', { exact: true }).fill('not-the-right-password');
     await page.getByRole('button', { name: 'Sign in' }).click();
     await expect
-      .poll(() => page.getByText('That email and password do not match.').count(), { timeout: 20_000 })
+      .poll(() => page.getByText('That email and password do not match').count(), { timeout: 20_000 })
       .toBe(1);
     await screenshot(page, 'sign-in-wrong-password');
     // Still signed out: the app sends us back to sign in.

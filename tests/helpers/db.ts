@@ -133,7 +133,7 @@ export const FIXTURE_PASSWORD = 'fixture-password-123';
 let fixtureHash: Promise<string> | undefined;
 
 export async function createUser(
-  overrides: { email?: string; name?: string; password?: string } = {},
+  overrides: { email?: string; name?: string; password?: string; confirmed?: boolean } = {},
 ): Promise<{ user: User; password: string }> {
   testDb();
   const password = overrides.password ?? FIXTURE_PASSWORD;
@@ -146,6 +146,7 @@ export async function createUser(
     email: (overrides.email ?? `user-${id}@example.com`).toLowerCase(),
     name: overrides.name ?? `Test User ${id}`,
     passwordHash,
+    emailConfirmedAt: overrides.confirmed === false ? null : new Date(),
   });
   return { user, password };
 }

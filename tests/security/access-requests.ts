@@ -115,6 +115,8 @@ export const REQUESTS: Record<string, RequestSpec> = {
   'POST /api/password-reset/complete': {
     body: () => ({ token: 'C'.repeat(43), password: 'a-long-new-password' }),
   },
+  'POST /api/sign-up/confirm': { body: () => ({ token: 'C'.repeat(43) }) },
+  'POST /api/sign-up/resend': { body: () => ({ email: 'nobody.here@example.com' }) },
   'POST /api/sign-up': {
     body: () => ({
       name: 'New Person',

@@ -33,6 +33,10 @@ const LEGITIMATE: Record<string, { who: Actor[]; why: string; markers?: (keyof t
     why: 'a probe: answers { ok } and when each background job last ran; no organisation’s data',
   },
   'POST /api/sign-up': { who: ACTORS, why: 'creates a new account with its own new organisation' },
+  'POST /api/sign-up/resend': {
+    who: ACTORS,
+    why: 'answers everyone the same; the link goes only to the address, never in the answer',
+  },
   'POST /api/password-reset': {
     who: ACTORS,
     why: 'answers everyone the same; the link goes only to the address, never in the answer',
@@ -148,7 +152,8 @@ describe('every route handler refuses people who may not', () => {
             reply.status !== 401 &&
             !r.pattern.startsWith('/s/') &&
             r.pattern !== '/api/invitations/accept' &&
-            r.pattern !== '/api/password-reset/complete'
+            r.pattern !== '/api/password-reset/complete' &&
+            r.pattern !== '/api/sign-up/confirm'
           )
             wrong.push(`${keyOf(r)} → ${reply.status} for nobody (expected 401)`);
           const leaked = hiddenFrom(actor).filter((m) => reply.text.includes(MARK[m]));
@@ -288,6 +293,7 @@ describe('every route handler refuses people who may not', () => {
       if (
         r.pattern === '/api/invitations/accept' ||
         r.pattern === '/api/password-reset/complete' ||
+        r.pattern === '/api/sign-up/confirm' ||
         r.pattern.startsWith('/s/')
       )
         continue;

@@ -17,6 +17,10 @@ const EXCLUDED_FILES = ['app/api/auth/[...nextauth]/route.ts'];
 const PUBLIC_HANDLERS: Record<string, string> = {
   'app/api/sign-up/route.ts POST':
     'creates a new account with a new organisation of its own; touches nothing that exists (rate-limited)',
+  'app/api/sign-up/confirm/route.ts POST':
+    'the unguessable, single-use, 2-hour token from the e-mailed link is the permission; it only confirms that account',
+  'app/api/sign-up/resend/route.ts POST':
+    'e-mails a new confirmation link to the address if an account there waits for one; answers the same either way (rate-limited)',
   'app/api/health/route.ts GET':
     'a load balancer probe: answers { ok }, the database state and when each background job last ran (or 503 when the database is down); no organisation’s data',
   'app/api/password-reset/route.ts POST':

@@ -12,6 +12,7 @@ const DONE: Record<string, string> = {
   'password-changed': 'Your password was changed and every session ended. Sign in with the new password.',
   'signed-out-everywhere': 'You were signed out on every device.',
   'password-reset': 'Your new password is set and every session ended. Sign in with the new password.',
+  'account-confirmed': 'Your account is confirmed. Sign in with the e-mail and password you chose.',
 };
 
 export default async function SignInPage({

@@ -2,7 +2,7 @@ import { created, route } from '@/lib/api';
 import { clientAddress } from '@/lib/auth/client-address';
 import { signUp, signUpBody } from '@/lib/auth/sign-up';
 
-/** Creates an account and a new organisation owned by it. The page then signs in with the same password. */
+/** Creates an account (confirmed later by an e-mailed link) and a new organisation owned by it. */
 export const POST = route({
   body: signUpBody,
   auth: false,
