@@ -54,13 +54,14 @@ async function openOnce(browser: Browser, url: string, cookies: Parameters<Brows
     if (cookies.length) await context.addCookies(cookies);
     const page = await context.newPage();
     await page.goto(url, { waitUntil: 'commit' });
+    // A string, not a function: tsx's helpers wrapped into a function do not exist in the page.
     const marks = await page.waitForFunction(
-      () => {
-        const at = (name: string) => performance.getEntriesByName(name, 'mark')[0]?.startTime;
+      `(() => {
+        const at = (name) => performance.getEntriesByName(name, 'mark')[0]?.startTime;
         const visible = at('field-visible');
         const computed = at('field-computed');
         return visible !== undefined && computed !== undefined ? { visible, computed } : null;
-      },
+      })()`,
       null,
       { timeout: 120_000, polling: 50 },
     );
