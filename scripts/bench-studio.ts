@@ -54,14 +54,14 @@ async function openOnce(browser: Browser, url: string, cookies: Parameters<Brows
     if (cookies.length) await context.addCookies(cookies);
     const page = await context.newPage();
     await page.goto(url, { waitUntil: 'commit' });
-    // A string, not a function: tsx's helpers wrapped into a function do not exist in the page.
+    // No named helper inside: tsx would wrap it in a function of its own that the page does not have
+    // (and the page's policy refuses a string to evaluate).
     const marks = await page.waitForFunction(
-      `(() => {
-        const at = (name) => performance.getEntriesByName(name, 'mark')[0]?.startTime;
-        const visible = at('field-visible');
-        const computed = at('field-computed');
+      () => {
+        const visible = performance.getEntriesByName('field-visible', 'mark')[0]?.startTime;
+        const computed = performance.getEntriesByName('field-computed', 'mark')[0]?.startTime;
         return visible !== undefined && computed !== undefined ? { visible, computed } : null;
-      })()`,
+      },
       null,
       { timeout: 120_000, polling: 50 },
     );
