@@ -12,6 +12,7 @@ import { useLengthUnit } from '@/components/ui/units';
 import type { LampDetail } from '@/lib/lamp-log/store';
 import { THROUGH_SHORT } from '@/shared/reading-setup';
 import { formatValue } from './format';
+import { ReadingSetupEdit } from './ReadingSetupEdit';
 
 type Reading = LampDetail['readings'][number];
 
@@ -143,6 +144,7 @@ export function ReadingsTable({ readings, canEdit }: { readings: Reading[]; canE
                   <span className="block text-caption text-basalt-500" data-testid="reading-setup">
                     {setupText(r)}
                   </span>
+                  {canEdit && <ReadingSetupEdit reading={r} label={`the reading of ${when(r.takenAt)}`} />}
                 </td>
                 <td className="px-3 py-2 text-basalt-600">
                   <span className="block">{r.meter ?? '—'}</span>

@@ -189,7 +189,7 @@ function readingNotesOf(points: readonly NormalisedPoint[], unit: ReadingUnit | 
   const assumed = points.filter((p) => p.use !== 'excluded' && p.assumedBare).length;
   if (assumed > 0) {
     notes.push(
-      `${count(assumed)} ${assumed === 1 ? 'does' : 'do'} not say what was between lamp and meter: taken as the bare lamp. If ${assumed === 1 ? 'it was' : 'they were'} measured through the lid, the lamp is stronger than shown — record the set-up before moving the lamp closer.`,
+      `${count(assumed)} ${assumed === 1 ? 'does' : 'do'} not say what was between lamp and meter: taken as the bare lamp. If ${assumed === 1 ? 'it was' : 'they were'} measured through the lid, the lamp is stronger than shown — record the set-up (“Change set-up” beside each reading) before moving the lamp closer.`,
     );
   }
   const burnIn = points.filter((p) => p.use === 'burn-in').length;

@@ -74,6 +74,21 @@ describe('lamp log: readings through the lid', () => {
       }
     }
     expect(basking[1]).toBe(basking[0]);
+
+    // A set-up recorded wrongly is corrected beside the reading: said to be bare, the same values now
+    // describe a weaker lamp, and the basking estimate falls.
+    const newest = page.getByTestId('readings-table').locator('tbody tr').first();
+    await newest.getByText('Change set-up').click();
+    const edit = newest.getByRole('form', { name: /^Set-up of the reading of / });
+    await edit.getByLabel('Between lamp and meter').selectOption('nothing');
+    await edit.getByRole('button', { name: 'Save set-up' }).click();
+    await expect
+      .poll(() => newest.getByTestId('reading-setup').innerText(), { timeout: 30_000 })
+      .toBe('bare lamp, warmed up');
+    const value = page.locator('dt', { hasText: /^Basking spot/ }).locator('xpath=following-sibling::dd');
+    await expect.poll(() => value.innerText(), { timeout: 30_000 }).not.toBe(basking[1]);
+    expect(parseFloat(await value.innerText())).toBeLessThan(parseFloat(basking[1]!));
+    await screenshot(page, 'lamp-log-lid-setup-corrected');
     expect(session.pageErrors()).toEqual([]);
   });
 });

@@ -1,0 +1,121 @@
+'use client';
+
+import { useRouter } from 'next/navigation';
+import { useId, useState, type FormEvent } from 'react';
+import { fieldError, sendJson } from '@/components/ui/api-client';
+import { button, input } from '@/components/ui/styles';
+import {
+  THROUGH_LABEL,
+  WARMED_UP_LABEL,
+  type ReadingThrough,
+  type ReadingWarmedUp,
+} from '@/shared/reading-setup';
+
+type Setup = {
+  id: number;
+  through: ReadingThrough;
+  throughTransmission: number | null;
+  warmedUp: ReadingWarmedUp;
+};
+
+/**
+ * Corrects how a reading was taken (what was between lamp and meter, whether the lamp had warmed up):
+ * the way to record the set-up of a reading logged before readings said so.
+ */
+export function ReadingSetupEdit({ reading, label }: { reading: Setup; label: string }) {
+  const router = useRouter();
+  const id = useId();
+  const [through, setThrough] = useState<ReadingThrough>(reading.through);
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+
+  async function save(e: FormEvent<HTMLFormElement>) {
+    e.preventDefault();
+    const form = new FormData(e.currentTarget);
+    const share = String(form.get('throughTransmission') ?? '').trim();
+    setBusy(true);
+    setError(null);
+    try {
+      await sendJson('PATCH', `/api/readings/${reading.id}`, {
+        through,
+        throughTransmission:
+          ['lid', 'screen', 'glass'].includes(through) && share !== '' ? Number(share) : null,
+        warmedUp: form.get('warmedUp'),
+      });
+      router.refresh();
+    } catch (err) {
+      setError(fieldError(err).message);
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  return (
+    <details className="mt-1 text-caption">
+      <summary
+        className="cursor-pointer text-basalt-600 underline"
+        aria-label={`Change the set-up of ${label}`}
+      >
+        Change set-up
+      </summary>
+      <form onSubmit={save} className="mt-1 space-y-1" aria-label={`Set-up of ${label}`} noValidate>
+        <label htmlFor={`${id}-through`} className="block">
+          Between lamp and meter
+        </label>
+        <select
+          id={`${id}-through`}
+          className={`${input} text-caption`}
+          value={through}
+          onChange={(e) => setThrough(e.target.value as ReadingThrough)}
+        >
+          {(['not-recorded', 'nothing', 'lid', 'screen', 'glass'] as const).map((t) => (
+            <option key={t} value={t}>
+              {THROUGH_LABEL[t]}
+            </option>
+          ))}
+        </select>
+        {['lid', 'screen', 'glass'].includes(through) && (
+          <>
+            <label htmlFor={`${id}-share`} className="block">
+              Share of UVB it passes (0–1){through === 'lid' ? ', empty: the lamp’s lid' : ''}
+            </label>
+            <input
+              id={`${id}-share`}
+              name="throughTransmission"
+              type="number"
+              step="0.01"
+              min="0.01"
+              max="1"
+              inputMode="decimal"
+              className={`${input} text-caption`}
+              defaultValue={reading.through === through ? (reading.throughTransmission ?? '') : ''}
+            />
+          </>
+        )}
+        <label htmlFor={`${id}-warm`} className="block">
+          Lamp warmed up
+        </label>
+        <select
+          id={`${id}-warm`}
+          name="warmedUp"
+          className={`${input} text-caption`}
+          defaultValue={reading.warmedUp}
+        >
+          {(['not-recorded', 'yes', 'no'] as const).map((w) => (
+            <option key={w} value={w}>
+              {WARMED_UP_LABEL[w]}
+            </option>
+          ))}
+        </select>
+        {error && (
+          <p role="alert" className="font-medium text-ember-700">
+            {error}
+          </p>
+        )}
+        <button type="submit" className={button.secondary} disabled={busy}>
+          {busy ? 'Saving…' : 'Save set-up'}
+        </button>
+      </form>
+    </details>
+  );
+}
