@@ -64,11 +64,13 @@ describe('lamp log', () => {
     await page.getByRole('button', { name: 'in', exact: true }).click();
     await page.getByLabel('Distance below the lamp (in)').fill('12');
     await page.getByLabel('Meter value').fill('24.5');
-    // The set-up of the last reading is offered again; this one was through the lid.
-    expect(await page.getByLabel('Between lamp and meter').inputValue()).toBe('nothing');
-    expect(await page.getByLabel('Lamp warmed up').inputValue()).toBe('yes');
-    await page.getByLabel('Between lamp and meter').selectOption('lid');
-    await page.getByLabel('Share of UVB it passes (0–1)').fill('0.6');
+    // The set-up of the last reading is offered again; this one was through the lid. (Each reading in
+    // the table has a set-up form of its own: these fields are the add form's.)
+    const addForm = page.getByRole('form', { name: 'Add a reading' });
+    expect(await addForm.getByLabel('Between lamp and meter').inputValue()).toBe('nothing');
+    expect(await addForm.getByLabel('Lamp warmed up').inputValue()).toBe('yes');
+    await addForm.getByLabel('Between lamp and meter').selectOption('lid');
+    await addForm.getByLabel('Share of UVB it passes (0–1)').fill('0.6');
     await page.getByRole('button', { name: 'Add reading' }).click();
     await expect.poll(() => points.count(), { timeout: 60_000 }).toBe(before + 1);
     const newest = page.getByTestId('readings-table').locator('tbody tr').first();
