@@ -5,6 +5,7 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import { afterAll, beforeEach } from 'vitest';
 import { closeSequelize, getSequelize } from '@/lib/db';
 import { seedDemo as seedDemoScenario, type SeedResult } from '@/lib/demo/seed';
+import { refreshStaleOutlooks } from '@/lib/lamp-log/outlook-store';
 import { migrateUp } from '@/lib/migrate';
 import { Enclosure, Membership, Organisation, User, type Role } from '@/models';
 
@@ -97,8 +98,12 @@ export async function resetDatabase(): Promise<void> {
 }
 
 /** Adds the demo scenario (lib/demo/scenario.ts) to the test database. */
-export function seedDemo(): Promise<SeedResult> {
-  return seedDemoScenario(testDb());
+export async function seedDemo(): Promise<SeedResult> {
+  const result = await seedDemoScenario(testDb());
+  // As `npm run seed` does: the outlooks of lamps written inside the seed's transactions are recomputed
+  // after their commits, in the background; bring them all up to date before a test reads the lamp log.
+  await refreshStaleOutlooks();
+  return result;
 }
 
 export function closeDatabase(): Promise<void> {
