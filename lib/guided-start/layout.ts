@@ -179,6 +179,9 @@ export function lampPositions(
 /** The design ids of the k-th UV or heat lamp (the first keeps the plain id). */
 export const lampId = (base: string, k: number) => (k === 0 ? base : `${base}-${k + 1}`);
 
+/** Twin lamps get told apart in the object list and the findings ("… (2 of 2)"). */
+const numbered = (name: string, k: number, n: number) => (n > 1 ? `${name} (${k + 1} of ${n})` : name);
+
 /** The lid as a barrier across the top (none for an open top). */
 function lidObject(enc: EnclosureInput, lid: Lid): DesignObject[] {
   if (lid === 'mesh')
@@ -204,6 +207,7 @@ export function lampsOnly(
   const objects: DesignObject[] = at.uv.map((x, k) =>
     lampObjectFromType(c.uv, {
       id: lampId(UV_LAMP_ID, k),
+      name: numbered(c.uv.name, k, at.uv.length),
       x,
       y: lampY(enc, lid, c.mount, c.uv.form, c.raiseCm),
       reflectorGain: c.reflector ? GOOD_REFLECTOR_GAIN : undefined,
@@ -215,6 +219,7 @@ export function lampsOnly(
       ...at.heat.map((x, k) =>
         lampObjectFromType(heat, {
           id: lampId(HEAT_LAMP_ID, k),
+          name: numbered(heat.name, k, at.heat.length),
           x,
           y: lampY(enc, lid, c.mount, 'bulb', c.heatRaiseCm ?? c.raiseCm),
         }),
