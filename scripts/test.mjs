@@ -369,7 +369,7 @@ async function browserLane(browserEnv, { appUrl, appPort, browserDb, vitestDone,
       // An external server's test database cannot be recreated from here: the seed then adds to it.
       if (usesPrivateDb(env)) await recreateDatabase(browserDb);
       await migrate(browserEnv);
-      await seed(browserEnv);
+      // Mail first: the seed runs the reminder job, whose e-mail the demo walk finds in the mail viewer.
       if (ownServers) {
         await startMail(life, browserEnv, {
           clear: true,
@@ -377,6 +377,12 @@ async function browserLane(browserEnv, { appUrl, appPort, browserDb, vitestDone,
         });
         rmSync(browserEnv.S3_DIR, { recursive: true, force: true });
         await startS3(life, browserEnv, { logFile: path.join(RESULTS_DIR, 'fake-s3-browser.log') });
+      }
+      const seeded = await seed(browserEnv);
+      if (!(seeded.reminders?.sent > 0)) {
+        log(
+          `The demo seed sent no reminder e-mail (the demo walk looks for one): ${JSON.stringify(seeded.reminders)}`,
+        );
       }
     });
   })();
