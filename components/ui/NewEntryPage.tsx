@@ -1,8 +1,7 @@
-import Link from '@/components/ui/Link';
+import { Breadcrumbs } from '@/components/ui/Breadcrumbs';
 import type { ReactNode } from 'react';
 import { Notice } from './Notice';
 import { PageHeader } from './PageHeader';
-import { link } from './styles';
 
 /**
  * The page around a "new entry" form of an organisation catalogue (species sheets, lamp types): a way
@@ -26,11 +25,7 @@ export function NewEntryPage({
 }) {
   return (
     <>
-      <p className="mb-2 text-body">
-        <Link href={back.href} className={link}>
-          ← {back.label}
-        </Link>
-      </p>
+      <Breadcrumbs trail={[back]} />
       <PageHeader title={title} lead={lead} />
       {mayCreate ? (
         children

@@ -1,3 +1,4 @@
+import { Breadcrumbs } from '@/components/ui/Breadcrumbs';
 import type { Metadata } from 'next';
 import Link from '@/components/ui/Link';
 import { notFound } from 'next/navigation';
@@ -5,7 +6,7 @@ import { DesignsSection } from '@/components/designs/DesignsSection';
 import { EnclosureDetails } from '@/components/enclosures/EnclosureDetails';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { UnitToggle } from '@/components/ui/UnitToggle';
-import { button, link } from '@/components/ui/styles';
+import { button } from '@/components/ui/styles';
 import { enclosureView, memberViews } from '@/lib/api/views';
 import { can } from '@/lib/permissions';
 import { parseId } from '@/lib/api/schemas';
@@ -31,16 +32,7 @@ export default async function EnclosurePage({ params }: { params: Promise<{ id: 
 
   return (
     <>
-      <nav aria-label="Breadcrumb" className="mb-2 text-body">
-        <Link href="/enclosures" className={link}>
-          Enclosures
-        </Link>
-        <span className="text-basalt-500" aria-hidden="true">
-          {' '}
-          /{' '}
-        </span>
-        <span aria-current="page">{enclosure.name}</span>
-      </nav>
+      <Breadcrumbs trail={[{ href: '/enclosures', label: 'Enclosures' }]} current={enclosure.name} />
       <PageHeader
         title={enclosure.name}
         lead={subtitle || undefined}

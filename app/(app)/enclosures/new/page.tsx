@@ -1,9 +1,10 @@
+import { Breadcrumbs } from '@/components/ui/Breadcrumbs';
 import type { Metadata } from 'next';
 import Link from '@/components/ui/Link';
 import { GuidedStart } from '@/components/guided-start/GuidedStart';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { PageHeader } from '@/components/ui/PageHeader';
-import { button, link } from '@/components/ui/styles';
+import { button } from '@/components/ui/styles';
 import { memberViews } from '@/lib/api/views';
 import { TYPICAL_ENCLOSURES } from '@/lib/guided-start/typical-enclosures';
 import { can } from '@/lib/permissions';
@@ -43,11 +44,7 @@ export default async function GuidedStartPage({
 
   return (
     <>
-      <p className="mb-2 text-body">
-        <Link href="/enclosures" className={link}>
-          ← Enclosures
-        </Link>
-      </p>
+      <Breadcrumbs trail={[{ href: '/enclosures', label: 'Enclosures' }]} />
       <PageHeader
         title="Guided start"
         lead="Tell us the species, the enclosure and its lid. Baskwell searches your lamp catalogue for a starting set-up — UV lamp, heat, basking perch and a cool-side hide — checks it against the species sheet and explains why."

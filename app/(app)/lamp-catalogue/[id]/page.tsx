@@ -1,3 +1,4 @@
+import { Breadcrumbs } from '@/components/ui/Breadcrumbs';
 import type { Metadata } from 'next';
 import Link from '@/components/ui/Link';
 import { CautionList } from '@/components/cautions/CautionList';
@@ -5,7 +6,7 @@ import { DeleteLampTypeButton } from '@/components/catalogue/DeleteLampTypeButto
 import { LampTypeView } from '@/components/catalogue/LampTypeView';
 import { ZoneDistancesTable } from '@/components/catalogue/ZoneDistancesTable';
 import { PageHeader } from '@/components/ui/PageHeader';
-import { button, card, link } from '@/components/ui/styles';
+import { button, card } from '@/components/ui/styles';
 import { requireUser } from '@/lib/session';
 import { loadLampType } from '../load';
 
@@ -23,11 +24,7 @@ export default async function LampTypePage({ params }: Props) {
   const { lampType, mayEdit } = await loadLampType(user, id);
   return (
     <>
-      <p className="mb-2 text-body">
-        <Link href="/lamp-catalogue" className={link}>
-          ← Lamp catalogue
-        </Link>
-      </p>
+      <Breadcrumbs trail={[{ href: '/lamp-catalogue', label: 'Lamp catalogue' }]} />
       <PageHeader
         title={lampType.name}
         lead={

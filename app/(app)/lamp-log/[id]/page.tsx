@@ -1,5 +1,5 @@
+import { Breadcrumbs } from '@/components/ui/Breadcrumbs';
 import type { Metadata } from 'next';
-import Link from '@/components/ui/Link';
 import { notFound } from 'next/navigation';
 import { CalibrationPanel } from '@/components/lamp-log/CalibrationPanel';
 import { ExampleDataMark } from '@/components/lamp-log/ExampleDataMark';
@@ -11,7 +11,7 @@ import { ReadingsTable } from '@/components/lamp-log/ReadingsTable';
 import { StatusBadge } from '@/components/lamp-log/StatusBadge';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { UnitToggle } from '@/components/ui/UnitToggle';
-import { button, card, link } from '@/components/ui/styles';
+import { button, card } from '@/components/ui/styles';
 import { formatDay } from '@/components/lamp-log/format';
 import { BURN_IN_HOURS } from '@/lib/lamp-log/burn-in';
 import { todayIso } from '@/lib/lamp-log/dates';
@@ -46,23 +46,13 @@ export default async function LampPage({ params }: { params: Promise<{ id: strin
 
   return (
     <>
-      <nav aria-label="Breadcrumb" className="mb-2 text-body">
-        <Link href="/lamp-log" className={link}>
-          Lamp log
-        </Link>
-        <span className="text-basalt-500" aria-hidden="true">
-          {' '}
-          /{' '}
-        </span>
-        <Link href={`/enclosures/${s.enclosure.id}/lamps`} className={link}>
-          {s.enclosure.name}
-        </Link>
-        <span className="text-basalt-500" aria-hidden="true">
-          {' '}
-          /{' '}
-        </span>
-        <span aria-current="page">{s.label}</span>
-      </nav>
+      <Breadcrumbs
+        trail={[
+          { href: '/lamp-log', label: 'Lamp log' },
+          { href: `/enclosures/${s.enclosure.id}/lamps`, label: s.enclosure.name },
+        ]}
+        current={s.label}
+      />
       <PageHeader
         title={s.label}
         lead={

@@ -1,3 +1,4 @@
+import { Breadcrumbs } from '@/components/ui/Breadcrumbs';
 import { LocalTime } from '@/components/ui/LocalTime';
 import type { Metadata } from 'next';
 import Link from '@/components/ui/Link';
@@ -5,7 +6,7 @@ import { DeleteSheetButton } from '@/components/species/DeleteSheetButton';
 import { ProvenanceNote } from '@/components/species/ProvenanceNote';
 import { SpeciesSheetView } from '@/components/species/SpeciesSheetView';
 import { PageHeader } from '@/components/ui/PageHeader';
-import { button, link } from '@/components/ui/styles';
+import { button } from '@/components/ui/styles';
 import { requireUser } from '@/lib/session';
 import { loadSheet } from '../load';
 
@@ -24,11 +25,7 @@ export default async function SpeciesSheetPage({ params }: Props) {
 
   return (
     <>
-      <p className="mb-2 text-body">
-        <Link href="/species" className={link}>
-          ← All species
-        </Link>
-      </p>
+      <Breadcrumbs trail={[{ href: '/species', label: 'All species' }]} />
       <PageHeader
         title={sheet.commonName}
         lead={<span className="italic">{sheet.scientificName}</span>}

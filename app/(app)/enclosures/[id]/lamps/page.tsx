@@ -1,5 +1,5 @@
+import { Breadcrumbs } from '@/components/ui/Breadcrumbs';
 import type { Metadata } from 'next';
-import Link from '@/components/ui/Link';
 import { notFound } from 'next/navigation';
 import { AddLampForm } from '@/components/lamp-log/AddLampForm';
 import { BackdropPanel } from '@/components/lamp-log/BackdropPanel';
@@ -9,7 +9,7 @@ import { LampTable } from '@/components/lamp-log/LampTable';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { UnitToggle } from '@/components/ui/UnitToggle';
-import { card, link } from '@/components/ui/styles';
+import { card } from '@/components/ui/styles';
 import { allLampTypes } from '@/lib/lamp-types/store';
 import { todayIso } from '@/lib/lamp-log/dates';
 import { enclosureForLampsPage } from '@/lib/lamp-log/access';
@@ -46,23 +46,13 @@ export default async function EnclosureLampsPage({ params }: { params: Promise<{
 
   return (
     <>
-      <nav aria-label="Breadcrumb" className="mb-2 text-body">
-        <Link href="/enclosures" className={link}>
-          Enclosures
-        </Link>
-        <span className="text-basalt-500" aria-hidden="true">
-          {' '}
-          /{' '}
-        </span>
-        <Link href={`/enclosures/${enclosure.id}`} className={link}>
-          {enclosure.name}
-        </Link>
-        <span className="text-basalt-500" aria-hidden="true">
-          {' '}
-          /{' '}
-        </span>
-        <span aria-current="page">Lamps</span>
-      </nav>
+      <Breadcrumbs
+        trail={[
+          { href: '/enclosures', label: 'Enclosures' },
+          { href: `/enclosures/${enclosure.id}`, label: enclosure.name },
+        ]}
+        current="Lamps"
+      />
       <PageHeader
         title={`Lamps of ${enclosure.name}`}
         lead={

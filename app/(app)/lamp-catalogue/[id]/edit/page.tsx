@@ -1,9 +1,8 @@
+import { Breadcrumbs } from '@/components/ui/Breadcrumbs';
 import type { Metadata } from 'next';
-import Link from '@/components/ui/Link';
 import { LampTypeForm } from '@/components/catalogue/LampTypeForm';
 import { Notice } from '@/components/ui/Notice';
 import { PageHeader } from '@/components/ui/PageHeader';
-import { link } from '@/components/ui/styles';
 import { requireUser } from '@/lib/session';
 import { loadLampType } from '../../load';
 
@@ -15,11 +14,7 @@ export default async function EditLampTypePage({ params }: { params: Promise<{ i
   const { lampType, mayEdit } = await loadLampType(user, id);
   return (
     <>
-      <p className="mb-2 text-body">
-        <Link href={`/lamp-catalogue/${lampType.id}`} className={link}>
-          ← {lampType.name}
-        </Link>
-      </p>
+      <Breadcrumbs trail={[{ href: `/lamp-catalogue/${lampType.id}`, label: lampType.name }]} />
       <PageHeader
         title={`Edit: ${lampType.name}`}
         lead="Changes apply to lamps added from now on; designs keep the values their lamps were drawn with."

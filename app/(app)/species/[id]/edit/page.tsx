@@ -1,9 +1,8 @@
+import { Breadcrumbs } from '@/components/ui/Breadcrumbs';
 import type { Metadata } from 'next';
-import Link from '@/components/ui/Link';
 import { SpeciesForm } from '@/components/species/SpeciesForm';
 import { Notice } from '@/components/ui/Notice';
 import { PageHeader } from '@/components/ui/PageHeader';
-import { link } from '@/components/ui/styles';
 import { requireUser } from '@/lib/session';
 import { loadSheet } from '../../load';
 
@@ -15,11 +14,7 @@ export default async function EditSpeciesPage({ params }: { params: Promise<{ id
   const { sheet, mayEdit } = await loadSheet(user, id);
   return (
     <>
-      <p className="mb-2 text-body">
-        <Link href={`/species/${sheet.id}`} className={link}>
-          ← {sheet.commonName}
-        </Link>
-      </p>
+      <Breadcrumbs trail={[{ href: `/species/${sheet.id}`, label: sheet.commonName }]} />
       <PageHeader title={`Edit: ${sheet.commonName}`} />
       {mayEdit ? (
         <SpeciesForm organisationId={sheet.organisationId} sheet={sheet} />
