@@ -1,12 +1,12 @@
 import type { Assessment, Design, LampTech } from '@/simulation';
-import { controlSentence, controlSummary, LAMP_TECH_IDS } from '@/simulation';
+import { controlSentence, controlSummary, LAMP_TECH_IDS, LAMP_TECHS, shortWaveCaution } from '@/simulation';
 
 /**
  * The standing cautions of the product, in plain language, and which of them apply to a design. Shared by
  * the species pages, the lamp catalogue, the guided start, the studio and reports.
  */
 
-export type CautionId = 'uv-eyes-skin' | 'burns' | 'fire' | 'thermostat' | 'estimate';
+export type CautionId = 'uv-eyes-skin' | 'short-wave-uvb' | 'burns' | 'fire' | 'thermostat' | 'estimate';
 
 export type Caution = {
   id: CautionId;
@@ -26,6 +26,16 @@ export const CAUTIONS: Record<CautionId, Caution> = {
       'distance the lamp needs, and never look into a UV lamp yourself. If an animal keeps its eyes shut or its skin ' +
       'reddens or peels, switch the lamp off and see a reptile-experienced vet.',
     source: 'Gardiner, Baines & Pandher 2009, J. Zoo Wildl. Med. 40:757',
+  },
+  'short-wave-uvb': {
+    id: 'short-wave-uvb',
+    title: 'Short-wave UVB: judge this lamp by UV Index',
+    text:
+      'A UV lamp that gives much more UV Index per µW/cm² than sunlight gives short-wave UVB, at wavelengths sunlight ' +
+      'does not contain, which can inflame the eyes and burn the skin at a µW/cm² reading that looks modest. Judge it by ' +
+      'UV Index, never by a µW/cm² target, and keep to the lamp maker’s distances.',
+    source:
+      'from memory (sunlight’s UV Index per µW/cm² and the twice-sunlight point to warn); the injuries: Gardiner, Baines & Pandher 2009, J. Zoo Wildl. Med. 40:757',
   },
   burns: {
     id: 'burns',
@@ -81,6 +91,29 @@ function controlCaution(techs: Set<string>, photoperiodH?: [number, number]): Ca
   return { ...CAUTIONS.thermostat, text };
 }
 
+/**
+ * The short-wave UVB caution for the UV lamps whose UV Index per µW/cm² is far above sunlight's (the
+ * engine's shortWaveCaution, the text the lamp log and the species check give); null when none is.
+ */
+function shortWaveCautionFor(input: CautionInput): Caution | null {
+  const lamps = [...(input.spectra ?? [])];
+  for (const o of input.design?.objects ?? []) {
+    if (o.type !== 'lamp') continue;
+    const t = LAMP_TECHS[o.tech];
+    lamps.push({
+      name: o.name ?? o.id,
+      uviPerUvb: o.uviPerUvb ?? t.uviPerUvb,
+      uvbAt30: o.uvbAt30 ?? t.uvbAt30,
+    });
+  }
+  const texts = lamps
+    .filter((l) => (l.uvbAt30 ?? 1) > 0)
+    .map((l) => shortWaveCaution(l.uviPerUvb, l.name))
+    .filter((t): t is string => t !== null);
+  if (texts.length === 0) return null;
+  return { ...CAUTIONS['short-wave-uvb'], text: texts.join(' ') };
+}
+
 const UV_TECHS = new Set(['t5', 't8', 'compact', 'mercury-vapour', 'metal-halide', 'led-uvb']);
 
 export type CautionInput = {
@@ -88,6 +121,11 @@ export type CautionInput = {
   assessment?: Pick<Assessment, 'findings'> | null;
   /** Technologies involved when there is no design (a lamp type page, a lamp in the log). */
   techs?: string[];
+  /**
+   * UV lamps with their UV Index per µW/cm² when there is no design (a lamp type's page): a spectrum far
+   * from sunlight's gets the short-wave caution. A design's lamps are read from the design.
+   */
+  spectra?: { name: string; uviPerUvb: number; uvbAt30?: number }[];
   /** The species sheet's day length, hours: the timer advice names it. */
   photoperiodH?: [number, number] | null;
 };
@@ -118,6 +156,8 @@ export function applicableCautions(input: CautionInput): { caution: Caution; urg
   );
   const out: { caution: Caution; urgent: boolean }[] = [];
   if (uv) out.push({ caution: CAUTIONS['uv-eyes-skin'], urgent: bad('eye-safety') });
+  const shortWave = shortWaveCautionFor(input);
+  if (shortWave) out.push({ caution: shortWave, urgent: bad('short-wave-uvb') });
   if (heat) {
     out.push({ caution: CAUTIONS.burns, urgent: bad('lamp-in-reach') });
     out.push({

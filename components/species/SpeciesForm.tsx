@@ -6,7 +6,7 @@ import { formatLength } from '@/shared/units';
 import { FormActions } from '@/components/ui/FormActions';
 import { Notice } from '@/components/ui/Notice';
 import { card, input } from '@/components/ui/styles';
-import { targetWarning } from '@/lib/species/consistency';
+import { targetWarning, zoneBaskingUvi, zoneTargetText } from '@/lib/species/consistency';
 import { speciesInputSchema, type SpeciesSheetDto } from '@/lib/species/schema';
 import { UV_ZONES, type UvZone } from '@/simulation';
 import { initialState, toPayload, withUnit, type SpeciesFormState, type TempRangeField } from './form-state';
@@ -69,6 +69,10 @@ export function SpeciesForm({
     return targetWarning(zone, { min, max });
   })();
 
+  const zoneText = [1, 2, 3, 4].includes(Number(state.uvZone))
+    ? zoneTargetText(Number(state.uvZone) as UvZone)
+    : null;
+
   return (
     <form onSubmit={submit} noValidate className="space-y-6">
       {general && <Notice tone="error">{general}</Notice>}
@@ -89,9 +93,9 @@ export function SpeciesForm({
           error={err('scientificName')}
           required
         />
-        <div>
+        <div className="sm:col-span-2">
           <label htmlFor="uv-zone" className="mb-1 block text-body font-medium text-basalt-800">
-            UV zone
+            UV Index target (Ferguson zone)
           </label>
           <select
             id="uv-zone"
@@ -99,22 +103,46 @@ export function SpeciesForm({
             value={state.uvZone}
             onChange={(e) => update({ uvZone: e.target.value })}
             aria-invalid={err('uvZone') ? true : undefined}
+            aria-describedby="uv-zone-target uv-zone-derived"
           >
             <option value="">Choose a zone…</option>
-            {([1, 2, 3, 4] as UvZone[]).map((z) => (
-              <option key={z} value={z}>
-                {`Zone ${z}: ${zoneHabit(UV_ZONES[z].label)} — basking UVI ${UV_ZONES[z].max[0]}–${UV_ZONES[z].max[1]}`}
-              </option>
-            ))}
+            {([1, 2, 3, 4] as UvZone[]).map((z) => {
+              const uvi = zoneBaskingUvi(z);
+              return (
+                <option key={z} value={z}>
+                  {`Zone ${z}: ${zoneHabit(UV_ZONES[z].label)} — UV Index ${uvi.min}–${uvi.max} at the basking spot`}
+                </option>
+              );
+            })}
           </select>
-          <p className="mt-1 text-caption text-basalt-500">
-            Zones of Ferguson et al. 2010 (Zoo Biology 29:317–334).
-          </p>
+          {zoneText ? (
+            <>
+              <p
+                id="uv-zone-target"
+                className="mt-1 text-caption text-basalt-700"
+                data-testid="uv-zone-target"
+              >
+                {zoneText.target} Zones of Ferguson et al. 2010 (Zoo Biology 29:317–334).
+              </p>
+              <p
+                id="uv-zone-derived"
+                className="mt-1 text-caption text-basalt-500"
+                data-testid="uv-zone-derived"
+              >
+                {zoneText.derived}
+              </p>
+            </>
+          ) : (
+            <p id="uv-zone-target" className="mt-1 text-caption text-basalt-500">
+              The zone sets the UV Index the basking spot is judged by (Ferguson et al. 2010, Zoo Biology
+              29:317–334).
+            </p>
+          )}
           {err('uvZone') && <p className="mt-1 text-caption font-medium text-ember-700">{err('uvZone')}</p>}
         </div>
         <RangeInputs
-          legend="Basking UVB target (optional, µW/cm²)"
-          hint="For keepers with a broadband UVB meter. Readings depend on the meter; the UV zone is the primary target."
+          legend="Shop rule of thumb (optional, µW/cm² on a broadband meter)"
+          hint="Shown beside the UV Index verdict for keepers with a broadband UVB meter, never deciding it: lamps differ several-fold in UV Index per µW/cm², and meters in what they read."
           value={state.uvbTargetUw}
           onChange={(end, v) => setPair('uvbTargetUw', end, v)}
           error={pairError('uvbTargetUw')}

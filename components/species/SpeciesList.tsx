@@ -8,6 +8,14 @@ import { formatRange, formatTempRange } from './format';
 import { ProvenanceBadge } from './ProvenanceNote';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { useTempUnit } from '@/components/ui/units';
+import { zoneBaskingUvi } from '@/lib/species/consistency';
+import type { UvZone } from '@/simulation';
+
+/** A sheet's zone with the UV Index its basking spot is judged by. */
+function zoneCell(zone: number): string {
+  const r = zoneBaskingUvi(zone as UvZone);
+  return `Zone ${zone}: UVI ${r.min}–${r.max}`;
+}
 
 /** The organisation's species sheets: search by either name, temperatures in the chosen unit. */
 export function SpeciesList({ sheets }: { sheets: SpeciesSheetDto[] }) {
@@ -50,7 +58,7 @@ export function SpeciesList({ sheets }: { sheets: SpeciesSheetDto[] }) {
                   Species
                 </th>
                 <th scope="col" className="px-4 py-2">
-                  UV zone
+                  UV Index target
                 </th>
                 <th scope="col" className="px-4 py-2">
                   Basking surface
@@ -59,7 +67,7 @@ export function SpeciesList({ sheets }: { sheets: SpeciesSheetDto[] }) {
                   Cool side air
                 </th>
                 <th scope="col" className="px-4 py-2">
-                  UVB meter target
+                  Rule of thumb (µW/cm²)
                 </th>
                 <th scope="col" className="px-4 py-2">
                   Figures
@@ -75,10 +83,10 @@ export function SpeciesList({ sheets }: { sheets: SpeciesSheetDto[] }) {
                     </Link>
                     <div className="text-caption italic text-basalt-600">{s.scientificName}</div>
                   </td>
-                  <td className="px-4 py-2 tabular-nums">{s.uvZone}</td>
+                  <td className="px-4 py-2 tabular-nums">{zoneCell(s.uvZone)}</td>
                   <td className="px-4 py-2 tabular-nums">{formatTempRange(s.baskingSurfaceC, unit)}</td>
                   <td className="px-4 py-2 tabular-nums">{formatTempRange(s.coolAirC, unit)}</td>
-                  <td className="px-4 py-2 tabular-nums">{formatRange(s.uvbTargetUw, 'µW/cm²', 0)}</td>
+                  <td className="px-4 py-2 tabular-nums">{formatRange(s.uvbTargetUw, '', 0).trim()}</td>
                   <td className="px-4 py-2">
                     <ProvenanceBadge sources={s.sources} />
                   </td>

@@ -2,7 +2,7 @@
 
 import { Notice } from '@/components/ui/Notice';
 import { card } from '@/components/ui/styles';
-import { targetWarning } from '@/lib/species/consistency';
+import { targetWarning, zoneBaskingUvi } from '@/lib/species/consistency';
 import { FIELD_LABELS, SHEET_FIELDS, type SheetField, type SpeciesSheetDto } from '@/lib/species/schema';
 import { LOW_MELANIN_CAUTION, neededBaskingCm, UV_ZONES, type UvZone } from '@/simulation';
 import { formatLengthRounded } from '@/shared/units';
@@ -15,10 +15,11 @@ export function SpeciesSheetView({ sheet }: { sheet: SpeciesSheetDto }) {
   const [unit] = useTempUnit();
   const [lengthUnit] = useLengthUnit();
   const zone = UV_ZONES[sheet.uvZone as UvZone];
+  const baskingUvi = zoneBaskingUvi(sheet.uvZone as UvZone);
   const values: Record<SheetField, string> = {
-    uvZone: `Zone ${sheet.uvZone} — ${zoneHabit(zone.label)}; basking UV Index ${zone.max[0]}–${zone.max[1]}, mean ${zone.mean[0]}–${zone.mean[1]}`,
+    uvZone: `Zone ${sheet.uvZone} — ${zoneHabit(zone.label)}; UV Index ${baskingUvi.min}–${baskingUvi.max} at the basking spot, ${zone.mean[0]}–${zone.mean[1]} on average`,
     uvbTargetUw: sheet.uvbTargetUw
-      ? `${formatRange(sheet.uvbTargetUw, 'µW/cm²', 0)} (broadband meter; readings depend on the meter)`
+      ? `${formatRange(sheet.uvbTargetUw, 'µW/cm²', 0)} (for reference only: the UV Index decides, and what a broadband meter reads depends on the lamp and the meter)`
       : 'none given',
     baskingSurfaceC: formatTempRange(sheet.baskingSurfaceC, unit),
     warmAirC: formatTempRange(sheet.warmAirC, unit),
@@ -67,7 +68,7 @@ export function SpeciesSheetView({ sheet }: { sheet: SpeciesSheetDto }) {
         )}
         {warning && (
           <div className="mt-4">
-            <Notice tone="warning" title="The UVB meter target and the UV zone disagree">
+            <Notice tone="warning" title="The shop rule of thumb and the UV Index target disagree">
               {warning}
             </Notice>
           </div>

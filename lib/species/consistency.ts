@@ -1,4 +1,12 @@
-import { LAMP_TECHS, UV_ZONES, type UvZone } from '@/simulation';
+import {
+  baskingUviRange,
+  isShadeZone,
+  LAMP_TECH_IDS,
+  LAMP_TECHS,
+  lowerLabel,
+  UV_ZONES,
+  type UvZone,
+} from '@/simulation';
 import type { Range } from './schema';
 
 /**
@@ -43,4 +51,63 @@ export function targetWarning(uvZone: number, target: Range | null): string | nu
     `about UV Index ${f(c.uvi.min)}–${f(c.uvi.max)}, outside zone ${uvZone}'s basking range of ${f(c.zoneMax.min)}–${f(c.zoneMax.max)}. ` +
     'One lamp cannot meet both: the zone (UV Index) is the primary target; what a broadband meter reads depends on the meter.'
   );
+}
+
+/**
+ * The UV Index range a zone's basking spot is judged by (the species check and the lamp log use the
+ * same one): the zone's maximum range for zones 3–4, the shade method for zones 1–2 (Ferguson et al.
+ * 2010, Zoo Biology 29:317–334).
+ */
+export function zoneBaskingUvi(uvZone: UvZone): Range {
+  const [min, max] = baskingUviRange(uvZone);
+  return { min, max };
+}
+
+/** One line of the derived µW/cm² hint: the lamp technologies that share a UV Index per µW/cm². */
+export type DerivedBroadband = { ratio: number; techs: string[]; range: Range };
+
+/**
+ * What a zone's basking UV Index reads on a broadband UVB meter, per UV lamp technology's typical
+ * spectrum (the engine's UV Index per µW/cm², from memory), grouped by ratio. A derived figure only:
+ * the ratio depends on the lamp and what a meter reads on the meter, so the UV Index stays the target.
+ * Rounded inwards to 5 µW/cm², like broadbandForZone.
+ */
+export function derivedBroadband(uvZone: UvZone): DerivedBroadband[] {
+  const { min, max } = zoneBaskingUvi(uvZone);
+  const byRatio = new Map<number, string[]>();
+  for (const tech of LAMP_TECH_IDS) {
+    const t = LAMP_TECHS[tech];
+    if (!(t.uvbAt30 > 0 && t.uviPerUvb > 0)) continue;
+    byRatio.set(t.uviPerUvb, [...(byRatio.get(t.uviPerUvb) ?? []), t.label]);
+  }
+  return [...byRatio]
+    .sort((a, b) => a[0] - b[0])
+    .map(([ratio, techs]) => ({
+      ratio,
+      techs,
+      range: { min: Math.ceil(min / ratio / 5) * 5, max: Math.floor(max / ratio / 5) * 5 },
+    }));
+}
+
+const orList = (xs: string[]) =>
+  xs.length < 2 ? xs.join('') : `${xs.slice(0, -1).join(', ')} or ${xs.at(-1)}`;
+const n1 = (v: number) => (Math.round(v * 100) / 100).toString();
+
+/** The species form's and sheet's words for a zone: the UV Index target, then the derived µW/cm² hint. */
+export function zoneTargetText(uvZone: UvZone): { target: string; derived: string } {
+  const { min, max } = zoneBaskingUvi(uvZone);
+  const shade = isShadeZone(uvZone)
+    ? ' (a shade-method zone: the animal mostly keeps to shade and meets this only where it basks)'
+    : '';
+  const lines = derivedBroadband(uvZone).map(
+    (d) =>
+      `about ${d.range.min}–${d.range.max} µW/cm² under a ${orList(d.techs.map(lowerLabel))} (${d.ratio} UV Index per µW/cm²)`,
+  );
+  return {
+    target: `UV Index ${n1(min)}–${n1(max)} at the basking spot${shade}. The species check and the lamp log judge by this.`,
+    derived:
+      `On a broadband UVB meter that is ${lines.join('; ')} — derived from typical spectra (from memory), so it depends ` +
+      'on the lamp and the meter; a lamp with short-wave UVB reaches the same UV Index at far fewer µW/cm². ' +
+      'A UV Index meter reads the target directly.',
+  };
 }

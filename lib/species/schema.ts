@@ -33,8 +33,8 @@ export const SHEET_FIELDS = [
 export type SheetField = (typeof SHEET_FIELDS)[number];
 
 export const FIELD_LABELS: Record<SheetField, string> = {
-  uvZone: 'UV zone',
-  uvbTargetUw: 'Basking UVB target (µW/cm²)',
+  uvZone: 'UV Index target (Ferguson zone)',
+  uvbTargetUw: 'Shop rule of thumb (µW/cm², broadband meter)',
   baskingSurfaceC: 'Basking surface temperature',
   warmAirC: 'Warm side air',
   coolAirC: 'Cool side air',
@@ -75,7 +75,7 @@ const fields = {
     .int('The UV zone must be 1, 2, 3 or 4.')
     .min(1, 'The UV zone must be 1, 2, 3 or 4.')
     .max(4, 'The UV zone must be 1, 2, 3 or 4.'),
-  uvbTargetUw: range('The basking UVB target', 'µW/cm²', 0, 2000).nullable().default(null),
+  uvbTargetUw: range('The shop rule of thumb', 'µW/cm²', 0, 2000).nullable().default(null),
   baskingSurfaceC: range('The basking surface temperature', '°C', 0, 80),
   warmAirC: range('The warm side air temperature', '°C', 0, 60),
   coolAirC: range('The cool side air temperature', '°C', 0, 60),
@@ -126,7 +126,7 @@ export const speciesPatchSchema = z
     commonName: fields.commonName,
     scientificName: fields.scientificName,
     uvZone: fields.uvZone,
-    uvbTargetUw: range('The basking UVB target', 'µW/cm²', 0, 2000).nullable(),
+    uvbTargetUw: range('The shop rule of thumb', 'µW/cm²', 0, 2000).nullable(),
     baskingSurfaceC: fields.baskingSurfaceC,
     warmAirC: fields.warmAirC,
     coolAirC: fields.coolAirC,

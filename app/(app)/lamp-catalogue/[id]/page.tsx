@@ -54,7 +54,11 @@ export default async function LampTypePage({ params }: Props) {
             </section>
           )}
         </div>
-        <CautionList techs={[lampType.tech]} title="Safety with this lamp" />
+        <CautionList
+          techs={[lampType.tech]}
+          spectra={[{ name: lampType.name, uviPerUvb: lampType.uviPerUvb, uvbAt30: lampType.uvbAt30 }]}
+          title="Safety with this lamp"
+        />
       </div>
     </>
   );
