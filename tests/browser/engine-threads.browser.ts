@@ -5,6 +5,7 @@
 import { describe, expect, it } from 'vitest';
 import { DEMO_PASSWORDS, demoSignIn } from '@/lib/demo/scenario';
 import { benchDesign, heaviestAllowedDesign } from '@/simulation/testing/fixtures';
+import { expectNotStalled } from '../helpers/not-stalled';
 import { BASE_URL } from './harness';
 import { signInCookie } from './sign-in-cookie';
 
@@ -76,15 +77,7 @@ describe('engine threads in the production build', () => {
     const pdf = await running;
     expect(pdf.res.status).toBe(200);
     expect(pdf.res.headers.get('content-type')).toBe('application/pdf');
-    expect(during.length).toBeGreaterThanOrEqual(3);
-    // An export on the event loop would hold every health answer for its whole run (seconds, at least
-    // several samples in a row). On a machine busy with other work the client itself is sometimes late, so
-    // one answer in twenty may pass 200 ms, and none may pass a second.
-    const sorted = [...during].sort((a, b) => a - b);
-    const p95 = sorted[Math.ceil(sorted.length * 0.95) - 1];
-    const said = `health answered in ${during.map((ms) => Math.round(ms)).join(', ')} ms`;
-    expect(p95, said).toBeLessThan(200);
-    expect(sorted[sorted.length - 1], said).toBeLessThan(1000);
+    expectNotStalled(during);
 
     const share = await api(cookie, 'POST', `/api/variants/${variantId}/shares`, {});
     expect(share.res.status).toBe(201);
