@@ -73,6 +73,10 @@ const rows: Record<string, Row> = {
     // The outsider owns organisation 2, so they see it; staff and keeper of organisation 1 do not.
     expect: { owner: NONE, staff: NONE, keeper: NONE, outsider: ALL, nobody: NONE, anonymous: NONE },
   },
+  'the shop’s customers and counter tests': {
+    resource: { kind: 'customer', organisationId: ORG },
+    expect: { owner: ALL, staff: ALL, keeper: NONE, outsider: NONE, nobody: NONE, anonymous: NONE },
+  },
   'background jobs': {
     resource: { kind: 'jobs', organisationId: ORG },
     expect: { owner: READ_ONLY, staff: NONE, keeper: NONE, outsider: NONE, nobody: NONE, anonymous: NONE },

@@ -35,6 +35,11 @@ export type Resource =
   | { kind: 'mail'; organisationId: number }
   /** The background jobs page: recent runs, and this organisation's failed units and undelivered e-mail. */
   | { kind: 'jobs'; organisationId: number }
+  /**
+   * The shop's customers and the lamps it tested for them at the counter (with their readings). Personal
+   * data of people who are not members: the owner's and staff's alone.
+   */
+  | { kind: 'customer'; organisationId: number }
   /** A person's own account: password and sessions. No role, not even an owner's, reaches another's. */
   | { kind: 'account'; userId: number };
 
@@ -103,6 +108,9 @@ export function can(user: SessionUser | null | undefined, action: Action, resour
     case 'jobs':
       // Failures name members and their e-mail addresses and show delivery errors: the owner's to follow up.
       return action === 'read' && roleIn(user, resource.organisationId) === 'owner';
+    case 'customer':
+      // Keepers are customers themselves: they never see the shop's list of other people.
+      return isStaffOrOwner(roleIn(user, resource.organisationId));
     case 'account':
       return action !== 'create' && resource.userId === user.id;
   }

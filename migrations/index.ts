@@ -17,6 +17,7 @@ import * as m0015 from './0015-lamp-lifetime-table';
 import * as m0016 from './0016-lamp-reach-wording';
 import * as m0017 from './0017-starting-sheets-size-climbing';
 import * as m0018 from './0018-account-confirmation';
+import * as m0019 from './0019-customers-counter';
 
 export type Migration = {
   name: string;
@@ -47,4 +48,5 @@ export const migrations: Migration[] = [
   { name: '0016-lamp-reach-wording', ...m0016 },
   { name: '0017-starting-sheets-size-climbing', ...m0017 },
   { name: '0018-account-confirmation', ...m0018 },
+  { name: '0019-customers-counter', ...m0019 },
 ];

@@ -21,6 +21,8 @@ import { MailMessage } from './mail-message';
 import { Reading } from './reading';
 import { Upload } from './upload';
 import { JobRun, JobRunCount, JobUnit } from './job-run';
+import { Customer } from './customer';
+import { CounterLamp, CounterReading } from './counter-lamp';
 
 export { Enclosure, Invitation, Membership, Organisation, User };
 export { Design, ShareLink, Variant };
@@ -29,6 +31,7 @@ export { LINK_PURPOSES, type LinkPurpose };
 export { CatalogueSeeding, LampType, SpeciesSheet };
 export { Lamp, LampOutlook, LampReminder, MailMessage, Reading, Upload };
 export { JobRun, JobRunCount, JobUnit };
+export { Customer, CounterLamp, CounterReading };
 export { parseCounts, type JobCounts, type JobOutcome } from './job-run';
 export { ROLES, type Role } from './membership';
 
@@ -54,6 +57,9 @@ export function initModels(sequelize: Sequelize): void {
   CatalogueSeeding.register(sequelize);
   Lamp.register(sequelize);
   Reading.register(sequelize);
+  Customer.register(sequelize);
+  CounterLamp.register(sequelize);
+  CounterReading.register(sequelize);
   Upload.register(sequelize);
   MailMessage.register(sequelize);
   LampReminder.register(sequelize);
@@ -80,6 +86,14 @@ export function initModels(sequelize: Sequelize): void {
   SpeciesSheet.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });
   Organisation.hasMany(LampType, { foreignKey: 'organisationId', as: 'lampTypes' });
   LampType.belongsTo(Organisation, { foreignKey: 'organisationId', as: 'organisation' });
+  // Counter tests: a customer's lamps and their readings.
+  Customer.hasMany(CounterLamp, { foreignKey: 'customerId', as: 'counterLamps' });
+  CounterLamp.belongsTo(Customer, { foreignKey: 'customerId', as: 'customer' });
+  CounterLamp.belongsTo(LampType, { foreignKey: 'lampTypeId', as: 'lampType' });
+  CounterLamp.belongsTo(SpeciesSheet, { foreignKey: 'speciesSheetId', as: 'speciesSheet' });
+  CounterLamp.hasMany(CounterReading, { foreignKey: 'counterLampId', as: 'readings' });
+  CounterReading.belongsTo(CounterLamp, { foreignKey: 'counterLampId', as: 'lamp' });
+
   // Lamp log.
   Enclosure.hasMany(Lamp, { foreignKey: 'enclosureId', as: 'lamps' });
   Lamp.belongsTo(Enclosure, { foreignKey: 'enclosureId', as: 'enclosure' });

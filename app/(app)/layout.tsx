@@ -21,6 +21,9 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
       ? [{ href: '/keepers', label: 'Keepers' }]
       : []),
     { href: '/lamp-log', label: 'Lamp log' },
+    ...(can(user, 'read', { kind: 'customer', organisationId: orgId })
+      ? [{ href: '/customers', label: 'Customers' }]
+      : []),
     { href: '/species', label: 'Species' },
     { href: '/lamp-catalogue', label: 'Lamp catalogue' },
     ...(can(user, 'read', { kind: 'member', organisationId: orgId })

@@ -10,7 +10,17 @@ import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { getSequelize } from '@/lib/db';
 import { DEMO_HOUSEHOLD, DEMO_PASSWORDS, DEMO_SHOP, demoSignIn } from '@/lib/demo/scenario';
-import { Design, Enclosure, Lamp, LampType, Organisation, SpeciesSheet, User, Variant } from '@/models';
+import {
+  Customer,
+  Design,
+  Enclosure,
+  Lamp,
+  LampType,
+  Organisation,
+  SpeciesSheet,
+  User,
+  Variant,
+} from '@/models';
 import { BASE_URL } from './harness';
 import { pageRoutes } from './page-routes';
 import { signInCookie } from './sign-in-cookie';
@@ -42,6 +52,10 @@ async function shopThings() {
   const lamp = await Lamp.findOne({ where: { enclosureId: enclosure.id } });
   const species = (await SpeciesSheet.findOne({ where: { organisationId: shop.id } }))!;
   const lampType = (await LampType.findOne({ where: { organisationId: shop.id } }))!;
+  // One of the shop's customers (personal data: owners and staff only), made here when the demo has none.
+  const customer =
+    (await Customer.findOne({ where: { organisationId: shop.id } })) ??
+    (await Customer.create({ organisationId: shop.id, name: 'Page Access Customer', createdById: null }));
   const pages = [
     `/enclosures/${enclosure.id}`,
     `/enclosures/${enclosure.id}/lamps`,
@@ -50,8 +64,12 @@ async function shopThings() {
     ...(lamp ? [`/lamp-log/${lamp.id}`] : []),
     `/species/${species.id}/edit`,
     `/lamp-catalogue/${lampType.id}/edit`,
+    `/customers/${customer.id}`,
+    `/customers/${customer.id}/edit`,
   ];
-  const ofTheEnclosure = [ENCLOSURE, enclosure.animalName, lamp?.label].filter(Boolean) as string[];
+  const ofTheEnclosure = [ENCLOSURE, enclosure.animalName, lamp?.label, customer.name].filter(
+    Boolean,
+  ) as string[];
   // The catalogue is the organisation's: its members may read it, another organisation may not.
   const ofTheShop = [...ofTheEnclosure, species.commonName, lampType.name];
   // The id of one of the shop's things for each dynamic route's first segment.
@@ -62,6 +80,7 @@ async function shopThings() {
     'lamp-log': lamp?.id,
     species: species.id,
     'lamp-catalogue': lampType.id,
+    customers: customer.id,
   };
   return { owner, pages, ofTheEnclosure, ofTheShop, idOf };
 }
@@ -162,8 +181,15 @@ describe('pages check access themselves', () => {
     const keeper = DEMO_SHOP.people.find((p) => p.role === 'keeper')!;
     const cookie = await signInCookie(keeper.email, DEMO_PASSWORDS.keeper);
     const statuses = await Promise.all(
-      ['/keepers', '/members'].map(async (p) => `${p} → ${(await page(p, cookie)).status}`),
+      ['/keepers', '/members', '/customers', '/customers/new'].map(
+        async (p) => `${p} → ${(await page(p, cookie)).status}`,
+      ),
     );
-    expect(statuses).toEqual(['/keepers → 404', '/members → 404']);
+    expect(statuses).toEqual([
+      '/keepers → 404',
+      '/members → 404',
+      '/customers → 404',
+      '/customers/new → 404',
+    ]);
   });
 });

@@ -27,6 +27,7 @@ export function idFor(pattern: string, w: World): Record<string, string> {
     [/^\/api\/organisations\/\[id\]/, 'orgA'],
     [/^\/api\/invitations\/\[id\]/, 'invitation'],
     [/^\/api\/uploads\/\[id\]/, 'upload'],
+    [/^\/api\/customers\/\[id\]/, 'customer'],
   ];
   if (pattern.startsWith('/s/[token]')) return { token: 'A'.repeat(43), version: '1', file: 'uvi.svg' };
   for (const [re, key] of byPrefix) if (re.test(pattern)) return { id: String(w[key]) };
@@ -48,6 +49,12 @@ export const REQUESTS: Record<string, RequestSpec> = {
   },
   'DELETE /api/account/sessions': {},
   'PUT /api/current-organisation': { body: (w) => ({ organisationId: w.orgA }) },
+  'GET /api/customers/[id]': {},
+  'PATCH /api/customers/[id]': { body: () => ({ notes: 'Asked about a new tube.' }) },
+  'DELETE /api/customers/[id]': {},
+  // A search that finds the customer, so a leak would show its marker.
+  'GET /api/customers': { query: (w) => `organisationId=${w.orgA}&q=counter` },
+  'POST /api/customers': { body: (w) => ({ organisationId: w.orgA, name: 'Another customer' }) },
   'GET /api/designs/[id]': {},
   'PATCH /api/designs/[id]': { body: () => ({ name: 'Renamed plan' }) },
   'PUT /api/designs/[id]': { body: () => ({ name: 'Renamed plan' }) },

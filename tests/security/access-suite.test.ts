@@ -231,6 +231,10 @@ describe('every route handler refuses people who may not', () => {
           await fc.assert(
             fc.asyncProperty(target, async ([r, actor, id]) => {
               if (LEGITIMATE[keyOf(r)]?.who.includes(actor)) return;
+              // A "forged" id that reads as the outsider's own organisation is no forgery: theirs to see.
+              const asId = Number(id.trim());
+              if (actor === 'outsider' && r.pattern.startsWith('/api/organisations/') && asId === world.orgB)
+                return;
               const reply = await send(r, actor, { id });
               expect(
                 reply.status,
@@ -277,6 +281,7 @@ describe('every route handler refuses people who may not', () => {
     // Destructive ones last, children before parents, so each still finds its thing.
     const order = (r: RouteEntry) => (r.method === 'DELETE' ? 1 : 0);
     const deleteOrder = [
+      'customers',
       'readings',
       'shares',
       'uploads',

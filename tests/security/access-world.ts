@@ -4,6 +4,7 @@
 // that leaks them can be caught.
 import { PNG } from 'pngjs';
 import { QueryTypes } from 'sequelize';
+import * as customers from '@/app/api/customers/route';
 import * as enclosureDesigns from '@/app/api/enclosures/[id]/designs/route';
 import * as enclosureLamps from '@/app/api/enclosures/[id]/lamps/route';
 import * as invitations from '@/app/api/invitations/route';
@@ -36,6 +37,7 @@ export const MARK = {
   species: 'Zz shop skink',
   lampType: 'Zz shop tube',
   upload: 'zz-backdrop.png',
+  customer: 'Zz Counter Customer',
 } as const;
 
 export type World = {
@@ -56,6 +58,7 @@ export type World = {
   reading: number;
   invitation: number;
   upload: number;
+  customer: number;
 };
 
 /** A cookie for the user's current session version (a bumped version would refuse an older one). */
@@ -144,6 +147,18 @@ export async function buildWorld(): Promise<World> {
   must(invitation, 'invitation');
   const upload = await uploadPng(as, enclosure.id);
   must(upload, 'upload');
+  const customer = await call(customers.POST, {
+    method: 'POST',
+    path: '/api/customers',
+    cookie: as,
+    body: {
+      organisationId: a.id,
+      name: MARK.customer,
+      email: 'zz.customer@example.com',
+      reminderConsent: true,
+    },
+  });
+  must(customer, 'customer');
 
   return {
     orgA: a.id,
@@ -163,6 +178,7 @@ export async function buildWorld(): Promise<World> {
     reading: reading.body.reading?.id ?? reading.body.id,
     invitation: invitation.body.invitation?.id ?? invitation.body.id,
     upload: upload.body.upload.id,
+    customer: customer.body.customer.id,
   };
 }
 

@@ -1,0 +1,102 @@
+import type { Metadata } from 'next';
+import { notFound } from 'next/navigation';
+import Link from '@/components/ui/Link';
+import { DeleteCustomerButton } from '@/components/customers/DeleteCustomerButton';
+import { VERDICT_LABEL } from '@/components/customers/verdict-label';
+import { EmptyState } from '@/components/ui/EmptyState';
+import { LocalTime } from '@/components/ui/LocalTime';
+import { PageHeader } from '@/components/ui/PageHeader';
+import { button, card, link } from '@/components/ui/styles';
+import { parseId } from '@/lib/api/schemas';
+import { customerForPage } from '@/lib/customers/access';
+import { customerDto, lampsOfCustomer } from '@/lib/customers/queries';
+import { requireUser } from '@/lib/session';
+
+export const metadata: Metadata = { title: 'Customer' };
+
+type Props = { params: Promise<{ id: string }> };
+
+export default async function CustomerPage({ params }: Props) {
+  const { id: raw } = await params;
+  const user = await requireUser(`/customers/${raw}`);
+  const id = parseId(raw);
+  const row = id ? await customerForPage(user, id) : null;
+  if (!row) notFound();
+  const customer = customerDto(row);
+  const lamps = await lampsOfCustomer(customer.id);
+  return (
+    <>
+      <p className="mb-2 text-body">
+        <Link href="/customers" className={link}>
+          ← All customers
+        </Link>
+      </p>
+      <PageHeader
+        title={customer.name}
+        actions={
+          <>
+            <Link href={`/customers/${customer.id}/edit`} className={button.primary}>
+              Change
+            </Link>
+            <DeleteCustomerButton id={customer.id} name={customer.name} />
+          </>
+        }
+      />
+      <dl className={`${card} mb-6 grid gap-x-6 gap-y-2 p-4 text-body sm:grid-cols-[auto_1fr]`}>
+        <dt className="font-medium text-basalt-700">E-mail</dt>
+        <dd>{customer.email ?? '—'}</dd>
+        <dt className="font-medium text-basalt-700">Phone</dt>
+        <dd>{customer.phone ?? '—'}</dd>
+        <dt className="font-medium text-basalt-700">Reminder e-mails</dt>
+        <dd>
+          {customer.reminderConsentAt ? (
+            <>
+              Agreed on <LocalTime value={customer.reminderConsentAt} shown="day" />
+            </>
+          ) : customer.reminderConsentWithdrawnAt ? (
+            <>
+              No: withdrawn on <LocalTime value={customer.reminderConsentWithdrawnAt} shown="day" />
+            </>
+          ) : (
+            'No consent given'
+          )}
+        </dd>
+        {customer.notes && (
+          <>
+            <dt className="font-medium text-basalt-700">Notes</dt>
+            <dd className="whitespace-pre-line">{customer.notes}</dd>
+          </>
+        )}
+      </dl>
+      <h2 className="mb-2 text-lead font-semibold text-basalt-900">Lamps tested</h2>
+      {lamps.length === 0 ? (
+        <EmptyState title="No lamps tested yet">
+          <p>Lamps tested at the counter for this customer appear here with every reading.</p>
+        </EmptyState>
+      ) : (
+        <ul className={`${card} divide-y divide-basalt-100`} aria-label="Lamps tested">
+          {lamps.map((l) => (
+            <li key={l.id} className="flex flex-wrap items-baseline justify-between gap-2 px-4 py-3">
+              <span>
+                {l.label ?? l.lampTypeName}
+                <span className="ml-2 text-caption text-basalt-500">
+                  {l.label ? `${l.lampTypeName} · ` : ''}in use since {l.firstUsedEstimated ? 'about ' : ''}
+                  {l.firstUsedOn} · {l.tests} test{l.tests === 1 ? '' : 's'}
+                </span>
+              </span>
+              <span className="flex items-center gap-3 text-caption text-basalt-700">
+                {l.lastTest && (
+                  <span>
+                    <LocalTime value={l.lastTest.takenAt} shown="day" />:{' '}
+                    {VERDICT_LABEL[l.lastTest.verdict] ?? l.lastTest.verdict}
+                    {l.lastTest.testAgainOn ? ` (test again ${l.lastTest.testAgainOn})` : ''}
+                  </span>
+                )}
+              </span>
+            </li>
+          ))}
+        </ul>
+      )}
+    </>
+  );
+}

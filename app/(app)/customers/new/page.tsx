@@ -1,0 +1,26 @@
+import type { Metadata } from 'next';
+import { notFound } from 'next/navigation';
+import { CustomerForm } from '@/components/customers/CustomerForm';
+import { NewEntryPage } from '@/components/ui/NewEntryPage';
+import { mayUseCounter } from '@/lib/customers/access';
+import { currentMembership, requireUser } from '@/lib/session';
+
+export const metadata: Metadata = { title: 'New customer' };
+
+/** Keepers are customers themselves and never see the shop's customer pages: 404, as for the list. */
+export default async function NewCustomerPage() {
+  const user = await requireUser('/customers/new');
+  const membership = await currentMembership(user);
+  if (!membership || !mayUseCounter(user, membership.organisationId)) notFound();
+  return (
+    <NewEntryPage
+      back={{ href: '/customers', label: 'All customers' }}
+      title="New customer"
+      lead="A name is enough; e-mail and phone are optional. Reminder e-mails only with the customer's consent."
+      mayCreate
+      refusal={{ title: '', body: '' }}
+    >
+      <CustomerForm organisationId={membership.organisationId} customer={null} />
+    </NewEntryPage>
+  );
+}

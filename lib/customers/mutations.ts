@@ -1,0 +1,63 @@
+import 'server-only';
+import { badRequest } from '@/lib/api';
+import { getSequelize } from '@/lib/db';
+import { CounterLamp, Customer } from '@/models';
+import type { CustomerInput, CustomerPatch } from './schemas';
+
+/** Writes of the shop's customers. Callers check access first (access.ts). */
+
+export async function createCustomer(
+  input: CustomerInput,
+  userId: number,
+  now = new Date(),
+): Promise<Customer> {
+  getSequelize();
+  return Customer.create({
+    organisationId: input.organisationId,
+    name: input.name,
+    email: input.email,
+    phone: input.phone,
+    notes: input.notes,
+    reminderConsentAt: input.reminderConsent ? now : null,
+    createdById: userId,
+  });
+}
+
+/**
+ * Changes what the patch names. Consent keeps its first date while it stands; withdrawing it records
+ * when, and giving it again starts a new date. An e-mail address cannot be removed while consent stands.
+ */
+export async function updateCustomer(customer: Customer, patch: CustomerPatch, now = new Date()) {
+  const { reminderConsent, ...fields } = patch;
+  const next: Partial<Customer> = { ...fields };
+  if (reminderConsent === true && !customer.reminderConsentAt) next.reminderConsentAt = now;
+  if (reminderConsent === false && customer.reminderConsentAt) {
+    next.reminderConsentAt = null;
+    next.reminderConsentWithdrawnAt = now;
+  }
+  const email = 'email' in next ? next.email : customer.email;
+  const consent = 'reminderConsentAt' in next ? next.reminderConsentAt : customer.reminderConsentAt;
+  if (consent && !email) throw badRequest('email', 'Reminder e-mails need an e-mail address.');
+  return customer.update(next);
+}
+
+/** Withdraws consent to reminder e-mails (the unsubscribe link, or the customer asking). */
+export async function withdrawConsent(customer: Customer, now = new Date()) {
+  if (!customer.reminderConsentAt) return customer;
+  return customer.update({ reminderConsentAt: null, reminderConsentWithdrawnAt: now });
+}
+
+/**
+ * Deletes the person: their row (name, e-mail, phone, notes, consent) goes. Their lamps and readings stay
+ * for the shop's own decay curves, without the customer and without the lamp's free-text label (which
+ * could name them).
+ */
+export async function deleteCustomer(customer: Customer): Promise<void> {
+  await getSequelize().transaction(async (transaction) => {
+    await CounterLamp.update(
+      { customerId: null, label: null },
+      { where: { customerId: customer.id }, transaction },
+    );
+    await customer.destroy({ transaction });
+  });
+}
