@@ -1,12 +1,13 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import Link from '@/components/ui/Link';
+import { Breadcrumbs } from '@/components/ui/Breadcrumbs';
 import { DeleteCustomerButton } from '@/components/customers/DeleteCustomerButton';
 import { VERDICT_LABEL } from '@/components/customers/verdict-label';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { LocalTime } from '@/components/ui/LocalTime';
 import { PageHeader } from '@/components/ui/PageHeader';
-import { button, card, link } from '@/components/ui/styles';
+import { button, card } from '@/components/ui/styles';
 import { parseId } from '@/lib/api/schemas';
 import { customerForPage } from '@/lib/customers/access';
 import { customerDto, lampsOfCustomer } from '@/lib/customers/queries';
@@ -26,11 +27,7 @@ export default async function CustomerPage({ params }: Props) {
   const lamps = await lampsOfCustomer(customer.id);
   return (
     <>
-      <p className="mb-2 text-body">
-        <Link href="/customers" className={link}>
-          ← All customers
-        </Link>
-      </p>
+      <Breadcrumbs trail={[{ href: '/customers', label: 'All customers' }]} />
       <PageHeader
         title={customer.name}
         actions={

@@ -1,9 +1,9 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
-import Link from '@/components/ui/Link';
+import { Breadcrumbs } from '@/components/ui/Breadcrumbs';
 import { CustomerForm } from '@/components/customers/CustomerForm';
 import { PageHeader } from '@/components/ui/PageHeader';
-import { link } from '@/components/ui/styles';
+
 import { parseId } from '@/lib/api/schemas';
 import { customerForPage } from '@/lib/customers/access';
 import { customerDto } from '@/lib/customers/queries';
@@ -22,11 +22,7 @@ export default async function EditCustomerPage({ params }: Props) {
   const dto = customerDto(customer);
   return (
     <>
-      <p className="mb-2 text-body">
-        <Link href={`/customers/${dto.id}`} className={link}>
-          ← {dto.name}
-        </Link>
-      </p>
+      <Breadcrumbs trail={[{ href: `/customers/${dto.id}`, label: dto.name }]} />
       <PageHeader title={`Change ${dto.name}`} />
       <CustomerForm organisationId={dto.organisationId} customer={dto} />
     </>
