@@ -1,10 +1,10 @@
 'use client';
 
 import { LocalTime } from '@/components/ui/LocalTime';
-import { type ColumnDef, flexRender, getCoreRowModel, useReactTable } from '@tanstack/react-table';
 import Link from '@/components/ui/Link';
 import { useMemo } from 'react';
-import { ListLoadError, ListPager, ListSearchBox, SortableHeader } from '@/components/ui/ServerListParts';
+import { ListLoadError, ListPager, ListSearchBox } from '@/components/ui/ServerListParts';
+import { Table, type TableColumn } from '@/components/ui/Table';
 import { button, link } from '@/components/ui/styles';
 import { formatSize, type LengthUnit } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
@@ -21,12 +21,13 @@ import { type EnclosurePage, useEnclosureList } from './useEnclosureList';
 
 const cell = 'px-4 py-3 text-basalt-700';
 
-type Column = ColumnDef<EnclosureView> & { id: EnclosureSortColumn };
+type Column = TableColumn<EnclosureView> & { id: EnclosureSortColumn };
 
-function columnsFor(showKeeper: boolean, unit: LengthUnit): Column[] {
-  const columns: (Column | false)[] = [
+function columnsFor(showKeeper: boolean, unit: LengthUnit): (Column | false)[] {
+  return [
     {
       id: 'name',
+      className: cell,
       header: 'Enclosure',
       cell: ({ row: { original: e } }) => (
         <Link href={`/enclosures/${e.id}`} className={link}>
@@ -36,6 +37,7 @@ function columnsFor(showKeeper: boolean, unit: LengthUnit): Column[] {
     },
     {
       id: 'animal',
+      className: cell,
       header: 'Animal',
       cell: ({ row: { original: e } }) =>
         e.animalName || e.speciesName ? (
@@ -50,11 +52,13 @@ function columnsFor(showKeeper: boolean, unit: LengthUnit): Column[] {
     },
     showKeeper && {
       id: 'keeper',
+      className: cell,
       header: 'Keeper',
       cell: ({ row: { original: e } }) => e.keeperName ?? 'Former member',
     },
     {
       id: 'size',
+      className: cell,
       header: 'Size (W × H × D)',
       cell: ({ row: { original: e } }) => (
         <span className="whitespace-nowrap tabular-nums">
@@ -64,13 +68,13 @@ function columnsFor(showKeeper: boolean, unit: LengthUnit): Column[] {
     },
     {
       id: 'updated',
+      className: cell,
       header: 'Updated',
       cell: ({ row: { original: e } }) => (
         <LocalTime value={e.updatedAt} shown="day" className="whitespace-nowrap text-basalt-500" />
       ),
     },
   ];
-  return columns.filter((c): c is Column => Boolean(c));
 }
 
 /**
@@ -96,7 +100,6 @@ export function EnclosureTable({
     initial,
   });
   const columns = useMemo(() => columnsFor(showKeeper, unit), [showKeeper, unit]);
-  const sorting = useMemo(() => [{ id: view.sort.column, desc: view.sort.descending }], [view.sort]);
   const data = result.data;
   const items = useMemo(() => data?.items ?? [], [data]);
   const total = data?.total ?? 0;
@@ -104,20 +107,6 @@ export function EnclosureTable({
   // Rows of the previous view stay up while the next loads (or failed to): dimmed, and not counted.
   const stale = result.isPlaceholderData || !data;
   const busy = result.isFetching && stale;
-  // The React Compiler skips this component because the table instance cannot be memoised; nothing
-  // memoised receives the instance, so the known warning is silenced here and nowhere else.
-  // eslint-disable-next-line react-hooks/incompatible-library
-  const table = useReactTable({
-    data: items,
-    columns,
-    state: { sorting, pagination: { pageIndex: view.page - 1, pageSize: ENCLOSURE_PAGE_SIZE } },
-    manualSorting: true,
-    manualFiltering: true,
-    manualPagination: true,
-    rowCount: total,
-    getCoreRowModel: getCoreRowModel(),
-  });
-  const rows = table.getRowModel().rows;
 
   return (
     <div>
@@ -143,40 +132,15 @@ export function EnclosureTable({
       {result.isError && (
         <ListLoadError what="enclosures" message={result.error.message} retry={() => void result.refetch()} />
       )}
-      <div className="overflow-x-auto rounded-lg border border-basalt-200 bg-white">
-        <table
-          className={`min-w-full divide-y divide-basalt-200 text-left text-body ${stale ? 'opacity-60' : ''}`}
-          aria-busy={busy}
-        >
-          <caption className="sr-only">Enclosures</caption>
-          <thead className="bg-basalt-50 text-caption uppercase tracking-wide text-basalt-600">
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => (
-                  <SortableHeader
-                    key={header.id}
-                    column={header.column.id as EnclosureSortColumn}
-                    sort={view.sort}
-                    onSort={(column) => show({ sort: nextSort(view.sort, column), page: 1 })}
-                  >
-                    {flexRender(header.column.columnDef.header, header.getContext())}
-                  </SortableHeader>
-                ))}
-              </tr>
-            ))}
-          </thead>
-          <tbody className="divide-y divide-basalt-100">
-            {rows.map((row) => (
-              <tr key={row.original.id} className="hover:bg-basalt-50">
-                {row.getVisibleCells().map((c) => (
-                  <td key={c.id} className={cell}>
-                    {flexRender(c.column.columnDef.cell, c.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
+      <Table
+        data={items}
+        columns={columns}
+        caption="Enclosures"
+        rowKey={(e) => e.id}
+        sort={{ sort: view.sort, onSort: (column) => show({ sort: nextSort(view.sort, column), page: 1 }) }}
+        stale={stale}
+        busy={busy}
+      >
         {!stale && total === 0 && (
           <div className="px-4 py-6 text-center text-body text-basalt-600" role="status">
             {view.q ? (
@@ -191,7 +155,7 @@ export function EnclosureTable({
             )}
           </div>
         )}
-      </div>
+      </Table>
       <ListPager
         page={view.page}
         pageSize={ENCLOSURE_PAGE_SIZE}

@@ -1,9 +1,9 @@
 'use client';
 
-import { type ColumnDef, flexRender, getCoreRowModel, useReactTable } from '@tanstack/react-table';
 import { useMemo } from 'react';
 import { Select } from '@/components/ui/Select';
-import { ListLoadError, ListPager, ListSearchBox, SortableHeader } from '@/components/ui/ServerListParts';
+import { ListLoadError, ListPager, ListSearchBox } from '@/components/ui/ServerListParts';
+import { Table } from '@/components/ui/Table';
 import { button } from '@/components/ui/styles';
 import { useLengthUnit } from '@/components/ui/units';
 import { useServerList } from '@/components/ui/useServerList';
@@ -14,65 +14,9 @@ import {
   lampListView,
   MAX_LAMP_SEARCH,
   type LampListView,
-  type LampSortColumn,
 } from '@/lib/lamp-log/list-view';
 import { STATUS_LABEL, STATUSES } from '@/lib/lamp-log/status';
-import type { LampSummary } from '@/lib/lamp-log/store';
-import type { LengthUnit } from '@/shared/units';
-import {
-  AgeCell,
-  EnclosureCell,
-  FallsBelowCell,
-  LAMP_CELL,
-  LampCell,
-  LastReadingCell,
-  RemainingCell,
-  StatusCell,
-} from './LampTable';
-
-type Column = ColumnDef<LampSummary> & { id: LampSortColumn; className: string };
-
-function columnsFor(unit: LengthUnit): Column[] {
-  return [
-    { id: 'lamp', header: 'Lamp', className: 'px-4 py-3', cell: ({ row }) => <LampCell l={row.original} /> },
-    {
-      id: 'enclosure',
-      header: 'Enclosure',
-      className: 'px-4 py-3',
-      cell: ({ row }) => <EnclosureCell l={row.original} />,
-    },
-    {
-      id: 'age',
-      header: 'Age',
-      className: LAMP_CELL.figure,
-      cell: ({ row }) => <AgeCell l={row.original} />,
-    },
-    {
-      id: 'lastReading',
-      header: 'Last reading',
-      className: LAMP_CELL.figure,
-      cell: ({ row }) => <LastReadingCell l={row.original} unit={unit} />,
-    },
-    {
-      id: 'remaining',
-      header: 'Output left',
-      className: LAMP_CELL.figure,
-      cell: ({ row }) => <RemainingCell l={row.original} />,
-    },
-    {
-      id: 'due',
-      header: 'Basking zone below need',
-      className: LAMP_CELL.text,
-      cell: ({ row }) => <FallsBelowCell l={row.original} />,
-    },
-    {
-      id: 'urgency',
-      header: 'Status',
-      className: 'px-4 py-3',
-      cell: ({ row }) => <StatusCell l={row.original} />,
-    },
-  ];
-}
+import { lampColumns } from './LampTable';
 
 export type PersonOption = { id: number; name: string };
 export type TechOption = { id: string; label: string };
@@ -100,8 +44,7 @@ export function LampLogTable({
     scope: { organisationId },
     initial,
   });
-  const columns = useMemo(() => columnsFor(unit), [unit]);
-  const sorting = useMemo(() => [{ id: view.sort.column, desc: view.sort.descending }], [view.sort]);
+  const columns = useMemo(() => lampColumns(unit, true), [unit]);
   const data = result.data;
   const items = useMemo(() => data?.items ?? [], [data]);
   const total = data?.total ?? 0;
@@ -116,18 +59,6 @@ export function LampLogTable({
     else delete next[key];
     show({ filters: next, page: 1 });
   };
-  // See EnclosureTable: the table instance cannot be memoised by the React Compiler.
-  // eslint-disable-next-line react-hooks/incompatible-library
-  const table = useReactTable({
-    data: items,
-    columns,
-    state: { sorting, pagination: { pageIndex: view.page - 1, pageSize: LAMP_PAGE_SIZE } },
-    manualSorting: true,
-    manualFiltering: true,
-    manualPagination: true,
-    rowCount: total,
-    getCoreRowModel: getCoreRowModel(),
-  });
 
   return (
     <div>
@@ -219,41 +150,20 @@ export function LampLogTable({
       {result.isError && (
         <ListLoadError what="lamps" message={result.error.message} retry={() => void result.refetch()} />
       )}
-      <div className="overflow-x-auto rounded-lg border border-basalt-200 bg-white">
-        <table
-          className={`min-w-full divide-y divide-basalt-200 text-left text-body ${stale ? 'opacity-60' : ''}`}
-          aria-busy={busy}
-          data-testid="lamp-table"
-        >
-          <caption className="sr-only">Lamps</caption>
-          <thead className="bg-basalt-50 text-caption uppercase tracking-wide text-basalt-600">
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => (
-                  <SortableHeader
-                    key={header.id}
-                    column={header.column.id as LampSortColumn}
-                    sort={view.sort}
-                    onSort={(column) => show({ sort: lampListView.nextSort(view.sort, column), page: 1 })}
-                  >
-                    {flexRender(header.column.columnDef.header, header.getContext())}
-                  </SortableHeader>
-                ))}
-              </tr>
-            ))}
-          </thead>
-          <tbody className="divide-y divide-basalt-100">
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.original.id} className="align-top hover:bg-basalt-50">
-                {row.getVisibleCells().map((c) => (
-                  <td key={c.id} className={(c.column.columnDef as Column).className}>
-                    {flexRender(c.column.columnDef.cell, c.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
+      <Table
+        data={items}
+        columns={columns}
+        caption="Lamps"
+        rowKey={(l) => l.id}
+        sort={{
+          sort: view.sort,
+          onSort: (column) => show({ sort: lampListView.nextSort(view.sort, column), page: 1 }),
+        }}
+        stale={stale}
+        busy={busy}
+        rowClassName="align-top hover:bg-basalt-50"
+        testId="lamp-table"
+      >
         {!stale && total === 0 && (
           <div className="px-4 py-6 text-center text-body text-basalt-600" role="status">
             <p>{view.q ? `No lamp matches “${view.q}” here.` : 'No lamp matches these filters.'}</p>
@@ -269,7 +179,7 @@ export function LampLogTable({
             </button>
           </div>
         )}
-      </div>
+      </Table>
       <ListPager
         page={view.page}
         pageSize={LAMP_PAGE_SIZE}

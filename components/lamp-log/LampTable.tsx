@@ -9,6 +9,8 @@ import type { LampSummary } from '@/lib/lamp-log/store';
 import { STATUS_RANK } from '@/lib/lamp-log/status';
 import { formatAge, formatDay, formatValue } from './format';
 import { StatusBadge } from './StatusBadge';
+import { Table, type TableColumn } from '@/components/ui/Table';
+import type { LampSortColumn } from '@/lib/lamp-log/list-view';
 
 type Row = LampSummary;
 
@@ -101,6 +103,47 @@ export const LAMP_CELL = {
   figure: 'whitespace-nowrap px-4 py-3 tabular-nums text-basalt-700',
 };
 
+/** The lamp columns the lamp log and an enclosure's lamp page share; ids are the lamp log's sort keys. */
+export function lampColumns(
+  unit: LengthUnit,
+  showEnclosure: boolean,
+): ((TableColumn<Row> & { id: LampSortColumn }) | false)[] {
+  return [
+    { id: 'lamp', header: 'Lamp', cell: ({ row }) => <LampCell l={row.original} /> },
+    showEnclosure && {
+      id: 'enclosure',
+      header: 'Enclosure',
+      cell: ({ row }) => <EnclosureCell l={row.original} />,
+    },
+    {
+      id: 'age',
+      header: 'Age',
+      className: LAMP_CELL.figure,
+      cell: ({ row }) => <AgeCell l={row.original} />,
+    },
+    {
+      id: 'lastReading',
+      header: 'Last reading',
+      className: LAMP_CELL.figure,
+      cell: ({ row }) => <LastReadingCell l={row.original} unit={unit} />,
+    },
+    {
+      id: 'remaining',
+      header: 'Output left',
+      title: 'Fitted output today as a share of the output when new',
+      className: LAMP_CELL.figure,
+      cell: ({ row }) => <RemainingCell l={row.original} />,
+    },
+    {
+      id: 'due',
+      header: 'Basking zone below need',
+      className: LAMP_CELL.text,
+      cell: ({ row }) => <FallsBelowCell l={row.original} />,
+    },
+    { id: 'urgency', header: 'Status', cell: ({ row }) => <StatusCell l={row.original} /> },
+  ];
+}
+
 /**
  * The lamp log table: one row per lamp with its age, last reading, fitted remaining output, the date the
  * basking zone falls below the species' need (or what is missing to say), and its status.
@@ -111,70 +154,13 @@ export function LampTable({ lamps, showEnclosure }: { lamps: LampSummary[]; show
     (a, b) => STATUS_RANK[a.status] - STATUS_RANK[b.status] || a.label.localeCompare(b.label),
   );
   return (
-    <div className="overflow-x-auto rounded-lg border border-basalt-200 bg-white">
-      <table className="min-w-full divide-y divide-basalt-200 text-left text-body" data-testid="lamp-table">
-        <caption className="sr-only">Lamps, most urgent first</caption>
-        <thead className="bg-basalt-50 text-caption uppercase tracking-wide text-basalt-600">
-          <tr>
-            <th scope="col" className="px-4 py-2 font-semibold">
-              Lamp
-            </th>
-            {showEnclosure && (
-              <th scope="col" className="px-4 py-2 font-semibold">
-                Enclosure
-              </th>
-            )}
-            <th scope="col" className="px-4 py-2 font-semibold">
-              Age
-            </th>
-            <th scope="col" className="px-4 py-2 font-semibold">
-              Last reading
-            </th>
-            <th
-              scope="col"
-              className="px-4 py-2 font-semibold"
-              title="Fitted output today as a share of the output when new"
-            >
-              Output left
-            </th>
-            <th scope="col" className="px-4 py-2 font-semibold">
-              Basking zone below need
-            </th>
-            <th scope="col" className="px-4 py-2 font-semibold">
-              Status
-            </th>
-          </tr>
-        </thead>
-        <tbody className="divide-y divide-basalt-100">
-          {rows.map((l) => (
-            <tr key={l.id} className="align-top hover:bg-basalt-50">
-              <td className="px-4 py-3">
-                <LampCell l={l} />
-              </td>
-              {showEnclosure && (
-                <td className="px-4 py-3">
-                  <EnclosureCell l={l} />
-                </td>
-              )}
-              <td className={LAMP_CELL.figure}>
-                <AgeCell l={l} />
-              </td>
-              <td className={LAMP_CELL.figure}>
-                <LastReadingCell l={l} unit={unit} />
-              </td>
-              <td className={LAMP_CELL.figure}>
-                <RemainingCell l={l} />
-              </td>
-              <td className={LAMP_CELL.text}>
-                <FallsBelowCell l={l} />
-              </td>
-              <td className="px-4 py-3">
-                <StatusCell l={l} />
-              </td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <Table
+      data={rows}
+      columns={lampColumns(unit, showEnclosure)}
+      caption="Lamps, most urgent first"
+      rowKey={(l) => l.id}
+      rowClassName="align-top hover:bg-basalt-50"
+      testId="lamp-table"
+    />
   );
 }

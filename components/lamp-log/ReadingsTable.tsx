@@ -13,6 +13,7 @@ import type { LampDetail } from '@/lib/lamp-log/store';
 import { THROUGH_SHORT } from '@/shared/reading-setup';
 import { formatValue } from './format';
 import { ReadingSetupEdit } from './ReadingSetupEdit';
+import { Table, type TableColumn } from '@/components/ui/Table';
 
 type Reading = LampDetail['readings'][number];
 
@@ -81,6 +82,75 @@ export function ReadingsTable({ readings, canEdit }: { readings: Reading[]; canE
     }
   }
 
+  const columns: (TableColumn<Reading> | false)[] = [
+    {
+      id: 'taken',
+      header: 'Taken',
+      headerClassName: 'px-3 py-2',
+      className: 'px-3 py-2 text-basalt-700',
+      cell: ({ row: { original: r } }) => (
+        <time dateTime={r.takenAt}>
+          <span className="block whitespace-nowrap">{day(r.takenAt)}</span>
+          <span className="block whitespace-nowrap text-caption text-basalt-500">{time(r.takenAt)}</span>
+        </time>
+      ),
+    },
+    {
+      id: 'reading',
+      header: 'Reading',
+      headerClassName: 'px-3 py-2',
+      className: 'px-3 py-2',
+      cell: ({ row: { original: r } }) => (
+        <>
+          <span className="block whitespace-nowrap font-medium tabular-nums">
+            {formatValue(r.value, r.unit)}
+          </span>
+          <span className="block whitespace-nowrap text-caption tabular-nums text-basalt-500">
+            at {formatLengthRounded(r.distanceCm, unit)}
+          </span>
+          <span className="block text-caption text-basalt-500" data-testid="reading-setup">
+            {setupText(r)}
+          </span>
+          {canEdit && <ReadingSetupEdit reading={r} label={`the reading of ${when(r.takenAt)}`} />}
+        </>
+      ),
+    },
+    {
+      id: 'meter',
+      header: 'Meter and note',
+      headerClassName: 'px-3 py-2',
+      className: 'px-3 py-2 text-basalt-600',
+      cell: ({ row: { original: r } }) => (
+        <>
+          <span className="block">{r.meter ?? '—'}</span>
+          {(r.note || r.uploadId) && (
+            <span className="block text-caption text-basalt-500">
+              {r.note ?? ''}
+              {r.uploadId && <span className={r.note ? 'ml-1' : undefined}>(imported)</span>}
+            </span>
+          )}
+        </>
+      ),
+    },
+    canEdit && {
+      id: 'actions',
+      header: () => <span className="sr-only">Actions</span>,
+      headerClassName: 'w-10 px-1 py-2',
+      className: 'px-1 py-1.5 text-right',
+      cell: ({ row: { original: r } }) => (
+        <button
+          type="button"
+          className={`${button.quietDanger} p-1.5`}
+          onClick={() => remove(r)}
+          aria-label={`Delete the reading of ${when(r.takenAt)}`}
+          title="Delete this reading"
+        >
+          <TrashIcon />
+        </button>
+      ),
+    },
+  ];
+
   if (rows.length === 0 && !deleted) {
     return (
       <p className="text-body text-basalt-500">
@@ -102,77 +172,17 @@ export function ReadingsTable({ readings, canEdit }: { readings: Reading[]; canE
       {/* Four compact columns, so the table fits its half of the page at laptop width (1280 px)
           without a sideways scroll: date over time, value over distance, meter over note, and
           the delete action as a small labelled icon button. */}
-      <div className="max-h-96 overflow-y-auto rounded-lg border border-basalt-200 bg-white">
-        <table className="w-full divide-y divide-basalt-200 text-left text-body" data-testid="readings-table">
-          <caption className="sr-only">Readings, newest first</caption>
-          <thead className="sticky top-0 bg-basalt-50 text-caption uppercase tracking-wide text-basalt-600">
-            <tr>
-              <th scope="col" className="px-3 py-2">
-                Taken
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Reading
-              </th>
-              <th scope="col" className="px-3 py-2">
-                Meter and note
-              </th>
-              {canEdit && (
-                <th scope="col" className="w-10 px-1 py-2">
-                  <span className="sr-only">Actions</span>
-                </th>
-              )}
-            </tr>
-          </thead>
-          <tbody className="divide-y divide-basalt-100">
-            {rows.map((r) => (
-              <tr key={r.id} className="align-top">
-                <td className="px-3 py-2 text-basalt-700">
-                  <time dateTime={r.takenAt}>
-                    <span className="block whitespace-nowrap">{day(r.takenAt)}</span>
-                    <span className="block whitespace-nowrap text-caption text-basalt-500">
-                      {time(r.takenAt)}
-                    </span>
-                  </time>
-                </td>
-                <td className="px-3 py-2">
-                  <span className="block whitespace-nowrap font-medium tabular-nums">
-                    {formatValue(r.value, r.unit)}
-                  </span>
-                  <span className="block whitespace-nowrap text-caption tabular-nums text-basalt-500">
-                    at {formatLengthRounded(r.distanceCm, unit)}
-                  </span>
-                  <span className="block text-caption text-basalt-500" data-testid="reading-setup">
-                    {setupText(r)}
-                  </span>
-                  {canEdit && <ReadingSetupEdit reading={r} label={`the reading of ${when(r.takenAt)}`} />}
-                </td>
-                <td className="px-3 py-2 text-basalt-600">
-                  <span className="block">{r.meter ?? '—'}</span>
-                  {(r.note || r.uploadId) && (
-                    <span className="block text-caption text-basalt-500">
-                      {r.note ?? ''}
-                      {r.uploadId && <span className={r.note ? 'ml-1' : undefined}>(imported)</span>}
-                    </span>
-                  )}
-                </td>
-                {canEdit && (
-                  <td className="px-1 py-1.5 text-right">
-                    <button
-                      type="button"
-                      className={`${button.quietDanger} p-1.5`}
-                      onClick={() => remove(r)}
-                      aria-label={`Delete the reading of ${when(r.takenAt)}`}
-                      title="Delete this reading"
-                    >
-                      <TrashIcon />
-                    </button>
-                  </td>
-                )}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <Table
+        data={rows}
+        columns={columns}
+        caption="Readings, newest first"
+        rowKey={(r) => r.id}
+        stickyHead
+        fullWidth
+        frameClassName="max-h-96 overflow-y-auto rounded-lg border border-basalt-200 bg-white"
+        rowClassName="align-top"
+        testId="readings-table"
+      />
     </div>
   );
 }

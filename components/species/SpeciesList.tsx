@@ -4,17 +4,77 @@ import Link from '@/components/ui/Link';
 import { useMemo, useState } from 'react';
 import { input, link } from '@/components/ui/styles';
 import type { SpeciesSheetDto } from '@/lib/species/schema';
+import type { TempUnit } from '@/shared/units';
 import { formatRange, formatTempRange } from './format';
 import { ProvenanceBadge } from './ProvenanceNote';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { useTempUnit } from '@/components/ui/units';
 import { zoneBaskingUvi } from '@/lib/species/consistency';
 import type { UvZone } from '@/simulation';
+import { Table, type TableColumn } from '@/components/ui/Table';
 
 /** A sheet's zone with the UV Index its basking spot is judged by. */
 function zoneCell(zone: number): string {
   const r = zoneBaskingUvi(zone as UvZone);
   return `Zone ${zone}: UVI ${r.min}–${r.max}`;
+}
+
+const cell = 'px-4 py-2';
+const figure = 'px-4 py-2 tabular-nums';
+const head = 'px-4 py-2';
+
+function columnsFor(unit: TempUnit): TableColumn<SpeciesSheetDto>[] {
+  return [
+    {
+      id: 'species',
+      header: 'Species',
+      headerClassName: head,
+      className: cell,
+      cell: ({ row: { original: s } }) => (
+        <>
+          <Link href={`/species/${s.id}`} className={link}>
+            {s.commonName}
+          </Link>
+          <div className="text-caption italic text-basalt-600">{s.scientificName}</div>
+        </>
+      ),
+    },
+    {
+      id: 'uvZone',
+      header: 'UV Index target',
+      headerClassName: head,
+      className: figure,
+      cell: ({ row }) => zoneCell(row.original.uvZone),
+    },
+    {
+      id: 'basking',
+      header: 'Basking surface',
+      headerClassName: head,
+      className: figure,
+      cell: ({ row }) => formatTempRange(row.original.baskingSurfaceC, unit),
+    },
+    {
+      id: 'coolAir',
+      header: 'Cool side air',
+      headerClassName: head,
+      className: figure,
+      cell: ({ row }) => formatTempRange(row.original.coolAirC, unit),
+    },
+    {
+      id: 'uvbTarget',
+      header: 'Rule of thumb (µW/cm²)',
+      headerClassName: head,
+      className: figure,
+      cell: ({ row }) => formatRange(row.original.uvbTargetUw, '', 0).trim(),
+    },
+    {
+      id: 'figures',
+      header: 'Figures',
+      headerClassName: head,
+      className: cell,
+      cell: ({ row }) => <ProvenanceBadge sources={row.original.sources} />,
+    },
+  ];
 }
 
 /** The organisation's species sheets: search by either name, temperatures in the chosen unit. */
@@ -26,6 +86,8 @@ export function SpeciesList({ sheets }: { sheets: SpeciesSheetDto[] }) {
     if (!needle) return sheets;
     return sheets.filter((s) => `${s.commonName} ${s.scientificName}`.toLowerCase().includes(needle));
   }, [q, sheets]);
+
+  const columns = useMemo(() => columnsFor(unit), [unit]);
 
   return (
     <div>
@@ -50,51 +112,7 @@ export function SpeciesList({ sheets }: { sheets: SpeciesSheetDto[] }) {
           No sheet matches “{q}”.
         </p>
       ) : (
-        <div className="overflow-x-auto rounded-lg border border-basalt-200 bg-white">
-          <table className="min-w-full text-left text-body">
-            <thead className="bg-basalt-50 text-caption uppercase tracking-wide text-basalt-600">
-              <tr>
-                <th scope="col" className="px-4 py-2">
-                  Species
-                </th>
-                <th scope="col" className="px-4 py-2">
-                  UV Index target
-                </th>
-                <th scope="col" className="px-4 py-2">
-                  Basking surface
-                </th>
-                <th scope="col" className="px-4 py-2">
-                  Cool side air
-                </th>
-                <th scope="col" className="px-4 py-2">
-                  Rule of thumb (µW/cm²)
-                </th>
-                <th scope="col" className="px-4 py-2">
-                  Figures
-                </th>
-              </tr>
-            </thead>
-            <tbody className="divide-y divide-basalt-100">
-              {shown.map((s) => (
-                <tr key={s.id} className="hover:bg-basalt-50">
-                  <td className="px-4 py-2">
-                    <Link href={`/species/${s.id}`} className={link}>
-                      {s.commonName}
-                    </Link>
-                    <div className="text-caption italic text-basalt-600">{s.scientificName}</div>
-                  </td>
-                  <td className="px-4 py-2 tabular-nums">{zoneCell(s.uvZone)}</td>
-                  <td className="px-4 py-2 tabular-nums">{formatTempRange(s.baskingSurfaceC, unit)}</td>
-                  <td className="px-4 py-2 tabular-nums">{formatTempRange(s.coolAirC, unit)}</td>
-                  <td className="px-4 py-2 tabular-nums">{formatRange(s.uvbTargetUw, '', 0).trim()}</td>
-                  <td className="px-4 py-2">
-                    <ProvenanceBadge sources={s.sources} />
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <Table data={shown} columns={columns} caption="Species sheets" rowKey={(s) => s.id} />
       )}
     </div>
   );

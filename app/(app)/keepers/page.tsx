@@ -1,11 +1,11 @@
 import type { Metadata } from 'next';
-import Link from '@/components/ui/Link';
 import { notFound } from 'next/navigation';
+import { KeepersTable } from '@/components/people/KeepersTable';
 import { InviteForm } from '@/components/people/InviteForm';
 import { PendingInvitations } from '@/components/people/PendingInvitations';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { PageHeader } from '@/components/ui/PageHeader';
-import { card, link } from '@/components/ui/styles';
+import { card } from '@/components/ui/styles';
 import { keeperViews, pendingInvitationViews } from '@/lib/api/views';
 import { can } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
@@ -38,41 +38,7 @@ export default async function KeepersPage() {
           </p>
         </EmptyState>
       ) : (
-        <div className="overflow-x-auto rounded-lg border border-basalt-200 bg-white">
-          <table className="min-w-full divide-y divide-basalt-200 text-left text-body">
-            <caption className="sr-only">Keepers</caption>
-            <thead className="bg-basalt-50 text-caption uppercase tracking-wide text-basalt-600">
-              <tr>
-                <th scope="col" className="px-4 py-2 font-semibold">
-                  Name
-                </th>
-                <th scope="col" className="px-4 py-2 font-semibold">
-                  Email
-                </th>
-                <th scope="col" className="px-4 py-2 font-semibold">
-                  Enclosures
-                </th>
-                <th scope="col" className="px-4 py-2 font-semibold">
-                  Joined
-                </th>
-              </tr>
-            </thead>
-            <tbody className="divide-y divide-basalt-100">
-              {keepers.map((k) => (
-                <tr key={k.userId}>
-                  <td className="px-4 py-3 font-medium">{k.name}</td>
-                  <td className="px-4 py-3 text-basalt-700">{k.email}</td>
-                  <td className="px-4 py-3">
-                    <Link href={`/enclosures?keeper=${k.userId}`} className={link}>
-                      {k.enclosureCount} {k.enclosureCount === 1 ? 'enclosure' : 'enclosures'}
-                    </Link>
-                  </td>
-                  <td className="px-4 py-3 text-basalt-500">{k.joinedAt.slice(0, 10)}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <KeepersTable keepers={keepers} />
       )}
       {mayInvite && (
         <section aria-labelledby="invite-keeper" className={`${card} mt-8 p-5`}>

@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { InviteForm } from '@/components/people/InviteForm';
-import { MemberActions } from '@/components/people/MemberActions';
+import { MembersTable } from '@/components/people/MembersTable';
 import { PendingInvitations } from '@/components/people/PendingInvitations';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { card } from '@/components/ui/styles';
@@ -40,50 +40,7 @@ export default async function MembersPage() {
             : `Everyone in ${membership.organisationName}. Only an owner changes roles or removes people.`
         }
       />
-      <div className="overflow-x-auto rounded-lg border border-basalt-200 bg-white">
-        <table className="min-w-full divide-y divide-basalt-200 text-left text-body">
-          <caption className="sr-only">Members</caption>
-          <thead className="bg-basalt-50 text-caption uppercase tracking-wide text-basalt-600">
-            <tr>
-              <th scope="col" className="px-4 py-2 font-semibold">
-                Name
-              </th>
-              <th scope="col" className="px-4 py-2 font-semibold">
-                Email
-              </th>
-              <th scope="col" className="px-4 py-2 font-semibold">
-                {manages ? 'Role and actions' : 'Role'}
-              </th>
-            </tr>
-          </thead>
-          <tbody className="divide-y divide-basalt-100">
-            {members.map((m) => (
-              <tr key={m.userId}>
-                <td className="px-4 py-3 font-medium">
-                  {m.name}
-                  {m.userId === user.id && <span className="ml-1 text-caption text-basalt-500">(you)</span>}
-                </td>
-                <td className="px-4 py-3 text-basalt-700">{m.email}</td>
-                <td className="px-4 py-3">
-                  {manages ? (
-                    <MemberActions
-                      organisationId={organisationId}
-                      userId={m.userId}
-                      name={m.name}
-                      role={m.role}
-                      isSelf={m.userId === user.id}
-                    />
-                  ) : (
-                    <span className="rounded bg-basalt-100 px-2 py-0.5 text-caption font-medium text-basalt-700">
-                      {m.role}
-                    </span>
-                  )}
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <MembersTable members={members} organisationId={organisationId} selfId={user.id} manages={manages} />
       {invitable.length > 0 && (
         <section aria-labelledby="invite" className={`${card} mt-8 p-5`}>
           <h2 id="invite" className="text-lead font-semibold">

@@ -1,0 +1,72 @@
+import { createElement } from 'react';
+import { renderToStaticMarkup } from 'react-dom/server';
+import { describe, expect, it } from 'vitest';
+import { Table, type TableColumn } from './Table';
+
+type Row = { id: number; name: string; size: number };
+const rows: Row[] = [
+  { id: 7, name: 'Desert', size: 120 },
+  { id: 3, name: 'Forest', size: 90 },
+];
+const columns = (withSize: boolean): (TableColumn<Row> | false)[] => [
+  { id: 'name', header: 'Name', className: 'name-cell', cell: ({ row }) => row.original.name },
+  withSize && {
+    id: 'size',
+    header: 'Size',
+    title: 'Width in cm',
+    headerClassName: 'size-head',
+    cell: ({ row }) => `${row.original.size} cm`,
+  },
+];
+
+const render = (props: Parameters<typeof Table<Row>>[0]) =>
+  renderToStaticMarkup(createElement(Table<Row>, props));
+const cellsOf = (html: string, tag: 'th' | 'td') =>
+  [...html.matchAll(new RegExp(`<${tag} [^>]*>(.*?)</${tag}>`, 'g'))].map((m) => m[1]);
+
+describe('Table', () => {
+  it('lays out the rows in the order given, a cell a column, with its caption and classes', () => {
+    const html = render({ data: rows, columns: columns(true), caption: 'Enclosures', rowKey: (r) => r.id });
+    expect(html).toContain('<caption class="sr-only">Enclosures</caption>');
+    expect(cellsOf(html, 'th')).toEqual(['Name', 'Size']);
+    expect(cellsOf(html, 'td')).toEqual(['Desert', '120 cm', 'Forest', '90 cm']);
+    expect(html).toContain('<td class="name-cell">Desert</td>');
+    // Without classes of its own a cell gets the usual padding.
+    expect(html).toContain('<td class="px-4 py-3">120 cm</td>');
+    expect(html).toContain('<th scope="col" class="size-head" title="Width in cm">Size</th>');
+    expect(html).toContain('<th scope="col" class="px-4 py-2 font-semibold">Name</th>');
+  });
+
+  it('leaves out a column given as false', () => {
+    const html = render({ data: rows, columns: columns(false), caption: 'Enclosures', rowKey: (r) => r.id });
+    expect(cellsOf(html, 'th')).toEqual(['Name']);
+    expect(cellsOf(html, 'td')).toEqual(['Desert', 'Forest']);
+  });
+
+  it('draws server-sorted headers as sort buttons that say which way the list is sorted', () => {
+    const html = render({
+      data: rows,
+      columns: columns(true),
+      caption: 'Enclosures',
+      rowKey: (r) => r.id,
+      sort: { sort: { column: 'size', descending: true }, onSort: () => {} },
+    });
+    expect(html).toMatch(/<th scope="col" aria-sort="none"[^>]*><button type="button"[^>]*>Name/);
+    expect(html).toMatch(/<th scope="col" aria-sort="descending"[^>]*><button type="button"[^>]*>Size/);
+  });
+
+  it('dims the rows of a view still loading and puts what it is given below the table, inside the frame', () => {
+    const html = render({
+      data: [],
+      columns: columns(true),
+      caption: 'Enclosures',
+      rowKey: (r) => r.id,
+      stale: true,
+      busy: true,
+      children: createElement('p', null, 'Nothing matches'),
+    });
+    expect(html).toMatch(/<table class="[^"]*opacity-60[^"]*" aria-busy="true"/);
+    expect(cellsOf(html, 'td')).toEqual([]);
+    expect(html).toMatch(/<\/table><p>Nothing matches<\/p><\/div>$/);
+  });
+});
