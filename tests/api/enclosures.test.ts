@@ -2,14 +2,8 @@ import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import * as collection from '@/app/api/enclosures/route';
 import * as item from '@/app/api/enclosures/[id]/route';
 import { Enclosure, type Organisation, type User } from '@/models';
-import {
-  addMember,
-  closeDatabase,
-  createEnclosure,
-  createMember,
-  createUser,
-  resetDatabase,
-} from '../helpers/db';
+import { closeDatabase, createEnclosure, resetDatabase } from '../helpers/db';
+import { createEnclosureWorld } from '../helpers/world';
 import { call, expectNoInternals } from './http';
 
 afterAll(closeDatabase);
@@ -27,17 +21,22 @@ let foreign: Enclosure;
 
 beforeEach(async () => {
   await resetDatabase();
-  ({ organisation: shop, user: owner } = await createMember('owner'));
-  staff = (await createUser()).user;
-  keeperA = (await createUser()).user;
-  keeperB = (await createUser()).user;
-  await addMember(shop, staff, 'staff');
-  await addMember(shop, keeperA, 'keeper');
-  await addMember(shop, keeperB, 'keeper');
-  ({ organisation: otherOrg, user: outsider } = await createMember('owner'));
-  enclosureA = await createEnclosure(shop, keeperA, { name: 'A desert vivarium' });
-  enclosureB = await createEnclosure(shop, keeperB, { name: 'B rainforest tank' });
-  foreign = await createEnclosure(otherOrg, outsider, { name: 'Elsewhere' });
+  ({
+    shop,
+    owner,
+    staff,
+    keeper: keeperA,
+    otherKeeper: keeperB,
+    otherOrg,
+    outsider,
+    enclosure: enclosureA,
+    neighbour: enclosureB,
+    foreign,
+  } = await createEnclosureWorld({
+    enclosure: { name: 'A desert vivarium' },
+    neighbour: { name: 'B rainforest tank' },
+    foreign: { name: 'Elsewhere' },
+  }));
 });
 
 const list = (as: User | null, organisationId: number, extra = '') =>

@@ -2,7 +2,8 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import * as jobs from '@/app/api/organisations/[id]/jobs/route';
 import { runJob } from '@/lib/jobs/runner';
 import { JobRun, MailMessage, type Organisation, type User } from '@/models';
-import { createWorld, withTestDatabase } from '../helpers/db';
+import { withTestDatabase } from '../helpers/db';
+import { createWorld } from '../helpers/world';
 import { call } from './http';
 
 // The owner's view of the background jobs: who may read it, and that it shows the runs with only this

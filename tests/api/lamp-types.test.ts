@@ -4,7 +4,8 @@ import * as item from '@/app/api/lamp-types/[id]/route';
 import { STARTING_LAMP_TYPES } from '@/lib/lamp-types/starting-lamp-types';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { Lamp, LampType, type Organisation, type User } from '@/models';
-import { createWorld, createEnclosure, useTestDatabase as withTestDatabase } from '../helpers/db';
+import { createEnclosure, withTestDatabase } from '../helpers/db';
+import { createWorld } from '../helpers/world';
 import { call, expectNoInternals } from './http';
 
 withTestDatabase();

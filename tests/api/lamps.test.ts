@@ -11,9 +11,9 @@ import { lampChart } from '@/lib/lamp-log/chart';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
 import { lampFacts, readingFacts } from '@/lib/lamp-log/store';
 import { toDto as lampTypeDto } from '@/lib/lamp-types/store';
-import { seedStartingCatalogue } from '@/lib/species/seed';
 import { Design, Lamp, LampType, Reading, Variant } from '@/models';
-import { createEnclosure, createMember, createOrganisation, withTestDatabase } from '../helpers/db';
+import { withTestDatabase } from '../helpers/db';
+import { createEnclosureWorld } from '../helpers/world';
 import { call, expectNoInternals } from './http';
 
 withTestDatabase();
@@ -30,15 +30,21 @@ beforeAll(async () => {
 }, 180_000);
 
 async function world() {
-  const org = await createOrganisation('Shop A');
-  await seedStartingCatalogue(org.id);
-  const { user: staff } = await createMember('staff', org);
-  const { user: keeper } = await createMember('keeper', org);
-  const { user: otherKeeper } = await createMember('keeper', org);
-  const { organisation: otherOrg, user: outsider } = await createMember('owner');
-  await seedStartingCatalogue(otherOrg.id);
-  const enclosure = await createEnclosure(org, keeper, { speciesName: 'Bearded dragon', heightCm: 60 });
-  const otherEnclosure = await createEnclosure(org, otherKeeper);
+  const w = await createEnclosureWorld({
+    shopName: 'Shop A',
+    catalogue: true,
+    enclosure: { speciesName: 'Bearded dragon', heightCm: 60 },
+  });
+  const {
+    shop: org,
+    staff,
+    keeper,
+    otherKeeper,
+    otherOrg,
+    outsider,
+    enclosure,
+    neighbour: otherEnclosure,
+  } = w;
   const t5 = (await LampType.findOne({ where: { organisationId: org.id, tech: 't5', uvbAt30: 42.5 } }))!;
   const foreignType = (await LampType.findOne({ where: { organisationId: otherOrg.id, tech: 't5' } }))!;
   return { org, staff, keeper, otherKeeper, outsider, enclosure, otherEnclosure, t5, foreignType };

@@ -3,7 +3,8 @@ import * as enclosures from '@/app/api/enclosures/route';
 import * as keepers from '@/app/api/keepers/route';
 import * as members from '@/app/api/organisations/[id]/members/route';
 import { Membership, User, type Organisation } from '@/models';
-import { createWorld, closeDatabase, createEnclosure, resetDatabase } from '../helpers/db';
+import { closeDatabase, createEnclosure, resetDatabase } from '../helpers/db';
+import { createWorld } from '../helpers/world';
 import { call, sessionCookie } from './http';
 
 afterAll(closeDatabase);
@@ -17,8 +18,7 @@ let outsider: User;
 beforeEach(async () => {
   await resetDatabase();
   ({ shop, owner, staff, keeper, outsider } = await createWorld({
-    staff: 'Staff Person',
-    keeper: 'Keeper Person',
+    names: { staff: 'Staff Person', keeper: 'Keeper Person' },
   }));
 });
 

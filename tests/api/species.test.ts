@@ -4,7 +4,8 @@ import * as item from '@/app/api/species/[id]/route';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { STARTING_SHEETS } from '@/lib/species/starting-sheets';
 import { CatalogueSeeding, LampType, Organisation, SpeciesSheet, type User } from '@/models';
-import { createWorld, testDb, useTestDatabase as withTestDatabase } from '../helpers/db';
+import { testDb, withTestDatabase } from '../helpers/db';
+import { createWorld } from '../helpers/world';
 import { call, expectNoInternals } from './http';
 
 withTestDatabase();

@@ -2,7 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { loadUserById } from '@/lib/auth/session-user';
 import { studioPhotos } from '@/lib/uploads/studio-photos';
 import { Upload, type Enclosure, type User } from '@/models';
-import { createEnclosure, createMember, createOrganisation, withTestDatabase } from '../helpers/db';
+import { withTestDatabase } from '../helpers/db';
+import { createEnclosureWorld } from '../helpers/world';
 
 // Which photos a variant's studio offers as its backdrop, against the real test database: the
 // enclosure's own, and the photo its design names only if this person may still read it. The files
@@ -31,16 +32,9 @@ async function photo(
 }
 
 async function world() {
-  const org = await createOrganisation();
-  const { user: staff } = await createMember('staff', org);
-  const { user: keeper } = await createMember('keeper', org);
-  const { user: otherKeeper } = await createMember('keeper', org);
-  const { user: outsiderOwner, organisation: otherOrg } = await createMember('owner');
-  const enclosure = await createEnclosure(org, keeper);
-  const neighbour = await createEnclosure(org, otherKeeper);
-  const foreign = await createEnclosure(otherOrg, outsiderOwner);
+  const w = await createEnclosureWorld();
   const user = async (u: User) => (await loadUserById(u.id))!;
-  return { staff, keeper, otherKeeper, outsiderOwner, enclosure, neighbour, foreign, user };
+  return { ...w, outsiderOwner: w.outsider, user };
 }
 
 describe('photos offered in the studio', () => {

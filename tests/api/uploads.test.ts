@@ -5,7 +5,8 @@ import { useFakeS3 } from '@/tests/helpers/fake-s3';
 import { getObject, putObject } from '@/lib/storage/s3';
 import { jpegWithMetadata, pngWithMetadata } from '@/tests/fixtures/images';
 import { Organisation, Upload } from '@/models';
-import { createEnclosure, createMember, createOrganisation, withTestDatabase } from '../helpers/db';
+import { createMember, withTestDatabase } from '../helpers/db';
+import { createEnclosureWorld, type EnclosureWorld } from '../helpers/world';
 import { call, ORIGIN, sessionCookie } from './http';
 
 // Backdrop photos against the real test database and the fake S3 server.
@@ -18,16 +19,8 @@ afterAll(async () => {
 });
 withTestDatabase();
 
-async function world() {
-  const org = await createOrganisation();
-  const { user: staff } = await createMember('staff', org);
-  const { user: keeper } = await createMember('keeper', org);
-  const { user: otherKeeper } = await createMember('keeper', org);
-  const { user: outsider } = await createMember('owner');
-  const enclosure = await createEnclosure(org, keeper);
-  return { staff, keeper, otherKeeper, outsider, enclosure };
-}
-type W = Awaited<ReturnType<typeof world>>;
+const world = () => createEnclosureWorld();
+type W = EnclosureWorld;
 
 async function upload(w: W, bytes: Uint8Array, contentType: string, as = w.keeper, name = 'photo.jpg') {
   const path = `/api/uploads?kind=backdrop&enclosureId=${w.enclosure.id}&name=${encodeURIComponent(name)}`;

@@ -16,29 +16,25 @@ import { resolveShareToken } from '@/lib/variants/shares';
 import { getVariantForUser } from '@/lib/variants/variants';
 import { visibleVariants } from '@/lib/variants/visible';
 import type { User } from '@/models';
-import {
-  createEnclosure,
-  createMember,
-  createOrganisation,
-  createUser,
-  testDb,
-  useTestDatabase as withTestDatabase,
-} from '../helpers/db';
+import { createMember, createUser, testDb, withTestDatabase } from '../helpers/db';
+import { createEnclosureWorld } from '../helpers/world';
 import { expectNoInternals, type Reply } from './http';
 import { call } from './variants.helpers';
 
 withTestDatabase();
 
 async function world() {
-  const org = await createOrganisation('Shop A');
-  const { user: staff } = await createMember('staff', org);
-  const { user: keeper } = await createMember('keeper', org);
-  const { user: otherKeeper } = await createMember('keeper', org);
-  const { user: outsider, organisation: otherOrg } = await createMember('owner');
+  const {
+    staff,
+    keeper,
+    otherKeeper,
+    outsider,
+    otherOrg,
+    enclosure,
+    foreign: theirEnclosure,
+  } = await createEnclosureWorld({ shopName: 'Shop A' });
   const { user: otherStaff } = await createMember('staff', otherOrg);
   const { user: nobody } = await createUser();
-  const enclosure = await createEnclosure(org, keeper);
-  const theirEnclosure = await createEnclosure(otherOrg, outsider);
   const made = await call(enclosureDesignsRoute.POST, {
     method: 'POST',
     path: `/api/enclosures/${enclosure.id}/designs`,

@@ -4,28 +4,18 @@ import * as designVariantsRoute from '@/app/api/designs/[id]/variants/route';
 import * as enclosureDesignsRoute from '@/app/api/enclosures/[id]/designs/route';
 import * as variantRoute from '@/app/api/variants/[id]/route';
 import { Design, Variant } from '@/models';
-import {
-  createEnclosure,
-  createMember,
-  createOrganisation,
-  createUser,
-  addMember,
-  useTestDatabase as withTestDatabase,
-} from '../helpers/db';
+import { addMember, createUser, withTestDatabase } from '../helpers/db';
+import { createEnclosureWorld } from '../helpers/world';
 import { call } from './variants.helpers';
 
 withTestDatabase();
 
 async function world() {
-  const org = await createOrganisation('Shop A');
-  const { user: owner } = await createMember('owner', org);
-  const { user: staff } = await createMember('staff', org);
-  const { user: keeper } = await createMember('keeper', org);
-  const { user: otherKeeper } = await createMember('keeper', org);
-  const { organisation: otherOrg, user: outsider } = await createMember('owner');
-  const enclosure = await createEnclosure(org, keeper, { widthCm: 90, heightCm: 45, depthCm: 45 });
-  const otherOrgEnclosure = await createEnclosure(otherOrg, outsider);
-  return { org, owner, staff, keeper, otherKeeper, outsider, enclosure, otherOrgEnclosure };
+  const w = await createEnclosureWorld({
+    shopName: 'Shop A',
+    enclosure: { widthCm: 90, heightCm: 45, depthCm: 45 },
+  });
+  return { ...w, org: w.shop, otherOrgEnclosure: w.foreign };
 }
 
 async function designWithVariant(w: Awaited<ReturnType<typeof world>>, name = 'Basking plan') {

@@ -176,18 +176,20 @@ export async function createMember(
   return { organisation: org, user, password, membership };
 }
 
+export type EnclosureFields = Partial<{
+  name: string;
+  widthCm: number;
+  heightCm: number;
+  depthCm: number;
+  speciesName: string | null;
+  animalName: string | null;
+  notes: string | null;
+}>;
+
 export async function createEnclosure(
   organisation: Organisation,
   keeper: User,
-  overrides: Partial<{
-    name: string;
-    widthCm: number;
-    heightCm: number;
-    depthCm: number;
-    speciesName: string | null;
-    animalName: string | null;
-    notes: string | null;
-  }> = {},
+  overrides: EnclosureFields = {},
 ): Promise<Enclosure> {
   return Enclosure.create({
     organisationId: organisation.id,
@@ -201,18 +203,4 @@ export async function createEnclosure(
     notes: null,
     ...overrides,
   });
-}
-
-/**
- * The people most access tests need: a shop with an owner, a member of staff and a keeper, and an owner
- * of another organisation (the outsider, who must learn nothing about the shop).
- */
-export async function createWorld(names: { staff?: string; keeper?: string } = {}) {
-  const { organisation: shop, user: owner } = await createMember('owner');
-  const staff = (await createUser({ name: names.staff })).user;
-  const keeper = (await createUser({ name: names.keeper })).user;
-  await addMember(shop, staff, 'staff');
-  await addMember(shop, keeper, 'keeper');
-  const { organisation: otherOrg, user: outsider } = await createMember('owner');
-  return { shop, owner, staff, keeper, otherOrg, outsider };
 }

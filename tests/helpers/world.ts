@@ -1,0 +1,61 @@
+// The people (and enclosures) that access tests set up again and again, made in one place so every
+// test file means the same thing by "staff", "a keeper" and "the outsider".
+import { seedStartingCatalogue } from '@/lib/species/seed';
+import {
+  addMember,
+  createEnclosure,
+  createMember,
+  createOrganisation,
+  createUser,
+  type EnclosureFields,
+} from './db';
+
+export type WorldOptions = {
+  /** The shop's name; a generated one when not given. */
+  shopName?: string;
+  /** Names of the staff member and the keeper, for tests that look for them in replies. */
+  names?: { staff?: string; keeper?: string };
+  /** Give both organisations the starting species sheets and lamp catalogue, as a new one gets. */
+  catalogue?: boolean;
+};
+
+/**
+ * A shop with an owner, a member of staff and a keeper, and an owner of another organisation (the
+ * outsider, who must learn nothing about the shop).
+ */
+export async function createWorld({ shopName, names = {}, catalogue = false }: WorldOptions = {}) {
+  const shop = await createOrganisation(shopName);
+  const { user: owner } = await createMember('owner', shop);
+  const staff = (await createUser({ name: names.staff })).user;
+  const keeper = (await createUser({ name: names.keeper })).user;
+  await addMember(shop, staff, 'staff');
+  await addMember(shop, keeper, 'keeper');
+  const { organisation: otherOrg, user: outsider } = await createMember('owner');
+  if (catalogue) {
+    await seedStartingCatalogue(shop.id);
+    await seedStartingCatalogue(otherOrg.id);
+  }
+  return { shop, owner, staff, keeper, otherOrg, outsider };
+}
+
+/**
+ * The world above with a second keeper of the shop, and an enclosure each: the keeper's (`enclosure`),
+ * the other keeper's (`neighbour`, which the keeper must not reach) and the outsider's (`foreign`).
+ */
+export async function createEnclosureWorld(
+  options: WorldOptions & {
+    enclosure?: EnclosureFields;
+    neighbour?: EnclosureFields;
+    foreign?: EnclosureFields;
+  } = {},
+) {
+  const world = await createWorld(options);
+  const otherKeeper = (await createUser()).user;
+  await addMember(world.shop, otherKeeper, 'keeper');
+  const enclosure = await createEnclosure(world.shop, world.keeper, options.enclosure);
+  const neighbour = await createEnclosure(world.shop, otherKeeper, options.neighbour);
+  const foreign = await createEnclosure(world.otherOrg, world.outsider, options.foreign);
+  return { ...world, otherKeeper, enclosure, neighbour, foreign };
+}
+
+export type EnclosureWorld = Awaited<ReturnType<typeof createEnclosureWorld>>;
