@@ -3,7 +3,8 @@ import * as collection from '@/app/api/customers/route';
 import * as item from '@/app/api/customers/[id]/route';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { CounterLamp, CounterReading, Customer, LampType, type Organisation, type User } from '@/models';
-import { createWorld, useTestDatabase as withTestDatabase } from '../helpers/db';
+import { withTestDatabase } from '../helpers/db';
+import { createWorld } from '../helpers/world';
 import { call, expectNoInternals } from './http';
 
 withTestDatabase();
