@@ -60,8 +60,8 @@ export const DEMO_LAMPS: readonly DemoLamp[] = [
       { daysAgo: 200, distanceCm: 12, value: 181, unit: 'uvb', note: 'meter on the basking rock' },
       { daysAgo: 140, distanceCm: 15, value: 141, unit: 'uvb' },
       { daysAgo: 140, distanceCm: 15, value: 5.6, unit: 'uvi' },
-      { daysAgo: 75, distanceCm: 15, value: 128, unit: 'uvb' },
-      { daysAgo: 20, distanceCm: 15, value: 119, unit: 'uvb' },
+      { daysAgo: 75, distanceCm: 15, value: 126, unit: 'uvb' },
+      { daysAgo: 20, distanceCm: 15, value: 118, unit: 'uvb' },
     ],
   },
   {
@@ -89,7 +89,7 @@ export const DEMO_LAMPS: readonly DemoLamp[] = [
     baskingDistanceCm: 20,
     baskingTransmission: 0.6,
     readings: [
-      { daysAgo: 95, distanceCm: 20, value: 41.8, unit: 'uvb', note: 'straight below the tube, lid off' },
+      { daysAgo: 88, distanceCm: 20, value: 41.8, unit: 'uvb', note: 'straight below the tube, lid off' },
     ],
   },
   {
