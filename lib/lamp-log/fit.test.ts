@@ -74,7 +74,8 @@ describe('fitDecay — exponential', () => {
       ),
       { numRuns: 60 },
     );
-  });
+    // 60 full fits take about 7 s alone; with every unit file running at once on two cores, several times that.
+  }, 180_000);
 });
 
 describe('fitDecay — two-phase', () => {
