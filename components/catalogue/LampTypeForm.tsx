@@ -1,10 +1,11 @@
 'use client';
 
-import { useState, type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
 import { FormActions } from '@/components/ui/FormActions';
 import { Notice } from '@/components/ui/Notice';
-import { button, card, input } from '@/components/ui/styles';
+import { button, card } from '@/components/ui/styles';
+import { Select } from '@/components/ui/Select';
+import { TextArea } from '@/components/ui/TextArea';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { useLengthUnit } from '@/components/ui/units';
 import { useEntryForm } from '@/components/ui/useEntryForm';
@@ -48,8 +49,9 @@ export function LampTypeForm({
   lampType: LampTypeDto | null;
 }) {
   const [unit] = useLengthUnit();
-  const [st, setSt] = useState<LampFormState>(() => initialLampState(lampType, unit));
-  const form = useEntryForm<unknown, LampTypeDto>({
+  const form = useEntryForm<LampFormState, LampTypeDto>({
+    initial: () => initialLampState(lampType, unit),
+    toPayload: (st) => ({ ...lampPayload(st), decayPoints: lampType?.decayPoints ?? null }),
     schema: lampTypeInputSchema,
     createPath: '/api/lamp-types',
     createExtra: { organisationId },
@@ -57,22 +59,13 @@ export function LampTypeForm({
     savedHref: (saved) => `/lamp-catalogue/${saved.id}`,
     failure: 'The lamp type could not be saved. Try again.',
   });
-  const { errors, general, saving } = form;
+  const { draft: st, update, errors, general, saving } = form;
 
-  if (st.lengthUnit !== unit) setSt(withLengthUnit(st, unit));
-
-  const update = (patch: Partial<LampFormState>) => {
-    setSt((s) => ({ ...s, ...patch }));
-    form.markDirty();
-  };
-
-  function submit(e: FormEvent) {
-    e.preventDefault();
-    void form.save({ ...lampPayload(st), decayPoints: lampType?.decayPoints ?? null });
-  }
+  // Lengths follow the page's cm/in choice (state derived during render, as React recommends).
+  if (st.lengthUnit !== unit) form.reshow(withLengthUnit(st, unit));
 
   return (
-    <form onSubmit={submit} noValidate className="space-y-6">
+    <form onSubmit={form.submit} noValidate className="space-y-6">
       {general && <Notice tone="error">{general}</Notice>}
       <fieldset className={`${card} grid gap-4 p-5 sm:grid-cols-2`}>
         <legend className="px-1 text-lead font-semibold text-basalt-900">Lamp type</legend>
@@ -84,12 +77,9 @@ export function LampTypeForm({
           hint="A generic description, e.g. “T5 tube, high output, 115 cm”."
         />
         <div>
-          <label htmlFor="tech" className="mb-1 block text-body font-medium text-basalt-800">
-            Technology
-          </label>
-          <select
+          <Select
             id="tech"
-            className={input}
+            label="Technology"
             value={st.tech}
             onChange={(e) => update({ tech: e.target.value as LampTechId })}
           >
@@ -98,7 +88,7 @@ export function LampTypeForm({
                 {techLabel(t)}
               </option>
             ))}
-          </select>
+          </Select>
           <button
             type="button"
             className={`${button.quiet} mt-1`}
@@ -107,20 +97,15 @@ export function LampTypeForm({
             Fill in this technology’s defaults
           </button>
         </div>
-        <div>
-          <label htmlFor="form" className="mb-1 block text-body font-medium text-basalt-800">
-            Form
-          </label>
-          <select
-            id="form"
-            className={input}
-            value={st.form}
-            onChange={(e) => update({ form: e.target.value as 'tube' | 'bulb' })}
-          >
-            <option value="tube">Tube</option>
-            <option value="bulb">Bulb, spot or panel</option>
-          </select>
-        </div>
+        <Select
+          id="form"
+          label="Form"
+          value={st.form}
+          onChange={(e) => update({ form: e.target.value as 'tube' | 'bulb' })}
+        >
+          <option value="tube">Tube</option>
+          <option value="bulb">Bulb, spot or panel</option>
+        </Select>
         {st.form === 'tube' && (
           <div>
             <div className="flex items-end gap-2">
@@ -178,18 +163,14 @@ export function LampTypeForm({
             error={errors[`sources.${f}`]}
           />
         ))}
-        <div>
-          <label htmlFor="lamp-notes" className="mb-1 block text-body font-medium text-basalt-800">
-            Notes
-          </label>
-          <textarea
-            id="lamp-notes"
-            rows={3}
-            className={input}
-            value={st.notes}
-            onChange={(e) => update({ notes: e.target.value })}
-          />
-        </div>
+        <TextArea
+          id="lamp-notes"
+          label="Notes"
+          rows={3}
+          value={st.notes}
+          onChange={(e) => update({ notes: e.target.value })}
+          error={errors.notes}
+        />
       </fieldset>
 
       <FormActions

@@ -1,7 +1,7 @@
 'use client';
 
-import { useState, type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
+import { TextArea } from '@/components/ui/TextArea';
 import { formatLength } from '@/shared/units';
 import { FormActions } from '@/components/ui/FormActions';
 import { Notice } from '@/components/ui/Notice';
@@ -31,8 +31,9 @@ export function SpeciesForm({
   sheet: SpeciesSheetDto | null;
 }) {
   const [unit] = useTempUnit();
-  const [state, setState] = useState<SpeciesFormState>(() => initialState(sheet, unit));
-  const form = useEntryForm<unknown, SpeciesSheetDto>({
+  const form = useEntryForm<SpeciesFormState, SpeciesSheetDto>({
+    initial: () => initialState(sheet, unit),
+    toPayload,
     schema: speciesInputSchema,
     createPath: '/api/species',
     createExtra: { organisationId },
@@ -40,24 +41,15 @@ export function SpeciesForm({
     savedHref: (saved) => `/species/${saved.id}`,
     failure: 'The sheet could not be saved. Try again.',
   });
-  const { errors, general, saving } = form;
+  const { draft: state, update, errors, general, saving } = form;
 
   // Temperatures follow the page's °C/°F choice (state derived during render, as React recommends).
-  if (state.unit !== unit) setState(withUnit(state, unit));
+  if (state.unit !== unit) form.reshow(withUnit(state, unit));
 
-  const update = (patch: Partial<SpeciesFormState>) => {
-    setState((s) => ({ ...s, ...patch }));
-    form.markDirty();
-  };
   const setPair = (key: 'uvbTargetUw' | 'photoperiodH', end: 'min' | 'max', v: string) =>
     update({ [key]: { ...state[key], [end]: v } });
   const setTemp = (key: TempRangeField, end: 'min' | 'max', v: string) =>
     update({ temps: { ...state.temps, [key]: { ...state.temps[key], [end]: v } } });
-
-  function submit(e: FormEvent) {
-    e.preventDefault();
-    void form.save(toPayload(state));
-  }
 
   const err = (path: string) => errors[path] ?? null;
   const pairError = (key: string) => err(`${key}.min`) ?? err(`${key}.max`) ?? err(key);
@@ -74,7 +66,7 @@ export function SpeciesForm({
     : null;
 
   return (
-    <form onSubmit={submit} noValidate className="space-y-6">
+    <form onSubmit={form.submit} noValidate className="space-y-6">
       {general && <Notice tone="error">{general}</Notice>}
 
       <fieldset className={`${card} grid gap-4 p-5 sm:grid-cols-2`}>
@@ -215,17 +207,15 @@ export function SpeciesForm({
 
       <fieldset className={`${card} p-5`}>
         <legend className="px-1 text-lead font-semibold text-basalt-900">Notes</legend>
-        <label htmlFor="notes" className="sr-only">
-          Notes
-        </label>
-        <textarea
+        <TextArea
           id="notes"
+          label="Notes"
+          hideLabel
           rows={4}
-          className={input}
           value={state.notes}
           onChange={(e) => update({ notes: e.target.value })}
+          error={err('notes')}
         />
-        {err('notes') && <p className="mt-1 text-caption font-medium text-ember-700">{err('notes')}</p>}
       </fieldset>
 
       <SourcesEditor sources={state.sources} onChange={(sources) => update({ sources })} errors={errors} />

@@ -1,30 +1,22 @@
-import { useId, type SelectHTMLAttributes } from 'react';
+import type { ReactNode, SelectHTMLAttributes } from 'react';
+import { FormControl } from './FormControl';
 import { input } from './styles';
 
-type Props = SelectHTMLAttributes<HTMLSelectElement> & { label: string; error?: string | null };
+type Props = SelectHTMLAttributes<HTMLSelectElement> & {
+  label: string;
+  hint?: ReactNode;
+  error?: string | null;
+};
 
-export function Select({ label, error, id, className, children, ...rest }: Props) {
-  const auto = useId();
-  const selectId = id ?? auto;
+/** A labelled choice with its hint and error read out by screen readers. */
+export function Select({ label, hint, error, id, className, children, ...rest }: Props) {
   return (
-    <div className={className}>
-      <label htmlFor={selectId} className="mb-1 block text-body font-medium text-basalt-800">
-        {label}
-      </label>
-      <select
-        id={selectId}
-        className={input}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${selectId}-error` : undefined}
-        {...rest}
-      >
-        {children}
-      </select>
-      {error && (
-        <p id={`${selectId}-error`} className="mt-1 text-caption font-medium text-ember-700">
-          {error}
-        </p>
+    <FormControl id={id} label={label} hint={hint} error={error} className={className}>
+      {(control) => (
+        <select className={input} {...control} {...rest}>
+          {children}
+        </select>
       )}
-    </div>
+    </FormControl>
   );
 }

@@ -1,7 +1,7 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
-import { useEffect, useState } from 'react';
+import { useEffect, useState, type FormEvent } from 'react';
 import type { z } from 'zod';
 import { ApiClientError, sendJson } from './api-client';
 
@@ -9,12 +9,16 @@ import { ApiClientError, sendJson } from './api-client';
 export type FieldErrors = Record<string, string>;
 
 /**
- * What the species-sheet and lamp-type forms share: check the payload with the API's own schema (so a
- * mistake shows beside its field before anything is sent), create (POST) or save changes (PATCH), then
- * open the saved entry; a field the server refuses is shown beside that field. Leaving with unsaved
- * changes asks first.
+ * The one way the entity forms (species sheets, lamp types) work: the form's draft is plain text as
+ * typed (numbers stay strings until sent, so a half-typed "1." is not lost, and a unit switch recomputes
+ * them); on submit `toPayload` turns it into the API's body, which is checked with the API's own zod
+ * schema (so a mistake shows beside its field before anything is sent); then create (POST) or save
+ * changes (PATCH) and open the saved entry; a field the server refuses is shown beside that field.
+ * Leaving with unsaved changes asks first.
  */
-export function useEntryForm<T, Saved extends { id: number }>({
+export function useEntryForm<Draft, Saved extends { id: number }>({
+  initial,
+  toPayload,
   schema,
   createPath,
   createExtra,
@@ -22,7 +26,9 @@ export function useEntryForm<T, Saved extends { id: number }>({
   savedHref,
   failure,
 }: {
-  schema: z.ZodType<T>;
+  initial: () => Draft;
+  toPayload: (draft: Draft) => unknown;
+  schema: z.ZodType;
   /** POST target and the fields it needs beyond the form (the organisation). */
   createPath: string;
   createExtra: Record<string, unknown>;
@@ -33,6 +39,7 @@ export function useEntryForm<T, Saved extends { id: number }>({
   failure: string;
 }) {
   const router = useRouter();
+  const [draft, setDraft] = useState<Draft>(initial);
   const [errors, setErrors] = useState<FieldErrors>({});
   const [general, setGeneral] = useState<string | null>(null);
   const [saving, setSaving] = useState(false);
@@ -72,11 +79,21 @@ export function useEntryForm<T, Saved extends { id: number }>({
   }
 
   return {
+    draft,
+    /** A change the user made. */
+    update: (patch: Partial<Draft>) => {
+      setDraft((d) => ({ ...d, ...patch }));
+      setDirty(true);
+    },
+    /** The same draft shown another way (a unit switch): not a change of the user's. */
+    reshow: (next: Draft) => setDraft(next),
     errors,
     general,
     saving,
-    markDirty: () => setDirty(true),
-    save,
+    submit: (e: FormEvent) => {
+      e.preventDefault();
+      void save(toPayload(draft));
+    },
     cancel: () => router.back(),
   };
 }
