@@ -2,7 +2,7 @@ import { QueryTypes } from 'sequelize';
 import { describe, expect, it } from 'vitest';
 import { down, up } from '@/migrations/0018-account-confirmation';
 import { AccountLink, User } from '@/models';
-import { createUser, testDb, useTestDatabase as withTestDatabase } from './helpers/db';
+import { createUser, testDb, withTestDatabase } from './helpers/db';
 
 withTestDatabase();
 

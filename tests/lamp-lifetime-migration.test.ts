@@ -3,7 +3,7 @@ import { STARTING_LAMP_TYPES } from '@/lib/lamp-types/starting-lamp-types';
 import { toColumns } from '@/lib/lamp-types/store';
 import { down, up } from '@/migrations/0015-lamp-lifetime-table';
 import { Lamp, LampType } from '@/models';
-import { createEnclosure, createMember, testDb, useTestDatabase as withTestDatabase } from './helpers/db';
+import { createEnclosure, createMember, testDb, withTestDatabase } from './helpers/db';
 
 withTestDatabase();
 

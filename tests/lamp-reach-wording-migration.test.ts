@@ -3,7 +3,7 @@ import { startingLampType } from '@/lib/lamp-types/starting-lamp-types';
 import { toColumns } from '@/lib/lamp-types/store';
 import { up } from '@/migrations/0016-lamp-reach-wording';
 import { LampType } from '@/models';
-import { createOrganisation, testDb, useTestDatabase as withTestDatabase } from './helpers/db';
+import { createOrganisation, testDb, withTestDatabase } from './helpers/db';
 
 withTestDatabase();
 

@@ -3,7 +3,7 @@ import { STARTING_SHEETS, ZONE_CONFIDENCE } from '@/lib/species/starting-sheets'
 import { toColumns, toDto } from '@/lib/species/store';
 import { down, up } from '@/migrations/0017-starting-sheets-size-climbing';
 import { SpeciesSheet } from '@/models';
-import { createOrganisation, createUser, testDb, useTestDatabase as withTestDatabase } from './helpers/db';
+import { createOrganisation, createUser, testDb, withTestDatabase } from './helpers/db';
 
 withTestDatabase();
 

@@ -3,7 +3,7 @@ import { STARTING_SHEETS } from '@/lib/species/starting-sheets';
 import { toColumns } from '@/lib/species/store';
 import { down, up } from '@/migrations/0006-zone-derived-uvb-targets';
 import { SpeciesSheet } from '@/models';
-import { createOrganisation, testDb, useTestDatabase as withTestDatabase } from './helpers/db';
+import { createOrganisation, testDb, withTestDatabase } from './helpers/db';
 
 withTestDatabase();
 

@@ -3,12 +3,7 @@ import { loadSessionUser, type CurrentUser } from '@/lib/auth/session-user';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { parseDesign } from '@/simulation';
 import { Design, Enclosure, SpeciesSheet, Variant, type Organisation, type User } from '@/models';
-import {
-  addMember,
-  createMember,
-  createUser,
-  useTestDatabase as withTestDatabase,
-} from '../../tests/helpers/db';
+import { addMember, createMember, createUser, withTestDatabase } from '../../tests/helpers/db';
 import { createFromGuidedStart, proposeFor } from './service';
 
 withTestDatabase();

@@ -1,7 +1,7 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import { STARTING_SHEETS } from '@/lib/species/starting-sheets';
 import { CatalogueSeeding, SpeciesSheet, type Organisation } from '@/models';
-import { createOrganisation, useTestDatabase as withTestDatabase } from '../../tests/helpers/db';
+import { createOrganisation, withTestDatabase } from '../../tests/helpers/db';
 import { attachedSpecies, speciesOptions } from './species';
 
 withTestDatabase();

@@ -8,12 +8,7 @@ import { countAttempt, limitKey } from '@/lib/rate-limit';
 import { EXPORT_LIMIT } from '@/lib/reports/limits';
 import { Variant } from '@/models';
 import { benchDesign, heaviestAllowedDesign } from '@/simulation/testing/fixtures';
-import {
-  createEnclosure,
-  createMember,
-  createOrganisation,
-  useTestDatabase as withTestDatabase,
-} from '../helpers/db';
+import { createEnclosure, createMember, createOrganisation, withTestDatabase } from '../helpers/db';
 import { call } from './variants.helpers';
 
 withTestDatabase();

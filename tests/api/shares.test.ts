@@ -9,12 +9,7 @@ import { resolveShareToken } from '@/lib/variants/shares';
 import { hashShareToken } from '@/lib/variants/tokens';
 import { ShareLink, Variant } from '@/models';
 import { benchDesign } from '@/simulation/testing/fixtures';
-import {
-  createEnclosure,
-  createMember,
-  createOrganisation,
-  useTestDatabase as withTestDatabase,
-} from '../helpers/db';
+import { createEnclosure, createMember, createOrganisation, withTestDatabase } from '../helpers/db';
 import { call, ORIGIN } from './variants.helpers';
 
 withTestDatabase();

@@ -8,12 +8,7 @@ import * as exportRoute from '@/app/api/variants/[id]/export/route';
 import * as variantRoute from '@/app/api/variants/[id]/route';
 import { designLampsOf } from '@/lib/lamp-log/design-lamps';
 import { Variant } from '@/models';
-import {
-  createEnclosure,
-  createMember,
-  createOrganisation,
-  useTestDatabase as withTestDatabase,
-} from '../helpers/db';
+import { createEnclosure, createMember, createOrganisation, withTestDatabase } from '../helpers/db';
 import { call } from './variants.helpers';
 
 withTestDatabase();

@@ -7,12 +7,7 @@ import * as variantRoute from '@/app/api/variants/[id]/route';
 import { ensureStartingCatalogue } from '@/lib/species/seed';
 import { Organisation } from '@/models';
 import { EXAMPLE_DATA_NOTE } from '@/shared/example-data';
-import {
-  createEnclosure,
-  createMember,
-  createOrganisation,
-  useTestDatabase as withTestDatabase,
-} from '../helpers/db';
+import { createEnclosure, createMember, createOrganisation, withTestDatabase } from '../helpers/db';
 import { call, pdfDrawnText } from './variants.helpers';
 
 withTestDatabase();

@@ -122,12 +122,6 @@ export function withTestDatabase({ seed = false }: { seed?: boolean } = {}): voi
   afterAll(closeDatabase);
 }
 
-/**
- * @deprecated Old name of withTestDatabase: the `use` prefix makes the React hooks lint rule reject
- * calls at the top of a test file.
- */
-export const useTestDatabase = withTestDatabase;
-
 // --- fixtures -------------------------------------------------------------------------------------
 
 let counter = 0;

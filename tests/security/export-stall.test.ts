@@ -6,12 +6,7 @@ import { closeEnginePool } from '@/lib/engine-pool';
 import { computedCache } from '@/lib/variants/computed';
 import { designWork, MAX_DESIGN_WORK } from '@/simulation';
 import { heaviestAllowedDesign } from '@/simulation/testing/fixtures';
-import {
-  createEnclosure,
-  createMember,
-  createOrganisation,
-  useTestDatabase as withTestDatabase,
-} from '../helpers/db';
+import { createEnclosure, createMember, createOrganisation, withTestDatabase } from '../helpers/db';
 import { call } from '../api/variants.helpers';
 import { expectNotStalled } from '../helpers/not-stalled';
 
