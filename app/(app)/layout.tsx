@@ -6,6 +6,7 @@ import { NoOrganisation } from '@/components/shell/NoOrganisation';
 import { OrganisationSwitcher } from '@/components/shell/OrganisationSwitcher';
 import { SessionKeepAlive } from '@/components/shell/SessionKeepAlive';
 import { SignOutButton } from '@/components/shell/SignOutButton';
+import { QueryProvider } from '@/components/ui/QueryProvider';
 import { mailViewerEnabled } from '@/lib/mail-viewer';
 import { can } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
@@ -60,7 +61,7 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
         </div>
       </header>
       <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-8 sm:px-6">
-        {membership ? children : <NoOrganisation />}
+        <QueryProvider>{membership ? children : <NoOrganisation />}</QueryProvider>
       </main>
     </>
   );

@@ -7,7 +7,7 @@ import type { DesignSummary, VariantSummary } from '@/lib/variants/views';
 import { designsApi } from './api';
 import { ChangedAgo } from './ChangedAgo';
 import { compareHref, studioHref } from './list-helpers';
-import { QueryProvider } from './QueryProvider';
+import { QueryProvider } from '@/components/ui/QueryProvider';
 import { ShareLinks } from './ShareLinks';
 import { btn, input } from './styles';
 import { UploadVariant } from './UploadVariant';

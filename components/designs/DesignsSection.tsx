@@ -5,7 +5,7 @@ import { EmptyState } from '@/components/ui/EmptyState';
 import { useDeferredValue, useMemo, useState } from 'react';
 import { DesignCard } from './DesignCard';
 import { compareHref, sortDesigns, type DesignSort } from './list-helpers';
-import { QueryProvider } from './QueryProvider';
+import { QueryProvider } from '@/components/ui/QueryProvider';
 import { btn, input } from './styles';
 import { useDesignMutations, useDesignsList } from './useDesigns';
 

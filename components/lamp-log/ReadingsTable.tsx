@@ -1,8 +1,7 @@
 'use client';
 
-import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { ApiClientError, sendJson } from '@/components/ui/api-client';
+import { useApiMutation } from '@/components/ui/useApiMutation';
 import { useViewerZone } from '@/components/ui/LocalTime';
 import { Notice } from '@/components/ui/Notice';
 import { formatMoment } from '@/lib/time/format';
@@ -37,49 +36,53 @@ function setupText(r: Reading): string {
 
 /** The lamp's readings, newest first, with delete and an undo for the last delete. */
 export function ReadingsTable({ readings, canEdit }: { readings: Reading[]; canEdit: boolean }) {
-  const router = useRouter();
   const [unit] = useLengthUnit();
   const zone = useViewerZone();
   const day = (iso: string) => formatMoment(iso, zone, 'day');
   const time = (iso: string) => formatMoment(iso, zone, 'time');
   const when = (iso: string) => `${day(iso)} ${time(iso)}`;
   const [deleted, setDeleted] = useState<Reading | null>(null);
-  const [error, setError] = useState<string | null>(null);
   const rows = [...readings].sort((a, b) => b.takenAt.localeCompare(a.takenAt));
+  const del = useApiMutation((r: Reading) => ({ method: 'DELETE', url: `/api/readings/${r.id}` }), {
+    onSuccess: (_, r) => setDeleted(r),
+  });
+  // Puts the deleted reading back as it was: the same moment, distance, value, set-up, meter and note.
+  const restore = useApiMutation(
+    (r: Reading) => ({
+      method: 'POST',
+      url: `/api/lamps/${r.lampId}/readings`,
+      body: {
+        takenAt: r.takenAt,
+        distance: r.distanceCm,
+        distanceUnit: 'cm',
+        value: r.value,
+        unit: r.unit,
+        through: r.through,
+        throughTransmission: r.throughTransmission,
+        warmedUp: r.warmedUp,
+        meter: r.meter,
+        note: r.note,
+      },
+    }),
+    { onSuccess: () => setDeleted(null) },
+  );
+  const error = del.error
+    ? del.error.message || 'The reading could not be deleted.'
+    : restore.error
+      ? restore.error.message || 'The reading could not be restored.'
+      : null;
 
-  async function remove(r: Reading) {
+  function remove(r: Reading) {
     if (!window.confirm(`Delete the reading of ${when(r.takenAt)} (${formatValue(r.value, r.unit)})?`))
       return;
-    setError(null);
-    try {
-      await sendJson('DELETE', `/api/readings/${r.id}`);
-      setDeleted(r);
-      router.refresh();
-    } catch (e) {
-      setError(e instanceof ApiClientError ? e.message : 'The reading could not be deleted.');
-    }
+    restore.reset();
+    del.mutate(r);
   }
 
-  async function undo() {
+  function undo() {
     if (!deleted) return;
-    try {
-      await sendJson('POST', `/api/lamps/${deleted.lampId}/readings`, {
-        takenAt: deleted.takenAt,
-        distance: deleted.distanceCm,
-        distanceUnit: 'cm',
-        value: deleted.value,
-        unit: deleted.unit,
-        through: deleted.through,
-        throughTransmission: deleted.throughTransmission,
-        warmedUp: deleted.warmedUp,
-        meter: deleted.meter,
-        note: deleted.note,
-      });
-      setDeleted(null);
-      router.refresh();
-    } catch (e) {
-      setError(e instanceof ApiClientError ? e.message : 'The reading could not be restored.');
-    }
+    del.reset();
+    restore.mutate(deleted);
   }
 
   const columns: (TableColumn<Reading> | false)[] = [

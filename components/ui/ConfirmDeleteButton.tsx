@@ -1,19 +1,19 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
-import { useState } from 'react';
-import { sendJson } from './api-client';
 import { button } from './styles';
+import { useApiMutation } from './useApiMutation';
 
 /**
  * Deletes a thing after a plain confirmation that says what happens, then opens the list it was in.
- * The error, if any, is shown beside the button.
+ * The error, if any (the server may refuse while other things use it), is shown beside the button.
  */
 export function ConfirmDeleteButton({
   url,
   confirm,
   then,
   label = 'Delete',
+  busyLabel = 'Deleting…',
   failure,
 }: {
   /** The DELETE route. */
@@ -23,32 +23,28 @@ export function ConfirmDeleteButton({
   /** Where to go once deleted. */
   then: string;
   label?: string;
+  busyLabel?: string;
   failure: string;
 }) {
   const router = useRouter();
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
-  async function remove() {
-    if (!window.confirm(confirm)) return;
-    setBusy(true);
-    setError(null);
-    try {
-      await sendJson('DELETE', url);
-      router.push(then);
-      router.refresh();
-    } catch (e) {
-      setError(e instanceof Error ? e.message : failure);
-      setBusy(false);
-    }
-  }
+  const remove = useApiMutation(() => ({ method: 'DELETE', url }), { onSuccess: () => router.push(then) });
+  // Pending until the next page replaces this one: the button must not offer a second delete.
+  const busy = remove.isPending || remove.isSuccess;
   return (
     <span className="inline-flex flex-col items-end">
-      <button type="button" className={button.secondary} onClick={remove} disabled={busy}>
-        {busy ? 'Deleting…' : label}
+      <button
+        type="button"
+        className={button.secondary}
+        onClick={() => {
+          if (window.confirm(confirm)) remove.mutate();
+        }}
+        disabled={busy}
+      >
+        {busy ? busyLabel : label}
       </button>
-      {error && (
-        <span role="alert" className="mt-1 text-caption text-ember-700">
-          {error}
+      {remove.error && (
+        <span role="alert" className="mt-1 max-w-xs text-right text-caption text-ember-700">
+          {remove.error.message || failure}
         </span>
       )}
     </span>

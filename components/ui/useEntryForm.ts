@@ -3,7 +3,7 @@
 import { useRouter } from 'next/navigation';
 import { useEffect, useState, type FormEvent } from 'react';
 import type { z } from 'zod';
-import { ApiClientError, sendJson } from './api-client';
+import { useApiMutation } from './useApiMutation';
 
 /** Messages by field path (`baskingSurfaceC.min`, `sources.uvbAt30`), as the API's schema names them. */
 export type FieldErrors = Record<string, string>;
@@ -42,7 +42,6 @@ export function useEntryForm<Draft, Saved extends { id: number }>({
   const [draft, setDraft] = useState<Draft>(initial);
   const [errors, setErrors] = useState<FieldErrors>({});
   const [general, setGeneral] = useState<string | null>(null);
-  const [saving, setSaving] = useState(false);
   const [dirty, setDirty] = useState(false);
 
   useEffect(() => {
@@ -52,7 +51,20 @@ export function useEntryForm<Draft, Saved extends { id: number }>({
     return () => window.removeEventListener('beforeunload', warn);
   }, [dirty]);
 
-  async function save(payload: unknown): Promise<void> {
+  const write = useApiMutation<unknown, Saved>(
+    (body) =>
+      updatePath
+        ? { method: 'PATCH', url: updatePath, body }
+        : { method: 'POST', url: createPath, body: { ...createExtra, ...(body as object) } },
+    {
+      onSuccess: (saved) => {
+        setDirty(false);
+        router.push(savedHref(saved));
+      },
+    },
+  );
+
+  function save(payload: unknown): void {
     const parsed = schema.safeParse(payload);
     if (!parsed.success) {
       const next: FieldErrors = {};
@@ -63,19 +75,12 @@ export function useEntryForm<Draft, Saved extends { id: number }>({
     }
     setErrors({});
     setGeneral(null);
-    setSaving(true);
-    try {
-      const saved = updatePath
-        ? await sendJson<Saved>('PATCH', updatePath, parsed.data)
-        : await sendJson<Saved>('POST', createPath, { ...createExtra, ...(parsed.data as object) });
-      setDirty(false);
-      router.push(savedHref(saved));
-      router.refresh();
-    } catch (err) {
-      if (err instanceof ApiClientError && err.field) setErrors({ [err.field]: err.message });
-      setGeneral(err instanceof Error ? err.message : failure);
-      setSaving(false);
-    }
+    write.mutate(parsed.data, {
+      onError: (err) => {
+        if (err.field) setErrors({ [err.field]: err.message });
+        setGeneral(err.message || failure);
+      },
+    });
   }
 
   return {
@@ -89,10 +94,11 @@ export function useEntryForm<Draft, Saved extends { id: number }>({
     reshow: (next: Draft) => setDraft(next),
     errors,
     general,
-    saving,
+    // Stays on after a save succeeded, until the saved entry's page replaces the form.
+    saving: write.isPending || write.isSuccess,
     submit: (e: FormEvent) => {
       e.preventDefault();
-      void save(toPayload(draft));
+      save(toPayload(draft));
     },
     cancel: () => router.back(),
   };

@@ -9,7 +9,7 @@ import { Notice } from '@/components/ui/Notice';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { button, link } from '@/components/ui/styles';
-import { QueryProvider } from '@/components/designs/QueryProvider';
+import { QueryProvider } from '@/components/ui/QueryProvider';
 import { listEnclosures } from '@/lib/api/enclosure-list';
 import { FIRST_HINT_COOKIE, firstDesignHint } from '@/lib/demo/first-hint';
 import { memberViews } from '@/lib/api/views';

@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import Link from '@/components/ui/Link';
-import { QueryProvider } from '@/components/designs/QueryProvider';
+import { QueryProvider } from '@/components/ui/QueryProvider';
 import { ExampleDataMark } from '@/components/lamp-log/ExampleDataMark';
 import { LampLogTable } from '@/components/lamp-log/LampLogTable';
 import { EmptyState } from '@/components/ui/EmptyState';

@@ -2,11 +2,12 @@
 
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { useState, type ReactNode } from 'react';
-import { ApiClientError } from '@/components/ui/api-client';
+import { ApiClientError } from './api-client';
 
 /**
- * Data fetching for the designs sections only (the rest of the app does not need it). One client per
- * mounted section tree, created once, so navigations inside it keep their cache.
+ * TanStack Query for a tree: one client, created once, so navigations inside it keep their cache. The
+ * signed-in layout has one for the writes every page makes (`useApiMutation`); the lists and designs
+ * sections that cache reads mount their own around themselves, so a list never outlives its page.
  */
 export function QueryProvider({ children }: { children: ReactNode }) {
   const [client] = useState(
