@@ -76,6 +76,17 @@ describe('lamp log', () => {
     const newest = page.getByTestId('readings-table').locator('tbody tr').first();
     await expect.poll(() => newest.innerText(), { timeout: 10_000 }).toMatch(/24\.5 µW\/cm².*12 in/s);
     expect(await newest.getByTestId('reading-setup').innerText()).toBe('through the lid (60 %), warmed up');
+
+    // Deleting it (after the confirmation) takes it off the chart; Undo puts it back as it was.
+    page.once('dialog', (d) => void d.accept());
+    await newest.getByRole('button', { name: /^Delete the reading of / }).click();
+    await page.getByText('Reading deleted.').waitFor();
+    await expect.poll(() => points.count(), { timeout: 60_000 }).toBe(before);
+    await page.getByRole('button', { name: 'Undo' }).click();
+    await expect.poll(() => points.count(), { timeout: 60_000 }).toBe(before + 1);
+    await page.getByText('Reading deleted.').waitFor({ state: 'detached' });
+    await expect.poll(() => newest.innerText(), { timeout: 10_000 }).toMatch(/24\.5 µW\/cm².*12 in/s);
+    expect(await newest.getByTestId('reading-setup').innerText()).toBe('through the lid (60 %), warmed up');
     expect(session.pageErrors()).toEqual([]);
   });
 
