@@ -71,6 +71,15 @@ export const CAUTIONS: Record<CautionId, Caution> = {
   },
 };
 
+/**
+ * What a share page and a report say above the safety checks when no species sheet is attached (the
+ * checks then use general limits: see the engine's assess()).
+ */
+export const NO_SPECIES_SAFETY_LEAD =
+  'No species is attached to this enclosure, so there is no species check. Lamps within reach (also of an animal ' +
+  'that climbs the mesh), UV near the eyes and surfaces too hot to touch are checked against general limits; attach ' +
+  'a species sheet to check basking UV, shade, hot spot and cool end against its needs.';
+
 /** The general control advice: every technology grouped by how it may be controlled (LAMP_CONTROL). */
 function controlAdviceForAll(): string {
   return (

@@ -41,8 +41,9 @@ export {
 export type { Assessment, Finding, FindingStatus, FindingWhere, Segment } from './assess/types';
 export { assess, monthsUntilUnmet } from './assess/assess';
 export { baskingUviRange, isShadeZone, targetZone, LOW_MELANIN_CAUTION } from './assess/basking-range';
-export { neededBaskingCm } from './assess/sharedBasking';
+export { centreX as segmentsCentreX, neededBaskingCm } from './assess/sharedBasking';
 export { reachableSurfaces, type SurfaceSample } from './assess/surfaces';
+export { climberMeshRisks, type MeshRisk } from './assess/safetyFindings';
 export * as ASSESSMENT_THRESHOLDS from './assess/thresholds';
 export { speciesSheetSchema } from './model/species';
 export { handleRequest } from './worker/handle';

@@ -1,6 +1,6 @@
 import type { Assessment, FindingStatus } from '@/simulation';
 import type { SpeciesSource } from '@/lib/species/schema';
-import { FINDING_STATUS } from '@/shared/finding-status';
+import { FINDING_STATUS, worstFirst } from '@/shared/finding-status';
 import { numberLines, sourcesFor } from './finding-numbers';
 
 const BADGE: Record<FindingStatus, string> = {
@@ -17,21 +17,25 @@ export function FindingList({
   assessment,
   sources = [],
   speciesName,
+  title = `Species check${speciesName ? `: ${speciesName}` : ''}`,
+  lead,
 }: {
   assessment: Pick<Assessment, 'findings' | 'overall'>;
   sources?: SpeciesSource[];
   speciesName?: string;
+  title?: string;
+  /** A sentence under the heading (what was checked against what). */
+  lead?: string;
 }) {
   return (
-    <section aria-label="Species check" className="space-y-3">
+    <section aria-label={title} className="space-y-3">
       <div className="flex flex-wrap items-center gap-2">
-        <h2 className="text-lead font-semibold text-basalt-900">
-          Species check{speciesName ? `: ${speciesName}` : ''}
-        </h2>
+        <h2 className="text-lead font-semibold text-basalt-900">{title}</h2>
         <StatusBadge status={assessment.overall} />
       </div>
+      {lead && <p className="text-body text-basalt-700">{lead}</p>}
       <ul className="space-y-2">
-        {assessment.findings.map((f) => {
+        {worstFirst(assessment.findings).map((f) => {
           const from = sourcesFor(f.id, sources);
           return (
             <li key={f.id} className="rounded-md border border-basalt-200 bg-white px-4 py-3">

@@ -34,7 +34,7 @@ import { createAtom } from './state/atom';
 import { pickPrefs, type EnclosurePhotos, type StoredPrefs } from './state/session';
 import { StudioStore } from './state/store';
 import type { Design, StudioSpecies } from './state/types';
-import { samePhysics } from '@/simulation';
+import { climberMeshRisks, samePhysics } from '@/simulation';
 import { formatStudioView, STUDIO_VIEW_COOKIE } from '@/shared/designs/studio-view-cookie';
 import type { StudioPicture } from '@/shared/designs/studio-field';
 import { FirstFieldPicture } from './FirstField';
@@ -207,8 +207,10 @@ function StudioEditor({
 
   const sim = useSimulation(store, species);
   const speciesId = useStudio(store, (s) => s.session.speciesId);
+  // A finding that holds only if the animal climbs (no sheet chosen) is listed under Check, not raised
+  // as a banner over every design with a lamp resting on its mesh lid.
   const safety = (sim.assessment?.findings ?? []).filter(
-    (f) => SAFETY_FINDINGS.has(f.id) && f.status !== 'pass',
+    (f) => SAFETY_FINDINGS.has(f.id) && f.status !== 'pass' && !f.ifClimbs,
   );
   const { bands, legend } = useBands(sim.grid, field, tempUnit, fieldsVisible, firstBands);
   const highlighted = useMemo(() => {
@@ -221,6 +223,11 @@ function StudioEditor({
     return { findingId: f.id, title: f.title, shape };
   }, [sim.assessment, highlightId]);
   const highlight = highlighted?.shape ?? null;
+  const basking = sim.assessment?.findings.find((f) => f.id === 'shared-basking');
+  // A climbing species holds on to every mesh: each is marked with the lamps that make it a risk.
+  const climbs = species.find((s) => s.id === speciesId)?.climbs === true;
+  const designNow = useStudio(store, (s) => s.history.present);
+  const meshRisks = useMemo(() => (climbs ? climberMeshRisks(designNow) : null), [climbs, designNow]);
   const summaryId = useId();
   const photo = useBackdropImage(store);
 
@@ -270,10 +277,10 @@ function StudioEditor({
               highlight={highlight}
               summaryId={summaryId}
               photo={photo}
-              basking={sim.assessment?.findings.find((f) => f.id === 'shared-basking')}
-              climbs={species.find((s) => s.id === speciesId)?.climbs === true}
+              basking={basking}
+              meshRisks={meshRisks}
             />
-            <ObjectSummary id={summaryId} highlight={highlighted} />
+            <ObjectSummary id={summaryId} highlight={highlighted} basking={basking} meshRisks={meshRisks} />
             {/* Under an open sheet the canvas is short: the Fields tab has the legend then. */}
             {fieldsVisible && !(panelOpen && !wide) && (
               <CanvasLegend field={field} temp={tempUnit} legend={legend} />

@@ -20,7 +20,9 @@ describe('engine tasks on worker threads', () => {
       const there = await runEngineTask('sharedView', { design, field: 'tempC', sheet: null }, ROOMY);
       expect(there.figures).toEqual(here.sim.figures);
       expect(there.scale).toEqual(here.view('tempC').scale);
-      expect(there.assessment).toBeNull();
+      // With no species the safety checks still run, as on this thread.
+      expect(there.assessment).toEqual(here.assessment(null));
+      expect(there.assessment.findings.map((f) => f.id)).toContain('lamp-in-reach');
       // The page's text carries no bands: they travel only with the picture.
       expect(Object.keys(there).sort()).toEqual(['assessment', 'figures', 'scale']);
       const picture = await runEngineTask('fieldPicture', { design, field: 'tempC' }, ROOMY);

@@ -20,7 +20,7 @@ import type { KeyFigures } from '@/shared/designs/figures';
 import type { Assessment, Design, FieldName, LampObject, SpeciesSheet } from '@/simulation';
 
 /** What the share page prints around its picture: the field's scale (for the key), figures, species check. */
-export type SharedView = { scale: FieldView['scale']; figures: KeyFigures; assessment: Assessment | null };
+export type SharedView = { scale: FieldView['scale']; figures: KeyFigures; assessment: Assessment };
 /** What a field picture draws: the scale, the contour bands and the figures its markers come from. */
 export type FieldPicture = FieldView & { figures: KeyFigures };
 
@@ -44,7 +44,8 @@ export const engineTasks = {
     return {
       scale: computed.view(input.field).scale,
       figures: computed.sim.figures,
-      assessment: input.sheet ? computed.assessment(input.sheet) : null,
+      // With no species attached the safety checks still run, with general limits.
+      assessment: computed.assessment(input.sheet),
     };
   },
 

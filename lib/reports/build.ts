@@ -41,7 +41,8 @@ export async function reportPdf(
   const { sim } = computed;
   const { scale } = computed.view(opts.field);
   const png = encodePng(renderFieldRaster(subject.design, sim.grid, scale));
-  const assessment = opts.species ? computed.assessment(opts.species.sheet) : null;
+  // Without a species the safety checks still run, with general limits.
+  const assessment = computed.assessment(opts.species?.sheet ?? null);
   return renderReportPdf({
     variantName: subject.variantName,
     designName: subject.designName,
@@ -55,10 +56,10 @@ export async function reportPdf(
     scale,
     png,
     figures: sim.figures,
-    species:
-      opts.species && assessment
-        ? { name: opts.species.name, findings: assessment.findings, overall: assessment.overall }
-        : null,
+    species: opts.species
+      ? { name: opts.species.name, findings: assessment.findings, overall: assessment.overall }
+      : null,
+    safety: opts.species ? null : { findings: assessment.findings, overall: assessment.overall },
     lamps: lampRows(subject.design),
     design: subject.design,
   });

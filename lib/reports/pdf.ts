@@ -9,7 +9,7 @@ import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from 'pdf
 import { sizeBoth, tempBoth } from '@/shared/units';
 import type { KeyFigures } from '@/shared/designs/figures';
 import { bandLabel, type FieldScale } from '@/shared/field-scale';
-import { applicableCautions } from '@/shared/cautions';
+import { applicableCautions, NO_SPECIES_SAFETY_LEAD } from '@/shared/cautions';
 import type { Design } from '@/simulation';
 import { EXAMPLE_DATA_NOTE } from '@/shared/example-data';
 import { DEFER_NOTE, ESTIMATE_NOTE } from './cautions';
@@ -38,6 +38,8 @@ export type ReportInput = {
   png: Uint8Array;
   figures: KeyFigures;
   species: { name: string; findings: ReportFinding[]; overall: ReportFinding['status'] } | null;
+  /** With no species: the safety checks against general limits. */
+  safety?: { findings: ReportFinding[]; overall: ReportFinding['status'] } | null;
   lamps: LampRow[];
   /** The design, for choosing which cautions apply. */
   design: Pick<Design, 'objects'>;
@@ -197,14 +199,15 @@ export async function renderReportPdf(r: ReportInput): Promise<Uint8Array> {
   );
 
   w.heading('Assessment');
-  if (!r.species) {
-    w.text(
-      'No species is attached to this enclosure, so there is no assessment. Attach a species sheet to check basking UV, shade, hot spot and cool end against its needs.',
-      { color: MUTED },
-    );
-  } else {
+  const checked = r.species ?? r.safety;
+  if (!r.species) w.text(NO_SPECIES_SAFETY_LEAD, { color: MUTED, gap: 4 });
+  if (r.species) {
     w.text(`Species: ${r.species.name} — overall ${STATUS_WORD[r.species.overall]}`, { bold: true, gap: 4 });
-    for (const finding of r.species.findings) {
+  } else if (r.safety) {
+    w.text(`Safety checks — overall ${STATUS_WORD[r.safety.overall]}`, { bold: true, gap: 4 });
+  }
+  if (checked) {
+    for (const finding of checked.findings) {
       w.text(`${STATUS_WORD[finding.status]}  ${finding.title}`, {
         bold: true,
         color: STATUS_COLOR[finding.status],
@@ -230,8 +233,8 @@ export async function renderReportPdf(r: ReportInput): Promise<Uint8Array> {
   w.heading('Cautions');
   const cautions = applicableCautions({
     design: r.design,
-    assessment: r.species
-      ? { findings: r.species.findings.map((f) => ({ ...f, id: f.id ?? '', numbers: f.numbers ?? {} })) }
+    assessment: checked
+      ? { findings: checked.findings.map((f) => ({ ...f, id: f.id ?? '', numbers: f.numbers ?? {} })) }
       : null,
   }).sort((a, b) => Number(b.urgent) - Number(a.urgent));
   for (const { caution, urgent } of cautions) {

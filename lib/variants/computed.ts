@@ -23,8 +23,8 @@ export type Computed = {
   sim: Simulated;
   /** The field's scale (this design alone) and its contour bands on that scale. */
   view(field: FieldName): FieldView;
-  /** The species check of this design against the sheet. */
-  assessment(sheet: SpeciesSheet): Assessment;
+  /** The species check of this design against the sheet; with no sheet, the general safety checks. */
+  assessment(sheet: SpeciesSheet | null): Assessment;
 };
 
 type Entry = {
@@ -64,7 +64,7 @@ export function computedFor(design: Design, months = 0): Computed {
       return v;
     },
     assessment(sheet) {
-      const k = digest(sheet);
+      const k = sheet ? digest(sheet) : 'no sheet';
       let a = entry.assessments.get(k);
       if (!a) {
         a = assessFor(design, sheet, months);

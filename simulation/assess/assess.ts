@@ -31,7 +31,10 @@ interface Sampled {
 }
 
 function sample(design: Design, species?: SpeciesSheet): Sampled {
-  const samples = reachableSurfaces(design, undefined, { climbs: species?.climbs === true });
+  // Without a sheet nobody has said whether the animal climbs: the mesh a climber would hang from is
+  // sampled too, and judged apart (see the safety branch of assessSampled).
+  const climbs = species ? species.climbs === true : true;
+  const samples = reachableSurfaces(design, undefined, { climbs });
   return { samples, lamps: new FieldSolver().probeByLamp(design, samples) };
 }
 
@@ -86,12 +89,37 @@ function assessSampled(
         ...safetyFindings(design, s.samples, { climbs: species.climbs === true }),
         ...depthFindings(design),
       ]
-    : [
-        ...safetyFindings(design, s.samples),
-        hotSurfaceFinding(s.samples, tempC, roomC, lamps),
-        ...depthFindings(design),
-      ];
+    : safetyWithoutSheet(design, s.samples, tempC, roomC, lamps);
   return { findings, overall: worst(findings.map((f) => f.status)) };
+}
+
+/**
+ * The safety checks with general limits. Nobody has said whether the animal climbs, so the surfaces
+ * off the mesh are judged as for any animal, and the mesh a climber would hang from (the samples of
+ * kind 'screen', only sampled for climbers) is checked too: what is a burn only for a climber is an
+ * attention, never a pass.
+ */
+function safetyWithoutSheet(
+  design: Design,
+  samples: SurfaceSample[],
+  tempC: number[],
+  roomC: number,
+  lamps: ReturnType<typeof heatLamps>,
+): Finding[] {
+  const off = samples.flatMap((p, k) => (p.kind === 'screen' ? [] : [k]));
+  const mesh = samples.flatMap((p, k) => (p.kind === 'screen' ? [k] : []));
+  const offSamples = off.map((k) => samples[k]!);
+  return [
+    ...safetyFindings(design, offSamples, { climbSamples: samples }),
+    hotSurfaceFinding(
+      offSamples,
+      off.map((k) => tempC[k]!),
+      roomC,
+      lamps,
+      mesh.length ? { samples: mesh.map((k) => samples[k]!), tempC: mesh.map((k) => tempC[k]!) } : undefined,
+    ),
+    ...depthFindings(design),
+  ];
 }
 
 /**

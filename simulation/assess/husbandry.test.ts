@@ -6,6 +6,7 @@ import { describe, expect, it } from 'vitest';
 import { assess } from './assess';
 import { reachableSurfaces } from './surfaces';
 import { neededBaskingCm } from './sharedBasking';
+import { climberMeshRisks } from './safetyFindings';
 import type { Design, DesignObject } from '../model/schema';
 import type { SpeciesSheet } from '../model/species';
 import { emptyDesign } from '../testing/fixtures';
@@ -153,6 +154,23 @@ describe('climbers and mesh', () => {
     expect(byId(walker, 'eye-safety')!.status).toBe('pass');
   });
 
+  it('names, for each mesh a climber holds on to, the lamps that make it a burn or a UV risk', () => {
+    // Reach 15 cm, eyes 20 cm (common practice, no published source); the halogen rests 3 cm above the
+    // lid, the tube 2 cm above it.
+    const [heat] = climberMeshRisks(onMesh('halogen'));
+    expect(heat!.screenId).toBe('lid');
+    expect(heat!.burn.map((b) => b.lampId)).toEqual(['lamp']);
+    expect(heat!.burn[0]!.distanceCm).toBeCloseTo(3, 0);
+    expect(heat!.uv).toEqual([]);
+    const [uv] = climberMeshRisks(onMesh('t5'));
+    expect(uv!.uv.map((b) => b.lampId)).toEqual(['lamp']);
+    expect(uv!.burn).toEqual([]);
+    // 25 cm above the lid: no risk to name.
+    const high = onMesh('halogen');
+    high.objects[0] = { ...(high.objects[0] as Extract<DesignObject, { type: 'lamp' }>), y: 145 };
+    expect(climberMeshRisks(high)).toEqual([{ screenId: 'lid', burn: [], uv: [] }]);
+  });
+
   it('treats a wire guard around a bulb as screens: its outside is reachable for a climber', () => {
     const guard: DesignObject[] = [
       { type: 'screen', id: 'g-left', x1: 20, y1: 100, x2: 20, y2: 118 },
@@ -198,15 +216,48 @@ describe('safety without a species sheet', () => {
     expect(a.overall).toBe('fail');
   });
 
-  it('passes a design with everything out of reach', () => {
+  it('passes a design with everything out of reach, even of a climber on the lid', () => {
+    // 30 cm above the mesh: beyond the 15 cm reach distance (common practice, no published source), and
+    // the mesh under it stays below the 55 °C general limit for burns (from memory).
     const d: Design = {
       ...emptyDesign(90, 45, 45, 24),
       objects: [
-        { type: 'lamp', id: 'heat', tech: 'halogen', form: 'bulb', x: 45, y: 48, watts: 50, beamDeg: 30 },
+        { type: 'lamp', id: 'heat', tech: 'halogen', form: 'bulb', x: 45, y: 75, watts: 50, beamDeg: 30 },
         { type: 'screen', id: 'lid', x1: 0, y1: 45, x2: 90, y2: 45 },
       ],
     };
     const a = assess(d, undefined);
     expect(a.overall).toBe('pass');
+  });
+
+  it('does not pass a lamp on the mesh when nobody has said whether the animal climbs', () => {
+    // The chameleon's set-up above with no sheet: the halogen 3 cm above the lid, a UV tube 2 cm above.
+    for (const tech of ['halogen', 't5'] as const) {
+      const a = assess(onMesh(tech), undefined);
+      const reach = byId(a, 'lamp-in-reach')!;
+      expect(reach.status, reach.message).toBe('attention');
+      expect(reach.message).toMatch(
+        /^lamp is within 15 cm \(about [23] cm\) of mesh an animal could hang from/,
+      );
+      expect(reach.message).toMatch(/for a climbing species that is a burn/);
+      expect(reach.where).toEqual({ kind: 'object', objectIds: ['lamp'] });
+      // Marked as holding only if the animal climbs (the studio lists it, without a banner).
+      expect(reach.ifClimbs).toBe(true);
+      expect(byId(a, 'eye-safety')!.status).toBe(tech === 't5' ? 'attention' : 'pass');
+      expect(a.overall).toBe('attention');
+    }
+    // The mesh under the halogen is far above the 55 °C general limit for burns (from memory), the
+    // branch is not: an attention that says so, with the mesh marked, never a pass.
+    const hot = byId(assess(onMesh('halogen'), undefined), 'hot-surface')!;
+    expect(hot.status).toBe('attention');
+    expect(hot.message).toMatch(/^Mesh an animal could hang from gets over 100 °C under a lamp/);
+    expect(hot.numbers.hotC).toBeLessThan(55);
+    expect(hot.numbers.meshHotC).toBeGreaterThan(100);
+    expect(hot.where?.kind).toBe('segments');
+    // A sheet settles it: a non-climber's mesh guards, a climber's fails.
+    expect(byId(assess(onMesh('halogen'), { ...climber, climbs: false }), 'lamp-in-reach')!.status).toBe(
+      'pass',
+    );
+    expect(byId(assess(onMesh('halogen'), climber), 'lamp-in-reach')!.status).toBe('fail');
   });
 });

@@ -9,7 +9,7 @@ import type { LampTech } from '../model/techs';
 import { controlAdvice } from '../model/control';
 import { tooHotAdvice } from './heatFindings';
 import type { Finding } from './types';
-import { runsOf, type SurfaceSample } from './surfaces';
+import { reachableSurfaces, runsOf, type SurfaceSample } from './surfaces';
 import { ESTIMATE_TEMP, GENERAL_HOT_SURFACE_C, LAMP_REACH_CM, UV_EYE_CM } from './thresholds';
 import { f0, f1 } from './format';
 import { shortWaveCaution } from './uvTargets';
@@ -79,12 +79,18 @@ export function unguardedDistances(
 const HEAT_TECHS_NOTE = 'Heat and UV lamps can burn an animal that touches them or sits right under them.';
 const DISTANCE_NOTE = 'Distances are estimates from the drawing: check them in the real enclosure.';
 
+/**
+ * `opts.climbs` is the sheet's word. Without a sheet (`climbSamples` given: the surfaces a climber would
+ * reach) nobody has said whether the animal climbs, so a lamp that is out of reach only because mesh is
+ * between is not a pass: it is an attention that names the lamp, since for a climber it is a burn.
+ */
 export function safetyFindings(
   design: Design,
   samples: SurfaceSample[],
-  opts: { climbs?: boolean } = {},
+  opts: { climbs?: boolean; climbSamples?: SurfaceSample[] } = {},
 ): Finding[] {
   const near = unguardedDistances(design, samples, opts);
+  const ifClimbs = opts.climbSamples ? unguardedDistances(design, opts.climbSamples, { climbs: true }) : [];
   const guard = opts.climbs
     ? 'glass guard (mesh is no guard for a climber: it holds on to the mesh)'
     : 'mesh or glass guard';
@@ -93,24 +99,62 @@ export function safetyFindings(
     (n) => n.heat && design.objects.some((o) => o.id === n.id && o.type === 'lamp' && o.form === 'bulb'),
   );
   const closest = Math.min(Infinity, ...reach.map((n) => n.distance));
+  const reachIfClimbs = ifClimbs.filter(
+    (n) => n.distance < LAMP_REACH_CM && !reach.some((r) => r.id === n.id),
+  );
+  const ifClimbsOnly = reach.length === 0 && reachIfClimbs.length > 0;
+  const cc = Math.min(Infinity, ...reachIfClimbs.map((n) => n.distance));
   const out: Finding[] = [
-    {
-      id: 'lamp-in-reach',
-      status: reach.length === 0 ? 'pass' : hotLamps.length ? 'fail' : 'attention',
-      title: 'Lamps out of reach',
-      message:
-        reach.length === 0
-          ? `No lamp is within ${LAMP_REACH_CM} cm of a surface the animal can reach without a ${guard} between (common practice, no published source). Climbing animals reach further than you think. ${DISTANCE_NOTE}`
-          : `${reach.map((n) => n.id).join(', ')} ${reach.length === 1 ? 'is' : 'are'} within ${LAMP_REACH_CM} cm (closest about ${f0(closest)} cm) of a reachable surface with no ${guard} between. ${HEAT_TECHS_NOTE} ${opts.climbs ? `Raise the lamp at least ${LAMP_REACH_CM} cm above any mesh the animal can climb, or give the guard room so the lamp stays ${LAMP_REACH_CM} cm from its outside` : 'Fit a lamp guard or move the lamp out of reach'} (common practice, no published source). ${DISTANCE_NOTE}`,
-      numbers: {
-        reachCm: LAMP_REACH_CM,
-        ...(Number.isFinite(closest) ? { closestCm: closest } : {}),
-        lamps: reach.length,
-      },
-      where: reach.length ? { kind: 'object', objectIds: reach.map((n) => n.id) } : undefined,
-    },
+    ifClimbsOnly
+      ? {
+          id: 'lamp-in-reach',
+          status: 'attention',
+          title: 'Lamps out of reach',
+          message: `${reachIfClimbs.map((n) => n.id).join(', ')} ${reachIfClimbs.length === 1 ? 'is' : 'are'} within ${LAMP_REACH_CM} cm (about ${f0(cc)} cm) of mesh an animal could hang from. Mesh guards an animal that stays off it, but a climber holds on to it: for a climbing species that is a burn. Choose the species sheet, or raise the lamp at least ${LAMP_REACH_CM} cm above any mesh the animal can climb (common practice, no published source). ${DISTANCE_NOTE}`,
+          numbers: { reachCm: LAMP_REACH_CM, closestCm: cc, lamps: reachIfClimbs.length },
+          ifClimbs: true,
+          where: { kind: 'object', objectIds: reachIfClimbs.map((n) => n.id) },
+        }
+      : {
+          id: 'lamp-in-reach',
+          status: reach.length === 0 ? 'pass' : hotLamps.length ? 'fail' : 'attention',
+          title: 'Lamps out of reach',
+          message:
+            reach.length === 0
+              ? `No lamp is within ${LAMP_REACH_CM} cm of a surface the animal can reach without a ${guard} between (common practice, no published source). Climbing animals reach further than you think. ${DISTANCE_NOTE}`
+              : `${reach.map((n) => n.id).join(', ')} ${reach.length === 1 ? 'is' : 'are'} within ${LAMP_REACH_CM} cm (closest about ${f0(closest)} cm) of a reachable surface with no ${guard} between. ${HEAT_TECHS_NOTE} ${opts.climbs ? `Raise the lamp at least ${LAMP_REACH_CM} cm above any mesh the animal can climb, or give the guard room so the lamp stays ${LAMP_REACH_CM} cm from its outside` : 'Fit a lamp guard or move the lamp out of reach'} (common practice, no published source). ${DISTANCE_NOTE}`,
+          numbers: {
+            reachCm: LAMP_REACH_CM,
+            ...(Number.isFinite(closest) ? { closestCm: closest } : {}),
+            lamps: reach.length,
+          },
+          where: reach.length ? { kind: 'object', objectIds: reach.map((n) => n.id) } : undefined,
+        },
   ];
+  out.push(...eyeFindings(near, ifClimbs));
+  out.push(...shortWaveFindings(design));
+  return out;
+}
+
+/** UV near the eyes; `ifClimbs` (no sheet) adds the lamps a climber on the mesh would be near. */
+function eyeFindings(near: Near[], ifClimbs: Near[]): Finding[] {
   const eye = near.filter((n) => n.uv && n.distance < UV_EYE_CM);
+  const climbEye = ifClimbs.filter((n) => n.uv && n.distance < UV_EYE_CM && !eye.some((e) => e.id === n.id));
+  if (eye.length === 0 && climbEye.length > 0) {
+    const c = Math.min(...climbEye.map((n) => n.distance));
+    return [
+      {
+        id: 'eye-safety',
+        status: 'attention',
+        title: 'UV and the eyes',
+        message: `The UV lamp ${climbEye.map((n) => n.id).join(', ')} is within ${UV_EYE_CM} cm (about ${f0(c)} cm) of mesh an animal could hang from. A climber's eyes there get UV far above its zone, and strong UV close up can hurt the eyes: choose the species sheet, or mount the lamp higher (common practice, no published source). ${DISTANCE_NOTE}`,
+        numbers: { eyeCm: UV_EYE_CM, closestCm: c, lamps: climbEye.length },
+        ifClimbs: true,
+        where: { kind: 'object', objectIds: climbEye.map((n) => n.id) },
+      },
+    ];
+  }
+  const out: Finding[] = [];
   const eyeClosest = Math.min(Infinity, ...eye.map((n) => n.distance));
   out.push({
     id: 'eye-safety',
@@ -126,7 +170,6 @@ export function safetyFindings(
     },
     where: eye.length ? { kind: 'object', objectIds: eye.map((n) => n.id) } : undefined,
   });
-  out.push(...shortWaveFindings(design));
   return out;
 }
 
@@ -166,6 +209,8 @@ export function hotSurfaceFinding(
   tempC: ArrayLike<number>,
   roomC: number,
   lamps: { tech: LampTech; name: string }[],
+  /** The mesh a climber would hang from, judged apart: too hot there is an attention. */
+  mesh?: { samples: SurfaceSample[]; tempC: ArrayLike<number> },
 ): Finding {
   let hot = samples.length ? -Infinity : roomC;
   samples.forEach((_, k) => {
@@ -173,6 +218,22 @@ export function hotSurfaceFinding(
   });
   const bad = hot > GENERAL_HOT_SURFACE_C;
   const segs = runsOf(samples, (k) => tempC[k]! > GENERAL_HOT_SURFACE_C);
+  let meshHot = -Infinity;
+  mesh?.samples.forEach((_, k) => {
+    meshHot = Math.max(meshHot, mesh.tempC[k]!);
+  });
+  if (!bad && mesh && meshHot > GENERAL_HOT_SURFACE_C) {
+    const meshSegs = runsOf(mesh.samples, (k) => mesh.tempC[k]! > GENERAL_HOT_SURFACE_C);
+    return {
+      id: 'hot-surface',
+      status: 'attention',
+      title: 'Surfaces too hot to touch',
+      message: `Mesh an animal could hang from gets ${meshHot > 100 ? 'over 100' : `about ${f1(meshHot)}`} °C under a lamp, above the ${f0(GENERAL_HOT_SURFACE_C)} °C general limit for burns (from memory); the surfaces off the mesh stay under it (hottest about ${f1(hot)} °C). For a climbing species that is a burn: ${tooHotAdvice(lamps)}.${lamps.length ? ` ${controlAdvice(lamps)}` : ''} Choose the species sheet for the full check. ${ESTIMATE_TEMP}`,
+      numbers: { hotC: hot, meshHotC: meshHot, limitC: GENERAL_HOT_SURFACE_C },
+      ifClimbs: true,
+      where: meshSegs.length ? { kind: 'segments', segments: meshSegs } : undefined,
+    };
+  }
   return {
     id: 'hot-surface',
     status: bad ? 'fail' : 'pass',
@@ -183,4 +244,40 @@ export function hotSurfaceFinding(
     numbers: { hotC: hot, limitC: GENERAL_HOT_SURFACE_C },
     where: segs.length ? { kind: 'segments', segments: segs } : undefined,
   };
+}
+
+/** What a climber hanging from one screen (a mesh lid, a wire guard) is near: the lamps in reach. */
+export interface MeshRisk {
+  screenId: string;
+  /** Heat bulbs within the reach distance of the screen's underside (a burn). */
+  burn: { lampId: string; distanceCm: number }[];
+  /** UV lamps within the eye distance of it (UV far above the zone, at the eyes). */
+  uv: { lampId: string; distanceCm: number }[];
+}
+
+/**
+ * For a climbing animal, every screen it can hold on to with the lamps near it, by the same reach rule
+ * as the safety findings (LAMP_REACH_CM, UV_EYE_CM; common practice, no published source). The studio
+ * marks each screen with it.
+ */
+export function climberMeshRisks(design: Design): MeshRisk[] {
+  const samples = reachableSurfaces(design, undefined, { climbs: true });
+  const out: MeshRisk[] = [];
+  for (const o of design.objects) {
+    if (o.type !== 'screen') continue;
+    const own = samples.filter((s) => s.surfaceId === o.id);
+    const near = own.length ? unguardedDistances(design, own, { climbs: true }) : [];
+    const bulb = (id: string) =>
+      design.objects.some((l) => l.id === id && l.type === 'lamp' && l.form === 'bulb');
+    out.push({
+      screenId: o.id,
+      burn: near
+        .filter((n) => n.heat && bulb(n.id) && n.distance < LAMP_REACH_CM)
+        .map((n) => ({ lampId: n.id, distanceCm: n.distance })),
+      uv: near
+        .filter((n) => n.uv && n.distance < UV_EYE_CM)
+        .map((n) => ({ lampId: n.id, distanceCm: n.distance })),
+    });
+  }
+  return out;
 }

@@ -51,7 +51,8 @@ export function longestRun(samples: SurfaceSample[], selected: (k: number) => bo
   return best;
 }
 
-function centreX(segs: Segment[]): number | null {
+/** Length-weighted middle (x, cm) of a set of segments; null when they have no length. */
+export function centreX(segs: Segment[]): number | null {
   let sum = 0;
   let len = 0;
   for (const s of segs) {

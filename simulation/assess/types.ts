@@ -28,6 +28,11 @@ export interface Finding {
    * surface temperature is met, and where both are (the studio draws the three).
    */
   basking?: { uv: Segment[]; heat: Segment[]; both: Segment[] };
+  /**
+   * Checked without a species sheet, this finding holds only if the animal climbs (a lamp near mesh it
+   * could hang from): the studio lists it under Check rather than as a banner.
+   */
+  ifClimbs?: true;
 }
 
 export interface Assessment {

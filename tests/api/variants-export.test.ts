@@ -139,6 +139,10 @@ describe('export', () => {
     // The basking tube is a fluorescent UV lamp: switched by a timer, never dimmed (common practice, no
     // published source).
     expect(text).toMatch(/by a timer\s+only/);
+    // With no species the safety checks still run, against general limits, and are printed.
+    expect(text).toMatch(/Safety checks — overall (Pass|Attention|Fail)/);
+    expect(text).toContain('Lamps out of reach');
+    expect(text).toContain('Surfaces too hot to touch');
     expect(text).not.toMatch(/Run every heat source on a thermostat/);
     expect(text).toMatch(/Hot spot \(warmest surface\)\s+[\d.]+ °C \([\d.]+ °F\)/);
   });
@@ -160,6 +164,7 @@ describe('export', () => {
     const text = pdfDrawnText(new Uint8Array(await r.res.arrayBuffer()));
     expect(text).toMatch(/Species: Bearded dragon — overall (Pass|Attention|Fail)/);
     expect(text).not.toContain('No species is attached');
+    expect(text).not.toContain('Safety checks — overall');
   });
 
   it('refuses an unknown format or field with 400', async () => {

@@ -51,7 +51,7 @@ describe('visitor journey', () => {
         expect(await res!.text()).not.toMatch(/<svg[^>]*role="img"/);
         expect(await main.innerText()).toMatch(/estimate/i);
         expect(await main.innerText()).toMatch(/verify it with a UV meter and a thermometer/);
-        const cautions = page.getByRole('region', { name: 'Safety' });
+        const cautions = page.getByRole('region', { name: 'Safety', exact: true });
         expect(await cautions.count()).toBe(1);
         expect(await cautions.locator('li').count()).toBeGreaterThan(0);
         // No edit control and no way into the app.

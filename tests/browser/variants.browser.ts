@@ -162,7 +162,11 @@ describe('variants, comparison and share links', () => {
           'Heat sources can start fires',
           'Control each lamp the way its type allows',
         ]) {
-          await visitor.getByRole('region', { name: 'Safety' }).getByText(caution).first().waitFor();
+          await visitor
+            .getByRole('region', { name: 'Safety', exact: true })
+            .getByText(caution)
+            .first()
+            .waitFor();
         }
         await visitor.getByText('90 × 45 × 45 cm (35.4 × 17.7 × 17.7 in)', { exact: false }).waitFor();
         expect(await visitor.getByText(/°C \([\d.]+ °F\)/).count()).toBeGreaterThan(0);

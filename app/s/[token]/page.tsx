@@ -8,6 +8,7 @@ import { SharedLampList } from '@/components/designs/SharedLampList';
 import { BrandMark } from '@/components/shell/BrandMark';
 import { lampRows } from '@/lib/reports/lamps';
 import { runEngineTask } from '@/lib/engine-pool';
+import { NO_SPECIES_SAFETY_LEAD } from '@/shared/cautions';
 import { sizeBoth, tempBoth } from '@/shared/units';
 import { sharePicturePath } from '@/lib/variants/share-picture';
 import { resolveShareToken } from '@/lib/variants/shares';
@@ -166,15 +167,13 @@ export default async function SharedVariantPage({
         </a>
       </section>
 
-      {assessment && species ? (
-        <div className="rounded-lg border border-basalt-200 bg-white p-4">
+      <div className="rounded-lg border border-basalt-200 bg-white p-4" data-testid="share-findings">
+        {species ? (
           <FindingList assessment={assessment} speciesName={species.name} />
-        </div>
-      ) : (
-        <p className="text-body text-basalt-600">
-          No species is attached to this enclosure, so there is no species check.
-        </p>
-      )}
+        ) : (
+          <FindingList assessment={assessment} title="Safety checks" lead={NO_SPECIES_SAFETY_LEAD} />
+        )}
+      </div>
 
       <SharedLampList lamps={lamps} />
       <CautionList design={shared.design} assessment={assessment} />

@@ -7,6 +7,9 @@ import { designToStage, type Camera } from '../geometry/camera';
 import type { Design } from '../state/types';
 import type { Finding, Segment } from '../fields/engineTypes';
 import { C } from './colors';
+import { meshLabel } from '../geometry/husbandry';
+import type { LengthUnit } from '@/shared/units';
+import type { MeshRisk } from '@/simulation';
 
 const MARKS = {
   uv: { colour: C.sky600, lift: 7, label: 'UV range' },
@@ -73,15 +76,18 @@ export function HusbandryLayer({
   cam,
   design,
   basking,
-  climbs,
+  meshRisks,
+  unit,
 }: {
   cam: Camera;
   design: Design;
   basking: Finding | undefined;
-  climbs: boolean;
+  /** For a climbing species: each mesh it can hang from and the lamps near it; null otherwise. */
+  meshRisks: MeshRisk[] | null;
+  unit: LengthUnit;
 }) {
   const zones = basking?.basking;
-  const screens = climbs ? design.objects.filter((o) => o.type === 'screen') : [];
+  const screens = meshRisks ? design.objects.filter((o) => o.type === 'screen') : [];
   const apart = zones && zones.both.length === 0 ? splitLink(cam, zones.uv, zones.heat) : null;
   return (
     <Group listening={false}>
@@ -117,6 +123,8 @@ export function HusbandryLayer({
         if (o.type !== 'screen') return null;
         const a = designToStage(cam, { x: o.x1, y: o.y1 });
         const b = designToStage(cam, { x: o.x2, y: o.y2 });
+        const risk = meshRisks?.find((r) => r.screenId === o.id);
+        const risky = Boolean(risk && (risk.burn.length || risk.uv.length));
         return (
           <Group key={o.id}>
             <Line
@@ -126,16 +134,23 @@ export function HusbandryLayer({
               dash={[3, 5]}
               opacity={0.9}
             />
-            <Text
-              x={(a.x + b.x) / 2 - 70}
-              y={(a.y + b.y) / 2 + 6}
-              width={140}
-              align="center"
-              text="Climbable mesh"
-              fontSize={11}
-              fontStyle="bold"
-              fill={C.ember700}
-            />
+            <Label x={(a.x + b.x) / 2} y={(a.y + b.y) / 2 + 6}>
+              <Tag
+                fill={risky ? C.ember700 : C.white}
+                opacity={risky ? 0.95 : 0.85}
+                cornerRadius={3}
+                pointerDirection="up"
+                pointerWidth={8}
+                pointerHeight={4}
+              />
+              <Text
+                text={risk ? meshLabel(risk, unit) : 'Climbable mesh'}
+                fontSize={11}
+                fontStyle="bold"
+                fill={risky ? C.white : C.ember700}
+                padding={3}
+              />
+            </Label>
           </Group>
         );
       })}

@@ -26,6 +26,7 @@ import { CanvasInteraction, type Modifiers } from './interaction';
 import { BackdropPhoto, EnclosureBack, EnclosureWalls, GridShape } from './Backdrop';
 import { BackdropFrame } from './BackdropFrame';
 import { HusbandryLayer } from './HusbandryLayer';
+import type { MeshRisk } from '@/simulation';
 import type { Finding } from '../fields/engineTypes';
 import { FieldBands, type ColouredBand } from './FieldBands';
 import { LampLabels } from './LampLabels';
@@ -66,8 +67,8 @@ export interface CanvasProps {
   photo: HTMLImageElement | null;
   /** The shared-basking finding of the current check, if a species is chosen. */
   basking?: Finding;
-  /** The chosen species climbs: its mesh is marked. */
-  climbs?: boolean;
+  /** The chosen species climbs: each mesh it can hang from, with the lamps near it (marked). */
+  meshRisks?: MeshRisk[] | null;
 }
 
 function mods(
@@ -111,7 +112,7 @@ export default function StudioCanvas({
   summaryId,
   photo,
   basking,
-  climbs = false,
+  meshRisks = null,
 }: CanvasProps) {
   const wrap = useRef<HTMLDivElement>(null);
   const ui = useMemo(() => new CanvasInteraction(store), [store]);
@@ -148,6 +149,13 @@ export default function StudioCanvas({
       const r = el.getBoundingClientRect();
       const viewport = { width: Math.max(1, Math.floor(r.width)), height: Math.max(1, Math.floor(r.height)) };
       const { fitted, viewport: before, camera } = store.session;
+      // A banner or a sheet that appears before anyone has zoomed or panned (a safety banner arriving
+      // with the first check, on a phone) fits the design again, so none of it is pushed out of view.
+      if (fitted && A.stillFitted(store, before)) {
+        store.setSession({ viewport });
+        A.fitView(store);
+        return;
+      }
       // Once fitted, a resize (a sheet opening under the canvas, a phone turned) keeps the design point
       // in the middle of the canvas where it was, instead of pinning the top left.
       store.setSession(
@@ -373,7 +381,13 @@ export default function StudioCanvas({
           <LampLabels objects={design.objects} cam={cam} viewport={session.viewport} />
         </Layer>
         <Layer listening={false}>
-          <HusbandryLayer cam={cam} design={design} basking={basking} climbs={climbs} />
+          <HusbandryLayer
+            cam={cam}
+            design={design}
+            basking={basking}
+            meshRisks={meshRisks}
+            unit={session.lengthUnit}
+          />
           <HighlightLayer cam={cam} design={design} shape={highlight} />
           {photoShown && session.backdropAdjust && <BackdropFrame cam={cam} backdrop={photoShown} />}
           <SelectionLayer cam={cam} objects={selected} showHandles={session.tool === 'select'} />

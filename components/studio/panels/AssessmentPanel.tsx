@@ -1,7 +1,7 @@
 'use client';
 // The species check: choose a sheet, read the findings (pass / attention / fail with the numbers),
 // click one to see where it applies, and the cautions that always go with the figures.
-import { FINDING_STATUS } from '@/shared/finding-status';
+import { FINDING_STATUS, worstFirst } from '@/shared/finding-status';
 import Link from '@/components/ui/Link';
 import { controlSummary } from '@/simulation';
 import type { Finding, FindingStatus } from '../fields/engineTypes';
@@ -164,7 +164,7 @@ export function AssessmentPanel({ sim, species }: { sim: SimView; species: Studi
             </p>
           ) : (
             <ul className="flex flex-col gap-1.5" aria-label="Findings">
-              {a.findings.map((f) => (
+              {worstFirst(a.findings).map((f) => (
                 <FindingItem key={f.id} f={f} />
               ))}
             </ul>
@@ -181,7 +181,7 @@ export function AssessmentPanel({ sim, species }: { sim: SimView; species: Studi
             against general limits. Choose a sheet for the full check.
           </p>
           <ul className="flex flex-col gap-1.5" aria-label="Safety findings">
-            {a.findings.map((f) => (
+            {worstFirst(a.findings).map((f) => (
               <FindingItem key={f.id} f={f} />
             ))}
           </ul>

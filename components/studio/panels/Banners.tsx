@@ -163,8 +163,9 @@ export function SafetyBanner({
         {findings.map((f) => (
           <li key={f.id} data-status={f.status} className="flex flex-wrap items-baseline gap-2">
             <span>
-              <strong>{f.title}</strong> ({f.status === 'fail' ? 'fail' : 'attention'}) —{' '}
-              {f.message.split('. ')[0]}.
+              <strong>{f.title}</strong> ({f.status === 'fail' ? 'fail' : 'attention'})
+              {/* A phone keeps the canvas in view: the title and "Show where" there, the reason under Check. */}
+              <span className="hidden sm:inline"> — {f.message.split('. ')[0]}.</span>
             </span>
             <button type="button" onClick={() => onShow(f.id)} className={`${btn} border-ember-300 bg-white`}>
               Show where

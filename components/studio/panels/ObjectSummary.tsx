@@ -11,7 +11,9 @@ import type { BackdropImageState, EnclosurePhotos } from '../state/session';
 import type { Backdrop, Design } from '../state/types';
 import { depthRelation, lampDepth, sectionDepth } from '../state/depth';
 import type { HighlightShape } from '../canvas/Overlay';
-import { LAMP_TECHS } from '@/simulation';
+import { LAMP_TECHS, type MeshRisk } from '@/simulation';
+import type { Finding } from '../fields/engineTypes';
+import { husbandrySentences } from '../geometry/husbandry';
 
 export function describeObject(o: DesignObject, u: LengthUnit, design?: Design): string {
   const name = `${TYPE_NAMES[o.type]}${o.name ? ` “${o.name}”` : ''}`;
@@ -77,10 +79,15 @@ export function describeHighlight(
 export function ObjectSummary({
   id,
   highlight,
+  basking,
+  meshRisks = null,
 }: {
   id: string;
   /** The finding whose place is marked on the canvas, if any. */
   highlight?: { findingId: string; title: string; shape: HighlightShape } | null;
+  /** The basking marks' finding and a climber's mesh, which the canvas marks too. */
+  basking?: Finding;
+  meshRisks?: MeshRisk[] | null;
 }) {
   const { store } = useCommandContext();
   const design = useStudio(store, (s) => s.history.present);
@@ -91,6 +98,12 @@ export function ObjectSummary({
   const image = useStudio(store, (s) => s.session.backdropImage);
   const adjusting = useStudio(store, (s) => s.session.backdropAdjust);
   const e = design.enclosure;
+  const marks = husbandrySentences(
+    basking,
+    meshRisks,
+    new Map(design.objects.map((o) => [o.id, o.name ? `“${o.name}”` : o.id])),
+    unit,
+  );
   return (
     <div id={id} className="sr-only" data-testid="object-summary" data-highlight={highlight?.findingId ?? ''}>
       <p>
@@ -124,6 +137,7 @@ export function ObjectSummary({
         </p>
       )}
       {ruler && <p data-testid="ruler-reading">{rulerSentence(ruler, unit)}</p>}
+      {marks.length > 0 && <p data-testid="husbandry-reading">{marks.join(' ')}</p>}
       {highlight && <p>{describeHighlight(highlight.title, highlight.shape, design.objects, unit)}</p>}
     </div>
   );

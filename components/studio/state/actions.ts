@@ -1,5 +1,13 @@
 // Higher-level studio operations on the store, shared by commands, the canvas and the panels.
-import { fitCamera, unionRect, zoomAt, type Point, type Rect } from '../geometry/camera';
+import {
+  fitCamera,
+  unionRect,
+  zoomAt,
+  type Camera,
+  type Point,
+  type Rect,
+  type Viewport,
+} from '../geometry/camera';
 import { objectBounds } from '../geometry/objects';
 import { snapPoint, type PointRole, type SnapOptions } from '../geometry/snap';
 import { defaultLampPoint, objectForClick } from './defaults';
@@ -36,10 +44,25 @@ export function fitPadding(viewportWidth: number): number {
   return Math.min(FIT_PADDING_PX, Math.max(28, Math.round(viewportWidth * 0.09)));
 }
 
+/** The camera that shows the whole design in a viewport (what Fit gives). */
+export function fittedCamera(design: StudioStore['design'], viewport: Viewport): Camera {
+  const cam = fitCamera(designBounds(design), viewport, fitPadding(viewport.width));
+  return { ...cam, originY: cam.originY + FIT_SHIFT_DOWN_PX };
+}
+
 export function fitView(store: StudioStore) {
-  const { viewport } = store.session;
-  const cam = fitCamera(designBounds(store.design), viewport, fitPadding(viewport.width));
-  store.setSession({ camera: { ...cam, originY: cam.originY + FIT_SHIFT_DOWN_PX }, fitted: true });
+  store.setSession({ camera: fittedCamera(store.design, store.session.viewport), fitted: true });
+}
+
+/** Whether the camera is still exactly as Fit left it in that viewport (not zoomed or panned since). */
+export function stillFitted(store: StudioStore, viewport: Viewport): boolean {
+  const want = fittedCamera(store.design, viewport);
+  const cam = store.session.camera;
+  return (
+    Math.abs(cam.zoom - want.zoom) < 1e-9 &&
+    Math.abs(cam.originX - want.originX) < 0.5 &&
+    Math.abs(cam.originY - want.originY) < 0.5
+  );
 }
 
 export function zoomBy(store: StudioStore, factor: number, anchor?: Point) {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { exampleDesign } from '../examples/exampleDesign';
-import { FIT_PADDING_PX, fitPadding, fitView } from './actions';
+import { FIT_PADDING_PX, fitPadding, fitView, stillFitted, zoomBy } from './actions';
 import { StudioStore } from './store';
 
 describe('fitting the design to the canvas', () => {
@@ -15,5 +15,15 @@ describe('fitting the design to the canvas', () => {
     const store = new StudioStore(exampleDesign(), { viewport: { width: 390, height: 600 } });
     fitView(store);
     expect(store.session.camera.zoom * 120).toBeGreaterThan(390 * 0.8);
+  });
+
+  it('knows whether the camera is still as Fit left it, so a banner arriving refits the design', () => {
+    const store = new StudioStore(exampleDesign(), { viewport: { width: 390, height: 600 } });
+    fitView(store);
+    expect(stillFitted(store, { width: 390, height: 600 })).toBe(true);
+    // The canvas got shorter (a banner above it): that camera no longer fits the new viewport.
+    expect(stillFitted(store, { width: 390, height: 450 })).toBe(false);
+    zoomBy(store, 1.25);
+    expect(stillFitted(store, { width: 390, height: 600 })).toBe(false);
   });
 });

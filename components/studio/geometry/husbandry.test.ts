@@ -1,0 +1,44 @@
+import { describe, expect, it } from 'vitest';
+import type { Finding } from '../fields/engineTypes';
+import { husbandrySentences, meshLabel } from './husbandry';
+
+const seg = (x1: number, x2: number, y = 44) => ({ x1, y1: y, x2, y2: y });
+const basking = (uv: number[][], heat: number[][], both: number[][]): Finding => ({
+  id: 'shared-basking',
+  status: both.length ? 'pass' : 'fail',
+  title: 'UV and heat on one basking spot',
+  message: '',
+  numbers: {},
+  basking: {
+    uv: uv.map(([a, b]) => seg(a!, b!)),
+    heat: heat.map(([a, b]) => seg(a!, b!)),
+    both: both.map(([a, b]) => seg(a!, b!)),
+  },
+});
+
+describe('the husbandry marks in words', () => {
+  it('says where UV and heat fall when they are apart, and where they meet', () => {
+    const names = new Map<string, string>();
+    expect(husbandrySentences(basking([[25, 55]], [[135, 165]], []), null, names, 'cm')).toEqual([
+      'UV and heat apart: no spot gets both. The UV range falls around 40 cm from the left, the basking heat around 150 cm.',
+    ]);
+    expect(husbandrySentences(basking([[25, 55]], [[30, 50]], [[30, 50]]), null, names, 'cm')).toEqual([
+      'UV and heat meet on the basking spot, around 40 cm from the left.',
+    ]);
+    expect(husbandrySentences(undefined, null, names, 'cm')).toEqual([]);
+  });
+
+  it('labels a climber’s mesh with the lamps that make it a burn or a UV risk, in the chosen unit', () => {
+    const risk = { screenId: 'lid', burn: [{ lampId: 'heat', distanceCm: 3 }], uv: [] };
+    expect(meshLabel(risk, 'cm')).toBe('Climbable mesh: burn risk (heat, 3 cm)');
+    expect(meshLabel({ ...risk, uv: [{ lampId: 'uv', distanceCm: 2.54 }] }, 'in')).toBe(
+      'Climbable mesh: burn risk (heat, 1.2 in), UV at the eyes (uv, 1 in)',
+    );
+    expect(meshLabel({ screenId: 'lid', burn: [], uv: [] }, 'cm')).toBe('Climbable mesh');
+    const names = new Map([['lid', '“Mesh lid”']]);
+    expect(husbandrySentences(undefined, [risk, { screenId: 'g', burn: [], uv: [] }], names, 'cm')).toEqual([
+      'Climbable mesh: burn risk (heat, 3 cm) — “Mesh lid”.',
+      'Climbable mesh — g: no lamp within reach.',
+    ]);
+  });
+});
