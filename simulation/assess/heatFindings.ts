@@ -11,7 +11,7 @@ import { controlAdvice, controlSentence, lowerLabel, thermostatAllowed } from '.
 import type { Finding, FindingStatus } from './types';
 import { runsOf, type SurfaceSample } from './surfaces';
 import { ESTIMATE_TEMP, TEMP_MARGIN_C } from './thresholds';
-import { f1, range1 } from './format';
+import { f1, range1, surfaceC } from './format';
 
 function rangeStatus(v: number, [lo, hi]: [number, number]): FindingStatus {
   if (v >= lo && v <= hi) return 'pass';
@@ -75,7 +75,7 @@ export function heatFindings(
     status: hs,
     title: 'Basking surface temperature',
     message:
-      `The hottest surface the animal can reach is about ${f1(hot)} °C; ${species.name} needs ${range1(species.baskingSurfaceC)} °C` +
+      `The hottest surface the animal can reach is ${surfaceC(hot)} °C; ${species.name} needs ${range1(species.baskingSurfaceC)} °C` +
       (hs === 'pass'
         ? '.'
         : hot < blo

@@ -141,6 +141,11 @@ describe('climbers and mesh', () => {
     // The mesh underside is the hottest reachable surface (a burn), not the branch.
     const hot = byId(assess(d, climber), 'hot-spot')!;
     expect(hot.numbers.hotC).toBeGreaterThan(byId(assess(d, walker), 'hot-spot')!.numbers.hotC! + 10);
+    // The radiant model's figure a few cm under the bulb is hundreds of degrees: the sentence says
+    // "over 100 °C" rather than a figure no thermometer would confirm; the numbers keep the estimate.
+    expect(hot.numbers.hotC).toBeGreaterThan(100);
+    expect(hot.message).toMatch(/hottest surface the animal can reach is over 100 °C;/);
+    expect(byId(assess(d, walker), 'hot-spot')!.message).toMatch(/reach is about \d+\.\d °C;/);
   });
 
   it('sees the UV under the mesh right below a tube: far above the zone for a climber', () => {

@@ -11,7 +11,7 @@ import { tooHotAdvice } from './heatFindings';
 import type { Finding } from './types';
 import { reachableSurfaces, runsOf, type SurfaceSample } from './surfaces';
 import { ESTIMATE_TEMP, GENERAL_HOT_SURFACE_C, LAMP_REACH_CM, UV_EYE_CM } from './thresholds';
-import { f0, f1 } from './format';
+import { f0, f1, surfaceC } from './format';
 import { shortWaveCaution } from './uvTargets';
 
 type Pt = { x: number; y: number };
@@ -228,7 +228,7 @@ export function hotSurfaceFinding(
       id: 'hot-surface',
       status: 'attention',
       title: 'Surfaces too hot to touch',
-      message: `Mesh an animal could hang from gets ${meshHot > 100 ? 'over 100' : `about ${f1(meshHot)}`} °C under a lamp, above the ${f0(GENERAL_HOT_SURFACE_C)} °C general limit for burns (from memory); the surfaces off the mesh stay under it (hottest about ${f1(hot)} °C). For a climbing species that is a burn: ${tooHotAdvice(lamps)}.${lamps.length ? ` ${controlAdvice(lamps)}` : ''} Choose the species sheet for the full check. ${ESTIMATE_TEMP}`,
+      message: `Mesh an animal could hang from gets ${surfaceC(meshHot)} °C under a lamp, above the ${f0(GENERAL_HOT_SURFACE_C)} °C general limit for burns (from memory); the surfaces off the mesh stay under it (hottest about ${f1(hot)} °C). For a climbing species that is a burn: ${tooHotAdvice(lamps)}.${lamps.length ? ` ${controlAdvice(lamps)}` : ''} Choose the species sheet for the full check. ${ESTIMATE_TEMP}`,
       numbers: { hotC: hot, meshHotC: meshHot, limitC: GENERAL_HOT_SURFACE_C },
       ifClimbs: true,
       where: meshSegs.length ? { kind: 'segments', segments: meshSegs } : undefined,
@@ -239,7 +239,7 @@ export function hotSurfaceFinding(
     status: bad ? 'fail' : 'pass',
     title: 'Surfaces too hot to touch',
     message: bad
-      ? `A surface the animal can reach gets about ${f1(hot)} °C, above the ${f0(GENERAL_HOT_SURFACE_C)} °C general limit for burns (from memory): ${tooHotAdvice(lamps)}.${lamps.length ? ` ${controlAdvice(lamps)}` : ''} Choose a species sheet for its own basking range. ${ESTIMATE_TEMP}`
+      ? `A surface the animal can reach gets ${surfaceC(hot)} °C, above the ${f0(GENERAL_HOT_SURFACE_C)} °C general limit for burns (from memory): ${tooHotAdvice(lamps)}.${lamps.length ? ` ${controlAdvice(lamps)}` : ''} Choose a species sheet for its own basking range. ${ESTIMATE_TEMP}`
       : `The hottest surface the animal can reach is about ${f1(hot)} °C, under the ${f0(GENERAL_HOT_SURFACE_C)} °C general limit for burns (from memory). Choose a species sheet to check it against the species’ basking range. ${ESTIMATE_TEMP}`,
     numbers: { hotC: hot, limitC: GENERAL_HOT_SURFACE_C },
     where: segs.length ? { kind: 'segments', segments: segs } : undefined,
