@@ -72,4 +72,12 @@ describe('composeReminder at any number of lamps', () => {
     const { text } = composeReminder({ name: 'Ann' }, sameDay, 'http://localhost:3000');
     expect(text.indexOf('B tube')).toBeLessThan(text.indexOf('A tube'));
   });
+
+  it('ends a reason that has its own full stop with one full stop, not two', () => {
+    const [a] = manyItems(1);
+    const item = { ...a!, label: 'UV tube', basis: 'A new reading is due on 2026-12-07.' };
+    const { text } = composeReminder({ name: 'Ann' }, [item], 'http://localhost:3000');
+    expect(text).toContain('A new reading is due on 2026-12-07.\n');
+    expect(text).not.toContain('..');
+  });
 });

@@ -50,7 +50,7 @@ export function composeReminder(
   const rest = sorted.slice(LISTED_LAMPS);
   const lines = listed.map((i) => {
     const what = i.kind === 'replace' ? 'Replace' : 'Test with a meter';
-    return `- ${clip(i.label, NAME_CHARS)} (${clip(i.enclosureName, NAME_CHARS)}): ${what} by ${i.dueOn} — ${clip(i.basis, BASIS_CHARS)}.`;
+    return `- ${clip(i.label, NAME_CHARS)} (${clip(i.enclosureName, NAME_CHARS)}): ${what} by ${i.dueOn} — ${clip(i.basis, BASIS_CHARS).replace(/\.+$/, '')}.`;
   });
   if (rest.length > 0) {
     const restReplace = rest.filter((i) => i.kind === 'replace').length;
