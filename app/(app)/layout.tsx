@@ -23,7 +23,10 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
       : []),
     { href: '/lamp-log', label: 'Lamp log' },
     ...(can(user, 'read', { kind: 'customer', organisationId: orgId })
-      ? [{ href: '/customers', label: 'Customers' }]
+      ? [
+          { href: '/counter', label: 'Counter' },
+          { href: '/customers', label: 'Customers' },
+        ]
       : []),
     { href: '/species', label: 'Species' },
     { href: '/lamp-catalogue', label: 'Lamp catalogue' },

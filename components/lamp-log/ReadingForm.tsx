@@ -8,13 +8,8 @@ import { Notice } from '@/components/ui/Notice';
 import { Select } from '@/components/ui/Select';
 import { button } from '@/components/ui/styles';
 import { useLengthUnit } from '@/components/ui/units';
-import {
-  THROUGH_LABEL,
-  WARM_UP_MINUTES,
-  WARMED_UP_LABEL,
-  type ReadingThrough,
-  type ReadingWarmedUp,
-} from '@/shared/reading-setup';
+import { WARM_UP_MINUTES, type ReadingThrough, type ReadingWarmedUp } from '@/shared/reading-setup';
+import { ReadingSetupFields } from './ReadingSetupFields';
 
 /** What the form offers and remembers from the last reading: never "not recorded". */
 export type ReadingSetupDefaults = {
@@ -131,59 +126,14 @@ export function ReadingForm({
           <option value="uvb">Broadband UVB meter (µW/cm²)</option>
           <option value="uvi">UV Index meter (UVI)</option>
         </Select>
-        <Select
-          label="Between lamp and meter"
-          name="through"
-          value={through}
-          onChange={(e) => setThrough(e.target.value)}
-          required
-          error={err('through')}
-        >
-          <option value="" disabled>
-            Choose…
-          </option>
-          {(['nothing', 'lid', 'screen', 'glass'] as const).map((t) => (
-            <option key={t} value={t}>
-              {THROUGH_LABEL[t]}
-            </option>
-          ))}
-        </Select>
-        {['lid', 'screen', 'glass'].includes(through) && (
-          <Field
-            // A fresh field for each choice, so the lid's own share is filled in when it is chosen.
-            key={through}
-            label="Share of UVB it passes (0–1)"
-            name="throughTransmission"
-            type="number"
-            step="0.01"
-            min="0.01"
-            max="1"
-            inputMode="decimal"
-            defaultValue={shareDefault}
-            required={through === 'screen' || (through === 'lid' && lidShare === null)}
-            hint={
-              through === 'lid'
-                ? 'The lamp’s setting for its lid; change it if you measured through another.'
-                : through === 'glass'
-                  ? 'Ordinary glass passes almost no UVB. Leave empty unless the maker gives a share: the reading is then kept but not used.'
-                  : 'Measure it: one reading with the screen and one without, at the same distance, divided.'
-            }
-            error={err('throughTransmission')}
-          />
-        )}
-        <Select
-          label="Lamp warmed up"
-          name="warmedUp"
-          defaultValue={last.warmedUp ?? ''}
-          required
-          error={err('warmedUp')}
-        >
-          <option value="" disabled>
-            Choose…
-          </option>
-          <option value="yes">{WARMED_UP_LABEL.yes}</option>
-          <option value="no">{WARMED_UP_LABEL.no}</option>
-        </Select>
+        <ReadingSetupFields
+          through={through}
+          onThrough={setThrough}
+          shareDefault={shareDefault}
+          lidShare={lidShare}
+          warmedUpDefault={last.warmedUp ?? ''}
+          error={err}
+        />
         <Field
           label="Meter (optional)"
           name="meter"

@@ -7,7 +7,7 @@ import { LENGTH_UNITS } from '@/shared/units';
 
 /** Request shapes of the lamp log routes and forms, with messages a person can act on. */
 
-const isoDate = (what: string) =>
+export const isoDate = (what: string) =>
   z
     .string({ error: `Enter ${what} as a date (YYYY-MM-DD).` })
     .regex(/^\d{4}-\d{2}-\d{2}$/, `Enter ${what} as a date (YYYY-MM-DD).`)

@@ -20,7 +20,12 @@ import type { ReadingThrough, ReadingWarmedUp } from '@/shared/reading-setup';
 
 /** Database access and JSON views of the lamp log. Callers check permissions first (access.ts). */
 
-export function lampFacts(lamp: Lamp, type: LampTypeDto): LampFacts {
+export type LampFactsSource = Pick<
+  Lamp,
+  'id' | 'label' | 'firstUsedOn' | 'hoursPerDay' | 'retiredOn' | 'baskingDistanceCm' | 'baskingTransmission'
+>;
+
+export function lampFacts(lamp: LampFactsSource, type: LampTypeDto): LampFacts {
   return {
     id: lamp.id,
     label: lamp.label,
@@ -43,7 +48,13 @@ export function lampFacts(lamp: Lamp, type: LampTypeDto): LampFacts {
   };
 }
 
-export const readingFacts = (r: Reading): ReadingFacts => ({
+/** A stored reading (of the lamp log, or taken at the counter: the same fields) as the outlook takes it. */
+export const readingFacts = (
+  r: Pick<
+    Reading,
+    'id' | 'takenAt' | 'distanceCm' | 'value' | 'unit' | 'through' | 'throughTransmission' | 'warmedUp'
+  >,
+): ReadingFacts => ({
   id: r.id,
   takenAt: r.takenAt,
   distanceCm: r.distanceCm,
@@ -53,6 +64,22 @@ export const readingFacts = (r: Reading): ReadingFacts => ({
   throughTransmission: r.throughTransmission ?? null,
   warmedUp: r.warmedUp,
 });
+
+/** What a species sheet asks of a lamp's basking zone, as the outlook takes it. */
+export function needOfSheet(sheet: SpeciesSheet): SpeciesNeed {
+  return {
+    name: sheet.commonName,
+    uvZone: sheet.uvZone,
+    uvbTargetUw:
+      sheet.uvbTargetMinUw !== null && sheet.uvbTargetMaxUw !== null
+        ? { min: sheet.uvbTargetMinUw, max: sheet.uvbTargetMaxUw }
+        : null,
+    photoperiodH:
+      sheet.photoperiodMinH !== null && sheet.photoperiodMaxH !== null
+        ? { min: sheet.photoperiodMinH, max: sheet.photoperiodMaxH }
+        : null,
+  };
+}
 
 export type SpeciesMatch =
   { ok: true; need: SpeciesNeed; sheetId: number } | { ok: false; missing: string; need: null };
@@ -107,18 +134,7 @@ export async function speciesForEnclosures(enclosures: Enclosure[]): Promise<Map
         ? {
             ok: true,
             sheetId: sheet.id,
-            need: {
-              name: sheet.commonName,
-              uvZone: sheet.uvZone,
-              uvbTargetUw:
-                sheet.uvbTargetMinUw !== null && sheet.uvbTargetMaxUw !== null
-                  ? { min: sheet.uvbTargetMinUw, max: sheet.uvbTargetMaxUw }
-                  : null,
-              photoperiodH:
-                sheet.photoperiodMinH !== null && sheet.photoperiodMaxH !== null
-                  ? { min: sheet.photoperiodMinH, max: sheet.photoperiodMaxH }
-                  : null,
-            },
+            need: needOfSheet(sheet),
           }
         : {
             ok: false,

@@ -11,6 +11,7 @@ import { describe, expect, it } from 'vitest';
 import { getSequelize } from '@/lib/db';
 import { DEMO_HOUSEHOLD, DEMO_PASSWORDS, DEMO_SHOP, demoSignIn } from '@/lib/demo/scenario';
 import {
+  CounterLamp,
   Customer,
   Design,
   Enclosure,
@@ -56,6 +57,18 @@ async function shopThings() {
   const customer =
     (await Customer.findOne({ where: { organisationId: shop.id } })) ??
     (await Customer.create({ organisationId: shop.id, name: 'Page Access Customer', createdById: null }));
+  // And a lamp tested at the counter for them.
+  const counterLamp =
+    (await CounterLamp.findOne({ where: { organisationId: shop.id } })) ??
+    (await CounterLamp.create({
+      organisationId: shop.id,
+      customerId: customer.id,
+      lampTypeId: lampType.id,
+      label: 'Page access counter lamp',
+      firstUsedOn: '2025-01-01',
+      hoursPerDay: 12,
+      createdById: null,
+    }));
   const pages = [
     `/enclosures/${enclosure.id}`,
     `/enclosures/${enclosure.id}/lamps`,
@@ -66,6 +79,7 @@ async function shopThings() {
     `/lamp-catalogue/${lampType.id}/edit`,
     `/customers/${customer.id}`,
     `/customers/${customer.id}/edit`,
+    `/counter/lamps/${counterLamp.id}`,
   ];
   const ofTheEnclosure = [ENCLOSURE, enclosure.animalName, lamp?.label, customer.name].filter(
     Boolean,
@@ -81,6 +95,7 @@ async function shopThings() {
     species: species.id,
     'lamp-catalogue': lampType.id,
     customers: customer.id,
+    counter: counterLamp.id,
   };
   return { owner, pages, ofTheEnclosure, ofTheShop, idOf };
 }
@@ -181,7 +196,7 @@ describe('pages check access themselves', () => {
     const keeper = DEMO_SHOP.people.find((p) => p.role === 'keeper')!;
     const cookie = await signInCookie(keeper.email, DEMO_PASSWORDS.keeper);
     const statuses = await Promise.all(
-      ['/keepers', '/members', '/customers', '/customers/new'].map(
+      ['/keepers', '/members', '/customers', '/customers/new', '/counter'].map(
         async (p) => `${p} → ${(await page(p, cookie)).status}`,
       ),
     );

@@ -28,6 +28,7 @@ export function idFor(pattern: string, w: World): Record<string, string> {
     [/^\/api\/invitations\/\[id\]/, 'invitation'],
     [/^\/api\/uploads\/\[id\]/, 'upload'],
     [/^\/api\/customers\/\[id\]/, 'customer'],
+    [/^\/api\/counter\/lamps\/\[id\]/, 'counterLamp'],
   ];
   if (pattern.startsWith('/s/[token]')) return { token: 'A'.repeat(43), version: '1', file: 'uvi.svg' };
   for (const [re, key] of byPrefix) if (re.test(pattern)) return { id: String(w[key]) };
@@ -43,12 +44,22 @@ const enclosureBody = (w: World) => ({
   depthCm: 45,
 });
 
+/** A retest of A's counter lamp: a well-formed test that would add a reading to it. */
+const COUNTER_TEST = (w: World) => ({
+  organisationId: w.orgA,
+  counterLampId: w.counterLamp,
+  reading: { distance: 30, value: 38, unit: 'uvb', through: 'nothing', warmedUp: 'yes' },
+});
+
 export const REQUESTS: Record<string, RequestSpec> = {
   'PUT /api/account/password': {
     body: () => ({ currentPassword: FIXTURE_PASSWORD, newPassword: 'a-long-new-password' }),
   },
   'DELETE /api/account/sessions': {},
   'PUT /api/current-organisation': { body: (w) => ({ organisationId: w.orgA }) },
+  'POST /api/counter/assess': { body: (w) => COUNTER_TEST(w) },
+  'POST /api/counter/tests': { body: (w) => COUNTER_TEST(w) },
+  'GET /api/counter/lamps/[id]': {},
   'GET /api/customers/[id]': {},
   'PATCH /api/customers/[id]': { body: () => ({ notes: 'Asked about a new tube.' }) },
   'DELETE /api/customers/[id]': {},

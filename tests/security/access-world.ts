@@ -4,6 +4,7 @@
 // that leaks them can be caught.
 import { PNG } from 'pngjs';
 import { QueryTypes } from 'sequelize';
+import * as counterTests from '@/app/api/counter/tests/route';
 import * as customers from '@/app/api/customers/route';
 import * as enclosureDesigns from '@/app/api/enclosures/[id]/designs/route';
 import * as enclosureLamps from '@/app/api/enclosures/[id]/lamps/route';
@@ -38,6 +39,7 @@ export const MARK = {
   lampType: 'Zz shop tube',
   upload: 'zz-backdrop.png',
   customer: 'Zz Counter Customer',
+  counterLamp: 'Zz-counter-lamp-of-the-customer',
 } as const;
 
 export type World = {
@@ -59,6 +61,7 @@ export type World = {
   invitation: number;
   upload: number;
   customer: number;
+  counterLamp: number;
 };
 
 /** A cookie for the user's current session version (a bumped version would refuse an older one). */
@@ -159,6 +162,18 @@ export async function buildWorld(): Promise<World> {
     },
   });
   must(customer, 'customer');
+  const counterLamp = await call(counterTests.POST, {
+    method: 'POST',
+    path: '/api/counter/tests',
+    cookie: as,
+    body: {
+      organisationId: a.id,
+      lamp: { lampTypeId, ageMonths: 5, hoursPerDay: 12, label: MARK.counterLamp },
+      reading: { distance: 30, value: 40, unit: 'uvb', through: 'nothing', warmedUp: 'yes' },
+      customer: { kind: 'existing', id: customer.body.customer.id },
+    },
+  });
+  must(counterLamp, 'counter lamp');
 
   return {
     orgA: a.id,
@@ -179,6 +194,7 @@ export async function buildWorld(): Promise<World> {
     invitation: invitation.body.invitation?.id ?? invitation.body.id,
     upload: upload.body.upload.id,
     customer: customer.body.customer.id,
+    counterLamp: counterLamp.body.lampId,
   };
 }
 
@@ -207,3 +223,38 @@ export async function fingerprint(): Promise<string> {
 }
 
 export const currentVersion = async (variantId: number) => (await Variant.findByPk(variantId))!.version;
+
+/** The organisation that owns the row an id names under a route (null: none, or a route not listed). */
+const OWNING_ORGANISATION: [RegExp, string][] = [
+  [/^\/api\/organisations\/\[id\]/, 'SELECT id AS org FROM organisations WHERE id = :id'],
+  [/^\/api\/species\/\[id\]/, 'SELECT organisation_id AS org FROM species_sheets WHERE id = :id'],
+  [/^\/api\/lamp-types\/\[id\]/, 'SELECT organisation_id AS org FROM lamp_types WHERE id = :id'],
+  [/^\/api\/invitations\/\[id\]/, 'SELECT organisation_id AS org FROM invitations WHERE id = :id'],
+  [/^\/api\/uploads\/\[id\]/, 'SELECT organisation_id AS org FROM uploads WHERE id = :id'],
+  [/^\/api\/enclosures\/\[id\]/, 'SELECT organisation_id AS org FROM enclosures WHERE id = :id'],
+  [/^\/api\/customers\/\[id\]/, 'SELECT organisation_id AS org FROM customers WHERE id = :id'],
+  [/^\/api\/counter\/lamps\/\[id\]/, 'SELECT organisation_id AS org FROM counter_lamps WHERE id = :id'],
+];
+
+/**
+ * Whether `id` (as the route's schema reads it: a number, "0x10" and " 7" included) names something of
+ * an organisation the outsider owns (the suite's outsider makes organisations of their own as it goes):
+ * reaching it is theirs to do, not a forgery.
+ */
+export async function outsiderOwns(pattern: string, id: string, outsiderId: number): Promise<boolean> {
+  const n = Number(id.trim());
+  if (!Number.isInteger(n) || n <= 0 || n > 4_294_967_295) return false;
+  const sql = OWNING_ORGANISATION.find(([re]) => re.test(pattern))?.[1];
+  if (!sql) return false;
+  const rows = await testDb().query<{ org: number }>(sql, {
+    replacements: { id: n },
+    type: QueryTypes.SELECT,
+  });
+  const org = rows[0]?.org;
+  if (org === undefined) return false;
+  const member = await testDb().query(
+    "SELECT 1 FROM memberships WHERE organisation_id = :org AND user_id = :user AND role = 'owner'",
+    { replacements: { org, user: outsiderId }, type: QueryTypes.SELECT },
+  );
+  return member.length > 0;
+}

@@ -27,7 +27,10 @@ export default async function CustomersPage({ searchParams }: Props) {
         lead="People whose lamps the shop tests at the counter. Only owners and staff see this list."
         actions={
           <>
-            <Link href="/customers/new" className={button.primary}>
+            <Link href="/counter" className={button.primary}>
+              Test a lamp
+            </Link>
+            <Link href="/customers/new" className={button.secondary}>
               Add customer
             </Link>
           </>
@@ -53,7 +56,10 @@ export default async function CustomersPage({ searchParams }: Props) {
       </form>
       {items.length === 0 ? (
         <EmptyState title={q ? `No customer matches “${q}”` : 'No customers yet'}>
-          <p>Add a customer when they bring a lamp to test,. A walk-in can be tested without a record.</p>
+          <p>
+            Add a customer when they bring a lamp to test, or from the counter screen. A walk-in can be tested
+            without a record.
+          </p>
         </EmptyState>
       ) : (
         <ul className={`${card} divide-y divide-basalt-100`} aria-label="Customers">

@@ -7,7 +7,7 @@ import { VERDICT_LABEL } from '@/components/customers/verdict-label';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { LocalTime } from '@/components/ui/LocalTime';
 import { PageHeader } from '@/components/ui/PageHeader';
-import { button, card } from '@/components/ui/styles';
+import { button, card, link } from '@/components/ui/styles';
 import { parseId } from '@/lib/api/schemas';
 import { customerForPage } from '@/lib/customers/access';
 import { customerDto, lampsOfCustomer } from '@/lib/customers/queries';
@@ -32,7 +32,10 @@ export default async function CustomerPage({ params }: Props) {
         title={customer.name}
         actions={
           <>
-            <Link href={`/customers/${customer.id}/edit`} className={button.primary}>
+            <Link href={`/counter?customer=${customer.id}`} className={button.primary}>
+              Test a lamp
+            </Link>
+            <Link href={`/customers/${customer.id}/edit`} className={button.secondary}>
               Change
             </Link>
             <DeleteCustomerButton id={customer.id} name={customer.name} />
@@ -68,14 +71,16 @@ export default async function CustomerPage({ params }: Props) {
       <h2 className="mb-2 text-lead font-semibold text-basalt-900">Lamps tested</h2>
       {lamps.length === 0 ? (
         <EmptyState title="No lamps tested yet">
-          <p>Lamps tested at the counter for this customer appear here with every reading.</p>
+          <p>Test a lamp at the counter and save it for this customer: it appears here with every reading.</p>
         </EmptyState>
       ) : (
         <ul className={`${card} divide-y divide-basalt-100`} aria-label="Lamps tested">
           {lamps.map((l) => (
             <li key={l.id} className="flex flex-wrap items-baseline justify-between gap-2 px-4 py-3">
               <span>
-                {l.label ?? l.lampTypeName}
+                <Link href={`/counter/lamps/${l.id}`} className={link}>
+                  {l.label ?? l.lampTypeName}
+                </Link>
                 <span className="ml-2 text-caption text-basalt-500">
                   {l.label ? `${l.lampTypeName} · ` : ''}in use since {l.firstUsedEstimated ? 'about ' : ''}
                   {l.firstUsedOn} · {l.tests} test{l.tests === 1 ? '' : 's'}
@@ -89,6 +94,9 @@ export default async function CustomerPage({ params }: Props) {
                     {l.lastTest.testAgainOn ? ` (test again ${l.lastTest.testAgainOn})` : ''}
                   </span>
                 )}
+                <Link href={`/counter?lamp=${l.id}`} className={link}>
+                  Test again
+                </Link>
               </span>
             </li>
           ))}

@@ -1,0 +1,432 @@
+'use client';
+
+import { useRouter } from 'next/navigation';
+import { useEffect, useRef, useState, type FormEvent } from 'react';
+import Link from '@/components/ui/Link';
+import { ReadingSetupFields } from '@/components/lamp-log/ReadingSetupFields';
+import { fieldError, sendJson } from '@/components/ui/api-client';
+import { Field } from '@/components/ui/Field';
+import { Notice } from '@/components/ui/Notice';
+import { Select } from '@/components/ui/Select';
+import { UnitToggle } from '@/components/ui/UnitToggle';
+import { button, card, link } from '@/components/ui/styles';
+import { useLengthUnit } from '@/components/ui/units';
+import type { CounterAnswerDto } from '@/lib/counter/queries';
+import { WARM_UP_MINUTES } from '@/shared/reading-setup';
+import { CustomerPicker, type Who } from './CustomerPicker';
+import { VerdictCard } from './VerdictCard';
+
+export type CounterOptions = {
+  organisationId: number;
+  lampTypes: { id: number; name: string }[];
+  species: { id: number; name: string }[];
+  /** Testing a kept lamp again: its type and age are known. */
+  kept: { id: number; name: string; customerName: string | null; hoursPerDay: number } | null;
+  /** Opened from a customer's page. */
+  customer: { id: number; name: string } | null;
+};
+
+type Answer = CounterAnswerDto;
+
+/** The numbers of a form field, or undefined when empty. */
+const num = (form: FormData, k: string) => {
+  const v = String(form.get(k) ?? '').trim();
+  return v === '' ? undefined : Number(v);
+};
+
+/**
+ * The counter test on one screen, made for one hand on a phone: who, which lamp and how old, how it was
+ * measured and the reading; the answer appears as soon as those are in, and is asked again whenever a
+ * field changes. Saving keeps the lamp and the reading under the customer (or anonymous, for a walk-in).
+ */
+export function CounterScreen({ options }: { options: CounterOptions }) {
+  const router = useRouter();
+  const [unit] = useLengthUnit();
+  const formRef = useRef<HTMLFormElement>(null);
+  const [who, setWho] = useState<Who>(
+    options.customer
+      ? { kind: 'existing', id: options.customer.id, name: options.customer.name }
+      : { kind: 'walk-in' },
+  );
+  const [through, setThrough] = useState('');
+  const [ageBy, setAgeBy] = useState<'months' | 'date'>('months');
+  const [answer, setAnswer] = useState<Answer | null>(null);
+  const [asking, setAsking] = useState(false);
+  const [error, setError] = useState<{ field?: string; message: string } | null>(null);
+  const [saving, setSaving] = useState(false);
+  const [saved, setSaved] = useState<{ lampId: number; customerId: number | null } | null>(null);
+  const [changed, setChanged] = useState(0);
+  const asked = useRef(0);
+
+  /** The request body from the form, or null while something the answer needs is missing. */
+  function body(): Record<string, unknown> | null {
+    const form = new FormData(formRef.current!);
+    const value = num(form, 'value');
+    const distance = num(form, 'distance');
+    const warmedUp = String(form.get('warmedUp') ?? '');
+    if (value === undefined || distance === undefined || !through || !warmedUp) return null;
+    const home = {
+      hoursPerDay: num(form, 'hoursPerDay') ?? 12,
+      speciesSheetId: num(form, 'speciesSheetId') ?? null,
+      baskingDistance: num(form, 'baskingDistance') ?? null,
+      baskingTransmission: num(form, 'baskingTransmission') ?? null,
+      lengthUnit: unit,
+    };
+    let lamp: Record<string, unknown> | null = null;
+    if (!options.kept) {
+      const lampTypeId = num(form, 'lampTypeId');
+      const months = num(form, 'ageMonths');
+      const date = String(form.get('firstUsedOn') ?? '');
+      if (!lampTypeId || (ageBy === 'months' ? months === undefined : !date)) return null;
+      lamp = {
+        lampTypeId,
+        ...(ageBy === 'months' ? { ageMonths: months } : { firstUsedOn: date }),
+        ...home,
+        label: String(form.get('label') ?? '').trim() || null,
+      };
+    }
+    return {
+      organisationId: options.organisationId,
+      ...(options.kept ? { counterLampId: options.kept.id } : {}),
+      lamp,
+      reading: {
+        distance,
+        distanceUnit: unit,
+        value,
+        unit: String(form.get('unit') ?? 'uvb'),
+        through,
+        throughTransmission: ['lid', 'screen', 'glass'].includes(through)
+          ? (num(form, 'throughTransmission') ?? null)
+          : null,
+        warmedUp,
+        meter: String(form.get('meter') ?? '').trim() || null,
+      },
+    };
+  }
+
+  // Ask for the answer a moment after the last change, so typing a number does not send every digit.
+  useEffect(() => {
+    if (changed === 0) return;
+    const b = body();
+    const ticket = ++asked.current;
+    const timer = setTimeout(async () => {
+      if (!b) return setAnswer(null);
+      setAsking(true);
+      try {
+        const r = await sendJson<{ answer: Answer }>('POST', '/api/counter/assess', b);
+        if (ticket === asked.current) {
+          setAnswer(r.answer);
+          setError(null);
+        }
+      } catch (err) {
+        if (ticket === asked.current) {
+          setAnswer(null);
+          setError(fieldError(err));
+        }
+      } finally {
+        if (ticket === asked.current) setAsking(false);
+      }
+    }, 250);
+    return () => clearTimeout(timer);
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- the form is read when it changes
+  }, [changed, through, ageBy, unit]);
+
+  async function save(e: FormEvent) {
+    e.preventDefault();
+    const b = body();
+    if (!b) return setError({ message: 'Fill in the lamp and the reading first.' });
+    const form = new FormData(formRef.current!);
+    const customer =
+      who.kind === 'new'
+        ? {
+            kind: 'new',
+            name: String(form.get('customerName') ?? '').trim(),
+            email: String(form.get('customerEmail') ?? '').trim() || null,
+            phone: String(form.get('customerPhone') ?? '').trim() || null,
+            reminderConsent: form.get('customerConsent') === 'on',
+          }
+        : who.kind === 'existing'
+          ? { kind: 'existing', id: who.id }
+          : { kind: 'walk-in' };
+    setSaving(true);
+    setError(null);
+    try {
+      const r = await sendJson<{ lampId: number; customerId: number | null; answer: Answer }>(
+        'POST',
+        '/api/counter/tests',
+        { ...b, customer },
+      );
+      setAnswer(r.answer);
+      setSaved({ lampId: r.lampId, customerId: r.customerId });
+      router.refresh();
+    } catch (err) {
+      setError(fieldError(err));
+    } finally {
+      setSaving(false);
+    }
+  }
+
+  // The server names a field by its path in the request (`reading.value`, `customer.email`).
+  const err = (f: string) =>
+    error?.field && ['', 'reading.', 'lamp.', 'customer.'].some((p) => error.field === `${p}${f}`)
+      ? error.message
+      : null;
+  const touch = () => setChanged((n) => n + 1);
+
+  return (
+    <form
+      ref={formRef}
+      onSubmit={save}
+      onInput={touch}
+      onChange={touch}
+      aria-label="Counter test"
+      noValidate
+      className="mx-auto max-w-xl space-y-5"
+    >
+      <section className={`${card} space-y-3 p-4`} aria-label="Who">
+        {options.kept ? (
+          <p className="text-body">
+            Testing again: <strong>{options.kept.name}</strong>
+            {options.kept.customerName ? ` of ${options.kept.customerName}` : ' (kept without a name)'}. Its
+            earlier readings give it its own decay.
+          </p>
+        ) : (
+          <CustomerPicker organisationId={options.organisationId} who={who} onWho={setWho} />
+        )}
+      </section>
+
+      {!options.kept && (
+        <section className={`${card} space-y-3 p-4`} aria-label="The lamp">
+          <Select label="Lamp type" name="lampTypeId" defaultValue="" required error={err('lampTypeId')}>
+            <option value="" disabled>
+              Choose from the catalogue…
+            </option>
+            {options.lampTypes.map((t) => (
+              <option key={t.id} value={t.id}>
+                {t.name}
+              </option>
+            ))}
+          </Select>
+          <fieldset>
+            <legend className="mb-1 text-body font-medium text-basalt-800">Age</legend>
+            <div className="mb-2 flex gap-2" role="radiogroup" aria-label="Give the age as">
+              {(['months', 'date'] as const).map((k) => (
+                <button
+                  key={k}
+                  type="button"
+                  role="radio"
+                  aria-checked={ageBy === k}
+                  onClick={() => setAgeBy(k)}
+                  className={`${ageBy === k ? button.primary : button.secondary} min-h-11 flex-1`}
+                >
+                  {k === 'months' ? 'Months in use' : 'First switch-on date'}
+                </button>
+              ))}
+            </div>
+            {ageBy === 'months' ? (
+              <Field
+                label="Months in use"
+                name="ageMonths"
+                type="number"
+                inputMode="decimal"
+                step="any"
+                min="0"
+                required
+                error={err('ageMonths')}
+              />
+            ) : (
+              <Field
+                label="First switched on"
+                name="firstUsedOn"
+                type="date"
+                required
+                error={err('firstUsedOn')}
+              />
+            )}
+          </fieldset>
+          <Field
+            label="Hours a day it is on"
+            name="hoursPerDay"
+            type="number"
+            inputMode="decimal"
+            step="any"
+            min="0.5"
+            max="24"
+            defaultValue={12}
+            error={err('hoursPerDay')}
+          />
+        </section>
+      )}
+
+      <section className={`${card} space-y-3 p-4`} aria-label="The reading">
+        <div className="flex items-center justify-between gap-2">
+          <h2 className="text-lead font-semibold text-basalt-900">The reading</h2>
+          <UnitToggle quantity="length" />
+        </div>
+        <Field
+          label={`Distance below the lamp (${unit})`}
+          name="distance"
+          type="number"
+          inputMode="decimal"
+          step="any"
+          min="0"
+          defaultValue={unit === 'cm' ? 30 : 12}
+          key={unit}
+          required
+          hint="Straight below the lamp, to the meter's sensor."
+          error={err('distance')}
+        />
+        <Select label="Meter kind" name="unit" defaultValue="uvb" error={err('unit')}>
+          <option value="uvb">Broadband UVB meter (µW/cm²)</option>
+          <option value="uvi">UV Index meter (UVI)</option>
+        </Select>
+        <ReadingSetupFields
+          through={through}
+          onThrough={setThrough}
+          shareDefault=""
+          lidShare={null}
+          warmedUpDefault=""
+          error={err}
+          lidHint="The share of UVB the customer's lid passes, if it was measured through it."
+        />
+        <Field
+          label="Meter value"
+          name="value"
+          type="number"
+          inputMode="decimal"
+          step="any"
+          min="0"
+          required
+          error={err('value')}
+        />
+        <Field
+          label="Meter (optional)"
+          name="meter"
+          placeholder="Which meter, in your words"
+          error={err('meter')}
+        />
+        <p className="text-caption text-basalt-500">
+          Switch the lamp on at least {WARM_UP_MINUTES} minutes before measuring; the bare lamp straight below
+          is the most direct reading.
+        </p>
+      </section>
+
+      {!options.kept && (
+        <details className={`${card} p-4`}>
+          <summary className="min-h-11 cursor-pointer text-body font-medium text-basalt-900">
+            At home (optional): species and basking distance
+          </summary>
+          <div className="mt-3 space-y-3">
+            <Select label="Species" name="speciesSheetId" defaultValue="" error={err('speciesSheetId')}>
+              <option value="">Not given</option>
+              {options.species.map((s) => (
+                <option key={s.id} value={s.id}>
+                  {s.name}
+                </option>
+              ))}
+            </Select>
+            <Field
+              label={`Basking distance at home (${unit})`}
+              name="baskingDistance"
+              type="number"
+              inputMode="decimal"
+              step="any"
+              min="0"
+              hint="From the lamp down to where the animal basks."
+              error={err('baskingDistance')}
+            />
+            <Field
+              label="Share of UVB the lid or mesh at home passes (0–1)"
+              name="baskingTransmission"
+              type="number"
+              inputMode="decimal"
+              step="0.01"
+              min="0.01"
+              max="1"
+              hint="Leave empty when nothing lies between lamp and basking spot."
+              error={err('baskingTransmission')}
+            />
+          </div>
+        </details>
+      )}
+
+      <div aria-live="polite">
+        {answer ? (
+          <VerdictCard answer={answer} unit={unit} busy={asking} />
+        ) : (
+          <p className="rounded-md border border-dashed border-basalt-300 px-4 py-3 text-body text-basalt-600">
+            {asking
+              ? 'Working it out…'
+              : 'The answer appears here once the lamp type, its age, the set-up and the meter value are in.'}
+          </p>
+        )}
+      </div>
+      {error && <Notice tone="error">{error.message}</Notice>}
+
+      {saved ? (
+        <Notice tone="success" title="Saved">
+          <p>
+            <Link href={`/counter/lamps/${saved.lampId}`} className={link}>
+              Open the lamp and its readings
+            </Link>
+            {saved.customerId && (
+              <>
+                {' · '}
+                <Link href={`/customers/${saved.customerId}`} className={link}>
+                  the customer
+                </Link>
+              </>
+            )}
+            {' · '}
+            <a href="/counter" className={link}>
+              Test another lamp
+            </a>
+          </p>
+        </Notice>
+      ) : (
+        <section className={`${card} space-y-3 p-4`} aria-label="Save">
+          {!options.kept && who.kind === 'new' && (
+            <div className="space-y-3">
+              <Field
+                label="Customer’s name"
+                name="customerName"
+                autoComplete="off"
+                required
+                error={err('name')}
+              />
+              <Field
+                label="E-mail (optional)"
+                name="customerEmail"
+                type="email"
+                inputMode="email"
+                error={err('email')}
+              />
+              <Field
+                label="Phone (optional)"
+                name="customerPhone"
+                type="tel"
+                inputMode="tel"
+                error={err('phone')}
+              />
+              <label className="flex items-start gap-2 text-body text-basalt-800">
+                <input type="checkbox" name="customerConsent" className="mt-1 h-5 w-5" />
+                <span>The customer agrees to reminder e-mails about re-testing (the date is recorded).</span>
+              </label>
+            </div>
+          )}
+          <button type="submit" className={`${button.primary} min-h-12 w-full`} disabled={saving || !answer}>
+            {saving
+              ? 'Saving…'
+              : options.kept
+                ? 'Save this reading'
+                : who.kind === 'new'
+                  ? 'Save for the new customer'
+                  : who.kind === 'existing'
+                    ? `Save for ${who.name}`
+                    : 'Save without a name (walk-in)'}
+          </button>
+        </section>
+      )}
+    </form>
+  );
+}
