@@ -95,7 +95,7 @@ export function newOutputAt30(type: LampFacts['type'], unit: ReadingUnit): numbe
 
 /** The standing cautions of every counter answer (the customer takes them home with the verdict). */
 export const COUNTER_CAUTIONS: string[] = [
-  'Every figure here is an estimate from one meter reading and the lamp type’s usual ageing: check the basking spot at home with a UV meter.',
+  'Every figure here is an estimate from meter readings at the counter and the lamp type’s usual ageing: check the basking spot at home with a UV meter.',
   `${CAUTIONS['uv-eyes-skin'].title}: never look into a UV lamp, and watch for closed eyes or reddened skin after any change of lamp or distance.`,
   'A new lamp is stronger than the old one: fit it at the distance its maker gives, not closer, and measure again.',
   'Follow the lamp maker’s instructions, and ask a reptile-experienced vet about the animal’s own UV needs.',

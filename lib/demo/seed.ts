@@ -5,6 +5,7 @@ import { Enclosure, Membership, Organisation, User, initModels } from '@/models'
 import { DEMO_ORGANISATIONS, DEMO_PASSWORDS, type DemoOrganisation } from './scenario';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { seedDemoDesigns } from './designs';
+import { seedDemoCounter } from './counter';
 import { seedDemoLampLog } from './lamp-log';
 
 export type SeedResult = {
@@ -108,6 +109,8 @@ export async function seedDemo(sequelize: Sequelize): Promise<SeedResult> {
     }
     // Invented lamps and meter readings for the lamp log (lib/demo/lamp-log.ts).
     await seedDemoLampLog(transaction);
+    // Invented customers of the shop and their counter tests (lib/demo/counter.ts).
+    await seedDemoCounter(transaction);
     // Example designs of those enclosures, made over the logged lamps (lib/demo/designs.ts).
     Object.assign(created, await seedDemoDesigns(transaction));
   });

@@ -98,7 +98,14 @@ async function demoIds(page: Page) {
     lampId: await firstId('/lamp-log', /^\/lamp-log\/(\d+)$/),
     speciesId: await firstId('/species', /^\/species\/(\d+)$/),
     lampTypeId: await firstId('/lamp-catalogue', /^\/lamp-catalogue\/(\d+)$/),
+    ...(await counterIds()),
   };
+  async function counterIds() {
+    // The demo shop's invented customers, and a lamp the counter tested for the first of them.
+    const customerId = await firstId('/customers', /^\/customers\/(\d+)$/);
+    const counterLampId = await firstId(`/customers/${customerId}`, /^\/counter\/lamps\/(\d+)$/);
+    return { customerId, counterLampId };
+  }
 }
 
 /** One page to scan: its route pattern (as the app folder names it), the address, who looks at it. */
@@ -159,6 +166,12 @@ const targets: Target[] = [
   staffSees('species-sheet', '/species/[id]', () => `/species/${ids.speciesId}`),
   staffSees('species-edit', '/species/[id]/edit', () => `/species/${ids.speciesId}/edit`),
   staffSees('species-new', '/species/new', () => '/species/new'),
+  staffSees('customers', '/customers', () => '/customers'),
+  staffSees('customer', '/customers/[id]', () => `/customers/${ids.customerId}`),
+  staffSees('customer-edit', '/customers/[id]/edit', () => `/customers/${ids.customerId}/edit`),
+  staffSees('customer-new', '/customers/new', () => '/customers/new'),
+  staffSees('counter', '/counter', () => '/counter'),
+  staffSees('counter-lamp', '/counter/lamps/[id]', () => `/counter/lamps/${ids.counterLampId}`),
   staffSees('account', '/account', () => '/account'),
   staffSees('not-found', '/enclosures/[id]', () => '/enclosures/999999999'),
   staffSees('studio', '/studio/[variantId]', () => `/studio/${ids.variantA}`, true),

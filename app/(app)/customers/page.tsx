@@ -6,6 +6,8 @@ import { PageHeader } from '@/components/ui/PageHeader';
 import { button, card, input, link } from '@/components/ui/styles';
 import { mayUseCounter } from '@/lib/customers/access';
 import { customersByName } from '@/lib/customers/queries';
+import { isExampleData } from '@/lib/organisations/queries';
+import { ExampleDataMark } from '@/components/lamp-log/ExampleDataMark';
 import { currentMembership, requireUser } from '@/lib/session';
 
 export const metadata: Metadata = { title: 'Customers' };
@@ -19,7 +21,10 @@ export default async function CustomersPage({ searchParams }: Props) {
   if (!membership || !mayUseCounter(user, membership.organisationId)) notFound();
   const raw = (await searchParams).q;
   const q = (Array.isArray(raw) ? raw[0] : raw)?.trim().slice(0, 100) || undefined;
-  const { items, more } = await customersByName(membership.organisationId, q);
+  const [{ items, more }, example] = await Promise.all([
+    customersByName(membership.organisationId, q),
+    isExampleData(membership.organisationId),
+  ]);
   return (
     <>
       <PageHeader
@@ -36,6 +41,7 @@ export default async function CustomersPage({ searchParams }: Props) {
           </>
         }
       />
+      {example && <ExampleDataMark />}
       <form method="get" role="search" className="mb-4 flex max-w-md items-end gap-2">
         <div className="flex-1">
           <label htmlFor="customer-search" className="mb-1 block text-body font-medium text-basalt-800">

@@ -11,6 +11,8 @@ import { button, card, link } from '@/components/ui/styles';
 import { parseId } from '@/lib/api/schemas';
 import { customerForPage } from '@/lib/customers/access';
 import { customerDto, lampsOfCustomer } from '@/lib/customers/queries';
+import { isExampleData } from '@/lib/organisations/queries';
+import { ExampleDataMark } from '@/components/lamp-log/ExampleDataMark';
 import { requireUser } from '@/lib/session';
 
 export const metadata: Metadata = { title: 'Customer' };
@@ -24,7 +26,10 @@ export default async function CustomerPage({ params }: Props) {
   const row = id ? await customerForPage(user, id) : null;
   if (!row) notFound();
   const customer = customerDto(row);
-  const lamps = await lampsOfCustomer(customer.id);
+  const [lamps, example] = await Promise.all([
+    lampsOfCustomer(customer.id),
+    isExampleData(customer.organisationId),
+  ]);
   return (
     <>
       <Breadcrumbs trail={[{ href: '/customers', label: 'All customers' }]} />
@@ -42,6 +47,7 @@ export default async function CustomerPage({ params }: Props) {
           </>
         }
       />
+      {example && <ExampleDataMark />}
       <dl className={`${card} mb-6 grid gap-x-6 gap-y-2 p-4 text-body sm:grid-cols-[auto_1fr]`}>
         <dt className="font-medium text-basalt-700">E-mail</dt>
         <dd>{customer.email ?? '—'}</dd>

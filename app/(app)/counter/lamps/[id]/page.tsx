@@ -10,6 +10,8 @@ import { button, card } from '@/components/ui/styles';
 import { parseId } from '@/lib/api/schemas';
 import { counterLampView } from '@/lib/counter/queries';
 import { counterLampForPage } from '@/lib/customers/access';
+import { isExampleData } from '@/lib/organisations/queries';
+import { ExampleDataMark } from '@/components/lamp-log/ExampleDataMark';
 import { requireUser } from '@/lib/session';
 import { THROUGH_SHORT, type ReadingThrough } from '@/shared/reading-setup';
 
@@ -26,7 +28,7 @@ export default async function CounterLampPage({ params }: Props) {
   const id = parseId(raw);
   const row = id ? await counterLampForPage(user, id) : null;
   if (!row) notFound();
-  const lamp = await counterLampView(row);
+  const [lamp, example] = await Promise.all([counterLampView(row), isExampleData(row.organisationId)]);
   const name = lamp.label ?? lamp.lampTypeName;
   return (
     <>
@@ -43,13 +45,14 @@ export default async function CounterLampPage({ params }: Props) {
       />
       <PageHeader
         title={name}
-        lead={`${lamp.lampTypeName} · in use since ${lamp.firstUsedEstimated ? 'about ' : ''}${lamp.firstUsedOn}, ${lamp.hoursPerDay} hours a day${lamp.customer ? '' : ' · kept without a customer'}`}
+        lead={`${lamp.label ? `${lamp.lampTypeName} · in use since` : 'In use since'} ${lamp.firstUsedEstimated ? 'about ' : ''}${lamp.firstUsedOn}, ${lamp.hoursPerDay} hours a day${lamp.customer ? '' : ' · kept without a customer'}`}
         actions={
           <Link href={`/counter?lamp=${lamp.id}`} className={button.primary}>
             Test again
           </Link>
         }
       />
+      {example && <ExampleDataMark />}
       {lamp.answer && (
         <div className="mb-6 max-w-xl">
           <p className="mb-2 text-body text-basalt-700">
