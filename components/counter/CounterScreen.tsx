@@ -14,6 +14,7 @@ import { useLengthUnit } from '@/components/ui/units';
 import type { CounterAnswerDto } from '@/lib/counter/queries';
 import { WARM_UP_MINUTES } from '@/shared/reading-setup';
 import { CustomerPicker, type Who } from './CustomerPicker';
+import { SendSlipButton } from './SendSlipButton';
 import { VerdictCard } from './VerdictCard';
 
 export type CounterOptions = {
@@ -382,6 +383,11 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
               Test another lamp
             </a>
           </p>
+          {saved.customerId && (
+            <div className="mt-2">
+              <SendSlipButton lampId={saved.lampId} />
+            </div>
+          )}
         </Notice>
       ) : (
         <section className={`${card} space-y-3 p-4`} aria-label="Save">

@@ -172,7 +172,8 @@ export async function assessTest(user: CurrentUser, input: AssessInput, now = ne
 export type CounterLampView = {
   id: number;
   organisationId: number;
-  customer: { id: number; name: string } | null;
+  /** `mayEmail`: the customer has an address and agreed to e-mails. */
+  customer: { id: number; name: string; mayEmail: boolean } | null;
   label: string | null;
   lampTypeId: number;
   lampTypeName: string;
@@ -221,7 +222,13 @@ export async function counterLampView(lamp: CounterLamp, today = todayIso()): Pr
   return {
     id: lamp.id,
     organisationId: lamp.organisationId,
-    customer: customer ? { id: customer.id, name: customer.name } : null,
+    customer: customer
+      ? {
+          id: customer.id,
+          name: customer.name,
+          mayEmail: Boolean(customer.email && customer.reminderConsentAt),
+        }
+      : null,
     label: lamp.label ?? null,
     lampTypeId: lamp.lampTypeId,
     lampTypeName: type?.name ?? 'Unknown lamp type',

@@ -2,7 +2,9 @@ import 'server-only';
 import { badRequest } from '@/lib/api';
 import { getSequelize } from '@/lib/db';
 import { CounterLamp, Customer } from '@/models';
+import { organisationName } from '@/lib/organisations/queries';
 import type { CustomerInput, CustomerPatch } from './schemas';
+import { customerOfToken } from './unsubscribe-token';
 
 /** Writes of the shop's customers. Callers check access first (access.ts). */
 
@@ -60,4 +62,18 @@ export async function deleteCustomer(customer: Customer): Promise<void> {
     );
     await customer.destroy({ transaction });
   });
+}
+
+/**
+ * Withdraws consent for the customer a signed unsubscribe token names; the shop's name for the answer,
+ * or null when the token does not verify (or its customer is gone).
+ */
+export async function withdrawConsentByToken(token: string, now = new Date()): Promise<string | null> {
+  const id = customerOfToken(token);
+  if (id === null) return null;
+  getSequelize();
+  const customer = await Customer.findByPk(id);
+  if (!customer) return null;
+  await withdrawConsent(customer, now);
+  return (await organisationName(customer.organisationId)) ?? 'the shop';
 }

@@ -205,6 +205,7 @@ describe('pages check access themselves', () => {
       '/members → 404',
       '/customers → 404',
       '/customers/new → 404',
+      '/counter → 404',
     ]);
   });
 });

@@ -157,7 +157,8 @@ describe('every route handler refuses people who may not', () => {
             !r.pattern.startsWith('/s/') &&
             r.pattern !== '/api/invitations/accept' &&
             r.pattern !== '/api/password-reset/complete' &&
-            r.pattern !== '/api/sign-up/confirm'
+            r.pattern !== '/api/sign-up/confirm' &&
+            r.pattern !== '/api/unsubscribe'
           )
             wrong.push(`${keyOf(r)} → ${reply.status} for nobody (expected 401)`);
           const leaked = hiddenFrom(actor).filter((m) => reply.text.includes(MARK[m]));
@@ -302,6 +303,7 @@ describe('every route handler refuses people who may not', () => {
         r.pattern === '/api/invitations/accept' ||
         r.pattern === '/api/password-reset/complete' ||
         r.pattern === '/api/sign-up/confirm' ||
+        r.pattern === '/api/unsubscribe' ||
         r.pattern.startsWith('/s/')
       )
         continue;

@@ -27,6 +27,8 @@ const PUBLIC_HANDLERS: Record<string, string> = {
     'e-mails a link to the address if an account has it; answers the same either way, reads nothing back (rate-limited)',
   'app/api/password-reset/complete/route.ts POST':
     'the unguessable, single-use, 30-minute token from the e-mailed link is the permission',
+  'app/api/unsubscribe/route.ts GET':
+    'the signed token from the e-mailed link names one customer and only withdraws their consent to reminder e-mails; shows no data',
   'app/api/invitations/accept/route.ts POST':
     'the unguessable, single-use, expiring invitation token is the permission; the e-mail must match',
 };

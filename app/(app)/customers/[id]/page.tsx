@@ -97,7 +97,7 @@ export default async function CustomerPage({ params }: Props) {
                   <span>
                     <LocalTime value={l.lastTest.takenAt} shown="day" />:{' '}
                     {VERDICT_LABEL[l.lastTest.verdict] ?? l.lastTest.verdict}
-                    {l.lastTest.testAgainOn ? ` (test again ${l.lastTest.testAgainOn})` : ''}
+                    {l.lastTest.testAgainOn ? ` (by ${l.lastTest.testAgainOn})` : ''}
                   </span>
                 )}
                 <Link href={`/counter?lamp=${l.id}`} className={link}>

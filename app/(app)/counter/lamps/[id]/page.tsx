@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
+import { SendSlipButton } from '@/components/counter/SendSlipButton';
 import { VerdictCard } from '@/components/counter/VerdictCard';
 import { VERDICT_LABEL } from '@/components/customers/verdict-label';
 import { Breadcrumbs } from '@/components/ui/Breadcrumbs';
@@ -47,9 +48,12 @@ export default async function CounterLampPage({ params }: Props) {
         title={name}
         lead={`${lamp.label ? `${lamp.lampTypeName} · in use since` : 'In use since'} ${lamp.firstUsedEstimated ? 'about ' : ''}${lamp.firstUsedOn}, ${lamp.hoursPerDay} hours a day${lamp.customer ? '' : ' · kept without a customer'}`}
         actions={
-          <Link href={`/counter?lamp=${lamp.id}`} className={button.primary}>
-            Test again
-          </Link>
+          <>
+            <Link href={`/counter?lamp=${lamp.id}`} className={button.primary}>
+              Test again
+            </Link>
+            {lamp.customer?.mayEmail && lamp.answer && <SendSlipButton lampId={lamp.id} />}
+          </>
         }
       />
       {example && <ExampleDataMark />}
@@ -89,7 +93,7 @@ export default async function CounterLampPage({ params }: Props) {
                 <td className="px-3 py-2">{THROUGH_SHORT[r.through as ReadingThrough] ?? r.through}</td>
                 <td className="px-3 py-2">
                   {VERDICT_LABEL[r.verdict] ?? r.verdict}
-                  {r.testAgainOn ? ` (test again by ${r.testAgainOn})` : ''}
+                  {r.testAgainOn ? ` (by ${r.testAgainOn})` : ''}
                 </td>
               </tr>
             ))}

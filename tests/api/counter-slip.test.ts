@@ -1,0 +1,116 @@
+import { beforeEach, describe, expect, it } from 'vitest';
+import * as slip from '@/app/api/counter/lamps/[id]/slip/route';
+import * as tests from '@/app/api/counter/tests/route';
+import * as unsubscribe from '@/app/api/unsubscribe/route';
+import { settleMail } from '@/lib/auth/mail-soon';
+import { unsubscribeToken } from '@/lib/customers/unsubscribe-token';
+import { seedStartingCatalogue } from '@/lib/species/seed';
+import { Customer, LampType, MailMessage, type Organisation, type User } from '@/models';
+import { createWorld, useTestDatabase as withTestDatabase } from '../helpers/db';
+import { call } from './http';
+
+withTestDatabase();
+
+let shop: Organisation;
+let staff: User;
+let keeper: User;
+let outsider: User;
+let tubeId: number;
+
+beforeEach(async () => {
+  ({ shop, staff, keeper, outsider } = await createWorld());
+  await seedStartingCatalogue(shop.id);
+  tubeId = (await LampType.findOne({ where: { organisationId: shop.id, tech: 't5' } }))!.id;
+});
+
+async function testedLamp(customer: Record<string, unknown>) {
+  const r = await call(tests.POST, {
+    method: 'POST',
+    path: '/api/counter/tests',
+    as: staff,
+    body: {
+      organisationId: shop.id,
+      lamp: { lampTypeId: tubeId, ageMonths: 6, hoursPerDay: 12 },
+      reading: { distance: 30, value: 30, unit: 'uvb', through: 'nothing', warmedUp: 'yes' },
+      customer: { kind: 'new', name: 'Jules Invented', ...customer },
+    },
+  });
+  expect(r.status).toBe(201);
+  return r.body as { lampId: number; customerId: number };
+}
+const sendSlip = (as: User | null, id: number) =>
+  call(slip.POST, { method: 'POST', path: `/api/counter/lamps/${id}/slip`, params: { id }, as });
+const openLink = (url: string) => {
+  const u = new URL(url);
+  return call(unsubscribe.GET, { path: `${u.pathname}${u.search}`, as: null });
+};
+
+describe('the test slip and the unsubscribe link', () => {
+  it('e-mails the slip once, with the verdict, the cautions and a link that stops e-mails signed out', async () => {
+    const { lampId, customerId } = await testedLamp({ email: 'jules@example.com', reminderConsent: true });
+    const sent = await sendSlip(staff, lampId);
+    expect(sent.status).toBe(201);
+    await settleMail();
+    const message = (await MailMessage.findOne({ where: { kind: 'counter-slip' } }))!;
+    expect(message.toEmail).toBe('jules@example.com');
+    expect(message.body).toMatch(/Verdict: /);
+    expect(message.body).toMatch(/vet/);
+    expect(message.body).toContain(shop.name);
+    // Once per reading.
+    expect((await sendSlip(staff, lampId)).body).toEqual({ queued: false });
+    expect(await MailMessage.count({ where: { kind: 'counter-slip' } })).toBe(1);
+
+    const link = /(http\S+\/api\/unsubscribe\?token=\S+)/.exec(message.body)![1]!;
+    const before = (await Customer.findByPk(customerId))!;
+    const opened = await openLink(link);
+    expect(opened.status).toBe(200);
+    expect(opened.text).toContain('E-mails stopped');
+    expect(opened.text).not.toContain('jules@example.com');
+    const after = (await Customer.findByPk(customerId))!;
+    expect(after.reminderConsentAt).toBeNull();
+    expect(after.reminderConsentWithdrawnAt).not.toBeNull();
+    // Single-purpose: nothing but the consent changed.
+    expect([after.name, after.email, after.phone, after.notes]).toEqual([
+      before.name,
+      before.email,
+      before.phone,
+      before.notes,
+    ]);
+    // Opening it again is harmless; and without consent no slip goes out.
+    expect((await openLink(link)).status).toBe(200);
+    const refused = await sendSlip(staff, lampId);
+    expect(refused.status).toBe(400);
+    expect(refused.body.error.field).toBe('customer.reminderConsent');
+    expect(await MailMessage.count({ where: { kind: 'counter-slip' } })).toBe(1);
+  });
+
+  it('never sends a slip without consent or an address', async () => {
+    const { lampId } = await testedLamp({ email: 'no.consent@example.com', reminderConsent: false });
+    const r = await sendSlip(staff, lampId);
+    expect(r.status).toBe(400);
+    expect(await MailMessage.count()).toBe(0);
+  });
+
+  it('a forged, altered or other customer’s token does nothing', async () => {
+    const a = await testedLamp({ email: 'a@example.com', reminderConsent: true });
+    const b = await testedLamp({ email: 'b@example.com', reminderConsent: true });
+    const good = unsubscribeToken(a.customerId);
+    const altered = `${b.customerId}.${good.split('.')[1]}`;
+    for (const token of [altered, `${a.customerId}.${'A'.repeat(43)}`, 'x', '', good.slice(0, -1)]) {
+      const r = await call(unsubscribe.GET, {
+        path: `/api/unsubscribe?token=${encodeURIComponent(token)}`,
+        as: null,
+      });
+      expect(r.status, token).toBe(404);
+    }
+    expect((await Customer.findByPk(a.customerId))!.reminderConsentAt).not.toBeNull();
+    expect((await Customer.findByPk(b.customerId))!.reminderConsentAt).not.toBeNull();
+  });
+
+  it('keepers and another organisation cannot send a slip', async () => {
+    const { lampId } = await testedLamp({ email: 'c@example.com', reminderConsent: true });
+    for (const who of [keeper, outsider]) expect((await sendSlip(who, lampId)).status).toBe(404);
+    expect((await sendSlip(null, lampId)).status).toBe(401);
+    expect(await MailMessage.count()).toBe(0);
+  });
+});
