@@ -4,9 +4,9 @@ import * as tests from '@/app/api/counter/tests/route';
 import * as unsubscribe from '@/app/api/unsubscribe/route';
 import { settleMail } from '@/lib/auth/mail-soon';
 import { unsubscribeToken } from '@/lib/customers/unsubscribe-token';
-import { seedStartingCatalogue } from '@/lib/species/seed';
 import { Customer, LampType, MailMessage, type Organisation, type User } from '@/models';
-import { createWorld, useTestDatabase as withTestDatabase } from '../helpers/db';
+import { withTestDatabase } from '../helpers/db';
+import { createWorld } from '../helpers/world';
 import { call } from './http';
 
 withTestDatabase();
@@ -18,8 +18,7 @@ let outsider: User;
 let tubeId: number;
 
 beforeEach(async () => {
-  ({ shop, staff, keeper, outsider } = await createWorld());
-  await seedStartingCatalogue(shop.id);
+  ({ shop, staff, keeper, outsider } = await createWorld({ catalogue: true }));
   tubeId = (await LampType.findOne({ where: { organisationId: shop.id, tech: 't5' } }))!.id;
 });
 

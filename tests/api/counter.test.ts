@@ -2,7 +2,6 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import * as assess from '@/app/api/counter/assess/route';
 import * as lampRoute from '@/app/api/counter/lamps/[id]/route';
 import * as tests from '@/app/api/counter/tests/route';
-import { seedStartingCatalogue } from '@/lib/species/seed';
 import {
   CounterLamp,
   CounterReading,
@@ -12,7 +11,8 @@ import {
   type Organisation,
   type User,
 } from '@/models';
-import { createWorld, useTestDatabase as withTestDatabase } from '../helpers/db';
+import { withTestDatabase } from '../helpers/db';
+import { createWorld } from '../helpers/world';
 import { call } from './http';
 
 withTestDatabase();
@@ -27,9 +27,7 @@ let tubeId: number;
 let otherTubeId: number;
 
 beforeEach(async () => {
-  ({ shop, owner, staff, keeper, otherOrg, outsider } = await createWorld());
-  await seedStartingCatalogue(shop.id);
-  await seedStartingCatalogue(otherOrg.id);
+  ({ shop, owner, staff, keeper, otherOrg, outsider } = await createWorld({ catalogue: true }));
   tubeId = (await LampType.findOne({ where: { organisationId: shop.id, tech: 't5' } }))!.id;
   otherTubeId = (await LampType.findOne({ where: { organisationId: otherOrg.id, tech: 't5' } }))!.id;
 });
