@@ -6,7 +6,8 @@ import { UnitToggle } from '@/components/ui/UnitToggle';
 import { formatLengthRounded, type LengthUnit } from '@/shared/units';
 import { Table, type TableColumn } from '@/components/ui/Table';
 import { useLengthUnit } from '@/components/ui/units';
-import { input, link } from '@/components/ui/styles';
+import { link } from '@/components/ui/styles';
+import { Select } from '@/components/ui/Select';
 import type { LampTypeDto } from '@/lib/lamp-types/schema';
 import { LAMP_TECH_IDS, type LampTech as LampTechId } from '@/simulation';
 import { fmt, months, techLabel } from './labels';
@@ -91,24 +92,20 @@ export function LampTypeTable({ lampTypes }: { lampTypes: LampTypeDto[] }) {
   return (
     <div>
       <div className="mb-3 flex flex-wrap items-end justify-between gap-3">
-        <div className="w-full max-w-xs">
-          <label htmlFor="tech-filter" className="mb-1 block text-body font-medium text-basalt-800">
-            Technology
-          </label>
-          <select
-            id="tech-filter"
-            className={input}
-            value={tech}
-            onChange={(e) => setTech(e.target.value as LampTechId | '')}
-          >
-            <option value="">All technologies</option>
-            {present.map((t) => (
-              <option key={t} value={t}>
-                {techLabel(t)}
-              </option>
-            ))}
-          </select>
-        </div>
+        <Select
+          id="tech-filter"
+          label="Technology"
+          className="w-full max-w-xs"
+          value={tech}
+          onChange={(e) => setTech(e.target.value as LampTechId | '')}
+        >
+          <option value="">All technologies</option>
+          {present.map((t) => (
+            <option key={t} value={t}>
+              {techLabel(t)}
+            </option>
+          ))}
+        </Select>
         <UnitToggle />
       </div>
       <Table data={shown} columns={columns} caption="Lamp types" rowKey={(t) => t.id} head="plain" />

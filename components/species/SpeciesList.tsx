@@ -2,7 +2,8 @@
 
 import Link from '@/components/ui/Link';
 import { useMemo, useState } from 'react';
-import { input, link } from '@/components/ui/styles';
+import { link } from '@/components/ui/styles';
+import { Field } from '@/components/ui/Field';
 import type { SpeciesSheetDto } from '@/lib/species/schema';
 import type { TempUnit } from '@/shared/units';
 import { formatRange, formatTempRange } from './format';
@@ -92,19 +93,15 @@ export function SpeciesList({ sheets }: { sheets: SpeciesSheetDto[] }) {
   return (
     <div>
       <div className="mb-3 flex flex-wrap items-end justify-between gap-3">
-        <div className="w-full max-w-xs">
-          <label htmlFor="species-search" className="mb-1 block text-body font-medium text-basalt-800">
-            Search
-          </label>
-          <input
-            id="species-search"
-            type="search"
-            className={input}
-            placeholder="Common or scientific name"
-            value={q}
-            onChange={(e) => setQ(e.target.value)}
-          />
-        </div>
+        <Field
+          id="species-search"
+          label="Search"
+          type="search"
+          className="w-full max-w-xs"
+          placeholder="Common or scientific name"
+          value={q}
+          onChange={(e) => setQ(e.target.value)}
+        />
         <UnitToggle quantity="temperature" />
       </div>
       {shown.length === 0 ? (
