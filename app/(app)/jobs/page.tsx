@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
-import { LocalTime } from '@/components/jobs/LocalTime';
+import { FailingTable, RunsTable } from '@/components/jobs/JobTables';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { Notice } from '@/components/ui/Notice';
 import { PageHeader } from '@/components/ui/PageHeader';
@@ -31,22 +31,6 @@ function countsText(run: RunView): string {
   const entries = Object.entries(run.counts);
   if (entries.length === 0) return run.outcome === 'running' ? '—' : 'nothing for your organisation';
   return entries.map(([name, n]) => `${n.toLocaleString('en-GB')} ${name}`).join(', ');
-}
-
-const td = 'px-3 py-2 align-top';
-
-function Head({ columns }: { columns: string[] }) {
-  return (
-    <thead className="bg-basalt-50 text-caption uppercase tracking-wide text-basalt-600">
-      <tr>
-        {columns.map((c) => (
-          <th key={c} scope="col" className="px-3 py-2 font-semibold">
-            {c}
-          </th>
-        ))}
-      </tr>
-    </thead>
-  );
 }
 
 /**
@@ -83,46 +67,29 @@ export default async function JobsPage() {
         {failures.length === 0 && undelivered.length === 0 ? (
           <p className="text-body text-basalt-600">Nothing is failing for your organisation.</p>
         ) : (
-          <div className="overflow-x-auto rounded-lg border border-basalt-200 bg-white">
-            <table className="min-w-full divide-y divide-basalt-200 text-left text-body">
-              <caption className="sr-only">Work that failed and is waiting to be retried</caption>
-              <Head columns={['What', 'Error', 'Attempts', 'Last failed', 'Next attempt']} />
-              <tbody className="divide-y divide-basalt-100">
-                {failures.map((f) => (
-                  <tr key={`${f.job}:${f.key}`}>
-                    <td className={td}>
-                      {f.label}
-                      <span className="block text-caption text-basalt-500">{jobTitle(f.job)}</span>
-                    </td>
-                    <td className={`${td} max-w-md break-words text-basalt-700`}>{f.lastError}</td>
-                    <td className={td}>{f.attempts}</td>
-                    <td className={`${td} whitespace-nowrap`}>
-                      <LocalTime iso={f.lastFailedAt} />
-                    </td>
-                    <td className={`${td} whitespace-nowrap`}>
-                      <LocalTime iso={f.nextAttemptAt} />
-                    </td>
-                  </tr>
-                ))}
-                {undelivered.map((m) => (
-                  <tr key={`mail:${m.id}`}>
-                    <td className={td}>
-                      E-mail to {m.to}
-                      <span className="block text-caption text-basalt-500">{m.subject}</span>
-                    </td>
-                    <td className={`${td} max-w-md break-words text-basalt-700`}>{m.lastError ?? '—'}</td>
-                    <td className={td}>{m.attempts}</td>
-                    <td className={`${td} whitespace-nowrap`}>
-                      <LocalTime iso={m.lastTriedAt} />
-                    </td>
-                    <td className={`${td} whitespace-nowrap`}>
-                      {m.nextAttemptAt ? <LocalTime iso={m.nextAttemptAt} /> : 'Given up: check the address'}
-                    </td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
+          <FailingTable
+            rows={[
+              ...failures.map((f) => ({
+                key: `${f.job}:${f.key}`,
+                what: f.label,
+                detail: jobTitle(f.job),
+                error: f.lastError,
+                attempts: f.attempts,
+                lastAt: f.lastFailedAt,
+                nextAt: f.nextAttemptAt,
+              })),
+              ...undelivered.map((m) => ({
+                key: `mail:${m.id}`,
+                what: `E-mail to ${m.to}`,
+                detail: m.subject,
+                error: m.lastError ?? '—',
+                attempts: m.attempts,
+                lastAt: m.lastTriedAt,
+                nextAt: m.nextAttemptAt,
+                givenUp: 'Given up: check the address',
+              })),
+            ]}
+          />
         )}
       </section>
 
@@ -138,35 +105,16 @@ export default async function JobsPage() {
             </p>
           </EmptyState>
         ) : (
-          <div className="overflow-x-auto rounded-lg border border-basalt-200 bg-white">
-            <table className="min-w-full divide-y divide-basalt-200 text-left text-body">
-              <caption className="sr-only">Recent runs of the background jobs, newest first</caption>
-              <Head columns={['Run', 'Started', 'Took', 'Outcome', 'For your organisation']} />
-              <tbody className="divide-y divide-basalt-100">
-                {runs.map((r) => {
-                  const o = OUTCOME[r.outcome] ?? { label: r.outcome, className: 'bg-basalt-100' };
-                  return (
-                    <tr key={r.id}>
-                      <td className={td}>
-                        {jobTitle(r.job)}
-                        <span className="block text-caption text-basalt-500">#{r.id}</span>
-                      </td>
-                      <td className={`${td} whitespace-nowrap`}>
-                        <LocalTime iso={r.startedAt} />
-                      </td>
-                      <td className={`${td} whitespace-nowrap`}>{duration(r.ms)}</td>
-                      <td className={td}>
-                        <span className={`rounded px-2 py-0.5 text-caption font-medium ${o.className}`}>
-                          {o.label}
-                        </span>
-                      </td>
-                      <td className={`${td} text-basalt-700`}>{countsText(r)}</td>
-                    </tr>
-                  );
-                })}
-              </tbody>
-            </table>
-          </div>
+          <RunsTable
+            rows={runs.map((r) => ({
+              id: r.id,
+              title: jobTitle(r.job),
+              startedAt: r.startedAt,
+              took: duration(r.ms),
+              outcome: OUTCOME[r.outcome] ?? { label: r.outcome, className: 'bg-basalt-100' },
+              counts: countsText(r),
+            }))}
+          />
         )}
       </section>
     </>
