@@ -15,6 +15,7 @@ export {
   SHORT_WAVE_RATIO_FACTOR,
   isShortWaveRatio,
 } from './sources/uv';
+export { surfaceC } from './assess/format';
 export { METER_CAVEAT, RULE_OF_THUMB_LABEL, shortWaveCaution } from './assess/uvTargets';
 export { tubeBelowCentre, tubePiece, tubePieceOffset } from './sources/tube';
 export { pointIrradiance } from './sources/point';

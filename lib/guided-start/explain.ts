@@ -1,5 +1,12 @@
 import type { Finding } from '@/simulation';
-import { controlAdvice, lifetimeSentence, neededBaskingCm, UV_ZONES, type SpeciesSheet } from '@/simulation';
+import {
+  controlAdvice,
+  lifetimeSentence,
+  neededBaskingCm,
+  surfaceC,
+  UV_ZONES,
+  type SpeciesSheet,
+} from '@/simulation';
 import { targetWarning } from '@/lib/species/consistency';
 import { baskingZone, hideBox, lampCounts, lampY, type EnclosureInput, type Lid } from './layout';
 import type { Proposal } from './propose';
@@ -79,7 +86,7 @@ export function explain(
               : '') +
             '. '
           : `No separate heat lamp: the UV ${n.uv > 1 ? 'lamps give' : `lamp (${c.uv.name}) gives`} the basking heat itself. `) +
-        `The hottest surface the animal can reach is about ${f1(hotC)} °C (the sheet asks ${f1(num(hot, 'targetLo')!)}–${f1(num(hot, 'targetHi')!)} °C).`,
+        `The hottest surface the animal can reach is ${surfaceC(hotC)} °C (the sheet asks ${f1(num(hot, 'targetLo')!)}–${f1(num(hot, 'targetHi')!)} °C).`,
     });
   }
   const shared = find('shared-basking');

@@ -172,3 +172,30 @@ describe('mercury vapour as the only heat', () => {
     expect(texts.join(' ')).not.toMatch(/turn down the thermostat/);
   });
 });
+
+describe('the guided start’s explanation of a surface far too hot', () => {
+  it('says "over 100 °C" rather than a figure no thermometer would confirm', () => {
+    const d = hotDesign('halogen');
+    const assessment = assess(d, sheet);
+    const hot = assessment.findings.find((f) => f.numbers.hotC !== undefined)!;
+    // The design hangs a halogen a few centimetres over the ledge, so the radiant model reads far past 100.
+    expect(hot.numbers.hotC).toBeGreaterThan(100);
+    const p: Proposal = {
+      candidate: {
+        uv: lampType('t5'),
+        reflector: false,
+        heat: lampType('halogen'),
+        mount: 'above',
+        perchTopCm: 20,
+      },
+      design: d,
+      assessment,
+      unmet: [],
+      harmful: [],
+    };
+    const text = explain(p, sheet, { width: 90, height: 45, depth: 45, roomTempC: 24 }, 'mesh');
+    const line = text.map((l) => l.text).find((t) => t.includes('hottest surface'))!;
+    expect(line).toMatch(/The hottest surface the animal can reach is over 100 °C/);
+    expect(line).not.toMatch(/about \d{3}/);
+  });
+});
