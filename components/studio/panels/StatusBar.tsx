@@ -109,6 +109,13 @@ export function StatusBar({
       <span className="hidden text-basalt-500 lg:inline">
         All figures are estimates — verify with a meter and thermometer.
       </span>
+      {/* A narrow screen has no room for the sentence, but the warning stays: the figures are estimates. */}
+      <span
+        className="text-basalt-500 lg:hidden"
+        title="All figures are estimates — verify with a meter and thermometer."
+      >
+        Estimates: verify
+      </span>
     </footer>
   );
 }
