@@ -10,7 +10,6 @@
  */
 import 'server-only';
 import { config } from '@/lib/config';
-import { getSequelize } from '@/lib/db';
 import { hashToken, invitationState } from '@/lib/auth/invitations';
 import { Invitation } from '@/models';
 
@@ -54,7 +53,6 @@ async function allCaptured(): Promise<Partial<CapturedMessage>[] | null> {
 async function withDeadLinksRemoved(messages: CapturedMessage[], organisationId: number) {
   const tokens = new Set(messages.flatMap((m) => [...m.text.matchAll(INVITE_LINK)].map((x) => x[1]!)));
   if (tokens.size === 0) return messages;
-  getSequelize();
   const rows = await Invitation.findAll({
     where: { tokenHash: [...tokens].map(hashToken), organisationId },
   });

@@ -23,7 +23,6 @@ export async function checkLimits(
   windowMs: number,
   now = new Date(),
 ): Promise<LimitVerdict> {
-  getSequelize();
   const rows = await SignInAttempt.findAll({
     where: { key: rules.map((r) => r.key), windowStart: { [Op.gt]: new Date(now.getTime() - windowMs) } },
   });
@@ -69,7 +68,6 @@ export async function countAttempt(keys: string[], windowMs: number, now = new D
 }
 
 export async function clearFailures(key: string): Promise<void> {
-  getSequelize();
   await SignInAttempt.destroy({ where: { key } });
 }
 
@@ -81,7 +79,6 @@ export async function readCounters(
   windowMs: number,
   now = new Date(),
 ): Promise<Map<string, Counter>> {
-  getSequelize();
   const rows = await SignInAttempt.findAll({
     where: { key: keys, windowStart: { [Op.gt]: new Date(now.getTime() - windowMs) } },
   });
@@ -102,7 +99,6 @@ export async function markKnown(key: string, now = new Date()): Promise<void> {
 }
 
 export async function isKnown(key: string, now = new Date()): Promise<boolean> {
-  getSequelize();
   const row = await SignInAttempt.findOne({
     where: { key, windowStart: { [Op.gt]: new Date(now.getTime() - KNOWN_MS) } },
     attributes: ['id'],

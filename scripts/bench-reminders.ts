@@ -8,7 +8,7 @@ import { spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import { parseArgs } from 'node:util';
 import bcrypt from 'bcryptjs';
-import { closeSequelize, getSequelize } from '@/lib/db';
+import { closeSequelize } from '@/lib/db';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { Enclosure, Lamp, LampType, MailMessage, Membership, Organisation, Reading, User } from '@/models';
@@ -28,7 +28,6 @@ const PER_ENCLOSURE = 10;
 const stamp = Date.now().toString(36);
 
 async function seed() {
-  getSequelize();
   const org = await Organisation.create({ name: `Example data: busy shop ${stamp} (reminder load test)` });
   await seedStartingCatalogue(org.id);
   const t5 = (await LampType.findOne({ where: { organisationId: org.id, tech: 't5' } }))!;

@@ -27,7 +27,6 @@ export type ChangePasswordInput = z.infer<typeof changePasswordBody>;
 
 /** Ends every session of the user, everywhere (the next request of each is refused). */
 export async function endAllSessions(userId: number, transaction?: Transaction): Promise<void> {
-  getSequelize();
   await User.increment('sessionVersion', { where: { id: userId }, transaction });
 }
 

@@ -1,7 +1,6 @@
 import 'server-only';
 import { literal, Op, type OrderItem, type WhereOptions } from 'sequelize';
 import { z } from 'zod';
-import { getSequelize } from '@/lib/db';
 import {
   defaultDescending,
   ENCLOSURE_SORT_COLUMNS,
@@ -125,7 +124,6 @@ export function enclosureSearch(q: string | undefined): WhereOptions {
  * enclosures this user may see and passes `keeperId` for a keeper: this only fetches.
  */
 export async function listEnclosures(query: Omit<EnclosureListQuery, 'keeperId'> & { keeperId?: number }) {
-  getSequelize();
   const { organisationId, keeperId, q, sort, descending, offset, limit } = query;
   const { rows, count } = await Enclosure.findAndCountAll({
     where: { organisationId, ...(keeperId ? { keeperId } : {}), ...enclosureSearch(q) },

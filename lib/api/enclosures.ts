@@ -1,7 +1,6 @@
 import 'server-only';
 import { col, fn } from 'sequelize';
 import { z } from 'zod';
-import { getSequelize } from '@/lib/db';
 import { ENCLOSURE_MAX_CM, ENCLOSURE_MIN_CM } from '@/shared/enclosure-size';
 import { Enclosure, Membership, User } from '@/models';
 import { badRequest, notFound } from './errors';
@@ -76,7 +75,6 @@ export async function enclosureCounts(
   keeperIds: number[],
 ): Promise<Map<number, number>> {
   if (keeperIds.length === 0) return new Map();
-  getSequelize();
   const rows = (await Enclosure.findAll({
     attributes: ['keeperId', [fn('COUNT', col('id')), 'n']],
     where: { organisationId, keeperId: keeperIds },
@@ -88,7 +86,6 @@ export async function enclosureCounts(
 
 /** An enclosure's keeper must belong to the organisation (any role: staff may keep the shop's own animals). */
 export async function assertKeeperInOrganisation(organisationId: number, keeperId: number): Promise<void> {
-  getSequelize();
   const member = await Membership.findOne({
     where: { organisationId, userId: keeperId },
     attributes: ['id'],
@@ -100,7 +97,6 @@ export type EnclosureWithKeeper = Enclosure & { keeper?: User | null };
 
 /** An enclosure with its keeper's name; 404 when there is none (access is the caller's check). */
 export async function enclosureWithKeeper(id: number): Promise<EnclosureWithKeeper> {
-  getSequelize();
   const enclosure = await Enclosure.findByPk(id, {
     include: [{ model: User, as: 'keeper', attributes: ['id', 'name'] }],
   });

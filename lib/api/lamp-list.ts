@@ -218,7 +218,6 @@ export type LampListPage = Awaited<ReturnType<typeof listLamps>>;
 
 /** The enclosure a lamp-log filter names, if this person may see it (its name for the page's notice). */
 export async function filteredEnclosure(organisationId: number, id: number, keeperId?: number) {
-  getSequelize();
   return Enclosure.findOne({
     where: { id, organisationId, ...(keeperId ? { keeperId } : {}) },
     attributes: ['id', 'name'],

@@ -1,6 +1,5 @@
 import 'server-only';
 import { Op } from 'sequelize';
-import { getSequelize } from '@/lib/db';
 import { Enclosure, Invitation, Membership, User, type Role } from '@/models';
 import { enclosureCounts, enclosureJson } from './enclosures';
 import { invitationJson } from '@/lib/auth/invitations';
@@ -14,7 +13,6 @@ export const PAGE_LIMIT = 500;
 export type MemberView = { userId: number; name: string; email: string; role: Role; joinedAt: string };
 
 export async function memberViews(organisationId: number, role?: Role): Promise<MemberView[]> {
-  getSequelize();
   const rows = await Membership.findAll({
     where: { organisationId, ...(role ? { role } : {}) },
     include: [{ model: User, as: 'user', attributes: ['id', 'name', 'email'] }],
@@ -45,7 +43,6 @@ export async function keeperViews(organisationId: number) {
 }
 
 export async function pendingInvitationViews(organisationId: number, role?: Role) {
-  getSequelize();
   const rows = await Invitation.findAll({
     where: {
       organisationId,
@@ -61,7 +58,6 @@ export async function pendingInvitationViews(organisationId: number, role?: Role
 }
 
 export async function enclosureView(id: number) {
-  getSequelize();
   const e = await Enclosure.findByPk(id, {
     include: [{ model: User, as: 'keeper', attributes: ['id', 'name'] }],
   });

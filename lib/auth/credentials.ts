@@ -1,6 +1,5 @@
 import 'server-only';
 import { z } from 'zod';
-import { getSequelize } from '@/lib/db';
 import { isDatabaseUnavailable } from '@/lib/api/errors';
 import {
   checkLimits,
@@ -120,7 +119,6 @@ export async function authorizeCredentials(
   const { email, password } = parsed.data;
   const keys = signInKeys(email, clientAddress(headers));
   try {
-    getSequelize();
     const verdict = await checkLimits(
       [{ key: keys.address, limit: SIGN_IN_LIMITS.perAddress }],
       SIGN_IN_LIMITS.windowMs,

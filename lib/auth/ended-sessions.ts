@@ -1,7 +1,6 @@
 import 'server-only';
 import { randomBytes } from 'node:crypto';
 import { Op } from 'sequelize';
-import { getSequelize } from '@/lib/db';
 import { EndedSession } from '@/models';
 import { SESSION_MAX_AGE_S } from './lifetime';
 import { loadSessionUser, type CurrentUser } from './session-user';
@@ -25,7 +24,6 @@ export async function loadActiveSession(token: SessionClaims): Promise<CurrentUs
   const { uid, sv, sid } = token;
   if (typeof uid !== 'number' || typeof sv !== 'number' || typeof sid !== 'string' || !SID.test(sid))
     return null;
-  getSequelize();
   const [ended, user] = await Promise.all([
     EndedSession.findByPk(sid, { attributes: ['sid'] }),
     loadSessionUser(uid, sv),
@@ -36,7 +34,6 @@ export async function loadActiveSession(token: SessionClaims): Promise<CurrentUs
 /** Whether a session id was signed out (a malformed id counts as ended). */
 export async function isSessionEnded(sid: string): Promise<boolean> {
   if (!SID.test(sid)) return true;
-  getSequelize();
   return (await EndedSession.findByPk(sid, { attributes: ['sid'] })) !== null;
 }
 
@@ -46,7 +43,6 @@ export async function isSessionEnded(sid: string): Promise<boolean> {
  */
 export async function endSession(sid: string, userId: number, expiresAt?: Date, now = new Date()) {
   if (!SID.test(sid)) return;
-  getSequelize();
   const latest = new Date(now.getTime() + SESSION_MAX_AGE_S * 1000);
   const until = expiresAt && expiresAt < latest && expiresAt > now ? expiresAt : latest;
   await EndedSession.findOrCreate({ where: { sid }, defaults: { sid, userId, expiresAt: until } });

@@ -2,7 +2,6 @@ import 'server-only';
 import { createHash, randomBytes } from 'node:crypto';
 import { Op } from 'sequelize';
 import { config } from '@/lib/config';
-import { getSequelize } from '@/lib/db';
 import { sendMail } from '@/lib/mail';
 import { ApiError, conflict, notFound } from '@/lib/api/errors';
 import { afterCursor } from '@/lib/api/pagination';
@@ -44,7 +43,6 @@ export async function inviteByEmail(input: {
   role: Role;
   invitedBy: { id: number; name: string };
 }): Promise<Invitation> {
-  getSequelize();
   const organisation = await Organisation.findByPk(input.organisationId);
   if (!organisation) throw new ApiError(404, 'not_found', 'That organisation was not found.');
   const existing = await User.findOne({ where: { email: input.email }, attributes: ['id'] });
@@ -122,7 +120,6 @@ export function invitationJson(inv: Invitation) {
 
 /** An organisation's invitations still waiting for an answer, by id, from after `cursor`. */
 export async function pendingInvitations(organisationId: number, opts: { cursor?: number; limit: number }) {
-  getSequelize();
   return Invitation.findAll({
     where: {
       organisationId,
@@ -138,7 +135,6 @@ export async function pendingInvitations(organisationId: number, opts: { cursor?
 
 /** Withdraws a pending invitation, if `user` may: its link stops working. */
 export async function revokeInvitation(user: CurrentUser, id: number) {
-  getSequelize();
   const invitation = await Invitation.findByPk(id);
   if (!invitation) throw notFound('That invitation');
   allow(
@@ -157,7 +153,6 @@ export async function revokeInvitation(user: CurrentUser, id: number) {
 /** The invitation behind a link's token, with its organisation's name; null for a token that is not one. */
 export async function invitationForToken(token: string) {
   if (!/^[A-Za-z0-9_-]{43}$/.test(token)) return null;
-  getSequelize();
   const invitation = await Invitation.findOne({
     where: { tokenHash: hashToken(token) },
     include: [{ model: Organisation, as: 'organisation', attributes: ['name'] }],
@@ -169,6 +164,5 @@ export async function invitationForToken(token: string) {
 
 /** Whether an address already has an account (the invitation page then asks to sign in). */
 export async function hasAccount(email: string): Promise<boolean> {
-  getSequelize();
   return Boolean(await User.findOne({ where: { email }, attributes: ['id'] }));
 }

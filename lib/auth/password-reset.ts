@@ -46,7 +46,6 @@ export const RESET_ANSWER = {
 export const resetUrl = (token: string) => linkUrl('/reset-password', token);
 
 export async function requestPasswordReset(input: z.output<typeof resetRequestBody>, address: string) {
-  getSequelize();
   const user = await limitedLinkRequest('reset', input.email, address, RESET_LIMITS);
   if (user) {
     deliverSoon((await queueResetMail(user)).id);

@@ -1,5 +1,4 @@
 import 'server-only';
-import { getSequelize } from '@/lib/db';
 import type { MembershipClaim, SessionUser } from '@/lib/permissions';
 import { Membership, Organisation, User } from '@/models';
 
@@ -10,7 +9,6 @@ export type CurrentUser = SessionUser & { email: string; name: string; sessionVe
  * version moved on (signed out everywhere, removed from an organisation). Two small indexed queries.
  */
 export async function loadSessionUser(userId: number, sessionVersion: number): Promise<CurrentUser | null> {
-  getSequelize();
   const user = await User.findByPk(userId, { attributes: ['id', 'email', 'name', 'sessionVersion'] });
   if (!user || user.sessionVersion !== sessionVersion) return null;
   return {
@@ -24,13 +22,11 @@ export async function loadSessionUser(userId: number, sessionVersion: number): P
 
 /** Right after a password check: whatever session version the account has now. */
 export async function loadUserById(userId: number): Promise<CurrentUser | null> {
-  getSequelize();
   const user = await User.findByPk(userId, { attributes: ['sessionVersion'] });
   return user ? loadSessionUser(userId, user.sessionVersion) : null;
 }
 
 export async function memberships(userId: number): Promise<MembershipClaim[]> {
-  getSequelize();
   const rows = await Membership.findAll({
     where: { userId },
     include: [{ model: Organisation, as: 'organisation', attributes: ['id', 'name'] }],

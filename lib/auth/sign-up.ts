@@ -172,7 +172,6 @@ async function queueConfirmMail(
 
 /** "Send the link again", from the sign-in page: the same answer whether or not the address has an account. */
 export async function resendConfirmation(input: z.output<typeof resendBody>, address: string) {
-  getSequelize();
   const user = await limitedLinkRequest('confirm', input.email, address, CONFIRM_LIMITS);
   if (user && !user.emailConfirmedAt) {
     const mail = await getSequelize().transaction((transaction) => queueConfirmMail(user, transaction));

@@ -2,7 +2,6 @@ import 'server-only';
 import { badRequest } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { counterLampFor } from '@/lib/customers/access';
-import { getSequelize } from '@/lib/db';
 import { todayIso } from '@/lib/lamp-log/dates';
 import type { ReadingFacts } from '@/lib/lamp-log/outlook';
 import { lampFacts, needOfSheet, readingFacts } from '@/lib/lamp-log/store';
@@ -89,7 +88,6 @@ type Resolved = {
  * one with its earlier readings; home details given now replace the kept ones), its type and species.
  */
 export async function resolveTest(user: CurrentUser, input: AssessInput, now: Date): Promise<Resolved> {
-  getSequelize();
   const today = todayIso(now);
   const existing = input.counterLampId ? await counterLampFor(user, input.counterLampId, 'update') : null;
   if (existing && existing.organisationId !== input.organisationId) {
@@ -199,7 +197,6 @@ export type CounterLampView = {
 
 /** A kept lamp with its customer, readings and today's answer from all of them. */
 export async function counterLampView(lamp: CounterLamp, today = todayIso()): Promise<CounterLampView> {
-  getSequelize();
   const [type, customer, sheet, readings] = await Promise.all([
     LampType.findByPk(lamp.lampTypeId),
     lamp.customerId ? Customer.findByPk(lamp.customerId) : null,

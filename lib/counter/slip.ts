@@ -3,7 +3,6 @@ import { UniqueConstraintError } from 'sequelize';
 import { badRequest } from '@/lib/api';
 import { deliverSoon } from '@/lib/auth/mail-soon';
 import { config } from '@/lib/config';
-import { getSequelize } from '@/lib/db';
 import { organisationName } from '@/lib/organisations/queries';
 import { CounterReading, Customer, MailMessage, type CounterLamp } from '@/models';
 import type { CounterLampView } from './queries';
@@ -58,7 +57,6 @@ export function composeSlip(input: {
 
 /** Queues the slip of the lamp's latest reading; null when it was sent before. */
 export async function sendSlip(lamp: CounterLamp, view: CounterLampView): Promise<MailMessage | null> {
-  getSequelize();
   const customer = lamp.customerId ? await Customer.findByPk(lamp.customerId) : null;
   if (!customer)
     throw badRequest('customer', 'This lamp is kept without a customer: there is nobody to send a slip to.');

@@ -1,7 +1,6 @@
 import 'server-only';
 import { allow, ApiError, notFound } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';
-import { getSequelize } from '@/lib/db';
 import { can, type Action } from '@/lib/permissions';
 import { CounterLamp, Customer } from '@/models';
 
@@ -11,7 +10,6 @@ import { CounterLamp, Customer } from '@/models';
  */
 
 export async function customerFor(user: CurrentUser, id: number, action: Action): Promise<Customer> {
-  getSequelize();
   const customer = await Customer.findByPk(id);
   if (!customer) throw notFound('The customer');
   allow(user, action, { kind: 'customer', organisationId: customer.organisationId }, 'The customer');
@@ -19,7 +17,6 @@ export async function customerFor(user: CurrentUser, id: number, action: Action)
 }
 
 export async function counterLampFor(user: CurrentUser, id: number, action: Action): Promise<CounterLamp> {
-  getSequelize();
   const lamp = await CounterLamp.findByPk(id);
   if (!lamp) throw notFound('The lamp');
   allow(user, action, { kind: 'customer', organisationId: lamp.organisationId }, 'The lamp');

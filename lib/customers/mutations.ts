@@ -13,7 +13,6 @@ export async function createCustomer(
   userId: number,
   now = new Date(),
 ): Promise<Customer> {
-  getSequelize();
   return Customer.create({
     organisationId: input.organisationId,
     name: input.name,
@@ -71,7 +70,6 @@ export async function deleteCustomer(customer: Customer): Promise<void> {
 export async function withdrawConsentByToken(token: string, now = new Date()): Promise<string | null> {
   const id = customerOfToken(token);
   if (id === null) return null;
-  getSequelize();
   const customer = await Customer.findByPk(id);
   if (!customer) return null;
   await withdrawConsent(customer, now);

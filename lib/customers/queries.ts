@@ -1,7 +1,6 @@
 import 'server-only';
 import { Op } from 'sequelize';
 import { likeContains } from '@/lib/api/like';
-import { getSequelize } from '@/lib/db';
 import { CounterLamp, CounterReading, Customer, LampType } from '@/models';
 
 /** Reads of the shop's customers. Callers check access first (access.ts). */
@@ -42,7 +41,6 @@ export async function listCustomers(
   organisationId: number,
   opts: { q?: string; cursor?: number; limit: number },
 ): Promise<Customer[]> {
-  getSequelize();
   const where: Record<string | symbol, unknown> = { organisationId };
   if (opts.cursor) where.id = { [Op.gt]: opts.cursor };
   if (opts.q) {
@@ -58,7 +56,6 @@ export async function listCustomers(
 
 /** For the list page: customers by name (a shop's customer list fits a page; the search narrows it). */
 export async function customersByName(organisationId: number, q: string | undefined, limit = 200) {
-  getSequelize();
   const where: Record<string | symbol, unknown> = { organisationId };
   if (q) {
     const like = likeContains(q);
@@ -93,7 +90,6 @@ export type CounterLampSummary = {
 
 /** A customer's counter lamps, newest first, with their number of tests and the last verdict. */
 export async function lampsOfCustomer(customerId: number): Promise<CounterLampSummary[]> {
-  getSequelize();
   const lamps = (await CounterLamp.findAll({
     where: { customerId },
     include: [

@@ -1,6 +1,5 @@
 import 'server-only';
 import type { CurrentUser } from '@/lib/auth/session-user';
-import { getSequelize } from '@/lib/db';
 import { can } from '@/lib/permissions';
 import { Design, Enclosure, Variant } from '@/models';
 import { DESERT_DESIGN_NAME, DESERT_ENCLOSURE_NAME, IMPROVED_VARIANT_NAME } from './designs';
@@ -17,7 +16,6 @@ export async function firstDesignHint(
   user: CurrentUser,
   organisationId: number,
 ): Promise<{ designId: number; compare: { a: number; b: number } | null } | null> {
-  getSequelize();
   const enclosure = await Enclosure.findOne({
     where: { organisationId, name: DESERT_ENCLOSURE_NAME },
     order: [['id', 'ASC']],

@@ -1,6 +1,5 @@
 import 'server-only';
 import { Op } from 'sequelize';
-import { getSequelize } from '@/lib/db';
 import { MAX_ATTEMPTS } from '@/lib/reminders/outbox';
 import { JobRun, JobRunCount, JobUnit, MailMessage, parseCounts, type JobCounts } from '@/models';
 
@@ -44,7 +43,6 @@ export async function jobsOverview(
   organisationId: number,
   { runs: runLimit = 30, failures: failureLimit = 50 } = {},
 ): Promise<{ runs: RunView[]; failures: FailureView[]; undelivered: UndeliveredView[] }> {
-  getSequelize();
   const [runs, failures, undelivered] = await Promise.all([
     JobRun.findAll({
       order: [

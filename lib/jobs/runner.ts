@@ -204,7 +204,6 @@ export type LastRuns = Map<
 
 /** When each job last started (and how that run ended), and last succeeded: for the scheduler and health. */
 export async function lastRuns(jobs: readonly string[]): Promise<LastRuns> {
-  getSequelize();
   const out: LastRuns = new Map();
   for (const job of jobs) {
     const [started, succeeded] = await Promise.all([

@@ -1,7 +1,6 @@
 import 'server-only';
 import { allow, ApiError, notFound } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';
-import { getSequelize } from '@/lib/db';
 import { can, type Action } from '@/lib/permissions';
 import { Enclosure, Lamp, Reading } from '@/models';
 
@@ -19,7 +18,6 @@ const resource = (e: Enclosure, kind: 'lamp' | 'reading' | 'enclosure') => ({
 });
 
 export async function enclosureForLamps(user: CurrentUser, id: number, action: Action): Promise<Enclosure> {
-  getSequelize();
   const enclosure = await Enclosure.findByPk(id);
   if (!enclosure) throw notFound('The enclosure');
   allow(user, action, resource(enclosure, 'lamp'), 'The enclosure');
@@ -27,7 +25,6 @@ export async function enclosureForLamps(user: CurrentUser, id: number, action: A
 }
 
 export async function lampFor(user: CurrentUser, id: number, action: Action): Promise<LampWithEnclosure> {
-  getSequelize();
   const lamp = (await Lamp.findByPk(id, {
     include: [{ model: Enclosure, as: 'enclosure', required: true }],
   })) as LampWithEnclosure | null;
@@ -37,7 +34,6 @@ export async function lampFor(user: CurrentUser, id: number, action: Action): Pr
 }
 
 export async function readingFor(user: CurrentUser, id: number, action: Action): Promise<ReadingWithLamp> {
-  getSequelize();
   const reading = (await Reading.findByPk(id, {
     include: [
       {

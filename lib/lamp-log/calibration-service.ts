@@ -1,7 +1,6 @@
 import 'server-only';
 import { badRequest, conflict, notFound } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';
-import { getSequelize } from '@/lib/db';
 import { runEngineTask } from '@/lib/engine-pool';
 import { toDto as lampTypeDto } from '@/lib/lamp-types/store';
 import { readStoredDesign } from '@/lib/variants/stored-design';
@@ -25,7 +24,6 @@ export type CalibrationTarget = {
 };
 
 async function targets(lamp: LampWithEnclosure): Promise<CalibrationTarget[]> {
-  getSequelize();
   if (!lamp.designObjectId) return [];
   const [type, readings, designs] = await Promise.all([
     LampType.findByPk(lamp.lampTypeId),

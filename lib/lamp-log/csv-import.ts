@@ -13,7 +13,6 @@ import { parseReadingsCsv, type CsvResult } from './csv';
  */
 
 export async function csvLampsOf(enclosure: Enclosure) {
-  getSequelize();
   const lamps = await Lamp.findAll({ where: { enclosureId: enclosure.id }, order: [['id', 'ASC']] });
   return lamps.map((l) => ({
     id: l.id,

@@ -1,11 +1,9 @@
 import 'server-only';
-import { getSequelize } from '@/lib/db';
 import { readStoredDesign } from '@/lib/variants/stored-design';
 import { Design, Variant } from '@/models';
 
 /** The lamp objects in an enclosure's designs, by id, for linking a logged lamp to the lamp it is. */
 export async function designLampsOf(enclosureId: number): Promise<{ objectId: string; label: string }[]> {
-  getSequelize();
   const designs = await Design.findAll({ where: { enclosureId }, attributes: ['id', 'name'] });
   if (designs.length === 0) return [];
   const variants = await Variant.findAll({

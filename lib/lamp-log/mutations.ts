@@ -1,7 +1,6 @@
 import 'server-only';
 import type { z } from 'zod';
 import { badRequest } from '@/lib/api';
-import { getSequelize } from '@/lib/db';
 import { Lamp, LampType, Reading, type Enclosure } from '@/models';
 import { throughShare } from '@/shared/reading-setup';
 import { displayToCm } from '@/shared/units';
@@ -28,7 +27,6 @@ export async function createLamp(
   body: z.output<typeof createLampBody>,
   userId: number,
 ): Promise<Lamp> {
-  getSequelize();
   await assertLampTypeIn(enclosure.organisationId, body.lampTypeId);
   return Lamp.create({
     enclosureId: enclosure.id,
@@ -105,7 +103,6 @@ export function readingColumns(lamp: Lamp, r: ReadingInput) {
 }
 
 export async function createReading(lamp: Lamp, r: ReadingInput, userId: number): Promise<Reading> {
-  getSequelize();
   return Reading.create({ ...readingColumns(lamp, r), takenById: userId });
 }
 

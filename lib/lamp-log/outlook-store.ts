@@ -122,7 +122,6 @@ async function writeRows(computed: Computed[], today: string): Promise<void> {
 
 /** Computes and stores the outlooks of these lamps for `today`. */
 export async function refreshOutlooks(lampIds: readonly number[], today = todayIso()): Promise<number> {
-  getSequelize();
   let done = 0;
   const next = yielder();
   for (let i = 0; i < lampIds.length; i += BATCH) {
@@ -164,7 +163,6 @@ export async function staleLampIds(
  * the catch-up after start-up, a migration or a failed recompute. Runs in slices; safe to overlap.
  */
 export async function refreshStaleOutlooks(today = todayIso()): Promise<number> {
-  getSequelize();
   let total = 0;
   for (;;) {
     const ids = await staleLampIds(today, { limit: 1000 });
@@ -241,7 +239,6 @@ export async function summariesOf(
 /** Summaries of these lamps (any order of ids), read from the stored outlooks. */
 export async function summarise(lamps: Lamp[], today = todayIso()): Promise<LampSummary[]> {
   if (lamps.length === 0) return [];
-  getSequelize();
   const loaded = (await Lamp.findAll({
     where: { id: { [Op.in]: lamps.map((l) => l.id) } },
     include: SUMMARY_INCLUDE,

@@ -1,7 +1,6 @@
 import 'server-only';
 import { Op, fn, col, where as sqlWhere } from 'sequelize';
 import { afterCursor } from '@/lib/api/pagination';
-import { getSequelize } from '@/lib/db';
 import { runEngineTask, type RunOptions } from '@/lib/engine-pool';
 import { toDto as lampTypeDto } from '@/lib/lamp-types/store';
 import type { LampTypeDto } from '@/lib/lamp-types/schema';
@@ -86,7 +85,6 @@ export type SpeciesMatch =
 
 /** The enclosure's species sheet: its species name matched to a sheet's common or scientific name. */
 export async function speciesForEnclosures(enclosures: Enclosure[]): Promise<Map<number, SpeciesMatch>> {
-  getSequelize();
   const out = new Map<number, SpeciesMatch>();
   const byOrg = new Map<number, Set<string>>();
   for (const e of enclosures) {
@@ -300,7 +298,6 @@ export async function summariseLive(lamps: Lamp[], today: string): Promise<LampS
 }
 
 export async function lampsOfEnclosure(enclosureId: number, opts: { cursor?: number; limit: number }) {
-  getSequelize();
   return Lamp.findAll({
     where: { enclosureId, ...(opts.cursor ? { id: { [Op.gt]: opts.cursor } } : {}) },
     order: [['id', 'ASC']],
@@ -313,7 +310,6 @@ export async function readingsOf(
   lampId: number,
   opts: { cursor?: number; limit: number },
 ): Promise<Reading[]> {
-  getSequelize();
   return Reading.findAll({
     where: { lampId, ...afterCursor(opts.cursor) },
     order: [['id', 'ASC']],

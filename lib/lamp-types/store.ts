@@ -1,7 +1,6 @@
 import 'server-only';
 import { Op, type Transaction } from 'sequelize';
 import { z } from 'zod';
-import { getSequelize } from '@/lib/db';
 import { LampType } from '@/models';
 import {
   LAMP_TYPE_FIELDS,
@@ -75,7 +74,6 @@ export async function listLampTypes(
   organisationId: number,
   opts: { cursor?: number; limit: number; tech?: string },
 ): Promise<LampType[]> {
-  getSequelize();
   const where: Record<string, unknown> = { organisationId };
   if (opts.cursor) where.id = { [Op.gt]: opts.cursor };
   if (opts.tech) where.tech = opts.tech;
@@ -84,13 +82,11 @@ export async function listLampTypes(
 
 /** The whole catalogue of an organisation (for pickers and the guided start). */
 export async function allLampTypes(organisationId: number): Promise<LampTypeDto[]> {
-  getSequelize();
   const rows = await LampType.findAll({ where: { organisationId }, order: [['id', 'ASC']], limit: 1000 });
   return rows.map(toDto);
 }
 
 export async function findLampType(id: number): Promise<LampType | null> {
-  getSequelize();
   return LampType.findByPk(id);
 }
 
@@ -100,7 +96,6 @@ export async function createLampType(
   userId: number | null,
   opts: { presetKey?: string; transaction?: Transaction } = {},
 ): Promise<LampType> {
-  getSequelize();
   return LampType.create(
     {
       organisationId,

@@ -1,7 +1,6 @@
 import 'server-only';
 import { afterCursor } from '@/lib/api/pagination';
 import { enclosureCounts } from '@/lib/api/enclosures';
-import { getSequelize } from '@/lib/db';
 import { Membership, Organisation, User, type Role } from '@/models';
 
 /** Reads of an organisation and its people. Access is checked by the caller (a route's allow()). */
@@ -21,7 +20,6 @@ export async function membersOf(
   organisationId: number,
   opts: { role?: Role; cursor?: number; limit: number },
 ): Promise<MemberRow[]> {
-  getSequelize();
   return Membership.findAll({
     where: { organisationId, ...(opts.role ? { role: opts.role } : {}), ...afterCursor(opts.cursor) },
     include: [{ model: User, as: 'user', attributes: ['id', 'name', 'email'] }],
@@ -46,12 +44,10 @@ function keeperJson(m: MemberRow) {
 }
 
 export async function organisationName(id: number): Promise<string | null> {
-  getSequelize();
   return (await Organisation.findByPk(id, { attributes: ['name'] }))?.name ?? null;
 }
 
 /** Whether the organisation holds invented example data (the demo), which every view of it must say. */
 export async function isExampleData(id: number): Promise<boolean> {
-  getSequelize();
   return (await Organisation.findByPk(id, { attributes: ['exampleData'] }))?.exampleData ?? false;
 }

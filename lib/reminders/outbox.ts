@@ -97,7 +97,6 @@ export async function deliverQueued(
     ids?: number[];
   } = {},
 ): Promise<Delivery> {
-  getSequelize();
   const send = opts.send ?? sendMail;
   const now = opts.now ?? new Date();
   const result: Delivery = { sent: 0, failed: 0 };

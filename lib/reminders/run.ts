@@ -1,7 +1,6 @@
 import 'server-only';
 import { Op } from 'sequelize';
 import { config } from '@/lib/config';
-import { getSequelize } from '@/lib/db';
 import { runJob, type Job, type JobContext } from '@/lib/jobs/runner';
 import { todayIso } from '@/lib/lamp-log/dates';
 import { summarise } from '@/lib/lamp-log/outlook-store';
@@ -33,7 +32,6 @@ type DueWithOrganisation = DueItem & { organisationId: number };
  * (and retried later with back-off) while the others go on.
  */
 export async function reminderWork(ctx: JobContext, opts: ReminderOptions = {}): Promise<void> {
-  getSequelize();
   const today = opts.today ?? todayIso();
   const outlooks = opts.summarise ?? summarise;
   const enqueue = opts.enqueue ?? enqueueReminder;

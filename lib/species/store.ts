@@ -1,6 +1,5 @@
 import 'server-only';
 import { Op, type Transaction } from 'sequelize';
-import { getSequelize } from '@/lib/db';
 import { SpeciesSheet } from '@/models';
 import {
   sourceSchema,
@@ -80,7 +79,6 @@ export async function listSheets(
   organisationId: number,
   opts: { cursor?: number; limit: number; q?: string },
 ): Promise<SpeciesSheet[]> {
-  getSequelize();
   const where: Record<string | symbol, unknown> = { organisationId };
   if (opts.cursor) where.id = { [Op.gt]: opts.cursor };
   if (opts.q) {
@@ -92,7 +90,6 @@ export async function listSheets(
 
 /** Every sheet of an organisation, by common name (for pickers; a few dozen rows at most in practice). */
 export async function allSheets(organisationId: number): Promise<SpeciesSheetDto[]> {
-  getSequelize();
   const rows = await SpeciesSheet.findAll({
     where: { organisationId },
     order: [
@@ -105,7 +102,6 @@ export async function allSheets(organisationId: number): Promise<SpeciesSheetDto
 }
 
 export async function findSheet(id: number): Promise<SpeciesSheet | null> {
-  getSequelize();
   return SpeciesSheet.findByPk(id);
 }
 
@@ -115,7 +111,6 @@ export async function createSheet(
   userId: number | null,
   opts: { seedKey?: string; transaction?: Transaction } = {},
 ): Promise<SpeciesSheet> {
-  getSequelize();
   return SpeciesSheet.create(
     {
       organisationId,

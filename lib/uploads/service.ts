@@ -2,7 +2,6 @@ import 'server-only';
 import { createHash, randomUUID } from 'node:crypto';
 import { ApiError, allow, notFound } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';
-import { getSequelize } from '@/lib/db';
 import { can } from '@/lib/permissions';
 import { deleteObject, getObject, putObject, StorageUnavailableError } from '@/lib/storage/s3';
 import { Enclosure, Upload } from '@/models';
@@ -103,7 +102,6 @@ export async function uploadsOf(
   kind: Upload['kind'] | undefined,
   limit: number,
 ): Promise<Upload[]> {
-  getSequelize();
   return Upload.findAll({
     where: { enclosureId, ...(kind ? { kind } : {}) },
     order: [['id', 'DESC']],
@@ -156,7 +154,6 @@ async function storeAndRecord(
   row: Pick<Upload, 'kind' | 'ownerId' | 'organisationId' | 'enclosureId' | 'originalName'>,
   transaction?: Transaction,
 ): Promise<Upload> {
-  getSequelize();
   try {
     await putObject(key, bytes, contentType);
   } catch (e) {
@@ -186,7 +183,6 @@ export async function uploadFor(
   id: number,
   action: 'read' | 'delete',
 ): Promise<UploadWithEnclosure> {
-  getSequelize();
   const upload = (await Upload.findByPk(id, {
     include: [{ model: Enclosure, as: 'enclosure', required: false }],
   })) as UploadWithEnclosure | null;

@@ -2,7 +2,6 @@ import 'server-only';
 import { allow } from '@/lib/api';
 import { notFound } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';
-import { getSequelize } from '@/lib/db';
 import type { Action, EnclosureOwnedKind } from '@/lib/permissions';
 import { Design, Enclosure, ShareLink, Variant } from '@/models';
 
@@ -23,7 +22,6 @@ const owner = (e: Enclosure, kind: EnclosureOwnedKind) => ({
 });
 
 export async function enclosureFor(user: CurrentUser, id: number, action: Action): Promise<Enclosure> {
-  getSequelize();
   const enclosure = await Enclosure.findByPk(id);
   if (!enclosure) throw notFound('The enclosure');
   allow(user, action, owner(enclosure, 'design'), 'The enclosure');
@@ -31,7 +29,6 @@ export async function enclosureFor(user: CurrentUser, id: number, action: Action
 }
 
 export async function designFor(user: CurrentUser, id: number, action: Action): Promise<DesignWithEnclosure> {
-  getSequelize();
   const design = (await Design.findByPk(id, {
     include: [{ model: Enclosure, as: 'enclosure', required: true }],
   })) as DesignWithEnclosure | null;
@@ -48,7 +45,6 @@ export async function variantFor(user: CurrentUser, id: number, action: Action):
 }
 
 export async function shareFor(user: CurrentUser, id: number, action: Action): Promise<ShareWithOwner> {
-  getSequelize();
   const share = (await ShareLink.findByPk(id, {
     include: [
       {
@@ -72,7 +68,6 @@ export async function shareFor(user: CurrentUser, id: number, action: Action): P
 }
 
 export async function loadVariantWithOwner(id: number): Promise<VariantWithOwner | null> {
-  getSequelize();
   return (await Variant.findByPk(id, {
     include: [
       {

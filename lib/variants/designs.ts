@@ -20,7 +20,6 @@ export async function listDesigns(
   enclosure: Enclosure,
   opts: { cursor?: number; limit: number; q?: string },
 ): Promise<{ items: DesignSummary[]; nextCursor: string | null }> {
-  getSequelize();
   const rows = await Design.findAll({
     where: {
       enclosureId: enclosure.id,
@@ -104,7 +103,6 @@ export type DesignForPage = {
 /** For the design page: the design if this user may read it, else null (the page answers 404 alike). */
 export async function getDesignForUser(user: CurrentUser, designId: number): Promise<DesignForPage | null> {
   if (!Number.isSafeInteger(designId) || designId <= 0) return null;
-  getSequelize();
   const design = (await Design.findByPk(designId, {
     include: [{ model: Enclosure, as: 'enclosure', required: true }],
   })) as (Design & { enclosure: Enclosure }) | null;

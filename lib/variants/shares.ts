@@ -3,7 +3,6 @@ import { Op } from 'sequelize';
 import { afterCursor, page } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { config } from '@/lib/config';
-import { getSequelize } from '@/lib/db';
 import { Design, Enclosure, Organisation, ShareLink, Variant } from '@/models';
 import { physicsOf } from '@/simulation';
 import { readStoredDesign } from './stored-design';
@@ -19,7 +18,6 @@ export async function createShare(
   input: { expiresInDays?: number },
   now = new Date(),
 ): Promise<ShareView & { token: string; url: string }> {
-  getSequelize();
   const { token, tokenHash } = newShareToken();
   const expiresAt = input.expiresInDays
     ? wholeSecond(new Date(now.getTime() + input.expiresInDays * 86_400_000))
@@ -33,7 +31,6 @@ export async function listShares(
   variant: Variant,
   opts: { cursor?: number; limit: number },
 ): Promise<{ items: ShareView[]; nextCursor: string | null }> {
-  getSequelize();
   const rows = await ShareLink.findAll({
     where: { variantId: variant.id, ...afterCursor(opts.cursor) },
     order: [['id', 'ASC']],
@@ -68,7 +65,6 @@ export type PublicShare = {
  */
 export async function resolveShareToken(token: string, now = new Date()): Promise<PublicShare | null> {
   if (!isWellFormedShareToken(token)) return null;
-  getSequelize();
   const share = await ShareLink.findOne({
     where: { tokenHash: hashShareToken(token), revokedAt: { [Op.is]: null } },
   });

@@ -17,7 +17,6 @@ export async function listVariants(
   design: DesignWithEnclosure,
   opts: { cursor?: number; limit: number },
 ): Promise<{ items: VariantSummary[]; nextCursor: string | null }> {
-  getSequelize();
   const rows = await Variant.findAll({
     where: { designId: design.id, ...afterCursor(opts.cursor) },
     attributes: ['id', 'designId', 'name', 'version', 'updatedAt'],
@@ -32,7 +31,6 @@ export async function createVariant(
   design: DesignWithEnclosure,
   input: { name: string; design?: DesignFile; from?: Variant },
 ): Promise<VariantSummary> {
-  getSequelize();
   const designJson = input.design
     ? serializeDesign(input.design)
     : input.from

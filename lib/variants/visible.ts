@@ -1,7 +1,6 @@
 import 'server-only';
 import { Op, type WhereOptions } from 'sequelize';
 import type { CurrentUser } from '@/lib/auth/session-user';
-import { getSequelize } from '@/lib/db';
 import { Design, Enclosure, Variant } from '@/models';
 
 export type VariantOption = {
@@ -21,7 +20,6 @@ export const MAX_OPTIONS = 500;
  * and staff, only their own enclosures for keepers — the same rule as `can`, written as a query.
  */
 export async function visibleVariants(user: CurrentUser): Promise<VariantOption[]> {
-  getSequelize();
   const wide = user.memberships.filter((m) => m.role !== 'keeper').map((m) => m.organisationId);
   const own = user.memberships.filter((m) => m.role === 'keeper').map((m) => m.organisationId);
   const scopes: WhereOptions[] = [];

@@ -1,6 +1,5 @@
 import type { BrowserContext, Locator, Page } from 'playwright-core';
 import { afterEach, describe, expect, it } from 'vitest';
-import { getSequelize } from '@/lib/db';
 import { demoSignIn } from '@/lib/demo/scenario';
 import { CounterReading } from '@/models';
 import { newContext, screenshot, signIn, withBrowser } from './harness';
@@ -96,7 +95,6 @@ describe('the counter on a phone', () => {
       await expect.poll(() => page.locator('main').innerText()).toMatch(/Morgan Counterfield/);
 
       // A month later (the first reading moved back a month) the same lamp reads lower.
-      getSequelize();
       await CounterReading.update(
         { takenAt: new Date(Date.now() - 31 * 86_400_000) },
         { where: { counterLampId: lampId } },

@@ -8,7 +8,6 @@
 // page that may answer 404 must not sit below a loading boundary, which would start the response first.
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { getSequelize } from '@/lib/db';
 import { DEMO_HOUSEHOLD, DEMO_PASSWORDS, DEMO_SHOP, demoSignIn } from '@/lib/demo/scenario';
 import {
   CounterLamp,
@@ -42,7 +41,6 @@ async function newDesign(enclosureId: number, cookie: string): Promise<Design> {
 }
 
 async function shopThings() {
-  getSequelize();
   const shop = (await Organisation.findOne({ where: { name: DEMO_SHOP.name } }))!;
   const enclosure = (await Enclosure.findOne({ where: { organisationId: shop.id, name: ENCLOSURE } }))!;
   const owner = (await User.findByPk(enclosure.keeperId))!;
