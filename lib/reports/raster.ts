@@ -4,15 +4,11 @@
  */
 import type { Design, FieldGrid } from '@/simulation';
 import { bandOf, type FieldScale } from '@/shared/field-scale';
-import { lampLook } from '@/shared/lamp-look';
+import { hexRgb, kindOf, type RasterPen, type Rgb } from '@/shared/object-kinds';
+import { drawingTop } from '@/shared/object-kinds/drawing';
 
 export type Raster = { width: number; height: number; data: Uint8Array };
 
-type Rgb = [number, number, number];
-const hex = (h: string): Rgb => {
-  const n = Number.parseInt(h.slice(1), 16);
-  return [(n >> 16) & 255, (n >> 8) & 255, n & 255];
-};
 const INK: Rgb = [28, 31, 26];
 const PAPER: Rgb = [255, 255, 255];
 
@@ -28,7 +24,7 @@ export function renderFieldRaster(
 ): Raster {
   const { width: w, height: h } = design.enclosure;
   // Room above the enclosure for lamps on the lid.
-  const lampTop = Math.max(h, ...design.objects.map((o) => (o.type === 'lamp' ? o.y + 4 : 0)));
+  const lampTop = drawingTop(design);
   const pxPerCm = (RASTER_LONG_SIDE - 2 * MARGIN) / Math.max(w, lampTop);
   const width = Math.round(w * pxPerCm) + 2 * MARGIN;
   const height = Math.round(lampTop * pxPerCm) + 2 * MARGIN;
@@ -47,7 +43,7 @@ export function renderFieldRaster(
 
   for (let y = 0; y < height; y++) for (let x = 0; x < width; x++) put(x, y, PAPER);
 
-  const colors = scale.colors.map(hex);
+  const colors = scale.colors.map(hexRgb);
   const values = grid[field];
   for (let y = py(h); y < py(0); y++) {
     const j = Math.min(
@@ -82,40 +78,8 @@ export function renderFieldRaster(
     line(x, y + bh, x, y, c);
   };
 
-  for (const o of design.objects) {
-    switch (o.type) {
-      case 'ledge':
-        box(o.x, o.y, o.width, o.height, INK, [120, 110, 100]);
-        break;
-      case 'hide':
-      case 'foliage':
-        box(o.x, o.y, o.width, o.height, INK);
-        break;
-      case 'perch':
-        line(o.x1, o.y1, o.x2, o.y2, INK, Math.max(2, Math.round(o.thickness * pxPerCm)));
-        break;
-      case 'screen':
-        line(o.x1, o.y1, o.x2, o.y2, INK, 2, 6);
-        break;
-      case 'glass':
-        line(o.x1, o.y1, o.x2, o.y2, [90, 150, 200], 3);
-        break;
-      case 'lamp': {
-        // The same look as in the studio: outline, body and core line in the lamp kind's colours.
-        const look = lampLook(o);
-        if (o.form === 'tube') {
-          const half = (o.length ?? 0) / 2;
-          line(o.x - half, o.y, o.x + half, o.y, hex(look.stroke), 9);
-          line(o.x - half, o.y, o.x + half, o.y, hex(look.fill), 6);
-          line(o.x - half, o.y, o.x + half, o.y, hex(look.core), 2);
-        } else {
-          box(o.x - 2, o.y - 2, 4, 4, hex(look.stroke), hex(look.fill));
-          box(o.x - 0.8, o.y - 0.8, 1.6, 1.6, hex(look.core), hex(look.core));
-        }
-        break;
-      }
-    }
-  }
+  const pen: RasterPen = { pxPerCm, ink: INK, line, box };
+  for (const o of design.objects) kindOf(o.type).raster(o, pen);
   box(0, 0, w, h, INK);
   return { width, height, data };
 }
