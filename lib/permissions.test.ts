@@ -77,6 +77,10 @@ const rows: Record<string, Row> = {
     resource: { kind: 'customer', organisationId: ORG },
     expect: { owner: ALL, staff: ALL, keeper: NONE, outsider: NONE, nobody: NONE, anonymous: NONE },
   },
+  'the shop’s measured lamp curves and counter figures': {
+    resource: { kind: 'shop-figures', organisationId: ORG },
+    expect: { owner: ALL, staff: ALL, keeper: NONE, outsider: NONE, nobody: NONE, anonymous: NONE },
+  },
   'background jobs': {
     resource: { kind: 'jobs', organisationId: ORG },
     expect: { owner: READ_ONLY, staff: NONE, keeper: NONE, outsider: NONE, nobody: NONE, anonymous: NONE },

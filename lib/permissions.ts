@@ -40,6 +40,11 @@ export type Resource =
    * data of people who are not members: the owner's and staff's alone.
    */
   | { kind: 'customer'; organisationId: number }
+  /**
+   * What the shop learns from its tests: the lamp types' measured decay curves (adopting one for the
+   * organisation) and the counter's figures. Learned from customers' lamps, so the owner's and staff's.
+   */
+  | { kind: 'shop-figures'; organisationId: number }
   /** A person's own account: password and sessions. No role, not even an owner's, reaches another's. */
   | { kind: 'account'; userId: number };
 
@@ -108,6 +113,10 @@ export function can(user: SessionUser | null | undefined, action: Action, resour
     case 'jobs':
       // Failures name members and their e-mail addresses and show delivery errors: the owner's to follow up.
       return action === 'read' && roleIn(user, resource.organisationId) === 'owner';
+    case 'shop-figures':
+      // The measured curves come from customers' lamps as well as enclosures: keepers see only what an
+      // adopted curve does to their own lamps' outlooks, never the shop's test figures.
+      return isStaffOrOwner(roleIn(user, resource.organisationId));
     case 'customer':
       // Keepers are customers themselves: they never see the shop's list of other people.
       return isStaffOrOwner(roleIn(user, resource.organisationId));

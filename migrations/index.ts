@@ -18,6 +18,7 @@ import * as m0016 from './0016-lamp-reach-wording';
 import * as m0017 from './0017-starting-sheets-size-climbing';
 import * as m0018 from './0018-account-confirmation';
 import * as m0019 from './0019-customers-counter';
+import * as m0020 from './0020-lamp-curve-adoptions';
 
 export type Migration = {
   name: string;
@@ -49,4 +50,5 @@ export const migrations: Migration[] = [
   { name: '0017-starting-sheets-size-climbing', ...m0017 },
   { name: '0018-account-confirmation', ...m0018 },
   { name: '0019-customers-counter', ...m0019 },
+  { name: '0020-lamp-curve-adoptions', ...m0020 },
 ];

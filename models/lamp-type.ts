@@ -44,6 +44,8 @@ export class LampType extends Model<InferAttributes<LampType>, InferCreationAttr
   declare halfLifeMonths: number | null;
   /** Decay curve parameters as the engine takes them (JSON; null: the technology's default). */
   declare decayJson: string | null;
+  /** The shop's own measured decay curve, when adopted for this type (lib/population/adoption.ts). */
+  declare adoptedCurveJson: CreationOptional<string | null>;
   /** Typical replacement interval, months (null: replace on failure). */
   declare replaceAfterMonths: number | null;
   declare notes: string | null;
@@ -73,6 +75,7 @@ export class LampType extends Model<InferAttributes<LampType>, InferCreationAttr
         watts: { type: DataTypes.DOUBLE, allowNull: false },
         halfLifeMonths: { type: DataTypes.DOUBLE, allowNull: true },
         decayJson: { type: DataTypes.TEXT, allowNull: true },
+        adoptedCurveJson: { type: DataTypes.TEXT, allowNull: true },
         replaceAfterMonths: { type: DataTypes.DOUBLE, allowNull: true },
         notes: { type: DataTypes.TEXT, allowNull: true },
         sourcesJson: { type: DataTypes.TEXT, allowNull: false },

@@ -14,6 +14,7 @@ import { ShareLink } from './share-link';
 import { Variant } from './variant';
 import { CatalogueSeeding } from './catalogue-seeding';
 import { LampType } from './lamp-type';
+import { LampCurveAdoption } from './lamp-curve-adoption';
 import { SpeciesSheet } from './species';
 import { Lamp } from './lamp';
 import { LampOutlook } from './lamp-outlook';
@@ -45,6 +46,7 @@ export function initModels(sequelize: Sequelize): void {
   AccountLink.register(sequelize);
   SpeciesSheet.register(sequelize);
   LampType.register(sequelize);
+  LampCurveAdoption.register(sequelize);
   CatalogueSeeding.register(sequelize);
   Lamp.register(sequelize);
   Reading.register(sequelize);

@@ -99,6 +99,7 @@ export function LampFacts({ lamp: l }: { lamp: LampSummary }) {
         {l.reasons.map((r) => (
           <p key={r}>{r}</p>
         ))}
+        {l.ageing && <p data-testid="ageing-source">{l.ageing}</p>}
         {(l.readingNotes ?? []).map((r) => (
           <p key={r} data-testid="reading-note">
             {r}

@@ -113,7 +113,7 @@ export function counterVerdict(input: CounterInput, outlook: Outlook): CounterVe
   const uncertainty: string[] = [];
   if (input.ageEstimated)
     uncertainty.push('The lamp’s age was given in months, so its dates are approximate.');
-  uncertainty.push(outlook.fit.note);
+  uncertainty.push(outlook.fit.note, outlook.ageing);
   const base = { fallsBelowMonth: null, fallsBelowEarliestMonth: null, cautions, uncertainty };
 
   if (!(lamp.type.uvbAt30 > 0)) {

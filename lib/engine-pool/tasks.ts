@@ -12,6 +12,7 @@ import { calibrate, type Calibration } from '@/lib/lamp-log/calibrate';
 import { lampChart, type LampChartInput, type LampChartResult } from '@/lib/lamp-log/chart';
 import type { LampFacts, ReadingFacts } from '@/lib/lamp-log/outlook';
 import type { LampTypeDto } from '@/lib/lamp-types/schema';
+import { populationCurve, type PopulationCurve, type PopulationInput } from '@/lib/population/fit';
 import { fieldPng, reportPdf, type ReportOptions, type ReportSubject } from '@/lib/reports/build';
 import { computedFor, type FieldView } from '@/lib/variants/computed';
 import { cachedStudioFirstField } from '@/lib/variants/studio-first-field';
@@ -68,6 +69,11 @@ export const engineTasks = {
   /** A logged lamp's outlook and its page's chart: the decay fit over all its readings. */
   lampChart(input: LampChartInput): LampChartResult {
     return lampChart(input);
+  },
+
+  /** A lamp type's decay curve learned from all the organisation's readings of it (lib/population). */
+  populationCurve(input: PopulationInput): PopulationCurve {
+    return populationCurve(input);
   },
 
   /** A logged lamp's readings as the figures of each design lamp it is (one fit per design lamp). */

@@ -123,10 +123,15 @@ export function explain(
   });
   out.push({
     heading: 'Lamp life',
-    text: lifetimeSentence(c.uv.tech, c.uv.name, {
-      replaceMonths: c.uv.replaceAfterMonths,
-      halfLifeMonths: c.uv.decayPoints ? null : c.uv.halfLifeMonths,
-    }),
+    text:
+      lifetimeSentence(c.uv.tech, c.uv.name, {
+        replaceMonths: c.uv.replaceAfterMonths,
+        halfLifeMonths: c.uv.decayPoints || c.uv.adoptedCurve ? null : c.uv.halfLifeMonths,
+      }) +
+      // The studio's ageing preview of this lamp follows the shop's measured curve when it was adopted.
+      (c.uv.adoptedCurve
+        ? ` Its ageing in the design follows your shop’s measured curve for this type (${c.uv.adoptedCurve.lamps} lamps).`
+        : ''),
   });
   const hide = hideBox(enc);
   const zoneX = baskingZone(enc, neededBaskingCm(species)).x;

@@ -11,9 +11,12 @@ export type DecaySource = {
   tech: LampTech;
   halfLifeMonths: number | null;
   decayPoints: [number, number][] | null;
+  /** The shop's measured curve when adopted for the type (lib/population): it replaces the catalogue's. */
+  adoptedCurve?: { points: [number, number][]; lamps: number } | null;
 };
 
 export function catalogueCurve(t: DecaySource): DecayCurve {
+  if (t.adoptedCurve && t.adoptedCurve.points.length > 0) return { points: t.adoptedCurve.points };
   if (t.decayPoints && t.decayPoints.length > 0) return { points: t.decayPoints };
   if (t.halfLifeMonths !== null) return { halfLifeMonths: t.halfLifeMonths };
   return techDecay(t.tech);
@@ -23,4 +26,13 @@ export function defaultDecayFor(t: DecaySource, hoursPerDay: number): (days: num
   const curve = catalogueCurve(t);
   const pace = hoursPerDay / ORDINARY_HOURS_PER_DAY;
   return (days: number) => decayFactor(curve, (days / DAYS_PER_MONTH) * pace);
+}
+
+/** Which curve a lamp's ageing follows, in the words the pages show beside the figures. */
+export function ageingSource(t: DecaySource): string {
+  if (t.adoptedCurve && t.adoptedCurve.points.length > 0) {
+    const n = t.adoptedCurve.lamps;
+    return `Ageing: your shop’s measured curve for this type, ${n} lamp${n === 1 ? '' : 's'}.`;
+  }
+  return 'Ageing: the catalogue’s curve for this type.';
 }

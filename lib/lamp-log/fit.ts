@@ -253,6 +253,22 @@ function fitTwoPhase(pts: readonly DecayPoint[], exp: ExponentialFit): TwoPhaseF
   };
 }
 
+/**
+ * The two-phase model refitted to other points from a known solution (one Levenberg–Marquardt run, no
+ * model choice): the population curve's lamp-resampling band refits the curve it chose this way.
+ */
+export function refitTwoPhase(pts: readonly DecayPoint[], from: TwoPhaseFit): TwoPhaseFit | null {
+  const res = runLm([...from.p], pts);
+  if (!Number.isFinite(res.rss)) return null;
+  return {
+    ...from,
+    n: pts.length,
+    p: res.p,
+    e0: Math.exp(res.p[0] as number),
+    rmsLog: Math.sqrt(res.rss / pts.length),
+  };
+}
+
 // ---- using a fit ------------------------------------------------------------------------------------
 
 /** The fitted output at `days` since first use (same unit and distance as the points). */

@@ -3,7 +3,7 @@ import type { ReadingSetup, ReadingThrough } from '@/shared/reading-setup';
 import { baselineDueOn, inBurnIn } from './burn-in';
 import { addDays, dayNumber, DAYS_PER_MONTH, isoDay } from './dates';
 import { LAMP_LIFETIME, ORDINARY_HOURS_PER_DAY, type LampTech } from '@/simulation';
-import { defaultDecayFor, type DecaySource } from './decay';
+import { ageingSource, defaultDecayFor, type DecaySource } from './decay';
 import { band, firstDayBelow, fitDecay, predict, type DecayFit } from './fit';
 import { distanceFactor, REFERENCE_CM, toBareReference, toReference, type LampShape } from './geometry';
 import { baskingNeed, pairedRatio, type SpeciesNeed } from './need';
@@ -80,6 +80,8 @@ export type Outlook = {
   lastReading: { takenAt: string; value: number; unit: ReadingUnit; distanceCm: number } | null;
   /** The day the burn-in ends and the baseline reading is due, and whether one has been taken since. */
   burnIn: { baselineOn: string; baselineTaken: boolean; inBurnIn: boolean };
+  /** Which curve the lamp ages by, in words: the catalogue's, or the shop's measured curve when adopted. */
+  ageing: string;
   /** What the page should say about how the readings were used (assumed bare, burn-in, excluded). */
   readingNotes: string[];
   /** Share of the new lamp's output left today (fitted, else the catalogue curve). */
@@ -254,6 +256,7 @@ export function lampOutlook(
     nowAt30,
     burnIn,
     readingNotes,
+    ageing: ageingSource(lamp.type),
   };
   const reasons: string[] = [];
   const missing: string[] = [];

@@ -42,6 +42,7 @@ export function lampFacts(lamp: LampFactsSource, type: LampTypeDto): LampFacts {
       uviPerUvb: type.uviPerUvb,
       halfLifeMonths: type.halfLifeMonths,
       decayPoints: type.decayPoints,
+      adoptedCurve: type.adoptedCurve ?? null,
       replaceAfterMonths: type.replaceAfterMonths,
     },
   };
@@ -182,6 +183,7 @@ export function outlookJson(species: SpeciesMatch, o: Outlook) {
     lastReading: o.lastReading,
     burnIn: o.burnIn,
     readingNotes: o.readingNotes,
+    ageing: o.ageing,
     remainingFraction: o.remainingFraction,
     nowAt30: o.nowAt30,
     basking: o.basking,

@@ -121,7 +121,16 @@ export const lampTypePatchSchema = z
   .refine((p) => Object.keys(p).length > 0, 'Send at least one field to change.');
 export type LampTypePatch = z.output<typeof lampTypePatchSchema>;
 
+/**
+ * The shop's own measured decay curve, adopted for this type in place of the catalogue's curve: a decay
+ * table starting at 1 (months of ordinary use, output factor), and how many lamps and readings it was
+ * fitted to. Read wherever the type's curve is (lib/lamp-log/decay.ts, the studio's lamp objects).
+ */
+export type AdoptedCurve = { points: [number, number][]; lamps: number; readings: number; adoptedAt: string };
+
 export type LampTypeDto = LampTypeInput & {
+  /** In force for this organisation's lamps of this type; null: the catalogue's curve. */
+  adoptedCurve?: AdoptedCurve | null;
   id: number;
   organisationId: number;
   /** The engine preset it was seeded from; null for the organisation's own entries. */

@@ -14,6 +14,12 @@ import {
 
 const storedSources = z.partialRecord(z.enum(LAMP_TYPE_FIELDS), z.string());
 const storedDecay = z.object({ points: z.array(z.tuple([z.number(), z.number()])) });
+const storedAdoption = z.object({
+  points: z.array(z.tuple([z.number(), z.number()])).min(1),
+  lamps: z.number(),
+  readings: z.number(),
+  adoptedAt: z.string(),
+});
 
 function parseJson<T>(json: string | null, schema: z.ZodType<T>, fallback: T): T {
   if (!json) return fallback;
@@ -46,6 +52,7 @@ export function toDto(row: LampType): LampTypeDto {
     notes: row.notes,
     sources: parseJson(row.sourcesJson, storedSources, {}),
     presetKey: row.presetKey,
+    adoptedCurve: parseJson(row.adoptedCurveJson ?? null, storedAdoption, null),
     updatedAt: row.updatedAt.toISOString(),
   };
 }

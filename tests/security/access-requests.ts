@@ -107,6 +107,10 @@ export const REQUESTS: Record<string, RequestSpec> = {
   'GET /api/lamp-types/[id]': {},
   'PATCH /api/lamp-types/[id]': { body: () => ({ notes: 'Edited.', watts: 30 }) },
   'DELETE /api/lamp-types/[id]': {},
+  // A's type has too few tests for a curve: the owner (the control) gets past access to a 409.
+  'GET /api/lamp-types/[id]/population': {},
+  'POST /api/lamp-types/[id]/curve-adoption': { body: () => ({}) },
+  'DELETE /api/lamp-types/[id]/curve-adoption': {},
   'GET /api/lamp-types': { query: (w) => `organisationId=${w.orgA}` },
   'POST /api/lamp-types': { body: (w) => LAMP_TYPE_BODY(w.orgA, 'Second tube') },
   'GET /api/lamps/[id]/calibration': { query: (w) => `variantId=${w.variant}` },
