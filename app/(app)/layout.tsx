@@ -38,8 +38,9 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
       ? [{ href: '/mail', label: 'Mail (dev)' }]
       : []),
   ];
+  // One query client for the whole signed-in page: the header's organisation switcher writes too.
   return (
-    <>
+    <QueryProvider>
       <SessionKeepAlive />
       <header className="bg-basalt-900">
         <div className="mx-auto max-w-6xl px-4 sm:px-6">
@@ -64,8 +65,8 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
         </div>
       </header>
       <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-8 sm:px-6">
-        <QueryProvider>{membership ? children : <NoOrganisation />}</QueryProvider>
+        {membership ? children : <NoOrganisation />}
       </main>
-    </>
+    </QueryProvider>
   );
 }

@@ -1,5 +1,6 @@
 import type { ReactNode } from 'react';
 import { BrandMark } from '@/components/shell/BrandMark';
+import { QueryProvider } from '@/components/ui/QueryProvider';
 
 /** Sign-in, sign-up and invitation pages: one narrow card on a calm background. */
 export default function AuthLayout({ children }: { children: ReactNode }) {
@@ -9,7 +10,7 @@ export default function AuthLayout({ children }: { children: ReactNode }) {
         <BrandMark />
       </div>
       <div className="w-full max-w-md rounded-xl border border-basalt-200 bg-white p-6 shadow-sm sm:p-8">
-        {children}
+        <QueryProvider>{children}</QueryProvider>
       </div>
     </main>
   );

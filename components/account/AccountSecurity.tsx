@@ -5,52 +5,55 @@ import { useState, type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
 import { button, card } from '@/components/ui/styles';
-import { fieldError, sendJson } from '@/components/ui/api-client';
-
-type Busy = 'idle' | 'password' | 'everywhere';
+import { fieldError } from '@/components/ui/api-client';
+import { useApiMutation } from '@/components/ui/useApiMutation';
 
 /**
  * Change the password, or sign out on every device. Both end every session of the account, this one
  * included (the server bumps the session version), so the page then signs this browser out too.
  */
 export function AccountSecurity() {
-  const [busy, setBusy] = useState<Busy>('idle');
-  const [error, setError] = useState<{ field?: string; message: string } | null>(null);
+  const [mismatch, setMismatch] = useState(false);
+  const leave = (done: string) => void signOut({ callbackUrl: `/sign-in?done=${done}` });
+  const password = useApiMutation(
+    (body: { currentPassword: string; newPassword: string }) => ({
+      method: 'PUT',
+      url: '/api/account/password',
+      body,
+    }),
+    { refresh: false, onSuccess: () => leave('password-changed') },
+  );
+  const everywhere = useApiMutation(() => ({ method: 'DELETE', url: '/api/account/sessions' }), {
+    refresh: false,
+    onSuccess: () => leave('signed-out-everywhere'),
+  });
+  // Busy from the click until signing out leaves the page: a second click would only fail.
+  const busy =
+    password.isPending || password.isSuccess
+      ? 'password'
+      : everywhere.isPending || everywhere.isSuccess
+        ? 'everywhere'
+        : 'idle';
+  const failed = password.error ?? everywhere.error;
+  const error = mismatch
+    ? { field: 'repeatPassword', message: 'The two new passwords differ.' }
+    : failed && fieldError(failed);
 
-  const leave = (done: string) => signOut({ callbackUrl: `/sign-in?done=${done}` });
-
-  async function changePassword(e: FormEvent<HTMLFormElement>) {
+  function changePassword(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
     const newPassword = String(form.get('newPassword') ?? '');
-    if (newPassword !== String(form.get('repeatPassword') ?? '')) {
-      setError({ field: 'repeatPassword', message: 'The two new passwords differ.' });
-      return;
-    }
-    setBusy('password');
-    setError(null);
-    try {
-      await sendJson('PUT', '/api/account/password', {
-        currentPassword: String(form.get('currentPassword') ?? ''),
-        newPassword,
-      });
-      await leave('password-changed');
-    } catch (err) {
-      setError(fieldError(err));
-      setBusy('idle');
-    }
+    const differs = newPassword !== String(form.get('repeatPassword') ?? '');
+    everywhere.reset();
+    setMismatch(differs);
+    if (differs) return;
+    password.mutate({ currentPassword: String(form.get('currentPassword') ?? ''), newPassword });
   }
 
-  async function signOutEverywhere() {
-    setBusy('everywhere');
-    setError(null);
-    try {
-      await sendJson('DELETE', '/api/account/sessions');
-      await leave('signed-out-everywhere');
-    } catch (err) {
-      setError(fieldError(err));
-      setBusy('idle');
-    }
+  function signOutEverywhere() {
+    setMismatch(false);
+    password.reset();
+    everywhere.mutate();
   }
 
   const general = error && !error.field ? error.message : null;
@@ -113,7 +116,7 @@ export function AccountSecurity() {
           type="button"
           className={`${button.danger} mt-4`}
           disabled={busy !== 'idle'}
-          onClick={() => void signOutEverywhere()}
+          onClick={signOutEverywhere}
         >
           {busy === 'everywhere' ? 'Signing out everywhere…' : 'Sign out everywhere'}
         </button>

@@ -2,11 +2,12 @@
 
 import { signIn } from 'next-auth/react';
 import { useRouter } from 'next/navigation';
-import { useState, type FormEvent } from 'react';
+import { type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
-import { fieldError, sendJson } from '@/components/ui/api-client';
+import { fieldError } from '@/components/ui/api-client';
 import { button } from '@/components/ui/styles';
+import { useApiMutation, useSwitchOrganisation } from '@/components/ui/useApiMutation';
 
 type Props = {
   token: string;
@@ -18,42 +19,38 @@ type Props = {
 
 export function AcceptInvitation({ token, email, organisationName, mode }: Props) {
   const router = useRouter();
-  const [errors, setErrors] = useState<Record<string, string>>({});
-  const [general, setGeneral] = useState('');
-  const [busy, setBusy] = useState(false);
+  const open = () => {
+    router.replace('/enclosures');
+    router.refresh();
+  };
+  // Showing the joined organisation is a convenience: its pages open even when the switch failed.
+  const switchTo = useSwitchOrganisation({ refresh: false });
+  const accept = useApiMutation<
+    { token: string; name?: string; password?: string },
+    { organisationId: number }
+  >((body) => ({ method: 'POST', url: '/api/invitations/accept', body }), {
+    refresh: false,
+    onSuccess: async ({ organisationId }, { password }) => {
+      if (mode === 'create') {
+        // The account exists and has joined now, so a failed sign-in here ends on the sign-in page.
+        const result = await signIn('credentials', { email, password, redirect: false }).catch(() => null);
+        if (!result?.ok || result.error) return router.replace('/sign-in');
+      }
+      switchTo.mutate(organisationId, { onSettled: open });
+    },
+  });
+  const failed = accept.error && fieldError(accept.error);
+  const general = failed && !failed.field ? failed.message : '';
+  const errors: Record<string, string> = failed?.field ? { [failed.field]: failed.message } : {};
+  // Busy until the organisation's pages replace this one.
+  const busy = accept.isPending || accept.isSuccess;
 
-  async function onSubmit(e: FormEvent<HTMLFormElement>) {
+  function onSubmit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
     const name = String(form.get('name') ?? '');
     const password = String(form.get('password') ?? '');
-    setBusy(true);
-    setErrors({});
-    setGeneral('');
-    try {
-      const joined = await sendJson<{ organisationId: number }>(
-        'POST',
-        '/api/invitations/accept',
-        mode === 'join' ? { token } : { token, name, password },
-      );
-      if (mode === 'create') {
-        const result = await signIn('credentials', { email, password, redirect: false });
-        if (!result?.ok || result.error) {
-          router.replace('/sign-in');
-          return;
-        }
-      }
-      await sendJson('PUT', '/api/current-organisation', { organisationId: joined.organisationId }).catch(
-        () => {},
-      );
-      router.replace('/enclosures');
-      router.refresh();
-    } catch (error) {
-      const { field, message } = fieldError(error);
-      if (field) setErrors({ [field]: message });
-      else setGeneral(message);
-      setBusy(false);
-    }
+    accept.mutate(mode === 'join' ? { token } : { token, name, password });
   }
 
   return (

@@ -1,11 +1,12 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useRef } from 'react';
 import Link from '@/components/ui/Link';
 import { Notice } from '@/components/ui/Notice';
-import { fieldError, sendJson } from '@/components/ui/api-client';
+import { fieldError } from '@/components/ui/api-client';
 import { link } from '@/components/ui/styles';
+import { useApiMutation } from '@/components/ui/useApiMutation';
 import { useLinkToken } from './link-token';
 
 /**
@@ -15,17 +16,19 @@ import { useLinkToken } from './link-token';
 export function ConfirmAccount() {
   const router = useRouter();
   const token = useLinkToken();
-  const [failed, setFailed] = useState('');
+  const { mutate: confirm, error } = useApiMutation(
+    (token: string) => ({ method: 'POST', url: '/api/sign-up/confirm', body: { token } }),
+    { refresh: false, onSuccess: () => router.replace('/sign-in?done=account-confirmed') },
+  );
+  const failed = error ? fieldError(error).message : '';
   // The link works once: a second post (a re-render, React's development double effects) would fail it.
   const posted = useRef(false);
 
   useEffect(() => {
     if (!token || posted.current) return;
     posted.current = true;
-    sendJson('POST', '/api/sign-up/confirm', { token })
-      .then(() => router.replace('/sign-in?done=account-confirmed'))
-      .catch((err: unknown) => setFailed(fieldError(err).message));
-  }, [token, router]);
+    confirm(token);
+  }, [token, confirm]);
 
   if (token === undefined || (token && !failed)) {
     return (

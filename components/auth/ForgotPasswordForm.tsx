@@ -4,28 +4,23 @@ import { useState, type FormEvent } from 'react';
 import Link from '@/components/ui/Link';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
-import { fieldError, sendJson } from '@/components/ui/api-client';
+import { fieldError } from '@/components/ui/api-client';
 import { button, link } from '@/components/ui/styles';
+import { useApiMutation } from '@/components/ui/useApiMutation';
 
 /** Asks for a "choose a new password" link. The answer never says whether the address has an account. */
 export function ForgotPasswordForm() {
-  const [error, setError] = useState<{ field?: string; message: string } | null>(null);
   const [sent, setSent] = useState<{ email: string; message: string } | null>(null);
-  const [busy, setBusy] = useState(false);
+  const ask = useApiMutation<string, { message: string }>(
+    (email) => ({ method: 'POST', url: '/api/password-reset', body: { email } }),
+    { refresh: false, onSuccess: (answer, email) => setSent({ email, message: answer.message }) },
+  );
+  const error = ask.error && fieldError(ask.error);
+  const busy = ask.isPending;
 
-  async function onSubmit(e: FormEvent<HTMLFormElement>) {
+  function onSubmit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
-    const email = String(new FormData(e.currentTarget).get('email') ?? '');
-    setBusy(true);
-    setError(null);
-    try {
-      const answer = await sendJson<{ message: string }>('POST', '/api/password-reset', { email });
-      setSent({ email, message: answer.message });
-    } catch (err) {
-      setError(fieldError(err));
-    } finally {
-      setBusy(false);
-    }
+    ask.mutate(String(new FormData(e.currentTarget).get('email') ?? ''));
   }
 
   if (sent) {

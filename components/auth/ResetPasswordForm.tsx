@@ -5,37 +5,42 @@ import { useState, type FormEvent } from 'react';
 import Link from '@/components/ui/Link';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
-import { fieldError, sendJson } from '@/components/ui/api-client';
+import { fieldError } from '@/components/ui/api-client';
 import { button, link } from '@/components/ui/styles';
+import { useApiMutation } from '@/components/ui/useApiMutation';
 import { useLinkToken } from './link-token';
 
 /** Chooses a new password with the e-mailed link (its token is read from the address's fragment). */
 export function ResetPasswordForm() {
   const router = useRouter();
   const token = useLinkToken();
-  const [errors, setErrors] = useState<Record<string, string>>({});
-  const [expired, setExpired] = useState('');
-  const [busy, setBusy] = useState(false);
+  const [mismatch, setMismatch] = useState(false);
+  const complete = useApiMutation(
+    (password: string) => ({
+      method: 'POST',
+      url: '/api/password-reset/complete',
+      body: { token, password },
+    }),
+    { refresh: false, onSuccess: () => router.replace('/sign-in?done=password-reset') },
+  );
+  const failed = complete.error && fieldError(complete.error);
+  // A lapsed or used link cannot be fixed on this form: the page offers a new one instead.
+  const expired = failed?.field === 'token' ? failed.message : '';
+  const errors: Record<string, string> = mismatch
+    ? { confirm: 'The two passwords are not the same.' }
+    : failed
+      ? { [failed.field ?? 'general']: failed.message }
+      : {};
+  // Busy until sign-in replaces this page.
+  const busy = complete.isPending || complete.isSuccess;
 
-  async function onSubmit(e: FormEvent<HTMLFormElement>) {
+  function onSubmit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
     const password = String(form.get('password') ?? '');
-    if (password !== String(form.get('confirm') ?? '')) {
-      setErrors({ confirm: 'The two passwords are not the same.' });
-      return;
-    }
-    setBusy(true);
-    setErrors({});
-    try {
-      await sendJson('POST', '/api/password-reset/complete', { token, password });
-      router.replace('/sign-in?done=password-reset');
-    } catch (err) {
-      const { field, message } = fieldError(err);
-      if (field === 'token') setExpired(message);
-      else setErrors({ [field ?? 'general']: message });
-      setBusy(false);
-    }
+    const differs = password !== String(form.get('confirm') ?? '');
+    setMismatch(differs);
+    if (!differs) complete.mutate(password);
   }
 
   if (token === undefined) return <p className="text-body text-basalt-600">Reading the link…</p>;

@@ -6,8 +6,9 @@ import { useRouter } from 'next/navigation';
 import { useState, type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
-import { fieldError, sendJson } from '@/components/ui/api-client';
+import { fieldError } from '@/components/ui/api-client';
 import { button, link } from '@/components/ui/styles';
+import { useApiMutation } from '@/components/ui/useApiMutation';
 import { signInErrorMessage } from '@/lib/auth/messages';
 
 /** The refusal that also covers an account still waiting for its confirmation link (see messages.ts). */
@@ -19,17 +20,15 @@ export function SignInForm({ returnTo, initialError }: { returnTo: string; initi
   const [busy, setBusy] = useState(false);
   // After a refusal that may mean "not confirmed yet": the address to offer a new confirmation link for.
   const [resendTo, setResendTo] = useState('');
-  const [resent, setResent] = useState<{ tone: 'success' | 'error'; message: string } | null>(null);
-
-  async function resend() {
-    setResent(null);
-    try {
-      const answer = await sendJson<{ message: string }>('POST', '/api/sign-up/resend', { email: resendTo });
-      setResent({ tone: 'success', message: answer.message });
-    } catch (err) {
-      setResent({ tone: 'error', message: fieldError(err).message });
-    }
-  }
+  const resend = useApiMutation<string, { message: string }>(
+    (email) => ({ method: 'POST', url: '/api/sign-up/resend', body: { email } }),
+    { refresh: false },
+  );
+  const resent = resend.data
+    ? { tone: 'success' as const, message: resend.data.message }
+    : resend.error
+      ? { tone: 'error' as const, message: fieldError(resend.error).message }
+      : null;
 
   async function onSubmit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
@@ -38,7 +37,7 @@ export function SignInForm({ returnTo, initialError }: { returnTo: string; initi
     setBusy(true);
     setError('');
     setResendTo('');
-    setResent(null);
+    resend.reset();
     try {
       const result = await signIn('credentials', {
         email,
@@ -64,7 +63,7 @@ export function SignInForm({ returnTo, initialError }: { returnTo: string; initi
       {error && <Notice tone="error">{error}</Notice>}
       {resendTo && !resent && (
         <p className="text-body">
-          <button type="button" className={link} onClick={resend}>
+          <button type="button" className={link} onClick={() => resend.mutate(resendTo)}>
             Send the confirmation link to {resendTo} again
           </button>
         </p>

@@ -4,8 +4,11 @@ import Link from '@/components/ui/Link';
 import { useState, type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
-import { fieldError, sendJson } from '@/components/ui/api-client';
+import { fieldError } from '@/components/ui/api-client';
 import { button, link } from '@/components/ui/styles';
+import { useApiMutation } from '@/components/ui/useApiMutation';
+
+type SignUp = { name: string; email: string; password: string; organisationName: string };
 
 /**
  * Creating an account ends on the same "check your inbox" page whether or not the address already had
@@ -13,34 +16,25 @@ import { button, link } from '@/components/ui/styles';
  * the e-mailed link, the owner of an existing one is e-mailed about the try.
  */
 export function SignUpForm() {
-  const [errors, setErrors] = useState<Record<string, string>>({});
-  const [general, setGeneral] = useState('');
-  const [busy, setBusy] = useState(false);
   const [sentTo, setSentTo] = useState('');
+  const signUp = useApiMutation((body: SignUp) => ({ method: 'POST', url: '/api/sign-up', body }), {
+    refresh: false,
+    onSuccess: (_, body) => setSentTo(body.email),
+  });
+  const failed = signUp.error && fieldError(signUp.error);
+  const general = failed && !failed.field ? failed.message : '';
+  const errors: Record<string, string> = failed?.field ? { [failed.field]: failed.message } : {};
+  const busy = signUp.isPending;
 
-  async function onSubmit(e: FormEvent<HTMLFormElement>) {
+  function onSubmit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
-    const body = {
+    signUp.mutate({
       name: String(form.get('name') ?? ''),
       email: String(form.get('email') ?? ''),
       password: String(form.get('password') ?? ''),
       organisationName: String(form.get('organisationName') ?? ''),
-    };
-    setBusy(true);
-    setErrors({});
-    setGeneral('');
-    try {
-      await sendJson('POST', '/api/sign-up', body);
-    } catch (error) {
-      const { field, message } = fieldError(error);
-      if (field) setErrors({ [field]: message });
-      else setGeneral(message);
-      setBusy(false);
-      return;
-    }
-    setSentTo(body.email);
-    setBusy(false);
+    });
   }
 
   if (sentTo) {

@@ -3,11 +3,12 @@
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { Notice } from '@/components/ui/Notice';
-import { fieldError, sendJson } from '@/components/ui/api-client';
+import { fieldError } from '@/components/ui/api-client';
 import { button, card } from '@/components/ui/styles';
+import { useApiMutation } from '@/components/ui/useApiMutation';
 import { formatLengthRounded } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
-import { EnclosureForm } from './EnclosureForm';
+import { EnclosureForm, type EnclosureInput } from './EnclosureForm';
 import type { EnclosureView, PersonOption } from './types';
 
 type Props = { enclosure: EnclosureView; people?: PersonOption[]; canEdit: boolean; canDelete: boolean };
@@ -18,9 +19,20 @@ export function EnclosureDetails({ enclosure, people, canEdit, canDelete }: Prop
   const [unit] = useLengthUnit();
   const [editing, setEditing] = useState(false);
   const [confirming, setConfirming] = useState(false);
-  const [deleteError, setDeleteError] = useState('');
-  const [busy, setBusy] = useState(false);
   const [saved, setSaved] = useState(false);
+  const url = `/api/enclosures/${enclosure.id}`;
+  const save = useApiMutation((input: EnclosureInput) => ({ method: 'PATCH', url, body: input }), {
+    onSuccess: () => {
+      setEditing(false);
+      setSaved(true);
+    },
+  });
+  const remove = useApiMutation(() => ({ method: 'DELETE', url }), {
+    onSuccess: () => router.replace('/enclosures'),
+  });
+  const deleteError = remove.error ? fieldError(remove.error).message : '';
+  // Busy until the list replaces this page: the enclosure is gone, a second delete would only fail.
+  const busy = remove.isPending || remove.isSuccess;
 
   if (editing) {
     return (
@@ -33,12 +45,7 @@ export function EnclosureDetails({ enclosure, people, canEdit, canDelete }: Prop
           people={people}
           submitLabel="Save changes"
           onCancel={() => setEditing(false)}
-          onSubmit={async (input) => {
-            await sendJson('PATCH', `/api/enclosures/${enclosure.id}`, input);
-            setEditing(false);
-            setSaved(true);
-            router.refresh();
-          }}
+          onSubmit={save.mutateAsync}
         />
       </section>
     );
@@ -100,18 +107,7 @@ export function EnclosureDetails({ enclosure, people, canEdit, canDelete }: Prop
               className={button.danger}
               disabled={busy}
               autoFocus
-              onClick={async () => {
-                setBusy(true);
-                setDeleteError('');
-                try {
-                  await sendJson('DELETE', `/api/enclosures/${enclosure.id}`);
-                  router.replace('/enclosures');
-                  router.refresh();
-                } catch (error) {
-                  setDeleteError(fieldError(error).message);
-                  setBusy(false);
-                }
-              }}
+              onClick={() => remove.mutate()}
             >
               {busy ? 'Deleting…' : 'Yes, delete it'}
             </button>

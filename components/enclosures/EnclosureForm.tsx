@@ -28,7 +28,8 @@ type Props = {
   /** Owners and staff pick the keeper; a keeper's enclosures are always their own. */
   people?: PersonOption[];
   submitLabel: string;
-  onSubmit: (input: EnclosureInput) => Promise<void>;
+  /** Sends the input; a refusal it throws (an ApiClientError) is shown beside the field it names. */
+  onSubmit: (input: EnclosureInput) => Promise<unknown>;
   onCancel?: () => void;
 };
 

@@ -1,10 +1,9 @@
 'use client';
 
-import { useRouter } from 'next/navigation';
 import { useState } from 'react';
-import { sendJson } from '@/components/ui/api-client';
 import { button, card } from '@/components/ui/styles';
-import { EnclosureForm } from './EnclosureForm';
+import { useApiMutation } from '@/components/ui/useApiMutation';
+import { EnclosureForm, type EnclosureInput } from './EnclosureForm';
 import type { PersonOption } from './types';
 
 /** The "New enclosure" button and the form it opens. */
@@ -20,9 +19,21 @@ export function NewEnclosure({
   /** Secondary where a stronger call to action (the guided start) stands beside it. */
   variant?: 'primary' | 'secondary';
 }) {
-  const router = useRouter();
   const [open, setOpen] = useState(startOpen);
   const [created, setCreated] = useState('');
+  const create = useApiMutation(
+    (input: EnclosureInput) => ({
+      method: 'POST',
+      url: '/api/enclosures',
+      body: { organisationId, ...input },
+    }),
+    {
+      onSuccess: (_, input) => {
+        setCreated(input.name);
+        setOpen(false);
+      },
+    },
+  );
   if (!open) {
     return (
       <div className="flex items-center gap-3">
@@ -46,12 +57,7 @@ export function NewEnclosure({
         people={people}
         submitLabel="Add enclosure"
         onCancel={() => setOpen(false)}
-        onSubmit={async (input) => {
-          await sendJson('POST', '/api/enclosures', { organisationId, ...input });
-          setCreated(input.name);
-          setOpen(false);
-          router.refresh();
-        }}
+        onSubmit={create.mutateAsync}
       />
     </section>
   );

@@ -1,14 +1,14 @@
 'use client';
 
-import { useRouter } from 'next/navigation';
-import { useState, type FormEvent } from 'react';
-import { fieldError, sendJson } from '@/components/ui/api-client';
+import { useRef, useState, type FormEvent } from 'react';
+import { fieldError } from '@/components/ui/api-client';
 import { Field } from '@/components/ui/Field';
 import { useViewerZone } from '@/components/ui/LocalTime';
 import { Notice } from '@/components/ui/Notice';
 import { Select } from '@/components/ui/Select';
 import { button } from '@/components/ui/styles';
 import { useLengthUnit } from '@/components/ui/units';
+import { useApiMutation } from '@/components/ui/useApiMutation';
 import { dayInZone } from '@/lib/time/format';
 
 export type LampTypeOption = { id: number; name: string; tech: string; uvbAt30: number };
@@ -24,46 +24,48 @@ export function AddLampForm({
   lampTypes: LampTypeOption[];
   designLamps: DesignLampOption[];
 }) {
-  const router = useRouter();
   const [unit] = useLengthUnit();
-  const [busy, setBusy] = useState(false);
+  const formRef = useRef<HTMLFormElement>(null);
   // The viewer's today, not the server's: a lamp switched on this evening in New York is not tomorrow's.
   const today = dayInZone(new Date(), useViewerZone());
-  const [error, setError] = useState<{ field?: string; message: string } | null>(null);
   const [between, setBetween] = useState('none');
+  const add = useApiMutation(
+    (body: Record<string, unknown>) => ({
+      method: 'POST',
+      url: `/api/enclosures/${enclosureId}/lamps`,
+      body,
+    }),
+    {
+      onSuccess: () => {
+        formRef.current?.reset();
+        setBetween('none');
+      },
+    },
+  );
+  const error = add.error && fieldError(add.error);
+  const busy = add.isPending;
 
-  async function submit(e: FormEvent<HTMLFormElement>) {
+  function submit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
     const text = (k: string) => String(form.get(k) ?? '').trim();
     const num = (k: string) => (text(k) === '' ? undefined : Number(text(k)));
-    setBusy(true);
-    setError(null);
-    try {
-      await sendJson('POST', `/api/enclosures/${enclosureId}/lamps`, {
-        lampTypeId: num('lampTypeId'),
-        label: text('label'),
-        firstUsedOn: text('firstUsedOn'),
-        hoursPerDay: num('hoursPerDay'),
-        baskingDistance: num('baskingDistance') ?? null,
-        baskingTransmission:
-          between === 'none' ? null : between === 'custom' ? num('customTransmission') : Number(between),
-        designObjectId: text('designObjectId') || null,
-        lengthUnit: unit,
-      });
-      (e.target as HTMLFormElement).reset();
-      setBetween('none');
-      router.refresh();
-    } catch (err) {
-      setError(fieldError(err));
-    } finally {
-      setBusy(false);
-    }
+    add.mutate({
+      lampTypeId: num('lampTypeId'),
+      label: text('label'),
+      firstUsedOn: text('firstUsedOn'),
+      hoursPerDay: num('hoursPerDay'),
+      baskingDistance: num('baskingDistance') ?? null,
+      baskingTransmission:
+        between === 'none' ? null : between === 'custom' ? num('customTransmission') : Number(between),
+      designObjectId: text('designObjectId') || null,
+      lengthUnit: unit,
+    });
   }
 
   const err = (f: string) => (error?.field === f ? error.message : null);
   return (
-    <form onSubmit={submit} className="space-y-3" aria-label="Add a lamp" noValidate>
+    <form ref={formRef} onSubmit={submit} className="space-y-3" aria-label="Add a lamp" noValidate>
       <div className="grid gap-3 sm:grid-cols-2">
         <Field label="Name" name="label" placeholder="e.g. Basking tube" required error={err('label')} />
         <Select label="Lamp type" name="lampTypeId" required error={err('lampTypeId')} defaultValue="">

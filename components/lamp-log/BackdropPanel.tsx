@@ -1,9 +1,9 @@
 'use client';
 
 import { useState, type ChangeEvent } from 'react';
-import { ApiClientError, apiFetch, sendJson } from '@/components/ui/api-client';
 import { Notice } from '@/components/ui/Notice';
 import { button, input } from '@/components/ui/styles';
+import { useApiMutation } from '@/components/ui/useApiMutation';
 
 export type BackdropView = {
   id: number;
@@ -30,40 +30,39 @@ export function BackdropPanel({
   canEdit: boolean;
 }) {
   const [items, setItems] = useState(initial);
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
+  const [tooLarge, setTooLarge] = useState(false);
+  // The list is this panel's own (the page around it does not change), so neither write refreshes it.
+  const upload = useApiMutation<File, { upload: BackdropView }>(
+    (f) => ({
+      method: 'POST',
+      url: `/api/uploads?kind=backdrop&enclosureId=${enclosureId}&name=${encodeURIComponent(f.name)}`,
+      file: f,
+    }),
+    { refresh: false, onSuccess: (data) => setItems((now) => [data.upload, ...now]) },
+  );
+  const remove = useApiMutation((id: number) => ({ method: 'DELETE', url: `/api/uploads/${id}` }), {
+    refresh: false,
+    onSuccess: (_, id) => setItems((now) => now.filter((i) => i.id !== id)),
+  });
+  const busy = upload.isPending;
+  const error = tooLarge
+    ? 'That photo is larger than 10 MB. Resize it (about 2000 px wide is plenty) and try again.'
+    : (upload.error ?? remove.error)?.message;
 
-  async function choose(e: ChangeEvent<HTMLInputElement>) {
+  function choose(e: ChangeEvent<HTMLInputElement>) {
     const f = e.target.files?.[0];
     e.target.value = '';
-    setError(null);
-    if (!f) return;
-    if (f.size > MAX_BYTES)
-      return setError(
-        'That photo is larger than 10 MB. Resize it (about 2000 px wide is plenty) and try again.',
-      );
-    setBusy(true);
-    try {
-      const data = await apiFetch<{ upload: BackdropView }>(
-        `/api/uploads?kind=backdrop&enclosureId=${enclosureId}&name=${encodeURIComponent(f.name)}`,
-        { method: 'POST', headers: { 'content-type': f.type || 'application/octet-stream' }, body: f },
-      );
-      setItems([data.upload, ...items]);
-    } catch (err) {
-      setError(err instanceof Error ? err.message : 'The upload failed.');
-    } finally {
-      setBusy(false);
-    }
+    upload.reset();
+    remove.reset();
+    setTooLarge(!!f && f.size > MAX_BYTES);
+    if (f && f.size <= MAX_BYTES) upload.mutate(f);
   }
 
-  async function remove(id: number) {
+  function confirmRemove(id: number) {
     if (!window.confirm('Delete this photo? Designs that trace it will show “photo not available”.')) return;
-    try {
-      await sendJson('DELETE', `/api/uploads/${id}`);
-      setItems(items.filter((i) => i.id !== id));
-    } catch (err) {
-      setError(err instanceof ApiClientError ? err.message : 'The photo could not be deleted.');
-    }
+    upload.reset();
+    setTooLarge(false);
+    remove.mutate(id);
   }
 
   return (
@@ -107,7 +106,7 @@ export function BackdropPanel({
                     {i.originalName} · {Math.round(i.sizeBytes / 1024)} KB
                   </span>
                   {canEdit && (
-                    <button type="button" className={button.quietDanger} onClick={() => remove(i.id)}>
+                    <button type="button" className={button.quietDanger} onClick={() => confirmRemove(i.id)}>
                       Delete
                     </button>
                   )}

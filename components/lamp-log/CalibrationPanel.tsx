@@ -1,10 +1,13 @@
 'use client';
 
 import Link from '@/components/ui/Link';
-import { useEffect, useState } from 'react';
-import { ApiClientError, sendJson } from '@/components/ui/api-client';
+import { useQuery } from '@tanstack/react-query';
+import { useState } from 'react';
+import { apiFetch } from '@/components/ui/api-client';
 import { Notice } from '@/components/ui/Notice';
 import { button, link } from '@/components/ui/styles';
+import { Table, type TableColumn } from '@/components/ui/Table';
+import { useApiMutation } from '@/components/ui/useApiMutation';
 import type { CalibrationTarget } from '@/lib/lamp-log/calibration-service';
 
 type Proposal = { designObjectId: string | null; hint: string | null; targets: CalibrationTarget[] };
@@ -26,46 +29,55 @@ function show(v: unknown): string {
   return JSON.stringify(v);
 }
 
+type Change = Extract<CalibrationTarget['calibration'], { ok: true }>['changes'][number];
+
+// A small table inside a card: tight cells, plain headings.
+const head = 'py-1 pr-4 font-normal';
+const columns: TableColumn<Change>[] = [
+  {
+    id: 'field',
+    header: 'Field',
+    headerClassName: head,
+    className: 'py-1 pr-4',
+    cell: ({ row }) => FIELD[row.original.field] ?? row.original.field,
+  },
+  {
+    id: 'from',
+    header: 'In the design',
+    headerClassName: head,
+    className: 'py-1 pr-4 tabular-nums',
+    cell: ({ row }) => show(row.original.from),
+  },
+  {
+    id: 'to',
+    header: 'From the readings',
+    headerClassName: head,
+    className: 'py-1 tabular-nums font-medium',
+    cell: ({ row }) => show(row.original.to),
+  },
+];
+
 /** What the readings would change in the design, per variant, and a button to write it there. */
 export function CalibrationPanel({ lampId, canApply }: { lampId: number; canApply: boolean }) {
-  const [proposal, setProposal] = useState<Proposal | null>(null);
-  const [error, setError] = useState<string | null>(null);
+  const url = `/api/lamps/${lampId}/calibration`;
+  const load = useQuery({ queryKey: [url], queryFn: ({ signal }) => apiFetch<Proposal>(url, { signal }) });
   const [done, setDone] = useState<{ variantId: number; version: number } | null>(null);
-  const [busy, setBusy] = useState<number | null>(null);
+  const apply = useApiMutation<CalibrationTarget, { variant: { id: number; version: number } }>(
+    (t) => ({ method: 'POST', url, body: { variantId: t.variant.id, baseVersion: t.variant.version } }),
+    {
+      // The variant has a new version now: the proposal is asked for again against it.
+      refresh: false,
+      onSuccess: ({ variant }) => {
+        setDone({ variantId: variant.id, version: variant.version });
+        void load.refetch();
+      },
+    },
+  );
+  const busy = apply.isPending ? apply.variables.variant.id : null;
 
-  useEffect(() => {
-    let live = true;
-    sendJson<Proposal>('GET', `/api/lamps/${lampId}/calibration`)
-      .then((p) => live && setProposal(p))
-      .catch(
-        (e) => live && setError(e instanceof ApiClientError ? e.message : 'Could not load the calibration.'),
-      );
-    return () => {
-      live = false;
-    };
-  }, [lampId, done]);
-
-  async function apply(t: CalibrationTarget) {
-    setBusy(t.variant.id);
-    setError(null);
-    try {
-      const r = await sendJson<{ variant: { id: number; version: number } }>(
-        'POST',
-        `/api/lamps/${lampId}/calibration`,
-        {
-          variantId: t.variant.id,
-          baseVersion: t.variant.version,
-        },
-      );
-      setDone({ variantId: r.variant.id, version: r.variant.version });
-    } catch (e) {
-      setError(e instanceof ApiClientError ? e.message : 'The calibration was not applied.');
-    } finally {
-      setBusy(null);
-    }
-  }
-
-  if (error) return <Notice tone="error">{error}</Notice>;
+  const error = load.error ?? apply.error;
+  if (error) return <Notice tone="error">{error.message}</Notice>;
+  const proposal = load.data;
   if (!proposal) return <p className="text-body text-basalt-500">Loading…</p>;
   if (proposal.hint) return <p className="text-body text-basalt-600">{proposal.hint}</p>;
   return (
@@ -88,24 +100,15 @@ export function CalibrationPanel({ lampId, canApply }: { lampId: number; canAppl
           </p>
           {t.calibration.ok ? (
             <>
-              <table className="mt-2 text-left text-caption">
-                <thead className="text-basalt-500">
-                  <tr>
-                    <th className="pr-4">Field</th>
-                    <th className="pr-4">In the design</th>
-                    <th>From the readings</th>
-                  </tr>
-                </thead>
-                <tbody>
-                  {t.calibration.changes.map((c) => (
-                    <tr key={c.field}>
-                      <td className="pr-4">{FIELD[c.field] ?? c.field}</td>
-                      <td className="pr-4 tabular-nums">{show(c.from)}</td>
-                      <td className="tabular-nums font-medium">{show(c.to)}</td>
-                    </tr>
-                  ))}
-                </tbody>
-              </table>
+              <Table
+                data={t.calibration.changes}
+                columns={columns}
+                caption={`What the readings change in ${t.variant.designName} · ${t.variant.name}`}
+                rowKey={(c) => c.field}
+                head="plain"
+                frameClassName="mt-2 overflow-x-auto"
+                rowClassName=""
+              />
               <ul className="mt-2 list-disc pl-5 text-caption text-basalt-600">
                 {t.calibration.notes.map((n) => (
                   <li key={n}>{n}</li>
@@ -119,7 +122,7 @@ export function CalibrationPanel({ lampId, canApply }: { lampId: number; canAppl
                 <button
                   type="button"
                   className={`${button.secondary} mt-3`}
-                  onClick={() => apply(t)}
+                  onClick={() => apply.mutate(t)}
                   disabled={busy !== null}
                 >
                   {busy === t.variant.id ? 'Applying…' : 'Apply to this variant'}

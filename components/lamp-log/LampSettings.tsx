@@ -1,14 +1,15 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
-import { useState, type FormEvent } from 'react';
-import { fieldError, sendJson } from '@/components/ui/api-client';
+import { type FormEvent } from 'react';
+import { fieldError } from '@/components/ui/api-client';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
 import { Select } from '@/components/ui/Select';
 import { button } from '@/components/ui/styles';
 import { cmToDisplay } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
+import { useApiMutation } from '@/components/ui/useApiMutation';
 import type { LampSummary } from '@/lib/lamp-log/store';
 import type { DesignLampOption } from './AddLampForm';
 
@@ -24,49 +25,40 @@ export function LampSettings({
 }) {
   const router = useRouter();
   const [unit] = useLengthUnit();
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<{ field?: string; message: string } | null>(null);
-  const [saved, setSaved] = useState(false);
+  const url = `/api/lamps/${lamp.id}`;
+  const save = useApiMutation((body: Record<string, unknown>) => ({ method: 'PATCH', url, body }));
+  const remove = useApiMutation(() => ({ method: 'DELETE', url }), {
+    onSuccess: () => router.push(`/enclosures/${lamp.enclosure.id}/lamps`),
+  });
+  const failed = save.error ?? remove.error;
+  const error = failed && fieldError(failed);
+  const busy = save.isPending;
+  const saved = save.isSuccess;
 
-  async function submit(e: FormEvent<HTMLFormElement>) {
+  function submit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
     const text = (k: string) => String(form.get(k) ?? '').trim();
-    setBusy(true);
-    setError(null);
-    setSaved(false);
-    try {
-      await sendJson('PATCH', `/api/lamps/${lamp.id}`, {
-        label: text('label'),
-        hoursPerDay: Number(text('hoursPerDay')),
-        firstUsedOn: text('firstUsedOn'),
-        baskingDistance: text('baskingDistance') === '' ? null : Number(text('baskingDistance')),
-        baskingTransmission: text('baskingTransmission') === '' ? null : Number(text('baskingTransmission')),
-        designObjectId: text('designObjectId') || null,
-        retiredOn: text('retiredOn') || null,
-        lengthUnit: unit,
-      });
-      setSaved(true);
-      router.refresh();
-    } catch (err) {
-      setError(fieldError(err));
-    } finally {
-      setBusy(false);
-    }
+    remove.reset();
+    save.mutate({
+      label: text('label'),
+      hoursPerDay: Number(text('hoursPerDay')),
+      firstUsedOn: text('firstUsedOn'),
+      baskingDistance: text('baskingDistance') === '' ? null : Number(text('baskingDistance')),
+      baskingTransmission: text('baskingTransmission') === '' ? null : Number(text('baskingTransmission')),
+      designObjectId: text('designObjectId') || null,
+      retiredOn: text('retiredOn') || null,
+      lengthUnit: unit,
+    });
   }
 
-  async function remove() {
+  function confirmRemove() {
     if (
       !window.confirm(`Delete “${lamp.label}” and all its readings? To keep its history, retire it instead.`)
     )
       return;
-    try {
-      await sendJson('DELETE', `/api/lamps/${lamp.id}`);
-      router.push(`/enclosures/${lamp.enclosure.id}/lamps`);
-      router.refresh();
-    } catch (err) {
-      setError(fieldError(err));
-    }
+    save.reset();
+    remove.mutate();
   }
 
   const err = (f: string) => (error?.field === f ? error.message : null);
@@ -151,7 +143,12 @@ export function LampSettings({
           {busy ? 'Saving…' : 'Save'}
         </button>
         {canDelete && (
-          <button type="button" className={button.quietDanger} onClick={remove}>
+          <button
+            type="button"
+            className={button.quietDanger}
+            onClick={confirmRemove}
+            disabled={remove.isPending || remove.isSuccess}
+          >
             Delete lamp
           </button>
         )}

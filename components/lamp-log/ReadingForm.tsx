@@ -1,13 +1,13 @@
 'use client';
 
-import { useRouter } from 'next/navigation';
-import { useState, type FormEvent } from 'react';
-import { fieldError, sendJson } from '@/components/ui/api-client';
+import { useRef, useState, type FormEvent } from 'react';
+import { fieldError } from '@/components/ui/api-client';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
 import { Select } from '@/components/ui/Select';
 import { button } from '@/components/ui/styles';
 import { useLengthUnit } from '@/components/ui/units';
+import { useApiMutation } from '@/components/ui/useApiMutation';
 import { WARM_UP_MINUTES, type ReadingThrough, type ReadingWarmedUp } from '@/shared/reading-setup';
 import { ReadingSetupFields } from './ReadingSetupFields';
 
@@ -39,8 +39,8 @@ export function ReadingForm({
   /** The set-up of the last reading that recorded one, offered again. */
   last: ReadingSetupDefaults;
 }) {
-  const router = useRouter();
   const [unit] = useLengthUnit();
+  const formRef = useRef<HTMLFormElement>(null);
   const [through, setThrough] = useState<string>(last.through ?? '');
   const shareDefault =
     through === 'lid'
@@ -48,49 +48,56 @@ export function ReadingForm({
       : through === last.through && last.throughTransmission !== null
         ? last.throughTransmission
         : '';
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<{ field?: string; message: string } | null>(null);
-  const [saved, setSaved] = useState<string | null>(null);
+  // What the form itself refuses before sending.
+  const [missing, setMissing] = useState<{ field: string; message: string } | null>(null);
+  const add = useApiMutation(
+    (body: Record<string, unknown>) => ({ method: 'POST', url: `/api/lamps/${lampId}/readings`, body }),
+    {
+      onSuccess: () => {
+        // The next reading is usually another value at the same set-up: only the value is cleared.
+        const value = formRef.current?.querySelector<HTMLInputElement>('input[name=value]');
+        if (value) value.value = '';
+      },
+    },
+  );
+  const error = missing ?? (add.error && fieldError(add.error));
+  const busy = add.isPending;
+  const saved = add.isSuccess ? 'Reading saved.' : null;
 
-  async function submit(e: FormEvent<HTMLFormElement>) {
+  function submit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
     const num = (k: string) => (form.get(k) === '' ? undefined : Number(form.get(k)));
-    // Asked here rather than defaulted: a reading is only comparable when its set-up is known.
-    if (!through) return setError({ field: 'through', message: 'Say what was between lamp and meter.' });
-    if (!form.get('warmedUp'))
-      return setError({ field: 'warmedUp', message: 'Say whether the lamp had warmed up.' });
-    setBusy(true);
-    setError(null);
-    setSaved(null);
-    try {
-      await sendJson('POST', `/api/lamps/${lampId}/readings`, {
-        takenAt: new Date(String(form.get('takenAt'))).toISOString(),
-        distance: num('distance'),
-        distanceUnit: unit,
-        value: num('value'),
-        unit: form.get('unit'),
-        through,
-        throughTransmission: ['lid', 'screen', 'glass'].includes(through)
-          ? (num('throughTransmission') ?? null)
-          : null,
-        warmedUp: form.get('warmedUp'),
-        meter: String(form.get('meter') ?? '') || null,
-        note: String(form.get('note') ?? '') || null,
-      });
-      setSaved('Reading saved.');
-      (e.target as HTMLFormElement).querySelector<HTMLInputElement>('input[name=value]')!.value = '';
-      router.refresh();
-    } catch (err) {
-      setError(fieldError(err));
-    } finally {
-      setBusy(false);
-    }
+    const takenAt = new Date(String(form.get('takenAt')));
+    // The set-up is asked here rather than defaulted: a reading is only comparable when it is known.
+    const refused = Number.isNaN(takenAt.getTime())
+      ? { field: 'takenAt', message: 'Enter when the reading was taken.' }
+      : !through
+        ? { field: 'through', message: 'Say what was between lamp and meter.' }
+        : !form.get('warmedUp')
+          ? { field: 'warmedUp', message: 'Say whether the lamp had warmed up.' }
+          : null;
+    setMissing(refused);
+    if (refused) return add.reset();
+    add.mutate({
+      takenAt: takenAt.toISOString(),
+      distance: num('distance'),
+      distanceUnit: unit,
+      value: num('value'),
+      unit: form.get('unit'),
+      through,
+      throughTransmission: ['lid', 'screen', 'glass'].includes(through)
+        ? (num('throughTransmission') ?? null)
+        : null,
+      warmedUp: form.get('warmedUp'),
+      meter: String(form.get('meter') ?? '') || null,
+      note: String(form.get('note') ?? '') || null,
+    });
   }
 
   const err = (f: string) => (error?.field === f ? error.message : null);
   return (
-    <form onSubmit={submit} className="space-y-3" aria-label="Add a reading" noValidate>
+    <form ref={formRef} onSubmit={submit} className="space-y-3" aria-label="Add a reading" noValidate>
       <div className="grid gap-3 sm:grid-cols-2">
         {/* Filled in the browser: the server's clock and time zone are not the reader's. */}
         <div

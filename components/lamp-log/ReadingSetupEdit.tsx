@@ -1,9 +1,9 @@
 'use client';
 
-import { useRouter } from 'next/navigation';
 import { useId, useState, type FormEvent } from 'react';
-import { fieldError, sendJson } from '@/components/ui/api-client';
+import { fieldError } from '@/components/ui/api-client';
 import { button, input } from '@/components/ui/styles';
+import { useApiMutation } from '@/components/ui/useApiMutation';
 import {
   THROUGH_LABEL,
   WARMED_UP_LABEL,
@@ -23,31 +23,26 @@ type Setup = {
  * the way to record the set-up of a reading logged before readings said so.
  */
 export function ReadingSetupEdit({ reading, label }: { reading: Setup; label: string }) {
-  const router = useRouter();
   const id = useId();
   const [through, setThrough] = useState<ReadingThrough>(reading.through);
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
+  const change = useApiMutation((body: Record<string, unknown>) => ({
+    method: 'PATCH',
+    url: `/api/readings/${reading.id}`,
+    body,
+  }));
+  const error = change.error && fieldError(change.error).message;
+  const busy = change.isPending;
 
-  async function save(e: FormEvent<HTMLFormElement>) {
+  function save(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
     const share = String(form.get('throughTransmission') ?? '').trim();
-    setBusy(true);
-    setError(null);
-    try {
-      await sendJson('PATCH', `/api/readings/${reading.id}`, {
-        through,
-        throughTransmission:
-          ['lid', 'screen', 'glass'].includes(through) && share !== '' ? Number(share) : null,
-        warmedUp: form.get('warmedUp'),
-      });
-      router.refresh();
-    } catch (err) {
-      setError(fieldError(err).message);
-    } finally {
-      setBusy(false);
-    }
+    change.mutate({
+      through,
+      throughTransmission:
+        ['lid', 'screen', 'glass'].includes(through) && share !== '' ? Number(share) : null,
+      warmedUp: form.get('warmedUp'),
+    });
   }
 
   return (

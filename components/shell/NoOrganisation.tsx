@@ -1,30 +1,27 @@
 'use client';
 
-import { useRouter } from 'next/navigation';
-import { useState, type FormEvent } from 'react';
+import { type FormEvent } from 'react';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { Field } from '@/components/ui/Field';
-import { fieldError, sendJson } from '@/components/ui/api-client';
+import { fieldError } from '@/components/ui/api-client';
 import { button } from '@/components/ui/styles';
+import { useApiMutation, useSwitchOrganisation } from '@/components/ui/useApiMutation';
 
 /** Shown to someone signed in who belongs to no organisation (e.g. just removed from one). */
 export function NoOrganisation() {
-  const router = useRouter();
-  const [error, setError] = useState('');
-  const [busy, setBusy] = useState(false);
-  async function onSubmit(e: FormEvent<HTMLFormElement>) {
+  const switchTo = useSwitchOrganisation();
+  const start = useApiMutation<string, { id: number }>(
+    (name) => ({ method: 'POST', url: '/api/organisations', body: { name } }),
+    { refresh: false, onSuccess: (org) => switchTo.mutate(org.id) },
+  );
+  const failed = start.error ?? switchTo.error;
+  const error = failed ? fieldError(failed).message : '';
+  // Busy until the refreshed layout shows the new organisation instead of this form.
+  const busy = start.isPending || switchTo.isPending || switchTo.isSuccess;
+  function onSubmit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
-    const name = String(new FormData(e.currentTarget).get('name') ?? '');
-    setBusy(true);
-    setError('');
-    try {
-      const org = await sendJson<{ id: number }>('POST', '/api/organisations', { name });
-      await sendJson('PUT', '/api/current-organisation', { organisationId: org.id });
-      router.refresh();
-    } catch (err) {
-      setError(fieldError(err).message);
-      setBusy(false);
-    }
+    switchTo.reset();
+    start.mutate(String(new FormData(e.currentTarget).get('name') ?? ''));
   }
   return (
     <EmptyState title="You are not in an organisation yet">

@@ -1,8 +1,8 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
-import { useId, useState, useTransition } from 'react';
-import { sendJson } from '@/components/ui/api-client';
+import { useId, useTransition } from 'react';
+import { useSwitchOrganisation } from '@/components/ui/useApiMutation';
 import { focusRing } from '@/components/ui/styles';
 import type { MembershipClaim } from '@/lib/permissions';
 
@@ -17,7 +17,11 @@ export function OrganisationSwitcher({
   const id = useId();
   const router = useRouter();
   const [pending, startTransition] = useTransition();
-  const [error, setError] = useState('');
+  // The pages re-render inside a transition, so the picker stays disabled until they show the new one.
+  const switchTo = useSwitchOrganisation({
+    refresh: false,
+    onSuccess: () => startTransition(() => router.refresh()),
+  });
   if (memberships.length < 2) {
     const only = memberships[0];
     return only ? <span className="text-body font-medium text-white">{only.organisationName}</span> : null;
@@ -30,16 +34,8 @@ export function OrganisationSwitcher({
       <select
         id={id}
         value={currentId}
-        disabled={pending}
-        onChange={async (e) => {
-          setError('');
-          try {
-            await sendJson('PUT', '/api/current-organisation', { organisationId: Number(e.target.value) });
-            startTransition(() => router.refresh());
-          } catch {
-            setError('Could not switch. Try again.');
-          }
-        }}
+        disabled={pending || switchTo.isPending}
+        onChange={(e) => switchTo.mutate(Number(e.target.value))}
         className={`max-w-56 rounded-md border border-basalt-600 bg-basalt-800 px-2 py-1 text-body text-white ${focusRing}`}
       >
         {memberships.map((m) => (
@@ -48,9 +44,9 @@ export function OrganisationSwitcher({
           </option>
         ))}
       </select>
-      {error && (
+      {switchTo.isError && (
         <span role="alert" className="text-caption text-ember-300">
-          {error}
+          Could not switch. Try again.
         </span>
       )}
     </div>

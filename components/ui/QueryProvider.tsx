@@ -6,8 +6,9 @@ import { ApiClientError } from './api-client';
 
 /**
  * TanStack Query for a tree: one client, created once, so navigations inside it keep their cache. The
- * signed-in layout has one for the writes every page makes (`useApiMutation`); the lists and designs
- * sections that cache reads mount their own around themselves, so a list never outlives its page.
+ * signed-in and the sign-in layouts have one for the writes every page makes (`useApiMutation`); the
+ * lists and designs sections that cache reads mount their own around themselves, so a list never
+ * outlives its page.
  */
 export function QueryProvider({ children }: { children: ReactNode }) {
   const [client] = useState(

@@ -2,10 +2,15 @@
 
 import { useMutation } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
-import { type ApiClientError, sendJson } from './api-client';
+import { type ApiClientError, apiFetch } from './api-client';
 
-/** One write to our API: method, address and JSON body. */
-export type ApiRequest = { method: 'POST' | 'PATCH' | 'PUT' | 'DELETE'; url: string; body?: unknown };
+/**
+ * One write to our API: method, address and a JSON body, or a file sent as it is (an upload: the
+ * server reads the bytes and the file's type).
+ */
+export type ApiRequest = { method: 'POST' | 'PATCH' | 'PUT' | 'DELETE'; url: string } & (
+  { body?: unknown; file?: never } | { file: Blob; body?: never }
+);
 
 /**
  * The one way a client component writes: a TanStack Query mutation that sends `request(vars)` through
@@ -20,12 +25,30 @@ export function useApiMutation<Vars = void, Result = unknown>(
   const router = useRouter();
   return useMutation<Result, ApiClientError, Vars>({
     mutationFn: (vars) => {
-      const { method, url, body } = request(vars);
-      return sendJson<Result>(method, url, body);
+      const { method, url, body, file } = request(vars);
+      return file
+        ? apiFetch<Result>(url, {
+            method,
+            headers: { 'content-type': file.type || 'application/octet-stream' },
+            body: file,
+          })
+        : apiFetch<Result>(url, { method, json: body });
     },
     onSuccess: (result, vars) => {
       onSuccess?.(result, vars);
       if (refresh) router.refresh();
     },
   });
+}
+
+/** Makes one of the user's organisations the one the pages show (the header's switcher, a new or joined one). */
+export function useSwitchOrganisation(options?: { refresh?: boolean; onSuccess?: () => void }) {
+  return useApiMutation(
+    (organisationId: number) => ({
+      method: 'PUT',
+      url: '/api/current-organisation',
+      body: { organisationId },
+    }),
+    options,
+  );
 }
