@@ -5,12 +5,12 @@
  */
 import type { Design, FieldName } from '@/simulation';
 import { fileStem } from '@/lib/files/file-name';
-import { computedFor } from '@/lib/variants/computed';
+import { computedFor, type Computed } from '@/lib/variants/computed';
 import type { SpeciesOption } from '@/lib/variants/species';
 import { lampRows } from './lamps';
 import { renderReportPdf } from './pdf';
-import { encodePng } from './png';
-import { renderFieldRaster } from './raster';
+import { encodePng, flateRgb } from './png';
+import { renderFieldRaster, type Raster } from './raster';
 
 export type ReportSubject = {
   variantName: string;
@@ -25,10 +25,19 @@ export type ReportSubject = {
 
 export type ReportOptions = { field: FieldName; months: number; species: SpeciesOption | null };
 
+/*
+ * A field's picture depends only on the design's content, the lamp age and the field, so it is drawn and
+ * encoded once and kept with the engine's run of that design (lib/variants/computed, keyed by a hash of
+ * the design): a second download of the same version encodes nothing. The PDF keeps its own encoding of
+ * the same pixels (deflated RGB samples), so a report never decodes a PNG to embed it.
+ */
+function raster(design: Design, computed: Computed, field: FieldName): Raster {
+  return renderFieldRaster(design, computed.sim.grid, computed.view(field).scale);
+}
+
 export function fieldPng(subject: ReportSubject, opts: Pick<ReportOptions, 'field' | 'months'>): Buffer {
   const computed = computedFor(subject.design, opts.months);
-  const { scale } = computed.view(opts.field);
-  return encodePng(renderFieldRaster(subject.design, computed.sim.grid, scale));
+  return computed.derived(`png:${opts.field}`, () => encodePng(raster(subject.design, computed, opts.field)));
 }
 
 export async function reportPdf(
@@ -40,7 +49,9 @@ export async function reportPdf(
   const computed = computedFor(subject.design, opts.months);
   const { sim } = computed;
   const { scale } = computed.view(opts.field);
-  const png = encodePng(renderFieldRaster(subject.design, sim.grid, scale));
+  const picture = computed.derived(`pdf-image:${opts.field}`, () =>
+    flateRgb(raster(subject.design, computed, opts.field)),
+  );
   // Without a species the safety checks still run, with general limits.
   const assessment = computed.assessment(opts.species?.sheet ?? null);
   return renderReportPdf({
@@ -54,7 +65,7 @@ export async function reportPdf(
     generatedAt: now,
     months: opts.months,
     scale,
-    png,
+    picture,
     figures: sim.figures,
     species: opts.species
       ? { name: opts.species.name, findings: assessment.findings, overall: assessment.overall }

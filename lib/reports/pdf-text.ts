@@ -14,8 +14,12 @@ const REPLACEMENTS: Record<string, string> = {
   '\u00a0': ' ',
 };
 
+// A font's characters, gathered once: a report asks for every line it writes.
+const characterSets = new WeakMap<PDFFont, Set<number>>();
+
 export function winAnsi(font: PDFFont, text: string): string {
-  const supported = new Set(font.getCharacterSet());
+  let supported = characterSets.get(font);
+  if (!supported) characterSets.set(font, (supported = new Set(font.getCharacterSet())));
   let out = '';
   for (const ch of text.replace(/\r?\n/g, ' ')) {
     const cp = ch.codePointAt(0)!;

@@ -5,7 +5,7 @@
  */
 import 'server-only';
 import { FINDING_STATUS } from '@/shared/finding-status';
-import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from 'pdf-lib';
+import { degrees, drawImage, PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from 'pdf-lib';
 import { sizeBoth, tempBoth } from '@/shared/units';
 import type { KeyFigures } from '@/shared/designs/figures';
 import { bandLabel, type FieldScale } from '@/shared/field-scale';
@@ -14,6 +14,7 @@ import type { Design } from '@/simulation';
 import { EXAMPLE_DATA_NOTE } from '@/shared/example-data';
 import { DEFER_NOTE, ESTIMATE_NOTE } from './cautions';
 import type { LampRow } from './lamps';
+import type { FlateImage } from './png';
 import { winAnsi, wrap } from './pdf-text';
 
 export type ReportFinding = {
@@ -35,7 +36,8 @@ export type ReportInput = {
   generatedAt: Date;
   months: number;
   scale: FieldScale;
-  png: Uint8Array;
+  /** The field picture, its samples already deflated (lib/reports/png.ts). */
+  picture: FlateImage;
   figures: KeyFigures;
   species: { name: string; findings: ReportFinding[]; overall: ReportFinding['status'] } | null;
   /** With no species: the safety checks against general limits. */
@@ -135,13 +137,33 @@ const hexRgb = (h: string) => {
   return rgb(((n >> 16) & 255) / 255, ((n >> 8) & 255) / 255, (n & 255) / 255);
 };
 
+/**
+ * The picture as an image object of the document, its deflated samples stored as they are: pdf-lib's
+ * embedPng would decode a PNG and deflate it again (in JavaScript) for every report.
+ */
+function embedImage(doc: PDFDocument, image: FlateImage) {
+  return doc.context.register(
+    doc.context.stream(image.rgb, {
+      Type: 'XObject',
+      Subtype: 'Image',
+      Width: image.width,
+      Height: image.height,
+      ColorSpace: 'DeviceRGB',
+      BitsPerComponent: 8,
+      Filter: 'FlateDecode',
+    }),
+  );
+}
+
 export async function renderReportPdf(r: ReportInput): Promise<Uint8Array> {
   const doc = await PDFDocument.create();
   doc.setTitle(r.variantName);
   doc.setSubject(`Light and heat report: ${r.designName} — ${r.enclosureName}`);
   doc.setCreator('Baskwell');
   doc.setProducer('Baskwell');
+  // Made and last changed at the same moment: the same report asked twice at one moment is the same file.
   doc.setCreationDate(r.generatedAt);
+  doc.setModificationDate(r.generatedAt);
   const w = new Writer(
     doc,
     await doc.embedFont(StandardFonts.Helvetica),
@@ -164,11 +186,20 @@ export async function renderReportPdf(r: ReportInput): Promise<Uint8Array> {
 
   // Field picture with its legend.
   w.heading(`${r.scale.heading}, side view`);
-  const img = await doc.embedPng(r.png);
   const drawW = w.width;
-  const drawH = (img.height / img.width) * drawW;
+  const drawH = (r.picture.height / r.picture.width) * drawW;
   w.need(drawH + 40);
-  w.page.drawImage(img, { x: M, y: w.y - drawH, width: drawW, height: drawH });
+  w.page.pushOperators(
+    ...drawImage(w.page.node.newXObject('Image', embedImage(doc, r.picture)), {
+      x: M,
+      y: w.y - drawH,
+      width: drawW,
+      height: drawH,
+      rotate: degrees(0),
+      xSkew: degrees(0),
+      ySkew: degrees(0),
+    }),
+  );
   w.y -= drawH + 8;
   const swatch = Math.min(70, w.width / r.scale.colors.length);
   w.need(26);
@@ -267,5 +298,7 @@ export async function renderReportPdf(r: ReportInput): Promise<Uint8Array> {
     );
   });
   // No object streams: the document opens in the simplest readers and its metadata is plain to inspect.
-  return doc.save({ useObjectStreams: false });
+  // All objects in one go: the writer's default pauses every 50 objects for a timer tick, which on a
+  // worker thread only waits.
+  return doc.save({ useObjectStreams: false, objectsPerTick: Number.POSITIVE_INFINITY });
 }

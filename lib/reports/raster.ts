@@ -9,6 +9,10 @@ import { drawingTop } from '@/shared/object-kinds/drawing';
 
 export type Raster = { width: number; height: number; data: Uint8Array };
 
+/** An opaque colour as one 32-bit pixel, in the machine's byte order (the raster's bytes stay RGBA). */
+function pixelWord([r, g, b]: Rgb): number {
+  return new Uint32Array(Uint8Array.of(r, g, b, 255).buffer)[0]!;
+}
 const INK: Rgb = [28, 31, 26];
 const PAPER: Rgb = [255, 255, 255];
 
@@ -41,19 +45,30 @@ export function renderFieldRaster(
   const px = (x: number) => Math.round(MARGIN + x * pxPerCm);
   const py = (y: number) => Math.round(height - MARGIN - y * pxPerCm);
 
-  for (let y = 0; y < height; y++) for (let x = 0; x < width; x++) put(x, y, PAPER);
-
-  const colors = scale.colors.map(hexRgb);
+  // The paper and the field are most of the pixels: written a whole pixel at a time, each cell's colour
+  // worked out once rather than at every pixel it covers.
+  const pixels = new Uint32Array(data.buffer, data.byteOffset, width * height);
+  pixels.fill(pixelWord(PAPER));
+  const words = scale.colors.map((c) => pixelWord(hexRgb(c)));
   const values = grid[field];
-  for (let y = py(h); y < py(0); y++) {
+  const cellWord = new Uint32Array(grid.nx * grid.ny);
+  for (let k = 0; k < cellWord.length; k++) cellWord[k] = words[bandOf(scale, values[k]!)]!;
+  const [left, right] = [Math.max(0, px(0)), Math.min(width, px(w))];
+  const column = new Int32Array(Math.max(0, right - left));
+  for (let x = left; x < right; x++) {
+    column[x - left] = Math.min(
+      grid.nx - 1,
+      Math.max(0, Math.floor((x + 0.5 - MARGIN) / pxPerCm / grid.cellCm)),
+    );
+  }
+  for (let y = Math.max(0, py(h)); y < Math.min(height, py(0)); y++) {
     const j = Math.min(
       grid.ny - 1,
       Math.max(0, Math.floor((height - MARGIN - y - 0.5) / pxPerCm / grid.cellCm)),
     );
-    for (let x = px(0); x < px(w); x++) {
-      const i = Math.min(grid.nx - 1, Math.max(0, Math.floor((x + 0.5 - MARGIN) / pxPerCm / grid.cellCm)));
-      put(x, y, colors[bandOf(scale, values[j * grid.nx + i]!)]!);
-    }
+    const row = y * width;
+    const cells = j * grid.nx;
+    for (let x = left; x < right; x++) pixels[row + x] = cellWord[cells + column[x - left]!]!;
   }
 
   const line = (x1: number, y1: number, x2: number, y2: number, c: Rgb, thick = 2, dash = 0) => {

@@ -25,12 +25,19 @@ export type Computed = {
   view(field: FieldName): FieldView;
   /** The species check of this design against the sheet; with no sheet, the general safety checks. */
   assessment(sheet: SpeciesSheet | null): Assessment;
+  /**
+   * Anything else made from this run alone (a report's field picture): made once under `key`, then
+   * reused for as long as the run is held. `make` must depend on nothing but the design, the lamp age
+   * and what the key names.
+   */
+  derived<T>(key: string, make: () => T): T;
 };
 
 type Entry = {
   sim: Simulated;
   views: Map<FieldName, FieldView>;
   assessments: Map<string, Assessment>;
+  derived: Map<string, unknown>;
 };
 
 // One cache for the whole server process: pages and route handlers are separate bundles in a
@@ -49,7 +56,12 @@ function cache(): Lru<string, Entry> | null {
 const digest = (value: unknown) => createHash('sha256').update(JSON.stringify(value)).digest('base64url');
 
 export function computedFor(design: Design, months = 0): Computed {
-  const fresh = (): Entry => ({ sim: simulate(design, months), views: new Map(), assessments: new Map() });
+  const fresh = (): Entry => ({
+    sim: simulate(design, months),
+    views: new Map(),
+    assessments: new Map(),
+    derived: new Map(),
+  });
   const lru = cache();
   const entry = lru ? lru.getOrSet(`${digest(design)}:${months}`, fresh) : fresh();
   return {
@@ -73,6 +85,12 @@ export function computedFor(design: Design, months = 0): Computed {
         entry.assessments.set(k, a);
       }
       return a;
+    },
+    derived<T>(key: string, make: () => T): T {
+      if (entry.derived.has(key)) return entry.derived.get(key) as T;
+      const value = make();
+      entry.derived.set(key, value);
+      return value;
     },
   };
 }
