@@ -29,8 +29,23 @@ export function winAnsi(font: PDFFont, text: string): string {
   return out;
 }
 
+// Wrapped lines by font, size, width and text: most of a report's text (cautions, notes, headings) is
+// the same in every report, and measuring it word by word is most of the time a warm report takes.
+const wrapped = new Map<string, string[]>();
+const WRAPPED_MAX = 2000;
+
 /** Greedy word wrap to `maxWidth` points. */
 export function wrap(font: PDFFont, text: string, size: number, maxWidth: number): string[] {
+  const key = `${font.name}\u0000${size}\u0000${maxWidth}\u0000${text}`;
+  const known = wrapped.get(key);
+  if (known) return known;
+  const lines = wrapLines(font, text, size, maxWidth);
+  if (wrapped.size >= WRAPPED_MAX) wrapped.clear();
+  wrapped.set(key, lines);
+  return lines;
+}
+
+function wrapLines(font: PDFFont, text: string, size: number, maxWidth: number): string[] {
   const words = winAnsi(font, text).split(/\s+/).filter(Boolean);
   const lines: string[] = [];
   let line = '';
