@@ -18,14 +18,15 @@ export default async function VariantStudioPage({ params }: { params: Promise<{ 
   const variant = await getVariantForUser(user, id);
   // Someone else's variant and a missing one look the same.
   if (!variant) notFound();
-  const options = await speciesOptions(variant.enclosure.organisationId);
-  const attached = attachedSpecies(options, variant.enclosure.speciesName);
-  // The field is drawn on an engine thread while the rest of the page is looked up.
-  const [photos, picture, nonce] = await Promise.all([
+  // The field is drawn on an engine thread while the rest of the page is looked up, the species and the
+  // photos side by side: each is a database round trip the page's first byte waits for.
+  const [options, photos, picture, nonce] = await Promise.all([
+    speciesOptions(variant.enclosure.organisationId),
     studioPhotos(user, variant.enclosure, variant.design.backdrop?.uploadId),
     studioPictureFor(variant.design),
     pageNonce(),
   ]);
+  const attached = attachedSpecies(options, variant.enclosure.speciesName);
   return (
     <StudioLoader
       source={{ kind: 'variant', variantId: String(variant.id) }}
