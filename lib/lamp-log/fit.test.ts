@@ -101,6 +101,22 @@ describe('fitDecay — two-phase', () => {
     );
     expect(fit.kind).toBe('exponential');
   });
+
+  it('falls back to the exponential when a two-phase start breaks the optimiser, instead of throwing', () => {
+    // Generated example readings (the scale benchmark's organisation) on which one of the two-phase
+    // starts overflows and the optimiser's Cholesky step threw: a slow, noisy, nearly straight decline.
+    const values = [
+      860.8, 893.9, 806.2, 854.9, 796.2, 807.6, 754.7, 718, 754.9, 747.2, 677.4, 673.3, 682.7, 664.9, 613.3,
+      602.1, 634.5,
+    ];
+    const offsets = [0, 36, 73, 109, 145, 181, 218, 254, 290, 326, 362, 399, 435, 471, 507, 544, 580];
+    const pts = offsets.map((d, i) => ({ days: 18.4166 + d, value: values[i]! }));
+    const fit = fitDecay(pts, flatDefault);
+    expect(fit.kind).toBe('exponential');
+    if (fit.kind !== 'exponential') return;
+    expect(fit.tauDays).toBeGreaterThan(0);
+    expect(Number.isFinite(fit.tauDays)).toBe(true);
+  });
 });
 
 describe('fitDecay — few readings', () => {

@@ -180,7 +180,22 @@ function twoPhaseGradient(p: readonly number[], t: number): number[] {
 }
 
 function runLm(p0: number[], pts: readonly DecayPoint[]): { p: number[]; rss: number } {
-  const { parameterValues } = levenbergMarquardt(
+  let fitted: { parameterValues: number[] };
+  try {
+    fitted = lmFrom(p0, pts);
+  } catch {
+    // A start that wanders where exp() overflows leaves the package a non-finite normal matrix, and its
+    // Cholesky step throws ("Matrix is not symmetric"). That start found nothing: the other starts, or
+    // the exponential, decide; a throw here would stop every outlook of the organisation being stored.
+    return { p: p0, rss: Number.POSITIVE_INFINITY };
+  }
+  const p = [...fitted.parameterValues];
+  const rss = pts.reduce((s, q) => s + (Math.log(q.value) - twoPhaseLog(p, q.days)) ** 2, 0);
+  return { p, rss };
+}
+
+function lmFrom(p0: number[], pts: readonly DecayPoint[]) {
+  return levenbergMarquardt(
     { x: pts.map((q) => q.days), y: pts.map((q) => Math.log(q.value)) },
     (p) => (t) => twoPhaseLog(p, t),
     {
@@ -193,9 +208,6 @@ function runLm(p0: number[], pts: readonly DecayPoint[]): { p: number[]; rss: nu
       damping: 1e-3,
     },
   );
-  const p = [...parameterValues];
-  const rss = pts.reduce((s, q) => s + (Math.log(q.value) - twoPhaseLog(p, q.days)) ** 2, 0);
-  return { p, rss };
 }
 
 function fitTwoPhase(pts: readonly DecayPoint[], exp: ExponentialFit): TwoPhaseFit | null {
