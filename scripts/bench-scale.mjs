@@ -1,18 +1,21 @@
 #!/usr/bin/env node
 // `npm run bench:scale -- [--scale=N] [--enclosures N --lamps N --readings N --designs N] [--growth=4]
-//                          [--rate=20] [--duration=10] [--reuse] [--no-build]`
-// The signed-in area at the size of a zoo's reptile house or a busy shop. On a database of its own
-// (`<DB_NAME>_scale` on the private MariaDB, recreated each run unless --reuse) it seeds a generated
-// organisation (default 2,000 enclosures, 8,000 lamps, 100,000 readings, 200 designs with two variants
-// each, times --scale) with chunked INSERTs and the app's own outlook recompute, builds the production
-// app into .next/scale-build and starts it on a free port of its own, signs in as the organisation's
-// owner, then drives every list page and list API of the signed-in area, one after another, at a fixed
-// rate with autocannon while /api/health is asked alongside. Prints per route: requests/s, p50/p99, bytes
-// a response, p50/p99 as multiples of /api/health's alone (the baseline), and the slowest /api/health
-// answer seen while it ran. Then grows the same organisation to --growth times the size (default 4; 0
-// skips) and measures the lamp log again: it should not grow with the organisation.
-// The database stays after the run (--reuse measures it again without seeding; the next run without
-// --reuse recreates it). Figures, not a pass/fail test: the date, the CPUs and the load average are
+//                          [--rate=20] [--duration=10] [--seed-only | --reuse] [--no-build]`
+// The signed-in area at the size of a zoo's reptile house or a busy shop. On databases of its own on the
+// private MariaDB it seeds a generated organisation (default 2,000 enclosures, 8,000 lamps, 100,000
+// readings, 200 designs with two variants each, times --scale) into `<DB_NAME>_scale`, and the same
+// organisation grown to --growth times the size (default 4; 0 skips) into `<DB_NAME>_scale<growth>`:
+// chunked INSERTs, then the outlooks by the app's own computation once per distinct lamp history
+// (scripts/lib/scale-outlooks.ts). It builds the production app into .next/scale-build, starts it on a
+// free port of its own on the 1× database, signs in as the owner, then drives every list page and list
+// API of the signed-in area, one after another, at a fixed rate with autocannon while /api/health is asked
+// alongside. Prints per route: requests/s, p50/p99, bytes a response, p50/p99 as multiples of
+// /api/health's alone (the baseline), and the slowest /api/health answer seen while it ran. Then it
+// restarts the app on the grown database and measures the lists again: their cost should not follow
+// the organisation's size.
+// Seed ahead, measure later: `--seed-only` seeds both databases and stops (the machine's load only slows
+// the seeding); `--reuse` measures the databases an earlier run seeded, without seeding (a run without
+// it recreates them). Figures, not a pass/fail test: the date, the CPUs and the load average are
 // printed beside them.
 import autocannon from 'autocannon';
 import os from 'node:os';
@@ -20,11 +23,17 @@ import path from 'node:path';
 import { parseArgs } from 'node:util';
 import { ensureSecret, loadEnv, ROOT, usesPrivateDb } from './lib/env.mjs';
 import { ensureDatabases, ensureMariaDB, recreateDatabase } from './lib/mariadb.mjs';
-import { bin, duration, freePort, log, run } from './lib/proc.mjs';
+import { bin, duration, freePort, log, run, stopProcess } from './lib/proc.mjs';
 import { Lifecycle, migrate, startNext } from './lib/stack.mjs';
 import { api, loadAverage, signIn, warmUp } from './load.mjs';
 
 const DEFAULT_SIZE = { enclosures: 2000, lamps: 8000, readings: 100_000, designs: 200 };
+
+/** A whole factor names the grown database (`_scale4`); 0 or 1 measures the 1× organisation only. */
+function growthOf(n) {
+  if (!Number.isInteger(n)) throw new Error(`--growth needs a whole number, not ${n}`);
+  return n;
+}
 
 function options() {
   const { values } = parseArgs({
@@ -38,6 +47,7 @@ function options() {
       rate: { type: 'string', default: '20' },
       duration: { type: 'string', default: '10' },
       reuse: { type: 'boolean', default: false },
+      'seed-only': { type: 'boolean', default: false },
       build: { type: 'boolean', default: true },
       'no-build': { type: 'boolean', default: false },
       help: { type: 'boolean', default: false },
@@ -58,10 +68,11 @@ function options() {
   );
   return {
     size,
-    growth: num('growth'),
+    growth: growthOf(num('growth')),
     rate: num('rate', 1),
     duration: num('duration', 1),
     reuse: values.reuse,
+    seedOnly: values['seed-only'],
     build: values.build && !values['no-build'],
     help: values.help,
   };
@@ -176,11 +187,108 @@ async function routesOf(base, jar, org) {
   ];
 }
 
+/** The scale databases: `<DB_NAME>_scale` (1×) and `<DB_NAME>_scale<growth>` (the grown organisation). */
+function databases(env, growth) {
+  const one = `${env.DB_NAME}_scale`;
+  return growth > 1 ? [one, `${one}${growth}`] : [one];
+}
+
+async function prepareScaleDb(env, name) {
+  await ensureDatabases({ names: [name], user: env.DB_USER, password: env.DB_PASSWORD });
+  await migrate({ ...env, DB_NAME: name });
+}
+
+/** The organisation an earlier run seeded in this database, its owner and its size. */
+async function findOrg(env) {
+  const found = await run(
+    bin('tsx'),
+    ['--import', path.join(ROOT, 'scripts', 'lib', 'server-only.mjs'), 'scripts/scale-seed.ts', '--find'],
+    { env, capture: true },
+  );
+  return JSON.parse(found.stdout.trim().split('\n').pop());
+}
+
+/**
+ * Seeds the 1× database, and the grown one as the same 1× organisation plus (growth − 1)× more, as an
+ * organisation grows. Returns one line a database.
+ */
+async function seedAll(env, names, size, growth) {
+  const lines = [];
+  for (const [i, name] of names.entries()) {
+    const dbEnv = { ...env, DB_NAME: name };
+    await recreateDatabase(name);
+    await prepareScaleDb(env, name);
+    log(`Seeding ${name}: ${fmtSize(size)} ...`);
+    const first = await seed(dbEnv, size);
+    let seconds = first.seconds;
+    let outlookSeconds = first.added.seconds.outlooks;
+    let computed = first.added.computedOutlooks;
+    const total = { ...size };
+    if (i > 0) {
+      const extra = Object.fromEntries(
+        Object.entries(size).map(([k, v]) => [k, Math.round(v * (growth - 1))]),
+      );
+      log(`Growing ${name} to ${growth}× (${fmtSize(extra)} more) ...`);
+      const grown = await seed(dbEnv, extra, [
+        '--into',
+        String(first.organisationId),
+        '--email',
+        first.ownerEmail,
+        '--offset',
+        String(size.enclosures),
+      ]);
+      seconds += grown.seconds;
+      outlookSeconds += grown.added.seconds.outlooks;
+      computed += grown.added.computedOutlooks;
+      for (const k of Object.keys(total)) total[k] += extra[k];
+    }
+    log(
+      `Seeded ${name} in ${duration(seconds * 1000)} (outlooks ${outlookSeconds.toFixed(1)} s, ` +
+        `${computed.toLocaleString('en')} distinct computations).`,
+    );
+    lines.push({ name, size: total, seconds, outlookSeconds, computed });
+  }
+  return lines;
+}
+
+/** Starts the production app on one scale database, signs in as its owner; stop() ends the server. */
+async function serve(life, env, name, opts) {
+  const dbEnv = { ...env, DB_NAME: name };
+  const org = await findOrg(dbEnv);
+  log(`${name}: organisation #${org.organisationId} (${fmtSize(org.size)}).`);
+  const child = await startNext(life, dbEnv, {
+    port: Number(env.PORT),
+    build: opts.build,
+    logFile: path.join(ROOT, 'test-results', `bench-scale-next-${name}.log`),
+  });
+  const { jar } = await signIn(env.APP_URL, org.ownerEmail, org.ownerPassword);
+  return {
+    org,
+    jar,
+    cookie: jar.header(),
+    stop: async () => {
+      life.services.splice(life.services.indexOf(child), 1);
+      await stopProcess(child);
+    },
+  };
+}
+
+/** The routes measured again on the grown organisation: the lists whose cost must not follow its size. */
+const growthRoutes = (org) => [
+  '/lamp-log',
+  '/lamp-log?status=replace&sort=due',
+  `/api/lamps?organisationId=${org}`,
+  '/enclosures',
+  '/keepers',
+  '/members',
+  `/api/keepers?organisationId=${org}`,
+];
+
 async function main() {
   const opts = options();
   if (opts.help) {
     console.log(
-      'npm run bench:scale -- [--scale=N] [--enclosures N --lamps N --readings N --designs N] [--growth=4] [--rate=20] [--duration=10] [--reuse] [--no-build]',
+      'npm run bench:scale -- [--scale=N] [--enclosures N --lamps N --readings N --designs N] [--growth=4] [--rate=20] [--duration=10] [--seed-only | --reuse] [--no-build]',
     );
     return;
   }
@@ -188,12 +296,11 @@ async function main() {
   if (!usesPrivateDb(env)) throw new Error('bench:scale seeds a database of its own on the private MariaDB');
   const life = new Lifecycle();
   life.handleSignals();
-  const scaleDb = `${env.DB_NAME}_scale`;
+  const names = databases(env, opts.growth);
   const port = await freePort(Number(env.PORT) + 50);
   const base = `http://localhost:${port}`;
   const scaleEnv = {
     ...env,
-    DB_NAME: scaleDb,
     PORT: String(port),
     APP_URL: base,
     NEXTAUTH_URL: base,
@@ -208,57 +315,62 @@ async function main() {
   const loadBefore = loadAverage();
   try {
     life.db = await ensureMariaDB({ port: Number(env.DB_PORT) });
-    let org;
-    let seedLine = null;
-    if (!opts.reuse) await recreateDatabase(scaleDb);
-    await ensureDatabases({ names: [scaleDb], user: env.DB_USER, password: env.DB_PASSWORD });
-    await migrate(scaleEnv);
+    let seeded = null;
     if (opts.reuse) {
-      const found = await run(
-        bin('tsx'),
-        ['--import', path.join(ROOT, 'scripts', 'lib', 'server-only.mjs'), 'scripts/scale-seed.ts', '--find'],
-        { env: scaleEnv, capture: true },
-      );
-      org = JSON.parse(found.stdout.trim().split('\n').pop());
-      log(`Reusing ${scaleDb}: organisation #${org.organisationId} (${fmtSize(org.size)}).`);
+      for (const name of names) await prepareScaleDb(scaleEnv, name);
     } else {
-      log(`Seeding ${scaleDb}: ${fmtSize(opts.size)} ...`);
-      seedLine = await seed(scaleEnv, opts.size);
-      org = { ...seedLine, size: opts.size };
-      const a = seedLine.added;
-      log(
-        `Seeded in ${duration(seedLine.seconds * 1000)}: rows ${a.seconds.rows.toFixed(1)} s, ` +
-          `outlooks of ${a.outlooks} lamps ${a.seconds.outlooks.toFixed(1)} s.`,
-      );
+      seeded = await seedAll(scaleEnv, names, opts.size, opts.growth);
     }
-    await startNext(life, scaleEnv, {
-      port,
-      build: opts.build,
-      logFile: path.join(ROOT, 'test-results', 'bench-scale-next.log'),
-    });
-    const { jar } = await signIn(base, org.ownerEmail, org.ownerPassword);
-    const cookie = jar.header();
-    const routes = await routesOf(base, jar, org.organisationId);
+    if (opts.seedOnly) {
+      console.log('');
+      console.log(`${started.toISOString()} · load average before ${loadBefore}, after ${loadAverage()}`);
+      for (const s of seeded) {
+        console.log(
+          `seeded ${s.name}: ${fmtSize(s.size)} in ${s.seconds.toFixed(1)} s ` +
+            `(outlooks ${s.outlookSeconds.toFixed(1)} s, ${s.computed} distinct computations)`,
+        );
+      }
+      console.log(`measure them later with: npm run bench:scale -- --reuse --growth=${opts.growth}`);
+      console.log(JSON.stringify({ at: started.toISOString(), seeded }));
+      return;
+    }
 
+    const one = await serve(life, scaleEnv, names[0], opts);
+    const org = one.org;
+    const routes = await routesOf(base, one.jar, org.organisationId);
     log(`Measuring ${routes.length + 1} routes at ${opts.rate} req/s for ${opts.duration} s each ...`);
-    const baseline = await measure(base, cookie, '/api/health', opts);
+    const baseline = await measure(base, one.cookie, '/api/health', opts);
     const rows = [baseline];
-    for (const route of routes) rows.push(await measure(base, cookie, route, opts));
-
+    for (const route of routes) rows.push(await measure(base, one.cookie, route, opts));
     const loadAfter = loadAverage();
+
+    let grownRows = null;
+    let grownOrg = null;
+    if (names[1]) {
+      await one.stop();
+      const grown = await serve(life, scaleEnv, names[1], { ...opts, build: false });
+      grownOrg = grown.org;
+      log(`Measuring the lists again on ${names[1]} ...`);
+      grownRows = [await measure(base, grown.cookie, '/api/health', opts)];
+      for (const route of growthRoutes(grownOrg.organisationId)) {
+        grownRows.push(await measure(base, grown.cookie, route, opts));
+      }
+    }
+
     console.log('');
     console.log(
       `${started.toISOString()} · ${os.cpus().length} CPUs shared with other users · load average (1/5/15 min) ` +
         `${loadBefore} before, ${loadAfter} after the routes · ${opts.rate} req/s × ${opts.duration} s a route, ` +
         `/api/health alongside at ${Math.max(1, opts.rate / 4)} req/s`,
     );
-    console.log(`organisation: ${fmtSize(org.size)} (${scaleDb})`);
-    if (seedLine) {
+    console.log(`organisation: ${fmtSize(org.size)} (${names[0]})`);
+    for (const s of seeded ?? []) {
       console.log(
-        `seeding: ${seedLine.seconds.toFixed(1)} s (rows ${seedLine.added.seconds.rows.toFixed(1)} s, ` +
-          `outlooks ${seedLine.added.seconds.outlooks.toFixed(1)} s)`,
+        `seeding ${s.name}: ${s.seconds.toFixed(1)} s (outlooks ${s.outlookSeconds.toFixed(1)} s, ` +
+          `${s.computed} distinct computations)`,
       );
     }
+    if (!seeded) console.log(`seeded earlier: ${names.join(', ')} (--reuse)`);
     console.log('ratios: p50 and p99 as multiples of /api/health alone (the first row)');
     console.log('');
     printTable(rows, baseline, opts.rate);
@@ -266,40 +378,25 @@ async function main() {
       console.log(`* below 90 % of the ${opts.rate} req/s asked: saturated, latencies include queueing`);
     }
     const growth = [];
-    const lampLog = ['/lamp-log', `/api/lamps?organisationId=${org.organisationId}`];
-    growth.push({ factor: 1, rows: rows.filter((r) => lampLog.includes(r.route)) });
-    if (opts.growth > 1) {
-      const extra = Object.fromEntries(
-        Object.entries(org.size).map(([k, v]) => [k, Math.round(v * (opts.growth - 1))]),
-      );
-      log(`Growing the organisation to ${opts.growth}× (${fmtSize(extra)} more) ...`);
-      const grown = await seed(scaleEnv, extra, [
-        '--into',
-        String(org.organisationId),
-        '--email',
-        org.ownerEmail,
-        '--offset',
-        String(org.size.enclosures),
-      ]);
-      log(
-        `Grown in ${duration(grown.seconds * 1000)} (outlooks ${grown.added.seconds.outlooks.toFixed(1)} s).`,
-      );
-      const again = [];
-      for (const route of lampLog) again.push(await measure(base, cookie, route, opts));
-      growth.push({ factor: opts.growth, rows: again });
-    }
-
-    if (growth.length > 1) {
+    if (grownRows) {
       console.log('');
-      console.log(`load average after growing: ${loadAverage()}`);
-      console.log(`lamp log from 1× to ${opts.growth}× the organisation (p50 / p99 ms):`);
-      for (const [i, route] of lampLog.entries()) {
-        const [one, more] = growth.map((g) => g.rows[i]);
-        const ms = (r) =>
-          r.requests ? `${r.p50} / ${r.p99} (${r.requests} answers)` : 'no answer in the run';
+      console.log(`load average after the grown organisation: ${loadAverage()}`);
+      console.log(
+        `from 1× to ${opts.growth}× the organisation (${fmtSize(grownOrg.size)}, ${names[1]}), p50 / p99 ms:`,
+      );
+      // The same route on both: the organisation id is the same in both databases, or compare by position.
+      const sameRoute = (r) => r.replace(`=${grownOrg.organisationId}`, `=${org.organisationId}`);
+      for (const more of grownRows) {
+        const oneRow = rows.find((r) => r.route === sameRoute(more.route));
+        const ms = (r) => (r?.requests ? `${r.p50} / ${r.p99}` : 'no answer in the run');
         const ratio =
-          one.requests && more.requests ? ` (p50 ×${(more.p50 / Math.max(one.p50, 1)).toFixed(2)})` : '';
-        console.log(`  ${route}: ${ms(one)} → ${ms(more)}${ratio}, health max ${more.healthMax ?? '-'} ms`);
+          oneRow?.requests && more.requests
+            ? ` (p50 ×${(more.p50 / Math.max(oneRow.p50, 1)).toFixed(2)}, p99 ×${(more.p99 / Math.max(oneRow.p99, 1)).toFixed(2)})`
+            : '';
+        console.log(
+          `  ${more.route}: ${ms(oneRow)} → ${ms(more)}${ratio}, ${more.bytes} B, health max ${more.healthMax ?? '-'} ms`,
+        );
+        growth.push({ route: more.route, one: oneRow ?? null, grown: more });
       }
     }
     console.log(
@@ -309,7 +406,8 @@ async function main() {
         loadAverageBefore: loadBefore,
         loadAverageAfter: loadAfter,
         size: org.size,
-        seedSeconds: seedLine?.seconds ?? null,
+        grownSize: grownOrg?.size ?? null,
+        seeded,
         rate: opts.rate,
         durationS: opts.duration,
         results: rows,

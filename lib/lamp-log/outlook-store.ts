@@ -93,7 +93,7 @@ function rowOf(c: Computed, today: string, computedAt: Date): unknown[] {
  * columns already assigned; so every data column is decided against the old `source_version` and
  * `as_of`, `as_of` next, and `source_version` last.
  */
-async function writeRows(computed: Computed[], today: string): Promise<void> {
+export async function writeOutlooks(computed: Computed[], today: string): Promise<void> {
   if (computed.length === 0) return;
   const now = new Date();
   const newer =
@@ -128,7 +128,7 @@ export async function refreshOutlooks(lampIds: readonly number[], today = todayI
     // Versions are read here, before computeOutlooks reads the readings and settings.
     const lamps = await Lamp.findAll({ where: { id: lampIds.slice(i, i + BATCH) } });
     const computed = await computeOutlooks(lamps, today, next);
-    await writeRows(computed, today);
+    await writeOutlooks(computed, today);
     done += computed.length;
     await next();
   }
@@ -223,7 +223,7 @@ export async function summariesOf(
   if (stale.length > 0) {
     // In slices, as the background passes do: a page of stale lamps never holds the event loop long.
     const computed = await computeOutlooks(stale, today, yielder());
-    await writeRows(computed, today);
+    await writeOutlooks(computed, today);
     for (const c of computed) fresh.set(c.lamp.id, c);
   }
   const items = lamps.map((l) => {

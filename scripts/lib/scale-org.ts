@@ -1,18 +1,18 @@
 // A generated organisation of a chosen size for the scale benchmark (`npm run bench:scale`): invented
 // keepers, enclosures, lamps with meter readings, designs with variants, all named "Example" and marked as
 // example data. Rows go in with multi-row INSERTs in chunks (100,000 readings in seconds, not minutes),
-// then the lamps' outlooks are computed by the same recompute the app uses (refreshOutlooks), so the
-// lamp log reads them as it would on a real organisation.
+// then the lamps' outlooks are computed by the app's own computation and writer, once per distinct
+// lamp history (scale-outlooks.ts), so the lamp log reads them as it would on a real organisation.
 //
 // Deterministic: the same size gives the same rows (a seeded pseudo-random sequence), so two runs compare.
 import bcrypt from 'bcryptjs';
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
-import { refreshOutlooks } from '@/lib/lamp-log/outlook-store';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { defaultDesignFor } from '@/lib/variants/default-design';
 import { LampType, Membership, Organisation, SpeciesSheet, User } from '@/models';
 import type { Design } from '@/simulation';
+import { seedOutlooks } from './scale-outlooks';
 
 export type ScaleSize = { enclosures: number; lamps: number; readings: number; designs: number };
 
@@ -57,8 +57,42 @@ export type AddedRows = ScaleSize & {
   keepers: number;
   variants: number;
   outlooks: number;
+  /** Distinct computations the outlooks took (the rest share a history: scale-outlooks.ts). */
+  computedOutlooks: number;
   seconds: { rows: number; outlooks: number };
 };
+
+/**
+ * Distinct UV lamp histories per species. A real organisation's lamps are each their own, but the
+ * benchmark measures reading stored outlooks, not fitting them: drawing the UV lamps from a bounded set
+ * of histories (type, age, hours, basking distance, retirement and the readings' scatter) lets the
+ * seeding fit each distinct history once (scale-outlooks.ts) instead of once a lamp, while the lamp log
+ * still shows every status and a spread of dates.
+ */
+const HISTORIES_PER_SPECIES = 12;
+
+type LampHistory = {
+  typeIndex: number;
+  ageDays: number;
+  retiredDaysAgo: number | null;
+  hoursPerDay: number;
+  baskingCm: number | null;
+  seed: number;
+};
+
+/** History `j` of the species at `speciesIndex`: the same numbers every run and at every size. */
+function lampHistory(speciesIndex: number, j: number, typeCount: number): LampHistory {
+  const seed = 1 + speciesIndex * HISTORIES_PER_SPECIES + j;
+  const rand = random(seed * 7919);
+  return {
+    typeIndex: Math.floor(rand() * typeCount),
+    ageDays: Math.floor(rand() * 730),
+    retiredDaysAgo: rand() < 0.02 ? Math.floor(rand() * 60) : null,
+    hoursPerDay: [10, 12, 14][j % 3]!,
+    baskingCm: [25, 30, 35][(j + speciesIndex) % 3]!,
+    seed,
+  };
+}
 
 /** A small linear congruential generator: the same sequence every run. */
 function random(seed: number) {
@@ -312,26 +346,38 @@ export async function addToOrganisation(
   const lampsBefore = await maxId(sequelize, 'lamps');
   const perEnclosure = shares(size.lamps, enclosureIds.length);
   const lampRows: unknown[][] = [];
-  const lampPlan: { uv: boolean; startDay: number; typeIndex: number }[] = [];
+  const lampPlan: { uv: boolean; startDay: number; typeIndex: number; seed: number }[] = [];
   perEnclosure.forEach((count, e) => {
     for (let k = 0; k < count; k++) {
       const n = offset + e + 1;
       const uv = k % 4 !== 3 || heatTypes.length === 0;
+      // A UV lamp follows one of a bounded set of histories of its enclosure's species (see lampHistory).
+      const h = uv
+        ? lampHistory(
+            n % Math.max(1, species.length),
+            Math.floor(rand() * HISTORIES_PER_SPECIES),
+            uvTypes.length,
+          )
+        : {
+            typeIndex: Math.floor(rand() * heatTypes.length),
+            ageDays: Math.floor(rand() * 730),
+            retiredDaysAgo: rand() < 0.02 ? Math.floor(rand() * 60) : null,
+            hoursPerDay: [10, 12, 14][n % 3]!,
+            baskingCm: null,
+            seed: 0,
+          };
       const list = uv ? uvTypes : heatTypes;
-      const typeIndex = Math.floor(rand() * list.length);
-      const ageDays = Math.floor(rand() * 730);
-      const retired = rand() < 0.02;
-      lampPlan.push({ uv, startDay: -ageDays, typeIndex });
+      lampPlan.push({ uv, startDay: -h.ageDays, typeIndex: h.typeIndex, seed: h.seed });
       lampRows.push([
         enclosureIds[e]!,
-        list[typeIndex]!.id,
+        list[h.typeIndex]!.id,
         uv ? `UV lamp ${n}.${k + 1}` : `Heat lamp ${n}.${k + 1}`,
         // The first UV lamp of a designed enclosure is the design's tube (see the designs below).
         k === 0 ? 'uv1' : null,
-        addDays(today, -ageDays),
-        [10, 12, 14][n % 3],
-        uv ? [25, 30, 35][n % 3] : null,
-        retired ? addDays(today, -Math.floor(rand() * Math.min(ageDays, 60))) : null,
+        addDays(today, -h.ageDays),
+        h.hoursPerDay,
+        h.baskingCm,
+        h.retiredDaysAgo === null ? null : addDays(today, -Math.min(h.retiredDaysAgo, h.ageDays)),
         now,
         now,
       ]);
@@ -369,6 +415,8 @@ export async function addToOrganisation(
     const type = uvTypes[lamp.typeIndex]!;
     const halfLifeDays = (type.halfLifeMonths ?? 12) * 30.4;
     const count = perLamp[i]!;
+    // The same history and count give the same readings: the meter's scatter is part of the history.
+    const rand = random(lamp.seed * 131 + count);
     for (let r = 0; r < count; r++) {
       const day = Math.round(lamp.startDay + ((r + 0.5) / count) * -lamp.startDay);
       const age = day - lamp.startDay;
@@ -428,9 +476,9 @@ export async function addToOrganisation(
   );
   const rowsSeconds = (performance.now() - t0) / 1000;
 
-  // The outlooks, by the app's own recompute (as the outlook job would after an import).
+  // The outlooks, by the app's own computation once per distinct lamp history (scale-outlooks.ts).
   const t1 = performance.now();
-  const outlooks = await refreshOutlooks(lampIds, today);
+  const { stored: outlooks, computed } = await seedOutlooks(lampIds, today);
   return {
     enclosures: enclosureIds.length,
     lamps: lampIds.length,
@@ -439,6 +487,7 @@ export async function addToOrganisation(
     variants: designRows.length * VARIANTS_PER_DESIGN,
     keepers: keeperIds.length,
     outlooks,
+    computedOutlooks: computed,
     seconds: { rows: rowsSeconds, outlooks: (performance.now() - t1) / 1000 },
   };
 }
