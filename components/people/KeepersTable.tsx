@@ -1,18 +1,17 @@
 'use client';
 
+import { useMemo } from 'react';
+import { LocalTime } from '@/components/ui/LocalTime';
 import Link from '@/components/ui/Link';
 import { link } from '@/components/ui/styles';
 import { Table, type TableColumn } from '@/components/ui/Table';
+import { keeperListView, type KeeperListView, type KeeperSortColumn } from '@/lib/people/list-view';
+import { frameOf, PeopleListFrame } from './PeopleListFrame';
+import { type KeeperRow, type PeoplePage, useKeeperList } from './usePeopleList';
 
-export type KeeperRow = {
-  userId: number;
-  name: string;
-  email: string;
-  enclosureCount: number;
-  joinedAt: string;
-};
+export type { KeeperRow } from './usePeopleList';
 
-const columns: TableColumn<KeeperRow>[] = [
+const columns: (TableColumn<KeeperRow> & { id: KeeperSortColumn | 'enclosures' })[] = [
   { id: 'name', header: 'Name', className: 'px-4 py-3 font-medium', cell: ({ row }) => row.original.name },
   {
     id: 'email',
@@ -23,6 +22,7 @@ const columns: TableColumn<KeeperRow>[] = [
   {
     id: 'enclosures',
     header: 'Enclosures',
+    sortable: false,
     cell: ({ row: { original: k } }) => (
       <Link href={`/enclosures?keeper=${k.userId}`} className={link}>
         {k.enclosureCount} {k.enclosureCount === 1 ? 'enclosure' : 'enclosures'}
@@ -33,13 +33,49 @@ const columns: TableColumn<KeeperRow>[] = [
     id: 'joined',
     header: 'Joined',
     className: 'px-4 py-3 text-basalt-500',
-    cell: ({ row }) => row.original.joinedAt.slice(0, 10),
+    cell: ({ row }) => <LocalTime value={row.original.joinedAt} shown="day" className="whitespace-nowrap" />,
   },
 ];
 
-/** The organisation's keepers, each with a link to their enclosures. */
-export function KeepersTable({ keepers }: { keepers: KeeperRow[] }) {
+/**
+ * The organisation's keepers, each with a link to their enclosures: searched, sorted and paged by the
+ * server (a shop has hundreds of customers), with the view in the address bar.
+ */
+export function KeepersTable({
+  organisationId,
+  initial,
+}: {
+  organisationId: number;
+  initial: { view: KeeperListView; page: PeoplePage<KeeperRow> };
+}) {
+  const state = useKeeperList(organisationId, initial);
+  const list = frameOf(state, keeperListView.pageCount);
+  const data = state.result.data;
+  const items = useMemo(() => data?.items ?? [], [data]);
+  const { view, show } = state;
   return (
-    <Table data={keepers} columns={columns} caption="Keepers" rowKey={(k) => k.userId} rowClassName="" />
+    <PeopleListFrame
+      noun={{ one: 'keeper', many: 'keepers' }}
+      label="Search keepers"
+      list={list}
+      table={(empty) => (
+        <Table
+          data={items}
+          columns={columns}
+          caption="Keepers"
+          rowKey={(k) => k.userId}
+          rowClassName=""
+          sort={{
+            sort: view.sort,
+            onSort: (column) =>
+              show({ sort: keeperListView.nextSort(view.sort, column as KeeperSortColumn), page: 1 }),
+          }}
+          stale={list.stale}
+          busy={list.busy}
+        >
+          {empty}
+        </Table>
+      )}
+    />
   );
 }

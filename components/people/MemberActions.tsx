@@ -1,5 +1,6 @@
 'use client';
 
+import { useQueryClient } from '@tanstack/react-query';
 import { useRouter } from 'next/navigation';
 import { useId, useState } from 'react';
 import { fieldError, sendJson } from '@/components/ui/api-client';
@@ -22,6 +23,7 @@ export function MemberActions({
   isSelf: boolean;
 }) {
   const router = useRouter();
+  const queryClient = useQueryClient();
   const selectId = useId();
   const [error, setError] = useState('');
   const [busy, setBusy] = useState(false);
@@ -33,6 +35,8 @@ export function MemberActions({
     setError('');
     try {
       await action();
+      // The members table's pages come from this same address (useServerList keys them by it).
+      await queryClient.invalidateQueries({ queryKey: [url] });
       router.refresh();
     } catch (e) {
       setError(fieldError(e).message);

@@ -1,61 +1,97 @@
 'use client';
 
-import type { Role } from '@/lib/permissions';
+import { useMemo } from 'react';
 import { Table, type TableColumn } from '@/components/ui/Table';
+import { memberListView, type MemberListView, type MemberSortColumn } from '@/lib/people/list-view';
 import { MemberActions } from './MemberActions';
+import { frameOf, PeopleListFrame } from './PeopleListFrame';
+import { type MemberRow, type PeoplePage, useMemberList } from './usePeopleList';
 
-export type MemberRow = { userId: number; name: string; email: string; role: Role };
+export type { MemberRow } from './usePeopleList';
 
-/** Everyone in the organisation; an owner changes roles and removes people from the last column. */
+/**
+ * Everyone in the organisation, searched, sorted and paged by the server with the view in the address
+ * bar; an owner changes roles and removes people from the role column.
+ */
 export function MembersTable({
-  members,
   organisationId,
   selfId,
   manages,
+  initial,
 }: {
-  members: MemberRow[];
   organisationId: number;
   selfId: number;
   manages: boolean;
+  initial: { view: MemberListView; page: PeoplePage<MemberRow> };
 }) {
-  const columns: TableColumn<MemberRow>[] = [
-    {
-      id: 'name',
-      header: 'Name',
-      className: 'px-4 py-3 font-medium',
-      cell: ({ row: { original: m } }) => (
-        <>
-          {m.name}
-          {m.userId === selfId && <span className="ml-1 text-caption text-basalt-500">(you)</span>}
-        </>
-      ),
-    },
-    {
-      id: 'email',
-      header: 'Email',
-      className: 'px-4 py-3 text-basalt-700',
-      cell: ({ row }) => row.original.email,
-    },
-    {
-      id: 'role',
-      header: manages ? 'Role and actions' : 'Role',
-      cell: ({ row: { original: m } }) =>
-        manages ? (
-          <MemberActions
-            organisationId={organisationId}
-            userId={m.userId}
-            name={m.name}
-            role={m.role}
-            isSelf={m.userId === selfId}
-          />
-        ) : (
-          <span className="rounded bg-basalt-100 px-2 py-0.5 text-caption font-medium text-basalt-700">
-            {m.role}
-          </span>
+  const state = useMemberList(organisationId, initial);
+  const list = frameOf(state, memberListView.pageCount);
+  const data = state.result.data;
+  const items = useMemo(() => data?.items ?? [], [data]);
+  const { view, show } = state;
+  const columns = useMemo<(TableColumn<MemberRow> & { id: MemberSortColumn })[]>(
+    () => [
+      {
+        id: 'name',
+        header: 'Name',
+        className: 'px-4 py-3 font-medium',
+        cell: ({ row: { original: m } }) => (
+          <>
+            {m.name}
+            {m.userId === selfId && <span className="ml-1 text-caption text-basalt-500">(you)</span>}
+          </>
         ),
-    },
-  ];
+      },
+      {
+        id: 'email',
+        header: 'Email',
+        className: 'px-4 py-3 text-basalt-700',
+        cell: ({ row }) => row.original.email,
+      },
+      {
+        id: 'role',
+        header: manages ? 'Role and actions' : 'Role',
+        cell: ({ row: { original: m } }) =>
+          manages ? (
+            <MemberActions
+              organisationId={organisationId}
+              userId={m.userId}
+              name={m.name}
+              role={m.role}
+              isSelf={m.userId === selfId}
+            />
+          ) : (
+            <span className="rounded bg-basalt-100 px-2 py-0.5 text-caption font-medium text-basalt-700">
+              {m.role}
+            </span>
+          ),
+      },
+    ],
+    [organisationId, selfId, manages],
+  );
   return (
-    <Table data={members} columns={columns} caption="Members" rowKey={(m) => m.userId} rowClassName="" />
+    <PeopleListFrame
+      noun={{ one: 'member', many: 'members' }}
+      label="Search members"
+      list={list}
+      table={(empty) => (
+        <Table
+          data={items}
+          columns={columns}
+          caption="Members"
+          rowKey={(m) => m.userId}
+          rowClassName=""
+          sort={{
+            sort: view.sort,
+            onSort: (column) =>
+              show({ sort: memberListView.nextSort(view.sort, column as MemberSortColumn), page: 1 }),
+          }}
+          stale={list.stale}
+          busy={list.busy}
+        >
+          {empty}
+        </Table>
+      )}
+    />
   );
 }

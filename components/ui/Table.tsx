@@ -18,6 +18,8 @@ export type TableColumn<T> = ColumnDef<T> & {
   headerClassName?: string;
   /** A longer explanation of the heading, shown on hover. */
   title?: string;
+  /** `false`: a column the server does not sort by, left a plain heading in a sorted table. */
+  sortable?: boolean;
 };
 
 /** Sorting done by the server: every header becomes a button that asks for the next sort. */
@@ -28,7 +30,8 @@ const FRAME = 'overflow-x-auto rounded-lg border border-basalt-200 bg-white';
 /**
  * The one table of the app's lists: a bordered frame, a caption for screen readers, a header row and a
  * row a record. Rows are laid out by TanStack Table in the order given; searching, sorting and paging of
- * server-side lists stay with the server (`sort` draws the headers as sort buttons, keyboard-usable).
+ * server-side lists stay with the server (`sort` draws the headers as sort buttons, keyboard-usable;
+ * a column marked `sortable: false` keeps a plain heading).
  * `children` sit inside the frame below the table — where a list says that nothing matches.
  */
 export function Table<T, C extends string = string>({
@@ -103,7 +106,7 @@ export function Table<T, C extends string = string>({
               {group.headers.map((header) => {
                 const column = header.column.columnDef as TableColumn<T>;
                 const label = flexRender(column.header, header.getContext());
-                return sort ? (
+                return sort && column.sortable !== false ? (
                   <SortableHeader
                     key={header.id}
                     column={column.id as C}

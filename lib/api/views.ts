@@ -1,7 +1,7 @@
 import 'server-only';
 import { Op } from 'sequelize';
 import { Enclosure, Invitation, Membership, User, type Role } from '@/models';
-import { enclosureCounts, enclosureJson } from './enclosures';
+import { enclosureJson } from './enclosures';
 import { invitationJson } from '@/lib/auth/invitations';
 
 /**
@@ -31,15 +31,6 @@ export async function memberViews(organisationId: number, role?: Role): Promise<
       };
     })
     .sort((a, b) => a.name.localeCompare(b.name));
-}
-
-export async function keeperViews(organisationId: number) {
-  const keepers = await memberViews(organisationId, 'keeper');
-  const counts = await enclosureCounts(
-    organisationId,
-    keepers.map((k) => k.userId),
-  );
-  return keepers.map((k) => ({ ...k, enclosureCount: counts.get(k.userId) ?? 0 }));
 }
 
 export async function pendingInvitationViews(organisationId: number, role?: Role) {

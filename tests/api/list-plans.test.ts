@@ -1,9 +1,9 @@
 import { QueryTypes } from 'sequelize';
 import { describe, expect, it } from 'vitest';
 import { listEnclosures } from '@/lib/api/enclosure-list';
-import { keeperViews } from '@/lib/api/views';
 import { ENCLOSURE_SORT_COLUMNS } from '@/lib/enclosures/list-view';
-import { keepersOf } from '@/lib/organisations/queries';
+import { listKeepers, listPeople } from '@/lib/api/people-list';
+import { KEEPER_SORT_COLUMNS, MEMBER_SORT_COLUMNS } from '@/lib/people/list-view';
 import { createMember, testDb, withTestDatabase } from '../helpers/db';
 
 // The plans MariaDB picks for the enclosures table and the keepers list on an organisation with thousands
@@ -103,18 +103,70 @@ describe('list query plans', () => {
     }
   });
 
-  it('the keepers list and page read an organisation’s keepers in index order', async () => {
+  it('the keepers and members lists read an organisation’s people through its index, each person by key', async () => {
     const { organisation } = await busyOrganisation();
-    for (const [what, run] of [
-      ['GET /api/keepers', () => keepersOf(organisation.id, { limit: 50, cursor: 0 })],
-      ['keepers page', () => keeperViews(organisation.id)],
-    ] as const) {
-      const statements = await statementsOf(run);
-      const list = statements.find((s) => /FROM `memberships`/i.test(s));
-      expect(list, what).toBeDefined();
-      const m = expectOrganisationIndex(await explain(list!), 'Membership', what);
-      expect(m.key, what).toBe('memberships_org_role');
-      expect(m.Extra ?? '', what).not.toMatch(/filesort|temporary/i);
+    const runs: [string, boolean, () => Promise<unknown>][] = [];
+    for (const sort of KEEPER_SORT_COLUMNS) {
+      for (const descending of [false, true]) {
+        runs.push([
+          `keepers ${sort} ${descending ? 'desc' : 'asc'}`,
+          // Who joined order is the index's own (organisation, role, id): no sort at all.
+          sort === 'joined',
+          () => listKeepers({ organisationId: organisation.id, sort, descending, offset: 50, limit: 25 }),
+        ]);
+      }
     }
+    for (const sort of MEMBER_SORT_COLUMNS) {
+      runs.push([
+        `members ${sort}`,
+        false,
+        () => listPeople({ organisationId: organisation.id, sort, descending: false, offset: 25, limit: 25 }),
+      ]);
+    }
+    runs.push([
+      'keepers searched',
+      false,
+      () =>
+        listKeepers({
+          organisationId: organisation.id,
+          q: 'person 12',
+          sort: 'name',
+          descending: false,
+          offset: 0,
+          limit: 25,
+        }),
+    ]);
+    for (const [what, ordered, run] of runs) {
+      const statements = await statementsOf(run);
+      const page = statements.find((s) => /FROM `memberships`/i.test(s) && /LIMIT/i.test(s));
+      expect(page, what).toBeDefined();
+      const m = expectOrganisationIndex(await explain(page!), 'Membership', what);
+      if (ordered) expect(m.Extra ?? '', what).not.toMatch(/filesort|temporary/i);
+      // The total counts the organisation's memberships from the same index.
+      const count = statements.find((s) => /COUNT\(/i.test(s) && /FROM `memberships`/i.test(s));
+      expect(count, what).toBeDefined();
+      expectOrganisationIndex(await explain(count!), 'Membership', `${what} count`);
+      // Keepers' enclosure counts: one grouped query over the organisation's keeper index.
+      const enclosures = statements.find((s) => /FROM `enclosures`/i.test(s));
+      if (what.startsWith('keepers')) {
+        expect(enclosures, what).toBeDefined();
+        expectOrganisationIndex(await explain(enclosures!), 'Enclosure', `${what} enclosure counts`);
+      }
+    }
+  });
+
+  it('a page of 25 keepers asks the database as many queries as a page of 3: no query a person', async () => {
+    const { organisation } = await busyOrganisation();
+    const queries = async (limit: number) => {
+      const statements = await statementsOf(() =>
+        listKeepers({ organisationId: organisation.id, sort: 'name', descending: false, offset: 0, limit }),
+      );
+      return statements.length;
+    };
+    const small = await queries(3);
+    const large = await queries(25);
+    expect(large).toBe(small);
+    // The page, its total and the page's enclosure counts.
+    expect(small).toBeLessThanOrEqual(3);
   });
 });

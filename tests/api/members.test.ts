@@ -3,7 +3,7 @@ import * as enclosures from '@/app/api/enclosures/route';
 import * as keepers from '@/app/api/keepers/route';
 import * as members from '@/app/api/organisations/[id]/members/route';
 import { Membership, User, type Organisation } from '@/models';
-import { closeDatabase, createEnclosure, resetDatabase } from '../helpers/db';
+import { closeDatabase, createEnclosure, createMember, resetDatabase } from '../helpers/db';
 import { createWorld } from '../helpers/world';
 import { call, sessionCookie } from './http';
 
@@ -130,5 +130,55 @@ describe('GET /api/keepers', () => {
     expect(
       (await call(keepers.GET, { path: `/api/keepers?organisationId=${shop.id}`, as: keeper })).status,
     ).toBe(404);
+  });
+});
+
+describe('the people lists page, search and sort on the server', () => {
+  const keeperList = (qs: string) =>
+    call(keepers.GET, { path: `/api/keepers?organisationId=${shop.id}${qs}`, as: staff });
+  const memberList = (qs: string) =>
+    call(members.GET, { path: `${path()}?${qs}`, params: { id: shop.id }, as: staff });
+
+  it('pages the keepers with a total, finds one by name or e-mail, and sorts by name either way', async () => {
+    for (let i = 0; i < 6; i++) {
+      const { user } = await createMember('keeper', shop);
+      await user.update({ name: `Example customer ${String.fromCharCode(65 + i)}` });
+    }
+    const first = await keeperList('&limit=3');
+    expect(first.status).toBe(200);
+    expect(first.body).toMatchObject({ total: 7, offset: 0, limit: 3 });
+    expect(first.body.items.map((k: { name: string }) => k.name)).toEqual([
+      'Example customer A',
+      'Example customer B',
+      'Example customer C',
+    ]);
+    const last = await keeperList('&limit=3&offset=6');
+    expect(last.body.items.map((k: { name: string }) => k.name)).toEqual(['Keeper Person']);
+    const desc = await keeperList('&limit=2&sort=name&dir=desc');
+    expect(desc.body.items.map((k: { name: string }) => k.name)).toEqual([
+      'Keeper Person',
+      'Example customer F',
+    ]);
+    const found = await keeperList(`&q=${encodeURIComponent('customer d')}`);
+    expect(found.body.total).toBe(1);
+    expect(found.body.items[0]).toMatchObject({ name: 'Example customer D', enclosureCount: 0 });
+    expect(found.body.items[0]).not.toHaveProperty('role');
+    const byMail = await keeperList(`&q=${encodeURIComponent(keeper.email)}`);
+    expect(byMail.body.items.map((k: { userId: number }) => k.userId)).toEqual([keeper.id]);
+    // Only keepers: the owner and staff are not in this list whatever the search.
+    expect((await keeperList('&q=Staff')).body.total).toBe(0);
+  });
+
+  it('lists members owners first, narrows to a role, and refuses an unknown sort', async () => {
+    const all = await memberList('');
+    expect(all.status).toBe(200);
+    expect(all.body.items.map((m: { role: string }) => m.role)).toEqual(['owner', 'staff', 'keeper']);
+    expect(all.body.total).toBe(3);
+    const staffOnly = await memberList('role=staff');
+    expect(staffOnly.body.items.map((m: { userId: number }) => m.userId)).toEqual([staff.id]);
+    const newest = await memberList('sort=joined&limit=1');
+    expect(newest.body.items.map((m: { userId: number }) => m.userId)).toEqual([keeper.id]);
+    expect((await memberList('sort=password')).status).toBe(400);
+    expect((await keeperList('&sort=role')).status).toBe(400);
   });
 });

@@ -6,21 +6,31 @@ import { PendingInvitations } from '@/components/people/PendingInvitations';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { card } from '@/components/ui/styles';
-import { keeperViews, pendingInvitationViews } from '@/lib/api/views';
+import { QueryProvider } from '@/components/ui/QueryProvider';
+import { listKeepers } from '@/lib/api/people-list';
+import { pendingInvitationViews } from '@/lib/api/views';
+import { toSearchParams } from '@/lib/list-view';
+import { keeperListView } from '@/lib/people/list-view';
 import { can } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
 
 export const metadata: Metadata = { title: 'Keepers' };
 
-export default async function KeepersPage() {
+export default async function KeepersPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[]>>;
+}) {
   const user = await requireUser('/keepers');
   const membership = await currentMembership(user);
   if (!membership) return null;
   const organisationId = membership.organisationId;
   if (!can(user, 'read', { kind: 'member', organisationId })) notFound();
   const mayInvite = can(user, 'create', { kind: 'invitation', organisationId, role: 'keeper' });
-  const [keepers, invitations] = await Promise.all([
-    keeperViews(organisationId),
+  // The first page is rendered here, for the view the address names; the table then fetches others.
+  const view = keeperListView.viewFromSearchParams(toSearchParams(await searchParams));
+  const [firstPage, invitations] = await Promise.all([
+    listKeepers({ organisationId, ...keeperListView.listQueryForView(view) }),
     pendingInvitationViews(organisationId, 'keeper'),
   ]);
 
@@ -30,7 +40,7 @@ export default async function KeepersPage() {
         title="Keepers"
         lead="Your customers and the people who look after the animals. Each keeper sees and edits only their own enclosures, designs and readings."
       />
-      {keepers.length === 0 ? (
+      {firstPage.total === 0 && !view.q ? (
         <EmptyState title="No keepers yet">
           <p>
             Invite a customer by e-mail below. They choose their own password and then see only their own
@@ -38,7 +48,9 @@ export default async function KeepersPage() {
           </p>
         </EmptyState>
       ) : (
-        <KeepersTable keepers={keepers} />
+        <QueryProvider>
+          <KeepersTable organisationId={organisationId} initial={{ view, page: firstPage }} />
+        </QueryProvider>
       )}
       {mayInvite && (
         <section aria-labelledby="invite-keeper" className={`${card} mt-8 p-5`}>

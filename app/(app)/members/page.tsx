@@ -5,16 +5,22 @@ import { MembersTable } from '@/components/people/MembersTable';
 import { PendingInvitations } from '@/components/people/PendingInvitations';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { card } from '@/components/ui/styles';
-import { memberViews, pendingInvitationViews } from '@/lib/api/views';
+import { QueryProvider } from '@/components/ui/QueryProvider';
+import { listPeople } from '@/lib/api/people-list';
+import { pendingInvitationViews } from '@/lib/api/views';
+import { toSearchParams } from '@/lib/list-view';
+import { memberListView } from '@/lib/people/list-view';
 import { can } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
 import type { Role } from '@/lib/permissions';
 
 export const metadata: Metadata = { title: 'Members' };
 
-const ROLE_ORDER: Record<Role, number> = { owner: 0, staff: 1, keeper: 2 };
-
-export default async function MembersPage() {
+export default async function MembersPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[]>>;
+}) {
   const user = await requireUser('/members');
   const membership = await currentMembership(user);
   if (!membership) return null;
@@ -24,11 +30,12 @@ export default async function MembersPage() {
   const invitable = (['staff', 'keeper', 'owner'] as Role[]).filter((role) =>
     can(user, 'create', { kind: 'invitation', organisationId, role }),
   );
-  const [members, invitations] = await Promise.all([
-    memberViews(organisationId),
+  // The first page is rendered here, for the view the address names; the table then fetches others.
+  const view = memberListView.viewFromSearchParams(toSearchParams(await searchParams));
+  const [firstPage, invitations] = await Promise.all([
+    listPeople({ organisationId, ...memberListView.listQueryForView(view) }),
     pendingInvitationViews(organisationId),
   ]);
-  members.sort((a, b) => ROLE_ORDER[a.role] - ROLE_ORDER[b.role] || a.name.localeCompare(b.name));
 
   return (
     <>
@@ -40,7 +47,14 @@ export default async function MembersPage() {
             : `Everyone in ${membership.organisationName}. Only an owner changes roles or removes people.`
         }
       />
-      <MembersTable members={members} organisationId={organisationId} selfId={user.id} manages={manages} />
+      <QueryProvider>
+        <MembersTable
+          organisationId={organisationId}
+          selfId={user.id}
+          manages={manages}
+          initial={{ view, page: firstPage }}
+        />
+      </QueryProvider>
       {invitable.length > 0 && (
         <section aria-labelledby="invite" className={`${card} mt-8 p-5`}>
           <h2 id="invite" className="text-lead font-semibold">

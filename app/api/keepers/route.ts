@@ -1,17 +1,18 @@
 import { z } from 'zod';
-import { allow, created, page, pageQuery, route } from '@/lib/api';
+import { allow, created, route } from '@/lib/api';
+import { keeperListQuery, listKeepers } from '@/lib/api/people-list';
 import { emailSchema, idSchema } from '@/lib/api/schemas';
 import { invitationJson, inviteByEmail } from '@/lib/auth/invitations';
-import { keepersOf } from '@/lib/organisations/queries';
 
-/** The organisation's keepers (`?organisationId=`) with how many enclosures each has. Owner and staff. */
+/**
+ * The organisation's keepers (`?organisationId=`) with how many enclosures each has, searched, sorted
+ * and paged (`q`, `sort`, `dir`, `offset`, `limit`; see people-list.ts). Owner and staff.
+ */
 export const GET = route({
-  query: z.object({ organisationId: idSchema('The organisation id'), ...pageQuery }),
+  query: keeperListQuery,
   handler: async ({ query, user }) => {
-    const organisationId = query.organisationId;
-    allow(user, 'read', { kind: 'member', organisationId }, 'That organisation');
-    const { rows, json } = await keepersOf(organisationId, query);
-    return page(rows, query.limit, json);
+    allow(user, 'read', { kind: 'member', organisationId: query.organisationId }, 'That organisation');
+    return listKeepers(query);
   },
 });
 

@@ -1,16 +1,19 @@
 import { z } from 'zod';
-import { allow, page, pageQuery, route } from '@/lib/api';
+import { allow, route } from '@/lib/api';
+import { listPeople, memberListQuery } from '@/lib/api/people-list';
 import { idParams, idSchema, roleSchema } from '@/lib/api/schemas';
 import { changeMemberRole, removeMember } from '@/lib/organisations/mutations';
-import { memberJson, membersOf } from '@/lib/organisations/queries';
 
-/** The organisation's members (owner and staff). */
+/**
+ * The organisation's members (owner and staff), searched, sorted and paged (`q`, `sort`, `dir`,
+ * `offset`, `limit`; `role` narrows to one role; see people-list.ts).
+ */
 export const GET = route({
   params: idParams,
-  query: z.object({ ...pageQuery, role: roleSchema.optional() }),
+  query: memberListQuery,
   handler: async ({ params, query, user }) => {
     allow(user, 'read', { kind: 'member', organisationId: params.id }, 'That organisation');
-    return page(await membersOf(params.id, query), query.limit, memberJson);
+    return listPeople({ ...query, organisationId: params.id });
   },
 });
 
