@@ -1,12 +1,11 @@
 'use client';
 
-import { useMemo } from 'react';
 import { LocalTime } from '@/components/ui/LocalTime';
 import Link from '@/components/ui/Link';
 import { link } from '@/components/ui/styles';
-import { Table, type TableColumn } from '@/components/ui/Table';
+import type { TableColumn } from '@/components/ui/Table';
 import { keeperListView, type KeeperListView, type KeeperSortColumn } from '@/lib/people/list-view';
-import { frameOf, PeopleListFrame } from './PeopleListFrame';
+import { PeopleListFrame } from './PeopleListFrame';
 import { type KeeperRow, type PeoplePage, useKeeperList } from './usePeopleList';
 
 export type { KeeperRow } from './usePeopleList';
@@ -48,34 +47,12 @@ export function KeepersTable({
   organisationId: number;
   initial: { view: KeeperListView; page: PeoplePage<KeeperRow> };
 }) {
-  const state = useKeeperList(organisationId, initial);
-  const list = frameOf(state, keeperListView.pageCount);
-  const data = state.result.data;
-  const items = useMemo(() => data?.items ?? [], [data]);
-  const { view, show } = state;
   return (
     <PeopleListFrame
-      noun={{ one: 'keeper', many: 'keepers' }}
-      label="Search keepers"
-      list={list}
-      table={(empty) => (
-        <Table
-          data={items}
-          columns={columns}
-          caption="Keepers"
-          rowKey={(k) => k.userId}
-          rowClassName=""
-          sort={{
-            sort: view.sort,
-            onSort: (column) =>
-              show({ sort: keeperListView.nextSort(view.sort, column as KeeperSortColumn), page: 1 }),
-          }}
-          stale={list.stale}
-          busy={list.busy}
-        >
-          {empty}
-        </Table>
-      )}
+      noun={{ one: 'keeper', many: 'keepers', caption: 'Keepers' }}
+      state={useKeeperList(organisationId, initial)}
+      codec={keeperListView}
+      columns={columns}
     />
   );
 }

@@ -1,10 +1,10 @@
 'use client';
 
 import { useMemo } from 'react';
-import { Table, type TableColumn } from '@/components/ui/Table';
+import type { TableColumn } from '@/components/ui/Table';
 import { memberListView, type MemberListView, type MemberSortColumn } from '@/lib/people/list-view';
 import { MemberActions } from './MemberActions';
-import { frameOf, PeopleListFrame } from './PeopleListFrame';
+import { PeopleListFrame } from './PeopleListFrame';
 import { type MemberRow, type PeoplePage, useMemberList } from './usePeopleList';
 
 export type { MemberRow } from './usePeopleList';
@@ -25,10 +25,6 @@ export function MembersTable({
   initial: { view: MemberListView; page: PeoplePage<MemberRow> };
 }) {
   const state = useMemberList(organisationId, initial);
-  const list = frameOf(state, memberListView.pageCount);
-  const data = state.result.data;
-  const items = useMemo(() => data?.items ?? [], [data]);
-  const { view, show } = state;
   const columns = useMemo<(TableColumn<MemberRow> & { id: MemberSortColumn })[]>(
     () => [
       {
@@ -71,27 +67,10 @@ export function MembersTable({
   );
   return (
     <PeopleListFrame
-      noun={{ one: 'member', many: 'members' }}
-      label="Search members"
-      list={list}
-      table={(empty) => (
-        <Table
-          data={items}
-          columns={columns}
-          caption="Members"
-          rowKey={(m) => m.userId}
-          rowClassName=""
-          sort={{
-            sort: view.sort,
-            onSort: (column) =>
-              show({ sort: memberListView.nextSort(view.sort, column as MemberSortColumn), page: 1 }),
-          }}
-          stale={list.stale}
-          busy={list.busy}
-        >
-          {empty}
-        </Table>
-      )}
+      noun={{ one: 'member', many: 'members', caption: 'Members' }}
+      state={state}
+      codec={memberListView}
+      columns={columns}
     />
   );
 }

@@ -1,47 +1,58 @@
 'use client';
 
-import type { ReactNode } from 'react';
+import { useMemo } from 'react';
 import { ListLoadError, ListPager, ListSearchBox } from '@/components/ui/ServerListParts';
+import { Table, type TableColumn } from '@/components/ui/Table';
 import { button } from '@/components/ui/styles';
+import type { ListView, ListViewCodec } from '@/lib/list-view';
 import { MAX_PEOPLE_SEARCH, PEOPLE_PAGE_SIZE } from '@/lib/people/list-view';
+import type { PeoplePage } from './usePeopleList';
+
+type ServerListState<C extends string, R> = {
+  view: ListView<C>;
+  draft: string;
+  setDraft: (v: string) => void;
+  clearSearch: () => void;
+  show: (next: Partial<ListView<C>>) => void;
+  result: {
+    data: PeoplePage<R> | undefined;
+    isPlaceholderData: boolean;
+    isFetching: boolean;
+    error: Error | null;
+    refetch: () => unknown;
+  };
+};
 
 /**
- * What the keepers and members tables share around their rows: the search box with the count, the
- * load error, the "no one matches" line and the pager. `table` draws the page's rows.
+ * The keepers and members tables: the search box with the count, the load error, the page's rows
+ * with sortable headers, "no one matches" and the pager, around a server list (useServerList).
  */
-export function PeopleListFrame({
+export function PeopleListFrame<C extends string, R extends { userId: number }>({
   noun,
-  label,
-  list,
-  table,
+  state,
+  codec,
+  columns,
 }: {
-  noun: { one: string; many: string };
-  label: string;
-  list: {
-    q: string;
-    page: number;
-    draft: string;
-    setDraft: (v: string) => void;
-    clearSearch: () => void;
-    onPage: (page: number) => void;
-    total: number;
-    pages: number;
-    stale: boolean;
-    busy: boolean;
-    error: Error | null;
-    retry: () => void;
-  };
-  table: (empty: ReactNode) => ReactNode;
+  noun: { one: string; many: string; caption: string };
+  state: ServerListState<C, R>;
+  codec: ListViewCodec<C>;
+  columns: readonly TableColumn<R>[];
 }) {
-  const { q, total, stale, busy } = list;
+  const { view, show, result } = state;
+  const data = result.data;
+  const items = useMemo(() => data?.items ?? [], [data]);
+  const total = data?.total ?? 0;
+  // Rows of the previous view stay up while the next loads (or failed to): dimmed, and not counted.
+  const stale = result.isPlaceholderData || !data;
+  const busy = result.isFetching && stale;
   const count = (n: number) => `${n} ${n === 1 ? noun.one : noun.many}`;
   return (
     <div>
       <div className="mb-3">
         <ListSearchBox
-          label={label}
-          value={list.draft}
-          onChange={list.setDraft}
+          label={`Search ${noun.many}`}
+          value={state.draft}
+          onChange={state.setDraft}
           maxLength={MAX_PEOPLE_SEARCH}
           placeholder="Name or e-mail"
           // The count of the rows shown; while another view loads, the old count would mislead.
@@ -50,22 +61,36 @@ export function PeopleListFrame({
               ? `Loading ${noun.many}…`
               : stale
                 ? ''
-                : q
+                : view.q
                   ? `${count(total)} ${total === 1 ? 'matches' : 'match'}`
                   : count(total)
           }
         />
       </div>
-      {list.error && <ListLoadError what={noun.many} message={list.error.message} retry={list.retry} />}
-      {table(
-        !stale && total === 0 && (
+      {result.error && (
+        <ListLoadError what={noun.many} message={result.error.message} retry={() => void result.refetch()} />
+      )}
+      <Table
+        data={items}
+        columns={columns}
+        caption={noun.caption}
+        rowKey={(r) => r.userId}
+        rowClassName=""
+        sort={{
+          sort: view.sort,
+          onSort: (column: C) => show({ sort: codec.nextSort(view.sort, column), page: 1 }),
+        }}
+        stale={stale}
+        busy={busy}
+      >
+        {!stale && total === 0 && (
           <div className="px-4 py-6 text-center text-body text-basalt-600" role="status">
-            {q ? (
+            {view.q ? (
               <>
                 <p>
-                  No {noun.one} matches “{q}”.
+                  No {noun.one} matches “{view.q}”.
                 </p>
-                <button type="button" className={`${button.quiet} mt-2`} onClick={list.clearSearch}>
+                <button type="button" className={`${button.quiet} mt-2`} onClick={state.clearSearch}>
                   Clear the search
                 </button>
               </>
@@ -73,53 +98,16 @@ export function PeopleListFrame({
               <p>No {noun.many} here yet.</p>
             )}
           </div>
-        ),
-      )}
+        )}
+      </Table>
       <ListPager
-        page={list.page}
+        page={view.page}
         pageSize={PEOPLE_PAGE_SIZE}
         total={total}
-        pages={list.pages}
+        pages={codec.pageCount(total)}
         noun={noun.many}
-        onPage={list.onPage}
+        onPage={(page) => show({ page })}
       />
     </div>
   );
-}
-
-/** The frame's `list` from a server list's state (useServerList) and its page count. */
-export function frameOf<P extends { total: number }>(
-  s: {
-    view: { q: string; page: number };
-    draft: string;
-    setDraft: (v: string) => void;
-    clearSearch: () => void;
-    show: (next: { page: number }) => void;
-    result: {
-      data: P | undefined;
-      isPlaceholderData: boolean;
-      isFetching: boolean;
-      error: Error | null;
-      refetch: () => unknown;
-    };
-  },
-  pageCount: (total: number) => number,
-) {
-  const total = s.result.data?.total ?? 0;
-  // Rows of the previous view stay up while the next loads (or failed to): dimmed, and not counted.
-  const stale = s.result.isPlaceholderData || !s.result.data;
-  return {
-    q: s.view.q,
-    page: s.view.page,
-    draft: s.draft,
-    setDraft: s.setDraft,
-    clearSearch: s.clearSearch,
-    onPage: (page: number) => s.show({ page }),
-    total,
-    pages: pageCount(total),
-    stale,
-    busy: s.result.isFetching && stale,
-    error: s.result.error,
-    retry: () => void s.result.refetch(),
-  };
 }

@@ -11,7 +11,7 @@ import {
 import { Enclosure, User } from '@/models';
 import { enclosureJson } from './enclosures';
 import { likeContains } from './like';
-import { pageQuery } from './pagination';
+import { offsetQuery, pageQuery } from './pagination';
 import { idSchema, textSchema } from './schemas';
 
 /**
@@ -39,12 +39,7 @@ export const enclosureListQuery = z
       })
       .default('updated'),
     dir: z.enum(SORT_DIRECTIONS, { error: 'The direction must be asc or desc.' }).optional(),
-    offset: z.coerce
-      .number({ error: 'The offset must be a number.' })
-      .int('The offset must be a whole number.')
-      .min(0, 'The offset cannot be negative.')
-      .max(1_000_000, 'The offset can be at most 1000000.')
-      .default(0),
+    offset: offsetQuery,
     limit: pageQuery.limit,
   })
   .transform(({ dir, ...rest }) => ({

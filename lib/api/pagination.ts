@@ -13,6 +13,14 @@ export const pageQuery = {
     .default(50),
 };
 
+/** `?offset=`: where a page of an offset-paged list (a table with page numbers and a total) starts. */
+export const offsetQuery = z.coerce
+  .number({ error: 'The offset must be a number.' })
+  .int('The offset must be a whole number.')
+  .min(0, 'The offset cannot be negative.')
+  .max(1_000_000, 'The offset can be at most 1000000.')
+  .default(0);
+
 export function afterCursor(cursor: number | undefined): WhereOptions {
   return cursor ? { id: { [Op.gt]: cursor } } : {};
 }

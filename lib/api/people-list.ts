@@ -15,7 +15,7 @@ import { memberJson, type MemberRow } from '@/lib/organisations/queries';
 import { Membership, User } from '@/models';
 import { enclosureCounts } from './enclosures';
 import { likeContains } from './like';
-import { pageQuery } from './pagination';
+import { offsetQuery, pageQuery } from './pagination';
 import { idSchema, roleSchema, textSchema } from './schemas';
 
 /**
@@ -33,12 +33,7 @@ const listFields = <C extends readonly [MemberSortColumn, ...MemberSortColumn[]]
     .optional(),
   sort: z.enum(columns, { error: `Sort by one of: ${columns.join(', ')}.` }).optional(),
   dir: z.enum(SORT_DIRECTIONS, { error: 'The direction must be asc or desc.' }).optional(),
-  offset: z.coerce
-    .number({ error: 'The offset must be a number.' })
-    .int('The offset must be a whole number.')
-    .min(0, 'The offset cannot be negative.')
-    .max(1_000_000, 'The offset can be at most 1000000.')
-    .default(0),
+  offset: offsetQuery,
   limit: pageQuery.limit,
 });
 
