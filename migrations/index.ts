@@ -19,6 +19,7 @@ import * as m0017 from './0017-starting-sheets-size-climbing';
 import * as m0018 from './0018-account-confirmation';
 import * as m0019 from './0019-customers-counter';
 import * as m0020 from './0020-lamp-curve-adoptions';
+import * as m0021 from './0021-lamp-outlook-status-counts';
 
 export type Migration = {
   name: string;
@@ -51,4 +52,5 @@ export const migrations: Migration[] = [
   { name: '0018-account-confirmation', ...m0018 },
   { name: '0019-customers-counter', ...m0019 },
   { name: '0020-lamp-curve-adoptions', ...m0020 },
+  { name: '0021-lamp-outlook-status-counts', ...m0021 },
 ];

@@ -1,7 +1,7 @@
 import { QueryTypes } from 'sequelize';
 import { describe, expect, it } from 'vitest';
 import * as lampsRoute from '@/app/api/lamps/route';
-import { lampListQuery, lampListSql } from '@/lib/api/lamp-list';
+import { lampCounts, lampListQuery, lampListSql } from '@/lib/api/lamp-list';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
 import { refreshStaleOutlooks } from '@/lib/lamp-log/outlook-store';
 import { summariseLive } from '@/lib/lamp-log/store';
@@ -91,6 +91,11 @@ describe('GET /api/lamps', () => {
     const w = await world();
     const all = await list(w.staff, w.org.id, '&limit=100');
     expect(all.total).toBe(6);
+    // The plain list's total comes from the status counts; the same lamps counted by the filtered
+    // views' own query agree with it.
+    const withRetired = await list(w.staff, w.org.id, '&retired=1');
+    const retired = await list(w.staff, w.org.id, '&status=retired');
+    expect(withRetired.total - retired.total).toBe(all.total);
     const statuses = new Set(all.items.map((l) => l.status));
     for (const status of statuses) {
       const page = await list(w.staff, w.org.id, `&status=${status}`);
@@ -215,5 +220,24 @@ describe('GET /api/lamps', () => {
       // Every join goes through a primary key.
       for (const r of rows.filter((x) => x.table !== 'o')) expect(r.type, JSON.stringify(r)).toBe('eq_ref');
     }
+    // The summary counts group the organisation's outlooks by status from an index alone: no table rows.
+    const logged: string[] = [];
+    const withLog = sequelize as unknown as { options: { logging: unknown } };
+    const before = withLog.options.logging;
+    withLog.options.logging = (line: string) => void logged.push(line.replace(/^Executing \([^)]*\): /, ''));
+    try {
+      expect((await lampCounts({ organisationId: other.id })).inUse).toBe(3000);
+    } finally {
+      withLog.options.logging = before;
+    }
+    const grouped = logged.find((q) => /GROUP BY status_rank/i.test(q));
+    expect(grouped, JSON.stringify(logged)).toBeDefined();
+    const [counted] = await sequelize.query<{ key: string | null; type: string; Extra: string | null }>(
+      `EXPLAIN ${grouped!}`,
+      { type: QueryTypes.SELECT },
+    );
+    expect(counted!.type).not.toBe('ALL');
+    expect(counted!.key).toBe('lamp_outlooks_org_status_as_of');
+    expect(counted!.Extra ?? '').toMatch(/Using index/);
   });
 });
