@@ -1,7 +1,6 @@
 import 'server-only';
 import { literal, Op, type OrderItem, type WhereOptions } from 'sequelize';
 import { z } from 'zod';
-import { getSequelize } from '@/lib/db';
 import {
   defaultPeopleDescending,
   KEEPER_SORT_COLUMNS,
@@ -100,7 +99,6 @@ function peopleSearch(q: string | undefined): WhereOptions {
 
 /** One page of an organisation's people. The caller has checked, with `can()`, that this user may. */
 export async function listPeople(query: PeopleListQuery) {
-  getSequelize();
   const { organisationId, role, q, sort, descending, offset, limit } = query;
   const { rows, count } = await Membership.findAndCountAll({
     where: { organisationId, ...(role ? { role } : {}), ...peopleSearch(q) },

@@ -8,7 +8,6 @@
 // an outlook holds). The rows are written by the app's own writer. tests/scale-org.test.ts checks that
 // every seeded row equals a fresh recompute.
 import { Op } from 'sequelize';
-import { getSequelize } from '@/lib/db';
 import { lampOutlook, type Outlook } from '@/lib/lamp-log/outlook';
 import { writeOutlooks } from '@/lib/lamp-log/outlook-store';
 import { lampFacts, loadFor, readingFacts, speciesForEnclosures, type Computed } from '@/lib/lamp-log/store';
@@ -39,7 +38,6 @@ export async function seedOutlooks(
   lampIds: readonly number[],
   today: string,
 ): Promise<{ stored: number; computed: number }> {
-  getSequelize();
   const memo = new Map<string, { outlook: Outlook; readingIds: number[] }>();
   let stored = 0;
   for (let i = 0; i < lampIds.length; i += BATCH) {
