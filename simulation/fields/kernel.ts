@@ -49,6 +49,13 @@ export class RowData {
   occ: Int32Array;
   qa: Float64Array;
   qb: Float64Array;
+  /**
+   * Inside (fa, fb) the barrier surely hides the whole lamp (a tube: lo ≤ s1 and hi ≥ s2; a bulb: lo < x <
+   * hi), with a margin inwards, so evalCell multiplies its transmissions without projecting its corners.
+   * Empty (fa ≥ fb) when there is no such range.
+   */
+  fa: Float64Array;
+  fb: Float64Array;
   vStart: Int32Array;
   vCount: Int32Array;
   A: Float64Array;
@@ -59,6 +66,8 @@ export class RowData {
     this.occ = new Int32Array(c);
     this.qa = new Float64Array(c);
     this.qb = new Float64Array(c);
+    this.fa = new Float64Array(c);
+    this.fb = new Float64Array(c);
     this.vStart = new Int32Array(c);
     this.vCount = new Int32Array(c);
     this.A = new Float64Array(c * MAX_CLIPPED);
@@ -140,6 +149,10 @@ export function prepareRow(
     if (n === 0) continue;
     let qa = Infinity;
     let qb = -Infinity;
+    // The whole lamp is hidden where lo ≤ s1 (Q.x ≥ min over corners of (s1 − a)/b) and hi ≥ s2
+    // (Q.x ≤ max of (s2 − a)/b); for a bulb (s1 = s2) these are the strict bounds of qa and qb's range.
+    let fa = Infinity;
+    let fb = -Infinity;
     const c = row.count;
     for (let v = 0; v < n; v++) {
       const kk = h / (s.cy[v]! - qy);
@@ -153,10 +166,15 @@ export function prepareRow(
         const la = (s2 - a) / b;
         if (ub > qb) qb = ub;
         if (la < qa) qa = la;
+        if (ub < fa) fa = ub;
+        if (la > fb) fb = la;
       } else {
         // Vertex on the lamp line: it projects onto itself wherever Q is.
         if (a >= s1) qb = Infinity;
         if (a <= s2) qa = -Infinity;
+        // Strict, so a bulb's strict test agrees (equality is left to the exact test).
+        if (a < s1) fa = -Infinity;
+        if (a > s2) fb = Infinity;
       }
     }
     if (!(qb >= qa)) continue;
@@ -165,6 +183,10 @@ export function prepareRow(
     row.occ[c] = k;
     row.qa[c] = qa - margin;
     row.qb[c] = qb + margin;
+    // Rounding of the exact test in evalCell is far below this margin, so inside it agrees.
+    const fMargin = 1e-9 * (1 + Math.abs(fa) + Math.abs(fb));
+    row.fa[c] = fa + fMargin;
+    row.fb[c] = fb - fMargin;
     row.vStart[c] = vOff;
     row.vCount[c] = n;
     row.act[c] = c;
@@ -202,6 +224,13 @@ export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): 
   for (let t = 0, nAct = row.nAct; t < nAct; t++) {
     const c = act[t]!;
     if (qx <= row.qa[c]! || qx >= row.qb[c]!) continue;
+    const k = row.occ[c]!;
+    if (qx > row.fa[c]! && qx < row.fb[c]!) {
+      gu *= lamp.tUv[k]!;
+      gi *= lamp.tIr[k]!;
+      if (gu === 0 && gi === 0) return;
+      continue;
+    }
     const v0 = row.vStart[c]!;
     const v1 = v0 + row.vCount[c]!;
     let lo = Infinity;
@@ -211,7 +240,6 @@ export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): 
       if (x < lo) lo = x;
       if (x > hi) hi = x;
     }
-    const k = row.occ[c]!;
     if (!tube) {
       if (lo < s1 && s1 < hi) {
         gu *= lamp.tUv[k]!;

@@ -8,7 +8,7 @@ import type { Design } from '../model/schema';
 import { lampUvbFactor } from '../model/resolve';
 import type { Occluder } from '../geometry/occluders';
 import { compileScene, type LampGeom, type Scene } from './scene';
-import { fillLamp, refillChanged, Workspace } from './workspace';
+import { addLamp, fillLamp, refillChanged, Workspace } from './workspace';
 import { probeScene, probeSceneByLamp, type LampSamples } from './probe';
 import { airTempC, HEAT_DEFAULTS, surfaceTempC } from './heat';
 import { DEFAULT_CELL_CM, gridSize, type FieldGrid, type ProbeResult, type SimOptions } from './types';
@@ -199,27 +199,25 @@ export class FieldSolver {
     this.stats.full = this.stats.partial = this.stats.cached = this.stats.cellsEvaluated = 0;
     const cells = nx * ny;
     const hc = opts.convection ?? HEAT_DEFAULTS.convection;
-    const uvb = new Float64Array(cells);
-    const uvi = new Float64Array(cells);
-    const ir = new Float64Array(cells);
-    const lu = new Float64Array(cells);
-    const li = new Float64Array(cells);
+    const { uvb, uvi, ir } = onceTotals(cells);
     for (const lamp of scene.lamps) {
-      if (this.stats.full > 0) {
-        lu.fill(0);
-        li.fill(0);
-      }
       this.stats.full++;
-      this.stats.cellsEvaluated += fillLamp(this.ws, lamp, scene.occluders, lu, li, nx, ny, cell);
       const f = lampUvbFactor(lamp.lamp, opts.addMonths ?? 0);
       const fu = lamp.uvI > 0 ? f : 0;
       const fi = lamp.uvI > 0 ? f * lamp.lamp.uviPerUvb : 0;
-      for (let c = 0; c < cells; c++) {
-        const v = lu[c]!;
-        uvb[c] = uvb[c]! + v * fu;
-        uvi[c] = uvi[c]! + v * fi;
-        ir[c] = ir[c]! + li[c]!;
-      }
+      this.stats.cellsEvaluated += addLamp(
+        this.ws,
+        lamp,
+        scene.occluders,
+        uvb,
+        uvi,
+        ir,
+        fu,
+        fi,
+        nx,
+        ny,
+        cell,
+      );
     }
     const tempC = new Float32Array(cells);
     for (let j = 0; j < ny; j++) {
@@ -235,8 +233,8 @@ export class FieldSolver {
       cellCm: cell,
       width,
       height,
-      uvb: new Float32Array(uvb),
-      uvi: new Float32Array(uvi),
+      uvb: new Float32Array(uvb.subarray(0, cells)),
+      uvi: new Float32Array(uvi.subarray(0, cells)),
       tempC,
     };
   }
@@ -337,4 +335,20 @@ interface Totals {
 
 function newTotals(key: string, cells: number): Totals {
   return { key, uvb: new Float64Array(cells), uvi: new Float64Array(cells), tempC: new Float64Array(cells) };
+}
+
+/**
+ * The one-off path's running totals, kept between calls (the computation is synchronous, so one set per
+ * thread serves every call) and zeroed for each: a full field then allocates only its results.
+ */
+let once: { uvb: Float64Array; uvi: Float64Array; ir: Float64Array } | null = null;
+
+function onceTotals(cells: number) {
+  if (!once || once.uvb.length < cells) {
+    once = { uvb: new Float64Array(cells), uvi: new Float64Array(cells), ir: new Float64Array(cells) };
+  }
+  once.uvb.fill(0, 0, cells);
+  once.uvi.fill(0, 0, cells);
+  once.ir.fill(0, 0, cells);
+  return once;
 }

@@ -14,7 +14,17 @@ export class Workspace {
   first = new Int32Array(1);
   last = new Int32Array(1);
   cuts = new Int32Array(4);
+  /** One row's values, filled by sweepRow. */
+  rowUv = new Float64Array(1);
+  rowIr = new Float64Array(1);
   private capacity = 0;
+
+  /** Make room for rows of nx cells. */
+  ensureRow(nx: number) {
+    if (this.rowUv.length >= nx) return;
+    this.rowUv = new Float64Array(nx);
+    this.rowIr = new Float64Array(nx);
+  }
 
   /** Make room for rows with up to n barriers. */
   ensure(n: number) {
@@ -40,8 +50,63 @@ export function fillLamp(
   ny: number,
   cell: number,
 ): number {
+  return sweepLamp(ws, lamp, occluders, nx, ny, cell, (base, i0, i1) => {
+    const ru = ws.rowUv;
+    const ri = ws.rowIr;
+    for (let i = i0; i <= i1; i++) {
+      uv[base + i] = ru[i]!;
+      ir[base + i] = ri[i]!;
+    }
+  });
+}
+
+/**
+ * Add a lamp's fields into running totals: UVB times fu, UV Index times fi, radiant flux as is. Cells the
+ * lamp cannot reach are left alone, which is what adding its zero would give, so the totals have the same
+ * bits as filling the lamp's own fields first and adding those (the cached path).
+ */
+export function addLamp(
+  ws: Workspace,
+  lamp: LampGeom,
+  occluders: Occluder[],
+  uvb: Float64Array,
+  uvi: Float64Array,
+  ir: Float64Array,
+  fu: number,
+  fi: number,
+  nx: number,
+  ny: number,
+  cell: number,
+): number {
+  return sweepLamp(ws, lamp, occluders, nx, ny, cell, (base, i0, i1) => {
+    const ru = ws.rowUv;
+    const ri = ws.rowIr;
+    for (let i = i0; i <= i1; i++) {
+      const c = base + i;
+      const v = ru[i]!;
+      uvb[c] = uvb[c]! + v * fu;
+      uvi[c] = uvi[c]! + v * fi;
+      ir[c] = ir[c]! + ri[i]!;
+    }
+  });
+}
+
+/**
+ * Evaluates every row a lamp can light into the workspace's row buffers and hands each row's cell range
+ * to `take(base, i0, i1)`; returns the number of cells evaluated.
+ */
+function sweepLamp(
+  ws: Workspace,
+  lamp: LampGeom,
+  occluders: Occluder[],
+  nx: number,
+  ny: number,
+  cell: number,
+  take: (base: number, i0: number, i1: number) => void,
+): number {
   const row = ws.row;
   const s = ws.scratch;
+  ws.ensureRow(nx);
   let evaluated = 0;
   for (let j = 0; j < ny; j++) {
     const qy = (j + 0.5) * cell;
@@ -55,32 +120,24 @@ export function fillLamp(
       i0 = Math.max(0, Math.floor((lamp.x - half) / cell - 0.5));
       i1 = Math.min(nx - 1, Math.ceil((lamp.x + half) / cell - 0.5));
     }
-    const base = j * nx;
-    sweepRow(ws, lamp, row, i0, i1, cell, (i) => {
-      uv[base + i] = s.uv;
-      ir[base + i] = s.ir;
-    });
-    evaluated += Math.max(0, i1 - i0 + 1);
+    if (i1 < i0) continue;
+    sweepRow(ws, lamp, row, i0, i1, cell);
+    take(j * nx, i0, i1);
+    evaluated += i1 - i0 + 1;
   }
   return evaluated;
 }
 
 /**
- * Evaluates cells i0..i1 of a prepared row in order, calling `store(i)` after each. Each barrier's range
+ * Evaluates cells i0..i1 of a prepared row in order into ws.rowUv and ws.rowIr. Each barrier's range
  * of Q.x is turned into a range of cells (one cell wider on each side, so rounding never drops a cell the
  * exact test in evalCell would keep); the row is cut where a range starts or ends, and each piece looks
  * only at the barriers whose ranges cover it. Same cells, same arithmetic per cell: the same bits.
  */
-function sweepRow(
-  ws: Workspace,
-  lamp: LampGeom,
-  row: RowData,
-  i0: number,
-  i1: number,
-  cell: number,
-  store: (i: number) => void,
-) {
+function sweepRow(ws: Workspace, lamp: LampGeom, row: RowData, i0: number, i1: number, cell: number) {
   const s = ws.scratch;
+  const ru = ws.rowUv;
+  const ri = ws.rowIr;
   const n = row.count;
   const first = ws.first;
   const last = ws.last;
@@ -109,7 +166,8 @@ function sweepRow(
     row.nAct = na;
     for (let i = from; i < to; i++) {
       evalCell(lamp, row, (i + 0.5) * cell, s);
-      store(i);
+      ru[i] = s.uv;
+      ri[i] = s.ir;
     }
   }
   row.nAct = n;
@@ -147,6 +205,7 @@ export function refillChanged(
   const row = ws.row;
   const probeRow = ws.row2;
   const s = ws.scratch;
+  ws.ensureRow(nx);
   const changedLamp = withTransmissions(lamp, changed);
   let evaluated = 0;
   for (let j = 0; j < ny; j++) {
@@ -167,11 +226,14 @@ export function refillChanged(
     for (const [a, b] of ranges) {
       const from = Math.max(a, next);
       if (from <= b) {
-        sweepRow(ws, lamp, row, from, b, cell, (i) => {
-          uv[base + i] = s.uv;
-          ir[base + i] = s.ir;
+        sweepRow(ws, lamp, row, from, b, cell);
+        const ru = ws.rowUv;
+        const ri = ws.rowIr;
+        for (let i = from; i <= b; i++) {
+          uv[base + i] = ru[i]!;
+          ir[base + i] = ri[i]!;
           dirty[base + i] = 1;
-        });
+        }
         evaluated += b - from + 1;
       }
       if (b + 1 > next) next = b + 1;
