@@ -46,6 +46,12 @@ export class RowData {
    */
   act: Int32Array;
   nAct = 0;
+  /**
+   * Transmissions of barriers the caller already found to hide the whole lamp at the next cells (and left
+   * out of act); 1 after prepareRow.
+   */
+  gu0 = 1;
+  gi0 = 1;
   occ: Int32Array;
   qa: Float64Array;
   qb: Float64Array;
@@ -127,6 +133,8 @@ export function prepareRow(
   row.h = h;
   row.count = 0;
   row.nAct = 0;
+  row.gu0 = 1;
+  row.gi0 = 1;
   if (!(h > 0)) return false;
   // In the plane (dz = 0) these are exactly the two-dimensional values, so such designs keep their bits.
   const dz2 = lamp.dz2;
@@ -184,7 +192,7 @@ export function prepareRow(
     row.qa[c] = qa - margin;
     row.qb[c] = qb + margin;
     // Rounding of the exact test in evalCell is far below this margin, so inside it agrees.
-    const fMargin = 1e-9 * (1 + Math.abs(fa) + Math.abs(fb));
+    const fMargin = 1e-9 * (1 + (fa > -Infinity ? Math.abs(fa) : 0) + (fb < Infinity ? Math.abs(fb) : 0));
     row.fa[c] = fa + fMargin;
     row.fb[c] = fb - fMargin;
     row.vStart[c] = vOff;
@@ -215,8 +223,8 @@ export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): 
   }
   const s1 = lamp.s1;
   const s2 = lamp.s2;
-  let gu = 1;
-  let gi = 1;
+  let gu = row.gu0;
+  let gi = row.gi0;
   let n = 0;
   const A = row.A;
   const B = row.B;

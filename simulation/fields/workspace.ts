@@ -13,7 +13,10 @@ export class Workspace {
   /** A row sweep's cell range per barrier, and where the row is cut (sweepRow). */
   first = new Int32Array(1);
   last = new Int32Array(1);
-  cuts = new Int32Array(4);
+  /** A row sweep's cells where each barrier surely hides the whole lamp (RowData.fa, fb). */
+  fullFirst = new Int32Array(1);
+  fullLast = new Int32Array(1);
+  cuts = new Int32Array(6);
   /** One row's values, filled by sweepRow. */
   rowUv = new Float64Array(1);
   rowIr = new Float64Array(1);
@@ -35,7 +38,9 @@ export class Workspace {
     this.scratch = new Scratch(this.capacity);
     this.first = new Int32Array(this.capacity);
     this.last = new Int32Array(this.capacity);
-    this.cuts = new Int32Array(2 * this.capacity + 2);
+    this.fullFirst = new Int32Array(this.capacity);
+    this.fullLast = new Int32Array(this.capacity);
+    this.cuts = new Int32Array(4 * this.capacity + 2);
   }
 }
 
@@ -129,10 +134,14 @@ function sweepLamp(
 }
 
 /**
- * Evaluates cells i0..i1 of a prepared row in order into ws.rowUv and ws.rowIr. Each barrier's range
- * of Q.x is turned into a range of cells (one cell wider on each side, so rounding never drops a cell the
- * exact test in evalCell would keep); the row is cut where a range starts or ends, and each piece looks
- * only at the barriers whose ranges cover it. Same cells, same arithmetic per cell: the same bits.
+ * Evaluates cells i0..i1 of a prepared row in order into ws.rowUv and ws.rowIr. Each barrier's range of
+ * Q.x is turned into a range of cells (one cell wider on each side, so rounding never drops a cell the
+ * exact test in evalCell would keep), and so is its range where it surely hides the whole lamp (found with
+ * evalCell's own test, cell by cell at its ends). The row is cut where any of these ranges starts or ends;
+ * in each piece the barriers hiding the whole lamp are multiplied in once (in barrier order, so a cell's
+ * product does not depend on where the row was cut) and evalCell looks only at the others whose ranges
+ * cover the piece. A cell's arithmetic depends only on the cell, never on the cuts: a partial refill gives
+ * the same bits as a full one.
  */
 function sweepRow(ws: Workspace, lamp: LampGeom, row: RowData, i0: number, i1: number, cell: number) {
   const s = ws.scratch;
@@ -141,6 +150,8 @@ function sweepRow(ws: Workspace, lamp: LampGeom, row: RowData, i0: number, i1: n
   const n = row.count;
   const first = ws.first;
   const last = ws.last;
+  const fFirst = ws.fullFirst;
+  const fLast = ws.fullLast;
   const cuts = ws.cuts;
   let m = 0;
   cuts[m++] = i0;
@@ -148,22 +159,67 @@ function sweepRow(ws: Workspace, lamp: LampGeom, row: RowData, i0: number, i1: n
   for (let c = 0; c < n; c++) {
     const a = Math.floor(row.qa[c]! / cell - 0.5);
     const b = Math.ceil(row.qb[c]! / cell - 0.5);
-    first[c] = a < i0 ? i0 : a > i1 + 1 ? i1 + 1 : a;
-    last[c] = b > i1 ? i1 : b < i0 - 1 ? i0 - 1 : b;
-    if (first[c]! <= last[c]!) {
-      cuts[m++] = first[c]!;
-      cuts[m++] = last[c]! + 1;
+    const f = a < i0 ? i0 : a > i1 + 1 ? i1 + 1 : a;
+    const l = b > i1 ? i1 : b < i0 - 1 ? i0 - 1 : b;
+    first[c] = f;
+    last[c] = l;
+    if (f > l) {
+      fFirst[c] = 1;
+      fLast[c] = 0;
+      continue;
+    }
+    cuts[m++] = f;
+    cuts[m++] = l + 1;
+    // The cells with fa < Q.x < fb, by the test evalCell makes (a rounded guess, then corrected).
+    const fa = row.fa[c]!;
+    const fb = row.fb[c]!;
+    if (!(fa < fb)) {
+      fFirst[c] = 1;
+      fLast[c] = 0;
+      continue;
+    }
+    const ga = Math.floor(fa / cell - 0.5);
+    let g0 = ga < f ? f : ga > l + 1 ? l + 1 : ga;
+    while (g0 > f && (g0 - 0.5) * cell > fa) g0--;
+    while (g0 <= l && !((g0 + 0.5) * cell > fa)) g0++;
+    const gb = Math.ceil(fb / cell - 0.5);
+    let g1 = gb > l ? l : gb < g0 - 1 ? g0 - 1 : gb;
+    while (g1 < l && (g1 + 1.5) * cell < fb) g1++;
+    while (g1 >= g0 && !((g1 + 0.5) * cell < fb)) g1--;
+    fFirst[c] = g0;
+    fLast[c] = g1;
+    if (g0 <= g1) {
+      cuts[m++] = g0;
+      cuts[m++] = g1 + 1;
     }
   }
   sortPrefix(cuts, m);
   const act = row.act;
+  const tUv = lamp.tUv;
+  const tIr = lamp.tIr;
   for (let k = 0; k + 1 < m; k++) {
     const from = cuts[k]!;
     const to = cuts[k + 1]!;
     if (to <= from) continue;
     let na = 0;
-    for (let c = 0; c < n; c++) if (first[c]! <= from && last[c]! >= to - 1) act[na++] = c;
+    let gu = 1;
+    let gi = 1;
+    for (let c = 0; c < n; c++) {
+      if (fFirst[c]! <= from && fLast[c]! >= to - 1) {
+        const o = row.occ[c]!;
+        gu *= tUv[o]!;
+        gi *= tIr[o]!;
+      } else if (first[c]! <= from && last[c]! >= to - 1) act[na++] = c;
+    }
+    if (gu === 0 && gi === 0) {
+      // Fully hidden: what evalCell returns once its product reaches zero.
+      ru.fill(0, from, to);
+      ri.fill(0, from, to);
+      continue;
+    }
     row.nAct = na;
+    row.gu0 = gu;
+    row.gi0 = gi;
     for (let i = from; i < to; i++) {
       evalCell(lamp, row, (i + 0.5) * cell, s);
       ru[i] = s.uv;
@@ -171,6 +227,8 @@ function sweepRow(ws: Workspace, lamp: LampGeom, row: RowData, i0: number, i1: n
     }
   }
   row.nAct = n;
+  row.gu0 = 1;
+  row.gi0 = 1;
   for (let c = 0; c < n; c++) act[c] = c;
 }
 
