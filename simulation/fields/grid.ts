@@ -2,9 +2,15 @@ import type { Design } from '../model/schema';
 import { FieldSolver } from './solver';
 import type { FieldGrid, ProbeResult, SimOptions } from './types';
 
+/**
+ * One solver without a cache serves every one-off computation of this thread: it keeps nothing between
+ * calls but its scratch space, and a computation runs to its end before the next starts.
+ */
+const oneOff = new FieldSolver(false);
+
 /** UVB, UV Index and surface temperature over the grid (a fresh computation, no cache). */
 export function computeFields(design: Design, opts?: SimOptions): FieldGrid {
-  return new FieldSolver(false).compute(design, opts);
+  return oneOff.compute(design, opts);
 }
 
 /** The three values at exact points (evaluated there, not interpolated from a grid). */

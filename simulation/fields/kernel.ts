@@ -287,6 +287,21 @@ export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): 
     s.ir = lamp.irI * f * gi;
     return;
   }
+  if (n === 1) {
+    // The most common partial shadow: one hidden piece [lo, hi] inside [s1, s2], whose ends may be the
+    // tube's own (then their G is the tube end's).
+    const lo = s.lo[0]!;
+    const hi = s.hi[0]!;
+    const g1 = G(s1 - qx, d);
+    const g2 = G(s2 - qx, d);
+    const gLo = lo > s1 ? G(lo - qx, d) : g1;
+    const gHi = hi < s2 ? G(hi - qx, d) : g2;
+    const open = gLo - g1 + (g2 - gHi);
+    const hidden = gHi - gLo;
+    s.uv = lamp.uvI * (open + s.tu[0]! * hidden) * scale * gu;
+    s.ir = lamp.irI * (open + s.ti[0]! * hidden) * scale * gi;
+    return;
+  }
   // Sweep the visible pieces: breakpoints are the tube ends and every interval end.
   const bp = s.bp;
   let m = 0;

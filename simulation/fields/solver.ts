@@ -2,7 +2,8 @@
  * Field solver with a per-lamp cache. Each lamp's unaged UVB and radiant fields are kept; when the next
  * design differs only in some barriers, a lamp's cells are recomputed only where an old or new version of
  * a changed barrier could shade that lamp (its shadow interval meets the lamp on that row). Results are
- * identical to a full computation; `computeFields` uses a fresh solver each call.
+ * identical to a full computation; `computeFields` uses one without a cache, which keeps nothing between
+ * calls but scratch space.
  */
 import type { Design } from '../model/schema';
 import { lampUvbFactor } from '../model/resolve';
