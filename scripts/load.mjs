@@ -25,7 +25,8 @@ import { loadEnv } from './lib/env.mjs';
 
 const DEMO_STAFF = { email: 'idris.penhallow@example.com', password: 'demo-staff-pass' };
 
-// A design like the one in the product brief: what a save really carries.
+// A typical desert set-up (a UVB tube and a heat lamp under a mesh lid, a branch, a ledge, a hide): a
+// save the size people really make, so the load is what a save really carries.
 const DESIGN = {
   format: 'baskwell.design',
   version: 2,

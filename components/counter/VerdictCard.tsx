@@ -1,5 +1,5 @@
 import type { CounterAnswerDto } from '@/lib/counter/queries';
-import { formatLength, type LengthUnit } from '@/components/ui/units';
+import { formatLengthRounded, type LengthUnit } from '@/shared/units';
 
 const TONE: Record<string, string> = {
   keep: 'border-moss-300 bg-moss-50 text-moss-900',
@@ -65,7 +65,7 @@ export function VerdictCard({
             <dt className="font-medium">At home today</dt>
             <dd>
               about {value(v.basking.valueNow, v.basking.unit)} at the basking spot,{' '}
-              {formatLength(v.basking.distanceCm, unit)} {unit} below the lamp; the need is{' '}
+              {formatLengthRounded(v.basking.distanceCm, unit)} below the lamp; the need is{' '}
               {v.basking.needLabel}
             </dd>
           </>

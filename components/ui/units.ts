@@ -1,24 +1,10 @@
 'use client';
 
 import { useCallback, useSyncExternalStore } from 'react';
-import type { TempUnit } from '@/shared/units';
+import { LENGTH_UNITS, TEMP_UNITS, type LengthUnit, type TempUnit } from '@/shared/units';
 
-/** Lengths are stored in centimetres; people may read them in inches. The choice is kept per browser. */
-export type LengthUnit = 'cm' | 'in';
-export type { TempUnit };
-const CM_PER_IN = 2.54;
-
-export function formatLength(cm: number, unit: LengthUnit): string {
-  const v = unit === 'cm' ? cm : cm / CM_PER_IN;
-  return `${Number(v.toFixed(unit === 'cm' ? 0 : 1))}`;
-}
-
-export function formatSize(w: number, h: number, d: number, unit: LengthUnit): string {
-  return `${formatLength(w, unit)} × ${formatLength(h, unit)} × ${formatLength(d, unit)} ${unit}`;
-}
-
-export const toCm = (value: number, unit: LengthUnit) => (unit === 'cm' ? value : value * CM_PER_IN);
-export const fromCm = (cm: number, unit: LengthUnit) => (unit === 'cm' ? cm : cm / CM_PER_IN);
+// The page's choice of units, kept per browser. Converting and formatting is shared/units.ts's, the one
+// units module of both sides; this file only remembers which unit a person reads.
 
 /**
  * A unit choice kept per browser (localStorage) and shared live by every component on the page and by
@@ -45,9 +31,6 @@ function storedChoice<T extends string>(key: string, values: readonly [T, T]) {
     return [value, set];
   };
 }
-
-export const LENGTH_UNITS = ['cm', 'in'] as const satisfies readonly [LengthUnit, LengthUnit];
-export const TEMP_UNITS = ['C', 'F'] as const satisfies readonly [TempUnit, TempUnit];
 
 /** Centimetres (default) or inches for every size on the page. */
 export const useLengthUnit = storedChoice<LengthUnit>('baskwell.lengthUnit', LENGTH_UNITS);
