@@ -4,7 +4,7 @@ import { lampListQuery, listLamps } from '@/lib/api/lamp-list';
 import { todayIso } from '@/lib/lamp-log/dates';
 import { computeOutlooks, outlookJson } from '@/lib/lamp-log/store';
 import { readStoredDesign } from '@/lib/variants/stored-design';
-import { Lamp, LampOutlook, Variant } from '@/models';
+import { Lamp, LampOutlook, User, Variant } from '@/models';
 import {
   addToOrganisation,
   createScaleOrganisation,
@@ -44,6 +44,8 @@ describe('the scale benchmark’s organisation', () => {
     const org = await createScaleOrganisation('scale test');
     const added = await addToOrganisation(testDb(), org, size);
     expect(added).toMatchObject({ ...size, variants: 6, keepers: 2, outlooks: 40 });
+    // The benchmark signs in as the owner: sign-in refuses an address never confirmed.
+    expect((await User.findOne({ where: { email: org.ownerEmail } }))?.emailConfirmedAt).toBeInstanceOf(Date);
     expect(await counts(org.organisationId)).toEqual({ ...size, variants: 6, keepers: 2, outlooks: 40 });
 
     // Every variant is a design the app can read, and the lamp log lists the lamps from stored outlooks.
