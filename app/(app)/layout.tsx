@@ -28,6 +28,9 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
           { href: '/customers', label: 'Customers' },
         ]
       : []),
+    ...(can(user, 'read', { kind: 'shop-figures', organisationId: orgId })
+      ? [{ href: '/counter/dashboard', label: 'Counter figures' }]
+      : []),
     { href: '/species', label: 'Species' },
     { href: '/lamp-catalogue', label: 'Lamp catalogue' },
     ...(can(user, 'read', { kind: 'member', organisationId: orgId })

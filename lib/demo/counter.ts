@@ -9,7 +9,9 @@ import { DEMO_SHOP } from './scenario';
 
 /**
  * Invented customers of the demo shop and the lamps it tested for them at the counter over the last months,
- * so the customer list and the counter's lamp pages have something to show on first start. Every name,
+ * so the customer list, the counter's lamp pages and its figures have something to show on first start.
+ * The high-output T5 tubes are tested often enough (seven lamps, over a year of lamp age) that the lamp
+ * type's page shows the shop's own measured curve. Every name,
  * address and reading here is invented example data (the shop is marked as such). Each verdict is the one
  * the counter computes for the readings up to that day. Seeded only while the shop has no customers.
  */
@@ -67,6 +69,13 @@ export const DEMO_CUSTOMERS: readonly DemoCustomer[] = [
         startedDaysAgo: 200,
         hoursPerDay: 12,
         tests: [T(120, 21), T(40, 18)],
+      },
+      {
+        presetKey: 't5-high',
+        label: 'Spare basking tube',
+        startedDaysAgo: 400,
+        hoursPerDay: 12,
+        tests: [T(300, 35), T(180, 28), T(60, 22)],
       },
     ],
   },
@@ -127,6 +136,13 @@ export const DEMO_CUSTOMERS: readonly DemoCustomer[] = [
     consentDaysAgo: null,
     lamps: [
       { presetKey: 't5-low', label: 'Frog tube', startedDaysAgo: 180, hoursPerDay: 11, tests: [T(45, 4.4)] },
+      {
+        presetKey: 't5-high',
+        label: 'Bearded dragon tube',
+        startedDaysAgo: 260,
+        hoursPerDay: 12,
+        tests: [T(200, 38), T(110, 32), T(15, 26)],
+      },
     ],
   },
   {
@@ -156,6 +172,13 @@ export const DEMO_CUSTOMERS: readonly DemoCustomer[] = [
         startedDaysAgo: 260,
         hoursPerDay: 12,
         tests: [T(35, 9)],
+      },
+      {
+        presetKey: 't5-high',
+        label: 'Vivarium tube',
+        startedDaysAgo: 350,
+        hoursPerDay: 10,
+        tests: [T(250, 36), T(90, 28)],
       },
     ],
   },

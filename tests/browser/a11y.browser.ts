@@ -171,6 +171,7 @@ const targets: Target[] = [
   staffSees('customer-edit', '/customers/[id]/edit', () => `/customers/${ids.customerId}/edit`),
   staffSees('customer-new', '/customers/new', () => '/customers/new'),
   staffSees('counter', '/counter', () => '/counter'),
+  staffSees('counter-figures', '/counter/dashboard', () => '/counter/dashboard'),
   staffSees('counter-lamp', '/counter/lamps/[id]', () => `/counter/lamps/${ids.counterLampId}`),
   staffSees('account', '/account', () => '/account'),
   staffSees('not-found', '/enclosures/[id]', () => '/enclosures/999999999'),

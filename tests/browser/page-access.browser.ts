@@ -194,7 +194,7 @@ describe('pages check access themselves', () => {
     const keeper = DEMO_SHOP.people.find((p) => p.role === 'keeper')!;
     const cookie = await signInCookie(keeper.email, DEMO_PASSWORDS.keeper);
     const statuses = await Promise.all(
-      ['/keepers', '/members', '/customers', '/customers/new', '/counter'].map(
+      ['/keepers', '/members', '/customers', '/customers/new', '/counter', '/counter/dashboard'].map(
         async (p) => `${p} → ${(await page(p, cookie)).status}`,
       ),
     );
@@ -204,6 +204,7 @@ describe('pages check access themselves', () => {
       '/customers → 404',
       '/customers/new → 404',
       '/counter → 404',
+      '/counter/dashboard → 404',
     ]);
   });
 });

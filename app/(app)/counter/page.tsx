@@ -1,7 +1,9 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { CounterScreen } from '@/components/counter/CounterScreen';
+import Link from '@/components/ui/Link';
 import { PageHeader } from '@/components/ui/PageHeader';
+import { button } from '@/components/ui/styles';
 import { parseId } from '@/lib/api/schemas';
 import { counterChoices, counterLampView } from '@/lib/counter/queries';
 import { counterLampForPage, customerForPage, mayUseCounter } from '@/lib/customers/access';
@@ -30,6 +32,11 @@ export default async function CounterPage({ searchParams }: Props) {
       <PageHeader
         title="Counter test"
         lead="Measure a customer's lamp and tell them what it means: keep it, test it again, or replace it."
+        actions={
+          <Link href="/counter/dashboard" className={button.secondary}>
+            Counter figures
+          </Link>
+        }
       />
       <CounterScreen
         options={{

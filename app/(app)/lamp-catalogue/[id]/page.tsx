@@ -7,7 +7,11 @@ import { LampTypeView } from '@/components/catalogue/LampTypeView';
 import { ZoneDistancesTable } from '@/components/catalogue/ZoneDistancesTable';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { button, card } from '@/components/ui/styles';
+import { PopulationSection } from '@/components/population/PopulationSection';
+import { ageingSource } from '@/lib/lamp-log/decay';
+import { populationPage } from '@/lib/population/queries';
 import { requireUser } from '@/lib/session';
+import { viewerZone } from '@/lib/time/viewer-zone';
 import { loadLampType } from '../load';
 
 type Props = { params: Promise<{ id: string }> };
@@ -22,6 +26,7 @@ export default async function LampTypePage({ params }: Props) {
   const { id } = await params;
   const user = await requireUser(`/lamp-catalogue/${id}`);
   const { lampType, mayEdit } = await loadLampType(user, id);
+  const population = await populationPage(user, lampType.id);
   return (
     <>
       <Breadcrumbs trail={[{ href: '/lamp-catalogue', label: 'Lamp catalogue' }]} />
@@ -47,6 +52,24 @@ export default async function LampTypePage({ params }: Props) {
         <div className="space-y-6">
           <LampTypeView lampType={lampType} />
           <ZoneDistancesTable lampType={lampType} />
+          {population ? (
+            <PopulationSection
+              typeName={lampType.name}
+              lampTypeId={lampType.id}
+              view={population.view}
+              adopted={lampType.adoptedCurve ?? null}
+              history={population.history}
+              mayAdopt={population.mayAdopt}
+              example={population.example}
+              zone={await viewerZone()}
+            />
+          ) : (
+            lampType.uvbAt30 > 0 && (
+              <p className={`${card} p-4 text-body text-basalt-800`} data-testid="curve-in-force">
+                {ageingSource(lampType)}
+              </p>
+            )
+          )}
           {lampType.notes && (
             <section className={`${card} p-5`}>
               <h2 className="mb-2 text-lead font-semibold text-basalt-900">Notes</h2>
