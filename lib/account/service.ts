@@ -1,7 +1,8 @@
 import 'server-only';
+import { DomainError, invalid } from '@/lib/errors';
 import type { Transaction } from 'sequelize';
 import { z } from 'zod';
-import { ApiError, badRequest } from '@/lib/api/errors';
+
 import { SIGN_IN_LIMITS, accountWait } from '@/lib/auth/credentials';
 import { hashPassword, newPasswordSchema, verifyPassword } from '@/lib/auth/password';
 import { getSequelize } from '@/lib/db';
@@ -33,28 +34,25 @@ export async function endAllSessions(userId: number, transaction?: Transaction):
 export async function changePassword(userId: number, input: ChangePasswordInput): Promise<void> {
   const sequelize = getSequelize();
   const user = await User.scope('withPassword').findByPk(userId);
-  if (!user) throw new ApiError(404, 'not_found', 'That account was not found.');
+  if (!user) throw new DomainError('not_found', 'That account was not found.');
   // The same growing per-account delay as sign-in: a stolen session cannot guess the password quickly,
   // and cannot lock its owner out either (the waits are capped).
   const key = limitKey('account', user.email);
   const wait = await accountWait({ account: key });
   if (wait > 0) {
     const seconds = Math.max(1, Math.ceil(wait / 1000));
-    throw new ApiError(
-      429,
+    throw new DomainError(
       'rate_limited',
       `Too many wrong passwords. Wait ${seconds} ${seconds === 1 ? 'second' : 'seconds'}, then try again.`,
-      undefined,
-      undefined,
-      { 'Retry-After': String(seconds) },
+      { retryAfterS: seconds },
     );
   }
   if (!(await verifyPassword(input.currentPassword, user.passwordHash))) {
     await countAttempt([key], SIGN_IN_LIMITS.counterMs);
-    throw badRequest('currentPassword', 'That is not your current password.');
+    throw invalid('currentPassword', 'That is not your current password.');
   }
   if (input.newPassword === input.currentPassword) {
-    throw badRequest('newPassword', 'Choose a password different from the current one.');
+    throw invalid('newPassword', 'Choose a password different from the current one.');
   }
   const passwordHash = await hashPassword(input.newPassword);
   await sequelize.transaction(async (transaction) => {

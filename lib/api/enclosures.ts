@@ -3,7 +3,7 @@ import { col, fn } from 'sequelize';
 import { z } from 'zod';
 import { ENCLOSURE_MAX_CM, ENCLOSURE_MIN_CM } from '@/shared/enclosure-size';
 import { Enclosure, Membership, User } from '@/models';
-import { badRequest, notFound } from './errors';
+import { invalid, notFound } from '@/lib/errors';
 import { idSchema, textSchema } from './schemas';
 
 /** Enclosure fields as the API accepts them. Sizes are inside dimensions in centimetres. */
@@ -90,7 +90,7 @@ export async function assertKeeperInOrganisation(organisationId: number, keeperI
     where: { organisationId, userId: keeperId },
     attributes: ['id'],
   });
-  if (!member) throw badRequest('keeperId', 'That keeper is not a member of this organisation.');
+  if (!member) throw invalid('keeperId', 'That keeper is not a member of this organisation.');
 }
 
 export type EnclosureWithKeeper = Enclosure & { keeper?: User | null };

@@ -2,6 +2,7 @@ import 'server-only';
 import { ConnectionError, TimeoutError, UniqueConstraintError } from 'sequelize';
 import type { Logger } from 'pino';
 import { ZodError } from 'zod';
+import { DomainError, type DomainErrorKind } from '@/lib/errors';
 import { logger } from '@/lib/log';
 
 /**
@@ -100,10 +101,37 @@ export function isDatabaseUnavailable(error: unknown): boolean {
   return false;
 }
 
+/** The HTTP status of each kind of domain error: the one place a domain failure meets HTTP. */
+const STATUS_OF: Record<DomainErrorKind, number> = {
+  invalid: 400,
+  forbidden: 403,
+  not_found: 404,
+  conflict: 409,
+  gone: 410,
+  too_large: 413,
+  unsupported: 415,
+  beyond_limit: 422,
+  rate_limited: 429,
+  cancelled: 499,
+  unavailable: 503,
+};
+
+export function fromDomain(e: DomainError): ApiError {
+  return new ApiError(
+    STATUS_OF[e.kind],
+    e.code,
+    e.message,
+    e.field,
+    e.issues,
+    e.retryAfterS === undefined ? undefined : { 'Retry-After': String(e.retryAfterS) },
+  );
+}
+
 /** Turns anything thrown into a safe JSON response, logging what the client must not see. */
 export function errorResponse(error: unknown, context = 'request', log: Logger = logger()): Response {
   let apiError: ApiError;
   if (error instanceof ApiError) apiError = error;
+  else if (error instanceof DomainError) apiError = fromDomain(error);
   else if (error instanceof ZodError) apiError = fromZod(error);
   else if (isDatabaseUnavailable(error)) {
     log.error({ context, err: error }, 'database unavailable');

@@ -2,8 +2,7 @@ import type { Logger } from 'pino';
 import type { ZodType, z } from 'zod';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { requestIdOf, requestLogger } from '@/lib/log';
-import { can, type Action, type Resource } from '@/lib/permissions';
-import { ApiError, errorResponse, forbidden, fromZod, notFound, unauthenticated } from './errors';
+import { ApiError, errorResponse, fromZod, unauthenticated } from './errors';
 import { assertNotFormBody, assertSameOrigin, isStateChanging, readJsonBody } from './request';
 import { sessionUser } from './session';
 
@@ -98,15 +97,5 @@ export function json(data: unknown, status = 200): Response {
 
 export const created = (data: unknown) => json(data, 201);
 
-/**
- * "May they": throws unless `can` allows. Someone with no right to even see the thing gets 404, so
- * the existence of another organisation's (or another keeper's) things is never revealed; someone who
- * may see it but not change it gets 403.
- */
-export function allow(user: CurrentUser, action: Action, resource: Resource, what = 'That'): void {
-  if (can(user, action, resource)) return;
-  if (action !== 'read' && can(user, 'read', resource)) throw forbidden();
-  throw notFound(what);
-}
-
+export { allow } from '@/lib/access';
 export { ApiError };

@@ -1,6 +1,7 @@
 import 'server-only';
+import { DomainError, invalid } from '@/lib/errors';
 import { z } from 'zod';
-import { ApiError, badRequest } from '@/lib/api/errors';
+
 import { personNameSchema } from '@/lib/api/schemas';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { getSequelize } from '@/lib/db';
@@ -32,38 +33,40 @@ export async function acceptInvitation(
       lock: transaction.LOCK.UPDATE,
       transaction,
     });
-    if (!invitation) throw new ApiError(404, 'not_found', 'This invitation link is not valid.');
+    if (!invitation) throw new DomainError('not_found', 'This invitation link is not valid.');
     const state = invitationState(invitation);
     if (state !== 'pending') {
       const why = { accepted: 'has already been used', revoked: 'was withdrawn', expired: 'has expired' }[
         state
       ];
-      throw new ApiError(410, `invitation_${state}`, `This invitation ${why}. Ask for a new one.`);
+      throw new DomainError('gone', `This invitation ${why}. Ask for a new one.`, {
+        code: `invitation_${state}`,
+      });
     }
     let userId: number;
     let accountCreated = false;
     if (user) {
       if (user.email !== invitation.email) {
-        throw new ApiError(
-          403,
-          'wrong_account',
+        throw new DomainError(
+          'forbidden',
           `This invitation is for ${invitation.email}, but you are signed in as ${user.email}. Sign out and open the link again.`,
+          { code: 'wrong_account' },
         );
       }
       userId = user.id;
     } else {
       const existing = await User.findOne({ where: { email: invitation.email }, transaction });
       if (existing?.emailConfirmedAt) {
-        throw new ApiError(
-          409,
-          'account_exists',
+        throw new DomainError(
+          'conflict',
           `${invitation.email} already has a Baskwell account. Sign in, then open the link again.`,
+          { code: 'account_exists' },
         );
       }
-      if (!body.name) throw badRequest('name', 'Enter your name.');
+      if (!body.name) throw invalid('name', 'Enter your name.');
       const password = newPasswordSchema.safeParse(body.password ?? '');
       if (!password.success)
-        throw badRequest('password', password.error.issues[0]?.message ?? 'Invalid password.');
+        throw invalid('password', password.error.issues[0]?.message ?? 'Invalid password.');
       // The invitation came by e-mail to this address: accepting it proves the address. An account
       // waiting for its sign-up confirmation was never usable and proved nothing, so the invited person's
       // name and password replace the ones it was created with.

@@ -1,8 +1,9 @@
 import 'server-only';
+import { DomainError } from '@/lib/errors';
 import { createHash, randomBytes } from 'node:crypto';
 import { Op, type Transaction } from 'sequelize';
 import { z } from 'zod';
-import { ApiError } from '@/lib/api/errors';
+
 import { config } from '@/lib/config';
 import { checkLimits, countAttempt, limitKey } from '@/lib/rate-limit';
 import { AccountLink, User, type LinkPurpose } from '@/models';
@@ -64,7 +65,9 @@ export async function useLink(link: AccountLink, now: Date, transaction: Transac
 }
 
 export const expiredLink = () =>
-  new ApiError(404, 'not_found', 'This link has expired or was already used. Ask for a new one.', 'token');
+  new DomainError('not_found', 'This link has expired or was already used. Ask for a new one.', {
+    field: 'token',
+  });
 
 /**
  * The rate limits of "e-mail me a link" requests: per client address (429, which says nothing about any
@@ -81,13 +84,10 @@ export async function limitedLinkRequest(
   const verdict = await checkLimits([{ key: addressKey, limit: limits.perAddress }], limits.windowMs);
   if (!verdict.allowed) {
     const minutes = Math.max(1, Math.ceil(verdict.retryAfterMs / 60_000));
-    throw new ApiError(
-      429,
+    throw new DomainError(
       'rate_limited',
       `Too many requests from this address. Try again in ${minutes} ${minutes === 1 ? 'minute' : 'minutes'}.`,
-      undefined,
-      undefined,
-      { 'Retry-After': String(minutes * 60) },
+      { retryAfterS: minutes * 60 },
     );
   }
   const accountKey = limitKey(`${kind}-account`, email);

@@ -1,9 +1,10 @@
 import 'server-only';
+import { DomainError, conflict, notFound } from '@/lib/errors';
 import { createHash, randomBytes } from 'node:crypto';
 import { Op } from 'sequelize';
 import { config } from '@/lib/config';
 import { sendMail } from '@/lib/mail';
-import { ApiError, conflict, notFound } from '@/lib/api/errors';
+
 import { afterCursor } from '@/lib/api/pagination';
 import { allow } from '@/lib/api/route';
 import type { CurrentUser } from './session-user';
@@ -44,7 +45,7 @@ export async function inviteByEmail(input: {
   invitedBy: { id: number; name: string };
 }): Promise<Invitation> {
   const organisation = await Organisation.findByPk(input.organisationId);
-  if (!organisation) throw new ApiError(404, 'not_found', 'That organisation was not found.');
+  if (!organisation) throw new DomainError('not_found', 'That organisation was not found.');
   const existing = await User.findOne({ where: { email: input.email }, attributes: ['id'] });
   if (existing) {
     const member = await Membership.findOne({
@@ -94,13 +95,10 @@ export async function inviteByEmail(input: {
     // Without the e-mail the invitation is useless (only the recipient can learn the token): undo it.
     await invitation.destroy();
     logger().error({ err: error, invitationId: invitation.id }, 'invitation e-mail could not be sent');
-    throw new ApiError(
-      503,
-      'mail_unavailable',
+    throw new DomainError(
+      'unavailable',
       'The invitation e-mail could not be sent, so no invitation was made. Try again in a minute.',
-      undefined,
-      undefined,
-      { 'Retry-After': '30' },
+      { code: 'mail_unavailable', retryAfterS: 30 },
     );
   }
   return invitation;

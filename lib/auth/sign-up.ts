@@ -1,7 +1,8 @@
 import 'server-only';
+import { DomainError } from '@/lib/errors';
 import { UniqueConstraintError, type Transaction } from 'sequelize';
 import { z } from 'zod';
-import { ApiError } from '@/lib/api/errors';
+
 import { emailSchema, organisationNameSchema, personNameSchema } from '@/lib/api/schemas';
 import { config } from '@/lib/config';
 import { getSequelize } from '@/lib/db';
@@ -76,15 +77,10 @@ export async function signUp(input: z.output<typeof signUpBody>, address: string
   const verdict = await checkLimits([{ key, limit: SIGN_UP_LIMIT.perAddress }], SIGN_UP_LIMIT.windowMs);
   if (!verdict.allowed) {
     const minutes = Math.max(1, Math.ceil(verdict.retryAfterMs / 60_000));
-    throw new ApiError(
-      429,
+    throw new DomainError(
       'rate_limited',
       `Too many new accounts from this address. Try again in ${minutes} minutes.`,
-      undefined,
-      undefined,
-      {
-        'Retry-After': String(minutes * 60),
-      },
+      { retryAfterS: minutes * 60 },
     );
   }
   await countAttempt([key], SIGN_UP_LIMIT.windowMs);

@@ -1,5 +1,6 @@
 import 'server-only';
-import { badRequest } from '@/lib/api';
+import { invalid } from '@/lib/errors';
+
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { customerFor } from '@/lib/customers/access';
 import { getSequelize } from '@/lib/db';
@@ -26,7 +27,7 @@ export async function saveTest(
       ? await customerFor(user, input.customer.id, 'update')
       : null;
   if (existingCustomer && existingCustomer.organisationId !== input.organisationId) {
-    throw badRequest('customer.id', 'That customer belongs to another organisation.');
+    throw invalid('customer.id', 'That customer belongs to another organisation.');
   }
   return getSequelize().transaction(async (transaction) => {
     let customerId = resolved.existing?.customerId ?? existingCustomer?.id ?? null;

@@ -1,12 +1,12 @@
 import 'server-only';
-import { badRequest } from '@/lib/api';
+import { invalid } from '@/lib/errors';
+
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { counterLampFor } from '@/lib/customers/access';
 import { todayIso } from '@/lib/lamp-log/dates';
 import type { ReadingFacts } from '@/lib/lamp-log/outlook';
 import { lampFacts, needOfSheet, readingFacts } from '@/lib/lamp-log/store';
 import { allLampTypes, toDto as lampTypeDto } from '@/lib/lamp-types/store';
-import { ensureStartingCatalogue } from '@/lib/species/seed';
 import { allSheets } from '@/lib/species/store';
 import { CounterLamp, CounterReading, Customer, LampType, SpeciesSheet } from '@/models';
 import { throughShare } from '@/shared/reading-setup';
@@ -60,7 +60,7 @@ const keptColumns = (l: CounterLamp): ReturnType<typeof lampColumns> => ({
 /** The reading's columns: stored in cm, with the share of what lay between (required for a screen). */
 export function readingColumns(r: CounterReadingInput, lidShare: number | null, takenAt: Date) {
   const share = throughShare(lidShare, r.through, r.throughTransmission);
-  if (!share.ok) throw badRequest('reading.throughTransmission', share.message);
+  if (!share.ok) throw invalid('reading.throughTransmission', share.message);
   return {
     takenAt,
     distanceCm: round1(displayToCm(r.distance, r.distanceUnit)),
@@ -91,7 +91,7 @@ export async function resolveTest(user: CurrentUser, input: AssessInput, now: Da
   const today = todayIso(now);
   const existing = input.counterLampId ? await counterLampFor(user, input.counterLampId, 'update') : null;
   if (existing && existing.organisationId !== input.organisationId) {
-    throw badRequest('counterLampId', 'That lamp was tested by another organisation.');
+    throw invalid('counterLampId', 'That lamp was tested by another organisation.');
   }
   const described = input.lamp ? lampColumns(input.lamp, today) : null;
   // A kept lamp keeps its type and age; its use and home may have changed since.
@@ -106,14 +106,14 @@ export async function resolveTest(user: CurrentUser, input: AssessInput, now: Da
         }
       : (described ?? keptColumns(existing!));
   if (lamp.firstUsedOn > today)
-    throw badRequest('lamp.firstUsedOn', 'The first switch-on cannot be in the future.');
+    throw invalid('lamp.firstUsedOn', 'The first switch-on cannot be in the future.');
   const type = await LampType.findByPk(lamp.lampTypeId);
   if (!type || type.organisationId !== input.organisationId) {
-    throw badRequest('lamp.lampTypeId', 'That lamp type is not in this organisation’s lamp catalogue.');
+    throw invalid('lamp.lampTypeId', 'That lamp type is not in this organisation’s lamp catalogue.');
   }
   const sheet = lamp.speciesSheetId ? await SpeciesSheet.findByPk(lamp.speciesSheetId) : null;
   if (lamp.speciesSheetId && (!sheet || sheet.organisationId !== input.organisationId)) {
-    throw badRequest('lamp.speciesSheetId', 'That species is not among this organisation’s species sheets.');
+    throw invalid('lamp.speciesSheetId', 'That species is not among this organisation’s species sheets.');
   }
   const earlier = existing
     ? await CounterReading.findAll({ where: { counterLampId: existing.id }, order: [['takenAt', 'ASC']] })
@@ -251,7 +251,6 @@ export async function counterLampView(lamp: CounterLamp, today = todayIso()): Pr
 
 /** What the counter screen offers: the organisation's lamp catalogue and species sheets, by name. */
 export async function counterChoices(organisationId: number) {
-  await ensureStartingCatalogue(organisationId);
   const [types, sheets] = await Promise.all([allLampTypes(organisationId), allSheets(organisationId)]);
   return {
     lampTypes: types.map((t) => ({ id: t.id, name: t.name })).sort((a, b) => a.name.localeCompare(b.name)),

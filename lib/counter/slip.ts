@@ -1,6 +1,7 @@
 import 'server-only';
+import { invalid } from '@/lib/errors';
 import { UniqueConstraintError } from 'sequelize';
-import { badRequest } from '@/lib/api';
+
 import { deliverSoon } from '@/lib/auth/mail-soon';
 import { config } from '@/lib/config';
 import { organisationName } from '@/lib/organisations/queries';
@@ -59,10 +60,10 @@ export function composeSlip(input: {
 export async function sendSlip(lamp: CounterLamp, view: CounterLampView): Promise<MailMessage | null> {
   const customer = lamp.customerId ? await Customer.findByPk(lamp.customerId) : null;
   if (!customer)
-    throw badRequest('customer', 'This lamp is kept without a customer: there is nobody to send a slip to.');
-  if (!customer.email) throw badRequest('customer.email', 'The customer has no e-mail address.');
+    throw invalid('customer', 'This lamp is kept without a customer: there is nobody to send a slip to.');
+  if (!customer.email) throw invalid('customer.email', 'The customer has no e-mail address.');
   if (!customer.reminderConsentAt)
-    throw badRequest(
+    throw invalid(
       'customer.reminderConsent',
       'The customer has not agreed to e-mails: ask them first, and record it.',
     );
@@ -70,7 +71,7 @@ export async function sendSlip(lamp: CounterLamp, view: CounterLampView): Promis
     where: { counterLampId: lamp.id },
     order: [['takenAt', 'DESC']],
   });
-  if (!last || !view.answer) throw badRequest('reading', 'This lamp has no reading to report.');
+  if (!last || !view.answer) throw invalid('reading', 'This lamp has no reading to report.');
   const shop = (await organisationName(lamp.organisationId)) ?? 'The shop';
   const unsubscribeUrl = new URL(
     `/api/unsubscribe?token=${unsubscribeToken(customer.id)}`,

@@ -1,5 +1,7 @@
 import 'server-only';
-import { allow, ApiError, notFound } from '@/lib/api';
+import { allow } from '@/lib/access';
+import { isDomainError, notFound } from '@/lib/errors';
+
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { can, type Action } from '@/lib/permissions';
 import { CounterLamp, Customer } from '@/models';
@@ -32,7 +34,7 @@ async function orNull<T>(load: () => Promise<T>): Promise<T | null> {
   try {
     return await load();
   } catch (e) {
-    if (e instanceof ApiError && e.status === 404) return null;
+    if (isDomainError(e, 'not_found')) return null;
     throw e;
   }
 }

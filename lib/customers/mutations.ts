@@ -1,5 +1,6 @@
 import 'server-only';
-import { badRequest } from '@/lib/api';
+import { invalid } from '@/lib/errors';
+
 import { getSequelize } from '@/lib/db';
 import { CounterLamp, Customer } from '@/models';
 import { organisationName } from '@/lib/organisations/queries';
@@ -38,7 +39,7 @@ export async function updateCustomer(customer: Customer, patch: CustomerPatch, n
   }
   const email = 'email' in next ? next.email : customer.email;
   const consent = 'reminderConsentAt' in next ? next.reminderConsentAt : customer.reminderConsentAt;
-  if (consent && !email) throw badRequest('email', 'Reminder e-mails need an e-mail address.');
+  if (consent && !email) throw invalid('email', 'Reminder e-mails need an e-mail address.');
   return customer.update(next);
 }
 

@@ -104,7 +104,7 @@ export async function closeEnginePool(): Promise<void> {
  * Runs one engine task on a worker thread. Rejects with EngineBusyError (503) when every thread is busy
  * and the queue is full, EngineTimeoutError (503) past the time limit, EngineCancelledError when
  * `signal` aborts (pass the request's signal, so a closed browser tab stops its work), or the task's own
- * error (an ApiError keeps its status).
+ * error (a domain error keeps its kind, so the pipeline answers its status).
  */
 export function runEngineTask<K extends EngineTaskName>(
   name: K,

@@ -1,6 +1,6 @@
 import { Worker } from 'node:worker_threads';
 import { afterEach, describe, expect, it } from 'vitest';
-import { ApiError } from '@/lib/api/errors';
+import { DomainError } from '@/lib/errors';
 import {
   EngineBusyError,
   EngineCancelledError,
@@ -54,7 +54,7 @@ describe('worker pool', () => {
     const next = p.run('echo', { value: 'after' });
     const error = await slow.catch((e: unknown) => e);
     expect(error).toBeInstanceOf(EngineTimeoutError);
-    expect((error as ApiError).status).toBe(503);
+    expect((error as DomainError).kind).toBe('unavailable');
     await expect(next).resolves.toBe('after');
     expect(p.stats).toMatchObject({ timedOut: 1, started: 2 });
   });
@@ -84,11 +84,13 @@ describe('worker pool', () => {
     expect(p.stats.cancelled).toBe(2);
   });
 
-  it('passes a task’s API error on with its status, and survives a thread that dies', async () => {
+  it('passes a task’s domain error on with its kind, and survives a thread that dies', async () => {
     const p = pool();
-    const error = await p.run('fail', { message: 'no', status: 422, code: 'x' }).catch((e: unknown) => e);
-    expect(error).toBeInstanceOf(ApiError);
-    expect(error).toMatchObject({ status: 422, code: 'x', message: 'no' });
+    const error = await p
+      .run('fail', { message: 'no', kind: 'beyond_limit', code: 'x' })
+      .catch((e: unknown) => e);
+    expect(error).toBeInstanceOf(DomainError);
+    expect(error).toMatchObject({ kind: 'beyond_limit', code: 'x', message: 'no' });
     await expect(p.run('exit', {})).rejects.toThrow(/stopped unexpectedly/);
     await expect(p.run('echo', { value: 'still here' })).resolves.toBe('still here');
   });

@@ -11,7 +11,7 @@
  * Generic: knows nothing of the engine. `index.ts` gives it the engine's worker and task names.
  */
 import type { Worker } from 'node:worker_threads';
-import { ApiError } from '@/lib/api/errors';
+import { DomainError, type DomainErrorKind } from '@/lib/errors';
 
 export type PoolOptions = {
   /** Worker threads at most (started when first needed, kept while the process lives). */
@@ -41,7 +41,8 @@ export type TaskRequest = { id: number; name: string; input: unknown };
 export type SerialisedError = {
   name: string;
   message: string;
-  status?: number;
+  /** A domain error's kind (lib/errors.ts): it is rebuilt as one, and the pipeline answers its status. */
+  kind?: DomainErrorKind;
   code?: string;
   field?: string;
   issues?: { field: string; message: string }[];
@@ -50,39 +51,32 @@ export type TaskReply =
   { id: number; ok: true; value: unknown } | { id: number; ok: false; error: SerialisedError };
 
 /** Every worker is busy and the queue is full: try again in a few seconds. */
-export class EngineBusyError extends ApiError {
+export class EngineBusyError extends DomainError {
   constructor() {
-    super(
-      503,
-      'engine_busy',
-      'The server is computing many designs right now; try again in a few seconds.',
-      undefined,
-      undefined,
-      { 'Retry-After': '5' },
-    );
+    super('unavailable', 'The server is computing many designs right now; try again in a few seconds.', {
+      code: 'engine_busy',
+      retryAfterS: 5,
+    });
     this.name = 'EngineBusyError';
   }
 }
 
 /** A task ran past its time limit; its worker was ended. */
-export class EngineTimeoutError extends ApiError {
+export class EngineTimeoutError extends DomainError {
   constructor(readonly limitMs: number) {
     super(
-      503,
-      'engine_timeout',
+      'unavailable',
       `Computing this design took longer than the server allows (${Math.round(limitMs / 1000)} s), so it was stopped. Try again in a minute; if it keeps happening, simplify the design.`,
-      undefined,
-      undefined,
-      { 'Retry-After': '30' },
+      { code: 'engine_timeout', retryAfterS: 30 },
     );
     this.name = 'EngineTimeoutError';
   }
 }
 
 /** The caller cancelled (e.g. the browser went away); nobody reads this answer. */
-export class EngineCancelledError extends ApiError {
+export class EngineCancelledError extends DomainError {
   constructor() {
-    super(499, 'cancelled', 'The request was cancelled.');
+    super('cancelled', 'The request was cancelled.');
     this.name = 'EngineCancelledError';
   }
 }
@@ -100,11 +94,9 @@ type Job = {
 
 type Slot = { worker: Worker; job: Job | null; id: number; timer: NodeJS.Timeout | null; fresh: boolean };
 
-/** Rebuilds an error thrown inside a task: an ApiError stays one (its status and field reach the client). */
+/** Rebuilds an error thrown inside a task: a domain error stays one (its kind, code and field reach the client). */
 export function reviveError(e: SerialisedError): Error {
-  if (typeof e.status === 'number' && e.code) {
-    return new ApiError(e.status, e.code, e.message, e.field, e.issues);
-  }
+  if (e.kind) return new DomainError(e.kind, e.message, { code: e.code, field: e.field, issues: e.issues });
   const error = new Error(e.message);
   error.name = e.name;
   return error;

@@ -1,19 +1,21 @@
 /**
  * Entry of one engine worker thread: answers each `TaskRequest` from the pool with the named task's
- * result, or with the error it threw (an ApiError keeps its status, code and field).
+ * result, or with the error it threw (a domain error keeps its kind, code and field).
  */
 import { parentPort } from 'node:worker_threads';
+import { DomainError } from '@/lib/errors';
 import type { SerialisedError, TaskReply, TaskRequest } from './pool';
 import { engineTasks } from './tasks';
 
 function serialise(error: unknown): SerialisedError {
   if (!(error instanceof Error)) return { name: 'Error', message: String(error) };
-  const e = error as Error & Partial<Omit<SerialisedError, 'name' | 'message'>>;
+  if (!(error instanceof DomainError)) return { name: error.name, message: error.message };
+  const e = error;
   return {
     name: e.name,
     message: e.message,
-    ...(typeof e.status === 'number' ? { status: e.status } : {}),
-    ...(typeof e.code === 'string' ? { code: e.code } : {}),
+    kind: e.kind,
+    code: e.code,
     ...(e.field ? { field: e.field } : {}),
     ...(e.issues ? { issues: e.issues } : {}),
   };
@@ -31,8 +33,7 @@ port.on('message', async (request: TaskRequest) => {
     }
     reply = { id: request.id, ok: true, value: await task(request.input) };
   } catch (error) {
-    if (!(error instanceof Error && 'status' in error))
-      console.error(`engine task ${request.name} failed`, error);
+    if (!(error instanceof DomainError)) console.error(`engine task ${request.name} failed`, error);
     reply = { id: request.id, ok: false, error: serialise(error) };
   }
   port.postMessage(reply);

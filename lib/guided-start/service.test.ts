@@ -79,7 +79,7 @@ describe('guided start on the server', () => {
   });
 
   it('hides another organisation and its sheets', async () => {
-    await expect(proposeFor(await who(outsiderUser), input())).rejects.toMatchObject({ status: 404 });
+    await expect(proposeFor(await who(outsiderUser), input())).rejects.toMatchObject({ kind: 'not_found' });
     const { organisation: other } = await createMember('owner');
     await seedStartingCatalogue(other.id);
     const foreignSheet = (await SpeciesSheet.findOne({ where: { organisationId: other.id } }))!;
@@ -93,7 +93,7 @@ describe('guided start on the server', () => {
   it('says so when the catalogue has no UV lamp that fits', async () => {
     const { LampType } = await import('@/models');
     await LampType.destroy({ where: { organisationId: shop.id } });
-    await expect(proposeFor(await who(staffUser), input())).rejects.toMatchObject({ status: 400 });
+    await expect(proposeFor(await who(staffUser), input())).rejects.toMatchObject({ kind: 'invalid' });
   });
 
   it('refuses to build a design that could hurt the animal, and says why', async () => {
@@ -106,7 +106,7 @@ describe('guided start on the server', () => {
     const view = await proposeFor(await who(staffUser), hot);
     expect(view.blocked).toMatch(/will not propose a design that could hurt the animal/);
     const before = await Enclosure.count();
-    await expect(createFromGuidedStart(await who(staffUser), hot)).rejects.toMatchObject({ status: 400 });
+    await expect(createFromGuidedStart(await who(staffUser), hot)).rejects.toMatchObject({ kind: 'invalid' });
     expect(await Enclosure.count()).toBe(before);
   });
 

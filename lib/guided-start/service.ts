@@ -1,13 +1,13 @@
 import 'server-only';
+import { forbidden, invalid, notFound } from '@/lib/errors';
 import type { Assessment, Design } from '@/simulation';
 import { assertKeeperInOrganisation } from '@/lib/api/enclosures';
-import { badRequest, forbidden, notFound } from '@/lib/api/errors';
+
 import { runEngineTask } from '@/lib/engine-pool';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { allLampTypes } from '@/lib/lamp-types/store';
 import { can } from '@/lib/permissions';
 import type { SpeciesSheetDto } from '@/lib/species/schema';
-import { ensureStartingCatalogue } from '@/lib/species/seed';
 import { findSheet, toDto } from '@/lib/species/store';
 import { toEngineSheet } from '@/lib/species/to-engine';
 import { createDesign } from '@/lib/variants/designs';
@@ -57,7 +57,6 @@ async function authorised(user: CurrentUser, input: GuidedStartInput) {
 
 export async function proposeFor(user: CurrentUser, input: GuidedStartInput): Promise<ProposalView> {
   const { sheet } = await authorised(user, input);
-  await ensureStartingCatalogue(input.organisationId);
   const lampTypes = await allLampTypes(input.organisationId);
   const species = toEngineSheet(sheet);
   const enclosure = {
@@ -70,7 +69,7 @@ export async function proposeFor(user: CurrentUser, input: GuidedStartInput): Pr
   // Dozens of engine runs: on an engine thread, not the server's event loop.
   const p = await runEngineTask('propose', { input: { species, enclosure, lid: input.lid }, lampTypes });
   if (!p) {
-    throw badRequest(
+    throw invalid(
       undefined,
       'No UV lamp in your catalogue fits this enclosure. Add a suitable lamp type to the lamp catalogue, or check the size.',
     );
@@ -102,7 +101,7 @@ export async function createFromGuidedStart(
   const { keeperId } = await authorised(user, input);
   await assertKeeperInOrganisation(input.organisationId, keeperId);
   const view = await proposeFor(user, input);
-  if (view.blocked) throw badRequest(undefined, view.blocked);
+  if (view.blocked) throw invalid(undefined, view.blocked);
   const enclosure = await Enclosure.create({
     organisationId: input.organisationId,
     keeperId,

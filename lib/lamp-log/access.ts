@@ -1,7 +1,10 @@
 import 'server-only';
-import { allow, ApiError, notFound } from '@/lib/api';
+import { allow } from '@/lib/access';
+import { isDomainError, notFound } from '@/lib/errors';
+
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { can, type Action } from '@/lib/permissions';
+import { enclosureFor } from '@/lib/enclosures/access';
 import { Enclosure, Lamp, Reading } from '@/models';
 
 /**
@@ -16,13 +19,6 @@ const resource = (e: Enclosure, kind: 'lamp' | 'reading' | 'enclosure') => ({
   organisationId: e.organisationId,
   keeperId: e.keeperId,
 });
-
-export async function enclosureForLamps(user: CurrentUser, id: number, action: Action): Promise<Enclosure> {
-  const enclosure = await Enclosure.findByPk(id);
-  if (!enclosure) throw notFound('The enclosure');
-  allow(user, action, resource(enclosure, 'lamp'), 'The enclosure');
-  return enclosure;
-}
 
 export async function lampFor(user: CurrentUser, id: number, action: Action): Promise<LampWithEnclosure> {
   const lamp = (await Lamp.findByPk(id, {
@@ -54,7 +50,7 @@ async function orNull<T>(load: () => Promise<T>): Promise<T | null> {
   try {
     return await load();
   } catch (e) {
-    if (e instanceof ApiError && e.status === 404) return null;
+    if (isDomainError(e, 'not_found')) return null;
     throw e;
   }
 }
@@ -69,6 +65,6 @@ export async function lampForPage(user: CurrentUser, id: number) {
 
 /** For pages: the enclosure if `user` may read its lamps (else null), and whether they may change them. */
 export async function enclosureForLampsPage(user: CurrentUser, id: number) {
-  const enclosure = await orNull(() => enclosureForLamps(user, id, 'read'));
+  const enclosure = await orNull(() => enclosureFor(user, id, 'read'));
   return enclosure && { enclosure, canEdit: can(user, 'update', resource(enclosure, 'lamp')) };
 }

@@ -1,5 +1,6 @@
 import 'server-only';
-import { badRequest, conflict, notFound } from '@/lib/api';
+import { conflict, invalid, notFound } from '@/lib/errors';
+
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { runEngineTask } from '@/lib/engine-pool';
 import { toDto as lampTypeDto } from '@/lib/lamp-types/store';
@@ -85,11 +86,11 @@ export async function applyCalibrationTo(
   baseVersion: number | undefined,
 ) {
   if (!lamp.designObjectId) {
-    throw badRequest('designObjectId', 'Link this lamp to its lamp in a design before calibrating.');
+    throw invalid('designObjectId', 'Link this lamp to its lamp in a design before calibrating.');
   }
   const target = (await targets(lamp)).find((t) => t.variant.id === variantId);
   if (!target) throw notFound('A variant of this enclosure with that lamp');
-  if (!target.calibration.ok) throw badRequest(undefined, target.calibration.reason);
+  if (!target.calibration.ok) throw invalid(undefined, target.calibration.reason);
   const variant = await Variant.findByPk(variantId);
   if (!variant) throw notFound('The variant');
   const version = baseVersion ?? variant.version;

@@ -1,11 +1,12 @@
 import 'server-only';
-import { ApiError, json } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { getSequelize } from '@/lib/db';
 import { deleteObject } from '@/lib/storage/s3';
 import { storeCsv } from '@/lib/uploads/service';
 import { Lamp, Reading, type Enclosure, type Upload } from '@/models';
 import { parseReadingsCsv, type CsvResult } from './csv';
+
+export type { CsvResult };
 
 /**
  * CSV import in two steps: a preview (every row checked, nothing saved) and the import, which checks
@@ -30,30 +31,18 @@ export async function previewCsv(
   return parseReadingsCsv(csv, await csvLampsOf(enclosure), tzOffsetMinutes);
 }
 
-export function rowErrorsResponse(result: CsvResult): Response {
-  const first = result.errors[0]!;
-  return json(
-    {
-      error: {
-        code: 'invalid',
-        message: `Nothing was imported: ${result.errors.length} row${result.errors.length > 1 ? 's have' : ' has'} a problem. Row ${first.row}: ${first.message}`,
-        field: `rows[${first.row}].${first.field}`,
-        issues: result.errors.map((e) => ({ field: `rows[${e.row}].${e.field}`, message: e.message })),
-      },
-      errors: result.errors,
-    },
-    400,
-  );
-}
+export type ImportOutcome =
+  | { ok: true; imported: number; uploadId: number; rows: CsvResult['rows'] }
+  | { ok: false; result: CsvResult };
 
 export async function importCsv(
   user: CurrentUser,
   enclosure: Enclosure,
   csv: string,
   opts: { tzOffsetMinutes: number; fileName: string | null },
-): Promise<Response> {
+): Promise<ImportOutcome> {
   const result = await previewCsv(enclosure, csv, opts.tzOffsetMinutes);
-  if (result.errors.length > 0) return rowErrorsResponse(result);
+  if (result.errors.length > 0) return { ok: false, result };
   const sequelize = getSequelize();
   let stored: Upload | null = null;
   try {
@@ -78,12 +67,11 @@ export async function importCsv(
       );
       return stored;
     });
-    return json({ imported: result.rows.length, uploadId: upload.id, rows: result.rows }, 201);
+    return { ok: true, imported: result.rows.length, uploadId: upload.id, rows: result.rows };
   } catch (e) {
     // The transaction rolled back: take the stored file back out too.
     const key = (stored as Upload | null)?.storageKey;
     if (key) await deleteObject(key).catch(() => undefined);
-    if (e instanceof ApiError) throw e;
     throw e;
   }
 }

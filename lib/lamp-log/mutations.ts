@@ -1,6 +1,7 @@
 import 'server-only';
+import { invalid } from '@/lib/errors';
 import type { z } from 'zod';
-import { badRequest } from '@/lib/api';
+
 import { Lamp, LampType, Reading, type Enclosure } from '@/models';
 import { throughShare } from '@/shared/reading-setup';
 import { displayToCm } from '@/shared/units';
@@ -18,7 +19,7 @@ const round1 = (v: number) => Math.round(v * 10) / 10;
 async function assertLampTypeIn(organisationId: number, lampTypeId: number): Promise<void> {
   const t = await LampType.findByPk(lampTypeId, { attributes: ['id', 'organisationId'] });
   if (!t || t.organisationId !== organisationId) {
-    throw badRequest('lampTypeId', 'That lamp type is not in this organisation’s lamp catalogue.');
+    throw invalid('lampTypeId', 'That lamp type is not in this organisation’s lamp catalogue.');
   }
 }
 
@@ -69,7 +70,7 @@ export async function updateLamp(
   const first = next.firstUsedOn ?? lamp.firstUsedOn;
   const retired = 'retiredOn' in next ? next.retiredOn : lamp.retiredOn;
   if (retired && retired < first)
-    throw badRequest('retiredOn', 'A lamp cannot be retired before its first use.');
+    throw invalid('retiredOn', 'A lamp cannot be retired before its first use.');
   await lamp.update(next);
 }
 
@@ -77,16 +78,13 @@ export type ReadingInput = z.output<typeof createReadingBody>;
 
 function storedShare(lamp: Lamp, r: ReadingInput): number | null {
   const share = throughShare(lamp.baskingTransmission ?? null, r.through, r.throughTransmission);
-  if (!share.ok) throw badRequest('throughTransmission', share.message);
+  if (!share.ok) throw invalid('throughTransmission', share.message);
   return share.share;
 }
 
 export function readingColumns(lamp: Lamp, r: ReadingInput) {
   if (r.takenAt.toISOString().slice(0, 10) < lamp.firstUsedOn) {
-    throw badRequest(
-      'takenAt',
-      `This lamp was first used on ${lamp.firstUsedOn}; a reading cannot be earlier.`,
-    );
+    throw invalid('takenAt', `This lamp was first used on ${lamp.firstUsedOn}; a reading cannot be earlier.`);
   }
   return {
     through: r.through,

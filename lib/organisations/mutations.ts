@@ -1,7 +1,8 @@
 import 'server-only';
+import { conflict, notFound } from '@/lib/errors';
 import type { Transaction } from 'sequelize';
 import { endAllSessions } from '@/lib/account/service';
-import { conflict, notFound } from '@/lib/api/errors';
+
 import { getSequelize } from '@/lib/db';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { Membership, Organisation, User, type Role } from '@/models';

@@ -1,5 +1,6 @@
 import 'server-only';
-import { allow, notFound } from '@/lib/api';
+import { allow } from '@/lib/access';
+import { notFound } from '@/lib/errors';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { findLampType } from '@/lib/lamp-types/store';
 import { can, type Action } from '@/lib/permissions';

@@ -1,5 +1,5 @@
 import 'server-only';
-import { conflict } from '@/lib/api';
+import { conflict } from '@/lib/errors';
 import { getSequelize } from '@/lib/db';
 import type { AdoptedCurve } from '@/lib/lamp-types/schema';
 import { LampCurveAdoption, LampType, User } from '@/models';

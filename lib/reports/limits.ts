@@ -1,4 +1,5 @@
-import { ApiError } from '@/lib/api/errors';
+import { DomainError } from '@/lib/errors';
+
 import { checkLimits, countAttempt, limitKey } from '@/lib/rate-limit';
 import { MONTH_CHOICES } from '@/shared/designs/compare-params';
 
@@ -19,13 +20,10 @@ export async function countExport(kind: 'user' | 'share', id: string | number): 
   const verdict = await checkLimits([{ key, limit }], EXPORT_LIMIT.windowMs);
   if (!verdict.allowed) {
     const seconds = Math.max(1, Math.ceil(verdict.retryAfterMs / 1000));
-    throw new ApiError(
-      429,
+    throw new DomainError(
       'rate_limited',
       `That is ${limit} pictures and reports in ${EXPORT_LIMIT.windowMs / 60_000} minutes, the most the server makes${kind === 'user' ? ' for one person' : ' for one link'}. Try again in ${Math.ceil(seconds / 60)} minutes.`,
-      undefined,
-      undefined,
-      { 'Retry-After': String(seconds) },
+      { retryAfterS: seconds },
     );
   }
   await countAttempt([key], EXPORT_LIMIT.windowMs);

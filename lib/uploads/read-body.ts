@@ -1,10 +1,10 @@
-import { ApiError } from '@/lib/api';
+import { DomainError } from '@/lib/errors';
 
 export const tooLarge = (limitBytes: number) =>
-  new ApiError(
-    413,
-    'payload_too_large',
+  new DomainError(
+    'too_large',
     `The file is larger than ${Math.round(limitBytes / (1024 * 1024))} MB. Use a smaller photo (a phone photo resized to about 2000 px wide is plenty for tracing).`,
+    { code: 'payload_too_large' },
   );
 
 /**
@@ -14,7 +14,7 @@ export const tooLarge = (limitBytes: number) =>
 export async function readRawBody(req: Request, limit: number): Promise<Uint8Array> {
   const declared = Number(req.headers.get('content-length') ?? '');
   if (Number.isFinite(declared) && declared > limit) throw tooLarge(limit);
-  if (!req.body) throw new ApiError(400, 'invalid', 'The request has no file in it.', 'file');
+  if (!req.body) throw new DomainError('invalid', 'The request has no file in it.', { field: 'file' });
   const reader = req.body.getReader();
   const chunks: Uint8Array[] = [];
   let size = 0;
@@ -28,7 +28,7 @@ export async function readRawBody(req: Request, limit: number): Promise<Uint8Arr
     }
     chunks.push(value);
   }
-  if (size === 0) throw new ApiError(400, 'invalid', 'The file is empty.', 'file');
+  if (size === 0) throw new DomainError('invalid', 'The file is empty.', { field: 'file' });
   const out = new Uint8Array(size);
   let o = 0;
   for (const c of chunks) {

@@ -1,6 +1,8 @@
 import 'server-only';
+import { allow } from '@/lib/access';
+import { DomainError, notFound } from '@/lib/errors';
 import { createHash, randomUUID } from 'node:crypto';
-import { ApiError, allow, notFound } from '@/lib/api';
+
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { can } from '@/lib/permissions';
 import { deleteObject, getObject, putObject, StorageUnavailableError } from '@/lib/storage/s3';
@@ -22,16 +24,11 @@ const EXT: Record<string, string> = {
 
 export const sha256 = (b: Uint8Array) => createHash('sha256').update(b).digest('hex');
 
-export function storageUnavailable(): ApiError {
-  return new ApiError(
-    503,
+export function storageUnavailable(): DomainError {
+  return new DomainError(
     'unavailable',
     'The file store cannot be reached right now. Nothing was saved; try again shortly.',
-    undefined,
-    undefined,
-    {
-      'Retry-After': '5',
-    },
+    { retryAfterS: 5 },
   );
 }
 
@@ -64,20 +61,20 @@ export async function storeBackdrop(
       claimedType && claimedType !== 'application/octet-stream'
         ? ` It says it is ${claimedType}, but`
         : ' It';
-    throw new ApiError(
-      415,
-      'unsupported_media_type',
+    throw new DomainError(
+      'unsupported',
       `Only JPEG, PNG or WebP photos can be used.${claim} does not start like any of them.`,
-      'file',
+      { code: 'unsupported_media_type', field: 'file' },
     );
   }
   let clean: Uint8Array;
   try {
     const problem = dimensionProblem(imageDimensions(type, bytes));
-    if (problem) throw new ApiError(413, 'payload_too_large', problem, 'file');
+    if (problem) throw new DomainError('too_large', problem, { code: 'payload_too_large', field: 'file' });
     clean = stripMetadata(type, bytes);
   } catch (e) {
-    if (e instanceof InvalidImageError) throw new ApiError(415, 'unsupported_media_type', e.message, 'file');
+    if (e instanceof InvalidImageError)
+      throw new DomainError('unsupported', e.message, { code: 'unsupported_media_type', field: 'file' });
     throw e;
   }
   const key = `org-${enclosure.organisationId}/enclosure-${enclosure.id}/backdrop/${randomUUID()}.${EXT[type]}`;
@@ -204,11 +201,7 @@ export async function uploadFor(
   } as const;
   if (!can(user, 'read', loose)) throw notFound('The file');
   if (action === 'delete' && !can(user, 'delete', loose)) {
-    throw new ApiError(
-      403,
-      'forbidden',
-      'Only the person who uploaded it, or an owner, can delete this file.',
-    );
+    throw new DomainError('forbidden', 'Only the person who uploaded it, or an owner, can delete this file.');
   }
   return upload;
 }

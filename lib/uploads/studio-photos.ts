@@ -1,4 +1,5 @@
-import { ApiError } from '@/lib/api';
+import { DomainError } from '@/lib/errors';
+
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { can } from '@/lib/permissions';
 import type { Upload } from '@/models';
@@ -50,7 +51,7 @@ async function readableBackdrop(user: CurrentUser, id: number): Promise<Upload |
     const u = await uploadFor(user, id, 'read');
     return u.kind === 'backdrop' ? u : null;
   } catch (e) {
-    if (e instanceof ApiError) return null;
+    if (e instanceof DomainError) return null;
     throw e;
   }
 }

@@ -1,6 +1,7 @@
 import 'server-only';
-import { allow } from '@/lib/api';
-import { notFound } from '@/lib/api';
+import { allow } from '@/lib/access';
+import { notFound } from '@/lib/errors';
+
 import type { CurrentUser } from '@/lib/auth/session-user';
 import type { Action, EnclosureOwnedKind } from '@/lib/permissions';
 import { Design, Enclosure, ShareLink, Variant } from '@/models';
@@ -20,13 +21,6 @@ const owner = (e: Enclosure, kind: EnclosureOwnedKind) => ({
   organisationId: e.organisationId,
   keeperId: e.keeperId,
 });
-
-export async function enclosureFor(user: CurrentUser, id: number, action: Action): Promise<Enclosure> {
-  const enclosure = await Enclosure.findByPk(id);
-  if (!enclosure) throw notFound('The enclosure');
-  allow(user, action, owner(enclosure, 'design'), 'The enclosure');
-  return enclosure;
-}
 
 export async function designFor(user: CurrentUser, id: number, action: Action): Promise<DesignWithEnclosure> {
   const design = (await Design.findByPk(id, {

@@ -1,9 +1,13 @@
+import { DomainError } from '@/lib/errors';
 import { designWorkProblem, TOO_COMPLEX, parseDesign, type Design } from '@/simulation';
-import { ApiError } from '@/lib/api';
 
 /** 422: a well-formed design beyond the engine work bound; the message names the limit. */
 export const tooComplex = (field: string, message: string) =>
-  new ApiError(422, TOO_COMPLEX, `${field}: ${message}`, field, [{ field, message }]);
+  new DomainError('beyond_limit', `${field}: ${message}`, {
+    code: TOO_COMPLEX,
+    field,
+    issues: [{ field, message }],
+  });
 
 /**
  * Before the server computes a stored design: one saved before the work bound existed may be beyond it,

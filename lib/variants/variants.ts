@@ -1,6 +1,7 @@
 import 'server-only';
+import { conflict } from '@/lib/errors';
 import { literal } from 'sequelize';
-import { afterCursor, conflict, page } from '@/lib/api';
+import { afterCursor, page } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { getSequelize } from '@/lib/db';
 import { can } from '@/lib/permissions';

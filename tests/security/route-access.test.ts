@@ -176,7 +176,7 @@ describe('the checker', () => {
     expect(put.accessPath).toEqual([
       'app/api/zz-fake/route.ts#load',
       'lib/zz-fake/access.ts#thingFor',
-      'lib/api/route.ts#allow',
+      'lib/access.ts#allow',
       'lib/permissions.ts#can',
     ]);
   });

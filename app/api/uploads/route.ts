@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { created, route } from '@/lib/api';
 import { idSchema } from '@/lib/api/schemas';
-import { enclosureForLamps } from '@/lib/lamp-log/access';
+import { enclosureFor } from '@/lib/enclosures/access';
 import { MAX_IMAGE_BYTES } from '@/lib/uploads/limits';
 import { readRawBody } from '@/lib/uploads/read-body';
 import { storeBackdrop, uploadJson, uploadsOf } from '@/lib/uploads/service';
@@ -15,7 +15,7 @@ export const GET = route({
       .optional(),
   }),
   handler: async ({ query, user }) => {
-    const enclosure = await enclosureForLamps(user, query.enclosureId, 'read');
+    const enclosure = await enclosureFor(user, query.enclosureId, 'read');
     const rows = await uploadsOf(enclosure.id, query.kind, 100);
     return { items: rows.map(uploadJson) };
   },
@@ -35,7 +35,7 @@ export const POST = route({
     name: z.string().max(200).optional(),
   }),
   handler: async ({ req, query, user }) => {
-    const enclosure = await enclosureForLamps(user, query.enclosureId, 'update');
+    const enclosure = await enclosureFor(user, query.enclosureId, 'update');
     const bytes = await readRawBody(req, MAX_IMAGE_BYTES);
     const upload = await storeBackdrop(
       user,

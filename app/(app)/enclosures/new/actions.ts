@@ -2,6 +2,7 @@
 
 import { headers } from 'next/headers';
 import { ApiError, fromZod, isDatabaseUnavailable } from '@/lib/api/errors';
+import { DomainError } from '@/lib/errors';
 import { assertSameOriginHeaders } from '@/lib/api/request';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { guidedStartSchema, type GuidedStartInput } from '@/lib/guided-start/input';
@@ -37,7 +38,7 @@ async function run<T>(
     if (!user) return fail('Your session has ended. Sign in again; your answers stay on this page.');
     return { ok: true, data: await act(user, parsed.data) };
   } catch (e) {
-    if (e instanceof ApiError) return fail(e.message, e.field);
+    if (e instanceof DomainError || e instanceof ApiError) return fail(e.message, e.field);
     if (isDatabaseUnavailable(e))
       return fail(
         'The database cannot be reached right now; your answers stay on this page. Try again in a few seconds.',

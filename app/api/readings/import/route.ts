@@ -1,8 +1,8 @@
 import { z } from 'zod';
-import { ApiError, route } from '@/lib/api';
+import { ApiError, json, route } from '@/lib/api';
 import { idSchema } from '@/lib/api/schemas';
-import { enclosureForLamps } from '@/lib/lamp-log/access';
-import { importCsv, previewCsv } from '@/lib/lamp-log/csv-import';
+import { enclosureFor } from '@/lib/enclosures/access';
+import { importCsv, previewCsv, type CsvResult } from '@/lib/lamp-log/csv-import';
 import { MAX_CSV_BYTES, MAX_CSV_IMPORT_BODY_BYTES } from '@/lib/uploads/limits';
 
 const body = z.strictObject({
@@ -25,19 +25,39 @@ const csvTooLarge = () =>
     [{ field: 'csv', message: `The file is larger than ${MAX_CSV_BYTES / 1024} KB.` }],
   );
 
+/** Every row's problem, beside the usual error body: the page marks each row. */
+function rowErrorsResponse(result: CsvResult): Response {
+  const first = result.errors[0]!;
+  return json(
+    {
+      error: {
+        code: 'invalid',
+        message: `Nothing was imported: ${result.errors.length} row${result.errors.length > 1 ? 's have' : ' has'} a problem. Row ${first.row}: ${first.message}`,
+        field: `rows[${first.row}].${first.field}`,
+        issues: result.errors.map((e) => ({ field: `rows[${e.row}].${e.field}`, message: e.message })),
+      },
+      errors: result.errors,
+    },
+    400,
+  );
+}
+
 export const POST = route({
   body,
   maxBodyBytes: MAX_CSV_IMPORT_BODY_BYTES,
   handler: async ({ body, user }) => {
     if (Buffer.byteLength(body.csv, 'utf8') > MAX_CSV_BYTES) throw csvTooLarge();
-    const enclosure = await enclosureForLamps(user, body.enclosureId, body.commit ? 'update' : 'read');
+    const enclosure = await enclosureFor(user, body.enclosureId, body.commit ? 'update' : 'read');
     if (!body.commit) {
       const result = await previewCsv(enclosure, body.csv, body.tzOffsetMinutes);
       return { ok: result.errors.length === 0, total: result.rows.length + result.errors.length, ...result };
     }
-    return importCsv(user, enclosure, body.csv, {
+    const outcome = await importCsv(user, enclosure, body.csv, {
       tzOffsetMinutes: body.tzOffsetMinutes,
       fileName: body.fileName ?? null,
     });
+    if (!outcome.ok) return rowErrorsResponse(outcome.result);
+    const { imported, uploadId, rows } = outcome;
+    return json({ imported, uploadId, rows }, 201);
   },
 });

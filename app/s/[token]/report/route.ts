@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { ApiError, errorResponse } from '@/lib/api/errors';
+import { DomainError } from '@/lib/errors';
 import { runEngineTask } from '@/lib/engine-pool';
 import { download, fileBase } from '@/lib/reports/build';
 import { countExport } from '@/lib/reports/limits';
@@ -64,7 +65,7 @@ export async function GET(req: Request, ctx: { params: Promise<{ token: string }
     return download(new Uint8Array(pdf), 'application/pdf', `${base}.pdf`);
   } catch (error) {
     // Busy, too slow, too many downloads: the client is told why and when to come back.
-    if (error instanceof ApiError && error.status !== 500) return errorResponse(error);
+    if (error instanceof DomainError || error instanceof ApiError) return errorResponse(error);
     logger().error({ err: error }, 'shared report failed');
     return Response.json(
       { error: { code: 'internal', message: 'The report could not be made. Try again.' } },

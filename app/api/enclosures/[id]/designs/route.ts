@@ -1,5 +1,5 @@
 import { created, route } from '@/lib/api';
-import { enclosureFor } from '@/lib/variants/access';
+import { enclosureFor } from '@/lib/enclosures/access';
 import { createDesign, listDesigns } from '@/lib/variants/designs';
 import { createDesignBody, designListQuery, idParams } from '@/lib/variants/schemas';
 

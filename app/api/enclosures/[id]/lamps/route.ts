@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { created, pageQuery, route } from '@/lib/api';
 import { idParams } from '@/lib/api/schemas';
-import { enclosureForLamps } from '@/lib/lamp-log/access';
+import { enclosureFor } from '@/lib/enclosures/access';
 import { todayIso } from '@/lib/lamp-log/dates';
 import { createLamp } from '@/lib/lamp-log/mutations';
 import { createLampBody } from '@/lib/lamp-log/schemas';
@@ -13,7 +13,7 @@ export const GET = route({
   params: idParams,
   query: z.object(pageQuery),
   handler: async ({ params, query, user }) => {
-    const enclosure = await enclosureForLamps(user, params.id, 'read');
+    const enclosure = await enclosureFor(user, params.id, 'read');
     const rows = await lampsOfEnclosure(enclosure.id, query);
     const items = await summarise(rows.slice(0, query.limit), todayIso());
     const last = rows[query.limit - 1];
@@ -25,7 +25,7 @@ export const POST = route({
   params: idParams,
   body: createLampBody,
   handler: async ({ params, body, user }) => {
-    const enclosure = await enclosureForLamps(user, params.id, 'create');
+    const enclosure = await enclosureFor(user, params.id, 'create');
     const lamp = await createLamp(enclosure, body, user.id);
     const [summary] = await summarise([lamp], todayIso());
     return created({ lamp: summary });

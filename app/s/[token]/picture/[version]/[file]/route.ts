@@ -2,6 +2,7 @@ import { createElement } from 'react';
 import { FieldSvg } from '@/components/designs/FieldSvg';
 import { staticSvg } from '@/components/designs/static-svg';
 import { ApiError, errorResponse } from '@/lib/api/errors';
+import { DomainError } from '@/lib/errors';
 import { runEngineTask } from '@/lib/engine-pool';
 import { logger } from '@/lib/log';
 import {
@@ -77,7 +78,7 @@ export async function GET(
     });
   } catch (error) {
     // The engine busy or too slow: the client is told why and when to come back.
-    if (error instanceof ApiError && error.status !== 500) return errorResponse(error);
+    if (error instanceof DomainError || error instanceof ApiError) return errorResponse(error);
     logger().error({ err: error }, 'shared picture failed');
     return new Response('The picture could not be drawn. Try again.', {
       status: 500,
