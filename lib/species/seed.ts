@@ -1,16 +1,18 @@
 import 'server-only';
-import { UniqueConstraintError, type Transaction } from 'sequelize';
+import { literal, Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import { getSequelize } from '@/lib/db';
 import { toColumns as lampTypeColumns } from '@/lib/lamp-types/store';
 import { STARTING_LAMP_TYPES } from '@/lib/lamp-types/starting-lamp-types';
-import { CatalogueSeeding, LampType, SpeciesSheet } from '@/models';
+import { CatalogueSeeding, LampType, Organisation, SpeciesSheet } from '@/models';
 import { STARTING_SHEETS } from './starting-sheets';
 import { toColumns } from './store';
 
 /**
- * Gives an organisation its starting species sheets and lamp catalogue, once. Call it when an
- * organisation is created (sign-up, demo data); the species and lamp-type routes also call it lazily
- * so an organisation made any other way still gets them. Idempotent and safe to race: the marker row
+ * Gives an organisation its starting species sheets and lamp catalogue, once. Called where an
+ * organisation is created (sign-up, a new organisation, the demo seed, the tests' world), inside the
+ * creating transaction, and never from a read: pages and the public share page only read. An
+ * organisation made before that (or by a script) gets it from `seedMissingCatalogues`, which
+ * `npm run migrate` runs after the migrations. Idempotent and safe to race: the marker row
  * and the unique (organisation, seed key) indexes stop duplicates, and once the marker exists nothing is
  * re-added — sheets an organisation deleted on purpose stay deleted.
  * Pass the caller's transaction when the organisation is created inside one (its row is not visible to
@@ -64,7 +66,17 @@ async function seedIn(organisationId: number, transaction: Transaction): Promise
   return true;
 }
 
-/** For list routes: seed on first sight, cheaply (one primary-key lookup once seeded). */
-export async function ensureStartingCatalogue(organisationId: number): Promise<void> {
-  await seedStartingCatalogue(organisationId);
+/**
+ * Seeds every organisation that has no catalogue yet (no marker row): those created before every way of
+ * creating one seeded it, or by a script. Returns how many were seeded.
+ */
+export async function seedMissingCatalogues(): Promise<number> {
+  const missing = await Organisation.findAll({
+    attributes: ['id'],
+    where: { id: { [Op.notIn]: literal('(SELECT organisation_id FROM catalogue_seedings)') } },
+    order: [['id', 'ASC']],
+  });
+  let seeded = 0;
+  for (const { id } of missing) if (await seedStartingCatalogue(id)) seeded++;
+  return seeded;
 }

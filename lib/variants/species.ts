@@ -1,4 +1,3 @@
-import { ensureStartingCatalogue } from '@/lib/species/seed';
 import { allSheets } from '@/lib/species/store';
 import { toEngineSheet } from '@/lib/species/to-engine';
 import type { SpeciesSheet } from '@/simulation';
@@ -6,11 +5,10 @@ import type { SpeciesSheet } from '@/simulation';
 export type SpeciesOption = { id: number; name: string; scientificName: string; sheet: SpeciesSheet };
 
 /**
- * The organisation's species sheets, ready for the engine's assessment. An organisation made before
- * sign-up seeded the catalogue gets it here on first sight (idempotent: one primary-key lookup after).
+ * The organisation's species sheets, ready for the engine's assessment. A read: the starting sheets were
+ * added when the organisation was created (lib/species/seed.ts), so the public share page writes nothing.
  */
 export async function speciesOptions(organisationId: number): Promise<SpeciesOption[]> {
-  await ensureStartingCatalogue(organisationId);
   const sheets = await allSheets(organisationId);
   return sheets.map((s) => ({
     id: s.id,

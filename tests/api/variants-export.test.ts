@@ -4,7 +4,7 @@ import { describe, expect, it } from 'vitest';
 import * as enclosureDesignsRoute from '@/app/api/enclosures/[id]/designs/route';
 import * as exportRoute from '@/app/api/variants/[id]/export/route';
 import * as variantRoute from '@/app/api/variants/[id]/route';
-import { ensureStartingCatalogue } from '@/lib/species/seed';
+import { seedStartingCatalogue } from '@/lib/species/seed';
 import { Organisation } from '@/models';
 import { EXAMPLE_DATA_NOTE } from '@/shared/example-data';
 import { createEnclosure, createMember, createOrganisation, withTestDatabase } from '../helpers/db';
@@ -38,7 +38,7 @@ async function world(speciesName: string | null, body: Record<string, unknown> =
   const org = await createOrganisation('Fernhollow Test Rooms');
   const { user: keeper } = await createMember('keeper', org);
   const enclosure = await createEnclosure(org, keeper, { name: 'Desert tank', speciesName });
-  await ensureStartingCatalogue(org.id);
+  await seedStartingCatalogue(org.id);
   const made = await call(enclosureDesignsRoute.POST, {
     method: 'POST',
     path: `/api/enclosures/${enclosure.id}/designs`,

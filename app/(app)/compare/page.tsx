@@ -1,7 +1,6 @@
 import type { Metadata } from 'next';
 import { CompareView } from '@/components/designs/compare/CompareView';
 import { PageHeader } from '@/components/ui/PageHeader';
-import { ensureStartingCatalogue } from '@/lib/species/seed';
 import { currentMembership, requireUser } from '@/lib/session';
 import { parseCompareParams, compareQuery } from '@/shared/designs/compare-params';
 import { speciesOptions, attachedSpecies, type SpeciesOption } from '@/lib/variants/species';
@@ -33,7 +32,6 @@ export default async function ComparePage({
     (await currentMembership(user))?.organisationId;
   let species: SpeciesOption[] = [];
   if (orgId) {
-    await ensureStartingCatalogue(orgId);
     species = await speciesOptions(orgId);
   }
   const suggested = attachedSpecies(species, a?.enclosure.speciesName ?? b?.enclosure.speciesName);

@@ -5,7 +5,6 @@ import { LAMP_TECH_IDS } from '@/simulation';
 import { idSchema } from '@/lib/api/schemas';
 import { lampTypeInputSchema } from '@/lib/lamp-types/schema';
 import { createLampType, listLampTypes, toDto } from '@/lib/lamp-types/store';
-import { ensureStartingCatalogue } from '@/lib/species/seed';
 
 /** The organisation's lamp catalogue (`?organisationId=`, optional `tech`). Any member reads. */
 export const GET = route({
@@ -18,7 +17,6 @@ export const GET = route({
   }),
   handler: async ({ query, user }) => {
     allow(user, 'read', { kind: 'lamp-type', organisationId: query.organisationId }, 'That organisation');
-    await ensureStartingCatalogue(query.organisationId);
     const rows = await listLampTypes(query.organisationId, query);
     return page(rows, query.limit, toDto);
   },

@@ -2,7 +2,6 @@ import { z } from 'zod';
 import { allow, created, page, pageQuery, route } from '@/lib/api';
 import { idSchema } from '@/lib/api/schemas';
 import { speciesInputSchema } from '@/lib/species/schema';
-import { ensureStartingCatalogue } from '@/lib/species/seed';
 import { createSheet, listSheets, toDto } from '@/lib/species/store';
 
 /** Species sheets of an organisation (`?organisationId=`, optional `q` to search names). Any member reads. */
@@ -14,7 +13,6 @@ export const GET = route({
   }),
   handler: async ({ query, user }) => {
     allow(user, 'read', { kind: 'species', organisationId: query.organisationId }, 'That organisation');
-    await ensureStartingCatalogue(query.organisationId);
     const rows = await listSheets(query.organisationId, {
       cursor: query.cursor,
       limit: query.limit,

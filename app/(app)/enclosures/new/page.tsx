@@ -9,7 +9,6 @@ import { memberViews } from '@/lib/api/views';
 import { TYPICAL_ENCLOSURES } from '@/lib/guided-start/typical-enclosures';
 import { can } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
-import { ensureStartingCatalogue } from '@/lib/species/seed';
 import { allSheets } from '@/lib/species/store';
 import { createAction, proposeAction } from './actions';
 
@@ -24,7 +23,6 @@ export default async function GuidedStartPage({
   const membership = await currentMembership(user);
   if (!membership) return null;
   const organisationId = membership.organisationId;
-  await ensureStartingCatalogue(organisationId);
   const sheets = await allSheets(organisationId);
   const staff = can(user, 'read', { kind: 'member', organisationId });
   const people = staff

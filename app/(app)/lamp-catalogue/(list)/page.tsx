@@ -8,7 +8,6 @@ import { button } from '@/components/ui/styles';
 import { allLampTypes } from '@/lib/lamp-types/store';
 import { can } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
-import { ensureStartingCatalogue } from '@/lib/species/seed';
 
 export const metadata: Metadata = { title: 'Lamp catalogue' };
 
@@ -17,7 +16,6 @@ export default async function LampCataloguePage() {
   const membership = await currentMembership(user);
   if (!membership) return null;
   const organisationId = membership.organisationId;
-  await ensureStartingCatalogue(organisationId);
   const lampTypes = await allLampTypes(organisationId);
   const mayEdit = can(user, 'create', { kind: 'lamp-type', organisationId });
   const add = mayEdit && (

@@ -20,7 +20,6 @@ import { lampsOfEnclosure } from '@/lib/lamp-log/store';
 import { backdropsOf, uploadJson } from '@/lib/uploads/service';
 import { parseId } from '@/lib/api/schemas';
 import { requireUser } from '@/lib/session';
-import { ensureStartingCatalogue } from '@/lib/species/seed';
 
 export const metadata: Metadata = { title: 'Lamps of an enclosure' };
 
@@ -32,7 +31,6 @@ export default async function EnclosureLampsPage({ params }: { params: Promise<{
   const found = await enclosureForLampsPage(user, enclosureId);
   if (!found) notFound();
   const { enclosure, canEdit } = found;
-  await ensureStartingCatalogue(enclosure.organisationId);
   const [rows, lampTypes, designLamps, backdrops, example] = await Promise.all([
     lampsOfEnclosure(enclosure.id, { limit: 200 }),
     allLampTypes(enclosure.organisationId),

@@ -1,0 +1,93 @@
+// The starting catalogue (species sheets and lamp types) is written when an organisation is created,
+// never by a read: the pages, the lists and the public share page only read it.
+import { QueryTypes } from 'sequelize';
+import { describe, expect, it } from 'vitest';
+import SharePage from '@/app/s/[token]/page';
+import * as enclosureDesignsRoute from '@/app/api/enclosures/[id]/designs/route';
+import * as sharesRoute from '@/app/api/variants/[id]/shares/route';
+import { STARTING_LAMP_TYPES } from '@/lib/lamp-types/starting-lamp-types';
+import { createOrganisation as createOrganisationWithOwner } from '@/lib/organisations/mutations';
+import { seedMissingCatalogues } from '@/lib/species/seed';
+import { STARTING_SHEETS } from '@/lib/species/starting-sheets';
+import { LampType, SpeciesSheet } from '@/models';
+import { call } from './api/variants.helpers';
+import {
+  createEnclosure,
+  createMember,
+  createOrganisation,
+  createUser,
+  testDb,
+  withTestDatabase,
+} from './helpers/db';
+
+withTestDatabase();
+
+async function catalogueOf(organisationId: number) {
+  return {
+    sheets: await SpeciesSheet.count({ where: { organisationId } }),
+    lampTypes: await LampType.count({ where: { organisationId } }),
+  };
+}
+
+/** INSERT statements the database has run so far, on every connection. */
+async function insertsSoFar(): Promise<number> {
+  const rows = await testDb().query<{ Variable_name: string; Value: string }>(
+    "SHOW GLOBAL STATUS WHERE Variable_name IN ('Com_insert', 'Com_insert_select', 'Com_replace')",
+    { type: QueryTypes.SELECT },
+  );
+  return rows.reduce((sum, r) => sum + Number(r.Value), 0);
+}
+
+describe('the starting catalogue', () => {
+  it('is there as soon as an organisation is created', async () => {
+    const { user } = await createUser();
+    const org = await createOrganisationWithOwner('New shop', user.id);
+    expect(await catalogueOf(org.id)).toEqual({
+      sheets: STARTING_SHEETS.length,
+      lampTypes: STARTING_LAMP_TYPES.length,
+    });
+  });
+
+  it('reaches an organisation made without it when the migrations run, once', async () => {
+    const bare = await createOrganisation('Made by a script');
+    expect(await catalogueOf(bare.id)).toEqual({ sheets: 0, lampTypes: 0 });
+    expect(await seedMissingCatalogues()).toBe(1);
+    expect(await catalogueOf(bare.id)).toEqual({
+      sheets: STARTING_SHEETS.length,
+      lampTypes: STARTING_LAMP_TYPES.length,
+    });
+    expect(await seedMissingCatalogues()).toBe(0);
+  });
+
+  it('is not written by the public share page, even for an organisation that lacks it', async () => {
+    const org = await createOrganisation('Shop without a catalogue');
+    const { user: keeper } = await createMember('keeper', org);
+    const enclosure = await createEnclosure(org, keeper, {
+      name: 'Desert tank',
+      speciesName: 'Bearded dragon',
+    });
+    const made = await call(enclosureDesignsRoute.POST, {
+      method: 'POST',
+      path: `/api/enclosures/${enclosure.id}/designs`,
+      params: { id: enclosure.id },
+      user: keeper,
+      body: { name: 'Plan', variantName: 'Low lamp' },
+    });
+    const variantId = made.body.variant.id as number;
+    const shared = await call(sharesRoute.POST, {
+      method: 'POST',
+      path: `/api/variants/${variantId}/shares`,
+      params: { id: variantId },
+      user: keeper,
+      body: {},
+    });
+    const token = shared.body.share.token as string;
+
+    const before = await insertsSoFar();
+    const page = await SharePage({ params: Promise.resolve({ token }), searchParams: Promise.resolve({}) });
+    const after = await insertsSoFar();
+    expect(page).toBeTruthy();
+    expect(after - before).toBe(0);
+    expect(await catalogueOf(org.id)).toEqual({ sheets: 0, lampTypes: 0 });
+  });
+});
