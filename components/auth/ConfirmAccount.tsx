@@ -2,12 +2,11 @@
 
 import { useRouter } from 'next/navigation';
 import { useEffect, useRef } from 'react';
-import Link from '@/components/ui/Link';
 import { Notice } from '@/components/ui/Notice';
 import { fieldError } from '@/components/ui/api-client';
-import { link } from '@/components/ui/styles';
 import { useApiMutation } from '@/components/ui/useApiMutation';
 import { useLinkToken } from './link-token';
+import { NextStepLink } from './NextStepLink';
 
 /**
  * Confirms a new account with the e-mailed link as soon as the page opens, then goes to sign-in, which
@@ -46,11 +45,7 @@ export function ConfirmAccount() {
         Already confirmed? Just sign in. If not, try to sign in anyway: the sign-in page then offers to send a
         new confirmation link.
       </p>
-      <p className="text-center text-body">
-        <Link href="/sign-in" className={link}>
-          Go to sign in
-        </Link>
-      </p>
+      <NextStepLink href="/sign-in">Go to sign in</NextStepLink>
     </div>
   );
 }

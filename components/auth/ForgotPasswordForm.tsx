@@ -1,12 +1,12 @@
 'use client';
 
 import { useState, type FormEvent } from 'react';
-import Link from '@/components/ui/Link';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
 import { fieldError } from '@/components/ui/api-client';
-import { button, link } from '@/components/ui/styles';
+import { button } from '@/components/ui/styles';
 import { useApiMutation } from '@/components/ui/useApiMutation';
+import { NextStepLink } from './NextStepLink';
 
 /** Asks for a "choose a new password" link. The answer never says whether the address has an account. */
 export function ForgotPasswordForm() {
@@ -31,11 +31,7 @@ export function ForgotPasswordForm() {
           Sent to <strong>{sent.email}</strong>. Nothing after a few minutes? Check the spam folder, or ask
           again in a while.
         </p>
-        <p className="text-center text-body">
-          <Link href="/sign-in" className={link}>
-            Back to sign in
-          </Link>
-        </p>
+        <NextStepLink href="/sign-in">Back to sign in</NextStepLink>
       </div>
     );
   }
@@ -55,12 +51,9 @@ export function ForgotPasswordForm() {
       <button type="submit" className={`${button.primary} w-full`} disabled={busy}>
         {busy ? 'Sending…' : 'Send me a link'}
       </button>
-      <p className="text-center text-body text-basalt-600">
-        Remembered it?{' '}
-        <Link href="/sign-in" className={link}>
-          Sign in
-        </Link>
-      </p>
+      <NextStepLink href="/sign-in" lead="Remembered it?">
+        Sign in
+      </NextStepLink>
     </form>
   );
 }

@@ -2,13 +2,13 @@
 
 import { useRouter } from 'next/navigation';
 import { useState, type FormEvent } from 'react';
-import Link from '@/components/ui/Link';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
 import { fieldError } from '@/components/ui/api-client';
-import { button, link } from '@/components/ui/styles';
+import { button } from '@/components/ui/styles';
 import { useApiMutation } from '@/components/ui/useApiMutation';
 import { useLinkToken } from './link-token';
+import { NextStepLink } from './NextStepLink';
 
 /** Chooses a new password with the e-mailed link (its token is read from the address's fragment). */
 export function ResetPasswordForm() {
@@ -50,11 +50,7 @@ export function ResetPasswordForm() {
         <Notice tone="error">
           {expired || 'This link is incomplete. Copy the whole link from the e-mail, or ask for a new one.'}
         </Notice>
-        <p className="text-center text-body">
-          <Link href="/forgot-password" className={link}>
-            Ask for a new link
-          </Link>
-        </p>
+        <NextStepLink href="/forgot-password">Ask for a new link</NextStepLink>
       </div>
     );
   }

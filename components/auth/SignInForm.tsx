@@ -1,7 +1,7 @@
 'use client';
 
-import { signIn } from 'next-auth/react';
 import Link from '@/components/ui/Link';
+import { signIn } from 'next-auth/react';
 import { useRouter } from 'next/navigation';
 import { useState, type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
@@ -10,6 +10,7 @@ import { fieldError } from '@/components/ui/api-client';
 import { button, link } from '@/components/ui/styles';
 import { useApiMutation } from '@/components/ui/useApiMutation';
 import { signInErrorMessage } from '@/lib/auth/messages';
+import { NextStepLink } from './NextStepLink';
 
 /** The refusal that also covers an account still waiting for its confirmation link (see messages.ts). */
 const MISMATCH = 'CredentialsSignin';
@@ -79,12 +80,9 @@ export function SignInForm({ returnTo, initialError }: { returnTo: string; initi
       <button type="submit" className={`${button.primary} w-full`} disabled={busy}>
         {busy ? 'Signing in…' : 'Sign in'}
       </button>
-      <p className="text-center text-body text-basalt-600">
-        New here?{' '}
-        <Link href="/sign-up" className={link}>
-          Create an account
-        </Link>
-      </p>
+      <NextStepLink href="/sign-up" lead="New here?">
+        Create an account
+      </NextStepLink>
     </form>
   );
 }

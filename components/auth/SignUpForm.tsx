@@ -1,12 +1,12 @@
 'use client';
 
-import Link from '@/components/ui/Link';
 import { useState, type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
 import { fieldError } from '@/components/ui/api-client';
-import { button, link } from '@/components/ui/styles';
+import { button } from '@/components/ui/styles';
 import { useApiMutation } from '@/components/ui/useApiMutation';
+import { NextStepLink } from './NextStepLink';
 
 type SignUp = { name: string; email: string; password: string; organisationName: string };
 
@@ -49,11 +49,7 @@ export function SignUpForm() {
           Nothing after a few minutes? Check the spam folder. You can ask for a new link from the sign-in
           page.
         </p>
-        <p className="text-center text-body">
-          <Link href="/sign-in" className={link}>
-            Go to sign in
-          </Link>
-        </p>
+        <NextStepLink href="/sign-in">Go to sign in</NextStepLink>
       </div>
     );
   }
@@ -83,12 +79,9 @@ export function SignUpForm() {
       <button type="submit" className={`${button.primary} w-full`} disabled={busy}>
         {busy ? 'Creating your account…' : 'Create account'}
       </button>
-      <p className="text-center text-body text-basalt-600">
-        Already have an account?{' '}
-        <Link href="/sign-in" className={link}>
-          Sign in
-        </Link>
-      </p>
+      <NextStepLink href="/sign-in" lead="Already have an account?">
+        Sign in
+      </NextStepLink>
     </form>
   );
 }

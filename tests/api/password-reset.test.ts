@@ -1,7 +1,7 @@
 // "Forgot your password?" through the real route handlers, the outbox and the fake SMTP server: the same
 // answer for a known and an unknown address, a hashed single-use 30-minute token, limits per address and
 // per account, and a new password that ends every session of the person.
-import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
+import { afterAll, beforeEach, describe, expect, it, vi } from 'vitest';
 import * as complete from '@/app/api/password-reset/complete/route';
 import * as request from '@/app/api/password-reset/route';
 import * as enclosures from '@/app/api/enclosures/route';
@@ -12,17 +12,10 @@ import { AccountLink, MailMessage, User, type Organisation } from '@/models';
 import { FIXTURE_PASSWORD, closeDatabase, createMember, resetDatabase } from '../helpers/db';
 import { clearMail, listMail, waitForMail } from '../helpers/mail';
 import { call, sessionCookie } from './http';
+import { trustOneProxy } from './trust-proxy';
 
 afterAll(closeDatabase);
-// One trusted proxy in front: the address it appends to X-Forwarded-For is the client's.
-const trustBefore = process.env.TRUST_PROXY;
-beforeAll(() => {
-  process.env.TRUST_PROXY = '1';
-});
-afterAll(() => {
-  if (trustBefore === undefined) delete process.env.TRUST_PROXY;
-  else process.env.TRUST_PROXY = trustBefore;
-});
+trustOneProxy();
 
 let org: Organisation;
 let user: User;

@@ -1,4 +1,4 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
+import { afterAll, beforeEach, describe, expect, it, vi } from 'vitest';
 import { newSessionId } from '@/lib/auth/ended-sessions';
 import * as enclosures from '@/app/api/enclosures/route';
 import * as signUpRoute from '@/app/api/sign-up/route';
@@ -13,6 +13,7 @@ import { settleMail } from '@/lib/auth/mail-soon';
 import { clearMail, firstLink, listMail, waitForMail } from '../helpers/mail';
 import { closeDatabase, createMember, resetDatabase } from '../helpers/db';
 import { call, sessionCookie } from './http';
+import { trustOneProxy } from './trust-proxy';
 
 afterAll(closeDatabase);
 
@@ -30,14 +31,7 @@ beforeEach(async () => {
 // One trusted proxy in front (TRUST_PROXY=1): it appends the address it was reached from; anything before
 // that entry is whatever the client wrote.
 const from = (ip: string) => ({ 'x-forwarded-for': `10.0.0.1, ${ip}` });
-const trustBefore = process.env.TRUST_PROXY;
-beforeAll(() => {
-  process.env.TRUST_PROXY = '1';
-});
-afterAll(() => {
-  if (trustBefore === undefined) delete process.env.TRUST_PROXY;
-  else process.env.TRUST_PROXY = trustBefore;
-});
+trustOneProxy();
 
 /** What the sign-in page shows for a refusal (next-auth forwards the thrown message as the error code). */
 async function refusal(p: Promise<unknown>): Promise<string> {

@@ -1,7 +1,7 @@
 // A new account is confirmed by a single-use link e-mailed through the outbox and the fake SMTP server
 // before it can sign in; nothing a stranger sees (sign-up's answer, sign-in's refusal, "send the link
 // again") tells whether an address already had an account.
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import * as accept from '@/app/api/invitations/accept/route';
 import * as invitations from '@/app/api/invitations/route';
 import * as confirm from '@/app/api/sign-up/confirm/route';
@@ -15,17 +15,10 @@ import { AccountLink, Membership, Organisation, User } from '@/models';
 import { closeDatabase, createMember, createUser, resetDatabase } from '../helpers/db';
 import { clearMail, firstLink, listMail, waitForMail } from '../helpers/mail';
 import { call } from './http';
+import { trustOneProxy } from './trust-proxy';
 
 afterAll(closeDatabase);
-// One trusted proxy in front: the address it appends to X-Forwarded-For is the client's.
-const trustBefore = process.env.TRUST_PROXY;
-beforeAll(() => {
-  process.env.TRUST_PROXY = '1';
-});
-afterAll(() => {
-  if (trustBefore === undefined) delete process.env.TRUST_PROXY;
-  else process.env.TRUST_PROXY = trustBefore;
-});
+trustOneProxy();
 
 let address = 0;
 beforeEach(async () => {
