@@ -1,11 +1,15 @@
 'use client';
 
 import { useEffect } from 'react';
+import { apiFetch } from '@/components/ui/api-client';
 import { SESSION_REFRESH_MS } from '@/lib/auth/lifetime';
 
-/** Asks next-auth for the session, which re-issues its cookie for another lifetime (lib/auth/lifetime.ts). */
+/**
+ * Asks next-auth for the session, which re-issues its cookie for another lifetime (lib/auth/lifetime.ts).
+ * A failure is left alone: the next renewal tries again, and an ended session shows on the next page.
+ */
 function renew(): void {
-  void fetch('/api/auth/session', { credentials: 'same-origin', cache: 'no-store' }).catch(() => undefined);
+  void apiFetch('/api/auth/session').catch(() => undefined);
 }
 
 /**
