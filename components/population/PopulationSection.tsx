@@ -66,7 +66,7 @@ export function PopulationSection({
         <AdoptCurveButtons
           lampTypeId={lampTypeId}
           adopted={Boolean(adopted)}
-          mayAdopt={mayAdopt && view.ok}
+          mayAdopt={mayAdopt && view !== null && view.ok}
         />
         <p className="text-caption text-basalt-600">
           A curve needs at least {MIN_LAMPS} lamps, {MIN_READINGS} readings and {MIN_SPAN_MONTHS} months of
