@@ -73,7 +73,7 @@ describe('guided start on the server', () => {
     await expect(
       createFromGuidedStart(await who(keeperUser), input({ keeperId: otherKeeper.id })),
     ).rejects.toMatchObject({
-      status: 403,
+      kind: 'forbidden',
     });
     expect(await Enclosure.count()).toBe(0);
   });
@@ -86,7 +86,7 @@ describe('guided start on the server', () => {
     await expect(
       proposeFor(await who(staffUser), input({ speciesId: foreignSheet.id })),
     ).rejects.toMatchObject({
-      status: 404,
+      kind: 'not_found',
     });
   });
 

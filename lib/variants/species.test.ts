@@ -1,4 +1,5 @@
 import { beforeEach, describe, expect, it } from 'vitest';
+import { seedStartingCatalogue } from '@/lib/species/seed';
 import { STARTING_SHEETS } from '@/lib/species/starting-sheets';
 import { CatalogueSeeding, SpeciesSheet, type Organisation } from '@/models';
 import { createOrganisation, withTestDatabase } from '../../tests/helpers/db';
@@ -6,7 +7,7 @@ import { attachedSpecies, speciesOptions } from './species';
 
 withTestDatabase();
 
-// An organisation made before sign-up seeded the catalogue: no sheets, no seeding marker.
+// An organisation made without the catalogue (by a script, or before every creation path seeded it).
 let older: Organisation;
 
 beforeEach(async () => {
@@ -14,31 +15,36 @@ beforeEach(async () => {
 });
 
 describe('speciesOptions', () => {
-  it('gives an organisation without a catalogue its starting sheets, ready for the engine', async () => {
-    expect(await SpeciesSheet.count({ where: { organisationId: older.id } })).toBe(0);
+  it('reads the starting sheets, ready for the engine, once the organisation has them', async () => {
+    await seedStartingCatalogue(older.id);
     const options = await speciesOptions(older.id);
     expect(options.map((o) => o.scientificName).sort()).toEqual(
       STARTING_SHEETS.map((s) => s.scientificName).sort(),
     );
     const dragon = attachedSpecies(options, 'pogona vitticeps');
     expect(dragon?.sheet.uvZone).toBe(4);
-    expect(await CatalogueSeeding.findByPk(older.id)).not.toBeNull();
   });
 
+  it('only reads: an organisation without the catalogue gets none from it', async () => {
+    expect(await speciesOptions(older.id)).toEqual([]);
+    expect(await SpeciesSheet.count({ where: { organisationId: older.id } })).toBe(0);
+    expect(await CatalogueSeeding.findByPk(older.id)).toBeNull();
+  });
+});
+
+describe('seedStartingCatalogue', () => {
   it('is idempotent: a second call adds nothing, and a deleted sheet stays deleted', async () => {
-    await speciesOptions(older.id);
+    expect(await seedStartingCatalogue(older.id)).toBe(true);
     await SpeciesSheet.destroy({ where: { organisationId: older.id, seedKey: 'python-regius' } });
+    expect(await seedStartingCatalogue(older.id)).toBe(false);
     const again = await speciesOptions(older.id);
     expect(again).toHaveLength(STARTING_SHEETS.length - 1);
     expect(again.some((o) => o.scientificName === 'Python regius')).toBe(false);
-    expect(await SpeciesSheet.count({ where: { organisationId: older.id } })).toBe(
-      STARTING_SHEETS.length - 1,
-    );
   });
 
   it('runs concurrently for one organisation without duplicate sheets', async () => {
-    const lists = await Promise.all([1, 2, 3].map(() => speciesOptions(older.id)));
-    for (const list of lists) expect(list).toHaveLength(STARTING_SHEETS.length);
+    const done = await Promise.all([1, 2, 3].map(() => seedStartingCatalogue(older.id)));
+    expect(done.filter(Boolean)).toHaveLength(1);
     expect(await SpeciesSheet.count({ where: { organisationId: older.id } })).toBe(STARTING_SHEETS.length);
   });
 });

@@ -54,6 +54,7 @@ async function presetId(key: string): Promise<number> {
 
 describe('GET /api/lamp-types', () => {
   it('lists the starting catalogue, with sources, to any member', async () => {
+    await seedStartingCatalogue(shop.id);
     const r = await list(keeper, '&limit=100');
     expect(r.status).toBe(200);
     expect(r.body.items).toHaveLength(STARTING_LAMP_TYPES.length);
@@ -64,6 +65,7 @@ describe('GET /api/lamp-types', () => {
   });
 
   it('filters by technology and refuses an unknown one', async () => {
+    await seedStartingCatalogue(shop.id);
     const r = await list(staff, '&tech=ceramic');
     expect(r.body.items.map((l: { tech: string }) => l.tech)).toEqual(['ceramic']);
     const bad = await list(staff, '&tech=plasma');

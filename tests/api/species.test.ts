@@ -85,7 +85,8 @@ describe('seedStartingCatalogue', () => {
 });
 
 describe('GET /api/species', () => {
-  it('seeds lazily and lists the sheets to any member, keepers included', async () => {
+  it('lists the starting sheets to any member, keepers included', async () => {
+    await seedStartingCatalogue(shop.id);
     const r = await list(keeper, shop.id, '&limit=100');
     expect(r.status).toBe(200);
     expect(r.body.items).toHaveLength(STARTING_SHEETS.length);
@@ -101,6 +102,7 @@ describe('GET /api/species', () => {
   });
 
   it('pages with a cursor and searches by name', async () => {
+    await seedStartingCatalogue(shop.id);
     const first = await list(staff, shop.id, '&limit=5');
     expect(first.body.items).toHaveLength(5);
     const second = await list(staff, shop.id, `&limit=5&cursor=${first.body.nextCursor}`);
@@ -110,6 +112,13 @@ describe('GET /api/species', () => {
       'Crested gecko',
       'Leopard gecko',
     ]);
+  });
+
+  it('only reads: an organisation without the catalogue lists none and is not given it', async () => {
+    const r = await list(keeper, shop.id, '&limit=100');
+    expect(r.status).toBe(200);
+    expect(r.body.items).toEqual([]);
+    expect(await SpeciesSheet.count({ where: { organisationId: shop.id } })).toBe(0);
   });
 
   it('answers 401 without a session and 404 for another organisation', async () => {
