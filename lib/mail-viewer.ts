@@ -5,7 +5,8 @@
  *    never merely because a fake SMTP address is configured or the server runs in development mode;
  *  - a message is shown only to the organisation that sent it — by the tag it was sent with (lib/mail.ts),
  *    never by its addresses, since the same person can be invited by several organisations;
- *  - only to that organisation's owners (lib/permissions.ts), and only invitations and lamp reminders;
+ *  - only to that organisation's owners (lib/permissions.ts), and only invitations, lamp reminders and
+ *    the counter's test slips and re-test reminders to customers;
  *  - a link of an invitation that was used, withdrawn or has expired is replaced by a note.
  */
 import 'server-only';
@@ -26,7 +27,20 @@ export type CapturedMessage = {
 };
 
 /** The kinds of message the viewer shows. */
-export const VIEWER_KINDS: readonly string[] = ['invitation', 'lamp-reminder'];
+export const VIEWER_KINDS: readonly string[] = [
+  'invitation',
+  'lamp-reminder',
+  'counter-slip',
+  'counter-reminder',
+];
+
+/** What the viewer calls each kind it shows. */
+export const VIEWER_KIND_LABEL: Record<string, string> = {
+  invitation: 'invitation',
+  'lamp-reminder': 'lamp reminder',
+  'counter-slip': 'test slip to a customer',
+  'counter-reminder': 're-test reminder to a customer',
+};
 
 export function mailViewerEnabled(): boolean {
   return process.env.MAIL_VIEWER === '1';
@@ -69,7 +83,7 @@ async function withDeadLinksRemoved(messages: CapturedMessage[], organisationId:
 }
 
 /**
- * The captured invitations and lamp reminders `organisationId` sent, newest first, with dead invitation
+ * The captured messages of the viewer's kinds `organisationId` sent, newest first, with dead invitation
  * links removed; null when the fake SMTP server cannot be reached. The caller checks the flag and that
  * the person is an owner of the organisation.
  */

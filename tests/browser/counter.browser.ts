@@ -3,10 +3,12 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { demoSignIn } from '@/lib/demo/scenario';
 import { CounterReading } from '@/models';
 import { newContext, screenshot, signIn, withBrowser } from './harness';
-import { JOURNEY_MS } from './journey-helpers';
+import { JOURNEY_MS, eventually } from './journey-helpers';
 
 // The counter on a phone (390 × 844, touch), one-handed: a walk-in's lamp tested to a verdict in under ten
-// taps, saved for a new customer, and tested again a month later, when the lamp has its own decay fit.
+// taps, saved for a new customer who agrees to e-mails, the test slip sent to them (read in the owner's
+// mail viewer, its link followed signed out withdraws the consent), and the lamp tested again a month
+// later, when it has its own decay fit.
 // Taps are counted as a person would: a tap on a button or a field, two for a native picker (open it,
 // choose); typing a number into a field is not a tap.
 const session = withBrowser();
@@ -48,6 +50,30 @@ async function firstUvTube(page: Page): Promise<string> {
   return value!;
 }
 
+/** The text of the slip sent to `email`, as the organisation's owner sees it in the mail viewer. */
+async function slipInMailViewer(email: string): Promise<string> {
+  const ownerContext = await newContext(session.browser());
+  try {
+    const ownerPage = await ownerContext.newPage();
+    ownerPage.setDefaultTimeout(60_000);
+    const owner = demoSignIn('owner');
+    await signIn(ownerPage, owner.email, owner.password);
+    await ownerPage.goto('/mail');
+    const message = ownerPage.locator('main li').filter({ hasText: email });
+    await expect
+      .poll(async () => {
+        if ((await message.count()) === 0) await ownerPage.reload();
+        return message.count();
+      }, eventually)
+      .toBe(1);
+    expect(await message.innerText()).toMatch(/test slip to a customer/);
+    await screenshot(ownerPage, 'counter-mail-viewer-slip');
+    return await message.locator('pre').innerText();
+  } finally {
+    await ownerContext.close();
+  }
+}
+
 describe('the counter on a phone', () => {
   it(
     'tests a walk-in lamp to a verdict in under ten taps, saves it for a new customer, and retests it',
@@ -82,14 +108,44 @@ describe('the counter on a phone', () => {
       expect(await verdict.innerText()).toMatch(/vet/);
       await screenshot(page, 'counter-phone-verdict');
 
-      // Saved for a new customer, named at the counter.
+      // Saved for a new customer, named at the counter, who gives an address and agrees to e-mails.
+      const email = `morgan.counterfield.${Date.now()}@example.test`;
       await form.getByRole('radio', { name: 'New customer' }).tap();
       await form.getByLabel('Customer’s name').fill('Morgan Counterfield');
+      await form.getByLabel('E-mail (optional)').fill(email);
+      await form.getByLabel(/agrees to reminder e-mails/).check();
       await form.getByRole('button', { name: 'Save for the new customer' }).tap();
       const open = page.getByRole('link', { name: 'Open the lamp and its readings' });
       await open.waitFor();
       await screenshot(page, 'counter-phone-saved');
-      await open.tap();
+
+      // The slip goes to them; the owner's mail viewer shows it as it left, with the verdict and the link.
+      await page.getByRole('button', { name: 'E-mail the test slip' }).tap();
+      await expect
+        .poll(() => page.getByRole('status').filter({ hasText: 'slip' }).innerText())
+        .toContain(`on its way to ${email}`);
+      const customerHref = await page.getByRole('link', { name: 'the customer' }).getAttribute('href');
+      const lampHref = await open.getAttribute('href');
+      const slip = await slipInMailViewer(email);
+      expect(slip).toMatch(/Verdict: /);
+      expect(slip).toMatch(/vet/);
+      const unsubscribe = /https?:\/\/\S+\/api\/unsubscribe\?token=\S+/.exec(slip)?.[0];
+      expect(unsubscribe, 'the slip carries the link that stops e-mails').toBeDefined();
+
+      // Followed by the customer, signed out: e-mails stop, and the customer's page says so.
+      const outside = await newContext(session.browser());
+      try {
+        const customerPage = await outside.newPage();
+        await customerPage.goto(unsubscribe!);
+        await expect.poll(() => customerPage.locator('main').innerText()).toMatch(/E-mails stopped/);
+        expect(await customerPage.locator('main').innerText()).not.toContain('Morgan');
+        await screenshot(customerPage, 'counter-phone-unsubscribed');
+      } finally {
+        await outside.close();
+      }
+      await page.goto(customerHref!);
+      await expect.poll(() => page.locator('main').innerText()).toMatch(/No: withdrawn on/);
+      await page.goto(lampHref!);
       await page.waitForURL(/\/counter\/lamps\/\d+$/);
       const lampId = Number(/\/counter\/lamps\/(\d+)$/.exec(page.url())![1]);
       await expect.poll(() => page.locator('main').innerText()).toMatch(/Morgan Counterfield/);

@@ -5,7 +5,7 @@ import { EmptyState } from '@/components/ui/EmptyState';
 import { Notice } from '@/components/ui/Notice';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { config } from '@/lib/config';
-import { mailViewerEnabled, organisationMail } from '@/lib/mail-viewer';
+import { VIEWER_KIND_LABEL, mailViewerEnabled, organisationMail } from '@/lib/mail-viewer';
 import { can } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
 
@@ -29,7 +29,7 @@ export default async function MailPage() {
     <>
       <PageHeader
         title="Mail (development)"
-        lead="E-mail this organisation sent while the development mail server captured it instead of delivering it: invitations and lamp reminders. Only the organisation's owners see this page, and only when the server was started with MAIL_VIEWER=1; it is not part of a production deployment."
+        lead="E-mail this organisation sent while the development mail server captured it instead of delivering it: invitations, lamp reminders, and the counter's test slips and re-test reminders to customers. Only the organisation's owners see this page, and only when the server was started with MAIL_VIEWER=1; it is not part of a production deployment."
       />
       {ours === null ? (
         <Notice tone="warning" title="The development mail server cannot be reached">
@@ -47,7 +47,7 @@ export default async function MailPage() {
               <div className="flex flex-wrap justify-between gap-2 text-caption text-basalt-500">
                 <span>
                   To <span className="font-medium text-basalt-800">{m.to.join(', ')}</span> · from {m.from} ·{' '}
-                  {m.kind === 'invitation' ? 'invitation' : 'lamp reminder'}
+                  {VIEWER_KIND_LABEL[m.kind ?? ''] ?? m.kind}
                 </span>
                 <LocalTime value={m.receivedAt} />
               </div>
