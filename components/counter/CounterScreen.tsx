@@ -379,6 +379,10 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
               </>
             )}
             {' · '}
+            <a href={`/api/counter/lamps/${saved.lampId}/slip`} download className={link}>
+              Test slip (PDF)
+            </a>
+            {' · '}
             <a href="/counter" className={link}>
               Test another lamp
             </a>

@@ -4,56 +4,43 @@ import { UniqueConstraintError } from 'sequelize';
 
 import { deliverSoon } from '@/lib/auth/mail-soon';
 import { config } from '@/lib/config';
-import { organisationName } from '@/lib/organisations/queries';
+import { isExampleData, organisationName } from '@/lib/organisations/queries';
 import { CounterReading, Customer, MailMessage, type CounterLamp } from '@/models';
 import type { CounterLampView } from './queries';
 import { unsubscribeToken } from '@/lib/customers/unsubscribe-token';
+import { slipContent, slipText, type SlipContent } from './slip-content';
 
 /**
  * The test slip: an e-mail to the customer with the lamp, the reading, the verdict, the next test date,
  * the shop and the cautions — only what the test supports — sent through the outbox once per reading,
  * and only to a customer who agreed to e-mails. Every slip carries the one-click link that stops them.
+ * The same content is drawn as a one-page PDF (lib/reports/slip-pdf.ts) for the counter to print or hand on.
  */
 
-const round = (v: number) => (v >= 10 ? Math.round(v) : Math.round(v * 10) / 10);
-const value = (v: number, unit: string) => (unit === 'uvb' ? `${round(v)} µW/cm²` : `UV Index ${round(v)}`);
+/** The link in every e-mail to a customer that stops them, without signing in. */
+export function unsubscribeUrl(customerId: number): string {
+  return new URL(`/api/unsubscribe?token=${unsubscribeToken(customerId)}`, config().APP_URL).toString();
+}
 
-export function composeSlip(input: {
-  shop: string;
-  customerName: string;
-  lamp: CounterLampView;
-  unsubscribeUrl: string;
-}): { subject: string; text: string } {
-  const { lamp, shop } = input;
-  const last = lamp.readings[lamp.readings.length - 1]!;
-  const v = lamp.answer!.verdict;
-  const lines = [
-    `Hello ${input.customerName},`,
-    '',
-    `${shop} tested your lamp on ${last.takenAt.slice(0, 10)}.`,
-    '',
-    `Lamp: ${lamp.label ? `${lamp.label} (${lamp.lampTypeName})` : lamp.lampTypeName}, in use since ${lamp.firstUsedEstimated ? 'about ' : ''}${lamp.firstUsedOn}.`,
-    `Reading: ${value(last.value, last.unit)} at ${round(last.distanceCm)} cm below the lamp.`,
-    ...(v.output
-      ? [`Output left: about ${Math.round(v.output.share * 100)} % of a new lamp of this type.`]
-      : []),
-    ...(v.basking
-      ? [
-          `At the basking spot at home: about ${value(v.basking.valueNow, v.basking.unit)}; the need is ${v.basking.needLabel}.`,
-        ]
-      : []),
-    '',
-    `Verdict: ${v.headline}`,
-    ...(v.testAgainOn ? [`Next test: by ${v.testAgainOn}.`] : []),
-    '',
-    'Please note:',
-    ...v.cautions.map((c) => `- ${c}`),
-    '',
-    `${shop}`,
-    '',
-    `To stop e-mails about your lamp tests from ${shop}, open this link (no sign-in needed): ${input.unsubscribeUrl}`,
-  ];
-  return { subject: `Your lamp test at ${shop}: ${v.headline.split(':')[0]}`, text: lines.join('\n') };
+/** What the slip of the lamp's latest reading says (the e-mail and the PDF say the same). */
+export async function slipContentOf(
+  view: CounterLampView,
+  customerName: string | null,
+): Promise<SlipContent> {
+  if (!view.answer || view.readings.length === 0)
+    throw invalid('reading', 'This lamp has no reading to report.');
+  const [shop, exampleData] = await Promise.all([
+    organisationName(view.organisationId),
+    isExampleData(view.organisationId),
+  ]);
+  return slipContent({ shop: shop ?? 'The shop', customerName, lamp: view, exampleData });
+}
+
+/** The name of the lamp's customer, or null for a lamp kept without one (a walk-in). */
+export async function customerNameOf(lamp: CounterLamp): Promise<string | null> {
+  getSequelize();
+  if (!lamp.customerId) return null;
+  return (await Customer.findByPk(lamp.customerId, { attributes: ['name'] }))?.name ?? null;
 }
 
 /** Queues the slip of the lamp's latest reading; null when it was sent before. */
@@ -72,12 +59,7 @@ export async function sendSlip(lamp: CounterLamp, view: CounterLampView): Promis
     order: [['takenAt', 'DESC']],
   });
   if (!last || !view.answer) throw invalid('reading', 'This lamp has no reading to report.');
-  const shop = (await organisationName(lamp.organisationId)) ?? 'The shop';
-  const unsubscribeUrl = new URL(
-    `/api/unsubscribe?token=${unsubscribeToken(customer.id)}`,
-    config().APP_URL,
-  ).toString();
-  const { subject, text } = composeSlip({ shop, customerName: customer.name, lamp: view, unsubscribeUrl });
+  const { subject, text } = slipText(await slipContentOf(view, customer.name), unsubscribeUrl(customer.id));
   try {
     const message = await MailMessage.create({
       kind: 'counter-slip',

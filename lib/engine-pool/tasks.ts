@@ -12,8 +12,10 @@ import { calibrate, type Calibration } from '@/lib/lamp-log/calibrate';
 import { lampChart, type LampChartInput, type LampChartResult } from '@/lib/lamp-log/chart';
 import type { LampFacts, ReadingFacts } from '@/lib/lamp-log/outlook';
 import type { LampTypeDto } from '@/lib/lamp-types/schema';
+import type { SlipContent } from '@/lib/counter/slip-content';
 import { populationCurve, type PopulationCurve, type PopulationInput } from '@/lib/population/fit';
 import { fieldPng, reportPdf, type ReportOptions, type ReportSubject } from '@/lib/reports/build';
+import { renderSlipPdf } from '@/lib/reports/slip-pdf';
 import { computedFor, type FieldView } from '@/lib/variants/computed';
 import { cachedStudioFirstField } from '@/lib/variants/studio-first-field';
 import type { StudioFirstField } from '@/shared/designs/studio-field';
@@ -34,6 +36,11 @@ export const engineTasks = {
   /** The PDF report of a design: field picture, key figures, species check, lamps, cautions. */
   reportPdf(input: { subject: ReportSubject; options: ReportOptions; now: Date }): Promise<Uint8Array> {
     return reportPdf(input.subject, input.options, input.now);
+  },
+
+  /** The counter's one-page test slip. */
+  counterSlipPdf(input: { content: SlipContent; now: Date }): Promise<Uint8Array> {
+    return renderSlipPdf(input.content, input.now);
   },
 
   /**

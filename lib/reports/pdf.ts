@@ -5,7 +5,7 @@
  */
 import 'server-only';
 import { FINDING_STATUS } from '@/shared/finding-status';
-import { degrees, drawImage, PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage } from 'pdf-lib';
+import { degrees, drawImage, PDFDocument, StandardFonts, rgb } from 'pdf-lib';
 import { sizeBoth, tempBoth } from '@/shared/units';
 import type { KeyFigures } from '@/shared/designs/figures';
 import { bandLabel, type FieldScale } from '@/shared/field-scale';
@@ -15,7 +15,8 @@ import { EXAMPLE_DATA_NOTE } from '@/shared/example-data';
 import { DEFER_NOTE, ESTIMATE_NOTE } from './cautions';
 import type { LampRow } from './lamps';
 import type { FlateImage } from './png';
-import { winAnsi, wrap } from './pdf-text';
+import { winAnsi } from './pdf-text';
+import { INK, M, MUTED, Writer } from './pdf-writer';
 
 export type ReportFinding = {
   id?: string;
@@ -47,10 +48,6 @@ export type ReportInput = {
   design: Pick<Design, 'objects'>;
 };
 
-const A4: [number, number] = [595.28, 841.89];
-const M = 48;
-const INK = rgb(0.11, 0.12, 0.1);
-const MUTED = rgb(0.37, 0.4, 0.34);
 // A finding's state reads as in the app (Pass / Attention / Fail). The standard PDF font has no ✓ or ✕,
 // so the report gives the word alone.
 const STATUS_COLOR = {
@@ -63,73 +60,6 @@ const STATUS_WORD = {
   attention: FINDING_STATUS.attention.word,
   fail: FINDING_STATUS.fail.word,
 };
-
-class Writer {
-  page: PDFPage;
-  y: number;
-  constructor(
-    readonly doc: PDFDocument,
-    readonly font: PDFFont,
-    readonly bold: PDFFont,
-  ) {
-    this.page = doc.addPage(A4);
-    this.y = A4[1] - M;
-  }
-  get width() {
-    return A4[0] - 2 * M;
-  }
-  need(h: number) {
-    if (this.y - h < M + 20) {
-      this.page = this.doc.addPage(A4);
-      this.y = A4[1] - M;
-    }
-  }
-  text(
-    t: string,
-    o: { size?: number; bold?: boolean; color?: ReturnType<typeof rgb>; indent?: number; gap?: number } = {},
-  ) {
-    const size = o.size ?? 10;
-    const font = o.bold ? this.bold : this.font;
-    const indent = o.indent ?? 0;
-    for (const line of wrap(font, t, size, this.width - indent)) {
-      this.need(size * 1.35);
-      this.page.drawText(line, { x: M + indent, y: this.y - size, size, font, color: o.color ?? INK });
-      this.y -= size * 1.35;
-    }
-    this.y -= o.gap ?? 2;
-  }
-  heading(t: string) {
-    this.y -= 8;
-    this.need(40);
-    this.text(t, { size: 13, bold: true, gap: 4 });
-  }
-  /** Label/value rows in two columns. */
-  rows(rows: [string, string][], labelWidth = 190) {
-    for (const [label, value] of rows) {
-      this.need(14);
-      this.page.drawText(winAnsi(this.font, label), {
-        x: M,
-        y: this.y - 10,
-        size: 10,
-        font: this.font,
-        color: MUTED,
-      });
-      const lines = wrap(this.font, value, 10, this.width - labelWidth);
-      for (const line of lines) {
-        this.need(14);
-        this.page.drawText(line, {
-          x: M + labelWidth,
-          y: this.y - 10,
-          size: 10,
-          font: this.font,
-          color: INK,
-        });
-        this.y -= 13.5;
-      }
-    }
-    this.y -= 2;
-  }
-}
 
 const fmt = (v: number, digits = 1) => Number(v.toFixed(digits)).toString();
 const hexRgb = (h: string) => {

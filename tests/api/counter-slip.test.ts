@@ -3,11 +3,14 @@ import * as slip from '@/app/api/counter/lamps/[id]/slip/route';
 import * as tests from '@/app/api/counter/tests/route';
 import * as unsubscribe from '@/app/api/unsubscribe/route';
 import { settleMail } from '@/lib/auth/mail-soon';
+import { PDFDocument } from 'pdf-lib';
+import { COUNTER_CAUTIONS } from '@/lib/counter/assess';
 import { unsubscribeToken } from '@/lib/customers/unsubscribe-token';
-import { Customer, LampType, MailMessage, type Organisation, type User } from '@/models';
+import { Customer, LampType, MailMessage, SpeciesSheet, type Organisation, type User } from '@/models';
 import { withTestDatabase } from '../helpers/db';
 import { createWorld } from '../helpers/world';
 import { call } from './http';
+import { call as callRaw, pdfDrawnText } from './variants.helpers';
 
 withTestDatabase();
 
@@ -22,14 +25,14 @@ beforeEach(async () => {
   tubeId = (await LampType.findOne({ where: { organisationId: shop.id, tech: 't5' } }))!.id;
 });
 
-async function testedLamp(customer: Record<string, unknown>) {
+async function testedLamp(customer: Record<string, unknown>, home: Record<string, unknown> = {}) {
   const r = await call(tests.POST, {
     method: 'POST',
     path: '/api/counter/tests',
     as: staff,
     body: {
       organisationId: shop.id,
-      lamp: { lampTypeId: tubeId, ageMonths: 6, hoursPerDay: 12 },
+      lamp: { lampTypeId: tubeId, ageMonths: 6, hoursPerDay: 12, ...home },
       reading: { distance: 30, value: 30, unit: 'uvb', through: 'nothing', warmedUp: 'yes' },
       customer: { kind: 'new', name: 'Jules Invented', ...customer },
     },
@@ -111,5 +114,57 @@ describe('the test slip and the unsubscribe link', () => {
     for (const who of [keeper, outsider]) expect((await sendSlip(who, lampId)).status).toBe(404);
     expect((await sendSlip(null, lampId)).status).toBe(401);
     expect(await MailMessage.count()).toBe(0);
+  });
+});
+
+describe('the test slip as a one-page PDF', { timeout: 150_000 }, () => {
+  const slipPdf = async (as: User | null, id: number) =>
+    callRaw(slip.GET, { path: `/api/counter/lamps/${id}/slip`, params: { id }, user: as });
+  const drawn = async (res: Response) => {
+    const bytes = new Uint8Array(await res.arrayBuffer());
+    const doc = await PDFDocument.load(bytes);
+    // The drawn words wrap across lines: one space between any two makes a sentence searchable.
+    return { pages: doc.getPageCount(), text: pdfDrawnText(bytes).replace(/\s+/g, ' ') };
+  };
+
+  it('has one page with the shop, the verdict and the cautions, and no basking figure without a species', async () => {
+    const { lampId } = await testedLamp({ email: null, reminderConsent: false });
+    const r = await slipPdf(staff, lampId);
+    expect(r.status).toBe(200);
+    expect(r.res.headers.get('content-type')).toBe('application/pdf');
+    expect(r.res.headers.get('content-disposition')).toMatch(
+      /^attachment; filename="lamp-test-\d+-\d{4}-\d{2}-\d{2}\.pdf"$/,
+    );
+    const { pages, text } = await drawn(r.res);
+    expect(pages).toBe(1);
+    expect(text).toContain(shop.name);
+    expect(text).toContain('Jules Invented');
+    expect(text).toMatch(/(Keep it|Test it again by|Replace it)/);
+    expect(text).toContain('Output left');
+    // Every standing caution, word for word (the PDF font spells a few marks out, so compare the words).
+    const words = (s: string) =>
+      s
+        .replace(/[^A-Za-z0-9 ]+/g, ' ')
+        .replace(/\s+/g, ' ')
+        .trim();
+    for (const caution of COUNTER_CAUTIONS) expect(words(text)).toContain(words(caution));
+    expect(text).not.toMatch(/Basking spot/);
+  });
+
+  it('gives the basking spot at home only when the customer named the species and the distance', async () => {
+    const sheet = (await SpeciesSheet.findOne({ where: { organisationId: shop.id, uvZone: 3 } }))!;
+    const { lampId } = await testedLamp(
+      { email: null, reminderConsent: false },
+      { speciesSheetId: sheet.id, baskingDistance: 30 },
+    );
+    const { pages, text } = await drawn((await slipPdf(staff, lampId)).res);
+    expect(pages).toBe(1);
+    expect(text).toMatch(/Basking spot at home about (UV Index|\d)/);
+  });
+
+  it('keepers, another organisation and nobody get no slip', async () => {
+    const { lampId } = await testedLamp({ email: null, reminderConsent: false });
+    for (const who of [keeper, outsider]) expect((await slipPdf(who, lampId)).status).toBe(404);
+    expect((await slipPdf(null, lampId)).status).toBe(401);
   });
 });

@@ -52,6 +52,11 @@ export default async function CounterLampPage({ params }: Props) {
             <Link href={`/counter?lamp=${lamp.id}`} className={button.primary}>
               Test again
             </Link>
+            {lamp.answer && (
+              <a href={`/api/counter/lamps/${lamp.id}/slip`} download className={button.secondary}>
+                Test slip (PDF)
+              </a>
+            )}
             {lamp.customer?.mayEmail && lamp.answer && <SendSlipButton lampId={lamp.id} />}
           </>
         }

@@ -2,12 +2,27 @@ import { created, json, route } from '@/lib/api';
 import { idParams } from '@/lib/api/schemas';
 import { counterLampFor } from '@/lib/customers/access';
 import { counterLampView } from '@/lib/counter/queries';
-import { sendSlip } from '@/lib/counter/slip';
+import { customerNameOf, sendSlip, slipContentOf } from '@/lib/counter/slip';
+import { runEngineTask } from '@/lib/engine-pool';
+import { download } from '@/lib/reports/build';
 
 /**
- * E-mails the test slip of the lamp's latest reading to its customer, through the outbox: only with the
- * customer's consent and an address; once per reading (a second request answers `queued: false`).
+ * The test slip of the lamp's latest reading. GET: the one-page PDF for the counter to print or hand on
+ * (drawn on an engine thread, as the reports are). POST: the same slip e-mailed to the customer through
+ * the outbox, only with the customer's consent and an address; once per reading (a second request
+ * answers `queued: false`).
  */
+export const GET = route({
+  params: idParams,
+  handler: async ({ params, user, req }) => {
+    const lamp = await counterLampFor(user, params.id, 'read');
+    const view = await counterLampView(lamp);
+    const content = await slipContentOf(view, await customerNameOf(lamp));
+    const pdf = await runEngineTask('counterSlipPdf', { content, now: new Date() }, { signal: req.signal });
+    return download(new Uint8Array(pdf), 'application/pdf', `lamp-test-${lamp.id}-${content.testedOn}.pdf`);
+  },
+});
+
 export const POST = route({
   params: idParams,
   handler: async ({ params, user }) => {
