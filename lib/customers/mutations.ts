@@ -2,7 +2,9 @@ import 'server-only';
 import { invalid } from '@/lib/errors';
 
 import { getSequelize } from '@/lib/db';
-import { CounterLamp, Customer } from '@/models';
+import { Op, type Transaction } from 'sequelize';
+import { MAX_ATTEMPTS } from '@/lib/reminders/outbox';
+import { CounterLamp, Customer, MailMessage } from '@/models';
 import { organisationName } from '@/lib/organisations/queries';
 import type { CustomerInput, CustomerPatch } from './schemas';
 import { customerOfToken } from './unsubscribe-token';
@@ -40,13 +42,50 @@ export async function updateCustomer(customer: Customer, patch: CustomerPatch, n
   const email = 'email' in next ? next.email : customer.email;
   const consent = 'reminderConsentAt' in next ? next.reminderConsentAt : customer.reminderConsentAt;
   if (consent && !email) throw invalid('email', 'Reminder e-mails need an e-mail address.');
-  return customer.update(next);
+  if (next.reminderConsentAt !== null) return customer.update(next);
+  const previousEmail = customer.email;
+  return getSequelize().transaction(async (transaction) => {
+    await customer.update(next, { transaction });
+    await cancelUnsentMail(customer, previousEmail, transaction);
+    return customer;
+  });
 }
 
 /** Withdraws consent to reminder e-mails (the unsubscribe link, or the customer asking). */
 export async function withdrawConsent(customer: Customer, now = new Date()) {
   if (!customer.reminderConsentAt) return customer;
-  return customer.update({ reminderConsentAt: null, reminderConsentWithdrawnAt: now });
+  return getSequelize().transaction(async (transaction) => {
+    await customer.update({ reminderConsentAt: null, reminderConsentWithdrawnAt: now }, { transaction });
+    await cancelUnsentMail(customer, customer.email, transaction);
+    return customer;
+  });
+}
+
+/**
+ * A slip or reminder to the customer still waiting in the outbox is not sent once consent is withdrawn:
+ * it is marked failed for good, with the reason. (One already being handed to the mail server cannot be
+ * called back.)
+ */
+async function cancelUnsentMail(customer: Customer, email: string | null, transaction: Transaction) {
+  if (!email) return;
+  await MailMessage.update(
+    {
+      status: 'failed',
+      attempts: MAX_ATTEMPTS,
+      nextAttemptAt: null,
+      lastError: 'Not sent: the customer withdrew their consent to e-mails.',
+    },
+    {
+      where: {
+        organisationId: customer.organisationId,
+        toEmail: email,
+        kind: ['counter-slip', 'counter-reminder'],
+        sentAt: null,
+        [Op.or]: [{ status: 'queued', attempts: 0 }, { status: 'failed' }],
+      },
+      transaction,
+    },
+  );
 }
 
 /**

@@ -143,8 +143,16 @@ export async function reminderWork(ctx: JobContext, opts: ReminderOptions = {}):
     if (r.ok && r.value) ctx.count('e-mails queued', 1, g.organisationId);
   }
 
+  await deliverForJob(ctx, opts.send);
+}
+
+/**
+ * A job's last step: deliver the outbox, counting what went and what failed (a failure is one of the
+ * run's failed units, so the owner's Jobs page shows it; the message is retried with back-off).
+ */
+export async function deliverForJob(ctx: JobContext, send?: (mail: Mail) => Promise<void>): Promise<void> {
   const delivery = await deliverQueued({
-    send: opts.send,
+    send,
     now: ctx.now,
     onFailure: (m, e) => {
       ctx.count('units failed', 1, m.organisationId);
