@@ -60,6 +60,7 @@ export const REQUESTS: Record<string, RequestSpec> = {
   'POST /api/counter/assess': { body: (w) => COUNTER_TEST(w) },
   'POST /api/counter/tests': { body: (w) => COUNTER_TEST(w) },
   'GET /api/counter/lamps/[id]': {},
+  'GET /api/counter/lamps/[id]/slip': {},
   'POST /api/counter/lamps/[id]/slip': {},
   // A well-formed token of A's customer with a made-up signature: 404 for everyone.
   'GET /api/unsubscribe': { query: (w) => `token=${w.customer}.${'A'.repeat(43)}` },
