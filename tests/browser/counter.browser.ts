@@ -121,9 +121,7 @@ describe('the counter on a phone', () => {
 
       // The slip goes to them; the owner's mail viewer shows it as it left, with the verdict and the link.
       await page.getByRole('button', { name: 'E-mail the test slip' }).tap();
-      await expect
-        .poll(() => page.getByRole('status').filter({ hasText: 'slip' }).innerText())
-        .toContain(`on its way to ${email}`);
+      await page.getByText(`The slip is on its way to ${email}.`).waitFor();
       const customerHref = await page.getByRole('link', { name: 'the customer' }).getAttribute('href');
       const lampHref = await open.getAttribute('href');
       const slip = await slipInMailViewer(email);
@@ -137,14 +135,16 @@ describe('the counter on a phone', () => {
       try {
         const customerPage = await outside.newPage();
         await customerPage.goto(unsubscribe!);
-        await expect.poll(() => customerPage.locator('main').innerText()).toMatch(/E-mails stopped/);
+        await expect
+          .poll(() => customerPage.locator('main').innerText(), eventually)
+          .toMatch(/E-mails stopped/);
         expect(await customerPage.locator('main').innerText()).not.toContain('Morgan');
         await screenshot(customerPage, 'counter-phone-unsubscribed');
       } finally {
         await outside.close();
       }
       await page.goto(customerHref!);
-      await expect.poll(() => page.locator('main').innerText()).toMatch(/No: withdrawn on/);
+      await expect.poll(() => page.locator('main').innerText(), eventually).toMatch(/No: withdrawn on/);
       await page.goto(lampHref!);
       await page.waitForURL(/\/counter\/lamps\/\d+$/);
       const lampId = Number(/\/counter\/lamps\/(\d+)$/.exec(page.url())![1]);
