@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import Link from '@/components/ui/Link';
+import { CounterCsvImport } from '@/components/counter/CounterCsvImport';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { button, card, input, link } from '@/components/ui/styles';
@@ -85,6 +86,12 @@ export default async function CustomersPage({ searchParams }: Props) {
       {more && (
         <p className="mt-3 text-caption text-basalt-500">More customers match: search to narrow the list.</p>
       )}
+      <section aria-labelledby="counter-import" className={`${card} mt-6 p-4`}>
+        <h2 id="counter-import" className="mb-3 text-lead font-semibold">
+          Import past counter tests (CSV)
+        </h2>
+        <CounterCsvImport organisationId={membership.organisationId} />
+      </section>
     </>
   );
 }
