@@ -65,6 +65,15 @@ export const REQUESTS: Record<string, RequestSpec> = {
   // A well-formed token of A's customer with a made-up signature: 404 for everyone.
   'GET /api/unsubscribe': { query: (w) => `token=${w.customer}.${'A'.repeat(43)}` },
   'GET /api/customers/[id]': {},
+  'GET /api/customers/[id]/export': {},
+  // A good file that would import (the control shows it), so a refusal comes from the access check.
+  'POST /api/counter/import': {
+    body: (w) => ({
+      organisationId: w.orgA,
+      csv: `customer,lamp_type,first_use,date,distance,value,unit\nKit Invented,${w.lampType},2025-01-10,2025-03-01,30,40,uvb\n`,
+      commit: true,
+    }),
+  },
   'PATCH /api/customers/[id]': { body: () => ({ notes: 'Asked about a new tube.' }) },
   'DELETE /api/customers/[id]': {},
   // A search that finds the customer, so a leak would show its marker.

@@ -43,6 +43,9 @@ export default async function CustomerPage({ params }: Props) {
             <Link href={`/customers/${customer.id}/edit`} className={button.secondary}>
               Change
             </Link>
+            <a href={`/api/customers/${customer.id}/export`} download className={button.secondary}>
+              Export their data (JSON)
+            </a>
             <DeleteCustomerButton id={customer.id} name={customer.name} />
           </>
         }
