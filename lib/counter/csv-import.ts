@@ -27,7 +27,6 @@ export type CounterCsvPreview = CounterCsvResult & {
 const key = (name: string) => name.trim().replace(/\s+/g, ' ').toLowerCase();
 
 async function context(organisationId: number) {
-  getSequelize();
   const [types, customers] = await Promise.all([
     LampType.findAll({ where: { organisationId }, order: [['id', 'ASC']] }),
     Customer.findAll({ where: { organisationId }, attributes: ['id', 'name'], order: [['id', 'ASC']] }),

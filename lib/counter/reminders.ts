@@ -127,7 +127,6 @@ export async function enqueueCounterReminder(
 }
 
 export async function counterReminderWork(ctx: JobContext, opts: CounterReminderOptions = {}) {
-  getSequelize();
   const today = opts.today ?? todayIso();
   const from = addDays(today, -STALE_AFTER_DAYS);
   const until = addDays(today, REMIND_DAYS_BEFORE);

@@ -38,7 +38,6 @@ export async function slipContentOf(
 
 /** The name of the lamp's customer, or null for a lamp kept without one (a walk-in). */
 export async function customerNameOf(lamp: CounterLamp): Promise<string | null> {
-  getSequelize();
   if (!lamp.customerId) return null;
   return (await Customer.findByPk(lamp.customerId, { attributes: ['name'] }))?.name ?? null;
 }

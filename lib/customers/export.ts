@@ -1,5 +1,4 @@
 import 'server-only';
-import { getSequelize } from '@/lib/db';
 import { organisationName } from '@/lib/organisations/queries';
 import { CounterLamp, CounterReading, LampType, MailMessage, SpeciesSheet, type Customer } from '@/models';
 
@@ -9,7 +8,6 @@ import { CounterLamp, CounterReading, LampType, MailMessage, SpeciesSheet, type 
  * and their lamps with every reading and the verdict given at each test. Plain JSON, one file.
  */
 export async function customerExport(customer: Customer, now = new Date()) {
-  getSequelize();
   const [shop, lamps, mail] = await Promise.all([
     organisationName(customer.organisationId),
     CounterLamp.findAll({
