@@ -1,8 +1,6 @@
 import 'server-only';
-import { json } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { getSequelize } from '@/lib/db';
-import { rowErrorsResponse } from '@/lib/lamp-log/csv-import';
 import { lampFacts, readingFacts } from '@/lib/lamp-log/store';
 import { toDto as lampTypeDto } from '@/lib/lamp-types/store';
 import { CounterLamp, CounterReading, Customer, LampType } from '@/models';
@@ -59,14 +57,19 @@ export async function previewCounterCsv(
   };
 }
 
+/** All rows imported, or none: then every row's problem, for the route to answer. */
+export type CounterImportOutcome =
+  | { ok: true; imported: number; customersAdded: number; lampsAdded: number }
+  | { ok: false; errors: CounterCsvResult['errors'] };
+
 export async function importCounterCsv(
   user: CurrentUser,
   organisationId: number,
   csv: string,
   tzOffsetMinutes: number,
-): Promise<Response> {
+): Promise<CounterImportOutcome> {
   const preview = await previewCounterCsv(organisationId, csv, tzOffsetMinutes);
-  if (preview.errors.length > 0) return rowErrorsResponse(preview);
+  if (preview.errors.length > 0) return { ok: false, errors: preview.errors };
   const { types, byName } = await context(organisationId);
   const typeOf = new Map(types.map((t) => [t.id, t]));
   // One lamp per customer (or walk-in row group), type and first use.
@@ -166,5 +169,5 @@ export async function importCounterCsv(
     }
     return { customersAdded, lampsAdded };
   });
-  return json({ imported: preview.rows.length, ...counts }, 201);
+  return { ok: true, imported: preview.rows.length, ...counts };
 }

@@ -1,8 +1,9 @@
 import { z } from 'zod';
-import { allow, ApiError, route } from '@/lib/api';
+import { allow, json, route } from '@/lib/api';
+import { checkCsvSize, rowErrorsResponse } from '@/lib/api/csv-import';
 import { idSchema } from '@/lib/api/schemas';
 import { importCounterCsv, previewCounterCsv } from '@/lib/counter/csv-import';
-import { MAX_CSV_BYTES, MAX_CSV_IMPORT_BODY_BYTES } from '@/lib/uploads/limits';
+import { MAX_CSV_IMPORT_BODY_BYTES } from '@/lib/uploads/limits';
 
 const body = z.strictObject({
   organisationId: idSchema('The organisation'),
@@ -23,15 +24,12 @@ export const POST = route({
   body,
   maxBodyBytes: MAX_CSV_IMPORT_BODY_BYTES,
   handler: async ({ body, user }) => {
-    if (Buffer.byteLength(body.csv, 'utf8') > MAX_CSV_BYTES)
-      throw new ApiError(
-        413,
-        'payload_too_large',
-        `The file is larger than ${MAX_CSV_BYTES / 1024} KB; split it into smaller files.`,
-        'csv',
-      );
+    checkCsvSize(body.csv);
     allow(user, 'create', { kind: 'customer', organisationId: body.organisationId }, 'The organisation');
     if (!body.commit) return previewCounterCsv(body.organisationId, body.csv, body.tzOffsetMinutes);
-    return importCounterCsv(user, body.organisationId, body.csv, body.tzOffsetMinutes);
+    const outcome = await importCounterCsv(user, body.organisationId, body.csv, body.tzOffsetMinutes);
+    if (!outcome.ok) return rowErrorsResponse(outcome.errors);
+    const { imported, customersAdded, lampsAdded } = outcome;
+    return json({ imported, customersAdded, lampsAdded }, 201);
   },
 });

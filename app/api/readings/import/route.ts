@@ -1,9 +1,10 @@
 import { z } from 'zod';
-import { ApiError, json, route } from '@/lib/api';
+import { json, route } from '@/lib/api';
+import { checkCsvSize, rowErrorsResponse } from '@/lib/api/csv-import';
 import { idSchema } from '@/lib/api/schemas';
 import { enclosureFor } from '@/lib/enclosures/access';
-import { importCsv, previewCsv, type CsvResult } from '@/lib/lamp-log/csv-import';
-import { MAX_CSV_BYTES, MAX_CSV_IMPORT_BODY_BYTES } from '@/lib/uploads/limits';
+import { importCsv, previewCsv } from '@/lib/lamp-log/csv-import';
+import { MAX_CSV_IMPORT_BODY_BYTES } from '@/lib/uploads/limits';
 
 const body = z.strictObject({
   enclosureId: idSchema('The enclosure'),
@@ -16,37 +17,11 @@ const body = z.strictObject({
   commit: z.boolean().default(false),
 });
 
-const csvTooLarge = () =>
-  new ApiError(
-    413,
-    'payload_too_large',
-    `The file is larger than ${MAX_CSV_BYTES / 1024} KB; split it into smaller files.`,
-    'csv',
-    [{ field: 'csv', message: `The file is larger than ${MAX_CSV_BYTES / 1024} KB.` }],
-  );
-
-/** Every row's problem, beside the usual error body: the page marks each row. */
-function rowErrorsResponse(result: CsvResult): Response {
-  const first = result.errors[0]!;
-  return json(
-    {
-      error: {
-        code: 'invalid',
-        message: `Nothing was imported: ${result.errors.length} row${result.errors.length > 1 ? 's have' : ' has'} a problem. Row ${first.row}: ${first.message}`,
-        field: `rows[${first.row}].${first.field}`,
-        issues: result.errors.map((e) => ({ field: `rows[${e.row}].${e.field}`, message: e.message })),
-      },
-      errors: result.errors,
-    },
-    400,
-  );
-}
-
 export const POST = route({
   body,
   maxBodyBytes: MAX_CSV_IMPORT_BODY_BYTES,
   handler: async ({ body, user }) => {
-    if (Buffer.byteLength(body.csv, 'utf8') > MAX_CSV_BYTES) throw csvTooLarge();
+    checkCsvSize(body.csv);
     const enclosure = await enclosureFor(user, body.enclosureId, body.commit ? 'update' : 'read');
     if (!body.commit) {
       const result = await previewCsv(enclosure, body.csv, body.tzOffsetMinutes);
@@ -56,7 +31,7 @@ export const POST = route({
       tzOffsetMinutes: body.tzOffsetMinutes,
       fileName: body.fileName ?? null,
     });
-    if (!outcome.ok) return rowErrorsResponse(outcome.result);
+    if (!outcome.ok) return rowErrorsResponse(outcome.result.errors);
     const { imported, uploadId, rows } = outcome;
     return json({ imported, uploadId, rows }, 201);
   },

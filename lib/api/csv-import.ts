@@ -1,0 +1,40 @@
+import 'server-only';
+import { ApiError } from './errors';
+import { json } from './route';
+import { MAX_CSV_BYTES } from '@/lib/uploads/limits';
+
+/** A problem of one CSV row: its line number, the column it is in and what is wrong. */
+export type CsvRowError = { row: number; field: string; message: string };
+
+/**
+ * The 400 answer of an import refused for its rows (the lamp log's readings and the counter's past
+ * tests): the usual error body, naming the first problem, and every row's problem beside it, so the page
+ * marks each row.
+ */
+export function rowErrorsResponse(errors: CsvRowError[]): Response {
+  const first = errors[0]!;
+  return json(
+    {
+      error: {
+        code: 'invalid',
+        message: `Nothing was imported: ${errors.length} row${errors.length > 1 ? 's have' : ' has'} a problem. Row ${first.row}: ${first.message}`,
+        field: `rows[${first.row}].${first.field}`,
+        issues: errors.map((e) => ({ field: `rows[${e.row}].${e.field}`, message: e.message })),
+      },
+      errors,
+    },
+    400,
+  );
+}
+
+/** A CSV file's size cap is in bytes, as the file's, and answers 413 like every size cap. */
+export function checkCsvSize(csv: string): void {
+  if (Buffer.byteLength(csv, 'utf8') > MAX_CSV_BYTES)
+    throw new ApiError(
+      413,
+      'payload_too_large',
+      `The file is larger than ${MAX_CSV_BYTES / 1024} KB; split it into smaller files.`,
+      'csv',
+      [{ field: 'csv', message: `The file is larger than ${MAX_CSV_BYTES / 1024} KB.` }],
+    );
+}
