@@ -4,6 +4,7 @@
 // figures, so an edited type shows its own distances; never a chart's.
 import { useMemo } from 'react';
 import { card } from '@/components/ui/styles';
+import { Table, type TableColumn } from '@/components/ui/Table';
 import { useLengthUnit } from '@/components/ui/units';
 import type { LampTypeDto } from '@/lib/lamp-types/schema';
 import { formatLengthRounded } from '@/shared/units';
@@ -24,6 +25,10 @@ const SETUP_LABELS: Record<ZoneSetup, string> = {
   reflector: 'With a reflector',
   mesh: 'Through a mesh lid',
 };
+
+/** Strongest zone first: the row a basking lamp is usually chosen for. */
+const ZONES: UvZone[] = [4, 3, 2, 1];
+const HEAD = 'py-1.5 pr-3 font-medium';
 
 export function ZoneDistancesTable({ lampType: t }: { lampType: LampTypeDto }) {
   const [unit] = useLengthUnit();
@@ -59,36 +64,33 @@ export function ZoneDistancesTable({ lampType: t }: { lampType: LampTypeDto }) {
         How far below the lamp (straight below its centre) Baskwell’s model puts the UV Index inside each
         zone’s basking range (Ferguson et al. 2010). Computed from this entry’s own figures.
       </p>
-      <div className="mt-3 overflow-x-auto">
-        <table className="w-full min-w-[28rem] text-left text-body">
-          <thead>
-            <tr className="border-b border-basalt-200 text-caption text-basalt-600">
-              <th scope="col" className="py-1.5 pr-3 font-medium">
-                Basking UV Index
-              </th>
-              {results.map((r) => (
-                <th key={r.setup} scope="col" className="py-1.5 pr-3 font-medium">
-                  {SETUP_LABELS[r.setup]}
-                </th>
-              ))}
-            </tr>
-          </thead>
-          <tbody className="divide-y divide-basalt-100">
-            {([4, 3, 2, 1] as UvZone[]).map((zone) => (
-              <tr key={zone}>
-                <th scope="row" className="py-1.5 pr-3 font-medium text-basalt-800">
-                  Zone {zone}: UVI {fmt(UV_ZONES[zone].max[0])}–{fmt(UV_ZONES[zone].max[1])}
-                </th>
-                {results.map((r) => (
-                  <td key={r.setup} className="py-1.5 pr-3 tabular-nums text-basalt-900">
-                    {cell(r, zone)}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <Table
+        data={ZONES}
+        columns={[
+          {
+            id: 'zone',
+            header: 'Basking UV Index',
+            headerClassName: HEAD,
+            className: 'py-1.5 pr-3 font-medium text-basalt-800',
+            rowHeader: true,
+            cell: ({ row: { original: zone } }) =>
+              `Zone ${zone}: UVI ${fmt(UV_ZONES[zone].max[0])}–${fmt(UV_ZONES[zone].max[1])}`,
+          },
+          ...results.map((r): TableColumn<UvZone> => ({
+            id: r.setup,
+            header: SETUP_LABELS[r.setup],
+            headerClassName: HEAD,
+            className: 'py-1.5 pr-3 tabular-nums text-basalt-900',
+            cell: ({ row }) => cell(r, row.original),
+          })),
+        ]}
+        caption="Distances below the lamp of each UV zone's basking range"
+        rowKey={(zone) => zone}
+        head="plain"
+        fullWidth
+        frameClassName="mt-3 overflow-x-auto"
+        rowClassName=""
+      />
       <ul className="mt-3 list-disc space-y-0.5 pl-5 text-caption text-basalt-600">
         {results.map((r) => (
           <li key={r.setup}>

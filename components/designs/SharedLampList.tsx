@@ -1,4 +1,28 @@
+'use client';
+
+import { Table, type TableColumn } from '@/components/ui/Table';
 import type { LampRow } from '@/lib/reports/lamps';
+
+const cell = 'px-3 py-2';
+const head = 'px-3 py-2 font-medium';
+const text = (id: string, header: string, get: (l: LampRow) => string): TableColumn<LampRow> => ({
+  id,
+  header,
+  headerClassName: head,
+  className: cell,
+  cell: ({ row }) => get(row.original),
+});
+
+const columns: TableColumn<LampRow>[] = [
+  { ...text('name', 'Lamp', (l) => l.name), className: `${cell} font-medium`, rowHeader: true },
+  text('technology', 'Technology', (l) => `${l.technology} (${l.form})`),
+  text('position', 'Where', (l) => l.position),
+  text('uvb', 'UVB at 30 cm', (l) => l.uvbAt30),
+  text('power', 'Power', (l) => l.power),
+  text('beam', 'Beam', (l) => l.beam),
+  text('reflector', 'Reflector', (l) => l.reflector),
+  text('age', 'Age', (l) => l.age),
+];
 
 /** The lamps of a design as the model used them (read-only). */
 export function SharedLampList({ lamps }: { lamps: LampRow[] }) {
@@ -10,38 +34,14 @@ export function SharedLampList({ lamps }: { lamps: LampRow[] }) {
       {lamps.length === 0 ? (
         <p className="text-body text-basalt-600">This design has no lamps yet.</p>
       ) : (
-        <div className="overflow-x-auto rounded-lg border border-basalt-200 bg-white">
-          <table className="w-full text-left text-body">
-            <thead className="bg-basalt-50 text-caption uppercase tracking-wide text-basalt-500">
-              <tr>
-                <th className="px-3 py-2 font-medium">Lamp</th>
-                <th className="px-3 py-2 font-medium">Technology</th>
-                <th className="px-3 py-2 font-medium">Where</th>
-                <th className="px-3 py-2 font-medium">UVB at 30 cm</th>
-                <th className="px-3 py-2 font-medium">Power</th>
-                <th className="px-3 py-2 font-medium">Beam</th>
-                <th className="px-3 py-2 font-medium">Reflector</th>
-                <th className="px-3 py-2 font-medium">Age</th>
-              </tr>
-            </thead>
-            <tbody className="divide-y divide-basalt-100">
-              {lamps.map((l) => (
-                <tr key={l.id}>
-                  <td className="px-3 py-2 font-medium">{l.name}</td>
-                  <td className="px-3 py-2">
-                    {l.technology} ({l.form})
-                  </td>
-                  <td className="px-3 py-2">{l.position}</td>
-                  <td className="px-3 py-2">{l.uvbAt30}</td>
-                  <td className="px-3 py-2">{l.power}</td>
-                  <td className="px-3 py-2">{l.beam}</td>
-                  <td className="px-3 py-2">{l.reflector}</td>
-                  <td className="px-3 py-2">{l.age}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <Table
+          data={lamps}
+          columns={columns}
+          caption="Lamps of this design"
+          rowKey={(l) => l.id}
+          fullWidth
+          rowClassName=""
+        />
       )}
     </section>
   );

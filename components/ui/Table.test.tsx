@@ -37,6 +37,20 @@ describe('Table', () => {
     expect(html).toContain('<th scope="col" class="px-4 py-2 font-semibold">Name</th>');
   });
 
+  it('draws a row-header column as the th that names its row, and marks every row for tests', () => {
+    const html = render({
+      data: rows,
+      columns: [{ ...(columns(false)[0] as TableColumn<Row>), rowHeader: true }, columns(true)[1]!],
+      caption: 'Enclosures',
+      rowKey: (r) => r.id,
+      rowTestId: (r) => (r.size > 100 ? 'large-enclosure' : undefined),
+      rowClassName: '',
+    });
+    expect(html).toContain('<th scope="row" class="name-cell">Desert</th>');
+    expect(cellsOf(html, 'td')).toEqual(['120 cm', '90 cm']);
+    expect(html.match(/<tr[^>]*>/g)).toEqual(['<tr>', '<tr data-testid="large-enclosure">', '<tr>']);
+  });
+
   it('leaves out a column given as false', () => {
     const html = render({ data: rows, columns: columns(false), caption: 'Enclosures', rowKey: (r) => r.id });
     expect(cellsOf(html, 'th')).toEqual(['Name']);

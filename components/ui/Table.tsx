@@ -20,6 +20,8 @@ export type TableColumn<T> = ColumnDef<T> & {
   title?: string;
   /** `false`: a column the server does not sort by, left a plain heading in a sorted table. */
   sortable?: boolean;
+  /** The cell names its row (`<th scope="row">`), so a screen reader says it before each cell of the row. */
+  rowHeader?: boolean;
 };
 
 /** Sorting done by the server: every header becomes a button that asks for the next sort. */
@@ -48,6 +50,7 @@ export function Table<T, C extends string = string>({
   frameClassName = FRAME,
   rowClassName = 'hover:bg-basalt-50',
   testId,
+  rowTestId,
   children,
 }: {
   data: readonly T[];
@@ -68,6 +71,8 @@ export function Table<T, C extends string = string>({
   frameClassName?: string;
   rowClassName?: string;
   testId?: string;
+  /** A body row's `data-testid`, where it has one. */
+  rowTestId?: (row: T) => string | undefined;
   children?: ReactNode;
 }) {
   const shown = columns.filter((c): c is TableColumn<T> => c !== false);
@@ -131,15 +136,21 @@ export function Table<T, C extends string = string>({
         </thead>
         <tbody className="divide-y divide-basalt-100">
           {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} className={rowClassName}>
-              {row.getVisibleCells().map((cell) => (
-                <td
-                  key={cell.id}
-                  className={(cell.column.columnDef as TableColumn<T>).className ?? 'px-4 py-3'}
-                >
-                  {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                </td>
-              ))}
+            <tr key={row.id} className={rowClassName || undefined} data-testid={rowTestId?.(row.original)}>
+              {row.getVisibleCells().map((cell) => {
+                const column = cell.column.columnDef as TableColumn<T>;
+                const content = flexRender(column.cell, cell.getContext());
+                const className = column.className ?? 'px-4 py-3';
+                return column.rowHeader ? (
+                  <th key={cell.id} scope="row" className={className}>
+                    {content}
+                  </th>
+                ) : (
+                  <td key={cell.id} className={className}>
+                    {content}
+                  </td>
+                );
+              })}
             </tr>
           ))}
         </tbody>

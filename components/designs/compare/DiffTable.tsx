@@ -1,3 +1,6 @@
+'use client';
+
+import { Table, type TableColumn } from '@/components/ui/Table';
 import type { DesignDiff, FieldChange, ObjectChange } from '@/shared/designs/diff';
 
 const KIND: Record<ObjectChange['kind'], { label: string; className: string }> = {
@@ -69,69 +72,92 @@ function nameOf(o: ObjectChange): string {
   return `${TYPE_LABEL[o.type] ?? o.type} “${name ?? o.id}”`;
 }
 
+/** What an object's row says beside its name. */
+function detailsOf(o: ObjectChange): string {
+  if (o.kind === 'added') return 'only in B';
+  if (o.kind === 'removed') return 'only in A';
+  const offset = offsetText(o.dx, o.dy);
+  if (o.kind === 'moved') return offset || o.changes.map(changeText).join('; ');
+  return [
+    offset && `moved ${offset}`,
+    ...o.changes.filter((c) => !['x', 'y', 'x1', 'y1', 'x2', 'y2'].includes(c.field)).map(changeText),
+  ]
+    .filter(Boolean)
+    .join('; ');
+}
+
+/** A row of the table: the enclosure's own changes, or one object's. */
+type DiffRow = { key: string; kind: ObjectChange['kind']; what: string; details: string; object: boolean };
+
+const columns: TableColumn<DiffRow>[] = [
+  {
+    id: 'kind',
+    header: 'Change',
+    headerClassName: 'py-1 pr-3 font-medium',
+    className: 'py-1.5 pr-3',
+    cell: ({ row: { original: r } }) => (
+      <span className={`rounded px-1.5 py-0.5 text-caption font-medium ${KIND[r.kind].className}`}>
+        {KIND[r.kind].label}
+      </span>
+    ),
+  },
+  {
+    id: 'object',
+    header: 'Object',
+    headerClassName: 'py-1 pr-3 font-medium',
+    className: 'py-1.5 pr-3 text-left font-normal',
+    rowHeader: true,
+    cell: ({ row }) => row.original.what,
+  },
+  {
+    id: 'details',
+    header: 'Details',
+    headerClassName: 'py-1 font-medium',
+    className: 'py-1.5 text-basalt-700',
+    cell: ({ row }) => row.original.details,
+  },
+];
+
 /** What differs from A to B, one object a row. */
 export function DiffTable({ diff }: { diff: DesignDiff }) {
-  const empty = diff.enclosure.length === 0 && diff.objects.length === 0;
+  const rows: DiffRow[] = [
+    ...(diff.enclosure.length > 0
+      ? [
+          {
+            key: 'enclosure',
+            kind: 'changed' as const,
+            what: 'Enclosure',
+            details: diff.enclosure.map(changeText).join('; '),
+            object: false,
+          },
+        ]
+      : []),
+    ...diff.objects.map((o) => ({
+      key: `${o.kind}-${o.type}-${o.id}`,
+      kind: o.kind,
+      what: nameOf(o),
+      details: detailsOf(o),
+      object: true,
+    })),
+  ];
   return (
     <section aria-labelledby="diff-heading" className="space-y-2">
       <h2 id="diff-heading" className="text-lead font-semibold text-basalt-900">
         What differs (A → B)
       </h2>
-      {empty ? (
+      {rows.length === 0 ? (
         <p className="text-body text-basalt-600">The two variants are the same design.</p>
       ) : (
-        <table className="w-full text-left text-body">
-          <thead className="text-caption uppercase tracking-wide text-basalt-500">
-            <tr>
-              <th className="py-1 pr-3 font-medium">Change</th>
-              <th className="py-1 pr-3 font-medium">Object</th>
-              <th className="py-1 font-medium">Details</th>
-            </tr>
-          </thead>
-          <tbody className="divide-y divide-basalt-100">
-            {diff.enclosure.length > 0 && (
-              <tr>
-                <td className="py-1.5 pr-3">
-                  <span
-                    className={`rounded px-1.5 py-0.5 text-caption font-medium ${KIND.changed.className}`}
-                  >
-                    Changed
-                  </span>
-                </td>
-                <td className="py-1.5 pr-3">Enclosure</td>
-                <td className="py-1.5">{diff.enclosure.map(changeText).join('; ')}</td>
-              </tr>
-            )}
-            {diff.objects.map((o) => (
-              <tr key={`${o.kind}-${o.type}-${o.id}`} data-testid="diff-row">
-                <td className="py-1.5 pr-3">
-                  <span
-                    className={`rounded px-1.5 py-0.5 text-caption font-medium ${KIND[o.kind].className}`}
-                  >
-                    {KIND[o.kind].label}
-                  </span>
-                </td>
-                <td className="py-1.5 pr-3">{nameOf(o)}</td>
-                <td className="py-1.5 text-basalt-700">
-                  {o.kind === 'moved'
-                    ? offsetText(o.dx, o.dy) || o.changes.map(changeText).join('; ')
-                    : o.kind === 'changed'
-                      ? [
-                          offsetText(o.dx, o.dy) && `moved ${offsetText(o.dx, o.dy)}`,
-                          ...o.changes
-                            .filter((c) => !['x', 'y', 'x1', 'y1', 'x2', 'y2'].includes(c.field))
-                            .map(changeText),
-                        ]
-                          .filter(Boolean)
-                          .join('; ')
-                      : o.kind === 'added'
-                        ? 'only in B'
-                        : 'only in A'}
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+        <Table
+          data={rows}
+          columns={columns}
+          caption="What differs from A to B"
+          rowKey={(r) => r.key}
+          rowTestId={(r) => (r.object ? 'diff-row' : undefined)}
+          fullWidth
+          frameClassName=""
+          rowClassName=""
+        />
       )}
       <p className="text-caption text-basalt-500">
         {diff.counts.unchanged} object{diff.counts.unchanged === 1 ? '' : 's'} unchanged.

@@ -1,5 +1,6 @@
 'use client';
 
+import { Table, type TableColumn } from '@/components/ui/Table';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { useTempUnit } from '@/components/ui/units';
 import { cDeltaToDisplay, cToDisplay, type TempUnit } from '@/shared/units';
@@ -33,9 +34,52 @@ function inUnit(
   return { unit: `°${t}`, value: (c) => cToDisplay(c, t), delta: (c) => cDeltaToDisplay(c, t) };
 }
 
+const cell = 'py-1.5 pr-3 text-right tabular-nums';
+const head = 'py-1 pr-3 text-right font-medium';
+
+/** The figure's value in one variant, with its unit; a dash where that variant has no figures yet. */
+function valueColumn(id: 'a' | 'b', figures: KeyFigures | null, t: TempUnit): TableColumn<Row> {
+  return {
+    id,
+    header: id.toUpperCase(),
+    headerClassName: head,
+    className: cell,
+    cell: ({ row: { original: r } }) => {
+      if (!figures) return '—';
+      const u = inUnit(r, t);
+      return `${fmt(u.value(r.get(figures)), r.digits)}${u.unit ? ` ${u.unit}` : ''}`;
+    },
+  };
+}
+
 /** Key figures of both variants and B − A, all estimates. */
 export function FiguresTable({ a, b }: { a: KeyFigures | null; b: KeyFigures | null }) {
   const [tempUnit] = useTempUnit();
+  const columns: TableColumn<Row>[] = [
+    {
+      id: 'figure',
+      header: 'Figure',
+      headerClassName: 'py-1 pr-3 font-medium',
+      className: 'py-1.5 pr-3 text-left font-normal',
+      rowHeader: true,
+      cell: ({ row }) => row.original.label,
+    },
+    valueColumn('a', a, tempUnit),
+    valueColumn('b', b, tempUnit),
+    {
+      id: 'difference',
+      header: 'B − A',
+      headerClassName: 'py-1 text-right font-medium',
+      className: 'py-1.5 text-right tabular-nums text-basalt-700',
+      cell: ({ row: { original: r } }) => {
+        if (!a || !b) return '—';
+        const u = inUnit(r, tempUnit);
+        const d = u.delta(r.get(b) - r.get(a));
+        const sign = d > 0 ? '+' : d < 0 ? '−' : '±';
+        return `${sign}${fmt(Math.abs(d), r.digits)}${u.unit ? ` ${u.unit}` : ''}`;
+      },
+    },
+  ];
   return (
     <section aria-labelledby="figures-heading" className="space-y-2">
       <div className="flex flex-wrap items-center justify-between gap-2">
@@ -44,41 +88,15 @@ export function FiguresTable({ a, b }: { a: KeyFigures | null; b: KeyFigures | n
         </h2>
         <UnitToggle quantity="temperature" />
       </div>
-      <table className="w-full text-left text-body">
-        <thead className="text-caption uppercase tracking-wide text-basalt-500">
-          <tr>
-            <th className="py-1 pr-3 font-medium">Figure</th>
-            <th className="py-1 pr-3 text-right font-medium">A</th>
-            <th className="py-1 pr-3 text-right font-medium">B</th>
-            <th className="py-1 text-right font-medium">B − A</th>
-          </tr>
-        </thead>
-        <tbody className="divide-y divide-basalt-100">
-          {ROWS.map((r) => {
-            const u = inUnit(r, tempUnit);
-            const va = a ? u.value(r.get(a)) : null;
-            const vb = b ? u.value(r.get(b)) : null;
-            const d = a && b ? u.delta(r.get(b) - r.get(a)) : null;
-            const unit = u.unit ? ` ${u.unit}` : '';
-            return (
-              <tr key={r.label}>
-                <td className="py-1.5 pr-3">{r.label}</td>
-                <td className="py-1.5 pr-3 text-right tabular-nums">
-                  {va === null ? '—' : `${fmt(va, r.digits)}${unit}`}
-                </td>
-                <td className="py-1.5 pr-3 text-right tabular-nums">
-                  {vb === null ? '—' : `${fmt(vb, r.digits)}${unit}`}
-                </td>
-                <td className="py-1.5 text-right tabular-nums text-basalt-700">
-                  {d === null
-                    ? '—'
-                    : `${d > 0 ? '+' : d < 0 ? '−' : '±'}${fmt(Math.abs(d), r.digits)}${unit}`}
-                </td>
-              </tr>
-            );
-          })}
-        </tbody>
-      </table>
+      <Table
+        data={ROWS}
+        columns={columns}
+        caption="Key figures of A and B, and B − A"
+        rowKey={(r) => r.label}
+        fullWidth
+        frameClassName=""
+        rowClassName=""
+      />
     </section>
   );
 }
