@@ -199,6 +199,9 @@ async function main() {
   const browserEnv = {
     ...testEnv,
     NEXT_DIST_DIR: '.next/test-build',
+    // The studio's probe for the journeys (round trips, camera: components/studio/testing/probe.ts)
+    // exists in this build only.
+    NEXT_PUBLIC_STUDIO_PROBE: '1',
     // The tsc step checks the types beside the build (and fails the run if they are wrong).
     NEXT_SKIP_TYPECHECK: wanted('tsc') ? '1' : '0',
     ...(overlap

@@ -4,30 +4,13 @@
 // newer one replaced before they started, so only the latest is ever computed and shown.
 import { useEffect, useRef, useState } from 'react';
 import { physicsOf, samePhysics, type SimRequest, type SimResponse } from '@/simulation';
-import type { Camera } from '../geometry/camera';
 import type { StudioStore } from '../state/store';
+import { recordRoundTrip, studioProbe } from '../testing/probe';
 import type { Design, StudioSpecies } from '../state/types';
 import { cellSizeFor } from '@/shared/designs/studio-cell-size';
 import { markFieldComputed, takeEngineWorker } from './early';
 import type { Reading } from './sample';
 import { EMPTY_SIM, type SimView } from './simTypes';
-
-/**
- * Testing hooks read by tests/browser/studio.browser.ts: round-trip samples for the benchmark, and the
- * camera so a test can point at a design position. Nothing in the app reads them.
- */
-export interface StudioMetrics {
-  roundTrips: number[];
-  /** The engine's own compute time for the same answers (the rest is messaging and the main thread). */
-  computeMs: number[];
-  camera?: () => Camera;
-}
-
-declare global {
-  interface Window {
-    __baskwellStudio?: StudioMetrics;
-  }
-}
 
 interface Sent {
   at: number;
@@ -56,8 +39,8 @@ export function useSimulation(store: StudioStore, species: StudioSpecies[]): Sim
       setView((v) => ({ ...v, status: 'error', error: `The field engine could not start (${String(e)}).` }));
       return;
     }
-    const metrics: StudioMetrics = (window.__baskwellStudio ??= { roundTrips: [], computeMs: [] });
-    metrics.camera = () => store.session.camera;
+    const probe = studioProbe();
+    if (probe) probe.camera = () => store.session.camera;
     let seq = 0;
     let applied = 0;
     const sent = new Map<number, Sent>();
@@ -109,14 +92,7 @@ export function useSimulation(store: StudioStore, species: StudioSpecies[]): Sim
       }
       markFieldComputed();
       const roundTripMs = info ? performance.now() - info.at : null;
-      if (roundTripMs !== null) {
-        metrics.roundTrips.push(roundTripMs);
-        metrics.computeMs.push(msg.ms);
-        if (metrics.roundTrips.length > 2000) {
-          metrics.roundTrips.splice(0, 1000);
-          metrics.computeMs.splice(0, 1000);
-        }
-      }
+      if (probe && roundTripMs !== null) recordRoundTrip(probe, roundTripMs, msg.ms);
       const probeReadings = new Map<string, Reading>();
       msg.probes?.forEach((r, i) => {
         const pid = info?.probeIds[i];
