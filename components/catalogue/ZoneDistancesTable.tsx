@@ -87,9 +87,8 @@ export function ZoneDistancesTable({ lampType: t }: { lampType: LampTypeDto }) {
         caption="Distances below the lamp of each UV zone's basking range"
         rowKey={(zone) => zone}
         head="plain"
-        fullWidth
+        inline
         frameClassName="mt-3 overflow-x-auto"
-        rowClassName=""
       />
       <ul className="mt-3 list-disc space-y-0.5 pl-5 text-caption text-basalt-600">
         {results.map((r) => (

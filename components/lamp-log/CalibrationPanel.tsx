@@ -106,8 +106,8 @@ export function CalibrationPanel({ lampId, canApply }: { lampId: number; canAppl
                 caption={`What the readings change in ${t.variant.designName} · ${t.variant.name}`}
                 rowKey={(c) => c.field}
                 head="plain"
+                inline
                 frameClassName="mt-2 overflow-x-auto"
-                rowClassName=""
               />
               <ul className="mt-2 list-disc pl-5 text-caption text-basalt-600">
                 {t.calibration.notes.map((n) => (

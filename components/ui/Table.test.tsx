@@ -51,6 +51,18 @@ describe('Table', () => {
     expect(html.match(/<tr[^>]*>/g)).toEqual(['<tr>', '<tr data-testid="large-enclosure">', '<tr>']);
   });
 
+  it('sits inline in a card: no frame border, no row highlight, the full width', () => {
+    const html = render({
+      data: rows,
+      columns: columns(false),
+      caption: 'Enclosures',
+      rowKey: (r) => r.id,
+      inline: true,
+    });
+    expect(html).toMatch(/^<div class="overflow-x-auto"><table class="w-full /);
+    expect(html.match(/<tr[^>]*>/g)).toEqual(['<tr>', '<tr>', '<tr>']);
+  });
+
   it('leaves out a column given as false', () => {
     const html = render({ data: rows, columns: columns(false), caption: 'Enclosures', rowKey: (r) => r.id });
     expect(cellsOf(html, 'th')).toEqual(['Name']);

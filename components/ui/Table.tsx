@@ -46,9 +46,10 @@ export function Table<T, C extends string = string>({
   busy = false,
   head = 'caps',
   stickyHead = false,
-  fullWidth = false,
-  frameClassName = FRAME,
-  rowClassName = 'hover:bg-basalt-50',
+  inline = false,
+  fullWidth = inline,
+  frameClassName = inline ? 'overflow-x-auto' : FRAME,
+  rowClassName = inline ? '' : 'hover:bg-basalt-50',
   testId,
   rowTestId,
   children,
@@ -66,6 +67,11 @@ export function Table<T, C extends string = string>({
   head?: 'caps' | 'plain';
   /** The header row stays in view as the frame scrolls (a frame with a height limit). */
   stickyHead?: boolean;
+  /**
+   * A small table inside a card or a section (a comparison, a calibration): no frame or row highlight of
+   * its own, and the width of what holds it.
+   */
+  inline?: boolean;
   /** `w-full` rather than `min-w-full`: the columns share the frame and wrap rather than scroll. */
   fullWidth?: boolean;
   frameClassName?: string;

@@ -154,9 +154,7 @@ export function DiffTable({ diff }: { diff: DesignDiff }) {
           caption="What differs from A to B"
           rowKey={(r) => r.key}
           rowTestId={(r) => (r.object ? 'diff-row' : undefined)}
-          fullWidth
-          frameClassName=""
-          rowClassName=""
+          inline
         />
       )}
       <p className="text-caption text-basalt-500">

@@ -93,9 +93,7 @@ export function FiguresTable({ a, b }: { a: KeyFigures | null; b: KeyFigures | n
         columns={columns}
         caption="Key figures of A and B, and B − A"
         rowKey={(r) => r.label}
-        fullWidth
-        frameClassName=""
-        rowClassName=""
+        inline
       />
     </section>
   );
