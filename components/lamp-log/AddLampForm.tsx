@@ -10,6 +10,7 @@ import { button } from '@/components/ui/styles';
 import { useLengthUnit } from '@/components/ui/units';
 import { useApiMutation } from '@/components/ui/useApiMutation';
 import { dayInZone } from '@/lib/time/format';
+import { LampUseFields } from './LampUseFields';
 
 export type LampTypeOption = { id: number; name: string; tech: string; uvbAt30: number };
 export type DesignLampOption = { objectId: string; label: string };
@@ -79,26 +80,7 @@ export function AddLampForm({
             </option>
           ))}
         </Select>
-        <Field
-          label="First switched on"
-          name="firstUsedOn"
-          type="date"
-          defaultValue={today}
-          max={today}
-          required
-          error={err('firstUsedOn')}
-        />
-        <Field
-          label="Hours a day"
-          name="hoursPerDay"
-          type="number"
-          step="0.5"
-          min="0.5"
-          max="24"
-          defaultValue="12"
-          required
-          error={err('hoursPerDay')}
-        />
+        <LampUseFields firstUsedOn={today} hoursPerDay="12" today={today} error={err} />
         <Field
           label={`Lamp to basking spot (${unit})`}
           name="baskingDistance"

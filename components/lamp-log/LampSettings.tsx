@@ -12,6 +12,7 @@ import { useLengthUnit } from '@/components/ui/units';
 import { useApiMutation } from '@/components/ui/useApiMutation';
 import type { LampSummary } from '@/lib/lamp-log/store';
 import type { DesignLampOption } from './AddLampForm';
+import { LampUseFields } from './LampUseFields';
 
 /** Edit a lamp, retire it (its readings stay), or delete one logged by mistake. */
 export function LampSettings({
@@ -73,23 +74,7 @@ export function LampSettings({
     <form onSubmit={submit} className="space-y-3" aria-label="Lamp settings" noValidate>
       <div className="grid gap-3 sm:grid-cols-2">
         <Field label="Name" name="label" defaultValue={lamp.label} required error={err('label')} />
-        <Field
-          label="First switched on"
-          name="firstUsedOn"
-          type="date"
-          defaultValue={lamp.firstUsedOn}
-          error={err('firstUsedOn')}
-        />
-        <Field
-          label="Hours a day"
-          name="hoursPerDay"
-          type="number"
-          step="0.5"
-          min="0.5"
-          max="24"
-          defaultValue={lamp.hoursPerDay}
-          error={err('hoursPerDay')}
-        />
+        <LampUseFields firstUsedOn={lamp.firstUsedOn} hoursPerDay={lamp.hoursPerDay} error={err} />
         <Field
           key={unit}
           label={`Lamp to basking spot (${unit})`}
