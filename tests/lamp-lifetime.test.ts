@@ -29,7 +29,7 @@ import { buildDesign } from '@/lib/guided-start/layout';
 import { explain } from '@/lib/guided-start/explain';
 import { lampPayload, techDefaults } from '@/components/catalogue/lamp-form-state';
 import { applyTech } from '@/components/studio/state/lampPresets';
-import { defaultLamp } from '@/components/studio/state/defaults';
+import { defaultLamp } from '@/shared/object-kinds/lamp';
 
 /** Months (to a quarter) until a lamp object's UVB is half of new in the studio's ageing, or null if never. */
 function studioHalfLife(obj: LampObject): number | null {

@@ -48,7 +48,14 @@ export const lamp: ObjectKind<'lamp'> = {
     return { x: x1, y: o.y - h, width: x2 - x1, height: 2 * h };
   },
   // Tube ends land on walls, floor, tops and the lid like a box's corners.
-  snap: { click: 'lamp', drag: 'free', ends: 'box-corner', restsOn: 'surfaces', bearsWeight: false },
+  snap: {
+    click: 'lamp',
+    dragFrom: 'lamp',
+    drag: 'free',
+    ends: 'box-corner',
+    restsOn: 'surfaces',
+    bearsWeight: false,
+  },
   svg: (o, look) => {
     // The studio's marks: a tube is a rounded bar with a core line, a bulb a disc with a core dot.
     const c = lampLook(o);

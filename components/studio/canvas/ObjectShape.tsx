@@ -5,7 +5,7 @@ import { memo } from 'react';
 import { Circle, Group, Line, Rect, Shape } from 'react-konva';
 import type { Context } from 'konva/lib/Context';
 import { designToStage, type Camera, type Rect as Rect2 } from '../geometry/camera';
-import { BULB_RADIUS_CM, lampExtent, TUBE_THICKNESS_CM } from '../geometry/objects';
+import { BULB_RADIUS_CM, lampExtent, TUBE_THICKNESS_CM } from '@/shared/object-kinds/lamp';
 import { LAMP_TECHS } from '@/simulation';
 import { calibrationLabel } from '../state/calibration';
 import type { DesignObject, LampObject } from '../state/types';

@@ -19,7 +19,8 @@ import {
 } from '../geometry/backdrop';
 import * as A from '../state/actions';
 import { backdropShown } from '../state/backdropActions';
-import { DEFAULT_SIZES, objectForDrag } from '../state/defaults';
+import { objectForDrag } from '../state/defaults';
+import { kindOf } from '@/shared/object-kinds';
 import { addObject, moveObjects, nextId, replaceObjects, setBackdrop } from '../state/document';
 import { isPlaceTool, type PlaceTool } from '../state/session';
 import type { StudioStore } from '../state/store';
@@ -55,18 +56,8 @@ type Drag =
   | { kind: 'backdrop-corner'; start: Backdrop; corner: BackdropCorner };
 
 export function handleRole(o: DesignObject, handle: HandleId): PointRole {
-  if (o.type === 'perch') return handle === 'rotate' ? 'free' : 'perch-end';
-  if (o.type === 'screen' || o.type === 'glass') return handle === 'rotate' ? 'free' : 'barrier-end';
-  // Tube ends and box corners land on walls, floor, tops and the lid.
-  return 'box-corner';
-}
-
-/** How the points of a drag that draws a new object snap. */
-function dragRole(type: PlaceTool): PointRole {
-  if (type === 'perch') return 'perch-end';
-  if (type === 'screen' || type === 'glass') return 'barrier-end';
-  if (type === 'lamp') return 'free';
-  return 'box-corner';
+  // A segment's rotate handle turns it freely; ends and corners snap as the kind says.
+  return handle === 'rotate' ? 'free' : kindOf(o.type).snap.ends;
 }
 
 function sameGuides(a: readonly Guide[], b: readonly Guide[]): boolean {
@@ -153,9 +144,9 @@ export class CanvasInteraction {
     }
     if (isPlaceTool(tool)) {
       // The start of a drag (a lamp starts on the lid); a plain click is placed on release instead.
-      const role = tool === 'lamp' ? 'lamp' : dragRole(tool);
-      const thickness = tool === 'perch' ? DEFAULT_SIZES.perchThickness : 0;
-      const { point } = snapPoint(s.design, d, role, A.snapOptions(s), new Set(), thickness);
+      const { snap } = kindOf(tool);
+      const role = snap.dragFrom ?? snap.drag;
+      const { point } = snapPoint(s.design, d, role, A.snapOptions(s), new Set(), snap.newThickness ?? 0);
       this.drag = { kind: 'place', type: tool, from: point, id: nextId(s.design, tool) };
       return;
     }
@@ -294,14 +285,9 @@ export class CanvasInteraction {
         return;
       }
       case 'place': {
-        const thickness = drag.type === 'perch' ? DEFAULT_SIZES.perchThickness : 0;
-        const { point, guides } = snapPoint(s.design, d, dragRole(drag.type), opts, new Set(), thickness);
-        const obj = objectForDrag(
-          drag.type,
-          drag.id,
-          drag.from,
-          drag.type === 'lamp' ? { x: point.x, y: drag.from.y } : point,
-        );
+        const { snap } = kindOf(drag.type);
+        const { point, guides } = snapPoint(s.design, d, snap.drag, opts, new Set(), snap.newThickness ?? 0);
+        const obj = objectForDrag(drag.type, drag.id, drag.from, point);
         const base = s.getState().history.gestureBase ?? s.design;
         s.edit(() => (obj ? addObject(base, obj) : base));
         this.guides(guides);

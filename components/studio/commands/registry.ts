@@ -4,6 +4,7 @@ import * as A from '../state/actions';
 import * as B from '../state/backdropActions';
 import * as Z from '../state/depthActions';
 import { isPlaceTool, type Tool } from '../state/session';
+import { OBJECT_KINDS, OBJECT_TYPES } from '@/shared/object-kinds';
 import type { StudioStore } from '../state/store';
 import { canonicalShortcut, normaliseKey, type KeyLike } from './shortcuts';
 
@@ -68,13 +69,7 @@ function nudge(dir: 'Left' | 'Right' | 'Up' | 'Down', big: boolean): Command {
 export const COMMANDS: readonly Command[] = [
   tool('select', 'Select', 'V'),
   tool('pan', 'Pan', 'H'),
-  tool('lamp', 'Lamp', 'L'),
-  tool('screen', 'Screen (mesh)', 'S'),
-  tool('glass', 'Glass', 'G'),
-  tool('perch', 'Perch', 'P'),
-  tool('ledge', 'Ledge', 'E'),
-  tool('hide', 'Hide', 'D'),
-  tool('foliage', 'Foliage', 'F'),
+  ...OBJECT_TYPES.map((t) => tool(t, OBJECT_KINDS[t].tool.label, OBJECT_KINDS[t].tool.key)),
   tool('probe', 'Probe', 'I'),
   tool('ruler', 'Ruler', 'R'),
   {
@@ -158,17 +153,7 @@ export const COMMANDS: readonly Command[] = [
     shortcuts: ['Enter'],
     run: ({ store }) => {
       const t = store.session.tool;
-      if (
-        t === 'lamp' ||
-        t === 'screen' ||
-        t === 'glass' ||
-        t === 'perch' ||
-        t === 'ledge' ||
-        t === 'hide' ||
-        t === 'foliage'
-      ) {
-        A.placeAtCentre(store, t);
-      }
+      if (isPlaceTool(t)) A.placeAtCentre(store, t);
     },
     enabled: ({ store }) => !store.readOnly && isPlaceTool(store.session.tool),
   },

@@ -1,34 +1,17 @@
 // Pure geometry of design objects: bounds, hit tests, moving and handle edits. All in design cm, y up.
 import type { Point, Rect } from './camera';
-import { isBox, isSegment, type DesignObject, type LampObject, type SegmentObject } from '../state/types';
+import { kindOf } from '@/shared/object-kinds';
+import { lampExtent } from '@/shared/object-kinds/lamp';
+import { halfThickness } from '@/shared/object-kinds/segment';
+import { isBox, isSegment, type DesignObject, type SegmentObject } from '../state/types';
 
-/** How big a bulb is drawn (cm): the design stores only its emitting point. */
-export const BULB_RADIUS_CM = 4;
-/** How thick a tube is drawn (cm). */
-export const TUBE_THICKNESS_CM = 2.5;
 /** Visual thickness of thin barriers, for hit testing only (cm). */
 export const BARRIER_HIT_CM = 1.5;
 /** Smallest size a box or segment can be resized to (cm). */
 export const MIN_SIZE_CM = 1;
 
-export function lampExtent(l: LampObject): { x1: number; x2: number } {
-  const half = l.form === 'tube' ? (l.length ?? 0) / 2 : BULB_RADIUS_CM;
-  return { x1: l.x - half, x2: l.x + half };
-}
-
 export function objectBounds(o: DesignObject): Rect {
-  if (o.type === 'lamp') {
-    const { x1, x2 } = lampExtent(o);
-    const h = o.form === 'tube' ? TUBE_THICKNESS_CM / 2 : BULB_RADIUS_CM;
-    return { x: x1, y: o.y - h, width: x2 - x1, height: 2 * h };
-  }
-  if (isSegment(o)) {
-    const pad = o.type === 'perch' ? o.thickness / 2 : 0;
-    const x = Math.min(o.x1, o.x2) - pad;
-    const y = Math.min(o.y1, o.y2) - pad;
-    return { x, y, width: Math.abs(o.x2 - o.x1) + 2 * pad, height: Math.abs(o.y2 - o.y1) + 2 * pad };
-  }
-  return { x: o.x, y: o.y, width: o.width, height: o.height };
+  return kindOf(o.type).bounds(o);
 }
 
 /** Distance from p to the segment ab. */
@@ -50,7 +33,8 @@ export function segmentEnds(o: SegmentObject): [Point, Point] {
 /** Whether a design point hits the object; `tolerance` (cm) widens thin shapes for the pointer. */
 export function hitTest(o: DesignObject, p: Point, tolerance = 0): boolean {
   if (isSegment(o)) {
-    const half = o.type === 'perch' ? o.thickness / 2 : BARRIER_HIT_CM / 2;
+    // A branch is as thick as it is drawn; a barrier's line is widened to be hit.
+    const half = 'thickness' in o ? halfThickness(o) : BARRIER_HIT_CM / 2;
     const [a, b] = segmentEnds(o);
     return distanceToSegment(p, a, b) <= half + tolerance;
   }

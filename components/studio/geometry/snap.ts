@@ -2,13 +2,12 @@
 // and hides). Surfaces win over the grid when within the threshold, as users expect things to
 // "land" on a shelf rather than on the nearest grid line.
 import type { Point } from './camera';
-import { lampExtent } from './objects';
+import { kindOf, type PointRole } from '@/shared/object-kinds';
+import { halfThickness } from '@/shared/object-kinds/segment';
+import { LAMP_ON_LID_CM, LAMP_UNDER_LID_CM, lampExtent } from '@/shared/object-kinds/lamp';
 import { isBox, isSegment, type Design, type DesignObject } from '../state/types';
 
-/** Height of a lamp's emitting point above the lid when it rests on the lid (cm; common practice, no published source). */
-export const LAMP_ON_LID_CM = 2;
-/** Depth of a lamp's emitting point below the lid when it is fitted inside (cm). */
-export const LAMP_UNDER_LID_CM = 3;
+export { LAMP_ON_LID_CM, type PointRole };
 
 export interface SnapOptions {
   /** Grid step in cm, or null for no grid snapping. */
@@ -48,12 +47,12 @@ function wallTargets(design: Design): Target[] {
   ];
 }
 
-/** Surfaces an object can rest on: the floor and the tops of ledges and hides. */
+/** Surfaces an object can rest on: the floor and the tops of what bears weight (ledges and hides). */
 export function restingTargets(design: Design, exclude: ReadonlySet<string>): Target[] {
   const out: Target[] = [{ at: 0, label: 'floor', from: 0, to: design.enclosure.width }];
   for (const o of design.objects) {
     if (exclude.has(o.id)) continue;
-    if (o.type === 'ledge' || o.type === 'hide') {
+    if (kindOf(o.type).snap.bearsWeight && isBox(o)) {
       out.push({ at: o.y + o.height, label: `top of ${o.name ?? o.id}`, from: o.x, to: o.x + o.width });
     }
   }
@@ -124,12 +123,13 @@ function features(
     };
   }
   if (isSegment(o)) {
-    const half = o.type === 'perch' ? o.thickness / 2 : 0;
+    const half = halfThickness(o);
     const ends: Point[] = [
       { x: o.x1, y: o.y1 },
       { x: o.x2, y: o.y2 },
     ];
-    const yTargets = o.type === 'perch' ? restingTargets(design, exclude) : lidAndFloor;
+    const yTargets =
+      kindOf(o.type).snap.restsOn === 'surfaces' ? restingTargets(design, exclude) : lidAndFloor;
     return {
       x: ends.map((e) => ({ at: e.x, targets: walls })),
       y: ends.map((e) => ({
@@ -194,8 +194,6 @@ export function snapMove(
   }
   return { dx: sx, dy: sy, guides };
 }
-
-export type PointRole = 'lamp' | 'perch-end' | 'barrier-end' | 'box-corner' | 'probe' | 'free';
 
 /** Snaps one point (a handle, a placement click) for its role; `thickness` is a perch's thickness. */
 export function snapPoint(

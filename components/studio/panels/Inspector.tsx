@@ -2,7 +2,8 @@
 // The inspector: the selected object's properties, a probe's, several objects' summary, or the
 // enclosure's when nothing is selected.
 import { useCommandContext, useStudio } from '../hooks/useStudio';
-import { TYPE_NAMES, updateObject } from '../state/document';
+import { updateObject } from '../state/document';
+import { kindOf } from '@/shared/object-kinds';
 import { isBox, isSegment, type DesignObject } from '../state/types';
 import { CommandButton } from './CommandButton';
 import { Section, TextField } from './FormFields';
@@ -24,11 +25,11 @@ function ObjectInspector({ o }: { o: DesignObject }) {
   const { store } = useCommandContext();
   return (
     <div data-testid="inspector-object" data-object-id={o.id}>
-      <Section title={`${TYPE_NAMES[o.type]} · ${o.id}`}>
+      <Section title={`${kindOf(o.type).name} · ${o.id}`}>
         <TextField
           label="Name"
           value={o.name}
-          placeholder={TYPE_NAMES[o.type]}
+          placeholder={kindOf(o.type).name}
           onCommit={(name) => store.edit((d) => updateObject(d, o.id, { name }))}
         />
       </Section>
@@ -71,7 +72,7 @@ export function Inspector() {
         <ul className="text-sm text-basalt-700">
           {objects.map((o) => (
             <li key={o.id}>
-              {TYPE_NAMES[o.type]} {o.name ? `“${o.name}”` : o.id}
+              {kindOf(o.type).name} {o.name ? `“${o.name}”` : o.id}
             </li>
           ))}
           {probes.map((p) => (

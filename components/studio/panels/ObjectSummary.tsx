@@ -4,7 +4,7 @@ import { formatLength, formatNumber, rulerParts } from '@/shared/units';
 import { segmentAngleDeg, segmentLength } from '../geometry/objects';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
 import { calibrationLabel } from '../state/calibration';
-import { TYPE_NAMES } from '../state/document';
+import { kindOf } from '@/shared/object-kinds';
 import { isBox, isSegment, type DesignObject } from '../state/types';
 import type { LengthUnit } from '@/shared/units';
 import type { BackdropImageState, EnclosurePhotos } from '../state/session';
@@ -16,7 +16,7 @@ import type { Finding } from '../fields/engineTypes';
 import { husbandrySentences } from '../geometry/husbandry';
 
 export function describeObject(o: DesignObject, u: LengthUnit, design?: Design): string {
-  const name = `${TYPE_NAMES[o.type]}${o.name ? ` “${o.name}”` : ''}`;
+  const name = `${kindOf(o.type).name}${o.name ? ` “${o.name}”` : ''}`;
   const L = (v: number) => formatLength(v, u);
   if (o.type === 'lamp') {
     const size = o.form === 'tube' ? `, ${L(o.length ?? 0)} long` : '';
@@ -27,7 +27,7 @@ export function describeObject(o: DesignObject, u: LengthUnit, design?: Design):
     return `${name}: ${LAMP_TECHS[o.tech].label}${size}, at ${L(o.x)} from the left, ${L(o.y)} up${depth}${calibrated ? `, ${calibrated}` : ''}`;
   }
   if (isSegment(o)) {
-    const extra = o.type === 'perch' ? `, ${L(o.thickness)} thick` : '';
+    const extra = 'thickness' in o ? `, ${L(o.thickness)} thick` : '';
     return `${name}: from (${L(o.x1)}, ${L(o.y1)}) to (${L(o.x2)}, ${L(o.y2)}), ${L(segmentLength(o))} long at ${formatNumber(segmentAngleDeg(o), 0)}°${extra}`;
   }
   if (isBox(o))
@@ -70,7 +70,7 @@ export function describeHighlight(
     ...shape.segments.map((s) => `the surface from (${L(s.x1)}, ${L(s.y1)}) to (${L(s.x2)}, ${L(s.y2)})`),
     ...shape.objectIds.map((id) => {
       const o = objects.find((x) => x.id === id);
-      return o ? `${TYPE_NAMES[o.type]} ${o.name ? `“${o.name}”` : o.id}` : id;
+      return o ? `${kindOf(o.type).name} ${o.name ? `“${o.name}”` : o.id}` : id;
     }),
   ];
   return `Shown on the canvas: ${title} — ${parts.join('; ')}.`;

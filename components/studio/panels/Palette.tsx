@@ -10,6 +10,7 @@ import { displayShortcut } from '../commands/shortcuts';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
 import { focusRing } from './CommandButton';
 import { Icon, type IconName } from './icons';
+import { OBJECT_KINDS, OBJECT_TYPES } from '@/shared/object-kinds';
 
 const GROUPS: { label: string; tools: { tool: Tool; icon: IconName; hint: string }[] }[] = [
   {
@@ -25,19 +26,8 @@ const GROUPS: { label: string; tools: { tool: Tool; icon: IconName; hint: string
   },
   {
     label: 'Objects',
-    tools: [
-      { tool: 'lamp', icon: 'lamp', hint: 'A lamp: UVB tube or bulb, or a heat lamp' },
-      { tool: 'screen', icon: 'screen', hint: 'A mesh screen (passes part of the UVB)' },
-      {
-        tool: 'glass',
-        icon: 'glass',
-        hint: 'A glass or acrylic pane (glass blocks UVB; acrylic varies, so set its measured share)',
-      },
-      { tool: 'perch', icon: 'perch', hint: 'A branch: drag from one end to the other' },
-      { tool: 'ledge', icon: 'ledge', hint: 'A solid platform or rock' },
-      { tool: 'hide', icon: 'hide', hint: 'A closed box that shades its inside' },
-      { tool: 'foliage', icon: 'foliage', hint: 'Planting that lets part of the light through' },
-    ],
+    // One button a kind of object, its icon named as the kind; the hint is the kind's record's.
+    tools: OBJECT_TYPES.map((t) => ({ tool: t, icon: t, hint: OBJECT_KINDS[t].tool.hint })),
   },
   {
     label: 'Measure',

@@ -8,7 +8,8 @@ import {
 import { segmentAngleDeg, segmentLength } from '../geometry/objects';
 import { formatLength, formatNumber } from '@/shared/units';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
-import { setEnclosure, TYPE_NAMES, updateProbe } from '../state/document';
+import { setEnclosure, updateProbe } from '../state/document';
+import { kindOf } from '@/shared/object-kinds';
 import { focusRing } from './CommandButton';
 import type { BoxObject, Enclosure, ProbePoint, SegmentObject } from '../state/types';
 import { Grid2, NumberField, Section, SelectField, TextField } from './FormFields';
@@ -143,7 +144,7 @@ export function ObjectList() {
               onClick={() => store.setSession({ selection: [o.id] })}
               className={`w-full rounded px-2 py-1 text-left text-sm text-basalt-800 hover:bg-basalt-100 ${focusRing}`}
             >
-              {TYPE_NAMES[o.type]} <span className="text-basalt-500">{o.name ?? o.id}</span>
+              {kindOf(o.type).name} <span className="text-basalt-500">{o.name ?? o.id}</span>
             </button>
           </li>
         ))}

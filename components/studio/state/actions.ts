@@ -10,7 +10,8 @@ import {
 } from '../geometry/camera';
 import { objectBounds } from '../geometry/objects';
 import { snapPoint, type PointRole, type SnapOptions } from '../geometry/snap';
-import { defaultLampPoint, objectForClick } from './defaults';
+import { keyboardPoint, objectForClick } from './defaults';
+import { kindOf } from '@/shared/object-kinds';
 import * as doc from './document';
 import { gridStepCm, type PlaceTool, type Tool } from './session';
 import type { StudioStore } from './store';
@@ -141,10 +142,7 @@ export function nudgeSelection(store: StudioStore, stepsX: number, stepsY: numbe
 
 /** How a click that places an object snaps: a lamp to the lid, a box onto a surface; a perch's centre freely. */
 export function roleForPlacement(type: ObjectType): PointRole {
-  if (type === 'lamp') return 'lamp';
-  if (type === 'perch') return 'free';
-  if (type === 'screen' || type === 'glass') return 'barrier-end';
-  return 'box-corner';
+  return kindOf(type).snap.click;
 }
 
 /** Places a new object of `type` at a design point (snapped for its kind), selects it, back to Select. */
@@ -157,14 +155,9 @@ export function placeObject(store: StudioStore, type: PlaceTool, at: Point): str
   return id;
 }
 
-/** Keyboard placement: in the middle of what is visible, or on the lid for a lamp. */
+/** Keyboard placement: mid-width, where the kind belongs (a lamp on the lid, a box on the floor). */
 export function placeAtCentre(store: StudioStore, type: PlaceTool): string {
-  const d = store.design;
-  if (type === 'lamp') return placeObject(store, type, defaultLampPoint(d));
-  const { width: W, height: H } = d.enclosure;
-  const at =
-    type === 'screen' ? { x: W / 2, y: H } : type === 'perch' ? { x: W / 2, y: H / 2 } : { x: W / 2, y: 0 };
-  return placeObject(store, type, at);
+  return placeObject(store, type, keyboardPoint(store.design, type));
 }
 
 export function addProbeAt(store: StudioStore, at: Point): string {

@@ -2,7 +2,7 @@
 // reference when nothing changed, so the history records no empty steps).
 import { translateObject } from '../geometry/objects';
 import { keepWithinDepth } from './depth';
-import type { Backdrop, Design, DesignObject, Enclosure, ObjectType, ProbePoint } from './types';
+import type { Backdrop, Design, DesignObject, Enclosure, ProbePoint } from './types';
 
 /** The next free id for a type: "perch-3". Ids are unique within the design (schema rule). */
 export function nextId(design: Design, prefix: string, taken: ReadonlySet<string> = new Set()): string {
@@ -187,14 +187,3 @@ export function setBackdrop(design: Design, backdrop: Backdrop | undefined): Des
 export function isProbeId(design: Design, id: string): boolean {
   return Boolean(design.probes?.some((p) => p.id === id));
 }
-
-/** Human name of an object for lists and the screen-reader summary. */
-export const TYPE_NAMES: Record<ObjectType, string> = {
-  lamp: 'Lamp',
-  screen: 'Screen',
-  glass: 'Glass',
-  perch: 'Perch',
-  ledge: 'Ledge',
-  hide: 'Hide',
-  foliage: 'Foliage',
-};

@@ -1,6 +1,6 @@
 // Lamp presets and technologies from the engine's generic catalogue, applied to a lamp object.
 import { LAMP_PRESETS, type LampPresetId, LAMP_TECHS, type LampTech } from '@/simulation';
-import { DEFAULT_SIZES } from './defaults';
+import { TUBE_LENGTH_CM } from '@/shared/object-kinds/lamp';
 import type { LampObject } from './types';
 
 /** Fields a preset or technology sets; other lamp fields (position, name, age, reflector) are the fixture's. */
@@ -45,14 +45,14 @@ export function matchingPreset(l: LampObject): LampPresetId | null {
 export function applyTech(l: LampObject, tech: LampTech): LampObject {
   const form = LAMP_TECHS[tech].form;
   const base = { ...withoutOutput(l), tech, form } as LampObject;
-  if (form === 'tube') base.length = l.length ?? DEFAULT_SIZES.tubeLength;
+  if (form === 'tube') base.length = l.length ?? TUBE_LENGTH_CM;
   return base;
 }
 
 export function applyForm(l: LampObject, form: 'tube' | 'bulb'): LampObject {
   if (form === l.form) return l;
   const next = { ...l, form } as LampObject;
-  if (form === 'tube') next.length = l.length ?? DEFAULT_SIZES.tubeLength;
+  if (form === 'tube') next.length = l.length ?? TUBE_LENGTH_CM;
   else delete next.length;
   return next;
 }

@@ -4,7 +4,7 @@ import type { Camera, Point, Rect, Viewport } from '../geometry/camera';
 import type { Guide } from '../geometry/snap';
 import type { LengthUnit, TempUnit } from '@/shared/units';
 import { CM_PER_IN } from '@/shared/units';
-import type { ObjectType } from './types';
+import { OBJECT_TYPES, type ObjectType } from './types';
 
 export type PlaceTool = ObjectType;
 export type Tool = 'select' | 'pan' | PlaceTool | 'probe' | 'ruler';
@@ -100,15 +100,8 @@ export function gridStepCm(unit: LengthUnit): number {
   return unit === 'cm' ? 1 : CM_PER_IN / 2;
 }
 
-export const PLACE_TOOLS: readonly PlaceTool[] = [
-  'lamp',
-  'screen',
-  'glass',
-  'perch',
-  'ledge',
-  'hide',
-  'foliage',
-];
+/** One tool a kind of object, in the registry's order. */
+export const PLACE_TOOLS: readonly PlaceTool[] = OBJECT_TYPES;
 
 export function isPlaceTool(t: Tool): t is PlaceTool {
   return (PLACE_TOOLS as readonly string[]).includes(t);

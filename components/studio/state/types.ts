@@ -16,29 +16,10 @@ export type {
 } from '@/simulation';
 export type { SpeciesSheet } from '@/simulation';
 
-import type { DesignObject, SpeciesSheet } from '@/simulation';
+import type { SpeciesSheet } from '@/simulation';
 
-export type ObjectType = DesignObject['type'];
-export type SegmentObject = Extract<DesignObject, { type: 'screen' | 'glass' | 'perch' }>;
-export type BoxObject = Extract<DesignObject, { type: 'ledge' | 'hide' | 'foliage' }>;
+export type { BoxObject, ObjectType, SegmentObject } from '@/shared/object-kinds';
+export { isBox, isSegment, OBJECT_TYPES } from '@/shared/object-kinds';
 
 /** A species sheet as the studio receives it: the engine's sheet plus the organisation's id for it. */
 export type StudioSpecies = SpeciesSheet & { id: string };
-
-export const OBJECT_TYPES: readonly ObjectType[] = [
-  'lamp',
-  'screen',
-  'glass',
-  'perch',
-  'ledge',
-  'hide',
-  'foliage',
-];
-
-export function isSegment(o: DesignObject): o is SegmentObject {
-  return o.type === 'screen' || o.type === 'glass' || o.type === 'perch';
-}
-
-export function isBox(o: DesignObject): o is BoxObject {
-  return o.type === 'ledge' || o.type === 'hide' || o.type === 'foliage';
-}
