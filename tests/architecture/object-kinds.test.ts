@@ -1,0 +1,78 @@
+import { readdirSync, readFileSync } from 'node:fs';
+import path from 'node:path';
+import { describe, expect, it } from 'vitest';
+import { OBJECT_TYPES } from '@/shared/object-kinds';
+
+/**
+ * A kind of design object is one record (shared/object-kinds/<kind>.ts) in one registry: nothing
+ * outside the records chooses what to do by listing kinds. This finds, in the app's own code, a
+ * `case '<kind>':`, a condition that names two kinds (`o.type === 'screen' || o.type === 'glass'`),
+ * or a literal list of three or more kinds — each a place a new kind would have to be added by hand.
+ * A single `o.type === 'lamp'` stays allowed: lamps carry their own data (calibration, depth, the
+ * lamp log), and that code is about lamps, not about every kind.
+ */
+const ROOTS = ['app', 'components', 'lib', 'shared'];
+const HOMES = ['shared/object-kinds/'];
+// Still choosing by kind: each kind's canvas shape and inspector form are yet to move into a studio
+// record of their own. Remove a line when its file stops choosing; the test fails on any other file.
+const NOT_YET_MOVED = ['components/studio/canvas/ObjectShape.tsx', 'components/studio/panels/ShapeForms.tsx'];
+// Files whose strings happen to be kind names but mean something else.
+const OTHER_MEANINGS: Record<string, string> = {
+  // What stood between the lamp and the meter at a reading ('screen', 'glass', 'lid'), not an object.
+  'shared/reading-setup.ts': 'a reading’s barrier',
+  // The kinds of thing a permission is about ('lamp' is a logged lamp, not a design object).
+  'lib/permissions.ts': 'a permission’s resource',
+};
+
+const KIND = `(?:${OBJECT_TYPES.join('|')})`;
+const RULES: { name: string; pattern: RegExp }[] = [
+  { name: 'a case on a kind', pattern: new RegExp(`case '${KIND}'\\s*:`) },
+  {
+    name: 'a condition naming two kinds',
+    // Two different kinds: `a.type === 'lamp' && b.type === 'lamp'` is about lamps alone.
+    pattern: new RegExp(
+      `type\\s*===\\s*'(${KIND})'\\s*(?:\\|\\||&&|\\?)[^;]{0,80}?type\\s*===\\s*'(?!\\1')${KIND}'`,
+    ),
+  },
+  { name: 'a list of kinds', pattern: new RegExp(`'${KIND}'\\s*,\\s*'${KIND}'\\s*,\\s*'${KIND}'`) },
+];
+
+export function kindListings(file: string, source: string): string[] {
+  const flat = source.replace(/\s+/g, ' ');
+  return RULES.filter((r) => r.pattern.test(flat)).map((r) => `${file}: ${r.name}`);
+}
+
+function sources(dir: string): string[] {
+  return readdirSync(dir, { withFileTypes: true }).flatMap((e) => {
+    const p = path.join(dir, e.name);
+    if (e.isDirectory()) return sources(p);
+    return /\.tsx?$/.test(e.name) && !/\.test\.tsx?$/.test(e.name) ? [p.split(path.sep).join('/')] : [];
+  });
+}
+
+describe('one record per object kind', () => {
+  it('finds each way of listing kinds by hand in a planted file', () => {
+    expect(kindListings('p.ts', "switch (o.type) { case 'perch': return 1; }")).toEqual([
+      'p.ts: a case on a kind',
+    ]);
+    expect(kindListings('p.ts', "if (o.type === 'screen' ||\n  o.type === 'glass') x();")).toEqual([
+      'p.ts: a condition naming two kinds',
+    ]);
+    expect(kindListings('p.ts', "const T = ['lamp', 'screen', 'glass'];")).toEqual(['p.ts: a list of kinds']);
+    expect(kindListings('p.ts', "if (o.type === 'lamp') calibrate(o);")).toEqual([]);
+    expect(kindListings('p.ts', "a.type === 'lamp' && b.type === 'lamp' ? f(a, b) : b;")).toEqual([]);
+  });
+
+  it('leaves no switch, chain or list of kinds outside the registry', () => {
+    const found = ROOTS.flatMap(sources)
+      .filter((f) => !HOMES.some((h) => f.startsWith(h)) && !(f in OTHER_MEANINGS))
+      .flatMap((f) => kindListings(f, readFileSync(f, 'utf8')));
+    expect(found.filter((f) => !NOT_YET_MOVED.some((n) => f.startsWith(`${n}:`)))).toEqual([]);
+    // A file that no longer chooses by kind leaves the list, so the list only shrinks.
+    for (const n of NOT_YET_MOVED)
+      expect(
+        found.some((f) => f.startsWith(`${n}:`)),
+        n,
+      ).toBe(true);
+  });
+});
