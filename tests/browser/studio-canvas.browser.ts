@@ -286,7 +286,8 @@ describe('studio canvas: what is drawn (no account)', () => {
     const placed = page.locator('[data-testid^=finding-]:has(button)').first();
     await placed.waitFor({ state: 'visible', timeout: 60_000 });
     const findingId = ((await placed.getAttribute('data-testid')) ?? '').replace(/^finding-/, '');
-    const button = placed.getByRole('button');
+    // The list may still be reordered by the species' own assessment arriving: keep to the finding read.
+    const button = page.getByTestId(`finding-${findingId}`).getByRole('button');
     await button.click();
     await expect.poll(() => button.getAttribute('aria-pressed'), eventually).toBe('true');
     const canvasSummary = page.getByTestId('object-summary');
