@@ -1,4 +1,5 @@
 import 'server-only';
+import { z } from 'zod';
 import { ApiError } from './errors';
 import { json } from './route';
 import { MAX_CSV_BYTES } from '@/lib/uploads/limits';
@@ -38,3 +39,14 @@ export function checkCsvSize(csv: string): void {
       [{ field: 'csv', message: `The file is larger than ${MAX_CSV_BYTES / 1024} KB.` }],
     );
 }
+
+/** The fields both CSV imports (readings, past counter tests) take besides whose rows they are. */
+export const csvImportFields = {
+  // Its size cap is in bytes, as the file's, and answers 413 like every size cap: see checkCsvSize.
+  csv: z.string({ error: 'Send the CSV file’s text.' }).min(1, 'The file is empty.'),
+  fileName: z.string().max(200).nullish(),
+  /** The uploader's Date#getTimezoneOffset(), for times written without an offset. */
+  tzOffsetMinutes: z.number().int().min(-840).max(840).default(0),
+  /** false (default): check every row and show what would be imported; true: import all rows or none. */
+  commit: z.boolean().default(false),
+};
