@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { STARTING_LAMP_TYPES } from '@/lib/lamp-types/starting-lamp-types';
-import { toColumns } from '@/lib/lamp-types/store';
+import { toColumns } from '@/lib/lamp-types/mutations';
 import { down, up } from '@/migrations/0015-lamp-lifetime-table';
 import { Lamp, LampType } from '@/models';
 import { createEnclosure, createMember, testDb, withTestDatabase } from './helpers/db';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { startingLampType } from '@/lib/lamp-types/starting-lamp-types';
-import { toColumns } from '@/lib/lamp-types/store';
+import { toColumns } from '@/lib/lamp-types/mutations';
 import { up } from '@/migrations/0016-lamp-reach-wording';
 import { LampType } from '@/models';
 import { createOrganisation, testDb, withTestDatabase } from './helpers/db';

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { STARTING_SHEETS, ZONE_CONFIDENCE } from '@/lib/species/starting-sheets';
-import { toColumns, toDto } from '@/lib/species/store';
+import { toDto } from '@/lib/species/queries';
+import { toColumns } from '@/lib/species/mutations';
 import { down, up } from '@/migrations/0017-starting-sheets-size-climbing';
 import { SpeciesSheet } from '@/models';
 import { createOrganisation, createUser, testDb, withTestDatabase } from './helpers/db';

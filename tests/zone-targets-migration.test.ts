@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { STARTING_SHEETS } from '@/lib/species/starting-sheets';
-import { toColumns } from '@/lib/species/store';
+import { toColumns } from '@/lib/species/mutations';
 import { down, up } from '@/migrations/0006-zone-derived-uvb-targets';
 import { SpeciesSheet } from '@/models';
 import { createOrganisation, testDb, withTestDatabase } from './helpers/db';

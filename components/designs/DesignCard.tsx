@@ -1,7 +1,7 @@
 'use client';
 
 import Link from '@/components/ui/Link';
-import type { DesignSummary, VariantSummary } from '@/lib/variants/views';
+import type { DesignSummary, VariantSummary } from '@/lib/variants/queries';
 import { ConfirmButton } from './ConfirmButton';
 import { InlineName } from './InlineName';
 import { ChangedAgo } from './ChangedAgo';

@@ -3,7 +3,7 @@
 import { useQuery } from '@tanstack/react-query';
 import Link from '@/components/ui/Link';
 import { useState } from 'react';
-import type { DesignSummary, VariantSummary } from '@/lib/variants/views';
+import type { DesignSummary, VariantSummary } from '@/lib/variants/queries';
 import { designsApi } from './api';
 import { ChangedAgo } from './ChangedAgo';
 import { compareHref, studioHref } from './list-helpers';

@@ -3,7 +3,7 @@
 import { LocalTime } from '@/components/ui/LocalTime';
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
-import type { ShareView } from '@/lib/variants/views';
+import type { ShareView } from '@/lib/variants/queries';
 import { sharesApi, type CreatedShare } from './api';
 import { ConfirmButton } from './ConfirmButton';
 import { btn, input } from './styles';

@@ -1,7 +1,7 @@
 'use client';
 
 import { apiFetch } from '@/components/ui/api-client';
-import type { DesignSummary, ShareView, VariantDetail, VariantSummary } from '@/lib/variants/views';
+import type { DesignSummary, ShareView, VariantDetail, VariantSummary } from '@/lib/variants/queries';
 
 export type Page<T> = { items: T[]; nextCursor: string | null };
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { DesignSummary } from '@/lib/variants/views';
+import type { DesignSummary } from '@/lib/variants/queries';
 import { changedAgo, copyName, sortDesigns } from './list-helpers';
 
 const d = (id: number, name: string, createdAt: string, updatedAt: string): DesignSummary => ({

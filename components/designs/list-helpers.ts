@@ -1,5 +1,5 @@
 import { formatMoment } from '@/lib/time/format';
-import type { DesignSummary } from '@/lib/variants/views';
+import type { DesignSummary } from '@/lib/variants/queries';
 
 /** "Copy of X", or "Copy of X (2)" when that name is taken in the design. */
 export function copyName(name: string, taken: string[]): string {

@@ -1,6 +1,6 @@
 import { QueryClient, type InfiniteData } from '@tanstack/react-query';
 import { describe, expect, it } from 'vitest';
-import type { DesignSummary } from '@/lib/variants/views';
+import type { DesignSummary } from '@/lib/variants/queries';
 import type { Page } from './api';
 import { designsKey, optimistic } from './useDesigns';
 

@@ -8,7 +8,7 @@ import {
   type QueryClient,
   type QueryKey,
 } from '@tanstack/react-query';
-import type { DesignSummary, VariantSummary } from '@/lib/variants/views';
+import type { DesignSummary, VariantSummary } from '@/lib/variants/queries';
 import { designsApi, variantsApi, type Page } from './api';
 
 type Pages = InfiniteData<Page<DesignSummary>, string | null>;

@@ -1,4 +1,4 @@
-import type { EnclosureJson } from '@/lib/api/enclosures';
+import type { EnclosureJson } from '@/lib/enclosures/queries';
 
 /** What the enclosure screens read of the API's enclosure (plain data, safe to pass to client components). */
 export type EnclosureView = Pick<

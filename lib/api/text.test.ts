@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
-import { createEnclosureBody } from '@/lib/api/enclosures';
+import { createEnclosureBody } from '@/lib/enclosures/schemas';
 import { createLampBody, createReadingBody } from '@/lib/lamp-log/schemas';
 import { lampTypePatchSchema } from '@/lib/lamp-types/schema';
 import { speciesPatchSchema } from '@/lib/species/schema';

@@ -1,6 +1,6 @@
 import 'server-only';
 import { z } from 'zod';
-import { endAllSessions } from '@/lib/account/service';
+import { endAllSessions } from '@/lib/account/mutations';
 import { emailSchema } from '@/lib/api/schemas';
 import { getSequelize } from '@/lib/db';
 import { clearFailures, limitKey } from '@/lib/rate-limit';

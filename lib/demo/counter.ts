@@ -3,7 +3,7 @@ import type { Transaction } from 'sequelize';
 import { assessCounterLamp } from '@/lib/counter/assess';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
 import { lampFacts, needOfSheet, readingFacts } from '@/lib/lamp-log/store';
-import { toDto as lampTypeDto } from '@/lib/lamp-types/store';
+import { toDto as lampTypeDto } from '@/lib/lamp-types/queries';
 import { CounterLamp, CounterReading, Customer, LampType, Organisation, SpeciesSheet } from '@/models';
 import { DEMO_SHOP } from './scenario';
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { toDto as sheetDto } from '@/lib/species/store';
+import { toDto as sheetDto } from '@/lib/species/queries';
 import { toEngineSheet } from '@/lib/species/to-engine';
 import { readStoredDesign } from '@/lib/variants/stored-design';
 import { Design, Enclosure, Lamp, ShareLink, SpeciesSheet, Upload, Variant } from '@/models';

@@ -1,16 +1,16 @@
 import 'server-only';
 import { forbidden, invalid, notFound } from '@/lib/errors';
 import type { Assessment, Design } from '@/simulation';
-import { assertKeeperInOrganisation } from '@/lib/api/enclosures';
+import { assertKeeperInOrganisation } from '@/lib/enclosures/mutations';
 
 import { runEngineTask } from '@/lib/engine-pool';
 import type { CurrentUser } from '@/lib/auth/session-user';
-import { allLampTypes } from '@/lib/lamp-types/store';
+import { allLampTypes } from '@/lib/lamp-types/queries';
 import { can } from '@/lib/permissions';
 import type { SpeciesSheetDto } from '@/lib/species/schema';
-import { findSheet, toDto } from '@/lib/species/store';
+import { findSheet, toDto } from '@/lib/species/queries';
 import { toEngineSheet } from '@/lib/species/to-engine';
-import { createDesign } from '@/lib/variants/designs';
+import { createDesign } from '@/lib/variants/mutations';
 import { Enclosure } from '@/models';
 import { explain, type Explanation } from './explain';
 import type { GuidedStartInput } from './input';

@@ -3,9 +3,9 @@ import { conflict, invalid, notFound } from '@/lib/errors';
 
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { runEngineTask } from '@/lib/engine-pool';
-import { toDto as lampTypeDto } from '@/lib/lamp-types/store';
+import { toDto as lampTypeDto } from '@/lib/lamp-types/queries';
 import { readStoredDesign } from '@/lib/variants/stored-design';
-import { saveVariantDesign } from '@/lib/variants/variants';
+import { saveVariantDesign } from '@/lib/variants/mutations';
 import { Design, LampType, Reading, Variant } from '@/models';
 import { lampSchema, type LampObject } from '@/simulation';
 import type { LampWithEnclosure } from './access';

@@ -1,7 +1,7 @@
 import 'server-only';
 import { Op, QueryTypes } from 'sequelize';
 import { getSequelize } from '@/lib/db';
-import { toDto as lampTypeDto } from '@/lib/lamp-types/store';
+import { toDto as lampTypeDto } from '@/lib/lamp-types/queries';
 import { Enclosure, Lamp, LampOutlook, LampType } from '@/models';
 import { setOutlookRefresher } from '@/models/outlook-invalidation';
 import { todayIso } from './dates';

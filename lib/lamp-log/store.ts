@@ -2,7 +2,7 @@ import 'server-only';
 import { Op, fn, col, where as sqlWhere } from 'sequelize';
 import { afterCursor } from '@/lib/api/pagination';
 import { runEngineTask, type RunOptions } from '@/lib/engine-pool';
-import { toDto as lampTypeDto } from '@/lib/lamp-types/store';
+import { toDto as lampTypeDto } from '@/lib/lamp-types/queries';
 import type { LampTypeDto } from '@/lib/lamp-types/schema';
 import { Enclosure, Lamp, LampType, Reading, SpeciesSheet, User } from '@/models';
 import { DAYS_PER_MONTH } from './dates';

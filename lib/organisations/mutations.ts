@@ -1,7 +1,7 @@
 import 'server-only';
 import { conflict, notFound } from '@/lib/errors';
 import type { Transaction } from 'sequelize';
-import { endAllSessions } from '@/lib/account/service';
+import { endAllSessions } from '@/lib/account/mutations';
 
 import { getSequelize } from '@/lib/db';
 import { seedStartingCatalogue } from '@/lib/species/seed';

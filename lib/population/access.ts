@@ -2,7 +2,7 @@ import 'server-only';
 import { allow } from '@/lib/access';
 import { notFound } from '@/lib/errors';
 import type { CurrentUser } from '@/lib/auth/session-user';
-import { findLampType } from '@/lib/lamp-types/store';
+import { findLampType } from '@/lib/lamp-types/queries';
 import { can, type Action } from '@/lib/permissions';
 import type { LampType } from '@/models';
 

@@ -1,7 +1,7 @@
 import 'server-only';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { isExampleData } from '@/lib/organisations/queries';
-import { findLampType } from '@/lib/lamp-types/store';
+import { findLampType } from '@/lib/lamp-types/queries';
 import { can } from '@/lib/permissions';
 import { adoptionHistory } from './adoption';
 import { populationFor } from './store';

@@ -3,7 +3,7 @@ import { QueryTypes } from 'sequelize';
 import { getSequelize } from '@/lib/db';
 import { runEngineTask } from '@/lib/engine-pool';
 import { lampFacts, readingFacts } from '@/lib/lamp-log/store';
-import { toDto as lampTypeDto } from '@/lib/lamp-types/store';
+import { toDto as lampTypeDto } from '@/lib/lamp-types/queries';
 import { CounterLamp, CounterReading, Lamp, LampType, Reading } from '@/models';
 import type { PopulationCurve, PopulationInput, PopulationLamp } from './fit';
 

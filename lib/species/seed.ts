@@ -1,11 +1,11 @@
 import 'server-only';
 import { literal, Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import { getSequelize } from '@/lib/db';
-import { toColumns as lampTypeColumns } from '@/lib/lamp-types/store';
+import { toColumns as lampTypeColumns } from '@/lib/lamp-types/mutations';
 import { STARTING_LAMP_TYPES } from '@/lib/lamp-types/starting-lamp-types';
 import { CatalogueSeeding, LampType, Organisation, SpeciesSheet } from '@/models';
 import { STARTING_SHEETS } from './starting-sheets';
-import { toColumns } from './store';
+import { toColumns } from './mutations';
 
 /**
  * Gives an organisation its starting species sheets and lamp catalogue, once. Called where an

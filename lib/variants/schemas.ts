@@ -4,7 +4,9 @@ import { DESIGN_MIGRATIONS, parseDesign, TOO_COMPLEX, type Design } from '@/simu
 import { tooComplex } from './stored-design';
 import { pageQuery } from '@/lib/api';
 import { idParams } from '@/lib/api/schemas';
-import { MAX_SHARE_DAYS } from './shares';
+
+/** The longest a share link lasts. */
+export const MAX_SHARE_DAYS = 365;
 
 /** Request shapes of the design, variant and share routes. */
 

@@ -1,4 +1,4 @@
-import { allSheets } from '@/lib/species/store';
+import { allSheets } from '@/lib/species/queries';
 import { toEngineSheet } from '@/lib/species/to-engine';
 import type { SpeciesSheet } from '@/simulation';
 

@@ -100,7 +100,7 @@ async function listAll(as: User, query: string, pageSize = 100): Promise<Row[]> 
   }
 }
 
-// The order the API promises (see lib/api/enclosure-list.ts), written out independently: accents and
+// The order the API promises (see lib/enclosures/queries.ts), written out independently: accents and
 // case ignored, empty text last in both directions, ties by name then id.
 const fold = (s: string) =>
   s

@@ -10,7 +10,7 @@ import { calibrate } from '@/lib/lamp-log/calibrate';
 import { lampChart } from '@/lib/lamp-log/chart';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
 import { lampFacts, readingFacts } from '@/lib/lamp-log/store';
-import { toDto as lampTypeDto } from '@/lib/lamp-types/store';
+import { toDto as lampTypeDto } from '@/lib/lamp-types/queries';
 import { Design, Lamp, LampType, Reading, Variant } from '@/models';
 import { withTestDatabase } from '../helpers/db';
 import { createEnclosureWorld } from '../helpers/world';

@@ -1,8 +1,8 @@
 import { QueryTypes } from 'sequelize';
 import { describe, expect, it } from 'vitest';
-import { listEnclosures } from '@/lib/api/enclosure-list';
+import { listEnclosures } from '@/lib/enclosures/queries';
 import { ENCLOSURE_SORT_COLUMNS } from '@/lib/enclosures/list-view';
-import { listKeepers, listPeople } from '@/lib/api/people-list';
+import { listKeepers, listPeople } from '@/lib/people/queries';
 import { KEEPER_SORT_COLUMNS, MEMBER_SORT_COLUMNS } from '@/lib/people/list-view';
 import { createMember, testDb, withTestDatabase } from '../helpers/db';
 

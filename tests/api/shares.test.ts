@@ -5,7 +5,7 @@ import * as sharesRoute from '@/app/api/variants/[id]/shares/route';
 import * as sharedPictureRoute from '@/app/s/[token]/picture/[version]/[file]/route';
 import * as sharedReportRoute from '@/app/s/[token]/report/route';
 import { parsePictureParams, pictureCache, sharePicturePath } from '@/lib/variants/share-picture';
-import { resolveShareToken } from '@/lib/variants/shares';
+import { resolveShareToken } from '@/lib/variants/queries';
 import { hashShareToken } from '@/lib/variants/tokens';
 import { ShareLink, Variant } from '@/models';
 import { benchDesign } from '@/simulation/testing/fixtures';

@@ -58,7 +58,7 @@ describe('layer boundaries', () => {
     ['lib/planted.ts', "import { planted } from '@/models';"],
     ['components/planted.tsx', "import { planted } from '@/shared/field-scale';"],
     ['components/planted.tsx', "import { planted } from '@/simulation';"],
-    ['app/planted/page.tsx', "import { planted } from '@/lib/variants/variants';"],
+    ['app/planted/page.tsx', "import { planted } from '@/lib/variants/queries';"],
     ['tests/planted.test.ts', "import { planted } from '@/simulation/testing/fixtures';"],
   ])('%s: %s passes', async (file, code) => {
     expect(await restrictedImports(file, code)).toEqual([]);

@@ -5,16 +5,17 @@
 import fc from 'fast-check';
 import { ZodType } from 'zod';
 import { describe, expect, it } from 'vitest';
-import * as account from '@/lib/account/service';
-import * as enclosureList from '@/lib/api/enclosure-list';
-import * as enclosures from '@/lib/api/enclosures';
+import * as account from '@/lib/account/mutations';
 import * as pagination from '@/lib/api/pagination';
 import * as apiSchemas from '@/lib/api/schemas';
+import * as enclosureList from '@/lib/enclosures/queries';
+import * as enclosures from '@/lib/enclosures/schemas';
 import * as password from '@/lib/auth/password';
 import * as signUp from '@/lib/auth/sign-up';
 import * as guidedStart from '@/lib/guided-start/input';
 import * as lampLog from '@/lib/lamp-log/schemas';
 import * as lampTypes from '@/lib/lamp-types/schema';
+import * as people from '@/lib/people/queries';
 import * as species from '@/lib/species/schema';
 import * as variants from '@/lib/variants/schemas';
 import * as compare from '@/shared/designs/compare-params';
@@ -22,16 +23,17 @@ import { EDGE_VALUES, type Json } from './fuzz-arbitraries';
 import { checkProperty } from './fuzz-contract';
 
 const MODULES: Record<string, Record<string, unknown>> = {
-  'lib/account/service': account,
-  'lib/api/enclosure-list': enclosureList,
-  'lib/api/enclosures': enclosures,
+  'lib/account/mutations': account,
   'lib/api/pagination': pagination,
   'lib/api/schemas': apiSchemas,
   'lib/auth/password': password,
   'lib/auth/sign-up': signUp,
+  'lib/enclosures/queries': enclosureList,
+  'lib/enclosures/schemas': enclosures,
   'lib/guided-start/input': guidedStart,
   'lib/lamp-log/schemas': lampLog,
   'lib/lamp-types/schema': lampTypes,
+  'lib/people/queries': people,
   'lib/species/schema': species,
   'lib/variants/schemas': variants,
   'lib/variants/compare-params': compare,

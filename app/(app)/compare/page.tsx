@@ -4,7 +4,7 @@ import { PageHeader } from '@/components/ui/PageHeader';
 import { currentMembership, requireUser } from '@/lib/session';
 import { parseCompareParams, compareQuery } from '@/shared/designs/compare-params';
 import { speciesOptions, attachedSpecies, type SpeciesOption } from '@/lib/variants/species';
-import { getVariantForUser } from '@/lib/variants/variants';
+import { getVariantForUser } from '@/lib/variants/queries';
 import { visibleVariants } from '@/lib/variants/visible';
 
 export const metadata: Metadata = { title: 'Compare variants' };

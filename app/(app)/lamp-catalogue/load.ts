@@ -1,6 +1,6 @@
 import { notFound } from 'next/navigation';
 import type { CurrentUser } from '@/lib/auth/session-user';
-import { findLampType, toDto } from '@/lib/lamp-types/store';
+import { findLampType, toDto } from '@/lib/lamp-types/queries';
 import { can } from '@/lib/permissions';
 
 /** A catalogue entry the user may read (else the page 404s, hiding other organisations' entries). */

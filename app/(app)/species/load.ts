@@ -1,7 +1,7 @@
 import { notFound } from 'next/navigation';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { can } from '@/lib/permissions';
-import { findSheet, toDto } from '@/lib/species/store';
+import { findSheet, toDto } from '@/lib/species/queries';
 
 /** A sheet the user may read (else the page 404s, hiding other organisations' sheets). */
 export async function loadSheet(user: CurrentUser, rawId: string) {

@@ -1,6 +1,8 @@
 import { allow, created, route } from '@/lib/api';
-import { enclosureListQuery, listEnclosures } from '@/lib/api/enclosure-list';
-import { createEnclosure, createEnclosureBody, enclosureJson } from '@/lib/api/enclosures';
+import { enclosureListQuery, listEnclosures } from '@/lib/enclosures/queries';
+import { createEnclosure } from '@/lib/enclosures/mutations';
+import { createEnclosureBody } from '@/lib/enclosures/schemas';
+import { enclosureJson } from '@/lib/enclosures/queries';
 import { roleIn } from '@/lib/permissions';
 
 /**

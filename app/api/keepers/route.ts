@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { allow, created, route } from '@/lib/api';
-import { keeperListQuery, listKeepers } from '@/lib/api/people-list';
+import { keeperListQuery, listKeepers } from '@/lib/people/queries';
 import { emailSchema, idSchema } from '@/lib/api/schemas';
 import { invitationJson, inviteByEmail } from '@/lib/auth/invitations';
 

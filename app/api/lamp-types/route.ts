@@ -4,7 +4,8 @@ import { allow, conflict, created, page, pageQuery, route } from '@/lib/api';
 import { LAMP_TECH_IDS } from '@/simulation';
 import { idSchema } from '@/lib/api/schemas';
 import { lampTypeInputSchema } from '@/lib/lamp-types/schema';
-import { createLampType, listLampTypes, toDto } from '@/lib/lamp-types/store';
+import { listLampTypes, toDto } from '@/lib/lamp-types/queries';
+import { createLampType } from '@/lib/lamp-types/mutations';
 
 /** The organisation's lamp catalogue (`?organisationId=`, optional `tech`). Any member reads. */
 export const GET = route({

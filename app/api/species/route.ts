@@ -2,7 +2,8 @@ import { z } from 'zod';
 import { allow, created, page, pageQuery, route } from '@/lib/api';
 import { idSchema } from '@/lib/api/schemas';
 import { speciesInputSchema } from '@/lib/species/schema';
-import { createSheet, listSheets, toDto } from '@/lib/species/store';
+import { listSheets, toDto } from '@/lib/species/queries';
+import { createSheet } from '@/lib/species/mutations';
 
 /** Species sheets of an organisation (`?organisationId=`, optional `q` to search names). Any member reads. */
 export const GET = route({

@@ -11,7 +11,7 @@ import { runEngineTask } from '@/lib/engine-pool';
 import { NO_SPECIES_SAFETY_LEAD } from '@/shared/cautions';
 import { sizeBoth, tempBoth } from '@/shared/units';
 import { sharePicturePath } from '@/lib/variants/share-picture';
-import { resolveShareToken } from '@/lib/variants/shares';
+import { resolveShareToken } from '@/lib/variants/queries';
 import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
 import { designWorkProblem, type FieldName } from '@/simulation';
 

@@ -12,7 +12,7 @@ import { diffDesigns } from '@/shared/designs/diff';
 import { hotSpotMarker } from '@/shared/designs/figures';
 import { bandsFor, scaleFor, simulate, type Simulated } from '@/shared/designs/simulate';
 import type { SpeciesOption } from '@/lib/variants/species';
-import type { VariantForPage } from '@/lib/variants/variants';
+import type { VariantForPage } from '@/lib/variants/queries';
 import type { VariantOption } from '@/lib/variants/visible';
 import { FieldLegend, FieldSvg } from '../FieldSvg';
 import { studioHref } from '../list-helpers';

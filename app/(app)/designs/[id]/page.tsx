@@ -5,7 +5,7 @@ import { DesignDetail } from '@/components/designs/DesignDetail';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { parseId } from '@/lib/api/schemas';
 import { requireUser } from '@/lib/session';
-import { getDesignForUser } from '@/lib/variants/designs';
+import { getDesignForUser } from '@/lib/variants/queries';
 
 export const metadata: Metadata = { title: 'Design' };
 

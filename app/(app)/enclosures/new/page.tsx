@@ -5,11 +5,11 @@ import { GuidedStart } from '@/components/guided-start/GuidedStart';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { button } from '@/components/ui/styles';
-import { memberViews } from '@/lib/api/views';
+import { memberViews } from '@/lib/people/queries';
 import { TYPICAL_ENCLOSURES } from '@/lib/guided-start/typical-enclosures';
 import { can } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
-import { allSheets } from '@/lib/species/store';
+import { allSheets } from '@/lib/species/queries';
 import { createAction, proposeAction } from './actions';
 
 export const metadata: Metadata = { title: 'Guided start' };

@@ -5,7 +5,7 @@ import { EmptyState } from '@/components/ui/EmptyState';
 import { Notice } from '@/components/ui/Notice';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { button } from '@/components/ui/styles';
-import { allLampTypes } from '@/lib/lamp-types/store';
+import { allLampTypes } from '@/lib/lamp-types/queries';
 import { can } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
 

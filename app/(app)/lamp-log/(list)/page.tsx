@@ -9,7 +9,7 @@ import { PageHeader } from '@/components/ui/PageHeader';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { button, link } from '@/components/ui/styles';
 import { filteredEnclosure, lampListQuery, listLamps } from '@/lib/api/lamp-list';
-import { memberViews } from '@/lib/api/views';
+import { memberViews } from '@/lib/people/queries';
 import { lampListView } from '@/lib/lamp-log/list-view';
 import { isExampleData } from '@/lib/organisations/queries';
 import { toSearchParams } from '@/lib/list-view';

@@ -6,7 +6,7 @@ import { PageHeader } from '@/components/ui/PageHeader';
 import { button } from '@/components/ui/styles';
 import { can } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
-import { allSheets } from '@/lib/species/store';
+import { allSheets } from '@/lib/species/queries';
 
 export const metadata: Metadata = { title: 'Species' };
 

@@ -3,7 +3,7 @@ import { notFound } from 'next/navigation';
 import { StudioLoader } from '@/components/studio/StudioLoader';
 import { parseId } from '@/lib/api/schemas';
 import { requireUser } from '@/lib/session';
-import { getVariantForUser } from '@/lib/variants/variants';
+import { getVariantForUser } from '@/lib/variants/queries';
 import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
 import { studioPhotos } from '@/lib/uploads/studio-photos';
 import { pageNonce, studioPictureFor } from '@/lib/variants/studio-picture';

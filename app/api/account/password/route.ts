@@ -1,5 +1,5 @@
 import { allow, route } from '@/lib/api';
-import { changePassword, changePasswordBody } from '@/lib/account/service';
+import { changePassword, changePasswordBody } from '@/lib/account/mutations';
 
 /** Changes the signed-in person's password; every session of theirs ends, this one included. */
 export const PUT = route({

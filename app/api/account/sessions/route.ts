@@ -1,5 +1,5 @@
 import { allow, route } from '@/lib/api';
-import { endAllSessions } from '@/lib/account/service';
+import { endAllSessions } from '@/lib/account/mutations';
 
 /** "Sign out everywhere": ends every session of the signed-in person, on every device, this one included. */
 export const DELETE = route({

@@ -1,6 +1,7 @@
 import { json, route } from '@/lib/api';
 import { designFor } from '@/lib/variants/access';
-import { deleteDesign, designDetail, renameDesign } from '@/lib/variants/designs';
+import { designDetail } from '@/lib/variants/queries';
+import { deleteDesign, renameDesign } from '@/lib/variants/mutations';
 import { idParams, renameBody } from '@/lib/variants/schemas';
 
 export const GET = route({

@@ -1,11 +1,7 @@
 import { allow, forbidden, route } from '@/lib/api';
-import {
-  enclosureJson,
-  enclosureWithKeeper,
-  updateEnclosure,
-  updateEnclosureBody,
-  type EnclosureWithKeeper,
-} from '@/lib/api/enclosures';
+import { enclosureJson, enclosureWithKeeper, type EnclosureWithKeeper } from '@/lib/enclosures/queries';
+import { updateEnclosure } from '@/lib/enclosures/mutations';
+import { updateEnclosureBody } from '@/lib/enclosures/schemas';
 import { idParams } from '@/lib/api/schemas';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { can } from '@/lib/permissions';

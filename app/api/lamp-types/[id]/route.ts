@@ -3,7 +3,8 @@ import { allow, conflict, json, notFound, route } from '@/lib/api';
 import { idParams } from '@/lib/api/schemas';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { lampTypePatchSchema } from '@/lib/lamp-types/schema';
-import { findLampType, toDto, updateLampType } from '@/lib/lamp-types/store';
+import { findLampType, toDto } from '@/lib/lamp-types/queries';
+import { updateLampType } from '@/lib/lamp-types/mutations';
 
 async function load(id: number, user: CurrentUser, action: 'read' | 'update' | 'delete') {
   const row = await findLampType(id);

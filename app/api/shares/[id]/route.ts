@@ -1,7 +1,7 @@
 import { route } from '@/lib/api';
 import { shareFor } from '@/lib/variants/access';
 import { idParams } from '@/lib/variants/schemas';
-import { revokeShare } from '@/lib/variants/shares';
+import { revokeShare } from '@/lib/variants/mutations';
 
 /** Revokes the link: from now on it answers 404. */
 export const DELETE = route({

@@ -2,7 +2,8 @@ import { allow, json, notFound, route } from '@/lib/api';
 import { idParams } from '@/lib/api/schemas';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { speciesPatchSchema } from '@/lib/species/schema';
-import { findSheet, toDto, updateSheet } from '@/lib/species/store';
+import { findSheet, toDto } from '@/lib/species/queries';
+import { updateSheet } from '@/lib/species/mutations';
 
 async function load(id: number, user: CurrentUser, action: 'read' | 'update' | 'delete') {
   const row = await findSheet(id);

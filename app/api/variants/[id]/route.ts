@@ -1,7 +1,8 @@
 import { json, route } from '@/lib/api';
 import { variantFor } from '@/lib/variants/access';
 import { idParams, renameBody, saveVariantBody } from '@/lib/variants/schemas';
-import { deleteVariant, renameVariant, saveVariantDesign, variantDetailOf } from '@/lib/variants/variants';
+import { variantDetailOf } from '@/lib/variants/queries';
+import { deleteVariant, renameVariant, saveVariantDesign } from '@/lib/variants/mutations';
 
 export const GET = route({
   params: idParams,

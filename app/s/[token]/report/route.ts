@@ -4,7 +4,7 @@ import { DomainError } from '@/lib/errors';
 import { runEngineTask } from '@/lib/engine-pool';
 import { download, fileBase } from '@/lib/reports/build';
 import { countExport } from '@/lib/reports/limits';
-import { resolveShareToken } from '@/lib/variants/shares';
+import { resolveShareToken } from '@/lib/variants/queries';
 import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
 import { logger } from '@/lib/log';
 import { assertComputable } from '@/lib/variants/stored-design';

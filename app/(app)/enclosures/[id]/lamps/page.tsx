@@ -10,7 +10,7 @@ import { EmptyState } from '@/components/ui/EmptyState';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { card } from '@/components/ui/styles';
-import { allLampTypes } from '@/lib/lamp-types/store';
+import { allLampTypes } from '@/lib/lamp-types/queries';
 import { todayIso } from '@/lib/lamp-log/dates';
 import { enclosureForLampsPage } from '@/lib/lamp-log/access';
 import { designLampsOf } from '@/lib/lamp-log/design-lamps';

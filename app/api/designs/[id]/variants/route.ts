@@ -1,7 +1,8 @@
 import { created, route } from '@/lib/api';
 import { designFor, variantFor } from '@/lib/variants/access';
 import { createVariantBody, idParams, listQuery } from '@/lib/variants/schemas';
-import { createVariant, listVariants } from '@/lib/variants/variants';
+import { listVariants } from '@/lib/variants/queries';
+import { createVariant } from '@/lib/variants/mutations';
 
 export const GET = route({
   params: idParams,

@@ -1,6 +1,7 @@
 import { created, route } from '@/lib/api';
 import { enclosureFor } from '@/lib/enclosures/access';
-import { createDesign, listDesigns } from '@/lib/variants/designs';
+import { listDesigns } from '@/lib/variants/queries';
+import { createDesign } from '@/lib/variants/mutations';
 import { createDesignBody, designListQuery, idParams } from '@/lib/variants/schemas';
 
 /** The enclosure's designs, each with its variants (summaries). `?q=` searches names; `?cursor=&limit=` pages. */

@@ -1,6 +1,6 @@
 import { route } from '@/lib/api';
 import { idParams } from '@/lib/api/schemas';
-import { toDto } from '@/lib/lamp-types/store';
+import { toDto } from '@/lib/lamp-types/queries';
 import { populationTypeFor } from '@/lib/population/access';
 import { adoptionHistory } from '@/lib/population/adoption';
 import { populationFor } from '@/lib/population/store';

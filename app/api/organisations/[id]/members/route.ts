@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { allow, route } from '@/lib/api';
-import { listPeople, memberListQuery } from '@/lib/api/people-list';
+import { listPeople, memberListQuery } from '@/lib/people/queries';
 import { idParams, idSchema, roleSchema } from '@/lib/api/schemas';
 import { changeMemberRole, removeMember } from '@/lib/organisations/mutations';
 

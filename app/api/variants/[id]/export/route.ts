@@ -4,7 +4,7 @@ import { runEngineTask } from '@/lib/engine-pool';
 import { isExampleData, organisationName } from '@/lib/organisations/queries';
 import { download, fileBase } from '@/lib/reports/build';
 import { countExport, EXPORT_MONTHS } from '@/lib/reports/limits';
-import { findSheet } from '@/lib/species/store';
+import { findSheet } from '@/lib/species/queries';
 import { variantFor } from '@/lib/variants/access';
 import { idParams } from '@/lib/variants/schemas';
 import { attachedSpecies, speciesOptions, type SpeciesOption } from '@/lib/variants/species';

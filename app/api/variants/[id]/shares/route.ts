@@ -1,7 +1,8 @@
 import { allow, created, route } from '@/lib/api';
 import { variantFor } from '@/lib/variants/access';
 import { createShareBody, idParams, listQuery } from '@/lib/variants/schemas';
-import { createShare, listShares } from '@/lib/variants/shares';
+import { listShares } from '@/lib/variants/queries';
+import { createShare } from '@/lib/variants/mutations';
 
 /** The variant's share links (active, expired and revoked). Tokens are not stored, so none is listed. */
 export const GET = route({

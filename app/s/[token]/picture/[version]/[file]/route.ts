@@ -13,7 +13,7 @@ import {
   pictureCache,
   pictureKey,
 } from '@/lib/variants/share-picture';
-import { resolveShareToken } from '@/lib/variants/shares';
+import { resolveShareToken } from '@/lib/variants/queries';
 import { hotSpotMarker } from '@/shared/designs/figures';
 import { designWorkProblem } from '@/simulation';
 

@@ -1,30 +1,60 @@
 import 'server-only';
-import { conflict } from '@/lib/errors';
 import { literal } from 'sequelize';
-import { afterCursor, page } from '@/lib/api';
 import type { CurrentUser } from '@/lib/auth/session-user';
+import { config } from '@/lib/config';
 import { getSequelize } from '@/lib/db';
-import { can } from '@/lib/permissions';
+import { conflict } from '@/lib/errors';
 import type { Design as DesignFile } from '@/simulation';
-import { User, Variant } from '@/models';
+import { Design, ShareLink, Variant, type Enclosure } from '@/models';
 import type { DesignWithEnclosure } from './access';
-import { loadVariantWithOwner } from './access';
 import { defaultDesignFor } from './default-design';
+import { designDetail, designSummary, shareView, variantSummary } from './queries';
+import type { DesignSummary, ShareView, VariantSummary } from './queries';
 import { readStoredDesign, serializeDesign } from './stored-design';
+import { newShareToken, shareUrl } from './tokens';
 import { wholeSecond } from './time';
-import { variantDetail, variantSummary, type VariantDetail, type VariantSummary } from './views';
 
-export async function listVariants(
-  design: DesignWithEnclosure,
-  opts: { cursor?: number; limit: number },
-): Promise<{ items: VariantSummary[]; nextCursor: string | null }> {
-  const rows = await Variant.findAll({
-    where: { designId: design.id, ...afterCursor(opts.cursor) },
-    attributes: ['id', 'designId', 'name', 'version', 'updatedAt'],
-    order: [['id', 'ASC']],
-    limit: opts.limit + 1,
+/** Writes of designs, their variants and share links. */
+
+export const FIRST_VARIANT_NAME = 'Variant A';
+
+/**
+ * A new design with its first variant, in one transaction so there is never a design without a
+ * variant. Without a design file, the first variant starts from the enclosure's default.
+ */
+export async function createDesign(
+  user: CurrentUser,
+  enclosure: Enclosure,
+  input: { name: string; variantName?: string; design?: DesignFile },
+): Promise<{ design: DesignSummary; variant: VariantSummary }> {
+  const sequelize = getSequelize();
+  return sequelize.transaction(async (transaction) => {
+    const design = await Design.create(
+      { enclosureId: enclosure.id, name: input.name, createdById: user.id },
+      { transaction },
+    );
+    const variant = await Variant.create(
+      {
+        designId: design.id,
+        name: input.variantName ?? FIRST_VARIANT_NAME,
+        designJson: serializeDesign(input.design ?? defaultDesignFor(enclosure)),
+        createdById: user.id,
+        updatedById: user.id,
+      },
+      { transaction },
+    );
+    return { design: designSummary(design, [variant]), variant: variantSummary(variant) };
   });
-  return page(rows, opts.limit, variantSummary);
+}
+
+export async function renameDesign(design: Design, name: string): Promise<DesignSummary> {
+  await design.update({ name });
+  return designDetail(design);
+}
+
+/** Deleting a design removes its variants and their share links (foreign keys cascade). */
+export async function deleteDesign(design: Design): Promise<void> {
+  await design.destroy();
 }
 
 export async function createVariant(
@@ -108,50 +138,23 @@ export async function deleteVariant(variant: Variant): Promise<void> {
   });
 }
 
-export async function variantDetailOf(variant: Variant): Promise<VariantDetail> {
-  const updatedBy = variant.updatedById
-    ? await User.findByPk(variant.updatedById, { attributes: ['id', 'name'] })
+export async function createShare(
+  user: CurrentUser,
+  variant: Variant,
+  input: { expiresInDays?: number },
+  now = new Date(),
+): Promise<ShareView & { token: string; url: string }> {
+  const { token, tokenHash } = newShareToken();
+  const expiresAt = input.expiresInDays
+    ? wholeSecond(new Date(now.getTime() + input.expiresInDays * 86_400_000))
     : null;
-  return variantDetail(Object.assign(variant, { updatedBy }));
+  const share = await ShareLink.create({ variantId: variant.id, tokenHash, expiresAt, createdById: user.id });
+  // The token is shown this once; only its hash is kept.
+  return { ...shareView(share, now), token, url: shareUrl(config().APP_URL, token) };
 }
 
-export type VariantForPage = VariantDetail & {
-  designName: string;
-  enclosure: {
-    id: number;
-    name: string;
-    organisationId: number;
-    keeperId: number;
-    speciesName: string | null;
-  };
-  /** Whether this user may save changes (the page shows a read-only view otherwise). */
-  canEdit: boolean;
-};
-
-/**
- * For server components (the studio, the compare page): the variant if this user may read it, else
- * null — a page answers "not found" either way, so nobody learns whether someone else's variant exists.
- */
-export async function getVariantForUser(
-  user: CurrentUser | null,
-  variantId: number,
-): Promise<VariantForPage | null> {
-  if (!user || !Number.isSafeInteger(variantId) || variantId <= 0) return null;
-  const variant = await loadVariantWithOwner(variantId);
-  if (!variant) return null;
-  const e = variant.design.enclosure;
-  const resource = { kind: 'variant' as const, organisationId: e.organisationId, keeperId: e.keeperId };
-  if (!can(user, 'read', resource)) return null;
-  return {
-    ...(await variantDetailOf(variant)),
-    designName: variant.design.name,
-    enclosure: {
-      id: e.id,
-      name: e.name,
-      organisationId: e.organisationId,
-      keeperId: e.keeperId,
-      speciesName: e.speciesName ?? null,
-    },
-    canEdit: can(user, 'update', resource),
-  };
+/** Revoking is idempotent: the first revocation time is kept. */
+export async function revokeShare(share: ShareLink): Promise<ShareView> {
+  if (!share.revokedAt) await share.update({ revokedAt: wholeSecond() });
+  return shareView(share);
 }

@@ -1,6 +1,7 @@
 import 'server-only';
-import { literal, Op, type OrderItem, type WhereOptions } from 'sequelize';
+import { col, fn, literal, Op, type OrderItem, type WhereOptions } from 'sequelize';
 import { z } from 'zod';
+import { notFound } from '@/lib/errors';
 import {
   defaultDescending,
   ENCLOSURE_SORT_COLUMNS,
@@ -8,11 +9,10 @@ import {
   SORT_DIRECTIONS,
   type EnclosureSortColumn,
 } from '@/lib/enclosures/list-view';
+import { likeContains } from '@/lib/api/like';
+import { offsetQuery, pageQuery } from '@/lib/api/pagination';
+import { idSchema, textSchema } from '@/lib/api/schemas';
 import { Enclosure, User } from '@/models';
-import { enclosureJson } from './enclosures';
-import { likeContains } from './like';
-import { offsetQuery, pageQuery } from './pagination';
-import { idSchema, textSchema } from './schemas';
 
 /**
  * `GET /api/enclosures` query: search, sort and page of one organisation's enclosures.
@@ -131,3 +131,56 @@ export async function listEnclosures(query: Omit<EnclosureListQuery, 'keeperId'>
 }
 
 export type EnclosureListPage = Awaited<ReturnType<typeof listEnclosures>>;
+
+export function enclosureJson(e: Enclosure & { keeper?: User | null }) {
+  return {
+    id: e.id,
+    organisationId: e.organisationId,
+    keeperId: e.keeperId,
+    keeperName: e.keeper?.name ?? null,
+    name: e.name,
+    widthCm: e.widthCm,
+    heightCm: e.heightCm,
+    depthCm: e.depthCm,
+    speciesName: e.speciesName ?? null,
+    animalName: e.animalName ?? null,
+    notes: e.notes ?? null,
+    createdAt: e.createdAt.toISOString(),
+    updatedAt: e.updatedAt.toISOString(),
+  };
+}
+
+export type EnclosureJson = ReturnType<typeof enclosureJson>;
+
+export async function enclosureCounts(
+  organisationId: number,
+  keeperIds: number[],
+): Promise<Map<number, number>> {
+  if (keeperIds.length === 0) return new Map();
+  const rows = (await Enclosure.findAll({
+    attributes: ['keeperId', [fn('COUNT', col('id')), 'n']],
+    where: { organisationId, keeperId: keeperIds },
+    group: ['keeperId'],
+    raw: true,
+  })) as unknown as { keeperId: number; n: number | string }[];
+  return new Map(rows.map((r) => [r.keeperId, Number(r.n)]));
+}
+
+export type EnclosureWithKeeper = Enclosure & { keeper?: User | null };
+
+/** An enclosure with its keeper's name; 404 when there is none (access is the caller's check). */
+export async function enclosureWithKeeper(id: number): Promise<EnclosureWithKeeper> {
+  const enclosure = await Enclosure.findByPk(id, {
+    include: [{ model: User, as: 'keeper', attributes: ['id', 'name'] }],
+  });
+  if (!enclosure) throw notFound('That enclosure');
+  return enclosure;
+}
+
+/** One enclosure as JSON for a page, or null (access is the caller's check). */
+export async function enclosureView(id: number) {
+  const e = await Enclosure.findByPk(id, {
+    include: [{ model: User, as: 'keeper', attributes: ['id', 'name'] }],
+  });
+  return e ? enclosureJson(e) : null;
+}

@@ -11,15 +11,16 @@ import {
 } from '@/lib/people/list-view';
 import type { Role } from '@/lib/permissions';
 import { memberJson, type MemberRow } from '@/lib/organisations/queries';
-import { Membership, User } from '@/models';
-import { enclosureCounts } from './enclosures';
-import { likeContains } from './like';
-import { offsetQuery, pageQuery } from './pagination';
-import { idSchema, roleSchema, textSchema } from './schemas';
+import { invitationJson } from '@/lib/auth/invitations';
+import { likeContains } from '@/lib/api/like';
+import { offsetQuery, pageQuery } from '@/lib/api/pagination';
+import { idSchema, roleSchema, textSchema } from '@/lib/api/schemas';
+import { enclosureCounts } from '@/lib/enclosures/queries';
+import { Invitation, Membership, User } from '@/models';
 
 /**
  * The keepers and members lists: search, sort and page of one organisation's people, offset paging with
- * a total like the enclosures table (see enclosure-list.ts for why). A request reads one page of
+ * a total like the enclosures table (see lib/enclosures/queries.ts for why). A request reads one page of
  * memberships through the (organisation_id, role, id) index with each person by primary key, counts
  * through the same index, and (keepers) counts the page's enclosures in one grouped query: the cost
  * follows the page, not the hundreds of customers a shop has. Who joined order comes from the index;
@@ -125,3 +126,47 @@ export async function listKeepers(query: Omit<PeopleListQuery, 'role'>) {
 
 export type MemberListPage = Awaited<ReturnType<typeof listPeople>>;
 export type KeeperListPage = Awaited<ReturnType<typeof listKeepers>>;
+
+/**
+ * Read models for the server-rendered pages. Callers check `can` first; these only fetch.
+ * Pages show at most PAGE_LIMIT rows and say so when there are more.
+ */
+export const PAGE_LIMIT = 500;
+
+export type MemberView = { userId: number; name: string; email: string; role: Role; joinedAt: string };
+
+export async function memberViews(organisationId: number, role?: Role): Promise<MemberView[]> {
+  const rows = await Membership.findAll({
+    where: { organisationId, ...(role ? { role } : {}) },
+    include: [{ model: User, as: 'user', attributes: ['id', 'name', 'email'] }],
+    order: [['id', 'ASC']],
+    limit: PAGE_LIMIT,
+  });
+  return rows
+    .map((m) => {
+      const u = (m as Membership & { user?: User }).user;
+      return {
+        userId: m.userId,
+        name: u?.name ?? '',
+        email: u?.email ?? '',
+        role: m.role,
+        joinedAt: m.createdAt.toISOString(),
+      };
+    })
+    .sort((a, b) => a.name.localeCompare(b.name));
+}
+
+export async function pendingInvitationViews(organisationId: number, role?: Role) {
+  const rows = await Invitation.findAll({
+    where: {
+      organisationId,
+      acceptedAt: null,
+      revokedAt: null,
+      expiresAt: { [Op.gt]: new Date() },
+      ...(role ? { role } : {}),
+    },
+    order: [['createdAt', 'DESC']],
+    limit: PAGE_LIMIT,
+  });
+  return rows.map(invitationJson);
+}
