@@ -1,6 +1,7 @@
 import 'server-only';
 import { col, fn, literal, Op, type OrderItem, type WhereOptions } from 'sequelize';
 import { z } from 'zod';
+import type { EnclosureWithKeeper } from '@/lib/access';
 import { notFound } from '@/lib/errors';
 import {
   defaultDescending,
@@ -166,7 +167,7 @@ export async function enclosureCounts(
   return new Map(rows.map((r) => [r.keeperId, Number(r.n)]));
 }
 
-export type EnclosureWithKeeper = Enclosure & { keeper?: User | null };
+export type { EnclosureWithKeeper };
 
 /** An enclosure with its keeper's name; 404 when there is none (access is the caller's check). */
 export async function enclosureWithKeeper(id: number): Promise<EnclosureWithKeeper> {
@@ -175,12 +176,4 @@ export async function enclosureWithKeeper(id: number): Promise<EnclosureWithKeep
   });
   if (!enclosure) throw notFound('That enclosure');
   return enclosure;
-}
-
-/** One enclosure as JSON for a page, or null (access is the caller's check). */
-export async function enclosureView(id: number) {
-  const e = await Enclosure.findByPk(id, {
-    include: [{ model: User, as: 'keeper', attributes: ['id', 'name'] }],
-  });
-  return e ? enclosureJson(e) : null;
 }

@@ -1,18 +1,17 @@
 import 'server-only';
-import { allow } from '@/lib/access';
-import { isDomainError, notFound } from '@/lib/errors';
+import { loadOwned, type LampWithEnclosure, type ReadingWithLamp } from '@/lib/access';
+import { isDomainError } from '@/lib/errors';
 
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { can, type Action } from '@/lib/permissions';
 import { enclosureFor } from '@/lib/enclosures/access';
-import { Enclosure, Lamp, Reading } from '@/models';
+import type { Enclosure } from '@/models';
 
 /**
- * Loading a lamp (or reading) with the enclosure that owns it, then asking `can`. Ownership comes from
- * the enclosure, never from the client; someone who may not see it gets 404.
+ * Loading a lamp (or reading) with the enclosure that owns it, then asking `can` (`loadOwned`). Ownership
+ * comes from the enclosure, never from the client; someone who may not see it gets 404.
  */
-export type LampWithEnclosure = Lamp & { enclosure: Enclosure };
-export type ReadingWithLamp = Reading & { lamp: LampWithEnclosure };
+export type { LampWithEnclosure, ReadingWithLamp };
 
 const resource = (e: Enclosure, kind: 'lamp' | 'reading' | 'enclosure') => ({
   kind,
@@ -20,30 +19,11 @@ const resource = (e: Enclosure, kind: 'lamp' | 'reading' | 'enclosure') => ({
   keeperId: e.keeperId,
 });
 
-export async function lampFor(user: CurrentUser, id: number, action: Action): Promise<LampWithEnclosure> {
-  const lamp = (await Lamp.findByPk(id, {
-    include: [{ model: Enclosure, as: 'enclosure', required: true }],
-  })) as LampWithEnclosure | null;
-  if (!lamp) throw notFound('The lamp');
-  allow(user, action, resource(lamp.enclosure, 'lamp'), 'The lamp');
-  return lamp;
-}
+export const lampFor = (user: CurrentUser, id: number, action: Action): Promise<LampWithEnclosure> =>
+  loadOwned('lamp', id, user, action);
 
-export async function readingFor(user: CurrentUser, id: number, action: Action): Promise<ReadingWithLamp> {
-  const reading = (await Reading.findByPk(id, {
-    include: [
-      {
-        model: Lamp,
-        as: 'lamp',
-        required: true,
-        include: [{ model: Enclosure, as: 'enclosure', required: true }],
-      },
-    ],
-  })) as ReadingWithLamp | null;
-  if (!reading) throw notFound('The reading');
-  allow(user, action, resource(reading.lamp.enclosure, 'reading'), 'The reading');
-  return reading;
-}
+export const readingFor = (user: CurrentUser, id: number, action: Action): Promise<ReadingWithLamp> =>
+  loadOwned('reading', id, user, action);
 
 /** A page's 404 for what this user may not read, whichever the reason (missing or someone else's). */
 async function orNull<T>(load: () => Promise<T>): Promise<T | null> {

@@ -1,8 +1,7 @@
 import 'server-only';
+import { loadOwnedForPage } from '@/lib/access';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { isExampleData } from '@/lib/organisations/queries';
-import { findLampType } from '@/lib/lamp-types/queries';
-import { can } from '@/lib/permissions';
 import { adoptionHistory } from './adoption';
 import { populationFor } from './store';
 
@@ -11,8 +10,9 @@ import { populationFor } from './store';
  * shop's figures (a keeper: they see only which curve is in force, from the type itself).
  */
 export async function populationPage(user: CurrentUser, lampTypeId: number) {
-  const type = await findLampType(lampTypeId);
-  if (!type || !can(user, 'read', { kind: 'shop-figures', organisationId: type.organisationId })) return null;
+  const found = await loadOwnedForPage('lamp-type-figures', lampTypeId, user);
+  if (!found) return null;
+  const { record: type, canEdit: mayAdopt } = found;
   const [view, history, example] = await Promise.all([
     // A busy or failed engine thread leaves the rest of the type's page readable, with a message.
     populationFor(type).catch(() => null),
@@ -23,6 +23,6 @@ export async function populationPage(user: CurrentUser, lampTypeId: number) {
     view,
     history,
     example,
-    mayAdopt: can(user, 'update', { kind: 'shop-figures', organisationId: type.organisationId }),
+    mayAdopt,
   };
 }

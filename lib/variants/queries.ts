@@ -3,11 +3,10 @@ import { Op } from 'sequelize';
 import { afterCursor, page } from '@/lib/api';
 import { likeContains } from '@/lib/api/like';
 import type { CurrentUser } from '@/lib/auth/session-user';
-import { can } from '@/lib/permissions';
 import type { Design as DesignFile } from '@/simulation';
 import { physicsOf } from '@/simulation';
 import { Design, Enclosure, Organisation, ShareLink, User, Variant } from '@/models';
-import { loadVariantWithOwner, type DesignWithEnclosure } from './access';
+import { loadOwnedForPage, type DesignWithEnclosure } from '@/lib/access';
 import { readStoredDesign } from './stored-design';
 import { hashShareToken, isWellFormedShareToken, shareLinkState, type ShareLinkState } from './tokens';
 
@@ -134,18 +133,14 @@ export type DesignForPage = {
 
 /** For the design page: the design if this user may read it, else null (the page answers 404 alike). */
 export async function getDesignForUser(user: CurrentUser, designId: number): Promise<DesignForPage | null> {
-  if (!Number.isSafeInteger(designId) || designId <= 0) return null;
-  const design = (await Design.findByPk(designId, {
-    include: [{ model: Enclosure, as: 'enclosure', required: true }],
-  })) as (Design & { enclosure: Enclosure }) | null;
-  if (!design) return null;
+  const found = await loadOwnedForPage('design', designId, user);
+  if (!found) return null;
+  const { record: design, canEdit } = found;
   const e = design.enclosure;
-  const resource = { kind: 'design' as const, organisationId: e.organisationId, keeperId: e.keeperId };
-  if (!can(user, 'read', resource)) return null;
   return {
     design: await designDetail(design),
     enclosure: { id: e.id, name: e.name, organisationId: e.organisationId },
-    canEdit: can(user, 'update', resource),
+    canEdit,
   };
 }
 
@@ -190,12 +185,10 @@ export async function getVariantForUser(
   user: CurrentUser | null,
   variantId: number,
 ): Promise<VariantForPage | null> {
-  if (!user || !Number.isSafeInteger(variantId) || variantId <= 0) return null;
-  const variant = await loadVariantWithOwner(variantId);
-  if (!variant) return null;
+  const found = user && (await loadOwnedForPage('variant', variantId, user));
+  if (!found) return null;
+  const { record: variant, canEdit } = found;
   const e = variant.design.enclosure;
-  const resource = { kind: 'variant' as const, organisationId: e.organisationId, keeperId: e.keeperId };
-  if (!can(user, 'read', resource)) return null;
   return {
     ...(await variantDetailOf(variant)),
     designName: variant.design.name,
@@ -206,7 +199,7 @@ export async function getVariantForUser(
       keeperId: e.keeperId,
       speciesName: e.speciesName ?? null,
     },
-    canEdit: can(user, 'update', resource),
+    canEdit,
   };
 }
 

@@ -1,17 +1,11 @@
 import { notFound } from 'next/navigation';
+import { loadOwnedForPage } from '@/lib/access';
 import type { CurrentUser } from '@/lib/auth/session-user';
-import { can } from '@/lib/permissions';
-import { findSheet, toDto } from '@/lib/species/queries';
+import { toDto } from '@/lib/species/queries';
 
 /** A sheet the user may read (else the page 404s, hiding other organisations' sheets). */
 export async function loadSheet(user: CurrentUser, rawId: string) {
-  const id = Number(rawId);
-  if (!Number.isInteger(id) || id <= 0) notFound();
-  const row = await findSheet(id);
-  if (!row || !can(user, 'read', { kind: 'species', organisationId: row.organisationId })) notFound();
-  const sheet = toDto(row);
-  return {
-    sheet,
-    mayEdit: can(user, 'update', { kind: 'species', organisationId: row.organisationId }),
-  };
+  const found = await loadOwnedForPage('species', rawId, user);
+  if (!found) notFound();
+  return { sheet: toDto(found.record), mayEdit: found.canEdit };
 }

@@ -7,10 +7,10 @@ import { EnclosureDetails } from '@/components/enclosures/EnclosureDetails';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { button } from '@/components/ui/styles';
-import { enclosureView } from '@/lib/enclosures/queries';
+import { loadOwnedForPage } from '@/lib/access';
+import { enclosureJson } from '@/lib/enclosures/queries';
 import { memberViews } from '@/lib/people/queries';
 import { can } from '@/lib/permissions';
-import { parseId } from '@/lib/api/schemas';
 import { requireUser } from '@/lib/session';
 
 export const metadata: Metadata = { title: 'Enclosure' };
@@ -18,13 +18,11 @@ export const metadata: Metadata = { title: 'Enclosure' };
 export default async function EnclosurePage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
   const user = await requireUser(`/enclosures/${id}`);
-  const enclosureId = parseId(id);
-  const enclosure = enclosureId === null ? null : await enclosureView(enclosureId);
-  const resource =
-    enclosure &&
-    ({ kind: 'enclosure', organisationId: enclosure.organisationId, keeperId: enclosure.keeperId } as const);
+  const found = await loadOwnedForPage('enclosure', id, user);
   // Someone else's enclosure looks exactly like a missing one.
-  if (!enclosure || !resource || !can(user, 'read', resource)) notFound();
+  if (!found) notFound();
+  const { canEdit, canDelete } = found;
+  const enclosure = enclosureJson(found.record);
   const seesPeople = can(user, 'read', { kind: 'member', organisationId: enclosure.organisationId });
   const people = seesPeople
     ? (await memberViews(enclosure.organisationId)).map((p) => ({ id: p.userId, name: p.name, role: p.role }))
@@ -48,13 +46,8 @@ export default async function EnclosurePage({ params }: { params: Promise<{ id: 
         }
       />
       <div className="space-y-8">
-        <EnclosureDetails
-          enclosure={enclosure}
-          people={people}
-          canEdit={can(user, 'update', resource)}
-          canDelete={can(user, 'delete', resource)}
-        />
-        <DesignsSection enclosureId={enclosure.id} canEdit={can(user, 'update', resource)} />
+        <EnclosureDetails enclosure={enclosure} people={people} canEdit={canEdit} canDelete={canDelete} />
+        <DesignsSection enclosureId={enclosure.id} canEdit={canEdit} />
       </div>
     </>
   );

@@ -1,28 +1,21 @@
 import { ForeignKeyConstraintError, UniqueConstraintError } from 'sequelize';
-import { allow, conflict, json, notFound, route } from '@/lib/api';
+import { conflict, json, route } from '@/lib/api';
 import { idParams } from '@/lib/api/schemas';
-import type { CurrentUser } from '@/lib/auth/session-user';
+import { loadOwned } from '@/lib/access';
 import { lampTypePatchSchema } from '@/lib/lamp-types/schema';
-import { findLampType, toDto } from '@/lib/lamp-types/queries';
+import { toDto } from '@/lib/lamp-types/queries';
 import { updateLampType } from '@/lib/lamp-types/mutations';
-
-async function load(id: number, user: CurrentUser, action: 'read' | 'update' | 'delete') {
-  const row = await findLampType(id);
-  if (!row) throw notFound('That lamp type');
-  allow(user, action, { kind: 'lamp-type', organisationId: row.organisationId }, 'That lamp type');
-  return row;
-}
 
 export const GET = route({
   params: idParams,
-  handler: async ({ params, user }) => toDto(await load(params.id, user, 'read')),
+  handler: async ({ params, user }) => toDto(await loadOwned('lamp-type', params.id, user, 'read')),
 });
 
 export const PATCH = route({
   params: idParams,
   body: lampTypePatchSchema,
   handler: async ({ params, body, user }) => {
-    const row = await load(params.id, user, 'update');
+    const row = await loadOwned('lamp-type', params.id, user, 'update');
     try {
       return toDto(await updateLampType(row, body, user.id));
     } catch (e) {
@@ -36,7 +29,7 @@ export const PATCH = route({
 export const DELETE = route({
   params: idParams,
   handler: async ({ params, user }) => {
-    const row = await load(params.id, user, 'delete');
+    const row = await loadOwned('lamp-type', params.id, user, 'delete');
     try {
       await row.destroy();
     } catch (e) {

@@ -1,20 +1,13 @@
-import { allow, json, notFound, route } from '@/lib/api';
+import { json, route } from '@/lib/api';
 import { idParams } from '@/lib/api/schemas';
-import type { CurrentUser } from '@/lib/auth/session-user';
+import { loadOwned } from '@/lib/access';
 import { speciesPatchSchema } from '@/lib/species/schema';
-import { findSheet, toDto } from '@/lib/species/queries';
+import { toDto } from '@/lib/species/queries';
 import { updateSheet } from '@/lib/species/mutations';
-
-async function load(id: number, user: CurrentUser, action: 'read' | 'update' | 'delete') {
-  const row = await findSheet(id);
-  if (!row) throw notFound('That species sheet');
-  allow(user, action, { kind: 'species', organisationId: row.organisationId }, 'That species sheet');
-  return row;
-}
 
 export const GET = route({
   params: idParams,
-  handler: async ({ params, user }) => toDto(await load(params.id, user, 'read')),
+  handler: async ({ params, user }) => toDto(await loadOwned('species', params.id, user, 'read')),
 });
 
 /** Owner and staff change any subset of the fields; the merged sheet is validated as a whole. */
@@ -22,7 +15,7 @@ export const PATCH = route({
   params: idParams,
   body: speciesPatchSchema,
   handler: async ({ params, body, user }) => {
-    const row = await load(params.id, user, 'update');
+    const row = await loadOwned('species', params.id, user, 'update');
     return toDto(await updateSheet(row, body, user.id));
   },
 });
@@ -31,7 +24,7 @@ export const PATCH = route({
 export const DELETE = route({
   params: idParams,
   handler: async ({ params, user }) => {
-    const row = await load(params.id, user, 'delete');
+    const row = await loadOwned('species', params.id, user, 'delete');
     await row.destroy();
     return json({ ok: true });
   },
