@@ -20,6 +20,7 @@ import * as m0018 from './0018-account-confirmation';
 import * as m0019 from './0019-customers-counter';
 import * as m0020 from './0020-lamp-curve-adoptions';
 import * as m0021 from './0021-lamp-outlook-status-counts';
+import * as m0022 from './0022-lamp-outlook-counts-row';
 
 export type Migration = {
   name: string;
@@ -53,4 +54,5 @@ export const migrations: Migration[] = [
   { name: '0019-customers-counter', ...m0019 },
   { name: '0020-lamp-curve-adoptions', ...m0020 },
   { name: '0021-lamp-outlook-status-counts', ...m0021 },
+  { name: '0022-lamp-outlook-counts-row', ...m0022 },
 ];

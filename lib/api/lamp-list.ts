@@ -140,14 +140,14 @@ export type LampCounts = {
 type StatusCounts = { byRank: Map<number, number>; staleByDate: number };
 
 /**
- * The organisation's stored statuses in one grouped COUNT over lamp_outlooks alone: it reads the
- * (organisation, status, as of) index and no table rows (tests check the plan says so), so it costs
- * index entries, not the three-table join a count of everything once was.
+ * The organisation's stored statuses from its counts rows (`lamp_outlook_counts`: one row a status and
+ * day computed for, kept by the database's triggers as outlooks are written and deleted), so the summary
+ * costs a handful of rows however many lamps the organisation owns.
  */
 async function statusCounts(organisationId: number, today: string): Promise<StatusCounts> {
   const rows = await getSequelize().query<{ rank: number; n: number | string; stale: number | string }>(
-    `SELECT status_rank AS \`rank\`, COUNT(*) AS n, SUM(as_of < :today) AS stale
-       FROM lamp_outlooks WHERE organisation_id = :organisationId GROUP BY status_rank`,
+    `SELECT status_rank AS \`rank\`, SUM(n) AS n, SUM(IF(as_of < :today, n, 0)) AS stale
+       FROM lamp_outlook_counts WHERE organisation_id = :organisationId GROUP BY status_rank`,
     { replacements: { organisationId, today }, type: QueryTypes.SELECT },
   );
   return {
@@ -157,28 +157,34 @@ async function statusCounts(organisationId: number, today: string): Promise<Stat
 }
 
 /**
- * Lamps whose stored outlook is missing or of an older version than the lamp (a change not yet
- * recomputed), in one pass over the organisation's lamps by index. Rows computed before today are
- * left to statusCounts, so no lamp is counted twice.
+ * Lamps with no stored outlook of their current version (new, or changed and not yet recomputed): the
+ * lamps flagged `outlook_pending` (kept by triggers), read through that flag's index, so the cost follows
+ * the lamps waiting, not the organisation. Those whose stored row is also from before today are already
+ * in statusCounts' stale count and are taken out here, so no lamp is counted twice.
  */
 async function versionPending(scope: Scope, today: string): Promise<number> {
   const keeper = scope.keeperId ? 'AND e.keeper_id = :keeperId' : '';
-  const [row] = await getSequelize().query<{ n: number | string }>(
-    `SELECT COUNT(*) AS n FROM enclosures e JOIN lamps l ON l.enclosure_id = e.id
+  const [row] = await getSequelize().query<{ n: number | string; old: number | string | null }>(
+    // STRAIGHT_JOIN: from the waiting lamps (few) to their enclosures, never from the organisation's
+    // enclosures (many) to their lamps.
+    `SELECT STRAIGHT_JOIN COUNT(*) AS n, SUM(o.as_of < :today) AS old
+       FROM lamps l JOIN enclosures e FORCE INDEX (PRIMARY) ON e.id = l.enclosure_id
        LEFT JOIN lamp_outlooks o ON o.lamp_id = l.id
-      WHERE e.organisation_id = :organisationId ${keeper}
-        AND (o.lamp_id IS NULL OR (o.source_version <> l.outlook_version AND o.as_of >= :today))`,
+      WHERE l.outlook_pending = 1 AND e.organisation_id = :organisationId ${keeper}`,
     { replacements: { ...scope, today }, type: QueryTypes.SELECT },
   );
-  return Number(row?.n ?? 0);
+  return Number(row?.n ?? 0) - Number(row?.old ?? 0);
 }
+
+type Counted = { counts: LampCounts; byRank: Map<number, number> | null };
 
 /**
  * The summary line's counts for everything the person may see (not narrowed by search or filters): the
  * stored statuses, and how many are not yet up to date. For owners and staff the statuses come from
- * the organisation's grouped count (statusCounts); a keeper's, from their own enclosures' lamps.
+ * the organisation's counts rows (statusCounts, also answered as `byRank`); a keeper's, from their own
+ * enclosures' lamps.
  */
-export async function lampCounts(scope: Scope, today = todayIso()): Promise<LampCounts> {
+async function countsOf(scope: Scope, today: string): Promise<Counted> {
   const n = (v: string | number | null | undefined) => Number(v ?? 0);
   if (!scope.keeperId) {
     const [{ byRank, staleByDate }, notCurrent] = await Promise.all([
@@ -187,30 +193,51 @@ export async function lampCounts(scope: Scope, today = todayIso()): Promise<Lamp
     ]);
     const rank = (r: number) => byRank.get(r) ?? 0;
     return {
-      replace: rank(STATUS_RANK.replace),
-      testSoon: rank(STATUS_RANK['test-soon']),
-      inUse: [...byRank].filter(([r]) => r < STATUS_RANK.retired).reduce((sum, [, c]) => sum + c, 0),
-      pending: notCurrent + staleByDate,
+      counts: {
+        replace: rank(STATUS_RANK.replace),
+        testSoon: rank(STATUS_RANK['test-soon']),
+        inUse: [...byRank].filter(([r]) => r < STATUS_RANK.retired).reduce((sum, [, c]) => sum + c, 0),
+        pending: notCurrent + staleByDate,
+      },
+      byRank,
     };
   }
+  // The keeper's enclosures first (by the keeper's index), then their lamps and outlooks by key: the
+  // cost follows the keeper's lamps, not the organisation's.
   const [row] = await getSequelize().query<Record<keyof LampCounts, string | number | null>>(
-    `SELECT SUM(o.status_rank = 0) AS \`replace\`, SUM(o.status_rank = 1) AS testSoon,
+    `SELECT STRAIGHT_JOIN SUM(o.status_rank = 0) AS \`replace\`, SUM(o.status_rank = 1) AS testSoon,
             SUM(o.status_rank < 4) AS inUse,
-            SUM(o.source_version <> l.outlook_version OR o.as_of < :today)
-              + (SELECT COUNT(*) FROM lamps l2 JOIN enclosures e2 ON e2.id = l2.enclosure_id
-                   LEFT JOIN lamp_outlooks o2 ON o2.lamp_id = l2.id
-                  WHERE e2.organisation_id = :organisationId AND e2.keeper_id = :keeperId
-                    AND o2.lamp_id IS NULL) AS pending
-       FROM lamp_outlooks o JOIN lamps l ON l.id = o.lamp_id JOIN enclosures e ON e.id = l.enclosure_id
-      WHERE o.organisation_id = :organisationId AND e.keeper_id = :keeperId`,
+            SUM(l.outlook_pending = 1 OR o.as_of < :today) AS pending
+       FROM enclosures e JOIN lamps l ON l.enclosure_id = e.id LEFT JOIN lamp_outlooks o ON o.lamp_id = l.id
+      WHERE e.keeper_id = :keeperId AND e.organisation_id = :organisationId`,
     { replacements: { ...scope, today }, type: QueryTypes.SELECT },
   );
   return {
-    replace: n(row?.replace),
-    testSoon: n(row?.testSoon),
-    inUse: n(row?.inUse),
-    pending: n(row?.pending),
+    counts: {
+      replace: n(row?.replace),
+      testSoon: n(row?.testSoon),
+      inUse: n(row?.inUse),
+      pending: n(row?.pending),
+    },
+    byRank: null,
   };
+}
+
+export async function lampCounts(scope: Scope, today = todayIso()): Promise<LampCounts> {
+  return (await countsOf(scope, today)).counts;
+}
+
+/**
+ * The total of a view the counts rows already answer (an owner's or staff member's list, filtered by
+ * status at most), or null when the view needs its own COUNT.
+ */
+function totalFromCounts(query: LampListFilter, byRank: Map<number, number> | null): number | null {
+  if (!byRank || query.keeperId || query.enclosure || query.tech || query.due || (query.q ?? '').trim())
+    return null;
+  if (query.status) return byRank.get(STATUS_RANK[query.status]) ?? 0;
+  let total = 0;
+  for (const [rank, n] of byRank) if (query.includeRetired || rank < STATUS_RANK.retired) total += n;
+  return total;
 }
 
 /** The page's and the total's SQL (tests EXPLAIN them). */
@@ -239,23 +266,19 @@ export async function listLamps(query: LampListFilter) {
   const today = todayIso();
   const { pageSql, countSql, replacements } = lampListSql(query, today);
   const scope = { organisationId: query.organisationId, keeperId: query.keeperId };
-  // The plain list (everything in use, no search or filter) totals what the counts already give; any
-  // other view is counted by its own query.
-  const plain =
-    !query.keeperId &&
-    !query.enclosure &&
-    !query.status &&
-    !query.tech &&
-    !query.due &&
-    !query.includeRetired &&
-    !(query.q ?? '').trim();
-  const [ids, counts, [total]] = await Promise.all([
+  // Views the counts rows answer (the plain list, a status) take their total from them; any other view
+  // is counted by its own query, started beside them.
+  const countable =
+    !query.keeperId && !query.enclosure && !query.tech && !query.due && !(query.q ?? '').trim();
+  const [ids, counted, [counting]] = await Promise.all([
     sequelize.query<{ id: number }>(pageSql, { replacements, type: QueryTypes.SELECT }),
-    lampCounts(scope, today),
-    plain
+    countsOf(scope, today),
+    countable
       ? Promise.resolve([null])
       : sequelize.query<{ n: number | string }>(countSql, { replacements, type: QueryTypes.SELECT }),
   ]);
+  const { counts } = counted;
+  const total = totalFromCounts(query, counted.byRank) ?? Number(counting?.n ?? 0);
   const lamps = ids.length
     ? ((await Lamp.findAll({
         where: { id: ids.map((r) => r.id) },
@@ -271,7 +294,7 @@ export async function listLamps(query: LampListFilter) {
   if (counts.pending > 0) catchUpInBackground(query.organisationId, today);
   return {
     items,
-    total: plain ? counts.inUse : Number(total?.n ?? 0),
+    total,
     offset: query.offset,
     limit: query.limit,
     counts,

@@ -108,14 +108,32 @@ export async function writeOutlooks(computed: Computed[], today: string): Promis
     `INSERT INTO lamp_outlooks (${COLUMNS.join(', ')}) VALUES ${computed.map(() => placeholders).join(', ')} ` +
     `ON DUPLICATE KEY UPDATE ${assignments.join(', ')}`;
   const replacements = computed.flatMap((c) => rowOf(c, today, now));
+  await retryDeadlock(() => getSequelize().query(sql, { replacements }));
+  // The lamps whose stored row is now of their current version wait no longer (migration 0022: a
+  // trigger sets the flag when the version moves; a bump landing after this reads as waiting again).
+  await retryDeadlock(() =>
+    getSequelize().query(
+      `UPDATE lamps l JOIN lamp_outlooks o ON o.lamp_id = l.id
+          SET l.outlook_pending = (o.source_version <> l.outlook_version)
+        WHERE l.id IN (:ids) AND l.outlook_pending = 1`,
+      { replacements: { ids: computed.map((c) => c.lamp.id) } },
+    ),
+  );
+}
+
+/**
+ * Two passes upserting the same rows can deadlock in InnoDB, the more so as every write of an
+ * organisation's outlooks also updates its few counts rows (their triggers): the loser tries again.
+ */
+async function retryDeadlock(run: () => Promise<unknown>): Promise<void> {
   for (let attempt = 1; ; attempt++) {
     try {
-      await getSequelize().query(sql, { replacements });
+      await run();
       return;
     } catch (e) {
-      // Two passes upserting the same new rows can deadlock in InnoDB; the loser simply tries again.
       const errno = (e as { parent?: { errno?: number } }).parent?.errno;
-      if (errno !== 1213 || attempt >= 3) throw e;
+      if (errno !== 1213 || attempt >= 8) throw e;
+      await new Promise((resolve) => setTimeout(resolve, Math.random() * 20 * attempt));
     }
   }
 }
