@@ -1,6 +1,14 @@
 import { scaleLinear, scaleUtc } from 'd3-scale';
 import { formatMoment } from '@/lib/time/format';
 import type { LampDetail } from '@/lib/lamp-log/store';
+import {
+  bandPath,
+  LegendItem,
+  LineSwatch,
+  linePath,
+  MarkSwatch,
+  PlotFrame,
+} from '@/components/charts/PlotFrame';
 import { formatDay, formatMonthYear, formatValue, tickLabelAnchor, UNIT_NAME } from './format';
 
 /**
@@ -58,205 +66,169 @@ export function DecayChart({
     .range([H - M.bottom, M.top]);
   const clampY = (v: number) => y(Math.min(v, y.domain()[1]!));
 
-  const curvePath = chart.curve
-    .map((c, i) => `${i ? 'L' : 'M'}${xd(c.days).toFixed(1)},${clampY(c.value).toFixed(1)}`)
-    .join('');
-  const banded = chart.curve.filter((c) => c.lo !== null && c.hi !== null);
-  const bandPath =
-    banded.length > 1
-      ? banded
-          .map((c, i) => `${i ? 'L' : 'M'}${xd(c.days).toFixed(1)},${clampY(c.hi!).toFixed(1)}`)
-          .join('') +
-        [...banded]
-          .reverse()
-          .map((c) => `L${xd(c.days).toFixed(1)},${clampY(c.lo!).toFixed(1)}`)
-          .join('') +
-        'Z'
-      : null;
+  const curvePath = linePath(chart.curve.map((c) => ({ x: xd(c.days), y: clampY(c.value) })));
+  const bandPathD = bandPath(
+    chart.curve
+      .filter((c) => c.lo !== null && c.hi !== null)
+      .map((c) => ({ x: xd(c.days), hi: clampY(c.hi!), lo: clampY(c.lo!) })),
+  );
   const fitted = chart.certainty === 'fitted';
   const xTicks = x.ticks(Math.min(8, Math.max(2, Math.round(lastDay / 60))));
   const yTicks = y.ticks(5);
   const belowDays = fallsBelowOn ? (Date.parse(`${fallsBelowOn}T00:00:00Z`) - start) / DAY_MS : null;
-  const titleId = 'decay-chart-title';
-  const descId = 'decay-chart-desc';
+
+  const legend = (
+    <>
+      <LegendItem
+        swatch={
+          <MarkSwatch>
+            <circle cx="6" cy="6" r="4.5" fill="#d18f2b" stroke="#633a1d" />
+          </MarkSwatch>
+        }
+      >
+        Readings, bare lamp at 30 cm
+      </LegendItem>
+      {chart.points.some((p) => p.use === 'burn-in') && (
+        <LegendItem
+          swatch={
+            <MarkSwatch>
+              <circle cx="6" cy="6" r="4.5" {...POINT_LOOK['burn-in']} />
+            </MarkSwatch>
+          }
+        >
+          During burn-in (fitted apart)
+        </LegendItem>
+      )}
+      {chart.points.some((p) => p.use === 'excluded') && (
+        <LegendItem
+          swatch={
+            <MarkSwatch>
+              <circle cx="6" cy="6" r="4.5" {...POINT_LOOK.excluded} />
+            </MarkSwatch>
+          }
+        >
+          Not used (see the outlook)
+        </LegendItem>
+      )}
+      <LegendItem swatch={<LineSwatch stroke="#2b63b4" width={2.5} dash={fitted ? undefined : '5 3'} />}>
+        {fitted ? 'Fitted decay' : 'Curve (uncertain: few readings)'}
+      </LegendItem>
+      {bandPathD && (
+        <LegendItem
+          swatch={<span className="inline-block h-3 w-5 rounded-sm bg-sky-200" aria-hidden="true" />}
+        >
+          95 % band of the fit
+        </LegendItem>
+      )}
+      {chart.needAt30 !== null && (
+        <LegendItem swatch={<LineSwatch stroke="#c53c27" width={1.5} dash="4 3" />}>
+          Need at the basking spot{chart.needLabel ? `: ${chart.needLabel}` : ''}
+        </LegendItem>
+      )}
+    </>
+  );
 
   return (
-    <figure className="rounded-lg border border-basalt-200 bg-white p-3" data-testid="decay-chart">
-      <svg
-        viewBox={`0 0 ${W} ${H}`}
-        className="h-auto w-full"
-        role="img"
-        aria-labelledby={`${titleId} ${descId}`}
-        fontFamily="inherit"
-      >
-        <title id={titleId}>{title}</title>
-        <desc id={descId}>
+    <PlotFrame
+      width={W}
+      height={H}
+      margin={M}
+      id="decay"
+      title={title}
+      desc={
+        <>
           {chart.points.length} readings brought to the bare lamp at 30 cm, the fitted curve
-          {bandPath ? ' with its 95 % band' : ''}
+          {bandPathD ? ' with its 95 % band' : ''}
           {chart.needAt30 !== null ? ', and the species’ need at the basking spot' : ''}.
-        </desc>
-        {/* grid and axes */}
-        {yTicks.map((t) => (
-          <g key={`y${t}`}>
-            <line x1={M.left} x2={W - M.right} y1={y(t)} y2={y(t)} stroke="#e6e8e3" />
-            <text x={M.left - 8} y={y(t)} dy="0.32em" textAnchor="end" fontSize="12" fill="#4a5143">
-              {unit === 'uvi' ? t.toFixed(t < 10 ? 1 : 0) : t}
-            </text>
-          </g>
-        ))}
-        {xTicks.map((t) => (
-          <g key={`x${t.getTime()}`}>
-            <line x1={x(t)} x2={x(t)} y1={M.top} y2={H - M.bottom} stroke="#f5f6f4" />
-            <text
-              x={x(t)}
-              y={H - M.bottom + 18}
-              // "Sept 2027" at 12 px is about 56 px wide: keep it inside the drawing at either edge.
-              textAnchor={tickLabelAnchor(x(t), 0, W, 30)}
-              fontSize="12"
-              fill="#4a5143"
-            >
-              {formatMonthYear(t)}
-            </text>
-          </g>
-        ))}
-        <line x1={M.left} x2={W - M.right} y1={H - M.bottom} y2={H - M.bottom} stroke="#7e8673" />
-        <line x1={M.left} x2={M.left} y1={M.top} y2={H - M.bottom} stroke="#7e8673" />
-        <text x={(M.left + W - M.right) / 2} y={H - 10} textAnchor="middle" fontSize="12" fill="#3b4036">
-          Date (first use {formatDay(chart.firstUsedOn)})
-        </text>
-        <text
-          transform={`translate(16 ${(M.top + H - M.bottom) / 2}) rotate(-90)`}
-          textAnchor="middle"
-          fontSize="12"
-          fill="#3b4036"
-        >
-          {UNIT_NAME[unit]} at 30 cm
-        </text>
-
-        {/* fit: band, then curve */}
-        {bandPath && <path d={bandPath} fill="#c2e0f3" fillOpacity="0.6" data-testid="fit-band" />}
-        {curvePath && (
-          <path
-            d={curvePath}
-            fill="none"
-            stroke="#2b63b4"
-            strokeWidth="2.5"
-            strokeDasharray={fitted ? undefined : '7 5'}
-            data-testid="fit-curve"
-          />
-        )}
-
-        {/* need and today */}
-        {chart.needAt30 !== null && chart.needAt30 <= y.domain()[1]! && (
-          <g>
-            <line
-              x1={M.left}
-              x2={W - M.right}
-              y1={y(chart.needAt30)}
-              y2={y(chart.needAt30)}
-              stroke="#c53c27"
-              strokeWidth="1.5"
-              strokeDasharray="4 4"
-            />
-            <text x={W - M.right - 4} y={y(chart.needAt30) - 6} textAnchor="end" fontSize="12" fill="#a5301f">
-              species’ need ({formatValue(chart.needAt30, unit)} at 30 cm)
-            </text>
-          </g>
-        )}
-        <line
-          x1={xd(chart.todayDays)}
-          x2={xd(chart.todayDays)}
-          y1={M.top}
-          y2={H - M.bottom}
-          stroke="#5f6756"
-          strokeDasharray="2 3"
+        </>
+      }
+      yTicks={yTicks.map((t) => ({
+        key: t,
+        at: y(t),
+        label: unit === 'uvi' ? t.toFixed(t < 10 ? 1 : 0) : t,
+      }))}
+      xTicks={xTicks.map((t) => ({
+        key: t.getTime(),
+        at: x(t),
+        label: formatMonthYear(t),
+        // "Sept 2027" at 12 px is about 56 px wide: keep it inside the drawing at either edge.
+        anchor: tickLabelAnchor(x(t), 0, W, 30),
+      }))}
+      xTitle={<>Date (first use {formatDay(chart.firstUsedOn)})</>}
+      yTitle={<>{UNIT_NAME[unit]} at 30 cm</>}
+      legend={legend}
+    >
+      {/* fit: band, then curve */}
+      {bandPathD && <path d={bandPathD} fill="#c2e0f3" fillOpacity="0.6" data-testid="fit-band" />}
+      {curvePath && (
+        <path
+          d={curvePath}
+          fill="none"
+          stroke="#2b63b4"
+          strokeWidth="2.5"
+          strokeDasharray={fitted ? undefined : '7 5'}
+          data-testid="fit-curve"
         />
-        <text x={xd(chart.todayDays) + 4} y={M.top + 12} fontSize="12" fill="#3b4036">
-          today
-        </text>
-        {belowDays !== null && belowDays >= 0 && belowDays <= lastDay && chart.needAt30 !== null && (
-          <g>
-            <circle
-              cx={xd(belowDays)}
-              cy={y(chart.needAt30)}
-              r="6"
-              fill="none"
-              stroke="#c53c27"
-              strokeWidth="2"
-            />
-            <title>{`Falls below the need about ${formatDay(fallsBelowOn)}`}</title>
-          </g>
-        )}
+      )}
 
-        {/* readings */}
-        {chart.points.map((p, i) => (
-          <g key={p.id ?? i} data-testid="reading-point">
-            <circle
-              cx={xd(p.days)}
-              cy={clampY(p.value)}
-              r="5"
-              {...POINT_LOOK[p.use ?? 'fit']}
-              strokeWidth="1.5"
-            />
-            {/* One string: React renders a <title> with several children empty on the server. */}
-            <title>
-              {`${formatMoment(p.takenAt, zone, 'day')}: ${formatValue(p.raw, unit)} at ${p.distanceCm} cm → ${formatValue(p.value, unit)} bare at 30 cm${p.why ? ` (${p.why})` : ''}`}
-            </title>
-          </g>
-        ))}
-      </svg>
-      <figcaption className="mt-2 flex flex-wrap gap-x-5 gap-y-1 text-caption text-basalt-600">
-        <span className="inline-flex items-center gap-1.5">
-          <svg width="12" height="12" aria-hidden="true">
-            <circle cx="6" cy="6" r="4.5" fill="#d18f2b" stroke="#633a1d" />
-          </svg>
-          Readings, bare lamp at 30 cm
-        </span>
-        {chart.points.some((p) => p.use === 'burn-in') && (
-          <span className="inline-flex items-center gap-1.5">
-            <svg width="12" height="12" aria-hidden="true">
-              <circle cx="6" cy="6" r="4.5" {...POINT_LOOK['burn-in']} />
-            </svg>
-            During burn-in (fitted apart)
-          </span>
-        )}
-        {chart.points.some((p) => p.use === 'excluded') && (
-          <span className="inline-flex items-center gap-1.5">
-            <svg width="12" height="12" aria-hidden="true">
-              <circle cx="6" cy="6" r="4.5" {...POINT_LOOK.excluded} />
-            </svg>
-            Not used (see the outlook)
-          </span>
-        )}
-        <span className="inline-flex items-center gap-1.5">
-          <svg width="22" height="12" aria-hidden="true">
-            <line
-              x1="1"
-              x2="21"
-              y1="6"
-              y2="6"
-              stroke="#2b63b4"
-              strokeWidth="2.5"
-              strokeDasharray={fitted ? undefined : '5 3'}
-            />
-          </svg>
-          {fitted ? 'Fitted decay' : 'Curve (uncertain: few readings)'}
-        </span>
-        {bandPath && (
-          <span className="inline-flex items-center gap-1.5">
-            <span className="inline-block h-3 w-5 rounded-sm bg-sky-200" aria-hidden="true" />
-            95 % band of the fit
-          </span>
-        )}
-        {chart.needAt30 !== null && (
-          <span className="inline-flex items-center gap-1.5">
-            <svg width="22" height="12" aria-hidden="true">
-              <line x1="1" x2="21" y1="6" y2="6" stroke="#c53c27" strokeWidth="1.5" strokeDasharray="4 3" />
-            </svg>
-            Need at the basking spot{chart.needLabel ? `: ${chart.needLabel}` : ''}
-          </span>
-        )}
-      </figcaption>
-    </figure>
+      {/* need and today */}
+      {chart.needAt30 !== null && chart.needAt30 <= y.domain()[1]! && (
+        <g>
+          <line
+            x1={M.left}
+            x2={W - M.right}
+            y1={y(chart.needAt30)}
+            y2={y(chart.needAt30)}
+            stroke="#c53c27"
+            strokeWidth="1.5"
+            strokeDasharray="4 4"
+          />
+          <text x={W - M.right - 4} y={y(chart.needAt30) - 6} textAnchor="end" fontSize="12" fill="#a5301f">
+            species’ need ({formatValue(chart.needAt30, unit)} at 30 cm)
+          </text>
+        </g>
+      )}
+      <line
+        x1={xd(chart.todayDays)}
+        x2={xd(chart.todayDays)}
+        y1={M.top}
+        y2={H - M.bottom}
+        stroke="#5f6756"
+        strokeDasharray="2 3"
+      />
+      <text x={xd(chart.todayDays) + 4} y={M.top + 12} fontSize="12" fill="#3b4036">
+        today
+      </text>
+      {belowDays !== null && belowDays >= 0 && belowDays <= lastDay && chart.needAt30 !== null && (
+        <g>
+          <circle
+            cx={xd(belowDays)}
+            cy={y(chart.needAt30)}
+            r="6"
+            fill="none"
+            stroke="#c53c27"
+            strokeWidth="2"
+          />
+          <title>{`Falls below the need about ${formatDay(fallsBelowOn)}`}</title>
+        </g>
+      )}
+
+      {/* readings */}
+      {chart.points.map((p, i) => (
+        <g key={p.id ?? i} data-testid="reading-point">
+          <circle
+            cx={xd(p.days)}
+            cy={clampY(p.value)}
+            r="5"
+            {...POINT_LOOK[p.use ?? 'fit']}
+            strokeWidth="1.5"
+          />
+          {/* One string: React renders a <title> with several children empty on the server. */}
+          <title>
+            {`${formatMoment(p.takenAt, zone, 'day')}: ${formatValue(p.raw, unit)} at ${p.distanceCm} cm → ${formatValue(p.value, unit)} bare at 30 cm${p.why ? ` (${p.why})` : ''}`}
+          </title>
+        </g>
+      ))}
+    </PlotFrame>
   );
 }

@@ -1,4 +1,12 @@
 import { scaleLinear } from 'd3-scale';
+import {
+  bandPath,
+  LegendItem,
+  LineSwatch,
+  linePath,
+  MarkSwatch,
+  PlotFrame,
+} from '@/components/charts/PlotFrame';
 import type { PopulationCurve } from '@/lib/population/fit';
 
 /**
@@ -63,145 +71,107 @@ export function PopulationChart({ view, typeName }: { view: PopulationView; type
     .range([H - M.bottom, M.top]);
   const cy = (v: number) => y(Math.min(v, y.domain()[1]!));
   const line = (list: { months: number; share: number }[]) =>
-    list
-      .filter((c) => c.months <= end)
-      .map((c, i) => `${i ? 'L' : 'M'}${x(c.months).toFixed(1)},${cy(c.share).toFixed(1)}`)
-      .join('');
+    linePath(list.filter((c) => c.months <= end).map((c) => ({ x: x(c.months), y: cy(c.share) })));
   const inRange = view.ok ? view.curve.filter((c) => c.months <= end) : [];
-  const bandPath =
-    inRange.length > 1
-      ? inRange.map((c, i) => `${i ? 'L' : 'M'}${x(c.months).toFixed(1)},${cy(c.hi).toFixed(1)}`).join('') +
-        [...inRange]
-          .reverse()
-          .map((c) => `L${x(c.months).toFixed(1)},${cy(c.lo).toFixed(1)}`)
-          .join('') +
-        'Z'
-      : null;
-  const titleId = 'population-chart-title';
-  const descId = 'population-chart-desc';
-  return (
-    <figure className="rounded-lg border border-basalt-200 bg-white p-3" data-testid="population-chart">
-      <svg
-        viewBox={`0 0 ${W} ${H}`}
-        className="h-auto w-full"
-        role="img"
-        aria-labelledby={`${titleId} ${descId}`}
-        fontFamily="inherit"
+  const band = bandPath(inRange.map((c) => ({ x: x(c.months), hi: cy(c.hi), lo: cy(c.lo) })));
+  const legend = (
+    <>
+      <LegendItem
+        swatch={
+          <MarkSwatch>
+            <circle cx="6" cy="6" r="4.5" fill="#8fb573" stroke="#3c5a26" />
+          </MarkSwatch>
+        }
       >
-        <title id={titleId}>{`${typeName}: measured ageing against the catalogue`}</title>
-        <desc id={descId}>
+        Enclosure lamps ({view.enclosureLamps})
+      </LegendItem>
+      <LegendItem
+        swatch={
+          <MarkSwatch>
+            <rect x="2" y="2" width="8" height="8" fill="#d18f2b" stroke="#633a1d" />
+          </MarkSwatch>
+        }
+      >
+        Counter lamps ({view.counterLamps})
+      </LegendItem>
+      {view.ok && (
+        <LegendItem swatch={<LineSwatch stroke="#2b63b4" width={2.5} />}>
+          Measured curve, with its 95 % band
+        </LegendItem>
+      )}
+      <LegendItem swatch={<LineSwatch stroke="#5f6756" dash="5 3" />}>Catalogue’s curve</LegendItem>
+    </>
+  );
+  return (
+    <PlotFrame
+      width={W}
+      height={H}
+      margin={M}
+      id="population"
+      title={`${typeName}: measured ageing against the catalogue`}
+      desc={
+        <>
           {view.readings} readings of {view.lamps} lamps as a share of the catalogue’s new output at 30 cm, by
           months of use at 12 hours a day
           {view.ok ? ', the curve fitted to them with its 95 % band,' : ','} and the catalogue’s curve. The
           table beside the chart gives the same figures.
-        </desc>
-        {y.ticks(5).map((t) => (
-          <g key={`y${t}`}>
-            <line x1={M.left} x2={W - M.right} y1={y(t)} y2={y(t)} stroke="#e6e8e3" />
-            <text x={M.left - 8} y={y(t)} dy="0.32em" textAnchor="end" fontSize="12" fill="#4a5143">
-              {pct(t)}
-            </text>
-          </g>
-        ))}
-        {x.ticks(Math.min(10, end / 3)).map((t) => (
-          <g key={`x${t}`}>
-            <line x1={x(t)} x2={x(t)} y1={M.top} y2={H - M.bottom} stroke="#f5f6f4" />
-            <text x={x(t)} y={H - M.bottom + 18} textAnchor="middle" fontSize="12" fill="#4a5143">
-              {t}
-            </text>
-          </g>
-        ))}
-        <line x1={M.left} x2={W - M.right} y1={H - M.bottom} y2={H - M.bottom} stroke="#7e8673" />
-        <line x1={M.left} x2={M.left} y1={M.top} y2={H - M.bottom} stroke="#7e8673" />
-        <text x={(M.left + W - M.right) / 2} y={H - 10} textAnchor="middle" fontSize="12" fill="#3b4036">
-          Months of use (12 hours a day)
-        </text>
-        <text
-          transform={`translate(14 ${(M.top + H - M.bottom) / 2}) rotate(-90)`}
-          textAnchor="middle"
-          fontSize="12"
-          fill="#3b4036"
-        >
-          Share of a new lamp (catalogue), 30 cm
-        </text>
-        {bandPath && <path d={bandPath} fill="#c2e0f3" fillOpacity="0.6" data-testid="population-band" />}
+        </>
+      }
+      yTicks={y.ticks(5).map((t) => ({ key: t, at: y(t), label: pct(t) }))}
+      xTicks={x.ticks(Math.min(10, end / 3)).map((t) => ({ key: t, at: x(t), label: t }))}
+      xTitle="Months of use (12 hours a day)"
+      yTitle="Share of a new lamp (catalogue), 30 cm"
+      yTitleX={14}
+      legend={legend}
+    >
+      {band && <path d={band} fill="#c2e0f3" fillOpacity="0.6" data-testid="population-band" />}
+      <path
+        d={line(view.catalogue)}
+        fill="none"
+        stroke="#5f6756"
+        strokeWidth="2"
+        strokeDasharray="7 5"
+        data-testid="catalogue-curve"
+      />
+      {view.ok && (
         <path
-          d={line(view.catalogue)}
+          d={line(view.curve)}
           fill="none"
-          stroke="#5f6756"
-          strokeWidth="2"
-          strokeDasharray="7 5"
-          data-testid="catalogue-curve"
+          stroke="#2b63b4"
+          strokeWidth="2.5"
+          data-testid="population-curve"
         />
-        {view.ok && (
-          <path
-            d={line(view.curve)}
-            fill="none"
-            stroke="#2b63b4"
-            strokeWidth="2.5"
-            data-testid="population-curve"
-          />
+      )}
+      {view.points
+        .filter((p) => p.months <= end)
+        .map((p, i) =>
+          p.source === 'counter' ? (
+            <rect
+              key={i}
+              x={x(p.months) - 4}
+              y={cy(p.share) - 4}
+              width="8"
+              height="8"
+              fill="#d18f2b"
+              stroke="#633a1d"
+              strokeWidth="1.2"
+            />
+          ) : (
+            <circle
+              key={i}
+              cx={x(p.months)}
+              cy={cy(p.share)}
+              r="4.5"
+              fill="#8fb573"
+              stroke="#3c5a26"
+              strokeWidth="1.2"
+            />
+          ),
         )}
-        {view.points
-          .filter((p) => p.months <= end)
-          .map((p, i) =>
-            p.source === 'counter' ? (
-              <rect
-                key={i}
-                x={x(p.months) - 4}
-                y={cy(p.share) - 4}
-                width="8"
-                height="8"
-                fill="#d18f2b"
-                stroke="#633a1d"
-                strokeWidth="1.2"
-              />
-            ) : (
-              <circle
-                key={i}
-                cx={x(p.months)}
-                cy={cy(p.share)}
-                r="4.5"
-                fill="#8fb573"
-                stroke="#3c5a26"
-                strokeWidth="1.2"
-              />
-            ),
-          )}
-      </svg>
-      <figcaption className="mt-2 flex flex-wrap gap-x-5 gap-y-1 text-caption text-basalt-600">
-        <span className="inline-flex items-center gap-1.5">
-          <svg width="12" height="12" aria-hidden="true">
-            <circle cx="6" cy="6" r="4.5" fill="#8fb573" stroke="#3c5a26" />
-          </svg>
-          Enclosure lamps ({view.enclosureLamps})
-        </span>
-        <span className="inline-flex items-center gap-1.5">
-          <svg width="12" height="12" aria-hidden="true">
-            <rect x="2" y="2" width="8" height="8" fill="#d18f2b" stroke="#633a1d" />
-          </svg>
-          Counter lamps ({view.counterLamps})
-        </span>
-        {view.ok && (
-          <span className="inline-flex items-center gap-1.5">
-            <svg width="22" height="12" aria-hidden="true">
-              <line x1="1" x2="21" y1="6" y2="6" stroke="#2b63b4" strokeWidth="2.5" />
-            </svg>
-            Measured curve, with its 95 % band
-          </span>
-        )}
-        <span className="inline-flex items-center gap-1.5">
-          <svg width="22" height="12" aria-hidden="true">
-            <line x1="1" x2="21" y1="6" y2="6" stroke="#5f6756" strokeWidth="2" strokeDasharray="5 3" />
-          </svg>
-          Catalogue’s curve
-        </span>
-      </figcaption>
-    </figure>
+    </PlotFrame>
   );
 }
 
-/** The chart's figures as a table, for those who prefer numbers (and screen readers). */
 export function PopulationTable({ view }: { view: PopulationView }) {
   const rows = tableRows(view);
   return (
