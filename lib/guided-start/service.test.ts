@@ -1,14 +1,15 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import { loadSessionUser, type CurrentUser } from '@/lib/auth/session-user';
-import { seedStartingCatalogue } from '@/lib/species/seed';
 import { parseDesign } from '@/simulation';
 import { Design, Enclosure, SpeciesSheet, Variant, type Organisation, type User } from '@/models';
-import { addMember, createMember, createUser, withTestDatabase } from '../../tests/helpers/db';
+import { addMember, createUser, withTestDatabase } from '../../tests/helpers/db';
+import { createWorld } from '../../tests/helpers/world';
 import { createFromGuidedStart, proposeFor } from './service';
 
 withTestDatabase();
 
 let shop: Organisation;
+let otherOrg: Organisation;
 let staffUser: User;
 let keeperUser: User;
 let otherKeeper: User;
@@ -18,15 +19,15 @@ let dragonId: number;
 const who = async (u: User): Promise<CurrentUser> => (await loadSessionUser(u.id, u.sessionVersion ?? 1))!;
 
 beforeEach(async () => {
-  ({ organisation: shop } = await createMember('owner'));
-  staffUser = (await createUser()).user;
-  keeperUser = (await createUser()).user;
+  ({
+    shop,
+    otherOrg,
+    staff: staffUser,
+    keeper: keeperUser,
+    outsider: outsiderUser,
+  } = await createWorld({ catalogue: true }));
   otherKeeper = (await createUser()).user;
-  await addMember(shop, staffUser, 'staff');
-  await addMember(shop, keeperUser, 'keeper');
   await addMember(shop, otherKeeper, 'keeper');
-  ({ user: outsiderUser } = await createMember('owner'));
-  await seedStartingCatalogue(shop.id);
   dragonId = (await SpeciesSheet.findOne({
     where: { organisationId: shop.id, seedKey: 'pogona-vitticeps' },
   }))!.id;
@@ -80,9 +81,7 @@ describe('guided start on the server', () => {
 
   it('hides another organisation and its sheets', async () => {
     await expect(proposeFor(await who(outsiderUser), input())).rejects.toMatchObject({ kind: 'not_found' });
-    const { organisation: other } = await createMember('owner');
-    await seedStartingCatalogue(other.id);
-    const foreignSheet = (await SpeciesSheet.findOne({ where: { organisationId: other.id } }))!;
+    const foreignSheet = (await SpeciesSheet.findOne({ where: { organisationId: otherOrg.id } }))!;
     await expect(
       proposeFor(await who(staffUser), input({ speciesId: foreignSheet.id })),
     ).rejects.toMatchObject({

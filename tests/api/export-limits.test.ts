@@ -8,24 +8,22 @@ import { countAttempt, limitKey } from '@/lib/rate-limit';
 import { EXPORT_LIMIT } from '@/lib/reports/limits';
 import { Variant } from '@/models';
 import { benchDesign, heaviestAllowedDesign } from '@/simulation/testing/fixtures';
-import { createEnclosure, createMember, createOrganisation, withTestDatabase } from '../helpers/db';
-import { call } from './variants.helpers';
+import { withTestDatabase } from '../helpers/db';
+import { createKeeperWorld } from '../helpers/world';
+import { call, postDesign } from './variants.helpers';
 
 withTestDatabase();
 
 async function world() {
-  const org = await createOrganisation('Limits Test Rooms');
-  const { user: keeper } = await createMember('keeper', org);
-  const enclosure = await createEnclosure(org, keeper, { name: 'Tank', speciesName: null });
-  const made = await call(enclosureDesignsRoute.POST, {
-    method: 'POST',
-    path: `/api/enclosures/${enclosure.id}/designs`,
-    params: { id: enclosure.id },
-    user: keeper,
-    body: { name: 'Plan', variantName: 'First', design: benchDesign(1, 1) },
+  const { keeper, enclosure } = await createKeeperWorld('Limits Test Rooms', {
+    enclosure: { name: 'Tank', speciesName: null },
   });
-  expect(made.status).toBe(201);
-  return { keeper, enclosure, variantId: made.body.variant.id as number };
+  const { variantId } = await postDesign(keeper, enclosure.id, {
+    name: 'Plan',
+    variantName: 'First',
+    design: benchDesign(1, 1),
+  });
+  return { keeper, enclosure, variantId };
 }
 
 const exportAs = (w: Awaited<ReturnType<typeof world>>, query: string) =>

@@ -6,7 +6,8 @@ import * as keepers from '@/app/api/keepers/route';
 import { authorizeCredentials } from '@/lib/auth';
 import { hashToken } from '@/lib/auth/invitations';
 import { Invitation, Membership, type Organisation, type User } from '@/models';
-import { addMember, closeDatabase, createMember, createUser, resetDatabase } from '../helpers/db';
+import { closeDatabase, createUser, resetDatabase } from '../helpers/db';
+import { createWorld } from '../helpers/world';
 import { call } from './http';
 
 afterAll(closeDatabase);
@@ -43,11 +44,7 @@ beforeAll(() => {
 
 beforeEach(async () => {
   await resetDatabase();
-  ({ organisation: shop, user: owner } = await createMember('owner'));
-  staff = (await createUser()).user;
-  keeper = (await createUser()).user;
-  await addMember(shop, staff, 'staff');
-  await addMember(shop, keeper, 'keeper');
+  ({ shop, owner, staff, keeper } = await createWorld());
 });
 
 const invite = (as: User, email: string, role: string) =>

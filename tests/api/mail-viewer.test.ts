@@ -6,7 +6,8 @@ import { mailViewerEnabled, organisationMail } from '@/lib/mail-viewer';
 import { can } from '@/lib/permissions';
 import { deliverQueued } from '@/lib/reminders/outbox';
 import { Invitation, MailMessage, type Organisation, type User } from '@/models';
-import { addMember, createMember, createUser, withTestDatabase } from '../helpers/db';
+import { createMember, withTestDatabase } from '../helpers/db';
+import { createWorld } from '../helpers/world';
 import { clearMail, listMail } from '../helpers/mail';
 import { call } from './http';
 
@@ -114,9 +115,7 @@ describe('development mail viewer', () => {
   });
 
   it('is for owners only, and off unless MAIL_VIEWER=1 asks for it', async () => {
-    const { organisation: org, user: owner } = await createMember('owner');
-    const staff = (await createUser()).user;
-    await addMember(org, staff, 'staff');
+    const { shop: org, owner, staff } = await createWorld();
     const { memberships } = await import('@/lib/auth/session-user');
     const asSession = async (u: User) => ({ id: u.id, memberships: await memberships(u.id) });
     expect(can(await asSession(owner), 'read', { kind: 'mail', organisationId: org.id })).toBe(true);

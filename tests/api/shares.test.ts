@@ -1,5 +1,4 @@
 import { describe, expect, it } from 'vitest';
-import * as enclosureDesignsRoute from '@/app/api/enclosures/[id]/designs/route';
 import * as shareRoute from '@/app/api/shares/[id]/route';
 import * as sharesRoute from '@/app/api/variants/[id]/shares/route';
 import * as sharedPictureRoute from '@/app/s/[token]/picture/[version]/[file]/route';
@@ -9,24 +8,19 @@ import { resolveShareToken } from '@/lib/variants/queries';
 import { hashShareToken } from '@/lib/variants/tokens';
 import { ShareLink, Variant } from '@/models';
 import { benchDesign } from '@/simulation/testing/fixtures';
-import { createEnclosure, createMember, createOrganisation, withTestDatabase } from '../helpers/db';
-import { call, ORIGIN } from './variants.helpers';
+import { withTestDatabase } from '../helpers/db';
+import { createKeeperWorld } from '../helpers/world';
+import { call, ORIGIN, postDesign } from './variants.helpers';
 
 withTestDatabase();
 
 async function world() {
-  const org = await createOrganisation('Shop A');
-  const { user: staff } = await createMember('staff', org);
-  const { user: keeper } = await createMember('keeper', org);
-  const enclosure = await createEnclosure(org, keeper, { name: 'Desert tank', speciesName: null });
-  const r = await call(enclosureDesignsRoute.POST, {
-    method: 'POST',
-    path: `/api/enclosures/${enclosure.id}/designs`,
-    params: { id: enclosure.id },
-    user: staff,
-    body: { name: 'Plan', variantName: 'Low lamp' },
+  const { org, staff, keeper, enclosure } = await createKeeperWorld('Shop A', {
+    enclosure: { name: 'Desert tank', speciesName: null },
+    staff: true,
   });
-  return { org, staff, keeper, enclosure, variantId: r.body.variant.id as number };
+  const { variantId } = await postDesign(staff!, enclosure.id, { name: 'Plan', variantName: 'Low lamp' });
+  return { org, staff: staff!, keeper, enclosure, variantId };
 }
 
 /** The public report download of a link, as an anonymous visitor (no session) asks for it. */

@@ -3,13 +3,13 @@
 // and a stored file only changes when its owner saves it again.
 import { describe, expect, it } from 'vitest';
 import * as designVariantsRoute from '@/app/api/designs/[id]/variants/route';
-import * as enclosureDesignsRoute from '@/app/api/enclosures/[id]/designs/route';
 import * as exportRoute from '@/app/api/variants/[id]/export/route';
 import * as variantRoute from '@/app/api/variants/[id]/route';
 import { designLampsOf } from '@/lib/lamp-log/design-lamps';
 import { Variant } from '@/models';
-import { createEnclosure, createMember, createOrganisation, withTestDatabase } from '../helpers/db';
-import { call } from './variants.helpers';
+import { withTestDatabase } from '../helpers/db';
+import { createKeeperWorld } from '../helpers/world';
+import { call, postDesign } from './variants.helpers';
 
 withTestDatabase();
 
@@ -43,20 +43,10 @@ const v1 = {
 };
 
 async function world() {
-  const org = await createOrganisation('Depth Test Rooms');
-  const { user: keeper } = await createMember('keeper', org);
-  const enclosure = await createEnclosure(org, keeper, { widthCm: 90, heightCm: 45, depthCm: 45 });
-  const made = await call(enclosureDesignsRoute.POST, {
-    method: 'POST',
-    path: `/api/enclosures/${enclosure.id}/designs`,
-    params: { id: enclosure.id },
-    user: keeper,
-    body: { name: 'Old plan' },
+  const { keeper, enclosure } = await createKeeperWorld('Depth Test Rooms', {
+    enclosure: { widthCm: 90, heightCm: 45, depthCm: 45 },
   });
-  expect(made.status).toBe(201);
-  const variantId = made.body.variant.id as number;
-  const designId = made.body.design.id as number;
-  return { keeper, enclosure, variantId, designId };
+  return { keeper, enclosure, ...(await postDesign(keeper, enclosure.id, { name: 'Old plan' })) };
 }
 
 const getVariant = (w: Awaited<ReturnType<typeof world>>) =>

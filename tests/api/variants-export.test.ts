@@ -4,11 +4,11 @@ import { describe, expect, it } from 'vitest';
 import * as enclosureDesignsRoute from '@/app/api/enclosures/[id]/designs/route';
 import * as exportRoute from '@/app/api/variants/[id]/export/route';
 import * as variantRoute from '@/app/api/variants/[id]/route';
-import { seedStartingCatalogue } from '@/lib/species/seed';
 import { Organisation } from '@/models';
 import { EXAMPLE_DATA_NOTE } from '@/shared/example-data';
-import { createEnclosure, createMember, createOrganisation, withTestDatabase } from '../helpers/db';
-import { call, pdfDrawnText } from './variants.helpers';
+import { withTestDatabase } from '../helpers/db';
+import { createKeeperWorld } from '../helpers/world';
+import { call, pdfDrawnText, postDesign } from './variants.helpers';
 
 withTestDatabase();
 
@@ -35,19 +35,16 @@ const design = {
 };
 
 async function world(speciesName: string | null, body: Record<string, unknown> = design) {
-  const org = await createOrganisation('Fernhollow Test Rooms');
-  const { user: keeper } = await createMember('keeper', org);
-  const enclosure = await createEnclosure(org, keeper, { name: 'Desert tank', speciesName });
-  await seedStartingCatalogue(org.id);
-  const made = await call(enclosureDesignsRoute.POST, {
-    method: 'POST',
-    path: `/api/enclosures/${enclosure.id}/designs`,
-    params: { id: enclosure.id },
-    user: keeper,
-    body: { name: 'Summer plan', variantName: 'Rock under the tube', design: body },
+  const { keeper, enclosure } = await createKeeperWorld('Fernhollow Test Rooms', {
+    enclosure: { name: 'Desert tank', speciesName },
+    catalogue: true,
   });
-  expect(made.status).toBe(201);
-  return { keeper, enclosure, variantId: made.body.variant.id as number };
+  const { variantId } = await postDesign(keeper, enclosure.id, {
+    name: 'Summer plan',
+    variantName: 'Rock under the tube',
+    design: body,
+  });
+  return { keeper, enclosure, variantId };
 }
 
 const exportAs = (w: Awaited<ReturnType<typeof world>>, query: string) =>

@@ -2,6 +2,7 @@
 // helper's), as a browser would after signing in. Unlike tests/api/http.ts it leaves non-JSON bodies
 // unread, so export tests can read the PNG or PDF bytes themselves.
 import { inflateSync } from 'node:zlib';
+import * as enclosureDesignsRoute from '@/app/api/enclosures/[id]/designs/route';
 import type { User } from '@/models';
 import { ORIGIN, sessionCookie } from './http';
 
@@ -39,6 +40,26 @@ export async function call(
   const type = res.headers.get('content-type') ?? '';
   const body = type.includes('application/json') ? await res.json() : null;
   return { status: res.status, body, res };
+}
+
+/**
+ * A new design with its first variant, made through the route as `user` would; throws unless it is made,
+ * so a test's set-up cannot silently go on without one.
+ */
+export async function postDesign(
+  user: User,
+  enclosureId: number,
+  body: { name: string; variantName?: string; design?: unknown },
+): Promise<{ designId: number; variantId: number }> {
+  const made = await call(enclosureDesignsRoute.POST, {
+    method: 'POST',
+    path: `/api/enclosures/${enclosureId}/designs`,
+    params: { id: enclosureId },
+    user,
+    body,
+  });
+  if (made.status !== 201) throw new Error(`postDesign: ${made.status} ${JSON.stringify(made.body)}`);
+  return { designId: made.body.design.id as number, variantId: made.body.variant.id as number };
 }
 
 /**

@@ -59,3 +59,19 @@ export async function createEnclosureWorld(
 }
 
 export type EnclosureWorld = Awaited<ReturnType<typeof createEnclosureWorld>>;
+
+/**
+ * The smallest world a design test needs: an organisation with a keeper and the keeper's enclosure, and
+ * a member of staff when asked for (`staff`), with the starting catalogue when asked for (`catalogue`).
+ */
+export async function createKeeperWorld(
+  shopName: string,
+  options: { enclosure?: EnclosureFields; staff?: boolean; catalogue?: boolean } = {},
+) {
+  const org = await createOrganisation(shopName);
+  const staff = options.staff ? (await createMember('staff', org)).user : undefined;
+  const { user: keeper } = await createMember('keeper', org);
+  const enclosure = await createEnclosure(org, keeper, options.enclosure);
+  if (options.catalogue) await seedStartingCatalogue(org.id);
+  return { org, staff, keeper, enclosure };
+}

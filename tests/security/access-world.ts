@@ -18,14 +18,8 @@ import { User, Variant } from '@/models';
 import { EXAMPLE_DESIGN } from '@/simulation/testing/fixtures';
 import { call, sessionCookie } from '../api/http';
 import { LAMP_TYPE_BODY, READING_BODY, SPECIES_BODY } from './valid-bodies';
-import {
-  addMember,
-  createEnclosure,
-  createMember,
-  createUser,
-  tablesInDeleteOrder,
-  testDb,
-} from '../helpers/db';
+import { addMember, createEnclosure, createUser, tablesInDeleteOrder, testDb } from '../helpers/db';
+import { createWorld } from '../helpers/world';
 
 export const MARK = {
   enclosure: 'Zz-enclosure-of-keeper-one',
@@ -81,13 +75,15 @@ function must(r: { status: number; text: string }, what: string) {
 }
 
 export async function buildWorld(): Promise<World> {
-  const { organisation: a, user: ownerA } = await createMember('owner');
-  const { organisation: b, user: ownerB } = await createMember('owner');
-  const staffA = (await createUser()).user;
-  const keeper1 = (await createUser({ name: MARK.keeperName })).user;
+  const {
+    shop: a,
+    owner: ownerA,
+    staff: staffA,
+    keeper: keeper1,
+    otherOrg: b,
+    outsider: ownerB,
+  } = await createWorld({ names: { keeper: MARK.keeperName } });
   const keeper2 = (await createUser()).user;
-  await addMember(a, staffA, 'staff');
-  await addMember(a, keeper1, 'keeper');
   await addMember(a, keeper2, 'keeper');
   const enclosure = await createEnclosure(a, keeper1, { name: MARK.enclosure });
   const as = await cookieOf(ownerA.id);
