@@ -5,14 +5,14 @@ import { LocalTime } from '@/components/ui/LocalTime';
 import { link } from '@/components/ui/styles';
 import { formatLengthRounded, type LengthUnit } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
-import type { LampSummary } from '@/lib/lamp-log/store';
+import type { LampRow } from '@/lib/lamp-log/store';
 import { STATUS_RANK } from '@/lib/lamp-log/status';
 import { formatAge, formatDay, formatValue } from './format';
 import { StatusBadge } from './StatusBadge';
 import { Table, type TableColumn } from '@/components/ui/Table';
 import type { LampSortColumn } from '@/lib/lamp-log/list-view';
 
-type Row = LampSummary;
+type Row = LampRow;
 
 export function LampCell({ l }: { l: Row }) {
   return (
@@ -80,7 +80,7 @@ export function FallsBelowCell({ l }: { l: Row }) {
         <div className="text-caption text-basalt-500">as early as {formatDay(l.fallsBelowEarliestOn)}</div>
       )}
     </>
-  ) : l.basking ? (
+  ) : l.judged ? (
     <span className="text-basalt-500">Not within 5 years</span>
   ) : l.missing.length > 0 && l.status !== 'retired' && l.status !== 'heat-only' ? (
     <span className="text-caption text-basalt-500">Needs {l.missing.join('; ')}</span>
@@ -93,7 +93,7 @@ export function StatusCell({ l }: { l: Row }) {
   return (
     <>
       <StatusBadge status={l.status} label={l.statusLabel} />
-      <div className="mt-1 max-w-56 text-caption text-basalt-500">{l.reasons[0]}</div>
+      <div className="mt-1 max-w-56 text-caption text-basalt-500">{l.reason}</div>
     </>
   );
 }
@@ -148,7 +148,7 @@ export function lampColumns(
  * The lamp log table: one row per lamp with its age, last reading, fitted remaining output, the date the
  * basking zone falls below the species' need (or what is missing to say), and its status.
  */
-export function LampTable({ lamps, showEnclosure }: { lamps: LampSummary[]; showEnclosure: boolean }) {
+export function LampTable({ lamps, showEnclosure }: { lamps: LampRow[]; showEnclosure: boolean }) {
   const [unit] = useLengthUnit();
   const rows = [...lamps].sort(
     (a, b) => STATUS_RANK[a.status] - STATUS_RANK[b.status] || a.label.localeCompare(b.label),

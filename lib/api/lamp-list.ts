@@ -10,15 +10,10 @@ import {
   MAX_LAMP_SEARCH,
   type LampSortColumn,
 } from '@/lib/lamp-log/list-view';
-import {
-  catchUpInBackground,
-  SUMMARY_INCLUDE,
-  summariesOf,
-  type LampWithOutlook,
-} from '@/lib/lamp-log/outlook-store';
+import { catchUpInBackground, lampRowsOf } from '@/lib/lamp-log/outlook-store';
 import { STATUS_RANK, STATUSES } from '@/lib/lamp-log/status';
 import { SORT_DIRECTIONS } from '@/lib/list-view';
-import { Enclosure, Lamp } from '@/models';
+import { Enclosure } from '@/models';
 import { LAMP_TECH_IDS } from '@/simulation';
 import { likeContains } from './like';
 import { offsetQuery, pageQuery } from './pagination';
@@ -279,15 +274,8 @@ export async function listLamps(query: LampListFilter) {
   ]);
   const { counts } = counted;
   const total = totalFromCounts(query, counted.byRank) ?? Number(counting?.n ?? 0);
-  const lamps = ids.length
-    ? ((await Lamp.findAll({
-        where: { id: ids.map((r) => r.id) },
-        include: SUMMARY_INCLUDE,
-      })) as LampWithOutlook[])
-    : [];
-  const byId = new Map(lamps.map((l) => [l.id, l]));
-  const { items } = await summariesOf(
-    ids.map((r) => byId.get(r.id)).filter((l): l is LampWithOutlook => Boolean(l)),
+  const items = await lampRowsOf(
+    ids.map((r) => r.id),
     today,
   );
   // Rows out of date are recomputed above for this page; the rest catch up behind the answer.

@@ -237,6 +237,65 @@ export function summaryJson(
   return { ...lampJson(lamp, type, enclosure, today), ...stored };
 }
 
+/**
+ * What a lamp table row shows, and nothing more: a list page sends every row twice (as HTML and as the
+ * data the table hydrates from), so the whole outlook — its fit, figures, every reason — stays on the
+ * lamp's own page.
+ */
+export type LampRowSource = Pick<LampSummary, 'id' | 'label' | 'ageDays' | 'hoursPerDay'> & {
+  lampType: Pick<LampSummary['lampType'], 'name' | 'tech'>;
+  enclosure: LampSummary['enclosure'];
+} & Pick<
+    StoredOutlook,
+    | 'lastReading'
+    | 'remainingFraction'
+    | 'fit'
+    | 'fallsBelowOn'
+    | 'fallsBelowEarliestOn'
+    | 'basking'
+    | 'missing'
+    | 'status'
+    | 'statusLabel'
+    | 'reasons'
+  >;
+
+export function lampRow(s: LampRowSource) {
+  return {
+    id: s.id,
+    label: s.label,
+    lampType: { name: s.lampType.name, tech: s.lampType.tech },
+    enclosure: {
+      id: s.enclosure.id,
+      name: s.enclosure.name,
+      keeperId: s.enclosure.keeperId,
+      speciesName: s.enclosure.speciesName,
+    },
+    ageDays: s.ageDays,
+    hoursPerDay: s.hoursPerDay,
+    lastReading: s.lastReading
+      ? {
+          value: s.lastReading.value,
+          unit: s.lastReading.unit,
+          distanceCm: s.lastReading.distanceCm,
+          takenAt: s.lastReading.takenAt,
+        }
+      : null,
+    remainingFraction: s.remainingFraction,
+    fit: { kind: s.fit.kind, certainty: s.fit.certainty },
+    fallsBelowOn: s.fallsBelowOn,
+    fallsBelowEarliestOn: s.fallsBelowEarliestOn,
+    /** Whether the basking zone could be judged (when no date is given: "not within 5 years"). */
+    judged: Boolean(s.basking),
+    missing: s.missing,
+    status: s.status,
+    statusLabel: s.statusLabel,
+    /** The first reason for the status: the one the table shows. */
+    reason: s.reasons[0] ?? null,
+  };
+}
+
+export type LampRow = ReturnType<typeof lampRow>;
+
 export type Loaded = { lamp: Lamp; type: LampTypeDto; enclosure: Enclosure; readings: Reading[] };
 
 /** Loads what outlooks are computed from, for many lamps in a fixed number of queries. */

@@ -4,7 +4,7 @@ import * as lampsRoute from '@/app/api/lamps/route';
 import { lampCounts, lampListQuery, lampListSql } from '@/lib/api/lamp-list';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
 import { refreshStaleOutlooks } from '@/lib/lamp-log/outlook-store';
-import { summariseLive } from '@/lib/lamp-log/store';
+import { lampRow, summariseLive } from '@/lib/lamp-log/store';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { Enclosure, Lamp, LampType, Membership, User } from '@/models';
 import {
@@ -84,6 +84,19 @@ describe('GET /api/lamps', () => {
       expect(page.counts.replace).toBe(live.filter((l) => l.status === 'replace').length);
       expect(page.counts.testSoon).toBe(live.filter((l) => l.status === 'test-soon').length);
       expect(page.counts.pending).toBe(0);
+      // Each row, read from the stored outlooks in one plain query, is what the table would show of
+      // the lamp computed from scratch.
+      const rows = (xs: { id: number }[]) => [...xs].sort((a, b) => a.id - b.id);
+      expect(rows(page.items)).toEqual(rows(live.map(lampRow)));
+      // A lamp changed since (its version bumped, as a migration does) is recomputed for the page.
+      await testDb().query('UPDATE lamps SET outlook_version = outlook_version + 1 WHERE id = :id', {
+        replacements: { id: lamps[0]!.id },
+      });
+      const again = await list(user, staffMember.organisationId, '&retired=1&limit=100');
+      expect(rows(again.items)).toEqual(rows(live.map(lampRow)));
+      // Counted beside the page, before the page recomputed it; the next answer finds nothing waiting.
+      expect(again.counts.pending).toBe(1);
+      expect((await list(user, staffMember.organisationId)).counts.pending).toBe(0);
     }
   });
 

@@ -15,7 +15,7 @@ import { todayIso } from '@/lib/lamp-log/dates';
 import { enclosureForLampsPage } from '@/lib/lamp-log/access';
 import { designLampsOf } from '@/lib/lamp-log/design-lamps';
 import { isExampleData } from '@/lib/organisations/queries';
-import { summarise } from '@/lib/lamp-log/outlook-store';
+import { lampRowsOf } from '@/lib/lamp-log/outlook-store';
 import { lampsOfEnclosure } from '@/lib/lamp-log/store';
 import { backdropsOf, uploadJson } from '@/lib/uploads/service';
 import { parseId } from '@/lib/api/schemas';
@@ -38,7 +38,10 @@ export default async function EnclosureLampsPage({ params }: { params: Promise<{
     backdropsOf(enclosure.id, 12),
     isExampleData(enclosure.organisationId),
   ]);
-  const lamps = await summarise(rows, todayIso());
+  const lamps = await lampRowsOf(
+    rows.map((l) => l.id),
+    todayIso(),
+  );
   const active = lamps.filter((l) => l.status !== 'retired');
   const retired = lamps.filter((l) => l.status === 'retired');
 
