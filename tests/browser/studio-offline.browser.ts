@@ -12,9 +12,13 @@ const session = withBrowser();
 
 type Stored = { version: number; design: { objects: { type: string; id: string }[] } };
 
+async function studioReady(page: Page) {
+  await page.waitForSelector('[data-testid=studio-canvas] canvas', { timeout: 60_000 });
+}
+
 async function openStudio(page: Page, path: string) {
   await page.goto(path);
-  await page.waitForSelector('[data-testid=studio-canvas] canvas', { timeout: 60_000 });
+  await studioReady(page);
 }
 
 const saveState = (page: Page) => page.getByTestId('save-state').getAttribute('data-state');
@@ -24,6 +28,23 @@ async function stored(page: Page, id: number): Promise<Stored> {
     const res = await fetch(`/api/variants/${variantId}`, { cache: 'no-store' });
     return ((await res.json()) as { variant: Stored }).variant;
   }, id);
+}
+
+/** The server's version and lamps, the local copy's, the save state and whether the studio is view-only. */
+async function offerFacts(page: Page, id: number): Promise<string> {
+  const server = await stored(page, id);
+  const local = await page.evaluate(
+    (variantId) => localStorage.getItem(`baskwell.studio.unsaved.variant:${variantId}`),
+    id,
+  );
+  const copy = local ? (JSON.parse(local) as { baseVersion: number; design: Stored['design'] }) : null;
+  const lamps = (d: Stored['design']) => d.objects.filter((o) => o.type === 'lamp').length;
+  return JSON.stringify({
+    server: { version: server.version, lamps: lamps(server.design) },
+    localCopy: copy && { baseVersion: copy.baseVersion, lamps: lamps(copy.design) },
+    saveState: await saveState(page),
+    viewOnly: await page.getByTestId('view-only').count(),
+  });
 }
 
 /** What the app answers while its database is down (lib/api: 503, Retry-After, JSON without internals). */
@@ -67,11 +88,18 @@ describe('design studio while the server is down', () => {
     await screenshot(page, 'studio-server-down');
     expect((await stored(page, variantId)).version).toBe(before.version);
 
-    // A reload while the server is still down: the edit is found on this device and offered back.
+    // A reload while the server is still down: the edit is found on this device and offered back. One
+    // navigation: a reload followed by a second opening would leave and load the studio twice.
     await page.reload();
-    await openStudio(page, `/studio/${variantId}`);
+    await studioReady(page);
     const banner = page.getByTestId('restore-banner');
-    await banner.waitFor({ state: 'visible', timeout: 30_000 });
+    await banner.waitFor({ state: 'visible', timeout: 30_000 }).catch(async (e: unknown) => {
+      // Which of the offer's conditions failed: the server already holding the edit, no local copy, or
+      // a studio that cannot be edited.
+      throw new Error(`no offer of the unsaved edit after the reload: ${await offerFacts(page, variantId)}`, {
+        cause: e,
+      });
+    });
     expect(await banner.textContent()).toContain('Unsaved changes');
     await screenshot(page, 'studio-server-down-restore');
     await banner.getByRole('button', { name: 'Restore them' }).click();
@@ -89,7 +117,7 @@ describe('design studio while the server is down', () => {
 
     // Saved: nothing is offered back any more.
     await page.reload();
-    await openStudio(page, `/studio/${variantId}`);
+    await studioReady(page);
     await expect.poll(() => page.getByTestId('object-summary').textContent()).toMatch(/Lamp:/);
     expect(await page.getByTestId('restore-banner').count()).toBe(0);
     expect(session.pageErrors()).toEqual([]);
