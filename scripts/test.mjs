@@ -3,7 +3,7 @@
 //   checks:  prettier --check, eslint, tsc (at low priority) and vitest's unit files, all in parallel,
 //            with vitest's database files one at a time on the test database;
 //   browser: `next build` at once, the demo seed in a database of its own, then the browser journeys
-//            (tests/browser/*.browser.ts) in Chromium against that production build.
+//            (tests/browser/*.browser.ts) in Chromium against that production build, two files at a time.
 // It brings up what they need (npm and Debian packages, the private MariaDB with freshly recreated
 // test databases, fake SMTP and S3 servers on their own ports for each lane) and stops what it started
 // at the end. The summary prints each stage's time and the whole run's wall clock.
@@ -28,6 +28,11 @@ const CHECKS = ['prettier', 'eslint', 'tsc', 'vitest', 'browser'];
 // the cores, so that the bound measures the app and not this run's other work.
 const TIMED_FILES = ['tests/security/export-stall.test.ts', 'tests/reliability/db-outage.test.ts'];
 const TIMED_BROWSER_FILES = ['tests/browser/engine-threads.browser.ts'];
+// The browser journeys run this many files at a time against the one app, each in its own Chromium: a
+// journey mostly waits (for the server, the engine's worker, a reload), so a second file fills those
+// waits on this 2-core machine; more would only queue for the cores. Each file makes what it changes
+// (designs, enclosures, lamps, accounts, sessions it ends) for itself, so no file disturbs another.
+const BROWSER_WORKERS = 2;
 const RESULTS_DIR = path.join(ROOT, 'test-results');
 // The address unit and integration tests see (APP_URL, NEXTAUTH_URL): the documented default.
 const UNIT_APP_URL = 'http://localhost:3000';
@@ -261,6 +266,28 @@ async function main() {
   }
 }
 
+/**
+ * One vitest run of browser journeys (`files`: paths or filters) as a step, its output kept in
+ * test-results/<name>.log and shown whole when it ends, so it does not interleave with vitest's.
+ */
+async function browserRun(title, name, files, runEnv) {
+  const logFile = path.join(RESULTS_DIR, `${name}.log`);
+  log(`${title}: follow ${path.relative(ROOT, logFile)}; shown here when they end.`);
+  let output = '';
+  const ok = await step(title, async () => {
+    const r = await run(bin('vitest'), [...browserArgs(name), ...files], {
+      env: runEnv,
+      capture: true,
+      check: false,
+      logFile,
+    });
+    output = `${r.stdout}${r.stderr}`;
+    if (r.code !== 0) throw new Error(`browser tests exited with ${r.signal ?? r.code}`);
+  });
+  console.log(`\n${bold(`▶ ${title}: output`)}\n${output.trimEnd()}`);
+  return ok;
+}
+
 /** A vitest run of the browser journeys, its JSON report in test-results/<name>.json. */
 const browserArgs = (name) => [
   'run',
@@ -345,8 +372,7 @@ async function checksLane(testEnv) {
 /**
  * The browser journeys: `next build` from the start (beside the static checks and vitest: both are
  * needed and neither waits for the other), the demo seed in the browser's own database meanwhile, then
- * the app on its port and tests/browser/*.browser.ts in Chromium. Their output is kept in
- * test-results/browser.log and shown whole when they end, so it does not interleave with vitest's.
+ * the app on its port and tests/browser/*.browser.ts in Chromium, BROWSER_WORKERS files at a time.
  */
 async function browserLane(browserEnv, { appUrl, appPort, browserDb, vitestDone, ownServers }) {
   const chromium = ensureApt({ chromium: ['chromium', 'fonts-liberation'] }, { quiet: true }).then(
@@ -402,24 +428,16 @@ async function browserLane(browserEnv, { appUrl, appPort, browserDb, vitestDone,
   );
   if (!appStarted) return;
   browserAppUp = true;
-  const browserLog = path.join(RESULTS_DIR, 'browser.log');
-  log(`Browser tests running: follow ${path.relative(ROOT, browserLog)}; shown here when they end.`);
-  let output = '';
-  const ok = await step('browser tests', async () => {
-    const r = await run(
-      bin('vitest'),
-      [...browserArgs('browser'), ...(opts.only?.has('browser') ? opts.filters : [])],
-      {
-        env: { ...browserEnv, VITEST_BROWSER_EXCLUDE: TIMED_BROWSER_FILES.join(',') },
-        capture: true,
-        check: false,
-        logFile: browserLog,
-      },
-    );
-    output = `${r.stdout}${r.stderr}`;
-    if (r.code !== 0) throw new Error(`browser tests exited with ${r.signal ?? r.code}`);
-  });
-  console.log(`\n${bold('▶ browser tests: output')}\n${output.trimEnd()}`);
+  const ok = await browserRun(
+    `browser tests, ${BROWSER_WORKERS} files at a time`,
+    'browser',
+    opts.only?.has('browser') ? opts.filters : [],
+    {
+      ...browserEnv,
+      VITEST_BROWSER_EXCLUDE: TIMED_BROWSER_FILES.join(','),
+      BROWSER_WORKERS: String(BROWSER_WORKERS),
+    },
+  );
   if (!ok) {
     console.log(yellow(`Last lines of the app's log (${path.relative(ROOT, nextLog)}):`));
     console.log(readFileSync(nextLog, 'utf8').trimEnd().split('\n').slice(-40).join('\n'));

@@ -1,24 +1,26 @@
 // "Sign out everywhere" as a person does it: signed in on two devices (two browser contexts), they use the
-// account page on one; the other, on its next page, is back at sign-in. Uses the household's owner, whom
-// no other browser test signs in as.
+// account page on one; the other, on its next page, is back at sign-in. An owner of an organisation of
+// their own, made for this test in the browser tests' database: ending every session of a demo person
+// would sign out another browser file running at the same time.
 // The session's short lifetime: the cookie lasts an hour, and an open tab renews it (the page's clock is
 // Playwright's, moved on by hand, so nothing waits ten real minutes).
 import { describe, expect, it } from 'vitest';
 import { SESSION_MAX_AGE_S, SESSION_REFRESH_MS } from '@/lib/auth/lifetime';
-import { DEMO_HOUSEHOLD, DEMO_PASSWORDS, DEMO_SHOP, demoSignIn } from '@/lib/demo/scenario';
+import { DEMO_PASSWORDS, DEMO_SHOP } from '@/lib/demo/scenario';
+import { createMember } from '../helpers/db';
 import { newContext, screenshot, signIn, withBrowser } from './harness';
 
 const session = withBrowser();
 
 describe('sign out everywhere', () => {
   it('ends the session on the other device too', async () => {
-    const who = demoSignIn('owner', DEMO_HOUSEHOLD.name);
+    const { user: who, password } = await createMember('owner');
     const phone = session.page();
-    await signIn(phone, who.email, DEMO_PASSWORDS.owner);
+    await signIn(phone, who.email, password);
     const laptopContext = await newContext(session.browser());
     try {
       const laptop = await laptopContext.newPage();
-      await signIn(laptop, who.email, DEMO_PASSWORDS.owner);
+      await signIn(laptop, who.email, password);
       await laptop.goto('/enclosures');
       expect(new URL(laptop.url()).pathname).toBe('/enclosures');
 
@@ -34,7 +36,7 @@ describe('sign out everywhere', () => {
       await laptop.goto('/enclosures');
       expect(new URL(laptop.url()).pathname).toBe('/sign-in');
       // And signing in again works.
-      await signIn(laptop, who.email, DEMO_PASSWORDS.owner);
+      await signIn(laptop, who.email, password);
       expect(new URL(laptop.url()).pathname).not.toBe('/sign-in');
     } finally {
       await laptopContext.close();
