@@ -1,4 +1,5 @@
-import { DesignShapes, drawingTop, SKETCH_LOOK } from '@/components/designs/DesignShapes';
+import { DesignShapes, SKETCH_LOOK } from '@/components/designs/DesignShapes';
+import { DesignSvg } from '@/components/designs/DesignSvg';
 import { LAMP_LOOK } from '@/shared/lamp-look';
 import type { Design } from '@/simulation';
 
@@ -8,24 +9,13 @@ import type { Design } from '@/simulation';
  */
 export function ProposalSketch({ design, label }: { design: Design; label: string }) {
   const { width: W, height: H } = design.enclosure;
-  const top = drawingTop(design);
-  const pad = 6;
 
   return (
     <figure className="rounded-lg border border-basalt-200 bg-white p-3">
-      <svg
-        viewBox={`${-pad} ${-top - pad} ${W + 2 * pad} ${top + 2 * pad}`}
-        role="img"
-        aria-label={label}
-        className="h-auto w-full"
-        style={{ maxHeight: 360 }}
-      >
-        {/* Design coordinates (cm, y up); the group flips y. */}
-        <g transform="scale(1,-1)">
-          <rect x={0} y={0} width={W} height={H} fill="#f5f6f4" stroke="#5f6756" strokeWidth={0.8} />
-          <DesignShapes objects={design.objects} look={SKETCH_LOOK} />
-        </g>
-      </svg>
+      <DesignSvg design={design} pad={6} label={label} style={{ maxHeight: 360 }}>
+        <rect x={0} y={0} width={W} height={H} fill="#f5f6f4" stroke="#5f6756" strokeWidth={0.8} />
+        <DesignShapes objects={design.objects} look={SKETCH_LOOK} />
+      </DesignSvg>
       <figcaption className="mt-2 flex flex-wrap gap-x-4 gap-y-1 text-caption text-basalt-600">
         {(['uv', 'heat'] as const).map((kind) => (
           <span key={kind}>
