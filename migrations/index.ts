@@ -21,6 +21,7 @@ import * as m0019 from './0019-customers-counter';
 import * as m0020 from './0020-lamp-curve-adoptions';
 import * as m0021 from './0021-lamp-outlook-status-counts';
 import * as m0022 from './0022-lamp-outlook-counts-row';
+import * as m0023 from './0023-customer-keeper-link';
 
 export type Migration = {
   name: string;
@@ -55,4 +56,5 @@ export const migrations: Migration[] = [
   { name: '0020-lamp-curve-adoptions', ...m0020 },
   { name: '0021-lamp-outlook-status-counts', ...m0021 },
   { name: '0022-lamp-outlook-counts-row', ...m0022 },
+  { name: '0023-customer-keeper-link', ...m0023 },
 ];

@@ -21,6 +21,8 @@ export class Customer extends Model<InferAttributes<Customer>, InferCreationAttr
   declare notes: CreationOptional<string | null>;
   declare reminderConsentAt: CreationOptional<Date | null>;
   declare reminderConsentWithdrawnAt: CreationOptional<Date | null>;
+  /** The keeper account this customer became (a member with the keeper role), if linked. */
+  declare keeperUserId: CreationOptional<number | null>;
   declare createdById: number | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -36,6 +38,7 @@ export class Customer extends Model<InferAttributes<Customer>, InferCreationAttr
         notes: { type: DataTypes.TEXT, allowNull: true },
         reminderConsentAt: { type: DataTypes.DATE, allowNull: true },
         reminderConsentWithdrawnAt: { type: DataTypes.DATE, allowNull: true },
+        keeperUserId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         createdById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

@@ -14,6 +14,7 @@ import { useLengthUnit } from '@/components/ui/units';
 import type { CounterAnswerDto } from '@/lib/counter/queries';
 import { WARM_UP_MINUTES } from '@/shared/reading-setup';
 import { CustomerPicker, type Who } from './CustomerPicker';
+import { KeeperLampChoice } from './KeeperLampChoice';
 import { SendSlipButton } from './SendSlipButton';
 import { VerdictCard } from './VerdictCard';
 
@@ -21,13 +22,28 @@ export type CounterOptions = {
   organisationId: number;
   lampTypes: { id: number; name: string }[];
   species: { id: number; name: string }[];
-  /** Testing a kept lamp again: its type and age are known. */
-  kept: { id: number; name: string; customerName: string | null; hoursPerDay: number } | null;
+  /**
+   * Testing a known lamp: a counter lamp kept before, or a lamp in the enclosure of a keeper linked to a
+   * customer (its reading goes to the lamp log). Its type and age are known.
+   */
+  kept: {
+    kind: 'counter' | 'enclosure';
+    id: number;
+    name: string;
+    customerId: number | null;
+    customerName: string | null;
+  } | null;
   /** Opened from a customer's page. */
   customer: { id: number; name: string } | null;
 };
 
 type Answer = CounterAnswerDto;
+/** What saving answers: a counter lamp, or the lamp in a keeper's enclosure the reading went to. */
+type Saved = {
+  lampId: number | null;
+  customerId: number | null;
+  enclosureLamp?: { id: number; enclosureId: number; label: string };
+};
 
 /** The numbers of a form field, or undefined when empty. */
 const num = (form: FormData, k: string) => {
@@ -55,7 +71,12 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
   const [asking, setAsking] = useState(false);
   const [error, setError] = useState<{ field?: string; message: string } | null>(null);
   const [saving, setSaving] = useState(false);
-  const [saved, setSaved] = useState<{ lampId: number; customerId: number | null } | null>(null);
+  const [saved, setSaved] = useState<Saved | null>(null);
+  // A lamp of the linked keeper's enclosures chosen for an existing customer.
+  const [keeperLampId, setKeeperLampId] = useState<number | null>(null);
+  const enclosureLampId =
+    options.kept?.kind === 'enclosure' ? options.kept.id : options.kept ? null : keeperLampId;
+  const known = Boolean(options.kept || enclosureLampId);
   const [changed, setChanged] = useState(0);
   const asked = useRef(0);
 
@@ -74,7 +95,7 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
       lengthUnit: unit,
     };
     let lamp: Record<string, unknown> | null = null;
-    if (!options.kept) {
+    if (!known) {
       const lampTypeId = num(form, 'lampTypeId');
       const months = num(form, 'ageMonths');
       const date = String(form.get('firstUsedOn') ?? '');
@@ -88,7 +109,8 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
     }
     return {
       organisationId: options.organisationId,
-      ...(options.kept ? { counterLampId: options.kept.id } : {}),
+      ...(options.kept?.kind === 'counter' ? { counterLampId: options.kept.id } : {}),
+      ...(enclosureLampId ? { enclosureLampId } : {}),
       lamp,
       reading: {
         distance,
@@ -130,7 +152,7 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
     }, 250);
     return () => clearTimeout(timer);
     // eslint-disable-next-line react-hooks/exhaustive-deps -- the form is read when it changes
-  }, [changed, through, ageBy, unit]);
+  }, [changed, through, ageBy, unit, enclosureLampId]);
 
   async function save(e: FormEvent) {
     e.preventDefault();
@@ -148,17 +170,15 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
           }
         : who.kind === 'existing'
           ? { kind: 'existing', id: who.id }
-          : { kind: 'walk-in' };
+          : options.kept?.kind === 'enclosure' && options.kept.customerId
+            ? { kind: 'existing', id: options.kept.customerId }
+            : { kind: 'walk-in' };
     setSaving(true);
     setError(null);
     try {
-      const r = await sendJson<{ lampId: number; customerId: number | null; answer: Answer }>(
-        'POST',
-        '/api/counter/tests',
-        { ...b, customer },
-      );
+      const r = await sendJson<Saved & { answer: Answer }>('POST', '/api/counter/tests', { ...b, customer });
       setAnswer(r.answer);
-      setSaved({ lampId: r.lampId, customerId: r.customerId });
+      setSaved({ lampId: r.lampId, customerId: r.customerId, enclosureLamp: r.enclosureLamp });
       router.refresh();
     } catch (err) {
       setError(fieldError(err));
@@ -185,18 +205,35 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
       className="mx-auto max-w-xl space-y-5"
     >
       <section className={`${card} space-y-3 p-4`} aria-label="Who">
-        {options.kept ? (
+        {options.kept?.kind === 'enclosure' ? (
+          <p className="text-body">
+            Testing <strong>{options.kept.name}</strong> of {options.kept.customerName}, as the lamp log has
+            it. The reading is added to that lamp; its earlier readings give it its own decay.
+          </p>
+        ) : options.kept ? (
           <p className="text-body">
             Testing again: <strong>{options.kept.name}</strong>
             {options.kept.customerName ? ` of ${options.kept.customerName}` : ' (kept without a name)'}. Its
             earlier readings give it its own decay.
           </p>
         ) : (
-          <CustomerPicker organisationId={options.organisationId} who={who} onWho={setWho} />
+          <>
+            <CustomerPicker
+              organisationId={options.organisationId}
+              who={who}
+              onWho={(next) => {
+                setKeeperLampId(null);
+                setWho(next);
+              }}
+            />
+            {who.kind === 'existing' && (
+              <KeeperLampChoice customerId={who.id} chosen={keeperLampId} onChoose={setKeeperLampId} />
+            )}
+          </>
         )}
       </section>
 
-      {!options.kept && (
+      {!known && (
         <section className={`${card} space-y-3 p-4`} aria-label="The lamp">
           <Select label="Lamp type" name="lampTypeId" defaultValue="" required error={err('lampTypeId')}>
             <option value="" disabled>
@@ -312,7 +349,7 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
         </p>
       </section>
 
-      {!options.kept && (
+      {!known && (
         <details className={`${card} p-4`}>
           <summary className="min-h-11 cursor-pointer text-body font-medium text-basalt-900">
             At home (optional): species and basking distance
@@ -366,28 +403,49 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
 
       {saved ? (
         <Notice tone="success" title="Saved">
-          <p>
-            <Link href={`/counter/lamps/${saved.lampId}`} className={link}>
-              Open the lamp and its readings
-            </Link>
-            {saved.customerId && (
-              <>
-                {' · '}
-                <Link href={`/customers/${saved.customerId}`} className={link}>
-                  the customer
-                </Link>
-              </>
-            )}
-            {' · '}
-            <a href={`/api/counter/lamps/${saved.lampId}/slip`} download className={link}>
-              Test slip (PDF)
-            </a>
-            {' · '}
-            <a href="/counter" className={link}>
-              Test another lamp
-            </a>
-          </p>
-          {saved.customerId && (
+          {saved.enclosureLamp ? (
+            <p>
+              The reading was added to {saved.enclosureLamp.label} in the lamp log.{' '}
+              <Link href={`/enclosures/${saved.enclosureLamp.enclosureId}/lamps`} className={link}>
+                Open the enclosure’s lamps
+              </Link>
+              {saved.customerId && (
+                <>
+                  {' · '}
+                  <Link href={`/customers/${saved.customerId}`} className={link}>
+                    the customer
+                  </Link>
+                </>
+              )}
+              {' · '}
+              <a href="/counter" className={link}>
+                Test another lamp
+              </a>
+            </p>
+          ) : (
+            <p>
+              <Link href={`/counter/lamps/${saved.lampId}`} className={link}>
+                Open the lamp and its readings
+              </Link>
+              {saved.customerId && (
+                <>
+                  {' · '}
+                  <Link href={`/customers/${saved.customerId}`} className={link}>
+                    the customer
+                  </Link>
+                </>
+              )}
+              {' · '}
+              <a href={`/api/counter/lamps/${saved.lampId}/slip`} download className={link}>
+                Test slip (PDF)
+              </a>
+              {' · '}
+              <a href="/counter" className={link}>
+                Test another lamp
+              </a>
+            </p>
+          )}
+          {saved.customerId && saved.lampId && (
             <div className="mt-2">
               <SendSlipButton lampId={saved.lampId} />
             </div>
@@ -395,7 +453,7 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
         </Notice>
       ) : (
         <section className={`${card} space-y-3 p-4`} aria-label="Save">
-          {!options.kept && who.kind === 'new' && (
+          {!known && who.kind === 'new' && (
             <div className="space-y-3">
               <Field
                 label="Customer’s name"
@@ -427,13 +485,15 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
           <button type="submit" className={`${button.primary} min-h-12 w-full`} disabled={saving || !answer}>
             {saving
               ? 'Saving…'
-              : options.kept
-                ? 'Save this reading'
-                : who.kind === 'new'
-                  ? 'Save for the new customer'
-                  : who.kind === 'existing'
-                    ? `Save for ${who.name}`
-                    : 'Save without a name (walk-in)'}
+              : enclosureLampId
+                ? 'Add this reading to the lamp log'
+                : options.kept
+                  ? 'Save this reading'
+                  : who.kind === 'new'
+                    ? 'Save for the new customer'
+                    : who.kind === 'existing'
+                      ? `Save for ${who.name}`
+                      : 'Save without a name (walk-in)'}
           </button>
         </section>
       )}

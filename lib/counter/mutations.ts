@@ -6,7 +6,7 @@ import { customerFor } from '@/lib/customers/access';
 import { getSequelize } from '@/lib/db';
 import { todayIso } from '@/lib/lamp-log/dates';
 import { CounterLamp, CounterReading, Customer } from '@/models';
-import { answerOf, readingsOf, resolveTest, type CounterAnswerDto } from './queries';
+import { answerOf, readingsOf, resolveTest, sourceOf, type CounterAnswerDto } from './queries';
 import type { SaveTestInput } from './schemas';
 
 /**
@@ -21,7 +21,7 @@ export async function saveTest(
   now = new Date(),
 ): Promise<{ lampId: number; readingId: number; customerId: number | null; answer: CounterAnswerDto }> {
   const resolved = await resolveTest(user, input, now);
-  const answer = answerOf(resolved, readingsOf(resolved), todayIso(now));
+  const answer = answerOf(sourceOf(resolved), readingsOf(resolved), todayIso(now));
   const existingCustomer =
     !resolved.existing && input.customer.kind === 'existing'
       ? await customerFor(user, input.customer.id, 'update')

@@ -4,6 +4,7 @@ import { invalid } from '@/lib/errors';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { counterLampFor } from '@/lib/customers/access';
 import { todayIso } from '@/lib/lamp-log/dates';
+import type { SpeciesNeed } from '@/lib/lamp-log/need';
 import type { ReadingFacts } from '@/lib/lamp-log/outlook';
 import { lampFacts, needOfSheet, readingFacts } from '@/lib/lamp-log/store';
 import { allLampTypes, toDto as lampTypeDto } from '@/lib/lamp-types/queries';
@@ -122,14 +123,31 @@ export async function resolveTest(user: CurrentUser, input: AssessInput, now: Da
   return { organisationId: input.organisationId, existing, lamp, type, sheet, earlier, reading };
 }
 
-type AnswerSource = Pick<Resolved, 'existing' | 'lamp' | 'type' | 'sheet'>;
+/** What an answer is computed from: a lamp (a counter lamp, or one in a keeper's enclosure) and its need. */
+export type AnswerSource = {
+  lampId: number | null;
+  lamp: ReturnType<typeof lampColumns>;
+  type: LampType;
+  species: { need: SpeciesNeed; name: string } | null;
+};
+
+const speciesOfSheet = (sheet: SpeciesSheet | null) =>
+  sheet ? { need: needOfSheet(sheet), name: sheet.commonName } : null;
+
+/** A resolved counter test as the answer takes it. */
+export const sourceOf = (r: Resolved): AnswerSource => ({
+  lampId: r.existing?.id ?? null,
+  lamp: r.lamp,
+  type: r.type,
+  species: speciesOfSheet(r.sheet),
+});
 
 /** The answer for a lamp and all its readings, computed as the lamp log computes an outlook. */
 export function answerOf(r: AnswerSource, readings: ReadingFacts[], today: string): CounterAnswerDto {
   const type = lampTypeDto(r.type);
   const facts = lampFacts(
     {
-      id: r.existing?.id ?? 0,
+      id: r.lampId ?? 0,
       label: r.lamp.label ?? type.name,
       firstUsedOn: r.lamp.firstUsedOn,
       hoursPerDay: r.lamp.hoursPerDay,
@@ -142,7 +160,7 @@ export function answerOf(r: AnswerSource, readings: ReadingFacts[], today: strin
   const { outlook, verdict } = assessCounterLamp({
     lamp: facts,
     readings,
-    species: r.sheet ? needOfSheet(r.sheet) : null,
+    species: r.species?.need ?? null,
     today,
     ageEstimated: r.lamp.firstUsedEstimated,
   });
@@ -154,7 +172,7 @@ export function answerOf(r: AnswerSource, readings: ReadingFacts[], today: strin
     fit: { kind: outlook.fit.kind, n: outlook.fit.n, note: outlook.fit.note },
     readingNotes: outlook.readingNotes,
     photoperiod: outlook.photoperiod,
-    speciesName: r.sheet?.commonName ?? null,
+    speciesName: r.species?.name ?? null,
     earlierReadings: readings.length - 1,
   };
 }
@@ -164,7 +182,7 @@ export const readingsOf = (r: Resolved): ReadingFacts[] => [...r.earlier.map(rea
 
 export async function assessTest(user: CurrentUser, input: AssessInput, now = new Date()) {
   const resolved = await resolveTest(user, input, now);
-  return answerOf(resolved, readingsOf(resolved), todayIso(now));
+  return answerOf(sourceOf(resolved), readingsOf(resolved), todayIso(now));
 }
 
 export type CounterLampView = {
@@ -206,12 +224,7 @@ export async function counterLampView(lamp: CounterLamp, today = todayIso()): Pr
   const answer =
     type && readings.length > 0
       ? answerOf(
-          {
-            existing: lamp,
-            lamp: keptColumns(lamp),
-            type,
-            sheet,
-          },
+          { lampId: lamp.id, lamp: keptColumns(lamp), type, species: speciesOfSheet(sheet) },
           readings.map(readingFacts),
           today,
         )

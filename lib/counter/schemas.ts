@@ -48,18 +48,29 @@ const common = {
   organisationId: idSchema('The organisation id'),
   /** Testing a lamp kept before: its readings so far give it its own decay. */
   counterLampId: idSchema('The lamp').nullish(),
+  /** A lamp in the enclosure of the keeper a customer is linked to: the reading is added to it. */
+  enclosureLampId: idSchema('The lamp in the keeper’s enclosure').nullish(),
   lamp: counterLampBody.nullish(),
   reading: counterReadingBody,
 };
 
-const needsLamp = (b: { counterLampId?: number | null; lamp?: unknown }) =>
-  Boolean(b.counterLampId || b.lamp);
+type LampChoice = { counterLampId?: number | null; enclosureLampId?: number | null; lamp?: unknown };
+const needsLamp = (b: LampChoice) => Boolean(b.counterLampId || b.enclosureLampId || b.lamp);
+/** A lamp of the lamp log is tested as it is: its type, age and home are the lamp log's. */
+const oneLamp = (b: LampChoice) => !b.enclosureLampId || (!b.counterLampId && !b.lamp);
+const oneLampMessage = {
+  message: 'A lamp in the keeper’s enclosure is tested as it is: send no other lamp with it.',
+  path: ['enclosureLampId'],
+};
 const lampMessage = {
   message: 'Describe the lamp (its type and age), or pick a lamp tested before.',
   path: ['lamp'],
 };
 
-export const assessBody = z.strictObject(common).refine(needsLamp, lampMessage);
+export const assessBody = z
+  .strictObject(common)
+  .refine(needsLamp, lampMessage)
+  .refine(oneLamp, oneLampMessage);
 
 /** Who the lamp is kept for: nobody (a walk-in, kept anonymous), a customer on record, or a new one. */
 export const counterCustomer = z.discriminatedUnion(
@@ -75,6 +86,11 @@ export const counterCustomer = z.discriminatedUnion(
 export const saveTestBody = z
   .strictObject({ ...common, customer: counterCustomer.default({ kind: 'walk-in' }) })
   .refine(needsLamp, lampMessage)
+  .refine(oneLamp, oneLampMessage)
+  .refine((b) => !b.enclosureLampId || b.customer.kind !== 'new', {
+    message: 'A lamp in a keeper’s enclosure belongs to the customer linked to that keeper.',
+    path: ['customer'],
+  })
   .refine((b) => b.customer.kind !== 'new' || !b.customer.reminderConsent || b.customer.email, {
     message: 'Reminder e-mails need an e-mail address.',
     path: ['customer', 'email'],

@@ -15,6 +15,8 @@ export type CustomerDto = {
   /** When consent to reminder e-mails was given (ISO); null without consent. */
   reminderConsentAt: string | null;
   reminderConsentWithdrawnAt: string | null;
+  /** The keeper account the customer is linked to (a member of the organisation), if any. */
+  keeperUserId: number | null;
   createdAt: string;
   updatedAt: string;
 };
@@ -31,6 +33,7 @@ export function customerDto(c: Customer): CustomerDto {
     reminderConsentWithdrawnAt: c.reminderConsentWithdrawnAt
       ? c.reminderConsentWithdrawnAt.toISOString()
       : null,
+    keeperUserId: c.keeperUserId ?? null,
     createdAt: c.createdAt.toISOString(),
     updatedAt: c.updatedAt.toISOString(),
   };

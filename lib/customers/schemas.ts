@@ -45,6 +45,9 @@ export const updateCustomerBody = z
   .partial()
   .refine((b) => Object.keys(b).length > 0, { message: 'Send at least one field to change.' });
 
+/** Linking a customer to the keeper account they became. */
+export const keeperLinkBody = z.strictObject({ keeperId: idSchema('The keeper') });
+
 export const customerListQuery = z.object({
   organisationId: idSchema('The organisation id'),
   q: textSchema().trim().max(100, 'Search for at most 100 characters.').optional(),

@@ -74,6 +74,9 @@ export const REQUESTS: Record<string, RequestSpec> = {
       commit: true,
     }),
   },
+  // Linking A's customer to A's own keeper: well-formed, and the owner (the control) may.
+  'PUT /api/customers/[id]/keeper': { body: (w) => ({ keeperId: w.keeper1 }) },
+  'DELETE /api/customers/[id]/keeper': {},
   'PATCH /api/customers/[id]': { body: () => ({ notes: 'Asked about a new tube.' }) },
   'DELETE /api/customers/[id]': {},
   // A search that finds the customer, so a leak would show its marker.

@@ -3,6 +3,7 @@ import { notFound } from 'next/navigation';
 import Link from '@/components/ui/Link';
 import { Breadcrumbs } from '@/components/ui/Breadcrumbs';
 import { DeleteCustomerButton } from '@/components/customers/DeleteCustomerButton';
+import { KeeperLinkPanel } from '@/components/customers/KeeperLinkPanel';
 import { VERDICT_LABEL } from '@/components/customers/verdict-label';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { LocalTime } from '@/components/ui/LocalTime';
@@ -10,6 +11,7 @@ import { PageHeader } from '@/components/ui/PageHeader';
 import { button, card, link } from '@/components/ui/styles';
 import { parseId } from '@/lib/api/schemas';
 import { customerForPage } from '@/lib/customers/access';
+import { keeperChoices, linkedKeeper, type KeeperLampRef } from '@/lib/customers/keeper-link';
 import { customerDto, lampsOfCustomer } from '@/lib/customers/queries';
 import { isExampleData } from '@/lib/organisations/queries';
 import { ExampleDataMark } from '@/components/lamp-log/ExampleDataMark';
@@ -26,9 +28,11 @@ export default async function CustomerPage({ params }: Props) {
   const row = id ? await customerForPage(user, id) : null;
   if (!row) notFound();
   const customer = customerDto(row);
-  const [lamps, example] = await Promise.all([
+  const [lamps, example, keeper, keepers] = await Promise.all([
     lampsOfCustomer(customer.id),
     isExampleData(customer.organisationId),
+    linkedKeeper(row),
+    keeperChoices(customer.organisationId),
   ]);
   return (
     <>
@@ -77,6 +81,19 @@ export default async function CustomerPage({ params }: Props) {
           </>
         )}
       </dl>
+      <KeeperLinkPanel
+        customerId={customer.id}
+        linked={
+          keeper && { id: keeper.id, name: keeper.name, email: keeper.email, isKeeper: keeper.isKeeper }
+        }
+        keepers={keepers.map((k) => ({
+          id: k.id,
+          name: k.name,
+          email: k.email,
+          linkedElsewhere: k.linkedCustomerId !== null && k.linkedCustomerId !== customer.id,
+        }))}
+      />
+      {keeper && keeper.isKeeper && <KeeperLamps keeperName={keeper.name} lamps={keeper.lamps} />}
       <h2 className="mb-2 text-lead font-semibold text-basalt-900">Lamps tested</h2>
       {lamps.length === 0 ? (
         <EmptyState title="No lamps tested yet">
@@ -112,5 +129,41 @@ export default async function CustomerPage({ params }: Props) {
         </ul>
       )}
     </>
+  );
+}
+
+/** The linked keeper's enclosure lamps as the lamp log has them: references, never copies. */
+function KeeperLamps({ keeperName, lamps }: { keeperName: string; lamps: KeeperLampRef[] }) {
+  return (
+    <section className="mb-6" aria-labelledby="keeper-lamps">
+      <h2 id="keeper-lamps" className="mb-2 text-lead font-semibold text-basalt-900">
+        Lamps in {keeperName}’s enclosures
+      </h2>
+      {lamps.length === 0 ? (
+        <p className="text-body text-basalt-600">No lamps logged in their enclosures yet.</p>
+      ) : (
+        <ul className={`${card} divide-y divide-basalt-100`} aria-label="Lamps in the keeper’s enclosures">
+          {lamps.map((l) => (
+            <li key={l.id} className="flex flex-wrap items-baseline justify-between gap-2 px-4 py-3">
+              <span>
+                <Link href={`/enclosures/${l.enclosureId}/lamps`} className={link}>
+                  {l.label}
+                </Link>
+                <span className="ml-2 text-caption text-basalt-500">
+                  {l.lampTypeName} · {l.enclosureName} · in use since {l.firstUsedOn} · {l.readings} reading
+                  {l.readings === 1 ? '' : 's'} in the lamp log
+                  {l.retiredOn ? ` · retired ${l.retiredOn}` : ''}
+                </span>
+              </span>
+              {!l.retiredOn && (
+                <Link href={`/counter?enclosureLamp=${l.id}`} className={`${link} text-caption`}>
+                  Test at the counter
+                </Link>
+              )}
+            </li>
+          ))}
+        </ul>
+      )}
+    </section>
   );
 }

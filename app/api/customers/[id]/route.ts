@@ -3,13 +3,15 @@ import { idParams } from '@/lib/api/schemas';
 import { customerFor } from '@/lib/customers/access';
 import { deleteCustomer, updateCustomer } from '@/lib/customers/mutations';
 import { customerDto, lampsOfCustomer } from '@/lib/customers/queries';
+import { linkedKeeper } from '@/lib/customers/keeper-link';
 import { updateCustomerBody } from '@/lib/customers/schemas';
 
 export const GET = route({
   params: idParams,
   handler: async ({ params, user }) => {
     const customer = await customerFor(user, params.id, 'read');
-    return { customer: customerDto(customer), lamps: await lampsOfCustomer(customer.id) };
+    const [lamps, keeper] = await Promise.all([lampsOfCustomer(customer.id), linkedKeeper(customer)]);
+    return { customer: customerDto(customer), lamps, keeper };
   },
 });
 
