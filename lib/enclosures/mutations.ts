@@ -37,3 +37,8 @@ export async function updateEnclosure(
   await enclosure.update(body);
   return enclosureWithKeeper(enclosure.id);
 }
+
+/** Its designs and lamps go with it: the foreign keys cascade. */
+export async function deleteEnclosure(enclosure: Enclosure): Promise<void> {
+  await enclosure.destroy();
+}

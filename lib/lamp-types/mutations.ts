@@ -1,5 +1,6 @@
 import 'server-only';
-import type { Transaction } from 'sequelize';
+import { ForeignKeyConstraintError, UniqueConstraintError, type Transaction } from 'sequelize';
+import { conflict } from '@/lib/errors';
 import { LampType } from '@/models';
 import { toDto } from './queries';
 import { lampTypeInputSchema, type LampTypeInput, type LampTypePatch } from './schema';
@@ -32,15 +33,17 @@ export async function createLampType(
   userId: number | null,
   opts: { presetKey?: string; transaction?: Transaction } = {},
 ): Promise<LampType> {
-  return LampType.create(
-    {
-      organisationId,
-      ...toColumns(input),
-      presetKey: opts.presetKey ?? null,
-      createdById: userId,
-      updatedById: userId,
-    },
-    { transaction: opts.transaction },
+  return sameNameIsConflict(() =>
+    LampType.create(
+      {
+        organisationId,
+        ...toColumns(input),
+        presetKey: opts.presetKey ?? null,
+        createdById: userId,
+        updatedById: userId,
+      },
+      { transaction: opts.transaction },
+    ),
   );
 }
 
@@ -65,6 +68,28 @@ export async function updateLampType(row: LampType, patch: LampTypePatch, userId
     sources: current.sources,
     ...patch,
   });
-  await row.update({ ...toColumns(merged), updatedById: userId });
+  await sameNameIsConflict(() => row.update({ ...toColumns(merged), updatedById: userId }));
   return row;
+}
+
+/** Refused (a conflict, `in_use`) while lamps in the lamp log use this type: their history depends on it. */
+export async function deleteLampType(row: LampType): Promise<void> {
+  try {
+    await row.destroy();
+  } catch (e) {
+    if (e instanceof ForeignKeyConstraintError) {
+      throw conflict('Lamps in the lamp log use this lamp type, so it cannot be removed.', 'in_use');
+    }
+    throw e;
+  }
+}
+
+/** Names are unique within an organisation: a second entry of one name is a conflict the person can fix. */
+async function sameNameIsConflict<T>(write: () => Promise<T>): Promise<T> {
+  try {
+    return await write();
+  } catch (e) {
+    if (e instanceof UniqueConstraintError) throw conflict('Another lamp type already has that name.');
+    throw e;
+  }
 }

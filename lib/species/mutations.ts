@@ -79,3 +79,8 @@ export async function updateSheet(
   await row.update({ ...toColumns(merged), updatedById: userId });
   return row;
 }
+
+/** Enclosures name their species in text, so removing a sheet leaves them (and their designs) intact. */
+export async function deleteSheet(row: SpeciesSheet): Promise<void> {
+  await row.destroy();
+}

@@ -1,6 +1,5 @@
-import { UniqueConstraintError } from 'sequelize';
 import { z } from 'zod';
-import { allow, conflict, created, page, pageQuery, route } from '@/lib/api';
+import { allow, created, page, pageQuery, route } from '@/lib/api';
 import { LAMP_TECH_IDS } from '@/simulation';
 import { idSchema } from '@/lib/api/schemas';
 import { lampTypeInputSchema } from '@/lib/lamp-types/schema';
@@ -29,11 +28,6 @@ export const POST = route({
   handler: async ({ body, user }) => {
     const { organisationId, ...input } = body;
     allow(user, 'create', { kind: 'lamp-type', organisationId }, 'That organisation');
-    try {
-      return created(toDto(await createLampType(organisationId, input, user.id)));
-    } catch (e) {
-      if (e instanceof UniqueConstraintError) throw conflict('Another lamp type already has that name.');
-      throw e;
-    }
+    return created(toDto(await createLampType(organisationId, input, user.id)));
   },
 });

@@ -1,7 +1,7 @@
 import { forbidden, route } from '@/lib/api';
 import { loadOwned, type EnclosureWithKeeper } from '@/lib/access';
 import { enclosureJson } from '@/lib/enclosures/queries';
-import { updateEnclosure } from '@/lib/enclosures/mutations';
+import { deleteEnclosure, updateEnclosure } from '@/lib/enclosures/mutations';
 import { updateEnclosureBody } from '@/lib/enclosures/schemas';
 import { idParams } from '@/lib/api/schemas';
 import type { CurrentUser } from '@/lib/auth/session-user';
@@ -31,7 +31,7 @@ export const DELETE = route({
   params: idParams,
   handler: async ({ params, user }) => {
     const enclosure = await loadOwned('enclosure', params.id, user, 'delete');
-    await enclosure.destroy();
+    await deleteEnclosure(enclosure);
     return { ok: true, id: params.id };
   },
 });

@@ -1,10 +1,9 @@
-import { ForeignKeyConstraintError, UniqueConstraintError } from 'sequelize';
-import { conflict, json, route } from '@/lib/api';
+import { json, route } from '@/lib/api';
 import { idParams } from '@/lib/api/schemas';
 import { loadOwned } from '@/lib/access';
 import { lampTypePatchSchema } from '@/lib/lamp-types/schema';
 import { toDto } from '@/lib/lamp-types/queries';
-import { updateLampType } from '@/lib/lamp-types/mutations';
+import { deleteLampType, updateLampType } from '@/lib/lamp-types/mutations';
 
 export const GET = route({
   params: idParams,
@@ -16,12 +15,7 @@ export const PATCH = route({
   body: lampTypePatchSchema,
   handler: async ({ params, body, user }) => {
     const row = await loadOwned('lamp-type', params.id, user, 'update');
-    try {
-      return toDto(await updateLampType(row, body, user.id));
-    } catch (e) {
-      if (e instanceof UniqueConstraintError) throw conflict('Another lamp type already has that name.');
-      throw e;
-    }
+    return toDto(await updateLampType(row, body, user.id));
   },
 });
 
@@ -30,14 +24,7 @@ export const DELETE = route({
   params: idParams,
   handler: async ({ params, user }) => {
     const row = await loadOwned('lamp-type', params.id, user, 'delete');
-    try {
-      await row.destroy();
-    } catch (e) {
-      if (e instanceof ForeignKeyConstraintError) {
-        throw conflict('Lamps in the lamp log use this lamp type, so it cannot be removed.', 'in_use');
-      }
-      throw e;
-    }
+    await deleteLampType(row);
     return json({ ok: true });
   },
 });

@@ -3,7 +3,7 @@ import { idParams } from '@/lib/api/schemas';
 import { loadOwned } from '@/lib/access';
 import { speciesPatchSchema } from '@/lib/species/schema';
 import { toDto } from '@/lib/species/queries';
-import { updateSheet } from '@/lib/species/mutations';
+import { deleteSheet, updateSheet } from '@/lib/species/mutations';
 
 export const GET = route({
   params: idParams,
@@ -25,7 +25,7 @@ export const DELETE = route({
   params: idParams,
   handler: async ({ params, user }) => {
     const row = await loadOwned('species', params.id, user, 'delete');
-    await row.destroy();
+    await deleteSheet(row);
     return json({ ok: true });
   },
 });
