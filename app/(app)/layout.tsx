@@ -37,6 +37,9 @@ export default async function AppLayout({ children }: { children: ReactNode }) {
       ? [{ href: '/members', label: 'Members' }]
       : []),
     ...(can(user, 'read', { kind: 'jobs', organisationId: orgId }) ? [{ href: '/jobs', label: 'Jobs' }] : []),
+    ...(membership && can(user, 'update', { kind: 'organisation', id: orgId })
+      ? [{ href: '/organisation', label: 'Settings' }]
+      : []),
     ...(mailViewerEnabled() && can(user, 'read', { kind: 'mail', organisationId: orgId })
       ? [{ href: '/mail', label: 'Mail (dev)' }]
       : []),

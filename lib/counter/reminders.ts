@@ -5,7 +5,8 @@ import { runJob, type Job, type JobContext } from '@/lib/jobs/runner';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
 import type { Mail } from '@/lib/mail';
 import { deliverForJob } from '@/lib/reminders/run';
-import { CounterLamp, CounterReading, Customer, LampType, MailMessage, Organisation } from '@/models';
+import { organisationContact } from '@/lib/organisations/queries';
+import { CounterLamp, CounterReading, Customer, LampType, MailMessage } from '@/models';
 import { COUNTER_CAUTIONS } from './assess';
 import { unsubscribeUrl } from './slip';
 
@@ -34,6 +35,8 @@ export type CounterReminderOptions = { today?: string; send?: (mail: Mail) => Pr
 
 export function composeCounterReminder(input: {
   shop: string;
+  /** How to reach the shop, when its owner set it. */
+  contact?: string | null;
   customerName: string;
   lampName: string;
   testedOn: string;
@@ -53,6 +56,7 @@ export function composeCounterReminder(input: {
     ...COUNTER_CAUTIONS.map((c) => `- ${c}`),
     '',
     input.shop,
+    ...(input.contact ? [input.contact] : []),
     '',
     `To stop e-mails about your lamp tests from ${input.shop}, open this link (no sign-in needed): ${input.unsubscribeUrl}`,
   ];
@@ -88,7 +92,7 @@ export async function enqueueCounterReminder(
   customerId: number,
   lamp: Pick<CounterLamp, 'id' | 'organisationId' | 'label'> & { typeName: string },
   reading: Pick<CounterReading, 'takenAt' | 'testAgainOn'>,
-  shop: string,
+  shop: { name: string; contact: string | null },
   today: string,
 ): Promise<MailMessage | null> {
   const sequelize = getSequelize();
@@ -98,7 +102,8 @@ export async function enqueueCounterReminder(
       const customer = await Customer.findByPk(customerId, { transaction, lock: transaction.LOCK.UPDATE });
       if (!customer?.email || !customer.reminderConsentAt) return null;
       const { subject, text } = composeCounterReminder({
-        shop,
+        shop: shop.name,
+        contact: shop.contact,
         customerName: customer.name,
         lampName: lamp.label ? `${lamp.label}, ${lamp.typeName}` : lamp.typeName,
         testedOn: reading.takenAt.toISOString().slice(0, 10),
@@ -130,7 +135,7 @@ export async function counterReminderWork(ctx: JobContext, opts: CounterReminder
   const today = opts.today ?? todayIso();
   const from = addDays(today, -STALE_AFTER_DAYS);
   const until = addDays(today, REMIND_DAYS_BEFORE);
-  const shops = new Map<number, string>();
+  const shops = new Map<number, { name: string; contact: string | null }>();
   const types = new Map<number, string>();
 
   // Customers who may be written to, a batch at a time by primary key; then their lamps and the latest
@@ -160,7 +165,8 @@ export async function counterReminderWork(ctx: JobContext, opts: CounterReminder
     });
     ctx.count('customer lamps checked', lamps.length);
     for (const id of new Set(due.map((l) => l.organisationId).filter((o) => !shops.has(o)))) {
-      shops.set(id, (await Organisation.findByPk(id, { attributes: ['name'] }))?.name ?? 'The shop');
+      const shop = await organisationContact(id);
+      shops.set(id, { name: shop?.name ?? 'The shop', contact: shop?.line ?? null });
     }
     for (const id of new Set(due.map((l) => l.lampTypeId).filter((t) => !types.has(t)))) {
       types.set(id, (await LampType.findByPk(id, { attributes: ['name'] }))?.name ?? 'UV lamp');

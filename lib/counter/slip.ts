@@ -4,7 +4,7 @@ import { UniqueConstraintError } from 'sequelize';
 
 import { deliverSoon } from '@/lib/auth/mail-soon';
 import { config } from '@/lib/config';
-import { isExampleData, organisationName } from '@/lib/organisations/queries';
+import { isExampleData, organisationContact } from '@/lib/organisations/queries';
 import { CounterReading, Customer, MailMessage, type CounterLamp } from '@/models';
 import type { CounterLampView } from './queries';
 import { unsubscribeToken } from '@/lib/customers/unsubscribe-token';
@@ -30,10 +30,16 @@ export async function slipContentOf(
   if (!view.answer || view.readings.length === 0)
     throw invalid('reading', 'This lamp has no reading to report.');
   const [shop, exampleData] = await Promise.all([
-    organisationName(view.organisationId),
+    organisationContact(view.organisationId),
     isExampleData(view.organisationId),
   ]);
-  return slipContent({ shop: shop ?? 'The shop', customerName, lamp: view, exampleData });
+  return slipContent({
+    shop: shop?.name ?? 'The shop',
+    contact: shop?.line ?? null,
+    customerName,
+    lamp: view,
+    exampleData,
+  });
 }
 
 /** The name of the lamp's customer, or null for a lamp kept without one (a walk-in). */

@@ -6,6 +6,7 @@ import { endAllSessions } from '@/lib/account/mutations';
 import { getSequelize } from '@/lib/db';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { Membership, Organisation, User, type Role } from '@/models';
+import { contactLine, type OrganisationContact } from './schemas';
 import { memberJson, type MemberRow } from './queries';
 
 /** Changes to an organisation and its members. Access is checked by the caller (a route's allow()). */
@@ -73,4 +74,17 @@ function assertAnotherOwner(owners: Membership[]) {
       'last_owner',
     );
   }
+}
+
+/** Changes how customers reach the organisation (what the patch names); returns the contact as stored. */
+export async function updateOrganisationContact(id: number, patch: Partial<OrganisationContact>) {
+  const org = await Organisation.findByPk(id);
+  if (!org) throw notFound('That organisation');
+  await org.update(patch);
+  const contact: OrganisationContact = {
+    contactPhone: org.contactPhone ?? null,
+    contactEmail: org.contactEmail ?? null,
+    contactAddress: org.contactAddress ?? null,
+  };
+  return { ...contact, line: contactLine(contact) };
 }

@@ -194,9 +194,15 @@ describe('pages check access themselves', () => {
     const keeper = DEMO_SHOP.people.find((p) => p.role === 'keeper')!;
     const cookie = await signInCookie(keeper.email, DEMO_PASSWORDS.keeper);
     const statuses = await Promise.all(
-      ['/keepers', '/members', '/customers', '/customers/new', '/counter', '/counter/dashboard'].map(
-        async (p) => `${p} → ${(await page(p, cookie)).status}`,
-      ),
+      [
+        '/keepers',
+        '/members',
+        '/customers',
+        '/customers/new',
+        '/counter',
+        '/counter/dashboard',
+        '/organisation',
+      ].map(async (p) => `${p} → ${(await page(p, cookie)).status}`),
     );
     expect(statuses).toEqual([
       '/keepers → 404',
@@ -205,6 +211,7 @@ describe('pages check access themselves', () => {
       '/customers/new → 404',
       '/counter → 404',
       '/counter/dashboard → 404',
+      '/organisation → 404',
     ]);
   });
 });

@@ -134,6 +134,7 @@ export const REQUESTS: Record<string, RequestSpec> = {
   'PATCH /api/lamps/[id]': { body: () => ({ label: 'Renamed lamp' }) },
   'DELETE /api/lamps/[id]': {},
   'GET /api/lamps': { query: (w) => `organisationId=${w.orgA}` },
+  'PATCH /api/organisations/[id]': { body: () => ({ contactPhone: '01234 567890' }) },
   'GET /api/organisations/[id]/jobs': {},
   'GET /api/organisations/[id]/members': {},
   'PATCH /api/organisations/[id]/members': { body: (w) => ({ userId: w.keeper1, role: 'staff' }) },
