@@ -1,7 +1,7 @@
 import 'server-only';
 import { Op, fn, col, where as sqlWhere } from 'sequelize';
 import { afterCursor } from '@/lib/api/pagination';
-import { runEngineTask, type RunOptions } from '@/lib/engine-pool';
+import { runEngineTask, type EngineTaskResult, type RunOptions } from '@/lib/engine-pool';
 import { toDto as lampTypeDto } from '@/lib/lamp-types/queries';
 import type { LampTypeDto } from '@/lib/lamp-types/schema';
 import { Enclosure, Lamp, LampType, Reading, SpeciesSheet, User } from '@/models';
@@ -396,6 +396,17 @@ export function readingJson(r: Reading & { takenBy?: User | null }) {
   };
 }
 
+type Fitted = EngineTaskResult<'lampChart'>;
+
+/**
+ * A lamp's fitted chart for one version of what it is computed from and one day: everything it depends
+ * on (its readings and settings, its lamp type, its enclosure's species and sheet) adds one to
+ * `outlook_version` when it changes (models/outlook-invalidation.ts), so a page viewed again that day,
+ * unchanged, reuses the fit instead of queueing another on the engine's threads. Bounded; per process.
+ */
+const charts = new Map<string, Fitted>();
+const CHART_CACHE_SIZE = 500;
+
 /**
  * One lamp with its readings and what the chart draws: points at 30 cm, the fitted curve and its band.
  * The fit runs on an engine worker thread: its cost grows with the lamp's readings, and a page view must
@@ -405,15 +416,19 @@ export async function lampDetail(lamp: Lamp, today: string, options?: RunOptions
   const [loaded] = await loadFor([lamp]);
   const { type, enclosure, readings } = loaded!;
   const species = (await speciesForEnclosures([enclosure])).get(enclosure.id)!;
-  const {
-    outlook: o,
-    curve,
-    needAt30,
-  } = await runEngineTask(
-    'lampChart',
-    { facts: lampFacts(lamp, type), readings: readings.map(readingFacts), need: species.need, today },
-    options,
-  );
+  const key = `${lamp.id}:${lamp.outlookVersion}:${today}`;
+  let fitted = charts.get(key);
+  if (!fitted) {
+    fitted = await runEngineTask(
+      'lampChart',
+      { facts: lampFacts(lamp, type), readings: readings.map(readingFacts), need: species.need, today },
+      options,
+    );
+    charts.set(key, fitted);
+    // Oldest first out: a Map keeps its insertion order.
+    if (charts.size > CHART_CACHE_SIZE) charts.delete(charts.keys().next().value!);
+  }
+  const { outlook: o, curve, needAt30 } = fitted;
   return {
     lamp: summaryJson(lamp, type, enclosure, outlookJson(species, o), today),
     readings: readings.map(readingJson),

@@ -478,5 +478,20 @@ describe('calibration', () => {
     expect(target.calibration).toEqual(
       JSON.parse(JSON.stringify(calibrate(facts, readings, target.object, todayIso()))),
     );
+
+    // Viewed again unchanged the same day, the lamp reuses its fit; a new reading makes a new one.
+    const view = () =>
+      call(lampRoute.GET, { path: `/api/lamps/${lamp.id}`, params: { id: lamp.id }, as: w.keeper });
+    const again = await view();
+    expect(tasks()).toBe(before + 2);
+    expect(again.body.chart).toEqual(detail.body.chart);
+    const takenAt = new Date(Date.UTC(2025, 0, 250, 12)).toISOString();
+    expect((await addReading(w, lamp.id, { takenAt, distance: 30, value: 40, unit: 'uvb' })).status).toBe(
+      201,
+    );
+    const after = await view();
+    expect(tasks()).toBeGreaterThan(before + 2);
+    expect(after.body.chart.points).toHaveLength(detail.body.chart.points.length + 1);
+    expect(after.body.chart.curve).not.toEqual(detail.body.chart.curve);
   });
 });

@@ -36,9 +36,12 @@ export default async function LampPage({ params }: { params: Promise<{ id: strin
   // Someone else's lamp looks exactly like a missing one.
   if (!found) notFound();
   const { lamp, canEdit, resource } = found;
-  const detail = await lampDetail(lamp, todayIso());
-  const designLamps = await designLampsOf(lamp.enclosureId);
-  const example = await isExampleData(resource.organisationId);
+  const [detail, designLamps, example, zone] = await Promise.all([
+    lampDetail(lamp, todayIso()),
+    designLampsOf(lamp.enclosureId),
+    isExampleData(resource.organisationId),
+    viewerZone(),
+  ]);
   const s = detail.lamp;
   const lastMeter = [...detail.readings].reverse().find((r) => r.meter)?.meter ?? null;
   const lastSetUp = [...detail.readings].reverse().find((r) => r.through !== 'not-recorded');
@@ -79,7 +82,7 @@ export default async function LampPage({ params }: { params: Promise<{ id: strin
               chart={detail.chart}
               fallsBelowOn={s.fallsBelowOn}
               title={`Output of ${s.label} over time`}
-              zone={await viewerZone()}
+              zone={zone}
             />
           ) : (
             <p className="rounded-lg border border-dashed border-basalt-300 bg-basalt-50 p-6 text-body text-basalt-600">
