@@ -8,11 +8,13 @@ import {
   Customer,
   Design,
   Enclosure,
+  Invitation,
   Lamp,
   LampType,
   Reading,
   ShareLink,
   SpeciesSheet,
+  Upload,
   User,
   Variant,
 } from '@/models';
@@ -23,9 +25,15 @@ import {
  * may see it but not change it gets "forbidden". Domain errors: the route pipeline answers them 404 and
  * 403, a page with its 404.
  */
-export function allow(user: SessionUser, action: Action, resource: Resource, what = 'That'): void {
+export function allow(
+  user: SessionUser,
+  action: Action,
+  resource: Resource,
+  what = 'That',
+  refusal?: string,
+): void {
   if (can(user, action, resource)) return;
-  if (action !== 'read' && can(user, 'read', resource)) throw forbidden();
+  if (action !== 'read' && can(user, 'read', resource)) throw forbidden(refusal);
   throw notFound(what);
 }
 
@@ -35,6 +43,7 @@ export type VariantWithOwner = Variant & { design: DesignWithEnclosure };
 export type ShareWithOwner = ShareLink & { variant: VariantWithOwner };
 export type LampWithEnclosure = Lamp & { enclosure: Enclosure };
 export type ReadingWithLamp = Reading & { lamp: LampWithEnclosure };
+export type UploadWithEnclosure = Upload & { enclosure: Enclosure | null };
 
 /** The record each kind loads as, with what its ownership is read from. */
 type Owned = {
@@ -50,6 +59,8 @@ type Owned = {
   'lamp-type-figures': LampType;
   customer: Customer;
   'counter-lamp': CounterLamp;
+  invitation: Invitation;
+  upload: UploadWithEnclosure;
 };
 export type OwnedKind = keyof Owned;
 export type OwnedRecord<K extends OwnedKind> = Owned[K];
@@ -60,6 +71,8 @@ type KindRule<R> = {
   load: (id: number) => Promise<R | null>;
   /** What `can` needs: always read from the stored row (or the enclosure above it), never from the client. */
   resource: (record: R) => Resource;
+  /** What "forbidden" says, when it says more than the usual. */
+  refusal?: string;
 };
 
 const withEnclosure: Includeable = { model: Enclosure, as: 'enclosure', required: true };
@@ -140,6 +153,26 @@ const KINDS: { [K in OwnedKind]: KindRule<Owned[K]> } = {
     load: (id) => CounterLamp.findByPk(id),
     resource: (l) => ({ kind: 'customer', organisationId: l.organisationId }),
   },
+  invitation: {
+    what: 'That invitation',
+    load: (id) => Invitation.findByPk(id),
+    // The role it grants: staff may withdraw an invitation of a keeper, not of staff or an owner.
+    resource: (i) => ({ kind: 'invitation', organisationId: i.organisationId, role: i.role }),
+  },
+  upload: {
+    what: 'The file',
+    load: (id) =>
+      Upload.findByPk(id, {
+        include: [{ model: Enclosure, as: 'enclosure', required: false }],
+      }) as Promise<UploadWithEnclosure | null>,
+    // A file filed under an enclosure goes with it; one no longer filed (its enclosure was deleted) is its
+    // uploader's and the organisation's owners' and staff's.
+    resource: (u) =>
+      u.enclosure
+        ? inEnclosure('enclosure')(u.enclosure)
+        : { kind: 'upload', organisationId: u.organisationId, uploaderId: u.ownerId },
+    refusal: 'Only the person who uploaded it, or an owner, can delete this file.',
+  },
 };
 
 const isId = (id: number) => Number.isSafeInteger(id) && id > 0;
@@ -162,7 +195,7 @@ export async function loadOwned<K extends OwnedKind>(
   const rule = KINDS[kind] as KindRule<Owned[K]>;
   const record = isId(id) ? await rule.load(id) : null;
   if (!record) throw notFound(rule.what);
-  allow(user, action, rule.resource(record), rule.what);
+  allow(user, action, rule.resource(record), rule.what, rule.refusal);
   return record;
 }
 

@@ -1,12 +1,12 @@
 import 'server-only';
-import { DomainError, conflict, notFound } from '@/lib/errors';
+import { DomainError, conflict } from '@/lib/errors';
 import { createHash, randomBytes } from 'node:crypto';
 import { Op } from 'sequelize';
 import { config } from '@/lib/config';
 import { sendMail } from '@/lib/mail';
 
 import { afterCursor } from '@/lib/api/pagination';
-import { allow } from '@/lib/api/route';
+import { loadOwned } from '@/lib/access';
 import type { CurrentUser } from './session-user';
 import { Invitation, Membership, Organisation, User, type Role } from '@/models';
 import { logger } from '@/lib/log';
@@ -133,14 +133,7 @@ export async function pendingInvitations(organisationId: number, opts: { cursor?
 
 /** Withdraws a pending invitation, if `user` may: its link stops working. */
 export async function revokeInvitation(user: CurrentUser, id: number) {
-  const invitation = await Invitation.findByPk(id);
-  if (!invitation) throw notFound('That invitation');
-  allow(
-    user,
-    'delete',
-    { kind: 'invitation', organisationId: invitation.organisationId, role: invitation.role },
-    'That invitation',
-  );
+  const invitation = await loadOwned('invitation', id, user, 'delete');
   const state = invitationState(invitation);
   if (state !== 'pending') throw conflict(`That invitation is already ${state}.`, `invitation_${state}`);
   invitation.revokedAt = new Date();

@@ -8,7 +8,8 @@ import type { CurrentUser } from '@/lib/auth/session-user';
 import { allLampTypes } from '@/lib/lamp-types/queries';
 import { can } from '@/lib/permissions';
 import type { SpeciesSheetDto } from '@/lib/species/schema';
-import { findSheet, toDto } from '@/lib/species/queries';
+import { toDto } from '@/lib/species/queries';
+import { loadOwned } from '@/lib/access';
 import { toEngineSheet } from '@/lib/species/to-engine';
 import { createDesign } from '@/lib/variants/mutations';
 import { Enclosure } from '@/models';
@@ -50,8 +51,9 @@ async function authorised(user: CurrentUser, input: GuidedStartInput) {
   if (!can(user, 'create', { kind: 'enclosure', organisationId, keeperId })) {
     throw forbidden('You can only start enclosures of your own.');
   }
-  const row = await findSheet(input.speciesId);
-  if (!row || row.organisationId !== organisationId) throw notFound('That species sheet');
+  const row = await loadOwned('species', input.speciesId, user, 'read');
+  // A sheet of another organisation the person belongs to is still not this enclosure's to use.
+  if (row.organisationId !== organisationId) throw notFound('That species sheet');
   return { keeperId, sheet: toDto(row) };
 }
 

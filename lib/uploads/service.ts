@@ -1,10 +1,9 @@
 import 'server-only';
-import { allow } from '@/lib/access';
+import { loadOwned, type UploadWithEnclosure } from '@/lib/access';
 import { DomainError, notFound } from '@/lib/errors';
 import { createHash, randomUUID } from 'node:crypto';
 
 import type { CurrentUser } from '@/lib/auth/session-user';
-import { can } from '@/lib/permissions';
 import { deleteObject, getObject, putObject, StorageUnavailableError } from '@/lib/storage/s3';
 import { Enclosure, Upload } from '@/models';
 import type { Transaction } from 'sequelize';
@@ -169,42 +168,16 @@ async function storeAndRecord(
   }
 }
 
-type UploadWithEnclosure = Upload & { enclosure: Enclosure | null };
-
 /**
- * The upload if this user may see it: a backdrop (or CSV) of an enclosure goes with that enclosure's
- * read rights; anything without an enclosure is its uploader's and the organisation's owners' and staff's.
+ * The upload if this user may see it (`loadOwned`): a backdrop (or CSV) of an enclosure goes with that
+ * enclosure's rights; anything without an enclosure is its uploader's and the organisation's owners' and
+ * staff's, and only its uploader or an owner deletes it.
  */
-export async function uploadFor(
+export const uploadFor = (
   user: CurrentUser,
   id: number,
   action: 'read' | 'delete',
-): Promise<UploadWithEnclosure> {
-  const upload = (await Upload.findByPk(id, {
-    include: [{ model: Enclosure, as: 'enclosure', required: false }],
-  })) as UploadWithEnclosure | null;
-  if (!upload) throw notFound('The file');
-  if (upload.enclosure) {
-    const e = upload.enclosure;
-    allow(
-      user,
-      action === 'read' ? 'read' : 'update',
-      { kind: 'enclosure', organisationId: e.organisationId, keeperId: e.keeperId },
-      'The file',
-    );
-    return upload;
-  }
-  const loose = {
-    kind: 'upload',
-    organisationId: upload.organisationId,
-    uploaderId: upload.ownerId,
-  } as const;
-  if (!can(user, 'read', loose)) throw notFound('The file');
-  if (action === 'delete' && !can(user, 'delete', loose)) {
-    throw new DomainError('forbidden', 'Only the person who uploaded it, or an owner, can delete this file.');
-  }
-  return upload;
-}
+): Promise<UploadWithEnclosure> => loadOwned('upload', id, user, action);
 
 export async function uploadBytes(upload: Upload): Promise<Uint8Array> {
   try {

@@ -11,11 +11,13 @@ import {
   CounterLamp,
   Customer,
   Design,
+  Invitation,
   Lamp,
   LampType,
   Reading,
   ShareLink,
   SpeciesSheet,
+  Upload,
   Variant,
 } from '@/models';
 import { withTestDatabase } from '../helpers/db';
@@ -91,7 +93,29 @@ async function world() {
     hoursPerDay: 12,
     createdById: w.staff.id,
   });
-  const ids: Record<OwnedKind, number> = {
+  const file = (enclosureId: number | null) =>
+    Upload.create({
+      kind: 'backdrop',
+      ownerId: w.keeper.id,
+      organisationId: w.shop.id,
+      enclosureId,
+      storageKey: `test/${enclosureId ?? 'loose'}-${w.shop.id}`,
+      contentType: 'image/png',
+      sizeBytes: 10,
+      sha256: '0'.repeat(64),
+    });
+  const filed = await file(w.enclosure.id);
+  // A file whose enclosure was deleted: its uploader's (the keeper) and the owners' and staff's to see.
+  const loose = await file(null);
+  const invitation = await Invitation.create({
+    organisationId: w.shop.id,
+    email: 'new.staff@example.com',
+    role: 'staff',
+    tokenHash: 'b'.repeat(64),
+    invitedById: w.owner.id,
+    expiresAt: new Date(Date.now() + 86_400_000),
+  });
+  const ids: Record<OwnedKind | 'loose-upload', number> = {
     enclosure: w.enclosure.id,
     design: design.id,
     variant: variant.id,
@@ -103,6 +127,9 @@ async function world() {
     'lamp-type-figures': type.id,
     customer: customer.id,
     'counter-lamp': counterLamp.id,
+    invitation: invitation.id,
+    upload: filed.id,
+    'loose-upload': loose.id,
   };
   return { w, people, ids };
 }
@@ -132,7 +159,23 @@ const SHOP_ONLY: Record<Person, [Outcome, Outcome]> = {
   otherKeeper: ['not_found', 'not_found'],
   outsider: ['not_found', 'not_found'],
 };
-const EXPECTED: Record<OwnedKind, Record<Person, [Outcome, Outcome]>> = {
+// An invitation to join as staff: owners withdraw it; staff see it but bring in only keepers.
+const STAFF_INVITATION: Record<Person, [Outcome, Outcome]> = {
+  owner: ['ok', 'ok'],
+  staff: ['ok', 'forbidden'],
+  keeper: ['not_found', 'not_found'],
+  otherKeeper: ['not_found', 'not_found'],
+  outsider: ['not_found', 'not_found'],
+};
+// The keeper's file of a deleted enclosure: staff see it, only its uploader or an owner change it.
+const LOOSE_UPLOAD: Record<Person, [Outcome, Outcome]> = {
+  owner: ['ok', 'ok'],
+  staff: ['ok', 'forbidden'],
+  keeper: ['ok', 'ok'],
+  otherKeeper: ['not_found', 'not_found'],
+  outsider: ['not_found', 'not_found'],
+};
+const EXPECTED: Record<OwnedKind | 'loose-upload', Record<Person, [Outcome, Outcome]>> = {
   enclosure: IN_ENCLOSURE,
   design: IN_ENCLOSURE,
   variant: IN_ENCLOSURE,
@@ -144,19 +187,23 @@ const EXPECTED: Record<OwnedKind, Record<Person, [Outcome, Outcome]>> = {
   'lamp-type-figures': SHOP_ONLY,
   customer: SHOP_ONLY,
   'counter-lamp': SHOP_ONLY,
+  invitation: STAFF_INVITATION,
+  upload: IN_ENCLOSURE,
+  'loose-upload': LOOSE_UPLOAD,
 };
-const KINDS = Object.keys(EXPECTED) as OwnedKind[];
+const CASES = Object.keys(EXPECTED) as (keyof typeof EXPECTED)[];
+const kindOf = (c: keyof typeof EXPECTED): OwnedKind => (c === 'loose-upload' ? 'upload' : c);
 
 describe('loadOwned', () => {
   it('gives each kind to whom it belongs, "forbidden" to who may only see it, "not found" to the rest', async () => {
     const { people, ids } = await world();
     const got: Record<string, Record<string, [Outcome, Outcome]>> = {};
-    for (const kind of KINDS) {
-      got[kind] = {};
+    for (const c of CASES) {
+      got[c] = {};
       for (const person of Object.keys(people) as Person[]) {
-        got[kind][person] = [
-          await attempt(kind, ids[kind], people[person], 'read'),
-          await attempt(kind, ids[kind], people[person], 'update'),
+        got[c][person] = [
+          await attempt(kindOf(c), ids[c], people[person], 'read'),
+          await attempt(kindOf(c), ids[c], people[person], 'update'),
         ];
       }
     }
@@ -189,6 +236,14 @@ describe('loadOwned', () => {
     }
     await expect(loadOwned('species', 2 ** 31, people.owner, 'read')).rejects.toMatchObject({
       message: 'That species sheet was not found.',
+    });
+  });
+
+  it('says why a file may not be deleted', async () => {
+    const { people, ids } = await world();
+    await expect(loadOwned('upload', ids['loose-upload'], people.staff, 'delete')).rejects.toMatchObject({
+      kind: 'forbidden',
+      message: 'Only the person who uploaded it, or an owner, can delete this file.',
     });
   });
 });
