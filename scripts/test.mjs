@@ -429,7 +429,7 @@ async function browserLane(browserEnv, { appUrl, appPort, browserDb, vitestDone,
   if (!appStarted) return;
   browserAppUp = true;
   const ok = await browserRun(
-    `browser tests, ${BROWSER_WORKERS} files at a time`,
+    `browser tests (${BROWSER_WORKERS} at a time)`,
     'browser',
     opts.only?.has('browser') ? opts.filters : [],
     {
