@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { CustomerForm } from '@/components/customers/CustomerForm';
-import { NewEntryPage } from '@/components/ui/NewEntryPage';
+import { EntryFormPage } from '@/components/ui/EntryFormPage';
 import { mayUseCounter } from '@/lib/customers/access';
 import { currentMembership, requireUser } from '@/lib/session';
 
@@ -13,14 +13,14 @@ export default async function NewCustomerPage() {
   const membership = await currentMembership(user);
   if (!membership || !mayUseCounter(user, membership.organisationId)) notFound();
   return (
-    <NewEntryPage
+    <EntryFormPage
       back={{ href: '/customers', label: 'All customers' }}
       title="New customer"
       lead="A name is enough; e-mail and phone are optional. Reminder e-mails only with the customer's consent."
-      mayCreate
+      allowed
       refusal={{ title: '', body: '' }}
     >
       <CustomerForm organisationId={membership.organisationId} customer={null} />
-    </NewEntryPage>
+    </EntryFormPage>
   );
 }

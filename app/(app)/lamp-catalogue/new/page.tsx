@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { LampTypeForm } from '@/components/catalogue/LampTypeForm';
-import { NewEntryPage } from '@/components/ui/NewEntryPage';
+import { EntryFormPage } from '@/components/ui/EntryFormPage';
 import { can } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
 
@@ -11,17 +11,17 @@ export default async function NewLampTypePage() {
   const membership = await currentMembership(user);
   if (!membership) return null;
   return (
-    <NewEntryPage
+    <EntryFormPage
       back={{ href: '/lamp-catalogue', label: 'Lamp catalogue' }}
       title="Add a lamp type"
       lead="Describe a kind of lamp by its technology — never a brand. Start from the technology’s defaults and correct what you know."
-      mayCreate={can(user, 'create', { kind: 'lamp-type', organisationId: membership.organisationId })}
+      allowed={can(user, 'create', { kind: 'lamp-type', organisationId: membership.organisationId })}
       refusal={{
         title: 'Only owners and staff add lamp types',
         body: 'Ask the organisation’s owner or staff to add the lamp you use.',
       }}
     >
       <LampTypeForm organisationId={membership.organisationId} lampType={null} />
-    </NewEntryPage>
+    </EntryFormPage>
   );
 }

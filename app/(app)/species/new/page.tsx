@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { SpeciesForm } from '@/components/species/SpeciesForm';
-import { NewEntryPage } from '@/components/ui/NewEntryPage';
+import { EntryFormPage } from '@/components/ui/EntryFormPage';
 import { can } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
 
@@ -11,17 +11,17 @@ export default async function NewSpeciesPage() {
   const membership = await currentMembership(user);
   if (!membership) return null;
   return (
-    <NewEntryPage
+    <EntryFormPage
       back={{ href: '/species', label: 'All species' }}
       title="New species sheet"
       lead="Give the species’ needs and where each figure comes from. Every figure is checked against the design in the studio."
-      mayCreate={can(user, 'create', { kind: 'species', organisationId: membership.organisationId })}
+      allowed={can(user, 'create', { kind: 'species', organisationId: membership.organisationId })}
       refusal={{
         title: 'Only owners and staff add species sheets',
         body: 'Ask the organisation’s owner or staff to add the species you keep.',
       }}
     >
       <SpeciesForm organisationId={membership.organisationId} sheet={null} />
-    </NewEntryPage>
+    </EntryFormPage>
   );
 }

@@ -4,22 +4,23 @@ import { Notice } from './Notice';
 import { PageHeader } from './PageHeader';
 
 /**
- * The page around a "new entry" form of an organisation catalogue (species sheets, lamp types): a way
- * back to the list, the title and what to give, and the form — or, for someone who may not add entries,
- * who to ask instead.
+ * The page around the form that adds or changes an entry of an organisation catalogue (species sheets,
+ * lamp types): a way back (to the list, or to the entry), the title and what to give, and the form — or,
+ * for someone who may not add or change entries, who to ask instead.
  */
-export function NewEntryPage({
+export function EntryFormPage({
   back,
   title,
   lead,
-  mayCreate,
+  allowed,
   refusal,
   children,
 }: {
   back: { href: string; label: string };
   title: string;
-  lead: string;
-  mayCreate: boolean;
+  lead?: string;
+  /** May this person add (or change) the entry; else they read the refusal. */
+  allowed: boolean;
   refusal: { title: string; body: string };
   children: ReactNode;
 }) {
@@ -27,7 +28,7 @@ export function NewEntryPage({
     <>
       <Breadcrumbs trail={[back]} />
       <PageHeader title={title} lead={lead} />
-      {mayCreate ? (
+      {allowed ? (
         children
       ) : (
         <Notice tone="warning" title={refusal.title}>
