@@ -93,6 +93,10 @@ export class Scratch {
   ti: Float64Array;
   bp: Float64Array;
   g: Float64Array;
+  /** A tube's visible runs in evalCell: where each ends and the shares of UVB and infrared it passes. */
+  rEnd: Float64Array;
+  rU: Float64Array;
+  rI: Float64Array;
   /** Output of evalCell. */
   uv = 0;
   ir = 0;
@@ -104,6 +108,9 @@ export class Scratch {
     this.ti = new Float64Array(c);
     this.bp = new Float64Array(2 * c + 2);
     this.g = new Float64Array(2 * c + 2);
+    this.rEnd = new Float64Array(2 * c + 2);
+    this.rU = new Float64Array(2 * c + 2);
+    this.rI = new Float64Array(2 * c + 2);
   }
 }
 
@@ -302,24 +309,29 @@ export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): 
     s.ir = lamp.irI * (open + s.ti[0]! * hidden) * scale * gi;
     return;
   }
-  // Sweep the visible pieces: breakpoints are the tube ends and every interval end.
+  // Sweep the visible pieces between the tube ends and the interval ends. Every interval lies within
+  // [s1, s2] (clipped above), so only its inner ends are breakpoints and only those need sorting (a
+  // penumbra usually reaches past one end of the tube). Neighbouring pieces passing the same share are
+  // merged into runs, and G is evaluated only at the ends of runs that pass anything: behind overlapping
+  // opaque barriers most breakpoints need no closed form at all.
   const bp = s.bp;
   let m = 0;
-  bp[m++] = s1;
-  bp[m++] = s2;
   for (let c = 0; c < n; c++) {
-    bp[m++] = s.lo[c]!;
-    bp[m++] = s.hi[c]!;
+    const lo = s.lo[c]!;
+    const hi = s.hi[c]!;
+    if (lo > s1) bp[m++] = lo;
+    if (hi < s2) bp[m++] = hi;
   }
   sortPrefix(bp, m);
-  let sumU = 0;
-  let sumI = 0;
-  let gPrev = G(bp[0]! - qx, d);
-  for (let a = 1; a < m; a++) {
-    const x0 = bp[a - 1]!;
+  bp[m++] = s2;
+  const rEnd = s.rEnd;
+  const rU = s.rU;
+  const rI = s.rI;
+  let nr = 0;
+  let x0 = s1;
+  for (let a = 0; a < m; a++) {
     const x1 = bp[a]!;
     if (!(x1 > x0)) continue;
-    const gNext = G(x1 - qx, d);
     const mid = 0.5 * (x0 + x1);
     let pu = 1;
     let pi = 1;
@@ -329,10 +341,35 @@ export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): 
         pi *= s.ti[c]!;
       }
     }
-    const dg = gNext - gPrev;
-    sumU += pu * dg;
-    sumI += pi * dg;
-    gPrev = gNext;
+    if (nr > 0 && rU[nr - 1] === pu && rI[nr - 1] === pi) {
+      rEnd[nr - 1] = x1;
+    } else {
+      rEnd[nr] = x1;
+      rU[nr] = pu;
+      rI[nr] = pi;
+      nr++;
+    }
+    x0 = x1;
+  }
+  let sumU = 0;
+  let sumI = 0;
+  // A run starts where the one before it ends (the first at s1); G at the last end evaluated, if any.
+  x0 = s1;
+  let gAt = NaN;
+  let g0 = 0;
+  for (let r = 0; r < nr; r++) {
+    const x1 = rEnd[r]!;
+    const pu = rU[r]!;
+    const pi = rI[r]!;
+    if (pu !== 0 || pi !== 0) {
+      const ga = x0 === gAt ? g0 : G(x0 - qx, d);
+      const gb = G(x1 - qx, d);
+      sumU += pu * (gb - ga);
+      sumI += pi * (gb - ga);
+      gAt = x1;
+      g0 = gb;
+    }
+    x0 = x1;
   }
   s.uv = lamp.uvI * sumU * scale * gu;
   s.ir = lamp.irI * sumI * scale * gi;

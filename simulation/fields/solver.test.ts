@@ -78,3 +78,100 @@ describe('FieldSolver grid sizes', () => {
     expect(solver.stats.partial).toBe(1);
   });
 });
+
+describe('FieldSolver lamp moves', () => {
+  type Move = { pick: number; dx: number; dy: number; dz: number };
+  const move = fc.record({
+    pick: fc.nat(20),
+    // Whole and fractional cells, sideways far enough to carry a lamp across a barrier's edge.
+    dx: fc.integer({ min: -120, max: 120 }).map((v) => v / 4),
+    dy: fc.integer({ min: -20, max: 20 }).map((v) => v / 4),
+    dz: fc.integer({ min: -20, max: 20 }).map((v) => v / 4),
+  });
+
+  /** The design with one of its lamps moved (the first lamp when there is only one). */
+  function moveLamp(d: Design, m: Move): { design: Design; moved: boolean } {
+    const lamps = d.objects.filter((o) => o.type === 'lamp');
+    if (lamps.length === 0 || (m.dx === 0 && m.dy === 0 && m.dz === 0)) return { design: d, moved: false };
+    const target = lamps[m.pick % lamps.length]!;
+    const objects = d.objects.map((o) =>
+      o === target && o.type === 'lamp'
+        ? { ...o, x: o.x + m.dx, y: o.y + m.dy, z: Math.min(45, Math.max(0, (o.z ?? 22.5) + m.dz)) }
+        : o,
+    );
+    return { design: { ...d, objects }, moved: true };
+  }
+
+  it('recomputes only the moved lamp and equals a fresh computation after each of several moves (property)', () => {
+    fc.assert(
+      fc.property(
+        arbDesign({ maxObjects: 10 }),
+        fc.array(move, { minLength: 1, maxLength: 4 }),
+        (design, moves) => {
+          const solver = new FieldSolver();
+          const opts = { cellCm: 4 };
+          solver.compute(design, opts);
+          let current = design;
+          for (const m of moves) {
+            const { design: next, moved } = moveLamp(current, m);
+            const cached = solver.compute(next, opts);
+            const lamps = next.objects.filter((o) => o.type === 'lamp').length;
+            // A z clamped at the wall may leave the lamp where it was: then nothing is recomputed.
+            if (moved) expect(solver.stats.full).toBeLessThanOrEqual(1);
+            expect(solver.stats.full + solver.stats.cached).toBe(lamps);
+            const fresh = computeFields(next, opts);
+            expect(cached.uvb).toEqual(fresh.uvb);
+            expect(cached.uvi).toEqual(fresh.uvi);
+            expect(cached.tempC).toEqual(fresh.tempC);
+            current = next;
+          }
+        },
+      ),
+      { numRuns: 40 },
+    );
+  });
+
+  it('a bulb dragged across a perch: cells enter and leave its shadow, each step equal to a fresh computation', () => {
+    const base: Design = {
+      format: 'baskwell.design',
+      version: 2,
+      enclosure: { width: 120, height: 60, depth: 60 },
+      objects: [
+        {
+          type: 'lamp',
+          id: 'uv',
+          tech: 'mercury-vapour',
+          form: 'bulb',
+          x: 10,
+          y: 58,
+          uvbAt30: 100,
+          beamDeg: 160,
+        },
+        // A heat lamp without UVB stays put: the UVB at the cell below is the moving bulb's alone.
+        { type: 'lamp', id: 'heat', tech: 'halogen', form: 'bulb', x: 100, y: 58, watts: 50, uvbAt30: 0 },
+        { type: 'perch', id: 'p', x1: 50, y1: 30, x2: 70, y2: 30, thickness: 3 },
+      ],
+    };
+    const solver = new FieldSolver();
+    const opts = { cellCm: 1 };
+    solver.compute(base, opts);
+    // The floor cell (60.5, 2.5) straight below the perch's middle.
+    const below = 2 * 120 + 60;
+    const lit: boolean[] = [];
+    for (const x of [5, 60, 115]) {
+      const d: Design = {
+        ...base,
+        objects: base.objects.map((o) => (o.id === 'uv' && o.type === 'lamp' ? { ...o, x } : o)),
+      };
+      const cached = solver.compute(d, opts);
+      expect(solver.stats).toMatchObject({ full: 1, cached: 1 });
+      const fresh = computeFields(d, opts);
+      expect(cached.uvb).toEqual(fresh.uvb);
+      expect(cached.uvi).toEqual(fresh.uvi);
+      expect(cached.tempC).toEqual(fresh.tempC);
+      lit.push(cached.uvb[below]! > 0);
+    }
+    // Lit from the left, in the perch's shadow with the bulb above it, lit again from the right.
+    expect(lit).toEqual([true, false, true]);
+  });
+});

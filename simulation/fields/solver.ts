@@ -9,17 +9,21 @@ import type { Design } from '../model/schema';
 import { lampUvbFactor } from '../model/resolve';
 import type { Occluder } from '../geometry/occluders';
 import { compileScene, type LampGeom, type Scene } from './scene';
-import { addLamp, fillLamp, refillChanged, Workspace } from './workspace';
+import { fillLamp, refillChanged, sweepLampRow, Workspace } from './workspace';
 import { probeScene, probeSceneByLamp, type LampSamples } from './probe';
-import { airTempC, HEAT_DEFAULTS, surfaceTempC } from './heat';
+import { airTempC, HEAT_DEFAULTS, surfaceTempC, surfaceTempRow } from './heat';
 import { DEFAULT_CELL_CM, gridSize, type FieldGrid, type ProbeResult, type SimOptions } from './types';
 
 interface LampEntry {
   key: string;
   occKeys: string[];
   occluders: Occluder[];
-  uv: Float64Array;
-  ir: Float64Array;
+  /**
+   * The lamp's own fields, in float32 like the results: half the memory a drag sums through on every step.
+   * The one-off path rounds each lamp's values the same way before adding them, so both give the same bits.
+   */
+  uv: Float32Array;
+  ir: Float32Array;
 }
 
 function occluderKey(o: Occluder): string {
@@ -71,7 +75,8 @@ export class FieldSolver {
     const { width, height } = design.enclosure;
     const { nx, ny } = gridSize(width, height, cell);
     const scene = compileScene(design);
-    this.ws.ensure(scene.occluders.length);
+    const ws = this.ws;
+    ws.ensure(scene.occluders.length);
     this.stats.full = this.stats.partial = this.stats.cached = this.stats.cellsEvaluated = 0;
     const cells = nx * ny;
     this.switchGrid(JSON.stringify([nx, ny, cell]));
@@ -147,97 +152,119 @@ export class FieldSolver {
         t.tempC[c] = q > 0 ? surfaceTempC(HEAT_DEFAULTS.absorptance * q, a, HEAT_DEFAULTS.emissivity, hc) : a;
       }
     } else {
-      // The same sums in the same order, a lamp at a time over all cells (tight loops), the radiant sum
-      // kept in tempC until the surface temperatures replace it.
-      const { uvb, uvi, tempC: q } = t;
-      uvb.fill(0);
-      uvi.fill(0);
-      q.fill(0);
-      for (let k = 0; k < n; k++) {
-        const e = used[k]!;
-        const lu = e.uv;
-        const li = e.ir;
-        const a = fu[k]!;
-        const b = fi[k]!;
-        for (let c = 0; c < cells; c++) {
-          const val = lu[c]!;
-          uvb[c] = uvb[c]! + val * a;
-          uvi[c] = uvi[c]! + val * b;
-          q[c] = q[c]! + li[c]!;
-        }
-      }
+      // The same sums in the same order, a row at a time: the row's totals stay in the cache for the
+      // surface temperatures, and the results are written once.
+      ws.ensureRow(nx);
+      const rowU = ws.rowUv;
+      const rowV = ws.rowIr;
+      const rowQ = ws.rowQ;
+      const { absorptance, emissivity } = HEAT_DEFAULTS;
       for (let j = 0; j < ny; j++) {
-        const a = air[j]!;
-        for (let c = j * nx, end = c + nx; c < end; c++) {
-          const qc = q[c]!;
-          q[c] = qc > 0 ? surfaceTempC(HEAT_DEFAULTS.absorptance * qc, a, HEAT_DEFAULTS.emissivity, hc) : a;
+        const base = j * nx;
+        rowU.fill(0, 0, nx);
+        rowV.fill(0, 0, nx);
+        rowQ.fill(0, 0, nx);
+        for (let k = 0; k < n; k++) {
+          const e = used[k]!;
+          const lu = e.uv;
+          const li = e.ir;
+          const a = fu[k]!;
+          const b = fi[k]!;
+          for (let i = 0; i < nx; i++) {
+            const val = lu[base + i]!;
+            rowU[i] = rowU[i]! + val * a;
+            rowV[i] = rowV[i]! + val * b;
+            rowQ[i] = rowQ[i]! + li[base + i]!;
+          }
+        }
+        surfaceTempRow(rowQ, rowQ, 0, nx, air[j]!, absorptance, emissivity, hc);
+        const { uvb, uvi, tempC } = t;
+        for (let i = 0; i < nx; i++) {
+          uvb[base + i] = rowU[i]!;
+          uvi[base + i] = rowV[i]!;
+          tempC[base + i] = rowQ[i]!;
         }
       }
     }
     this.totals = t;
+    // Copies: the caller owns its results (the worker hands their buffers to the page).
     return {
       nx,
       ny,
       cellCm: cell,
       width,
       height,
-      uvb: new Float32Array(t.uvb),
-      uvi: new Float32Array(t.uvi),
-      tempC: new Float32Array(t.tempC),
+      uvb: t.uvb.slice(),
+      uvi: t.uvi.slice(),
+      tempC: t.tempC.slice(),
     };
   }
 
   /**
-   * One-off computation: lamps are computed one after another into two reused buffers and added to the
-   * totals in scene order — the same operations per cell as the cached path, so the same bits.
+   * One-off computation, a row at a time: every lamp's row is evaluated and added to the row's totals in
+   * scene order — the same operations per cell as the cached path, so the same bits — and the row's
+   * surface temperatures follow while its totals are still in the cache. Nothing grid-sized is kept or
+   * allocated besides the results.
    */
   private computeOnce(design: Design, opts: SimOptions): FieldGrid {
     const cell = opts.cellCm ?? DEFAULT_CELL_CM;
     const { width, height } = design.enclosure;
     const { nx, ny } = gridSize(width, height, cell);
     const scene = compileScene(design);
-    this.ws.ensure(scene.occluders.length);
-    this.stats.full = this.stats.partial = this.stats.cached = this.stats.cellsEvaluated = 0;
+    const ws = this.ws;
+    ws.ensure(scene.occluders.length);
+    ws.ensureRow(nx);
+    const lamps = scene.lamps;
+    const n = lamps.length;
+    this.stats.full = n;
+    this.stats.partial = this.stats.cached = this.stats.cellsEvaluated = 0;
     const cells = nx * ny;
     const hc = opts.convection ?? HEAT_DEFAULTS.convection;
-    const { uvb, uvi, ir } = onceTotals(cells);
-    for (const lamp of scene.lamps) {
-      this.stats.full++;
+    const { absorptance, emissivity } = HEAT_DEFAULTS;
+    const fu = new Float64Array(n);
+    const fi = new Float64Array(n);
+    for (let k = 0; k < n; k++) {
+      const lamp = lamps[k]!;
       const f = lampUvbFactor(lamp.lamp, opts.addMonths ?? 0);
-      const fu = lamp.uvI > 0 ? f : 0;
-      const fi = lamp.uvI > 0 ? f * lamp.lamp.uviPerUvb : 0;
-      this.stats.cellsEvaluated += addLamp(
-        this.ws,
-        lamp,
-        scene.occluders,
-        uvb,
-        uvi,
-        ir,
-        fu,
-        fi,
-        nx,
-        ny,
-        cell,
-      );
+      fu[k] = lamp.uvI > 0 ? f : 0;
+      fi[k] = lamp.uvI > 0 ? f * lamp.lamp.uviPerUvb : 0;
     }
-    const tempC = new Float32Array(cells);
+    const uvbOut = new Float32Array(cells);
+    const uviOut = new Float32Array(cells);
+    const tempOut = new Float32Array(cells);
+    const { u: rowU, v: rowV, q: rowQ } = onceRow(nx);
+    let evaluated = 0;
     for (let j = 0; j < ny; j++) {
-      const a = airTempC((j + 0.5) * cell, scene.height, scene.roomC, scene.airRiseK);
-      for (let c = j * nx, end = c + nx; c < end; c++) {
-        const q = ir[c]!;
-        tempC[c] = q > 0 ? surfaceTempC(HEAT_DEFAULTS.absorptance * q, a, HEAT_DEFAULTS.emissivity, hc) : a;
+      rowU.fill(0, 0, nx);
+      rowV.fill(0, 0, nx);
+      rowQ.fill(0, 0, nx);
+      for (let k = 0; k < n; k++) {
+        const count = sweepLampRow(ws, lamps[k]!, scene.occluders, j, nx, cell);
+        if (count === 0) continue;
+        evaluated += count;
+        const ru = ws.rowUv;
+        const ri = ws.rowIr;
+        const a = fu[k]!;
+        const b = fi[k]!;
+        // Rounded to float32 as the cached path stores each lamp's fields.
+        for (let i = ws.i0, end = ws.i1; i <= end; i++) {
+          const val = Math.fround(ru[i]!);
+          rowU[i] = rowU[i]! + val * a;
+          rowV[i] = rowV[i]! + val * b;
+          rowQ[i] = rowQ[i]! + Math.fround(ri[i]!);
+        }
+      }
+      const air = airTempC((j + 0.5) * cell, scene.height, scene.roomC, scene.airRiseK);
+      surfaceTempRow(rowQ, rowQ, 0, nx, air, absorptance, emissivity, hc);
+      const base = j * nx;
+      for (let i = 0; i < nx; i++) {
+        uvbOut[base + i] = rowU[i]!;
+        uviOut[base + i] = rowV[i]!;
+        tempOut[base + i] = rowQ[i]!;
       }
     }
-    return {
-      nx,
-      ny,
-      cellCm: cell,
-      width,
-      height,
-      uvb: new Float32Array(uvb.subarray(0, cells)),
-      uvi: new Float32Array(uvi.subarray(0, cells)),
-      tempC,
-    };
+    this.stats.cellsEvaluated = evaluated;
+    return { nx, ny, cellCm: cell, width, height, uvb: uvbOut, uvi: uviOut, tempC: tempOut };
   }
 
   private switchGrid(key: string) {
@@ -292,8 +319,8 @@ export class FieldSolver {
     const reused = spare.pop();
     const fits = reused !== undefined && reused.uv.length === nx * ny;
     // fillLamp leaves the cells a lamp cannot reach untouched: a reused buffer starts from zero.
-    const uv = fits ? reused.uv.fill(0) : new Float64Array(nx * ny);
-    const ir = fits ? reused.ir.fill(0) : new Float64Array(nx * ny);
+    const uv = fits ? reused.uv.fill(0) : new Float32Array(nx * ny);
+    const ir = fits ? reused.ir.fill(0) : new Float32Array(nx * ny);
     this.stats.cellsEvaluated += fillLamp(this.ws, lamp, scene.occluders, uv, ir, nx, ny, cell);
     return { key, occKeys, occluders: scene.occluders, uv, ir };
   }
@@ -327,29 +354,27 @@ function diffOccluders(old: LampEntry, now: Occluder[], nowKeys: string[]): Occl
   return changed;
 }
 
+/** The results of the last call, already in the float32 they are handed out in. */
 interface Totals {
   key: string;
-  uvb: Float64Array;
-  uvi: Float64Array;
-  tempC: Float64Array;
+  uvb: Float32Array;
+  uvi: Float32Array;
+  tempC: Float32Array;
 }
 
 function newTotals(key: string, cells: number): Totals {
-  return { key, uvb: new Float64Array(cells), uvi: new Float64Array(cells), tempC: new Float64Array(cells) };
+  return { key, uvb: new Float32Array(cells), uvi: new Float32Array(cells), tempC: new Float32Array(cells) };
 }
 
 /**
- * The one-off path's running totals, kept between calls (the computation is synchronous, so one set per
- * thread serves every call) and zeroed for each: a full field then allocates only its results.
+ * The one-off path's row totals, kept between calls (the computation is synchronous, so one set per thread
+ * serves every call): a full field then allocates only its results.
  */
-let once: { uvb: Float64Array; uvi: Float64Array; ir: Float64Array } | null = null;
+let once: { u: Float64Array; v: Float64Array; q: Float64Array } | null = null;
 
-function onceTotals(cells: number) {
-  if (!once || once.uvb.length < cells) {
-    once = { uvb: new Float64Array(cells), uvi: new Float64Array(cells), ir: new Float64Array(cells) };
+function onceRow(nx: number) {
+  if (!once || once.u.length < nx) {
+    once = { u: new Float64Array(nx), v: new Float64Array(nx), q: new Float64Array(nx) };
   }
-  once.uvb.fill(0, 0, cells);
-  once.uvi.fill(0, 0, cells);
-  once.ir.fill(0, 0, cells);
   return once;
 }

@@ -5,6 +5,7 @@
 import type { Occluder } from '../geometry/occluders';
 import type { LampGeom } from './scene';
 import { evalCell, prepareRow, RowData, Scratch, sortPrefix } from './kernel';
+import { tubeG } from '../sources/tube';
 
 export class Workspace {
   row = new RowData(1);
@@ -20,6 +21,11 @@ export class Workspace {
   /** One row's values, filled by sweepRow. */
   rowUv = new Float64Array(1);
   rowIr = new Float64Array(1);
+  /** A third row, for the solver's radiant totals. */
+  rowQ = new Float64Array(1);
+  /** The cells sweepLampRow evaluated. */
+  i0 = 0;
+  i1 = -1;
   private capacity = 0;
 
   /** Make room for rows of nx cells. */
@@ -27,6 +33,7 @@ export class Workspace {
     if (this.rowUv.length >= nx) return;
     this.rowUv = new Float64Array(nx);
     this.rowIr = new Float64Array(nx);
+    this.rowQ = new Float64Array(nx);
   }
 
   /** Make room for rows with up to n barriers. */
@@ -49,8 +56,8 @@ export function fillLamp(
   ws: Workspace,
   lamp: LampGeom,
   occluders: Occluder[],
-  uv: Float64Array,
-  ir: Float64Array,
+  uv: Float32Array | Float64Array,
+  ir: Float32Array | Float64Array,
   nx: number,
   ny: number,
   cell: number,
@@ -61,37 +68,6 @@ export function fillLamp(
     for (let i = i0; i <= i1; i++) {
       uv[base + i] = ru[i]!;
       ir[base + i] = ri[i]!;
-    }
-  });
-}
-
-/**
- * Add a lamp's fields into running totals: UVB times fu, UV Index times fi, radiant flux as is. Cells the
- * lamp cannot reach are left alone, which is what adding its zero would give, so the totals have the same
- * bits as filling the lamp's own fields first and adding those (the cached path).
- */
-export function addLamp(
-  ws: Workspace,
-  lamp: LampGeom,
-  occluders: Occluder[],
-  uvb: Float64Array,
-  uvi: Float64Array,
-  ir: Float64Array,
-  fu: number,
-  fi: number,
-  nx: number,
-  ny: number,
-  cell: number,
-): number {
-  return sweepLamp(ws, lamp, occluders, nx, ny, cell, (base, i0, i1) => {
-    const ru = ws.rowUv;
-    const ri = ws.rowIr;
-    for (let i = i0; i <= i1; i++) {
-      const c = base + i;
-      const v = ru[i]!;
-      uvb[c] = uvb[c]! + v * fu;
-      uvi[c] = uvi[c]! + v * fi;
-      ir[c] = ir[c]! + ri[i]!;
     }
   });
 }
@@ -109,28 +85,47 @@ function sweepLamp(
   cell: number,
   take: (base: number, i0: number, i1: number) => void,
 ): number {
-  const row = ws.row;
-  const s = ws.scratch;
   ws.ensureRow(nx);
   let evaluated = 0;
   for (let j = 0; j < ny; j++) {
-    const qy = (j + 0.5) * cell;
-    if (!prepareRow(lamp, occluders, qy, row, s)) continue;
-    let i0 = 0;
-    let i1 = nx - 1;
-    if (!lamp.tube && Number.isFinite(lamp.beamTan) && lamp.irOut === 0) {
-      // Only cells inside the bulb's beam can be lit (none on a row the beam passes in front of or behind).
-      const half = row.half;
-      if (half < 0) continue;
-      i0 = Math.max(0, Math.floor((lamp.x - half) / cell - 0.5));
-      i1 = Math.min(nx - 1, Math.ceil((lamp.x + half) / cell - 0.5));
-    }
-    if (i1 < i0) continue;
-    sweepRow(ws, lamp, row, i0, i1, cell);
-    take(j * nx, i0, i1);
-    evaluated += i1 - i0 + 1;
+    const n = sweepLampRow(ws, lamp, occluders, j, nx, cell);
+    if (n === 0) continue;
+    take(j * nx, ws.i0, ws.i1);
+    evaluated += n;
   }
   return evaluated;
+}
+
+/**
+ * Evaluates row j of a lamp into ws.rowUv and ws.rowIr (cells ws.i0..ws.i1; the rest of the row gets
+ * nothing from this lamp) and returns the number of cells evaluated, 0 when the lamp cannot light the row.
+ * The caller makes room for nx cells (ws.ensureRow).
+ */
+export function sweepLampRow(
+  ws: Workspace,
+  lamp: LampGeom,
+  occluders: Occluder[],
+  j: number,
+  nx: number,
+  cell: number,
+): number {
+  const row = ws.row;
+  const qy = (j + 0.5) * cell;
+  if (!prepareRow(lamp, occluders, qy, row, ws.scratch)) return 0;
+  let i0 = 0;
+  let i1 = nx - 1;
+  if (!lamp.tube && Number.isFinite(lamp.beamTan) && lamp.irOut === 0) {
+    // Only cells inside the bulb's beam can be lit (none on a row the beam passes in front of or behind).
+    const half = row.half;
+    if (half < 0) return 0;
+    i0 = Math.max(0, Math.floor((lamp.x - half) / cell - 0.5));
+    i1 = Math.min(nx - 1, Math.ceil((lamp.x + half) / cell - 0.5));
+  }
+  if (i1 < i0) return 0;
+  sweepRow(ws, lamp, row, i0, i1, cell);
+  ws.i0 = i0;
+  ws.i1 = i1;
+  return i1 - i0 + 1;
 }
 
 /**
@@ -217,6 +212,11 @@ function sweepRow(ws: Workspace, lamp: LampGeom, row: RowData, i0: number, i1: n
       ri.fill(0, from, to);
       continue;
     }
+    if (na === 0) {
+      // No barrier hides part of the lamp here: the closed form straight, as evalCell would compute it.
+      openRun(lamp, row, from, to, cell, gu, gi, ru, ri);
+      continue;
+    }
     row.nAct = na;
     row.gu0 = gu;
     row.gi0 = gi;
@@ -230,6 +230,58 @@ function sweepRow(ws: Workspace, lamp: LampGeom, row: RowData, i0: number, i1: n
   row.gu0 = 1;
   row.gi0 = 1;
   for (let c = 0; c < n; c++) act[c] = c;
+}
+
+/**
+ * Cells from..to−1 of a row where no barrier hides part of the lamp and those hiding all of it pass gu
+ * (UVB) and gi (infrared): evalCell's arithmetic with no active barrier, in one tight loop per lamp form
+ * (the same operations in the same order, so the same bits).
+ */
+function openRun(
+  lamp: LampGeom,
+  row: RowData,
+  from: number,
+  to: number,
+  cell: number,
+  gu: number,
+  gi: number,
+  ru: Float64Array,
+  ri: Float64Array,
+) {
+  const uvI = lamp.uvI;
+  const irI = lamp.irI;
+  if (lamp.tube) {
+    const d = row.d;
+    const scale = row.scale;
+    const s1 = lamp.s1;
+    const s2 = lamp.s2;
+    for (let i = from; i < to; i++) {
+      const qx = (i + 0.5) * cell;
+      const f = (tubeG(s2 - qx, d) - tubeG(s1 - qx, d)) * scale;
+      ru[i] = uvI * f * gu;
+      ri[i] = irI * f * gi;
+    }
+    return;
+  }
+  const x = lamp.x;
+  const half = row.half;
+  const d2 = row.d2;
+  const h = row.h;
+  const irOut = lamp.irOut;
+  for (let i = from; i < to; i++) {
+    const qx = (i + 0.5) * cell;
+    const inBeam = Math.abs(qx - x) <= half;
+    if (!inBeam && irOut === 0) {
+      ru[i] = 0;
+      ri[i] = 0;
+      continue;
+    }
+    const dx = qx - x;
+    const r2 = d2 + dx * dx;
+    const f = h / (r2 * Math.sqrt(r2));
+    ru[i] = inBeam ? uvI * f * gu : 0;
+    ri[i] = (inBeam ? irI : irOut) * f * gi;
+  }
 }
 
 /** The lamp with transmissions for another list of barriers. */
@@ -253,8 +305,8 @@ export function refillChanged(
   lamp: LampGeom,
   occluders: Occluder[],
   changed: Occluder[],
-  uv: Float64Array,
-  ir: Float64Array,
+  uv: Float32Array | Float64Array,
+  ir: Float32Array | Float64Array,
   dirty: Uint8Array,
   nx: number,
   ny: number,
