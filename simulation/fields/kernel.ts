@@ -236,18 +236,31 @@ export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): 
   const A = row.A;
   const B = row.B;
   const act = row.act;
+  const qa = row.qa;
+  const qb = row.qb;
+  const fa = row.fa;
+  const fb = row.fb;
+  const occ = row.occ;
+  const vStart = row.vStart;
+  const vCount = row.vCount;
+  const tUv = lamp.tUv;
+  const tIr = lamp.tIr;
+  const sLo = s.lo;
+  const sHi = s.hi;
+  const sTu = s.tu;
+  const sTi = s.ti;
   for (let t = 0, nAct = row.nAct; t < nAct; t++) {
     const c = act[t]!;
-    if (qx <= row.qa[c]! || qx >= row.qb[c]!) continue;
-    const k = row.occ[c]!;
-    if (qx > row.fa[c]! && qx < row.fb[c]!) {
-      gu *= lamp.tUv[k]!;
-      gi *= lamp.tIr[k]!;
+    if (qx <= qa[c]! || qx >= qb[c]!) continue;
+    const k = occ[c]!;
+    if (qx > fa[c]! && qx < fb[c]!) {
+      gu *= tUv[k]!;
+      gi *= tIr[k]!;
       if (gu === 0 && gi === 0) return;
       continue;
     }
-    const v0 = row.vStart[c]!;
-    const v1 = v0 + row.vCount[c]!;
+    const v0 = vStart[c]!;
+    const v1 = v0 + vCount[c]!;
     let lo = Infinity;
     let hi = -Infinity;
     for (let v = v0; v < v1; v++) {
@@ -257,21 +270,21 @@ export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): 
     }
     if (!tube) {
       if (lo < s1 && s1 < hi) {
-        gu *= lamp.tUv[k]!;
-        gi *= lamp.tIr[k]!;
+        gu *= tUv[k]!;
+        gi *= tIr[k]!;
       }
     } else {
       if (lo < s1) lo = s1;
       if (hi > s2) hi = s2;
       if (!(hi > lo)) continue;
       if (lo <= s1 && hi >= s2) {
-        gu *= lamp.tUv[k]!;
-        gi *= lamp.tIr[k]!;
+        gu *= tUv[k]!;
+        gi *= tIr[k]!;
       } else {
-        s.lo[n] = lo;
-        s.hi[n] = hi;
-        s.tu[n] = lamp.tUv[k]!;
-        s.ti[n] = lamp.tIr[k]!;
+        sLo[n] = lo;
+        sHi[n] = hi;
+        sTu[n] = tUv[k]!;
+        sTi[n] = tIr[k]!;
         n++;
       }
     }
@@ -297,16 +310,16 @@ export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): 
   if (n === 1) {
     // The most common partial shadow: one hidden piece [lo, hi] inside [s1, s2], whose ends may be the
     // tube's own (then their G is the tube end's).
-    const lo = s.lo[0]!;
-    const hi = s.hi[0]!;
+    const lo = sLo[0]!;
+    const hi = sHi[0]!;
     const g1 = G(s1 - qx, d);
     const g2 = G(s2 - qx, d);
     const gLo = lo > s1 ? G(lo - qx, d) : g1;
     const gHi = hi < s2 ? G(hi - qx, d) : g2;
     const open = gLo - g1 + (g2 - gHi);
     const hidden = gHi - gLo;
-    s.uv = lamp.uvI * (open + s.tu[0]! * hidden) * scale * gu;
-    s.ir = lamp.irI * (open + s.ti[0]! * hidden) * scale * gi;
+    s.uv = lamp.uvI * (open + sTu[0]! * hidden) * scale * gu;
+    s.ir = lamp.irI * (open + sTi[0]! * hidden) * scale * gi;
     return;
   }
   // Sweep the visible pieces between the tube ends and the interval ends. Every interval lies within
@@ -317,8 +330,8 @@ export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): 
   const bp = s.bp;
   let m = 0;
   for (let c = 0; c < n; c++) {
-    const lo = s.lo[c]!;
-    const hi = s.hi[c]!;
+    const lo = sLo[c]!;
+    const hi = sHi[c]!;
     if (lo > s1) bp[m++] = lo;
     if (hi < s2) bp[m++] = hi;
   }
@@ -336,9 +349,9 @@ export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): 
     let pu = 1;
     let pi = 1;
     for (let c = 0; c < n; c++) {
-      if (s.lo[c]! <= mid && mid <= s.hi[c]!) {
-        pu *= s.tu[c]!;
-        pi *= s.ti[c]!;
+      if (sLo[c]! <= mid && mid <= sHi[c]!) {
+        pu *= sTu[c]!;
+        pi *= sTi[c]!;
       }
     }
     if (nr > 0 && rU[nr - 1] === pu && rI[nr - 1] === pi) {

@@ -318,9 +318,9 @@ export class FieldSolver {
     this.stats.full++;
     const reused = spare.pop();
     const fits = reused !== undefined && reused.uv.length === nx * ny;
-    // fillLamp leaves the cells a lamp cannot reach untouched: a reused buffer starts from zero.
-    const uv = fits ? reused.uv.fill(0) : new Float32Array(nx * ny);
-    const ir = fits ? reused.ir.fill(0) : new Float32Array(nx * ny);
+    // fillLamp writes every cell, so a reused buffer needs no clearing.
+    const uv = fits ? reused.uv : new Float32Array(nx * ny);
+    const ir = fits ? reused.ir : new Float32Array(nx * ny);
     this.stats.cellsEvaluated += fillLamp(this.ws, lamp, scene.occluders, uv, ir, nx, ny, cell);
     return { key, occKeys, occluders: scene.occluders, uv, ir };
   }

@@ -51,7 +51,10 @@ export class Workspace {
   }
 }
 
-/** Fill a lamp's new-lamp UVB and radiant fields over the grid; returns the number of cells evaluated. */
+/**
+ * Fill a lamp's new-lamp UVB and radiant fields over the whole grid (zero where it cannot reach, so a
+ * reused buffer needs no clearing first); returns the number of cells evaluated.
+ */
 export function fillLamp(
   ws: Workspace,
   lamp: LampGeom,
@@ -62,36 +65,29 @@ export function fillLamp(
   ny: number,
   cell: number,
 ): number {
-  return sweepLamp(ws, lamp, occluders, nx, ny, cell, (base, i0, i1) => {
+  ws.ensureRow(nx);
+  let evaluated = 0;
+  for (let j = 0; j < ny; j++) {
+    const base = j * nx;
+    const count = sweepLampRow(ws, lamp, occluders, j, nx, cell);
+    if (count === 0) {
+      uv.fill(0, base, base + nx);
+      ir.fill(0, base, base + nx);
+      continue;
+    }
+    evaluated += count;
+    const i0 = ws.i0;
+    const i1 = ws.i1;
+    uv.fill(0, base, base + i0);
+    ir.fill(0, base, base + i0);
     const ru = ws.rowUv;
     const ri = ws.rowIr;
     for (let i = i0; i <= i1; i++) {
       uv[base + i] = ru[i]!;
       ir[base + i] = ri[i]!;
     }
-  });
-}
-
-/**
- * Evaluates every row a lamp can light into the workspace's row buffers and hands each row's cell range
- * to `take(base, i0, i1)`; returns the number of cells evaluated.
- */
-function sweepLamp(
-  ws: Workspace,
-  lamp: LampGeom,
-  occluders: Occluder[],
-  nx: number,
-  ny: number,
-  cell: number,
-  take: (base: number, i0: number, i1: number) => void,
-): number {
-  ws.ensureRow(nx);
-  let evaluated = 0;
-  for (let j = 0; j < ny; j++) {
-    const n = sweepLampRow(ws, lamp, occluders, j, nx, cell);
-    if (n === 0) continue;
-    take(j * nx, ws.i0, ws.i1);
-    evaluated += n;
+    uv.fill(0, base + i1 + 1, base + nx);
+    ir.fill(0, base + i1 + 1, base + nx);
   }
   return evaluated;
 }
