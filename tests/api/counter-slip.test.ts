@@ -2,6 +2,8 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import * as slip from '@/app/api/counter/lamps/[id]/slip/route';
 import * as tests from '@/app/api/counter/tests/route';
 import * as unsubscribe from '@/app/api/unsubscribe/route';
+import UnsubscribePage from '@/app/(auth)/unsubscribe/page';
+import { renderToStaticMarkup } from 'react-dom/server';
 import { settleMail } from '@/lib/auth/mail-soon';
 import { PDFDocument } from 'pdf-lib';
 import { COUNTER_CAUTIONS } from '@/lib/counter/assess';
@@ -42,6 +44,11 @@ async function testedLamp(customer: Record<string, unknown>, home: Record<string
 }
 const sendSlip = (as: User | null, id: number) =>
   call(slip.POST, { method: 'POST', path: `/api/counter/lamps/${id}/slip`, params: { id }, as });
+/** The signed-out page the link lands on, rendered as the server sends it. */
+const unsubscribePage = async (token: string | null) =>
+  renderToStaticMarkup(
+    await UnsubscribePage({ searchParams: Promise.resolve({ token: token ?? undefined }) }),
+  );
 const openLink = (url: string) => {
   const u = new URL(url);
   return call(unsubscribe.GET, { path: `${u.pathname}${u.search}`, as: null });
@@ -65,9 +72,11 @@ describe('the test slip and the unsubscribe link', () => {
     const link = /(http\S+\/api\/unsubscribe\?token=\S+)/.exec(message.body)![1]!;
     const before = (await Customer.findByPk(customerId))!;
     const opened = await openLink(link);
-    expect(opened.status).toBe(200);
-    expect(opened.text).toContain('E-mails stopped');
-    expect(opened.text).not.toContain('jules@example.com');
+    // The link does its work, then sends the person to the page that says so, with the same token.
+    expect(opened.status).toBe(303);
+    const landing = opened.res.headers.get('location')!;
+    expect(landing).toBe(`/unsubscribe?token=${new URL(link).searchParams.get('token')}`);
+    expect(opened.text).toBe('');
     const after = (await Customer.findByPk(customerId))!;
     expect(after.reminderConsentAt).toBeNull();
     expect(after.reminderConsentWithdrawnAt).not.toBeNull();
@@ -78,8 +87,17 @@ describe('the test slip and the unsubscribe link', () => {
       before.phone,
       before.notes,
     ]);
-    // Opening it again is harmless; and without consent no slip goes out.
-    expect((await openLink(link)).status).toBe(200);
+    // The page: the app's look, the shop's name and nothing of the customer.
+    const page = await unsubscribePage(new URL(landing, 'http://x').searchParams.get('token'));
+    expect(page).toContain('<h1 class="mb-3 text-title">E-mails stopped</h1>');
+    expect(page).toContain(`from <strong>${shop.name}</strong>`);
+    for (const secret of ['jules@example.com', 'Jules', '<script', '<form'])
+      expect(page).not.toContain(secret);
+    // Opening it again (the link or the page) is harmless; and without consent no slip goes out.
+    expect((await openLink(link)).status).toBe(303);
+    expect(await unsubscribePage(new URL(landing, 'http://x').searchParams.get('token'))).toContain(
+      'E-mails stopped',
+    );
     const refused = await sendSlip(staff, lampId);
     expect(refused.status).toBe(400);
     expect(refused.body.error.field).toBe('customer.reminderConsent');
@@ -104,6 +122,10 @@ describe('the test slip and the unsubscribe link', () => {
         as: null,
       });
       expect(r.status, token).toBe(404);
+      // The page itself answers the app's "not found" to the same tokens, and changes nothing either.
+      await expect(unsubscribePage(token), token).rejects.toMatchObject({
+        digest: expect.stringContaining('404'),
+      });
     }
     expect((await Customer.findByPk(a.customerId))!.reminderConsentAt).not.toBeNull();
     expect((await Customer.findByPk(b.customerId))!.reminderConsentAt).not.toBeNull();

@@ -4,8 +4,10 @@ import { withdrawConsentByToken } from '@/lib/customers/mutations';
 
 /**
  * The one-click link in a customer's e-mails: stops reminder e-mails without signing in. The signed token
- * is the permission and names one customer and this one purpose; the answer shows no personal data. A
- * token that does not verify answers 404, the same for every such token. Opening it twice is harmless.
+ * is the permission and names one customer and this one purpose. It withdraws the consent here, so the
+ * link does its work even when nothing follows the answer, then sends the person to the small page that
+ * says so (`/unsubscribe`, in the app's look, naming only the shop). A token that does not verify answers
+ * 404, the same for every such token. Opening it twice is harmless.
  */
 export const GET = route({
   auth: false,
@@ -13,13 +15,14 @@ export const GET = route({
   handler: async ({ query }) => {
     const shop = await withdrawConsentByToken(query.token);
     if (shop === null) throw notFound('That link');
-    const html = `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><title>E-mails stopped</title></head><body><main><h1>E-mails stopped</h1><p>You will get no more e-mails about your lamp tests from ${escapeHtml(shop)}. To have them again, ask the shop.</p></main></body></html>`;
-    return new Response(html, {
-      status: 200,
-      headers: { 'Content-Type': 'text/html; charset=utf-8', 'Cache-Control': 'no-store' },
+    return new Response(null, {
+      status: 303,
+      headers: {
+        // Relative, so the answer does not depend on the address the app is reached by.
+        Location: `/unsubscribe?token=${encodeURIComponent(query.token)}`,
+        'Cache-Control': 'no-store',
+        'Referrer-Policy': 'no-referrer',
+      },
     });
   },
 });
-
-const escapeHtml = (s: string) =>
-  s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
