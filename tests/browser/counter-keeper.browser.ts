@@ -45,8 +45,8 @@ describe('a customer linked to their keeper account, on a phone', () => {
       const lamp = (await Lamp.findOne({ where: { enclosureId: enclosure.id, label: 'Top tube' } }))!;
       expect(enclosure.keeperId).toBe(keeper.id);
       const readingsBefore = await Reading.count({ where: { lampId: lamp.id } });
-      const counterLampsBefore = await CounterLamp.count();
-      const lampsBefore = await Lamp.count();
+      // Counted for this customer and this enclosure alone: other journeys run beside this one.
+      const lampsBefore = await Lamp.count({ where: { enclosureId: enclosure.id } });
       const started = new Date();
       cleanup.push(() => Reading.destroy({ where: { lampId: lamp.id, createdAt: { [Op.gte]: started } } }));
 
@@ -87,8 +87,8 @@ describe('a customer linked to their keeper account, on a phone', () => {
       await page.getByText('The reading was added to Top tube in the lamp log.').waitFor();
       await screenshot(page, 'counter-keeper-saved');
       expect(await Reading.count({ where: { lampId: lamp.id } })).toBe(readingsBefore + 1);
-      expect(await CounterLamp.count()).toBe(counterLampsBefore);
-      expect(await Lamp.count()).toBe(lampsBefore);
+      expect(await CounterLamp.count({ where: { customerId: customer.id } })).toBe(0);
+      expect(await Lamp.count({ where: { enclosureId: enclosure.id } })).toBe(lampsBefore);
 
       // Unlinking keeps the reading in the lamp log; the keeper's lamps leave the customer page.
       await page.goto(`/customers/${customer.id}`);
