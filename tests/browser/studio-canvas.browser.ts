@@ -283,6 +283,11 @@ describe('studio canvas: what is drawn (no account)', () => {
     expect(await marked()).toBe(0);
     await page.getByTestId('tab-assess').click();
     await page.getByTestId('species-select').selectOption({ label: 'Bearded dragon' });
+    // The findings shown until the species' own assessment arrives are another list (a busy machine can
+    // take a while): read a finding only from the dragon's, which names the dragon in its basking one.
+    await expect
+      .poll(() => page.getByTestId('finding-hot-spot').textContent(), { timeout: 60_000 })
+      .toContain('Bearded dragon');
     const placed = page.locator('[data-testid^=finding-]:has(button)').first();
     await placed.waitFor({ state: 'visible', timeout: 60_000 });
     const findingId = ((await placed.getAttribute('data-testid')) ?? '').replace(/^finding-/, '');
