@@ -22,7 +22,25 @@ export type FieldIssue = { field: string; message: string };
 
 type Details = { code?: string; field?: string; issues?: FieldIssue[]; retryAfterS?: number };
 
+/**
+ * A mark every domain error carries, registered globally: a production build gives each route its own copy
+ * of this module, and the engine pool (one per process, shared through globalThis) throws errors made by
+ * whichever route's copy started it, so `instanceof` against another copy's class would miss them and a
+ * busy or timed-out engine would answer 500 instead of 503.
+ */
+const BRAND: unique symbol = Symbol.for('baskwell.DomainError');
+
 export class DomainError extends Error {
+  static override [Symbol.hasInstance](value: unknown): boolean {
+    // For DomainError itself, any copy's domain error counts; a subclass keeps the usual prototype test.
+    if (this === DomainError)
+      return (
+        typeof value === 'object' && value !== null && (value as Record<symbol, unknown>)[BRAND] === true
+      );
+    return Function.prototype[Symbol.hasInstance].call(this, value);
+  }
+
+  readonly [BRAND] = true;
   readonly code: string;
   readonly field?: string;
   readonly issues?: FieldIssue[];
