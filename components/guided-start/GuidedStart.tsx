@@ -18,7 +18,7 @@ import {
 } from '@/shared/units';
 import { useLengthUnit, useTempUnit } from '@/components/ui/units';
 import { GUIDED_WALLS } from '@/lib/guided-start/input';
-import type { ProposalView } from '@/lib/guided-start/service';
+import type { ProposalView } from '@/lib/guided-start/queries';
 import type { ActionResult } from '@/app/(app)/enclosures/new/actions';
 import { ProposalSketch } from './ProposalSketch';
 

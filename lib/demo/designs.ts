@@ -9,7 +9,7 @@ import type { LampTypeDto } from '@/lib/lamp-types/schema';
 import { toDto as lampTypeDto } from '@/lib/lamp-types/queries';
 import { toDto as sheetDto } from '@/lib/species/queries';
 import { toEngineSheet } from '@/lib/species/to-engine';
-import { storeBackdrop } from '@/lib/uploads/service';
+import { storeBackdrop } from '@/lib/uploads/mutations';
 import { serializeDesign } from '@/lib/variants/stored-design';
 import { wholeSecond } from '@/lib/variants/time';
 import { newShareToken } from '@/lib/variants/tokens';

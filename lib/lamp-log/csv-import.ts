@@ -2,7 +2,7 @@ import 'server-only';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { getSequelize } from '@/lib/db';
 import { deleteObject } from '@/lib/storage/s3';
-import { storeCsv } from '@/lib/uploads/service';
+import { storeCsv } from '@/lib/uploads/mutations';
 import { Lamp, Reading, type Enclosure, type Upload } from '@/models';
 import { parseReadingsCsv, type CsvResult } from './csv';
 

@@ -3,7 +3,8 @@ import { DomainError } from '@/lib/errors';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { can } from '@/lib/permissions';
 import type { Upload } from '@/models';
-import { backdropsOf, uploadFor } from './service';
+import { uploadFor } from './access';
+import { backdropsOf } from './queries';
 
 /** How many of an enclosure's photos the studio offers (newest first); the lamps page shows 12. */
 export const STUDIO_PHOTO_LIMIT = 24;

@@ -4,7 +4,8 @@ import { idSchema } from '@/lib/api/schemas';
 import { enclosureFor } from '@/lib/enclosures/access';
 import { MAX_IMAGE_BYTES } from '@/lib/uploads/limits';
 import { readRawBody } from '@/lib/uploads/read-body';
-import { storeBackdrop, uploadJson, uploadsOf } from '@/lib/uploads/service';
+import { storeBackdrop } from '@/lib/uploads/mutations';
+import { uploadJson, uploadsOf } from '@/lib/uploads/queries';
 
 /** The uploads of an enclosure (`?enclosureId=&kind=`), newest first. */
 export const GET = route({

@@ -6,7 +6,8 @@ import { DomainError } from '@/lib/errors';
 import { assertSameOriginHeaders } from '@/lib/api/request';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { guidedStartSchema, type GuidedStartInput } from '@/lib/guided-start/input';
-import { createFromGuidedStart, proposeFor, type ProposalView } from '@/lib/guided-start/service';
+import { createFromGuidedStart } from '@/lib/guided-start/mutations';
+import { proposeFor, type ProposalView } from '@/lib/guided-start/queries';
 import { currentUser } from '@/lib/session';
 import { logger } from '@/lib/log';
 

@@ -2,7 +2,9 @@ import { route } from '@/lib/api';
 import { idParams } from '@/lib/api/schemas';
 import { neutraliseCsv } from '@/lib/files/csv-safe';
 import { servedName, servedType, UPLOAD_CSP } from '@/lib/uploads/serve';
-import { deleteUpload, uploadBytes, uploadFor } from '@/lib/uploads/service';
+import { uploadFor } from '@/lib/uploads/access';
+import { deleteUpload } from '@/lib/uploads/mutations';
+import { uploadBytes } from '@/lib/uploads/queries';
 
 /**
  * The file itself, only to people who may see its enclosure. Served with the type found in its content

@@ -17,7 +17,7 @@ import { designLampsOf } from '@/lib/lamp-log/design-lamps';
 import { isExampleData } from '@/lib/organisations/queries';
 import { lampRowsOf } from '@/lib/lamp-log/outlook-store';
 import { lampsOfEnclosure } from '@/lib/lamp-log/store';
-import { backdropsOf, uploadJson } from '@/lib/uploads/service';
+import { backdropsOf, uploadJson } from '@/lib/uploads/queries';
 import { parseId } from '@/lib/api/schemas';
 import { requireUser } from '@/lib/session';
 

@@ -1,18 +1,18 @@
 import 'server-only';
-import { loadOwned, type UploadWithEnclosure } from '@/lib/access';
-import { DomainError, notFound } from '@/lib/errors';
+import { DomainError } from '@/lib/errors';
 import { createHash, randomUUID } from 'node:crypto';
 
 import type { CurrentUser } from '@/lib/auth/session-user';
-import { deleteObject, getObject, putObject, StorageUnavailableError } from '@/lib/storage/s3';
+import { deleteObject, putObject, StorageUnavailableError } from '@/lib/storage/s3';
 import { Enclosure, Upload } from '@/models';
 import type { Transaction } from 'sequelize';
 import { dimensionProblem, imageDimensions } from './dimensions';
 import { InvalidImageError } from './errors';
 import { describeType, sniffImage } from './sniff';
+import { storageUnavailable } from './queries';
 import { stripMetadata } from './strip';
 
-/** Uploaded files: checked by content, stripped of metadata, kept in the object store, served by id. */
+/** Storing uploaded files: checked by content, stripped of metadata, kept in the object store. */
 
 const EXT: Record<string, string> = {
   'image/jpeg': 'jpg',
@@ -22,28 +22,6 @@ const EXT: Record<string, string> = {
 };
 
 export const sha256 = (b: Uint8Array) => createHash('sha256').update(b).digest('hex');
-
-export function storageUnavailable(): DomainError {
-  return new DomainError(
-    'unavailable',
-    'The file store cannot be reached right now. Nothing was saved; try again shortly.',
-    { retryAfterS: 5 },
-  );
-}
-
-export function uploadJson(u: Upload) {
-  return {
-    id: u.id,
-    kind: u.kind,
-    enclosureId: u.enclosureId,
-    contentType: u.contentType,
-    sizeBytes: u.sizeBytes,
-    sha256: u.sha256,
-    originalName: u.originalName,
-    url: `/api/uploads/${u.id}`,
-    createdAt: u.createdAt.toISOString(),
-  };
-}
 
 /** A photo of the real enclosure for the studio's traced backdrop. */
 export async function storeBackdrop(
@@ -91,22 +69,6 @@ export async function storeBackdrop(
     transaction,
   );
 }
-
-/** An enclosure's uploads (of one kind, or all), newest first. The caller has checked that the person may read the enclosure. */
-export async function uploadsOf(
-  enclosureId: number,
-  kind: Upload['kind'] | undefined,
-  limit: number,
-): Promise<Upload[]> {
-  return Upload.findAll({
-    where: { enclosureId, ...(kind ? { kind } : {}) },
-    order: [['id', 'DESC']],
-    limit,
-  });
-}
-
-/** An enclosure's photos, newest first. */
-export const backdropsOf = (enclosureId: number, limit: number) => uploadsOf(enclosureId, 'backdrop', limit);
 
 /** Keeps an imported readings CSV with the readings made from it (for tracing where they came from). */
 export async function storeCsv(
@@ -164,28 +126,6 @@ async function storeAndRecord(
   } catch (e) {
     // No row, no file: do not leave an orphan object behind.
     await deleteObject(key).catch(() => undefined);
-    throw e;
-  }
-}
-
-/**
- * The upload if this user may see it (`loadOwned`): a backdrop (or CSV) of an enclosure goes with that
- * enclosure's rights; anything without an enclosure is its uploader's and the organisation's owners' and
- * staff's, and only its uploader or an owner deletes it.
- */
-export const uploadFor = (
-  user: CurrentUser,
-  id: number,
-  action: 'read' | 'delete',
-): Promise<UploadWithEnclosure> => loadOwned('upload', id, user, action);
-
-export async function uploadBytes(upload: Upload): Promise<Uint8Array> {
-  try {
-    const bytes = await getObject(upload.storageKey);
-    if (!bytes) throw notFound('The file');
-    return bytes;
-  } catch (e) {
-    if (e instanceof StorageUnavailableError) throw storageUnavailable();
     throw e;
   }
 }

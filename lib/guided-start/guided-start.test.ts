@@ -4,7 +4,8 @@ import { parseDesign } from '@/simulation';
 import { Design, Enclosure, SpeciesSheet, Variant, type Organisation, type User } from '@/models';
 import { addMember, createUser, withTestDatabase } from '../../tests/helpers/db';
 import { createWorld } from '../../tests/helpers/world';
-import { createFromGuidedStart, proposeFor } from './service';
+import { createFromGuidedStart } from './mutations';
+import { proposeFor } from './queries';
 
 withTestDatabase();
 

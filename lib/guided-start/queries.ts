@@ -1,21 +1,16 @@
 import 'server-only';
-import { forbidden, invalid, notFound } from '@/lib/errors';
+import { invalid } from '@/lib/errors';
 import type { Assessment, Design } from '@/simulation';
-import { assertKeeperInOrganisation } from '@/lib/enclosures/mutations';
 
 import { runEngineTask } from '@/lib/engine-pool';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { allLampTypes } from '@/lib/lamp-types/queries';
-import { can } from '@/lib/permissions';
 import type { SpeciesSheetDto } from '@/lib/species/schema';
-import { toDto } from '@/lib/species/queries';
-import { loadOwned } from '@/lib/access';
 import { toEngineSheet } from '@/lib/species/to-engine';
-import { createDesign } from '@/lib/variants/mutations';
-import { Enclosure } from '@/models';
 import { explain, type Explanation } from './explain';
 import type { GuidedStartInput } from './input';
 import { blockedMessage } from './blocked';
+import { authorised } from './access';
 import { lampCounts } from './layout';
 
 /**
@@ -43,19 +38,6 @@ export type ProposalView = {
    */
   blocked: string | null;
 };
-
-async function authorised(user: CurrentUser, input: GuidedStartInput) {
-  const organisationId = input.organisationId;
-  if (!can(user, 'read', { kind: 'species', organisationId })) throw notFound('That organisation');
-  const keeperId = input.keeperId ?? user.id;
-  if (!can(user, 'create', { kind: 'enclosure', organisationId, keeperId })) {
-    throw forbidden('You can only start enclosures of your own.');
-  }
-  const row = await loadOwned('species', input.speciesId, user, 'read');
-  // A sheet of another organisation the person belongs to is still not this enclosure's to use.
-  if (row.organisationId !== organisationId) throw notFound('That species sheet');
-  return { keeperId, sheet: toDto(row) };
-}
 
 export async function proposeFor(user: CurrentUser, input: GuidedStartInput): Promise<ProposalView> {
   const { sheet } = await authorised(user, input);
@@ -93,46 +75,4 @@ export async function proposeFor(user: CurrentUser, input: GuidedStartInput): Pr
     },
     blocked: p.harmful.length ? blockedMessage(sheet.commonName, p.harmful) : null,
   };
-}
-
-/** Runs the search again (the server trusts no design from the browser) and saves the result. */
-export async function createFromGuidedStart(
-  user: CurrentUser,
-  input: GuidedStartInput,
-): Promise<{ enclosureId: number; variantId: number }> {
-  const { keeperId } = await authorised(user, input);
-  await assertKeeperInOrganisation(input.organisationId, keeperId);
-  const view = await proposeFor(user, input);
-  if (view.blocked) throw invalid(undefined, view.blocked);
-  const enclosure = await Enclosure.create({
-    organisationId: input.organisationId,
-    keeperId,
-    name: input.name,
-    widthCm: input.widthCm,
-    heightCm: input.heightCm,
-    depthCm: input.depthCm,
-    speciesName: view.sheet.commonName,
-    animalName: input.animalName,
-    notes: null,
-  });
-  try {
-    const { variant } = await createDesign(user, enclosure, {
-      name: 'Guided start',
-      variantName: 'Proposed set-up',
-      design: { ...view.design, notes: notesFor(view) },
-    });
-    return { enclosureId: enclosure.id, variantId: variant.id };
-  } catch (e) {
-    // Never leave an enclosure without the design the person asked for.
-    await enclosure.destroy();
-    throw e;
-  }
-}
-
-function notesFor(view: ProposalView): string {
-  return [
-    `Proposed by the guided start for ${view.sheet.commonName} (${view.sheet.scientificName}).`,
-    ...view.explanation.map((l) => `${l.heading}: ${l.text}`),
-    'Every figure is an estimate: verify with a UV meter and a thermometer before an animal lives with it.',
-  ].join('\n\n');
 }
