@@ -1,16 +1,15 @@
 'use client';
 
-import { useRouter } from 'next/navigation';
 import { useEffect, useRef, useState, type FormEvent } from 'react';
 import Link from '@/components/ui/Link';
 import { ReadingSetupFields } from '@/components/lamp-log/ReadingSetupFields';
-import { fieldError, sendJson } from '@/components/ui/api-client';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
 import { Select } from '@/components/ui/Select';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { button, card, link } from '@/components/ui/styles';
 import { useLengthUnit } from '@/components/ui/units';
+import { useApiMutation } from '@/components/ui/useApiMutation';
 import type { CounterAnswerDto } from '@/lib/counter/queries';
 import { WARM_UP_MINUTES } from '@/shared/reading-setup';
 import { CustomerPicker, type Who } from './CustomerPicker';
@@ -57,7 +56,6 @@ const num = (form: FormData, k: string) => {
  * field changes. Saving keeps the lamp and the reading under the customer (or anonymous, for a walk-in).
  */
 export function CounterScreen({ options }: { options: CounterOptions }) {
-  const router = useRouter();
   const [unit] = useLengthUnit();
   const formRef = useRef<HTMLFormElement>(null);
   const [who, setWho] = useState<Who>(
@@ -67,18 +65,36 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
   );
   const [through, setThrough] = useState('');
   const [ageBy, setAgeBy] = useState<'months' | 'date'>('months');
-  const [answer, setAnswer] = useState<Answer | null>(null);
-  const [asking, setAsking] = useState(false);
-  const [error, setError] = useState<{ field?: string; message: string } | null>(null);
-  const [saving, setSaving] = useState(false);
-  const [saved, setSaved] = useState<Saved | null>(null);
+  // What the form refuses before sending (nothing to save yet); the rest comes from the two mutations.
+  const [refused, setRefused] = useState<string | null>(null);
+  // The answer while the form is filled in: asked again on every change, writes nothing, so the page's
+  // server parts need no refresh. The mutation's state follows its latest call, so a slow answer to an
+  // older form never overwrites a newer one.
+  const assess = useApiMutation<Record<string, unknown>, { answer: Answer }>(
+    (b) => ({ method: 'POST', url: '/api/counter/assess', body: b }),
+    { refresh: false },
+  );
+  const save = useApiMutation<Record<string, unknown>, Saved & { answer: Answer }>((b) => ({
+    method: 'POST',
+    url: '/api/counter/tests',
+    body: b,
+  }));
+  const saved = save.data ?? null;
+  const answer = save.data?.answer ?? assess.data?.answer ?? null;
+  const asking = assess.isPending;
+  // A saved test shows no older complaint; a refused save shows its own until the form changes.
+  const failure = save.isSuccess ? null : (save.error ?? assess.error ?? null);
+  const error = refused
+    ? { message: refused }
+    : failure
+      ? { field: failure.field ?? undefined, message: failure.message }
+      : null;
   // A lamp of the linked keeper's enclosures chosen for an existing customer.
   const [keeperLampId, setKeeperLampId] = useState<number | null>(null);
   const enclosureLampId =
     options.kept?.kind === 'enclosure' ? options.kept.id : options.kept ? null : keeperLampId;
   const known = Boolean(options.kept || enclosureLampId);
   const [changed, setChanged] = useState(0);
-  const asked = useRef(0);
 
   /** The request body from the form, or null while something the answer needs is missing. */
   function body(): Record<string, unknown> | null {
@@ -131,33 +147,19 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
   useEffect(() => {
     if (changed === 0) return;
     const b = body();
-    const ticket = ++asked.current;
-    const timer = setTimeout(async () => {
-      if (!b) return setAnswer(null);
-      setAsking(true);
-      try {
-        const r = await sendJson<{ answer: Answer }>('POST', '/api/counter/assess', b);
-        if (ticket === asked.current) {
-          setAnswer(r.answer);
-          setError(null);
-        }
-      } catch (err) {
-        if (ticket === asked.current) {
-          setAnswer(null);
-          setError(fieldError(err));
-        }
-      } finally {
-        if (ticket === asked.current) setAsking(false);
-      }
+    const timer = setTimeout(() => {
+      setRefused(null);
+      if (b) assess.mutate(b);
+      else assess.reset();
     }, 250);
     return () => clearTimeout(timer);
     // eslint-disable-next-line react-hooks/exhaustive-deps -- the form is read when it changes
   }, [changed, through, ageBy, unit, enclosureLampId]);
 
-  async function save(e: FormEvent) {
+  function submit(e: FormEvent) {
     e.preventDefault();
     const b = body();
-    if (!b) return setError({ message: 'Fill in the lamp and the reading first.' });
+    if (!b) return setRefused('Fill in the lamp and the reading first.');
     const form = new FormData(formRef.current!);
     const customer =
       who.kind === 'new'
@@ -173,18 +175,8 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
           : options.kept?.kind === 'enclosure' && options.kept.customerId
             ? { kind: 'existing', id: options.kept.customerId }
             : { kind: 'walk-in' };
-    setSaving(true);
-    setError(null);
-    try {
-      const r = await sendJson<Saved & { answer: Answer }>('POST', '/api/counter/tests', { ...b, customer });
-      setAnswer(r.answer);
-      setSaved({ lampId: r.lampId, customerId: r.customerId, enclosureLamp: r.enclosureLamp });
-      router.refresh();
-    } catch (err) {
-      setError(fieldError(err));
-    } finally {
-      setSaving(false);
-    }
+    setRefused(null);
+    save.mutate({ ...b, customer });
   }
 
   // The server names a field by its path in the request (`reading.value`, `customer.email`).
@@ -192,12 +184,15 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
     error?.field && ['', 'reading.', 'lamp.', 'customer.'].some((p) => error.field === `${p}${f}`)
       ? error.message
       : null;
-  const touch = () => setChanged((n) => n + 1);
+  const touch = () => {
+    if (save.isError) save.reset();
+    setChanged((n) => n + 1);
+  };
 
   return (
     <form
       ref={formRef}
-      onSubmit={save}
+      onSubmit={submit}
       onInput={touch}
       onChange={touch}
       aria-label="Counter test"
@@ -482,8 +477,12 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
               </label>
             </div>
           )}
-          <button type="submit" className={`${button.primary} min-h-12 w-full`} disabled={saving || !answer}>
-            {saving
+          <button
+            type="submit"
+            className={`${button.primary} min-h-12 w-full`}
+            disabled={save.isPending || !answer}
+          >
+            {save.isPending
               ? 'Saving…'
               : enclosureLampId
                 ? 'Add this reading to the lamp log'

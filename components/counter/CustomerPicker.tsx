@@ -1,7 +1,8 @@
 'use client';
 
 import { useEffect, useState } from 'react';
-import { sendJson } from '@/components/ui/api-client';
+import { useQuery } from '@tanstack/react-query';
+import { apiFetch } from '@/components/ui/api-client';
 import { button, input } from '@/components/ui/styles';
 import type { CustomerDto } from '@/lib/customers/queries';
 
@@ -19,26 +20,24 @@ export function CustomerPicker({
 }) {
   const [finding, setFinding] = useState(false);
   const [q, setQ] = useState('');
-  const [found, setFound] = useState<CustomerDto[] | null>(null);
-  const [failed, setFailed] = useState<string | null>(null);
-
+  // The search asks a moment after the last keystroke, so typing a name does not send every letter.
+  const [needle, setNeedle] = useState('');
   useEffect(() => {
-    const needle = q.trim();
-    if (!finding || needle.length < 2) return;
-    const timer = setTimeout(async () => {
-      try {
-        const r = await sendJson<{ items: CustomerDto[] }>(
-          'GET',
-          `/api/customers?organisationId=${organisationId}&limit=8&q=${encodeURIComponent(needle)}`,
-        );
-        setFound(r.items);
-        setFailed(null);
-      } catch (e) {
-        setFailed(e instanceof Error ? e.message : 'The search failed.');
-      }
-    }, 250);
+    const timer = setTimeout(() => setNeedle(q.trim()), 250);
     return () => clearTimeout(timer);
-  }, [q, finding, organisationId]);
+  }, [q]);
+  const search = useQuery({
+    queryKey: ['customers', organisationId, needle],
+    queryFn: ({ signal }) =>
+      apiFetch<{ items: CustomerDto[] }>(
+        `/api/customers?organisationId=${organisationId}&limit=8&q=${encodeURIComponent(needle)}`,
+        { signal },
+      ),
+    enabled: finding && needle.length >= 2,
+    placeholderData: (previous) => previous,
+  });
+  const found = search.data?.items ?? null;
+  const failed = search.error ? search.error.message || 'The search failed.' : null;
 
   const choice = (active: boolean) => `${active ? button.primary : button.secondary} min-h-11 flex-1 px-2`;
   return (

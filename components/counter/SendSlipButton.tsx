@@ -1,44 +1,38 @@
 'use client';
 
-import { useState } from 'react';
-import { sendJson } from '@/components/ui/api-client';
 import { button } from '@/components/ui/styles';
+import { useApiMutation } from '@/components/ui/useApiMutation';
 
 /** E-mails the latest test's slip to the customer (the server checks consent and sends it once). */
 export function SendSlipButton({ lampId }: { lampId: number }) {
-  const [state, setState] = useState<{ busy: boolean; said: string | null; failed: boolean }>({
-    busy: false,
-    said: null,
-    failed: false,
-  });
-  async function send() {
-    setState({ busy: true, said: null, failed: false });
-    try {
-      const r = await sendJson<{ queued: boolean; to?: string }>('POST', `/api/counter/lamps/${lampId}/slip`);
-      setState({
-        busy: false,
-        said: r.queued ? `The slip is on its way to ${r.to}.` : 'The slip of this test was sent before.',
-        failed: false,
-      });
-    } catch (e) {
-      setState({
-        busy: false,
-        said: e instanceof Error ? e.message : 'The slip could not be sent.',
-        failed: true,
-      });
-    }
-  }
+  // Sending changes nothing the page shows, so its server parts are not re-rendered.
+  const send = useApiMutation<void, { queued: boolean; to?: string }>(
+    () => ({ method: 'POST', url: `/api/counter/lamps/${lampId}/slip` }),
+    { refresh: false },
+  );
+  const said = send.error
+    ? send.error.message || 'The slip could not be sent.'
+    : send.data
+      ? send.data.queued
+        ? `The slip is on its way to ${send.data.to}.`
+        : 'The slip of this test was sent before.'
+      : null;
   return (
     <span className="inline-flex flex-col items-start gap-1">
-      <button type="button" className={button.secondary} onClick={send} disabled={state.busy}>
-        {state.busy ? 'Sending…' : 'E-mail the test slip'}
+      <button
+        type="button"
+        className={button.secondary}
+        onClick={() => send.mutate()}
+        disabled={send.isPending}
+      >
+        {send.isPending ? 'Sending…' : 'E-mail the test slip'}
       </button>
-      {state.said && (
+      {said && (
         <span
-          role={state.failed ? 'alert' : 'status'}
-          className={`text-caption ${state.failed ? 'text-ember-700' : 'text-moss-800'}`}
+          role={send.error ? 'alert' : 'status'}
+          className={`text-caption ${send.error ? 'text-ember-700' : 'text-moss-800'}`}
         >
-          {state.said}
+          {said}
         </span>
       )}
     </span>

@@ -1,12 +1,12 @@
 'use client';
 
 import { useRouter } from 'next/navigation';
-import { useState, type FormEvent } from 'react';
-import { fieldError, sendJson } from '@/components/ui/api-client';
+import type { FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
 import { TextArea } from '@/components/ui/TextArea';
 import { button } from '@/components/ui/styles';
+import { useApiMutation } from '@/components/ui/useApiMutation';
 import type { CustomerDto } from '@/lib/customers/queries';
 
 /** Adds a customer or changes one. Consent to reminder e-mails is a plain yes/no; the server dates it. */
@@ -18,10 +18,18 @@ export function CustomerForm({
   customer: CustomerDto | null;
 }) {
   const router = useRouter();
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<{ field?: string; message: string } | null>(null);
+  const write = useApiMutation<Record<string, unknown>, { customer: CustomerDto }>(
+    (body) =>
+      customer
+        ? { method: 'PATCH', url: `/api/customers/${customer.id}`, body }
+        : { method: 'POST', url: '/api/customers', body: { organisationId, ...body } },
+    { onSuccess: (saved) => router.push(`/customers/${saved.customer.id}`) },
+  );
+  // Still busy once saved: the page is on its way to the customer.
+  const busy = write.isPending || write.isSuccess;
+  const error = write.error;
 
-  async function submit(e: FormEvent<HTMLFormElement>) {
+  function submit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
     const str = (k: string) => String(form.get(k) ?? '').trim();
@@ -32,18 +40,7 @@ export function CustomerForm({
       notes: str('notes') || null,
       reminderConsent: form.get('reminderConsent') === 'on',
     };
-    setBusy(true);
-    setError(null);
-    try {
-      const saved = customer
-        ? await sendJson<{ customer: CustomerDto }>('PATCH', `/api/customers/${customer.id}`, body)
-        : await sendJson<{ customer: CustomerDto }>('POST', '/api/customers', { organisationId, ...body });
-      router.push(`/customers/${saved.customer.id}`);
-      router.refresh();
-    } catch (err) {
-      setError(fieldError(err));
-      setBusy(false);
-    }
+    write.mutate(body);
   }
 
   const err = (f: string) => (error?.field === f ? error.message : null);

@@ -33,12 +33,6 @@ describe('a customer linked to their keeper account, on a phone', () => {
       expect(
         await Membership.count({ where: { organisationId: shop.id, userId: keeper.id, role: 'keeper' } }),
       ).toBe(1);
-      const customer = await Customer.create({
-        organisationId: shop.id,
-        name: 'Dev at the counter (example)',
-        createdById: null,
-      });
-      cleanup.push(() => customer.destroy());
       const enclosure = (await Enclosure.findOne({
         where: { organisationId: shop.id, name: 'Tall mesh cage' },
       }))!;
@@ -56,7 +50,16 @@ describe('a customer linked to their keeper account, on a phone', () => {
       const staff = demoSignIn('staff');
       await signIn(page, staff.email, staff.password);
 
-      await page.goto(`/customers/${customer.id}`);
+      // The customer is added through the form, as the shop would.
+      await page.goto('/customers/new');
+      const newCustomer = page.getByRole('form', { name: 'New customer' });
+      await newCustomer.getByLabel('Name').fill('Dev at the counter (example)');
+      await newCustomer.getByRole('button', { name: 'Add customer' }).tap();
+      await page.waitForURL(/\/customers\/\d+$/);
+      const customer = (await Customer.findByPk(Number(/\/customers\/(\d+)$/.exec(page.url())![1])))!;
+      expect(customer.name).toBe('Dev at the counter (example)');
+      cleanup.push(() => customer.destroy());
+
       const panel = page.getByRole('region', { name: 'Keeper account' });
       await panel.getByLabel('Their keeper account').selectOption(String(keeper.id));
       await panel.getByRole('button', { name: 'Link' }).tap();
@@ -90,15 +93,32 @@ describe('a customer linked to their keeper account, on a phone', () => {
       expect(await CounterLamp.count({ where: { customerId: customer.id } })).toBe(0);
       expect(await Lamp.count({ where: { enclosureId: enclosure.id } })).toBe(lampsBefore);
 
+      // Found by name at the counter instead: the keeper's lamps are offered as "Which lamp?".
+      await page.goto('/counter');
+      const counter = page.getByRole('form', { name: 'Counter test' });
+      await counter.getByRole('radio', { name: 'Find customer' }).tap();
+      await counter.getByLabel('Search customers').fill('Dev at the counter');
+      await counter.getByRole('button', { name: /Dev at the counter \(example\)/ }).tap();
+      await counter.getByRole('radio', { name: 'Top tube · Tall mesh cage' }).tap();
+      expect(await counter.getByLabel('Lamp type').count()).toBe(0);
+      await counter.getByLabel('Between lamp and meter').selectOption('nothing');
+      await counter.getByLabel('Lamp warmed up').selectOption('yes');
+      await counter.getByLabel('Meter value').fill('97');
+      await page.getByRole('region', { name: 'Verdict' }).locator('[data-verdict]').waitFor();
+      await counter.getByRole('button', { name: 'Add this reading to the lamp log' }).tap();
+      await page.getByText('The reading was added to Top tube in the lamp log.').waitFor();
+      expect(await Reading.count({ where: { lampId: lamp.id } })).toBe(readingsBefore + 2);
+      expect(await CounterLamp.count({ where: { customerId: customer.id } })).toBe(0);
+
       // Unlinking keeps the reading in the lamp log; the keeper's lamps leave the customer page.
       await page.goto(`/customers/${customer.id}`);
       await expect
         .poll(() => lamps.innerText().catch(() => ''), eventually)
-        .toMatch(new RegExp(`${readingsBefore + 1} readings in the lamp log`));
+        .toMatch(new RegExp(`${readingsBefore + 2} readings in the lamp log`));
       await panel.getByRole('button', { name: 'Unlink the keeper account' }).tap();
       await panel.getByLabel('Their keeper account').waitFor();
       expect(await lamps.count()).toBe(0);
-      expect(await Reading.count({ where: { lampId: lamp.id } })).toBe(readingsBefore + 1);
+      expect(await Reading.count({ where: { lampId: lamp.id } })).toBe(readingsBefore + 2);
       expect((await customer.reload()).keeperUserId).toBeNull();
     },
   );
