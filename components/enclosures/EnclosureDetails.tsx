@@ -9,12 +9,18 @@ import { useApiMutation } from '@/components/ui/useApiMutation';
 import { formatLengthRounded } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
 import { EnclosureForm, type EnclosureInput } from './EnclosureForm';
-import type { EnclosureView, PersonOption } from './types';
+import type { EnclosureView } from './types';
 
-type Props = { enclosure: EnclosureView; people?: PersonOption[]; canEdit: boolean; canDelete: boolean };
+type Props = {
+  enclosure: EnclosureView;
+  /** Owners and staff see and change the keeper (their organisation's id). */
+  chooseKeeper?: { organisationId: number };
+  canEdit: boolean;
+  canDelete: boolean;
+};
 
 /** An enclosure's properties, with editing in place and a two-step delete. */
-export function EnclosureDetails({ enclosure, people, canEdit, canDelete }: Props) {
+export function EnclosureDetails({ enclosure, chooseKeeper, canEdit, canDelete }: Props) {
   const router = useRouter();
   const [unit] = useLengthUnit();
   const [editing, setEditing] = useState(false);
@@ -42,7 +48,7 @@ export function EnclosureDetails({ enclosure, people, canEdit, canDelete }: Prop
         </h2>
         <EnclosureForm
           initial={enclosure}
-          people={people}
+          chooseKeeper={chooseKeeper}
           submitLabel="Save changes"
           onCancel={() => setEditing(false)}
           onSubmit={save.mutateAsync}
@@ -54,7 +60,7 @@ export function EnclosureDetails({ enclosure, people, canEdit, canDelete }: Prop
   const rows: [string, string][] = [
     ['Animal', enclosure.animalName ?? '—'],
     ['Species', enclosure.speciesName ?? '—'],
-    ...(people ? [['Keeper', enclosure.keeperName ?? 'Former member'] as [string, string]] : []),
+    ...(chooseKeeper ? [['Keeper', enclosure.keeperName ?? 'Former member'] as [string, string]] : []),
     ['Width', `${formatLengthRounded(enclosure.widthCm, unit)}`],
     ['Height', `${formatLengthRounded(enclosure.heightCm, unit)}`],
     ['Depth', `${formatLengthRounded(enclosure.depthCm, unit)}`],

@@ -3,14 +3,14 @@
 import { useState, type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
-import { Select } from '@/components/ui/Select';
 import { TextArea } from '@/components/ui/TextArea';
 import { fieldError } from '@/components/ui/api-client';
 import { button } from '@/components/ui/styles';
 import { ENCLOSURE_MAX_CM, ENCLOSURE_MIN_CM } from '@/shared/enclosure-size';
 import { cmToDisplay, displayToCm } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
-import type { EnclosureView, PersonOption } from './types';
+import { PersonPicker, type PickedPerson } from '@/components/people/PersonPicker';
+import type { EnclosureView } from './types';
 
 export type EnclosureInput = {
   name: string;
@@ -25,8 +25,11 @@ export type EnclosureInput = {
 
 type Props = {
   initial?: EnclosureView;
-  /** Owners and staff pick the keeper; a keeper's enclosures are always their own. */
-  people?: PersonOption[];
+  /**
+   * Owners and staff pick the keeper among the organisation's members, searched as they type; a
+   * keeper's enclosures are always their own.
+   */
+  chooseKeeper?: { organisationId: number };
   submitLabel: string;
   /** Sends the input; a refusal it throws (an ApiClientError) is shown beside the field it names. */
   onSubmit: (input: EnclosureInput) => Promise<unknown>;
@@ -36,8 +39,11 @@ type Props = {
 const round = (v: number) => String(Number(v.toFixed(1)));
 
 /** Create or edit an enclosure. Sizes are typed in the chosen unit and stored in centimetres. */
-export function EnclosureForm({ initial, people, submitLabel, onSubmit, onCancel }: Props) {
+export function EnclosureForm({ initial, chooseKeeper, submitLabel, onSubmit, onCancel }: Props) {
   const [unit] = useLengthUnit();
+  const [keeper, setKeeper] = useState<PickedPerson | null>(
+    initial ? { id: initial.keeperId, name: initial.keeperName ?? 'Former member' } : null,
+  );
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [general, setGeneral] = useState('');
   const [busy, setBusy] = useState(false);
@@ -69,7 +75,9 @@ export function EnclosureForm({ initial, people, submitLabel, onSubmit, onCancel
     try {
       await onSubmit({
         name: text('name'),
-        ...(people ? { keeperId: Number(form.get('keeperId')) } : {}),
+        // Sent when chosen or changed: a new enclosure without one is kept by whoever adds it (the
+        // API's default), and an unchanged keeper (perhaps a former member) is left as it is.
+        ...(chooseKeeper && keeper && keeper.id !== initial?.keeperId ? { keeperId: keeper.id } : {}),
         widthCm: Number(size('widthCm').toFixed(2)),
         heightCm: Number(size('heightCm').toFixed(2)),
         depthCm: Number(size('depthCm').toFixed(2)),
@@ -104,19 +112,17 @@ export function EnclosureForm({ initial, people, submitLabel, onSubmit, onCancel
           error={errors.name}
           placeholder="e.g. Desert vivarium"
         />
-        {people && (
-          <Select
+        {chooseKeeper && (
+          <PersonPicker
             label="Keeper"
-            name="keeperId"
-            defaultValue={initial?.keeperId ?? people[0]?.id}
+            organisationId={chooseKeeper.organisationId}
+            people="members"
+            value={keeper}
+            onChange={setKeeper}
+            clearable={!initial}
+            hint={initial ? undefined : 'Type part of a name or e-mail; leave it empty to keep it yourself.'}
             error={errors.keeperId}
-          >
-            {people.map((p) => (
-              <option key={p.id} value={p.id}>
-                {p.name} ({p.role})
-              </option>
-            ))}
-          </Select>
+          />
         )}
       </div>
       <fieldset>

@@ -4,17 +4,17 @@ import { useState } from 'react';
 import { button, card } from '@/components/ui/styles';
 import { useApiMutation } from '@/components/ui/useApiMutation';
 import { EnclosureForm, type EnclosureInput } from './EnclosureForm';
-import type { PersonOption } from './types';
 
 /** The "New enclosure" button and the form it opens. */
 export function NewEnclosure({
   organisationId,
-  people,
+  chooseKeeper = false,
   startOpen = false,
   variant = 'primary',
 }: {
   organisationId: number;
-  people?: PersonOption[];
+  /** Owners and staff choose the keeper. */
+  chooseKeeper?: boolean;
   startOpen?: boolean;
   /** Secondary where a stronger call to action (the guided start) stands beside it. */
   variant?: 'primary' | 'secondary';
@@ -54,7 +54,7 @@ export function NewEnclosure({
         New enclosure
       </h2>
       <EnclosureForm
-        people={people}
+        chooseKeeper={chooseKeeper ? { organisationId } : undefined}
         submitLabel="Add enclosure"
         onCancel={() => setOpen(false)}
         onSubmit={create.mutateAsync}

@@ -1,6 +1,7 @@
 'use client';
 
-import { useMemo } from 'react';
+import { useMemo, useState } from 'react';
+import { PersonPicker, type PickedPerson } from '@/components/people/PersonPicker';
 import { Select } from '@/components/ui/Select';
 import { ListLoadError, ListPager, ListSearchBox } from '@/components/ui/ServerListParts';
 import { Table } from '@/components/ui/Table';
@@ -18,7 +19,6 @@ import {
 import { STATUS_LABEL, STATUSES } from '@/lib/lamp-log/status';
 import { lampColumns } from './LampTable';
 
-export type PersonOption = { id: number; name: string };
 export type TechOption = { id: string; label: string };
 
 /**
@@ -27,13 +27,16 @@ export type TechOption = { id: string; label: string };
  */
 export function LampLogTable({
   organisationId,
-  keepers,
+  seesKeepers,
+  keeper,
   techs,
   initial,
 }: {
   organisationId: number;
-  /** Staff choose a keeper; null for a keeper, whose list the server narrows to their own. */
-  keepers: PersonOption[] | null;
+  /** Staff choose a keeper (searched as they type); a keeper's list the server narrows to their own. */
+  seesKeepers: boolean;
+  /** The keeper the address filters by, with their name. */
+  keeper: PickedPerson | null;
   techs: TechOption[];
   initial: { view: LampListView; page: LampListPage };
 }) {
@@ -53,6 +56,9 @@ export function LampLogTable({
   const busy = result.isFetching && stale;
   const filters = view.filters ?? {};
   const filtered = Object.keys(filters).some((k) => k !== 'retired' && k !== 'enclosure');
+  const [picked, setPicked] = useState<PickedPerson | null>(keeper);
+  // Back and Forward change the filter without this picker: show nobody rather than a stale name.
+  const shownKeeper = filters.keeper && picked && String(picked.id) === filters.keeper ? picked : null;
   const setFilter = (key: string, value: string) => {
     const next = { ...filters };
     if (value) next[key] = value;
@@ -123,20 +129,20 @@ export function LampLogTable({
             </option>
           ))}
         </Select>
-        {keepers && (
-          <Select
+        {seesKeepers && (
+          <PersonPicker
             label="Keeper"
-            value={filters.keeper ?? ''}
-            onChange={(ev) => setFilter('keeper', ev.target.value)}
-            className="w-48"
-          >
-            <option value="">Anyone</option>
-            {keepers.map((k) => (
-              <option key={k.id} value={String(k.id)}>
-                {k.name}
-              </option>
-            ))}
-          </Select>
+            organisationId={organisationId}
+            people="keepers"
+            value={shownKeeper}
+            clearable
+            placeholder="Anyone"
+            onChange={(p) => {
+              setPicked(p);
+              setFilter('keeper', p ? String(p.id) : '');
+            }}
+            className="w-56"
+          />
         )}
         <label className="flex items-center gap-2 pb-2 text-body text-basalt-700">
           <input

@@ -135,6 +135,20 @@ export const PAGE_LIMIT = 500;
 
 export type MemberView = { userId: number; name: string; email: string; role: Role; joinedAt: string };
 
+/** One member's name (a filter or form showing who it names), or null if not a member in that role. */
+export async function memberName(
+  organisationId: number,
+  userId: number,
+  role?: Role,
+): Promise<{ id: number; name: string; role: Role } | null> {
+  const m = await Membership.findOne({
+    where: { organisationId, userId, ...(role ? { role } : {}) },
+    include: [{ model: User, as: 'user', attributes: ['id', 'name'] }],
+  });
+  const u = (m as (Membership & { user?: User }) | null)?.user;
+  return m && u ? { id: u.id, name: u.name, role: m.role } : null;
+}
+
 export async function memberViews(organisationId: number, role?: Role): Promise<MemberView[]> {
   const rows = await Membership.findAll({
     where: { organisationId, ...(role ? { role } : {}) },

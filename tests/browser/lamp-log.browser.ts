@@ -16,6 +16,51 @@ async function asStaff() {
 }
 
 describe('lamp log', () => {
+  it('filters by a keeper found by typing part of their name, and a new enclosure takes a keeper the same way', async () => {
+    const page = await asStaff();
+    // The list refetches after each choice; a busy machine answers slowly.
+    const slow = { timeout: 60_000 };
+    await page.goto('/lamp-log');
+    const table = page.getByTestId('lamp-table');
+    await table.waitFor();
+    // The page carries no list of people: the picker asks the keepers API as one types.
+    const keeper = page.getByRole('combobox', { name: 'Keeper' });
+    await keeper.fill('wrenf');
+    await page.getByRole('option', { name: /^Tomasz Wrenfield/ }).click();
+    await page.waitForURL((u) => /^\d+$/.test(u.searchParams.get('keeper') ?? ''));
+    expect(await keeper.inputValue()).toBe('Tomasz Wrenfield');
+    await expect
+      .poll(async () => {
+        const rows = await table.locator('tbody tr').allInnerTexts();
+        return rows.length > 0 && rows.every((r) => /Desert vivarium|Gecko tank/.test(r));
+      }, slow)
+      .toBe(true);
+    // Clearing it lists everyone's lamps again.
+    await keeper.fill('');
+    await keeper.blur();
+    await page.waitForURL((u) => !u.searchParams.has('keeper'));
+    await expect.poll(() => table.innerText(), slow).toContain('Tall mesh cage');
+
+    await page.goto('/enclosures');
+    await page.getByRole('button', { name: 'New enclosure' }).click();
+    const form = page.getByRole('region', { name: 'New enclosure' });
+    await form.getByRole('combobox', { name: 'Keeper' }).fill('lindm');
+    await page.getByRole('option', { name: /^Aoife Lindmarr \(keeper\)/ }).click();
+    const name = `Picked keeper tank ${Date.now().toString(36)}`;
+    await form.getByLabel('Name', { exact: true }).fill(name);
+    await form.getByLabel('Width').fill('60');
+    await form.getByLabel('Height').fill('40');
+    await form.getByLabel('Depth').fill('40');
+    await form.getByRole('button', { name: 'Add enclosure' }).click();
+    await page
+      .getByRole('status')
+      .filter({ hasText: `Added “${name}”` })
+      .waitFor();
+    await page.goto(`/enclosures?q=${encodeURIComponent(name)}`);
+    const row = page.getByRole('row').filter({ hasText: name });
+    await expect.poll(() => row.innerText(), slow).toContain('Aoife Lindmarr');
+  }, 300_000);
+
   it('lists the demo lamps, most urgent first, and draws a lamp’s readings with the fitted curve', async () => {
     const page = await asStaff();
     await page.goto('/lamp-log');

@@ -12,7 +12,7 @@ import { button, link } from '@/components/ui/styles';
 import { QueryProvider } from '@/components/ui/QueryProvider';
 import { listEnclosures } from '@/lib/enclosures/queries';
 import { FIRST_HINT_COOKIE, firstDesignHint } from '@/lib/demo/first-hint';
-import { memberViews } from '@/lib/people/queries';
+import { memberName } from '@/lib/people/queries';
 import { listQueryForView, viewFromSearchParams } from '@/lib/enclosures/list-view';
 import { toSearchParams } from '@/lib/list-view';
 import { can, roleIn } from '@/lib/permissions';
@@ -38,17 +38,13 @@ export default async function EnclosuresPage({
   const view = viewFromSearchParams(toSearchParams(params));
   const keeperId = isKeeper ? user.id : keeperFilter;
   const hintDone = (await cookies()).has(FIRST_HINT_COOKIE);
-  const [firstPage, people, hint] = await Promise.all([
+  const [firstPage, filtered, hint] = await Promise.all([
     listEnclosures({ organisationId: orgId, keeperId, ...listQueryForView(view) }),
-    seesAll ? memberViews(orgId) : Promise.resolve(null),
+    // Only the person the address filters by: the new-enclosure form searches people as one types.
+    keeperFilter ? memberName(orgId, keeperFilter) : Promise.resolve(null),
     hintDone ? Promise.resolve(null) : firstDesignHint(user, orgId),
   ]);
-  const peopleOptions = people
-    ?.map((p) => ({ id: p.userId, name: p.name, role: p.role }))
-    .sort(
-      (a, b) => (a.role === 'keeper' ? 0 : 1) - (b.role === 'keeper' ? 0 : 1) || a.name.localeCompare(b.name),
-    );
-  const filteredName = keeperFilter ? people?.find((p) => p.userId === keeperFilter)?.name : undefined;
+  const filteredName = filtered?.name;
 
   return (
     <>
@@ -83,7 +79,7 @@ export default async function EnclosuresPage({
         <Link href="/enclosures/new" className={button.primary}>
           Guided start
         </Link>
-        <NewEnclosure organisationId={orgId} people={peopleOptions} variant="secondary" />
+        <NewEnclosure organisationId={orgId} chooseKeeper={seesAll} variant="secondary" />
       </div>
       {firstPage.total === 0 && !view.q ? (
         <EmptyState

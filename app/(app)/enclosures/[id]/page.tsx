@@ -9,7 +9,6 @@ import { UnitToggle } from '@/components/ui/UnitToggle';
 import { button } from '@/components/ui/styles';
 import { loadOwnedForPage } from '@/lib/access';
 import { enclosureJson } from '@/lib/enclosures/queries';
-import { memberViews } from '@/lib/people/queries';
 import { can } from '@/lib/permissions';
 import { requireUser } from '@/lib/session';
 
@@ -24,9 +23,6 @@ export default async function EnclosurePage({ params }: { params: Promise<{ id: 
   const { canEdit, canDelete } = found;
   const enclosure = enclosureJson(found.record);
   const seesPeople = can(user, 'read', { kind: 'member', organisationId: enclosure.organisationId });
-  const people = seesPeople
-    ? (await memberViews(enclosure.organisationId)).map((p) => ({ id: p.userId, name: p.name, role: p.role }))
-    : undefined;
   const subtitle = [enclosure.animalName, enclosure.speciesName].filter(Boolean).join(' · ');
 
   return (
@@ -46,7 +42,12 @@ export default async function EnclosurePage({ params }: { params: Promise<{ id: 
         }
       />
       <div className="space-y-8">
-        <EnclosureDetails enclosure={enclosure} people={people} canEdit={canEdit} canDelete={canDelete} />
+        <EnclosureDetails
+          enclosure={enclosure}
+          chooseKeeper={seesPeople ? { organisationId: enclosure.organisationId } : undefined}
+          canEdit={canEdit}
+          canDelete={canDelete}
+        />
         <DesignsSection enclosureId={enclosure.id} canEdit={canEdit} />
       </div>
     </>

@@ -9,7 +9,7 @@ import { PageHeader } from '@/components/ui/PageHeader';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { button, link } from '@/components/ui/styles';
 import { filteredEnclosure, lampListQuery, listLamps } from '@/lib/api/lamp-list';
-import { memberViews } from '@/lib/people/queries';
+import { memberName } from '@/lib/people/queries';
 import { lampListView } from '@/lib/lamp-log/list-view';
 import { isExampleData } from '@/lib/organisations/queries';
 import { toSearchParams } from '@/lib/list-view';
@@ -42,9 +42,10 @@ export default async function LampLogPage({
   const query = parsed.success ? parsed.data : lampListQuery.parse({ organisationId: orgId });
   const { keeper, ...rest } = query;
   const keeperId = isKeeper ? user.id : keeper;
-  const [firstPage, keepers, enclosure] = await Promise.all([
+  const [firstPage, keeperShown, enclosure] = await Promise.all([
     listLamps({ ...rest, keeperId }),
-    seesAll ? memberViews(orgId, 'keeper') : Promise.resolve(null),
+    // Only the keeper the address filters by: the filter searches the others as one types.
+    seesAll && keeper ? memberName(orgId, keeper, 'keeper') : Promise.resolve(null),
     query.enclosure ? filteredEnclosure(orgId, query.enclosure, isKeeper ? user.id : undefined) : null,
   ]);
   const { counts } = firstPage;
@@ -110,7 +111,8 @@ export default async function LampLogPage({
           <QueryProvider>
             <LampLogTable
               organisationId={orgId}
-              keepers={keepers?.map((k) => ({ id: k.userId, name: k.name })) ?? null}
+              seesKeepers={seesAll && !isKeeper}
+              keeper={keeperShown}
               techs={techs}
               initial={{ view, page: firstPage }}
             />
