@@ -33,7 +33,7 @@ import { useAutosave } from './persistence/useAutosave';
 import { createAtom } from './state/atom';
 import { pickPrefs, type EnclosurePhotos, type StoredPrefs } from './state/session';
 import { StudioStore } from './state/store';
-import type { Design, StudioSpecies } from './state/types';
+import type { Design, StudioCatalogueType, StudioSpecies } from './state/types';
 import { climberMeshRisks, samePhysics } from '@/simulation';
 import { formatStudioView, STUDIO_VIEW_COOKIE } from '@/shared/designs/studio-view-cookie';
 import type { StudioPicture } from '@/shared/designs/studio-field';
@@ -84,6 +84,8 @@ export interface StudioProps {
   storage?: KeyValueStorage;
   /** The enclosure's photos this user may see, for the backdrop; absent without an enclosure. */
   photos?: EnclosurePhotos;
+  /** The organisation's catalogue types with an adopted measured curve (variant studios only). */
+  catalogueTypes?: StudioCatalogueType[];
   /** The field the server drew for `design`, shown until the engine's first answer (same bands). */
   picture?: (StudioPicture & { design: Design }) | null;
 }
@@ -141,6 +143,7 @@ function StudioEditor({
   readOnly = false,
   storage: storageProp,
   photos,
+  catalogueTypes,
   picture,
 }: StudioProps & { loaded: Loaded }) {
   const storage = useMemo(() => storageProp ?? window.localStorage, [storageProp]);
@@ -152,6 +155,7 @@ function StudioEditor({
           ...readPrefs(storage),
           speciesId: initialSpeciesId ?? (species.length === 1 ? species[0]!.id : null),
           photos: photos ?? null,
+          catalogueTypes: catalogueTypes ?? [],
         },
         { readOnly },
       ),

@@ -12,7 +12,7 @@ import { httpPersistence } from './persistence/http';
 import { localPersistence } from './persistence/local';
 import type { Loaded } from './persistence/types';
 import type { EnclosurePhotos } from './state/session';
-import type { StudioSpecies } from './state/types';
+import type { StudioCatalogueType, StudioSpecies } from './state/types';
 
 const Studio = dynamic(() => import('./Studio'), {
   ssr: false,
@@ -38,6 +38,7 @@ export function StudioLoader({
   initialSpeciesId,
   readOnly,
   photos,
+  catalogueTypes,
   picture,
   nonce,
 }: {
@@ -51,6 +52,8 @@ export function StudioLoader({
   readOnly?: boolean;
   /** The enclosure's backdrop photos this user may see (variant studios only). */
   photos?: EnclosurePhotos;
+  /** The organisation's catalogue types with an adopted measured curve (variant studios only). */
+  catalogueTypes?: StudioCatalogueType[];
   /** The field drawn on the server (the saved design's, or the example's for the scratch studio). */
   picture?: StudioPicture | null;
   /** This response's CSP nonce, for the picture's inline scripts. */
@@ -111,6 +114,7 @@ export function StudioLoader({
             initialSpeciesId={initialSpeciesId}
             readOnly={readOnly}
             photos={source.kind === 'variant' ? photos : undefined}
+            catalogueTypes={source.kind === 'variant' ? catalogueTypes : undefined}
             picture={studioPicture}
           />
         </div>

@@ -30,9 +30,11 @@ export function defaultDecayFor(t: DecaySource, hoursPerDay: number): (days: num
 
 /** Which curve a lamp's ageing follows, in the words the pages show beside the figures. */
 export function ageingSource(t: DecaySource): string {
-  if (t.adoptedCurve && t.adoptedCurve.points.length > 0) {
-    const n = t.adoptedCurve.lamps;
-    return `Ageing: your shop’s measured curve for this type, ${n} lamp${n === 1 ? '' : 's'}.`;
-  }
+  if (t.adoptedCurve && t.adoptedCurve.points.length > 0) return measuredCurveNote(t.adoptedCurve.lamps);
   return 'Ageing: the catalogue’s curve for this type.';
+}
+
+/** The words for ageing by the shop's adopted curve; the studio names the type, a lamp's own page does not. */
+export function measuredCurveNote(lamps: number, typeName?: string): string {
+  return `Ageing: your shop’s measured curve for ${typeName ?? 'this type'}, ${lamps} lamp${lamps === 1 ? '' : 's'}.`;
 }

@@ -67,6 +67,16 @@ export async function allLampTypes(organisationId: number): Promise<LampTypeDto[
   return rows.map(toDto);
 }
 
+/** The organisation's types whose measured curve was adopted, for the design studio's catalogue choice. */
+export async function adoptedLampTypes(organisationId: number): Promise<LampTypeDto[]> {
+  const rows = await LampType.findAll({
+    where: { organisationId, adoptedCurveJson: { [Op.ne]: null } },
+    order: [['id', 'ASC']],
+    limit: 1000,
+  });
+  return rows.map(toDto);
+}
+
 export async function findLampType(id: number): Promise<LampType | null> {
   return LampType.findByPk(id);
 }

@@ -1,5 +1,6 @@
 import type { LampObject } from '@/simulation';
-import type { AdoptedCurve, LampTypeInput } from './schema';
+import type { StudioCatalogueType } from '@/shared/designs/catalogue-type';
+import type { AdoptedCurve, LampTypeDto, LampTypeInput } from './schema';
 
 /**
  * A design-file lamp object for a catalogue entry, placed at (x, y). Every catalogue figure is written
@@ -31,4 +32,19 @@ export function lampObjectFromType(
   else if (t.decayPoints) lamp.decay = { points: t.decayPoints };
   else if (t.halfLifeMonths !== null) lamp.decay = { halfLifeMonths: t.halfLifeMonths };
   return lamp;
+}
+
+/**
+ * What the design studio offers of a catalogue type whose measured curve the shop adopted: its lamp
+ * object as the guided start would place it (so the decay table is the adopted one), or null for a type
+ * that ages by the catalogue's curve.
+ */
+export function studioCatalogueType(t: LampTypeDto): StudioCatalogueType | null {
+  if (!t.adoptedCurve) return null;
+  return {
+    id: String(t.id),
+    name: t.name,
+    lamps: t.adoptedCurve.lamps,
+    lamp: lampObjectFromType(t, { id: `catalogue-${t.id}`, x: 0, y: 0 }),
+  };
 }

@@ -4,7 +4,10 @@ import * as adoption from '@/app/api/lamp-types/[id]/curve-adoption/route';
 import * as population from '@/app/api/lamp-types/[id]/population/route';
 import { addDays, DAYS_PER_MONTH, todayIso } from '@/lib/lamp-log/dates';
 import { refreshOutlooks } from '@/lib/lamp-log/outlook-store';
+import { loadUserById } from '@/lib/auth/session-user';
+import { studioCatalogueFor } from '@/lib/lamp-types/studio-catalogue';
 import { MIN_LAMPS } from '@/lib/population/fit';
+import { matchingCatalogueCurve } from '@/components/studio/state/lampPresets';
 import {
   CounterLamp,
   CounterReading,
@@ -85,6 +88,9 @@ beforeEach(async () => {
   type = (await LampType.findOne({ where: { organisationId: shop.id, presetKey: 't5-high' } }))!;
 });
 
+/** What the design studio page of a design of `organisationId` hands the studio, for this user. */
+const studioOffer = async (as: User, organisationId: number) =>
+  studioCatalogueFor((await loadUserById(as.id))!, organisationId);
 const get = (as: User | null, id = type.id) =>
   call(population.GET, { path: `/api/lamp-types/${id}/population`, params: { id }, as });
 const adopt = (as: User | null, id = type.id) =>
@@ -237,5 +243,31 @@ describe('a lamp type’s measured curve', () => {
     const history = (await get(owner)).body.history;
     expect(history).toHaveLength(1);
     expect(history[0].adoptedBy).toBe(staff.name);
+  });
+
+  it('is offered in the design studio of its own organisation only, with the adopted table', async () => {
+    await measuredLamps();
+    // Before adoption the studio offers nothing from the catalogue: every type ages by the catalogue.
+    expect(await studioOffer(keeper, shop.id)).toEqual([]);
+    const adopted = (await adopt(staff)).body.adopted as { points: [number, number][]; lamps: number };
+    for (const member of [owner, staff, keeper]) {
+      const offered = await studioOffer(member, shop.id);
+      expect(offered.map((t) => t.id)).toEqual([String(type.id)]);
+      expect(offered[0]!.lamps).toBe(adopted.lamps);
+      expect(offered[0]!.name).toBe(type.name);
+      expect(offered[0]!.lamp).toMatchObject({ tech: type.tech, form: type.form, uvbAt30: type.uvbAt30 });
+      expect(offered[0]!.lamp.decay).toEqual({ points: adopted.points });
+    }
+    // Another organisation's member learns nothing of this shop's catalogue, nor sees it in their own.
+    expect(await studioOffer(outsider, shop.id)).toEqual([]);
+    expect(await studioOffer(outsider, otherOrg.id)).toEqual([]);
+    // A lamp the guided start placed of this type is recognised as ageing by the adopted curve.
+    const offered = await studioOffer(owner, shop.id);
+    const copy = adopted.points.map(([m, f]): [number, number] => [m, f]);
+    const placed = { ...offered[0]!.lamp, id: 'uv1', decay: { points: copy } };
+    expect(matchingCatalogueCurve(placed, offered)?.id).toBe(String(type.id));
+    // Withdrawn: the studio stops offering it.
+    await withdraw(owner);
+    expect(await studioOffer(owner, shop.id)).toEqual([]);
   });
 });

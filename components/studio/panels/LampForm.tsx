@@ -1,9 +1,13 @@
 'use client';
 import { LAMP_TECHS, type LampPresetId } from '@/simulation';
+import { measuredCurveNote } from '@/lib/lamp-log/decay';
 import {
+  applyCatalogueType,
   applyForm,
   applyPreset,
   applyTech,
+  matchingCatalogueCurve,
+  matchingCatalogueType,
   matchingPreset,
   PRESET_OPTIONS,
   TECH_OPTIONS,
@@ -22,6 +26,11 @@ export function LampForm({ lamp }: { lamp: LampObject }) {
   const z = field('z', 'length');
   const d = LAMP_TECHS[lamp.tech];
   const preset = matchingPreset(lamp);
+  // The shop's own catalogue types whose measured curve was adopted: a lamp made from one ages by it.
+  const catalogue = useStudio(store, (s) => s.session.catalogueTypes);
+  const readOnly = useStudio(store, (s) => s.readOnly);
+  const measured = matchingCatalogueCurve(lamp, catalogue);
+  const fromCatalogue = matchingCatalogueType(lamp, catalogue);
   return (
     <>
       <Section title="Lamp type">
@@ -48,6 +57,26 @@ export function LampForm({ lamp }: { lamp: LampObject }) {
           options={[{ value: '', label: 'Custom values', disabled: true }, ...PRESET_OPTIONS]}
           onChange={(id) => replace(applyPreset(lamp, id))}
         />
+        {!readOnly && catalogue.length > 0 && (
+          <SelectField
+            label="From your catalogue"
+            testId="lamp-catalogue"
+            value={fromCatalogue?.id ?? ''}
+            options={[
+              { value: '', label: 'Choose a type', disabled: true },
+              ...catalogue.map((t) => ({ value: t.id, label: t.name })),
+            ]}
+            onChange={(id) => {
+              const t = catalogue.find((c) => c.id === id);
+              if (t) replace(applyCatalogueType(lamp, t));
+            }}
+          />
+        )}
+        {measured && (
+          <p className="text-caption text-moss-900" data-testid="lamp-measured-curve">
+            {measuredCurveNote(measured.lamps, measured.name)}
+          </p>
+        )}
         <Grid2>
           <SelectField
             label="Technology"

@@ -4,7 +4,7 @@ import type { Camera, Point, Rect, Viewport } from '../geometry/camera';
 import type { Guide } from '../geometry/snap';
 import type { LengthUnit, TempUnit } from '@/shared/units';
 import { CM_PER_IN } from '@/shared/units';
-import { OBJECT_TYPES, type ObjectType } from './types';
+import { OBJECT_TYPES, type ObjectType, type StudioCatalogueType } from './types';
 
 export type PlaceTool = ObjectType;
 export type Tool = 'select' | 'pan' | PlaceTool | 'probe' | 'ruler';
@@ -60,6 +60,8 @@ export interface Session {
   ruler: { a: Point; b: Point } | null;
   marquee: Rect | null;
   photos: EnclosurePhotos | null;
+  /** The organisation's catalogue types with an adopted measured curve; empty without an organisation. */
+  catalogueTypes: StudioCatalogueType[];
   /** Adjusting the photo: pointer drags on the canvas move it and stretch it by its corners. */
   backdropAdjust: boolean;
   backdropImage: { uploadId: number; state: BackdropImageState } | null;
@@ -90,6 +92,7 @@ export function initialSession(): Session {
     ruler: null,
     marquee: null,
     photos: null,
+    catalogueTypes: [],
     backdropAdjust: false,
     backdropImage: null,
   };

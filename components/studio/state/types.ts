@@ -23,3 +23,5 @@ export { isBox, isSegment, OBJECT_TYPES } from '@/shared/object-kinds';
 
 /** A species sheet as the studio receives it: the engine's sheet plus the organisation's id for it. */
 export type StudioSpecies = SpeciesSheet & { id: string };
+
+export type { StudioCatalogueType } from '@/shared/designs/catalogue-type';

@@ -4,6 +4,7 @@ import { StudioLoader } from '@/components/studio/StudioLoader';
 import { parseId } from '@/lib/api/schemas';
 import { requireUser } from '@/lib/session';
 import { getVariantForUser } from '@/lib/variants/queries';
+import { studioCatalogueFor } from '@/lib/lamp-types/studio-catalogue';
 import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
 import { studioPhotos } from '@/lib/uploads/studio-photos';
 import { pageNonce, studioPictureFor } from '@/lib/variants/studio-picture';
@@ -20,11 +21,12 @@ export default async function VariantStudioPage({ params }: { params: Promise<{ 
   if (!variant) notFound();
   // The field is drawn on an engine thread while the rest of the page is looked up, the species and the
   // photos side by side: each is a database round trip the page's first byte waits for.
-  const [options, photos, picture, nonce] = await Promise.all([
+  const [options, photos, picture, nonce, catalogueTypes] = await Promise.all([
     speciesOptions(variant.enclosure.organisationId),
     studioPhotos(user, variant.enclosure, variant.design.backdrop?.uploadId),
     studioPictureFor(variant.design),
     pageNonce(),
+    studioCatalogueFor(user, variant.enclosure.organisationId),
   ]);
   const attached = attachedSpecies(options, variant.enclosure.speciesName);
   return (
@@ -38,6 +40,7 @@ export default async function VariantStudioPage({ params }: { params: Promise<{ 
       initialSpeciesId={attached ? String(attached.id) : null}
       readOnly={!variant.canEdit}
       photos={photos}
+      catalogueTypes={catalogueTypes}
       picture={picture}
       nonce={nonce}
     />
