@@ -4,19 +4,55 @@ import { DEMO_SHOP, demoSignIn } from '@/lib/demo/scenario';
 import { LampType, Organisation } from '@/models';
 import { newContext, screenshot, signIn, withBrowser } from './harness';
 import { JOURNEY_MS } from './journey-helpers';
+import { eventually, keys, studioReady } from './studio-helpers';
 
 // What the shop learns from its tests, in Chromium at desktop and phone size: the example shop's
 // high-output T5 type shows its measured curve with its band, counts and table against the catalogue's,
-// staff adopt it and go back to the catalogue, and the counter's figures show their plots and tables.
+// staff adopt it, give a lamp in a design the adopted curve from the studio's lamp inspector and go back
+// to the catalogue, and the counter's figures show their plots and tables.
 const session = withBrowser();
 const SIZES = [
   { name: 'desktop', viewport: { width: 1280, height: 900 }, touch: false },
   { name: 'phone', viewport: { width: 390, height: 844 }, touch: true },
 ] as const;
 
-async function demoTubeId(): Promise<number> {
+async function demoTube(): Promise<LampType> {
   const shop = (await Organisation.findOne({ where: { name: DEMO_SHOP.name } }))!;
-  return (await LampType.findOne({ where: { organisationId: shop.id, presetKey: 't5-high' } }))!.id;
+  return (await LampType.findOne({ where: { organisationId: shop.id, presetKey: 't5-high' } }))!;
+}
+
+/**
+ * A new design on the example customer's vivarium, with one lamp: the studio's lamp inspector offers the
+ * adopted type, applies it in one undoable step and names the curve the lamp ages by.
+ */
+async function lampFromCatalogue(page: Page, typeName: string, lamps: number) {
+  await page.goto('/enclosures?q=Desert%20vivarium');
+  await page.getByRole('link', { name: 'Desert vivarium' }).click();
+  await page.getByRole('heading', { name: 'Designs', exact: true }).waitFor();
+  const designName = `Adopted curve ${Date.now().toString(36)}`;
+  await page.getByLabel('New design name').fill(designName);
+  await page.getByRole('button', { name: 'New design' }).click();
+  const card = page.getByTestId('design-card').filter({ hasText: designName });
+  await expect
+    .poll(() => card.locator('[data-testid=variant-row][aria-busy=false]').count(), eventually)
+    .toBe(1);
+  await card.getByRole('link', { name: 'Open in studio' }).click();
+  await page.waitForURL(/\/studio\/\d+$/);
+  await studioReady(page);
+  // One generic lamp, placed from the keyboard and selected: it ages by its technology's curve.
+  await keys(page, 'Control+A', 'Delete', 'l', 'Enter');
+  await expect
+    .poll(() => page.getByTestId('inspector-object').getAttribute('data-object-id'), eventually)
+    .toBe('lamp-1');
+  expect(await page.getByTestId('lamp-measured-curve').count()).toBe(0);
+  await page.getByTestId('lamp-catalogue').selectOption({ label: typeName });
+  const note = `Ageing: your shop’s measured curve for ${typeName}, ${lamps} lamps.`;
+  await expect.poll(() => page.getByTestId('lamp-measured-curve').textContent(), eventually).toBe(note);
+  expect(await page.getByTestId('lamp-catalogue').inputValue()).not.toBe('');
+  await screenshot(page, 'studio-adopted-curve-desktop');
+  // One undo takes the whole type off again.
+  await keys(page, 'Control+Z');
+  await expect.poll(() => page.getByTestId('lamp-measured-curve').count(), eventually).toBe(0);
 }
 
 async function staffPage(size: (typeof SIZES)[number]): Promise<Page> {
@@ -36,7 +72,8 @@ describe('what the shop learns', () => {
       async () => {
         const page = await staffPage(size);
         try {
-          const id = await demoTubeId();
+          const tube = await demoTube();
+          const id = tube.id;
           await page.goto(`/lamp-catalogue/${id}`);
           const section = page.getByTestId('population');
           await section.getByTestId('population-curve').waitFor();
@@ -62,6 +99,11 @@ describe('what the shop learns', () => {
               .poll(() => section.getByTestId('curve-in-force').textContent(), { timeout: 90_000 })
               .toContain('your shop’s measured curve');
             await screenshot(page, 'shop-curve-adopted-desktop');
+            const lamps = Number(
+              /\((\d+) lamps,/.exec((await section.getByTestId('curve-in-force').textContent())!)![1],
+            );
+            await lampFromCatalogue(page, tube.name, lamps);
+            await page.goto(`/lamp-catalogue/${id}`);
             await section.getByTestId('withdraw-curve').click();
             await expect
               .poll(() => section.getByTestId('curve-in-force').textContent(), { timeout: 90_000 })
