@@ -146,6 +146,8 @@ const targets: Target[] = [
   out('confirm-account', '/confirm-account', () => `/confirm-account#token=${'x'.repeat(43)}`),
   out('share', '/s/[token]', () => ids.sharePath),
   out('invite-unknown', '/invite/[token]', () => `/invite/${'x'.repeat(43)}`),
+  // A link that does not verify: the page answers like any missing page (a real one stops a customer's e-mails).
+  out('unsubscribe-unknown', '/unsubscribe', () => `/unsubscribe?token=${'x'.repeat(43)}`),
   staffSees('enclosures', '/enclosures', () => '/enclosures'),
   staffSees('guided-start', '/enclosures/new', () => '/enclosures/new'),
   staffSees('enclosure', '/enclosures/[id]', () => `/enclosures/${ids.enclosureId}`),
@@ -156,6 +158,7 @@ const targets: Target[] = [
   staffSees('members', '/members', () => '/members'),
   ownerSees('mail', '/mail', () => '/mail'),
   ownerSees('jobs', '/jobs', () => '/jobs'),
+  ownerSees('organisation', '/organisation', () => '/organisation'),
   staffSees('lamp-log', '/lamp-log', () => '/lamp-log'),
   staffSees('lamp', '/lamp-log/[id]', () => `/lamp-log/${ids.lampId}`),
   staffSees('lamp-catalogue', '/lamp-catalogue', () => '/lamp-catalogue'),
