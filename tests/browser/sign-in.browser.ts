@@ -92,7 +92,9 @@ describe('signing in', () => {
       .toEqual([...theirs].sort(collator.compare));
     await page.reload();
     expect(await page.getByLabel('Search enclosures').inputValue()).toBe(searched.name);
-    expect(await table.locator('tbody a').allTextContents()).toEqual([...theirs].sort(collator.compare));
+    await expect
+      .poll(() => table.locator('tbody a').allTextContents(), { timeout: 10_000 })
+      .toEqual([...theirs].sort(collator.compare));
     await screenshot(page, 'sign-in-staff-enclosures-search');
     await search.fill('no such enclosure anywhere');
     await expect.poll(() => page.getByText('No enclosure matches').count(), { timeout: 10_000 }).toBe(1);

@@ -74,7 +74,15 @@ describe('studio photo backdrop', () => {
     await page.getByRole('checkbox', { name: 'Show the field on the canvas' }).uncheck();
     const inside = { x: 61.3, y: 31.7 };
     const outside = { x: 125.3, y: 31.7 };
-    const bg = await layerPixel(page, LAYER.backdrop, inside.x, inside.y);
+    // The enclosure's back, once the layer has drawn it (read too early, the layer is still empty and the
+    // expected mix below would be the photo's colour alone).
+    let bg: number[] = [];
+    await expect
+      .poll(async () => {
+        bg = Array.from(await layerPixel(page, LAYER.backdrop, inside.x, inside.y));
+        return bg[3]!;
+      }, eventually)
+      .toBeGreaterThan(0);
     await page.getByLabel('Photo of the enclosure').selectOption(String(uploadId));
     await expect
       .poll(() => backdropReading(page), eventually)
