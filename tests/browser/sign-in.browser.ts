@@ -74,9 +74,13 @@ describe('signing in', () => {
     const search = page.getByLabel('Search enclosures');
     await search.fill(searched.name);
     const theirs = (searched.enclosures ?? []).map((e) => e.name);
-    await expect
-      .poll(() => table.locator('tbody a').allTextContents(), { timeout: 10_000 })
-      .toEqual([...theirs].sort(collator.compare));
+    // The demo's enclosures among the rows, and whether every row is the searched keeper's: files running
+    // alongside may give this keeper enclosures of their own.
+    const searchedShown = async () => {
+      const rows = await table.locator('tbody tr').allInnerTexts();
+      return rows.every((r) => r.includes(searched.name)) ? await demoShown() : rows;
+    };
+    await expect.poll(searchedShown, { timeout: 10_000 }).toEqual([...theirs].sort(collator.compare));
     // The search is in the address too, so a reload (or a shared link) shows the same list.
     await expect
       .poll(() => new URL(page.url()).searchParams.get('q'), { timeout: 10_000 })
@@ -87,14 +91,10 @@ describe('signing in', () => {
     await expect.poll(demoShown, { timeout: 10_000 }).toEqual([...enclosureNames].sort(collator.compare));
     await page.goForward();
     await expect.poll(() => search.inputValue(), { timeout: 10_000 }).toBe(searched.name);
-    await expect
-      .poll(() => table.locator('tbody a').allTextContents(), { timeout: 10_000 })
-      .toEqual([...theirs].sort(collator.compare));
+    await expect.poll(searchedShown, { timeout: 10_000 }).toEqual([...theirs].sort(collator.compare));
     await page.reload();
     expect(await page.getByLabel('Search enclosures').inputValue()).toBe(searched.name);
-    await expect
-      .poll(() => table.locator('tbody a').allTextContents(), { timeout: 10_000 })
-      .toEqual([...theirs].sort(collator.compare));
+    await expect.poll(searchedShown, { timeout: 10_000 }).toEqual([...theirs].sort(collator.compare));
     await screenshot(page, 'sign-in-staff-enclosures-search');
     await search.fill('no such enclosure anywhere');
     await expect.poll(() => page.getByText('No enclosure matches').count(), { timeout: 10_000 }).toBe(1);
