@@ -333,8 +333,18 @@ async function main() {
     });
     rows.push(row('PUT /api/variants/[id]', save, { saved, stale409: stale }));
 
-    const probe = await fetch(`${base}${sharePath}`, { signal: AbortSignal.timeout(15_000) });
-    const html = await probe.text();
+    // Saves autocannon sent just before it stopped may still be landing, each a new version: wait until
+    // the page names the same version twice, so the picture address read from it stays the current one.
+    let probe;
+    let html = '';
+    for (let tries = 0, last = ''; tries < 10; tries++) {
+      probe = await fetch(`${base}${sharePath}`, { signal: AbortSignal.timeout(15_000) });
+      html = await probe.text();
+      const seen = /\/picture\/(\d+)\//.exec(html)?.[1] ?? '';
+      if (probe.status !== 200 || seen === last) break;
+      last = seen;
+      await new Promise((r) => setTimeout(r, 500));
+    }
     if (probe.status === 200) {
       pageBytes = Buffer.byteLength(html);
       await warmUp(base, jar, sharePath);
