@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { DEMO_SHOP, demoSignIn } from '@/lib/demo/scenario';
 import { LampType, Organisation } from '@/models';
 import { newContext, screenshot, signIn, withBrowser } from './harness';
-import { JOURNEY_MS } from './journey-helpers';
+import { JOURNEY_MS, createDesign, enclosureIdByName } from './journey-helpers';
 import { eventually, keys, studioReady } from './studio-helpers';
 
 // What the shop learns from its tests, in Chromium at desktop and phone size: the example shop's
@@ -26,18 +26,9 @@ async function demoTube(): Promise<LampType> {
  * adopted type, applies it in one undoable step and names the curve the lamp ages by.
  */
 async function lampFromCatalogue(page: Page, typeName: string, lamps: number) {
-  await page.goto('/enclosures?q=Desert%20vivarium');
-  await page.getByRole('link', { name: 'Desert vivarium' }).click();
-  await page.getByRole('heading', { name: 'Designs', exact: true }).waitFor();
-  const designName = `Adopted curve ${Date.now().toString(36)}`;
-  await page.getByLabel('New design name').fill(designName);
-  await page.getByRole('button', { name: 'New design' }).click();
-  const card = page.getByTestId('design-card').filter({ hasText: designName });
-  await expect
-    .poll(() => card.locator('[data-testid=variant-row][aria-busy=false]').count(), eventually)
-    .toBe(1);
-  await card.getByRole('link', { name: 'Open in studio' }).click();
-  await page.waitForURL(/\/studio\/\d+$/);
+  const enclosureId = await enclosureIdByName(page, 'Desert vivarium');
+  const { variantId } = await createDesign(page, enclosureId, `Adopted curve ${Date.now().toString(36)}`);
+  await page.goto(`/studio/${variantId}`);
   await studioReady(page);
   // One generic lamp, placed from the keyboard and selected: it ages by its technology's curve.
   await keys(page, 'Control+A', 'Delete', 'l', 'Enter');
