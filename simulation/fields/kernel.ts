@@ -27,6 +27,11 @@ import type { LampGeom } from './scene';
 /** Occluder parts closer than this above the receiver are ignored (a receiver lying on a surface). */
 const EPS_Y = 1e-6;
 const MAX_CLIPPED = 12;
+/**
+ * Relative gap between neighbouring interval ends above which a tube's runs may be kept from one cell to
+ * the next (evalSpan): far above rounding, so a piece's midpoint lies strictly inside it.
+ */
+const GAP = 1e-9;
 
 /** Per-row precomputation for one lamp; reused across rows (no allocation once sized). */
 export class RowData {
@@ -91,26 +96,40 @@ export class Scratch {
   hi: Float64Array;
   tu: Float64Array;
   ti: Float64Array;
-  bp: Float64Array;
-  g: Float64Array;
-  /** A tube's visible runs in evalCell: where each ends and the shares of UVB and infrared it passes. */
-  rEnd: Float64Array;
+  /** The row's barrier (RowData index) that hid each of a cell's partly hidden pieces. */
+  pc: Int32Array;
+  /**
+   * A tube's visible runs (evalSpan): the interval end each run ends at (2·piece for a piece's lower
+   * end, 2·piece + 1 for its upper end, −1 for the tube's end s2) and the shares of UVB and infrared it
+   * passes. They describe the order of the ends, not their positions, so the next cell can use them again
+   * while that order holds (kept for: the barriers of each piece, which ends lie inside the tube, the
+   * sorted inner ends `ord`).
+   */
+  rRef: Int32Array;
   rU: Float64Array;
   rI: Float64Array;
+  ord: Int32Array;
+  kPc: Int32Array;
+  kIn: Int32Array;
   /** Output of evalCell. */
   uv = 0;
   ir = 0;
+  /** evalCell's one-cell span. */
+  oneUv = new Float64Array(1);
+  oneIr = new Float64Array(1);
   constructor(capacity: number) {
     const c = Math.max(1, capacity);
     this.lo = new Float64Array(c);
     this.hi = new Float64Array(c);
     this.tu = new Float64Array(c);
     this.ti = new Float64Array(c);
-    this.bp = new Float64Array(2 * c + 2);
-    this.g = new Float64Array(2 * c + 2);
-    this.rEnd = new Float64Array(2 * c + 2);
+    this.pc = new Int32Array(c);
+    this.rRef = new Int32Array(2 * c + 2);
     this.rU = new Float64Array(2 * c + 2);
     this.rI = new Float64Array(2 * c + 2);
+    this.ord = new Int32Array(2 * c + 2);
+    this.kPc = new Int32Array(c);
+    this.kIn = new Int32Array(c);
   }
 }
 
@@ -217,22 +236,49 @@ export function prepareRow(
  * and s.ir (W/m²).
  */
 export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): void {
-  s.uv = 0;
-  s.ir = 0;
+  // One cell of evalSpan at (0 + 1)·qx, which is qx exactly.
+  evalSpan(lamp, row, 0, 1, qx, 1, s.oneUv, s.oneIr, s);
+  s.uv = s.oneUv[0]!;
+  s.ir = s.oneIr[0]!;
+}
+
+/**
+ * Evaluate a lamp at the receivers x = (i + off)·cell, i = from..to−1, of a prepared row into uv[i] and
+ * ir[i] (same units as evalCell). The loop over cells is inside, so what the row and lamp give is read
+ * once per span rather than once per cell.
+ */
+export function evalSpan(
+  lamp: LampGeom,
+  row: RowData,
+  from: number,
+  to: number,
+  cell: number,
+  off: number,
+  uv: Float64Array,
+  ir: Float64Array,
+  s: Scratch,
+): void {
   const h = row.h;
-  if (!(h > 0)) return;
-  const tube = lamp.tube;
-  let inBeam = true;
-  if (!tube) {
-    inBeam = Math.abs(qx - lamp.x) <= row.half;
-    // Outside a bulb's beam only the spread part of its heat arrives.
-    if (!inBeam && lamp.irOut === 0) return;
+  if (!(h > 0)) {
+    uv.fill(0, from, to);
+    ir.fill(0, from, to);
+    return;
   }
+  const tube = lamp.tube;
   const s1 = lamp.s1;
   const s2 = lamp.s2;
-  let gu = row.gu0;
-  let gi = row.gi0;
-  let n = 0;
+  const lx = lamp.x;
+  const half = row.half;
+  const irOut = lamp.irOut;
+  const uvI = lamp.uvI;
+  const irI = lamp.irI;
+  const d2 = row.d2;
+  // The line's own distance d replaces h in the antiderivative; the cosine h/d is in the scale.
+  const d = row.d;
+  const scale = row.scale;
+  const gu0 = row.gu0;
+  const gi0 = row.gi0;
+  const nAct = row.nAct;
   const A = row.A;
   const B = row.B;
   const act = row.act;
@@ -249,141 +295,205 @@ export function evalCell(lamp: LampGeom, row: RowData, qx: number, s: Scratch): 
   const sHi = s.hi;
   const sTu = s.tu;
   const sTi = s.ti;
-  for (let t = 0, nAct = row.nAct; t < nAct; t++) {
-    const c = act[t]!;
-    if (qx <= qa[c]! || qx >= qb[c]!) continue;
-    const k = occ[c]!;
-    if (qx > fa[c]! && qx < fb[c]!) {
-      gu *= tUv[k]!;
-      gi *= tIr[k]!;
-      if (gu === 0 && gi === 0) return;
-      continue;
-    }
-    const v0 = vStart[c]!;
-    const v1 = v0 + vCount[c]!;
-    let lo = Infinity;
-    let hi = -Infinity;
-    for (let v = v0; v < v1; v++) {
-      const x = A[v]! + B[v]! * qx;
-      if (x < lo) lo = x;
-      if (x > hi) hi = x;
-    }
-    if (!tube) {
-      if (lo < s1 && s1 < hi) {
-        gu *= tUv[k]!;
-        gi *= tIr[k]!;
-      }
-    } else {
-      if (lo < s1) lo = s1;
-      if (hi > s2) hi = s2;
-      if (!(hi > lo)) continue;
-      if (lo <= s1 && hi >= s2) {
-        gu *= tUv[k]!;
-        gi *= tIr[k]!;
-      } else {
-        sLo[n] = lo;
-        sHi[n] = hi;
-        sTu[n] = tUv[k]!;
-        sTi[n] = tIr[k]!;
-        n++;
-      }
-    }
-    if (gu === 0 && gi === 0) return;
-  }
-  if (!tube) {
-    const dx = qx - lamp.x;
-    const r2 = row.d2 + dx * dx;
-    const f = h / (r2 * Math.sqrt(r2));
-    s.uv = inBeam ? lamp.uvI * f * gu : 0;
-    s.ir = (inBeam ? lamp.irI : lamp.irOut) * f * gi;
-    return;
-  }
-  // The line's own distance d replaces h in the antiderivative; the cosine h/d is in the scale.
-  const d = row.d;
-  const scale = row.scale;
-  if (n === 0) {
-    const f = (G(s2 - qx, d) - G(s1 - qx, d)) * scale;
-    s.uv = lamp.uvI * f * gu;
-    s.ir = lamp.irI * f * gi;
-    return;
-  }
-  if (n === 1) {
-    // The most common partial shadow: one hidden piece [lo, hi] inside [s1, s2], whose ends may be the
-    // tube's own (then their G is the tube end's).
-    const lo = sLo[0]!;
-    const hi = sHi[0]!;
-    const g1 = G(s1 - qx, d);
-    const g2 = G(s2 - qx, d);
-    const gLo = lo > s1 ? G(lo - qx, d) : g1;
-    const gHi = hi < s2 ? G(hi - qx, d) : g2;
-    const open = gLo - g1 + (g2 - gHi);
-    const hidden = gHi - gLo;
-    s.uv = lamp.uvI * (open + sTu[0]! * hidden) * scale * gu;
-    s.ir = lamp.irI * (open + sTi[0]! * hidden) * scale * gi;
-    return;
-  }
-  // Sweep the visible pieces between the tube ends and the interval ends. Every interval lies within
-  // [s1, s2] (clipped above), so only its inner ends are breakpoints and only those need sorting (a
-  // penumbra usually reaches past one end of the tube). Neighbouring pieces passing the same share are
-  // merged into runs, and G is evaluated only at the ends of runs that pass anything: behind overlapping
-  // opaque barriers most breakpoints need no closed form at all.
-  const bp = s.bp;
-  let m = 0;
-  for (let c = 0; c < n; c++) {
-    const lo = sLo[c]!;
-    const hi = sHi[c]!;
-    if (lo > s1) bp[m++] = lo;
-    if (hi < s2) bp[m++] = hi;
-  }
-  sortPrefix(bp, m);
-  bp[m++] = s2;
-  const rEnd = s.rEnd;
+  const pc = s.pc;
+  const rRef = s.rRef;
   const rU = s.rU;
   const rI = s.rI;
+  const ord = s.ord;
+  const kPc = s.kPc;
+  const kIn = s.kIn;
+  // The runs in rRef, rU, rI were made for kN pieces with kM inner ends in ord (kN < 0: none kept).
+  let kN = -1;
+  let kM = 0;
   let nr = 0;
-  let x0 = s1;
-  for (let a = 0; a < m; a++) {
-    const x1 = bp[a]!;
-    if (!(x1 > x0)) continue;
-    const mid = 0.5 * (x0 + x1);
-    let pu = 1;
-    let pi = 1;
-    for (let c = 0; c < n; c++) {
-      if (sLo[c]! <= mid && mid <= sHi[c]!) {
-        pu *= sTu[c]!;
-        pi *= sTi[c]!;
+  cells: for (let i = from; i < to; i++) {
+    const qx = (i + off) * cell;
+    uv[i] = 0;
+    ir[i] = 0;
+    let inBeam = true;
+    if (!tube) {
+      inBeam = Math.abs(qx - lx) <= half;
+      // Outside a bulb's beam only the spread part of its heat arrives.
+      if (!inBeam && irOut === 0) continue;
+    }
+    let gu = gu0;
+    let gi = gi0;
+    let n = 0;
+    for (let t = 0; t < nAct; t++) {
+      const c = act[t]!;
+      if (qx <= qa[c]! || qx >= qb[c]!) continue;
+      const k = occ[c]!;
+      if (qx > fa[c]! && qx < fb[c]!) {
+        gu *= tUv[k]!;
+        gi *= tIr[k]!;
+        if (gu === 0 && gi === 0) continue cells;
+        continue;
       }
+      const v0 = vStart[c]!;
+      const v1 = v0 + vCount[c]!;
+      let lo = Infinity;
+      let hi = -Infinity;
+      for (let v = v0; v < v1; v++) {
+        const x = A[v]! + B[v]! * qx;
+        if (x < lo) lo = x;
+        if (x > hi) hi = x;
+      }
+      if (!tube) {
+        if (lo < s1 && s1 < hi) {
+          gu *= tUv[k]!;
+          gi *= tIr[k]!;
+        }
+      } else {
+        if (lo < s1) lo = s1;
+        if (hi > s2) hi = s2;
+        if (!(hi > lo)) continue;
+        if (lo <= s1 && hi >= s2) {
+          gu *= tUv[k]!;
+          gi *= tIr[k]!;
+        } else {
+          sLo[n] = lo;
+          sHi[n] = hi;
+          sTu[n] = tUv[k]!;
+          sTi[n] = tIr[k]!;
+          pc[n] = c;
+          n++;
+        }
+      }
+      if (gu === 0 && gi === 0) continue cells;
     }
-    if (nr > 0 && rU[nr - 1] === pu && rI[nr - 1] === pi) {
-      rEnd[nr - 1] = x1;
-    } else {
-      rEnd[nr] = x1;
-      rU[nr] = pu;
-      rI[nr] = pi;
-      nr++;
+    if (!tube) {
+      const dx = qx - lx;
+      const r2 = d2 + dx * dx;
+      const f = h / (r2 * Math.sqrt(r2));
+      uv[i] = inBeam ? uvI * f * gu : 0;
+      ir[i] = (inBeam ? irI : irOut) * f * gi;
+      continue;
     }
-    x0 = x1;
+    if (n === 0) {
+      const f = (G(s2 - qx, d) - G(s1 - qx, d)) * scale;
+      uv[i] = uvI * f * gu;
+      ir[i] = irI * f * gi;
+      continue;
+    }
+    if (n === 1) {
+      // The most common partial shadow: one hidden piece [lo, hi] inside [s1, s2], whose ends may be the
+      // tube's own (then their G is the tube end's).
+      const lo = sLo[0]!;
+      const hi = sHi[0]!;
+      const g1 = G(s1 - qx, d);
+      const g2 = G(s2 - qx, d);
+      const gLo = lo > s1 ? G(lo - qx, d) : g1;
+      const gHi = hi < s2 ? G(hi - qx, d) : g2;
+      const open = gLo - g1 + (g2 - gHi);
+      const hidden = gHi - gLo;
+      uv[i] = uvI * (open + sTu[0]! * hidden) * scale * gu;
+      ir[i] = irI * (open + sTi[0]! * hidden) * scale * gi;
+      continue;
+    }
+    // Sweep the visible pieces between the tube ends and the interval ends. Every interval lies within
+    // [s1, s2] (clipped above), so only its inner ends are breakpoints and only those need sorting (a
+    // penumbra usually reaches past one end of the tube). Neighbouring pieces passing the same share are
+    // merged into runs, and G is evaluated only at the ends of runs that pass anything: behind overlapping
+    // opaque barriers most breakpoints need no closed form at all.
+    //
+    // From one cell to the next the same barriers usually hide the same ends in the same order, and then
+    // the runs are the same: they are kept and used again while the pieces come from the same barriers,
+    // the same ends lie inside the tube and the inner ends keep their order with clear gaps (GAP: every
+    // piece's midpoint then lies strictly inside it, so which intervals cover it follows from the order
+    // alone, and the runs are exactly those the sweep below would make). Only positions are new per cell.
+    let same = n === kN;
+    for (let c = 0; same && c < n; c++) {
+      const inner = (sLo[c]! > s1 ? 1 : 0) | (sHi[c]! < s2 ? 2 : 0);
+      if (pc[c] !== kPc[c] || inner !== kIn[c]) same = false;
+    }
+    if (same) {
+      let x0 = s1;
+      for (let a = 0; a < kM; a++) {
+        const r = ord[a]!;
+        const x1 = (r & 1) === 0 ? sLo[r >> 1]! : sHi[r >> 1]!;
+        if (!(x1 - x0 > GAP * (1 + Math.abs(x1)))) {
+          same = false;
+          break;
+        }
+        x0 = x1;
+      }
+      if (same && !(s2 - x0 > GAP * (1 + Math.abs(s2)))) same = false;
+    }
+    if (!same) {
+      let m = 0;
+      for (let c = 0; c < n; c++) {
+        const inLo = sLo[c]! > s1;
+        const inHi = sHi[c]! < s2;
+        if (inLo) ord[m++] = 2 * c;
+        if (inHi) ord[m++] = 2 * c + 1;
+        kPc[c] = pc[c]!;
+        kIn[c] = (inLo ? 1 : 0) | (inHi ? 2 : 0);
+      }
+      // Insertion sort of the ends by position (two to eight as a rule).
+      for (let a = 1; a < m; a++) {
+        const r = ord[a]!;
+        const v = (r & 1) === 0 ? sLo[r >> 1]! : sHi[r >> 1]!;
+        let b = a - 1;
+        while (b >= 0) {
+          const q = ord[b]!;
+          if (!(((q & 1) === 0 ? sLo[q >> 1]! : sHi[q >> 1]!) > v)) break;
+          ord[b + 1] = q;
+          b--;
+        }
+        ord[b + 1] = r;
+      }
+      nr = 0;
+      let clear = true;
+      let x0 = s1;
+      for (let a = 0; a <= m; a++) {
+        const r = a < m ? ord[a]! : -1;
+        const x1 = r < 0 ? s2 : (r & 1) === 0 ? sLo[r >> 1]! : sHi[r >> 1]!;
+        if (!(x1 - x0 > GAP * (1 + Math.abs(x1)))) clear = false;
+        if (!(x1 > x0)) continue;
+        const mid = 0.5 * (x0 + x1);
+        let pu = 1;
+        let pi = 1;
+        for (let c = 0; c < n; c++) {
+          if (sLo[c]! <= mid && mid <= sHi[c]!) {
+            pu *= sTu[c]!;
+            pi *= sTi[c]!;
+          }
+        }
+        if (nr > 0 && rU[nr - 1] === pu && rI[nr - 1] === pi) {
+          rRef[nr - 1] = r;
+        } else {
+          rRef[nr] = r;
+          rU[nr] = pu;
+          rI[nr] = pi;
+          nr++;
+        }
+        x0 = x1;
+      }
+      kN = clear ? n : -1;
+      kM = m;
+    }
+    let sumU = 0;
+    let sumI = 0;
+    // A run starts where the one before it ends (the first at s1); G at the last end evaluated, if any.
+    let x0 = s1;
+    let gAt = NaN;
+    let g0 = 0;
+    for (let a = 0; a < nr; a++) {
+      const r = rRef[a]!;
+      const x1 = r < 0 ? s2 : (r & 1) === 0 ? sLo[r >> 1]! : sHi[r >> 1]!;
+      const pu = rU[a]!;
+      const pi = rI[a]!;
+      if (pu !== 0 || pi !== 0) {
+        const ga = x0 === gAt ? g0 : G(x0 - qx, d);
+        const gb = G(x1 - qx, d);
+        sumU += pu * (gb - ga);
+        sumI += pi * (gb - ga);
+        gAt = x1;
+        g0 = gb;
+      }
+      x0 = x1;
+    }
+    uv[i] = uvI * sumU * scale * gu;
+    ir[i] = irI * sumI * scale * gi;
   }
-  let sumU = 0;
-  let sumI = 0;
-  // A run starts where the one before it ends (the first at s1); G at the last end evaluated, if any.
-  x0 = s1;
-  let gAt = NaN;
-  let g0 = 0;
-  for (let r = 0; r < nr; r++) {
-    const x1 = rEnd[r]!;
-    const pu = rU[r]!;
-    const pi = rI[r]!;
-    if (pu !== 0 || pi !== 0) {
-      const ga = x0 === gAt ? g0 : G(x0 - qx, d);
-      const gb = G(x1 - qx, d);
-      sumU += pu * (gb - ga);
-      sumI += pi * (gb - ga);
-      gAt = x1;
-      g0 = gb;
-    }
-    x0 = x1;
-  }
-  s.uv = lamp.uvI * sumU * scale * gu;
-  s.ir = lamp.irI * sumI * scale * gi;
 }

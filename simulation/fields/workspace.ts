@@ -4,7 +4,7 @@
  */
 import type { Occluder } from '../geometry/occluders';
 import type { LampGeom } from './scene';
-import { evalCell, prepareRow, RowData, Scratch, sortPrefix } from './kernel';
+import { evalSpan, prepareRow, RowData, Scratch, sortPrefix } from './kernel';
 import { tubeG } from '../sources/tube';
 
 export class Workspace {
@@ -216,11 +216,7 @@ function sweepRow(ws: Workspace, lamp: LampGeom, row: RowData, i0: number, i1: n
     row.nAct = na;
     row.gu0 = gu;
     row.gi0 = gi;
-    for (let i = from; i < to; i++) {
-      evalCell(lamp, row, (i + 0.5) * cell, s);
-      ru[i] = s.uv;
-      ri[i] = s.ir;
-    }
+    evalSpan(lamp, row, from, to, cell, 0.5, ru, ri, s);
   }
   row.nAct = n;
   row.gu0 = 1;
