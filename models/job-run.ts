@@ -1,11 +1,4 @@
-import {
-  DataTypes,
-  Model,
-  type CreationOptional,
-  type InferAttributes,
-  type InferCreationAttributes,
-  type Sequelize,
-} from 'sequelize';
+import { date, id, oneOf, ref, string, table, text, timestamps, unsigned } from './columns';
 
 export const JOB_OUTCOMES = ['running', 'succeeded', 'partial', 'failed', 'abandoned'] as const;
 /**
@@ -28,96 +21,42 @@ export function parseCounts(json: string): JobCounts {
 }
 
 /** One run of a background job (lib/jobs). */
-export class JobRun extends Model<InferAttributes<JobRun>, InferCreationAttributes<JobRun>> {
-  declare id: CreationOptional<number>;
-  declare job: string;
-  declare startedAt: Date;
-  declare finishedAt: CreationOptional<Date | null>;
-  declare outcome: JobOutcome;
-  declare countsJson: string;
-  declare error: CreationOptional<string | null>;
+export class JobRun extends table('job_runs', {
+  id: id(),
+  job: string(60),
+  startedAt: date(3),
+  finishedAt: date(3).nullable(),
+  outcome: oneOf(JOB_OUTCOMES),
+  countsJson: text(),
+  error: text().nullable(),
   /** Which machine and process ran it, for reading the logs. */
-  declare host: string;
-  declare createdAt: CreationOptional<Date>;
-  declare updatedAt: CreationOptional<Date>;
-
-  static register(sequelize: Sequelize) {
-    JobRun.init(
-      {
-        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
-        job: { type: DataTypes.STRING(60), allowNull: false },
-        startedAt: { type: DataTypes.DATE(3), allowNull: false },
-        finishedAt: { type: DataTypes.DATE(3), allowNull: true },
-        outcome: { type: DataTypes.ENUM(...JOB_OUTCOMES), allowNull: false },
-        countsJson: { type: DataTypes.TEXT, allowNull: false },
-        error: { type: DataTypes.TEXT, allowNull: true },
-        host: { type: DataTypes.STRING(120), allowNull: false },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
-      },
-      { sequelize, tableName: 'job_runs' },
-    );
-  }
-}
+  host: string(120),
+  ...timestamps(),
+}) {}
 
 /** A run's counts for one organisation: what an owner may see of a run that served everyone. */
-export class JobRunCount extends Model<InferAttributes<JobRunCount>, InferCreationAttributes<JobRunCount>> {
-  declare id: CreationOptional<number>;
-  declare jobRunId: number;
-  declare organisationId: number;
-  declare countsJson: string;
-  declare createdAt: CreationOptional<Date>;
-  declare updatedAt: CreationOptional<Date>;
-
-  static register(sequelize: Sequelize) {
-    JobRunCount.init(
-      {
-        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
-        jobRunId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
-        organisationId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
-        countsJson: { type: DataTypes.TEXT, allowNull: false },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
-      },
-      { sequelize, tableName: 'job_run_counts' },
-    );
-  }
-}
+export class JobRunCount extends table('job_run_counts', {
+  id: id(),
+  jobRunId: ref(),
+  organisationId: ref(),
+  countsJson: text(),
+  ...timestamps(),
+}) {}
 
 /**
  * A unit of work that failed (one keeper's message, one lamp's due state): kept until it succeeds, and
  * not tried again before `nextAttemptAt` (back-off), so one bad unit neither stops a run nor is hammered.
  */
-export class JobUnit extends Model<InferAttributes<JobUnit>, InferCreationAttributes<JobUnit>> {
-  declare id: CreationOptional<number>;
-  declare job: string;
-  declare unitKey: string;
-  declare organisationId: number | null;
+export class JobUnit extends table('job_units', {
+  id: id(),
+  job: string(60),
+  unitKey: string(160),
+  organisationId: ref().nullable(),
   /** What the unit is, in words an owner understands ("Reminder e-mail to Ann Example"). */
-  declare label: string;
-  declare attempts: number;
-  declare nextAttemptAt: Date;
-  declare lastError: string;
-  declare lastRunId: number | null;
-  declare createdAt: CreationOptional<Date>;
-  declare updatedAt: CreationOptional<Date>;
-
-  static register(sequelize: Sequelize) {
-    JobUnit.init(
-      {
-        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
-        job: { type: DataTypes.STRING(60), allowNull: false },
-        unitKey: { type: DataTypes.STRING(160), allowNull: false },
-        organisationId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
-        label: { type: DataTypes.STRING(250), allowNull: false },
-        attempts: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
-        nextAttemptAt: { type: DataTypes.DATE(3), allowNull: false },
-        lastError: { type: DataTypes.TEXT, allowNull: false },
-        lastRunId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
-      },
-      { sequelize, tableName: 'job_units' },
-    );
-  }
-}
+  label: string(250),
+  attempts: unsigned(),
+  nextAttemptAt: date(3),
+  lastError: text(),
+  lastRunId: ref().nullable(),
+  ...timestamps(),
+}) {}

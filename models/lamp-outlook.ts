@@ -1,12 +1,5 @@
-import {
-  DataTypes,
-  Model,
-  type CreationOptional,
-  type InferAttributes,
-  type InferCreationAttributes,
-  type NonAttribute,
-  type Sequelize,
-} from 'sequelize';
+import type { NonAttribute } from 'sequelize';
+import { date, dateOnly, double, ref, smallUnsigned, string, table, text, unsigned } from './columns';
 import type { Lamp } from './lamp';
 
 /**
@@ -15,48 +8,28 @@ import type { Lamp } from './lamp';
  * lamp's `outlookVersion` and `asOf` is today; otherwise pages say the figures are being brought up to
  * date.
  */
-export class LampOutlook extends Model<InferAttributes<LampOutlook>, InferCreationAttributes<LampOutlook>> {
-  declare lampId: number;
-  declare organisationId: number;
-  declare label: string;
-  declare enclosureName: string;
-  declare firstUsedOn: string;
-  declare status: string;
-  declare statusRank: number;
-  declare nextDueOn: string | null;
-  declare testDueOn: string | null;
-  declare replaceDueOn: string | null;
-  declare fallsBelowOn: string | null;
-  declare lastReadingAt: Date | null;
-  declare remainingFraction: number | null;
-  declare outlookJson: string;
-  declare asOf: string;
-  declare sourceVersion: number;
-  declare computedAt: CreationOptional<Date>;
+export class LampOutlook extends table(
+  'lamp_outlooks',
+  {
+    lampId: ref().primaryKey(),
+    organisationId: ref(),
+    label: string(120),
+    enclosureName: string(120),
+    firstUsedOn: dateOnly(),
+    status: string(16),
+    statusRank: smallUnsigned(),
+    nextDueOn: dateOnly().nullable(),
+    testDueOn: dateOnly().nullable(),
+    replaceDueOn: dateOnly().nullable(),
+    fallsBelowOn: dateOnly().nullable(),
+    lastReadingAt: date().nullable(),
+    remainingFraction: double().nullable(),
+    outlookJson: text('medium'),
+    asOf: dateOnly(),
+    sourceVersion: unsigned(),
+    computedAt: date(3),
+  },
+  { timestamps: false },
+) {
   declare lamp?: NonAttribute<Lamp>;
-
-  static register(sequelize: Sequelize) {
-    LampOutlook.init(
-      {
-        lampId: { type: DataTypes.INTEGER.UNSIGNED, primaryKey: true },
-        organisationId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
-        label: { type: DataTypes.STRING(120), allowNull: false },
-        enclosureName: { type: DataTypes.STRING(120), allowNull: false },
-        firstUsedOn: { type: DataTypes.DATEONLY, allowNull: false },
-        status: { type: DataTypes.STRING(16), allowNull: false },
-        statusRank: { type: DataTypes.TINYINT.UNSIGNED, allowNull: false },
-        nextDueOn: { type: DataTypes.DATEONLY, allowNull: true },
-        testDueOn: { type: DataTypes.DATEONLY, allowNull: true },
-        replaceDueOn: { type: DataTypes.DATEONLY, allowNull: true },
-        fallsBelowOn: { type: DataTypes.DATEONLY, allowNull: true },
-        lastReadingAt: { type: DataTypes.DATE, allowNull: true },
-        remainingFraction: { type: DataTypes.DOUBLE, allowNull: true },
-        outlookJson: { type: DataTypes.TEXT('medium'), allowNull: false },
-        asOf: { type: DataTypes.DATEONLY, allowNull: false },
-        sourceVersion: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
-        computedAt: { type: DataTypes.DATE(3), allowNull: false },
-      },
-      { sequelize, tableName: 'lamp_outlooks', timestamps: false },
-    );
-  }
 }

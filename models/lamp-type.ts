@@ -1,12 +1,5 @@
-import {
-  DataTypes,
-  Model,
-  type CreationOptional,
-  type InferAttributes,
-  type InferCreationAttributes,
-  type Sequelize,
-} from 'sequelize';
 import { LAMP_TECH_IDS as ENGINE_LAMP_TECH_IDS } from '@/simulation';
+import { double, id, oneOf, ref, string, table, text, timestamps } from './columns';
 
 /** The generic lamp technologies of the design file (the design file's `tech`), as the engine defines them. */
 export const LAMP_TECH_IDS = ENGINE_LAMP_TECH_IDS;
@@ -22,70 +15,38 @@ export type LampForm = (typeof LAMP_FORMS)[number];
  * from, so the catalogue can say which figures are published and which are common practice.
  * Lamps in the lamp log reference this row by `id`.
  */
-export class LampType extends Model<InferAttributes<LampType>, InferCreationAttributes<LampType>> {
-  declare id: CreationOptional<number>;
-  declare organisationId: number;
-  declare name: string;
-  declare tech: LampTechId;
-  declare form: LampForm;
+export class LampType extends table('lamp_types', {
+  id: id(),
+  organisationId: ref(),
+  name: string(120),
+  tech: oneOf(LAMP_TECH_IDS),
+  form: oneOf(LAMP_FORMS),
   /** Tubes only: the lit length along the tube, cm. */
-  declare lengthCm: number | null;
+  lengthCm: double().nullable(),
   /** UVB µW/cm² directly below, 30 cm away, new, bare; 0 for heat-only lamps. */
-  declare uvbAt30: number;
+  uvbAt30: double(),
   /** UV Index per µW/cm² of broadband UVB for this technology's spectrum. */
-  declare uviPerUvb: number;
+  uviPerUvb: double(),
   /** Share of electrical power leaving as radiant heat (0..1). */
-  declare radiantFraction: number;
+  radiantFraction: double(),
   /** Full beam angle, degrees (360: bare, all around). */
-  declare beamDeg: number;
-  declare reflectorGain: number;
-  declare watts: number;
+  beamDeg: double(),
+  reflectorGain: double().defaultsTo(1),
+  watts: double(),
   /** Months until UVB output halves (null: no UV output or no decay model). */
-  declare halfLifeMonths: number | null;
+  halfLifeMonths: double().nullable(),
   /** Decay curve parameters as the engine takes them (JSON; null: the technology's default). */
-  declare decayJson: string | null;
+  decayJson: text().nullable(),
   /** The shop's own measured decay curve, when adopted for this type (lib/population/adoption.ts). */
-  declare adoptedCurveJson: CreationOptional<string | null>;
+  adoptedCurveJson: text().nullable(),
   /** Typical replacement interval, months (null: replace on failure). */
-  declare replaceAfterMonths: number | null;
-  declare notes: string | null;
+  replaceAfterMonths: double().nullable(),
+  notes: text().nullable(),
   /** JSON object: field name -> where the default comes from. */
-  declare sourcesJson: string;
+  sourcesJson: text(),
   /** The engine preset this entry was seeded from (null: added by the organisation). */
-  declare presetKey: string | null;
-  declare createdById: number | null;
-  declare updatedById: number | null;
-  declare createdAt: CreationOptional<Date>;
-  declare updatedAt: CreationOptional<Date>;
-
-  static register(sequelize: Sequelize) {
-    LampType.init(
-      {
-        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
-        organisationId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
-        name: { type: DataTypes.STRING(120), allowNull: false },
-        tech: { type: DataTypes.ENUM(...LAMP_TECH_IDS), allowNull: false },
-        form: { type: DataTypes.ENUM(...LAMP_FORMS), allowNull: false },
-        lengthCm: { type: DataTypes.DOUBLE, allowNull: true },
-        uvbAt30: { type: DataTypes.DOUBLE, allowNull: false },
-        uviPerUvb: { type: DataTypes.DOUBLE, allowNull: false },
-        radiantFraction: { type: DataTypes.DOUBLE, allowNull: false },
-        beamDeg: { type: DataTypes.DOUBLE, allowNull: false },
-        reflectorGain: { type: DataTypes.DOUBLE, allowNull: false, defaultValue: 1 },
-        watts: { type: DataTypes.DOUBLE, allowNull: false },
-        halfLifeMonths: { type: DataTypes.DOUBLE, allowNull: true },
-        decayJson: { type: DataTypes.TEXT, allowNull: true },
-        adoptedCurveJson: { type: DataTypes.TEXT, allowNull: true },
-        replaceAfterMonths: { type: DataTypes.DOUBLE, allowNull: true },
-        notes: { type: DataTypes.TEXT, allowNull: true },
-        sourcesJson: { type: DataTypes.TEXT, allowNull: false },
-        presetKey: { type: DataTypes.STRING(60), allowNull: true },
-        createdById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
-        updatedById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
-      },
-      { sequelize, tableName: 'lamp_types' },
-    );
-  }
-}
+  presetKey: string(60).nullable(),
+  createdById: ref().nullable(),
+  updatedById: ref().nullable(),
+  ...timestamps(),
+}) {}

@@ -1,41 +1,14 @@
-import {
-  DataTypes,
-  Model,
-  type CreationOptional,
-  type InferAttributes,
-  type InferCreationAttributes,
-  type Sequelize,
-} from 'sequelize';
+import { boolean, id, string, table, timestamps } from './columns';
 
 /** A shop, zoo, rescue or household: the unit that owns people, enclosures and catalogues. */
-export class Organisation extends Model<
-  InferAttributes<Organisation>,
-  InferCreationAttributes<Organisation>
-> {
-  declare id: CreationOptional<number>;
-  declare name: string;
+export class Organisation extends table('organisations', {
+  id: id(),
+  name: string(120),
   /** Invented example data (the demo): every page and report showing its lamps and readings says so. */
-  declare exampleData: CreationOptional<boolean>;
+  exampleData: boolean().defaultsTo(false),
   /** How customers reach the shop (each optional): shown on test slips and in e-mails to customers. */
-  declare contactPhone: CreationOptional<string | null>;
-  declare contactEmail: CreationOptional<string | null>;
-  declare contactAddress: CreationOptional<string | null>;
-  declare createdAt: CreationOptional<Date>;
-  declare updatedAt: CreationOptional<Date>;
-
-  static register(sequelize: Sequelize) {
-    Organisation.init(
-      {
-        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
-        name: { type: DataTypes.STRING(120), allowNull: false },
-        exampleData: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
-        contactPhone: { type: DataTypes.STRING(40), allowNull: true },
-        contactEmail: { type: DataTypes.STRING(254), allowNull: true },
-        contactAddress: { type: DataTypes.STRING(200), allowNull: true },
-        createdAt: DataTypes.DATE,
-        updatedAt: DataTypes.DATE,
-      },
-      { sequelize, tableName: 'organisations' },
-    );
-  }
-}
+  contactPhone: string(40).nullable(),
+  contactEmail: string(254).nullable(),
+  contactAddress: string(200).nullable(),
+  ...timestamps(),
+}) {}
