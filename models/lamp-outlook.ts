@@ -3,7 +3,7 @@ import { date, dateOnly, double, ref, smallUnsigned, string, table, text, unsign
 import type { Lamp } from './lamp';
 
 /**
- * A lamp's outlook as last computed (lib/lamp-log/outlook-store.ts writes it): the status, the dates the
+ * A lamp's outlook as last computed (lib/lamp-log/stored-outlooks.ts writes it): the status, the dates the
  * lamp log filters and sorts by, and the rest as JSON. It is current when `sourceVersion` equals the
  * lamp's `outlookVersion` and `asOf` is today; otherwise pages say the figures are being brought up to
  * date.

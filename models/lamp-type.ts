@@ -37,7 +37,7 @@ export class LampType extends table('lamp_types', {
   halfLifeMonths: double().nullable(),
   /** Decay curve parameters as the engine takes them (JSON; null: the technology's default). */
   decayJson: text().nullable(),
-  /** The shop's own measured decay curve, when adopted for this type (lib/population/adoption.ts). */
+  /** The shop's own measured decay curve, when adopted for this type (lib/population/mutations.ts). */
   adoptedCurveJson: text().nullable(),
   /** Typical replacement interval, months (null: replace on failure). */
   replaceAfterMonths: double().nullable(),

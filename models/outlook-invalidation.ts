@@ -9,7 +9,7 @@ import { SpeciesSheet } from './species';
  * Keeps stored lamp outlooks honest: every write to what an outlook is computed from (a reading, the
  * lamp's settings, its lamp type, its enclosure's species or name, a species sheet the enclosure names)
  * adds one to the affected lamps' `outlook_version` in the same transaction, so a stored outlook of an
- * older version reads as out of date at once. Then the refresher (lib/lamp-log/outlook-store.ts, which
+ * older version reads as out of date at once. Then the refresher (lib/lamp-log/stored-outlooks.ts, which
  * registers itself) recomputes them: awaited inside the write when it is small and outside a
  * transaction, after the commit otherwise. Hooks rather than calls in each route, so no write path —
  * the API, the CSV import, the demo seed, a script — can forget it.

@@ -6,7 +6,7 @@
 import { closeSequelize, getSequelize } from '@/lib/db';
 import { DEMO_SIGN_INS } from '@/lib/demo/scenario';
 import { seedDemo } from '@/lib/demo/seed';
-import { refreshStaleOutlooks } from '@/lib/lamp-log/outlook-store';
+import { refreshStaleOutlooks } from '@/lib/lamp-log/stored-outlooks';
 import { runReminders } from '@/lib/reminders/run';
 
 async function main() {

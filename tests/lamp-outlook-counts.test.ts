@@ -1,8 +1,8 @@
 import { QueryTypes } from 'sequelize';
 import { describe, expect, it } from 'vitest';
-import { lampCounts } from '@/lib/api/lamp-list';
+import { lampCounts } from '@/lib/lamp-log/list-queries';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
-import { refreshOutlooks, refreshStaleOutlooks } from '@/lib/lamp-log/outlook-store';
+import { refreshOutlooks, refreshStaleOutlooks } from '@/lib/lamp-log/stored-outlooks';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { Enclosure, Lamp, LampType, Organisation, Reading, User } from '@/models';
 import { createEnclosure, createMember, createOrganisation, testDb, withTestDatabase } from './helpers/db';

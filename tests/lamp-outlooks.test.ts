@@ -1,8 +1,9 @@
 import { QueryTypes } from 'sequelize';
 import { describe, expect, it } from 'vitest';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
-import { refreshOutlooks, refreshStaleOutlooks, staleLampIds, summarise } from '@/lib/lamp-log/outlook-store';
-import { summariseLive } from '@/lib/lamp-log/store';
+import { refreshOutlooks, refreshStaleOutlooks, staleLampIds } from '@/lib/lamp-log/stored-outlooks';
+import { summarise } from '@/lib/lamp-log/queries';
+import { summariseLive } from '@/lib/lamp-log/queries';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { Lamp, LampOutlook, LampType, Reading, SpeciesSheet } from '@/models';
 import {

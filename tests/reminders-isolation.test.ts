@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
-import { summarise } from '@/lib/lamp-log/outlook-store';
+import { summarise } from '@/lib/lamp-log/queries';
 import type { Mail } from '@/lib/mail';
 import { enqueueReminder } from '@/lib/reminders/outbox';
 import { runReminders } from '@/lib/reminders/run';

@@ -1,8 +1,8 @@
 import { QueryTypes } from 'sequelize';
 import { describe, expect, it } from 'vitest';
-import { lampListQuery, listLamps } from '@/lib/api/lamp-list';
+import { lampListQuery, listLamps } from '@/lib/lamp-log/list-queries';
 import { todayIso } from '@/lib/lamp-log/dates';
-import { computeOutlooks, outlookJson } from '@/lib/lamp-log/store';
+import { computeOutlooks, outlookJson } from '@/lib/lamp-log/stored-outlooks';
 import { readStoredDesign } from '@/lib/variants/stored-design';
 import { Lamp, LampOutlook, User, Variant } from '@/models';
 import {

@@ -8,7 +8,7 @@ import { Notice } from '@/components/ui/Notice';
 import { button, link } from '@/components/ui/styles';
 import { Table, type TableColumn } from '@/components/ui/Table';
 import { useApiMutation } from '@/components/ui/useApiMutation';
-import type { CalibrationTarget } from '@/lib/lamp-log/calibration-service';
+import type { CalibrationTarget } from '@/lib/lamp-log/queries';
 
 type Proposal = { designObjectId: string | null; hint: string | null; targets: CalibrationTarget[] };
 

@@ -1,6 +1,6 @@
 import { scaleLinear, scaleUtc } from 'd3-scale';
 import { formatMoment } from '@/lib/time/format';
-import type { LampDetail } from '@/lib/lamp-log/store';
+import type { LampDetail } from '@/lib/lamp-log/queries';
 import {
   bandPath,
   LegendItem,

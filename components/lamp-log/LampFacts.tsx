@@ -4,7 +4,7 @@ import { card } from '@/components/ui/styles';
 import { formatLengthRounded } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
 import { BURN_IN_HOURS } from '@/lib/lamp-log/burn-in';
-import type { LampSummary } from '@/lib/lamp-log/store';
+import type { LampSummary } from '@/lib/lamp-log/queries';
 import { formatAge, formatDay, formatValue } from './format';
 
 const DAYS_PER_MONTH = 365.25 / 12;

@@ -8,7 +8,7 @@ import { Table } from '@/components/ui/Table';
 import { button } from '@/components/ui/styles';
 import { useLengthUnit } from '@/components/ui/units';
 import { useServerList } from '@/components/ui/useServerList';
-import type { LampListPage } from '@/lib/api/lamp-list';
+import type { LampListPage } from '@/lib/lamp-log/list-queries';
 import {
   DUE_WITHIN_DAYS,
   LAMP_PAGE_SIZE,

@@ -10,7 +10,7 @@ import { button } from '@/components/ui/styles';
 import { cmToDisplay } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
 import { useApiMutation } from '@/components/ui/useApiMutation';
-import type { LampSummary } from '@/lib/lamp-log/store';
+import type { LampSummary } from '@/lib/lamp-log/queries';
 import type { DesignLampOption } from './AddLampForm';
 import { LampUseFields } from './LampUseFields';
 

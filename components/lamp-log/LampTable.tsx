@@ -5,7 +5,7 @@ import { LocalTime } from '@/components/ui/LocalTime';
 import { link } from '@/components/ui/styles';
 import { formatLengthRounded, type LengthUnit } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
-import type { LampRow } from '@/lib/lamp-log/store';
+import type { LampRow } from '@/lib/lamp-log/queries';
 import { STATUS_RANK } from '@/lib/lamp-log/status';
 import { formatAge, formatDay, formatValue } from './format';
 import { StatusBadge } from './StatusBadge';

@@ -8,7 +8,7 @@ import { formatMoment } from '@/lib/time/format';
 import { button } from '@/components/ui/styles';
 import { formatLengthRounded } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
-import type { LampDetail } from '@/lib/lamp-log/store';
+import type { LampDetail } from '@/lib/lamp-log/queries';
 import { THROUGH_SHORT } from '@/shared/reading-setup';
 import { formatValue } from './format';
 import { ReadingSetupEdit } from './ReadingSetupEdit';

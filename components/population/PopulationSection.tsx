@@ -1,6 +1,6 @@
 import { ExampleDataMark } from '@/components/lamp-log/ExampleDataMark';
 import { card } from '@/components/ui/styles';
-import type { AdoptionView } from '@/lib/population/adoption';
+import type { AdoptionView } from '@/lib/population/queries';
 import { MIN_LAMPS, MIN_READINGS, MIN_SPAN_MONTHS } from '@/lib/population/fit';
 import type { AdoptedCurve } from '@/lib/lamp-types/schema';
 import { formatMoment } from '@/lib/time/format';

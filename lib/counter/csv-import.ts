@@ -1,7 +1,7 @@
 import 'server-only';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { getSequelize } from '@/lib/db';
-import { lampFacts, readingFacts } from '@/lib/lamp-log/store';
+import { lampFacts, readingFacts } from '@/lib/lamp-log/facts';
 import { toDto as lampTypeDto } from '@/lib/lamp-types/queries';
 import { CounterLamp, CounterReading, Customer, LampType } from '@/models';
 import { assessCounterLamp } from './assess';

@@ -6,7 +6,7 @@ import { counterLampFor } from '@/lib/customers/access';
 import { todayIso } from '@/lib/lamp-log/dates';
 import type { SpeciesNeed } from '@/lib/lamp-log/need';
 import type { ReadingFacts } from '@/lib/lamp-log/outlook';
-import { lampFacts, needOfSheet, readingFacts } from '@/lib/lamp-log/store';
+import { lampFacts, needOfSheet, readingFacts } from '@/lib/lamp-log/facts';
 import { allLampTypes, toDto as lampTypeDto } from '@/lib/lamp-types/queries';
 import { allSheets } from '@/lib/species/queries';
 import { CounterLamp, CounterReading, Customer, LampType, SpeciesSheet } from '@/models';

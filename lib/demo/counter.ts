@@ -2,7 +2,7 @@ import 'server-only';
 import type { Transaction } from 'sequelize';
 import { assessCounterLamp } from '@/lib/counter/assess';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
-import { lampFacts, needOfSheet, readingFacts } from '@/lib/lamp-log/store';
+import { lampFacts, needOfSheet, readingFacts } from '@/lib/lamp-log/facts';
 import { toDto as lampTypeDto } from '@/lib/lamp-types/queries';
 import { CounterLamp, CounterReading, Customer, LampType, Organisation, SpeciesSheet } from '@/models';
 import { DEMO_SHOP } from './scenario';

@@ -4,7 +4,7 @@ import { assessmentCost, PERCH_STEP_CM, propose } from '@/lib/guided-start/propo
 import { HEAT_LAMP_ID, PERCH_ID, UV_LAMP_ID, type Lid } from '@/lib/guided-start/layout';
 import { applyCalibration, calibrate } from '@/lib/lamp-log/calibrate';
 import { todayIso } from '@/lib/lamp-log/dates';
-import { lampFacts, readingFacts } from '@/lib/lamp-log/store';
+import { lampFacts, readingFacts } from '@/lib/lamp-log/facts';
 import type { LampTypeDto } from '@/lib/lamp-types/schema';
 import { toDto as lampTypeDto } from '@/lib/lamp-types/queries';
 import { toDto as sheetDto } from '@/lib/species/queries';

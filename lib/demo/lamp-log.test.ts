@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
 import { LEAD_DAYS } from '@/lib/reminders/due';
-import { summarise } from '@/lib/lamp-log/outlook-store';
+import { summarise } from '@/lib/lamp-log/queries';
 import { Lamp, Reading } from '@/models';
 import { seedDemo, withTestDatabase } from '@/tests/helpers/db';
 import { DEMO_LAMPS } from './lamp-log';

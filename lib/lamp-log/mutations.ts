@@ -1,8 +1,14 @@
 import 'server-only';
-import { invalid } from '@/lib/errors';
 import type { z } from 'zod';
-
-import { Lamp, LampType, Reading, type Enclosure } from '@/models';
+import type { CurrentUser } from '@/lib/auth/session-user';
+import { conflict, invalid, notFound } from '@/lib/errors';
+import { saveVariantDesign } from '@/lib/variants/mutations';
+import { readStoredDesign } from '@/lib/variants/stored-design';
+import { Lamp, LampType, Reading, Variant, type Enclosure } from '@/models';
+import { lampSchema } from '@/simulation';
+import type { LampWithEnclosure } from './access';
+import { applyCalibration } from './calibrate';
+import { calibrationTargets } from './queries';
 import { throughShare } from '@/shared/reading-setup';
 import { displayToCm } from '@/shared/units';
 import {
@@ -127,4 +133,43 @@ export async function updateReading(
   };
   const { lampId: _lampId, ...cols } = readingColumns(reading.lamp, merged);
   await reading.update(cols);
+}
+
+/** Writes the calibrated fields onto the variant's lamp object through the variants' compare-and-set save. */
+export async function applyCalibrationTo(
+  user: CurrentUser,
+  lamp: LampWithEnclosure,
+  variantId: number,
+  baseVersion: number | undefined,
+) {
+  if (!lamp.designObjectId) {
+    throw invalid('designObjectId', 'Link this lamp to its lamp in a design before calibrating.');
+  }
+  const target = (await calibrationTargets(lamp)).find((t) => t.variant.id === variantId);
+  if (!target) throw notFound('A variant of this enclosure with that lamp');
+  if (!target.calibration.ok) throw invalid(undefined, target.calibration.reason);
+  const variant = await Variant.findByPk(variantId);
+  if (!variant) throw notFound('The variant');
+  const version = baseVersion ?? variant.version;
+  if (version !== variant.version) {
+    throw conflict('Someone saved this variant after the proposal was made. Look at it again.', 'stale');
+  }
+  const design = readStoredDesign(variant.designJson);
+  // The calibrated figures and the note "calibrated on <date> from n meter readings" that the studio shows.
+  const calibrated = lampSchema.parse(
+    applyCalibration(target.object, target.calibration.fields, target.calibration.calibrated),
+  );
+  const next = {
+    ...design,
+    objects: design.objects.map((o) => (o.type === 'lamp' && o.id === lamp.designObjectId ? calibrated : o)),
+  };
+  const saved = await saveVariantDesign(user, variant, { design: next, baseVersion: version });
+  if (!saved.ok)
+    throw conflict('Someone saved this variant meanwhile. Nothing was changed; try again.', 'stale');
+  return {
+    variant: saved.variant,
+    object: calibrated,
+    calibrated: target.calibration.calibrated,
+    changes: target.calibration.changes,
+  };
 }

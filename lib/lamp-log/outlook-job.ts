@@ -1,5 +1,5 @@
 import type { Job } from '@/lib/jobs/runner';
-import { refreshStaleOutlooks } from './outlook-store';
+import { refreshStaleOutlooks } from './stored-outlooks';
 
 export const OUTLOOK_JOB = 'lamp-outlooks';
 

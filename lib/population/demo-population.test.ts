@@ -6,7 +6,7 @@ import { CounterLamp, CounterReading, LampType, Organisation } from '@/models';
 import { seedDemo, withTestDatabase } from '@/tests/helpers/db';
 import { counterFigures, weekOf, WEEKS } from './dashboard';
 import { MIN_LAMPS, MIN_READINGS, populationCurve } from './fit';
-import { populationInput } from './store';
+import { populationInput } from './queries';
 
 withTestDatabase();
 

@@ -3,7 +3,7 @@ import { Op } from 'sequelize';
 import { config } from '@/lib/config';
 import { runJob, type Job, type JobContext } from '@/lib/jobs/runner';
 import { todayIso } from '@/lib/lamp-log/dates';
-import { summarise } from '@/lib/lamp-log/outlook-store';
+import { summarise } from '@/lib/lamp-log/queries';
 import type { Mail } from '@/lib/mail';
 import { Enclosure, Lamp, Organisation, User } from '@/models';
 import { dueItems, type DueItem } from './due';

@@ -9,8 +9,8 @@
 // every seeded row equals a fresh recompute.
 import { Op } from 'sequelize';
 import { lampOutlook, type Outlook } from '@/lib/lamp-log/outlook';
-import { writeOutlooks } from '@/lib/lamp-log/outlook-store';
-import { lampFacts, loadFor, readingFacts, speciesForEnclosures, type Computed } from '@/lib/lamp-log/store';
+import { lampFacts, readingFacts } from '@/lib/lamp-log/facts';
+import { loadFor, speciesForEnclosures, writeOutlooks, type Computed } from '@/lib/lamp-log/stored-outlooks';
 import { Lamp } from '@/models';
 
 /** Lamps loaded, computed and written per round: a few thousand readings in memory at a time. */

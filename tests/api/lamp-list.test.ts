@@ -1,10 +1,10 @@
 import { QueryTypes } from 'sequelize';
 import { describe, expect, it } from 'vitest';
 import * as lampsRoute from '@/app/api/lamps/route';
-import { lampCounts, lampListQuery, lampListSql } from '@/lib/api/lamp-list';
+import { lampCounts, lampListQuery, lampListSql } from '@/lib/lamp-log/list-queries';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
-import { refreshStaleOutlooks } from '@/lib/lamp-log/outlook-store';
-import { lampRow, summariseLive } from '@/lib/lamp-log/store';
+import { refreshStaleOutlooks } from '@/lib/lamp-log/stored-outlooks';
+import { lampRow, summariseLive } from '@/lib/lamp-log/queries';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { Enclosure, Lamp, LampType, Membership, User } from '@/models';
 import {

@@ -9,7 +9,7 @@ import { enginePool, runEngineTask } from '@/lib/engine-pool';
 import { calibrate } from '@/lib/lamp-log/calibrate';
 import { lampChart } from '@/lib/lamp-log/chart';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
-import { lampFacts, readingFacts } from '@/lib/lamp-log/store';
+import { lampFacts, readingFacts } from '@/lib/lamp-log/facts';
 import { toDto as lampTypeDto } from '@/lib/lamp-types/queries';
 import { Design, Lamp, LampType, Reading, Variant } from '@/models';
 import { withTestDatabase } from '../helpers/db';

@@ -3,7 +3,7 @@ import * as assess from '@/app/api/counter/assess/route';
 import * as adoption from '@/app/api/lamp-types/[id]/curve-adoption/route';
 import * as population from '@/app/api/lamp-types/[id]/population/route';
 import { addDays, DAYS_PER_MONTH, todayIso } from '@/lib/lamp-log/dates';
-import { refreshOutlooks } from '@/lib/lamp-log/outlook-store';
+import { refreshOutlooks } from '@/lib/lamp-log/stored-outlooks';
 import { loadUserById } from '@/lib/auth/session-user';
 import { studioCatalogueFor } from '@/lib/lamp-types/studio-catalogue';
 import { MIN_LAMPS } from '@/lib/population/fit';

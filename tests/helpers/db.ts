@@ -5,7 +5,7 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import { afterAll, beforeEach } from 'vitest';
 import { closeSequelize, getSequelize } from '@/lib/db';
 import { seedDemo as seedDemoScenario, type SeedResult } from '@/lib/demo/seed';
-import { refreshStaleOutlooks } from '@/lib/lamp-log/outlook-store';
+import { refreshStaleOutlooks } from '@/lib/lamp-log/stored-outlooks';
 import { migrateUp } from '@/lib/migrate';
 import { Enclosure, Membership, Organisation, User, type Role } from '@/models';
 

@@ -1,11 +1,11 @@
 import { allow, route } from '@/lib/api';
-import { lampListQuery, listLamps } from '@/lib/api/lamp-list';
+import { lampListQuery, listLamps } from '@/lib/lamp-log/list-queries';
 import { roleIn } from '@/lib/permissions';
 
 /**
  * Lamps across an organisation (`?organisationId=`), searched, filtered (`status`, `enclosure`,
  * `keeper`, `tech`, `due` within days, `retired=1`), sorted and paged (`q`, `sort`, `dir`, `offset`,
- * `limit`; see lamp-list.ts), with the organisation's status counts. Owners and staff see every
+ * `limit`; see lib/lamp-log/list-queries.ts), with the organisation's status counts. Owners and staff see every
  * enclosure's lamps, a keeper only those of their own enclosures, whatever they filter by.
  */
 export const GET = route({

@@ -8,7 +8,7 @@ import { Notice } from '@/components/ui/Notice';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import { button, link } from '@/components/ui/styles';
-import { filteredEnclosure, lampListQuery, listLamps } from '@/lib/api/lamp-list';
+import { filteredEnclosure, lampListQuery, listLamps } from '@/lib/lamp-log/list-queries';
 import { memberName } from '@/lib/people/queries';
 import { lampListView } from '@/lib/lamp-log/list-view';
 import { isExampleData } from '@/lib/organisations/queries';

@@ -19,7 +19,7 @@ import { WARM_UP_MINUTES } from '@/shared/reading-setup';
 import { lampForPage } from '@/lib/lamp-log/access';
 import { designLampsOf } from '@/lib/lamp-log/design-lamps';
 import { isExampleData } from '@/lib/organisations/queries';
-import { lampDetail } from '@/lib/lamp-log/store';
+import { lampDetail } from '@/lib/lamp-log/queries';
 import { can } from '@/lib/permissions';
 import { parseId } from '@/lib/api/schemas';
 import { requireUser } from '@/lib/session';

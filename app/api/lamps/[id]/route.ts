@@ -4,7 +4,7 @@ import { lampFor } from '@/lib/lamp-log/access';
 import { todayIso } from '@/lib/lamp-log/dates';
 import { updateLamp } from '@/lib/lamp-log/mutations';
 import { updateLampBody } from '@/lib/lamp-log/schemas';
-import { lampDetail } from '@/lib/lamp-log/store';
+import { lampDetail } from '@/lib/lamp-log/queries';
 
 /** One lamp with its readings and the chart's data (points at 30 cm, fitted curve and band). */
 export const GET = route({

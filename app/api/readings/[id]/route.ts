@@ -3,7 +3,7 @@ import { idParams } from '@/lib/api/schemas';
 import { readingFor } from '@/lib/lamp-log/access';
 import { updateReading } from '@/lib/lamp-log/mutations';
 import { updateReadingBody } from '@/lib/lamp-log/schemas';
-import { readingJson } from '@/lib/lamp-log/store';
+import { readingJson } from '@/lib/lamp-log/queries';
 
 export const GET = route({
   params: idParams,

@@ -5,8 +5,8 @@ import { enclosureFor } from '@/lib/enclosures/access';
 import { todayIso } from '@/lib/lamp-log/dates';
 import { createLamp } from '@/lib/lamp-log/mutations';
 import { createLampBody } from '@/lib/lamp-log/schemas';
-import { summarise } from '@/lib/lamp-log/outlook-store';
-import { lampsOfEnclosure } from '@/lib/lamp-log/store';
+import { summarise } from '@/lib/lamp-log/queries';
+import { lampsOfEnclosure } from '@/lib/lamp-log/queries';
 
 /** The lamps installed in one enclosure, each with its age, last reading, fit and status. */
 export const GET = route({

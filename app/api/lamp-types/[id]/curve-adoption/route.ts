@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { json, route } from '@/lib/api';
 import { idParams } from '@/lib/api/schemas';
 import { populationTypeFor } from '@/lib/population/access';
-import { adoptCurve, withdrawCurve } from '@/lib/population/adoption';
+import { adoptCurve, withdrawCurve } from '@/lib/population/mutations';
 
 /**
  * Adopt the lamp type's measured curve for the organisation's lamps of this type (409 while there are too

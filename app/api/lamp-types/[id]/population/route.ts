@@ -2,8 +2,7 @@ import { route } from '@/lib/api';
 import { idParams } from '@/lib/api/schemas';
 import { toDto } from '@/lib/lamp-types/queries';
 import { populationTypeFor } from '@/lib/population/access';
-import { adoptionHistory } from '@/lib/population/adoption';
-import { populationFor } from '@/lib/population/store';
+import { adoptionHistory, populationFor } from '@/lib/population/queries';
 
 /**
  * A lamp type's decay curve measured from all the organisation's readings of it (or why there is none

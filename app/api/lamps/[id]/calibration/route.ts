@@ -1,7 +1,8 @@
 import { allow, route } from '@/lib/api';
 import { idParams } from '@/lib/api/schemas';
 import { lampFor } from '@/lib/lamp-log/access';
-import { applyCalibrationTo, calibrationProposal } from '@/lib/lamp-log/calibration-service';
+import { applyCalibrationTo } from '@/lib/lamp-log/mutations';
+import { calibrationProposal } from '@/lib/lamp-log/queries';
 import { calibrationBody } from '@/lib/lamp-log/schemas';
 
 /** What calibrating this lamp would change in each variant that has its design lamp. */

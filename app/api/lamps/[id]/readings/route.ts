@@ -4,7 +4,7 @@ import { idParams } from '@/lib/api/schemas';
 import { lampFor } from '@/lib/lamp-log/access';
 import { createReading } from '@/lib/lamp-log/mutations';
 import { createReadingBody } from '@/lib/lamp-log/schemas';
-import { readingJson, readingsOf } from '@/lib/lamp-log/store';
+import { readingJson, readingsOf } from '@/lib/lamp-log/queries';
 
 /** A lamp's readings, oldest first, paginated by id. */
 export const GET = route({

@@ -10,14 +10,15 @@ import {
   MAX_LAMP_SEARCH,
   type LampSortColumn,
 } from '@/lib/lamp-log/list-view';
-import { catchUpInBackground, lampRowsOf } from '@/lib/lamp-log/outlook-store';
+import { catchUpInBackground } from './stored-outlooks';
+import { lampRowsOf } from './queries';
 import { STATUS_RANK, STATUSES } from '@/lib/lamp-log/status';
 import { SORT_DIRECTIONS } from '@/lib/list-view';
 import { Enclosure } from '@/models';
 import { LAMP_TECH_IDS } from '@/simulation';
-import { likeContains } from './like';
-import { offsetQuery, pageQuery } from './pagination';
-import { idSchema, textSchema } from './schemas';
+import { likeContains } from '@/lib/api/like';
+import { offsetQuery, pageQuery } from '@/lib/api/pagination';
+import { idSchema, textSchema } from '@/lib/api/schemas';
 
 /**
  * `GET /api/lamps` query: search, filter, sort and page of one organisation's lamps, read from the

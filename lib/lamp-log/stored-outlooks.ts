@@ -1,22 +1,15 @@
 import 'server-only';
-import { Op, QueryTypes } from 'sequelize';
+import { Op, QueryTypes, col, fn, where as sqlWhere } from 'sequelize';
 import { getSequelize } from '@/lib/db';
 import { toDto as lampTypeDto } from '@/lib/lamp-types/queries';
-import { Enclosure, Lamp, LampOutlook, LampType } from '@/models';
+import type { LampTypeDto } from '@/lib/lamp-types/schema';
+import { Enclosure, Lamp, LampType, Reading, SpeciesSheet } from '@/models';
 import { setOutlookRefresher } from '@/models/outlook-invalidation';
 import { todayIso } from './dates';
-import { lampAgeDays } from './outlook';
+import { lampFacts, needOfSheet, readingFacts } from './facts';
+import type { SpeciesNeed } from './need';
+import { lampOutlook, STATUS_LABEL, type Outlook } from './outlook';
 import { STATUS_RANK } from './status';
-import {
-  computeOutlooks,
-  lampRow,
-  outlookJson,
-  type LampRow,
-  summaryJson,
-  type Computed,
-  type LampSummary,
-  type StoredOutlook,
-} from './store';
 
 /**
  * Stored lamp outlooks: computing and writing them (when what they depend on changes, and once a day as
@@ -33,13 +26,187 @@ const SLICE_MS = 20;
 /** Lamps loaded and written per round trip by the background passes. */
 const BATCH = 100;
 
-function yielder() {
+export function yielder() {
   let since = performance.now();
   return async () => {
     if (performance.now() - since < SLICE_MS) return;
     await new Promise((resolve) => setImmediate(resolve));
     since = performance.now();
   };
+}
+
+export type SpeciesMatch =
+  { ok: true; need: SpeciesNeed; sheetId: number } | { ok: false; missing: string; need: null };
+
+/** The enclosure's species sheet: its species name matched to a sheet's common or scientific name. */
+export async function speciesForEnclosures(enclosures: Enclosure[]): Promise<Map<number, SpeciesMatch>> {
+  const out = new Map<number, SpeciesMatch>();
+  const byOrg = new Map<number, Set<string>>();
+  for (const e of enclosures) {
+    const name = e.speciesName?.trim().toLowerCase();
+    if (name)
+      (byOrg.get(e.organisationId) ?? byOrg.set(e.organisationId, new Set()).get(e.organisationId)!).add(
+        name,
+      );
+  }
+  const sheets: SpeciesSheet[] = [];
+  for (const [organisationId, names] of byOrg) {
+    const list = [...names];
+    sheets.push(
+      ...(await SpeciesSheet.findAll({
+        where: {
+          organisationId,
+          [Op.or]: [
+            sqlWhere(fn('LOWER', col('common_name')), { [Op.in]: list }),
+            sqlWhere(fn('LOWER', col('scientific_name')), { [Op.in]: list }),
+          ],
+        },
+        order: [['id', 'ASC']],
+      })),
+    );
+  }
+  for (const e of enclosures) {
+    const name = e.speciesName?.trim();
+    if (!name) {
+      out.set(e.id, {
+        ok: false,
+        missing: 'the species of this enclosure (set it on the enclosure)',
+        need: null,
+      });
+      continue;
+    }
+    const lower = name.toLowerCase();
+    const sheet = sheets.find(
+      (s) =>
+        s.organisationId === e.organisationId &&
+        (s.commonName.toLowerCase() === lower || s.scientificName.toLowerCase() === lower),
+    );
+    out.set(
+      e.id,
+      sheet
+        ? {
+            ok: true,
+            sheetId: sheet.id,
+            need: needOfSheet(sheet),
+          }
+        : {
+            ok: false,
+            missing: `a species sheet named “${name}” (add one, or fix the enclosure’s species)`,
+            need: null,
+          },
+    );
+  }
+  return out;
+}
+
+/** The part of a lamp's summary that comes from its outlook: what `lamp_outlooks` stores. */
+export type StoredOutlook = ReturnType<typeof outlookJson>;
+
+function fitJson(o: Outlook) {
+  const f = o.fit;
+  return {
+    kind: f.kind,
+    certainty: f.certainty,
+    note: f.note,
+    n: f.n,
+    e0:
+      f.kind === 'exponential' || f.kind === 'two-phase'
+        ? f.e0
+        : f.kind === 'default-scaled'
+          ? f.scale
+          : null,
+    tauDays: f.kind === 'exponential' ? f.tauDays : null,
+    e0Se: f.kind === 'exponential' ? f.e0Se : null,
+    tauSe: f.kind === 'exponential' ? f.tauSe : null,
+    rmsLog: f.kind === 'exponential' || f.kind === 'two-phase' ? f.rmsLog : null,
+  };
+}
+
+export function outlookJson(species: SpeciesMatch, o: Outlook) {
+  const missing = [...o.missing];
+  if (!species.ok) {
+    const i = missing.indexOf('a species sheet for this enclosure');
+    if (i >= 0) missing[i] = species.missing;
+  }
+  return {
+    species: species.ok
+      ? { sheetId: species.sheetId, name: species.need.name, uvZone: species.need.uvZone }
+      : null,
+    unit: o.unit,
+    lastReading: o.lastReading,
+    burnIn: o.burnIn,
+    readingNotes: o.readingNotes,
+    ageing: o.ageing,
+    remainingFraction: o.remainingFraction,
+    nowAt30: o.nowAt30,
+    basking: o.basking,
+    missing,
+    fallsBelowOn: o.fallsBelowOn,
+    fallsBelowEarliestOn: o.fallsBelowEarliestOn,
+    photoperiod: o.photoperiod,
+    testDueOn: o.testDueOn,
+    replaceDueOn: o.replaceDueOn,
+    replaceBasis: o.replaceBasis,
+    status: o.status,
+    statusLabel: STATUS_LABEL[o.status],
+    reasons: o.reasons,
+    fit: fitJson(o),
+  };
+}
+
+export type Loaded = { lamp: Lamp; type: LampTypeDto; enclosure: Enclosure; readings: Reading[] };
+
+/** Loads what outlooks are computed from, for many lamps in a fixed number of queries. */
+export async function loadFor(lamps: Lamp[]): Promise<Loaded[]> {
+  if (lamps.length === 0) return [];
+  const ids = lamps.map((l) => l.id);
+  const [types, readings, enclosures] = await Promise.all([
+    LampType.findAll({ where: { id: [...new Set(lamps.map((l) => l.lampTypeId))] } }),
+    Reading.findAll({
+      where: { lampId: ids },
+      order: [
+        ['takenAt', 'ASC'],
+        ['id', 'ASC'],
+      ],
+    }),
+    Enclosure.findAll({ where: { id: [...new Set(lamps.map((l) => l.enclosureId))] } }),
+  ]);
+  const typeById = new Map(types.map((t) => [t.id, lampTypeDto(t)]));
+  const encById = new Map(enclosures.map((e) => [e.id, e]));
+  const readingsByLamp = new Map<number, Reading[]>();
+  for (const r of readings)
+    (readingsByLamp.get(r.lampId) ?? readingsByLamp.set(r.lampId, []).get(r.lampId)!).push(r);
+  return lamps.map((lamp) => ({
+    lamp,
+    type: typeById.get(lamp.lampTypeId)!,
+    enclosure: encById.get(lamp.enclosureId)!,
+    readings: readingsByLamp.get(lamp.id) ?? [],
+  }));
+}
+
+export type Computed = Loaded & { species: SpeciesMatch; outlook: Outlook };
+
+/**
+ * Computes outlooks from the database's current rows. `onEach` runs after each lamp, so a long run can
+ * give the event loop a turn (the passes below do).
+ */
+export async function computeOutlooks(
+  lamps: Lamp[],
+  today: string,
+  onEach?: () => Promise<void> | void,
+): Promise<Computed[]> {
+  const loaded = await loadFor(lamps);
+  const species = await speciesForEnclosures([
+    ...new Map(loaded.map((l) => [l.enclosure.id, l.enclosure])).values(),
+  ]);
+  const out: Computed[] = [];
+  for (const l of loaded) {
+    const match = species.get(l.enclosure.id)!;
+    const o = lampOutlook(lampFacts(l.lamp, l.type), l.readings.map(readingFacts), match.need, today);
+    out.push({ ...l, species: match, outlook: o });
+    await onEach?.();
+  }
+  return out;
 }
 
 const COLUMNS = [
@@ -212,133 +379,4 @@ export function catchUpInBackground(organisationId: number, today = todayIso()):
     .catch((e: unknown) => console.error('lamp outlook: catch-up failed', e instanceof Error ? e.message : e))
     .finally(() => running.delete(organisationId));
   running.set(organisationId, run);
-}
-
-export type LampWithOutlook = Lamp & {
-  enclosure: Enclosure;
-  lampType: LampType;
-  outlook: LampOutlook | null;
-};
-
-/** The include that loads a lamp with everything its summary shows, in the same query. */
-export const SUMMARY_INCLUDE = [
-  { model: Enclosure, as: 'enclosure', required: true },
-  { model: LampType, as: 'lampType', required: true },
-  { model: LampOutlook, as: 'outlook', required: false },
-];
-
-const isCurrent = (l: LampWithOutlook, today: string) =>
-  Boolean(l.outlook && l.outlook.sourceVersion === l.outlookVersion && l.outlook.asOf === today);
-
-/**
- * Summaries of lamps loaded with SUMMARY_INCLUDE, in their order. A lamp whose stored outlook is out of
- * date is recomputed here (a page shows a bounded number of lamps) and stored, so what a page shows is
- * never older than its last change; `recomputed` counts how many needed it.
- */
-export async function summariesOf(
-  lamps: LampWithOutlook[],
-  today = todayIso(),
-): Promise<{ items: LampSummary[]; recomputed: number }> {
-  const stale = lamps.filter((l) => !isCurrent(l, today));
-  const fresh = new Map<number, Computed>();
-  if (stale.length > 0) {
-    // In slices, as the background passes do: a page of stale lamps never holds the event loop long.
-    const computed = await computeOutlooks(stale, today, yielder());
-    await writeOutlooks(computed, today);
-    for (const c of computed) fresh.set(c.lamp.id, c);
-  }
-  const items = lamps.map((l) => {
-    const c = fresh.get(l.id);
-    const stored: StoredOutlook = c
-      ? outlookJson(c.species, c.outlook)
-      : (JSON.parse(l.outlook!.outlookJson) as StoredOutlook);
-    return summaryJson(l, lampTypeDto(l.lampType), l.enclosure, stored, today);
-  });
-  return { items, recomputed: stale.length };
-}
-
-/** Summaries of these lamps (any order of ids), read from the stored outlooks. */
-export async function summarise(lamps: Lamp[], today = todayIso()): Promise<LampSummary[]> {
-  if (lamps.length === 0) return [];
-  const loaded = (await Lamp.findAll({
-    where: { id: { [Op.in]: lamps.map((l) => l.id) } },
-    include: SUMMARY_INCLUDE,
-  })) as LampWithOutlook[];
-  const byId = new Map(loaded.map((l) => [l.id, l]));
-  const ordered = lamps.map((l) => byId.get(l.id)).filter((l): l is LampWithOutlook => Boolean(l));
-  return (await summariesOf(ordered, today)).items;
-}
-
-type RawRow = {
-  id: number;
-  label: string;
-  firstUsedOn: string;
-  retiredOn: string | null;
-  hoursPerDay: number;
-  version: number;
-  enclosureId: number;
-  enclosureName: string;
-  keeperId: number;
-  speciesName: string | null;
-  typeName: string;
-  tech: LampRow['lampType']['tech'];
-  outlookJson: string | null;
-  sourceVersion: number | null;
-  asOf: string | null;
-};
-
-/**
- * Table rows of these lamps, in the order of `ids`: one plain query of the columns a row shows (no
- * model instances, no lamp type's curves parsed), since a list page asks for a page of them on every
- * view. A lamp whose stored outlook is out of date goes through summariesOf instead (recomputed and
- * stored), so a row is never older than the lamp's last change.
- */
-export async function lampRowsOf(ids: readonly number[], today = todayIso()): Promise<LampRow[]> {
-  if (ids.length === 0) return [];
-  const raw = await getSequelize().query<RawRow>(
-    `SELECT l.id, l.label, DATE_FORMAT(l.first_used_on, '%Y-%m-%d') AS firstUsedOn,
-            DATE_FORMAT(l.retired_on, '%Y-%m-%d') AS retiredOn, l.hours_per_day AS hoursPerDay,
-            l.outlook_version AS version, e.id AS enclosureId, e.name AS enclosureName,
-            e.keeper_id AS keeperId, e.species_name AS speciesName, t.name AS typeName, t.tech,
-            o.outlook_json AS outlookJson, o.source_version AS sourceVersion,
-            DATE_FORMAT(o.as_of, '%Y-%m-%d') AS asOf
-       FROM lamps l JOIN enclosures e ON e.id = l.enclosure_id JOIN lamp_types t ON t.id = l.lamp_type_id
-       LEFT JOIN lamp_outlooks o ON o.lamp_id = l.id
-      WHERE l.id IN (:ids)`,
-    { replacements: { ids: [...ids] }, type: QueryTypes.SELECT },
-  );
-  const rows = new Map<number, LampRow>();
-  const stale: number[] = [];
-  for (const r of raw) {
-    if (r.outlookJson === null || Number(r.sourceVersion) !== Number(r.version) || r.asOf !== today) {
-      stale.push(r.id);
-      continue;
-    }
-    const stored = JSON.parse(r.outlookJson) as StoredOutlook;
-    rows.set(
-      r.id,
-      lampRow({
-        ...stored,
-        id: r.id,
-        label: r.label,
-        ageDays: lampAgeDays({ firstUsedOn: r.firstUsedOn, retiredOn: r.retiredOn }, today),
-        hoursPerDay: r.hoursPerDay,
-        lampType: { name: r.typeName, tech: r.tech },
-        enclosure: {
-          id: r.enclosureId,
-          name: r.enclosureName,
-          keeperId: r.keeperId,
-          speciesName: r.speciesName,
-        },
-      }),
-    );
-  }
-  if (stale.length > 0) {
-    const lamps = (await Lamp.findAll({
-      where: { id: stale },
-      include: SUMMARY_INCLUDE,
-    })) as LampWithOutlook[];
-    for (const s of (await summariesOf(lamps, today)).items) rows.set(s.id, lampRow(s));
-  }
-  return ids.map((id) => rows.get(id)).filter((r): r is LampRow => Boolean(r));
 }
