@@ -1,6 +1,7 @@
 import 'server-only';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { getSequelize } from '@/lib/db';
+import { measurementColumns } from '@/lib/lamp-log/csv-reading';
 import { lampFacts, readingFacts } from '@/lib/lamp-log/facts';
 import { toDto as lampTypeDto } from '@/lib/lamp-types/queries';
 import { CounterLamp, CounterReading, Customer, LampType } from '@/models';
@@ -138,17 +139,7 @@ export async function importCounterCsv(
           })
         : [];
       for (const r of [...rows].sort((a, b) => a.takenAt.localeCompare(b.takenAt))) {
-        const row = {
-          counterLampId: lamp.id,
-          takenAt: new Date(r.takenAt),
-          distanceCm: r.distanceCm,
-          value: r.value,
-          unit: r.unit,
-          through: r.through,
-          throughTransmission: r.throughTransmission,
-          warmedUp: r.warmedUp,
-          meter: r.meter,
-        };
+        const row = { counterLampId: lamp.id, ...measurementColumns(r) };
         // The verdict the counter gives that day, from this lamp's readings up to then. No species: the
         // file does not say where the lamp hangs at home.
         const earlier = taken.filter((t) => t.takenAt <= row.takenAt);

@@ -1,6 +1,15 @@
 import { personNameSchema } from '@/lib/api/schemas';
-import { cell, checkRows, readCsv, readingOfRow, takenAtOf, type CsvIssue } from '@/lib/lamp-log/csv-reading';
-import { throughShare, type ReadingThrough, type ReadingWarmedUp } from '@/shared/reading-setup';
+import {
+  cell,
+  checkRows,
+  csvMeasurement,
+  readCsv,
+  readingOfRow,
+  takenAtOf,
+  type CsvIssue,
+  type CsvMeasurement,
+} from '@/lib/lamp-log/csv-reading';
+import { throughShare } from '@/shared/reading-setup';
 
 /**
  * Past counter tests from a CSV file (a shop's own records from before it used the counter), read with
@@ -25,15 +34,7 @@ export type CounterCsvRow = {
   lampTypeId: number;
   lampTypeName: string;
   firstUsedOn: string;
-  takenAt: string;
-  distanceCm: number;
-  value: number;
-  unit: 'uvb' | 'uvi';
-  through: ReadingThrough;
-  throughTransmission: number | null;
-  warmedUp: ReadingWarmedUp;
-  meter: string | null;
-};
+} & CsvMeasurement;
 
 export type CounterCsvResult = { rows: CounterCsvRow[]; errors: CsvIssue[]; columns: string[] };
 
@@ -112,14 +113,7 @@ export function parseCounterCsv(
       lampTypeId: type.id,
       lampTypeName: type.name,
       firstUsedOn: firstUse,
-      takenAt: r.takenAt.toISOString(),
-      distanceCm: r.distanceCm,
-      value: r.value,
-      unit: r.unit,
-      through: r.through,
-      throughTransmission: share.share,
-      warmedUp: r.warmedUp,
-      meter: r.meter,
+      ...csvMeasurement(r, share.share),
     };
   });
 }

@@ -5,6 +5,7 @@ import { deleteObject } from '@/lib/storage/s3';
 import { storeCsv } from '@/lib/uploads/mutations';
 import { Lamp, Reading, type Enclosure, type Upload } from '@/models';
 import { parseReadingsCsv, type CsvResult } from './csv';
+import { measurementColumns } from './csv-reading';
 
 export type { CsvResult };
 
@@ -51,14 +52,7 @@ export async function importCsv(
       await Reading.bulkCreate(
         result.rows.map((r) => ({
           lampId: r.lampId,
-          takenAt: new Date(r.takenAt),
-          distanceCm: r.distanceCm,
-          value: r.value,
-          unit: r.unit,
-          through: r.through,
-          throughTransmission: r.throughTransmission,
-          warmedUp: r.warmedUp,
-          meter: r.meter,
+          ...measurementColumns(r),
           note: r.note,
           takenById: user.id,
           uploadId: stored!.id,

@@ -171,6 +171,42 @@ export function takenAtOf(rec: CsvRecord, tzOffsetMinutes: number): { when: stri
 
 export type CsvReading = z.output<z.ZodObject<typeof readingFields>> & { distanceCm: number };
 
+/** A checked row's measurement as an import previews and then stores it (its time as ISO text). */
+export type CsvMeasurement = {
+  takenAt: string;
+  distanceCm: number;
+  value: number;
+  unit: CsvReading['unit'];
+  through: ReadingThrough;
+  throughTransmission: number | null;
+  warmedUp: ReadingWarmedUp;
+  meter: string | null;
+};
+
+/** A checked reading's measurement, with the share through what lay between as the import settled it. */
+export const csvMeasurement = (r: CsvReading, throughTransmission: number | null): CsvMeasurement => ({
+  takenAt: r.takenAt.toISOString(),
+  distanceCm: r.distanceCm,
+  value: r.value,
+  unit: r.unit,
+  through: r.through,
+  throughTransmission,
+  warmedUp: r.warmedUp,
+  meter: r.meter,
+});
+
+/** The columns a stored reading (of the lamp log or the counter) takes from a measurement. */
+export const measurementColumns = (m: CsvMeasurement) => ({
+  takenAt: new Date(m.takenAt),
+  distanceCm: m.distanceCm,
+  value: m.value,
+  unit: m.unit,
+  through: m.through,
+  throughTransmission: m.throughTransmission,
+  warmedUp: m.warmedUp,
+  meter: m.meter,
+});
+
 /**
  * One row's reading checked as a typed-in one, or the issues with the columns they concern. The distance
  * is a `distance` column with `distance_unit` (cm by default, or in), or a `distance_cm` or `distance_in`

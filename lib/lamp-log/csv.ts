@@ -1,12 +1,14 @@
-import { throughShare, type ReadingThrough, type ReadingWarmedUp } from '@/shared/reading-setup';
+import { throughShare } from '@/shared/reading-setup';
 import {
   cell,
   checkRows,
+  csvMeasurement,
   parseTakenAt,
   readCsv,
   readingOfRow,
   takenAtOf,
   type CsvIssue,
+  type CsvMeasurement,
 } from './csv-reading';
 
 /**
@@ -35,20 +37,9 @@ export type CsvLamp = {
   baskingTransmission: number | null;
 };
 
-export type CsvRow = {
-  row: number;
-  lampId: number;
-  lampLabel: string;
-  takenAt: string;
-  distanceCm: number;
-  value: number;
-  unit: 'uvb' | 'uvi';
-  through: ReadingThrough;
-  throughTransmission: number | null;
-  warmedUp: ReadingWarmedUp;
-  meter: string | null;
-  note: string | null;
-};
+export type CsvRow = { row: number; lampId: number; lampLabel: string } & CsvMeasurement & {
+    note: string | null;
+  };
 
 export type { CsvIssue };
 export { parseTakenAt };
@@ -107,14 +98,7 @@ export function parseReadingsCsv(text: string, lamps: readonly CsvLamp[], tzOffs
       row,
       lampId: lamp.id,
       lampLabel: lamp.label,
-      takenAt: r.data.takenAt.toISOString(),
-      distanceCm: r.data.distanceCm,
-      value: r.data.value,
-      unit: r.data.unit,
-      through: r.data.through,
-      throughTransmission: share.share,
-      warmedUp: r.data.warmedUp,
-      meter: r.data.meter,
+      ...csvMeasurement(r.data, share.share),
       note: r.data.note,
     };
   });
