@@ -1,5 +1,6 @@
 import 'server-only';
 import { config } from '@/lib/config';
+import { readCapped } from '@/lib/read-capped';
 import { ApiError, payloadTooLarge } from './errors';
 
 export const MAX_JSON_BODY_BYTES = 1024 * 1024;
@@ -96,21 +97,9 @@ export async function readJsonBody(req: Request, limit = MAX_JSON_BODY_BYTES): P
     return undefined;
   }
   if (!/^application\/json\s*(;|$)/i.test(contentType)) throw unsupportedMediaType();
-  const reader = req.body.getReader();
-  const chunks: Uint8Array[] = [];
-  let size = 0;
-  for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    size += value.byteLength;
-    if (size > limit) {
-      await reader.cancel();
-      throw payloadTooLarge(limit);
-    }
-    chunks.push(value);
-  }
-  if (size === 0) return undefined;
-  const text = new TextDecoder().decode(Buffer.concat(chunks));
+  const bytes = await readCapped(req.body, limit, () => payloadTooLarge(limit));
+  if (bytes.byteLength === 0) return undefined;
+  const text = new TextDecoder().decode(bytes);
   try {
     return JSON.parse(text);
   } catch {

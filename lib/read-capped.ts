@@ -1,0 +1,30 @@
+/**
+ * Reads a request body of at most `limit` bytes, counting bytes as they arrive whatever Content-Length
+ * claimed, so an oversized body is refused (`tooLarge`) without being held in memory.
+ */
+export async function readCapped(
+  body: ReadableStream<Uint8Array>,
+  limit: number,
+  tooLarge: () => Error,
+): Promise<Uint8Array> {
+  const reader = body.getReader();
+  const chunks: Uint8Array[] = [];
+  let size = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    size += value.byteLength;
+    if (size > limit) {
+      await reader.cancel();
+      throw tooLarge();
+    }
+    chunks.push(value);
+  }
+  const out = new Uint8Array(size);
+  let at = 0;
+  for (const c of chunks) {
+    out.set(c, at);
+    at += c.byteLength;
+  }
+  return out;
+}
