@@ -24,6 +24,14 @@ export function parseId(text: string): number | null {
   return r.success ? r.data : null;
 }
 
+/** Optional free text of at most `max` characters: missing, null or empty (after trimming) is null. */
+export const optionalTextSchema = (max: number) =>
+  textSchema()
+    .trim()
+    .max(max, `Use at most ${max} characters.`)
+    .nullish()
+    .transform((v) => (v ? v : null));
+
 export const emailSchema = z
   .string({ error: 'Enter an e-mail address.' })
   .trim()

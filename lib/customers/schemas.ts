@@ -1,15 +1,9 @@
 import 'server-only';
 import { z } from 'zod';
-import { emailSchema, idSchema, personNameSchema, textSchema } from '@/lib/api/schemas';
+import { pageQuery } from '@/lib/api/pagination';
+import { emailSchema, idSchema, optionalTextSchema, personNameSchema, textSchema } from '@/lib/api/schemas';
 
 /** Request shapes of the customer routes and forms, with messages a person can act on. */
-
-const optionalText = (max: number) =>
-  textSchema()
-    .trim()
-    .max(max, `Use at most ${max} characters.`)
-    .nullish()
-    .transform((v) => (v ? v : null));
 
 const phoneSchema = textSchema('Enter the phone number as text.')
   .trim()
@@ -28,7 +22,7 @@ export const customerFields = {
     .nullish()
     .transform((v) => (v ? v : null)),
   phone: phoneSchema,
-  notes: optionalText(5000),
+  notes: optionalTextSchema(5000),
   /** Whether the customer agrees to reminder e-mails now; the date is recorded when it is given. */
   reminderConsent: z.boolean({ error: 'Reminder consent must be yes or no.' }).default(false),
 };
@@ -51,13 +45,7 @@ export const keeperLinkBody = z.strictObject({ keeperId: idSchema('The keeper') 
 export const customerListQuery = z.object({
   organisationId: idSchema('The organisation id'),
   q: textSchema().trim().max(100, 'Search for at most 100 characters.').optional(),
-  cursor: z.coerce.number({ error: 'The cursor must be a number.' }).int().positive().optional(),
-  limit: z.coerce
-    .number({ error: 'The limit must be a number.' })
-    .int()
-    .min(1, 'The limit must be at least 1.')
-    .max(100, 'The limit can be at most 100.')
-    .default(50),
+  ...pageQuery,
 });
 
 export type CustomerInput = z.output<typeof createCustomerBody>;

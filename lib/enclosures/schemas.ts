@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { idSchema, textSchema } from '@/lib/api/schemas';
+import { idSchema, optionalTextSchema, textSchema } from '@/lib/api/schemas';
 import { ENCLOSURE_MAX_CM, ENCLOSURE_MIN_CM } from '@/shared/enclosure-size';
 
 /** Enclosure fields as the API accepts them. Sizes are inside dimensions in centimetres. */
@@ -13,13 +13,6 @@ const size = (what: string) =>
       `The ${what} can be at most ${ENCLOSURE_MAX_CM} cm (${ENCLOSURE_MAX_CM / 100} m).`,
     );
 
-const optionalText = (max: number) =>
-  textSchema()
-    .trim()
-    .max(max, `Use at most ${max} characters.`)
-    .nullish()
-    .transform((v) => (v ? v : null));
-
 export const enclosureFields = {
   name: textSchema('Enter a name for the enclosure.')
     .trim()
@@ -29,9 +22,9 @@ export const enclosureFields = {
   widthCm: size('width'),
   heightCm: size('height'),
   depthCm: size('depth'),
-  speciesName: optionalText(160),
-  animalName: optionalText(120),
-  notes: optionalText(5000),
+  speciesName: optionalTextSchema(160),
+  animalName: optionalTextSchema(120),
+  notes: optionalTextSchema(5000),
 };
 
 /** `keeperId` may be left out: the enclosure is then the caller's own. */

@@ -1,6 +1,6 @@
 import 'server-only';
 import { z } from 'zod';
-import { idSchema, textSchema } from '@/lib/api/schemas';
+import { idSchema, optionalTextSchema, textSchema } from '@/lib/api/schemas';
 import { READING_UNITS } from '@/models/reading';
 import { READING_THROUGH, READING_WARMED_UP } from '@/shared/reading-setup';
 import { LENGTH_UNITS } from '@/shared/units';
@@ -19,13 +19,6 @@ export const isoDate = (what: string) =>
       },
     );
 
-const text = (max: number) =>
-  textSchema()
-    .trim()
-    .max(max, `Use at most ${max} characters.`)
-    .nullish()
-    .transform((v) => (v ? v : null));
-
 const lengthUnit = z.enum(LENGTH_UNITS, { error: 'The length unit must be cm or in.' }).default('cm');
 
 const distance = (what: string, max: number) =>
@@ -40,7 +33,7 @@ export const lampFields = {
     .trim()
     .min(1, 'Give the lamp a name, e.g. "Basking tube".')
     .max(120, 'Use at most 120 characters.'),
-  designObjectId: text(100),
+  designObjectId: optionalTextSchema(100),
   firstUsedOn: isoDate('the date of first use'),
   hoursPerDay: z
     .number({ error: 'Enter the hours a day it is on.' })
@@ -54,7 +47,7 @@ export const lampFields = {
     .max(1, 'The share passing through is at most 1 (nothing in between).')
     .nullish(),
   retiredOn: isoDate('the retirement date').nullish(),
-  notes: text(5000),
+  notes: optionalTextSchema(5000),
   lengthUnit,
 };
 
@@ -101,8 +94,8 @@ export const readingFields = {
   warmedUp: z
     .enum(READING_WARMED_UP, { error: 'Warmed up must be yes, no or not-recorded.' })
     .default('not-recorded'),
-  meter: text(160),
-  note: text(2000),
+  meter: optionalTextSchema(160),
+  note: optionalTextSchema(2000),
 };
 
 export const createReadingBody = z.strictObject(readingFields);
