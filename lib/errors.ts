@@ -79,3 +79,13 @@ export const rateLimited = (message: string, retryAfterS: number) =>
 
 export const isDomainError = (e: unknown, ...kinds: DomainErrorKind[]): e is DomainError =>
   e instanceof DomainError && (kinds.length === 0 || kinds.includes(e.kind));
+
+/** For a page: what `load` gives, or null when it throws "not found" (the page then answers its 404). */
+export async function nullIfNotFound<T>(load: () => Promise<T>): Promise<T | null> {
+  try {
+    return await load();
+  } catch (e) {
+    if (isDomainError(e, 'not_found')) return null;
+    throw e;
+  }
+}

@@ -1,6 +1,6 @@
 import 'server-only';
 import { loadOwned } from '@/lib/access';
-import { isDomainError } from '@/lib/errors';
+import { nullIfNotFound } from '@/lib/errors';
 
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { can, type Action } from '@/lib/permissions';
@@ -22,18 +22,10 @@ export function mayUseCounter(user: CurrentUser, organisationId: number): boolea
   return can(user, 'create', { kind: 'customer', organisationId });
 }
 
-async function orNull<T>(load: () => Promise<T>): Promise<T | null> {
-  try {
-    return await load();
-  } catch (e) {
-    if (isDomainError(e, 'not_found')) return null;
-    throw e;
-  }
-}
-
 /** For pages: the customer if `user` may read them, else null (the page answers 404). */
-export const customerForPage = (user: CurrentUser, id: number) => orNull(() => customerFor(user, id, 'read'));
+export const customerForPage = (user: CurrentUser, id: number) =>
+  nullIfNotFound(() => customerFor(user, id, 'read'));
 
 /** For pages: the counter lamp if `user` may read it, else null. */
 export const counterLampForPage = (user: CurrentUser, id: number) =>
-  orNull(() => counterLampFor(user, id, 'read'));
+  nullIfNotFound(() => counterLampFor(user, id, 'read'));

@@ -1,6 +1,6 @@
 import 'server-only';
 import { loadOwned, type LampWithEnclosure, type ReadingWithLamp } from '@/lib/access';
-import { isDomainError } from '@/lib/errors';
+import { nullIfNotFound } from '@/lib/errors';
 
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { can, type Action } from '@/lib/permissions';
@@ -25,19 +25,9 @@ export const lampFor = (user: CurrentUser, id: number, action: Action): Promise<
 export const readingFor = (user: CurrentUser, id: number, action: Action): Promise<ReadingWithLamp> =>
   loadOwned('reading', id, user, action);
 
-/** A page's 404 for what this user may not read, whichever the reason (missing or someone else's). */
-async function orNull<T>(load: () => Promise<T>): Promise<T | null> {
-  try {
-    return await load();
-  } catch (e) {
-    if (isDomainError(e, 'not_found')) return null;
-    throw e;
-  }
-}
-
 /** For pages: the lamp if `user` may read it (else null), its access resource, and whether they may change it. */
 export async function lampForPage(user: CurrentUser, id: number) {
-  const lamp = await orNull(() => lampFor(user, id, 'read'));
+  const lamp = await nullIfNotFound(() => lampFor(user, id, 'read'));
   if (!lamp) return null;
   const owner = resource(lamp.enclosure, 'lamp');
   return { lamp, resource: owner, canEdit: can(user, 'update', owner) };
@@ -45,6 +35,6 @@ export async function lampForPage(user: CurrentUser, id: number) {
 
 /** For pages: the enclosure if `user` may read its lamps (else null), and whether they may change them. */
 export async function enclosureForLampsPage(user: CurrentUser, id: number) {
-  const enclosure = await orNull(() => enclosureFor(user, id, 'read'));
+  const enclosure = await nullIfNotFound(() => enclosureFor(user, id, 'read'));
   return enclosure && { enclosure, canEdit: can(user, 'update', resource(enclosure, 'lamp')) };
 }
