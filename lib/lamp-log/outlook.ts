@@ -261,37 +261,26 @@ export function lampOutlook(
   const reasons: string[] = [];
   const missing: string[] = [];
 
-  if (lamp.retiredOn) {
-    return {
-      ...base,
-      basking: null,
-      missing,
-      fallsBelowOn: null,
-      fallsBelowEarliestOn: null,
-      photoperiod: null,
-      testDueOn: null,
-      replaceDueOn: null,
-      replaceBasis: null,
-      status: 'retired',
-      reasons: [`Retired on ${lamp.retiredOn}.`],
-    };
-  }
+  // A retired lamp and a heat lamp with nothing measured have no basking figures, dates or tests.
+  const unscheduled = (status: 'retired' | 'heat-only', reason: string): Outlook => ({
+    ...base,
+    basking: null,
+    missing,
+    fallsBelowOn: null,
+    fallsBelowEarliestOn: null,
+    photoperiod: null,
+    testDueOn: null,
+    replaceDueOn: null,
+    replaceBasis: null,
+    status,
+    reasons: [reason],
+  });
+  if (lamp.retiredOn) return unscheduled('retired', `Retired on ${lamp.retiredOn}.`);
   if (!(lamp.type.uvbAt30 > 0) && readings.length === 0) {
-    return {
-      ...base,
-      basking: null,
-      missing,
-      fallsBelowOn: null,
-      fallsBelowEarliestOn: null,
-      photoperiod: null,
-      testDueOn: null,
-      replaceDueOn: null,
-      replaceBasis: null,
-      status: 'heat-only',
-      reasons: [
-        'A heat lamp with no UV output: replace it when it fails. Check temperatures with a thermometer.',
-      ],
-    };
+    return unscheduled(
+      'heat-only',
+      'A heat lamp with no UV output: replace it when it fails. Check temperatures with a thermometer.',
+    );
   }
 
   // Test schedule: the baseline once the burn-in is over, then every few months.
