@@ -1,6 +1,8 @@
 import 'server-only';
 import { Op, type WhereOptions } from 'sequelize';
 import { z } from 'zod';
+import { SORT_DIRECTIONS, type SortDirection } from '@/lib/list-view';
+import { textSchema } from './schemas';
 
 /** `?cursor=&limit=`: the cursor is the id of the last item of the previous page (lists are in id order). */
 export const pageQuery = {
@@ -31,3 +33,26 @@ export function page<T extends { id: number }, R>(rows: T[], limit: number, map:
   const last = items[items.length - 1];
   return { items: items.map(map), nextCursor: rows.length > limit && last ? String(last.id) : null };
 }
+
+/**
+ * `?q=&sort=&dir=&offset=&limit=` of an offset-paged list that is searched and sorted on the server (a
+ * table with page numbers and a total). `withSort` then settles the column and its direction.
+ */
+export const sortedListFields = <C extends string>(columns: readonly [C, ...C[]], maxSearch: number) => ({
+  q: textSchema('The search must be text.')
+    .trim()
+    .max(maxSearch, `Keep the search to ${maxSearch} characters.`)
+    .optional(),
+  sort: z.enum(columns, { error: `Sort by one of: ${columns.join(', ')}.` }).optional(),
+  dir: z.enum(SORT_DIRECTIONS, { error: 'The direction must be asc or desc.' }).optional(),
+  offset: offsetQuery,
+  limit: pageQuery.limit,
+});
+
+/** The sort's column (or the list's default) and its direction (or the column's natural one). */
+export const withSort =
+  <C extends string>(fallback: NoInfer<C>, defaultDescending: (column: C) => boolean) =>
+  <R extends { sort?: C; dir?: SortDirection }>({ sort, dir, ...rest }: R) => {
+    const column = sort ?? fallback;
+    return { ...rest, sort: column, descending: dir ? dir === 'desc' : defaultDescending(column) };
+  };

@@ -7,12 +7,11 @@ import {
   defaultDescending,
   ENCLOSURE_SORT_COLUMNS,
   MAX_ENCLOSURE_SEARCH,
-  SORT_DIRECTIONS,
   type EnclosureSortColumn,
 } from '@/lib/enclosures/list-view';
 import { likeContains } from '@/lib/api/like';
-import { offsetQuery, pageQuery } from '@/lib/api/pagination';
-import { idSchema, textSchema } from '@/lib/api/schemas';
+import { sortedListFields, withSort } from '@/lib/api/pagination';
+import { idSchema } from '@/lib/api/schemas';
 import { Enclosure, User } from '@/models';
 
 /**
@@ -30,23 +29,9 @@ export const enclosureListQuery = z
   .object({
     organisationId: idSchema('The organisation id'),
     keeperId: idSchema('The keeper').optional(),
-    q: textSchema('The search must be text.')
-      .trim()
-      .max(MAX_ENCLOSURE_SEARCH, `Keep the search to ${MAX_ENCLOSURE_SEARCH} characters.`)
-      .optional(),
-    sort: z
-      .enum(ENCLOSURE_SORT_COLUMNS, {
-        error: `Sort by one of: ${ENCLOSURE_SORT_COLUMNS.join(', ')}.`,
-      })
-      .default('updated'),
-    dir: z.enum(SORT_DIRECTIONS, { error: 'The direction must be asc or desc.' }).optional(),
-    offset: offsetQuery,
-    limit: pageQuery.limit,
+    ...sortedListFields(ENCLOSURE_SORT_COLUMNS, MAX_ENCLOSURE_SEARCH),
   })
-  .transform(({ dir, ...rest }) => ({
-    ...rest,
-    descending: dir ? dir === 'desc' : defaultDescending(rest.sort),
-  }));
+  .transform(withSort('updated', defaultDescending));
 
 export type EnclosureListQuery = z.output<typeof enclosureListQuery>;
 

@@ -1,29 +1,28 @@
 import 'server-only';
 import { QueryTypes } from 'sequelize';
 import { z } from 'zod';
+import { likeContains } from '@/lib/api/like';
+import { sortedListFields, withSort } from '@/lib/api/pagination';
+import { idSchema } from '@/lib/api/schemas';
 import { getSequelize } from '@/lib/db';
-import { addDays, todayIso } from '@/lib/lamp-log/dates';
+import { Enclosure } from '@/models';
+import { LAMP_TECH_IDS } from '@/simulation';
+import { addDays, todayIso } from './dates';
 import {
   DUE_WITHIN_DAYS,
   defaultLampDescending,
   LAMP_SORT_COLUMNS,
   MAX_LAMP_SEARCH,
   type LampSortColumn,
-} from '@/lib/lamp-log/list-view';
-import { catchUpInBackground } from './stored-outlooks';
+} from './list-view';
 import { lampRowsOf } from './queries';
-import { STATUS_RANK, STATUSES } from '@/lib/lamp-log/status';
-import { SORT_DIRECTIONS } from '@/lib/list-view';
-import { Enclosure } from '@/models';
-import { LAMP_TECH_IDS } from '@/simulation';
-import { likeContains } from '@/lib/api/like';
-import { offsetQuery, pageQuery } from '@/lib/api/pagination';
-import { idSchema, textSchema } from '@/lib/api/schemas';
+import { STATUS_RANK, STATUSES } from './status';
+import { catchUpInBackground } from './stored-outlooks';
 
 /**
  * `GET /api/lamps` query: search, filter, sort and page of one organisation's lamps, read from the
  * stored outlooks (lamp_outlooks), so a request costs a page of lamps whatever the organisation owns.
- * Offset paging with a total, like the enclosures list (see enclosure-list.ts for why).
+ * Offset paging with a total, like the enclosures list (see lib/enclosures/queries.ts for why).
  */
 export const lampListQuery = z
   .object({
@@ -41,21 +40,11 @@ export const lampListQuery = z
     retired: z.enum(['1', '0']).optional(),
     /** The older name of `retired=1`. */
     includeRetired: z.enum(['true', 'false']).optional(),
-    q: textSchema('The search must be text.')
-      .trim()
-      .max(MAX_LAMP_SEARCH, `Keep the search to ${MAX_LAMP_SEARCH} characters.`)
-      .optional(),
-    sort: z
-      .enum(LAMP_SORT_COLUMNS, { error: `Sort by one of: ${LAMP_SORT_COLUMNS.join(', ')}.` })
-      .default('urgency'),
-    dir: z.enum(SORT_DIRECTIONS, { error: 'The direction must be asc or desc.' }).optional(),
-    offset: offsetQuery,
-    limit: pageQuery.limit,
+    ...sortedListFields(LAMP_SORT_COLUMNS, MAX_LAMP_SEARCH),
   })
-  .transform(({ dir, retired, includeRetired, ...rest }) => ({
-    ...rest,
+  .transform(({ retired, includeRetired, ...rest }) => ({
+    ...withSort('urgency', defaultLampDescending)(rest),
     includeRetired: retired === '1' || includeRetired === 'true',
-    descending: dir ? dir === 'desc' : defaultLampDescending(rest.sort),
   }));
 
 export type LampListQuery = z.output<typeof lampListQuery>;
@@ -81,41 +70,28 @@ type Scope = { organisationId: number; keeperId?: number };
 
 /** WHERE clause and replacements for a query's scope, filters and search. */
 export function lampListWhere(query: LampListFilter, today: string) {
-  const where = ['o.organisation_id = :organisationId'];
-  const r: Record<string, unknown> = { organisationId: query.organisationId };
-  if (query.keeperId) {
-    where.push('e.keeper_id = :keeperId');
-    r.keeperId = query.keeperId;
-  }
-  if (query.enclosure) {
-    where.push('l.enclosure_id = :enclosureId');
-    r.enclosureId = query.enclosure;
-  }
-  if (query.status) {
-    where.push('o.status_rank = :rank');
-    r.rank = STATUS_RANK[query.status];
-  } else if (!query.includeRetired) {
-    where.push('o.status_rank < :retiredRank');
-    r.retiredRank = STATUS_RANK.retired;
-  }
-  if (query.tech) {
-    where.push('t.tech = :tech');
-    r.tech = query.tech;
-  }
-  if (query.due) {
-    where.push('o.next_due_on <= :dueBy');
-    r.dueBy = addDays(today, query.due);
-  }
+  const where: string[] = [];
+  const r: Record<string, unknown> = {};
+  const add = (clause: string, values: Record<string, unknown>) => {
+    where.push(clause);
+    Object.assign(r, values);
+  };
+  add('o.organisation_id = :organisationId', { organisationId: query.organisationId });
+  if (query.keeperId) add('e.keeper_id = :keeperId', { keeperId: query.keeperId });
+  if (query.enclosure) add('l.enclosure_id = :enclosureId', { enclosureId: query.enclosure });
+  if (query.status) add('o.status_rank = :rank', { rank: STATUS_RANK[query.status] });
+  else if (!query.includeRetired) add('o.status_rank < :retiredRank', { retiredRank: STATUS_RANK.retired });
+  if (query.tech) add('t.tech = :tech', { tech: query.tech });
+  if (query.due) add('o.next_due_on <= :dueBy', { dueBy: addDays(today, query.due) });
   // Every word must appear in the lamp's label, its type's name, the enclosure's name or its species.
   (query.q ?? '')
     .split(/\s+/)
     .filter(Boolean)
-    .forEach((word, i) => {
-      where.push(
-        `(l.label LIKE :w${i} OR t.name LIKE :w${i} OR e.name LIKE :w${i} OR e.species_name LIKE :w${i})`,
-      );
-      r[`w${i}`] = likeContains(word);
-    });
+    .forEach((word, i) =>
+      add(`(l.label LIKE :w${i} OR t.name LIKE :w${i} OR e.name LIKE :w${i} OR e.species_name LIKE :w${i})`, {
+        [`w${i}`]: likeContains(word),
+      }),
+    );
   return { sql: where.join(' AND '), replacements: r };
 }
 

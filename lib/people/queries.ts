@@ -6,15 +6,14 @@ import {
   KEEPER_SORT_COLUMNS,
   MAX_PEOPLE_SEARCH,
   MEMBER_SORT_COLUMNS,
-  SORT_DIRECTIONS,
   type MemberSortColumn,
 } from '@/lib/people/list-view';
 import type { Role } from '@/lib/permissions';
 import { memberJson, type MemberRow } from '@/lib/organisations/queries';
 import { invitationJson } from '@/lib/auth/invitations';
 import { likeContains } from '@/lib/api/like';
-import { offsetQuery, pageQuery } from '@/lib/api/pagination';
-import { idSchema, roleSchema, textSchema } from '@/lib/api/schemas';
+import { sortedListFields, withSort } from '@/lib/api/pagination';
+import { idSchema, roleSchema } from '@/lib/api/schemas';
 import { enclosureCounts } from '@/lib/enclosures/queries';
 import { Invitation, Membership, User } from '@/models';
 
@@ -26,34 +25,18 @@ import { Invitation, Membership, User } from '@/models';
  * follows the page, not the hundreds of customers a shop has. Who joined order comes from the index;
  * name, e-mail and role orders sort the organisation's memberships (a few hundred rows) in the database.
  */
-const listFields = <C extends readonly [MemberSortColumn, ...MemberSortColumn[]]>(columns: C) => ({
-  q: textSchema('The search must be text.')
-    .trim()
-    .max(MAX_PEOPLE_SEARCH, `Keep the search to ${MAX_PEOPLE_SEARCH} characters.`)
-    .optional(),
-  sort: z.enum(columns, { error: `Sort by one of: ${columns.join(', ')}.` }).optional(),
-  dir: z.enum(SORT_DIRECTIONS, { error: 'The direction must be asc or desc.' }).optional(),
-  offset: offsetQuery,
-  limit: pageQuery.limit,
-});
-
-/** The sort's column (or the list's default) and its direction (or the column's natural one). */
-function withSort(fallback: MemberSortColumn) {
-  return <R extends { sort?: MemberSortColumn; dir?: 'asc' | 'desc' }>({ sort, dir, ...rest }: R) => {
-    const column = sort ?? fallback;
-    return { ...rest, sort: column, descending: dir ? dir === 'desc' : defaultPeopleDescending(column) };
-  };
-}
-
 /** `GET /api/keepers` query. */
 export const keeperListQuery = z
-  .object({ organisationId: idSchema('The organisation id'), ...listFields(KEEPER_SORT_COLUMNS) })
-  .transform(withSort('name'));
+  .object({
+    organisationId: idSchema('The organisation id'),
+    ...sortedListFields(KEEPER_SORT_COLUMNS, MAX_PEOPLE_SEARCH),
+  })
+  .transform(withSort('name', defaultPeopleDescending));
 
 /** `GET /api/organisations/[id]/members` query: the list's fields and a role to narrow to. */
 export const memberListQuery = z
-  .object({ ...listFields(MEMBER_SORT_COLUMNS), role: roleSchema.optional() })
-  .transform(withSort('role'));
+  .object({ ...sortedListFields(MEMBER_SORT_COLUMNS, MAX_PEOPLE_SEARCH), role: roleSchema.optional() })
+  .transform(withSort('role', defaultPeopleDescending));
 
 export type PeopleListQuery = {
   organisationId: number;
