@@ -221,10 +221,11 @@ export async function counterLampView(lamp: CounterLamp, today = todayIso()): Pr
     lamp.speciesSheetId ? SpeciesSheet.findByPk(lamp.speciesSheetId) : null,
     CounterReading.findAll({ where: { counterLampId: lamp.id }, order: [['takenAt', 'ASC']] }),
   ]);
+  const kept = keptColumns(lamp);
   const answer =
     type && readings.length > 0
       ? answerOf(
-          { lampId: lamp.id, lamp: keptColumns(lamp), type, species: speciesOfSheet(sheet) },
+          { lampId: lamp.id, lamp: kept, type, species: speciesOfSheet(sheet) },
           readings.map(readingFacts),
           today,
         )
@@ -239,15 +240,8 @@ export async function counterLampView(lamp: CounterLamp, today = todayIso()): Pr
           mayEmail: Boolean(customer.email && customer.reminderConsentAt),
         }
       : null,
-    label: lamp.label ?? null,
-    lampTypeId: lamp.lampTypeId,
+    ...kept,
     lampTypeName: type?.name ?? 'Unknown lamp type',
-    firstUsedOn: lamp.firstUsedOn,
-    firstUsedEstimated: lamp.firstUsedEstimated,
-    hoursPerDay: lamp.hoursPerDay,
-    speciesSheetId: lamp.speciesSheetId ?? null,
-    baskingDistanceCm: lamp.baskingDistanceCm ?? null,
-    baskingTransmission: lamp.baskingTransmission ?? null,
     readings: readings.map((r) => ({
       id: r.id,
       takenAt: r.takenAt.toISOString(),
