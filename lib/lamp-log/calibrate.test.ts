@@ -1,19 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { lampSchema, type LampObject } from '@/simulation';
+import { lampSchema } from '@/simulation';
 import { applyCalibration, calibrate, pairedRatio } from './calibrate';
-import { readingsOf, t5Lamp } from '@/tests/fixtures/lamp-log';
+import { readingsOf, t5Lamp, t5LampObject } from '@/tests/fixtures/lamp-log';
 
-const object: LampObject = {
-  type: 'lamp',
-  id: 'uv1',
-  tech: 't5',
-  form: 'tube',
-  x: 60,
-  y: 62,
-  length: 55,
-  uvbAt30: 42.5,
-  uviPerUvb: 0.04,
-};
+const object = t5LampObject();
 
 describe('calibrate', () => {
   const lamp = t5Lamp();

@@ -12,6 +12,7 @@ import { addDays, todayIso } from '@/lib/lamp-log/dates';
 import { lampFacts, readingFacts } from '@/lib/lamp-log/facts';
 import { toDto as lampTypeDto } from '@/lib/lamp-types/queries';
 import { Design, Lamp, LampType, Reading, Variant } from '@/models';
+import { t5LampObject } from '../fixtures/lamp-log';
 import { withTestDatabase } from '../helpers/db';
 import { createEnclosureWorld } from '../helpers/world';
 import { call, expectNoInternals } from './http';
@@ -344,19 +345,7 @@ describe('calibration', () => {
       format: 'baskwell.design',
       version: 2,
       enclosure: { width: 120, height: 60, depth: 60 },
-      objects: [
-        {
-          type: 'lamp',
-          id: 'uv1',
-          tech: 't5',
-          form: 'tube',
-          x: 60,
-          y: 62,
-          length: 55,
-          uvbAt30: 42.5,
-          uviPerUvb: 0.04,
-        },
-      ],
+      objects: [t5LampObject()],
     };
     return Variant.create({
       designId: design.id,
