@@ -1,3 +1,5 @@
+import { concatBytes } from '@/lib/bytes';
+
 /**
  * Reads a request body of at most `limit` bytes, counting bytes as they arrive whatever Content-Length
  * claimed, so an oversized body is refused (`tooLarge`) without being held in memory.
@@ -20,11 +22,5 @@ export async function readCapped(
     }
     chunks.push(value);
   }
-  const out = new Uint8Array(size);
-  let at = 0;
-  for (const c of chunks) {
-    out.set(c, at);
-    at += c.byteLength;
-  }
-  return out;
+  return concatBytes(chunks);
 }

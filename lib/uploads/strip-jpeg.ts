@@ -1,3 +1,4 @@
+import { concatBytes } from '@/lib/bytes';
 import { InvalidImageError } from './errors';
 
 /**
@@ -60,15 +61,5 @@ export function stripJpeg(input: Uint8Array): Uint8Array {
 
 function finish(parts: Uint8Array[], sawFrame: boolean): Uint8Array {
   if (!sawFrame) throw new InvalidImageError('JPEG');
-  return concat(parts);
-}
-
-export function concat(parts: readonly Uint8Array[]): Uint8Array {
-  const out = new Uint8Array(parts.reduce((s, p) => s + p.length, 0));
-  let o = 0;
-  for (const p of parts) {
-    out.set(p, o);
-    o += p.length;
-  }
-  return out;
+  return concatBytes(parts);
 }

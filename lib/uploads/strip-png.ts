@@ -1,5 +1,5 @@
 import { InvalidImageError } from './errors';
-import { concat } from './strip-jpeg';
+import { concatBytes } from '@/lib/bytes';
 
 /**
  * Keeps only the chunks of a PNG needed to draw it (ISO/IEC 15948 / W3C PNG, §11): the critical ones and
@@ -37,7 +37,7 @@ export function stripPng(input: Uint8Array): Uint8Array {
     if (first && type !== 'IHDR') throw new InvalidImageError('PNG');
     first = false;
     if (KEEP.has(type)) parts.push(input.subarray(i, end));
-    if (type === 'IEND') return concat(parts);
+    if (type === 'IEND') return concatBytes(parts);
     i = end;
   }
   throw new InvalidImageError('PNG');

@@ -1,5 +1,5 @@
 import { InvalidImageError } from './errors';
-import { concat } from './strip-jpeg';
+import { concatBytes } from '@/lib/bytes';
 
 /**
  * Removes metadata from a WebP (RFC 9649): only the chunks that draw the picture are kept ("EXIF", "XMP "
@@ -33,9 +33,9 @@ export function stripWebp(input: Uint8Array): Uint8Array {
     i = end;
   }
   if (!sawImage) throw new InvalidImageError('WebP');
-  const body = concat(parts);
+  const body = concatBytes(parts);
   const header = new Uint8Array(12);
   header.set(input.subarray(0, 12));
   new DataView(header.buffer).setUint32(4, 4 + body.length, true);
-  return concat([header, body]);
+  return concatBytes([header, body]);
 }
