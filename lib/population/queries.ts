@@ -97,23 +97,32 @@ export async function populationInput(type: LampType): Promise<PopulationInput> 
     for (const r of rows) (out.get(key(r)) ?? out.set(key(r), []).get(key(r))!).push(r);
     return out;
   };
-  const byLamp = group(readings, (r) => r.lampId);
-  const byCounterLamp = group(counterReadings, (r) => r.counterLampId);
-  const population: PopulationLamp[] = [
-    ...lamps.map((l) => ({
-      key: `lamp-${l.id}`,
-      source: 'enclosure' as const,
+  const entries = <R extends Parameters<typeof readingFacts>[0]>(
+    rows: { id: number; firstUsedOn: string; hoursPerDay: number }[],
+    source: PopulationLamp['source'],
+    keyPrefix: string,
+    readingsOf: Map<number, R[]>,
+  ): PopulationLamp[] =>
+    rows.map((l) => ({
+      key: `${keyPrefix}-${l.id}`,
+      source,
       firstUsedOn: l.firstUsedOn,
       hoursPerDay: l.hoursPerDay,
-      readings: (byLamp.get(l.id) ?? []).map(readingFacts),
-    })),
-    ...counterLamps.map((l) => ({
-      key: `counter-${l.id}`,
-      source: 'counter' as const,
-      firstUsedOn: l.firstUsedOn,
-      hoursPerDay: l.hoursPerDay,
-      readings: (byCounterLamp.get(l.id) ?? []).map(readingFacts),
-    })),
+      readings: (readingsOf.get(l.id) ?? []).map(readingFacts),
+    }));
+  const population = [
+    ...entries(
+      lamps,
+      'enclosure',
+      'lamp',
+      group(readings, (r) => r.lampId),
+    ),
+    ...entries(
+      counterLamps,
+      'counter',
+      'counter',
+      group(counterReadings, (r) => r.counterLampId),
+    ),
   ];
   return { type: typeFacts(type), lamps: population };
 }
