@@ -51,15 +51,21 @@ const THREE_MONTHS_DAYS = Math.round(3 * (365.25 / 12));
 
 const days = (from: string, to: string) => dayNumber(to) - dayNumber(from);
 
+type Assessed = Parameters<typeof assessCounterLamp>[0];
+/** A six-month-old tube assessed today from these readings, with no species unless `over` gives one. */
+const assess = (readings: ReadingFacts[], over: Partial<Assessed> = {}) =>
+  assessCounterLamp({
+    lamp: tube(SIX_MONTHS),
+    readings,
+    species: null,
+    today: TODAY,
+    ageEstimated: false,
+    ...over,
+  });
+
 describe('the counter verdict, without a species', () => {
   it('keeps a lamp at new output and sets the next test at the usual three months', () => {
-    const { verdict } = assessCounterLamp({
-      lamp: tube(SIX_MONTHS),
-      readings: [reading(100)],
-      species: null,
-      today: TODAY,
-      ageEstimated: true,
-    });
+    const { verdict } = assess([reading(100)], { ageEstimated: true });
     expect(verdict.kind).toBe('keep');
     expect(verdict.output!.share).toBeCloseTo(1, 6);
     expect(verdict.output!.low).toBeCloseTo(1 - METER_UNCERTAINTY, 6);
@@ -71,13 +77,7 @@ describe('the counter verdict, without a species', () => {
 
   it('replaces a lamp below half of new output (common practice, no published source)', () => {
     expect(REPLACE_BELOW_SHARE).toBe(0.5);
-    const { verdict } = assessCounterLamp({
-      lamp: tube(SIX_MONTHS),
-      readings: [reading(45)],
-      species: null,
-      today: TODAY,
-      ageEstimated: false,
-    });
+    const { verdict } = assess([reading(45)]);
     expect(verdict.kind).toBe('replace');
     expect(verdict.output!.share).toBeCloseTo(0.45, 6);
     expect(verdict.testAgainOn).toBeNull();
@@ -85,37 +85,19 @@ describe('the counter verdict, without a species', () => {
 
   it('replaces a lamp that is above half only within the meter’s uncertainty', () => {
     // 55 % of new, less 15 %, is 46.75 %: it may already be below half.
-    const { verdict } = assessCounterLamp({
-      lamp: tube(SIX_MONTHS),
-      readings: [reading(55)],
-      species: null,
-      today: TODAY,
-      ageEstimated: false,
-    });
+    const { verdict } = assess([reading(55)]);
     expect(verdict.kind).toBe('replace');
     expect(verdict.output!.low).toBeCloseTo(0.4675, 6);
   });
 
   it('takes the lid out once: 50 through a lid passing half reads as the bare lamp’s 100', () => {
-    const { verdict } = assessCounterLamp({
-      lamp: tube(SIX_MONTHS),
-      readings: [reading(50, { through: 'lid', throughTransmission: 0.5 })],
-      species: null,
-      today: TODAY,
-      ageEstimated: false,
-    });
+    const { verdict } = assess([reading(50, { through: 'lid', throughTransmission: 0.5 })]);
     expect(verdict.output!.share).toBeCloseTo(1, 6);
     expect(verdict.kind).toBe('keep');
   });
 
   it('asks for a new reading today when the lamp was not warmed up', () => {
-    const { verdict } = assessCounterLamp({
-      lamp: tube(SIX_MONTHS),
-      readings: [reading(20, { warmedUp: 'no' })],
-      species: null,
-      today: TODAY,
-      ageEstimated: false,
-    });
+    const { verdict } = assess([reading(20, { warmedUp: 'no' })]);
     expect(verdict.kind).toBe('test-again');
     expect(verdict.testAgainOn).toBe(TODAY);
     expect(verdict.output).toBeNull();
@@ -132,13 +114,7 @@ describe('the counter verdict, without a species', () => {
       uvbAt30: 0,
       halfLifeMonths: null,
     };
-    const { verdict } = assessCounterLamp({
-      lamp: heat,
-      readings: [],
-      species: null,
-      today: TODAY,
-      ageEstimated: false,
-    });
+    const { verdict } = assess([], { lamp: heat });
     expect(verdict.kind).toBe('no-verdict');
   });
 });
@@ -147,28 +123,18 @@ describe('the counter verdict, for a species at a basking distance', () => {
   // Measured at the basking distance with a UV Index meter, so the basking value today is the reading.
   const home = (firstUsedOn: string) => tube(firstUsedOn, { baskingDistanceCm: 30 });
   const uvi = (value: number) => reading(value, { unit: 'uvi' });
+  const assessAtHome = (readings: ReadingFacts[]) =>
+    assess(readings, { lamp: home(SIX_MONTHS), species: ZONE3 });
 
   it('replaces a lamp whose basking spot is below the zone-3 need of UVI 2.9', () => {
-    const { verdict } = assessCounterLamp({
-      lamp: home(SIX_MONTHS),
-      readings: [uvi(2.5)],
-      species: ZONE3,
-      today: TODAY,
-      ageEstimated: false,
-    });
+    const { verdict } = assessAtHome([uvi(2.5)]);
     expect(verdict.kind).toBe('replace');
     expect(verdict.basking!.threshold).toBe(2.9);
     expect(verdict.basking!.valueNow).toBeCloseTo(2.5, 6);
   });
 
   it('replaces a lamp above the need only within the meter’s uncertainty (3.2 × 0.85 = 2.72)', () => {
-    const { verdict } = assessCounterLamp({
-      lamp: home(SIX_MONTHS),
-      readings: [uvi(3.2)],
-      species: ZONE3,
-      today: TODAY,
-      ageEstimated: false,
-    });
+    const { verdict } = assessAtHome([uvi(3.2)]);
     expect(verdict.kind).toBe('replace');
     expect(verdict.basking!.low).toBeCloseTo(2.72, 6);
   });
@@ -176,13 +142,7 @@ describe('the counter verdict, for a species at a basking distance', () => {
   it('keeps a strong lamp and names the month it falls below the need', () => {
     // UVI 5 at six months, halving every 12 months: below 2.9 after 12·log2(5/2.9) ≈ 9.4 more months
     // (about March 2027); the low estimate (×0.85) after 12·log2(4.25/2.9) ≈ 6.6 months (about December 2026).
-    const { verdict } = assessCounterLamp({
-      lamp: home(SIX_MONTHS),
-      readings: [uvi(5)],
-      species: ZONE3,
-      today: TODAY,
-      ageEstimated: false,
-    });
+    const { verdict } = assessAtHome([uvi(5)]);
     expect(verdict.kind).toBe('keep');
     expect(verdict.testAgainOn).toBe(addDays(TODAY, THREE_MONTHS_DAYS));
     expect(verdict.fallsBelowMonth).toBe('2027-03');
@@ -191,13 +151,7 @@ describe('the counter verdict, for a species at a basking distance', () => {
 
   it('asks for a test before the low estimate reaches the need, never sooner than a week', () => {
     // UVI 3.6: low 3.06, below 2.9 after 12·log2(3.06/2.9) ≈ 0.93 months (about 28 days).
-    const { verdict } = assessCounterLamp({
-      lamp: home(SIX_MONTHS),
-      readings: [uvi(3.6)],
-      species: ZONE3,
-      today: TODAY,
-      ageEstimated: false,
-    });
+    const { verdict } = assessAtHome([uvi(3.6)]);
     expect(verdict.kind).toBe('test-again');
     const wait = days(TODAY, verdict.testAgainOn!);
     expect(wait).toBeGreaterThanOrEqual(MIN_RETEST_DAYS);
@@ -206,20 +160,8 @@ describe('the counter verdict, for a species at a basking distance', () => {
 
   it('a second reading gives the lamp its own decay: a fast fade brings the replacement forward', () => {
     const first = { ...uvi(6), takenAt: `${addDays(TODAY, -60)}T10:00:00Z` };
-    const fast = assessCounterLamp({
-      lamp: home(SIX_MONTHS),
-      readings: [first, uvi(4.5)],
-      species: ZONE3,
-      today: TODAY,
-      ageEstimated: false,
-    });
-    const usual = assessCounterLamp({
-      lamp: home(SIX_MONTHS),
-      readings: [uvi(4.5)],
-      species: ZONE3,
-      today: TODAY,
-      ageEstimated: false,
-    });
+    const fast = assessAtHome([first, uvi(4.5)]);
+    const usual = assessAtHome([uvi(4.5)]);
     expect(fast.outlook.fit.kind).toBe('exponential');
     expect(usual.outlook.fit.kind).toBe('default-scaled');
     // 6 → 4.5 in two months is a half-life of about 4.8 months, much faster than the usual 12.
