@@ -29,7 +29,7 @@ export class Column<T, OnCreate extends 'optional' | 'required' = 'required'> {
     return new Column({ ...this.definition, allowNull: true });
   }
 
-  /** The database fills it with `value` when a create leaves it out. */
+  /** A create that leaves it out stores `value` (Sequelize fills it in, as the table's own default would). */
   defaultsTo(value: T): Column<T, 'optional'> {
     return new Column({ ...this.definition, defaultValue: value });
   }
