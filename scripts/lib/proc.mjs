@@ -1,6 +1,6 @@
 // Child processes for the start and test scripts: run to completion, run as a service, stop, wait for.
 import { spawn } from 'node:child_process';
-import { createWriteStream, existsSync } from 'node:fs';
+import { createWriteStream, existsSync, mkdirSync } from 'node:fs';
 import net from 'node:net';
 import path from 'node:path';
 import { BIN, ROOT } from './env.mjs';
@@ -55,6 +55,7 @@ export function run(cmd, args = [], { env, cwd = ROOT, capture = false, check = 
     child.stdout?.on('data', (d) => (stdout += d));
     child.stderr?.on('data', (d) => (stderr += d));
     if (capture && logFile) {
+      mkdirSync(path.dirname(logFile), { recursive: true });
       const out = createWriteStream(logFile);
       child.stdout.pipe(out, { end: false });
       child.stderr.pipe(out, { end: false });
@@ -84,6 +85,8 @@ export function service(name, cmd, args, { env, cwd = ROOT, logFile } = {}) {
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   if (logFile) {
+    // A fresh clone has no test-results/ yet; the stream would fail only after the service started.
+    mkdirSync(path.dirname(logFile), { recursive: true });
     const out = createWriteStream(logFile, { flags: 'a' });
     child.stdout.pipe(out);
     child.stderr.pipe(out);
