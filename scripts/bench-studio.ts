@@ -38,7 +38,21 @@ function parseArgs(argv: string[]) {
   return opts;
 }
 
-type Opening = { visible: number; computed: number };
+/**
+ * One opening, in ms after the navigation started: the two marks, and where the time before the first one
+ * went — the HTML's first and last byte, the browser's first paint, and the main thread's long tasks
+ * (over 50 ms, the browser's own threshold) that began before the field was visible.
+ */
+type Opening = {
+  visible: number;
+  computed: number;
+  firstByte: number;
+  htmlEnd: number;
+  firstPaint: number;
+  /** When the last stylesheet file arrived (NaN when the page has none to fetch: its CSS is inline). */
+  cssEnd: number;
+  busyBeforeVisible: number;
+};
 
 function quantile(xs: number[], q: number): number {
   const s = [...xs].sort((a, b) => a - b);
@@ -52,6 +66,19 @@ async function openOnce(browser: Browser, url: string, cookies: Parameters<Brows
   const context = await newContext(browser);
   try {
     if (cookies.length) await context.addCookies(cookies);
+    // Registered through the browser's debugging protocol, before the page's own scripts (its policy does
+    // not apply): long tasks are not kept for an observer that starts later.
+    await context.addInitScript(() => {
+      const w = window as unknown as { __longTasks: [number, number][] };
+      w.__longTasks = [];
+      try {
+        new PerformanceObserver((list) => {
+          for (const e of list.getEntries()) w.__longTasks.push([e.startTime, e.duration]);
+        }).observe({ type: 'longtask', buffered: true });
+      } catch {
+        // No long task timing in this browser: the breakdown reports 0.
+      }
+    });
     const page = await context.newPage();
     await page.goto(url, { waitUntil: 'commit' });
     // No named helper inside: tsx would wrap it in a function of its own that the page does not have
@@ -60,7 +87,26 @@ async function openOnce(browser: Browser, url: string, cookies: Parameters<Brows
       () => {
         const visible = performance.getEntriesByName('field-visible', 'mark')[0]?.startTime;
         const computed = performance.getEntriesByName('field-computed', 'mark')[0]?.startTime;
-        return visible !== undefined && computed !== undefined ? { visible, computed } : null;
+        if (visible === undefined || computed === undefined) return null;
+        const nav = performance.getEntriesByType('navigation')[0] as PerformanceNavigationTiming | undefined;
+        const firstPaint = performance.getEntriesByName('first-paint', 'paint')[0]?.startTime ?? NaN;
+        const tasks = (window as unknown as { __longTasks?: [number, number][] }).__longTasks ?? [];
+        let busyBeforeVisible = 0;
+        for (const [start, duration] of tasks)
+          if (start < visible) busyBeforeVisible += Math.min(duration, visible - start);
+        const cssEnds = performance
+          .getEntriesByType('resource')
+          .filter((r) => /\.css(\?|$)/.test(r.name))
+          .map((r) => (r as PerformanceResourceTiming).responseEnd);
+        return {
+          visible,
+          computed,
+          firstByte: nav?.responseStart ?? NaN,
+          htmlEnd: nav?.responseEnd ?? NaN,
+          firstPaint,
+          cssEnd: cssEnds.length ? Math.max(...cssEnds) : NaN,
+          busyBeforeVisible,
+        };
       },
       null,
       { timeout: 120_000, polling: 50 },
@@ -134,31 +180,24 @@ async function main() {
     const load1 = loadavg()[0]!;
 
     const r0 = (v: number) => Math.round(v);
+    const med = (xs: Opening[], key: keyof Opening, q = 0.5) =>
+      r0(
+        quantile(
+          xs.map((x) => x[key]),
+          q,
+        ),
+      );
     const summary = (xs: Opening[]) => ({
-      visibleMedianMs: r0(
-        quantile(
-          xs.map((x) => x.visible),
-          0.5,
-        ),
-      ),
-      visibleP90Ms: r0(
-        quantile(
-          xs.map((x) => x.visible),
-          0.9,
-        ),
-      ),
-      computedMedianMs: r0(
-        quantile(
-          xs.map((x) => x.computed),
-          0.5,
-        ),
-      ),
-      computedP90Ms: r0(
-        quantile(
-          xs.map((x) => x.computed),
-          0.9,
-        ),
-      ),
+      visibleMedianMs: med(xs, 'visible'),
+      visibleP90Ms: med(xs, 'visible', 0.9),
+      computedMedianMs: med(xs, 'computed'),
+      computedP90Ms: med(xs, 'computed', 0.9),
+      // Medians of the breakdown: where the wait before the field went.
+      firstByteMs: med(xs, 'firstByte'),
+      htmlEndMs: med(xs, 'htmlEnd'),
+      firstPaintMs: med(xs, 'firstPaint'),
+      cssEndMs: med(xs, 'cssEnd'),
+      busyBeforeVisibleMs: med(xs, 'busyBeforeVisible'),
     });
     const saved = summary(results['saved design']!);
     const scratch = summary(results['scratch studio']!);
@@ -173,6 +212,11 @@ async function main() {
       console.log(
         `  ${name.padEnd(15)} field visible: median ${s.visibleMedianMs} ms, p90 ${s.visibleP90Ms} ms; ` +
           `computed: median ${s.computedMedianMs} ms, p90 ${s.computedP90Ms} ms`,
+      );
+      console.log(
+        `  ${''.padEnd(15)} medians: first byte ${s.firstByteMs} ms, HTML complete ${s.htmlEndMs} ms, ` +
+          `stylesheet file ${Number.isNaN(s.cssEndMs) ? 'none (inline)' : `${s.cssEndMs} ms`}, ` +
+          `first paint ${s.firstPaintMs} ms, main thread in long tasks before the field ${s.busyBeforeVisibleMs} ms`,
       );
     }
     console.log(`Load average ${load0.toFixed(1)} before, ${load1.toFixed(1)} after (a shared machine).`);
