@@ -1,25 +1,22 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import * as importRoute from '@/app/api/counter/import/route';
-import { CounterLamp, CounterReading, Customer, LampType, type Organisation, type User } from '@/models';
+import { CounterLamp, CounterReading, Customer, LampType, type User } from '@/models';
 import { withTestDatabase } from '../helpers/db';
-import { createWorld } from '../helpers/world';
+import { freshWorld } from '../helpers/world';
 import { call } from './http';
 
 // The import of past counter tests against the real test database.
 withTestDatabase();
 
-let shop: Organisation;
-let staff: User;
-let keeper: User;
-let outsider: User;
 let tube: LampType;
 
+const world = freshWorld({ catalogue: true });
+
 beforeEach(async () => {
-  ({ shop, staff, keeper, outsider } = await createWorld({ catalogue: true }));
-  tube = (await LampType.findOne({ where: { organisationId: shop.id, tech: 't5' } }))!;
+  tube = (await LampType.findOne({ where: { organisationId: world.shop.id, tech: 't5' } }))!;
 });
 
-const send = (as: User | null, csv: string, commit: boolean, organisationId = shop.id) =>
+const send = (as: User | null, csv: string, commit: boolean, organisationId = world.shop.id) =>
   call(importRoute.POST, {
     method: 'POST',
     path: '/api/counter/import',
@@ -31,7 +28,11 @@ const HEADER = 'customer,lamp_type,first_use,date,distance,distance_unit,value,u
 
 describe('import of past counter tests', () => {
   it('previews without saving, then imports every row: customers found or added, one lamp per customer, type and first use, each with its verdict', async () => {
-    const known = await Customer.create({ organisationId: shop.id, name: 'Kim Invented', createdById: null });
+    const known = await Customer.create({
+      organisationId: world.shop.id,
+      name: 'Kim Invented',
+      createdById: null,
+    });
     const csv = [
       HEADER,
       `kim invented,"${tube.name}",2025-01-10,2025-03-01,30,cm,60,uvb,broadband`,
@@ -39,12 +40,12 @@ describe('import of past counter tests', () => {
       `Lou Newcomer,${tube.id},2025-02-01,2025-05-01,12,in,50,uvb,`,
       `,"${tube.name}",2025-02-01,2025-05-02,30,cm,20,uvb,`,
     ].join('\n');
-    const preview = await send(staff, csv, false);
+    const preview = await send(world.staff, csv, false);
     expect(preview.status).toBe(200);
     expect(preview.body).toMatchObject({ ok: true, total: 4, newCustomers: ['Lou Newcomer'] });
     expect(await CounterReading.count()).toBe(0);
 
-    const r = await send(staff, csv, true);
+    const r = await send(world.staff, csv, true);
     expect(r.status).toBe(201);
     expect(r.body).toEqual({ imported: 4, customersAdded: 1, lampsAdded: 3 });
     const kimLamps = await CounterLamp.findAll({ where: { customerId: known.id } });
@@ -55,15 +56,19 @@ describe('import of past counter tests', () => {
     });
     expect(kimReadings.map((x) => x.value)).toEqual([60, 35]);
     for (const x of kimReadings) expect(['keep', 'test-again', 'replace', 'no-verdict']).toContain(x.verdict);
-    const lou = (await Customer.findOne({ where: { organisationId: shop.id, name: 'Lou Newcomer' } }))!;
+    const lou = (await Customer.findOne({ where: { organisationId: world.shop.id, name: 'Lou Newcomer' } }))!;
     expect(lou.reminderConsentAt).toBeNull();
     const louLamp = (await CounterLamp.findOne({ where: { customerId: lou.id } }))!;
     expect((await CounterReading.findOne({ where: { counterLampId: louLamp.id } }))!.distanceCm).toBe(30.5);
-    expect(await CounterLamp.count({ where: { organisationId: shop.id, customerId: null } })).toBe(1);
+    expect(await CounterLamp.count({ where: { organisationId: world.shop.id, customerId: null } })).toBe(1);
 
     // The same lamp tested again later (a second file) gets the new reading, not a second lamp.
     const later = [HEADER, `Kim Invented,"${tube.name}",2025-01-10,2025-11-01,30,cm,30,uvb,`].join('\n');
-    expect((await send(staff, later, true)).body).toEqual({ imported: 1, customersAdded: 0, lampsAdded: 0 });
+    expect((await send(world.staff, later, true)).body).toEqual({
+      imported: 1,
+      customersAdded: 0,
+      lampsAdded: 0,
+    });
     expect(await CounterReading.count({ where: { counterLampId: kimLamps[0]!.id } })).toBe(3);
   });
 
@@ -74,7 +79,7 @@ describe('import of past counter tests', () => {
       `Kim Invented,No such lamp,2025-01-10,2025-03-01,30,cm,60,uvb,`,
       `Kim Invented,"${tube.name}",2025-01-10,2025-03-01,30,cm,sixty,uvb,`,
     ].join('\n');
-    const r = await send(staff, csv, true);
+    const r = await send(world.staff, csv, true);
     expect(r.status).toBe(400);
     expect(r.body.error.field).toBe('rows[3].lamp_type');
     expect(r.body.error.issues.map((i: { field: string }) => i.field)).toEqual([
@@ -88,7 +93,7 @@ describe('import of past counter tests', () => {
 
   it('keepers, another organisation and nobody can neither preview nor import', async () => {
     const csv = [HEADER, `Kim Invented,"${tube.name}",2025-01-10,2025-03-01,30,cm,60,uvb,`].join('\n');
-    for (const who of [keeper, outsider]) {
+    for (const who of [world.keeper, world.outsider]) {
       expect((await send(who, csv, false)).status).toBe(404);
       expect((await send(who, csv, true)).status).toBe(404);
     }

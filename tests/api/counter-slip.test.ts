@@ -8,32 +8,29 @@ import { settleMail } from '@/lib/auth/mail-soon';
 import { PDFDocument } from 'pdf-lib';
 import { COUNTER_CAUTIONS } from '@/lib/counter/assess';
 import { unsubscribeToken } from '@/lib/customers/unsubscribe-token';
-import { Customer, LampType, MailMessage, SpeciesSheet, type Organisation, type User } from '@/models';
+import { Customer, LampType, MailMessage, SpeciesSheet, type User } from '@/models';
 import { withTestDatabase } from '../helpers/db';
-import { createWorld } from '../helpers/world';
+import { freshWorld } from '../helpers/world';
 import { call } from './http';
 import { call as callRaw, pdfDrawnText } from './variants.helpers';
 
 withTestDatabase();
 
-let shop: Organisation;
-let staff: User;
-let keeper: User;
-let outsider: User;
 let tubeId: number;
 
+const world = freshWorld({ catalogue: true });
+
 beforeEach(async () => {
-  ({ shop, staff, keeper, outsider } = await createWorld({ catalogue: true }));
-  tubeId = (await LampType.findOne({ where: { organisationId: shop.id, tech: 't5' } }))!.id;
+  tubeId = (await LampType.findOne({ where: { organisationId: world.shop.id, tech: 't5' } }))!.id;
 });
 
 async function testedLamp(customer: Record<string, unknown>, home: Record<string, unknown> = {}) {
   const r = await call(tests.POST, {
     method: 'POST',
     path: '/api/counter/tests',
-    as: staff,
+    as: world.staff,
     body: {
-      organisationId: shop.id,
+      organisationId: world.shop.id,
       lamp: { lampTypeId: tubeId, ageMonths: 6, hoursPerDay: 12, ...home },
       reading: { distance: 30, value: 30, unit: 'uvb', through: 'nothing', warmedUp: 'yes' },
       customer: { kind: 'new', name: 'Jules Invented', ...customer },
@@ -57,16 +54,16 @@ const openLink = (url: string) => {
 describe('the test slip and the unsubscribe link', () => {
   it('e-mails the slip once, with the verdict, the cautions and a link that stops e-mails signed out', async () => {
     const { lampId, customerId } = await testedLamp({ email: 'jules@example.com', reminderConsent: true });
-    const sent = await sendSlip(staff, lampId);
+    const sent = await sendSlip(world.staff, lampId);
     expect(sent.status).toBe(201);
     await settleMail();
     const message = (await MailMessage.findOne({ where: { kind: 'counter-slip' } }))!;
     expect(message.toEmail).toBe('jules@example.com');
     expect(message.body).toMatch(/Verdict: /);
     expect(message.body).toMatch(/vet/);
-    expect(message.body).toContain(shop.name);
+    expect(message.body).toContain(world.shop.name);
     // Once per reading.
-    expect((await sendSlip(staff, lampId)).body).toEqual({ queued: false });
+    expect((await sendSlip(world.staff, lampId)).body).toEqual({ queued: false });
     expect(await MailMessage.count({ where: { kind: 'counter-slip' } })).toBe(1);
 
     const link = /(http\S+\/api\/unsubscribe\?token=\S+)/.exec(message.body)![1]!;
@@ -90,7 +87,7 @@ describe('the test slip and the unsubscribe link', () => {
     // The page: the app's look, the shop's name and nothing of the customer.
     const page = await unsubscribePage(new URL(landing, 'http://x').searchParams.get('token'));
     expect(page).toContain('<h1 class="mb-3 text-title">E-mails stopped</h1>');
-    expect(page).toContain(`from <strong>${shop.name}</strong>`);
+    expect(page).toContain(`from <strong>${world.shop.name}</strong>`);
     for (const secret of ['jules@example.com', 'Jules', '<script', '<form'])
       expect(page).not.toContain(secret);
     // Opening it again (the link or the page) is harmless; and without consent no slip goes out.
@@ -98,7 +95,7 @@ describe('the test slip and the unsubscribe link', () => {
     expect(await unsubscribePage(new URL(landing, 'http://x').searchParams.get('token'))).toContain(
       'E-mails stopped',
     );
-    const refused = await sendSlip(staff, lampId);
+    const refused = await sendSlip(world.staff, lampId);
     expect(refused.status).toBe(400);
     expect(refused.body.error.field).toBe('customer.reminderConsent');
     expect(await MailMessage.count({ where: { kind: 'counter-slip' } })).toBe(1);
@@ -106,7 +103,7 @@ describe('the test slip and the unsubscribe link', () => {
 
   it('never sends a slip without consent or an address', async () => {
     const { lampId } = await testedLamp({ email: 'no.consent@example.com', reminderConsent: false });
-    const r = await sendSlip(staff, lampId);
+    const r = await sendSlip(world.staff, lampId);
     expect(r.status).toBe(400);
     expect(await MailMessage.count()).toBe(0);
   });
@@ -133,7 +130,7 @@ describe('the test slip and the unsubscribe link', () => {
 
   it('keepers and another organisation cannot send a slip', async () => {
     const { lampId } = await testedLamp({ email: 'c@example.com', reminderConsent: true });
-    for (const who of [keeper, outsider]) expect((await sendSlip(who, lampId)).status).toBe(404);
+    for (const who of [world.keeper, world.outsider]) expect((await sendSlip(who, lampId)).status).toBe(404);
     expect((await sendSlip(null, lampId)).status).toBe(401);
     expect(await MailMessage.count()).toBe(0);
   });
@@ -151,7 +148,7 @@ describe('the test slip as a one-page PDF', { timeout: 150_000 }, () => {
 
   it('has one page with the shop, the verdict and the cautions, and no basking figure without a species', async () => {
     const { lampId } = await testedLamp({ email: null, reminderConsent: false });
-    const r = await slipPdf(staff, lampId);
+    const r = await slipPdf(world.staff, lampId);
     expect(r.status).toBe(200);
     expect(r.res.headers.get('content-type')).toBe('application/pdf');
     expect(r.res.headers.get('content-disposition')).toMatch(
@@ -159,7 +156,7 @@ describe('the test slip as a one-page PDF', { timeout: 150_000 }, () => {
     );
     const { pages, text } = await drawn(r.res);
     expect(pages).toBe(1);
-    expect(text).toContain(shop.name);
+    expect(text).toContain(world.shop.name);
     expect(text).toContain('Jules Invented');
     expect(text).toMatch(/(Keep it|Test it again by|Replace it)/);
     expect(text).toContain('Output left');
@@ -174,19 +171,19 @@ describe('the test slip as a one-page PDF', { timeout: 150_000 }, () => {
   });
 
   it('gives the basking spot at home only when the customer named the species and the distance', async () => {
-    const sheet = (await SpeciesSheet.findOne({ where: { organisationId: shop.id, uvZone: 3 } }))!;
+    const sheet = (await SpeciesSheet.findOne({ where: { organisationId: world.shop.id, uvZone: 3 } }))!;
     const { lampId } = await testedLamp(
       { email: null, reminderConsent: false },
       { speciesSheetId: sheet.id, baskingDistance: 30 },
     );
-    const { pages, text } = await drawn((await slipPdf(staff, lampId)).res);
+    const { pages, text } = await drawn((await slipPdf(world.staff, lampId)).res);
     expect(pages).toBe(1);
     expect(text).toMatch(/Basking spot at home about (UV Index|\d)/);
   });
 
   it('keepers, another organisation and nobody get no slip', async () => {
     const { lampId } = await testedLamp({ email: null, reminderConsent: false });
-    for (const who of [keeper, outsider]) expect((await slipPdf(who, lampId)).status).toBe(404);
+    for (const who of [world.keeper, world.outsider]) expect((await slipPdf(who, lampId)).status).toBe(404);
     expect((await slipPdf(null, lampId)).status).toBe(401);
   });
 });

@@ -2,34 +2,21 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import * as assess from '@/app/api/counter/assess/route';
 import * as lampRoute from '@/app/api/counter/lamps/[id]/route';
 import * as tests from '@/app/api/counter/tests/route';
-import {
-  CounterLamp,
-  CounterReading,
-  Customer,
-  LampType,
-  SpeciesSheet,
-  type Organisation,
-  type User,
-} from '@/models';
+import { CounterLamp, CounterReading, Customer, LampType, SpeciesSheet, type User } from '@/models';
 import { withTestDatabase } from '../helpers/db';
-import { createWorld } from '../helpers/world';
+import { freshWorld } from '../helpers/world';
 import { call } from './http';
 
 withTestDatabase();
 
-let shop: Organisation;
-let owner: User;
-let staff: User;
-let keeper: User;
-let otherOrg: Organisation;
-let outsider: User;
 let tubeId: number;
 let otherTubeId: number;
 
+const world = freshWorld({ catalogue: true });
+
 beforeEach(async () => {
-  ({ shop, owner, staff, keeper, otherOrg, outsider } = await createWorld({ catalogue: true }));
-  tubeId = (await LampType.findOne({ where: { organisationId: shop.id, tech: 't5' } }))!.id;
-  otherTubeId = (await LampType.findOne({ where: { organisationId: otherOrg.id, tech: 't5' } }))!.id;
+  tubeId = (await LampType.findOne({ where: { organisationId: world.shop.id, tech: 't5' } }))!.id;
+  otherTubeId = (await LampType.findOne({ where: { organisationId: world.otherOrg.id, tech: 't5' } }))!.id;
 });
 
 const reading = (value: number, over: Record<string, unknown> = {}) => ({
@@ -56,7 +43,11 @@ const view = (as: User | null, id: number) =>
 describe('the counter', () => {
   it('answers a walk-in test at once, without writing anything', async () => {
     const type = (await LampType.findByPk(tubeId))!;
-    const r = await ask(staff, { organisationId: shop.id, lamp: lamp(), reading: reading(type.uvbAt30) });
+    const r = await ask(world.staff, {
+      organisationId: world.shop.id,
+      lamp: lamp(),
+      reading: reading(type.uvbAt30),
+    });
     expect(r.status).toBe(200);
     expect(r.body.answer.verdict.kind).toBe('keep');
     expect(r.body.answer.verdict.output.share).toBeCloseTo(1, 2);
@@ -65,9 +56,9 @@ describe('the counter', () => {
   });
 
   it('judges against the species at home when given', async () => {
-    const sheet = (await SpeciesSheet.findOne({ where: { organisationId: shop.id, uvZone: 3 } }))!;
-    const r = await ask(owner, {
-      organisationId: shop.id,
+    const sheet = (await SpeciesSheet.findOne({ where: { organisationId: world.shop.id, uvZone: 3 } }))!;
+    const r = await ask(world.owner, {
+      organisationId: world.shop.id,
       lamp: lamp({ speciesSheetId: sheet.id, baskingDistance: 30 }),
       reading: reading(1, { unit: 'uvi' }),
     });
@@ -79,8 +70,8 @@ describe('the counter', () => {
   });
 
   it('saves a test for a new customer, then a retest adds a reading and gives the lamp its own fit', async () => {
-    const first = await save(staff, {
-      organisationId: shop.id,
+    const first = await save(world.staff, {
+      organisationId: world.shop.id,
       lamp: lamp({ ageMonths: 4 }),
       reading: reading(80),
       customer: { kind: 'new', name: 'Alex Invented', email: 'alex@example.com', reminderConsent: true },
@@ -100,8 +91,8 @@ describe('the counter', () => {
       { takenAt: new Date(Date.now() - 30 * 86_400_000) },
       { where: { counterLampId: kept.id } },
     );
-    const again = await save(staff, {
-      organisationId: shop.id,
+    const again = await save(world.staff, {
+      organisationId: world.shop.id,
       counterLampId: kept.id,
       reading: reading(70),
     });
@@ -111,7 +102,7 @@ describe('the counter', () => {
     expect(await CounterReading.count({ where: { counterLampId: kept.id } })).toBe(2);
     expect(await CounterLamp.count()).toBe(1);
 
-    const seen = await view(owner, kept.id);
+    const seen = await view(world.owner, kept.id);
     expect(seen.status).toBe(200);
     expect(seen.body.lamp.customer.name).toBe('Alex Invented');
     expect(seen.body.lamp.readings).toHaveLength(2);
@@ -119,7 +110,7 @@ describe('the counter', () => {
   });
 
   it('keeps a walk-in’s lamp without a customer', async () => {
-    const r = await save(staff, { organisationId: shop.id, lamp: lamp(), reading: reading(40) });
+    const r = await save(world.staff, { organisationId: world.shop.id, lamp: lamp(), reading: reading(40) });
     expect(r.status).toBe(201);
     expect(r.body.customerId).toBeNull();
     expect((await CounterLamp.findByPk(r.body.lampId))!.customerId).toBeNull();
@@ -127,8 +118,8 @@ describe('the counter', () => {
   });
 
   it('refuses another organisation’s lamp type, naming the field, and writes nothing', async () => {
-    const r = await save(staff, {
-      organisationId: shop.id,
+    const r = await save(world.staff, {
+      organisationId: world.shop.id,
       lamp: lamp({ lampTypeId: otherTubeId }),
       reading: reading(40),
       customer: { kind: 'new', name: 'Not Saved' },
@@ -140,14 +131,14 @@ describe('the counter', () => {
   });
 
   it('asks for either a date or an age, and for the screen’s share', async () => {
-    const both = await ask(staff, {
-      organisationId: shop.id,
+    const both = await ask(world.staff, {
+      organisationId: world.shop.id,
       lamp: lamp({ firstUsedOn: '2025-01-01' }),
       reading: reading(40),
     });
     expect(both.status).toBe(400);
-    const screen = await ask(staff, {
-      organisationId: shop.id,
+    const screen = await ask(world.staff, {
+      organisationId: world.shop.id,
       lamp: lamp(),
       reading: reading(40, { through: 'screen' }),
     });
@@ -156,27 +147,31 @@ describe('the counter', () => {
   });
 
   it('keepers, another organisation and nobody get nowhere', async () => {
-    const kept = await save(staff, { organisationId: shop.id, lamp: lamp(), reading: reading(40) });
+    const kept = await save(world.staff, {
+      organisationId: world.shop.id,
+      lamp: lamp(),
+      reading: reading(40),
+    });
     const lampId = kept.body.lampId;
-    for (const who of [keeper, outsider]) {
-      expect((await ask(who, { organisationId: shop.id, lamp: lamp(), reading: reading(40) })).status).toBe(
-        404,
-      );
-      expect((await save(who, { organisationId: shop.id, lamp: lamp(), reading: reading(40) })).status).toBe(
-        404,
-      );
+    for (const who of [world.keeper, world.outsider]) {
+      expect(
+        (await ask(who, { organisationId: world.shop.id, lamp: lamp(), reading: reading(40) })).status,
+      ).toBe(404);
+      expect(
+        (await save(who, { organisationId: world.shop.id, lamp: lamp(), reading: reading(40) })).status,
+      ).toBe(404);
       expect((await view(who, lampId)).status).toBe(404);
     }
     // The outsider, working in their own organisation, cannot add a reading to the shop's lamp.
-    const planted = await save(outsider, {
-      organisationId: otherOrg.id,
+    const planted = await save(world.outsider, {
+      organisationId: world.otherOrg.id,
       counterLampId: lampId,
       reading: reading(1),
     });
     expect(planted.status).toBe(404);
-    expect((await ask(null, { organisationId: shop.id, lamp: lamp(), reading: reading(40) })).status).toBe(
-      401,
-    );
+    expect(
+      (await ask(null, { organisationId: world.shop.id, lamp: lamp(), reading: reading(40) })).status,
+    ).toBe(401);
     expect(await CounterReading.count({ where: { counterLampId: lampId } })).toBe(1);
   });
 });

@@ -4,32 +4,29 @@ import * as exportRoute from '@/app/api/customers/[id]/export/route';
 import * as slip from '@/app/api/counter/lamps/[id]/slip/route';
 import * as tests from '@/app/api/counter/tests/route';
 import { settleMail } from '@/lib/auth/mail-soon';
-import { CounterLamp, CounterReading, Customer, LampType, type Organisation, type User } from '@/models';
+import { CounterLamp, CounterReading, Customer, LampType, type User } from '@/models';
 import { withTestDatabase } from '../helpers/db';
-import { createWorld } from '../helpers/world';
+import { freshWorld } from '../helpers/world';
 import { call } from './http';
 
 // A customer's own data on request, and what stays when the customer is deleted.
 withTestDatabase();
 
-let shop: Organisation;
-let staff: User;
-let keeper: User;
-let outsider: User;
 let tubeId: number;
 
+const world = freshWorld({ catalogue: true });
+
 beforeEach(async () => {
-  ({ shop, staff, keeper, outsider } = await createWorld({ catalogue: true }));
-  tubeId = (await LampType.findOne({ where: { organisationId: shop.id, tech: 't5' } }))!.id;
+  tubeId = (await LampType.findOne({ where: { organisationId: world.shop.id, tech: 't5' } }))!.id;
 });
 
 const test = (body: Record<string, unknown>) =>
   call(tests.POST, {
     method: 'POST',
     path: '/api/counter/tests',
-    as: staff,
+    as: world.staff,
     body: {
-      organisationId: shop.id,
+      organisationId: world.shop.id,
       reading: { distance: 30, value: 30, unit: 'uvb', through: 'nothing', warmedUp: 'yes' },
       ...body,
     },
@@ -56,17 +53,17 @@ describe('a customer’s data export', () => {
       method: 'POST',
       path: `/api/counter/lamps/${lampId}/slip`,
       params: { id: lampId },
-      as: staff,
+      as: world.staff,
     });
     await settleMail();
 
-    const r = await exportOf(staff, customerId);
+    const r = await exportOf(world.staff, customerId);
     expect(r.status).toBe(200);
     expect(r.res.headers.get('content-disposition')).toMatch(
       /^attachment; filename="customer-\d+-sam-invented\.json"$/i,
     );
     const data = JSON.parse(r.text);
-    expect(data.shop).toBe(shop.name);
+    expect(data.shop).toBe(world.shop.name);
     expect(data.customer).toMatchObject({
       id: customerId,
       name: 'Sam Invented',
@@ -91,11 +88,11 @@ describe('a customer’s data export', () => {
       method: 'DELETE',
       path: `/api/customers/${customerId}`,
       params: { id: customerId },
-      as: staff,
+      as: world.staff,
     });
     expect(del.status).toBeLessThan(300);
     expect(await Customer.findByPk(customerId)).toBeNull();
-    expect((await exportOf(staff, customerId)).status).toBe(404);
+    expect((await exportOf(world.staff, customerId)).status).toBe(404);
     const lamp = (await CounterLamp.findByPk(lampId))!;
     expect([lamp.customerId, lamp.label]).toEqual([null, null]);
     expect(await CounterReading.count({ where: { counterLampId: lampId } })).toBe(2);
@@ -107,7 +104,7 @@ describe('a customer’s data export', () => {
       customer: { kind: 'new', name: 'Pat Invented' },
     });
     const { customerId } = made.body as { customerId: number };
-    for (const who of [keeper, outsider]) {
+    for (const who of [world.keeper, world.outsider]) {
       const r = await exportOf(who, customerId);
       expect(r.status).toBe(404);
       expect(r.text).not.toContain('Pat Invented');

@@ -12,44 +12,39 @@ import {
   Membership,
   Reading,
   type Enclosure,
-  type Organisation,
   type User,
 } from '@/models';
 import { addMember, createEnclosure, createUser, withTestDatabase } from '../helpers/db';
-import { createWorld } from '../helpers/world';
+import { freshWorld } from '../helpers/world';
 import { call } from './http';
 
 withTestDatabase();
 
-let shop: Organisation;
-let owner: User;
-let staff: User;
-let keeper: User;
-let outsider: User;
 let otherKeeper: User;
 let customer: Customer;
 let enclosure: Enclosure;
 let enclosureLamp: Lamp;
 let tubeId: number;
 
+const world = freshWorld({ catalogue: true });
+
 beforeEach(async () => {
-  ({ shop, owner, staff, keeper, outsider } = await createWorld({ catalogue: true }));
   otherKeeper = (await createUser()).user;
-  await addMember(shop, otherKeeper, 'keeper');
-  tubeId = (await LampType.findOne({ where: { organisationId: shop.id, tech: 't5' } }))!.id;
+  await addMember(world.shop, otherKeeper, 'keeper');
+  tubeId = (await LampType.findOne({ where: { organisationId: world.shop.id, tech: 't5' } }))!.id;
   customer = await Customer.create({
-    organisationId: shop.id,
+    organisationId: world.shop.id,
     name: 'Robin Invented',
-    createdById: staff.id,
+    createdById: world.staff.id,
   });
-  enclosure = await createEnclosure(shop, keeper, { name: 'Robin’s vivarium' });
+  enclosure = await createEnclosure(world.shop, world.keeper, { name: 'Robin’s vivarium' });
   enclosureLamp = await Lamp.create({
     enclosureId: enclosure.id,
     lampTypeId: tubeId,
     label: 'Basking tube',
     firstUsedOn: '2025-01-10',
     hoursPerDay: 12,
-    createdById: keeper.id,
+    createdById: world.keeper.id,
   });
 });
 
@@ -79,11 +74,11 @@ const ask = (as: User | null, body: unknown) =>
 
 describe('linking a customer to a keeper account', () => {
   it('lists the keeper’s enclosure lamps beside the counter lamps, as references', async () => {
-    const r = await link(staff, customer.id, keeper.id);
+    const r = await link(world.staff, customer.id, world.keeper.id);
     expect(r.status).toBe(200);
-    expect(r.body.customer.keeperUserId).toBe(keeper.id);
-    const seen = await show(owner, customer.id);
-    expect(seen.body.keeper.id).toBe(keeper.id);
+    expect(r.body.customer.keeperUserId).toBe(world.keeper.id);
+    const seen = await show(world.owner, customer.id);
+    expect(seen.body.keeper.id).toBe(world.keeper.id);
     expect(seen.body.keeper.isKeeper).toBe(true);
     expect(seen.body.keeper.lamps).toEqual([
       expect.objectContaining({
@@ -100,20 +95,20 @@ describe('linking a customer to a keeper account', () => {
   });
 
   it('refuses a member who is not a keeper and a keeper already linked, naming the field', async () => {
-    const notKeeper = await link(owner, customer.id, staff.id);
+    const notKeeper = await link(world.owner, customer.id, world.staff.id);
     expect(notKeeper.status).toBe(400);
     expect(notKeeper.body.error.field).toBe('keeperId');
-    const foreign = await link(owner, customer.id, outsider.id);
+    const foreign = await link(world.owner, customer.id, world.outsider.id);
     expect(foreign.status).toBe(400);
     expect(foreign.body.error.field).toBe('keeperId');
 
-    expect((await link(owner, customer.id, keeper.id)).status).toBe(200);
+    expect((await link(world.owner, customer.id, world.keeper.id)).status).toBe(200);
     const second = await Customer.create({
-      organisationId: shop.id,
+      organisationId: world.shop.id,
       name: 'Sam Invented',
-      createdById: staff.id,
+      createdById: world.staff.id,
     });
-    const twice = await link(owner, second.id, keeper.id);
+    const twice = await link(world.owner, second.id, world.keeper.id);
     expect(twice.status).toBe(409);
     expect(twice.body.error.code).toBe('keeper_linked');
     expect(twice.body.error.message).toMatch(/Robin Invented/);
@@ -121,37 +116,37 @@ describe('linking a customer to a keeper account', () => {
   });
 
   it('is for owners and staff alone: nobody, another organisation and a keeper are refused', async () => {
-    for (const who of [null, outsider, keeper, otherKeeper]) {
-      const r = await link(who, customer.id, keeper.id);
+    for (const who of [null, world.outsider, world.keeper, otherKeeper]) {
+      const r = await link(who, customer.id, world.keeper.id);
       expect([401, 403, 404]).toContain(r.status);
       expect(r.text).not.toMatch(/Robin/);
     }
     expect((await customer.reload()).keeperUserId).toBeNull();
-    await link(staff, customer.id, keeper.id);
-    for (const who of [null, outsider, keeper, otherKeeper]) {
+    await link(world.staff, customer.id, world.keeper.id);
+    for (const who of [null, world.outsider, world.keeper, otherKeeper]) {
       const r = await unlink(who, customer.id);
       expect([401, 403, 404]).toContain(r.status);
       // The linked keeper sees no customer record either.
       expect((await show(who, customer.id)).status).toBeGreaterThanOrEqual(401);
     }
-    expect((await customer.reload()).keeperUserId).toBe(keeper.id);
+    expect((await customer.reload()).keeperUserId).toBe(world.keeper.id);
   });
 
   it('adds a counter test of the keeper’s lamp to that lamp instead of making a counter copy', async () => {
-    await link(staff, customer.id, keeper.id);
+    await link(world.staff, customer.id, world.keeper.id);
     const type = (await LampType.findByPk(tubeId))!;
     const body = {
-      organisationId: shop.id,
+      organisationId: world.shop.id,
       enclosureLampId: enclosureLamp.id,
       reading: reading(type.uvbAt30 * 0.7),
       customer: { kind: 'existing', id: customer.id },
     };
-    const answer = await ask(staff, { ...body, customer: undefined });
+    const answer = await ask(world.staff, { ...body, customer: undefined });
     expect(answer.status).toBe(200);
     expect(answer.body.answer.lampTypeName).toBe(type.name);
     expect(answer.body.answer.firstUsedOn).toBe('2025-01-10');
 
-    const r = await save(staff, body);
+    const r = await save(world.staff, body);
     expect(r.status).toBe(201);
     expect(r.body.lampId).toBeNull();
     expect(r.body.enclosureLamp).toEqual({
@@ -165,19 +160,19 @@ describe('linking a customer to a keeper account', () => {
     const stored = await Reading.findAll({ where: { lampId: enclosureLamp.id } });
     expect(stored).toHaveLength(1);
     expect(stored[0]!.value).toBeCloseTo(type.uvbAt30 * 0.7, 6);
-    expect(stored[0]!.takenById).toBe(staff.id);
+    expect(stored[0]!.takenById).toBe(world.staff.id);
     expect(stored[0]!.note).toMatch(/counter/);
-    expect((await show(staff, customer.id)).body.keeper.lamps[0].readings).toBe(1);
+    expect((await show(world.staff, customer.id)).body.keeper.lamps[0].readings).toBe(1);
   });
 
   it('offers no lamp of a keeper who is not linked, nor one sent with another lamp', async () => {
-    const base = { organisationId: shop.id, enclosureLampId: enclosureLamp.id, reading: reading(40) };
-    const unlinked = await save(staff, base);
+    const base = { organisationId: world.shop.id, enclosureLampId: enclosureLamp.id, reading: reading(40) };
+    const unlinked = await save(world.staff, base);
     expect(unlinked.status).toBe(400);
     expect(unlinked.body.error.field).toBe('enclosureLampId');
 
-    await link(staff, customer.id, keeper.id);
-    const neighbour = await createEnclosure(shop, otherKeeper);
+    await link(world.staff, customer.id, world.keeper.id);
+    const neighbour = await createEnclosure(world.shop, otherKeeper);
     const notTheirs = await Lamp.create({
       enclosureId: neighbour.id,
       lampTypeId: tubeId,
@@ -186,11 +181,11 @@ describe('linking a customer to a keeper account', () => {
       hoursPerDay: 12,
       createdById: otherKeeper.id,
     });
-    const other = await save(staff, { ...base, enclosureLampId: notTheirs.id });
+    const other = await save(world.staff, { ...base, enclosureLampId: notTheirs.id });
     expect(other.status).toBe(400);
     expect(other.body.error.field).toBe('enclosureLampId');
 
-    const both = await save(staff, {
+    const both = await save(world.staff, {
       ...base,
       lamp: { lampTypeId: tubeId, ageMonths: 3, hoursPerDay: 12 },
     });
@@ -198,42 +193,45 @@ describe('linking a customer to a keeper account', () => {
     expect(both.body.error.field).toBe('enclosureLampId');
 
     const wrongCustomer = await Customer.create({
-      organisationId: shop.id,
+      organisationId: world.shop.id,
       name: 'Sam',
-      createdById: staff.id,
+      createdById: world.staff.id,
     });
-    const mismatch = await save(staff, { ...base, customer: { kind: 'existing', id: wrongCustomer.id } });
+    const mismatch = await save(world.staff, {
+      ...base,
+      customer: { kind: 'existing', id: wrongCustomer.id },
+    });
     expect(mismatch.status).toBe(400);
     expect(mismatch.body.error.field).toBe('customer.id');
 
     // A keeper never reaches the counter, even for their own lamp.
-    expect((await save(keeper, base)).status).toBe(404);
+    expect((await save(world.keeper, base)).status).toBe(404);
     expect(await Reading.count()).toBe(0);
     expect(await CounterLamp.count()).toBe(0);
   });
 
   it('unlinking keeps every lamp and reading, counter and enclosure alike', async () => {
-    await link(staff, customer.id, keeper.id);
+    await link(world.staff, customer.id, world.keeper.id);
     const counterLamp = await CounterLamp.create({
-      organisationId: shop.id,
+      organisationId: world.shop.id,
       customerId: customer.id,
       lampTypeId: tubeId,
       firstUsedOn: '2025-02-01',
       hoursPerDay: 12,
-      createdById: staff.id,
+      createdById: world.staff.id,
     });
-    await save(staff, {
-      organisationId: shop.id,
+    await save(world.staff, {
+      organisationId: world.shop.id,
       counterLampId: counterLamp.id,
       reading: reading(50),
     });
-    await save(staff, {
-      organisationId: shop.id,
+    await save(world.staff, {
+      organisationId: world.shop.id,
       enclosureLampId: enclosureLamp.id,
       reading: reading(60),
       customer: { kind: 'existing', id: customer.id },
     });
-    const r = await unlink(owner, customer.id);
+    const r = await unlink(world.owner, customer.id);
     expect(r.status).toBe(200);
     expect(r.body.customer.keeperUserId).toBeNull();
     expect((await customer.reload()).keeperUserId).toBeNull();
@@ -241,15 +239,18 @@ describe('linking a customer to a keeper account', () => {
     expect(await CounterReading.count({ where: { counterLampId: counterLamp.id } })).toBe(1);
     expect(await Reading.count({ where: { lampId: enclosureLamp.id } })).toBe(1);
     expect(await Lamp.count()).toBe(1);
-    const seen = await show(staff, customer.id);
+    const seen = await show(world.staff, customer.id);
     expect(seen.body.keeper).toBeNull();
     expect(seen.body.lamps).toHaveLength(1);
   });
 
   it('keeps a link whose keeper left the organisation, without listing their lamps', async () => {
-    await link(staff, customer.id, keeper.id);
-    await Membership.update({ role: 'staff' }, { where: { organisationId: shop.id, userId: keeper.id } });
-    const seen = await show(staff, customer.id);
+    await link(world.staff, customer.id, world.keeper.id);
+    await Membership.update(
+      { role: 'staff' },
+      { where: { organisationId: world.shop.id, userId: world.keeper.id } },
+    );
+    const seen = await show(world.staff, customer.id);
     expect(seen.body.keeper.isKeeper).toBe(false);
     expect(seen.body.keeper.lamps).toEqual([]);
   });

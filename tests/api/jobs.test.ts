@@ -1,27 +1,18 @@
-import { beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import * as jobs from '@/app/api/organisations/[id]/jobs/route';
 import { runJob } from '@/lib/jobs/runner';
-import { JobRun, MailMessage, type Organisation, type User } from '@/models';
+import { JobRun, MailMessage, type User } from '@/models';
 import { withTestDatabase } from '../helpers/db';
-import { createWorld } from '../helpers/world';
+import { freshWorld } from '../helpers/world';
 import { call } from './http';
 
 // The owner's view of the background jobs: who may read it, and that it shows the runs with only this
 // organisation's share, and only this organisation's failures.
 withTestDatabase();
 
-let shop: Organisation;
-let owner: User;
-let staff: User;
-let keeper: User;
-let outsider: User;
-let otherShop: Organisation;
+const world = freshWorld();
 
-beforeEach(async () => {
-  ({ shop, owner, staff, keeper, otherOrg: otherShop, outsider } = await createWorld());
-});
-
-const list = (as: User | null, organisationId = shop.id) =>
+const list = (as: User | null, organisationId = world.shop.id) =>
   call(jobs.GET, { path: `/api/organisations/${organisationId}/jobs`, params: { id: organisationId }, as });
 
 /** A run that sends two messages for the shop, one for the other shop, and fails one unit of each. */
@@ -30,9 +21,9 @@ async function plantedRun() {
     name: 'lamp-reminders',
     everyMs: 3_600_000,
     run: async (ctx) => {
-      ctx.count('e-mails sent', 2, shop.id);
-      ctx.count('e-mails sent', 1, otherShop.id);
-      for (const org of [shop, otherShop]) {
+      ctx.count('e-mails sent', 2, world.shop.id);
+      ctx.count('e-mails sent', 1, world.otherOrg.id);
+      for (const org of [world.shop, world.otherOrg]) {
         await ctx.unit(
           {
             key: `keeper:${org.id}`,
@@ -52,12 +43,12 @@ describe('GET /api/organisations/:id/jobs', () => {
   it('is the owner’s: nobody signed in 401, staff, keepers and another organisation’s owner 404', async () => {
     await plantedRun();
     expect((await list(null)).status).toBe(401);
-    for (const who of [staff, keeper, outsider]) {
+    for (const who of [world.staff, world.keeper, world.outsider]) {
       const r = await list(who);
       expect(r.status).toBe(404);
       expect(r.text).not.toContain('planted');
     }
-    expect((await list(owner)).status).toBe(200);
+    expect((await list(world.owner)).status).toBe(200);
   });
 
   it('shows the runs with this organisation’s counts and only this organisation’s failures', async () => {
@@ -67,7 +58,7 @@ describe('GET /api/organisations/:id/jobs', () => {
         kind: 'lamp-reminder',
         toEmail: 'ann@example.com',
         toUserId: null,
-        organisationId: shop.id,
+        organisationId: world.shop.id,
         subject: 'S',
         body: 'B',
         dedupeKey: 'k1',
@@ -79,7 +70,7 @@ describe('GET /api/organisations/:id/jobs', () => {
         kind: 'lamp-reminder',
         toEmail: 'bob@example.com',
         toUserId: null,
-        organisationId: otherShop.id,
+        organisationId: world.otherOrg.id,
         subject: 'S',
         body: 'B',
         dedupeKey: 'k2',
@@ -91,7 +82,7 @@ describe('GET /api/organisations/:id/jobs', () => {
         kind: 'lamp-reminder',
         toEmail: 'cy@example.com',
         toUserId: null,
-        organisationId: shop.id,
+        organisationId: world.shop.id,
         subject: 'S',
         body: 'B',
         dedupeKey: 'k3',
@@ -99,7 +90,7 @@ describe('GET /api/organisations/:id/jobs', () => {
         attempts: 1,
       },
     ]);
-    const r = await list(owner);
+    const r = await list(world.owner);
     expect(r.status).toBe(200);
     const run = (await JobRun.findOne())!;
     expect(r.body.runs).toEqual([
@@ -117,10 +108,10 @@ describe('GET /api/organisations/:id/jobs', () => {
     expect('counts' in report && report.counts).toEqual({ 'e-mails sent': 3, 'units failed': 2 });
     expect(r.body.failures).toEqual([
       expect.objectContaining({
-        key: `keeper:${shop.id}`,
-        label: `Lamp reminder for ${shop.name}'s keeper`,
+        key: `keeper:${world.shop.id}`,
+        label: `Lamp reminder for ${world.shop.name}'s keeper`,
         attempts: 1,
-        lastError: `planted failure in ${shop.name}`,
+        lastError: `planted failure in ${world.shop.name}`,
       }),
     ]);
     expect(r.body.undelivered).toEqual([
@@ -131,14 +122,14 @@ describe('GET /api/organisations/:id/jobs', () => {
         nextAttemptAt: null,
       }),
     ]);
-    expect(r.text).not.toContain(otherShop.name);
+    expect(r.text).not.toContain(world.otherOrg.name);
     expect(r.text).not.toContain('INSERT INTO');
     expect(r.text).not.toContain('bob@example.com');
 
     // The other organisation's owner sees their own share and failure.
-    const theirs = await list(outsider, otherShop.id);
+    const theirs = await list(world.outsider, world.otherOrg.id);
     expect(theirs.body.runs[0].counts).toEqual({ 'e-mails sent': 1, 'units failed': 1 });
-    expect(theirs.body.failures.map((f: { key: string }) => f.key)).toEqual([`keeper:${otherShop.id}`]);
+    expect(theirs.body.failures.map((f: { key: string }) => f.key)).toEqual([`keeper:${world.otherOrg.id}`]);
   });
 
   it('tells a run that stopped without showing its error', async () => {
@@ -149,7 +140,7 @@ describe('GET /api/organisations/:id/jobs', () => {
         throw new Error('secret internals of another organisation');
       },
     });
-    const r = await list(owner);
+    const r = await list(world.owner);
     expect(r.body.runs[0]).toMatchObject({ outcome: 'failed', counts: {} });
     expect(r.text).not.toContain('secret internals');
   });

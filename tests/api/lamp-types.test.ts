@@ -1,33 +1,25 @@
-import { beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import * as collection from '@/app/api/lamp-types/route';
 import * as item from '@/app/api/lamp-types/[id]/route';
 import { STARTING_LAMP_TYPES } from '@/lib/lamp-types/starting-lamp-types';
 import { seedStartingCatalogue } from '@/lib/species/seed';
-import { Lamp, LampType, type Organisation, type User } from '@/models';
+import { Lamp, LampType, type User } from '@/models';
 import { createEnclosure, withTestDatabase } from '../helpers/db';
-import { createWorld } from '../helpers/world';
+import { freshWorld } from '../helpers/world';
 import { call, expectNoInternals } from './http';
 
 withTestDatabase();
 
-let shop: Organisation;
-let owner: User;
-let staff: User;
-let keeper: User;
-let outsider: User;
-
-beforeEach(async () => {
-  ({ shop, owner, staff, keeper, outsider } = await createWorld());
-});
+const world = freshWorld();
 
 const list = (as: User | null, extra = '') =>
-  call(collection.GET, { path: `/api/lamp-types?organisationId=${shop.id}${extra}`, as });
+  call(collection.GET, { path: `/api/lamp-types?organisationId=${world.shop.id}${extra}`, as });
 const post = (as: User, body: Record<string, unknown>) =>
   call(collection.POST, {
     method: 'POST',
     path: '/api/lamp-types',
     as,
-    body: { organisationId: shop.id, ...body },
+    body: { organisationId: world.shop.id, ...body },
   });
 const patch = (as: User, id: number, body: unknown) =>
   call(item.PATCH, { method: 'PATCH', path: `/api/lamp-types/${id}`, params: { id }, as, body });
@@ -48,14 +40,14 @@ const custom = {
 };
 
 async function presetId(key: string): Promise<number> {
-  await seedStartingCatalogue(shop.id);
-  return (await LampType.findOne({ where: { organisationId: shop.id, presetKey: key } }))!.id;
+  await seedStartingCatalogue(world.shop.id);
+  return (await LampType.findOne({ where: { organisationId: world.shop.id, presetKey: key } }))!.id;
 }
 
 describe('GET /api/lamp-types', () => {
   it('lists the starting catalogue, with sources, to any member', async () => {
-    await seedStartingCatalogue(shop.id);
-    const r = await list(keeper, '&limit=100');
+    await seedStartingCatalogue(world.shop.id);
+    const r = await list(world.keeper, '&limit=100');
     expect(r.status).toBe(200);
     expect(r.body.items).toHaveLength(STARTING_LAMP_TYPES.length);
     const mv = r.body.items.find((l: { presetKey: string }) => l.presetKey === 'mercury-vapour-160');
@@ -65,34 +57,34 @@ describe('GET /api/lamp-types', () => {
   });
 
   it('filters by technology and refuses an unknown one', async () => {
-    await seedStartingCatalogue(shop.id);
-    const r = await list(staff, '&tech=ceramic');
+    await seedStartingCatalogue(world.shop.id);
+    const r = await list(world.staff, '&tech=ceramic');
     expect(r.body.items.map((l: { tech: string }) => l.tech)).toEqual(['ceramic']);
-    const bad = await list(staff, '&tech=plasma');
+    const bad = await list(world.staff, '&tech=plasma');
     expect(bad.status).toBe(400);
     expect(bad.body.error.field).toBe('tech');
   });
 
   it('hides another organisation’s catalogue', async () => {
-    expect((await list(outsider)).status).toBe(404);
+    expect((await list(world.outsider)).status).toBe(404);
     expect((await list(null)).status).toBe(401);
   });
 });
 
 describe('POST /api/lamp-types', () => {
   it('lets staff add a custom entry and refuses a keeper', async () => {
-    const r = await post(staff, custom);
+    const r = await post(world.staff, custom);
     expect(r.status).toBe(201);
     expect(r.body).toMatchObject({ name: 'Shop T5, 115 cm', presetKey: null, reflectorGain: 1 });
-    expect((await post(keeper, { ...custom, name: 'Other' })).status).toBe(403);
+    expect((await post(world.keeper, { ...custom, name: 'Other' })).status).toBe(403);
   });
 
   it('answers 409 for a duplicate name and 400 for a tube without a length', async () => {
-    await post(owner, custom);
-    const dup = await post(owner, custom);
+    await post(world.owner, custom);
+    const dup = await post(world.owner, custom);
     expect(dup.status).toBe(409);
     expect(dup.body.error.message).toMatch(/already has that name/);
-    const bad = await post(owner, { ...custom, name: 'No length', lengthCm: null });
+    const bad = await post(world.owner, { ...custom, name: 'No length', lengthCm: null });
     expect(bad.status).toBe(400);
     expect(bad.body.error.field).toBe('lengthCm');
     expectNoInternals(bad);
@@ -102,39 +94,39 @@ describe('POST /api/lamp-types', () => {
 describe('PATCH and DELETE /api/lamp-types/[id]', () => {
   it('lets the owner edit, checking the merged entry', async () => {
     const id = await presetId('t5-high');
-    const r = await patch(owner, id, { uvbAt30: 45, sources: { uvbAt30: 'measured' } });
+    const r = await patch(world.owner, id, { uvbAt30: 45, sources: { uvbAt30: 'measured' } });
     expect(r.status).toBe(200);
     expect(r.body.uvbAt30).toBe(45);
-    const bad = await patch(owner, id, { form: 'bulb' });
+    const bad = await patch(world.owner, id, { form: 'bulb' });
     expect(bad.status).toBe(400);
     expect(bad.body.error.field).toBe('lengthCm');
   });
 
   it('refuses a keeper (403) and hides it from outsiders (404)', async () => {
     const id = await presetId('t5-high');
-    expect((await patch(keeper, id, { watts: 1 })).status).toBe(403);
-    expect((await patch(outsider, id, { watts: 1 })).status).toBe(404);
+    expect((await patch(world.keeper, id, { watts: 1 })).status).toBe(403);
+    expect((await patch(world.outsider, id, { watts: 1 })).status).toBe(404);
     expect((await LampType.findByPk(id))!.watts).not.toBe(1);
   });
 
   it('refuses to delete a lamp type the lamp log uses (409), deletes an unused one', async () => {
     const used = await presetId('t5-high');
-    const enclosure = await createEnclosure(shop, keeper);
+    const enclosure = await createEnclosure(world.shop, world.keeper);
     await Lamp.create({
       enclosureId: enclosure.id,
       lampTypeId: used,
       label: 'Main UV tube',
       firstUsedOn: '2025-01-01',
       hoursPerDay: 12,
-      createdById: staff.id,
+      createdById: world.staff.id,
     });
-    const r = await del(staff, used);
+    const r = await del(world.staff, used);
     expect(r.status).toBe(409);
     expect(r.body.error.code).toBe('in_use');
     expect(await LampType.findByPk(used)).not.toBeNull();
     const unused = await presetId('ceramic-100');
-    expect((await del(keeper, unused)).status).toBe(403);
-    expect((await del(staff, unused)).status).toBe(200);
+    expect((await del(world.keeper, unused)).status).toBe(403);
+    expect((await del(world.staff, unused)).status).toBe(200);
     expect(await LampType.findByPk(unused)).toBeNull();
   });
 });

@@ -8,7 +8,7 @@ import { addDays, todayIso } from '@/lib/lamp-log/dates';
 import type { Mail } from '@/lib/mail';
 import { CounterReading, LampType, MailMessage, Organisation, type User } from '@/models';
 import { withTestDatabase } from '../helpers/db';
-import { createWorld } from '../helpers/world';
+import { freshWorld } from '../helpers/world';
 import { call } from './http';
 import { call as callRaw, pdfDrawnText } from './variants.helpers';
 
@@ -16,19 +16,15 @@ import { call as callRaw, pdfDrawnText } from './variants.helpers';
 // PDF) and the re-test reminder show it when set, and say nothing of it when not.
 withTestDatabase();
 
-let shop: Organisation;
-let owner: User;
-let staff: User;
-let keeper: User;
-let outsider: User;
 let tubeId: number;
 
+const world = freshWorld({ catalogue: true });
+
 beforeEach(async () => {
-  ({ shop, owner, staff, keeper, outsider } = await createWorld({ catalogue: true }));
-  tubeId = (await LampType.findOne({ where: { organisationId: shop.id, tech: 't5' } }))!.id;
+  tubeId = (await LampType.findOne({ where: { organisationId: world.shop.id, tech: 't5' } }))!.id;
 });
 
-const patch = (as: User | null, body: unknown, id = shop.id) =>
+const patch = (as: User | null, body: unknown, id = world.shop.id) =>
   call(orgRoute.PATCH, { method: 'PATCH', path: `/api/organisations/${id}`, params: { id }, as, body });
 
 const CONTACT = {
@@ -42,9 +38,9 @@ async function testedLamp() {
   const r = await call(tests.POST, {
     method: 'POST',
     path: '/api/counter/tests',
-    as: staff,
+    as: world.staff,
     body: {
-      organisationId: shop.id,
+      organisationId: world.shop.id,
       lamp: { lampTypeId: tubeId, ageMonths: 6, hoursPerDay: 12 },
       reading: { distance: 30, value: 30, unit: 'uvb', through: 'nothing', warmedUp: 'yes' },
       customer: { kind: 'new', name: 'Jules Invented', email: 'jules@example.com', reminderConsent: true },
@@ -59,7 +55,7 @@ async function slipMail(lampId: number) {
     method: 'POST',
     path: `/api/counter/lamps/${lampId}/slip`,
     params: { id: lampId },
-    as: staff,
+    as: world.staff,
   });
   expect(sent.status).toBe(201);
   await settleMail();
@@ -70,7 +66,7 @@ async function slipPdfText(lampId: number) {
   const r = await callRaw(slip.GET, {
     path: `/api/counter/lamps/${lampId}/slip`,
     params: { id: lampId },
-    user: staff,
+    user: world.staff,
   });
   expect(r.status).toBe(200);
   return pdfDrawnText(new Uint8Array(await r.res.arrayBuffer())).replace(/\s+/g, ' ');
@@ -78,17 +74,17 @@ async function slipPdfText(lampId: number) {
 
 describe('the shop’s contact', () => {
   it('is set by the owner, each field optional, and an empty field clears it', async () => {
-    const r = await patch(owner, CONTACT);
+    const r = await patch(world.owner, CONTACT);
     expect(r.status).toBe(200);
     expect(r.body.contact).toEqual({ ...CONTACT, contactEmail: 'counter@example.com', line: LINE });
-    const stored = (await Organisation.findByPk(shop.id))!;
+    const stored = (await Organisation.findByPk(world.shop.id))!;
     expect([stored.contactAddress, stored.contactPhone, stored.contactEmail]).toEqual([
       '12 Fern Row, Hollowby',
       '01234 567890',
       'counter@example.com',
     ]);
     // Only what the patch names changes; empty text means none.
-    const cleared = await patch(owner, { contactPhone: '' });
+    const cleared = await patch(world.owner, { contactPhone: '' });
     expect(cleared.status).toBe(200);
     expect(cleared.body.contact.contactPhone).toBeNull();
     expect(cleared.body.contact.contactAddress).toBe('12 Fern Row, Hollowby');
@@ -96,53 +92,53 @@ describe('the shop’s contact', () => {
   });
 
   it('refuses a malformed field, naming it, and changes nothing', async () => {
-    await patch(owner, CONTACT);
+    await patch(world.owner, CONTACT);
     for (const [field, value] of [
       ['contactEmail', 'not an address'],
       ['contactPhone', 'call us'],
       ['contactAddress', 'two\nlines'],
       ['contactAddress', 'x'.repeat(201)],
     ] as const) {
-      const r = await patch(owner, { [field]: value });
+      const r = await patch(world.owner, { [field]: value });
       expect(r.status, `${field}: ${value}`).toBe(400);
       expect(r.body.error.field).toBe(field);
     }
-    expect((await patch(owner, { website: 'x' })).status).toBe(400);
-    expect((await patch(owner, {})).status).toBe(400);
-    expect((await Organisation.findByPk(shop.id))!.contactPhone).toBe('01234 567890');
+    expect((await patch(world.owner, { website: 'x' })).status).toBe(400);
+    expect((await patch(world.owner, {})).status).toBe(400);
+    expect((await Organisation.findByPk(world.shop.id))!.contactPhone).toBe('01234 567890');
   });
 
   it('is the owner’s alone: staff, a keeper, another organisation and nobody are refused', async () => {
-    for (const who of [staff, keeper, outsider, null]) {
+    for (const who of [world.staff, world.keeper, world.outsider, null]) {
       const r = await patch(who, { contactPhone: '09876 543210' });
       expect([401, 403, 404], String(who?.id)).toContain(r.status);
     }
-    expect((await Organisation.findByPk(shop.id))!.contactPhone).toBeNull();
+    expect((await Organisation.findByPk(world.shop.id))!.contactPhone).toBeNull();
   });
 
   it('shows on the slip’s e-mail and PDF when set, and not at all when not', async () => {
     const { lampId } = await testedLamp();
     const without = await slipMail(lampId);
-    expect(without).toContain(shop.name);
+    expect(without).toContain(world.shop.name);
     // The signature is the shop's name alone, then the link that stops e-mails.
-    expect(without).toContain(`${shop.name}\n\nTo stop e-mails`);
+    expect(without).toContain(`${world.shop.name}\n\nTo stop e-mails`);
     expect(await slipPdfText(lampId)).not.toContain('Fern Row');
 
-    await patch(owner, CONTACT);
+    await patch(world.owner, CONTACT);
     // A second reading: the slip goes once per reading.
     await CounterReading.update({ takenAt: new Date(Date.now() - 86_400_000) }, { where: {} });
     await call(tests.POST, {
       method: 'POST',
       path: '/api/counter/tests',
-      as: staff,
+      as: world.staff,
       body: {
-        organisationId: shop.id,
+        organisationId: world.shop.id,
         counterLampId: lampId,
         reading: { distance: 30, value: 29, unit: 'uvb', through: 'nothing', warmedUp: 'yes' },
       },
     });
     const withContact = await slipMail(lampId);
-    expect(withContact).toContain(`${shop.name}\n${LINE}`);
+    expect(withContact).toContain(`${world.shop.name}\n${LINE}`);
     const pdf = await slipPdfText(lampId);
     expect(pdf).toContain('12 Fern Row, Hollowby');
     expect(pdf).toContain('01234 567890');
@@ -153,11 +149,11 @@ describe('the shop’s contact', () => {
     const { lampId } = await testedLamp();
     const today = todayIso();
     await CounterReading.update({ testAgainOn: addDays(today, 2) }, { where: { counterLampId: lampId } });
-    await patch(owner, CONTACT);
+    await patch(world.owner, CONTACT);
     const sent: Mail[] = [];
     const r = await runCounterReminders({ today, send: async (m) => void sent.push(m) });
     expect(r?.outcome).toBe('succeeded');
     const reminder = sent.find((m) => m.tag?.kind === 'counter-reminder');
-    expect(reminder?.text).toContain(`${shop.name}\n${LINE}`);
+    expect(reminder?.text).toContain(`${world.shop.name}\n${LINE}`);
   });
 });

@@ -16,23 +16,14 @@ import {
   LampOutlook,
   LampType,
   Reading,
-  type Enclosure,
-  type Organisation,
   type User,
 } from '@/models';
 import { withTestDatabase } from '../helpers/db';
-import { createEnclosureWorld } from '../helpers/world';
+import { freshEnclosureWorld } from '../helpers/world';
 import { call } from './http';
 
 withTestDatabase();
 
-let shop: Organisation;
-let owner: User;
-let staff: User;
-let keeper: User;
-let outsider: User;
-let otherOrg: Organisation;
-let enclosure: Enclosure;
 let type: LampType;
 
 const TODAY = todayIso();
@@ -58,34 +49,40 @@ async function measuredLamps() {
     }));
     if (i < 4) {
       const lamp = await Lamp.create({
-        enclosureId: enclosure.id,
+        enclosureId: world.enclosure.id,
         lampTypeId: type.id,
         label: `Measured ${i}`,
         firstUsedOn,
         hoursPerDay: 12,
-        createdById: owner.id,
+        createdById: world.owner.id,
       });
-      for (const r of readings) await Reading.create({ ...r, lampId: lamp.id, takenById: owner.id });
+      for (const r of readings) await Reading.create({ ...r, lampId: lamp.id, takenById: world.owner.id });
     } else {
       const lamp = await CounterLamp.create({
-        organisationId: shop.id,
+        organisationId: world.shop.id,
         customerId: null,
         lampTypeId: type.id,
         firstUsedOn,
         hoursPerDay: 12,
-        createdById: staff.id,
+        createdById: world.staff.id,
       });
       for (const r of readings)
-        await CounterReading.create({ ...r, counterLampId: lamp.id, verdict: 'keep', takenById: staff.id });
+        await CounterReading.create({
+          ...r,
+          counterLampId: lamp.id,
+          verdict: 'keep',
+          takenById: world.staff.id,
+        });
     }
   }
 }
 
+const world = freshEnclosureWorld({
+  catalogue: true,
+});
+
 beforeEach(async () => {
-  ({ shop, owner, staff, keeper, outsider, otherOrg, enclosure } = await createEnclosureWorld({
-    catalogue: true,
-  }));
-  type = (await LampType.findOne({ where: { organisationId: shop.id, presetKey: 't5-high' } }))!;
+  type = (await LampType.findOne({ where: { organisationId: world.shop.id, presetKey: 't5-high' } }))!;
 });
 
 /** What the design studio page of a design of `organisationId` hands the studio, for this user. */
@@ -112,7 +109,7 @@ const withdraw = (as: User | null, id = type.id) =>
 describe('a lamp type’s measured curve', () => {
   it('is fitted from enclosure and counter lamps alike, with its band and counts', async () => {
     await measuredLamps();
-    const r = await get(staff);
+    const r = await get(world.staff);
     expect(r.status).toBe(200);
     expect(r.body.curve.ok).toBe(true);
     expect(r.body.curve.lamps).toBe(8);
@@ -126,15 +123,15 @@ describe('a lamp type’s measured curve', () => {
     expect(six.hi).toBeGreaterThanOrEqual(truth);
     expect(r.body.adopted).toBeNull();
     // A second view of the same readings is the same fit.
-    expect((await get(owner)).body.curve).toEqual(r.body.curve);
+    expect((await get(world.owner)).body.curve).toEqual(r.body.curve);
   });
 
   it('is refused with a plain message while there are too few lamps', async () => {
-    const r = await get(owner);
+    const r = await get(world.owner);
     expect(r.status).toBe(200);
     expect(r.body.curve.ok).toBe(false);
     expect(r.body.curve.message).toContain(`${MIN_LAMPS} more lamps`);
-    const refused = await adopt(owner);
+    const refused = await adopt(world.owner);
     expect(refused.status).toBe(409);
     expect(refused.body.error.message).toContain('No usable readings of this type yet');
     expect(await LampCurveAdoption.count()).toBe(0);
@@ -145,16 +142,16 @@ describe('a lamp type’s measured curve', () => {
     expect((await get(null)).status).toBe(401);
     expect((await adopt(null)).status).toBe(401);
     expect((await withdraw(null)).status).toBe(401);
-    for (const who of [keeper, outsider]) {
+    for (const who of [world.keeper, world.outsider]) {
       expect((await get(who)).status).toBe(404);
       expect((await adopt(who)).status).toBe(404);
       expect((await withdraw(who)).status).toBe(404);
     }
     // The outsider's own type of the same kind is theirs to see.
     const theirs = (await LampType.findOne({
-      where: { organisationId: otherOrg.id, presetKey: 't5-high' },
+      where: { organisationId: world.otherOrg.id, presetKey: 't5-high' },
     }))!;
-    expect((await get(outsider, theirs.id)).status).toBe(200);
+    expect((await get(world.outsider, theirs.id)).status).toBe(200);
     expect(await LampCurveAdoption.count()).toBe(0);
     expect((await LampType.findByPk(type.id))!.adoptedCurveJson).toBeNull();
   });
@@ -163,12 +160,12 @@ describe('a lamp type’s measured curve', () => {
     await measuredLamps();
     // A lamp with one reading ages by the type's curve: its stored outlook shows which curve.
     const probe = await Lamp.create({
-      enclosureId: enclosure.id,
+      enclosureId: world.enclosure.id,
       lampTypeId: type.id,
       label: 'Probe',
       firstUsedOn: addDays(TODAY, -200),
       hoursPerDay: 12,
-      createdById: owner.id,
+      createdById: world.owner.id,
     });
     await Reading.create({
       lampId: probe.id,
@@ -178,7 +175,7 @@ describe('a lamp type’s measured curve', () => {
       unit: 'uvb',
       through: 'nothing',
       warmedUp: 'yes',
-      takenById: owner.id,
+      takenById: world.owner.id,
     });
     await refreshOutlooks([probe.id]);
     const stored = async () => {
@@ -192,9 +189,9 @@ describe('a lamp type’s measured curve', () => {
       call(assess.POST, {
         method: 'POST',
         path: '/api/counter/assess',
-        as: staff,
+        as: world.staff,
         body: {
-          organisationId: shop.id,
+          organisationId: world.shop.id,
           lamp: { lampTypeId: type.id, ageMonths: 6, hoursPerDay: 12 },
           reading: {
             distance: 30,
@@ -209,7 +206,7 @@ describe('a lamp type’s measured curve', () => {
     expect(verdictBefore.kind).toBe('keep');
 
     const version = (await Lamp.findByPk(probe.id))!.outlookVersion;
-    const r = await adopt(staff);
+    const r = await adopt(world.staff);
     expect(r.status).toBe(200);
     // The eight measured lamps and the probe itself.
     expect(r.body.adopted.lamps).toBe(9);
@@ -217,7 +214,7 @@ describe('a lamp type’s measured curve', () => {
     // The adoption marked the type's lamps out of date in its transaction.
     expect((await Lamp.findByPk(probe.id))!.outlookVersion).toBeGreaterThan(version);
     const row = (await LampCurveAdoption.findOne({ where: { lampTypeId: type.id } }))!;
-    expect(row.adoptedById).toBe(staff.id);
+    expect(row.adoptedById).toBe(world.staff.id);
     expect(JSON.parse(row.fitJson).kind).toMatch(/exponential|two-phase/);
 
     await refreshOutlooks([probe.id]);
@@ -232,26 +229,26 @@ describe('a lamp type’s measured curve', () => {
     expect(verdictAfter.uncertainty).toContain('Ageing: your shop’s measured curve for this type, 9 lamps.');
 
     // Back to the catalogue: the record stays, withdrawn by whom and when.
-    expect((await withdraw(owner)).status).toBe(200);
+    expect((await withdraw(world.owner)).status).toBe(200);
     await refreshOutlooks([probe.id]);
     expect((await stored()).json.ageing).toBe('Ageing: the catalogue’s curve for this type.');
     expect((await stored()).json.remainingFraction).toBeCloseTo(before.json.remainingFraction, 6);
     expect((await counter()).body.answer.verdict.kind).toBe('keep');
     await row.reload();
-    expect(row.withdrawnById).toBe(owner.id);
+    expect(row.withdrawnById).toBe(world.owner.id);
     expect(row.withdrawnAt).not.toBeNull();
-    const history = (await get(owner)).body.history;
+    const history = (await get(world.owner)).body.history;
     expect(history).toHaveLength(1);
-    expect(history[0].adoptedBy).toBe(staff.name);
+    expect(history[0].adoptedBy).toBe(world.staff.name);
   });
 
   it('is offered in the design studio of its own organisation only, with the adopted table', async () => {
     await measuredLamps();
     // Before adoption the studio offers nothing from the catalogue: every type ages by the catalogue.
-    expect(await studioOffer(keeper, shop.id)).toEqual([]);
-    const adopted = (await adopt(staff)).body.adopted as { points: [number, number][]; lamps: number };
-    for (const member of [owner, staff, keeper]) {
-      const offered = await studioOffer(member, shop.id);
+    expect(await studioOffer(world.keeper, world.shop.id)).toEqual([]);
+    const adopted = (await adopt(world.staff)).body.adopted as { points: [number, number][]; lamps: number };
+    for (const member of [world.owner, world.staff, world.keeper]) {
+      const offered = await studioOffer(member, world.shop.id);
       expect(offered.map((t) => t.id)).toEqual([String(type.id)]);
       expect(offered[0]!.lamps).toBe(adopted.lamps);
       expect(offered[0]!.name).toBe(type.name);
@@ -259,15 +256,15 @@ describe('a lamp type’s measured curve', () => {
       expect(offered[0]!.lamp.decay).toEqual({ points: adopted.points });
     }
     // Another organisation's member learns nothing of this shop's catalogue, nor sees it in their own.
-    expect(await studioOffer(outsider, shop.id)).toEqual([]);
-    expect(await studioOffer(outsider, otherOrg.id)).toEqual([]);
+    expect(await studioOffer(world.outsider, world.shop.id)).toEqual([]);
+    expect(await studioOffer(world.outsider, world.otherOrg.id)).toEqual([]);
     // A lamp the guided start placed of this type is recognised as ageing by the adopted curve.
-    const offered = await studioOffer(owner, shop.id);
+    const offered = await studioOffer(world.owner, world.shop.id);
     const copy = adopted.points.map(([m, f]): [number, number] => [m, f]);
     const placed = { ...offered[0]!.lamp, id: 'uv1', decay: { points: copy } };
     expect(matchingCatalogueCurve(placed, offered)?.id).toBe(String(type.id));
     // Withdrawn: the studio stops offering it.
-    await withdraw(owner);
-    expect(await studioOffer(owner, shop.id)).toEqual([]);
+    await withdraw(world.owner);
+    expect(await studioOffer(world.owner, world.shop.id)).toEqual([]);
   });
 });

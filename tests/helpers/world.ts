@@ -1,5 +1,6 @@
 // The people (and enclosures) that access tests set up again and again, made in one place so every
 // test file means the same thing by "staff", "a keeper" and "the outsider".
+import { beforeEach } from 'vitest';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import {
   addMember,
@@ -59,6 +60,26 @@ export async function createEnclosureWorld(
 }
 
 export type EnclosureWorld = Awaited<ReturnType<typeof createEnclosureWorld>>;
+
+/**
+ * One object whose fields are a world `make` builds afresh before each test of the file. Call it after
+ * `withTestDatabase()`, whose emptying of the database runs first (vitest runs `beforeEach` hooks in the
+ * order they were added); a file's own `beforeEach` added after it sees this test's world.
+ */
+function freshForEachTest<T extends object>(make: () => Promise<T>): T {
+  const world = {} as T;
+  beforeEach(async () => {
+    Object.assign(world, await make());
+  });
+  return world;
+}
+
+/** `createWorld(options)` before each test: `world.owner`, `world.staff`, `world.keeper` … */
+export const freshWorld = (options?: WorldOptions) => freshForEachTest(() => createWorld(options));
+
+/** `createEnclosureWorld(options)` before each test: `world.enclosure`, `world.neighbour` … */
+export const freshEnclosureWorld = (options?: Parameters<typeof createEnclosureWorld>[0]) =>
+  freshForEachTest(() => createEnclosureWorld(options));
 
 /**
  * The smallest world a design test needs: an organisation with a keeper and the keeper's enclosure, and
