@@ -1,42 +1,17 @@
-import { afterAll, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import * as collection from '@/app/api/enclosures/route';
 import * as item from '@/app/api/enclosures/[id]/route';
-import { Enclosure, type Organisation, type User } from '@/models';
-import { closeDatabase, createEnclosure, resetDatabase } from '../helpers/db';
-import { createEnclosureWorld } from '../helpers/world';
+import { Enclosure, type User } from '@/models';
+import { createEnclosure, withTestDatabase } from '../helpers/db';
+import { freshEnclosureWorld } from '../helpers/world';
 import { call, expectNoInternals } from './http';
 
-afterAll(closeDatabase);
+withTestDatabase();
 
-let shop: Organisation;
-let owner: User;
-let staff: User;
-let keeperA: User;
-let keeperB: User;
-let otherOrg: Organisation;
-let outsider: User;
-let enclosureA: Enclosure;
-let enclosureB: Enclosure;
-let foreign: Enclosure;
-
-beforeEach(async () => {
-  await resetDatabase();
-  ({
-    shop,
-    owner,
-    staff,
-    keeper: keeperA,
-    otherKeeper: keeperB,
-    otherOrg,
-    outsider,
-    enclosure: enclosureA,
-    neighbour: enclosureB,
-    foreign,
-  } = await createEnclosureWorld({
-    enclosure: { name: 'A desert vivarium' },
-    neighbour: { name: 'B rainforest tank' },
-    foreign: { name: 'Elsewhere' },
-  }));
+const world = freshEnclosureWorld({
+  enclosure: { name: 'A desert vivarium' },
+  neighbour: { name: 'B rainforest tank' },
+  foreign: { name: 'Elsewhere' },
 });
 
 const list = (as: User | null, organisationId: number, extra = '') =>
@@ -44,7 +19,7 @@ const list = (as: User | null, organisationId: number, extra = '') =>
 
 describe('GET /api/enclosures', () => {
   it('shows staff every enclosure of the organisation and a keeper only their own', async () => {
-    const all = await list(staff, shop.id);
+    const all = await list(world.staff, world.shop.id);
     expect(all.status).toBe(200);
     expect(all.body.items.map((e: { name: string }) => e.name).sort()).toEqual([
       'A desert vivarium',
@@ -52,24 +27,24 @@ describe('GET /api/enclosures', () => {
     ]);
     expect(all.body.items[0].keeperName).toBeTruthy();
 
-    const mine = await list(keeperA, shop.id);
+    const mine = await list(world.keeper, world.shop.id);
     expect(mine.status).toBe(200);
-    expect(mine.body.items.map((e: { id: number }) => e.id)).toEqual([enclosureA.id]);
+    expect(mine.body.items.map((e: { id: number }) => e.id)).toEqual([world.enclosure.id]);
   });
 
   it('hides another keeper and another organisation behind 404', async () => {
-    expect((await list(keeperA, shop.id, `&keeperId=${keeperB.id}`)).status).toBe(404);
-    const other = await list(keeperA, otherOrg.id);
+    expect((await list(world.keeper, world.shop.id, `&keeperId=${world.otherKeeper.id}`)).status).toBe(404);
+    const other = await list(world.keeper, world.otherOrg.id);
     expect(other.status).toBe(404);
     expect(other.body.error.code).toBe('not_found');
     expect(JSON.stringify(other.body)).not.toContain('Elsewhere');
   });
 
   it('pages with offset and limit, with the total count', async () => {
-    for (let i = 0; i < 3; i++) await createEnclosure(shop, keeperA);
+    for (let i = 0; i < 3; i++) await createEnclosure(world.shop, world.keeper);
     const pages = [];
     for (const offset of [0, 2, 4]) {
-      const r = await list(owner, shop.id, `&sort=name&limit=2&offset=${offset}`);
+      const r = await list(world.owner, world.shop.id, `&sort=name&limit=2&offset=${offset}`);
       expect(r.body.total).toBe(5);
       pages.push(r.body.items);
     }
@@ -79,13 +54,13 @@ describe('GET /api/enclosures', () => {
   });
 
   it('answers 401 without a session and 400 naming the field for a bad query', async () => {
-    const anon = await list(null, shop.id);
+    const anon = await list(null, world.shop.id);
     expect(anon.status).toBe(401);
     expect(anon.body.error.code).toBe('unauthenticated');
-    const bad = await call(collection.GET, { path: '/api/enclosures?organisationId=abc', as: staff });
+    const bad = await call(collection.GET, { path: '/api/enclosures?organisationId=abc', as: world.staff });
     expect(bad.status).toBe(400);
     expect(bad.body.error.field).toBe('organisationId');
-    const tooMany = await list(staff, shop.id, '&limit=1000');
+    const tooMany = await list(world.staff, world.shop.id, '&limit=1000');
     expect(tooMany.status).toBe(400);
     expect(tooMany.body.error.field).toBe('limit');
   });
@@ -93,8 +68,8 @@ describe('GET /api/enclosures', () => {
 
 describe('POST /api/enclosures', () => {
   const valid = () => ({
-    organisationId: shop.id,
-    keeperId: keeperA.id,
+    organisationId: world.shop.id,
+    keeperId: world.keeper.id,
     name: 'New vivarium',
     widthCm: 150,
     heightCm: 60,
@@ -106,17 +81,17 @@ describe('POST /api/enclosures', () => {
     const r = await call(collection.POST, {
       method: 'POST',
       path: '/api/enclosures',
-      as: staff,
+      as: world.staff,
       body: valid(),
     });
     expect(r.status).toBe(201);
     expect(r.body).toMatchObject({
       name: 'New vivarium',
-      keeperId: keeperA.id,
+      keeperId: world.keeper.id,
       widthCm: 150,
       animalName: null,
     });
-    expect(await Enclosure.count({ where: { organisationId: shop.id } })).toBe(3);
+    expect(await Enclosure.count({ where: { organisationId: world.shop.id } })).toBe(3);
   });
 
   it('lets a keeper create their own enclosure but not one for another keeper', async () => {
@@ -124,15 +99,15 @@ describe('POST /api/enclosures', () => {
     const own = await call(collection.POST, {
       method: 'POST',
       path: '/api/enclosures',
-      as: keeperB,
+      as: world.otherKeeper,
       body: withoutKeeper,
     });
     expect(own.status).toBe(201);
-    expect(own.body.keeperId).toBe(keeperB.id);
+    expect(own.body.keeperId).toBe(world.otherKeeper.id);
     const forOther = await call(collection.POST, {
       method: 'POST',
       path: '/api/enclosures',
-      as: keeperB,
+      as: world.otherKeeper,
       body: valid(),
     });
     expect(forOther.status).toBe(404);
@@ -155,7 +130,7 @@ describe('POST /api/enclosures', () => {
     const r = await call(collection.POST, {
       method: 'POST',
       path: '/api/enclosures',
-      as: staff,
+      as: world.staff,
       body: { ...valid(), ...patch },
     });
     expect(r.status).toBe(400);
@@ -169,8 +144,8 @@ describe('POST /api/enclosures', () => {
     const r = await call(collection.POST, {
       method: 'POST',
       path: '/api/enclosures',
-      as: owner,
-      body: { ...valid(), keeperId: outsider.id },
+      as: world.owner,
+      body: { ...valid(), keeperId: world.outsider.id },
     });
     expect(r.status).toBe(400);
     expect(r.body.error.field).toBe('keeperId');
@@ -185,56 +160,60 @@ describe('/api/enclosures/[id]', () => {
     call(item.DELETE, { method: 'DELETE', path: `/api/enclosures/${id}`, params: { id }, as });
 
   it('a keeper reads and edits their own enclosure', async () => {
-    expect((await get(keeperA, enclosureA.id)).body.name).toBe('A desert vivarium');
-    const r = await patch(keeperA, enclosureA.id, { animalName: 'Sable', widthCm: 122 });
+    expect((await get(world.keeper, world.enclosure.id)).body.name).toBe('A desert vivarium');
+    const r = await patch(world.keeper, world.enclosure.id, { animalName: 'Sable', widthCm: 122 });
     expect(r.status).toBe(200);
     expect(r.body).toMatchObject({ animalName: 'Sable', widthCm: 122, name: 'A desert vivarium' });
   });
 
   it("a keeper cannot read, change or delete another keeper's enclosure", async () => {
     for (const r of [
-      await get(keeperA, enclosureB.id),
-      await patch(keeperA, enclosureB.id, { name: 'Mine now' }),
-      await del(keeperA, enclosureB.id),
+      await get(world.keeper, world.neighbour.id),
+      await patch(world.keeper, world.neighbour.id, { name: 'Mine now' }),
+      await del(world.keeper, world.neighbour.id),
     ]) {
       expect(r.status).toBe(404);
       expect(r.text).not.toContain('rainforest');
     }
-    const unchanged = await Enclosure.findByPk(enclosureB.id);
+    const unchanged = await Enclosure.findByPk(world.neighbour.id);
     expect(unchanged?.name).toBe('B rainforest tank');
   });
 
   it("nobody reaches another organisation's enclosure", async () => {
-    for (const as of [owner, staff, keeperA]) {
-      expect((await get(as, foreign.id)).status).toBe(404);
-      expect((await patch(as, foreign.id, { name: 'x' })).status).toBe(404);
-      expect((await del(as, foreign.id)).status).toBe(404);
+    for (const as of [world.owner, world.staff, world.keeper]) {
+      expect((await get(as, world.foreign.id)).status).toBe(404);
+      expect((await patch(as, world.foreign.id, { name: 'x' })).status).toBe(404);
+      expect((await del(as, world.foreign.id)).status).toBe(404);
     }
-    expect(await Enclosure.findByPk(foreign.id)).not.toBeNull();
+    expect(await Enclosure.findByPk(world.foreign.id)).not.toBeNull();
   });
 
   it('a keeper cannot hand their enclosure to another keeper; staff can', async () => {
-    const refused = await patch(keeperA, enclosureA.id, { keeperId: keeperB.id });
+    const refused = await patch(world.keeper, world.enclosure.id, { keeperId: world.otherKeeper.id });
     expect(refused.status).toBe(403);
-    const moved = await patch(staff, enclosureA.id, { keeperId: keeperB.id });
+    const moved = await patch(world.staff, world.enclosure.id, { keeperId: world.otherKeeper.id });
     expect(moved.status).toBe(200);
-    expect(moved.body.keeperId).toBe(keeperB.id);
+    expect(moved.body.keeperId).toBe(world.otherKeeper.id);
   });
 
   it('answers 400 naming the field, and for an empty change', async () => {
-    const bad = await patch(staff, enclosureA.id, { heightCm: 0 });
+    const bad = await patch(world.staff, world.enclosure.id, { heightCm: 0 });
     expect(bad.status).toBe(400);
     expect(bad.body.error.field).toBe('heightCm');
-    const empty = await patch(staff, enclosureA.id, {});
+    const empty = await patch(world.staff, world.enclosure.id, {});
     expect(empty.status).toBe(400);
-    const badId = await call(item.GET, { path: '/api/enclosures/abc', params: { id: 'abc' }, as: staff });
+    const badId = await call(item.GET, {
+      path: '/api/enclosures/abc',
+      params: { id: 'abc' },
+      as: world.staff,
+    });
     expect(badId.status).toBe(400);
     expect(badId.body.error.field).toBe('id');
   });
 
   it('staff delete an enclosure', async () => {
-    expect((await del(staff, enclosureA.id)).status).toBe(200);
-    expect(await Enclosure.findByPk(enclosureA.id)).toBeNull();
-    expect((await get(staff, enclosureA.id)).status).toBe(404);
+    expect((await del(world.staff, world.enclosure.id)).status).toBe(200);
+    expect(await Enclosure.findByPk(world.enclosure.id)).toBeNull();
+    expect((await get(world.staff, world.enclosure.id)).status).toBe(404);
   });
 });

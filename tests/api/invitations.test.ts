@@ -1,21 +1,16 @@
-import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import * as accept from '@/app/api/invitations/accept/route';
 import * as revoke from '@/app/api/invitations/[id]/route';
 import * as invitations from '@/app/api/invitations/route';
 import * as keepers from '@/app/api/keepers/route';
 import { authorizeCredentials } from '@/lib/auth';
 import { hashToken } from '@/lib/auth/invitations';
-import { Invitation, Membership, type Organisation, type User } from '@/models';
-import { closeDatabase, createUser, resetDatabase } from '../helpers/db';
-import { createWorld } from '../helpers/world';
+import { Invitation, Membership, type User } from '@/models';
+import { createUser, withTestDatabase } from '../helpers/db';
+import { freshWorld } from '../helpers/world';
 import { call } from './http';
 
-afterAll(closeDatabase);
-
-let shop: Organisation;
-let owner: User;
-let staff: User;
-let keeper: User;
+withTestDatabase();
 
 /** Polls the fake SMTP server's JSON API for the newest message to `to`. */
 async function mailTo(to: string, timeoutMs = 10_000) {
@@ -42,29 +37,26 @@ beforeAll(() => {
   run = Date.now();
 });
 
-beforeEach(async () => {
-  await resetDatabase();
-  ({ shop, owner, staff, keeper } = await createWorld());
-});
+const world = freshWorld();
 
 const invite = (as: User, email: string, role: string) =>
   call(invitations.POST, {
     method: 'POST',
     path: '/api/invitations',
     as,
-    body: { organisationId: shop.id, email, role },
+    body: { organisationId: world.shop.id, email, role },
   });
 
 describe('invitations', () => {
   it('e-mails a link through SMTP that a new person accepts by choosing a password', async () => {
     const email = `new.staff.${run}@example.com`;
-    const r = await invite(owner, email, 'staff');
+    const r = await invite(world.owner, email, 'staff');
     expect(r.status).toBe(201);
     expect(r.body).toMatchObject({ email, role: 'staff', state: 'pending' });
     expect(r.text).not.toMatch(/token/i);
 
     const mail = await mailTo(email);
-    expect(mail.subject).toContain(shop.name);
+    expect(mail.subject).toContain(world.shop.name);
     expect(mail.text).toContain(`${process.env.APP_URL ?? 'http://localhost:3000'}/invite/`);
     const token = tokenFrom(mail.text);
     // Only the hash is stored.
@@ -86,10 +78,10 @@ describe('invitations', () => {
       body: { token, name: 'New Staff', password: 'a-good-long-password' },
     });
     expect(ok.status).toBe(201);
-    expect(ok.body).toMatchObject({ organisationId: shop.id, role: 'staff', alreadyMember: false });
+    expect(ok.body).toMatchObject({ organisationId: world.shop.id, role: 'staff', alreadyMember: false });
     const user = await authorizeCredentials({ email, password: 'a-good-long-password' }, {});
     const membership = await Membership.findOne({
-      where: { organisationId: shop.id, userId: Number(user.id) },
+      where: { organisationId: world.shop.id, userId: Number(user.id) },
     });
     expect(membership?.role).toBe('staff');
 
@@ -104,7 +96,7 @@ describe('invitations', () => {
 
   it('lets a signed-in person with the invited address join with their account', async () => {
     const { user: existing } = await createUser({ email: `existing.${run}@example.com` });
-    expect((await invite(staff, existing.email, 'keeper')).status).toBe(201);
+    expect((await invite(world.staff, existing.email, 'keeper')).status).toBe(201);
     const token = tokenFrom((await mailTo(existing.email)).text);
     // Signed out, the existing account is asked to sign in first.
     const signedOut = await call(accept.POST, {
@@ -118,7 +110,7 @@ describe('invitations', () => {
     const wrong = await call(accept.POST, {
       method: 'POST',
       path: '/api/invitations/accept',
-      as: keeper,
+      as: world.keeper,
       body: { token },
     });
     expect(wrong.status).toBe(403);
@@ -133,42 +125,46 @@ describe('invitations', () => {
   });
 
   it('staff may invite keepers but not staff or owners; keepers invite nobody', async () => {
-    expect((await invite(staff, `k.${run}@example.com`, 'keeper')).status).toBe(201);
-    expect((await invite(staff, `s.${run}@example.com`, 'staff')).status).toBe(403);
-    expect((await invite(staff, `o.${run}@example.com`, 'owner')).status).toBe(403);
-    expect((await invite(keeper, `k2.${run}@example.com`, 'keeper')).status).toBe(404);
+    expect((await invite(world.staff, `k.${run}@example.com`, 'keeper')).status).toBe(201);
+    expect((await invite(world.staff, `s.${run}@example.com`, 'staff')).status).toBe(403);
+    expect((await invite(world.staff, `o.${run}@example.com`, 'owner')).status).toBe(403);
+    expect((await invite(world.keeper, `k2.${run}@example.com`, 'keeper')).status).toBe(404);
     const viaKeepers = await call(keepers.POST, {
       method: 'POST',
       path: '/api/keepers',
-      as: staff,
-      body: { organisationId: shop.id, email: `k3.${run}@example.com` },
+      as: world.staff,
+      body: { organisationId: world.shop.id, email: `k3.${run}@example.com` },
     });
     expect(viaKeepers.status).toBe(201);
     expect(viaKeepers.body.role).toBe('keeper');
   });
 
   it('refuses to invite someone who is already a member, and bad input names the field', async () => {
-    const dup = await invite(owner, keeper.email, 'staff');
+    const dup = await invite(world.owner, world.keeper.email, 'staff');
     expect(dup.status).toBe(409);
     expect(dup.body.error.code).toBe('already_member');
-    const bad = await invite(owner, 'not-an-email', 'staff');
+    const bad = await invite(world.owner, 'not-an-email', 'staff');
     expect(bad.status).toBe(400);
     expect(bad.body.error.field).toBe('email');
-    const badRole = await invite(owner, `x.${run}@example.com`, 'boss');
+    const badRole = await invite(world.owner, `x.${run}@example.com`, 'boss');
     expect(badRole.body.error.field).toBe('role');
   });
 
   it('lists pending invitations and revokes one', async () => {
-    const r = await invite(owner, `pending.${run}@example.com`, 'staff');
+    const r = await invite(world.owner, `pending.${run}@example.com`, 'staff');
     const token = tokenFrom((await mailTo(`pending.${run}@example.com`)).text);
     const listed = await call(invitations.GET, {
-      path: `/api/invitations?organisationId=${shop.id}`,
-      as: staff,
+      path: `/api/invitations?organisationId=${world.shop.id}`,
+      as: world.staff,
     });
     expect(listed.body.items.map((i: { id: number }) => i.id)).toEqual([r.body.id]);
     expect(
-      (await call(invitations.GET, { path: `/api/invitations?organisationId=${shop.id}`, as: keeper }))
-        .status,
+      (
+        await call(invitations.GET, {
+          path: `/api/invitations?organisationId=${world.shop.id}`,
+          as: world.keeper,
+        })
+      ).status,
     ).toBe(404);
     // Staff may not withdraw an invitation for staff; the owner may.
     const params = { id: r.body.id };
@@ -178,7 +174,7 @@ describe('invitations', () => {
           method: 'DELETE',
           path: `/api/invitations/${r.body.id}`,
           params,
-          as: staff,
+          as: world.staff,
         })
       ).status,
     ).toBe(403);
@@ -188,7 +184,7 @@ describe('invitations', () => {
           method: 'DELETE',
           path: `/api/invitations/${r.body.id}`,
           params,
-          as: owner,
+          as: world.owner,
         })
       ).status,
     ).toBe(200);
@@ -203,7 +199,7 @@ describe('invitations', () => {
 
   it('an expired link is refused', async () => {
     const email = `expired.${run}@example.com`;
-    const r = await invite(owner, email, 'keeper');
+    const r = await invite(world.owner, email, 'keeper');
     const token = tokenFrom((await mailTo(email)).text);
     await Invitation.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { id: r.body.id } });
     const late = await call(accept.POST, {

@@ -1,149 +1,158 @@
-import { afterAll, beforeEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import * as enclosures from '@/app/api/enclosures/route';
 import * as keepers from '@/app/api/keepers/route';
 import * as members from '@/app/api/organisations/[id]/members/route';
-import { Membership, User, type Organisation } from '@/models';
-import { closeDatabase, createEnclosure, createMember, resetDatabase } from '../helpers/db';
-import { createWorld } from '../helpers/world';
+import { Membership, User } from '@/models';
+import { createEnclosure, createMember, withTestDatabase } from '../helpers/db';
+import { freshWorld } from '../helpers/world';
 import { call, sessionCookie } from './http';
 
-afterAll(closeDatabase);
+withTestDatabase();
 
-let shop: Organisation;
-let owner: User;
-let staff: User;
-let keeper: User;
-let outsider: User;
-
-beforeEach(async () => {
-  await resetDatabase();
-  ({ shop, owner, staff, keeper, outsider } = await createWorld({
-    names: { staff: 'Staff Person', keeper: 'Keeper Person' },
-  }));
+const world = freshWorld({
+  names: { staff: 'Staff Person', keeper: 'Keeper Person' },
 });
 
-const path = () => `/api/organisations/${shop.id}/members`;
-const list = (as: User) => call(members.GET, { path: path(), params: { id: shop.id }, as });
+const path = () => `/api/organisations/${world.shop.id}/members`;
+const list = (as: User) => call(members.GET, { path: path(), params: { id: world.shop.id }, as });
 const setRole = (as: User, userId: number, role: string) =>
-  call(members.PATCH, { method: 'PATCH', path: path(), params: { id: shop.id }, as, body: { userId, role } });
+  call(members.PATCH, {
+    method: 'PATCH',
+    path: path(),
+    params: { id: world.shop.id },
+    as,
+    body: { userId, role },
+  });
 const remove = (as: User, userId: number) =>
-  call(members.DELETE, { method: 'DELETE', path: `${path()}?userId=${userId}`, params: { id: shop.id }, as });
+  call(members.DELETE, {
+    method: 'DELETE',
+    path: `${path()}?userId=${userId}`,
+    params: { id: world.shop.id },
+    as,
+  });
 const roleOf = async (userId: number) =>
-  (await Membership.findOne({ where: { organisationId: shop.id, userId } }))?.role ?? null;
+  (await Membership.findOne({ where: { organisationId: world.shop.id, userId } }))?.role ?? null;
 
 describe('GET members', () => {
   it('lists members for owner and staff, not for keepers or outsiders', async () => {
-    const r = await list(staff);
+    const r = await list(world.staff);
     expect(r.status).toBe(200);
     expect(r.body.items.map((m: { role: string }) => m.role).sort()).toEqual(['keeper', 'owner', 'staff']);
     expect(r.body.items[0]).not.toHaveProperty('passwordHash');
-    expect((await list(keeper)).status).toBe(404);
-    expect((await list(outsider)).status).toBe(404);
+    expect((await list(world.keeper)).status).toBe(404);
+    expect((await list(world.outsider)).status).toBe(404);
   });
 });
 
 describe('PATCH members (change a role)', () => {
   it('is owner-only', async () => {
-    const byStaff = await setRole(staff, keeper.id, 'staff');
+    const byStaff = await setRole(world.staff, world.keeper.id, 'staff');
     expect(byStaff.status).toBe(403);
-    expect((await setRole(keeper, keeper.id, 'owner')).status).toBe(404);
-    expect((await setRole(outsider, keeper.id, 'owner')).status).toBe(404);
-    expect(await roleOf(keeper.id)).toBe('keeper');
+    expect((await setRole(world.keeper, world.keeper.id, 'owner')).status).toBe(404);
+    expect((await setRole(world.outsider, world.keeper.id, 'owner')).status).toBe(404);
+    expect(await roleOf(world.keeper.id)).toBe('keeper');
 
-    const byOwner = await setRole(owner, keeper.id, 'staff');
+    const byOwner = await setRole(world.owner, world.keeper.id, 'staff');
     expect(byOwner.status).toBe(200);
-    expect(byOwner.body).toMatchObject({ userId: keeper.id, role: 'staff' });
-    expect(await roleOf(keeper.id)).toBe('staff');
+    expect(byOwner.body).toMatchObject({ userId: world.keeper.id, role: 'staff' });
+    expect(await roleOf(world.keeper.id)).toBe('staff');
   });
 
   it('takes effect on the very next request (memberships are re-read from the database)', async () => {
-    const cookie = await sessionCookie(staff);
-    const before = await call(keepers.GET, { path: `/api/keepers?organisationId=${shop.id}`, cookie });
+    const cookie = await sessionCookie(world.staff);
+    const before = await call(keepers.GET, { path: `/api/keepers?organisationId=${world.shop.id}`, cookie });
     expect(before.status).toBe(200);
-    await setRole(owner, staff.id, 'keeper');
-    const after = await call(keepers.GET, { path: `/api/keepers?organisationId=${shop.id}`, cookie });
+    await setRole(world.owner, world.staff.id, 'keeper');
+    const after = await call(keepers.GET, { path: `/api/keepers?organisationId=${world.shop.id}`, cookie });
     expect(after.status).toBe(404);
   });
 
   it('keeps at least one owner', async () => {
-    const r = await setRole(owner, owner.id, 'staff');
+    const r = await setRole(world.owner, world.owner.id, 'staff');
     expect(r.status).toBe(409);
     expect(r.body.error.code).toBe('last_owner');
-    await setRole(owner, staff.id, 'owner');
-    expect((await setRole(owner, owner.id, 'staff')).status).toBe(200);
+    await setRole(world.owner, world.staff.id, 'owner');
+    expect((await setRole(world.owner, world.owner.id, 'staff')).status).toBe(200);
   });
 
   it('answers 400 naming the field for a bad role or user id, 404 for a non-member', async () => {
-    const badRole = await setRole(owner, keeper.id, 'admin');
+    const badRole = await setRole(world.owner, world.keeper.id, 'admin');
     expect(badRole.status).toBe(400);
     expect(badRole.body.error.field).toBe('role');
     const badUser = await call(members.PATCH, {
       method: 'PATCH',
       path: path(),
-      params: { id: shop.id },
-      as: owner,
+      params: { id: world.shop.id },
+      as: world.owner,
       body: { role: 'staff' },
     });
     expect(badUser.status).toBe(400);
     expect(badUser.body.error.field).toBe('userId');
-    expect((await setRole(owner, outsider.id, 'staff')).status).toBe(404);
+    expect((await setRole(world.owner, world.outsider.id, 'staff')).status).toBe(404);
   });
 });
 
 describe('DELETE members (remove)', () => {
   it('is owner-only and ends the removed member’s sessions at once', async () => {
-    await createEnclosure(shop, keeper, { name: 'Kept after removal' });
-    const keeperCookie = await sessionCookie(keeper);
-    expect((await remove(staff, keeper.id)).status).toBe(403);
-    expect(await roleOf(keeper.id)).toBe('keeper');
+    await createEnclosure(world.shop, world.keeper, { name: 'Kept after removal' });
+    const keeperCookie = await sessionCookie(world.keeper);
+    expect((await remove(world.staff, world.keeper.id)).status).toBe(403);
+    expect(await roleOf(world.keeper.id)).toBe('keeper');
 
-    const r = await remove(owner, keeper.id);
+    const r = await remove(world.owner, world.keeper.id);
     expect(r.status).toBe(200);
-    expect(await roleOf(keeper.id)).toBeNull();
-    expect((await User.findByPk(keeper.id))?.sessionVersion).toBe(2);
+    expect(await roleOf(world.keeper.id)).toBeNull();
+    expect((await User.findByPk(world.keeper.id))?.sessionVersion).toBe(2);
     const after = await call(enclosures.GET, {
-      path: `/api/enclosures?organisationId=${shop.id}`,
+      path: `/api/enclosures?organisationId=${world.shop.id}`,
       cookie: keeperCookie,
     });
     expect(after.status).toBe(401);
     // Nothing the keeper saved is lost: staff still see the enclosure.
-    const list = await call(enclosures.GET, { path: `/api/enclosures?organisationId=${shop.id}`, as: staff });
+    const list = await call(enclosures.GET, {
+      path: `/api/enclosures?organisationId=${world.shop.id}`,
+      as: world.staff,
+    });
     expect(list.body.items.map((e: { name: string }) => e.name)).toContain('Kept after removal');
   });
 
   it('refuses to remove the last owner', async () => {
-    const r = await remove(owner, owner.id);
+    const r = await remove(world.owner, world.owner.id);
     expect(r.status).toBe(409);
-    expect(await roleOf(owner.id)).toBe('owner');
+    expect(await roleOf(world.owner.id)).toBe('owner');
   });
 });
 
 describe('GET /api/keepers', () => {
   it('lists keepers with their enclosure counts for staff; not for keepers', async () => {
-    await createEnclosure(shop, keeper);
-    await createEnclosure(shop, keeper);
-    const r = await call(keepers.GET, { path: `/api/keepers?organisationId=${shop.id}`, as: staff });
+    await createEnclosure(world.shop, world.keeper);
+    await createEnclosure(world.shop, world.keeper);
+    const r = await call(keepers.GET, {
+      path: `/api/keepers?organisationId=${world.shop.id}`,
+      as: world.staff,
+    });
     expect(r.status).toBe(200);
     expect(r.body.items).toEqual([
-      expect.objectContaining({ userId: keeper.id, name: 'Keeper Person', enclosureCount: 2 }),
+      expect.objectContaining({ userId: world.keeper.id, name: 'Keeper Person', enclosureCount: 2 }),
     ]);
     expect(
-      (await call(keepers.GET, { path: `/api/keepers?organisationId=${shop.id}`, as: keeper })).status,
+      (await call(keepers.GET, { path: `/api/keepers?organisationId=${world.shop.id}`, as: world.keeper }))
+        .status,
     ).toBe(404);
   });
 });
 
 describe('the people lists page, search and sort on the server', () => {
   const keeperList = (qs: string) =>
-    call(keepers.GET, { path: `/api/keepers?organisationId=${shop.id}${qs}`, as: staff });
+    call(keepers.GET, { path: `/api/keepers?organisationId=${world.shop.id}${qs}`, as: world.staff });
   const memberList = (qs: string) =>
-    call(members.GET, { path: `${path()}?${qs}`, params: { id: shop.id }, as: staff });
+    call(members.GET, { path: `${path()}?${qs}`, params: { id: world.shop.id }, as: world.staff });
 
   it('pages the keepers with a total, finds one by name or e-mail, and sorts by name either way', async () => {
     // Words no generated e-mail address holds, so a search finds the one name.
     const WORDS = ['Alpha', 'Bravo', 'Charlie', 'Delta', 'Echo', 'Foxtrot'];
     for (let i = 0; i < 6; i++) {
-      const { user } = await createMember('keeper', shop);
+      const { user } = await createMember('keeper', world.shop);
       await user.update({ name: `Example customer ${WORDS[i]}` });
     }
     const first = await keeperList('&limit=3');
@@ -165,8 +174,8 @@ describe('the people lists page, search and sort on the server', () => {
     expect(found.body.total).toBe(1);
     expect(found.body.items[0]).toMatchObject({ name: 'Example customer Delta', enclosureCount: 0 });
     expect(found.body.items[0]).not.toHaveProperty('role');
-    const byMail = await keeperList(`&q=${encodeURIComponent(keeper.email)}`);
-    expect(byMail.body.items.map((k: { userId: number }) => k.userId)).toEqual([keeper.id]);
+    const byMail = await keeperList(`&q=${encodeURIComponent(world.keeper.email)}`);
+    expect(byMail.body.items.map((k: { userId: number }) => k.userId)).toEqual([world.keeper.id]);
     // Only keepers: the owner and staff are not in this list whatever the search.
     expect((await keeperList('&q=Staff')).body.total).toBe(0);
   });
@@ -177,9 +186,9 @@ describe('the people lists page, search and sort on the server', () => {
     expect(all.body.items.map((m: { role: string }) => m.role)).toEqual(['owner', 'staff', 'keeper']);
     expect(all.body.total).toBe(3);
     const staffOnly = await memberList('role=staff');
-    expect(staffOnly.body.items.map((m: { userId: number }) => m.userId)).toEqual([staff.id]);
+    expect(staffOnly.body.items.map((m: { userId: number }) => m.userId)).toEqual([world.staff.id]);
     const newest = await memberList('sort=joined&limit=1');
-    expect(newest.body.items.map((m: { userId: number }) => m.userId)).toEqual([keeper.id]);
+    expect(newest.body.items.map((m: { userId: number }) => m.userId)).toEqual([world.keeper.id]);
     expect((await memberList('sort=password')).status).toBe(400);
     expect((await keeperList('&sort=role')).status).toBe(400);
   });
