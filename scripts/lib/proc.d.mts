@@ -6,4 +6,6 @@ export declare function run(
   args?: string[],
   opts?: { env?: NodeJS.ProcessEnv; cwd?: string; capture?: boolean; check?: boolean; input?: string },
 ): Promise<{ code: number; stdout: string; stderr: string }>;
+/** Resolves whether something accepts TCP connections on host:port. */
+export declare function canConnect(port: number, host?: string): Promise<boolean>;
 export declare function freePort(start: number, host?: string): Promise<number>;

@@ -1,6 +1,6 @@
-import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import * as importRoute from '@/app/api/readings/import/route';
-import { useFakeS3 } from '@/tests/helpers/fake-s3';
+import { withFakeS3 } from '@/tests/helpers/fake-s3';
 import { getObject } from '@/lib/storage/s3';
 import { MAX_JSON_BODY_BYTES } from '@/lib/api/request';
 import { MAX_CSV_BYTES, MAX_CSV_IMPORT_BODY_BYTES } from '@/lib/uploads/limits';
@@ -10,13 +10,7 @@ import { createEnclosure, createMember, createOrganisation, withTestDatabase } f
 import { call } from './http';
 
 // CSV import against the real test database and the fake S3 server.
-let s3: { close: () => Promise<void> };
-beforeAll(async () => {
-  s3 = await useFakeS3();
-});
-afterAll(async () => {
-  await s3.close();
-});
+withFakeS3();
 withTestDatabase();
 
 async function world() {

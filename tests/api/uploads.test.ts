@@ -1,7 +1,7 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import * as uploadsRoute from '@/app/api/uploads/route';
 import * as uploadRoute from '@/app/api/uploads/[id]/route';
-import { useFakeS3 } from '@/tests/helpers/fake-s3';
+import { withFakeS3 } from '@/tests/helpers/fake-s3';
 import { getObject, putObject } from '@/lib/storage/s3';
 import { jpegWithMetadata, pngWithMetadata } from '@/tests/fixtures/images';
 import { Organisation, Upload } from '@/models';
@@ -10,13 +10,7 @@ import { createEnclosureWorld, type EnclosureWorld } from '../helpers/world';
 import { call, ORIGIN, sessionCookie } from './http';
 
 // Backdrop photos against the real test database and the fake S3 server.
-let s3: { close: () => Promise<void> };
-beforeAll(async () => {
-  s3 = await useFakeS3();
-});
-afterAll(async () => {
-  await s3.close();
-});
+withFakeS3();
 withTestDatabase();
 
 const world = () => createEnclosureWorld();

@@ -1,6 +1,7 @@
-import net from 'node:net';
 import path from 'node:path';
+import { afterAll, beforeAll } from 'vitest';
 import { FAKE_S3_DEFAULTS, startFakeS3 } from '@/scripts/fake-s3.mjs';
+import { canConnect } from '@/scripts/lib/proc.mjs';
 import { resetStorageClient } from '@/lib/storage/s3';
 
 /**
@@ -16,7 +17,7 @@ export async function useFakeS3(): Promise<{ close: () => Promise<void> }> {
   resetStorageClient();
   const url = new URL(process.env.S3_ENDPOINT);
   const port = Number(url.port || 80);
-  if (await listening(port, url.hostname)) return { close: async () => {} };
+  if (await canConnect(port, url.hostname)) return { close: async () => {} };
   const server = await startFakeS3({
     endpoint: process.env.S3_ENDPOINT,
     bucket: process.env.S3_BUCKET || FAKE_S3_DEFAULTS.S3_BUCKET,
@@ -30,18 +31,13 @@ export async function useFakeS3(): Promise<{ close: () => Promise<void> }> {
   };
 }
 
-function listening(port: number, host: string): Promise<boolean> {
-  return new Promise((resolve) => {
-    const socket = net.connect({ port, host });
-    socket.setTimeout(500);
-    socket.once('connect', () => {
-      socket.destroy();
-      resolve(true);
-    });
-    socket.once('timeout', () => {
-      socket.destroy();
-      resolve(false);
-    });
-    socket.once('error', () => resolve(false));
+/** `useFakeS3()` for a whole test file: the server answers from before its first test to after its last. */
+export function withFakeS3(): void {
+  let s3: { close: () => Promise<void> } | undefined;
+  beforeAll(async () => {
+    s3 = await useFakeS3();
+  });
+  afterAll(async () => {
+    await s3?.close();
   });
 }
