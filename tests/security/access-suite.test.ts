@@ -11,11 +11,11 @@
 import fc from 'fast-check';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { settleMail } from '@/lib/auth/mail-soon';
-import { closeDatabase, resetDatabase } from '../helpers/db';
+import { closeDatabase } from '../helpers/db';
 import { ORIGIN } from '../api/http';
 import { REQUESTS, idFor } from './access-requests';
-import { MARK, buildWorld, cookieOf, fingerprint, outsiderOwns, type World } from './access-world';
-import { fill, loadRoutes, type RouteEntry } from './route-modules';
+import { MARK, cookieOf, fingerprint, outsiderOwns, worldAndRoutes, type World } from './access-world';
+import { fill, type RouteEntry } from './route-modules';
 
 const SEED = Number(process.env.FUZZ_SEED ?? 20_251_202);
 const RUNS = Number(process.env.ACCESS_FUZZ_RUNS ?? 12);
@@ -113,9 +113,7 @@ const hiddenFrom = (actor: Actor): (keyof typeof MARK)[] =>
   actor === 'otherKeeper' ? ALL_MARKERS.filter((m) => m !== 'species' && m !== 'lampType') : ALL_MARKERS;
 
 beforeAll(async () => {
-  await resetDatabase();
-  world = await buildWorld();
-  routes = await loadRoutes();
+  ({ world, routes } = await worldAndRoutes());
 }, 120_000);
 afterAll(closeDatabase);
 

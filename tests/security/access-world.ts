@@ -18,8 +18,16 @@ import { User, Variant } from '@/models';
 import { EXAMPLE_DESIGN } from '@/simulation/testing/fixtures';
 import { call, sessionCookie } from '../api/http';
 import { LAMP_TYPE_BODY, READING_BODY, SPECIES_BODY } from './valid-bodies';
-import { addMember, createEnclosure, createUser, tablesInDeleteOrder, testDb } from '../helpers/db';
+import {
+  addMember,
+  createEnclosure,
+  createUser,
+  resetDatabase,
+  tablesInDeleteOrder,
+  testDb,
+} from '../helpers/db';
 import { createWorld } from '../helpers/world';
+import { loadRoutes, type RouteEntry } from './route-modules';
 
 export const MARK = {
   enclosure: 'Zz-enclosure-of-keeper-one',
@@ -192,6 +200,15 @@ export async function buildWorld(): Promise<World> {
     customer: customer.body.customer.id,
     counterLamp: counterLamp.body.lampId,
   };
+}
+
+/**
+ * What a file that sends requests to every route starts from: an emptied database holding this world,
+ * and every route handler found from the route files (it takes a while: give the hook two minutes).
+ */
+export async function worldAndRoutes(): Promise<{ world: World; routes: RouteEntry[] }> {
+  await resetDatabase();
+  return { world: await buildWorld(), routes: await loadRoutes() };
 }
 
 export async function uploadPng(cookie: string, enclosureId: number) {

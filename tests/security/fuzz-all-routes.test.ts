@@ -10,13 +10,13 @@ import fc from 'fast-check';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { MAX_JSON_BODY_BYTES } from '@/lib/api/request';
 import { MAX_CSV_IMPORT_BODY_BYTES, MAX_IMAGE_BYTES } from '@/lib/uploads/limits';
-import { closeDatabase, resetDatabase } from '../helpers/db';
+import { closeDatabase } from '../helpers/db';
 import { ORIGIN, type Reply } from '../api/http';
 import { REQUESTS, idFor } from './access-requests';
-import { buildWorld, cookieOf, type World } from './access-world';
+import { cookieOf, worldAndRoutes, type World } from './access-world';
 import { EDGE_VALUES, bodyCaseArb, mutate, type BodyCase, type Json } from './fuzz-arbitraries';
 import { checkProperty, expectSafeReply } from './fuzz-contract';
-import { fill, loadRoutes, type RouteEntry } from './route-modules';
+import { fill, type RouteEntry } from './route-modules';
 
 const RUNS = Number(process.env.FUZZ_ALL_RUNS ?? 25);
 
@@ -25,9 +25,7 @@ let routes: RouteEntry[] = [];
 const keyOf = (r: RouteEntry) => `${r.method} ${r.pattern}`;
 
 beforeAll(async () => {
-  await resetDatabase();
-  world = await buildWorld();
-  routes = await loadRoutes();
+  ({ world, routes } = await worldAndRoutes());
 }, 120_000);
 afterAll(closeDatabase);
 
