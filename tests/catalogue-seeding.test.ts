@@ -3,14 +3,12 @@
 import { QueryTypes } from 'sequelize';
 import { describe, expect, it } from 'vitest';
 import SharePage from '@/app/s/[token]/page';
-import * as enclosureDesignsRoute from '@/app/api/enclosures/[id]/designs/route';
-import * as sharesRoute from '@/app/api/variants/[id]/shares/route';
 import { STARTING_LAMP_TYPES } from '@/lib/lamp-types/starting-lamp-types';
 import { createOrganisation as createOrganisationWithOwner } from '@/lib/organisations/mutations';
 import { seedMissingCatalogues } from '@/lib/species/seed';
 import { STARTING_SHEETS } from '@/lib/species/starting-sheets';
 import { LampType, SpeciesSheet } from '@/models';
-import { call } from './api/variants.helpers';
+import { postDesign, postShare } from './api/variants.helpers';
 import {
   createEnclosure,
   createMember,
@@ -66,22 +64,8 @@ describe('the starting catalogue', () => {
       name: 'Desert tank',
       speciesName: 'Bearded dragon',
     });
-    const made = await call(enclosureDesignsRoute.POST, {
-      method: 'POST',
-      path: `/api/enclosures/${enclosure.id}/designs`,
-      params: { id: enclosure.id },
-      user: keeper,
-      body: { name: 'Plan', variantName: 'Low lamp' },
-    });
-    const variantId = made.body.variant.id as number;
-    const shared = await call(sharesRoute.POST, {
-      method: 'POST',
-      path: `/api/variants/${variantId}/shares`,
-      params: { id: variantId },
-      user: keeper,
-      body: {},
-    });
-    const token = shared.body.share.token as string;
+    const { variantId } = await postDesign(keeper, enclosure.id, { name: 'Plan', variantName: 'Low lamp' });
+    const token = (await postShare(keeper, variantId)).body.share.token as string;
 
     const before = await insertsSoFar();
     const page = await SharePage({ params: Promise.resolve({ token }), searchParams: Promise.resolve({}) });

@@ -1,16 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import * as enclosureDesignsRoute from '@/app/api/enclosures/[id]/designs/route';
-import * as exportRoute from '@/app/api/variants/[id]/export/route';
 import * as variantRoute from '@/app/api/variants/[id]/route';
-import * as sharesRoute from '@/app/api/variants/[id]/shares/route';
-import * as sharedReportRoute from '@/app/s/[token]/report/route';
 import { countAttempt, limitKey } from '@/lib/rate-limit';
 import { EXPORT_LIMIT } from '@/lib/reports/limits';
 import { Variant } from '@/models';
 import { benchDesign, heaviestAllowedDesign } from '@/simulation/testing/fixtures';
 import { withTestDatabase } from '../helpers/db';
 import { createKeeperWorld } from '../helpers/world';
-import { call, postDesign } from './variants.helpers';
+import { call, exportVariant, postDesign, postShare, sharedReport } from './variants.helpers';
 
 withTestDatabase();
 
@@ -26,23 +23,16 @@ async function world() {
   return { keeper, enclosure, variantId };
 }
 
-const exportAs = (w: Awaited<ReturnType<typeof world>>, query: string) =>
-  call(exportRoute.GET, {
-    path: `/api/variants/${w.variantId}/export?${query}`,
-    params: { id: w.variantId },
-    user: w.keeper,
-  });
-
 describe('export limits', () => {
   it('accepts only the lamp ages the app offers (every other value was its own engine run)', async () => {
     const w = await world();
     for (const months of ['5', '120', '7.5', '-3']) {
-      const r = await exportAs(w, `format=png&months=${months}`);
+      const r = await exportVariant(w.keeper, w.variantId, `format=png&months=${months}`);
       expect(r.status).toBe(400);
       expect(r.body.error.field).toBe('months');
       expect(r.body.error.message).toBe('months must be one of 0, 3, 6, 12, 18, 24.');
     }
-    expect((await exportAs(w, 'format=png&months=12')).status).toBe(200);
+    expect((await exportVariant(w.keeper, w.variantId, 'format=png&months=12')).status).toBe(200);
   });
 
   it('refuses to save a design beyond the work bound with 422 naming the limit; the heaviest allowed saves', async () => {
@@ -77,10 +67,10 @@ describe('export limits', () => {
   it('does not compute a stored design saved before the bound (422), but still hands out its file', async () => {
     const w = await world();
     await Variant.update({ designJson: JSON.stringify(benchDesign(10, 10)) }, { where: { id: w.variantId } });
-    const png = await exportAs(w, 'format=png');
+    const png = await exportVariant(w.keeper, w.variantId, 'format=png');
     expect(png.status).toBe(422);
     expect(png.body.error.message).toContain('the limit is 300 million');
-    const file = await exportAs(w, 'format=json');
+    const file = await exportVariant(w.keeper, w.variantId, 'format=json');
     expect(file.status).toBe(200);
   });
 
@@ -88,29 +78,18 @@ describe('export limits', () => {
     const w = await world();
     const key = limitKey('export-user', String(w.keeper.id));
     for (let i = 0; i < EXPORT_LIMIT.perUser - 1; i++) await countAttempt([key], EXPORT_LIMIT.windowMs);
-    expect((await exportAs(w, 'format=png')).status).toBe(200);
-    const refused = await exportAs(w, 'format=pdf');
+    expect((await exportVariant(w.keeper, w.variantId, 'format=png')).status).toBe(200);
+    const refused = await exportVariant(w.keeper, w.variantId, 'format=pdf');
     expect(refused.status).toBe(429);
     expect(refused.body.error.code).toBe('rate_limited');
     expect(Number(refused.res.headers.get('retry-after'))).toBeGreaterThan(0);
-    expect((await exportAs(w, 'format=json')).status).toBe(200);
+    expect((await exportVariant(w.keeper, w.variantId, 'format=json')).status).toBe(200);
   });
 
   it('limits the downloads of one share link the same way', async () => {
     const w = await world();
-    const shared = await call(sharesRoute.POST, {
-      method: 'POST',
-      path: `/api/variants/${w.variantId}/shares`,
-      params: { id: w.variantId },
-      user: w.keeper,
-      body: {},
-    });
-    const token = shared.body.share.token as string;
-    const download = () =>
-      call((req, ctx) => sharedReportRoute.GET(req, ctx as { params: Promise<{ token: string }> }), {
-        path: `/s/${token}/report?format=png`,
-        params: { token },
-      });
+    const token = (await postShare(w.keeper, w.variantId)).body.share.token as string;
+    const download = () => sharedReport(token, 'png');
     const key = limitKey('export-share', String(w.variantId));
     for (let i = 0; i < EXPORT_LIMIT.perShareLink - 1; i++) await countAttempt([key], EXPORT_LIMIT.windowMs);
     expect((await download()).status).toBe(200);

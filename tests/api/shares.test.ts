@@ -2,7 +2,6 @@ import { describe, expect, it } from 'vitest';
 import * as shareRoute from '@/app/api/shares/[id]/route';
 import * as sharesRoute from '@/app/api/variants/[id]/shares/route';
 import * as sharedPictureRoute from '@/app/s/[token]/picture/[version]/[file]/route';
-import * as sharedReportRoute from '@/app/s/[token]/report/route';
 import { parsePictureParams, pictureCache, sharePicturePath } from '@/lib/variants/share-picture';
 import { resolveShareToken } from '@/lib/variants/queries';
 import { hashShareToken } from '@/lib/variants/tokens';
@@ -10,7 +9,7 @@ import { ShareLink, Variant } from '@/models';
 import { benchDesign } from '@/simulation/testing/fixtures';
 import { withTestDatabase } from '../helpers/db';
 import { createKeeperWorld } from '../helpers/world';
-import { call, ORIGIN, postDesign } from './variants.helpers';
+import { call, ORIGIN, postDesign, postShare, sharedReport } from './variants.helpers';
 
 withTestDatabase();
 
@@ -23,21 +22,8 @@ async function world() {
   return { org, staff: staff!, keeper, enclosure, variantId };
 }
 
-/** The public report download of a link, as an anonymous visitor (no session) asks for it. */
-const report = (token: string, format = 'pdf') =>
-  call((req, ctx) => sharedReportRoute.GET(req, ctx as { params: Promise<{ token: string }> }), {
-    path: `/s/${token}/report?format=${format}`,
-    params: { token },
-  });
-
 const share = (w: Awaited<ReturnType<typeof world>>, user = w.keeper, body: unknown = {}) =>
-  call(sharesRoute.POST, {
-    method: 'POST',
-    path: `/api/variants/${w.variantId}/shares`,
-    params: { id: w.variantId },
-    user,
-    body,
-  });
+  postShare(user, w.variantId, body);
 
 describe('share links', () => {
   it('creates a link whose token is shown once and stored only as its SHA-256', async () => {
@@ -72,7 +58,7 @@ describe('share links', () => {
     expect(s!.enclosureName).toBe('Desert tank');
     expect(s!.organisationName).toBe('Shop A');
     expect(s!.design.enclosure.width).toBe(120);
-    const pdf = await report(token);
+    const pdf = await sharedReport(token);
     expect(pdf.status).toBe(200);
     expect(pdf.res.headers.get('content-type')).toBe('application/pdf');
     expect((await pdf.res.arrayBuffer()).byteLength).toBeGreaterThan(1000);
@@ -100,7 +86,7 @@ describe('share links', () => {
     expect(first.body.share.state).toBe('revoked');
     expect(await resolveShareToken(token)).toBeNull();
     for (const format of ['pdf', 'png']) {
-      const r = await report(token, format);
+      const r = await sharedReport(token, format);
       expect(r.status).toBe(404);
       expect(r.body.error.code).toBe('not_found');
     }
@@ -119,10 +105,10 @@ describe('share links', () => {
     // Eight days later, as the page sees it …
     expect(await resolveShareToken(token, new Date(Date.now() + 8 * 86_400_000))).toBeNull();
     // … and as stored: an expiry already in the past.
-    expect((await report(token, 'png')).status).toBe(200);
+    expect((await sharedReport(token, 'png')).status).toBe(200);
     await ShareLink.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { id } });
     expect(await resolveShareToken(token)).toBeNull();
-    expect((await report(token)).status).toBe(404);
+    expect((await sharedReport(token)).status).toBe(404);
   });
 
   it('answers nothing for unknown or malformed tokens', async () => {
@@ -132,8 +118,8 @@ describe('share links', () => {
     expect(await resolveShareToken(flipped)).toBeNull();
     expect(await resolveShareToken(token.slice(1))).toBeNull();
     expect(await resolveShareToken(hashShareToken(token))).toBeNull();
-    expect((await report(flipped)).status).toBe(404);
-    expect((await report('not-a-token')).status).toBe(404);
+    expect((await sharedReport(flipped)).status).toBe(404);
+    expect((await sharedReport('not-a-token')).status).toBe(404);
   });
 
   it('validates the expiry', async () => {

@@ -3,13 +3,12 @@
 // and a stored file only changes when its owner saves it again.
 import { describe, expect, it } from 'vitest';
 import * as designVariantsRoute from '@/app/api/designs/[id]/variants/route';
-import * as exportRoute from '@/app/api/variants/[id]/export/route';
 import * as variantRoute from '@/app/api/variants/[id]/route';
 import { designLampsOf } from '@/lib/lamp-log/design-lamps';
 import { Variant } from '@/models';
 import { withTestDatabase } from '../helpers/db';
 import { createKeeperWorld } from '../helpers/world';
-import { call, postDesign } from './variants.helpers';
+import { call, exportVariant, postDesign } from './variants.helpers';
 
 withTestDatabase();
 
@@ -66,11 +65,7 @@ describe('version-1 designs saved before depth', () => {
     expect(read.status).toBe(200);
     expect(read.body.variant.design).toEqual({ ...v1, version: 2 });
 
-    const exported = await call(exportRoute.GET, {
-      path: `/api/variants/${w.variantId}/export?format=json`,
-      params: { id: w.variantId },
-      user: w.keeper,
-    });
+    const exported = await exportVariant(w.keeper, w.variantId, 'format=json');
     expect(exported.status).toBe(200);
     expect(exported.body).toEqual({ ...v1, version: 2 });
 

@@ -2,13 +2,12 @@ import { PDFDocument } from 'pdf-lib';
 import { PNG } from 'pngjs';
 import { describe, expect, it } from 'vitest';
 import * as enclosureDesignsRoute from '@/app/api/enclosures/[id]/designs/route';
-import * as exportRoute from '@/app/api/variants/[id]/export/route';
 import * as variantRoute from '@/app/api/variants/[id]/route';
 import { Organisation } from '@/models';
 import { EXAMPLE_DATA_NOTE } from '@/shared/example-data';
 import { withTestDatabase } from '../helpers/db';
 import { createKeeperWorld } from '../helpers/world';
-import { call, pdfDrawnText, postDesign } from './variants.helpers';
+import { call, exportVariant, pdfDrawnText, postDesign } from './variants.helpers';
 
 withTestDatabase();
 
@@ -47,17 +46,10 @@ async function world(speciesName: string | null, body: Record<string, unknown> =
   return { keeper, enclosure, variantId };
 }
 
-const exportAs = (w: Awaited<ReturnType<typeof world>>, query: string) =>
-  call(exportRoute.GET, {
-    path: `/api/variants/${w.variantId}/export?${query}`,
-    params: { id: w.variantId },
-    user: w.keeper,
-  });
-
 describe('export', () => {
   it('downloads the design file as JSON, the same document the API stores', async () => {
     const w = await world(null);
-    const r = await exportAs(w, 'format=json');
+    const r = await exportVariant(w.keeper, w.variantId, 'format=json');
     expect(r.status).toBe(200);
     expect(r.res.headers.get('content-disposition')).toBe(
       'attachment; filename="rock-under-the-tube.baskwell.json"',
@@ -75,7 +67,7 @@ describe('export', () => {
     const backdrop = { uploadId: 5, x: -2, y: 0, width: 124, height: 61.5, opacity: 0.45, visible: false };
     const withPhoto = { ...design, backdrop };
     const w = await world(null, withPhoto);
-    const r = await exportAs(w, 'format=json');
+    const r = await exportVariant(w.keeper, w.variantId, 'format=json');
     expect(r.body).toEqual(withPhoto);
     const bad = await call(enclosureDesignsRoute.POST, {
       method: 'POST',
@@ -91,7 +83,7 @@ describe('export', () => {
 
   it('renders a field as a PNG picture', async () => {
     const w = await world(null);
-    const r = await exportAs(w, 'format=png&field=tempC');
+    const r = await exportVariant(w.keeper, w.variantId, 'format=png&field=tempC');
     expect(r.status).toBe(200);
     expect(r.res.headers.get('content-type')).toBe('image/png');
     const png = PNG.sync.read(Buffer.from(await r.res.arrayBuffer()));
@@ -107,7 +99,7 @@ describe('export', () => {
 
   it('writes a PDF report titled and headed with the variant’s name, with lamps and cautions', async () => {
     const w = await world(null);
-    const r = await exportAs(w, 'format=pdf');
+    const r = await exportVariant(w.keeper, w.variantId, 'format=pdf');
     expect(r.status).toBe(200);
     const bytes = new Uint8Array(await r.res.arrayBuffer());
     expect(Buffer.from(bytes.subarray(0, 5)).toString('latin1')).toBe('%PDF-');
@@ -147,17 +139,25 @@ describe('export', () => {
   it('marks the report of an example-data organisation (the demo) as invented, and no other', async () => {
     const real = await world(null);
     expect(
-      pdfDrawnText(new Uint8Array(await (await exportAs(real, 'format=pdf')).res.arrayBuffer())),
+      pdfDrawnText(
+        new Uint8Array(
+          await (await exportVariant(real.keeper, real.variantId, 'format=pdf')).res.arrayBuffer(),
+        ),
+      ),
     ).not.toContain('Example data');
     await Organisation.update({ exampleData: true }, { where: { id: real.enclosure.organisationId } });
-    const text = pdfDrawnText(new Uint8Array(await (await exportAs(real, 'format=pdf')).res.arrayBuffer()));
+    const text = pdfDrawnText(
+      new Uint8Array(
+        await (await exportVariant(real.keeper, real.variantId, 'format=pdf')).res.arrayBuffer(),
+      ),
+    );
     // The note's first words, on its first line (a long note wraps).
     expect(text).toContain(EXAMPLE_DATA_NOTE.slice(0, 44));
   });
 
   it('includes the assessment when the enclosure’s species has a sheet', async () => {
     const w = await world('Bearded dragon');
-    const r = await exportAs(w, 'format=pdf');
+    const r = await exportVariant(w.keeper, w.variantId, 'format=pdf');
     const text = pdfDrawnText(new Uint8Array(await r.res.arrayBuffer()));
     expect(text).toMatch(/Species: Bearded dragon — overall (Pass|Attention|Fail)/);
     expect(text).not.toContain('No species is attached');
@@ -166,9 +166,11 @@ describe('export', () => {
 
   it('refuses an unknown format or field with 400', async () => {
     const w = await world(null);
-    const r = await exportAs(w, 'format=docx');
+    const r = await exportVariant(w.keeper, w.variantId, 'format=docx');
     expect(r.status).toBe(400);
     expect(r.body.error.field).toBe('format');
-    expect((await exportAs(w, 'format=png&field=light')).body.error.field).toBe('field');
+    expect((await exportVariant(w.keeper, w.variantId, 'format=png&field=light')).body.error.field).toBe(
+      'field',
+    );
   });
 });

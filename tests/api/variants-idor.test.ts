@@ -18,7 +18,7 @@ import type { User } from '@/models';
 import { createMember, createUser, testDb, withTestDatabase } from '../helpers/db';
 import { createEnclosureWorld } from '../helpers/world';
 import { expectNoInternals, type Reply } from './http';
-import { call } from './variants.helpers';
+import { call, postDesign, postShare } from './variants.helpers';
 
 withTestDatabase();
 
@@ -34,30 +34,10 @@ async function world() {
   } = await createEnclosureWorld({ shopName: 'Shop A' });
   const { user: otherStaff } = await createMember('staff', otherOrg);
   const { user: nobody } = await createUser();
-  const made = await call(enclosureDesignsRoute.POST, {
-    method: 'POST',
-    path: `/api/enclosures/${enclosure.id}/designs`,
-    params: { id: enclosure.id },
-    user: staff,
-    body: { name: 'Plan' },
-  });
-  const designId = made.body.design.id as number;
-  const variantId = made.body.variant.id as number;
-  const shared = await call(sharesRoute.POST, {
-    method: 'POST',
-    path: `/api/variants/${variantId}/shares`,
-    params: { id: variantId },
-    user: keeper,
-    body: {},
-  });
+  const { designId, variantId } = await postDesign(staff, enclosure.id, { name: 'Plan' });
+  const shared = await postShare(keeper, variantId);
   // The outsider's own design, to try pulling the victim's variant into it.
-  const theirs = await call(enclosureDesignsRoute.POST, {
-    method: 'POST',
-    path: `/api/enclosures/${theirEnclosure.id}/designs`,
-    params: { id: theirEnclosure.id },
-    user: outsider,
-    body: { name: 'Mine' },
-  });
+  const theirs = await postDesign(outsider, theirEnclosure.id, { name: 'Mine' });
   return {
     staff,
     keeper,
@@ -67,7 +47,7 @@ async function world() {
     variantId,
     shareId: shared.body.share.id as number,
     token: shared.body.share.token as string,
-    outsiderDesignId: theirs.body.design.id as number,
+    outsiderDesignId: theirs.designId,
   };
 }
 

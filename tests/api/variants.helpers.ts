@@ -3,6 +3,9 @@
 // unread, so export tests can read the PNG or PDF bytes themselves.
 import { inflateSync } from 'node:zlib';
 import * as enclosureDesignsRoute from '@/app/api/enclosures/[id]/designs/route';
+import * as exportRoute from '@/app/api/variants/[id]/export/route';
+import * as sharesRoute from '@/app/api/variants/[id]/shares/route';
+import * as sharedReportRoute from '@/app/s/[token]/report/route';
 import type { User } from '@/models';
 import { ORIGIN, sessionCookie } from './http';
 
@@ -61,6 +64,31 @@ export async function postDesign(
   if (made.status !== 201) throw new Error(`postDesign: ${made.status} ${JSON.stringify(made.body)}`);
   return { designId: made.body.design.id as number, variantId: made.body.variant.id as number };
 }
+
+/** A variant's download (`format=json`, `format=png&months=24` …) as `user` asks for it. */
+export const exportVariant = (user: User, variantId: number, query: string) =>
+  call(exportRoute.GET, {
+    path: `/api/variants/${variantId}/export?${query}`,
+    params: { id: variantId },
+    user,
+  });
+
+/** A share link of a variant, asked for through the route as `user` (the reply carries its token). */
+export const postShare = (user: User, variantId: number, body: unknown = {}) =>
+  call(sharesRoute.POST, {
+    method: 'POST',
+    path: `/api/variants/${variantId}/shares`,
+    params: { id: variantId },
+    user,
+    body,
+  });
+
+/** The public report download of a share link, as an anonymous visitor (no session) asks for it. */
+export const sharedReport = (token: string, format = 'pdf') =>
+  call((req, ctx) => sharedReportRoute.GET(req, ctx as { params: Promise<{ token: string }> }), {
+    path: `/s/${token}/report?format=${format}`,
+    params: { token },
+  });
 
 /**
  * The text drawn in a PDF made by pdf-lib with the standard fonts: each content stream is inflated and
