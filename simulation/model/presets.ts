@@ -31,32 +31,25 @@ export interface LampPreset {
 
 const OUTPUT = 'uvbAt30: a typical new lamp of the class (from memory; calibrate with a meter)';
 
+/** A UVB fluorescent tube of an output class: its length and watts (from memory) and its uvbAt30. */
+const tube = (
+  tech: 't5' | 't8',
+  output: string,
+  length: number,
+  watts: number,
+  uvbAt30: number,
+): LampPreset => ({
+  label: `${tech.toUpperCase()} tube, ${output} output, ${length} cm`,
+  lamp: { tech, form: 'tube', length, uvbAt30, watts },
+  source: `${OUTPUT}; length and watts from memory`,
+});
+
 export const LAMP_PRESETS: Record<LampPresetId, LampPreset> = {
-  't5-low': {
-    label: 'T5 tube, low output, 55 cm',
-    lamp: { tech: 't5', form: 'tube', length: 55, uvbAt30: 5.3, watts: 24 },
-    source: `${OUTPUT}; length and watts from memory`,
-  },
-  't5-medium': {
-    label: 'T5 tube, medium output, 55 cm',
-    lamp: { tech: 't5', form: 'tube', length: 55, uvbAt30: 25, watts: 24 },
-    source: `${OUTPUT}; length and watts from memory`,
-  },
-  't5-high': {
-    label: 'T5 tube, high output, 55 cm',
-    lamp: { tech: 't5', form: 'tube', length: 55, uvbAt30: 42.5, watts: 24 },
-    source: `${OUTPUT}; length and watts from memory`,
-  },
-  't5-very-high': {
-    label: 'T5 tube, very high output, 55 cm',
-    lamp: { tech: 't5', form: 'tube', length: 55, uvbAt30: 61, watts: 24 },
-    source: `${OUTPUT}; length and watts from memory`,
-  },
-  't8-medium': {
-    label: 'T8 tube, medium output, 60 cm',
-    lamp: { tech: 't8', form: 'tube', length: 60, uvbAt30: 25, watts: 18 },
-    source: `${OUTPUT}; length and watts from memory`,
-  },
+  't5-low': tube('t5', 'low', 55, 24, 5.3),
+  't5-medium': tube('t5', 'medium', 55, 24, 25),
+  't5-high': tube('t5', 'high', 55, 24, 42.5),
+  't5-very-high': tube('t5', 'very high', 55, 24, 61),
+  't8-medium': tube('t8', 'medium', 60, 18, 25),
   compact: {
     label: 'Compact fluorescent UVB, 26 W',
     lamp: { tech: 'compact', form: 'bulb', uvbAt30: 20, watts: 26 },
