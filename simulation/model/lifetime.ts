@@ -53,66 +53,54 @@ const HEAT_ONLY: LampLifetime = {
   note: 'A heat lamp with no UVB: replace it when it fails.',
 };
 
+/**
+ * A UV lamp whose UVB halves in `halfLifeMonths` (from memory), replaced after `replaceMonths` (common
+ * practice; null where there is no established interval) and measured every `test.months` with a meter.
+ */
+function uvLamp(
+  halfLifeMonths: number,
+  replaceMonths: number | null,
+  note: string,
+  test: { months: number; mark: LifetimeMark } = { months: TEST_EVERY_MONTHS, mark: CP },
+): LampLifetime {
+  return {
+    decay: { halfLifeMonths },
+    decayMark: FM,
+    replaceMonths,
+    replaceMark: CP,
+    testMonths: test.months,
+    testMark: test.mark,
+    note,
+  };
+}
+
 export const LAMP_LIFETIME: Record<LampTech, LampLifetime> = {
-  t5: {
-    decay: { halfLifeMonths: 12 },
-    decayMark: FM,
-    replaceMonths: 12,
-    replaceMark: CP,
-    testMonths: TEST_EVERY_MONTHS,
-    testMark: CP,
-    note: 'T5 UVB tubes are usually replaced after about a year, by which time their UVB is about half of new.',
-  },
-  t8: {
-    decay: { halfLifeMonths: 6 },
-    decayMark: FM,
-    replaceMonths: 6,
-    replaceMark: CP,
-    testMonths: TEST_EVERY_MONTHS,
-    testMark: CP,
-    note: 'T8 UVB tubes fade faster than T5 and are usually replaced every 6 months.',
-  },
-  compact: {
-    decay: { halfLifeMonths: 6 },
-    decayMark: FM,
-    replaceMonths: 6,
-    replaceMark: CP,
-    testMonths: TEST_EVERY_MONTHS,
-    testMark: CP,
-    note: 'Compact UVB lamps often lose half their UVB within 6–8 months; the shorter end is taken.',
-  },
-  'mercury-vapour': {
-    decay: { halfLifeMonths: 6 },
-    decayMark: FM,
-    replaceMonths: 6,
-    replaceMark: CP,
-    testMonths: 2,
-    testMark: FM,
-    note:
-      'Self-ballasted mercury vapour lamps vary widely from lamp to lamp and many lose much of their UVB ' +
+  t5: uvLamp(
+    12,
+    12,
+    'T5 UVB tubes are usually replaced after about a year, by which time their UVB is about half of new.',
+  ),
+  t8: uvLamp(6, 6, 'T8 UVB tubes fade faster than T5 and are usually replaced every 6 months.'),
+  compact: uvLamp(
+    6,
+    6,
+    'Compact UVB lamps often lose half their UVB within 6–8 months; the shorter end is taken.',
+  ),
+  'mercury-vapour': uvLamp(
+    6,
+    6,
+    'Self-ballasted mercury vapour lamps vary widely from lamp to lamp and many lose much of their UVB ' +
       'within months; the trade says replace every 6–12 months, so the shorter end is taken, and they are ' +
       'measured more often than tubes.',
-  },
-  'metal-halide': {
-    decay: { halfLifeMonths: 12 },
-    decayMark: FM,
-    replaceMonths: 12,
-    replaceMark: CP,
-    testMonths: TEST_EVERY_MONTHS,
-    testMark: CP,
-    note: 'Metal halide UVB lamps are usually replaced after about a year.',
-  },
-  'led-uvb': {
-    decay: { halfLifeMonths: 24 },
-    decayMark: FM,
-    replaceMonths: null,
-    replaceMark: CP,
-    testMonths: TEST_EVERY_MONTHS,
-    testMark: CP,
-    note:
-      'UVB LEDs are new and vary widely: there is no established replacement interval, so meter readings ' +
+    { months: 2, mark: FM },
+  ),
+  'metal-halide': uvLamp(12, 12, 'Metal halide UVB lamps are usually replaced after about a year.'),
+  'led-uvb': uvLamp(
+    24,
+    null,
+    'UVB LEDs are new and vary widely: there is no established replacement interval, so meter readings ' +
       'decide when to replace one.',
-  },
+  ),
   halogen: HEAT_ONLY,
   incandescent: HEAT_ONLY,
   ceramic: { ...HEAT_ONLY, note: 'A heat emitter with no light or UVB: replace it when it fails.' },
