@@ -6,7 +6,7 @@
 import type { Design } from '../model/schema';
 import type { SpeciesSheet } from '../model/species';
 import type { Assessment } from '../assess/types';
-import type { ProbeResult } from '../fields/types';
+import type { FieldGrid, ProbeResult } from '../fields/types';
 
 export type SimRequest = {
   id: number;
@@ -18,17 +18,10 @@ export type SimRequest = {
   probes?: { x: number; y: number }[];
 };
 
-export type SimResult = {
+/** A computed field (the grid and its arrays) with what the studio asked for beside it. */
+export type SimResult = FieldGrid & {
   id: number;
   kind: 'result';
-  nx: number;
-  ny: number;
-  cellCm: number;
-  width: number;
-  height: number;
-  uvb: Float32Array;
-  uvi: Float32Array;
-  tempC: Float32Array;
   assessment?: Assessment;
   monthsUntilUnmet?: number | null;
   probes?: ProbeResult[];
