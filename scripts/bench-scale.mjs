@@ -25,7 +25,7 @@ import { ensureSecret, loadEnv, ROOT, usesPrivateDb } from './lib/env.mjs';
 import { ensureDatabases, ensureMariaDB, recreateDatabase } from './lib/mariadb.mjs';
 import { bin, duration, freePort, log, run, stopProcess } from './lib/proc.mjs';
 import { Lifecycle, migrate, startNext } from './lib/stack.mjs';
-import { api, loadAverage, signIn, warmUp } from './load.mjs';
+import { api, codesText, loadAverage, printColumns, runFigures, signIn, warmUp } from './load.mjs';
 
 const DEFAULT_SIZE = { enclosures: 2000, lamps: 8000, readings: 100_000, designs: 200 };
 
@@ -111,18 +111,11 @@ async function measure(base, cookie, route, opts) {
           overallRate: Math.max(1, opts.rate / 4),
         }),
   ]);
-  const codes = Object.fromEntries(
-    Object.entries(main.statusCodeStats ?? {}).map(([c, s]) => [c, Number(s.count)]),
-  );
   return {
     route,
-    requests: main.requests.total,
-    rps: Math.round((main.requests.total / main.duration) * 10) / 10,
-    p50: main.latency.p50,
-    p99: main.latency.p99,
+    ...runFigures(main),
     bytes: main.requests.total ? Math.round(main.throughput.total / main.requests.total) : 0,
     errors: main.errors + main.timeouts,
-    codes,
     // No answer within the run: nothing measured (autocannon leaves the figures at 0).
     healthMax: health?.requests.total ? health.latency.max : null,
     healthP99: health?.requests.total ? health.latency.p99 : null,
@@ -141,16 +134,9 @@ function printTable(rows, baseline, rate) {
     (r.p50 / Math.max(baseline.p50, 1)).toFixed(1),
     (r.p99 / Math.max(baseline.p99, 1)).toFixed(1),
     r.healthMax === null ? '-' : String(r.healthMax),
-    Object.entries(r.codes)
-      .map(([c, n]) => `${c}×${n}`)
-      .join(' ') || 'no answer',
+    codesText(r.codes) || 'no answer',
   ]);
-  const widths = header.map((h, i) => Math.max(h.length, ...lines.map((l) => l[i].length)));
-  const fmt = (cells) =>
-    cells.map((c, i) => (i === 0 || i === 8 ? c.padEnd(widths[i]) : c.padStart(widths[i]))).join('  ');
-  console.log(fmt(header));
-  console.log(widths.map((w) => '-'.repeat(w)).join('  '));
-  for (const l of lines) console.log(fmt(l));
+  printColumns(header, lines);
 }
 
 /** Every list page and list API of the signed-in area, plus one lamp's and one enclosure's page. */

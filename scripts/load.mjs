@@ -183,22 +183,21 @@ export async function warmUp(base, jar, p, method = 'GET', body) {
   }
 }
 
-function row(name, r, extra = {}) {
-  const codes = Object.fromEntries(
-    Object.entries(r.statusCodeStats ?? {}).map(([code, s]) => [code, Number(s.count)]),
-  );
+/** What both load scripts report of an autocannon run: requests, rate, median and p99 latency, status codes. */
+export function runFigures(r) {
   return {
-    name,
     requests: r.requests.total,
     rps: Math.round((r.requests.total / r.duration) * 10) / 10,
     p50: r.latency.p50,
     p99: r.latency.p99,
-    max: r.latency.max,
-    errors: r.errors,
-    timeouts: r.timeouts,
-    codes,
-    ...extra,
+    codes: Object.fromEntries(
+      Object.entries(r.statusCodeStats ?? {}).map(([code, s]) => [code, Number(s.count)]),
+    ),
   };
+}
+
+function row(name, r, extra = {}) {
+  return { name, ...runFigures(r), max: r.latency.max, errors: r.errors, timeouts: r.timeouts, ...extra };
 }
 
 function printTable(rows, baseline, rate) {
@@ -211,15 +210,23 @@ function printTable(rows, baseline, rate) {
     r.skipped ? '-' : String(r.p99),
     r.skipped || !baseline ? '-' : (r.p50 / Math.max(baseline.p50, 1)).toFixed(2),
     r.skipped || !baseline ? '-' : (r.p99 / Math.max(baseline.p99, 1)).toFixed(2),
-    r.skipped
-      ? r.skipped
-      : Object.entries(r.codes)
-          .map(([c, n]) => `${c}×${n}`)
-          .join(' '),
+    r.skipped ? r.skipped : codesText(r.codes),
   ]);
+  printColumns(header, lines);
+}
+
+/** Status codes as `200×480 503×2`. */
+export const codesText = (codes) =>
+  Object.entries(codes)
+    .map(([c, n]) => `${c}×${n}`)
+    .join(' ');
+
+/** Prints text rows under a header: the first and last columns left-aligned, the figures between right-aligned. */
+export function printColumns(header, lines) {
   const widths = header.map((h, i) => Math.max(h.length, ...lines.map((l) => l[i].length)));
+  const last = header.length - 1;
   const fmt = (cells) =>
-    cells.map((c, i) => (i === 0 || i === 6 ? c.padEnd(widths[i]) : c.padStart(widths[i]))).join('  ');
+    cells.map((c, i) => (i === 0 || i === last ? c.padEnd(widths[i]) : c.padStart(widths[i]))).join('  ');
   console.log(fmt(header));
   console.log(widths.map((w) => '-'.repeat(w)).join('  '));
   for (const l of lines) console.log(fmt(l));
