@@ -7,7 +7,7 @@ import { settleMail } from '@/lib/auth/mail-soon';
 import { CounterLamp, CounterReading, Customer, LampType, type User } from '@/models';
 import { withTestDatabase } from '../helpers/db';
 import { freshWorld } from '../helpers/world';
-import { call } from './http';
+import { call, send } from './http';
 
 // A customer's own data on request, and what stays when the customer is deleted.
 withTestDatabase();
@@ -49,12 +49,7 @@ describe('a customer’s data export', () => {
     expect(first.status).toBe(201);
     const { lampId, customerId } = first.body as { lampId: number; customerId: number };
     expect((await test({ counterLampId: lampId, lamp: null })).status).toBe(201);
-    await call(slip.POST, {
-      method: 'POST',
-      path: `/api/counter/lamps/${lampId}/slip`,
-      params: { id: lampId },
-      as: world.staff,
-    });
+    await send(slip.POST, 'POST /api/counter/lamps/[id]/slip', { id: lampId, as: world.staff });
     await settleMail();
 
     const r = await exportOf(world.staff, customerId);
@@ -84,10 +79,8 @@ describe('a customer’s data export', () => {
     }
 
     // Deleted on their request: the person is gone (no export any more), the readings stay, nameless.
-    const del = await call(customerRoute.DELETE, {
-      method: 'DELETE',
-      path: `/api/customers/${customerId}`,
-      params: { id: customerId },
+    const del = await send(customerRoute.DELETE, 'DELETE /api/customers/[id]', {
+      id: customerId,
       as: world.staff,
     });
     expect(del.status).toBeLessThan(300);

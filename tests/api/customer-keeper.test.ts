@@ -16,7 +16,7 @@ import {
 } from '@/models';
 import { addMember, createEnclosure, createUser, withTestDatabase } from '../helpers/db';
 import { freshWorld } from '../helpers/world';
-import { call } from './http';
+import { call, send } from './http';
 
 withTestDatabase();
 
@@ -49,13 +49,7 @@ beforeEach(async () => {
 });
 
 const link = (as: User | null, id: number, keeperId: number) =>
-  call(keeperRoute.PUT, {
-    method: 'PUT',
-    path: `/api/customers/${id}/keeper`,
-    params: { id },
-    as,
-    body: { keeperId },
-  });
+  send(keeperRoute.PUT, 'PUT /api/customers/[id]/keeper', { id, as, body: { keeperId } });
 const unlink = (as: User | null, id: number) =>
   call(keeperRoute.DELETE, { method: 'DELETE', path: `/api/customers/${id}/keeper`, params: { id }, as });
 const show = (as: User | null, id: number) =>

@@ -4,7 +4,7 @@ import * as item from '@/app/api/enclosures/[id]/route';
 import { Enclosure, type User } from '@/models';
 import { createEnclosure, withTestDatabase } from '../helpers/db';
 import { freshEnclosureWorld } from '../helpers/world';
-import { call, expectNoInternals } from './http';
+import { call, expectNoInternals, send } from './http';
 
 withTestDatabase();
 
@@ -78,12 +78,7 @@ describe('POST /api/enclosures', () => {
   });
 
   it('lets staff create an enclosure for a keeper', async () => {
-    const r = await call(collection.POST, {
-      method: 'POST',
-      path: '/api/enclosures',
-      as: world.staff,
-      body: valid(),
-    });
+    const r = await send(collection.POST, 'POST /api/enclosures', { as: world.staff, body: valid() });
     expect(r.status).toBe(201);
     expect(r.body).toMatchObject({
       name: 'New vivarium',
@@ -96,17 +91,13 @@ describe('POST /api/enclosures', () => {
 
   it('lets a keeper create their own enclosure but not one for another keeper', async () => {
     const { keeperId: _k, ...withoutKeeper } = valid();
-    const own = await call(collection.POST, {
-      method: 'POST',
-      path: '/api/enclosures',
+    const own = await send(collection.POST, 'POST /api/enclosures', {
       as: world.otherKeeper,
       body: withoutKeeper,
     });
     expect(own.status).toBe(201);
     expect(own.body.keeperId).toBe(world.otherKeeper.id);
-    const forOther = await call(collection.POST, {
-      method: 'POST',
-      path: '/api/enclosures',
+    const forOther = await send(collection.POST, 'POST /api/enclosures', {
       as: world.otherKeeper,
       body: valid(),
     });
@@ -127,9 +118,7 @@ describe('POST /api/enclosures', () => {
     ['name', { name: 'Vivarium \uD83E' }, 'unpaired UTF-16 surrogate'],
     ['speciesName', { speciesName: '\uDD8E bearded dragon' }, 'broken character'],
   ])('answers 400 naming %s', async (field, patch, words) => {
-    const r = await call(collection.POST, {
-      method: 'POST',
-      path: '/api/enclosures',
+    const r = await send(collection.POST, 'POST /api/enclosures', {
       as: world.staff,
       body: { ...valid(), ...patch },
     });
@@ -141,9 +130,7 @@ describe('POST /api/enclosures', () => {
   });
 
   it('refuses a keeper who is not a member of the organisation', async () => {
-    const r = await call(collection.POST, {
-      method: 'POST',
-      path: '/api/enclosures',
+    const r = await send(collection.POST, 'POST /api/enclosures', {
       as: world.owner,
       body: { ...valid(), keeperId: world.outsider.id },
     });

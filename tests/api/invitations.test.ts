@@ -8,7 +8,7 @@ import { hashToken } from '@/lib/auth/invitations';
 import { Invitation, Membership, type User } from '@/models';
 import { createUser, withTestDatabase } from '../helpers/db';
 import { freshWorld } from '../helpers/world';
-import { call } from './http';
+import { call, send } from './http';
 
 withTestDatabase();
 
@@ -40,9 +40,7 @@ beforeAll(() => {
 const world = freshWorld();
 
 const invite = (as: User, email: string, role: string) =>
-  call(invitations.POST, {
-    method: 'POST',
-    path: '/api/invitations',
+  send(invitations.POST, 'POST /api/invitations', {
     as,
     body: { organisationId: world.shop.id, email, role },
   });
@@ -64,17 +62,13 @@ describe('invitations', () => {
     expect(stored?.tokenHash).toBe(hashToken(token));
     expect(stored?.tokenHash).not.toContain(token);
 
-    const weak = await call(accept.POST, {
-      method: 'POST',
-      path: '/api/invitations/accept',
+    const weak = await send(accept.POST, 'POST /api/invitations/accept', {
       body: { token, name: 'New Staff', password: 'short' },
     });
     expect(weak.status).toBe(400);
     expect(weak.body.error.field).toBe('password');
 
-    const ok = await call(accept.POST, {
-      method: 'POST',
-      path: '/api/invitations/accept',
+    const ok = await send(accept.POST, 'POST /api/invitations/accept', {
       body: { token, name: 'New Staff', password: 'a-good-long-password' },
     });
     expect(ok.status).toBe(201);
@@ -85,9 +79,7 @@ describe('invitations', () => {
     });
     expect(membership?.role).toBe('staff');
 
-    const again = await call(accept.POST, {
-      method: 'POST',
-      path: '/api/invitations/accept',
+    const again = await send(accept.POST, 'POST /api/invitations/accept', {
       body: { token, name: 'Someone Else', password: 'another-long-password' },
     });
     expect(again.status).toBe(410);
@@ -99,27 +91,16 @@ describe('invitations', () => {
     expect((await invite(world.staff, existing.email, 'keeper')).status).toBe(201);
     const token = tokenFrom((await mailTo(existing.email)).text);
     // Signed out, the existing account is asked to sign in first.
-    const signedOut = await call(accept.POST, {
-      method: 'POST',
-      path: '/api/invitations/accept',
-      body: { token },
-    });
+    const signedOut = await send(accept.POST, 'POST /api/invitations/accept', { body: { token } });
     expect(signedOut.status).toBe(409);
     expect(signedOut.body.error.code).toBe('account_exists');
     // Someone else's account cannot take it.
-    const wrong = await call(accept.POST, {
-      method: 'POST',
-      path: '/api/invitations/accept',
+    const wrong = await send(accept.POST, 'POST /api/invitations/accept', {
       as: world.keeper,
       body: { token },
     });
     expect(wrong.status).toBe(403);
-    const ok = await call(accept.POST, {
-      method: 'POST',
-      path: '/api/invitations/accept',
-      as: existing,
-      body: { token },
-    });
+    const ok = await send(accept.POST, 'POST /api/invitations/accept', { as: existing, body: { token } });
     expect(ok.status).toBe(200);
     expect(ok.body).toMatchObject({ role: 'keeper', alreadyMember: false });
   });
@@ -129,9 +110,7 @@ describe('invitations', () => {
     expect((await invite(world.staff, `s.${run}@example.com`, 'staff')).status).toBe(403);
     expect((await invite(world.staff, `o.${run}@example.com`, 'owner')).status).toBe(403);
     expect((await invite(world.keeper, `k2.${run}@example.com`, 'keeper')).status).toBe(404);
-    const viaKeepers = await call(keepers.POST, {
-      method: 'POST',
-      path: '/api/keepers',
+    const viaKeepers = await send(keepers.POST, 'POST /api/keepers', {
       as: world.staff,
       body: { organisationId: world.shop.id, email: `k3.${run}@example.com` },
     });
@@ -188,9 +167,7 @@ describe('invitations', () => {
         })
       ).status,
     ).toBe(200);
-    const late = await call(accept.POST, {
-      method: 'POST',
-      path: '/api/invitations/accept',
+    const late = await send(accept.POST, 'POST /api/invitations/accept', {
       body: { token, name: 'Late', password: 'a-good-long-password' },
     });
     expect(late.status).toBe(410);
@@ -202,16 +179,12 @@ describe('invitations', () => {
     const r = await invite(world.owner, email, 'keeper');
     const token = tokenFrom((await mailTo(email)).text);
     await Invitation.update({ expiresAt: new Date(Date.now() - 1000) }, { where: { id: r.body.id } });
-    const late = await call(accept.POST, {
-      method: 'POST',
-      path: '/api/invitations/accept',
+    const late = await send(accept.POST, 'POST /api/invitations/accept', {
       body: { token, name: 'Late', password: 'a-good-long-password' },
     });
     expect(late.status).toBe(410);
     expect(late.body.error.code).toBe('invitation_expired');
-    const bogus = await call(accept.POST, {
-      method: 'POST',
-      path: '/api/invitations/accept',
+    const bogus = await send(accept.POST, 'POST /api/invitations/accept', {
       body: { token: 'A'.repeat(43), name: 'X', password: 'a-good-long-password' },
     });
     expect(bogus.status).toBe(404);

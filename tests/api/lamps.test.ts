@@ -15,7 +15,7 @@ import { Design, Lamp, LampType, Reading, Variant } from '@/models';
 import { t5LampObject } from '../fixtures/lamp-log';
 import { withTestDatabase } from '../helpers/db';
 import { createEnclosureWorld } from '../helpers/world';
-import { call, expectNoInternals } from './http';
+import { call, expectNoInternals, send } from './http';
 
 withTestDatabase();
 
@@ -64,10 +64,8 @@ const lampBody = (w: World, over: Record<string, unknown> = {}) => ({
 });
 
 async function addLamp(w: World, over: Record<string, unknown> = {}) {
-  const r = await call(enclosureLampsRoute.POST, {
-    method: 'POST',
-    path: `/api/enclosures/${w.enclosure.id}/lamps`,
-    params: { id: w.enclosure.id },
+  const r = await send(enclosureLampsRoute.POST, 'POST /api/enclosures/[id]/lamps', {
+    id: w.enclosure.id,
     as: w.keeper,
     body: lampBody(w, over),
   });
@@ -98,9 +96,8 @@ describe('lamps of an enclosure', () => {
       lampType: { id: w.t5.id, tech: 't5', form: 'tube', lengthCm: 55 },
     });
     expect(lamp.missing).toContain('a meter reading');
-    const list = await call(enclosureLampsRoute.GET, {
-      path: `/api/enclosures/${w.enclosure.id}/lamps`,
-      params: { id: w.enclosure.id },
+    const list = await send(enclosureLampsRoute.GET, 'GET /api/enclosures/[id]/lamps', {
+      id: w.enclosure.id,
       as: w.staff,
     });
     expect(list.status).toBe(200);
@@ -109,20 +106,16 @@ describe('lamps of an enclosure', () => {
 
   it('answers 400 naming the field for bad input, and for a lamp type of another organisation', async () => {
     const w = await world();
-    const bad = await call(enclosureLampsRoute.POST, {
-      method: 'POST',
-      path: `/api/enclosures/${w.enclosure.id}/lamps`,
-      params: { id: w.enclosure.id },
+    const bad = await send(enclosureLampsRoute.POST, 'POST /api/enclosures/[id]/lamps', {
+      id: w.enclosure.id,
       as: w.keeper,
       body: lampBody(w, { hoursPerDay: 30, firstUsedOn: '2025-02-30' }),
     });
     expect(bad.status).toBe(400);
     const fields = bad.body.error.issues.map((i: { field: string }) => i.field);
     expect(fields).toEqual(expect.arrayContaining(['hoursPerDay', 'firstUsedOn']));
-    const foreign = await call(enclosureLampsRoute.POST, {
-      method: 'POST',
-      path: `/api/enclosures/${w.enclosure.id}/lamps`,
-      params: { id: w.enclosure.id },
+    const foreign = await send(enclosureLampsRoute.POST, 'POST /api/enclosures/[id]/lamps', {
+      id: w.enclosure.id,
       as: w.keeper,
       body: lampBody(w, { lampTypeId: w.foreignType.id }),
     });
@@ -137,10 +130,8 @@ describe('lamps of an enclosure', () => {
       const r = await call(lampRoute.GET, { path: `/api/lamps/${lamp.id}`, params: { id: lamp.id }, as });
       expect(r.status).toBe(404);
       expectNoInternals(r);
-      const add = await call(enclosureLampsRoute.POST, {
-        method: 'POST',
-        path: `/api/enclosures/${w.enclosure.id}/lamps`,
-        params: { id: w.enclosure.id },
+      const add = await send(enclosureLampsRoute.POST, 'POST /api/enclosures/[id]/lamps', {
+        id: w.enclosure.id,
         as,
         body: lampBody(w),
       });
@@ -153,10 +144,8 @@ describe('lamps of an enclosure', () => {
   it('lists an organisation’s lamps: everything for staff, only their own for a keeper', async () => {
     const w = await world();
     const mine = await addLamp(w);
-    const theirs = await call(enclosureLampsRoute.POST, {
-      method: 'POST',
-      path: `/api/enclosures/${w.otherEnclosure.id}/lamps`,
-      params: { id: w.otherEnclosure.id },
+    const theirs = await send(enclosureLampsRoute.POST, 'POST /api/enclosures/[id]/lamps', {
+      id: w.otherEnclosure.id,
       as: w.staff,
       body: lampBody(w, { label: 'Other tube' }),
     });
@@ -189,11 +178,7 @@ describe('readings', () => {
       expect(r.status, r.text).toBe(201);
       expect(r.body.reading.distanceCm).toBe(25.4);
     }
-    const detail = await call(lampRoute.GET, {
-      path: `/api/lamps/${lamp.id}`,
-      params: { id: lamp.id },
-      as: w.keeper,
-    });
+    const detail = await send(lampRoute.GET, 'GET /api/lamps/[id]', { id: lamp.id, as: w.keeper });
     expect(detail.status).toBe(200);
     expect(detail.body.readings).toHaveLength(4);
     // The first reading falls in the lamp's first 100 hours (burn-in): shown, fitted apart.
@@ -256,10 +241,8 @@ describe('readings', () => {
     expect(warm.body.error.field).toBe('warmedUp');
     // A correction of the set-up alone: the share goes with what it belonged to.
     const id = lid.body.reading.id;
-    const fix = await call(readingRoute.PATCH, {
-      method: 'PATCH',
-      path: `/api/readings/${id}`,
-      params: { id },
+    const fix = await send(readingRoute.PATCH, 'PATCH /api/readings/[id]', {
+      id,
       as: w.keeper,
       body: { through: 'nothing' },
     });
@@ -282,28 +265,16 @@ describe('readings', () => {
       unit: 'uvb',
     });
     const id = r.body.reading.id;
-    const fix = await call(readingRoute.PATCH, {
-      method: 'PATCH',
-      path: `/api/readings/${id}`,
-      params: { id },
+    const fix = await send(readingRoute.PATCH, 'PATCH /api/readings/[id]', {
+      id,
       as: w.keeper,
       body: { value: 42 },
     });
     expect(fix.status).toBe(200);
     expect(fix.body.reading.value).toBe(42);
-    const other = await call(readingRoute.DELETE, {
-      method: 'DELETE',
-      path: `/api/readings/${id}`,
-      params: { id },
-      as: w.otherKeeper,
-    });
+    const other = await send(readingRoute.DELETE, 'DELETE /api/readings/[id]', { id, as: w.otherKeeper });
     expect(other.status).toBe(404);
-    const del = await call(readingRoute.DELETE, {
-      method: 'DELETE',
-      path: `/api/readings/${id}`,
-      params: { id },
-      as: w.keeper,
-    });
+    const del = await send(readingRoute.DELETE, 'DELETE /api/readings/[id]', { id, as: w.keeper });
     expect(del.status).toBe(200);
     expect(await Reading.count()).toBe(0);
   });
@@ -312,20 +283,16 @@ describe('readings', () => {
     const w = await world();
     const lamp = await addLamp(w);
     await addReading(w, lamp.id, { takenAt: '2025-02-01T10:00:00Z', distance: 30, value: 40, unit: 'uvb' });
-    const r = await call(lampRoute.PATCH, {
-      method: 'PATCH',
-      path: `/api/lamps/${lamp.id}`,
-      params: { id: lamp.id },
+    const r = await send(lampRoute.PATCH, 'PATCH /api/lamps/[id]', {
+      id: lamp.id,
       as: w.keeper,
       body: { retiredOn: '2025-06-01' },
     });
     expect(r.status).toBe(200);
     expect(r.body.lamp.status).toBe('retired');
     expect(r.body.readings).toHaveLength(1);
-    const before = await call(lampRoute.PATCH, {
-      method: 'PATCH',
-      path: `/api/lamps/${lamp.id}`,
-      params: { id: lamp.id },
+    const before = await send(lampRoute.PATCH, 'PATCH /api/lamps/[id]', {
+      id: lamp.id,
       as: w.keeper,
       body: { retiredOn: '2024-06-01' },
     });
@@ -412,9 +379,8 @@ describe('calibration', () => {
   it('says what is missing when the lamp is not linked to a design lamp', async () => {
     const w = await world();
     const lamp = await addLamp(w, { designObjectId: null });
-    const r = await call(calibrationRoute.GET, {
-      path: `/api/lamps/${lamp.id}/calibration`,
-      params: { id: lamp.id },
+    const r = await send(calibrationRoute.GET, 'GET /api/lamps/[id]/calibration', {
+      id: lamp.id,
       as: w.keeper,
     });
     expect(r.body.targets).toEqual([]);
@@ -438,16 +404,11 @@ describe('calibration', () => {
     }
     const tasks = () => enginePool().stats.tasks;
     const before = tasks();
-    const detail = await call(lampRoute.GET, {
-      path: `/api/lamps/${lamp.id}`,
-      params: { id: lamp.id },
-      as: w.keeper,
-    });
+    const detail = await send(lampRoute.GET, 'GET /api/lamps/[id]', { id: lamp.id, as: w.keeper });
     expect(detail.status, detail.text).toBe(200);
     expect(tasks()).toBe(before + 1);
-    const proposal = await call(calibrationRoute.GET, {
-      path: `/api/lamps/${lamp.id}/calibration`,
-      params: { id: lamp.id },
+    const proposal = await send(calibrationRoute.GET, 'GET /api/lamps/[id]/calibration', {
+      id: lamp.id,
       as: w.keeper,
     });
     expect(proposal.status, proposal.text).toBe(200);

@@ -9,7 +9,7 @@ import { Invitation, MailMessage, type Organisation, type User } from '@/models'
 import { createMember, withTestDatabase } from '../helpers/db';
 import { createWorld } from '../helpers/world';
 import { clearMail, listMail } from '../helpers/mail';
-import { call } from './http';
+import { call, send } from './http';
 
 withTestDatabase();
 
@@ -79,12 +79,7 @@ describe('development mail viewer', () => {
     const email = `withdrawn-${Date.now()}@example.test`;
     const inv = await invite(ownerB, b, email);
     const row = (await Invitation.findOne({ where: { organisationId: b.id, email } }))!;
-    const gone = await call(revoke.DELETE, {
-      method: 'DELETE',
-      path: `/api/invitations/${row.id}`,
-      params: { id: row.id },
-      as: ownerB,
-    });
+    const gone = await send(revoke.DELETE, 'DELETE /api/invitations/[id]', { id: row.id, as: ownerB });
     expect(gone.status).toBeLessThan(300);
     const accepted = await call(accept.POST, {
       method: 'POST',

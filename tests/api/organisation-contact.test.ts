@@ -9,7 +9,7 @@ import type { Mail } from '@/lib/mail';
 import { CounterReading, LampType, MailMessage, Organisation, type User } from '@/models';
 import { withTestDatabase } from '../helpers/db';
 import { freshWorld } from '../helpers/world';
-import { call } from './http';
+import { call, send } from './http';
 import { call as callRaw, pdfDrawnText } from './variants.helpers';
 
 // How customers reach the shop: the owner sets it in the organisation settings; the test slip (e-mail and
@@ -51,12 +51,7 @@ async function testedLamp() {
 }
 
 async function slipMail(lampId: number) {
-  const sent = await call(slip.POST, {
-    method: 'POST',
-    path: `/api/counter/lamps/${lampId}/slip`,
-    params: { id: lampId },
-    as: world.staff,
-  });
+  const sent = await send(slip.POST, 'POST /api/counter/lamps/[id]/slip', { id: lampId, as: world.staff });
   expect(sent.status).toBe(201);
   await settleMail();
   return (await MailMessage.findOne({ where: { kind: 'counter-slip' }, order: [['id', 'DESC']] }))!.body;

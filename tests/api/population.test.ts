@@ -20,7 +20,7 @@ import {
 } from '@/models';
 import { withTestDatabase } from '../helpers/db';
 import { freshEnclosureWorld } from '../helpers/world';
-import { call } from './http';
+import { call, send } from './http';
 
 withTestDatabase();
 
@@ -91,20 +91,9 @@ const studioOffer = async (as: User, organisationId: number) =>
 const get = (as: User | null, id = type.id) =>
   call(population.GET, { path: `/api/lamp-types/${id}/population`, params: { id }, as });
 const adopt = (as: User | null, id = type.id) =>
-  call(adoption.POST, {
-    method: 'POST',
-    path: `/api/lamp-types/${id}/curve-adoption`,
-    params: { id },
-    as,
-    body: {},
-  });
+  send(adoption.POST, 'POST /api/lamp-types/[id]/curve-adoption', { id, as, body: {} });
 const withdraw = (as: User | null, id = type.id) =>
-  call(adoption.DELETE, {
-    method: 'DELETE',
-    path: `/api/lamp-types/${id}/curve-adoption`,
-    params: { id },
-    as,
-  });
+  send(adoption.DELETE, 'DELETE /api/lamp-types/[id]/curve-adoption', { id, as });
 
 describe('a lamp type’s measured curve', () => {
   it('is fitted from enclosure and counter lamps alike, with its band and counts', async () => {

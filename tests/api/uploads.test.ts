@@ -7,7 +7,7 @@ import { jpegWithMetadata, pngWithMetadata } from '@/tests/fixtures/images';
 import { Organisation, Upload } from '@/models';
 import { createMember, withTestDatabase } from '../helpers/db';
 import { createEnclosureWorld, type EnclosureWorld } from '../helpers/world';
-import { call, ORIGIN, sessionCookie } from './http';
+import { call, ORIGIN, send, sessionCookie } from './http';
 
 // Backdrop photos against the real test database and the fake S3 server.
 withFakeS3();
@@ -97,19 +97,9 @@ describe('backdrop uploads', () => {
     const r = await upload(w, jpegWithMetadata(), 'image/jpeg');
     const id = r.body.upload.id;
     const key = (await Upload.findByPk(id))!.storageKey;
-    const denied = await call(uploadRoute.DELETE, {
-      method: 'DELETE',
-      path: `/api/uploads/${id}`,
-      params: { id },
-      as: w.otherKeeper,
-    });
+    const denied = await send(uploadRoute.DELETE, 'DELETE /api/uploads/[id]', { id, as: w.otherKeeper });
     expect(denied.status).toBe(404);
-    const ok = await call(uploadRoute.DELETE, {
-      method: 'DELETE',
-      path: `/api/uploads/${id}`,
-      params: { id },
-      as: w.keeper,
-    });
+    const ok = await send(uploadRoute.DELETE, 'DELETE /api/uploads/[id]', { id, as: w.keeper });
     expect(ok.status).toBe(200);
     expect(await getObject(key)).toBeNull();
     expect(await Upload.count()).toBe(0);
@@ -136,12 +126,7 @@ describe('backdrop uploads', () => {
     for (const as of [w.keeper, w.staff, owner]) expect((await getFile(w, loose.id, as)).status).toBe(200);
     for (const as of [w.otherKeeper, w.outsider]) expect((await getFile(w, loose.id, as)).status).toBe(404);
     const del = (as: W['keeper']) =>
-      call(uploadRoute.DELETE, {
-        method: 'DELETE',
-        path: `/api/uploads/${loose.id}`,
-        params: { id: loose.id },
-        as,
-      });
+      send(uploadRoute.DELETE, 'DELETE /api/uploads/[id]', { id: loose.id, as });
     for (const as of [w.otherKeeper, w.outsider]) expect((await del(as)).status).toBe(404);
     const staffDelete = await del(w.staff);
     expect(staffDelete.status).toBe(403);
