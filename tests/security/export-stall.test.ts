@@ -1,11 +1,13 @@
 import { afterAll, describe, expect, it } from 'vitest';
+import * as enclosureDesignsRoute from '@/app/api/enclosures/[id]/designs/route';
 import * as healthRoute from '@/app/api/health/route';
+import * as exportRoute from '@/app/api/variants/[id]/export/route';
 import { closeEnginePool } from '@/lib/engine-pool';
 import { computedCache } from '@/lib/variants/computed';
 import { designWork, MAX_DESIGN_WORK } from '@/simulation';
 import { heaviestAllowedDesign } from '@/simulation/testing/fixtures';
 import { createEnclosure, createMember, createOrganisation, withTestDatabase } from '../helpers/db';
-import { call, exportVariant, postDesign } from '../api/variants.helpers';
+import { call } from '../api/variants.helpers';
 import { expectNotStalled } from '../helpers/not-stalled';
 
 withTestDatabase();
@@ -23,14 +25,27 @@ describe('a heavy export and the event loop', () => {
     const enclosure = await createEnclosure(org, user, { name: 'Tank', speciesName: null });
     const design = heaviestAllowedDesign();
     expect(designWork(design).work).toBeGreaterThan(0.9 * MAX_DESIGN_WORK);
-    const { variantId } = await postDesign(user, enclosure.id, {
-      name: 'Heavy',
-      variantName: 'Heaviest allowed',
-      design,
+    const made = await call(enclosureDesignsRoute.POST, {
+      method: 'POST',
+      path: `/api/enclosures/${enclosure.id}/designs`,
+      params: { id: enclosure.id },
+      user,
+      body: { name: 'Heavy', variantName: 'Heaviest allowed', design },
     });
-    const exportPdf = (months: number) => exportVariant(user, variantId, `format=pdf&months=${months}`);
+    expect(made.status).toBe(201);
+    const variantId = made.body.variant.id as number;
+    const exportPdf = (months: number) =>
+      call(exportRoute.GET, {
+        path: `/api/variants/${variantId}/export?format=pdf&months=${months}`,
+        params: { id: variantId },
+        user,
+      });
     // Start the engine's threads first (and fill no memo the measured export could use).
-    const warm = await exportVariant(user, variantId, 'format=png&months=24');
+    const warm = await call(exportRoute.GET, {
+      path: `/api/variants/${variantId}/export?format=png&months=24`,
+      params: { id: variantId },
+      user,
+    });
     expect(warm.status).toBe(200);
     computedCache.clear();
 
