@@ -4,6 +4,7 @@ import { CounterLamp, CounterReading, Customer, LampType, type User } from '@/mo
 import { withTestDatabase } from '../helpers/db';
 import { freshWorld } from '../helpers/world';
 import { call } from './http';
+import { t5Of } from './counter.helpers';
 
 // The import of past counter tests against the real test database.
 withTestDatabase();
@@ -13,7 +14,7 @@ let tube: LampType;
 const world = freshWorld({ catalogue: true });
 
 beforeEach(async () => {
-  tube = (await LampType.findOne({ where: { organisationId: world.shop.id, tech: 't5' } }))!;
+  tube = await t5Of(world.shop.id);
 });
 
 const send = (as: User | null, csv: string, commit: boolean, organisationId = world.shop.id) =>

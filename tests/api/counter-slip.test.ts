@@ -1,6 +1,5 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import * as slip from '@/app/api/counter/lamps/[id]/slip/route';
-import * as tests from '@/app/api/counter/tests/route';
 import * as unsubscribe from '@/app/api/unsubscribe/route';
 import UnsubscribePage from '@/app/(auth)/unsubscribe/page';
 import { renderToStaticMarkup } from 'react-dom/server';
@@ -8,10 +7,11 @@ import { settleMail } from '@/lib/auth/mail-soon';
 import { PDFDocument } from 'pdf-lib';
 import { COUNTER_CAUTIONS } from '@/lib/counter/assess';
 import { unsubscribeToken } from '@/lib/customers/unsubscribe-token';
-import { Customer, LampType, MailMessage, SpeciesSheet, type User } from '@/models';
+import { Customer, MailMessage, SpeciesSheet, type User } from '@/models';
 import { withTestDatabase } from '../helpers/db';
 import { freshWorld } from '../helpers/world';
 import { call } from './http';
+import { t5Of, testedLamp as testedLampOf } from './counter.helpers';
 import { call as callRaw, pdfDrawnText } from './variants.helpers';
 
 withTestDatabase();
@@ -21,24 +21,11 @@ let tubeId: number;
 const world = freshWorld({ catalogue: true });
 
 beforeEach(async () => {
-  tubeId = (await LampType.findOne({ where: { organisationId: world.shop.id, tech: 't5' } }))!.id;
+  tubeId = (await t5Of(world.shop.id)).id;
 });
 
-async function testedLamp(customer: Record<string, unknown>, home: Record<string, unknown> = {}) {
-  const r = await call(tests.POST, {
-    method: 'POST',
-    path: '/api/counter/tests',
-    as: world.staff,
-    body: {
-      organisationId: world.shop.id,
-      lamp: { lampTypeId: tubeId, ageMonths: 6, hoursPerDay: 12, ...home },
-      reading: { distance: 30, value: 30, unit: 'uvb', through: 'nothing', warmedUp: 'yes' },
-      customer: { kind: 'new', name: 'Jules Invented', ...customer },
-    },
-  });
-  expect(r.status).toBe(201);
-  return r.body as { lampId: number; customerId: number };
-}
+const testedLamp = (customer: Record<string, unknown>, home: Record<string, unknown> = {}) =>
+  testedLampOf(world.staff, world.shop.id, tubeId, { customer, lamp: home });
 const sendSlip = (as: User | null, id: number) =>
   call(slip.POST, { method: 'POST', path: `/api/counter/lamps/${id}/slip`, params: { id }, as });
 /** The signed-out page the link lands on, rendered as the server sends it. */

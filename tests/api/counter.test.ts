@@ -6,6 +6,7 @@ import { CounterLamp, CounterReading, Customer, LampType, SpeciesSheet, type Use
 import { withTestDatabase } from '../helpers/db';
 import { freshWorld } from '../helpers/world';
 import { call } from './http';
+import { t5Of } from './counter.helpers';
 
 withTestDatabase();
 
@@ -15,8 +16,8 @@ let otherTubeId: number;
 const world = freshWorld({ catalogue: true });
 
 beforeEach(async () => {
-  tubeId = (await LampType.findOne({ where: { organisationId: world.shop.id, tech: 't5' } }))!.id;
-  otherTubeId = (await LampType.findOne({ where: { organisationId: world.otherOrg.id, tech: 't5' } }))!.id;
+  tubeId = (await t5Of(world.shop.id)).id;
+  otherTubeId = (await t5Of(world.otherOrg.id)).id;
 });
 
 const reading = (value: number, over: Record<string, unknown> = {}) => ({

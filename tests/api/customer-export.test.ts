@@ -2,12 +2,12 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import * as customerRoute from '@/app/api/customers/[id]/route';
 import * as exportRoute from '@/app/api/customers/[id]/export/route';
 import * as slip from '@/app/api/counter/lamps/[id]/slip/route';
-import * as tests from '@/app/api/counter/tests/route';
 import { settleMail } from '@/lib/auth/mail-soon';
-import { CounterLamp, CounterReading, Customer, LampType, type User } from '@/models';
+import { CounterLamp, CounterReading, Customer, type User } from '@/models';
 import { withTestDatabase } from '../helpers/db';
 import { freshWorld } from '../helpers/world';
 import { call, send } from './http';
+import { postCounterTest, t5Of } from './counter.helpers';
 
 // A customer's own data on request, and what stays when the customer is deleted.
 withTestDatabase();
@@ -17,20 +17,10 @@ let tubeId: number;
 const world = freshWorld({ catalogue: true });
 
 beforeEach(async () => {
-  tubeId = (await LampType.findOne({ where: { organisationId: world.shop.id, tech: 't5' } }))!.id;
+  tubeId = (await t5Of(world.shop.id)).id;
 });
 
-const test = (body: Record<string, unknown>) =>
-  call(tests.POST, {
-    method: 'POST',
-    path: '/api/counter/tests',
-    as: world.staff,
-    body: {
-      organisationId: world.shop.id,
-      reading: { distance: 30, value: 30, unit: 'uvb', through: 'nothing', warmedUp: 'yes' },
-      ...body,
-    },
-  });
+const test = (body: Record<string, unknown>) => postCounterTest(world.staff, world.shop.id, body);
 const exportOf = (as: User | null, id: number) =>
   call(exportRoute.GET, { path: `/api/customers/${id}/export`, params: { id }, as });
 

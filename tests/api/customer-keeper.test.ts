@@ -17,6 +17,7 @@ import {
 import { addMember, createEnclosure, createUser, withTestDatabase } from '../helpers/db';
 import { freshWorld } from '../helpers/world';
 import { call, send } from './http';
+import { t5Of } from './counter.helpers';
 
 withTestDatabase();
 
@@ -31,7 +32,7 @@ const world = freshWorld({ catalogue: true });
 beforeEach(async () => {
   otherKeeper = (await createUser()).user;
   await addMember(world.shop, otherKeeper, 'keeper');
-  tubeId = (await LampType.findOne({ where: { organisationId: world.shop.id, tech: 't5' } }))!.id;
+  tubeId = (await t5Of(world.shop.id)).id;
   customer = await Customer.create({
     organisationId: world.shop.id,
     name: 'Robin Invented',

@@ -6,10 +6,11 @@ import { settleMail } from '@/lib/auth/mail-soon';
 import { runCounterReminders } from '@/lib/counter/reminders';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
 import type { Mail } from '@/lib/mail';
-import { CounterReading, LampType, MailMessage, Organisation, type User } from '@/models';
+import { CounterReading, MailMessage, Organisation, type User } from '@/models';
 import { withTestDatabase } from '../helpers/db';
 import { freshWorld } from '../helpers/world';
 import { call, send } from './http';
+import { t5Of, testedLamp as testedLampOf } from './counter.helpers';
 import { call as callRaw, pdfDrawnText } from './variants.helpers';
 
 // How customers reach the shop: the owner sets it in the organisation settings; the test slip (e-mail and
@@ -21,7 +22,7 @@ let tubeId: number;
 const world = freshWorld({ catalogue: true });
 
 beforeEach(async () => {
-  tubeId = (await LampType.findOne({ where: { organisationId: world.shop.id, tech: 't5' } }))!.id;
+  tubeId = (await t5Of(world.shop.id)).id;
 });
 
 const patch = (as: User | null, body: unknown, id = world.shop.id) =>
@@ -34,21 +35,10 @@ const CONTACT = {
 };
 const LINE = '12 Fern Row, Hollowby · 01234 567890 · counter@example.com';
 
-async function testedLamp() {
-  const r = await call(tests.POST, {
-    method: 'POST',
-    path: '/api/counter/tests',
-    as: world.staff,
-    body: {
-      organisationId: world.shop.id,
-      lamp: { lampTypeId: tubeId, ageMonths: 6, hoursPerDay: 12 },
-      reading: { distance: 30, value: 30, unit: 'uvb', through: 'nothing', warmedUp: 'yes' },
-      customer: { kind: 'new', name: 'Jules Invented', email: 'jules@example.com', reminderConsent: true },
-    },
+const testedLamp = () =>
+  testedLampOf(world.staff, world.shop.id, tubeId, {
+    customer: { email: 'jules@example.com', reminderConsent: true },
   });
-  expect(r.status).toBe(201);
-  return r.body as { lampId: number; customerId: number };
-}
 
 async function slipMail(lampId: number) {
   const sent = await send(slip.POST, 'POST /api/counter/lamps/[id]/slip', { id: lampId, as: world.staff });
