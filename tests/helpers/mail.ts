@@ -1,13 +1,8 @@
 // Reads what the fake SMTP server (scripts/fake-smtp.ts) captured; FAKE_SMTP_HTTP is set by scripts/test.mjs.
-export type CapturedMail = {
-  id: string;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-  html: string | null;
-  receivedAt: string;
-};
+import type { StoredMail } from '@/scripts/fake-smtp/store';
+
+/** A message as the fake server's JSON API lists it. */
+export type CapturedMail = StoredMail;
 
 function api(path: string): string {
   return new URL(path, process.env.FAKE_SMTP_HTTP ?? 'http://127.0.0.1:2581').toString();
