@@ -6,6 +6,7 @@ import { CautionList } from '@/components/cautions/CautionList';
 import { FindingList } from '@/components/cautions/FindingList';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
+import { PersonPicker, type PickedPerson } from '@/components/people/PersonPicker';
 import { button, card, input } from '@/components/ui/styles';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import {
@@ -29,7 +30,6 @@ export type SpeciesChoice = {
   uvZone: number;
   seedKey: string | null;
 };
-export type PersonChoice = { id: number; name: string; role: string };
 export type SizeHint = {
   width: number;
   height: number;
@@ -57,7 +57,8 @@ const show = (cm: number, unit: LengthUnit) => formatNumber(cmToDisplay(cm, unit
 export function GuidedStart(props: {
   organisationId: number;
   species: SpeciesChoice[];
-  people: PersonChoice[] | null;
+  /** Owners and staff file the enclosure under a member; a keeper's is their own. */
+  chooseKeeper: boolean;
   sizeHints: Record<string, SizeHint>;
   initialSpeciesId: number | null;
   actions: Actions;
@@ -85,7 +86,7 @@ export function GuidedStart(props: {
   const [room, setRoom] = useState({ unit: tempUnit, text: formatNumber(cToDisplay(22, tempUnit), 0) });
   const [lid, setLid] = useState<'mesh' | 'glass' | 'open'>(initialHint.lid);
   const [walls, setWalls] = useState<Walls>(initialHint.walls ?? 'glass');
-  const [keeperId, setKeeperId] = useState<string>('');
+  const [keeper, setKeeper] = useState<PickedPerson | null>(null);
   const [name, setName] = useState('');
   const [animalName, setAnimalName] = useState('');
   const [error, setError] = useState<{ message: string; field?: string } | null>(null);
@@ -118,7 +119,7 @@ export function GuidedStart(props: {
     lid,
     walls,
     roomTempC: Math.round(displayToC(num(room.text), room.unit) * 10) / 10,
-    ...(keeperId ? { keeperId: Number(keeperId) } : {}),
+    ...(keeper ? { keeperId: keeper.id } : {}),
     name: name.trim() || (chosen ? `${chosen.commonName} enclosure` : ''),
     animalName: animalName.trim() || null,
   });
@@ -284,26 +285,19 @@ export function GuidedStart(props: {
             <UnitToggle quantity="temperature" />
           </div>
         </div>
-        {props.people && (
-          <div>
-            <label htmlFor="gs-keeper" className="mb-1 block text-body font-medium text-basalt-800">
-              Keeper
-            </label>
-            <select
-              id="gs-keeper"
-              className={input}
-              value={keeperId}
-              onChange={(e) => setKeeperId(e.target.value)}
-            >
-              <option value="">Me (the organisation’s own animal)</option>
-              {props.people.map((p) => (
-                <option key={p.id} value={p.id}>{`${p.name} (${p.role})`}</option>
-              ))}
-            </select>
-            {fieldError('keeperId') && (
-              <p className="mt-1 text-caption font-medium text-ember-700">{fieldError('keeperId')}</p>
-            )}
-          </div>
+        {props.chooseKeeper && (
+          // Searched as one types: the page never carries the organisation's whole list of people.
+          <PersonPicker
+            label="Keeper"
+            organisationId={props.organisationId}
+            people="members"
+            value={keeper}
+            onChange={setKeeper}
+            clearable
+            placeholder="Me (the organisation’s own animal)"
+            hint="Type part of a name or e-mail; leave it empty to keep it yourself."
+            error={fieldError('keeperId')}
+          />
         )}
         <Field
           label="Enclosure name"

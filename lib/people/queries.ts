@@ -116,8 +116,6 @@ export type KeeperListPage = Awaited<ReturnType<typeof listKeepers>>;
  */
 export const PAGE_LIMIT = 500;
 
-export type MemberView = { userId: number; name: string; email: string; role: Role; joinedAt: string };
-
 /** One member's name (a filter or form showing who it names), or null if not a member in that role. */
 export async function memberName(
   organisationId: number,
@@ -130,27 +128,6 @@ export async function memberName(
   });
   const u = (m as (Membership & { user?: User }) | null)?.user;
   return m && u ? { id: u.id, name: u.name, role: m.role } : null;
-}
-
-export async function memberViews(organisationId: number, role?: Role): Promise<MemberView[]> {
-  const rows = await Membership.findAll({
-    where: { organisationId, ...(role ? { role } : {}) },
-    include: [{ model: User, as: 'user', attributes: ['id', 'name', 'email'] }],
-    order: [['id', 'ASC']],
-    limit: PAGE_LIMIT,
-  });
-  return rows
-    .map((m) => {
-      const u = (m as Membership & { user?: User }).user;
-      return {
-        userId: m.userId,
-        name: u?.name ?? '',
-        email: u?.email ?? '',
-        role: m.role,
-        joinedAt: m.createdAt.toISOString(),
-      };
-    })
-    .sort((a, b) => a.name.localeCompare(b.name));
 }
 
 export async function pendingInvitationViews(organisationId: number, role?: Role) {

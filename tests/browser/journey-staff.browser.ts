@@ -64,7 +64,12 @@ describe('staff journey', () => {
         .getAttribute('value');
       expect(speciesValue).toMatch(/^\d+$/);
       await page.getByLabel('Species').selectOption(speciesValue!);
-      await page.getByLabel('Keeper').selectOption({ label: `${keeper.name} (keeper)` });
+      // The keeper picker searches the organisation's people as one types.
+      await page.getByRole('combobox', { name: 'Keeper' }).fill(keeper.name);
+      await page
+        .getByRole('option', { name: new RegExp(`^${keeper.name} \\(keeper\\)`) })
+        .first()
+        .click();
       await page.getByLabel('Enclosure name').fill(enclosureName);
       await page.getByLabel('Animal’s name (optional)').fill('Saffron');
       await page.getByRole('button', { name: 'Propose a set-up' }).click();

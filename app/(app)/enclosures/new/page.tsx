@@ -5,7 +5,6 @@ import { GuidedStart } from '@/components/guided-start/GuidedStart';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { button } from '@/components/ui/styles';
-import { memberViews } from '@/lib/people/queries';
 import { TYPICAL_ENCLOSURES } from '@/lib/guided-start/typical-enclosures';
 import { can } from '@/lib/permissions';
 import { currentMembership, requireUser } from '@/lib/session';
@@ -25,15 +24,6 @@ export default async function GuidedStartPage({
   const organisationId = membership.organisationId;
   const sheets = await allSheets(organisationId);
   const staff = can(user, 'read', { kind: 'member', organisationId });
-  const people = staff
-    ? (await memberViews(organisationId))
-        .filter((p) => p.userId !== user.id)
-        .map((p) => ({ id: p.userId, name: p.name, role: p.role }))
-        .sort(
-          (a, b) =>
-            (a.role === 'keeper' ? 0 : 1) - (b.role === 'keeper' ? 0 : 1) || a.name.localeCompare(b.name),
-        )
-    : null;
   const wanted = Number((await searchParams).species);
   const initialSpeciesId = sheets.some((s) => s.id === wanted) ? wanted : null;
   const sizeHints = Object.fromEntries(
@@ -70,7 +60,7 @@ export default async function GuidedStartPage({
             uvZone: s.uvZone,
             seedKey: s.seedKey,
           }))}
-          people={people}
+          chooseKeeper={staff}
           sizeHints={sizeHints}
           initialSpeciesId={initialSpeciesId}
           actions={{ propose: proposeAction, create: createAction }}
