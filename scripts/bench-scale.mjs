@@ -1,6 +1,6 @@
 #!/usr/bin/env node
 // `npm run bench:scale -- [--scale=N] [--enclosures N --lamps N --readings N --designs N] [--growth=4]
-//                          [--rate=20] [--duration=10] [--seed-only | --reuse] [--no-build]`
+//                          [--rate=20] [--duration=10] [--seed-only | --reuse] [--no-build] [--only=a,b]`
 // The signed-in area at the size of a zoo's reptile house or a busy shop. On databases of its own on the
 // private MariaDB it seeds a generated organisation (default 2,000 enclosures, 8,000 lamps, 100,000
 // readings, 200 designs with two variants each, times --scale) into `<DB_NAME>_scale`, and the same
@@ -16,7 +16,8 @@
 // Seed ahead, measure later: `--seed-only` seeds both databases and stops (the machine's load only slows
 // the seeding); `--reuse` measures the databases an earlier run seeded, without seeding (a run without
 // it recreates them). Figures, not a pass/fail test: the date, the CPUs and the load average are
-// printed beside them.
+// printed beside them. `--only=/enclosures,/jobs` measures only the routes whose path contains one of the
+// parts (and the baseline), for comparing one change before and after in the same conditions.
 import autocannon from 'autocannon';
 import os from 'node:os';
 import path from 'node:path';
@@ -50,6 +51,7 @@ function options() {
       'seed-only': { type: 'boolean', default: false },
       build: { type: 'boolean', default: true },
       'no-build': { type: 'boolean', default: false },
+      only: { type: 'string', default: '' },
       help: { type: 'boolean', default: false },
     },
   });
@@ -74,6 +76,7 @@ function options() {
     reuse: values.reuse,
     seedOnly: values['seed-only'],
     build: values.build && !values['no-build'],
+    only: values.only.split(',').filter(Boolean),
     help: values.help,
   };
 }
@@ -172,6 +175,10 @@ async function routesOf(base, jar, org) {
     `/api/lamps/${lampId}/readings`,
   ];
 }
+
+/** The routes `--only` names (any part of the path), or all of them. */
+const chosen = (routes, only) =>
+  only.length ? routes.filter((r) => only.some((part) => r.includes(part))) : routes;
 
 /** The scale databases: `<DB_NAME>_scale` (1×) and `<DB_NAME>_scale<growth>` (the grown organisation). */
 function databases(env, growth) {
@@ -274,7 +281,7 @@ async function main() {
   const opts = options();
   if (opts.help) {
     console.log(
-      'npm run bench:scale -- [--scale=N] [--enclosures N --lamps N --readings N --designs N] [--growth=4] [--rate=20] [--duration=10] [--seed-only | --reuse] [--no-build]',
+      'npm run bench:scale -- [--scale=N] [--enclosures N --lamps N --readings N --designs N] [--growth=4] [--rate=20] [--duration=10] [--seed-only | --reuse] [--no-build] [--only=/enclosures,/jobs]',
     );
     return;
   }
@@ -323,7 +330,7 @@ async function main() {
 
     const one = await serve(life, scaleEnv, names[0], opts);
     const org = one.org;
-    const routes = await routesOf(base, one.jar, org.organisationId);
+    const routes = chosen(await routesOf(base, one.jar, org.organisationId), opts.only);
     log(`Measuring ${routes.length + 1} routes at ${opts.rate} req/s for ${opts.duration} s each ...`);
     const baseline = await measure(base, one.cookie, '/api/health', opts);
     const rows = [baseline];
@@ -338,7 +345,7 @@ async function main() {
       grownOrg = grown.org;
       log(`Measuring the lists again on ${names[1]} ...`);
       grownRows = [await measure(base, grown.cookie, '/api/health', opts)];
-      for (const route of growthRoutes(grownOrg.organisationId)) {
+      for (const route of chosen(growthRoutes(grownOrg.organisationId), opts.only)) {
         grownRows.push(await measure(base, grown.cookie, route, opts));
       }
     }
