@@ -16,12 +16,12 @@ import {
   nextSort,
   pageCount,
 } from '@/lib/enclosures/list-view';
-import type { EnclosureView } from './types';
+import type { EnclosureRow } from './types';
 import { type EnclosurePage, useEnclosureList } from './useEnclosureList';
 
 const cell = 'px-4 py-3 text-basalt-700';
 
-type Column = TableColumn<EnclosureView> & { id: EnclosureSortColumn };
+type Column = TableColumn<EnclosureRow> & { id: EnclosureSortColumn };
 
 function columnsFor(showKeeper: boolean, unit: LengthUnit): (Column | false)[] {
   return [

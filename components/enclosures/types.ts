@@ -1,4 +1,4 @@
-import type { EnclosureJson } from '@/lib/enclosures/queries';
+import type { EnclosureJson, EnclosureRowJson } from '@/lib/enclosures/queries';
 
 /** What the enclosure screens read of the API's enclosure (plain data, safe to pass to client components). */
 export type EnclosureView = Pick<
@@ -15,5 +15,8 @@ export type EnclosureView = Pick<
   | 'notes'
   | 'updatedAt'
 >;
+
+/** A row of the enclosures table: what the list shows of an enclosure. */
+export type EnclosureRow = EnclosureRowJson;
 
 export type PersonOption = { id: number; name: string; role: string };

@@ -2,9 +2,9 @@
 
 import { useServerList } from '@/components/ui/useServerList';
 import { enclosureListView, type EnclosureListView } from '@/lib/enclosures/list-view';
-import type { EnclosureView } from './types';
+import type { EnclosureRow } from './types';
 
-export type EnclosurePage = { items: EnclosureView[]; total: number; offset: number; limit: number };
+export type EnclosurePage = { items: EnclosureRow[]; total: number; offset: number; limit: number };
 
 export { SEARCH_DEBOUNCE_MS } from '@/components/ui/useServerList';
 

@@ -103,20 +103,62 @@ export function enclosureSearch(q: string | undefined): WhereOptions {
 /**
  * One page of an organisation's enclosures. The caller has already decided, with `can()`, whose
  * enclosures this user may see and passes `keeperId` for a keeper: this only fetches.
+ *
+ * A page reads only the columns its table shows (no notes: they can be long, and the list never shows
+ * them), and its total counts the organisation's (or keeper's) rows from an index without the keeper
+ * join unless a search needs the keeper's name.
  */
 export async function listEnclosures(query: Omit<EnclosureListQuery, 'keeperId'> & { keeperId?: number }) {
   const { organisationId, keeperId, q, sort, descending, offset, limit } = query;
-  const { rows, count } = await Enclosure.findAndCountAll({
-    where: { organisationId, ...(keeperId ? { keeperId } : {}), ...enclosureSearch(q) },
-    include: [{ model: User, as: 'keeper', attributes: ['id', 'name'], required: false }],
-    order: enclosureOrder(sort, descending),
-    offset,
-    limit,
-  });
-  return { items: rows.map(enclosureJson), total: count, offset, limit };
+  const where = { organisationId, ...(keeperId ? { keeperId } : {}), ...enclosureSearch(q) };
+  const keeper = { model: User, as: 'keeper', attributes: ['id', 'name'], required: false };
+  const searched = Boolean((q ?? '').trim());
+  const [rows, total] = await Promise.all([
+    Enclosure.findAll({
+      attributes: [...ENCLOSURE_ROW_COLUMNS],
+      where,
+      include: [keeper],
+      order: enclosureOrder(sort, descending),
+      offset,
+      limit,
+    }),
+    Enclosure.count({ where, ...(searched ? { include: [keeper] } : {}) }),
+  ]);
+  return { items: rows.map(enclosureRowJson), total, offset, limit };
 }
 
 export type EnclosureListPage = Awaited<ReturnType<typeof listEnclosures>>;
+
+/** The columns a row of the enclosures table shows (and the keeper it filters by). */
+const ENCLOSURE_ROW_COLUMNS = [
+  'id',
+  'keeperId',
+  'name',
+  'widthCm',
+  'heightCm',
+  'depthCm',
+  'speciesName',
+  'animalName',
+  'updatedAt',
+] as const;
+
+/** A row of the enclosures list: what the table shows, not the whole enclosure. */
+export function enclosureRowJson(e: Enclosure & { keeper?: User | null }) {
+  return {
+    id: e.id,
+    keeperId: e.keeperId,
+    keeperName: e.keeper?.name ?? null,
+    name: e.name,
+    widthCm: e.widthCm,
+    heightCm: e.heightCm,
+    depthCm: e.depthCm,
+    speciesName: e.speciesName ?? null,
+    animalName: e.animalName ?? null,
+    updatedAt: e.updatedAt.toISOString(),
+  };
+}
+
+export type EnclosureRowJson = ReturnType<typeof enclosureRowJson>;
 
 export function enclosureJson(e: Enclosure & { keeper?: User | null }) {
   return {

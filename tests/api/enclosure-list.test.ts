@@ -251,6 +251,9 @@ describe('GET /api/enclosures: search', () => {
     const second = await get(owner, 'q=gecko&sort=name&dir=asc&limit=10&offset=10');
     expect(first.body.total).toBe(all.length);
     expect([...first.body.items, ...second.body.items].map((e: Row) => e.name)).toEqual(all.slice(0, 20));
+    // A search by the keeper's name counts through the keeper, as the page's rows are found.
+    const anaRows = expectedNames((e) => e.keeperId === ana.id);
+    expect((await get(owner, 'q=brook&limit=2')).body.total).toBe(anaRows.length);
   });
 
   it('takes wildcards literally and finds nothing in another organisation', async () => {
