@@ -24,6 +24,9 @@ type Setup = {
  */
 export function ReadingSetupEdit({ reading, label }: { reading: Setup; label: string }) {
   const id = useId();
+  // The form is drawn only once opened: a lamp's page lists many readings, and a closed form in each row
+  // would be sent and hydrated for nothing.
+  const [open, setOpen] = useState(false);
   const [through, setThrough] = useState<ReadingThrough>(reading.through);
   const change = useApiMutation((body: Record<string, unknown>) => ({
     method: 'PATCH',
@@ -46,71 +49,73 @@ export function ReadingSetupEdit({ reading, label }: { reading: Setup; label: st
   }
 
   return (
-    <details className="mt-1 text-caption">
+    <details className="mt-1 text-caption" onToggle={(e) => setOpen(e.currentTarget.open)}>
       <summary
         className="cursor-pointer text-basalt-600 underline"
         aria-label={`Change the set-up of ${label}`}
       >
         Change set-up
       </summary>
-      <form onSubmit={save} className="mt-1 space-y-1" aria-label={`Set-up of ${label}`} noValidate>
-        <label htmlFor={`${id}-through`} className="block">
-          Between lamp and meter
-        </label>
-        <select
-          id={`${id}-through`}
-          className={`${input} text-caption`}
-          value={through}
-          onChange={(e) => setThrough(e.target.value as ReadingThrough)}
-        >
-          {(['not-recorded', 'nothing', 'lid', 'screen', 'glass'] as const).map((t) => (
-            <option key={t} value={t}>
-              {THROUGH_LABEL[t]}
-            </option>
-          ))}
-        </select>
-        {['lid', 'screen', 'glass'].includes(through) && (
-          <>
-            <label htmlFor={`${id}-share`} className="block">
-              Share of UVB it passes (0–1){through === 'lid' ? ', empty: the lamp’s lid' : ''}
-            </label>
-            <input
-              id={`${id}-share`}
-              name="throughTransmission"
-              type="number"
-              step="0.01"
-              min="0.01"
-              max="1"
-              inputMode="decimal"
-              className={`${input} text-caption`}
-              defaultValue={reading.through === through ? (reading.throughTransmission ?? '') : ''}
-            />
-          </>
-        )}
-        <label htmlFor={`${id}-warm`} className="block">
-          Lamp warmed up
-        </label>
-        <select
-          id={`${id}-warm`}
-          name="warmedUp"
-          className={`${input} text-caption`}
-          defaultValue={reading.warmedUp}
-        >
-          {(['not-recorded', 'yes', 'no'] as const).map((w) => (
-            <option key={w} value={w}>
-              {WARMED_UP_LABEL[w]}
-            </option>
-          ))}
-        </select>
-        {error && (
-          <p role="alert" className="font-medium text-ember-700">
-            {error}
-          </p>
-        )}
-        <button type="submit" className={button.secondary} disabled={busy}>
-          {busy ? 'Saving…' : 'Save set-up'}
-        </button>
-      </form>
+      {open && (
+        <form onSubmit={save} className="mt-1 space-y-1" aria-label={`Set-up of ${label}`} noValidate>
+          <label htmlFor={`${id}-through`} className="block">
+            Between lamp and meter
+          </label>
+          <select
+            id={`${id}-through`}
+            className={`${input} text-caption`}
+            value={through}
+            onChange={(e) => setThrough(e.target.value as ReadingThrough)}
+          >
+            {(['not-recorded', 'nothing', 'lid', 'screen', 'glass'] as const).map((t) => (
+              <option key={t} value={t}>
+                {THROUGH_LABEL[t]}
+              </option>
+            ))}
+          </select>
+          {['lid', 'screen', 'glass'].includes(through) && (
+            <>
+              <label htmlFor={`${id}-share`} className="block">
+                Share of UVB it passes (0–1){through === 'lid' ? ', empty: the lamp’s lid' : ''}
+              </label>
+              <input
+                id={`${id}-share`}
+                name="throughTransmission"
+                type="number"
+                step="0.01"
+                min="0.01"
+                max="1"
+                inputMode="decimal"
+                className={`${input} text-caption`}
+                defaultValue={reading.through === through ? (reading.throughTransmission ?? '') : ''}
+              />
+            </>
+          )}
+          <label htmlFor={`${id}-warm`} className="block">
+            Lamp warmed up
+          </label>
+          <select
+            id={`${id}-warm`}
+            name="warmedUp"
+            className={`${input} text-caption`}
+            defaultValue={reading.warmedUp}
+          >
+            {(['not-recorded', 'yes', 'no'] as const).map((w) => (
+              <option key={w} value={w}>
+                {WARMED_UP_LABEL[w]}
+              </option>
+            ))}
+          </select>
+          {error && (
+            <p role="alert" className="font-medium text-ember-700">
+              {error}
+            </p>
+          )}
+          <button type="submit" className={button.secondary} disabled={busy}>
+            {busy ? 'Saving…' : 'Save set-up'}
+          </button>
+        </form>
+      )}
     </details>
   );
 }

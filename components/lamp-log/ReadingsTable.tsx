@@ -5,7 +5,7 @@ import { useApiMutation } from '@/components/ui/useApiMutation';
 import { useViewerZone } from '@/components/ui/LocalTime';
 import { Notice } from '@/components/ui/Notice';
 import { formatMoment } from '@/lib/time/format';
-import { button } from '@/components/ui/styles';
+import { button, link } from '@/components/ui/styles';
 import { formatLengthRounded } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
 import type { LampDetail } from '@/lib/lamp-log/queries';
@@ -13,6 +13,7 @@ import { THROUGH_SHORT } from '@/shared/reading-setup';
 import { formatValue } from './format';
 import { ReadingSetupEdit } from './ReadingSetupEdit';
 import { Table, type TableColumn } from '@/components/ui/Table';
+import Link from '@/components/ui/Link';
 
 type Reading = LampDetail['readings'][number];
 
@@ -34,8 +35,19 @@ function setupText(r: Reading): string {
   return `${THROUGH_SHORT[r.through]}${share}${warm}`;
 }
 
-/** The lamp's readings, newest first, with delete and an undo for the last delete. */
-export function ReadingsTable({ readings, canEdit }: { readings: Reading[]; canEdit: boolean }) {
+/**
+ * The lamp's readings, newest first, with delete and an undo for the last delete. The page sends the
+ * newest few unless the address asks for all (`more`: how many it left out, and the two addresses).
+ */
+export function ReadingsTable({
+  readings,
+  canEdit,
+  more,
+}: {
+  readings: Reading[];
+  canEdit: boolean;
+  more?: { total: number; shown: number; allHref: string; fewerHref: string };
+}) {
   const [unit] = useLengthUnit();
   const zone = useViewerZone();
   const day = (iso: string) => formatMoment(iso, zone, 'day');
@@ -186,6 +198,25 @@ export function ReadingsTable({ readings, canEdit }: { readings: Reading[]; canE
         rowClassName="align-top"
         testId="readings-table"
       />
+      {more && more.total > more.shown && (
+        <p className="text-caption text-basalt-600">
+          {readings.length < more.total ? (
+            <>
+              The newest {readings.length} of {more.total} readings.{' '}
+              <Link href={more.allHref} scroll={false} className={link}>
+                Show all {more.total}
+              </Link>
+            </>
+          ) : (
+            <>
+              All {more.total} readings.{' '}
+              <Link href={more.fewerHref} scroll={false} className={link}>
+                Show only the newest {more.shown}
+              </Link>
+            </>
+          )}
+        </p>
+      )}
     </div>
   );
 }

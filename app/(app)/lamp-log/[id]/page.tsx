@@ -27,8 +27,18 @@ import { viewerZone } from '@/lib/time/viewer-zone';
 
 export const metadata: Metadata = { title: 'Lamp' };
 
-export default async function LampPage({ params }: { params: Promise<{ id: string }> }) {
+/** Readings the table shows unless the address asks for all (`?readings=all`): the chart shows every one. */
+const READINGS_SHOWN = 10;
+
+export default async function LampPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ id: string }>;
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const { id } = await params;
+  const allReadings = (await searchParams).readings === 'all';
   const user = await requireUser(`/lamp-log/${id}`);
   const lampId = parseId(id);
   if (lampId === null) notFound();
@@ -46,6 +56,9 @@ export default async function LampPage({ params }: { params: Promise<{ id: strin
   const lastMeter = [...detail.readings].reverse().find((r) => r.meter)?.meter ?? null;
   const lastSetUp = [...detail.readings].reverse().find((r) => r.through !== 'not-recorded');
   const lastWarm = [...detail.readings].reverse().find((r) => r.warmedUp !== 'not-recorded');
+  // Newest first; a lamp logged for years has many, and each row is sent as HTML and as data.
+  const newestFirst = [...detail.readings].sort((a, b) => b.takenAt.localeCompare(a.takenAt));
+  const shownReadings = allReadings ? newestFirst : newestFirst.slice(0, READINGS_SHOWN);
 
   return (
     <>
@@ -104,7 +117,16 @@ export default async function LampPage({ params }: { params: Promise<{ id: strin
             Readings
           </h2>
           {example && <ExampleDataMark />}
-          <ReadingsTable readings={detail.readings} canEdit={canEdit} />
+          <ReadingsTable
+            readings={shownReadings}
+            canEdit={canEdit}
+            more={{
+              total: newestFirst.length,
+              shown: READINGS_SHOWN,
+              allHref: `/lamp-log/${s.id}?readings=all#readings`,
+              fewerHref: `/lamp-log/${s.id}#readings`,
+            }}
+          />
           {canEdit && s.status !== 'retired' && (
             <div id="add-reading" className={`${card} scroll-mt-4 p-4`}>
               <h3 className="mb-3 font-semibold">Add a reading</h3>
