@@ -10,6 +10,16 @@ export type SortDirection = (typeof SORT_DIRECTIONS)[number];
 
 export type ListSort<C extends string> = { column: C; descending: boolean };
 
+/**
+ * Where a keyset list's page starts: after the last row of the page before it (Next) or before the
+ * first row of the page after it (Previous), as the opaque cursor its API answered with. Without one
+ * (a link typed or shared with only `page=`) the page is found by its offset.
+ */
+export type ListSeek = { after: string } | { before: string };
+
+/** A cursor as the API writes it (base64url); anything else in an address is ignored. */
+export const isCursor = (v: string | null | undefined): v is string => /^[A-Za-z0-9_-]{1,400}$/.test(v ?? '');
+
 /** Filters are named text values; a list checks each with its own rule and drops what fails it. */
 export type ListFilters = Record<string, string>;
 
@@ -19,6 +29,8 @@ export type ListView<C extends string> = {
   page: number;
   /** Only on lists that have filters. */
   filters?: ListFilters;
+  /** Only on keyset lists, and only beyond the first page. */
+  seek?: ListSeek;
 };
 
 export type ListViewSpec<C extends string> = {
@@ -30,6 +42,8 @@ export type ListViewSpec<C extends string> = {
   maxSearch: number;
   /** Each filter's URL key and the rule its value must pass (anything else is ignored). */
   filters?: Record<string, (value: string) => boolean>;
+  /** The list's API answers cursors and seeks by them (`after`/`before` in the address and the API). */
+  keyset?: boolean;
 };
 
 export function makeListView<C extends string>(spec: ListViewSpec<C>) {
@@ -62,13 +76,30 @@ export function makeListView<C extends string>(spec: ListViewSpec<C>) {
       }
       view.filters = filters;
     }
+    const seek = seekFrom(params);
+    if (seek && view.page > 1) view.seek = seek;
     return view;
+  }
+
+  function seekFrom(params: URLSearchParams): ListSeek | undefined {
+    if (!spec.keyset) return undefined;
+    const after = params.get('after');
+    const before = params.get('before');
+    if (isCursor(after)) return { after };
+    if (isCursor(before)) return { before };
+    return undefined;
+  }
+
+  function writeSeek(out: URLSearchParams, view: ListView<C>) {
+    if (!spec.keyset || !view.seek || view.page <= 1) return;
+    if ('after' in view.seek) out.set('after', view.seek.after);
+    else out.set('before', view.seek.before);
   }
 
   /** Writes the view into `base` (other parameters are kept), leaving defaults out so the plain list keeps its plain address. */
   function searchParamsForView(view: ListView<C>, base?: URLSearchParams): URLSearchParams {
     const out = new URLSearchParams(base);
-    for (const key of ['q', 'sort', 'dir', 'page', ...filterKeys]) out.delete(key);
+    for (const key of ['q', 'sort', 'dir', 'page', 'after', 'before', ...filterKeys]) out.delete(key);
     if (view.q) out.set('q', view.q);
     const { column, descending } = view.sort;
     if (column !== spec.defaultSort.column || descending !== spec.defaultSort.descending) {
@@ -80,11 +111,16 @@ export function makeListView<C extends string>(spec: ListViewSpec<C>) {
       if (v) out.set(key, v);
     }
     if (view.page > 1) out.set('page', String(view.page));
+    writeSeek(out, view);
     return out;
   }
 
-  /** The list query a view asks for: its search, sort and filters, its page as offset and limit. */
+  /**
+   * The list query a view asks for: its search, sort and filters, its page as offset and limit, and on a
+   * keyset list the cursor it seeks from (the offset is then only the fallback for a stale cursor).
+   */
   function listQueryForView(view: ListView<C>) {
+    const seek = spec.keyset && view.page > 1 ? view.seek : undefined;
     return {
       q: view.q || undefined,
       sort: view.sort.column,
@@ -92,6 +128,7 @@ export function makeListView<C extends string>(spec: ListViewSpec<C>) {
       offset: (view.page - 1) * spec.pageSize,
       limit: spec.pageSize,
       ...(view.filters ?? {}),
+      ...(seek ?? {}),
     };
   }
 
@@ -108,6 +145,7 @@ export function makeListView<C extends string>(spec: ListViewSpec<C>) {
     }
     out.set('offset', String((view.page - 1) * spec.pageSize));
     out.set('limit', String(spec.pageSize));
+    writeSeek(out, view);
     return out;
   }
 

@@ -9,6 +9,7 @@ import { button } from '@/components/ui/styles';
 import { useLengthUnit } from '@/components/ui/units';
 import { useServerList } from '@/components/ui/useServerList';
 import type { LampListPage } from '@/lib/lamp-log/list-queries';
+import type { ListSeek } from '@/lib/list-view';
 import {
   DUE_WITHIN_DAYS,
   LAMP_PAGE_SIZE,
@@ -59,6 +60,14 @@ export function LampLogTable({
   const [picked, setPicked] = useState<PickedPerson | null>(keeper);
   // Back and Forward change the filter without this picker: show nobody rather than a stale name.
   const shownKeeper = filters.keeper && picked && String(picked.id) === filters.keeper ? picked : null;
+  // Next and Previous start from this page's last or first row (the cursors its answer carries), so the
+  // server seeks through the index instead of counting rows off; only while those rows are the ones shown.
+  const seekTo = (page: number): ListSeek | undefined => {
+    if (stale || !data || page === 1) return undefined;
+    if (page === view.page + 1 && data.cursors.next) return { after: data.cursors.next };
+    if (page === view.page - 1 && data.cursors.prev) return { before: data.cursors.prev };
+    return undefined;
+  };
   const setFilter = (key: string, value: string) => {
     const next = { ...filters };
     if (value) next[key] = value;
@@ -192,7 +201,7 @@ export function LampLogTable({
         total={total}
         pages={pages}
         noun="lamps"
-        onPage={(page) => show({ page })}
+        onPage={(page) => show({ page, seek: seekTo(page) })}
       />
     </div>
   );

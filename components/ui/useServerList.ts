@@ -79,11 +79,16 @@ export function useServerList<C extends string, P extends { total: number }>({
   const total = result.data?.total;
   useEffect(() => {
     if (total !== undefined && !result.isPlaceholderData && view.page > codec.pageCount(total)) {
-      navigate({ ...view, page: codec.pageCount(total) }, 'replace');
+      navigate({ ...view, page: codec.pageCount(total), seek: undefined }, 'replace');
     }
   }, [total, result.isPlaceholderData, view, codec, navigate]);
 
-  const show = useCallback((next: Partial<ListView<C>>) => navigate({ ...view, ...next }), [view, navigate]);
+  // A cursor belongs to the page it was given for: any other change (sort, filter, a page without one)
+  // drops it.
+  const show = useCallback(
+    (next: Partial<ListView<C>>) => navigate({ ...view, seek: undefined, ...next }),
+    [view, navigate],
+  );
   const clearSearch = useCallback(() => {
     setDraft('');
     setSentQ('');

@@ -18,11 +18,17 @@ import {
 import { lampRowsOf } from './queries';
 import { STATUS_RANK, STATUSES } from './status';
 import { catchUpInBackground } from './stored-outlooks';
+import { isCursor } from '@/lib/list-view';
 
 /**
  * `GET /api/lamps` query: search, filter, sort and page of one organisation's lamps, read from the
  * stored outlooks (lamp_outlooks), so a request costs a page of lamps whatever the organisation owns.
- * Offset paging with a total, like the enclosures list (see lib/enclosures/queries.ts for why).
+ *
+ * Keyset ("seek") paging with a total: each answer carries a cursor for the row after its last (`next`)
+ * and before its first (`prev`), and `after`/`before` start the page there, through the sort's index,
+ * so a deep page costs what the first does. The table still says "page 7 of 40": the page number rides
+ * in the address beside the cursor. `offset` remains for a page named by number alone (a shared link,
+ * a cursor of another sort): the rows are right, only the cost grows with the depth.
  */
 export const lampListQuery = z
   .object({
@@ -41,6 +47,8 @@ export const lampListQuery = z
     /** The older name of `retired=1`. */
     includeRetired: z.enum(['true', 'false']).optional(),
     ...sortedListFields(LAMP_SORT_COLUMNS, MAX_LAMP_SEARCH),
+    after: z.string().refine(isCursor, { error: 'That is not a cursor of this list.' }).optional(),
+    before: z.string().refine(isCursor, { error: 'That is not a cursor of this list.' }).optional(),
   })
   .transform(({ retired, includeRetired, ...rest }) => ({
     ...withSort('urgency', defaultLampDescending)(rest),
@@ -52,19 +60,102 @@ export type LampListQuery = z.output<typeof lampListQuery>;
 export type LampListFilter = Omit<LampListQuery, 'keeper'> & { keeperId?: number };
 
 // Raw SQL only from these constants, never from input; values go in as replacements.
-const ORDER: Record<LampSortColumn, (d: 'ASC' | 'DESC') => string> = {
+/**
+ * One key of a sort: its expression, its direction relative to the one asked (`same`, `opposite`, or
+ * always ascending), and whether it may be NULL (MariaDB puts NULL first ascending, last descending).
+ */
+type SortKey = { sql: string; dir: 'same' | 'opposite' | 'asc'; nullable?: boolean };
+const key = (sql: string, dir: SortKey['dir'] = 'same', nullable = false): SortKey => ({
+  sql,
+  dir,
+  nullable,
+});
+const ID = key('o.lamp_id');
+
+const ORDER: Record<LampSortColumn, SortKey[]> = {
   // status_rank then the nearest date, in one direction, so the (organisation, rank, date) index gives
   // the order without sorting.
-  urgency: (d) => `o.status_rank ${d}, o.next_due_on ${d}, o.lamp_id ${d}`,
-  lamp: (d) => `o.label ${d}, o.lamp_id ${d}`,
-  enclosure: (d) => `o.enclosure_name ${d}, o.label ${d}, o.lamp_id ${d}`,
+  urgency: [key('o.status_rank'), key('o.next_due_on', 'same', true), ID],
+  lamp: [key('o.label'), ID],
+  enclosure: [key('o.enclosure_name'), key('o.label'), ID],
   // Descending age is the oldest lamp first: the earliest first use.
-  age: (d) => `o.first_used_on ${d === 'ASC' ? 'DESC' : 'ASC'}, o.lamp_id ${d}`,
+  age: [key('o.first_used_on', 'opposite'), ID],
   // Lamps without the value (no reading, no UV output, no date) come last either way.
-  lastReading: (d) => `o.last_reading_at IS NULL, o.last_reading_at ${d}, o.lamp_id ${d}`,
-  remaining: (d) => `o.remaining_fraction IS NULL, o.remaining_fraction ${d}, o.lamp_id ${d}`,
-  due: (d) => `o.next_due_on IS NULL, o.next_due_on ${d}, o.lamp_id ${d}`,
+  lastReading: [key('o.last_reading_at IS NULL', 'asc'), key('o.last_reading_at', 'same', true), ID],
+  remaining: [key('o.remaining_fraction IS NULL', 'asc'), key('o.remaining_fraction', 'same', true), ID],
+  due: [key('o.next_due_on IS NULL', 'asc'), key('o.next_due_on', 'same', true), ID],
 };
+
+/** The sort's keys; with a due filter every row has a date, and the plain order reads the date index. */
+function sortKeys(query: Pick<LampListFilter, 'sort' | 'due'>): SortKey[] {
+  return query.sort === 'due' && query.due ? [key('o.next_due_on'), ID] : ORDER[query.sort];
+}
+
+/** Each key's SQL direction for the order asked (`reverse`: the order read backwards, for Previous). */
+function directions(keys: SortKey[], descending: boolean, reverse: boolean): ('ASC' | 'DESC')[] {
+  return keys.map((k) => {
+    const desc = k.dir === 'asc' ? false : k.dir === 'opposite' ? !descending : descending;
+    return desc !== reverse ? 'DESC' : 'ASC';
+  });
+}
+
+/** A row's place in a sort: the sort it belongs to and its keys' values (dates as UTC text). */
+type Cursor = { s: string; v: (string | number | null)[] };
+
+const cursorValue = (v: unknown): string | number | null =>
+  v === null || v === undefined
+    ? null
+    : v instanceof Date
+      ? v.toISOString().replace('T', ' ').replace('Z', '')
+      : typeof v === 'number' || typeof v === 'string'
+        ? v
+        : Number(v);
+
+export function encodeCursor(sortId: string, values: unknown[]): string {
+  const c: Cursor = { s: sortId, v: values.map(cursorValue) };
+  return Buffer.from(JSON.stringify(c)).toString('base64url');
+}
+
+/** The cursor's values if it was made for this sort, else null (the page falls back to its offset). */
+function decodeCursor(text: string, sortId: string, length: number): (string | number | null)[] | null {
+  try {
+    const c = JSON.parse(Buffer.from(text, 'base64url').toString('utf8')) as Cursor;
+    const ok =
+      c?.s === sortId &&
+      Array.isArray(c.v) &&
+      c.v.length === length &&
+      c.v.every((v) => v === null || typeof v === 'number' || typeof v === 'string');
+    return ok ? c.v : null;
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * The rows strictly beyond a cursor in the order given: for each key in turn, equal on the keys before
+ * it and past it on this one, NULL placed as MariaDB orders it (first ascending, last descending).
+ */
+function seekWhere(keys: SortKey[], dirs: ('ASC' | 'DESC')[], values: (string | number | null)[]) {
+  const r: Record<string, unknown> = {};
+  const parts = keys.map((k, i) => {
+    const v = values[i] ?? null;
+    if (v !== null) r[`k${i}`] = v;
+    const equal = v === null ? `${k.sql} IS NULL` : `${k.sql} = :k${i}`;
+    let past: string | null;
+    if (dirs[i] === 'ASC') past = v === null ? `${k.sql} IS NOT NULL` : `${k.sql} > :k${i}`;
+    else if (v === null) past = null;
+    else past = k.nullable ? `(${k.sql} < :k${i} OR ${k.sql} IS NULL)` : `${k.sql} < :k${i}`;
+    return { equal, past };
+  });
+  const branches: string[] = [];
+  parts.forEach(({ past }, i) => {
+    if (past) branches.push([...parts.slice(0, i).map((p) => p.equal), past].join(' AND '));
+  });
+  return {
+    sql: branches.length ? `(${branches.map((b) => `(${b})`).join(' OR ')})` : 'FALSE',
+    replacements: r,
+  };
+}
 
 type Scope = { organisationId: number; keeperId?: number };
 
@@ -215,19 +306,34 @@ function totalFromCounts(query: LampListFilter, byRank: Map<number, number> | nu
 /** The page's and the total's SQL (tests EXPLAIN them). */
 export function lampListSql(query: LampListFilter, today: string) {
   const { sql, replacements } = lampListWhere(query, today);
-  const d = query.descending ? 'DESC' : 'ASC';
-  // With a due filter every row has a date, and the plain order lets the (organisation, date) index
-  // give it without sorting.
-  const order =
-    query.sort === 'due' && query.due ? `o.next_due_on ${d}, o.lamp_id ${d}` : ORDER[query.sort](d);
+  const keys = sortKeys(query);
+  const id = sortId(query);
+  const seek = query.after ?? query.before;
+  const values = seek ? decodeCursor(seek, id, keys.length) : null;
+  // Previous reads the order backwards from the page's first row; the rows are turned round after.
+  const backwards = Boolean(values && query.before && !query.after);
+  const dirs = directions(keys, query.descending, backwards);
+  const order = keys.map((k, i) => `${k.sql} ${dirs[i]}`).join(', ');
+  const seekAt = values ? seekWhere(keys, dirs, values) : null;
+  const where = seekAt ? `${sql} AND ${seekAt.sql}` : sql;
+  const keyColumns = keys.map((k, i) => `${k.sql} AS k${i}`).join(', ');
   return {
     // STRAIGHT_JOIN: read the organisation's outlooks in index order and stop at the page's end. Left to
     // itself the optimiser may start from a small enclosures table and sort every lamp of it.
-    pageSql: `SELECT STRAIGHT_JOIN o.lamp_id AS id ${FROM} WHERE ${sql} ORDER BY ${order} LIMIT :limit OFFSET :offset`,
+    pageSql: `SELECT STRAIGHT_JOIN o.lamp_id AS id, ${keyColumns} ${FROM} WHERE ${where} ORDER BY ${order} LIMIT :limit${
+      values ? '' : ' OFFSET :offset'
+    }`,
     countSql: `SELECT COUNT(*) AS n ${FROM} WHERE ${sql}`,
-    replacements: { ...replacements, limit: query.limit, offset: query.offset },
+    replacements: { ...replacements, ...seekAt?.replacements, limit: query.limit, offset: query.offset },
+    backwards,
+    sought: Boolean(values),
+    sortId: id,
   };
 }
+
+/** What a cursor is tied to: the sort, its direction and whether the due filter changed the keys. */
+const sortId = (query: Pick<LampListFilter, 'sort' | 'descending' | 'due'>) =>
+  `${query.sort}.${query.descending ? 'd' : 'a'}${query.sort === 'due' && query.due ? '.f' : ''}`;
 
 /**
  * One page of an organisation's lamps with their summaries, the total matching, and the counts. The
@@ -236,14 +342,17 @@ export function lampListSql(query: LampListFilter, today: string) {
 export async function listLamps(query: LampListFilter) {
   const sequelize = getSequelize();
   const today = todayIso();
-  const { pageSql, countSql, replacements } = lampListSql(query, today);
+  const { pageSql, countSql, replacements, backwards, sortId: sorted } = lampListSql(query, today);
   const scope = { organisationId: query.organisationId, keeperId: query.keeperId };
   // Views the counts rows answer (the plain list, a status) take their total from them; any other view
   // is counted by its own query, started beside them.
   const countable =
     !query.keeperId && !query.enclosure && !query.tech && !query.due && !(query.q ?? '').trim();
-  const [ids, counted, [counting]] = await Promise.all([
-    sequelize.query<{ id: number }>(pageSql, { replacements, type: QueryTypes.SELECT }),
+  const [found, counted, [counting]] = await Promise.all([
+    sequelize.query<{ id: number } & Record<string, unknown>>(pageSql, {
+      replacements,
+      type: QueryTypes.SELECT,
+    }),
     countsOf(scope, today),
     countable
       ? Promise.resolve([null])
@@ -251,10 +360,19 @@ export async function listLamps(query: LampListFilter) {
   ]);
   const { counts } = counted;
   const total = totalFromCounts(query, counted.byRank) ?? Number(counting?.n ?? 0);
+  const ids = backwards ? [...found].reverse() : found;
   const items = await lampRowsOf(
     ids.map((r) => r.id),
     today,
   );
+  const keyCount = sortKeys(query).length;
+  const cursorOf = (row: Record<string, unknown> | undefined) =>
+    row
+      ? encodeCursor(
+          sorted,
+          Array.from({ length: keyCount }, (_, i) => row[`k${i}`]),
+        )
+      : null;
   // Rows out of date are recomputed above for this page; the rest catch up behind the answer.
   if (counts.pending > 0) catchUpInBackground(query.organisationId, today);
   return {
@@ -263,6 +381,8 @@ export async function listLamps(query: LampListFilter) {
     offset: query.offset,
     limit: query.limit,
     counts,
+    /** Where the next page starts (after this page's last row) and the previous ends (before its first). */
+    cursors: { next: cursorOf(ids.at(-1)), prev: cursorOf(ids[0]) },
   };
 }
 

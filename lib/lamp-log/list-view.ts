@@ -50,4 +50,6 @@ export const lampListView = makeListView({
   pageSize: LAMP_PAGE_SIZE,
   maxSearch: MAX_LAMP_SEARCH,
   filters: LAMP_FILTERS,
+  // Next and Previous seek from the page's last or first row: a deep page costs what the first does.
+  keyset: true,
 });
