@@ -115,7 +115,7 @@ async function measure(base, cookie, route, opts) {
         }),
   ]);
   return {
-    route,
+    route: labelOf(route),
     ...runFigures(main),
     bytes: main.requests.total ? Math.round(main.throughput.total / main.requests.total) : 0,
     errors: main.errors + main.timeouts,
@@ -162,6 +162,7 @@ async function routesOf(base, jar, org) {
     `/enclosures/${enclosureId}`,
     `/enclosures/${enclosureId}/lamps`,
     `/lamp-log/${lampId}`,
+    ...(await deepLampPages(base, jar, org)),
     `/api/enclosures?${q}`,
     `/api/enclosures?${q}&q=tub%2017&sort=name`,
     `/api/lamps?${q}`,
@@ -175,6 +176,25 @@ async function routesOf(base, jar, org) {
     `/api/lamps/${lampId}/readings`,
   ];
 }
+
+/**
+ * The lamp log's page at 90 % of its depth, asked by its number alone (found by OFFSET) and as Next
+ * reaches it (sought from the cursor of the page before): the first should grow with the organisation,
+ * the second not.
+ */
+async function deepLampPages(base, jar, org) {
+  const q = `organisationId=${org}`;
+  const first = await api(base, jar, 'GET', `/api/lamps?${q}&limit=25`);
+  const page = Math.max(2, Math.floor(Math.ceil(first.total / 25) * 0.9));
+  const before = await api(base, jar, 'GET', `/api/lamps?${q}&limit=25&offset=${(page - 2) * 25}`);
+  return [`/lamp-log?page=${page}`, `/lamp-log?page=${page}&after=${before.cursors.next}`];
+}
+
+/** A route as the tables print it: a deep page by its depth, a cursor by name (both differ by size). */
+const labelOf = (route) =>
+  route.includes('/lamp-log?page=')
+    ? route.replace(/page=\d+/, 'page=(90 % deep)').replace(/after=[^&]+/, 'after=(cursor)')
+    : route;
 
 /** The routes `--only` names (any part of the path), or all of them. */
 const chosen = (routes, only) =>
@@ -345,7 +365,8 @@ async function main() {
       grownOrg = grown.org;
       log(`Measuring the lists again on ${names[1]} ...`);
       grownRows = [await measure(base, grown.cookie, '/api/health', opts)];
-      for (const route of chosen(growthRoutes(grownOrg.organisationId), opts.only)) {
+      const deep = await deepLampPages(base, grown.jar, grownOrg.organisationId);
+      for (const route of chosen([...growthRoutes(grownOrg.organisationId), ...deep], opts.only)) {
         grownRows.push(await measure(base, grown.cookie, route, opts));
       }
     }
