@@ -11,7 +11,7 @@ import type { Occluder } from '../geometry/occluders';
 import { compileScene, type LampGeom, type Scene } from './scene';
 import { fillLamp, refillChanged, sweepLampRow, Workspace } from './workspace';
 import { probeScene, probeSceneByLamp, type LampSamples } from './probe';
-import { airTempC, HEAT_DEFAULTS, surfaceTempC, surfaceTempRow } from './heat';
+import { airTempC, HEAT_DEFAULTS, surfaceTempRow } from './heat';
 import { DEFAULT_CELL_CM, gridSize, type FieldGrid, type ProbeResult, type SimOptions } from './types';
 
 interface LampEntry {
@@ -64,6 +64,10 @@ export class FieldSolver {
   private dirty: Uint8Array | null = null;
   /** Totals of the last call, reused for cells no lamp changed. */
   private totals: Totals | null = null;
+  /** In this call: lamps filled into a gone lamp's buffer (key → the gone lamp's key), marking what changed. */
+  private refilled = new Map<string, string>();
+  /** In this call: a lamp was filled into a new buffer, so its cells are not marked. */
+  private unmarked = false;
   readonly stats: SolverStats = { full: 0, partial: 0, cached: 0, cellsEvaluated: 0 };
 
   /** @param cache keep per-lamp fields between calls (false: a one-off computation that allocates less). */
@@ -93,6 +97,8 @@ export class FieldSolver {
     // Fields of lamps that are gone (a moved lamp's old place): their buffers take a new lamp's fields,
     // so a drag allocates nothing per step.
     const spare: LampEntry[] = [];
+    this.refilled.clear();
+    this.unmarked = false;
     for (const [key, e] of this.entries) if (!keys.includes(key)) spare.push(e);
     for (let l = 0; l < scene.lamps.length; l++) {
       const lamp = scene.lamps[l]!;
@@ -105,24 +111,19 @@ export class FieldSolver {
       fi.push(lamp.uvI > 0 ? f * lamp.lamp.uviPerUvb : 0);
     }
     this.entries = next;
-    // Everything the totals depend on besides the per-lamp fields.
-    const sumKey = JSON.stringify([
-      used.map((e) => e.key),
-      fu,
-      fi,
-      scene.roomC,
-      scene.airRiseK,
-      height,
-      hc,
-      nx,
-      ny,
-      cell,
-    ]);
+    // Everything the totals depend on: the lamps' fields (by key) and the rest.
+    const rest = JSON.stringify([fu, fi, scene.roomC, scene.airRiseK, height, hc, nx, ny, cell]);
+    const sumKey = JSON.stringify(used.map((e) => e.key)) + rest;
     const last = this.totals;
-    const incremental = last !== null && last.key === sumKey && this.stats.full === 0;
+    // A lamp filled into the buffer of the one it replaced (a dragged lamp's old place) marked the cells
+    // it changed, so the totals need only those cells when everything else is as in the last call.
+    const asBefore = this.unmarked
+      ? null
+      : JSON.stringify(used.map((e) => this.refilled.get(e.key) ?? e.key)) + rest;
+    const incremental = last !== null && last.key === asBefore;
     // Every cell is written below when not incremental, so the last totals' buffers can be reused.
     const t = incremental
-      ? last
+      ? { ...last, key: sumKey }
       : last && last.uvb.length === cells
         ? { ...last, key: sumKey }
         : newTotals(sumKey, cells);
@@ -133,23 +134,41 @@ export class FieldSolver {
     // Totals are always summed lamp by lamp in scene order, so an incremental update is bit-identical
     // to a full one.
     if (incremental) {
+      // The same sums, over the runs of changed cells of each row.
       const dirty = this.dirty;
-      for (let c = 0; c < cells; c++) {
-        if (dirty[c] === 0) continue;
-        let u = 0;
-        let v = 0;
-        let q = 0;
-        for (let k = 0; k < n; k++) {
-          const e = used[k]!;
-          const val = e.uv[c]!;
-          u += val * fu[k]!;
-          v += val * fi[k]!;
-          q += e.ir[c]!;
+      ws.ensureRow(nx);
+      const rowQ = ws.rowQ;
+      const { absorptance, emissivity } = HEAT_DEFAULTS;
+      const lu = used.map((e) => e.uv);
+      const li = used.map((e) => e.ir);
+      const { uvb, uvi, tempC } = t;
+      for (let j = 0; j < ny; j++) {
+        const base = j * nx;
+        let i = 0;
+        while (i < nx) {
+          if (dirty[base + i] === 0) {
+            i++;
+            continue;
+          }
+          const from = i;
+          for (; i < nx && dirty[base + i] !== 0; i++) {
+            const c = base + i;
+            let u = 0;
+            let v = 0;
+            let q = 0;
+            for (let k = 0; k < n; k++) {
+              const val = lu[k]![c]!;
+              u += val * fu[k]!;
+              v += val * fi[k]!;
+              q += li[k]![c]!;
+            }
+            uvb[c] = u;
+            uvi[c] = v;
+            rowQ[i] = q;
+          }
+          surfaceTempRow(rowQ, rowQ, from, i, air[j]!, absorptance, emissivity, hc);
+          for (let x = from; x < i; x++) tempC[base + x] = rowQ[x]!;
         }
-        t.uvb[c] = u;
-        t.uvi[c] = v;
-        const a = air[(c / nx) | 0]!;
-        t.tempC[c] = q > 0 ? surfaceTempC(HEAT_DEFAULTS.absorptance * q, a, HEAT_DEFAULTS.emissivity, hc) : a;
       }
     } else {
       // The same sums in the same order, a row at a time: the row's totals stay in the cache for the
@@ -318,10 +337,22 @@ export class FieldSolver {
     this.stats.full++;
     const reused = spare.pop();
     const fits = reused !== undefined && reused.uv.length === nx * ny;
-    // fillLamp writes every cell, so a reused buffer needs no clearing.
+    // fillLamp writes every cell, so a reused buffer needs no clearing; it marks the cells it changes.
     const uv = fits ? reused.uv : new Float32Array(nx * ny);
     const ir = fits ? reused.ir : new Float32Array(nx * ny);
-    this.stats.cellsEvaluated += fillLamp(this.ws, lamp, scene.occluders, uv, ir, nx, ny, cell);
+    if (fits) this.refilled.set(key, reused.key);
+    else this.unmarked = true;
+    this.stats.cellsEvaluated += fillLamp(
+      this.ws,
+      lamp,
+      scene.occluders,
+      uv,
+      ir,
+      nx,
+      ny,
+      cell,
+      fits ? this.dirty! : undefined,
+    );
     return { key, occKeys, occluders: scene.occluders, uv, ir };
   }
 

@@ -53,7 +53,9 @@ export class Workspace {
 
 /**
  * Fill a lamp's new-lamp UVB and radiant fields over the whole grid (zero where it cannot reach, so a
- * reused buffer needs no clearing first); returns the number of cells evaluated.
+ * reused buffer needs no clearing first); returns the number of cells evaluated. With `dirty`, the cells
+ * whose stored values change are marked there (the buffer held another lamp's fields, or this lamp's
+ * before it moved).
  */
 export function fillLamp(
   ws: Workspace,
@@ -64,24 +66,34 @@ export function fillLamp(
   nx: number,
   ny: number,
   cell: number,
+  dirty?: Uint8Array,
 ): number {
   ws.ensureRow(nx);
   let evaluated = 0;
   for (let j = 0; j < ny; j++) {
     const base = j * nx;
     const count = sweepLampRow(ws, lamp, occluders, j, nx, cell);
-    if (count === 0) {
-      uv.fill(0, base, base + nx);
-      ir.fill(0, base, base + nx);
-      continue;
-    }
     evaluated += count;
-    const i0 = ws.i0;
-    const i1 = ws.i1;
-    uv.fill(0, base, base + i0);
-    ir.fill(0, base, base + i0);
+    const i0 = count === 0 ? nx : ws.i0;
+    const i1 = count === 0 ? nx - 1 : ws.i1;
     const ru = ws.rowUv;
     const ri = ws.rowIr;
+    if (dirty) {
+      for (let i = 0; i < nx; i++) {
+        const inside = i >= i0 && i <= i1;
+        const u = inside ? ru[i]! : 0;
+        const r = inside ? ri[i]! : 0;
+        const c = base + i;
+        const was = uv[c]!;
+        const wasIr = ir[c]!;
+        uv[c] = u;
+        ir[c] = r;
+        if (uv[c] !== was || ir[c] !== wasIr) dirty[c] = 1;
+      }
+      continue;
+    }
+    uv.fill(0, base, base + i0);
+    ir.fill(0, base, base + i0);
     for (let i = i0; i <= i1; i++) {
       uv[base + i] = ru[i]!;
       ir[base + i] = ri[i]!;
