@@ -23,6 +23,15 @@ describe('Lru', () => {
     expect(made).toBe(1);
   });
 
+  it('forgets a deleted entry, so the next getOrSet makes it again', () => {
+    const lru = new Lru<string, number>(4);
+    lru.set('k', 1);
+    lru.delete('k');
+    expect(lru.get('k')).toBeUndefined();
+    expect(lru.size).toBe(0);
+    expect(lru.getOrSet('k', () => 2)).toBe(2);
+  });
+
   it('refuses a capacity that is not a positive integer', () => {
     expect(() => new Lru(0)).toThrow(/capacity/);
     expect(() => new Lru(1.5)).toThrow(/capacity/);

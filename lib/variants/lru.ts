@@ -40,6 +40,10 @@ export class Lru<K, V> {
     return value;
   }
 
+  delete(key: K): void {
+    this.map.delete(key);
+  }
+
   clear(): void {
     this.map.clear();
   }

@@ -1,12 +1,15 @@
 import 'server-only';
-import { Op } from 'sequelize';
+import { Op, QueryTypes } from 'sequelize';
 import { afterCursor, page } from '@/lib/api';
 import { likeContains } from '@/lib/api/like';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import type { Design as DesignFile } from '@/simulation';
 import { physicsOf } from '@/simulation';
-import { Design, Enclosure, Organisation, ShareLink, User, Variant } from '@/models';
+import { Design, Enclosure, ShareLink, User, Variant } from '@/models';
 import { loadOwnedForPage, type DesignWithEnclosure } from '@/lib/access';
+import { getSequelize } from '@/lib/db';
+import { toEngineSheet } from '@/lib/species/to-engine';
+import { attachedSpecies, type SpeciesOption } from './species';
 import { readStoredDesign } from './stored-design';
 import { hashShareToken, isWellFormedShareToken, shareLinkState, type ShareLinkState } from './tokens';
 
@@ -225,54 +228,139 @@ export type PublicShare = {
   exampleData: boolean;
   speciesName: string | null;
   organisationId: number;
+  /** The organisation's sheet for the enclosure's species (matched as `attachedSpecies` does), if any. */
+  species: SpeciesOption | null;
   design: ReturnType<typeof readStoredDesign>;
   expiresAt: string | null;
 };
+
+/** A working share link as stored: the variant's document still as saved text (`readStoredDesign`). */
+export type ShareRecord = Omit<PublicShare, 'design'> & { designJson: string };
+
+type ShareRow = {
+  expiresAt: Date | null;
+  variantId: number;
+  variantName: string;
+  version: number;
+  variantUpdatedAt: Date;
+  designJson: string;
+  designName: string;
+  enclosureName: string;
+  organisationId: number;
+  speciesName: string | null;
+  organisationName: string | null;
+  exampleData: number | null;
+  sheetId: number | null;
+  commonName: string | null;
+  scientificName: string | null;
+  uvZone: number;
+  uvbTargetMinUw: number | null;
+  uvbTargetMaxUw: number | null;
+  baskingSurfaceMinC: number;
+  baskingSurfaceMaxC: number;
+  coolAirMinC: number;
+  coolAirMaxC: number;
+  nightMinC: number | null;
+  photoperiodMinH: number | null;
+  photoperiodMaxH: number | null;
+  adultLengthCm: number | null;
+  climbs: number;
+  lowMelanin: number;
+};
+
+// One round trip for a public page that every visitor of a link asks for: the link (by the unique index
+// on its hash), the variant and the names around it, and the sheets that may be the enclosure's species.
+// The join compares names in the column's collation (case- and accent-insensitive), a superset of what
+// `attachedSpecies` accepts; that function then picks among them exactly as the signed-in pages do.
+const SHARE_SQL = `
+SELECT sl.expires_at AS expiresAt,
+       v.id AS variantId, v.name AS variantName, v.version, v.updated_at AS variantUpdatedAt,
+       v.design_json AS designJson, d.name AS designName,
+       e.name AS enclosureName, e.organisation_id AS organisationId, e.species_name AS speciesName,
+       o.name AS organisationName, o.example_data AS exampleData,
+       s.id AS sheetId, s.common_name AS commonName, s.scientific_name AS scientificName,
+       s.uv_zone AS uvZone, s.uvb_target_min_uw AS uvbTargetMinUw, s.uvb_target_max_uw AS uvbTargetMaxUw,
+       s.basking_surface_min_c AS baskingSurfaceMinC, s.basking_surface_max_c AS baskingSurfaceMaxC,
+       s.cool_air_min_c AS coolAirMinC, s.cool_air_max_c AS coolAirMaxC, s.night_min_c AS nightMinC,
+       s.photoperiod_min_h AS photoperiodMinH, s.photoperiod_max_h AS photoperiodMaxH,
+       s.adult_length_cm AS adultLengthCm, s.climbs, s.low_melanin AS lowMelanin
+  FROM share_links sl
+  JOIN variants v ON v.id = sl.variant_id
+  JOIN designs d ON d.id = v.design_id
+  JOIN enclosures e ON e.id = d.enclosure_id
+  LEFT JOIN organisations o ON o.id = e.organisation_id
+  LEFT JOIN species_sheets s ON s.organisation_id = e.organisation_id
+       AND (s.common_name = e.species_name OR s.scientific_name = e.species_name)
+ WHERE sl.token_hash = :tokenHash AND sl.revoked_at IS NULL
+ ORDER BY s.common_name, s.id`;
+
+const pairOf = (min: number | null, max: number | null) =>
+  min === null || max === null ? null : { min, max };
+
+function sheetOf(r: ShareRow): SpeciesOption | null {
+  if (r.sheetId === null || r.commonName === null || r.scientificName === null) return null;
+  return {
+    id: r.sheetId,
+    name: r.commonName,
+    scientificName: r.scientificName,
+    sheet: toEngineSheet({
+      commonName: r.commonName,
+      uvZone: r.uvZone,
+      baskingSurfaceC: { min: r.baskingSurfaceMinC, max: r.baskingSurfaceMaxC },
+      coolAirC: { min: r.coolAirMinC, max: r.coolAirMaxC },
+      nightMinC: r.nightMinC,
+      uvbTargetUw: pairOf(r.uvbTargetMinUw, r.uvbTargetMaxUw),
+      adultLengthCm: r.adultLengthCm,
+      climbs: Boolean(r.climbs),
+      lowMelanin: Boolean(r.lowMelanin),
+      photoperiodH: pairOf(r.photoperiodMinH, r.photoperiodMaxH),
+    }),
+  };
+}
+
+/**
+ * A working share link with everything its public page shows, the design still as stored text, in one
+ * query: the page reads it on every view, so a revoked or expired link stops at once. Malformed,
+ * unknown, revoked and expired tokens all give null.
+ */
+export async function findShare(token: string, now = new Date()): Promise<ShareRecord | null> {
+  if (!isWellFormedShareToken(token)) return null;
+  const rows = await getSequelize().query<ShareRow>(SHARE_SQL, {
+    replacements: { tokenHash: hashShareToken(token) },
+    type: QueryTypes.SELECT,
+  });
+  const r = rows[0];
+  if (!r || shareLinkState({ revokedAt: null, expiresAt: r.expiresAt }, now) !== 'active') return null;
+  return {
+    variant: {
+      id: r.variantId,
+      name: r.variantName,
+      version: r.version,
+      updatedAt: new Date(r.variantUpdatedAt).toISOString(),
+    },
+    designName: r.designName,
+    enclosureName: r.enclosureName,
+    organisationName: r.organisationName ?? '',
+    exampleData: Boolean(r.exampleData),
+    organisationId: r.organisationId,
+    speciesName: r.speciesName ?? null,
+    species: attachedSpecies(
+      rows.flatMap((row) => sheetOf(row) ?? []),
+      r.speciesName,
+    ),
+    designJson: r.designJson,
+    expiresAt: r.expiresAt ? new Date(r.expiresAt).toISOString() : null,
+  };
+}
 
 /**
  * What an anonymous visitor of `/s/<token>` may see: exactly one variant and the names around it.
  * Malformed, unknown, revoked and expired tokens all give null (the page answers 404 alike).
  */
 export async function resolveShareToken(token: string, now = new Date()): Promise<PublicShare | null> {
-  if (!isWellFormedShareToken(token)) return null;
-  const share = await ShareLink.findOne({
-    where: { tokenHash: hashShareToken(token), revokedAt: { [Op.is]: null } },
-  });
-  if (!share || shareLinkState(share, now) !== 'active') return null;
-  const variant = (await Variant.findByPk(share.variantId, {
-    include: [
-      {
-        model: Design,
-        as: 'design',
-        required: true,
-        include: [
-          {
-            model: Enclosure,
-            as: 'enclosure',
-            required: true,
-            include: [{ model: Organisation, as: 'organisation', attributes: ['id', 'name', 'exampleData'] }],
-          },
-        ],
-      },
-    ],
-  })) as (Variant & { design: Design & { enclosure: Enclosure & { organisation?: Organisation } } }) | null;
-  if (!variant) return null;
-  const enclosure = variant.design.enclosure;
-  return {
-    variant: {
-      id: variant.id,
-      name: variant.name,
-      version: variant.version,
-      updatedAt: new Date(variant.updatedAt).toISOString(),
-    },
-    designName: variant.design.name,
-    enclosureName: enclosure.name,
-    organisationName: enclosure.organisation?.name ?? '',
-    exampleData: enclosure.organisation?.exampleData ?? false,
-    organisationId: enclosure.organisationId,
-    speciesName: enclosure.speciesName ?? null,
-    // Without its photo backdrop: a visitor with the link may not read the enclosure's uploads.
-    design: physicsOf(readStoredDesign(variant.designJson)),
-    expiresAt: share.expiresAt ? share.expiresAt.toISOString() : null,
-  };
+  const found = await findShare(token, now);
+  if (!found) return null;
+  const { designJson, ...rest } = found;
+  // Without its photo backdrop: a visitor with the link may not read the enclosure's uploads.
+  return { ...rest, design: physicsOf(readStoredDesign(designJson)) };
 }

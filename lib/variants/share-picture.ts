@@ -1,6 +1,6 @@
 import 'server-only';
 import { createHash } from 'node:crypto';
-import type { Design, FieldName } from '@/simulation';
+import type { FieldName } from '@/simulation';
 import { Lru } from './lru';
 
 /**
@@ -30,9 +30,9 @@ export function parsePictureParams(
 
 export type DrawnPicture = { svg: string; etag: string };
 
-/** The cache key of a picture: what it is drawn from (the same design gives the same picture). */
-export function pictureKey(design: Design, field: FieldName): string {
-  return `${field}:${createHash('sha256').update(JSON.stringify(design)).digest('base64url')}`;
+/** The cache key of a picture: what it is drawn from, the stored design (the same design gives the same picture). */
+export function pictureKey(designJson: string, field: FieldName): string {
+  return `${field}:${createHash('sha256').update(designJson).digest('base64url')}`;
 }
 
 /** A strong ETag of the drawn markup itself: a new look of the same design is a new tag. */

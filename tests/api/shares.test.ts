@@ -2,12 +2,15 @@ import { describe, expect, it } from 'vitest';
 import * as shareRoute from '@/app/api/shares/[id]/route';
 import * as sharesRoute from '@/app/api/variants/[id]/shares/route';
 import * as sharedPictureRoute from '@/app/s/[token]/picture/[version]/[file]/route';
+import { enginePool } from '@/lib/engine-pool';
+import { sharePageView, sharePageViews } from '@/lib/variants/share-page';
 import { parsePictureParams, pictureCache, sharePicturePath } from '@/lib/variants/share-picture';
-import { resolveShareToken } from '@/lib/variants/queries';
+import { findShare, resolveShareToken } from '@/lib/variants/queries';
+import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
 import { hashShareToken } from '@/lib/variants/tokens';
-import { ShareLink, Variant } from '@/models';
+import { ShareLink, SpeciesSheet, Variant } from '@/models';
 import { benchDesign } from '@/simulation/testing/fixtures';
-import { withTestDatabase } from '../helpers/db';
+import { createOrganisation, withTestDatabase } from '../helpers/db';
 import { createKeeperWorld } from '../helpers/world';
 import { call, ORIGIN, postDesign, postShare, sharedReport } from './variants.helpers';
 
@@ -251,5 +254,95 @@ describe('share page pictures', () => {
     ]) {
       expect(parsePictureParams(v!, f!), `${v}/${f}`).toBeNull();
     }
+  });
+});
+
+/** A species sheet of one organisation; figures invented for the test, not husbandry advice. */
+const sheet = (organisationId: number, commonName: string, scientificName: string) =>
+  SpeciesSheet.create({
+    organisationId,
+    commonName,
+    scientificName,
+    uvZone: 3,
+    baskingSurfaceMinC: 35,
+    baskingSurfaceMaxC: 40,
+    warmAirMinC: 28,
+    warmAirMaxC: 32,
+    coolAirMinC: 22,
+    coolAirMaxC: 26,
+    nightMinC: 16,
+    sourcesJson: '[]',
+  });
+
+/** A new link to a variant, made by `user`; its token. */
+const linkTo = async (variantId: number, user: Awaited<ReturnType<typeof world>>['staff']) =>
+  (await postShare(user, variantId)).body.share.token as string;
+
+describe('share page view', () => {
+  it('finds the enclosure’s species sheet as the signed-in pages do, and only in its organisation', async () => {
+    const { org, staff, enclosure } = await createKeeperWorld('Shop A', {
+      enclosure: { name: 'Desert tank', speciesName: 'EXAMPLUS testi' },
+      staff: true,
+    });
+    const other = await createOrganisation('Shop B');
+    await sheet(other.id, 'Example lizard', 'Examplus testi');
+    const { variantId } = await postDesign(staff!, enclosure.id, { name: 'Plan', variantName: 'Lit' });
+    const token = await linkTo(variantId, staff!);
+    // No sheet of its own organisation: none, although another organisation has one of that name.
+    expect((await findShare(token))!.species).toBeNull();
+
+    await sheet(org.id, 'Decoy gecko', 'Examplus decoy');
+    const wanted = await sheet(org.id, 'Example lizard', 'Examplus testi');
+    const found = (await findShare(token))!.species;
+    expect(found).toEqual(attachedSpecies(await speciesOptions(org.id), 'EXAMPLUS testi'));
+    expect(found).toMatchObject({ id: wanted.id, name: 'Example lizard' });
+    expect(found!.sheet).toMatchObject({ name: 'Example lizard', uvZone: 3, baskingSurfaceC: [35, 40] });
+  });
+
+  it('works a view out once per design, field and sheet, and afresh after a save or a sheet edit', async () => {
+    const { org, staff, enclosure } = await createKeeperWorld('Shop A', {
+      enclosure: { name: 'Desert tank', speciesName: 'Example lizard' },
+      staff: true,
+    });
+    const species = await sheet(org.id, 'Example lizard', 'Examplus testi');
+    const { variantId } = await postDesign(staff!, enclosure.id, { name: 'Plan', variantName: 'Lit' });
+    await Variant.update({ designJson: JSON.stringify(benchDesign(1, 1)) }, { where: { id: variantId } });
+    const token = await linkTo(variantId, staff!);
+    sharePageViews.clear();
+    const tasks = () => enginePool().stats.tasks;
+
+    const before = tasks();
+    const first = await sharePageView((await findShare(token))!, 'uvi');
+    expect(first.problem).toBeNull();
+    expect(first.result!.scale.label).toBe('UV Index');
+    expect(first.lamps.length).toBeGreaterThan(0);
+    // Views that arrive together share one engine run; later ones are the same view, from memory.
+    const [a, b] = await Promise.all([
+      sharePageView((await findShare(token))!, 'uvi'),
+      sharePageView((await findShare(token))!, 'uvi'),
+    ]);
+    expect(a).toBe(first);
+    expect(b).toBe(first);
+    expect(tasks() - before).toBe(1);
+    // Another field is another view.
+    expect((await sharePageView((await findShare(token))!, 'tempC')).result!.scale.label).not.toBe(
+      'UV Index',
+    );
+    expect(tasks() - before).toBe(2);
+
+    // The sheet edited: the species check is worked out again from the new figures.
+    await species.update({ baskingSurfaceMinC: 60, baskingSurfaceMaxC: 70 });
+    const edited = await sharePageView((await findShare(token))!, 'uvi');
+    expect(edited).not.toBe(first);
+    expect(edited.result!.assessment).not.toEqual(first.result!.assessment);
+
+    // The design saved with one lamp fewer: a new view with the lamps as saved.
+    const design = benchDesign(1, 1);
+    const lampIndex = design.objects.findIndex((o) => o.type === 'lamp');
+    design.objects.splice(lampIndex, 1);
+    await Variant.update({ designJson: JSON.stringify(design) }, { where: { id: variantId } });
+    const saved = await sharePageView((await findShare(token))!, 'uvi');
+    expect(saved.lamps).toHaveLength(first.lamps.length - 1);
+    expect(tasks() - before).toBe(4);
   });
 });

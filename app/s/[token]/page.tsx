@@ -6,14 +6,12 @@ import { FindingList } from '@/components/cautions/FindingList';
 import { FieldImage, FieldLegend } from '@/components/designs/FieldSvg';
 import { SharedLampList } from '@/components/designs/SharedLampList';
 import { BrandMark } from '@/components/shell/BrandMark';
-import { lampRows } from '@/lib/reports/lamps';
-import { runEngineTask } from '@/lib/engine-pool';
 import { NO_SPECIES_SAFETY_LEAD } from '@/shared/cautions';
 import { sizeBoth, tempBoth } from '@/shared/units';
 import { sharePicturePath } from '@/lib/variants/share-picture';
-import { resolveShareToken } from '@/lib/variants/queries';
-import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
-import { designWorkProblem, type FieldName } from '@/simulation';
+import { findShare } from '@/lib/variants/queries';
+import { sharePageView } from '@/lib/variants/share-page';
+import type { FieldName } from '@/simulation';
 
 export const dynamic = 'force-dynamic';
 
@@ -43,14 +41,18 @@ export default async function SharedVariantPage({
   searchParams: Promise<Record<string, string | string[] | undefined>>;
 }) {
   const { token } = await params;
-  const shared = await resolveShareToken(token);
+  // Checked on every view (one query), so a revoked or expired link stops at once.
+  const shared = await findShare(token);
   if (!shared) notFound();
   const requested = (await searchParams).field;
   const field = FIELDS.find((f) => f.id === requested)?.id ?? 'uvi';
+  // Worked out once per design, field and species sheet, then held in memory (lib/variants/share-page):
+  // a link is opened by many people. The field picture itself is its own cacheable file (./picture/…):
+  // the page carries only its address.
+  const { design, lamps, problem, result } = await sharePageView(shared, field);
+  const species = shared.species;
 
-  // Saved before designs were bounded: say so rather than spend the server on it.
-  const problem = designWorkProblem(shared.design);
-  if (problem) {
+  if (problem || !result) {
     return (
       <main id="main" className="mx-auto w-full max-w-5xl flex-1 space-y-4 px-4 py-8 sm:px-6">
         <BrandMark />
@@ -62,16 +64,7 @@ export default async function SharedVariantPage({
       </main>
     );
   }
-  const species = attachedSpecies(await speciesOptions(shared.organisationId), shared.speciesName);
-  // On an engine thread, never on the server's event loop; each thread keeps the designs it simulated in
-  // memory (lib/variants/computed), since a link is opened by many people. The field picture itself is
-  // its own cacheable file (./picture/…): the page carries only its address.
-  const {
-    scale,
-    assessment,
-    figures: f,
-  } = await runEngineTask('sharedView', { design: shared.design, field, sheet: species?.sheet ?? null });
-  const lamps = lampRows(shared.design);
+  const { scale, assessment, figures: f } = result;
   const figure = (v: number, digits: number) => Number(v.toFixed(digits)).toString();
 
   return (
@@ -89,8 +82,8 @@ export default async function SharedVariantPage({
           {shared.organisationName ? ` · shared by ${shared.organisationName}` : ''}
         </p>
         <p className="mt-1 text-caption text-basalt-500">
-          Enclosure {sizeBoth(shared.design.enclosure)} (width × height × depth), seen from the front, lamps
-          as installed.
+          Enclosure {sizeBoth(design.enclosure)} (width × height × depth), seen from the front, lamps as
+          installed.
           {shared.expiresAt ? (
             <>
               {' '}
@@ -135,7 +128,7 @@ export default async function SharedVariantPage({
           </p>
         )}
         <FieldImage
-          design={shared.design}
+          design={design}
           src={sharePicturePath(token, shared.variant.version, field)}
           alt={`${scale.label} of ${shared.variant.name}`}
         />
@@ -176,7 +169,7 @@ export default async function SharedVariantPage({
       </div>
 
       <SharedLampList lamps={lamps} />
-      <CautionList design={shared.design} assessment={assessment} />
+      <CautionList design={design} assessment={assessment} />
     </main>
   );
 }

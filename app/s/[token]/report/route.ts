@@ -5,7 +5,6 @@ import { runEngineTask } from '@/lib/engine-pool';
 import { download, fileBase } from '@/lib/reports/build';
 import { countExport } from '@/lib/reports/limits';
 import { resolveShareToken } from '@/lib/variants/queries';
-import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
 import { logger } from '@/lib/log';
 import { assertComputable } from '@/lib/variants/stored-design';
 
@@ -41,14 +40,10 @@ export async function GET(req: Request, ctx: { params: Promise<{ token: string }
     };
     const base = fileBase(shared.variant.name);
     assertComputable(shared.design);
-    // Per link: the page is public, so the holder of a link is the only "who" there is. The report's
-    // species is read meanwhile (each is a database round trip; one need not wait for the other).
-    const [, species] = await Promise.all([
-      countExport('share', shared.variant.id),
-      q.format === 'pdf'
-        ? speciesOptions(shared.organisationId).then((o) => attachedSpecies(o, shared.speciesName))
-        : null,
-    ]);
+    // Per link: the page is public, so the holder of a link is the only "who" there is. The species
+    // came with the link.
+    await countExport('share', shared.variant.id);
+    const species = shared.species;
     if (q.format === 'png') {
       const png = await runEngineTask(
         'fieldPng',

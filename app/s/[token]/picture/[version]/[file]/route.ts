@@ -13,9 +13,10 @@ import {
   pictureCache,
   pictureKey,
 } from '@/lib/variants/share-picture';
-import { resolveShareToken } from '@/lib/variants/queries';
+import { findShare } from '@/lib/variants/queries';
+import { readStoredDesign } from '@/lib/variants/stored-design';
 import { hotSpotMarker } from '@/shared/designs/figures';
-import { designWorkProblem } from '@/simulation';
+import { designWorkProblem, physicsOf } from '@/simulation';
 
 export const dynamic = 'force-dynamic';
 
@@ -38,24 +39,26 @@ export async function GET(
   const { token, version, file } = await ctx.params;
   const wanted = parsePictureParams(version, file);
   if (!wanted) return gone();
-  const shared = await resolveShareToken(token);
-  if (!shared || shared.variant.version !== wanted.version || designWorkProblem(shared.design)) {
-    return gone();
-  }
+  const shared = await findShare(token);
+  if (!shared || shared.variant.version !== wanted.version) return gone();
   try {
-    const key = pictureKey(shared.design, wanted.field);
+    // A picture is drawn only from what the key names: a held one needs no parsing of the design.
+    const key = pictureKey(shared.designJson, wanted.field);
     let picture = pictureCache().get(key);
     if (!picture) {
+      // Without its photo backdrop: a visitor with the link may not read the enclosure's uploads.
+      const design = physicsOf(readStoredDesign(shared.designJson));
+      if (designWorkProblem(design)) return gone();
       const { scale, bands, figures } = await runEngineTask(
         'fieldPicture',
-        { design: shared.design, field: wanted.field },
+        { design, field: wanted.field },
         { signal: req.signal },
       );
       // The name of the variant is the page's alt text, not part of the drawing: a rename keeps the
       // version, and the picture must not carry the old name for ever.
       const svg = staticSvg(
         createElement(FieldSvg, {
-          design: shared.design,
+          design,
           bands,
           scale,
           title: scale.label,
