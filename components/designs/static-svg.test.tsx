@@ -7,7 +7,11 @@ import { benchDesign } from '@/simulation/testing/fixtures';
 import type { Design } from '@/simulation';
 import { FieldSvg } from './FieldSvg';
 import { DesignShapes, SKETCH_LOOK } from './DesignShapes';
-import { staticSvg } from './static-svg';
+import { CautionList } from '@/components/cautions/CautionList';
+import { FindingList } from '@/components/cautions/FindingList';
+import { assessFor } from '@/shared/designs/assessment';
+import { NO_SPECIES_SAFETY_LEAD } from '@/shared/cautions';
+import { staticHtml, staticSvg } from './static-svg';
 
 describe('staticSvg', () => {
   it('writes the share pictures exactly as React renders them inline', () => {
@@ -55,5 +59,63 @@ describe('staticSvg', () => {
 
   it('refuses what a static picture cannot hold', () => {
     expect(() => staticSvg(<rect onClick={() => undefined} />)).toThrow(/event handler/);
+  });
+});
+
+describe('staticHtml', () => {
+  // A made-up sheet for the test (figures invented, not husbandry advice), and the bench design.
+  const sheet = {
+    name: 'Example <lizard> & "co"',
+    uvZone: 3 as const,
+    baskingSurfaceC: [35, 40] as [number, number],
+    coolEndC: [22, 26] as [number, number],
+    nightMinC: 16,
+  };
+  const design = benchDesign(1, 1);
+
+  it('writes the share page’s species check and cautions exactly as React renders them', () => {
+    for (const species of [sheet, null]) {
+      const assessment = assessFor(design, species);
+      expect(assessment.findings.length).toBeGreaterThan(2);
+      for (const element of [
+        species ? (
+          <FindingList key="species" assessment={assessment} speciesName={species.name} />
+        ) : (
+          <FindingList
+            key="general"
+            assessment={assessment}
+            title="Safety checks"
+            lead={NO_SPECIES_SAFETY_LEAD}
+          />
+        ),
+        <CautionList key="cautions" design={design} assessment={assessment} />,
+      ]) {
+        const ours = staticHtml(element);
+        expect(ours).toBe(renderToStaticMarkup(element));
+        expect(ours).toMatch(/^<section aria-label="[^"]+" class="space-y-\d"><.+<li class=/);
+      }
+    }
+    expect(
+      staticHtml(<FindingList assessment={assessFor(design, sheet)} speciesName={sheet.name} />),
+    ).toContain('Example &lt;lizard&gt; &amp; &quot;co&quot;');
+  });
+
+  it('writes void elements, booleans and aria attributes as React does', () => {
+    const element = (
+      <p aria-hidden={false} data-open={false} hidden={false}>
+        a<br />
+        <details open>
+          <summary>b</summary>
+        </details>
+      </p>
+    );
+    expect(staticHtml(element)).toBe(renderToStaticMarkup(element));
+  });
+
+  it('refuses what React would write differently', () => {
+    expect(() => staticHtml(<td colSpan={2} />)).toThrow(/not written as React would/);
+    expect(() => staticHtml(<p style={{ fontSize: 12 }} />)).toThrow(/not written as React would/);
+    expect(() => staticHtml(<div dangerouslySetInnerHTML={{ __html: '<b>' }} />)).toThrow(/not written/);
+    expect(() => staticHtml(<button onClick={() => undefined} />)).toThrow(/event handler/);
   });
 });

@@ -4,13 +4,14 @@ import { notFound } from 'next/navigation';
 import { CautionList } from '@/components/cautions/CautionList';
 import { FindingList } from '@/components/cautions/FindingList';
 import { FieldImage, FieldLegend } from '@/components/designs/FieldSvg';
+import { staticHtml } from '@/components/designs/static-svg';
 import { SharedLampList } from '@/components/designs/SharedLampList';
 import { BrandMark } from '@/components/shell/BrandMark';
 import { NO_SPECIES_SAFETY_LEAD } from '@/shared/cautions';
 import { sizeBoth, tempBoth } from '@/shared/units';
 import { sharePicturePath } from '@/lib/variants/share-picture';
 import { findShare } from '@/lib/variants/queries';
-import { sharePageView } from '@/lib/variants/share-page';
+import { sharePageView, type SharePageView } from '@/lib/variants/share-page';
 import type { FieldName } from '@/simulation';
 
 export const dynamic = 'force-dynamic';
@@ -21,6 +22,34 @@ export const metadata: Metadata = {
   robots: { index: false, follow: false },
   referrer: 'no-referrer',
 };
+
+/**
+ * The species check and the cautions: most of the page, and the same for every visitor of a view. Their
+ * markup is written once per view (escaped as React escapes it: `staticHtml` writes exactly what
+ * React's renderer would) and sent as it is, instead of React rendering and serialising some hundred
+ * elements again for each visitor. Plain markup with nothing to hydrate. Keyed by the view held in
+ * memory (lib/variants/share-page), which holds the sheet the species name comes from.
+ */
+const markup = new WeakMap<SharePageView, { findings: string; cautions: string }>();
+function heldMarkup(view: SharePageView, speciesName: string | null) {
+  let held = markup.get(view);
+  if (!held) {
+    const { design, result } = view;
+    const assessment = result!.assessment;
+    held = {
+      findings: staticHtml(
+        speciesName ? (
+          <FindingList assessment={assessment} speciesName={speciesName} />
+        ) : (
+          <FindingList assessment={assessment} title="Safety checks" lead={NO_SPECIES_SAFETY_LEAD} />
+        ),
+      ),
+      cautions: staticHtml(<CautionList design={design} assessment={assessment} />),
+    };
+    markup.set(view, held);
+  }
+  return held;
+}
 
 const FIELDS: { id: FieldName; label: string }[] = [
   { id: 'uvi', label: 'UV Index' },
@@ -49,7 +78,8 @@ export default async function SharedVariantPage({
   // Worked out once per design, field and species sheet, then held in memory (lib/variants/share-page):
   // a link is opened by many people. The field picture itself is its own cacheable file (./picture/…):
   // the page carries only its address.
-  const { design, lamps, problem, result } = await sharePageView(shared, field);
+  const view = await sharePageView(shared, field);
+  const { design, lamps, problem, result } = view;
   const species = shared.species;
 
   if (problem || !result) {
@@ -64,7 +94,8 @@ export default async function SharedVariantPage({
       </main>
     );
   }
-  const { scale, assessment, figures: f } = result;
+  const { scale, figures: f } = result;
+  const held = heldMarkup(view, species?.name ?? null);
   const figure = (v: number, digits: number) => Number(v.toFixed(digits)).toString();
 
   return (
@@ -160,16 +191,14 @@ export default async function SharedVariantPage({
         </a>
       </section>
 
-      <div className="rounded-lg border border-basalt-200 bg-white p-4" data-testid="share-findings">
-        {species ? (
-          <FindingList assessment={assessment} speciesName={species.name} />
-        ) : (
-          <FindingList assessment={assessment} title="Safety checks" lead={NO_SPECIES_SAFETY_LEAD} />
-        )}
-      </div>
+      <div
+        className="rounded-lg border border-basalt-200 bg-white p-4"
+        data-testid="share-findings"
+        dangerouslySetInnerHTML={{ __html: held.findings }}
+      />
 
       <SharedLampList lamps={lamps} />
-      <CautionList design={design} assessment={assessment} />
+      <div dangerouslySetInnerHTML={{ __html: held.cautions }} />
     </main>
   );
 }
