@@ -9,8 +9,8 @@ import path from 'node:path';
 import AxeBuilder from '@axe-core/playwright';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_SHOP, demoSignIn } from '@/lib/demo/scenario';
-import { launchBrowser, newContext, screenshot, signIn, watchPageErrors } from './harness';
+import { DEMO_SHOP } from '@/lib/demo/scenario';
+import { launchBrowser, newContext, screenshot, signInAsDemo, watchPageErrors } from './harness';
 import { pageRoutes } from './page-routes';
 import { JOURNEY_MS, createDesign, createShare, enclosureIdByName, studioReady } from './journey-helpers';
 
@@ -203,8 +203,7 @@ describe(`accessibility (axe) and page errors in ${VIEWER_ZONE}: no serious or c
     staffErrors = watchPageErrors(staffPage);
     visitorErrors = watchPageErrors(visitorPage);
     for (const p of [staffPage, visitorPage]) p.setDefaultTimeout(60_000);
-    const staff = demoSignIn('staff');
-    await signIn(staffPage, staff.email, staff.password);
+    await signInAsDemo(staffPage, 'staff');
     const found = await demoIds(staffPage);
     ids = { ...found, sharePath: await createShare(staffPage, found.variantA) };
   }, JOURNEY_MS);
@@ -233,8 +232,7 @@ describe(`accessibility (axe) and page errors in ${VIEWER_ZONE}: no serious or c
       ownerPage = await (await newContext(browser, { timezoneId: VIEWER_ZONE })).newPage();
       ownerPage.setDefaultTimeout(60_000);
       ownerErrors = watchPageErrors(ownerPage);
-      const owner = demoSignIn('owner');
-      await signIn(ownerPage, owner.email, owner.password);
+      await signInAsDemo(ownerPage, 'owner');
     }
     const errorsOf = t.owner ? ownerErrors : t.signedIn ? staffErrors : visitorErrors;
     const page = t.owner ? ownerPage! : t.signedIn ? staffPage : visitorPage;

@@ -1,9 +1,9 @@
-import type { BrowserContext } from 'playwright-core';
+import type { BrowserContext, Locator, Page } from 'playwright-core';
 import { afterEach, describe, expect, it } from 'vitest';
-import { DEMO_SHOP, demoSignIn } from '@/lib/demo/scenario';
+import { DEMO_SHOP } from '@/lib/demo/scenario';
 import { Op } from 'sequelize';
 import { CounterLamp, Customer, Enclosure, Lamp, Membership, Organisation, Reading, User } from '@/models';
-import { newContext, screenshot, signIn, withBrowser } from './harness';
+import { newContext, screenshot, signInAsDemo, withBrowser } from './harness';
 import { JOURNEY_MS, eventually } from './journey-helpers';
 
 // A customer who became a keeper of the shop, on a phone (390 × 844, touch): staff link the customer to
@@ -22,6 +22,20 @@ afterEach(async () => {
   context = undefined;
   for (const undo of cleanup.splice(0).reverse()) await undo();
 });
+
+/**
+ * Fills the counter form for the keeper's own Top tube (whose lamp type the form does not ask for again)
+ * with a reading of `value`, and adds it to the keeper's lamp log.
+ */
+async function addReadingToTopTube(page: Page, form: Locator, value: string) {
+  expect(await form.getByLabel('Lamp type').count()).toBe(0);
+  await form.getByLabel('Between lamp and meter').selectOption('nothing');
+  await form.getByLabel('Lamp warmed up').selectOption('yes');
+  await form.getByLabel('Meter value').fill(value);
+  await page.getByRole('region', { name: 'Verdict' }).locator('[data-verdict]').waitFor();
+  await form.getByRole('button', { name: 'Add this reading to the lamp log' }).tap();
+  await page.getByText('The reading was added to Top tube in the lamp log.').waitFor();
+}
 
 describe('a customer linked to their keeper account, on a phone', () => {
   it(
@@ -45,10 +59,7 @@ describe('a customer linked to their keeper account, on a phone', () => {
       cleanup.push(() => Reading.destroy({ where: { lampId: lamp.id, createdAt: { [Op.gte]: started } } }));
 
       context = await newContext(session.browser(), { viewport: PHONE, hasTouch: true });
-      const page = await context.newPage();
-      page.setDefaultTimeout(60_000);
-      const staff = demoSignIn('staff');
-      await signIn(page, staff.email, staff.password);
+      const page = await signInAsDemo(await context.newPage(), 'staff', { timeoutMs: 60_000 });
 
       // The customer is added through the form, as the shop would.
       await page.goto('/customers/new');
@@ -81,13 +92,7 @@ describe('a customer linked to their keeper account, on a phone', () => {
       await expect
         .poll(() => form.innerText())
         .toMatch(/Testing Top tube in Tall mesh cage of Dev at the counter/);
-      expect(await form.getByLabel('Lamp type').count()).toBe(0);
-      await form.getByLabel('Between lamp and meter').selectOption('nothing');
-      await form.getByLabel('Lamp warmed up').selectOption('yes');
-      await form.getByLabel('Meter value').fill('98');
-      await page.getByRole('region', { name: 'Verdict' }).locator('[data-verdict]').waitFor();
-      await form.getByRole('button', { name: 'Add this reading to the lamp log' }).tap();
-      await page.getByText('The reading was added to Top tube in the lamp log.').waitFor();
+      await addReadingToTopTube(page, form, '98');
       await screenshot(page, 'counter-keeper-saved');
       expect(await Reading.count({ where: { lampId: lamp.id } })).toBe(readingsBefore + 1);
       expect(await CounterLamp.count({ where: { customerId: customer.id } })).toBe(0);
@@ -100,13 +105,7 @@ describe('a customer linked to their keeper account, on a phone', () => {
       await counter.getByLabel('Search customers').fill('Dev at the counter');
       await counter.getByRole('button', { name: /Dev at the counter \(example\)/ }).tap();
       await counter.getByRole('radio', { name: 'Top tube · Tall mesh cage' }).tap();
-      expect(await counter.getByLabel('Lamp type').count()).toBe(0);
-      await counter.getByLabel('Between lamp and meter').selectOption('nothing');
-      await counter.getByLabel('Lamp warmed up').selectOption('yes');
-      await counter.getByLabel('Meter value').fill('97');
-      await page.getByRole('region', { name: 'Verdict' }).locator('[data-verdict]').waitFor();
-      await counter.getByRole('button', { name: 'Add this reading to the lamp log' }).tap();
-      await page.getByText('The reading was added to Top tube in the lamp log.').waitFor();
+      await addReadingToTopTube(page, counter, '97');
       expect(await Reading.count({ where: { lampId: lamp.id } })).toBe(readingsBefore + 2);
       expect(await CounterLamp.count({ where: { customerId: customer.id } })).toBe(0);
 

@@ -1,9 +1,8 @@
-import type { BrowserContext, Locator, Page } from 'playwright-core';
+import type { BrowserContext, Locator } from 'playwright-core';
 import { afterEach, describe, expect, it } from 'vitest';
-import { demoSignIn } from '@/lib/demo/scenario';
 import { CounterReading } from '@/models';
-import { newContext, screenshot, signIn, withBrowser } from './harness';
-import { JOURNEY_MS, eventually } from './journey-helpers';
+import { newContext, screenshot, signInAsDemo, withBrowser } from './harness';
+import { JOURNEY_MS, eventually, firstUvTube } from './journey-helpers';
 
 // The counter on a phone (390 × 844, touch), one-handed: a walk-in's lamp tested to a verdict in under ten
 // taps, saved for a new customer who agrees to e-mails, the test slip sent to them (read in the owner's
@@ -40,24 +39,11 @@ function tapCounter() {
   };
 }
 
-async function firstUvTube(page: Page): Promise<string> {
-  const value = await page
-    .locator('select[name=lampTypeId] option:not([disabled])')
-    .filter({ hasText: 'T5' })
-    .filter({ hasNotText: '(no UV)' })
-    .first()
-    .getAttribute('value');
-  return value!;
-}
-
 /** The text of the slip sent to `email`, as the organisation's owner sees it in the mail viewer. */
 async function slipInMailViewer(email: string): Promise<string> {
   const ownerContext = await newContext(session.browser());
   try {
-    const ownerPage = await ownerContext.newPage();
-    ownerPage.setDefaultTimeout(60_000);
-    const owner = demoSignIn('owner');
-    await signIn(ownerPage, owner.email, owner.password);
+    const ownerPage = await signInAsDemo(await ownerContext.newPage(), 'owner', { timeoutMs: 60_000 });
     await ownerPage.goto('/mail');
     const message = ownerPage.locator('main li').filter({ hasText: email });
     await expect
@@ -80,10 +66,7 @@ describe('the counter on a phone', () => {
     { timeout: JOURNEY_MS },
     async () => {
       context = await newContext(session.browser(), { viewport: PHONE, hasTouch: true });
-      const page = await context.newPage();
-      page.setDefaultTimeout(60_000);
-      const staff = demoSignIn('staff');
-      await signIn(page, staff.email, staff.password);
+      const page = await signInAsDemo(await context.newPage(), 'staff', { timeoutMs: 60_000 });
       await page.goto('/counter');
       const form = page.getByRole('form', { name: 'Counter test' });
       await form.getByLabel('Lamp type').waitFor();

@@ -5,8 +5,7 @@
 // the pages send fails the test. A screenshot of every page on the way.
 import { describe, expect, it } from 'vitest';
 import { CURRENT_VARIANT_NAME, DESERT_DESIGN_NAME, IMPROVED_VARIANT_NAME } from '@/lib/demo/designs';
-import { demoSignIn } from '@/lib/demo/scenario';
-import { newContext, screenshot, signIn, withBrowser } from './harness';
+import { newContext, screenshot, signInAsDemo, withBrowser } from './harness';
 import { JOURNEY_MS, eventually, studioReady } from './journey-helpers';
 
 const session = withBrowser();
@@ -19,8 +18,7 @@ describe('the demo tells its story on first sight', () => {
       const page = session.page();
       page.setDefaultTimeout(60_000);
       const writes: string[] = [];
-      const staff = demoSignIn('staff');
-      await signIn(page, staff.email, staff.password);
+      await signInAsDemo(page, 'staff');
       // From here on the visitor only looks: no page may send a change.
       page.on('request', (r) => {
         const url = new URL(r.url());
@@ -94,9 +92,7 @@ describe('the demo tells its story on first sight', () => {
       // 6. The reminder the seed sent about the worn tube waits in the mail viewer, which only the
       // organisation's owner may open.
       const ownerPage = await (await newContext(session.browser())).newPage();
-      ownerPage.setDefaultTimeout(60_000);
-      const owner = demoSignIn('owner');
-      await signIn(ownerPage, owner.email, owner.password);
+      await signInAsDemo(ownerPage, 'owner', { timeoutMs: 60_000 });
       await ownerPage.goto('/mail');
       const mail = ownerPage.locator('main');
       await expect.poll(() => mail.innerText(), eventually).toMatch(/Baskwell lamp log:/);

@@ -2,17 +2,14 @@
 // beside its field before anything is sent, a unit switch keeps what was typed, and a saved entry opens
 // with what was entered; editing changes it.
 import { describe, expect, it } from 'vitest';
-import { demoSignIn } from '@/lib/demo/scenario';
-import { signIn, withBrowser } from './harness';
+import { signInAsDemo, withBrowser } from './harness';
 
 const session = withBrowser();
 const marker = Date.now().toString(36);
 
 describe('entity forms', () => {
   it('adds and edits a lamp type, refusing a missing name beside the field', async () => {
-    const page = session.page();
-    const staff = demoSignIn('staff');
-    await signIn(page, staff.email, staff.password);
+    const page = await signInAsDemo(session.page(), 'staff');
     await page.goto('/lamp-catalogue/new');
     await page.getByLabel('Technology').selectOption('t5');
     await page.getByRole('button', { name: 'Fill in this technology’s defaults' }).click();
@@ -51,9 +48,7 @@ describe('entity forms', () => {
   });
 
   it('adds a species sheet, refusing a cool side warmer than the warm side beside the field', async () => {
-    const page = session.page();
-    const staff = demoSignIn('staff');
-    await signIn(page, staff.email, staff.password);
+    const page = await signInAsDemo(session.page(), 'staff');
     await page.goto('/species/new');
     await page.getByLabel('Common name').fill(`Test skink ${marker}`);
     await page.getByLabel('Scientific name').fill('Testus formae');

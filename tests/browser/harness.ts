@@ -4,6 +4,7 @@ import { mkdirSync } from 'node:fs';
 import path from 'node:path';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { afterAll, afterEach, beforeAll, beforeEach, expect } from 'vitest';
+import { demoSignIn } from '@/lib/demo/scenario';
 
 // Not BASE_URL: vitest sets that one to Vite's base path ('/').
 export const BASE_URL = process.env.E2E_BASE_URL ?? 'http://localhost:3100';
@@ -97,6 +98,22 @@ export async function signIn(page: Page, email: string, password: string): Promi
       cause: e,
     });
   }
+}
+
+/**
+ * Signs `page` in through the sign-in page as the demo scenario's person of `role` in the shop, first
+ * giving the page's waits `timeoutMs` when a test needs them longer than playwright's default.
+ * Returns the page, so a test can start with `const page = await signInAsDemo(session.page(), 'staff')`.
+ */
+export async function signInAsDemo(
+  page: Page,
+  role: Parameters<typeof demoSignIn>[0],
+  { timeoutMs }: { timeoutMs?: number } = {},
+): Promise<Page> {
+  if (timeoutMs !== undefined) page.setDefaultTimeout(timeoutMs);
+  const person = demoSignIn(role);
+  await signIn(page, person.email, person.password);
+  return page;
 }
 
 export type BrowserSession = {

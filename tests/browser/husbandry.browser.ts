@@ -5,8 +5,7 @@
 // be dimmed. Screenshots at desktop (1280×800) and phone (390×844) size.
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { demoSignIn } from '@/lib/demo/scenario';
-import { screenshot, signIn, withBrowser } from './harness';
+import { screenshot, signInAsDemo, withBrowser } from './harness';
 import { api, eventually, JOURNEY_MS, studioReady } from './journey-helpers';
 
 const session = withBrowser();
@@ -103,9 +102,7 @@ const VAPOUR = design(120, 60, 24, [
 ]);
 
 async function signedInStaff(page: Page) {
-  page.setDefaultTimeout(60_000);
-  const staff = demoSignIn('staff');
-  await signIn(page, staff.email, staff.password);
+  await signInAsDemo(page, 'staff', { timeoutMs: 60_000 });
   const s = await api(page, 'GET', '/api/auth/session');
   const user = s.body.user as { memberships: { organisationId: number }[] };
   return user.memberships[0]!.organisationId;

@@ -1,9 +1,8 @@
 // Shared steps of the end-to-end journeys (journey-*.browser.ts): waits that fit a busy machine, the
 // studio's readiness, a variant read back through the API, and share links made by a staff member.
-import type { Browser, Page } from 'playwright-core';
+import type { Browser, Locator, Page } from 'playwright-core';
 import { expect } from 'vitest';
-import { demoSignIn } from '@/lib/demo/scenario';
-import { newContext, signIn } from './harness';
+import { newContext, signInAsDemo } from './harness';
 
 /** A whole journey against one app on a 2-core machine: generous, never a speed check. */
 export const JOURNEY_MS = 480_000;
@@ -67,11 +66,43 @@ export function localDateTime(daysAgo: number): string {
 /** Signs in as the demo staff member in a context of its own; the caller closes it. */
 export async function staffPage(browser: Browser): Promise<Page> {
   const context = await newContext(browser);
-  const page = await context.newPage();
-  page.setDefaultTimeout(60_000);
-  const staff = demoSignIn('staff');
-  await signIn(page, staff.email, staff.password);
+  const page = await signInAsDemo(await context.newPage(), 'staff', { timeoutMs: 60_000 });
   return page;
+}
+
+/**
+ * Opens a demo enclosure's page from the staff member's enclosure list. The list is paged and other
+ * tests add enclosures, so it is searched for by name first.
+ */
+export async function openEnclosureByName(page: Page, name: string): Promise<void> {
+  await page.goto(`/enclosures?q=${encodeURIComponent(name)}`);
+  await page.getByRole('link', { name }).click();
+  await page.getByRole('heading', { name: 'Designs', exact: true }).waitFor();
+}
+
+/**
+ * Makes a design with the enclosure page's form and returns its card once the first variant, shown at
+ * once (optimistic), has settled with its real id.
+ */
+export async function newDesignOnPage(page: Page, name: string): Promise<Locator> {
+  await page.getByLabel('New design name').fill(name);
+  await page.getByRole('button', { name: 'New design' }).click();
+  const card = page.getByTestId('design-card').filter({ hasText: name });
+  await expect
+    .poll(() => card.locator('[data-testid=variant-row][aria-busy=false]').count(), eventually)
+    .toBe(1);
+  return card;
+}
+
+/** The value of the first T5 tube that gives UV in the lamp-type list of `within` (a page or a form). */
+export async function firstUvTube(within: Page | Locator): Promise<string> {
+  const value = await within
+    .locator('select[name=lampTypeId] option:not([disabled])')
+    .filter({ hasText: 'T5' })
+    .filter({ hasNotText: '(no UV)' })
+    .first()
+    .getAttribute('value');
+  return value!;
 }
 
 /**

@@ -5,9 +5,9 @@
 import { readFileSync } from 'node:fs';
 import { PDFDocument } from 'pdf-lib';
 import { describe, expect, it } from 'vitest';
-import { DEMO_SHOP, demoSignIn } from '@/lib/demo/scenario';
+import { DEMO_SHOP } from '@/lib/demo/scenario';
 import { pdfDrawnText } from '../api/variants.helpers';
-import { screenshot, signIn, withBrowser } from './harness';
+import { screenshot, signInAsDemo, withBrowser } from './harness';
 import {
   JOURNEY_MS,
   eventually,
@@ -44,14 +44,10 @@ describe('staff journey', () => {
   it(
     'plans an enclosure for a keeper, refines, varies, compares, shares, exports and logs a lamp',
     async () => {
-      const page = session.page();
-      page.setDefaultTimeout(60_000);
-      const staff = demoSignIn('staff');
+      // 1. Sign in: the enclosure list.
+      const page = await signInAsDemo(session.page(), 'staff', { timeoutMs: 60_000 });
       const suffix = Date.now().toString(36);
       const enclosureName = `Journey vivarium ${suffix}`;
-
-      // 1. Sign in: the enclosure list.
-      await signIn(page, staff.email, staff.password);
       await page.waitForURL((u) => u.pathname === '/enclosures');
       await page.getByRole('table', { name: 'Enclosures' }).waitFor();
       await shot(page, '01-enclosures');

@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { demoSignIn } from '@/lib/demo/scenario';
-import { screenshot, signIn, withBrowser } from './harness';
-import { localDateTime } from './journey-helpers';
+import { screenshot, signInAsDemo, withBrowser } from './harness';
+import { firstUvTube, localDateTime } from './journey-helpers';
 
 // The lid counted once, through the forms a keeper uses: two lamps of one type behind the same mesh lid,
 // one measured bare and one measured through the lid (passing 60 %, so every value is 0.6 of the bare
@@ -16,10 +15,7 @@ const READINGS = [
 
 describe('lamp log: readings through the lid', () => {
   it('gives the same basking estimate for a lamp measured through its lid as measured bare', async () => {
-    const page = session.page();
-    page.setDefaultTimeout(90_000);
-    const staff = demoSignIn('staff');
-    await signIn(page, staff.email, staff.password);
+    const page = await signInAsDemo(session.page(), 'staff', { timeoutMs: 90_000 });
     await page.goto('/lamp-log');
     await page.getByRole('link', { name: 'Desert vivarium' }).first().click();
     await page.waitForURL(/\/enclosures\/\d+\/lamps$/);
@@ -31,13 +27,7 @@ describe('lamp log: readings through the lid', () => {
       const addLamp = page.getByRole('form', { name: 'Add a lamp' });
       const name = how === 'lid' ? 'Lid check, through the lid' : 'Lid check, bare';
       await addLamp.getByLabel('Name').fill(name);
-      const typeValue = await addLamp
-        .locator('select[name=lampTypeId] option:not([disabled])')
-        .filter({ hasText: 'T5' })
-        .filter({ hasNotText: '(no UV)' })
-        .first()
-        .getAttribute('value');
-      await addLamp.getByLabel('Lamp type').selectOption(typeValue!);
+      await addLamp.getByLabel('Lamp type').selectOption(await firstUvTube(addLamp));
       await addLamp.getByLabel('First switched on').fill(localDateTime(120).slice(0, 10));
       await addLamp.getByLabel(/Lamp to basking spot/).fill('25');
       await addLamp.getByLabel('Between lamp and basking spot').selectOption('0.6');

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { DEMO_SHOP, demoSignIn } from '@/lib/demo/scenario';
-import { screenshot, signIn, withBrowser } from './harness';
+import { DEMO_SHOP } from '@/lib/demo/scenario';
+import { screenshot, signInAsDemo, withBrowser } from './harness';
 
 // The lamp log in Chromium on the demo scenario: the table, a lamp's chart with its fitted curve,
 // typing in a reading, a CSV with a bad row, and a backdrop photo served back through its own route.
@@ -12,9 +12,7 @@ const othersEnclosures = DEMO_SHOP.people
 async function asStaff() {
   const page = session.page();
   // Generous waits: the machine running the tests may be busy; nothing here is a speed check.
-  page.setDefaultTimeout(90_000);
-  const staff = demoSignIn('staff');
-  await signIn(page, staff.email, staff.password);
+  await signInAsDemo(page, 'staff', { timeoutMs: 90_000 });
   return page;
 }
 

@@ -3,17 +3,14 @@
 // The test holds the page's request back until it has seen the bar, then lets it through: nothing
 // depends on how fast the server answers.
 import { describe, expect, it } from 'vitest';
-import { demoSignIn } from '@/lib/demo/scenario';
-import { signIn, withBrowser } from './harness';
+import { signInAsDemo, withBrowser } from './harness';
 
 const session = withBrowser();
 const SHEET = /^\/species\/\d+$/;
 
 describe('navigation pending', () => {
   it('shows a bar while the page a link opens is loading, and removes it when the page is there', async () => {
-    const page = session.page();
-    const staff = demoSignIn('staff');
-    await signIn(page, staff.email, staff.password);
+    const page = await signInAsDemo(session.page(), 'staff');
     await page.goto('/species');
     // The list streams in after its skeleton: wait for a sheet's link rather than read the page at `load`.
     const href = await page

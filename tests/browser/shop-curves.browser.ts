@@ -1,8 +1,8 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { DEMO_SHOP, demoSignIn } from '@/lib/demo/scenario';
+import { DEMO_SHOP } from '@/lib/demo/scenario';
 import { LampType, Organisation } from '@/models';
-import { newContext, screenshot, signIn, withBrowser } from './harness';
+import { newContext, screenshot, signInAsDemo, withBrowser } from './harness';
 import { JOURNEY_MS, createDesign, enclosureIdByName } from './journey-helpers';
 import { eventually, keys, studioReady } from './studio-helpers';
 
@@ -48,10 +48,7 @@ async function lampFromCatalogue(page: Page, typeName: string, lamps: number) {
 
 async function staffPage(size: (typeof SIZES)[number]): Promise<Page> {
   const context = await newContext(session.browser(), { viewport: size.viewport, hasTouch: size.touch });
-  const page = await context.newPage();
-  page.setDefaultTimeout(60_000);
-  const staff = demoSignIn('staff');
-  await signIn(page, staff.email, staff.password);
+  const page = await signInAsDemo(await context.newPage(), 'staff', { timeoutMs: 60_000 });
   return page;
 }
 

@@ -5,8 +5,7 @@
 // kept across a reload, and shown as "photo not available" once it is deleted.
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { demoSignIn } from '@/lib/demo/scenario';
-import { screenshot, signIn, withBrowser } from './harness';
+import { screenshot, signInAsDemo, withBrowser } from './harness';
 import { api, demoKeeperEnclosure, readVariant } from './journey-helpers';
 import {
   LAYER,
@@ -54,10 +53,7 @@ const near = (a: number, b: number, tol: number) => Math.abs(a - b) <= tol;
 
 describe('studio photo backdrop', () => {
   it('chooses the enclosure’s photo, draws it under the design, stretches it by a corner and keeps it', async () => {
-    const page = session.page();
-    page.setDefaultTimeout(60_000);
-    const staff = demoSignIn('staff');
-    await signIn(page, staff.email, staff.password);
+    const page = await signInAsDemo(session.page(), 'staff', { timeoutMs: 60_000 });
     const { enclosureId, variantId } = await demoKeeperEnclosure(page, 'Traced');
 
     // No photo yet: the Fields tab says so and links to where photos are uploaded.

@@ -7,8 +7,7 @@ import { describe, expect, it } from 'vitest';
 import { COMMANDS } from '@/components/studio/commands/registry';
 import { exampleDesign } from '@/components/studio/examples/exampleDesign';
 import { displayShortcut } from '@/components/studio/commands/shortcuts';
-import { demoSignIn } from '@/lib/demo/scenario';
-import { screenshot, signIn, withBrowser } from './harness';
+import { screenshot, signInAsDemo, withBrowser } from './harness';
 import { enclosureIdByName, readVariant } from './journey-helpers';
 import {
   click,
@@ -173,10 +172,7 @@ describe('studio keyboard and help (no account)', () => {
 
 describe('studio on a stored variant (signed in)', () => {
   it('marks a calibrated lamp, and shows the conflict banner when someone else saved meanwhile', async () => {
-    const page = session.page();
-    page.setDefaultTimeout(60_000);
-    const staff = demoSignIn('staff');
-    await signIn(page, staff.email, staff.password);
+    const page = await signInAsDemo(session.page(), 'staff', { timeoutMs: 60_000 });
     const enclosureId = await enclosureIdByName(page, 'Desert vivarium');
 
     // A design whose tube was calibrated in the lamp log (the note the lamp log writes).

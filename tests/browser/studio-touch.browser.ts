@@ -6,8 +6,7 @@
 // sends them. Screenshots of every size land in test-results/screenshots/.
 import type { BrowserContext, CDPSession, Page } from 'playwright-core';
 import { afterEach, describe, expect, it } from 'vitest';
-import { demoSignIn } from '@/lib/demo/scenario';
-import { newContext, screenshot, signIn, watchPageErrors, withBrowser } from './harness';
+import { newContext, screenshot, signInAsDemo, watchPageErrors, withBrowser } from './harness';
 import { JOURNEY_MS, createShare } from './journey-helpers';
 import {
   LAYER,
@@ -239,8 +238,7 @@ describe('the counter pages on a phone (390 × 844)', () => {
     'the lamp page with its reading form, and a share page, fit the screen without sideways scrolling',
     async () => {
       const { page, errors } = await touchPage(PHONE);
-      const staff = demoSignIn('staff');
-      await signIn(page, staff.email, staff.password);
+      await signInAsDemo(page, 'staff');
 
       await page.goto('/lamp-log');
       await page.getByRole('link', { name: 'Basking tube' }).first().click();

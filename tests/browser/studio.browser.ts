@@ -5,8 +5,7 @@
 // demo design ("Try the studio" from the landing page), where the engine's round trip while dragging is
 // measured and printed (not asserted as a time).
 import { describe, expect, it } from 'vitest';
-import { demoSignIn } from '@/lib/demo/scenario';
-import { screenshot, signIn, withBrowser } from './harness';
+import { screenshot, signInAsDemo, withBrowser } from './harness';
 import {
   click,
   drag,
@@ -21,29 +20,19 @@ import {
   summary,
   waitSaved,
 } from './studio-helpers';
+import { newDesignOnPage, openEnclosureByName } from './journey-helpers';
 
 const session = withBrowser();
 
 describe('design studio, signed in (the whole journey)', () => {
   it('builds a set-up, moves the perch under the lamp, undoes, and finds it all after a reload', async () => {
-    const page = session.page();
-    page.setDefaultTimeout(60_000);
-    const staff = demoSignIn('staff');
-    await signIn(page, staff.email, staff.password);
+    const page = await signInAsDemo(session.page(), 'staff', { timeoutMs: 60_000 });
 
     // Create a design on a customer's enclosure from the demo scenario, and open it in the studio.
-    // Searched for: the list is paged, and other tests add enclosures.
-    await page.goto('/enclosures?q=Desert%20vivarium');
     // A 120 × 60 × 60 cm vivarium: the positions below are in its centimetres.
-    await page.getByRole('link', { name: 'Desert vivarium' }).click();
-    await page.getByRole('heading', { name: 'Designs', exact: true }).waitFor();
+    await openEnclosureByName(page, 'Desert vivarium');
     const designName = `Studio journey ${Date.now().toString(36)}`;
-    await page.getByLabel('New design name').fill(designName);
-    await page.getByRole('button', { name: 'New design' }).click();
-    const card = page.getByTestId('design-card').filter({ hasText: designName });
-    await expect
-      .poll(() => card.locator('[data-testid=variant-row][aria-busy=false]').count(), eventually)
-      .toBe(1);
+    const card = await newDesignOnPage(page, designName);
     await card.getByRole('link', { name: 'Open in studio' }).click();
     await page.waitForURL(/\/studio\/\d+$/);
     const variantId = Number(/\/studio\/(\d+)$/.exec(page.url())![1]);

@@ -5,9 +5,9 @@
 import { readFileSync } from 'node:fs';
 import { PDFDocument } from 'pdf-lib';
 import { describe, expect, it } from 'vitest';
-import { demoSignIn } from '@/lib/demo/scenario';
 import { pdfDrawnText } from '../api/variants.helpers';
-import { BASE_URL, newContext, screenshot, signIn, withBrowser } from './harness';
+import { BASE_URL, newContext, screenshot, signInAsDemo, withBrowser } from './harness';
+import { newDesignOnPage, openEnclosureByName } from './journey-helpers';
 
 const session = withBrowser();
 
@@ -40,28 +40,16 @@ describe('variants, comparison and share links', () => {
   it(
     'creates two variants, compares them, shares one and downloads its report without a session',
     async () => {
-      const page = session.page();
-      page.setDefaultTimeout(60_000);
-      const staff = demoSignIn('staff');
-      await signIn(page, staff.email, staff.password);
+      const page = await signInAsDemo(session.page(), 'staff', { timeoutMs: 60_000 });
 
       // A customer's enclosure from the demo scenario.
-      // Searched for: the list is paged, and other tests add enclosures.
-      await page.goto('/enclosures?q=Gecko%20tank');
-      await page.getByRole('link', { name: 'Gecko tank' }).click();
-      await page.getByRole('heading', { name: 'Designs', exact: true }).waitFor();
+      await openEnclosureByName(page, 'Gecko tank');
       const enclosurePath = new URL(page.url()).pathname;
 
       const suffix = Date.now().toString(36);
       const designName = `Night set-up ${suffix}`;
       const variantName = `Warm rock ${suffix}`;
-      await page.getByLabel('New design name').fill(designName);
-      await page.getByRole('button', { name: 'New design' }).click();
-      const card = page.getByTestId('design-card').filter({ hasText: designName });
-      // The first variant appears at once (optimistic) and settles with its real id.
-      await expect
-        .poll(() => card.locator('[data-testid=variant-row][aria-busy=false]').count(), eventually)
-        .toBe(1);
+      const card = await newDesignOnPage(page, designName);
 
       // Rename it, then duplicate it: two variants.
       await card.getByRole('button', { name: 'Rename variant Variant A' }).click();
