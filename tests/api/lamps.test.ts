@@ -283,19 +283,13 @@ describe('readings', () => {
     const w = await world();
     const lamp = await addLamp(w);
     await addReading(w, lamp.id, { takenAt: '2025-02-01T10:00:00Z', distance: 30, value: 40, unit: 'uvb' });
-    const r = await send(lampRoute.PATCH, 'PATCH /api/lamps/[id]', {
-      id: lamp.id,
-      as: w.keeper,
-      body: { retiredOn: '2025-06-01' },
-    });
+    const retire = (retiredOn: string) =>
+      send(lampRoute.PATCH, 'PATCH /api/lamps/[id]', { id: lamp.id, as: w.keeper, body: { retiredOn } });
+    const r = await retire('2025-06-01');
     expect(r.status).toBe(200);
     expect(r.body.lamp.status).toBe('retired');
     expect(r.body.readings).toHaveLength(1);
-    const before = await send(lampRoute.PATCH, 'PATCH /api/lamps/[id]', {
-      id: lamp.id,
-      as: w.keeper,
-      body: { retiredOn: '2024-06-01' },
-    });
+    const before = await retire('2024-06-01');
     expect(before.status).toBe(400);
     expect(before.body.error.field).toBe('retiredOn');
   });
