@@ -51,57 +51,46 @@ async function world() {
   const calmEnclosure = await createEnclosure(org, calmKeeper, { speciesName: 'Bearded dragon' });
   const t5 = (await LampType.findOne({ where: { organisationId: org.id, tech: 't5', uvbAt30: 42.5 } }))!;
   const today = todayIso();
-  // Worn out: measured far below the bearded dragon's 115 µW/cm² at the basking spot.
-  const worn = await Lamp.create({
-    enclosureId: enclosure.id,
-    lampTypeId: t5.id,
-    label: 'Old basking tube',
-    firstUsedOn: addDays(today, -400),
-    hoursPerDay: 12,
-    baskingDistanceCm: 30,
-    createdById: null,
-  });
-  for (const [d, v] of [
-    [-400, 160],
-    [-250, 100],
-    [-100, 60],
-  ] as const) {
-    await Reading.create({
-      lampId: worn.id,
-      takenAt: new Date(`${addDays(today, d)}T12:00:00Z`),
-      distanceCm: 30,
-      value: v,
+  /** A T5 tube of the scenario, switched on `ageDays` ago and run 12 hours a day. */
+  const tube = (
+    enclosureId: number,
+    label: string,
+    ageDays: number,
+    basking: { baskingDistanceCm?: number } = {},
+  ) =>
+    Lamp.create({
+      enclosureId,
+      lampTypeId: t5.id,
+      label,
+      firstUsedOn: addDays(today, -ageDays),
+      hoursPerDay: 12,
+      ...basking,
+      createdById: null,
+    });
+  /** A UVB reading of `value` µW/cm² at `distanceCm`, taken at noon `daysAgo` days ago. */
+  const reading = (lampId: number, daysAgo: number, distanceCm: number, value: number) =>
+    Reading.create({
+      lampId,
+      takenAt: new Date(`${addDays(today, -daysAgo)}T12:00:00Z`),
+      distanceCm,
+      value,
       unit: 'uvb',
       takenById: null,
     });
+  // Worn out: measured far below the bearded dragon's 115 µW/cm² at the basking spot.
+  const worn = await tube(enclosure.id, 'Old basking tube', 400, { baskingDistanceCm: 30 });
+  for (const [d, v] of [
+    [400, 160],
+    [250, 100],
+    [100, 60],
+  ] as const) {
+    await reading(worn.id, d, 30, v);
   }
   // New and never measured: due for a first test.
-  const fresh = await Lamp.create({
-    enclosureId: enclosure.id,
-    lampTypeId: t5.id,
-    label: 'New spot tube',
-    firstUsedOn: addDays(today, -3),
-    hoursPerDay: 12,
-    createdById: null,
-  });
+  const fresh = await tube(enclosure.id, 'New spot tube', 3);
   // Fine: measured last week, well above the need.
-  const fine = await Lamp.create({
-    enclosureId: calmEnclosure.id,
-    lampTypeId: t5.id,
-    label: 'Healthy tube',
-    firstUsedOn: addDays(today, -30),
-    hoursPerDay: 12,
-    baskingDistanceCm: 20,
-    createdById: null,
-  });
-  await Reading.create({
-    lampId: fine.id,
-    takenAt: new Date(`${addDays(today, -7)}T12:00:00Z`),
-    distanceCm: 20,
-    value: 220,
-    unit: 'uvb',
-    takenById: null,
-  });
+  const fine = await tube(calmEnclosure.id, 'Healthy tube', 30, { baskingDistanceCm: 20 });
+  await reading(fine.id, 7, 20, 220);
   return { keeper, calmKeeper, worn, fresh, fine };
 }
 
