@@ -1,20 +1,24 @@
 'use client';
 
 import { useEffect, useRef, useState, type FormEvent } from 'react';
-import Link from '@/components/ui/Link';
-import { ReadingSetupFields } from '@/components/lamp-log/ReadingSetupFields';
+import {
+  DistanceBelowLampField,
+  MeterKindSelect,
+  MeterValueField,
+  ReadingSetupFields,
+} from '@/components/lamp-log/ReadingSetupFields';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
 import { Select } from '@/components/ui/Select';
 import { UnitToggle } from '@/components/ui/UnitToggle';
-import { button, card, link } from '@/components/ui/styles';
+import { button, card } from '@/components/ui/styles';
 import { useLengthUnit } from '@/components/ui/units';
 import { useApiMutation } from '@/components/ui/useApiMutation';
 import type { CounterAnswerDto } from '@/lib/counter/queries';
 import { WARM_UP_MINUTES } from '@/shared/reading-setup';
 import { CustomerPicker, type Who } from './CustomerPicker';
 import { KeeperLampChoice } from './KeeperLampChoice';
-import { SendSlipButton } from './SendSlipButton';
+import { SavedTestNotice, type SavedTest } from './SavedTest';
 import { VerdictCard } from './VerdictCard';
 
 export type CounterOptions = {
@@ -37,13 +41,6 @@ export type CounterOptions = {
 };
 
 type Answer = CounterAnswerDto;
-/** What saving answers: a counter lamp, or the lamp in a keeper's enclosure the reading went to. */
-type Saved = {
-  lampId: number | null;
-  customerId: number | null;
-  enclosureLamp?: { id: number; enclosureId: number; label: string };
-};
-
 /** The numbers of a form field, or undefined when empty. */
 const num = (form: FormData, k: string) => {
   const v = String(form.get(k) ?? '').trim();
@@ -74,7 +71,7 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
     (b) => ({ method: 'POST', url: '/api/counter/assess', body: b }),
     { refresh: false },
   );
-  const save = useApiMutation<Record<string, unknown>, Saved & { answer: Answer }>((b) => ({
+  const save = useApiMutation<Record<string, unknown>, SavedTest & { answer: Answer }>((b) => ({
     method: 'POST',
     url: '/api/counter/tests',
     body: b,
@@ -296,23 +293,8 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
           <h2 className="text-lead font-semibold text-basalt-900">The reading</h2>
           <UnitToggle quantity="length" />
         </div>
-        <Field
-          label={`Distance below the lamp (${unit})`}
-          name="distance"
-          type="number"
-          inputMode="decimal"
-          step="any"
-          min="0"
-          defaultValue={unit === 'cm' ? 30 : 12}
-          key={unit}
-          required
-          hint="Straight below the lamp, to the meter's sensor."
-          error={err('distance')}
-        />
-        <Select label="Meter kind" name="unit" defaultValue="uvb" error={err('unit')}>
-          <option value="uvb">Broadband UVB meter (µW/cm²)</option>
-          <option value="uvi">UV Index meter (UVI)</option>
-        </Select>
+        <DistanceBelowLampField key={unit} unit={unit} defaultValue={unit === 'cm' ? 30 : 12} error={err} />
+        <MeterKindSelect error={err} />
         <ReadingSetupFields
           through={through}
           onThrough={setThrough}
@@ -322,16 +304,7 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
           error={err}
           lidHint="The share of UVB the customer's lid passes, if it was measured through it."
         />
-        <Field
-          label="Meter value"
-          name="value"
-          type="number"
-          inputMode="decimal"
-          step="any"
-          min="0"
-          required
-          error={err('value')}
-        />
+        <MeterValueField error={err} />
         <Field
           label="Meter (optional)"
           name="meter"
@@ -397,55 +370,7 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
       {error && <Notice tone="error">{error.message}</Notice>}
 
       {saved ? (
-        <Notice tone="success" title="Saved">
-          {saved.enclosureLamp ? (
-            <p>
-              The reading was added to {saved.enclosureLamp.label} in the lamp log.{' '}
-              <Link href={`/enclosures/${saved.enclosureLamp.enclosureId}/lamps`} className={link}>
-                Open the enclosure’s lamps
-              </Link>
-              {saved.customerId && (
-                <>
-                  {' · '}
-                  <Link href={`/customers/${saved.customerId}`} className={link}>
-                    the customer
-                  </Link>
-                </>
-              )}
-              {' · '}
-              <a href="/counter" className={link}>
-                Test another lamp
-              </a>
-            </p>
-          ) : (
-            <p>
-              <Link href={`/counter/lamps/${saved.lampId}`} className={link}>
-                Open the lamp and its readings
-              </Link>
-              {saved.customerId && (
-                <>
-                  {' · '}
-                  <Link href={`/customers/${saved.customerId}`} className={link}>
-                    the customer
-                  </Link>
-                </>
-              )}
-              {' · '}
-              <a href={`/api/counter/lamps/${saved.lampId}/slip`} download className={link}>
-                Test slip (PDF)
-              </a>
-              {' · '}
-              <a href="/counter" className={link}>
-                Test another lamp
-              </a>
-            </p>
-          )}
-          {saved.customerId && saved.lampId && (
-            <div className="mt-2">
-              <SendSlipButton lampId={saved.lampId} />
-            </div>
-          )}
-        </Notice>
+        <SavedTestNotice saved={saved} />
       ) : (
         <section className={`${card} space-y-3 p-4`} aria-label="Save">
           {!known && who.kind === 'new' && (

@@ -4,12 +4,16 @@ import { useRef, useState, type FormEvent } from 'react';
 import { fieldError } from '@/components/ui/api-client';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
-import { Select } from '@/components/ui/Select';
 import { button } from '@/components/ui/styles';
 import { useLengthUnit } from '@/components/ui/units';
 import { useApiMutation } from '@/components/ui/useApiMutation';
 import { WARM_UP_MINUTES, type ReadingThrough, type ReadingWarmedUp } from '@/shared/reading-setup';
-import { ReadingSetupFields } from './ReadingSetupFields';
+import {
+  DistanceBelowLampField,
+  MeterKindSelect,
+  MeterValueField,
+  ReadingSetupFields,
+} from './ReadingSetupFields';
 
 /** What the form offers and remembers from the last reading: never "not recorded". */
 export type ReadingSetupDefaults = {
@@ -108,31 +112,9 @@ export function ReadingForm({
         >
           <Field label="Taken at" name="takenAt" type="datetime-local" required error={err('takenAt')} />
         </div>
-        <Field
-          label={`Distance below the lamp (${unit})`}
-          name="distance"
-          type="number"
-          step="any"
-          min="0"
-          inputMode="decimal"
-          required
-          hint="Straight below the lamp, to the meter's sensor."
-          error={err('distance')}
-        />
-        <Field
-          label="Meter value"
-          name="value"
-          type="number"
-          step="any"
-          min="0"
-          inputMode="decimal"
-          required
-          error={err('value')}
-        />
-        <Select label="Meter kind" name="unit" defaultValue="uvb" error={err('unit')}>
-          <option value="uvb">Broadband UVB meter (µW/cm²)</option>
-          <option value="uvi">UV Index meter (UVI)</option>
-        </Select>
+        <DistanceBelowLampField unit={unit} error={err} />
+        <MeterValueField error={err} />
+        <MeterKindSelect error={err} />
         <ReadingSetupFields
           through={through}
           onThrough={setThrough}

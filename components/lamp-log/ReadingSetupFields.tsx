@@ -1,5 +1,6 @@
 'use client';
 
+import type { ComponentProps } from 'react';
 import { Field } from '@/components/ui/Field';
 import { Select } from '@/components/ui/Select';
 import { THROUGH_LABEL, WARMED_UP_LABEL } from '@/shared/reading-setup';
@@ -86,5 +87,43 @@ export function ReadingSetupFields({
         <option value="no">{WARMED_UP_LABEL.no}</option>
       </Select>
     </>
+  );
+}
+
+type FieldError = (field: string) => string | null;
+
+/** A decimal number of zero or more, as a meter or a tape measure gives it. */
+const reading = { type: 'number', inputMode: 'decimal', step: 'any', min: '0', required: true } as const;
+
+/** Where the meter was: straight below the lamp, in the page's length unit. */
+export function DistanceBelowLampField({
+  unit,
+  error,
+  ...rest
+}: { unit: string; error: FieldError } & Pick<ComponentProps<typeof Field>, 'defaultValue'>) {
+  return (
+    <Field
+      label={`Distance below the lamp (${unit})`}
+      name="distance"
+      {...reading}
+      hint="Straight below the lamp, to the meter's sensor."
+      error={error('distance')}
+      {...rest}
+    />
+  );
+}
+
+/** What the meter showed, in the unit `MeterKindSelect` names. */
+export function MeterValueField({ error }: { error: FieldError }) {
+  return <Field label="Meter value" name="value" {...reading} error={error('value')} />;
+}
+
+/** The two kinds of UV meter a reading can come from. */
+export function MeterKindSelect({ error }: { error: FieldError }) {
+  return (
+    <Select label="Meter kind" name="unit" defaultValue="uvb" error={error('unit')}>
+      <option value="uvb">Broadband UVB meter (µW/cm²)</option>
+      <option value="uvi">UV Index meter (UVI)</option>
+    </Select>
   );
 }
