@@ -1,8 +1,9 @@
 import 'server-only';
 import { z } from 'zod';
+import type { CurrentUser } from '@/lib/auth/session-user';
 import { ApiError } from './errors';
-import { json } from './route';
-import { MAX_CSV_BYTES } from '@/lib/uploads/limits';
+import { json, route } from './route';
+import { MAX_CSV_BYTES, MAX_CSV_IMPORT_BODY_BYTES } from '@/lib/uploads/limits';
 
 /** A problem of one CSV row: its line number, the column it is in and what is wrong. */
 export type CsvRowError = { row: number; field: string; message: string };
@@ -50,3 +51,27 @@ export const csvImportFields = {
   /** false (default): check every row and show what would be imported; true: import all rows or none. */
   commit: z.boolean().default(false),
 };
+
+/** The body of a CSV import: whose rows they are (`target`'s fields) and the import's own fields. */
+type CsvImportBody<T extends z.ZodRawShape> = z.output<z.ZodObject<T>> &
+  z.output<z.ZodObject<typeof csvImportFields>>;
+
+/**
+ * The route of a CSV import: a body naming whose rows they are (`target`, e.g. the enclosure) beside the
+ * file and the import's own fields, within the import's body cap, and a file within its own size cap,
+ * before the handler checks who may import there and previews or imports.
+ */
+export function csvImportRoute<T extends z.ZodRawShape>(
+  target: T,
+  handler: (input: { body: CsvImportBody<T>; user: CurrentUser }) => Promise<unknown>,
+) {
+  return route({
+    body: z.strictObject({ ...target, ...csvImportFields }),
+    maxBodyBytes: MAX_CSV_IMPORT_BODY_BYTES,
+    handler: async ({ body, user }) => {
+      const parsed = body as unknown as CsvImportBody<T>;
+      checkCsvSize(parsed.csv);
+      return handler({ body: parsed, user });
+    },
+  });
+}

@@ -1,24 +1,15 @@
-import { z } from 'zod';
-import { allow, json, route } from '@/lib/api';
-import { checkCsvSize, csvImportFields, rowErrorsResponse } from '@/lib/api/csv-import';
+import { allow, json } from '@/lib/api';
+import { csvImportRoute, rowErrorsResponse } from '@/lib/api/csv-import';
 import { idSchema } from '@/lib/api/schemas';
 import { importCounterCsv, previewCounterCsv } from '@/lib/counter/csv-import';
-import { MAX_CSV_IMPORT_BODY_BYTES } from '@/lib/uploads/limits';
-
-const body = z.strictObject({
-  organisationId: idSchema('The organisation'),
-  ...csvImportFields,
-});
 
 /**
  * Past counter tests from a CSV file: a preview (nothing saved) or the import of every row, or none. Only
  * the organisation's owners and staff, who may add customers and test lamps at its counter.
  */
-export const POST = route({
-  body,
-  maxBodyBytes: MAX_CSV_IMPORT_BODY_BYTES,
-  handler: async ({ body, user }) => {
-    checkCsvSize(body.csv);
+export const POST = csvImportRoute(
+  { organisationId: idSchema('The organisation') },
+  async ({ body, user }) => {
     allow(user, 'create', { kind: 'customer', organisationId: body.organisationId }, 'The organisation');
     if (!body.commit) return previewCounterCsv(body.organisationId, body.csv, body.tzOffsetMinutes);
     const outcome = await importCounterCsv(user, body.organisationId, body.csv, body.tzOffsetMinutes);
@@ -26,4 +17,4 @@ export const POST = route({
     const { imported, customersAdded, lampsAdded } = outcome;
     return json({ imported, customersAdded, lampsAdded }, 201);
   },
-});
+);
