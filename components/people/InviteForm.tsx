@@ -1,12 +1,11 @@
 'use client';
 
-import { useRouter } from 'next/navigation';
-import { useState, type FormEvent } from 'react';
+import { useRef, type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
 import { Select } from '@/components/ui/Select';
-import { fieldError, sendJson } from '@/components/ui/api-client';
 import { button } from '@/components/ui/styles';
+import { useApiMutation } from '@/components/ui/useApiMutation';
 
 type Role = 'owner' | 'staff' | 'keeper';
 
@@ -26,38 +25,33 @@ export function InviteForm({
   roles: Role[];
   submitLabel?: string;
 }) {
-  const router = useRouter();
-  const [errors, setErrors] = useState<Record<string, string>>({});
-  const [general, setGeneral] = useState('');
-  const [sent, setSent] = useState('');
-  const [busy, setBusy] = useState(false);
+  const formRef = useRef<HTMLFormElement>(null);
+  const invite = useApiMutation(
+    ({ email, role }: { email: string; role: Role }) => ({
+      method: 'POST',
+      url: '/api/invitations',
+      body: { organisationId, email, role },
+    }),
+    { onSuccess: () => formRef.current?.reset() },
+  );
+  const error = invite.error;
+  // A refused e-mail or role is shown beside its field; anything else above the form.
+  const field = error?.field === 'email' || error?.field === 'role' ? error.field : null;
+  const general = error && !field ? error.message : '';
+  const sent = invite.isSuccess
+    ? `Invitation sent to ${invite.variables.email.trim()}. The link works for 7 days.`
+    : '';
 
-  async function onSubmit(e: FormEvent<HTMLFormElement>) {
+  function onSubmit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
-    const formEl = e.currentTarget;
-    const form = new FormData(formEl);
+    const form = new FormData(e.currentTarget);
     const email = String(form.get('email') ?? '');
     const role = (roles.length === 1 ? roles[0] : String(form.get('role'))) as Role;
-    setBusy(true);
-    setErrors({});
-    setGeneral('');
-    setSent('');
-    try {
-      await sendJson('POST', '/api/invitations', { organisationId, email, role });
-      setSent(`Invitation sent to ${email.trim()}. The link works for 7 days.`);
-      formEl.reset();
-      router.refresh();
-    } catch (error) {
-      const { field, message } = fieldError(error);
-      if (field === 'email' || field === 'role') setErrors({ [field]: message });
-      else setGeneral(message);
-    } finally {
-      setBusy(false);
-    }
+    invite.mutate({ email, role });
   }
 
   return (
-    <form onSubmit={onSubmit} className="space-y-3" noValidate>
+    <form ref={formRef} onSubmit={onSubmit} className="space-y-3" noValidate>
       {general && <Notice tone="error">{general}</Notice>}
       {sent && <Notice tone="success">{sent}</Notice>}
       <div className="flex flex-col gap-3 sm:flex-row sm:items-start">
@@ -67,11 +61,17 @@ export function InviteForm({
           type="email"
           required
           className="flex-1"
-          error={errors.email}
+          error={field === 'email' ? error?.message : undefined}
           placeholder="name@example.com"
         />
         {roles.length > 1 && (
-          <Select label="Role" name="role" defaultValue={roles[0]} error={errors.role} className="sm:w-72">
+          <Select
+            label="Role"
+            name="role"
+            defaultValue={roles[0]}
+            error={field === 'role' ? error?.message : undefined}
+            className="sm:w-72"
+          >
             {roles.map((r) => (
               <option key={r} value={r}>
                 {ROLE_LABEL[r]}
@@ -80,8 +80,8 @@ export function InviteForm({
           </Select>
         )}
         <div className="sm:pt-7">
-          <button type="submit" className={button.primary} disabled={busy}>
-            {busy ? 'Sending…' : submitLabel}
+          <button type="submit" className={button.primary} disabled={invite.isPending}>
+            {invite.isPending ? 'Sending…' : submitLabel}
           </button>
         </div>
       </div>

@@ -1,10 +1,9 @@
 'use client';
 
 import { useQueryClient } from '@tanstack/react-query';
-import { useRouter } from 'next/navigation';
 import { useId, useState } from 'react';
-import { fieldError, sendJson } from '@/components/ui/api-client';
 import { button, focusRing } from '@/components/ui/styles';
+import { useApiMutation } from '@/components/ui/useApiMutation';
 
 type Role = 'owner' | 'staff' | 'keeper';
 
@@ -22,28 +21,19 @@ export function MemberActions({
   role: Role;
   isSelf: boolean;
 }) {
-  const router = useRouter();
   const queryClient = useQueryClient();
   const selectId = useId();
-  const [error, setError] = useState('');
-  const [busy, setBusy] = useState(false);
   const [confirming, setConfirming] = useState(false);
   const url = `/api/organisations/${organisationId}/members`;
-
-  async function run(action: () => Promise<unknown>) {
-    setBusy(true);
-    setError('');
-    try {
-      await action();
-      // The members table's pages come from this same address (useServerList keys them by it).
-      await queryClient.invalidateQueries({ queryKey: [url] });
-      router.refresh();
-    } catch (e) {
-      setError(fieldError(e).message);
-    } finally {
-      setBusy(false);
-    }
-  }
+  const change = useApiMutation(
+    (to: { role: Role } | 'removed') =>
+      to === 'removed'
+        ? { method: 'DELETE', url: `${url}?userId=${userId}` }
+        : { method: 'PATCH', url, body: { userId, role: to.role } },
+    // The members table's pages come from this same address (useServerList keys them by it).
+    { onSuccess: () => void queryClient.invalidateQueries({ queryKey: [url] }) },
+  );
+  const busy = change.isPending;
 
   return (
     <div className="flex flex-wrap items-center justify-end gap-2">
@@ -54,7 +44,7 @@ export function MemberActions({
         id={selectId}
         value={role}
         disabled={busy}
-        onChange={(e) => run(() => sendJson('PATCH', url, { userId, role: e.target.value }))}
+        onChange={(e) => change.mutate({ role: e.target.value as Role })}
         className={`rounded-md border border-basalt-300 bg-white px-2 py-1 text-body ${focusRing}`}
       >
         <option value="owner">owner</option>
@@ -68,7 +58,7 @@ export function MemberActions({
             className={button.danger}
             disabled={busy}
             autoFocus
-            onClick={() => run(() => sendJson('DELETE', `${url}?userId=${userId}`))}
+            onClick={() => change.mutate('removed')}
           >
             {isSelf ? 'Yes, leave' : `Yes, remove ${name}`}
           </button>
@@ -86,9 +76,9 @@ export function MemberActions({
           {isSelf ? 'Leave…' : 'Remove…'}
         </button>
       )}
-      {error && (
+      {change.error && (
         <p role="alert" className="w-full text-right text-caption text-ember-700">
-          {error}
+          {change.error.message}
         </p>
       )}
     </div>

@@ -1,10 +1,8 @@
 'use client';
 
 import { LocalTime } from '@/components/ui/LocalTime';
-import { useRouter } from 'next/navigation';
-import { useState } from 'react';
-import { fieldError, sendJson } from '@/components/ui/api-client';
 import { button } from '@/components/ui/styles';
+import { useApiMutation } from '@/components/ui/useApiMutation';
 
 export type PendingInvitation = {
   id: number;
@@ -16,15 +14,14 @@ export type PendingInvitation = {
 
 /** Invitations not yet accepted, each with a way to withdraw it. */
 export function PendingInvitations({ invitations }: { invitations: PendingInvitation[] }) {
-  const router = useRouter();
-  const [error, setError] = useState('');
-  const [busyId, setBusyId] = useState<number | null>(null);
+  const withdraw = useApiMutation((id: number) => ({ method: 'DELETE', url: `/api/invitations/${id}` }));
+  const busyId = withdraw.isPending ? withdraw.variables : null;
   if (invitations.length === 0) return <p className="text-body text-basalt-500">No invitations waiting.</p>;
   return (
     <>
-      {error && (
+      {withdraw.error && (
         <p role="alert" className="mb-2 text-body text-ember-700">
-          {error}
+          {withdraw.error.message}
         </p>
       )}
       <ul className="divide-y divide-basalt-100 rounded-lg border border-basalt-200 bg-white">
@@ -42,18 +39,7 @@ export function PendingInvitations({ invitations }: { invitations: PendingInvita
                 className={button.quietDanger}
                 disabled={busyId === inv.id}
                 aria-label={`Withdraw the invitation to ${inv.email}`}
-                onClick={async () => {
-                  setBusyId(inv.id);
-                  setError('');
-                  try {
-                    await sendJson('DELETE', `/api/invitations/${inv.id}`);
-                    router.refresh();
-                  } catch (e) {
-                    setError(fieldError(e).message);
-                  } finally {
-                    setBusyId(null);
-                  }
-                }}
+                onClick={() => withdraw.mutate(inv.id)}
               >
                 Withdraw
               </button>
