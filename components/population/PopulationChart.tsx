@@ -21,38 +21,13 @@ const M = { left: 56, right: 16, top: 16, bottom: 48 };
 
 export type PopulationView = PopulationCurve;
 
-const pct = (v: number) => `${Math.round(v * 100)} %`;
+/** A share as a whole percentage, "85 %". */
+export const pct = (v: number) => `${Math.round(v * 100)} %`;
 
 /** The months the chart and its table span: past the oldest reading, at least a year, at most five. */
 export function chartMonths(view: PopulationView): number {
   const oldest = Math.max(0, ...view.points.map((p) => p.months));
   return Math.min(60, Math.max(12, Math.ceil((oldest + 3) / 6) * 6));
-}
-
-/** The rows of the table beside the chart: every three months up to the chart's end. */
-export function tableRows(view: PopulationView) {
-  const end = chartMonths(view);
-  const at = (list: { months: number; share: number }[], m: number) => {
-    // The sampled curves are on even grids that include these months; interpolate to be safe.
-    const i = list.findIndex((c) => c.months >= m);
-    if (i <= 0) return list[0];
-    const a = list[i - 1]!;
-    const b = list[i]!;
-    const k = (m - a.months) / (b.months - a.months);
-    return { ...b, months: m, share: a.share + (b.share - a.share) * k };
-  };
-  const rows = [];
-  for (let m = 0; m <= end; m += end > 24 ? 6 : 3) {
-    const c = view.ok ? (at(view.curve, m) as (typeof view.curve)[number] | undefined) : undefined;
-    rows.push({
-      months: m,
-      measured: c ? c.share : null,
-      lo: c && 'lo' in c ? c.lo : null,
-      hi: c && 'hi' in c ? c.hi : null,
-      catalogue: at(view.catalogue, m)?.share ?? null,
-    });
-  }
-  return rows;
 }
 
 export function PopulationChart({ view, typeName }: { view: PopulationView; typeName: string }) {
@@ -169,46 +144,5 @@ export function PopulationChart({ view, typeName }: { view: PopulationView; type
           ),
         )}
     </PlotFrame>
-  );
-}
-
-export function PopulationTable({ view }: { view: PopulationView }) {
-  const rows = tableRows(view);
-  return (
-    <table className="w-full text-left text-body" data-testid="population-table">
-      <caption className="mb-1 text-left text-caption text-basalt-600">
-        Share of a new lamp’s output (catalogue figure, bare, 30 cm) by months of use
-      </caption>
-      <thead>
-        <tr className="border-b border-basalt-200 text-caption text-basalt-600">
-          <th scope="col" className="py-1 pr-2 font-medium">
-            Months
-          </th>
-          <th scope="col" className="py-1 pr-2 font-medium">
-            Measured
-          </th>
-          <th scope="col" className="py-1 pr-2 font-medium">
-            95 % band
-          </th>
-          <th scope="col" className="py-1 font-medium">
-            Catalogue
-          </th>
-        </tr>
-      </thead>
-      <tbody>
-        {rows.map((r) => (
-          <tr key={r.months} className="border-b border-basalt-100">
-            <th scope="row" className="py-1 pr-2 font-normal">
-              {r.months}
-            </th>
-            <td className="py-1 pr-2">{r.measured === null ? '—' : pct(r.measured)}</td>
-            <td className="py-1 pr-2">
-              {r.lo === null || r.hi === null ? '—' : `${pct(r.lo)}–${pct(r.hi)}`}
-            </td>
-            <td className="py-1">{r.catalogue === null ? '—' : pct(r.catalogue)}</td>
-          </tr>
-        ))}
-      </tbody>
-    </table>
   );
 }

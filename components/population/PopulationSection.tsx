@@ -5,7 +5,8 @@ import { MIN_LAMPS, MIN_READINGS, MIN_SPAN_MONTHS } from '@/lib/population/fit';
 import type { AdoptedCurve } from '@/lib/lamp-types/schema';
 import { formatMoment } from '@/lib/time/format';
 import { AdoptCurveButtons } from './AdoptCurveButtons';
-import { PopulationChart, PopulationTable, type PopulationView } from './PopulationChart';
+import { PopulationChart, type PopulationView } from './PopulationChart';
+import { PopulationTable } from './PopulationTable';
 
 /**
  * What the shop's own tests say about a lamp type: the curve measured from every reading of its lamps of

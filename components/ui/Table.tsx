@@ -40,6 +40,7 @@ export function Table<T, C extends string = string>({
   data,
   columns,
   caption,
+  showCaption = false,
   rowKey,
   sort,
   stale = false,
@@ -58,6 +59,8 @@ export function Table<T, C extends string = string>({
   columns: readonly (TableColumn<T> | false)[];
   /** What the table lists, read out by screen readers. */
   caption: string;
+  /** The caption is shown too, above the table (a table that stands beside a chart says what it holds). */
+  showCaption?: boolean;
   rowKey: (row: T) => string | number;
   sort?: ServerSort<C>;
   /** The rows are the previous view's while the next loads: dimmed. */
@@ -110,7 +113,9 @@ export function Table<T, C extends string = string>({
         aria-busy={busy || undefined}
         data-testid={testId}
       >
-        <caption className="sr-only">{caption}</caption>
+        <caption className={showCaption ? 'mb-1 text-left text-caption text-basalt-600' : 'sr-only'}>
+          {caption}
+        </caption>
         <thead className={headClass}>
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id}>
