@@ -1,7 +1,7 @@
 import type { ContourBand, Design } from '@/simulation';
 import { bandLabel, type FieldScale } from '@/shared/field-scale';
-import { bandPath } from '@/shared/designs/svg-path';
 import { DesignShapes, fieldLook } from './DesignShapes';
+import { FieldBands } from './FieldBands';
 import { DesignSvg, designBox } from './DesignSvg';
 
 /** The margin around the drawing, in design centimetres. */
@@ -27,24 +27,16 @@ export function FieldSvg({
 }) {
   const { width: w, height: h } = design.enclosure;
   const { top } = designBox(design, PAD);
-  const colorOf = (lo: number) => {
-    const k = scale.thresholds.indexOf(lo);
-    return scale.colors[k >= 0 ? k : 0] ?? '#ccc';
-  };
   const stroke = Math.max(w, top) / 400;
   return (
     <DesignSvg design={design} pad={PAD} label={title} title standalone>
       <rect x={0} y={0} width={w} height={h} fill={scale.colors[0]} />
-      {bands.map((b) => (
-        <path
-          key={b.lo}
-          d={bandPath(b.polygons)}
-          fill={colorOf(b.lo)}
-          fillRule="evenodd"
-          stroke={colorOf(b.lo)}
-          strokeWidth={stroke * 0.3}
-        />
-      ))}
+      <FieldBands
+        bands={bands}
+        thresholds={scale.thresholds}
+        colors={scale.colors}
+        strokeWidth={stroke * 0.3}
+      />
       <DesignShapes objects={design.objects} look={fieldLook(stroke)} />
       <rect x={0} y={0} width={w} height={h} fill="none" stroke="#1c1f1a" strokeWidth={stroke * 2} />
       {markers.map((m) => (

@@ -4,11 +4,11 @@
 // and nudge as fitView), so it is in place in the very first paint, before any script runs, and the
 // canvas later draws the same bands at the same spot.
 import { useEffect, useRef } from 'react';
-import { bandPath } from '@/shared/designs/svg-path';
 import { bandColors } from '@/shared/colour-ramps';
 import { FIELD_RAMP } from '@/shared/field-scale';
 import type { StudioPicture } from '@/shared/designs/studio-field';
 import { DesignShapes, drawingTop, fieldLook } from '@/components/designs/DesignShapes';
+import { FieldBands } from '@/components/designs/FieldBands';
 import { C } from './canvas/colors';
 import { FIELD_VISIBLE_MARK, markFieldVisible } from './fields/early';
 import { designBounds, FIT_PADDING_PX, FIT_SHIFT_DOWN_PX } from './state/actions';
@@ -56,8 +56,6 @@ export function FirstFieldPicture({
   const b = designBounds(design);
   const { width: w, height: h } = design.enclosure;
   const stroke = Math.max(w, drawingTop(design)) / 400;
-  const colors = bandColors(FIELD_RAMP[picture.field], picture.thresholds.length);
-  const colorOf = (lo: number) => colors[Math.max(0, picture.thresholds.indexOf(lo))] ?? colors[0];
   return (
     <div
       ref={wrap}
@@ -86,17 +84,13 @@ export function FirstFieldPicture({
         <g transform="scale(1,-1)">
           <rect x={0} y={0} width={w} height={h} fill={C.paper} opacity={0.9} />
           <g opacity={picture.opacity}>
-            {picture.bands.map((band) => (
-              <path
-                key={band.lo}
-                d={bandPath(band.polygons)}
-                fill={colorOf(band.lo)}
-                fillRule="evenodd"
-                stroke={colorOf(band.lo)}
-                strokeWidth={0.75}
-                vectorEffect="non-scaling-stroke"
-              />
-            ))}
+            <FieldBands
+              bands={picture.bands}
+              thresholds={picture.thresholds}
+              colors={bandColors(FIELD_RAMP[picture.field], picture.thresholds.length)}
+              strokeWidth={0.75}
+              scalingStroke={false}
+            />
           </g>
           <DesignShapes objects={design.objects} look={fieldLook(stroke)} />
           <rect
