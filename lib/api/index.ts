@@ -1,4 +1,4 @@
-export { allow, created, json, route } from './route';
+export { allow, created, json, ownedRoute, route } from './route';
 export {
   ApiError,
   badRequest,

@@ -1,9 +1,12 @@
 import type { Logger } from 'pino';
 import type { ZodType, z } from 'zod';
 import type { CurrentUser } from '@/lib/auth/session-user';
+import { loadOwned, type OwnedKind, type OwnedRecord } from '@/lib/access';
 import { requestIdOf, requestLogger } from '@/lib/log';
+import type { Action } from '@/lib/permissions';
 import { ApiError, errorResponse, fromZod, unauthenticated } from './errors';
 import { assertNotFormBody, assertSameOrigin, isStateChanging, readJsonBody } from './request';
+import { idParams } from './schemas';
 import { sessionUser } from './session';
 
 /**
@@ -54,6 +57,28 @@ export function route<
     }
     return response;
   };
+}
+
+/**
+ * The route of one thing named by the id in its address (`/api/lamps/12`): the id is parsed and the
+ * thing loaded for this user and `action` with `loadOwned` (404 to whoever may not see it, 403 to whoever
+ * may see it but not do this) before the handler runs, which gets it as `thing`.
+ */
+export function ownedRoute<K extends OwnedKind, Q extends Schema = undefined, B extends Schema = undefined>(
+  kind: K,
+  action: Action,
+  spec: Omit<Spec<typeof idParams, Q, B, true>, 'params' | 'auth' | 'handler'> & {
+    handler: (
+      input: Parameters<Spec<typeof idParams, Q, B, true>['handler']>[0] & { thing: OwnedRecord<K> },
+    ) => Promise<Response | unknown>;
+  },
+) {
+  return route<typeof idParams, Q, B, true>({
+    ...spec,
+    params: idParams,
+    handler: async (input) =>
+      spec.handler({ ...input, thing: await loadOwned(kind, input.params.id, input.user, action) }),
+  });
 }
 
 async function handle<P extends Schema, Q extends Schema, B extends Schema, A extends boolean>(

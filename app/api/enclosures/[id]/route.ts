@@ -1,25 +1,20 @@
-import { forbidden, route } from '@/lib/api';
-import { loadOwned, type EnclosureWithKeeper } from '@/lib/access';
+import { forbidden, ownedRoute } from '@/lib/api';
+import { type EnclosureWithKeeper } from '@/lib/access';
 import { enclosureJson } from '@/lib/enclosures/queries';
 import { deleteEnclosure, updateEnclosure } from '@/lib/enclosures/mutations';
 import { updateEnclosureBody } from '@/lib/enclosures/schemas';
-import { idParams } from '@/lib/api/schemas';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { can } from '@/lib/permissions';
 
-export const GET = route({
-  params: idParams,
-  handler: async ({ params, user }) => {
-    const enclosure = await loadOwned('enclosure', params.id, user, 'read');
+export const GET = ownedRoute('enclosure', 'read', {
+  handler: async ({ thing: enclosure }) => {
     return enclosureJson(enclosure);
   },
 });
 
-export const PATCH = route({
-  params: idParams,
+export const PATCH = ownedRoute('enclosure', 'update', {
   body: updateEnclosureBody,
-  handler: async ({ params, body, user }) => {
-    const enclosure = await loadOwned('enclosure', params.id, user, 'update');
+  handler: async ({ thing: enclosure, body, user }) => {
     if (body.keeperId !== undefined && body.keeperId !== enclosure.keeperId) {
       assertMayHandOver(user, enclosure, body.keeperId);
     }
@@ -27,10 +22,8 @@ export const PATCH = route({
   },
 });
 
-export const DELETE = route({
-  params: idParams,
-  handler: async ({ params, user }) => {
-    const enclosure = await loadOwned('enclosure', params.id, user, 'delete');
+export const DELETE = ownedRoute('enclosure', 'delete', {
+  handler: async ({ thing: enclosure, params }) => {
     await deleteEnclosure(enclosure);
     return { ok: true, id: params.id };
   },

@@ -1,13 +1,9 @@
-import { route } from '@/lib/api';
-import { shareFor } from '@/lib/variants/access';
-import { idParams } from '@/lib/variants/schemas';
+import { ownedRoute } from '@/lib/api';
 import { revokeShare } from '@/lib/variants/mutations';
 
 /** Revokes the link: from now on it answers 404. */
-export const DELETE = route({
-  params: idParams,
-  handler: async ({ params, user }) => {
-    const share = await shareFor(user, params.id, 'delete');
+export const DELETE = ownedRoute('share', 'delete', {
+  handler: async ({ thing: share }) => {
     return { share: await revokeShare(share) };
   },
 });

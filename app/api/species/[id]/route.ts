@@ -1,30 +1,23 @@
-import { json, route } from '@/lib/api';
-import { idParams } from '@/lib/api/schemas';
-import { loadOwned } from '@/lib/access';
+import { json, ownedRoute } from '@/lib/api';
 import { speciesPatchSchema } from '@/lib/species/schema';
 import { toDto } from '@/lib/species/queries';
 import { deleteSheet, updateSheet } from '@/lib/species/mutations';
 
-export const GET = route({
-  params: idParams,
-  handler: async ({ params, user }) => toDto(await loadOwned('species', params.id, user, 'read')),
+export const GET = ownedRoute('species', 'read', {
+  handler: async ({ thing }) => toDto(thing),
 });
 
 /** Owner and staff change any subset of the fields; the merged sheet is validated as a whole. */
-export const PATCH = route({
-  params: idParams,
+export const PATCH = ownedRoute('species', 'update', {
   body: speciesPatchSchema,
-  handler: async ({ params, body, user }) => {
-    const row = await loadOwned('species', params.id, user, 'update');
+  handler: async ({ thing: row, body, user }) => {
     return toDto(await updateSheet(row, body, user.id));
   },
 });
 
 /** Enclosures name their species in text, so removing a sheet leaves them (and their designs) intact. */
-export const DELETE = route({
-  params: idParams,
-  handler: async ({ params, user }) => {
-    const row = await loadOwned('species', params.id, user, 'delete');
+export const DELETE = ownedRoute('species', 'delete', {
+  handler: async ({ thing: row }) => {
     await deleteSheet(row);
     return json({ ok: true });
   },

@@ -1,8 +1,6 @@
-import { route } from '@/lib/api';
-import { idParams } from '@/lib/api/schemas';
+import { ownedRoute } from '@/lib/api';
 import { neutraliseCsv } from '@/lib/files/csv-safe';
 import { servedName, servedType, UPLOAD_CSP } from '@/lib/uploads/serve';
-import { uploadFor } from '@/lib/uploads/access';
 import { deleteUpload } from '@/lib/uploads/mutations';
 import { uploadBytes } from '@/lib/uploads/queries';
 
@@ -14,10 +12,8 @@ import { uploadBytes } from '@/lib/uploads/queries';
  * (`default-src 'none'; sandbox`) also comes from next.config.ts, so the global header cannot replace it.
  * A stored CSV is served with its formula cells neutralised, so opening it in a spreadsheet runs nothing.
  */
-export const GET = route({
-  params: idParams,
-  handler: async ({ params, user }) => {
-    const upload = await uploadFor(user, params.id, 'read');
+export const GET = ownedRoute('upload', 'read', {
+  handler: async ({ thing: upload }) => {
     const stored = await uploadBytes(upload);
     const type = servedType(upload, stored);
     const bytes =
@@ -40,10 +36,8 @@ export const GET = route({
   },
 });
 
-export const DELETE = route({
-  params: idParams,
-  handler: async ({ params, user }) => {
-    const upload = await uploadFor(user, params.id, 'delete');
+export const DELETE = ownedRoute('upload', 'delete', {
+  handler: async ({ thing: upload, params }) => {
     await deleteUpload(upload);
     return { ok: true, id: params.id };
   },

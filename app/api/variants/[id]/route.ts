@@ -1,13 +1,10 @@
-import { json, route } from '@/lib/api';
-import { variantFor } from '@/lib/variants/access';
-import { idParams, renameBody, saveVariantBody } from '@/lib/variants/schemas';
+import { json, ownedRoute } from '@/lib/api';
+import { renameBody, saveVariantBody } from '@/lib/variants/schemas';
 import { variantDetailOf } from '@/lib/variants/queries';
 import { deleteVariant, renameVariant, saveVariantDesign } from '@/lib/variants/mutations';
 
-export const GET = route({
-  params: idParams,
-  handler: async ({ params, user }) => {
-    const variant = await variantFor(user, params.id, 'read');
+export const GET = ownedRoute('variant', 'read', {
+  handler: async ({ thing: variant }) => {
     return { variant: await variantDetailOf(variant) };
   },
 });
@@ -16,11 +13,9 @@ export const GET = route({
  * Saves the design if it is still based on the stored version; otherwise 409 with the current version
  * and design, and nothing overwritten.
  */
-export const PUT = route({
-  params: idParams,
+export const PUT = ownedRoute('variant', 'update', {
   body: saveVariantBody,
-  handler: async ({ params, body, user }) => {
-    const variant = await variantFor(user, params.id, 'update');
+  handler: async ({ thing: variant, body, user }) => {
     const r = await saveVariantDesign(user, variant, body);
     if (r.ok) return { variant: r.variant };
     return json(
@@ -37,19 +32,15 @@ export const PUT = route({
 });
 
 /** Renames the variant without touching its design or version. */
-export const PATCH = route({
-  params: idParams,
+export const PATCH = ownedRoute('variant', 'update', {
   body: renameBody,
-  handler: async ({ params, body, user }) => {
-    const variant = await variantFor(user, params.id, 'update');
+  handler: async ({ thing: variant, body }) => {
     return { variant: await renameVariant(variant, body.name) };
   },
 });
 
-export const DELETE = route({
-  params: idParams,
-  handler: async ({ params, user }) => {
-    const variant = await variantFor(user, params.id, 'delete');
+export const DELETE = ownedRoute('variant', 'delete', {
+  handler: async ({ thing: variant }) => {
     await deleteVariant(variant);
     return json({ ok: true });
   },

@@ -1,7 +1,5 @@
 import { z } from 'zod';
-import { created, pageQuery, route } from '@/lib/api';
-import { idParams } from '@/lib/api/schemas';
-import { enclosureFor } from '@/lib/enclosures/access';
+import { created, ownedRoute, pageQuery } from '@/lib/api';
 import { todayIso } from '@/lib/lamp-log/dates';
 import { createLamp } from '@/lib/lamp-log/mutations';
 import { createLampBody } from '@/lib/lamp-log/schemas';
@@ -9,11 +7,9 @@ import { summarise } from '@/lib/lamp-log/queries';
 import { lampsOfEnclosure } from '@/lib/lamp-log/queries';
 
 /** The lamps installed in one enclosure, each with its age, last reading, fit and status. */
-export const GET = route({
-  params: idParams,
+export const GET = ownedRoute('enclosure', 'read', {
   query: z.object(pageQuery),
-  handler: async ({ params, query, user }) => {
-    const enclosure = await enclosureFor(user, params.id, 'read');
+  handler: async ({ thing: enclosure, query }) => {
     const rows = await lampsOfEnclosure(enclosure.id, query);
     const items = await summarise(rows.slice(0, query.limit), todayIso());
     const last = rows[query.limit - 1];
@@ -21,11 +17,9 @@ export const GET = route({
   },
 });
 
-export const POST = route({
-  params: idParams,
+export const POST = ownedRoute('enclosure', 'create', {
   body: createLampBody,
-  handler: async ({ params, body, user }) => {
-    const enclosure = await enclosureFor(user, params.id, 'create');
+  handler: async ({ thing: enclosure, body, user }) => {
     const lamp = await createLamp(enclosure, body, user.id);
     const [summary] = await summarise([lamp], todayIso());
     return created({ lamp: summary });

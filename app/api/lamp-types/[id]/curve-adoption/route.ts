@@ -1,7 +1,5 @@
 import { z } from 'zod';
-import { json, route } from '@/lib/api';
-import { idParams } from '@/lib/api/schemas';
-import { populationTypeFor } from '@/lib/population/access';
+import { json, ownedRoute } from '@/lib/api';
 import { adoptCurve, withdrawCurve } from '@/lib/population/mutations';
 
 /**
@@ -9,19 +7,15 @@ import { adoptCurve, withdrawCurve } from '@/lib/population/mutations';
  * few tests for one), or go back to the catalogue's curve. Either way the outlooks of the organisation's
  * lamps of this type are recomputed.
  */
-export const POST = route({
-  params: idParams,
+export const POST = ownedRoute('lamp-type-figures', 'update', {
   body: z.strictObject({}),
-  handler: async ({ params, user }) => {
-    const type = await populationTypeFor(user, params.id, 'update');
+  handler: async ({ thing: type, user }) => {
     return { adopted: await adoptCurve(type, user.id) };
   },
 });
 
-export const DELETE = route({
-  params: idParams,
-  handler: async ({ params, user }) => {
-    const type = await populationTypeFor(user, params.id, 'update');
+export const DELETE = ownedRoute('lamp-type-figures', 'update', {
+  handler: async ({ thing: type, user }) => {
     await withdrawCurve(type, user.id);
     return json({ adopted: null });
   },

@@ -1,27 +1,21 @@
 import { z } from 'zod';
-import { created, page, pageQuery, route } from '@/lib/api';
-import { idParams } from '@/lib/api/schemas';
-import { lampFor } from '@/lib/lamp-log/access';
+import { created, ownedRoute, page, pageQuery } from '@/lib/api';
 import { createReading } from '@/lib/lamp-log/mutations';
 import { createReadingBody } from '@/lib/lamp-log/schemas';
 import { readingJson, readingsOf } from '@/lib/lamp-log/queries';
 
 /** A lamp's readings, oldest first, paginated by id. */
-export const GET = route({
-  params: idParams,
+export const GET = ownedRoute('lamp', 'read', {
   query: z.object(pageQuery),
-  handler: async ({ params, query, user }) => {
-    const lamp = await lampFor(user, params.id, 'read');
+  handler: async ({ thing: lamp, query }) => {
     return page(await readingsOf(lamp.id, query), query.limit, readingJson);
   },
 });
 
 /** One meter reading, typed in. Distances in cm or in (`distanceUnit`), stored in cm. */
-export const POST = route({
-  params: idParams,
+export const POST = ownedRoute('lamp', 'update', {
   body: createReadingBody,
-  handler: async ({ params, body, user }) => {
-    const lamp = await lampFor(user, params.id, 'update');
+  handler: async ({ thing: lamp, body, user }) => {
     const reading = await createReading(lamp, body, user.id);
     return created({ reading: readingJson(reading) });
   },

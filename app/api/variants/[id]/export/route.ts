@@ -1,12 +1,10 @@
 import { z } from 'zod';
-import { notFound, route } from '@/lib/api';
+import { notFound, ownedRoute } from '@/lib/api';
 import { runEngineTask } from '@/lib/engine-pool';
 import { isExampleData, organisationName } from '@/lib/organisations/queries';
 import { download, fileBase } from '@/lib/reports/build';
 import { countExport, EXPORT_MONTHS } from '@/lib/reports/limits';
 import { findSheet } from '@/lib/species/queries';
-import { variantFor } from '@/lib/variants/access';
-import { idParams } from '@/lib/variants/schemas';
 import { attachedSpecies, speciesOptions, type SpeciesOption } from '@/lib/variants/species';
 import { assertComputable, readStoredDesign } from '@/lib/variants/stored-design';
 
@@ -28,11 +26,9 @@ const exportQuery = z.object({
  * picture, `pdf` the report with assessment (species from `?species=` or the enclosure's own), lamps
  * and cautions.
  */
-export const GET = route({
-  params: idParams,
+export const GET = ownedRoute('variant', 'read', {
   query: exportQuery,
-  handler: async ({ req, params, query, user }) => {
-    const variant = await variantFor(user, params.id, 'read');
+  handler: async ({ thing: variant, req, query, user }) => {
     const design = readStoredDesign(variant.designJson);
     const base = fileBase(variant.name);
     if (query.format === 'json') {

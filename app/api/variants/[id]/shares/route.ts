@@ -1,15 +1,12 @@
-import { allow, created, route } from '@/lib/api';
-import { variantFor } from '@/lib/variants/access';
-import { createShareBody, idParams, listQuery } from '@/lib/variants/schemas';
+import { allow, created, ownedRoute } from '@/lib/api';
+import { createShareBody, listQuery } from '@/lib/variants/schemas';
 import { listShares } from '@/lib/variants/queries';
 import { createShare } from '@/lib/variants/mutations';
 
 /** The variant's share links (active, expired and revoked). Tokens are not stored, so none is listed. */
-export const GET = route({
-  params: idParams,
+export const GET = ownedRoute('variant', 'read', {
   query: listQuery,
-  handler: async ({ params, query, user }) => {
-    const variant = await variantFor(user, params.id, 'read');
+  handler: async ({ thing: variant, query, user }) => {
     const { organisationId, keeperId } = variant.design.enclosure;
     allow(user, 'read', { kind: 'share', organisationId, keeperId }, 'The variant');
     return listShares(variant, query);
@@ -17,11 +14,9 @@ export const GET = route({
 });
 
 /** A new read-only link; the answer carries the token and URL this one time. */
-export const POST = route({
-  params: idParams,
+export const POST = ownedRoute('variant', 'read', {
   body: createShareBody,
-  handler: async ({ params, body, user }) => {
-    const variant = await variantFor(user, params.id, 'read');
+  handler: async ({ thing: variant, body, user }) => {
     // Sharing is its own permission: seeing a variant is not enough to hand it to others.
     const { organisationId, keeperId } = variant.design.enclosure;
     allow(user, 'create', { kind: 'share', organisationId, keeperId }, 'The variant');

@@ -1,6 +1,4 @@
-import { created, json, route } from '@/lib/api';
-import { idParams } from '@/lib/api/schemas';
-import { counterLampFor } from '@/lib/customers/access';
+import { created, json, ownedRoute } from '@/lib/api';
 import { counterLampView } from '@/lib/counter/queries';
 import { customerNameOf, sendSlip, slipContentOf } from '@/lib/counter/slip';
 import { runEngineTask } from '@/lib/engine-pool';
@@ -12,10 +10,8 @@ import { download } from '@/lib/reports/build';
  * the outbox, only with the customer's consent and an address; once per reading (a second request
  * answers `queued: false`).
  */
-export const GET = route({
-  params: idParams,
-  handler: async ({ params, user, req }) => {
-    const lamp = await counterLampFor(user, params.id, 'read');
+export const GET = ownedRoute('counter-lamp', 'read', {
+  handler: async ({ thing: lamp, req }) => {
     const view = await counterLampView(lamp);
     const content = await slipContentOf(view, await customerNameOf(lamp));
     const pdf = await runEngineTask('counterSlipPdf', { content, now: new Date() }, { signal: req.signal });
@@ -23,10 +19,8 @@ export const GET = route({
   },
 });
 
-export const POST = route({
-  params: idParams,
-  handler: async ({ params, user }) => {
-    const lamp = await counterLampFor(user, params.id, 'update');
+export const POST = ownedRoute('counter-lamp', 'update', {
+  handler: async ({ thing: lamp }) => {
     const message = await sendSlip(lamp, await counterLampView(lamp));
     return message ? created({ queued: true, to: message.toEmail }) : json({ queued: false });
   },
