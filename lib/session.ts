@@ -20,6 +20,21 @@ export async function requireUser(returnTo?: string): Promise<CurrentUser> {
   return user;
 }
 
+/** The props of a page that reads its address's query (`?q=…&page=2`). */
+export type SearchParamsProps = { searchParams: Promise<Record<string, string | string[]>> };
+
+/**
+ * A page of the signed-in app: its user (signing in first, back to `returnTo`) and the organisation they
+ * are working in. Null when they belong to none: the layout then offers to make or join one instead of the page.
+ */
+export async function requireMembership(
+  returnTo: string,
+): Promise<{ user: CurrentUser; membership: MembershipClaim; organisationId: number } | null> {
+  const user = await requireUser(returnTo);
+  const membership = await currentMembership(user);
+  return membership && { user, membership, organisationId: membership.organisationId };
+}
+
 /** The organisation chosen in the switcher, if it is still one of the user's; else their first. */
 export async function currentMembership(user: CurrentUser): Promise<MembershipClaim | null> {
   const chosen = Number((await cookies()).get(CURRENT_ORG_COOKIE)?.value);

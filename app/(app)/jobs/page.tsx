@@ -7,7 +7,7 @@ import { PageHeader } from '@/components/ui/PageHeader';
 import { jobsOverview, type RunView } from '@/lib/jobs/overview';
 import { jobTitle } from '@/lib/jobs/registry';
 import { can } from '@/lib/permissions';
-import { currentMembership, requireUser } from '@/lib/session';
+import { requireMembership } from '@/lib/session';
 
 export const metadata: Metadata = { title: 'Background jobs' };
 export const dynamic = 'force-dynamic';
@@ -38,10 +38,9 @@ function countsText(run: RunView): string {
  * what is failing for it (units of work waiting to be retried, e-mail that could not be delivered).
  */
 export default async function JobsPage() {
-  const user = await requireUser('/jobs');
-  const membership = await currentMembership(user);
-  if (!membership) return null;
-  const organisationId = membership.organisationId;
+  const session = await requireMembership('/jobs');
+  if (!session) return null;
+  const { user, membership, organisationId } = session;
   if (!can(user, 'read', { kind: 'jobs', organisationId })) notFound();
   const { runs, failures, undelivered } = await jobsOverview(organisationId);
   const lastRun = runs[0];

@@ -12,19 +12,14 @@ import { pendingInvitationViews } from '@/lib/people/queries';
 import { toSearchParams } from '@/lib/list-view';
 import { keeperListView } from '@/lib/people/list-view';
 import { can } from '@/lib/permissions';
-import { currentMembership, requireUser } from '@/lib/session';
+import { requireMembership, type SearchParamsProps } from '@/lib/session';
 
 export const metadata: Metadata = { title: 'Keepers' };
 
-export default async function KeepersPage({
-  searchParams,
-}: {
-  searchParams: Promise<Record<string, string | string[]>>;
-}) {
-  const user = await requireUser('/keepers');
-  const membership = await currentMembership(user);
-  if (!membership) return null;
-  const organisationId = membership.organisationId;
+export default async function KeepersPage({ searchParams }: SearchParamsProps) {
+  const session = await requireMembership('/keepers');
+  if (!session) return null;
+  const { user, membership, organisationId } = session;
   if (!can(user, 'read', { kind: 'member', organisationId })) notFound();
   const mayInvite = can(user, 'create', { kind: 'invitation', organisationId, role: 'keeper' });
   // The first page is rendered here, for the view the address names; the table then fetches others.

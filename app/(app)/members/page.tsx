@@ -11,20 +11,15 @@ import { pendingInvitationViews } from '@/lib/people/queries';
 import { toSearchParams } from '@/lib/list-view';
 import { memberListView } from '@/lib/people/list-view';
 import { can } from '@/lib/permissions';
-import { currentMembership, requireUser } from '@/lib/session';
+import { requireMembership, type SearchParamsProps } from '@/lib/session';
 import type { Role } from '@/lib/permissions';
 
 export const metadata: Metadata = { title: 'Members' };
 
-export default async function MembersPage({
-  searchParams,
-}: {
-  searchParams: Promise<Record<string, string | string[]>>;
-}) {
-  const user = await requireUser('/members');
-  const membership = await currentMembership(user);
-  if (!membership) return null;
-  const organisationId = membership.organisationId;
+export default async function MembersPage({ searchParams }: SearchParamsProps) {
+  const session = await requireMembership('/members');
+  if (!session) return null;
+  const { user, membership, organisationId } = session;
   if (!can(user, 'read', { kind: 'member', organisationId })) notFound();
   const manages = can(user, 'update', { kind: 'member', organisationId });
   const invitable = (['staff', 'keeper', 'owner'] as Role[]).filter((role) =>

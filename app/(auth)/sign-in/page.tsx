@@ -3,7 +3,7 @@ import { redirect } from 'next/navigation';
 import { SignInForm } from '@/components/auth/SignInForm';
 import { Notice } from '@/components/ui/Notice';
 import { safeReturnTo } from '@/lib/auth/return-to';
-import { currentUser } from '@/lib/session';
+import { currentUser, type SearchParamsProps } from '@/lib/session';
 
 export const metadata: Metadata = { title: 'Sign in' };
 
@@ -15,11 +15,7 @@ const DONE: Record<string, string> = {
   'account-confirmed': 'Your account is confirmed. Sign in with the e-mail and password you chose.',
 };
 
-export default async function SignInPage({
-  searchParams,
-}: {
-  searchParams: Promise<Record<string, string | string[]>>;
-}) {
+export default async function SignInPage({ searchParams }: SearchParamsProps) {
   const params = await searchParams;
   const returnTo = safeReturnTo(params.callbackUrl);
   if (await currentUser()) redirect(returnTo);

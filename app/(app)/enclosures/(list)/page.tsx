@@ -16,19 +16,14 @@ import { memberName } from '@/lib/people/queries';
 import { listQueryForView, viewFromSearchParams } from '@/lib/enclosures/list-view';
 import { toSearchParams } from '@/lib/list-view';
 import { can, roleIn } from '@/lib/permissions';
-import { currentMembership, requireUser } from '@/lib/session';
+import { requireMembership, type SearchParamsProps } from '@/lib/session';
 
 export const metadata: Metadata = { title: 'Enclosures' };
 
-export default async function EnclosuresPage({
-  searchParams,
-}: {
-  searchParams: Promise<Record<string, string | string[]>>;
-}) {
-  const user = await requireUser('/enclosures');
-  const membership = await currentMembership(user);
-  if (!membership) return null;
-  const orgId = membership.organisationId;
+export default async function EnclosuresPage({ searchParams }: SearchParamsProps) {
+  const session = await requireMembership('/enclosures');
+  if (!session) return null;
+  const { user, membership, organisationId: orgId } = session;
   const isKeeper = roleIn(user, orgId) === 'keeper';
   const seesAll = can(user, 'read', { kind: 'member', organisationId: orgId });
   const params = await searchParams;

@@ -7,21 +7,16 @@ import { PageHeader } from '@/components/ui/PageHeader';
 import { button } from '@/components/ui/styles';
 import { TYPICAL_ENCLOSURES } from '@/lib/guided-start/typical-enclosures';
 import { can } from '@/lib/permissions';
-import { currentMembership, requireUser } from '@/lib/session';
+import { requireMembership, type SearchParamsProps } from '@/lib/session';
 import { allSheets } from '@/lib/species/queries';
 import { createAction, proposeAction } from './actions';
 
 export const metadata: Metadata = { title: 'Guided start' };
 
-export default async function GuidedStartPage({
-  searchParams,
-}: {
-  searchParams: Promise<Record<string, string | string[]>>;
-}) {
-  const user = await requireUser('/enclosures/new');
-  const membership = await currentMembership(user);
-  if (!membership) return null;
-  const organisationId = membership.organisationId;
+export default async function GuidedStartPage({ searchParams }: SearchParamsProps) {
+  const session = await requireMembership('/enclosures/new');
+  if (!session) return null;
+  const { user, organisationId } = session;
   const sheets = await allSheets(organisationId);
   const staff = can(user, 'read', { kind: 'member', organisationId });
   const wanted = Number((await searchParams).species);

@@ -7,15 +7,14 @@ import { PageHeader } from '@/components/ui/PageHeader';
 import { button } from '@/components/ui/styles';
 import { allLampTypes } from '@/lib/lamp-types/queries';
 import { can } from '@/lib/permissions';
-import { currentMembership, requireUser } from '@/lib/session';
+import { requireMembership } from '@/lib/session';
 
 export const metadata: Metadata = { title: 'Lamp catalogue' };
 
 export default async function LampCataloguePage() {
-  const user = await requireUser('/lamp-catalogue');
-  const membership = await currentMembership(user);
-  if (!membership) return null;
-  const organisationId = membership.organisationId;
+  const session = await requireMembership('/lamp-catalogue');
+  if (!session) return null;
+  const { user, organisationId } = session;
   const lampTypes = await allLampTypes(organisationId);
   const mayEdit = can(user, 'create', { kind: 'lamp-type', organisationId });
   const add = mayEdit && (

@@ -2,14 +2,14 @@ import type { Metadata } from 'next';
 import { LampTypeForm } from '@/components/catalogue/LampTypeForm';
 import { EntryFormPage } from '@/components/ui/EntryFormPage';
 import { can } from '@/lib/permissions';
-import { currentMembership, requireUser } from '@/lib/session';
+import { requireMembership } from '@/lib/session';
 
 export const metadata: Metadata = { title: 'Add a lamp type' };
 
 export default async function NewLampTypePage() {
-  const user = await requireUser('/lamp-catalogue/new');
-  const membership = await currentMembership(user);
-  if (!membership) return null;
+  const session = await requireMembership('/lamp-catalogue/new');
+  if (!session) return null;
+  const { user, membership } = session;
   return (
     <EntryFormPage
       back={{ href: '/lamp-catalogue', label: 'Lamp catalogue' }}

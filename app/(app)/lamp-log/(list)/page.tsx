@@ -14,7 +14,7 @@ import { lampListView } from '@/lib/lamp-log/list-view';
 import { isExampleData } from '@/lib/organisations/queries';
 import { toSearchParams } from '@/lib/list-view';
 import { can, roleIn } from '@/lib/permissions';
-import { currentMembership, requireUser } from '@/lib/session';
+import { requireMembership, type SearchParamsProps } from '@/lib/session';
 import { LAMP_TECH_IDS, LAMP_TECHS } from '@/simulation';
 
 export const metadata: Metadata = { title: 'Lamp log' };
@@ -23,15 +23,10 @@ export const metadata: Metadata = { title: 'Lamp log' };
  * The organisation's lamps (a keeper: their own), most urgent first, from the stored outlooks: the first
  * page is rendered here for the view the address names; the table fetches the others.
  */
-export default async function LampLogPage({
-  searchParams,
-}: {
-  searchParams: Promise<Record<string, string | string[]>>;
-}) {
-  const user = await requireUser('/lamp-log');
-  const membership = await currentMembership(user);
-  if (!membership) return null;
-  const orgId = membership.organisationId;
+export default async function LampLogPage({ searchParams }: SearchParamsProps) {
+  const session = await requireMembership('/lamp-log');
+  if (!session) return null;
+  const { user, organisationId: orgId } = session;
   const isKeeper = roleIn(user, orgId) === 'keeper';
   const seesAll = can(user, 'read', { kind: 'member', organisationId: orgId });
   const view = lampListView.viewFromSearchParams(toSearchParams(await searchParams));

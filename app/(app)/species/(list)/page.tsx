@@ -5,16 +5,15 @@ import { EmptyState } from '@/components/ui/EmptyState';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { button } from '@/components/ui/styles';
 import { can } from '@/lib/permissions';
-import { currentMembership, requireUser } from '@/lib/session';
+import { requireMembership } from '@/lib/session';
 import { allSheets } from '@/lib/species/queries';
 
 export const metadata: Metadata = { title: 'Species' };
 
 export default async function SpeciesPage() {
-  const user = await requireUser('/species');
-  const membership = await currentMembership(user);
-  if (!membership) return null;
-  const organisationId = membership.organisationId;
+  const session = await requireMembership('/species');
+  if (!session) return null;
+  const { user, organisationId } = session;
   const mayEdit = can(user, 'create', { kind: 'species', organisationId });
   const sheets = await allSheets(organisationId);
   return (

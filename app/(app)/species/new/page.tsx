@@ -2,14 +2,14 @@ import type { Metadata } from 'next';
 import { SpeciesForm } from '@/components/species/SpeciesForm';
 import { EntryFormPage } from '@/components/ui/EntryFormPage';
 import { can } from '@/lib/permissions';
-import { currentMembership, requireUser } from '@/lib/session';
+import { requireMembership } from '@/lib/session';
 
 export const metadata: Metadata = { title: 'New species sheet' };
 
 export default async function NewSpeciesPage() {
-  const user = await requireUser('/species/new');
-  const membership = await currentMembership(user);
-  if (!membership) return null;
+  const session = await requireMembership('/species/new');
+  if (!session) return null;
+  const { user, membership } = session;
   return (
     <EntryFormPage
       back={{ href: '/species', label: 'All species' }}
