@@ -3,6 +3,7 @@
 import { signOut } from 'next-auth/react';
 import { useState, type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
+import { NewPasswordField } from '@/components/auth/NewPasswordField';
 import { Notice } from '@/components/ui/Notice';
 import { button, card } from '@/components/ui/styles';
 import { fieldError } from '@/components/ui/api-client';
@@ -79,16 +80,7 @@ export function AccountSecurity() {
             required
             error={on('currentPassword')}
           />
-          <Field
-            label="New password"
-            name="newPassword"
-            type="password"
-            autoComplete="new-password"
-            minLength={12}
-            required
-            hint="At least 12 characters."
-            error={on('newPassword')}
-          />
+          <NewPasswordField label="New password" name="newPassword" error={on('newPassword')} />
           <Field
             label="New password again"
             name="repeatPassword"

@@ -4,6 +4,7 @@ import { signIn } from 'next-auth/react';
 import { useRouter } from 'next/navigation';
 import { type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
+import { NewPasswordField } from './NewPasswordField';
 import { Notice } from '@/components/ui/Notice';
 import { fieldError } from '@/components/ui/api-client';
 import { button } from '@/components/ui/styles';
@@ -60,16 +61,7 @@ export function AcceptInvitation({ token, email, organisationName, mode }: Props
         <>
           <Field label="Email" name="email" type="email" value={email} readOnly hint="The invited address." />
           <Field label="Your name" name="name" autoComplete="name" required error={errors.name} />
-          <Field
-            label="Password"
-            name="password"
-            type="password"
-            autoComplete="new-password"
-            required
-            minLength={12}
-            hint="At least 12 characters."
-            error={errors.password}
-          />
+          <NewPasswordField error={errors.password} />
         </>
       )}
       <button type="submit" className={`${button.primary} w-full`} disabled={busy}>

@@ -3,6 +3,7 @@
 import { useRouter } from 'next/navigation';
 import { useState, type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
+import { NewPasswordField } from './NewPasswordField';
 import { Notice } from '@/components/ui/Notice';
 import { fieldError } from '@/components/ui/api-client';
 import { button } from '@/components/ui/styles';
@@ -57,13 +58,8 @@ export function ResetPasswordForm() {
   return (
     <form onSubmit={onSubmit} className="space-y-4" noValidate>
       {errors.general && <Notice tone="error">{errors.general}</Notice>}
-      <Field
+      <NewPasswordField
         label="New password"
-        name="password"
-        type="password"
-        autoComplete="new-password"
-        required
-        minLength={12}
         autoFocus
         hint="At least 12 characters. A few unrelated words make a strong one."
         error={errors.password}

@@ -2,6 +2,7 @@
 
 import { useState, type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
+import { NewPasswordField } from './NewPasswordField';
 import { Notice } from '@/components/ui/Notice';
 import { fieldError } from '@/components/ui/api-client';
 import { button } from '@/components/ui/styles';
@@ -59,13 +60,7 @@ export function SignUpForm() {
       {general && <Notice tone="error">{general}</Notice>}
       <Field label="Your name" name="name" autoComplete="name" required error={errors.name} />
       <Field label="Email" name="email" type="email" autoComplete="email" required error={errors.email} />
-      <Field
-        label="Password"
-        name="password"
-        type="password"
-        autoComplete="new-password"
-        required
-        minLength={12}
+      <NewPasswordField
         hint="At least 12 characters. A few unrelated words make a strong one."
         error={errors.password}
       />
