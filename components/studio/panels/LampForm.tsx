@@ -19,6 +19,24 @@ import { useObjectEdit } from './useObjectEdit';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
 import { checkWithinDepth } from './validate';
 
+/** The lamp's output figures: each optional, its technology's typical value shown when left empty. */
+function outputFields(d: (typeof LAMP_TECHS)[keyof typeof LAMP_TECHS]) {
+  return [
+    {
+      key: 'uvbAt30',
+      label: 'UVB at 30 cm',
+      plainUnit: 'µW/cm²',
+      fallback: d.uvbAt30,
+      hint: 'New, bare, straight below',
+    },
+    { key: 'uviPerUvb', label: 'UVI per µW/cm²', fallback: d.uviPerUvb, hint: 'Depends on the spectrum' },
+    { key: 'reflectorGain', label: 'Reflector gain', plainUnit: '×', fallback: 1, hint: '1 = no reflector' },
+    { key: 'beamDeg', label: 'Beam angle', plainUnit: '°', fallback: d.beamDeg },
+    { key: 'watts', label: 'Power', plainUnit: 'W', fallback: d.watts },
+    { key: 'ageMonths', label: 'Age', plainUnit: 'months', fallback: 0, hint: 'Time in use so far' },
+  ] as const;
+}
+
 export function LampForm({ lamp }: { lamp: LampObject }) {
   const { field, replace, units } = useObjectEdit(lamp);
   const { store } = useCommandContext();
@@ -125,57 +143,9 @@ export function LampForm({ lamp }: { lamp: LampObject }) {
       </Section>
       <Section title="Output">
         <Grid2>
-          <NumberField
-            label="UVB at 30 cm"
-            plainUnit="µW/cm²"
-            optional
-            fallback={d.uvbAt30}
-            testId="field-uvbAt30"
-            hint="New, bare, straight below"
-            {...field('uvbAt30', 'plain')}
-          />
-          <NumberField
-            label="UVI per µW/cm²"
-            optional
-            fallback={d.uviPerUvb}
-            testId="field-uviPerUvb"
-            hint="Depends on the spectrum"
-            {...field('uviPerUvb', 'plain')}
-          />
-          <NumberField
-            label="Reflector gain"
-            plainUnit="×"
-            optional
-            fallback={1}
-            testId="field-reflectorGain"
-            hint="1 = no reflector"
-            {...field('reflectorGain', 'plain')}
-          />
-          <NumberField
-            label="Beam angle"
-            plainUnit="°"
-            optional
-            fallback={d.beamDeg}
-            testId="field-beamDeg"
-            {...field('beamDeg', 'plain')}
-          />
-          <NumberField
-            label="Power"
-            plainUnit="W"
-            optional
-            fallback={d.watts}
-            testId="field-watts"
-            {...field('watts', 'plain')}
-          />
-          <NumberField
-            label="Age"
-            plainUnit="months"
-            optional
-            fallback={0}
-            testId="field-ageMonths"
-            hint="Time in use so far"
-            {...field('ageMonths', 'plain')}
-          />
+          {outputFields(d).map(({ key, ...f }) => (
+            <NumberField key={key} optional testId={`field-${key}`} {...f} {...field(key, 'plain')} />
+          ))}
         </Grid2>
       </Section>
     </>
