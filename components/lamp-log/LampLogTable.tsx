@@ -99,45 +99,44 @@ export function LampLogTable({
       </div>
       <fieldset className="mb-4 flex flex-wrap items-end gap-3">
         <legend className="sr-only">Filter the lamps</legend>
-        <Select
-          label="Status"
-          value={filters.status ?? ''}
-          onChange={(ev) => setFilter('status', ev.target.value)}
-          className="w-40"
-        >
-          <option value="">Any in use</option>
-          {STATUSES.map((s) => (
-            <option key={s} value={s}>
-              {STATUS_LABEL[s]}
-            </option>
-          ))}
-        </Select>
-        <Select
-          label="Due within"
-          value={filters.due ?? ''}
-          onChange={(ev) => setFilter('due', ev.target.value)}
-          className="w-36"
-        >
-          <option value="">Any time</option>
-          {DUE_WITHIN_DAYS.map((d) => (
-            <option key={d} value={String(d)}>
-              {d} days
-            </option>
-          ))}
-        </Select>
-        <Select
-          label="Technology"
-          value={filters.tech ?? ''}
-          onChange={(ev) => setFilter('tech', ev.target.value)}
-          className="w-48"
-        >
-          <option value="">Any</option>
-          {techs.map((t) => (
-            <option key={t.id} value={t.id}>
-              {t.label}
-            </option>
-          ))}
-        </Select>
+        {[
+          {
+            key: 'status',
+            label: 'Status',
+            any: 'Any in use',
+            className: 'w-40',
+            options: STATUSES.map((st) => ({ value: st, label: STATUS_LABEL[st] })),
+          },
+          {
+            key: 'due',
+            label: 'Due within',
+            any: 'Any time',
+            className: 'w-36',
+            options: DUE_WITHIN_DAYS.map((d) => ({ value: String(d), label: `${d} days` })),
+          },
+          {
+            key: 'tech',
+            label: 'Technology',
+            any: 'Any',
+            className: 'w-48',
+            options: techs.map((t) => ({ value: t.id, label: t.label })),
+          },
+        ].map((f) => (
+          <Select
+            key={f.key}
+            label={f.label}
+            value={filters[f.key] ?? ''}
+            onChange={(ev) => setFilter(f.key, ev.target.value)}
+            className={f.className}
+          >
+            <option value="">{f.any}</option>
+            {f.options.map((o) => (
+              <option key={o.value} value={o.value}>
+                {o.label}
+              </option>
+            ))}
+          </Select>
+        ))}
         {seesKeepers && (
           <PersonPicker
             label="Keeper"
