@@ -14,6 +14,19 @@ export const HTTP_METHODS = ['GET', 'HEAD', 'POST', 'PUT', 'PATCH', 'DELETE', 'O
 export const ACCESS_CHECK = 'lib/permissions.ts#can';
 export const PIPELINE = 'lib/api/route.ts#route';
 
+/**
+ * The pipeline's factories, each of which makes its handler with route(): where the route's spec (an
+ * object literal with `handler` and perhaps `auth`) or its handler function stands among the arguments,
+ * and whether the factory itself checks access before the handler (ownedRoute loads its thing with
+ * loadOwned): then the factory's own path to `can` counts for the handler.
+ */
+export const PIPELINE_FACTORIES: Record<string, { spec: number } | { handler: number }> = {
+  [PIPELINE]: { spec: 0 },
+  'lib/api/route.ts#ownedRoute': { spec: 2 },
+  'lib/api/csv-import.ts#csvImportRoute': { handler: 1 },
+};
+const CHECKING_FACTORIES = new Set(['lib/api/route.ts#ownedRoute']);
+
 type Decl = { file: string; name: string; node: ts.Node };
 
 export type HandlerReport = {
@@ -192,14 +205,27 @@ export class AccessGraph {
       return { ...report, problem: 'not created by route() from lib/api' };
     }
     const factory = this.binding(decl.file, init.expression.text);
-    if (!factory || `${factory.file}#${factory.name}` !== PIPELINE) {
+    const factoryId = factory && `${factory.file}#${factory.name}`;
+    const made = factoryId ? PIPELINE_FACTORIES[factoryId] : undefined;
+    if (!factory || !factoryId || !made) {
       return { ...report, problem: `created by ${init.expression.text}(), not route() from lib/api` };
     }
     report.viaPipeline = true;
-    const spec = init.arguments[0];
-    if (!spec || !ts.isObjectLiteralExpression(spec)) {
-      return { ...report, problem: 'route() is not given an object literal spec' };
+    // A factory that checks before the handler: its own path to can() is the handler's.
+    const checked = CHECKING_FACTORIES.has(factoryId)
+      ? this.reachesAccessCheck(factory.file, factory.node)
+      : null;
+    if ('handler' in made) {
+      const fn = init.arguments[made.handler];
+      report.accessPath = checked ?? (fn ? this.reachesAccessCheck(decl.file, fn) : null);
+      if (!report.accessPath) report.problem = 'its handler never reaches can()';
+      return report;
     }
+    const spec = init.arguments[made.spec];
+    if (!spec || !ts.isObjectLiteralExpression(spec)) {
+      return { ...report, problem: `${init.expression.text}() is not given an object literal spec` };
+    }
+    report.accessPath = checked;
     for (const p of spec.properties) {
       const key = p.name && ts.isIdentifier(p.name) ? p.name.text : undefined;
       if (key === 'auth') {
@@ -210,7 +236,7 @@ export class AccessGraph {
         if (ts.isPropertyAssignment(p) && ts.isIdentifier(p.initializer)) {
           body = this.binding(decl.file, p.initializer.text)?.node ?? p;
         }
-        report.accessPath = this.reachesAccessCheck(decl.file, body);
+        report.accessPath = checked ?? this.reachesAccessCheck(decl.file, body);
       }
     }
     if (!report.accessPath && !report.public) report.problem = 'its handler never reaches can()';

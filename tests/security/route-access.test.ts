@@ -81,7 +81,7 @@ describe('route handlers under app/api', () => {
       ).toBe(true);
   });
 
-  it('every handler is created by route() from lib/api', () => {
+  it('every handler is created by route() from lib/api (or a factory of the pipeline that calls it)', () => {
     const outside = reports.filter((r) => !r.viaPipeline).map((r) => `${key(r)}: ${r.problem}`);
     expect(outside).toEqual([]);
   });
@@ -179,6 +179,37 @@ describe('the checker', () => {
       'lib/access.ts#allow',
       'lib/permissions.ts#can',
     ]);
+  });
+
+  it('counts the load ownedRoute makes before its handler, and only while it makes it', () => {
+    const route = `
+      import { ownedRoute } from '@/lib/api';
+      export const GET = ownedRoute('lamp', 'read', { handler: async ({ thing }) => thing });`;
+    const real = one(fake({ 'app/api/zz-fake/route.ts': route }), 'app/api/zz-fake/route.ts', 'GET');
+    expect(real.viaPipeline).toBe(true);
+    expect(real.accessPath).toEqual(
+      expect.arrayContaining(['lib/access.ts#loadOwned', 'lib/access.ts#allow', 'lib/permissions.ts#can']),
+    );
+    // The same factory without its load: the handler, which asks nothing, is flagged.
+    const g = fake({
+      'app/api/zz-fake/route.ts': route,
+      'lib/api/route.ts': `
+        export function route(spec: unknown) { return spec; }
+        export function ownedRoute(_kind: string, _action: string, spec: unknown) { return route(spec); }`,
+    });
+    expect(one(g, 'app/api/zz-fake/route.ts', 'GET').problem).toMatch(/never reaches can/);
+  });
+
+  it("follows csvImportRoute's handler to can()", () => {
+    const g = fake({
+      'app/api/zz-fake/route.ts': `
+        import { allow } from '@/lib/api';
+        import { csvImportRoute } from '@/lib/api/csv-import';
+        export const POST = csvImportRoute({}, async ({ user }) => { allow(user, 'create', { kind: 'customer', organisationId: 1 }); });
+        export const PUT = csvImportRoute({}, async () => ({ ok: true }));`,
+    });
+    expect(one(g, 'app/api/zz-fake/route.ts', 'POST').accessPath).toContain('lib/permissions.ts#can');
+    expect(one(g, 'app/api/zz-fake/route.ts', 'PUT').problem).toMatch(/never reaches can/);
   });
 
   it('marks auth: false handlers public (the allow-list above then decides)', () => {
