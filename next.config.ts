@@ -40,11 +40,6 @@ const config: NextConfig = {
   },
   reactStrictMode: true,
   experimental: {
-    // The stylesheet goes in the page's HTML as a <style> (admitted by the page's policy through the hash
-    // of its content: lib/security/inline-css.ts), not as a file the first paint waits for: on a busy server that second request was the studio's
-    // field picture's last wait before it could be painted. The app has one stylesheet (36 kB, about
-    // 8 kB compressed) that every page uses.
-    inlineCss: true,
     // Turbopack keeps a cache of a build on disk for the next one (minutes to write on a busy 2-core
     // machine). A CI run builds once from a fresh clone and throws the folder away: no cache there.
     turbopackFileSystemCacheForBuild: process.env.CI !== 'true',

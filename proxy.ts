@@ -1,7 +1,6 @@
 import { NextResponse, type NextRequest } from 'next/server';
 import { hasControlCharacter } from '@/lib/auth/return-to';
 import { contentSecurityPolicy, makeNonce } from '@/lib/security/csp';
-import { inlineStyleHashes } from '@/lib/security/inline-css';
 
 /** Query parameters that name a page to return to: a control character in one is an attack, not a typo. */
 const RETURN_PARAMS = ['callbackUrl', 'returnTo'];
@@ -23,11 +22,7 @@ export function proxy(request: NextRequest) {
       : new NextResponse(message, { status: 400, headers: { 'content-type': 'text/plain; charset=utf-8' } });
   }
   if (request.nextUrl.pathname.startsWith('/api/')) return NextResponse.next();
-  const csp = contentSecurityPolicy({
-    nonce: makeNonce(),
-    dev: process.env.NODE_ENV === 'development',
-    styleHashes: inlineStyleHashes(),
-  });
+  const csp = contentSecurityPolicy({ nonce: makeNonce(), dev: process.env.NODE_ENV === 'development' });
   const headers = new Headers(request.headers);
   headers.set('content-security-policy', csp);
   const response = NextResponse.next({ request: { headers } });

@@ -6,8 +6,7 @@
  *   so an injected <script> or inline handler never runs. Next puts the nonce on its own scripts when
  *   it finds 'nonce-…' in the request's CSP header. 'self' is ignored by browsers that know
  *   'strict-dynamic' and kept for those that do not.
- * - style-src-elem: our CSS files, nonce-carrying <style> elements (Next's own inline styles), and the
- *   build's stylesheet that Next writes into the HTML, by the hash of its content (inline-css.ts).
+ * - style-src-elem: our CSS files and nonce-carrying <style> elements (Next's own inline styles).
  * - style-src-attr 'unsafe-inline': React renders `style={{…}}` props into style="…" attributes in the
  *   server HTML (legend swatches, a few sizes), and Konva and next/dynamic set style attributes on their
  *   containers; a nonce cannot cover an attribute. Style attributes cannot run script, and <style>
@@ -16,20 +15,15 @@
  *   start from a blob URL.
  * - img-src data: blob: — canvas exports (PNG) and the backdrop photo preview are data/blob URLs.
  */
-export type CspOptions = {
-  nonce: string;
-  dev?: boolean;
-  /** `'sha256-…'` sources of the stylesheets inlined in the page (inline-css.ts). */
-  styleHashes?: readonly string[];
-};
+export type CspOptions = { nonce: string; dev?: boolean };
 
-export function contentSecurityPolicy({ nonce, dev = false, styleHashes = [] }: CspOptions): string {
+export function contentSecurityPolicy({ nonce, dev = false }: CspOptions): string {
   const directives: Record<string, string[]> = {
     'default-src': ["'self'"],
     // React in development rebuilds server error stacks with eval; production never evaluates strings.
     'script-src': ["'self'", `'nonce-${nonce}'`, "'strict-dynamic'", ...(dev ? ["'unsafe-eval'"] : [])],
-    'style-src': ["'self'", `'nonce-${nonce}'`, ...styleHashes],
-    'style-src-elem': ["'self'", `'nonce-${nonce}'`, ...styleHashes],
+    'style-src': ["'self'", `'nonce-${nonce}'`],
+    'style-src-elem': ["'self'", `'nonce-${nonce}'`],
     'style-src-attr': ["'unsafe-inline'"],
     'img-src': ["'self'", 'data:', 'blob:'],
     'font-src': ["'self'"],

@@ -1,9 +1,7 @@
 // The nonce-based Content-Security-Policy (proxy.ts) in Chromium on the production build: the landing
 // page, sign-in, the studio (with its field worker) and a share page work with not one CSP violation,
 // counted both from the console ("Refused to …") and from `securitypolicyviolation` events. A nonce is
-// fresh on every request and on every script Next writes into the page; its inlined stylesheet is
-// admitted by its hash.
-import { createHash } from 'node:crypto';
+// fresh on every request and on every script Next writes into the page.
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { DEMO_PASSWORDS, demoSignIn } from '@/lib/demo/scenario';
@@ -64,16 +62,6 @@ describe('nonce-based Content-Security-Policy', () => {
       const scripts = [...html.matchAll(/<script\b[^>]*>/g)].map((m) => m[0]);
       expect(scripts.length).toBeGreaterThan(0);
       for (const tag of scripts) expect(tag).toContain(`nonce="${nonce}"`);
-      // The stylesheet is in the HTML (next.config.ts, inlineCss), so the first paint waits for no file.
-      // Every <style> is admitted by this response's nonce or by the hash of exactly its content.
-      const styleElemSrc = /style-src-elem ([^;]*)/.exec(csp ?? '')?.[1] ?? '';
-      const styles = [...html.matchAll(/<style\b([^>]*)>([\s\S]*?)<\/style>/g)];
-      expect(styles.length).toBeGreaterThan(0);
-      for (const [, attrs, text] of styles) {
-        const hash = `'sha256-${createHash('sha256').update(text!).digest('base64')}'`;
-        expect(attrs!.includes(`nonce="${nonce}"`) || styleElemSrc.split(' ').includes(hash)).toBe(true);
-      }
-      expect(html).not.toMatch(/<link\b[^>]*rel="stylesheet"/);
     }
     expect(nonces.size).toBe(3);
   });

@@ -27,11 +27,9 @@ describe('security headers on the running app', () => {
       }
       expect(res.headers.get('x-powered-by')).toBeNull();
       if (PAGES.includes(path)) {
-        const { directives, nonce, hashes } = parsePolicy(res.headers.get('content-security-policy') ?? '');
+        const { directives, nonce } = parsePolicy(res.headers.get('content-security-policy') ?? '');
         expect(directives).toEqual(PAGE_CSP_DIRECTIVES);
         expect(nonce).toBeTruthy();
-        // The build's inlined stylesheet, admitted by its hash for style elements and nothing else.
-        expect(Object.keys(hashes).sort()).toEqual(['style-src', 'style-src-elem']);
       }
     });
   }

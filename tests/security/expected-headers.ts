@@ -26,28 +26,13 @@ export const PAGE_CSP_DIRECTIVES: Record<string, string> = {
   'frame-ancestors': "'none'",
 };
 
-/**
- * Splits a policy into its directives, with the nonce replaced by NONCE and the hash sources (the
- * production build's inlined stylesheets: lib/security/inline-css.ts) taken out into `hashes`, by
- * directive; returns the nonce too.
- */
-export function parsePolicy(policy: string): {
-  directives: Record<string, string>;
-  nonce: string | null;
-  hashes: Record<string, string[]>;
-} {
+/** Splits a policy into its directives, with the nonce replaced by NONCE; returns the nonce too. */
+export function parsePolicy(policy: string): { directives: Record<string, string>; nonce: string | null } {
   const nonce = /'nonce-([^']+)'/.exec(policy)?.[1] ?? null;
   const directives: Record<string, string> = {};
-  const hashes: Record<string, string[]> = {};
   for (const part of policy.split(';')) {
     const [name, ...values] = part.trim().split(/\s+/);
-    if (!name) continue;
-    const isHash = (v: string) => /^'sha(256|384|512)-/.test(v);
-    if (values.some(isHash)) hashes[name] = values.filter(isHash);
-    directives[name] = values
-      .filter((v) => !isHash(v))
-      .join(' ')
-      .replaceAll(`'nonce-${nonce}'`, "'nonce-NONCE'");
+    if (name) directives[name] = values.join(' ').replaceAll(`'nonce-${nonce}'`, "'nonce-NONCE'");
   }
-  return { directives, nonce, hashes };
+  return { directives, nonce };
 }

@@ -64,14 +64,6 @@ describe('the page Content-Security-Policy (proxy.ts)', () => {
     );
   });
 
-  it("admits the build's inlined stylesheets by their hashes, in style elements only", () => {
-    const hash = "'sha256-3NukuEgz3eCqFp2865Fm74xAoTPS6ruvf41GmFVYVzg='";
-    const { directives, hashes } = parsePolicy(contentSecurityPolicy({ nonce: 'n', styleHashes: [hash] }));
-    expect(hashes).toEqual({ 'style-src': [hash], 'style-src-elem': [hash] });
-    // Besides the hash, the policy is the same as without one.
-    expect(directives).toEqual(PAGE_CSP_DIRECTIVES);
-  });
-
   it('makes a fresh, unguessable nonce every time', () => {
     const nonces = new Set(Array.from({ length: 200 }, makeNonce));
     expect(nonces.size).toBe(200);
