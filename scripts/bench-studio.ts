@@ -11,7 +11,9 @@
  *
  * Two times per opening, from the navigation's start: `field-visible` (the field is first on screen,
  * picture or computed) and `field-computed` (the studio's engine worker answered). Prints median and p90
- * of both with the load average (the machine is shared), and as its LAST line one JSON object.
+ * of both with the load average (the machine is shared), the medians of where the wait before the field
+ * went (first byte, HTML complete, stylesheet file, first paint, long tasks), and as its LAST line one
+ * JSON object.
  * `--no-build` reuses .next/bench-build when it exists.
  */
 import { existsSync } from 'node:fs';
