@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { DEMO_SHOP } from '@/lib/demo/scenario';
 import { screenshot, signInAsDemo, withBrowser } from './harness';
+import { api, demoKeeperEnclosure } from './journey-helpers';
 
 // The lamp log in Chromium on the demo scenario: the table, a lamp's chart with its fitted curve,
 // typing in a reading, a CSV with a bad row, and a backdrop photo served back through its own route.
@@ -210,4 +211,55 @@ describe('lamp log', () => {
     await anonymous.close();
     await screenshot(page, 'lamp-log-photo');
   });
+
+  it('pages with Next and Previous from the rows shown (the cursor in the address), and Back returns', async () => {
+    const page = await asStaff();
+    const slow = { timeout: 60_000 };
+    // An enclosure of this test's own with 55 lamps: three pages of 25, filtered to it.
+    const { organisationId, enclosureId } = await demoKeeperEnclosure(page, 'Paged lamps');
+    const types = await api(page, 'GET', `/api/lamp-types?organisationId=${organisationId}&limit=1`);
+    const lampTypeId = (types.body.items as { id: number }[])[0]!.id;
+    for (let i = 1; i <= 55; i++) {
+      const made = await api(page, 'POST', `/api/enclosures/${enclosureId}/lamps`, {
+        lampTypeId,
+        label: `Paged lamp ${String(i).padStart(2, '0')}`,
+        firstUsedOn: '2026-01-01',
+        hoursPerDay: 12,
+      });
+      expect(made.status).toBe(201);
+    }
+    const table = page.getByTestId('lamp-table');
+    const labels = async () =>
+      (await table.locator('tbody tr').allInnerTexts()).map((r) => /Paged lamp \d+/.exec(r)?.[0]);
+    const expectRows = (from: number, to: number) =>
+      expect
+        .poll(labels, slow)
+        .toEqual(
+          Array.from({ length: to - from + 1 }, (_, i) => `Paged lamp ${String(from + i).padStart(2, '0')}`),
+        );
+    await page.goto(`/lamp-log?enclosure=${enclosureId}&sort=lamp&dir=asc`);
+    await expectRows(1, 25);
+    const next = page.getByRole('button', { name: 'Next page' });
+    const previous = page.getByRole('button', { name: 'Previous page' });
+    await next.click();
+    await page.waitForURL((u) => u.searchParams.get('page') === '2' && u.searchParams.has('after'));
+    await expectRows(26, 50);
+    await next.click();
+    await page.waitForURL((u) => u.searchParams.get('page') === '3' && u.searchParams.has('after'));
+    await expectRows(51, 55);
+    // Previous seeks back from the first row shown.
+    await previous.click();
+    await page.waitForURL((u) => u.searchParams.get('page') === '2' && u.searchParams.has('before'));
+    await expectRows(26, 50);
+    // Back returns to the page the address names, and the same address opened afresh shows it too.
+    await page.goBack();
+    await page.waitForURL((u) => u.searchParams.get('page') === '3');
+    await expectRows(51, 55);
+    await page.reload();
+    await expectRows(51, 55);
+    await previous.click();
+    await previous.click();
+    await page.waitForURL((u) => !u.searchParams.has('page') && !u.searchParams.has('before'));
+    await expectRows(1, 25);
+  }, 300_000);
 });
