@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import type { ReactNode } from 'react';
 import { notFound } from 'next/navigation';
 import { ExampleDataMark } from '@/components/lamp-log/ExampleDataMark';
 import { BarChart } from '@/components/population/BarChart';
@@ -9,7 +10,7 @@ import { card } from '@/components/ui/styles';
 import { isExampleData } from '@/lib/organisations/queries';
 import { can } from '@/lib/permissions';
 import { counterFigures, WEEKS, type ShareRow } from '@/lib/population/dashboard';
-import { currentMembership, requireUser } from '@/lib/session';
+import { requireMembership } from '@/lib/session';
 import { formatMoment } from '@/lib/time/format';
 import { viewerZone } from '@/lib/time/viewer-zone';
 
@@ -25,11 +26,13 @@ const shareBars = (rows: ShareRow[]) =>
 
 /** What the counter's tests add up to: tests a week, and the lamps it said to replace. Owners and staff. */
 export default async function CounterDashboardPage() {
-  const user = await requireUser('/counter/dashboard');
-  const membership = await currentMembership(user);
-  if (!membership || !can(user, 'read', { kind: 'shop-figures', organisationId: membership.organisationId }))
+  const session = await requireMembership('/counter/dashboard');
+  if (
+    !session ||
+    !can(session.user, 'read', { kind: 'shop-figures', organisationId: session.organisationId })
+  )
     notFound();
-  const organisationId = membership.organisationId;
+  const { organisationId } = session;
   const [figures, example, zone] = await Promise.all([
     counterFigures(organisationId),
     isExampleData(organisationId),
@@ -45,13 +48,12 @@ export default async function CounterDashboardPage() {
       />
       {example && <ExampleDataMark />}
       <div className="space-y-6">
-        <section className={`${card} space-y-3 p-5`} aria-labelledby="weekly-heading">
-          <h2 id="weekly-heading" className="text-lead font-semibold text-basalt-900">
-            Tests a week
-          </h2>
-          <p className="text-body text-basalt-700" data-testid="tests-total">
-            {figures.tests} counter test{figures.tests === 1 ? '' : 's'} in the last {WEEKS} weeks.
-          </p>
+        <FigureSection
+          id="weekly"
+          title="Tests a week"
+          lead={`${figures.tests} counter test${figures.tests === 1 ? '' : 's'} in the last ${WEEKS} weeks.`}
+          leadTestId="tests-total"
+        >
           <BarChart
             id="tests-per-week"
             title={`Counter tests a week, last ${WEEKS} weeks`}
@@ -60,7 +62,7 @@ export default async function CounterDashboardPage() {
             labelHeader="Week of"
             valueHeader="Tests"
           />
-        </section>
+        </FigureSection>
         {figures.judged === 0 ? (
           <p className={`${card} p-5 text-body text-basalt-800`} data-testid="no-verdicts">
             No UV lamp has been judged at the counter yet: the shares of lamps to replace appear after the
@@ -68,14 +70,11 @@ export default async function CounterDashboardPage() {
           </p>
         ) : (
           <>
-            <section className={`${card} space-y-3 p-5`} aria-labelledby="tech-heading">
-              <h2 id="tech-heading" className="text-lead font-semibold text-basalt-900">
-                Lamps to replace, by technology
-              </h2>
-              <p className="text-body text-basalt-700">
-                Share of the {figures.judged} UV lamps judged at the counter whose latest verdict was
-                “replace”.
-              </p>
+            <FigureSection
+              id="tech"
+              title="Lamps to replace, by technology"
+              lead={`Share of the ${figures.judged} UV lamps judged at the counter whose latest verdict was “replace”.`}
+            >
               <BarChart
                 id="replace-by-technology"
                 title="Share of counter lamps judged “replace”, by technology"
@@ -86,15 +85,12 @@ export default async function CounterDashboardPage() {
                 valueHeader="Replace"
                 noteHeader="Lamps"
               />
-            </section>
-            <section className={`${card} space-y-3 p-5`} aria-labelledby="age-heading">
-              <h2 id="age-heading" className="text-lead font-semibold text-basalt-900">
-                Lamps to replace, by age
-              </h2>
-              <p className="text-body text-basalt-700">
-                By the lamp’s age at its latest test (calendar months since first switch-on, as the customer
-                gave it).
-              </p>
+            </FigureSection>
+            <FigureSection
+              id="age"
+              title="Lamps to replace, by age"
+              lead="By the lamp’s age at its latest test (calendar months since first switch-on, as the customer gave it)."
+            >
               <BarChart
                 id="replace-by-age"
                 title="Share of counter lamps judged “replace”, by age"
@@ -105,7 +101,7 @@ export default async function CounterDashboardPage() {
                 valueHeader="Replace"
                 noteHeader="Lamps"
               />
-            </section>
+            </FigureSection>
           </>
         )}
         <p className="text-body text-basalt-700">
@@ -118,5 +114,32 @@ export default async function CounterDashboardPage() {
         </p>
       </div>
     </>
+  );
+}
+
+/** One card of figures: its heading (which names the section for screen readers), what it counts, and its chart. */
+function FigureSection({
+  id,
+  title,
+  lead,
+  leadTestId,
+  children,
+}: {
+  id: string;
+  title: string;
+  lead: string;
+  leadTestId?: string;
+  children: ReactNode;
+}) {
+  return (
+    <section className={`${card} space-y-3 p-5`} aria-labelledby={`${id}-heading`}>
+      <h2 id={`${id}-heading`} className="text-lead font-semibold text-basalt-900">
+        {title}
+      </h2>
+      <p className="text-body text-basalt-700" data-testid={leadTestId}>
+        {lead}
+      </p>
+      {children}
+    </section>
   );
 }
