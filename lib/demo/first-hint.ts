@@ -1,7 +1,8 @@
 import 'server-only';
 import type { CurrentUser } from '@/lib/auth/session-user';
 import { can } from '@/lib/permissions';
-import { Design, Enclosure, Organisation, Variant } from '@/models';
+import { Design, Enclosure, Variant } from '@/models';
+import { isExampleData } from '@/lib/organisations/queries';
 import { DESERT_DESIGN_NAME, DESERT_ENCLOSURE_NAME, IMPROVED_VARIANT_NAME } from './designs';
 
 /** The cookie that remembers, per browser, that the first-visit hint was put away. */
@@ -17,8 +18,7 @@ export async function firstDesignHint(
   user: CurrentUser,
   organisationId: number,
 ): Promise<{ designId: number; compare: { a: number; b: number } | null } | null> {
-  const organisation = await Organisation.findByPk(organisationId, { attributes: ['id', 'exampleData'] });
-  if (!organisation?.exampleData) return null;
+  if (!(await isExampleData(organisationId))) return null;
   // The first made of that name. Read through the organisation's index and picked here: ordered by id in
   // the query, the database may walk the whole table's primary key, every organisation's enclosures.
   const named = await Enclosure.findAll({
