@@ -125,6 +125,25 @@ describe('Autosave', () => {
     expect(sameDesign(server.design, moved(mine, 1))).toBe(true);
   });
 
+  it('takes a stale answer that holds exactly the design sent as saved: its own save whose answer was lost', async () => {
+    const { a, server, storage } = setup();
+    const mine = moved(server.design, 3);
+    // The same edit already reached the server (from this studio, before a reload) at a newer version.
+    server.version = 8;
+    server.design = mine;
+    a.change(mine);
+    await vi.advanceTimersByTimeAsync(DEBOUNCE_MS);
+    expect(a.state.kind).toBe('saved');
+    expect(a.version).toBe(8);
+    expect(storage.data.size).toBe(0);
+    // The next edit is based on that version and saves without a conflict.
+    a.change(moved(mine, 1));
+    await vi.advanceTimersByTimeAsync(DEBOUNCE_MS);
+    expect(a.state.kind).toBe('saved');
+    expect(server.version).toBe(9);
+    expect(server.saves.at(-1)?.baseVersion).toBe(8);
+  });
+
   it('or takes theirs, dropping the local copy', async () => {
     const { a, server, storage } = setup();
     server.version = 9;

@@ -152,18 +152,22 @@ export class Autosave {
     this.setState({ kind: 'saving' });
     try {
       const r = await this.p.save(sending, this.baseVersion);
-      if ('conflict' in r) {
+      if ('conflict' in r && !sameDesign(r.conflict.design, sending)) {
         this.setState({ kind: 'conflict', theirs: r.conflict });
         return;
       }
+      // A stale version whose stored design is exactly the one sent is this studio's own earlier save
+      // that reached the server while its answer did not (a dropped connection, a save sent as the page
+      // was left): nothing of anyone's is lost, so it counts as saved at the server's version.
+      const version = 'conflict' in r ? r.conflict.version : r.version;
       this.attempt = 0;
-      this.baseVersion = r.version;
+      this.baseVersion = version;
       this.saved = sending;
       if (!this.hasUnsaved) clearBackup(this.storage, this.p.key);
       else
         writeBackup(this.storage, this.p.key, {
           design: this.latest,
-          baseVersion: r.version,
+          baseVersion: version,
           savedAt: this.now(),
         });
       this.setState({ kind: 'saved', at: this.now() });
