@@ -160,21 +160,13 @@ export function enclosureRowJson(e: Enclosure & { keeper?: User | null }) {
 
 export type EnclosureRowJson = ReturnType<typeof enclosureRowJson>;
 
+/** The whole enclosure: its list row plus what only its own page and the API show. */
 export function enclosureJson(e: Enclosure & { keeper?: User | null }) {
   return {
-    id: e.id,
+    ...enclosureRowJson(e),
     organisationId: e.organisationId,
-    keeperId: e.keeperId,
-    keeperName: e.keeper?.name ?? null,
-    name: e.name,
-    widthCm: e.widthCm,
-    heightCm: e.heightCm,
-    depthCm: e.depthCm,
-    speciesName: e.speciesName ?? null,
-    animalName: e.animalName ?? null,
     notes: e.notes ?? null,
     createdAt: e.createdAt.toISOString(),
-    updatedAt: e.updatedAt.toISOString(),
   };
 }
 
