@@ -3,20 +3,12 @@
 import { useMemo, useState } from 'react';
 import { PersonPicker, type PickedPerson } from '@/components/people/PersonPicker';
 import { Select } from '@/components/ui/Select';
-import { ListLoadError, ListPager, ListSearchBox } from '@/components/ui/ServerListParts';
-import { Table } from '@/components/ui/Table';
+import { ServerListFrame } from '@/components/ui/ServerListFrame';
 import { button } from '@/components/ui/styles';
 import { useLengthUnit } from '@/components/ui/units';
 import { useServerList } from '@/components/ui/useServerList';
 import type { LampListPage } from '@/lib/lamp-log/list-queries';
-import type { ListSeek } from '@/lib/list-view';
-import {
-  DUE_WITHIN_DAYS,
-  LAMP_PAGE_SIZE,
-  lampListView,
-  MAX_LAMP_SEARCH,
-  type LampListView,
-} from '@/lib/lamp-log/list-view';
+import { DUE_WITHIN_DAYS, lampListView, type LampListView } from '@/lib/lamp-log/list-view';
 import { STATUS_LABEL, STATUSES } from '@/lib/lamp-log/status';
 import { lampColumns } from './LampTable';
 
@@ -42,166 +34,117 @@ export function LampLogTable({
   initial: { view: LampListView; page: LampListPage };
 }) {
   const [unit] = useLengthUnit();
-  const { view, draft, setDraft, show, result } = useServerList({
+  const list = useServerList({
     codec: lampListView,
     endpoint: '/api/lamps',
     scope: { organisationId },
     initial,
   });
   const columns = useMemo(() => lampColumns(unit, true), [unit]);
-  const data = result.data;
-  const items = useMemo(() => data?.items ?? [], [data]);
-  const total = data?.total ?? 0;
-  const pages = lampListView.pageCount(total);
-  const stale = result.isPlaceholderData || !data;
-  const busy = result.isFetching && stale;
-  const filters = view.filters ?? {};
+  const filters = list.view.filters ?? {};
   const filtered = Object.keys(filters).some((k) => k !== 'retired' && k !== 'enclosure');
   const [picked, setPicked] = useState<PickedPerson | null>(keeper);
   // Back and Forward change the filter without this picker: show nobody rather than a stale name.
   const shownKeeper = filters.keeper && picked && String(picked.id) === filters.keeper ? picked : null;
-  // Next and Previous start from this page's last or first row (the cursors its answer carries), so the
-  // server seeks through the index instead of counting rows off; only while those rows are the ones shown.
-  const seekTo = (page: number): ListSeek | undefined => {
-    if (stale || !data || page === 1) return undefined;
-    if (page === view.page + 1 && data.cursors.next) return { after: data.cursors.next };
-    if (page === view.page - 1 && data.cursors.prev) return { before: data.cursors.prev };
-    return undefined;
-  };
   const setFilter = (key: string, value: string) => {
     const next = { ...filters };
     if (value) next[key] = value;
     else delete next[key];
-    show({ filters: next, page: 1 });
+    list.show({ filters: next, page: 1 });
   };
 
   return (
-    <div>
-      <div className="mb-3 flex flex-wrap items-end gap-3">
-        <div className="grow">
-          <ListSearchBox
-            label="Search lamps"
-            value={draft}
-            onChange={setDraft}
-            maxLength={MAX_LAMP_SEARCH}
-            placeholder="Lamp, lamp type, enclosure or species"
-            status={
-              busy
-                ? 'Loading lamps…'
-                : stale
-                  ? ''
-                  : view.q || filtered
-                    ? `${total} ${total === 1 ? 'lamp matches' : 'lamps match'}`
-                    : `${total} ${total === 1 ? 'lamp' : 'lamps'}`
-            }
-          />
-        </div>
-      </div>
-      <fieldset className="mb-4 flex flex-wrap items-end gap-3">
-        <legend className="sr-only">Filter the lamps</legend>
-        {[
-          {
-            key: 'status',
-            label: 'Status',
-            any: 'Any in use',
-            className: 'w-40',
-            options: STATUSES.map((st) => ({ value: st, label: STATUS_LABEL[st] })),
-          },
-          {
-            key: 'due',
-            label: 'Due within',
-            any: 'Any time',
-            className: 'w-36',
-            options: DUE_WITHIN_DAYS.map((d) => ({ value: String(d), label: `${d} days` })),
-          },
-          {
-            key: 'tech',
-            label: 'Technology',
-            any: 'Any',
-            className: 'w-48',
-            options: techs.map((t) => ({ value: t.id, label: t.label })),
-          },
-        ].map((f) => (
-          <Select
-            key={f.key}
-            label={f.label}
-            value={filters[f.key] ?? ''}
-            onChange={(ev) => setFilter(f.key, ev.target.value)}
-            className={f.className}
-          >
-            <option value="">{f.any}</option>
-            {f.options.map((o) => (
-              <option key={o.value} value={o.value}>
-                {o.label}
-              </option>
-            ))}
-          </Select>
-        ))}
-        {seesKeepers && (
-          <PersonPicker
-            label="Keeper"
-            organisationId={organisationId}
-            people="keepers"
-            value={shownKeeper}
-            clearable
-            placeholder="Anyone"
-            onChange={(p) => {
-              setPicked(p);
-              setFilter('keeper', p ? String(p.id) : '');
-            }}
-            className="w-56"
-          />
-        )}
-        <label className="flex items-center gap-2 pb-2 text-body text-basalt-700">
-          <input
-            type="checkbox"
-            checked={filters.retired === '1'}
-            onChange={(ev) => setFilter('retired', ev.target.checked ? '1' : '')}
-          />
-          Include retired lamps
-        </label>
-      </fieldset>
-      {result.isError && (
-        <ListLoadError what="lamps" message={result.error.message} retry={() => void result.refetch()} />
-      )}
-      <Table
-        data={items}
-        columns={columns}
-        caption="Lamps"
-        rowKey={(l) => l.id}
-        sort={{
-          sort: view.sort,
-          onSort: (column) => show({ sort: lampListView.nextSort(view.sort, column), page: 1 }),
-        }}
-        stale={stale}
-        busy={busy}
-        rowClassName="align-top hover:bg-basalt-50"
-        testId="lamp-table"
-      >
-        {!stale && total === 0 && (
-          <div className="px-4 py-6 text-center text-body text-basalt-600" role="status">
-            <p>{view.q ? `No lamp matches “${view.q}” here.` : 'No lamp matches these filters.'}</p>
-            <button
-              type="button"
-              className={`${button.quiet} mt-2`}
-              onClick={() => {
-                setDraft('');
-                show({ q: '', filters: {}, page: 1 });
-              }}
+    <ServerListFrame
+      list={list}
+      codec={lampListView}
+      noun={{ one: 'lamp', many: 'lamps', caption: 'Lamps' }}
+      placeholder="Lamp, lamp type, enclosure or species"
+      narrowed={filtered}
+      filters={
+        <fieldset className="mb-4 flex flex-wrap items-end gap-3">
+          <legend className="sr-only">Filter the lamps</legend>
+          {[
+            {
+              key: 'status',
+              label: 'Status',
+              any: 'Any in use',
+              className: 'w-40',
+              options: STATUSES.map((st) => ({ value: st, label: STATUS_LABEL[st] })),
+            },
+            {
+              key: 'due',
+              label: 'Due within',
+              any: 'Any time',
+              className: 'w-36',
+              options: DUE_WITHIN_DAYS.map((d) => ({ value: String(d), label: `${d} days` })),
+            },
+            {
+              key: 'tech',
+              label: 'Technology',
+              any: 'Any',
+              className: 'w-48',
+              options: techs.map((t) => ({ value: t.id, label: t.label })),
+            },
+          ].map((f) => (
+            <Select
+              key={f.key}
+              label={f.label}
+              value={filters[f.key] ?? ''}
+              onChange={(ev) => setFilter(f.key, ev.target.value)}
+              className={f.className}
             >
-              Clear the search and filters
-            </button>
-          </div>
-        )}
-      </Table>
-      <ListPager
-        page={view.page}
-        pageSize={LAMP_PAGE_SIZE}
-        total={total}
-        pages={pages}
-        noun="lamps"
-        onPage={(page) => show({ page, seek: seekTo(page) })}
-      />
-    </div>
+              <option value="">{f.any}</option>
+              {f.options.map((o) => (
+                <option key={o.value} value={o.value}>
+                  {o.label}
+                </option>
+              ))}
+            </Select>
+          ))}
+          {seesKeepers && (
+            <PersonPicker
+              label="Keeper"
+              organisationId={organisationId}
+              people="keepers"
+              value={shownKeeper}
+              clearable
+              placeholder="Anyone"
+              onChange={(p) => {
+                setPicked(p);
+                setFilter('keeper', p ? String(p.id) : '');
+              }}
+              className="w-56"
+            />
+          )}
+          <label className="flex items-center gap-2 pb-2 text-body text-basalt-700">
+            <input
+              type="checkbox"
+              checked={filters.retired === '1'}
+              onChange={(ev) => setFilter('retired', ev.target.checked ? '1' : '')}
+            />
+            Include retired lamps
+          </label>
+        </fieldset>
+      }
+      empty={
+        <>
+          <p>{list.view.q ? `No lamp matches “${list.view.q}” here.` : 'No lamp matches these filters.'}</p>
+          <button
+            type="button"
+            className={`${button.quiet} mt-2`}
+            onClick={() => {
+              list.setDraft('');
+              list.show({ q: '', filters: {}, page: 1 });
+            }}
+          >
+            Clear the search and filters
+          </button>
+        </>
+      }
+      columns={columns}
+      rowKey={(l) => l.id}
+      rowClassName="align-top hover:bg-basalt-50"
+      testId="lamp-table"
+    />
   );
 }

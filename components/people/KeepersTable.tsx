@@ -3,10 +3,10 @@
 import { LocalTime } from '@/components/ui/LocalTime';
 import Link from '@/components/ui/Link';
 import { link } from '@/components/ui/styles';
+import { ServerListFrame } from '@/components/ui/ServerListFrame';
 import type { TableColumn } from '@/components/ui/Table';
 import { keeperListView, type KeeperListView, type KeeperSortColumn } from '@/lib/people/list-view';
-import { PeopleListFrame } from './PeopleListFrame';
-import { type KeeperRow, type PeoplePage, useKeeperList } from './usePeopleList';
+import { type KeeperRow, type PeoplePage, peopleFrame, useKeeperList } from './usePeopleList';
 
 export type { KeeperRow } from './usePeopleList';
 
@@ -48,11 +48,12 @@ export function KeepersTable({
   initial: { view: KeeperListView; page: PeoplePage<KeeperRow> };
 }) {
   return (
-    <PeopleListFrame
+    <ServerListFrame
       noun={{ one: 'keeper', many: 'keepers', caption: 'Keepers' }}
-      state={useKeeperList(organisationId, initial)}
+      list={useKeeperList(organisationId, initial)}
       codec={keeperListView}
       columns={columns}
+      {...peopleFrame}
     />
   );
 }

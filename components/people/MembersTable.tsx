@@ -1,11 +1,11 @@
 'use client';
 
 import { useMemo } from 'react';
+import { ServerListFrame } from '@/components/ui/ServerListFrame';
 import type { TableColumn } from '@/components/ui/Table';
 import { memberListView, type MemberListView, type MemberSortColumn } from '@/lib/people/list-view';
 import { MemberActions } from './MemberActions';
-import { PeopleListFrame } from './PeopleListFrame';
-import { type MemberRow, type PeoplePage, useMemberList } from './usePeopleList';
+import { type MemberRow, type PeoplePage, peopleFrame, useMemberList } from './usePeopleList';
 
 export type { MemberRow } from './usePeopleList';
 
@@ -66,11 +66,12 @@ export function MembersTable({
     [organisationId, selfId, manages],
   );
   return (
-    <PeopleListFrame
+    <ServerListFrame
       noun={{ one: 'member', many: 'members', caption: 'Members' }}
-      state={state}
+      list={state}
       codec={memberListView}
       columns={columns}
+      {...peopleFrame}
     />
   );
 }

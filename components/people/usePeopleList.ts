@@ -44,3 +44,10 @@ export function useMemberList(
     initial,
   });
 }
+
+/** The keepers and members tables alike: people are searched by name or e-mail, a row a person. */
+export const peopleFrame = {
+  placeholder: 'Name or e-mail',
+  rowKey: (row: { userId: number }) => row.userId,
+  rowClassName: '',
+};

@@ -97,3 +97,8 @@ export function useServerList<C extends string, P extends { total: number }>({
 
   return { view, draft, setDraft, clearSearch, show, result };
 }
+
+/** What `useServerList` gives a list's frame: its view, the search box's draft, and the rows' query. */
+export type ServerList<C extends string, P extends { total: number }> = ReturnType<
+  typeof useServerList<C, P>
+>;
