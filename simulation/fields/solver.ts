@@ -130,18 +130,23 @@ export class FieldSolver {
     const air = new Float64Array(ny);
     for (let j = 0; j < ny; j++)
       air[j] = airTempC((j + 0.5) * cell, scene.height, scene.roomC, scene.airRiseK);
-    const n = used.length;
     // Totals are always summed lamp by lamp in scene order, so an incremental update is bit-identical
     // to a full one.
+    ws.ensureRow(nx);
+    const sums: RowSums = {
+      lu: used.map((e) => e.uv),
+      li: used.map((e) => e.ir),
+      fu,
+      fi,
+      u: ws.rowUv,
+      v: ws.rowIr,
+      q: ws.rowQ,
+      hc,
+      out: t,
+    };
     if (incremental) {
       // The same sums, over the runs of changed cells of each row.
       const dirty = this.dirty;
-      ws.ensureRow(nx);
-      const rowQ = ws.rowQ;
-      const { absorptance, emissivity } = HEAT_DEFAULTS;
-      const lu = used.map((e) => e.uv);
-      const li = used.map((e) => e.ir);
-      const { uvb, uvi, tempC } = t;
       for (let j = 0; j < ny; j++) {
         const base = j * nx;
         let i = 0;
@@ -151,59 +156,13 @@ export class FieldSolver {
             continue;
           }
           const from = i;
-          for (; i < nx && dirty[base + i] !== 0; i++) {
-            const c = base + i;
-            let u = 0;
-            let v = 0;
-            let q = 0;
-            for (let k = 0; k < n; k++) {
-              const val = lu[k]![c]!;
-              u += val * fu[k]!;
-              v += val * fi[k]!;
-              q += li[k]![c]!;
-            }
-            uvb[c] = u;
-            uvi[c] = v;
-            rowQ[i] = q;
-          }
-          surfaceTempRow(rowQ, rowQ, from, i, air[j]!, absorptance, emissivity, hc);
-          for (let x = from; x < i; x++) tempC[base + x] = rowQ[x]!;
+          while (i < nx && dirty[base + i] !== 0) i++;
+          sumRow(sums, base, from, i, air[j]!);
         }
       }
     } else {
-      // The same sums in the same order, a row at a time: the row's totals stay in the cache for the
-      // surface temperatures, and the results are written once.
-      ws.ensureRow(nx);
-      const rowU = ws.rowUv;
-      const rowV = ws.rowIr;
-      const rowQ = ws.rowQ;
-      const { absorptance, emissivity } = HEAT_DEFAULTS;
-      for (let j = 0; j < ny; j++) {
-        const base = j * nx;
-        rowU.fill(0, 0, nx);
-        rowV.fill(0, 0, nx);
-        rowQ.fill(0, 0, nx);
-        for (let k = 0; k < n; k++) {
-          const e = used[k]!;
-          const lu = e.uv;
-          const li = e.ir;
-          const a = fu[k]!;
-          const b = fi[k]!;
-          for (let i = 0; i < nx; i++) {
-            const val = lu[base + i]!;
-            rowU[i] = rowU[i]! + val * a;
-            rowV[i] = rowV[i]! + val * b;
-            rowQ[i] = rowQ[i]! + li[base + i]!;
-          }
-        }
-        surfaceTempRow(rowQ, rowQ, 0, nx, air[j]!, absorptance, emissivity, hc);
-        const { uvb, uvi, tempC } = t;
-        for (let i = 0; i < nx; i++) {
-          uvb[base + i] = rowU[i]!;
-          uvi[base + i] = rowV[i]!;
-          tempC[base + i] = rowQ[i]!;
-        }
-      }
+      // The row's totals stay in the cache for the surface temperatures, and the results are written once.
+      for (let j = 0; j < ny; j++) sumRow(sums, j * nx, 0, nx, air[j]!);
     }
     this.totals = t;
     // Copies: the caller owns its results (the worker hands their buffer to the page).
@@ -376,6 +335,51 @@ function diffOccluders(old: LampEntry, now: Occluder[], nowKeys: string[]): Occl
     if ((seen.get(k) ?? 0) > (nowCount.get(k) ?? 0)) changed.push(old.occluders[idx]!);
   });
   return changed;
+}
+
+/** What sumRow adds up and where it writes (row buffers u, v, q of at least a row's length). */
+interface RowSums {
+  lu: Float32Array[];
+  li: Float32Array[];
+  fu: number[];
+  fi: number[];
+  u: Float64Array;
+  v: Float64Array;
+  q: Float64Array;
+  hc: number;
+  out: Totals;
+}
+
+/**
+ * The totals and surface temperatures of cells from..to−1 of the row starting at cell `base`: each lamp's
+ * values are added in scene order, a lamp at a time over the cells, so every cell gets the same sums in
+ * the same order whichever cells are summed together (an incremental update is bit-identical to a full one).
+ */
+function sumRow(s: RowSums, base: number, from: number, to: number, airC: number) {
+  const { u, v, q, fu, fi } = s;
+  u.fill(0, from, to);
+  v.fill(0, from, to);
+  q.fill(0, from, to);
+  for (let k = 0; k < s.lu.length; k++) {
+    const lu = s.lu[k]!;
+    const li = s.li[k]!;
+    const a = fu[k]!;
+    const b = fi[k]!;
+    for (let i = from; i < to; i++) {
+      const val = lu[base + i]!;
+      u[i] = u[i]! + val * a;
+      v[i] = v[i]! + val * b;
+      q[i] = q[i]! + li[base + i]!;
+    }
+  }
+  const { absorptance, emissivity } = HEAT_DEFAULTS;
+  surfaceTempRow(q, q, from, to, airC, absorptance, emissivity, s.hc);
+  const { uvb, uvi, tempC } = s.out;
+  for (let i = from; i < to; i++) {
+    uvb[base + i] = u[i]!;
+    uvi[base + i] = v[i]!;
+    tempC[base + i] = q[i]!;
+  }
 }
 
 /** The results of the last call, already in the float32 they are handed out in. */
