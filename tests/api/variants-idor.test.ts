@@ -52,10 +52,14 @@ async function world() {
 }
 
 type World = Awaited<ReturnType<typeof world>>;
+type Handler = (req: Request, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>;
+type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+/** The thing in the world a route's `[id]` names. */
+type Target = 'enclosureId' | 'designId' | 'variantId' | 'shareId' | 'outsiderDesignId';
 type Attempt = {
   name: string;
-  handler: (req: Request, ctx: { params: Promise<Record<string, string>> }) => Promise<Response>;
-  method: string;
+  handler: Handler;
+  method: Method;
   path: (w: World) => string;
   id: (w: World) => number;
   body?: (w: World) => unknown;
@@ -68,126 +72,65 @@ const design = {
   objects: [],
 };
 
+/** One attempt: `method` of a route module on the address `path` makes of the target's id. */
+const attempt = (
+  name: string,
+  route: Partial<Record<Method, Handler>>,
+  method: Method,
+  target: Target,
+  path: (id: number) => string,
+  body?: (w: World) => unknown,
+): Attempt => ({
+  name,
+  handler: route[method]!,
+  method,
+  path: (w) => path(w[target]),
+  id: (w) => w[target],
+  body,
+});
+
+const enclosureDesigns = (id: number) => `/api/enclosures/${id}/designs`;
+const designPath = (id: number) => `/api/designs/${id}`;
+const designVariants = (id: number) => `/api/designs/${id}/variants`;
+const variantPath = (id: number) => `/api/variants/${id}`;
+const variantShares = (id: number) => `/api/variants/${id}/shares`;
+const named = () => ({ name: 'x' });
+
 const attempts: Attempt[] = [
-  {
-    name: 'list designs',
-    handler: enclosureDesignsRoute.GET,
-    method: 'GET',
-    path: (w) => `/api/enclosures/${w.enclosureId}/designs`,
-    id: (w) => w.enclosureId,
-  },
-  {
-    name: 'create design',
-    handler: enclosureDesignsRoute.POST,
-    method: 'POST',
-    path: (w) => `/api/enclosures/${w.enclosureId}/designs`,
-    id: (w) => w.enclosureId,
-    body: () => ({ name: 'x' }),
-  },
-  {
-    name: 'read design',
-    handler: designRoute.GET,
-    method: 'GET',
-    path: (w) => `/api/designs/${w.designId}`,
-    id: (w) => w.designId,
-  },
-  {
-    name: 'rename design',
-    handler: designRoute.PATCH,
-    method: 'PATCH',
-    path: (w) => `/api/designs/${w.designId}`,
-    id: (w) => w.designId,
-    body: () => ({ name: 'x' }),
-  },
-  {
-    name: 'delete design',
-    handler: designRoute.DELETE,
-    method: 'DELETE',
-    path: (w) => `/api/designs/${w.designId}`,
-    id: (w) => w.designId,
-  },
-  {
-    name: 'list variants',
-    handler: designVariantsRoute.GET,
-    method: 'GET',
-    path: (w) => `/api/designs/${w.designId}/variants`,
-    id: (w) => w.designId,
-  },
-  {
-    name: 'create variant',
-    handler: designVariantsRoute.POST,
-    method: 'POST',
-    path: (w) => `/api/designs/${w.designId}/variants`,
-    id: (w) => w.designId,
-    body: () => ({ name: 'x', design }),
-  },
-  {
-    name: 'copy the variant into their own design',
-    handler: designVariantsRoute.POST,
-    method: 'POST',
-    path: (w) => `/api/designs/${w.outsiderDesignId}/variants`,
-    id: (w) => w.outsiderDesignId,
-    body: (w) => ({ name: 'stolen', fromVariantId: w.variantId }),
-  },
-  {
-    name: 'read variant',
-    handler: variantRoute.GET,
-    method: 'GET',
-    path: (w) => `/api/variants/${w.variantId}`,
-    id: (w) => w.variantId,
-  },
-  {
-    name: 'save variant',
-    handler: variantRoute.PUT,
-    method: 'PUT',
-    path: (w) => `/api/variants/${w.variantId}`,
-    id: (w) => w.variantId,
-    body: () => ({ design, baseVersion: 1 }),
-  },
-  {
-    name: 'rename variant',
-    handler: variantRoute.PATCH,
-    method: 'PATCH',
-    path: (w) => `/api/variants/${w.variantId}`,
-    id: (w) => w.variantId,
-    body: () => ({ name: 'x' }),
-  },
-  {
-    name: 'delete variant',
-    handler: variantRoute.DELETE,
-    method: 'DELETE',
-    path: (w) => `/api/variants/${w.variantId}`,
-    id: (w) => w.variantId,
-  },
-  {
-    name: 'list shares',
-    handler: sharesRoute.GET,
-    method: 'GET',
-    path: (w) => `/api/variants/${w.variantId}/shares`,
-    id: (w) => w.variantId,
-  },
-  {
-    name: 'create share',
-    handler: sharesRoute.POST,
-    method: 'POST',
-    path: (w) => `/api/variants/${w.variantId}/shares`,
-    id: (w) => w.variantId,
-    body: () => ({}),
-  },
-  {
-    name: 'revoke share',
-    handler: shareRoute.DELETE,
-    method: 'DELETE',
-    path: (w) => `/api/shares/${w.shareId}`,
-    id: (w) => w.shareId,
-  },
-  ...(['json', 'png', 'pdf'] as const).map((format): Attempt => ({
-    name: `export ${format}`,
-    handler: exportRoute.GET,
-    method: 'GET',
-    path: (w) => `/api/variants/${w.variantId}/export?format=${format}`,
-    id: (w) => w.variantId,
+  attempt('list designs', enclosureDesignsRoute, 'GET', 'enclosureId', enclosureDesigns),
+  attempt('create design', enclosureDesignsRoute, 'POST', 'enclosureId', enclosureDesigns, named),
+  attempt('read design', designRoute, 'GET', 'designId', designPath),
+  attempt('rename design', designRoute, 'PATCH', 'designId', designPath, named),
+  attempt('delete design', designRoute, 'DELETE', 'designId', designPath),
+  attempt('list variants', designVariantsRoute, 'GET', 'designId', designVariants),
+  attempt('create variant', designVariantsRoute, 'POST', 'designId', designVariants, () => ({
+    name: 'x',
+    design,
   })),
+  attempt(
+    'copy the variant into their own design',
+    designVariantsRoute,
+    'POST',
+    'outsiderDesignId',
+    designVariants,
+    (w) => ({ name: 'stolen', fromVariantId: w.variantId }),
+  ),
+  attempt('read variant', variantRoute, 'GET', 'variantId', variantPath),
+  attempt('save variant', variantRoute, 'PUT', 'variantId', variantPath, () => ({ design, baseVersion: 1 })),
+  attempt('rename variant', variantRoute, 'PATCH', 'variantId', variantPath, named),
+  attempt('delete variant', variantRoute, 'DELETE', 'variantId', variantPath),
+  attempt('list shares', sharesRoute, 'GET', 'variantId', variantShares),
+  attempt('create share', sharesRoute, 'POST', 'variantId', variantShares, () => ({})),
+  attempt('revoke share', shareRoute, 'DELETE', 'shareId', (id) => `/api/shares/${id}`),
+  ...(['json', 'png', 'pdf'] as const).map((format) =>
+    attempt(
+      `export ${format}`,
+      exportRoute,
+      'GET',
+      'variantId',
+      (id) => `/api/variants/${id}/export?format=${format}`,
+    ),
+  ),
 ];
 
 async function snapshot() {
