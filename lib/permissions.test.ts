@@ -33,21 +33,33 @@ const ACTIONS: Action[] = ['read', 'create', 'update', 'delete'];
 const ALL: Record<Action, boolean> = { read: true, create: true, update: true, delete: true };
 const NONE: Record<Action, boolean> = { read: false, create: false, update: false, delete: false };
 const READ_ONLY: Record<Action, boolean> = { ...NONE, read: true };
+const READ_CREATE: Record<Action, boolean> = { ...READ_ONLY, create: true };
 
-type Row = { resource: Resource; expect: Record<Actor, Record<Action, boolean>> };
+type Grants = Record<Actor, Record<Action, boolean>>;
+type Row = { resource: Resource; expect: Grants };
+
+/** What the actors named may do; every other actor may do nothing. */
+const only = (granted: Partial<Grants>): Grants => ({
+  owner: NONE,
+  staff: NONE,
+  keeper: NONE,
+  outsider: NONE,
+  nobody: NONE,
+  anonymous: NONE,
+  ...granted,
+});
 
 const rows: Record<string, Row> = {
   'the organisation': {
     resource: { kind: 'organisation', id: ORG },
-    expect: {
+    expect: only({
       owner: ALL,
-      staff: { read: true, create: true, update: false, delete: false },
-      keeper: { read: true, create: true, update: false, delete: false },
+      staff: READ_CREATE,
+      keeper: READ_CREATE,
       // Anyone signed in may create a new organisation of their own, but sees nothing of this one.
       outsider: { ...NONE, create: true },
       nobody: { ...NONE, create: true },
-      anonymous: NONE,
-    },
+    }),
   },
   // Keeper 30 owns these.
   ...Object.fromEntries(
@@ -55,7 +67,7 @@ const rows: Record<string, Row> = {
       `the keeper's own ${kind}`,
       {
         resource: { kind, organisationId: ORG, keeperId: 30 },
-        expect: { owner: ALL, staff: ALL, keeper: ALL, outsider: NONE, nobody: NONE, anonymous: NONE },
+        expect: only({ owner: ALL, staff: ALL, keeper: ALL }),
       },
     ]),
   ),
@@ -64,102 +76,74 @@ const rows: Record<string, Row> = {
       `another keeper's ${kind}`,
       {
         resource: { kind, organisationId: ORG, keeperId: 31 },
-        expect: { owner: ALL, staff: ALL, keeper: NONE, outsider: NONE, nobody: NONE, anonymous: NONE },
+        expect: only({ owner: ALL, staff: ALL }),
       },
     ]),
   ),
   'an enclosure in the other organisation with the same keeper id': {
     resource: { kind: 'enclosure', organisationId: OTHER_ORG, keeperId: 30 },
     // The outsider owns organisation 2, so they see it; staff and keeper of organisation 1 do not.
-    expect: { owner: NONE, staff: NONE, keeper: NONE, outsider: ALL, nobody: NONE, anonymous: NONE },
+    expect: only({ outsider: ALL }),
   },
   'the shop’s customers and counter tests': {
     resource: { kind: 'customer', organisationId: ORG },
-    expect: { owner: ALL, staff: ALL, keeper: NONE, outsider: NONE, nobody: NONE, anonymous: NONE },
+    expect: only({ owner: ALL, staff: ALL }),
   },
   'the shop’s measured lamp curves and counter figures': {
     resource: { kind: 'shop-figures', organisationId: ORG },
-    expect: { owner: ALL, staff: ALL, keeper: NONE, outsider: NONE, nobody: NONE, anonymous: NONE },
+    expect: only({ owner: ALL, staff: ALL }),
   },
   'background jobs': {
     resource: { kind: 'jobs', organisationId: ORG },
-    expect: { owner: READ_ONLY, staff: NONE, keeper: NONE, outsider: NONE, nobody: NONE, anonymous: NONE },
+    expect: only({ owner: READ_ONLY }),
   },
   'members and roles': {
     resource: { kind: 'member', organisationId: ORG, userId: 30 },
-    expect: { owner: ALL, staff: READ_ONLY, keeper: NONE, outsider: NONE, nobody: NONE, anonymous: NONE },
+    expect: only({ owner: ALL, staff: READ_ONLY }),
   },
   'an invitation for a keeper': {
     resource: { kind: 'invitation', organisationId: ORG, role: 'keeper' },
-    expect: { owner: ALL, staff: ALL, keeper: NONE, outsider: NONE, nobody: NONE, anonymous: NONE },
+    expect: only({ owner: ALL, staff: ALL }),
   },
   'an invitation for staff': {
     resource: { kind: 'invitation', organisationId: ORG, role: 'staff' },
-    expect: { owner: ALL, staff: READ_ONLY, keeper: NONE, outsider: NONE, nobody: NONE, anonymous: NONE },
+    expect: only({ owner: ALL, staff: READ_ONLY }),
   },
   'an invitation for an owner': {
     resource: { kind: 'invitation', organisationId: ORG, role: 'owner' },
-    expect: { owner: ALL, staff: READ_ONLY, keeper: NONE, outsider: NONE, nobody: NONE, anonymous: NONE },
+    expect: only({ owner: ALL, staff: READ_ONLY }),
   },
   'species sheets': {
     resource: { kind: 'species', organisationId: ORG },
-    expect: { owner: ALL, staff: ALL, keeper: READ_ONLY, outsider: NONE, nobody: NONE, anonymous: NONE },
+    expect: only({ owner: ALL, staff: ALL, keeper: READ_ONLY }),
   },
   'the lamp catalogue': {
     resource: { kind: 'lamp-type', organisationId: ORG },
-    expect: { owner: ALL, staff: ALL, keeper: READ_ONLY, outsider: NONE, nobody: NONE, anonymous: NONE },
+    expect: only({ owner: ALL, staff: ALL, keeper: READ_ONLY }),
   },
   // Files left behind by a deleted enclosure (files filed under one follow the enclosure rows above).
   'a file the keeper uploaded': {
     resource: { kind: 'upload', organisationId: ORG, uploaderId: 30 },
-    expect: {
-      owner: ALL,
-      staff: { read: true, create: true, update: false, delete: false },
-      keeper: ALL,
-      outsider: NONE,
-      nobody: NONE,
-      anonymous: NONE,
-    },
+    expect: only({ owner: ALL, staff: READ_CREATE, keeper: ALL }),
   },
   'a file staff uploaded': {
     resource: { kind: 'upload', organisationId: ORG, uploaderId: 20 },
-    expect: {
-      owner: ALL,
-      staff: ALL,
-      keeper: { read: false, create: true, update: false, delete: false },
-      outsider: NONE,
-      nobody: NONE,
-      anonymous: NONE,
-    },
+    expect: only({ owner: ALL, staff: ALL, keeper: { ...NONE, create: true } }),
   },
   'a file its uploader left behind in an organisation they have left': {
     resource: { kind: 'upload', organisationId: OTHER_ORG, uploaderId: 30 },
     // Keeper 30 is no longer a member of organisation 2: uploading it gives no lasting access.
-    expect: { owner: NONE, staff: NONE, keeper: NONE, outsider: ALL, nobody: NONE, anonymous: NONE },
+    expect: only({ outsider: ALL }),
   },
   'captured mail': {
     resource: { kind: 'mail', organisationId: ORG },
     // Owners only: captured invitations carry working links.
-    expect: {
-      owner: READ_ONLY,
-      staff: NONE,
-      keeper: NONE,
-      outsider: NONE,
-      nobody: NONE,
-      anonymous: NONE,
-    },
+    expect: only({ owner: READ_ONLY }),
   },
   "the keeper's own account": {
     resource: { kind: 'account', userId: 30 },
     // Only the person themself: an owner can remove someone from the organisation, never use their account.
-    expect: {
-      owner: NONE,
-      staff: NONE,
-      keeper: { ...ALL, create: false },
-      outsider: NONE,
-      nobody: NONE,
-      anonymous: NONE,
-    },
+    expect: only({ keeper: { ...ALL, create: false } }),
   },
 };
 

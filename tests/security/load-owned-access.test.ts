@@ -134,48 +134,30 @@ async function world() {
   return { w, people, ids };
 }
 
-// [read, update] for each person. The keeper's own enclosure and everything in it is theirs; another
-// keeper of the same shop and the other organisation's owner learn nothing of it.
-const IN_ENCLOSURE: Record<Person, [Outcome, Outcome]> = {
-  owner: ['ok', 'ok'],
-  staff: ['ok', 'ok'],
-  keeper: ['ok', 'ok'],
-  otherKeeper: ['not_found', 'not_found'],
-  outsider: ['not_found', 'not_found'],
-};
+// [read, update] for each person.
+type Outcomes = Record<Person, [Outcome, Outcome]>;
+const OK: [Outcome, Outcome] = ['ok', 'ok'];
+const SEES: [Outcome, Outcome] = ['ok', 'forbidden'];
+const HIDDEN: [Outcome, Outcome] = ['not_found', 'not_found'];
+
+// The keeper's own enclosure and everything in it is theirs; another keeper of the same shop and the other
+// organisation's owner learn nothing of it.
+const IN_ENCLOSURE: Outcomes = { owner: OK, staff: OK, keeper: OK, otherKeeper: HIDDEN, outsider: HIDDEN };
 // The catalogue: every member reads it, owners and staff change it.
-const CATALOGUE: Record<Person, [Outcome, Outcome]> = {
-  owner: ['ok', 'ok'],
-  staff: ['ok', 'ok'],
-  keeper: ['ok', 'forbidden'],
-  otherKeeper: ['ok', 'forbidden'],
-  outsider: ['not_found', 'not_found'],
-};
+const CATALOGUE: Outcomes = { owner: OK, staff: OK, keeper: SEES, otherKeeper: SEES, outsider: HIDDEN };
 // Customers and the shop's measured figures: owners' and staff's alone; a keeper does not learn they exist.
-const SHOP_ONLY: Record<Person, [Outcome, Outcome]> = {
-  owner: ['ok', 'ok'],
-  staff: ['ok', 'ok'],
-  keeper: ['not_found', 'not_found'],
-  otherKeeper: ['not_found', 'not_found'],
-  outsider: ['not_found', 'not_found'],
-};
+const SHOP_ONLY: Outcomes = { owner: OK, staff: OK, keeper: HIDDEN, otherKeeper: HIDDEN, outsider: HIDDEN };
 // An invitation to join as staff: owners withdraw it; staff see it but bring in only keepers.
-const STAFF_INVITATION: Record<Person, [Outcome, Outcome]> = {
-  owner: ['ok', 'ok'],
-  staff: ['ok', 'forbidden'],
-  keeper: ['not_found', 'not_found'],
-  otherKeeper: ['not_found', 'not_found'],
-  outsider: ['not_found', 'not_found'],
+const STAFF_INVITATION: Outcomes = {
+  owner: OK,
+  staff: SEES,
+  keeper: HIDDEN,
+  otherKeeper: HIDDEN,
+  outsider: HIDDEN,
 };
 // The keeper's file of a deleted enclosure: staff see it, only its uploader or an owner change it.
-const LOOSE_UPLOAD: Record<Person, [Outcome, Outcome]> = {
-  owner: ['ok', 'ok'],
-  staff: ['ok', 'forbidden'],
-  keeper: ['ok', 'ok'],
-  otherKeeper: ['not_found', 'not_found'],
-  outsider: ['not_found', 'not_found'],
-};
-const EXPECTED: Record<OwnedKind | 'loose-upload', Record<Person, [Outcome, Outcome]>> = {
+const LOOSE_UPLOAD: Outcomes = { owner: OK, staff: SEES, keeper: OK, otherKeeper: HIDDEN, outsider: HIDDEN };
+const EXPECTED: Record<OwnedKind | 'loose-upload', Outcomes> = {
   enclosure: IN_ENCLOSURE,
   design: IN_ENCLOSURE,
   variant: IN_ENCLOSURE,
