@@ -95,6 +95,13 @@ const inEnclosure =
   (kind: 'enclosure' | 'design' | 'variant' | 'share' | 'lamp' | 'reading') =>
   (e: Enclosure): Resource => ({ kind, organisationId: e.organisationId, keeperId: e.keeperId });
 
+/** Things of the whole organisation (its catalogue, customers and figures): their own row names it. */
+const ofOrganisation = <R extends { organisationId: number }>(
+  what: string,
+  load: (id: number) => Promise<R | null>,
+  kind: 'species' | 'lamp-type' | 'shop-figures' | 'customer',
+): KindRule<R> => ({ what, load, resource: (r) => ({ kind, organisationId: r.organisationId }) });
+
 const KINDS: { [K in OwnedKind]: KindRule<Owned[K]> } = {
   enclosure: {
     what: 'The enclosure',
@@ -128,31 +135,12 @@ const KINDS: { [K in OwnedKind]: KindRule<Owned[K]> } = {
     load: (id) => Reading.findByPk(id, { include: [lampWithEnclosure] }) as Promise<ReadingWithLamp | null>,
     resource: (r) => inEnclosure('reading')(r.lamp.enclosure),
   },
-  species: {
-    what: 'That species sheet',
-    load: (id) => SpeciesSheet.findByPk(id),
-    resource: (s) => ({ kind: 'species', organisationId: s.organisationId }),
-  },
-  'lamp-type': {
-    what: 'That lamp type',
-    load: (id) => LampType.findByPk(id),
-    resource: (t) => ({ kind: 'lamp-type', organisationId: t.organisationId }),
-  },
-  'lamp-type-figures': {
-    what: 'That lamp type',
-    load: (id) => LampType.findByPk(id),
-    resource: (t) => ({ kind: 'shop-figures', organisationId: t.organisationId }),
-  },
-  customer: {
-    what: 'The customer',
-    load: (id) => Customer.findByPk(id),
-    resource: (c) => ({ kind: 'customer', organisationId: c.organisationId }),
-  },
-  'counter-lamp': {
-    what: 'The lamp',
-    load: (id) => CounterLamp.findByPk(id),
-    resource: (l) => ({ kind: 'customer', organisationId: l.organisationId }),
-  },
+  species: ofOrganisation('That species sheet', (id) => SpeciesSheet.findByPk(id), 'species'),
+  'lamp-type': ofOrganisation('That lamp type', (id) => LampType.findByPk(id), 'lamp-type'),
+  'lamp-type-figures': ofOrganisation('That lamp type', (id) => LampType.findByPk(id), 'shop-figures'),
+  customer: ofOrganisation('The customer', (id) => Customer.findByPk(id), 'customer'),
+  // A lamp tested at the counter is the customer's: its rules are the customers'.
+  'counter-lamp': ofOrganisation('The lamp', (id) => CounterLamp.findByPk(id), 'customer'),
   invitation: {
     what: 'That invitation',
     load: (id) => Invitation.findByPk(id),
