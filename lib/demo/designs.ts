@@ -13,20 +13,11 @@ import { storeBackdrop } from '@/lib/uploads/mutations';
 import { serializeDesign } from '@/lib/variants/stored-design';
 import { wholeSecond } from '@/lib/variants/time';
 import { newShareToken } from '@/lib/variants/tokens';
-import {
-  Design,
-  Enclosure,
-  Lamp,
-  LampType,
-  Organisation,
-  Reading,
-  ShareLink,
-  SpeciesSheet,
-  Variant,
-} from '@/models';
+import { Design, Enclosure, Lamp, LampType, Reading, ShareLink, SpeciesSheet, Variant } from '@/models';
 import { ASSESSMENT_THRESHOLDS, assess, type SpeciesSheet as EngineSheet } from '@/simulation';
 import type { Design as DesignFile, DesignObject, LampObject, ProbePoint } from '@/simulation';
 import { BACKDROP_INSIDE_CM, drawDesertVivarium } from './backdrop-picture';
+import { findDemoEnclosure } from './find';
 import { DEMO_HOUSEHOLD, DEMO_SHOP } from './scenario';
 
 /**
@@ -324,15 +315,10 @@ export async function seedDemoDesigns(transaction: Transaction): Promise<DemoDes
   const created: DemoDesignsResult = { designs: 0, variants: 0, shares: 0, photos: 0 };
   const today = todayIso();
   for (const plan of DEMO_DESIGNS) {
-    const organisation = await Organisation.findOne({ where: { name: plan.organisation }, transaction });
-    if (!organisation) continue;
-    const enclosure = await Enclosure.findOne({
-      where: { organisationId: organisation.id, name: plan.enclosure },
-      order: [['id', 'ASC']],
-      transaction,
-    });
-    if (!enclosure || (await Design.count({ where: { enclosureId: enclosure.id }, transaction })) > 0)
-      continue;
+    const found = await findDemoEnclosure(plan.organisation, plan.enclosure, transaction);
+    if (!found) continue;
+    const { organisation, enclosure } = found;
+    if ((await Design.count({ where: { enclosureId: enclosure.id }, transaction })) > 0) continue;
     const sheetRow = await SpeciesSheet.findOne({
       where: { organisationId: organisation.id, commonName: enclosure.speciesName ?? '' },
       order: [['id', 'ASC']],

@@ -1,8 +1,9 @@
 import 'server-only';
 import type { Transaction } from 'sequelize';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
-import { Enclosure, Lamp, LampType, Organisation, Reading } from '@/models';
+import { Lamp, LampType, Reading } from '@/models';
 import type { ReadingThrough, ReadingWarmedUp } from '@/shared/reading-setup';
+import { findDemoEnclosure } from './find';
 import { DEMO_HOUSEHOLD, DEMO_SHOP } from './scenario';
 
 /**
@@ -137,14 +138,9 @@ export async function seedDemoLampLog(transaction: Transaction): Promise<number>
   let created = 0;
   const done = new Set<number>();
   for (const demo of DEMO_LAMPS) {
-    const organisation = await Organisation.findOne({ where: { name: demo.organisation }, transaction });
-    if (!organisation) continue;
-    const enclosure = await Enclosure.findOne({
-      where: { organisationId: organisation.id, name: demo.enclosure },
-      order: [['id', 'ASC']],
-      transaction,
-    });
-    if (!enclosure) continue;
+    const found = await findDemoEnclosure(demo.organisation, demo.enclosure, transaction);
+    if (!found) continue;
+    const { organisation, enclosure } = found;
     if (!done.has(enclosure.id)) {
       if ((await Lamp.count({ where: { enclosureId: enclosure.id }, transaction })) > 0) continue;
       done.add(enclosure.id);
