@@ -3,9 +3,9 @@ import { describe, expect, it } from 'vitest';
 import { lampCounts } from '@/lib/lamp-log/list-queries';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
 import { refreshOutlooks, refreshStaleOutlooks } from '@/lib/lamp-log/stored-outlooks';
-import { seedStartingCatalogue } from '@/lib/species/seed';
-import { Enclosure, Lamp, LampType, Organisation, Reading, User } from '@/models';
-import { createEnclosure, createMember, createOrganisation, testDb, withTestDatabase } from './helpers/db';
+import { Enclosure, Lamp, Organisation, Reading, User } from '@/models';
+import { createEnclosure, testDb, withTestDatabase } from './helpers/db';
+import { createLampKeepersWorld } from './helpers/world';
 
 // The lamp log's summary reads per-organisation counts rows and a per-lamp "waiting to be recomputed"
 // flag that the database's triggers keep (migration 0022). Whatever writes or deletes outlooks, lamps
@@ -70,13 +70,7 @@ async function countsByScan(organisationId: number, today: string, keeperId?: nu
 }
 
 async function world() {
-  const org = await createOrganisation();
-  await seedStartingCatalogue(org.id);
-  const { user: ann } = await createMember('keeper', org);
-  const { user: bob } = await createMember('keeper', org);
-  const types = await LampType.findAll({ where: { organisationId: org.id } });
-  const t5 = types.find((t) => t.tech === 't5')!;
-  const heat = types.find((t) => !(t.uvbAt30 > 0))!;
+  const { org, ann, bob, t5, heat } = await createLampKeepersWorld();
   const enclosures: Enclosure[] = [];
   const lamps: Lamp[] = [];
   for (const [k, keeper] of [ann, bob].entries()) {

@@ -16,6 +16,7 @@ import {
   testDb,
   withTestDatabase,
 } from '../helpers/db';
+import { createLampKeepersWorld } from '../helpers/world';
 import { call } from './http';
 
 // The lamp log's list API: server-side search, filters, sort and pages from the stored outlooks; the
@@ -31,14 +32,7 @@ type Item = {
 };
 
 async function world(lampsPerKeeper = 3) {
-  const org = await createOrganisation();
-  await seedStartingCatalogue(org.id);
-  const { user: staff } = await createMember('staff', org);
-  const { user: ann } = await createMember('keeper', org);
-  const { user: bob } = await createMember('keeper', org);
-  const types = await LampType.findAll({ where: { organisationId: org.id } });
-  const t5 = types.find((t) => t.tech === 't5')!;
-  const heat = types.find((t) => !(t.uvbAt30 > 0))!;
+  const { org, staff, ann, bob, t5, heat } = await createLampKeepersWorld({ staff: true });
   const lamps: Lamp[] = [];
   for (const keeper of [ann, bob]) {
     const enclosure = await createEnclosure(org, keeper, { speciesName: 'Bearded dragon' });
@@ -57,7 +51,7 @@ async function world(lampsPerKeeper = 3) {
       );
     }
   }
-  return { org, staff, ann, bob, lamps };
+  return { org, staff: staff!, ann, bob, lamps };
 }
 
 const list = async (as: User, orgId: number, qs = '') => {

@@ -2,6 +2,7 @@
 // test file means the same thing by "staff", "a keeper" and "the outsider".
 import { beforeEach } from 'vitest';
 import { seedStartingCatalogue } from '@/lib/species/seed';
+import { LampType } from '@/models';
 import {
   addMember,
   createEnclosure,
@@ -95,4 +96,20 @@ export async function createKeeperWorld(
   const enclosure = await createEnclosure(org, keeper, options.enclosure);
   if (options.catalogue) await seedStartingCatalogue(org.id);
   return { org, staff, keeper, enclosure };
+}
+
+/**
+ * An organisation with the starting catalogue and two keepers, Ann and Bob, to give lamps to: with the
+ * catalogue's T5 tube and a lamp type with no UV (a heat lamp), and a member of staff when asked for.
+ */
+export async function createLampKeepersWorld(options: { staff?: boolean } = {}) {
+  const org = await createOrganisation();
+  await seedStartingCatalogue(org.id);
+  const staff = options.staff ? (await createMember('staff', org)).user : undefined;
+  const { user: ann } = await createMember('keeper', org);
+  const { user: bob } = await createMember('keeper', org);
+  const types = await LampType.findAll({ where: { organisationId: org.id } });
+  const t5 = types.find((t) => t.tech === 't5')!;
+  const heat = types.find((t) => !(t.uvbAt30 > 0))!;
+  return { org, staff, ann, bob, t5, heat };
 }
