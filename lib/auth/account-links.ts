@@ -5,8 +5,9 @@ import { Op, type Transaction } from 'sequelize';
 import { z } from 'zod';
 
 import { config } from '@/lib/config';
-import { checkLimits, countAttempt, limitKey } from '@/lib/rate-limit';
-import { AccountLink, User, type LinkPurpose } from '@/models';
+import { getSequelize } from '@/lib/db';
+import { checkLimits, clearFailures, countAttempt, limitKey } from '@/lib/rate-limit';
+import { AccountLink, MailMessage, User, type LinkPurpose } from '@/models';
 
 /**
  * E-mailed single-use links (choose a new password, confirm a new account). A link's token is 256 random
@@ -21,7 +22,7 @@ export const linkTokenSchema = z
 
 export const hashLinkToken = (token: string) => createHash('sha256').update(token).digest('hex');
 
-export const linkUrl = (page: string, token: string) =>
+const linkUrl = (page: string, token: string) =>
   new URL(`${page}#token=${token}`, config().APP_URL).toString();
 
 /** A new link for the person; any earlier unused one of the same purpose stops working (only the newest does). */
@@ -40,11 +41,13 @@ export async function issueLink(
   return { token, link };
 }
 
-/** The live link with this token, if any (not used, not expired). */
-export function findLiveLink(token: string, purpose: LinkPurpose, now = new Date()) {
-  return AccountLink.findOne({
+/** The live link with this token (not used, not expired); "expired" when there is none. */
+export async function liveLink(token: string, purpose: LinkPurpose, now = new Date()): Promise<AccountLink> {
+  const link = await AccountLink.findOne({
     where: { tokenHash: hashLinkToken(token), purpose, usedAt: null, expiresAt: { [Op.gt]: now } },
   });
+  if (!link) throw expiredLink();
+  return link;
 }
 
 /**
@@ -62,6 +65,64 @@ export async function useLink(link: AccountLink, now: Date, transaction: Transac
     transaction,
   });
   return true;
+}
+
+/**
+ * A new link for the person (`issueLink`) and the e-mail that carries it, queued in the outbox in the same
+ * transaction (the caller hands it to `deliverSoon` once committed). `lines` is the text after the
+ * greeting, given the link's address.
+ */
+export async function queueLinkMail(
+  user: Pick<User, 'id' | 'name' | 'email'>,
+  mail: {
+    purpose: LinkPurpose;
+    ttlMs: number;
+    /** The page that opens the link. */
+    page: string;
+    subject: string;
+    lines: (url: string) => string[];
+  },
+  transaction: Transaction,
+): Promise<MailMessage> {
+  const { token, link } = await issueLink(user.id, mail.purpose, mail.ttlMs, transaction);
+  return MailMessage.create(
+    {
+      kind: mail.purpose,
+      toEmail: user.email,
+      toUserId: user.id,
+      subject: mail.subject,
+      body: [`Hello ${user.name},`, '', ...mail.lines(linkUrl(mail.page, token))].join('\n'),
+      dedupeKey: `${mail.purpose}:${link.id}`,
+    },
+    { transaction },
+  );
+}
+
+/**
+ * Opens a live link (found with `liveLink`): uses it up, confirms the person's address (opening the
+ * e-mailed link proves they hold it) and makes the link's own change (`change`) in one transaction.
+ * "Expired" when another request used it first or the account is gone. Afterwards earlier wrong
+ * guesses at the account's password no longer slow its owner's sign-in. Returns the account's address.
+ */
+export async function openLink(
+  link: AccountLink,
+  now: Date,
+  change: (userId: number, transaction: Transaction) => Promise<void> = async () => {},
+): Promise<string> {
+  const email = await getSequelize().transaction(async (transaction) => {
+    // Of two requests with one link, only one goes on.
+    if (!(await useLink(link, now, transaction))) throw expiredLink();
+    const user = await User.findByPk(link.userId, { attributes: ['id', 'email'], transaction });
+    if (!user) throw expiredLink();
+    await User.update(
+      { emailConfirmedAt: now },
+      { where: { id: user.id, emailConfirmedAt: null }, transaction },
+    );
+    await change(user.id, transaction);
+    return user.email;
+  });
+  await clearFailures(limitKey('account', email));
+  return email;
 }
 
 export const expiredLink = () =>

@@ -3,17 +3,8 @@ import { z } from 'zod';
 import { endAllSessions } from '@/lib/account/mutations';
 import { emailSchema } from '@/lib/api/schemas';
 import { getSequelize } from '@/lib/db';
-import { clearFailures, limitKey } from '@/lib/rate-limit';
 import { MailMessage, User } from '@/models';
-import {
-  expiredLink,
-  findLiveLink,
-  issueLink,
-  limitedLinkRequest,
-  linkTokenSchema,
-  linkUrl,
-  useLink,
-} from './account-links';
+import { limitedLinkRequest, linkTokenSchema, liveLink, openLink, queueLinkMail } from './account-links';
 import { deliverSoon } from './mail-soon';
 import { hashPassword, newPasswordSchema } from './password';
 
@@ -43,8 +34,6 @@ export const RESET_ANSWER = {
     'If an account uses that address, we have e-mailed it a link to choose a new password. The link works once, for 30 minutes.',
 } as const;
 
-export const resetUrl = (token: string) => linkUrl('/reset-password', token);
-
 export async function requestPasswordReset(input: z.output<typeof resetRequestBody>, address: string) {
   const user = await limitedLinkRequest('reset', input.email, address, RESET_LIMITS);
   if (user) {
@@ -53,53 +42,39 @@ export async function requestPasswordReset(input: z.output<typeof resetRequestBo
   return RESET_ANSWER;
 }
 
-async function queueResetMail(user: Pick<User, 'id' | 'name' | 'email'>): Promise<MailMessage> {
-  return getSequelize().transaction(async (transaction) => {
-    const { token, link: reset } = await issueLink(user.id, 'password-reset', RESET_TTL_MS, transaction);
-    return MailMessage.create(
+function queueResetMail(user: Pick<User, 'id' | 'name' | 'email'>): Promise<MailMessage> {
+  return getSequelize().transaction((transaction) =>
+    queueLinkMail(
+      user,
       {
-        kind: 'password-reset',
-        toEmail: user.email,
-        toUserId: user.id,
+        purpose: 'password-reset',
+        ttlMs: RESET_TTL_MS,
+        page: '/reset-password',
         subject: 'Choose a new Baskwell password',
-        body: [
-          `Hello ${user.name},`,
-          '',
+        lines: (url) => [
           'Someone (we hope you) asked to choose a new password for your Baskwell account.',
           '',
-          `Choose a new password: ${resetUrl(token)}`,
+          `Choose a new password: ${url}`,
           '',
           'The link works once, for 30 minutes. Choosing a new password signs you out everywhere.',
           'If you did not ask, ignore this e-mail: your password stays as it is.',
-        ].join('\n'),
-        dedupeKey: `password-reset:${reset.id}`,
+        ],
       },
-      { transaction },
-    );
-  });
+      transaction,
+    ),
+  );
 }
 
-/** Sets the new password if the token is live, uses the token up, and ends every session of the person. */
+/**
+ * Sets the new password if the token is live, uses the token up, and ends every session of the person
+ * (choosing it through the e-mailed link also confirms the address).
+ */
 export async function completePasswordReset(input: z.output<typeof resetCompleteBody>): Promise<void> {
-  const sequelize = getSequelize();
   const now = new Date();
-  const reset = await findLiveLink(input.token, 'password-reset', now);
-  if (!reset) throw expiredLink();
+  const reset = await liveLink(input.token, 'password-reset', now);
   const passwordHash = await hashPassword(input.password);
-  const email = await sequelize.transaction(async (transaction) => {
-    // Of two requests with one link, only one sets a password.
-    if (!(await useLink(reset, now, transaction))) throw expiredLink();
-    const user = await User.findByPk(reset.userId, { attributes: ['id', 'email'], transaction });
-    if (!user) throw expiredLink();
-    // Choosing a new password through the e-mailed link also proves the address.
-    await User.update({ passwordHash }, { where: { id: user.id }, transaction });
-    await User.update(
-      { emailConfirmedAt: now },
-      { where: { id: user.id, emailConfirmedAt: null }, transaction },
-    );
-    await endAllSessions(user.id, transaction);
-    return user.email;
+  await openLink(reset, now, async (userId, transaction) => {
+    await User.update({ passwordHash }, { where: { id: userId }, transaction });
+    await endAllSessions(userId, transaction);
   });
-  // The owner has proved they hold the address: earlier wrong guesses no longer slow their sign-in.
-  await clearFailures(limitKey('account', email));
 }

@@ -6,18 +6,10 @@ import { z } from 'zod';
 import { emailSchema, organisationNameSchema, personNameSchema } from '@/lib/api/schemas';
 import { config } from '@/lib/config';
 import { getSequelize } from '@/lib/db';
-import { checkLimits, clearFailures, countAttempt, limitKey } from '@/lib/rate-limit';
+import { checkLimits, countAttempt, limitKey } from '@/lib/rate-limit';
 import { seedStartingCatalogue } from '@/lib/species/seed';
 import { MailMessage, Membership, Organisation, User } from '@/models';
-import {
-  expiredLink,
-  findLiveLink,
-  issueLink,
-  limitedLinkRequest,
-  linkTokenSchema,
-  linkUrl,
-  useLink,
-} from './account-links';
+import { limitedLinkRequest, linkTokenSchema, liveLink, openLink, queueLinkMail } from './account-links';
 import { deliverSoon } from './mail-soon';
 import { hashPassword, newPasswordSchema } from './password';
 
@@ -56,8 +48,6 @@ export const RESEND_ANSWER = {
   message:
     'If that address has an account waiting for confirmation, we have e-mailed it a new link. The link works once, for 2 hours. An account that is already confirmed gets no e-mail: check the password, or choose a new one.',
 } as const;
-
-export const confirmUrl = (token: string) => linkUrl('/confirm-account', token);
 
 /** At most one "someone tried to sign up with your address" e-mail per account in this time. */
 export const EXISTING_NOTICE_EVERY_MS = 60 * 60_000;
@@ -139,30 +129,27 @@ export async function signUp(input: z.output<typeof signUpBody>, address: string
   return SIGN_UP_ANSWER;
 }
 
-async function queueConfirmMail(
+function queueConfirmMail(
   user: Pick<User, 'id' | 'name' | 'email'>,
   transaction: Transaction,
 ): Promise<MailMessage> {
-  const { token, link } = await issueLink(user.id, 'confirm-account', CONFIRM_TTL_MS, transaction);
-  return MailMessage.create(
+  return queueLinkMail(
+    user,
     {
-      kind: 'confirm-account',
-      toEmail: user.email,
-      toUserId: user.id,
+      purpose: 'confirm-account',
+      ttlMs: CONFIRM_TTL_MS,
+      page: '/confirm-account',
       subject: 'Confirm your new Baskwell account',
-      body: [
-        `Hello ${user.name},`,
-        '',
+      lines: (url) => [
         'Someone (we hope you) created a Baskwell account with this e-mail address.',
         '',
-        `Confirm the account: ${confirmUrl(token)}`,
+        `Confirm the account: ${url}`,
         '',
         'The link works once, for 2 hours; then sign in with the password you chose.',
         'If you did not create this account, ignore this e-mail: without the link it cannot be used.',
-      ].join('\n'),
-      dedupeKey: `confirm-account:${link.id}`,
+      ],
     },
-    { transaction },
+    transaction,
   );
 }
 
@@ -176,25 +163,14 @@ export async function resendConfirmation(input: z.output<typeof resendBody>, add
   return RESEND_ANSWER;
 }
 
-/** Confirms the account of a live link (once); its owner then signs in with the password they chose. */
+/**
+ * Confirms the account of a live link (once); its owner then signs in with the password they chose. Tries
+ * before confirming were refused like wrong passwords; they no longer slow the first sign-in.
+ */
 export async function confirmAccount(input: z.output<typeof confirmBody>): Promise<{ email: string }> {
-  const sequelize = getSequelize();
   const now = new Date();
-  const link = await findLiveLink(input.token, 'confirm-account', now);
-  if (!link) throw expiredLink();
-  const email = await sequelize.transaction(async (transaction) => {
-    if (!(await useLink(link, now, transaction))) throw expiredLink();
-    const user = await User.findByPk(link.userId, { attributes: ['id', 'email'], transaction });
-    if (!user) throw expiredLink();
-    await User.update(
-      { emailConfirmedAt: now },
-      { where: { id: user.id, emailConfirmedAt: null }, transaction },
-    );
-    return user.email;
-  });
-  // Tries before confirming were refused like wrong passwords; they should not slow the first sign-in.
-  await clearFailures(limitKey('account', email));
-  return { email };
+  const link = await liveLink(input.token, 'confirm-account', now);
+  return { email: await openLink(link, now) };
 }
 
 async function tellExistingOwner(user: Pick<User, 'id' | 'name' | 'email'>): Promise<void> {
