@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { startingLampType } from '@/lib/lamp-types/starting-lamp-types';
-import { toColumns } from '@/lib/lamp-types/mutations';
+import { createLampType } from '@/lib/lamp-types/mutations';
 import { up } from '@/migrations/0016-lamp-reach-wording';
 import { LampType } from '@/models';
 import { createOrganisation, testDb, withTestDatabase } from './helpers/db';
@@ -22,13 +22,12 @@ async function entry(
   presetKey: string | null,
 ) {
   const seeded = startingLampType('t5-medium');
-  return LampType.create({
+  return createLampType(
     organisationId,
-    ...toColumns({ ...seeded, name, notes, sources: { ...seeded.sources, uvbAt30: source, watts: source } }),
-    presetKey,
-    createdById: null,
-    updatedById: null,
-  });
+    { ...seeded, name, notes, sources: { ...seeded.sources, uvbAt30: source, watts: source } },
+    null,
+    { presetKey: presetKey ?? undefined },
+  );
 }
 
 describe('migration 0016: no distance per output class in the starting catalogue', () => {

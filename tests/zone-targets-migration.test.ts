@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { STARTING_SHEETS } from '@/lib/species/starting-sheets';
-import { toColumns } from '@/lib/species/mutations';
+import { createSheet } from '@/lib/species/mutations';
 import { down, up } from '@/migrations/0006-zone-derived-uvb-targets';
 import { SpeciesSheet } from '@/models';
 import { createOrganisation, testDb, withTestDatabase } from './helpers/db';
@@ -16,12 +16,8 @@ const OLD_SOURCE = {
 
 async function oldSheet(organisationId: number, seedKey: string, target: { min: number; max: number }) {
   const sheet = STARTING_SHEETS.find((s) => s.seedKey === seedKey)!;
-  return SpeciesSheet.create({
-    organisationId,
-    ...toColumns({ ...sheet, uvbTargetUw: target, sources: [OLD_SOURCE] }),
+  return createSheet(organisationId, { ...sheet, uvbTargetUw: target, sources: [OLD_SOURCE] }, null, {
     seedKey,
-    createdById: null,
-    updatedById: null,
   });
 }
 
