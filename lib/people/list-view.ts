@@ -26,19 +26,20 @@ export const defaultPeopleDescending = (column: KeeperSortColumn | MemberSortCol
 export type KeeperListView = ListView<KeeperSortColumn>;
 export type MemberListView = ListView<MemberSortColumn>;
 
-export const keeperListView = makeListView({
-  columns: KEEPER_SORT_COLUMNS,
-  defaultSort: { column: 'name', descending: false },
-  defaultDescending: defaultPeopleDescending,
-  pageSize: PEOPLE_PAGE_SIZE,
-  maxSearch: MAX_PEOPLE_SEARCH,
-});
+/** The people lists' view of these columns, starting at `defaultSort` and ascending. */
+const peopleListView = <C extends KeeperSortColumn | MemberSortColumn>(
+  columns: readonly C[],
+  defaultSort: C,
+) =>
+  makeListView({
+    columns,
+    defaultSort: { column: defaultSort, descending: false },
+    defaultDescending: defaultPeopleDescending,
+    pageSize: PEOPLE_PAGE_SIZE,
+    maxSearch: MAX_PEOPLE_SEARCH,
+  });
+
+export const keeperListView = peopleListView(KEEPER_SORT_COLUMNS, 'name');
 
 /** Owners first, then staff, then keepers, each A–Z: who runs the organisation comes first. */
-export const memberListView = makeListView({
-  columns: MEMBER_SORT_COLUMNS,
-  defaultSort: { column: 'role', descending: false },
-  defaultDescending: defaultPeopleDescending,
-  pageSize: PEOPLE_PAGE_SIZE,
-  maxSearch: MAX_PEOPLE_SEARCH,
-});
+export const memberListView = peopleListView(MEMBER_SORT_COLUMNS, 'role');
