@@ -2,8 +2,10 @@
 // helper's), as a browser would after signing in. Unlike tests/api/http.ts it leaves non-JSON bodies
 // unread, so export tests can read the PNG or PDF bytes themselves.
 import { inflateSync } from 'node:zlib';
+import * as designVariantsRoute from '@/app/api/designs/[id]/variants/route';
 import * as enclosureDesignsRoute from '@/app/api/enclosures/[id]/designs/route';
 import * as exportRoute from '@/app/api/variants/[id]/export/route';
+import * as variantRoute from '@/app/api/variants/[id]/route';
 import * as sharesRoute from '@/app/api/variants/[id]/shares/route';
 import * as sharedReportRoute from '@/app/s/[token]/report/route';
 import type { User } from '@/models';
@@ -79,6 +81,26 @@ export const postShare = (user: User, variantId: number, body: unknown = {}) =>
     method: 'POST',
     path: `/api/variants/${variantId}/shares`,
     params: { id: variantId },
+    user,
+    body,
+  });
+
+/** A save of a variant (`{ design, baseVersion }` …) through the route, as `user` sends it. */
+export const putVariant = (user: User, variantId: number, body: unknown) =>
+  call(variantRoute.PUT, {
+    method: 'PUT',
+    path: `/api/variants/${variantId}`,
+    params: { id: variantId },
+    user,
+    body,
+  });
+
+/** A new variant of a design (`{ name, design }` or `{ name, fromVariantId }`), as `user` asks for it. */
+export const postVariant = (user: User, designId: number, body: unknown) =>
+  call(designVariantsRoute.POST, {
+    method: 'POST',
+    path: `/api/designs/${designId}/variants`,
+    params: { id: designId },
     user,
     body,
   });

@@ -6,7 +6,7 @@ import * as variantRoute from '@/app/api/variants/[id]/route';
 import { Design, Variant } from '@/models';
 import { addMember, createUser, withTestDatabase } from '../helpers/db';
 import { createEnclosureWorld } from '../helpers/world';
-import { call } from './variants.helpers';
+import { call, postVariant, putVariant } from './variants.helpers';
 
 withTestDatabase();
 
@@ -134,13 +134,7 @@ describe('variants', () => {
     const { variantId } = await designWithVariant(w);
     const before = (await getVariant(w.keeper, variantId)).body.variant;
     const design = { ...before.design, objects: [...before.design.objects, lamp] };
-    const put = await call(variantRoute.PUT, {
-      method: 'PUT',
-      path: `/api/variants/${variantId}`,
-      params: { id: variantId },
-      user: w.keeper,
-      body: { design, baseVersion: 1 },
-    });
+    const put = await putVariant(w.keeper, variantId, { design, baseVersion: 1 });
     expect(put.status).toBe(200);
     expect(put.body.variant).toMatchObject({ id: variantId, version: 2 });
     const after = (await getVariant(w.staff, variantId)).body.variant;
@@ -156,20 +150,12 @@ describe('variants', () => {
     const base = (await getVariant(w.keeper, variantId)).body.variant.design;
     const mine = { ...base, objects: [...base.objects, lamp] };
     const theirs = { ...base, objects: [...base.objects, { ...lamp, id: 'other', x: 20 }] };
-    const first = await call(variantRoute.PUT, {
-      method: 'PUT',
-      path: `/api/variants/${variantId}`,
-      params: { id: variantId },
-      user: w.staff,
-      body: { design: theirs, baseVersion: 1 },
-    });
+    const first = await putVariant(w.staff, variantId, { design: theirs, baseVersion: 1 });
     expect(first.status).toBe(200);
-    const stale = await call(variantRoute.PUT, {
-      method: 'PUT',
-      path: `/api/variants/${variantId}`,
-      params: { id: variantId },
-      user: w.keeper,
-      body: { design: mine, baseVersion: 1, name: 'Should not stick' },
+    const stale = await putVariant(w.keeper, variantId, {
+      design: mine,
+      baseVersion: 1,
+      name: 'Should not stick',
     });
     expect(stale.status).toBe(409);
     expect(stale.body.error.code).toBe('stale');
@@ -186,12 +172,9 @@ describe('variants', () => {
     const { variantId } = await designWithVariant(w);
     const base = (await getVariant(w.keeper, variantId)).body.variant.design;
     const save = (x: number) =>
-      call(variantRoute.PUT, {
-        method: 'PUT',
-        path: `/api/variants/${variantId}`,
-        params: { id: variantId },
-        user: w.keeper,
-        body: { design: { ...base, objects: [...base.objects, { ...lamp, x }] }, baseVersion: 1 },
+      putVariant(w.keeper, variantId, {
+        design: { ...base, objects: [...base.objects, { ...lamp, x }] },
+        baseVersion: 1,
       });
     const results = await Promise.all([save(10), save(20), save(30)]);
     expect(results.map((r) => r.status).sort()).toEqual([200, 409, 409]);
@@ -207,34 +190,19 @@ describe('variants', () => {
     const { designId, variantId } = await designWithVariant(w);
     const base = (await getVariant(w.keeper, variantId)).body.variant.design;
     const bad = { ...base, objects: [...base.objects, { ...lamp, uvbAt30: -5 }] };
-    const put = await call(variantRoute.PUT, {
-      method: 'PUT',
-      path: `/api/variants/${variantId}`,
-      params: { id: variantId },
-      user: w.keeper,
-      body: { design: bad, baseVersion: 1 },
-    });
+    const put = await putVariant(w.keeper, variantId, { design: bad, baseVersion: 1 });
     expect(put.status).toBe(400);
     expect(put.body.error.field).toBe('design.objects[1].uvbAt30');
     // The message itself names the field, so whoever shows it to the user shows where the fault is.
     expect(put.body.error.message).toMatch(/^objects\[1\]\.uvbAt30: /);
-    const upload = await call(designVariantsRoute.POST, {
-      method: 'POST',
-      path: `/api/designs/${designId}/variants`,
-      params: { id: designId },
-      user: w.keeper,
-      body: { name: 'Upload', design: { ...base, objects: [{ ...lamp, colour: 'red' }] } },
+    const upload = await postVariant(w.keeper, designId, {
+      name: 'Upload',
+      design: { ...base, objects: [{ ...lamp, colour: 'red' }] },
     });
     expect(upload.status).toBe(400);
     expect(upload.body.error.field).toBe('design.objects[0].colour');
     expect(upload.body.error.message).toBe('objects[0].colour: unknown field');
-    const missing = await call(variantRoute.PUT, {
-      method: 'PUT',
-      path: `/api/variants/${variantId}`,
-      params: { id: variantId },
-      user: w.keeper,
-      body: { baseVersion: 1 },
-    });
+    const missing = await putVariant(w.keeper, variantId, { baseVersion: 1 });
     expect(missing.status).toBe(400);
     expect(missing.body.error.field).toBe('design');
     expect((await Variant.findByPk(variantId))!.version).toBe(1);
@@ -243,14 +211,7 @@ describe('variants', () => {
   it('imports a design file: names the field at fault in the message, refuses an unknown version', async () => {
     const w = await world();
     const { designId } = await designWithVariant(w);
-    const upload = (design: unknown) =>
-      call(designVariantsRoute.POST, {
-        method: 'POST',
-        path: `/api/designs/${designId}/variants`,
-        params: { id: designId },
-        user: w.keeper,
-        body: { name: 'Imported', design },
-      });
+    const upload = (design: unknown) => postVariant(w.keeper, designId, { name: 'Imported', design });
     const file = {
       format: 'baskwell.design',
       version: 2,
@@ -287,14 +248,7 @@ describe('variants', () => {
     const { designId, variantId } = await designWithVariant(w);
     const base = (await getVariant(w.keeper, variantId)).body.variant.design;
     const uploaded = { ...base, objects: [...base.objects, lamp] };
-    const post = (body: unknown) =>
-      call(designVariantsRoute.POST, {
-        method: 'POST',
-        path: `/api/designs/${designId}/variants`,
-        params: { id: designId },
-        user: w.keeper,
-        body,
-      });
+    const post = (body: unknown) => postVariant(w.keeper, designId, body);
     const up = await post({ name: 'Uploaded', design: uploaded });
     expect(up.status).toBe(201);
     const dup = await post({ name: 'Copy', fromVariantId: up.body.variant.id });
@@ -338,13 +292,7 @@ describe('variants', () => {
       user: w.keeper,
     });
     expect(last.status).toBe(409);
-    const copy = await call(designVariantsRoute.POST, {
-      method: 'POST',
-      path: `/api/designs/${designId}/variants`,
-      params: { id: designId },
-      user: w.keeper,
-      body: { name: 'Copy', fromVariantId: variantId },
-    });
+    const copy = await postVariant(w.keeper, designId, { name: 'Copy', fromVariantId: variantId });
     const del = await call(variantRoute.DELETE, {
       method: 'DELETE',
       path: `/api/variants/${copy.body.variant.id}`,
