@@ -1,15 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { CounterLamp, CounterReading, Customer, Organisation } from '@/models';
-import { seedDemo, withTestDatabase } from '@/tests/helpers/db';
+import { CounterLamp, CounterReading, Customer } from '@/models';
+import { seedDemo, seedDemoShop, withTestDatabase } from '@/tests/helpers/db';
 import { DEMO_CUSTOMERS } from './counter';
-import { DEMO_SHOP } from './scenario';
 
 withTestDatabase();
 
 describe('demo counter', () => {
   it('adds a dozen invented customers of the example shop with their counter tests, once', async () => {
-    await seedDemo();
-    const shop = (await Organisation.findOne({ where: { name: DEMO_SHOP.name } }))!;
+    const shop = await seedDemoShop();
     expect(shop.exampleData).toBe(true);
     expect(DEMO_CUSTOMERS).toHaveLength(12);
     expect(await Customer.count({ where: { organisationId: shop.id } })).toBe(12);

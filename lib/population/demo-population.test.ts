@@ -1,9 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { DEMO_CUSTOMERS } from '@/lib/demo/counter';
-import { DEMO_SHOP } from '@/lib/demo/scenario';
 import { addDays, todayIso } from '@/lib/lamp-log/dates';
-import { CounterLamp, CounterReading, LampType, Organisation } from '@/models';
-import { seedDemo, withTestDatabase } from '@/tests/helpers/db';
+import { CounterLamp, CounterReading, LampType } from '@/models';
+import { seedDemoShop, withTestDatabase } from '@/tests/helpers/db';
 import { counterFigures, weekOf, WEEKS } from './dashboard';
 import { MIN_LAMPS, MIN_READINGS, populationCurve } from './fit';
 import { populationInput } from './queries';
@@ -12,8 +11,7 @@ withTestDatabase();
 
 describe('the example shop’s figures', () => {
   it('show a measured curve for its high-output T5 tubes on first start', async () => {
-    await seedDemo();
-    const shop = (await Organisation.findOne({ where: { name: DEMO_SHOP.name } }))!;
+    const shop = await seedDemoShop();
     expect(shop.exampleData).toBe(true);
     const type = (await LampType.findOne({ where: { organisationId: shop.id, presetKey: 't5-high' } }))!;
     const curve = populationCurve(await populationInput(type));
@@ -26,8 +24,7 @@ describe('the example shop’s figures', () => {
   });
 
   it('count the counter’s tests a week and the lamps it said to replace', async () => {
-    await seedDemo();
-    const shop = (await Organisation.findOne({ where: { name: DEMO_SHOP.name } }))!;
+    const shop = await seedDemoShop();
     const today = todayIso();
     const figures = await counterFigures(shop.id, today);
     expect(figures.weeks).toHaveLength(WEEKS);

@@ -4,6 +4,7 @@ import bcrypt from 'bcryptjs';
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { afterAll, beforeEach } from 'vitest';
 import { closeSequelize, getSequelize } from '@/lib/db';
+import { DEMO_SHOP } from '@/lib/demo/scenario';
 import { seedDemo as seedDemoScenario, type SeedResult } from '@/lib/demo/seed';
 import { refreshStaleOutlooks } from '@/lib/lamp-log/stored-outlooks';
 import { migrateUp } from '@/lib/migrate';
@@ -104,6 +105,12 @@ export async function seedDemo(): Promise<SeedResult> {
   // after their commits, in the background; bring them all up to date before a test reads the lamp log.
   await refreshStaleOutlooks();
   return result;
+}
+
+/** Adds the demo scenario and gives its example shop, the organisation most demo tests look at. */
+export async function seedDemoShop(): Promise<Organisation> {
+  await seedDemo();
+  return (await Organisation.findOne({ where: { name: DEMO_SHOP.name } }))!;
 }
 
 export function closeDatabase(): Promise<void> {
