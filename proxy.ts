@@ -1,6 +1,7 @@
 import { NextResponse, type NextRequest } from 'next/server';
 import { hasControlCharacter } from '@/lib/auth/return-to';
 import { contentSecurityPolicy, makeNonce } from '@/lib/security/csp';
+import { heldSharePath } from '@/lib/variants/share-html-path';
 
 /** Query parameters that name a page to return to: a control character in one is an attack, not a typo. */
 const RETURN_PARAMS = ['callbackUrl', 'returnTo'];
@@ -12,6 +13,8 @@ const RETURN_PARAMS = ['callbackUrl', 'returnTo'];
  * A return address with a control character answers 400 here, before next-auth would fail to put it in
  * a cookie (a 500) or a browser would strip it into another site's address. Only headers and that
  * check: authorization is never done here (every route and page checks access itself).
+ * A browser's visit of a share page goes to the route that serves its held HTML (with this nonce), which
+ * checks the link itself like the page does (lib/variants/share-html-path, app/s/[token]/held).
  */
 export function proxy(request: NextRequest) {
   const params = request.nextUrl.searchParams;
@@ -25,7 +28,15 @@ export function proxy(request: NextRequest) {
   const csp = contentSecurityPolicy({ nonce: makeNonce(), dev: process.env.NODE_ENV === 'development' });
   const headers = new Headers(request.headers);
   headers.set('content-security-policy', csp);
-  const response = NextResponse.next({ request: { headers } });
+  const held = heldSharePath(
+    request.method,
+    request.nextUrl.pathname,
+    request.nextUrl.search,
+    request.headers,
+  );
+  const response = held
+    ? NextResponse.rewrite(new URL(held, request.url), { request: { headers } })
+    : NextResponse.next({ request: { headers } });
   response.headers.set('Content-Security-Policy', csp);
   return response;
 }

@@ -109,6 +109,19 @@ describe('nonce-based Content-Security-Policy', () => {
       await visitor.waitForLoadState('load');
       await screenshot(visitor, 'csp-share-page');
       expect(await violationsOf(visitor, seen)).toEqual([]);
+
+      // Seen again, the page is the HTML held since the first view, joined with this answer's nonce: a
+      // fresh one, the only one in the page, and Next's scripts run with it.
+      const nonceOf = (policy: string | undefined) => /'nonce-([^']+)'/.exec(policy ?? '')?.[1];
+      const again = await visitor.goto(sharePath);
+      expect(again?.status()).toBe(200);
+      const nonce = nonceOf(again?.headers()['content-security-policy']);
+      expect(nonce).toBeTruthy();
+      expect(nonce).not.toBe(nonceOf(res?.headers()['content-security-policy']));
+      const html = await again!.text();
+      expect(new Set([...html.matchAll(/nonce="([^"]+)"/g)].map((m) => m[1]))).toEqual(new Set([nonce]));
+      await visitor.waitForFunction(() => 'next' in window);
+      expect(await violationsOf(visitor, seen)).toEqual([]);
     } finally {
       await visitor.close();
     }

@@ -185,6 +185,7 @@ export const REQUESTS: Record<string, RequestSpec> = {
   'DELETE /api/variants/[id]': {},
   'GET /api/variants/[id]/shares': {},
   'POST /api/variants/[id]/shares': { body: () => ({ expiresInDays: 7 }) },
+  'GET /s/[token]/held': {},
   'GET /s/[token]/report': { query: () => 'format=pdf' },
   'GET /s/[token]/picture/[version]/[file]': {},
 };
