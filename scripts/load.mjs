@@ -1,5 +1,5 @@
 #!/usr/bin/env node
-// `npm run load -- [URL] [--rate N] [--duration S] [--connections N]`: a fixed-rate load run with
+// `npm run load -- [URL] [--rate N] [--duration S] [--connections N] [--share-only]`: a fixed-rate load run with
 // autocannon against a running production server (`npm start`, or `next start` on a build). It signs in
 // as a demo staff member (next-auth's CSRF token, then the credentials callback), makes a throw-away
 // design of its own, and measures, one after another at the same request rate:
@@ -8,6 +8,7 @@
 //   forward; 409s from saves that crossed are counted apart), the public share page /s/<token>, and
 //   its field picture (an SVG at its own cacheable address), fetched whole and revalidated (304).
 // Then, one at a time once warm, the PNG and PDF reports of that design (made on the engine threads).
+// --share-only: the baseline and the share page alone (two builds compared run after run in a minute).
 // Prints a table (requests/s, p50, p99, and p50/p99 as a multiple of the cheapest route's) and one final
 // JSON line; removes its design at the end. Figures, not a pass/fail test: the machine decides them.
 // Bounded: each scenario sends at most rate × duration requests and stops after `duration` seconds; the
@@ -58,9 +59,10 @@ function parseArgs(argv, env) {
     if (a.startsWith('--rate')) opts.rate = num();
     else if (a.startsWith('--duration')) opts.duration = num();
     else if (a.startsWith('--connections')) opts.connections = Math.round(num());
+    else if (a === '--share-only') opts.shareOnly = true;
     else if (a === '--help' || a === '-h') opts.help = true;
     else if (!a.startsWith('-')) opts.url = a;
-    else throw new Error(`unknown option ${a} (--rate N, --duration S, --connections N)`);
+    else throw new Error(`unknown option ${a} (--rate N, --duration S, --connections N, --share-only)`);
   }
   opts.url = opts.url.replace(/\/+$/, '');
   return opts;
@@ -232,11 +234,67 @@ export function printColumns(header, lines) {
   for (const l of lines) console.log(fmt(l));
 }
 
+/** The design read and the design save, each connection saving a variant of its own. */
+async function readAndSave(opts, base, jar, authed, variantId, designId, rows) {
+  const variantPath = `/api/variants/${variantId}`;
+  await warmUp(base, jar, variantPath);
+  rows.push(
+    row('GET /api/variants/[id]', await cannon(opts, { url: `${base}${variantPath}`, headers: authed })),
+  );
+
+  // Each connection edits a variant of its own (as each user edits their own design) and carries its
+  // version forward; a 409 means two saves of one variant crossed, counted apart.
+  const variants = [variantId];
+  while (variants.length < opts.connections) {
+    const v = await api(base, jar, 'POST', `/api/designs/${designId}/variants`, {
+      name: `Load ${variants.length + 1}`,
+      design: DESIGN,
+    });
+    variants.push(v.variant.id);
+  }
+  const versions = new Map();
+  for (const id of variants)
+    versions.set(id, (await api(base, jar, 'GET', `/api/variants/${id}`)).variant.version);
+  let assigned = 0;
+  let saved = 0;
+  let stale = 0;
+  // autocannon clears a request's context on every loop, so the variant is bound per client instead.
+  const saveRequest = (id) => ({
+    method: 'PUT',
+    path: `/api/variants/${id}`,
+    headers: { ...authed, 'content-type': 'application/json' },
+    setupRequest: (req) => ({
+      ...req,
+      body: JSON.stringify({ design: DESIGN, baseVersion: versions.get(id) }),
+    }),
+    onResponse: (status, body) => {
+      try {
+        const json = JSON.parse(body);
+        if (status === 200) {
+          saved++;
+          versions.set(id, Math.max(versions.get(id), json.variant.version));
+        } else if (status === 409) {
+          stale++;
+          versions.set(id, Math.max(versions.get(id), json.current?.version ?? 0));
+        }
+      } catch {
+        /* counted by status code */
+      }
+    },
+  });
+  const save = await cannon(opts, {
+    url: `${base}${variantPath}`,
+    requests: [saveRequest(variantId)],
+    setupClient: (client) => client.setRequests([saveRequest(variants[assigned++ % variants.length])]),
+  });
+  rows.push(row('PUT /api/variants/[id]', save, { saved, stale409: stale }));
+}
+
 async function main() {
   const env = loadEnv();
   const opts = parseArgs(process.argv.slice(2), env);
   if (opts.help) {
-    console.log('npm run load -- [URL] [--rate N] [--duration S] [--connections N]');
+    console.log('npm run load -- [URL] [--rate N] [--duration S] [--connections N] [--share-only]');
     return;
   }
   const base = opts.url;
@@ -281,64 +339,13 @@ async function main() {
 
     for (const [name, p] of [
       ['GET /api/health (baseline)', '/api/health'],
-      ['GET /api/auth/csrf', '/api/auth/csrf'],
+      ...(opts.shareOnly ? [] : [['GET /api/auth/csrf', '/api/auth/csrf']]),
     ]) {
       await warmUp(base, jar, p);
       rows.push(row(name, await cannon(opts, { url: `${base}${p}` })));
     }
 
-    const variantPath = `/api/variants/${variantId}`;
-    await warmUp(base, jar, variantPath);
-    rows.push(
-      row('GET /api/variants/[id]', await cannon(opts, { url: `${base}${variantPath}`, headers: authed })),
-    );
-
-    // Each connection edits a variant of its own (as each user edits their own design) and carries its
-    // version forward; a 409 means two saves of one variant crossed, counted apart.
-    const variants = [variantId];
-    while (variants.length < opts.connections) {
-      const v = await api(base, jar, 'POST', `/api/designs/${designId}/variants`, {
-        name: `Load ${variants.length + 1}`,
-        design: DESIGN,
-      });
-      variants.push(v.variant.id);
-    }
-    const versions = new Map();
-    for (const id of variants)
-      versions.set(id, (await api(base, jar, 'GET', `/api/variants/${id}`)).variant.version);
-    let assigned = 0;
-    let saved = 0;
-    let stale = 0;
-    // autocannon clears a request's context on every loop, so the variant is bound per client instead.
-    const saveRequest = (id) => ({
-      method: 'PUT',
-      path: `/api/variants/${id}`,
-      headers: { ...authed, 'content-type': 'application/json' },
-      setupRequest: (req) => ({
-        ...req,
-        body: JSON.stringify({ design: DESIGN, baseVersion: versions.get(id) }),
-      }),
-      onResponse: (status, body) => {
-        try {
-          const json = JSON.parse(body);
-          if (status === 200) {
-            saved++;
-            versions.set(id, Math.max(versions.get(id), json.variant.version));
-          } else if (status === 409) {
-            stale++;
-            versions.set(id, Math.max(versions.get(id), json.current?.version ?? 0));
-          }
-        } catch {
-          /* counted by status code */
-        }
-      },
-    });
-    const save = await cannon(opts, {
-      url: `${base}${variantPath}`,
-      requests: [saveRequest(variantId)],
-      setupClient: (client) => client.setRequests([saveRequest(variants[assigned++ % variants.length])]),
-    });
-    rows.push(row('PUT /api/variants/[id]', save, { saved, stale409: stale }));
+    if (!opts.shareOnly) await readAndSave(opts, base, jar, authed, variantId, designId, rows);
 
     // Saves autocannon sent just before it stopped may still be landing, each a new version: wait until
     // the page names the same version twice, so the picture address read from it stays the current one.
@@ -363,7 +370,9 @@ async function main() {
     // The field picture the page points at (its own cacheable address): drawn once, then served from
     // memory to every visitor; and the answer to a browser that already holds it (If-None-Match → 304).
     const pictureSrc = /<img[^>]+src="([^"]*\/picture\/[^"]+)"/.exec(html)?.[1]?.replace(/&amp;/g, '&');
-    if (pictureSrc) {
+    if (opts.shareOnly) {
+      // The page alone.
+    } else if (pictureSrc) {
       const first = await fetch(`${base}${pictureSrc}`, { signal: AbortSignal.timeout(15_000) });
       pictureBytes = (await first.arrayBuffer()).byteLength;
       const etag = first.headers.get('etag');
@@ -383,10 +392,10 @@ async function main() {
 
     // Reports on the engine threads, one at a time once warm: what one person waits for a download.
     // A link of their own, so that the per-link download limit of the page's link is left alone.
-    const reportShare = await api(base, jar, 'POST', `/api/variants/${variantId}/shares`, {
-      expiresInDays: 1,
-    });
-    for (const format of ['png', 'pdf']) {
+    const reportShare = opts.shareOnly
+      ? null
+      : await api(base, jar, 'POST', `/api/variants/${variantId}/shares`, { expiresInDays: 1 });
+    for (const format of reportShare ? ['png', 'pdf'] : []) {
       reports[format] = await timeSequential(
         `${base}/s/${reportShare.share.token}/report?format=${format}`,
         REPORT_RUNS,
