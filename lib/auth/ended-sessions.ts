@@ -3,7 +3,7 @@ import { randomBytes } from 'node:crypto';
 import { Op } from 'sequelize';
 import { EndedSession } from '@/models';
 import { SESSION_MAX_AGE_S } from './lifetime';
-import { loadSessionUser, type CurrentUser } from './session-user';
+import { loadUnendedSessionUser, type CurrentUser } from './session-user';
 
 /**
  * Signing out ends that one session on the server, not only in the browser: each session cookie carries a
@@ -24,11 +24,7 @@ export async function loadActiveSession(token: SessionClaims): Promise<CurrentUs
   const { uid, sv, sid } = token;
   if (typeof uid !== 'number' || typeof sv !== 'number' || typeof sid !== 'string' || !SID.test(sid))
     return null;
-  const [ended, user] = await Promise.all([
-    EndedSession.findByPk(sid, { attributes: ['sid'] }),
-    loadSessionUser(uid, sv),
-  ]);
-  return ended ? null : user;
+  return loadUnendedSessionUser(uid, sv, sid);
 }
 
 /** Whether a session id was signed out (a malformed id counts as ended). */
