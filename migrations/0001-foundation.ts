@@ -1,57 +1,46 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
-
-const id = { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true };
-const stamps = {
-  created_at: { type: DataTypes.DATE, allowNull: false },
-  updated_at: { type: DataTypes.DATE, allowNull: false },
-};
-const ref = (table: string, onDelete: 'CASCADE' | 'RESTRICT' = 'CASCADE') => ({
-  type: DataTypes.INTEGER.UNSIGNED,
-  allowNull: false,
-  references: { model: table, key: 'id' },
-  onDelete,
-});
+import { id, ref, stamps } from './columns';
 
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.createTable('organisations', {
-    id,
+    id: id(),
     name: { type: DataTypes.STRING(120), allowNull: false },
-    ...stamps,
+    ...stamps(),
   });
   await qi.createTable('users', {
-    id,
+    id: id(),
     email: { type: DataTypes.STRING(254), allowNull: false, unique: true },
     name: { type: DataTypes.STRING(120), allowNull: false },
     password_hash: { type: DataTypes.STRING(100), allowNull: false },
     session_version: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 },
-    ...stamps,
+    ...stamps(),
   });
   await qi.createTable('memberships', {
-    id,
-    organisation_id: ref('organisations'),
-    user_id: ref('users'),
+    id: id(),
+    organisation_id: ref('organisations', 'CASCADE'),
+    user_id: ref('users', 'CASCADE'),
     role: { type: DataTypes.ENUM('owner', 'staff', 'keeper'), allowNull: false },
-    ...stamps,
+    ...stamps(),
   });
   await qi.addIndex('memberships', ['organisation_id', 'user_id'], {
     unique: true,
     name: 'memberships_org_user',
   });
   await qi.createTable('invitations', {
-    id,
-    organisation_id: ref('organisations'),
+    id: id(),
+    organisation_id: ref('organisations', 'CASCADE'),
     email: { type: DataTypes.STRING(254), allowNull: false },
     role: { type: DataTypes.ENUM('owner', 'staff', 'keeper'), allowNull: false },
     token_hash: { type: DataTypes.CHAR(64), allowNull: false, unique: true },
-    invited_by_id: ref('users'),
+    invited_by_id: ref('users', 'CASCADE'),
     expires_at: { type: DataTypes.DATE, allowNull: false },
     accepted_at: { type: DataTypes.DATE, allowNull: true },
     revoked_at: { type: DataTypes.DATE, allowNull: true },
-    ...stamps,
+    ...stamps(),
   });
   await qi.createTable('enclosures', {
-    id,
-    organisation_id: ref('organisations'),
+    id: id(),
+    organisation_id: ref('organisations', 'CASCADE'),
     keeper_id: ref('users', 'RESTRICT'),
     name: { type: DataTypes.STRING(120), allowNull: false },
     width_cm: { type: DataTypes.FLOAT, allowNull: false },
@@ -60,7 +49,7 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     species_name: { type: DataTypes.STRING(160), allowNull: true },
     animal_name: { type: DataTypes.STRING(120), allowNull: true },
     notes: { type: DataTypes.TEXT, allowNull: true },
-    ...stamps,
+    ...stamps(),
   });
   await qi.addIndex('enclosures', ['organisation_id', 'keeper_id'], { name: 'enclosures_org_keeper' });
 }

@@ -1,4 +1,5 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
+import { id, stamps } from './columns';
 
 /**
  * Failed sign-in counters, kept in the database so every web process shares them (the web tier is stateless).
@@ -6,12 +7,11 @@ import { DataTypes, type QueryInterface } from 'sequelize';
  */
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.createTable('sign_in_attempts', {
-    id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+    id: id(),
     key: { type: DataTypes.STRING(100), allowNull: false, unique: true },
     window_start: { type: DataTypes.DATE, allowNull: false },
     count: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
-    created_at: { type: DataTypes.DATE, allowNull: false },
-    updated_at: { type: DataTypes.DATE, allowNull: false },
+    ...stamps(),
   });
   await qi.addIndex('sign_in_attempts', ['window_start'], { name: 'sign_in_attempts_window_start' });
 }

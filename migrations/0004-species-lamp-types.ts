@@ -1,23 +1,6 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
+import { author, id, ref, stamps } from './columns';
 
-const id = { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true };
-const stamps = {
-  created_at: { type: DataTypes.DATE, allowNull: false },
-  updated_at: { type: DataTypes.DATE, allowNull: false },
-};
-const organisation = {
-  type: DataTypes.INTEGER.UNSIGNED,
-  allowNull: false,
-  references: { model: 'organisations', key: 'id' },
-  onDelete: 'CASCADE',
-};
-// Who made or changed a row: history only, so removing a user keeps the catalogue entry.
-const author = {
-  type: DataTypes.INTEGER.UNSIGNED,
-  allowNull: true,
-  references: { model: 'users', key: 'id' },
-  onDelete: 'SET NULL',
-};
 const float = (allowNull: boolean) => ({ type: DataTypes.FLOAT, allowNull });
 
 const LAMP_TECHS = [
@@ -34,8 +17,8 @@ const LAMP_TECHS = [
 
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.createTable('species_sheets', {
-    id,
-    organisation_id: organisation,
+    id: id(),
+    organisation_id: ref('organisations', 'CASCADE'),
     common_name: { type: DataTypes.STRING(120), allowNull: false },
     scientific_name: { type: DataTypes.STRING(160), allowNull: false },
     uv_zone: { type: DataTypes.TINYINT.UNSIGNED, allowNull: false },
@@ -53,9 +36,9 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     notes: { type: DataTypes.TEXT, allowNull: true },
     sources_json: { type: DataTypes.TEXT, allowNull: false },
     seed_key: { type: DataTypes.STRING(60), allowNull: true },
-    created_by_id: author,
-    updated_by_id: author,
-    ...stamps,
+    created_by_id: author(),
+    updated_by_id: author(),
+    ...stamps(),
   });
   await qi.addIndex('species_sheets', ['organisation_id', 'common_name'], {
     name: 'species_sheets_org_name',
@@ -67,8 +50,8 @@ export async function up({ context: qi }: { context: QueryInterface }) {
   });
 
   await qi.createTable('lamp_types', {
-    id,
-    organisation_id: organisation,
+    id: id(),
+    organisation_id: ref('organisations', 'CASCADE'),
     name: { type: DataTypes.STRING(120), allowNull: false },
     tech: { type: DataTypes.ENUM(...LAMP_TECHS), allowNull: false },
     form: { type: DataTypes.ENUM('tube', 'bulb'), allowNull: false },
@@ -85,9 +68,9 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     notes: { type: DataTypes.TEXT, allowNull: true },
     sources_json: { type: DataTypes.TEXT, allowNull: false },
     preset_key: { type: DataTypes.STRING(60), allowNull: true },
-    created_by_id: author,
-    updated_by_id: author,
-    ...stamps,
+    created_by_id: author(),
+    updated_by_id: author(),
+    ...stamps(),
   });
   // Names are how people pick a lamp type: unique within an organisation.
   await qi.addIndex('lamp_types', ['organisation_id', 'name'], { unique: true, name: 'lamp_types_org_name' });
@@ -97,7 +80,7 @@ export async function up({ context: qi }: { context: QueryInterface }) {
   });
 
   await qi.createTable('catalogue_seedings', {
-    organisation_id: { ...organisation, primaryKey: true },
+    organisation_id: { ...ref('organisations', 'CASCADE'), primaryKey: true },
     seeded_at: { type: DataTypes.DATE, allowNull: false },
   });
 }

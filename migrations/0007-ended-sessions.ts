@@ -1,4 +1,5 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
+import { ref } from './columns';
 
 /**
  * Sessions ended by signing out. A session cookie is a signed JWT the server cannot take back, so signing
@@ -8,12 +9,7 @@ import { DataTypes, type QueryInterface } from 'sequelize';
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.createTable('ended_sessions', {
     sid: { type: DataTypes.STRING(64), allowNull: false, primaryKey: true },
-    user_id: {
-      type: DataTypes.INTEGER.UNSIGNED,
-      allowNull: false,
-      references: { model: 'users', key: 'id' },
-      onDelete: 'CASCADE',
-    },
+    user_id: ref('users', 'CASCADE'),
     expires_at: { type: DataTypes.DATE, allowNull: false },
     created_at: { type: DataTypes.DATE, allowNull: false },
   });

@@ -1,4 +1,5 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
+import { dropForeignKeys, id, ref, stamps } from './columns';
 
 /**
  * Background jobs get a record of their runs and of the units of work that failed, and the outbox a
@@ -12,15 +13,10 @@ import { DataTypes, type QueryInterface } from 'sequelize';
  * - `mail_messages.body` grows from TEXT (64 KB) to MEDIUMTEXT (16 MB); existing rows are kept as they are.
  *   `next_attempt_at` holds a failed delivery back (back-off); `organisation_id` says whose it is.
  */
-const id = { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true };
-const stamps = {
-  created_at: { type: DataTypes.DATE, allowNull: false },
-  updated_at: { type: DataTypes.DATE, allowNull: false },
-};
 
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.createTable('job_runs', {
-    id,
+    id: id(),
     job: { type: DataTypes.STRING(60), allowNull: false },
     started_at: { type: DataTypes.DATE(3), allowNull: false },
     finished_at: { type: DataTypes.DATE(3), allowNull: true },
@@ -31,27 +27,17 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     counts_json: { type: DataTypes.TEXT, allowNull: false },
     error: { type: DataTypes.TEXT, allowNull: true },
     host: { type: DataTypes.STRING(120), allowNull: false },
-    ...stamps,
+    ...stamps(),
   });
   await qi.addIndex('job_runs', ['job', 'started_at'], { name: 'job_runs_job_started' });
   await qi.addIndex('job_runs', ['job', 'outcome', 'finished_at'], { name: 'job_runs_job_outcome' });
 
   await qi.createTable('job_run_counts', {
-    id,
-    job_run_id: {
-      type: DataTypes.INTEGER.UNSIGNED,
-      allowNull: false,
-      references: { model: 'job_runs', key: 'id' },
-      onDelete: 'CASCADE',
-    },
-    organisation_id: {
-      type: DataTypes.INTEGER.UNSIGNED,
-      allowNull: false,
-      references: { model: 'organisations', key: 'id' },
-      onDelete: 'CASCADE',
-    },
+    id: id(),
+    job_run_id: ref('job_runs', 'CASCADE'),
+    organisation_id: ref('organisations', 'CASCADE'),
     counts_json: { type: DataTypes.TEXT, allowNull: false },
-    ...stamps,
+    ...stamps(),
   });
   await qi.addIndex('job_run_counts', ['organisation_id', 'job_run_id'], {
     name: 'job_run_counts_organisation',
@@ -59,21 +45,16 @@ export async function up({ context: qi }: { context: QueryInterface }) {
   });
 
   await qi.createTable('job_units', {
-    id,
+    id: id(),
     job: { type: DataTypes.STRING(60), allowNull: false },
     unit_key: { type: DataTypes.STRING(160), allowNull: false },
-    organisation_id: {
-      type: DataTypes.INTEGER.UNSIGNED,
-      allowNull: true,
-      references: { model: 'organisations', key: 'id' },
-      onDelete: 'CASCADE',
-    },
+    organisation_id: ref('organisations', 'CASCADE', true),
     label: { type: DataTypes.STRING(250), allowNull: false },
     attempts: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
     next_attempt_at: { type: DataTypes.DATE(3), allowNull: false },
     last_error: { type: DataTypes.TEXT, allowNull: false },
     last_run_id: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
-    ...stamps,
+    ...stamps(),
   });
   await qi.addIndex('job_units', ['job', 'unit_key'], { name: 'job_units_job_key', unique: true });
   await qi.addIndex('job_units', ['organisation_id', 'updated_at'], { name: 'job_units_organisation' });
@@ -81,25 +62,12 @@ export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.sequelize.query('ALTER TABLE mail_messages MODIFY body MEDIUMTEXT NOT NULL');
   await qi.addColumn('mail_messages', 'next_attempt_at', { type: DataTypes.DATE(3), allowNull: true });
   // Which organisation a message concerns, so its owner can see the ones that could not be delivered.
-  await qi.addColumn('mail_messages', 'organisation_id', {
-    type: DataTypes.INTEGER.UNSIGNED,
-    allowNull: true,
-    references: { model: 'organisations', key: 'id' },
-    onDelete: 'SET NULL',
-  });
+  await qi.addColumn('mail_messages', 'organisation_id', ref('organisations', 'SET NULL', true));
   await qi.addIndex('mail_messages', ['organisation_id', 'status'], { name: 'mail_messages_organisation' });
 }
 
 export async function down({ context: qi }: { context: QueryInterface }) {
-  // Raw SQL: removeColumn through the mariadb driver trips a known Sequelize issue.
-  const [fks] = await qi.sequelize.query(
-    `SELECT CONSTRAINT_NAME AS name FROM information_schema.KEY_COLUMN_USAGE
-      WHERE TABLE_SCHEMA = DATABASE() AND TABLE_NAME = 'mail_messages' AND COLUMN_NAME = 'organisation_id'
-        AND REFERENCED_TABLE_NAME IS NOT NULL`,
-  );
-  for (const fk of fks as { name: string }[]) {
-    await qi.sequelize.query(`ALTER TABLE mail_messages DROP FOREIGN KEY \`${fk.name}\``);
-  }
+  await dropForeignKeys(qi, 'mail_messages', 'organisation_id');
   await qi.sequelize.query('ALTER TABLE mail_messages DROP INDEX mail_messages_organisation');
   await qi.sequelize.query(
     'ALTER TABLE mail_messages DROP COLUMN organisation_id, DROP COLUMN next_attempt_at',

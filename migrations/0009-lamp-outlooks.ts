@@ -1,4 +1,5 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
+import { ref } from './columns';
 
 /**
  * The lamp outlook (fit, status, dates and figures) stored with each lamp instead of computed on every
@@ -23,12 +24,7 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     },
     // Copied from the lamp's enclosure (an enclosure never changes organisation), so the lamp log's
     // filter and sort run on one index of this table.
-    organisation_id: {
-      type: DataTypes.INTEGER.UNSIGNED,
-      allowNull: false,
-      references: { model: 'organisations', key: 'id' },
-      onDelete: 'CASCADE',
-    },
+    organisation_id: ref('organisations', 'CASCADE'),
     // Sort keys copied from the lamp and its enclosure (kept current like the rest of the row: a change
     // to either marks the outlook out of date). Pages show the live values, never these.
     label: { type: DataTypes.STRING(120), allowNull: false },

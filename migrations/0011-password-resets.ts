@@ -1,4 +1,5 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
+import { id, ref } from './columns';
 
 /**
  * "Forgot your password?" links. Only the SHA-256 of a link's token is kept, so a database leak hands out
@@ -6,13 +7,8 @@ import { DataTypes, type QueryInterface } from 'sequelize';
  */
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.createTable('password_resets', {
-    id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
-    user_id: {
-      type: DataTypes.INTEGER.UNSIGNED,
-      allowNull: false,
-      references: { model: 'users', key: 'id' },
-      onDelete: 'CASCADE',
-    },
+    id: id(),
+    user_id: ref('users', 'CASCADE'),
     token_hash: { type: DataTypes.CHAR(64), allowNull: false, unique: true },
     expires_at: { type: DataTypes.DATE, allowNull: false },
     used_at: { type: DataTypes.DATE, allowNull: true },

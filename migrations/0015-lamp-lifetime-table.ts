@@ -9,93 +9,44 @@ import type { QueryInterface } from 'sequelize';
  * Every lamp's outlook is marked out of date, so the lamp log and reminders recompute with the new figures.
  * The values are written out here, not imported: a migration must do the same thing whenever it runs.
  */
+// Notes the seeded UV tubes and bulbs carried before: a general one on decay, and one on replacement.
+const OLD_DECAY_NOTE =
+  'decay: UVB output falls to about half within months — compact lamps at 6–8 months, linear tubes about 12, mercury vapour 12–14, metal halide 24 or more (common practice, no published source)';
+const OLD_REPLACE_SOURCE =
+  'typical replacement interval: common practice, no published source — meter readings in the lamp log decide better';
+
 type Figures = { half: number; replace: number | null; halfSource: string; replaceSource: string };
-const CHANGES: { key: string; from: Figures; to: Figures }[] = [
-  {
-    key: 't5-low',
-    from: {
-      half: 12,
-      replace: 12,
-      halfSource:
-        'T5 fluorescent tube defaults: decay: UVB output falls to about half within months — compact lamps at 6–8 months, linear tubes about 12, mercury vapour 12–14, metal halide 24 or more (common practice, no published source)',
-      replaceSource:
-        'typical replacement interval: common practice, no published source — meter readings in the lamp log decide better',
-    },
-    to: {
-      half: 12,
-      replace: 12,
-      halfSource:
-        'T5 fluorescent tube: half-life 12 months of ordinary use (from memory); T5 UVB tubes are usually replaced after about a year, by which time their UVB is about half of new.',
-      replaceSource:
-        'T5 fluorescent tube: typical replacement interval 12 months (common practice, no published source) — meter readings in the lamp log decide better',
-    },
+type Change = { key: string; from: Figures; to: Figures };
+
+// The four T5 tube strengths were seeded with the same figures and notes, and move to the same ones.
+const T5: Omit<Change, 'key'> = {
+  from: {
+    half: 12,
+    replace: 12,
+    halfSource: `T5 fluorescent tube defaults: ${OLD_DECAY_NOTE}`,
+    replaceSource: OLD_REPLACE_SOURCE,
   },
-  {
-    key: 't5-medium',
-    from: {
-      half: 12,
-      replace: 12,
-      halfSource:
-        'T5 fluorescent tube defaults: decay: UVB output falls to about half within months — compact lamps at 6–8 months, linear tubes about 12, mercury vapour 12–14, metal halide 24 or more (common practice, no published source)',
-      replaceSource:
-        'typical replacement interval: common practice, no published source — meter readings in the lamp log decide better',
-    },
-    to: {
-      half: 12,
-      replace: 12,
-      halfSource:
-        'T5 fluorescent tube: half-life 12 months of ordinary use (from memory); T5 UVB tubes are usually replaced after about a year, by which time their UVB is about half of new.',
-      replaceSource:
-        'T5 fluorescent tube: typical replacement interval 12 months (common practice, no published source) — meter readings in the lamp log decide better',
-    },
+  to: {
+    half: 12,
+    replace: 12,
+    halfSource:
+      'T5 fluorescent tube: half-life 12 months of ordinary use (from memory); T5 UVB tubes are usually replaced after about a year, by which time their UVB is about half of new.',
+    replaceSource:
+      'T5 fluorescent tube: typical replacement interval 12 months (common practice, no published source) — meter readings in the lamp log decide better',
   },
-  {
-    key: 't5-high',
-    from: {
-      half: 12,
-      replace: 12,
-      halfSource:
-        'T5 fluorescent tube defaults: decay: UVB output falls to about half within months — compact lamps at 6–8 months, linear tubes about 12, mercury vapour 12–14, metal halide 24 or more (common practice, no published source)',
-      replaceSource:
-        'typical replacement interval: common practice, no published source — meter readings in the lamp log decide better',
-    },
-    to: {
-      half: 12,
-      replace: 12,
-      halfSource:
-        'T5 fluorescent tube: half-life 12 months of ordinary use (from memory); T5 UVB tubes are usually replaced after about a year, by which time their UVB is about half of new.',
-      replaceSource:
-        'T5 fluorescent tube: typical replacement interval 12 months (common practice, no published source) — meter readings in the lamp log decide better',
-    },
-  },
-  {
-    key: 't5-very-high',
-    from: {
-      half: 12,
-      replace: 12,
-      halfSource:
-        'T5 fluorescent tube defaults: decay: UVB output falls to about half within months — compact lamps at 6–8 months, linear tubes about 12, mercury vapour 12–14, metal halide 24 or more (common practice, no published source)',
-      replaceSource:
-        'typical replacement interval: common practice, no published source — meter readings in the lamp log decide better',
-    },
-    to: {
-      half: 12,
-      replace: 12,
-      halfSource:
-        'T5 fluorescent tube: half-life 12 months of ordinary use (from memory); T5 UVB tubes are usually replaced after about a year, by which time their UVB is about half of new.',
-      replaceSource:
-        'T5 fluorescent tube: typical replacement interval 12 months (common practice, no published source) — meter readings in the lamp log decide better',
-    },
-  },
+};
+const CHANGES: Change[] = [
+  { key: 't5-low', ...T5 },
+  { key: 't5-medium', ...T5 },
+  { key: 't5-high', ...T5 },
+  { key: 't5-very-high', ...T5 },
   {
     key: 't8-medium',
     from: {
       half: 12,
       replace: 6,
-      halfSource:
-        'T8 fluorescent tube defaults: decay: UVB output falls to about half within months — compact lamps at 6–8 months, linear tubes about 12, mercury vapour 12–14, metal halide 24 or more (common practice, no published source)',
-      replaceSource:
-        'typical replacement interval: common practice, no published source — meter readings in the lamp log decide better',
+      halfSource: `T8 fluorescent tube defaults: ${OLD_DECAY_NOTE}`,
+      replaceSource: OLD_REPLACE_SOURCE,
     },
     to: {
       half: 6,
@@ -111,10 +62,8 @@ const CHANGES: { key: string; from: Figures; to: Figures }[] = [
     from: {
       half: 7,
       replace: 6,
-      halfSource:
-        'Compact fluorescent UVB lamp defaults: half-life 7 months: compact lamps fail at 6–8 months decay: UVB output falls to about half within months — compact lamps at 6–8 months, linear tubes about 12, mercury vapour 12–14, metal halide 24 or more (common practice, no published source)',
-      replaceSource:
-        'typical replacement interval: common practice, no published source — meter readings in the lamp log decide better',
+      halfSource: `Compact fluorescent UVB lamp defaults: half-life 7 months: compact lamps fail at 6–8 months ${OLD_DECAY_NOTE}`,
+      replaceSource: OLD_REPLACE_SOURCE,
     },
     to: {
       half: 6,
@@ -130,10 +79,8 @@ const CHANGES: { key: string; from: Figures; to: Figures }[] = [
     from: {
       half: 13,
       replace: 12,
-      halfSource:
-        'Self-ballasted mercury vapour lamp defaults: half-life 13 months: decay: UVB output falls to about half within months — compact lamps at 6–8 months, linear tubes about 12, mercury vapour 12–14, metal halide 24 or more (common practice, no published source)',
-      replaceSource:
-        'typical replacement interval: common practice, no published source — meter readings in the lamp log decide better',
+      halfSource: `Self-ballasted mercury vapour lamp defaults: half-life 13 months: ${OLD_DECAY_NOTE}`,
+      replaceSource: OLD_REPLACE_SOURCE,
     },
     to: {
       half: 6,
@@ -149,10 +96,8 @@ const CHANGES: { key: string; from: Figures; to: Figures }[] = [
     from: {
       half: 24,
       replace: 12,
-      halfSource:
-        'Metal halide UVB lamp defaults: half-life 24 months: decay: UVB output falls to about half within months — compact lamps at 6–8 months, linear tubes about 12, mercury vapour 12–14, metal halide 24 or more (common practice, no published source)',
-      replaceSource:
-        'typical replacement interval: common practice, no published source — meter readings in the lamp log decide better',
+      halfSource: `Metal halide UVB lamp defaults: half-life 24 months: ${OLD_DECAY_NOTE}`,
+      replaceSource: OLD_REPLACE_SOURCE,
     },
     to: {
       half: 12,

@@ -1,16 +1,5 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
-
-const id = { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true };
-const stamps = {
-  created_at: { type: DataTypes.DATE, allowNull: false },
-  updated_at: { type: DataTypes.DATE, allowNull: false },
-};
-const ref = (table: string, onDelete: 'CASCADE' | 'RESTRICT' | 'SET NULL', allowNull = false) => ({
-  type: DataTypes.INTEGER.UNSIGNED,
-  allowNull,
-  references: { model: table, key: 'id' },
-  onDelete,
-});
+import { author, id, ref, stamps } from './columns';
 
 /**
  * A shop's customers and the lamps it tests for them at the counter. Counter lamps live apart from the
@@ -20,7 +9,7 @@ const ref = (table: string, onDelete: 'CASCADE' | 'RESTRICT' | 'SET NULL', allow
  */
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.createTable('customers', {
-    id,
+    id: id(),
     organisation_id: ref('organisations', 'CASCADE'),
     name: { type: DataTypes.STRING(120), allowNull: false },
     email: { type: DataTypes.STRING(254), allowNull: true },
@@ -29,13 +18,13 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     // When the customer agreed to reminder e-mails; null: no consent (never given, or withdrawn).
     reminder_consent_at: { type: DataTypes.DATE, allowNull: true },
     reminder_consent_withdrawn_at: { type: DataTypes.DATE, allowNull: true },
-    created_by_id: ref('users', 'SET NULL', true),
-    ...stamps,
+    created_by_id: author(),
+    ...stamps(),
   });
   await qi.addIndex('customers', ['organisation_id', 'name'], { name: 'customers_organisation_name' });
 
   await qi.createTable('counter_lamps', {
-    id,
+    id: id(),
     organisation_id: ref('organisations', 'CASCADE'),
     customer_id: ref('customers', 'SET NULL', true),
     // A lamp type with counter tests cannot be deleted: the tests depend on its technology and shape.
@@ -48,14 +37,14 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     species_sheet_id: ref('species_sheets', 'SET NULL', true),
     basking_distance_cm: { type: DataTypes.DOUBLE, allowNull: true },
     basking_transmission: { type: DataTypes.DOUBLE, allowNull: true },
-    created_by_id: ref('users', 'SET NULL', true),
-    ...stamps,
+    created_by_id: author(),
+    ...stamps(),
   });
   await qi.addIndex('counter_lamps', ['customer_id', 'id'], { name: 'counter_lamps_customer' });
   await qi.addIndex('counter_lamps', ['organisation_id', 'lamp_type_id'], { name: 'counter_lamps_type' });
 
   await qi.createTable('counter_readings', {
-    id,
+    id: id(),
     counter_lamp_id: ref('counter_lamps', 'CASCADE'),
     taken_at: { type: DataTypes.DATE, allowNull: false },
     distance_cm: { type: DataTypes.DOUBLE, allowNull: false },
@@ -76,8 +65,8 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     // The verdict given at the counter that day, as the customer was told it (kept for the test slip).
     verdict: { type: DataTypes.ENUM('keep', 'test-again', 'replace', 'no-verdict'), allowNull: false },
     test_again_on: { type: DataTypes.DATEONLY, allowNull: true },
-    taken_by_id: ref('users', 'SET NULL', true),
-    ...stamps,
+    taken_by_id: author(),
+    ...stamps(),
   });
   await qi.addIndex('counter_readings', ['counter_lamp_id', 'taken_at'], { name: 'counter_readings_lamp' });
 }

@@ -1,4 +1,5 @@
 import { DataTypes, type QueryInterface } from 'sequelize';
+import { author, id, ref, stamps } from './columns';
 
 /**
  * A shop may adopt the decay curve it measured for one of its lamp types (learned from all its readings of
@@ -12,39 +13,18 @@ import { DataTypes, type QueryInterface } from 'sequelize';
 export async function up({ context: qi }: { context: QueryInterface }) {
   await qi.addColumn('lamp_types', 'adopted_curve_json', { type: DataTypes.TEXT, allowNull: true });
   await qi.createTable('lamp_curve_adoptions', {
-    id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
-    organisation_id: {
-      type: DataTypes.INTEGER.UNSIGNED,
-      allowNull: false,
-      references: { model: 'organisations', key: 'id' },
-      onDelete: 'CASCADE',
-    },
-    lamp_type_id: {
-      type: DataTypes.INTEGER.UNSIGNED,
-      allowNull: false,
-      references: { model: 'lamp_types', key: 'id' },
-      onDelete: 'CASCADE',
-    },
+    id: id(),
+    organisation_id: ref('organisations', 'CASCADE'),
+    lamp_type_id: ref('lamp_types', 'CASCADE'),
     lamps: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
     readings: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
     // The fit as adopted: its kind and parameters, the start and half-life, and the decay table used.
     fit_json: { type: DataTypes.TEXT, allowNull: false },
-    adopted_by_id: {
-      type: DataTypes.INTEGER.UNSIGNED,
-      allowNull: true,
-      references: { model: 'users', key: 'id' },
-      onDelete: 'SET NULL',
-    },
+    adopted_by_id: author(),
     adopted_at: { type: DataTypes.DATE, allowNull: false },
-    withdrawn_by_id: {
-      type: DataTypes.INTEGER.UNSIGNED,
-      allowNull: true,
-      references: { model: 'users', key: 'id' },
-      onDelete: 'SET NULL',
-    },
+    withdrawn_by_id: author(),
     withdrawn_at: { type: DataTypes.DATE, allowNull: true },
-    created_at: { type: DataTypes.DATE, allowNull: false },
-    updated_at: { type: DataTypes.DATE, allowNull: false },
+    ...stamps(),
   });
   await qi.addIndex('lamp_curve_adoptions', ['lamp_type_id', 'adopted_at'], {
     name: 'lamp_curve_adoptions_type',
