@@ -1,4 +1,3 @@
-import { QueryTypes } from 'sequelize';
 import { describe, expect, it } from 'vitest';
 import { lampListQuery, listLamps } from '@/lib/lamp-log/list-queries';
 import { todayIso } from '@/lib/lamp-log/dates';
@@ -7,6 +6,7 @@ import { readStoredDesign } from '@/lib/variants/stored-design';
 import { Lamp, LampOutlook, User, Variant } from '@/models';
 import {
   addToOrganisation,
+  countScaleRows,
   createScaleOrganisation,
   findScaleOrganisation,
   scaledSize,
@@ -18,24 +18,6 @@ import { testDb, withTestDatabase } from './helpers/db';
 // the same organisation when asked again. Counts only: speed is the benchmark's to print.
 withTestDatabase();
 
-async function counts(organisationId: number) {
-  const [row] = await testDb().query<Record<string, number | string>>(
-    `SELECT (SELECT COUNT(*) FROM enclosures WHERE organisation_id = :org) AS enclosures,
-            (SELECT COUNT(*) FROM lamps l JOIN enclosures e ON e.id = l.enclosure_id
-              WHERE e.organisation_id = :org) AS lamps,
-            (SELECT COUNT(*) FROM readings r JOIN lamps l ON l.id = r.lamp_id
-               JOIN enclosures e ON e.id = l.enclosure_id WHERE e.organisation_id = :org) AS readings,
-            (SELECT COUNT(*) FROM designs d JOIN enclosures e ON e.id = d.enclosure_id
-              WHERE e.organisation_id = :org) AS designs,
-            (SELECT COUNT(*) FROM variants v JOIN designs d ON d.id = v.design_id
-               JOIN enclosures e ON e.id = d.enclosure_id WHERE e.organisation_id = :org) AS variants,
-            (SELECT COUNT(*) FROM memberships WHERE organisation_id = :org AND role = 'keeper') AS keepers,
-            (SELECT COUNT(*) FROM lamp_outlooks WHERE organisation_id = :org) AS outlooks`,
-    { replacements: { org: organisationId }, type: QueryTypes.SELECT },
-  );
-  return Object.fromEntries(Object.entries(row!).map(([k, v]) => [k, Number(v)]));
-}
-
 describe('the scale benchmark’s organisation', () => {
   it('has the rows asked for, outlooks the lamp log reads, and grows when asked again', async () => {
     const size = { enclosures: 12, lamps: 40, readings: 300, designs: 3 };
@@ -46,7 +28,12 @@ describe('the scale benchmark’s organisation', () => {
     expect(added).toMatchObject({ ...size, variants: 6, keepers: 2, outlooks: 40 });
     // The benchmark signs in as the owner: sign-in refuses an address never confirmed.
     expect((await User.findOne({ where: { email: org.ownerEmail } }))?.emailConfirmedAt).toBeInstanceOf(Date);
-    expect(await counts(org.organisationId)).toEqual({ ...size, variants: 6, keepers: 2, outlooks: 40 });
+    expect(await countScaleRows(testDb(), org.organisationId)).toEqual({
+      ...size,
+      variants: 6,
+      keepers: 2,
+      outlooks: 40,
+    });
 
     // Every variant is a design the app can read, and the lamp log lists the lamps from stored outlooks.
     const variants = await Variant.findAll();
@@ -64,7 +51,7 @@ describe('the scale benchmark’s organisation', () => {
 
     // Growing the same organisation: the earlier rows stay, the new ones add up.
     await addToOrganisation(testDb(), org, scaledSize(size, 1), { offset: size.enclosures });
-    expect(await counts(org.organisationId)).toEqual({
+    expect(await countScaleRows(testDb(), org.organisationId)).toEqual({
       enclosures: 24,
       lamps: 80,
       readings: 600,

@@ -180,28 +180,42 @@ export async function findScaleOrganisation(
     { type: QueryTypes.SELECT },
   );
   if (!row) return null;
-  const [size] = await sequelize.query<Record<keyof ScaleSize, number | string>>(
+  const size = await countScaleRows(sequelize, Number(row.id));
+  return {
+    organisationId: Number(row.id),
+    ownerEmail: row.email,
+    ownerPassword: SCALE_OWNER_PASSWORD,
+    size: {
+      enclosures: size.enclosures,
+      lamps: size.lamps,
+      readings: size.readings,
+      designs: size.designs,
+    },
+  };
+}
+
+/** How many rows of each kind the organisation holds: its size, and what it was made with. */
+export async function countScaleRows(sequelize: Sequelize, organisationId: number) {
+  const [row] = await sequelize.query<Record<ScaleRowKind, number | string>>(
     `SELECT (SELECT COUNT(*) FROM enclosures WHERE organisation_id = :org) AS enclosures,
             (SELECT COUNT(*) FROM lamps l JOIN enclosures e ON e.id = l.enclosure_id
               WHERE e.organisation_id = :org) AS lamps,
             (SELECT COUNT(*) FROM readings r JOIN lamps l ON l.id = r.lamp_id
                JOIN enclosures e ON e.id = l.enclosure_id WHERE e.organisation_id = :org) AS readings,
             (SELECT COUNT(*) FROM designs d JOIN enclosures e ON e.id = d.enclosure_id
-              WHERE e.organisation_id = :org) AS designs`,
-    { replacements: { org: row.id }, type: QueryTypes.SELECT },
+              WHERE e.organisation_id = :org) AS designs,
+            (SELECT COUNT(*) FROM variants v JOIN designs d ON d.id = v.design_id
+               JOIN enclosures e ON e.id = d.enclosure_id WHERE e.organisation_id = :org) AS variants,
+            (SELECT COUNT(*) FROM memberships WHERE organisation_id = :org AND role = 'keeper') AS keepers,
+            (SELECT COUNT(*) FROM lamp_outlooks WHERE organisation_id = :org) AS outlooks`,
+    { replacements: { org: organisationId }, type: QueryTypes.SELECT },
   );
-  return {
-    organisationId: Number(row.id),
-    ownerEmail: row.email,
-    ownerPassword: SCALE_OWNER_PASSWORD,
-    size: {
-      enclosures: Number(size!.enclosures),
-      lamps: Number(size!.lamps),
-      readings: Number(size!.readings),
-      designs: Number(size!.designs),
-    },
-  };
+  return Object.fromEntries(Object.entries(row!).map(([k, v]) => [k, Number(v)])) as Record<
+    ScaleRowKind,
+    number
+  >;
 }
+type ScaleRowKind = keyof ScaleSize | 'variants' | 'keepers' | 'outlooks';
 
 function designWithLamps(
   size: { widthCm: number; heightCm: number; depthCm: number },
