@@ -74,6 +74,8 @@ export const oneOf = <V extends string>(values: readonly V[]) => column<V>(DataT
 /** A timestamp Sequelize writes itself (`createdAt`, `updatedAt`). */
 export const timestamp = () => new Column<Date, 'optional'>({ type: DataTypes.DATE });
 export const timestamps = () => ({ createdAt: timestamp(), updatedAt: timestamp() });
+/** Who made the row and who last changed it: null once that user is removed (the row stays). */
+export const authorship = () => ({ createdById: ref().nullable(), updatedById: ref().nullable() });
 
 type Columns = Record<string, Column<unknown, 'optional' | 'required'>>;
 

@@ -1,5 +1,5 @@
 import { LAMP_TECH_IDS as ENGINE_LAMP_TECH_IDS } from '@/simulation';
-import { double, id, oneOf, ref, string, table, text, timestamps } from './columns';
+import { authorship, double, id, oneOf, ref, string, table, text, timestamps } from './columns';
 
 /** The generic lamp technologies of the design file (the design file's `tech`), as the engine defines them. */
 export const LAMP_TECH_IDS = ENGINE_LAMP_TECH_IDS;
@@ -46,7 +46,6 @@ export class LampType extends table('lamp_types', {
   sourcesJson: text(),
   /** The engine preset this entry was seeded from (null: added by the organisation). */
   presetKey: string(60).nullable(),
-  createdById: ref().nullable(),
-  updatedById: ref().nullable(),
+  ...authorship(),
   ...timestamps(),
 }) {}

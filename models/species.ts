@@ -1,4 +1,15 @@
-import { boolean, double, id, ref, smallUnsigned, string, table, text, timestamps } from './columns';
+import {
+  authorship,
+  boolean,
+  double,
+  id,
+  ref,
+  smallUnsigned,
+  string,
+  table,
+  text,
+  timestamps,
+} from './columns';
 
 /**
  * A species sheet of one organisation: the light and heat a species needs, with where each figure comes
@@ -34,7 +45,6 @@ export class SpeciesSheet extends table('species_sheets', {
   sourcesJson: text(),
   /** The starting sheet this row was copied from (null: written by the organisation). */
   seedKey: string(60).nullable(),
-  createdById: ref().nullable(),
-  updatedById: ref().nullable(),
+  ...authorship(),
   ...timestamps(),
 }) {}

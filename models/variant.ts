@@ -1,4 +1,4 @@
-import { id, ref, string, table, text, timestamps, unsigned } from './columns';
+import { authorship, id, ref, string, table, text, timestamps, unsigned } from './columns';
 
 /**
  * One alternative of a design. `designJson` is the design file (validated with the engine's parseDesign
@@ -10,7 +10,6 @@ export class Variant extends table('variants', {
   name: string(120),
   designJson: text('long'),
   version: unsigned().defaultsTo(1),
-  createdById: ref().nullable(),
-  updatedById: ref().nullable(),
+  ...authorship(),
   ...timestamps(),
 }) {}
