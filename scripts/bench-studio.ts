@@ -1,7 +1,7 @@
 /**
  * How soon a studio shows its field, in Chromium against a production build, as a user opens it:
  *
- *   npm run --silent bench:studio [-- --runs 10] [--no-build]
+ *   npm run --silent bench:studio [-- --runs 10] [--no-build] [--base .next/bench-base]
  *
  * Brings up what `npm test`'s browser stage does (the private MariaDB with a database of its own,
  * migrations, the demo seed, `next build` into .next/bench-build, `next start` on a free port) and stops
@@ -15,6 +15,10 @@
  * went (first byte, HTML complete, stylesheet file, first paint, long tasks), and as its LAST line one
  * JSON object.
  * `--no-build` reuses .next/bench-build when it exists.
+ * `--base DIR` serves a second, earlier build of this checkout (made before a change with
+ * `NEXT_DIST_DIR=DIR npx next build`) beside the new one, against the same database, and opens each studio
+ * in both in turn (alternating which goes first), so a change is measured side by side in the same minutes
+ * on a shared machine; it prints both and the new build's medians as ratios of the earlier one's.
  */
 import { existsSync } from 'node:fs';
 import { loadavg } from 'node:os';
@@ -27,14 +31,20 @@ import { Lifecycle, migrate, prepareDatabase, ROOT, seed, startNext } from './li
 const DIST = '.next/bench-build';
 
 function parseArgs(argv: string[]) {
-  const opts = { runs: 10, build: true };
+  const opts: { runs: number; build: boolean; base: string | null } = { runs: 10, build: true, base: null };
   for (let k = 0; k < argv.length; k++) {
     const a = argv[k]!;
     if (a === '--runs') opts.runs = Number(argv[++k]);
     else if (a.startsWith('--runs=')) opts.runs = Number(a.slice(7));
     else if (a === '--no-build') opts.build = false;
-    else throw new Error(`unknown option ${a} (--runs N, --no-build)`);
+    else if (a === '--base') opts.base = argv[++k] ?? '';
+    else if (a.startsWith('--base=')) opts.base = a.slice(7);
+    else throw new Error(`unknown option ${a} (--runs N, --no-build, --base DIR)`);
   }
+  if (opts.base !== null && !existsSync(path.join(ROOT, opts.base, 'BUILD_ID')))
+    throw new Error(
+      `--base: no build in ${opts.base} (make one with NEXT_DIST_DIR=${opts.base} npx next build)`,
+    );
   if (!(Number.isInteger(opts.runs) && opts.runs >= 1))
     throw new Error('--runs: expected a whole number ≥ 1');
   return opts;
@@ -151,6 +161,23 @@ async function main() {
       build: false,
       logFile: path.join(ROOT, 'test-results', 'bench-studio-next.log'),
     });
+    // The earlier build, on a port of its own against the same database: the session cookie is the
+    // host's (not the port's), so the same sign-in opens both.
+    let baseUrl: string | null = null;
+    if (opts.base !== null) {
+      const basePort = await freePort(port + 1);
+      baseUrl = `http://localhost:${basePort}`;
+      const baseEnv = { ...benchEnv, PORT: String(basePort), APP_URL: baseUrl, NEXTAUTH_URL: baseUrl };
+      await startNext(
+        life,
+        { ...baseEnv, NEXT_DIST_DIR: opts.base },
+        {
+          port: basePort,
+          build: false,
+          logFile: path.join(ROOT, 'test-results', 'bench-studio-base-next.log'),
+        },
+      );
+    }
 
     // The harness reads the app's address when it is first imported.
     process.env.E2E_BASE_URL = appUrl;
@@ -168,16 +195,25 @@ async function main() {
     const cookies = await staff.context().cookies();
     await staff.context().close();
 
+    const builds = [{ name: 'new', url: appUrl }, ...(baseUrl ? [{ name: 'base', url: baseUrl }] : [])];
     const targets = [
-      { name: 'saved design', url: `${appUrl}/studio/${variantId}`, cookies },
-      { name: 'scratch studio', url: `${appUrl}/studio-scratch`, cookies: [] },
+      { name: 'saved design', path: `/studio/${variantId}`, cookies },
+      { name: 'scratch studio', path: '/studio-scratch', cookies: [] },
     ];
     const load0 = loadavg()[0]!;
-    const results: Record<string, Opening[]> = {};
+    const results: Record<string, Record<string, Opening[]>> = {};
+    for (const b of builds) results[b.name] = {};
     for (const t of targets) {
-      await openOnce(browser, t.url, t.cookies); // not counted: the server's first picture of the design
-      results[t.name] = [];
-      for (let k = 0; k < opts.runs; k++) results[t.name]!.push(await openOnce(browser, t.url, t.cookies));
+      for (const b of builds) {
+        await openOnce(browser, b.url + t.path, t.cookies); // not counted: the server's first picture
+        results[b.name]![t.name] = [];
+      }
+      for (let k = 0; k < opts.runs; k++) {
+        // Which build goes first alternates, so neither always meets the machine just after the other.
+        const order = k % 2 ? [...builds].reverse() : builds;
+        for (const b of order)
+          results[b.name]![t.name]!.push(await openOnce(browser, b.url + t.path, t.cookies));
+      }
     }
     const load1 = loadavg()[0]!;
 
@@ -201,32 +237,55 @@ async function main() {
       cssEndMs: med(xs, 'cssEnd'),
       busyBeforeVisibleMs: med(xs, 'busyBeforeVisible'),
     });
-    const saved = summary(results['saved design']!);
-    const scratch = summary(results['scratch studio']!);
+    type Summary = ReturnType<typeof summary>;
+    const summaries = (name: string) => ({
+      saved: summary(results[name]!['saved design']!),
+      scratch: summary(results[name]!['scratch studio']!),
+    });
+    const printed = (label: string, s: { saved: Summary; scratch: Summary }) => {
+      if (label) console.log(label);
+      for (const [name, x] of [
+        ['saved design', s.saved],
+        ['scratch studio', s.scratch],
+      ] as const) {
+        console.log(
+          `  ${name.padEnd(15)} field visible: median ${x.visibleMedianMs} ms, p90 ${x.visibleP90Ms} ms; ` +
+            `computed: median ${x.computedMedianMs} ms, p90 ${x.computedP90Ms} ms`,
+        );
+        console.log(
+          `  ${''.padEnd(15)} medians: first byte ${x.firstByteMs} ms, HTML complete ${x.htmlEndMs} ms, ` +
+            `stylesheet file ${Number.isNaN(x.cssEndMs) ? 'none (inline)' : `${x.cssEndMs} ms`}, ` +
+            `first paint ${x.firstPaintMs} ms, main thread in long tasks before the field ${x.busyBeforeVisibleMs} ms`,
+        );
+      }
+    };
+    const fresh = summaries('new');
+    const base = baseUrl ? summaries('base') : null;
     console.log(
       `Navigation → field on screen (field-visible) and → the engine worker's first answer (field-computed), ` +
         `${opts.runs} openings each in a fresh Chromium context, production build:`,
     );
-    for (const [name, s] of [
-      ['saved design', saved],
-      ['scratch studio', scratch],
-    ] as const) {
+    printed(base ? `This build (${DIST}):` : '', fresh);
+    const ratio = (a: number, b: number) => Math.round((a / b) * 100) / 100;
+    const ratios = base && {
+      savedVisibleMedian: ratio(fresh.saved.visibleMedianMs, base.saved.visibleMedianMs),
+      savedVisibleP90: ratio(fresh.saved.visibleP90Ms, base.saved.visibleP90Ms),
+      scratchVisibleMedian: ratio(fresh.scratch.visibleMedianMs, base.scratch.visibleMedianMs),
+      scratchVisibleP90: ratio(fresh.scratch.visibleP90Ms, base.scratch.visibleP90Ms),
+    };
+    if (base && ratios) {
+      printed(`The earlier build (${opts.base}), the same minutes, alternating:`, base);
       console.log(
-        `  ${name.padEnd(15)} field visible: median ${s.visibleMedianMs} ms, p90 ${s.visibleP90Ms} ms; ` +
-          `computed: median ${s.computedMedianMs} ms, p90 ${s.computedP90Ms} ms`,
-      );
-      console.log(
-        `  ${''.padEnd(15)} medians: first byte ${s.firstByteMs} ms, HTML complete ${s.htmlEndMs} ms, ` +
-          `stylesheet file ${Number.isNaN(s.cssEndMs) ? 'none (inline)' : `${s.cssEndMs} ms`}, ` +
-          `first paint ${s.firstPaintMs} ms, main thread in long tasks before the field ${s.busyBeforeVisibleMs} ms`,
+        `  this build over the earlier one, field visible: saved median ×${ratios.savedVisibleMedian}, ` +
+          `p90 ×${ratios.savedVisibleP90}; scratch median ×${ratios.scratchVisibleMedian}, p90 ×${ratios.scratchVisibleP90}`,
       );
     }
     console.log(`Load average ${load0.toFixed(1)} before, ${load1.toFixed(1)} after (a shared machine).`);
     console.log(
       JSON.stringify({
         runs: opts.runs,
-        saved,
-        scratch,
+        ...fresh,
+        ...(base ? { base, ratios } : {}),
         loadAvg: Math.round(((load0 + load1) / 2) * 100) / 100,
       }),
     );
