@@ -10,10 +10,10 @@ import { button } from '@/components/ui/styles';
 import { useLengthUnit } from '@/components/ui/units';
 import { useApiMutation } from '@/components/ui/useApiMutation';
 import { dayInZone } from '@/lib/time/format';
+import { type DesignLampOption, DesignLampSelect } from './DesignLampSelect';
 import { LampUseFields } from './LampUseFields';
 
 export type LampTypeOption = { id: number; name: string; tech: string; uvbAt30: number };
-export type DesignLampOption = { objectId: string; label: string };
 
 /** Logs a lamp installed in this enclosure. */
 export function AddLampForm({
@@ -114,19 +114,12 @@ export function AddLampForm({
             error={err('baskingTransmission')}
           />
         )}
-        <Select
+        <DesignLampSelect
           label="Lamp in the design (for calibration)"
-          name="designObjectId"
-          defaultValue=""
+          designLamps={designLamps}
+          linked={null}
           error={err('designObjectId')}
-        >
-          <option value="">Not linked</option>
-          {designLamps.map((d) => (
-            <option key={d.objectId} value={d.objectId}>
-              {d.label}
-            </option>
-          ))}
-        </Select>
+        />
       </div>
       <p className="text-caption text-basalt-500">
         Mesh shares are typical open areas of woven mesh (ISO 9044); screens can cut UVB by as much as half.

@@ -5,13 +5,12 @@ import { type FormEvent } from 'react';
 import { fieldError } from '@/components/ui/api-client';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
-import { Select } from '@/components/ui/Select';
 import { button } from '@/components/ui/styles';
 import { cmToDisplay } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
 import { useApiMutation } from '@/components/ui/useApiMutation';
 import type { LampSummary } from '@/lib/lamp-log/queries';
-import type { DesignLampOption } from './AddLampForm';
+import { type DesignLampOption, DesignLampSelect } from './DesignLampSelect';
 import { LampUseFields } from './LampUseFields';
 
 /** Edit a lamp, retire it (its readings stay), or delete one logged by mistake. */
@@ -63,13 +62,6 @@ export function LampSettings({
   }
 
   const err = (f: string) => (error?.field === f ? error.message : null);
-  const links =
-    designLamps.some((d) => d.objectId === lamp.designObjectId) || !lamp.designObjectId
-      ? designLamps
-      : [
-          { objectId: lamp.designObjectId, label: `${lamp.designObjectId} (not in any design now)` },
-          ...designLamps,
-        ];
   return (
     <form onSubmit={submit} className="space-y-3" aria-label="Lamp settings" noValidate>
       <div className="grid gap-3 sm:grid-cols-2">
@@ -99,19 +91,12 @@ export function LampSettings({
           hint="Empty: nothing in between. A mesh lid passes about 0.5–0.7."
           error={err('baskingTransmission')}
         />
-        <Select
+        <DesignLampSelect
           label="Lamp in the design"
-          name="designObjectId"
-          defaultValue={lamp.designObjectId ?? ''}
+          designLamps={designLamps}
+          linked={lamp.designObjectId}
           error={err('designObjectId')}
-        >
-          <option value="">Not linked</option>
-          {links.map((d) => (
-            <option key={d.objectId} value={d.objectId}>
-              {d.label}
-            </option>
-          ))}
-        </Select>
+        />
         <Field
           label="Retired on"
           name="retiredOn"
