@@ -6,8 +6,9 @@ import { CautionList } from '@/components/cautions/CautionList';
 import { FindingList } from '@/components/cautions/FindingList';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
+import { Select } from '@/components/ui/Select';
 import { PersonPicker, type PickedPerson } from '@/components/people/PersonPicker';
-import { button, card, input } from '@/components/ui/styles';
+import { button, card } from '@/components/ui/styles';
 import { UnitToggle } from '@/components/ui/UnitToggle';
 import {
   cmToDisplay,
@@ -52,6 +53,13 @@ const WALL_LABELS: Record<Walls, string> = {
   mesh: 'Mesh cage',
 };
 const show = (cm: number, unit: LengthUnit) => formatNumber(cmToDisplay(cm, unit), unit === 'cm' ? 0 : 1);
+
+/** The enclosure's three inside measures, as typed in the size fields and named by the API. */
+const SIDES = [
+  { key: 'w', label: 'Width', field: 'widthCm' },
+  { key: 'h', label: 'Height', field: 'heightCm' },
+  { key: 'd', label: 'Depth', field: 'depthCm' },
+] as const;
 
 /** Species, size, lid and keeper → a proposed design explained → the enclosure, created and opened in the studio. */
 export function GuidedStart(props: {
@@ -171,56 +179,38 @@ export function GuidedStart(props: {
         className={`${card} grid gap-4 p-5 sm:grid-cols-2`}
         aria-label="Guided start"
       >
-        <div className="sm:col-span-2">
-          <label htmlFor="gs-species" className="mb-1 block text-body font-medium text-basalt-800">
-            Species
-          </label>
-          <select
-            id="gs-species"
-            className={input}
-            value={speciesId ?? ''}
-            onChange={(e) => chooseSpecies(e.target.value ? Number(e.target.value) : null)}
-            aria-invalid={fieldError('speciesId') ? true : undefined}
-          >
-            <option value="">Choose a species…</option>
-            {props.species.map((s) => (
-              <option
-                key={s.id}
-                value={s.id}
-              >{`${s.commonName} (${s.scientificName}) — UV zone ${s.uvZone}`}</option>
-            ))}
-          </select>
-          {fieldError('speciesId') && (
-            <p className="mt-1 text-caption font-medium text-ember-700">{fieldError('speciesId')}</p>
-          )}
-        </div>
+        <Select
+          id="gs-species"
+          label="Species"
+          className="sm:col-span-2"
+          value={speciesId ?? ''}
+          onChange={(e) => chooseSpecies(e.target.value ? Number(e.target.value) : null)}
+          error={fieldError('speciesId')}
+        >
+          <option value="">Choose a species…</option>
+          {props.species.map((s) => (
+            <option
+              key={s.id}
+              value={s.id}
+            >{`${s.commonName} (${s.scientificName}) — UV zone ${s.uvZone}`}</option>
+          ))}
+        </Select>
         <fieldset className="sm:col-span-2">
           <legend className="mb-1 flex w-full items-center justify-between text-body font-medium text-basalt-800">
             <span>Inside size ({size.unit}) — width × height × depth</span>
             <UnitToggle />
           </legend>
           <div className="grid grid-cols-3 gap-3">
-            <Field
-              label="Width"
-              inputMode="decimal"
-              value={size.w}
-              onChange={(e) => setSize({ ...size, w: e.target.value })}
-              error={fieldError('widthCm')}
-            />
-            <Field
-              label="Height"
-              inputMode="decimal"
-              value={size.h}
-              onChange={(e) => setSize({ ...size, h: e.target.value })}
-              error={fieldError('heightCm')}
-            />
-            <Field
-              label="Depth"
-              inputMode="decimal"
-              value={size.d}
-              onChange={(e) => setSize({ ...size, d: e.target.value })}
-              error={fieldError('depthCm')}
-            />
+            {SIDES.map(({ key, label, field }) => (
+              <Field
+                key={key}
+                label={label}
+                inputMode="decimal"
+                value={size[key]}
+                onChange={(e) => setSize({ ...size, [key]: e.target.value })}
+                error={fieldError(field)}
+              />
+            ))}
           </div>
           {chosen?.seedKey && props.sizeHints[chosen.seedKey] && (
             <p className="mt-1 text-caption text-basalt-500">

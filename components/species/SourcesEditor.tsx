@@ -1,6 +1,7 @@
 'use client';
 
-import { button, input } from '@/components/ui/styles';
+import { Field } from '@/components/ui/Field';
+import { button } from '@/components/ui/styles';
 import { FIELD_LABELS, SHEET_FIELDS, type SheetField, type SpeciesSource } from '@/lib/species/schema';
 
 /** The sheet's sources: a citation, how sure it is, and which figures it speaks for. */
@@ -31,46 +32,20 @@ export function SourcesEditor({
         {sources.map((s, i) => (
           <li key={i} className="rounded-md border border-basalt-200 p-3">
             <div className="grid gap-3 sm:grid-cols-2">
-              <div>
-                <label
-                  htmlFor={`src-${i}-citation`}
-                  className="mb-1 block text-body font-medium text-basalt-800"
-                >
-                  Citation [{i + 1}]
-                </label>
-                <input
-                  id={`src-${i}-citation`}
-                  className={input}
-                  value={s.citation}
-                  onChange={(e) => set(i, { citation: e.target.value })}
-                  aria-invalid={errors[`sources.${i}.citation`] ? true : undefined}
-                />
-                {errors[`sources.${i}.citation`] && (
-                  <p className="mt-1 text-caption font-medium text-ember-700">
-                    {errors[`sources.${i}.citation`]}
-                  </p>
-                )}
-              </div>
-              <div>
-                <label
-                  htmlFor={`src-${i}-confidence`}
-                  className="mb-1 block text-body font-medium text-basalt-800"
-                >
-                  Confidence
-                </label>
-                <input
-                  id={`src-${i}-confidence`}
-                  className={input}
-                  value={s.confidence}
-                  onChange={(e) => set(i, { confidence: e.target.value })}
-                  aria-invalid={errors[`sources.${i}.confidence`] ? true : undefined}
-                />
-                {errors[`sources.${i}.confidence`] && (
-                  <p className="mt-1 text-caption font-medium text-ember-700">
-                    {errors[`sources.${i}.confidence`]}
-                  </p>
-                )}
-              </div>
+              <Field
+                id={`src-${i}-citation`}
+                label={`Citation [${i + 1}]`}
+                value={s.citation}
+                onChange={(e) => set(i, { citation: e.target.value })}
+                error={errors[`sources.${i}.citation`]}
+              />
+              <Field
+                id={`src-${i}-confidence`}
+                label="Confidence"
+                value={s.confidence}
+                onChange={(e) => set(i, { confidence: e.target.value })}
+                error={errors[`sources.${i}.confidence`]}
+              />
             </div>
             <fieldset className="mt-3">
               <legend className="text-caption font-medium text-basalt-700">Figures it speaks for</legend>
