@@ -1,6 +1,6 @@
 'use client';
 
-import { useEffect, useState } from 'react';
+import { useEffect, useState, type ReactNode } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { apiFetch } from '@/components/ui/api-client';
 import { button, input } from '@/components/ui/styles';
@@ -39,44 +39,31 @@ export function CustomerPicker({
   const found = search.data?.items ?? null;
   const failed = search.error ? search.error.message || 'The search failed.' : null;
 
-  const choice = (active: boolean) => `${active ? button.primary : button.secondary} min-h-11 flex-1 px-2`;
   return (
     <div className="space-y-2">
       <p className="text-body font-medium text-basalt-800">Whose lamp?</p>
       <div className="flex gap-2" role="radiogroup" aria-label="Whose lamp">
-        <button
-          type="button"
-          role="radio"
-          aria-checked={who.kind === 'walk-in' && !finding}
-          className={choice(who.kind === 'walk-in' && !finding)}
-          onClick={() => {
+        <Choice
+          active={who.kind === 'walk-in' && !finding}
+          onChoose={() => {
             setFinding(false);
             onWho({ kind: 'walk-in' });
           }}
         >
           Walk-in
-        </button>
-        <button
-          type="button"
-          role="radio"
-          aria-checked={who.kind === 'existing' || finding}
-          className={choice(who.kind === 'existing' || finding)}
-          onClick={() => setFinding(true)}
-        >
+        </Choice>
+        <Choice active={who.kind === 'existing' || finding} onChoose={() => setFinding(true)}>
           Find customer
-        </button>
-        <button
-          type="button"
-          role="radio"
-          aria-checked={who.kind === 'new' && !finding}
-          className={choice(who.kind === 'new' && !finding)}
-          onClick={() => {
+        </Choice>
+        <Choice
+          active={who.kind === 'new' && !finding}
+          onChoose={() => {
             setFinding(false);
             onWho({ kind: 'new' });
           }}
         >
           New customer
-        </button>
+        </Choice>
       </div>
       {who.kind === 'walk-in' && !finding && (
         <p className="text-caption text-basalt-500">
@@ -128,5 +115,28 @@ export function CustomerPicker({
         </div>
       )}
     </div>
+  );
+}
+
+/** One of the three answers to "whose lamp?", drawn as a button that is a radio. */
+function Choice({
+  active,
+  onChoose,
+  children,
+}: {
+  active: boolean;
+  onChoose: () => void;
+  children: ReactNode;
+}) {
+  return (
+    <button
+      type="button"
+      role="radio"
+      aria-checked={active}
+      className={`${active ? button.primary : button.secondary} min-h-11 flex-1 px-2`}
+      onClick={onChoose}
+    >
+      {children}
+    </button>
   );
 }

@@ -60,6 +60,13 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
       </p>
     </>
   );
+  // Someone signed in with the invited address joins with that account; someone without one creates it.
+  const accept = (mode: 'join' | 'create') => (
+    <>
+      {intro}
+      <AcceptInvitation token={token} email={invitation.email} organisationName={orgName} mode={mode} />
+    </>
+  );
   if (user) {
     if (user.email !== invitation.email) {
       return (
@@ -74,12 +81,7 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
         </>
       );
     }
-    return (
-      <>
-        {intro}
-        <AcceptInvitation token={token} email={invitation.email} organisationName={orgName} mode="join" />
-      </>
-    );
+    return accept('join');
   }
   if (await hasAccount(invitation.email)) {
     return (
@@ -97,12 +99,7 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
       </>
     );
   }
-  return (
-    <>
-      {intro}
-      <AcceptInvitation token={token} email={invitation.email} organisationName={orgName} mode="create" />
-    </>
-  );
+  return accept('create');
 }
 
 function Problem({ title, children }: { title: string; children: React.ReactNode }) {
