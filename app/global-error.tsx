@@ -1,7 +1,9 @@
 'use client';
 
+import type { ErrorBoundaryProps } from '@/components/shell/ErrorPanel';
+
 /** Last resort when the root layout itself fails: plain markup, no app styles can be assumed. */
-export default function GlobalError({ reset }: { error: Error & { digest?: string }; reset: () => void }) {
+export default function GlobalError({ reset }: ErrorBoundaryProps) {
   return (
     <html lang="en">
       <body style={{ fontFamily: 'system-ui, sans-serif', padding: '3rem', maxWidth: 640, margin: '0 auto' }}>

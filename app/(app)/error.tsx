@@ -1,13 +1,7 @@
 'use client';
 
-import { ErrorPanel } from '@/components/shell/ErrorPanel';
+import { ErrorPanel, type ErrorBoundaryProps } from '@/components/shell/ErrorPanel';
 
-export default function AppError({
-  error,
-  reset,
-}: {
-  error: Error & { digest?: string };
-  reset: () => void;
-}) {
+export default function AppError({ error, reset }: ErrorBoundaryProps) {
   return <ErrorPanel error={error} reset={reset} />;
 }

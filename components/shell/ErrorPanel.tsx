@@ -3,11 +3,14 @@
 import Link from '@/components/ui/Link';
 import { button } from '@/components/ui/styles';
 
+/** What Next hands an error boundary (`error.tsx`, `global-error.tsx`): the error and a way to try again. */
+export type ErrorBoundaryProps = { error: Error & { digest?: string }; reset: () => void };
+
 /**
  * What people see when a page fails. Server errors reach the browser without their message (Next hides it
  * in production), so the text is written for the likely causes rather than echoing internals.
  */
-export function ErrorPanel({ error, reset }: { error: Error & { digest?: string }; reset: () => void }) {
+export function ErrorPanel({ error, reset }: ErrorBoundaryProps) {
   return (
     <div role="alert" className="rounded-lg border border-ember-200 bg-white p-6 shadow-sm">
       <h1 className="text-title text-ember-800">This page could not be shown</h1>

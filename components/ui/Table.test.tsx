@@ -19,6 +19,9 @@ const columns = (withSize: boolean): (TableColumn<Row> | false)[] => [
   },
 ];
 
+/** The props every table here is given; each test adds what it checks. */
+const base = { data: rows, caption: 'Enclosures', rowKey: (r: Row) => r.id };
+
 const render = (props: Parameters<typeof Table<Row>>[0]) =>
   renderToStaticMarkup(createElement(Table<Row>, props));
 const cellsOf = (html: string, tag: 'th' | 'td') =>
@@ -26,7 +29,7 @@ const cellsOf = (html: string, tag: 'th' | 'td') =>
 
 describe('Table', () => {
   it('lays out the rows in the order given, a cell a column, with its caption and classes', () => {
-    const html = render({ data: rows, columns: columns(true), caption: 'Enclosures', rowKey: (r) => r.id });
+    const html = render({ ...base, columns: columns(true) });
     expect(html).toContain('<caption class="sr-only">Enclosures</caption>');
     expect(cellsOf(html, 'th')).toEqual(['Name', 'Size']);
     expect(cellsOf(html, 'td')).toEqual(['Desert', '120 cm', 'Forest', '90 cm']);
@@ -39,10 +42,8 @@ describe('Table', () => {
 
   it('draws a row-header column as the th that names its row, and marks every row for tests', () => {
     const html = render({
-      data: rows,
+      ...base,
       columns: [{ ...(columns(false)[0] as TableColumn<Row>), rowHeader: true }, columns(true)[1]!],
-      caption: 'Enclosures',
-      rowKey: (r) => r.id,
       rowTestId: (r) => (r.size > 100 ? 'large-enclosure' : undefined),
       rowClassName: '',
     });
@@ -53,10 +54,8 @@ describe('Table', () => {
 
   it('sits inline in a card: no frame border, no row highlight, the full width', () => {
     const html = render({
-      data: rows,
+      ...base,
       columns: columns(false),
-      caption: 'Enclosures',
-      rowKey: (r) => r.id,
       inline: true,
     });
     expect(html).toMatch(/^<div class="overflow-x-auto"><table class="w-full /);
@@ -64,17 +63,15 @@ describe('Table', () => {
   });
 
   it('leaves out a column given as false', () => {
-    const html = render({ data: rows, columns: columns(false), caption: 'Enclosures', rowKey: (r) => r.id });
+    const html = render({ ...base, columns: columns(false) });
     expect(cellsOf(html, 'th')).toEqual(['Name']);
     expect(cellsOf(html, 'td')).toEqual(['Desert', 'Forest']);
   });
 
   it('draws server-sorted headers as sort buttons that say which way the list is sorted', () => {
     const html = render({
-      data: rows,
+      ...base,
       columns: columns(true),
-      caption: 'Enclosures',
-      rowKey: (r) => r.id,
       sort: { sort: { column: 'size', descending: true }, onSort: () => {} },
     });
     expect(html).toMatch(/<th scope="col" aria-sort="none"[^>]*><button type="button"[^>]*>Name/);
@@ -83,10 +80,9 @@ describe('Table', () => {
 
   it('dims the rows of a view still loading and puts what it is given below the table, inside the frame', () => {
     const html = render({
+      ...base,
       data: [],
       columns: columns(true),
-      caption: 'Enclosures',
-      rowKey: (r) => r.id,
       stale: true,
       busy: true,
       children: createElement('p', null, 'Nothing matches'),
