@@ -7,8 +7,8 @@ import { Field } from '@/components/ui/Field';
 import { NewPasswordField } from './NewPasswordField';
 import { Notice } from '@/components/ui/Notice';
 import { fieldError } from '@/components/ui/api-client';
-import { button } from '@/components/ui/styles';
 import { useApiMutation, useSwitchOrganisation } from '@/components/ui/useApiMutation';
+import { SubmitButton } from './SubmitButton';
 
 type Props = {
   token: string;
@@ -64,13 +64,9 @@ export function AcceptInvitation({ token, email, organisationName, mode }: Props
           <NewPasswordField error={errors.password} />
         </>
       )}
-      <button type="submit" className={`${button.primary} w-full`} disabled={busy}>
-        {busy
-          ? 'Joining…'
-          : mode === 'create'
-            ? `Create account and join ${organisationName}`
-            : `Join ${organisationName}`}
-      </button>
+      <SubmitButton busy={busy} busyLabel="Joining…">
+        {mode === 'create' ? `Create account and join ${organisationName}` : `Join ${organisationName}`}
+      </SubmitButton>
     </form>
   );
 }

@@ -4,9 +4,9 @@ import { useState, type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
 import { fieldError } from '@/components/ui/api-client';
-import { button } from '@/components/ui/styles';
 import { useApiMutation } from '@/components/ui/useApiMutation';
 import { NextStepLink } from './NextStepLink';
+import { SubmitButton } from './SubmitButton';
 
 /** Asks for a "choose a new password" link. The answer never says whether the address has an account. */
 export function ForgotPasswordForm() {
@@ -48,9 +48,9 @@ export function ForgotPasswordForm() {
         autoFocus
         error={error?.field === 'email' ? error.message : undefined}
       />
-      <button type="submit" className={`${button.primary} w-full`} disabled={busy}>
-        {busy ? 'Sending…' : 'Send me a link'}
-      </button>
+      <SubmitButton busy={busy} busyLabel="Sending…">
+        Send me a link
+      </SubmitButton>
       <NextStepLink href="/sign-in" lead="Remembered it?">
         Sign in
       </NextStepLink>

@@ -6,10 +6,10 @@ import { Field } from '@/components/ui/Field';
 import { NewPasswordField } from './NewPasswordField';
 import { Notice } from '@/components/ui/Notice';
 import { fieldError } from '@/components/ui/api-client';
-import { button } from '@/components/ui/styles';
 import { useApiMutation } from '@/components/ui/useApiMutation';
 import { useLinkToken } from './link-token';
 import { NextStepLink } from './NextStepLink';
+import { SubmitButton } from './SubmitButton';
 
 /** Chooses a new password with the e-mailed link (its token is read from the address's fragment). */
 export function ResetPasswordForm() {
@@ -72,9 +72,9 @@ export function ResetPasswordForm() {
         required
         error={errors.confirm}
       />
-      <button type="submit" className={`${button.primary} w-full`} disabled={busy}>
-        {busy ? 'Saving…' : 'Set the new password'}
-      </button>
+      <SubmitButton busy={busy} busyLabel="Saving…">
+        Set the new password
+      </SubmitButton>
     </form>
   );
 }

@@ -7,10 +7,11 @@ import { useState, type FormEvent } from 'react';
 import { Field } from '@/components/ui/Field';
 import { Notice } from '@/components/ui/Notice';
 import { fieldError } from '@/components/ui/api-client';
-import { button, link } from '@/components/ui/styles';
+import { link } from '@/components/ui/styles';
 import { useApiMutation } from '@/components/ui/useApiMutation';
 import { signInErrorMessage } from '@/lib/auth/messages';
 import { NextStepLink } from './NextStepLink';
+import { SubmitButton } from './SubmitButton';
 
 /** The refusal that also covers an account still waiting for its confirmation link (see messages.ts). */
 const MISMATCH = 'CredentialsSignin';
@@ -77,9 +78,9 @@ export function SignInForm({ returnTo, initialError }: { returnTo: string; initi
           Forgot your password?
         </Link>
       </p>
-      <button type="submit" className={`${button.primary} w-full`} disabled={busy}>
-        {busy ? 'Signing in…' : 'Sign in'}
-      </button>
+      <SubmitButton busy={busy} busyLabel="Signing in…">
+        Sign in
+      </SubmitButton>
       <NextStepLink href="/sign-up" lead="New here?">
         Create an account
       </NextStepLink>

@@ -5,9 +5,9 @@ import { Field } from '@/components/ui/Field';
 import { NewPasswordField } from './NewPasswordField';
 import { Notice } from '@/components/ui/Notice';
 import { fieldError } from '@/components/ui/api-client';
-import { button } from '@/components/ui/styles';
 import { useApiMutation } from '@/components/ui/useApiMutation';
 import { NextStepLink } from './NextStepLink';
+import { SubmitButton } from './SubmitButton';
 
 type SignUp = { name: string; email: string; password: string; organisationName: string };
 
@@ -71,9 +71,9 @@ export function SignUpForm() {
         hint="Your shop, rescue, zoo or household. You will be its owner and can invite others."
         error={errors.organisationName}
       />
-      <button type="submit" className={`${button.primary} w-full`} disabled={busy}>
-        {busy ? 'Creating your account…' : 'Create account'}
-      </button>
+      <SubmitButton busy={busy} busyLabel="Creating your account…">
+        Create account
+      </SubmitButton>
       <NextStepLink href="/sign-in" lead="Already have an account?">
         Sign in
       </NextStepLink>
