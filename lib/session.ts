@@ -23,6 +23,9 @@ export async function requireUser(returnTo?: string): Promise<CurrentUser> {
 /** The props of a page that reads its address's query (`?q=…&page=2`). */
 export type SearchParamsProps = { searchParams: Promise<Record<string, string | string[]>> };
 
+/** The props of a page with segments in its address (`/lamp-log/[id]`) that also reads its query. */
+export type SegmentPageProps<P extends Record<string, string>> = SearchParamsProps & { params: Promise<P> };
+
 /**
  * A page of the signed-in app: its user (signing in first, back to `returnTo`) and the organisation they
  * are working in. Null when they belong to none: the layout then offers to make or join one instead of the page.

@@ -10,6 +10,7 @@ import { BrandMark } from '@/components/shell/BrandMark';
 import { NO_SPECIES_SAFETY_LEAD } from '@/shared/cautions';
 import { sizeBoth, tempBoth } from '@/shared/units';
 import { sharePicturePath } from '@/lib/variants/share-picture';
+import type { SegmentPageProps } from '@/lib/session';
 import { findShare } from '@/lib/variants/queries';
 import { sharePageView, type SharePageView } from '@/lib/variants/share-page';
 import type { FieldName } from '@/simulation';
@@ -65,10 +66,7 @@ const FIELDS: { id: FieldName; label: string }[] = [
 export default async function SharedVariantPage({
   params,
   searchParams,
-}: {
-  params: Promise<{ token: string }>;
-  searchParams: Promise<Record<string, string | string[] | undefined>>;
-}) {
+}: SegmentPageProps<{ token: string }>) {
   const { token } = await params;
   // Checked on every view (one query), so a revoked or expired link stops at once.
   const shared = await findShare(token);

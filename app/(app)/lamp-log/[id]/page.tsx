@@ -22,7 +22,7 @@ import { isExampleData } from '@/lib/organisations/queries';
 import { lampDetail } from '@/lib/lamp-log/queries';
 import { can } from '@/lib/permissions';
 import { parseId } from '@/lib/api/schemas';
-import { requireUser } from '@/lib/session';
+import { requireUser, type SegmentPageProps } from '@/lib/session';
 import { viewerZone } from '@/lib/time/viewer-zone';
 
 export const metadata: Metadata = { title: 'Lamp' };
@@ -30,13 +30,7 @@ export const metadata: Metadata = { title: 'Lamp' };
 /** Readings the table shows unless the address asks for all (`?readings=all`): the chart shows every one. */
 const READINGS_SHOWN = 10;
 
-export default async function LampPage({
-  params,
-  searchParams,
-}: {
-  params: Promise<{ id: string }>;
-  searchParams: Promise<Record<string, string | string[] | undefined>>;
-}) {
+export default async function LampPage({ params, searchParams }: SegmentPageProps<{ id: string }>) {
   const { id } = await params;
   const allReadings = (await searchParams).readings === 'all';
   const user = await requireUser(`/lamp-log/${id}`);
