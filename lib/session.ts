@@ -1,10 +1,10 @@
 import 'server-only';
 import { cookies, headers } from 'next/headers';
-import { redirect } from 'next/navigation';
+import { notFound, redirect } from 'next/navigation';
 import { cache } from 'react';
 import { sessionUserFromHeaders } from '@/lib/api/session';
 import type { CurrentUser } from '@/lib/auth/session-user';
-import type { MembershipClaim } from '@/lib/permissions';
+import { type Action, can, type MembershipClaim } from '@/lib/permissions';
 
 /** The cookie that remembers which of the user's organisations they are working in. */
 export const CURRENT_ORG_COOKIE = 'bw_org';
@@ -36,6 +36,17 @@ export async function requireMembership(
   const user = await requireUser(returnTo);
   const membership = await currentMembership(user);
   return membership && { user, membership, organisationId: membership.organisationId };
+}
+
+/**
+ * A page of the signed-in app that only some members see (the people lists, the jobs): as
+ * `requireMembership`, and a 404 for a member who may not do `action` on the organisation's `kind`,
+ * so the page does not tell them it exists.
+ */
+export async function requireMembershipThatMay(returnTo: string, action: Action, kind: 'member' | 'jobs') {
+  const session = await requireMembership(returnTo);
+  if (session && !can(session.user, action, { kind, organisationId: session.organisationId })) notFound();
+  return session;
 }
 
 /** The organisation chosen in the switcher, if it is still one of the user's; else their first. */

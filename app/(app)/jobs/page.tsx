@@ -1,13 +1,11 @@
 import type { Metadata } from 'next';
-import { notFound } from 'next/navigation';
 import { FailingTable, RunsTable } from '@/components/jobs/JobTables';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { Notice } from '@/components/ui/Notice';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { jobsOverview, type RunView } from '@/lib/jobs/overview';
 import { jobTitle } from '@/lib/jobs/registry';
-import { can } from '@/lib/permissions';
-import { requireMembership } from '@/lib/session';
+import { requireMembershipThatMay } from '@/lib/session';
 
 export const metadata: Metadata = { title: 'Background jobs' };
 export const dynamic = 'force-dynamic';
@@ -38,10 +36,9 @@ function countsText(run: RunView): string {
  * what is failing for it (units of work waiting to be retried, e-mail that could not be delivered).
  */
 export default async function JobsPage() {
-  const session = await requireMembership('/jobs');
+  const session = await requireMembershipThatMay('/jobs', 'read', 'jobs');
   if (!session) return null;
-  const { user, membership, organisationId } = session;
-  if (!can(user, 'read', { kind: 'jobs', organisationId })) notFound();
+  const { membership, organisationId } = session;
   const { runs, failures, undelivered } = await jobsOverview(organisationId);
   const lastRun = runs[0];
 

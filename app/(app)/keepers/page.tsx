@@ -1,5 +1,4 @@
 import type { Metadata } from 'next';
-import { notFound } from 'next/navigation';
 import { KeepersTable } from '@/components/people/KeepersTable';
 import { InviteForm } from '@/components/people/InviteForm';
 import { PendingInvitations } from '@/components/people/PendingInvitations';
@@ -12,15 +11,14 @@ import { pendingInvitationViews } from '@/lib/people/queries';
 import { toSearchParams } from '@/lib/list-view';
 import { keeperListView } from '@/lib/people/list-view';
 import { can } from '@/lib/permissions';
-import { requireMembership, type SearchParamsProps } from '@/lib/session';
+import { requireMembershipThatMay, type SearchParamsProps } from '@/lib/session';
 
 export const metadata: Metadata = { title: 'Keepers' };
 
 export default async function KeepersPage({ searchParams }: SearchParamsProps) {
-  const session = await requireMembership('/keepers');
+  const session = await requireMembershipThatMay('/keepers', 'read', 'member');
   if (!session) return null;
   const { user, membership, organisationId } = session;
-  if (!can(user, 'read', { kind: 'member', organisationId })) notFound();
   const mayInvite = can(user, 'create', { kind: 'invitation', organisationId, role: 'keeper' });
   // The first page is rendered here, for the view the address names; the table then fetches others.
   const view = keeperListView.viewFromSearchParams(toSearchParams(await searchParams));

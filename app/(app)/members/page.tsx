@@ -1,5 +1,4 @@
 import type { Metadata } from 'next';
-import { notFound } from 'next/navigation';
 import { InviteForm } from '@/components/people/InviteForm';
 import { MembersTable } from '@/components/people/MembersTable';
 import { PendingInvitations } from '@/components/people/PendingInvitations';
@@ -11,16 +10,15 @@ import { pendingInvitationViews } from '@/lib/people/queries';
 import { toSearchParams } from '@/lib/list-view';
 import { memberListView } from '@/lib/people/list-view';
 import { can } from '@/lib/permissions';
-import { requireMembership, type SearchParamsProps } from '@/lib/session';
+import { requireMembershipThatMay, type SearchParamsProps } from '@/lib/session';
 import type { Role } from '@/lib/permissions';
 
 export const metadata: Metadata = { title: 'Members' };
 
 export default async function MembersPage({ searchParams }: SearchParamsProps) {
-  const session = await requireMembership('/members');
+  const session = await requireMembershipThatMay('/members', 'read', 'member');
   if (!session) return null;
   const { user, membership, organisationId } = session;
-  if (!can(user, 'read', { kind: 'member', organisationId })) notFound();
   const manages = can(user, 'update', { kind: 'member', organisationId });
   const invitable = (['staff', 'keeper', 'owner'] as Role[]).filter((role) =>
     can(user, 'create', { kind: 'invitation', organisationId, role }),
