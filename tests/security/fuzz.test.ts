@@ -85,114 +85,86 @@ async function send(t: Target, c: BodyCase) {
   return reply;
 }
 
-const id = (k: keyof typeof ids) => () => ({ id: ids[k] });
+/**
+ * `method` of a route module at `pattern`; the `[id]` in it is the thing `idOf` names (none: no id). `note`
+ * tells two uses of one route apart in the test's name.
+ */
+const target = (
+  method: Target['method'],
+  route: Partial<Record<Target['method'], Handler>>,
+  pattern: string,
+  idOf: keyof typeof ids | null,
+  valid: Target['valid'],
+  note = '',
+): Target => ({
+  name: `${method} ${pattern}${note}`,
+  handler: route[method]!,
+  method,
+  path: () => (idOf ? pattern.replace('[id]', String(ids[idOf])) : pattern),
+  ...(idOf ? { params: () => ({ id: ids[idOf] }) } : {}),
+  valid,
+});
 
 const targets: Target[] = [
-  {
-    name: 'POST /api/enclosures',
-    handler: enclosures.POST,
-    method: 'POST',
-    path: () => '/api/enclosures',
-    valid: () => ({
-      organisationId: ids.org,
-      keeperId: ids.keeper,
-      name: 'Fuzz vivarium',
-      widthCm: 120,
-      heightCm: 60,
-      depthCm: 60,
-      speciesName: 'Bearded dragon',
-      notes: 'Made by the fuzz test.',
-    }),
-  },
-  {
-    name: 'PATCH /api/enclosures/[id]',
-    handler: enclosureItem.PATCH,
-    method: 'PATCH',
-    path: () => `/api/enclosures/${ids.enclosure}`,
-    params: id('enclosure'),
-    valid: () => ({ name: 'Desert vivarium', widthCm: 120, animalName: 'Sable', keeperId: ids.keeper }),
-  },
-  {
-    name: 'PUT /api/variants/[id] (design JSON)',
-    handler: variantItem.PUT,
-    method: 'PUT',
-    path: () => `/api/variants/${ids.variant}`,
-    params: id('variant'),
-    valid: async () => ({
+  target('POST', enclosures, '/api/enclosures', null, () => ({
+    organisationId: ids.org,
+    keeperId: ids.keeper,
+    name: 'Fuzz vivarium',
+    widthCm: 120,
+    heightCm: 60,
+    depthCm: 60,
+    speciesName: 'Bearded dragon',
+    notes: 'Made by the fuzz test.',
+  })),
+  target('PATCH', enclosureItem, '/api/enclosures/[id]', 'enclosure', () => ({
+    name: 'Desert vivarium',
+    widthCm: 120,
+    animalName: 'Sable',
+    keeperId: ids.keeper,
+  })),
+  target(
+    'PUT',
+    variantItem,
+    '/api/variants/[id]',
+    'variant',
+    async () => ({
       design: structuredClone(EXAMPLE_DESIGN) as unknown as Json,
       baseVersion: (await Variant.findByPk(ids.variant))!.version,
     }),
-  },
-  {
-    name: 'POST /api/designs/[id]/variants (design JSON)',
-    handler: designVariants.POST,
-    method: 'POST',
-    path: () => `/api/designs/${ids.design}/variants`,
-    params: id('design'),
-    valid: () => ({ name: 'Fuzz variant', design: structuredClone(EXAMPLE_DESIGN) as unknown as Json }),
-  },
-  {
-    name: 'POST /api/variants/[id]/shares',
-    handler: variantShares.POST,
-    method: 'POST',
-    path: () => `/api/variants/${ids.variant}/shares`,
-    params: id('variant'),
-    valid: () => ({ expiresInDays: 30 }),
-  },
-  {
-    name: 'POST /api/species',
-    handler: species.POST,
-    method: 'POST',
-    path: () => '/api/species',
-    valid: () => SPECIES_BODY(ids.org, 'Fuzz skink'),
-  },
-  {
-    name: 'PATCH /api/species/[id]',
-    handler: speciesItem.PATCH,
-    method: 'PATCH',
-    path: () => `/api/species/${ids.species}`,
-    params: id('species'),
-    valid: () => ({ notes: 'Edited by the fuzz test.', coolAirC: { min: 22, max: 26 } }),
-  },
-  {
-    name: 'POST /api/lamp-types',
-    handler: lampTypes.POST,
-    method: 'POST',
-    path: () => '/api/lamp-types',
-    valid: () => LAMP_TYPE_BODY(ids.org, 'Fuzz tube'),
-  },
-  {
-    name: 'PATCH /api/lamp-types/[id]',
-    handler: lampTypeItem.PATCH,
-    method: 'PATCH',
-    path: () => `/api/lamp-types/${ids.lampType}`,
-    params: id('lampType'),
-    valid: () => ({ notes: 'Edited by the fuzz test.', watts: 30 }),
-  },
-  {
-    name: 'POST /api/lamps/[id]/readings',
-    handler: lampReadings.POST,
-    method: 'POST',
-    path: () => `/api/lamps/${ids.lamp}/readings`,
-    params: id('lamp'),
-    // Yesterday: after the demo lamp's first use, not in the future.
-    valid: () => READING_BODY('fuzz'),
-  },
-  {
-    name: 'PATCH /api/readings/[id]',
-    handler: readingItem.PATCH,
-    method: 'PATCH',
-    path: () => `/api/readings/${ids.reading}`,
-    params: id('reading'),
-    valid: () => ({ value: 42, unit: 'uvb', distance: 12, distanceUnit: 'in' }),
-  },
-  {
-    name: 'POST /api/invitations',
-    handler: invitations.POST,
-    method: 'POST',
-    path: () => '/api/invitations',
-    valid: () => ({ organisationId: ids.org, email: 'fuzz.keeper@example.com', role: 'keeper' }),
-  },
+    ' (design JSON)',
+  ),
+  target(
+    'POST',
+    designVariants,
+    '/api/designs/[id]/variants',
+    'design',
+    () => ({ name: 'Fuzz variant', design: structuredClone(EXAMPLE_DESIGN) as unknown as Json }),
+    ' (design JSON)',
+  ),
+  target('POST', variantShares, '/api/variants/[id]/shares', 'variant', () => ({ expiresInDays: 30 })),
+  target('POST', species, '/api/species', null, () => SPECIES_BODY(ids.org, 'Fuzz skink')),
+  target('PATCH', speciesItem, '/api/species/[id]', 'species', () => ({
+    notes: 'Edited by the fuzz test.',
+    coolAirC: { min: 22, max: 26 },
+  })),
+  target('POST', lampTypes, '/api/lamp-types', null, () => LAMP_TYPE_BODY(ids.org, 'Fuzz tube')),
+  target('PATCH', lampTypeItem, '/api/lamp-types/[id]', 'lampType', () => ({
+    notes: 'Edited by the fuzz test.',
+    watts: 30,
+  })),
+  // Yesterday: after the demo lamp's first use, not in the future.
+  target('POST', lampReadings, '/api/lamps/[id]/readings', 'lamp', () => READING_BODY('fuzz')),
+  target('PATCH', readingItem, '/api/readings/[id]', 'reading', () => ({
+    value: 42,
+    unit: 'uvb',
+    distance: 12,
+    distanceUnit: 'in',
+  })),
+  target('POST', invitations, '/api/invitations', null, () => ({
+    organisationId: ids.org,
+    email: 'fuzz.keeper@example.com',
+    role: 'keeper',
+  })),
 ];
 
 beforeAll(async () => {
