@@ -3,7 +3,7 @@
 // refused with a 400 and prove nothing. Each is checked to get past parsing by A's owner (the control).
 import { EXAMPLE_DESIGN } from '@/simulation/testing/fixtures';
 import { FIXTURE_PASSWORD } from '../helpers/db';
-import { currentVersion, tinyPng, type World } from './access-world';
+import { currentVersion, ID_ROUTES, tinyPng, type World } from './access-world';
 import { LAMP_TYPE_BODY, READING_BODY, SPECIES_BODY } from './valid-bodies';
 
 export type RequestSpec = {
@@ -15,24 +15,9 @@ export type RequestSpec = {
 
 /** Which thing of the world a path's [id] names, by the route's pattern. */
 export function idFor(pattern: string, w: World): Record<string, string> {
-  const byPrefix: [RegExp, keyof World][] = [
-    [/^\/api\/enclosures\/\[id\]/, 'enclosure'],
-    [/^\/api\/designs\/\[id\]/, 'design'],
-    [/^\/api\/variants\/\[id\]/, 'variant'],
-    [/^\/api\/shares\/\[id\]/, 'share'],
-    [/^\/api\/lamps\/\[id\]/, 'lamp'],
-    [/^\/api\/readings\/\[id\]/, 'reading'],
-    [/^\/api\/species\/\[id\]/, 'species'],
-    [/^\/api\/lamp-types\/\[id\]/, 'lampType'],
-    [/^\/api\/organisations\/\[id\]/, 'orgA'],
-    [/^\/api\/invitations\/\[id\]/, 'invitation'],
-    [/^\/api\/uploads\/\[id\]/, 'upload'],
-    [/^\/api\/customers\/\[id\]/, 'customer'],
-    [/^\/api\/counter\/lamps\/\[id\]/, 'counterLamp'],
-  ];
   if (pattern.startsWith('/s/[token]')) return { token: 'A'.repeat(43), version: '1', file: 'uvi.svg' };
-  for (const [re, key] of byPrefix) if (re.test(pattern)) return { id: String(w[key]) };
-  return {};
+  const route = ID_ROUTES.find((r) => pattern.startsWith(r.prefix));
+  return route ? { id: String(w[route.thing]) } : {};
 }
 
 const enclosureBody = (w: World) => ({

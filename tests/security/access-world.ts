@@ -237,17 +237,35 @@ export async function fingerprint(): Promise<string> {
 
 export const currentVersion = async (variantId: number) => (await Variant.findByPk(variantId))!.version;
 
-/** The organisation that owns the row an id names under a route (null: none, or a route not listed). */
-const OWNING_ORGANISATION: [RegExp, string][] = [
-  [/^\/api\/organisations\/\[id\]/, 'SELECT id AS org FROM organisations WHERE id = :id'],
-  [/^\/api\/species\/\[id\]/, 'SELECT organisation_id AS org FROM species_sheets WHERE id = :id'],
-  [/^\/api\/lamp-types\/\[id\]/, 'SELECT organisation_id AS org FROM lamp_types WHERE id = :id'],
-  [/^\/api\/invitations\/\[id\]/, 'SELECT organisation_id AS org FROM invitations WHERE id = :id'],
-  [/^\/api\/uploads\/\[id\]/, 'SELECT organisation_id AS org FROM uploads WHERE id = :id'],
-  [/^\/api\/enclosures\/\[id\]/, 'SELECT organisation_id AS org FROM enclosures WHERE id = :id'],
-  [/^\/api\/customers\/\[id\]/, 'SELECT organisation_id AS org FROM customers WHERE id = :id'],
-  [/^\/api\/counter\/lamps\/\[id\]/, 'SELECT organisation_id AS org FROM counter_lamps WHERE id = :id'],
+/**
+ * The routes about one thing named by the `[id]` in their address, by the address they start with: which
+ * thing of the world it names (`idFor`), and the table whose row says which organisation owns it, for
+ * the rows that carry one (`outsiderOwns`).
+ */
+export const ID_ROUTES: { prefix: string; thing: keyof World; table?: string }[] = [
+  { prefix: '/api/enclosures/[id]', thing: 'enclosure', table: 'enclosures' },
+  { prefix: '/api/designs/[id]', thing: 'design' },
+  { prefix: '/api/variants/[id]', thing: 'variant' },
+  { prefix: '/api/shares/[id]', thing: 'share' },
+  { prefix: '/api/lamps/[id]', thing: 'lamp' },
+  { prefix: '/api/readings/[id]', thing: 'reading' },
+  { prefix: '/api/species/[id]', thing: 'species', table: 'species_sheets' },
+  { prefix: '/api/lamp-types/[id]', thing: 'lampType', table: 'lamp_types' },
+  { prefix: '/api/organisations/[id]', thing: 'orgA', table: 'organisations' },
+  { prefix: '/api/invitations/[id]', thing: 'invitation', table: 'invitations' },
+  { prefix: '/api/uploads/[id]', thing: 'upload', table: 'uploads' },
+  { prefix: '/api/customers/[id]', thing: 'customer', table: 'customers' },
+  { prefix: '/api/counter/lamps/[id]', thing: 'counterLamp', table: 'counter_lamps' },
 ];
+
+/** The organisation that owns the row an id names under a route (none: a route not listed, or no table). */
+function owningOrganisationSql(pattern: string): string | null {
+  const table = ID_ROUTES.find((r) => pattern.startsWith(r.prefix))?.table;
+  if (!table) return null;
+  // An organisation is its own owner.
+  const column = table === 'organisations' ? 'id' : 'organisation_id';
+  return `SELECT ${column} AS org FROM ${table} WHERE id = :id`;
+}
 
 /**
  * Whether `id` (as the route's schema reads it: a number, "0x10" and " 7" included) names something of
@@ -257,7 +275,7 @@ const OWNING_ORGANISATION: [RegExp, string][] = [
 export async function outsiderOwns(pattern: string, id: string, outsiderId: number): Promise<boolean> {
   const n = Number(id.trim());
   if (!Number.isInteger(n) || n <= 0 || n > 4_294_967_295) return false;
-  const sql = OWNING_ORGANISATION.find(([re]) => re.test(pattern))?.[1];
+  const sql = owningOrganisationSql(pattern);
   if (!sql) return false;
   const rows = await testDb().query<{ org: number }>(sql, {
     replacements: { id: n },
