@@ -344,21 +344,18 @@ describe('calibration', () => {
     expect(target.calibration.fields.uviPerUvb).toBeCloseTo(0.04, 3);
     expect(target.calibration.calibrated.from).toBe(6);
 
-    const stale = await call(calibrationRoute.POST, {
-      method: 'POST',
-      path,
-      params: { id: lamp.id },
-      as: w.keeper,
-      body: { variantId: variant.id, baseVersion: 7 },
-    });
+    // Applying it to the variant as saved at `baseVersion`.
+    const apply = (baseVersion: number) =>
+      call(calibrationRoute.POST, {
+        method: 'POST',
+        path,
+        params: { id: lamp.id },
+        as: w.keeper,
+        body: { variantId: variant.id, baseVersion },
+      });
+    const stale = await apply(7);
     expect(stale.status).toBe(409);
-    const applied = await call(calibrationRoute.POST, {
-      method: 'POST',
-      path,
-      params: { id: lamp.id },
-      as: w.keeper,
-      body: { variantId: variant.id, baseVersion: 1 },
-    });
+    const applied = await apply(1);
     expect(applied.status, applied.text).toBe(200);
     expect(applied.body.variant.version).toBe(2);
     const stored = JSON.parse((await Variant.findByPk(variant.id))!.designJson);
