@@ -1,17 +1,27 @@
 import 'server-only';
 import type { NextAuthOptions } from 'next-auth';
+import type { JWT } from 'next-auth/jwt';
 import CredentialsProvider from 'next-auth/providers/credentials';
 import { authorizeCredentials } from './credentials';
 import { safeReturnTo } from './return-to';
 import { SESSION_MAX_AGE_S, SESSION_REFRESH_MS } from './lifetime';
 import { authSecret } from './secret';
 import { endSession, isSessionEnded, loadActiveSession, newSessionId } from './ended-sessions';
-import { loadUserById } from './session-user';
+import { loadUserById, type CurrentUser } from './session-user';
 import { logger } from '@/lib/log';
 
 export { SESSION_MAX_AGE_S, SESSION_REFRESH_MS };
 /** A changed session version ends a session at the next request, and in next-auth's own answer within a minute. */
 export const SESSION_RECHECK_MS = 60_000;
+
+/** The token carrying the account as just loaded (its name, address and memberships), checked `now`. */
+const checked = (token: JWT, fresh: CurrentUser, now: number): JWT => ({
+  ...token,
+  name: fresh.name,
+  email: fresh.email,
+  memberships: fresh.memberships,
+  checkedAt: now,
+});
 
 export const authOptions: NextAuthOptions = {
   // JWT sessions are re-issued on every /api/auth/session answer (updateAge applies to database sessions only).
@@ -51,14 +61,10 @@ export const authOptions: NextAuthOptions = {
         const fresh = await loadUserById(Number(user.id));
         if (!fresh) throw new Error('The account could not be loaded.');
         return {
-          ...token,
-          name: fresh.name,
-          email: fresh.email,
+          ...checked(token, fresh, now),
           uid: fresh.id,
           sv: fresh.sessionVersion,
           sid: newSessionId(),
-          memberships: fresh.memberships,
-          checkedAt: now,
         };
       }
       if (typeof token.uid !== 'number' || typeof token.sv !== 'number' || typeof token.sid !== 'string')
@@ -72,13 +78,7 @@ export const authOptions: NextAuthOptions = {
       // Throwing makes next-auth clear the cookie: the session has ended (signed out, everywhere or here, or removed).
       const fresh = await loadActiveSession(token);
       if (!fresh) throw new Error('Session ended.');
-      return {
-        ...token,
-        name: fresh.name,
-        email: fresh.email,
-        memberships: fresh.memberships,
-        checkedAt: now,
-      };
+      return checked(token, fresh, now);
     },
     async session({ session, token }) {
       session.user = {
