@@ -47,6 +47,10 @@ export async function call(
   return { status: res.status, body, res };
 }
 
+/** `method` of a route about the thing `id` names, at `path`, as `user` sends `body`. */
+const onThing = (handler: Handler, method: string, path: string, id: number, user: User, body?: unknown) =>
+  call(handler, { method, path, params: { id }, user, body });
+
 /**
  * A new design with its first variant, made through the route as `user` would; throws unless it is made,
  * so a test's set-up cannot silently go on without one.
@@ -56,54 +60,27 @@ export async function postDesign(
   enclosureId: number,
   body: { name: string; variantName?: string; design?: unknown },
 ): Promise<{ designId: number; variantId: number }> {
-  const made = await call(enclosureDesignsRoute.POST, {
-    method: 'POST',
-    path: `/api/enclosures/${enclosureId}/designs`,
-    params: { id: enclosureId },
-    user,
-    body,
-  });
+  const path = `/api/enclosures/${enclosureId}/designs`;
+  const made = await onThing(enclosureDesignsRoute.POST, 'POST', path, enclosureId, user, body);
   if (made.status !== 201) throw new Error(`postDesign: ${made.status} ${JSON.stringify(made.body)}`);
   return { designId: made.body.design.id as number, variantId: made.body.variant.id as number };
 }
 
 /** A variant's download (`format=json`, `format=png&months=24` …) as `user` asks for it. */
 export const exportVariant = (user: User, variantId: number, query: string) =>
-  call(exportRoute.GET, {
-    path: `/api/variants/${variantId}/export?${query}`,
-    params: { id: variantId },
-    user,
-  });
+  onThing(exportRoute.GET, 'GET', `/api/variants/${variantId}/export?${query}`, variantId, user);
 
 /** A share link of a variant, asked for through the route as `user` (the reply carries its token). */
 export const postShare = (user: User, variantId: number, body: unknown = {}) =>
-  call(sharesRoute.POST, {
-    method: 'POST',
-    path: `/api/variants/${variantId}/shares`,
-    params: { id: variantId },
-    user,
-    body,
-  });
+  onThing(sharesRoute.POST, 'POST', `/api/variants/${variantId}/shares`, variantId, user, body);
 
 /** A save of a variant (`{ design, baseVersion }` …) through the route, as `user` sends it. */
 export const putVariant = (user: User, variantId: number, body: unknown) =>
-  call(variantRoute.PUT, {
-    method: 'PUT',
-    path: `/api/variants/${variantId}`,
-    params: { id: variantId },
-    user,
-    body,
-  });
+  onThing(variantRoute.PUT, 'PUT', `/api/variants/${variantId}`, variantId, user, body);
 
 /** A new variant of a design (`{ name, design }` or `{ name, fromVariantId }`), as `user` asks for it. */
 export const postVariant = (user: User, designId: number, body: unknown) =>
-  call(designVariantsRoute.POST, {
-    method: 'POST',
-    path: `/api/designs/${designId}/variants`,
-    params: { id: designId },
-    user,
-    body,
-  });
+  onThing(designVariantsRoute.POST, 'POST', `/api/designs/${designId}/variants`, designId, user, body);
 
 /** The public report download of a share link, as an anonymous visitor (no session) asks for it. */
 export const sharedReport = (token: string, format = 'pdf') =>
