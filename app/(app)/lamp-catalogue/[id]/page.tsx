@@ -1,5 +1,4 @@
 import { Breadcrumbs } from '@/components/ui/Breadcrumbs';
-import type { Metadata } from 'next';
 import Link from '@/components/ui/Link';
 import { CautionList } from '@/components/cautions/CautionList';
 import { DeleteLampTypeButton } from '@/components/catalogue/DeleteLampTypeButton';
@@ -12,20 +11,14 @@ import { ageingSource } from '@/lib/lamp-log/decay';
 import { populationPage } from '@/lib/population/queries';
 import { requireUser } from '@/lib/session';
 import { viewerZone } from '@/lib/time/viewer-zone';
-import { loadLampType } from '../load';
+import { entryMetadata, type EntryPageProps, loadEntry } from '../../catalogue-entry';
 
-type Props = { params: Promise<{ id: string }> };
+export const generateMetadata = entryMetadata('lamp-type');
 
-export async function generateMetadata({ params }: Props): Promise<Metadata> {
-  const user = await requireUser();
-  const { lampType } = await loadLampType(user, (await params).id);
-  return { title: lampType.name };
-}
-
-export default async function LampTypePage({ params }: Props) {
+export default async function LampTypePage({ params }: EntryPageProps) {
   const { id } = await params;
   const user = await requireUser(`/lamp-catalogue/${id}`);
-  const { lampType, mayEdit } = await loadLampType(user, id);
+  const { entry: lampType, mayEdit } = await loadEntry('lamp-type', user, id);
   const population = await populationPage(user, lampType.id);
   return (
     <>

@@ -1,6 +1,5 @@
 import { Breadcrumbs } from '@/components/ui/Breadcrumbs';
 import { LocalTime } from '@/components/ui/LocalTime';
-import type { Metadata } from 'next';
 import Link from '@/components/ui/Link';
 import { DeleteSheetButton } from '@/components/species/DeleteSheetButton';
 import { ProvenanceNote } from '@/components/species/ProvenanceNote';
@@ -8,20 +7,14 @@ import { SpeciesSheetView } from '@/components/species/SpeciesSheetView';
 import { PageHeader } from '@/components/ui/PageHeader';
 import { button } from '@/components/ui/styles';
 import { requireUser } from '@/lib/session';
-import { loadSheet } from '../load';
+import { entryMetadata, type EntryPageProps, loadEntry } from '../../catalogue-entry';
 
-type Props = { params: Promise<{ id: string }> };
+export const generateMetadata = entryMetadata('species');
 
-export async function generateMetadata({ params }: Props): Promise<Metadata> {
-  const user = await requireUser();
-  const { sheet } = await loadSheet(user, (await params).id);
-  return { title: sheet.commonName };
-}
-
-export default async function SpeciesSheetPage({ params }: Props) {
+export default async function SpeciesSheetPage({ params }: EntryPageProps) {
   const { id } = await params;
   const user = await requireUser(`/species/${id}`);
-  const { sheet, mayEdit } = await loadSheet(user, id);
+  const { entry: sheet, mayEdit } = await loadEntry('species', user, id);
 
   return (
     <>

@@ -1,26 +1,19 @@
 import type { Metadata } from 'next';
 import { SpeciesForm } from '@/components/species/SpeciesForm';
-import { EntryFormPage } from '@/components/ui/EntryFormPage';
-import { requireUser } from '@/lib/session';
-import { loadSheet } from '../../load';
+import { EditEntryPage, type EntryPageProps } from '../../../catalogue-entry';
 
 export const metadata: Metadata = { title: 'Edit species sheet' };
 
-export default async function EditSpeciesPage({ params }: { params: Promise<{ id: string }> }) {
-  const { id } = await params;
-  const user = await requireUser(`/species/${id}/edit`);
-  const { sheet, mayEdit } = await loadSheet(user, id);
+export default function EditSpeciesPage({ params }: EntryPageProps) {
   return (
-    <EntryFormPage
-      back={{ href: `/species/${sheet.id}`, label: sheet.commonName }}
-      title={`Edit: ${sheet.commonName}`}
-      allowed={mayEdit}
+    <EditEntryPage
+      kind="species"
+      params={params}
       refusal={{
         title: 'You can read this sheet but not change it',
         body: 'Species sheets are kept by the organisation’s owner and staff. Ask one of them to make the change.',
       }}
-    >
-      <SpeciesForm organisationId={sheet.organisationId} sheet={sheet} />
-    </EntryFormPage>
+      form={(sheet) => <SpeciesForm organisationId={sheet.organisationId} sheet={sheet} />}
+    />
   );
 }
