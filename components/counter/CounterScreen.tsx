@@ -20,6 +20,7 @@ import { CustomerPicker, type Who } from './CustomerPicker';
 import { KeeperLampChoice } from './KeeperLampChoice';
 import { SavedTestNotice, type SavedTest } from './SavedTest';
 import { VerdictCard } from './VerdictCard';
+import { shareInput } from '@/components/ui/share-input';
 
 export type CounterOptions = {
   organisationId: number;
@@ -344,11 +345,7 @@ export function CounterScreen({ options }: { options: CounterOptions }) {
             <Field
               label="Share of UVB the lid or mesh at home passes (0–1)"
               name="baskingTransmission"
-              type="number"
-              inputMode="decimal"
-              step="0.01"
-              min="0.01"
-              max="1"
+              {...shareInput}
               hint="Leave empty when nothing lies between lamp and basking spot."
               error={err('baskingTransmission')}
             />

@@ -12,6 +12,7 @@ import { useApiMutation } from '@/components/ui/useApiMutation';
 import { dayInZone } from '@/lib/time/format';
 import { type DesignLampOption, DesignLampSelect } from './DesignLampSelect';
 import { LampUseFields } from './LampUseFields';
+import { shareInput } from '@/components/ui/share-input';
 
 export type LampTypeOption = { id: number; name: string; tech: string; uvbAt30: number };
 
@@ -106,10 +107,7 @@ export function AddLampForm({
           <Field
             label="Share of UVB passing (0–1)"
             name="customTransmission"
-            type="number"
-            step="0.01"
-            min="0.01"
-            max="1"
+            {...shareInput}
             required
             error={err('baskingTransmission')}
           />

@@ -12,6 +12,7 @@ import { useApiMutation } from '@/components/ui/useApiMutation';
 import type { LampSummary } from '@/lib/lamp-log/queries';
 import { type DesignLampOption, DesignLampSelect } from './DesignLampSelect';
 import { LampUseFields } from './LampUseFields';
+import { shareInput } from '@/components/ui/share-input';
 
 /** Edit a lamp, retire it (its readings stay), or delete one logged by mistake. */
 export function LampSettings({
@@ -83,10 +84,7 @@ export function LampSettings({
         <Field
           label="Share of UVB passing between (0–1)"
           name="baskingTransmission"
-          type="number"
-          step="0.01"
-          min="0.01"
-          max="1"
+          {...shareInput}
           defaultValue={lamp.baskingTransmission ?? ''}
           hint="Empty: nothing in between. A mesh lid passes about 0.5–0.7."
           error={err('baskingTransmission')}

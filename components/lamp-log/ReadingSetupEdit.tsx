@@ -10,6 +10,7 @@ import {
   type ReadingThrough,
   type ReadingWarmedUp,
 } from '@/shared/reading-setup';
+import { shareInput } from '@/components/ui/share-input';
 
 type Setup = {
   id: number;
@@ -81,11 +82,7 @@ export function ReadingSetupEdit({ reading, label }: { reading: Setup; label: st
               <input
                 id={`${id}-share`}
                 name="throughTransmission"
-                type="number"
-                step="0.01"
-                min="0.01"
-                max="1"
-                inputMode="decimal"
+                {...shareInput}
                 className={`${input} text-caption`}
                 defaultValue={reading.through === through ? (reading.throughTransmission ?? '') : ''}
               />

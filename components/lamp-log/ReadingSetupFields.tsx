@@ -4,6 +4,7 @@ import type { ComponentProps } from 'react';
 import { Field } from '@/components/ui/Field';
 import { Select } from '@/components/ui/Select';
 import { THROUGH_LABEL, WARMED_UP_LABEL } from '@/shared/reading-setup';
+import { shareInput } from '@/components/ui/share-input';
 
 /**
  * How a reading was taken — what lay between lamp and meter (with the share of UVB it passes) and
@@ -55,11 +56,7 @@ export function ReadingSetupFields({
           key={through}
           label="Share of UVB it passes (0–1)"
           name="throughTransmission"
-          type="number"
-          step="0.01"
-          min="0.01"
-          max="1"
-          inputMode="decimal"
+          {...shareInput}
           defaultValue={shareDefault}
           required={through === 'screen' || (through === 'lid' && lidShare === null)}
           hint={
