@@ -1,9 +1,10 @@
 'use client';
-import { memo } from 'react';
+import { memo, type ReactNode } from 'react';
 // How each design object is drawn: our own visual language. Shapes are drawn in stage pixels
 // from the camera; nothing here listens to events (hit testing is in interaction.ts).
 import { Circle, Group, Line, Rect, Shape } from 'react-konva';
 import type { Context } from 'konva/lib/Context';
+import type { RectConfig } from 'konva/lib/shapes/Rect';
 import { designToStage, type Camera, type Rect as Rect2 } from '../geometry/camera';
 import { BULB_RADIUS_CM, lampExtent, TUBE_THICKNESS_CM } from '@/shared/object-kinds/lamp';
 import { LAMP_TECHS } from '@/simulation';
@@ -164,6 +165,16 @@ function leavesScene(ctx: Context, x: number, y: number, w: number, h: number) {
   ctx.closePath();
 }
 
+/** A solid box kind: its filled outline with the kind's details drawn over it. */
+function BoxBody({ body, children }: { body: RectConfig; children: ReactNode }) {
+  return (
+    <Group listening={false}>
+      <Rect {...body} />
+      {children}
+    </Group>
+  );
+}
+
 export const ObjectShape = memo(function ObjectShape({ o, cam }: { o: DesignObject; cam: Camera }) {
   switch (o.type) {
     case 'lamp':
@@ -221,45 +232,29 @@ export const ObjectShape = memo(function ObjectShape({ o, cam }: { o: DesignObje
     case 'ledge':
     case 'hide':
     case 'foliage': {
+      // The box's outline in stage px; each kind dresses it in its own look.
       const tl = designToStage(cam, { x: o.x, y: o.y + o.height });
       const w = o.width * cam.zoom;
       const h = o.height * cam.zoom;
+      const outline = { x: tl.x, y: tl.y, width: w, height: h, strokeWidth: 1.5 };
       if (o.type === 'ledge') {
         return (
-          <Group listening={false}>
-            <Rect
-              x={tl.x}
-              y={tl.y}
-              width={w}
-              height={h}
-              fill={C.basalt300}
-              stroke={C.basalt600}
-              strokeWidth={1.5}
-              cornerRadius={Math.min(6, h / 4)}
-            />
+          <BoxBody
+            body={{ ...outline, fill: C.basalt300, stroke: C.basalt600, cornerRadius: Math.min(6, h / 4) }}
+          >
             <Line
               points={[tl.x + 3, tl.y + 2.5, tl.x + w - 3, tl.y + 2.5]}
               stroke={C.basalt200}
               strokeWidth={2}
               lineCap="round"
             />
-          </Group>
+          </BoxBody>
         );
       }
       if (o.type === 'hide') {
         const door = Math.min(w * 0.3, h * 0.55);
         return (
-          <Group listening={false}>
-            <Rect
-              x={tl.x}
-              y={tl.y}
-              width={w}
-              height={h}
-              fill={C.sand200}
-              stroke={C.sand800}
-              strokeWidth={1.5}
-              cornerRadius={[6, 6, 0, 0]}
-            />
+          <BoxBody body={{ ...outline, fill: C.sand200, stroke: C.sand800, cornerRadius: [6, 6, 0, 0] }}>
             <Rect
               x={tl.x + 4}
               y={tl.y + 4}
@@ -282,7 +277,7 @@ export const ObjectShape = memo(function ObjectShape({ o, cam }: { o: DesignObje
               fill={C.sand800}
               opacity={0.7}
             />
-          </Group>
+          </BoxBody>
         );
       }
       return (

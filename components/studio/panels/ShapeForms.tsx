@@ -1,39 +1,87 @@
 'use client';
-import {
-  DEFAULT_FOLIAGE_UVB_TRANSMISSION,
-  DEFAULT_GLASS_UVB_TRANSMISSION,
-  DEFAULT_SCREEN_UVB_TRANSMISSION,
-  DEFAULT_ROOM_TEMP_C,
-} from '@/simulation';
+import { barrierUvbTransmission, DEFAULT_ROOM_TEMP_C } from '@/simulation';
 import { segmentAngleDeg, segmentLength } from '../geometry/objects';
 import { formatLength, formatNumber } from '@/shared/units';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
 import { setEnclosure, updateProbe } from '../state/document';
 import { kindOf } from '@/shared/object-kinds';
 import { focusRing } from './CommandButton';
-import type { BoxObject, Enclosure, ProbePoint, SegmentObject } from '../state/types';
+import type {
+  BoxObject,
+  Enclosure,
+  FoliageObject,
+  GlassObject,
+  ProbePoint,
+  ScreenObject,
+  SegmentObject,
+} from '../state/types';
 import { Grid2, NumberField, Section, SelectField, TextField } from './FormFields';
 import { DEFAULT_WALLS, WALL_MATERIALS, WALLS } from '@/simulation';
 import { useObjectEdit, useUnits } from './useObjectEdit';
 import { checkEnclosureEdit, checkWithinDepth, type FieldKind } from './validate';
 
+type EditField = ReturnType<typeof useObjectEdit>['field'];
+
+/** Where a kind of object sits: its length fields, two to a row, as field key and label. */
+const SEGMENT_ENDS = [
+  ['x1', 'First end x'],
+  ['y1', 'First end y'],
+  ['x2', 'Second end x'],
+  ['y2', 'Second end y'],
+] as const;
+const BOX_PLACE = [
+  ['x', 'Left x'],
+  ['y', 'Bottom y'],
+  ['width', 'Width'],
+  ['height', 'Height'],
+] as const;
+
+function LengthFields({
+  fields,
+  field,
+}: {
+  fields: readonly (readonly [key: string, label: string])[];
+  field: EditField;
+}) {
+  return (
+    <Grid2>
+      {fields.map(([key, label]) => (
+        <NumberField key={key} label={label} testId={`field-${key}`} {...field(key, 'length')} />
+      ))}
+    </Grid2>
+  );
+}
+
+/** The share of UVB a barrier passes; left empty, the engine's default for its kind, shown as the fallback. */
+function UvbPassedField({
+  o,
+  label,
+  hint,
+  field,
+}: {
+  o: ScreenObject | GlassObject | FoliageObject;
+  label: string;
+  hint?: string;
+  field: EditField;
+}) {
+  return (
+    <NumberField
+      label={label}
+      optional
+      fallback={barrierUvbTransmission({ ...o, uvbTransmission: undefined })}
+      testId="field-uvbTransmission"
+      hint={hint}
+      {...field('uvbTransmission', 'percent')}
+    />
+  );
+}
+
 export function SegmentForm({ o }: { o: SegmentObject }) {
   const { field, units } = useObjectEdit(o);
-  const fallback =
-    o.type === 'screen'
-      ? DEFAULT_SCREEN_UVB_TRANSMISSION
-      : o.type === 'glass'
-        ? DEFAULT_GLASS_UVB_TRANSMISSION
-        : undefined;
   return (
     <>
       <Section title="Ends">
-        <Grid2>
-          <NumberField label="First end x" testId="field-x1" {...field('x1', 'length')} />
-          <NumberField label="First end y" testId="field-y1" {...field('y1', 'length')} />
-          <NumberField label="Second end x" testId="field-x2" {...field('x2', 'length')} />
-          <NumberField label="Second end y" testId="field-y2" {...field('y2', 'length')} />
-        </Grid2>
+        <LengthFields fields={SEGMENT_ENDS} field={field} />
         <p className="text-caption text-basalt-500">
           Length {formatLength(segmentLength(o), units.length)}, angle {formatNumber(segmentAngleDeg(o), 0)}°
         </p>
@@ -44,17 +92,15 @@ export function SegmentForm({ o }: { o: SegmentObject }) {
         </Section>
       ) : (
         <Section title="Material">
-          <NumberField
+          <UvbPassedField
+            o={o}
             label="UVB passed"
-            optional
-            fallback={fallback}
-            testId="field-uvbTransmission"
             hint={
               o.type === 'screen'
                 ? 'About the open area of the mesh'
                 : 'Glass passes none; acrylic varies (some pass UVB): enter its measured share'
             }
-            {...field('uvbTransmission', 'percent')}
+            field={field}
           />
         </Section>
       )}
@@ -67,22 +113,11 @@ export function BoxForm({ o }: { o: BoxObject }) {
   return (
     <>
       <Section title="Place and size">
-        <Grid2>
-          <NumberField label="Left x" testId="field-x" {...field('x', 'length')} />
-          <NumberField label="Bottom y" testId="field-y" {...field('y', 'length')} />
-          <NumberField label="Width" testId="field-width" {...field('width', 'length')} />
-          <NumberField label="Height" testId="field-height" {...field('height', 'length')} />
-        </Grid2>
+        <LengthFields fields={BOX_PLACE} field={field} />
       </Section>
       {o.type === 'foliage' && (
         <Section title="Planting">
-          <NumberField
-            label="Light passed"
-            optional
-            fallback={DEFAULT_FOLIAGE_UVB_TRANSMISSION}
-            testId="field-uvbTransmission"
-            {...field('uvbTransmission', 'percent')}
-          />
+          <UvbPassedField o={o} label="Light passed" field={field} />
         </Section>
       )}
     </>
