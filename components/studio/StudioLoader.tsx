@@ -10,9 +10,7 @@ import type { StudioPicture } from '@/shared/designs/studio-field';
 import { FirstFieldPicture } from './FirstField';
 import { httpPersistence } from './persistence/http';
 import { localPersistence } from './persistence/local';
-import type { Loaded } from './persistence/types';
-import type { EnclosurePhotos } from './state/session';
-import type { StudioCatalogueType, StudioSpecies } from './state/types';
+import type { StudioProps } from './Studio';
 
 const Studio = dynamic(() => import('./Studio'), {
   ssr: false,
@@ -28,37 +26,35 @@ const Studio = dynamic(() => import('./Studio'), {
 
 export type StudioSource = { kind: 'variant'; variantId: string } | { kind: 'scratch' };
 
+/** What the loader hands on to the studio as it is; photos and catalogue types reach variant studios only. */
+type PassedOn = Pick<
+  StudioProps,
+  | 'species'
+  | 'title'
+  | 'backHref'
+  | 'backLabel'
+  | 'initial'
+  | 'initialSpeciesId'
+  | 'readOnly'
+  | 'photos'
+  | 'catalogueTypes'
+>;
+
 export function StudioLoader({
   source,
-  species,
-  title,
-  backHref,
-  backLabel,
-  initial,
-  initialSpeciesId,
-  readOnly,
-  photos,
-  catalogueTypes,
   picture,
   nonce,
-}: {
+  photos,
+  catalogueTypes,
+  ...studio
+}: PassedOn & {
   source: StudioSource;
-  species: StudioSpecies[];
-  title: string;
-  backHref?: string;
-  backLabel?: string;
-  initial?: Loaded;
-  initialSpeciesId?: string | null;
-  readOnly?: boolean;
-  /** The enclosure's backdrop photos this user may see (variant studios only). */
-  photos?: EnclosurePhotos;
-  /** The organisation's catalogue types with an adopted measured curve (variant studios only). */
-  catalogueTypes?: StudioCatalogueType[];
   /** The field drawn on the server (the saved design's, or the example's for the scratch studio). */
   picture?: StudioPicture | null;
   /** This response's CSP nonce, for the picture's inline scripts. */
   nonce?: string;
 }) {
+  const { initial } = studio;
   // The engine and contour workers load their code while the studio's own code and Konva download.
   // During render rather than in an effect, so they start as this component hydrates (idempotent).
   startStudioWorkers();
@@ -105,14 +101,8 @@ export function StudioLoader({
         )}
         <div className="absolute inset-0">
           <Studio
+            {...studio}
             persistence={persistence}
-            species={species}
-            title={title}
-            backHref={backHref}
-            backLabel={backLabel}
-            initial={initial}
-            initialSpeciesId={initialSpeciesId}
-            readOnly={readOnly}
             photos={source.kind === 'variant' ? photos : undefined}
             catalogueTypes={source.kind === 'variant' ? catalogueTypes : undefined}
             picture={studioPicture}
