@@ -1,6 +1,5 @@
 'use client';
 // Field view controls: which field, opacity, the legend, and the pinned probes with their readings.
-import { useId } from 'react';
 import { command, runCommand } from '../commands/registry';
 import { FIELD_TITLE, fieldHeading, fieldUnit } from '@/shared/field-scale';
 import type { LegendEntry } from '../fields/legend';
@@ -10,7 +9,7 @@ import { useCommandContext, useStudio } from '../hooks/useStudio';
 import { removeObjects } from '../state/document';
 import type { FieldView } from '../state/session';
 import { focusRing } from './CommandButton';
-import { Section } from './FormFields';
+import { OpacitySlider, Section } from './FormFields';
 import { PhotoPanel } from './PhotoPanel';
 
 const FIELDS: { id: FieldView; cmd: string; short: string }[] = [
@@ -24,7 +23,6 @@ export function FieldsPanel({ sim, legend }: { sim: SimView; legend: LegendEntry
   const { store } = ctx;
   const session = useStudio(store, (s) => s.session);
   const probes = useStudio(store, (s) => s.history.present.probes);
-  const opacityId = useId();
   const unit = fieldUnit(session.field, session.tempUnit);
   return (
     <div data-testid="fields-panel">
@@ -57,21 +55,12 @@ export function FieldsPanel({ sim, legend }: { sim: SimView; legend: LegendEntry
           />
           Show the field on the canvas
         </label>
-        <div className="flex flex-col gap-1">
-          <label htmlFor={opacityId} className="text-caption font-medium text-basalt-700">
-            Opacity {Math.round(session.fieldOpacity * 100)} %
-          </label>
-          <input
-            id={opacityId}
-            type="range"
-            min={10}
-            max={100}
-            step={5}
-            value={Math.round(session.fieldOpacity * 100)}
-            onChange={(e) => store.setSession({ fieldOpacity: Number(e.target.value) / 100 })}
-            className={`accent-moss-600 ${focusRing}`}
-          />
-        </div>
+        <OpacitySlider
+          label="Opacity"
+          value={session.fieldOpacity}
+          min={10}
+          onChange={(fieldOpacity) => store.setSession({ fieldOpacity })}
+        />
       </Section>
       <Section title={fieldHeading(session.field, session.tempUnit)}>
         {legend.length === 0 ? (

@@ -43,6 +43,19 @@ export function unitText(kind: FieldKind, u: DisplayUnits, plainUnit?: string): 
 
 export const inputClass = `h-8 w-full rounded-md border border-basalt-300 bg-white px-2 text-sm tabular-nums text-basalt-900 aria-[invalid=true]:border-ember-600 ${focusRing}`;
 
+/** One inspector control under its label; `control` gets the id the label points at. */
+function Labelled({ label, control }: { label: ReactNode; control: (id: string) => ReactNode }) {
+  const id = useId();
+  return (
+    <div className="flex flex-col gap-0.5">
+      <label htmlFor={id} className="text-caption font-medium text-basalt-700">
+        {label}
+      </label>
+      {control(id)}
+    </div>
+  );
+}
+
 export function NumberField({
   label,
   value,
@@ -71,7 +84,6 @@ export function NumberField({
   check: (stored: number | undefined) => Check<unknown>;
   onCommit: (stored: number | undefined) => void;
 }) {
-  const id = useId();
   const shown = value === undefined ? '' : formatNumber(toDisplay(value, kind, units), decimals(kind, units));
   const [text, setText] = useState(shown);
   const [error, setError] = useState<string | null>(null);
@@ -112,12 +124,8 @@ export function NumberField({
       ? ''
       : `${formatNumber(toDisplay(fallback, kind, units), decimals(kind, units))} (default)`;
   const unit = unitText(kind, units, plainUnit);
-  return (
-    <div className="flex flex-col gap-0.5">
-      <label htmlFor={id} className="text-caption font-medium text-basalt-700">
-        {label}
-        {unit && <span className="font-normal text-basalt-500"> ({unit})</span>}
-      </label>
+  const control = (id: string) => (
+    <>
       <div className="flex items-center gap-1">
         <input
           id={id}
@@ -165,7 +173,18 @@ export function NumberField({
           {hint}
         </p>
       ) : null}
-    </div>
+    </>
+  );
+  return (
+    <Labelled
+      label={
+        <>
+          {label}
+          {unit && <span className="font-normal text-basalt-500"> ({unit})</span>}
+        </>
+      }
+      control={control}
+    />
   );
 }
 
@@ -182,7 +201,6 @@ export function TextField({
   maxLength?: number;
   onCommit: (v: string | undefined) => void;
 }) {
-  const id = useId();
   const [text, setText] = useState(value ?? '');
   const [prev, setPrev] = useState(value);
   if (prev !== value) {
@@ -194,23 +212,23 @@ export function TextField({
     if ((t || undefined) !== value) onCommit(t || undefined);
   };
   return (
-    <div className="flex flex-col gap-0.5">
-      <label htmlFor={id} className="text-caption font-medium text-basalt-700">
-        {label}
-      </label>
-      <input
-        id={id}
-        className={inputClass}
-        value={text}
-        maxLength={maxLength}
-        placeholder={placeholder}
-        onChange={(e) => setText(e.target.value)}
-        onBlur={commit}
-        onKeyDown={(e) => {
-          if (e.key === 'Enter') commit();
-        }}
-      />
-    </div>
+    <Labelled
+      label={label}
+      control={(id) => (
+        <input
+          id={id}
+          className={inputClass}
+          value={text}
+          maxLength={maxLength}
+          placeholder={placeholder}
+          onChange={(e) => setText(e.target.value)}
+          onBlur={commit}
+          onKeyDown={(e) => {
+            if (e.key === 'Enter') commit();
+          }}
+        />
+      )}
+    />
   );
 }
 
@@ -227,25 +245,73 @@ export function SelectField<T extends string>({
   onChange: (v: T) => void;
   testId?: string;
 }) {
-  const id = useId();
   return (
-    <div className="flex flex-col gap-0.5">
+    <Labelled
+      label={label}
+      control={(id) => (
+        <select
+          id={id}
+          data-testid={testId}
+          className={inputClass}
+          value={value}
+          onChange={(e) => onChange(e.target.value as T)}
+        >
+          {options.map((o) => (
+            <option key={o.value || '_none'} value={o.value} disabled={o.disabled}>
+              {o.label}
+            </option>
+          ))}
+        </select>
+      )}
+    />
+  );
+}
+
+/** An opacity as a slider of whole percent in steps of 5, the value read out in its label. */
+export function OpacitySlider({
+  label,
+  value,
+  min,
+  testId,
+  disabled,
+  onChange,
+  onSlideStart,
+  onSlideEnd,
+}: {
+  label: string;
+  /** 0–1 */
+  value: number;
+  /** The lowest percent it goes down to. */
+  min: number;
+  testId?: string;
+  disabled?: boolean;
+  onChange: (value: number) => void;
+  onSlideStart?: () => void;
+  onSlideEnd?: () => void;
+}) {
+  const id = useId();
+  const percent = Math.round(value * 100);
+  return (
+    <div className="flex flex-col gap-1">
       <label htmlFor={id} className="text-caption font-medium text-basalt-700">
-        {label}
+        {label} {percent} %
       </label>
-      <select
+      <input
         id={id}
         data-testid={testId}
-        className={inputClass}
-        value={value}
-        onChange={(e) => onChange(e.target.value as T)}
-      >
-        {options.map((o) => (
-          <option key={o.value || '_none'} value={o.value} disabled={o.disabled}>
-            {o.label}
-          </option>
-        ))}
-      </select>
+        type="range"
+        min={min}
+        max={100}
+        step={5}
+        disabled={disabled}
+        value={percent}
+        onPointerDown={onSlideStart}
+        onPointerUp={onSlideEnd}
+        onPointerCancel={onSlideEnd}
+        onBlur={onSlideEnd}
+        onChange={(e) => onChange(Number(e.target.value) / 100)}
+        className={`accent-moss-600 ${focusRing}`}
+      />
     </div>
   );
 }

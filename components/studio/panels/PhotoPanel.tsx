@@ -8,7 +8,7 @@ import { useCommandContext, useStudio } from '../hooks/useStudio';
 import { chooseBackdrop, updateBackdrop } from '../state/backdropActions';
 import type { Backdrop } from '../state/types';
 import { CommandButton, focusRing } from './CommandButton';
-import { Grid2, NumberField, Section, inputClass } from './FormFields';
+import { Grid2, NumberField, OpacitySlider, Section, inputClass } from './FormFields';
 import { useUnits } from './useObjectEdit';
 import { checkBackdropEdit } from './validate';
 
@@ -29,7 +29,6 @@ export function PhotoPanel() {
   const readOnly = useStudio(store, (s) => s.readOnly);
   const adjusting = useStudio(store, (s) => s.session.backdropAdjust);
   const selectId = useId();
-  const opacityId = useId();
   if (!photos) return null;
 
   if (photos.items.length === 0 && !backdrop) {
@@ -84,7 +83,7 @@ export function PhotoPanel() {
         </p>
       )}
       {backdrop && !problem && (
-        <PhotoPlacement backdrop={backdrop} adjusting={adjusting} opacityId={opacityId} readOnly={readOnly} />
+        <PhotoPlacement backdrop={backdrop} adjusting={adjusting} readOnly={readOnly} />
       )}
       <p className="text-caption text-basalt-500">
         Add or delete photos on the{' '}
@@ -100,12 +99,10 @@ export function PhotoPanel() {
 function PhotoPlacement({
   backdrop,
   adjusting,
-  opacityId,
   readOnly,
 }: {
   backdrop: Backdrop;
   adjusting: boolean;
-  opacityId: string;
   readOnly: boolean;
 }) {
   const { store } = useCommandContext();
@@ -135,27 +132,16 @@ function PhotoPlacement({
           when done.
         </p>
       )}
-      <div className="flex flex-col gap-1">
-        <label htmlFor={opacityId} className="text-caption font-medium text-basalt-700">
-          Photo opacity {Math.round(backdrop.opacity * 100)} %
-        </label>
-        <input
-          id={opacityId}
-          data-testid="photo-opacity"
-          type="range"
-          min={5}
-          max={100}
-          step={5}
-          disabled={readOnly}
-          value={Math.round(backdrop.opacity * 100)}
-          onPointerDown={() => store.beginGesture()}
-          onPointerUp={endSlide}
-          onPointerCancel={endSlide}
-          onBlur={endSlide}
-          onChange={(e) => updateBackdrop(store, { opacity: Number(e.target.value) / 100 })}
-          className={`accent-moss-600 ${focusRing}`}
-        />
-      </div>
+      <OpacitySlider
+        label="Photo opacity"
+        value={backdrop.opacity}
+        min={5}
+        testId="photo-opacity"
+        disabled={readOnly}
+        onChange={(opacity) => updateBackdrop(store, { opacity })}
+        onSlideStart={() => store.beginGesture()}
+        onSlideEnd={endSlide}
+      />
       {!readOnly && (
         <Grid2>
           <NumberField label="Photo left edge" testId="photo-x" {...field('x')} />
