@@ -3,21 +3,19 @@ import { memo } from 'react';
 // The enclosure drawn to scale on a faint grid, its size label, and the photo traced over.
 import { Group, Image as KonvaImage, Rect, Shape, Text } from 'react-konva';
 import { backdropStageRect } from '../geometry/backdrop';
-import { designToStage, niceStepCm, visibleDesignRect, type Camera, type Viewport } from '../geometry/camera';
-import { CM_PER_IN, formatLength, type LengthUnit } from '@/shared/units';
+import {
+  designToStage,
+  niceStepCm,
+  visibleDesignRect,
+  type Camera,
+  type ViewLayerProps,
+} from '../geometry/camera';
+import { displayToCm, formatLength, type LengthUnit } from '@/shared/units';
 import type { Backdrop, Enclosure } from '../state/types';
 import { C } from './colors';
 
-export const GridShape = memo(function GridShape({
-  cam,
-  viewport,
-  unit,
-}: {
-  cam: Camera;
-  viewport: Viewport;
-  unit: LengthUnit;
-}) {
-  const cmPerUnit = unit === 'cm' ? 1 : CM_PER_IN;
+export const GridShape = memo(function GridShape({ cam, viewport, unit }: ViewLayerProps) {
+  const cmPerUnit = displayToCm(1, unit);
   const step = niceStepCm(cam.zoom, 14, cmPerUnit);
   const vis = visibleDesignRect(cam, viewport);
   return (

@@ -3,22 +3,14 @@ import { memo } from 'react';
 // Rulers along the top and left edges of the view, in the chosen unit, measured from the
 // enclosure's inside bottom-left corner (the design origin).
 import { Group, Rect, Shape, Text } from 'react-konva';
-import { designToStage, niceStepCm, visibleDesignRect, type Camera, type Viewport } from '../geometry/camera';
-import { CM_PER_IN, formatNumber, type LengthUnit } from '@/shared/units';
+import { designToStage, niceStepCm, visibleDesignRect, type ViewLayerProps } from '../geometry/camera';
+import { displayToCm, formatNumber } from '@/shared/units';
 import { C } from './colors';
 
 export const RULER_PX = 22;
 
-export const Rulers = memo(function Rulers({
-  cam,
-  viewport,
-  unit,
-}: {
-  cam: Camera;
-  viewport: Viewport;
-  unit: LengthUnit;
-}) {
-  const cmPerUnit = unit === 'cm' ? 1 : CM_PER_IN;
+export const Rulers = memo(function Rulers({ cam, viewport, unit }: ViewLayerProps) {
+  const cmPerUnit = displayToCm(1, unit);
   const major = niceStepCm(cam.zoom, 60, cmPerUnit);
   const minor = major / (Math.round(major / cmPerUnit) % 2 === 0 || major / cmPerUnit < 1 ? 4 : 5);
   const vis = visibleDesignRect(cam, viewport);

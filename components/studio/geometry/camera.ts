@@ -1,5 +1,6 @@
 // Camera: maps design coordinates (cm, origin inside bottom-left, y up) to stage pixels (y down).
 // Kept as plain numbers so the transform is testable without Konva.
+import type { LengthUnit } from '@/shared/units';
 
 export interface Point {
   x: number;
@@ -100,6 +101,13 @@ export function unionRect(a: Rect, b: Rect): Rect {
     width: Math.max(a.x + a.width, b.x + b.width) - x,
     height: Math.max(a.y + a.height, b.y + b.height) - y,
   };
+}
+
+/** What a layer drawn across the whole view (grid, rulers) needs: the camera, the view, the unit of its steps. */
+export interface ViewLayerProps {
+  cam: Camera;
+  viewport: Viewport;
+  unit: LengthUnit;
 }
 
 /**
