@@ -2,10 +2,17 @@
 // The top bar: where you are, edit and arrange commands, zoom, snapping, units and help.
 import { memo } from 'react';
 import Link from '@/components/ui/Link';
+import { UnitButtons, type UnitQuantity } from '@/components/ui/UnitToggle';
 import { command, runCommand } from '../commands/registry';
 import { useCommandContext, useStudio } from '../hooks/useStudio';
 import { CommandButton, focusRing } from './CommandButton';
 import { Icon } from './icons';
+
+/** The toolbar's unit switches: each flips its quantity's unit through the same command as its shortcut. */
+const UNIT_SWITCHES: [UnitQuantity, string][] = [
+  ['length', 'units.length'],
+  ['temperature', 'units.temp'],
+];
 
 function Divider() {
   return <span className="mx-1 h-5 w-px shrink-0 bg-basalt-200" aria-hidden="true" />;
@@ -23,7 +30,8 @@ export const Toolbar = memo(function Toolbar({
   /** Phones open a design for viewing; this switch turns editing on and off. */
   editSwitch?: { on: boolean; onChange: (on: boolean) => void };
 }) {
-  const { store } = useCommandContext();
+  const ctx = useCommandContext();
+  const { store } = ctx;
   const zoom = useStudio(store, (s) => s.session.camera.zoom);
   const lengthUnit = useStudio(store, (s) => s.session.lengthUnit);
   const tempUnit = useStudio(store, (s) => s.session.tempUnit);
@@ -74,24 +82,15 @@ export const Toolbar = memo(function Toolbar({
         <CommandButton id="view.snapGrid" icon="grid" />
         <CommandButton id="view.snapSurfaces" icon="magnet" />
         <Divider />
-        <UnitSwitch
-          label="Length unit"
-          commandId="units.length"
-          options={[
-            ['cm', 'cm'],
-            ['in', 'in'],
-          ]}
-          value={lengthUnit}
-        />
-        <UnitSwitch
-          label="Temperature unit"
-          commandId="units.temp"
-          options={[
-            ['C', '°C'],
-            ['F', '°F'],
-          ]}
-          value={tempUnit}
-        />
+        {UNIT_SWITCHES.map(([quantity, commandId]) => (
+          <UnitButtons
+            key={quantity}
+            look="toolbar"
+            quantity={quantity}
+            value={quantity === 'length' ? lengthUnit : tempUnit}
+            onChange={() => runCommand(command(commandId), ctx)}
+          />
+        ))}
         <span className="flex-1" />
         <CommandButton id="help.shortcuts" icon="help" />
       </div>
@@ -126,38 +125,3 @@ function EditSwitch({ on, onChange }: { on: boolean; onChange: (on: boolean) => 
 }
 
 /** A two-way unit switch; either half switches to its unit. */
-function UnitSwitch({
-  label,
-  commandId,
-  options,
-  value,
-}: {
-  label: string;
-  commandId: string;
-  options: [string, string][];
-  value: string;
-}) {
-  const ctx = useCommandContext();
-  return (
-    <div
-      role="group"
-      aria-label={label}
-      className="inline-flex overflow-hidden rounded-md border border-basalt-200"
-    >
-      {options.map(([v, text]) => (
-        <button
-          key={v}
-          type="button"
-          aria-pressed={value === v}
-          data-testid={`unit-${v}`}
-          onClick={() => {
-            if (value !== v) runCommand(command(commandId), ctx);
-          }}
-          className={`h-7 px-2 text-sm ${value === v ? 'bg-basalt-800 text-white' : 'bg-white text-basalt-700 hover:bg-basalt-100'} ${focusRing}`}
-        >
-          {text}
-        </button>
-      ))}
-    </div>
-  );
-}
