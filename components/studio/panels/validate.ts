@@ -47,6 +47,20 @@ export function issueMessage(issue: z.core.$ZodIssue, kind: FieldKind, u: Displa
 
 export type Check<T> = { ok: true; value: T } | { ok: false; message: string };
 
+/** Sets `key` on `base` (undefined takes it away) and parses the result: the edited thing, or `describe`'s message. */
+function checkEdit<T>(
+  schema: z.ZodType<T>,
+  base: object,
+  key: string,
+  value: unknown,
+  describe: (issues: z.core.$ZodIssue[]) => string,
+): Check<T> {
+  const candidate: Record<string, unknown> = { ...base, [key]: value };
+  if (value === undefined) delete candidate[key];
+  const r = schema.safeParse(candidate);
+  return r.success ? { ok: true, value: r.data } : { ok: false, message: describe(r.error.issues) };
+}
+
 /** Validates an object after setting `key`; returns the first problem with that field, or with the object. */
 export function checkObjectEdit(
   object: DesignObject,
@@ -55,15 +69,10 @@ export function checkObjectEdit(
   kind: FieldKind,
   u: DisplayUnits,
 ): Check<DesignObject> {
-  const candidate: Record<string, unknown> = { ...object, [key]: value };
-  if (value === undefined) delete candidate[key];
-  const r = designObjectSchema.safeParse(candidate);
-  if (r.success) return { ok: true, value: r.data };
-  const issue = r.error.issues.find((i) => i.path[0] === key) ?? r.error.issues[0];
-  return {
-    ok: false,
-    message: issue ? issueMessage(issue, issue.path[0] === key ? kind : 'plain', u) : 'Not valid.',
-  };
+  return checkEdit(designObjectSchema, object, key, value, (issues) => {
+    const issue = issues.find((i) => i.path[0] === key) ?? issues[0];
+    return issue ? issueMessage(issue, issue.path[0] === key ? kind : 'plain', u) : 'Not valid.';
+  });
 }
 
 export function checkEnclosureEdit(
@@ -73,12 +82,9 @@ export function checkEnclosureEdit(
   kind: FieldKind,
   u: DisplayUnits,
 ): Check<Enclosure> {
-  const candidate: Record<string, unknown> = { ...enclosure, [key]: value };
-  if (value === undefined) delete candidate[key];
-  const r = enclosureSchema.safeParse(candidate);
-  if (r.success) return { ok: true, value: r.data };
-  const issue = r.error.issues[0];
-  return { ok: false, message: issue ? issueMessage(issue, kind, u) : 'Not valid.' };
+  return checkEdit(enclosureSchema, enclosure, key, value, ([issue]) =>
+    issue ? issueMessage(issue, kind, u) : 'Not valid.',
+  );
 }
 
 export function checkBackdropEdit(
