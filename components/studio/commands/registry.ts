@@ -3,7 +3,7 @@
 import * as A from '../state/actions';
 import * as B from '../state/backdropActions';
 import * as Z from '../state/depthActions';
-import { isPlaceTool, type Tool } from '../state/session';
+import { isPlaceTool, type FieldView, type Tool } from '../state/session';
 import { OBJECT_KINDS, OBJECT_TYPES } from '@/shared/object-kinds';
 import type { StudioStore } from '../state/store';
 import { canonicalShortcut, normaliseKey, type KeyLike } from './shortcuts';
@@ -63,6 +63,36 @@ function nudge(dir: 'Left' | 'Right' | 'Up' | 'Down', big: boolean): Command {
     shortcuts: [`${big ? 'Shift+' : ''}Arrow${dir}`],
     run: ({ store }) => A.nudgeSelection(store, dx * k, dy * k),
     enabled: hasSelection,
+  };
+}
+
+/** A view setting turned on or off by its command (checked while on). */
+function sessionSwitch(
+  key: 'snapGrid' | 'snapSurfaces' | 'fieldsVisible',
+  id: string,
+  group: CommandGroup,
+  label: string,
+  shortcut: string,
+): Command {
+  return {
+    id,
+    label,
+    group,
+    shortcuts: [shortcut],
+    run: ({ store }) => store.setSession((s) => ({ [key]: !s[key] })),
+    checked: ({ store }) => store.session[key],
+  };
+}
+
+/** Shows one field (and the fields, if they were hidden). */
+function showField(field: FieldView, id: string, label: string, shortcut: string): Command {
+  return {
+    id,
+    label,
+    group: 'Fields',
+    shortcuts: [shortcut],
+    run: ({ store }) => store.setSession({ field, fieldsVisible: true }),
+    checked: ({ store }) => store.session.field === field,
   };
 }
 
@@ -269,54 +299,12 @@ export const COMMANDS: readonly Command[] = [
     shortcuts: ['0'],
     run: ({ store }) => A.fitView(store),
   },
-  {
-    id: 'view.snapGrid',
-    label: 'Snap to grid',
-    group: 'View',
-    shortcuts: ['Shift+G'],
-    run: ({ store }) => store.setSession((s) => ({ snapGrid: !s.snapGrid })),
-    checked: ({ store }) => store.session.snapGrid,
-  },
-  {
-    id: 'view.snapSurfaces',
-    label: 'Snap to surfaces',
-    group: 'View',
-    shortcuts: ['Shift+S'],
-    run: ({ store }) => store.setSession((s) => ({ snapSurfaces: !s.snapSurfaces })),
-    checked: ({ store }) => store.session.snapSurfaces,
-  },
-  {
-    id: 'fields.toggle',
-    label: 'Show fields',
-    group: 'Fields',
-    shortcuts: ['Shift+F'],
-    run: ({ store }) => store.setSession((s) => ({ fieldsVisible: !s.fieldsVisible })),
-    checked: ({ store }) => store.session.fieldsVisible,
-  },
-  {
-    id: 'fields.uvb',
-    label: 'UVB field (µW/cm²)',
-    group: 'Fields',
-    shortcuts: ['1'],
-    run: ({ store }) => store.setSession({ field: 'uvb', fieldsVisible: true }),
-    checked: ({ store }) => store.session.field === 'uvb',
-  },
-  {
-    id: 'fields.uvi',
-    label: 'UV Index field',
-    group: 'Fields',
-    shortcuts: ['2'],
-    run: ({ store }) => store.setSession({ field: 'uvi', fieldsVisible: true }),
-    checked: ({ store }) => store.session.field === 'uvi',
-  },
-  {
-    id: 'fields.temp',
-    label: 'Surface temperature field',
-    group: 'Fields',
-    shortcuts: ['3'],
-    run: ({ store }) => store.setSession({ field: 'tempC', fieldsVisible: true }),
-    checked: ({ store }) => store.session.field === 'tempC',
-  },
+  sessionSwitch('snapGrid', 'view.snapGrid', 'View', 'Snap to grid', 'Shift+G'),
+  sessionSwitch('snapSurfaces', 'view.snapSurfaces', 'View', 'Snap to surfaces', 'Shift+S'),
+  sessionSwitch('fieldsVisible', 'fields.toggle', 'Fields', 'Show fields', 'Shift+F'),
+  showField('uvb', 'fields.uvb', 'UVB field (µW/cm²)', '1'),
+  showField('uvi', 'fields.uvi', 'UV Index field', '2'),
+  showField('tempC', 'fields.temp', 'Surface temperature field', '3'),
   {
     id: 'backdrop.toggle',
     label: 'Show the photo backdrop',
