@@ -7,6 +7,12 @@ export const TEMP_UNITS = ['C', 'F'] as const;
 export type LengthUnit = (typeof LENGTH_UNITS)[number];
 export type TempUnit = (typeof TEMP_UNITS)[number];
 
+/** The units one reader sees lengths and temperatures in. */
+export interface DisplayUnits {
+  length: LengthUnit;
+  temp: TempUnit;
+}
+
 export const CM_PER_IN = 2.54; // exact, by definition of the international inch
 
 export function cmToDisplay(cm: number, unit: LengthUnit): number {

@@ -1,16 +1,18 @@
 // Plain-language formatting of the engine's findings in the user's units. The engine writes its
 // messages and numbers in cm and °C, the units a design is stored in; everything the studio shows goes through here.
 import {
-  cToDisplay,
   cmToDisplay,
+  cToDisplay,
+  formatLength,
   formatNumber,
+  formatTemp,
+  lengthDecimals,
   lengthLabel,
   tempLabel,
-  type LengthUnit,
-  type TempUnit,
+  type DisplayUnits,
 } from '@/shared/units';
 
-export type FindingUnits = { length: LengthUnit; temp: TempUnit };
+export type FindingUnits = DisplayUnits;
 
 /** "baskingMeanUvi" → "Basking mean UVI". */
 export function humanKey(key: string): string {
@@ -53,9 +55,8 @@ const KEY_LABELS: Record<string, string> = {
   limitC: 'General limit for burns',
 };
 
-const temp = (c: number, u: FindingUnits) => `${formatNumber(cToDisplay(c, u.temp), 1)} ${tempLabel(u.temp)}`;
-const length = (cm: number, u: FindingUnits) =>
-  `${formatNumber(cmToDisplay(cm, u.length), u.length === 'cm' ? 1 : 2)} ${lengthLabel(u.length)}`;
+const temp = (c: number, u: FindingUnits) => formatTemp(c, u.temp);
+const length = (cm: number, u: FindingUnits) => formatLength(cm, u.length, lengthDecimals(u.length));
 
 /** What the engine's unit-less keys `targetLo`/`targetHi` measure, by finding. */
 function targetKind(findingId: string | undefined): 'temp' | 'uvb' | 'plain' {
@@ -146,6 +147,10 @@ const TEMP_IN_TEXT = new RegExp(`${NUM}(?:\\s*[–-]\\s*${NUM})?\\s*°C`, 'g');
 // "30 cm", "10–20 cm"; never the "cm" of µW/cm².
 const LENGTH_IN_TEXT = new RegExp(`${NUM}(?:\\s*[–-]\\s*${NUM})?\\s*cm(?![²\\w])`, 'g');
 
+/** "a unit", or "a–b unit" (a range shares one unit), each number shown by `f`. */
+const rangeText = (a: string, b: string | undefined, f: (s: string) => string, unit: string) =>
+  `${b === undefined ? f(a) : `${f(a)}–${f(b)}`} ${unit}`;
+
 /**
  * Rewrites the temperatures and lengths inside an engine message into the user's units
  * ("about 43.8 °C" → "about 110.8 °F"; "within 15 cm" → "within 5.91 in"). Other numbers (UVI, µW/cm²,
@@ -154,18 +159,14 @@ const LENGTH_IN_TEXT = new RegExp(`${NUM}(?:\\s*[–-]\\s*${NUM})?\\s*cm(?![²\\
 export function localiseFindingText(message: string, u: FindingUnits): string {
   let out = message;
   if (u.temp !== 'C') {
-    out = out.replace(TEMP_IN_TEXT, (_m, a: string, b: string | undefined) => {
-      const f = (s: string) => formatNumber(cToDisplay(Number(s), u.temp), 1);
-      return b === undefined ? `${f(a)} ${tempLabel(u.temp)}` : `${f(a)}–${f(b)} ${tempLabel(u.temp)}`;
-    });
+    const f = (s: string) => formatNumber(cToDisplay(Number(s), u.temp), 1);
+    out = out.replace(TEMP_IN_TEXT, (_m, a: string, b?: string) => rangeText(a, b, f, tempLabel(u.temp)));
   }
   if (u.length !== 'cm') {
-    out = out.replace(LENGTH_IN_TEXT, (_m, a: string, b: string | undefined) => {
-      const f = (s: string) => formatNumber(cmToDisplay(Number(s), u.length), 1);
-      return b === undefined
-        ? `${f(a)} ${lengthLabel(u.length)}`
-        : `${f(a)}–${f(b)} ${lengthLabel(u.length)}`;
-    });
+    const f = (s: string) => formatNumber(cmToDisplay(Number(s), u.length), 1);
+    out = out.replace(LENGTH_IN_TEXT, (_m, a: string, b?: string) =>
+      rangeText(a, b, f, lengthLabel(u.length)),
+    );
   }
   return out;
 }

@@ -2,27 +2,16 @@
 // with messages written for people and limits shown in the unit they are typing in.
 import type { z } from 'zod';
 import { backdropSchema, designObjectSchema, enclosureSchema } from '@/simulation';
-import {
-  cmToDisplay,
-  cToDisplay,
-  formatNumber,
-  lengthLabel,
-  tempLabel,
-  type LengthUnit,
-  type TempUnit,
-} from '@/shared/units';
+import { formatLength, formatNumber, formatTemp, type DisplayUnits } from '@/shared/units';
 import type { Backdrop, DesignObject, Enclosure } from '../state/types';
 
 export type FieldKind = 'length' | 'temp' | 'percent' | 'plain';
 
-export interface DisplayUnits {
-  length: LengthUnit;
-  temp: TempUnit;
-}
+export type { DisplayUnits };
 
 function limit(v: number, kind: FieldKind, u: DisplayUnits): string {
-  if (kind === 'length') return `${formatNumber(cmToDisplay(v, u.length), 2)} ${lengthLabel(u.length)}`;
-  if (kind === 'temp') return `${formatNumber(cToDisplay(v, u.temp), 1)} ${tempLabel(u.temp)}`;
+  if (kind === 'length') return formatLength(v, u.length, 2);
+  if (kind === 'temp') return formatTemp(v, u.temp);
   if (kind === 'percent') return `${formatNumber(v * 100, 0)} %`;
   return formatNumber(v, 4);
 }
