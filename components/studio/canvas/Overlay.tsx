@@ -26,6 +26,12 @@ function boundsToStage(cam: Camera, r: DRect) {
   return { x: tl.x, y: tl.y, width: r.width * cam.zoom, height: r.height * cam.zoom };
 }
 
+/** An object's bounds on the stage, `pad` px larger on every side: a frame drawn around it. */
+function outlineOf(cam: Camera, o: DesignObject, pad: number) {
+  const b = boundsToStage(cam, objectBounds(o));
+  return { x: b.x - pad, y: b.y - pad, width: b.width + 2 * pad, height: b.height + 2 * pad };
+}
+
 export function SelectionLayer({
   cam,
   objects,
@@ -37,21 +43,9 @@ export function SelectionLayer({
 }) {
   return (
     <Group listening={false}>
-      {objects.map((o) => {
-        const b = boundsToStage(cam, objectBounds(o));
-        return (
-          <Rect
-            key={o.id}
-            x={b.x - 3}
-            y={b.y - 3}
-            width={b.width + 6}
-            height={b.height + 6}
-            stroke={SELECT}
-            strokeWidth={1.5}
-            dash={[5, 3]}
-          />
-        );
-      })}
+      {objects.map((o) => (
+        <Rect key={o.id} {...outlineOf(cam, o, 3)} stroke={SELECT} strokeWidth={1.5} dash={[5, 3]} />
+      ))}
       {showHandles &&
         objects.length === 1 &&
         objectHandles(objects[0]!).map((h) => {
@@ -268,14 +262,10 @@ export function HighlightLayer({
       {shape.objectIds.map((id) => {
         const o = design.objects.find((x) => x.id === id);
         if (!o) return null;
-        const b = boundsToStage(cam, objectBounds(o));
         return (
           <Rect
             key={id}
-            x={b.x - 6}
-            y={b.y - 6}
-            width={b.width + 12}
-            height={b.height + 12}
+            {...outlineOf(cam, o, 6)}
             stroke={HIGHLIGHT}
             strokeWidth={4}
             cornerRadius={6}
