@@ -1,25 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { computeFields, contourBands, defaultThresholds } from '@/simulation';
-import { contourAnswer } from './contourProtocol';
+import { contourAnswer, contourRequest } from './contourProtocol';
 import { exampleDesign } from '../examples/exampleDesign';
 
 describe('contour worker answer', () => {
   it('gives the same bands as the engine on the full grid, for each field', () => {
     const g = computeFields(exampleDesign(), { cellCm: 2 });
     for (const field of ['uvb', 'uvi', 'tempC'] as const) {
-      const r = contourAnswer(
-        {
-          id: 1,
-          field,
-          nx: g.nx,
-          ny: g.ny,
-          cellCm: g.cellCm,
-          width: g.width,
-          height: g.height,
-          values: g[field].slice(),
-        },
-        { contourBands, defaultThresholds } as never,
-      );
+      const r = contourAnswer(contourRequest(1, field, g), { contourBands, defaultThresholds } as never);
       expect(r.kind).toBe('bands');
       if (r.kind !== 'bands') return;
       expect(r.thresholds).toEqual(defaultThresholds(field, g));

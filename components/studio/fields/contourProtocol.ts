@@ -1,6 +1,6 @@
 // Messages to the studio's contour worker: contour bands are computed off the main thread because
 // tracing them on a fine grid takes longer than a frame, and the canvas must stay responsive.
-import type { ContourBand, FieldName } from '@/simulation';
+import type { ContourBand, FieldGrid, FieldName } from '@/simulation';
 
 export interface ContourRequest {
   id: number;
@@ -12,6 +12,16 @@ export interface ContourRequest {
   height: number;
   /** The field's values (a copy, transferred). */
   values: Float32Array;
+}
+
+/** The request for one field of a computed grid: its size and a copy of its values, to transfer. */
+export function contourRequest(
+  id: number,
+  field: FieldName,
+  grid: Pick<FieldGrid, 'nx' | 'ny' | 'cellCm' | 'width' | 'height' | FieldName>,
+): ContourRequest {
+  const { nx, ny, cellCm, width, height } = grid;
+  return { id, field, nx, ny, cellCm, width, height, values: grid[field].slice() };
 }
 
 export type ContourResponse =

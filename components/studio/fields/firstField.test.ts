@@ -12,7 +12,7 @@ import { studioFirstField } from '@/shared/designs/studio-field';
 import { cellSizeFor } from '@/shared/designs/studio-cell-size';
 import { simplifyRing } from '@/shared/designs/svg-path';
 import { parseStudioView, formatStudioView, DEFAULT_STUDIO_VIEW } from '@/shared/designs/studio-view-cookie';
-import { contourAnswer } from './contourProtocol';
+import { contourAnswer, contourRequest } from './contourProtocol';
 
 /** What the studio draws once its workers answer: the engine worker's grid, then the contour worker. */
 function studioBands(design: Design, field: FieldName) {
@@ -24,19 +24,7 @@ function studioBands(design: Design, field: FieldName) {
     addMonths: 0,
   });
   if (res.kind !== 'result') throw new Error('engine failed');
-  const ans = contourAnswer(
-    {
-      id: 1,
-      field,
-      nx: res.nx,
-      ny: res.ny,
-      cellCm: res.cellCm,
-      width: res.width,
-      height: res.height,
-      values: res[field].slice(),
-    },
-    { contourBands, defaultThresholds } as never,
-  );
+  const ans = contourAnswer(contourRequest(1, field, res), { contourBands, defaultThresholds } as never);
   if (ans.kind !== 'bands') throw new Error('contours failed');
   return ans;
 }

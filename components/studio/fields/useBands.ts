@@ -6,7 +6,7 @@ import type { ContourBand, FieldGrid } from '@/simulation';
 import type { ColouredBand } from '../canvas/FieldBands';
 import type { TempUnit } from '@/shared/units';
 import type { FieldView } from '../state/session';
-import type { ContourRequest, ContourResponse } from './contourProtocol';
+import { contourRequest, type ContourResponse } from './contourProtocol';
 import { takeContourWorker } from './early';
 import { legendFor, type LegendEntry } from './legend';
 
@@ -53,18 +53,8 @@ export function useBands(
   useEffect(() => {
     const w = worker.current;
     if (!grid || !w) return;
-    const values = grid[field].slice();
-    const req: ContourRequest = {
-      id: ++seq.current,
-      field,
-      nx: grid.nx,
-      ny: grid.ny,
-      cellCm: grid.cellCm,
-      width: grid.width,
-      height: grid.height,
-      values,
-    };
-    w.postMessage(req, [values.buffer]);
+    const req = contourRequest(++seq.current, field, grid);
+    w.postMessage(req, [req.values.buffer]);
   }, [grid, field]);
 
   const current = traced && traced.field === field ? traced : null;
