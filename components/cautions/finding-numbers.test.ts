@@ -1,15 +1,18 @@
 import { describe, expect, it } from 'vitest';
 import { numberLines, sourcesFor } from './finding-numbers';
 
+/** A passed finding with only the numbers these lines are made from. */
+const passed = (id: string, numbers: Record<string, number>) => ({
+  id,
+  status: 'pass' as const,
+  title: '',
+  message: '',
+  numbers,
+});
+
 describe('finding numbers', () => {
   it('labels the numbers and joins ranges with their unit', () => {
-    const lines = numberLines({
-      id: 'hot-spot',
-      status: 'pass',
-      title: '',
-      message: '',
-      numbers: { hotC: 43.83, targetLo: 40, targetHi: 45 },
-    });
+    const lines = numberLines(passed('hot-spot', { hotC: 43.83, targetLo: 40, targetHi: 45 }));
     expect(lines).toEqual([
       { key: 'hotC', label: 'Hottest reachable surface', value: '43.8 °C' },
       { key: 'targetLo', label: 'Target on the species sheet', value: '40–45 °C' },
@@ -17,21 +20,11 @@ describe('finding numbers', () => {
   });
 
   it('shows shares as percentages and zone ranges in UV Index', () => {
-    const lines = numberLines({
-      id: 'basking-uvi',
-      status: 'pass',
-      title: '',
-      message: '',
-      numbers: { maxUvi: 4.7, zone: 4, zoneMaxLo: 4.5, zoneMaxHi: 9.5 },
-    });
+    const lines = numberLines(
+      passed('basking-uvi', { maxUvi: 4.7, zone: 4, zoneMaxLo: 4.5, zoneMaxHi: 9.5 }),
+    );
     expect(lines.map((l) => l.value)).toEqual(['4.7', '4.5–9.5 UVI']);
-    const share = numberLines({
-      id: 'uv-refuge',
-      status: 'pass',
-      title: '',
-      message: '',
-      numbers: { refugeShare: 0.44 },
-    });
+    const share = numberLines(passed('uv-refuge', { refugeShare: 0.44 }));
     expect(share[0]!.value).toBe('44 %');
   });
 

@@ -52,6 +52,19 @@ function setup() {
   return { a, server, storage, states };
 }
 
+/** The server answers again and the page is back online: the newest copy `d` is saved, the local one cleared. */
+async function expectSavedWhenBack(
+  { a, server, storage }: Pick<ReturnType<typeof setup>, 'a' | 'server' | 'storage'>,
+  d: Design,
+) {
+  server.mode = 'ok';
+  a.online();
+  await vi.advanceTimersByTimeAsync(0);
+  expect(a.state.kind).toBe('saved');
+  expect(sameDesign(server.design, d)).toBe(true);
+  expect(storage.data.size).toBe(0);
+}
+
 const moved = (d: Design, dx: number) => moveObjects(d, ['b1'], dx, 0);
 
 beforeEach(() => vi.useFakeTimers());
@@ -101,12 +114,7 @@ describe('Autosave', () => {
     d = moved(d, 1);
     a.change(d); // edits while offline stay local
     expect(readBackup(storage, 'v1')?.design).toEqual(d);
-    server.mode = 'ok';
-    a.online();
-    await vi.advanceTimersByTimeAsync(0);
-    expect(a.state.kind).toBe('saved');
-    expect(sameDesign(server.design, d)).toBe(true);
-    expect(storage.data.size).toBe(0);
+    await expectSavedWhenBack({ a, server, storage }, d);
   });
 
   it('stops on a conflict until the user chooses, then keeps mine', async () => {
@@ -188,12 +196,7 @@ describe('Autosave', () => {
       expect(server.saves).toHaveLength(1);
       expect(sameDesign(readBackup(storage, 'v1')!.design, d2)).toBe(true);
       // Signed in again elsewhere: "try again" saves the newest copy.
-      server.mode = 'ok';
-      a.online();
-      await vi.advanceTimersByTimeAsync(0);
-      expect(a.state.kind).toBe('saved');
-      expect(sameDesign(server.design, d2)).toBe(true);
-      expect(storage.data.size).toBe(0);
+      await expectSavedWhenBack({ a, server, storage }, d2);
     },
   );
 
