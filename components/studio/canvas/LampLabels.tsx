@@ -8,7 +8,7 @@ import type { Camera, Point, Rect, Viewport } from '../geometry/camera';
 import { placeLabels } from '../geometry/labels';
 import type { DesignObject, LampObject } from '../state/types';
 import { C } from './colors';
-import { lampBody, lampLabel } from './ObjectShape';
+import { lampBody, lampLabel } from '../object-kinds/lamp';
 
 const FONT_SIZE = 11;
 const LINE_HEIGHT = 1.15;

@@ -4,11 +4,11 @@
 import { useCommandContext, useStudio } from '../hooks/useStudio';
 import { updateObject } from '../state/document';
 import { kindOf } from '@/shared/object-kinds';
-import { isBox, isSegment, type DesignObject } from '../state/types';
+import type { DesignObject } from '../state/types';
+import { studioKindOf } from '../object-kinds';
 import { CommandButton } from './CommandButton';
 import { Section, TextField } from './FormFields';
-import { LampForm } from './LampForm';
-import { BoxForm, EnclosureForm, ObjectList, ProbeForm, SegmentForm } from './ShapeForms';
+import { EnclosureForm, ObjectList, ProbeForm } from './ShapeForms';
 
 function ObjectActions() {
   return (
@@ -23,6 +23,8 @@ function ObjectActions() {
 
 function ObjectInspector({ o }: { o: DesignObject }) {
   const { store } = useCommandContext();
+  // The kind's own fields come from its studio record (object-kinds/<kind>.tsx).
+  const { Form } = studioKindOf(o.type);
   return (
     <div data-testid="inspector-object" data-object-id={o.id}>
       <Section title={`${kindOf(o.type).name} · ${o.id}`}>
@@ -33,9 +35,7 @@ function ObjectInspector({ o }: { o: DesignObject }) {
           onCommit={(name) => store.edit((d) => updateObject(d, o.id, { name }))}
         />
       </Section>
-      {o.type === 'lamp' && <LampForm key={o.id} lamp={o} />}
-      {isSegment(o) && <SegmentForm key={o.id} o={o} />}
-      {isBox(o) && <BoxForm key={o.id} o={o} />}
+      <Form key={o.id} o={o} />
       <ObjectActions />
     </div>
   );

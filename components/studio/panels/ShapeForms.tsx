@@ -1,4 +1,5 @@
 'use client';
+import type { ReactNode } from 'react';
 import { barrierUvbTransmission, DEFAULT_ROOM_TEMP_C } from '@/simulation';
 import { segmentAngleDeg, segmentLength } from '../geometry/objects';
 import { formatLength, formatNumber } from '@/shared/units';
@@ -52,31 +53,38 @@ function LengthFields({
   );
 }
 
-/** The share of UVB a barrier passes; left empty, the engine's default for its kind, shown as the fallback. */
-function UvbPassedField({
+/**
+ * The share of UVB a barrier or planting passes, in a section of its own; left empty, the engine's
+ * default for its kind, shown as the fallback.
+ */
+export function UvbPassedSection({
   o,
+  title,
   label,
   hint,
-  field,
 }: {
   o: ScreenObject | GlassObject | FoliageObject;
+  title: string;
   label: string;
   hint?: string;
-  field: EditField;
 }) {
+  const { field } = useObjectEdit(o);
   return (
-    <NumberField
-      label={label}
-      optional
-      fallback={barrierUvbTransmission({ ...o, uvbTransmission: undefined })}
-      testId="field-uvbTransmission"
-      hint={hint}
-      {...field('uvbTransmission', 'percent')}
-    />
+    <Section title={title}>
+      <NumberField
+        label={label}
+        optional
+        fallback={barrierUvbTransmission({ ...o, uvbTransmission: undefined })}
+        testId="field-uvbTransmission"
+        hint={hint}
+        {...field('uvbTransmission', 'percent')}
+      />
+    </Section>
   );
 }
 
-export function SegmentForm({ o }: { o: SegmentObject }) {
+/** A segment's ends, its length and angle, then what its kind adds (`children`). */
+export function SegmentForm({ o, children }: { o: SegmentObject; children?: ReactNode }) {
   const { field, units } = useObjectEdit(o);
   return (
     <>
@@ -86,40 +94,20 @@ export function SegmentForm({ o }: { o: SegmentObject }) {
           Length {formatLength(segmentLength(o), units.length)}, angle {formatNumber(segmentAngleDeg(o), 0)}°
         </p>
       </Section>
-      {o.type === 'perch' ? (
-        <Section title="Branch">
-          <NumberField label="Thickness" testId="field-thickness" {...field('thickness', 'length')} />
-        </Section>
-      ) : (
-        <Section title="Material">
-          <UvbPassedField
-            o={o}
-            label="UVB passed"
-            hint={
-              o.type === 'screen'
-                ? 'About the open area of the mesh'
-                : 'Glass passes none; acrylic varies (some pass UVB): enter its measured share'
-            }
-            field={field}
-          />
-        </Section>
-      )}
+      {children}
     </>
   );
 }
 
-export function BoxForm({ o }: { o: BoxObject }) {
+/** A box's place and size, then what its kind adds (`children`). */
+export function BoxForm({ o, children }: { o: BoxObject; children?: ReactNode }) {
   const { field } = useObjectEdit(o);
   return (
     <>
       <Section title="Place and size">
         <LengthFields fields={BOX_PLACE} field={field} />
       </Section>
-      {o.type === 'foliage' && (
-        <Section title="Planting">
-          <UvbPassedField o={o} label="Light passed" field={field} />
-        </Section>
-      )}
+      {children}
     </>
   );
 }
