@@ -1,6 +1,7 @@
 import 'server-only';
 import { z } from 'zod';
 import { pageQuery } from '@/lib/api/pagination';
+import { patchOf } from '@/lib/api/patch';
 import { emailSchema, idSchema, optionalTextSchema, personNameSchema, textSchema } from '@/lib/api/schemas';
 
 /** Request shapes of the customer routes and forms, with messages a person can act on. */
@@ -34,10 +35,7 @@ export const createCustomerBody = z
     path: ['email'],
   });
 
-export const updateCustomerBody = z
-  .strictObject({ ...customerFields, reminderConsent: customerFields.reminderConsent.unwrap() })
-  .partial()
-  .refine((b) => Object.keys(b).length > 0, { message: 'Send at least one field to change.' });
+export const updateCustomerBody = patchOf(customerFields);
 
 /** Linking a customer to the keeper account they became. */
 export const keeperLinkBody = z.strictObject({ keeperId: idSchema('The keeper') });

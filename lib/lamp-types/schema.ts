@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { patchOf } from '@/lib/api/patch';
 import { textSchema } from '@/lib/api/text';
 import { LAMP_TECH_IDS } from '@/simulation';
 
@@ -99,26 +100,7 @@ function crossCheck(v: Shape, ctx: z.RefinementCtx) {
 export const lampTypeInputSchema = z.strictObject(fields).superRefine(crossCheck);
 export type LampTypeInput = z.output<typeof lampTypeInputSchema>;
 
-export const lampTypePatchSchema = z
-  .strictObject({
-    name: fields.name,
-    tech: fields.tech,
-    form: fields.form,
-    lengthCm: num('The tube length', 1, 1000, ' cm').nullable(),
-    uvbAt30: fields.uvbAt30,
-    uviPerUvb: fields.uviPerUvb,
-    radiantFraction: fields.radiantFraction,
-    beamDeg: fields.beamDeg,
-    reflectorGain: num('The reflector gain', 1, 10),
-    watts: fields.watts,
-    halfLifeMonths: num('The UVB half-life', 0.1, 1000, ' months').nullable(),
-    decayPoints: decayPoints.nullable(),
-    replaceAfterMonths: num('The replacement interval', 0.1, 600, ' months').nullable(),
-    notes: textSchema().trim().max(5000).nullable(),
-    sources: z.partialRecord(z.enum(LAMP_TYPE_FIELDS), textSchema().trim().max(1000)),
-  })
-  .partial()
-  .refine((p) => Object.keys(p).length > 0, 'Send at least one field to change.');
+export const lampTypePatchSchema = patchOf(fields);
 export type LampTypePatch = z.output<typeof lampTypePatchSchema>;
 
 /**

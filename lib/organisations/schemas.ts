@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { patchOf } from '@/lib/api/patch';
 import { textSchema } from '@/lib/api/text';
 
 // No server imports: the organisation settings form checks its draft with this same schema in the browser.
@@ -36,10 +37,7 @@ export const contactFields = {
 };
 
 /** The owner's change to how customers reach the shop; any field left out stays as it is. */
-export const organisationContactBody = z
-  .strictObject(contactFields)
-  .partial()
-  .refine((b) => Object.keys(b).length > 0, { message: 'Send at least one field to change.' });
+export const organisationContactBody = patchOf(contactFields);
 
 export type OrganisationContact = {
   contactPhone: string | null;

@@ -55,4 +55,20 @@ describe('species sheet input', () => {
     expect(speciesPatchSchema.safeParse({}).success).toBe(false);
     expect(speciesPatchSchema.safeParse({ uvZone: 2 }).success).toBe(true);
   });
+
+  it('a patch refuses a field with the message a new sheet gets, and fills in no defaults', () => {
+    type Parsed = { error?: { issues: { path: PropertyKey[]; message: string }[] } };
+    const messageAt = (r: Parsed, field: string) => r.error?.issues.find((i) => i.path[0] === field)?.message;
+    expect(messageAt(speciesPatchSchema.safeParse({ nightMinC: 50 }), 'nightMinC')).toBe(
+      'The night minimum must be at most 40 °C.',
+    );
+    const long = { notes: 'x'.repeat(5001) };
+    expect(messageAt(speciesPatchSchema.safeParse(long), 'notes')).toBe(
+      messageAt(speciesInputSchema.safeParse(long), 'notes'),
+    );
+    expect(messageAt(speciesPatchSchema.safeParse(long), 'notes')).toBe(
+      'Notes can be at most 5000 characters.',
+    );
+    expect(speciesPatchSchema.parse({ uvZone: 2 })).toEqual({ uvZone: 2 });
+  });
 });

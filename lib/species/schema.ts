@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { patchOf } from '@/lib/api/patch';
 import { textSchema } from '@/lib/api/text';
 
 /**
@@ -121,25 +122,7 @@ export const speciesInputSchema = z.strictObject(fields).superRefine(crossCheck)
 export type SpeciesInput = z.output<typeof speciesInputSchema>;
 
 /** PATCH: any subset of the fields; the merged sheet is checked again with `speciesInputSchema`. */
-export const speciesPatchSchema = z
-  .strictObject({
-    commonName: fields.commonName,
-    scientificName: fields.scientificName,
-    uvZone: fields.uvZone,
-    uvbTargetUw: range('The shop rule of thumb', 'µW/cm²', 0, 2000).nullable(),
-    baskingSurfaceC: fields.baskingSurfaceC,
-    warmAirC: fields.warmAirC,
-    coolAirC: fields.coolAirC,
-    nightMinC: finite('The night minimum').min(0).max(40).nullable(),
-    photoperiodH: range('The photoperiod', 'hours', 0, 24).nullable(),
-    adultLengthCm: adultLength.nullable(),
-    climbs: z.boolean({ error: 'Climbs must be yes or no.' }),
-    lowMelanin: z.boolean({ error: 'Albino or hypomelanistic must be yes or no.' }),
-    notes: textSchema().trim().max(5000, 'Notes can be at most 5000 characters.').nullable(),
-    sources: z.array(sourceSchema).max(20, 'At most 20 sources.'),
-  })
-  .partial()
-  .refine((p) => Object.keys(p).length > 0, 'Send at least one field to change.');
+export const speciesPatchSchema = patchOf(fields);
 export type SpeciesPatch = z.output<typeof speciesPatchSchema>;
 
 export type Range = { min: number; max: number };
