@@ -256,7 +256,8 @@ export class CanvasInteraction {
       case 'handle': {
         const role = handleRole(drag.start, drag.handle);
         const snapOpts = mods.alt ? { ...opts, grid: null, surfaces: false } : opts;
-        const thickness = drag.start.type === 'perch' ? drag.start.thickness : 0;
+        // An end of a kind drawn with a thickness (a branch) rests that much above the surface.
+        const thickness = 'thickness' in drag.start ? drag.start.thickness : 0;
         const { point, guides } =
           drag.handle === 'rotate'
             ? { point: d, guides: [] }
