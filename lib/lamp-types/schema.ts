@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { crossChecks } from '@/lib/api/cross-checks';
 import { patchOf } from '@/lib/api/patch';
 import { textSchema } from '@/lib/api/text';
 import { LAMP_TECH_IDS } from '@/simulation';
@@ -77,25 +78,24 @@ const fields = {
 
 type Shape = { form: 'tube' | 'bulb'; lengthCm: number | null; tech: string; uvbAt30: number };
 
-function crossCheck(v: Shape, ctx: z.RefinementCtx) {
-  if (v.form === 'tube' && v.lengthCm === null) {
-    ctx.addIssue({ code: 'custom', path: ['lengthCm'], message: 'A tube needs its length.' });
-  }
-  if (v.form === 'bulb' && v.lengthCm !== null) {
-    ctx.addIssue({
-      code: 'custom',
-      path: ['lengthCm'],
-      message: 'Only tubes have a length; leave it empty for a bulb.',
-    });
-  }
-  if ((v.tech === 'halogen' || v.tech === 'incandescent' || v.tech === 'ceramic') && v.uvbAt30 > 0) {
-    ctx.addIssue({
-      code: 'custom',
-      path: ['uvbAt30'],
-      message: 'Halogen, incandescent and ceramic lamps give no UVB: set the UVB at 30 cm to 0.',
-    });
-  }
-}
+const crossCheck = crossChecks<Shape>([
+  {
+    path: ['lengthCm'],
+    message: 'A tube needs its length.',
+    fails: (v) => v.form === 'tube' && v.lengthCm === null,
+  },
+  {
+    path: ['lengthCm'],
+    message: 'Only tubes have a length; leave it empty for a bulb.',
+    fails: (v) => v.form === 'bulb' && v.lengthCm !== null,
+  },
+  {
+    path: ['uvbAt30'],
+    message: 'Halogen, incandescent and ceramic lamps give no UVB: set the UVB at 30 cm to 0.',
+    fails: (v) =>
+      (v.tech === 'halogen' || v.tech === 'incandescent' || v.tech === 'ceramic') && v.uvbAt30 > 0,
+  },
+]);
 
 export const lampTypeInputSchema = z.strictObject(fields).superRefine(crossCheck);
 export type LampTypeInput = z.output<typeof lampTypeInputSchema>;

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { crossChecks } from '@/lib/api/cross-checks';
 import { patchOf } from '@/lib/api/patch';
 import { textSchema } from '@/lib/api/text';
 
@@ -101,22 +102,18 @@ type SheetShape = {
 };
 
 /** Checks across fields that a reader would otherwise trip over. */
-function crossCheck(s: SheetShape, ctx: z.RefinementCtx) {
-  if (s.coolAirC.min > s.warmAirC.max) {
-    ctx.addIssue({
-      code: 'custom',
-      path: ['coolAirC', 'min'],
-      message: 'The cool side cannot be warmer than the whole warm side range.',
-    });
-  }
-  if (s.nightMinC !== null && s.nightMinC > s.warmAirC.max) {
-    ctx.addIssue({
-      code: 'custom',
-      path: ['nightMinC'],
-      message: 'The night minimum is above the warm side air range.',
-    });
-  }
-}
+const crossCheck = crossChecks<SheetShape>([
+  {
+    path: ['coolAirC', 'min'],
+    message: 'The cool side cannot be warmer than the whole warm side range.',
+    fails: (s) => s.coolAirC.min > s.warmAirC.max,
+  },
+  {
+    path: ['nightMinC'],
+    message: 'The night minimum is above the warm side air range.',
+    fails: (s) => s.nightMinC !== null && s.nightMinC > s.warmAirC.max,
+  },
+]);
 
 export const speciesInputSchema = z.strictObject(fields).superRefine(crossCheck);
 export type SpeciesInput = z.output<typeof speciesInputSchema>;
