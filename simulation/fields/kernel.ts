@@ -57,6 +57,11 @@ export class RowData {
    */
   gu0 = 1;
   gi0 = 1;
+  /**
+   * The caller found every cell it asks for inside each act barrier's (qa, qb) and outside its (fa, fb)
+   * (a row sweep's pieces), so evalSpan skips both tests; false after prepareRow.
+   */
+  inRange = false;
   occ: Int32Array;
   qa: Float64Array;
   qb: Float64Array;
@@ -161,6 +166,7 @@ export function prepareRow(
   row.nAct = 0;
   row.gu0 = 1;
   row.gi0 = 1;
+  row.inRange = false;
   if (!(h > 0)) return false;
   // In the plane (dz = 0) these are exactly the two-dimensional values, so such designs keep their bits.
   const dz2 = lamp.dz2;
@@ -278,6 +284,7 @@ export function evalSpan(
   const scale = row.scale;
   const gu0 = row.gu0;
   const gi0 = row.gi0;
+  const inRange = row.inRange;
   const nAct = row.nAct;
   const A = row.A;
   const B = row.B;
@@ -321,13 +328,15 @@ export function evalSpan(
     let n = 0;
     for (let t = 0; t < nAct; t++) {
       const c = act[t]!;
-      if (qx <= qa[c]! || qx >= qb[c]!) continue;
       const k = occ[c]!;
-      if (qx > fa[c]! && qx < fb[c]!) {
-        gu *= tUv[k]!;
-        gi *= tIr[k]!;
-        if (gu === 0 && gi === 0) continue cells;
-        continue;
+      if (!inRange) {
+        if (qx <= qa[c]! || qx >= qb[c]!) continue;
+        if (qx > fa[c]! && qx < fb[c]!) {
+          gu *= tUv[k]!;
+          gi *= tIr[k]!;
+          if (gu === 0 && gi === 0) continue cells;
+          continue;
+        }
       }
       const v0 = vStart[c]!;
       const v1 = v0 + vCount[c]!;

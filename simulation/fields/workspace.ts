@@ -138,13 +138,13 @@ export function sweepLampRow(
 
 /**
  * Evaluates cells i0..i1 of a prepared row in order into ws.rowUv and ws.rowIr. Each barrier's range of
- * Q.x is turned into a range of cells (one cell wider on each side, so rounding never drops a cell the
- * exact test in evalCell would keep), and so is its range where it surely hides the whole lamp (found with
- * evalCell's own test, cell by cell at its ends). The row is cut where any of these ranges starts or ends;
- * in each piece the barriers hiding the whole lamp are multiplied in once (in barrier order, so a cell's
- * product does not depend on where the row was cut) and evalCell looks only at the others whose ranges
- * cover the piece. A cell's arithmetic depends only on the cell, never on the cuts: a partial refill gives
- * the same bits as a full one.
+ * Q.x is turned into the range of cells inside it, and so is its range where it surely hides the whole
+ * lamp, both found with evalCell's own tests (a rounded guess, corrected cell by cell at its ends). The row
+ * is cut where any of these ranges starts or ends; in each piece the barriers hiding the whole lamp are
+ * multiplied in once (in barrier order, so a cell's product does not depend on where the row was cut) and
+ * evalSpan looks only at the others whose ranges cover the piece, without testing those ranges again per
+ * cell. A cell's arithmetic depends only on the cell, never on the cuts: a partial refill gives the same
+ * bits as a full one.
  */
 function sweepRow(ws: Workspace, lamp: LampGeom, row: RowData, i0: number, i1: number, cell: number) {
   const s = ws.scratch;
@@ -160,10 +160,10 @@ function sweepRow(ws: Workspace, lamp: LampGeom, row: RowData, i0: number, i1: n
   cuts[m++] = i0;
   cuts[m++] = i1 + 1;
   for (let c = 0; c < n; c++) {
-    const a = Math.floor(row.qa[c]! / cell - 0.5);
-    const b = Math.ceil(row.qb[c]! / cell - 0.5);
-    const f = a < i0 ? i0 : a > i1 + 1 ? i1 + 1 : a;
-    const l = b > i1 ? i1 : b < i0 - 1 ? i0 - 1 : b;
+    // The cells with qa < Q.x < qb, by the test evalSpan makes, so inside a piece every barrier left for
+    // it has the cell in range and does not hide the whole lamp there (RowData.inRange).
+    const f = firstAbove(row.qa[c]!, cell, i0, i1);
+    const l = lastBelow(row.qb[c]!, cell, f, i1);
     first[c] = f;
     last[c] = l;
     if (f > l) {
@@ -173,7 +173,7 @@ function sweepRow(ws: Workspace, lamp: LampGeom, row: RowData, i0: number, i1: n
     }
     cuts[m++] = f;
     cuts[m++] = l + 1;
-    // The cells with fa < Q.x < fb, by the test evalCell makes (a rounded guess, then corrected).
+    // The cells with fa < Q.x < fb, by the same test.
     const fa = row.fa[c]!;
     const fb = row.fb[c]!;
     if (!(fa < fb)) {
@@ -181,14 +181,8 @@ function sweepRow(ws: Workspace, lamp: LampGeom, row: RowData, i0: number, i1: n
       fLast[c] = 0;
       continue;
     }
-    const ga = Math.floor(fa / cell - 0.5);
-    let g0 = ga < f ? f : ga > l + 1 ? l + 1 : ga;
-    while (g0 > f && (g0 - 0.5) * cell > fa) g0--;
-    while (g0 <= l && !((g0 + 0.5) * cell > fa)) g0++;
-    const gb = Math.ceil(fb / cell - 0.5);
-    let g1 = gb > l ? l : gb < g0 - 1 ? g0 - 1 : gb;
-    while (g1 < l && (g1 + 1.5) * cell < fb) g1++;
-    while (g1 >= g0 && !((g1 + 0.5) * cell < fb)) g1--;
+    const g0 = firstAbove(fa, cell, f, l);
+    const g1 = lastBelow(fb, cell, g0, l);
     fFirst[c] = g0;
     fLast[c] = g1;
     if (g0 <= g1) {
@@ -215,9 +209,12 @@ function sweepRow(ws: Workspace, lamp: LampGeom, row: RowData, i0: number, i1: n
       } else if (first[c]! <= from && last[c]! >= to - 1) act[na++] = c;
     }
     if (gu === 0 && gi === 0) {
-      // Fully hidden: what evalCell returns once its product reaches zero.
-      ru.fill(0, from, to);
-      ri.fill(0, from, to);
+      // Fully hidden: what evalCell returns once its product reaches zero (a loop: most pieces are a few
+      // cells, shorter than a fill call's own cost).
+      for (let i = from; i < to; i++) {
+        ru[i] = 0;
+        ri[i] = 0;
+      }
       continue;
     }
     if (na === 0) {
@@ -228,12 +225,35 @@ function sweepRow(ws: Workspace, lamp: LampGeom, row: RowData, i0: number, i1: n
     row.nAct = na;
     row.gu0 = gu;
     row.gi0 = gi;
+    row.inRange = true;
     evalSpan(lamp, row, from, to, cell, 0.5, ru, ri, s);
   }
+  row.inRange = false;
   row.nAct = n;
   row.gu0 = 1;
   row.gi0 = 1;
   for (let c = 0; c < n; c++) act[c] = c;
+}
+
+/**
+ * The first cell i of from..to with (i + 0.5)·cell > x (to + 1 when none): a rounded guess, then corrected
+ * with that very test.
+ */
+function firstAbove(x: number, cell: number, from: number, to: number): number {
+  const a = Math.floor(x / cell - 0.5);
+  let i = a < from ? from : a > to + 1 ? to + 1 : a;
+  while (i > from && (i - 0.5) * cell > x) i--;
+  while (i <= to && !((i + 0.5) * cell > x)) i++;
+  return i;
+}
+
+/** The last cell i of from..to with (i + 0.5)·cell < x (from − 1 when none), as firstAbove. */
+function lastBelow(x: number, cell: number, from: number, to: number): number {
+  const b = Math.ceil(x / cell - 0.5);
+  let i = b > to ? to : b < from - 1 ? from - 1 : b;
+  while (i < to && (i + 1.5) * cell < x) i++;
+  while (i >= from && !((i + 0.5) * cell < x)) i--;
+  return i;
 }
 
 /**
