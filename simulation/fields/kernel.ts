@@ -99,23 +99,22 @@ export class Scratch {
   ty = new Float64Array(MAX_CLIPPED);
   lo: Float64Array;
   hi: Float64Array;
-  tu: Float64Array;
-  ti: Float64Array;
-  /** The row's barrier (RowData index) that hid each of a cell's partly hidden pieces. */
-  pc: Int32Array;
+  /**
+   * Each of a cell's partly hidden pieces: 4 × the row's barrier (RowData index) that hid it, plus 1 when its
+   * lower end lies inside the tube and 2 when its upper end does.
+   */
+  pk: Int32Array;
   /**
    * A tube's visible runs (evalSpan): the interval end each run ends at (2·piece for a piece's lower
    * end, 2·piece + 1 for its upper end, −1 for the tube's end s2) and the shares of UVB and infrared it
    * passes. They describe the order of the ends, not their positions, so the next cell can use them again
-   * while that order holds (kept for: the barriers of each piece, which ends lie inside the tube, the
-   * sorted inner ends `ord`).
+   * while that order holds (kept for: each piece's key `kKey`, as pk, and the sorted inner ends `ord`).
    */
   rRef: Int32Array;
   rU: Float64Array;
   rI: Float64Array;
   ord: Int32Array;
-  kPc: Int32Array;
-  kIn: Int32Array;
+  kKey: Int32Array;
   /** Output of evalCell. */
   uv = 0;
   ir = 0;
@@ -126,15 +125,12 @@ export class Scratch {
     const c = Math.max(1, capacity);
     this.lo = new Float64Array(c);
     this.hi = new Float64Array(c);
-    this.tu = new Float64Array(c);
-    this.ti = new Float64Array(c);
-    this.pc = new Int32Array(c);
+    this.pk = new Int32Array(c);
     this.rRef = new Int32Array(2 * c + 2);
     this.rU = new Float64Array(2 * c + 2);
     this.rI = new Float64Array(2 * c + 2);
     this.ord = new Int32Array(2 * c + 2);
-    this.kPc = new Int32Array(c);
-    this.kIn = new Int32Array(c);
+    this.kKey = new Int32Array(c);
   }
 }
 
@@ -300,15 +296,12 @@ export function evalSpan(
   const tIr = lamp.tIr;
   const sLo = s.lo;
   const sHi = s.hi;
-  const sTu = s.tu;
-  const sTi = s.ti;
-  const pc = s.pc;
+  const pk = s.pk;
   const rRef = s.rRef;
   const rU = s.rU;
   const rI = s.rI;
   const ord = s.ord;
-  const kPc = s.kPc;
-  const kIn = s.kIn;
+  const kKey = s.kKey;
   // The runs in rRef, rU, rI were made for kN pieces with kM inner ends in ord (kN < 0: none kept).
   let kN = -1;
   let kM = 0;
@@ -342,10 +335,11 @@ export function evalSpan(
       const v1 = v0 + vCount[c]!;
       let lo = Infinity;
       let hi = -Infinity;
+      // Math.min and max compile without branches: which corner is lowest changes along the row.
       for (let v = v0; v < v1; v++) {
         const x = A[v]! + B[v]! * qx;
-        if (x < lo) lo = x;
-        if (x > hi) hi = x;
+        lo = Math.min(lo, x);
+        hi = Math.max(hi, x);
       }
       if (!tube) {
         if (lo < s1 && s1 < hi) {
@@ -356,15 +350,14 @@ export function evalSpan(
         if (lo < s1) lo = s1;
         if (hi > s2) hi = s2;
         if (!(hi > lo)) continue;
-        if (lo <= s1 && hi >= s2) {
+        const inner = (lo > s1 ? 1 : 0) | (hi < s2 ? 2 : 0);
+        if (inner === 0) {
           gu *= tUv[k]!;
           gi *= tIr[k]!;
         } else {
           sLo[n] = lo;
           sHi[n] = hi;
-          sTu[n] = tUv[k]!;
-          sTi[n] = tIr[k]!;
-          pc[n] = c;
+          pk[n] = 4 * c + inner;
           n++;
         }
       }
@@ -395,8 +388,9 @@ export function evalSpan(
       const gHi = hi < s2 ? G(hi - qx, d) : g2;
       const open = gLo - g1 + (g2 - gHi);
       const hidden = gHi - gLo;
-      uv[i] = uvI * (open + sTu[0]! * hidden) * scale * gu;
-      ir[i] = irI * (open + sTi[0]! * hidden) * scale * gi;
+      const k = occ[pk[0]! >> 2]!;
+      uv[i] = uvI * (open + tUv[k]! * hidden) * scale * gu;
+      ir[i] = irI * (open + tIr[k]! * hidden) * scale * gi;
       continue;
     }
     // Sweep the visible pieces between the tube ends and the interval ends. Every interval lies within
@@ -411,10 +405,7 @@ export function evalSpan(
     // piece's midpoint then lies strictly inside it, so which intervals cover it follows from the order
     // alone, and the runs are exactly those the sweep below would make). Only positions are new per cell.
     let same = n === kN;
-    for (let c = 0; same && c < n; c++) {
-      const inner = (sLo[c]! > s1 ? 1 : 0) | (sHi[c]! < s2 ? 2 : 0);
-      if (pc[c] !== kPc[c] || inner !== kIn[c]) same = false;
-    }
+    for (let c = 0; same && c < n; c++) if (pk[c] !== kKey[c]) same = false;
     if (same) {
       let x0 = s1;
       for (let a = 0; a < kM; a++) {
@@ -431,12 +422,10 @@ export function evalSpan(
     if (!same) {
       let m = 0;
       for (let c = 0; c < n; c++) {
-        const inLo = sLo[c]! > s1;
-        const inHi = sHi[c]! < s2;
-        if (inLo) ord[m++] = 2 * c;
-        if (inHi) ord[m++] = 2 * c + 1;
-        kPc[c] = pc[c]!;
-        kIn[c] = (inLo ? 1 : 0) | (inHi ? 2 : 0);
+        const key = pk[c]!;
+        if ((key & 1) !== 0) ord[m++] = 2 * c;
+        if ((key & 2) !== 0) ord[m++] = 2 * c + 1;
+        kKey[c] = key;
       }
       // Insertion sort of the ends by position (two to eight as a rule).
       for (let a = 1; a < m; a++) {
@@ -464,8 +453,9 @@ export function evalSpan(
         let pi = 1;
         for (let c = 0; c < n; c++) {
           if (sLo[c]! <= mid && mid <= sHi[c]!) {
-            pu *= sTu[c]!;
-            pi *= sTi[c]!;
+            const k = occ[pk[c]! >> 2]!;
+            pu *= tUv[k]!;
+            pi *= tIr[k]!;
           }
         }
         if (nr > 0 && rU[nr - 1] === pu && rI[nr - 1] === pi) {
