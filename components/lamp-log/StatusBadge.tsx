@@ -12,9 +12,7 @@ const ICON: Record<Status, string> = {
 
 export function StatusBadge({ status, label }: { status: Status; label: string }) {
   return (
-    <span
-      className={`inline-flex items-center gap-1 whitespace-nowrap rounded-full px-2 py-0.5 text-caption font-semibold ring-1 ring-inset ${STATUS_STYLE[status]}`}
-    >
+    <span className={`status-badge ${STATUS_STYLE[status]}`}>
       <span aria-hidden="true">{ICON[status]}</span>
       {label}
     </span>

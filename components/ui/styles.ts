@@ -1,6 +1,7 @@
 /** Class names shared by the app's screens, so controls look and focus alike everywhere. */
-const focus =
-  'focus-visible:outline focus-visible:outline-2 focus-visible:outline-offset-2 focus-visible:outline-sky-600';
+
+/** The keyboard focus ring (outline, offset, sky colour): one class in app/globals.css. */
+const focus = 'focus-ring';
 
 export const button = {
   primary: `inline-flex items-center justify-center gap-1.5 rounded-md bg-moss-600 px-4 py-2 text-body font-medium text-white hover:bg-moss-700 disabled:cursor-not-allowed disabled:opacity-60 ${focus}`,
@@ -12,7 +13,8 @@ export const button = {
 
 export const input = `block w-full rounded-md border border-basalt-300 bg-white px-3 py-2 text-body text-basalt-900 placeholder:text-basalt-400 aria-[invalid=true]:border-ember-500 ${focus}`;
 
-export const link = `font-medium text-moss-700 underline decoration-moss-300 underline-offset-2 hover:text-moss-800 hover:decoration-moss-600 ${focus} rounded-sm`;
+/** A text link: its utilities are gathered in one class in app/globals.css (lists repeat it in every row). */
+export const link = 'app-link';
 
 export const card = 'rounded-lg border border-basalt-200 bg-white shadow-sm';
 
