@@ -37,14 +37,15 @@ export default async function LampLogPage({ searchParams }: SearchParamsProps) {
   const query = parsed.success ? parsed.data : lampListQuery.parse({ organisationId: orgId });
   const { keeper, ...rest } = query;
   const keeperId = isKeeper ? user.id : keeper;
-  const [firstPage, keeperShown, enclosure] = await Promise.all([
+  // Asked together: each is a round trip to the database, and none needs another's answer.
+  const [firstPage, keeperShown, enclosure, example] = await Promise.all([
     listLamps({ ...rest, keeperId }),
     // Only the keeper the address filters by: the filter searches the others as one types.
     seesAll && keeper ? memberName(orgId, keeper, 'keeper') : Promise.resolve(null),
     query.enclosure ? filteredEnclosure(orgId, query.enclosure, isKeeper ? user.id : undefined) : null,
+    isExampleData(orgId),
   ]);
   const { counts } = firstPage;
-  const example = await isExampleData(orgId);
   const techs = LAMP_TECH_IDS.map((id) => ({ id, label: LAMP_TECHS[id].label }));
   const unfiltered = !view.q && Object.keys(view.filters ?? {}).length === 0;
 
