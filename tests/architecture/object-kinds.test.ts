@@ -1,4 +1,4 @@
-import { readdirSync, readFileSync } from 'node:fs';
+import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { OBJECT_TYPES } from '@/shared/object-kinds';
@@ -66,5 +66,59 @@ describe('one record per object kind', () => {
       .filter((f) => !HOMES.some((h) => f.startsWith(h)) && !(f in OTHER_MEANINGS))
       .flatMap((f) => kindListings(f, readFileSync(f, 'utf8')));
     expect(found).toEqual([]);
+  });
+});
+
+/**
+ * The studio's records import panels (the inspector's forms), so a module those panels reach must not
+ * import the studio registry back: the bundle would then read a record before its module has run, and
+ * the studio page fails to load ("cannot access … before initialization") though every unit test passes.
+ */
+const STUDIO_RECORDS = 'components/studio/object-kinds/';
+const REGISTRY_IMPORT = /from '(?:@\/components\/studio|\.\.?(?:\/\.\.)*)\/object-kinds(?:\/index)?'/;
+
+function resolveImport(from: string, spec: string): string | null {
+  const base = spec.startsWith('@/')
+    ? spec.slice(2)
+    : spec.startsWith('.')
+      ? path.join(path.dirname(from), spec)
+      : null;
+  if (base === null) return null;
+  const found = ['.ts', '.tsx', '/index.ts', '/index.tsx'].map((e) => base + e).find((f) => existsSync(f));
+  return found ? found.split(path.sep).join('/') : null;
+}
+
+/** Every module the given ones load when they run (type-only imports are erased, so they do not count). */
+export function runtimeImports(start: string[], read: (f: string) => string): Set<string> {
+  const seen = new Set<string>();
+  const todo = [...start];
+  while (todo.length) {
+    const f = todo.pop()!;
+    if (seen.has(f)) continue;
+    seen.add(f);
+    for (const m of read(f).matchAll(/^(?:import|export)\s+(?!type\b)[^;]*?from\s+'([^']+)'/gms)) {
+      const r = resolveImport(f, m[1]!);
+      if (r) todo.push(r);
+    }
+  }
+  return seen;
+}
+
+describe('the studio records load without a cycle', () => {
+  const read = (f: string) => readFileSync(f, 'utf8');
+  const records = readdirSync(STUDIO_RECORDS)
+    .filter((f) => /\.tsx?$/.test(f) && !/^index\.|\.test\./.test(f))
+    .map((f) => STUDIO_RECORDS + f);
+
+  it('finds a planted panel that imports the registry', () => {
+    expect(REGISTRY_IMPORT.test("import { studioKindOf } from '../object-kinds';")).toBe(true);
+    expect(REGISTRY_IMPORT.test("import { lampBody } from '../object-kinds/lamp';")).toBe(false);
+  });
+
+  it('no module a record loads imports the studio registry', () => {
+    const back = [...runtimeImports(records, read)].filter(
+      (f) => !f.startsWith(STUDIO_RECORDS) && REGISTRY_IMPORT.test(read(f)),
+    );
+    expect(back).toEqual([]);
   });
 });

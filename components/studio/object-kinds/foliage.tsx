@@ -35,6 +35,7 @@ export const foliage: StudioKind<'foliage'> = {
       />
     );
   },
+  icon: <path d="M12 21V9M12 13c-4 0-6-3-6-6 3 0 6 2 6 6zM12 11c0-4 3-6 6-6 0 3-2 6-6 6zM8 21h8" />,
   Form: ({ o }) => (
     <BoxForm o={o}>
       <UvbPassedSection o={o} title="Planting" label="Light passed" />

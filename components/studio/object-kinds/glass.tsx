@@ -15,6 +15,12 @@ export const glass: StudioKind<'glass'> = {
       </Group>
     );
   },
+  icon: (
+    <>
+      <rect x="9" y="3" width="6" height="18" rx="1" />
+      <path d="M11 6l2-2M11 10l2-2" />
+    </>
+  ),
   Form: ({ o }) => (
     <SegmentForm o={o}>
       <UvbPassedSection

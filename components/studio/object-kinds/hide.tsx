@@ -36,5 +36,11 @@ export const hide: StudioKind<'hide'> = {
       </BoxBody>
     );
   },
+  icon: (
+    <>
+      <path d="M3 20V9a3 3 0 013-3h12a3 3 0 013 3v11z" />
+      <path d="M9 20v-4a3 3 0 016 0v4" />
+    </>
+  ),
   Form: ({ o }) => <BoxForm o={o} />,
 };

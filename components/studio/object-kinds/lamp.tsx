@@ -134,5 +134,11 @@ function LampShape({ o, cam }: { o: LampObject; cam: Camera }) {
 
 export const lamp: StudioKind<'lamp'> = {
   Shape: LampShape,
+  icon: (
+    <>
+      <rect x="3" y="5" width="18" height="5" rx="2.5" />
+      <path d="M7 14l-2 5M12 14v5M17 14l2 5" />
+    </>
+  ),
   Form: ({ o }) => <LampForm lamp={o} />,
 };

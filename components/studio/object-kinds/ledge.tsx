@@ -21,5 +21,6 @@ export const ledge: StudioKind<'ledge'> = {
       </BoxBody>
     );
   },
+  icon: <path d="M3 20h18v-6l-4-3H7l-4 3z" />,
   Form: ({ o }) => <BoxForm o={o} />,
 };

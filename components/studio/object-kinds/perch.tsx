@@ -36,6 +36,7 @@ export const perch: StudioKind<'perch'> = {
       </Group>
     );
   },
+  icon: <path d="M3 18L21 7" strokeWidth="4" strokeLinecap="round" />,
   Form: ({ o }) => (
     <SegmentForm o={o}>
       <BranchSection o={o} />

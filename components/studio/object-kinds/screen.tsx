@@ -40,6 +40,7 @@ export const screen: StudioKind<'screen'> = {
       />
     );
   },
+  icon: <path d="M3 8h18M3 12h18M6 6v8M10 6v8M14 6v8M18 6v8" />,
   Form: ({ o }) => (
     <SegmentForm o={o}>
       <UvbPassedSection o={o} title="Material" label="UVB passed" hint="About the open area of the mesh" />

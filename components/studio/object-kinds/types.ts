@@ -11,6 +11,8 @@ export interface StudioKind<K extends ObjectType> {
    * events: hit testing is the canvas's (interaction.ts), from the kind's form.
    */
   Shape(props: { o: ObjectOf<K>; cam: Camera }): ReactNode;
+  /** Its palette icon: strokes on the icons' 24-unit grid (panels/icons.tsx draws the frame). */
+  icon: ReactNode;
   /** Its fields in the inspector, below the name every kind has. */
   Form(props: { o: ObjectOf<K> }): ReactNode;
 }

@@ -2,7 +2,7 @@
 // Tool palette: pick a tool (click or its key), or drag an object kind onto the canvas. A column of
 // named tools on wide screens; a compact bar of icons above the canvas on tablets and phones, where a
 // view-only studio leaves out the tools that add objects.
-import { memo } from 'react';
+import { memo, type ReactNode } from 'react';
 import { command, isEnabled, runCommand } from '../commands/registry';
 import { PALETTE_DRAG_TYPE } from '../canvas/StudioCanvas';
 import { isPlaceTool, type Tool } from '../state/session';
@@ -11,8 +11,12 @@ import { useCommandContext, useStudio } from '../hooks/useStudio';
 import { focusRing } from './CommandButton';
 import { Icon, type IconName } from './icons';
 import { OBJECT_KINDS, OBJECT_TYPES } from '@/shared/object-kinds';
+import { studioKindOf } from '../object-kinds';
 
-const GROUPS: { label: string; tools: { tool: Tool; icon: IconName; hint: string }[] }[] = [
+/** A tool's button: its icon by name, or an object kind's own glyph from its studio record. */
+type PaletteTool = { tool: Tool; hint: string } & ({ icon: IconName } | { glyph: ReactNode });
+
+const GROUPS: { label: string; tools: PaletteTool[] }[] = [
   {
     label: 'Work',
     tools: [
@@ -26,8 +30,12 @@ const GROUPS: { label: string; tools: { tool: Tool; icon: IconName; hint: string
   },
   {
     label: 'Objects',
-    // One button a kind of object, its icon named as the kind; the hint is the kind's record's.
-    tools: OBJECT_TYPES.map((t) => ({ tool: t, icon: t, hint: OBJECT_KINDS[t].tool.hint })),
+    // One button a kind of object: its icon from its studio record, its hint from its shared record.
+    tools: OBJECT_TYPES.map((t) => ({
+      tool: t,
+      glyph: studioKindOf(t).icon,
+      hint: OBJECT_KINDS[t].tool.hint,
+    })),
   },
   {
     label: 'Measure',
@@ -90,7 +98,11 @@ export const Palette = memo(function Palette() {
                       active ? 'bg-moss-100 text-moss-900' : 'text-basalt-800 hover:bg-basalt-100'
                     } disabled:cursor-not-allowed disabled:opacity-40 ${focusRing}`}
                   >
-                    <Icon name={t.icon} className="h-5 w-5 shrink-0" />
+                    {'icon' in t ? (
+                      <Icon name={t.icon} className="h-5 w-5 shrink-0" />
+                    ) : (
+                      <Icon glyph={t.glyph} className="h-5 w-5 shrink-0" />
+                    )}
                     <span className="sr-only flex-1 truncate lg:not-sr-only">
                       {c.label.replace(' (mesh)', '')}
                     </span>

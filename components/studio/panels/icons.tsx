@@ -1,4 +1,6 @@
-// Small line icons drawn for Baskwell's studio (24-unit grid, stroke = currentColor).
+// Small line icons drawn for Baskwell's studio (24-unit grid, stroke = currentColor). An object kind's
+// icon is in its studio record and drawn here as a `glyph`; this module does not import the records,
+// which import panels that draw icons.
 import type { ReactNode } from 'react';
 
 const P: Record<string, ReactNode> = {
@@ -6,28 +8,6 @@ const P: Record<string, ReactNode> = {
   pan: (
     <path d="M12 3v18M3 12h18M12 3l-3 3M12 3l3 3M12 21l-3-3M12 21l3-3M3 12l3-3M3 12l3 3M21 12l-3-3M21 12l-3 3" />
   ),
-  lamp: (
-    <>
-      <rect x="3" y="5" width="18" height="5" rx="2.5" />
-      <path d="M7 14l-2 5M12 14v5M17 14l2 5" />
-    </>
-  ),
-  screen: <path d="M3 8h18M3 12h18M6 6v8M10 6v8M14 6v8M18 6v8" />,
-  glass: (
-    <>
-      <rect x="9" y="3" width="6" height="18" rx="1" />
-      <path d="M11 6l2-2M11 10l2-2" />
-    </>
-  ),
-  perch: <path d="M3 18L21 7" strokeWidth="4" strokeLinecap="round" />,
-  ledge: <path d="M3 20h18v-6l-4-3H7l-4 3z" />,
-  hide: (
-    <>
-      <path d="M3 20V9a3 3 0 013-3h12a3 3 0 013 3v11z" />
-      <path d="M9 20v-4a3 3 0 016 0v4" />
-    </>
-  ),
-  foliage: <path d="M12 21V9M12 13c-4 0-6-3-6-6 3 0 6 2 6 6zM12 11c0-4 3-6 6-6 0 3-2 6-6 6zM8 21h8" />,
   probe: (
     <>
       <path d="M12 3l3 6-3 12-3-12z" />
@@ -73,7 +53,14 @@ const P: Record<string, ReactNode> = {
 
 export type IconName = keyof typeof P;
 
-export function Icon({ name, className = 'h-5 w-5' }: { name: IconName; className?: string }) {
+/** A named icon, or `glyph`: strokes of its own on the same grid (an object kind's, from its record). */
+export function Icon({
+  name,
+  glyph,
+  className = 'h-5 w-5',
+}: ({ name: IconName; glyph?: undefined } | { glyph: ReactNode; name?: undefined }) & {
+  className?: string;
+}) {
   return (
     <svg
       viewBox="0 0 24 24"
@@ -86,7 +73,7 @@ export function Icon({ name, className = 'h-5 w-5' }: { name: IconName; classNam
       aria-hidden="true"
       focusable="false"
     >
-      {P[name]}
+      {name ? P[name] : glyph}
     </svg>
   );
 }
