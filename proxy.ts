@@ -1,7 +1,7 @@
 import { NextResponse, type NextRequest } from 'next/server';
 import { hasControlCharacter } from '@/lib/auth/return-to';
 import { contentSecurityPolicy, makeNonce } from '@/lib/security/csp';
-import { heldSharePath } from '@/lib/variants/share-html-path';
+import { heldShareServer, heldShareToken } from '@/lib/variants/share-html-path';
 
 /** Query parameters that name a page to return to: a control character in one is an attack, not a typo. */
 const RETURN_PARAMS = ['callbackUrl', 'returnTo'];
@@ -13,10 +13,11 @@ const RETURN_PARAMS = ['callbackUrl', 'returnTo'];
  * A return address with a control character answers 400 here, before next-auth would fail to put it in
  * a cookie (a 500) or a browser would strip it into another site's address. Only headers and that
  * check: authorization is never done here (every route and page checks access itself).
- * A browser's visit of a share page goes to the route that serves its held HTML (with this nonce), which
- * checks the link itself like the page does (lib/variants/share-html-path, app/s/[token]/held).
+ * A browser's visit of a share page is answered with its held HTML (with this nonce) by the held route's
+ * server, which checks the link itself like the page does (lib/variants/share-html-path,
+ * app/s/[token]/held): here, where the request lands, once that route is loaded, else by a rewrite to it.
  */
-export function proxy(request: NextRequest) {
+export async function proxy(request: NextRequest): Promise<Response> {
   const params = request.nextUrl.searchParams;
   if (RETURN_PARAMS.some((name) => params.getAll(name).some(hasControlCharacter))) {
     const message = 'The return address (callbackUrl) is not valid.';
@@ -25,18 +26,22 @@ export function proxy(request: NextRequest) {
       : new NextResponse(message, { status: 400, headers: { 'content-type': 'text/plain; charset=utf-8' } });
   }
   if (request.nextUrl.pathname.startsWith('/api/')) return NextResponse.next();
-  const csp = contentSecurityPolicy({ nonce: makeNonce(), dev: process.env.NODE_ENV === 'development' });
+  const nonce = makeNonce();
+  const csp = contentSecurityPolicy({ nonce, dev: process.env.NODE_ENV === 'development' });
+  const { pathname, search } = request.nextUrl;
+  const token = heldShareToken(request.method, pathname, search, request.headers);
+  const serve = token === null ? null : heldShareServer();
+  if (token !== null && serve) {
+    const response = await serve({ token, search, nonce, headers: request.headers });
+    response.headers.set('Content-Security-Policy', csp);
+    return response;
+  }
   const headers = new Headers(request.headers);
   headers.set('content-security-policy', csp);
-  const held = heldSharePath(
-    request.method,
-    request.nextUrl.pathname,
-    request.nextUrl.search,
-    request.headers,
-  );
-  const response = held
-    ? NextResponse.rewrite(new URL(held, request.url), { request: { headers } })
-    : NextResponse.next({ request: { headers } });
+  const response =
+    token === null
+      ? NextResponse.next({ request: { headers } })
+      : NextResponse.rewrite(new URL(`/s/${token}/held${search}`, request.url), { request: { headers } });
   response.headers.set('Content-Security-Policy', csp);
   return response;
 }

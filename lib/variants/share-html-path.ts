@@ -29,10 +29,10 @@ const ROUTER_HEADERS = [
 export const isHeldShareSearch = (search: string) => SEARCH.test(search);
 
 /**
- * The held route's path for this request (`/s/<token>/held` with the query), or null when the request
- * goes to the page itself.
+ * The token of a share page visit the held HTML serves, or null when the request goes to the page
+ * itself.
  */
-export function heldSharePath(
+export function heldShareToken(
   method: string,
   pathname: string,
   search: string,
@@ -42,5 +42,40 @@ export function heldSharePath(
   const page = PAGE.exec(pathname);
   if (!page || !isHeldShareSearch(search)) return null;
   if (headers.has(SHARE_RENDER_HEADER) || ROUTER_HEADERS.some((h) => headers.has(h))) return null;
-  return `/s/${page[1]}/held${search}`;
+  return page[1]!;
+}
+
+/**
+ * The held route's path for this request (`/s/<token>/held` with the query), or null when the request
+ * goes to the page itself.
+ */
+export function heldSharePath(
+  method: string,
+  pathname: string,
+  search: string,
+  headers: Headers,
+): string | null {
+  const token = heldShareToken(method, pathname, search, headers);
+  return token === null ? null : `/s/${token}/held${search}`;
+}
+
+/** A share page visit as the proxy hands it over: the link, the query, the request's nonce and headers. */
+export type HeldShareVisit = { token: string; search: string; nonce: string; headers: Headers };
+
+/** Answers a visit with the held page (or the page's not-found answer when the link does not work). */
+export type HeldShareServer = (visit: HeldShareVisit) => Promise<Response>;
+
+// The proxy and the app's routes are separate bundles in one process: the proxy cannot import the held
+// route's code (it would load a second copy of the models and the database layer), so the held route
+// leaves its server here when Next loads it, on the process's global object, and the proxy calls it.
+// Before that (the first visit after a start) the proxy rewrites to the route, which loads it.
+const SERVER = Symbol.for('baskwell.variants.share-html.server');
+const slot = globalThis as typeof globalThis & { [SERVER]?: HeldShareServer | undefined };
+
+/** The held route's server once the route has been loaded in this process, else null. */
+export const heldShareServer = (): HeldShareServer | null => slot[SERVER] ?? null;
+
+/** Called by the held route as it loads (and by tests, with undefined to take it back). */
+export function offerHeldShareServer(serve: HeldShareServer | undefined): void {
+  slot[SERVER] = serve;
 }

@@ -4,7 +4,7 @@ import { getBotType } from 'next/dist/shared/lib/router/utils/is-bot';
 import { FALLBACK_ZONE, knownZone, ZONE_COOKIE } from '@/lib/time/format';
 import { Lru } from './lru';
 import type { ShareRecord } from './queries';
-import { isHeldShareSearch, SHARE_RENDER_HEADER } from './share-html-path';
+import { isHeldShareSearch, SHARE_RENDER_HEADER, type HeldShareVisit } from './share-html-path';
 
 /**
  * The share page's HTML, rendered once by Next and then held in memory, so a view costs a string join
@@ -37,9 +37,10 @@ export type RenderedPage = {
 export type RenderRequest = { path: string; zone: string; userAgent: string };
 export type Renderer = (request: RenderRequest) => Promise<RenderedPage>;
 
-// The page answer's own headers. The security headers come from next.config.ts, the policy from the
-// proxy and Vary from Next, for the held route as for the page.
-const REPLAYED = ['content-type', 'cache-control', 'link', 'x-robots-tag'];
+// The page answer's own headers. The security headers come from next.config.ts and the policy from the
+// proxy, for the held answer as for the page. Vary is the page's: Next adds it to its routes' answers,
+// not to one the proxy sends itself.
+const REPLAYED = ['content-type', 'cache-control', 'link', 'x-robots-tag', 'vary'];
 
 /**
  * The page rendered by this server, through the proxy like any request (so with a nonce of its own).
@@ -112,33 +113,50 @@ function pageKey(token: string, search: string, zone: string, userAgent: string,
 }
 
 /**
- * The share page for this request: held HTML with the request's nonce when the link works (rendering
- * and holding it on the first view; views that arrive together share that render), otherwise the page
- * as the server renders it now (the not-found page of a revoked, expired or unknown link; a page asked
- * for without a nonce). Only a 200 is held.
+ * The share page for this request (as the held route gets it, the nonce in its policy header): see
+ * `heldShareHtml`.
  */
-export async function sharePageHtml(
+export function sharePageHtml(
   request: Request,
   token: string,
   share: ShareRecord | null,
   render: Renderer = renderThroughServer,
 ): Promise<Response> {
-  const url = new URL(request.url);
-  const nonce = nonceOf(request.headers.get('content-security-policy'));
-  const zone = knownZone(cookieValue(request.headers.get('cookie'), ZONE_COOKIE)) ?? FALLBACK_ZONE;
-  const userAgent = request.headers.get('user-agent') ?? '';
-  const wanted: RenderRequest = { path: `/s/${token}${url.search}`, zone, userAgent };
+  const visit = {
+    token,
+    search: new URL(request.url).search,
+    nonce: nonceOf(request.headers.get('content-security-policy')),
+    headers: request.headers,
+  };
+  return heldShareHtml(visit, share, render);
+}
+
+/**
+ * The share page for this visit: held HTML with the visit's nonce when the link works (rendering and
+ * holding it on the first view; views that arrive together share that render), otherwise the page as
+ * the server renders it now (the not-found page of a revoked, expired or unknown link; a page asked for
+ * without a nonce). Only a 200 is held.
+ */
+export async function heldShareHtml(
+  visit: Omit<HeldShareVisit, 'nonce'> & { nonce: string | null },
+  share: ShareRecord | null,
+  render: Renderer = renderThroughServer,
+): Promise<Response> {
+  const { token, search, nonce, headers } = visit;
+  const zone = knownZone(cookieValue(headers.get('cookie'), ZONE_COOKIE)) ?? FALLBACK_ZONE;
+  const userAgent = headers.get('user-agent') ?? '';
+  const wanted: RenderRequest = { path: `/s/${token}${search}`, zone, userAgent };
   if (!share) {
     // The page's own not-found answer, as before; a plain one if the page cannot be rendered.
     const page = await render(wanted).catch(() => null);
     return page ? respond(held(page), nonce ?? page.nonce ?? '') : gone();
   }
-  if (!nonce || !isHeldShareSearch(url.search)) {
+  if (!nonce || !isHeldShareSearch(search)) {
     const page = await render(wanted);
     return respond(held(page), nonce ?? page.nonce ?? '');
   }
   const lru = pages();
-  const key = pageKey(token, url.search, zone, userAgent, share);
+  const key = pageKey(token, search, zone, userAgent, share);
   let made = lru.get(key);
   if (!made) {
     made = render(wanted).then(held);

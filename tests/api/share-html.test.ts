@@ -3,13 +3,20 @@
 // a renderer that records what it was asked and answers with a nonce of its own, as the server does;
 // tests/browser/variants.browser.ts, journey-visitor and csp.browser.ts open the real thing in Chromium.
 import { NextRequest } from 'next/server';
-import { beforeEach, describe, expect, it } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import * as shareRoute from '@/app/api/shares/[id]/route';
 import { contentSecurityPolicy, makeNonce } from '@/lib/security/csp';
 import { ZONE_COOKIE } from '@/lib/time/format';
 import { findShare } from '@/lib/variants/queries';
-import { heldSharePath, SHARE_RENDER_HEADER } from '@/lib/variants/share-html-path';
 import {
+  heldSharePath,
+  heldShareServer,
+  offerHeldShareServer,
+  SHARE_RENDER_HEADER,
+  type HeldShareVisit,
+} from '@/lib/variants/share-html-path';
+import {
+  heldShareHtml,
   nonceOf,
   sharePageHtml,
   sharePagesHtml,
@@ -41,6 +48,17 @@ async function sharedLink(expiresInDays?: number) {
     token: made.body.share.token as string,
     id: made.body.share.id as number,
   };
+}
+
+/** Revokes the link as its owner does (the share route's DELETE). */
+async function revoke(staff: Awaited<ReturnType<typeof sharedLink>>['staff'], id: number) {
+  const revoked = await call(shareRoute.DELETE, {
+    method: 'DELETE',
+    path: `/api/shares/${id}`,
+    params: { id },
+    user: staff,
+  });
+  expect(revoked.status).toBe(200);
 }
 
 /**
@@ -139,13 +157,7 @@ describe('share page HTML held in memory', () => {
     expect((await view(server, token)).html).toContain('version 2');
     expect(server.asked).toHaveLength(2);
 
-    const revoked = await call(shareRoute.DELETE, {
-      method: 'DELETE',
-      path: `/api/shares/${id}`,
-      params: { id },
-      user: staff,
-    });
-    expect(revoked.status).toBe(200);
+    await revoke(staff, id);
     const gone = await view(server, token);
     expect(gone.res.status).toBe(404);
     expect(gone.html).toContain('Not found');
@@ -206,8 +218,13 @@ describe('share page HTML held in memory', () => {
 
 describe('the proxy sends a browser’s share page visit to the held route', () => {
   const token = 'A'.repeat(43);
-  const rewritten = (path: string, init: { method?: string; headers?: Record<string, string> } = {}) => {
-    const res = proxy(new NextRequest(`http://localhost:3000${path}`, init));
+  // As after a start, before the held route has been loaded.
+  beforeEach(() => offerHeldShareServer(undefined));
+  const rewritten = async (
+    path: string,
+    init: { method?: string; headers?: Record<string, string> } = {},
+  ) => {
+    const res = await proxy(new NextRequest(`http://localhost:3000${path}`, init));
     const to = res.headers.get('x-middleware-rewrite');
     // The rewritten request carries the same policy as the answer, so the page's nonce is the answer's.
     if (to)
@@ -217,19 +234,101 @@ describe('the proxy sends a browser’s share page visit to the held route', () 
     return to ? new URL(to).pathname + new URL(to).search : null;
   };
 
-  it('with no query or a field the page shows', () => {
-    expect(rewritten(`/s/${token}`)).toBe(`/s/${token}/held`);
-    expect(rewritten(`/s/${token}?field=tempC`)).toBe(`/s/${token}/held?field=tempC`);
+  it('with no query or a field the page shows', async () => {
+    expect(await rewritten(`/s/${token}`)).toBe(`/s/${token}/held`);
+    expect(await rewritten(`/s/${token}?field=tempC`)).toBe(`/s/${token}/held?field=tempC`);
   });
 
-  it('and leaves everything else to the page and routes as before', () => {
-    expect(rewritten(`/s/${token}?field=other`)).toBeNull();
-    expect(rewritten(`/s/${token}?field=uvi&x=1`)).toBeNull();
-    expect(rewritten(`/s/${token}`, { method: 'HEAD' })).toBeNull();
-    expect(rewritten(`/s/${token}`, { headers: { rsc: '1' } })).toBeNull();
-    expect(rewritten(`/s/${token}`, { headers: { [SHARE_RENDER_HEADER]: '1' } })).toBeNull();
-    expect(rewritten(`/s/${token}/report?format=pdf`)).toBeNull();
-    expect(rewritten(`/s/${token}/picture/1/uvi.svg`)).toBeNull();
+  it('and leaves everything else to the page and routes as before', async () => {
+    expect(await rewritten(`/s/${token}?field=other`)).toBeNull();
+    expect(await rewritten(`/s/${token}?field=uvi&x=1`)).toBeNull();
+    expect(await rewritten(`/s/${token}`, { method: 'HEAD' })).toBeNull();
+    expect(await rewritten(`/s/${token}`, { headers: { rsc: '1' } })).toBeNull();
+    expect(await rewritten(`/s/${token}`, { headers: { [SHARE_RENDER_HEADER]: '1' } })).toBeNull();
+    expect(await rewritten(`/s/${token}/report?format=pdf`)).toBeNull();
+    expect(await rewritten(`/s/${token}/picture/1/uvi.svg`)).toBeNull();
     expect(heldSharePath('GET', '/studio/1', '', new Headers())).toBeNull();
+  });
+});
+
+describe('the proxy answers a share page visit itself once the held route is loaded', () => {
+  afterEach(() => offerHeldShareServer(undefined));
+
+  /** The held route's server as the route offers it, with the stand-in page render. */
+  function offer(server: ReturnType<typeof fakeServer>) {
+    const visits: HeldShareVisit[] = [];
+    offerHeldShareServer(async (visit) => {
+      visits.push(visit);
+      return heldShareHtml(visit, await findShare(visit.token), server.render);
+    });
+    return visits;
+  }
+
+  const visitThroughProxy = async (path: string, init: { headers?: Record<string, string> } = {}) => {
+    const res = await proxy(new NextRequest(`http://localhost:3000${path}`, init));
+    const nonce = nonceOf(res.headers.get('content-security-policy'));
+    return { res, nonce, html: await res.text() };
+  };
+
+  it('is offered by the held route as Next loads it', async () => {
+    // Nothing in this file has loaded the route before (each test file has its own modules).
+    expect(heldShareServer()).toBeNull();
+    await import('@/app/s/[token]/held/route');
+    expect(heldShareServer()).toBeTypeOf('function');
+  });
+
+  it('serves the held page with the nonce of the policy it sends, with no rewrite', async () => {
+    const { token } = await sharedLink();
+    const server = fakeServer();
+    const visits = offer(server);
+    const first = await visitThroughProxy(`/s/${token}?field=uvb`, {
+      headers: { 'user-agent': 'Chromium', cookie: `${ZONE_COOKIE}=Europe/Berlin` },
+    });
+    expect(first.res.status).toBe(200);
+    expect(first.res.headers.get('x-middleware-rewrite')).toBeNull();
+    expect(first.nonce).toBeTruthy();
+    expect(nonces(first.html)).toEqual([first.nonce, first.nonce]);
+    expect(first.html).toContain('version 1 in Europe/Berlin');
+    expect(visits.map((v) => [v.token, v.search, v.nonce])).toEqual([[token, '?field=uvb', first.nonce]]);
+    expect(server.asked).toEqual([
+      { path: `/s/${token}?field=uvb`, zone: 'Europe/Berlin', userAgent: 'Chromium' },
+    ]);
+
+    const again = await visitThroughProxy(`/s/${token}?field=uvb`, {
+      headers: { 'user-agent': 'Chromium', cookie: `${ZONE_COOKIE}=Europe/Berlin` },
+    });
+    expect(again.nonce).not.toBe(first.nonce);
+    expect(nonces(again.html)).toEqual([again.nonce, again.nonce]);
+    expect(server.asked).toHaveLength(1);
+  });
+
+  it('stops serving a revoked link at once', async () => {
+    const { staff, token, id } = await sharedLink();
+    const server = fakeServer();
+    offer(server);
+    expect((await visitThroughProxy(`/s/${token}`)).res.status).toBe(200);
+    await revoke(staff, id);
+    const gone = await visitThroughProxy(`/s/${token}`);
+    expect(gone.res.status).toBe(404);
+    expect(gone.html).not.toContain('version');
+    expect(nonces(gone.html)).toEqual([gone.nonce, gone.nonce]);
+  });
+
+  it('leaves other requests to the page and routes as before', async () => {
+    const token = 'A'.repeat(43);
+    const visits = offer(fakeServer());
+    for (const [path, headers] of [
+      [`/s/${token}?field=other`, {}],
+      [`/s/${token}`, { rsc: '1' }],
+      [`/s/${token}`, { [SHARE_RENDER_HEADER]: '1' }],
+      [`/s/${token}/picture/1/uvi.svg`, {}],
+      ['/studio/1', {}],
+    ] as const) {
+      const res = await proxy(new NextRequest(`http://localhost:3000${path}`, { headers }));
+      expect(res.headers.get('x-middleware-next'), path).toBe('1');
+    }
+    const head = await proxy(new NextRequest(`http://localhost:3000/s/${token}`, { method: 'HEAD' }));
+    expect(head.headers.get('x-middleware-next')).toBe('1');
+    expect(visits).toEqual([]);
   });
 });

@@ -70,15 +70,15 @@ describe('the page Content-Security-Policy (proxy.ts)', () => {
     for (const n of nonces) expect(Buffer.from(n, 'base64')).toHaveLength(16);
   });
 
-  it('sends the policy on the response and hands it to Next on the request (which reads the nonce)', () => {
-    const res = proxy(new NextRequest('http://localhost:3000/enclosures'));
+  it('sends the policy on the response and hands it to Next on the request (which reads the nonce)', async () => {
+    const res = await proxy(new NextRequest('http://localhost:3000/enclosures'));
     const sent = res.headers.get('content-security-policy');
     const { directives, nonce } = parsePolicy(sent ?? '');
     expect(directives).toEqual(PAGE_CSP_DIRECTIVES);
     expect(nonce).toBeTruthy();
     // NextResponse.next({ request: { headers } }) passes overridden request headers this way.
     expect(res.headers.get('x-middleware-request-content-security-policy')).toBe(sent);
-    const again = proxy(new NextRequest('http://localhost:3000/enclosures')).headers.get(
+    const again = (await proxy(new NextRequest('http://localhost:3000/enclosures'))).headers.get(
       'content-security-policy',
     );
     expect(parsePolicy(again ?? '').nonce).not.toBe(nonce);
@@ -93,14 +93,14 @@ describe('the page Content-Security-Policy (proxy.ts)', () => {
       expect(matches(other), other).toBe(false);
   });
 
-  it('runs on prefetches too: a prefetched page the browser keeps carries the same policy', () => {
+  it('runs on prefetches too: a prefetched page the browser keeps carries the same policy', async () => {
     // A matcher entry with `missing` (or `has`) conditions would let prefetches past without the policy.
     for (const entry of proxyConfig.matcher) expect(entry, entry.source).not.toHaveProperty('missing');
     for (const entry of proxyConfig.matcher) expect(entry, entry.source).not.toHaveProperty('has');
     const prefetch = new NextRequest('http://localhost:3000/enclosures', {
       headers: { purpose: 'prefetch', 'next-router-prefetch': '1' },
     });
-    const { directives } = parsePolicy(proxy(prefetch).headers.get('content-security-policy') ?? '');
+    const { directives } = parsePolicy((await proxy(prefetch)).headers.get('content-security-policy') ?? '');
     expect(directives).toEqual(PAGE_CSP_DIRECTIVES);
   });
 });
@@ -117,17 +117,17 @@ describe('return addresses with control characters (proxy.ts)', () => {
     ['/api/auth/signout?callbackUrl=%2F%00'],
   ])('answers %s with 400, never a redirect or a server error', async (path) => {
     expect(matched(new URL(path, 'http://x').pathname), path).toBe(true);
-    const res = proxy(new NextRequest(`http://localhost:3000${path}`));
+    const res = await proxy(new NextRequest(`http://localhost:3000${path}`));
     expect(res.status).toBe(400);
     expect(res.headers.get('location')).toBeNull();
     expect(await res.text()).toMatch(/return address/);
   });
 
-  it('lets an ordinary return address through, and API routes keep the baseline policy', () => {
-    const page = proxy(new NextRequest('http://localhost:3000/sign-in?callbackUrl=%2Fenclosures%2F3'));
+  it('lets an ordinary return address through, and API routes keep the baseline policy', async () => {
+    const page = await proxy(new NextRequest('http://localhost:3000/sign-in?callbackUrl=%2Fenclosures%2F3'));
     expect(page.status).toBe(200);
     expect(page.headers.get('content-security-policy')).toMatch(/nonce-/);
-    const api = proxy(new NextRequest('http://localhost:3000/api/auth/csrf'));
+    const api = await proxy(new NextRequest('http://localhost:3000/api/auth/csrf'));
     expect(api.status).toBe(200);
     expect(api.headers.get('content-security-policy')).toBeNull();
   });
