@@ -74,7 +74,10 @@ function fakeServer() {
     const token = r.path.split('/')[2]!.split('?')[0]!;
     const share = await findShare(token);
     const status = fail ?? (share ? 200 : 404);
-    const main = share ? `<h1>version ${share.variant.version} in ${r.zone}</h1>` : '<h1>Not found</h1>';
+    // Text beyond ASCII, as the real page has: the held bytes must be its UTF-8.
+    const main = share
+      ? `<h1>version ${share.variant.version} in ${r.zone}</h1><p>basking spot’s 40 °C</p>`
+      : '<h1>Not found</h1>';
     return {
       status,
       headers: [
@@ -119,6 +122,7 @@ describe('share page HTML held in memory', () => {
     expect(first.html).toContain('version 1 in UTC');
     expect(nonces(first.html)).toEqual([first.nonce, first.nonce]);
     expect(first.html).toContain(`push("${first.nonce}")`);
+    expect(first.html).toContain('<p>basking spot’s 40 °C</p>');
     expect(first.res.headers.get('content-type')).toBe('text/html; charset=utf-8');
     expect(first.res.headers.get('cache-control')).toContain('no-store');
     expect(first.res.headers.get('link')).toBe(`</a.css>; rel=preload; as="style"; nonce="${first.nonce}"`);
@@ -131,6 +135,7 @@ describe('share page HTML held in memory', () => {
     expect(again.html).not.toContain(first.nonce);
     expect(again.res.headers.get('link')).toContain(`nonce="${again.nonce}"`);
     expect(again.html.replaceAll(again.nonce, 'N')).toBe(first.html.replaceAll(first.nonce, 'N'));
+    expect(again.html).toContain('<p>basking spot’s 40 °C</p>');
   });
 
   it('holds a page per field and per time zone, and renders views that arrive together once', async () => {
