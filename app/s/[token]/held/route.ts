@@ -19,5 +19,8 @@ offerHeldShareServer(async (visit) => heldShareHtml(visit, await findShare(visit
 
 export async function GET(request: NextRequest, ctx: { params: Promise<{ token: string }> }) {
   const { token } = await ctx.params;
-  return sharePageHtml(request, token, await findShare(token));
+  const response = await sharePageHtml(request, token, await findShare(token));
+  // Next puts its own Vary (the same as the page's) on a route's answer and would add this one to it.
+  response.headers.delete('vary');
+  return response;
 }
