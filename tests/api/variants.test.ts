@@ -3,10 +3,11 @@ import * as designRoute from '@/app/api/designs/[id]/route';
 import * as designVariantsRoute from '@/app/api/designs/[id]/variants/route';
 import * as enclosureDesignsRoute from '@/app/api/enclosures/[id]/designs/route';
 import * as variantRoute from '@/app/api/variants/[id]/route';
-import { Design, Variant } from '@/models';
+import { Design, Variant, type User } from '@/models';
 import { addMember, createUser, withTestDatabase } from '../helpers/db';
 import { createEnclosureWorld } from '../helpers/world';
-import { call, postVariant, putVariant } from './variants.helpers';
+import { send } from './http';
+import { postVariant, putVariant } from './variants.helpers';
 
 withTestDatabase();
 
@@ -19,11 +20,9 @@ async function world() {
 }
 
 async function designWithVariant(w: Awaited<ReturnType<typeof world>>, name = 'Basking plan') {
-  const r = await call(enclosureDesignsRoute.POST, {
-    method: 'POST',
-    path: `/api/enclosures/${w.enclosure.id}/designs`,
-    params: { id: w.enclosure.id },
-    user: w.staff,
+  const r = await send(enclosureDesignsRoute.POST, 'POST /api/enclosures/[id]/designs', {
+    id: w.enclosure.id,
+    as: w.staff,
     body: { name },
   });
   expect(r.status).toBe(201);
@@ -41,8 +40,8 @@ const lamp = {
   uvbAt30: 25,
 };
 
-async function getVariant(user: Parameters<typeof call>[1]['user'], id: number) {
-  return call(variantRoute.GET, { path: `/api/variants/${id}`, params: { id }, user });
+async function getVariant(user: User, id: number) {
+  return send(variantRoute.GET, 'GET /api/variants/[id]', { id, as: user });
 }
 
 describe('designs of an enclosure', () => {
@@ -62,26 +61,23 @@ describe('designs of an enclosure', () => {
   it('lists, searches and pages designs for the keeper who owns the enclosure', async () => {
     const w = await world();
     for (const name of ['Alpha', 'Beta', 'Gamma plan']) await designWithVariant(w, name);
-    const path = `/api/enclosures/${w.enclosure.id}/designs`;
-    const first = await call(enclosureDesignsRoute.GET, {
-      path: `${path}?limit=2`,
-      params: { id: w.enclosure.id },
-      user: w.keeper,
+    const first = await send(enclosureDesignsRoute.GET, 'GET /api/enclosures/[id]/designs?limit=2', {
+      id: w.enclosure.id,
+      as: w.keeper,
     });
     expect(first.status).toBe(200);
     expect(first.body.items.map((d: { name: string }) => d.name)).toEqual(['Alpha', 'Beta']);
     expect(first.body.items[0].variants).toHaveLength(1);
-    const second = await call(enclosureDesignsRoute.GET, {
-      path: `${path}?limit=2&cursor=${first.body.nextCursor}`,
-      params: { id: w.enclosure.id },
-      user: w.keeper,
-    });
+    const second = await send(
+      enclosureDesignsRoute.GET,
+      `GET /api/enclosures/[id]/designs?limit=2&cursor=${first.body.nextCursor}`,
+      { id: w.enclosure.id, as: w.keeper },
+    );
     expect(second.body.items.map((d: { name: string }) => d.name)).toEqual(['Gamma plan']);
     expect(second.body.nextCursor).toBeNull();
-    const search = await call(enclosureDesignsRoute.GET, {
-      path: `${path}?q=plan`,
-      params: { id: w.enclosure.id },
-      user: w.owner,
+    const search = await send(enclosureDesignsRoute.GET, 'GET /api/enclosures/[id]/designs?q=plan', {
+      id: w.enclosure.id,
+      as: w.owner,
     });
     expect(search.body.items.map((d: { name: string }) => d.name)).toEqual(['Gamma plan']);
   });
@@ -89,21 +85,14 @@ describe('designs of an enclosure', () => {
   it('renames and deletes a design (its variants go with it)', async () => {
     const w = await world();
     const { designId, variantId } = await designWithVariant(w);
-    const renamed = await call(designRoute.PATCH, {
-      method: 'PATCH',
-      path: `/api/designs/${designId}`,
-      params: { id: designId },
-      user: w.keeper,
+    const renamed = await send(designRoute.PATCH, 'PATCH /api/designs/[id]', {
+      id: designId,
+      as: w.keeper,
       body: { name: '  Winter set-up ' },
     });
     expect(renamed.status).toBe(200);
     expect(renamed.body.design.name).toBe('Winter set-up');
-    const del = await call(designRoute.DELETE, {
-      method: 'DELETE',
-      path: `/api/designs/${designId}`,
-      params: { id: designId },
-      user: w.keeper,
-    });
+    const del = await send(designRoute.DELETE, 'DELETE /api/designs/[id]', { id: designId, as: w.keeper });
     expect(del.status).toBe(200);
     expect(await Design.findByPk(designId)).toBeNull();
     expect(await Variant.findByPk(variantId)).toBeNull();
@@ -111,18 +100,15 @@ describe('designs of an enclosure', () => {
 
   it('answers 400 naming the field, 401 without a session', async () => {
     const w = await world();
-    const bad = await call(enclosureDesignsRoute.POST, {
-      method: 'POST',
-      path: `/api/enclosures/${w.enclosure.id}/designs`,
-      params: { id: w.enclosure.id },
-      user: w.staff,
+    const bad = await send(enclosureDesignsRoute.POST, 'POST /api/enclosures/[id]/designs', {
+      id: w.enclosure.id,
+      as: w.staff,
       body: { name: '   ' },
     });
     expect(bad.status).toBe(400);
     expect(bad.body.error.field).toBe('name');
-    const anon = await call(enclosureDesignsRoute.GET, {
-      path: `/api/enclosures/${w.enclosure.id}/designs`,
-      params: { id: w.enclosure.id },
+    const anon = await send(enclosureDesignsRoute.GET, 'GET /api/enclosures/[id]/designs', {
+      id: w.enclosure.id,
     });
     expect(anon.status).toBe(401);
   });
@@ -259,45 +245,38 @@ describe('variants', () => {
     const both = await post({ name: 'Both', design: uploaded, fromVariantId: variantId });
     expect(both.status).toBe(400);
 
-    const page1 = await call(designVariantsRoute.GET, {
-      path: `/api/designs/${designId}/variants?limit=3`,
-      params: { id: designId },
-      user: w.keeper,
+    const page1 = await send(designVariantsRoute.GET, 'GET /api/designs/[id]/variants?limit=3', {
+      id: designId,
+      as: w.keeper,
     });
     expect(page1.body.items.map((v: { name: string }) => v.name)).toEqual(['Variant A', 'Uploaded', 'Copy']);
-    const page2 = await call(designVariantsRoute.GET, {
-      path: `/api/designs/${designId}/variants?limit=3&cursor=${page1.body.nextCursor}`,
-      params: { id: designId },
-      user: w.keeper,
-    });
+    const page2 = await send(
+      designVariantsRoute.GET,
+      `GET /api/designs/[id]/variants?limit=3&cursor=${page1.body.nextCursor}`,
+      { id: designId, as: w.keeper },
+    );
     expect(page2.body.items.map((v: { name: string }) => v.name)).toEqual(['Fresh']);
   });
 
   it('renames without changing the version, and keeps the last variant of a design', async () => {
     const w = await world();
     const { designId, variantId } = await designWithVariant(w);
-    const renamed = await call(variantRoute.PATCH, {
-      method: 'PATCH',
-      path: `/api/variants/${variantId}`,
-      params: { id: variantId },
-      user: w.keeper,
+    const renamed = await send(variantRoute.PATCH, 'PATCH /api/variants/[id]', {
+      id: variantId,
+      as: w.keeper,
       body: { name: 'Lamp lowered' },
     });
     expect(renamed.status).toBe(200);
     expect(renamed.body.variant).toMatchObject({ name: 'Lamp lowered', version: 1 });
-    const last = await call(variantRoute.DELETE, {
-      method: 'DELETE',
-      path: `/api/variants/${variantId}`,
-      params: { id: variantId },
-      user: w.keeper,
+    const last = await send(variantRoute.DELETE, 'DELETE /api/variants/[id]', {
+      id: variantId,
+      as: w.keeper,
     });
     expect(last.status).toBe(409);
     const copy = await postVariant(w.keeper, designId, { name: 'Copy', fromVariantId: variantId });
-    const del = await call(variantRoute.DELETE, {
-      method: 'DELETE',
-      path: `/api/variants/${copy.body.variant.id}`,
-      params: { id: copy.body.variant.id },
-      user: w.keeper,
+    const del = await send(variantRoute.DELETE, 'DELETE /api/variants/[id]', {
+      id: copy.body.variant.id,
+      as: w.keeper,
     });
     expect(del.status).toBe(200);
     expect(await Variant.findByPk(copy.body.variant.id)).toBeNull();
