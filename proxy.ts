@@ -32,9 +32,13 @@ export async function proxy(request: NextRequest): Promise<Response> {
   const token = heldShareToken(request.method, pathname, search, request.headers);
   const serve = token === null ? null : heldShareServer();
   if (token !== null && serve) {
-    const response = await serve({ token, search, nonce, headers: request.headers });
-    response.headers.set('Content-Security-Policy', csp);
-    return response;
+    // A failure here (the database away, say) falls through to the rewrite: the route then answers as
+    // it did before the proxy served these, through Next's error handling rather than the proxy's.
+    const response = await serve({ token, search, nonce, headers: request.headers }).catch(() => null);
+    if (response) {
+      response.headers.set('Content-Security-Policy', csp);
+      return response;
+    }
   }
   const headers = new Headers(request.headers);
   headers.set('content-security-policy', csp);

@@ -319,6 +319,18 @@ describe('the proxy answers a share page visit itself once the held route is loa
     expect(nonces(gone.html)).toEqual([gone.nonce, gone.nonce]);
   });
 
+  it('leaves a visit it cannot answer (its server failed) to the held route', async () => {
+    const token = 'A'.repeat(43);
+    offerHeldShareServer(async () => {
+      throw new Error('database unavailable');
+    });
+    const res = await proxy(new NextRequest(`http://localhost:3000/s/${token}`));
+    expect(new URL(res.headers.get('x-middleware-rewrite')!).pathname).toBe(`/s/${token}/held`);
+    expect(res.headers.get('x-middleware-request-content-security-policy')).toBe(
+      res.headers.get('content-security-policy'),
+    );
+  });
+
   it('leaves other requests to the page and routes as before', async () => {
     const token = 'A'.repeat(43);
     const visits = offer(fakeServer());
