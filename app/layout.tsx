@@ -3,7 +3,9 @@ import localFont from 'next/font/local';
 import { connection } from 'next/server';
 import type { ReactNode } from 'react';
 import { SafetyNote } from '@/components/shell/SafetyNote';
+import { firstFieldScript } from '@/components/studio/first-field-script';
 import { ViewerZoneProvider } from '@/components/ui/LocalTime';
+import { pageNonce } from '@/lib/security/page-nonce';
 import { viewerZone } from '@/lib/time/viewer-zone';
 import './globals.css';
 
@@ -25,9 +27,22 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
   // page prerendered at build time cannot know.
   await connection();
   // Moments are shown in the viewer's zone; the browser reports it in a cookie after its first page.
-  const zone = await viewerZone();
+  const [zone, nonce] = await Promise.all([viewerZone(), pageNonce()]);
   return (
     <html lang="en" className={inter.variable}>
+      <head>
+        {/* Shows a studio page's field picture before the first frame (first-field-script.ts): a module
+            waits for no stylesheet, and `blocking="render"` keeps the browser from painting before it has
+            run. Other pages leave it at once. */}
+        <script
+          nonce={nonce}
+          suppressHydrationWarning
+          type="module"
+          async
+          blocking="render"
+          dangerouslySetInnerHTML={{ __html: firstFieldScript() }}
+        />
+      </head>
       <body className="flex min-h-screen flex-col">
         <a
           href="#main"

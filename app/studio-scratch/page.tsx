@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import { StudioLoader } from '@/components/studio/StudioLoader';
 import { STARTING_SHEETS } from '@/lib/species/starting-sheets';
 import { toEngineSheet } from '@/lib/species/to-engine';
-import { pageNonce, studioPictureFor } from '@/lib/variants/studio-picture';
+import { studioPictureFor } from '@/lib/variants/studio-picture';
 import { exampleDesign } from '@/simulation';
 
 export const metadata: Metadata = {
@@ -18,7 +18,7 @@ export const metadata: Metadata = {
  */
 export default async function ScratchStudioPage() {
   // The example's field, drawn on the server (and kept there): the page opens with it on screen.
-  const [picture, nonce] = await Promise.all([studioPictureFor(exampleDesign()), pageNonce()]);
+  const picture = await studioPictureFor(exampleDesign());
   const species = STARTING_SHEETS.map((s) => ({ id: s.seedKey, ...toEngineSheet(s) }));
   return (
     <StudioLoader
@@ -28,7 +28,6 @@ export default async function ScratchStudioPage() {
       backLabel="Home"
       species={species}
       picture={picture}
-      nonce={nonce}
     />
   );
 }

@@ -43,7 +43,6 @@ type PassedOn = Pick<
 export function StudioLoader({
   source,
   picture,
-  nonce,
   photos,
   catalogueTypes,
   ...studio
@@ -51,8 +50,6 @@ export function StudioLoader({
   source: StudioSource;
   /** The field drawn on the server (the saved design's, or the example's for the scratch studio). */
   picture?: StudioPicture | null;
-  /** This response's CSP nonce, for the picture's inline scripts. */
-  nonce?: string;
 }) {
   const { initial } = studio;
   // The engine and contour workers load their code while the studio's own code and Konva download.
@@ -96,7 +93,7 @@ export function StudioLoader({
           <FirstFieldPicture
             design={pictureDesign}
             picture={picture}
-            inline={{ nonce, scratch: source.kind === 'scratch' }}
+            inline={{ scratch: source.kind === 'scratch' }}
           />
         )}
         <div className="absolute inset-0">

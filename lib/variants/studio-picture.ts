@@ -4,7 +4,7 @@
  * (lib/variants/studio-first-field.ts), never on the server's event loop.
  */
 import 'server-only';
-import { cookies, headers } from 'next/headers';
+import { cookies } from 'next/headers';
 import { runEngineTask } from '@/lib/engine-pool';
 import { logger } from '@/lib/log';
 import { designWorkProblem, type Design } from '@/simulation';
@@ -26,10 +26,4 @@ export async function studioPictureFor(design: Design): Promise<StudioPicture | 
     logger().warn({ err: e }, 'studio first field not drawn');
     return null;
   }
-}
-
-/** This response's CSP nonce (proxy.ts puts the policy on the request), for the page's one inline script. */
-export async function pageNonce(): Promise<string | undefined> {
-  const csp = (await headers()).get('content-security-policy') ?? '';
-  return /'nonce-([^']+)'/.exec(csp)?.[1];
 }

@@ -19,6 +19,7 @@ declare global {
   interface Window {
     __releaseWorkers?: () => void;
     __heldWorkerAnswers?: number;
+    __pictureAtFirstFrame?: 'absent' | 'hidden' | 'shown';
   }
 }
 
@@ -55,9 +56,23 @@ const fieldVisibleMarks = (page: Page) =>
   page.evaluate(() => performance.getEntriesByName('field-visible', 'mark').length);
 const roundTrips = (page: Page) => page.evaluate(() => window.__baskwellStudio?.roundTrips.length ?? 0);
 
+/**
+ * Notes what the page's first frame held of the picture: its first animation frame callback runs in that
+ * frame, before it is painted (and not before a render-blocking script has run).
+ */
+async function notePictureAtFirstFrame(context: BrowserContext) {
+  await context.addInitScript(() => {
+    requestAnimationFrame(() => {
+      const s = document.querySelector('[data-testid="studio-first-field"]');
+      window.__pictureAtFirstFrame = !s ? 'absent' : s.hasAttribute('data-pending') ? 'hidden' : 'shown';
+    });
+  });
+}
+
 /** Opens `path` with the workers held; checks the HTML carries the picture; returns the page. */
 async function openHeld(context: BrowserContext, path: string): Promise<{ page: Page; html: string }> {
   await holdWorkerAnswers(context);
+  await notePictureAtFirstFrame(context);
   const page = await context.newPage();
   page.setDefaultTimeout(60_000);
   const res = await page.goto(path);
@@ -70,11 +85,16 @@ async function expectPictureBeforeWorker(page: Page, html: string, field = 'uvi'
   // In the HTML itself: in the first paint, shown by its own inline script before the page's code loads.
   expect(html).toContain('data-testid="studio-first-field"');
   expect(html).toMatch(/data-testid="studio-first-field"[^>]*>[\s\S]*?<path[^>]+d="M/);
-  // Nothing before the picture's drawing holds the parser: a classic inline script there would wait for
-  // the stylesheet, and the picture would miss the first frame. Its one script is an async module.
+  // Nothing in the picture holds the parser (a classic inline script would wait for the stylesheet), and
+  // it ends with the element whose parsing lets it be shown.
   const opening = html.slice(html.indexOf('data-testid="studio-first-field"'));
-  expect(opening.slice(0, opening.indexOf('<svg'))).not.toContain('<script');
-  expect(opening.slice(opening.indexOf('</svg>'))).toMatch(/^<\/svg><script[^>]* type="module" async=""/);
+  expect(opening.slice(0, opening.indexOf('</svg>'))).not.toContain('<script');
+  expect(opening.slice(opening.indexOf('</svg>'))).toMatch(/^<\/svg><span data-picture-end=""/);
+  // It is shown by a module script in the head that keeps the browser from rendering until it has run,
+  // so no frame is painted with the picture parsed but still hidden.
+  const head = html.slice(0, html.indexOf('<body'));
+  expect(head).toMatch(/<script[^>]* type="module" async="" blocking="render"[^>]*>[^<]*studio-first-field/);
+  expect(await page.evaluate(() => window.__pictureAtFirstFrame)).not.toBe('hidden');
   const picture = page.getByTestId('studio-first-field').first();
   await expect.poll(() => picture.isVisible(), eventually).toBe(true);
   expect(await picture.getAttribute('data-field')).toBe(field);

@@ -7,7 +7,7 @@ import { getVariantForUser } from '@/lib/variants/queries';
 import { studioCatalogueFor } from '@/lib/lamp-types/studio-catalogue';
 import { attachedSpecies, speciesOptions } from '@/lib/variants/species';
 import { studioPhotos } from '@/lib/uploads/studio-photos';
-import { pageNonce, studioPictureFor } from '@/lib/variants/studio-picture';
+import { studioPictureFor } from '@/lib/variants/studio-picture';
 
 export const metadata: Metadata = { title: 'Studio' };
 
@@ -21,11 +21,10 @@ export default async function VariantStudioPage({ params }: { params: Promise<{ 
   if (!variant) notFound();
   // The field is drawn on an engine thread while the rest of the page is looked up, the species and the
   // photos side by side: each is a database round trip the page's first byte waits for.
-  const [options, photos, picture, nonce, catalogueTypes] = await Promise.all([
+  const [options, photos, picture, catalogueTypes] = await Promise.all([
     speciesOptions(variant.enclosure.organisationId),
     studioPhotos(user, variant.enclosure, variant.design.backdrop?.uploadId),
     studioPictureFor(variant.design),
-    pageNonce(),
     studioCatalogueFor(user, variant.enclosure.organisationId),
   ]);
   const attached = attachedSpecies(options, variant.enclosure.speciesName);
@@ -42,7 +41,6 @@ export default async function VariantStudioPage({ params }: { params: Promise<{ 
       photos={photos}
       catalogueTypes={catalogueTypes}
       picture={picture}
-      nonce={nonce}
     />
   );
 }
