@@ -1,7 +1,7 @@
 /**
  * How soon a studio shows its field, in Chromium against a production build, as a user opens it:
  *
- *   npm run --silent bench:studio [-- --runs 10] [--no-build] [--base .next/bench-base]
+ *   npm run --silent bench:studio [-- --runs 10] [--no-build] [--base .next/bench-base] [--trace DIR]
  *
  * Brings up what `npm test`'s browser stage does (the private MariaDB with a database of its own,
  * migrations, the demo seed, `next build` into .next/bench-build, `next start` on a free port) and stops
@@ -19,19 +19,30 @@
  * `NEXT_DIST_DIR=DIR npx next build`) beside the new one, against the same database, and opens each studio
  * in both in turn (alternating which goes first), so a change is measured side by side in the same minutes
  * on a shared machine; it prints both and the new build's medians as ratios of the earlier one's.
+ * `--trace DIR` adds one more uncounted opening of each studio in each build, recorded as a Chromium
+ * performance trace (DIR/<build>-<studio>.json, for Chromium's or Perfetto's trace viewer), and prints
+ * for it how much processor time the page's main thread, its other threads (raster, script compiling) and
+ * the rest of the browser used between the HTML's last byte and the first paint: on a shared machine the
+ * wall time between the two is mostly waiting for a core when these are small.
  */
-import { existsSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync } from 'node:fs';
 import { loadavg } from 'node:os';
 import path from 'node:path';
 import type { Browser, BrowserContext } from 'playwright-core';
 import { loadEnv } from './lib/env.mjs';
 import { bin, freePort, log, run } from './lib/proc.mjs';
 import { Lifecycle, migrate, prepareDatabase, ROOT, seed, startNext } from './lib/stack.mjs';
+import { cpuBetween, type TraceEvent } from './lib/trace-breakdown';
 
 const DIST = '.next/bench-build';
 
 function parseArgs(argv: string[]) {
-  const opts: { runs: number; build: boolean; base: string | null } = { runs: 10, build: true, base: null };
+  const opts: { runs: number; build: boolean; base: string | null; trace: string | null } = {
+    runs: 10,
+    build: true,
+    base: null,
+    trace: null,
+  };
   for (let k = 0; k < argv.length; k++) {
     const a = argv[k]!;
     if (a === '--runs') opts.runs = Number(argv[++k]);
@@ -39,7 +50,9 @@ function parseArgs(argv: string[]) {
     else if (a === '--no-build') opts.build = false;
     else if (a === '--base') opts.base = argv[++k] ?? '';
     else if (a.startsWith('--base=')) opts.base = a.slice(7);
-    else throw new Error(`unknown option ${a} (--runs N, --no-build, --base DIR)`);
+    else if (a === '--trace') opts.trace = argv[++k] ?? '';
+    else if (a.startsWith('--trace=')) opts.trace = a.slice(8);
+    else throw new Error(`unknown option ${a} (--runs N, --no-build, --base DIR, --trace DIR)`);
   }
   if (opts.base !== null && !existsSync(path.join(ROOT, opts.base, 'BUILD_ID')))
     throw new Error(
@@ -72,8 +85,27 @@ function quantile(xs: number[], q: number): number {
   return s[Math.min(s.length - 1, Math.max(0, Math.ceil(q * s.length) - 1))]!;
 }
 
-/** One opening in a fresh context: the two marks, in ms after the navigation started. */
-async function openOnce(browser: Browser, url: string, cookies: Parameters<BrowserContext['addCookies']>[0]) {
+/** The trace's categories: the main thread's tasks, raster and compositing, script, paint timing. */
+const TRACE_CATEGORIES = [
+  'devtools.timeline',
+  'disabled-by-default-devtools.timeline',
+  'disabled-by-default-devtools.timeline.frame',
+  'blink.user_timing',
+  'loading',
+  'cc',
+  'v8.execute',
+];
+
+/**
+ * One opening in a fresh context: the two marks, in ms after the navigation started. With `traceFile`, the
+ * opening is recorded as a Chromium performance trace into that file.
+ */
+async function openOnce(
+  browser: Browser,
+  url: string,
+  cookies: Parameters<BrowserContext['addCookies']>[0],
+  traceFile?: string,
+) {
   const { newContext } = await import('../tests/browser/harness');
   const context = await newContext(browser);
   try {
@@ -92,6 +124,7 @@ async function openOnce(browser: Browser, url: string, cookies: Parameters<Brows
       }
     });
     const page = await context.newPage();
+    if (traceFile) await browser.startTracing(page, { path: traceFile, categories: TRACE_CATEGORIES });
     await page.goto(url, { waitUntil: 'commit' });
     // No named helper inside: tsx would wrap it in a function of its own that the page does not have
     // (and the page's policy refuses a string to evaluate).
@@ -123,10 +156,35 @@ async function openOnce(browser: Browser, url: string, cookies: Parameters<Brows
       null,
       { timeout: 120_000, polling: 50 },
     );
-    return (await marks.jsonValue()) as Opening;
+    const opening = (await marks.jsonValue()) as Opening;
+    if (traceFile) await browser.stopTracing();
+    return opening;
   } finally {
     await context.close();
   }
+}
+
+/** One more opening, not counted, recorded as a trace; prints where the processor went before the paint. */
+async function traceOnce(
+  browser: Browser,
+  build: string,
+  target: { name: string; cookies: Parameters<BrowserContext['addCookies']>[0] },
+  url: string,
+  dir: string,
+) {
+  const file = path.resolve(ROOT, dir, `${build}-${target.name.replace(/ /g, '-')}.json`);
+  const o = await openOnce(browser, url, target.cookies, file);
+  const trace = JSON.parse(readFileSync(file, 'utf8')) as { traceEvents: TraceEvent[] };
+  const cpu = cpuBetween(trace.traceEvents, o.htmlEnd, o.firstPaint);
+  const r = (v: number) => Math.round(v);
+  console.log(
+    `trace of ${target.name} (${build}): HTML complete ${r(o.htmlEnd)} ms → first paint ${r(o.firstPaint)} ms` +
+      (cpu
+        ? `; processor time between them: page main thread ${r(cpu.main)} ms, page's other threads ` +
+          `${r(cpu.pageWorkers)} ms, rest of the browser ${r(cpu.browser)} ms`
+        : '; no navigation found in the trace') +
+      ` (${path.relative(ROOT, file)}, load average ${loadavg()[0]!.toFixed(1)})`,
+  );
 }
 
 async function main() {
@@ -203,10 +261,12 @@ async function main() {
     const load0 = loadavg()[0]!;
     const results: Record<string, Record<string, Opening[]>> = {};
     for (const b of builds) results[b.name] = {};
+    if (opts.trace) mkdirSync(path.resolve(ROOT, opts.trace), { recursive: true });
     for (const t of targets) {
       for (const b of builds) {
         await openOnce(browser, b.url + t.path, t.cookies); // not counted: the server's first picture
         results[b.name]![t.name] = [];
+        if (opts.trace) await traceOnce(browser, b.name, t, b.url + t.path, opts.trace);
       }
       for (let k = 0; k < opts.runs; k++) {
         // Which build goes first alternates, so neither always meets the machine just after the other.
