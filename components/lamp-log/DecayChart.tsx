@@ -59,7 +59,13 @@ export function DecayChart({
   const x = scaleUtc()
     .domain([new Date(start), new Date(start + lastDay * DAY_MS)])
     .range([M.left, W - M.right]);
-  const xd = (days: number) => x(new Date(start + days * DAY_MS));
+  // The same mapping on milliseconds: the curve and its band place hundreds of points, and a Date for
+  // each costs the server real time (Next wraps the Date constructor while it renders). The time scale
+  // is kept for its calendar ticks.
+  const xMs = scaleLinear()
+    .domain([start, start + lastDay * DAY_MS])
+    .range([M.left, W - M.right]);
+  const xd = (days: number) => xMs(start + days * DAY_MS);
   const y = scaleLinear()
     .domain([0, maxY * 1.08])
     .nice()

@@ -42,7 +42,8 @@ export default async function LampPage({ params, searchParams }: SegmentPageProp
   const { lamp, canEdit, resource } = found;
   const [detail, designLamps, example, zone] = await Promise.all([
     lampDetail(lamp, todayIso()),
-    designLampsOf(lamp.enclosureId),
+    // Only the settings form lists the design's lamps, and only an editor sees it.
+    canEdit ? designLampsOf(lamp.enclosureId) : [],
     isExampleData(resource.organisationId),
     viewerZone(),
   ]);
@@ -156,6 +157,8 @@ export default async function LampPage({ params, searchParams }: SegmentPageProp
               <h2 id="settings" className="mb-3 text-lead font-semibold">
                 Lamp settings
               </h2>
+              {/* The same summary object as the facts': React sends it to the browser once and refers to it
+                  here, so a smaller copy of its fields for this form would add bytes, not save them. */}
               <LampSettings lamp={s} designLamps={designLamps} canDelete={can(user, 'delete', resource)} />
             </section>
           )}
