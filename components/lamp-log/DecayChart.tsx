@@ -71,6 +71,10 @@ export function DecayChart({
     .nice()
     .range([H - M.bottom, M.top]);
   const clampY = (v: number) => y(Math.min(v, y.domain()[1]!));
+  // A reading's mark to a tenth of a unit, as the curve's path is drawn (a shift of at most 0.05 of a
+  // unit): a lamp logged for years has hundreds, each sent as HTML and again as the page's data, and
+  // sixteen-digit coordinates were about a tenth of each.
+  const tenth = (v: number) => Math.round(v * 10) / 10;
 
   const curvePath = linePath(chart.curve.map((c) => ({ x: xd(c.days), y: clampY(c.value) })));
   const bandPathD = bandPath(
@@ -223,8 +227,8 @@ export function DecayChart({
       {chart.points.map((p, i) => (
         <g key={p.id ?? i} data-testid="reading-point">
           <circle
-            cx={xd(p.days)}
-            cy={clampY(p.value)}
+            cx={tenth(xd(p.days))}
+            cy={tenth(clampY(p.value))}
             r="5"
             {...POINT_LOOK[p.use ?? 'fit']}
             strokeWidth="1.5"
