@@ -223,22 +223,24 @@ export function DecayChart({
         </g>
       )}
 
-      {/* readings */}
-      {chart.points.map((p, i) => (
-        <g key={p.id ?? i} data-testid="reading-point">
-          <circle
-            cx={tenth(xd(p.days))}
-            cy={tenth(clampY(p.value))}
-            r="5"
-            {...POINT_LOOK[p.use ?? 'fit']}
-            strokeWidth="1.5"
-          />
-          {/* One string: React renders a <title> with several children empty on the server. */}
-          <title>
-            {`${formatMoment(p.takenAt, zone, 'day')}: ${formatValue(p.raw, unit)} at ${p.distanceCm} cm → ${formatValue(p.value, unit)} bare at 30 cm${p.why ? ` (${p.why})` : ''}`}
-          </title>
-        </g>
-      ))}
+      {/* readings: the usual look is set once on the group and inherited (fill, stroke and its width
+          are inherited in SVG), so a mark carries colours only when it is not fitted the usual way */}
+      <g {...POINT_LOOK.fit} strokeWidth="1.5">
+        {chart.points.map((p, i) => (
+          <g key={p.id ?? i} data-testid="reading-point">
+            <circle
+              cx={tenth(xd(p.days))}
+              cy={tenth(clampY(p.value))}
+              r="5"
+              {...(p.use && p.use !== 'fit' ? POINT_LOOK[p.use] : {})}
+            />
+            {/* One string: React renders a <title> with several children empty on the server. */}
+            <title>
+              {`${formatMoment(p.takenAt, zone, 'day')}: ${formatValue(p.raw, unit)} at ${p.distanceCm} cm → ${formatValue(p.value, unit)} bare at 30 cm${p.why ? ` (${p.why})` : ''}`}
+            </title>
+          </g>
+        ))}
+      </g>
     </PlotFrame>
   );
 }
