@@ -125,6 +125,10 @@ export async function designAt(page: Page, p: { x: number; y: number }): Promise
 /** The canvas layers, bottom up: backdrop and fields, objects, overlay (selection, highlight, ruler). */
 export const LAYER = { backdrop: 0, objects: 1, overlay: 2 } as const;
 
+/** How far a pixel is from the enclosure back's paper colour (#fbfaf6), summed over the three channels. */
+export const paperDistance = (px: number[]) =>
+  Math.abs(px[0]! - 0xfb) + Math.abs(px[1]! - 0xfa) + Math.abs(px[2]! - 0xf6);
+
 /** RGBA of one layer's canvas at a design point (cm, y up). */
 export function layerPixel(page: Page, layer: number, x: number, y: number): Promise<number[]> {
   return page.evaluate(

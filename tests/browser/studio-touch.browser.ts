@@ -16,6 +16,7 @@ import {
   fieldsSettled,
   inspected,
   layerPixel,
+  paperDistance,
   openStudio,
   summary,
 } from './studio-helpers';
@@ -81,9 +82,6 @@ async function tap(cdp: CDPSession, p: { x: number; y: number }) {
 /** Whether anything on the page is wider than the screen (a page a thumb would have to scroll sideways). */
 const overflowsSideways = (page: Page) =>
   page.evaluate(() => document.documentElement.scrollWidth > window.innerWidth + 1);
-
-const paperDistance = (px: number[]) =>
-  Math.abs(px[0]! - 0xfb) + Math.abs(px[1]! - 0xfa) + Math.abs(px[2]! - 0xf6);
 
 /** The canvas fills the screen's width and most of its height; the field is drawn under the tube. */
 async function canvasFirst(page: Page, viewport: { width: number; height: number }) {
