@@ -1,7 +1,7 @@
 import { NextResponse, type NextRequest } from 'next/server';
 import { hasControlCharacter } from '@/lib/auth/return-to';
 import { contentSecurityPolicy, makeNonce } from '@/lib/security/csp';
-import { heldShareServer, heldShareToken } from '@/lib/variants/share-html-path';
+import { heldRoutePath, heldShareServer, heldShareToken } from '@/lib/variants/share-html-path';
 
 /** Query parameters that name a page to return to: a control character in one is an attack, not a typo. */
 const RETURN_PARAMS = ['callbackUrl', 'returnTo'];
@@ -45,7 +45,7 @@ export async function proxy(request: NextRequest): Promise<Response> {
   const response =
     token === null
       ? NextResponse.next({ request: { headers } })
-      : NextResponse.rewrite(new URL(`/s/${token}/held${search}`, request.url), { request: { headers } });
+      : NextResponse.rewrite(new URL(heldRoutePath(token, search), request.url), { request: { headers } });
   response.headers.set('Content-Security-Policy', csp);
   return response;
 }

@@ -17,6 +17,11 @@
  */
 export type CspOptions = { nonce: string; dev?: boolean };
 
+/** The nonce of a Content-Security-Policy (`'nonce-…'`), or null. */
+export function nonceOf(policy: string | null): string | null {
+  return policy ? (/'nonce-([^']+)'/.exec(policy)?.[1] ?? null) : null;
+}
+
 export function contentSecurityPolicy({ nonce, dev = false }: CspOptions): string {
   const directives: Record<string, string[]> = {
     'default-src': ["'self'"],

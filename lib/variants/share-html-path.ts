@@ -45,19 +45,8 @@ export function heldShareToken(
   return page[1]!;
 }
 
-/**
- * The held route's path for this request (`/s/<token>/held` with the query), or null when the request
- * goes to the page itself.
- */
-export function heldSharePath(
-  method: string,
-  pathname: string,
-  search: string,
-  headers: Headers,
-): string | null {
-  const token = heldShareToken(method, pathname, search, headers);
-  return token === null ? null : `/s/${token}/held${search}`;
-}
+/** The held route's path for a visit of this link (`/s/<token>/held` with the visit's query). */
+export const heldRoutePath = (token: string, search: string) => `/s/${token}/held${search}`;
 
 /** A share page visit as the proxy hands it over: the link, the query, the request's nonce and headers. */
 export type HeldShareVisit = { token: string; search: string; nonce: string; headers: Headers };

@@ -1,6 +1,7 @@
 import 'server-only';
 import { createHash } from 'node:crypto';
 import { getBotType } from 'next/dist/shared/lib/router/utils/is-bot';
+import { nonceOf } from '@/lib/security/csp';
 import { FALLBACK_ZONE, knownZone, ZONE_COOKIE } from '@/lib/time/format';
 import { Lru } from './lru';
 import type { ShareRecord } from './queries';
@@ -68,11 +69,6 @@ export const renderThroughServer: Renderer = async ({ path, zone, userAgent }) =
   });
   return { status: res.status, headers, body, nonce: nonceOf(res.headers.get('content-security-policy')) };
 };
-
-/** The nonce of a Content-Security-Policy (`'nonce-…'`), or null. */
-export function nonceOf(policy: string | null): string | null {
-  return policy ? (/'nonce-([^']+)'/.exec(policy)?.[1] ?? null) : null;
-}
 
 /**
  * A page ready to serve with any nonce: its body, and its header values (the Link header preloads the

@@ -5,11 +5,11 @@
 import { NextRequest } from 'next/server';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import * as shareRoute from '@/app/api/shares/[id]/route';
-import { contentSecurityPolicy, makeNonce } from '@/lib/security/csp';
+import { contentSecurityPolicy, makeNonce, nonceOf } from '@/lib/security/csp';
 import { ZONE_COOKIE } from '@/lib/time/format';
 import { findShare } from '@/lib/variants/queries';
 import {
-  heldSharePath,
+  heldShareToken,
   heldShareServer,
   offerHeldShareServer,
   SHARE_RENDER_HEADER,
@@ -17,7 +17,6 @@ import {
 } from '@/lib/variants/share-html-path';
 import {
   heldShareHtml,
-  nonceOf,
   sharePageHtml,
   sharePagesHtml,
   type RenderedPage,
@@ -252,7 +251,7 @@ describe('the proxy sends a browser’s share page visit to the held route', () 
     expect(await rewritten(`/s/${token}`, { headers: { [SHARE_RENDER_HEADER]: '1' } })).toBeNull();
     expect(await rewritten(`/s/${token}/report?format=pdf`)).toBeNull();
     expect(await rewritten(`/s/${token}/picture/1/uvi.svg`)).toBeNull();
-    expect(heldSharePath('GET', '/studio/1', '', new Headers())).toBeNull();
+    expect(heldShareToken('GET', '/studio/1', '', new Headers())).toBeNull();
   });
 });
 
