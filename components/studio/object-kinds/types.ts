@@ -1,6 +1,7 @@
-// The studio's half of an object kind's record: what only the canvas and the inspector need (Konva,
-// React: the canvas shape and the inspector form), kept out of the pure record in shared/object-kinds/ so that the server's report raster and the
-// share pages never load it. One file a kind, registered in index.ts and found by type.
+// The studio's half of an object kind's record: what only the canvas and the inspector need (Konva and
+// React: the canvas shape, the palette icon and the inspector form), kept out of the pure record in
+// shared/object-kinds/ so that the server's report raster and the share pages never load it. One file a
+// kind, registered in index.ts and found by type.
 import type { ReactNode } from 'react';
 import type { ObjectOf, ObjectType } from '@/shared/object-kinds';
 import type { Camera } from '../geometry/camera';
