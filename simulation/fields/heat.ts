@@ -28,28 +28,39 @@ export interface HeatParams {
 export function surfaceTempC(q: number, airC: number, emissivity: number, hc: number): number {
   if (!(q > 0)) return airC;
   const b = balanceAt(airC, emissivity, hc);
-  return solveBalance(q, b.ta, b.ta4, b.es, hc, b.a1, b.a11, b.a24) - KELVIN;
+  return solveBalance(q, b.ta, b.ta4, b.es, hc, b.a1, b.a11, b.a24, POINT_STEP_K) - KELVIN;
 }
 
 /**
+ * Newton stops once a step is under this (kelvin). After a step s the error left is at most (1.5/T)·s²
+ * (solveBalance): a point value (surfaceTempC) is exact to 1e-8 K; a grid cell (surfaceTempRow) to
+ * 1.5/300 × 0.05² ≈ 1.3e-5 K, far under what a float32 field near 30 °C resolves after rounding by more
+ * than a few units in its last place, and it usually saves the second step (the first guess is within a
+ * few hundredths of a kelvin at usual fluxes).
+ */
+const POINT_STEP_K = 1e-3;
+export const ROW_STEP_K = 0.05;
+
+/**
  * surfaceTempC over cells from..to−1 of a row at one air temperature, for radiant irradiance `e` (W/m²,
- * absorbed with `absorptance`), written to `out` (which may be `e` itself). The constants of the balance
- * are worked out once for the row; each cell's arithmetic is surfaceTempC's, so the bits are the same.
+ * absorbed with `absorptance`), written to out[base + c] (the grid's own row). The constants of the
+ * balance are worked out once for the row, and Newton stops at ROW_STEP_K.
  */
 export function surfaceTempRow(
   e: Float64Array,
-  out: Float64Array,
   from: number,
   to: number,
   airC: number,
   absorptance: number,
   emissivity: number,
   hc: number,
+  out: Float32Array | Float64Array,
+  base: number,
 ): void {
   const { ta, ta4, es, a1, a11, a24 } = balanceAt(airC, emissivity, hc);
   for (let c = from; c < to; c++) {
     const q = absorptance * e[c]!;
-    out[c] = q > 0 ? solveBalance(q, ta, ta4, es, hc, a1, a11, a24) - KELVIN : airC;
+    out[base + c] = q > 0 ? solveBalance(q, ta, ta4, es, hc, a1, a11, a24, ROW_STEP_K) - KELVIN : airC;
   }
 }
 
@@ -72,21 +83,21 @@ function solveBalance(
   a1: number,
   a11: number,
   a24: number,
+  stepK: number,
 ): number {
   // First guess: the root of the balance cut after its quadratic term in x = Ts − Ta,
   // a2·x² + a1·x = q. The terms left out (4εσTa·x³ + εσx⁴) are positive for x > 0, so the guess lies
   // above the root and Newton decreases monotonically from it (the balance is convex); it is already
   // within a few hundredths of a kelvin at usual fluxes, one or two steps fewer than starting from the
   // linear guess q/a1. Newton's error after a step of size s is at most f''/(2f')·s² ≤ (1.5/T)·s²
-  // (f' ≥ 4εσT³, f'' = 12εσT²): below 1e-8 K once a step is under 1e-3 K, far under the float32 the
-  // fields are stored in.
+  // (f' ≥ 4εσT³, f'' = 12εσT²): below 1e-8 K once a step is under 1e-3 K (see POINT_STEP_K).
   let t = ta + (2 * q) / (a1 + Math.sqrt(a11 + a24 * q));
   for (let k = 0; k < 30; k++) {
     const t3 = t * t * t;
     const f = hc * (t - ta) + es * (t3 * t - ta4) - q;
     const step = f / (hc + 4 * es * t3);
     t -= step;
-    if (Math.abs(step) < 1e-3) break;
+    if (Math.abs(step) < stepK) break;
   }
   return t;
 }

@@ -226,12 +226,11 @@ export class FieldSolver {
         }
       }
       const air = airTempC((j + 0.5) * cell, scene.height, scene.roomC, scene.airRiseK);
-      surfaceTempRow(rowQ, rowQ, 0, nx, air, absorptance, emissivity, hc);
       const base = j * nx;
+      surfaceTempRow(rowQ, 0, nx, air, absorptance, emissivity, hc, tempOut, base);
       for (let i = 0; i < nx; i++) {
         uvbOut[base + i] = rowU[i]!;
         uviOut[base + i] = rowV[i]!;
-        tempOut[base + i] = rowQ[i]!;
       }
     }
     this.stats.cellsEvaluated = evaluated;
@@ -373,12 +372,11 @@ function sumRow(s: RowSums, base: number, from: number, to: number, airC: number
     }
   }
   const { absorptance, emissivity } = HEAT_DEFAULTS;
-  surfaceTempRow(q, q, from, to, airC, absorptance, emissivity, s.hc);
   const { uvb, uvi, tempC } = s.out;
+  surfaceTempRow(q, from, to, airC, absorptance, emissivity, s.hc, tempC, base);
   for (let i = from; i < to; i++) {
     uvb[base + i] = u[i]!;
     uvi[base + i] = v[i]!;
-    tempC[base + i] = q[i]!;
   }
 }
 
