@@ -76,6 +76,12 @@ export class RowData {
   vCount: Int32Array;
   A: Float64Array;
   B: Float64Array;
+  /**
+   * With inRange: the one corner whose projection is lowest (lv) and highest (hv) at every cell the caller
+   * asks for, by a clear margin (pickCorners), or −1 when no corner is (then all are projected).
+   */
+  lv: Int32Array;
+  hv: Int32Array;
   constructor(capacity: number) {
     const c = Math.max(1, capacity);
     this.act = new Int32Array(c);
@@ -86,6 +92,8 @@ export class RowData {
     this.fb = new Float64Array(c);
     this.vStart = new Int32Array(c);
     this.vCount = new Int32Array(c);
+    this.lv = new Int32Array(c);
+    this.hv = new Int32Array(c);
     this.A = new Float64Array(c * MAX_CLIPPED);
     this.B = new Float64Array(c * MAX_CLIPPED);
   }
@@ -292,6 +300,8 @@ export function evalSpan(
   const occ = row.occ;
   const vStart = row.vStart;
   const vCount = row.vCount;
+  const lv = row.lv;
+  const hv = row.hv;
   const tUv = lamp.tUv;
   const tIr = lamp.tIr;
   const sLo = s.lo;
@@ -331,15 +341,23 @@ export function evalSpan(
           continue;
         }
       }
-      const v0 = vStart[c]!;
-      const v1 = v0 + vCount[c]!;
       let lo = Infinity;
       let hi = -Infinity;
-      // Math.min and max compile without branches: which corner is lowest changes along the row.
-      for (let v = v0; v < v1; v++) {
-        const x = A[v]! + B[v]! * qx;
-        lo = Math.min(lo, x);
-        hi = Math.max(hi, x);
+      const vl = inRange ? lv[c]! : -1;
+      const vh = inRange ? hv[c]! : -1;
+      if (vl >= 0 && vh >= 0) {
+        // Every other corner projects clearly above (below) these ones here: the same min and max.
+        lo = A[vl]! + B[vl]! * qx;
+        hi = A[vh]! + B[vh]! * qx;
+      } else {
+        const v0 = vStart[c]!;
+        const v1 = v0 + vCount[c]!;
+        // Math.min and max compile without branches: which corner is lowest changes along the row.
+        for (let v = v0; v < v1; v++) {
+          const x = A[v]! + B[v]! * qx;
+          lo = Math.min(lo, x);
+          hi = Math.max(hi, x);
+        }
       }
       if (!tube) {
         if (lo < s1 && s1 < hi) {

@@ -9,7 +9,7 @@ import type { Design } from '../model/schema';
 import { lampUvbFactor } from '../model/resolve';
 import type { Occluder } from '../geometry/occluders';
 import { compileScene, type LampGeom, type Scene } from './scene';
-import { fillLamp, refillChanged, sweepLampRow, Workspace } from './workspace';
+import { fillLamp, refillChanged, RowTotals, sweepLampRow, Workspace } from './workspace';
 import { probeScene, probeSceneByLamp, type LampSamples } from './probe';
 import { airTempC, HEAT_DEFAULTS, surfaceTempRow } from './heat';
 import { DEFAULT_CELL_CM, gridSize, type FieldGrid, type ProbeResult, type SimOptions } from './types';
@@ -203,28 +203,22 @@ export class FieldSolver {
       fi[k] = lamp.uvI > 0 ? f * lamp.lamp.uviPerUvb : 0;
     }
     const [uvbOut, uviOut, tempOut] = resultArrays(cells);
-    const { u: rowU, v: rowV, q: rowQ } = onceRow(nx);
+    const into = onceRow;
     let evaluated = 0;
+    // Each lamp's sweep adds its values into the row's totals as it evaluates them, in scene order.
     for (let j = 0; j < ny; j++) {
-      rowU.fill(0, 0, nx);
-      rowV.fill(0, 0, nx);
-      rowQ.fill(0, 0, nx);
-      for (let k = 0; k < n; k++) {
-        const count = sweepLampRow(ws, lamps[k]!, scene.occluders, j, nx, cell);
-        if (count === 0) continue;
-        evaluated += count;
-        const ru = ws.rowUv;
-        const ri = ws.rowIr;
-        const a = fu[k]!;
-        const b = fi[k]!;
-        // Rounded to float32 as the cached path stores each lamp's fields.
-        for (let i = ws.i0, end = ws.i1; i <= end; i++) {
-          const val = Math.fround(ru[i]!);
-          rowU[i] = rowU[i]! + val * a;
-          rowV[i] = rowV[i]! + val * b;
-          rowQ[i] = rowQ[i]! + Math.fround(ri[i]!);
+      into.clear(nx);
+      ws.into = into;
+      try {
+        for (let k = 0; k < n; k++) {
+          into.a = fu[k]!;
+          into.b = fi[k]!;
+          evaluated += sweepLampRow(ws, lamps[k]!, scene.occluders, j, nx, cell);
         }
+      } finally {
+        ws.into = null;
       }
+      const { u: rowU, v: rowV, q: rowQ } = into;
       const air = airTempC((j + 0.5) * cell, scene.height, scene.roomC, scene.airRiseK);
       const base = j * nx;
       surfaceTempRow(rowQ, 0, nx, air, absorptance, emissivity, hc, tempOut, base);
@@ -406,11 +400,4 @@ function resultArrays(cells: number): [Float32Array, Float32Array, Float32Array]
  * The one-off path's row totals, kept between calls (the computation is synchronous, so one set per thread
  * serves every call): a full field then allocates only its results.
  */
-let once: { u: Float64Array; v: Float64Array; q: Float64Array } | null = null;
-
-function onceRow(nx: number) {
-  if (!once || once.u.length < nx) {
-    once = { u: new Float64Array(nx), v: new Float64Array(nx), q: new Float64Array(nx) };
-  }
-  return once;
-}
+const onceRow = new RowTotals();

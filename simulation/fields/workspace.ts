@@ -7,7 +7,37 @@ import type { LampGeom } from './scene';
 import { evalSpan, prepareRow, RowData, Scratch, sortPrefix } from './kernel';
 import { tubeG } from '../sources/tube';
 
+/**
+ * Row totals a sweep adds its lamp into straight away (Workspace.into): UVB × a, UVB × b (UV Index) and
+ * the radiant irradiance, each lamp value rounded to float32 first, as the cached path stores it.
+ */
+export class RowTotals {
+  u = new Float64Array(1);
+  v = new Float64Array(1);
+  q = new Float64Array(1);
+  a = 0;
+  b = 0;
+
+  /** Make room for rows of nx cells and set them to zero. */
+  clear(nx: number) {
+    if (this.u.length < nx) {
+      this.u = new Float64Array(nx);
+      this.v = new Float64Array(nx);
+      this.q = new Float64Array(nx);
+      return;
+    }
+    this.u.fill(0, 0, nx);
+    this.v.fill(0, 0, nx);
+    this.q.fill(0, 0, nx);
+  }
+}
+
 export class Workspace {
+  /**
+   * When set, a row sweep adds its lamp's values into these totals instead of writing ws.rowUv and rowIr
+   * (the one-off path: one pass over a row per lamp, nothing written twice).
+   */
+  into: RowTotals | null = null;
   row = new RowData(1);
   row2 = new RowData(1);
   scratch = new Scratch(1);
@@ -105,8 +135,8 @@ export function fillLamp(
 }
 
 /**
- * Evaluates row j of a lamp into ws.rowUv and ws.rowIr (cells ws.i0..ws.i1; the rest of the row gets
- * nothing from this lamp) and returns the number of cells evaluated, 0 when the lamp cannot light the row.
+ * Evaluates row j of a lamp into ws.rowUv and ws.rowIr, or adds it into ws.into (cells ws.i0..ws.i1; the
+ * rest of the row gets nothing from this lamp) and returns the number of cells evaluated, 0 when the lamp cannot light the row.
  * The caller makes room for nx cells (ws.ensureRow).
  */
 export function sweepLampRow(
@@ -150,6 +180,7 @@ function sweepRow(ws: Workspace, lamp: LampGeom, row: RowData, i0: number, i1: n
   const s = ws.scratch;
   const ru = ws.rowUv;
   const ri = ws.rowIr;
+  const into = ws.into;
   const n = row.count;
   const first = ws.first;
   const last = ws.last;
@@ -210,7 +241,8 @@ function sweepRow(ws: Workspace, lamp: LampGeom, row: RowData, i0: number, i1: n
     }
     if (gu === 0 && gi === 0) {
       // Fully hidden: what evalCell returns once its product reaches zero (a loop: most pieces are a few
-      // cells, shorter than a fill call's own cost).
+      // cells, shorter than a fill call's own cost). Totals get nothing (adding zero changes no bit).
+      if (into) continue;
       for (let i = from; i < to; i++) {
         ru[i] = 0;
         ri[i] = 0;
@@ -219,20 +251,78 @@ function sweepRow(ws: Workspace, lamp: LampGeom, row: RowData, i0: number, i1: n
     }
     if (na === 0) {
       // No barrier hides part of the lamp here: the closed form straight, as evalCell would compute it.
-      openRun(lamp, row, from, to, cell, gu, gi, ru, ri);
+      openRun(lamp, row, from, to, cell, gu, gi, ru, ri, into);
       continue;
     }
+    for (let t = 0; t < na; t++) pickCorners(row, act[t]!, from, to, cell);
     row.nAct = na;
     row.gu0 = gu;
     row.gi0 = gi;
     row.inRange = true;
     evalSpan(lamp, row, from, to, cell, 0.5, ru, ri, s);
+    if (into) addSpan(into, ru, ri, from, to);
   }
   row.inRange = false;
   row.nAct = n;
   row.gu0 = 1;
   row.gi0 = 1;
   for (let c = 0; c < n; c++) act[c] = c;
+}
+
+/** Cells a piece must have before its corners are picked (pickCorners): below it the picking costs more. */
+const PICK_MIN_CELLS = 3;
+
+/**
+ * For cells from..to−1, the barrier c's corner whose projection is lowest at every one of them (RowData.lv)
+ * and the one highest (hv), or −1. A projection is linear in Q.x, so a corner below every other by more
+ * than the margin at the first and the last cell is so at every cell between, and the margin (1e-9 of the
+ * magnitudes, which are linear in Q.x ≥ 0 too) is far above the rounding of A + B·Q.x: the min and max
+ * over all corners are then exactly that corner's values, bit for bit.
+ */
+function pickCorners(row: RowData, c: number, from: number, to: number, cell: number) {
+  row.lv[c] = -1;
+  row.hv[c] = -1;
+  if (to - from < PICK_MIN_CELLS) return;
+  const qf = (from + 0.5) * cell;
+  const qt = (to - 1 + 0.5) * cell;
+  const A = row.A;
+  const B = row.B;
+  const v0 = row.vStart[c]!;
+  const v1 = v0 + row.vCount[c]!;
+  let lo = v0;
+  let hi = v0;
+  for (let v = v0 + 1; v < v1; v++) {
+    const x = A[v]! + B[v]! * qf;
+    if (x < A[lo]! + B[lo]! * qf) lo = v;
+    if (x > A[hi]! + B[hi]! * qf) hi = v;
+  }
+  if (clearlyExtreme(A, B, v0, v1, lo, qf, qt, 1)) row.lv[c] = lo;
+  if (clearlyExtreme(A, B, v0, v1, hi, qf, qt, -1)) row.hv[c] = hi;
+}
+
+/** Whether every corner but m projects above m (sign 1) or below it (−1) by the margin at qf and at qt. */
+function clearlyExtreme(
+  A: Float64Array,
+  B: Float64Array,
+  v0: number,
+  v1: number,
+  m: number,
+  qf: number,
+  qt: number,
+  sign: number,
+): boolean {
+  const am = A[m]!;
+  const bm = B[m]!;
+  for (let v = v0; v < v1; v++) {
+    if (v === m) continue;
+    const a = A[v]!;
+    const b = B[v]!;
+    const magF = Math.abs(a) + Math.abs(b * qf) + Math.abs(am) + Math.abs(bm * qf);
+    const magT = Math.abs(a) + Math.abs(b * qt) + Math.abs(am) + Math.abs(bm * qt);
+    if (!(sign * (a + b * qf - (am + bm * qf)) > 1e-9 * (1 + magF))) return false;
+    if (!(sign * (a + b * qt - (am + bm * qt)) > 1e-9 * (1 + magT))) return false;
+  }
+  return true;
 }
 
 /**
@@ -256,10 +346,22 @@ function lastBelow(x: number, cell: number, from: number, to: number): number {
   return i;
 }
 
+/** Adds cells from..to−1 of a lamp's row values into the totals (RowTotals: rounded as stored). */
+function addSpan(into: RowTotals, ru: Float64Array, ri: Float64Array, from: number, to: number) {
+  const { u, v, q, a, b } = into;
+  for (let i = from; i < to; i++) {
+    const val = Math.fround(ru[i]!);
+    u[i] = u[i]! + val * a;
+    v[i] = v[i]! + val * b;
+    q[i] = q[i]! + Math.fround(ri[i]!);
+  }
+}
+
 /**
  * Cells from..to−1 of a row where no barrier hides part of the lamp and those hiding all of it pass gu
  * (UVB) and gi (infrared): evalCell's arithmetic with no active barrier, in one tight loop per lamp form
- * (the same operations in the same order, so the same bits).
+ * (the same operations in the same order, so the same bits), written to ru and ri or added into `into`
+ * as addSpan would add them.
  */
 function openRun(
   lamp: LampGeom,
@@ -271,6 +373,7 @@ function openRun(
   gi: number,
   ru: Float64Array,
   ri: Float64Array,
+  into: RowTotals | null,
 ) {
   const uvI = lamp.uvI;
   const irI = lamp.irI;
@@ -279,6 +382,18 @@ function openRun(
     const scale = row.scale;
     const s1 = lamp.s1;
     const s2 = lamp.s2;
+    if (into) {
+      const { u, v, q, a, b } = into;
+      for (let i = from; i < to; i++) {
+        const qx = (i + 0.5) * cell;
+        const f = (tubeG(s2 - qx, d) - tubeG(s1 - qx, d)) * scale;
+        const val = Math.fround(uvI * f * gu);
+        u[i] = u[i]! + val * a;
+        v[i] = v[i]! + val * b;
+        q[i] = q[i]! + Math.fround(irI * f * gi);
+      }
+      return;
+    }
     for (let i = from; i < to; i++) {
       const qx = (i + 0.5) * cell;
       const f = (tubeG(s2 - qx, d) - tubeG(s1 - qx, d)) * scale;
@@ -306,6 +421,7 @@ function openRun(
     ru[i] = inBeam ? uvI * f * gu : 0;
     ri[i] = (inBeam ? irI : irOut) * f * gi;
   }
+  if (into) addSpan(into, ru, ri, from, to);
 }
 
 /** The lamp with transmissions for another list of barriers. */
