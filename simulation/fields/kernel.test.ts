@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { arbDesign } from '../testing/arbitraries';
 import { compileScene } from './scene';
 import { evalCell, evalSpan, prepareRow, RowData, Scratch } from './kernel';
-import { fillLamp, Workspace } from './workspace';
+import { fillLamp, pickCorners, Workspace } from './workspace';
 import { gridSize } from './types';
 import { benchDesign } from '../testing/fixtures';
 import type { Design } from '../model/schema';
@@ -128,6 +128,52 @@ describe('shortcuts of the shadow kernel', () => {
     }
     return { off, pieces };
   }
+
+  it('a corner picked for a piece is the lowest (highest) projection at every cell of it, bit for bit', () => {
+    /** Picks over pieces of the row cut every `step` cells; corners picked, and cells where one is wrong. */
+    function check(design: Design, cell: number, step: number) {
+      const scene = compileScene(design);
+      const { nx, ny } = gridSize(design.enclosure.width, design.enclosure.height, cell);
+      const row = new RowData(scene.occluders.length);
+      const s = new Scratch(scene.occluders.length);
+      let picked = 0;
+      let wrong = 0;
+      for (const lamp of scene.lamps) {
+        for (let j = 0; j < ny; j++) {
+          if (!prepareRow(lamp, scene.occluders, (j + 0.5) * cell, row, s)) continue;
+          for (let from = 0; from < nx; from += step) {
+            const to = Math.min(nx, from + step);
+            for (let c = 0; c < row.count; c++) {
+              pickCorners(row, c, from, to, cell);
+              const vl = row.lv[c]!;
+              const vh = row.hv[c]!;
+              if (vl >= 0) picked++;
+              if (vh >= 0) picked++;
+              for (let i = from; i < to; i++) {
+                const qx = (i + 0.5) * cell;
+                const { lo, hi } = hidden(row, c, qx);
+                if (vl >= 0 && !Object.is(lo, row.A[vl]! + row.B[vl]! * qx)) wrong++;
+                if (vh >= 0 && !Object.is(hi, row.A[vh]! + row.B[vh]! * qx)) wrong++;
+              }
+            }
+          }
+        }
+      }
+      return { picked, wrong };
+    }
+    // The bench's design, in pieces as long as a row and as short as a few cells.
+    for (const step of [3, 17, 1000]) {
+      const r = check(benchDesign(), 0.5, step);
+      expect(r.picked).toBeGreaterThan(1000);
+      expect(r.wrong).toBe(0);
+    }
+    fc.assert(
+      fc.property(arbDesign({ maxObjects: 10 }), fc.integer({ min: 3, max: 40 }), (design, step) => {
+        expect(check(design, CELL, step).wrong).toBe(0);
+      }),
+      { numRuns: 60 },
+    );
+  });
 
   it("a row evaluated as one span (a tube's runs kept from cell to cell) has the bits of each cell alone", () => {
     // The bench's design: thousands of cells see a tube partly hidden by two to five barriers.

@@ -279,7 +279,7 @@ const PICK_MIN_CELLS = 3;
  * magnitudes, which are linear in Q.x ≥ 0 too) is far above the rounding of A + B·Q.x: the min and max
  * over all corners are then exactly that corner's values, bit for bit.
  */
-function pickCorners(row: RowData, c: number, from: number, to: number, cell: number) {
+export function pickCorners(row: RowData, c: number, from: number, to: number, cell: number) {
   row.lv[c] = -1;
   row.hv[c] = -1;
   if (to - from < PICK_MIN_CELLS) return;
