@@ -10,7 +10,7 @@ import * as password from '@/app/api/account/password/route';
 import * as sessions from '@/app/api/account/sessions/route';
 import * as enclosures from '@/app/api/enclosures/route';
 import * as members from '@/app/api/organisations/[id]/members/route';
-import { sessionUserFromHeaders } from '@/lib/api/session';
+import { decodeSessionCookie, sessionUserFromHeaders } from '@/lib/api/session';
 import { authorizeCredentials } from '@/lib/auth/credentials';
 import { SESSION_MAX_AGE_S, SESSION_RECHECK_MS, SESSION_REFRESH_MS, authOptions } from '@/lib/auth/options';
 import { authSecret } from '@/lib/auth/secret';
@@ -270,5 +270,45 @@ describe('next-auth JWT callback (what /api/auth/session answers)', () => {
     });
     const r = await listAs(`next-auth.session-token=${expired}`);
     expect(r.status).toBe(401);
+  });
+});
+
+describe('the session cookie, decoded once and remembered', () => {
+  /** A cookie of the staff member's that lapses `lifetimeS` from now. */
+  async function cookieLasting(lifetimeS: number) {
+    const user = (await User.findByPk(staff.id))!;
+    const token = await encode({
+      token: { sub: String(user.id), uid: user.id, sv: user.sessionVersion, sid: newSessionId() },
+      secret: authSecret(),
+      maxAge: lifetimeS,
+    });
+    return `next-auth.session-token=${token}`;
+  }
+
+  it('refuses a remembered cookie once it has lapsed', async () => {
+    const cookie = await cookieLasting(120);
+    expect((await sessionUserFromHeaders(new Headers({ cookie })))?.id).toBe(staff.id);
+    expect((await listAs(cookie)).status).toBe(200);
+    // Only the clock moves: the same cookie text, already decoded, is now past its lifetime (and next-auth's
+    // 15 s of leeway).
+    vi.useFakeTimers({ toFake: ['Date'], now: Date.now() + 140_000 });
+    try {
+      expect(await sessionUserFromHeaders(new Headers({ cookie }))).toBeNull();
+      expect((await listAs(cookie)).status).toBe(401);
+    } finally {
+      vi.useRealTimers();
+    }
+  });
+
+  it('refuses a remembered cookie changed by one character, and any cookie under another secret', async () => {
+    const cookie = await cookieLasting(600);
+    expect((await sessionUserFromHeaders(new Headers({ cookie })))?.id).toBe(staff.id);
+    const last = cookie.at(-2) === 'A' ? 'B' : 'A';
+    const changed = `${cookie.slice(0, -2)}${last}${cookie.at(-1)}`;
+    expect(await sessionUserFromHeaders(new Headers({ cookie: changed }))).toBeNull();
+    const token = cookie.split('=')[1]!;
+    expect(await decodeSessionCookie({ token, secret: authSecret() })).not.toBeNull();
+    expect(await decodeSessionCookie({ token, secret: `${authSecret()}-rotated` })).toBeNull();
+    expect(await decodeSessionCookie({ token, secret: authSecret() })).not.toBeNull();
   });
 });
