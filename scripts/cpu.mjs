@@ -113,7 +113,7 @@ function cpuMs(pid) {
 const agent = new http.Agent({ keepAlive: true, maxSockets: 1 });
 
 /** One GET, its body read whole; resolves its status and byte count. */
-function get(url, cookie) {
+function getOnce(url, cookie) {
   return new Promise((resolve, reject) => {
     const req = http.get(
       url,
@@ -128,6 +128,20 @@ function get(url, cookie) {
     req.on('timeout', () => req.destroy(new Error(`${url} took over 30 s`)));
     req.on('error', reject);
   });
+}
+
+/**
+ * A GET, asked again once when the kept-alive connection was closed under it: the server closes one that
+ * stayed idle past its keep-alive timeout (while the other servers were measured), and a request can
+ * cross that close. A reset request never reached the page's code.
+ */
+async function get(url, cookie) {
+  try {
+    return await getOnce(url, cookie);
+  } catch (e) {
+    if (e?.code !== 'ECONNRESET' && e?.code !== 'EPIPE') throw e;
+    return getOnce(url, cookie);
+  }
 }
 
 /** N sequential requests of one route; the server's CPU and the wall time a request, and the bytes. */
