@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { airTempC, KELVIN, STEFAN_BOLTZMANN, surfaceTempC, surfaceTempRow, topAirRiseK } from './heat';
+import { airTempC, finishRow, KELVIN, STEFAN_BOLTZMANN, surfaceTempC, topAirRiseK } from './heat';
 import { assess } from '../assess/assess';
 import { parseDesign } from '../model/parse';
 import { DESIGN_FORMAT, DESIGN_VERSION } from '../model/schema';
@@ -23,12 +23,18 @@ describe('surface energy balance', () => {
   it('solves a grid row (a looser Newton stop) to within 5e-5 K of the point solution', () => {
     // Fluxes from a glimmer to far past any basking spot, cold and warm air, still and moving air.
     const qs = [0, 1e-3, 0.5, 3, 20, 75, 150, 300, 600, 1200, 2500, 5000, 1e4, 3e4, 1e5];
-    const e = Float64Array.from(qs, (q) => q / 0.95);
-    const out = new Float64Array(qs.length + 2);
+    const row = {
+      u: new Float64Array(qs.length),
+      v: new Float64Array(qs.length),
+      q: Float64Array.from(qs, (q) => q / 0.95),
+    };
+    const n = qs.length + 2;
+    const fields = { uvb: new Float64Array(n), uvi: new Float64Array(n), tempC: new Float64Array(n) };
+    const out = fields.tempC;
     let worst = 0;
     for (const airC of [0, 18, 24, 35, 45]) {
       for (const hc of [3, 7, 15]) {
-        surfaceTempRow(e, 0, qs.length, airC, 0.95, 0.95, hc, out, 2);
+        finishRow(row, 0, qs.length, airC, 0.95, 0.95, hc, fields, 2);
         expect(out[2]).toBe(airC);
         qs.forEach((q, c) => {
           worst = Math.max(worst, Math.abs(out[2 + c]! - surfaceTempC(q, airC, 0.95, hc)));

@@ -33,34 +33,52 @@ export function surfaceTempC(q: number, airC: number, emissivity: number, hc: nu
 
 /**
  * Newton stops once a step is under this (kelvin). After a step s the error left is at most (1.5/T)·s²
- * (solveBalance): a point value (surfaceTempC) is exact to 1e-8 K; a grid cell (surfaceTempRow) to
- * 1.5/300 × 0.05² ≈ 1.3e-5 K, far under what a float32 field near 30 °C resolves after rounding by more
- * than a few units in its last place, and it usually saves the second step (the first guess is within a
- * few hundredths of a kelvin at usual fluxes).
+ * (solveBalance): a point value (surfaceTempC) is exact to 1e-8 K; a grid cell (finishRow) to
+ * 1.5/300 × 0.05² ≈ 1.3e-5 K — a few units in the last place of a float32 temperature near 30 °C (one unit
+ * is 1.9e-6 K) — and it usually saves the second step (the first guess is within a few hundredths of a
+ * kelvin at usual fluxes).
  */
 const POINT_STEP_K = 1e-3;
 export const ROW_STEP_K = 0.05;
 
+/** A grid row's totals (RowTotals): UVB, UV Index and radiant irradiance (W/m²) per cell. */
+export interface RowValues {
+  u: Float64Array;
+  v: Float64Array;
+  q: Float64Array;
+}
+
+/** A grid's result fields, cell (i, j) at j·nx + i. */
+export interface GridFields {
+  uvb: Float32Array | Float64Array;
+  uvi: Float32Array | Float64Array;
+  tempC: Float32Array | Float64Array;
+}
+
 /**
- * surfaceTempC over cells from..to−1 of a row at one air temperature, for radiant irradiance `e` (W/m²,
- * absorbed with `absorptance`), written to out[base + c] (the grid's own row). The constants of the
- * balance are worked out once for the row, and Newton stops at ROW_STEP_K.
+ * Cells from..to−1 of a row at one air temperature into the grid fields at base + c, in one pass: UVB and
+ * UV Index as summed, and surfaceTempC of the radiant irradiance (absorbed with `absorptance`). The
+ * constants of the balance are worked out once for the row, and Newton stops at ROW_STEP_K.
  */
-export function surfaceTempRow(
-  e: Float64Array,
+export function finishRow(
+  row: RowValues,
   from: number,
   to: number,
   airC: number,
   absorptance: number,
   emissivity: number,
   hc: number,
-  out: Float32Array | Float64Array,
+  out: GridFields,
   base: number,
 ): void {
   const { ta, ta4, es, a1, a11, a24 } = balanceAt(airC, emissivity, hc);
+  const { u, v, q: e } = row;
+  const { uvb, uvi, tempC } = out;
   for (let c = from; c < to; c++) {
+    uvb[base + c] = u[c]!;
+    uvi[base + c] = v[c]!;
     const q = absorptance * e[c]!;
-    out[base + c] = q > 0 ? solveBalance(q, ta, ta4, es, hc, a1, a11, a24, ROW_STEP_K) - KELVIN : airC;
+    tempC[base + c] = q > 0 ? solveBalance(q, ta, ta4, es, hc, a1, a11, a24, ROW_STEP_K) - KELVIN : airC;
   }
 }
 

@@ -11,7 +11,7 @@ import type { Occluder } from '../geometry/occluders';
 import { compileScene, type LampGeom, type Scene } from './scene';
 import { fillLamp, refillChanged, RowTotals, sweepLampRow, Workspace } from './workspace';
 import { probeScene, probeSceneByLamp, type LampSamples } from './probe';
-import { airTempC, HEAT_DEFAULTS, surfaceTempRow } from './heat';
+import { airTempC, finishRow, HEAT_DEFAULTS } from './heat';
 import { DEFAULT_CELL_CM, gridSize, type FieldGrid, type ProbeResult, type SimOptions } from './types';
 
 interface LampEntry {
@@ -203,6 +203,7 @@ export class FieldSolver {
       fi[k] = lamp.uvI > 0 ? f * lamp.lamp.uviPerUvb : 0;
     }
     const [uvbOut, uviOut, tempOut] = resultArrays(cells);
+    const out = { uvb: uvbOut, uvi: uviOut, tempC: tempOut };
     const into = onceRow;
     let evaluated = 0;
     // Each lamp's sweep adds its values into the row's totals as it evaluates them, in scene order.
@@ -218,14 +219,8 @@ export class FieldSolver {
       } finally {
         ws.into = null;
       }
-      const { u: rowU, v: rowV, q: rowQ } = into;
       const air = airTempC((j + 0.5) * cell, scene.height, scene.roomC, scene.airRiseK);
-      const base = j * nx;
-      surfaceTempRow(rowQ, 0, nx, air, absorptance, emissivity, hc, tempOut, base);
-      for (let i = 0; i < nx; i++) {
-        uvbOut[base + i] = rowU[i]!;
-        uviOut[base + i] = rowV[i]!;
-      }
+      finishRow(into, 0, nx, air, absorptance, emissivity, hc, out, j * nx);
     }
     this.stats.cellsEvaluated = evaluated;
     return { nx, ny, cellCm: cell, width, height, uvb: uvbOut, uvi: uviOut, tempC: tempOut };
@@ -366,12 +361,7 @@ function sumRow(s: RowSums, base: number, from: number, to: number, airC: number
     }
   }
   const { absorptance, emissivity } = HEAT_DEFAULTS;
-  const { uvb, uvi, tempC } = s.out;
-  surfaceTempRow(q, from, to, airC, absorptance, emissivity, s.hc, tempC, base);
-  for (let i = from; i < to; i++) {
-    uvb[base + i] = u[i]!;
-    uvi[base + i] = v[i]!;
-  }
+  finishRow(s, from, to, airC, absorptance, emissivity, s.hc, s.out, base);
 }
 
 /** The results of the last call, already in the float32 they are handed out in. */
