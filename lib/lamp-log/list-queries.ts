@@ -15,7 +15,7 @@ import {
   MAX_LAMP_SEARCH,
   type LampSortColumn,
 } from './list-view';
-import { lampRowsOf } from './queries';
+import { LAMP_ROW_SQL, lampRowsFrom, type LampRowRaw } from './queries';
 import { STATUS_RANK, STATUSES } from './status';
 import { catchUpInBackground } from './stored-outlooks';
 import { isCursor } from '@/lib/list-view';
@@ -338,12 +338,19 @@ export function lampListSql(query: LampListFilter, today: string) {
   const seekAt = values ? seekWhere(keys, dirs, values) : null;
   const where = seekAt ? `${sql} AND ${seekAt.sql}` : sql;
   const keyColumns = keys.map((k, i) => `${k.sql} AS k${i}`).join(', ');
+  // STRAIGHT_JOIN: read the organisation's outlooks in index order and stop at the page's end. Left to
+  // itself the optimiser may start from a small enclosures table and sort every lamp of it.
+  const pageSql = `SELECT STRAIGHT_JOIN o.lamp_id AS id, ${keyColumns} ${from} WHERE ${where} ORDER BY ${order} LIMIT :limit${
+    values ? '' : ' OFFSET :offset'
+  }`;
+  const pageKeys = keys.map((_, i) => `p.k${i}`);
   return {
-    // STRAIGHT_JOIN: read the organisation's outlooks in index order and stop at the page's end. Left to
-    // itself the optimiser may start from a small enclosures table and sort every lamp of it.
-    pageSql: `SELECT STRAIGHT_JOIN o.lamp_id AS id, ${keyColumns} ${from} WHERE ${where} ORDER BY ${order} LIMIT :limit${
-      values ? '' : ' OFFSET :offset'
-    }`,
+    pageSql,
+    // The page's rows in the same round trip: the page is found by the index alone (rows skipped by an
+    // OFFSET are never joined), then its few lamps are read by key and put in the page's order again.
+    rowsSql: `SELECT ${LAMP_ROW_SQL.columns}, ${pageKeys.join(', ')}
+       FROM (${pageSql}) p JOIN lamps l ON l.id = p.id ${LAMP_ROW_SQL.joins}
+      ORDER BY ${pageKeys.map((k, i) => `${k} ${dirs[i]}`).join(', ')}`,
     countSql: `SELECT COUNT(*) AS n ${from} WHERE ${sql}`,
     replacements: { ...replacements, ...seekAt?.replacements, limit: query.limit, offset: query.offset },
     backwards,
@@ -363,17 +370,14 @@ const sortId = (query: Pick<LampListFilter, 'sort' | 'descending' | 'due'>) =>
 export async function listLamps(query: LampListFilter) {
   const sequelize = getSequelize();
   const today = todayIso();
-  const { pageSql, countSql, replacements, backwards, sortId: sorted } = lampListSql(query, today);
+  const { rowsSql, countSql, replacements, backwards, sortId: sorted } = lampListSql(query, today);
   const scope = { organisationId: query.organisationId, keeperId: query.keeperId };
   // Views the counts rows answer (the plain list, a status) take their total from them; any other view
   // is counted by its own query, started beside them.
   const countable =
     !query.keeperId && !query.enclosure && !query.tech && !query.due && !(query.q ?? '').trim();
   const [found, counted, [counting]] = await Promise.all([
-    sequelize.query<{ id: number } & Record<string, unknown>>(pageSql, {
-      replacements,
-      type: QueryTypes.SELECT,
-    }),
+    sequelize.query<LampRowRaw & Record<string, unknown>>(rowsSql, { replacements, type: QueryTypes.SELECT }),
     countsOf(scope, today),
     countable
       ? Promise.resolve([null])
@@ -382,7 +386,8 @@ export async function listLamps(query: LampListFilter) {
   const { counts } = counted;
   const total = totalFromCounts(query, counted.byRank) ?? Number(counting?.n ?? 0);
   const ids = backwards ? [...found].reverse() : found;
-  const items = await lampRowsOf(
+  const items = await lampRowsFrom(
+    ids,
     ids.map((r) => r.id),
     today,
   );

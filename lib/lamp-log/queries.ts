@@ -275,7 +275,8 @@ export async function summarise(lamps: Lamp[], today = todayIso()): Promise<Lamp
   return (await summariesOf(ordered, today)).items;
 }
 
-type RawRow = {
+/** A lamp's table row as the database gives it (LAMP_ROW_SQL's columns). */
+export type LampRowRaw = {
   id: number;
   label: string;
   firstUsedOn: string;
@@ -294,6 +295,21 @@ type RawRow = {
 };
 
 /**
+ * The columns of a lamp's table row and the tables they come from, the lamp `l` with its enclosure,
+ * type and stored outlook; the caller adds the WHERE clause (or joins the lamps it has chosen first).
+ */
+export const LAMP_ROW_SQL = {
+  columns: `l.id, l.label, DATE_FORMAT(l.first_used_on, '%Y-%m-%d') AS firstUsedOn,
+            DATE_FORMAT(l.retired_on, '%Y-%m-%d') AS retiredOn, l.hours_per_day AS hoursPerDay,
+            l.outlook_version AS version, e.id AS enclosureId, e.name AS enclosureName,
+            e.keeper_id AS keeperId, e.species_name AS speciesName, t.name AS typeName, t.tech,
+            o.outlook_json AS outlookJson, o.source_version AS sourceVersion,
+            DATE_FORMAT(o.as_of, '%Y-%m-%d') AS asOf`,
+  joins: `JOIN enclosures e ON e.id = l.enclosure_id JOIN lamp_types t ON t.id = l.lamp_type_id
+       LEFT JOIN lamp_outlooks o ON o.lamp_id = l.id`,
+};
+
+/**
  * Table rows of these lamps, in the order of `ids`: one plain query of the columns a row shows (no
  * model instances, no lamp type's curves parsed), since a list page asks for a page of them on every
  * view. A lamp whose stored outlook is out of date goes through summariesOf instead (recomputed and
@@ -301,18 +317,19 @@ type RawRow = {
  */
 export async function lampRowsOf(ids: readonly number[], today = todayIso()): Promise<LampRow[]> {
   if (ids.length === 0) return [];
-  const raw = await getSequelize().query<RawRow>(
-    `SELECT l.id, l.label, DATE_FORMAT(l.first_used_on, '%Y-%m-%d') AS firstUsedOn,
-            DATE_FORMAT(l.retired_on, '%Y-%m-%d') AS retiredOn, l.hours_per_day AS hoursPerDay,
-            l.outlook_version AS version, e.id AS enclosureId, e.name AS enclosureName,
-            e.keeper_id AS keeperId, e.species_name AS speciesName, t.name AS typeName, t.tech,
-            o.outlook_json AS outlookJson, o.source_version AS sourceVersion,
-            DATE_FORMAT(o.as_of, '%Y-%m-%d') AS asOf
-       FROM lamps l JOIN enclosures e ON e.id = l.enclosure_id JOIN lamp_types t ON t.id = l.lamp_type_id
-       LEFT JOIN lamp_outlooks o ON o.lamp_id = l.id
-      WHERE l.id IN (:ids)`,
+  const raw = await getSequelize().query<LampRowRaw>(
+    `SELECT ${LAMP_ROW_SQL.columns} FROM lamps l ${LAMP_ROW_SQL.joins} WHERE l.id IN (:ids)`,
     { replacements: { ids: [...ids] }, type: QueryTypes.SELECT },
   );
+  return lampRowsFrom(raw, ids, today);
+}
+
+/** Table rows, in the order of `ids`, from rows read with LAMP_ROW_SQL (see lampRowsOf). */
+export async function lampRowsFrom(
+  raw: readonly LampRowRaw[],
+  ids: readonly number[],
+  today: string,
+): Promise<LampRow[]> {
   const rows = new Map<number, LampRow>();
   const stale: number[] = [];
   for (const r of raw) {
