@@ -23,6 +23,7 @@ import * as m0021 from './0021-lamp-outlook-status-counts';
 import * as m0022 from './0022-lamp-outlook-counts-row';
 import * as m0023 from './0023-customer-keeper-link';
 import * as m0024 from './0024-organisation-contact';
+import * as m0025 from './0025-lamp-outlook-due-last';
 
 export type Migration = {
   name: string;
@@ -59,4 +60,5 @@ export const migrations: Migration[] = [
   { name: '0022-lamp-outlook-counts-row', ...m0022 },
   { name: '0023-customer-keeper-link', ...m0023 },
   { name: '0024-organisation-contact', ...m0024 },
+  { name: '0025-lamp-outlook-due-last', ...m0025 },
 ];

@@ -26,8 +26,8 @@ const FIXTURE = './fixtures/migrated-schema.txt';
 // Tables no model reads or writes: counts kept by triggers in the database. (The migration ledger has
 // the model umzug defines for it.)
 const WITHOUT_MODEL = ['lamp_outlook_counts'];
-// Columns the database keeps itself, read only by raw SQL: a generated sort key and a trigger's flag.
-const DATABASE_KEPT = ['enclosures.name_key', 'lamps.outlook_pending'];
+// Columns the database keeps itself, read only by raw SQL: generated sort keys and a trigger's flag.
+const DATABASE_KEPT = ['enclosures.name_key', 'lamps.outlook_pending', 'lamp_outlooks.due_last'];
 
 type ColumnRow = {
   tbl: string;

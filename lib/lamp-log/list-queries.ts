@@ -83,12 +83,18 @@ const ORDER: Record<LampSortColumn, SortKey[]> = {
   // Lamps without the value (no reading, no UV output, no date) come last either way.
   lastReading: [key('o.last_reading_at IS NULL', 'asc'), key('o.last_reading_at', 'same', true), ID],
   remaining: [key('o.remaining_fraction IS NULL', 'asc'), key('o.remaining_fraction', 'same', true), ID],
-  due: [key('o.next_due_on IS NULL', 'asc'), key('o.next_due_on', 'same', true), ID],
+  // Lamps without a date come last either way: ascending, `due_last` (the date, a blank read as the
+  // last day; indexed); descending, see sortKeys.
+  due: [key('o.due_last'), ID],
 };
 
-/** The sort's keys; with a due filter every row has a date, and the plain order reads the date index. */
-function sortKeys(query: Pick<LampListFilter, 'sort' | 'due'>): SortKey[] {
-  return query.sort === 'due' && query.due ? [key('o.next_due_on'), ID] : ORDER[query.sort];
+/** The sort's keys: each order is one an index gives (with the organisation, and the status if filtered). */
+function sortKeys(query: Pick<LampListFilter, 'sort' | 'due' | 'descending'>): SortKey[] {
+  if (query.sort !== 'due') return ORDER[query.sort];
+  // With a due filter every row has a date, and the plain order reads the date index.
+  if (query.due) return [key('o.next_due_on'), ID];
+  // Descending, MariaDB's own order puts a blank date (NULL, the smallest) last: the date index backwards.
+  return query.descending ? [key('o.next_due_on', 'same', true), ID] : ORDER.due;
 }
 
 /** Each key's SQL direction for the order asked (`reverse`: the order read backwards, for Previous). */

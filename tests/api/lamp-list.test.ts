@@ -279,6 +279,12 @@ describe('GET /api/lamps', () => {
       {},
       { status: 'replace' },
       { due: '14', sort: 'due' },
+      // Lamps without a date last, either way, with or without a status.
+      { sort: 'due' },
+      { sort: 'due', dir: 'desc' },
+      { status: 'replace', sort: 'due' },
+      { status: 'fine', sort: 'due', dir: 'desc' },
+      { sort: 'due', after: after('due.a', ['2026-01-01', last - 25]) },
       { sort: 'lamp' },
       { after: after('urgency.a', [2, '2026-01-01', last - 25]) },
       { before: after('urgency.a', [2, '2026-01-01', last - 25]) },
