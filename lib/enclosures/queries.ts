@@ -1,5 +1,5 @@
 import 'server-only';
-import { col, fn, literal, Op, type OrderItem, type WhereOptions } from 'sequelize';
+import { col, fn, QueryTypes } from 'sequelize';
 import { z } from 'zod';
 import type { EnclosureWithKeeper } from '@/lib/access';
 import { notFound } from '@/lib/errors';
@@ -12,6 +12,7 @@ import {
 import { likeContains } from '@/lib/api/like';
 import { sortedListFields, withSort } from '@/lib/api/pagination';
 import { idSchema } from '@/lib/api/schemas';
+import { getSequelize } from '@/lib/db';
 import { Enclosure, User } from '@/models';
 
 /**
@@ -35,68 +36,43 @@ export const enclosureListQuery = z
 
 export type EnclosureListQuery = z.output<typeof enclosureListQuery>;
 
-// Raw SQL only from these constants, never from input. Sequelize aliases the table by the model
-// class's name, which a production build minifies, so the alias is read at run time; `keeper` is the
-// association's own alias.
-const E = (column: string) => `\`${Enclosure.name}\`.\`${column}\``;
-const KEEPER_NAME = '`keeper`.`name`';
+// Raw SQL only from these constants, never from input; values go in as replacements.
 /** What the Animal column shows: the animal's name, then the species. */
-const animalLabel = () => `CONCAT_WS(' ', NULLIF(${E('animal_name')}, ''), NULLIF(${E('species_name')}, ''))`;
+const ANIMAL_LABEL = `CONCAT_WS(' ', NULLIF(e.animal_name, ''), NULLIF(e.species_name, ''))`;
 
 /**
  * ORDER BY for a column. Empty text (no animal, a keeper who left) sorts last in both directions:
  * a list of blanks first is of no use to anyone. Ties fall to name, then id, so the order is total.
  */
-export function enclosureOrder(column: EnclosureSortColumn, descending: boolean): OrderItem[] {
+function enclosureOrder(column: EnclosureSortColumn, descending: boolean): string {
   const d = descending ? 'DESC' : 'ASC';
   // Names with numbers read as people number things: "Tub 5" before "Tub 10". `name_key` is the name with
   // its numbers zero-padded (a virtual column of the table), so the name and update orders read an index.
-  const naturalName = literal(E('name_key'));
-  const byColumn: Record<EnclosureSortColumn, OrderItem[]> = {
-    name: [[naturalName, d]],
-    animal: [
-      [literal(`${animalLabel()} = ''`), 'ASC'],
-      [literal(animalLabel()), d],
-    ],
-    keeper: [
-      [literal(`COALESCE(${KEEPER_NAME}, '') = ''`), 'ASC'],
-      [{ model: User, as: 'keeper' }, 'name', d],
-    ],
+  const byColumn: Record<EnclosureSortColumn, string[]> = {
+    name: [`e.name_key ${d}`],
+    animal: [`${ANIMAL_LABEL} = '' ASC`, `${ANIMAL_LABEL} ${d}`],
+    keeper: [`COALESCE(k.name, '') = '' ASC`, `k.name ${d}`],
     // Floor area decides which enclosure is bigger; height breaks ties.
-    size: [
-      [literal(`${E('width_cm')} * ${E('depth_cm')}`), d],
-      ['heightCm', d],
-    ],
-    updated: [['updatedAt', d]],
+    size: [`e.width_cm * e.depth_cm ${d}`, `e.height_cm ${d}`],
+    updated: [`e.updated_at ${d}`],
   };
   // Written once, not again as a tie-break: a repeated key would keep the name order off its index.
-  return [
-    ...byColumn[column],
-    ...(column === 'name' ? [] : [[naturalName, 'ASC'] as OrderItem]),
-    ['id', 'ASC'],
-  ];
+  return [...byColumn[column], ...(column === 'name' ? [] : ['e.name_key ASC']), 'e.id ASC'].join(', ');
 }
 
 /**
  * Every word of the search must appear (anywhere, any order) in the enclosure's name, the animal's
  * name, the species, or the keeper's name or e-mail. The database collation ignores case and accents.
  */
-export function enclosureSearch(q: string | undefined): WhereOptions {
+function enclosureSearch(q: string | undefined) {
   const words = (q ?? '').split(/\s+/).filter(Boolean);
-  if (words.length === 0) return {};
   return {
-    [Op.and]: words.map((word) => {
-      const like = { [Op.like]: likeContains(word) };
-      return {
-        [Op.or]: [
-          { name: like },
-          { animalName: like },
-          { speciesName: like },
-          { '$keeper.name$': like },
-          { '$keeper.email$': like },
-        ],
-      };
-    }),
+    sql: words.map(
+      (_, i) =>
+        ` AND (e.name LIKE :w${i} OR e.animal_name LIKE :w${i} OR e.species_name LIKE :w${i}` +
+        ` OR k.name LIKE :w${i} OR k.email LIKE :w${i})`,
+    ),
+    replacements: Object.fromEntries(words.map((word, i) => [`w${i}`, likeContains(word)])),
   };
 }
 
@@ -104,43 +80,41 @@ export function enclosureSearch(q: string | undefined): WhereOptions {
  * One page of an organisation's enclosures. The caller has already decided, with `can()`, whose
  * enclosures this user may see and passes `keeperId` for a keeper: this only fetches.
  *
- * A page reads only the columns its table shows (no notes: they can be long, and the list never shows
- * them), and its total counts the organisation's (or keeper's) rows from an index without the keeper
- * join unless a search needs the keeper's name.
+ * A page is one plain query of the columns its table shows (no notes: they can be long, and the list
+ * never shows them; no model instances), and its total counts the organisation's (or keeper's) rows
+ * from an index without the keeper join unless a search needs the keeper's name.
  */
 export async function listEnclosures(query: Omit<EnclosureListQuery, 'keeperId'> & { keeperId?: number }) {
   const { organisationId, keeperId, q, sort, descending, offset, limit } = query;
-  const where = { organisationId, ...(keeperId ? { keeperId } : {}), ...enclosureSearch(q) };
-  const keeper = { model: User, as: 'keeper', attributes: ['id', 'name'], required: false };
-  const searched = Boolean((q ?? '').trim());
-  const [rows, total] = await Promise.all([
-    Enclosure.findAll({
-      attributes: [...ENCLOSURE_ROW_COLUMNS],
-      where,
-      include: [keeper],
-      order: enclosureOrder(sort, descending),
-      offset,
-      limit,
-    }),
-    Enclosure.count({ where, ...(searched ? { include: [keeper] } : {}) }),
+  const search = enclosureSearch(q);
+  const where = `e.organisation_id = :organisationId${keeperId ? ' AND e.keeper_id = :keeperId' : ''}${search.sql.join('')}`;
+  const keeper = 'LEFT JOIN users k ON k.id = e.keeper_id';
+  const replacements = {
+    organisationId,
+    offset,
+    limit,
+    ...(keeperId ? { keeperId } : {}),
+    ...search.replacements,
+  };
+  const sequelize = getSequelize();
+  const [rows, [counted]] = await Promise.all([
+    sequelize.query<EnclosureRowJson>(
+      `SELECT e.id, e.keeper_id AS keeperId, k.name AS keeperName, e.name, e.width_cm AS widthCm,
+              e.height_cm AS heightCm, e.depth_cm AS depthCm, e.species_name AS speciesName,
+              e.animal_name AS animalName, DATE_FORMAT(e.updated_at, '%Y-%m-%dT%H:%i:%s.000Z') AS updatedAt
+         FROM enclosures e ${keeper} WHERE ${where}
+        ORDER BY ${enclosureOrder(sort, descending)} LIMIT :limit OFFSET :offset`,
+      { replacements, type: QueryTypes.SELECT },
+    ),
+    sequelize.query<{ n: number | string }>(
+      `SELECT COUNT(*) AS n FROM enclosures e ${search.sql.length ? keeper : ''} WHERE ${where}`,
+      { replacements, type: QueryTypes.SELECT },
+    ),
   ]);
-  return { items: rows.map(enclosureRowJson), total, offset, limit };
+  return { items: rows, total: Number(counted?.n ?? 0), offset, limit };
 }
 
 export type EnclosureListPage = Awaited<ReturnType<typeof listEnclosures>>;
-
-/** The columns a row of the enclosures table shows (and the keeper it filters by). */
-const ENCLOSURE_ROW_COLUMNS = [
-  'id',
-  'keeperId',
-  'name',
-  'widthCm',
-  'heightCm',
-  'depthCm',
-  'speciesName',
-  'animalName',
-  'updatedAt',
-] as const;
 
 /** A row of the enclosures list: what the table shows, not the whole enclosure. */
 export function enclosureRowJson(e: Enclosure & { keeper?: User | null }) {
