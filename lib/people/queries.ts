@@ -1,5 +1,5 @@
 import 'server-only';
-import { literal, Op, type OrderItem, type WhereOptions } from 'sequelize';
+import { Op, QueryTypes } from 'sequelize';
 import { z } from 'zod';
 import {
   defaultPeopleDescending,
@@ -9,7 +9,7 @@ import {
   type MemberSortColumn,
 } from '@/lib/people/list-view';
 import type { Role } from '@/lib/permissions';
-import { memberJson, type MemberRow } from '@/lib/organisations/queries';
+import { getSequelize } from '@/lib/db';
 import { invitationJson } from '@/lib/auth/invitations';
 import { likeContains } from '@/lib/api/like';
 import { sortedListFields, withSort } from '@/lib/api/pagination';
@@ -48,50 +48,56 @@ export type PeopleListQuery = {
   limit: number;
 };
 
-// Raw SQL only from these constants, never from input. The Membership alias is read at run time (a
-// production build minifies the class name); `user` is the association's own alias.
-const M = (column: string) => `\`${Membership.name}\`.\`${column}\``;
-const U = (column: string) => `\`user\`.\`${column}\``;
-
+// Raw SQL only from these constants, never from input; values go in as replacements.
 /** ORDER BY for a column; ties fall to the membership id, so pages never overlap or skip. */
-function peopleOrder(column: MemberSortColumn, descending: boolean): OrderItem[] {
+function peopleOrder(column: MemberSortColumn, descending: boolean): string {
   const d = descending ? 'DESC' : 'ASC';
-  const byColumn: Record<MemberSortColumn, OrderItem[]> = {
-    name: [[literal(U('name')), d]],
-    email: [[literal(U('email')), d]],
+  const byColumn: Record<MemberSortColumn, string[]> = {
+    name: [`u.name ${d}`],
+    email: [`u.email ${d}`],
     // The role column is an ENUM in owner, staff, keeper order; within a role, A–Z.
-    role: [
-      [literal(M('role')), d],
-      [literal(U('name')), 'ASC'],
-    ],
+    role: [`m.role ${d}`, 'u.name ASC'],
     joined: [],
   };
-  return [...byColumn[column], [literal(M('id')), column === 'joined' ? d : 'ASC']];
+  return [...byColumn[column], `m.id ${column === 'joined' ? d : 'ASC'}`].join(', ');
 }
 
 /** Every word of the search must appear in the person's name or e-mail (the collation ignores case). */
-function peopleSearch(q: string | undefined): WhereOptions {
+function peopleSearch(q: string | undefined) {
   const words = (q ?? '').split(/\s+/).filter(Boolean);
-  if (words.length === 0) return {};
   return {
-    [Op.and]: words.map((word) => {
-      const like = { [Op.like]: likeContains(word) };
-      return { [Op.or]: [{ '$user.name$': like }, { '$user.email$': like }] };
-    }),
+    sql: words.map((_, i) => ` AND (u.name LIKE :w${i} OR u.email LIKE :w${i})`).join(''),
+    replacements: Object.fromEntries(words.map((word, i) => [`w${i}`, likeContains(word)])),
   };
 }
 
-/** One page of an organisation's people. The caller has checked, with `can()`, that this user may. */
+/** A row of the keepers and members lists. */
+export type PersonRow = { userId: number; name: string; email: string; role: Role; joinedAt: string };
+
+/**
+ * One page of an organisation's people: a plain query of the columns the lists show (no model
+ * instances) beside its total. The caller has checked, with `can()`, that this user may.
+ */
 export async function listPeople(query: PeopleListQuery) {
   const { organisationId, role, q, sort, descending, offset, limit } = query;
-  const { rows, count } = await Membership.findAndCountAll({
-    where: { organisationId, ...(role ? { role } : {}), ...peopleSearch(q) },
-    include: [{ model: User, as: 'user', attributes: ['id', 'name', 'email'], required: true }],
-    order: peopleOrder(sort, descending),
-    offset,
-    limit,
-  });
-  return { items: (rows as MemberRow[]).map(memberJson), total: count, offset, limit };
+  const search = peopleSearch(q);
+  const from = `FROM memberships m JOIN users u ON u.id = m.user_id
+      WHERE m.organisation_id = :organisationId${role ? ' AND m.role = :role' : ''}${search.sql}`;
+  const replacements = { organisationId, offset, limit, ...(role ? { role } : {}), ...search.replacements };
+  const sequelize = getSequelize();
+  const [items, [counted]] = await Promise.all([
+    sequelize.query<PersonRow>(
+      `SELECT m.user_id AS userId, u.name, u.email, m.role,
+              DATE_FORMAT(m.created_at, '%Y-%m-%dT%H:%i:%s.000Z') AS joinedAt
+         ${from} ORDER BY ${peopleOrder(sort, descending)} LIMIT :limit OFFSET :offset`,
+      { replacements, type: QueryTypes.SELECT },
+    ),
+    sequelize.query<{ n: number | string }>(`SELECT COUNT(*) AS n ${from}`, {
+      replacements,
+      type: QueryTypes.SELECT,
+    }),
+  ]);
+  return { items, total: Number(counted?.n ?? 0), offset, limit };
 }
 
 /** One page of the organisation's keepers, each with how many enclosures they keep. */
