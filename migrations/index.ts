@@ -24,6 +24,7 @@ import * as m0022 from './0022-lamp-outlook-counts-row';
 import * as m0023 from './0023-customer-keeper-link';
 import * as m0024 from './0024-organisation-contact';
 import * as m0025 from './0025-lamp-outlook-due-last';
+import * as m0026 from './0026-lamp-outlook-sort-indexes';
 
 export type Migration = {
   name: string;
@@ -61,4 +62,5 @@ export const migrations: Migration[] = [
   { name: '0023-customer-keeper-link', ...m0023 },
   { name: '0024-organisation-contact', ...m0024 },
   { name: '0025-lamp-outlook-due-last', ...m0025 },
+  { name: '0026-lamp-outlook-sort-indexes', ...m0026 },
 ];

@@ -27,7 +27,13 @@ const FIXTURE = './fixtures/migrated-schema.txt';
 // the model umzug defines for it.)
 const WITHOUT_MODEL = ['lamp_outlook_counts'];
 // Columns the database keeps itself, read only by raw SQL: generated sort keys and a trigger's flag.
-const DATABASE_KEPT = ['enclosures.name_key', 'lamps.outlook_pending', 'lamp_outlooks.due_last'];
+const DATABASE_KEPT = [
+  'enclosures.name_key',
+  'lamps.outlook_pending',
+  'lamp_outlooks.due_last',
+  'lamp_outlooks.last_reading_last',
+  'lamp_outlooks.remaining_last',
+];
 
 type ColumnRow = {
   tbl: string;
@@ -60,7 +66,7 @@ async function describeSchema(): Promise<string> {
   );
   const indexes = await select<{ line: string }>(
     `SELECT CONCAT('index ', TABLE_NAME, '.', INDEX_NAME, IF(NON_UNIQUE = 0, ' unique', ''), ' (',
-                   GROUP_CONCAT(COLUMN_NAME ORDER BY SEQ_IN_INDEX SEPARATOR ', '), ')') line
+                   GROUP_CONCAT(COLUMN_NAME, IF(COLLATION = 'D', ' DESC', '') ORDER BY SEQ_IN_INDEX SEPARATOR ', '), ')') line
        FROM information_schema.STATISTICS WHERE TABLE_SCHEMA = DATABASE()
       GROUP BY TABLE_NAME, INDEX_NAME, NON_UNIQUE ORDER BY TABLE_NAME, INDEX_NAME`,
   );

@@ -78,24 +78,60 @@ const ORDER: Record<LampSortColumn, SortKey[]> = {
   urgency: [key('o.status_rank'), key('o.next_due_on', 'same', true), ID],
   lamp: [key('o.label'), ID],
   enclosure: [key('o.enclosure_name'), key('o.label'), ID],
-  // Descending age is the oldest lamp first: the earliest first use.
+  // Descending age is the oldest lamp first: the earliest first use. Ties run by id against the date,
+  // so the first-use index is descending and gives both directions.
   age: [key('o.first_used_on', 'opposite'), ID],
-  // Lamps without the value (no reading, no UV output, no date) come last either way.
-  lastReading: [key('o.last_reading_at IS NULL', 'asc'), key('o.last_reading_at', 'same', true), ID],
-  remaining: [key('o.remaining_fraction IS NULL', 'asc'), key('o.remaining_fraction', 'same', true), ID],
-  // Lamps without a date come last either way: ascending, `due_last` (the date, a blank read as the
-  // last day; indexed); descending, see sortKeys.
+  // Lamps without the value (no reading, no UV output, no date) come last either way: ascending, a
+  // virtual column holding the value with a blank read as the largest possible one (indexed);
+  // descending, see sortKeys.
+  lastReading: [key('o.last_reading_last'), ID],
+  remaining: [key('o.remaining_last'), ID],
   due: [key('o.due_last'), ID],
+};
+
+/** The column behind each sort whose blanks come last in both directions. */
+const BLANK_LAST: Partial<Record<LampSortColumn, string>> = {
+  lastReading: 'o.last_reading_at',
+  remaining: 'o.remaining_fraction',
+  due: 'o.next_due_on',
 };
 
 /** The sort's keys: each order is one an index gives (with the organisation, and the status if filtered). */
 function sortKeys(query: Pick<LampListFilter, 'sort' | 'due' | 'descending'>): SortKey[] {
-  if (query.sort !== 'due') return ORDER[query.sort];
+  const column = BLANK_LAST[query.sort];
+  if (!column) return ORDER[query.sort];
   // With a due filter every row has a date, and the plain order reads the date index.
-  if (query.due) return [key('o.next_due_on'), ID];
-  // Descending, MariaDB's own order puts a blank date (NULL, the smallest) last: the date index backwards.
-  return query.descending ? [key('o.next_due_on', 'same', true), ID] : ORDER.due;
+  if (query.sort === 'due' && query.due) return [key(column), ID];
+  // Descending, MariaDB's own order puts a blank (NULL, the smallest) last: the column's index backwards.
+  return query.descending ? [key(column, 'same', true), ID] : ORDER[query.sort];
 }
+
+/**
+ * The index that gives a sort's order, with the organisation (and the status when one is asked). The
+ * optimiser, left to itself, may prefer the status index for the range "not retired" (it holds every
+ * column the page needs) and sort every lamp in use for each page; named, the page is read in order and
+ * stops at its end. Index names come from the migrations, never from input.
+ */
+function orderIndex(query: Pick<LampListFilter, 'sort' | 'descending' | 'status'>): string {
+  const byStatus = Boolean(query.status);
+  const asc = !query.descending;
+  const column: Record<LampSortColumn, string> = {
+    urgency: 'urgency',
+    lamp: 'label',
+    enclosure: 'enclosure_label',
+    age: 'first_used_desc',
+    lastReading: asc ? 'last_reading_last' : 'last_reading',
+    remaining: asc ? 'remaining_last' : 'remaining',
+    due: asc ? 'due_last' : byStatus ? 'urgency' : 'due',
+  };
+  const name = column[query.sort];
+  // The urgency index starts with the status: it serves both.
+  return `lamp_outlooks_org_${byStatus && name !== 'urgency' ? 'status_' : ''}${name}`;
+}
+
+/** Whether a view narrows the lamps by nothing but the status (or retired lamps shown or not). */
+const onlyByStatus = (query: LampListFilter) =>
+  !query.keeperId && !query.enclosure && !query.tech && !query.due && !(query.q ?? '').trim();
 
 /** Each key's SQL direction for the order asked (`reverse`: the order read backwards, for Previous). */
 function directions(keys: SortKey[], descending: boolean, reverse: boolean): ('ASC' | 'DESC')[] {
@@ -146,7 +182,8 @@ function seekWhere(keys: SortKey[], dirs: ('ASC' | 'DESC')[], values: (string | 
   const parts = keys.map((k, i) => {
     const v = values[i] ?? null;
     if (v !== null) r[`k${i}`] = v;
-    const equal = v === null ? `${k.sql} IS NULL` : `${k.sql} = :k${i}`;
+    // `<=> NULL`, not `IS NULL`: MariaDB reads an index backwards past `IS NULL` only by sorting first.
+    const equal = v === null ? `${k.sql} <=> NULL` : `${k.sql} = :k${i}`;
     let past: string | null;
     if (dirs[i] === 'ASC') past = v === null ? `${k.sql} IS NOT NULL` : `${k.sql} > :k${i}`;
     else if (v === null) past = null;
@@ -322,8 +359,7 @@ export async function lampCounts(scope: Scope, today = todayIso()): Promise<Lamp
  * status at most), or null when the view needs its own COUNT.
  */
 function totalFromCounts(query: LampListFilter, byRank: Map<number, number> | null): number | null {
-  if (!byRank || query.keeperId || query.enclosure || query.tech || query.due || (query.q ?? '').trim())
-    return null;
+  if (!byRank || !onlyByStatus(query)) return null;
   if (query.status) return byRank.get(STATUS_RANK[query.status]) ?? 0;
   let total = 0;
   for (const [rank, n] of byRank) if (query.includeRetired || rank < STATUS_RANK.retired) total += n;
@@ -345,8 +381,12 @@ export function lampListSql(query: LampListFilter, today: string) {
   const where = seekAt ? `${sql} AND ${seekAt.sql}` : sql;
   const keyColumns = keys.map((k, i) => `${k.sql} AS k${i}`).join(', ');
   // STRAIGHT_JOIN: read the organisation's outlooks in index order and stop at the page's end. Left to
-  // itself the optimiser may start from a small enclosures table and sort every lamp of it.
-  const pageSql = `SELECT STRAIGHT_JOIN o.lamp_id AS id, ${keyColumns} ${from} WHERE ${where} ORDER BY ${order} LIMIT :limit${
+  // itself the optimiser may start from a small enclosures table and sort every lamp of it. A view
+  // narrowed by the status at most names the index of its order (other filters may do better by theirs).
+  const ordered = onlyByStatus(query)
+    ? from.replace(/^FROM lamp_outlooks o\b/, `FROM lamp_outlooks o FORCE INDEX (${orderIndex(query)})`)
+    : from;
+  const pageSql = `SELECT STRAIGHT_JOIN o.lamp_id AS id, ${keyColumns} ${ordered} WHERE ${where} ORDER BY ${order} LIMIT :limit${
     values ? '' : ' OFFSET :offset'
   }`;
   const pageKeys = keys.map((_, i) => `p.k${i}`);
@@ -380,8 +420,7 @@ export async function listLamps(query: LampListFilter) {
   const scope = { organisationId: query.organisationId, keeperId: query.keeperId };
   // Views the counts rows answer (the plain list, a status) take their total from them; any other view
   // is counted by its own query, started beside them.
-  const countable =
-    !query.keeperId && !query.enclosure && !query.tech && !query.due && !(query.q ?? '').trim();
+  const countable = onlyByStatus(query);
   const [found, counted, [counting]] = await Promise.all([
     sequelize.query<LampRowRaw & Record<string, unknown>>(rowsSql, { replacements, type: QueryTypes.SELECT }),
     countsOf(scope, today),

@@ -213,6 +213,64 @@ describe('GET /api/lamps', () => {
     expect(bad.body.error.field).toBe('after');
   });
 
+  it('gives every sort the order a plain sort of the stored outlooks gives, blanks last either way', async () => {
+    const w = await world(12);
+    await Lamp.update({ retiredOn: todayIso() }, { where: { id: [w.lamps[1]!.id, w.lamps[14]!.id] } });
+    await refreshStaleOutlooks();
+    const sequelize = testDb();
+    // Ties and blanks in every sorted column, so the tie-breaks and the place of blanks decide the order.
+    await sequelize.query(
+      `UPDATE lamp_outlooks
+          SET last_reading_at = IF(lamp_id % 3 = 0, NULL, '2026-03-01' + INTERVAL (lamp_id % 4) DAY),
+              remaining_fraction = IF(lamp_id % 4 = 0, NULL, (lamp_id % 3) / 4),
+              next_due_on = IF(lamp_id % 5 = 0, NULL, '2026-09-01' + INTERVAL (lamp_id % 2) DAY),
+              first_used_on = '2025-01-01' + INTERVAL (lamp_id % 3) DAY
+        WHERE organisation_id = :org`,
+      { replacements: { org: w.org.id } },
+    );
+    // The status most of the lamps have, for a view filtered by it.
+    const [common] = await sequelize.query<{ status: string }>(
+      `SELECT status FROM lamp_outlooks WHERE organisation_id = :org
+        GROUP BY status ORDER BY COUNT(*) DESC, status LIMIT 1`,
+      { replacements: { org: w.org.id }, type: QueryTypes.SELECT },
+    );
+    // Each sort spelled out plainly (MariaDB puts NULL first ascending): `d` the direction asked, `o`
+    // the other one.
+    const plain: Record<(typeof LAMP_SORT_COLUMNS)[number], string> = {
+      urgency: 'status_rank d, next_due_on d, lamp_id d',
+      lamp: 'label d, lamp_id d',
+      enclosure: 'enclosure_name d, label d, lamp_id d',
+      age: 'first_used_on o, lamp_id d',
+      lastReading: 'last_reading_at IS NULL, last_reading_at d, lamp_id d',
+      remaining: 'remaining_fraction IS NULL, remaining_fraction d, lamp_id d',
+      due: 'next_due_on IS NULL, next_due_on d, lamp_id d',
+    };
+    for (const sort of LAMP_SORT_COLUMNS) {
+      for (const [dir, d, o] of [
+        ['asc', 'ASC', 'DESC'],
+        ['desc', 'DESC', 'ASC'],
+      ] as const) {
+        for (const filter of ['&retired=1', `&status=${common!.status}`, '']) {
+          const order = plain[sort].replace(/ d\b/g, ` ${d}`).replace(/ o\b/g, ` ${o}`);
+          const status = filter.match(/status=([\w-]+)/)?.[1];
+          const expected = await sequelize.query<{ id: number }>(
+            `SELECT lamp_id AS id FROM lamp_outlooks
+              WHERE organisation_id = :org AND ${status ? 'status = :status' : filter ? 'TRUE' : "status <> 'retired'"}
+              ORDER BY ${order}`,
+            { replacements: { org: w.org.id, status }, type: QueryTypes.SELECT },
+          );
+          const view = `&sort=${sort}&dir=${dir}${filter}`;
+          const page = await list(w.staff, w.org.id, `${view}&limit=100`);
+          expect(expected.length, view).toBeGreaterThan(2);
+          expect(
+            page.items.map((l) => l.id),
+            view,
+          ).toEqual(expected.map((r) => r.id));
+        }
+      }
+    }
+  });
+
   it('asks the database the same number of queries for a page of 3 lamps as for a page of 24', async () => {
     const w = await world(12);
     await refreshStaleOutlooks();
@@ -257,6 +315,14 @@ describe('GET /api/lamps', () => {
          FROM lamps l WHERE l.enclosure_id = :enclosure`,
       { replacements: { org: other.id, enclosure: enclosure.id, today: todayIso() } },
     );
+    // Readings and UV output for most of them, a blank for the rest: the sorts that put blanks last.
+    await sequelize.query(
+      `UPDATE lamp_outlooks
+          SET last_reading_at = IF(lamp_id % 3 = 0, NULL, '2025-06-01' + INTERVAL (lamp_id % 500) HOUR),
+              remaining_fraction = IF(lamp_id % 4 = 0, NULL, (lamp_id % 97) / 100)
+        WHERE organisation_id = :org`,
+      { replacements: { org: other.id } },
+    );
     // As the app's writer does once the stored rows are of the lamps' versions.
     await sequelize.query('UPDATE lamps SET outlook_pending = 0 WHERE enclosure_id = :enclosure', {
       replacements: { enclosure: enclosure.id },
@@ -290,6 +356,24 @@ describe('GET /api/lamps', () => {
       { before: after('urgency.a', [2, '2026-01-01', last - 25]) },
       { sort: 'lamp', after: after('lamp.a', ['Filler 2900', last - 100]) },
       { sort: 'due', due: '90', after: after('due.a.f', ['2026-01-01', last - 25]) },
+      // Every sort either way, over the lamps in use, one status (all of them or none), or all lamps.
+      ...LAMP_SORT_COLUMNS.flatMap((sort) =>
+        ['asc', 'desc'].flatMap((dir) =>
+          ([{}, { status: 'fine' }, { status: 'replace' }, { retired: '1' }] as Record<string, string>[]).map(
+            (f) => ({ sort, dir, ...f }),
+          ),
+        ),
+      ),
+      // Deep pages by cursor in the sorts whose blanks come last, and those that break ties on the label
+      // or run against the id.
+      { sort: 'lastReading', dir: 'asc', after: after('lastReading.a', ['2025-06-10 00:00:00', last - 25]) },
+      { sort: 'lastReading', dir: 'asc', after: after('lastReading.a', ['9999-12-31 23:59:59', last - 25]) },
+      { sort: 'lastReading', before: after('lastReading.d', [null, last - 25]) },
+      { sort: 'remaining', after: after('remaining.a', [0.5, last - 25]) },
+      { sort: 'remaining', dir: 'desc', status: 'fine', after: after('remaining.d', [null, last - 25]) },
+      { sort: 'enclosure', after: after('enclosure.a', ['Filler', 'Filler 2900', last - 100]) },
+      { sort: 'age', after: after('age.d', ['2025-01-01', last - 25]) },
+      { sort: 'age', dir: 'asc', status: 'fine', before: after('age.a', ['2025-01-01', last - 25]) },
     ];
     for (const qs of views) {
       if (qs.after || qs.before) {
