@@ -173,9 +173,9 @@ export const loadAverage = () =>
     .map((l) => l.toFixed(2))
     .join(' ');
 
-/** A few sequential requests first, so the run does not measure cold code paths. */
-export async function warmUp(base, jar, p, method = 'GET', body) {
-  for (let i = 0; i < 10; i++) {
+/** A few sequential requests first (`times`, default 10), so the run does not measure cold code paths. */
+export async function warmUp(base, jar, p, method = 'GET', body, times = 10) {
+  for (let i = 0; i < times; i++) {
     await fetch(`${base}${p}`, {
       method,
       headers: { cookie: jar.header(), ...(body ? { 'content-type': 'application/json' } : {}) },
