@@ -12,7 +12,7 @@ import { DesignShapes, drawingTop, fieldLook } from '@/components/designs/Design
 import { FieldBands } from '@/components/designs/FieldBands';
 import { C } from './canvas/colors';
 import { markFieldVisible } from './fields/early';
-import { FIRST_FIELD_END_ATTR } from './first-field-script';
+import { FIRST_FIELD_END_ATTR, FIRST_FIELD_END_ID } from './first-field-script';
 import { designBounds, FIT_PADDING_PX, FIT_SHIFT_DOWN_PX } from './state/actions';
 
 const FIT_PAD = `clamp(28px, 9%, ${FIT_PADDING_PX}px)`;
@@ -94,7 +94,9 @@ export function FirstFieldPicture({
         </g>
       </svg>
       {/* Parsed last: the <head>'s script shows the picture only once all of it is in the page. */}
-      {inline && <span {...{ [FIRST_FIELD_END_ATTR]: '' }} hidden />}
+      {inline && <span id={FIRST_FIELD_END_ID} {...{ [FIRST_FIELD_END_ATTR]: '' }} hidden />}
+      {/* React puts this in the <head>: no frame is painted before the element above is parsed. */}
+      {inline && <link rel="expect" href={`#${FIRST_FIELD_END_ID}`} blocking="render" />}
     </div>
   );
 }

@@ -7,6 +7,12 @@ export const FIRST_FIELD_SCRATCH_KEY = 'baskwell.studio.local.scratch';
 export const FIRST_FIELD_SELECTOR = '[data-testid="studio-first-field"]';
 /** An empty element after the picture's drawing: once it is parsed, the whole picture is. */
 export const FIRST_FIELD_END_ATTR = 'data-picture-end';
+/**
+ * The same element's id, named by the page's `<link rel="expect" blocking="render">`: the browser paints
+ * nothing until it is parsed, so a page whose HTML arrives in parts (a busy server flushes what it has)
+ * never shows a frame between the picture's first part and its last.
+ */
+export const FIRST_FIELD_END_ID = 'studio-first-field-end';
 
 /**
  * The picture is sent hidden (`data-pending`) and only this script shows it, once it knows this browser
@@ -18,7 +24,13 @@ export const FIRST_FIELD_END_ATTR = 'data-picture-end';
  * script marked `blocking="render"`: a module does not wait for the stylesheet (a classic script there
  * would, and hold the parser meanwhile), and the browser renders nothing until it has run. When it runs
  * before the picture is parsed, a mutation observer catches the picture's last element; its callback
- * runs at the end of the parser's task, before the browser can render. Other pages leave at once.
+ * runs at the end of the parser's task, before the browser can render. Other pages leave at once. When the
+ * picture's last element comes in the same task as the end of the document, Chromium fires
+ * DOMContentLoaded within that task, before the observer's callback, so that listener looks once more
+ * before it stops observing (a disconnect drops the records not yet delivered).
+ *
+ * A render-blocking script only holds the first frame until it has run; the picture may still be on its
+ * way. The link that expects the picture's last element (FirstField.tsx) holds the frame until then.
  *
  * The mark is the moment the picture reached the screen, not when it was drawn: the first frame that
  * holds it is the one whose animation frame follows the picture's showing, and when that frame is the
@@ -49,6 +61,6 @@ export function firstFieldScript(): string {
     `var found=function(){var s=document.querySelector(${sel});if(!s||!s.querySelector(${whole}))return false;show(s);return true};` +
     `if(!found()&&document.readyState==='loading'){var o=new MutationObserver(function(){if(found())o.disconnect()});` +
     `o.observe(document,{childList:true,subtree:true});` +
-    `document.addEventListener('DOMContentLoaded',function(){o.disconnect()})}}`
+    `document.addEventListener('DOMContentLoaded',function(){found();o.disconnect()})}}`
   );
 }

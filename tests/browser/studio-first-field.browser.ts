@@ -4,6 +4,8 @@
 // not change with it), and a scratch design of this browser's own is never shown the example's field.
 // The workers' answers are held back by wrapping the page's Worker, so "before the worker answers" is a
 // state of the page, not a race. No timing is asserted (npm run bench:studio prints the times).
+import http from 'node:http';
+import type { AddressInfo } from 'node:net';
 import type { BrowserContext, Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { exampleDesign } from '@/simulation';
@@ -89,11 +91,16 @@ async function expectPictureBeforeWorker(page: Page, html: string, field = 'uvi'
   // it ends with the element whose parsing lets it be shown.
   const opening = html.slice(html.indexOf('data-testid="studio-first-field"'));
   expect(opening.slice(0, opening.indexOf('</svg>'))).not.toContain('<script');
-  expect(opening.slice(opening.indexOf('</svg>'))).toMatch(/^<\/svg><span data-picture-end=""/);
+  expect(opening.slice(opening.indexOf('</svg>'))).toMatch(
+    /^<\/svg><span id="studio-first-field-end" data-picture-end=""/,
+  );
   // It is shown by a module script in the head that keeps the browser from rendering until it has run,
   // so no frame is painted with the picture parsed but still hidden.
   const head = html.slice(0, html.indexOf('<body'));
   expect(head).toMatch(/<script[^>]* type="module" async="" blocking="render"[^>]*>[^<]*studio-first-field/);
+  // And a link that holds the first frame until the picture's last element is parsed, when the HTML
+  // comes in parts.
+  expect(head).toMatch(/<link rel="expect" href="#studio-first-field-end" blocking="render"\/?>/);
   expect(await page.evaluate(() => window.__pictureAtFirstFrame)).not.toBe('hidden');
   const picture = page.getByTestId('studio-first-field').first();
   await expect.poll(() => picture.isVisible(), eventually).toBe(true);
@@ -206,5 +213,46 @@ describe('studio: the field in the first paint', () => {
     const html = (await res?.text()) ?? '';
     await expectPictureBeforeWorker(again, html, 'tempC');
     await context.close();
+  });
+
+  it('HTML that arrives in two parts: the first frame still holds the picture', async () => {
+    // A busy server flushes what it has: the page's HTML cut just before the picture's last element,
+    // the rest 400 ms later, from a small server in front of the app (everything else passes through).
+    // Without the link that expects that element the browser painted the page meanwhile without the
+    // picture; and when the rest came with the end of the document, the picture was never shown by the
+    // head's script (DOMContentLoaded stopped its observer before the observer's callback ran).
+    const html = await (await fetch(`${BASE_URL}/studio-scratch`)).text();
+    const cut = html.lastIndexOf('<', html.indexOf('data-picture-end'));
+    expect(cut).toBeGreaterThan(0);
+    const proxy = http.createServer((req, res) => {
+      if (req.url?.startsWith('/studio-scratch')) {
+        res.writeHead(200, { 'content-type': 'text/html; charset=utf-8' });
+        res.write(html.slice(0, cut));
+        setTimeout(() => res.end(html.slice(cut)), 400);
+        return;
+      }
+      void fetch(`${BASE_URL}${req.url}`, { headers: { accept: req.headers.accept ?? '*/*' } })
+        .then(async (r) => {
+          res.writeHead(r.status, { 'content-type': r.headers.get('content-type') ?? 'text/plain' });
+          res.end(Buffer.from(await r.arrayBuffer()));
+        })
+        .catch(() => res.writeHead(502).end());
+    });
+    await new Promise<void>((done) => proxy.listen(0, '127.0.0.1', done));
+    try {
+      const { port } = proxy.address() as AddressInfo;
+      for (let i = 0; i < 3; i++) {
+        const context = await newContext(session.browser());
+        await holdWorkerAnswers(context);
+        await notePictureAtFirstFrame(context);
+        const page = await context.newPage();
+        await page.goto(`http://127.0.0.1:${port}/studio-scratch`);
+        await expect.poll(() => page.evaluate(() => window.__pictureAtFirstFrame), eventually).toBeDefined();
+        expect(await page.evaluate(() => window.__pictureAtFirstFrame)).toBe('shown');
+        await context.close();
+      }
+    } finally {
+      await new Promise((done) => proxy.close(done));
+    }
   });
 });
