@@ -28,9 +28,9 @@ const CHECKS = ['prettier', 'eslint', 'tsc', 'vitest', 'browser'];
 // the cores, so that the bound measures the app and not this run's other work.
 const TIMED_FILES = ['tests/security/export-stall.test.ts', 'tests/reliability/db-outage.test.ts'];
 const TIMED_BROWSER_FILES = ['tests/browser/engine-threads.browser.ts'];
-// The browser journeys run this many files at a time against the one app, each in its own Chromium: a
-// journey mostly waits (for the server, the engine's worker, a reload), so a second file fills those
-// waits on this 2-core machine; more would only queue for the cores. Each file makes what it changes
+// The browser journeys run this many files at a time against the one app, each worker with its own
+// Chromium: a journey mostly waits (for the server, the engine's worker, a reload), so a second file fills
+// those waits on this 2-core machine; more would only queue for the cores. Each file makes what it changes
 // (designs, enclosures, lamps, accounts, sessions it ends) for itself, so no file disturbs another.
 const BROWSER_WORKERS = 2;
 const RESULTS_DIR = path.join(ROOT, 'test-results');

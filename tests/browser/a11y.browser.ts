@@ -10,7 +10,14 @@ import AxeBuilder from '@axe-core/playwright';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_SHOP } from '@/lib/demo/scenario';
-import { launchBrowser, newContext, screenshot, signInAsDemo, watchPageErrors } from './harness';
+import {
+  closeContexts,
+  newContext,
+  screenshot,
+  signInAsDemo,
+  watchPageErrors,
+  workerBrowser,
+} from './harness';
 import { pageRoutes } from './page-routes';
 import { JOURNEY_MS, createDesign, createShare, enclosureIdByName, studioReady } from './journey-helpers';
 
@@ -195,7 +202,7 @@ describe(`accessibility (axe) and page errors in ${VIEWER_ZONE}: no serious or c
   const results: PageResult[] = [];
 
   beforeAll(async () => {
-    browser = await launchBrowser();
+    browser = await workerBrowser();
     staffContext = await newContext(browser, { timezoneId: VIEWER_ZONE });
     visitorContext = await newContext(browser, { timezoneId: VIEWER_ZONE });
     staffPage = await staffContext.newPage();
@@ -217,7 +224,7 @@ describe(`accessibility (axe) and page errors in ${VIEWER_ZONE}: no serious or c
       'signed in as staff',
       results.filter((r) => !r.name.startsWith('out-')),
     );
-    await browser?.close();
+    await closeContexts(browser);
   });
 
   it('scans a page of every route of the app', () => {

@@ -28,6 +28,34 @@ export function launchBrowser(): Promise<Browser> {
   return chromium.launch({ executablePath: CHROMIUM_PATH, headless: true, args: CHROMIUM_FLAGS });
 }
 
+let workerChromium: Promise<Browser> | undefined;
+
+/**
+ * This worker's Chromium: launched by the first file that asks, then lent to the files the worker runs
+ * after it (vitest reuses workers, vitest.browser.config.ts), instead of a launch a file. Files share
+ * nothing through it: each works in contexts of its own and closes them all when it ends
+ * (closeContexts). A Chromium that went away is launched again for the next file.
+ */
+export function workerBrowser(): Promise<Browser> {
+  workerChromium ??= launchBrowser().then(
+    (browser) => {
+      browser.on('disconnected', () => (workerChromium = undefined));
+      return browser;
+    },
+    (e: unknown) => {
+      workerChromium = undefined;
+      throw e;
+    },
+  );
+  return workerChromium;
+}
+
+/** Closes every context (and so every page) of a file's Chromium, leaving it clean for the next file. */
+export async function closeContexts(browser: Browser | undefined): Promise<void> {
+  if (!browser?.isConnected()) return;
+  await Promise.all(browser.contexts().map((c) => c.close()));
+}
+
 /**
  * A new isolated context (own cookies and storage) with the app as base URL. The browser's time zone is
  * the machine's unless `timezoneId` names another (the app must read the same in any zone).
@@ -127,8 +155,9 @@ export type BrowserSession = {
 };
 
 /**
- * Registers the hooks of a browser test file: one Chromium for the file, a fresh context and page for
- * each test, and a screenshot named after any test that fails.
+ * Registers the hooks of a browser test file: the worker's Chromium (workerBrowser), a fresh context and
+ * page for each test, and a screenshot named after any test that fails; the file's contexts are closed
+ * when it ends.
  */
 export function withBrowser(): BrowserSession {
   let browser: Browser | undefined;
@@ -142,7 +171,7 @@ export function withBrowser(): BrowserSession {
   };
 
   beforeAll(async () => {
-    browser = await launchBrowser();
+    browser = await workerBrowser();
   });
   beforeEach(async () => {
     context = await newContext(need(browser, 'the browser'));
@@ -163,7 +192,8 @@ export function withBrowser(): BrowserSession {
     page = undefined;
   });
   afterAll(async () => {
-    await browser?.close();
+    await closeContexts(browser);
+    browser = undefined;
   });
 
   return {
