@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { DEMO_SHOP, demoSignIn } from '@/lib/demo/scenario';
-import { screenshot, signIn, signInAsDemo, withBrowser } from './harness';
+import { screenshot, signIn, withBrowser } from './harness';
 
 const session = withBrowser();
 
@@ -26,7 +26,9 @@ describe('signing in', () => {
   });
 
   it("a staff member signs in and sees the organisation's enclosures and keepers", async () => {
-    const page = await signInAsDemo(session.page(), 'staff');
+    const page = session.page();
+    const staff = demoSignIn('staff');
+    await signIn(page, staff.email, staff.password);
     await page.waitForURL((url) => url.pathname === '/enclosures');
     await expect
       .poll(() => page.getByRole('heading', { level: 1 }).textContent(), { timeout: 20_000 })
