@@ -21,6 +21,9 @@ const schema = z.object({
   // The engine's worker threads (lib/engine-pool): how many (default: cores − 1, 1 to 4), how many tasks
   // may wait for one, and how long one task may run before its thread is ended.
   ENGINE_THREADS: z.coerce.number().int().min(1).max(32).optional(),
+  // How many web server processes share this machine (scripts/lib/web-cluster.mjs; `npm start` sets it
+  // for each): the engine's threads are divided among them.
+  WEB_PROCESSES: z.coerce.number().int().min(1).max(256).default(1),
   ENGINE_QUEUE: z.coerce.number().int().min(0).max(1000).default(16),
   ENGINE_TIMEOUT_MS: z.coerce.number().int().min(100).max(600_000).default(20_000),
 });

@@ -20,7 +20,7 @@ import { availableParallelism } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath, pathToFileURL } from 'node:url';
 import { Worker } from 'node:worker_threads';
-import { config } from '@/lib/config';
+import { config, type ServerConfig } from '@/lib/config';
 import { WorkerPool, type RunOptions } from './pool';
 import type { EngineTasks } from './tasks';
 
@@ -69,9 +69,16 @@ export function spawnEngineWorker(): Worker {
   return new Worker(boot, { eval: true, name: WORKER_NAME });
 }
 
-/** Threads: ENGINE_THREADS, or one less than the cores (at least 1, at most 4). */
-export function defaultThreads(): number {
-  return config().ENGINE_THREADS ?? Math.min(4, Math.max(1, availableParallelism() - 1));
+/**
+ * Threads: ENGINE_THREADS, or the cores but one shared among the machine's web server processes
+ * (WEB_PROCESSES, which `npm start` sets for each; at least 1 a process, at most 4): with a server process
+ * a core, a thread each, not cores − 1 each.
+ */
+export function defaultThreads(
+  cores = availableParallelism(),
+  { ENGINE_THREADS, WEB_PROCESSES }: Pick<ServerConfig, 'ENGINE_THREADS' | 'WEB_PROCESSES'> = config(),
+): number {
+  return ENGINE_THREADS ?? Math.min(4, Math.max(1, Math.floor((cores - 1) / WEB_PROCESSES)));
 }
 
 const KEY = Symbol.for('baskwell.engine-pool');

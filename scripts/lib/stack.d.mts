@@ -14,5 +14,5 @@ export declare function seed(env: NodeJS.ProcessEnv): Promise<{ created: unknown
 export declare function startNext(
   life: Lifecycle,
   env: NodeJS.ProcessEnv,
-  opts?: { port: number; dev?: boolean; build?: boolean; logFile?: string },
+  opts?: { port: number; dev?: boolean; build?: boolean; logFile?: string; processes?: number },
 ): Promise<unknown>;

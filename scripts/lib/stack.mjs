@@ -6,6 +6,7 @@ import path from 'node:path';
 import { DATA_DIR, ROOT, urlPort, usesPrivateDb } from './env.mjs';
 import { ensureDatabases, ensureMariaDB, recreateDatabase } from './mariadb.mjs';
 import { ensureApt } from './packages.mjs';
+import { webProcesses } from './web-cluster.mjs';
 import {
   bin,
   canConnect,
@@ -79,6 +80,7 @@ export async function prepareDatabase(life, env, { recreate = [] } = {}) {
 
 // The server modules' `import 'server-only'` resolves to nothing in these scripts (see server-only.mjs).
 const SERVER_ONLY = path.join(ROOT, 'scripts', 'lib', 'server-only.mjs');
+const WEB_CLUSTER = path.join(ROOT, 'scripts', 'lib', 'web-cluster.mjs');
 const tsx = (script, args, env, opts = {}) =>
   run(bin('tsx'), ['--import', SERVER_ONLY, script, ...args], { env, ...opts });
 
@@ -149,18 +151,30 @@ export function startJobs(life, env, { logFile, pauseMs = 10_000 } = {}) {
   return child;
 }
 
-/** `next build` (unless dev), then `next start`/`next dev` on `port`; resolves once it answers. */
-export async function startNext(life, env, { port, dev = false, build = true, logFile } = {}) {
-  const nextEnv = { ...env, NEXT_TELEMETRY_DISABLED: '1' };
+/**
+ * `next build` (unless dev), then `next start`/`next dev` on `port`; resolves once it answers.
+ * `processes` (default WEB_PROCESSES, else one a core) `next start` processes share the port through
+ * scripts/lib/web-cluster.mjs when more than one; `next dev` is always one process.
+ */
+export async function startNext(
+  life,
+  env,
+  { port, dev = false, build = true, logFile, processes = webProcesses(env.WEB_PROCESSES) } = {},
+) {
+  const nextEnv = { ...env, NEXT_TELEMETRY_DISABLED: '1', WEB_PROCESSES: String(dev ? 1 : processes) };
   await ensureFree(port, 'the web app', 'PORT');
   if (!dev && build) {
     log('Building the app (next build) ...');
     await run(bin('next'), ['build'], { env: nextEnv });
   }
-  const child = service('next', bin('next'), [dev ? 'dev' : 'start', '-p', String(port)], {
-    env: nextEnv,
-    logFile,
-  });
+  const nextArgs = [dev ? 'dev' : 'start', '-p', String(port)];
+  const child =
+    dev || processes === 1
+      ? service('next', bin('next'), nextArgs, { env: nextEnv, logFile })
+      : service('next', process.execPath, [WEB_CLUSTER, String(processes), bin('next'), ...nextArgs], {
+          env: nextEnv,
+          logFile,
+        });
   life.services.push(child);
   await waitFor('the web app', () => httpAnswers(`http://127.0.0.1:${port}/`), {
     child,
