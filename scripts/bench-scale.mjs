@@ -1,6 +1,7 @@
 #!/usr/bin/env node
 // `npm run bench:scale -- [--scale=N] [--enclosures N --lamps N --readings N --designs N] [--growth=4]
-//                          [--rate=20] [--duration=10] [--seed-only | --reuse] [--no-build] [--only=a,b]`
+//                          [--rate=20] [--duration=10] [--seed-only | --reuse] [--no-build] [--only=a,b]
+//                          [--processes=N | --compare=1,2]`
 // The signed-in area at the size of a zoo's reptile house or a busy shop. On databases of its own on the
 // private MariaDB it seeds a generated organisation (default 2,000 enclosures, 8,000 lamps, 100,000
 // readings, 200 designs with two variants each, times --scale) into `<DB_NAME>_scale`, and the same
@@ -18,6 +19,9 @@
 // it recreates them). Figures, not a pass/fail test: the date, the CPUs and the load average are
 // printed beside them. `--only=/enclosures,/jobs` measures only the routes whose path contains one of the
 // parts (and the baseline), for comparing one change before and after in the same conditions.
+// `--processes=N` serves with N `next start` processes sharing the port, as `npm start` does
+// (WEB_PROCESSES, else one a core); `--compare=1,2` starts a server of each count side by side and
+// measures each route on each in turn (an A/B in one run, under the same load).
 import autocannon from 'autocannon';
 import os from 'node:os';
 import path from 'node:path';
@@ -26,7 +30,17 @@ import { ensureSecret, loadEnv, ROOT, usesPrivateDb } from './lib/env.mjs';
 import { ensureDatabases, ensureMariaDB, recreateDatabase } from './lib/mariadb.mjs';
 import { bin, duration, freePort, log, run, stopProcess } from './lib/proc.mjs';
 import { Lifecycle, migrate, startNext } from './lib/stack.mjs';
-import { api, codesText, loadAverage, printColumns, runFigures, signIn, warmUp } from './load.mjs';
+import { webProcesses } from './lib/web-cluster.mjs';
+import {
+  api,
+  codesText,
+  loadAverage,
+  printColumns,
+  runConditions,
+  runFigures,
+  signIn,
+  warmUp,
+} from './load.mjs';
 
 const DEFAULT_SIZE = { enclosures: 2000, lamps: 8000, readings: 100_000, designs: 200 };
 
@@ -52,6 +66,8 @@ function options() {
       build: { type: 'boolean', default: true },
       'no-build': { type: 'boolean', default: false },
       only: { type: 'string', default: '' },
+      processes: { type: 'string', default: '' },
+      compare: { type: 'string', default: '' },
       help: { type: 'boolean', default: false },
     },
   });
@@ -77,6 +93,10 @@ function options() {
     seedOnly: values['seed-only'],
     build: values.build && !values['no-build'],
     only: values.only.split(',').filter(Boolean),
+    // `next start` processes sharing the port, as `npm start` runs them (WEB_PROCESSES, else one a core).
+    processes: values.processes === '' ? undefined : webProcesses(values.processes),
+    // `--compare=1,2`: servers of these process counts side by side, measured route by route in turn.
+    compare: values.compare.split(',').filter(Boolean).map(webProcesses),
     help: values.help,
   };
 }
@@ -98,16 +118,33 @@ const fmtSize = (s) =>
   `${s.enclosures.toLocaleString('en')} enclosures, ${s.lamps.toLocaleString('en')} lamps, ` +
   `${s.readings.toLocaleString('en')} readings, ${s.designs.toLocaleString('en')} designs`;
 
-// Sequential requests a route gets before its timed run. The first page after the app starts pays for
-// the render path the pages share reaching optimised code: on this machine its first 10 requests took
-// about 140 ms of CPU each and the next 20 about 40, against 30 once warm; with 10 warm-ups, whichever
-// route came first (the enclosures page) was timed partly cold.
+// Requests each server process gets for a route before its timed run. The first page after the app
+// starts pays for the render path the pages share reaching optimised code: on this machine its first 10
+// requests took about 140 ms of CPU each and the next 20 about 40, against 30 once warm; with 10
+// warm-ups, whichever route came first (the enclosures page) was timed partly cold.
 const WARM_UPS = 40;
+
+/**
+ * Warms a route in every server process. One process: sequential requests on one connection. Several:
+ * the cluster hands each new connection to the next process, and a kept-alive connection stays with
+ * its process, so the warm-ups go over as many connections as there are processes (twice over), in
+ * parallel, each process getting its share.
+ */
+async function warmRoute(base, cookie, route, processes) {
+  if (processes === 1) return warmUp(base, { header: () => cookie }, route, 'GET', undefined, WARM_UPS);
+  await autocannon({
+    url: `${base}${route}`,
+    headers: { cookie },
+    connections: processes * 2,
+    amount: WARM_UPS * processes,
+    timeout: 20,
+  });
+}
 
 /** One route at the fixed rate, with /api/health asked alongside at a quarter of it. */
 async function measure(base, cookie, route, opts) {
   const headers = { cookie };
-  await warmUp(base, { header: () => cookie }, route, 'GET', undefined, WARM_UPS);
+  await warmRoute(base, cookie, route, opts.processes);
   const common = { connections: 10, duration: opts.duration, timeout: 20 };
   const [main, health] = await Promise.all([
     autocannon({ ...common, url: `${base}${route}`, headers, overallRate: opts.rate }),
@@ -278,6 +315,7 @@ async function serve(life, env, name, opts) {
   const child = await startNext(life, dbEnv, {
     port: Number(env.PORT),
     build: opts.build,
+    processes: opts.processes,
     logFile: path.join(ROOT, 'test-results', `bench-scale-next-${name}.log`),
   });
   const { jar } = await signIn(env.APP_URL, org.ownerEmail, org.ownerPassword);
@@ -290,6 +328,57 @@ async function serve(life, env, name, opts) {
       await stopProcess(child);
     },
   };
+}
+
+/**
+ * `--compare=1,2`: the same routes on servers with these numbers of processes, started together on ports
+ * of their own against the 1× database and measured route by route in turn, the order alternating each
+ * route, so that the machine's load (shared, and drifting) weighs on each alike.
+ */
+async function compareProcesses(life, env, name, opts, { started, loadBefore }) {
+  const servers = [];
+  let port = Number(env.PORT);
+  for (const processes of opts.compare) {
+    port = await freePort(port + 1);
+    const base = `http://localhost:${port}`;
+    const sEnv = { ...env, PORT: String(port), APP_URL: base, NEXTAUTH_URL: base };
+    const s = await serve(life, sEnv, name, { ...opts, processes, build: false });
+    servers.push({ ...s, base, processes });
+  }
+  const first = servers[0];
+  const routes = chosen(await routesOf(first.base, first.jar, first.org.organisationId), opts.only);
+  log(
+    `Measuring ${routes.length + 1} routes on ${servers.length} servers (${opts.compare.join(', ')} ` +
+      `processes) in turn at ${opts.rate} req/s for ${opts.duration} s each ...`,
+  );
+  const rows = servers.map(() => []);
+  for (const [i, route] of ['/api/health', ...routes].entries()) {
+    const order = servers.map((_, k) => k);
+    if (i % 2) order.reverse();
+    for (const k of order) {
+      const s = servers[k];
+      rows[k].push(await measure(s.base, s.cookie, route, { ...opts, processes: s.processes }));
+    }
+  }
+  const loadAfter = loadAverage();
+  console.log('');
+  console.log(
+    `${started.toISOString()} · ${os.cpus().length} CPUs shared with other users · load average (1/5/15 min) ` +
+      `${loadBefore} before, ${loadAfter} after the routes · ${opts.rate} req/s × ${opts.duration} s a route, ` +
+      `/api/health alongside at ${Math.max(1, opts.rate / 4)} req/s · each route on each server in turn`,
+  );
+  console.log(`organisation: ${fmtSize(first.org.size)} (${name})`);
+  for (const [k, s] of servers.entries()) {
+    console.log('');
+    console.log(`${s.processes} server process${s.processes === 1 ? '' : 'es'}:`);
+    printTable(rows[k], rows[k][0], opts.rate);
+  }
+  console.log(
+    JSON.stringify({
+      ...runConditions(started, loadBefore, loadAfter, opts),
+      compare: servers.map((s, k) => ({ processes: s.processes, results: rows[k] })),
+    }),
+  );
 }
 
 /** The routes measured again on the grown organisation: the lists whose cost must not follow its size. */
@@ -307,11 +396,12 @@ async function main() {
   const opts = options();
   if (opts.help) {
     console.log(
-      'npm run bench:scale -- [--scale=N] [--enclosures N --lamps N --readings N --designs N] [--growth=4] [--rate=20] [--duration=10] [--seed-only | --reuse] [--no-build] [--only=/enclosures,/jobs]',
+      'npm run bench:scale -- [--scale=N] [--enclosures N --lamps N --readings N --designs N] [--growth=4] [--rate=20] [--duration=10] [--seed-only | --reuse] [--no-build] [--only=/enclosures,/jobs] [--processes=N | --compare=1,2]',
     );
     return;
   }
   const env = loadEnv();
+  opts.processes ??= webProcesses(env.WEB_PROCESSES);
   if (!usesPrivateDb(env)) throw new Error('bench:scale seeds a database of its own on the private MariaDB');
   const life = new Lifecycle();
   life.handleSignals();
@@ -354,6 +444,11 @@ async function main() {
       return;
     }
 
+    if (opts.compare.length) {
+      await compareProcesses(life, scaleEnv, names[0], opts, { started, loadBefore });
+      return;
+    }
+
     const one = await serve(life, scaleEnv, names[0], opts);
     const org = one.org;
     const routes = chosen(await routesOf(base, one.jar, org.organisationId), opts.only);
@@ -381,7 +476,8 @@ async function main() {
     console.log(
       `${started.toISOString()} · ${os.cpus().length} CPUs shared with other users · load average (1/5/15 min) ` +
         `${loadBefore} before, ${loadAfter} after the routes · ${opts.rate} req/s × ${opts.duration} s a route, ` +
-        `/api/health alongside at ${Math.max(1, opts.rate / 4)} req/s`,
+        `/api/health alongside at ${Math.max(1, opts.rate / 4)} req/s · ${opts.processes} server ` +
+        `process${opts.processes === 1 ? '' : 'es'}`,
     );
     console.log(`organisation: ${fmtSize(org.size)} (${names[0]})`);
     for (const s of seeded ?? []) {
@@ -421,15 +517,11 @@ async function main() {
     }
     console.log(
       JSON.stringify({
-        at: started.toISOString(),
-        cpus: os.cpus().length,
-        loadAverageBefore: loadBefore,
-        loadAverageAfter: loadAfter,
+        ...runConditions(started, loadBefore, loadAfter, opts),
         size: org.size,
         grownSize: grownOrg?.size ?? null,
         seeded,
-        rate: opts.rate,
-        durationS: opts.duration,
+        processes: opts.processes,
         results: rows,
         growth,
       }),

@@ -6,7 +6,8 @@
 // each round and each route sends N requests one after another (no compression asked, as the scale bench
 // asks) and reads the server's user + system time from /proc/<pid>/stat before and after: CPU ms a
 // request, wall ms a request, and the bytes (and status, when not 200) of one answer. The server is the
-// process listening on the URL's port (or --pid); its engine threads count with it, MariaDB does not.
+// process listening on the URL's port (or --pid) with the processes it started (the web processes when
+// several share the port); their engine threads count with them, MariaDB does not.
 // Several URLs (builds of the app, each started on a port of its own against the same database) are
 // measured in turn, route by route, alternating which goes first each round, so a machine whose load
 // drifts weighs on all alike; each is printed with its ratio to the first (A). Two processes of one and
@@ -102,12 +103,47 @@ function pidListeningOn(port) {
 
 const TICK_MS = 1000 / 100; // USER_HZ is 100 on Linux
 
-/** A process's user + system CPU time so far, in ms (its threads included). */
-function cpuMs(pid) {
+/** A process's stat fields after the command's closing parenthesis (the 3rd field of the line on). */
+function statFields(pid) {
   const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
-  // Fields after the command's closing parenthesis; utime and stime are the 14th and 15th of the line.
-  const f = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
-  return (Number(f[11]) + Number(f[12])) * TICK_MS;
+  return stat.slice(stat.lastIndexOf(')') + 2).split(' ');
+}
+
+/** The process and everything it started, by their parent ids (several server processes in a cluster). */
+function processTree(pid) {
+  const parentOf = new Map();
+  for (const entry of readdirSync('/proc')) {
+    if (!/^\d+$/.test(entry)) continue;
+    try {
+      parentOf.set(Number(entry), Number(statFields(entry)[1]));
+    } catch {
+      /* ended meanwhile */
+    }
+  }
+  const tree = [pid];
+  for (let i = 0; i < tree.length; i++) {
+    for (const [child, parent] of parentOf) if (parent === tree[i]) tree.push(child);
+  }
+  return tree;
+}
+
+/**
+ * User + system CPU time so far, in ms, of the server's processes (their threads included): the one
+ * listening, and the processes it started (the web processes when several share the port; finished
+ * ones no longer count, so a process that ends during a measurement spoils it).
+ */
+function cpuMs(pid) {
+  let ms = 0;
+  for (const p of processTree(pid)) {
+    try {
+      // utime and stime are the 14th and 15th fields of the line.
+      const f = statFields(p);
+      ms += (Number(f[11]) + Number(f[12])) * TICK_MS;
+    } catch {
+      /* ended meanwhile */
+    }
+  }
+  return ms;
 }
 
 const agent = new http.Agent({ keepAlive: true, maxSockets: 1 });

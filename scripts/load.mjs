@@ -173,6 +173,16 @@ export const loadAverage = () =>
     .map((l) => l.toFixed(2))
     .join(' ');
 
+/** The conditions a run's JSON line starts with: when, on how many CPUs, the load, the rate asked. */
+export const runConditions = (started, loadBefore, loadAfter, opts) => ({
+  at: started.toISOString(),
+  cpus: os.cpus().length,
+  loadAverageBefore: loadBefore,
+  loadAverageAfter: loadAfter,
+  rate: opts.rate,
+  durationS: opts.duration,
+});
+
 /** A few sequential requests first (`times`, default 10), so the run does not measure cold code paths. */
 export async function warmUp(base, jar, p, method = 'GET', body, times = 10) {
   for (let i = 0; i < times; i++) {
@@ -446,12 +456,7 @@ async function main() {
   console.log(
     JSON.stringify({
       url: base,
-      at: started.toISOString(),
-      cpus: os.cpus().length,
-      loadAverageBefore: loadBefore,
-      loadAverageAfter: loadAfter,
-      rate: opts.rate,
-      durationS: opts.duration,
+      ...runConditions(started, loadBefore, loadAfter, opts),
       connections: opts.connections,
       sharePageBytes: pageBytes,
       sharePictureBytes: pictureBytes,
