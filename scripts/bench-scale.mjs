@@ -342,7 +342,8 @@ async function compareProcesses(life, env, name, opts, { started, loadBefore }) 
     port = await freePort(port + 1);
     const base = `http://localhost:${port}`;
     const sEnv = { ...env, PORT: String(port), APP_URL: base, NEXTAUTH_URL: base };
-    const s = await serve(life, sEnv, name, { ...opts, processes, build: false });
+    // One build serves both (made before the first starts, unless --no-build).
+    const s = await serve(life, sEnv, name, { ...opts, processes, build: opts.build && !servers.length });
     servers.push({ ...s, base, processes });
   }
   const first = servers[0];
