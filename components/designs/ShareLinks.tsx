@@ -7,6 +7,7 @@ import type { ShareView } from '@/lib/variants/queries';
 import { sharesApi, type CreatedShare } from './api';
 import { ConfirmButton } from './ConfirmButton';
 import { btn, input } from './styles';
+import { refetchAfterWrite } from '@/components/ui/refetch-after-write';
 
 const EXPIRY_CHOICES = [
   { days: 0, label: 'Never expires' },
@@ -39,7 +40,7 @@ export function ShareLinks({ variantId, variantName }: { variantId: number; vari
     onSuccess: ({ share }) => {
       setFresh(share);
       setCopied(false);
-      return qc.invalidateQueries({ queryKey: key });
+      return refetchAfterWrite(qc, key);
     },
   });
   const revoke = useMutation({
@@ -55,7 +56,7 @@ export function ShareLinks({ variantId, variantName }: { variantId: number; vari
       return { before };
     },
     onError: (_e, _id, ctx) => qc.setQueryData(key, ctx?.before),
-    onSettled: () => qc.invalidateQueries({ queryKey: key }),
+    onSettled: () => refetchAfterWrite(qc, key),
   });
 
   const copy = async (url: string) => {

@@ -5,6 +5,7 @@ import { useRef, useState } from 'react';
 import { ApiClientError } from '@/components/ui/api-client';
 import { variantsApi } from './api';
 import { btn, input } from './styles';
+import { refetchAfterWrite } from '@/components/ui/refetch-after-write';
 
 /** Largest design file accepted from disk; the API refuses bodies over 1 MB anyway. */
 const MAX_FILE_BYTES = 900 * 1024;
@@ -44,7 +45,7 @@ export function UploadVariant({
       setName('');
       if (file.current) file.current.value = '';
       onCreated?.(variant.id);
-      return qc.invalidateQueries({ queryKey: ['design', designId] });
+      return refetchAfterWrite(qc, ['design', designId]);
     },
   });
   // Say plainly that nothing was added, then the server's reason, which names the field at fault.

@@ -10,6 +10,7 @@ import {
 } from '@tanstack/react-query';
 import type { DesignSummary, VariantSummary } from '@/lib/variants/queries';
 import { designsApi, variantsApi, type Page } from './api';
+import { refetchAfterWrite } from '@/components/ui/refetch-after-write';
 
 type Pages = InfiniteData<Page<DesignSummary>, string | null>;
 
@@ -49,7 +50,7 @@ export function optimistic<V>(
     onError: (_e: unknown, _v: V, ctx?: { snapshot: [QueryKey, Pages | undefined][] }) => {
       for (const [key, data] of ctx?.snapshot ?? []) qc.setQueryData(key, data);
     },
-    onSettled: () => qc.invalidateQueries({ queryKey: designsKey(enclosureId) }),
+    onSettled: () => refetchAfterWrite(qc, designsKey(enclosureId)),
   };
 }
 

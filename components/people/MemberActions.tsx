@@ -4,6 +4,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useId, useState } from 'react';
 import { button, focusRing } from '@/components/ui/styles';
 import { useApiMutation } from '@/components/ui/useApiMutation';
+import { refetchAfterWrite } from '@/components/ui/refetch-after-write';
 
 type Role = 'owner' | 'staff' | 'keeper';
 
@@ -31,7 +32,7 @@ export function MemberActions({
         ? { method: 'DELETE', url: `${url}?userId=${userId}` }
         : { method: 'PATCH', url, body: { userId, role: to.role } },
     // The members table's pages come from this same address (useServerList keys them by it).
-    { onSuccess: () => void queryClient.invalidateQueries({ queryKey: [url] }) },
+    { onSuccess: () => void refetchAfterWrite(queryClient, [url]) },
   );
   const busy = change.isPending;
 
