@@ -6,8 +6,7 @@ import { describe, expect, it } from 'vitest';
 import { DEMO_PASSWORDS, demoSignIn } from '@/lib/demo/scenario';
 import { benchDesign, heaviestAllowedDesign } from '@/simulation/testing/fixtures';
 import { expectNotStalled } from '../helpers/not-stalled';
-import { BASE_URL } from './harness';
-import { signInCookie } from './sign-in-cookie';
+import { BASE_URL, signInCookie } from './harness';
 
 const ORIGIN = new URL(BASE_URL).origin;
 

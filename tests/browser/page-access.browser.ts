@@ -21,9 +21,8 @@ import {
   User,
   Variant,
 } from '@/models';
-import { BASE_URL } from './harness';
+import { BASE_URL, signInCookie } from './harness';
 import { pageRoutes } from './page-routes';
-import { signInCookie } from './sign-in-cookie';
 
 const ENCLOSURE = 'Desert vivarium';
 const MISSING_ID = 999_999_999;

@@ -7,8 +7,7 @@ import { readFileSync } from 'node:fs';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { DEMO_PASSWORDS, demoSignIn } from '@/lib/demo/scenario';
-import { BASE_URL } from './harness';
-import { signInCookie } from './sign-in-cookie';
+import { BASE_URL, signInCookie } from './harness';
 
 const ROOT = path.resolve(import.meta.dirname, '..', '..');
 const MANIFEST = path.join(
