@@ -27,7 +27,13 @@ import os from 'node:os';
 import path from 'node:path';
 import { parseArgs } from 'node:util';
 import { ensureSecret, loadEnv, ROOT, usesPrivateDb } from './lib/env.mjs';
-import { ensureDatabases, ensureMariaDB, recreateDatabase } from './lib/mariadb.mjs';
+import {
+  adminSql,
+  ensureDatabases,
+  ensureMariaDB,
+  recreateDatabase,
+  refreshStatistics,
+} from './lib/mariadb.mjs';
 import { bin, duration, freePort, log, run, stopProcess } from './lib/proc.mjs';
 import { Lifecycle, migrate, startNext } from './lib/stack.mjs';
 import { webProcesses } from './lib/web-cluster.mjs';
@@ -298,6 +304,8 @@ async function seedAll(env, names, size, growth) {
       computed += grown.added.computedOutlooks;
       for (const k of Object.keys(total)) total[k] += extra[k];
     }
+    // As a production database has them: statistics of the loaded tables, not of empty ones.
+    await refreshStatistics(name, (sql) => adminSql(sql));
     log(
       `Seeded ${name} in ${duration(seconds * 1000)} (outlooks ${outlookSeconds.toFixed(1)} s, ` +
         `${computed.toLocaleString('en')} distinct computations).`,
@@ -427,7 +435,11 @@ async function main() {
     life.db = await ensureMariaDB({ port: Number(env.DB_PORT) });
     let seeded = null;
     if (opts.reuse) {
-      for (const name of names) await prepareScaleDb(scaleEnv, name);
+      for (const name of names) {
+        await prepareScaleDb(scaleEnv, name);
+        // A database seeded by an earlier version of this script may lack them.
+        await refreshStatistics(name, (sql) => adminSql(sql));
+      }
     } else {
       seeded = await seedAll(scaleEnv, names, opts.size, opts.growth);
     }

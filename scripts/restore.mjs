@@ -14,6 +14,7 @@ import { pipeline } from 'node:stream/promises';
 import { pathToFileURL } from 'node:url';
 import { createGunzip } from 'node:zlib';
 import { loadEnv } from './lib/env.mjs';
+import { refreshStatistics } from './lib/mariadb.mjs';
 import { backup, checkDatabaseName, connection, program, sql } from './backup.mjs';
 
 const literal = (s) => `'${String(s).replace(/\\/g, '\\\\').replace(/'/g, "\\'")}'`;
@@ -95,6 +96,9 @@ export async function restore({ file, database, force = false, grant = false, en
   }
   const code = await exited;
   if (code !== 0) throw new Error(`restore failed (mariadb exited with ${code}): ${stderr.trim()}`);
+  // The load leaves InnoDB's statistics of the empty tables until its background recount, which a
+  // restart soon after would lose: the lists' query plans need the real sizes.
+  await refreshStatistics(database, (s) => sql(s, { env }));
   return { tables: await tableCount(database, env), safetyBackup, ms: Date.now() - t0 };
 }
 
