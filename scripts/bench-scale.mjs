@@ -1,7 +1,7 @@
 #!/usr/bin/env node
 // `npm run bench:scale -- [--scale=N] [--enclosures N --lamps N --readings N --designs N] [--growth=4]
 //                          [--rate=20] [--duration=10] [--seed-only | --reuse] [--no-build] [--only=a,b]
-//                          [--processes=N | --compare=1,2]`
+//                          [--processes=N | --compare=1,2] [--arrivals=even|burst]`
 // The signed-in area at the size of a zoo's reptile house or a busy shop. On databases of its own on the
 // private MariaDB it seeds a generated organisation (default 2,000 enclosures, 8,000 lamps, 100,000
 // readings, 200 designs with two variants each, times --scale) into `<DB_NAME>_scale`, and the same
@@ -9,9 +9,10 @@
 // chunked INSERTs, then the outlooks by the app's own computation once per distinct lamp history
 // (scripts/lib/scale-outlooks.ts). It builds the production app into .next/scale-build, starts it on a
 // free port of its own on the 1× database, signs in as the owner, then drives every list page and list
-// API of the signed-in area, one after another, at a fixed rate with autocannon while /api/health is asked
-// alongside. Prints per route: requests/s, p50/p99, bytes a response, p50/p99 as multiples of
-// /api/health's alone (the baseline), and the slowest /api/health answer seen while it ran. Then it
+// API of the signed-in area, one after another, at a fixed rate with autocannon (requests evenly spaced,
+// one every 1000/rate ms: scripts/lib/paced.mjs; `--arrivals=burst` for autocannon's own overallRate,
+// which sends each second's requests together) while /api/health is asked alongside. Prints per route:
+// requests/s, p50/p99, bytes a response, p50/p99 as multiples of /api/health's alone (the baseline), and the slowest /api/health answer seen while it ran. Then it
 // restarts the app on the grown database and measures the lists again: their cost should not follow
 // the organisation's size.
 // Seed ahead, measure later: `--seed-only` seeds both databases and stops (the machine's load only slows
@@ -36,17 +37,9 @@ import {
 } from './lib/mariadb.mjs';
 import { bin, duration, freePort, log, run, stopProcess } from './lib/proc.mjs';
 import { Lifecycle, migrate, startNext } from './lib/stack.mjs';
+import { bursts, paced } from './lib/paced.mjs';
 import { webProcesses } from './lib/web-cluster.mjs';
-import {
-  api,
-  codesText,
-  loadAverage,
-  printColumns,
-  runConditions,
-  runFigures,
-  signIn,
-  warmUp,
-} from './load.mjs';
+import { api, codesText, loadAverage, printColumns, runConditions, signIn, warmUp } from './load.mjs';
 
 const DEFAULT_SIZE = { enclosures: 2000, lamps: 8000, readings: 100_000, designs: 200 };
 
@@ -74,6 +67,7 @@ function options() {
       only: { type: 'string', default: '' },
       processes: { type: 'string', default: '' },
       compare: { type: 'string', default: '' },
+      arrivals: { type: 'string', default: 'even' },
       help: { type: 'boolean', default: false },
     },
   });
@@ -103,8 +97,19 @@ function options() {
     processes: values.processes === '' ? undefined : webProcesses(values.processes),
     // `--compare=1,2`: servers of these process counts side by side, measured route by route in turn.
     compare: values.compare.split(',').filter(Boolean).map(webProcesses),
+    arrivals: arrivalsOf(values.arrivals),
     help: values.help,
   };
+}
+
+/**
+ * How the requests of a route arrive. `even` (the default): one every 1000/rate ms (scripts/lib/paced.mjs).
+ * `burst`: autocannon's own `overallRate`, which sends each second's requests together at the top of
+ * the second over its connections (what this bench measured before; kept to compare the two).
+ */
+function arrivalsOf(value) {
+  if (value !== 'even' && value !== 'burst') throw new Error(`--arrivals is even or burst, not ${value}`);
+  return value;
 }
 
 /** Runs the seeding script against the scale database; resolves its JSON line. */
@@ -147,30 +152,40 @@ async function warmRoute(base, cookie, route, processes) {
   });
 }
 
+/**
+ * `rate` requests a second to `url` for `duration` s, arriving as `arrivals` says; the figures a row of
+ * the table needs.
+ */
+async function drive(url, headers, rate, opts, connections) {
+  const run = opts.arrivals === 'even' ? paced : bursts;
+  return run({ url, headers, rate, duration: opts.duration, connections, timeout: 20 });
+}
+
+const arrivalText = (opts) =>
+  opts.arrivals === 'even'
+    ? 'requests evenly spaced'
+    : "requests in bursts at each second's start (autocannon overallRate)";
+
 /** One route at the fixed rate, with /api/health asked alongside at a quarter of it. */
 async function measure(base, cookie, route, opts) {
   const headers = { cookie };
   await warmRoute(base, cookie, route, opts.processes);
-  const common = { connections: 10, duration: opts.duration, timeout: 20 };
   const [main, health] = await Promise.all([
-    autocannon({ ...common, url: `${base}${route}`, headers, overallRate: opts.rate }),
-    route === '/api/health'
-      ? null
-      : autocannon({
-          ...common,
-          connections: 2,
-          url: `${base}/api/health`,
-          overallRate: Math.max(1, opts.rate / 4),
-        }),
+    drive(`${base}${route}`, headers, opts.rate, opts, 10),
+    route === '/api/health' ? null : drive(`${base}/api/health`, {}, Math.max(1, opts.rate / 4), opts, 2),
   ]);
   return {
     route: labelOf(route),
-    ...runFigures(main),
-    bytes: main.requests.total ? Math.round(main.throughput.total / main.requests.total) : 0,
+    requests: main.requests,
+    rps: main.rps,
+    p50: main.p50,
+    p99: main.p99,
+    codes: main.codes,
+    bytes: main.bytes,
     errors: main.errors + main.timeouts,
-    // No answer within the run: nothing measured (autocannon leaves the figures at 0).
-    healthMax: health?.requests.total ? health.latency.max : null,
-    healthP99: health?.requests.total ? health.latency.p99 : null,
+    // No answer within the run: nothing measured.
+    healthMax: health?.requests ? health.max : null,
+    healthP99: health?.requests ? health.p99 : null,
   };
 }
 
@@ -374,7 +389,7 @@ async function compareProcesses(life, env, name, opts, { started, loadBefore }) 
   console.log(
     `${started.toISOString()} · ${os.cpus().length} CPUs shared with other users · load average (1/5/15 min) ` +
       `${loadBefore} before, ${loadAfter} after the routes · ${opts.rate} req/s × ${opts.duration} s a route, ` +
-      `/api/health alongside at ${Math.max(1, opts.rate / 4)} req/s · each route on each server in turn`,
+      `/api/health alongside at ${Math.max(1, opts.rate / 4)} req/s · ${arrivalText(opts)} · each route on each server in turn`,
   );
   console.log(`organisation: ${fmtSize(first.org.size)} (${name})`);
   for (const [k, s] of servers.entries()) {
@@ -385,6 +400,7 @@ async function compareProcesses(life, env, name, opts, { started, loadBefore }) 
   console.log(
     JSON.stringify({
       ...runConditions(started, loadBefore, loadAfter, opts),
+      arrivals: opts.arrivals,
       compare: servers.map((s, k) => ({ processes: s.processes, results: rows[k] })),
     }),
   );
@@ -405,7 +421,7 @@ async function main() {
   const opts = options();
   if (opts.help) {
     console.log(
-      'npm run bench:scale -- [--scale=N] [--enclosures N --lamps N --readings N --designs N] [--growth=4] [--rate=20] [--duration=10] [--seed-only | --reuse] [--no-build] [--only=/enclosures,/jobs] [--processes=N | --compare=1,2]',
+      'npm run bench:scale -- [--scale=N] [--enclosures N --lamps N --readings N --designs N] [--growth=4] [--rate=20] [--duration=10] [--seed-only | --reuse] [--no-build] [--only=/enclosures,/jobs] [--processes=N | --compare=1,2] [--arrivals=even|burst]',
     );
     return;
   }
@@ -489,7 +505,7 @@ async function main() {
     console.log(
       `${started.toISOString()} · ${os.cpus().length} CPUs shared with other users · load average (1/5/15 min) ` +
         `${loadBefore} before, ${loadAfter} after the routes · ${opts.rate} req/s × ${opts.duration} s a route, ` +
-        `/api/health alongside at ${Math.max(1, opts.rate / 4)} req/s · ${opts.processes} server ` +
+        `/api/health alongside at ${Math.max(1, opts.rate / 4)} req/s · ${arrivalText(opts)} · ${opts.processes} server ` +
         `process${opts.processes === 1 ? '' : 'es'}`,
     );
     console.log(`organisation: ${fmtSize(org.size)} (${names[0]})`);
@@ -534,6 +550,7 @@ async function main() {
         size: org.size,
         grownSize: grownOrg?.size ?? null,
         seeded,
+        arrivals: opts.arrivals,
         processes: opts.processes,
         results: rows,
         growth,

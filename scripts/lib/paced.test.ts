@@ -1,0 +1,54 @@
+import http from 'node:http';
+import type { AddressInfo } from 'node:net';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { bursts, paced, percentile } from './paced.mjs';
+
+// The scale bench's load: requests evenly spaced at the rate asked, where autocannon's own overallRate
+// sends each second's share of every connection together at the top of the second. Checked by when the
+// requests reach a local server (gaps between arrivals), not by how fast anything is.
+let server: http.Server;
+let url: string;
+let arrivals: number[] = [];
+
+beforeAll(async () => {
+  server = http.createServer((req, res) => {
+    arrivals.push(performance.now());
+    res.end('ok');
+  });
+  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
+  url = `http://127.0.0.1:${(server.address() as AddressInfo).port}/`;
+});
+
+afterAll(() => new Promise<void>((resolve) => server.close(() => resolve())));
+
+/** Gaps between consecutive arrivals of the first `n` requests, in ms, sorted. */
+const firstGaps = (n: number) =>
+  arrivals
+    .slice(0, n)
+    .slice(1)
+    .map((t, i) => t - arrivals[i]!)
+    .sort((a, b) => a - b);
+
+describe('evenly spaced requests', () => {
+  it('nearest-rank percentiles', () => {
+    const sorted = Array.from({ length: 200 }, (_, i) => i + 1);
+    expect(percentile(sorted, 50)).toBe(100);
+    expect(percentile(sorted, 99)).toBe(198);
+    expect(percentile([7], 99)).toBe(7);
+    expect(percentile([], 50)).toBe(0);
+  });
+
+  it('spreads a second’s requests through the second, unlike a burst', { timeout: 30_000 }, async () => {
+    arrivals = [];
+    const even = await paced({ url, rate: 10, duration: 2 });
+    expect(even.codes).toEqual({ 200: even.requests });
+    expect(even.requests).toBe(20);
+    // 10 a second: one every 100 ms; half the gaps at least 50 ms even on a busy machine.
+    expect(percentile(firstGaps(10), 50)).toBeGreaterThanOrEqual(50);
+
+    arrivals = [];
+    await bursts({ url, connections: 10, rate: 10, duration: 1 });
+    // The burst it replaces: the first second's ten requests all within a few milliseconds.
+    expect(percentile(firstGaps(10), 50)).toBeLessThan(50);
+  });
+});
