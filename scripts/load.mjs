@@ -156,7 +156,9 @@ async function timeSequential(url, runs) {
 
 /** Runs autocannon at a fixed rate for a fixed time; resolves its results. */
 function cannon(opts, spec) {
-  // overallRate paces the requests (rate × duration at most); duration ends the scenario.
+  // overallRate caps the requests at rate × duration; duration ends the scenario. It sends each second's
+  // share of every connection together at the second's start (bursts, a harder test than requests
+  // evenly spaced; `npm run bench:scale` spaces them evenly, scripts/lib/paced.mjs).
   return autocannon({
     url: opts.url,
     connections: opts.connections,
