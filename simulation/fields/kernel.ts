@@ -123,7 +123,18 @@ export class Scratch {
   rI: Float64Array;
   ord: Int32Array;
   kKey: Int32Array;
-  /** Output of evalCell. */
+  /**
+   * A stretch's lowest and highest corner of each barrier (stretchEnd; by RowData index), its runs' ends as
+   * corners (fillStretch).
+   */
+  sLv: Int32Array;
+  sHv: Int32Array;
+  rV: Int32Array;
+  /** Where each run ends at the cell being summed (sumRuns). */
+  rX: Float64Array;
+  /** Cells evaluated in stretches so far (a count for tests; it never affects a value). */
+  stretched = 0;
+  /** Output of evalCell (and of sumRuns). */
   uv = 0;
   ir = 0;
   /** evalCell's one-cell span. */
@@ -139,6 +150,10 @@ export class Scratch {
     this.rI = new Float64Array(2 * c + 2);
     this.ord = new Int32Array(2 * c + 2);
     this.kKey = new Int32Array(c);
+    this.sLv = new Int32Array(c);
+    this.sHv = new Int32Array(c);
+    this.rV = new Int32Array(2 * c + 2);
+    this.rX = new Float64Array(2 * c + 2);
   }
 }
 
@@ -312,10 +327,16 @@ export function evalSpan(
   const rI = s.rI;
   const ord = s.ord;
   const kKey = s.kKey;
+  const rX = s.rX;
   // The runs in rRef, rU, rI were made for kN pieces with kM inner ends in ord (kN < 0: none kept).
   let kN = -1;
   let kM = 0;
   let nr = 0;
+  // A tube in a row sweep's piece: every projected end is a straight line along a stretch where the same
+  // corner stays lowest (highest), so a cell's structure (which barriers hide which ends, in which order)
+  // holds over stretches that stretchEnd finds, and those take a lighter loop.
+  // (Q.x > 0 keeps a stretch's margins linear in Q.x: stretchEnd.)
+  const stretchy = tube && inRange && to - from > 1 && (from + off) * cell > 0;
   cells: for (let i = from; i < to; i++) {
     const qx = (i + off) * cell;
     uv[i] = 0;
@@ -400,15 +421,32 @@ export function evalSpan(
       // tube's own (then their G is the tube end's).
       const lo = sLo[0]!;
       const hi = sHi[0]!;
-      const g1 = G(s1 - qx, d);
-      const g2 = G(s2 - qx, d);
-      const gLo = lo > s1 ? G(lo - qx, d) : g1;
-      const gHi = hi < s2 ? G(hi - qx, d) : g2;
-      const open = gLo - g1 + (g2 - gHi);
-      const hidden = gHi - gLo;
       const k = occ[pk[0]! >> 2]!;
-      uv[i] = uvI * (open + tUv[k]! * hidden) * scale * gu;
-      ir[i] = irI * (open + tIr[k]! * hidden) * scale * gi;
+      const tU = tUv[k]!;
+      const tI = tIr[k]!;
+      let open: number;
+      let hidden = 0;
+      if (tU === 0 && tI === 0 && (lo === s1 || hi === s2)) {
+        // An opaque piece at one end of the tube: only the open part counts, and its far end is the tube's
+        // other end (the same bits as below, where g2 − g2 or g1 − g1 adds +0 and the hidden part 0).
+        open = hi === s2 ? G(lo - qx, d) - G(s1 - qx, d) + 0 : 0 + (G(s2 - qx, d) - G(hi - qx, d));
+      } else {
+        const g1 = G(s1 - qx, d);
+        const g2 = G(s2 - qx, d);
+        const gLo = lo > s1 ? G(lo - qx, d) : g1;
+        const gHi = hi < s2 ? G(hi - qx, d) : g2;
+        open = gLo - g1 + (g2 - gHi);
+        hidden = gHi - gLo;
+      }
+      uv[i] = uvI * (open + tU * hidden) * scale * gu;
+      ir[i] = irI * (open + tI * hidden) * scale * gi;
+      if (stretchy) {
+        const e = stretchEnd(lamp, row, s, i, to, cell, off, 1, 0);
+        if (e > i) {
+          fillStretch(lamp, row, s, 1, 0, gu, gi, i + 1, e + 1, cell, off, uv, ir);
+          i = e;
+        }
+      }
       continue;
     }
     // Sweep the visible pieces between the tube ends and the interval ends. Every interval lies within
@@ -489,28 +527,257 @@ export function evalSpan(
       kN = clear ? n : -1;
       kM = m;
     }
-    let sumU = 0;
-    let sumI = 0;
-    // A run starts where the one before it ends (the first at s1); G at the last end evaluated, if any.
-    let x0 = s1;
-    let gAt = NaN;
-    let g0 = 0;
     for (let a = 0; a < nr; a++) {
       const r = rRef[a]!;
-      const x1 = r < 0 ? s2 : (r & 1) === 0 ? sLo[r >> 1]! : sHi[r >> 1]!;
-      const pu = rU[a]!;
-      const pi = rI[a]!;
-      if (pu !== 0 || pi !== 0) {
-        const ga = x0 === gAt ? g0 : G(x0 - qx, d);
-        const gb = G(x1 - qx, d);
-        sumU += pu * (gb - ga);
-        sumI += pi * (gb - ga);
-        gAt = x1;
-        g0 = gb;
-      }
-      x0 = x1;
+      rX[a] = r < 0 ? s2 : (r & 1) === 0 ? sLo[r >> 1]! : sHi[r >> 1]!;
     }
-    uv[i] = uvI * sumU * scale * gu;
-    ir[i] = irI * sumI * scale * gi;
+    sumRuns(s, nr, s1, qx, d);
+    uv[i] = uvI * s.uv * scale * gu;
+    ir[i] = irI * s.ir * scale * gi;
+    // Clear runs: the cells after this one that keep the same structure take only the run ends' closed forms.
+    if (stretchy && kN === n) {
+      const e = stretchEnd(lamp, row, s, i, to, cell, off, n, kM);
+      if (e > i) {
+        fillStretch(lamp, row, s, n, nr, gu, gi, i + 1, e + 1, cell, off, uv, ir);
+        i = e;
+      }
+    }
   }
+}
+
+/**
+ * Margin of a stretch's conditions (stretchEnd), relative to the magnitudes of the two lines compared: 5·GAP
+ * where a condition is checked, so at least 4·GAP at every cell of the stretch.
+ */
+const STRETCH_MARGIN = 5 * GAP;
+
+/**
+ * At most k: how many cells after the one at qx two lines x = ap + bp·Q.x and x = aq + bq·Q.x keep the side
+ * they are on at qx, apart by more than STRETCH_MARGIN·(1 + |ap| + |aq| + (|bp| + |bq|)·Q.x) (−1: not even
+ * at qx). Q.x > 0, so that margin is linear in Q.x like the gap: the gap minus the margin is a straight
+ * line, positive at qx and at the returned cell, hence at every cell between. Rounding (below 1e-15 of the
+ * magnitudes) is far under the margin.
+ */
+function keeps(ap: number, bp: number, aq: number, bq: number, qx: number, cell: number, k: number): number {
+  let f = aq - ap + (bq - bp) * qx;
+  let db = bq - bp;
+  if (f < 0) {
+    f = -f;
+    db = -db;
+  }
+  const sb = Math.abs(bp) + Math.abs(bq);
+  const g = f - STRETCH_MARGIN * (1 + Math.abs(ap) + Math.abs(aq) + sb * qx);
+  if (!(g > 0)) return -1;
+  // What the gap above the margin loses per cell; most pairs still hold k cells on (no division then).
+  const drop = (STRETCH_MARGIN * sb - db) * cell;
+  if (drop * k < g) return k;
+  return Math.floor(g / drop);
+}
+
+/**
+ * The last cell e (i ≤ e < to) up to which a tube's structure at cell i holds (i when none after it is
+ * sure): every act barrier keeps its lowest and highest corner, those keep their side of s1 and s2, and the
+ * pieces' m inner ends (s.ord) keep their order, each pair of lines apart by the margin of `keeps` (at
+ * least 4·GAP of their magnitudes). Every cell of the stretch then makes the same comparisons as cell i —
+ * the same pieces, each end in the same place of the order with clear gaps — so evalSpan cell by cell
+ * would use there the very runs (or one-piece case) of cell i. The corners are left in s.sLv and s.sHv.
+ */
+function stretchEnd(
+  lamp: LampGeom,
+  row: RowData,
+  s: Scratch,
+  i: number,
+  to: number,
+  cell: number,
+  off: number,
+  n: number,
+  m: number,
+): number {
+  const A = row.A;
+  const B = row.B;
+  const s1 = lamp.s1;
+  const s2 = lamp.s2;
+  const sl = s.sLv;
+  const sh = s.sHv;
+  const qx = (i + off) * cell;
+  let k = to - 1 - i;
+  for (let t = 0; t < row.nAct; t++) {
+    const c = row.act[t]!;
+    let vl = row.lv[c]!;
+    let vh = row.hv[c]!;
+    if (vl < 0 || vh < 0) {
+      // No corner picked for the whole piece: the lowest and highest here, which every other corner stays
+      // above (below).
+      const v0 = row.vStart[c]!;
+      const v1 = v0 + row.vCount[c]!;
+      vl = v0;
+      vh = v0;
+      let xl = A[v0]! + B[v0]! * qx;
+      let xh = xl;
+      for (let v = v0 + 1; v < v1; v++) {
+        const x = A[v]! + B[v]! * qx;
+        if (x < xl) {
+          xl = x;
+          vl = v;
+        }
+        if (x > xh) {
+          xh = x;
+          vh = v;
+        }
+      }
+      for (let v = v0; v < v1; v++) {
+        if (v !== vl) k = keeps(A[vl]!, B[vl]!, A[v]!, B[v]!, qx, cell, k);
+        if (v !== vh) k = keeps(A[v]!, B[v]!, A[vh]!, B[vh]!, qx, cell, k);
+      }
+      if (k <= 0) return i;
+    }
+    sl[c] = vl;
+    sh[c] = vh;
+    // The sides of s1 and s2 the lowest and highest ends are on (the highest is never below the lowest).
+    const al = A[vl]!;
+    const bl = B[vl]!;
+    const ah = A[vh]!;
+    const bh = B[vh]!;
+    k = keeps(al, bl, s1, 0, qx, cell, k);
+    if (al + bl * qx > s1) k = keeps(al, bl, s2, 0, qx, cell, k);
+    else k = keeps(ah, bh, s1, 0, qx, cell, k);
+    k = keeps(ah, bh, s2, 0, qx, cell, k);
+    if (k <= 0) return i;
+  }
+  if (n === 1) {
+    // One piece with both ends inside: they stay apart.
+    const b = s.pk[0]! >> 2;
+    if ((s.pk[0]! & 3) === 3) k = keeps(A[sl[b]!]!, B[sl[b]!]!, A[sh[b]!]!, B[sh[b]!]!, qx, cell, k);
+  } else {
+    // Neighbouring inner ends keep their order (the first and last against s1 and s2 are sides above).
+    for (let a = 1; a < m; a++) {
+      const p = endCorner(s, s.ord[a - 1]!);
+      const q = endCorner(s, s.ord[a]!);
+      k = keeps(A[p]!, B[p]!, A[q]!, B[q]!, qx, cell, k);
+    }
+  }
+  return k > 0 ? i + k : i;
+}
+
+/** The corner (Scratch.sLv, sHv) an interval end of s.ord refers to (2·piece: lower, 2·piece + 1: upper). */
+function endCorner(s: Scratch, r: number): number {
+  const b = s.pk[r >> 1]! >> 2;
+  return (r & 1) === 0 ? s.sLv[b]! : s.sHv[b]!;
+}
+
+/**
+ * Cells from..to−1 of a stretch (stretchEnd): with n = 1 the one partly hiding piece of s.pk[0] in the
+ * arithmetic of evalSpan's one-piece case, else the nr runs in s.rRef, rU, rI in that of its run sum, each
+ * inner end projected from the corner stretchEnd left for it.
+ */
+function fillStretch(
+  lamp: LampGeom,
+  row: RowData,
+  s: Scratch,
+  n: number,
+  nr: number,
+  gu: number,
+  gi: number,
+  from: number,
+  to: number,
+  cell: number,
+  off: number,
+  uv: Float64Array,
+  ir: Float64Array,
+) {
+  const s1 = lamp.s1;
+  const s2 = lamp.s2;
+  const d = row.d;
+  const scale = row.scale;
+  const uvI = lamp.uvI;
+  const irI = lamp.irI;
+  const A = row.A;
+  const B = row.B;
+  s.stretched += to - from;
+  if (n === 1) {
+    const key = s.pk[0]!;
+    const b = key >> 2;
+    const k = row.occ[b]!;
+    const tU = lamp.tUv[k]!;
+    const tI = lamp.tIr[k]!;
+    const inLo = (key & 1) !== 0;
+    const inHi = (key & 2) !== 0;
+    const aL = A[s.sLv[b]!]!;
+    const bL = B[s.sLv[b]!]!;
+    const aH = A[s.sHv[b]!]!;
+    const bH = B[s.sHv[b]!]!;
+    if (tU === 0 && tI === 0 && !(inLo && inHi)) {
+      // An opaque piece at one end of the tube, as in evalSpan.
+      for (let i = from; i < to; i++) {
+        const qx = (i + off) * cell;
+        const open = inLo
+          ? G(aL + bL * qx - qx, d) - G(s1 - qx, d) + 0
+          : 0 + (G(s2 - qx, d) - G(aH + bH * qx - qx, d));
+        uv[i] = uvI * (open + tU * 0) * scale * gu;
+        ir[i] = irI * (open + tI * 0) * scale * gi;
+      }
+      return;
+    }
+    for (let i = from; i < to; i++) {
+      const qx = (i + off) * cell;
+      const g1 = G(s1 - qx, d);
+      const g2 = G(s2 - qx, d);
+      const gLo = inLo ? G(aL + bL * qx - qx, d) : g1;
+      const gHi = inHi ? G(aH + bH * qx - qx, d) : g2;
+      const open = gLo - g1 + (g2 - gHi);
+      const hidden = gHi - gLo;
+      uv[i] = uvI * (open + tU * hidden) * scale * gu;
+      ir[i] = irI * (open + tI * hidden) * scale * gi;
+    }
+    return;
+  }
+  const rv = s.rV;
+  for (let a = 0; a < nr; a++) {
+    const r = s.rRef[a]!;
+    rv[a] = r < 0 ? -1 : endCorner(s, r);
+  }
+  const rX = s.rX;
+  for (let i = from; i < to; i++) {
+    const qx = (i + off) * cell;
+    for (let a = 0; a < nr; a++) {
+      const v = rv[a]!;
+      rX[a] = v < 0 ? s2 : A[v]! + B[v]! * qx;
+    }
+    sumRuns(s, nr, s1, qx, d);
+    uv[i] = uvI * s.uv * scale * gu;
+    ir[i] = irI * s.ir * scale * gi;
+  }
+}
+
+/**
+ * A tube's visible runs at a cell: the shares of UVB and infrared (s.rU, rI) times the closed form between
+ * each run's start and its end s.rX (the first run starts at s1, each next where the one before ends),
+ * summed into s.uv and s.ir. G is evaluated only at the ends of runs that pass anything, once at an end
+ * two such runs share.
+ */
+function sumRuns(s: Scratch, nr: number, s1: number, qx: number, d: number) {
+  const rX = s.rX;
+  const rU = s.rU;
+  const rI = s.rI;
+  let sumU = 0;
+  let sumI = 0;
+  let x0 = s1;
+  let gAt = NaN;
+  let g0 = 0;
+  for (let a = 0; a < nr; a++) {
+    const x1 = rX[a]!;
+    const pu = rU[a]!;
+    const pi = rI[a]!;
+    if (pu !== 0 || pi !== 0) {
+      const ga = x0 === gAt ? g0 : G(x0 - qx, d);
+      const gb = G(x1 - qx, d);
+      sumU += pu * (gb - ga);
+      sumI += pi * (gb - ga);
+      gAt = x1;
+      g0 = gb;
+    }
+    x0 = x1;
+  }
+  s.uv = sumU;
+  s.ir = sumI;
 }
