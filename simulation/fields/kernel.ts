@@ -129,6 +129,8 @@ export class Scratch {
    */
   sLv: Int32Array;
   sHv: Int32Array;
+  /** The last cell of the span up to which a barrier's sLv, sHv and their sides hold (−1: not known). */
+  sUntil: Int32Array;
   rV: Int32Array;
   /** Cells evaluated in stretches so far (a count for tests; it never affects a value). */
   stretched = 0;
@@ -150,6 +152,7 @@ export class Scratch {
     this.kKey = new Int32Array(c);
     this.sLv = new Int32Array(c);
     this.sHv = new Int32Array(c);
+    this.sUntil = new Int32Array(c);
     this.rV = new Int32Array(2 * c + 2);
   }
 }
@@ -333,6 +336,7 @@ export function evalSpan(
   // holds over stretches that stretchEnd finds, and those take a lighter loop.
   // (Q.x > 0 keeps a stretch's margins linear in Q.x: stretchEnd.)
   const stretchy = tube && inRange && to - from > 1 && (from + off) * cell > 0;
+  if (stretchy) for (let t = 0; t < nAct; t++) s.sUntil[act[t]!] = -1;
   cells: for (let i = from; i < to; i++) {
     const qx = (i + off) * cell;
     uv[i] = 0;
@@ -612,9 +616,16 @@ function stretchEnd(
   const sl = s.sLv;
   const sh = s.sHv;
   const qx = (i + off) * cell;
+  const su = s.sUntil;
   let k = to - 1 - i;
   for (let t = 0; t < row.nAct; t++) {
     const c = row.act[t]!;
+    // A barrier's corners and sides, found for an earlier stretch of this span, hold up to su[c].
+    if (su[c]! >= i) {
+      if (su[c]! - i < k) k = su[c]! - i;
+      continue;
+    }
+    let kb = to - 1 - i;
     let vl = row.lv[c]!;
     let vh = row.hv[c]!;
     if (vl < 0 || vh < 0) {
@@ -638,10 +649,9 @@ function stretchEnd(
         }
       }
       for (let v = v0; v < v1; v++) {
-        if (v !== vl) k = keeps(A[vl]!, B[vl]!, A[v]!, B[v]!, qx, cell, k);
-        if (v !== vh) k = keeps(A[v]!, B[v]!, A[vh]!, B[vh]!, qx, cell, k);
+        if (v !== vl) kb = keeps(A[vl]!, B[vl]!, A[v]!, B[v]!, qx, cell, kb);
+        if (v !== vh) kb = keeps(A[v]!, B[v]!, A[vh]!, B[vh]!, qx, cell, kb);
       }
-      if (k <= 0) return i;
     }
     sl[c] = vl;
     sh[c] = vh;
@@ -650,11 +660,13 @@ function stretchEnd(
     const bl = B[vl]!;
     const ah = A[vh]!;
     const bh = B[vh]!;
-    k = keeps(al, bl, s1, 0, qx, cell, k);
-    if (al + bl * qx > s1) k = keeps(al, bl, s2, 0, qx, cell, k);
-    else k = keeps(ah, bh, s1, 0, qx, cell, k);
-    k = keeps(ah, bh, s2, 0, qx, cell, k);
-    if (k <= 0) return i;
+    kb = keeps(al, bl, s1, 0, qx, cell, kb);
+    if (al + bl * qx > s1) kb = keeps(al, bl, s2, 0, qx, cell, kb);
+    else kb = keeps(ah, bh, s1, 0, qx, cell, kb);
+    kb = keeps(ah, bh, s2, 0, qx, cell, kb);
+    su[c] = kb < 0 ? -1 : i + kb;
+    if (kb <= 0) return i;
+    if (kb < k) k = kb;
   }
   if (n === 1) {
     // One piece with both ends inside: they stay apart.
