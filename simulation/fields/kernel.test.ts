@@ -187,11 +187,11 @@ describe('shortcuts of the shadow kernel', () => {
 
   /**
    * A row cut into pieces as the row sweep cuts it (each barrier out of range, hiding the whole lamp, or
-   * partly hiding it at every cell of a piece), each piece evaluated as one span with its corners picked;
-   * returns the cells whose values differ in any bit from the same cell evaluated alone with the same row
+   * partly hiding it at every cell of a piece), each piece evaluated as one span, its corners picked for
+   * the whole piece or not (`pick`); returns the cells whose values differ in any bit from the same cell evaluated alone with the same row
    * state, and the cells the spans evaluated in stretches (stretchEnd).
    */
-  function stretchOff(design: Design, cell: number): { off: number; stretched: number } {
+  function stretchOff(design: Design, cell: number, pick: boolean): { off: number; stretched: number } {
     const { scene, nx, ny, row, s, uv, ir } = rowSetup(design, cell);
     const one = new Float64Array(nx);
     const oneIr = new Float64Array(nx);
@@ -225,7 +225,11 @@ describe('shortcuts of the shadow kernel', () => {
           row.gu0 = gu;
           row.gi0 = gi;
           row.inRange = true;
-          for (let t = 0; t < na; t++) pickCorners(row, row.act[t]!, from, to, cell);
+          for (let t = 0; t < na; t++) {
+            row.lv[row.act[t]!] = -1;
+            row.hv[row.act[t]!] = -1;
+            if (pick) pickCorners(row, row.act[t]!, from, to, cell);
+          }
           evalSpan(lamp, row, from, to, cell, 0.5, uv, ir, s);
           for (let i = from; i < to; i++) {
             evalSpan(lamp, row, i, i + 1, cell, 0.5, one, oneIr, s);
@@ -240,18 +244,26 @@ describe('shortcuts of the shadow kernel', () => {
 
   it("a row sweep's piece evaluated in stretches (the structure kept over cells) has the bits of each cell alone", () => {
     // The bench's design: thousands of partly hidden cells of its tubes are evaluated in stretches.
-    for (const cell of [0.5, 0.25]) {
-      const bench = stretchOff(benchDesign(), cell);
-      expect(bench.stretched).toBeGreaterThan(5000);
-      expect(bench.off).toBe(0);
+    // With corners picked for whole pieces (as for a bulb) and without (as the row sweep leaves a tube's).
+    for (const pick of [true, false]) {
+      for (const cell of [0.5, 0.25]) {
+        const bench = stretchOff(benchDesign(), cell, pick);
+        expect(bench.stretched).toBeGreaterThan(5000);
+        expect(bench.off).toBe(0);
+      }
     }
     let stretched = 0;
     fc.assert(
-      fc.property(arbDesign({ maxObjects: 10 }), fc.constantFrom(0.5, CELL), (design, cell) => {
-        const r = stretchOff(design, cell);
-        expect(r.off).toBe(0);
-        stretched += r.stretched;
-      }),
+      fc.property(
+        arbDesign({ maxObjects: 10 }),
+        fc.constantFrom(0.5, CELL),
+        fc.boolean(),
+        (design, cell, pick) => {
+          const r = stretchOff(design, cell, pick);
+          expect(r.off).toBe(0);
+          stretched += r.stretched;
+        },
+      ),
       { numRuns: 60 },
     );
     expect(stretched).toBeGreaterThan(0);

@@ -254,7 +254,14 @@ function sweepRow(ws: Workspace, lamp: LampGeom, row: RowData, i0: number, i1: n
       openRun(lamp, row, from, to, cell, gu, gi, ru, ri, into);
       continue;
     }
-    for (let t = 0; t < na; t++) pickCorners(row, act[t]!, from, to, cell);
+    // A tube's stretches (kernel.ts, stretchEnd) find the lowest and highest corners where they start and
+    // keep them as long as they hold, which costs less than picking them for the whole piece beforehand.
+    if (lamp.tube) {
+      for (let t = 0; t < na; t++) {
+        row.lv[act[t]!] = -1;
+        row.hv[act[t]!] = -1;
+      }
+    } else for (let t = 0; t < na; t++) pickCorners(row, act[t]!, from, to, cell);
     row.nAct = na;
     row.gu0 = gu;
     row.gi0 = gi;
