@@ -129,7 +129,7 @@ export class Scratch {
    */
   sLv: Int32Array;
   sHv: Int32Array;
-  /** The last cell of the span up to which a barrier's sLv, sHv and their sides hold (−1: not known). */
+  /** The last cell of the row up to which a barrier's sLv, sHv and their sides hold (−1: not known). */
   sUntil: Int32Array;
   rV: Int32Array;
   /** Cells evaluated in stretches so far (a count for tests; it never affects a value). */
@@ -186,6 +186,8 @@ export function prepareRow(
   row.gu0 = 1;
   row.gi0 = 1;
   row.inRange = false;
+  // What stretches found on the last row (stretchEnd) says nothing about this one.
+  s.sUntil.fill(-1);
   if (!(h > 0)) return false;
   // In the plane (dz = 0) these are exactly the two-dimensional values, so such designs keep their bits.
   const dz2 = lamp.dz2;
@@ -336,7 +338,6 @@ export function evalSpan(
   // holds over stretches that stretchEnd finds, and those take a lighter loop.
   // (Q.x > 0 keeps a stretch's margins linear in Q.x: stretchEnd.)
   const stretchy = tube && inRange && to - from > 1 && (from + off) * cell > 0;
-  if (stretchy) for (let t = 0; t < nAct; t++) s.sUntil[act[t]!] = -1;
   cells: for (let i = from; i < to; i++) {
     const qx = (i + off) * cell;
     uv[i] = 0;
@@ -566,6 +567,8 @@ export function evalSpan(
  * where a condition is checked, so at least 4·GAP at every cell of the stretch.
  */
 const STRETCH_MARGIN = 5 * GAP;
+/** More cells than a row has: no limit (finite, so that keeps multiplies it safely). */
+const FAR = 1 << 30;
 
 /**
  * At most k: how many cells after the one at qx two lines x = ap + bp·Q.x and x = aq + bq·Q.x keep the side
@@ -620,14 +623,16 @@ function stretchEnd(
   let k = to - 1 - i;
   for (let t = 0; t < row.nAct; t++) {
     const c = row.act[t]!;
-    // A barrier's corners and sides, found for an earlier stretch of this span, hold up to su[c].
+    // A barrier's corners and sides, found for an earlier stretch of this row, hold up to su[c].
     if (su[c]! >= i) {
       if (su[c]! - i < k) k = su[c]! - i;
       continue;
     }
-    let kb = to - 1 - i;
     let vl = row.lv[c]!;
     let vh = row.hv[c]!;
+    // Corners picked for the piece are its extremes only there; what is found from the row's straight
+    // lines alone holds past the piece too (the next span of the row uses it).
+    let kb = vl >= 0 && vh >= 0 ? to - 1 - i : FAR;
     if (vl < 0 || vh < 0) {
       // No corner picked for the whole piece: the lowest and highest here, which every other corner stays
       // above (below).
