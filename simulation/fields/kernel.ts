@@ -13,6 +13,12 @@
  * by the product of the transmissions of the barriers hiding it; a bulb is visible or not (times the
  * transmissions of the barriers in front of it) and inside its beam or not.
  *
+ * Along a row sweep's piece, where a tube is partly hidden, which corner of each barrier projects lowest and
+ * highest, on which side of the tube's ends those lie and in which order the inner ends come change only
+ * where two of these straight lines cross; stretchEnd finds how far a cell's structure surely holds, and the
+ * cells of that stretch take only their closed forms (oneStretch, runsStretch), with the bits of each cell
+ * evaluated alone.
+ *
  * Depth: a lamp may hang dz in front of or behind the section plane. Barriers span the whole depth, so a
  * ray is blocked exactly when its projection onto the section is, and the shadow intervals above hold
  * unchanged. Only the distances change: a bulb is r² = h² + dx² + dz² away, and a tube (parallel to the
