@@ -31,6 +31,7 @@ export async function paced({ url, headers = {}, rate, duration, timeout = 20 })
   let timeouts = 0;
   const runs = [];
   const started = performance.now();
+  let lastAnswer = started;
   for (let i = 0; i < conns; i++) {
     const wait = started + i * every - performance.now();
     if (wait > 0) await new Promise((r) => setTimeout(r, wait));
@@ -45,6 +46,7 @@ export async function paced({ url, headers = {}, rate, duration, timeout = 20 })
     });
     instance.on('response', (_client, statusCode, resBytes, responseTime) => {
       latencies.push(responseTime);
+      lastAnswer = performance.now();
       codes[statusCode] = (codes[statusCode] ?? 0) + 1;
       bytes += resBytes;
     });
@@ -57,8 +59,9 @@ export async function paced({ url, headers = {}, rate, duration, timeout = 20 })
   }
   await Promise.all(runs);
   // From the first request to the last answer, and the interval after it: `duration` seconds when the
-  // server keeps up, longer (a lower rate) when answers come later than the next request was due.
-  const seconds = (performance.now() - started + every) / 1000;
+  // server keeps up, longer (a lower rate) when answers come later than the next request was due. (Not
+  // to the runs' end: a rate-limited autocannon connection notices it is done only at its next tick.)
+  const seconds = (lastAnswer - started + every) / 1000;
   const sorted = latencies.sort((a, b) => a - b);
   const ms = (v) => Math.round(v);
   return {
