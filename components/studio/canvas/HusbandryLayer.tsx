@@ -7,7 +7,7 @@ import { designToStage, type Camera } from '../geometry/camera';
 import type { Design } from '../state/types';
 import type { Finding, Segment } from '../fields/engineTypes';
 import { C } from './colors';
-import { meshLabel } from '../geometry/husbandry';
+import { meshLabel, stackMarkLabels } from '../geometry/husbandry';
 import type { LengthUnit } from '@/shared/units';
 import type { MeshRisk } from '@/simulation';
 
@@ -17,40 +17,61 @@ const MARKS = {
   both: { colour: C.moss600, lift: 19, label: 'UV + heat' },
 } as const;
 
-function Run({
-  cam,
-  seg,
-  kind,
-  labelled,
-}: {
-  cam: Camera;
-  seg: Segment;
-  kind: keyof typeof MARKS;
-  labelled: boolean;
-}) {
+const LABEL_FONT_PX = 11;
+const LABEL_PAD_PX = 2;
+const LABEL_HEIGHT_PX = LABEL_FONT_PX + 2 * LABEL_PAD_PX;
+/** A bold 11 px label's width, a little generous: a label measured short could still touch the next. */
+const labelWidth = (text: string) => Math.ceil(text.length * 6.8) + 2 * LABEL_PAD_PX;
+
+function Run({ cam, seg, kind }: { cam: Camera; seg: Segment; kind: keyof typeof MARKS }) {
   const m = MARKS[kind];
   const a = designToStage(cam, { x: seg.x1, y: seg.y1 });
   const b = designToStage(cam, { x: seg.x2, y: seg.y2 });
   return (
-    <Group>
-      <Line
-        points={[a.x, a.y - m.lift, b.x, b.y - m.lift]}
-        stroke={m.colour}
-        strokeWidth={kind === 'both' ? 5 : 3}
-        lineCap="round"
-        opacity={0.9}
-      />
-      {labelled && (
-        <Text
-          x={Math.min(a.x, b.x)}
-          y={Math.min(a.y, b.y) - m.lift - 14}
-          text={m.label}
-          fontSize={11}
-          fontStyle="bold"
-          fill={m.colour}
-        />
-      )}
-    </Group>
+    <Line
+      points={[a.x, a.y - m.lift, b.x, b.y - m.lift]}
+      stroke={m.colour}
+      strokeWidth={kind === 'both' ? 5 : 3}
+      lineCap="round"
+      opacity={0.9}
+    />
+  );
+}
+
+/**
+ * One label for each kind of mark, at the start of its first run, stacked so that none covers another
+ * (the three marks lie a few pixels apart over the same surface), each on a light tag so it reads over
+ * the field's colours.
+ */
+function RunLabels({ cam, zones }: { cam: Camera; zones: NonNullable<Finding['basking']> }) {
+  const kinds = (['uv', 'heat', 'both'] as const).filter((k) => zones[k].length > 0);
+  const boxes = kinds.map((kind) => {
+    const seg = zones[kind][0]!;
+    const a = designToStage(cam, { x: seg.x1, y: seg.y1 });
+    const b = designToStage(cam, { x: seg.x2, y: seg.y2 });
+    return {
+      x: Math.min(a.x, b.x),
+      y: Math.min(a.y, b.y) - MARKS[kind].lift - LABEL_HEIGHT_PX - 2,
+      width: labelWidth(MARKS[kind].label),
+      height: LABEL_HEIGHT_PX,
+    };
+  });
+  const ys = stackMarkLabels(boxes);
+  return (
+    <>
+      {kinds.map((kind, i) => (
+        <Label key={kind} x={boxes[i]!.x} y={ys[i]!}>
+          <Tag fill={C.white} opacity={0.8} cornerRadius={2} />
+          <Text
+            text={MARKS[kind].label}
+            fontSize={LABEL_FONT_PX}
+            fontStyle="bold"
+            fill={MARKS[kind].colour}
+            padding={LABEL_PAD_PX}
+          />
+        </Label>
+      ))}
+    </>
   );
 }
 
@@ -93,10 +114,9 @@ export function HusbandryLayer({
     <Group listening={false}>
       {zones &&
         (['uv', 'heat', 'both'] as const).map((kind) =>
-          zones[kind].map((seg, i) => (
-            <Run key={`${kind}${i}`} cam={cam} seg={seg} kind={kind} labelled={i === 0} />
-          )),
+          zones[kind].map((seg, i) => <Run key={`${kind}${i}`} cam={cam} seg={seg} kind={kind} />),
         )}
+      {zones && <RunLabels cam={cam} zones={zones} />}
       {apart && (
         <Group>
           <Line points={apart.points} stroke={C.ember700} strokeWidth={2} dash={[8, 6]} />

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Finding } from '../fields/engineTypes';
-import { husbandrySentences, meshLabel } from './husbandry';
+import { husbandrySentences, MARK_LABEL_GAP_PX, meshLabel, stackMarkLabels } from './husbandry';
 
 const seg = (x1: number, x2: number, y = 44) => ({ x1, y1: y, x2, y2: y });
 const basking = (uv: number[][], heat: number[][], both: number[][]): Finding => ({
@@ -40,5 +40,18 @@ describe('the husbandry marks in words', () => {
       'Climbable mesh: burn risk (heat, 3 cm) — “Mesh lid”.',
       'Climbable mesh — g: no lamp within reach.',
     ]);
+  });
+});
+
+describe('the basking marks’ labels', () => {
+  it('stack above one another where their marks lie together, and stay put where they do not', () => {
+    const box = (x: number, y: number, width = 80) => ({ x, y, width, height: 15 });
+    // Three marks 6 px apart over one perch: each label moves up until it is clear of the ones placed.
+    const ys = stackMarkLabels([box(100, 400), box(100, 394), box(104, 388)]);
+    expect(ys).toEqual([400, 400 - 15 - MARK_LABEL_GAP_PX, 400 - 2 * (15 + MARK_LABEL_GAP_PX)]);
+    for (let i = 0; i < ys.length; i++)
+      for (let j = 0; j < i; j++) expect(Math.abs(ys[i]! - ys[j]!)).toBeGreaterThanOrEqual(15);
+    // A UV range at one end and the heat at the other: side by side, nothing moves.
+    expect(stackMarkLabels([box(20, 400), box(300, 394)])).toEqual([400, 394]);
   });
 });

@@ -49,3 +49,36 @@ export function husbandrySentences(
   }
   return out;
 }
+
+/** A label's box on the stage (px, y down). */
+export interface MarkLabelBox {
+  x: number;
+  y: number;
+  width: number;
+  height: number;
+}
+
+/** Space (px) between two stacked mark labels. */
+export const MARK_LABEL_GAP_PX = 2;
+
+/**
+ * The y of each basking-mark label, so none covers another: the marks of the UV range, the basking heat
+ * and both lie a few pixels apart over the same surface, so their labels, each at its own mark, would
+ * print on top of one another. Taken in order; a label that meets one already placed moves up above it
+ * until it meets none. Labels apart from each other keep their own place.
+ */
+export function stackMarkLabels(boxes: readonly MarkLabelBox[]): number[] {
+  const placed: MarkLabelBox[] = [];
+  return boxes.map((b) => {
+    let y = b.y;
+    for (;;) {
+      const hit = placed.find(
+        (p) => p.x < b.x + b.width && b.x < p.x + p.width && p.y < y + b.height && y < p.y + p.height,
+      );
+      if (!hit) break;
+      y = hit.y - b.height - MARK_LABEL_GAP_PX;
+    }
+    placed.push({ ...b, y });
+    return y;
+  });
+}
