@@ -5,7 +5,7 @@ import { formatLengthRounded } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
 import { BURN_IN_HOURS } from '@/lib/lamp-log/burn-in';
 import type { LampSummary } from '@/lib/lamp-log/queries';
-import { formatAge, formatDay, formatValue } from './format';
+import { formatAge, formatDay, formatValue, readableDays } from './format';
 
 const DAYS_PER_MONTH = 365.25 / 12;
 
@@ -97,7 +97,7 @@ export function LampFacts({ lamp: l }: { lamp: LampSummary }) {
             ` Readings scatter about ${Math.round(f.rmsLog * 100)} % around the curve.`}
         </p>
         {l.reasons.map((r) => (
-          <p key={r}>{r}</p>
+          <p key={r}>{readableDays(r)}</p>
         ))}
         {l.ageing && <p data-testid="ageing-source">{l.ageing}</p>}
         {(l.readingNotes ?? []).map((r) => (

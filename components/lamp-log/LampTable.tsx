@@ -7,7 +7,7 @@ import { formatLengthRounded, type LengthUnit } from '@/shared/units';
 import { useLengthUnit } from '@/components/ui/units';
 import type { LampRow } from '@/lib/lamp-log/queries';
 import { STATUS_RANK } from '@/lib/lamp-log/status';
-import { formatAge, formatDay, formatValue } from './format';
+import { formatAge, formatDay, formatValue, readableDays } from './format';
 import { StatusBadge } from './StatusBadge';
 import { Table, type TableColumn } from '@/components/ui/Table';
 import type { LampSortColumn } from '@/lib/lamp-log/list-view';
@@ -93,7 +93,7 @@ export function StatusCell({ l }: { l: Row }) {
   return (
     <>
       <StatusBadge status={l.status} label={l.statusLabel} />
-      <div className="mt-1 max-w-56 text-caption text-basalt-500">{l.reason}</div>
+      <div className="mt-1 max-w-56 text-caption text-basalt-500">{l.reason && readableDays(l.reason)}</div>
     </>
   );
 }

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatAge, formatDay, formatValue, tickLabelAnchor } from './format';
+import { formatAge, formatDay, formatValue, readableDays, tickLabelAnchor } from './format';
 
 describe('lamp log formatting', () => {
   it('shows meter values as precisely as a meter does', () => {
@@ -24,5 +24,23 @@ describe('lamp log formatting', () => {
     expect(tickLabelAnchor(380, 0, 760, 30)).toBe('middle');
     expect(tickLabelAnchor(64, 0, 760, 30)).toBe('middle');
     expect(tickLabelAnchor(20, 0, 760, 30)).toBe('start');
+  });
+});
+
+describe('reasons in the lamp log', () => {
+  it('write their days as the rest of the page does, and leave other numbers alone', () => {
+    expect(readableDays('The basking zone falls below the species’ need on about 2026-12-13.')).toBe(
+      'The basking zone falls below the species’ need on about 13 Dec 2026.',
+    );
+    expect(
+      readableDays(
+        'Within the fit’s uncertainty it could fall below the need as early as 2026-10-16: measure it before then.',
+      ),
+    ).toBe(
+      'Within the fit’s uncertainty it could fall below the need as early as 16 Oct 2026: measure it before then.',
+    );
+    expect(readableDays('Readings scatter about 12 % at 30 cm.')).toBe(
+      'Readings scatter about 12 % at 30 cm.',
+    );
   });
 });

@@ -31,6 +31,14 @@ export function formatDay(iso: string | null | undefined): string {
   return `${d.getUTCDate()} ${MONTHS[d.getUTCMonth()]} ${d.getUTCFullYear()}`;
 }
 
+/**
+ * A sentence with calendar days written as `YYYY-MM-DD` (the outlook's reasons, stored with the lamp and
+ * also used in e-mails) with each day as the pages write days: "13 Dec 2026".
+ */
+export function readableDays(text: string): string {
+  return text.replace(/\b\d{4}-\d{2}-\d{2}\b/g, (iso) => formatDay(iso));
+}
+
 export function formatMonthYear(d: Date): string {
   return `${MONTHS[d.getUTCMonth()]} ${d.getUTCFullYear()}`;
 }
