@@ -1,9 +1,9 @@
 'use client';
 // Every lamp's label, placed together so that no two collide (geometry/labels.ts). A label pushed away
-// from its usual spot above the lamp gets a thin leader line back to its lamp.
+// from its usual spot above the lamp gets a thin leader line back to its lamp. Each sits on a light tag.
 import Konva from 'konva';
 import { memo, useMemo } from 'react';
-import { Group, Line, Text } from 'react-konva';
+import { Group, Line, Rect as KonvaRect, Text } from 'react-konva';
 import type { Camera, Point, Rect, Viewport } from '../geometry/camera';
 import { placeLabels } from '../geometry/labels';
 import type { DesignObject, LampObject } from '../state/types';
@@ -61,6 +61,16 @@ export const LampLabels = memo(function LampLabels({
             {l.moved && Math.hypot(from.x - to.x, from.y - to.y) > 4 && (
               <Line points={[from.x, from.y, to.x, to.y]} stroke={C.basalt500} strokeWidth={1} />
             )}
+            {/* A light tag under the text: the label often sits on a lamp's fitting or the field's colours. */}
+            <KonvaRect
+              x={l.rect.x - 2}
+              y={l.rect.y - 1}
+              width={l.rect.width + 4}
+              height={l.rect.height + 2}
+              fill={C.white}
+              opacity={0.75}
+              cornerRadius={2}
+            />
             <Text
               x={l.rect.x}
               y={l.rect.y}
