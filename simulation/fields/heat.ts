@@ -71,18 +71,28 @@ export function finishRow(
   out: GridFields,
   base: number,
 ): void {
-  const { ta, ta4, es, a1, a11, a24 } = balanceAt(airC, emissivity, hc);
+  const b = balanceAt(airC, emissivity, hc);
   const { u, v, q: e } = row;
   const { uvb, uvi, tempC } = out;
   for (let c = from; c < to; c++) {
     uvb[base + c] = u[c]!;
     uvi[base + c] = v[c]!;
-    const q = absorptance * e[c]!;
-    tempC[base + c] = q > 0 ? solveBalance(q, ta, ta4, es, hc, a1, a11, a24, ROW_STEP_K) - KELVIN : airC;
+    tempC[base + c] = cellTempC(absorptance * e[c]!, b, hc, airC);
   }
 }
 
-function balanceAt(airC: number, emissivity: number, hc: number) {
+/** The constants of the surface balance at one air temperature (balanceAt), for cellTempC. */
+export type Balance = ReturnType<typeof balanceAt>;
+
+/**
+ * finishRow's temperature (°C) of one grid cell absorbing q (W/m²), for callers that sum a cell's
+ * irradiance and solve it in one pass; b from balanceAt at the row's air temperature airC.
+ */
+export function cellTempC(q: number, b: Balance, hc: number, airC: number): number {
+  return q > 0 ? solveBalance(q, b.ta, b.ta4, b.es, hc, b.a1, b.a11, b.a24, ROW_STEP_K) - KELVIN : airC;
+}
+
+export function balanceAt(airC: number, emissivity: number, hc: number) {
   const ta = airC + KELVIN;
   const es = emissivity * STEFAN_BOLTZMANN;
   const ta2 = ta * ta;

@@ -11,7 +11,7 @@ import type { Occluder } from '../geometry/occluders';
 import { compileScene, type LampGeom, type Scene } from './scene';
 import { fillLamp, refillChanged, RowTotals, sweepLampRow, Workspace } from './workspace';
 import { probeScene, probeSceneByLamp, type LampSamples } from './probe';
-import { airTempC, finishRow, HEAT_DEFAULTS } from './heat';
+import { airTempC, balanceAt, cellTempC, finishRow, HEAT_DEFAULTS } from './heat';
 import { DEFAULT_CELL_CM, gridSize, type FieldGrid, type ProbeResult, type SimOptions } from './types';
 
 interface LampEntry {
@@ -132,18 +132,7 @@ export class FieldSolver {
       air[j] = airTempC((j + 0.5) * cell, scene.height, scene.roomC, scene.airRiseK);
     // Totals are always summed lamp by lamp in scene order, so an incremental update is bit-identical
     // to a full one.
-    ws.ensureRow(nx);
-    const sums: RowSums = {
-      lu: used.map((e) => e.uv),
-      li: used.map((e) => e.ir),
-      fu,
-      fi,
-      u: ws.rowUv,
-      v: ws.rowIr,
-      q: ws.rowQ,
-      hc,
-      out: t,
-    };
+    const sums: RowSums = { lu: used.map((e) => e.uv), li: used.map((e) => e.ir), fu, fi, hc, out: t };
     if (incremental) {
       // The same sums, over the runs of changed cells of each row.
       const dirty = this.dirty;
@@ -325,43 +314,44 @@ function diffOccluders(old: LampEntry, now: Occluder[], nowKeys: string[]): Occl
   return changed;
 }
 
-/** What sumRow adds up and where it writes (row buffers u, v, q of at least a row's length). */
+/** What sumRow adds up and where it writes. */
 interface RowSums {
   lu: Float32Array[];
   li: Float32Array[];
   fu: number[];
   fi: number[];
-  u: Float64Array;
-  v: Float64Array;
-  q: Float64Array;
   hc: number;
   out: Totals;
 }
 
 /**
- * The totals and surface temperatures of cells from..to−1 of the row starting at cell `base`: each lamp's
- * values are added in scene order, a lamp at a time over the cells, so every cell gets the same sums in
- * the same order whichever cells are summed together (an incremental update is bit-identical to a full one).
+ * The totals and surface temperatures of cells from..to−1 of the row starting at cell `base`: each cell's
+ * lamp values are added in scene order, so every cell gets the same sums in the same order whichever cells
+ * are summed together (an incremental update is bit-identical to a full one), and its temperature follows
+ * at once, as finishRow would work it out. A cell at a time, with no row buffers to clear, fill and read
+ * again: a drag step sums only the cells the moved lamp changed, in a few short runs per row.
  */
 function sumRow(s: RowSums, base: number, from: number, to: number, airC: number) {
-  const { u, v, q, fu, fi } = s;
-  u.fill(0, from, to);
-  v.fill(0, from, to);
-  q.fill(0, from, to);
-  for (let k = 0; k < s.lu.length; k++) {
-    const lu = s.lu[k]!;
-    const li = s.li[k]!;
-    const a = fu[k]!;
-    const b = fi[k]!;
-    for (let i = from; i < to; i++) {
-      const val = lu[base + i]!;
-      u[i] = u[i]! + val * a;
-      v[i] = v[i]! + val * b;
-      q[i] = q[i]! + li[base + i]!;
-    }
-  }
+  const { lu, li, fu, fi, hc } = s;
+  const { uvb, uvi, tempC } = s.out;
+  const n = lu.length;
   const { absorptance, emissivity } = HEAT_DEFAULTS;
-  finishRow(s, from, to, airC, absorptance, emissivity, s.hc, s.out, base);
+  const bal = balanceAt(airC, emissivity, hc);
+  for (let c = base + from; c < base + to; c++) {
+    // 0 + the first term, as a sum into a cleared total starts (it keeps the bits of a −0 term alike).
+    let u = 0;
+    let v = 0;
+    let q = 0;
+    for (let k = 0; k < n; k++) {
+      const val = lu[k]![c]!;
+      u = u + val * fu[k]!;
+      v = v + val * fi[k]!;
+      q = q + li[k]![c]!;
+    }
+    uvb[c] = u;
+    uvi[c] = v;
+    tempC[c] = cellTempC(absorptance * q, bal, hc, airC);
+  }
 }
 
 /** The results of the last call, already in the float32 they are handed out in. */

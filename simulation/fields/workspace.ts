@@ -51,8 +51,6 @@ export class Workspace {
   /** One row's values, filled by sweepRow. */
   rowUv = new Float64Array(1);
   rowIr = new Float64Array(1);
-  /** A third row, for the solver's radiant totals. */
-  rowQ = new Float64Array(1);
   /** The cells sweepLampRow evaluated. */
   i0 = 0;
   i1 = -1;
@@ -63,7 +61,6 @@ export class Workspace {
     if (this.rowUv.length >= nx) return;
     this.rowUv = new Float64Array(nx);
     this.rowIr = new Float64Array(nx);
-    this.rowQ = new Float64Array(nx);
   }
 
   /** Make room for rows with up to n barriers. */
