@@ -95,6 +95,59 @@ describe('shortcuts of the shadow kernel', () => {
     );
   });
 
+  it('the row sweep keeps the bits of evalCell with more barriers in a row than one mask word holds (32)', () => {
+    // Forty screens of different heights, spans and transmissions under a tube and a bulb: rows below
+    // them take all forty, so barriers past the 32nd are in range, hide part of a lamp or all of it.
+    const objects: Design['objects'] = [
+      { type: 'lamp', id: 't', tech: 't5', form: 'tube', x: 55, y: 62, length: 55 },
+      { type: 'lamp', id: 'b', tech: 'halogen', form: 'bulb', x: 95, y: 61 },
+    ];
+    for (let k = 0; k < 40; k++) {
+      const x1 = 5 + ((k * 37) % 90);
+      const y = 20 + ((k * 13) % 35);
+      objects.push({
+        type: 'screen',
+        id: `s${k}`,
+        x1,
+        y1: y,
+        x2: x1 + 6 + (k % 5) * 3,
+        y2: y + (k % 3),
+        uvbTransmission: k % 4 === 0 ? 0 : 0.5 + (k % 7) / 20,
+      });
+    }
+    const design: Design = {
+      format: 'baskwell.design',
+      version: 2,
+      enclosure: { width: 120, height: 60, depth: 60 },
+      objects,
+    };
+    const scene = compileScene(design);
+    const n = scene.occluders.length;
+    const { nx, ny } = gridSize(design.enclosure.width, design.enclosure.height, 1);
+    const ws = new Workspace();
+    ws.ensure(n);
+    const row = new RowData(n);
+    const s = new Scratch(n);
+    let off = 0;
+    let wide = 0;
+    for (const lamp of scene.lamps) {
+      const uv = new Float64Array(nx * ny);
+      const ir = new Float64Array(nx * ny);
+      fillLamp(ws, lamp, scene.occluders, uv, ir, nx, ny, 1);
+      for (let j = 0; j < ny; j++) {
+        const lit = prepareRow(lamp, scene.occluders, j + 0.5, row, s);
+        if (lit && row.count > 32) wide++;
+        for (let i = 0; i < nx; i++) {
+          if (lit) evalCell(lamp, row, i + 0.5, s);
+          if (!Object.is(uv[j * nx + i], lit ? s.uv : 0)) off++;
+          if (!Object.is(ir[j * nx + i], lit ? s.ir : 0)) off++;
+        }
+      }
+    }
+    expect(wide).toBeGreaterThan(10);
+    expect(off).toBe(0);
+  });
+
   /** A design's scene and grid, row data and scratch for its barriers, and a row's two value buffers. */
   function rowSetup(design: Design, cell: number) {
     const scene = compileScene(design);

@@ -41,13 +41,10 @@ export class Workspace {
   row = new RowData(1);
   row2 = new RowData(1);
   scratch = new Scratch(1);
-  /** A row sweep's cell range per barrier, and where the row is cut (sweepRow). */
-  first = new Int32Array(1);
-  last = new Int32Array(1);
-  /** A row sweep's cells where each barrier surely hides the whole lamp (RowData.fa, fb). */
-  fullFirst = new Int32Array(1);
-  fullLast = new Int32Array(1);
-  cuts = new Int32Array(6);
+  /** Where a row sweep is cut (sweepRow), and its barriers in range and hiding the whole lamp, as bits. */
+  cuts = new Int32Array(4);
+  inMask = new Int32Array(1);
+  wholeMask = new Int32Array(1);
   /** One row's values, filled by sweepRow. */
   rowUv = new Float64Array(1);
   rowIr = new Float64Array(1);
@@ -70,11 +67,9 @@ export class Workspace {
     this.row = new RowData(this.capacity);
     this.row2 = new RowData(this.capacity);
     this.scratch = new Scratch(this.capacity);
-    this.first = new Int32Array(this.capacity);
-    this.last = new Int32Array(this.capacity);
-    this.fullFirst = new Int32Array(this.capacity);
-    this.fullLast = new Int32Array(this.capacity);
-    this.cuts = new Int32Array(4 * this.capacity + 2);
+    this.cuts = new Int32Array(4 * this.capacity);
+    this.inMask = new Int32Array((this.capacity + 31) >> 5);
+    this.wholeMask = new Int32Array((this.capacity + 31) >> 5);
   }
 }
 
@@ -179,98 +174,134 @@ function sweepRow(ws: Workspace, lamp: LampGeom, row: RowData, i0: number, i1: n
   const ri = ws.rowIr;
   const into = ws.into;
   const n = row.count;
-  const first = ws.first;
-  const last = ws.last;
-  const fFirst = ws.fullFirst;
-  const fLast = ws.fullLast;
-  const cuts = ws.cuts;
+  // Where a barrier's range starts or ends, and its range where it hides the whole lamp: events at cells,
+  // pos·w + 2·barrier + (0: range, 1: whole), sorted by cell. Each toggles the barrier's bit in a mask.
+  const w = 2 * n;
+  const ev = ws.cuts;
   let m = 0;
-  cuts[m++] = i0;
-  cuts[m++] = i1 + 1;
   for (let c = 0; c < n; c++) {
     // The cells with qa < Q.x < qb, by the test evalSpan makes, so inside a piece every barrier left for
     // it has the cell in range and does not hide the whole lamp there (RowData.inRange).
     const f = firstAbove(row.qa[c]!, cell, i0, i1);
     const l = lastBelow(row.qb[c]!, cell, f, i1);
-    first[c] = f;
-    last[c] = l;
-    if (f > l) {
-      fFirst[c] = 1;
-      fLast[c] = 0;
-      continue;
-    }
-    cuts[m++] = f;
-    cuts[m++] = l + 1;
+    if (f > l) continue;
+    ev[m++] = f * w + 2 * c;
+    ev[m++] = (l + 1) * w + 2 * c;
     // The cells with fa < Q.x < fb, by the same test.
     const fa = row.fa[c]!;
     const fb = row.fb[c]!;
-    if (!(fa < fb)) {
-      fFirst[c] = 1;
-      fLast[c] = 0;
-      continue;
-    }
+    if (!(fa < fb)) continue;
     const g0 = firstAbove(fa, cell, f, l);
     const g1 = lastBelow(fb, cell, g0, l);
-    fFirst[c] = g0;
-    fLast[c] = g1;
     if (g0 <= g1) {
-      cuts[m++] = g0;
-      cuts[m++] = g1 + 1;
+      ev[m++] = g0 * w + 2 * c + 1;
+      ev[m++] = (g1 + 1) * w + 2 * c + 1;
     }
   }
-  sortPrefix(cuts, m);
+  sortPrefix(ev, m);
+  // Barriers in range (inMask) and hiding the whole lamp (wholeMask), 32 to a word, by RowData index.
+  const words = (n + 31) >> 5;
+  const inMask = ws.inMask;
+  const wholeMask = ws.wholeMask;
+  inMask.fill(0, 0, words);
+  wholeMask.fill(0, 0, words);
   const act = row.act;
+  const occ = row.occ;
   const tUv = lamp.tUv;
   const tIr = lamp.tIr;
-  for (let k = 0; k + 1 < m; k++) {
-    const from = cuts[k]!;
-    const to = cuts[k + 1]!;
-    if (to <= from) continue;
+  let e = 0;
+  for (let from = i0; from <= i1;) {
+    for (; e < m; e++) {
+      const x = ev[e]!;
+      const pos = (x / w) | 0;
+      if (pos > from) break;
+      const r = x - pos * w;
+      const bit = 1 << ((r >> 1) & 31);
+      if ((r & 1) === 0) inMask[r >> 6] = inMask[r >> 6]! ^ bit;
+      else wholeMask[r >> 6] = wholeMask[r >> 6]! ^ bit;
+    }
+    const to = e < m ? Math.min((ev[e]! / w) | 0, i1 + 1) : i1 + 1;
+    const piece = from;
+    from = to;
+    // Barriers in ascending order, as evalCell takes them, so a cell's product does not depend on the cuts.
     let na = 0;
     let gu = 1;
     let gi = 1;
-    for (let c = 0; c < n; c++) {
-      if (fFirst[c]! <= from && fLast[c]! >= to - 1) {
-        const o = row.occ[c]!;
+    for (let k = 0; k < words; k++) {
+      const whole = wholeMask[k]!;
+      let bits = whole;
+      while (bits !== 0) {
+        const low = bits & -bits;
+        const o = occ[32 * k + 31 - Math.clz32(low)]!;
         gu *= tUv[o]!;
         gi *= tIr[o]!;
-      } else if (first[c]! <= from && last[c]! >= to - 1) act[na++] = c;
-    }
-    if (gu === 0 && gi === 0) {
-      // Fully hidden: what evalCell returns once its product reaches zero (a loop: most pieces are a few
-      // cells, shorter than a fill call's own cost). Totals get nothing (adding zero changes no bit).
-      if (into) continue;
-      for (let i = from; i < to; i++) {
-        ru[i] = 0;
-        ri[i] = 0;
+        bits ^= low;
       }
-      continue;
-    }
-    if (na === 0) {
-      // No barrier hides part of the lamp here: the closed form straight, as evalCell would compute it.
-      openRun(lamp, row, from, to, cell, gu, gi, ru, ri, into);
-      continue;
-    }
-    // A tube's stretches (kernel.ts, stretchEnd) find the lowest and highest corners where they start and
-    // keep them as long as they hold, which costs less than picking them for the whole piece beforehand.
-    if (lamp.tube) {
-      for (let t = 0; t < na; t++) {
-        row.lv[act[t]!] = -1;
-        row.hv[act[t]!] = -1;
+      bits = inMask[k]! & ~whole;
+      while (bits !== 0) {
+        const low = bits & -bits;
+        act[na++] = 32 * k + 31 - Math.clz32(low);
+        bits ^= low;
       }
-    } else for (let t = 0; t < na; t++) pickCorners(row, act[t]!, from, to, cell);
-    row.nAct = na;
-    row.gu0 = gu;
-    row.gi0 = gi;
-    row.inRange = true;
-    evalSpan(lamp, row, from, to, cell, 0.5, ru, ri, s);
-    if (into) addSpan(into, ru, ri, from, to);
+    }
+    evalPiece(ws, lamp, row, piece, to, cell, na, gu, gi, ru, ri, into, s);
   }
   row.inRange = false;
   row.nAct = n;
   row.gu0 = 1;
   row.gi0 = 1;
   for (let c = 0; c < n; c++) act[c] = c;
+}
+
+/**
+ * Cells from..to−1 of a row sweep's piece, where the na barriers in row.act (ascending) have every cell in
+ * range and hide part of the lamp at most, and those hiding all of it pass gu (UVB) and gi (infrared).
+ */
+function evalPiece(
+  ws: Workspace,
+  lamp: LampGeom,
+  row: RowData,
+  from: number,
+  to: number,
+  cell: number,
+  na: number,
+  gu: number,
+  gi: number,
+  ru: Float64Array,
+  ri: Float64Array,
+  into: RowTotals | null,
+  s: Scratch,
+) {
+  const act = row.act;
+  if (gu === 0 && gi === 0) {
+    // Fully hidden: what evalCell returns once its product reaches zero (a loop: most pieces are a few
+    // cells, shorter than a fill call's own cost). Totals get nothing (adding zero changes no bit).
+    if (into) return;
+    for (let i = from; i < to; i++) {
+      ru[i] = 0;
+      ri[i] = 0;
+    }
+    return;
+  }
+  if (na === 0) {
+    // No barrier hides part of the lamp here: the closed form straight, as evalCell would compute it.
+    openRun(lamp, row, from, to, cell, gu, gi, ru, ri, into);
+    return;
+  }
+  // A tube's stretches (kernel.ts, stretchEnd) find the lowest and highest corners where they start and
+  // keep them as long as they hold, which costs less than picking them for the whole piece beforehand.
+  if (lamp.tube) {
+    for (let t = 0; t < na; t++) {
+      row.lv[act[t]!] = -1;
+      row.hv[act[t]!] = -1;
+    }
+  } else for (let t = 0; t < na; t++) pickCorners(row, act[t]!, from, to, cell);
+  row.nAct = na;
+  row.gu0 = gu;
+  row.gi0 = gi;
+  row.inRange = true;
+  evalSpan(lamp, row, from, to, cell, 0.5, ru, ri, s);
+  if (into) addSpan(into, ru, ri, from, to);
 }
 
 /** Cells a piece must have before its corners are picked (pickCorners): below it the picking costs more. */
