@@ -31,6 +31,9 @@ const config: NextConfig = {
   // NEXT_DIST_DIR: a build folder of its own (npm test uses .next/test-build), so a running `npm start`
   // keeps serving its build.
   distDir: process.env.NEXT_DIST_DIR || '.next',
+  // `npm start` empties .next itself before it builds, keeping the other builds' folders inside it, which
+  // Next's own emptying would delete (scripts/lib/builds.mjs).
+  cleanDistDir: process.env.NEXT_KEEP_DIST !== '1',
   typescript: {
     // npm test has run `tsc --noEmit` over the whole project just before it builds: no second pass.
     ignoreBuildErrors: process.env.NEXT_SKIP_TYPECHECK === '1',

@@ -27,6 +27,7 @@ import autocannon from 'autocannon';
 import os from 'node:os';
 import path from 'node:path';
 import { parseArgs } from 'node:util';
+import { BUILD_DIRS } from './lib/builds.mjs';
 import { ensureSecret, loadEnv, ROOT, usesPrivateDb } from './lib/env.mjs';
 import {
   adminSql,
@@ -439,7 +440,7 @@ async function main() {
     APP_URL: base,
     NEXTAUTH_URL: base,
     NEXTAUTH_SECRET: ensureSecret(),
-    NEXT_DIST_DIR: '.next/scale-build',
+    NEXT_DIST_DIR: BUILD_DIRS.scale,
     // A benchmark, not a check: `npx tsc --noEmit` and `npm test` check the types.
     NEXT_SKIP_TYPECHECK: '1',
     NEXT_TELEMETRY_DISABLED: '1',

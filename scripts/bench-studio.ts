@@ -30,11 +30,12 @@ import { loadavg } from 'node:os';
 import path from 'node:path';
 import type { Browser, BrowserContext } from 'playwright-core';
 import { loadEnv } from './lib/env.mjs';
+import { BUILD_DIRS } from './lib/builds.mjs';
 import { bin, freePort, log, run } from './lib/proc.mjs';
 import { Lifecycle, migrate, prepareDatabase, ROOT, seed, startNext } from './lib/stack.mjs';
 import { cpuBetween, type TraceEvent } from './lib/trace-breakdown';
 
-const DIST = '.next/bench-build';
+const DIST = BUILD_DIRS.bench;
 
 function parseArgs(argv: string[]) {
   const opts: { runs: number; build: boolean; base: string | null; trace: string | null } = {

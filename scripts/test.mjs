@@ -17,6 +17,7 @@ import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { ROOT, loadEnv, urlPort, usesPrivateDb } from './lib/env.mjs';
+import { BUILD_DIRS } from './lib/builds.mjs';
 import { ensureApt, ensureNodeModules } from './lib/packages.mjs';
 import { bin, bold, dim, duration, freePort, green, log, red, run, yellow } from './lib/proc.mjs';
 import { ensureDatabases, recreateDatabase } from './lib/mariadb.mjs';
@@ -203,7 +204,7 @@ async function main() {
   // A build folder of its own, so a running `npm start` keeps serving its build.
   const browserEnv = {
     ...testEnv,
-    NEXT_DIST_DIR: '.next/test-build',
+    NEXT_DIST_DIR: BUILD_DIRS.test,
     // The studio's probe for the journeys (round trips, camera: components/studio/testing/probe.ts)
     // exists in this build only.
     NEXT_PUBLIC_STUDIO_PROBE: '1',

@@ -3,6 +3,7 @@
 // so that Ctrl-C, a failure or the end of the run stops exactly what this run started.
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
+import { emptyMainBuild } from './builds.mjs';
 import { DATA_DIR, ROOT, urlPort, usesPrivateDb } from './env.mjs';
 import { ensureDatabases, ensureMariaDB, recreateDatabase } from './mariadb.mjs';
 import { ensureApt } from './packages.mjs';
@@ -165,6 +166,12 @@ export async function startNext(
   await ensureFree(port, 'the web app', 'PORT');
   if (!dev && build) {
     log('Building the app (next build) ...');
+    if (!env.NEXT_DIST_DIR) {
+      // The main build's folder holds the other builds' folders too (npm test's, the benches'): empty
+      // it ourselves, keeping them, and tell Next not to empty it (scripts/lib/builds.mjs).
+      emptyMainBuild(path.join(ROOT, '.next'));
+      nextEnv.NEXT_KEEP_DIST = '1';
+    }
     await run(bin('next'), ['build'], { env: nextEnv });
   }
   const nextArgs = [dev ? 'dev' : 'start', '-p', String(port)];
