@@ -12,9 +12,9 @@
 // API of the signed-in area, one after another, at a fixed rate with autocannon (requests evenly spaced,
 // one every 1000/rate ms: scripts/lib/paced.mjs; `--arrivals=burst` for autocannon's own overallRate,
 // which sends each second's requests together) while /api/health is asked alongside. Prints per route:
-// requests/s, p50/p99, bytes a response, p50/p99 as multiples of /api/health's alone (the baseline), and the slowest /api/health answer seen while it ran. Then it
-// restarts the app on the grown database and measures the lists again: their cost should not follow
-// the organisation's size.
+// requests/s, p50/p99, bytes a response, p50/p99 as multiples of /api/health's alone (the baseline), and
+// the slowest /api/health answer seen while it ran. Then it restarts the app on the grown database and
+// measures the lists again: their cost should not follow the organisation's size.
 // Seed ahead, measure later: `--seed-only` seeds both databases and stops (the machine's load only slows
 // the seeding); `--reuse` measures the databases an earlier run seeded, without seeding (a run without
 // it recreates them). Figures, not a pass/fail test: the date, the CPUs and the load average are
@@ -321,7 +321,7 @@ async function seedAll(env, names, size, growth) {
       for (const k of Object.keys(total)) total[k] += extra[k];
     }
     // As a production database has them: statistics of the loaded tables, not of empty ones.
-    await refreshStatistics(name, (sql) => adminSql(sql));
+    await refreshStatistics(name, adminSql);
     log(
       `Seeded ${name} in ${duration(seconds * 1000)} (outlooks ${outlookSeconds.toFixed(1)} s, ` +
         `${computed.toLocaleString('en')} distinct computations).`,
@@ -455,7 +455,7 @@ async function main() {
       for (const name of names) {
         await prepareScaleDb(scaleEnv, name);
         // A database seeded by an earlier version of this script may lack them.
-        await refreshStatistics(name, (sql) => adminSql(sql));
+        await refreshStatistics(name, adminSql);
       }
     } else {
       seeded = await seedAll(scaleEnv, names, opts.size, opts.growth);

@@ -23,6 +23,7 @@ import os from 'node:os';
 import { pathToFileURL } from 'node:url';
 import path from 'node:path';
 import { loadEnv } from './lib/env.mjs';
+import { runFigures } from './lib/paced.mjs';
 
 const DEMO_STAFF = { email: 'idris.penhallow@example.com', password: 'demo-staff-pass' };
 
@@ -195,19 +196,6 @@ export async function warmUp(base, jar, p, method = 'GET', body, times = 10) {
       signal: AbortSignal.timeout(15_000),
     }).then((r) => r.arrayBuffer());
   }
-}
-
-/** What both load scripts report of an autocannon run: requests, rate, median and p99 latency, status codes. */
-export function runFigures(r) {
-  return {
-    requests: r.requests.total,
-    rps: Math.round((r.requests.total / r.duration) * 10) / 10,
-    p50: r.latency.p50,
-    p99: r.latency.p99,
-    codes: Object.fromEntries(
-      Object.entries(r.statusCodeStats ?? {}).map(([code, s]) => [code, Number(s.count)]),
-    ),
-  };
 }
 
 function row(name, r, extra = {}) {

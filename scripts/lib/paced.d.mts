@@ -1,5 +1,13 @@
 export function percentile(sorted: number[], q: number): number;
 
+export function runFigures(r: unknown): {
+  requests: number;
+  rps: number;
+  p50: number;
+  p99: number;
+  codes: Record<string, number>;
+};
+
 export interface PacedFigures {
   requests: number;
   seconds: number;

@@ -78,6 +78,19 @@ export async function paced({ url, headers = {}, rate, duration, timeout = 20 })
   };
 }
 
+/** What the load scripts report of an autocannon run: requests, rate, median and p99 latency, codes. */
+export function runFigures(r) {
+  return {
+    requests: r.requests.total,
+    rps: Math.round((r.requests.total / r.duration) * 10) / 10,
+    p50: r.latency.p50,
+    p99: r.latency.p99,
+    codes: Object.fromEntries(
+      Object.entries(r.statusCodeStats ?? {}).map(([code, s]) => [code, Number(s.count)]),
+    ),
+  };
+}
+
 /**
  * The same figures for autocannon's own `overallRate` over `connections`: each second's requests sent
  * together at the second's start (the arrivals this bench used before, kept to compare).
@@ -86,15 +99,9 @@ export async function bursts({ url, headers = {}, rate, duration, connections = 
   const r = await autocannon({ url, headers, connections, duration, timeout, overallRate: rate });
   const total = r.requests.total;
   return {
-    requests: total,
+    ...runFigures(r),
     seconds: r.duration,
-    rps: Math.round((total / r.duration) * 10) / 10,
-    p50: r.latency.p50,
-    p99: r.latency.p99,
     max: r.latency.max,
-    codes: Object.fromEntries(
-      Object.entries(r.statusCodeStats ?? {}).map(([code, st]) => [code, Number(st.count)]),
-    ),
     bytes: total ? Math.round(r.throughput.total / total) : 0,
     errors: r.errors,
     timeouts: r.timeouts,
