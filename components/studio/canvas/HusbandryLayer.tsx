@@ -7,6 +7,7 @@ import { designToStage, type Camera } from '../geometry/camera';
 import type { Design } from '../state/types';
 import type { Finding, Segment } from '../fields/engineTypes';
 import { C } from './colors';
+import { measureText } from './measure-text';
 import { meshLabel, stackMarkLabels } from '../geometry/husbandry';
 import type { LengthUnit } from '@/shared/units';
 import type { MeshRisk } from '@/simulation';
@@ -17,11 +18,7 @@ const MARKS = {
   both: { colour: C.moss600, lift: 19, label: 'UV + heat' },
 } as const;
 
-const LABEL_FONT_PX = 11;
-const LABEL_PAD_PX = 2;
-const LABEL_HEIGHT_PX = LABEL_FONT_PX + 2 * LABEL_PAD_PX;
-/** A bold 11 px label's width, a little generous: a label measured short could still touch the next. */
-const labelWidth = (text: string) => Math.ceil(text.length * 6.8) + 2 * LABEL_PAD_PX;
+const LABEL_STYLE = { fontSize: 11, fontStyle: 'bold', padding: 2 } as const;
 
 function Run({ cam, seg, kind }: { cam: Camera; seg: Segment; kind: keyof typeof MARKS }) {
   const m = MARKS[kind];
@@ -49,12 +46,8 @@ function RunLabels({ cam, zones }: { cam: Camera; zones: NonNullable<Finding['ba
     const seg = zones[kind][0]!;
     const a = designToStage(cam, { x: seg.x1, y: seg.y1 });
     const b = designToStage(cam, { x: seg.x2, y: seg.y2 });
-    return {
-      x: Math.min(a.x, b.x),
-      y: Math.min(a.y, b.y) - MARKS[kind].lift - LABEL_HEIGHT_PX - 2,
-      width: labelWidth(MARKS[kind].label),
-      height: LABEL_HEIGHT_PX,
-    };
+    const size = measureText(MARKS[kind].label, LABEL_STYLE);
+    return { x: Math.min(a.x, b.x), y: Math.min(a.y, b.y) - MARKS[kind].lift - size.height - 2, ...size };
   });
   const ys = stackMarkLabels(boxes);
   return (
@@ -62,13 +55,7 @@ function RunLabels({ cam, zones }: { cam: Camera; zones: NonNullable<Finding['ba
       {kinds.map((kind, i) => (
         <Label key={kind} x={boxes[i]!.x} y={ys[i]!}>
           <Tag fill={C.white} opacity={0.8} cornerRadius={2} />
-          <Text
-            text={MARKS[kind].label}
-            fontSize={LABEL_FONT_PX}
-            fontStyle="bold"
-            fill={MARKS[kind].colour}
-            padding={LABEL_PAD_PX}
-          />
+          <Text text={MARKS[kind].label} {...LABEL_STYLE} fill={MARKS[kind].colour} />
         </Label>
       ))}
     </>

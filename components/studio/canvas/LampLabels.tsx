@@ -1,30 +1,20 @@
 'use client';
 // Every lamp's label, placed together so that no two collide (geometry/labels.ts). A label pushed away
 // from its usual spot above the lamp gets a thin leader line back to its lamp. Each sits on a light tag.
-import Konva from 'konva';
 import { memo, useMemo } from 'react';
 import { Group, Line, Rect as KonvaRect, Text } from 'react-konva';
 import type { Camera, Point, Rect, Viewport } from '../geometry/camera';
 import { placeLabels } from '../geometry/labels';
 import type { DesignObject, LampObject } from '../state/types';
 import { C } from './colors';
+import { measureText } from './measure-text';
 import { lampBody, lampLabel } from '../object-kinds/lamp';
 
 const FONT_SIZE = 11;
 const LINE_HEIGHT = 1.15;
 
-const sizes = new Map<string, { width: number; height: number }>();
-/** A label's size as Konva will draw it (measured once per text). */
-function measure(text: string): { width: number; height: number } {
-  let s = sizes.get(text);
-  if (!s) {
-    const t = new Konva.Text({ text, fontSize: FONT_SIZE, lineHeight: LINE_HEIGHT });
-    s = { width: Math.ceil(t.width()), height: Math.ceil(t.height()) };
-    t.destroy();
-    sizes.set(text, s);
-  }
-  return s;
-}
+/** A label's size as Konva will draw it. */
+const measure = (text: string) => measureText(text, { fontSize: FONT_SIZE, lineHeight: LINE_HEIGHT });
 
 const nearest = (r: Rect, p: Point): Point => ({
   x: Math.max(r.x, Math.min(p.x, r.x + r.width)),

@@ -3,6 +3,7 @@
 import { formatLengthRounded, type LengthUnit } from '@/shared/units';
 import { segmentsCentreX as centreX, type MeshRisk } from '@/simulation';
 import type { Finding } from '../fields/engineTypes';
+import type { Rect } from './camera';
 
 const near = (xs: { lampId: string; distanceCm: number }[], u: LengthUnit) =>
   xs.map((x) => `${x.lampId}, ${formatLengthRounded(x.distanceCm, u)}`).join('; ');
@@ -50,14 +51,6 @@ export function husbandrySentences(
   return out;
 }
 
-/** A label's box on the stage (px, y down). */
-export interface MarkLabelBox {
-  x: number;
-  y: number;
-  width: number;
-  height: number;
-}
-
 /** Space (px) between two stacked mark labels. */
 export const MARK_LABEL_GAP_PX = 2;
 
@@ -67,8 +60,8 @@ export const MARK_LABEL_GAP_PX = 2;
  * print on top of one another. Taken in order; a label that meets one already placed moves up above it
  * until it meets none. Labels apart from each other keep their own place.
  */
-export function stackMarkLabels(boxes: readonly MarkLabelBox[]): number[] {
-  const placed: MarkLabelBox[] = [];
+export function stackMarkLabels(boxes: readonly Rect[]): number[] {
+  const placed: Rect[] = [];
   return boxes.map((b) => {
     let y = b.y;
     for (;;) {
