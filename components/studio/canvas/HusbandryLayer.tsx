@@ -3,7 +3,7 @@
 // temperature is met, and where both are (the shared basking spot); and, for a climbing species, every
 // mesh it can hang from. The split between a UV spot and a hot spot is then visible at a glance.
 import { Group, Label, Line, Tag, Text } from 'react-konva';
-import { designToStage, type Camera } from '../geometry/camera';
+import { designToStage, type Camera, type Rect } from '../geometry/camera';
 import type { Design } from '../state/types';
 import type { Finding, Segment } from '../fields/engineTypes';
 import { C } from './colors';
@@ -37,19 +37,31 @@ function Run({ cam, seg, kind }: { cam: Camera; seg: Segment; kind: keyof typeof
 
 /**
  * One label for each kind of mark, at the start of its first run, stacked so that none covers another
- * (the three marks lie a few pixels apart over the same surface), each on a light tag so it reads over
- * the field's colours.
+ * (the three marks lie a few pixels apart over the same surface) or a lamp's label, each on a light tag
+ * so it reads over the field's colours.
  */
-function RunLabels({ cam, zones }: { cam: Camera; zones: NonNullable<Finding['basking']> }) {
+function RunLabels({
+  cam,
+  zones,
+  avoid,
+}: {
+  cam: Camera;
+  zones: NonNullable<Finding['basking']>;
+  avoid: readonly { rect: Rect }[];
+}) {
   const kinds = (['uv', 'heat', 'both'] as const).filter((k) => zones[k].length > 0);
   const boxes = kinds.map((kind) => {
     const seg = zones[kind][0]!;
     const a = designToStage(cam, { x: seg.x1, y: seg.y1 });
     const b = designToStage(cam, { x: seg.x2, y: seg.y2 });
     const size = measureText(MARKS[kind].label, LABEL_STYLE);
-    return { x: Math.min(a.x, b.x), y: Math.min(a.y, b.y) - MARKS[kind].lift - size.height - 2, ...size };
+    const y = Math.min(a.y, b.y) - MARKS[kind].lift - size.height - 2;
+    return { x: Math.min(a.x, b.x), y, belowY: Math.max(a.y, b.y) + 4, ...size };
   });
-  const ys = stackMarkLabels(boxes);
+  const ys = stackMarkLabels(
+    boxes,
+    avoid.map((l) => l.rect),
+  );
   return (
     <>
       {kinds.map((kind, i) => (
@@ -86,10 +98,13 @@ export function HusbandryLayer({
   basking,
   meshRisks,
   unit,
+  avoid,
 }: {
   cam: Camera;
   design: Design;
   basking: Finding | undefined;
+  /** The lamps' labels as placed: the marks' labels keep clear of them. */
+  avoid: readonly { rect: Rect }[];
   /** For a climbing species: each mesh it can hang from and the lamps near it; null otherwise. */
   meshRisks: MeshRisk[] | null;
   unit: LengthUnit;
@@ -103,7 +118,7 @@ export function HusbandryLayer({
         (['uv', 'heat', 'both'] as const).map((kind) =>
           zones[kind].map((seg, i) => <Run key={`${kind}${i}`} cam={cam} seg={seg} kind={kind} />),
         )}
-      {zones && <RunLabels cam={cam} zones={zones} />}
+      {zones && <RunLabels cam={cam} zones={zones} avoid={avoid} />}
       {apart && (
         <Group>
           <Line points={apart.points} stroke={C.ember700} strokeWidth={2} dash={[8, 6]} />

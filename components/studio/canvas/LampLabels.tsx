@@ -4,7 +4,7 @@
 import { memo, useMemo } from 'react';
 import { Group, Line, Rect as KonvaRect, Text } from 'react-konva';
 import type { Camera, Point, Rect, Viewport } from '../geometry/camera';
-import { placeLabels } from '../geometry/labels';
+import { type LabelPlacement, placeLabels } from '../geometry/labels';
 import type { DesignObject, LampObject } from '../state/types';
 import { C } from './colors';
 import { measureText } from './measure-text';
@@ -22,16 +22,15 @@ const nearest = (r: Rect, p: Point): Point => ({
 });
 const centre = (r: Rect): Point => ({ x: r.x + r.width / 2, y: r.y + r.height / 2 });
 
-export const LampLabels = memo(function LampLabels({
-  objects,
-  cam,
-  viewport,
-}: {
-  objects: readonly DesignObject[];
-  cam: Camera;
-  viewport: Viewport;
-}) {
-  const labels = useMemo(() => {
+/** A lamp's label as placed: its box, its text, and the lamp it belongs to (stage px). */
+export type PlacedLampLabel = LabelPlacement & ReturnType<typeof lampLabel> & { body: Rect };
+
+/**
+ * Every lamp's label placed (geometry/labels.ts), once a frame: drawn by LampLabels, and kept clear of by
+ * the basking marks' labels (HusbandryLayer).
+ */
+export function useLampLabels(objects: readonly DesignObject[], cam: Camera, viewport: Viewport) {
+  return useMemo((): PlacedLampLabel[] => {
     const lamps = objects.filter((o): o is LampObject => o.type === 'lamp');
     const texts = lamps.map(lampLabel);
     const bodies = lamps.map((l) => lampBody(l, cam));
@@ -41,6 +40,9 @@ export const LampLabels = memo(function LampLabels({
     );
     return places.map((p, i) => ({ ...p, ...texts[i]!, body: bodies[i]! }));
   }, [objects, cam, viewport]);
+}
+
+export const LampLabels = memo(function LampLabels({ labels }: { labels: readonly PlacedLampLabel[] }) {
   return (
     <Group listening={false}>
       {labels.map((l) => {

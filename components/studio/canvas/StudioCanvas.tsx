@@ -29,7 +29,7 @@ import { HusbandryLayer } from './HusbandryLayer';
 import type { MeshRisk } from '@/simulation';
 import type { Finding } from '../fields/engineTypes';
 import { FieldBands, type ColouredBand } from './FieldBands';
-import { LampLabels } from './LampLabels';
+import { LampLabels, useLampLabels } from './LampLabels';
 import { ObjectShape } from './ObjectShape';
 import {
   GuidesLayer,
@@ -120,6 +120,7 @@ export default function StudioCanvas({
   const { session } = state;
   const design = state.history.present;
   const cam = session.camera;
+  const lampLabels = useLampLabels(design.objects, cam, session.viewport);
   const [cursor, setCursor] = useState('default');
   const spaceDown = useRef(false);
   const touches = useRef(new Map<number, Point>());
@@ -378,7 +379,7 @@ export default function StudioCanvas({
           {design.objects.map((o) => (
             <ObjectShape key={o.id} o={o} cam={cam} />
           ))}
-          <LampLabels objects={design.objects} cam={cam} viewport={session.viewport} />
+          <LampLabels labels={lampLabels} />
         </Layer>
         <Layer listening={false}>
           <HusbandryLayer
@@ -387,6 +388,7 @@ export default function StudioCanvas({
             basking={basking}
             meshRisks={meshRisks}
             unit={session.lengthUnit}
+            avoid={lampLabels}
           />
           <HighlightLayer cam={cam} design={design} shape={highlight} />
           {photoShown && session.backdropAdjust && <BackdropFrame cam={cam} backdrop={photoShown} />}

@@ -45,7 +45,7 @@ describe('the husbandry marks in words', () => {
 
 describe('the basking marks’ labels', () => {
   it('stack above one another where their marks lie together, and stay put where they do not', () => {
-    const box = (x: number, y: number, width = 80) => ({ x, y, width, height: 15 });
+    const box = (x: number, y: number, width = 80) => ({ x, y, width, height: 15, belowY: y + 30 });
     // Three marks 6 px apart over one perch: each label moves up until it is clear of the ones placed.
     const ys = stackMarkLabels([box(100, 400), box(100, 394), box(104, 388)]);
     expect(ys).toEqual([400, 400 - 15 - MARK_LABEL_GAP_PX, 400 - 2 * (15 + MARK_LABEL_GAP_PX)]);
@@ -53,5 +53,27 @@ describe('the basking marks’ labels', () => {
       for (let j = 0; j < i; j++) expect(Math.abs(ys[i]! - ys[j]!)).toBeGreaterThanOrEqual(15);
     // A UV range at one end and the heat at the other: side by side, nothing moves.
     expect(stackMarkLabels([box(20, 400), box(300, 394)])).toEqual([400, 394]);
+  });
+
+  it('keep clear of a lamp label: below their surface when the stack above would cover it', () => {
+    // Three marks over a perch at y 420 (labels start at 400, 394, 388; below the surface from 424), and
+    // a lamp hanging low with its label across the second and third labels' spots above.
+    const box = (x: number, y: number) => ({ x, y, width: 80, height: 15, belowY: 424 });
+    const lampLabel = { x: 90, y: 372, width: 160, height: 14 };
+    const ys = stackMarkLabels([box(100, 400), box(100, 394), box(104, 388)], [lampLabel]);
+    expect(ys[0]).toBe(400);
+    expect(ys.slice(1)).toEqual([424, 424 + 15 + MARK_LABEL_GAP_PX]);
+    const rect = (y: number) => ({ x: 100, y, width: 80, height: 15 });
+    const overlaps = (a: { x: number; y: number; width: number; height: number }, b: typeof a) =>
+      a.x < b.x + b.width && b.x < a.x + a.width && a.y < b.y + b.height && b.y < a.y + a.height;
+    for (const y of ys) expect(overlaps(rect(y), lampLabel)).toBe(false);
+    // The same marks with the lamp's label elsewhere stack above as before.
+    expect(stackMarkLabels([box(100, 400), box(100, 394)], [{ ...lampLabel, x: 400 }])).toEqual([
+      400,
+      400 - 15 - MARK_LABEL_GAP_PX,
+    ]);
+    // Covered both ways (a label below the surface too): the spot above is kept.
+    const under = { x: 90, y: 424, width: 160, height: 60 };
+    expect(stackMarkLabels([box(100, 380)], [lampLabel, under])).toEqual([380]);
   });
 });

@@ -54,22 +54,39 @@ export function husbandrySentences(
 /** Space (px) between two stacked mark labels. */
 export const MARK_LABEL_GAP_PX = 2;
 
+/** A basking-mark label to place: its box at its own mark, and where it would start below the surface. */
+export interface MarkLabelBox extends Rect {
+  /** The top a label takes when it goes below its surface instead (just under the surface's line). */
+  belowY: number;
+}
+
+const meets = (a: Rect, y: number, b: Rect) =>
+  b.x < a.x + a.width && a.x < b.x + b.width && b.y < y + a.height && y < b.y + b.height;
+
 /**
- * The y of each basking-mark label, so none covers another: the marks of the UV range, the basking heat
- * and both lie a few pixels apart over the same surface, so their labels, each at its own mark, would
- * print on top of one another. Taken in order; a label that meets one already placed moves up above it
- * until it meets none. Labels apart from each other keep their own place.
+ * The y of each basking-mark label, so none covers another or a lamp's label: the marks of the UV range,
+ * the basking heat and both lie a few pixels apart over the same surface, so their labels, each at its
+ * own mark, would print on top of one another. Taken in order; a label that meets one already placed
+ * moves up above it until it meets none. Where that spot covers a label in `avoid` (the lamps' labels,
+ * placed first: a lamp hanging low over a perch), the label goes below its surface instead, moving down
+ * past whatever it meets there; if both ways are covered it keeps the spot above. Labels apart from each
+ * other and from the lamps' labels keep their own place.
  */
-export function stackMarkLabels(boxes: readonly Rect[]): number[] {
+export function stackMarkLabels(boxes: readonly MarkLabelBox[], avoid: readonly Rect[] = []): number[] {
   const placed: Rect[] = [];
+  const hitIn = (list: readonly Rect[], b: Rect, y: number) => list.find((p) => meets(b, y, p));
   return boxes.map((b) => {
     let y = b.y;
-    for (;;) {
-      const hit = placed.find(
-        (p) => p.x < b.x + b.width && b.x < p.x + p.width && p.y < y + b.height && y < p.y + p.height,
-      );
-      if (!hit) break;
+    for (let hit = hitIn(placed, b, y); hit; hit = hitIn(placed, b, y))
       y = hit.y - b.height - MARK_LABEL_GAP_PX;
+    if (hitIn(avoid, b, y)) {
+      const all = [...placed, ...avoid];
+      let down = b.belowY;
+      for (let hit = hitIn(all, b, down); hit; hit = hitIn(all, b, down))
+        down = hit.y + hit.height + MARK_LABEL_GAP_PX;
+      // Pushed down past a lamp's label means the label went through it: only a clear spot near the
+      // surface is better than the one above.
+      if (down - b.belowY < 3 * (b.height + MARK_LABEL_GAP_PX)) y = down;
     }
     placed.push({ ...b, y });
     return y;
