@@ -10,6 +10,7 @@ import { lampUvbFactor } from '../model/resolve';
 import type { Occluder } from '../geometry/occluders';
 import { compileScene, type LampGeom, type Scene } from './scene';
 import { fillLamp, refillChanged, RowTotals, sweepLampRow, Workspace } from './workspace';
+import { buildSlideMap, fillSlide, SlideScratch, type SlideMap } from './slide';
 import { probeScene, probeSceneByLamp, type LampSamples } from './probe';
 import { airTempC, balanceAt, cellTempC, finishRow, HEAT_DEFAULTS } from './heat';
 import { DEFAULT_CELL_CM, gridSize, type FieldGrid, type ProbeResult, type SimOptions } from './types';
@@ -24,6 +25,8 @@ interface LampEntry {
    */
   uv: Float32Array;
   ir: Float32Array;
+  /** A tube's line (slideLine): another tube on it differs from this one by a slide. */
+  line: string | null;
 }
 
 function occluderKey(o: Occluder): string {
@@ -36,9 +39,27 @@ function lampKey(l: LampGeom, nx: number, ny: number, cell: number): string {
   return JSON.stringify([nx, ny, cell, l.dz, rest]);
 }
 
+/**
+ * What a tube's kept intervals and plans (slide.ts) depend on besides the barriers and grid: its line's
+ * height and distance from the section plane (the closed forms kept at the inner ends), its length (a
+ * plan's bounds carry s2's over to s1) and which barriers it sees through (glass passes infrared by the
+ * lamp's own figure). Null for a bulb.
+ */
+function slideLine(l: LampGeom): string | null {
+  return l.tube ? JSON.stringify([l.y, l.dz, l.lamp.length, l.lamp.glassIrTransmission]) : null;
+}
+
+/**
+ * How far past a slid tube's ends its kept intervals reach (a quarter of its length, at least this many
+ * cells): a drag stays inside for a while, and a wider window means more intervals per cell on every step.
+ */
+const SLIDE_MARGIN_CELLS = 8;
+
 export interface SolverStats {
   /** Lamps computed from scratch, partly, or taken from the cache in the last call. */
   full: number;
+  /** Of the full ones, tubes filled from their kept intervals (slid along their line). */
+  slid: number;
   partial: number;
   cached: number;
   /** Lamp-cells evaluated in the last call. */
@@ -68,7 +89,19 @@ export class FieldSolver {
   private refilled = new Map<string, string>();
   /** In this call: a lamp was filled into a new buffer, so its cells are not marked. */
   private unmarked = false;
-  readonly stats: SolverStats = { full: 0, partial: 0, cached: 0, cellsEvaluated: 0 };
+  /**
+   * The hidden intervals of the last tube slid along its line (one at a time, so the memory is bounded by
+   * one grid's intervals: SlideMap.bytes); dropped when a call changes a lamp without using it.
+   */
+  private slideMap: SlideMap | null = null;
+  private slideUsed = false;
+  private slideScratch = new SlideScratch();
+  readonly stats: SolverStats = { full: 0, slid: 0, partial: 0, cached: 0, cellsEvaluated: 0 };
+
+  /** Bytes held for the last tube slid along its line (0 when none is kept). */
+  get slideBytes(): number {
+    return this.slideMap?.bytes ?? 0;
+  }
 
   /** @param cache keep per-lamp fields between calls (false: a one-off computation that allocates less). */
   constructor(private readonly cache = true) {}
@@ -81,7 +114,13 @@ export class FieldSolver {
     const scene = compileScene(design);
     const ws = this.ws;
     ws.ensure(scene.occluders.length);
-    this.stats.full = this.stats.partial = this.stats.cached = this.stats.cellsEvaluated = 0;
+    this.stats.full =
+      this.stats.slid =
+      this.stats.partial =
+      this.stats.cached =
+      this.stats.cellsEvaluated =
+        0;
+    this.slideUsed = false;
     const cells = nx * ny;
     this.switchGrid(JSON.stringify([nx, ny, cell]));
     if (!this.dirty || this.dirty.length !== cells) this.dirty = new Uint8Array(cells);
@@ -111,6 +150,7 @@ export class FieldSolver {
       fi.push(lamp.uvI > 0 ? f * lamp.lamp.uviPerUvb : 0);
     }
     this.entries = next;
+    if (this.stats.full > 0 && !this.slideUsed) this.slideMap = null;
     // Everything the totals depend on: the lamps' fields (by key) and the rest.
     const rest = JSON.stringify([fu, fi, scene.roomC, scene.airRiseK, height, hc, nx, ny, cell]);
     const sumKey = JSON.stringify(used.map((e) => e.key)) + rest;
@@ -179,6 +219,7 @@ export class FieldSolver {
     const lamps = scene.lamps;
     const n = lamps.length;
     this.stats.full = n;
+    this.stats.slid = 0;
     this.stats.partial = this.stats.cached = this.stats.cellsEvaluated = 0;
     const cells = nx * ny;
     const hc = opts.convection ?? HEAT_DEFAULTS.convection;
@@ -260,7 +301,7 @@ export class FieldSolver {
           ny,
           cell,
         );
-        return { key, occKeys, occluders: scene.occluders, uv: old.uv, ir: old.ir };
+        return { key, occKeys, occluders: scene.occluders, uv: old.uv, ir: old.ir, line: old.line };
       }
     }
     this.stats.full++;
@@ -271,18 +312,52 @@ export class FieldSolver {
     const ir = fits ? reused.ir : new Float32Array(nx * ny);
     if (fits) this.refilled.set(key, reused.key);
     else this.unmarked = true;
-    this.stats.cellsEvaluated += fillLamp(
+    const line = slideLine(lamp);
+    const map =
+      fits && line !== null ? this.slideMapFor(lamp, line, reused.line, scene, occKeys, nx, ny, cell) : null;
+    if (map) {
+      this.stats.slid++;
+      this.slideUsed = true;
+    }
+    const { ws, dirty } = this;
+    this.stats.cellsEvaluated += map
+      ? fillSlide(ws, this.slideScratch, map, lamp, scene.occluders, uv, ir, nx, ny, cell, dirty!)
+      : fillLamp(ws, lamp, scene.occluders, uv, ir, nx, ny, cell, fits ? dirty! : undefined);
+    return { key, occKeys, occluders: scene.occluders, uv, ir, line };
+  }
+
+  /**
+   * The kept intervals for a tube on `line`, when it replaces one on the same line (a slide): the last
+   * ones if they are for this line, barriers and grid and reach past its ends, or new ones around it.
+   * Null when the tube did not slide.
+   */
+  private slideMapFor(
+    lamp: LampGeom,
+    line: string,
+    was: string | null,
+    scene: Scene,
+    occKeys: string[],
+    nx: number,
+    ny: number,
+    cell: number,
+  ): SlideMap | null {
+    const key = JSON.stringify([line, nx, ny, cell, occKeys]);
+    const kept = this.slideMap;
+    if (kept && kept.key === key && kept.covers(lamp.s1, lamp.s2)) return kept;
+    if (was !== line) return null;
+    const margin = Math.max(0.25 * (lamp.s2 - lamp.s1), SLIDE_MARGIN_CELLS * cell);
+    this.slideMap = buildSlideMap(
       this.ws,
+      key,
       lamp,
       scene.occluders,
-      uv,
-      ir,
+      lamp.s1 - margin,
+      lamp.s2 + margin,
       nx,
       ny,
       cell,
-      fits ? this.dirty! : undefined,
     );
-    return { key, occKeys, occluders: scene.occluders, uv, ir };
+    return this.slideMap;
   }
 
   /** See probe.ts. */
