@@ -133,20 +133,23 @@ describe('a tube slid along its line (kept intervals)', () => {
     }
   });
 
+  /** An enclosure of width × height cm (40 deep) with these objects. */
+  const enclosure = (width: number, height: number, objects: DesignObject[]): Design => ({
+    format: 'baskwell.design',
+    version: 2,
+    enclosure: { width, height, depth: 40 },
+    objects,
+  });
+
   it('a tube slid across a barrier edge by fractions of a cell: cells go from open to partly hidden to hidden', () => {
-    const design: Design = {
-      format: 'baskwell.design',
-      version: 2,
-      enclosure: { width: 100, height: 50, depth: 40 },
-      objects: [
-        { type: 'lamp', id: 't', tech: 't5', form: 'tube', x: 20, y: 49, length: 30, uvbAt30: 40, watts: 20 },
-        // Three barriers that each pass part of the light, and an opaque one.
-        { type: 'screen', id: 'mesh', x1: 0, y1: 47, x2: 100, y2: 47, uvbTransmission: 0.7 },
-        { type: 'foliage', id: 'leaves', x: 40, y: 30, width: 20, height: 8, uvbTransmission: 0.4 },
-        { type: 'screen', id: 'net', x1: 30, y1: 40, x2: 70, y2: 40, uvbTransmission: 0.55 },
-        { type: 'ledge', id: 'shelf', x: 45, y: 20, width: 15, height: 3 },
-      ],
-    };
+    const design = enclosure(100, 50, [
+      { type: 'lamp', id: 't', tech: 't5', form: 'tube', x: 20, y: 49, length: 30, uvbAt30: 40, watts: 20 },
+      // Three barriers that each pass part of the light, and an opaque one.
+      { type: 'screen', id: 'mesh', x1: 0, y1: 47, x2: 100, y2: 47, uvbTransmission: 0.7 },
+      { type: 'foliage', id: 'leaves', x: 40, y: 30, width: 20, height: 8, uvbTransmission: 0.4 },
+      { type: 'screen', id: 'net', x1: 30, y1: 40, x2: 70, y2: 40, uvbTransmission: 0.55 },
+      { type: 'ledge', id: 'shelf', x: 45, y: 20, width: 15, height: 3 },
+    ]);
     const solver = new FieldSolver();
     let now = design;
     solver.compute(now, { cellCm: 1 });
@@ -161,6 +164,32 @@ describe('a tube slid along its line (kept intervals)', () => {
     const hidden = seen.findIndex((v) => v === 0);
     expect(hidden).toBeGreaterThan(0);
     expect(seen.slice(hidden).some((v) => v > 0)).toBe(true);
+  });
+
+  it('under a pane of glass across the enclosure (no UVB, some infrared) the cells are never dark', () => {
+    const tube = { type: 'lamp', id: 't', tech: 'halogen', form: 'tube', x: 30, y: 39, length: 25 } as const;
+    const design = enclosure(80, 40, [
+      { ...tube, uvbAt30: 30, watts: 100 },
+      { type: 'screen', id: 'mesh', x1: 0, y1: 38, x2: 80, y2: 38, uvbTransmission: 0.8 },
+      { type: 'glass', id: 'pane', x1: 0, y1: 30, x2: 80, y2: 30 },
+      { type: 'perch', id: 'p', x1: 20, y1: 12, x2: 50, y2: 16, thickness: 2 },
+    ]);
+    const solver = new FieldSolver();
+    let now = design;
+    solver.compute(now, { cellCm: 1 });
+    for (let k = 0; k < 30; k++) {
+      now = moved(now, 't', { x: 0.6 });
+      expect(step(solver, now, 1)).toBe(1);
+    }
+    const got = solver.compute(now, { cellCm: 1 });
+    // Below the pane no UVB arrives, but the infrared through it warms the floor above the lamp-off air.
+    const off = computeFields(
+      { ...now, objects: now.objects.filter((o) => o.type !== 'lamp') },
+      { cellCm: 1 },
+    );
+    const c = 5 * 80 + 65;
+    expect(got.uvb[c]).toBe(0);
+    expect(got.tempC[c]!).toBeGreaterThan(off.tempC[c]! + 0.1);
   });
 
   it('keeps one tube’s intervals at a time, and drops them when another lamp changes', () => {

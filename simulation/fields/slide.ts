@@ -46,12 +46,12 @@ export class SlideMap {
    * cell whose record outgrows its slot takes a new one at the top; past POOL_PER_CELL entries a cell the
    * pool is emptied and every plan starts again.
    */
-  pool = new Float64Array(1024);
+  pool: Float64Array;
   top = 1;
   constructor(
-    readonly key: string,
-    readonly w1: number,
-    readonly w2: number,
+    public key: string,
+    public w1: number,
+    public w2: number,
     cells: number,
     capacity: number,
   ) {
@@ -61,6 +61,8 @@ export class SlideMap {
     this.occ = new Int32Array(capacity);
     this.word = new Int32Array(cells);
     this.bounds = new Float64Array(2 * cells);
+    // Room for a few runs a cell: growing it later means new memory, which costs its first touch again.
+    this.pool = new Float64Array(8 * cells + 1024);
   }
 
   /** Whether a tube from s1 to s2 lies inside the window. */
@@ -74,19 +76,14 @@ export class SlideMap {
     return arrays.reduce((sum, a) => sum + a.byteLength, 0);
   }
 
-  /** Room for `need` intervals, or (shrink) exactly that many once they are all found. */
-  resize(need: number, shrink = false) {
-    if (shrink ? need === this.lo.length : need <= this.lo.length) return;
-    const n = shrink ? need : Math.max(need, 2 * this.lo.length);
-    const lo = new Float64Array(n);
-    const hi = new Float64Array(n);
-    const occ = new Int32Array(n);
-    lo.set(this.lo.subarray(0, n));
-    hi.set(this.hi.subarray(0, n));
-    occ.set(this.occ.subarray(0, n));
-    this.lo = lo;
-    this.hi = hi;
-    this.occ = occ;
+  /** The map emptied for another key and window (its memory kept); every cell is planned again. */
+  reset(key: string, w1: number, w2: number): SlideMap {
+    this.key = key;
+    this.w1 = w1;
+    this.w2 = w2;
+    this.word.fill(FULL);
+    this.top = 1;
+    return this;
   }
 
   /** A record of `size` entries for cell c (its old slot when that is large enough). */
@@ -115,10 +112,12 @@ const POOL_PER_CELL = 24;
 /**
  * The intervals every barrier hides of the line y = lamp.y, seen from each cell, where they meet the
  * window (w1, w2): lo and hi exactly as evalSpan projects them (the lowest and highest corner of the
- * barrier clipped to the cell row's strip, by prepareRow's own straight lines).
+ * barrier clipped to the cell row's strip, by prepareRow's own straight lines). Built into `old`'s memory
+ * when it has room (a drag that leaves the window), else into new memory sized by a first pass.
  */
 export function buildSlideMap(
   ws: Workspace,
+  old: SlideMap | null,
   key: string,
   lamp: LampGeom,
   occluders: Occluder[],
@@ -128,12 +127,29 @@ export function buildSlideMap(
   ny: number,
   cell: number,
 ): SlideMap {
-  const map = new SlideMap(key, w1, w2, nx * ny, 2 * nx * ny);
   const row = ws.row;
   const s = ws.scratch;
   // prepareRow keeps the barriers whose interval can meet the window somewhere on the row.
   const win: LampGeom = { ...lamp, s1: w1, s2: w2 };
+  const cells = nx * ny;
+  // At most the cells inside each barrier's range (qa, qb), give or take one at each end.
+  let most = 0;
+  for (let j = 0; j < ny; j++) {
+    if (!prepareRow(win, occluders, (j + 0.5) * cell, row, s)) continue;
+    for (let c = 0; c < row.count; c++) {
+      const i0 = Math.max(0, Math.floor(row.qa[c]! / cell - 1.5));
+      const i1 = Math.min(nx - 1, Math.ceil(row.qb[c]! / cell + 0.5));
+      if (i1 >= i0) most += i1 - i0 + 1;
+    }
+  }
+  const map =
+    old && old.word.length === cells && old.lo.length >= most
+      ? old.reset(key, w1, w2)
+      : new SlideMap(key, w1, w2, cells, most);
   const start = map.start;
+  const mLo = map.lo;
+  const mHi = map.hi;
+  const mOcc = map.occ;
   let m = 0;
   for (let j = 0; j < ny; j++) {
     const base = j * nx;
@@ -147,7 +163,6 @@ export function buildSlideMap(
     for (let i = 0; i < nx; i++) {
       start[base + i] = m;
       const qx = (i + 0.5) * cell;
-      map.resize(m + n);
       for (let c = 0; c < n; c++) {
         if (qx <= row.qa[c]! || qx >= row.qb[c]!) continue;
         const v0 = row.vStart[c]!;
@@ -160,15 +175,25 @@ export function buildSlideMap(
           hi = Math.max(hi, x);
         }
         if (!(lo < w2 && hi > w1)) continue;
-        map.lo[m] = lo;
-        map.hi[m] = hi;
-        map.occ[m] = row.occ[c]!;
+        const k = row.occ[c]!;
+        if (lo <= w1 && hi >= w2 && lamp.tUv[k] === 0 && lamp.tIr[k] === 0) {
+          // An opaque barrier hides the whole window: the cell is dark wherever the tube lies in it, and
+          // this interval alone says so (the others cannot change a product that is zero).
+          m = start[base + i]!;
+          mLo[m] = lo;
+          mHi[m] = hi;
+          mOcc[m] = k;
+          m++;
+          break;
+        }
+        mLo[m] = lo;
+        mHi[m] = hi;
+        mOcc[m] = k;
         m++;
       }
     }
   }
-  start[nx * ny] = m;
-  map.resize(m, true);
+  start[cells] = m;
   return map;
 }
 

@@ -348,6 +348,7 @@ export class FieldSolver {
     const margin = Math.max(0.25 * (lamp.s2 - lamp.s1), SLIDE_MARGIN_CELLS * cell);
     this.slideMap = buildSlideMap(
       this.ws,
+      kept,
       key,
       lamp,
       scene.occluders,
