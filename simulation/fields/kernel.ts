@@ -138,9 +138,6 @@ export class Scratch {
   /** The last cell of the row up to which a barrier's sLv, sHv and their sides hold (−1: not known). */
   sUntil: Int32Array;
   rV: Int32Array;
-  /** What makeRuns leaves besides the runs: how many inner ends it sorted, and whether their gaps are clear. */
-  ends = 0;
-  clear = false;
   /** Cells evaluated in stretches so far (a count for tests; it never affects a value). */
   stretched = 0;
   /** Output of evalCell. */
@@ -486,9 +483,56 @@ export function evalSpan(
       if (same && !(s2 - x0 > GAP * (1 + Math.abs(s2)))) same = false;
     }
     if (!same) {
-      nr = makeRuns(s, n, s1, s2, occ, tUv, tIr);
-      kN = s.clear ? n : -1;
-      kM = s.ends;
+      let m = 0;
+      for (let c = 0; c < n; c++) {
+        const key = pk[c]!;
+        if ((key & 1) !== 0) ord[m++] = 2 * c;
+        if ((key & 2) !== 0) ord[m++] = 2 * c + 1;
+        kKey[c] = key;
+      }
+      // Insertion sort of the ends by position (two to eight as a rule).
+      for (let a = 1; a < m; a++) {
+        const r = ord[a]!;
+        const v = (r & 1) === 0 ? sLo[r >> 1]! : sHi[r >> 1]!;
+        let b = a - 1;
+        while (b >= 0) {
+          const q = ord[b]!;
+          if (!(((q & 1) === 0 ? sLo[q >> 1]! : sHi[q >> 1]!) > v)) break;
+          ord[b + 1] = q;
+          b--;
+        }
+        ord[b + 1] = r;
+      }
+      nr = 0;
+      let clear = true;
+      let x0 = s1;
+      for (let a = 0; a <= m; a++) {
+        const r = a < m ? ord[a]! : -1;
+        const x1 = r < 0 ? s2 : (r & 1) === 0 ? sLo[r >> 1]! : sHi[r >> 1]!;
+        if (!(x1 - x0 > GAP * (1 + Math.abs(x1)))) clear = false;
+        if (!(x1 > x0)) continue;
+        const mid = 0.5 * (x0 + x1);
+        let pu = 1;
+        let pi = 1;
+        for (let c = 0; c < n; c++) {
+          if (sLo[c]! <= mid && mid <= sHi[c]!) {
+            const k = occ[pk[c]! >> 2]!;
+            pu *= tUv[k]!;
+            pi *= tIr[k]!;
+          }
+        }
+        if (nr > 0 && rU[nr - 1] === pu && rI[nr - 1] === pi) {
+          rRef[nr - 1] = r;
+        } else {
+          rRef[nr] = r;
+          rU[nr] = pu;
+          rI[nr] = pi;
+          nr++;
+        }
+        x0 = x1;
+      }
+      kN = clear ? n : -1;
+      kM = m;
     }
     let sumU = 0;
     let sumI = 0;
@@ -526,12 +570,13 @@ export function evalSpan(
 
 /**
  * The visible runs of a tube's n ≥ 2 partly hidden pieces at one cell (s.lo, s.hi; s.pk: 4 × the row's
- * barrier index, into occ, plus the inner-end bits): the pieces' inner ends sorted by position, the
- * pieces between them weighted by the transmissions of the intervals covering their midpoints, neighbours
- * of the same share merged. Leaves the runs in s.rRef (each run's end: 2·piece for a piece's lower end,
- * 2·piece + 1 for its upper end, −1 for s2), s.rU and s.rI, the sorted ends in s.ord (s.ends of them) and
- * each piece's key in s.kKey, and says in s.clear whether every gap between neighbouring ends is clear
- * (GAP); returns the number of runs.
+ * barrier index, into occ, plus the inner-end bits), as evalSpan makes them where it cannot keep the last
+ * cell's: the pieces' inner ends sorted by position, the pieces between them weighted by the transmissions
+ * of the intervals covering their midpoints, neighbours of the same share merged. Leaves the runs in
+ * s.rRef (each run's end: 2·piece for a piece's lower end, 2·piece + 1 for its upper end, −1 for s2), s.rU
+ * and s.rI; returns their number. For the slide fill (slide.ts): evalSpan keeps its own copy written out,
+ * with what it needs besides (each piece's key, whether the gaps are clear), because calling a routine
+ * there made the demo's full field 2-3 % slower (separate processes, old and new alternately, five each).
  */
 export function makeRuns(
   s: Scratch,
@@ -554,7 +599,6 @@ export function makeRuns(
     const key = pk[c]!;
     if ((key & 1) !== 0) ord[m++] = 2 * c;
     if ((key & 2) !== 0) ord[m++] = 2 * c + 1;
-    s.kKey[c] = key;
   }
   // Insertion sort of the ends by position (two to eight as a rule).
   for (let a = 1; a < m; a++) {
@@ -570,12 +614,10 @@ export function makeRuns(
     ord[b + 1] = r;
   }
   let nr = 0;
-  let clear = true;
   let x0 = s1;
   for (let a = 0; a <= m; a++) {
     const r = a < m ? ord[a]! : -1;
     const x1 = r < 0 ? s2 : (r & 1) === 0 ? sLo[r >> 1]! : sHi[r >> 1]!;
-    if (!(x1 - x0 > GAP * (1 + Math.abs(x1)))) clear = false;
     if (!(x1 > x0)) continue;
     const mid = 0.5 * (x0 + x1);
     let pu = 1;
@@ -597,8 +639,6 @@ export function makeRuns(
     }
     x0 = x1;
   }
-  s.ends = m;
-  s.clear = clear;
   return nr;
 }
 
