@@ -21,6 +21,9 @@ beforeAll(async () => {
 
 afterAll(() => new Promise<void>((resolve) => server.close(() => resolve())));
 
+/** How long the first `n` requests took to arrive, first to last, in ms. */
+const spanOf = (n: number) => arrivals[n - 1]! - arrivals[0]!;
+
 /** Gaps between consecutive arrivals of the first `n` requests, in ms, sorted. */
 const firstGaps = (n: number) =>
   arrivals
@@ -45,12 +48,15 @@ describe('evenly spaced requests', () => {
     expect(even.requests).toBe(20);
     // Two seconds of requests, whatever the runs take to notice they are done.
     expect(even.seconds).toBeLessThan(2.9);
-    // 10 a second: one every 100 ms; half the gaps at least 50 ms even on a busy machine.
-    expect(percentile(firstGaps(10), 50)).toBeGreaterThanOrEqual(50);
+    // 10 a second: one every 100 ms, so the first ten arrive over about 900 ms. A busy machine fires some
+    // timers late and then several together (gaps of a few ms beside gaps of 200), so the check is on
+    // the ten's spread, which lateness shortens only by as much as the first one is late.
+    expect(spanOf(10)).toBeGreaterThanOrEqual(450);
 
     arrivals = [];
     await bursts({ url, connections: 10, rate: 10, duration: 1 });
     // The burst it replaces: the first second's ten requests all within a few milliseconds.
     expect(percentile(firstGaps(10), 50)).toBeLessThan(50);
+    expect(spanOf(10)).toBeLessThan(450);
   });
 });
