@@ -1,7 +1,7 @@
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { bursts, paced, percentile } from './paced.mjs';
+import { bursts, paced, percentile } from '../../scripts/lib/paced.mjs';
 
 // The scale bench's load: requests evenly spaced at the rate asked, where autocannon's own overallRate
 // sends each second's share of every connection together at the top of the second. Checked by when the
