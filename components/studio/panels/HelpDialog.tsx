@@ -39,6 +39,10 @@ export function HelpDialog() {
     <dialog
       ref={ref}
       aria-labelledby="studio-help-title"
+      // Escape closes a modal dialog at once but queues its close event, so a shortcut pressed just after
+      // would still find help open and be dropped: the store hears of it from the cancel event, before the
+      // dialog closes.
+      onCancel={() => store.setSession({ helpOpen: false })}
       onClose={() => store.setSession({ helpOpen: false })}
       className="m-auto max-h-[85vh] w-[min(56rem,92vw)] overflow-y-auto rounded-lg border border-basalt-200 p-0 shadow-xl backdrop:bg-basalt-900/40"
       data-testid="help-dialog"
