@@ -4,6 +4,7 @@ import { formatLengthRounded, type LengthUnit } from '@/shared/units';
 import { segmentsCentreX as centreX, type MeshRisk } from '@/simulation';
 import type { Finding } from '../fields/engineTypes';
 import type { Rect } from './camera';
+import { overlapArea } from './labels';
 
 const near = (xs: { lampId: string; distanceCm: number }[], u: LengthUnit) =>
   xs.map((x) => `${x.lampId}, ${formatLengthRounded(x.distanceCm, u)}`).join('; ');
@@ -60,8 +61,8 @@ export interface MarkLabelBox extends Rect {
   belowY: number;
 }
 
-const meets = (a: Rect, y: number, b: Rect) =>
-  b.x < a.x + a.width && a.x < b.x + b.width && b.y < y + a.height && y < b.y + b.height;
+/** Whether label `a`, moved to the top `y`, covers any of `b`. */
+const meets = (a: Rect, y: number, b: Rect) => overlapArea({ ...a, y }, b) > 0;
 
 /**
  * The y of each basking-mark label, so none covers another or a lamp's label: the marks of the UV range,
@@ -69,8 +70,9 @@ const meets = (a: Rect, y: number, b: Rect) =>
  * own mark, would print on top of one another. Taken in order; a label that meets one already placed
  * moves up above it until it meets none. Where that spot covers a label in `avoid` (the lamps' labels,
  * placed first: a lamp hanging low over a perch), the label goes below its surface instead, moving down
- * past whatever it meets there; if both ways are covered it keeps the spot above. Labels apart from each
- * other and from the lamps' labels keep their own place.
+ * past whatever it meets there, unless that takes it three labels' height or more below the surface
+ * (then it keeps the spot above). Labels apart from each other and from the lamps' labels keep their own
+ * place.
  */
 export function stackMarkLabels(boxes: readonly MarkLabelBox[], avoid: readonly Rect[] = []): number[] {
   const placed: Rect[] = [];

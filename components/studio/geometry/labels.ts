@@ -47,7 +47,8 @@ export function labelCandidates(r: LabelRequest): Rect[] {
   return spots.map(([x, y]) => ({ x, y, width: w, height: h }));
 }
 
-function overlapArea(a: Rect, b: Rect): number {
+/** The area two rects share (px²); 0 when they only touch or lie apart. */
+export function overlapArea(a: Rect, b: Rect): number {
   const w = Math.min(a.x + a.width, b.x + b.width) - Math.max(a.x, b.x);
   const h = Math.min(a.y + a.height, b.y + b.height) - Math.max(a.y, b.y);
   return w > 0 && h > 0 ? w * h : 0;
