@@ -2,7 +2,7 @@
 export * from './model';
 export { EXAMPLE_DESIGN, exampleDesign } from './model/example';
 export * from './fields/types';
-export { computeFields, probe } from './fields/grid';
+export { computeFields, probe, recycleFields } from './fields/grid';
 export { FieldSolver, type SolverStats } from './fields/solver';
 export { HEAT_DEFAULTS, AIR_MODEL, surfaceTempC, airTempC } from './fields/heat';
 export { meshOpenArea } from './model/materials';

@@ -13,6 +13,14 @@ export function computeFields(design: Design, opts?: SimOptions): FieldGrid {
   return oneOff.compute(design, opts);
 }
 
+/**
+ * Hands back the buffer of a result of `computeFields` (`grid.uvb.buffer`) that nothing will read again,
+ * for a later call of the same size to write into (FieldSolver.recycle).
+ */
+export function recycleFields(buffer: ArrayBufferLike): void {
+  oneOff.recycle(buffer);
+}
+
 /** The three values at exact points (evaluated there, not interpolated from a grid). */
 export function probe(design: Design, points: { x: number; y: number }[], opts?: SimOptions): ProbeResult[] {
   return new FieldSolver().probe(design, points, opts);

@@ -204,3 +204,93 @@ describe('FieldSolver sums', () => {
     }
   });
 });
+
+describe('FieldSolver recycled results', () => {
+  const opts = { cellCm: 1 };
+  /** The design with lamp t5-0 moved sideways by dx. */
+  const slid = (d: Design, dx: number): Design => ({
+    ...d,
+    objects: d.objects.map((o) => (o.id === 't5-0' && o.type === 'lamp' ? { ...o, x: o.x + dx } : o)),
+  });
+  /** A whole result's values, copied. */
+  const copy = (g: { uvb: Float32Array; uvi: Float32Array; tempC: Float32Array }) => [
+    g.uvb.slice(),
+    g.uvi.slice(),
+    g.tempC.slice(),
+  ];
+
+  it('a drag writing into handed-back buffers gives the bits of fresh results, on both paths', () => {
+    const reusing = new FieldSolver();
+    const fresh = new FieldSolver();
+    let now = benchDesign();
+    let before = reusing.compute(now, opts);
+    let handedBack: ArrayBufferLike | null = null;
+    fresh.compute(now, opts);
+    for (let step = 0; step < 6; step++) {
+      now = slid(now, step % 2 ? -0.5 : 1);
+      const got = reusing.compute(now, opts);
+      if (handedBack) expect(got.uvb.buffer).toBe(handedBack);
+      expect(copy(got)).toEqual(copy(fresh.compute(now, opts)));
+      // The one before is no longer read: spoil it, so that a cell the next call left unwritten shows.
+      new Float32Array(before.uvb.buffer).fill(NaN);
+      handedBack = before.uvb.buffer;
+      reusing.recycle(handedBack);
+      before = got;
+    }
+    expect(reusing.stats.full).toBe(1);
+    const once = new FieldSolver(false);
+    const first = once.compute(now, opts);
+    new Float32Array(first.uvb.buffer).fill(NaN);
+    once.recycle(first.uvb.buffer);
+    const again = once.compute(now, opts);
+    expect(again.uvb.buffer).toBe(first.uvb.buffer);
+    expect(copy(again)).toEqual(copy(fresh.compute(now, opts)));
+  });
+
+  it('uses a handed-back buffer only for a result of its size, and never a detached one', () => {
+    const solver = new FieldSolver();
+    const design = benchDesign();
+    const coarse = solver.compute(design, { cellCm: 2 });
+    solver.recycle(coarse.uvb.buffer);
+    const detached = solver.compute(design, opts).uvb.buffer as ArrayBuffer;
+    structuredClone(detached, { transfer: [detached] });
+    expect(detached.byteLength).toBe(0);
+    solver.recycle(detached);
+    const fine = solver.compute(slid(design, 1), opts);
+    expect(fine.uvb.buffer).not.toBe(coarse.uvb.buffer);
+    expect(fine.uvb.length).toBe(fine.nx * fine.ny);
+    expect(copy(fine)).toEqual(copy(computeFields(slid(design, 1), opts)));
+    // The coarse buffer is still there for the next coarse call.
+    expect(solver.compute(design, { cellCm: 2 }).uvb.buffer).toBe(coarse.uvb.buffer);
+  });
+
+  it('never writes into a result the caller still holds', () => {
+    const solver = new FieldSolver();
+    let now = benchDesign();
+    const held = solver.compute(now, opts);
+    const values = copy(held);
+    let last = held;
+    for (let step = 0; step < 5; step++) {
+      now = slid(now, 1);
+      const next = solver.compute(now, opts);
+      expect(next.uvb.buffer).not.toBe(held.uvb.buffer);
+      expect(next.uvb.buffer).not.toBe(last.uvb.buffer);
+      // The results after the held one are handed back once the next is there, as the studio does.
+      if (last !== held) solver.recycle(last.uvb.buffer);
+      last = next;
+    }
+    expect(copy(held)).toEqual(values);
+    // A buffer handed back twice is kept once: two later results never share it.
+    solver.recycle(last.uvb.buffer);
+    solver.recycle(last.uvb.buffer);
+    const a = solver.compute(slid(now, 1), opts);
+    const b = solver.compute(slid(now, 2), opts);
+    expect(a.uvb.buffer).not.toBe(b.uvb.buffer);
+    const once = new FieldSolver(false);
+    const kept = once.compute(now, opts);
+    const keptValues = copy(kept);
+    once.compute(slid(now, 3), opts);
+    once.compute(benchDesign(), opts);
+    expect(copy(kept)).toEqual(keptValues);
+  });
+});

@@ -69,6 +69,12 @@ export interface SolverStats {
 /** Grid sizes kept besides the current one. */
 const MAX_OTHER_GRIDS = 1;
 
+/**
+ * Result buffers kept for later calls (recycle): a drag hands back one per step, and the studio switches
+ * between two grid sizes.
+ */
+const MAX_SPARE_RESULTS = 2;
+
 /** Most barriers that may change for a partial recompute to be tried. */
 const MAX_CHANGED_FOR_PARTIAL = 4;
 
@@ -96,6 +102,8 @@ export class FieldSolver {
   private slideMap: SlideMap | null = null;
   private slideUsed = false;
   private slideScratch = new SlideScratch();
+  /** Buffers of results handed back by the caller (recycle), oldest first. */
+  private spareResults: ArrayBuffer[] = [];
   readonly stats: SolverStats = { full: 0, slid: 0, partial: 0, cached: 0, cellsEvaluated: 0 };
 
   /** Bytes held for the last tube slid along its line (0 when none is kept). */
@@ -105,6 +113,34 @@ export class FieldSolver {
 
   /** @param cache keep per-lamp fields between calls (false: a one-off computation that allocates less). */
   constructor(private readonly cache = true) {}
+
+  /**
+   * Hands back the buffer of a result (`grid.uvb.buffer`) that nothing will read again: a later call of
+   * the same grid size writes its result into it instead of allocating a new one. Allocating and first
+   * touching a fresh grid-sized buffer on every call costs as much as a third of a small drag step. The
+   * caller gives up the whole result: the three arrays share this buffer, and reading any of them after
+   * a later call shows that call's values. A buffer of another size, or a detached one, is never used.
+   */
+  recycle(buffer: ArrayBufferLike): void {
+    if (!(buffer instanceof ArrayBuffer) || buffer.byteLength === 0) return;
+    if (this.spareResults.includes(buffer)) return;
+    this.spareResults.push(buffer);
+    if (this.spareResults.length > MAX_SPARE_RESULTS) this.spareResults.shift();
+  }
+
+  /**
+   * The three result fields as views of one buffer: a handed-back one of this size if there is one, or a
+   * single new allocation instead of three (three grid-sized buffers a call are freed and allocated again
+   * on every drag step, and the allocator hands their pages back to the system and faults them in again
+   * each time, which costs more than the copy). Every cell is written by the caller, so a handed-back
+   * buffer needs no clearing.
+   */
+  private resultArrays(cells: number): [Float32Array, Float32Array, Float32Array] {
+    const bytes = 3 * cells * Float32Array.BYTES_PER_ELEMENT;
+    const k = this.spareResults.findIndex((b) => b.byteLength === bytes);
+    const all = k >= 0 ? new Float32Array(this.spareResults.splice(k, 1)[0]!) : new Float32Array(3 * cells);
+    return [all.subarray(0, cells), all.subarray(cells, 2 * cells), all.subarray(2 * cells)];
+  }
 
   compute(design: Design, opts: SimOptions = {}): FieldGrid {
     if (!this.cache) return this.computeOnce(design, opts);
@@ -195,7 +231,7 @@ export class FieldSolver {
     }
     this.totals = t;
     // Copies: the caller owns its results (the worker hands their buffer to the page).
-    const [uvb, uvi, tempC] = resultArrays(cells);
+    const [uvb, uvi, tempC] = this.resultArrays(cells);
     uvb.set(t.uvb);
     uvi.set(t.uvi);
     tempC.set(t.tempC);
@@ -232,7 +268,7 @@ export class FieldSolver {
       fu[k] = lamp.uvI > 0 ? f : 0;
       fi[k] = lamp.uvI > 0 ? f * lamp.lamp.uviPerUvb : 0;
     }
-    const [uvbOut, uviOut, tempOut] = resultArrays(cells);
+    const [uvbOut, uviOut, tempOut] = this.resultArrays(cells);
     const out = { uvb: uvbOut, uvi: uviOut, tempC: tempOut };
     const into = onceRow;
     let evaluated = 0;
@@ -440,16 +476,6 @@ interface Totals {
 
 function newTotals(key: string, cells: number): Totals {
   return { key, uvb: new Float32Array(cells), uvi: new Float32Array(cells), tempC: new Float32Array(cells) };
-}
-
-/**
- * The three result fields as views of one buffer: a single allocation instead of three. Three separate
- * grid-sized buffers a call are freed and allocated again on every drag step, and the allocator hands
- * their pages back to the system and faults them in again each time, which costs more than the copy.
- */
-function resultArrays(cells: number): [Float32Array, Float32Array, Float32Array] {
-  const all = new Float32Array(3 * cells);
-  return [all.subarray(0, cells), all.subarray(cells, 2 * cells), all.subarray(2 * cells)];
 }
 
 /**
