@@ -47,6 +47,6 @@ export { reachableSurfaces, type SurfaceSample } from './assess/surfaces';
 export { climberMeshRisks, type MeshRisk } from './assess/safetyFindings';
 export * as ASSESSMENT_THRESHOLDS from './assess/thresholds';
 export { speciesSheetSchema } from './model/species';
-export { handleRequest } from './worker/handle';
+export { handleRequest, takeHandedBack } from './worker/handle';
 export { LatestRequestQueue } from './worker/queue';
 export { transferables, type SimRequest, type SimResponse, type SimResult } from './worker/protocol';

@@ -1,10 +1,11 @@
 /// <reference lib="webworker" />
 /**
  * Web Worker entry: thin. Messages go into a latest-wins queue; the next request runs on a fresh task so
- * that requests arriving meanwhile can replace it first. Field buffers are transferred, not copied.
+ * that requests arriving meanwhile can replace it first. Field buffers are transferred, not copied, and the
+ * page transfers those it no longer reads back with a later request, for the next fields to be computed into.
  */
 import { FieldSolver } from '../fields/solver';
-import { handleRequest } from './handle';
+import { handleRequest, takeHandedBack } from './handle';
 import { LatestRequestQueue } from './queue';
 import { transferables, type SimRequest, type SimResponse } from './protocol';
 
@@ -27,6 +28,7 @@ function runNext() {
 }
 
 scope.onmessage = (e) => {
+  takeHandedBack(e.data, solver);
   const replaced = queue.push(e.data);
   if (replaced) scope.postMessage(replaced, []);
   if (!scheduled) {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { handleRequest } from './handle';
+import { handleRequest, takeHandedBack } from './handle';
 import { LatestRequestQueue } from './queue';
 import { transferables, type SimRequest } from './protocol';
 import { EXAMPLE_DESIGN } from '../testing/fixtures';
@@ -89,5 +89,23 @@ describe('LatestRequestQueue', () => {
     expect(q.take()?.id).toBe(3);
     expect(q.take()).toBeNull();
     expect(q.push(mk(4))).toBeNull();
+  });
+});
+
+describe('takeHandedBack', () => {
+  it('gives a request’s buffers to the solver: the next result of their size is computed into one', () => {
+    const solver = new FieldSolver();
+    const req: SimRequest = { id: 1, kind: 'simulate', design: EXAMPLE_DESIGN, cellCm: 2 };
+    const first = handleRequest(req, solver);
+    if (first.kind !== 'result') throw new Error(first.kind);
+    // As the page returns it: transferred, so the worker sees a new buffer object.
+    const back = structuredClone(first.uvb.buffer as ArrayBuffer, {
+      transfer: [first.uvb.buffer as ArrayBuffer],
+    });
+    takeHandedBack({ ...req, id: 2, recycle: [back, 'not a buffer' as never] }, solver);
+    const second = handleRequest({ ...req, id: 2 }, solver);
+    if (second.kind !== 'result') throw new Error(second.kind);
+    expect(second.uvb.buffer).toBe(back);
+    expect(second.uvb).toEqual(computeFields(EXAMPLE_DESIGN, { cellCm: 2 }).uvb);
   });
 });

@@ -10,6 +10,16 @@ import type { SimRequest, SimResponse } from './protocol';
 
 const now = () => (typeof performance !== 'undefined' ? performance.now() : Date.now());
 
+/**
+ * Gives the solver the result buffers a request hands back. Called as the request arrives, before it is
+ * queued: the buffers of a request that a newer one supersedes serve too.
+ */
+export function takeHandedBack(req: SimRequest, solver: FieldSolver): void {
+  const buffers: unknown = req?.recycle;
+  if (!Array.isArray(buffers)) return;
+  for (const b of buffers) if (b instanceof ArrayBuffer) solver.recycle(b);
+}
+
 export function handleRequest(req: SimRequest, solver: FieldSolver = new FieldSolver()): SimResponse {
   const id = typeof req?.id === 'number' ? req.id : -1;
   try {

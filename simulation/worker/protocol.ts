@@ -16,6 +16,11 @@ export type SimRequest = {
   addMonths?: number;
   species?: SpeciesSheet;
   probes?: { x: number; y: number }[];
+  /**
+   * Buffers of earlier results the page no longer reads, transferred back: the worker computes later
+   * fields into them instead of allocating new ones (FieldSolver.recycle).
+   */
+  recycle?: ArrayBuffer[];
 };
 
 /** A computed field (the grid and its arrays) with what the studio asked for beside it. */

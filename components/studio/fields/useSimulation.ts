@@ -11,6 +11,7 @@ import { cellSizeFor } from '@/shared/designs/studio-cell-size';
 import { markFieldComputed, takeEngineWorker } from './early';
 import type { Reading } from './sample';
 import { EMPTY_SIM, type SimView } from './simTypes';
+import { ShownFields } from './handBack';
 
 interface Sent {
   at: number;
@@ -30,6 +31,11 @@ export function useSimulation(store: StudioStore, species: StudioSpecies[]): Sim
   useEffect(() => {
     speciesRef.current = species;
   }, [species]);
+  // Fields the page stopped showing go back to the worker with the next request (handBack.ts).
+  const [shown] = useState(() => new ShownFields());
+  useEffect(() => {
+    shown.committed(view.grid);
+  }, [shown, view.grid]);
 
   useEffect(() => {
     let worker: Worker;
@@ -74,8 +80,10 @@ export function useSimulation(store: StudioStore, species: StudioSpecies[]): Sim
         species: speciesSheet(speciesRef.current.find((s) => s.id === session.speciesId)),
         probes: probes.map((p) => ({ x: p.x, y: p.y })),
       };
+      const recycle = shown.take();
+      if (recycle.length) req.recycle = recycle;
       sent.set(id, { at: performance.now(), probeIds: probes.map((p) => p.id) });
-      worker.postMessage(req);
+      worker.postMessage(req, recycle);
       setView((v) => (v.status === 'computing' ? v : { ...v, status: 'computing' }));
     };
 
@@ -127,7 +135,7 @@ export function useSimulation(store: StudioStore, species: StudioSpecies[]): Sim
       unsubscribe();
       worker.terminate();
     };
-  }, [store]);
+  }, [store, shown]);
 
   return view;
 }
