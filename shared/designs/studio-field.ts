@@ -10,6 +10,7 @@ import {
   defaultThresholds,
   parseDesign,
   physicsOf,
+  recycleFields,
   type ContourBand,
   type Design,
   type FieldName,
@@ -50,5 +51,9 @@ export function studioFirstField(design: Design, field: FieldName): StudioFirstF
   const cellCm = cellSizeFor(d.enclosure.width, d.enclosure.height, false);
   const grid = computeFields(d, { cellCm, addMonths: 0 });
   const thresholds = defaultThresholds(field, grid);
-  return { field, cellCm, thresholds, bands: compact(contourBands(grid, field, thresholds)) };
+  const bands = compact(contourBands(grid, field, thresholds));
+  // Nothing reads the grid after its bands are traced: the next first field on this thread is computed
+  // into its buffer.
+  recycleFields(grid.uvb.buffer);
+  return { field, cellCm, thresholds, bands };
 }
