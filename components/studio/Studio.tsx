@@ -228,6 +228,11 @@ function StudioEditor({
   }, [sim.assessment, highlightId]);
   const highlight = highlighted?.shape ?? null;
   const basking = sim.assessment?.findings.find((f) => f.id === 'shared-basking');
+  const zones = basking?.basking;
+  const markKinds = useMemo(
+    () => (zones ? (['uv', 'heat', 'both'] as const).filter((k) => zones[k].length > 0) : []),
+    [zones],
+  );
   // A climbing species holds on to every mesh: each is marked with the lamps that make it a risk.
   const climbs = species.find((s) => s.id === speciesId)?.climbs === true;
   const designNow = useStudio(store, (s) => s.history.present);
@@ -287,7 +292,7 @@ function StudioEditor({
             <ObjectSummary id={summaryId} highlight={highlighted} basking={basking} meshRisks={meshRisks} />
             {/* Under an open sheet the canvas is short: the Fields tab has the legend then. */}
             {fieldsVisible && !(panelOpen && !wide) && (
-              <CanvasLegend field={field} temp={tempUnit} legend={legend} />
+              <CanvasLegend field={field} temp={tempUnit} legend={legend} marks={markKinds} />
             )}
             <ActionsMenu
               viewOnlyNote={viewing && !viewOnly ? 'View only: turn on Edit to change it.' : 'View only.'}

@@ -23,6 +23,15 @@ export function lampExtent(l: LampObject): { x1: number; x2: number } {
  * A new T5 tube resting on the lid: the most common UVB set-up, a neutral starting point. In a
  * narrow enclosure the tube is shortened to fit (about three quarters of the width).
  */
+/**
+ * A lamp's name with its wattage, as its canvas label reads: "Basking tube · 24 W", or the name alone
+ * when it already states that wattage ("Ceramic heat emitter, 100 W").
+ */
+export function nameWithWatts(name: string, watts: number): string {
+  const stated = new RegExp(`(^|[^\\d.])${String(watts).replace('.', '\\.')}\\s*W\\b`).test(name);
+  return stated ? name : `${name} · ${watts} W`;
+}
+
 export function defaultLamp(id: string, x: number, y: number, enclosureWidth = Infinity): LampObject {
   const length = Math.min(TUBE_LENGTH_CM, Math.max(10, Math.round(enclosureWidth * 0.75)));
   return { type: 'lamp', id, tech: 't5', form: 'tube', x, y, length, ageMonths: 0 };

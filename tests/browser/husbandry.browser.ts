@@ -199,6 +199,10 @@ describe('husbandry verdicts in the studio and on a share', () => {
         .toBe(
           'UV and heat apart: no spot gets both. The UV range falls around 40 cm from the left, the basking heat around 150 cm.',
         );
+      // The legend keys both marks by colour (their labels on the canvas may be left out where crowded).
+      await expect
+        .poll(() => page.getByTestId('mark-key').locator('li').allTextContents(), eventually)
+        .toEqual(['UV range', 'Basking heat']);
       await screenshot(page, 'husbandry-split-desktop');
       await phoneCheck(page);
       await shared.scrollIntoViewIfNeeded();

@@ -3,20 +3,16 @@
 // temperature is met, and where both are (the shared basking spot); and, for a climbing species, every
 // mesh it can hang from. The split between a UV spot and a hot spot is then visible at a glance.
 import { Group, Label, Line, Tag, Text } from 'react-konva';
-import { designToStage, type Camera, type Rect } from '../geometry/camera';
+import { designToStage, type Camera, type Rect, type Viewport } from '../geometry/camera';
 import type { Design } from '../state/types';
 import type { Finding, Segment } from '../fields/engineTypes';
-import { C } from './colors';
+import { BASKING_MARKS, C } from './colors';
 import { measureText } from './measure-text';
 import { meshLabel, stackMarkLabels } from '../geometry/husbandry';
 import type { LengthUnit } from '@/shared/units';
 import type { MeshRisk } from '@/simulation';
 
-const MARKS = {
-  uv: { colour: C.sky600, lift: 7, label: 'UV range' },
-  heat: { colour: C.ember500, lift: 13, label: 'Basking heat' },
-  both: { colour: C.moss600, lift: 19, label: 'UV + heat' },
-} as const;
+const MARKS = BASKING_MARKS;
 
 const LABEL_STYLE = { fontSize: 11, fontStyle: 'bold', padding: 2 } as const;
 
@@ -37,39 +33,53 @@ function Run({ cam, seg, kind }: { cam: Camera; seg: Segment; kind: keyof typeof
 
 /**
  * One label for each kind of mark, at the start of its first run, stacked so that none covers another
- * (the three marks lie a few pixels apart over the same surface) or a lamp's label, each on a light tag
- * so it reads over the field's colours.
+ * (the three marks lie a few pixels apart over the same surface), a lamp's label or a probe's readout,
+ * each on a light tag so it reads over the field's colours.
  */
 function RunLabels({
   cam,
   zones,
   avoid,
+  viewport,
 }: {
   cam: Camera;
   zones: NonNullable<Finding['basking']>;
   avoid: readonly { rect: Rect }[];
+  viewport: Viewport;
 }) {
   const kinds = (['uv', 'heat', 'both'] as const).filter((k) => zones[k].length > 0);
+  // The canvas legend (CanvasLegend) keys the same kinds, in the same order.
   const boxes = kinds.map((kind) => {
     const seg = zones[kind][0]!;
     const a = designToStage(cam, { x: seg.x1, y: seg.y1 });
     const b = designToStage(cam, { x: seg.x2, y: seg.y2 });
     const size = measureText(MARKS[kind].label, LABEL_STYLE);
     const y = Math.min(a.y, b.y) - MARKS[kind].lift - size.height - 2;
-    return { x: Math.min(a.x, b.x), y, belowY: Math.max(a.y, b.y) + 4, ...size };
+    const [left, right] = a.x <= b.x ? [a, b] : [b, a];
+    // Level with the mark's own line, just past either end of its run.
+    const besideY = (p: { y: number }) => p.y - MARKS[kind].lift - size.height / 2;
+    const beside = [
+      { x: right.x + 4, y: besideY(right) },
+      { x: left.x - size.width - 4, y: besideY(left) },
+    ];
+    return { x: left.x, y, belowY: Math.max(a.y, b.y) + 4, beside, ...size };
   });
-  const ys = stackMarkLabels(
+  const at = stackMarkLabels(
     boxes,
     avoid.map((l) => l.rect),
+    viewport,
   );
   return (
     <>
-      {kinds.map((kind, i) => (
-        <Label key={kind} x={boxes[i]!.x} y={ys[i]!}>
-          <Tag fill={C.white} opacity={0.8} cornerRadius={2} />
-          <Text text={MARKS[kind].label} {...LABEL_STYLE} fill={MARKS[kind].colour} />
-        </Label>
-      ))}
+      {kinds.map((kind, i) => {
+        const p = at[i];
+        return p ? (
+          <Label key={kind} x={p.x} y={p.y}>
+            <Tag fill={C.white} opacity={0.8} cornerRadius={2} />
+            <Text text={MARKS[kind].label} {...LABEL_STYLE} fill={MARKS[kind].colour} />
+          </Label>
+        ) : null;
+      })}
     </>
   );
 }
@@ -99,12 +109,14 @@ export function HusbandryLayer({
   meshRisks,
   unit,
   avoid,
+  viewport,
 }: {
   cam: Camera;
   design: Design;
   basking: Finding | undefined;
-  /** The lamps' labels as placed: the marks' labels keep clear of them. */
+  /** The lamps' labels and the probes' readouts as placed: the marks' labels keep clear of them. */
   avoid: readonly { rect: Rect }[];
+  viewport: Viewport;
   /** For a climbing species: each mesh it can hang from and the lamps near it; null otherwise. */
   meshRisks: MeshRisk[] | null;
   unit: LengthUnit;
@@ -118,7 +130,7 @@ export function HusbandryLayer({
         (['uv', 'heat', 'both'] as const).map((kind) =>
           zones[kind].map((seg, i) => <Run key={`${kind}${i}`} cam={cam} seg={seg} kind={kind} />),
         )}
-      {zones && <RunLabels cam={cam} zones={zones} avoid={avoid} />}
+      {zones && <RunLabels cam={cam} zones={zones} avoid={avoid} viewport={viewport} />}
       {apart && (
         <Group>
           <Line points={apart.points} stroke={C.ember700} strokeWidth={2} dash={[8, 6]} />

@@ -1,6 +1,7 @@
 'use client';
 // Everything drawn over the objects: selection, handles, snap guides, marquee, ruler,
 // pinned probes with their readings, and a finding's location.
+import { useMemo } from 'react';
 import { Circle, Group, Label, Line, Rect, Tag, Text } from 'react-konva';
 import {
   designToStage,
@@ -15,6 +16,7 @@ import { formatNumber, formatTemp, rulerText, type LengthUnit, type TempUnit } f
 import type { Reading } from '../fields/sample';
 import type { Design, DesignObject, ProbePoint } from '../state/types';
 import { C, HIGHLIGHT, SELECT } from './colors';
+import { measureText } from './measure-text';
 
 export interface HighlightShape {
   segments: { x1: number; y1: number; x2: number; y2: number }[];
@@ -116,6 +118,9 @@ export function MarqueeLayer({ cam, rect }: { cam: Camera; rect: DRect | null })
   );
 }
 
+/** How a readout's text is set (measured with the same style, to keep it inside the view). */
+const TIP_STYLE = { fontSize: 11, padding: 5, lineHeight: 1.3 } as const;
+
 function Tip({ x, y, text, tone = 'dark' }: { x: number; y: number; text: string; tone?: 'dark' | 'light' }) {
   return (
     <Label x={x} y={y} listening={false}>
@@ -125,7 +130,7 @@ function Tip({ x, y, text, tone = 'dark' }: { x: number; y: number; text: string
         cornerRadius={4}
         stroke={tone === 'dark' ? undefined : C.basalt300}
       />
-      <Text text={text} fontSize={11} padding={5} fill={tone === 'dark' ? C.white : C.ink} lineHeight={1.3} />
+      <Text text={text} {...TIP_STYLE} fill={tone === 'dark' ? C.white : C.ink} />
     </Label>
   );
 }
@@ -156,41 +161,49 @@ export function readingText(r: Reading, temp: TempUnit): string {
   return `UVI ${formatNumber(r.uvi, 2)} · UVB ${formatNumber(r.uvb, 0)} µW/cm² · ${formatTemp(r.tempC, temp)}`;
 }
 
-/** Rough width of a tip's text (11 px sans: about 6 px a character) to keep it inside the view. */
-function tipWidth(text: string): number {
-  return Math.max(...text.split('\n').map((l) => l.length)) * 6 + 12;
+/** A probe's pin and readout as drawn (stage px): the readout is kept clear of by the marks' labels. */
+export interface PlacedProbeTip {
+  id: string;
+  pin: Point;
+  text: string;
+  rect: DRect;
 }
 
-export function ProbePins({
-  cam,
-  probes,
-  readings,
-  selection,
-  temp,
-  viewport,
-}: {
-  cam: Camera;
-  probes: ProbePoint[];
-  readings: Map<string, Reading>;
-  selection: string[];
-  temp: TempUnit;
-  viewport: Viewport;
-}) {
+/**
+ * Every probe's readout placed, once a frame: to the right of its pin, or to the left near the view's
+ * right edge. Drawn by ProbePins, and kept clear of by the basking marks' labels (HusbandryLayer).
+ */
+export function useProbeTips(
+  cam: Camera,
+  probes: readonly ProbePoint[],
+  readings: Map<string, Reading>,
+  temp: TempUnit,
+  viewport: Viewport,
+): PlacedProbeTip[] {
+  return useMemo(
+    () =>
+      probes.map((p, i) => {
+        const pin = designToStage(cam, p);
+        const r = readings.get(p.id);
+        const text = `${p.label ?? `Probe ${i + 1}`}${r ? `\n${readingText(r, temp)}` : '\ncomputing…'}`;
+        const size = measureText(text, TIP_STYLE);
+        const x = pin.x + 10 + size.width > viewport.width ? pin.x - 10 - size.width : pin.x + 10;
+        return { id: p.id, pin, text, rect: { x, y: pin.y - 24, ...size } };
+      }),
+    [cam, probes, readings, temp, viewport],
+  );
+}
+
+export function ProbePins({ tips, selection }: { tips: readonly PlacedProbeTip[]; selection: string[] }) {
   return (
     <Group listening={false}>
-      {probes.map((p, i) => {
-        const s = designToStage(cam, p);
-        const r = readings.get(p.id);
-        const selected = selection.includes(p.id);
-        const text = `${p.label ?? `Probe ${i + 1}`}${r ? `\n${readingText(r, temp)}` : '\ncomputing…'}`;
-        const w = tipWidth(text);
-        // Flip the label to the left of the pin near the right edge.
-        const tx = s.x + 10 + w > viewport.width ? s.x - 10 - w : s.x + 10;
+      {tips.map((t) => {
+        const selected = selection.includes(t.id);
         return (
-          <Group key={p.id}>
+          <Group key={t.id}>
             <Rect
-              x={s.x}
-              y={s.y - 6}
+              x={t.pin.x}
+              y={t.pin.y - 6}
               width={8.5}
               height={8.5}
               rotation={45}
@@ -198,7 +211,7 @@ export function ProbePins({
               stroke={C.ink}
               strokeWidth={1.5}
             />
-            <Tip x={tx} y={s.y - 24} tone="light" text={text} />
+            <Tip x={t.rect.x} y={t.rect.y} tone="light" text={t.text} />
           </Group>
         );
       })}
@@ -219,7 +232,7 @@ export function PointerReadout({
 }) {
   if (!reading) return null;
   const text = `Estimate at pointer\n${readingText(reading, temp)}`;
-  const w = tipWidth(text);
+  const w = measureText(text, TIP_STYLE).width;
   const x = at.x + 14 + w > viewport.width ? at.x - 14 - w : at.x + 14;
   const y = Math.max(at.y - 44, 26);
   return <Tip x={x} y={y} text={text} />;

@@ -19,6 +19,7 @@ import * as A from '../state/actions';
 import { isPlaceTool, type PlaceTool } from '../state/session';
 import type { StudioStore } from '../state/store';
 import type { Atom } from '../state/atom';
+import type { ProbePoint } from '../state/types';
 import { useAtom, useStudio } from '../hooks/useStudio';
 import { sampleAll, type Reading } from '../fields/sample';
 import type { FieldGrid } from '@/simulation';
@@ -37,6 +38,7 @@ import {
   MarqueeLayer,
   PointerReadout,
   ProbePins,
+  useProbeTips,
   RulerLayer,
   SelectionLayer,
   type HighlightShape,
@@ -70,6 +72,9 @@ export interface CanvasProps {
   /** The chosen species climbs: each mesh it can hang from, with the lamps near it (marked). */
   meshRisks?: MeshRisk[] | null;
 }
+
+/** Shared so that a design without probes keeps one array between frames. */
+const NO_PROBES: readonly ProbePoint[] = [];
 
 function mods(
   e: { shiftKey: boolean; ctrlKey: boolean; metaKey: boolean; altKey: boolean; pointerType?: string },
@@ -121,6 +126,15 @@ export default function StudioCanvas({
   const design = state.history.present;
   const cam = session.camera;
   const lampLabels = useLampLabels(design.objects, cam, session.viewport);
+  const probeTips = useProbeTips(
+    cam,
+    design.probes ?? NO_PROBES,
+    probeReadings,
+    session.tempUnit,
+    session.viewport,
+  );
+  // The marks' labels keep clear of what else is written near a basking spot.
+  const labelled = useMemo(() => [...lampLabels, ...probeTips], [lampLabels, probeTips]);
   const [cursor, setCursor] = useState('default');
   const spaceDown = useRef(false);
   const touches = useRef(new Map<number, Point>());
@@ -388,19 +402,13 @@ export default function StudioCanvas({
             basking={basking}
             meshRisks={meshRisks}
             unit={session.lengthUnit}
-            avoid={lampLabels}
+            avoid={labelled}
+            viewport={session.viewport}
           />
           <HighlightLayer cam={cam} design={design} shape={highlight} />
           {photoShown && session.backdropAdjust && <BackdropFrame cam={cam} backdrop={photoShown} />}
           <SelectionLayer cam={cam} objects={selected} showHandles={session.tool === 'select'} />
-          <ProbePins
-            cam={cam}
-            probes={design.probes ?? []}
-            readings={probeReadings}
-            selection={session.selection}
-            temp={session.tempUnit}
-            viewport={session.viewport}
-          />
+          <ProbePins tips={probeTips} selection={session.selection} />
           <GuidesLayer cam={cam} guides={session.guides} viewport={session.viewport} />
           <MarqueeLayer cam={cam} rect={session.marquee} />
           <RulerLayer cam={cam} ruler={session.ruler} unit={session.lengthUnit} />

@@ -36,3 +36,15 @@ export const C = {
 export const SELECT = C.sky600;
 /** Highlight of a finding's location. */
 export const HIGHLIGHT = C.sand400;
+
+/**
+ * The basking marks drawn over a surface (HusbandryLayer): colour, height above the surface (px) and
+ * name, which the canvas legend repeats as a key.
+ */
+export const BASKING_MARKS = {
+  uv: { colour: C.sky600, lift: 7, label: 'UV range' },
+  heat: { colour: C.ember500, lift: 13, label: 'Basking heat' },
+  both: { colour: C.moss600, lift: 19, label: 'UV + heat' },
+} as const;
+
+export type BaskingMarkKind = keyof typeof BASKING_MARKS;

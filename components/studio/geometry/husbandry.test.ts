@@ -1,6 +1,20 @@
 import { describe, expect, it } from 'vitest';
 import type { Finding } from '../fields/engineTypes';
-import { husbandrySentences, MARK_LABEL_GAP_PX, meshLabel, stackMarkLabels } from './husbandry';
+import {
+  husbandrySentences,
+  MARK_LABEL_GAP_PX,
+  meshLabel,
+  stackMarkLabels as placeMarkLabels,
+  type MarkLabelBox,
+} from './husbandry';
+
+type Box = { x: number; y: number; width: number; height: number };
+/** The tops the labels take, null for one left out (each placed label keeps its own x here). */
+const stackMarkLabels = (boxes: MarkLabelBox[], avoid?: Box[]) => {
+  const at = placeMarkLabels(boxes, avoid);
+  at.forEach((p, i) => p && expect(p.x).toBe(boxes[i]!.x));
+  return at.map((p) => p?.y ?? null);
+};
 
 const seg = (x1: number, x2: number, y = 44) => ({ x1, y1: y, x2, y2: y });
 const basking = (uv: number[][], heat: number[][], both: number[][]): Finding => ({
@@ -66,14 +80,38 @@ describe('the basking marks’ labels', () => {
     const rect = (y: number) => ({ x: 100, y, width: 80, height: 15 });
     const overlaps = (a: { x: number; y: number; width: number; height: number }, b: typeof a) =>
       a.x < b.x + b.width && b.x < a.x + a.width && a.y < b.y + b.height && b.y < a.y + a.height;
-    for (const y of ys) expect(overlaps(rect(y), lampLabel)).toBe(false);
+    for (const y of ys) expect(overlaps(rect(y!), lampLabel)).toBe(false);
     // The same marks with the lamp's label elsewhere stack above as before.
     expect(stackMarkLabels([box(100, 400), box(100, 394)], [{ ...lampLabel, x: 400 }])).toEqual([
       400,
       400 - 15 - MARK_LABEL_GAP_PX,
     ]);
-    // Covered both ways (a label below the surface too): the spot above is kept.
+    // Covered both ways (a label below the surface too) and nowhere beside: the label is left out, and
+    // a later one is placed as if it were not there.
     const under = { x: 90, y: 424, width: 160, height: 60 };
-    expect(stackMarkLabels([box(100, 380)], [lampLabel, under])).toEqual([380]);
+    expect(stackMarkLabels([box(100, 380), box(300, 380)], [lampLabel, under])).toEqual([null, 380]);
+  });
+
+  it('go beside their line when the spots above and below are both covered (a probe’s readout below)', () => {
+    // A perch at y 420 whose label spot above is under a lamp's label and whose spot below is under a
+    // probe's readout: the label sits level with its line, past the run's right end (x 180).
+    const lampLabel = { x: 90, y: 392, width: 160, height: 14 };
+    const readout = { x: 40, y: 424, width: 150, height: 60 };
+    const beside = [
+      { x: 184, y: 408 },
+      { x: 16, y: 408 },
+    ];
+    const box = { x: 100, y: 398, width: 80, height: 15, belowY: 424, beside };
+    const view = { width: 400, height: 600 };
+    expect(placeMarkLabels([box], [lampLabel, readout], view)).toEqual([{ x: 184, y: 408 }]);
+    // The right end runs off the view: the left one is taken.
+    expect(placeMarkLabels([box], [lampLabel, readout], { width: 250, height: 600 })).toEqual([
+      { x: 16, y: 408 },
+    ]);
+    // Both beside spots covered too: left out rather than printed over a lamp's name.
+    const wide = { x: 0, y: 400, width: 400, height: 20 };
+    expect(placeMarkLabels([box], [lampLabel, readout, wide], view)).toEqual([null]);
+    // With room below, below is still preferred over beside.
+    expect(placeMarkLabels([box], [lampLabel], view)).toEqual([{ x: 100, y: 424 }]);
   });
 });

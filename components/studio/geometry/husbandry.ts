@@ -59,38 +59,53 @@ export const MARK_LABEL_GAP_PX = 2;
 export interface MarkLabelBox extends Rect {
   /** The top a label takes when it goes below its surface instead (just under the surface's line). */
   belowY: number;
+  /**
+   * Spots beside the mark's own line (past its run's ends), tried in order when the spots above and
+   * below the surface are both covered.
+   */
+  beside?: readonly { x: number; y: number }[];
 }
 
-/** Whether label `a`, moved to the top `y`, covers any of `b`. */
-const meets = (a: Rect, y: number, b: Rect) => overlapArea({ ...a, y }, b) > 0;
+/** Whether label `a`, moved to (x, y), covers any of `b`. */
+const meets = (a: Rect, x: number, y: number, b: Rect) => overlapArea({ ...a, x, y }, b) > 0;
 
 /**
- * The y of each basking-mark label, so none covers another or a lamp's label: the marks of the UV range,
- * the basking heat and both lie a few pixels apart over the same surface, so their labels, each at its
- * own mark, would print on top of one another. Taken in order; a label that meets one already placed
- * moves up above it until it meets none. Where that spot covers a label in `avoid` (the lamps' labels,
- * placed first: a lamp hanging low over a perch), the label goes below its surface instead, moving down
- * past whatever it meets there, unless that takes it three labels' height or more below the surface
- * (then it keeps the spot above). Labels apart from each other and from the lamps' labels keep their own
- * place.
+ * Where each basking-mark label goes, so none covers another or a label in `avoid`: the marks of the UV
+ * range, the basking heat and both lie a few pixels apart over the same surface, so their labels, each at
+ * its own mark, would print on top of one another. Taken in order; a label that meets one already placed
+ * moves up above it until it meets none. Where that spot covers a label in `avoid` (the lamps' labels and
+ * the probes' readouts, drawn apart: a lamp hanging low over a perch, a probe beside it), the label goes
+ * below its surface instead, moving down past whatever it meets there, unless that takes it three labels'
+ * height or more below the surface; failing that, to the first clear spot beside the mark's line
+ * (`beside`, inside `bounds` when given). A label with no clear spot is left out (null): the canvas
+ * legend names every mark by its colour, and a label printed over a lamp's name or a reading hides both.
+ * Labels apart from each other and from `avoid` keep their own place.
  */
-export function stackMarkLabels(boxes: readonly MarkLabelBox[], avoid: readonly Rect[] = []): number[] {
+export function stackMarkLabels(
+  boxes: readonly MarkLabelBox[],
+  avoid: readonly Rect[] = [],
+  bounds?: { width: number; height: number },
+): ({ x: number; y: number } | null)[] {
   const placed: Rect[] = [];
-  const hitIn = (list: readonly Rect[], b: Rect, y: number) => list.find((p) => meets(b, y, p));
+  const hitIn = (list: readonly Rect[], b: Rect, x: number, y: number) => list.find((p) => meets(b, x, y, p));
+  const inside = (b: Rect, x: number, y: number) =>
+    !bounds || (x >= 0 && y >= 0 && x + b.width <= bounds.width && y + b.height <= bounds.height);
   return boxes.map((b) => {
-    let y = b.y;
-    for (let hit = hitIn(placed, b, y); hit; hit = hitIn(placed, b, y))
-      y = hit.y - b.height - MARK_LABEL_GAP_PX;
-    if (hitIn(avoid, b, y)) {
+    let at: { x: number; y: number } | null = { x: b.x, y: b.y };
+    for (let hit = hitIn(placed, b, b.x, at.y); hit; hit = hitIn(placed, b, b.x, at.y))
+      at = { x: b.x, y: hit.y - b.height - MARK_LABEL_GAP_PX };
+    if (hitIn(avoid, b, at.x, at.y)) {
       const all = [...placed, ...avoid];
       let down = b.belowY;
-      for (let hit = hitIn(all, b, down); hit; hit = hitIn(all, b, down))
+      for (let hit = hitIn(all, b, b.x, down); hit; hit = hitIn(all, b, b.x, down))
         down = hit.y + hit.height + MARK_LABEL_GAP_PX;
-      // Pushed down past a lamp's label means the label went through it: only a clear spot near the
-      // surface is better than the one above.
-      if (down - b.belowY < 3 * (b.height + MARK_LABEL_GAP_PX)) y = down;
+      const side = (b.beside ?? []).find((s) => !hitIn(all, b, s.x, s.y) && inside(b, s.x, s.y));
+      // Pushed down past a label means the label went through it: only a clear spot near the surface
+      // will do there, and one beside the line is nearer than one far below.
+      if (down - b.belowY < 3 * (b.height + MARK_LABEL_GAP_PX)) at = { x: b.x, y: down };
+      else at = side ? { ...side } : null;
     }
-    placed.push({ ...b, y });
-    return y;
+    if (at) placed.push({ ...b, ...at });
+    return at;
   });
 }

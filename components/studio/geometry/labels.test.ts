@@ -75,6 +75,22 @@ describe('lamp label placement', () => {
     expect(p!.moved).toBe(true);
   });
 
+  it('slides a label poking out at an edge back into the view, whole', () => {
+    // A lamp in the top right corner with a long label: no spot around it fits the view (above is off
+    // the top, beside pokes out at an edge), so the label is slid in rather than cut.
+    const view = { width: 300, height: 300 };
+    const [p] = placeLabels([{ ...lamp('a', 280, 2), width: 290 }], view);
+    expect(p!.rect.x + p!.rect.width).toBeLessThanOrEqual(view.width);
+    expect(p!.rect.x).toBeGreaterThanOrEqual(0);
+    expect(p!.moved).toBe(true);
+    // A label wider than the view is left where it was.
+    const [wide] = placeLabels([{ ...lamp('b', 150, 100), width: 400 }], view);
+    expect(wide!.rect.width).toBe(400);
+    // Away from the edges nothing changes: centred above, not moved.
+    const [mid] = placeLabels([lamp('c', 150, 100)], view);
+    expect(mid!.moved).toBe(false);
+  });
+
   it('picks the spot with the least overlap when every spot collides, and is deterministic', () => {
     const reqs = Array.from({ length: 12 }, (_, i) => lamp(`x${i}`, 100 + (i % 3), 100));
     const a = placeLabels(reqs);

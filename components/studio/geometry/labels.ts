@@ -60,6 +60,16 @@ function offScreenArea(r: Rect, vp: Viewport): number {
 }
 
 /**
+ * A spot slid sideways into the view when it pokes out at the left or right edge (a lamp near the edge
+ * keeps its label whole, with a leader line back to it); a label wider than the view stays put.
+ */
+function withinWidth(r: Rect, vp: Viewport): Rect {
+  if (r.width > vp.width) return r;
+  const x = Math.min(Math.max(r.x, 0), vp.width - r.width);
+  return x === r.x ? r : { ...r, x };
+}
+
+/**
  * Places every label; the result is in the order of `requests`. Deterministic: the same lamps give
  * the same places, so labels do not jump about between frames of a drag.
  */
@@ -71,7 +81,9 @@ export function placeLabels(requests: readonly LabelRequest[], viewport?: Viewpo
   const placed: Rect[] = [];
   const out: LabelPlacement[] = new Array<LabelPlacement>(requests.length);
   for (const { r, i } of order) {
-    const candidates = labelCandidates(r);
+    const own = labelCandidates(r);
+    const first = own[0]!;
+    const candidates = viewport ? own.map((c) => withinWidth(c, viewport)) : own;
     let best = candidates[0]!;
     let bestCost = Infinity;
     for (const c of candidates) {
@@ -87,7 +99,7 @@ export function placeLabels(requests: readonly LabelRequest[], viewport?: Viewpo
       }
     }
     placed.push(best);
-    out[i] = { id: r.id, rect: best, moved: best !== candidates[0] };
+    out[i] = { id: r.id, rect: best, moved: best.x !== first.x || best.y !== first.y };
   }
   return out;
 }

@@ -1,7 +1,7 @@
 // A lamp on the canvas: a tube (a rounded bar with end caps and a core line) or a bulb (a disc under a
 // cap, with its beam's edges dashed when it is a spot); its label and the body the label goes around.
 import { Circle, Group, Line, Rect } from 'react-konva';
-import { BULB_RADIUS_CM, lampExtent, TUBE_THICKNESS_CM } from '@/shared/object-kinds/lamp';
+import { BULB_RADIUS_CM, lampExtent, nameWithWatts, TUBE_THICKNESS_CM } from '@/shared/object-kinds/lamp';
 import { lampLook } from '@/shared/lamp-look';
 import { LAMP_TECHS } from '@/simulation';
 import { designToStage, type Camera, type Rect as Rect2 } from '../geometry/camera';
@@ -28,7 +28,7 @@ export function lampLabel(o: LampObject): { text: string; calibrated: boolean } 
   const watts = o.watts ?? LAMP_TECHS[o.tech].watts;
   const calibrated = calibrationLabel(o);
   return {
-    text: `${o.name ?? TECH_SHORT[o.tech]} · ${watts} W${calibrated ? `\n✓ ${calibrated}` : ''}`,
+    text: `${nameWithWatts(o.name ?? TECH_SHORT[o.tech], watts)}${calibrated ? `\n✓ ${calibrated}` : ''}`,
     calibrated: calibrated !== null,
   };
 }

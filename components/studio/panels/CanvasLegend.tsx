@@ -1,20 +1,24 @@
 'use client';
 // A compact legend over the canvas, so the colours can be read whichever panel is open. A single
 // colour bar in the bottom-right corner, short enough to sit in the room the fitted view leaves under
-// the enclosure instead of over the design.
+// the enclosure instead of over the design, and a key to the basking marks when they are drawn.
 import { fieldHeading } from '@/shared/field-scale';
 import type { LegendEntry } from '../fields/legend';
 import type { TempUnit } from '@/shared/units';
 import type { FieldView } from '../state/session';
+import { BASKING_MARKS, type BaskingMarkKind } from '../canvas/colors';
 
 export function CanvasLegend({
   field,
   temp,
   legend,
+  marks = [],
 }: {
   field: FieldView;
   temp: TempUnit;
   legend: LegendEntry[];
+  /** The basking marks drawn on the canvas: named here by colour, as their own labels may not fit. */
+  marks?: readonly BaskingMarkKind[];
 }) {
   if (legend.length === 0) return null;
   return (
@@ -35,6 +39,22 @@ export function CanvasLegend({
           </li>
         ))}
       </ol>
+      {marks.length > 0 && (
+        <ul
+          className="mt-1 flex flex-wrap gap-x-2.5 gap-y-0.5 text-[0.65rem] leading-tight"
+          data-testid="mark-key"
+        >
+          {marks.map((k) => (
+            <li key={k} className="flex items-center gap-1 whitespace-nowrap">
+              <span
+                className="inline-block h-1 w-3.5 rounded-full"
+                style={{ background: BASKING_MARKS[k].colour }}
+              />
+              {BASKING_MARKS[k].label}
+            </li>
+          ))}
+        </ul>
+      )}
     </div>
   );
 }
