@@ -1,4 +1,5 @@
 import { scaleBand, scaleLinear } from 'd3-scale';
+import { LINE_HEIGHT, layoutBarLabels } from './bar-labels';
 
 /**
  * A plain SVG bar chart with a table of the same figures beside it (for those who prefer numbers, and
@@ -28,12 +29,24 @@ export function BarChart({
   noteHeader?: string;
 }) {
   const W = 640;
-  const H = 260;
-  const M = { left: 48, right: 12, top: 12, bottom: bars.length > 8 ? 64 : 44 };
+  const PLOT = 204;
+  const FONT = 12;
+  const left = 48;
+  const right = 12;
   const x = scaleBand()
     .domain(bars.map((b) => b.key))
-    .range([M.left, W - M.right])
+    .range([left, W - right])
     .padding(0.2);
+  // Many bars (weeks) slant their labels and name every few; few bars (technologies, age bands) keep
+  // theirs level, wrapped onto lines when a name is wider than its bar's slot.
+  const labels = layoutBarLabels(
+    bars.map((b) => b.label),
+    x.step(),
+    FONT,
+    { forceSlant: bars.length > 8 },
+  );
+  const M = { left, right, top: 12, bottom: labels.bottom };
+  const H = M.top + PLOT + M.bottom;
   const max = share ? 1 : Math.max(1, ...bars.map((b) => b.value));
   const y = scaleLinear()
     .domain([0, max])
@@ -43,7 +56,7 @@ export function BarChart({
   const every = Math.ceil(bars.length / 13);
   return (
     <div className="grid gap-4 lg:grid-cols-[3fr_2fr]" data-testid={id}>
-      <figure className="rounded-lg border border-basalt-200 bg-white p-3">
+      <figure className="self-start rounded-lg border border-basalt-200 bg-white p-3">
         <svg
           viewBox={`0 0 ${W} ${H}`}
           className="h-auto w-full"
@@ -73,20 +86,14 @@ export function BarChart({
                 <title>{`${b.label}: ${fmt(b.value)}${b.note ? ` (${b.note})` : ''}`}</title>
               </rect>
               {i % every === 0 && (
-                <text
+                <BarLabel
+                  lines={labels.lines[i]!}
+                  full={b.label}
                   x={(x(b.key) ?? 0) + x.bandwidth() / 2}
                   y={H - M.bottom + 14}
-                  textAnchor={bars.length > 8 ? 'end' : 'middle'}
-                  transform={
-                    bars.length > 8
-                      ? `rotate(-40 ${(x(b.key) ?? 0) + x.bandwidth() / 2} ${H - M.bottom + 14})`
-                      : undefined
-                  }
-                  fontSize="12"
-                  fill="#4a5143"
-                >
-                  {b.label}
-                </text>
+                  slanted={labels.mode === 'slanted'}
+                  fontSize={FONT}
+                />
               )}
             </g>
           ))}
@@ -123,5 +130,43 @@ export function BarChart({
         </tbody>
       </table>
     </div>
+  );
+}
+
+/** One bar's label: level and centred (on one or more lines), or slanted to end under its bar. */
+function BarLabel({
+  lines,
+  full,
+  x,
+  y,
+  slanted,
+  fontSize,
+}: {
+  lines: string[];
+  full: string;
+  x: number;
+  y: number;
+  slanted: boolean;
+  fontSize: number;
+}) {
+  const shortened = lines.length === 1 && lines[0] !== full;
+  return (
+    <text
+      x={x}
+      y={y}
+      textAnchor={slanted ? 'end' : 'middle'}
+      transform={slanted ? `rotate(-40 ${x} ${y})` : undefined}
+      fontSize={fontSize}
+      fill="#4a5143"
+    >
+      {shortened && <title>{full}</title>}
+      {lines.length === 1
+        ? lines[0]
+        : lines.map((line, k) => (
+            <tspan key={k} x={x} dy={k === 0 ? 0 : `${LINE_HEIGHT}em`}>
+              {line}
+            </tspan>
+          ))}
+    </text>
   );
 }

@@ -3,16 +3,20 @@
 import Link from '@/components/ui/Link';
 import { usePathname } from 'next/navigation';
 import { focusRing } from '@/components/ui/styles';
+import { activeNavHref } from './nav-active';
 
 export type NavItem = { href: string; label: string };
 
 /** The areas of the app; the current one is marked for sight and for screen readers. */
 export function AppNav({ items }: { items: NavItem[] }) {
-  const pathname = usePathname();
+  const current = activeNavHref(
+    items.map((i) => i.href),
+    usePathname(),
+  );
   return (
     <nav aria-label="Main" className="-mb-px flex gap-1 overflow-x-auto">
       {items.map((item) => {
-        const active = pathname === item.href || pathname.startsWith(`${item.href}/`);
+        const active = item.href === current;
         return (
           <Link
             key={item.href}
