@@ -1,7 +1,7 @@
 'use client';
 
 import { Table, type TableColumn } from '@/components/ui/Table';
-import { LocalTime } from './LocalTime';
+import { LocalTime } from '@/components/ui/LocalTime';
 
 /** Rows as the jobs page hands them over: plain text and moments, worked out on the server. */
 export type FailingRow = {
@@ -56,13 +56,13 @@ const failingColumns = compact<FailingRow>([
     id: 'last',
     header: 'Last failed',
     className: when,
-    cell: ({ row }) => <LocalTime iso={row.original.lastAt} />,
+    cell: ({ row }) => <LocalTime value={row.original.lastAt} />,
   },
   {
     id: 'next',
     header: 'Next attempt',
     className: when,
-    cell: ({ row: { original: f } }) => (f.nextAt ? <LocalTime iso={f.nextAt} /> : f.givenUp),
+    cell: ({ row: { original: f } }) => (f.nextAt ? <LocalTime value={f.nextAt} /> : f.givenUp),
   },
 ]);
 
@@ -81,7 +81,7 @@ const runColumns = compact<RunRow>([
     id: 'started',
     header: 'Started',
     className: when,
-    cell: ({ row }) => <LocalTime iso={row.original.startedAt} />,
+    cell: ({ row }) => <LocalTime value={row.original.startedAt} />,
   },
   { id: 'took', header: 'Took', className: when, cell: ({ row }) => row.original.took },
   {

@@ -3,6 +3,7 @@ import { FailingTable, RunsTable } from '@/components/jobs/JobTables';
 import { EmptyState } from '@/components/ui/EmptyState';
 import { Notice } from '@/components/ui/Notice';
 import { PageHeader } from '@/components/ui/PageHeader';
+import { countPhrase } from '@/lib/jobs/count-text';
 import { jobsOverview, type RunView } from '@/lib/jobs/overview';
 import { jobTitle } from '@/lib/jobs/registry';
 import { requireMembershipThatMay } from '@/lib/session';
@@ -28,7 +29,7 @@ function duration(ms: number | null): string {
 function countsText(run: RunView): string {
   const entries = Object.entries(run.counts);
   if (entries.length === 0) return run.outcome === 'running' ? '—' : 'nothing for your organisation';
-  return entries.map(([name, n]) => `${n.toLocaleString('en-GB')} ${name}`).join(', ');
+  return entries.map(([name, n]) => countPhrase(name, n)).join(', ');
 }
 
 /**
