@@ -1,7 +1,8 @@
 'use client';
 
 import { Table, type TableColumn } from '@/components/ui/Table';
-import type { DesignDiff, FieldChange, ObjectChange } from '@/shared/designs/diff';
+import type { DesignDiff, ObjectChange } from '@/shared/designs/diff';
+import { changeText, offsetText } from './change-words';
 
 const KIND: Record<ObjectChange['kind'], { label: string; className: string }> = {
   added: { label: 'Added', className: 'bg-moss-100 text-moss-800' },
@@ -19,53 +20,6 @@ const TYPE_LABEL: Record<string, string> = {
   hide: 'Hide',
   foliage: 'Foliage',
 };
-
-/** Design-file fields in words, with their units (as a design stores them: cm, °C, months). */
-const FIELD: Record<string, { label: string; unit?: string; percent?: boolean }> = {
-  width: { label: 'width', unit: 'cm' },
-  height: { label: 'height', unit: 'cm' },
-  depth: { label: 'depth', unit: 'cm' },
-  roomTempC: { label: 'room temperature', unit: '°C' },
-  sectionZ: { label: 'side view from the front', unit: 'cm' },
-  x: { label: 'x', unit: 'cm' },
-  y: { label: 'y', unit: 'cm' },
-  z: { label: 'depth from the front', unit: 'cm' },
-  length: { label: 'length', unit: 'cm' },
-  thickness: { label: 'thickness', unit: 'cm' },
-  uvbAt30: { label: 'UVB at 30 cm', unit: 'µW/cm²' },
-  uviPerUvb: { label: 'UV Index per µW/cm²' },
-  reflectorGain: { label: 'reflector gain', unit: '×' },
-  beamDeg: { label: 'beam', unit: '°' },
-  watts: { label: 'power', unit: 'W' },
-  ageMonths: { label: 'age', unit: 'months' },
-  uvbTransmission: { label: 'UVB let through', percent: true },
-  tech: { label: 'technology' },
-  form: { label: 'form' },
-  name: { label: 'name' },
-};
-
-const show = (v: unknown, field?: string): string => {
-  if (v === undefined) return 'not set (default)';
-  const f = field ? FIELD[field] : undefined;
-  if (typeof v === 'number') {
-    if (f?.percent) return `${Number((v * 100).toFixed(1))} %`;
-    const n = Number(v.toFixed(2)).toString();
-    return f?.unit ? `${n} ${f.unit}` : n;
-  }
-  if (typeof v === 'string') return v;
-  return JSON.stringify(v);
-};
-
-function offsetText(dx: number, dy: number): string {
-  const parts: string[] = [];
-  const cm = (v: number) => `${Number(Math.abs(v).toFixed(1))} cm`;
-  if (dx) parts.push(`${cm(dx)} ${dx > 0 ? 'right' : 'left'}`);
-  if (dy) parts.push(`${cm(dy)} ${dy > 0 ? 'up' : 'down'}`);
-  return parts.join(', ');
-}
-
-const changeText = (c: FieldChange) =>
-  `${FIELD[c.field]?.label ?? c.field}: ${show(c.a, c.field)} → ${show(c.b, c.field)}`;
 
 function nameOf(o: ObjectChange): string {
   const name = 'object' in o ? (typeof o.object.name === 'string' ? o.object.name : undefined) : o.name;
