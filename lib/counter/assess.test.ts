@@ -133,6 +133,55 @@ describe('the counter verdict, for a species at a basking distance', () => {
     expect(verdict.basking!.valueNow).toBeCloseTo(2.5, 6);
   });
 
+  describe('judges the replacement at the same spot', () => {
+    // Ferguson et al. 2010 (Zoo Biology 29:317–334): zone 3's basking range is UV Index 2.9–7.4, zone 4's
+    // 4.5–9.5. New-lamp outputs are the invented test type's catalogue figures.
+    const typed = (over: Partial<LampFacts['type']>) =>
+      tube(SIX_MONTHS, { baskingDistanceCm: 30, type: { ...tube(SIX_MONTHS).type, ...over } });
+
+    it('says nothing more when a new lamp of the type would meet the need there', () => {
+      // The test type new: 100 µW/cm² × 0.03 = UVI 3.0 at 30 cm, above 2.9 and below 7.4.
+      const { verdict } = assessAtHome([uvi(2.5)]);
+      expect(verdict.reasons.join(' ')).not.toMatch(/new lamp of this type would/);
+      expect(verdict.replacement).toBeNull();
+      expect(verdict.headline).not.toMatch(/closer/);
+    });
+
+    it('tells the customer when even a new lamp would fall short there (a weaker type: UVI 2.0 new at 30 cm)', () => {
+      const { verdict } = assess([uvi(1.6)], { lamp: typed({ uviPerUvb: 0.02 }), species: ZONE3 });
+      expect(verdict.kind).toBe('replace');
+      expect(verdict.headline).toMatch(/bring the basking spot closer: even a new lamp/);
+      expect(verdict.reasons.join(' ')).toMatch(
+        /new lamp of this type would give about UVI 2 at the basking spot \(30 cm/,
+      );
+    });
+
+    it('does the same in µW/cm²: 100 new at 30 cm against zone 4’s UVI 4.5 ÷ 0.03 = 150', () => {
+      const zone4 = { name: 'Invented forest-edge lizard', uvZone: 4, uvbTargetUw: null };
+      const { verdict } = assess([reading(90)], { lamp: typed({}), species: zone4 });
+      expect(verdict.kind).toBe('replace');
+      expect(verdict.basking!.threshold).toBeCloseTo(150, 6);
+      expect(verdict.reasons.join(' ')).toMatch(
+        /about 100 µW\/cm² at the basking spot .*still below the need/,
+      );
+    });
+
+    it('warns when a new lamp would give more than the top of the zone’s range there (UVI 9 against 7.4)', () => {
+      // A strong type (UVI 9 new at 30 cm) that has faded to UVI 2.5: the spot is under the need today,
+      // and a new lamp at the same height would give about UVI 9.
+      const { verdict } = assess([uvi(2.5)], { lamp: typed({ uvbAt30: 300 }), species: ZONE3 });
+      expect(verdict.kind).toBe('replace');
+      const said = verdict.reasons.join(' ');
+      expect(said).toMatch(
+        /about UVI 9 at the basking spot .*above the top of the zone’s basking range \(UVI 7\.4\)/,
+      );
+      expect(said).toMatch(/farther from the basking spot/);
+      expect(verdict.headline).not.toMatch(/closer/);
+      // The slip the customer takes home carries it (lib/counter/slip-content.ts).
+      expect(verdict.replacement).toMatch(/farther from the basking spot/);
+    });
+  });
+
   it('replaces a lamp above the need only within the meter’s uncertainty (3.2 × 0.85 = 2.72)', () => {
     const { verdict } = assessAtHome([uvi(3.2)]);
     expect(verdict.kind).toBe('replace');

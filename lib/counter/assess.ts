@@ -69,6 +69,8 @@ export type CounterVerdict = {
   fallsBelowMonth: string | null;
   fallsBelowEarliestMonth: string | null;
   reasons: string[];
+  /** What a new lamp of the type would give at the basking spot, when that needs saying before it is fitted. */
+  replacement: string | null;
   /** What the figures rest on and how sure they are. */
   uncertainty: string[];
   cautions: string[];
@@ -101,6 +103,46 @@ export const COUNTER_CAUTIONS: string[] = [
   'Follow the lamp maker’s instructions, and ask a reptile-experienced vet about the animal’s own UV needs.',
 ];
 
+/**
+ * What a new lamp of the same type would give at the customer's basking spot (the catalogue's new output
+ * at 30 cm brought to the spot the way today's reading was): a replacement that still falls short of the
+ * need does not help the animal by itself, and one above the top of the zone's range is more UV than the
+ * zone's animals meet (UV zones of Ferguson et al. 2010), so the customer is told before fitting it.
+ */
+export function newLampAtSpot(
+  b: { valueNow: number; threshold: number; ceiling?: number; ceilingUvi?: number; distanceCm: number },
+  nowAt30: number,
+  newAt30: number,
+  unit: ReadingUnit,
+): { value: number | null; tooWeak: boolean; tooStrong: boolean; reasons: string[] } {
+  if (!(nowAt30 > 0) || !(newAt30 > 0)) return { value: null, tooWeak: false, tooStrong: false, reasons: [] };
+  const value = newAt30 * (b.valueNow / nowAt30);
+  const at = `at the basking spot (${round1(b.distanceCm)} cm from the lamp)`;
+  if (value < b.threshold) {
+    return {
+      value,
+      tooWeak: true,
+      tooStrong: false,
+      reasons: [
+        `A new lamp of this type would give about ${fmt(value, unit)} ${at}: still below the need. Bring the basking spot closer to the lamp, or choose a stronger lamp type, and measure again before the animal uses it.`,
+      ],
+    };
+  }
+  if (b.ceiling !== undefined && Number.isFinite(b.ceiling) && value > b.ceiling) {
+    return {
+      value,
+      tooWeak: false,
+      tooStrong: true,
+      reasons: [
+        `A new lamp of this type would give about ${fmt(value, unit)} ${at}, above the top of the zone’s basking range (UVI ${b.ceilingUvi ?? '—'}${unit === 'uvb' ? `, about ${fmt(b.ceiling, unit)}` : ''}): fit the new lamp farther from the basking spot, or lower the spot, and measure before the animal uses it.`,
+      ],
+    };
+  }
+  return { value, tooWeak: false, tooStrong: false, reasons: [] };
+}
+
+const round1 = (v: number) => Math.round(v * 10) / 10;
+
 export function assessCounterLamp(input: CounterInput): CounterAnswer {
   const { lamp, readings, species, today } = input;
   const outlook = lampOutlook(lamp, readings, species, today);
@@ -114,7 +156,13 @@ export function counterVerdict(input: CounterInput, outlook: Outlook): CounterVe
   if (input.ageEstimated)
     uncertainty.push('The lamp’s age was given in months, so its dates are approximate.');
   uncertainty.push(outlook.fit.note, outlook.ageing);
-  const base = { fallsBelowMonth: null, fallsBelowEarliestMonth: null, cautions, uncertainty };
+  const base = {
+    fallsBelowMonth: null,
+    fallsBelowEarliestMonth: null,
+    cautions,
+    uncertainty,
+    replacement: null,
+  };
 
   if (!(lamp.type.uvbAt30 > 0)) {
     return {
@@ -201,13 +249,21 @@ export function counterVerdict(input: CounterInput, outlook: Outlook): CounterVe
       output,
       basking,
     };
+    // A replacement is judged where the animal basks too: a new lamp of the type, at the same spot.
+    const fresh = newLampAtSpot(b, nowAt30, newAt30, unit);
     if (b.valueNow < b.threshold) {
       return {
         ...withMonths,
         kind: 'replace',
-        headline: 'Replace it: the basking spot at home gets less UV than the species needs.',
+        headline: fresh.tooWeak
+          ? 'Replace it, and bring the basking spot closer: even a new lamp of this type would give less UV there than the species needs.'
+          : 'Replace it: the basking spot at home gets less UV than the species needs.',
         testAgainOn: null,
-        reasons: [`About ${fmt(b.valueNow, unit)} at the basking spot today; the need is ${b.needLabel}.`],
+        replacement: fresh.reasons[0] ?? null,
+        reasons: [
+          `About ${fmt(b.valueNow, unit)} at the basking spot today; the need is ${b.needLabel}.`,
+          ...fresh.reasons,
+        ],
       };
     }
     if (basking.low < b.threshold || (outlook.fallsBelowOn && outlook.fallsBelowOn <= soon)) {
@@ -217,8 +273,10 @@ export function counterVerdict(input: CounterInput, outlook: Outlook): CounterVe
         headline:
           'Replace it: the basking spot is at or within the meter’s uncertainty of the species’ need.',
         testAgainOn: null,
+        replacement: fresh.reasons[0] ?? null,
         reasons: [
           `About ${fmt(b.valueNow, unit)} at the basking spot today (as low as ${fmt(basking.low, unit)} within the meter’s uncertainty); the need is ${b.needLabel}.`,
+          ...fresh.reasons,
         ],
       };
     }

@@ -55,6 +55,8 @@ export function slipContent(input: {
       'Basking spot at home',
       `about ${value(v.basking.valueNow, v.basking.unit)}; the need is ${v.basking.needLabel}`,
     ]);
+  // Said on the slip too: the customer fits the new lamp at home, away from the counter.
+  if (v.replacement) rows.push(['New lamp at the same spot', v.replacement.replace(/\.$/, '')]);
   return {
     shop: input.shop,
     contact: input.contact ?? null,

@@ -36,6 +36,13 @@ export type Need =
       label: string;
       /** Always the zone's UV Index: a µW/cm² threshold is derived from it, never taken from the sheet. */
       judgedBy: string;
+      /**
+       * The top of the zone's basking range in the same unit (UV Index, or µW/cm² through the same ratio):
+       * more than this at the basking spot is more UV than the zone's animals meet (Ferguson et al. 2010).
+       */
+      ceiling: number;
+      /** The zone's top as its UV Index, for words. */
+      ceilingUvi: number;
       /** The sheet's own µW/cm² range, shown as a shop's rule of thumb beside the verdict; never the threshold. */
       ruleOfThumb: string | null;
       /** The meter caveat (µW/cm² readings) and the short-wave caution (a lamp far from sunlight's ratio). */
@@ -75,6 +82,7 @@ export function baskingNeed(species: SpeciesNeed | null, unit: ReadingUnit, rati
   const zone = species.uvZone as 1 | 2 | 3 | 4;
   const zoneMin = ZONE_BASKING_MIN_UVI[zone];
   if (zoneMin === undefined) return { ok: false, missing: `a valid UV zone on the sheet “${species.name}”` };
+  const ceilingUvi = baskingUviRange(zone)[1];
   const judgedBy = `UV Index ${zoneMin}, the basking need of UV zone ${zone} (Ferguson et al. 2010)`;
   const ruleOfThumb = species.uvbTargetUw
     ? `The sheet’s ${RULE_OF_THUMB_LABEL}, ${species.uvbTargetUw.min}–${species.uvbTargetUw.max} µW/cm², is shown for reference only: it does not decide, because lamps differ several-fold in UV Index per µW/cm².`
@@ -85,6 +93,8 @@ export function baskingNeed(species: SpeciesNeed | null, unit: ReadingUnit, rati
     return {
       ok: true,
       threshold: zoneMin,
+      ceiling: ceilingUvi,
+      ceilingUvi,
       unit,
       label: `UVI ${zoneMin} (UV zone ${zone}, ${species.name})`,
       judgedBy,
@@ -107,6 +117,8 @@ export function baskingNeed(species: SpeciesNeed | null, unit: ReadingUnit, rati
   return {
     ok: true,
     threshold: t,
+    ceiling: ceilingUvi / ratio.value,
+    ceilingUvi,
     unit,
     label: `${round(t)} µW/cm² ≈ UVI ${zoneMin} (UV zone ${zone}, ${species.name}; through ${through})`,
     judgedBy,

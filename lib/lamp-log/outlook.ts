@@ -94,6 +94,9 @@ export type Outlook = {
     transmission: number;
     valueNow: number;
     threshold: number;
+    /** The top of the zone's basking range, in the same unit; its UV Index in `ceilingUvi`. */
+    ceiling: number;
+    ceilingUvi: number;
     needLabel: string;
     /** What the verdict is judged by (always the zone's UV Index). */
     judgedBy: string;
@@ -309,6 +312,8 @@ export function lampOutlook(
       transmission,
       valueNow: nowAt30 * k,
       threshold: need.threshold,
+      ceiling: need.ceiling,
+      ceilingUvi: need.ceilingUvi,
       needLabel: need.label,
       judgedBy: need.judgedBy,
       ruleOfThumb: need.ruleOfThumb,
