@@ -7,6 +7,9 @@
  * step inside that window clips them to the tube's new ends and takes the closed forms, with no corner
  * projected, no range tested and no row swept. Most cells do even less: their plan (fillSlide) keeps what
  * the last step found there, which holds until an interval end changes side of a tube end.
+ * A slide by whole cells (a snapped drag on a grid whose cell divides the snap) needs few closed forms even
+ * at the tube's ends: each cell's distance to an end is its neighbour's of a step before, so they are kept
+ * per row by that distance (SlideMap.endTables) and found again, with the same bits.
  *
  * The bits are those of a fresh computation (workspace.ts, sweepRow and evalSpan): per cell, the barriers
  * hiding the whole tube are multiplied in ascending order, first those the row sweep finds by its range
@@ -48,6 +51,21 @@ export class SlideMap {
    */
   pool: Float64Array;
   top = 1;
+  /**
+   * The closed forms at the tube's lower (ends1) and upper (ends2) end per cell row, kept from step to
+   * step while the ends stay on one lattice (endTables): entry j·endLen + p − i + nx − 1 + endLow is the one
+   * at cell i of row j with the end p whole cells from where it lay when the table was started (endRef1,
+   * endRef2), NaN until a step needs it. Each depends only on p − i: the cell's distance to the end.
+   */
+  ends1 = new Float64Array(0);
+  ends2 = new Float64Array(0);
+  endRef1 = NaN;
+  endRef2 = NaN;
+  endLen = 0;
+  endLow = 0;
+  /** Where the tube's ends lay at the last fill (endTables). */
+  lastS1 = NaN;
+  lastS2 = NaN;
   constructor(
     public key: string,
     public w1: number,
@@ -72,7 +90,17 @@ export class SlideMap {
 
   /** Bytes held by the typed arrays. */
   get bytes(): number {
-    const arrays = [this.start, this.lo, this.hi, this.occ, this.word, this.bounds, this.pool];
+    const arrays = [
+      this.start,
+      this.lo,
+      this.hi,
+      this.occ,
+      this.word,
+      this.bounds,
+      this.pool,
+      this.ends1,
+      this.ends2,
+    ];
     return arrays.reduce((sum, a) => sum + a.byteLength, 0);
   }
 
@@ -83,7 +111,39 @@ export class SlideMap {
     this.w2 = w2;
     this.word.fill(FULL);
     this.top = 1;
+    this.endRef1 = this.endRef2 = this.lastS1 = this.lastS2 = NaN;
     return this;
+  }
+
+  /**
+   * Makes the end tables (ends1, ends2) ready for a tube from s1 to s2; false when the ends or the cell
+   * are off the lattice (onLattice), and every closed form at an end is then worked out afresh. Tables
+   * whose ends lie a fraction of a cell away are started again only when the tube has just slid by whole
+   * cells: a free drag that lands on the lattice now and then does not pay for new tables each time.
+   */
+  endTables(s1: number, s2: number, nx: number, ny: number, cell: number): boolean {
+    const last1 = this.lastS1;
+    const last2 = this.lastS2;
+    this.lastS1 = s1;
+    this.lastS2 = s2;
+    if (!(onLattice(s1) && onLattice(s2) && onLattice(cell))) return false;
+    if (wholeSteps(this.endRef1, s1, cell) !== null && wholeSteps(this.endRef2, s2, cell) !== null)
+      return true;
+    if (!(onLattice(last1) && onLattice(last2))) return false;
+    if (wholeSteps(last1, s1, cell) === null || wholeSteps(last2, s2, cell) === null) return false;
+    // Room for an end anywhere in the window, on either side of where it lies now.
+    this.endLow = Math.ceil((this.w2 - this.w1) / cell) + 1;
+    this.endLen = nx + 2 * this.endLow + 1;
+    const size = ny * this.endLen;
+    if (this.ends1.length < size) {
+      this.ends1 = new Float64Array(size);
+      this.ends2 = new Float64Array(size);
+    }
+    this.ends1.fill(NaN);
+    this.ends2.fill(NaN);
+    this.endRef1 = s1;
+    this.endRef2 = s2;
+    return true;
   }
 
   /** A record of `size` entries for cell c (its old slot when that is large enough). */
@@ -104,6 +164,25 @@ export class SlideMap {
     this.pool[p] = size;
     return p;
   }
+}
+
+/** Binary places every length must fit in for a lattice (2⁻²⁴ cm), and the largest length (2²⁸ cm). */
+const LATTICE = 2 ** 24;
+const LATTICE_MAX = 2 ** 28;
+
+/**
+ * Whether v is a multiple of 2⁻²⁴ cm (whole centimetres, halves, quarters, 0.75 cm …) of moderate size.
+ * The cells' centres (i + ½)·cell and every difference of two such lengths are then exact, so a cell's
+ * distance to a tube end is the same double wherever the same real number: a tube slid by whole cells
+ * finds, at each cell, the distance its neighbour that many cells back had before. Ends off the lattice (a
+ * free drag's 0.37 cm, a tube length like 45.7 cm) round differently at each place.
+ */
+const onLattice = (v: number) => Number.isInteger(v * LATTICE) && Math.abs(v) < LATTICE_MAX;
+
+/** How many whole cells from `from` to `to` (both on the lattice), exactly; null when not whole. */
+function wholeSteps(from: number, to: number, cell: number): number | null {
+  const k = Math.round((to - from) / cell);
+  return to - from === k * cell ? k : null;
 }
 
 /** Most pool entries a cell (SlideMap.pool): room for every cell's plan and the slots left behind. */
@@ -201,6 +280,8 @@ export function buildSlideMap(
 export class SlideScratch {
   rowIndex = new Int32Array(0);
   later = new Int32Array(0);
+  /** Closed forms the last fill took from the end tables (a count for tests; it never affects a value). */
+  reused = 0;
   ensure(n: number) {
     if (this.rowIndex.length >= n) return;
     this.rowIndex = new Int32Array(n).fill(-1);
@@ -256,6 +337,8 @@ export function fillSlide(
   const row = ws.row;
   const s = ws.scratch;
   ss.ensure(occluders.length);
+  let looked = 0;
+  let fresh = 0;
   const rowIndex = ss.rowIndex;
   const s1 = lamp.s1;
   const s2 = lamp.s2;
@@ -265,6 +348,12 @@ export function fillSlide(
   const tIr = lamp.tIr;
   const word = map.word;
   const bounds = map.bounds;
+  // A slide by whole cells finds most closed forms at the ends where an earlier step left them.
+  const tables = map.endTables(s1, s2, nx, ny, cell);
+  const ends1 = map.ends1;
+  const ends2 = map.ends2;
+  const p1 = tables ? wholeSteps(map.endRef1, s1, cell)! + nx - 1 + map.endLow : 0;
+  const p2 = tables ? wholeSteps(map.endRef2, s2, cell)! + nx - 1 + map.endLow : 0;
   let evaluated = 0;
   for (let j = 0; j < ny; j++) {
     const base = j * nx;
@@ -283,6 +372,8 @@ export function fillSlide(
     for (let c = 0; c < n0; c++) rowIndex[row.occ[c]!] = c;
     const d = row.d;
     const scale = row.scale;
+    const o1 = j * map.endLen + p1;
+    const o2 = j * map.endLen + p2;
     for (let i = 0; i < nx; i++) {
       const ci = base + i;
       const qx = (i + 0.5) * cell;
@@ -295,13 +386,31 @@ export function fillSlide(
         if (plan !== HIDDEN) {
           const pool = map.pool;
           const p = w >>> 4;
+          let g1: number;
+          let g2: number;
+          if (tables) {
+            looked += 2;
+            g1 = ends1[o1 - i]!;
+            if (g1 !== g1) {
+              g1 = ends1[o1 - i] = G(s1 - qx, d);
+              fresh++;
+            }
+            g2 = ends2[o2 - i]!;
+            if (g2 !== g2) {
+              g2 = ends2[o2 - i] = G(s2 - qx, d);
+              fresh++;
+            }
+          } else {
+            g1 = G(s1 - qx, d);
+            g2 = G(s2 - qx, d);
+          }
           if (plan === OPEN) {
-            const f = (G(s2 - qx, d) - G(s1 - qx, d)) * scale;
+            const f = (g2 - g1) * scale;
             u = uvI * f * pool[p + 1]!;
             r = irI * f * pool[p + 2]!;
           } else {
-            if (plan === RUNS) sumRuns(pool, p + 4, pool[p + 3]!, s1, s2, qx, d);
-            else onePiece(plan & 3, pool[p + 4]!, pool[p + 5]!, pool[p + 3]!, s1, s2, qx, d, tUv, tIr);
+            if (plan === RUNS) sumRuns(pool, p + 4, pool[p + 3]!, g1, g2);
+            else onePiece(plan & 3, pool[p + 4]!, pool[p + 5]!, pool[p + 3]!, g1, g2, tUv, tIr);
             u = uvI * sumOut.u * scale * pool[p + 1]!;
             r = irI * sumOut.i * scale * pool[p + 2]!;
           }
@@ -320,6 +429,7 @@ export function fillSlide(
     }
     for (let c = 0; c < n0; c++) rowIndex[row.occ[c]!] = -1;
   }
+  ss.reused = looked - fresh;
   return evaluated;
 }
 
@@ -410,7 +520,7 @@ function planCell(
     const ga = (inner & 1) !== 0 ? G(sLo[0]! - qx, d) : 0;
     const gb = (inner & 2) !== 0 ? G(sHi[0]! - qx, d) : 0;
     const k = row.occ[pk[0]! >> 2]!;
-    onePiece(inner, ga, gb, k, s1, s2, qx, d, tUv, tIr);
+    onePiece(inner, ga, gb, k, G(s1 - qx, d), G(s2 - qx, d), tUv, tIr);
     u = uvI * sumOut.u * scale * gu;
     r = irI * sumOut.i * scale * gi;
     next = ONE + inner;
@@ -422,7 +532,7 @@ function planCell(
     const nr = makeRuns(s, n, s1, s2, row.occ, tUv, tIr);
     p = map.slot(ci, 4 + 3 * nr);
     keepRuns(map.pool, p, nr, s, qx, d);
-    sumRuns(map.pool, p + 4, nr, s1, s2, qx, d);
+    sumRuns(map.pool, p + 4, nr, G(s1 - qx, d), G(s2 - qx, d));
     u = uvI * sumOut.u * scale * gu;
     r = irI * sumOut.i * scale * gi;
     next = RUNS;
@@ -459,10 +569,8 @@ function onePiece(
   ga: number,
   gb: number,
   k: number,
-  s1: number,
-  s2: number,
-  qx: number,
-  d: number,
+  g1: number,
+  g2: number,
   tUv: Float64Array,
   tIr: Float64Array,
 ): void {
@@ -472,10 +580,8 @@ function onePiece(
   let hidden = 0;
   if (tU === 0 && tI === 0 && inner !== 3) {
     // An opaque piece at one end of the tube: only the open part counts.
-    open = inner === 1 ? ga - G(s1 - qx, d) + 0 : 0 + (G(s2 - qx, d) - gb);
+    open = inner === 1 ? ga - g1 + 0 : 0 + (g2 - gb);
   } else {
-    const g1 = G(s1 - qx, d);
-    const g2 = G(s2 - qx, d);
     const gLo = (inner & 1) !== 0 ? ga : g1;
     const gHi = (inner & 2) !== 0 ? gb : g2;
     open = gLo - g1 + (g2 - gHi);
@@ -506,15 +612,7 @@ function keepRuns(pool: Float64Array, p: number, nr: number, s: Scratch, qx: num
  * difference between the closed forms at its ends (evalSpan takes the one at a run's start from the run
  * before when it evaluated it there: the same value).
  */
-function sumRuns(
-  pool: Float64Array,
-  p: number,
-  nr: number,
-  s1: number,
-  s2: number,
-  qx: number,
-  d: number,
-): void {
+function sumRuns(pool: Float64Array, p: number, nr: number, g1: number, g2: number): void {
   const last = p + 3 * (nr - 1);
   let sumU = 0;
   let sumI = 0;
@@ -522,8 +620,8 @@ function sumRuns(
     const pu = pool[e + 1]!;
     const pi = pool[e + 2]!;
     if (pu !== 0 || pi !== 0) {
-      const ga = e === p ? G(s1 - qx, d) : pool[e - 3]!;
-      const gb = e === last ? G(s2 - qx, d) : pool[e]!;
+      const ga = e === p ? g1 : pool[e - 3]!;
+      const gb = e === last ? g2 : pool[e]!;
       sumU += pu * (gb - ga);
       sumI += pi * (gb - ga);
     }

@@ -60,6 +60,11 @@ export interface SolverStats {
   full: number;
   /** Of the full ones, tubes filled from their kept intervals (slid along their line). */
   slid: number;
+  /**
+   * Closed forms at a slid tube's ends found where an earlier step left them (a slide by whole cells:
+   * SlideMap.ends1, ends2); a count for tests.
+   */
+  endsReused: number;
   partial: number;
   cached: number;
   /** Lamp-cells evaluated in the last call. */
@@ -104,7 +109,7 @@ export class FieldSolver {
   private slideScratch = new SlideScratch();
   /** Buffers of results handed back by the caller (recycle), oldest first. */
   private spareResults: ArrayBuffer[] = [];
-  readonly stats: SolverStats = { full: 0, slid: 0, partial: 0, cached: 0, cellsEvaluated: 0 };
+  readonly stats: SolverStats = { full: 0, slid: 0, endsReused: 0, partial: 0, cached: 0, cellsEvaluated: 0 };
 
   /** Bytes held for the last tube slid along its line (0 when none is kept). */
   get slideBytes(): number {
@@ -152,6 +157,7 @@ export class FieldSolver {
     ws.ensure(scene.occluders.length);
     this.stats.full =
       this.stats.slid =
+      this.stats.endsReused =
       this.stats.partial =
       this.stats.cached =
       this.stats.cellsEvaluated =
@@ -255,7 +261,7 @@ export class FieldSolver {
     const lamps = scene.lamps;
     const n = lamps.length;
     this.stats.full = n;
-    this.stats.slid = 0;
+    this.stats.slid = this.stats.endsReused = 0;
     this.stats.partial = this.stats.cached = this.stats.cellsEvaluated = 0;
     const cells = nx * ny;
     const hc = opts.convection ?? HEAT_DEFAULTS.convection;
@@ -359,6 +365,7 @@ export class FieldSolver {
     this.stats.cellsEvaluated += map
       ? fillSlide(ws, this.slideScratch, map, lamp, scene.occluders, uv, ir, nx, ny, cell, dirty!)
       : fillLamp(ws, lamp, scene.occluders, uv, ir, nx, ny, cell, fits ? dirty! : undefined);
+    if (map) this.stats.endsReused += this.slideScratch.reused;
     return { key, occKeys, occluders: scene.occluders, uv, ir, line };
   }
 
