@@ -14,8 +14,9 @@
  * The arithmetic floor is timed in the same run: every lamp's closed form (the engine's own tube and
  * bulb formulas) at every cell, with no barriers, no heat and no allocation — what no engine computing
  * these fields cell by cell can go below. `fullOverFloor` is the full computation over that floor and
- * `moveOverFull` one lamp moved (0.5 cm steps on a warm solver, the others from the cache) over a full
- * computation, at the demo scale and at a 4× larger one (4× the cells, twice the lamps).
+ * `moveOverFull` one lamp moved (0.5 cm steps, whole cells, on a warm solver, the others from the cache) over
+ * a full computation, at the demo scale and at a 4× larger one (4× the cells, twice the lamps);
+ * `moveOverFullSubCell` the same drag in 0.37 cm steps (fractions of a cell).
  *
  * Results are handed back to the engine as the product's callers hand them back: a drag step's result once
  * the next one is there (the studio returns the field it stopped showing to its worker), a full field's
@@ -68,12 +69,20 @@ function benchFloor(design: Design, cellCm: number, runs: number): Timing {
 
 type LampObject = Extract<Design['objects'][number], { type: 'lamp' }>;
 
+/**
+ * A drag step: 0.5 cm, a whole cell at the demo's 0.5 cm and two at the larger field's 0.25 cm (as a drag
+ * snapped to whole centimetres on the studio's 1 cm drag grid), and 0.37 cm, a fraction of a cell (a free
+ * drag with Alt, or a snap that does not divide into cells): the engine reuses more of a whole-cell step.
+ */
+const WHOLE_STEP_CM = 0.5;
+const SUB_CELL_STEP_CM = 0.37;
+
 /** Sideways by d cm, or in depth by d cm. */
 const sideways = (o: LampObject, d: number): LampObject => ({ ...o, x: o.x + d });
 const inDepthBy = (o: LampObject, d: number): LampObject => ({ ...o, z: (o.z ?? 30) + d });
 
 /**
- * One lamp moved in 0.5 cm steps (back and forth) on a warm solver: only that lamp is recomputed (the
+ * One lamp moved in steps of stepCm (back and forth) on a warm solver: only that lamp is recomputed (the
  * others come from the cache), checked against a fresh computation at the end.
  */
 function benchLampMove(
@@ -81,6 +90,7 @@ function benchLampMove(
   cellCm: number,
   runs: number,
   step: (o: LampObject, d: number) => LampObject = sideways,
+  stepCm = WHOLE_STEP_CM,
   lampId = 't5-0',
 ): Timing {
   const opts = { cellCm };
@@ -90,7 +100,7 @@ function benchLampMove(
   const times: Timing[] = [];
   // The first steps warm up the JIT (the full computations before compiled the one-off path only).
   for (let k = -WARM_UP; k < runs; k++) {
-    const dx = (k + WARM_UP) % 20 < 10 ? 0.5 : -0.5;
+    const dx = (k + WARM_UP) % 20 < 10 ? stepCm : -stepCm;
     current = {
       ...current,
       objects: current.objects.map((o) => (o.type === 'lamp' && o.id === lampId ? step(o, dx) : o)),
@@ -153,6 +163,8 @@ interface Row {
   full: Timing;
   floor: Timing;
   lampMove: Timing;
+  /** The same lamp dragged by a fraction of a cell a step. */
+  lampMoveSub: Timing;
   move: Timing;
   reference: Timing;
   speedup: number;
@@ -206,6 +218,7 @@ function benchOne(name: string, design: Design, cellCm: number, runs: number, st
     full: fullM,
     floor: benchFloor(design, cellCm, runs),
     lampMove: benchLampMove(design, cellCm, runs),
+    lampMoveSub: benchLampMove(design, cellCm, runs, sideways, SUB_CELL_STEP_CM),
     move: medians(move),
     reference,
     speedup: reference.cpu / fullM.cpu,
@@ -238,13 +251,14 @@ function main() {
     'full/floor',
     'lamp mv ms',
     'mv/full',
+    'sub mv/full',
     'ref ms',
     'full wall',
     'move wall',
     'speedup',
     'max rel err',
   ];
-  const widths = [26, 7, 6, 5, 8, 8, 9, 10, 10, 8, 9, 10, 10, 8, 12];
+  const widths = [26, 7, 6, 5, 8, 8, 9, 10, 10, 8, 11, 9, 10, 10, 8, 12];
   console.log(head.map((h, k) => (k === 0 ? h.padEnd(widths[k]!) : pad(h, widths[k]!))).join(' '));
   for (const r of rows) {
     const cols = [
@@ -258,6 +272,7 @@ function main() {
       (r.full.cpu / r.floor.cpu).toFixed(2),
       r.lampMove.cpu.toFixed(2),
       (r.lampMove.cpu / r.full.cpu).toFixed(2),
+      (r.lampMoveSub.cpu / r.full.cpu).toFixed(2),
       r.reference.cpu.toFixed(0),
       r.full.wall.toFixed(2),
       r.move.wall.toFixed(2),
@@ -277,7 +292,8 @@ function main() {
   );
   console.log(
     'floor: every lamp\'s closed form at every cell, no barriers, no heat, no allocation; "move" drags a ' +
-      'perch, "lamp mv" drags one lamp (the others from the cache).',
+      `perch, "lamp mv" drags one lamp (the others from the cache) in ${WHOLE_STEP_CM} cm steps (whole cells), ` +
+      `"sub mv" in ${SUB_CELL_STEP_CM} cm steps (fractions of a cell).`,
   );
   const d = rows[0]!;
   const large = rows.at(-1)!;
@@ -300,6 +316,9 @@ function main() {
       // CPU above wall time is work on the process's other threads (the collector's) during the step.
       lampMoveWallMs: r2(d.lampMove.wall),
       moveOverFull: r2(d.lampMove.cpu / d.full.cpu),
+      // The same drag by a fraction of a cell a step (a free drag).
+      lampMoveSubCellMs: r2(d.lampMoveSub.cpu),
+      moveOverFullSubCell: r2(d.lampMoveSub.cpu / d.full.cpu),
       large: {
         cells: large.cells,
         lamps: large.lamps,
@@ -310,6 +329,8 @@ function main() {
         lampMoveMs: r2(large.lampMove.cpu),
         lampMoveWallMs: r2(large.lampMove.wall),
         moveOverFull: r2(large.lampMove.cpu / large.full.cpu),
+        lampMoveSubCellMs: r2(large.lampMoveSub.cpu),
+        moveOverFullSubCell: r2(large.lampMoveSub.cpu / large.full.cpu),
         maxRelError: Number(large.maxRelError.toPrecision(3)),
       },
       loadAvg: r2(load),
