@@ -1,5 +1,6 @@
 import type { CounterAnswerDto } from '@/lib/counter/queries';
 import { formatLengthRounded, type LengthUnit } from '@/shared/units';
+import { formatDay, readableDays } from '@/components/lamp-log/format';
 
 const TONE: Record<string, string> = {
   keep: 'border-moss-300 bg-moss-50 text-moss-900',
@@ -47,7 +48,7 @@ export function VerdictCard({
         <h2 className="text-title font-semibold" data-verdict={v.kind}>
           {TITLE[v.kind]}
         </h2>
-        <p className="mt-1 text-body">{v.headline}</p>
+        <p className="mt-1 text-body">{readableDays(v.headline)}</p>
       </div>
       <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-body">
         {v.output && (
@@ -84,7 +85,7 @@ export function VerdictCard({
         {v.testAgainOn && (
           <>
             <dt className="font-medium">Test again</dt>
-            <dd>by {v.testAgainOn}</dd>
+            <dd>by {formatDay(v.testAgainOn)}</dd>
           </>
         )}
         <dt className="font-medium">Lamp</dt>
@@ -95,7 +96,7 @@ export function VerdictCard({
       </dl>
       <ul className="list-disc space-y-1 pl-5 text-body">
         {v.reasons.map((r) => (
-          <li key={r}>{r}</li>
+          <li key={r}>{readableDays(r)}</li>
         ))}
         {answer.photoperiod && <li>{answer.photoperiod}</li>}
       </ul>

@@ -1,5 +1,8 @@
 /** Display helpers of the lamp log (no React, usable on server and client). */
 import type { Status } from '@/lib/lamp-log/status';
+import { MONTH_NAMES } from '@/shared/days';
+
+export { formatDay, readableDays } from '@/shared/days';
 
 export type ReadingUnit = 'uvb' | 'uvi';
 
@@ -21,26 +24,8 @@ export function formatAge(days: number): string {
   return `${(months / 12).toFixed(1)} years`;
 }
 
-const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
-
-/** 2025-03-01 → "1 Mar 2025" (UTC, so the date never moves with the viewer's time zone). */
-export function formatDay(iso: string | null | undefined): string {
-  if (!iso) return '—';
-  const d = new Date(iso.length === 10 ? `${iso}T00:00:00Z` : iso);
-  if (Number.isNaN(d.getTime())) return iso;
-  return `${d.getUTCDate()} ${MONTHS[d.getUTCMonth()]} ${d.getUTCFullYear()}`;
-}
-
-/**
- * A sentence with calendar days written as `YYYY-MM-DD` (the outlook's reasons, stored with the lamp and
- * also used in e-mails) with each day as the pages write days: "13 Dec 2026".
- */
-export function readableDays(text: string): string {
-  return text.replace(/\b\d{4}-\d{2}-\d{2}\b/g, (iso) => formatDay(iso));
-}
-
 export function formatMonthYear(d: Date): string {
-  return `${MONTHS[d.getUTCMonth()]} ${d.getUTCFullYear()}`;
+  return `${MONTH_NAMES[d.getUTCMonth()]} ${d.getUTCFullYear()}`;
 }
 
 export const STATUS_STYLE: Record<Status, string> = {

@@ -1,5 +1,6 @@
 import type { VerdictKind } from './assess';
 import type { CounterLampView } from './queries';
+import { formatDay, readableDays } from '@/shared/days';
 
 /**
  * What a test slip says, once, for both its forms (the e-mail and the one-page PDF): the lamp, the
@@ -12,7 +13,7 @@ export type SlipContent = {
   /** How to reach the shop, when it said. */
   contact: string | null;
   customerName: string | null;
-  /** The day of the reading the slip reports (YYYY-MM-DD). */
+  /** The day of the reading the slip reports (YYYY-MM-DD: file names use it; words use `formatDay`). */
   testedOn: string;
   rows: [string, string][];
   verdictKind: VerdictKind;
@@ -41,7 +42,7 @@ export function slipContent(input: {
   const rows: [string, string][] = [
     [
       'Lamp',
-      `${lamp.label ? `${lamp.label} (${lamp.lampTypeName})` : lamp.lampTypeName}, in use since ${lamp.firstUsedEstimated ? 'about ' : ''}${lamp.firstUsedOn}`,
+      `${lamp.label ? `${lamp.label} (${lamp.lampTypeName})` : lamp.lampTypeName}, in use since ${lamp.firstUsedEstimated ? 'about ' : ''}${formatDay(lamp.firstUsedOn)}`,
     ],
     [
       'Reading',
@@ -62,11 +63,11 @@ export function slipContent(input: {
     contact: input.contact ?? null,
     customerName: input.customerName,
     testedOn: last.takenAt.slice(0, 10),
-    rows,
+    rows: rows.map(([label, text]) => [label, readableDays(text)]),
     verdictKind: v.kind,
     verdictWord: v.headline.split(':')[0]!,
-    headline: v.headline,
-    nextTestOn: v.testAgainOn,
+    headline: readableDays(v.headline),
+    nextTestOn: v.testAgainOn ? formatDay(v.testAgainOn) : null,
     cautions: v.cautions,
     exampleData: input.exampleData ?? false,
   };
@@ -77,7 +78,7 @@ export function slipText(c: SlipContent, unsubscribeUrl: string): { subject: str
   const lines = [
     `Hello ${c.customerName ?? 'there'},`,
     '',
-    `${c.shop} tested your lamp on ${c.testedOn}.`,
+    `${c.shop} tested your lamp on ${formatDay(c.testedOn)}.`,
     '',
     ...c.rows.map(([label, text]) => `${label}: ${text}.`),
     '',

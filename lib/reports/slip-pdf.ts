@@ -10,6 +10,7 @@ import { FINDING_STATUS } from '@/shared/finding-status';
 import { DEFER_NOTE } from './cautions';
 import { M, MUTED, Writer } from './pdf-writer';
 import { winAnsi } from './pdf-text';
+import { formatDay } from '@/shared/days';
 
 // The verdict in the app's colours for a pass, an attention and a fail.
 const VERDICT_COLOR: Record<SlipContent['verdictKind'], ReturnType<typeof rgb>> = {
@@ -21,7 +22,7 @@ const VERDICT_COLOR: Record<SlipContent['verdictKind'], ReturnType<typeof rgb>> 
 
 export async function renderSlipPdf(c: SlipContent, generatedAt: Date): Promise<Uint8Array> {
   const doc = await PDFDocument.create();
-  doc.setTitle(`Lamp test at ${c.shop}, ${c.testedOn}`);
+  doc.setTitle(`Lamp test at ${c.shop}, ${formatDay(c.testedOn)}`);
   doc.setSubject('Lamp test slip');
   doc.setCreator('Baskwell');
   doc.setProducer('Baskwell');
@@ -34,7 +35,7 @@ export async function renderSlipPdf(c: SlipContent, generatedAt: Date): Promise<
 
   w.text(c.shop, { size: 16, bold: true, gap: 2 });
   if (c.contact) w.text(c.contact, { size: 10, color: MUTED, gap: 2 });
-  w.text(`Lamp test of ${c.testedOn}${c.customerName ? ` for ${c.customerName}` : ''}`, {
+  w.text(`Lamp test of ${formatDay(c.testedOn)}${c.customerName ? ` for ${c.customerName}` : ''}`, {
     size: 12,
     gap: c.exampleData ? 4 : 10,
   });

@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { formatDay } from '@/components/lamp-log/format';
 import { notFound } from 'next/navigation';
 import Link from '@/components/ui/Link';
 import { Breadcrumbs } from '@/components/ui/Breadcrumbs';
@@ -109,7 +110,7 @@ export default async function CustomerPage({ params }: Props) {
                 </Link>
                 <span className="ml-2 text-caption text-basalt-500">
                   {l.label ? `${l.lampTypeName} · ` : ''}in use since {l.firstUsedEstimated ? 'about ' : ''}
-                  {l.firstUsedOn} · {l.tests} test{l.tests === 1 ? '' : 's'}
+                  {formatDay(l.firstUsedOn)} · {l.tests} test{l.tests === 1 ? '' : 's'}
                 </span>
               </span>
               <span className="flex items-center gap-3 text-caption text-basalt-700">
@@ -150,7 +151,8 @@ function KeeperLamps({ keeperName, lamps }: { keeperName: string; lamps: KeeperL
                   {l.label}
                 </Link>
                 <span className="ml-2 text-caption text-basalt-500">
-                  {l.lampTypeName} · {l.enclosureName} · in use since {l.firstUsedOn} · {l.readings} reading
+                  {l.lampTypeName} · {l.enclosureName} · in use since {formatDay(l.firstUsedOn)} ·{' '}
+                  {l.readings} reading
                   {l.readings === 1 ? '' : 's'} in the lamp log
                   {l.retiredOn ? ` · retired ${l.retiredOn}` : ''}
                 </span>

@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { formatDay } from '@/components/lamp-log/format';
 import { notFound } from 'next/navigation';
 import { SendSlipButton } from '@/components/counter/SendSlipButton';
 import { VerdictCard } from '@/components/counter/VerdictCard';
@@ -46,7 +47,7 @@ export default async function CounterLampPage({ params }: Props) {
       />
       <PageHeader
         title={name}
-        lead={`${lamp.label ? `${lamp.lampTypeName} · in use since` : 'In use since'} ${lamp.firstUsedEstimated ? 'about ' : ''}${lamp.firstUsedOn}, ${lamp.hoursPerDay} hours a day${lamp.customer ? '' : ' · kept without a customer'}`}
+        lead={`${lamp.label ? `${lamp.lampTypeName} · in use since` : 'In use since'} ${lamp.firstUsedEstimated ? 'about ' : ''}${formatDay(lamp.firstUsedOn)}, ${lamp.hoursPerDay} hours a day${lamp.customer ? '' : ' · kept without a customer'}`}
         actions={
           <>
             <Link href={`/counter?lamp=${lamp.id}`} className={button.primary}>
