@@ -108,7 +108,7 @@ export function LampTypeTable({ lampTypes }: { lampTypes: LampTypeDto[] }) {
         </Select>
         <UnitToggle />
       </div>
-      <Table data={shown} columns={columns} caption="Lamp types" rowKey={(t) => t.id} head="plain" />
+      <Table data={shown} columns={columns} caption="Lamp types" rowKey={(t) => t.id} head="plain" stack />
     </div>
   );
 }

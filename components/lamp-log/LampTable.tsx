@@ -140,7 +140,7 @@ export function lampColumns(
       className: LAMP_CELL.text,
       cell: ({ row }) => <FallsBelowCell l={row.original} />,
     },
-    { id: 'urgency', header: 'Status', cell: ({ row }) => <StatusCell l={row.original} /> },
+    { id: 'urgency', header: 'Status', wide: true, cell: ({ row }) => <StatusCell l={row.original} /> },
   ];
 }
 

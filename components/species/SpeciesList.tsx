@@ -109,7 +109,7 @@ export function SpeciesList({ sheets }: { sheets: SpeciesSheetDto[] }) {
           No sheet matches “{q}”.
         </p>
       ) : (
-        <Table data={shown} columns={columns} caption="Species sheets" rowKey={(s) => s.id} />
+        <Table data={shown} columns={columns} caption="Species sheets" rowKey={(s) => s.id} stack />
       )}
     </div>
   );

@@ -104,6 +104,7 @@ export function ServerListFrame<C extends string, R, P extends ServerListPage<R>
         }}
         stale={stale}
         busy={busy}
+        stack
         rowClassName={rowClassName}
         testId={testId}
       >

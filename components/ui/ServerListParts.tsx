@@ -51,16 +51,19 @@ export function SortableHeader<C extends string>({
   column,
   sort,
   onSort,
+  role,
   children,
 }: {
   column: C;
   sort: ListSort<C>;
   onSort: (column: C) => void;
+  /** `columnheader` in a table whose rows CSS may draw as blocks (the stacked phone layout). */
+  role?: string;
   children: ReactNode;
 }) {
   const state = ariaSortFor(column, sort);
   return (
-    <th scope="col" aria-sort={state} className="px-2 py-1 font-semibold">
+    <th scope="col" role={role} aria-sort={state} className="px-2 py-1 font-semibold">
       <button
         type="button"
         onClick={() => onSort(column)}

@@ -91,4 +91,25 @@ describe('Table', () => {
     expect(cellsOf(html, 'td')).toEqual([]);
     expect(html).toMatch(/<\/table><p>Nothing matches<\/p><\/div>$/);
   });
+
+  it('stacked for phones: each cell names its heading, a wide cell is marked, and the table keeps its roles', () => {
+    const stacked = render({
+      ...base,
+      stack: true,
+      columns: [
+        { id: 'name', header: 'Name', rowHeader: true, cell: ({ row }) => row.original.name },
+        { id: 'size', header: () => 'Size (cm)', label: 'Size', cell: ({ row }) => row.original.size },
+        { id: 'note', header: 'Note', wide: true, cell: () => 'fine' },
+      ],
+    });
+    expect(stacked).toMatch(/<table role="table" class="[^"]*\btable-stack\b/);
+    expect(stacked).toContain('<th scope="row" role="rowheader" class="px-4 py-3">Desert</th>');
+    expect(stacked).toContain('<td role="cell" class="px-4 py-3" data-label="Size">120</td>');
+    expect(stacked).toContain('<td role="cell" class="px-4 py-3" data-label="Note" data-wide="">fine</td>');
+    expect(stacked.match(/role="row"/g)).toHaveLength(3);
+    expect(stacked.match(/role="columnheader"/g)).toHaveLength(3);
+    // Not asked for: none of it, so other tables' markup is unchanged.
+    const plain = render({ ...base, columns: columns(true) });
+    expect(plain).not.toMatch(/table-stack|role=|data-label|data-wide/);
+  });
 });

@@ -27,6 +27,10 @@ export type TableColumn<T> = {
   sortable?: boolean;
   /** The cell names its row (`<th scope="row">`), so a screen reader says it before each cell of the row. */
   rowHeader?: boolean;
+  /** The heading's words where `header` is not plain text: a stacked row's label for the cell. */
+  label?: string;
+  /** In a stacked row (phones) the cell takes the row's whole width (a status with its reasons). */
+  wide?: boolean;
 };
 
 /** Sorting done by the server: every header becomes a button that asks for the next sort. */
@@ -60,6 +64,7 @@ export function Table<T, C extends string = string>({
   rowClassName = inline ? '' : 'hover:bg-basalt-50',
   testId,
   rowTestId,
+  stack = false,
   children,
 }: {
   data: readonly T[];
@@ -89,6 +94,13 @@ export function Table<T, C extends string = string>({
   testId?: string;
   /** A body row's `data-testid`, where it has one. */
   rowTestId?: (row: T) => string | undefined;
+  /**
+   * On a phone's width each row is drawn as a card: the row's name across the top, then each cell under
+   * its heading's words, two to a line (`table-stack` in app/globals.css), instead of a table to scroll
+   * sideways past the columns that matter. The sort buttons wrap above the cards. The cells keep their
+   * table roles for screen readers (CSS display changes can drop them).
+   */
+  stack?: boolean;
   children?: ReactNode;
 }) {
   const shown = columns.filter((c): c is TableColumn<T> => c !== false);
@@ -100,28 +112,41 @@ export function Table<T, C extends string = string>({
     .filter(Boolean)
     .join(' ');
 
+  // Stacked rows name each cell by its heading; the roles keep the table's meaning once CSS draws its
+  // parts as blocks.
+  const labelOf = (column: TableColumn<T>) =>
+    column.label ?? (typeof column.header === 'string' ? column.header : undefined);
+  const role = (r: string) => (stack ? r : undefined);
   return (
     <div className={frameClassName}>
       <table
-        className={`${fullWidth ? 'w-full' : 'min-w-full'} divide-y divide-basalt-200 text-left text-body ${stale ? 'opacity-60' : ''}`}
+        role={role('table')}
+        className={`${fullWidth ? 'w-full' : 'min-w-full'} divide-y divide-basalt-200 text-left text-body ${stale ? 'opacity-60' : ''}${stack ? ' table-stack' : ''}`}
         aria-busy={busy || undefined}
         data-testid={testId}
       >
         <caption className={showCaption ? 'mb-1 text-left text-caption text-basalt-600' : 'sr-only'}>
           {caption}
         </caption>
-        <thead className={headClass}>
-          <tr>
+        <thead className={headClass} role={role('rowgroup')}>
+          <tr role={role('row')}>
             {shown.map((column) => {
               const label = typeof column.header === 'function' ? column.header() : column.header;
               return sort && column.sortable !== false ? (
-                <SortableHeader key={column.id} column={column.id as C} sort={sort.sort} onSort={sort.onSort}>
+                <SortableHeader
+                  key={column.id}
+                  column={column.id as C}
+                  sort={sort.sort}
+                  onSort={sort.onSort}
+                  role={role('columnheader')}
+                >
                   {label}
                 </SortableHeader>
               ) : (
                 <th
                   key={column.id}
                   scope="col"
+                  role={role('columnheader')}
                   className={column.headerClassName ?? 'px-4 py-2 font-semibold'}
                   title={column.title}
                 >
@@ -131,12 +156,13 @@ export function Table<T, C extends string = string>({
             })}
           </tr>
         </thead>
-        <tbody className="divide-y divide-basalt-100">
+        <tbody className="divide-y divide-basalt-100" role={role('rowgroup')}>
           {data.map((original) => {
             const context: TableCellContext<T> = { row: { original } };
             return (
               <tr
                 key={rowKey(original)}
+                role={role('row')}
                 className={rowClassName || undefined}
                 data-testid={rowTestId?.(original)}
               >
@@ -144,11 +170,17 @@ export function Table<T, C extends string = string>({
                   const content = column.cell(context);
                   const className = column.className ?? 'px-4 py-3';
                   return column.rowHeader ? (
-                    <th key={column.id} scope="row" className={className}>
+                    <th key={column.id} scope="row" role={role('rowheader')} className={className}>
                       {content}
                     </th>
                   ) : (
-                    <td key={column.id} className={className}>
+                    <td
+                      key={column.id}
+                      role={role('cell')}
+                      className={className}
+                      data-label={stack ? labelOf(column) : undefined}
+                      data-wide={stack && column.wide ? '' : undefined}
+                    >
                       {content}
                     </td>
                   );
