@@ -125,10 +125,11 @@ export function ComparePickers({
               ))}
           </select>
         </label>
-        <label className="flex items-center gap-2 text-body text-basalt-700">
+        {/* The species list's longest choice would widen the select past a phone's card: it shrinks. */}
+        <label className="flex min-w-0 max-w-full items-center gap-2 text-body text-basalt-700">
           Species
           <select
-            className={input}
+            className={`${input} min-w-0 max-w-full`}
             value={shownSpeciesId ?? ''}
             // "None" is written as species=none: an absent species means the enclosure's own.
             onChange={(e) => set({ species: e.target.value ? Number(e.target.value) : 'none' })}
