@@ -4,6 +4,7 @@ import { addDays, dayNumber, DAYS_PER_MONTH, isoDay } from '@/lib/lamp-log/dates
 import { defaultDecayFor } from '@/lib/lamp-log/decay';
 import { firstDayBelow, predict } from '@/lib/lamp-log/fit';
 import type { SpeciesNeed } from '@/lib/lamp-log/need';
+import { newLampAtSpot, newOutputAt30 } from '@/lib/lamp-log/replacement';
 import {
   HORIZON_DAYS,
   lampOutlook,
@@ -90,11 +91,6 @@ export type CounterAnswer = { outlook: Outlook; verdict: CounterVerdict };
 
 const month = (iso: string | null) => (iso ? iso.slice(0, 7) : null);
 
-/** The catalogue's new lamp of this type at 30 cm, in the readings' unit. */
-export function newOutputAt30(type: LampFacts['type'], unit: ReadingUnit): number {
-  return unit === 'uvb' ? type.uvbAt30 : type.uvbAt30 * type.uviPerUvb;
-}
-
 /** The standing cautions of every counter answer (the customer takes them home with the verdict). */
 export const COUNTER_CAUTIONS: string[] = [
   'Every figure here is an estimate from meter readings at the counter and the lamp type’s usual ageing: check the basking spot at home with a UV meter.',
@@ -103,45 +99,7 @@ export const COUNTER_CAUTIONS: string[] = [
   'Follow the lamp maker’s instructions, and ask a reptile-experienced vet about the animal’s own UV needs.',
 ];
 
-/**
- * What a new lamp of the same type would give at the customer's basking spot (the catalogue's new output
- * at 30 cm brought to the spot the way today's reading was): a replacement that still falls short of the
- * need does not help the animal by itself, and one above the top of the zone's range is more UV than the
- * zone's animals meet (UV zones of Ferguson et al. 2010), so the customer is told before fitting it.
- */
-export function newLampAtSpot(
-  b: { valueNow: number; threshold: number; ceiling?: number; ceilingUvi?: number; distanceCm: number },
-  nowAt30: number,
-  newAt30: number,
-  unit: ReadingUnit,
-): { value: number | null; tooWeak: boolean; tooStrong: boolean; reasons: string[] } {
-  if (!(nowAt30 > 0) || !(newAt30 > 0)) return { value: null, tooWeak: false, tooStrong: false, reasons: [] };
-  const value = newAt30 * (b.valueNow / nowAt30);
-  const at = `at the basking spot (${round1(b.distanceCm)} cm from the lamp)`;
-  if (value < b.threshold) {
-    return {
-      value,
-      tooWeak: true,
-      tooStrong: false,
-      reasons: [
-        `A new lamp of this type would give about ${fmt(value, unit)} ${at}: still below the need. Bring the basking spot closer to the lamp, or choose a stronger lamp type, and measure again before the animal uses it.`,
-      ],
-    };
-  }
-  if (b.ceiling !== undefined && Number.isFinite(b.ceiling) && value > b.ceiling) {
-    return {
-      value,
-      tooWeak: false,
-      tooStrong: true,
-      reasons: [
-        `A new lamp of this type would give about ${fmt(value, unit)} ${at}, above the top of the zone’s basking range (UVI ${b.ceilingUvi ?? '—'}${unit === 'uvb' ? `, about ${fmt(b.ceiling, unit)}` : ''}): fit the new lamp farther from the basking spot, or lower the spot, and measure before the animal uses it.`,
-      ],
-    };
-  }
-  return { value, tooWeak: false, tooStrong: false, reasons: [] };
-}
-
-const round1 = (v: number) => Math.round(v * 10) / 10;
+export { newLampAtSpot, newOutputAt30 };
 
 export function assessCounterLamp(input: CounterInput): CounterAnswer {
   const { lamp, readings, species, today } = input;

@@ -47,6 +47,24 @@ describe('lampOutlook', () => {
     expect(o.testDueOn).toBe(isoDay(dayNumber('2025-03-22') + 91));
   });
 
+  it('when it says "replace", also says whether a new lamp of the type would meet the need at the spot', () => {
+    // The type new: 42.5 µW/cm² at 30 cm, brought to the 15 cm basking spot the way the readings are.
+    const spot = 42.5 * distanceFactor(lamp.type, 30, 15);
+    // Ferguson et al. 2010: zone 3 needs UVI 2.9 (72.5 µW/cm² through 0.04), zone 4 UVI 4.5 (112.5).
+    expect(spot).toBeGreaterThan(72.5);
+    expect(spot).toBeLessThan(112.5);
+    const zone3Replace = lampOutlook(lamp, readings, zone3, '2026-06-01');
+    expect(zone3Replace.status).toBe('replace');
+    expect(zone3Replace.reasons.join(' ')).not.toMatch(/new lamp of this type would/);
+    const zone4 = lampOutlook(lamp, readings, { ...zone3, uvZone: 4 }, '2026-06-01');
+    expect(zone4.status).toBe('replace');
+    expect(zone4.reasons.join(' ')).toMatch(
+      new RegExp(
+        `A new lamp of this type would give about ${Math.round(spot)} µW/cm² at the basking spot \\(15 cm from the lamp\\): still below the need`,
+      ),
+    );
+  });
+
   it('says what is missing without a species sheet, and falls back to the typical interval', () => {
     const o = lampOutlook(lamp, readings, null, '2025-03-01');
     expect(o.missing).toContain('a species sheet for this enclosure');

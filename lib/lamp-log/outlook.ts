@@ -8,6 +8,7 @@ import { band, firstDayBelow, fitDecay, predict, type DecayFit } from './fit';
 import { distanceFactor, REFERENCE_CM, toBareReference, toReference, type LampShape } from './geometry';
 import { baskingNeed, pairedRatio, type SpeciesNeed } from './need';
 import { photoperiodAdvice } from './photoperiod';
+import { newLampAtSpot, newOutputAt30 } from './replacement';
 import type { Status } from './status';
 
 /**
@@ -348,6 +349,9 @@ export function lampOutlook(
           : `The basking zone falls below the species’ need on about ${replaceDueOn}.`
         : `The usual replacement age of this lamp type is reached on ${replaceDueOn} (no readings-based date).`,
     );
+    // Before the keeper fits the new lamp: would one of this type meet the need at this spot, or overshoot it?
+    if (basking && unit && nowAt30 !== null)
+      reasons.push(...newLampAtSpot(basking, nowAt30, newOutputAt30(lamp.type, unit), unit).reasons);
   }
   if (status === 'fine') {
     if (testDueOn <= soon) {
