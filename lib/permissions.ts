@@ -8,7 +8,13 @@ export type { Role };
  * (to learn its organisation and keeper) and then ask `can`.
  */
 
-export type MembershipClaim = { organisationId: number; organisationName: string; role: Role };
+export type MembershipClaim = {
+  organisationId: number;
+  organisationName: string;
+  role: Role;
+  /** The organisation holds invented example data (the demo), which its pages say; read with the session. */
+  exampleData?: boolean;
+};
 export type SessionUser = { id: number; memberships: MembershipClaim[] };
 
 export type Action = 'read' | 'create' | 'update' | 'delete';

@@ -1,6 +1,5 @@
 import 'server-only';
-import { QueryTypes } from 'sequelize';
-import { getSequelize } from '@/lib/db';
+import { selectRows } from '@/lib/db';
 import type { MembershipClaim, SessionUser } from '@/lib/permissions';
 import { Membership, Organisation, User, type Role } from '@/models';
 
@@ -30,6 +29,7 @@ type SessionRow = {
   organisationId: number | string | null;
   role: Role | null;
   organisationName: string | null;
+  exampleData: number | boolean | null;
 };
 
 /**
@@ -42,16 +42,17 @@ export async function loadUnendedSessionUser(
   sessionVersion: number,
   sid: string,
 ): Promise<CurrentUser | null> {
-  const rows = await getSequelize().query<SessionRow>(
+  const rows = await selectRows<SessionRow>(
     `SELECT u.email, u.name, u.session_version AS sessionVersion,
             EXISTS (SELECT 1 FROM ended_sessions e WHERE e.sid = :sid) AS ended,
-            m.organisation_id AS organisationId, m.role, o.name AS organisationName
+            m.organisation_id AS organisationId, m.role, o.name AS organisationName,
+            o.example_data AS exampleData
        FROM users u
        LEFT JOIN memberships m ON m.user_id = u.id
        LEFT JOIN organisations o ON o.id = m.organisation_id
       WHERE u.id = :userId
       ORDER BY m.id`,
-    { replacements: { userId, sid }, type: QueryTypes.SELECT },
+    { userId, sid },
   );
   const first = rows[0];
   if (!first || Number(first.ended) || Number(first.sessionVersion) !== sessionVersion) return null;
@@ -66,6 +67,7 @@ export async function loadUnendedSessionUser(
         organisationId: Number(r.organisationId),
         organisationName: r.organisationName ?? '',
         role: r.role as Role,
+        exampleData: Boolean(r.exampleData),
       })),
   };
 }
@@ -79,11 +81,16 @@ export async function loadUserById(userId: number): Promise<CurrentUser | null> 
 export async function memberships(userId: number): Promise<MembershipClaim[]> {
   const rows = await Membership.findAll({
     where: { userId },
-    include: [{ model: Organisation, as: 'organisation', attributes: ['id', 'name'] }],
+    include: [{ model: Organisation, as: 'organisation', attributes: ['id', 'name', 'exampleData'] }],
     order: [['id', 'ASC']],
   });
   return rows.map((m) => {
     const org = (m as Membership & { organisation?: Organisation }).organisation;
-    return { organisationId: m.organisationId, organisationName: org?.name ?? '', role: m.role };
+    return {
+      organisationId: m.organisationId,
+      organisationName: org?.name ?? '',
+      role: m.role,
+      exampleData: org?.exampleData ?? false,
+    };
   });
 }

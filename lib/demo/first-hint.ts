@@ -1,7 +1,6 @@
 import 'server-only';
-import { QueryTypes } from 'sequelize';
 import type { CurrentUser } from '@/lib/auth/session-user';
-import { getSequelize } from '@/lib/db';
+import { selectRows } from '@/lib/db';
 import { can } from '@/lib/permissions';
 import { DESERT_DESIGN_NAME, DESERT_ENCLOSURE_NAME, IMPROVED_VARIANT_NAME } from './designs';
 
@@ -33,7 +32,7 @@ export async function firstDesignHint(
   user: CurrentUser,
   organisationId: number,
 ): Promise<{ designId: number; compare: { a: number; b: number } | null } | null> {
-  const rows = await getSequelize().query<HintRow>(
+  const rows = await selectRows<HintRow>(
     `SELECT e.id AS enclosureId, e.keeper_id AS keeperId, d.id AS designId, v.id AS variantId,
             v.name AS variantName
        FROM organisations o
@@ -41,10 +40,7 @@ export async function firstDesignHint(
        LEFT JOIN designs d ON d.enclosure_id = e.id AND d.name = :designName
        LEFT JOIN variants v ON v.design_id = d.id
       WHERE o.id = :organisationId AND o.example_data = 1`,
-    {
-      replacements: { organisationId, enclosureName: DESERT_ENCLOSURE_NAME, designName: DESERT_DESIGN_NAME },
-      type: QueryTypes.SELECT,
-    },
+    { organisationId, enclosureName: DESERT_ENCLOSURE_NAME, designName: DESERT_DESIGN_NAME },
   );
   const enclosure = lowest(rows, (r) => r.enclosureId);
   if (!enclosure || !can(user, 'read', { kind: 'enclosure', organisationId, keeperId: enclosure.keeperId })) {

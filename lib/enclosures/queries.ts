@@ -1,5 +1,4 @@
 import 'server-only';
-import { col, fn, QueryTypes } from 'sequelize';
 import { z } from 'zod';
 import type { EnclosureWithKeeper } from '@/lib/access';
 import { notFound } from '@/lib/errors';
@@ -12,7 +11,7 @@ import {
 import { likeContains } from '@/lib/api/like';
 import { sortedListFields, withSort } from '@/lib/api/pagination';
 import { idSchema } from '@/lib/api/schemas';
-import { getSequelize } from '@/lib/db';
+import { selectRows } from '@/lib/db';
 import { Enclosure, User } from '@/models';
 
 /**
@@ -96,19 +95,18 @@ export async function listEnclosures(query: Omit<EnclosureListQuery, 'keeperId'>
     ...(keeperId ? { keeperId } : {}),
     ...search.replacements,
   };
-  const sequelize = getSequelize();
   const [rows, [counted]] = await Promise.all([
-    sequelize.query<EnclosureRowJson>(
+    selectRows<EnclosureRowJson>(
       `SELECT e.id, e.keeper_id AS keeperId, k.name AS keeperName, e.name, e.width_cm AS widthCm,
               e.height_cm AS heightCm, e.depth_cm AS depthCm, e.species_name AS speciesName,
               e.animal_name AS animalName, DATE_FORMAT(e.updated_at, '%Y-%m-%dT%H:%i:%s.000Z') AS updatedAt
          FROM enclosures e ${keeper} WHERE ${where}
         ORDER BY ${enclosureOrder(sort, descending)} LIMIT :limit OFFSET :offset`,
-      { replacements, type: QueryTypes.SELECT },
+      replacements,
     ),
-    sequelize.query<{ n: number | string }>(
+    selectRows<{ n: number | string }>(
       `SELECT COUNT(*) AS n FROM enclosures e ${search.sql.length ? keeper : ''} WHERE ${where}`,
-      { replacements, type: QueryTypes.SELECT },
+      replacements,
     ),
   ]);
   return { items: rows, total: Number(counted?.n ?? 0), offset, limit };
@@ -151,12 +149,11 @@ export async function enclosureCounts(
   keeperIds: number[],
 ): Promise<Map<number, number>> {
   if (keeperIds.length === 0) return new Map();
-  const rows = (await Enclosure.findAll({
-    attributes: ['keeperId', [fn('COUNT', col('id')), 'n']],
-    where: { organisationId, keeperId: keeperIds },
-    group: ['keeperId'],
-    raw: true,
-  })) as unknown as { keeperId: number; n: number | string }[];
+  const rows = await selectRows<{ keeperId: number; n: number | string }>(
+    `SELECT keeper_id AS keeperId, COUNT(*) AS n FROM enclosures
+      WHERE organisation_id = :organisationId AND keeper_id IN (:keeperIds) GROUP BY keeper_id`,
+    { organisationId, keeperIds },
+  );
   return new Map(rows.map((r) => [r.keeperId, Number(r.n)]));
 }
 

@@ -1,10 +1,9 @@
 import 'server-only';
-import { QueryTypes } from 'sequelize';
 import { z } from 'zod';
 import { likeContains } from '@/lib/api/like';
 import { sortedListFields, withSort } from '@/lib/api/pagination';
 import { idSchema } from '@/lib/api/schemas';
-import { getSequelize } from '@/lib/db';
+import { selectRows } from '@/lib/db';
 import { Enclosure } from '@/models';
 import { LAMP_TECH_IDS } from '@/simulation';
 import { addDays, todayIso } from './dates';
@@ -282,10 +281,10 @@ type StatusCounts = { byRank: Map<number, number>; staleByDate: number };
  * costs a handful of rows however many lamps the organisation owns.
  */
 async function statusCounts(organisationId: number, today: string): Promise<StatusCounts> {
-  const rows = await getSequelize().query<{ rank: number; n: number | string; stale: number | string }>(
+  const rows = await selectRows<{ rank: number; n: number | string; stale: number | string }>(
     `SELECT status_rank AS \`rank\`, SUM(n) AS n, SUM(IF(as_of < :today, n, 0)) AS stale
        FROM lamp_outlook_counts WHERE organisation_id = :organisationId GROUP BY status_rank`,
-    { replacements: { organisationId, today }, type: QueryTypes.SELECT },
+    { organisationId, today },
   );
   return {
     byRank: new Map(rows.map((r) => [Number(r.rank), Number(r.n)])),
@@ -301,14 +300,14 @@ async function statusCounts(organisationId: number, today: string): Promise<Stat
  */
 async function versionPending(scope: Scope, today: string): Promise<number> {
   const keeper = scope.keeperId ? 'AND e.keeper_id = :keeperId' : '';
-  const [row] = await getSequelize().query<{ n: number | string; old: number | string | null }>(
+  const [row] = await selectRows<{ n: number | string; old: number | string | null }>(
     // STRAIGHT_JOIN: from the waiting lamps (few) to their enclosures, never from the organisation's
     // enclosures (many) to their lamps.
     `SELECT STRAIGHT_JOIN COUNT(*) AS n, SUM(o.as_of < :today) AS old
        FROM lamps l JOIN enclosures e FORCE INDEX (PRIMARY) ON e.id = l.enclosure_id
        LEFT JOIN lamp_outlooks o ON o.lamp_id = l.id
       WHERE l.outlook_pending = 1 AND e.organisation_id = :organisationId ${keeper}`,
-    { replacements: { ...scope, today }, type: QueryTypes.SELECT },
+    { ...scope, today },
   );
   return Number(row?.n ?? 0) - Number(row?.old ?? 0);
 }
@@ -341,13 +340,13 @@ async function countsOf(scope: Scope, today: string): Promise<Counted> {
   }
   // The keeper's enclosures first (by the keeper's index), then their lamps and outlooks by key: the
   // cost follows the keeper's lamps, not the organisation's.
-  const [row] = await getSequelize().query<Record<keyof LampCounts, string | number | null>>(
+  const [row] = await selectRows<Record<keyof LampCounts, string | number | null>>(
     `SELECT STRAIGHT_JOIN SUM(o.status_rank = 0) AS \`replace\`, SUM(o.status_rank = 1) AS testSoon,
             SUM(o.status_rank < 4) AS inUse,
             SUM(l.outlook_pending = 1 OR o.as_of < :today) AS pending
        FROM enclosures e JOIN lamps l ON l.enclosure_id = e.id LEFT JOIN lamp_outlooks o ON o.lamp_id = l.id
       WHERE e.keeper_id = :keeperId AND e.organisation_id = :organisationId`,
-    { replacements: { ...scope, today }, type: QueryTypes.SELECT },
+    { ...scope, today },
   );
   return {
     counts: {
@@ -425,7 +424,6 @@ const sortId = (query: Pick<LampListFilter, 'sort' | 'descending' | 'due'>) =>
  * caller has decided with `can()` whose lamps this user may see and passes `keeperId` for a keeper.
  */
 export async function listLamps(query: LampListFilter) {
-  const sequelize = getSequelize();
   const today = todayIso();
   const { rowsSql, countSql, replacements, backwards, sortId: sorted } = lampListSql(query, today);
   const scope = { organisationId: query.organisationId, keeperId: query.keeperId };
@@ -433,11 +431,11 @@ export async function listLamps(query: LampListFilter) {
   // is counted by its own query, started beside them.
   const countable = onlyByStatus(query);
   const [found, counted, [counting]] = await Promise.all([
-    sequelize.query<LampRowRaw & Record<string, unknown>>(rowsSql, { replacements, type: QueryTypes.SELECT }),
+    selectRows<LampRowRaw & Record<string, unknown>>(rowsSql, replacements),
     countsOf(scope, today),
     countable
       ? Promise.resolve([null])
-      : sequelize.query<{ n: number | string }>(countSql, { replacements, type: QueryTypes.SELECT }),
+      : selectRows<{ n: number | string }>(countSql, replacements),
   ]);
   const { counts } = counted;
   const total = totalFromCounts(query, counted.byRank) ?? Number(counting?.n ?? 0);

@@ -1,7 +1,7 @@
 import 'server-only';
-import { Op, QueryTypes } from 'sequelize';
+import { Op } from 'sequelize';
 import { afterCursor } from '@/lib/api/pagination';
-import { getSequelize } from '@/lib/db';
+import { selectRows } from '@/lib/db';
 import { runEngineTask, type EngineTaskResult, type RunOptions } from '@/lib/engine-pool';
 import { toDto as lampTypeDto } from '@/lib/lamp-types/queries';
 import type { LampTypeDto } from '@/lib/lamp-types/schema';
@@ -317,9 +317,9 @@ export const LAMP_ROW_SQL = {
  */
 export async function lampRowsOf(ids: readonly number[], today = todayIso()): Promise<LampRow[]> {
   if (ids.length === 0) return [];
-  const raw = await getSequelize().query<LampRowRaw>(
+  const raw = await selectRows<LampRowRaw>(
     `SELECT ${LAMP_ROW_SQL.columns} FROM lamps l ${LAMP_ROW_SQL.joins} WHERE l.id IN (:ids)`,
-    { replacements: { ids: [...ids] }, type: QueryTypes.SELECT },
+    { ids: [...ids] },
   );
   return lampRowsFrom(raw, ids, today);
 }

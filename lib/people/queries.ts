@@ -1,5 +1,5 @@
 import 'server-only';
-import { Op, QueryTypes } from 'sequelize';
+import { Op } from 'sequelize';
 import { z } from 'zod';
 import {
   defaultPeopleDescending,
@@ -9,7 +9,7 @@ import {
   type MemberSortColumn,
 } from '@/lib/people/list-view';
 import type { Role } from '@/lib/permissions';
-import { getSequelize } from '@/lib/db';
+import { selectRows } from '@/lib/db';
 import { invitationJson } from '@/lib/auth/invitations';
 import { likeContains } from '@/lib/api/like';
 import { sortedListFields, withSort } from '@/lib/api/pagination';
@@ -84,18 +84,14 @@ export async function listPeople(query: PeopleListQuery) {
   const from = `FROM memberships m JOIN users u ON u.id = m.user_id
       WHERE m.organisation_id = :organisationId${role ? ' AND m.role = :role' : ''}${search.sql}`;
   const replacements = { organisationId, offset, limit, ...(role ? { role } : {}), ...search.replacements };
-  const sequelize = getSequelize();
   const [items, [counted]] = await Promise.all([
-    sequelize.query<PersonRow>(
+    selectRows<PersonRow>(
       `SELECT m.user_id AS userId, u.name, u.email, m.role,
               DATE_FORMAT(m.created_at, '%Y-%m-%dT%H:%i:%s.000Z') AS joinedAt
          ${from} ORDER BY ${peopleOrder(sort, descending)} LIMIT :limit OFFSET :offset`,
-      { replacements, type: QueryTypes.SELECT },
-    ),
-    sequelize.query<{ n: number | string }>(`SELECT COUNT(*) AS n ${from}`, {
       replacements,
-      type: QueryTypes.SELECT,
-    }),
+    ),
+    selectRows<{ n: number | string }>(`SELECT COUNT(*) AS n ${from}`, replacements),
   ]);
   return { items, total: Number(counted?.n ?? 0), offset, limit };
 }

@@ -37,7 +37,8 @@ export default async function EnclosuresPage({ searchParams }: SearchParamsProps
     listEnclosures({ organisationId: orgId, keeperId, ...listQueryForView(view) }),
     // Only the person the address filters by: the new-enclosure form searches people as one types.
     keeperFilter ? memberName(orgId, keeperFilter) : Promise.resolve(null),
-    hintDone ? Promise.resolve(null) : firstDesignHint(user, orgId),
+    // The hint is about the demo's example enclosure: only an organisation of example data has one.
+    hintDone || !membership.exampleData ? Promise.resolve(null) : firstDesignHint(user, orgId),
   ]);
   const filteredName = filtered?.name;
 

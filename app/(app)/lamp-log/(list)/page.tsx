@@ -11,7 +11,6 @@ import { button, link } from '@/components/ui/styles';
 import { filteredEnclosure, lampListQuery, listLamps } from '@/lib/lamp-log/list-queries';
 import { memberName } from '@/lib/people/queries';
 import { lampListView } from '@/lib/lamp-log/list-view';
-import { isExampleData } from '@/lib/organisations/queries';
 import { toSearchParams } from '@/lib/list-view';
 import { can, roleIn } from '@/lib/permissions';
 import { requireMembership, type SearchParamsProps } from '@/lib/session';
@@ -26,7 +25,7 @@ export const metadata: Metadata = { title: 'Lamp log' };
 export default async function LampLogPage({ searchParams }: SearchParamsProps) {
   const session = await requireMembership('/lamp-log');
   if (!session) return null;
-  const { user, organisationId: orgId } = session;
+  const { user, membership, organisationId: orgId } = session;
   const isKeeper = roleIn(user, orgId) === 'keeper';
   const seesAll = can(user, 'read', { kind: 'member', organisationId: orgId });
   const view = lampListView.viewFromSearchParams(toSearchParams(await searchParams));
@@ -38,13 +37,14 @@ export default async function LampLogPage({ searchParams }: SearchParamsProps) {
   const { keeper, ...rest } = query;
   const keeperId = isKeeper ? user.id : keeper;
   // Asked together: each is a round trip to the database, and none needs another's answer.
-  const [firstPage, keeperShown, enclosure, example] = await Promise.all([
+  const [firstPage, keeperShown, enclosure] = await Promise.all([
     listLamps({ ...rest, keeperId }),
     // Only the keeper the address filters by: the filter searches the others as one types.
     seesAll && keeper ? memberName(orgId, keeper, 'keeper') : Promise.resolve(null),
     query.enclosure ? filteredEnclosure(orgId, query.enclosure, isKeeper ? user.id : undefined) : null,
-    isExampleData(orgId),
   ]);
+  // Read with the session's membership: no query of its own.
+  const example = membership.exampleData === true;
   const { counts } = firstPage;
   const techs = LAMP_TECH_IDS.map((id) => ({ id, label: LAMP_TECHS[id].label }));
   const unfiltered = !view.q && Object.keys(view.filters ?? {}).length === 0;
