@@ -61,6 +61,13 @@ export async function selectRows<T extends object>(
   replacements: Record<string, unknown> = {},
 ): Promise<T[]> {
   const sequelize = getSequelize();
+  // Asked to log (a test counting a page's queries, someone debugging): through Sequelize, which logs it.
+  if ((sequelize as unknown as { options: { logging?: unknown } }).options.logging) {
+    return sequelize.query<T>(sql, {
+      replacements: replacements as BindOrReplacements,
+      type: QueryTypes.SELECT,
+    });
+  }
   const pool = sequelize.connectionManager as unknown as Pool;
   // Waiting for a connection fails as Sequelize's own acquire timeout: nothing to ask again.
   const connection = await pool.getConnection({ type: 'SELECT' });
@@ -72,7 +79,10 @@ export async function selectRows<T extends object>(
   } finally {
     await pool.releaseConnection(connection);
   }
-  return rows ?? sequelize.query<T>(sql, { replacements: replacements as BindOrReplacements, type: QueryTypes.SELECT });
+  return (
+    rows ??
+    sequelize.query<T>(sql, { replacements: replacements as BindOrReplacements, type: QueryTypes.SELECT })
+  );
 }
 
 /**

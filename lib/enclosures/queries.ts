@@ -150,8 +150,8 @@ export async function enclosureCounts(
 ): Promise<Map<number, number>> {
   if (keeperIds.length === 0) return new Map();
   const rows = await selectRows<{ keeperId: number; n: number | string }>(
-    `SELECT keeper_id AS keeperId, COUNT(*) AS n FROM enclosures
-      WHERE organisation_id = :organisationId AND keeper_id IN (:keeperIds) GROUP BY keeper_id`,
+    `SELECT e.keeper_id AS keeperId, COUNT(*) AS n FROM enclosures e
+      WHERE e.organisation_id = :organisationId AND e.keeper_id IN (:keeperIds) GROUP BY e.keeper_id`,
     { organisationId, keeperIds },
   );
   return new Map(rows.map((r) => [r.keeperId, Number(r.n)]));

@@ -433,9 +433,7 @@ export async function listLamps(query: LampListFilter) {
   const [found, counted, [counting]] = await Promise.all([
     selectRows<LampRowRaw & Record<string, unknown>>(rowsSql, replacements),
     countsOf(scope, today),
-    countable
-      ? Promise.resolve([null])
-      : selectRows<{ n: number | string }>(countSql, replacements),
+    countable ? Promise.resolve([null]) : selectRows<{ n: number | string }>(countSql, replacements),
   ]);
   const { counts } = counted;
   const total = totalFromCounts(query, counted.byRank) ?? Number(counting?.n ?? 0);

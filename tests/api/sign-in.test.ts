@@ -310,7 +310,12 @@ describe('POST /api/sign-up', () => {
     );
     const { memberships } = await import('@/lib/auth/session-user');
     expect(await memberships(Number(user.id))).toEqual([
-      { organisationId: expect.any(Number), organisationName: 'Quarry Household', role: 'owner' },
+      {
+        organisationId: expect.any(Number),
+        organisationName: 'Quarry Household',
+        role: 'owner',
+        exampleData: false,
+      },
     ]);
     const stored = await User.scope('withPassword').findOne({ where: { email: body.email } });
     expect(stored?.passwordHash).toMatch(/^\$2[aby]\$/);
