@@ -20,7 +20,7 @@ export function LampCell({ l }: { l: Row }) {
       <Link href={`/lamp-log/${l.id}`} className={link}>
         {l.label}
       </Link>
-      <div className="text-caption text-basalt-500">{l.lampType.name}</div>
+      <div className="cell-note">{l.lampType.name}</div>
     </>
   );
 }
@@ -31,9 +31,7 @@ export function EnclosureCell({ l }: { l: Row }) {
       <Link href={`/enclosures/${l.enclosure.id}/lamps`} className={link}>
         {l.enclosure.name}
       </Link>
-      {l.enclosure.speciesName && (
-        <div className="text-caption text-basalt-500">{l.enclosure.speciesName}</div>
-      )}
+      {l.enclosure.speciesName && <div className="cell-note">{l.enclosure.speciesName}</div>}
     </>
   );
 }
@@ -42,7 +40,7 @@ export function AgeCell({ l }: { l: Row }) {
   return (
     <>
       {formatAge(l.ageDays)}
-      <div className="text-caption text-basalt-500">{l.hoursPerDay} h a day</div>
+      <div className="cell-note">{l.hoursPerDay} h a day</div>
     </>
   );
 }
@@ -51,7 +49,7 @@ export function LastReadingCell({ l, unit }: { l: Row; unit: LengthUnit }) {
   return l.lastReading ? (
     <>
       {formatValue(l.lastReading.value, l.lastReading.unit)}
-      <div className="text-caption text-basalt-500">
+      <div className="cell-note">
         at {formatLengthRounded(l.lastReading.distanceCm, unit)},{' '}
         <LocalTime value={l.lastReading.takenAt} shown="day" />
       </div>
@@ -65,7 +63,7 @@ export function RemainingCell({ l }: { l: Row }) {
   return (
     <>
       {l.status === 'heat-only' ? '—' : `${Math.round(l.remainingFraction * 100)} %`}
-      <div className="text-caption text-basalt-500">
+      <div className="cell-note">
         {l.fit.kind === 'none' ? 'usual curve' : l.fit.certainty === 'fitted' ? 'fitted' : 'uncertain'}
       </div>
     </>
@@ -77,13 +75,13 @@ export function FallsBelowCell({ l }: { l: Row }) {
     <>
       <span className="tabular-nums">{formatDay(l.fallsBelowOn)}</span>
       {l.fallsBelowEarliestOn && l.fallsBelowEarliestOn < l.fallsBelowOn && (
-        <div className="text-caption text-basalt-500">as early as {formatDay(l.fallsBelowEarliestOn)}</div>
+        <div className="cell-note">as early as {formatDay(l.fallsBelowEarliestOn)}</div>
       )}
     </>
   ) : l.judged ? (
     <span className="text-basalt-500">Not within 5 years</span>
   ) : l.missing.length > 0 && l.status !== 'retired' && l.status !== 'heat-only' ? (
-    <span className="text-caption text-basalt-500">Needs {l.missing.join('; ')}</span>
+    <span className="cell-note">Needs {l.missing.join('; ')}</span>
   ) : (
     <span className="text-basalt-500">—</span>
   );
@@ -93,14 +91,15 @@ export function StatusCell({ l }: { l: Row }) {
   return (
     <>
       <StatusBadge status={l.status} label={l.statusLabel} />
-      <div className="mt-1 max-w-56 text-caption text-basalt-500">{l.reason && readableDays(l.reason)}</div>
+      <div className="cell-note mt-1 max-w-56">{l.reason && readableDays(l.reason)}</div>
     </>
   );
 }
 
+/** The lamp tables' cell classes (app/globals.css): one short class each, as every row repeats them. */
 export const LAMP_CELL = {
-  text: 'px-4 py-3 text-basalt-700',
-  figure: 'whitespace-nowrap px-4 py-3 tabular-nums text-basalt-700',
+  text: 'cell-text',
+  figure: 'cell-figure',
 };
 
 /** The lamp columns the lamp log and an enclosure's lamp page share; ids are the lamp log's sort keys. */

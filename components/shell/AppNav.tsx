@@ -2,7 +2,6 @@
 
 import Link from '@/components/ui/Link';
 import { usePathname } from 'next/navigation';
-import { focusRing } from '@/components/ui/styles';
 import { activeNavHref } from './nav-active';
 
 export type NavItem = { href: string; label: string };
@@ -22,11 +21,8 @@ export function AppNav({ items }: { items: NavItem[] }) {
             key={item.href}
             href={item.href}
             aria-current={active ? 'page' : undefined}
-            className={`whitespace-nowrap rounded-t-md border-b-2 px-3 py-2 text-body font-medium ${focusRing} ${
-              active
-                ? 'border-sand-400 text-white'
-                : 'border-transparent text-basalt-300 hover:border-basalt-500 hover:text-white'
-            }`}
+            // One class (app/globals.css): the current tab is styled by its aria-current.
+            className="nav-tab"
           >
             {item.label}
           </Link>
