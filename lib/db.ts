@@ -74,6 +74,8 @@ export async function selectRows<T extends object>(
   let rows: T[] | null;
   try {
     rows = await connection.query<T>({ sql, namedPlaceholders: true }, replacements);
+    // The driver hangs its column metadata on the array; Sequelize's answer was the rows alone.
+    delete (rows as { meta?: unknown }).meta;
   } catch {
     rows = null;
   } finally {
