@@ -38,53 +38,20 @@ export function getSequelize(): Sequelize {
   return holder.__baskwellDb?.sequelize ?? open();
 }
 
-/** The driver's side of a pooled connection: what selectRows asks of it. */
-type DriverConnection = {
-  query<T>(options: { sql: string; namedPlaceholders: true }, values: object): Promise<T[]>;
-};
-type Pool = {
-  getConnection(options: { type: 'SELECT' }): Promise<DriverConnection>;
-  releaseConnection(connection: DriverConnection): Promise<void> | void;
-};
-
 /**
- * The rows of a SELECT the app writes as SQL (`:name` replacements, arrays expanded for `IN (:ids)`),
- * run on a connection of Sequelize's pool by the driver itself. Sequelize's own `query` adds, for each
- * call, its replacement tokenizer, hooks, retry wrapper and result formatting, about a third of a
- * millisecond of CPU and dozens of promises, for rows it hands back unchanged; the pages and the session
- * check ask several such reads on every request. Same connections, same type casts and time zone, same
- * rows. A read that fails is asked once more through `sequelize.query`, so a failure reaches the caller
- * as the Sequelize error (connection lost, timeout) that the error pipeline maps, with its retries.
+ * The rows of a SELECT the app writes as SQL (`:name` replacements, arrays expanded for `IN (:ids)`).
+ * Reading them on the driver directly, past Sequelize's per-query machinery, was measured at about 4 %
+ * of a lamp-log page's CPU, within the noise of that measure, and needed a second path for tests that
+ * count queries; every read goes through Sequelize, as production and the tests alike see it.
  */
-export async function selectRows<T extends object>(
+export function selectRows<T extends object>(
   sql: string,
   replacements: Record<string, unknown> = {},
 ): Promise<T[]> {
-  const sequelize = getSequelize();
-  // Asked to log (a test counting a page's queries, someone debugging): through Sequelize, which logs it.
-  if ((sequelize as unknown as { options: { logging?: unknown } }).options.logging) {
-    return sequelize.query<T>(sql, {
-      replacements: replacements as BindOrReplacements,
-      type: QueryTypes.SELECT,
-    });
-  }
-  const pool = sequelize.connectionManager as unknown as Pool;
-  // Waiting for a connection fails as Sequelize's own acquire timeout: nothing to ask again.
-  const connection = await pool.getConnection({ type: 'SELECT' });
-  let rows: T[] | null;
-  try {
-    rows = await connection.query<T>({ sql, namedPlaceholders: true }, replacements);
-    // The driver hangs its column metadata on the array; Sequelize's answer was the rows alone.
-    delete (rows as { meta?: unknown }).meta;
-  } catch {
-    rows = null;
-  } finally {
-    await pool.releaseConnection(connection);
-  }
-  return (
-    rows ??
-    sequelize.query<T>(sql, { replacements: replacements as BindOrReplacements, type: QueryTypes.SELECT })
-  );
+  return getSequelize().query<T>(sql, {
+    replacements: replacements as BindOrReplacements,
+    type: QueryTypes.SELECT,
+  });
 }
 
 /**
