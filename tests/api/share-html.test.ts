@@ -2,6 +2,7 @@
 // request's own CSP nonce, and never to a link that no longer works. The page render is stood in for by
 // a renderer that records what it was asked and answers with a nonce of its own, as the server does;
 // tests/browser/variants.browser.ts, journey-visitor and csp.browser.ts open the real thing in Chromium.
+import path from 'node:path';
 import { NextRequest } from 'next/server';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import * as shareRoute from '@/app/api/shares/[id]/route';
@@ -31,6 +32,9 @@ import { call, ORIGIN, postDesign, postShare } from './variants.helpers';
 
 withTestDatabase();
 beforeEach(() => sharePagesHtml.clear());
+
+/** The held route's file, imported afresh by the test of its offer. */
+const ROUTE = path.resolve(import.meta.dirname, '../../app/s/[token]/held/route.ts');
 
 async function sharedLink(expiresInDays?: number) {
   const { staff, enclosure } = await createKeeperWorld('Shop A', {
@@ -275,9 +279,11 @@ describe('the proxy answers a share page visit itself once the held route is loa
   };
 
   it('is offered by the held route as Next loads it', async () => {
-    // Nothing in this file has loaded the route before (each test file has its own modules).
+    offerHeldShareServer(undefined);
     expect(heldShareServer()).toBeNull();
-    await import('@/app/s/[token]/held/route');
+    // A module of its own for this load: database files share loaded modules, and an earlier file may
+    // already have loaded the route (its offer then made long before, and taken back since).
+    await import(/* @vite-ignore */ `${ROUTE}?load=${Date.now()}`);
     expect(heldShareServer()).toBeTypeOf('function');
   });
 
