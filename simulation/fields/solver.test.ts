@@ -203,6 +203,31 @@ describe('FieldSolver sums', () => {
       };
     }
   });
+  it('sums any number of lamps three at a time, the last three filled up with zeros: the bits of a fresh computation', () => {
+    // 0–8 lamps: no lamp, a group of three padded by one or two empty fields, and two or three groups
+    // carried over in doubles between them. The first and the last lamp are dragged in turn.
+    const all = benchDesign(3, 1).objects;
+    const lamps = all.filter((o) => o.type === 'lamp');
+    const barriers = all.filter((o) => o.type !== 'lamp');
+    const opts = { cellCm: 1.5 };
+    for (let n = 0; n <= lamps.length - 1; n++) {
+      let now: Design = { ...benchDesign(), objects: [...lamps.slice(0, n), ...barriers] };
+      const solver = new FieldSolver();
+      for (let step = 0; step < 5; step++) {
+        const got = solver.compute(now, opts);
+        if (step > 0 && n > 0) expect(solver.stats).toMatchObject({ full: 1, cached: n - 1 });
+        const fresh = computeFields(now, opts);
+        expect([n, differing(got.uvb, fresh.uvb)]).toEqual([n, 0]);
+        expect([n, differing(got.uvi, fresh.uvi)]).toEqual([n, 0]);
+        expect([n, differing(got.tempC, fresh.tempC)]).toEqual([n, 0]);
+        const id = step % 2 ? lamps[n - 1]?.id : lamps[0]?.id;
+        now = {
+          ...now,
+          objects: now.objects.map((o) => (o.id === id && o.type === 'lamp' ? { ...o, x: o.x + 1.5 } : o)),
+        };
+      }
+    }
+  });
 });
 
 describe('FieldSolver recycled results', () => {

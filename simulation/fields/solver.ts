@@ -111,6 +111,22 @@ export class FieldSolver {
   private spareResults: ArrayBuffer[] = [];
   readonly stats: SolverStats = { full: 0, slid: 0, endsReused: 0, partial: 0, cached: 0, cellsEvaluated: 0 };
 
+  /** A field of zeros the size of the grid, filling up the last group of three lamps (lampGroups). */
+  private zeros = EMPTY;
+  /** A run's sums between groups of three lamps (sumRow). */
+  private partial = { pu: new Float64Array(0), pv: new Float64Array(0), pq: new Float64Array(0) };
+
+  private zerosOf(cells: number): Float32Array {
+    if (this.zeros.length !== cells) this.zeros = new Float32Array(cells);
+    return this.zeros;
+  }
+
+  private runSums(nx: number) {
+    if (this.partial.pu.length < nx)
+      this.partial = { pu: new Float64Array(nx), pv: new Float64Array(nx), pq: new Float64Array(nx) };
+    return this.partial;
+  }
+
   /** Bytes held for the last tube slid along its line (0 when none is kept). */
   get slideBytes(): number {
     return this.slideMap?.bytes ?? 0;
@@ -214,7 +230,18 @@ export class FieldSolver {
       air[j] = airTempC((j + 0.5) * cell, scene.height, scene.roomC, scene.airRiseK);
     // Totals are always summed lamp by lamp in scene order, so an incremental update is bit-identical
     // to a full one.
-    const sums: RowSums = { lu: used.map((e) => e.uv), li: used.map((e) => e.ir), fu, fi, hc, out: t };
+    const sums: RowSums = {
+      groups: lampGroups(
+        used.map((e) => e.uv),
+        used.map((e) => e.ir),
+        fu,
+        fi,
+        used.length % 3 === 0 && used.length > 0 ? EMPTY : this.zerosOf(cells),
+      ),
+      hc,
+      out: t,
+      ...this.runSums(nx),
+    };
     if (incremental) {
       // The same sums, over the runs of changed cells of each row.
       const dirty = this.dirty;
@@ -433,45 +460,131 @@ function diffOccluders(old: LampEntry, now: Occluder[], nowKeys: string[]): Occl
   return changed;
 }
 
+/**
+ * Three lamps' fields and factors held in locals: a loop over an array of lamps per cell reloads each
+ * lamp's buffer and its bounds for every cell, which cost more than the adding itself (a demo drag step's
+ * sums took about twice as long as with the three lamps written out).
+ */
+interface LampGroup {
+  u0: Float32Array;
+  u1: Float32Array;
+  u2: Float32Array;
+  i0: Float32Array;
+  i1: Float32Array;
+  i2: Float32Array;
+  f0: number;
+  f1: number;
+  f2: number;
+  g0: number;
+  g1: number;
+  g2: number;
+}
+
+/**
+ * The lamps in scene order in groups of three, the last group filled up with a field of zeros (factor 0):
+ * adding +0 leaves every sum as it was (a sum that starts at +0 is never −0), so the padding keeps the bits.
+ */
+function lampGroups(lu: Float32Array[], li: Float32Array[], fu: number[], fi: number[], zeros: Float32Array) {
+  const groups: LampGroup[] = [];
+  // No lamps: one group of zeros, every sum 0 as the loop over no lamps leaves it.
+  for (let k = 0; k < Math.max(lu.length, 1); k += 3) {
+    const at = (a: Float32Array[], m: number) => (k + m < lu.length ? a[k + m]! : zeros);
+    const f = (a: number[], m: number) => (k + m < lu.length ? a[k + m]! : 0);
+    groups.push({
+      u0: at(lu, 0),
+      u1: at(lu, 1),
+      u2: at(lu, 2),
+      i0: at(li, 0),
+      i1: at(li, 1),
+      i2: at(li, 2),
+      f0: f(fu, 0),
+      f1: f(fu, 1),
+      f2: f(fu, 2),
+      g0: f(fi, 0),
+      g1: f(fi, 1),
+      g2: f(fi, 2),
+    });
+  }
+  return groups;
+}
+
 /** What sumRow adds up and where it writes. */
 interface RowSums {
-  lu: Float32Array[];
-  li: Float32Array[];
-  fu: number[];
-  fi: number[];
+  groups: LampGroup[];
   hc: number;
   out: Totals;
+  /** A run's sums so far, between groups (more than three lamps), at least a row long. */
+  pu: Float64Array;
+  pv: Float64Array;
+  pq: Float64Array;
 }
 
 /**
  * The totals and surface temperatures of cells from..to−1 of the row starting at cell `base`: each cell's
  * lamp values are added in scene order, so every cell gets the same sums in the same order whichever cells
  * are summed together (an incremental update is bit-identical to a full one), and its temperature follows
- * at once, as finishRow would work it out. A cell at a time, with no row buffers to clear, fill and read
- * again: a drag step sums only the cells the moved lamp changed, in a few short runs per row.
+ * at once, as finishRow would work it out. A drag step sums only the cells the moved lamp changed, in a
+ * few short runs per row. With more than three lamps the run is summed a group at a time, its sums so far
+ * kept in doubles, which holds them exactly as the one loop over the lamps would.
  */
 function sumRow(s: RowSums, base: number, from: number, to: number, airC: number) {
-  const { lu, li, fu, fi, hc } = s;
-  const { uvb, uvi, tempC } = s.out;
-  const n = lu.length;
-  const { absorptance, emissivity } = HEAT_DEFAULTS;
-  const bal = balanceAt(airC, emissivity, hc);
-  for (let c = base + from; c < base + to; c++) {
-    // 0 + the first term, as a sum into a cleared total starts (it keeps the bits of a −0 term alike).
-    let u = 0;
-    let v = 0;
-    let q = 0;
-    for (let k = 0; k < n; k++) {
-      const val = lu[k]![c]!;
-      u = u + val * fu[k]!;
-      v = v + val * fi[k]!;
-      q = q + li[k]![c]!;
-    }
-    uvb[c] = u;
-    uvi[c] = v;
-    tempC[c] = cellTempC(absorptance * q, bal, hc, airC);
+  const { groups, pu, pv, pq } = s;
+  const last = groups.length - 1;
+  for (let g = 0; g < last; g++) addGroup(groups[g]!, g > 0, pu, pv, pq, base + from, base + to);
+  finishGroup(s, groups[last]!, last > 0, base + from, base + to, airC);
+}
+
+/**
+ * A cell's sum so far (s) with three lamps' values times their factors, left to right as the loop over the
+ * lamps adds: ((s + a·f0) + b·f1) + d·f2. The radiant sums pass factors of 1 (x·1 is x, bit for bit).
+ */
+function add3(s: number, a: number, b: number, d: number, f0: number, f1: number, f2: number): number {
+  return s + a * f0 + b * f1 + d * f2;
+}
+
+/** Sums so far of cells c0..c1−1 into pu, pv, pq (from c0 on), after those of the groups before (carry). */
+function addGroup(
+  l: LampGroup,
+  carry: boolean,
+  pu: Float64Array,
+  pv: Float64Array,
+  pq: Float64Array,
+  c0: number,
+  c1: number,
+) {
+  const { u0, u1, u2, i0, i1, i2, f0, f1, f2, g0, g1, g2 } = l;
+  for (let c = c0; c < c1; c++) {
+    const x = c - c0;
+    pu[x] = add3(carry ? pu[x]! : 0, u0[c]!, u1[c]!, u2[c]!, f0, f1, f2);
+    pv[x] = add3(carry ? pv[x]! : 0, u0[c]!, u1[c]!, u2[c]!, g0, g1, g2);
+    pq[x] = add3(carry ? pq[x]! : 0, i0[c]!, i1[c]!, i2[c]!, 1, 1, 1);
   }
 }
+
+/**
+ * The last group's values added to the sums so far (carry) or to 0, the totals written, and the surface
+ * temperatures of the radiant sums (left in pq).
+ */
+function finishGroup(s: RowSums, l: LampGroup, carry: boolean, c0: number, c1: number, airC: number) {
+  const { hc, pu, pv, pq } = s;
+  const { uvb, uvi, tempC } = s.out;
+  const { u0, u1, u2, i0, i1, i2, f0, f1, f2, g0, g1, g2 } = l;
+  const { absorptance, emissivity } = HEAT_DEFAULTS;
+  const bal = balanceAt(airC, emissivity, hc);
+  // Starting at 0 when nothing is carried, as a sum into a cleared total starts (it keeps the bits of a −0
+  // term alike).
+  for (let c = c0; c < c1; c++) {
+    const x = c - c0;
+    uvb[c] = add3(carry ? pu[x]! : 0, u0[c]!, u1[c]!, u2[c]!, f0, f1, f2);
+    uvi[c] = add3(carry ? pv[x]! : 0, u0[c]!, u1[c]!, u2[c]!, g0, g1, g2);
+    pq[x] = add3(carry ? pq[x]! : 0, i0[c]!, i1[c]!, i2[c]!, 1, 1, 1);
+  }
+  // The temperatures in a loop of their own: with the loads and adds out of the way the square roots and
+  // divisions of successive cells overlap (a run's sums and temperatures about 20 % faster than in one loop).
+  for (let c = c0; c < c1; c++) tempC[c] = cellTempC(absorptance * pq[c - c0]!, bal, hc, airC);
+}
+
+const EMPTY = new Float32Array(0);
 
 /** The results of the last call, already in the float32 they are handed out in. */
 interface Totals {
