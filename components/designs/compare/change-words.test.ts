@@ -35,6 +35,13 @@ describe('the "what differs" table in words', () => {
       'technology: T5 fluorescent tube → T8 fluorescent tube',
     );
     expect(changeText({ field: 'x1', a: 10, b: 12.5 })).toBe('start x: 10 cm → 12.5 cm');
+    // Values that differ but round alike are shown to more digits.
+    expect(changeText({ field: 'uviPerUvb', a: 0.040213, b: 0.04 })).toBe(
+      'UV Index per µW/cm²: 0.04021 → 0.04',
+    );
+    expect(changeText({ field: 'uvbTransmission', a: 0.6404, b: 0.64 })).toBe(
+      'UVB let through: 64.04 % → 64 %',
+    );
   });
 
   it('names a change to a field it does not know without printing the stored value', () => {

@@ -74,15 +74,16 @@ function decayWords(v: unknown): string | null {
 
 const num = (v: number) => Number(v.toFixed(2)).toString();
 
-/** One value of `field` in words. */
-export function valueText(v: unknown, field?: string): string {
+/** One value of `field` in words (`precise`: numbers to 4 significant digits, not 2 decimals). */
+export function valueText(v: unknown, field?: string, precise = false): string {
   const f = field ? FIELD[field] : undefined;
   if (v === undefined) return f?.unset ?? 'not set (default)';
   const worded = f?.words?.(v);
   if (worded) return worded;
   if (typeof v === 'number') {
-    if (f?.percent) return `${Number((v * 100).toFixed(1))} %`;
-    return f?.unit ? `${num(v)} ${f.unit}` : num(v);
+    const n = (x: number) => (precise ? String(Number(x.toPrecision(4))) : num(x));
+    if (f?.percent) return `${precise ? n(v * 100) : Number((v * 100).toFixed(1))} %`;
+    return f?.unit ? `${n(v)} ${f.unit}` : n(v);
   }
   if (typeof v === 'string') return v;
   if (typeof v === 'boolean') return v ? 'yes' : 'no';
@@ -90,9 +91,19 @@ export function valueText(v: unknown, field?: string): string {
   return 'set';
 }
 
-/** "age: 10.8 months → 0 months". */
-export const changeText = (c: FieldChange) =>
-  `${FIELD[c.field]?.label ?? c.field}: ${valueText(c.a, c.field)} → ${valueText(c.b, c.field)}`;
+/**
+ * "age: 10.8 months → 0 months". Two numbers that differ but round alike (a lamp type's 0.0402 UVI per
+ * µW/cm² against 0.04) are shown to more digits, so a change never reads "0.04 → 0.04".
+ */
+export function changeText(c: FieldChange): string {
+  let a = valueText(c.a, c.field);
+  let b = valueText(c.b, c.field);
+  if (a === b && typeof c.a === 'number' && typeof c.b === 'number') {
+    a = valueText(c.a, c.field, true);
+    b = valueText(c.b, c.field, true);
+  }
+  return `${FIELD[c.field]?.label ?? c.field}: ${a} → ${b}`;
+}
 
 /** "54 cm right, 2 cm down". */
 export function offsetText(dx: number, dy: number): string {
