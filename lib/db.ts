@@ -39,10 +39,9 @@ export function getSequelize(): Sequelize {
 }
 
 /**
- * The rows of a SELECT the app writes as SQL (`:name` replacements, arrays expanded for `IN (:ids)`).
- * Reading them on the driver directly, past Sequelize's per-query machinery, was measured at about 4 %
- * of a lamp-log page's CPU, within the noise of that measure, and needed a second path for tests that
- * count queries; every read goes through Sequelize, as production and the tests alike see it.
+ * The rows of a SELECT the app writes as SQL (`:name` replacements, arrays expanded for `IN (:ids)`),
+ * through Sequelize like every other read, so the tests that count and EXPLAIN a page's queries see
+ * exactly what production sends.
  */
 export function selectRows<T extends object>(
   sql: string,

@@ -4,7 +4,7 @@ import { addDays, dayNumber, DAYS_PER_MONTH, isoDay } from '@/lib/lamp-log/dates
 import { defaultDecayFor } from '@/lib/lamp-log/decay';
 import { firstDayBelow, predict } from '@/lib/lamp-log/fit';
 import type { SpeciesNeed } from '@/lib/lamp-log/need';
-import { newLampAtSpot, newOutputAt30 } from '@/lib/lamp-log/replacement';
+import { formatUv as fmt, newLampAtSpot, newOutputAt30 } from '@/lib/lamp-log/replacement';
 import {
   HORIZON_DAYS,
   lampOutlook,
@@ -98,8 +98,6 @@ export const COUNTER_CAUTIONS: string[] = [
   'A new lamp is stronger than the old one: fit it at the distance its maker gives, not closer, and measure again.',
   'Follow the lamp maker’s instructions, and ask a reptile-experienced vet about the animal’s own UV needs.',
 ];
-
-export { newLampAtSpot, newOutputAt30 };
 
 export function assessCounterLamp(input: CounterInput): CounterAnswer {
   const { lamp, readings, species, today } = input;
@@ -217,10 +215,10 @@ export function counterVerdict(input: CounterInput, outlook: Outlook): CounterVe
           ? 'Replace it, and bring the basking spot closer: even a new lamp of this type would give less UV there than the species needs.'
           : 'Replace it: the basking spot at home gets less UV than the species needs.',
         testAgainOn: null,
-        replacement: fresh.reasons[0] ?? null,
+        replacement: fresh.reason,
         reasons: [
           `About ${fmt(b.valueNow, unit)} at the basking spot today; the need is ${b.needLabel}.`,
-          ...fresh.reasons,
+          ...(fresh.reason ? [fresh.reason] : []),
         ],
       };
     }
@@ -231,10 +229,10 @@ export function counterVerdict(input: CounterInput, outlook: Outlook): CounterVe
         headline:
           'Replace it: the basking spot is at or within the meter’s uncertainty of the species’ need.',
         testAgainOn: null,
-        replacement: fresh.reasons[0] ?? null,
+        replacement: fresh.reason,
         reasons: [
           `About ${fmt(b.valueNow, unit)} at the basking spot today (as low as ${fmt(basking.low, unit)} within the meter’s uncertainty); the need is ${b.needLabel}.`,
-          ...fresh.reasons,
+          ...(fresh.reason ? [fresh.reason] : []),
         ],
       };
     }
@@ -297,6 +295,4 @@ export function firstUsedFromMonths(today: string, months: number): string {
   return isoDay(dayNumber(today) - Math.round(months * DAYS_PER_MONTH));
 }
 
-const round = (v: number) => (v >= 10 ? Math.round(v) : Math.round(v * 10) / 10);
 const pct = (v: number) => `${Math.round(v * 100)} %`;
-const fmt = (v: number, unit: ReadingUnit) => (unit === 'uvb' ? `${round(v)} µW/cm²` : `UVI ${round(v)}`);

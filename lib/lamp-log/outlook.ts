@@ -350,8 +350,11 @@ export function lampOutlook(
         : `The usual replacement age of this lamp type is reached on ${replaceDueOn} (no readings-based date).`,
     );
     // Before the keeper fits the new lamp: would one of this type meet the need at this spot, or overshoot it?
-    if (basking && unit && nowAt30 !== null)
-      reasons.push(...newLampAtSpot(basking, nowAt30, newOutputAt30(lamp.type, unit), unit).reasons);
+    const fresh =
+      basking && unit && nowAt30 !== null
+        ? newLampAtSpot(basking, nowAt30, newOutputAt30(lamp.type, unit), unit).reason
+        : null;
+    if (fresh) reasons.push(fresh);
   }
   if (status === 'fine') {
     if (testDueOn <= soon) {

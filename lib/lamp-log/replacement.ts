@@ -18,38 +18,31 @@ export function newOutputAt30(
  * fitting it. Shared by the counter's verdict and the lamp log's outlook.
  */
 export function newLampAtSpot(
-  b: { valueNow: number; threshold: number; ceiling?: number; ceilingUvi?: number; distanceCm: number },
+  b: { valueNow: number; threshold: number; ceiling: number; ceilingUvi: number; distanceCm: number },
   nowAt30: number,
   newAt30: number,
   unit: ReadingUnit,
-): { value: number | null; tooWeak: boolean; tooStrong: boolean; reasons: string[] } {
-  if (!(nowAt30 > 0) || !(newAt30 > 0)) return { value: null, tooWeak: false, tooStrong: false, reasons: [] };
+): { tooWeak: boolean; reason: string | null } {
+  if (!(nowAt30 > 0) || !(newAt30 > 0)) return { tooWeak: false, reason: null };
   const value = newAt30 * (b.valueNow / nowAt30);
-  const at = `at the basking spot (${round1(b.distanceCm)} cm from the lamp)`;
+  const at = `at the basking spot (${Math.round(b.distanceCm * 10) / 10} cm from the lamp)`;
   if (value < b.threshold) {
     return {
-      value,
       tooWeak: true,
-      tooStrong: false,
-      reasons: [
-        `A new lamp of this type would give about ${fmt(value, unit)} ${at}: still below the need. Bring the basking spot closer to the lamp, or choose a stronger lamp type, and measure again before the animal uses it.`,
-      ],
+      reason: `A new lamp of this type would give about ${formatUv(value, unit)} ${at}: still below the need. Bring the basking spot closer to the lamp, or choose a stronger lamp type, and measure again before the animal uses it.`,
     };
   }
-  if (b.ceiling !== undefined && Number.isFinite(b.ceiling) && value > b.ceiling) {
+  if (value > b.ceiling) {
     return {
-      value,
       tooWeak: false,
-      tooStrong: true,
-      reasons: [
-        `A new lamp of this type would give about ${fmt(value, unit)} ${at}, above the top of the zone’s basking range (UVI ${b.ceilingUvi ?? '—'}${unit === 'uvb' ? `, about ${fmt(b.ceiling, unit)}` : ''}): fit the new lamp farther from the basking spot, or lower the spot, and measure before the animal uses it.`,
-      ],
+      reason: `A new lamp of this type would give about ${formatUv(value, unit)} ${at}, above the top of the zone’s basking range (UVI ${b.ceilingUvi}${unit === 'uvb' ? `, about ${formatUv(b.ceiling, unit)}` : ''}): fit the new lamp farther from the basking spot, or lower the spot, and measure before the animal uses it.`,
     };
   }
-  return { value, tooWeak: false, tooStrong: false, reasons: [] };
+  return { tooWeak: false, reason: null };
 }
 
-const round1 = (v: number) => Math.round(v * 10) / 10;
-
 const round = (v: number) => (v >= 10 ? Math.round(v) : Math.round(v * 10) / 10);
-const fmt = (v: number, unit: ReadingUnit) => (unit === 'uvb' ? `${round(v)} µW/cm²` : `UVI ${round(v)}`);
+
+/** A UV figure as the counter and the lamp log's reasons write it: "113 µW/cm²", "UVI 4.5". */
+export const formatUv = (v: number, unit: ReadingUnit) =>
+  unit === 'uvb' ? `${round(v)} µW/cm²` : `UVI ${round(v)}`;

@@ -154,7 +154,7 @@ function KeeperLamps({ keeperName, lamps }: { keeperName: string; lamps: KeeperL
                   {l.lampTypeName} · {l.enclosureName} · in use since {formatDay(l.firstUsedOn)} ·{' '}
                   {l.readings} reading
                   {l.readings === 1 ? '' : 's'} in the lamp log
-                  {l.retiredOn ? ` · retired ${l.retiredOn}` : ''}
+                  {l.retiredOn ? ` · retired ${formatDay(l.retiredOn)}` : ''}
                 </span>
               </span>
               {!l.retiredOn && (
