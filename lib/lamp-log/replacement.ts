@@ -29,7 +29,7 @@ export function newLampAtSpot(
   if (value < b.threshold) {
     return {
       tooWeak: true,
-      reason: `A new lamp of this type would give about ${formatUv(value, unit)} ${at}: still below the need. Bring the basking spot closer to the lamp, or choose a stronger lamp type, and measure again before the animal uses it.`,
+      reason: `A new lamp of this type would give about ${formatUv(value, unit)} ${at}: still below the need. Bring the basking spot closer to the lamp (never so close that the animal can reach the lamp), or choose a stronger lamp type, and measure UV and temperature again before the animal uses it.`,
     };
   }
   if (value > b.ceiling) {
